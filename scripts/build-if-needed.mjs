@@ -1,0 +1,27 @@
+// Builds the app when dist/ is missing or older than any source it is built from.
+import { existsSync, statSync, readdirSync } from 'node:fs';
+import { join } from 'node:path';
+import { spawnSync } from 'node:child_process';
+
+const SOURCES = ['src', 'public', 'astro.config.mjs', 'package.json', 'tsconfig.json'];
+
+function newest(path) {
+  const st = statSync(path);
+  if (!st.isDirectory()) return st.mtimeMs;
+  let t = st.mtimeMs;
+  for (const name of readdirSync(path)) t = Math.max(t, newest(join(path, name)));
+  return t;
+}
+
+/** Runs `astro build` into outDir unless its server entry is newer than every source. */
+export function buildIfNeeded(outDir = 'dist', env = process.env) {
+  const entry = join(outDir, 'server', 'entry.mjs');
+  const sourcesTime = Math.max(...SOURCES.filter(existsSync).map(newest));
+  if (existsSync(entry) && statSync(entry).mtimeMs > sourcesTime) return;
+  console.log(`Building the app into ${outDir}/ …`);
+  const r = spawnSync('node_modules/.bin/astro', ['build'], {
+    stdio: 'inherit',
+    env: { ...env, ASTRO_OUT_DIR: outDir },
+  });
+  if (r.status !== 0) process.exit(r.status ?? 1);
+}

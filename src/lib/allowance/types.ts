@@ -1,0 +1,205 @@
+// The allowance engine's public contract. The API, the calculator, the bench screens and the cut
+// sheets all read these shapes: keep them stable, add freely.
+
+/** A unit a plan is entered and shown in. */
+export type Unit = 'in' | 'cm' | 'mm';
+
+/** How finely inches are shown: to the nearest 1/8, 1/16 or 1/32. */
+export type Precision = 8 | 16 | 32;
+
+/** A length as typed: a number in the plan's unit, or text ("1 1/2", "38 mm", "31 3/4 + 1/8"). */
+export type LengthInput = number | string;
+
+/** A length held exactly (mm) and shown in the plan's unit (text). */
+export interface Len {
+  /** exact value in millimetres, as a number */
+  mm: number;
+  /** display in the plan's unit: "1 9/16 in", "38.5 mm", "3.85 cm" */
+  text: string;
+}
+
+/** A warning in words a tailor understands. */
+export interface PlanWarning {
+  code: WarningCode;
+  message: string;
+}
+
+/** Every warning the engine can raise. */
+export type WarningCode =
+  | 'not-enough-cloth'
+  | 'third-section-too-small'
+  | 'cuff-depth-unusual'
+  | 'slope-on-cuff'
+  | 'old-crease-visible'
+  | 'taper-beyond-tolerance'
+  | 'let-out-exceeds-seam-allowance'
+  | 'hem-allowance-unusual';
+
+/** The name of a chalk line, top to bottom. */
+export type CuffLineName = 'finished-edge' | 'cuff-top' | 'inner-fold' | 'cut';
+
+/** One chalk line of a cuff plan. */
+export interface CuffLine {
+  n: 1 | 2 | 3 | 4;
+  name: CuffLineName;
+  /** distance below the pin mark */
+  belowMark: Len;
+  /** distance above the raw edge of the cloth (null when the cloth available is not known) */
+  aboveRawEdge: Len | null;
+}
+
+/** What a cuff plan takes as input. */
+export interface CuffInput {
+  unit: Unit;
+  precision?: Precision;
+  /** finished height of the cuff */
+  cuffDepth: LengthInput;
+  /** third section, from the inner fold to the cut; default = cuffDepth */
+  hemSection?: LengthInput;
+  /** folded under at the raw edge; default 1/2 in (12 mm metric) */
+  turnUnder?: LengthInput;
+  /** cloth below the pin mark once any old hem is let down */
+  available?: LengthInput;
+  /** optional turn-of-cloth allowance for thick cloth, taken at each of the two folds */
+  clothThickness?: LengthInput;
+  /** optional: the old hem fold, distance below the mark (negative above) */
+  oldCrease?: LengthInput;
+  /** a slope is for plain hems only; a cuff asked to slope is planned level with a warning */
+  slope?: LengthInput;
+}
+
+/** Where an old crease ends up once the cuff is made. */
+export type CreasePlace = 'leg-visible' | 'behind-cuff' | 'cuff-face' | 'inside' | 'on-fold';
+
+/** Where an old crease lands, in words and as a height above the finished edge. */
+export interface CreaseLanding {
+  place: CreasePlace;
+  /** height above the finished edge once the cuff is turned up */
+  heightAboveEdge: Len;
+  /** true when it will show on the outside of the finished trouser */
+  visible: boolean;
+  message: string;
+}
+
+/** What can still be done when the cloth is short. */
+export interface CuffAlternatives {
+  /** deepest cuff, to the display step, that fits with three equal sections (null if under 1/2 in) */
+  deepestCuff: Len | null;
+  /** a plain hem with the usual allowance */
+  plainHem: { required: Len; fits: boolean };
+  /** a faced cuff: own cloth for the two outer sections plus a seam, the third section a facing */
+  facedCuff: { required: Len; fits: boolean };
+}
+
+/** A cuff plan: the four chalk lines, the cloth check and the warnings. */
+export interface CuffPlan {
+  kind: 'cuff';
+  unit: Unit;
+  precision: Precision;
+  cuffDepth: Len;
+  hemSection: Len;
+  turnUnder: Len;
+  lines: CuffLine[];
+  /** cloth needed below the mark: 2 × cuff depth + third section (+ turn of cloth) */
+  required: Len;
+  /** null when the cloth available is not known */
+  enough: boolean | null;
+  shortBy: Len | null;
+  spare: Len | null;
+  /** present only when the cloth is short */
+  alternatives: CuffAlternatives | null;
+  /** present only when an old crease was given */
+  creaseLands?: CreaseLanding;
+  warnings: PlanWarning[];
+}
+
+/** The name of a chalk line of a plain hem. */
+export type HemLineName = 'finished-edge' | 'cut';
+
+/** One chalk line of a plain hem, at the back (where the pin is) and at the front. */
+export interface HemLine {
+  n: 1 | 2;
+  name: HemLineName;
+  /** at the back of the leg, below the pin mark */
+  belowMark: Len;
+  /** at the front of the leg, below the back pin mark (negative when above it) */
+  frontBelowMark: Len;
+  aboveRawEdge: Len | null;
+}
+
+/** What a plain hem plan takes as input. */
+export interface HemInput {
+  unit: Unit;
+  precision?: Precision;
+  /** cloth left below the finished edge, turn-under included; default 1 1/2 in (40 mm metric) */
+  hemAllowance?: LengthInput;
+  /** default 1/4 in (6 mm metric) */
+  turnUnder?: LengthInput;
+  available?: LengthInput;
+  /** how much lower the hem sits at the back than at the front; default 0 */
+  slope?: LengthInput;
+}
+
+/** A plain hem plan. */
+export interface HemPlan {
+  kind: 'hem';
+  unit: Unit;
+  precision: Precision;
+  hemAllowance: Len;
+  turnUnder: Len;
+  slope: Len;
+  lines: HemLine[];
+  required: Len;
+  enough: boolean | null;
+  shortBy: Len | null;
+  spare: Len | null;
+  warnings: PlanWarning[];
+}
+
+/** What a taper check takes as input. Widths are measured flat (half the round). */
+export interface TaperInput {
+  unit: Unit;
+  precision?: Precision;
+  cuffDepth: LengthInput;
+  hemSection?: LengthInput;
+  /** leg width measured flat at the finished edge */
+  widthAtEdge: LengthInput;
+  /** leg width measured flat higher up … */
+  widthAbove: LengthInput;
+  /** … this far above the finished edge */
+  heightAbove: LengthInput;
+  /** seam allowance left on each side of each leg seam */
+  seamAllowance?: LengthInput;
+  /** flat difference that needs no work; default 1/8 in (3 mm metric) */
+  tolerance?: LengthInput;
+  clothThickness?: LengthInput;
+}
+
+/** The work at one chalk line to keep the cuff-top width straight down. */
+export interface TaperLine {
+  n: 1 | 2 | 3 | 4;
+  name: CuffLineName;
+  belowMark: Len;
+  /** the leg's flat width there now (the taper followed down) */
+  width: Len;
+  /** flat change to reach the target: + let out, − take in */
+  change: Len;
+  /** added round the leg at each of the two leg seams (= change) */
+  perSeam: Len;
+  /** moved on each side of each seam (= change / 2) */
+  perSide: Len;
+}
+
+/** A taper check: how to keep the leg straight under the cuff. */
+export interface TaperPlan {
+  kind: 'taper';
+  unit: Unit;
+  precision: Precision;
+  /** flat width where the cuff top sits (one cuff depth above the finished edge) */
+  targetWidth: Len;
+  lines: TaperLine[];
+  withinTolerance: boolean;
+  /** null without a seam allowance */
+  feasible: boolean | null;
+  warnings: PlanWarning[];
+}

@@ -1,0 +1,23 @@
+// Shared Chromium launch for the browser stories (Debian's Chromium, never a downloaded one).
+import { chromium, type Browser, type Page } from 'playwright-core';
+import { inject } from 'vitest';
+
+const ARGS = [
+  '--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
+  '--disable-background-networking', '--disable-component-update', '--disable-sync',
+];
+
+/** Launches headless Chromium from CHROMIUM_PATH (set by scripts/test.mjs) or /usr/bin/chromium. */
+export function launch(): Promise<Browser> {
+  return chromium.launch({ executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium', args: ARGS });
+}
+
+/** A fresh page in its own context, sized like a tablet held in landscape. */
+export async function tabletPage(browser: Browser): Promise<Page> {
+  const context = await browser.newContext({
+    baseURL: inject('baseURL'),
+    viewport: { width: 1180, height: 820 },
+    hasTouch: true,
+  });
+  return context.newPage();
+}

@@ -1,0 +1,64 @@
+// Builds the app once into .test-dist/ and serves it on a free loopback port with a fresh data
+// folder; every browser story reaches it through inject('baseURL').
+import { spawn, type ChildProcess } from 'node:child_process';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { createServer } from 'node:net';
+import type { TestProject } from 'vitest/node';
+// @ts-expect-error plain ESM script without types
+import { buildIfNeeded } from '../../scripts/build-if-needed.mjs';
+
+declare module 'vitest' {
+  export interface ProvidedContext {
+    baseURL: string;
+    dataDir: string;
+  }
+}
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const srv = createServer();
+    srv.listen(0, '127.0.0.1', () => {
+      const addr = srv.address();
+      srv.close(() => (typeof addr === 'object' && addr ? resolve(addr.port) : reject(new Error('no port'))));
+    });
+  });
+}
+
+async function waitFor(url: string, ms: number): Promise<void> {
+  const until = Date.now() + ms;
+  while (Date.now() < until) {
+    try {
+      const r = await fetch(url);
+      if (r.status < 500) return;
+    } catch {
+      /* not up yet */
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`server at ${url} did not answer within ${ms} ms`);
+}
+
+let server: ChildProcess | undefined;
+let dataDir = '';
+
+/** Starts the built server for the browser stories. */
+export default async function setup(project: TestProject) {
+  buildIfNeeded('.test-dist');
+  const port = await freePort();
+  dataDir = mkdtempSync(join(tmpdir(), 'cuffwright-browser-'));
+  const baseURL = `http://localhost:${port}`;
+  server = spawn('node', ['.test-dist/server/entry.mjs'], {
+    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir, BETTER_AUTH_URL: baseURL },
+    stdio: ['ignore', 'inherit', 'inherit'],
+  });
+  await waitFor(`${baseURL}/`, 60_000);
+  project.provide('baseURL', baseURL);
+  project.provide('dataDir', dataDir);
+  return async () => {
+    server?.kill('SIGTERM');
+    await new Promise((r) => setTimeout(r, 300));
+    rmSync(dataDir, { recursive: true, force: true });
+  };
+}

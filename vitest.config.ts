@@ -1,0 +1,12 @@
+/// <reference types="vitest" />
+import { getViteConfig } from 'astro/config';
+
+// Unit, property and API tests. Browser stories live in vitest.browser.config.ts.
+export default getViteConfig({
+  test: {
+    include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
+    exclude: ['tests/browser/**', 'node_modules/**'],
+    testTimeout: 30_000,
+    hookTimeout: 60_000,
+  },
+});
