@@ -14,8 +14,25 @@ export default defineConfig({
   // Without this Astro ignores the Host header: Astro.url loses the port and same-site POSTs get 403.
   security: { allowedDomains: [{ hostname: 'localhost' }, { hostname: '127.0.0.1' }] },
   env: {
+    // All 'secret': Astro inlines 'public' server variables at build time, and these must be read
+    // when the server starts (tests and scripts set them per run).
     schema: {
-      DATA_DIR: envField.string({ context: 'server', access: 'public', default: './data' }),
+      DATA_DIR: envField.string({ context: 'server', access: 'secret', default: './data' }),
+      // postgres://… switches from the embedded PGlite in DATA_DIR to a PostgreSQL server.
+      DATABASE_URL: envField.string({ context: 'server', access: 'secret', optional: true }),
+      BETTER_AUTH_URL: envField.string({ context: 'server', access: 'secret', default: 'http://localhost:4321' }),
+      // Without it a random secret is kept in DATA_DIR/auth-secret (fine for one machine).
+      BETTER_AUTH_SECRET: envField.string({ context: 'server', access: 'secret', optional: true }),
+      SMTP_HOST: envField.string({ context: 'server', access: 'secret', default: '127.0.0.1' }),
+      SMTP_PORT: envField.number({ context: 'server', access: 'secret', default: 1025 }),
+      SMTP_SECURE: envField.boolean({ context: 'server', access: 'secret', default: false }),
+      SMTP_USER: envField.string({ context: 'server', access: 'secret', optional: true }),
+      SMTP_PASS: envField.string({ context: 'server', access: 'secret', optional: true }),
+      MAIL_FROM: envField.string({ context: 'server', access: 'secret', default: 'Cuffwright <no-reply@cuffwright.test>' }),
+      // On the first start of an empty database, add the invented demo shop.
+      DEMO_SEED: envField.boolean({ context: 'server', access: 'secret', default: true }),
+      // Set by npm start / npm run dev / the tests: the folder the local capture writes; enables /outbox.
+      MAIL_CAPTURE_DIR: envField.string({ context: 'server', access: 'secret', optional: true }),
     },
   },
   vite: {

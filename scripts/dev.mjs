@@ -1,6 +1,15 @@
-// npm run dev: Astro's dev server (started directly: killing `npx astro dev` leaves astro running).
+// npm run dev: the local mail capture plus Astro's dev server (started directly: killing
+// `npx astro dev` leaves astro running).
 import { spawn } from 'node:child_process';
+import { env, useCapture, captureDir } from './env.mjs';
+import { startMailCapture } from './mail-capture.mjs';
 
-const dev = spawn('node_modules/.bin/astro', ['dev', ...process.argv.slice(2)], { stdio: 'inherit' });
+const devEnv = { ...process.env, BETTER_AUTH_URL: env.BETTER_AUTH_URL || `http://localhost:${env.PORT}` };
+if (useCapture) {
+  const { port } = await startMailCapture({ dir: captureDir, port: env.SMTP_PORT });
+  Object.assign(devEnv, { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(port), MAIL_CAPTURE_DIR: captureDir });
+  console.log(`Mail capture on smtp://127.0.0.1:${port}: the lead reads it at /outbox`);
+}
+const dev = spawn('node_modules/.bin/astro', ['dev', '--port', String(env.PORT), ...process.argv.slice(2)], { stdio: 'inherit', env: devEnv });
 for (const sig of ['SIGINT', 'SIGTERM']) process.on(sig, () => dev.kill(sig));
 dev.on('exit', (code) => process.exit(code ?? 0));

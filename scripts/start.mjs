@@ -1,15 +1,23 @@
-// npm start: build if needed, then serve the built app on http://localhost:4321.
+// npm start: build if needed, start the local mail capture (unless SMTP_HOST names a real host),
+// then serve the built app on http://localhost:4321.
 import { spawn } from 'node:child_process';
 import { buildIfNeeded } from './build-if-needed.mjs';
+import { env, useCapture, captureDir } from './env.mjs';
+import { startMailCapture } from './mail-capture.mjs';
 
 buildIfNeeded('dist');
-const port = process.env.PORT || '4321';
-const env = {
+const serverEnv = {
   ...process.env,
-  PORT: port,
-  HOST: process.env.HOST || '127.0.0.1',
+  PORT: String(env.PORT),
+  HOST: env.HOST,
+  BETTER_AUTH_URL: env.BETTER_AUTH_URL || `http://localhost:${env.PORT}`,
 };
-console.log(`Cuffwright on http://localhost:${port}`);
-const server = spawn('node', ['dist/server/entry.mjs'], { stdio: 'inherit', env });
+if (useCapture) {
+  const { port } = await startMailCapture({ dir: captureDir, port: env.SMTP_PORT });
+  Object.assign(serverEnv, { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(port), MAIL_CAPTURE_DIR: captureDir });
+  console.log(`Mail capture on smtp://127.0.0.1:${port}: the lead reads it at /outbox`);
+}
+console.log(`Cuffwright on http://localhost:${env.PORT}`);
+const server = spawn('node', ['dist/server/entry.mjs'], { stdio: 'inherit', env: serverEnv });
 for (const sig of ['SIGINT', 'SIGTERM']) process.on(sig, () => server.kill(sig));
 server.on('exit', (code) => process.exit(code ?? 0));

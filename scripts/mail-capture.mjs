@@ -1,0 +1,47 @@
+// A local SMTP capture for development and tests: accepts every message on loopback (no auth,
+// no TLS) and saves it as JSON in a folder the app's outbox page reads. Never for production.
+import { SMTPServer } from 'smtp-server';
+import { simpleParser } from 'mailparser';
+import { mkdirSync, writeFileSync, renameSync } from 'node:fs';
+import { join } from 'node:path';
+import { randomUUID } from 'node:crypto';
+import { fileURLToPath } from 'node:url';
+
+/** Starts the capture on host:port (port 0 = any free one); resolves with the port and a closer. */
+export function startMailCapture({ dir, port = 1025, host = '127.0.0.1', quiet = false }) {
+  mkdirSync(dir, { recursive: true });
+  const server = new SMTPServer({
+    authOptional: true,
+    disabledCommands: ['STARTTLS', 'AUTH'],
+    logger: false,
+    onData(stream, session, callback) {
+      simpleParser(stream)
+        .then((mail) => {
+          const at = new Date();
+          const id = `${at.toISOString().replace(/[:.]/g, '-')}-${randomUUID().slice(0, 8)}`;
+          const to = session.envelope.rcptTo.map((r) => r.address);
+          const record = { id, at: at.toISOString(), from: session.envelope.mailFrom?.address ?? '', to, subject: mail.subject ?? '', text: mail.text ?? '' };
+          // Written then renamed, so a reader never sees half a message.
+          const tmp = join(dir, `.${id}.tmp`);
+          writeFileSync(tmp, JSON.stringify(record, null, 2));
+          renameSync(tmp, join(dir, `${id}.json`));
+          if (!quiet) console.log(`[mail] ${to.join(', ')}: ${record.subject}`);
+          callback();
+        })
+        .catch(callback);
+    },
+  });
+  return new Promise((resolve, reject) => {
+    server.once('error', reject);
+    server.listen(port, host, () => {
+      const address = server.server.address();
+      resolve({ port: typeof address === 'object' && address ? address.port : port, close: () => new Promise((r) => server.close(r)) });
+    });
+  });
+}
+
+if (process.argv[1] === fileURLToPath(import.meta.url)) {
+  const dir = process.env.MAIL_CAPTURE_DIR || join(process.env.DATA_DIR || './data', 'mail');
+  const { port } = await startMailCapture({ dir, port: Number(process.env.SMTP_PORT || 1025) });
+  console.log(`Mail capture on smtp://127.0.0.1:${port}, saving to ${dir}`);
+}

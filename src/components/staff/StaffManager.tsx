@@ -1,0 +1,158 @@
+// The lead's staff screen: who works here, pending invitations, invite, change role, remove.
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { z } from 'zod';
+import { inviteInput } from '@/lib/account-inputs';
+import { fetchJson } from '@/lib/fetch-json';
+import { ROLES, ROLE_LABELS, type Role } from '@/lib/roles';
+import type { PendingInvite, StaffMember } from '@/services/staff';
+import { withQuery } from '@/components/WithQuery';
+import { Field, FormMessage, SubmitButton } from '@/components/Field';
+
+type Staff = { members: StaffMember[]; invitations: PendingInvite[] };
+type Invite = z.infer<typeof inviteInput>;
+
+function InviteForm() {
+  const client = useQueryClient();
+  const { register, handleSubmit, formState, reset } = useForm<Invite>({
+    resolver: zodResolver(inviteInput),
+    defaultValues: { role: 'tailor' },
+  });
+  const send = useMutation({
+    mutationFn: (input: Invite) => fetchJson<PendingInvite>('/api/staff', { body: input }),
+    onSuccess: () => {
+      reset({ email: '', role: 'tailor' });
+      void client.invalidateQueries({ queryKey: ['staff'] });
+    },
+  });
+  return (
+    <form onSubmit={handleSubmit((v) => send.mutate(v))} className="flex flex-col gap-4 rounded border-2 border-rule bg-card p-4" noValidate>
+      <h2 className="text-xl font-extrabold">Invite someone</h2>
+      <Field label="Their e-mail" type="email" autoComplete="off" registration={register('email')} error={formState.errors.email} />
+      <div className="flex flex-col gap-1">
+        <label htmlFor="invite-role" className="font-semibold">
+          Role
+        </label>
+        <select id="invite-role" {...register('role')} className="rounded border-2 border-rule bg-card px-3 py-2 text-lg">
+          {ROLES.map((r) => (
+            <option key={r} value={r}>
+              {ROLE_LABELS[r].name}: {ROLE_LABELS[r].blurb}
+            </option>
+          ))}
+        </select>
+      </div>
+      {send.error && <FormMessage kind="error">{send.error.message}</FormMessage>}
+      {send.isSuccess && <FormMessage kind="ok">Invitation sent to {send.data.email}.</FormMessage>}
+      <SubmitButton busy={send.isPending}>Send the invitation</SubmitButton>
+    </form>
+  );
+}
+
+function MemberRow({ m, isMe }: { m: StaffMember; isMe: boolean }) {
+  const client = useQueryClient();
+  const refresh = () => void client.invalidateQueries({ queryKey: ['staff'] });
+  const setRole = useMutation({
+    mutationFn: (role: Role) => fetchJson(`/api/staff/${m.id}`, { method: 'PATCH', body: { role } }),
+    onSettled: refresh,
+  });
+  const remove = useMutation({
+    mutationFn: () => fetchJson(`/api/staff/${m.id}`, { method: 'DELETE' }),
+    onSettled: refresh,
+  });
+  const error = setRole.error ?? remove.error;
+  return (
+    <tr className="border-t border-rule align-top">
+      <td className="py-2 pr-4">
+        <div className="font-semibold">
+          {m.name}
+          {isMe && ' (you)'}
+        </div>
+        <div className="text-muted">{m.email}</div>
+        {error && <p role="alert" className="font-semibold text-cut">{error.message}</p>}
+      </td>
+      <td className="py-2 pr-4">
+        <label className="sr-only" htmlFor={`role-${m.id}`}>
+          Role of {m.name}
+        </label>
+        <select
+          id={`role-${m.id}`}
+          value={m.role}
+          disabled={setRole.isPending}
+          onChange={(e) => setRole.mutate(e.target.value as Role)}
+          className="rounded border-2 border-rule bg-card px-2 py-2"
+        >
+          {ROLES.map((r) => (
+            <option key={r} value={r}>
+              {ROLE_LABELS[r].name}
+            </option>
+          ))}
+        </select>
+      </td>
+      <td className="py-2">
+        {!isMe && (
+          <button
+            type="button"
+            onClick={() => {
+              if (window.confirm(`Remove ${m.name} from the shop?`)) remove.mutate();
+            }}
+            className="min-h-11 rounded border-2 border-cut px-4 font-semibold text-cut"
+          >
+            Remove
+          </button>
+        )}
+      </td>
+    </tr>
+  );
+}
+
+function StaffManager({ myEmail }: { myEmail: string }) {
+  const staff = useQuery({ queryKey: ['staff'], queryFn: () => fetchJson<Staff>('/api/staff') });
+  return (
+    <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
+      <section aria-labelledby="staff-heading">
+        <h2 id="staff-heading" className="mb-2 text-xl font-extrabold">
+          Staff
+        </h2>
+        {staff.isPending && <p>Loading…</p>}
+        {staff.error && <FormMessage kind="error">{staff.error.message}</FormMessage>}
+        {staff.data && (
+          <>
+            <table className="w-full text-left">
+              <thead>
+                <tr>
+                  <th className="pb-2">Person</th>
+                  <th className="pb-2">Role</th>
+                  <th className="pb-2">
+                    <span className="sr-only">Actions</span>
+                  </th>
+                </tr>
+              </thead>
+              <tbody>
+                {staff.data.members.map((m) => (
+                  <MemberRow key={m.id} m={m} isMe={m.email === myEmail} />
+                ))}
+              </tbody>
+            </table>
+            <h3 className="mt-6 mb-2 text-lg font-extrabold">Pending invitations</h3>
+            {staff.data.invitations.length === 0 ? (
+              <p className="text-muted">None.</p>
+            ) : (
+              <ul className="flex flex-col gap-1">
+                {staff.data.invitations.map((i) => (
+                  <li key={i.id}>
+                    {i.email}: {ROLE_LABELS[i.role].name}, until {new Date(i.expiresAt).toLocaleDateString()}
+                  </li>
+                ))}
+              </ul>
+            )}
+          </>
+        )}
+      </section>
+      <InviteForm />
+    </div>
+  );
+}
+
+/** The staff island. */
+export default withQuery(StaffManager);

@@ -1,0 +1,53 @@
+// Opens the database the same way for the app, the scripts and the tests: PGlite in a folder (or
+// in memory), or a PostgreSQL server through node-postgres when given a postgres:// URL.
+import { mkdirSync } from 'node:fs';
+import { PGlite } from '@electric-sql/pglite';
+import { drizzle as drizzlePglite } from 'drizzle-orm/pglite';
+import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator';
+import { drizzle as drizzlePg } from 'drizzle-orm/node-postgres';
+import { migrate as migratePg } from 'drizzle-orm/node-postgres/migrator';
+import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
+import pg from 'pg';
+import * as schema from './schema/index';
+
+/** The Drizzle database, whichever driver is underneath. */
+export type Db = PgDatabase<PgQueryResultHKT, typeof schema>;
+
+/** An open database with its migrator and closer. */
+export interface DbHandle {
+  db: Db;
+  kind: 'pglite' | 'postgres';
+  migrate: () => Promise<void>;
+  close: () => Promise<void>;
+}
+
+/** Where to open: a postgres:// URL, a PGlite folder, or a ready PGlite instance (tests). */
+export type DbTarget = { url: string } | { dataDir: string } | { pglite: PGlite };
+
+/** Opens the database; call migrate() before use. */
+export function openDatabase(target: DbTarget, migrationsFolder = './drizzle'): DbHandle {
+  if ('url' in target) {
+    const pool = new pg.Pool({ connectionString: target.url, max: 10 });
+    const db = drizzlePg(pool, { schema });
+    return {
+      db: db as unknown as Db,
+      kind: 'postgres',
+      migrate: () => migratePg(db, { migrationsFolder }),
+      close: () => pool.end(),
+    };
+  }
+  let client: PGlite;
+  if ('pglite' in target) client = target.pglite;
+  else {
+    // PGlite creates its folder non-recursively.
+    mkdirSync(target.dataDir, { recursive: true });
+    client = new PGlite(target.dataDir);
+  }
+  const db = drizzlePglite(client, { schema });
+  return {
+    db: db as unknown as Db,
+    kind: 'pglite',
+    migrate: () => migratePglite(db, { migrationsFolder }),
+    close: () => client.close(),
+  };
+}

@@ -1,0 +1,34 @@
+// A shop's customers: who brought the trousers in and how to reach them.
+import { pgTable, text, timestamp, uuid, index } from 'drizzle-orm/pg-core';
+import { createInsertSchema, createSelectSchema } from 'drizzle-zod';
+import { z } from 'zod';
+import { organization } from './auth';
+
+/** Customers, each belonging to one shop. */
+export const customers = pgTable(
+  'customers',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
+    name: text('name').notNull(),
+    phone: text('phone'),
+    email: text('email'),
+    notes: text('notes'),
+    createdAt: timestamp('created_at', { withTimezone: true }).defaultNow().notNull(),
+  },
+  (t) => [index('customers_shop_idx').on(t.shopId)],
+);
+
+/** A customer row as read. */
+export const customerRow = createSelectSchema(customers);
+
+/** What a member types to add a customer (the shop comes from the session). */
+export const customerInput = createInsertSchema(customers, {
+  name: (s) => s.trim().min(1, 'Give the customer a name').max(120),
+  phone: (s) => s.trim().max(40),
+  email: () => z.email('Enter an e-mail address like name@example.com').max(200),
+  notes: (s) => s.max(2000),
+}).pick({ name: true, phone: true, email: true, notes: true });
+
+/** A customer as the API returns it. */
+export type Customer = typeof customers.$inferSelect;

@@ -1,0 +1,7 @@
+// Every table, for drizzle-kit, the database module and better-auth's adapter.
+export * from './auth';
+export * from './customers';
+export * from './tickets';
+export * from './presets';
+export * from './files';
+export * from './audit';

@@ -1,0 +1,49 @@
+// The forms about people and shops, one zod schema each, shared by the islands and the API.
+import { createInsertSchema } from 'drizzle-zod';
+import { z } from 'zod';
+import { invitation, organization, user } from '@/db/schema/auth';
+import { ROLES } from './roles';
+
+const person = createInsertSchema(user, {
+  name: (s) => s.trim().min(1, 'Enter your name').max(80, 'Keep the name under 80 characters'),
+  email: () => z.email('Enter an e-mail address like name@example.com').max(200),
+}).pick({ name: true, email: true });
+
+/** A new password: long enough to resist guessing. */
+export const newPassword = z
+  .string()
+  .min(10, 'Use at least 10 characters')
+  .max(128, 'Keep the password under 128 characters');
+
+/** Sign-in form. */
+export const signInInput = person.pick({ email: true }).extend({
+  password: z.string().min(1, 'Enter your password'),
+});
+
+/** Sign-up form: a new shop and its first lead. */
+export const shopSignUpInput = person.extend({
+  shopName: createInsertSchema(organization).shape.name.trim().min(2, 'Name the shop').max(80),
+  password: newPassword,
+});
+
+/** Invitation form on the staff page. */
+export const inviteInput = createInsertSchema(invitation, {
+  email: () => z.email('Enter an e-mail address like name@example.com').max(200),
+})
+  .pick({ email: true })
+  // The column is nullable for better-auth; an invitation here always names one of the roles.
+  .extend({ role: z.enum(ROLES, 'Choose a role') });
+
+/** Role change on the staff page. */
+export const roleChangeInput = inviteInput.pick({ role: true });
+
+/** Accepting an invitation: the invitee's name and password (the e-mail is the invitation's). */
+export const acceptInviteInput = person.pick({ name: true }).extend({ password: newPassword });
+
+/** Asking for a password reset. */
+export const forgotInput = person.pick({ email: true });
+
+/** Choosing the new password from the reset link. */
+export const resetInput = z
+  .object({ password: newPassword, confirm: z.string() })
+  .refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'The two passwords differ' });

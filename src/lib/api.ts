@@ -1,0 +1,69 @@
+// Small helpers every API route uses: typed JSON answers, the permission guard, body parsing.
+import type { z } from 'zod';
+import { ServiceError } from '@/services/errors';
+import { can, type Permission, type Role } from './roles';
+
+/** A JSON response, optionally carrying extra headers (such as a new session cookie). */
+export function json<T>(data: T, status = 200, extra?: Headers): Response {
+  const headers = new Headers(extra);
+  headers.set('content-type', 'application/json');
+  return new Response(JSON.stringify(data), { status, headers });
+}
+
+/** A JSON error with a message a person can act on. */
+export function problem(status: number, error: string, issues?: Record<string, string>): Response {
+  return json(issues ? { error, issues } : { error }, status);
+}
+
+/** The signed-in member an API route acts for. */
+export interface Actor {
+  userId: string;
+  userName: string;
+  email: string;
+  memberId: string;
+  role: Role;
+  shopId: string;
+  shopName: string;
+}
+
+/** The actor when signed in with the permission, otherwise the 401/403 response to return. */
+export function guard(locals: App.Locals, permission: Permission): Actor | Response {
+  const { user, member } = locals;
+  if (!user) return problem(401, 'Sign in first.');
+  if (!member) return problem(403, 'You are not a member of a shop.');
+  if (!can(member.role, permission)) return problem(403, `Your role (${member.role}) may not do this.`);
+  return {
+    userId: user.id,
+    userName: user.name,
+    email: user.email,
+    memberId: member.id,
+    role: member.role,
+    shopId: member.shopId,
+    shopName: member.shopName,
+  };
+}
+
+/** Parses the JSON body with the schema; a 400/422 response when it does not fit. */
+export async function readBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S> | Response> {
+  let raw: unknown;
+  try {
+    raw = await request.json();
+  } catch {
+    return problem(400, 'Send a JSON body.');
+  }
+  const parsed = schema.safeParse(raw);
+  if (parsed.success) return parsed.data;
+  const issues: Record<string, string> = {};
+  for (const issue of parsed.error.issues) issues[issue.path.join('.') || '_'] ??= issue.message;
+  return problem(422, 'Some fields need attention.', issues);
+}
+
+/** Runs a service call, turning ServiceError into its JSON answer. */
+export async function run<T>(work: () => Promise<T>, status = 200): Promise<Response> {
+  try {
+    return json(await work(), status);
+  } catch (e) {
+    if (e instanceof ServiceError) return problem(e.status, e.message);
+    throw e;
+  }
+}

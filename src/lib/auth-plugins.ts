@@ -1,0 +1,30 @@
+// better-auth's organization plugin as Cuffwright uses it: a shop is an organisation, its members
+// hold one of the four roles. Kept free of env and database so the schema generator can load it.
+import { organization } from 'better-auth/plugins';
+import { ac, roles } from './roles';
+
+/** What the plugin needs from the app: how to send an invitation. */
+export interface ShopPluginDeps {
+  sendInvitation: (invite: { id: string; email: string; role: string; shopName: string; inviterName: string }) => Promise<void>;
+}
+
+/** The organization plugin configured with the shop roles. */
+export function shopPlugin(deps: ShopPluginDeps) {
+  return organization({
+    ac,
+    roles,
+    creatorRole: 'lead',
+    // Shops are created through /api/shops (sign-up), never by a signed-in member.
+    allowUserToCreateOrganization: false,
+    invitationExpiresIn: 7 * 24 * 3600,
+    cancelPendingInvitationsOnReInvite: true,
+    sendInvitationEmail: async (data) =>
+      deps.sendInvitation({
+        id: data.id,
+        email: data.email,
+        role: data.role,
+        shopName: data.organization.name,
+        inviterName: data.inviter.user.name,
+      }),
+  });
+}

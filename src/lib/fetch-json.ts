@@ -1,0 +1,28 @@
+// The islands' one way to call the API: JSON in, JSON out, the server's message on failure.
+
+/** An API error carrying the status and the server's message (and field issues when given). */
+export class ApiError extends Error {
+  constructor(
+    public status: number,
+    message: string,
+    public issues: Record<string, string> = {},
+  ) {
+    super(message);
+  }
+}
+
+/** Fetches JSON from the app; throws ApiError with the server's message when not OK. */
+export async function fetchJson<T>(url: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
+  const response = await fetch(url, {
+    method: init.method ?? (init.body === undefined ? 'GET' : 'POST'),
+    headers: init.body === undefined ? {} : { 'content-type': 'application/json' },
+    body: init.body === undefined ? undefined : JSON.stringify(init.body),
+    credentials: 'same-origin',
+  });
+  const data = (await response.json().catch(() => ({}))) as Record<string, unknown>;
+  if (!response.ok) {
+    const message = String(data.error ?? data.message ?? `The server answered ${response.status}.`);
+    throw new ApiError(response.status, message, (data.issues as Record<string, string>) ?? {});
+  }
+  return data as T;
+}

@@ -1,0 +1,104 @@
+// The four shop roles and what each may do: the one definition read by the server (API guards,
+// better-auth's organization plugin) and by the islands (what to show).
+import { createAccessControl } from 'better-auth/plugins/access';
+import { defaultStatements } from 'better-auth/plugins/organization/access';
+
+/** Every resource and the actions on it that a role can be granted. */
+export const statements = {
+  ...defaultStatements,
+  staff: ['read', 'invite', 'change-role', 'remove'],
+  settings: ['update'],
+  prices: ['read', 'update'],
+  presets: ['read', 'create-own', 'manage-house'],
+  customers: ['read', 'create', 'update'],
+  tickets: ['read', 'read-all', 'create', 'update', 'advance', 'pickup'],
+  measurements: ['read', 'update'],
+  plans: ['read', 'create'],
+  cutsheets: ['print'],
+  notices: ['send'],
+  outbox: ['read'],
+} as const;
+
+/** better-auth's access controller built from the statements. */
+export const ac = createAccessControl(statements);
+
+/** A resource name. */
+export type Resource = keyof typeof statements;
+/** A permission request: one resource and one action on it. */
+export type Permission = { [R in Resource]: [R, (typeof statements)[R][number]] }[Resource];
+
+const grants = {
+  lead: {
+    organization: ['update'],
+    member: ['create', 'update', 'delete'],
+    invitation: ['create', 'cancel'],
+    staff: ['read', 'invite', 'change-role', 'remove'],
+    settings: ['update'],
+    prices: ['read', 'update'],
+    presets: ['read', 'create-own', 'manage-house'],
+    customers: ['read', 'create', 'update'],
+    tickets: ['read', 'read-all', 'create', 'update', 'advance', 'pickup'],
+    measurements: ['read', 'update'],
+    plans: ['read', 'create'],
+    cutsheets: ['print'],
+    notices: ['send'],
+    outbox: ['read'],
+  },
+  tailor: {
+    prices: ['read'],
+    presets: ['read', 'create-own'],
+    customers: ['read', 'create', 'update'],
+    tickets: ['read', 'read-all', 'create', 'update', 'advance'],
+    measurements: ['read', 'update'],
+    plans: ['read', 'create'],
+    cutsheets: ['print'],
+  },
+  // Sees only the queue: tickets assigned to them or to nobody (see services/tickets.ts).
+  apprentice: {
+    presets: ['read'],
+    tickets: ['read', 'advance'],
+    measurements: ['read'],
+    plans: ['read'],
+    cutsheets: ['print'],
+  },
+  counter: {
+    prices: ['read'],
+    customers: ['read', 'create', 'update'],
+    tickets: ['read', 'read-all', 'create', 'pickup'],
+    plans: ['read'],
+    notices: ['send'],
+  },
+} as const satisfies Record<string, { [R in Resource]?: readonly (typeof statements)[R][number][] }>;
+
+/** The role names, lead first. */
+export const ROLES = ['lead', 'tailor', 'apprentice', 'counter'] as const;
+/** A shop role. */
+export type Role = (typeof ROLES)[number];
+
+/** What each role is called on screen and what it is for. */
+export const ROLE_LABELS: Record<Role, { name: string; blurb: string }> = {
+  lead: { name: 'Lead', blurb: 'Runs the shop: staff, house presets, prices, settings.' },
+  tailor: { name: 'Tailor', blurb: 'Customers, tickets, fitting measurements, plans, own presets.' },
+  apprentice: { name: 'Apprentice', blurb: 'Works the queue: reads tickets, prints cut sheets, moves jobs along.' },
+  counter: { name: 'Counter', blurb: 'Customers, intake, pickup and notices; reads plans.' },
+};
+
+/** The better-auth role objects, one per shop role. */
+export const roles = {
+  lead: ac.newRole(grants.lead),
+  tailor: ac.newRole(grants.tailor),
+  apprentice: ac.newRole(grants.apprentice),
+  counter: ac.newRole(grants.counter),
+};
+
+/** True when the string names a shop role. */
+export function isRole(value: unknown): value is Role {
+  return typeof value === 'string' && (ROLES as readonly string[]).includes(value);
+}
+
+/** True when the role is granted the action on the resource. */
+export function can(role: Role | null | undefined, [resource, action]: Permission): boolean {
+  if (!role) return false;
+  const granted = (grants[role] as Partial<Record<Resource, readonly string[]>>)[resource];
+  return granted?.includes(action) ?? false;
+}

@@ -1,0 +1,22 @@
+// Brings the database up once per process before the first request: migrations, then demo data.
+import { DEMO_SEED } from 'astro:env/server';
+import { handle } from '@/db';
+import { seedDemoIfEmpty } from './demo-seed';
+
+const holder = globalThis as typeof globalThis & { __cuffwrightReady?: Promise<void> };
+
+async function start(): Promise<void> {
+  const began = Date.now();
+  await handle.migrate();
+  const seeded = !DEMO_SEED ? false : await seedDemoIfEmpty();
+  console.log(`Database ready (${handle.kind}) in ${Date.now() - began} ms${seeded ? ', demo shop seeded' : ''}.`);
+}
+
+/** Resolves when the database is migrated and seeded; retried on the next request if it failed. */
+export function ensureStarted(): Promise<void> {
+  holder.__cuffwrightReady ??= start().catch((e) => {
+    holder.__cuffwrightReady = undefined;
+    throw e;
+  });
+  return holder.__cuffwrightReady;
+}
