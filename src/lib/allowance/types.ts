@@ -33,7 +33,8 @@ export type WarningCode =
   | 'old-crease-visible'
   | 'taper-beyond-tolerance'
   | 'let-out-exceeds-seam-allowance'
-  | 'hem-allowance-unusual';
+  | 'hem-allowance-unusual'
+  | 'turn-under-too-large';
 
 /** The name of a chalk line, top to bottom. */
 export type CuffLineName = 'finished-edge' | 'cuff-top' | 'inner-fold' | 'cut';
@@ -68,13 +69,13 @@ export interface CuffInput {
   slope?: LengthInput;
 }
 
-/** Where an old crease ends up once the cuff is made. */
-export type CreasePlace = 'leg-visible' | 'behind-cuff' | 'cuff-face' | 'inside' | 'on-fold';
+/** Where an old crease ends up once the cuff is made ('cut-away': below the cutting line). */
+export type CreasePlace = 'leg-visible' | 'behind-cuff' | 'cuff-face' | 'inside' | 'on-fold' | 'cut-away';
 
 /** Where an old crease lands, in words and as a height above the finished edge. */
 export interface CreaseLanding {
   place: CreasePlace;
-  /** height above the finished edge once the cuff is turned up */
+  /** height above the finished edge once the cuff is turned up ('cut-away': where it would have lain inside) */
   heightAboveEdge: Len;
   /** true when it will show on the outside of the finished trouser */
   visible: boolean;

@@ -1,0 +1,106 @@
+import Fraction from 'fraction.js';
+import { AllowanceError } from './allowance-error';
+import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
+import { exactDefaults } from './defaults';
+import { lenMaker } from './len';
+import { InputReader } from './read-input';
+import type { PlanWarning, Precision, TaperInput, TaperLine, TaperPlan, Unit } from './types';
+
+/** A taper input read and checked: exact mm throughout. */
+export interface TaperValues {
+  unit: Unit;
+  precision: Precision;
+  cuffDepth: Fraction;
+  hemSection: Fraction;
+  widthAtEdge: Fraction;
+  widthAbove: Fraction;
+  heightAbove: Fraction;
+  seamAllowance: Fraction | null;
+  tolerance: Fraction;
+  clothThickness: Fraction;
+}
+
+const ZERO = new Fraction(0);
+const ONE = new Fraction(1);
+
+/** Read a taper input field by field (errors carry the field name). */
+export function readTaperInput(input: TaperInput, r: InputReader): TaperValues {
+  const defaults = exactDefaults(r.unit);
+  const d =
+    r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', { required: true, min: 'positive', max: defaults.maxCuffDepth }) ??
+    defaults.usualCuffDepth.min;
+  const width = (value: unknown, field: string, label: string): Fraction =>
+    r.length(value, field, label, { required: true, min: 'positive' }) ?? ONE;
+  return {
+    unit: r.unit,
+    precision: r.precision,
+    cuffDepth: d,
+    hemSection: r.length(input.hemSection, 'hemSection', 'Third section', { min: 'positive' }) ?? d,
+    widthAtEdge: width(input.widthAtEdge, 'widthAtEdge', 'Width at the finished edge'),
+    widthAbove: width(input.widthAbove, 'widthAbove', 'Width higher up'),
+    heightAbove: width(input.heightAbove, 'heightAbove', 'Height of the upper width'),
+    seamAllowance: r.length(input.seamAllowance, 'seamAllowance', 'Seam allowance', { min: 'non-negative' }),
+    tolerance: r.length(input.tolerance, 'tolerance', 'Tolerance', { min: 'non-negative' }) ?? defaults.taperTolerance,
+    clothThickness: r.length(input.clothThickness, 'clothThickness', 'Turn of cloth', { min: 'non-negative' }) ?? ZERO,
+  };
+}
+
+/** Flat leg width at a height above the finished edge, the taper through the two measurements followed straight on. */
+export function widthAt(v: TaperValues, height: Fraction): Fraction {
+  return v.widthAtEdge.add(v.widthAbove.sub(v.widthAtEdge).mul(height).div(v.heightAbove));
+}
+
+/** Check a tapered leg under a cuff: the work at each chalk line to keep the cuff-top width straight down. */
+export function checkTaper(input: TaperInput): TaperPlan {
+  const v = readTaperInput(input, new InputReader(input, false));
+  const len = lenMaker(v.unit, v.precision);
+  const target = widthAt(v, v.cuffDepth);
+  if (target.s < 0n || target.n === 0n) {
+    throw new AllowanceError('out-of-range', 'These widths give no leg at the cuff top: check the two widths and the height.', 'widthAbove');
+  }
+  const positions = linePositionList(cuffLinePositions(v.cuffDepth, v.hemSection, v.clothThickness));
+  let worst = ZERO;
+  let mostPerSide: Fraction | null = null;
+  let withinTolerance = true;
+  const lines: TaperLine[] = positions.map((below, k) => {
+    const width = widthAt(v, below.neg());
+    if (width.s < 0n || width.n === 0n) {
+      throw new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove');
+    }
+    const change = target.sub(width);
+    const perSide = change.div(2);
+    if (change.abs().compare(worst.abs()) > 0) worst = change;
+    if (change.abs().compare(v.tolerance) > 0) withinTolerance = false;
+    if (mostPerSide === null || perSide.compare(mostPerSide) > 0) mostPerSide = perSide;
+    return {
+      n: (k + 1) as TaperLine['n'],
+      name: CUFF_LINE_NAMES[k]!,
+      belowMark: len(below),
+      width: len(width),
+      change: len(change),
+      perSeam: len(change),
+      perSide: len(perSide),
+    };
+  });
+  const warnings: PlanWarning[] = [];
+  const most = mostPerSide ?? ZERO;
+  if (!withinTolerance) {
+    const wider = worst.s > 0n;
+    const by = len(worst.abs()).text;
+    const side = len(worst.abs().div(2)).text;
+    warnings.push({
+      code: 'taper-beyond-tolerance',
+      message: wider
+        ? `The leg narrows below the cuff top: at worst ${by} narrower (flat) than at the cuff top. Let out the inseam and outseam from the cuff top down to the cut, up to ${side} on each side of each seam, so the cuff lies flat.`
+        : `The leg widens below the cuff top: at worst ${by} wider (flat) than at the cuff top. Take in the inseam and outseam from the cuff top down to the cut, up to ${side} on each side of each seam, so the cuff lies flat.`,
+    });
+  }
+  const feasible = v.seamAllowance === null ? null : most.compare(v.seamAllowance) <= 0;
+  if (feasible === false) {
+    warnings.push({
+      code: 'let-out-exceeds-seam-allowance',
+      message: `Letting out needs ${len(most).text} on each side of each seam, but the seam allowance is only ${len(v.seamAllowance!).text}. Choose a shallower cuff or a plain hem.`,
+    });
+  }
+  return { kind: 'taper', unit: v.unit, precision: v.precision, targetWidth: len(target), lines, withinTolerance, feasible, warnings };
+}

@@ -1,0 +1,113 @@
+import Fraction from 'fraction.js';
+import { formatExact } from './format-length';
+import type { Len, Unit } from './types';
+import { MM_PER_INCH, isMetric } from './units';
+
+/** A range of usual values, inclusive. */
+export interface Usual<T> {
+  min: T;
+  max: T;
+}
+
+/** The engine's defaults and usual ranges for one unit system, exact, in mm. */
+export interface ExactDefaults {
+  cuffTurnUnder: Fraction;
+  hemAllowance: Fraction;
+  hemTurnUnder: Fraction;
+  taperTolerance: Fraction;
+  facingSeam: Fraction;
+  shallowestCuff: Fraction;
+  onFoldWithin: Fraction;
+  maxCuffDepth: Fraction;
+  usualCuffDepth: Usual<Fraction>;
+  usualHemAllowance: Usual<Fraction>;
+}
+
+const inch = (n: number, d = 1): Fraction => new Fraction(n, d).mul(MM_PER_INCH);
+const mm = (n: number, d = 1): Fraction => new Fraction(n, d);
+
+// Inch figures from TRADE.md; metric ones are our own round numbers near them (NIST: convert, then round sensibly).
+const IMPERIAL: ExactDefaults = {
+  cuffTurnUnder: inch(1, 2),
+  hemAllowance: inch(3, 2),
+  hemTurnUnder: inch(1, 4),
+  taperTolerance: inch(1, 8),
+  facingSeam: inch(1, 2),
+  shallowestCuff: inch(1, 2),
+  onFoldWithin: inch(1, 16),
+  maxCuffDepth: inch(6),
+  usualCuffDepth: { min: inch(1), max: inch(9, 4) },
+  usualHemAllowance: { min: inch(5, 4), max: inch(2) },
+};
+
+const METRIC: ExactDefaults = {
+  cuffTurnUnder: mm(12),
+  hemAllowance: mm(40),
+  hemTurnUnder: mm(6),
+  taperTolerance: mm(3),
+  facingSeam: mm(12),
+  shallowestCuff: mm(12),
+  onFoldWithin: mm(3, 2),
+  maxCuffDepth: mm(150),
+  usualCuffDepth: { min: mm(25), max: mm(57) },
+  usualHemAllowance: { min: mm(32), max: mm(51) },
+};
+
+/** The exact defaults for a unit: inch figures for 'in', metric ones for 'cm' and 'mm'. */
+export function exactDefaults(unit: Unit): ExactDefaults {
+  return isMetric(unit) ? METRIC : IMPERIAL;
+}
+
+/** Defaults and usual ranges of one unit, as lengths shown in that unit. */
+export type PlanDefaults = { precision: 16 } & {
+  [K in keyof ExactDefaults]: ExactDefaults[K] extends Fraction ? Len : Usual<Len>;
+};
+
+function lenOf(f: Fraction, unit: Unit): Len {
+  return { mm: f.valueOf(), text: formatExact(f, unit, 16) };
+}
+
+function shown(unit: Unit): PlanDefaults {
+  const e = exactDefaults(unit);
+  const l = (f: Fraction): Len => lenOf(f, unit);
+  return {
+    precision: 16,
+    cuffTurnUnder: l(e.cuffTurnUnder),
+    hemAllowance: l(e.hemAllowance),
+    hemTurnUnder: l(e.hemTurnUnder),
+    taperTolerance: l(e.taperTolerance),
+    facingSeam: l(e.facingSeam),
+    shallowestCuff: l(e.shallowestCuff),
+    onFoldWithin: l(e.onFoldWithin),
+    maxCuffDepth: l(e.maxCuffDepth),
+    usualCuffDepth: { min: l(e.usualCuffDepth.min), max: l(e.usualCuffDepth.max) },
+    usualHemAllowance: { min: l(e.usualHemAllowance.min), max: l(e.usualHemAllowance.max) },
+  };
+}
+
+/** The defaults the engine uses for each unit, ready to show (e.g. DEFAULTS.in.cuffTurnUnder.text = "1/2 in"). */
+export const DEFAULTS: Readonly<Record<Unit, PlanDefaults>> = { in: shown('in'), cm: shown('cm'), mm: shown('mm') };
+
+/** A usual cuff depth and a word on how it reads. */
+export interface UsualCuffDepth {
+  depth: Len;
+  note: 'trim' | 'classic' | 'wide' | 'modern';
+}
+
+function usualDepths(unit: Unit): UsualCuffDepth[] {
+  // TRADE.md: 1¼, 1½, 1¾ in, and 5 cm / 2 in as a modern standard; metric rounded to whole mm.
+  const depths: [Fraction, Fraction, UsualCuffDepth['note']][] = [
+    [inch(5, 4), mm(32), 'trim'],
+    [inch(3, 2), mm(38), 'classic'],
+    [inch(7, 4), mm(44), 'wide'],
+    [inch(2), mm(50), 'modern'],
+  ];
+  return depths.map(([i, m, note]) => ({ depth: lenOf(isMetric(unit) ? m : i, unit), note }));
+}
+
+/** The usual cuff depths, per unit, for a picker. */
+export const USUAL_CUFF_DEPTHS: Readonly<Record<Unit, readonly UsualCuffDepth[]>> = {
+  in: usualDepths('in'),
+  cm: usualDepths('cm'),
+  mm: usualDepths('mm'),
+};

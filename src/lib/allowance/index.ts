@@ -1,0 +1,14 @@
+// The hem-and-cuff allowance engine: exact lengths in, chalk lines and warnings out.
+// Pure TypeScript; mathjs loads only when a typed sum ("31 3/4 + 1/8") is first worked out.
+
+export type * from './types';
+export { AllowanceError, isAllowanceError, type AllowanceErrorCode } from './allowance-error';
+export { formatLength, splitFraction, type SplitFraction } from './format-length';
+export { parseLength } from './parse-length';
+export { planCuff } from './plan-cuff';
+export { planHem } from './plan-hem';
+export { checkTaper } from './check-taper';
+export { validateCuffInput, validateHemInput, validateTaperInput } from './validate-input';
+export { DEFAULTS, USUAL_CUFF_DEPTHS, type PlanDefaults, type UsualCuffDepth, type Usual } from './defaults';
+export { MM_PER_INCH, UNITS, isUnit, mmToUnit, toInches } from './units';
+export { isPrecision } from './read-input';

@@ -1,0 +1,65 @@
+import Fraction from 'fraction.js';
+import { AllowanceError } from './allowance-error';
+import { formatExact } from './format-length';
+import { evaluateTerms } from './length-expression';
+import { type LengthTerm, readLengthTerms, termUnits } from './length-terms';
+import type { Len, Precision, Unit } from './types';
+import { isUnit, mmPerUnitRatio } from './units';
+
+/** Largest length either way, in mm (200 in). */
+export const LIMIT_MM = new Fraction(5080);
+
+/** A term's exact value in mm, built straight with fraction.js (no expression evaluation). */
+export function termMm(t: LengthTerm, unit: Unit): Fraction {
+  const [a, b] = mmPerUnitRatio(unit);
+  const whole = t.whole ?? '0';
+  const dot = whole.indexOf('.');
+  const wholeDigits = dot < 0 ? whole : whole.slice(0, dot) + whole.slice(dot + 1);
+  const places = dot < 0 ? 0 : whole.length - dot - 1;
+  const num = t.num ?? '0';
+  const den = t.den ?? '1';
+  // One construction for the whole term while the integers stay exact; BigInt beyond.
+  if (wholeDigits.length + den.length <= 12 && num.length <= 12 && places <= 9) {
+    const d = Number(den);
+    const n = (Number(wholeDigits) * d + Number(num) * 10 ** places) * a;
+    return new Fraction(t.sign * n, d * b * 10 ** places);
+  }
+  const d = BigInt(den);
+  const n = (BigInt(wholeDigits) * d + BigInt(num) * 10n ** BigInt(places)) * BigInt(a);
+  return new Fraction(BigInt(t.sign) * n, d * BigInt(b) * 10n ** BigInt(places));
+}
+
+/** Check a length (mm) lies within ±200 in; throws AllowanceError 'too-large'. */
+export function checkRange(mm: Fraction): Fraction {
+  const v = mm.valueOf();
+  // Exact comparison only near the limit.
+  if ((v > 5079 || v < -5079) && mm.abs().compare(LIMIT_MM) > 0) {
+    throw new AllowanceError('too-large', 'A length must be within 200 in (5080 mm) either way.');
+  }
+  return mm;
+}
+
+/**
+ * Typed text to an exact length in mm. One term (a number, fraction or mixed number) goes
+ * straight to fraction.js; sums and differences go through mathjs in Fraction mode.
+ */
+export function parseExact(text: string, unit: Unit): Fraction {
+  const terms = readLengthTerms(text);
+  const units = termUnits(terms, unit);
+  const mm = terms.length === 1 ? termMm(terms[0]!, units[0]!) : evaluateTerms(terms, units);
+  return checkRange(mm);
+}
+
+/** The same as parseExact but always through mathjs: the slow path, kept to check the fast one. */
+export function parseExactWithMathjs(text: string, unit: Unit): Fraction {
+  const terms = readLengthTerms(text);
+  return checkRange(evaluateTerms(terms, termUnits(terms, unit)));
+}
+
+/** Read typed text ("1 1/2", "1½", "38 mm", "31 3/4 + 1/8") as a length; the unit is the plan's unless named. */
+export function parseLength(text: string, unit: Unit, precision: Precision = 16): Len {
+  if (typeof text !== 'string') throw new AllowanceError('not-a-length', 'A length must be given as text.');
+  if (!isUnit(unit)) throw new AllowanceError('bad-unit', 'The unit must be in, cm or mm.', 'unit');
+  const mm = parseExact(text, unit);
+  return { mm: mm.valueOf(), text: formatExact(mm, unit, precision) };
+}

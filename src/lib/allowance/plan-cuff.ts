@@ -1,0 +1,149 @@
+import Fraction from 'fraction.js';
+import { creaseLanding } from './crease-landing';
+import { cuffAlternatives } from './cuff-alternatives';
+import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
+import { type ExactDefaults, exactDefaults } from './defaults';
+import { type LenMaker, lenMaker } from './len';
+import { InputReader } from './read-input';
+import type { CuffInput, CuffLine, CuffPlan, Len, PlanWarning, Precision, Unit } from './types';
+
+/** A cuff input read and checked: exact mm throughout. */
+export interface CuffValues {
+  unit: Unit;
+  precision: Precision;
+  cuffDepth: Fraction;
+  hemSection: Fraction;
+  turnUnder: Fraction;
+  available: Fraction | null;
+  clothThickness: Fraction;
+  oldCrease: Fraction | null;
+  slope: Fraction | null;
+}
+
+const ZERO = new Fraction(0);
+
+/** Read a cuff input field by field (errors carry the field name). */
+export function readCuffInput(input: CuffInput, r: InputReader): CuffValues {
+  const defaults = exactDefaults(r.unit);
+  const cuffDepth = r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', {
+    required: true,
+    min: 'positive',
+    max: defaults.maxCuffDepth,
+  });
+  const d = cuffDepth ?? defaults.usualCuffDepth.min;
+  return {
+    unit: r.unit,
+    precision: r.precision,
+    cuffDepth: d,
+    hemSection: r.length(input.hemSection, 'hemSection', 'Third section', { min: 'positive' }) ?? d,
+    turnUnder: r.length(input.turnUnder, 'turnUnder', 'Turn-under', { min: 'non-negative' }) ?? defaults.cuffTurnUnder,
+    available: r.length(input.available, 'available', 'Cloth below the mark', { min: 'non-negative' }),
+    clothThickness: r.length(input.clothThickness, 'clothThickness', 'Turn of cloth', { min: 'non-negative' }) ?? ZERO,
+    oldCrease: r.length(input.oldCrease, 'oldCrease', 'Old crease'),
+    slope: r.length(input.slope, 'slope', 'Slope'),
+  };
+}
+
+function cuffWarnings(v: CuffValues, defaults: ExactDefaults, len: LenMaker): PlanWarning[] {
+  const warnings: PlanWarning[] = [];
+  if (v.hemSection.compare(v.turnUnder) <= 0) {
+    warnings.push({
+      code: 'third-section-too-small',
+      message: `The third section (${len(v.hemSection).text}) is no deeper than the turn-under (${len(v.turnUnder).text}): nothing is left to hold the cuff inside. Make the third section deeper or the turn-under narrower.`,
+    });
+  }
+  const usual = defaults.usualCuffDepth;
+  if (v.cuffDepth.compare(usual.min) < 0 || v.cuffDepth.compare(usual.max) > 0) {
+    warnings.push({
+      code: 'cuff-depth-unusual',
+      message: `A ${len(v.cuffDepth).text} cuff is outside the usual ${len(usual.min).text} to ${len(usual.max).text}. Check the depth with the customer.`,
+    });
+  }
+  if (v.slope !== null && v.slope.n !== 0n) {
+    warnings.push({
+      code: 'slope-on-cuff',
+      message: `Cuffs are made level, so the ${len(v.slope.abs()).text} slope was left out: this plan is level all round.`,
+    });
+  }
+  return warnings;
+}
+
+function shortMessage(required: Len, available: Len, shortBy: Len, alt: NonNullable<CuffPlan['alternatives']>): string {
+  const fits: string[] = [];
+  if (alt.deepestCuff !== null) fits.push(`a ${alt.deepestCuff.text} cuff with three equal sections`);
+  if (alt.facedCuff.fits) fits.push(`a faced cuff (${alt.facedCuff.required.text} of this cloth and a facing)`);
+  if (alt.plainHem.fits) fits.push(`a plain hem (${alt.plainHem.required.text})`);
+  const what =
+    fits.length > 0
+      ? `What still fits: ${fits.join('; ')}.`
+      : `Not even a plain hem (${alt.plainHem.required.text}) fits: face the hem with other cloth.`;
+  return `Not enough cloth: the cuff needs ${required.text} below the mark and there is ${available.text}, short by ${shortBy.text}. ${what}`;
+}
+
+/** Plan a cuff from a pin mark: the four chalk lines, the cloth check, the old crease and the warnings. */
+export function planCuff(input: CuffInput): CuffPlan {
+  const v = readCuffInput(input, new InputReader(input, false));
+  const defaults = exactDefaults(v.unit);
+  const len = lenMaker(v.unit, v.precision);
+  const positions = cuffLinePositions(v.cuffDepth, v.hemSection, v.clothThickness);
+  const A = v.available;
+  // Above the raw edge = A − below the mark; for the finished edge that is A itself.
+  const aboveRaw = linePositionList(positions).map((below, k) => (A === null ? null : k === 0 ? A : A.sub(below)));
+  const lines: CuffLine[] = linePositionList(positions).map((below, k) => ({
+    n: (k + 1) as CuffLine['n'],
+    name: CUFF_LINE_NAMES[k]!,
+    belowMark: len(below),
+    aboveRawEdge: aboveRaw[k] === null ? null : len(aboveRaw[k]!),
+  }));
+  const required = lines[3]!.belowMark;
+  const warnings = cuffWarnings(v, defaults, len);
+  let enough: boolean | null = null;
+  let spare: Len | null = null;
+  let shortBy: Len | null = null;
+  let alternatives: CuffPlan['alternatives'] = null;
+  if (A !== null) {
+    const rest = aboveRaw[3]!;
+    enough = rest.s > 0n || rest.n === 0n;
+    if (enough) {
+      spare = lines[3]!.aboveRawEdge;
+    } else {
+      shortBy = len(rest.neg());
+      alternatives = cuffAlternatives({
+        available: A,
+        innerFold: positions.innerFold,
+        clothThickness: v.clothThickness,
+        unit: v.unit,
+        precision: v.precision,
+        defaults,
+        len,
+      });
+      warnings.unshift({ code: 'not-enough-cloth', message: shortMessage(required, len(A), shortBy, alternatives) });
+    }
+  }
+  const plan: CuffPlan = {
+    kind: 'cuff',
+    unit: v.unit,
+    precision: v.precision,
+    cuffDepth: len(v.cuffDepth),
+    hemSection: len(v.hemSection),
+    turnUnder: len(v.turnUnder),
+    lines,
+    required,
+    enough,
+    shortBy,
+    spare,
+    alternatives,
+    warnings,
+  };
+  if (v.oldCrease !== null) {
+    const landing = creaseLanding(v.oldCrease, {
+      cuffDepth: v.cuffDepth,
+      lines: positions,
+      onFoldWithin: defaults.onFoldWithin,
+      len,
+    });
+    plan.creaseLands = landing;
+    if (landing.visible) warnings.push({ code: 'old-crease-visible', message: landing.message });
+  }
+  return plan;
+}

@@ -1,0 +1,100 @@
+import Fraction from 'fraction.js';
+import { exactDefaults } from './defaults';
+import { floorSteps, stepRatio, stepsToMm } from './format-length';
+import { lenMaker } from './len';
+import { InputReader } from './read-input';
+import type { HemInput, HemLine, HemPlan, Len, PlanWarning, Precision, Unit } from './types';
+
+/** A hem input read and checked: exact mm throughout. */
+export interface HemValues {
+  unit: Unit;
+  precision: Precision;
+  hemAllowance: Fraction;
+  turnUnder: Fraction;
+  available: Fraction | null;
+  slope: Fraction;
+}
+
+const ZERO = new Fraction(0);
+
+/** Read a plain hem input field by field (errors carry the field name). */
+export function readHemInput(input: HemInput, r: InputReader): HemValues {
+  const defaults = exactDefaults(r.unit);
+  return {
+    unit: r.unit,
+    precision: r.precision,
+    hemAllowance:
+      r.length(input.hemAllowance, 'hemAllowance', 'Hem allowance', { min: 'positive' }) ?? defaults.hemAllowance,
+    turnUnder: r.length(input.turnUnder, 'turnUnder', 'Turn-under', { min: 'non-negative' }) ?? defaults.hemTurnUnder,
+    available: r.length(input.available, 'available', 'Cloth below the mark', { min: 'non-negative' }),
+    slope: r.length(input.slope, 'slope', 'Slope', { min: 'non-negative' }) ?? ZERO,
+  };
+}
+
+/** Plan a plain hem: finished edge and cut at the back (where the pin is) and at the front, the cloth check and warnings. */
+export function planHem(input: HemInput): HemPlan {
+  const v = readHemInput(input, new InputReader(input, false));
+  const defaults = exactDefaults(v.unit);
+  const len = lenMaker(v.unit, v.precision);
+  const A = v.available;
+  const positions: [HemLine['name'], Fraction][] = [
+    ['finished-edge', ZERO],
+    ['cut', v.hemAllowance],
+  ];
+  const lines: HemLine[] = positions.map(([name, below], k) => ({
+    n: (k + 1) as HemLine['n'],
+    name,
+    belowMark: len(below),
+    frontBelowMark: len(below.sub(v.slope)),
+    aboveRawEdge: A === null ? null : len(A.sub(below)),
+  }));
+  const warnings: PlanWarning[] = [];
+  let enough: boolean | null = null;
+  let spare: Len | null = null;
+  let shortBy: Len | null = null;
+  if (A !== null) {
+    const rest = A.sub(v.hemAllowance);
+    enough = rest.s > 0n || rest.n === 0n;
+    if (enough) spare = len(rest);
+    else {
+      shortBy = len(rest.neg());
+      const [a, b] = stepRatio(v.unit, v.precision);
+      const most = stepsToMm(floorSteps(A, a, b), v.unit, v.precision);
+      const fits =
+        most.n === 0n
+          ? 'Face the hem with a strip of other cloth.'
+          : `A ${len(most).text} hem is the most that fits; for more, face the hem with a strip of other cloth.`;
+      warnings.push({
+        code: 'not-enough-cloth',
+        message: `Not enough cloth for a ${len(v.hemAllowance).text} hem: there is ${len(A).text} below the mark, short by ${shortBy.text}. ${fits}`,
+      });
+    }
+  }
+  const usual = defaults.usualHemAllowance;
+  if (v.hemAllowance.compare(usual.min) < 0 || v.hemAllowance.compare(usual.max) > 0) {
+    warnings.push({
+      code: 'hem-allowance-unusual',
+      message: `A ${len(v.hemAllowance).text} hem allowance is outside the usual ${len(usual.min).text} to ${len(usual.max).text}. Check it suits the cloth.`,
+    });
+  }
+  if (v.turnUnder.compare(v.hemAllowance) >= 0) {
+    warnings.push({
+      code: 'turn-under-too-large',
+      message: `The turn-under (${len(v.turnUnder).text}) is as deep as the whole hem allowance (${len(v.hemAllowance).text}): nothing is left for the hem. Make the turn-under narrower.`,
+    });
+  }
+  return {
+    kind: 'hem',
+    unit: v.unit,
+    precision: v.precision,
+    hemAllowance: len(v.hemAllowance),
+    turnUnder: len(v.turnUnder),
+    slope: len(v.slope),
+    lines,
+    required: lines[1]!.belowMark,
+    enough,
+    shortBy,
+    spare,
+    warnings,
+  };
+}

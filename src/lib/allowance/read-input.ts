@@ -1,0 +1,93 @@
+import Fraction from 'fraction.js';
+import { AllowanceError } from './allowance-error';
+import { fractionFromNumber } from './exact-number';
+import { formatExact } from './format-length';
+import { checkRange, parseExact } from './parse-length';
+import type { Precision, Unit } from './types';
+import { isUnit, mmPerUnitRatio } from './units';
+
+/** What a length field may hold beyond the ±200 in range. */
+export interface LengthRule {
+  required?: boolean;
+  min?: 'positive' | 'non-negative';
+  max?: Fraction;
+}
+
+/** True for 8, 16 and 32. */
+export function isPrecision(p: unknown): p is Precision {
+  return p === 8 || p === 16 || p === 32;
+}
+
+/**
+ * Reads and checks a plan's inputs, naming the field in each AllowanceError. Throws the first
+ * error, or, when collecting, keeps them all and goes on with a stand-in value.
+ */
+export class InputReader {
+  readonly errors: AllowanceError[] = [];
+  readonly unit: Unit;
+  readonly precision: Precision;
+
+  constructor(
+    input: unknown,
+    private readonly collect: boolean,
+  ) {
+    if (typeof input !== 'object' || input === null) {
+      throw new AllowanceError('bad-input', 'The plan input must be an object.');
+    }
+    const { unit, precision } = input as { unit?: unknown; precision?: unknown };
+    if (!isUnit(unit)) throw new AllowanceError('bad-unit', 'Choose a unit: in, cm or mm.', 'unit');
+    this.unit = unit;
+    this.precision = 16;
+    if (precision !== undefined) {
+      if (isPrecision(precision)) this.precision = precision;
+      else this.fail(new AllowanceError('bad-precision', 'Show inches to 1/8, 1/16 or 1/32.', 'precision'));
+    }
+  }
+
+  private fail(e: AllowanceError): void {
+    if (!this.collect) throw e;
+    this.errors.push(e);
+  }
+
+  /** A length field in mm, or null when absent (blank text counts as absent). */
+  length(value: unknown, field: string, label: string, rule: LengthRule = {}): Fraction | null {
+    if (value === undefined || value === null || (typeof value === 'string' && value.trim() === '')) {
+      if (rule.required) this.fail(new AllowanceError('missing', `${label} is needed.`, field));
+      return null;
+    }
+    let mm: Fraction;
+    try {
+      mm = this.exact(value);
+    } catch (e) {
+      if (!(e instanceof AllowanceError)) throw e;
+      this.fail(new AllowanceError(e.code, `${label}: ${e.message}`, field));
+      return null;
+    }
+    const s = mm.s * (mm.n === 0n ? 0n : 1n);
+    if (rule.min === 'positive' && s <= 0n) {
+      this.fail(new AllowanceError('not-positive', `${label} must be more than 0.`, field));
+      return null;
+    }
+    if (rule.min === 'non-negative' && s < 0n) {
+      this.fail(new AllowanceError('negative', `${label} cannot be negative.`, field));
+      return null;
+    }
+    if (rule.max !== undefined && mm.compare(rule.max) > 0) {
+      const most = formatExact(rule.max, this.unit, this.precision);
+      this.fail(new AllowanceError('out-of-range', `${label} must be at most ${most}.`, field));
+      return null;
+    }
+    return mm;
+  }
+
+  private exact(value: unknown): Fraction {
+    if (typeof value === 'number') {
+      if (!Number.isFinite(value)) throw new AllowanceError('not-a-length', 'A length must be a finite number.');
+      const [a, b] = mmPerUnitRatio(this.unit);
+      if (Math.abs(value) * a > 5079 * b) return checkRange(fractionFromNumber(value, a, b));
+      return fractionFromNumber(value, a, b);
+    }
+    if (typeof value === 'string') return parseExact(value, this.unit);
+    throw new AllowanceError('not-a-length', 'Give a number or text such as 1 1/2.');
+  }
+}

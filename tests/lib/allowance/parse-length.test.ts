@@ -1,0 +1,193 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { AllowanceError, formatLength, parseLength, type Precision, type Unit } from '@/lib/allowance';
+import { parseExact, parseExactWithMathjs } from '@/lib/allowance/parse-length';
+
+// 1 in = 25.4 mm exactly (NBS 1959): every inch value below is that arithmetic.
+describe('parseLength accepts', () => {
+  it.each([
+    ['1 1/2', 'in', 38.1, '1 1/2 in'],
+    ['1½', 'in', 38.1, '1 1/2 in'],
+    ['1 ½', 'in', 38.1, '1 1/2 in'],
+    ['1-1/2', 'in', 38.1, '1 1/2 in'],
+    ['1.5', 'in', 38.1, '1 1/2 in'],
+    ['.5', 'in', 12.7, '1/2 in'],
+    ['3/2', 'in', 38.1, '1 1/2 in'],
+    ['1 ⁹⁄₁₆', 'in', 39.6875, '1 9/16 in'],
+    ['1⁹⁄₁₆', 'in', 39.6875, '1 9/16 in'],
+    ['9⁄16', 'in', 14.2875, '9/16 in'],
+    ['⅝', 'in', 15.875, '5/8 in'],
+    ['2¾ in', 'in', 69.85, '2 3/4 in'],
+    ['1 1/2"', 'in', 38.1, '1 1/2 in'],
+    ['1 1/2 inches', 'in', 38.1, '1 1/2 in'],
+    ['1 1/2 IN', 'in', 38.1, '1 1/2 in'],
+    ['38 mm', 'in', 38, '1 1/2 in'],
+    ['3.8cm', 'in', 38, '1 1/2 in'],
+    ['38', 'mm', 38, '38 mm'],
+    ['3.85', 'cm', 38.5, '3.85 cm'],
+    ['1 in', 'mm', 25.4, '25.5 mm'],
+    ['31 3/4 + 1/8', 'in', 809.625, '31 7/8 in'],
+    ['31 3/4+1/8', 'in', 809.625, '31 7/8 in'],
+    ['32 - 1/4', 'in', 806.45, '31 3/4 in'],
+    ['32 − 1/4', 'in', 806.45, '31 3/4 in'],
+    ['32-1/4', 'in', 819.15, '32 1/4 in'],
+    ['30 in + 5 mm', 'in', 767, '30 3/16 in'],
+    ['30 in + 1/2', 'mm', 774.7, '774.5 mm'],
+    ['-1/4', 'in', -6.35, '-1/4 in'],
+    ['- 1 1/4', 'in', -31.75, '-1 1/4 in'],
+    ['  2  ', 'in', 50.8, '2 in'],
+    ['200', 'in', 5080, '200 in'],
+    ['-200 in', 'mm', -5080, '-5080 mm'],
+    ['⅓', 'in', 127 / 15, '5/16 in'],
+  ] as const)('"%s" in a %s plan → %s mm, "%s" (arithmetic)', (text, unit, mm, shown) => {
+    const len = parseLength(text, unit);
+    expect(len.mm).toBeCloseTo(mm, 9);
+    expect(len.text).toBe(shown);
+  });
+
+  it('shows the result at the precision asked for', () => {
+    expect(parseLength('40 mm', 'in', 8).text).toBe('1 5/8 in');
+    expect(parseLength('40 mm', 'in', 32).text).toBe('1 9/16 in');
+  });
+});
+
+describe('parseLength refuses', () => {
+  it.each([
+    ['', 'empty'],
+    ['   ', 'empty'],
+    ['abc', 'not-a-length'],
+    ['1/0', 'divide-by-zero'],
+    ['1 1/0', 'divide-by-zero'],
+    ['1e400', 'not-a-length'],
+    ['1e5', 'not-a-length'],
+    ['NaN', 'not-a-length'],
+    ['Infinity', 'not-a-length'],
+    ['-Infinity', 'not-a-length'],
+    ['--2', 'not-a-length'],
+    ['1//2', 'not-a-length'],
+    ['1 1/2/3', 'not-a-length'],
+    ['2 in cm', 'bad-unit'],
+    ['½½', 'not-a-length'],
+    ['1,5', 'not-a-length'],
+    ['5-3', 'not-a-length'],
+    ['32 -1/4', 'not-a-length'],
+    ['1 3/2', 'not-a-length'],
+    ['1.5 1/2', 'not-a-length'],
+    ['1.5/2', 'not-a-length'],
+    ['1 2', 'not-a-length'],
+    ['1.2.3', 'not-a-length'],
+    ['1.', 'not-a-length'],
+    ['+', 'not-a-length'],
+    ['1 +', 'not-a-length'],
+    ['in', 'not-a-length'],
+    ['2 ft', 'bad-unit'],
+    ["2'", 'bad-unit'],
+    ['30 in + 5 mm + 1', 'bad-unit'],
+    ['201', 'too-large'],
+    ['5081 mm', 'too-large'],
+    ['99999999999999999999999', 'too-large'],
+    ['1 + 1/2 * 3', 'not-a-length'],
+    ['(1)', 'not-a-length'],
+    ['x = 3', 'not-a-length'],
+    ['1 🧵', 'not-a-length'],
+    ['1'.repeat(200), 'not-a-length'],
+  ])('"%s" with code %s and a message', (text, code) => {
+    let caught: unknown;
+    try {
+      parseLength(text, 'in');
+    } catch (e) {
+      caught = e;
+    }
+    expect(caught).toBeInstanceOf(AllowanceError);
+    expect((caught as AllowanceError).code).toBe(code);
+    expect((caught as AllowanceError).message.length).toBeGreaterThan(10);
+  });
+
+  it('explains the decimal comma', () => {
+    expect(() => parseLength('1,5', 'cm')).toThrow(/point/);
+  });
+
+  it('refuses a unit outside in, cm, mm', () => {
+    expect(() => parseLength('1', 'ft' as Unit)).toThrow(AllowanceError);
+  });
+});
+
+const unitArb = fc.constantFrom<Unit>('in', 'cm', 'mm');
+const precisionArb = fc.constantFrom<Precision>(8, 16, 32);
+
+/** Simple forms that take the fast path: whole, decimal, fraction, mixed, with or without a unit. */
+const simpleText = fc
+  .tuple(
+    fc.integer({ min: 0, max: 150 }),
+    fc.integer({ min: 0, max: 63 }),
+    fc.constantFrom(2, 4, 8, 16, 32, 64, 3, 10),
+    fc.constantFrom('', ' in', ' mm', 'cm', '"'),
+    fc.constantFrom('mixed', 'hyphen', 'fraction', 'decimal', 'whole'),
+    fc.boolean(),
+  )
+  .map(([w, n, d, unit, form, neg]) => {
+    const num = n % d;
+    const body =
+      form === 'mixed' && num > 0 ? `${w} ${num}/${d}` :
+      form === 'hyphen' && num > 0 ? `${w}-${num}/${d}` :
+      form === 'fraction' ? `${w * d + num}/${d}` :
+      form === 'decimal' ? `${w}.${n}` : `${w}`;
+    return `${neg ? '-' : ''}${body}${unit}`;
+  });
+
+describe('parseLength laws', () => {
+  it('the fraction.js fast path equals the mathjs path', () => {
+    fc.assert(
+      fc.property(simpleText, unitArb, (text, unit) => {
+        expect(parseExact(text, unit).equals(parseExactWithMathjs(text, unit))).toBe(true);
+      }),
+    );
+  });
+
+  it('a sum typed out equals the sum of its parts', () => {
+    fc.assert(
+      fc.property(simpleText, simpleText, fc.constantFrom(' + ', ' - ', '+', ' − '), unitArb, (a, b, op, unit) => {
+        const pa = parseExact(a, unit);
+        const pb = parseExact(b.replace(/^-/, ''), unit);
+        // Mixed named units are refused unless every part names one; keep to texts that agree
+        const named = [a, b].map((t) => /(in|mm|cm|")$/.exec(t)?.[1] ?? null);
+        fc.pre(named[0] === named[1] || (named[0] !== null && named[1] !== null));
+        const text = `${a}${op}${b.replace(/^-/, '')}`;
+        const expected = op.includes('+') ? pa.add(pb) : pa.sub(pb);
+        fc.pre(expected.abs().compare(5080) <= 0);
+        expect(parseExact(text, unit).equals(expected)).toBe(true);
+      }),
+    );
+  });
+
+  it('parse(format(x)) lies within half a display step of x', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -5000, max: 5000, noNaN: true }), unitArb, precisionArb, (mm, unit, precision) => {
+        const back = parseLength(formatLength(mm, { unit, precision }), unit, precision).mm;
+        const step = unit === 'in' ? 25.4 / precision : 0.5;
+        expect(Math.abs(back - mm)).toBeLessThanOrEqual(step / 2 + 1e-9);
+      }),
+    );
+  });
+
+  it('for any text, parseLength returns a finite Len or throws an AllowanceError with a message', () => {
+    const alphabet = fc.constantFrom(...'0123456789 ./-+−–⁄,½¼¾⅛⅜⅝⅞⅓⁹₁₆ineschmm"e()*xNaIfty'.split(''));
+    const texts = fc.oneof(fc.string({ unit: alphabet, maxLength: 16 }), fc.string({ unit: 'binary', maxLength: 16 }), fc.string());
+    fc.assert(
+      fc.property(texts, unitArb, (text, unit) => {
+        try {
+          const len = parseLength(text, unit);
+          expect(Number.isFinite(len.mm)).toBe(true);
+          expect(Math.abs(len.mm)).toBeLessThanOrEqual(5080);
+          expect(len.text).toMatch(/^-?\d/);
+        } catch (e) {
+          expect(e).toBeInstanceOf(AllowanceError);
+          expect((e as AllowanceError).message).not.toBe('');
+          // Quoted input may say anything; the engine's own words never leak NaN or undefined
+          expect((e as AllowanceError).message.replace(/“[^”]*”/g, '')).not.toMatch(/NaN|undefined|Infinity/);
+        }
+      }),
+      { numRuns: 2000 },
+    );
+  });
+});
