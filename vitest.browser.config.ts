@@ -1,10 +1,11 @@
 import { defineConfig } from 'vitest/config';
 
-// Browser stories: one built server for the whole run (tests/browser/global-setup.ts), driven by
-// playwright-core through Debian's Chromium. Files run one after another: the machine has 2 cores.
+// Browser stories and HTTP tests (role × route matrix, cookies, cross-site, rate limit): one built
+// server for the whole run (tests/browser/global-setup.ts), with the local mail capture; browser
+// stories drive Debian's Chromium. Files run one after another: the machine has 2 cores.
 export default defineConfig({
   test: {
-    include: ['tests/browser/**/*.spec.ts'],
+    include: ['tests/browser/**/*.spec.ts', 'tests/http/**/*.spec.ts'],
     globalSetup: ['tests/browser/global-setup.ts'],
     fileParallelism: false,
     testTimeout: 60_000,

@@ -1,13 +1,14 @@
 // The forms about people and shops, one zod schema each, shared by the islands and the API.
-import { createInsertSchema } from 'drizzle-zod';
+// Plain zod rather than drizzle-zod: these are sign-in forms, not table rows, and the islands
+// must not carry the database schema into the browser.
 import { z } from 'zod';
-import { invitation, organization, user } from '@/db/schema/auth';
 import { ROLES } from './roles';
 
-const person = createInsertSchema(user, {
-  name: (s) => s.trim().min(1, 'Enter your name').max(80, 'Keep the name under 80 characters'),
-  email: () => z.email('Enter an e-mail address like name@example.com').max(200),
-}).pick({ name: true, email: true });
+const email = z.email('Enter an e-mail address like name@example.com').max(200);
+const person = z.object({
+  name: z.string().trim().min(1, 'Enter your name').max(80, 'Keep the name under 80 characters'),
+  email,
+});
 
 /** A new password: long enough to resist guessing. */
 export const newPassword = z
@@ -22,17 +23,12 @@ export const signInInput = person.pick({ email: true }).extend({
 
 /** Sign-up form: a new shop and its first lead. */
 export const shopSignUpInput = person.extend({
-  shopName: createInsertSchema(organization).shape.name.trim().min(2, 'Name the shop').max(80),
+  shopName: z.string().trim().min(2, 'Name the shop').max(80, 'Keep the name under 80 characters'),
   password: newPassword,
 });
 
 /** Invitation form on the staff page. */
-export const inviteInput = createInsertSchema(invitation, {
-  email: () => z.email('Enter an e-mail address like name@example.com').max(200),
-})
-  .pick({ email: true })
-  // The column is nullable for better-auth; an invitation here always names one of the roles.
-  .extend({ role: z.enum(ROLES, 'Choose a role') });
+export const inviteInput = z.object({ email, role: z.enum(ROLES, 'Choose a role') });
 
 /** Role change on the staff page. */
 export const roleChangeInput = inviteInput.pick({ role: true });

@@ -1,7 +1,16 @@
 // better-auth's organization plugin as Cuffwright uses it: a shop is an organisation, its members
 // hold one of the four roles. Kept free of env and database so the schema generator can load it.
 import { organization } from 'better-auth/plugins';
-import { ac, roles } from './roles';
+import { createAccessControl } from 'better-auth/plugins/access';
+import { grants, statements } from './roles';
+
+const ac = createAccessControl(statements);
+const roles = {
+  lead: ac.newRole(grants.lead),
+  tailor: ac.newRole(grants.tailor),
+  apprentice: ac.newRole(grants.apprentice),
+  counter: ac.newRole(grants.counter),
+};
 
 /** What the plugin needs from the app: how to send an invitation. */
 export interface ShopPluginDeps {

@@ -1,11 +1,15 @@
 // The four shop roles and what each may do: the one definition read by the server (API guards,
-// better-auth's organization plugin) and by the islands (what to show).
-import { createAccessControl } from 'better-auth/plugins/access';
-import { defaultStatements } from 'better-auth/plugins/organization/access';
+// better-auth's organization plugin via auth-plugins.ts) and by the islands (what to show).
+// Plain data on purpose: islands import it without pulling better-auth into the browser.
 
 /** Every resource and the actions on it that a role can be granted. */
 export const statements = {
-  ...defaultStatements,
+  // better-auth's organization plugin checks these on its own endpoints.
+  organization: ['update', 'delete'],
+  member: ['create', 'update', 'delete'],
+  invitation: ['create', 'cancel'],
+  team: ['create', 'update', 'delete'],
+  ac: ['create', 'read', 'update', 'delete'],
   staff: ['read', 'invite', 'change-role', 'remove'],
   settings: ['update'],
   prices: ['read', 'update'],
@@ -19,15 +23,13 @@ export const statements = {
   outbox: ['read'],
 } as const;
 
-/** better-auth's access controller built from the statements. */
-export const ac = createAccessControl(statements);
-
 /** A resource name. */
 export type Resource = keyof typeof statements;
 /** A permission request: one resource and one action on it. */
 export type Permission = { [R in Resource]: [R, (typeof statements)[R][number]] }[Resource];
 
-const grants = {
+/** What each role is granted. */
+export const grants = {
   lead: {
     organization: ['update'],
     member: ['create', 'update', 'delete'],
@@ -81,14 +83,6 @@ export const ROLE_LABELS: Record<Role, { name: string; blurb: string }> = {
   tailor: { name: 'Tailor', blurb: 'Customers, tickets, fitting measurements, plans, own presets.' },
   apprentice: { name: 'Apprentice', blurb: 'Works the queue: reads tickets, prints cut sheets, moves jobs along.' },
   counter: { name: 'Counter', blurb: 'Customers, intake, pickup and notices; reads plans.' },
-};
-
-/** The better-auth role objects, one per shop role. */
-export const roles = {
-  lead: ac.newRole(grants.lead),
-  tailor: ac.newRole(grants.tailor),
-  apprentice: ac.newRole(grants.apprentice),
-  counter: ac.newRole(grants.counter),
 };
 
 /** True when the string names a shop role. */

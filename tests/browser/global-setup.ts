@@ -1,18 +1,20 @@
 // Builds the app once into .test-dist/ and serves it on a free loopback port with a fresh data
-// folder; every browser story reaches it through inject('baseURL').
+// folder (the demo shop is seeded on first start) and the local mail capture; every browser story
+// and HTTP test reaches it through inject('baseURL'), and reads captured mail in inject('mailDir').
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createServer } from 'node:net';
 import type { TestProject } from 'vitest/node';
-// @ts-expect-error plain ESM script without types
 import { buildIfNeeded } from '../../scripts/build-if-needed.mjs';
+import { startMailCapture } from '../../scripts/mail-capture.mjs';
 
 declare module 'vitest' {
   export interface ProvidedContext {
     baseURL: string;
     dataDir: string;
+    mailDir: string;
   }
 }
 
@@ -49,15 +51,28 @@ export default async function setup(project: TestProject) {
   const port = await freePort();
   dataDir = mkdtempSync(join(tmpdir(), 'cuffwright-browser-'));
   const baseURL = `http://localhost:${port}`;
+  const mailDir = join(dataDir, 'mail');
+  const capture = await startMailCapture({ dir: mailDir, port: 0, quiet: true });
   server = spawn('node', ['.test-dist/server/entry.mjs'], {
-    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir, BETTER_AUTH_URL: baseURL },
+    env: {
+      ...process.env,
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      DATA_DIR: dataDir,
+      BETTER_AUTH_URL: baseURL,
+      SMTP_HOST: '127.0.0.1',
+      SMTP_PORT: String(capture.port),
+      MAIL_CAPTURE_DIR: mailDir,
+    },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   await waitFor(`${baseURL}/`, 60_000);
   project.provide('baseURL', baseURL);
   project.provide('dataDir', dataDir);
+  project.provide('mailDir', mailDir);
   return async () => {
     server?.kill('SIGTERM');
+    await capture.close();
     await new Promise((r) => setTimeout(r, 300));
     rmSync(dataDir, { recursive: true, force: true });
   };

@@ -1,0 +1,55 @@
+// E-mail through SMTP to the local capture: invitations and password reset, end to end over HTTP.
+import { describe, expect, it } from 'vitest';
+import { call, cookieFrom, DEMO, freshEmail, newShop, signIn } from './client';
+import { firstLink, waitForMail } from './mail';
+
+describe('invitation by e-mail', () => {
+  it('reaches the invitee, and its link lets them join with the invited role', async () => {
+    const lead = await signIn(DEMO.lead);
+    const email = freshEmail('mailed-tailor');
+    expect((await call('POST', '/api/staff', { cookie: lead, body: { email, role: 'tailor' } })).status).toBe(201);
+    const mail = await waitForMail(email);
+    expect(mail.subject).toContain('Pinmark & Hem');
+    const link = new URL(firstLink(mail));
+    expect(link.pathname).toMatch(/^\/invite\/\w+/);
+    const page = await call('GET', link.pathname);
+    expect(page.status).toBe(200);
+    expect(page.body).toContain('Join Pinmark &amp; Hem');
+    const id = link.pathname.split('/').pop();
+    const joined = await call('POST', `/api/invitations/${id}/accept`, { body: { name: 'Mailed Tailor', password: 'a-long-password' } });
+    expect(joined.status).toBe(200);
+    const me = await call('GET', '/api/me', { cookie: cookieFrom(joined.headers) });
+    expect(me.body).toMatchObject({ email, role: 'tailor', shop: { name: 'Pinmark & Hem' } });
+    // The link works once.
+    expect((await call('GET', `/api/invitations/${id}`)).status).toBe(404);
+    // The lead's outbox shows it; another shop's lead does not see it.
+    const outbox = await call('GET', '/api/outbox', { cookie: lead });
+    expect(outbox.body.some((m: { to: string[] }) => m.to.includes(email))).toBe(true);
+    const other = await newShop('Outbox Other');
+    const theirs = await call('GET', '/api/outbox', { cookie: other.cookie });
+    expect(theirs.body.some((m: { to: string[] }) => m.to.includes(email))).toBe(false);
+  });
+});
+
+describe('password reset by e-mail', () => {
+  it('sends a link that sets a new password, which then signs in (and the old one does not)', async () => {
+    const shop = await newShop('Reset Hems');
+    expect((await call('POST', '/api/auth/request-password-reset', { body: { email: shop.email, redirectTo: '/reset' } })).status).toBe(200);
+    const mail = await waitForMail(shop.email);
+    expect(mail.subject).toMatch(/Reset your Cuffwright password/);
+    const link = new URL(firstLink(mail));
+    const hop = await call('GET', link.pathname + link.search);
+    expect(hop.status).toBe(302);
+    const target = new URL(hop.headers.get('location')!, link);
+    expect(target.pathname).toBe('/reset');
+    const token = target.searchParams.get('token');
+    expect(token).toBeTruthy();
+    expect((await call('GET', target.pathname + target.search)).status).toBe(200);
+    const reset = await call('POST', '/api/auth/reset-password', { body: { newPassword: 'a-brand-new-password', token } });
+    expect(reset.status).toBe(200);
+    expect(await signIn(shop.email, 'a-brand-new-password')).toContain('better-auth.session_token=');
+    expect((await call('POST', '/api/auth/sign-in/email', { body: { email: shop.email, password: 'a-long-password' } })).status).toBe(401);
+    // The token is used up.
+    expect((await call('POST', '/api/auth/reset-password', { body: { newPassword: 'yet-another-password', token } })).status).toBe(400);
+  });
+});

@@ -1,0 +1,251 @@
+// The role × route matrix: every API route file × method × (signed out, each role, a member of
+// another shop), with the exact status expected and a check that no other shop's data appears.
+// A route file or method missing from MATRIX fails the first test; a route that forgets its
+// permission check fails its row (a signed-out or unprivileged caller gets through).
+import { readdirSync, readFileSync } from 'node:fs';
+import { join, relative, sep } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { call, DEMO, freshEmail, newShop, signIn, type Answer } from './client';
+
+const ACTORS = ['signedOut', 'lead', 'tailor', 'apprentice', 'counter', 'other'] as const;
+type Actor = (typeof ACTORS)[number];
+type Expect = Record<Actor, number>;
+type Request = { path: string; body?: unknown };
+interface Case {
+  /** Builds this actor's request (fresh fixtures where the call changes data). */
+  request: (actor: Actor) => Promise<Request> | Request;
+  expect: Expect;
+  /** Extra checks on a successful answer. */
+  check?: (answer: Answer, actor: Actor) => void;
+}
+type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE' | 'ALL';
+
+const API_DIR = join(process.cwd(), 'src', 'pages', 'api');
+
+/** Route key of a file: its path under src/pages/api without extension or trailing /index. */
+function routeKey(file: string): string {
+  return relative(API_DIR, file).split(sep).join('/').replace(/\.(ts|js|mjs)$/, '').replace(/(^|\/)index$/, '');
+}
+
+function routeFiles(dir = API_DIR): string[] {
+  return readdirSync(dir, { withFileTypes: true }).flatMap((e) =>
+    e.isDirectory() ? routeFiles(join(dir, e.name)) : /\.(ts|js|mjs)$/.test(e.name) ? [join(dir, e.name)] : [],
+  );
+}
+
+function exportedMethods(file: string): Method[] {
+  const src = readFileSync(file, 'utf8');
+  const found = [...src.matchAll(/export\s+(?:const|async\s+function|function)\s+(GET|POST|PUT|PATCH|DELETE|ALL)\b/g)];
+  return [...new Set(found.map((m) => m[1] as Method))].sort();
+}
+
+const all = (status: number): Expect => ({ signedOut: status, lead: status, tailor: status, apprentice: status, counter: status, other: status });
+const signedIn = (status: number, overrides: Partial<Expect> = {}): Expect => ({ ...all(status), signedOut: 401, ...overrides });
+
+// Filled in beforeAll.
+const cookies = {} as Record<Actor, string | undefined>;
+let shopA = '';
+let shopB = '';
+let aCustomerId = '';
+let apprenticeUserId = '';
+const markersOfA: string[] = [];
+const markersOfB: string[] = [];
+
+async function freshTicket(): Promise<string> {
+  const t = await call('POST', '/api/tickets', { cookie: cookies.lead, body: { note: 'matrix fixture' } });
+  const moved = await call('PATCH', `/api/tickets/${t.body.id}`, { cookie: cookies.lead, body: { status: 'queued' } });
+  expect(moved.status).toBe(200);
+  return t.body.id;
+}
+
+async function freshInvitation(): Promise<{ id: string; email: string }> {
+  const email = freshEmail('invitee');
+  const r = await call('POST', '/api/staff', { cookie: cookies.lead, body: { email, role: 'counter' } });
+  expect(r.status).toBe(201);
+  return { id: r.body.id, email };
+}
+
+async function freshMember(): Promise<string> {
+  const { id, email } = await freshInvitation();
+  const ok = await call('POST', `/api/invitations/${id}/accept`, { body: { name: 'Fixture Person', password: 'a-long-password' } });
+  expect(ok.status).toBe(200);
+  const staff = await call('GET', '/api/staff', { cookie: cookies.lead });
+  return staff.body.members.find((m: { email: string }) => m.email === email).id;
+}
+
+function ownShop(actor: Actor): string {
+  return actor === 'other' ? shopB : shopA;
+}
+
+/** Every route file (key) and method, with what each caller must get. */
+const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partial<Record<Method, Case>>> = {
+  // The public calculator's routes (another team's): no sign-in by design.
+  plan: 'public: calculator',
+  'plan/sheet': 'public: calculator',
+  'auth/[...all]': 'auth: better-auth',
+  me: {
+    GET: {
+      request: () => ({ path: '/api/me' }),
+      expect: signedIn(200),
+      check: (a, actor) => expect(a.body.shop.id).toBe(ownShop(actor)),
+    },
+  },
+  shops: {
+    POST: {
+      // Public by design: sign-up opens a new shop for anyone.
+      request: () => ({ path: '/api/shops', body: { shopName: 'Matrix Hems', name: 'New Lead', email: freshEmail('signup'), password: 'a-long-password' } }),
+      expect: all(201),
+      check: (a) => expect([shopA, shopB]).not.toContain(a.body.shopId),
+    },
+  },
+  staff: {
+    GET: {
+      request: () => ({ path: '/api/staff' }),
+      expect: signedIn(403, { lead: 200, other: 200 }),
+      check: (a, actor) => expect(a.body.members.length).toBeGreaterThan(actor === 'other' ? 0 : 3),
+    },
+    POST: {
+      request: () => ({ path: '/api/staff', body: { email: freshEmail('invite'), role: 'tailor' } }),
+      expect: signedIn(403, { lead: 201, other: 201 }),
+    },
+  },
+  'staff/[memberId]': {
+    PATCH: {
+      request: async () => ({ path: `/api/staff/${await freshMember()}`, body: { role: 'tailor' } }),
+      expect: signedIn(403, { lead: 200, other: 404 }),
+    },
+    DELETE: {
+      request: async () => ({ path: `/api/staff/${await freshMember()}` }),
+      expect: signedIn(403, { lead: 200, other: 404 }),
+    },
+  },
+  'invitations/[id]': {
+    GET: {
+      // Public by design: the id from the e-mail is the secret.
+      request: async () => ({ path: `/api/invitations/${(await freshInvitation()).id}` }),
+      expect: all(200),
+      check: (a) => expect(a.body.role).toBe('counter'),
+    },
+  },
+  'invitations/[id]/accept': {
+    POST: {
+      // Signed out, the form creates the invitee's account; signed in as someone else is refused.
+      request: async () => ({ path: `/api/invitations/${(await freshInvitation()).id}/accept`, body: { name: 'New Counter', password: 'a-long-password' } }),
+      expect: { ...all(409), signedOut: 200 },
+    },
+  },
+  customers: {
+    GET: {
+      request: () => ({ path: '/api/customers' }),
+      expect: signedIn(200, { apprentice: 403 }),
+      check: (a, actor) => {
+        if (actor !== 'other') expect(a.body.length).toBeGreaterThan(0);
+        for (const c of a.body) expect(c.shopId).toBe(ownShop(actor));
+      },
+    },
+    POST: {
+      request: () => ({ path: '/api/customers', body: { name: 'Matrix Customer' } }),
+      expect: signedIn(201, { apprentice: 403 }),
+      check: (a, actor) => expect(a.body.shopId).toBe(ownShop(actor)),
+    },
+  },
+  tickets: {
+    GET: {
+      request: () => ({ path: '/api/tickets' }),
+      expect: signedIn(200),
+      check: (a, actor) => {
+        for (const t of a.body) expect(t.shopId).toBe(ownShop(actor));
+        if (actor === 'apprentice') for (const t of a.body) expect([null, apprenticeUserId]).toContain(t.assigneeId);
+        if (actor === 'lead') expect(a.body.length).toBeGreaterThanOrEqual(6);
+      },
+    },
+    POST: {
+      // The customer is shop A's: the other shop's lead may open tickets, but not on it.
+      request: () => ({ path: '/api/tickets', body: { customerId: aCustomerId, note: 'matrix intake' } }),
+      expect: signedIn(201, { apprentice: 403, other: 422 }),
+      check: (a, actor) => expect(a.body.shopId).toBe(ownShop(actor)),
+    },
+  },
+  'tickets/[id]': {
+    PATCH: {
+      request: async () => ({ path: `/api/tickets/${await freshTicket()}`, body: { status: 'cutting' } }),
+      expect: signedIn(200, { counter: 403, other: 404 }),
+      check: (a) => expect(a.body.status).toBe('cutting'),
+    },
+  },
+  outbox: {
+    GET: {
+      request: () => ({ path: '/api/outbox' }),
+      expect: signedIn(403, { lead: 200, other: 200 }),
+      check: (a, actor) => {
+        if (actor === 'lead') expect(a.body.length).toBeGreaterThan(0);
+      },
+    },
+  },
+};
+
+beforeAll(async () => {
+  for (const role of ['lead', 'tailor', 'apprentice', 'counter'] as const) cookies[role] = await signIn(DEMO[role]);
+  cookies.signedOut = undefined;
+  const b = await newShop('Other Shop Alterations');
+  cookies.other = b.cookie;
+  shopB = b.shopId;
+  shopA = (await call('GET', '/api/me', { cookie: cookies.lead })).body.shop.id;
+  const customers = (await call('GET', '/api/customers', { cookie: cookies.lead })).body as { id: string }[];
+  const tickets = (await call('GET', '/api/tickets', { cookie: cookies.lead })).body as { id: string }[];
+  const staff = (await call('GET', '/api/staff', { cookie: cookies.lead })).body as { members: { id: string; userId: string; email: string; role: string }[] };
+  aCustomerId = customers[0]!.id;
+  apprenticeUserId = staff.members.find((m) => m.role === 'apprentice')!.userId;
+  markersOfA.push(shopA, ...customers.map((c) => c.id), ...tickets.map((t) => t.id), ...staff.members.flatMap((m) => [m.id, m.userId, m.email]));
+  markersOfB.push(shopB, b.email);
+  // Something in the outbox for the lead: an invitation mail to shop A.
+  await freshInvitation();
+});
+
+describe('role × route matrix', () => {
+  it('lists every route file under src/pages/api, with every method it exports', () => {
+    const files = routeFiles();
+    const keys = files.map(routeKey).sort();
+    expect(keys).toEqual(Object.keys(MATRIX).sort());
+    for (const file of files) {
+      const entry = MATRIX[routeKey(file)]!;
+      if (typeof entry === 'string') continue;
+      expect(exportedMethods(file), routeKey(file)).toEqual(Object.keys(entry).sort());
+    }
+  });
+
+  for (const [route, entry] of Object.entries(MATRIX)) {
+    if (typeof entry === 'string') continue;
+    for (const [method, c] of Object.entries(entry) as [Method, Case][]) {
+      for (const actor of ACTORS) {
+        it(`${method} /api/${route} as ${actor} → ${c.expect[actor]}`, async () => {
+          const req = await c.request(actor);
+          const answer = await call(method, req.path, { cookie: cookies[actor], body: req.body });
+          expect(answer.status, JSON.stringify(answer.body)).toBe(c.expect[actor]);
+          const text = JSON.stringify(answer.body);
+          const foreign = actor === 'signedOut' ? [...markersOfA, ...markersOfB] : actor === 'other' ? markersOfA : markersOfB;
+          for (const marker of foreign) expect(text.includes(marker), `${marker} leaked`).toBe(false);
+          if (answer.status < 300) c.check?.(answer, actor);
+          else expect(typeof answer.body.error).toBe('string');
+        });
+      }
+    }
+  }
+
+  const publicRoutes = Object.entries(MATRIX).filter(([, e]) => typeof e === 'string' && e.startsWith('public:'));
+  for (const [route] of publicRoutes) {
+    it(`POST /api/${route} stays public: a signed-out caller is not turned away`, async () => {
+      const answer = await call('POST', `/api/${route}`, { body: {} });
+      expect([401, 403, 302]).not.toContain(answer.status);
+      expect(answer.status).toBeLessThan(500);
+    });
+  }
+
+  it('better-auth /api/auth/* knows each caller: no session signed out, the right person signed in', async () => {
+    expect((await call('GET', '/api/auth/get-session')).body).toBeNull();
+    for (const role of ['lead', 'tailor', 'apprentice', 'counter'] as const) {
+      const answer = await call('GET', '/api/auth/get-session', { cookie: cookies[role] });
+      expect(answer.body.user.email).toBe(DEMO[role]);
+    }
+  });
+});
