@@ -6,6 +6,8 @@ export default getViteConfig({
   test: {
     include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
     exclude: ['tests/browser/**', 'node_modules/**'],
+    // Migrated PGlite snapshot for the database tests (tests/db/test-db.ts).
+    globalSetup: ['tests/db/global-setup.ts'],
     testTimeout: 30_000,
     hookTimeout: 60_000,
   },

@@ -1,0 +1,22 @@
+// Shared fixtures for service tests: shops, people and actors made straight in the database.
+import { randomUUID } from 'node:crypto';
+import { db } from '@/db';
+import { member, organization, user } from '@/db/schema';
+import type { Actor } from '@/lib/api';
+import type { Role } from '@/lib/roles';
+
+/** A new shop with one member per given role; returns an actor for each. */
+export async function makeShop(name: string, roles: Role[] = ['lead', 'tailor', 'apprentice', 'counter']) {
+  const shopId = randomUUID();
+  await db.insert(organization).values({ id: shopId, name, slug: `${name.toLowerCase().replace(/\W+/g, '-')}-${shopId.slice(0, 6)}`, createdAt: new Date() });
+  const actors = {} as Record<Role, Actor>;
+  for (const role of roles) {
+    const userId = randomUUID();
+    const email = `${role}-${shopId.slice(0, 8)}@example.com`;
+    await db.insert(user).values({ id: userId, name: `${role} of ${name}`, email, emailVerified: false, createdAt: new Date(), updatedAt: new Date() });
+    const memberId = randomUUID();
+    await db.insert(member).values({ id: memberId, organizationId: shopId, userId, role, createdAt: new Date() });
+    actors[role] = { userId, userName: `${role} of ${name}`, email, memberId, role, shopId, shopName: name };
+  }
+  return { shopId, ...actors };
+}
