@@ -30,6 +30,14 @@ async function invite(shopId: string, inviterId: string, email: string, role: st
   return id;
 }
 
+describe('the database under test', () => {
+  it('is the PostgreSQL server when TEST_DATABASE_URL is set, PGlite otherwise', async () => {
+    expect(handle.kind).toBe(process.env.TEST_DATABASE_URL ? 'postgres' : 'pglite');
+    const [row] = (await db.execute(sql`select version() as v`)).rows as { v: string }[];
+    expect(row!.v).toMatch(/PostgreSQL/);
+  });
+});
+
 describe('demo seed', () => {
   it('fills an empty database once: one person per role, customers, tickets at several steps', async () => {
     expect(await seedDemoIfEmpty()).toBe(true);
