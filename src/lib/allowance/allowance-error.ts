@@ -15,7 +15,8 @@ export type AllowanceErrorCode =
 /** A refused input: a code for programs, a human message, and the input field when there is one. */
 export class AllowanceError extends Error {
   readonly code: AllowanceErrorCode;
-  readonly field?: string;
+  // Declared only, so an error without a field has no `field` key at all.
+  declare readonly field?: string;
 
   constructor(code: AllowanceErrorCode, message: string, field?: string) {
     super(message);

@@ -1,0 +1,62 @@
+import Fraction from 'fraction.js';
+import { describe, expect, it } from 'vitest';
+import { creaseLanding } from '@/lib/allowance/crease-landing';
+import { cuffLinePositions } from '@/lib/allowance/cuff-lines';
+import { lenMaker } from '@/lib/allowance/len';
+
+const inch = (n: number, d = 1) => new Fraction(n, d).mul(new Fraction(127, 5));
+
+function land(creaseIn: Fraction, unit: 'in' | 'mm' = 'in') {
+  // A 1½ in cuff, three equal sections: lines at 0, 1½, 3 and 4½ in (TRADE.md: Seam2Seam 2014)
+  const d = inch(3, 2);
+  return creaseLanding(creaseIn, {
+    cuffDepth: d,
+    lines: cuffLinePositions(d, d, new Fraction(0)),
+    onFoldWithin: unit === 'in' ? inch(1, 16) : new Fraction(3, 2),
+    len: lenMaker(unit, 16),
+  });
+}
+
+// Heights follow the fold plan in TRADE.md ("The cuff, as a fold plan"); numbers are its arithmetic.
+describe('creaseLanding', () => {
+  it.each([
+    [inch(-2), 'leg-visible', '2 in', true],
+    [inch(-3, 2), 'leg-visible', '1 1/2 in', true],
+    [inch(-1), 'behind-cuff', '1 in', false],
+    [inch(3, 4), 'behind-cuff', '3/4 in', false],
+    [inch(2), 'cuff-face', '1 in', true],
+    [inch(5, 2), 'cuff-face', '1/2 in', true],
+    [inch(15, 4), 'inside', '3/4 in', false],
+    [inch(5), 'cut-away', '2 in', false],
+    [inch(1, 32), 'on-fold', '0 in', false],
+    [inch(-1, 16), 'on-fold', '0 in', false],
+    [inch(25, 16), 'on-fold', '1 1/2 in', false],
+    [inch(47, 16), 'on-fold', '0 in', false],
+    [inch(3, 32), 'behind-cuff', '3/32 in', false],
+  ])('an old crease %s mm below the mark: %s at %s', (crease, place, height, visible) => {
+    const l = land(crease);
+    expect(l.place).toBe(place);
+    expect(l.visible).toBe(visible);
+    if (height.includes('/32')) expect(l.heightAboveEdge.mm).toBeCloseTo(crease.valueOf(), 9);
+    else expect(l.heightAboveEdge.text).toBe(height);
+    expect(l.message.length).toBeGreaterThan(20);
+  });
+
+  it('tells the tailor to press the crease out when it shows, with the height in the plan unit', () => {
+    const l = land(inch(-2));
+    expect(l.message).toContain('2 in above the finished edge');
+    expect(l.message).toMatch(/[Pp]ress or steam/);
+    expect(land(inch(2)).message).toMatch(/face of the cuff/);
+  });
+
+  it('takes a crease within 1.5 mm of a fold in metric plans, not 2 mm (our tolerance, 1/16 in ≈ 1.6 mm)', () => {
+    expect(land(new Fraction(3, 2), 'mm').place).toBe('on-fold');
+    expect(land(new Fraction(2), 'mm').place).toBe('behind-cuff');
+  });
+
+  it('names the fold it falls on', () => {
+    expect(land(inch(3, 2)).message).toContain('cuff top');
+    expect(land(inch(3)).message).toContain('inner fold');
+    expect(land(new Fraction(0)).message).toContain('finished edge');
+  });
+});
