@@ -59,7 +59,9 @@ let dataDir = '';
 
 /** Starts the built server for the browser stories. */
 export default async function setup(project: TestProject) {
-  buildIfNeeded('.test-dist');
+  // TEST_DIST_DIR lets two test runs on one machine build side by side without clashing.
+  const outDir = process.env.TEST_DIST_DIR || '.test-dist';
+  buildIfNeeded(outDir);
   const port = await freePort();
   dataDir = mkdtempSync(join(tmpdir(), 'cuffwright-browser-'));
   const baseURL = `http://localhost:${port}`;
@@ -67,7 +69,7 @@ export default async function setup(project: TestProject) {
   // With TEST_DATABASE_URL (scripts/with-postgres.sh) the server runs on a fresh PostgreSQL database.
   const databaseUrl = process.env.TEST_DATABASE_URL ? await freshServerDatabase(process.env.TEST_DATABASE_URL) : undefined;
   const capture = await startMailCapture({ dir: mailDir, port: 0, quiet: true });
-  server = spawn('node', ['.test-dist/server/entry.mjs'], {
+  server = spawn('node', [`${outDir}/server/entry.mjs`], {
     env: {
       ...process.env,
       PORT: String(port),
