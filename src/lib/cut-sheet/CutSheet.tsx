@@ -1,0 +1,210 @@
+// One garment's cut sheet as a react-pdf page. Plain data in; no database, no network.
+import { Document, Page, Path, Svg, Text, View, type DocumentProps } from '@react-pdf/renderer';
+import type { ReactElement } from 'react';
+import { ChalkGuide } from './ChalkGuide';
+import { guideStrips } from './chalk-guide';
+import { sheetContent, type SheetContent, type SheetLegGroup } from './content';
+import { LegDrawing } from './LegDrawing';
+import { legGeometry } from './leg-geometry';
+import { qrPath } from './qr';
+import { GUIDE_COLUMN, INK, s } from './styles';
+import type { Len } from '@/lib/allowance/types';
+import type { CutSheetData, PageSize } from './types';
+
+/** Page size in points, Letter and A4. */
+export const PAGE_PT: Record<PageSize, { width: number; height: number }> = {
+  LETTER: { width: 612, height: 792 },
+  A4: { width: 595.28, height: 841.89 },
+};
+const PADDING = 28;
+// Header, calibration squares and notes, strip captions: what the strip cannot use.
+const GUIDE_OVERHEAD = 258;
+const DRAWING_W = 160;
+const MAIN_GUTTER = 12;
+const DRAWING_H = 136;
+
+function Header({ c, link }: { c: SheetContent; link?: string }) {
+  const qr = link ? qrPath(link) : null;
+  return (
+    <View style={s.header}>
+      <View style={{ flexShrink: 1 }}>
+        <Text style={s.kicker}>
+          CUT SHEET<Text style={{ fontWeight: 400, letterSpacing: 0 }}>{`      ${c.unitNote} Distances are measured down from the pin mark.`}</Text>
+        </Text>
+        <Text style={s.title}>{c.title}</Text>
+        {c.meta.length > 0 && <Text style={s.meta}>{c.meta.join('   ·   ')}</Text>}
+      </View>
+      {qr ? (
+        <View style={{ alignItems: 'center', marginLeft: 12 }}>
+          <Svg width={52} height={52} viewBox={`-2 -2 ${qr.size + 4} ${qr.size + 4}`}>
+            <Path d={qr.d} fill={INK.text} />
+          </Svg>
+          <Text style={{ fontSize: 6.5, color: INK.soft }}>Garment page</Text>
+        </View>
+      ) : (
+        <View style={{ width: 170, marginLeft: 12, paddingTop: 18 }}>
+          <Text style={{ fontSize: 8, color: INK.soft }}>Customer / ticket</Text>
+          <View style={{ borderBottomWidth: 0.75, borderBottomColor: INK.text, height: 18 }} />
+        </View>
+      )}
+    </View>
+  );
+}
+
+function LineRow({ n, name, below, above }: { n: number; name: string; below: string; above: string }) {
+  return (
+    <View style={{ flexDirection: 'row', alignItems: 'flex-end', borderBottomWidth: 0.5, borderBottomColor: INK.rule, paddingVertical: 1.5 }}>
+      <Text style={[s.lineName, { flexGrow: 1 }]}>
+        <Text style={s.lineNo}>{n} </Text>
+        {name}
+      </Text>
+      <Text style={[s.value, { width: 78, textAlign: 'right' }]}>{below}</Text>
+      <Text style={[s.value, { width: 74, textAlign: 'right' }]}>{above}</Text>
+    </View>
+  );
+}
+
+// A cutting line below the raw edge cannot be cut: say so in words, not with a minus sign.
+function rawEdge(len: Len | null): { value: string; caption: string } {
+  if (!len) return { value: '—', caption: 'raw edge not measured' };
+  if (len.mm < 0) return { value: len.text.replace(/^-/, ''), caption: 'PAST the raw edge: short' };
+  return { value: len.text, caption: 'above the raw edge' };
+}
+
+function LinesTable({ g }: { g: SheetLegGroup }) {
+  return (
+    <View>
+      <View style={{ flexDirection: 'row', borderBottomWidth: 0.75, borderBottomColor: INK.text, paddingBottom: 1 }}>
+        <Text style={[s.th, { flexGrow: 1 }]}>CHALK LINE</Text>
+        <Text style={[s.th, { width: 78, textAlign: 'right' }]}>BELOW PIN MARK</Text>
+        <Text style={[s.th, { width: 74, textAlign: 'right' }]}>ABOVE RAW EDGE</Text>
+      </View>
+      {g.lines
+        .filter((l) => !l.cut)
+        .map((l) => (
+          <LineRow key={l.n} n={l.n} name={l.name} below={l.belowMark.text} above={l.aboveRawEdge?.text ?? '—'} />
+        ))}
+    </View>
+  );
+}
+
+// The one line that cannot be undone: biggest type, boxed, in cut red and labelled for greyscale.
+function CutLine({ g }: { g: SheetLegGroup }) {
+  const cut = g.lines.find((l) => l.cut);
+  if (!cut) return null;
+  const raw = rawEdge(cut.aboveRawEdge);
+  const caption = [s.cutCaption, { width: 50, marginLeft: 4, marginBottom: 3 }];
+  const value = [s.cutValue, { flexShrink: 0 }];
+  return (
+    <View style={{ borderWidth: 2, borderColor: INK.cut, marginTop: 4, paddingHorizontal: 6, paddingVertical: 2, flexDirection: 'row' }}>
+      <View style={{ marginRight: 6, marginTop: 6 }}>
+        <Text style={s.badge}>CUT</Text>
+        <Text style={[s.th, { marginTop: 1 }]}>{`LINE ${cut.n}`}</Text>
+      </View>
+      <View style={{ flexShrink: 1 }}>
+        <View style={{ flexDirection: 'row', alignItems: 'flex-end', flexWrap: 'wrap' }}>
+          <Text style={value}>{cut.belowMark.text}</Text>
+          <Text style={caption}>below the pin mark</Text>
+        </View>
+        <View style={{ flexDirection: 'row', alignItems: 'flex-end', flexWrap: 'wrap' }}>
+          <Text style={value}>{raw.value}</Text>
+          <Text style={caption}>{raw.caption}</Text>
+        </View>
+      </View>
+    </View>
+  );
+}
+
+function LegBlock({ g, width }: { g: SheetLegGroup; width: number }) {
+  const geo = legGeometry(g.leg, DRAWING_W, DRAWING_H);
+  return (
+    <View style={{ marginBottom: 6 }} wrap={false}>
+      <View style={{ flexDirection: 'row', alignItems: 'baseline', marginBottom: 2 }}>
+        <Text style={[s.legLabel, { width: 70 }]}>{g.label.toUpperCase()}</Text>
+        <Text style={s.legTitle}>{g.title}</Text>
+      </View>
+      <View style={{ flexDirection: 'row', alignItems: 'flex-start' }}>
+        <View style={{ width: width - DRAWING_W - 8, marginRight: 8 }}>
+          <LinesTable g={g} />
+          <CutLine g={g} />
+        </View>
+        <LegDrawing g={geo} />
+      </View>
+      <Text style={[s.small, { marginTop: 4, fontWeight: g.cloth.ok === false ? 800 : 700, color: g.cloth.ok === false ? INK.cut : INK.text }]}>
+        {g.cloth.text}
+      </Text>
+      {g.cloth.options.length > 0 && <Text style={[s.small, { marginLeft: 10 }]}>{`Instead: ${g.cloth.options.join(' ')}`}</Text>}
+      {g.slopeNote && <Text style={[s.small, { marginTop: 2 }]}>{g.slopeNote}</Text>}
+      {g.taper && <Text style={[s.small, s.strong, { marginTop: 2 }]}>{g.taper.summary}</Text>}
+      {g.taper?.work && <Text style={[s.small, { marginTop: 1 }]}>{g.taper.work}</Text>}
+      {g.crease && <Text style={[s.small, { marginTop: 2 }]}>{g.crease}</Text>}
+      {g.warnings.map((w, i) => (
+        <Text key={i} style={[s.small, { marginTop: 2, color: INK.warn, fontWeight: 700 }]}>
+          {`Check: ${w}`}
+        </Text>
+      ))}
+    </View>
+  );
+}
+
+function Steps({ c }: { c: SheetContent }) {
+  return (
+    <View wrap={false}>
+      <Text style={s.h2}>AT THE BENCH, IN THIS ORDER</Text>
+      {c.steps.map((block, b) => (
+        <View key={b}>
+          {block.heading && <Text style={[s.small, s.strong, { marginTop: 2 }]}>{block.heading}</Text>}
+          {block.items.map((t, i) => (
+            <View key={i} style={s.step}>
+              <Text style={s.stepNo}>{i + 1}.</Text>
+              <Text style={s.stepText}>{t}</Text>
+            </View>
+          ))}
+        </View>
+      ))}
+      <Text style={s.h2}>TAKE CARE</Text>
+      {c.cautions.map((t, i) => (
+        <Text key={i} style={{ fontSize: 7.5, marginBottom: 1 }}>
+          {`•  ${t}`}
+        </Text>
+      ))}
+    </View>
+  );
+}
+
+/** One page for one garment: header, legs with drawings, bench steps, cautions and chalk guide. */
+export function CutSheetPage({ data }: { data: CutSheetData }) {
+  const size = data.pageSize ?? 'LETTER';
+  const c = sheetContent(data);
+  const page = PAGE_PT[size];
+  const strips = guideStrips(c.groups, data.unit, page.height - 2 * PADDING - GUIDE_OVERHEAD);
+  const mainWidth = page.width - 2 * PADDING - GUIDE_COLUMN;
+  return (
+    <Page size={size} style={s.page}>
+      <Header c={c} link={data.link} />
+      <View style={s.body}>
+        <View style={[s.main, { width: mainWidth }]}>
+          {c.groups.map((g, i) => (
+            <LegBlock key={i} g={g} width={mainWidth - MAIN_GUTTER} />
+          ))}
+          <Steps c={c} />
+        </View>
+        <View style={[s.side, { width: GUIDE_COLUMN }]}>
+          <ChalkGuide strips={strips} notes={c.guideNote} />
+        </View>
+      </View>
+    </Page>
+  );
+}
+
+/** A document of cut sheets, one page each. */
+export function cutSheetDocument(sheets: CutSheetData[]): ReactElement<DocumentProps> {
+  const first = sheets[0];
+  return (
+    <Document title={first && sheets.length === 1 ? `Cut sheet ${first.ticket ?? 'unsaved'}` : 'Cut sheets'} creator="Cuffwright" producer="Cuffwright">
+      {sheets.map((d, i) => (
+        <CutSheetPage key={i} data={d} />
+      ))}
+    </Document>
+  );
+}

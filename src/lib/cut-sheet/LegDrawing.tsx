@@ -1,0 +1,51 @@
+// The leg bottom seen flat, to scale, with its chalk lines numbered as in the table beside it.
+import { Path, Polygon, Line, Svg, Text, View } from '@react-pdf/renderer';
+import type { LegGeometry } from './leg-geometry';
+import { INK } from './styles';
+
+const pts = (p: [number, number][]) => p.map(([x, y]) => `${x.toFixed(2)},${y.toFixed(2)}`).join(' ');
+
+/** Draws a leg geometry: outline, cut-away strip, chalk lines, seam lines, labels and scale. */
+export function LegDrawing({ g }: { g: LegGeometry }) {
+  const [tl, bl, br, tr] = g.outline;
+  const labelX = Math.max(tr![0], br![0]) + 4;
+  // A wavy break at the top says the leg carries on upwards.
+  const breakPath = `M${tl![0]} ${tl![1]} Q ${(tl![0] + tr![0]) / 4} ${tl![1] - 3} ${(tl![0] + tr![0]) / 2} ${tl![1]} T ${tr![0]} ${tr![1]}`;
+  return (
+    <View style={{ width: g.width, height: g.height, position: 'relative', flexShrink: 0 }}>
+      <Svg width={g.width} height={g.height}>
+        <Polygon points={pts(g.outline)} fill={INK.fill} stroke="none" />
+        {g.cutAway.length > 0 && <Polygon points={pts(g.cutAway)} fill="#d9d6cf" stroke="none" />}
+        <Path d={`M${tl![0]} ${tl![1]} L${bl![0]} ${bl![1]} M${tr![0]} ${tr![1]} L${br![0]} ${br![1]}`} stroke={INK.text} strokeWidth={1} />
+        <Path d={breakPath} stroke={INK.soft} strokeWidth={0.6} fill="none" />
+        <Line x1={bl![0]} y1={bl![1]} x2={br![0]} y2={br![1]} stroke={INK.soft} strokeWidth={0.8} strokeDasharray={g.rawEdgeKnown ? undefined : '2 2'} />
+        {g.seams.map((sm, i) => (
+          <Line key={i} x1={sm.x1} y1={sm.y1} x2={sm.x2} y2={sm.y2} stroke={INK.text} strokeWidth={0.8} strokeDasharray="3 2" />
+        ))}
+        {g.lines.map((l, i) => (
+          <Line
+            key={i}
+            x1={tl![0] - 3}
+            x2={labelX - 2}
+            y1={l.y}
+            y2={l.y}
+            stroke={l.cut ? INK.cut : INK.text}
+            strokeWidth={l.cut ? 2.2 : 0.9}
+            strokeDasharray={l.cut ? '5 2' : undefined}
+          />
+        ))}
+      </Svg>
+      {g.lines.map((l, i) => (
+        <Text
+          key={i}
+          style={{ position: 'absolute', left: labelX, top: l.y - 5, fontSize: 8, fontWeight: 800, color: l.cut ? INK.cut : INK.text }}
+        >
+          {l.label}
+        </Text>
+      ))}
+      <Text style={{ position: 'absolute', left: 0, top: g.height - 11, fontSize: 6.5, color: INK.soft }}>
+        {g.caption}
+      </Text>
+    </View>
+  );
+}

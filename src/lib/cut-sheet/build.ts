@@ -1,0 +1,68 @@
+// Engine inputs → a cut sheet's data. The public calculator and a saved garment both come through
+// here. Relative imports keep it runnable by plain vite-node in bench/ (no @ alias there).
+import { checkTaper, planCuff, planHem, validateCuffInput, validateHemInput, validateTaperInput } from '../allowance/index';
+import type { CuffInput, HemInput, LengthInput } from '../allowance/types';
+import type { CutSheetData, LegSheet, Side } from './types';
+
+/** Leg widths for a taper check; the cuff's own depth, sections and unit are taken from the cuff. */
+export interface TaperWidths {
+  widthAtEdge: LengthInput;
+  widthAbove: LengthInput;
+  heightAbove: LengthInput;
+  seamAllowance?: LengthInput;
+  tolerance?: LengthInput;
+}
+
+/** What one leg should become: a cuff (maybe on a tapered leg) or a plain hem. */
+export type LegOrder =
+  | { side: Side; finish: 'cuff'; input: CuffInput; taper?: TaperWidths }
+  | { side: Side; finish: 'hem'; input: HemInput };
+
+function taperInput(cuff: CuffInput, widths: TaperWidths) {
+  const { unit, precision, cuffDepth, hemSection, clothThickness } = cuff;
+  return { unit, precision, cuffDepth, hemSection, clothThickness, ...widths };
+}
+
+/** Every length the engine would refuse, keyed by field path as the request spells it ("right.taper.widthAbove"). */
+export function refusedFields(legs: LegOrder[]): Record<string, string> {
+  const fields: Record<string, string> = {};
+  const add = (prefix: string, errors: { field?: string; message: string }[]) => {
+    for (const e of errors) {
+      const key = prefix + (e.field ?? '');
+      if (!(key in fields)) fields[key] = e.message;
+    }
+  };
+  for (const leg of legs) {
+    const prefix = leg.side === 'right' ? 'right.' : '';
+    if (leg.finish === 'hem') {
+      add(prefix, validateHemInput(leg.input));
+      continue;
+    }
+    add(prefix, validateCuffInput(leg.input));
+    if (leg.taper) add(`${prefix}taper.`, validateTaperInput(taperInput(leg.input, leg.taper)));
+  }
+  return fields;
+}
+
+/** Plans one leg with the engine (throws the engine's AllowanceError on input it refuses). */
+export function planLeg(order: LegOrder): LegSheet {
+  if (order.finish === 'hem') return { side: order.side, finish: 'hem', input: order.input, plan: planHem(order.input) };
+  const plan = planCuff(order.input);
+  const leg: LegSheet = { side: order.side, finish: 'cuff', input: order.input, plan };
+  if (order.taper) {
+    const input = taperInput(order.input, order.taper);
+    leg.taper = { input, plan: checkTaper(input) };
+  }
+  return leg;
+}
+
+/** Everything on a sheet but the legs: who, what, when, and where the QR code points. */
+export type SheetHeader = Omit<CutSheetData, 'legs' | 'unit' | 'precision'>;
+
+/** Plans the legs and assembles the sheet; the first leg's unit and precision are the sheet's. */
+export function buildCutSheet(header: SheetHeader, legs: LegOrder[]): CutSheetData {
+  const planned = legs.map(planLeg);
+  const first = planned[0];
+  if (!first) throw new Error('A cut sheet needs at least one leg.');
+  return { ...header, unit: first.plan.unit, precision: first.plan.precision, legs: planned };
+}

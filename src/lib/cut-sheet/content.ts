@@ -1,0 +1,277 @@
+// The words and figures of a cut sheet, worked out once from the data. The PDF lays them out;
+// keeping them here lets the tests and any other rendering read the same sheet.
+import type { CreaseLanding, CuffLineName, Len, PlanWarning, Unit, WarningCode } from '@/lib/allowance/types';
+import type { CutSheetData, LegSheet } from './types';
+
+/** One chalk line as printed: number, name, distances. */
+export interface SheetLine {
+  n: number;
+  name: string;
+  cut: boolean;
+  belowMark: Len;
+  aboveRawEdge: Len | null;
+}
+
+/** One row of the taper table. */
+export interface SheetTaperRow {
+  n: number;
+  name: string;
+  width: string;
+  work: string;
+}
+
+/** A block of the sheet for one leg, or for both when they are alike. */
+export interface SheetLegGroup {
+  label: string;
+  finish: 'cuff' | 'hem';
+  title: string;
+  lines: SheetLine[];
+  cloth: { ok: boolean | null; text: string; options: string[] };
+  slopeNote: string | null;
+  /** summary, then the seam work line by line in one sentence (null when none is needed) */
+  taper: { summary: string; work: string | null; rows: SheetTaperRow[] } | null;
+  crease: string | null;
+  warnings: string[];
+  leg: LegSheet;
+}
+
+/** The whole sheet in words. */
+export interface SheetContent {
+  unsaved: boolean;
+  title: string;
+  meta: string[];
+  unitNote: string;
+  groups: SheetLegGroup[];
+  steps: { heading: string | null; items: string[] }[];
+  cautions: string[];
+  guideNote: string[];
+}
+
+const LINE_NAMES: Record<CuffLineName, string> = {
+  'finished-edge': 'Finished edge',
+  'cuff-top': 'Cuff top',
+  'inner-fold': 'Inner fold',
+  cut: 'Cutting line',
+};
+
+/** Header shown instead of shop and ticket when the plan was never saved. */
+export const UNSAVED_TITLE = 'Unsaved plan from the calculator';
+
+/** Stitch lengths printed on the sheet, in mm (TRADE.md, common practice). */
+export const STITCH = { long: 'about 4 mm', short: 'about 2 mm', standard: 'about 2.5–3 mm' } as const;
+
+// Tack placement (TRADE.md: about 1/8 to 3/16 in below the cuff top, about 1/8 in wide).
+const TACK: Record<Unit, { below: string; wide: string }> = {
+  in: { below: '1/8 to 3/16 in', wide: '1/8 in' },
+  mm: { below: '3 to 5 mm', wide: '3 mm' },
+  cm: { below: '0.3 to 0.5 cm', wide: '0.3 cm' },
+};
+
+/** The cautions every sheet carries (TRADE.md, "Cautions to show"). */
+export const CAUTIONS = [
+  'Hot iron and steam burn: unplug the iron to fill or empty it.',
+  'Blades and seam rippers: cut away from your body; close or cover them after use; dispose of blades safely.',
+  'Needles and pins: keep count; broken ones go in the sharps jar.',
+  "Your shop's own safety practice and local rules come first.",
+] as const;
+
+const UNIT_NOTE: Record<Unit, string> = { in: 'inches', cm: 'centimetres', mm: 'millimetres' };
+
+/** Drops a leading minus sign: the sheet says "take in" rather than "-1/8 in". */
+function unsigned(len: Len): string {
+  return len.text.replace(/^[-−]\s*/, '');
+}
+
+function belowOrAbove(len: Len): string {
+  return len.mm < 0 ? `${unsigned(len)} above` : `${len.text} below`;
+}
+
+function formatDue(iso: string): string {
+  const d = new Date(`${iso}T12:00:00Z`);
+  if (Number.isNaN(d.getTime())) return iso;
+  return d.toLocaleDateString('en-GB', { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+}
+
+function sameWork(a: LegSheet, b: LegSheet): boolean {
+  const key = (l: LegSheet) =>
+    JSON.stringify([l.finish, l.plan, l.finish === 'cuff' ? l.taper?.plan : null, creaseOf(l)]);
+  return key(a) === key(b);
+}
+
+function creaseOf(leg: LegSheet): CreaseLanding | undefined {
+  return leg.crease ?? (leg.finish === 'cuff' ? leg.plan.creaseLands : undefined);
+}
+
+function clothCheck(leg: LegSheet): SheetLegGroup['cloth'] {
+  const p = leg.plan;
+  const has = p.lines[0]?.aboveRawEdge ?? null;
+  if (p.enough === null || has === null) {
+    return { ok: null, text: `Cloth not measured: this plan needs ${p.required.text} below the pin mark. Measure before cutting.`, options: [] };
+  }
+  if (p.enough) {
+    const spare = p.spare ? `, ${p.spare.text} to spare` : '';
+    return { ok: true, text: `Cloth check: needs ${p.required.text} below the pin mark, has ${has.text}${spare}.`, options: [] };
+  }
+  const short = p.shortBy ? ` Short by ${p.shortBy.text}.` : '';
+  const options: string[] = [];
+  if (p.kind === 'cuff' && p.alternatives) {
+    const alt = p.alternatives;
+    if (alt.deepestCuff) options.push(`A shallower cuff: ${alt.deepestCuff.text} deep fits.`);
+    options.push(`A plain hem needs ${alt.plainHem.required.text}: ${alt.plainHem.fits ? 'fits' : 'does not fit'}.`);
+    options.push(`A faced cuff needs ${alt.facedCuff.required.text}: ${alt.facedCuff.fits ? 'fits' : 'does not fit'}.`);
+  }
+  return {
+    ok: false,
+    text: `NOT ENOUGH CLOTH. Do not cut. Needs ${p.required.text} below the pin mark, has ${has.text}.${short}`,
+    options,
+  };
+}
+
+function taperOf(leg: LegSheet): SheetLegGroup['taper'] {
+  if (leg.finish !== 'cuff' || !leg.taper) return null;
+  const t = leg.taper.plan;
+  const rows = t.lines.map((l) => ({
+    n: l.n,
+    name: LINE_NAMES[l.name],
+    width: l.width.text,
+    work:
+      l.change.mm === 0
+        ? 'as it is'
+        : `${l.change.mm > 0 ? 'let out' : 'take in'} ${unsigned(l.perSeam)} at each seam (${unsigned(l.perSide)} each side)`,
+  }));
+  let summary = `Taper: keep the cuff-top width, ${t.targetWidth.text} flat, straight down to the cutting line.`;
+  if (t.withinTolerance) summary = `Taper within tolerance: no seam work needed (cuff top ${t.targetWidth.text} flat).`;
+  else if (t.feasible === false) summary += ' The seam allowance is not enough for all of it: see the warnings.';
+  const moves = t.lines
+    .filter((l) => l.change.mm !== 0)
+    .map((l) => `${l.change.mm > 0 ? 'let out' : 'take in'} ${unsigned(l.perSeam)} at line ${l.n}`);
+  const work = t.withinTolerance || moves.length === 0 ? null : `At each leg seam ${moves.join(', ')} (half of it each side of the seam).`;
+  return { summary, work, rows };
+}
+
+function slopeNote(leg: LegSheet): string | null {
+  if (leg.finish !== 'hem' || leg.plan.slope.mm === 0) return null;
+  const [edge, cut] = leg.plan.lines;
+  if (!edge || !cut) return null;
+  return `Sloped hem: ${leg.plan.slope.text} lower at the back. At the front chalk the finished edge ${belowOrAbove(edge.frontBelowMark)} and the cutting line ${belowOrAbove(cut.frontBelowMark)} the back pin mark.`;
+}
+
+// The cloth check and the taper note already say these in the sheet's own layout.
+const SAID_ELSEWHERE: ReadonlySet<WarningCode> = new Set(['not-enough-cloth', 'taper-beyond-tolerance']);
+
+function groupOf(leg: LegSheet, label: string): SheetLegGroup {
+  const p = leg.plan;
+  const lines: SheetLine[] = p.lines.map((l) => ({
+    n: l.n,
+    name: LINE_NAMES[l.name],
+    cut: l.name === 'cut',
+    belowMark: l.belowMark,
+    aboveRawEdge: l.aboveRawEdge,
+  }));
+  const title = p.kind === 'cuff' ? `Cuff, ${p.cuffDepth.text} deep` : `Plain hem, ${p.hemAllowance.text} allowance`;
+  const crease = creaseOf(leg);
+  const warnings: PlanWarning[] = [...p.warnings, ...(leg.finish === 'cuff' && leg.taper ? leg.taper.plan.warnings : [])];
+  return {
+    label,
+    finish: leg.finish,
+    title,
+    lines,
+    cloth: clothCheck(leg),
+    slopeNote: slopeNote(leg),
+    taper: taperOf(leg),
+    crease: crease ? (/^the old crease/i.test(crease.message) ? crease.message : `Old crease: ${crease.message}`) : null,
+    warnings: [
+      ...new Set(
+        warnings
+          .filter((w) => !SAID_ELSEWHERE.has(w.code) && !(crease && w.code === 'old-crease-visible'))
+          .map((w) => w.message),
+      ),
+    ],
+    leg,
+  };
+}
+
+/** Bench steps for a cuff, in the order they are done; taperStep is the seam work, if any. */
+export function cuffSteps(unit: Unit, turnUnder: string, taperStep: string | null): string[] {
+  const tack = TACK[unit];
+  return [
+    "Chalk the four lines level round the leg with dry tailor's chalk, not wax (wax leaves a mark under the iron). Measure each from the pin mark.",
+    ...(taperStep ? [taperStep] : []),
+    'Cut on line 4, the cutting line.',
+    'Fold the bottom to the inside at line 2. Press the folds at the seams first, then front and back.',
+    `Turn under ${turnUnder} at the raw edge and stitch it with a long stitch (${STITCH.long}).`,
+    'Turn the bottom up to the outside at line 1: lines 1 and 3 meet at the bottom, line 2 becomes the cuff top.',
+    'Press with a cloth on the outside, so the cloth takes no shine; wool takes steam.',
+    `Tack at the inseam and the outseam, ${tack.below} below the cuff top and about ${tack.wide} wide: short stitch (${STITCH.short}), back-stitched. Leave the top edge free.`,
+  ];
+}
+
+/** Bench steps for a plain hem, in the order they are done. */
+export function hemSteps(turnUnder: string, sloped: boolean): string[] {
+  return [
+    `Chalk the two lines ${sloped ? 'round the leg, sloping down to the back,' : 'level round the leg'} with dry tailor's chalk, not wax (wax leaves a mark under the iron).`,
+    'Cut on line 2, the cutting line.',
+    `Turn under ${turnUnder} at the raw edge and stitch it with a standard stitch (${STITCH.standard}).`,
+    'Fold up at line 1. Press the fold at the seams first, then front and back.',
+    'Blind-stitch the turned edge to the leg, catching only a thread of the outside.',
+    'Press with a cloth on the outside, so the cloth takes no shine; wool takes steam.',
+    `Tack at the inseam and the outseam: short stitch (${STITCH.short}), back-stitched.`,
+  ];
+}
+
+// One figure for both legs, or each leg's own when they differ.
+function perLeg(groups: SheetLegGroup[], text: (g: SheetLegGroup) => string): string {
+  const all = groups.map(text);
+  if (new Set(all).size === 1) return all[0]!;
+  return groups.map((g, i) => `${all[i]} (${g.label.replace(' leg', '').toLowerCase()})`).join(', ');
+}
+
+function stepsOf(groups: SheetLegGroup[]): SheetContent['steps'] {
+  const finishes = new Set(groups.map((g) => g.finish));
+  if (finishes.size > 1) {
+    return groups.map((g) => ({ heading: g.label, items: stepsOf([g])[0]!.items }));
+  }
+  const turnUnder = perLeg(groups, (g) => g.leg.plan.turnUnder.text);
+  const first = groups[0]!.leg;
+  if (first.finish === 'hem') {
+    return [{ heading: null, items: hemSteps(turnUnder, groups.some((g) => g.leg.finish === 'hem' && g.leg.plan.slope.mm !== 0)) }];
+  }
+  const tapered = groups.filter((g) => g.leg.finish === 'cuff' && g.leg.taper && !g.leg.taper.plan.withinTolerance);
+  const seamWork = 'Re-chalk both leg seams straight down from the cuff top to the cutting line, as in the taper note.';
+  const taperStep =
+    tapered.length === 0 ? null : tapered.length === groups.length ? seamWork : `${tapered.map((g) => g.label).join(', ')}: ${seamWork[0]!.toLowerCase()}${seamWork.slice(1)}`;
+  return [{ heading: null, items: cuffSteps(first.plan.unit, turnUnder, taperStep) }];
+}
+
+/** Works out every word and figure of one sheet. */
+export function sheetContent(data: CutSheetData): SheetContent {
+  const unsaved = !data.link;
+  const [first, second] = data.legs;
+  if (!first) throw new Error('A cut sheet needs at least one leg.');
+  const groups =
+    !second || sameWork(first, second)
+      ? [groupOf(first, 'Both legs')]
+      : data.legs.map((l) => groupOf(l, l.side === 'left' ? 'Left leg' : 'Right leg'));
+
+  const meta: string[] = [];
+  if (data.ticket) meta.push(`Ticket ${data.ticket}`);
+  if (data.garment) meta.push(data.garment);
+  if (data.due) meta.push(`Due ${formatDue(data.due)}`);
+  if (data.assignee) meta.push(`For ${data.assignee}`);
+
+  const precision = data.unit === 'in' ? `, to 1/${data.precision}` : '';
+  return {
+    unsaved,
+    title: unsaved ? UNSAVED_TITLE : (data.shop ?? 'Cut sheet'),
+    meta,
+    unitNote: `All lengths in ${UNIT_NOTE[data.unit]}${precision}.`,
+    groups,
+    steps: stepsOf(groups),
+    cautions: [...CAUTIONS],
+    guideNote: [
+      'Print at 100 % (actual size), not "fit to page".',
+      'Check before use: the squares must measure 1 in and 25 mm.',
+      'Lay the top of the strip on the pin mark and chalk at each line.',
+    ],
+  };
+}

@@ -1,0 +1,45 @@
+// Sizes and colours of the sheet, in points (72 to the inch). Distances are read at arm's length.
+import { StyleSheet } from '@react-pdf/renderer';
+import { FAMILY } from './fonts';
+
+/** Points per millimetre: react-pdf draws in points, 72 to the inch of 25.4 mm. */
+export const PT_PER_MM = 72 / 25.4;
+
+/** Ink colours: the cut red is dark enough to print as near-black in greyscale. */
+export const INK = { text: '#111111', soft: '#555555', rule: '#999999', cut: '#b3121b', fill: '#f1efe9', warn: '#8a4b00' } as const;
+
+/** Width of the right-hand column that holds the chalk guide and calibration squares. */
+export const GUIDE_COLUMN = 162;
+
+// Shaping is most of the render time. Plain Latin text needs none of Inter's substitutions
+// (contextual alternates, ligatures, mark positioning); kerning stays on.
+const SHAPING = { rvrn: false, ccmp: false, locl: false, rlig: false, mark: false, mkmk: false, calt: false, clig: false, liga: false, rclt: false, curs: false };
+
+/** The sheet's text styles. */
+export const s = StyleSheet.create({
+  page: { fontFamily: FAMILY, fontSize: 8.5, color: INK.text, padding: 28, fontFeatureSettings: SHAPING },
+  header: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'flex-start', borderBottomWidth: 2, borderBottomColor: INK.text, paddingBottom: 6, marginBottom: 8 },
+  kicker: { fontSize: 8, fontWeight: 700, letterSpacing: 1.5, color: INK.soft },
+  title: { fontSize: 17, fontWeight: 800 },
+  ticket: { fontSize: 20, fontWeight: 800 },
+  meta: { fontSize: 11, fontWeight: 700, marginTop: 2 },
+  note: { fontSize: 8.5, color: INK.soft },
+  body: { flexDirection: 'row' },
+  main: { paddingRight: 12 },
+  side: { width: GUIDE_COLUMN, borderLeftWidth: 0.75, borderLeftColor: INK.rule, paddingLeft: 8 },
+  legTitle: { fontSize: 12.5, fontWeight: 800 },
+  legLabel: { fontSize: 8, fontWeight: 700, letterSpacing: 1.2, color: INK.soft },
+  th: { fontSize: 7.5, fontWeight: 700, color: INK.soft },
+  lineName: { fontSize: 10, fontWeight: 400 },
+  lineNo: { fontSize: 10, fontWeight: 800 },
+  value: { fontSize: 14, fontWeight: 700 },
+  cutValue: { fontSize: 22, fontWeight: 800, color: INK.cut },
+  cutCaption: { fontSize: 8.5, fontWeight: 700, color: INK.cut },
+  badge: { fontSize: 10, fontWeight: 800, color: '#ffffff', backgroundColor: INK.text, paddingHorizontal: 4, paddingTop: 1.5, letterSpacing: 1 },
+  small: { fontSize: 8.5 },
+  strong: { fontWeight: 700 },
+  h2: { fontSize: 9.5, fontWeight: 800, letterSpacing: 0.5, marginTop: 5, marginBottom: 2 },
+  step: { flexDirection: 'row', marginBottom: 0.8 },
+  stepNo: { width: 13, fontWeight: 800 },
+  stepText: { flex: 1 },
+});

@@ -1,0 +1,65 @@
+// What a cut sheet is made from: plain data, no database. A saved garment and the public
+// calculator both build one of these and hand it to renderCutSheet.
+import type {
+  CreaseLanding,
+  CuffInput,
+  CuffPlan,
+  HemInput,
+  HemPlan,
+  Precision,
+  TaperInput,
+  TaperPlan,
+  Unit,
+} from '@/lib/allowance/types';
+
+/** The paper a sheet is printed on. */
+export type PageSize = 'LETTER' | 'A4';
+
+/** Which leg of the trouser. */
+export type Side = 'left' | 'right';
+
+/** One leg finished with a cuff: the engine's input, its plan and, on a tapered leg, the taper check. */
+export interface CuffLeg {
+  side: Side;
+  finish: 'cuff';
+  input: CuffInput;
+  plan: CuffPlan;
+  taper?: { input: TaperInput; plan: TaperPlan };
+  /** where an old hem crease lands; defaults to plan.creaseLands */
+  crease?: CreaseLanding;
+}
+
+/** One leg finished with a plain hem. */
+export interface HemLeg {
+  side: Side;
+  finish: 'hem';
+  input: HemInput;
+  plan: HemPlan;
+  /** where an old hem crease lands, if the shop noted it */
+  crease?: CreaseLanding;
+}
+
+/** One leg of the garment. */
+export type LegSheet = CuffLeg | HemLeg;
+
+/** Everything one cut sheet shows: one garment, one page. */
+export interface CutSheetData {
+  /** shop name; null on an unsaved calculator plan */
+  shop: string | null;
+  /** ticket number as the shop writes it ("1042", "A-17"); null when unsaved */
+  ticket: string | null;
+  /** garment description ("Navy wool flannel trousers") */
+  garment: string | null;
+  /** due date, ISO yyyy-mm-dd */
+  due: string | null;
+  /** who does the work */
+  assignee: string | null;
+  unit: Unit;
+  precision: Precision;
+  /** one or two legs, left before right; a single leg stands for both */
+  legs: LegSheet[];
+  /** the garment's page in the app, for the QR code; absent on an unsaved plan */
+  link?: string;
+  /** default LETTER */
+  pageSize?: PageSize;
+}

@@ -1,0 +1,174 @@
+// The cut sheet as the apprentice reads it: numbers, units, steps, cautions, pages, fonts.
+import { beforeAll, describe, expect, it } from 'vitest';
+import { renderCutSheet, renderCutSheets } from '@/lib/cut-sheet/render';
+import { UNSAVED_TITLE } from '@/lib/cut-sheet/content';
+import { buildCutSheet } from '@/lib/cut-sheet/build';
+import { flatText, fonts, layoutText, pageInfo, pdfFile, words } from './poppler';
+import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet, UNSAVED } from './sheets';
+
+describe('a 1 1/2 in cuff with 5 in of cloth, inches', () => {
+  let file = '';
+  beforeAll(async () => {
+    file = pdfFile(await renderCutSheet(sheet([cuffInch])));
+  });
+
+  it('cuts at 4 1/2 in below the mark and 1/2 in above the raw edge', () => {
+    // TRADE.md: cut three cuff depths below the mark: 1 1/2 in cuff → 4 1/2 in; 5 in − 4 1/2 in = 1/2 in.
+    const text = layoutText(file);
+    expect(text).toMatch(/4 1\/2 in\s+below the pin/);
+    expect(text).toMatch(/\n\s*1\/2 in\s+above the/);
+  });
+
+  it('puts the folds at 1 1/2 and 3 in below the mark, 3 1/2 and 2 in above the raw edge', () => {
+    // TRADE.md: folds at 1 1/2 and 3 in from the cut edge for a 1 1/2 in cuff.
+    const text = layoutText(file);
+    expect(text).toMatch(/1 Finished edge\s+0 in\s+5 in/);
+    expect(text).toMatch(/2 Cuff top\s+1 1\/2 in\s+3 1\/2 in/);
+    expect(text).toMatch(/3 Inner fold\s+3 in\s+2 in/);
+  });
+
+  it('checks the cloth: needs 4 1/2 in, has 5 in, 1/2 in to spare', () => {
+    expect(flatText(file)).toContain('needs 4 1/2 in below the pin mark, has 5 in, 1/2 in to spare');
+  });
+
+  it('prints the cutting line at 20 pt or more and the other lines at 14 pt or more', () => {
+    // A word box is about 1.2 × the font size tall in Inter (ascender + descender).
+    const w = words(file);
+    const tallest = (t: string) => Math.max(...w.filter((x) => x.text === t).map((x) => x.yMax - x.yMin));
+    expect(tallest('4')).toBeGreaterThanOrEqual(20 * 1.15);
+    for (const t of ['5', '3', '2']) expect(tallest(t)).toBeGreaterThanOrEqual(14 * 1.15);
+    expect(w.some((x) => x.text === 'CUT')).toBe(true);
+  });
+
+  it('lists the bench steps in order, with stitch lengths in mm', () => {
+    // TRADE.md common practice: dry chalk not wax; press at the seams first; turn-under with a long
+    // stitch (about 4 mm); press with a cloth; tack a little below the cuff top, short stitch (about 2 mm).
+    const text = flatText(file);
+    const order = [
+      "dry tailor's chalk, not wax",
+      'Cut on line 4',
+      'Press the folds at the seams first, then front and back',
+      'Turn under 1/2 in at the raw edge and stitch it with a long stitch (about 4 mm)',
+      'Turn the bottom up to the outside at line 1',
+      'Press with a cloth',
+      '1/8 to 3/16 in below the cuff top',
+      'short stitch (about 2 mm), back-stitched',
+    ].map((p) => text.indexOf(p));
+    expect(order.every((i) => i >= 0)).toBe(true);
+    expect([...order].sort((a, b) => a - b)).toEqual(order);
+  });
+
+  it('shows the usual cautions and defers to the shop', () => {
+    // TRADE.md, "Cautions to show".
+    const text = flatText(file);
+    expect(text).toContain('unplug the iron to fill or empty it');
+    expect(text).toContain('cut away from your body');
+    expect(text).toContain('close or cover them after use');
+    expect(text).toMatch(/keep count.*sharps jar/);
+    expect(text).toContain('dispose of blades safely');
+    expect(text).toContain("shop's own safety practice and local rules");
+  });
+
+  it('shows the shop, ticket, garment, due date and assignee, and how to check the print', () => {
+    const text = flatText(file);
+    for (const t of ['Hartley & Sons Alterations', 'Ticket 1042', 'Navy wool flannel trousers', 'Due Fri, 14 Mar 2025', 'For Sam Ortiz'])
+      expect(text).toContain(t);
+    expect(text).toContain('Print at 100 %');
+    expect(text).toContain('the squares must measure 1 in and 25 mm');
+    expect(text).not.toContain(UNSAVED_TITLE);
+  });
+
+  it('embeds every font it uses (Inter), nothing left to the printer', () => {
+    const list = fonts(file);
+    expect(list.length).toBeGreaterThan(0);
+    for (const f of list) {
+      expect(f.name).toMatch(/Inter/);
+      expect(f.embedded).toBe(true);
+    }
+  });
+});
+
+describe('a 40 mm cuff with 150 mm of cloth, metric, unsaved', () => {
+  let file = '';
+  beforeAll(async () => {
+    file = pdfFile(await renderCutSheet(buildCutSheet(UNSAVED, [cuffMetric])));
+  });
+
+  it('cuts at 120 mm below the mark and 30 mm above the raw edge', () => {
+    // TRADE.md: three cuff depths: 3 × 40 mm = 120 mm; 150 − 120 = 30 mm.
+    const text = layoutText(file);
+    expect(text).toMatch(/120 mm\s+below the pin/);
+    expect(text).toMatch(/\n\s*30 mm\s+above the/);
+    expect(text).toMatch(/2 Cuff top\s+40 mm\s+110 mm/);
+    expect(text).toMatch(/3 Inner fold\s+80 mm\s+70 mm/);
+  });
+
+  it('gives metric tack and turn-under figures and mm stitch lengths', () => {
+    const text = flatText(file);
+    // Engine default turn-under 12 mm metric (types.ts); tack 3 to 5 mm ≈ 1/8 to 3/16 in (TRADE.md).
+    expect(text).toContain('Turn under 12 mm');
+    expect(text).toContain('3 to 5 mm below the cuff top');
+    expect(text).toContain('long stitch (about 4 mm)');
+    // Inches appear only on the calibration square and in its note.
+    expect(text.match(/[\d/]+ in\b/g)).toEqual(['1 in', '1 in']);
+  });
+
+  it('says it is an unsaved plan from the calculator, with no shop or ticket', () => {
+    const text = flatText(file);
+    expect(text).toContain(UNSAVED_TITLE);
+    expect(text).not.toContain('Ticket');
+    expect(text).not.toContain('Garment page');
+  });
+});
+
+describe('a plain hem sloped 1/2 in', () => {
+  it('gives two lines, the front heights and the hem steps', async () => {
+    // TRADE.md: plain hem about 1/2 in lower at the back; allowance 1 1/4 to 2 in (engine default 1 1/2 in).
+    const file = pdfFile(await renderCutSheet(sheet([hemSloped])));
+    const text = flatText(file);
+    expect(layoutText(file)).toMatch(/1 1\/2 in\s+below the pin/);
+    expect(text).toContain('Plain hem, 1 1/2 in allowance');
+    expect(text).toContain('finished edge 1/2 in above and the cutting line 1 in below the back pin mark');
+    expect(text).toContain('standard stitch (about 2.5–3 mm)');
+    expect(text).not.toContain('Inner fold');
+  });
+});
+
+describe('page sizes and batches', () => {
+  for (const [size, w, h] of [
+    ['LETTER', 612, 792],
+    ['A4', 595.28, 841.89],
+  ] as const) {
+    it(`fits the fullest sheet on one ${size} page`, async () => {
+      const file = pdfFile(await renderCutSheet({ ...sheet(busyLegs), pageSize: size }));
+      const info = pageInfo(file);
+      expect(info).toEqual({ pages: 1, width: w, height: h });
+      const text = flatText(file);
+      expect(text).toContain('LEFT LEG');
+      expect(text).toContain('RIGHT LEG');
+      expect(text).toContain('NOT ENOUGH CLOTH');
+      expect(text).toContain('AT THE BENCH');
+      expect(text).toContain("local rules come first");
+    });
+  }
+
+  it('fits a plain single-leg sheet on one page of each size', async () => {
+    for (const pageSize of ['LETTER', 'A4'] as const) {
+      for (const legs of [[cuffInch], [cuffMetric], [hemSloped]]) {
+        const file = pdfFile(await renderCutSheet({ ...sheet(legs), pageSize }));
+        expect(pageInfo(file).pages).toBe(1);
+      }
+    }
+  });
+
+  it('prints a batch of 3 as 3 pages, one garment each, in order', async () => {
+    const list = ['2001', '2002', '2003'].map((ticket, i) => sheet([[cuffInch, cuffMetric, hemSloped][i]!], { ticket }));
+    const file = pdfFile(await renderCutSheets(list));
+    expect(pageInfo(file).pages).toBe(3);
+    expect(flatText(file, 1)).toContain('Ticket 2001');
+    expect(flatText(file, 2)).toContain('Ticket 2002');
+    expect(flatText(file, 2)).toContain('120 mm');
+    expect(flatText(file, 3)).toContain('Ticket 2003');
+    expect(flatText(file, 3)).toContain('Plain hem');
+  });
+});
