@@ -1,0 +1,98 @@
+// POST /api/plan/sheet called as Astro calls it: a real Request in, a PDF or a 400 out.
+import type { APIContext } from 'astro';
+import { describe, expect, it } from 'vitest';
+import { POST } from '@/pages/api/plan/sheet';
+import { flatText, layoutText, pageInfo, pdfFile } from '../../../lib/cut-sheet/poppler';
+
+async function post(body: unknown): Promise<Response> {
+  const request = new Request('http://localhost/api/plan/sheet', {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: typeof body === 'string' ? body : JSON.stringify(body),
+  });
+  return POST({ request } as unknown as APIContext);
+}
+
+async function pdfOf(res: Response): Promise<string> {
+  return pdfFile(new Uint8Array(await res.arrayBuffer()));
+}
+
+describe('POST /api/plan/sheet', () => {
+  it('answers the calculator plan as an inline PDF with the lines of a 1 1/2 in cuff', async () => {
+    const res = await post({ kind: 'cuff', unit: 'in', precision: 8, cuffDepth: '1 1/2', available: '5' });
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-type')).toBe('application/pdf');
+    expect(res.headers.get('content-disposition')).toMatch(/^inline; filename=".+\.pdf"$/);
+    const file = await pdfOf(res);
+    expect(pageInfo(file)).toEqual({ pages: 1, width: 612, height: 792 });
+    // TRADE.md: cut three cuff depths below the mark, 1 1/2 in cuff → 4 1/2 in; 5 − 4 1/2 = 1/2 in.
+    expect(layoutText(file)).toMatch(/4 1\/2 in\s+below the pin/);
+    expect(flatText(file)).toContain('Unsaved plan from the calculator');
+  });
+
+  it('prints on A4 in millimetres, with a different right leg and a taper', async () => {
+    const res = await post({
+      kind: 'cuff',
+      unit: 'mm',
+      cuffDepth: 40,
+      available: 150,
+      pageSize: 'A4',
+      taper: { widthAtEdge: 190, widthAbove: 215, heightAbove: 150, seamAllowance: 20 },
+      right: { kind: 'cuff', unit: 'mm', cuffDepth: 45, available: 160 },
+    });
+    expect(res.status).toBe(200);
+    const file = await pdfOf(res);
+    expect(pageInfo(file)).toEqual({ pages: 1, width: 595.28, height: 841.89 });
+    const text = flatText(file);
+    // TRADE.md: three cuff depths: 3 × 40 = 120 mm, 3 × 45 = 135 mm.
+    expect(text).toContain('LEFT LEG');
+    expect(text).toContain('RIGHT LEG');
+    expect(layoutText(file)).toMatch(/120 mm\s+below the pin/);
+    expect(layoutText(file)).toMatch(/135 mm\s+below the pin/);
+    expect(text).toContain('Taper');
+  });
+
+  it('prints a plain hem', async () => {
+    const res = await post({ kind: 'hem', unit: 'in', hemAllowance: '1 1/2' });
+    expect(res.status).toBe(200);
+    expect(flatText(await pdfOf(res))).toContain('Plain hem, 1 1/2 in allowance');
+  });
+
+  it('answers 400 with a message per field for a missing cuff depth', async () => {
+    const res = await post({ kind: 'cuff', unit: 'in' });
+    expect(res.status).toBe(400);
+    const body = await res.json();
+    expect(body.fields.cuffDepth).toMatch(/cuff depth/i);
+  });
+
+  it('answers 400 for a length the engine cannot read, on the leg and field at fault', async () => {
+    const res = await post({ kind: 'cuff', unit: 'in', cuffDepth: '1 1/2', right: { kind: 'cuff', unit: 'in', cuffDepth: 'deep' } });
+    expect(res.status).toBe(400);
+    const body = await res.json();
+    expect(Object.keys(body.fields)).toEqual(['right.cuffDepth']);
+    expect(typeof body.error).toBe('string');
+  });
+
+  it('answers 400 for an unreadable taper width', async () => {
+    const res = await post({ kind: 'cuff', unit: 'in', cuffDepth: 1.5, taper: { widthAtEdge: 'wide', widthAbove: 8.5, heightAbove: 6 } });
+    expect(res.status).toBe(400);
+    expect(Object.keys((await res.json()).fields)).toContain('taper.widthAtEdge');
+  });
+
+  it('answers 400 for legs in different units, a bad page size, an unknown kind and broken JSON', async () => {
+    const mixed = await post({ kind: 'cuff', unit: 'in', cuffDepth: 1.5, right: { kind: 'hem', unit: 'mm' } });
+    expect(mixed.status).toBe(400);
+    expect((await mixed.json()).fields['right.unit']).toMatch(/same unit/);
+
+    const paper = await post({ kind: 'hem', unit: 'in', pageSize: 'A3' });
+    expect(paper.status).toBe(400);
+    expect((await paper.json()).fields.pageSize).toMatch(/Letter or A4/);
+
+    const kind = await post({ kind: 'taper', unit: 'in' });
+    expect(kind.status).toBe(400);
+
+    const broken = await post('{"kind":');
+    expect(broken.status).toBe(400);
+    expect((await broken.json()).error).toMatch(/JSON/);
+  });
+});
