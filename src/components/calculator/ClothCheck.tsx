@@ -1,0 +1,59 @@
+import type { CuffPlan, HemPlan } from '@/lib/allowance/types';
+
+interface Props {
+  plan: CuffPlan | HemPlan;
+}
+
+/** Is there cloth enough below the mark? And if not, what still fits. */
+export function ClothCheck({ plan }: Props) {
+  const needs = (
+    <>
+      Needs <span className="measure font-extrabold">{plan.required.text}</span> below the mark.
+    </>
+  );
+  if (plan.enough === null) {
+    return <p className="rounded-md border-2 border-rule bg-card px-4 py-3 text-lg">{needs} Type the cloth below the mark to check it.</p>;
+  }
+  if (plan.enough) {
+    return (
+      <p className="rounded-md border-2 border-ok bg-ok-soft px-4 py-3 text-lg text-ok">
+        <strong className="font-extrabold">Enough cloth.</strong> {needs}
+        {plan.spare && (
+          <>
+            {' '}Spare: <span className="measure font-extrabold">{plan.spare.text}</span>.
+          </>
+        )}
+      </p>
+    );
+  }
+  const alt = plan.kind === 'cuff' ? plan.alternatives : null;
+  return (
+    <div className="rounded-md border-2 border-cut bg-cut-soft px-4 py-3 text-lg text-cut">
+      <p>
+        <strong className="font-extrabold">Short by <span className="measure">{plan.shortBy?.text}</span>.</strong> {needs}
+      </p>
+      {alt && (
+        <>
+          <p className="mt-2 font-semibold text-ink">What still fits:</p>
+          <ul className="ml-5 list-disc text-ink">
+            <li>
+              {alt.deepestCuff ? (
+                <>A cuff of <span className="measure font-extrabold">{alt.deepestCuff.text}</span>, three equal sections.</>
+              ) : (
+                'No cuff of a sensible depth.'
+              )}
+            </li>
+            <li>
+              A plain hem needs <span className="measure font-extrabold">{alt.plainHem.required.text}</span>:{' '}
+              {alt.plainHem.fits ? 'fits.' : 'does not fit.'}
+            </li>
+            <li>
+              A faced cuff needs <span className="measure font-extrabold">{alt.facedCuff.required.text}</span> of own cloth:{' '}
+              {alt.facedCuff.fits ? 'fits.' : 'does not fit.'}
+            </li>
+          </ul>
+        </>
+      )}
+    </div>
+  );
+}

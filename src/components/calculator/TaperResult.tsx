@@ -1,0 +1,46 @@
+import type { TaperPlan } from '@/lib/allowance/types';
+import { LINE_NAMES, seamWork } from './line-names';
+import { TaperDrawing } from './TaperDrawing';
+
+/** The taper check: the width to keep, and the let-out at each chalk line per seam and per side. */
+export function TaperResult({ taper }: { taper: TaperPlan }) {
+  return (
+    <section aria-labelledby="taper-heading" className="flex flex-col gap-3">
+      <h2 id="taper-heading" className="text-xl font-extrabold">Tapered leg</h2>
+      <p className="text-lg">
+        Keep the width at the cuff top, <span className="measure font-extrabold">{taper.targetWidth.text}</span> flat, straight down to the cut.{' '}
+        {taper.withinTolerance ? (
+          <strong className="text-ok">Within tolerance: no seam work needed.</strong>
+        ) : taper.feasible === false ? (
+          <strong className="text-cut">The seam allowance is not enough for this let-out.</strong>
+        ) : null}
+      </p>
+      <table className="w-full border-collapse text-left text-lg">
+        <thead>
+          <tr className="border-b-2 border-ink text-base">
+            <th scope="col" className="py-2 pr-2">Line</th>
+            <th scope="col" className="py-2 pr-2">Width now</th>
+            <th scope="col" className="py-2 pr-2">At each seam</th>
+            <th scope="col" className="py-2">Each side of the seam</th>
+          </tr>
+        </thead>
+        <tbody>
+          {taper.lines.map((l) => (
+            <tr key={l.n} className="border-b border-rule">
+              <th scope="row" className="py-2 pr-2 font-semibold">
+                {l.n} {LINE_NAMES[l.name]}
+              </th>
+              <td className="measure py-2 pr-2">{l.width.text}</td>
+              <td className="py-2 pr-2">
+                <span className="text-muted">{seamWork(l.change.mm)} </span>
+                <span className="measure text-xl font-extrabold">{l.perSeam.text}</span>
+              </td>
+              <td className="measure py-2 text-xl font-semibold">{l.perSide.text}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <TaperDrawing taper={taper} />
+    </section>
+  );
+}
