@@ -44,6 +44,7 @@ describe('a new shop and its first tailor', () => {
     await page.getByRole('button', { name: 'Send the invitation' }).click();
     await page.getByText(`Invitation sent to ${tailorEmail}.`).waitFor();
     await page.getByText(tailorEmail).first().waitFor();
+    await page.screenshot({ path: 'test-results/staff.png', fullPage: true });
 
     await page.getByRole('link', { name: 'Outbox' }).click();
     await page.waitForURL('**/outbox');
@@ -106,6 +107,7 @@ describe('the staff page', () => {
     await page.getByLabel('Password').fill('not-the-password');
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.getByText('That e-mail and password do not match.').waitFor();
+    await page.screenshot({ path: 'test-results/sign-in.png' });
     expect(page.url()).toMatch(/\/sign-in$/);
     await page.context().close();
   });

@@ -15,7 +15,7 @@ type Invite = z.infer<typeof inviteInput>;
 
 function InviteForm() {
   const client = useQueryClient();
-  const { register, handleSubmit, formState, reset } = useForm<Invite>({
+  const { register, handleSubmit, formState, reset, watch } = useForm<Invite>({
     resolver: zodResolver(inviteInput),
     defaultValues: { role: 'tailor' },
   });
@@ -34,13 +34,21 @@ function InviteForm() {
         <label htmlFor="invite-role" className="font-semibold">
           Role
         </label>
-        <select id="invite-role" {...register('role')} className="rounded border-2 border-rule bg-card px-3 py-2 text-lg">
+        <select
+          id="invite-role"
+          {...register('role')}
+          aria-describedby="invite-role-hint"
+          className="w-full rounded border-2 border-rule bg-card px-3 py-2 text-lg"
+        >
           {ROLES.map((r) => (
             <option key={r} value={r}>
-              {ROLE_LABELS[r].name}: {ROLE_LABELS[r].blurb}
+              {ROLE_LABELS[r].name}
             </option>
           ))}
         </select>
+        <p id="invite-role-hint" className="text-sm text-muted">
+          {ROLE_LABELS[watch('role') ?? 'tailor'].blurb}
+        </p>
       </div>
       {send.error && <FormMessage kind="error">{send.error.message}</FormMessage>}
       {send.isSuccess && <FormMessage kind="ok">Invitation sent to {send.data.email}.</FormMessage>}
@@ -68,7 +76,7 @@ function MemberRow({ m, isMe }: { m: StaffMember; isMe: boolean }) {
           {m.name}
           {isMe && ' (you)'}
         </div>
-        <div className="text-muted">{m.email}</div>
+        <div className="break-all text-muted">{m.email}</div>
         {error && <p role="alert" className="font-semibold text-cut">{error.message}</p>}
       </td>
       <td className="py-2 pr-4">
@@ -109,7 +117,7 @@ function MemberRow({ m, isMe }: { m: StaffMember; isMe: boolean }) {
 function StaffManager({ myEmail }: { myEmail: string }) {
   const staff = useQuery({ queryKey: ['staff'], queryFn: () => fetchJson<Staff>('/api/staff') });
   return (
-    <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
+    <div className="grid gap-6 md:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
       <section aria-labelledby="staff-heading">
         <h2 id="staff-heading" className="mb-2 text-xl font-extrabold">
           Staff
@@ -141,7 +149,7 @@ function StaffManager({ myEmail }: { myEmail: string }) {
               <ul className="flex flex-col gap-1">
                 {staff.data.invitations.map((i) => (
                   <li key={i.id}>
-                    {i.email}: {ROLE_LABELS[i.role].name}, until {new Date(i.expiresAt).toLocaleDateString()}
+                    {i.email}: {ROLE_LABELS[i.role].name}, until {new Date(i.expiresAt).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' })}
                   </li>
                 ))}
               </ul>
