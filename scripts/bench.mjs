@@ -5,6 +5,7 @@ import { existsSync } from 'node:fs';
 const runs = [
   ['engine: plans per second', ['node_modules/.bin/vite-node', 'bench/engine.ts']],
   ['pages: JavaScript bytes sent', ['node', 'bench/page-bytes.mjs']],
+  ['cut sheet: react-pdf vs Chromium print', ['node_modules/.bin/vite-node', 'bench/cut-sheet.ts']],
 ];
 let failed = false;
 for (const [name, [cmd, file, ...rest]] of runs) {
