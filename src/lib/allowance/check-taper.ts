@@ -45,17 +45,22 @@ export function readTaperInput(input: TaperInput, r: InputReader): TaperValues {
   };
 }
 
-/** Flat leg width at a height above the finished edge, the taper through the two measurements followed straight on. */
-export function widthAt(v: TaperValues, height: Fraction): Fraction {
-  return v.widthAtEdge.add(v.widthAbove.sub(v.widthAtEdge).mul(height).div(v.heightAbove));
+/** How much the flat width grows per unit of height: the taper through the two measurements, followed straight on below the edge. */
+export function taperSlope(v: TaperValues): Fraction {
+  return v.widthAbove.sub(v.widthAtEdge).div(v.heightAbove);
+}
+
+function isPositive(f: Fraction): boolean {
+  return f.s > 0n && f.n !== 0n;
 }
 
 /** Check a tapered leg under a cuff: the work at each chalk line to keep the cuff-top width straight down. */
 export function checkTaper(input: TaperInput): TaperPlan {
   const v = readTaperInput(input, new InputReader(input, false));
   const len = lenMaker(v.unit, v.precision);
-  const target = widthAt(v, v.cuffDepth);
-  if (target.s < 0n || target.n === 0n) {
+  const slope = taperSlope(v);
+  const target = v.widthAtEdge.add(slope.mul(v.cuffDepth));
+  if (!isPositive(target)) {
     throw new AllowanceError('out-of-range', 'These widths give no leg at the cuff top: check the two widths and the height.', 'widthAbove');
   }
   const positions = linePositionList(cuffLinePositions(v.cuffDepth, v.hemSection, v.clothThickness));
@@ -63,22 +68,25 @@ export function checkTaper(input: TaperInput): TaperPlan {
   let mostPerSide: Fraction | null = null;
   let withinTolerance = true;
   const lines: TaperLine[] = positions.map((below, k) => {
-    const width = widthAt(v, below.neg());
-    if (width.s < 0n || width.n === 0n) {
+    // A line below the mark sits at height −below; the change is what brings it back to the target.
+    const change = k === 0 ? target.sub(v.widthAtEdge) : slope.mul(v.cuffDepth.add(below));
+    const width = target.sub(change);
+    if (!isPositive(width)) {
       throw new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove');
     }
-    const change = target.sub(width);
     const perSide = change.div(2);
-    if (change.abs().compare(worst.abs()) > 0) worst = change;
-    if (change.abs().compare(v.tolerance) > 0) withinTolerance = false;
+    const size = change.abs();
+    if (size.compare(worst.abs()) > 0) worst = change;
+    if (size.compare(v.tolerance) > 0) withinTolerance = false;
     if (mostPerSide === null || perSide.compare(mostPerSide) > 0) mostPerSide = perSide;
+    const changeLen = len(change);
     return {
       n: (k + 1) as TaperLine['n'],
       name: CUFF_LINE_NAMES[k]!,
       belowMark: len(below),
       width: len(width),
-      change: len(change),
-      perSeam: len(change),
+      change: changeLen,
+      perSeam: { ...changeLen },
       perSide: len(perSide),
     };
   });

@@ -1,12 +1,14 @@
 import Fraction from 'fraction.js';
 import type { CuffLinePositions } from './cuff-lines';
-import { type LenMaker, mmNumber } from './len';
-import type { CreaseLanding, CreasePlace } from './types';
+import { compareExact, type LenMaker, mmNumber } from './len';
+import type { CreaseLanding, CreasePlace, Len } from './types';
 
-/** What crease landing needs of a plan. */
+/** What crease landing needs of a plan: exact lengths, with their nearest numbers for quick comparisons. */
 export interface CreaseContext {
   cuffDepth: Fraction;
   lines: CuffLinePositions;
+  /** the lines' mm as numbers, top to bottom */
+  linesMm: readonly number[];
   /** a crease this close to a new fold is taken by the fold */
   onFoldWithin: Fraction;
   len: LenMaker;
@@ -14,59 +16,60 @@ export interface CreaseContext {
 
 const ZERO = new Fraction(0);
 
-function min(a: Fraction, b: Fraction): Fraction {
-  return a.compare(b) <= 0 ? a : b;
-}
-
 /** Follow an old crease (mm below the mark, negative above) through the cuff's folds. */
 export function creaseLanding(crease: Fraction, ctx: CreaseContext): CreaseLanding {
-  const { cuffDepth: d, lines, onFoldWithin, len } = ctx;
-  const land = (place: CreasePlace, height: Fraction, message: string): CreaseLanding => ({
+  const { cuffDepth: d, lines, linesMm, onFoldWithin, len } = ctx;
+  const land = (place: CreasePlace, height: Len, message: string): CreaseLanding => ({
     place,
-    heightAboveEdge: len(height),
+    heightAboveEdge: height,
     visible: place === 'leg-visible' || place === 'cuff-face',
     message,
   });
-  const folds: [Fraction, Fraction, string][] = [
-    [lines.finishedEdge, ZERO, 'finished edge'],
-    [lines.cuffTop, d, 'cuff top'],
-    [lines.innerFold, ZERO, 'inner fold'],
-  ];
   const c = mmNumber(crease);
+  const dMm = mmNumber(d);
   const near = mmNumber(onFoldWithin) + 1e-6;
-  for (const [at, height, name] of folds) {
-    // The exact test runs only when the numbers say the crease is near this fold.
-    if (Math.abs(c - mmNumber(at)) <= near && crease.sub(at).abs().compare(onFoldWithin) <= 0) {
-      return land('on-fold', height, `The old crease falls on the new ${name}: the new fold takes it, so it will not show.`);
-    }
+  // The exact test runs only when the numbers say the crease is near a fold.
+  const onFold = (at: Fraction, atMm: number) =>
+    Math.abs(c - atMm) <= near && crease.sub(at).abs().compare(onFoldWithin) <= 0;
+  const fold = onFold(lines.finishedEdge, 0)
+    ? 'finished edge'
+    : onFold(lines.cuffTop, linesMm[1]!)
+      ? 'cuff top'
+      : onFold(lines.innerFold, linesMm[2]!)
+        ? 'inner fold'
+        : null;
+  if (fold !== null) {
+    return land('on-fold', len(fold === 'cuff top' ? d : ZERO), `The old crease falls on the new ${fold}: the new fold takes it, so it will not show.`);
   }
-  if (crease.s < 0n) {
+  if (c < 0) {
     const h = crease.neg();
-    const at = len(h).text;
-    if (h.compare(d) >= 0) {
+    const at = len(h);
+    if (compareExact(h, -c, d, dMm) >= 0) {
       return land(
         'leg-visible',
-        h,
-        `The old hem crease will show on the leg, ${at} above the finished edge, ${len(h.sub(d)).text} above the cuff top. Press or steam it out before finishing, or choose a cuff depth that covers it.`,
+        at,
+        `The old hem crease will show on the leg, ${at.text} above the finished edge, ${len(h.sub(d)).text} above the cuff top. Press or steam it out before finishing, or choose a cuff depth that covers it.`,
       );
     }
-    return land('behind-cuff', h, `The old crease lies on the leg behind the cuff, ${at} above the finished edge: the cuff hides it.`);
+    return land('behind-cuff', at, `The old crease lies on the leg behind the cuff, ${at.text} above the finished edge: the cuff hides it.`);
   }
-  if (crease.compare(lines.cuffTop) <= 0) {
-    const h = min(crease, d);
-    return land('behind-cuff', h, `The old crease lies under the cuff face, ${len(h).text} above the finished edge: hidden.`);
+  if (compareExact(crease, c, lines.cuffTop, linesMm[1]!) <= 0) {
+    // With a turn of cloth the first section is longer than the cuff is high; the cuff top caps it.
+    const h = len(compareExact(crease, c, d, dMm) <= 0 ? crease : d);
+    return land('behind-cuff', h, `The old crease lies under the cuff face, ${h.text} above the finished edge: hidden.`);
   }
-  if (crease.compare(lines.innerFold) <= 0) {
-    const h = min(lines.innerFold.sub(crease), d);
+  if (compareExact(crease, c, lines.innerFold, linesMm[2]!) <= 0) {
+    const up = lines.innerFold.sub(crease);
+    const h = len(compareExact(up, linesMm[2]! - c, d, dMm) <= 0 ? up : d);
     return land(
       'cuff-face',
       h,
-      `The old crease will show on the face of the cuff, ${len(h).text} above the finished edge. Press or steam it out, or change the cuff depth so it falls on a fold.`,
+      `The old crease will show on the face of the cuff, ${h.text} above the finished edge. Press or steam it out, or change the cuff depth so it falls on a fold.`,
     );
   }
-  const h = crease.sub(lines.innerFold);
-  if (crease.compare(lines.cut) <= 0) {
-    return land('inside', h, `The old crease ends up inside the leg, ${len(h).text} above the finished edge: hidden.`);
+  const h = len(crease.sub(lines.innerFold));
+  if (compareExact(crease, c, lines.cut, linesMm[3]!) <= 0) {
+    return land('inside', h, `The old crease ends up inside the leg, ${h.text} above the finished edge: hidden.`);
   }
   return land('cut-away', h, `The old crease lies ${len(crease.sub(lines.cut)).text} below the cutting line and is cut away.`);
 }

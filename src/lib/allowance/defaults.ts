@@ -9,6 +9,12 @@ export interface Usual<T> {
   max: T;
 }
 
+/** A usual range held exactly, with its nearest numbers for quick comparisons. */
+export interface ExactRange extends Usual<Fraction> {
+  minMm: number;
+  maxMm: number;
+}
+
 /** The engine's defaults and usual ranges for one unit system, exact, in mm. */
 export interface ExactDefaults {
   cuffTurnUnder: Fraction;
@@ -19,12 +25,13 @@ export interface ExactDefaults {
   shallowestCuff: Fraction;
   onFoldWithin: Fraction;
   maxCuffDepth: Fraction;
-  usualCuffDepth: Usual<Fraction>;
-  usualHemAllowance: Usual<Fraction>;
+  usualCuffDepth: ExactRange;
+  usualHemAllowance: ExactRange;
 }
 
 const inch = (n: number, d = 1): Fraction => new Fraction(n, d).mul(MM_PER_INCH);
 const mm = (n: number, d = 1): Fraction => new Fraction(n, d);
+const range = (min: Fraction, max: Fraction): ExactRange => ({ min, max, minMm: min.valueOf(), maxMm: max.valueOf() });
 
 // Inch figures from TRADE.md; metric ones are our own round numbers near them (NIST: convert, then round sensibly).
 const IMPERIAL: ExactDefaults = {
@@ -36,8 +43,8 @@ const IMPERIAL: ExactDefaults = {
   shallowestCuff: inch(1, 2),
   onFoldWithin: inch(1, 16),
   maxCuffDepth: inch(6),
-  usualCuffDepth: { min: inch(1), max: inch(9, 4) },
-  usualHemAllowance: { min: inch(5, 4), max: inch(2) },
+  usualCuffDepth: range(inch(1), inch(9, 4)),
+  usualHemAllowance: range(inch(5, 4), inch(2)),
 };
 
 const METRIC: ExactDefaults = {
@@ -49,8 +56,8 @@ const METRIC: ExactDefaults = {
   shallowestCuff: mm(12),
   onFoldWithin: mm(3, 2),
   maxCuffDepth: mm(150),
-  usualCuffDepth: { min: mm(25), max: mm(57) },
-  usualHemAllowance: { min: mm(32), max: mm(51) },
+  usualCuffDepth: range(mm(25), mm(57)),
+  usualHemAllowance: range(mm(32), mm(51)),
 };
 
 /** The exact defaults for a unit: inch figures for 'in', metric ones for 'cm' and 'mm'. */
@@ -60,7 +67,7 @@ export function exactDefaults(unit: Unit): ExactDefaults {
 
 /** Defaults and usual ranges of one unit, as lengths shown in that unit. */
 export type PlanDefaults = { precision: 16 } & {
-  [K in keyof ExactDefaults]: ExactDefaults[K] extends Fraction ? Len : Usual<Len>;
+  [K in keyof ExactDefaults]: ExactDefaults[K] extends ExactRange ? Usual<Len> : Len;
 };
 
 function lenOf(f: Fraction, unit: Unit): Len {

@@ -19,27 +19,31 @@ export const FORMAT_LIMIT_MM = 1e12;
 
 const SAFE = Number.MAX_SAFE_INTEGER;
 
+/** Round n·a / (d·b) to the nearest integer, ties up, for non-negative exact integers n, d (or NaN past 2^53). */
+export function roundRatio(n: number, d: number, a: number, b: number): number {
+  const num = n * a;
+  const den = d * b;
+  if (!(num <= SAFE && den <= SAFE)) return Number.NaN;
+  let q = Math.floor(num / den);
+  let r = num - q * den;
+  if (r < 0) {
+    q -= 1;
+    r += den;
+  } else if (r >= den) {
+    q += 1;
+    r -= den;
+  }
+  return 2 * r >= den ? q + 1 : q;
+}
+
 /**
  * Round (mm · a / b) to the nearest integer, ties away from zero, exactly.
  * Plain numbers while they stay exact integers (the hot path); BigInt beyond. The answer is a
  * JS number, so it is exact while the step count stays below 2^53 (formatLength keeps it there).
  */
 export function roundSteps(mm: Fraction, a: number, b: number): number {
-  const num = Number(mm.n) * a;
-  const den = Number(mm.d) * b;
-  let q: number;
-  if (num <= SAFE && den <= SAFE) {
-    q = Math.floor(num / den);
-    let r = num - q * den;
-    if (r < 0) {
-      q -= 1;
-      r += den;
-    } else if (r >= den) {
-      q += 1;
-      r -= den;
-    }
-    if (2 * r >= den) q += 1;
-  } else {
+  let q = roundRatio(Number(mm.n), Number(mm.d), a, b);
+  if (Number.isNaN(q)) {
     const bn = mm.n * BigInt(a);
     const bd = mm.d * BigInt(b);
     let bq = bn / bd;
@@ -51,6 +55,16 @@ export function roundSteps(mm: Fraction, a: number, b: number): number {
 
 /** Round (mm · a / b) down (towards −∞) to an integer, exactly. */
 export function floorSteps(mm: Fraction, a: number, b: number): number {
+  const num = Number(mm.n) * a;
+  const den = Number(mm.d) * b;
+  if (num <= SAFE && den <= SAFE) {
+    let q = Math.floor(num / den);
+    const r = num - q * den;
+    if (r < 0) q -= 1;
+    else if (r >= den) q += 1;
+    if (mm.s > 0n) return q;
+    return q * den === num ? -q : -q - 1;
+  }
   const bn = mm.s * mm.n * BigInt(a);
   const bd = mm.d * BigInt(b);
   let q = bn / bd;
@@ -101,11 +115,16 @@ function cmText(halfMm: number): string {
   return `${sign}${whole}.${rest < 10 ? '0' : ''}${rest} cm`;
 }
 
+/** The display text of a signed whole number of display steps. */
+export function stepsText(steps: number, unit: Unit, precision: Precision): string {
+  if (unit === 'in') return inchText(steps, precision);
+  return unit === 'mm' ? mmText(steps) : cmText(steps);
+}
+
 /** Format an exact length (mm) in a unit, rounded to the display step. */
 export function formatExact(mm: Fraction, unit: Unit, precision: Precision = 16): string {
-  if (unit === 'in') return inchText(roundSteps(mm, 5 * precision, 127), precision);
-  const halfMm = roundSteps(mm, 2, 1);
-  return unit === 'mm' ? mmText(halfMm) : cmText(halfMm);
+  const [a, b] = stepRatio(unit, precision);
+  return stepsText(roundSteps(mm, a, b), unit, precision);
 }
 
 function exactFromDisplayNumber(mm: number): Fraction {

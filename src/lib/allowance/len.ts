@@ -1,5 +1,5 @@
 import type Fraction from 'fraction.js';
-import { formatExact } from './format-length';
+import { formatExact, roundRatio, stepRatio, stepsText } from './format-length';
 import type { Len, Precision, Unit } from './types';
 
 /** Makes Len values in one plan's unit and precision. */
@@ -17,5 +17,26 @@ export function mmNumber(mm: Fraction): number {
 
 /** A Len maker for a unit and precision: exact mm as a number plus the display text. */
 export function lenMaker(unit: Unit, precision: Precision): LenMaker {
-  return (mm) => ({ mm: mmNumber(mm), text: formatExact(mm, unit, precision) });
+  const [a, b] = stepRatio(unit, precision);
+  return (mm) => {
+    // One BigInt-to-number conversion serves both the number and the text (the hot path of every plan).
+    const n = Number(mm.n);
+    const d = Number(mm.d);
+    const neg = mm.s < 0n;
+    const q = n <= SAFE && d <= SAFE ? roundRatio(n, d, a, b) : Number.NaN;
+    if (Number.isNaN(q)) return { mm: mm.valueOf(), text: formatExact(mm, unit, precision) };
+    return { mm: neg ? -n / d : n / d, text: stepsText(q === 0 ? 0 : neg ? -q : q, unit, precision) };
+  };
+}
+
+/**
+ * Compare two exact lengths, given their nearest numbers too: the numbers settle it when they are
+ * clearly apart (they are within a rounding of the exact values), the Fractions only when close.
+ */
+export function compareExact(a: Fraction, aMm: number, b: Fraction, bMm: number): number {
+  const gap = aMm - bMm;
+  const margin = 1e-12 * (1 + Math.abs(aMm) + Math.abs(bMm));
+  if (gap > margin) return 1;
+  if (gap < -margin) return -1;
+  return a.compare(b);
 }

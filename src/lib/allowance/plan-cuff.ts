@@ -3,7 +3,7 @@ import { creaseLanding } from './crease-landing';
 import { cuffAlternatives } from './cuff-alternatives';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
 import { type ExactDefaults, exactDefaults } from './defaults';
-import { type LenMaker, lenMaker } from './len';
+import { compareExact, type LenMaker, lenMaker } from './len';
 import { InputReader } from './read-input';
 import type { CuffInput, CuffLine, CuffPlan, Len, PlanWarning, Precision, Unit } from './types';
 
@@ -44,19 +44,27 @@ export function readCuffInput(input: CuffInput, r: InputReader): CuffValues {
   };
 }
 
-function cuffWarnings(v: CuffValues, defaults: ExactDefaults, len: LenMaker): PlanWarning[] {
+/** The plan's lengths as shown, beside the exact values. */
+interface Shown {
+  depth: Len;
+  section: Len;
+  turnUnder: Len;
+}
+
+function cuffWarnings(v: CuffValues, shown: Shown, defaults: ExactDefaults, len: LenMaker): PlanWarning[] {
   const warnings: PlanWarning[] = [];
-  if (v.hemSection.compare(v.turnUnder) <= 0) {
+  if (compareExact(v.hemSection, shown.section.mm, v.turnUnder, shown.turnUnder.mm) <= 0) {
     warnings.push({
       code: 'third-section-too-small',
-      message: `The third section (${len(v.hemSection).text}) is no deeper than the turn-under (${len(v.turnUnder).text}): nothing is left to hold the cuff inside. Make the third section deeper or the turn-under narrower.`,
+      message: `The third section (${shown.section.text}) is no deeper than the turn-under (${shown.turnUnder.text}): nothing is left to hold the cuff inside. Make the third section deeper or the turn-under narrower.`,
     });
   }
   const usual = defaults.usualCuffDepth;
-  if (v.cuffDepth.compare(usual.min) < 0 || v.cuffDepth.compare(usual.max) > 0) {
+  const d = shown.depth.mm;
+  if (compareExact(v.cuffDepth, d, usual.min, usual.minMm) < 0 || compareExact(v.cuffDepth, d, usual.max, usual.maxMm) > 0) {
     warnings.push({
       code: 'cuff-depth-unusual',
-      message: `A ${len(v.cuffDepth).text} cuff is outside the usual ${len(usual.min).text} to ${len(usual.max).text}. Check the depth with the customer.`,
+      message: `A ${shown.depth.text} cuff is outside the usual ${len(usual.min).text} to ${len(usual.max).text}. Check the depth with the customer.`,
     });
   }
   if (v.slope !== null && v.slope.n !== 0n) {
@@ -87,25 +95,32 @@ export function planCuff(input: CuffInput): CuffPlan {
   const len = lenMaker(v.unit, v.precision);
   const positions = cuffLinePositions(v.cuffDepth, v.hemSection, v.clothThickness);
   const A = v.available;
+  const below = linePositionList(positions);
   // Above the raw edge = A − below the mark; for the finished edge that is A itself.
-  const aboveRaw = linePositionList(positions).map((below, k) => (A === null ? null : k === 0 ? A : A.sub(below)));
-  const lines: CuffLine[] = linePositionList(positions).map((below, k) => ({
+  const aboveRaw = A === null ? null : below.map((b, k) => (k === 0 ? A : A.sub(b)));
+  const lines: CuffLine[] = below.map((b, k) => ({
     n: (k + 1) as CuffLine['n'],
     name: CUFF_LINE_NAMES[k]!,
-    belowMark: len(below),
-    aboveRawEdge: aboveRaw[k] === null ? null : len(aboveRaw[k]!),
+    belowMark: len(b),
+    aboveRawEdge: aboveRaw === null ? null : len(aboveRaw[k]!),
   }));
-  const required = lines[3]!.belowMark;
-  const warnings = cuffWarnings(v, defaults, len);
+  // The same exact values are not formatted twice (copies, so no two plan fields share an object).
+  const depth = positions.cuffTop === v.cuffDepth ? { ...lines[1]!.belowMark } : len(v.cuffDepth);
+  const required = { ...lines[3]!.belowMark };
+  const section = v.hemSection === v.cuffDepth ? { ...depth } : len(v.hemSection);
+  const turnUnder = len(v.turnUnder);
+  const warnings = cuffWarnings(v, { depth, section, turnUnder }, defaults, len);
   let enough: boolean | null = null;
   let spare: Len | null = null;
   let shortBy: Len | null = null;
   let alternatives: CuffPlan['alternatives'] = null;
   if (A !== null) {
-    const rest = aboveRaw[3]!;
-    enough = rest.s > 0n || rest.n === 0n;
+    const rest = aboveRaw![3]!;
+    const restMm = lines[3]!.aboveRawEdge!.mm;
+    // The number's sign is the exact sign unless it is 0, which the Fraction then settles.
+    enough = restMm > 0 || (restMm === 0 && (rest.n === 0n || rest.s > 0n));
     if (enough) {
-      spare = lines[3]!.aboveRawEdge;
+      spare = { ...lines[3]!.aboveRawEdge! };
     } else {
       shortBy = len(rest.neg());
       alternatives = cuffAlternatives({
@@ -117,16 +132,16 @@ export function planCuff(input: CuffInput): CuffPlan {
         defaults,
         len,
       });
-      warnings.unshift({ code: 'not-enough-cloth', message: shortMessage(required, len(A), shortBy, alternatives) });
+      warnings.unshift({ code: 'not-enough-cloth', message: shortMessage(required, lines[0]!.aboveRawEdge!, shortBy, alternatives) });
     }
   }
   const plan: CuffPlan = {
     kind: 'cuff',
     unit: v.unit,
     precision: v.precision,
-    cuffDepth: len(v.cuffDepth),
-    hemSection: len(v.hemSection),
-    turnUnder: len(v.turnUnder),
+    cuffDepth: depth,
+    hemSection: section,
+    turnUnder,
     lines,
     required,
     enough,
@@ -139,6 +154,7 @@ export function planCuff(input: CuffInput): CuffPlan {
     const landing = creaseLanding(v.oldCrease, {
       cuffDepth: v.cuffDepth,
       lines: positions,
+      linesMm: lines.map((l) => l.belowMark.mm),
       onFoldWithin: defaults.onFoldWithin,
       len,
     });

@@ -91,7 +91,7 @@ export function planHem(input: HemInput): HemPlan {
     turnUnder: len(v.turnUnder),
     slope: len(v.slope),
     lines,
-    required: lines[1]!.belowMark,
+    required: { ...lines[1]!.belowMark },
     enough,
     shortBy,
     spare,

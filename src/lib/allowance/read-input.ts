@@ -63,12 +63,13 @@ export class InputReader {
       this.fail(new AllowanceError(e.code, `${label}: ${e.message}`, field));
       return null;
     }
-    const s = mm.s * (mm.n === 0n ? 0n : 1n);
-    if (rule.min === 'positive' && s <= 0n) {
+    // A number input carries its sign; only text needs the Fraction asked.
+    const s = typeof value === 'number' ? Math.sign(value) : mm.n === 0n ? 0 : mm.s < 0n ? -1 : 1;
+    if (rule.min === 'positive' && s <= 0) {
       this.fail(new AllowanceError('not-positive', `${label} must be more than 0.`, field));
       return null;
     }
-    if (rule.min === 'non-negative' && s < 0n) {
+    if (rule.min === 'non-negative' && s < 0) {
       this.fail(new AllowanceError('negative', `${label} cannot be negative.`, field));
       return null;
     }

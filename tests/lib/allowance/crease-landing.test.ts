@@ -1,7 +1,7 @@
 import Fraction from 'fraction.js';
 import { describe, expect, it } from 'vitest';
 import { creaseLanding } from '@/lib/allowance/crease-landing';
-import { cuffLinePositions } from '@/lib/allowance/cuff-lines';
+import { cuffLinePositions, linePositionList } from '@/lib/allowance/cuff-lines';
 import { lenMaker } from '@/lib/allowance/len';
 
 const inch = (n: number, d = 1) => new Fraction(n, d).mul(new Fraction(127, 5));
@@ -9,9 +9,11 @@ const inch = (n: number, d = 1) => new Fraction(n, d).mul(new Fraction(127, 5));
 function land(creaseIn: Fraction, unit: 'in' | 'mm' = 'in') {
   // A 1½ in cuff, three equal sections: lines at 0, 1½, 3 and 4½ in (TRADE.md: Seam2Seam 2014)
   const d = inch(3, 2);
+  const lines = cuffLinePositions(d, d, new Fraction(0));
   return creaseLanding(creaseIn, {
     cuffDepth: d,
-    lines: cuffLinePositions(d, d, new Fraction(0)),
+    lines,
+    linesMm: linePositionList(lines).map((f) => f.valueOf()),
     onFoldWithin: unit === 'in' ? inch(1, 16) : new Fraction(3, 2),
     len: lenMaker(unit, 16),
   });
