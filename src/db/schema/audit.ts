@@ -14,5 +14,5 @@ export const auditEvents = pgTable(
     detail: jsonb('detail').notNull().default({}),
     at: timestamp('at', { withTimezone: true }).defaultNow().notNull(),
   },
-  (t) => [index('audit_events_shop_idx').on(t.shopId, t.at)],
+  (t) => [index('audit_events_shop_idx').on(t.shopId, t.at), index('audit_events_subject_idx').on(t.shopId, t.subject)],
 );

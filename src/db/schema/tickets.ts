@@ -1,14 +1,16 @@
-// A shop's jobs: a ticket per visit, the garments on it and their fitting measurements.
-import { pgTable, text, timestamp, uuid, index, integer, jsonb, date } from 'drizzle-orm/pg-core';
-import { createInsertSchema, createSelectSchema } from 'drizzle-zod';
+// A shop's jobs: a ticket per visit, the garments on it and their fitting measurements per leg,
+// and the shop's bench settings (measuring unit, its names for the steps).
+import { pgTable, text, timestamp, uuid, index, integer, jsonb, date, uniqueIndex } from 'drizzle-orm/pg-core';
+import { createSelectSchema } from 'drizzle-zod';
 import { z } from 'zod';
+import { GARMENT_STEPS, type GarmentStep } from '../../lib/garment-steps';
 import { organization, user } from './auth';
 import { customers } from './customers';
 
-/** Where a job stands, intake to pickup; the middle four are the bench steps. */
-export const TICKET_STATUSES = ['intake', 'queued', 'cutting', 'sewing', 'pressing', 'ready', 'collected'] as const;
-/** A ticket status. */
-export type TicketStatus = (typeof TICKET_STATUSES)[number];
+/** Where a ticket stands: the step of its least advanced garment (kept by services/garments.ts). */
+export const TICKET_STATUSES = GARMENT_STEPS;
+/** A ticket status: one of the garment steps. */
+export type TicketStatus = GarmentStep;
 
 /** Tickets: one per customer visit, carried from intake to pickup. */
 export const tickets = pgTable(
@@ -16,8 +18,10 @@ export const tickets = pgTable(
   {
     id: uuid('id').primaryKey().defaultRandom(),
     shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
+    /** said at the counter: T-1001, T-1002 … per shop */
+    number: integer('number').notNull(),
     customerId: uuid('customer_id').references(() => customers.id, { onDelete: 'set null' }),
-    status: text('status', { enum: TICKET_STATUSES }).notNull().default('intake'),
+    status: text('status', { enum: GARMENT_STEPS }).notNull().default('received'),
     assigneeId: text('assignee_id').references(() => user.id, { onDelete: 'set null' }),
     dueOn: date('due_on'),
     note: text('note'),
@@ -25,42 +29,67 @@ export const tickets = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).defaultNow().notNull(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull(),
   },
-  (t) => [index('tickets_shop_status_idx').on(t.shopId, t.status)],
+  (t) => [index('tickets_shop_status_idx').on(t.shopId, t.status), uniqueIndex('tickets_shop_number_uidx').on(t.shopId, t.number)],
 );
 
-/** Garments on a ticket (sketch: the bench issue fills in the details). */
-export const garments = pgTable('garments', {
-  id: uuid('id').primaryKey().defaultRandom(),
-  shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
-  ticketId: uuid('ticket_id').notNull().references(() => tickets.id, { onDelete: 'cascade' }),
-  kind: text('kind').notNull().default('trousers'),
-  finish: text('finish'),
-  description: text('description'),
-  position: integer('position').notNull().default(0),
-});
+/** Garments on a ticket, each moving through the bench steps on its own. */
+export const garments = pgTable(
+  'garments',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
+    ticketId: uuid('ticket_id').notNull().references(() => tickets.id, { onDelete: 'cascade' }),
+    kind: text('kind').notNull().default('trousers'),
+    finish: text('finish'),
+    description: text('description'),
+    position: integer('position').notNull().default(0),
+    status: text('status', { enum: GARMENT_STEPS }).notNull().default('received'),
+    assigneeId: text('assignee_id').references(() => user.id, { onDelete: 'set null' }),
+    dueOn: date('due_on'),
+    createdAt: timestamp('created_at', { withTimezone: true }).defaultNow().notNull(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull(),
+  },
+  (t) => [index('garments_shop_status_idx').on(t.shopId, t.status), index('garments_ticket_idx').on(t.ticketId)],
+);
 
-/** Fitting measurements taken on a garment (sketch: the plan inputs, as the engine reads them). */
-export const measurements = pgTable('measurements', {
-  id: uuid('id').primaryKey().defaultRandom(),
-  shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
-  garmentId: uuid('garment_id').notNull().references(() => garments.id, { onDelete: 'cascade' }),
-  unit: text('unit').notNull().default('in'),
-  values: jsonb('values').notNull().default({}),
-  takenById: text('taken_by_id').references(() => user.id, { onDelete: 'set null' }),
-  takenAt: timestamp('taken_at', { withTimezone: true }).defaultNow().notNull(),
+/** Fitting measurements: one row per garment and leg, each length as typed and in exact mm. */
+export const measurements = pgTable(
+  'measurements',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
+    garmentId: uuid('garment_id').notNull().references(() => garments.id, { onDelete: 'cascade' }),
+    leg: text('leg', { enum: ['left', 'right'] }).notNull().default('left'),
+    unit: text('unit', { enum: ['in', 'cm', 'mm'] }).notNull().default('in'),
+    finish: text('finish', { enum: ['plain', 'slope', 'cuff'] }).notNull().default('cuff'),
+    preset: text('preset'),
+    /** { field: { text, mm } } for each length given (see src/lib/measurement-request.ts) */
+    values: jsonb('values').notNull().default({}),
+    takenById: text('taken_by_id').references(() => user.id, { onDelete: 'set null' }),
+    takenAt: timestamp('taken_at', { withTimezone: true }).defaultNow().notNull(),
+  },
+  (t) => [uniqueIndex('measurements_garment_leg_uidx').on(t.garmentId, t.leg)],
+);
+
+/** A shop's bench settings: how lengths are typed and shown, and its own names for the steps. */
+export const shopSettings = pgTable('shop_settings', {
+  shopId: text('shop_id').primaryKey().references(() => organization.id, { onDelete: 'cascade' }),
+  scale: text('scale', { enum: ['in8', 'in16', 'cm', 'mm'] }).notNull().default('in8'),
+  stepLabels: jsonb('step_labels').notNull().default({}),
+  updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull(),
 });
 
 /** A ticket row as read. */
 export const ticketRow = createSelectSchema(tickets);
 
-/** What intake types to open a ticket. */
-export const ticketInput = createInsertSchema(tickets, {
-  note: (s) => s.max(2000),
-  dueOn: () => z.iso.date('Use a date like 2026-03-14'),
-}).pick({ customerId: true, note: true, dueOn: true });
+/** A move of a ticket (all its garments at its step) to the next step. */
+export const ticketStatusInput = z.object({ status: z.enum(GARMENT_STEPS, { error: 'Choose one of the bench steps.' }) });
 
-/** A move of a ticket to another status. */
-export const ticketStatusInput = ticketRow.pick({ status: true });
-
-/** A ticket as the API returns it. */
+/** A ticket as stored. */
 export type Ticket = typeof tickets.$inferSelect;
+/** A garment as stored. */
+export type Garment = typeof garments.$inferSelect;
+/** One leg's measurements as stored. */
+export type MeasurementRow = typeof measurements.$inferSelect;
+/** A shop's bench settings as stored. */
+export type ShopSettings = typeof shopSettings.$inferSelect;
