@@ -33,7 +33,8 @@ async function invite(shopId: string, inviterId: string, email: string, role: st
 describe('the database under test', () => {
   it('is the PostgreSQL server when TEST_DATABASE_URL is set, PGlite otherwise', async () => {
     expect(handle.kind).toBe(process.env.TEST_DATABASE_URL ? 'postgres' : 'pglite');
-    const [row] = (await db.execute(sql`select version() as v`)).rows as { v: string }[];
+    const result = (await db.execute(sql`select version() as v`)) as unknown as { rows: { v: string }[] };
+    const [row] = result.rows;
     expect(row!.v).toMatch(/PostgreSQL/);
   });
 });

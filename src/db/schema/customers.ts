@@ -28,7 +28,9 @@ export const customerInput = createInsertSchema(customers, {
   phone: (s) => s.trim().max(40),
   email: () => z.email('Enter an e-mail address like name@example.com').max(200),
   notes: (s) => s.max(2000),
-}).pick({ name: true, phone: true, email: true, notes: true });
+})
+  .pick({ name: true, phone: true, email: true, notes: true })
+  .partial({ phone: true, email: true, notes: true });
 
 /** A customer as the API returns it. */
 export type Customer = typeof customers.$inferSelect;
