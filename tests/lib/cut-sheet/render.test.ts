@@ -134,6 +134,18 @@ describe('a plain hem sloped 1/2 in', () => {
   });
 });
 
+/** Every word inside the page's 28 pt margin, down to the last caution: nothing pushed off the paper. */
+function expectInsidePage(file: string, width: number, height: number) {
+  const w = words(file);
+  expect(w.map((x) => x.text).join(' ')).toContain('local rules come first.');
+  for (const x of w) {
+    expect(x.xMin).toBeGreaterThanOrEqual(27);
+    expect(x.yMin).toBeGreaterThanOrEqual(27);
+    expect(x.xMax).toBeLessThanOrEqual(width - 27);
+    expect(x.yMax).toBeLessThanOrEqual(height - 27);
+  }
+}
+
 describe('page sizes and batches', () => {
   for (const [size, w, h] of [
     ['LETTER', 612, 792],
@@ -143,10 +155,18 @@ describe('page sizes and batches', () => {
       const file = pdfFile(await renderCutSheet({ ...sheet(busyLegs), pageSize: size }));
       const info = pageInfo(file);
       expect(info).toEqual({ pages: 1, width: w, height: h });
+      expectInsidePage(file, w, h);
       const text = flatText(file);
       expect(text).toContain('LEFT LEG');
       expect(text).toContain('RIGHT LEG');
       expect(text).toContain('NOT ENOUGH CLOTH');
+      // By hand: 7 1/2 in flat at the edge, 8 1/2 in six inches up → 1/6 in per inch; the cuff top
+      // (1 1/2 in up) is 7 3/4 in, so the edge needs 1/4 in and the cut (4 1/2 in down) 1 in more.
+      expect(text).toContain('7 3/4 in flat');
+      expect(text).toContain('let out 1/4 in at line 1');
+      expect(text).toContain('let out 1 in at line 4');
+      expect(text).toContain('Left leg: re-chalk both leg seams');
+      expect(text).toMatch(/old crease/i);
       expect(text).toContain('AT THE BENCH');
       expect(text).toContain("local rules come first");
     });
@@ -156,7 +176,9 @@ describe('page sizes and batches', () => {
     for (const pageSize of ['LETTER', 'A4'] as const) {
       for (const legs of [[cuffInch], [cuffMetric], [hemSloped]]) {
         const file = pdfFile(await renderCutSheet({ ...sheet(legs), pageSize }));
-        expect(pageInfo(file).pages).toBe(1);
+        const info = pageInfo(file);
+        expect(info).toEqual({ pages: 1, ...(pageSize === 'A4' ? { width: 595.28, height: 841.89 } : { width: 612, height: 792 }) });
+        expectInsidePage(file, info.width, info.height);
       }
     }
   });
