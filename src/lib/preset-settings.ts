@@ -1,0 +1,75 @@
+// What a preset holds and what the presets API accepts, checked the same way in the islands and on
+// the server. Only the shape is checked here: what a length means is the engine's call (server).
+import { z } from 'zod';
+
+const MAX_TEXT = 40;
+
+function length(what: string) {
+  return z
+    .string({ error: `${what}: type a length such as 1 1/2 or 38.` })
+    .trim()
+    .max(MAX_TEXT, `${what} is too long: type a length such as 1 1/2.`)
+    .optional()
+    .transform((v) => (v === '' ? undefined : v));
+}
+
+/** The lengths a preset can carry, with the words shown for each. */
+export const PRESET_LENGTHS = {
+  cuffDepth: 'Cuff depth',
+  hemSection: 'Third section',
+  turnUnder: 'Turn-under',
+  hemAllowance: 'Hem allowance',
+  slope: 'Slope',
+} as const;
+
+/** A preset's length field name. */
+export type PresetLength = keyof typeof PRESET_LENGTHS;
+
+/** Which lengths each finish uses (a cuff is hemmed level: no slope). */
+export const LENGTHS_OF: Record<'cuff' | 'hem', PresetLength[]> = {
+  cuff: ['cuffDepth', 'hemSection', 'turnUnder'],
+  hem: ['hemAllowance', 'turnUnder', 'slope'],
+};
+
+/** The settings a preset fills into a leg's plan; lengths as typed, in the preset's unit. */
+export const presetSettings = z.object({
+  finish: z.enum(['cuff', 'hem'], { error: 'Choose a cuff or a plain hem.' }),
+  unit: z.enum(['in', 'cm', 'mm'], { error: 'Choose inches, cm or mm.' }),
+  cuffDepth: length('Cuff depth'),
+  hemSection: length('Third section'),
+  turnUnder: length('Turn-under'),
+  hemAllowance: length('Hem allowance'),
+  slope: length('Slope'),
+});
+
+/** Preset settings as checked (blank lengths dropped). */
+export type PresetSettings = z.output<typeof presetSettings>;
+
+const name = z
+  .string({ error: 'Give the preset a name.' })
+  .trim()
+  .min(1, 'Give the preset a name.')
+  .max(60, 'Keep the name under 60 characters.');
+
+/** POST /api/presets: a new house preset (lead) or one of your own. */
+export const presetCreateInput = z.object({
+  name,
+  scope: z.enum(['house', 'personal'], { error: 'Say whether it is a house preset or your own.' }).default('personal'),
+  isDefault: z.boolean().optional(),
+  settings: presetSettings,
+});
+
+/** PATCH /api/presets/[id]: rename, change the settings, or make it the house default. */
+export const presetUpdateInput = z
+  .object({ name, isDefault: z.literal(true, { error: 'Only true: make another preset the default to move it.' }), settings: presetSettings })
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, 'Send a name, settings or isDefault.');
+
+/** A preset as the API returns it. */
+export interface PresetView {
+  id: string;
+  name: string;
+  house: boolean;
+  isDefault: boolean;
+  settings: PresetSettings;
+}
