@@ -5,3 +5,6 @@ export * from './tickets';
 export * from './presets';
 export * from './files';
 export * from './audit';
+export * from './prices';
+export * from './payments';
+export * from './notices';

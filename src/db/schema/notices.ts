@@ -1,0 +1,39 @@
+// Messages to customers about their tickets (the ready notice), each with its delivery state so
+// a failed send stays visible and is retried.
+import { index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { createSelectSchema } from 'drizzle-zod';
+import { organization, user } from './auth';
+import { tickets } from './tickets';
+
+/** Kinds of notice; one of each per ticket. */
+export const NOTICE_KINDS = ['ready'] as const;
+/** Delivery states: waiting, delivered to the mail server, or failed (retried until it gives up). */
+export const NOTICE_STATUSES = ['queued', 'sent', 'failed'] as const;
+
+/** Notices to customers. */
+export const notices = pgTable(
+  'notices',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
+    ticketId: uuid('ticket_id').notNull().references(() => tickets.id, { onDelete: 'cascade' }),
+    kind: text('kind', { enum: NOTICE_KINDS }).notNull(),
+    to: text('to').notNull(),
+    subject: text('subject').notNull(),
+    body: text('body').notNull(),
+    status: text('status', { enum: NOTICE_STATUSES }).notNull().default('queued'),
+    attempts: integer('attempts').notNull().default(0),
+    lastError: text('last_error'),
+    nextAttemptAt: timestamp('next_attempt_at', { withTimezone: true }),
+    sentAt: timestamp('sent_at', { withTimezone: true }),
+    /** null when the shop's setting sent it by itself */
+    createdById: text('created_by_id').references(() => user.id, { onDelete: 'set null' }),
+    createdAt: timestamp('created_at', { withTimezone: true }).defaultNow().notNull(),
+  },
+  (t) => [uniqueIndex('notices_ticket_kind_uidx').on(t.ticketId, t.kind), index('notices_due_idx').on(t.status, t.nextAttemptAt)],
+);
+
+/** A notice as the API returns it. */
+export const noticeRow = createSelectSchema(notices);
+/** A notice. */
+export type Notice = typeof notices.$inferSelect;
