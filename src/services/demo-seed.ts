@@ -6,6 +6,7 @@ import { db } from '@/db';
 import { customers, member, organization, tickets, user, type TicketStatus } from '@/db/schema';
 import { auth } from '@/lib/auth';
 import type { Role } from '@/lib/roles';
+import { seedHousePresets } from './presets';
 
 /** The demo shop's name. */
 export const DEMO_SHOP = 'Pinmark & Hem';
@@ -65,5 +66,6 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
       createdById: ids.counter,
     })),
   );
+  await seedHousePresets(shopId);
   return true;
 }
