@@ -33,6 +33,8 @@ export default defineConfig({
       DEMO_SEED: envField.boolean({ context: 'server', access: 'secret', default: true }),
       // Set by npm start / npm run dev / the tests: the folder the local capture writes; enables /outbox.
       MAIL_CAPTURE_DIR: envField.string({ context: 'server', access: 'secret', optional: true }),
+      // Largest fitting photo accepted, in bytes (10 MB: a phone's full-size photo fits).
+      PHOTO_MAX_BYTES: envField.number({ context: 'server', access: 'secret', default: 10 * 1024 * 1024 }),
     },
   },
   vite: {

@@ -14,6 +14,8 @@ export const statements = {
   settings: ['update'],
   prices: ['read', 'update'],
   presets: ['read', 'create-own', 'manage-house'],
+  // Fitting photos of a garment: every member sees them; the bench takes and removes them.
+  photos: ['read', 'upload', 'delete'],
   customers: ['read', 'create', 'update'],
   tickets: ['read', 'read-all', 'create', 'update', 'advance', 'pickup'],
   measurements: ['read', 'update'],
@@ -38,6 +40,7 @@ export const grants = {
     settings: ['update'],
     prices: ['read', 'update'],
     presets: ['read', 'create-own', 'manage-house'],
+    photos: ['read', 'upload', 'delete'],
     customers: ['read', 'create', 'update'],
     tickets: ['read', 'read-all', 'create', 'update', 'advance', 'pickup'],
     measurements: ['read', 'update'],
@@ -49,6 +52,7 @@ export const grants = {
   tailor: {
     prices: ['read'],
     presets: ['read', 'create-own'],
+    photos: ['read', 'upload', 'delete'],
     customers: ['read', 'create', 'update'],
     tickets: ['read', 'read-all', 'create', 'update', 'advance'],
     measurements: ['read', 'update'],
@@ -58,6 +62,7 @@ export const grants = {
   // Sees only the queue: tickets assigned to them or to nobody (see services/tickets.ts).
   apprentice: {
     presets: ['read'],
+    photos: ['read'],
     tickets: ['read', 'advance'],
     measurements: ['read'],
     plans: ['read'],
@@ -65,6 +70,7 @@ export const grants = {
   },
   counter: {
     prices: ['read'],
+    photos: ['read'],
     customers: ['read', 'create', 'update'],
     tickets: ['read', 'read-all', 'create', 'pickup'],
     plans: ['read'],

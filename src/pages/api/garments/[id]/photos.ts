@@ -1,0 +1,64 @@
+// A garment's fitting photos: the list, and uploading from a phone or tablet (multipart form).
+import type { APIRoute } from 'astro';
+import { PHOTO_MAX_BYTES } from 'astro:env/server';
+import { guard, json, problem, run } from '@/lib/api';
+import type { PhotoList } from '@/lib/photo-view';
+import { ServiceError } from '@/services/errors';
+import { addPhotos, listPhotos, UploadRefused, type Upload } from '@/services/photos';
+
+export const prerender = false;
+
+/** At most this many photos in one upload. */
+const MAX_FILES = 12;
+// Room for the multipart boundaries and headers around the files.
+const FORM_SLACK = 256 * 1024;
+
+/** The garment's photos and the size limit. */
+export const GET: APIRoute = async ({ locals, params }) => {
+  const actor = guard(locals, ['photos', 'read']);
+  if (actor instanceof Response) return actor;
+  return run(async (): Promise<PhotoList> => ({ photos: await listPhotos(actor, params.id ?? ''), maxBytes: PHOTO_MAX_BYTES }));
+};
+
+/** The body, refused once it grows past the limit, so a huge upload is never held in memory whole. */
+function capped(request: Request, limit: number): Request | null {
+  const declared = Number(request.headers.get('content-length') ?? '0');
+  if (declared > limit || !request.body) return declared > limit ? null : request;
+  let seen = 0;
+  const body = request.body.pipeThrough(
+    new TransformStream<Uint8Array, Uint8Array>({
+      transform(chunk, controller) {
+        seen += chunk.byteLength;
+        if (seen > limit) controller.error(new RangeError('too large'));
+        else controller.enqueue(chunk);
+      },
+    }),
+  );
+  return new Request(request.url, { method: 'POST', headers: request.headers, body, duplex: 'half' } as RequestInit);
+}
+
+/** Adds the photos in the form's `photos` fields; every file is checked before any is kept. */
+export const POST: APIRoute = async ({ locals, params, request }) => {
+  const actor = guard(locals, ['photos', 'upload']);
+  if (actor instanceof Response) return actor;
+  const tooBig = `An upload may carry at most ${MAX_FILES} photos of ${Math.floor(PHOTO_MAX_BYTES / (1024 * 1024))} MB each.`;
+  const limited = capped(request, PHOTO_MAX_BYTES * MAX_FILES + FORM_SLACK);
+  if (!limited) return problem(413, tooBig);
+  let form: FormData;
+  try {
+    form = await limited.formData();
+  } catch (e) {
+    if (e instanceof RangeError || (e instanceof TypeError && e.cause instanceof RangeError)) return problem(413, tooBig);
+    return problem(400, 'Send the photos as a multipart form with one or more "photos" fields.');
+  }
+  const entries = form.getAll('photos').filter((v): v is File => typeof v !== 'string');
+  if (entries.length > MAX_FILES) return problem(413, tooBig);
+  const uploads: Upload[] = await Promise.all(entries.map(async (f) => ({ name: f.name, bytes: new Uint8Array(await f.arrayBuffer()) })));
+  try {
+    return json(await addPhotos(actor, params.id ?? '', uploads, PHOTO_MAX_BYTES), 201);
+  } catch (e) {
+    if (e instanceof UploadRefused) return problem(e.status, e.message, { photos: e.message });
+    if (e instanceof ServiceError) return problem(e.status, e.message);
+    throw e;
+  }
+};

@@ -1,0 +1,8 @@
+// A fitting photo's thumbnail (WebP), or the original when none could be made (HEIC).
+import type { APIRoute } from 'astro';
+import { servePhoto } from '@/lib/serve-photo';
+
+export const prerender = false;
+
+/** The small copy, to members of the photo's shop only. */
+export const GET: APIRoute = ({ locals, params }) => servePhoto(locals, params.id ?? '', 'thumb');

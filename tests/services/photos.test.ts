@@ -1,0 +1,145 @@
+// Fitting photos: only real JPEG/PNG/WebP/HEIC by their bytes, size-limited, names kept only as
+// safe text, stored under a random key with a thumbnail, seen only by the garment's shop, audited.
+import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import sharp from 'sharp';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { and, eq } from 'drizzle-orm';
+
+vi.mock('@/db', async () => {
+  const { openTestDb } = await import('../db/test-db');
+  const handle = await openTestDb();
+  return { handle, db: handle.db };
+});
+
+const { db, handle } = await import('@/db');
+const { auditEvents, files, garments, tickets } = await import('@/db/schema');
+const { useStorage } = await import('@/lib/storage');
+const { DiskStorage } = await import('@/lib/storage/disk-storage');
+const svc = await import('@/services/photos');
+const { makeShop } = await import('./fixtures');
+
+const root = mkdtempSync(join(tmpdir(), 'cuffwright-photos-'));
+const storageRoot = join(root, 'files');
+useStorage(new DiskStorage(storageRoot));
+const MB = 1024 * 1024;
+
+let a: Awaited<ReturnType<typeof makeShop>>;
+let b: Awaited<ReturnType<typeof makeShop>>;
+let garmentA = '';
+let garmentB = '';
+let jpeg: Uint8Array;
+
+async function garmentOf(shopId: string): Promise<string> {
+  const [t] = await db.insert(tickets).values({ shopId, number: Math.floor(Math.random() * 1e6) }).returning();
+  const [g] = await db.insert(garments).values({ shopId, ticketId: t!.id, description: 'Grey flannel trousers' }).returning();
+  return g!.id;
+}
+
+async function image(format: 'jpeg' | 'png' | 'webp', width = 1200, height = 900): Promise<Uint8Array> {
+  const img = sharp({ create: { width, height, channels: 3, background: { r: 90, g: 100, b: 120 } } });
+  return new Uint8Array(await img[format]().toBuffer());
+}
+
+beforeAll(async () => {
+  a = await makeShop('Photo Shop A');
+  b = await makeShop('Photo Shop B');
+  garmentA = await garmentOf(a.shopId);
+  garmentB = await garmentOf(b.shopId);
+  jpeg = await image('jpeg');
+});
+afterAll(async () => {
+  await handle.close();
+  rmSync(root, { recursive: true, force: true });
+});
+
+describe('fitting photos', () => {
+  it('take JPEG, PNG and WebP, each under a random key in the shop folder, with a WebP thumbnail', async () => {
+    const added = await svc.addPhotos(
+      a.tailor,
+      garmentA,
+      [
+        { name: 'pinned-left.jpg', bytes: jpeg },
+        { name: 'pinned right.png', bytes: await image('png') },
+        { name: 'back.webp', bytes: await image('webp') },
+      ],
+      10 * MB,
+    );
+    expect(added.map((p) => [p.name, p.mimeType, p.hasThumb])).toEqual([
+      ['pinned-left.jpg', 'image/jpeg', true],
+      ['pinned right.png', 'image/png', true],
+      ['back.webp', 'image/webp', true],
+    ]);
+    const stored = readdirSync(join(storageRoot, a.shopId)).sort();
+    expect(stored).toHaveLength(6);
+    for (const name of stored) expect(name).toMatch(/^[0-9a-f-]{36}(\.(jpg|png|webp)|-thumb\.webp)$/);
+    const thumb = await svc.readPhoto(a.apprentice, added[0]!.id, 'thumb');
+    expect(thumb.mimeType).toBe('image/webp');
+    const meta = await sharp(thumb.bytes).metadata();
+    expect(Math.max(meta.width!, meta.height!)).toBe(480);
+    const full = await svc.readPhoto(a.counter, added[0]!.id);
+    expect(Buffer.from(full.bytes).equals(Buffer.from(jpeg))).toBe(true);
+    expect((await svc.listPhotos(a.lead, garmentA)).map((p) => p.id)).toEqual(added.map((p) => p.id));
+  });
+
+  it('take a HEIC from a phone by its ftyp brand, kept without a thumbnail', async () => {
+    const heic = new Uint8Array([0, 0, 0, 24, ...Buffer.from('ftypheic'), 0, 0, 0, 0, ...Buffer.from('mif1heic'), ...new Array(64).fill(7)]);
+    const [p] = await svc.addPhotos(a.tailor, garmentA, [{ name: 'IMG_0042.HEIC', bytes: heic }], 10 * MB);
+    expect(p).toMatchObject({ mimeType: 'image/heic', hasThumb: false });
+    expect((await svc.readPhoto(a.tailor, p!.id, 'thumb')).mimeType).toBe('image/heic');
+  });
+
+  it('refuse what is not a photo by its bytes, whatever the name says: SVG, GIF, text, a broken JPEG', async () => {
+    const cases: [string, Uint8Array][] = [
+      ['drawing.svg', new TextEncoder().encode('<svg xmlns="http://www.w3.org/2000/svg"><script>alert(1)</script></svg>')],
+      ['looks-like.jpg', new TextEncoder().encode('<svg xmlns="http://www.w3.org/2000/svg"/>')],
+      ['anim.gif', new TextEncoder().encode('GIF89a\x01\x00\x01\x00')],
+      ['notes.png', new TextEncoder().encode('just text')],
+      ['broken.jpg', new Uint8Array([0xff, 0xd8, 0xff, 0xe0, 1, 2, 3, 4, 5, 6, 7, 8])],
+    ];
+    for (const [name, bytes] of cases) {
+      await expect(svc.addPhotos(a.tailor, garmentA, [{ name, bytes }], 10 * MB), name).rejects.toMatchObject({ status: 415 });
+    }
+  });
+
+  it('refuse a photo over the size limit, and store none of the batch', async () => {
+    const before = readdirSync(join(storageRoot, a.shopId)).length;
+    const uploads = [{ name: 'small.jpg', bytes: await image('jpeg', 40, 30) }, { name: 'big.jpg', bytes: jpeg }];
+    await expect(svc.addPhotos(a.tailor, garmentA, uploads, jpeg.byteLength - 1)).rejects.toMatchObject({ status: 413 });
+    expect(readdirSync(join(storageRoot, a.shopId))).toHaveLength(before);
+  });
+
+  it('refuse names that point at folders, and keep other names only as safe text', async () => {
+    for (const name of ['../../etc/passwd.jpg', '..\\..\\evil.jpg', '/tmp/x.jpg', '..']) {
+      await expect(svc.addPhotos(a.tailor, garmentA, [{ name, bytes: jpeg }], 10 * MB), name).rejects.toMatchObject({ status: 422 });
+    }
+    expect(readdirSync(root).sort()).toEqual(['files']);
+    const [p] = await svc.addPhotos(a.tailor, garmentA, [{ name: 'fit\u0000 <left> "pin";.jpg', bytes: jpeg }], 10 * MB);
+    expect(p!.name).toBe('fit _left_ _pin__.jpg');
+    const [row] = await db.select().from(files).where(eq(files.id, p!.id));
+    expect(row!.path).toBe(`${a.shopId}/${p!.id}.jpg`);
+  });
+
+  it("answer 404 for another shop's garment and photo, and keep the photo", async () => {
+    const [theirs] = await svc.addPhotos(b.tailor, garmentB, [{ name: 'b.jpg', bytes: jpeg }], 10 * MB);
+    await expect(svc.readPhoto(a.lead, theirs!.id)).rejects.toMatchObject({ status: 404 });
+    await expect(svc.readPhoto(a.lead, theirs!.id, 'thumb')).rejects.toMatchObject({ status: 404 });
+    await expect(svc.deletePhoto(a.lead, theirs!.id)).rejects.toMatchObject({ status: 404 });
+    await expect(svc.listPhotos(a.lead, garmentB)).rejects.toMatchObject({ status: 404 });
+    await expect(svc.addPhotos(a.lead, garmentB, [{ name: 'x.jpg', bytes: jpeg }], 10 * MB)).rejects.toMatchObject({ status: 404 });
+    await expect(svc.readPhoto(a.lead, '../../etc/passwd')).rejects.toMatchObject({ status: 404 });
+    expect((await svc.readPhoto(b.apprentice, theirs!.id)).bytes.byteLength).toBe(jpeg.byteLength);
+  });
+
+  it('delete a photo with its thumbnail; adding and deleting are audited', async () => {
+    const [p] = await svc.addPhotos(a.lead, garmentA, [{ name: 'to-remove.jpg', bytes: jpeg }], 10 * MB);
+    expect(readdirSync(join(storageRoot, a.shopId)).filter((n) => n.startsWith(p!.id))).toHaveLength(2);
+    expect(await svc.deletePhoto(a.tailor, p!.id)).toEqual({ id: p!.id, deleted: true });
+    expect(readdirSync(join(storageRoot, a.shopId)).filter((n) => n.startsWith(p!.id))).toEqual([]);
+    await expect(svc.readPhoto(a.lead, p!.id)).rejects.toMatchObject({ status: 404 });
+    const events = await db.select().from(auditEvents).where(and(eq(auditEvents.shopId, a.shopId), eq(auditEvents.subject, p!.id)));
+    expect(events.map((e) => e.action)).toEqual(['photo.added', 'photo.deleted']);
+    expect(events[0]!.detail).toMatchObject({ garmentId: garmentA, name: 'to-remove.jpg', type: 'image/jpeg' });
+  });
+});
