@@ -15,7 +15,7 @@ const pts = (p: [number, number][]) => p.map(([x, y]) => `${x},${y}`).join(' ');
 
 function fontFaces(): string {
   const dir = dirname(createRequire(import.meta.url).resolve('@expo-google-fonts/inter/package.json'));
-  return ([[400, '400Regular/Inter_400Regular.ttf'], [600, '600SemiBold/Inter_600SemiBold.ttf'], [700, '700Bold/Inter_700Bold.ttf'], [800, '800ExtraBold/Inter_800ExtraBold.ttf']] as const)
+  return ([[400, '400Regular/Inter_400Regular.ttf'], [700, '700Bold/Inter_700Bold.ttf'], [800, '800ExtraBold/Inter_800ExtraBold.ttf']] as const)
     .map(([w, f]) => `@font-face{font-family:Inter;font-weight:${w};src:url(data:font/ttf;base64,${readFileSync(join(dir, f)).toString('base64')}) format("truetype")}`)
     .join('');
 }
@@ -61,7 +61,7 @@ function Leg({ g }: { g: SheetLegGroup }) {
           <text x={0} y={geo.height - 3} fontSize={6.5} fill="#555">{geo.caption}</text>
         </svg>
       </div>
-      <p style={{ margin: '4pt 0 0', fontWeight: 600 }}>{g.cloth.text}</p>
+      <p style={{ margin: '4pt 0 0', fontWeight: 700 }}>{g.cloth.text}</p>
       {g.cloth.options.length > 0 && <p style={{ margin: 0 }}>Instead: {g.cloth.options.join(' ')}</p>}
       {g.slopeNote && <p style={{ margin: 0 }}>{g.slopeNote}</p>}
       {g.taper && <p style={{ margin: 0, fontWeight: 700 }}>{g.taper.summary}</p>}
@@ -83,7 +83,7 @@ function Sheet({ data }: { data: CutSheetData }) {
         <div>
           <div style={{ fontSize: '8pt', color: '#555' }}><b style={{ letterSpacing: 1.5 }}>CUT SHEET</b> {c.unitNote} Distances are measured down from the pin mark.</div>
           <div style={{ fontSize: '17pt', fontWeight: 800 }}>{c.title}</div>
-          <div style={{ fontSize: '11pt', fontWeight: 600 }}>{c.meta.join('   ·   ')}</div>
+          <div style={{ fontSize: '11pt', fontWeight: 700 }}>{c.meta.join('   ·   ')}</div>
         </div>
         {qr && <svg width="52pt" height="52pt" viewBox={`-2 -2 ${qr.size + 4} ${qr.size + 4}`}><path d={qr.d} fill="#111" /></svg>}
       </header>

@@ -27,7 +27,7 @@ function Header({ c, link }: { c: SheetContent; link?: string }) {
   const qr = link ? qrPath(link) : null;
   return (
     <View style={s.header}>
-      <View style={{ flexShrink: 1 }}>
+      <View style={{ flexGrow: 1, flexShrink: 1, flexBasis: 0 }}>
         <Text style={s.kicker}>
           CUT SHEET<Text style={{ fontWeight: 400, letterSpacing: 0 }}>{`      ${c.unitNote} Distances are measured down from the pin mark.`}</Text>
         </Text>
@@ -179,6 +179,8 @@ export function CutSheetPage({ data }: { data: CutSheetData }) {
   const page = PAGE_PT[size];
   const strips = guideStrips(c.groups, data.unit, page.height - 2 * PADDING - GUIDE_OVERHEAD);
   const mainWidth = page.width - 2 * PADDING - GUIDE_COLUMN;
+  // Pages wrap: a sheet too full for one page spills onto a second at the true paper size, never
+  // onto a taller page that a printer would shrink (the chalk guide must stay 1:1).
   return (
     <Page size={size} style={s.page}>
       <Header c={c} link={data.link} />

@@ -122,7 +122,7 @@ function clothCheck(leg: LegSheet): SheetLegGroup['cloth'] {
   }
   return {
     ok: false,
-    text: `NOT ENOUGH CLOTH. Do not cut. Needs ${p.required.text} below the pin mark, has ${has.text}.${short}`,
+    text: `NOT ENOUGH CLOTH: do not cut. Needs ${p.required.text} below the pin mark, has ${has.text}.${short}`,
     options,
   };
 }
@@ -141,7 +141,6 @@ function taperOf(leg: LegSheet): SheetLegGroup['taper'] {
   }));
   let summary = `Taper: keep the cuff-top width, ${t.targetWidth.text} flat, straight down to the cutting line.`;
   if (t.withinTolerance) summary = `Taper within tolerance: no seam work needed (cuff top ${t.targetWidth.text} flat).`;
-  else if (t.feasible === false) summary += ' The seam allowance is not enough for all of it: see the warnings.';
   const moves = t.lines
     .filter((l) => l.change.mm !== 0)
     .map((l) => `${l.change.mm > 0 ? 'let out' : 'take in'} ${unsigned(l.perSeam)} at line ${l.n}`);

@@ -20,9 +20,10 @@ export const s = StyleSheet.create({
   page: { fontFamily: FAMILY, fontSize: 8.5, color: INK.text, padding: 28, fontFeatureSettings: SHAPING },
   header: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'flex-start', borderBottomWidth: 2, borderBottomColor: INK.text, paddingBottom: 6, marginBottom: 8 },
   kicker: { fontSize: 8, fontWeight: 700, letterSpacing: 1.5, color: INK.soft },
-  title: { fontSize: 17, fontWeight: 800 },
+  // One line each, whatever the shop typed: the header must not push the sheet off the page.
+  title: { fontSize: 17, fontWeight: 800, maxLines: 1, textOverflow: 'ellipsis' },
   ticket: { fontSize: 20, fontWeight: 800 },
-  meta: { fontSize: 11, fontWeight: 700, marginTop: 2 },
+  meta: { fontSize: 11, fontWeight: 700, marginTop: 2, maxLines: 2, textOverflow: 'ellipsis' },
   note: { fontSize: 8.5, color: INK.soft },
   body: { flexDirection: 'row' },
   main: { paddingRight: 12 },

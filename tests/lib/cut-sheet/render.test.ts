@@ -183,6 +183,14 @@ describe('page sizes and batches', () => {
     }
   });
 
+  it('cuts a very long garment description short instead of pushing the sheet off the page', async () => {
+    const file = pdfFile(await renderCutSheet(sheet([cuffInch], { garment: 'Navy wool flannel trousers, '.repeat(30) })));
+    const info = pageInfo(file);
+    expect(info.pages).toBe(1);
+    expectInsidePage(file, info.width, info.height);
+    expect(flatText(file)).toContain('…');
+  });
+
   it('prints a batch of 3 as 3 pages, one garment each, in order', async () => {
     const list = ['2001', '2002', '2003'].map((ticket, i) => sheet([[cuffInch, cuffMetric, hemSloped][i]!], { ticket }));
     const file = pdfFile(await renderCutSheets(list));
