@@ -1,12 +1,13 @@
 // Demo data for a first start on an empty database: an invented shop, one person in each role,
-// a few customers and tickets at different steps. Every name here is made up.
+// a few customers and tickets at different steps (demo-bench-seed.ts). Every name here is made up.
 import { randomUUID } from 'node:crypto';
 import { sql } from 'drizzle-orm';
 import { db } from '@/db';
-import { customers, member, organization, tickets, user, type TicketStatus } from '@/db/schema';
+import { customers, member, organization, user } from '@/db/schema';
 import { auth } from '@/lib/auth';
 import type { Role } from '@/lib/roles';
 import { seedHousePresets } from './presets';
+import { seedBenchDemo } from './demo-bench-seed';
 
 /** The demo shop's name. */
 export const DEMO_SHOP = 'Pinmark & Hem';
@@ -48,24 +49,7 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
     .insert(customers)
     .values(DEMO_CUSTOMERS.map((c) => ({ ...c, shopId })))
     .returning({ id: customers.id });
-  const jobs: { c: number; status: TicketStatus; who?: Role; note: string }[] = [
-    { c: 0, status: 'intake', note: 'Grey flannel: shorten, add cuffs.' },
-    { c: 1, status: 'queued', note: 'Two pairs of chinos: plain hem.' },
-    { c: 2, status: 'cutting', who: 'apprentice', note: 'Navy suit trousers: cuff 1½ in.' },
-    { c: 3, status: 'sewing', who: 'tailor', note: 'Let down 1 in, face the hem.' },
-    { c: 0, status: 'ready', note: 'Corduroy: shortened, plain hem.' },
-    { c: 1, status: 'collected', note: 'Linen trousers: taken up ¾ in.' },
-  ];
-  await db.insert(tickets).values(
-    jobs.map((j) => ({
-      shopId,
-      customerId: people[j.c]!.id,
-      status: j.status,
-      assigneeId: j.who ? ids[j.who] : null,
-      note: j.note,
-      createdById: ids.counter,
-    })),
-  );
+  await seedBenchDemo(shopId, people.map((p) => p.id), ids);
   await seedHousePresets(shopId);
   return true;
 }

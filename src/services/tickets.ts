@@ -1,20 +1,18 @@
-// A shop's tickets: the queue, intake and moving a job along its steps.
-import { and, desc, eq, isNull, or } from 'drizzle-orm';
-import type { z } from 'zod';
+// A shop's tickets: intake (with its garments), one ticket's page, and moving a whole ticket on.
+import { and, asc, desc, eq, isNull, or, sql } from 'drizzle-orm';
 import { db } from '@/db';
-import { customers, tickets, type Ticket, type TicketStatus, TICKET_STATUSES } from '@/db/schema';
-import type { ticketInput } from '@/db/schema/tickets';
+import { customers, garments, tickets, type Ticket } from '@/db/schema';
 import type { Actor } from '@/lib/api';
+import { intakeRequest, type IntakeInput } from '@/lib/bench-requests';
+import type { TicketDetail } from '@/lib/bench-types';
+import { nextStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
 import { can } from '@/lib/roles';
-import { ServiceError } from './errors';
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 import { audit } from './audit';
+import { ServiceError } from './errors';
+import { garmentsOfTicket, garmentVisibleTo, isUuid, moveVisible, refreshTicketStatus, staffOf, summaries } from './garments';
 
-/** The actor's view of the shop's tickets: all of them, or only assigned-to-me and unassigned. */
-export async function listTickets(actor: Actor): Promise<Ticket[]> {
-  return db.select().from(tickets).where(visibleTo(actor)).orderBy(desc(tickets.createdAt));
-}
+/** A ticket as listed: the row plus who it is for and how many garments it holds. */
+export type TicketListItem = Ticket & { customerName: string | null; garmentCount: number };
 
 function visibleTo(actor: Actor) {
   const inShop = eq(tickets.shopId, actor.shopId);
@@ -23,45 +21,94 @@ function visibleTo(actor: Actor) {
     : and(inShop, or(eq(tickets.assigneeId, actor.userId), isNull(tickets.assigneeId)));
 }
 
-/** Opens a ticket at intake; the customer must be one of the shop's. */
-export async function createTicket(actor: Actor, input: z.infer<typeof ticketInput>): Promise<Ticket> {
+/** The actor's view of the shop's tickets: all of them, or only assigned-to-me and unassigned. */
+export async function listTickets(actor: Actor): Promise<TicketListItem[]> {
+  const rows = await db
+    .select({
+      t: tickets,
+      customerName: customers.name,
+      garmentCount: sql<number>`(select count(*)::int from ${garments} where ${garments.ticketId} = ${tickets.id})`,
+    })
+    .from(tickets)
+    .leftJoin(customers, eq(customers.id, tickets.customerId))
+    .where(visibleTo(actor))
+    .orderBy(desc(tickets.number));
+  return rows.map((r) => ({ ...r.t, customerName: r.customerName, garmentCount: r.garmentCount }));
+}
+
+/** One ticket with its customer and the garments the actor may see. */
+export async function getTicket(actor: Actor, id: string): Promise<TicketDetail> {
+  if (!isUuid(id)) throw new ServiceError(404, 'No such ticket in this shop.');
+  const [t] = await db.select().from(tickets).where(and(eq(tickets.id, id), visibleTo(actor)));
+  if (!t) throw new ServiceError(404, 'No such ticket in this shop.');
+  const [c] = t.customerId ? await db.select().from(customers).where(eq(customers.id, t.customerId)) : [];
+  const rows = await db.select().from(garments).where(and(eq(garments.ticketId, id), garmentVisibleTo(actor))).orderBy(asc(garments.position));
+  return {
+    id: t.id,
+    number: t.number,
+    status: t.status,
+    note: t.note,
+    dueOn: t.dueOn,
+    createdAt: t.createdAt.toISOString(),
+    customer: c ? { id: c.id, name: c.name, phone: c.phone, email: c.email, notes: c.notes } : null,
+    garments: await summaries(rows),
+  };
+}
+
+/** Opens a ticket with the next number of the shop, its customer (existing or new) and its garments. */
+export async function createTicket(actor: Actor, typed: IntakeInput): Promise<Ticket> {
+  const input = intakeRequest.parse(typed);
   if (input.customerId) {
-    const [c] = await db
-      .select({ id: customers.id })
-      .from(customers)
-      .where(and(eq(customers.id, input.customerId), eq(customers.shopId, actor.shopId)));
+    const [c] = await db.select({ id: customers.id }).from(customers).where(and(eq(customers.id, input.customerId), eq(customers.shopId, actor.shopId)));
     if (!c) throw new ServiceError(422, 'No such customer in this shop.');
   }
-  const [row] = await db
-    .insert(tickets)
-    .values({ ...input, shopId: actor.shopId, createdById: actor.userId })
-    .returning();
-  await audit(actor.shopId, actor.userId, 'ticket.created', row!.id);
-  return row!;
-}
-
-/** The one step after this status, or null at the end. */
-export function nextStatus(status: TicketStatus): TicketStatus | null {
-  return TICKET_STATUSES[TICKET_STATUSES.indexOf(status) + 1] ?? null;
-}
-
-/** Moves a ticket one step on: pickup (ready → collected) needs the pickup permission. */
-export async function moveTicket(actor: Actor, id: string, to: TicketStatus): Promise<Ticket> {
-  if (!UUID.test(id)) throw new ServiceError(404, 'No such ticket in this shop.');
-  const [visible] = await db.select().from(tickets).where(and(eq(tickets.id, id), visibleTo(actor)));
-  if (!visible) throw new ServiceError(404, 'No such ticket in this shop.');
-  if (nextStatus(visible.status) !== to) {
-    throw new ServiceError(422, `A ticket at ${visible.status} can only move to ${nextStatus(visible.status) ?? 'nothing'}.`);
-  }
-  const needs = to === 'collected' ? can(actor.role, ['tickets', 'pickup']) : can(actor.role, ['tickets', 'advance']);
-  if (!needs) throw new ServiceError(422, `Your role (${actor.role}) may not move a ticket to ${to}.`);
-  const [row] = await db
-    .update(tickets)
-    .set({ status: to, updatedAt: new Date() })
-    .where(and(eq(tickets.id, id), eq(tickets.shopId, actor.shopId), eq(tickets.status, visible.status)))
-    .returning();
-  if (!row) throw new ServiceError(409, 'Someone else moved this ticket first: reload and try again.');
-  await audit(actor.shopId, actor.userId, 'ticket.moved', id, { from: visible.status, to });
+  const people = new Set((await staffOf(actor)).map((p) => p.userId));
+  if (input.garments.some((g) => g.assigneeId && !people.has(g.assigneeId))) throw new ServiceError(422, 'Give each garment to someone in this shop.');
+  const row = await db.transaction(async (tx) => {
+    // One number at a time per shop, also when several counters take work in at once.
+    await tx.execute(sql`select pg_advisory_xact_lock(hashtext(${actor.shopId}))`);
+    const [last] = await tx.select({ n: sql<number | null>`max(${tickets.number})` }).from(tickets).where(eq(tickets.shopId, actor.shopId));
+    let customerId = input.customerId;
+    if (!customerId && input.customer) {
+      const [c] = await tx.insert(customers).values({ ...input.customer, shopId: actor.shopId }).returning({ id: customers.id });
+      customerId = c!.id;
+    }
+    const [t] = await tx
+      .insert(tickets)
+      .values({ shopId: actor.shopId, number: (last?.n ?? 1000) + 1, customerId, note: input.note, dueOn: input.dueOn, createdById: actor.userId })
+      .returning();
+    if (input.garments.length) {
+      await tx.insert(garments).values(
+        input.garments.map((g, position) => ({ shopId: actor.shopId, ticketId: t!.id, position, description: g.description, dueOn: g.dueOn ?? input.dueOn, assigneeId: g.assigneeId })),
+      );
+    }
+    return t!;
+  });
+  await audit(actor.shopId, actor.userId, 'ticket.created', row.id, { number: row.number, garments: input.garments.length });
   return row;
 }
 
+/** The one step after this status, or null at the end. */
+export function nextStatus(status: GarmentStep): GarmentStep | null {
+  return nextStep(status);
+}
+
+/** Moves every garment standing at the ticket's step on to the next one (pickup needs the pickup permission). */
+export async function moveTicket(actor: Actor, id: string, to: GarmentStep): Promise<Ticket> {
+  if (!isUuid(id)) throw new ServiceError(404, 'No such ticket in this shop.');
+  const [visible] = await db.select().from(tickets).where(and(eq(tickets.id, id), visibleTo(actor)));
+  if (!visible) throw new ServiceError(404, 'No such ticket in this shop.');
+  const next = nextStep(visible.status);
+  if (next !== to) {
+    throw new ServiceError(422, next ? `Ticket T-${visible.number} is ${stepLabel(visible.status)}: it can only move on to ${stepLabel(next)}.` : `Ticket T-${visible.number} has been collected.`);
+  }
+  const behind = (await garmentsOfTicket(actor.shopId, id)).filter((g) => g.status === visible.status);
+  if (!can(actor.role, ['tickets', 'read-all']) && behind.some((g) => g.assigneeId && g.assigneeId !== actor.userId)) {
+    throw new ServiceError(422, `Some garments of T-${visible.number} are someone else's: move yours one by one.`);
+  }
+  if (behind.length === 0) throw new ServiceError(422, `Ticket T-${visible.number} has no garments yet: add one first.`);
+  for (const g of behind) await moveVisible(actor, g, to);
+  await refreshTicketStatus(actor.shopId, id);
+  const [row] = await db.select().from(tickets).where(eq(tickets.id, id));
+  return row!;
+}

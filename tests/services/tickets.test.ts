@@ -1,5 +1,5 @@
 // Tickets: each shop sees only its own; an apprentice sees assigned-to-them and unassigned; a
-// ticket moves one step at a time, and pickup is the counter's (or lead's).
+// ticket gets the shop's next number, and its status follows its least advanced garment.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { eq } from 'drizzle-orm';
 
@@ -10,8 +10,9 @@ vi.mock('@/db', async () => {
 });
 
 const { db, handle } = await import('@/db');
-const { tickets } = await import('@/db/schema');
-const { createTicket, listTickets, moveTicket, nextStatus } = await import('@/services/tickets');
+const { tickets, auditEvents } = await import('@/db/schema');
+const { createTicket, getTicket, listTickets, moveTicket, nextStatus } = await import('@/services/tickets');
+const { garmentsOfTicket, moveGarment } = await import('@/services/garments');
 const { createCustomer } = await import('@/services/customers');
 const { ServiceError } = await import('@/services/errors');
 const { makeShop } = await import('./fixtures');
@@ -25,6 +26,8 @@ beforeAll(async () => {
 });
 afterAll(() => handle.close());
 
+const pair = [{ description: 'Navy trousers' }, { description: 'Grey trousers' }];
+
 describe('tickets', () => {
   it('are listed only to members of their own shop', async () => {
     const mine = await createTicket(a.counter, { note: 'A only' });
@@ -37,15 +40,38 @@ describe('tickets', () => {
     expect(seenByB).not.toContain(mine.id);
   });
 
+  it('are numbered one after another per shop, from 1001', async () => {
+    const shop = await makeShop('Numbering Shop', ['counter']);
+    const other = await makeShop('Other Numbering Shop', ['counter']);
+    const first = await createTicket(shop.counter, {});
+    const second = await createTicket(shop.counter, {});
+    const elsewhere = await createTicket(other.counter, {});
+    expect([first.number, second.number, elsewhere.number]).toEqual([1001, 1002, 1001]);
+  });
+
+  it('take their garments and a new customer at intake', async () => {
+    const t = await createTicket(a.counter, { customer: { name: 'Walk-in Person', phone: '555-0100' }, garments: pair });
+    const detail = await getTicket(a.counter, t.id);
+    expect(detail.customer?.name).toBe('Walk-in Person');
+    expect(detail.garments.map((g) => [g.description, g.status])).toEqual([
+      ['Navy trousers', 'received'],
+      ['Grey trousers', 'received'],
+    ]);
+  });
+
   it("refuse another shop's customer at intake", async () => {
     const customer = await createCustomer(b.counter, { name: 'Belongs to B' });
     await expect(createTicket(a.counter, { customerId: customer.id })).rejects.toMatchObject({ status: 422 });
   });
 
+  it('refuse to give a garment to someone outside the shop', async () => {
+    await expect(createTicket(a.counter, { garments: [{ description: 'x', assigneeId: b.tailor.userId }] })).rejects.toMatchObject({ status: 422 });
+  });
+
   it('show an apprentice only tickets assigned to them or to nobody', async () => {
     const open = await createTicket(a.lead, { note: 'unassigned' });
     const theirs = await createTicket(a.lead, { note: 'for the apprentice' });
-    const tailors = await createTicket(a.lead, { note: "for the tailor" });
+    const tailors = await createTicket(a.lead, { note: 'for the tailor' });
     await db.update(tickets).set({ assigneeId: a.apprentice.userId }).where(eq(tickets.id, theirs.id));
     await db.update(tickets).set({ assigneeId: a.tailor.userId }).where(eq(tickets.id, tailors.id));
     const seen = (await listTickets(a.apprentice)).map((t) => t.id);
@@ -54,27 +80,46 @@ describe('tickets', () => {
     expect((await listTickets(a.tailor)).map((t) => t.id)).toContain(tailors.id);
   });
 
-  it('move one step at a time, never skipping or going back', async () => {
-    const t = await createTicket(a.lead, { note: 'steps' });
-    await expect(moveTicket(a.tailor, t.id, 'cutting')).rejects.toMatchObject({ status: 422 });
-    expect((await moveTicket(a.tailor, t.id, 'queued')).status).toBe('queued');
-    expect((await moveTicket(a.apprentice, t.id, 'cutting')).status).toBe('cutting');
-    await expect(moveTicket(a.apprentice, t.id, 'queued')).rejects.toBeInstanceOf(ServiceError);
+  it('stand at the step of their least advanced garment', async () => {
+    const t = await createTicket(a.lead, { garments: pair });
+    const [navy, grey] = await garmentsOfTicket(a.shopId, t.id);
+    await moveGarment(a.tailor, navy!.id, 'marked');
+    await moveGarment(a.tailor, navy!.id, 'cut');
+    expect((await getTicket(a.lead, t.id)).status).toBe('received');
+    await moveGarment(a.tailor, grey!.id, 'marked');
+    expect((await getTicket(a.lead, t.id)).status).toBe('marked');
+  });
+
+  it('move all garments at the ticket step one step at a time, never skipping or going back', async () => {
+    const t = await createTicket(a.lead, { garments: pair });
+    await expect(moveTicket(a.tailor, t.id, 'cut')).rejects.toMatchObject({ status: 422 });
+    expect((await moveTicket(a.tailor, t.id, 'marked')).status).toBe('marked');
+    expect((await garmentsOfTicket(a.shopId, t.id)).map((g) => g.status)).toEqual(['marked', 'marked']);
+    expect((await moveTicket(a.apprentice, t.id, 'cut')).status).toBe('cut');
+    await expect(moveTicket(a.apprentice, t.id, 'marked')).rejects.toBeInstanceOf(ServiceError);
     expect(nextStatus('collected')).toBeNull();
+    const moves = await db.select().from(auditEvents).where(eq(auditEvents.action, 'garment.moved'));
+    expect(moves.filter((e) => (e.detail as { to: string }).to === 'cut').length).toBeGreaterThanOrEqual(2);
+  });
+
+  it('refuse to move a ticket with no garments', async () => {
+    const t = await createTicket(a.lead, {});
+    await expect(moveTicket(a.lead, t.id, 'marked')).rejects.toMatchObject({ status: 422 });
   });
 
   it('leave pickup to the counter and the lead', async () => {
-    const t = await createTicket(a.lead, { note: 'pickup' });
-    for (const s of ['queued', 'cutting', 'sewing', 'pressing', 'ready'] as const) await moveTicket(a.tailor, t.id, s);
+    const t = await createTicket(a.lead, { garments: [{ description: 'pickup' }] });
+    for (const s of ['marked', 'cut', 'stitched', 'pressed', 'ready'] as const) await moveTicket(a.tailor, t.id, s);
     await expect(moveTicket(a.apprentice, t.id, 'collected')).rejects.toMatchObject({ status: 422 });
     await expect(moveTicket(a.tailor, t.id, 'collected')).rejects.toMatchObject({ status: 422 });
     expect((await moveTicket(a.counter, t.id, 'collected')).status).toBe('collected');
   });
 
   it("answer 404 for another shop's ticket and for ids that are not ids", async () => {
-    const t = await createTicket(b.lead, { note: 'B' });
-    await expect(moveTicket(a.lead, t.id, 'queued')).rejects.toMatchObject({ status: 404 });
-    await expect(moveTicket(a.lead, 'not-a-uuid', 'queued')).rejects.toMatchObject({ status: 404 });
-    expect((await db.select().from(tickets).where(eq(tickets.id, t.id)))[0]!.status).toBe('intake');
+    const t = await createTicket(b.lead, { garments: [{ description: 'B' }] });
+    await expect(moveTicket(a.lead, t.id, 'marked')).rejects.toMatchObject({ status: 404 });
+    await expect(getTicket(a.lead, t.id)).rejects.toMatchObject({ status: 404 });
+    await expect(moveTicket(a.lead, 'not-a-uuid', 'marked')).rejects.toMatchObject({ status: 404 });
+    expect((await db.select().from(tickets).where(eq(tickets.id, t.id)))[0]!.status).toBe('received');
   });
 });

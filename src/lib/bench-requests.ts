@@ -1,0 +1,79 @@
+// What the bench's API routes accept (intake, garments, step moves, shop bench settings), checked
+// the same way in the islands' forms and on the server. Plain zod: islands import it.
+import { z } from 'zod';
+import { GARMENT_STEPS } from './garment-steps';
+
+const blankToNull = (v: string | null | undefined) => (v === '' || v === undefined ? null : v);
+
+/** A due date as typed in a date input: YYYY-MM-DD, or blank for none. */
+export const dueDate = z
+  .union([z.iso.date('Use a date like 2026-03-14'), z.literal(''), z.null()])
+  .optional()
+  .transform(blankToNull);
+
+/** Who works on it: a person's user id, or blank for nobody yet. */
+export const assignee = z
+  .union([z.string().trim().max(64, 'Choose someone from the list.'), z.null()])
+  .optional()
+  .transform(blankToNull);
+
+/** One garment as intake or the ticket page types it. */
+export const garmentInput = z.object({
+  description: z.string().trim().min(1, 'Describe the garment, e.g. "Navy wool trousers".').max(200, 'Keep it under 200 characters.'),
+  dueOn: dueDate,
+  assigneeId: assignee,
+});
+
+/** A change to a garment's description, due date or assignee. */
+export const garmentPatch = garmentInput.partial();
+
+/** Optional text: blank or missing is null. */
+const optionalText = (max: number, message: string) => z.union([z.string().trim().max(max, message), z.null()]).optional().transform(blankToNull);
+
+/** A new customer typed at intake. */
+export const newCustomer = z.object({
+  name: z.string().trim().min(1, 'Give the customer a name').max(120, 'Keep the name under 120 characters.'),
+  phone: optionalText(40, 'Keep the phone number under 40 characters.'),
+  email: z.union([z.email('Enter an e-mail address like name@example.com').max(200), z.literal(''), z.null()]).optional().transform(blankToNull),
+  notes: optionalText(2000, 'Keep the notes under 2000 characters.'),
+});
+
+/** The body of POST /api/tickets: an existing or a new customer, a note, and the garments brought in. */
+export const intakeRequest = z.object({
+  customerId: z.union([z.uuid('Choose a customer from the list.'), z.literal(''), z.null()]).optional().transform(blankToNull),
+  customer: newCustomer.optional(),
+  note: optionalText(2000, 'Keep the note under 2000 characters.'),
+  dueOn: dueDate,
+  garments: z.array(garmentInput).max(20, 'Open a second ticket for more than 20 garments.').default([]),
+});
+
+/** Intake as typed. */
+export type IntakeInput = z.input<typeof intakeRequest>;
+/** Intake once checked. */
+export type Intake = z.output<typeof intakeRequest>;
+
+/** The body of POST /api/garments/[id]/step: the step to move to (the next one). */
+export const stepRequest = z.object({ to: z.enum(GARMENT_STEPS, { error: 'Choose one of the bench steps.' }) });
+
+/** How a shop types and shows lengths: inches to 1/8 or 1/16, cm or mm. */
+export const SCALES = ['in8', 'in16', 'cm', 'mm'] as const;
+/** A shop's measuring scale. */
+export type Scale = (typeof SCALES)[number];
+/** Each scale on screen. */
+export const SCALE_LABELS: Record<Scale, string> = { in8: 'Inches, to 1/8', in16: 'Inches, to 1/16', cm: 'Centimetres', mm: 'Millimetres' };
+
+/** The unit and inch precision a scale stands for. */
+export function scaleUnit(scale: Scale): { unit: 'in' | 'cm' | 'mm'; precision: 8 | 16 } {
+  return scale === 'in8' ? { unit: 'in', precision: 8 } : scale === 'in16' ? { unit: 'in', precision: 16 } : { unit: scale, precision: 8 };
+}
+
+/** The body of PUT /api/bench-settings. */
+export const settingsRequest = z.object({
+  scale: z.enum(SCALES, { error: 'Choose inches (1/8 or 1/16), cm or mm.' }),
+  stepLabels: z.partialRecord(z.enum(GARMENT_STEPS), z.string().trim().max(40, 'Keep a step name under 40 characters.')).default({}),
+});
+
+/** A ticket's number as said at the counter. */
+export function ticketLabel(number: number): string {
+  return `T-${number}`;
+}

@@ -1,0 +1,82 @@
+// The shapes the bench's API routes answer with, for the islands to type their queries.
+import type { GarmentStep } from './garment-steps';
+import type { Scale } from './bench-requests';
+import type { SavedLeg } from './measurement-request';
+
+/** A person a garment can be given to. */
+export interface Person {
+  userId: string;
+  name: string;
+  role: string;
+}
+
+/** The shop's bench settings. */
+export interface BenchSettings {
+  scale: Scale;
+  stepLabels: Partial<Record<GarmentStep, string>>;
+}
+
+/** One garment in the queue. */
+export interface QueueRow {
+  id: string;
+  description: string;
+  status: GarmentStep;
+  dueOn: string | null;
+  assigneeId: string | null;
+  assigneeName: string | null;
+  ticketId: string;
+  ticketNumber: number;
+  customerName: string | null;
+}
+
+/** A garment as listed on its ticket. */
+export interface GarmentSummary {
+  id: string;
+  description: string;
+  status: GarmentStep;
+  dueOn: string | null;
+  assigneeId: string | null;
+  assigneeName: string | null;
+}
+
+/** The customer as a ticket or garment shows them. */
+export interface CustomerCard {
+  id: string;
+  name: string;
+  phone: string | null;
+  email: string | null;
+  notes: string | null;
+}
+
+/** A ticket with its customer and garments. */
+export interface TicketDetail {
+  id: string;
+  number: number;
+  status: GarmentStep;
+  note: string | null;
+  dueOn: string | null;
+  createdAt: string;
+  customer: CustomerCard | null;
+  garments: GarmentSummary[];
+}
+
+/** One recorded change, newest first on screen. */
+export interface AuditEntry {
+  id: string;
+  at: string;
+  actorName: string | null;
+  action: string;
+  detail: Record<string, unknown>;
+}
+
+/** A garment with its ticket and customer. */
+export interface GarmentDetail extends GarmentSummary {
+  ticket: { id: string; number: number; status: GarmentStep; note: string | null };
+  customer: CustomerCard | null;
+}
+
+/** A garment's fitting: both legs as saved and every recorded change, newest first. */
+export interface FittingView {
+  legs: SavedLeg[];
+  history: AuditEntry[];
+}

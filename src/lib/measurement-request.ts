@@ -1,0 +1,100 @@
+// What a fitting records for each leg, checked the same way in the garment page's form and on the
+// server (PUT /api/garments/[id]/measurements). Only the shape is checked here; the server reads
+// each length with the engine's parseLength and answers 422 for the field it cannot read.
+import { z } from 'zod';
+import { unitSchema } from './plan-request';
+
+/** The two legs, left first; they are measured apart because they can differ. */
+export const LEGS = ['left', 'right'] as const;
+/** A leg. */
+export type Leg = (typeof LEGS)[number];
+
+/** How a leg is finished. */
+export const FINISHES = ['cuff', 'plain', 'slope'] as const;
+/** A finish. */
+export type Finish = (typeof FINISHES)[number];
+
+/** Each finish on screen. */
+export const FINISH_LABELS: Record<Finish, string> = { cuff: 'Cuff', plain: 'Plain hem', slope: 'Plain, sloped' };
+
+/** Every length a leg can record, in the order the form asks for them. */
+export const LEG_LENGTHS = [
+  'backPin', 'frontPin', 'cuffDepth', 'hemSection', 'turnUnder', 'hemAllowance', 'slope',
+  'available', 'oldCrease', 'widthAtEdge', 'widthAbove', 'heightAbove', 'seamAllowance',
+] as const;
+/** One recorded length of a leg. */
+export type LegLength = (typeof LEG_LENGTHS)[number];
+
+/** Each length's label, in trade words. */
+export const LEG_LENGTH_LABELS: Record<LegLength, string> = {
+  backPin: 'Pin at the back (finished length)',
+  frontPin: 'Front pin',
+  cuffDepth: 'Cuff depth',
+  hemSection: 'Third section',
+  turnUnder: 'Turn-under',
+  hemAllowance: 'Hem allowance',
+  slope: 'Slope (lower at the back)',
+  available: 'Cloth below the mark',
+  oldCrease: 'Old crease below the mark',
+  widthAtEdge: 'Width at the finished edge (flat)',
+  widthAbove: 'Width higher up (flat)',
+  heightAbove: 'Height of that width above the edge',
+  seamAllowance: 'Seam allowance at each seam',
+};
+
+const length = (what: string) =>
+  z.string({ error: `${what}: type a length such as 1 1/2 or 38.` }).trim().max(40, `${what} is too long: type a length such as 1 1/2.`);
+
+/** One leg as typed: the finish, an optional preset name, and every length as text ('' = not taken). */
+export const legInput = z.object({
+  finish: z.enum(FINISHES, { error: 'Choose cuff, plain hem or sloped hem.' }),
+  preset: z.string().trim().max(60, 'Keep the preset name under 60 characters.').default(''),
+  ...(Object.fromEntries(LEG_LENGTHS.map((f) => [f, length(LEG_LENGTH_LABELS[f]).default('')])) as Record<
+    LegLength,
+    z.ZodDefault<z.ZodString>
+  >),
+});
+
+/** The body of PUT /api/garments/[id]/measurements: the unit typed in and both legs. */
+export const measurementsRequest = z.object({
+  unit: unitSchema,
+  legs: z.object({ left: legInput, right: legInput }),
+});
+
+/** Both legs as the form holds them. */
+export type MeasurementsInput = z.input<typeof measurementsRequest>;
+/** Both legs once checked. */
+export type Measurements = z.output<typeof measurementsRequest>;
+/** One leg once checked. */
+export type LegValues = z.output<typeof legInput>;
+
+/** A length as saved: the text as typed and its exact value in mm. */
+export interface SavedLength {
+  text: string;
+  mm: number;
+}
+
+/** One leg as the API returns it. */
+export interface SavedLeg {
+  leg: Leg;
+  unit: 'in' | 'cm' | 'mm';
+  finish: Finish;
+  preset: string | null;
+  values: Partial<Record<LegLength, SavedLength>>;
+  takenAt: string;
+  takenBy: string | null;
+}
+
+/** A blank leg, ready for a cuff. */
+export function blankLeg(finish: Finish = 'cuff'): LegValues {
+  return { finish, preset: '', ...(Object.fromEntries(LEG_LENGTHS.map((f) => [f, ''])) as Record<LegLength, string>) };
+}
+
+/** The form's values for a saved leg (or a blank one). */
+export function legFormValues(saved: SavedLeg | undefined): LegValues {
+  if (!saved) return blankLeg();
+  const leg = blankLeg(saved.finish);
+  leg.preset = saved.preset ?? '';
+  for (const f of LEG_LENGTHS) leg[f] = saved.values[f]?.text ?? '';
+  return leg;
+}

@@ -1,0 +1,187 @@
+// Garments on the bench: the queue, one garment's page, adding and editing them, and moving one
+// step along. A ticket's status follows its least advanced garment.
+import { and, asc, eq, isNull, or } from 'drizzle-orm';
+import type { z } from 'zod';
+import { db } from '@/db';
+import { customers, garments, member, tickets, user, type Garment } from '@/db/schema';
+import type { Actor } from '@/lib/api';
+import type { garmentInput, garmentPatch } from '@/lib/bench-requests';
+import type { GarmentDetail, GarmentSummary, Person, QueueRow } from '@/lib/bench-types';
+import { leastAdvanced, nextStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
+import { can } from '@/lib/roles';
+import { audit } from './audit';
+import { ServiceError } from './errors';
+import { onGarmentMoved } from './garment-events';
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** True when the text is a uuid (anything else cannot name a row: 404, not a database error). */
+export function isUuid(id: string): boolean {
+  return UUID.test(id);
+}
+
+/** Garments the actor may see: all of the shop's, or (apprentice) their own and unassigned. */
+export function garmentVisibleTo(actor: Actor) {
+  const inShop = eq(garments.shopId, actor.shopId);
+  return can(actor.role, ['tickets', 'read-all'])
+    ? inShop
+    : and(inShop, or(eq(garments.assigneeId, actor.userId), isNull(garments.assigneeId)));
+}
+
+/** Every garment of a ticket of the shop, in the order they were taken in. */
+export async function garmentsOfTicket(shopId: string, ticketId: string): Promise<Garment[]> {
+  if (!isUuid(ticketId)) return [];
+  return db
+    .select()
+    .from(garments)
+    .where(and(eq(garments.shopId, shopId), eq(garments.ticketId, ticketId)))
+    .orderBy(asc(garments.position), asc(garments.createdAt));
+}
+
+/** The people of the actor's shop who can be given work, by name. */
+export async function staffOf(actor: Actor): Promise<Person[]> {
+  return db
+    .select({ userId: user.id, name: user.name, role: member.role })
+    .from(member)
+    .innerJoin(user, eq(user.id, member.userId))
+    .where(eq(member.organizationId, actor.shopId))
+    .orderBy(asc(user.name));
+}
+
+async function checkAssignee(actor: Actor, assigneeId: string | null | undefined): Promise<void> {
+  if (!assigneeId) return;
+  const [m] = await db.select({ id: member.id }).from(member).where(and(eq(member.organizationId, actor.shopId), eq(member.userId, assigneeId)));
+  if (!m) throw new ServiceError(422, 'Give the garment to someone in this shop.');
+}
+
+/** The queue: every garment the actor may see with its ticket number, customer and assignee. */
+export async function listQueue(actor: Actor): Promise<QueueRow[]> {
+  const rows = await db
+    .select({
+      id: garments.id,
+      description: garments.description,
+      status: garments.status,
+      dueOn: garments.dueOn,
+      assigneeId: garments.assigneeId,
+      assigneeName: user.name,
+      ticketId: garments.ticketId,
+      ticketNumber: tickets.number,
+      customerName: customers.name,
+    })
+    .from(garments)
+    .innerJoin(tickets, eq(tickets.id, garments.ticketId))
+    .leftJoin(customers, eq(customers.id, tickets.customerId))
+    .leftJoin(user, eq(user.id, garments.assigneeId))
+    .where(garmentVisibleTo(actor))
+    .orderBy(asc(garments.dueOn), asc(tickets.number), asc(garments.position));
+  return rows.map((r) => ({ ...r, description: r.description ?? 'Trousers' }));
+}
+
+/** The garment when the actor may see it, otherwise 404. */
+export async function visibleGarment(actor: Actor, id: string): Promise<Garment> {
+  if (!isUuid(id)) throw new ServiceError(404, 'No such garment in this shop.');
+  const [g] = await db.select().from(garments).where(and(eq(garments.id, id), garmentVisibleTo(actor)));
+  if (!g) throw new ServiceError(404, 'No such garment in this shop.');
+  return g;
+}
+
+/** Summaries of garments with their assignees' names. */
+export async function summaries(rows: Garment[]): Promise<GarmentSummary[]> {
+  const names = new Map<string, string>();
+  for (const g of rows) {
+    if (g.assigneeId && !names.has(g.assigneeId)) {
+      const [u] = await db.select({ name: user.name }).from(user).where(eq(user.id, g.assigneeId));
+      names.set(g.assigneeId, u?.name ?? '');
+    }
+  }
+  return rows.map((g) => ({
+    id: g.id,
+    description: g.description ?? 'Trousers',
+    status: g.status,
+    dueOn: g.dueOn,
+    assigneeId: g.assigneeId,
+    assigneeName: g.assigneeId ? names.get(g.assigneeId) || null : null,
+  }));
+}
+
+/** One garment with its ticket and customer. */
+export async function getGarment(actor: Actor, id: string): Promise<GarmentDetail> {
+  const g = await visibleGarment(actor, id);
+  const [t] = await db.select().from(tickets).where(eq(tickets.id, g.ticketId));
+  const [c] = t?.customerId ? await db.select().from(customers).where(eq(customers.id, t.customerId)) : [];
+  const [summary] = await summaries([g]);
+  return {
+    ...summary!,
+    ticket: { id: t!.id, number: t!.number, status: t!.status, note: t!.note },
+    customer: c ? { id: c.id, name: c.name, phone: c.phone, email: c.email, notes: c.notes } : null,
+  };
+}
+
+/** Sets the ticket's status to its least advanced garment's step. */
+export async function refreshTicketStatus(shopId: string, ticketId: string): Promise<GarmentStep> {
+  const steps = (await garmentsOfTicket(shopId, ticketId)).map((g) => g.status);
+  const status = leastAdvanced(steps);
+  await db.update(tickets).set({ status, updatedAt: new Date() }).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId)));
+  return status;
+}
+
+/** Adds a garment to a ticket of the shop. */
+export async function addGarment(actor: Actor, ticketId: string, input: z.output<typeof garmentInput>): Promise<Garment> {
+  if (!isUuid(ticketId)) throw new ServiceError(404, 'No such ticket in this shop.');
+  const [t] = await db.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
+  if (!t) throw new ServiceError(404, 'No such ticket in this shop.');
+  if (t.status === 'collected') throw new ServiceError(422, `Ticket T-${t.number} is collected: open a new ticket.`);
+  await checkAssignee(actor, input.assigneeId);
+  const position = (await garmentsOfTicket(actor.shopId, ticketId)).length;
+  const [row] = await db
+    .insert(garments)
+    .values({ shopId: actor.shopId, ticketId, description: input.description, dueOn: input.dueOn ?? t.dueOn, assigneeId: input.assigneeId, position })
+    .returning();
+  await audit(actor.shopId, actor.userId, 'garment.added', row!.id, { ticket: t.number, description: input.description });
+  await refreshTicketStatus(actor.shopId, ticketId);
+  return row!;
+}
+
+/** Changes a garment's description, due date or assignee; each change is kept in the history. */
+export async function updateGarment(actor: Actor, id: string, patch: z.output<typeof garmentPatch>): Promise<Garment> {
+  const g = await visibleGarment(actor, id);
+  await checkAssignee(actor, patch.assigneeId);
+  const changes: Record<string, { old: unknown; new: unknown }> = {};
+  for (const key of ['description', 'dueOn', 'assigneeId'] as const) {
+    if (key in patch && patch[key] !== undefined && patch[key] !== g[key]) changes[key] = { old: g[key], new: patch[key] };
+  }
+  if (Object.keys(changes).length === 0) return g;
+  const [row] = await db
+    .update(garments)
+    .set({ ...Object.fromEntries(Object.entries(changes).map(([k, v]) => [k, v.new])), updatedAt: new Date() })
+    .where(and(eq(garments.id, id), eq(garments.shopId, actor.shopId)))
+    .returning();
+  await audit(actor.shopId, actor.userId, 'garment.changed', id, changes);
+  return row!;
+}
+
+/** Moves a garment one step on; pickup (ready → collected) needs the pickup permission. */
+export async function moveGarment(actor: Actor, id: string, to: GarmentStep): Promise<Garment> {
+  const g = await visibleGarment(actor, id);
+  return moveVisible(actor, g, to);
+}
+
+/** Moves a garment already known to be visible to the actor (the ticket's move uses it too). */
+export async function moveVisible(actor: Actor, g: Garment, to: GarmentStep): Promise<Garment> {
+  const next = nextStep(g.status);
+  if (next !== to) {
+    throw new ServiceError(422, next ? `This garment is ${stepLabel(g.status)}: it can only move on to ${stepLabel(next)}.` : 'This garment has been collected: there is no step after that.');
+  }
+  const allowed = to === 'collected' ? can(actor.role, ['tickets', 'pickup']) : can(actor.role, ['tickets', 'advance']);
+  if (!allowed) throw new ServiceError(422, `Your role (${actor.role}) may not move a garment to ${stepLabel(to)}.`);
+  const [row] = await db
+    .update(garments)
+    .set({ status: to, updatedAt: new Date() })
+    .where(and(eq(garments.id, g.id), eq(garments.shopId, actor.shopId), eq(garments.status, g.status)))
+    .returning();
+  if (!row) throw new ServiceError(409, 'Someone else moved this garment first: reload and try again.');
+  await audit(actor.shopId, actor.userId, 'garment.moved', g.id, { from: g.status, to });
+  await refreshTicketStatus(actor.shopId, g.ticketId);
+  await onGarmentMoved(actor, row);
+  return row;
+}

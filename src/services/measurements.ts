@@ -1,0 +1,94 @@
+// Fitting measurements per leg: read with the engine's parser on save, kept as typed plus exact
+// mm, and every changed value recorded in the audit history (who, when, old and new).
+import { asc, eq } from 'drizzle-orm';
+import { db } from '@/db';
+import { measurements, user } from '@/db/schema';
+import { isAllowanceError, parseLength } from '@/lib/allowance';
+import type { Actor } from '@/lib/api';
+import type { FittingView } from '@/lib/bench-types';
+import { LEG_LENGTHS, LEGS, type Leg, type LegLength, type Measurements, type SavedLeg, type SavedLength } from '@/lib/measurement-request';
+import { auditMany, auditOf } from './audit';
+import { visibleGarment } from './garments';
+
+/** Both legs' lengths read exactly, or a message for each field that could not be read. */
+export type ReadLengths =
+  | { ok: true; legs: Record<Leg, Partial<Record<LegLength, SavedLength>>> }
+  | { ok: false; issues: Record<string, string> };
+
+/** Reads every length typed for both legs with parseLength; the issue keys are the form's paths. */
+export function readLengths(input: Measurements): ReadLengths {
+  const issues: Record<string, string> = {};
+  const legs = { left: {}, right: {} } as Record<Leg, Partial<Record<LegLength, SavedLength>>>;
+  for (const leg of LEGS) {
+    for (const field of LEG_LENGTHS) {
+      const text = input.legs[leg][field].trim();
+      if (text === '') continue;
+      try {
+        legs[leg][field] = { text, mm: parseLength(text, input.unit).mm };
+      } catch (e) {
+        if (!isAllowanceError(e)) throw e;
+        issues[`legs.${leg}.${field}`] = e.message;
+      }
+    }
+  }
+  return Object.keys(issues).length ? { ok: false, issues } : { ok: true, legs };
+}
+
+/** Both legs' saved measurements of a garment (none until the first fitting is saved). */
+export async function legsOf(garmentId: string): Promise<SavedLeg[]> {
+  const rows = await db
+    .select({ m: measurements, takenBy: user.name })
+    .from(measurements)
+    .leftJoin(user, eq(user.id, measurements.takenById))
+    .where(eq(measurements.garmentId, garmentId))
+    .orderBy(asc(measurements.leg));
+  return rows.map(({ m, takenBy }) => ({
+    leg: m.leg,
+    unit: m.unit,
+    finish: m.finish,
+    preset: m.preset,
+    values: m.values as SavedLeg['values'],
+    takenAt: m.takenAt.toISOString(),
+    takenBy,
+  }));
+}
+
+/** Saves both legs; each value that changed becomes one audit event. Answers the fitting as saved. */
+export async function saveMeasurements(
+  actor: Actor,
+  garmentId: string,
+  input: Measurements,
+  read: Record<Leg, Partial<Record<LegLength, SavedLength>>>,
+): Promise<FittingView> {
+  await visibleGarment(actor, garmentId);
+  const before = new Map((await legsOf(garmentId)).map((l) => [l.leg, l]));
+  const events: Parameters<typeof auditMany>[0] = [];
+  const change = (leg: Leg, field: string, old: string | null, now: string | null) => {
+    if ((old ?? '') !== (now ?? '')) {
+      events.push({ shopId: actor.shopId, actorId: actor.userId, action: 'measurement.changed', subject: garmentId, detail: { leg, field, old: old || null, new: now || null, unit: input.unit } });
+    }
+  };
+  await db.transaction(async (tx) => {
+    for (const leg of LEGS) {
+      const was = before.get(leg);
+      const typed = input.legs[leg];
+      change(leg, 'finish', was?.finish ?? null, typed.finish);
+      change(leg, 'preset', was?.preset ?? null, typed.preset || null);
+      if (was && was.unit !== input.unit) change(leg, 'unit', was.unit, input.unit);
+      for (const field of LEG_LENGTHS) change(leg, field, was?.values[field]?.text ?? null, read[leg][field]?.text ?? null);
+      const row = { unit: input.unit, finish: typed.finish, preset: typed.preset || null, values: read[leg], takenById: actor.userId, takenAt: new Date() };
+      await tx
+        .insert(measurements)
+        .values({ shopId: actor.shopId, garmentId, leg, ...row })
+        .onConflictDoUpdate({ target: [measurements.garmentId, measurements.leg], set: row });
+    }
+  });
+  await auditMany(events);
+  return fittingOf(actor, garmentId);
+}
+
+/** A garment's fitting as its page shows it: both legs and the history of changes, newest first. */
+export async function fittingOf(actor: Actor, garmentId: string): Promise<FittingView> {
+  const g = await visibleGarment(actor, garmentId);
+  return { legs: await legsOf(g.id), history: await auditOf(actor.shopId, [g.id]) };
+}

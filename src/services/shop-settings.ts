@@ -1,0 +1,23 @@
+// A shop's bench settings: the measuring scale and its own names for the bench steps.
+import { eq } from 'drizzle-orm';
+import type { z } from 'zod';
+import { db } from '@/db';
+import { shopSettings } from '@/db/schema';
+import type { Actor } from '@/lib/api';
+import type { settingsRequest } from '@/lib/bench-requests';
+import type { BenchSettings } from '@/lib/bench-types';
+import { audit } from './audit';
+
+/** The shop's settings, or the defaults (inches to 1/8, the usual step names) before any were saved. */
+export async function benchSettings(shopId: string): Promise<BenchSettings> {
+  const [row] = await db.select().from(shopSettings).where(eq(shopSettings.shopId, shopId));
+  return { scale: row?.scale ?? 'in8', stepLabels: (row?.stepLabels as BenchSettings['stepLabels']) ?? {} };
+}
+
+/** Saves the shop's settings. */
+export async function saveBenchSettings(actor: Actor, input: z.output<typeof settingsRequest>): Promise<BenchSettings> {
+  const values = { scale: input.scale, stepLabels: input.stepLabels, updatedAt: new Date() };
+  await db.insert(shopSettings).values({ shopId: actor.shopId, ...values }).onConflictDoUpdate({ target: shopSettings.shopId, set: values });
+  await audit(actor.shopId, actor.userId, 'settings.bench', actor.shopId, values);
+  return benchSettings(actor.shopId);
+}
