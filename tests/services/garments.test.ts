@@ -1,0 +1,103 @@
+// Garments: the queue per role, one step at a time with the pickup kept for the counter, the
+// garment-moved hook, edits kept in the history, and 404 across shops.
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+
+vi.mock('@/db', async () => {
+  const { openTestDb } = await import('../db/test-db');
+  const handle = await openTestDb();
+  return { handle, db: handle.db };
+});
+
+const { handle } = await import('@/db');
+const { createTicket } = await import('@/services/tickets');
+const { addGarment, garmentsOfTicket, getGarment, listQueue, moveGarment, updateGarment } = await import('@/services/garments');
+const { garmentMovedListeners } = await import('@/services/garment-events');
+const { fittingOf } = await import('@/services/measurements');
+const { makeShop } = await import('./fixtures');
+
+let a: Awaited<ReturnType<typeof makeShop>>;
+let b: Awaited<ReturnType<typeof makeShop>>;
+
+beforeAll(async () => {
+  a = await makeShop('Garment Shop A');
+  b = await makeShop('Garment Shop B');
+});
+afterAll(() => handle.close());
+
+async function oneGarment(shop = a, assigneeId: string | null = null) {
+  const t = await createTicket(shop.counter, { customer: { name: 'Queue Customer' }, garments: [{ description: 'Test trousers', assigneeId }] });
+  return (await garmentsOfTicket(shop.shopId, t.id))[0]!;
+}
+
+describe('garments', () => {
+  it('queue: the apprentice sees their own and unassigned work, not the tailor’s or another shop’s', async () => {
+    const mine = await oneGarment(a, a.apprentice.userId);
+    const open = await oneGarment(a);
+    const tailors = await oneGarment(a, a.tailor.userId);
+    const foreign = await oneGarment(b);
+    const seen = (await listQueue(a.apprentice)).map((r) => r.id);
+    expect(seen).toEqual(expect.arrayContaining([mine.id, open.id]));
+    expect(seen).not.toContain(tailors.id);
+    expect(seen).not.toContain(foreign.id);
+    const row = (await listQueue(a.lead)).find((r) => r.id === tailors.id)!;
+    expect(row.assigneeName).toBe('tailor of Garment Shop A');
+    expect(row.customerName).toBe('Queue Customer');
+    expect(row.ticketNumber).toBeGreaterThan(1000);
+  });
+
+  it('move one step at a time, and only the counter or lead collects', async () => {
+    const g = await oneGarment();
+    await expect(moveGarment(a.apprentice, g.id, 'cut')).rejects.toMatchObject({ status: 422 });
+    for (const to of ['marked', 'cut', 'stitched', 'pressed', 'ready'] as const) expect((await moveGarment(a.apprentice, g.id, to)).status).toBe(to);
+    await expect(moveGarment(a.apprentice, g.id, 'collected')).rejects.toMatchObject({ status: 422 });
+    expect((await moveGarment(a.counter, g.id, 'collected')).status).toBe('collected');
+    await expect(moveGarment(a.lead, g.id, 'collected')).rejects.toMatchObject({ status: 422 });
+  });
+
+  it('tell every garment-moved listener after each move, with who moved it', async () => {
+    const heard: string[] = [];
+    const listener = async (actor: { role: string }, garment: { status: string }) => void heard.push(`${actor.role}:${garment.status}`);
+    garmentMovedListeners.push(listener);
+    try {
+      const g = await oneGarment();
+      await moveGarment(a.tailor, g.id, 'marked');
+      await expect(moveGarment(a.tailor, g.id, 'stitched')).rejects.toMatchObject({ status: 422 });
+      expect(heard).toEqual(['tailor:marked']);
+    } finally {
+      garmentMovedListeners.splice(garmentMovedListeners.indexOf(listener), 1);
+    }
+  });
+
+  it('keep each change of description, due date or assignee in the history', async () => {
+    const g = await oneGarment();
+    await updateGarment(a.tailor, g.id, { dueOn: '2026-12-24', assigneeId: a.apprentice.userId });
+    const history = (await fittingOf(a.tailor, g.id)).history;
+    expect(history[0]).toMatchObject({
+      action: 'garment.changed',
+      actorName: 'tailor of Garment Shop A',
+      detail: { dueOn: { old: null, new: '2026-12-24' }, assigneeId: { old: null, new: a.apprentice.userId } },
+    });
+    expect((await getGarment(a.tailor, g.id)).assigneeName).toBe('apprentice of Garment Shop A');
+  });
+
+  it('refuse an assignee from another shop', async () => {
+    const g = await oneGarment();
+    await expect(updateGarment(a.lead, g.id, { assigneeId: b.tailor.userId })).rejects.toMatchObject({ status: 422 });
+  });
+
+  it('add a garment to an open ticket, not to another shop’s', async () => {
+    const t = await createTicket(a.counter, { garments: [{ description: 'first' }] });
+    await addGarment(a.counter, t.id, { description: 'second', dueOn: null, assigneeId: null });
+    expect((await garmentsOfTicket(a.shopId, t.id)).map((g) => g.description)).toEqual(['first', 'second']);
+    await expect(addGarment(b.counter, t.id, { description: 'sneaky', dueOn: null, assigneeId: null })).rejects.toMatchObject({ status: 404 });
+  });
+
+  it("answer 404 for another shop's garment, a garment hidden from the apprentice, and non-ids", async () => {
+    const foreign = await oneGarment(b);
+    const tailors = await oneGarment(a, a.tailor.userId);
+    await expect(getGarment(a.lead, foreign.id)).rejects.toMatchObject({ status: 404 });
+    await expect(moveGarment(a.lead, foreign.id, 'marked')).rejects.toMatchObject({ status: 404 });
+    await expect(getGarment(a.apprentice, tailors.id)).rejects.toMatchObject({ status: 404 });
+    await expect(getGarment(a.lead, 'nope')).rejects.toMatchObject({ status: 404 });
+  });
+});
