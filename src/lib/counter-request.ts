@@ -1,0 +1,53 @@
+// What the counter's routes accept, checked the same way in the islands' forms and on the server.
+import { z } from 'zod';
+import { CURRENCIES } from './pricing/money';
+import { PRICE_KEYS } from './pricing/price-keys';
+
+// Amounts are integer minor units; a million in any currency is no trouser alteration.
+const MAX_MINOR = 100_000_000;
+const amount = (what: string) =>
+  z
+    .number({ error: `Enter the ${what}.` })
+    .int(`${what[0]!.toUpperCase()}${what.slice(1)} must be whole minor units (cents, pence).`)
+    .min(0, `The ${what} cannot be below zero.`)
+    .max(MAX_MINOR, `The ${what} is far too large.`);
+
+/** One priced piece of work as the lead sets it. */
+export const priceItemInput = z.object({
+  key: z.enum(PRICE_KEYS),
+  label: z.string().trim().min(1, 'Name the line.').max(80, 'Keep the name under 80 characters.'),
+  amountMinor: amount('price'),
+});
+
+/** The lead's price list page: currency, hours, automatic ready notice and every line. */
+export const priceListInput = z.object({
+  currency: z.enum(Object.keys(CURRENCIES) as [keyof typeof CURRENCIES, ...(keyof typeof CURRENCIES)[]], { error: 'Choose a currency from the list.' }),
+  hours: z.string().trim().max(300, 'Keep the hours under 300 characters.'),
+  location: z.string().trim().max(120, 'Keep the address under 120 characters.'),
+  autoReadyNotice: z.boolean(),
+  items: z.array(priceItemInput).length(PRICE_KEYS.length, 'Send every line of the list.'),
+});
+
+/** Lines worked out from the garments' finishes and plans, with or without rush. */
+export const autoLinesInput = z.object({ rush: z.boolean() });
+
+/** A line added at the counter: from the list, or an adjustment with its reason. */
+export const lineInput = z.discriminatedUnion('source', [
+  z.object({ source: z.literal('list'), key: z.enum(PRICE_KEYS, { error: 'Choose a line from the price list.' }) }),
+  z.object({
+    source: z.literal('adjust'),
+    label: z.string().trim().min(1, 'Say what the adjustment is for.').max(80, 'Keep it under 80 characters.'),
+    amountMinor: z.number({ error: 'Enter the amount.' }).int('Whole minor units only.').min(-MAX_MINOR).max(MAX_MINOR).refine((n) => n !== 0, 'An adjustment of nothing changes nothing.'),
+    reason: z.string().trim().min(3, 'Give the reason for the adjustment.').max(300, 'Keep the reason under 300 characters.'),
+  }),
+]);
+
+/** A payment taken at the counter: the deposit at intake, or the balance at pickup. */
+export const paymentInput = z.object({
+  purpose: z.enum(['deposit', 'balance'], { error: 'Choose deposit or balance.' }),
+  method: z.enum(['cash', 'card'], { error: 'Choose cash or card.' }),
+  amountMinor: amount('amount').refine((n) => n > 0, 'Enter an amount above zero.'),
+});
+
+/** A notice the counter sends by hand. */
+export const noticeInput = z.object({ kind: z.literal('ready', { error: 'Only the ready notice can be sent.' }) });

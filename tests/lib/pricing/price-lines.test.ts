@@ -1,0 +1,77 @@
+// Price computation from garments' finishes and plans: which lines a ticket gets, and its balance.
+// Amounts are an invented shop's list; the taper cases go through the real engine (checkTaper).
+import { describe, expect, it } from 'vitest';
+import { checkTaper } from '@/lib/allowance';
+import { balanceOf, finishKey, priceTicket, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
+import { needsLetOut } from '@/lib/pricing/taper-let-out';
+
+// An invented list (minor units): not anyone's real prices.
+const LIST: PriceList = {
+  'plain-hem': { label: 'Plain hem', amountMinor: 1800 },
+  'cuff-from-hem': { label: 'Cuff from a plain hem', amountMinor: 2600 },
+  'cuff-remake': { label: 'Cuff let down and re-made', amountMinor: 3200 },
+  'taper-let-out': { label: 'Taper let-out', amountMinor: 1200 },
+  rush: { label: 'Rush', amountMinor: 1000 },
+};
+
+const garment = (over: Partial<GarmentFacts>): GarmentFacts => ({ garmentId: 'g1', label: 'Grey flannel', finish: 'hem', taperLetOut: false, oldCuff: false, ...over });
+
+describe('priceTicket', () => {
+  it('gives a plain hem its one line at the list price', () => {
+    const { lines, unpriced } = priceTicket([garment({ finish: 'hem' })], LIST, { rush: false });
+    expect(lines).toEqual([{ garmentId: 'g1', key: 'plain-hem', label: 'Plain hem — Grey flannel', amountMinor: 1800 }]);
+    expect(unpriced).toEqual([]);
+  });
+
+  it('tells a cuff made from a plain hem from an old cuff let down and re-made', () => {
+    expect(finishKey(garment({ finish: 'cuff' }))).toBe('cuff-from-hem');
+    expect(finishKey(garment({ finish: 'cuff', oldCuff: true }))).toBe('cuff-remake');
+    expect(finishKey(garment({ finish: null }))).toBeNull();
+  });
+
+  it('adds the taper let-out line to a cuff whose plan needs one, and never to a plain hem', () => {
+    const cuff = priceTicket([garment({ finish: 'cuff', taperLetOut: true })], LIST, { rush: false });
+    expect(cuff.lines.map((l) => l.key)).toEqual(['cuff-from-hem', 'taper-let-out']);
+    // A plain hem has no cuff top whose width must be carried down (TRADE.md, "The cuff, as a fold plan").
+    const hem = priceTicket([garment({ finish: 'hem', taperLetOut: true })], LIST, { rush: false });
+    expect(hem.lines.map((l) => l.key)).toEqual(['plain-hem']);
+  });
+
+  it('adds one rush line per ticket, not per garment', () => {
+    const two = [garment({ garmentId: 'a', finish: 'hem' }), garment({ garmentId: 'b', finish: 'cuff' })];
+    const { lines } = priceTicket(two, LIST, { rush: true });
+    expect(lines.filter((l) => l.key === 'rush')).toEqual([{ garmentId: null, key: 'rush', label: 'Rush', amountMinor: 1000 }]);
+    expect(balanceOf(lines, []).total).toBe(1800 + 2600 + 1000);
+  });
+
+  it('leaves garments without a finish unpriced, and adds no rush to an empty ticket', () => {
+    const { lines, unpriced } = priceTicket([garment({ garmentId: 'x', finish: null })], LIST, { rush: true });
+    expect(lines).toEqual([]);
+    expect(unpriced).toEqual(['x']);
+  });
+});
+
+describe('balanceOf', () => {
+  it('takes payments off the total and never shows a negative balance', () => {
+    expect(balanceOf([{ amountMinor: 2600 }, { amountMinor: 1200 }], [{ amountMinor: 1000 }])).toEqual({ total: 3800, paid: 1000, due: 2800 });
+    expect(balanceOf([{ amountMinor: 2600 }, { amountMinor: -600 }], [{ amountMinor: 2000 }])).toEqual({ total: 2000, paid: 2000, due: 0 });
+  });
+});
+
+describe('needsLetOut from the engine taper plan', () => {
+  // The cuff-top width must be kept straight down to the cut (TRADE.md, "The cuff, as a fold plan").
+  // Widths below are invented check values ("from memory" of ordinary trouser legs), not sources.
+  it('is true for a leg that narrows 1 in flat over 10 in towards the hem under a 1½ in cuff', () => {
+    const plan = checkTaper({ unit: 'in', cuffDepth: '1 1/2', widthAtEdge: '8', widthAbove: '9', heightAbove: '10', seamAllowance: '1' });
+    expect(needsLetOut(plan)).toBe(true);
+  });
+
+  it('is false for a straight leg (the same width above and at the edge)', () => {
+    const plan = checkTaper({ unit: 'in', cuffDepth: '1 1/2', widthAtEdge: '9', widthAbove: '9', heightAbove: '10', seamAllowance: '1' });
+    expect(needsLetOut(plan)).toBe(false);
+  });
+
+  it('is false when every line changes by no more than the tolerance', () => {
+    expect(needsLetOut({ withinTolerance: true, lines: [] })).toBe(false);
+  });
+});
