@@ -9,8 +9,8 @@ function length(what: string) {
     .string({ error: `${what}: type a length such as 1 1/2 or 38.` })
     .trim()
     .max(MAX_TEXT, `${what} is too long: type a length such as 1 1/2.`)
-    .optional()
-    .transform((v) => (v === '' ? undefined : v));
+    .transform((v) => (v === '' ? undefined : v))
+    .optional();
 }
 
 /** The lengths a preset can carry, with the words shown for each. */
