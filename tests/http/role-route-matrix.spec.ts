@@ -52,11 +52,26 @@ const markersOfA: string[] = [];
 const markersOfB: string[] = [];
 
 async function freshTicket(): Promise<string> {
-  const t = await call('POST', '/api/tickets', { cookie: cookies.lead, body: { note: 'matrix fixture' } });
-  const moved = await call('PATCH', `/api/tickets/${t.body.id}`, { cookie: cookies.lead, body: { status: 'queued' } });
+  const t = await call('POST', '/api/tickets', { cookie: cookies.lead, body: { note: 'matrix fixture', garments: [{ description: 'Matrix trousers' }] } });
+  const moved = await call('PATCH', `/api/tickets/${t.body.id}`, { cookie: cookies.lead, body: { status: 'marked' } });
   expect(moved.status).toBe(200);
   return t.body.id;
 }
+
+/** A fresh unassigned garment of shop A (the apprentice may see it). */
+async function freshGarment(): Promise<string> {
+  const ticket = await freshTicket();
+  const t = await call('GET', `/api/tickets/${ticket}`, { cookie: cookies.lead });
+  return t.body.garments[0].id;
+}
+
+const FITTING = {
+  unit: 'in',
+  legs: {
+    left: { finish: 'cuff', backPin: '31 1/4', cuffDepth: '1 1/2', available: '5' },
+    right: { finish: 'cuff', backPin: '31 1/2', cuffDepth: '1 1/2', available: '4 3/4' },
+  },
+};
 
 async function freshInvitation(): Promise<{ id: string; email: string }> {
   const email = freshEmail('invitee');
@@ -167,10 +182,91 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
     },
   },
   'tickets/[id]': {
+    GET: {
+      request: async () => ({ path: `/api/tickets/${await freshTicket()}` }),
+      expect: signedIn(200, { other: 404 }),
+      check: (a) => {
+        expect(a.body.number).toBeGreaterThan(1000);
+        expect(a.body.garments[0].status).toBe('marked');
+      },
+    },
     PATCH: {
-      request: async () => ({ path: `/api/tickets/${await freshTicket()}`, body: { status: 'cutting' } }),
+      // Moves every garment at the ticket's step; the ticket follows its garments.
+      request: async () => ({ path: `/api/tickets/${await freshTicket()}`, body: { status: 'cut' } }),
       expect: signedIn(200, { counter: 403, other: 404 }),
-      check: (a) => expect(a.body.status).toBe('cutting'),
+      check: (a) => expect(a.body.status).toBe('cut'),
+    },
+  },
+  'tickets/[id]/garments': {
+    POST: {
+      request: async () => ({ path: `/api/tickets/${await freshTicket()}/garments`, body: { description: 'Second pair' } }),
+      expect: signedIn(201, { apprentice: 403, other: 404 }),
+      check: (a, actor) => expect(a.body.shopId).toBe(ownShop(actor)),
+    },
+  },
+  garments: {
+    GET: {
+      request: () => ({ path: '/api/garments' }),
+      expect: signedIn(200),
+      check: (a, actor) => {
+        if (actor === 'lead') expect(a.body.length).toBeGreaterThanOrEqual(6);
+        if (actor === 'other') expect(a.body).toEqual([]);
+        if (actor === 'apprentice') for (const g of a.body) expect([null, apprenticeUserId]).toContain(g.assigneeId);
+      },
+    },
+  },
+  'garments/[id]': {
+    GET: {
+      request: async () => ({ path: `/api/garments/${await freshGarment()}` }),
+      expect: signedIn(200, { other: 404 }),
+      check: (a) => expect(a.body.ticket.number).toBeGreaterThan(1000),
+    },
+    PATCH: {
+      request: async () => ({ path: `/api/garments/${await freshGarment()}`, body: { dueOn: '2026-12-24' } }),
+      expect: signedIn(403, { lead: 200, tailor: 200, other: 404 }),
+      check: (a) => expect(a.body.dueOn).toBe('2026-12-24'),
+    },
+  },
+  'garments/[id]/step': {
+    POST: {
+      request: async () => ({ path: `/api/garments/${await freshGarment()}/step`, body: { to: 'cut' } }),
+      expect: signedIn(200, { counter: 403, other: 404 }),
+      check: (a) => expect(a.body.status).toBe('cut'),
+    },
+  },
+  'garments/[id]/measurements': {
+    GET: {
+      request: async () => ({ path: `/api/garments/${await freshGarment()}/measurements` }),
+      expect: signedIn(200, { counter: 403, other: 404 }),
+      check: (a) => expect(a.body.legs).toEqual([]),
+    },
+    PUT: {
+      request: async () => ({ path: `/api/garments/${await freshGarment()}/measurements`, body: FITTING }),
+      expect: signedIn(403, { lead: 200, tailor: 200, other: 404 }),
+      check: (a) => {
+        expect(a.body.legs.map((l: { values: { backPin: { mm: number } } }) => l.values.backPin.mm)).toEqual([793.75, 800.1]);
+        expect(a.body.history.filter((e: { action: string }) => e.action === 'measurement.changed').length).toBe(8);
+      },
+    },
+  },
+  'bench-settings': {
+    GET: {
+      request: () => ({ path: '/api/bench-settings' }),
+      expect: signedIn(200),
+      check: (a) => expect(['in8', 'in16', 'cm', 'mm']).toContain(a.body.scale),
+    },
+    PUT: {
+      // The demo shop keeps its defaults: the browser stories run on the same server.
+      request: () => ({ path: '/api/bench-settings', body: { scale: 'in8', stepLabels: {} } }),
+      expect: signedIn(403, { lead: 200, other: 200 }),
+      check: (a) => expect(a.body.scale).toBe('in8'),
+    },
+  },
+  assignees: {
+    GET: {
+      request: () => ({ path: '/api/assignees' }),
+      expect: signedIn(200),
+      check: (a, actor) => expect(a.body.length).toBeGreaterThanOrEqual(actor === 'other' ? 1 : 4),
     },
   },
   outbox: {
@@ -193,10 +289,11 @@ beforeAll(async () => {
   shopA = (await call('GET', '/api/me', { cookie: cookies.lead })).body.shop.id;
   const customers = (await call('GET', '/api/customers', { cookie: cookies.lead })).body as { id: string }[];
   const tickets = (await call('GET', '/api/tickets', { cookie: cookies.lead })).body as { id: string }[];
+  const garments = (await call('GET', '/api/garments', { cookie: cookies.lead })).body as { id: string }[];
   const staff = (await call('GET', '/api/staff', { cookie: cookies.lead })).body as { members: { id: string; userId: string; email: string; role: string }[] };
   aCustomerId = customers[0]!.id;
   apprenticeUserId = staff.members.find((m) => m.role === 'apprentice')!.userId;
-  markersOfA.push(shopA, ...customers.map((c) => c.id), ...tickets.map((t) => t.id), ...staff.members.flatMap((m) => [m.id, m.userId, m.email]));
+  markersOfA.push(shopA, ...customers.map((c) => c.id), ...tickets.map((t) => t.id), ...garments.map((g) => g.id), ...staff.members.flatMap((m) => [m.id, m.userId, m.email]));
   markersOfB.push(shopB, b.email);
   // Something in the outbox for the lead: an invitation mail to shop A.
   await freshInvitation();

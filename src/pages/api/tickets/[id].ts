@@ -1,10 +1,17 @@
-// One ticket: move it one step along (bench steps, or pickup at the counter).
+// One ticket: read it with its customer and garments, or move it (all its garments at its step) on.
 import type { APIRoute } from 'astro';
 import { guard, readBody, run } from '@/lib/api';
 import { ticketStatusInput } from '@/db/schema/tickets';
-import { moveTicket } from '@/services/tickets';
+import { getTicket, moveTicket } from '@/services/tickets';
 
-/** Moves the ticket to its next status. */
+/** The ticket with its customer and the garments the role may see. */
+export const GET: APIRoute = async ({ locals, params }) => {
+  const actor = guard(locals, ['tickets', 'read']);
+  if (actor instanceof Response) return actor;
+  return run(() => getTicket(actor, params.id ?? ''));
+};
+
+/** Moves the ticket to its next step. */
 export const PATCH: APIRoute = async ({ locals, request, params }) => {
   const input = await readBody(request.clone(), ticketStatusInput);
   const permission = input instanceof Response || input.status !== 'collected' ? 'advance' : 'pickup';
