@@ -173,16 +173,16 @@ function Steps({ c }: { c: SheetContent }) {
 }
 
 /** One page for one garment: header, legs with drawings, bench steps, cautions and chalk guide. */
-export function CutSheetPage({ data }: { data: CutSheetData }) {
+export function CutSheetPage({ data, wrap }: { data: CutSheetData; wrap: boolean }) {
   const size = data.pageSize ?? 'LETTER';
   const c = sheetContent(data);
   const page = PAGE_PT[size];
   const strips = guideStrips(c.groups, data.unit, page.height - 2 * PADDING - GUIDE_OVERHEAD);
   const mainWidth = page.width - 2 * PADDING - GUIDE_COLUMN;
-  // Pages wrap: a sheet too full for one page spills onto a second at the true paper size, never
-  // onto a taller page that a printer would shrink (the chalk guide must stay 1:1).
+  // Unwrapped, react-pdf lays the page out once instead of twice, but the page then grows with
+  // its content; the height keeps it at paper size when it fits (render.ts checks that it did).
   return (
-    <Page size={size} style={s.page}>
+    <Page size={size} style={wrap ? s.page : [s.page, { height: page.height, minHeight: page.height }]} wrap={wrap}>
       <Header c={c} link={data.link} />
       <View style={s.body}>
         <View style={[s.main, { width: mainWidth }]}>
@@ -199,13 +199,13 @@ export function CutSheetPage({ data }: { data: CutSheetData }) {
   );
 }
 
-/** A document of cut sheets, one page each. */
-export function cutSheetDocument(sheets: CutSheetData[]): ReactElement<DocumentProps> {
+/** A document of cut sheets, one page each; wrap lets an overfull sheet spill onto a second page. */
+export function cutSheetDocument(sheets: CutSheetData[], wrap = true): ReactElement<DocumentProps> {
   const first = sheets[0];
   return (
     <Document title={first && sheets.length === 1 ? `Cut sheet ${first.ticket ?? 'unsaved'}` : 'Cut sheets'} creator="Cuffwright" producer="Cuffwright">
       {sheets.map((d, i) => (
-        <CutSheetPage key={i} data={d} />
+        <CutSheetPage key={i} data={d} wrap={wrap} />
       ))}
     </Document>
   );

@@ -1,6 +1,6 @@
 // Cut sheets to PDF bytes. Server only: react-pdf and the font files never reach a browser.
 import { renderToBuffer } from '@react-pdf/renderer';
-import { cutSheetDocument } from './CutSheet';
+import { cutSheetDocument, PAGE_PT } from './CutSheet';
 import { registerFonts } from './fonts';
 import type { CutSheetData } from './types';
 
@@ -13,6 +13,15 @@ export function renderCutSheet(data: CutSheetData): Promise<Uint8Array<ArrayBuff
 export async function renderCutSheets(list: CutSheetData[]): Promise<Uint8Array<ArrayBuffer>> {
   if (list.length === 0) throw new Error('No cut sheets to render.');
   await registerFonts();
+  const fast = await renderToBuffer(cutSheetDocument(list, false));
+  // A sheet too full for its paper came out as a taller page, which a printer would shrink and
+  // the chalk guide would no longer be 1:1: render again, spilling onto a second page instead.
+  const bytes = atPaperSize(fast, list) ? fast : await renderToBuffer(cutSheetDocument(list, true));
   // A copy owns a plain ArrayBuffer, which a Response body accepts as it is.
-  return new Uint8Array(await renderToBuffer(cutSheetDocument(list)));
+  return new Uint8Array(bytes);
+}
+
+function atPaperSize(pdf: Uint8Array, list: CutSheetData[]): boolean {
+  const heights = [...Buffer.from(pdf).toString('latin1').matchAll(/\/MediaBox \[0 0 [\d.]+ ([\d.]+)\]/g)].map((m) => Number(m[1]));
+  return heights.length === list.length && heights.every((h, i) => Math.abs(h - PAGE_PT[list[i]!.pageSize ?? 'LETTER'].height) < 0.5);
 }

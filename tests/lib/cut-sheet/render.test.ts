@@ -5,6 +5,7 @@ import { UNSAVED_TITLE } from '@/lib/cut-sheet/content';
 import { buildCutSheet } from '@/lib/cut-sheet/build';
 import { flatText, fonts, layoutText, pageInfo, pdfFile, words } from './poppler';
 import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet, UNSAVED } from './sheets';
+import type { LegOrder } from '@/lib/cut-sheet/build';
 
 describe('a 1 1/2 in cuff with 5 in of cloth, inches', () => {
   let file = '';
@@ -180,6 +181,24 @@ describe('page sizes and batches', () => {
         expect(info).toEqual({ pages: 1, ...(pageSize === 'A4' ? { width: 595.28, height: 841.89 } : { width: 612, height: 792 }) });
         expectInsidePage(file, info.width, info.height);
       }
+    }
+  });
+
+  it('spills an overfull sheet onto a second page at the true paper size, the 1:1 guide intact', async () => {
+    // Both legs tapered past their seam allowance, an old crease on each, cloth short on one.
+    const heavy = (side: 'left' | 'right', available: string): LegOrder => ({
+      side,
+      finish: 'cuff',
+      input: { unit: 'in', precision: 16, cuffDepth: '2 1/4', available, oldCrease: side === 'left' ? 1 : '2 1/2', clothThickness: '1/16' },
+      taper: { widthAtEdge: 7.5, widthAbove: 9.5, heightAbove: 5, seamAllowance: '1/4' },
+    });
+    for (const [pageSize, height] of [['LETTER', 792], ['A4', 841.89]] as const) {
+      const file = pdfFile(await renderCutSheet({ ...sheet([heavy('left', '7'), heavy('right', '6 1/2')]), pageSize }));
+      const info = pageInfo(file);
+      expect(info.pages).toBe(2);
+      expect(info.height).toBe(height);
+      expect(flatText(file, 1)).toContain('CHALK GUIDE 1:1');
+      expect(flatText(file, 2)).toContain('local rules come first');
     }
   });
 
