@@ -35,6 +35,13 @@ export default defineConfig({
       MAIL_CAPTURE_DIR: envField.string({ context: 'server', access: 'secret', optional: true }),
       // Largest fitting photo accepted, in bytes (10 MB: a phone's full-size photo fits).
       PHOTO_MAX_BYTES: envField.number({ context: 'server', access: 'secret', default: 10 * 1024 * 1024 }),
+      // Online payment links through the payment service's SDK; PAYMENTS_API_BASE points it at the
+      // local fake (http://127.0.0.1:port) and is left unset for the real service.
+      PAYMENTS_API_KEY: envField.string({ context: 'server', access: 'secret', optional: true }),
+      PAYMENTS_API_BASE: envField.string({ context: 'server', access: 'secret', optional: true }),
+      PAYMENTS_WEBHOOK_SECRET: envField.string({ context: 'server', access: 'secret', optional: true }),
+      // How often the server retries failed notices and sends automatic ready notices.
+      NOTICE_TICK_SECONDS: envField.number({ context: 'server', access: 'secret', default: 30 }),
     },
   },
   vite: {

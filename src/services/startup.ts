@@ -1,7 +1,9 @@
 // Brings the database up once per process before the first request: migrations, then demo data.
-import { DEMO_SEED } from 'astro:env/server';
+import { DEMO_SEED, NOTICE_TICK_SECONDS } from 'astro:env/server';
 import { handle } from '@/db';
 import { seedDemoIfEmpty } from './demo-seed';
+import { startNoticeTimer } from './notices';
+import './ready-notice-listener';
 
 const holder = globalThis as typeof globalThis & { __cuffwrightReady?: Promise<void> };
 
@@ -9,6 +11,7 @@ async function start(): Promise<void> {
   const began = Date.now();
   await handle.migrate();
   const seeded = !DEMO_SEED ? false : await seedDemoIfEmpty();
+  startNoticeTimer(NOTICE_TICK_SECONDS);
   console.log(`Database ready (${handle.kind}) in ${Date.now() - began} ms${seeded ? ', demo shop seeded' : ''}.`);
 }
 

@@ -1,0 +1,32 @@
+// The hosted payment service through its official SDK. Configuration alone decides where it
+// talks: PAYMENTS_API_BASE names the local fake; unset, the SDK's own default host is used.
+import Stripe from 'stripe';
+import { PAYMENTS_API_BASE, PAYMENTS_API_KEY, PAYMENTS_WEBHOOK_SECRET } from 'astro:env/server';
+
+let client: Stripe | null = null;
+
+/** The SDK client, or null when no API key is configured. */
+export function paymentClient(): Stripe | null {
+  if (!PAYMENTS_API_KEY) return null;
+  if (client) return client;
+  const base = PAYMENTS_API_BASE ? new URL(PAYMENTS_API_BASE) : null;
+  client = new Stripe(PAYMENTS_API_KEY, {
+    ...(base
+      ? { host: base.hostname, port: Number(base.port || (base.protocol === 'https:' ? 443 : 80)), protocol: base.protocol.replace(':', '') as 'http' | 'https' }
+      : {}),
+    maxNetworkRetries: 1,
+    timeout: 10_000,
+    telemetry: false,
+  });
+  return client;
+}
+
+/** The secret webhooks are signed with, or null when not configured. */
+export function webhookSecret(): string | null {
+  return PAYMENTS_WEBHOOK_SECRET || null;
+}
+
+/** Checks a webhook's signature (and age) and returns its event; throws when it does not verify. */
+export function verifyWebhook(payload: string, signature: string, secret: string): Stripe.Event {
+  return Stripe.webhooks.constructEvent(payload, signature, secret);
+}

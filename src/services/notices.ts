@@ -1,0 +1,163 @@
+// Notices to customers: the ready notice, sent by the counter or by the shop's setting, kept with
+// its delivery state; a failed send is retried on a timer and by hand, and stays visible.
+import { and, asc, eq, gte, isNull, lte, ne, sql } from 'drizzle-orm';
+import { db } from '@/db';
+import { counterSettings, customers, garments, notices, organization, tickets, type Notice } from '@/db/schema';
+import type { Actor } from '@/lib/api';
+import { sendMail } from '@/lib/mail';
+import { formatMoney } from '@/lib/pricing/money';
+import { audit } from './audit';
+import { ServiceError } from './errors';
+import { counterSummary } from './payments';
+import { counterSettingsOf, shopTicket } from './prices';
+
+/** Automatic retries before a notice waits for someone to press "retry". */
+export const MAX_AUTO_ATTEMPTS = 5;
+// 30 s, 1 min, 2 min, 4 min: a mail server back from a restart is caught soon, a dead one is not hammered.
+const BACKOFF_MS = 30_000;
+
+/** The ticket's notices, oldest first. */
+export async function listNotices(actor: Actor, ticketId: string): Promise<Notice[]> {
+  await shopTicket(actor, ticketId);
+  return db.select().from(notices).where(and(eq(notices.shopId, actor.shopId), eq(notices.ticketId, ticketId))).orderBy(asc(notices.createdAt));
+}
+
+/** The ready notice's subject and text: the balance due and the shop's hours. */
+export async function readyMessage(shopId: string, ticketId: string): Promise<{ to: string | null; subject: string; body: string }> {
+  const summary = await counterSummary({ shopId }, ticketId);
+  const settings = await counterSettingsOf(shopId);
+  const [shop] = await db.select({ name: organization.name }).from(organization).where(eq(organization.id, shopId));
+  const number = `T-${summary.ticket.number}`;
+  const due = summary.due > 0 ? `Balance due at pickup: ${formatMoney(summary.due, summary.currency)}.` : 'Nothing is left to pay: the ticket is paid in full.';
+  const pay = summary.due > 0 && summary.link?.status === 'open' ? [`You may pay ahead online: ${summary.link.url}`] : [];
+  const body = [
+    `Hello ${summary.ticket.customerName ?? ''}`.trim() + ',',
+    '',
+    `Your trousers on ticket ${number} at ${shop?.name ?? 'the shop'} are ready to collect.`,
+    due,
+    ...pay,
+    '',
+    `Opening hours: ${settings.hours || 'ask the shop'}`,
+    ...(settings.location ? [`Where: ${settings.location}`] : []),
+    '',
+    `Bring your claim slip or quote ${number}.`,
+  ].join('\n');
+  return { to: summary.ticket.customerEmail, subject: `Ready to collect: ticket ${number}`, body };
+}
+
+/** Tries one delivery and records the outcome; a failure schedules the next automatic try. */
+export async function attemptDelivery(notice: Notice): Promise<Notice> {
+  const attempts = notice.attempts + 1;
+  try {
+    await sendMail({ to: notice.to, subject: notice.subject, text: notice.body });
+    const [row] = await db.update(notices).set({ status: 'sent', attempts, sentAt: new Date(), lastError: null, nextAttemptAt: null }).where(eq(notices.id, notice.id)).returning();
+    return row!;
+  } catch (e) {
+    const next = attempts < MAX_AUTO_ATTEMPTS ? new Date(Date.now() + BACKOFF_MS * 2 ** (attempts - 1)) : null;
+    const [row] = await db
+      .update(notices)
+      .set({ status: 'failed', attempts, lastError: String((e as Error).message ?? e).slice(0, 500), nextAttemptAt: next })
+      .where(eq(notices.id, notice.id))
+      .returning();
+    return row!;
+  }
+}
+
+/** Queues the ready notice of a ready ticket and tries to send it at once. */
+async function queueReady(shopId: string, ticketId: string, actorId: string | null): Promise<Notice> {
+  const message = await readyMessage(shopId, ticketId);
+  if (!message.to) throw new ServiceError(422, 'The customer has no e-mail address: add one, or call them.');
+  const [row] = await db
+    .insert(notices)
+    .values({ shopId, ticketId, kind: 'ready', to: message.to, subject: message.subject, body: message.body, createdById: actorId })
+    .onConflictDoNothing()
+    .returning();
+  if (!row) throw new ServiceError(409, 'The ready notice of this ticket is already on record.');
+  await audit(shopId, actorId, 'notice.queued', ticketId, { kind: 'ready', automatic: actorId === null });
+  return attemptDelivery(row);
+}
+
+/** The counter's button: sends the ready notice of a ready ticket. */
+export async function sendReadyNotice(actor: Actor, ticketId: string): Promise<Notice> {
+  const ticket = await shopTicket(actor, ticketId);
+  if (ticket.status !== 'ready') throw new ServiceError(422, `The ticket is not ready yet (it is ${ticket.status}).`);
+  return queueReady(actor.shopId, ticketId, actor.userId);
+}
+
+/** Tries a failed notice again by hand, whatever its count of attempts. */
+export async function retryNotice(actor: Actor, ticketId: string, noticeId: string): Promise<Notice> {
+  await shopTicket(actor, ticketId);
+  const [row] = /^[0-9a-f-]{36}$/i.test(noticeId)
+    ? await db.select().from(notices).where(and(eq(notices.id, noticeId), eq(notices.ticketId, ticketId), eq(notices.shopId, actor.shopId)))
+    : [];
+  if (!row) throw new ServiceError(404, 'No such notice on this ticket.');
+  if (row.status === 'sent') throw new ServiceError(409, 'This notice was already sent.');
+  await audit(actor.shopId, actor.userId, 'notice.retried', ticketId, { noticeId });
+  return attemptDelivery(row);
+}
+
+/** Retries every failed notice whose next try is due; returns how many were tried. */
+export async function retryDueNotices(now = new Date()): Promise<number> {
+  const due = await db.select().from(notices).where(and(eq(notices.status, 'failed'), lte(notices.nextAttemptAt, now)));
+  for (const n of due) await attemptDelivery(n);
+  return due.length;
+}
+
+/** Queues the automatic ready notice of one ticket when its shop wants it and every garment is ready. */
+export async function autoReadyNotice(shopId: string, ticketId: string): Promise<Notice | null> {
+  const settings = await counterSettingsOf(shopId);
+  if (!settings.autoReadyNotice) return null;
+  const [ticket] = await db.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId)));
+  if (!ticket) return null;
+  const steps = await db.select({ status: garments.status }).from(garments).where(eq(garments.ticketId, ticketId));
+  const ready = steps.length > 0 ? steps.every((g) => g.status === 'ready') : ticket.status === 'ready';
+  if (!ready) return null;
+  const [already] = await db.select({ id: notices.id }).from(notices).where(and(eq(notices.ticketId, ticketId), eq(notices.kind, 'ready')));
+  if (already) return null;
+  try {
+    return await queueReady(shopId, ticketId, null);
+  } catch (e) {
+    // No e-mail on file, or the counter sent it a moment ago: the counter panel shows either.
+    if (e instanceof ServiceError) return null;
+    throw e;
+  }
+}
+
+/** Finds ready tickets of shops that send automatically (since they turned it on) without a notice. */
+export async function sweepReadyTickets(): Promise<number> {
+  const rows = await db
+    .select({ shopId: tickets.shopId, ticketId: tickets.id })
+    .from(tickets)
+    .innerJoin(counterSettings, eq(counterSettings.shopId, tickets.shopId))
+    .innerJoin(customers, eq(customers.id, tickets.customerId))
+    .leftJoin(notices, and(eq(notices.ticketId, tickets.id), eq(notices.kind, 'ready')))
+    .where(
+      and(
+        eq(tickets.status, 'ready'),
+        eq(counterSettings.autoReadyNotice, true),
+        gte(tickets.updatedAt, sql`coalesce(${counterSettings.autoReadySince}, now())`),
+        isNull(notices.id),
+        ne(sql`coalesce(${customers.email}, '')`, ''),
+      ),
+    );
+  let sent = 0;
+  for (const r of rows) if (await autoReadyNotice(r.shopId, r.ticketId)) sent += 1;
+  return sent;
+}
+
+const timer = globalThis as typeof globalThis & { __cuffwrightNoticeTimer?: ReturnType<typeof setInterval> };
+
+/** Starts the server's notice timer once per process: automatic ready notices, then due retries. */
+export function startNoticeTimer(seconds: number): void {
+  if (timer.__cuffwrightNoticeTimer || seconds <= 0) return;
+  let busy = false;
+  timer.__cuffwrightNoticeTimer = setInterval(() => {
+    if (busy) return;
+    busy = true;
+    sweepReadyTickets()
+      .then(() => retryDueNotices())
+      .catch((e) => console.error('notice timer:', e))
+      .finally(() => (busy = false));
+  }, seconds * 1000);
+  timer.__cuffwrightNoticeTimer.unref();
+}

@@ -1,0 +1,212 @@
+// Money for a ticket: the counter's summary, deposits and balances taken at the counter, online
+// payment links through the payment service, its webhook, and handing the trousers over.
+import { and, asc, desc, eq, inArray } from 'drizzle-orm';
+import type Stripe from 'stripe';
+import type { z } from 'zod';
+import { db } from '@/db';
+import { customers, garments, paymentEvents, paymentLinks, payments, tickets, type Payment, type PaymentLink, type PriceLine } from '@/db/schema';
+import type { Actor } from '@/lib/api';
+import type { paymentInput } from '@/lib/counter-request';
+import { paymentClient, verifyWebhook, webhookSecret } from '@/lib/payment-service';
+import type { ClaimSlipData } from '@/lib/claim-slip/types';
+import type { Currency } from '@/lib/pricing/money';
+import { balanceOf } from '@/lib/pricing/price-lines';
+import { audit } from './audit';
+import { ServiceError } from './errors';
+import { counterSettingsOf, linesOf, shopTicket } from './prices';
+
+/** Everything the counter panel shows about a ticket's money. */
+export interface CounterSummary {
+  ticket: { id: string; number: number; status: string; dueOn: string | null; customerName: string | null; customerEmail: string | null };
+  currency: Currency;
+  lines: PriceLine[];
+  total: number;
+  paid: number;
+  due: number;
+  payments: Payment[];
+  link: Pick<PaymentLink, 'url' | 'amountMinor' | 'status'> | null;
+}
+
+/** The ticket's lines, payments, balance and open payment link. */
+export async function counterSummary(actor: Pick<Actor, 'shopId'>, ticketId: string): Promise<CounterSummary> {
+  const ticket = await shopTicket(actor, ticketId);
+  const [customer] = ticket.customerId ? await db.select().from(customers).where(eq(customers.id, ticket.customerId)) : [];
+  const lines = await linesOf(actor.shopId, ticketId);
+  const paidRows = await db.select().from(payments).where(and(eq(payments.shopId, actor.shopId), eq(payments.ticketId, ticketId))).orderBy(asc(payments.at));
+  const [link] = await db.select().from(paymentLinks).where(and(eq(paymentLinks.shopId, actor.shopId), eq(paymentLinks.ticketId, ticketId))).orderBy(desc(paymentLinks.createdAt)).limit(1);
+  const { currency } = await counterSettingsOf(actor.shopId);
+  return {
+    ticket: { id: ticket.id, number: ticket.number, status: ticket.status, dueOn: ticket.dueOn, customerName: customer?.name ?? null, customerEmail: customer?.email ?? null },
+    currency,
+    lines,
+    ...balanceOf(lines, paidRows),
+    payments: paidRows,
+    link: link ? { url: link.url, amountMinor: link.amountMinor, status: link.status } : null,
+  };
+}
+
+function isUniqueViolation(e: unknown): boolean {
+  for (let err = e as { code?: string; cause?: unknown } | undefined; err; err = err.cause as typeof err) {
+    if (err.code === '23505') return true;
+  }
+  return false;
+}
+
+/** Takes a deposit (at most the total) or the exact balance due, in cash or by card at the counter. */
+export async function takePayment(actor: Actor, ticketId: string, input: z.infer<typeof paymentInput>): Promise<CounterSummary> {
+  const before = await counterSummary(actor, ticketId);
+  if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
+  if (before.payments.some((p) => p.purpose === 'balance')) throw new ServiceError(409, 'The balance of this ticket is already paid.');
+  if (input.purpose === 'deposit') {
+    if (before.payments.some((p) => p.purpose === 'deposit')) throw new ServiceError(409, 'A deposit is already on record for this ticket.');
+    if (input.amountMinor > before.total) throw new ServiceError(422, 'A deposit cannot be more than the ticket total.');
+  } else if (before.due === 0) {
+    throw new ServiceError(422, 'Nothing is due on this ticket.');
+  } else if (input.amountMinor !== before.due) {
+    throw new ServiceError(422, 'Take exactly the balance due (give change from cash).');
+  }
+  try {
+    await db.insert(payments).values({ ...input, shopId: actor.shopId, ticketId, currency: before.currency, takenById: actor.userId });
+  } catch (e) {
+    if (isUniqueViolation(e)) throw new ServiceError(409, `A ${input.purpose} is already on record for this ticket.`);
+    throw e;
+  }
+  await audit(actor.shopId, actor.userId, `payment.${input.purpose}`, ticketId, { method: input.method, amountMinor: input.amountMinor });
+  if (input.purpose === 'balance') await expireOpenLinks(ticketId);
+  return counterSummary(actor, ticketId);
+}
+
+// Once the balance is paid at the counter, the customer must not be able to pay it again online.
+async function expireOpenLinks(ticketId: string): Promise<void> {
+  const open = await db.select().from(paymentLinks).where(and(eq(paymentLinks.ticketId, ticketId), eq(paymentLinks.status, 'open')));
+  const client = paymentClient();
+  for (const link of open) {
+    try {
+      await client?.checkout.sessions.expire(link.sessionId);
+    } catch (e) {
+      console.warn(`Could not expire payment session ${link.sessionId}: ${(e as Error).message}`);
+    }
+    await db.update(paymentLinks).set({ status: 'expired' }).where(eq(paymentLinks.id, link.id));
+  }
+}
+
+/** A payment link for the balance due; an open link for the same amount is reused. */
+export async function createPaymentLink(actor: Actor, ticketId: string, appOrigin: string): Promise<CounterSummary> {
+  const client = paymentClient();
+  if (!client) throw new ServiceError(422, 'Online payment is not set up on this server (PAYMENTS_API_KEY).');
+  const before = await counterSummary(actor, ticketId);
+  if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
+  if (before.due === 0) throw new ServiceError(422, 'Nothing is due on this ticket.');
+  if (before.link?.status === 'open' && before.link.amountMinor === before.due) return before;
+  await expireOpenLinks(ticketId);
+  const session = await client.checkout.sessions.create({
+    mode: 'payment',
+    line_items: [
+      {
+        quantity: 1,
+        price_data: { currency: before.currency.toLowerCase(), unit_amount: before.due, product_data: { name: `${actor.shopName}: ticket T-${before.ticket.number}, balance` } },
+      },
+    ],
+    client_reference_id: ticketId,
+    metadata: { ticketId, shopId: actor.shopId },
+    success_url: `${appOrigin}/paid`,
+    cancel_url: `${appOrigin}/paid?cancelled=1`,
+  });
+  if (!session.url) throw new ServiceError(422, 'The payment service gave no link.');
+  await db.insert(paymentLinks).values({ shopId: actor.shopId, ticketId, sessionId: session.id, url: session.url, amountMinor: before.due, currency: before.currency, createdById: actor.userId });
+  await audit(actor.shopId, actor.userId, 'payment.link', ticketId, { amountMinor: before.due });
+  return counterSummary(actor, ticketId);
+}
+
+/** The outcome of a webhook call: its HTTP status and a short message. */
+export interface WebhookOutcome {
+  status: 200 | 400 | 409;
+  message: string;
+}
+
+/** Verifies and applies a payment-service webhook; a forged, stale or replayed one changes nothing. */
+export async function receiveWebhook(payload: string, signature: string | null): Promise<WebhookOutcome> {
+  const secret = webhookSecret();
+  if (!secret) return { status: 400, message: 'Webhooks are not set up on this server.' };
+  if (!signature) return { status: 400, message: 'Missing signature.' };
+  let event: Stripe.Event;
+  try {
+    event = verifyWebhook(payload, signature, secret);
+  } catch {
+    return { status: 400, message: 'Signature does not verify.' };
+  }
+  try {
+    return await db.transaction(async (tx) => {
+      const [fresh] = await tx.insert(paymentEvents).values({ id: event.id, type: event.type }).onConflictDoNothing().returning();
+      if (!fresh) return { status: 409 as const, message: 'Event already processed.' };
+      if (event.type !== 'checkout.session.completed') return { status: 200 as const, message: 'Ignored.' };
+      const session = event.data.object;
+      if (session.payment_status !== 'paid') return { status: 200 as const, message: 'Not paid yet.' };
+      const [link] = await tx.select().from(paymentLinks).where(eq(paymentLinks.sessionId, session.id));
+      if (!link) return { status: 200 as const, message: 'Unknown session.' };
+      if (link.status !== 'open') throw new WebhookRefusal('This payment link is no longer open.');
+      const [existing] = await tx.select({ id: payments.id }).from(payments).where(and(eq(payments.ticketId, link.ticketId), eq(payments.purpose, 'balance')));
+      if (existing) throw new WebhookRefusal('The balance of this ticket is already paid.');
+      await tx.insert(payments).values({
+        shopId: link.shopId,
+        ticketId: link.ticketId,
+        purpose: 'balance',
+        method: 'online',
+        amountMinor: session.amount_total ?? link.amountMinor,
+        currency: link.currency,
+        reference: session.id,
+      });
+      await tx.update(paymentLinks).set({ status: 'paid' }).where(eq(paymentLinks.id, link.id));
+      return { status: 200 as const, message: 'Payment recorded.' };
+    });
+  } catch (e) {
+    if (e instanceof WebhookRefusal) return { status: 409, message: e.message };
+    if (isUniqueViolation(e)) return { status: 409, message: 'Already recorded.' };
+    throw e;
+  }
+}
+
+class WebhookRefusal extends Error {}
+
+/** Hands a ready, fully paid ticket over: every garment and the ticket become collected. */
+export async function pickUp(actor: Actor, ticketId: string): Promise<CounterSummary> {
+  const before = await counterSummary(actor, ticketId);
+  if (before.ticket.status !== 'ready') throw new ServiceError(422, `Only a ready ticket can be handed over (this one is ${before.ticket.status}).`);
+  if (before.due > 0) throw new ServiceError(422, 'Take the balance before handing the trousers over.');
+  const done = await db.transaction(async (tx) => {
+    const [row] = await tx
+      .update(tickets)
+      .set({ status: 'collected', updatedAt: new Date() })
+      .where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId), eq(tickets.status, 'ready')))
+      .returning({ id: tickets.id });
+    if (!row) return false;
+    await tx.update(garments).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(garments.ticketId, ticketId), inArray(garments.status, ['ready'])));
+    return true;
+  });
+  if (!done) throw new ServiceError(409, 'Someone else moved this ticket first: reload and try again.');
+  await audit(actor.shopId, actor.userId, 'ticket.collected', ticketId, { paid: before.paid });
+  return counterSummary(actor, ticketId);
+}
+
+/** The claim slip's data for a ticket of the actor's shop. */
+export async function claimSlipData(actor: Actor, ticketId: string): Promise<ClaimSlipData> {
+  const summary = await counterSummary(actor, ticketId);
+  const ticket = await shopTicket(actor, ticketId);
+  const settings = await counterSettingsOf(actor.shopId);
+  const items = await db.select({ description: garments.description, kind: garments.kind }).from(garments).where(and(eq(garments.ticketId, ticketId), eq(garments.shopId, actor.shopId))).orderBy(asc(garments.position));
+  return {
+    shopName: actor.shopName,
+    location: settings.location,
+    hours: settings.hours,
+    ticketNumber: summary.ticket.number,
+    customerName: summary.ticket.customerName,
+    receivedOn: ticket.createdAt.toISOString().slice(0, 10),
+    dueOn: ticket.dueOn,
+    garments: items.map((g) => g.description?.trim() || g.kind),
+    lines: summary.lines.map((l) => ({ label: l.reason ? `${l.label} (${l.reason})` : l.label, amountMinor: l.amountMinor })),
+    currency: summary.currency,
+    total: summary.total,
+    paid: summary.paid,
+    due: summary.due,
+  };
+}

@@ -1,0 +1,192 @@
+// The shop's price list and counter settings, and the price lines on its tickets.
+import { and, asc, eq } from 'drizzle-orm';
+import type { z } from 'zod';
+import { db } from '@/db';
+import { counterSettings, garments, measurements, payments, priceItems, priceLines, tickets, type CounterSettings, type PriceLine, type Ticket } from '@/db/schema';
+import { checkTaper } from '@/lib/allowance';
+import type { Actor } from '@/lib/api';
+import type { autoLinesInput, lineInput, priceListInput } from '@/lib/counter-request';
+import { isCurrency, type Currency } from '@/lib/pricing/money';
+import { DEFAULT_PRICE_LABELS, PRICE_KEYS } from '@/lib/pricing/price-keys';
+import { priceTicket, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
+import { needsLetOut } from '@/lib/pricing/taper-let-out';
+import { audit } from './audit';
+import { ServiceError } from './errors';
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** The shop's counter settings as the counter reads them. */
+export interface CounterView {
+  currency: Currency;
+  hours: string;
+  location: string;
+  autoReadyNotice: boolean;
+}
+
+/** The price list page's data: settings and one entry per priced piece of work. */
+export interface PriceListView extends CounterView {
+  items: { key: (typeof PRICE_KEYS)[number]; label: string; amountMinor: number }[];
+}
+
+/** A ticket of the actor's shop; 404 for another shop's ticket or an id that is not one. */
+export async function shopTicket(actor: Pick<Actor, 'shopId'>, ticketId: string): Promise<Ticket> {
+  if (!UUID.test(ticketId)) throw new ServiceError(404, 'No such ticket in this shop.');
+  const [row] = await db.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
+  if (!row) throw new ServiceError(404, 'No such ticket in this shop.');
+  return row;
+}
+
+/** The shop's counter settings, the defaults when the lead has not set them. */
+export async function counterSettingsOf(shopId: string): Promise<CounterView & Pick<CounterSettings, 'autoReadySince'>> {
+  const [row] = await db.select().from(counterSettings).where(eq(counterSettings.shopId, shopId));
+  return {
+    currency: row && isCurrency(row.currency) ? row.currency : 'EUR',
+    hours: row?.hours ?? '',
+    location: row?.location ?? '',
+    autoReadyNotice: row?.autoReadyNotice ?? false,
+    autoReadySince: row?.autoReadySince ?? null,
+  };
+}
+
+/** The shop's price list: every key, with the lead's label and amount (0 until set). */
+export async function priceListOf(shopId: string): Promise<PriceList> {
+  const rows = await db.select().from(priceItems).where(eq(priceItems.shopId, shopId));
+  const byKey = new Map(rows.map((r) => [r.key, r]));
+  return Object.fromEntries(
+    PRICE_KEYS.map((key) => [key, { label: byKey.get(key)?.label ?? DEFAULT_PRICE_LABELS[key], amountMinor: byKey.get(key)?.amountMinor ?? 0 }]),
+  ) as PriceList;
+}
+
+/** The price list page: settings and every line. */
+export async function getPriceList(actor: Actor): Promise<PriceListView> {
+  const { autoReadySince: _, ...settings } = await counterSettingsOf(actor.shopId);
+  const list = await priceListOf(actor.shopId);
+  return { ...settings, items: PRICE_KEYS.map((key) => ({ key, ...list[key] })) };
+}
+
+/** Saves the lead's price list and settings; turning the automatic notice on starts it from now. */
+export async function savePriceList(actor: Actor, input: z.infer<typeof priceListInput>): Promise<PriceListView> {
+  const keys = new Set(input.items.map((i) => i.key));
+  if (keys.size !== PRICE_KEYS.length) throw new ServiceError(422, 'Send each line of the price list once.');
+  const before = await counterSettingsOf(actor.shopId);
+  const since = input.autoReadyNotice ? (before.autoReadyNotice && before.autoReadySince ? before.autoReadySince : new Date()) : null;
+  await db.transaction(async (tx) => {
+    const settings = { currency: input.currency, hours: input.hours, location: input.location, autoReadyNotice: input.autoReadyNotice, autoReadySince: since, updatedAt: new Date() };
+    await tx.insert(counterSettings).values({ shopId: actor.shopId, ...settings }).onConflictDoUpdate({ target: counterSettings.shopId, set: settings });
+    for (const item of input.items) {
+      await tx
+        .insert(priceItems)
+        .values({ shopId: actor.shopId, ...item })
+        .onConflictDoUpdate({ target: [priceItems.shopId, priceItems.key], set: { label: item.label, amountMinor: item.amountMinor, updatedAt: new Date() } });
+    }
+  });
+  await audit(actor.shopId, actor.userId, 'prices.saved', actor.shopId, { currency: input.currency });
+  return getPriceList(actor);
+}
+
+/** The ticket's price lines, oldest first. */
+export async function listLines(actor: Actor, ticketId: string): Promise<PriceLine[]> {
+  await shopTicket(actor, ticketId);
+  return linesOf(actor.shopId, ticketId);
+}
+
+/** The lines of a ticket known to be the shop's. */
+export function linesOf(shopId: string, ticketId: string): Promise<PriceLine[]> {
+  return db.select().from(priceLines).where(and(eq(priceLines.shopId, shopId), eq(priceLines.ticketId, ticketId))).orderBy(asc(priceLines.createdAt), asc(priceLines.id));
+}
+
+async function refuseWhenSettled(ticket: Ticket): Promise<void> {
+  if (ticket.status === 'collected') throw new ServiceError(422, 'This ticket is collected: its price is closed.');
+  const [paid] = await db.select({ id: payments.id }).from(payments).where(and(eq(payments.ticketId, ticket.id), eq(payments.purpose, 'balance')));
+  if (paid) throw new ServiceError(422, 'The balance is paid: the price can no longer change.');
+}
+
+/** Replaces the ticket's worked-out lines with those its garments' finishes and plans call for. */
+export async function priceFromGarments(actor: Actor, ticketId: string, input: z.infer<typeof autoLinesInput>): Promise<{ lines: PriceLine[]; unpriced: string[] }> {
+  const ticket = await shopTicket(actor, ticketId);
+  await refuseWhenSettled(ticket);
+  const facts = await garmentFacts(actor.shopId, ticketId);
+  const { lines, unpriced } = priceTicket(facts, await priceListOf(actor.shopId), input);
+  await db.transaction(async (tx) => {
+    await tx.delete(priceLines).where(and(eq(priceLines.ticketId, ticketId), eq(priceLines.shopId, actor.shopId), eq(priceLines.source, 'auto')));
+    if (lines.length > 0) {
+      // One transaction shares one now(): a millisecond apart keeps the lines in the garments' order.
+      const at = Date.now();
+      await tx.insert(priceLines).values(lines.map((l, i) => ({ ...l, shopId: actor.shopId, ticketId, source: 'auto' as const, createdById: actor.userId, createdAt: new Date(at + i) })));
+    }
+  });
+  await audit(actor.shopId, actor.userId, 'prices.from-garments', ticketId, { lines: lines.length, rush: input.rush });
+  return { lines: await linesOf(actor.shopId, ticketId), unpriced };
+}
+
+/** Adds a line from the list, or an adjustment with its reason. */
+export async function addLine(actor: Actor, ticketId: string, input: z.infer<typeof lineInput>): Promise<PriceLine> {
+  const ticket = await shopTicket(actor, ticketId);
+  await refuseWhenSettled(ticket);
+  const entry = input.source === 'list' ? (await priceListOf(actor.shopId))[input.key] : null;
+  const values =
+    input.source === 'list'
+      ? { key: input.key, label: entry!.label, amountMinor: entry!.amountMinor, reason: null }
+      : { key: null, label: input.label, amountMinor: input.amountMinor, reason: input.reason };
+  const [row] = await db.insert(priceLines).values({ ...values, source: input.source, shopId: actor.shopId, ticketId, createdById: actor.userId }).returning();
+  await audit(actor.shopId, actor.userId, input.source === 'adjust' ? 'prices.adjusted' : 'prices.line-added', ticketId, { amountMinor: row!.amountMinor, reason: row!.reason });
+  return row!;
+}
+
+/** What the pricing needs to know of each garment on the ticket, read from its measurements. */
+export async function garmentFacts(shopId: string, ticketId: string): Promise<GarmentFacts[]> {
+  const rows = await db.select().from(garments).where(and(eq(garments.shopId, shopId), eq(garments.ticketId, ticketId))).orderBy(asc(garments.position));
+  const legs = rows.length === 0 ? [] : await db.select().from(measurements).where(eq(measurements.shopId, shopId));
+  return rows.map((g, i) => {
+    const own = legs.filter((m) => m.garmentId === g.id);
+    const finish = finishOf(g.finish ?? own[0]?.finish ?? null);
+    return {
+      garmentId: g.id,
+      label: g.description?.trim() || `Garment ${i + 1}`,
+      finish,
+      taperLetOut: finish === 'cuff' && own.some((m) => legNeedsLetOut(m.unit, m.values)),
+      oldCuff: own.some((m) => flag(m.values, 'oldCuff')),
+    };
+  });
+}
+
+function finishOf(value: string | null): GarmentFacts['finish'] {
+  if (value === 'cuff') return 'cuff';
+  if (value === 'hem' || value === 'plain' || value === 'slope') return 'hem';
+  return null;
+}
+
+type Stored = Record<string, unknown>;
+
+function text(values: Stored, field: string): string | undefined {
+  const v = values[field];
+  if (typeof v === 'string' || typeof v === 'number') return String(v);
+  if (v && typeof v === 'object' && 'text' in v) return String((v as { text: unknown }).text);
+  return undefined;
+}
+
+function flag(values: unknown, field: string): boolean {
+  return !!values && typeof values === 'object' && (values as Stored)[field] === true;
+}
+
+/** Runs the engine's taper check on a leg's stored lengths; false when the leg has no taper widths. */
+function legNeedsLetOut(unit: string, raw: unknown): boolean {
+  const values = (raw ?? {}) as Stored;
+  const [cuffDepth, widthAtEdge, widthAbove, heightAbove] = ['cuffDepth', 'widthAtEdge', 'widthAbove', 'heightAbove'].map((f) => text(values, f));
+  if (!cuffDepth || !widthAtEdge || !widthAbove || !heightAbove) return false;
+  try {
+    const plan = checkTaper({
+      unit: unit === 'cm' || unit === 'mm' ? unit : 'in',
+      cuffDepth,
+      widthAtEdge,
+      widthAbove,
+      heightAbove,
+      hemSection: text(values, 'hemSection'),
+      seamAllowance: text(values, 'seamAllowance'),
+    });
+    return needsLetOut(plan);
+  } catch {
+    // Lengths the engine refuses leave the price to the counter, who can add the line by hand.
+    return false;
+  }
+}
