@@ -3,12 +3,18 @@
 import { spawn } from 'node:child_process';
 import { env, useCapture, captureDir } from './env.mjs';
 import { startMailCapture } from './mail-capture.mjs';
+import { startLocalPayments } from './payments-fake.mjs';
 
 const devEnv = { ...process.env, BETTER_AUTH_URL: env.BETTER_AUTH_URL || `http://localhost:${env.PORT}` };
 if (useCapture) {
   const { port } = await startMailCapture({ dir: captureDir, port: env.SMTP_PORT });
   Object.assign(devEnv, { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(port), MAIL_CAPTURE_DIR: captureDir });
   console.log(`Mail capture on smtp://127.0.0.1:${port}: the lead reads it at /outbox`);
+}
+if (!process.env.PAYMENTS_API_KEY) {
+  const payments = await startLocalPayments({ appUrl: `http://127.0.0.1:${env.PORT}`, port: Number(process.env.PAYMENTS_FAKE_PORT || 12111) });
+  Object.assign(devEnv, payments.env);
+  console.log(`Local payment service (no real money) on ${payments.base}`);
 }
 const dev = spawn('node_modules/.bin/astro', ['dev', '--port', String(env.PORT), ...process.argv.slice(2)], { stdio: 'inherit', env: devEnv });
 for (const sig of ['SIGINT', 'SIGTERM']) process.on(sig, () => dev.kill(sig));

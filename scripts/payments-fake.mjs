@@ -155,6 +155,11 @@ ${open ? `<form method="post"><button type="submit">Pay ${escape(money(session.a
       } catch (e) {
         if (!quiet) console.log(`[payments] webhook failed: ${e.message}`);
       }
+      // Like the hosted service: back to the shop's page once paid, when it gave one.
+      if (session.success_url) {
+        res.writeHead(303, { location: session.success_url });
+        return res.end();
+      }
       return send(
         200,
         page('Paid', `<h1>Payment received</h1><p class="amount">${escape(money(session.amount_total, session.currency))}</p><p>${delivered ? 'The shop has been told. You may close this page.' : 'The shop could not be told yet: show this page at the counter.'}</p>`),
@@ -173,6 +178,14 @@ ${open ? `<form method="post"><button type="submit">Pay ${escape(money(session.a
       resolve({ port: actual, base, close: () => new Promise((r) => server.close(r)) });
     });
   });
+}
+
+/** Starts the fake with a fresh key and webhook secret for an app at appUrl; returns the app's PAYMENTS_* env. */
+export async function startLocalPayments({ appUrl, port = 12111, quiet = false }) {
+  const apiKey = `sk_test_local_${randomBytes(12).toString('hex')}`;
+  const webhookSecret = `whsec_${randomBytes(24).toString('hex')}`;
+  const fake = await startPaymentsFake({ port, apiKey, webhookSecret, webhookUrl: new URL('/api/payments/webhook', appUrl).toString(), quiet });
+  return { ...fake, env: { PAYMENTS_API_KEY: apiKey, PAYMENTS_API_BASE: fake.base, PAYMENTS_WEBHOOK_SECRET: webhookSecret } };
 }
 
 if (process.argv[1] === fileURLToPath(import.meta.url)) {

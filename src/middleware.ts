@@ -6,7 +6,7 @@ import { auth } from '@/lib/auth';
 import { activeMembership } from '@/services/members';
 import { ensureStarted } from '@/services/startup';
 
-const PUBLIC_PAGES = ['/', '/sign-in', '/sign-up', '/forgot', '/reset'];
+const PUBLIC_PAGES = ['/', '/sign-in', '/sign-up', '/forgot', '/reset', '/paid'];
 const PUBLIC_PREFIXES = ['/invite/', '/api/', '/_astro/', '/_image', '/favicon'];
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 

@@ -10,12 +10,14 @@ import type { TestProject } from 'vitest/node';
 import pg from 'pg';
 import { buildIfNeeded } from '../../scripts/build-if-needed.mjs';
 import { startMailCapture } from '../../scripts/mail-capture.mjs';
+import { startLocalPayments } from '../../scripts/payments-fake.mjs';
 
 declare module 'vitest' {
   export interface ProvidedContext {
     baseURL: string;
     dataDir: string;
     mailDir: string;
+    paymentsEnv: { PAYMENTS_API_KEY: string; PAYMENTS_API_BASE: string; PAYMENTS_WEBHOOK_SECRET: string };
   }
 }
 
@@ -69,6 +71,7 @@ export default async function setup(project: TestProject) {
   // With TEST_DATABASE_URL (scripts/with-postgres.sh) the server runs on a fresh PostgreSQL database.
   const databaseUrl = process.env.TEST_DATABASE_URL ? await freshServerDatabase(process.env.TEST_DATABASE_URL) : undefined;
   const capture = await startMailCapture({ dir: mailDir, port: 0, quiet: true });
+  const payments = await startLocalPayments({ appUrl: `http://127.0.0.1:${port}`, port: 0, quiet: true });
   server = spawn('node', [`${outDir}/server/entry.mjs`], {
     env: {
       ...process.env,
@@ -79,6 +82,9 @@ export default async function setup(project: TestProject) {
       SMTP_HOST: '127.0.0.1',
       SMTP_PORT: String(capture.port),
       MAIL_CAPTURE_DIR: mailDir,
+      ...payments.env,
+      // The notice timer ticks fast so automatic ready notices and retries show within a test.
+      NOTICE_TICK_SECONDS: '1',
       ...(databaseUrl ? { DATABASE_URL: databaseUrl } : {}),
     },
     stdio: ['ignore', 'inherit', 'inherit'],
@@ -87,9 +93,11 @@ export default async function setup(project: TestProject) {
   project.provide('baseURL', baseURL);
   project.provide('dataDir', dataDir);
   project.provide('mailDir', mailDir);
+  project.provide('paymentsEnv', payments.env);
   return async () => {
     server?.kill('SIGTERM');
     await capture.close();
+    await payments.close();
     await new Promise((r) => setTimeout(r, 300));
     rmSync(dataDir, { recursive: true, force: true });
   };

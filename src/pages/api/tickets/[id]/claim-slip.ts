@@ -1,0 +1,25 @@
+// The customer's claim slip for a ticket, as a PDF to print at intake.
+import type { APIRoute } from 'astro';
+import { guard } from '@/lib/api';
+import { renderClaimSlip } from '@/lib/claim-slip/render';
+import { ServiceError } from '@/services/errors';
+import { problem } from '@/lib/api';
+import { claimSlipData } from '@/services/payments';
+
+export const prerender = false;
+
+/** The slip as application/pdf, named after the ticket number. */
+export const GET: APIRoute = async ({ locals, params }) => {
+  const actor = guard(locals, ['prices', 'read']);
+  if (actor instanceof Response) return actor;
+  try {
+    const data = await claimSlipData(actor, params.id ?? '');
+    const pdf = await renderClaimSlip(data);
+    return new Response(pdf, {
+      headers: { 'content-type': 'application/pdf', 'content-disposition': `inline; filename="claim-slip-T-${data.ticketNumber}.pdf"`, 'cache-control': 'no-store' },
+    });
+  } catch (e) {
+    if (e instanceof ServiceError) return problem(e.status, e.message);
+    throw e;
+  }
+};

@@ -1,0 +1,23 @@
+// A ticket's notices to the customer: the list with delivery states, and sending the ready notice.
+import type { APIRoute } from 'astro';
+import { guard, readBody, run } from '@/lib/api';
+import { noticeInput } from '@/lib/counter-request';
+import { listNotices, sendReadyNotice } from '@/services/notices';
+
+export const prerender = false;
+
+/** Every notice of the ticket with its state, attempts and last error. */
+export const GET: APIRoute = async ({ locals, params }) => {
+  const actor = guard(locals, ['tickets', 'read-all']);
+  if (actor instanceof Response) return actor;
+  return run(() => listNotices(actor, params.id ?? ''));
+};
+
+/** Sends the ready notice now. */
+export const POST: APIRoute = async ({ locals, request, params }) => {
+  const actor = guard(locals, ['notices', 'send']);
+  if (actor instanceof Response) return actor;
+  const input = await readBody(request, noticeInput);
+  if (input instanceof Response) return input;
+  return run(() => sendReadyNotice(actor, params.id ?? ''), 201);
+};

@@ -1,0 +1,23 @@
+// A ticket's money at the counter: the summary (lines, total, payments, balance) and taking a payment.
+import type { APIRoute } from 'astro';
+import { guard, readBody, run } from '@/lib/api';
+import { paymentInput } from '@/lib/counter-request';
+import { counterSummary, takePayment } from '@/services/payments';
+
+export const prerender = false;
+
+/** Lines, total, payments, balance due and the payment link. */
+export const GET: APIRoute = async ({ locals, params }) => {
+  const actor = guard(locals, ['prices', 'read']);
+  if (actor instanceof Response) return actor;
+  return run(() => counterSummary(actor, params.id ?? ''));
+};
+
+/** Takes a deposit or the balance in cash or by card. */
+export const POST: APIRoute = async ({ locals, request, params }) => {
+  const actor = guard(locals, ['tickets', 'pickup']);
+  if (actor instanceof Response) return actor;
+  const input = await readBody(request, paymentInput);
+  if (input instanceof Response) return input;
+  return run(() => takePayment(actor, params.id ?? '', input), 201);
+};
