@@ -8,6 +8,7 @@ import { auth } from '@/lib/auth';
 import type { Role } from '@/lib/roles';
 import { seedHousePresets } from './presets';
 import { seedBenchDemo } from './demo-bench-seed';
+import { seedCounterDemo } from './demo-counter-seed';
 
 /** The demo shop's name. */
 export const DEMO_SHOP = 'Pinmark & Hem';
@@ -51,5 +52,6 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
     .returning({ id: customers.id });
   await seedBenchDemo(shopId, people.map((p) => p.id), ids);
   await seedHousePresets(shopId);
+  await seedCounterDemo(shopId);
   return true;
 }

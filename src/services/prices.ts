@@ -139,7 +139,8 @@ export async function garmentFacts(shopId: string, ticketId: string): Promise<Ga
   const legs = rows.length === 0 ? [] : await db.select().from(measurements).where(eq(measurements.shopId, shopId));
   return rows.map((g, i) => {
     const own = legs.filter((m) => m.garmentId === g.id);
-    const finish = finishOf(g.finish ?? own[0]?.finish ?? null);
+    // The fitting's finish wins over the one noted at intake.
+    const finish = finishOf(own[0]?.finish ?? g.finish ?? null);
     return {
       garmentId: g.id,
       label: g.description?.trim() || `Garment ${i + 1}`,

@@ -92,6 +92,47 @@ function ownShop(actor: Actor): string {
   return actor === 'other' ? shopB : shopA;
 }
 
+/** A fresh shop A ticket with one price line from the list (the demo shop's cuff price). */
+async function pricedTicket(): Promise<string> {
+  const id = await freshTicket();
+  const r = await call('POST', `/api/tickets/${id}/price-lines`, { cookie: cookies.lead, body: { source: 'list', key: 'cuff-from-hem' } });
+  expect(r.status).toBe(201);
+  return id;
+}
+
+/** A fresh shop A ticket moved to ready, for a customer with an e-mail address. */
+async function readyTicket(): Promise<string> {
+  const c = await call('POST', '/api/customers', { cookie: cookies.lead, body: { name: 'Matrix Customer', email: freshEmail('ready') } });
+  const t = await call('POST', '/api/tickets', { cookie: cookies.lead, body: { customerId: c.body.id, note: 'matrix ready', garments: [{ description: 'Matrix trousers' }] } });
+  for (const status of ['marked', 'cut', 'stitched', 'pressed', 'ready']) {
+    const moved = await call('PATCH', `/api/tickets/${t.body.id}`, { cookie: cookies.lead, body: { status } });
+    expect(moved.status).toBe(200);
+  }
+  return t.body.id;
+}
+
+/** A ready ticket whose ready notice was sent: returns its retry path. */
+async function sentNotice(): Promise<string> {
+  const id = await readyTicket();
+  const n = await call('POST', `/api/tickets/${id}/notices`, { cookie: cookies.lead, body: { kind: 'ready' } });
+  expect(n.status).toBe(201);
+  return `/api/tickets/${id}/notices/${n.body.id}/retry`;
+}
+
+const PRICE_LIST = {
+  currency: 'EUR',
+  hours: 'Tue–Fri 9:00–18:00, Sat 9:00–13:00',
+  location: '7 Bobbin Row, Wickhollow',
+  autoReadyNotice: false,
+  items: [
+    { key: 'plain-hem', label: 'Plain hem', amountMinor: 1650 },
+    { key: 'cuff-from-hem', label: 'Cuff from a plain hem', amountMinor: 2400 },
+    { key: 'cuff-remake', label: 'Cuff let down and re-made', amountMinor: 2950 },
+    { key: 'taper-let-out', label: 'Taper let-out at the cuff (per pair)', amountMinor: 1100 },
+    { key: 'rush', label: 'Rush surcharge (per ticket)', amountMinor: 900 },
+  ],
+};
+
 /** Every route file (key) and method, with what each caller must get. */
 const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partial<Record<Method, Case>>> = {
   // The public calculator's routes (another team's): no sign-in by design.
@@ -267,6 +308,103 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       request: () => ({ path: '/api/assignees' }),
       expect: signedIn(200),
       check: (a, actor) => expect(a.body.length).toBeGreaterThanOrEqual(actor === 'other' ? 1 : 4),
+    },
+  },
+  // The counter: prices, price lines, payments, notices, claim slip, pickup (money work needs pickup).
+  prices: {
+    GET: {
+      request: () => ({ path: '/api/prices' }),
+      expect: signedIn(200, { apprentice: 403 }),
+      check: (a, actor) => {
+        expect(a.body.items).toHaveLength(5);
+        if (actor === 'other') expect(a.body.items.every((i: { amountMinor: number }) => i.amountMinor === 0)).toBe(true);
+        else expect(a.body.items.find((i: { key: string }) => i.key === 'cuff-from-hem').amountMinor).toBe(2400);
+      },
+    },
+    PUT: {
+      request: () => ({ path: '/api/prices', body: PRICE_LIST }),
+      expect: signedIn(403, { lead: 200, other: 200 }),
+      check: (a) => expect(a.body.hours).toBe(PRICE_LIST.hours),
+    },
+  },
+  'tickets/[id]/price-lines': {
+    GET: {
+      request: async () => ({ path: `/api/tickets/${await pricedTicket()}/price-lines` }),
+      expect: signedIn(200, { apprentice: 403, other: 404 }),
+      check: (a) => expect(a.body.map((l: { amountMinor: number }) => l.amountMinor)).toEqual([2400]),
+    },
+    POST: {
+      request: async () => ({ path: `/api/tickets/${await pricedTicket()}/price-lines`, body: { source: 'adjust', label: 'Matrix', amountMinor: -100, reason: 'matrix check' } }),
+      expect: signedIn(403, { lead: 201, counter: 201, other: 404 }),
+      check: (a) => expect([a.body.amountMinor, a.body.reason]).toEqual([-100, 'matrix check']),
+    },
+  },
+  'tickets/[id]/price-lines/auto': {
+    POST: {
+      request: async () => ({ path: `/api/tickets/${await freshTicket()}/price-lines/auto`, body: { rush: false } }),
+      expect: signedIn(403, { lead: 200, counter: 200, other: 404 }),
+      // The fixture's garment has no fitting yet: nothing to price, and it says which.
+      check: (a) => expect([a.body.lines, a.body.unpriced.length]).toEqual([[], 1]),
+    },
+  },
+  'tickets/[id]/payments': {
+    GET: {
+      request: async () => ({ path: `/api/tickets/${await pricedTicket()}/payments` }),
+      expect: signedIn(200, { apprentice: 403, other: 404 }),
+      check: (a) => expect([a.body.total, a.body.paid, a.body.due, a.body.currency]).toEqual([2400, 0, 2400, 'EUR']),
+    },
+    POST: {
+      request: async () => ({ path: `/api/tickets/${await pricedTicket()}/payments`, body: { purpose: 'deposit', method: 'cash', amountMinor: 1000 } }),
+      expect: signedIn(403, { lead: 201, counter: 201, other: 404 }),
+      check: (a) => expect([a.body.paid, a.body.due]).toEqual([1000, 1400]),
+    },
+  },
+  'tickets/[id]/payments/link': {
+    POST: {
+      request: async () => ({ path: `/api/tickets/${await pricedTicket()}/payments/link` }),
+      expect: signedIn(403, { lead: 201, counter: 201, other: 404 }),
+      check: (a) => expect(a.body.link).toMatchObject({ amountMinor: 2400, status: 'open', url: expect.stringMatching(/^http:\/\/127\.0\.0\.1:\d+\/pay\/cs_test_/) }),
+    },
+  },
+  'tickets/[id]/notices': {
+    GET: {
+      request: async () => ({ path: `/api/tickets/${await pricedTicket()}/notices` }),
+      expect: signedIn(200, { apprentice: 403, other: 404 }),
+      check: (a) => expect(a.body).toEqual([]),
+    },
+    POST: {
+      request: async () => ({ path: `/api/tickets/${await readyTicket()}/notices`, body: { kind: 'ready' } }),
+      expect: signedIn(403, { lead: 201, counter: 201, other: 404 }),
+      check: (a) => expect([a.body.kind, a.body.status]).toEqual(['ready', 'sent']),
+    },
+  },
+  'tickets/[id]/notices/[noticeId]/retry': {
+    POST: {
+      // A sent notice is not sent twice: those allowed to retry get 409.
+      request: async () => ({ path: await sentNotice() }),
+      expect: signedIn(403, { lead: 409, counter: 409, other: 404 }),
+    },
+  },
+  'tickets/[id]/claim-slip': {
+    GET: {
+      request: async () => ({ path: `/api/tickets/${await pricedTicket()}/claim-slip` }),
+      expect: signedIn(200, { apprentice: 403, other: 404 }),
+      check: (a) => expect(String(a.body).startsWith('%PDF-')).toBe(true),
+    },
+  },
+  'tickets/[id]/pickup': {
+    POST: {
+      // Ready with nothing priced: nothing due, so those allowed hand it over.
+      request: async () => ({ path: `/api/tickets/${await readyTicket()}/pickup` }),
+      expect: signedIn(403, { lead: 200, counter: 200, other: 404 }),
+      check: (a) => expect(a.body.ticket.status).toBe('collected'),
+    },
+  },
+  'payments/webhook': {
+    POST: {
+      // Public by design (the payment service calls it): without a valid signature, refused for all.
+      request: () => ({ path: '/api/payments/webhook', body: { id: 'evt_forged', type: 'checkout.session.completed' } }),
+      expect: all(400),
     },
   },
   outbox: {

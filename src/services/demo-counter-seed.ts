@@ -1,0 +1,28 @@
+// The demo shop's counter: an invented town, euro prices, opening hours. Every figure is made up.
+import { db } from '@/db';
+import { counterSettings, priceItems } from '@/db/schema';
+import type { PriceKey } from '@/lib/pricing/price-keys';
+import { DEFAULT_PRICE_LABELS } from '@/lib/pricing/price-keys';
+
+// Invented amounts in euro cents: no real shop's price list.
+const DEMO_PRICES: Record<PriceKey, number> = {
+  'plain-hem': 1650,
+  'cuff-from-hem': 2400,
+  'cuff-remake': 2950,
+  'taper-let-out': 1100,
+  rush: 900,
+};
+
+/** Gives the demo shop its price list and counter settings (ready notices sent by the counter). */
+export async function seedCounterDemo(shopId: string): Promise<void> {
+  await db.insert(counterSettings).values({
+    shopId,
+    currency: 'EUR',
+    hours: 'Tue–Fri 9:00–18:00, Sat 9:00–13:00',
+    location: '7 Bobbin Row, Wickhollow',
+    autoReadyNotice: false,
+  });
+  await db.insert(priceItems).values(
+    (Object.keys(DEMO_PRICES) as PriceKey[]).map((key) => ({ shopId, key, label: DEFAULT_PRICE_LABELS[key], amountMinor: DEMO_PRICES[key] })),
+  );
+}
