@@ -65,7 +65,8 @@ export function guideStrips(groups: SheetLegGroup[], unit: Unit, maxLength: numb
     const deepest = Math.max(...ticks.map((t) => t.y));
     const length = Math.min(maxLength, deepest + 26);
     return {
-      label: g.label === 'Both legs' ? 'Both legs' : g.label.replace(' leg', ''),
+      // A sloped hem's lines are planned at the back, where the pin is.
+      label: (g.label === 'Both legs' ? g.label : g.label.replace(' leg', '')) + (g.slopeNote ? ', at the back' : ''),
       length,
       ticks: ticks.filter((t) => t.y <= length),
       beyond: ticks.filter((t) => t.y > length),

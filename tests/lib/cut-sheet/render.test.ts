@@ -132,6 +132,7 @@ describe('a plain hem sloped 1/2 in', () => {
     expect(text).toContain('finished edge 1/2 in above and the cutting line 1 in below the back pin mark');
     expect(text).toContain('standard stitch (about 2.5–3 mm)');
     expect(text).not.toContain('Inner fold');
+    expect(text).toContain('Both legs, at the back');
   });
 });
 
