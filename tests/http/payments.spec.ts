@@ -1,0 +1,119 @@
+// Online payment against the real server and the local payment fake: a link made through the
+// SDK, paid on the fake's page, recorded by the signed webhook; replayed, forged and stale
+// webhooks refused; a paid balance cannot be paid again; the ready notice reaches the capture.
+import { beforeAll, describe, expect, it } from 'vitest';
+import { inject } from 'vitest';
+import Stripe from 'stripe';
+import { call, DEMO, freshEmail, signIn } from './client';
+import { waitForMail } from './mail';
+
+let counter = '';
+let lead = '';
+const signer = new Stripe('sk_test_signing_only');
+
+async function readyPricedTicket(email = freshEmail('pay')): Promise<string> {
+  const c = await call('POST', '/api/customers', { cookie: counter, body: { name: 'Perrin Loame', email } });
+  const t = await call('POST', '/api/tickets', { cookie: counter, body: { customerId: c.body.id, garments: [{ description: 'Brown moleskin' }] } });
+  expect(t.status).toBe(201);
+  const line = await call('POST', `/api/tickets/${t.body.id}/price-lines`, { cookie: counter, body: { source: 'list', key: 'cuff-from-hem' } });
+  expect(line.status).toBe(201);
+  for (const status of ['marked', 'cut', 'stitched', 'pressed', 'ready']) {
+    expect((await call('PATCH', `/api/tickets/${t.body.id}`, { cookie: lead, body: { status } })).status).toBe(200);
+  }
+  return t.body.id;
+}
+
+function signed(event: object, secret = inject('paymentsEnv').PAYMENTS_WEBHOOK_SECRET, timestamp?: number) {
+  const payload = JSON.stringify(event);
+  return { payload, signature: signer.webhooks.generateTestHeaderString({ payload, secret, timestamp }) };
+}
+
+async function webhook({ payload, signature }: { payload: string; signature: string }) {
+  const res = await fetch(`${inject('baseURL')}/api/payments/webhook`, { method: 'POST', headers: { 'content-type': 'application/json', 'stripe-signature': signature }, body: payload });
+  return { status: res.status, body: (await res.json()) as { error?: string; message?: string } };
+}
+
+const completed = (sessionId: string, amount: number, id = `evt_${Math.random().toString(36).slice(2)}`) => ({
+  id,
+  object: 'event',
+  type: 'checkout.session.completed',
+  data: { object: { id: sessionId, object: 'checkout.session', payment_status: 'paid', amount_total: amount, currency: 'eur' } },
+});
+
+beforeAll(async () => {
+  counter = await signIn(DEMO.counter);
+  lead = await signIn(DEMO.lead);
+  // The demo list as seeded; another test file may have changed it.
+  const list = await call('GET', '/api/prices', { cookie: lead });
+  await call('PUT', '/api/prices', { cookie: lead, body: { ...list.body, autoReadyNotice: false } });
+});
+
+describe('online payment through the local fake', () => {
+  it('pays the balance on the hosted page; the webhook records it once and the link closes', async () => {
+    const id = await readyPricedTicket();
+    await call('POST', `/api/tickets/${id}/payments`, { cookie: counter, body: { purpose: 'deposit', method: 'cash', amountMinor: 400 } });
+    const made = await call('POST', `/api/tickets/${id}/payments/link`, { cookie: counter });
+    expect(made.status).toBe(201);
+    expect(made.body.link).toMatchObject({ amountMinor: 2000, status: 'open' });
+    const url: string = made.body.link.url;
+    expect(url.startsWith(inject('paymentsEnv').PAYMENTS_API_BASE)).toBe(true);
+
+    const pagehtml = await (await fetch(url)).text();
+    expect(pagehtml).toContain('€20.00');
+    const paid = await fetch(url, { method: 'POST', redirect: 'manual' });
+    expect(paid.status).toBe(303);
+    expect(paid.headers.get('location')).toBe(`${inject('baseURL')}/paid`);
+
+    const after = await call('GET', `/api/tickets/${id}/payments`, { cookie: counter });
+    expect([after.body.total, after.body.paid, after.body.due]).toEqual([2400, 2400, 0]);
+    expect(after.body.payments.map((p: { purpose: string; method: string }) => `${p.purpose}/${p.method}`)).toEqual(['deposit/cash', 'balance/online']);
+    expect(after.body.link.status).toBe('paid');
+
+    // Paying twice: the hosted page refuses, no new link can be made, the counter cannot take it again.
+    expect((await fetch(url, { method: 'POST', redirect: 'manual' })).status).toBe(409);
+    expect((await call('POST', `/api/tickets/${id}/payments/link`, { cookie: counter })).status).toBe(422);
+    expect((await call('POST', `/api/tickets/${id}/payments`, { cookie: counter, body: { purpose: 'balance', method: 'cash', amountMinor: 2000 } })).status).toBe(409);
+
+    const handed = await call('POST', `/api/tickets/${id}/pickup`, { cookie: counter });
+    expect(handed.status).toBe(200);
+    expect(handed.body.ticket.status).toBe('collected');
+  });
+
+  it('refuses a replayed event, a forged signature and a stale one', async () => {
+    const id = await readyPricedTicket();
+    const made = await call('POST', `/api/tickets/${id}/payments/link`, { cookie: counter });
+    const session = String(made.body.link.url).split('/pay/')[1]!;
+    const event = completed(session, 2400);
+
+    expect((await webhook({ payload: JSON.stringify(event), signature: 't=1700000000,v1=00ff' })).status).toBe(400);
+    expect((await webhook(signed(event, 'whsec_not_the_shops'))).status).toBe(400);
+    expect((await webhook(signed(event, undefined, Math.floor(Date.now() / 1000) - 3600))).status).toBe(400);
+    expect((await call('GET', `/api/tickets/${id}/payments`, { cookie: counter })).body.due).toBe(2400);
+
+    const good = signed(event);
+    expect(await webhook(good)).toEqual({ status: 200, body: { received: true, message: 'Payment recorded.' } });
+    const replay = await webhook(good);
+    expect(replay).toEqual({ status: 409, body: { error: 'Event already processed.' } });
+    // The same payment under a new event id is refused too: the balance is paid once.
+    const again = await webhook(signed(completed(session, 2400)));
+    expect(again.status).toBe(409);
+    const summary = await call('GET', `/api/tickets/${id}/payments`, { cookie: counter });
+    expect(summary.body.payments).toHaveLength(1);
+  });
+});
+
+describe('ready notice through the mail capture', () => {
+  it('tells the customer the balance due and the shop hours', async () => {
+    const email = freshEmail('ready-notice');
+    const id = await readyPricedTicket(email);
+    const sent = await call('POST', `/api/tickets/${id}/notices`, { cookie: counter, body: { kind: 'ready' } });
+    expect(sent.status).toBe(201);
+    expect(sent.body.status).toBe('sent');
+    const mail = await waitForMail(email);
+    expect(mail.subject).toMatch(/^Ready to collect: ticket T-\d+$/);
+    expect(mail.text).toContain('Balance due at pickup: €24.00.');
+    expect(mail.text).toContain('Opening hours: Tue–Fri 9:00–18:00, Sat 9:00–13:00');
+    const list = await call('GET', `/api/tickets/${id}/notices`, { cookie: counter });
+    expect(list.body.map((n: { status: string; attempts: number }) => [n.status, n.attempts])).toEqual([['sent', 1]]);
+  });
+});
