@@ -1,0 +1,135 @@
+// The ticket's price lines: worked out from the garments, added from the list, or adjusted with a reason.
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import type { z } from 'zod';
+import { Field, FormMessage } from '@/components/Field';
+import { lineInput } from '@/lib/counter-request';
+import { formatMoney, parseMoney } from '@/lib/pricing/money';
+import { PRICE_KEYS, type PriceKey } from '@/lib/pricing/price-keys';
+import type { CounterSummary } from '@/services/payments';
+import { Money } from './Money';
+import { post, useCounterAction, usePriceList } from './counter-api';
+
+type Line = z.infer<typeof lineInput>;
+const button = 'min-h-11 rounded border-2 border-accent px-4 py-2 font-semibold text-accent disabled:opacity-50';
+
+function AdjustForm({ s, canChange }: { s: CounterSummary; canChange: boolean }) {
+  const { register, handleSubmit, formState, reset } = useForm<Line>({
+    resolver: zodResolver(lineInput),
+    defaultValues: { source: 'adjust', label: '', reason: '' },
+  });
+  const add = useCounterAction(s.ticket.id, (v: Line) => post(s.ticket.id, 'price-lines', v));
+  const errors = formState.errors as Partial<Record<'label' | 'amountMinor' | 'reason', { message?: string; type: string }>>;
+  return (
+    <form
+      noValidate
+      aria-label="Adjust the price"
+      onSubmit={handleSubmit((v) => add.mutate(v, { onSuccess: () => reset({ source: 'adjust', label: '', reason: '' }) }))}
+      className="mt-3 grid gap-3 sm:grid-cols-3"
+    >
+      <input type="hidden" {...register('source')} />
+      <Field label="Adjustment" registration={register('label')} error={errors.label as never} hint="e.g. Second pair, same cloth" id="adjust-label" />
+      <Field
+        label={`Amount (${s.currency}, minus to take off)`}
+        inputMode="decimal"
+        id="adjust-amount"
+        registration={register('amountMinor', { setValueAs: (v: string) => parseMoney(String(v ?? ''), s.currency) ?? Number.NaN })}
+        error={errors.amountMinor as never}
+        hint="e.g. -5.00"
+      />
+      <Field label="Reason" registration={register('reason')} error={errors.reason as never} id="adjust-reason" hint="Kept on the ticket" />
+      <div className="sm:col-span-3 flex flex-wrap items-center gap-3">
+        <button type="submit" disabled={!canChange || add.isPending} className={button}>
+          Add the adjustment
+        </button>
+        {add.error && <FormMessage kind="error">{add.error.message}</FormMessage>}
+      </div>
+    </form>
+  );
+}
+
+/** The lines with their total, and the counter's ways to change them. */
+export function PriceLinesCard({ s, canChange }: { s: CounterSummary; canChange: boolean }) {
+  const list = usePriceList();
+  const [rush, setRush] = useState(false);
+  const [key, setKey] = useState<PriceKey>('plain-hem');
+  const auto = useCounterAction(s.ticket.id, () => post<{ unpriced: string[] }>(s.ticket.id, 'price-lines/auto', { rush }));
+  const pick = useCounterAction(s.ticket.id, () => post(s.ticket.id, 'price-lines', { source: 'list', key }));
+  const error = auto.error ?? pick.error;
+  return (
+    <section aria-labelledby="lines-h" className="rounded border-2 border-rule bg-card p-4">
+      <h2 id="lines-h" className="text-xl font-extrabold">
+        Price
+      </h2>
+      {s.lines.length === 0 ? (
+        <p className="mt-2 text-muted">No lines yet: price the ticket from its garments or add a line from the list.</p>
+      ) : (
+        <table className="mt-2 w-full text-lg">
+          <caption className="sr-only">Price lines</caption>
+          <tbody>
+            {s.lines.map((l) => (
+              <tr key={l.id} className="border-t border-rule align-top">
+                <td className="py-2 pr-3">
+                  {l.label}
+                  {l.reason && <div className="text-base text-muted">Reason: {l.reason}</div>}
+                </td>
+                <td className="py-2 text-right">
+                  <Money minor={l.amountMinor} currency={s.currency} />
+                </td>
+              </tr>
+            ))}
+          </tbody>
+          <tfoot>
+            <tr className="border-t-2 border-ink">
+              <th scope="row" className="py-2 text-left">
+                Total
+              </th>
+              <td className="py-2 text-right text-2xl font-extrabold">
+                <Money minor={s.total} currency={s.currency} />
+              </td>
+            </tr>
+          </tfoot>
+        </table>
+      )}
+      {canChange && (
+        <>
+          <div className="mt-4 flex flex-wrap items-center gap-3">
+            <label className="inline-flex min-h-11 items-center gap-2 font-semibold">
+              <input type="checkbox" checked={rush} onChange={(e) => setRush(e.target.checked)} className="h-6 w-6" />
+              Rush
+            </label>
+            <button type="button" className={button} disabled={auto.isPending} onClick={() => auto.mutate(undefined)}>
+              Price from the garments
+            </button>
+          </div>
+          <div className="mt-3 flex flex-wrap items-end gap-3">
+            <div className="flex flex-col gap-1">
+              <label htmlFor="list-line" className="font-semibold">
+                Line from the price list
+              </label>
+              <select id="list-line" value={key} onChange={(e) => setKey(e.target.value as PriceKey)} className="min-h-11 rounded border-2 border-rule bg-card px-3 py-2 text-lg">
+                {PRICE_KEYS.map((k) => {
+                  const entry = list.data?.items.find((i) => i.key === k);
+                  return (
+                    <option key={k} value={k}>
+                      {entry ? `${entry.label} — ${formatMoney(entry.amountMinor, list.data!.currency)}` : k}
+                    </option>
+                  );
+                })}
+              </select>
+            </div>
+            <button type="button" className={button} disabled={pick.isPending} onClick={() => pick.mutate(undefined)}>
+              Add the line
+            </button>
+          </div>
+          {auto.data && auto.data.unpriced.length > 0 && (
+            <FormMessage kind="error">{auto.data.unpriced.length} garment(s) have no finish yet and were not priced.</FormMessage>
+          )}
+          {error && <FormMessage kind="error">{error.message}</FormMessage>}
+          <AdjustForm s={s} canChange={canChange} />
+        </>
+      )}
+    </section>
+  );
+}

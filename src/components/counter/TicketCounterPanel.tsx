@@ -1,0 +1,78 @@
+// The counter's panel for one ticket: price lines, total, deposit, balance, payments, notices,
+// claim slip and handing over. Mounted on the ticket page and on /counter/[ticketId].
+import { useQuery } from '@tanstack/react-query';
+import { FormMessage } from '@/components/Field';
+import { fetchJson } from '@/lib/fetch-json';
+import { withQuery } from '@/components/WithQuery';
+import { can, type Role } from '@/lib/roles';
+import { NoticesCard } from './NoticesCard';
+import { PaymentsCard } from './PaymentsCard';
+import { PriceLinesCard } from './PriceLinesCard';
+import { post, useCounterAction, useSummary } from './counter-api';
+
+interface Props {
+  ticketId: string;
+  /** the viewer's role when the page knows it; otherwise read from /api/me */
+  role?: Role;
+}
+
+function Panel({ ticketId, role: given }: Props) {
+  const summary = useSummary(ticketId);
+  const me = useQuery({ queryKey: ['me'], queryFn: () => fetchJson<{ role: Role }>('/api/me'), enabled: !given });
+  const role = given ?? me.data?.role;
+  const handOver = useCounterAction(ticketId, () => post(ticketId, 'pickup'));
+  if (summary.isPending || !role) return <p role="status">Loading the ticket's money…</p>;
+  if (summary.error) return <FormMessage kind="error">{summary.error.message}</FormMessage>;
+  const s = summary.data;
+  const counterWork = can(role, ['tickets', 'pickup']);
+  const collected = s.ticket.status === 'collected';
+  return (
+    <div className="flex flex-col gap-4">
+      <div className="flex flex-wrap items-baseline gap-x-6 gap-y-2">
+        <p className="text-4xl font-extrabold" data-testid="ticket-number">
+          T-{s.ticket.number}
+        </p>
+        <p className="text-xl">{s.ticket.customerName ?? 'No customer named'}</p>
+        <p className="text-xl">
+          Status: <strong data-testid="ticket-status">{s.ticket.status}</strong>
+        </p>
+        {s.ticket.dueOn && <p className="text-xl">Due {s.ticket.dueOn}</p>}
+      </div>
+      <PriceLinesCard s={s} canChange={counterWork && !collected && !s.payments.some((p) => p.purpose === 'balance')} />
+      <PaymentsCard s={s} canTake={counterWork} />
+      <NoticesCard s={s} canSend={can(role, ['notices', 'send'])} />
+      <section aria-labelledby="hand-h" className="rounded border-2 border-rule bg-card p-4">
+        <h2 id="hand-h" className="text-xl font-extrabold">
+          Claim slip and pickup
+        </h2>
+        <div className="mt-2 flex flex-wrap items-center gap-3">
+          <a
+            href={`/api/tickets/${ticketId}/claim-slip`}
+            target="_blank"
+            rel="noopener"
+            className="inline-flex min-h-11 items-center rounded border-2 border-accent px-4 font-semibold text-accent"
+          >
+            Print the claim slip (PDF)
+          </a>
+          {counterWork && !collected && (
+            <button
+              type="button"
+              onClick={() => handOver.mutate(undefined)}
+              disabled={handOver.isPending || s.ticket.status !== 'ready' || s.due > 0}
+              className="min-h-11 rounded bg-ink px-5 py-2 text-lg font-semibold text-white disabled:opacity-50"
+            >
+              Hand over and close the ticket
+            </button>
+          )}
+        </div>
+        {!collected && s.ticket.status === 'ready' && s.due > 0 && <p className="mt-2 text-warn font-semibold">Take the balance before handing over.</p>}
+        {collected && <p className="mt-2 rounded border-2 border-ok bg-ok-soft px-3 py-2 text-lg font-semibold text-ok">Collected: the ticket is closed with its payment on record.</p>}
+        {handOver.error && <FormMessage kind="error">{handOver.error.message}</FormMessage>}
+      </section>
+    </div>
+  );
+}
+
+/** The counter panel island for one ticket. */
+export const TicketCounterPanel = withQuery(Panel);
+export default TicketCounterPanel;

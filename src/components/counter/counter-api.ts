@@ -1,0 +1,42 @@
+// The counter panel's queries and mutations: one place for the URLs and the cache keys.
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { Notice } from '@/db/schema/notices';
+import { fetchJson } from '@/lib/fetch-json';
+import type { PriceListView } from '@/services/prices';
+import type { CounterSummary } from '@/services/payments';
+
+/** The ticket's money: lines, total, payments, balance, link. */
+export function useSummary(ticketId: string) {
+  return useQuery({ queryKey: ['counter', ticketId], queryFn: () => fetchJson<CounterSummary>(`/api/tickets/${ticketId}/payments`) });
+}
+
+/** The ticket's notices; polled while one waits for a retry. */
+export function useNotices(ticketId: string) {
+  return useQuery({
+    queryKey: ['notices', ticketId],
+    queryFn: () => fetchJson<Notice[]>(`/api/tickets/${ticketId}/notices`),
+    refetchInterval: (q) => (q.state.data?.some((n) => n.status !== 'sent') ? 5_000 : false),
+  });
+}
+
+/** The shop's price list (for "add from the list"). */
+export function usePriceList() {
+  return useQuery({ queryKey: ['prices'], queryFn: () => fetchJson<PriceListView>('/api/prices') });
+}
+
+/** A mutation on the ticket that refreshes the money and the notices after it. */
+export function useCounterAction<I, O = unknown>(ticketId: string, call: (input: I) => Promise<O>) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: call,
+    onSettled: () => {
+      void client.invalidateQueries({ queryKey: ['counter', ticketId] });
+      void client.invalidateQueries({ queryKey: ['notices', ticketId] });
+    },
+  });
+}
+
+/** POSTs JSON to one of the ticket's counter routes. */
+export function post<O>(ticketId: string, path: string, body: unknown = {}): Promise<O> {
+  return fetchJson<O>(`/api/tickets/${ticketId}/${path}`, { method: 'POST', body });
+}
