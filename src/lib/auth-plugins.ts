@@ -5,7 +5,8 @@ import { createAccessControl } from 'better-auth/plugins/access';
 import { grants, statements } from './roles';
 
 const ac = createAccessControl(statements);
-const roles = {
+/** better-auth's role objects, built from the one definition in roles.ts. */
+export const shopRoles = {
   lead: ac.newRole(grants.lead),
   tailor: ac.newRole(grants.tailor),
   apprentice: ac.newRole(grants.apprentice),
@@ -21,7 +22,7 @@ export interface ShopPluginDeps {
 export function shopPlugin(deps: ShopPluginDeps) {
   return organization({
     ac,
-    roles,
+    roles: shopRoles,
     creatorRole: 'lead',
     // Shops are created through /api/shops (sign-up), never by a signed-in member.
     allowUserToCreateOrganization: false,
