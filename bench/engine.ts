@@ -106,16 +106,21 @@ for (const c of cases) {
   console.log(`${c.name.padEnd(60)} ${fmt(wall).padStart(10)} plans/s   (per CPU-second ${fmt(cpu)})`);
 }
 
+// Judged per CPU-second: on this shared 2-core machine wall time also counts the time other work held the core.
 const primary = results[0]!;
-const cuffWorst = Math.min(...results.filter((r) => r.kind === 'cuff' && !r.name.includes('mathjs') && !r.name.includes('JSON')).map((r) => r.plansPerSecond));
-const met = primary.plansPerSecond >= GOAL;
-console.log(`\ngoal ${fmt(GOAL)} cuff plans/s: ${met ? 'met' : 'MISSED'} (depth-only ${fmt(primary.plansPerSecond)}; slowest everyday cuff case ${fmt(cuffWorst)})`);
+const everyday = results.filter((r) => r.kind === 'cuff' && !r.name.includes('mathjs') && !r.name.includes('JSON'));
+const slowest = everyday.reduce((a, b) => (b.plansPerCpuSecond < a.plansPerCpuSecond ? b : a));
+const met = primary.plansPerCpuSecond >= GOAL;
+console.log(
+  `\ngoal ${fmt(GOAL)} cuff plans/s on one core: ${met ? 'met' : 'MISSED'} — depth only ${fmt(primary.plansPerCpuSecond)} per CPU-second (${fmt(primary.plansPerSecond)} wall);`,
+);
+console.log(`slowest everyday cuff case: ${slowest.name}, ${fmt(slowest.plansPerCpuSecond)} per CPU-second (${fmt(slowest.plansPerSecond)} wall)`);
 const load1 = loadavg()[0]!;
 console.log(`load average ${load0.toFixed(2)} → ${load1.toFixed(2)} (other work on the machine lowers these numbers)`);
 
 mkdirSync('bench-results', { recursive: true });
 writeFileSync(
   'bench-results/engine.json',
-  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, cores: cpus().length, loadAverage: [load0, load1], goal: GOAL, goalMet: met, runs: RUNS, runMs: RUN_MS, results }, null, 2)}\n`,
+  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, cores: cpus().length, loadAverage: [load0, load1], goal: GOAL, goalMet: met, judgedBy: 'plans per CPU-second, depth-only cuff plans', runs: RUNS, runMs: RUN_MS, results }, null, 2)}\n`,
 );
 console.log('written: bench-results/engine.json');

@@ -6,11 +6,13 @@ import type { CreaseLanding, CreasePlace, Len } from './types';
 /** What crease landing needs of a plan: exact lengths, with their nearest numbers for quick comparisons. */
 export interface CreaseContext {
   cuffDepth: Fraction;
+  cuffDepthMm: number;
   lines: CuffLinePositions;
   /** the lines' mm as numbers, top to bottom */
   linesMm: readonly number[];
   /** a crease this close to a new fold is taken by the fold */
   onFoldWithin: Fraction;
+  onFoldWithinMm: number;
   len: LenMaker;
 }
 
@@ -18,7 +20,7 @@ const ZERO = new Fraction(0);
 
 /** Follow an old crease (mm below the mark, negative above) through the cuff's folds. */
 export function creaseLanding(crease: Fraction, ctx: CreaseContext): CreaseLanding {
-  const { cuffDepth: d, lines, linesMm, onFoldWithin, len } = ctx;
+  const { cuffDepth: d, cuffDepthMm: dMm, lines, linesMm, onFoldWithin, len } = ctx;
   const land = (place: CreasePlace, height: Len, message: string): CreaseLanding => ({
     place,
     heightAboveEdge: height,
@@ -26,8 +28,7 @@ export function creaseLanding(crease: Fraction, ctx: CreaseContext): CreaseLandi
     message,
   });
   const c = mmNumber(crease);
-  const dMm = mmNumber(d);
-  const near = mmNumber(onFoldWithin) + 1e-6;
+  const near = ctx.onFoldWithinMm + 1e-6;
   // The exact test runs only when the numbers say the crease is near a fold.
   const onFold = (at: Fraction, atMm: number) =>
     Math.abs(c - atMm) <= near && crease.sub(at).abs().compare(onFoldWithin) <= 0;
@@ -42,13 +43,13 @@ export function creaseLanding(crease: Fraction, ctx: CreaseContext): CreaseLandi
     return land('on-fold', len(fold === 'cuff top' ? d : ZERO), `The old crease falls on the new ${fold}: the new fold takes it, so it will not show.`);
   }
   if (c < 0) {
-    const h = crease.neg();
-    const at = len(h);
-    if (compareExact(h, -c, d, dMm) >= 0) {
+    // On the leg the height is −crease; it shows when it reaches the cuff top (−crease ≥ d).
+    const at = len(crease, true);
+    if (compareExact(crease, c, d, -dMm, true) <= 0) {
       return land(
         'leg-visible',
         at,
-        `The old hem crease will show on the leg, ${at.text} above the finished edge, ${len(h.sub(d)).text} above the cuff top. Press or steam it out before finishing, or choose a cuff depth that covers it.`,
+        `The old hem crease will show on the leg, ${at.text} above the finished edge, ${len(crease.add(d), true).text} above the cuff top. Press or steam it out before finishing, or choose a cuff depth that covers it.`,
       );
     }
     return land('behind-cuff', at, `The old crease lies on the leg behind the cuff, ${at.text} above the finished edge: the cuff hides it.`);

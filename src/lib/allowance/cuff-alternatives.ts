@@ -16,14 +16,28 @@ export interface AlternativesContext {
   len: LenMaker;
 }
 
+// Shallowest and deepest cuff in whole display steps, per unit and precision: constants, worked out once.
+const limits = new Map<string, [number, number]>();
+
+function cuffLimitSteps(unit: Unit, precision: Precision, defaults: ExactDefaults): [number, number] {
+  const key = `${unit}/${precision}`;
+  let found = limits.get(key);
+  if (found === undefined) {
+    const [a, b] = stepRatio(unit, precision);
+    found = [-floorSteps(defaults.shallowestCuff.neg(), a, b), floorSteps(defaults.maxCuffDepth, a, b)];
+    limits.set(key, found);
+  }
+  return found;
+}
+
 /** The deepest three-equal-section cuff (exact mm, down to the display step) that fits, or null under the shallowest. */
 export function deepestCuff(ctx: AlternativesContext): Fraction | null {
   const { available, clothThickness: t, unit, precision, defaults } = ctx;
   const room = t.n === 0n ? available : available.sub(t.mul(2));
   const [a, b] = stepRatio(unit, precision);
-  let depth = stepsToMm(floorSteps(room, a, 3 * b), unit, precision);
-  if (depth.compare(defaults.maxCuffDepth) > 0) depth = defaults.maxCuffDepth;
-  return depth.compare(defaults.shallowestCuff) < 0 ? null : depth;
+  const [shallowest, deepest] = cuffLimitSteps(unit, precision, defaults);
+  const steps = Math.min(floorSteps(room, a, 3 * b), deepest);
+  return steps < shallowest ? null : stepsToMm(steps, unit, precision);
 }
 
 /** What still fits when the cloth is short: a shallower cuff, a plain hem, or a faced cuff. */

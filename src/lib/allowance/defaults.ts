@@ -24,6 +24,8 @@ export interface ExactDefaults {
   facingSeam: Fraction;
   shallowestCuff: Fraction;
   onFoldWithin: Fraction;
+  /** onFoldWithin as a number, for the quick test before the exact one */
+  onFoldWithinMm: number;
   maxCuffDepth: Fraction;
   usualCuffDepth: ExactRange;
   usualHemAllowance: ExactRange;
@@ -42,6 +44,7 @@ const IMPERIAL: ExactDefaults = {
   facingSeam: inch(1, 2),
   shallowestCuff: inch(1, 2),
   onFoldWithin: inch(1, 16),
+  onFoldWithinMm: 25.4 / 16,
   maxCuffDepth: inch(6),
   usualCuffDepth: range(inch(1), inch(9, 4)),
   usualHemAllowance: range(inch(5, 4), inch(2)),
@@ -55,6 +58,7 @@ const METRIC: ExactDefaults = {
   facingSeam: mm(12),
   shallowestCuff: mm(12),
   onFoldWithin: mm(3, 2),
+  onFoldWithinMm: 1.5,
   maxCuffDepth: mm(150),
   usualCuffDepth: range(mm(25), mm(57)),
   usualHemAllowance: range(mm(32), mm(51)),
@@ -67,7 +71,7 @@ export function exactDefaults(unit: Unit): ExactDefaults {
 
 /** Defaults and usual ranges of one unit, as lengths shown in that unit. */
 export type PlanDefaults = { precision: 16 } & {
-  [K in keyof ExactDefaults]: ExactDefaults[K] extends ExactRange ? Usual<Len> : Len;
+  [K in Exclude<keyof ExactDefaults, 'onFoldWithinMm'>]: ExactDefaults[K] extends ExactRange ? Usual<Len> : Len;
 };
 
 function lenOf(f: Fraction, unit: Unit): Len {

@@ -2,8 +2,8 @@ import type Fraction from 'fraction.js';
 import { formatExact, roundRatio, stepRatio, stepsText } from './format-length';
 import type { Len, Precision, Unit } from './types';
 
-/** Makes Len values in one plan's unit and precision. */
-export type LenMaker = (mm: Fraction) => Len;
+/** Makes Len values in one plan's unit and precision; `negate` shows −mm without building it. */
+export type LenMaker = (mm: Fraction, negate?: boolean) => Len;
 
 const SAFE = Number.MAX_SAFE_INTEGER;
 
@@ -18,25 +18,28 @@ export function mmNumber(mm: Fraction): number {
 /** A Len maker for a unit and precision: exact mm as a number plus the display text. */
 export function lenMaker(unit: Unit, precision: Precision): LenMaker {
   const [a, b] = stepRatio(unit, precision);
-  return (mm) => {
+  return (mm, negate = false) => {
     // One BigInt-to-number conversion serves both the number and the text (the hot path of every plan).
     const n = Number(mm.n);
     const d = Number(mm.d);
-    const neg = mm.s < 0n;
+    const neg = mm.n !== 0n && mm.s < 0n !== negate;
     const q = n <= SAFE && d <= SAFE ? roundRatio(n, d, a, b) : Number.NaN;
-    if (Number.isNaN(q)) return { mm: mm.valueOf(), text: formatExact(mm, unit, precision) };
+    if (Number.isNaN(q)) {
+      const exact = negate ? mm.neg() : mm;
+      return { mm: exact.valueOf(), text: formatExact(exact, unit, precision) };
+    }
     return { mm: neg ? -n / d : n / d, text: stepsText(q === 0 ? 0 : neg ? -q : q, unit, precision) };
   };
 }
 
 /**
- * Compare two exact lengths, given their nearest numbers too: the numbers settle it when they are
- * clearly apart (they are within a rounding of the exact values), the Fractions only when close.
+ * Compare two exact lengths (b negated when asked), given their nearest numbers too: the numbers
+ * settle it when clearly apart (each is within a rounding of its exact value), the Fractions when close.
  */
-export function compareExact(a: Fraction, aMm: number, b: Fraction, bMm: number): number {
+export function compareExact(a: Fraction, aMm: number, b: Fraction, bMm: number, negateB = false): number {
   const gap = aMm - bMm;
   const margin = 1e-12 * (1 + Math.abs(aMm) + Math.abs(bMm));
   if (gap > margin) return 1;
   if (gap < -margin) return -1;
-  return a.compare(b);
+  return a.compare(negateB ? b.neg() : b);
 }

@@ -4,7 +4,7 @@ import { cuffAlternatives } from './cuff-alternatives';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
 import { type ExactDefaults, exactDefaults } from './defaults';
 import { compareExact, type LenMaker, lenMaker } from './len';
-import { InputReader } from './read-input';
+import { InputReader, type LengthRule } from './read-input';
 import type { CuffInput, CuffLine, CuffPlan, Len, PlanWarning, Precision, Unit } from './types';
 
 /** A cuff input read and checked: exact mm throughout. */
@@ -21,6 +21,9 @@ export interface CuffValues {
 }
 
 const ZERO = new Fraction(0);
+const POSITIVE: LengthRule = { min: 'positive' };
+const NON_NEGATIVE: LengthRule = { min: 'non-negative' };
+const ANY: LengthRule = {};
 
 /** Read a cuff input field by field (errors carry the field name). */
 export function readCuffInput(input: CuffInput, r: InputReader): CuffValues {
@@ -35,12 +38,12 @@ export function readCuffInput(input: CuffInput, r: InputReader): CuffValues {
     unit: r.unit,
     precision: r.precision,
     cuffDepth: d,
-    hemSection: r.length(input.hemSection, 'hemSection', 'Third section', { min: 'positive' }) ?? d,
-    turnUnder: r.length(input.turnUnder, 'turnUnder', 'Turn-under', { min: 'non-negative' }) ?? defaults.cuffTurnUnder,
-    available: r.length(input.available, 'available', 'Cloth below the mark', { min: 'non-negative' }),
-    clothThickness: r.length(input.clothThickness, 'clothThickness', 'Turn of cloth', { min: 'non-negative' }) ?? ZERO,
-    oldCrease: r.length(input.oldCrease, 'oldCrease', 'Old crease'),
-    slope: r.length(input.slope, 'slope', 'Slope'),
+    hemSection: r.length(input.hemSection, 'hemSection', 'Third section', POSITIVE) ?? d,
+    turnUnder: r.length(input.turnUnder, 'turnUnder', 'Turn-under', NON_NEGATIVE) ?? defaults.cuffTurnUnder,
+    available: r.length(input.available, 'available', 'Cloth below the mark', NON_NEGATIVE),
+    clothThickness: r.length(input.clothThickness, 'clothThickness', 'Turn of cloth', NON_NEGATIVE) ?? ZERO,
+    oldCrease: r.length(input.oldCrease, 'oldCrease', 'Old crease', ANY),
+    slope: r.length(input.slope, 'slope', 'Slope', ANY),
   };
 }
 
@@ -122,7 +125,7 @@ export function planCuff(input: CuffInput): CuffPlan {
     if (enough) {
       spare = { ...lines[3]!.aboveRawEdge! };
     } else {
-      shortBy = len(rest.neg());
+      shortBy = len(rest, true);
       alternatives = cuffAlternatives({
         available: A,
         innerFold: positions.innerFold,
@@ -153,9 +156,11 @@ export function planCuff(input: CuffInput): CuffPlan {
   if (v.oldCrease !== null) {
     const landing = creaseLanding(v.oldCrease, {
       cuffDepth: v.cuffDepth,
+      cuffDepthMm: depth.mm,
       lines: positions,
       linesMm: lines.map((l) => l.belowMark.mm),
       onFoldWithin: defaults.onFoldWithin,
+      onFoldWithinMm: defaults.onFoldWithinMm,
       len,
     });
     plan.creaseLands = landing;

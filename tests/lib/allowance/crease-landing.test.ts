@@ -12,6 +12,8 @@ function land(creaseIn: Fraction, unit: 'in' | 'mm' = 'in') {
   const lines = cuffLinePositions(d, d, new Fraction(0));
   return creaseLanding(creaseIn, {
     cuffDepth: d,
+    cuffDepthMm: d.valueOf(),
+    onFoldWithinMm: unit === 'in' ? 25.4 / 16 : 1.5,
     lines,
     linesMm: linePositionList(lines).map((f) => f.valueOf()),
     onFoldWithin: unit === 'in' ? inch(1, 16) : new Fraction(3, 2),

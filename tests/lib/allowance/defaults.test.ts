@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULTS, USUAL_CUFF_DEPTHS } from '@/lib/allowance';
+import { exactDefaults } from '@/lib/allowance/defaults';
 
 describe('DEFAULTS', () => {
   it('inch defaults (TRADE.md: turn-under ½ in common practice; hem 1¼–2 in and turn-under ¼ in, powersewing.com; ⅛ in tolerance common practice)', () => {
@@ -39,5 +40,17 @@ describe('USUAL_CUFF_DEPTHS', () => {
     expect(USUAL_CUFF_DEPTHS.mm.map((u) => u.depth.text)).toEqual(['32 mm', '38 mm', '44 mm', '50 mm']);
     expect(USUAL_CUFF_DEPTHS.cm.map((u) => u.depth.text)).toEqual(['3.2 cm', '3.8 cm', '4.4 cm', '5 cm']);
     USUAL_CUFF_DEPTHS.mm.forEach((u, k) => expect(Math.abs(u.depth.mm - USUAL_CUFF_DEPTHS.in[k]!.depth.mm)).toBeLessThan(1));
+  });
+});
+
+describe('exact defaults', () => {
+  it('the quick numbers match their exact twins (1/16 in = 1.5875 mm, NBS 1959; 1.5 mm metric)', () => {
+    for (const unit of ['in', 'mm'] as const) {
+      const e = exactDefaults(unit);
+      expect(e.onFoldWithinMm).toBe(e.onFoldWithin.valueOf());
+      expect(e.usualCuffDepth.minMm).toBe(e.usualCuffDepth.min.valueOf());
+      expect(e.usualHemAllowance.maxMm).toBe(e.usualHemAllowance.max.valueOf());
+    }
+    expect(exactDefaults('in').onFoldWithinMm).toBe(1.5875);
   });
 });
