@@ -1,0 +1,143 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useEffect, useState } from 'react';
+import { useForm, useWatch, type Resolver } from 'react-hook-form';
+import { Segmented } from '@/components/calculator/Segmented';
+import { useDebounced } from '@/components/calculator/use-debounced';
+import { PresetPicker, type PresetSettings } from '@/components/presets/PresetPicker';
+import type { Precision, Unit } from '@/lib/allowance/types';
+import type { FittingView } from '@/lib/bench-types';
+import { ApiError, fetchJson } from '@/lib/fetch-json';
+import {
+  LEGS,
+  legFormValues,
+  measurementsRequest,
+  type Leg,
+  type LegLength,
+  type Measurements,
+  type MeasurementsInput,
+} from '@/lib/measurement-request';
+import { LegFields } from './LegFields';
+import { LegPlan } from './LegPlan';
+
+interface Props {
+  garmentId: string;
+  fitting: FittingView;
+  unit: Unit;
+  precision: Precision;
+}
+
+const resolver = zodResolver(measurementsRequest) as unknown as Resolver<MeasurementsInput, unknown, Measurements>;
+
+function formValues(fitting: FittingView, unit: Unit): MeasurementsInput {
+  const byLeg = new Map(fitting.legs.map((l) => [l.leg, l]));
+  return { unit: fitting.legs[0]?.unit ?? unit, legs: { left: legFormValues(byLeg.get('left')), right: legFormValues(byLeg.get('right')) } };
+}
+
+/** Typed text from a preset, carrying the preset's unit when it differs from the form's. */
+function inUnit(text: string | undefined, from: Unit, to: Unit): string {
+  if (!text) return '';
+  return from === to || /[a-z"″]/i.test(text) ? text : `${text} ${from}`;
+}
+
+/** Both legs' fitting as a form, the chosen leg's live plan beside it; nothing typed is lost on a failed save. */
+export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
+  const client = useQueryClient();
+  const form = useForm<MeasurementsInput, unknown, Measurements>({ defaultValues: formValues(fitting, unit), resolver, mode: 'onChange' });
+  const { register, control, setValue, setError, reset, handleSubmit, formState } = form;
+  const values = useWatch({ control }) as Measurements;
+  const [leg, setLeg] = useState<Leg>('left');
+  const current = useDebounced(values.legs[leg], 250);
+  const other: Leg = leg === 'left' ? 'right' : 'left';
+
+  const save = useMutation({
+    mutationFn: (body: Measurements) => fetchJson<FittingView>(`/api/garments/${garmentId}/measurements`, { method: 'PUT', body }),
+    onSuccess: (saved) => {
+      client.setQueryData(['fitting', garmentId], saved);
+      reset(formValues(saved, unit));
+    },
+    onError: (e) => {
+      if (!(e instanceof ApiError)) return;
+      for (const [path, message] of Object.entries(e.issues)) {
+        setError(path as `legs.left.${LegLength}`, { type: 'server', message });
+        const side = path.split('.')[1];
+        if (side === 'left' || side === 'right') setLeg(side);
+      }
+    },
+  });
+
+  // Leaving the page with unsaved lengths asks first.
+  useEffect(() => {
+    const warn = (e: BeforeUnloadEvent) => {
+      if (formState.isDirty) e.preventDefault();
+    };
+    window.addEventListener('beforeunload', warn);
+    return () => window.removeEventListener('beforeunload', warn);
+  }, [formState.isDirty]);
+
+  const errorFor = (f: LegLength) => formState.errors.legs?.[leg]?.[f]?.message;
+
+  const applyPreset = (p: PresetSettings) => {
+    const u = values.unit;
+    const finish = p.finish === 'cuff' ? 'cuff' : p.slope ? 'slope' : 'plain';
+    setValue(`legs.${leg}.finish`, finish, { shouldDirty: true });
+    for (const f of ['cuffDepth', 'hemSection', 'turnUnder', 'hemAllowance', 'slope'] as const) {
+      setValue(`legs.${leg}.${f}`, inUnit(p[f], p.unit, u), { shouldDirty: true, shouldValidate: true });
+    }
+  };
+
+  const copyOther = () => {
+    const from = values.legs[other];
+    for (const [k, v] of Object.entries(from)) setValue(`legs.${leg}.${k as LegLength}`, v as string, { shouldDirty: true, shouldValidate: true });
+  };
+
+  return (
+    <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,30rem)_minmax(0,1fr)]">
+      <form
+        aria-label="Fitting measurements"
+        noValidate
+        onSubmit={handleSubmit((body) => save.mutate(body))}
+        className="flex flex-col gap-5 rounded-lg border-2 border-rule bg-card p-4"
+      >
+        <Segmented name="leg" legend="Leg" value={leg} onChange={setLeg} options={LEGS.map((l) => ({ value: l, label: l === 'left' ? 'Left leg' : 'Right leg' }))} />
+        <p className="text-base text-muted">
+          Lengths in <strong className="text-ink">{values.unit}</strong>; fractions welcome (1 1/2, 1½, 31 3/4 + 1/8), or name a unit (38 mm).
+        </p>
+        <details className="rounded-md border-2 border-rule p-3">
+          <summary className="min-h-11 cursor-pointer content-center text-lg font-extrabold">Presets for the {leg} leg</summary>
+          <div className="mt-3">
+            <PresetPicker unit={values.unit} onApply={applyPreset} />
+          </div>
+        </details>
+        <LegFields
+          key={leg}
+          leg={leg}
+          finish={values.legs[leg].finish}
+          unit={values.unit}
+          register={register}
+          onFinish={(f) => setValue(`legs.${leg}.finish`, f, { shouldDirty: true })}
+          errorFor={errorFor}
+        />
+        <button type="button" onClick={copyOther} className="min-h-11 self-start rounded-md border-2 border-ink px-4 text-lg font-semibold">
+          Same as the {other} leg
+        </button>
+        <div className="sticky bottom-0 flex flex-col gap-2 border-t-2 border-rule bg-card pt-3">
+          {save.error && (
+            <p role="alert" className="rounded border-2 border-cut bg-cut-soft px-3 py-2 font-semibold text-cut">
+              Not saved: {save.error.message} Everything you typed is still here.
+            </p>
+          )}
+          {save.isSuccess && !formState.isDirty && (
+            <p role="status" className="rounded border-2 border-ok bg-ok-soft px-3 py-2 font-semibold text-ok">
+              Saved both legs.
+            </p>
+          )}
+          <button type="submit" disabled={save.isPending} className="min-h-14 rounded-lg bg-accent px-5 text-xl font-extrabold text-white disabled:opacity-60">
+            {save.isPending ? 'Saving…' : formState.isDirty ? 'Save measurements' : 'Save measurements (no changes)'}
+          </button>
+        </div>
+      </form>
+      <LegPlan leg={leg} values={current} unit={values.unit} precision={precision} />
+    </div>
+  );
+}

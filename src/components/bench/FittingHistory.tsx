@@ -1,0 +1,68 @@
+import type { AuditEntry } from '@/lib/bench-types';
+import { isGarmentStep, type GarmentStep } from '@/lib/garment-steps';
+import { FINISH_LABELS, LEG_LENGTH_LABELS, LEG_LENGTHS, type Finish, type LegLength } from '@/lib/measurement-request';
+
+interface Props {
+  history: AuditEntry[];
+  label: (s: GarmentStep) => string;
+}
+
+const OTHER_FIELDS: Record<string, string> = { finish: 'Finish', preset: 'Preset', unit: 'Unit', description: 'Description', dueOn: 'Due date', assigneeId: 'Given to' };
+
+function fieldName(field: string): string {
+  return LEG_LENGTH_LABELS[field as LegLength] ?? OTHER_FIELDS[field] ?? field;
+}
+
+function shown(field: string, value: unknown): string {
+  if (value === null || value === undefined || value === '') return 'nothing';
+  if (field === 'finish') return FINISH_LABELS[value as Finish] ?? String(value);
+  return String(value);
+}
+
+function describe(e: AuditEntry, label: Props['label']): string {
+  const d = e.detail;
+  if (e.action === 'measurement.changed') {
+    const unit = d.field === 'finish' || d.field === 'preset' || d.field === 'unit' ? '' : ` ${String(d.unit ?? '')}`;
+    const val = (v: unknown) => (v ? `${shown(String(d.field), v)}${unit}` : 'nothing');
+    return `${String(d.leg) === 'left' ? 'Left' : 'Right'} leg, ${fieldName(String(d.field))}: ${val(d.old)} → ${val(d.new)}`;
+  }
+  if (e.action === 'garment.moved' && isGarmentStep(d.from) && isGarmentStep(d.to)) return `Moved from ${label(d.from)} to ${label(d.to)}`;
+  if (e.action === 'garment.changed') {
+    return Object.entries(d as Record<string, { old: unknown; new: unknown }>)
+      .map(([k, v]) => `${fieldName(k)}: ${k === 'assigneeId' ? (v.new ? 'someone new' : 'nobody') : `${shown(k, v.old)} → ${shown(k, v.new)}`}`)
+      .join('; ');
+  }
+  if (e.action === 'garment.added') return 'Taken in';
+  return e.action;
+}
+
+const FIELD_ORDER = ['finish', 'preset', 'unit', ...LEG_LENGTHS] as string[];
+
+/** Newest first; one save's changes (same moment) read left leg before right, in the form's order. */
+function ordered(history: AuditEntry[]): AuditEntry[] {
+  const rank = (e: AuditEntry) => (e.detail.leg === 'right' ? 100 : 0) + FIELD_ORDER.indexOf(String(e.detail.field ?? ''));
+  return [...history].sort((x, y) => (x.at === y.at ? rank(x) - rank(y) : x.at < y.at ? 1 : -1));
+}
+
+/** Every change to the garment and its measurements: who, when, old and new value. */
+export function FittingHistory({ history, label }: Props) {
+  return (
+    <section aria-labelledby="history-heading" className="flex flex-col gap-2">
+      <h2 id="history-heading" className="text-2xl font-extrabold">History</h2>
+      {history.length === 0 ? (
+        <p className="text-muted">No changes recorded yet.</p>
+      ) : (
+        <ol className="flex flex-col divide-y divide-rule rounded-lg border-2 border-rule bg-card" data-testid="history">
+          {ordered(history).map((e) => (
+            <li key={e.id} className="flex flex-wrap items-baseline gap-x-4 px-4 py-2">
+              <span className="measure font-semibold">{describe(e, label)}</span>
+              <span className="text-base text-muted">
+                {e.actorName ?? 'Someone no longer here'} · <time dateTime={e.at}>{new Date(e.at).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })}</time>
+              </span>
+            </li>
+          ))}
+        </ol>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,100 @@
+import { useQuery } from '@tanstack/react-query';
+import { GarmentPhotos } from '@/components/photos/GarmentPhotos';
+import { withQuery } from '@/components/WithQuery';
+import { scaleUnit, ticketLabel } from '@/lib/bench-requests';
+import type { FittingView, GarmentDetail } from '@/lib/bench-types';
+import { fetchJson } from '@/lib/fetch-json';
+import { GARMENT_STEPS } from '@/lib/garment-steps';
+import { DueBadge } from './DueBadge';
+import { FittingForm } from './FittingForm';
+import { FittingHistory } from './FittingHistory';
+import { FittingReadOnly } from './FittingReadOnly';
+import { StepButton } from './StepButton';
+import { useBenchSettings, useStepLabel } from './use-bench';
+
+interface Props {
+  garmentId: string;
+  canEditFitting: boolean;
+  canReadFitting: boolean;
+  canAdvance: boolean;
+  canPickup: boolean;
+  canUploadPhotos: boolean;
+}
+
+function Bench({ garmentId, canEditFitting, canReadFitting, canAdvance, canPickup, canUploadPhotos }: Props) {
+  const garment = useQuery({ queryKey: ['garment', garmentId], queryFn: () => fetchJson<GarmentDetail>(`/api/garments/${garmentId}`) });
+  const fitting = useQuery({
+    queryKey: ['fitting', garmentId],
+    queryFn: () => fetchJson<FittingView>(`/api/garments/${garmentId}/measurements`),
+    enabled: canReadFitting,
+  });
+  const settings = useBenchSettings();
+  const label = useStepLabel();
+  if (garment.isError) return <p role="alert" className="text-xl font-semibold text-cut">{garment.error.message}</p>;
+  if (garment.isPending || settings.isPending) return <p className="text-xl text-muted">Loading the garment…</p>;
+  const g = garment.data;
+  const { unit, precision } = scaleUnit(settings.data?.scale ?? 'in8');
+  const at = GARMENT_STEPS.indexOf(g.status);
+  return (
+    <div className="flex flex-col gap-6">
+      <header className="flex flex-col gap-3">
+        <p className="text-lg">
+          <a href={`/tickets/${g.ticket.id}`} className="font-extrabold text-accent underline">{ticketLabel(g.ticket.number)}</a>
+          {g.customer && <> · {g.customer.name}</>}
+          {g.customer?.phone && <span className="text-muted"> · {g.customer.phone}</span>}
+        </p>
+        <h1 className="text-4xl font-extrabold">{g.description}</h1>
+        <dl className="grid gap-x-8 gap-y-1 text-lg sm:grid-cols-[auto_1fr]">
+          <dt className="font-semibold">Due</dt>
+          <dd><DueBadge dueOn={g.dueOn} /></dd>
+          <dt className="font-semibold">Given to</dt>
+          <dd>{g.assigneeName ?? 'Nobody yet'}</dd>
+          {g.customer?.notes && (
+            <>
+              <dt className="font-semibold">Customer notes</dt>
+              <dd>{g.customer.notes}</dd>
+            </>
+          )}
+        </dl>
+        <ol aria-label="Bench steps" className="flex flex-wrap gap-2">
+          {GARMENT_STEPS.map((s, i) => (
+            <li
+              key={s}
+              aria-current={i === at ? 'step' : undefined}
+              className={
+                'rounded-full border-2 px-3 py-1 text-base font-semibold ' +
+                (i === at ? 'border-ink bg-ink text-paper' : i < at ? 'border-ok bg-ok-soft text-ok' : 'border-rule text-muted')
+              }
+            >
+              {i < at && <span aria-hidden="true">✓ </span>}
+              {label(s)}
+            </li>
+          ))}
+        </ol>
+        <p className="text-2xl">
+          Now: <strong data-testid="garment-step">{label(g.status)}</strong>
+        </p>
+        <StepButton garmentId={g.id} status={g.status} canAdvance={canAdvance} canPickup={canPickup} />
+      </header>
+
+      {canReadFitting &&
+        (fitting.isPending ? (
+          <p className="text-lg text-muted">Loading the fitting…</p>
+        ) : fitting.isError ? (
+          <p role="alert" className="font-semibold text-cut">{fitting.error.message}</p>
+        ) : canEditFitting ? (
+          <FittingForm key={fitting.dataUpdatedAt ? 'loaded' : 'new'} garmentId={g.id} fitting={fitting.data} unit={unit} precision={precision} />
+        ) : (
+          <FittingReadOnly fitting={fitting.data} unit={unit} precision={precision} />
+        ))}
+
+      {/* The photos island brings its own "Fitting photos" heading. */}
+      <GarmentPhotos garmentId={g.id} canUpload={canUploadPhotos} />
+
+      {canReadFitting && fitting.data && <FittingHistory history={fitting.data.history} label={label} />}
+    </div>
+  );
+}
+
+/** The garment page island: where it stands, its fitting per leg with the live plan, photos, history. */
+export default withQuery(Bench);

@@ -1,0 +1,108 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useMutation, useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import { useFieldArray, useForm, type Resolver } from 'react-hook-form';
+import { Field, FormMessage, SubmitButton } from '@/components/Field';
+import { withQuery } from '@/components/WithQuery';
+import { intakeRequest, type Intake, type IntakeInput } from '@/lib/bench-requests';
+import type { CustomerCard } from '@/lib/bench-types';
+import { ApiError, fetchJson } from '@/lib/fetch-json';
+import { useAssignees } from './use-bench';
+
+type Form = IntakeInput & { garments: NonNullable<IntakeInput['garments']> };
+const resolver = zodResolver(intakeRequest) as unknown as Resolver<Form, unknown, Intake>;
+const SELECT = 'min-h-11 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent';
+
+function Intake() {
+  const customers = useQuery({ queryKey: ['customers'], queryFn: () => fetchJson<CustomerCard[]>('/api/customers') });
+  const people = useAssignees();
+  const [who, setWho] = useState<'existing' | 'new'>('existing');
+  const { register, control, handleSubmit, formState, setError, setValue } = useForm<Form, unknown, Intake>({
+    resolver,
+    defaultValues: { customerId: '', note: '', dueOn: '', garments: [{ description: '', dueOn: '', assigneeId: '' }] },
+  });
+  const garments = useFieldArray({ control, name: 'garments' });
+  const open = useMutation({
+    mutationFn: (body: Intake) => fetchJson<{ id: string }>('/api/tickets', { body }),
+    onSuccess: (t) => window.location.assign(`/tickets/${t.id}`),
+    onError: (e) => {
+      if (e instanceof ApiError) for (const [path, message] of Object.entries(e.issues)) setError(path as 'note', { type: 'server', message });
+    },
+  });
+  const submit = handleSubmit((v) => {
+    if (who === 'existing' && !v.customerId) return setError('customerId', { message: 'Choose a customer, or add a new one.' });
+    open.mutate(who === 'existing' ? { ...v, customer: undefined } : { ...v, customerId: null });
+  });
+  const e = formState.errors;
+  return (
+    <form noValidate onSubmit={submit} aria-label="New ticket" className="flex flex-col gap-6">
+      <fieldset className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4">
+        <legend className="px-1 text-xl font-extrabold">Customer</legend>
+        <div className="flex flex-wrap gap-4 text-lg">
+          <label className="inline-flex min-h-11 items-center gap-2">
+            <input type="radio" name="who" checked={who === 'existing'} onChange={() => setWho('existing')} className="size-5" /> Someone we know
+          </label>
+          <label className="inline-flex min-h-11 items-center gap-2">
+            <input type="radio" name="who" checked={who === 'new'} onChange={() => { setWho('new'); setValue('customerId', ''); }} className="size-5" /> A new customer
+          </label>
+        </div>
+        {who === 'existing' ? (
+          <div className="flex flex-col gap-1">
+            <label htmlFor="customerId" className="font-semibold">Customer</label>
+            <select id="customerId" {...register('customerId')} className={SELECT} aria-invalid={e.customerId ? true : undefined}>
+              <option value="">{customers.isPending ? 'Loading…' : 'Choose…'}</option>
+              {customers.data?.map((c) => <option key={c.id} value={c.id}>{c.name}{c.phone ? ` · ${c.phone}` : ''}</option>)}
+            </select>
+            {e.customerId && <p role="alert" className="text-sm font-semibold text-cut">{e.customerId.message}</p>}
+          </div>
+        ) : (
+          <div className="grid gap-3 sm:grid-cols-2">
+            <Field label="Name" registration={register('customer.name')} error={e.customer?.name} id="c-name" autoComplete="off" />
+            <Field label="Phone" type="tel" registration={register('customer.phone')} error={e.customer?.phone} id="c-phone" autoComplete="off" />
+            <Field label="E-mail" type="email" registration={register('customer.email')} error={e.customer?.email} id="c-email" autoComplete="off" />
+            <Field label="Notes" registration={register('customer.notes')} error={e.customer?.notes} id="c-notes" autoComplete="off" />
+          </div>
+        )}
+      </fieldset>
+
+      <fieldset className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4">
+        <legend className="px-1 text-xl font-extrabold">Garments</legend>
+        {garments.fields.map((f, i) => (
+          <div key={f.id} className="grid items-end gap-3 border-b border-rule pb-3 sm:grid-cols-[2fr_1fr_1fr_auto]">
+            <Field label={`Garment ${i + 1}`} registration={register(`garments.${i}.description`)} error={e.garments?.[i]?.description} id={`g-${i}-description`} placeholder="e.g. Navy wool trousers, cuffs" />
+            <Field label="Due" type="date" registration={register(`garments.${i}.dueOn`)} error={e.garments?.[i]?.dueOn} id={`g-${i}-due`} />
+            <div className="flex flex-col gap-1">
+              <label htmlFor={`g-${i}-who`} className="font-semibold">Given to</label>
+              <select id={`g-${i}-who`} {...register(`garments.${i}.assigneeId`)} className={SELECT}>
+                <option value="">Nobody yet</option>
+                {people.data?.filter((p) => p.role !== 'counter').map((p) => <option key={p.userId} value={p.userId}>{p.name}</option>)}
+              </select>
+            </div>
+            {garments.fields.length > 1 && (
+              <button type="button" onClick={() => garments.remove(i)} className="min-h-11 rounded border-2 border-ink px-3 font-semibold">
+                Remove
+              </button>
+            )}
+          </div>
+        ))}
+        <button type="button" onClick={() => garments.append({ description: '', dueOn: '', assigneeId: '' })} className="min-h-11 self-start rounded border-2 border-accent px-4 text-lg font-semibold text-accent">
+          Another garment
+        </button>
+      </fieldset>
+
+      <fieldset className="grid gap-3 rounded-lg border-2 border-rule bg-card p-4 sm:grid-cols-[2fr_1fr]">
+        <legend className="px-1 text-xl font-extrabold">Ticket</legend>
+        <Field label="Note for the bench" registration={register('note')} error={e.note} id="t-note" autoComplete="off" />
+        <Field label="Due (all garments, unless set above)" type="date" registration={register('dueOn')} error={e.dueOn} id="t-due" />
+      </fieldset>
+
+      {open.error && <FormMessage kind="error">Not opened: {open.error.message} Everything you typed is still here.</FormMessage>}
+      <div>
+        <SubmitButton busy={open.isPending}>Open ticket</SubmitButton>
+      </div>
+    </form>
+  );
+}
+
+/** The intake island: customer, garments brought in, a note and a due date; opens the ticket. */
+export default withQuery(Intake);

@@ -1,0 +1,79 @@
+import type { UseFormRegister } from 'react-hook-form';
+import { Segmented } from '@/components/calculator/Segmented';
+import { FINISH_LABELS, FINISHES, LEG_LENGTH_LABELS, type Finish, type Leg, type LegLength, type MeasurementsInput } from '@/lib/measurement-request';
+import { LengthInput } from './LengthInput';
+
+interface Props {
+  leg: Leg;
+  finish: Finish;
+  unit: string;
+  register: UseFormRegister<MeasurementsInput>;
+  onFinish: (f: Finish) => void;
+  errorFor: (field: LegLength) => string | undefined;
+}
+
+const HINTS: Partial<Record<LegLength, string>> = {
+  backPin: 'Measured the shop’s way, e.g. along the inseam to the pin.',
+  frontPin: 'Optional. Recorded; a cuff is still hemmed level.',
+  cuffDepth: 'Usual: 1 1/4, 1 1/2 or 1 3/4 in, or 4–5 cm.',
+  hemSection: 'Blank: the same as the cuff depth.',
+  turnUnder: 'Blank: the usual.',
+  hemAllowance: 'Blank: 1 1/2 in (40 mm).',
+  slope: 'How much lower the back sits; often about 1/2 in.',
+  available: 'From the pin mark to the raw edge, once the old hem is let down.',
+  oldCrease: 'Where the old hem fold is, below the mark (negative above).',
+  heightAbove: 'Where the higher width was taken, above the finished edge.',
+  seamAllowance: 'Left on each side of each leg seam, to let out.',
+};
+
+/** Which lengths each finish asks for, in order, grouped. */
+const GROUPS: Record<Finish, { title: string; fields: LegLength[] }[]> = {
+  cuff: [
+    { title: 'Pins', fields: ['backPin', 'frontPin'] },
+    { title: 'Cuff', fields: ['cuffDepth', 'hemSection', 'turnUnder'] },
+    { title: 'Cloth', fields: ['available', 'oldCrease'] },
+    { title: 'Taper check (flat widths)', fields: ['widthAtEdge', 'widthAbove', 'heightAbove', 'seamAllowance'] },
+  ],
+  plain: [
+    { title: 'Pins', fields: ['backPin', 'frontPin'] },
+    { title: 'Hem', fields: ['hemAllowance', 'turnUnder'] },
+    { title: 'Cloth', fields: ['available'] },
+  ],
+  slope: [
+    { title: 'Pins', fields: ['backPin', 'frontPin'] },
+    { title: 'Hem', fields: ['slope', 'hemAllowance', 'turnUnder'] },
+    { title: 'Cloth', fields: ['available'] },
+  ],
+};
+
+/** One leg's fitting fields for its finish (the other finishes' values are kept, only hidden). */
+export function LegFields({ leg, finish, unit, register, onFinish, errorFor }: Props) {
+  return (
+    <div className="flex flex-col gap-4">
+      <Segmented
+        name={`finish-${leg}`}
+        legend={`Finish, ${leg} leg`}
+        value={finish}
+        onChange={onFinish}
+        options={FINISHES.map((f) => ({ value: f, label: FINISH_LABELS[f] }))}
+      />
+      {GROUPS[finish].map((g) => (
+        <fieldset key={g.title} className="flex flex-col gap-3">
+          <legend className="mb-1 text-lg font-extrabold">{g.title}</legend>
+          <div className="grid gap-3 sm:grid-cols-2">
+            {g.fields.map((f) => (
+              <LengthInput
+                key={f}
+                label={LEG_LENGTH_LABELS[f]}
+                unit={unit}
+                registration={register(`legs.${leg}.${f}`)}
+                hint={HINTS[f]}
+                error={errorFor(f)}
+              />
+            ))}
+          </div>
+        </fieldset>
+      ))}
+    </div>
+  );
+}

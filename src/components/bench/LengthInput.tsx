@@ -1,0 +1,49 @@
+import type { ReactNode } from 'react';
+import type { UseFormRegisterReturn } from 'react-hook-form';
+
+interface Props {
+  label: string;
+  unit: string;
+  registration: UseFormRegisterReturn;
+  hint?: ReactNode;
+  error?: string;
+}
+
+/** One labelled length as typed ("1 1/2", "38 mm"), the unit beside it, hint and error tied to it. */
+export function LengthInput({ label, unit, registration, hint, error }: Props) {
+  const id = `m-${registration.name.replace(/\./g, '-')}`;
+  const describedBy = [hint ? `${id}-hint` : '', error ? `${id}-error` : ''].filter(Boolean).join(' ') || undefined;
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="text-base font-semibold">
+        {label}
+      </label>
+      <div className="flex items-stretch">
+        <input
+          id={id}
+          type="text"
+          autoComplete="off"
+          spellCheck={false}
+          enterKeyHint="next"
+          aria-invalid={error ? true : undefined}
+          aria-describedby={describedBy}
+          className={'measure w-full min-w-0 rounded-l-md border-2 bg-card px-3 text-xl ' + (error ? 'border-cut' : 'border-rule focus:border-accent')}
+          {...registration}
+        />
+        <span aria-hidden="true" className="flex min-w-12 items-center justify-center rounded-r-md border-2 border-l-0 border-rule bg-paper px-2 text-base text-muted">
+          {unit}
+        </span>
+      </div>
+      {hint && (
+        <p id={`${id}-hint`} className="text-sm text-muted">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p id={`${id}-error`} className="rounded-sm border-l-4 border-cut bg-cut-soft px-2 py-1 text-base font-semibold text-cut">
+          {error}
+        </p>
+      )}
+    </div>
+  );
+}

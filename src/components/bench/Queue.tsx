@@ -1,0 +1,159 @@
+import { useQuery } from '@tanstack/react-query';
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type SortingState,
+} from '@tanstack/react-table';
+import { useMemo, useState } from 'react';
+import { withQuery } from '@/components/WithQuery';
+import { ticketLabel } from '@/lib/bench-requests';
+import type { QueueRow } from '@/lib/bench-types';
+import { fetchJson } from '@/lib/fetch-json';
+import { GARMENT_STEPS } from '@/lib/garment-steps';
+import { DueBadge } from './DueBadge';
+import { dueState, todayIso } from './due';
+import { QueueFilters, type Filters } from './QueueFilters';
+import { StepButton } from './StepButton';
+import { useAssignees, useStepLabel } from './use-bench';
+
+interface Props {
+  userId: string;
+  canAdvance: boolean;
+  canPickup: boolean;
+}
+
+const col = createColumnHelper<QueueRow & { rank: number }>();
+
+function matches(row: QueueRow, f: Filters, userId: string, today: string): boolean {
+  if (f.step === 'open' ? row.status === 'collected' : f.step !== 'all' && row.status !== f.step) return false;
+  if (f.who === 'mine' && row.assigneeId !== userId) return false;
+  if (f.who === 'mine-open' && row.assigneeId !== userId && row.assigneeId !== null) return false;
+  if (f.who === 'nobody' && row.assigneeId !== null) return false;
+  if (!['all', 'mine', 'mine-open', 'nobody'].includes(f.who) && row.assigneeId !== f.who) return false;
+  const due = dueState(row.dueOn, today);
+  if (f.due === 'overdue' && due !== 'overdue') return false;
+  if (f.due === 'today' && due !== 'today' && due !== 'overdue') return false;
+  const q = f.search.trim().toLowerCase().replace(/^t-?/, '');
+  if (q && !String(row.ticketNumber).includes(q) && !(row.customerName ?? '').toLowerCase().includes(f.search.trim().toLowerCase())) return false;
+  return true;
+}
+
+function QueueTable({ userId, canAdvance, canPickup }: Props) {
+  const queue = useQuery({ queryKey: ['queue'], queryFn: () => fetchJson<QueueRow[]>('/api/garments'), refetchInterval: 60_000 });
+  const people = useAssignees();
+  const label = useStepLabel();
+  const [filters, setFilters] = useState<Filters>({ step: 'open', who: 'all', due: 'all', search: '' });
+  // Own work first, then unassigned, then the rest; within each, the earliest due first.
+  const [sorting, setSorting] = useState<SortingState>([{ id: 'rank', desc: false }, { id: 'due', desc: false }]);
+  const today = todayIso();
+
+  const rows = useMemo(
+    () =>
+      (queue.data ?? [])
+        .filter((r) => matches(r, filters, userId, today))
+        .map((r) => ({ ...r, rank: r.assigneeId === userId ? 0 : r.assigneeId === null ? 1 : 2 })),
+    [queue.data, filters, userId, today],
+  );
+
+  const columns = useMemo(
+    () => [
+      col.accessor('rank', { header: 'Whose', cell: (c) => (c.getValue() === 0 ? 'Yours' : c.getValue() === 1 ? 'Unassigned' : c.row.original.assigneeName ?? '') }),
+      col.accessor((r) => r.dueOn ?? '9999-12-31', { id: 'due', header: 'Due', cell: (c) => <DueBadge dueOn={c.row.original.dueOn} /> }),
+      col.accessor('ticketNumber', {
+        header: 'Ticket',
+        cell: (c) => (
+          <a href={`/tickets/${c.row.original.ticketId}`} className="inline-flex min-h-11 items-center font-extrabold text-accent underline">
+            {ticketLabel(c.getValue())}
+          </a>
+        ),
+      }),
+      col.accessor((r) => r.customerName ?? '', { id: 'customer', header: 'Customer' }),
+      col.accessor('description', {
+        header: 'Garment',
+        cell: (c) => (
+          <a href={`/garments/${c.row.original.id}`} className="inline-flex min-h-11 items-center font-semibold text-accent underline">
+            {c.getValue()}
+          </a>
+        ),
+      }),
+      col.accessor((r) => GARMENT_STEPS.indexOf(r.status), { id: 'step', header: 'Step', cell: (c) => <span className="font-semibold">{label(c.row.original.status)}</span> }),
+      col.display({
+        id: 'move',
+        header: 'Move on',
+        cell: (c) => (
+          <StepButton
+            garmentId={c.row.original.id}
+            status={c.row.original.status}
+            canAdvance={canAdvance}
+            canPickup={canPickup}
+            size="row"
+            what={`${ticketLabel(c.row.original.ticketNumber)} ${c.row.original.description}`}
+          />
+        ),
+      }),
+    ],
+    [label, canAdvance, canPickup],
+  );
+
+  const table = useReactTable({ data: rows, columns, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
+
+  return (
+    <div className="flex flex-col gap-4">
+      <QueueFilters value={filters} onChange={setFilters} people={people.data ?? []} label={label} />
+      {queue.isPending ? (
+        <p className="text-lg text-muted">Loading the queue…</p>
+      ) : queue.isError ? (
+        <p role="alert" className="font-semibold text-cut">The queue could not be loaded: {queue.error.message}</p>
+      ) : (
+        <div className="overflow-x-auto rounded-lg border-2 border-rule bg-card">
+          <table className="w-full border-collapse text-left text-lg">
+            <caption className="sr-only">Garments in the queue, {rows.length} shown</caption>
+            <thead>
+              {table.getHeaderGroups().map((hg) => (
+                <tr key={hg.id} className="border-b-2 border-ink">
+                  {hg.headers.map((h) => {
+                    const sorted = h.column.getIsSorted();
+                    return (
+                      <th key={h.id} scope="col" className="px-3 py-2 text-base" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
+                        {h.column.getCanSort() ? (
+                          <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex min-h-11 items-center gap-1 font-extrabold">
+                            {flexRender(h.column.columnDef.header, h.getContext())}
+                            <span aria-hidden="true">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}</span>
+                          </button>
+                        ) : (
+                          flexRender(h.column.columnDef.header, h.getContext())
+                        )}
+                      </th>
+                    );
+                  })}
+                </tr>
+              ))}
+            </thead>
+            <tbody>
+              {table.getRowModel().rows.map((row) => {
+                const due = dueState(row.original.dueOn, today);
+                const edge = due === 'overdue' ? 'border-l-8 border-l-cut' : due === 'today' ? 'border-l-8 border-l-warn' : 'border-l-8 border-l-transparent';
+                return (
+                  <tr key={row.id} data-testid="queue-row" className={'border-b border-rule ' + edge}>
+                    {row.getVisibleCells().map((cell) => (
+                      <td key={cell.id} className="px-3 py-2 align-middle">
+                        {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                      </td>
+                    ))}
+                  </tr>
+                );
+              })}
+            </tbody>
+          </table>
+          {rows.length === 0 && <p className="px-4 py-6 text-lg text-muted">Nothing here with these filters.</p>}
+        </div>
+      )}
+    </div>
+  );
+}
+
+/** The queue island: the shop's garments as a table to filter, sort and move along. */
+export default withQuery(QueueTable);

@@ -1,0 +1,120 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useForm, type Resolver } from 'react-hook-form';
+import { Field, FormMessage, SubmitButton } from '@/components/Field';
+import { withQuery } from '@/components/WithQuery';
+import { garmentInput, ticketLabel } from '@/lib/bench-requests';
+import type { TicketDetail } from '@/lib/bench-types';
+import { fetchJson } from '@/lib/fetch-json';
+import { nextStep, type GarmentStep } from '@/lib/garment-steps';
+import type { z } from 'zod';
+import { DueBadge } from './DueBadge';
+import { StepButton } from './StepButton';
+import { useStepLabel } from './use-bench';
+
+interface Props {
+  ticketId: string;
+  canAdvance: boolean;
+  canPickup: boolean;
+  canAddGarment: boolean;
+}
+
+type GarmentForm = z.input<typeof garmentInput>;
+const resolver = zodResolver(garmentInput) as unknown as Resolver<GarmentForm, unknown, z.output<typeof garmentInput>>;
+
+function AddGarment({ ticketId }: { ticketId: string }) {
+  const client = useQueryClient();
+  const { register, handleSubmit, reset, formState } = useForm<GarmentForm, unknown, z.output<typeof garmentInput>>({ resolver, defaultValues: { description: '', dueOn: '' } });
+  const add = useMutation({
+    mutationFn: (body: z.output<typeof garmentInput>) => fetchJson(`/api/tickets/${ticketId}/garments`, { body }),
+    onSuccess: () => {
+      reset();
+      void client.invalidateQueries({ queryKey: ['ticket', ticketId] });
+    },
+  });
+  return (
+    <form noValidate onSubmit={handleSubmit((v) => add.mutate(v))} aria-label="Add a garment" className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4">
+      <h2 className="text-xl font-extrabold">Add a garment</h2>
+      <div className="grid gap-3 sm:grid-cols-[2fr_1fr]">
+        <Field label="Garment" registration={register('description')} error={formState.errors.description} id="add-description" placeholder="e.g. Brown tweed trousers" />
+        <Field label="Due" type="date" registration={register('dueOn')} error={formState.errors.dueOn} id="add-due" />
+      </div>
+      {add.error && <FormMessage kind="error">{add.error.message}</FormMessage>}
+      <div><SubmitButton busy={add.isPending}>Add garment</SubmitButton></div>
+    </form>
+  );
+}
+
+function MoveAll({ ticket, canAdvance, canPickup }: { ticket: TicketDetail; canAdvance: boolean; canPickup: boolean }) {
+  const client = useQueryClient();
+  const label = useStepLabel();
+  const next = nextStep(ticket.status);
+  const move = useMutation({
+    mutationFn: (status: GarmentStep) => fetchJson(`/api/tickets/${ticket.id}`, { method: 'PATCH', body: { status } }),
+    onSuccess: () => client.invalidateQueries(),
+  });
+  const behind = ticket.garments.filter((g) => g.status === ticket.status).length;
+  if (!next || ticket.garments.length < 2 || !(next === 'collected' ? canPickup : canAdvance)) return null;
+  return (
+    <div className="flex flex-col gap-1">
+      <button type="button" onClick={() => move.mutate(next)} disabled={move.isPending} className="min-h-14 self-start rounded-lg border-2 border-accent px-5 text-xl font-bold text-accent disabled:opacity-60">
+        Mark {behind === 1 ? 'the garment' : `all ${behind}`} at {label(ticket.status)} as {label(next)}
+      </button>
+      {move.error && <p role="alert" className="font-semibold text-cut">{move.error.message}</p>}
+    </div>
+  );
+}
+
+function Ticket({ ticketId, canAdvance, canPickup, canAddGarment }: Props) {
+  const ticket = useQuery({ queryKey: ['ticket', ticketId], queryFn: () => fetchJson<TicketDetail>(`/api/tickets/${ticketId}`) });
+  const label = useStepLabel();
+  if (ticket.isError) return <p role="alert" className="text-xl font-semibold text-cut">{ticket.error.message}</p>;
+  if (ticket.isPending) return <p className="text-xl text-muted">Loading the ticket…</p>;
+  const t = ticket.data;
+  return (
+    <div className="flex flex-col gap-6">
+      <header className="flex flex-col gap-2">
+        <h1 className="text-4xl font-extrabold">
+          Ticket <span data-testid="ticket-number">{ticketLabel(t.number)}</span>
+        </h1>
+        <p className="text-2xl">
+          Stands at <strong>{label(t.status)}</strong>
+          <span className="text-lg text-muted"> (the least advanced garment)</span>
+        </p>
+        {t.customer ? (
+          <p className="text-lg">
+            <strong>{t.customer.name}</strong>
+            {t.customer.phone && <> · {t.customer.phone}</>}
+            {t.customer.email && <> · {t.customer.email}</>}
+          </p>
+        ) : (
+          <p className="text-lg text-muted">No customer recorded.</p>
+        )}
+        {t.customer?.notes && <p className="text-lg">Customer notes: {t.customer.notes}</p>}
+        {t.note && <p className="text-lg">Note: {t.note}</p>}
+      </header>
+      <MoveAll ticket={t} canAdvance={canAdvance} canPickup={canPickup} />
+      <section aria-labelledby="garments-heading" className="flex flex-col gap-3">
+        <h2 id="garments-heading" className="text-2xl font-extrabold">Garments</h2>
+        {t.garments.length === 0 && <p className="text-lg text-muted">No garments on this ticket yet.</p>}
+        <ul className="flex flex-col gap-3">
+          {t.garments.map((g) => (
+            <li key={g.id} className="flex flex-wrap items-center justify-between gap-4 rounded-lg border-2 border-rule bg-card p-4">
+              <div className="flex flex-col gap-1">
+                <a href={`/garments/${g.id}`} className="text-2xl font-extrabold text-accent underline">{g.description}</a>
+                <p className="text-lg">
+                  <strong>{label(g.status)}</strong> · <DueBadge dueOn={g.dueOn} /> · {g.assigneeName ?? 'Unassigned'}
+                </p>
+              </div>
+              <StepButton garmentId={g.id} status={g.status} canAdvance={canAdvance} canPickup={canPickup} size="row" what={g.description} />
+            </li>
+          ))}
+        </ul>
+      </section>
+      {canAddGarment && t.status !== 'collected' && <AddGarment ticketId={t.id} />}
+    </div>
+  );
+}
+
+/** The ticket page island: number, customer, its garments and their steps. */
+export default withQuery(Ticket);

@@ -1,0 +1,21 @@
+// The queries every bench island shares: the shop's settings and its people.
+import { useQuery } from '@tanstack/react-query';
+import type { BenchSettings, Person } from '@/lib/bench-types';
+import { fetchJson } from '@/lib/fetch-json';
+import { stepLabel, type GarmentStep } from '@/lib/garment-steps';
+
+/** The shop's bench settings (scale, step names). */
+export function useBenchSettings() {
+  return useQuery({ queryKey: ['bench-settings'], queryFn: () => fetchJson<BenchSettings>('/api/bench-settings'), staleTime: 60_000 });
+}
+
+/** The shop's people a garment can be given to. */
+export function useAssignees() {
+  return useQuery({ queryKey: ['assignees'], queryFn: () => fetchJson<Person[]>('/api/assignees'), staleTime: 60_000 });
+}
+
+/** A function naming steps in the shop's own words. */
+export function useStepLabel(): (step: GarmentStep) => string {
+  const settings = useBenchSettings();
+  return (step) => stepLabel(step, settings.data?.stepLabels);
+}
