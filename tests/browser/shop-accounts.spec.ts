@@ -64,7 +64,7 @@ describe('a new shop and its first tailor', () => {
     await page.getByLabel('Your name').fill('Piet Marlowe');
     await page.getByLabel('Choose a password').fill('tailor-password-1');
     await page.getByRole('button', { name: 'Join the shop' }).click();
-    await page.waitForURL('**/bench');
+    await page.waitForURL('**/queue');
     await page.getByText('Piet Marlowe · Tailor · Thimble Row Alterations').waitFor();
 
     await page.getByRole('button', { name: 'Sign out' }).click();
@@ -73,7 +73,7 @@ describe('a new shop and its first tailor', () => {
     await page.getByLabel('E-mail').fill(tailorEmail);
     await page.getByLabel('Password').fill('tailor-password-1');
     await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL('**/bench');
+    await page.waitForURL('**/queue');
     await page.getByText('Piet Marlowe · Tailor · Thimble Row Alterations').waitFor();
     // A tailor has no staff link.
     expect(await page.getByRole('link', { name: 'Staff' }).count()).toBe(0);

@@ -1,0 +1,153 @@
+// The bench stories. (1) A tailor opens a ticket at intake, enters the finished length and cuff
+// depth for each leg on the garment page and reads the cutting line; a mistyped length is named
+// and kept. (3) An apprentice finds a garment in the queue, moves it on with one tap, and can read
+// but not change its measurements. Screenshots land in test-results/ to look at.
+import { mkdirSync } from 'node:fs';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launch, tabletPage } from './browser';
+
+let browser: Browser;
+
+beforeAll(async () => {
+  mkdirSync('test-results', { recursive: true });
+  browser = await launch();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function islandsReady(page: Page) {
+  await page.waitForSelector('astro-island:not([ssr])');
+}
+
+async function signIn(page: Page, email: string, next: string) {
+  await page.goto(`/sign-in?next=${encodeURIComponent(next)}`);
+  await islandsReady(page);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill('cuffwright-demo');
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL(`**${next}`);
+  await islandsReady(page);
+}
+
+const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
+const cutText = (page: Page) => page.getByTestId('cut-line').textContent({ timeout: 5_000 }).catch(() => null);
+// Segmented switches hide the radio itself: tap its label, as a finger would.
+const choose = (page: Page, name: string) => page.locator('label', { has: page.getByRole('radio', { name, exact: true }) }).click();
+
+describe('story 1: a tailor takes in a garment and plans both legs', () => {
+  it('opens a ticket, enters each leg, reads the cutting line, and keeps a mistyped length to fix', async () => {
+    const page = await tabletPage(browser);
+    await signIn(page, 'tailor@pinmark.test', '/tickets/new');
+
+    await page.getByRole('radio', { name: 'A new customer' }).check();
+    await field(page, 'Name').fill('Perpetua Lindqvist');
+    await field(page, 'Phone').fill('555-0190');
+    await field(page, 'Garment 1').fill('Olive moleskin trousers, cuffs');
+    await page.getByRole('button', { name: 'Open ticket' }).click();
+    await page.waitForURL(/\/tickets\/[0-9a-f-]{36}$/);
+    await islandsReady(page);
+    expect(await page.getByTestId('ticket-number').textContent()).toMatch(/^T-\d{4}$/);
+    await page.getByText('Perpetua Lindqvist').first().waitFor();
+
+    await page.getByRole('link', { name: 'Olive moleskin trousers, cuffs' }).click();
+    await page.waitForURL(/\/garments\/[0-9a-f-]{36}$/);
+    await islandsReady(page);
+    await page.getByTestId('garment-step').getByText('Received').waitFor();
+
+    // Left leg: a 1 1/2 in cuff cuts at three depths, 4 1/2 in below the mark
+    // (TRADE.md: Seam2Seam 2014; Permanent Style 2020, "three times the height of the cuff").
+    await field(page, 'Pin at the back (finished length)').fill('31 1/4');
+    await field(page, 'Cuff depth').fill('1 1/2');
+    await field(page, 'Cloth below the mark').fill('5');
+    await expect.poll(() => cutText(page), { timeout: 10_000 }).toBe('4 1/2 in');
+    await page.getByText('Enough cloth.').waitFor();
+
+    // Right leg differs: 1 3/4 in cuff → 5 1/4 in (same source: three cuff depths).
+    await choose(page, 'Right leg');
+    await field(page, 'Pin at the back (finished length)').fill('31 1/2');
+    await field(page, 'Front pin').fill('31');
+    await field(page, 'Cuff depth').fill('1 3/4');
+    await field(page, 'Cloth below the mark').fill('5 zz');
+    await expect.poll(() => page.getByText('a cuff is hemmed level').isVisible()).toBe(true);
+
+    // Saving with an unreadable length: the server names the field, and nothing typed is lost.
+    await page.getByRole('button', { name: /^Save measurements/ }).click();
+    await page.getByText('Not saved: Some lengths could not be read.').waitFor();
+    expect(await field(page, 'Cloth below the mark').getAttribute('aria-invalid')).toBe('true');
+    expect(await field(page, 'Cloth below the mark').inputValue()).toBe('5 zz');
+    expect(await field(page, 'Cuff depth').inputValue()).toBe('1 3/4');
+
+    await field(page, 'Cloth below the mark').fill('5 1/4');
+    await expect.poll(() => cutText(page), { timeout: 10_000 }).toBe('5 1/4 in');
+    await page.getByRole('button', { name: /^Save measurements/ }).click();
+    await page.getByText('Saved both legs.').waitFor();
+
+    // The history names who changed what, old and new.
+    const history = page.getByTestId('history');
+    await history.getByText('Right leg, Cuff depth: nothing → 1 3/4 in').waitFor();
+    await history.getByText('Left leg, Pin at the back (finished length): nothing → 31 1/4 in').waitFor();
+    expect(await history.getByText('Teodor Vasko').count()).toBeGreaterThan(0);
+    await page.screenshot({ path: 'test-results/garment-tailor.png', fullPage: true });
+
+    // After a reload both legs are as saved, and a change is one more history line.
+    await page.reload();
+    await islandsReady(page);
+    await expect.poll(() => field(page, 'Cuff depth').inputValue(), { timeout: 10_000 }).toBe('1 1/2');
+    await expect.poll(() => cutText(page), { timeout: 10_000 }).toBe('4 1/2 in');
+    await field(page, 'Cuff depth').fill('1 1/4');
+    await page.getByRole('button', { name: /^Save measurements/ }).click();
+    await page.getByTestId('history').getByText('Left leg, Cuff depth: 1 1/2 in → 1 1/4 in').waitFor();
+    await page.context().close();
+  });
+});
+
+describe('story 3: an apprentice works the queue', () => {
+  it('finds the garment, moves it on with one tap, and reads its measurements without changing them', async () => {
+    const page = await tabletPage(browser);
+    await signIn(page, 'apprentice@pinmark.test', '/queue');
+    await page.getByTestId('queue-row').first().waitFor();
+    // Only their own and unassigned work: the tailor's charcoal trousers are not listed.
+    expect(await page.getByText('Charcoal wool trousers').count()).toBe(0);
+
+    await page.getByLabel('Customer or ticket').fill('T-1003');
+    await expect.poll(() => page.getByTestId('queue-row').count()).toBe(1);
+    const row = page.getByTestId('queue-row');
+    await row.getByText('Navy suit trousers').waitFor();
+    await row.getByText('Overdue').waitFor();
+    await page.screenshot({ path: 'test-results/queue-apprentice.png', fullPage: true });
+
+    const tap = row.getByRole('button', { name: /Mark T-1003 Navy suit trousers Turned and stitched/ });
+    const box = await tap.boundingBox();
+    expect(box!.height).toBeGreaterThanOrEqual(44);
+    await tap.click();
+    await expect.poll(() => row.locator('td').nth(5).textContent()).toBe('Turned and stitched');
+
+    await row.getByRole('link', { name: 'Navy suit trousers' }).click();
+    await page.waitForURL(/\/garments\/[0-9a-f-]{36}$/);
+    await islandsReady(page);
+    await page.getByTestId('garment-step').getByText('Turned and stitched').waitFor();
+    await page.getByRole('heading', { name: 'Fitting measurements' }).waitFor();
+    // Read-only: the lengths are shown, there is nothing to type into or save.
+    expect(await page.getByRole('textbox').count()).toBe(0);
+    expect(await page.getByRole('button', { name: /Save measurements/ }).count()).toBe(0);
+    await page.getByRole('row', { name: /Cuff depth 1 1\/2 in 1 1\/2 in/ }).waitFor();
+    // The saved left leg's plan: 1 1/2 in cuff → cut 4 1/2 in (TRADE.md: three cuff depths).
+    await expect.poll(() => cutText(page), { timeout: 10_000 }).toBe('4 1/2 in');
+    await page.screenshot({ path: 'test-results/garment-apprentice.png', fullPage: true });
+
+    // The API agrees: the apprentice may not change measurements.
+    const id = page.url().split('/').pop();
+    const status = await page.evaluate(async (garmentId) => {
+      const r = await fetch(`/api/garments/${garmentId}/measurements`, {
+        method: 'PUT',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ unit: 'in', legs: { left: { finish: 'cuff', cuffDepth: '2' }, right: { finish: 'cuff', cuffDepth: '2' } } }),
+      });
+      return r.status;
+    }, id);
+    expect(status).toBe(403);
+    await page.context().close();
+  });
+});
