@@ -2,29 +2,24 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { Field, FormMessage } from '@/components/Field';
+import { FormMessage } from '@/components/Field';
 import { paymentInput } from '@/lib/counter-request';
-import { CURRENCIES, formatMoney, parseMoney } from '@/lib/pricing/money';
+import { formatMoney } from '@/lib/pricing/money';
 import type { CounterSummary } from '@/services/payments';
 import { Money } from './Money';
+import { MoneyField } from './MoneyField';
 import { post, useCounterAction } from './counter-api';
 
 type Pay = z.infer<typeof paymentInput>;
 const PURPOSE = { deposit: 'Deposit', balance: 'Balance' } as const;
 const METHOD = { cash: 'cash', card: 'card', online: 'online' } as const;
 
-// The amount as a person types it ("38.00"): no currency sign, the currency's own decimals.
-function plainAmount(minor: number, currency: CounterSummary['currency']): string {
-  const digits = CURRENCIES[currency];
-  return (minor / 10 ** digits).toFixed(digits);
-}
-
 function TakePayment({ s }: { s: CounterSummary }) {
   const hasDeposit = s.payments.some((p) => p.purpose === 'deposit');
   const purpose = hasDeposit || s.paid > 0 ? 'balance' : 'deposit';
-  const { register, handleSubmit, formState, watch } = useForm<Pay>({
+  const { register, handleSubmit, control, watch } = useForm<Pay>({
     resolver: zodResolver(paymentInput),
-    defaultValues: { purpose, method: 'cash' },
+    defaultValues: { purpose, method: 'cash', amountMinor: purpose === 'balance' ? s.due : Number.NaN },
   });
   const take = useCounterAction(s.ticket.id, (v: Pay) => post(s.ticket.id, 'payments', v));
   const chosen = watch('purpose');
@@ -48,13 +43,12 @@ function TakePayment({ s }: { s: CounterSummary }) {
           </label>
         ))}
       </fieldset>
-      <Field
+      <MoneyField
+        control={control}
+        name="amountMinor"
         label={`Amount (${s.currency})`}
-        inputMode="decimal"
         id="pay-amount"
-        defaultValue={purpose === 'balance' ? plainAmount(s.due, s.currency) : ''}
-        registration={register('amountMinor', { setValueAs: (v: unknown) => parseMoney(String(v ?? ''), s.currency) ?? Number.NaN })}
-        error={formState.errors.amountMinor}
+        currency={s.currency}
         hint={chosen === 'balance' ? `The balance due is ${formatMoney(s.due, s.currency)}.` : 'Up to the ticket total.'}
       />
       <div className="flex flex-wrap items-center gap-3">

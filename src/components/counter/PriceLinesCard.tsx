@@ -5,17 +5,18 @@ import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Field, FormMessage } from '@/components/Field';
 import { lineInput } from '@/lib/counter-request';
-import { formatMoney, parseMoney } from '@/lib/pricing/money';
+import { formatMoney } from '@/lib/pricing/money';
 import { PRICE_KEYS, type PriceKey } from '@/lib/pricing/price-keys';
 import type { CounterSummary } from '@/services/payments';
 import { Money } from './Money';
+import { MoneyField } from './MoneyField';
 import { post, useCounterAction, usePriceList } from './counter-api';
 
 type Line = z.infer<typeof lineInput>;
 const button = 'min-h-11 rounded border-2 border-accent px-4 py-2 font-semibold text-accent disabled:opacity-50';
 
 function AdjustForm({ s, canChange }: { s: CounterSummary; canChange: boolean }) {
-  const { register, handleSubmit, formState, reset } = useForm<Line>({
+  const { register, handleSubmit, formState, reset, control } = useForm<Line>({
     resolver: zodResolver(lineInput),
     defaultValues: { source: 'adjust', label: '', reason: '' },
   });
@@ -30,14 +31,7 @@ function AdjustForm({ s, canChange }: { s: CounterSummary; canChange: boolean })
     >
       <input type="hidden" {...register('source')} />
       <Field label="Adjustment" registration={register('label')} error={errors.label as never} hint="e.g. Second pair, same cloth" id="adjust-label" />
-      <Field
-        label={`Amount (${s.currency}, minus to take off)`}
-        inputMode="decimal"
-        id="adjust-amount"
-        registration={register('amountMinor', { setValueAs: (v: string) => parseMoney(String(v ?? ''), s.currency) ?? Number.NaN })}
-        error={errors.amountMinor as never}
-        hint="e.g. -5.00"
-      />
+      <MoneyField key={add.data ? String((add.data as { id?: string }).id) : "new"} control={control} name="amountMinor" label={`Amount (${s.currency}, minus to take off)`} id="adjust-amount" currency={s.currency} hint="e.g. -5.00" />
       <Field label="Reason" registration={register('reason')} error={errors.reason as never} id="adjust-reason" hint="Kept on the ticket" />
       <div className="sm:col-span-3 flex flex-wrap items-center gap-3">
         <button type="submit" disabled={!canChange || add.isPending} className={button}>

@@ -8,20 +8,20 @@ import { Field, FormMessage, SubmitButton } from '@/components/Field';
 import { withQuery } from '@/components/WithQuery';
 import { priceListInput } from '@/lib/counter-request';
 import { fetchJson } from '@/lib/fetch-json';
-import { CURRENCIES, parseMoney, type Currency } from '@/lib/pricing/money';
+import { CURRENCIES, type Currency } from '@/lib/pricing/money';
 import type { PriceListView } from '@/services/prices';
+import { MoneyField } from './MoneyField';
 
 type List = z.infer<typeof priceListInput>;
 
 function Editor({ list }: { list: PriceListView }) {
   const client = useQueryClient();
-  const { register, handleSubmit, formState, watch, getValues } = useForm<List>({ resolver: zodResolver(priceListInput), defaultValues: list });
+  const { register, handleSubmit, formState, watch, control } = useForm<List>({ resolver: zodResolver(priceListInput), defaultValues: list });
   const save = useMutation({
     mutationFn: (v: List) => fetchJson<PriceListView>('/api/prices', { method: 'PUT', body: v }),
     onSuccess: (data) => client.setQueryData(['prices'], data),
   });
   const currency = watch('currency') as Currency;
-  const digits = CURRENCIES[currency] ?? 2;
   return (
     <form noValidate onSubmit={handleSubmit((v) => save.mutate(v))} className="flex flex-col gap-5">
       <section aria-labelledby="list-h" className="rounded border-2 border-rule bg-card p-4">
@@ -34,14 +34,7 @@ function Editor({ list }: { list: PriceListView }) {
             <div key={item.key} className="grid gap-3 sm:grid-cols-[2fr_1fr]">
               <input type="hidden" {...register(`items.${i}.key`)} />
               <Field label={`Line ${i + 1}: name`} id={`item-${item.key}-label`} registration={register(`items.${i}.label`)} error={formState.errors.items?.[i]?.label} />
-              <Field
-                label={`Line ${i + 1}: price`}
-                id={`item-${item.key}-amount`}
-                inputMode="decimal"
-                defaultValue={(item.amountMinor / 10 ** digits).toFixed(digits)}
-                registration={register(`items.${i}.amountMinor`, { setValueAs: (v: unknown) => (typeof v === 'number' ? v : (parseMoney(String(v ?? ''), getValues('currency') as Currency) ?? Number.NaN)) })}
-                error={formState.errors.items?.[i]?.amountMinor}
-              />
+              <MoneyField control={control} name={`items.${i}.amountMinor`} label={`Line ${i + 1}: price (${currency})`} id={`item-${item.key}-amount`} currency={currency} />
             </div>
           ))}
         </div>

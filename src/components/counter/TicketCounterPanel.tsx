@@ -3,6 +3,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { FormMessage } from '@/components/Field';
 import { fetchJson } from '@/lib/fetch-json';
+import { isGarmentStep, stepLabel } from '@/lib/garment-steps';
 import { withQuery } from '@/components/WithQuery';
 import { can, type Role } from '@/lib/roles';
 import { NoticesCard } from './NoticesCard';
@@ -34,7 +35,7 @@ function Panel({ ticketId, role: given }: Props) {
         </p>
         <p className="text-xl">{s.ticket.customerName ?? 'No customer named'}</p>
         <p className="text-xl">
-          Status: <strong data-testid="ticket-status">{s.ticket.status}</strong>
+          Status: <strong data-testid="ticket-status">{isGarmentStep(s.ticket.status) ? stepLabel(s.ticket.status) : s.ticket.status}</strong>
         </p>
         {s.ticket.dueOn && <p className="text-xl">Due {s.ticket.dueOn}</p>}
       </div>
