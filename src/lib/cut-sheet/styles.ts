@@ -2,9 +2,6 @@
 import { StyleSheet } from '@react-pdf/renderer';
 import { FAMILY } from './fonts';
 
-/** Points per millimetre: react-pdf draws in points, 72 to the inch of 25.4 mm. */
-export const PT_PER_MM = 72 / 25.4;
-
 /** Ink colours: the cut red is dark enough to print as near-black in greyscale. */
 export const INK = { text: '#111111', soft: '#555555', rule: '#999999', cut: '#b3121b', fill: '#f1efe9', warn: '#8a4b00' } as const;
 
