@@ -39,7 +39,7 @@ export function claimSlipDocument(d: ClaimSlipData): ReactElement<DocumentProps>
           </View>
           <View style={s.row}>
             <Text>Ready by</Text>
-            <Text style={s.strong}>{d.dueOn ?? 'the shop will tell you'}</Text>
+            <Text style={s.strong}>{d.dueOn ?? 'we will let you know'}</Text>
           </View>
         </View>
         {d.garments.length > 0 ? (
