@@ -168,11 +168,17 @@ export async function receiveWebhook(payload: string, signature: string | null):
 
 class WebhookRefusal extends Error {}
 
-/** Hands a ready, fully paid ticket over: every garment and the ticket become collected. */
-export async function pickUp(actor: Actor, ticketId: string): Promise<CounterSummary> {
+/** Throws 422 unless the ticket is ready and nothing is due: the check any path to "collected" needs. */
+export async function assertReadyToHandOver(actor: Pick<Actor, 'shopId'>, ticketId: string): Promise<CounterSummary> {
   const before = await counterSummary(actor, ticketId);
   if (before.ticket.status !== 'ready') throw new ServiceError(422, `Only a ready ticket can be handed over (this one is ${before.ticket.status}).`);
   if (before.due > 0) throw new ServiceError(422, 'Take the balance before handing the trousers over.');
+  return before;
+}
+
+/** Hands a ready, fully paid ticket over: every garment and the ticket become collected. */
+export async function pickUp(actor: Actor, ticketId: string): Promise<CounterSummary> {
+  const before = await assertReadyToHandOver(actor, ticketId);
   const done = await db.transaction(async (tx) => {
     const [row] = await tx
       .update(tickets)
