@@ -77,3 +77,6 @@ export const settingsRequest = z.object({
 export function ticketLabel(number: number): string {
   return `T-${number}`;
 }
+
+/** The body of PATCH /api/customers/[id]: any of name, phone, e-mail, notes. */
+export const customerPatch = newCustomer.partial();

@@ -73,6 +73,13 @@ const FITTING = {
   },
 };
 
+/** A fresh customer of shop A, added by its lead. */
+async function freshCustomer(): Promise<string> {
+  const r = await call('POST', '/api/customers', { cookie: cookies.lead, body: { name: 'Matrix Customer' } });
+  expect(r.status).toBe(201);
+  return r.body.id;
+}
+
 async function freshInvitation(): Promise<{ id: string; email: string }> {
   const email = freshEmail('invitee');
   const r = await call('POST', '/api/staff', { cookie: cookies.lead, body: { email, role: 'counter' } });
@@ -203,6 +210,18 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       request: () => ({ path: '/api/customers', body: { name: 'Matrix Customer' } }),
       expect: signedIn(201, { apprentice: 403 }),
       check: (a, actor) => expect(a.body.shopId).toBe(ownShop(actor)),
+    },
+  },
+  'customers/[id]': {
+    GET: {
+      request: async () => ({ path: `/api/customers/${await freshCustomer()}` }),
+      expect: signedIn(200, { apprentice: 403, other: 404 }),
+      check: (a) => expect(a.body.name).toBe('Matrix Customer'),
+    },
+    PATCH: {
+      request: async () => ({ path: `/api/customers/${await freshCustomer()}`, body: { notes: 'Prefers a deep cuff.' } }),
+      expect: signedIn(200, { apprentice: 403, other: 404 }),
+      check: (a) => expect(a.body.notes).toBe('Prefers a deep cuff.'),
     },
   },
   tickets: {

@@ -1,4 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
 import { GarmentPhotos } from '@/components/photos/GarmentPhotos';
 import { withQuery } from '@/components/WithQuery';
 import { scaleUnit, ticketLabel } from '@/lib/bench-requests';
@@ -7,6 +8,7 @@ import { fetchJson } from '@/lib/fetch-json';
 import { GARMENT_STEPS } from '@/lib/garment-steps';
 import { DueBadge } from './DueBadge';
 import { FittingForm } from './FittingForm';
+import { GarmentEdit } from './GarmentEdit';
 import { FittingHistory } from './FittingHistory';
 import { FittingReadOnly } from './FittingReadOnly';
 import { StepButton } from './StepButton';
@@ -14,6 +16,8 @@ import { useBenchSettings, useStepLabel } from './use-bench';
 
 interface Props {
   garmentId: string;
+  /** may change description, due date and assignee */
+  canEditGarment: boolean;
   canEditFitting: boolean;
   canReadFitting: boolean;
   canAdvance: boolean;
@@ -21,7 +25,7 @@ interface Props {
   canUploadPhotos: boolean;
 }
 
-function Bench({ garmentId, canEditFitting, canReadFitting, canAdvance, canPickup, canUploadPhotos }: Props) {
+function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canAdvance, canPickup, canUploadPhotos }: Props) {
   const garment = useQuery({ queryKey: ['garment', garmentId], queryFn: () => fetchJson<GarmentDetail>(`/api/garments/${garmentId}`) });
   const fitting = useQuery({
     queryKey: ['fitting', garmentId],
@@ -30,6 +34,7 @@ function Bench({ garmentId, canEditFitting, canReadFitting, canAdvance, canPicku
   });
   const settings = useBenchSettings();
   const label = useStepLabel();
+  const [editing, setEditing] = useState(false);
   if (garment.isError) return <p role="alert" className="text-xl font-semibold text-cut">{garment.error.message}</p>;
   if (garment.isPending || settings.isPending) return <p className="text-xl text-muted">Loading the garment…</p>;
   const g = garment.data;
@@ -56,6 +61,14 @@ function Bench({ garmentId, canEditFitting, canReadFitting, canAdvance, canPicku
             </>
           )}
         </dl>
+        {canEditGarment &&
+          (editing ? (
+            <GarmentEdit garment={g} onDone={() => setEditing(false)} />
+          ) : (
+            <button type="button" onClick={() => setEditing(true)} className="min-h-11 self-start rounded-md border-2 border-ink px-4 text-lg font-semibold">
+              Change description, due date or who
+            </button>
+          ))}
         <ol aria-label="Bench steps" className="flex flex-wrap gap-2">
           {GARMENT_STEPS.map((s, i) => (
             <li

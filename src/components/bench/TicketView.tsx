@@ -1,5 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
 import { useForm, type Resolver } from 'react-hook-form';
 import { Field, FormMessage, SubmitButton } from '@/components/Field';
 import { withQuery } from '@/components/WithQuery';
@@ -8,6 +9,7 @@ import type { TicketDetail } from '@/lib/bench-types';
 import { fetchJson } from '@/lib/fetch-json';
 import { nextStep, type GarmentStep } from '@/lib/garment-steps';
 import type { z } from 'zod';
+import { CustomerEdit } from './CustomerEdit';
 import { DueBadge } from './DueBadge';
 import { StepButton } from './StepButton';
 import { useStepLabel } from './use-bench';
@@ -17,6 +19,7 @@ interface Props {
   canAdvance: boolean;
   canPickup: boolean;
   canAddGarment: boolean;
+  canEditCustomer: boolean;
 }
 
 type GarmentForm = z.input<typeof garmentInput>;
@@ -65,9 +68,10 @@ function MoveAll({ ticket, canAdvance, canPickup }: { ticket: TicketDetail; canA
   );
 }
 
-function Ticket({ ticketId, canAdvance, canPickup, canAddGarment }: Props) {
+function Ticket({ ticketId, canAdvance, canPickup, canAddGarment, canEditCustomer }: Props) {
   const ticket = useQuery({ queryKey: ['ticket', ticketId], queryFn: () => fetchJson<TicketDetail>(`/api/tickets/${ticketId}`) });
   const label = useStepLabel();
+  const [editing, setEditing] = useState(false);
   if (ticket.isError) return <p role="alert" className="text-xl font-semibold text-cut">{ticket.error.message}</p>;
   if (ticket.isPending) return <p className="text-xl text-muted">Loading the ticket…</p>;
   const t = ticket.data;
@@ -91,6 +95,14 @@ function Ticket({ ticketId, canAdvance, canPickup, canAddGarment }: Props) {
           <p className="text-lg text-muted">No customer recorded.</p>
         )}
         {t.customer?.notes && <p className="text-lg">Customer notes: {t.customer.notes}</p>}
+        {t.customer && canEditCustomer &&
+          (editing ? (
+            <CustomerEdit customer={t.customer} onDone={() => setEditing(false)} />
+          ) : (
+            <button type="button" onClick={() => setEditing(true)} className="min-h-11 self-start rounded-md border-2 border-ink px-4 text-lg font-semibold">
+              Change the customer’s details
+            </button>
+          ))}
         {t.note && <p className="text-lg">Note: {t.note}</p>}
       </header>
       <MoveAll ticket={t} canAdvance={canAdvance} canPickup={canPickup} />
