@@ -133,6 +133,11 @@ describe('a ticket across the counter, from deposit to a paid pickup', () => {
     await page.getByText('Collected: the ticket is closed with its payment on record.').waitFor();
     await expect(page.getByTestId('ticket-status').textContent()).resolves.toBe('Collected');
     await page.screenshot({ path: 'test-results/counter-collected.png', fullPage: true });
+    // The same panel sits under the ticket on the ticket page.
+    await page.goto(`/tickets/${ticketId}`);
+    await ready(page);
+    await page.getByRole('region', { name: 'Counter' }).getByText('Collected: the ticket is closed with its payment on record.').waitFor();
+    await page.screenshot({ path: 'test-results/counter-ticket-page.png', fullPage: true });
     const summary = await call('GET', `/api/tickets/${ticketId}/payments`, { cookie: await signIn(DEMO.counter) });
     expect(summary.body.payments.map((p: { purpose: string; method: string; amountMinor: number }) => [p.purpose, p.method, p.amountMinor])).toEqual([
       ['deposit', 'cash', 1000],

@@ -15,9 +15,11 @@ interface Props {
   ticketId: string;
   /** the viewer's role when the page knows it; otherwise read from /api/me */
   role?: Role;
+  /** false where the page already shows the ticket's number, customer and step */
+  withTicketHeader?: boolean;
 }
 
-function Panel({ ticketId, role: given }: Props) {
+function Panel({ ticketId, role: given, withTicketHeader = true }: Props) {
   const summary = useSummary(ticketId);
   const me = useQuery({ queryKey: ['me'], queryFn: () => fetchJson<{ role: Role }>('/api/me'), enabled: !given });
   const role = given ?? me.data?.role;
@@ -29,7 +31,7 @@ function Panel({ ticketId, role: given }: Props) {
   const collected = s.ticket.status === 'collected';
   return (
     <div className="flex flex-col gap-4">
-      <div className="flex flex-wrap items-baseline gap-x-6 gap-y-2">
+      <div className={withTicketHeader ? 'flex flex-wrap items-baseline gap-x-6 gap-y-2' : 'sr-only'}>
         <p className="text-4xl font-extrabold" data-testid="ticket-number">
           T-{s.ticket.number}
         </p>
