@@ -126,6 +126,15 @@ describe('garment edits', () => {
 });
 
 describe('bench settings', () => {
+  it('keep the lead’s scale and step names for everyone, and go back to the usual', async () => {
+    const put = await call('PUT', '/api/bench-settings', { cookie: cookie.lead, body: { scale: 'mm', stepLabels: { marked: 'Pinned and chalked' } } });
+    expect(put.status).toBe(200);
+    const seen = await call('GET', '/api/bench-settings', { cookie: cookie.apprentice });
+    expect(seen.body).toEqual({ scale: 'mm', stepLabels: { marked: 'Pinned and chalked' } });
+    const back = await call('PUT', '/api/bench-settings', { cookie: cookie.lead, body: { scale: 'in8', stepLabels: {} } });
+    expect(back.body).toEqual({ scale: 'in8', stepLabels: {} });
+  });
+
   it('answer 422 for a scale that is not one', async () => {
     const r = await call('PUT', '/api/bench-settings', { cookie: cookie.lead, body: { scale: 'furlongs' } });
     expect(r.status).toBe(422);
