@@ -10,7 +10,19 @@ import { buildIfNeeded } from '../scripts/build-if-needed.mjs';
 import { ensureChromium } from '../scripts/chromium.mjs';
 
 /** Pages to weigh: path, and whether a demo sign-in is needed first. */
-export const PAGES = [{ path: '/', signIn: null }];
+export const PAGES = [
+  { path: '/', signIn: null },
+  { path: '/queue', signIn: signInAs('tailor@pinmark.test') },
+  { path: '/tickets/new', signIn: signInAs('counter@pinmark.test') },
+];
+
+/** Signs the tab's context in as a demo account (every demo account shares one password). */
+function signInAs(email) {
+  return async (tab) => {
+    const res = await tab.context().request.post(`${BASE}/api/auth/sign-in/email`, { data: { email, password: 'cuffwright-demo' }, headers: { origin: BASE } });
+    if (!res.ok()) throw new Error(`sign-in of ${email} answered ${res.status()}`);
+  };
+}
 
 const PORT = Number(process.env.BENCH_PORT || 4399);
 const BASE = `http://localhost:${PORT}`;
