@@ -1,0 +1,54 @@
+// The notices card as the counter sees it: a failed send stays listed with its error, its next
+// automatic try (or that none is left) and a retry button; a sent one shows when and how.
+import { describe, expect, it } from 'vitest';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { renderToStaticMarkup } from 'react-dom/server';
+import type { Notice } from '@/db/schema/notices';
+import { NoticesCard } from '@/components/counter/NoticesCard';
+import type { CounterSummary } from '@/services/payments';
+
+const TICKET = '00000000-0000-4000-8000-000000000001';
+
+const summary = { ticket: { id: TICKET, number: 1042, status: 'ready', dueOn: null, customerName: 'Wendel Orrin', customerEmail: 'wendel@example.com' }, currency: 'EUR', lines: [], total: 2400, paid: 0, due: 2400, payments: [], link: null } as CounterSummary;
+
+function notice(over: Partial<Notice>): Notice {
+  return { id: 'n1', shopId: 's', ticketId: TICKET, kind: 'ready', to: 'wendel@example.com', subject: 'Ready', body: '', status: 'sent', attempts: 1, lastError: null, nextAttemptAt: null, sentAt: new Date('2026-12-01T10:00:00Z'), createdById: 'u', createdAt: new Date('2026-12-01T10:00:00Z'), ...over };
+}
+
+function render(notices: Notice[], canSend = true): string {
+  const client = new QueryClient();
+  client.setQueryData(['notices', TICKET], notices);
+  return renderToStaticMarkup(
+    <QueryClientProvider client={client}>
+      <NoticesCard s={summary} canSend={canSend} />
+    </QueryClientProvider>,
+  );
+}
+
+describe('NoticesCard', () => {
+  it('shows a failed notice with its error, next try and a retry button', () => {
+    const html = render([notice({ status: 'failed', attempts: 2, sentAt: null, lastError: 'connect ECONNREFUSED 127.0.0.1:2525', nextAttemptAt: new Date('2026-12-01T10:02:00Z') })]);
+    expect(html).toContain('Ready notice to wendel@example.com: Not delivered');
+    expect(html).toContain('2 attempts');
+    expect(html).toContain('Last error: connect ECONNREFUSED 127.0.0.1:2525');
+    expect(html).toContain('Next automatic try:');
+    expect(html).toContain('Retry now');
+  });
+
+  it('says when the automatic tries are used up, and hides retry from those who may not send', () => {
+    const html = render([notice({ status: 'failed', attempts: 5, sentAt: null, lastError: 'timeout', nextAttemptAt: null })], false);
+    expect(html).toContain('No more automatic tries: retry by hand.');
+    expect(html).not.toContain('Retry now');
+  });
+
+  it('marks a notice the shop setting sent, and offers no second ready notice', () => {
+    const html = render([notice({ createdById: null })]);
+    expect(html).toContain('Sent');
+    expect(html).toContain('sent by the shop setting');
+    expect(html).not.toContain('Send the ready notice');
+  });
+
+  it('offers the ready notice when none was sent', () => {
+    expect(render([])).toContain('Send the ready notice');
+  });
+});
