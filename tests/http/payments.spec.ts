@@ -79,6 +79,20 @@ describe('online payment through the local fake', () => {
     expect(handed.body.ticket.status).toBe('collected');
   });
 
+  it('closes the open link when the balance is paid at the counter, so it cannot be paid again online', async () => {
+    const id = await readyPricedTicket();
+    const made = await call('POST', `/api/tickets/${id}/payments/link`, { cookie: counter });
+    const url: string = made.body.link.url;
+    const cash = await call('POST', `/api/tickets/${id}/payments`, { cookie: counter, body: { purpose: 'balance', method: 'cash', amountMinor: 2400 } });
+    expect(cash.status).toBe(201);
+    expect(cash.body.link.status).toBe('expired');
+    // The session was expired through the SDK: the hosted page no longer takes money.
+    expect(await (await fetch(url)).text()).toContain('This link is no longer open.');
+    expect((await fetch(url, { method: 'POST', redirect: 'manual' })).status).toBe(409);
+    const after = await call('GET', `/api/tickets/${id}/payments`, { cookie: counter });
+    expect(after.body.payments.map((p: { method: string }) => p.method)).toEqual(['cash']);
+  });
+
   it('refuses a replayed event, a forged signature and a stale one', async () => {
     const id = await readyPricedTicket();
     const made = await call('POST', `/api/tickets/${id}/payments/link`, { cookie: counter });
