@@ -47,7 +47,8 @@ function viewOf(row: StoredFile & { uploadedBy?: string | null }): PhotoView {
   };
 }
 
-async function garmentInShop(actor: Actor, garmentId: string) {
+/** The garment when it is the actor's shop's, else a 404 (checked before an upload is read). */
+export async function garmentInShop(actor: Actor, garmentId: string) {
   if (!UUID.test(garmentId)) throw new ServiceError(404, 'No such garment in this shop.');
   const [g] = await db
     .select({ id: garments.id, ticketId: garments.ticketId })

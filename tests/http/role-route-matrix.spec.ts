@@ -6,6 +6,7 @@ import { readdirSync, readFileSync } from 'node:fs';
 import { join, relative, sep } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { call, DEMO, freshEmail, newShop, signIn, type Answer } from './client';
+import { sampleJpeg, someGarment, upload } from './photo-upload';
 
 const ACTORS = ['signedOut', 'lead', 'tailor', 'apprentice', 'counter', 'other'] as const;
 type Actor = (typeof ACTORS)[number];
@@ -139,6 +140,25 @@ const PRICE_LIST = {
     { key: 'rush', label: 'Rush surcharge (per ticket)', amountMinor: 900 },
   ],
 };
+
+let photoGarmentOfA = '';
+async function garmentOfA(): Promise<string> {
+  return (photoGarmentOfA ||= await someGarment(cookies.lead!));
+}
+
+/** A fresh house preset of shop A, made by its lead. */
+async function freshHousePreset(): Promise<string> {
+  const r = await call('POST', '/api/presets', { cookie: cookies.lead, body: { name: freshEmail('house'), scope: 'house', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } } });
+  expect(r.status).toBe(201);
+  return r.body.id;
+}
+
+/** A fresh fitting photo on a garment of shop A, uploaded by its lead. */
+async function freshPhoto(): Promise<string> {
+  const r = await upload(cookies.lead, await garmentOfA(), [{ name: 'matrix.jpg', bytes: await sampleJpeg(64, 48) }]);
+  expect(r.status).toBe(201);
+  return r.body[0].id;
+}
 
 /** Every route file (key) and method, with what each caller must get. */
 const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partial<Record<Method, Case>>> = {
@@ -433,6 +453,65 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       check: (a, actor) => {
         if (actor === 'lead') expect(a.body.length).toBeGreaterThan(0);
       },
+    },
+  },
+  presets: {
+    GET: {
+      request: () => ({ path: '/api/presets' }),
+      expect: signedIn(200, { counter: 403 }),
+      check: (a, actor) => {
+        // The demo shop's house default (demo seed); the other shop starts with none.
+        if (actor === 'other') expect(a.body.filter((p: { house: boolean }) => p.house)).toEqual([]);
+        else expect(a.body[0]).toMatchObject({ name: 'Classic cuff', house: true, isDefault: true });
+      },
+    },
+    POST: {
+      // A house preset: the lead's alone (a tailor's own presets are in presets.spec.ts).
+      request: () => ({ path: '/api/presets', body: { name: freshEmail('matrix'), scope: 'house', settings: { finish: 'cuff', unit: 'mm', cuffDepth: '40' } } }),
+      expect: signedIn(403, { lead: 201, other: 201 }),
+      check: (a) => expect(a.body).toMatchObject({ house: true, settings: { cuffDepth: '40', unit: 'mm' } }),
+    },
+  },
+  'presets/[id]': {
+    PATCH: {
+      request: async () => ({ path: `/api/presets/${await freshHousePreset()}`, body: { name: freshEmail('renamed') } }),
+      expect: signedIn(403, { lead: 200, other: 404 }),
+      check: (a) => expect(a.body.name).toMatch(/^renamed-/),
+    },
+    DELETE: {
+      request: async () => ({ path: `/api/presets/${await freshHousePreset()}` }),
+      expect: signedIn(403, { lead: 200, other: 404 }),
+      check: (a) => expect(a.body.deleted).toBe(true),
+    },
+  },
+  'garments/[id]/photos': {
+    GET: {
+      request: async () => ({ path: `/api/garments/${await garmentOfA()}/photos` }),
+      expect: signedIn(200, { other: 404 }),
+      check: (a) => expect(a.body.maxBytes).toBe(10 * 1024 * 1024),
+    },
+    POST: {
+      // Multipart only: a JSON body is refused with 400 once the caller may upload to this garment
+      // (real uploads are in photos.spec.ts).
+      request: async () => ({ path: `/api/garments/${await garmentOfA()}/photos`, body: { photos: [] } }),
+      expect: signedIn(400, { apprentice: 403, counter: 403, other: 404 }),
+    },
+  },
+  'photos/[id]': {
+    GET: {
+      request: async () => ({ path: `/api/photos/${await freshPhoto()}` }),
+      expect: signedIn(200, { other: 404 }),
+    },
+    DELETE: {
+      request: async () => ({ path: `/api/photos/${await freshPhoto()}` }),
+      expect: signedIn(200, { apprentice: 403, counter: 403, other: 404 }),
+      check: (a) => expect(a.body.deleted).toBe(true),
+    },
+  },
+  'photos/[id]/thumb': {
+    GET: {
+      request: async () => ({ path: `/api/photos/${await freshPhoto()}/thumb` }),
+      expect: signedIn(200, { other: 404 }),
     },
   },
 };

@@ -4,7 +4,7 @@ import { PHOTO_MAX_BYTES } from 'astro:env/server';
 import { guard, json, problem, run } from '@/lib/api';
 import type { PhotoList } from '@/lib/photo-view';
 import { ServiceError } from '@/services/errors';
-import { addPhotos, listPhotos, UploadRefused, type Upload } from '@/services/photos';
+import { addPhotos, garmentInShop, listPhotos, UploadRefused, type Upload } from '@/services/photos';
 
 export const prerender = false;
 
@@ -41,6 +41,13 @@ function capped(request: Request, limit: number): Request | null {
 export const POST: APIRoute = async ({ locals, params, request }) => {
   const actor = guard(locals, ['photos', 'upload']);
   if (actor instanceof Response) return actor;
+  try {
+    // No need to read megabytes for a garment that is not there.
+    await garmentInShop(actor, params.id ?? '');
+  } catch (e) {
+    if (e instanceof ServiceError) return problem(e.status, e.message);
+    throw e;
+  }
   const tooBig = `An upload may carry at most ${MAX_FILES} photos of ${Math.floor(PHOTO_MAX_BYTES / (1024 * 1024))} MB each.`;
   const limited = capped(request, PHOTO_MAX_BYTES * MAX_FILES + FORM_SLACK);
   if (!limited) return problem(413, tooBig);
