@@ -7,6 +7,7 @@ import { sheetContent, type SheetContent, type SheetLegGroup } from './content';
 import { LegDrawing } from './LegDrawing';
 import { legGeometry } from './leg-geometry';
 import { qrPath } from './qr';
+import { SkippedNote } from './SkippedNote';
 import { GUIDE_COLUMN, INK, s } from './styles';
 import type { Len } from '@/lib/allowance/types';
 import type { CutSheetData, PageSize } from './types';
@@ -199,14 +200,15 @@ export function CutSheetPage({ data, wrap }: { data: CutSheetData; wrap: boolean
   );
 }
 
-/** A document of cut sheets, one page each; wrap lets an overfull sheet spill onto a second page. */
-export function cutSheetDocument(sheets: CutSheetData[], wrap = true): ReactElement<DocumentProps> {
+/** A document of cut sheets, one page each; wrap lets an overfull sheet spill onto a second page; skipped garments get a last page. */
+export function cutSheetDocument(sheets: CutSheetData[], wrap = true, skipped: string[] = []): ReactElement<DocumentProps> {
   const first = sheets[0];
   return (
     <Document title={first && sheets.length === 1 ? `Cut sheet ${first.ticket ?? 'unsaved'}` : 'Cut sheets'} creator="Cuffwright" producer="Cuffwright">
       {sheets.map((d, i) => (
         <CutSheetPage key={i} data={d} wrap={wrap} />
       ))}
+      {skipped.length > 0 && <SkippedNote skipped={skipped} size={first?.pageSize ?? 'LETTER'} />}
     </Document>
   );
 }

@@ -9,19 +9,20 @@ export function renderCutSheet(data: CutSheetData): Promise<Uint8Array<ArrayBuff
   return renderCutSheets([data]);
 }
 
-/** Renders a batch: one page per garment, in the order given. */
-export async function renderCutSheets(list: CutSheetData[]): Promise<Uint8Array<ArrayBuffer>> {
+/** Renders a batch: one page per garment, in the order given, then a page naming any garments skipped. */
+export async function renderCutSheets(list: CutSheetData[], skipped: string[] = []): Promise<Uint8Array<ArrayBuffer>> {
   if (list.length === 0) throw new Error('No cut sheets to render.');
   await registerFonts();
-  const fast = await renderToBuffer(cutSheetDocument(list, false));
+  const fast = await renderToBuffer(cutSheetDocument(list, false, skipped));
   // A sheet too full for its paper came out as a taller page, which a printer would shrink and
   // the chalk guide would no longer be 1:1: render again, spilling onto a second page instead.
-  const bytes = atPaperSize(fast, list) ? fast : await renderToBuffer(cutSheetDocument(list, true));
+  const bytes = atPaperSize(fast, list) ? fast : await renderToBuffer(cutSheetDocument(list, true, skipped));
   // A copy owns a plain ArrayBuffer, which a Response body accepts as it is.
   return new Uint8Array(bytes);
 }
 
 function atPaperSize(pdf: Uint8Array, list: CutSheetData[]): boolean {
   const heights = [...Buffer.from(pdf).toString('latin1').matchAll(/\/MediaBox \[0 0 [\d.]+ ([\d.]+)\]/g)].map((m) => Number(m[1]));
-  return heights.length === list.length && heights.every((h, i) => Math.abs(h - PAGE_PT[list[i]!.pageSize ?? 'LETTER'].height) < 0.5);
+  // The skipped-garments page (if any) comes last and is not a sheet: only the sheets are counted.
+  return heights.length >= list.length && heights.slice(0, list.length).every((h, i) => Math.abs(h - PAGE_PT[list[i]!.pageSize ?? 'LETTER'].height) < 0.5);
 }

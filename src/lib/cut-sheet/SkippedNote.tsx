@@ -1,0 +1,22 @@
+// The batch's last page when some garments of the filtered queue could not be planned: which
+// ones and why, so nobody looks for a sheet that was never printed.
+import { Page, Text, View } from '@react-pdf/renderer';
+import { INK, s } from './styles';
+import type { PageSize } from './types';
+
+/** A page listing the garments left out of a batch, each with its reason. */
+export function SkippedNote({ skipped, size }: { skipped: string[]; size: PageSize }) {
+  return (
+    <Page size={size} style={s.page}>
+      <View style={s.header}>
+        <Text style={s.title}>Not in this batch</Text>
+      </View>
+      <Text style={[s.small, { marginBottom: 6, color: INK.soft }]}>These garments of the queue have no sheet above; finish their fitting and print them from the garment page.</Text>
+      {skipped.map((line, i) => (
+        <Text key={i} style={{ fontSize: 11, marginBottom: 3 }}>
+          {`•  ${line}`}
+        </Text>
+      ))}
+    </Page>
+  );
+}
