@@ -13,6 +13,7 @@ import { ticketLabel } from '@/lib/bench-requests';
 import type { QueueRow } from '@/lib/bench-types';
 import { fetchJson } from '@/lib/fetch-json';
 import { GARMENT_STEPS } from '@/lib/garment-steps';
+import { matchesQueue, queueRank, queueSheetsHref } from '@/lib/queue-filter';
 import { DueBadge } from './DueBadge';
 import { dueState, todayIso } from './due';
 import { QueueFilters, type Filters } from './QueueFilters';
@@ -23,25 +24,13 @@ interface Props {
   userId: string;
   canAdvance: boolean;
   canPickup: boolean;
+  /** may print cut sheets (apprentice, tailor, lead) */
+  canPrint?: boolean;
 }
 
 const col = createColumnHelper<QueueRow & { rank: number }>();
 
-function matches(row: QueueRow, f: Filters, userId: string, today: string): boolean {
-  if (f.step === 'open' ? row.status === 'collected' : f.step !== 'all' && row.status !== f.step) return false;
-  if (f.who === 'mine' && row.assigneeId !== userId) return false;
-  if (f.who === 'mine-open' && row.assigneeId !== userId && row.assigneeId !== null) return false;
-  if (f.who === 'nobody' && row.assigneeId !== null) return false;
-  if (!['all', 'mine', 'mine-open', 'nobody'].includes(f.who) && row.assigneeId !== f.who) return false;
-  const due = dueState(row.dueOn, today);
-  if (f.due === 'overdue' && due !== 'overdue') return false;
-  if (f.due === 'today' && due !== 'today' && due !== 'overdue') return false;
-  const q = f.search.trim().toLowerCase().replace(/^t-?/, '');
-  if (q && !String(row.ticketNumber).includes(q) && !(row.customerName ?? '').toLowerCase().includes(f.search.trim().toLowerCase())) return false;
-  return true;
-}
-
-function QueueTable({ userId, canAdvance, canPickup }: Props) {
+function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) {
   const queue = useQuery({ queryKey: ['queue'], queryFn: () => fetchJson<QueueRow[]>('/api/garments'), refetchInterval: 60_000 });
   const people = useAssignees();
   const label = useStepLabel();
@@ -53,8 +42,8 @@ function QueueTable({ userId, canAdvance, canPickup }: Props) {
   const rows = useMemo(
     () =>
       (queue.data ?? [])
-        .filter((r) => matches(r, filters, userId, today))
-        .map((r) => ({ ...r, rank: r.assigneeId === userId ? 0 : r.assigneeId === null ? 1 : 2 })),
+        .filter((r) => matchesQueue(r, filters, userId, today))
+        .map((r) => ({ ...r, rank: queueRank(r, userId) })),
     [queue.data, filters, userId, today],
   );
 
@@ -103,6 +92,12 @@ function QueueTable({ userId, canAdvance, canPickup }: Props) {
   return (
     <div className="flex flex-col gap-4">
       <QueueFilters value={filters} onChange={setFilters} people={people.data ?? []} label={label} />
+      {canPrint && rows.length > 0 && (
+        // The same filters and day as the table: the PDF holds exactly the garments shown.
+        <a href={queueSheetsHref(filters, today)} target="_blank" rel="noopener" className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-ink bg-card px-5 text-lg font-bold">
+          Print the morning’s sheets
+        </a>
+      )}
       {queue.isPending ? (
         <p className="text-lg text-muted">Loading the queue…</p>
       ) : queue.isError ? (

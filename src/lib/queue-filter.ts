@@ -1,0 +1,60 @@
+// The queue's filters as one pure function: the queue island narrows its table with it and the
+// morning's batch of cut sheets (GET /api/queue/sheets) picks its garments with it, so "filtered
+// as on screen" is the same code on both sides. No zod here: it ships in the queue's island.
+import type { QueueRow } from './bench-types';
+import type { GarmentStep } from './garment-steps';
+
+/** What the queue is narrowed to. */
+export interface QueueFilter {
+  /** 'open' = everything not yet collected */
+  step: 'open' | 'all' | GarmentStep;
+  /** 'all', 'mine', 'mine-open' (mine and unassigned), 'nobody', or a user id */
+  who: string;
+  due: 'all' | 'today' | 'overdue';
+  search: string;
+}
+
+/** The filters the queue opens with. */
+export const DEFAULT_QUEUE_FILTER: QueueFilter = { step: 'open', who: 'all', due: 'all', search: '' };
+
+/** Where a due date stands on a given day (ISO dates compare as text). */
+function dueState(dueOn: string | null, today: string): 'overdue' | 'today' | 'later' | 'none' {
+  if (!dueOn) return 'none';
+  return dueOn < today ? 'overdue' : dueOn === today ? 'today' : 'later';
+}
+
+/** True when the row passes the filters for this user on this day. */
+export function matchesQueue(row: QueueRow, f: QueueFilter, userId: string, today: string): boolean {
+  if (f.step === 'open' ? row.status === 'collected' : f.step !== 'all' && row.status !== f.step) return false;
+  if (f.who === 'mine' && row.assigneeId !== userId) return false;
+  if (f.who === 'mine-open' && row.assigneeId !== userId && row.assigneeId !== null) return false;
+  if (f.who === 'nobody' && row.assigneeId !== null) return false;
+  if (!['all', 'mine', 'mine-open', 'nobody'].includes(f.who) && row.assigneeId !== f.who) return false;
+  const due = dueState(row.dueOn, today);
+  if (f.due === 'overdue' && due !== 'overdue') return false;
+  if (f.due === 'today' && due !== 'today' && due !== 'overdue') return false;
+  const q = f.search.trim().toLowerCase().replace(/^t-?/, '');
+  if (q && !String(row.ticketNumber).includes(q) && !(row.customerName ?? '').toLowerCase().includes(f.search.trim().toLowerCase())) return false;
+  return true;
+}
+
+/** 0 own work, 1 unassigned, 2 someone else's: the queue's first sort key. */
+export function queueRank(row: QueueRow, userId: string): 0 | 1 | 2 {
+  return row.assigneeId === userId ? 0 : row.assigneeId === null ? 1 : 2;
+}
+
+/** The rows the queue shows, in its opening order: own work, unassigned, the rest; earliest due first. */
+export function filterQueue(rows: QueueRow[], f: QueueFilter, userId: string, today: string): QueueRow[] {
+  const due = (r: QueueRow) => r.dueOn ?? '9999-12-31';
+  // Array.prototype.sort is stable: ties keep the server's order (due, ticket, position).
+  return rows
+    .filter((r) => matchesQueue(r, f, userId, today))
+    .sort((a, b) => queueRank(a, userId) - queueRank(b, userId) || (due(a) < due(b) ? -1 : due(a) > due(b) ? 1 : 0));
+}
+
+/** The address of the filtered queue's cut sheets (GET /api/queue/sheets), carrying the device's day. */
+export function queueSheetsHref(f: QueueFilter, today: string): string {
+  const q = new URLSearchParams({ step: f.step, who: f.who, due: f.due, today });
+  if (f.search.trim()) q.set('search', f.search.trim());
+  return `/api/queue/sheets?${q}`;
+}
