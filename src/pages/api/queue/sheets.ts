@@ -1,0 +1,36 @@
+// GET /api/queue/sheets: the morning's cut sheets, one garment per page, for the queue filtered
+// exactly as on screen (the queue island's own filter function); a last page names the garments
+// left out because they have no fitting yet.
+import type { APIRoute } from 'astro';
+import { BETTER_AUTH_URL } from 'astro:env/server';
+import { guard, problem } from '@/lib/api';
+import { fieldMessages } from '@/lib/plan-request';
+import { batchQuery, queryObject, sheetOptions } from '@/lib/sheet-request';
+import { ServiceError } from '@/services/errors';
+import { queueSheets, serverToday } from '@/services/cut-sheets';
+
+export const prerender = false;
+
+/** One PDF of the filtered queue's cut sheets; X-Sheets and X-Skipped say how many of each. */
+export const GET: APIRoute = async ({ locals, url }) => {
+  const actor = guard(locals, ['cutsheets', 'print']);
+  if (actor instanceof Response) return actor;
+  const q = batchQuery.safeParse(queryObject(url.searchParams));
+  if (!q.success) return problem(400, 'Some of the queue filters are not understood.', fieldMessages(q.error));
+  const { step, who, due, search, today } = q.data;
+  try {
+    const batch = await queueSheets(actor, { step, who, due, search }, today ?? serverToday(), sheetOptions(q.data), BETTER_AUTH_URL);
+    return new Response(batch.bytes, {
+      headers: {
+        'Content-Type': 'application/pdf',
+        'Content-Disposition': `inline; filename="${batch.filename}"`,
+        'cache-control': 'no-store',
+        'X-Sheets': String(batch.sheets),
+        'X-Skipped': String(batch.skipped.length),
+      },
+    });
+  } catch (e) {
+    if (e instanceof ServiceError) return problem(e.status, e.message);
+    throw e;
+  }
+};

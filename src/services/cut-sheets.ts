@@ -1,0 +1,159 @@
+// Cut sheets of saved garments: one garment's sheet, and the morning's batch for the queue as
+// filtered on screen. Reads the garment, its ticket, customer, assignee and fitting, plans each
+// leg with the engine and renders with the cut-sheet renderer. Shop-scoped through the garment
+// services (another shop's garment, or an apprentice's invisible one, is 404).
+import { eq } from 'drizzle-orm';
+import { db } from '@/db';
+import { customers, tickets, user, type Garment } from '@/db/schema';
+import type { Precision, Unit } from '@/lib/allowance/types';
+import type { Actor } from '@/lib/api';
+import { scaleUnit, ticketLabel } from '@/lib/bench-requests';
+import { buildCutSheet, refusedFields, type LegOrder, type SheetHeader } from '@/lib/cut-sheet/build';
+import { renderCutSheet, renderCutSheets } from '@/lib/cut-sheet/render';
+import type { CutSheetData, PageSize, Side } from '@/lib/cut-sheet/types';
+import { legMainRequest, legTaperRequest } from '@/lib/leg-plan';
+import { legFormValues, type LegValues, LEG_LENGTHS, type SavedLeg } from '@/lib/measurement-request';
+import { planRequest } from '@/lib/plan-request';
+import { filterQueue, type QueueFilter } from '@/lib/queue-filter';
+import { ServiceError } from './errors';
+import { listQueue, visibleGarment } from './garments';
+import { legsOf } from './measurements';
+import { benchSettings } from './shop-settings';
+
+/** How a sheet is printed; anything left out comes from the shop's bench settings. */
+export interface SheetOptions {
+  unit?: Unit;
+  precision?: 8 | 16;
+  pageSize?: PageSize;
+}
+
+/** A rendered PDF and the file name it is offered under. */
+export interface SheetFile {
+  bytes: Uint8Array<ArrayBuffer>;
+  filename: string;
+}
+
+/** The morning's batch: the PDF and the garments left out for want of a fitting. */
+export interface BatchFile extends SheetFile {
+  sheets: number;
+  skipped: string[];
+}
+
+/** The message a garment with no usable fitting is refused with. */
+export const NO_FITTING = 'This garment has no fitting measurements yet: save the fitting first.';
+
+async function scaleOf(shopId: string, opts: SheetOptions): Promise<{ unit: Unit; precision: Precision; pageSize: PageSize }> {
+  const shop = scaleUnit((await benchSettings(shopId)).scale);
+  const unit = opts.unit ?? shop.unit;
+  // The shop's 1/8 or 1/16 carries over to inches asked for without a precision.
+  const precision = opts.precision ?? (shop.unit === 'in' ? shop.precision : 8);
+  return { unit, precision, pageSize: opts.pageSize ?? 'LETTER' };
+}
+
+// A fitting typed in one unit and printed in another: the typed text keeps its own unit, so the
+// engine reads it exactly ("1 1/2 in" in a mm plan is 38.1 mm) rather than from a rounded mm.
+function inUnit(leg: LegValues, from: Unit, to: Unit): LegValues {
+  if (from === to) return leg;
+  const out = { ...leg };
+  for (const f of LEG_LENGTHS) {
+    const text = out[f].trim();
+    if (text !== '' && !/[a-z"″]/i.test(text)) out[f] = `${text} ${from}`;
+  }
+  return out;
+}
+
+/** The engine's orders for both legs of a saved fitting, or a refusal saying what is missing. */
+export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precision): LegOrder[] {
+  if (saved.length === 0) throw new ServiceError(422, NO_FITTING);
+  const orders: LegOrder[] = [];
+  for (const s of saved) {
+    const side: Side = s.leg;
+    const leg = inUnit(legFormValues(s), s.unit, unit);
+    const main = legMainRequest(leg, unit, precision);
+    if (!main) throw new ServiceError(422, `The ${side} leg has no cuff depth yet: finish the fitting first.`);
+    const parsed = planRequest.parse(main);
+    if (parsed.kind === 'cuff') {
+      const { kind: _k, ...input } = parsed;
+      const taperReq = legTaperRequest(leg, unit, precision);
+      const taper = taperReq ? planRequest.parse(taperReq) : null;
+      orders.push(
+        taper?.kind === 'taper'
+          ? { side, finish: 'cuff', input, taper: { widthAtEdge: taper.widthAtEdge, widthAbove: taper.widthAbove, heightAbove: taper.heightAbove, seamAllowance: taper.seamAllowance } }
+          : { side, finish: 'cuff', input },
+      );
+    } else if (parsed.kind === 'hem') {
+      const { kind: _k, ...input } = parsed;
+      orders.push({ side, finish: 'hem', input });
+    }
+  }
+  const refused = refusedFields(orders);
+  const first = Object.entries(refused)[0];
+  if (first) throw new ServiceError(422, `The fitting has a length the plan cannot use (${first[0]}): ${first[1]}`);
+  return orders;
+}
+
+async function headerOf(actor: Actor, g: Garment, baseUrl: string, pageSize: PageSize): Promise<SheetHeader & { number: number }> {
+  const [t] = await db.select({ number: tickets.number, customerId: tickets.customerId }).from(tickets).where(eq(tickets.id, g.ticketId));
+  const [c] = t?.customerId ? await db.select({ name: customers.name }).from(customers).where(eq(customers.id, t.customerId)) : [];
+  const [who] = g.assigneeId ? await db.select({ name: user.name }).from(user).where(eq(user.id, g.assigneeId)) : [];
+  const what = g.description ?? 'Trousers';
+  return {
+    number: t!.number,
+    shop: actor.shopName,
+    ticket: ticketLabel(t!.number),
+    // The customer's name beside the garment matches the sheet to the bag it travels with.
+    garment: c?.name ? `${what} (${c.name})` : what,
+    due: g.dueOn,
+    assignee: who?.name ?? null,
+    link: `${baseUrl.replace(/\/+$/, '')}/garments/${g.id}`,
+    pageSize,
+  };
+}
+
+async function sheetOf(actor: Actor, g: Garment, baseUrl: string, scale: Awaited<ReturnType<typeof scaleOf>>): Promise<{ data: CutSheetData; number: number }> {
+  const orders = fittingOrders(await legsOf(g.id), scale.unit, scale.precision);
+  const { number, ...header } = await headerOf(actor, g, baseUrl, scale.pageSize);
+  return { data: buildCutSheet(header, orders), number };
+}
+
+const slug = (text: string) =>
+  text
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-+|-+$/g, '')
+    .slice(0, 60) || 'garment';
+
+/** One garment's cut sheet as a PDF; 404 when the actor may not see it, 422 without a fitting. */
+export async function garmentSheet(actor: Actor, garmentId: string, opts: SheetOptions, baseUrl: string): Promise<SheetFile> {
+  const g = await visibleGarment(actor, garmentId);
+  const scale = await scaleOf(actor.shopId, opts);
+  const { data, number } = await sheetOf(actor, g, baseUrl, scale);
+  return { bytes: await renderCutSheet(data), filename: `${ticketLabel(number)}-${slug(g.description ?? 'trousers')}.pdf` };
+}
+
+/** The queue as filtered on screen, one sheet per garment; garments without a fitting are listed on a last page. */
+export async function queueSheets(actor: Actor, filter: QueueFilter, today: string, opts: SheetOptions, baseUrl: string): Promise<BatchFile> {
+  const rows = filterQueue(await listQueue(actor), filter, actor.userId, today);
+  if (rows.length === 0) throw new ServiceError(422, 'No garments in the queue with these filters.');
+  const scale = await scaleOf(actor.shopId, opts);
+  const sheets: CutSheetData[] = [];
+  const skipped: string[] = [];
+  for (const row of rows) {
+    // listQueue only lists what the actor may see; visibleGarment reads the full row, scoped again.
+    const g = await visibleGarment(actor, row.id);
+    try {
+      sheets.push((await sheetOf(actor, g, baseUrl, scale)).data);
+    } catch (e) {
+      if (!(e instanceof ServiceError)) throw e;
+      skipped.push(`${ticketLabel(row.ticketNumber)} ${row.description}: ${e.message === NO_FITTING ? 'no fitting measurements yet' : e.message}`);
+    }
+  }
+  if (sheets.length === 0) throw new ServiceError(422, 'None of these garments has fitting measurements yet.');
+  return { bytes: await renderCutSheets(sheets, skipped), filename: `cut-sheets-${today}.pdf`, sheets: sheets.length, skipped };
+}
+
+/** The server's own date, YYYY-MM-DD, for a batch asked for without the device's day. */
+export function serverToday(now = new Date()): string {
+  const pad = (n: number) => String(n).padStart(2, '0');
+  return `${now.getFullYear()}-${pad(now.getMonth() + 1)}-${pad(now.getDate())}`;
+}
