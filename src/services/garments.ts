@@ -174,6 +174,11 @@ export async function moveVisible(actor: Actor, g: Garment, to: GarmentStep): Pr
   }
   const allowed = to === 'collected' ? can(actor.role, ['tickets', 'pickup']) : can(actor.role, ['tickets', 'advance']);
   if (!allowed) throw new ServiceError(422, `Your role (${actor.role}) may not move a garment to ${stepLabel(to)}.`);
+  if (to === 'collected') {
+    // The counter's rule for every way to "collected": the ticket is ready and nothing is left to pay.
+    const { assertReadyToHandOver } = await import('./payments');
+    await assertReadyToHandOver(actor, g.ticketId);
+  }
   const [row] = await db
     .update(garments)
     .set({ status: to, updatedAt: new Date() })

@@ -54,6 +54,14 @@ describe('garments', () => {
     await expect(moveGarment(a.lead, g.id, 'collected')).rejects.toMatchObject({ status: 422 });
   });
 
+  it('hand over only a ready ticket with nothing left to pay (the counter’s rule)', async () => {
+    const { addLine } = await import('@/services/prices');
+    const g = await oneGarment();
+    for (const to of ['marked', 'cut', 'stitched', 'pressed', 'ready'] as const) await moveGarment(a.tailor, g.id, to);
+    await addLine(a.counter, g.ticketId, { source: 'adjust', label: 'Shorten with cuffs', amountMinor: 2500, reason: 'Agreed at the counter' });
+    await expect(moveGarment(a.counter, g.id, 'collected')).rejects.toMatchObject({ status: 422, message: expect.stringMatching(/balance/) });
+  });
+
   it('tell every garment-moved listener after each move, with who moved it', async () => {
     const heard: string[] = [];
     const listener = async (actor: { role: string }, garment: { status: string }) => void heard.push(`${actor.role}:${garment.status}`);
