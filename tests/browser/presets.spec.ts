@@ -1,6 +1,6 @@
 // Story (2): the lead saves a house preset and makes it the default; a tailor finds it
 // preselected, applies presets in one tap, adjusts a length and keeps it as their own preset.
-// The garment page is another worker's: here the tailor applies presets on the presets page.
+// The presets page has the fuller trial panel; the garment page (another worker's) mounts the same picker.
 import { mkdirSync } from 'node:fs';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -29,7 +29,7 @@ async function signInTo(page: Page, email: string, next: string) {
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password').fill('cuffwright-demo');
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`**${next}`);
+  await page.waitForURL((u) => u.pathname === next);
   await ready(page);
 }
 
@@ -87,6 +87,26 @@ describe('house presets from the lead to the bench', () => {
     await page.getByRole('button', { name: /^Wide cuff/ }).click();
     await own.getByRole('button', { name: new RegExp(`^${ownName}`) }).click();
     await expect.poll(() => depth.inputValue()).toBe('1 5/16');
+    await page.context().close();
+  });
+
+  it('on a garment page, the tailor fills a leg with the house preset in one tap', async () => {
+    const page = await tabletPage(browser);
+    await signInTo(page, 'tailor@pinmark.test', '/presets');
+    const queue = (await (await page.request.get('/api/garments')).json()) as { id: string }[];
+    await page.goto(`/garments/${queue[0]!.id}`);
+    await ready(page);
+    const fitting = page.getByRole('form', { name: 'Fitting measurements' });
+    await fitting.getByText('Presets for the left leg').click();
+    const house = fitting.getByRole('button', { name: new RegExp(`^${houseName}`) });
+    await house.waitFor();
+    // Marked as the house default, listed first among the house presets.
+    await expect(house.getByText('House default').isVisible()).resolves.toBe(true);
+    await house.click();
+    await expect.poll(() => fitting.getByLabel('Cuff depth', { exact: true }).inputValue()).toMatch(/^1 3\/8( in)?$/);
+    await fitting.getByRole('button', { name: /^Wide cuff/ }).click();
+    await expect.poll(() => fitting.getByLabel('Cuff depth', { exact: true }).inputValue()).toMatch(/^1 3\/4( in)?$/);
+    await page.screenshot({ path: 'test-results/presets-garment.png', fullPage: true });
     await page.context().close();
   });
 

@@ -1,0 +1,69 @@
+// A tailor photographs the pinned trousers on the garment page: the photo is uploaded from the
+// file picker (the camera input takes the same path), its thumbnail shows, and it can be removed;
+// something that is not a photo is refused in words.
+import { mkdirSync } from 'node:fs';
+import sharp from 'sharp';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launch, tabletPage } from './browser';
+
+let browser: Browser;
+
+beforeAll(async () => {
+  browser = await launch();
+  mkdirSync('test-results', { recursive: true });
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function ready(page: Page) {
+  await page.waitForSelector('astro-island:not([ssr])', { state: 'attached', timeout: 15_000 });
+}
+
+async function photo(): Promise<Buffer> {
+  // A plain test card: grey field with a darker band where a pin line would be.
+  const band = await sharp({ create: { width: 1200, height: 40, channels: 3, background: { r: 40, g: 40, b: 48 } } }).png().toBuffer();
+  return sharp({ create: { width: 1200, height: 900, channels: 3, background: { r: 150, g: 146, b: 138 } } })
+    .composite([{ input: band, top: 600, left: 0 }])
+    .jpeg()
+    .toBuffer();
+}
+
+describe('fitting photos on the garment page', () => {
+  it('a tailor adds a photo from the file picker, sees its thumbnail, and removes it', async () => {
+    const page = await tabletPage(browser);
+    await page.goto('/sign-in?next=/queue');
+    await ready(page);
+    await page.getByLabel('E-mail').fill('tailor@pinmark.test');
+    await page.getByLabel('Password').fill('cuffwright-demo');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.waitForURL((u) => u.pathname === '/queue');
+    const queue = (await (await page.request.get('/api/garments')).json()) as { id: string }[];
+    await page.goto(`/garments/${queue[queue.length - 1]!.id}`);
+    await ready(page);
+    const photos = page.getByRole('region', { name: 'Fitting photos' });
+    await photos.getByText(/No photos of this garment yet|Fitting photo/).first().waitFor();
+    const before = await photos.getByRole('img').count();
+
+    // Both ways in are there, labelled; the camera one asks for the back camera.
+    await expect(photos.locator('input[type=file][capture=environment]').count()).resolves.toBe(1);
+    await photos.getByLabel('Choose photos').setInputFiles({ name: 'left-leg-pinned.jpg', mimeType: 'image/jpeg', buffer: await photo() });
+    await photos.getByText('Photo added.').waitFor();
+    const img = photos.getByRole('img', { name: 'Fitting photo left-leg-pinned.jpg' });
+    await img.waitFor();
+    // Thumbnails load lazily: bring it on screen as the tailor would by scrolling.
+    await img.scrollIntoViewIfNeeded();
+    await expect.poll(() => img.evaluate((el) => (el as HTMLImageElement).naturalWidth)).toBe(480);
+    expect(await photos.getByRole('img').count()).toBe(before + 1);
+
+    await photos.getByLabel('Choose photos').setInputFiles({ name: 'notes.svg', mimeType: 'image/svg+xml', buffer: Buffer.from('<svg xmlns="http://www.w3.org/2000/svg"/>') });
+    await photos.getByText('notes.svg is not a photo we take').waitFor();
+    await page.screenshot({ path: 'test-results/garment-photos.png', fullPage: true });
+
+    page.once('dialog', (d) => d.accept());
+    await photos.getByRole('button', { name: 'Remove: left-leg-pinned.jpg' }).click();
+    await img.waitFor({ state: 'detached' });
+    await page.context().close();
+  });
+});
