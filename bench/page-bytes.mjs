@@ -14,6 +14,7 @@ export const PAGES = [
   { path: '/', signIn: null },
   { path: '/queue', signIn: signInAs('tailor@pinmark.test') },
   { path: '/tickets/new', signIn: signInAs('counter@pinmark.test') },
+  { path: '/presets', signIn: signInAs('lead@pinmark.test') },
 ];
 
 /** Signs the tab's context in as a demo account (every demo account shares one password). */
