@@ -45,11 +45,13 @@ describe('story 1: a tailor takes in a garment and plans both legs', () => {
     await field(page, 'Name').fill('Perpetua Lindqvist');
     await field(page, 'Phone').fill('555-0190');
     await field(page, 'Garment 1').fill('Olive moleskin trousers, cuffs');
+    await page.screenshot({ path: 'test-results/intake.png', fullPage: true });
     await page.getByRole('button', { name: 'Open ticket' }).click();
     await page.waitForURL(/\/tickets\/[0-9a-f-]{36}$/);
     await islandsReady(page);
     expect(await page.getByTestId('ticket-number').textContent()).toMatch(/^T-\d{4}$/);
     await page.getByText('Perpetua Lindqvist').first().waitFor();
+    await page.screenshot({ path: 'test-results/ticket.png', fullPage: true });
 
     await page.getByRole('link', { name: 'Olive moleskin trousers, cuffs' }).click();
     await page.waitForURL(/\/garments\/[0-9a-f-]{36}$/);
@@ -81,6 +83,8 @@ describe('story 1: a tailor takes in a garment and plans both legs', () => {
 
     await field(page, 'Cloth below the mark').fill('5 1/4');
     await expect.poll(() => cutText(page), { timeout: 10_000 }).toBe('5 1/4 in');
+    // As the tailor sees it on the tablet: the field being typed, the save button and the cut line.
+    await page.screenshot({ path: 'test-results/garment-tailor-view.png' });
     await page.getByRole('button', { name: /^Save measurements/ }).click();
     await page.getByText('Saved both legs.').waitFor();
 
@@ -148,6 +152,30 @@ describe('story 3: an apprentice works the queue', () => {
       return r.status;
     }, id);
     expect(status).toBe(403);
+    await page.context().close();
+  });
+});
+
+describe('the queue for the lead', () => {
+  it('filters to overdue work, sorts by ticket, and marks every overdue row in words', async () => {
+    const page = await tabletPage(browser);
+    await signIn(page, 'lead@pinmark.test', '/queue');
+    await page.getByTestId('queue-row').first().waitFor();
+    const all = await page.getByTestId('queue-row').count();
+    await page.getByLabel('Due', { exact: true }).selectOption('overdue');
+    await expect.poll(() => page.getByTestId('queue-row').count()).toBeLessThan(all);
+    const rows = page.getByTestId('queue-row');
+    // The demo seed has at least two overdue garments not yet collected.
+    expect(await rows.count()).toBeGreaterThanOrEqual(2);
+    for (const text of await rows.allInnerTexts()) expect(text).toContain('Overdue');
+
+    await page.getByLabel('Due', { exact: true }).selectOption('all');
+    await page.getByRole('button', { name: 'Ticket' }).click();
+    await expect.poll(async () => {
+      const numbers = (await page.getByTestId('queue-row').locator('td:nth-child(3)').allInnerTexts()).map((t) => Number(t.replace('T-', '')));
+      return numbers.every((n, i) => i === 0 || numbers[i - 1]! <= n);
+    }).toBe(true);
+    await page.screenshot({ path: 'test-results/queue-lead.png', fullPage: true });
     await page.context().close();
   });
 });

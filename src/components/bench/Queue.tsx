@@ -54,7 +54,7 @@ function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) 
       col.accessor('ticketNumber', {
         header: 'Ticket',
         cell: (c) => (
-          <a href={`/tickets/${c.row.original.ticketId}`} className="inline-flex min-h-11 items-center font-extrabold text-accent underline">
+          <a href={`/tickets/${c.row.original.ticketId}`} className="inline-flex min-h-11 items-center font-extrabold whitespace-nowrap text-accent underline">
             {ticketLabel(c.getValue())}
           </a>
         ),
@@ -87,7 +87,7 @@ function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) 
     [label, canAdvance, canPickup],
   );
 
-  const table = useReactTable({ data: rows, columns, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
+  const table = useReactTable({ data: rows, columns, state: { sorting }, onSortingChange: setSorting, sortDescFirst: false, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
 
   return (
     <div className="flex flex-col gap-4">
