@@ -12,6 +12,7 @@ import { isPathLike, safeName } from '@/lib/storage/safe-name';
 import { sniffImage, type ImageType } from '@/lib/storage/sniff-image';
 import { ServiceError } from './errors';
 import { audit } from './audit';
+import { garmentVisibleTo } from './garments';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const THUMB_PX = 480;
@@ -47,13 +48,14 @@ function viewOf(row: StoredFile & { uploadedBy?: string | null }): PhotoView {
   };
 }
 
-/** The garment when it is the actor's shop's, else a 404 (checked before an upload is read). */
+/** The garment when the actor may see it, else a 404 (checked before an upload is read). */
 export async function garmentInShop(actor: Actor, garmentId: string) {
   if (!UUID.test(garmentId)) throw new ServiceError(404, 'No such garment in this shop.');
   const [g] = await db
     .select({ id: garments.id, ticketId: garments.ticketId })
     .from(garments)
-    .where(and(eq(garments.id, garmentId), eq(garments.shopId, actor.shopId)));
+    // The queue's rule: an apprentice sees only garments given to them or to nobody.
+    .where(and(eq(garments.id, garmentId), garmentVisibleTo(actor)));
   if (!g) throw new ServiceError(404, 'No such garment in this shop.');
   return g;
 }
@@ -143,12 +145,13 @@ export async function addPhotos(actor: Actor, garmentId: string, uploads: Upload
 
 async function photoInShop(actor: Actor, id: string): Promise<StoredFile> {
   if (!UUID.test(id)) throw new ServiceError(404, 'No such photo in this shop.');
-  const [row] = await db
-    .select()
+  const [found] = await db
+    .select({ file: files })
     .from(files)
-    .where(and(eq(files.id, id), eq(files.shopId, actor.shopId), eq(files.kind, 'fitting-photo')));
-  if (!row) throw new ServiceError(404, 'No such photo in this shop.');
-  return row;
+    .innerJoin(garments, eq(garments.id, files.garmentId))
+    .where(and(eq(files.id, id), eq(files.shopId, actor.shopId), eq(files.kind, 'fitting-photo'), garmentVisibleTo(actor)));
+  if (!found) throw new ServiceError(404, 'No such photo in this shop.');
+  return found.file;
 }
 
 /** The photo's bytes and type (the thumbnail when asked and there is one). */

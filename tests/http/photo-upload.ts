@@ -27,9 +27,10 @@ export async function upload(cookie: string | undefined, garmentId: string, phot
   return { status: res.status, body, headers: res.headers };
 }
 
-/** The first garment the holder of the cookie sees in the queue. */
+/** A garment given to nobody (every role of the shop sees it) from the holder of the cookie's queue. */
 export async function someGarment(cookie: string): Promise<string> {
   const list = await call('GET', '/api/garments', { cookie });
-  if (list.status !== 200 || !list.body.length) throw new Error(`no garment to attach photos to: ${list.status}`);
-  return list.body[0].id;
+  const open = list.status === 200 ? (list.body as { id: string; assigneeId: string | null }[]).find((g) => !g.assigneeId) : undefined;
+  if (!open) throw new Error(`no unassigned garment to attach photos to: ${list.status}`);
+  return open.id;
 }

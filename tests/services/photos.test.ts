@@ -132,6 +132,17 @@ describe('fitting photos', () => {
     expect((await svc.readPhoto(b.apprentice, theirs!.id)).bytes.byteLength).toBe(jpeg.byteLength);
   });
 
+  it("keep an apprentice to the queue's rule: no photos of a garment given to someone else", async () => {
+    const tailorsGarment = await garmentOf(a.shopId);
+    await db.update(garments).set({ assigneeId: a.tailor.userId }).where(eq(garments.id, tailorsGarment));
+    const [p] = await svc.addPhotos(a.tailor, tailorsGarment, [{ name: 'tailor.jpg', bytes: jpeg }], 10 * MB);
+    await expect(svc.listPhotos(a.apprentice, tailorsGarment)).rejects.toMatchObject({ status: 404 });
+    await expect(svc.readPhoto(a.apprentice, p!.id)).rejects.toMatchObject({ status: 404 });
+    expect((await svc.readPhoto(a.counter, p!.id)).mimeType).toBe('image/jpeg');
+    await db.update(garments).set({ assigneeId: a.apprentice.userId }).where(eq(garments.id, tailorsGarment));
+    expect((await svc.listPhotos(a.apprentice, tailorsGarment)).map((x) => x.id)).toEqual([p!.id]);
+  });
+
   it('delete a photo with its thumbnail; adding and deleting are audited', async () => {
     const [p] = await svc.addPhotos(a.lead, garmentA, [{ name: 'to-remove.jpg', bytes: jpeg }], 10 * MB);
     expect(readdirSync(join(storageRoot, a.shopId)).filter((n) => n.startsWith(p!.id))).toHaveLength(2);
