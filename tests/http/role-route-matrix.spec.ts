@@ -74,6 +74,14 @@ const FITTING = {
   },
 };
 
+/** A fresh unassigned garment of shop A with the fitting above saved, ready for a cut sheet. */
+async function fittedGarment(): Promise<string> {
+  const id = await freshGarment();
+  const r = await call('PUT', `/api/garments/${id}/measurements`, { cookie: cookies.lead, body: FITTING });
+  expect(r.status).toBe(200);
+  return id;
+}
+
 /** A fresh customer of shop A, added by its lead. */
 async function freshCustomer(): Promise<string> {
   const r = await call('POST', '/api/customers', { cookie: cookies.lead, body: { name: 'Matrix Customer' } });
@@ -326,6 +334,27 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       check: (a) => {
         expect(a.body.legs.map((l: { values: { backPin: { mm: number } } }) => l.values.backPin.mm)).toEqual([793.75, 800.1]);
         expect(a.body.history.filter((e: { action: string }) => e.action === 'measurement.changed').length).toBe(8);
+      },
+    },
+  },
+  'garments/[id]/sheet': {
+    GET: {
+      request: async () => ({ path: `/api/garments/${await fittedGarment()}/sheet?unit=mm` }),
+      expect: signedIn(200, { counter: 403, other: 404 }),
+      check: (a) => {
+        expect(a.headers.get('content-type')).toBe('application/pdf');
+        expect(String(a.body).startsWith('%PDF-')).toBe(true);
+      },
+    },
+  },
+  'queue/sheets': {
+    GET: {
+      request: () => ({ path: '/api/queue/sheets?step=open&who=all&due=all' }),
+      // The other shop's queue is empty: nothing to print (422), never shop A's garments.
+      expect: signedIn(200, { counter: 403, other: 422 }),
+      check: (a) => {
+        expect(a.headers.get('content-type')).toBe('application/pdf');
+        expect(Number(a.headers.get('x-sheets'))).toBeGreaterThan(0);
       },
     },
   },
