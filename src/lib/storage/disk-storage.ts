@@ -18,7 +18,8 @@ export class DiskStorage implements Storage {
     return path;
   }
 
-  async put(key: string, bytes: Uint8Array): Promise<void> {
+  // The type is not kept on disk: the files table holds it (an object store would keep it here).
+  async put(key: string, bytes: Uint8Array, _contentType?: string): Promise<void> {
     const path = this.pathOf(key);
     await mkdir(dirname(path), { recursive: true });
     // Written aside then renamed, so a reader never sees half a photo.
