@@ -1,5 +1,5 @@
-// The presets page: try a preset on a leg's settings and keep your own; the lead also keeps the
-// house presets and picks the house default.
+// The presets page: the lead keeps the house presets and picks the house default (first, as it is
+// the lead's page); everyone tries presets on a leg's settings and keeps their own.
 import { useEffect, useState } from 'react';
 import { withQuery } from '@/components/WithQuery';
 import type { PresetSettings } from '@/lib/preset-settings';
@@ -26,6 +26,12 @@ function PresetsScreen({ canManageHouse, canCreateOwn }: Props) {
   const settings = leg ?? BLANK;
   return (
     <div className="flex flex-col gap-8">
+      {canManageHouse && (
+        <>
+          <HousePresetForm />
+          <PresetManager title="Manage house presets" presets={presets.data?.filter((p) => p.house) ?? []} canSetDefault />
+        </>
+      )}
       <section aria-labelledby="try-heading" className="flex flex-col gap-3">
         <h2 id="try-heading" className="text-2xl font-extrabold">Apply a preset</h2>
         <p className="text-muted">One tap fills the leg settings. Change any length, then keep it as your own preset.</p>
@@ -36,12 +42,6 @@ function PresetsScreen({ canManageHouse, canCreateOwn }: Props) {
           </div>
         </div>
       </section>
-      {canManageHouse && (
-        <>
-          <HousePresetForm />
-          <PresetManager title="Manage house presets" presets={presets.data?.filter((p) => p.house) ?? []} canSetDefault />
-        </>
-      )}
       {canCreateOwn && <PresetManager title="Manage your own presets" presets={presets.data?.filter((p) => !p.house) ?? []} canSetDefault={false} />}
     </div>
   );
