@@ -179,3 +179,21 @@ describe('the queue for the lead', () => {
     await page.context().close();
   });
 });
+
+describe('a tapered leg at the bench', () => {
+  it('shows the taper check and the front-pin note from the saved fitting', async () => {
+    const page = await tabletPage(browser);
+    await signIn(page, 'tailor@pinmark.test', '/queue');
+    await page.getByLabel('Customer or ticket').fill('T-1004');
+    await page.getByRole('link', { name: 'Charcoal wool trousers' }).click();
+    await page.waitForURL(/\/garments\/[0-9a-f-]{36}$/);
+    await islandsReady(page);
+    // Demo fitting: 1 3/4 in cuff, 5 1/4 in of cloth → cut 5 1/4 in (TRADE.md: three cuff depths).
+    await expect.poll(() => cutText(page), { timeout: 10_000 }).toBe('5 1/4 in');
+    await page.getByRole('heading', { name: 'Tapered leg' }).waitFor();
+    await page.getByText('a cuff is hemmed level').waitFor();
+    expect(await field(page, 'Width at the finished edge (flat)').inputValue()).toBe('8');
+    await page.screenshot({ path: 'test-results/garment-taper.png', fullPage: true });
+    await page.context().close();
+  });
+});

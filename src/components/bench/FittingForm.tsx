@@ -121,7 +121,7 @@ export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
         <button type="button" onClick={copyOther} className="min-h-11 self-start rounded-md border-2 border-ink px-4 text-lg font-semibold">
           Same as the {other} leg
         </button>
-        <div className="sticky bottom-0 flex flex-col gap-2 border-t-2 border-rule bg-card pt-3">
+        <div className="flex flex-col gap-2 border-t-2 border-rule pt-3">
           {save.error && (
             <p role="alert" className="rounded border-2 border-cut bg-cut-soft px-3 py-2 font-semibold text-cut">
               Not saved: {save.error.message} Everything you typed is still here.
