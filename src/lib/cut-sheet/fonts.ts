@@ -4,6 +4,7 @@
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { Font } from '@react-pdf/renderer';
+import { cacheFontObjects } from './pdf-font-cache';
 
 /** The font family the sheet is set in. */
 export const FAMILY = 'Inter';
@@ -30,6 +31,7 @@ export function registerFonts(): Promise<void> {
 }
 
 async function load(): Promise<void> {
+  cacheFontObjects();
   const require = createRequire(import.meta.url);
   const dir = dirname(require.resolve('@expo-google-fonts/inter/package.json'));
   Font.register({ family: FAMILY, fonts: WEIGHTS.map(([fontWeight, file]) => ({ src: join(dir, file), fontWeight })) });

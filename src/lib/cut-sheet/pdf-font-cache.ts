@@ -1,0 +1,42 @@
+// react-pdf hands pdfkit the same fontkit font object for every text run. pdfkit only caches
+// fonts named by a string, so for an object it builds a new EmbeddedFont (a subset, metrics)
+// on every run and then compares it with the one it has by JSON-stringifying the whole name
+// table, about a tenth of a sheet's time. The first font made for an object is the one pdfkit
+// would end up using anyway: keep it per document and answer the next runs with it.
+import PDFDocument from 'pdfkit';
+
+interface FontDoc {
+  _font: unknown;
+  _fontSource: unknown;
+  _fontFamily: unknown;
+  fontSize: (size: number) => unknown;
+}
+
+let patched = false;
+
+/** Makes pdfkit reuse, within one document, the font it already made for the same font object. */
+export function cacheFontObjects(): void {
+  if (patched) return;
+  patched = true;
+  const proto = PDFDocument.prototype as FontDoc & { font: (src: unknown, family?: unknown, size?: unknown) => unknown };
+  const original = proto.font;
+  const made = new WeakMap<object, WeakMap<object, unknown>>();
+  proto.font = function (this: FontDoc, src: unknown, family?: unknown, size?: unknown) {
+    if (typeof src !== 'object' || src === null || typeof family === 'string') return original.call(this, src, family, size);
+    let mine = made.get(this);
+    if (!mine) made.set(this, (mine = new WeakMap()));
+    const font = mine.get(src);
+    if (font) {
+      // What pdfkit's own cache hit does: remember the source and size, use the font as is.
+      this._fontSource = src;
+      this._fontFamily = null;
+      const pt = typeof family === 'number' ? family : size;
+      if (typeof pt === 'number') this.fontSize(pt);
+      this._font = font;
+      return this;
+    }
+    const out = original.call(this, src, family, size);
+    mine.set(src, this._font);
+    return out;
+  };
+}
