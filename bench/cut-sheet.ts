@@ -18,7 +18,8 @@ if (process.env.NODE_ENV !== 'production') {
   process.exit(r.status ?? 1);
 }
 
-const WARM_RUNS = 25;
+const WARM_RUNS = 40;
+const WARM_UP = 40;
 const BATCH = 100;
 const BROWSER_RUNS = 12;
 
@@ -35,39 +36,55 @@ async function time<T>(fn: () => Promise<T>): Promise<[number, T]> {
   return [performance.now() - t, out];
 }
 
-const sheet = (ticket: string) =>
+// Every benchmarked sheet is a distinct plan (cuff depth, cloth, ticket, link all vary with i),
+// so nothing can answer a render from a cache of whole sheets: each one is laid out and written.
+const DEPTHS = ['1 1/4', '1 3/8', '1 1/2', '1 5/8', '1 3/4', '1 7/8', '2'];
+const sheet = (i: number) =>
   buildCutSheet(
     {
       shop: 'Hartley & Sons Alterations',
-      ticket,
+      ticket: String(1000 + i),
       garment: 'Navy wool flannel trousers',
       due: '2025-03-14',
       assignee: 'Sam Ortiz',
-      link: `https://cuffwright.example/garments/${ticket}`,
+      link: `https://cuffwright.example/garments/${1000 + i}`,
     },
-    [{ side: 'left', finish: 'cuff', input: { unit: 'in', precision: 8, cuffDepth: '1 1/2', available: 5 } }],
+    [{ side: 'left', finish: 'cuff', input: { unit: 'in', precision: 8, cuffDepth: DEPTHS[i % DEPTHS.length]!, available: `${5 + (i % 9) / 8}` } }],
   );
 
-const one = sheet('1042');
+const loadAtStart = loadavg()[0]!;
+const one = sheet(42);
 const [firstMs] = await time(() => renderCutSheet(one));
-// JIT and the shaping memo settle over the first dozen renders.
-for (let i = 0; i < 12; i++) await renderCutSheet(one);
+// "Warm" is a server that has printed for a while: V8's optimising compiler and the shaping memo
+// take a few dozen renders to settle (measured: CPU per sheet still falls after 20). Every
+// warm-up sheet is distinct too, and none of them is measured.
+for (let i = 0; i < WARM_UP; i++) await renderCutSheet(sheet(i));
 const warm: number[] = [];
+const warmCpu: number[] = [];
 let bytes = 0;
-const cpu = process.cpuUsage();
 for (let i = 0; i < WARM_RUNS; i++) {
-  const [ms, pdf] = await time(() => renderCutSheet(one));
+  const data = sheet(100 + i);
+  const cpu = process.cpuUsage();
+  const [ms, pdf] = await time(() => renderCutSheet(data));
+  const used = process.cpuUsage(cpu);
   warm.push(ms);
+  // CPU time of this process alone: what the render costs, whatever else the 2 cores are doing.
+  warmCpu.push((used.user + used.system) / 1000);
   bytes = pdf.byteLength;
 }
-const cpuUsed = process.cpuUsage(cpu);
-const warmCpuMs = (cpuUsed.user + cpuUsed.system) / 1000 / WARM_RUNS;
 const warmMs = median(warm);
+const warmCpuMs = median(warmCpu);
 
-const list = Array.from({ length: BATCH }, (_, i) => sheet(String(2000 + i)));
-const batches: number[] = [];
-for (let i = 0; i < 3; i++) batches.push((await time(() => renderCutSheets(list)))[0]);
-const batchMs = median(batches);
+const batches: { ms: number; cpuMs: number }[] = [];
+for (let b = 0; b < 3; b++) {
+  const list = Array.from({ length: BATCH }, (_, i) => sheet(2000 + b * BATCH + i));
+  const cpu = process.cpuUsage();
+  const [ms] = await time(() => renderCutSheets(list));
+  const used = process.cpuUsage(cpu);
+  batches.push({ ms, cpuMs: (used.user + used.system) / 1000 });
+}
+const batchMs = median(batches.map((b) => b.ms));
+const batchCpuMs = median(batches.map((b) => b.cpuMs));
 
 const browser = await chromium.launch({
   executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
@@ -88,15 +105,17 @@ const browserMs = median(browserRuns);
 const result = {
   date: new Date().toISOString(),
   node: process.version,
-  // Two cores shared with other work: a high load average inflates every wall time below.
-  loadAverage1m: round(loadavg()[0]!),
+  // Two cores shared with other work: a high load average inflates every wall time below; the
+  // CPU times are this process's own and hold whatever the load.
+  loadAverage1m: { atStart: round(loadAtStart), atEnd: round(loadavg()[0]!) },
   firstRenderMs: round(firstMs),
-  warmSingleMs: { median: round(warmMs), runs: WARM_RUNS, min: round(Math.min(...warm)), max: round(Math.max(...warm)), cpuMeanMs: round(warmCpuMs) },
+  warmSingleMs: { median: round(warmMs), runs: WARM_RUNS, min: round(Math.min(...warm)), max: round(Math.max(...warm)), cpuMedianMs: round(warmCpuMs), cpuMinMs: round(Math.min(...warmCpu)) },
   singleSheetBytes: bytes,
-  batch: { sheets: BATCH, totalMs: round(batchMs), perSheetMs: round(batchMs / BATCH), runs: batches.length },
+  batch: { sheets: BATCH, totalMs: round(batchMs), perSheetMs: round(batchMs / BATCH), cpuPerSheetMs: round(batchCpuMs / BATCH), runs: batches.length },
   chromiumPrint: { medianMs: round(browserMs), runs: BROWSER_RUNS },
   ratioChromiumOverReactPdf: round(browserMs / warmMs),
-  goals: { warmSingleAtMost40Ms: warmMs <= 40, atLeast10xFasterThanChromium: browserMs / warmMs >= 10 },
+  // The goals are judged on wall time, as asked; the CPU line says what an idle machine would see.
+  goals: { warmSingleAtMost40Ms: warmMs <= 40, atLeast10xFasterThanChromium: browserMs / warmMs >= 10, warmSingleCpuAtMost40Ms: warmCpuMs <= 40 },
 };
 console.log(JSON.stringify(result, null, 2));
 mkdirSync('bench-results', { recursive: true });
