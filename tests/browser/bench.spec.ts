@@ -49,7 +49,7 @@ describe('story 1: a tailor takes in a garment and plans both legs', () => {
     await page.getByRole('button', { name: 'Open ticket' }).click();
     await page.waitForURL(/\/tickets\/[0-9a-f-]{36}$/);
     await islandsReady(page);
-    expect(await page.getByTestId('ticket-number').textContent()).toMatch(/^T-\d{4}$/);
+    expect(await page.getByTestId('ticket-page-number').textContent()).toMatch(/^T-\d{4}$/);
     await page.getByText('Perpetua Lindqvist').first().waitFor();
     await page.screenshot({ path: 'test-results/ticket.png', fullPage: true });
 
@@ -95,14 +95,24 @@ describe('story 1: a tailor takes in a garment and plans both legs', () => {
     expect(await history.getByText('Teodor Vasko').count()).toBeGreaterThan(0);
     await page.screenshot({ path: 'test-results/garment-tailor.png', fullPage: true });
 
-    // After a reload both legs are as saved, and a change is one more history line.
+    // A length typed but not saved survives a reload, marked as unsaved.
+    await field(page, 'Old crease below the mark').fill('1 1/8');
+    page.once('dialog', (d) => void d.accept());
     await page.reload();
     await islandsReady(page);
+    await page.getByText('Lengths typed here before the page was reloaded are back, not yet saved.').waitFor();
+    await choose(page, 'Right leg');
+    expect(await field(page, 'Old crease below the mark').inputValue()).toBe('1 1/8');
+    await choose(page, 'Left leg');
+
+    // Both legs are otherwise as saved, and a change is one more history line.
     await expect.poll(() => field(page, 'Cuff depth').inputValue(), { timeout: 10_000 }).toBe('1 1/2');
     await expect.poll(() => cutText(page), { timeout: 10_000 }).toBe('4 1/2 in');
     await field(page, 'Cuff depth').fill('1 1/4');
     await page.getByRole('button', { name: /^Save measurements/ }).click();
     await page.getByTestId('history').getByText('Left leg, Cuff depth: 1 1/2 in → 1 1/4 in').waitFor();
+    await page.getByTestId('history').getByText('Right leg, Old crease below the mark: nothing → 1 1/8 in').waitFor();
+    expect(await page.getByText('not yet saved').count()).toBe(0);
     await page.context().close();
   });
 });

@@ -19,6 +19,7 @@ import {
 } from '@/lib/measurement-request';
 import { LegFields } from './LegFields';
 import { LegPlan } from './LegPlan';
+import { keepDraft, readDraft } from './use-draft';
 
 interface Props {
   garmentId: string;
@@ -49,12 +50,25 @@ export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
   const [leg, setLeg] = useState<Leg>('left');
   const current = useDebounced(values.legs[leg], 250);
   const other: Leg = leg === 'left' ? 'right' : 'left';
+  const draftKey = `cuffwright:fitting-draft:${garmentId}`;
+  const [restored, setRestored] = useState(false);
+
+  // Lengths typed before a reload come back, marked unsaved, until saved or discarded.
+  useEffect(() => {
+    const draft = readDraft<MeasurementsInput>(draftKey);
+    if (draft) {
+      reset(draft, { keepDefaultValues: true });
+      setRestored(true);
+    }
+  }, [draftKey, reset]);
+  useEffect(() => keepDraft(draftKey, values, formState.isDirty), [draftKey, values, formState.isDirty]);
 
   const save = useMutation({
     mutationFn: (body: Measurements) => fetchJson<FittingView>(`/api/garments/${garmentId}/measurements`, { method: 'PUT', body }),
     onSuccess: (saved) => {
       client.setQueryData(['fitting', garmentId], saved);
       reset(formValues(saved, unit));
+      setRestored(false);
     },
     onError: (e) => {
       if (!(e instanceof ApiError)) return;
@@ -122,6 +136,21 @@ export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
           Same as the {other} leg
         </button>
         <div className="flex flex-col gap-2 border-t-2 border-rule pt-3">
+          {restored && formState.isDirty && (
+            <div role="status" className="flex flex-col gap-2 rounded border-2 border-warn bg-warn-soft px-3 py-2 font-semibold text-warn">
+              <p>Lengths typed here before the page was reloaded are back, not yet saved.</p>
+              <button
+                type="button"
+                onClick={() => {
+                  reset(formValues(fitting, unit));
+                  setRestored(false);
+                }}
+                className="min-h-11 self-start rounded border-2 border-warn bg-card px-3"
+              >
+                Discard them
+              </button>
+            </div>
+          )}
           {save.error && (
             <p role="alert" className="rounded border-2 border-cut bg-cut-soft px-3 py-2 font-semibold text-cut">
               Not saved: {save.error.message} Everything you typed is still here.

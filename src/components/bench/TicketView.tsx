@@ -79,7 +79,7 @@ function Ticket({ ticketId, canAdvance, canPickup, canAddGarment, canEditCustome
     <div className="flex flex-col gap-6">
       <header className="flex flex-col gap-2">
         <h1 className="text-4xl font-extrabold">
-          Ticket <span data-testid="ticket-number">{ticketLabel(t.number)}</span>
+          Ticket <span data-testid="ticket-page-number">{ticketLabel(t.number)}</span>
         </h1>
         <p className="text-2xl">
           Stands at <strong>{label(t.status)}</strong>
