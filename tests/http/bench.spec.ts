@@ -46,6 +46,41 @@ describe('intake', () => {
   });
 });
 
+describe('garments on a ticket', () => {
+  it('are added with a description, or refused with the field named', async () => {
+    const t = await intake({ garments: [{ description: 'First pair' }] });
+    const blank = await call('POST', `/api/tickets/${t.body.id}/garments`, { cookie: cookie.counter, body: { description: '' } });
+    expect(blank.status).toBe(422);
+    expect(blank.body.issues.description).toMatch(/Describe the garment/);
+    const added = await call('POST', `/api/tickets/${t.body.id}/garments`, { cookie: cookie.counter, body: { description: 'Second pair', assigneeId: '' } });
+    expect(added.status).toBe(201);
+    expect(added.body).toMatchObject({ description: 'Second pair', status: 'received', assigneeId: null, position: 1 });
+  });
+
+  it('can be given only to someone listed among the assignees', async () => {
+    const people = await call('GET', '/api/assignees', { cookie: cookie.counter });
+    // Other test files may have added people to the demo shop: check the four demo ones, by name.
+    const names: string[] = people.body.map((p: { name: string }) => p.name);
+    expect(names).toEqual(expect.arrayContaining(['Ada Penhallow', 'Mina Okoro', 'Rosa Quill', 'Teodor Vasko']));
+    expect(names).toEqual([...names].sort((x, y) => (x < y ? -1 : x > y ? 1 : 0)));
+    const t = await intake({ garments: [{ description: 'Given' }] });
+    const stranger = await call('POST', `/api/tickets/${t.body.id}/garments`, { cookie: cookie.counter, body: { description: 'x', assigneeId: 'nobody-here' } });
+    expect(stranger.status).toBe(422);
+  });
+});
+
+describe('ticket moves', () => {
+  it('answer 422 for a status that is not a step, and for skipping one', async () => {
+    const t = await intake({ garments: [{ description: 'Skipper' }] });
+    const odd = await call('PATCH', `/api/tickets/${t.body.id}`, { cookie: cookie.tailor, body: { status: 'queued' } });
+    expect(odd.status).toBe(422);
+    expect(odd.body.issues.status).toBe('Choose one of the bench steps.');
+    const skip = await call('PATCH', `/api/tickets/${t.body.id}`, { cookie: cookie.tailor, body: { status: 'cut' } });
+    expect(skip.status).toBe(422);
+    expect(skip.body.error).toMatch(/can only move on to Chalk-marked/);
+  });
+});
+
 describe('garment steps', () => {
   it('move one step at a time, the ticket following its least advanced garment', async () => {
     const t = await intake({ garments: [{ description: 'One' }, { description: 'Two' }] });
