@@ -1,6 +1,7 @@
 // The demo shop's bench: tickets with garments at every step and fitting measurements per leg.
 // Every garment, length and note here is invented for the demo.
 import { db } from '@/db';
+import { auditMany } from './audit';
 import { garments, measurements, tickets } from '@/db/schema';
 import { parseLength } from '@/lib/allowance';
 import { leastAdvanced, type GarmentStep } from '@/lib/garment-steps';
@@ -61,10 +62,12 @@ const TICKETS: DemoTicket[] = [
   { customer: 1, note: 'Linen trousers: taken up ¾ in.', garments: [{ description: 'Linen trousers', status: 'collected', dueIn: -5 }] },
 ];
 
+/** A date this many days from today, in local time (as the queue reads due dates). */
 function day(offset: number): string {
   const d = new Date();
   d.setDate(d.getDate() + offset);
-  return d.toISOString().slice(0, 10);
+  const pad = (n: number) => String(n).padStart(2, '0');
+  return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`;
 }
 
 function read(lengths: Lengths): Partial<Record<LegLength, SavedLength>> {
@@ -89,6 +92,17 @@ export async function seedBenchDemo(shopId: string, customerIds: string[], peopl
       const legs = { left: g.fitting.left, right: g.fitting.right ?? g.fitting.left };
       for (const leg of ['left', 'right'] as const) {
         await db.insert(measurements).values({ shopId, garmentId: row!.id, leg, unit: 'in', finish: g.fitting.finish, values: read(legs[leg]), takenById: people.tailor });
+        // The fitting's history, as if typed in at the fitting.
+        const typed = [['finish', g.fitting.finish], ...Object.entries(legs[leg])];
+        await auditMany(
+          typed.map(([field, value]) => ({
+            shopId,
+            actorId: people.tailor ?? null,
+            action: 'measurement.changed',
+            subject: row!.id,
+            detail: { leg, field, old: null, new: value, unit: 'in' },
+          })),
+        );
       }
     }
   }
