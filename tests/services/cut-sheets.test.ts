@@ -37,7 +37,7 @@ beforeAll(async () => {
 afterAll(() => handle.close());
 
 async function garment(shop = a, extra: { description?: string; dueOn?: string; assigneeId?: string | null } = {}) {
-  const t = await createTicket(shop.counter, { customer: { name: 'Ada Lovelace' }, garments: [{ description: extra.description ?? 'Navy suit trousers', dueOn: extra.dueOn, assigneeId: extra.assigneeId ?? null }] });
+  const t = await createTicket(shop.counter, { customer: { name: 'Wren Halloway' }, garments: [{ description: extra.description ?? 'Navy suit trousers', dueOn: extra.dueOn, assigneeId: extra.assigneeId ?? null }] });
   return { ticket: t, g: (await garmentsOfTicket(shop.shopId, t.id))[0]! };
 }
 
@@ -120,7 +120,7 @@ describe('one garment with a 1 1/2 in cuff and 5 in of cloth, fitted in inches',
     const text = flatText((await sheetOf(a.tailor, id)).path);
     expect(text).toContain('Sheet Shop A');
     expect(text).toContain(`Ticket T-${number}`);
-    expect(text).toContain('Navy suit trousers (Ada Lovelace)');
+    expect(text).toContain('Navy suit trousers (Wren Halloway)');
     expect(text).toMatch(/Due [^·]*4[^·]*Dec/);
     expect(text).toContain('For tailor of Sheet Shop A');
   });
