@@ -204,6 +204,15 @@ describe('a tapered leg at the bench', () => {
     await page.getByText('a cuff is hemmed level').waitFor();
     expect(await field(page, 'Width at the finished edge (flat)').inputValue()).toBe('8');
     await page.screenshot({ path: 'test-results/garment-taper.png', fullPage: true });
+
+    // A house preset fills the cuff in one tap, and its name is kept with the leg and in the history.
+    const fitting = page.getByRole('form', { name: 'Fitting measurements' });
+    await fitting.getByText('Presets for the left leg').click();
+    await fitting.getByRole('button', { name: /^Classic cuff/ }).click();
+    await fitting.getByText('From the preset').waitFor();
+    expect(await fitting.locator('strong', { hasText: 'Classic cuff' }).count()).toBe(1);
+    await fitting.getByRole('button', { name: /^Save measurements/ }).click();
+    await page.getByTestId('history').getByText('Left leg, Preset: nothing → Classic cuff').waitFor();
     await page.context().close();
   });
 });

@@ -7,6 +7,7 @@ import { useDebounced } from '@/components/calculator/use-debounced';
 import { PresetPicker, type PresetSettings } from '@/components/presets/PresetPicker';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import type { FittingView } from '@/lib/bench-types';
+import type { PresetView } from '@/lib/preset-settings';
 import { ApiError, fetchJson } from '@/lib/fetch-json';
 import {
   LEGS,
@@ -93,6 +94,10 @@ export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
 
   const applyPreset = (p: PresetSettings) => {
     const u = values.unit;
+    // The picker hands over the settings of one listed preset: its name is recorded with the leg.
+    const listed = client.getQueryData<PresetView[]>(['presets']) ?? [];
+    const name = listed.find((x) => x.settings === p || JSON.stringify(x.settings) === JSON.stringify(p))?.name ?? '';
+    setValue(`legs.${leg}.preset`, name, { shouldDirty: true });
     const finish = p.finish === 'cuff' ? 'cuff' : p.slope ? 'slope' : 'plain';
     setValue(`legs.${leg}.finish`, finish, { shouldDirty: true });
     for (const f of ['cuffDepth', 'hemSection', 'turnUnder', 'hemAllowance', 'slope'] as const) {
@@ -123,6 +128,16 @@ export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
             <PresetPicker unit={values.unit} onApply={applyPreset} />
           </div>
         </details>
+        {values.legs[leg].preset && (
+          <p className="flex flex-wrap items-center gap-3 text-lg">
+            <span>
+              From the preset <strong>{values.legs[leg].preset}</strong>
+            </span>
+            <button type="button" onClick={() => setValue(`legs.${leg}.preset`, '', { shouldDirty: true })} className="min-h-11 rounded border-2 border-ink px-3 text-base font-semibold">
+              Not from a preset
+            </button>
+          </p>
+        )}
         <LegFields
           key={leg}
           leg={leg}

@@ -40,6 +40,14 @@ export function FittingReadOnly({ fitting, precision, unit }: Props) {
                 <td key={l} className="py-2 pr-2 text-xl font-bold">{byLeg.get(l) ? FINISH_LABELS[byLeg.get(l)!.finish] : '—'}</td>
               ))}
             </tr>
+            {LEGS.some((l) => byLeg.get(l)?.preset) && (
+              <tr className="border-b border-rule">
+                <th scope="row" className="py-2 pr-2 font-semibold">Preset</th>
+                {LEGS.map((l) => (
+                  <td key={l} className="py-2 pr-2 text-lg font-semibold">{byLeg.get(l)?.preset ?? '—'}</td>
+                ))}
+              </tr>
+            )}
             {taken.map((f) => (
               <tr key={f} className="border-b border-rule">
                 <th scope="row" className="py-2 pr-2 font-semibold">{LEG_LENGTH_LABELS[f]}</th>
