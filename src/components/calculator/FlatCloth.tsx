@@ -1,4 +1,4 @@
-import type { Unit } from '@/lib/allowance/types';
+import { Hatch } from './Hatch';
 
 /** A stretch of the flat cloth between two depths below the mark, named for what it becomes. */
 export interface Band {
@@ -96,28 +96,7 @@ export function FlatCloth({ lines, rawMm, aboveMm, s, yMark, x, width, bands = [
   );
 }
 
-/** A scale bar of one inch or two centimetres, so the drawing can be read as drawn to scale. */
-export function ScaleBar({ unit, s, x, y }: { unit: Unit; s: number; x: number; y: number }) {
-  const mm = unit === 'in' ? 25.4 : 20;
-  const label = unit === 'in' ? '1 in' : unit === 'cm' ? '2 cm' : '20 mm';
-  return (
-    <g>
-      <line x1={x} x2={x + mm * s} y1={y} y2={y} className="stroke-ink" strokeWidth={2} />
-      <line x1={x} x2={x} y1={y - 5} y2={y + 5} className="stroke-ink" strokeWidth={2} />
-      <line x1={x + mm * s} x2={x + mm * s} y1={y - 5} y2={y + 5} className="stroke-ink" strokeWidth={2} />
-      <text x={x + mm * s + 8} y={y + 5} className="fill-muted text-[13px]">{label} · drawn to scale</text>
-    </g>
-  );
-}
-
 /** The hatch pattern for cloth that is missing. */
 export function ShortHatch() {
-  return (
-    <defs>
-      <pattern id="short-hatch" width="8" height="8" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
-        <rect width="8" height="8" className="fill-cut-soft" />
-        <line x1="0" y1="0" x2="0" y2="8" className="stroke-cut" strokeWidth="2" />
-      </pattern>
-    </defs>
-  );
+  return <Hatch id="short-hatch" size={8} ground="fill-cut-soft" stroke="stroke-cut" strokeWidth={2} />;
 }

@@ -1,4 +1,5 @@
 import type { TaperPlan } from '@/lib/allowance/types';
+import { Hatch } from './Hatch';
 import { seamWork } from './line-names';
 
 const W = 640;
@@ -23,12 +24,7 @@ export function TaperDrawing({ taper }: { taper: TaperPlan }) {
         <title id="taper-title">
           {`The leg flat, drawn to scale: keep ${taper.targetWidth.text} from the cuff top straight down to the cut; the shaded strips are let out.`}
         </title>
-        <defs>
-          <pattern id="let-out" width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
-            <rect width="6" height="6" className="fill-accent-soft" />
-            <line x1="0" y1="0" x2="0" y2="6" className="stroke-accent" strokeWidth="1.5" />
-          </pattern>
-        </defs>
+        <Hatch id="let-out" size={6} ground="fill-accent-soft" stroke="stroke-accent" strokeWidth={1.5} />
         {([1, -1] as const).map((sign) => (
           <polygon key={sign} points={[...side(sign), ...straight(sign)].join(' ')} fill="url(#let-out)" className="stroke-none" />
         ))}

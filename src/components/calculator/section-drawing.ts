@@ -1,0 +1,32 @@
+import type { CuffLine, HemLine } from '@/lib/allowance/types';
+import type { FlatLine } from './FlatCloth';
+import { LINE_NAMES } from './line-names';
+
+/** Width of the flat-and-section drawings, in px. */
+export const DRAWING_WIDTH = 720;
+/** Where the leg runs down in the section view, in px from the left. */
+export const SECTION_X = 510;
+/** Gap between layers in the section, in px: cloth thickness is not to scale. */
+export const LAYER_GAP = 9;
+
+/** A drawing's vertical scale: px per mm, the pin mark's height, the whole height, and mm above the mark to px. */
+export interface SectionScale {
+  s: number;
+  yMark: number;
+  H: number;
+  up: (mm: number) => number;
+}
+
+/** Fits the cloth from aboveMm over the mark down past the cut or raw edge into room px, at most 4 px per mm. */
+export function sectionScale(aboveMm: number, cutMm: number, rawMm: number | null, room: number): SectionScale {
+  const belowMm = Math.max(cutMm, rawMm ?? 0) + 12;
+  const s = Math.min(4, room / (aboveMm + belowMm));
+  const yMark = 34 + aboveMm * s;
+  const H = yMark + belowMm * s + 52;
+  return { s, yMark, H, up: (mm) => yMark - mm * s };
+}
+
+/** A plan's chalk lines as the flat cloth draws them. */
+export function flatLines(lines: (CuffLine | HemLine)[]): FlatLine[] {
+  return lines.map((l) => ({ n: l.n, label: LINE_NAMES[l.name], mm: l.belowMark.mm, text: l.belowMark.text, cut: l.name === 'cut' }));
+}
