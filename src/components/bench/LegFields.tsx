@@ -1,7 +1,7 @@
 import type { UseFormRegister } from 'react-hook-form';
+import { LengthInput } from '@/components/LengthInput';
 import { Segmented } from '@/components/calculator/Segmented';
 import { FINISH_LABELS, FINISHES, LEG_LENGTH_LABELS, type Finish, type Leg, type LegLength, type MeasurementsInput } from '@/lib/measurement-request';
-import { LengthInput } from './LengthInput';
 
 interface Props {
   leg: Leg;
@@ -64,6 +64,7 @@ export function LegFields({ leg, finish, unit, register, onFinish, errorFor }: P
             {g.fields.map((f) => (
               <LengthInput
                 key={f}
+                id={`m-legs-${leg}-${f}`}
                 label={LEG_LENGTH_LABELS[f]}
                 unit={unit}
                 registration={register(`legs.${leg}.${f}`)}

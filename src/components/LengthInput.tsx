@@ -2,16 +2,18 @@ import type { ReactNode } from 'react';
 import type { UseFormRegisterReturn } from 'react-hook-form';
 
 interface Props {
+  id: string;
   label: string;
   unit: string;
   registration: UseFormRegisterReturn;
   hint?: ReactNode;
   error?: string;
+  /** shown between the input and its hint, e.g. quick picks */
+  children?: ReactNode;
 }
 
 /** One labelled length as typed ("1 1/2", "38 mm"), the unit beside it, hint and error tied to it. */
-export function LengthInput({ label, unit, registration, hint, error }: Props) {
-  const id = `m-${registration.name.replace(/\./g, '-')}`;
+export function LengthInput({ id, label, unit, registration, hint, error, children }: Props) {
   const describedBy = [hint ? `${id}-hint` : '', error ? `${id}-error` : ''].filter(Boolean).join(' ') || undefined;
   return (
     <div className="flex flex-col gap-1">
@@ -22,6 +24,7 @@ export function LengthInput({ label, unit, registration, hint, error }: Props) {
         <input
           id={id}
           type="text"
+          inputMode="text"
           autoComplete="off"
           spellCheck={false}
           enterKeyHint="next"
@@ -34,6 +37,7 @@ export function LengthInput({ label, unit, registration, hint, error }: Props) {
           {unit}
         </span>
       </div>
+      {children}
       {hint && (
         <p id={`${id}-hint`} className="text-sm text-muted">
           {hint}
