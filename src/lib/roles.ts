@@ -12,7 +12,10 @@ export const statements = {
   ac: ['create', 'read', 'update', 'delete'],
   staff: ['read', 'invite', 'change-role', 'remove'],
   settings: ['update'],
-  prices: ['read', 'update'],
+  // update: the price list; adjust: a ticket's price lines, with a reason.
+  prices: ['read', 'update', 'adjust'],
+  // Deposits, balances and online pay links, taken at the counter.
+  payments: ['take'],
   presets: ['read', 'create-own', 'manage-house'],
   // Fitting photos of a garment: every member sees them; the bench takes and removes them.
   photos: ['read', 'upload', 'delete'],
@@ -38,7 +41,8 @@ export const grants = {
     invitation: ['create', 'cancel'],
     staff: ['read', 'invite', 'change-role', 'remove'],
     settings: ['update'],
-    prices: ['read', 'update'],
+    prices: ['read', 'update', 'adjust'],
+    payments: ['take'],
     presets: ['read', 'create-own', 'manage-house'],
     photos: ['read', 'upload', 'delete'],
     customers: ['read', 'create', 'update'],
@@ -69,7 +73,8 @@ export const grants = {
     cutsheets: ['print'],
   },
   counter: {
-    prices: ['read'],
+    prices: ['read', 'adjust'],
+    payments: ['take'],
     photos: ['read'],
     customers: ['read', 'create', 'update'],
     tickets: ['read', 'read-all', 'create', 'pickup'],

@@ -27,7 +27,7 @@ function Panel({ ticketId, role: given, withTicketHeader = true }: Props) {
   if (summary.isPending || !role) return <p role="status">Loading the ticket's money…</p>;
   if (summary.error) return <FormMessage kind="error">{summary.error.message}</FormMessage>;
   const s = summary.data;
-  const counterWork = can(role, ['tickets', 'pickup']);
+  const canPickup = can(role, ['tickets', 'pickup']);
   const collected = s.ticket.status === 'collected';
   return (
     <div className="flex flex-col gap-4">
@@ -41,8 +41,8 @@ function Panel({ ticketId, role: given, withTicketHeader = true }: Props) {
         </p>
         {s.ticket.dueOn && <p className="text-xl">Due {s.ticket.dueOn}</p>}
       </div>
-      <PriceLinesCard s={s} canChange={counterWork && !collected && !s.payments.some((p) => p.purpose === 'balance')} />
-      <PaymentsCard s={s} canTake={counterWork} />
+      <PriceLinesCard s={s} canChange={can(role, ['prices', 'adjust']) && !collected && !s.payments.some((p) => p.purpose === 'balance')} />
+      <PaymentsCard s={s} canTake={can(role, ['payments', 'take'])} />
       <NoticesCard s={s} canSend={can(role, ['notices', 'send'])} />
       <section aria-labelledby="hand-h" className="rounded border-2 border-rule bg-card p-4">
         <h2 id="hand-h" className="text-xl font-extrabold">
@@ -57,7 +57,7 @@ function Panel({ ticketId, role: given, withTicketHeader = true }: Props) {
           >
             Print the claim slip (PDF)
           </a>
-          {counterWork && !collected && (
+          {canPickup && !collected && (
             <button
               type="button"
               onClick={() => handOver.mutate(undefined)}

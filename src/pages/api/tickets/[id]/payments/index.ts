@@ -15,7 +15,7 @@ export const GET: APIRoute = async ({ locals, params }) => {
 
 /** Takes a deposit or the balance in cash or by card. */
 export const POST: APIRoute = async ({ locals, request, params }) => {
-  const actor = guard(locals, ['tickets', 'pickup']);
+  const actor = guard(locals, ['payments', 'take']);
   if (actor instanceof Response) return actor;
   const input = await readBody(request, paymentInput);
   if (input instanceof Response) return input;

@@ -7,7 +7,7 @@ export const prerender = false;
 
 /** Makes (or reuses) the link; the summary carries its address. */
 export const POST: APIRoute = async ({ locals, params, url }) => {
-  const actor = guard(locals, ['tickets', 'pickup']);
+  const actor = guard(locals, ['payments', 'take']);
   if (actor instanceof Response) return actor;
   return run(() => createPaymentLink(actor, params.id ?? '', url.origin), 201);
 };

@@ -8,7 +8,7 @@ export const prerender = false;
 
 /** Replaces the worked-out lines; hand-added lines and adjustments stay. */
 export const POST: APIRoute = async ({ locals, request, params }) => {
-  const actor = guard(locals, ['tickets', 'pickup']);
+  const actor = guard(locals, ['prices', 'adjust']);
   if (actor instanceof Response) return actor;
   const input = await readBody(request, autoLinesInput);
   if (input instanceof Response) return input;

@@ -15,7 +15,7 @@ export const GET: APIRoute = async ({ locals, params }) => {
 
 /** Adds a line (the counter's money work is guarded by the pickup permission). */
 export const POST: APIRoute = async ({ locals, request, params }) => {
-  const actor = guard(locals, ['tickets', 'pickup']);
+  const actor = guard(locals, ['prices', 'adjust']);
   if (actor instanceof Response) return actor;
   const input = await readBody(request, lineInput);
   if (input instanceof Response) return input;
