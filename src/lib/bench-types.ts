@@ -16,19 +16,6 @@ export interface BenchSettings {
   stepLabels: Partial<Record<GarmentStep, string>>;
 }
 
-/** One garment in the queue. */
-export interface QueueRow {
-  id: string;
-  description: string;
-  status: GarmentStep;
-  dueOn: string | null;
-  assigneeId: string | null;
-  assigneeName: string | null;
-  ticketId: string;
-  ticketNumber: number;
-  customerName: string | null;
-}
-
 /** A garment as listed on its ticket. */
 export interface GarmentSummary {
   id: string;
@@ -37,6 +24,13 @@ export interface GarmentSummary {
   dueOn: string | null;
   assigneeId: string | null;
   assigneeName: string | null;
+}
+
+/** One garment in the queue, with its ticket and customer named. */
+export interface QueueRow extends GarmentSummary {
+  ticketId: string;
+  ticketNumber: number;
+  customerName: string | null;
 }
 
 /** The customer as a ticket or garment shows them. */
