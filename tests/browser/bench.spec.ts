@@ -5,7 +5,8 @@
 import { mkdirSync } from 'node:fs';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launch, tabletPage } from './browser';
+import { launch, ready, tabletPage } from './browser';
+import { signInAs } from './sign-in';
 
 let browser: Browser;
 
@@ -17,20 +18,6 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function islandsReady(page: Page) {
-  await page.waitForSelector('astro-island:not([ssr])');
-}
-
-async function signIn(page: Page, email: string, next: string) {
-  await page.goto(`/sign-in?next=${encodeURIComponent(next)}`);
-  await islandsReady(page);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill('cuffwright-demo');
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`**${next}`);
-  await islandsReady(page);
-}
-
 const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
 const cutText = (page: Page) => page.getByTestId('cut-line').textContent({ timeout: 5_000 }).catch(() => null);
 // Segmented switches hide the radio itself: tap its label, as a finger would.
@@ -39,7 +26,7 @@ const choose = (page: Page, name: string) => page.locator('label', { has: page.g
 describe('story 1: a tailor takes in a garment and plans both legs', () => {
   it('opens a ticket, enters each leg, reads the cutting line, and keeps a mistyped length to fix', async () => {
     const page = await tabletPage(browser);
-    await signIn(page, 'tailor@pinmark.test', '/tickets/new');
+    await signInAs(page, 'tailor', '/tickets/new');
 
     await page.getByRole('radio', { name: 'A new customer' }).check();
     await field(page, 'Name').fill('Perpetua Lindqvist');
@@ -48,14 +35,14 @@ describe('story 1: a tailor takes in a garment and plans both legs', () => {
     await page.screenshot({ path: 'test-results/intake.png', fullPage: true });
     await page.getByRole('button', { name: 'Open ticket' }).click();
     await page.waitForURL(/\/tickets\/[0-9a-f-]{36}$/);
-    await islandsReady(page);
+    await ready(page);
     expect(await page.getByTestId('ticket-page-number').textContent()).toMatch(/^T-\d{4}$/);
     await page.getByText('Perpetua Lindqvist').first().waitFor();
     await page.screenshot({ path: 'test-results/ticket.png', fullPage: true });
 
     await page.getByRole('link', { name: 'Olive moleskin trousers, cuffs' }).click();
     await page.waitForURL(/\/garments\/[0-9a-f-]{36}$/);
-    await islandsReady(page);
+    await ready(page);
     await page.getByTestId('garment-step').getByText('Received').waitFor();
 
     // Left leg: a 1 1/2 in cuff cuts at three depths, 4 1/2 in below the mark
@@ -99,7 +86,7 @@ describe('story 1: a tailor takes in a garment and plans both legs', () => {
     await field(page, 'Old crease below the mark').fill('1 1/8');
     page.once('dialog', (d) => void d.accept());
     await page.reload();
-    await islandsReady(page);
+    await ready(page);
     await page.getByText('Lengths typed here before the page was reloaded are back, not yet saved.').waitFor();
     await choose(page, 'Right leg');
     expect(await field(page, 'Old crease below the mark').inputValue()).toBe('1 1/8');
@@ -120,7 +107,7 @@ describe('story 1: a tailor takes in a garment and plans both legs', () => {
 describe('story 3: an apprentice works the queue', () => {
   it('finds the garment, moves it on with one tap, and reads its measurements without changing them', async () => {
     const page = await tabletPage(browser);
-    await signIn(page, 'apprentice@pinmark.test', '/queue');
+    await signInAs(page, 'apprentice', '/queue');
     await page.getByTestId('queue-row').first().waitFor();
     // Only their own and unassigned work: the tailor's charcoal trousers are not listed.
     expect(await page.getByText('Charcoal wool trousers').count()).toBe(0);
@@ -140,7 +127,7 @@ describe('story 3: an apprentice works the queue', () => {
 
     await row.getByRole('link', { name: 'Navy suit trousers' }).click();
     await page.waitForURL(/\/garments\/[0-9a-f-]{36}$/);
-    await islandsReady(page);
+    await ready(page);
     await page.getByTestId('garment-step').getByText('Turned and stitched').waitFor();
     await page.getByRole('heading', { name: 'Fitting measurements' }).waitFor();
     // Read-only: the lengths are shown, there is nothing to type into or save.
@@ -169,7 +156,7 @@ describe('story 3: an apprentice works the queue', () => {
 describe('the queue for the lead', () => {
   it('filters to overdue work, sorts by ticket, and marks every overdue row in words', async () => {
     const page = await tabletPage(browser);
-    await signIn(page, 'lead@pinmark.test', '/queue');
+    await signInAs(page, 'lead', '/queue');
     await page.getByTestId('queue-row').first().waitFor();
     const all = await page.getByTestId('queue-row').count();
     await page.getByLabel('Due', { exact: true }).selectOption('overdue');
@@ -193,11 +180,11 @@ describe('the queue for the lead', () => {
 describe('a tapered leg at the bench', () => {
   it('shows the taper check and the front-pin note from the saved fitting', async () => {
     const page = await tabletPage(browser);
-    await signIn(page, 'tailor@pinmark.test', '/queue');
+    await signInAs(page, 'tailor', '/queue');
     await page.getByLabel('Customer or ticket').fill('T-1004');
     await page.getByRole('link', { name: 'Charcoal wool trousers' }).click();
     await page.waitForURL(/\/garments\/[0-9a-f-]{36}$/);
-    await islandsReady(page);
+    await ready(page);
     // Demo fitting: 1 3/4 in cuff, 5 1/4 in of cloth → cut 5 1/4 in (TRADE.md: three cuff depths).
     await expect.poll(() => cutText(page), { timeout: 10_000 }).toBe('5 1/4 in');
     await page.getByRole('heading', { name: 'Tapered leg' }).waitFor();

@@ -21,3 +21,8 @@ export async function tabletPage(browser: Browser): Promise<Page> {
   });
   return context.newPage();
 }
+
+/** Waits until the page's islands are live: Astro drops their ssr marker (the element itself has no box). */
+export async function ready(page: Page): Promise<void> {
+  await page.waitForSelector('astro-island:not([ssr])', { state: 'attached', timeout: 15_000 });
+}

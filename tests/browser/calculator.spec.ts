@@ -3,7 +3,7 @@
 import { mkdirSync } from 'node:fs';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { launch, tabletPage } from './browser';
+import { launch, ready, tabletPage } from './browser';
 
 let browser: Browser;
 let page: Page;
@@ -17,8 +17,7 @@ beforeAll(async () => {
     if (!r.url().startsWith(origin) && !r.url().startsWith('data:')) offsite.push(r.url());
   });
   await page.goto('/');
-  // The island is live once Astro drops the ssr marker.
-  await page.waitForSelector('astro-island:not([ssr])');
+  await ready(page);
 });
 
 afterAll(async () => {
@@ -80,7 +79,7 @@ describe('the hem and cuff calculator', () => {
 
   it('reaches the finish switch with the keyboard alone and changes it to a plain hem', async () => {
     await page.goto('/');
-    await page.waitForSelector('astro-island:not([ssr])');
+    await ready(page);
     let reached = false;
     for (let i = 0; i < 20 && !reached; i++) {
       await page.keyboard.press('Tab');

@@ -6,31 +6,18 @@
 // Intake and the apprentice's moves go through the bench API (the intake and queue pages are not
 // on main yet); everything at the counter is done on screen.
 import { mkdirSync } from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { call, DEMO, DEMO_PASSWORD, freshEmail, signIn } from '../http/client';
+import { call, DEMO, freshEmail, signIn } from '../http/client';
 import { firstLink, waitForMail } from '../http/mail';
-import { launch, tabletPage } from './browser';
+import { launch, ready, tabletPage } from './browser';
+import { signInAs } from './sign-in';
 
 let browser: Browser;
 const customerEmail = freshEmail('perrin');
 let ticketId = '';
 let garmentId = '';
 let payLink = '';
-
-async function ready(page: Page) {
-  await page.waitForSelector('astro-island:not([ssr])', { state: 'attached', timeout: 15_000 });
-}
-
-async function signInAs(page: Page, email: string, next: string) {
-  await page.goto(`/sign-in?next=${encodeURIComponent(next)}`);
-  await ready(page);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`**${next}`);
-  await ready(page);
-}
 
 beforeAll(async () => {
   browser = await launch();
@@ -46,7 +33,7 @@ afterAll(async () => {
 describe('a ticket across the counter, from deposit to a paid pickup', () => {
   it('the lead has the ready notice sent by itself', async () => {
     const page = await tabletPage(browser);
-    await signInAs(page, DEMO.lead, '/prices');
+    await signInAs(page, 'lead', '/prices');
     // Prices are typed and shown as money, held as cents (demo list: plain hem €16.50).
     await expect(page.getByLabel('Line 1: price (EUR)').inputValue()).resolves.toBe('16.50');
     await page.getByLabel('Send the ready notice by itself when every garment of a ticket is ready').check();
@@ -70,7 +57,7 @@ describe('a ticket across the counter, from deposit to a paid pickup', () => {
     expect(fitted.status).toBe(200);
 
     const page = await tabletPage(browser);
-    await signInAs(page, DEMO.counter, `/counter/${ticketId}`);
+    await signInAs(page, 'counter', `/counter/${ticketId}`);
     await page.getByRole('button', { name: 'Price from the garments' }).click();
     await page.getByText('Cuff from a plain hem — Charcoal flannel').waitFor();
     // The plan needs a let-out, so its line came by itself (demo list: €24.00 + €11.00).
@@ -123,7 +110,7 @@ describe('a ticket across the counter, from deposit to a paid pickup', () => {
 
   it('the counter hands over a collected, paid ticket', async () => {
     const page = await tabletPage(browser);
-    await signInAs(page, DEMO.counter, `/counter/${ticketId}`);
+    await signInAs(page, 'counter', `/counter/${ticketId}`);
     await expect(page.getByTestId('balance-due').textContent()).resolves.toBe('€0.00');
     await page.getByText('Paid in full.').waitFor();
     await page.getByText(/Balance, online:/).waitFor();

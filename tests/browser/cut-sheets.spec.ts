@@ -1,8 +1,9 @@
 // Printing at the bench: a tailor prints a garment's cut sheet in millimetres from its page, and an
 // apprentice prints the morning's sheets from the queue as filtered; each opens a PDF in a new tab.
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { Browser, BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launch, tabletPage } from './browser';
+import { launch, ready, tabletPage } from './browser';
+import { signInAs } from './sign-in';
 
 let browser: Browser;
 
@@ -12,16 +13,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await browser?.close();
 });
-
-async function signIn(page: Page, email: string, next: string) {
-  await page.goto(`/sign-in?next=${encodeURIComponent(next)}`);
-  await page.waitForSelector('astro-island:not([ssr])');
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill('cuffwright-demo');
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`**${next}`);
-  await page.waitForSelector('astro-island:not([ssr])');
-}
 
 /** Clicks a link that opens in a new tab and answers the response that tab received. */
 async function opensPdf(context: BrowserContext, click: () => Promise<void>, path: RegExp) {
@@ -34,10 +25,10 @@ async function opensPdf(context: BrowserContext, click: () => Promise<void>, pat
 describe('printing cut sheets', () => {
   it('a tailor prints a garment’s sheet in millimetres from the garment page', async () => {
     const page = await tabletPage(browser);
-    await signIn(page, 'tailor@pinmark.test', '/queue');
+    await signInAs(page, 'tailor', '/queue');
     await page.getByRole('link', { name: 'Navy suit trousers' }).first().click();
     await page.waitForURL(/\/garments\/[0-9a-f-]{36}$/);
-    await page.waitForSelector('astro-island:not([ssr])');
+    await ready(page);
     await page.getByLabel('Sheet in').selectOption('mm');
     const r = await opensPdf(page.context(), () => page.getByRole('link', { name: 'Print cut sheet' }).click(), /\/api\/garments\/[^/]+\/sheet$/);
     expect(r.status).toBe(200);
@@ -48,7 +39,7 @@ describe('printing cut sheets', () => {
 
   it('an apprentice prints the morning’s sheets of the queue as filtered', async () => {
     const page = await tabletPage(browser);
-    await signIn(page, 'apprentice@pinmark.test', '/queue');
+    await signInAs(page, 'apprentice', '/queue');
     await page.getByLabel('Due').selectOption('today');
     const r = await opensPdf(page.context(), () => page.getByRole('link', { name: 'Print the morning’s sheets' }).click(), /\/api\/queue\/sheets$/);
     expect(r.status).toBe(200);
@@ -60,12 +51,12 @@ describe('printing cut sheets', () => {
 
   it('the counter sees neither button', async () => {
     const page = await tabletPage(browser);
-    await signIn(page, 'counter@pinmark.test', '/queue');
+    await signInAs(page, 'counter', '/queue');
     await page.getByTestId('queue-row').first().waitFor();
     expect(await page.getByRole('link', { name: 'Print the morning’s sheets' }).count()).toBe(0);
     await page.getByRole('link', { name: 'Navy suit trousers' }).first().click();
     await page.waitForURL(/\/garments\/[0-9a-f-]{36}$/);
-    await page.waitForSelector('astro-island:not([ssr])');
+    await ready(page);
     expect(await page.getByRole('link', { name: 'Print cut sheet' }).count()).toBe(0);
     await page.context().close();
   });

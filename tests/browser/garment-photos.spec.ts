@@ -3,9 +3,10 @@
 // something that is not a photo is refused in words.
 import { mkdirSync } from 'node:fs';
 import sharp from 'sharp';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launch, tabletPage } from './browser';
+import { launch, ready, tabletPage } from './browser';
+import { signInAs } from './sign-in';
 
 let browser: Browser;
 
@@ -16,10 +17,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await browser?.close();
 });
-
-async function ready(page: Page) {
-  await page.waitForSelector('astro-island:not([ssr])', { state: 'attached', timeout: 15_000 });
-}
 
 async function photo(): Promise<Buffer> {
   // A plain test card: grey field with a darker band where a pin line would be.
@@ -33,12 +30,7 @@ async function photo(): Promise<Buffer> {
 describe('fitting photos on the garment page', () => {
   it('a tailor adds a photo from the file picker, sees its thumbnail, and removes it', async () => {
     const page = await tabletPage(browser);
-    await page.goto('/sign-in?next=/queue');
-    await ready(page);
-    await page.getByLabel('E-mail').fill('tailor@pinmark.test');
-    await page.getByLabel('Password').fill('cuffwright-demo');
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL((u) => u.pathname === '/queue');
+    await signInAs(page, 'tailor', '/queue');
     const queue = (await (await page.request.get('/api/garments')).json()) as { id: string }[];
     await page.goto(`/garments/${queue[queue.length - 1]!.id}`);
     await ready(page);

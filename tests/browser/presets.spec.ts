@@ -2,9 +2,10 @@
 // preselected, applies presets in one tap, adjusts a length and keeps it as their own preset.
 // The presets page has the fuller trial panel; the garment page (another worker's) mounts the same picker.
 import { mkdirSync } from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launch, tabletPage } from './browser';
+import { launch, ready, tabletPage } from './browser';
+import { signInAs } from './sign-in';
 
 let browser: Browser;
 const stamp = Date.now().toString(36);
@@ -19,24 +20,10 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function ready(page: Page) {
-  await page.waitForSelector('astro-island:not([ssr])', { state: 'attached', timeout: 15_000 });
-}
-
-async function signInTo(page: Page, email: string, next: string) {
-  await page.goto(`/sign-in?next=${encodeURIComponent(next)}`);
-  await ready(page);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill('cuffwright-demo');
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL((u) => u.pathname === next);
-  await ready(page);
-}
-
 describe('house presets from the lead to the bench', () => {
   it('the lead saves a house preset and makes it the house default', async () => {
     const page = await tabletPage(browser);
-    await signInTo(page, 'lead@pinmark.test', '/presets');
+    await signInAs(page, 'lead', '/presets');
     await expect(page.getByRole('link', { name: 'Presets' }).getAttribute('aria-current')).resolves.toBe('page');
     const form = page.getByRole('form', { name: 'New house preset' });
     await form.getByLabel('Preset name').fill(houseName);
@@ -57,7 +44,7 @@ describe('house presets from the lead to the bench', () => {
 
   it('a tailor finds it preselected, applies presets in one tap and keeps an adjusted one', async () => {
     const page = await tabletPage(browser);
-    await signInTo(page, 'tailor@pinmark.test', '/presets');
+    await signInAs(page, 'tailor', '/presets');
     const depth = page.getByLabel('Cuff depth (in)', { exact: true });
     // The house default fills the leg before anything is tapped.
     await expect.poll(() => depth.inputValue()).toBe('1 3/8');
@@ -92,7 +79,7 @@ describe('house presets from the lead to the bench', () => {
 
   it('on a garment page, the tailor fills a leg with the house preset in one tap', async () => {
     const page = await tabletPage(browser);
-    await signInTo(page, 'tailor@pinmark.test', '/presets');
+    await signInAs(page, 'tailor', '/presets');
     const queue = (await (await page.request.get('/api/garments')).json()) as { id: string }[];
     await page.goto(`/garments/${queue[0]!.id}`);
     await ready(page);
@@ -112,7 +99,7 @@ describe('house presets from the lead to the bench', () => {
 
   it('the lead gives the house default back to the classic cuff and removes the trial preset', async () => {
     const page = await tabletPage(browser);
-    await signInTo(page, 'lead@pinmark.test', '/presets');
+    await signInAs(page, 'lead', '/presets');
     const list = page.getByRole('region', { name: 'Manage house presets' });
     await list.getByRole('button', { name: 'Make default: Classic cuff' }).click();
     await list.getByRole('listitem').filter({ hasText: 'Classic cuff' }).getByText('House default').waitFor();

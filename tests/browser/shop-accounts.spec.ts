@@ -2,9 +2,11 @@
 // tailor opens the invitation from the captured mail and joins, then signs in again; an
 // apprentice of the demo shop cannot reach the staff page.
 import { mkdirSync } from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launch, tabletPage } from './browser';
+import { DEMO } from '../http/client';
+import { launch, ready, tabletPage } from './browser';
+import { submitSignIn } from './sign-in';
 
 let browser: Browser;
 const stamp = Date.now().toString(36);
@@ -19,11 +21,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await browser?.close();
 });
-
-async function ready(page: Page) {
-  // The island is live once Astro drops its ssr marker (the element itself has no box).
-  await page.waitForSelector('astro-island:not([ssr])', { state: 'attached', timeout: 15_000 });
-}
 
 describe('a new shop and its first tailor', () => {
   it('the lead signs up, invites a tailor, and finds the invitation in the outbox', async () => {
@@ -70,9 +67,7 @@ describe('a new shop and its first tailor', () => {
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.waitForURL('**/sign-in');
     await ready(page);
-    await page.getByLabel('E-mail').fill(tailorEmail);
-    await page.getByLabel('Password').fill('tailor-password-1');
-    await page.getByRole('button', { name: 'Sign in' }).click();
+    await submitSignIn(page, tailorEmail, 'tailor-password-1');
     await page.waitForURL('**/queue');
     await page.getByText('Piet Marlowe · Tailor · Thimble Row Alterations').waitFor();
     // A tailor has no staff link.
@@ -87,9 +82,7 @@ describe('the staff page', () => {
     await page.goto('/staff');
     await page.waitForURL('**/sign-in?next=%2Fstaff');
     await ready(page);
-    await page.getByLabel('E-mail').fill('apprentice@pinmark.test');
-    await page.getByLabel('Password').fill('cuffwright-demo');
-    await page.getByRole('button', { name: 'Sign in' }).click();
+    await submitSignIn(page, DEMO.apprentice);
     await page.waitForURL('**/staff');
     await expect(page.getByRole('heading', { name: 'Only the lead manages staff' }).isVisible()).resolves.toBe(true);
     expect(await page.getByRole('link', { name: 'Staff' }).count()).toBe(0);
@@ -103,9 +96,7 @@ describe('the staff page', () => {
     const page = await tabletPage(browser);
     await page.goto('/sign-in');
     await ready(page);
-    await page.getByLabel('E-mail').fill('counter@pinmark.test');
-    await page.getByLabel('Password').fill('not-the-password');
-    await page.getByRole('button', { name: 'Sign in' }).click();
+    await submitSignIn(page, DEMO.counter, 'not-the-password');
     await page.getByText('That e-mail and password do not match.').waitFor();
     await page.screenshot({ path: 'test-results/sign-in.png' });
     expect(page.url()).toMatch(/\/sign-in$/);
