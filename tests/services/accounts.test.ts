@@ -4,11 +4,7 @@ import { afterAll, describe, expect, it, vi } from 'vitest';
 import { randomUUID } from 'node:crypto';
 import { eq, sql } from 'drizzle-orm';
 
-vi.mock('@/db', async () => {
-  const { openTestDb } = await import('../db/test-db');
-  const handle = await openTestDb();
-  return { handle, db: handle.db };
-});
+vi.mock('@/db', () => import('../db/db-mock'));
 // Nothing leaves the test: invitations are written by the tests themselves.
 vi.mock('@/lib/mail', () => ({ sendMail: vi.fn(async () => {}) }));
 

@@ -2,6 +2,7 @@
 // balance), the signed and idempotent webhook, pickup, and ready notices through a real SMTP
 // capture, including a failure on a closed port and its retry.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import type { Shop } from './fixtures';
 import { createServer } from 'node:net';
 import { mkdtempSync, readdirSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -21,11 +22,7 @@ vi.mock('@/lib/mail', () => ({
     await transport.sendMail({ from: 'Cuffwright <no-reply@cuffwright.test>', ...m });
   },
 }));
-vi.mock('@/db', async () => {
-  const { openTestDb } = await import('../db/test-db');
-  const handle = await openTestDb();
-  return { handle, db: handle.db };
-});
+vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { customers, garments, measurements, notices, payments, paymentLinks, tickets } = await import('@/db/schema');
@@ -35,7 +32,6 @@ const notice = await import('@/services/notices');
 const { makeShop } = await import('./fixtures');
 const { startMailCapture } = await import('../../scripts/mail-capture.mjs');
 
-type Shop = Awaited<ReturnType<typeof makeShop>>;
 let a: Shop;
 let b: Shop;
 let ticketNo = 1000;

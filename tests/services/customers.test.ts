@@ -1,20 +1,17 @@
 // Customers: read and changed only within their own shop, each change audited with old and new.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import type { Shop } from './fixtures';
 import { and, eq } from 'drizzle-orm';
 
-vi.mock('@/db', async () => {
-  const { openTestDb } = await import('../db/test-db');
-  const handle = await openTestDb();
-  return { handle, db: handle.db };
-});
+vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { auditEvents } = await import('@/db/schema');
 const { createCustomer, getCustomer, updateCustomer } = await import('@/services/customers');
 const { makeShop } = await import('./fixtures');
 
-let a: Awaited<ReturnType<typeof makeShop>>;
-let b: Awaited<ReturnType<typeof makeShop>>;
+let a: Shop;
+let b: Shop;
 
 beforeAll(async () => {
   a = await makeShop('Customer Shop A');

@@ -4,31 +4,26 @@
 // queue's filters with one page per garment.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import jsQR from 'jsqr';
+import type { Shop } from './fixtures';
 
-vi.mock('@/db', async () => {
-  const { openTestDb } = await import('../db/test-db');
-  const handle = await openTestDb();
-  return { handle, db: handle.db };
-});
+vi.mock('@/db', () => import('../db/db-mock'));
 
 const { handle } = await import('@/db');
-const { createTicket } = await import('@/services/tickets');
-const { garmentsOfTicket, moveGarment } = await import('@/services/garments');
-const { readLengths, saveMeasurements } = await import('@/services/measurements');
+const { moveGarment } = await import('@/services/garments');
 const { saveBenchSettings } = await import('@/services/shop-settings');
 const { garmentSheet, queueSheets, NO_FITTING } = await import('@/services/cut-sheets');
 const { ServiceError } = await import('@/services/errors');
-const { blankLeg, measurementsRequest } = await import('@/lib/measurement-request');
 const { planCuff, planHem } = await import('@/lib/allowance');
 const { DEFAULT_QUEUE_FILTER } = await import('@/lib/queue-filter');
 const { makeShop } = await import('./fixtures');
+const { fittingRequest, openTicket, saveFitting } = await import('./garment-fixtures');
 const { flatText, gray, layoutText, pageInfo, pdfFile, words } = await import('../lib/cut-sheet/poppler');
 
 const BASE = 'https://bench.cuffwright.test';
 const TODAY = '2026-12-01';
 
-let a: Awaited<ReturnType<typeof makeShop>>;
-let b: Awaited<ReturnType<typeof makeShop>>;
+let a: Shop;
+let b: Shop;
 
 beforeAll(async () => {
   a = await makeShop('Sheet Shop A');
@@ -37,15 +32,12 @@ beforeAll(async () => {
 afterAll(() => handle.close());
 
 async function garment(shop = a, extra: { description?: string; dueOn?: string; assigneeId?: string | null } = {}) {
-  const t = await createTicket(shop.counter, { customer: { name: 'Wren Halloway' }, garments: [{ description: extra.description ?? 'Navy suit trousers', dueOn: extra.dueOn, assigneeId: extra.assigneeId ?? null }] });
-  return { ticket: t, g: (await garmentsOfTicket(shop.shopId, t.id))[0]! };
+  const { ticket, garment: g } = await openTicket(shop, { customer: { name: 'Wren Halloway' }, garments: [{ description: extra.description ?? 'Navy suit trousers', dueOn: extra.dueOn, assigneeId: extra.assigneeId ?? null }] });
+  return { ticket, g };
 }
 
-async function fit(shop: typeof a, garmentId: string, finish: 'cuff' | 'plain', left: Record<string, string>, right = left, unit: 'in' | 'cm' | 'mm' = 'in') {
-  const input = measurementsRequest.parse({ unit, legs: { left: { ...blankLeg(finish), ...left }, right: { ...blankLeg(finish), ...right } } });
-  const read = readLengths(input);
-  if (!read.ok) throw new Error(JSON.stringify(read.issues));
-  await saveMeasurements(shop.tailor, garmentId, input, read.legs);
+async function fit(shop: Shop, garmentId: string, finish: 'cuff' | 'plain', left: Record<string, string>, right = left, unit: 'in' | 'cm' | 'mm' = 'in') {
+  await saveFitting(shop.tailor, garmentId, fittingRequest(left, right, unit, finish));
 }
 
 const esc = (s: string) => s.replace(/[.*+?^${}()|[\]\\/]/g, '\\$&');
@@ -182,7 +174,7 @@ describe('a garment without a fitting', () => {
 });
 
 describe('the batch for the queue', () => {
-  let shop: Awaited<ReturnType<typeof makeShop>>;
+  let shop: Shop;
   const fitted: string[] = [];
   beforeAll(async () => {
     shop = await makeShop('Batch Shop');

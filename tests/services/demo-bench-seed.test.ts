@@ -1,13 +1,10 @@
 // The demo bench: numbered tickets whose garments stand at every step, a ticket at its slowest
 // garment, fittings that differ by leg with their history, and work overdue and due today.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import type { Shop } from './fixtures';
 import { asc, eq } from 'drizzle-orm';
 
-vi.mock('@/db', async () => {
-  const { openTestDb } = await import('../db/test-db');
-  const handle = await openTestDb();
-  return { handle, db: handle.db };
-});
+vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { customers, tickets } = await import('@/db/schema');
@@ -18,7 +15,7 @@ const { GARMENT_STEPS, leastAdvanced } = await import('@/lib/garment-steps');
 const { todayIso } = await import('@/components/bench/due');
 const { makeShop } = await import('./fixtures');
 
-let shop: Awaited<ReturnType<typeof makeShop>>;
+let shop: Shop;
 
 beforeAll(async () => {
   shop = await makeShop('Demo Bench Shop');

@@ -20,3 +20,6 @@ export async function makeShop(name: string, roles: Role[] = ['lead', 'tailor', 
   }
   return { shopId, ...actors };
 }
+
+/** A shop made by makeShop, with an actor per role. */
+export type Shop = Awaited<ReturnType<typeof makeShop>>;

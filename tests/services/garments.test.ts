@@ -1,12 +1,9 @@
 // Garments: the queue per role, one step at a time with the pickup kept for the counter, the
 // garment-moved hook, edits kept in the history, and 404 across shops.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import type { Shop } from './fixtures';
 
-vi.mock('@/db', async () => {
-  const { openTestDb } = await import('../db/test-db');
-  const handle = await openTestDb();
-  return { handle, db: handle.db };
-});
+vi.mock('@/db', () => import('../db/db-mock'));
 
 const { handle } = await import('@/db');
 const { createTicket } = await import('@/services/tickets');
@@ -14,9 +11,10 @@ const { addGarment, garmentsOfTicket, getGarment, listQueue, moveGarment, update
 const { garmentMovedListeners } = await import('@/services/garment-events');
 const { fittingOf } = await import('@/services/measurements');
 const { makeShop } = await import('./fixtures');
+const { openTicket } = await import('./garment-fixtures');
 
-let a: Awaited<ReturnType<typeof makeShop>>;
-let b: Awaited<ReturnType<typeof makeShop>>;
+let a: Shop;
+let b: Shop;
 
 beforeAll(async () => {
   a = await makeShop('Garment Shop A');
@@ -25,8 +23,7 @@ beforeAll(async () => {
 afterAll(() => handle.close());
 
 async function oneGarment(shop = a, assigneeId: string | null = null) {
-  const t = await createTicket(shop.counter, { customer: { name: 'Queue Customer' }, garments: [{ description: 'Test trousers', assigneeId }] });
-  return (await garmentsOfTicket(shop.shopId, t.id))[0]!;
+  return (await openTicket(shop, { customer: { name: 'Queue Customer' }, garments: [{ description: 'Test trousers', assigneeId }] })).garment;
 }
 
 describe('garments', () => {

@@ -1,22 +1,17 @@
 // Fitting measurements: each leg read exactly by the engine's parser, kept as typed, with one
 // audit event per changed value (who, when, old and new); unreadable lengths named by field.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import type { Shop } from './fixtures';
 
-vi.mock('@/db', async () => {
-  const { openTestDb } = await import('../db/test-db');
-  const handle = await openTestDb();
-  return { handle, db: handle.db };
-});
+vi.mock('@/db', () => import('../db/db-mock'));
 
 const { handle } = await import('@/db');
-const { createTicket } = await import('@/services/tickets');
-const { garmentsOfTicket } = await import('@/services/garments');
-const { fittingOf, readLengths, saveMeasurements } = await import('@/services/measurements');
-const { blankLeg, measurementsRequest } = await import('@/lib/measurement-request');
+const { fittingOf, readLengths } = await import('@/services/measurements');
 const { makeShop } = await import('./fixtures');
+const { fittingRequest, openTicket, saveFitting } = await import('./garment-fixtures');
 
-let a: Awaited<ReturnType<typeof makeShop>>;
-let b: Awaited<ReturnType<typeof makeShop>>;
+let a: Shop;
+let b: Shop;
 
 beforeAll(async () => {
   a = await makeShop('Fitting Shop A');
@@ -25,24 +20,13 @@ beforeAll(async () => {
 afterAll(() => handle.close());
 
 async function garmentOf(shop = a) {
-  const t = await createTicket(shop.counter, { garments: [{ description: 'Fitting trousers' }] });
-  return (await garmentsOfTicket(shop.shopId, t.id))[0]!;
-}
-
-function fitting(left: Record<string, string>, right: Record<string, string> = left, unit: 'in' | 'cm' | 'mm' = 'in') {
-  return measurementsRequest.parse({ unit, legs: { left: { ...blankLeg(), ...left }, right: { ...blankLeg(), ...right } } });
-}
-
-async function save(actor: typeof a.tailor, garmentId: string, input: ReturnType<typeof fitting>) {
-  const read = readLengths(input);
-  if (!read.ok) throw new Error(JSON.stringify(read.issues));
-  return saveMeasurements(actor, garmentId, input, read.legs);
+  return (await openTicket(shop, { garments: [{ description: 'Fitting trousers' }] })).garment;
 }
 
 describe('measurements', () => {
   it('keep each leg as typed and in exact mm (1 in = 25.4 mm exactly: TRADE.md, NBS 1959)', async () => {
     const g = await garmentOf();
-    const saved = await save(a.tailor, g.id, fitting({ backPin: '31 1/4', cuffDepth: '1 1/2', available: '5' }, { backPin: '31 1/2', cuffDepth: '1½' }));
+    const saved = await saveFitting(a.tailor, g.id, fittingRequest({ backPin: '31 1/4', cuffDepth: '1 1/2', available: '5' }, { backPin: '31 1/2', cuffDepth: '1½' }));
     const left = saved.legs.find((l) => l.leg === 'left')!;
     const right = saved.legs.find((l) => l.leg === 'right')!;
     expect(left.values.backPin).toEqual({ text: '31 1/4', mm: 793.75 });
@@ -55,11 +39,11 @@ describe('measurements', () => {
 
   it('record one audit event per changed value, with old and new', async () => {
     const g = await garmentOf();
-    await save(a.tailor, g.id, fitting({ cuffDepth: '1 1/2', available: '5' }));
+    await saveFitting(a.tailor, g.id, fittingRequest({ cuffDepth: '1 1/2', available: '5' }));
     const first = (await fittingOf(a.lead, g.id)).history.filter((e) => e.action === 'measurement.changed');
     // Both legs: finish, cuff depth and cloth each went from nothing to a value.
     expect(first).toHaveLength(6);
-    await save(a.lead, g.id, fitting({ cuffDepth: '1 3/4', available: '5' }, { cuffDepth: '1 1/2', available: '5' }));
+    await saveFitting(a.lead, g.id, fittingRequest({ cuffDepth: '1 3/4', available: '5' }, { cuffDepth: '1 1/2', available: '5' }));
     const history = (await fittingOf(a.lead, g.id)).history.filter((e) => e.action === 'measurement.changed');
     expect(history).toHaveLength(7);
     expect(history[0]).toMatchObject({ actorName: 'lead of Fitting Shop A', detail: { leg: 'left', field: 'cuffDepth', old: '1 1/2', new: '1 3/4', unit: 'in' } });
@@ -68,22 +52,22 @@ describe('measurements', () => {
 
   it('record nothing when nothing changed', async () => {
     const g = await garmentOf();
-    const same = fitting({ cuffDepth: '40' }, { cuffDepth: '40' }, 'mm');
-    await save(a.tailor, g.id, same);
+    const same = fittingRequest({ cuffDepth: '40' }, { cuffDepth: '40' }, 'mm');
+    await saveFitting(a.tailor, g.id, same);
     const before = (await fittingOf(a.tailor, g.id)).history.length;
-    await save(a.tailor, g.id, same);
+    await saveFitting(a.tailor, g.id, same);
     expect((await fittingOf(a.tailor, g.id)).history.length).toBe(before);
   });
 
   it('name every length the engine cannot read by its field', () => {
-    const read = readLengths(fitting({ cuffDepth: '1 1/2 furlongs', available: '5' }, { backPin: 'abc' }));
+    const read = readLengths(fittingRequest({ cuffDepth: '1 1/2 furlongs', available: '5' }, { backPin: 'abc' }));
     expect(read.ok).toBe(false);
     if (!read.ok) expect(Object.keys(read.issues).sort()).toEqual(['legs.left.cuffDepth', 'legs.right.backPin']);
   });
 
   it("refuse another shop's garment with 404", async () => {
     const g = await garmentOf(b);
-    await expect(save(a.tailor, g.id, fitting({ cuffDepth: '1 1/2' }))).rejects.toMatchObject({ status: 404 });
+    await expect(saveFitting(a.tailor, g.id, fittingRequest({ cuffDepth: '1 1/2' }))).rejects.toMatchObject({ status: 404 });
     await expect(fittingOf(a.tailor, g.id)).rejects.toMatchObject({ status: 404 });
   });
 });

@@ -6,12 +6,9 @@ import { join } from 'node:path';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { and, eq } from 'drizzle-orm';
+import type { Shop } from './fixtures';
 
-vi.mock('@/db', async () => {
-  const { openTestDb } = await import('../db/test-db');
-  const handle = await openTestDb();
-  return { handle, db: handle.db };
-});
+vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { auditEvents, files, garments, tickets } = await import('@/db/schema');
@@ -25,8 +22,8 @@ const storageRoot = join(root, 'files');
 useStorage(new DiskStorage(storageRoot));
 const MB = 1024 * 1024;
 
-let a: Awaited<ReturnType<typeof makeShop>>;
-let b: Awaited<ReturnType<typeof makeShop>>;
+let a: Shop;
+let b: Shop;
 let garmentA = '';
 let garmentB = '';
 let jpeg: Uint8Array;

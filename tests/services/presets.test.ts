@@ -1,21 +1,18 @@
 // Presets: house presets and personal ones, one house default at a time, lengths read by the
 // engine, each shop and each person seeing only what is theirs, an audit event per change.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import type { Shop } from './fixtures';
 import { and, eq } from 'drizzle-orm';
 
-vi.mock('@/db', async () => {
-  const { openTestDb } = await import('../db/test-db');
-  const handle = await openTestDb();
-  return { handle, db: handle.db };
-});
+vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { auditEvents, presets } = await import('@/db/schema');
 const svc = await import('@/services/presets');
 const { makeShop } = await import('./fixtures');
 
-let a: Awaited<ReturnType<typeof makeShop>>;
-let b: Awaited<ReturnType<typeof makeShop>>;
+let a: Shop;
+let b: Shop;
 
 beforeAll(async () => {
   a = await makeShop('Preset Shop A');

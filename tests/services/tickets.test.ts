@@ -1,13 +1,10 @@
 // Tickets: each shop sees only its own; an apprentice sees assigned-to-them and unassigned; a
 // ticket gets the shop's next number, and its status follows its least advanced garment.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import type { Shop } from './fixtures';
 import { eq } from 'drizzle-orm';
 
-vi.mock('@/db', async () => {
-  const { openTestDb } = await import('../db/test-db');
-  const handle = await openTestDb();
-  return { handle, db: handle.db };
-});
+vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { tickets, auditEvents } = await import('@/db/schema');
@@ -17,8 +14,8 @@ const { createCustomer } = await import('@/services/customers');
 const { ServiceError } = await import('@/services/errors');
 const { makeShop } = await import('./fixtures');
 
-let a: Awaited<ReturnType<typeof makeShop>>;
-let b: Awaited<ReturnType<typeof makeShop>>;
+let a: Shop;
+let b: Shop;
 
 beforeAll(async () => {
   a = await makeShop('Shop A');
