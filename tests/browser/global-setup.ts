@@ -7,10 +7,10 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createServer } from 'node:net';
 import type { TestProject } from 'vitest/node';
-import pg from 'pg';
 import { buildIfNeeded } from '../../scripts/build-if-needed.mjs';
 import { startMailCapture } from '../../scripts/mail-capture.mjs';
 import { startLocalPayments } from '../../scripts/payments-fake.mjs';
+import { createServerDatabase } from '../db/server-database';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -45,17 +45,6 @@ async function waitFor(url: string, ms: number): Promise<void> {
   throw new Error(`server at ${url} did not answer within ${ms} ms`);
 }
 
-async function freshServerDatabase(serverUrl: string): Promise<string> {
-  const name = `cw_http_${Date.now().toString(36)}`;
-  const admin = new pg.Client({ connectionString: serverUrl });
-  await admin.connect();
-  await admin.query(`CREATE DATABASE ${name}`);
-  await admin.end();
-  const url = new URL(serverUrl);
-  url.pathname = `/${name}`;
-  return url.toString();
-}
-
 let server: ChildProcess | undefined;
 let dataDir = '';
 
@@ -69,7 +58,7 @@ export default async function setup(project: TestProject) {
   const baseURL = `http://localhost:${port}`;
   const mailDir = join(dataDir, 'mail');
   // With TEST_DATABASE_URL (scripts/with-postgres.sh) the server runs on a fresh PostgreSQL database.
-  const databaseUrl = process.env.TEST_DATABASE_URL ? await freshServerDatabase(process.env.TEST_DATABASE_URL) : undefined;
+  const databaseUrl = process.env.TEST_DATABASE_URL ? await createServerDatabase(process.env.TEST_DATABASE_URL, `cw_http_${Date.now().toString(36)}`) : undefined;
   const capture = await startMailCapture({ dir: mailDir, port: 0, quiet: true });
   const payments = await startLocalPayments({ appUrl: `http://127.0.0.1:${port}`, port: 0, quiet: true });
   server = spawn('node', [`${outDir}/server/entry.mjs`], {
