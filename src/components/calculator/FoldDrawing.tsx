@@ -2,7 +2,7 @@ import type { CuffPlan } from '@/lib/allowance/types';
 import { Labels } from './DrawingLabels';
 import { FlatAndSection, SectionPath } from './FlatAndSection';
 import { LINE_NAMES } from './line-names';
-import { LAYER_GAP as G, SECTION_X as xL, flatLines, sectionScale } from './section-drawing';
+import { LAYER_GAP as G, SECTION_X as xL, flatLines, sectionScale, turnUnder } from './section-drawing';
 
 /** The cuff to scale: the flat cloth with its four chalk lines, and beside it the finished cuff in section. */
 export function FoldDrawing({ plan }: { plan: CuffPlan }) {
@@ -20,9 +20,10 @@ export function FoldDrawing({ plan }: { plan: CuffPlan }) {
   const yTop = up(D);
   const yInside = up(S - T);
   const r = G / 2;
+  const turn = turnUnder(xt, yInside, T * s, 4);
   const leg = `M${xL},${up(aboveMm - 6)} V${yFold} A${r},${r} 0 0 0 ${x1},${yFold} V${yTop + r}`;
   const face = `M${x1},${yTop + r} A${r},${r} 0 0 1 ${x2},${yTop + r} V${yFold}`;
-  const inside = `M${x2},${yFold} A${2 * G},${2 * G} 0 0 1 ${x3},${yFold} V${yInside + r} A${r},${r} 0 0 1 ${xt},${yInside + r} V${yInside + T * s}`;
+  const inside = `M${x2},${yFold} A${2 * G},${2 * G} 0 0 1 ${x3},${yFold} ${turn.path}`;
 
   return (
     <FlatAndSection
@@ -64,8 +65,7 @@ export function FoldDrawing({ plan }: { plan: CuffPlan }) {
         x={x3 - 36}
         anchor="end"
         labels={[
-          { y: yInside + 4, to: [xt - 3, yInside + r], text: 'turn-under' },
-          { y: yInside + T * s + 10, to: [xt - 2, yInside + T * s], text: 'cut edge', n: [4], cut: true },
+          ...turn.labels,
           { y: (yInside + yFold) / 2 + 30, to: [x3 - 3, (yInside + yFold) / 2 + 20], text: 'inside section' },
         ]}
       />

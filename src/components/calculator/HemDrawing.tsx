@@ -1,7 +1,7 @@
 import type { HemPlan } from '@/lib/allowance/types';
 import { Labels } from './DrawingLabels';
 import { FlatAndSection, SectionPath } from './FlatAndSection';
-import { LAYER_GAP as G, SECTION_X as xL, flatLines, sectionScale } from './section-drawing';
+import { LAYER_GAP as G, SECTION_X as xL, flatLines, sectionScale, turnUnder } from './section-drawing';
 
 /** The plain hem to scale at the back of the leg: flat with its two lines, and finished in section. */
 export function HemDrawing({ plan }: { plan: HemPlan }) {
@@ -12,13 +12,12 @@ export function HemDrawing({ plan }: { plan: HemPlan }) {
   const aboveMm = A + 16;
   const { s, yMark, H, up } = sectionScale(aboveMm, cutMm, rawMm, 360);
   const [xh, xt] = [xL - 2 * G, xL - G];
-  const r = G / 2;
   const yIn = up(A - T);
+  const turn = turnUnder(xt, yIn, T * s, 2);
   const section = [
     `M${xL},${up(aboveMm - 6)} V${yMark - G}`,
     `A${G},${G} 0 0 1 ${xh},${yMark - G}`,
-    `V${yIn + r} A${r},${r} 0 0 1 ${xt},${yIn + r}`,
-    `V${yIn + T * s}`,
+    turn.path,
   ].join(' ');
   return (
     <FlatAndSection
@@ -52,8 +51,7 @@ export function HemDrawing({ plan }: { plan: HemPlan }) {
         x={xh - 40}
         anchor="end"
         labels={[
-          { y: yIn + 4, to: [xt - 3, yIn + r], text: 'turn-under' },
-          { y: yIn + T * s + 10, to: [xt - 2, yIn + T * s], text: 'cut edge', n: [2], cut: true },
+          ...turn.labels,
           { y: (yIn + yMark) / 2 + 14, to: [xh - 3, (yIn + yMark) / 2 + 9], text: 'hem allowance' },
         ]}
       />

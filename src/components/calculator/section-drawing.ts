@@ -1,4 +1,5 @@
 import type { CuffLine, HemLine } from '@/lib/allowance/types';
+import type { Label } from './DrawingLabels';
 import type { FlatLine } from './FlatCloth';
 import { LINE_NAMES } from './line-names';
 
@@ -29,4 +30,16 @@ export function sectionScale(aboveMm: number, cutMm: number, rawMm: number | nul
 /** A plan's chalk lines as the flat cloth draws them. */
 export function flatLines(lines: (CuffLine | HemLine)[]): FlatLine[] {
   return lines.map((l) => ({ n: l.n, label: LINE_NAMES[l.name], mm: l.belowMark.mm, text: l.belowMark.text, cut: l.name === 'cut' }));
+}
+
+/** The raw edge turned under at the top of the inside layer: its path on from the layer above, and its two labels. */
+export function turnUnder(xt: number, yIn: number, depthPx: number, cutN: number): { path: string; labels: Label[] } {
+  const r = LAYER_GAP / 2;
+  return {
+    path: `V${yIn + r} A${r},${r} 0 0 1 ${xt},${yIn + r} V${yIn + depthPx}`,
+    labels: [
+      { y: yIn + 4, to: [xt - 3, yIn + r], text: 'turn-under' },
+      { y: yIn + depthPx + 10, to: [xt - 2, yIn + depthPx], text: 'cut edge', n: [cutN], cut: true },
+    ],
+  };
 }
