@@ -91,18 +91,20 @@ describe('checkTaper laws', () => {
   });
   const step = (unit: Unit) => (unit === 'in' ? new Fraction(1, 32) : unit === 'mm' ? new Fraction(1, 2) : new Fraction(1, 20));
   const text = (unit: Unit, k: number) => step(unit).mul(k).toFraction(true);
+  /** The generated leg as the taper check is asked it, with any further fields. */
+  const leg = (g: { unit: Unit; d: number; wEdge: number; delta: number; h: number }, more: Partial<TaperInput> = {}): TaperInput => ({
+    unit: g.unit,
+    cuffDepth: text(g.unit, g.d),
+    widthAtEdge: text(g.unit, g.wEdge),
+    widthAbove: text(g.unit, g.wEdge + g.delta),
+    heightAbove: text(g.unit, g.h),
+    ...more,
+  });
 
   it('after the change every line\'s width equals the target', () => {
     fc.assert(
       fc.property(arb, (g) => {
-        const plan = checkTaper({
-          unit: g.unit,
-          cuffDepth: text(g.unit, g.d),
-          widthAtEdge: text(g.unit, g.wEdge),
-          widthAbove: text(g.unit, g.wEdge + g.delta),
-          heightAbove: text(g.unit, g.h),
-          clothThickness: text(g.unit, g.t),
-        });
+        const plan = checkTaper(leg(g, { clothThickness: text(g.unit, g.t) }));
         for (const l of plan.lines) expect(l.width.mm + l.change.mm).toBeCloseTo(plan.targetWidth.mm, 9);
       }),
     );
@@ -111,7 +113,7 @@ describe('checkTaper laws', () => {
   it('perSide · 2 = perSeam = change', () => {
     fc.assert(
       fc.property(arb, (g) => {
-        const plan = checkTaper({ unit: g.unit, cuffDepth: text(g.unit, g.d), widthAtEdge: text(g.unit, g.wEdge), widthAbove: text(g.unit, g.wEdge + g.delta), heightAbove: text(g.unit, g.h) });
+        const plan = checkTaper(leg(g));
         for (const l of plan.lines) {
           expect(l.perSeam.mm).toBe(l.change.mm);
           expect(l.perSide.mm * 2).toBeCloseTo(l.perSeam.mm, 12);
@@ -123,14 +125,7 @@ describe('checkTaper laws', () => {
   it('within tolerance ⇔ every |change| ≤ tolerance; feasible ⇔ the largest let-out per side ≤ seam allowance', () => {
     fc.assert(
       fc.property(arb, (g) => {
-        const plan = checkTaper({
-          unit: g.unit,
-          cuffDepth: text(g.unit, g.d),
-          widthAtEdge: text(g.unit, g.wEdge),
-          widthAbove: text(g.unit, g.wEdge + g.delta),
-          heightAbove: text(g.unit, g.h),
-          ...(g.sa === null ? {} : { seamAllowance: text(g.unit, g.sa) }),
-        });
+        const plan = checkTaper(leg(g, g.sa === null ? {} : { seamAllowance: text(g.unit, g.sa) }));
         const tol = g.unit === 'in' ? 25.4 / 8 : 3;
         expect(plan.withinTolerance).toBe(plan.lines.every((l) => Math.abs(l.change.mm) <= tol + 1e-9));
         expect(plan.warnings.some((w) => w.code === 'taper-beyond-tolerance')).toBe(!plan.withinTolerance);
