@@ -9,9 +9,7 @@ export const SQUARE_GREY = '#a0a0a0';
 function Square({ side, label }: { side: number; label: string }) {
   return (
     <View style={{ alignItems: 'center' }}>
-      <Svg width={side} height={side}>
-        <Rect x={0} y={0} width={side} height={side} fill={SQUARE_GREY} />
-      </Svg>
+      <View style={{ width: side, height: side, backgroundColor: SQUARE_GREY }} />
       <Text style={{ fontSize: 8, fontWeight: 800, marginTop: 2 }}>{label}</Text>
     </View>
   );
@@ -19,6 +17,14 @@ function Square({ side, label }: { side: number; label: string }) {
 
 function Strip({ strip, width }: { strip: GuideStrip; width: number }) {
   const rulerPath = strip.ruler.map((m) => `M0 ${m.y.toFixed(3)}h${m.len}`).join('');
+  // Every tick of a colour in one filled path: fewer nodes to lay out and draw than a Rect each.
+  const bar = (cut: boolean) =>
+    strip.ticks
+      .filter((t) => t.cut === cut)
+      .map((t) => `M0 ${Math.max(0, t.y - (cut ? 1 : 0.5)).toFixed(3)}h${width}v${cut ? 2 : 1}h${-width}z`)
+      .join('');
+  const plain = bar(false);
+  const cut = bar(true);
   const textLeft = 12;
   const size = width < 90 ? 6.5 : 7.5;
   return (
@@ -29,9 +35,8 @@ function Strip({ strip, width }: { strip: GuideStrip; width: number }) {
         <Svg width={width} height={strip.length}>
           <Rect x={0.25} y={0} width={width - 0.5} height={strip.length} fill="none" stroke={INK.soft} strokeWidth={0.5} strokeDasharray="3 2" />
           <Path d={rulerPath} stroke={INK.soft} strokeWidth={0.4} />
-          {strip.ticks.map((t, i) => (
-            <Rect key={i} x={0} y={Math.max(0, t.y - (t.cut ? 1 : 0.5))} width={width} height={t.cut ? 2 : 1} fill={t.cut ? INK.cut : INK.text} />
-          ))}
+          {plain && <Path d={plain} fill={INK.text} />}
+          {cut && <Path d={cut} fill={INK.cut} />}
         </Svg>
         {strip.ticks.map((t, i) => (
           <View key={i} style={{ position: 'absolute', left: textLeft, top: t.y + 2 }}>

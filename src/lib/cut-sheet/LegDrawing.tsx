@@ -11,6 +11,15 @@ export function LegDrawing({ g }: { g: LegGeometry }) {
   const labelX = Math.max(tr![0], br![0]) + 4;
   // A wavy break at the top says the leg carries on upwards.
   const breakPath = `M${tl![0]} ${tl![1]} Q ${(tl![0] + tr![0]) / 4} ${tl![1] - 3} ${(tl![0] + tr![0]) / 2} ${tl![1]} T ${tr![0]} ${tr![1]}`;
+  // Lines that share a stroke go in one path each: fewer nodes to lay out and draw.
+  const across = (cut: boolean) =>
+    g.lines
+      .filter((l) => l.cut === cut)
+      .map((l) => `M${tl![0] - 3} ${l.y}H${labelX - 2}`)
+      .join('');
+  const chalk = across(false);
+  const cutLine = across(true);
+  const seams = g.seams.map((sm) => `M${sm.x1} ${sm.y1}L${sm.x2} ${sm.y2}`).join('');
   return (
     <View style={{ width: g.width, height: g.height, position: 'relative', flexShrink: 0 }}>
       <Svg width={g.width} height={g.height}>
@@ -19,21 +28,9 @@ export function LegDrawing({ g }: { g: LegGeometry }) {
         <Path d={`M${tl![0]} ${tl![1]} L${bl![0]} ${bl![1]} M${tr![0]} ${tr![1]} L${br![0]} ${br![1]}`} stroke={INK.text} strokeWidth={1} />
         <Path d={breakPath} stroke={INK.soft} strokeWidth={0.6} fill="none" />
         <Line x1={bl![0]} y1={bl![1]} x2={br![0]} y2={br![1]} stroke={INK.soft} strokeWidth={0.8} strokeDasharray={g.rawEdgeKnown ? undefined : '2 2'} />
-        {g.seams.map((sm, i) => (
-          <Line key={i} x1={sm.x1} y1={sm.y1} x2={sm.x2} y2={sm.y2} stroke={INK.text} strokeWidth={0.8} strokeDasharray="3 2" />
-        ))}
-        {g.lines.map((l, i) => (
-          <Line
-            key={i}
-            x1={tl![0] - 3}
-            x2={labelX - 2}
-            y1={l.y}
-            y2={l.y}
-            stroke={l.cut ? INK.cut : INK.text}
-            strokeWidth={l.cut ? 2.2 : 0.9}
-            strokeDasharray={l.cut ? '5 2' : undefined}
-          />
-        ))}
+        {seams && <Path d={seams} stroke={INK.text} strokeWidth={0.8} strokeDasharray="3 2" fill="none" />}
+        {chalk && <Path d={chalk} stroke={INK.text} strokeWidth={0.9} fill="none" />}
+        {cutLine && <Path d={cutLine} stroke={INK.cut} strokeWidth={2.2} strokeDasharray="5 2" fill="none" />}
       </Svg>
       {g.lines.map((l, i) => (
         <Text

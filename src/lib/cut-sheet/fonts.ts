@@ -4,6 +4,7 @@
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { Font } from '@react-pdf/renderer';
+import { memoiseFace } from './face-memo';
 import { cacheFontObjects } from './pdf-font-cache';
 
 /** The font family the sheet is set in. */
@@ -41,6 +42,7 @@ async function load(): Promise<void> {
     const source = Font.getFont({ fontFamily: FAMILY, fontWeight, fontStyle: 'normal' });
     await source.load();
     memoiseShaping(source.data as unknown as Shaper);
+    memoiseFace(source.data as unknown as Parameters<typeof memoiseFace>[0]);
   }
 }
 

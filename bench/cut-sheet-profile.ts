@@ -1,0 +1,26 @@
+// Warm cut-sheet renders in a loop, for a CPU profile or a quick A/B on a busy machine:
+// NODE_ENV=production node --cpu-prof node_modules/vite-node/vite-node.mjs bench/cut-sheet-profile.ts
+// Prints CPU per sheet over chunks of 10 distinct sheets: the lowest chunk is the least disturbed.
+import { writeFileSync } from 'node:fs';
+import { buildCutSheet } from '../src/lib/cut-sheet/build';
+import { renderCutSheet } from '../src/lib/cut-sheet/render';
+
+const DEPTHS = ['1 1/4', '1 3/8', '1 1/2', '1 5/8', '1 3/4', '1 7/8', '2'];
+const sheet = (i: number) =>
+  buildCutSheet(
+    { shop: 'Hartley & Sons Alterations', ticket: String(1000 + i), garment: 'Navy wool flannel trousers', due: '2025-03-14', assignee: 'Sam Ortiz', link: `https://cuffwright.example/garments/${1000 + i}` },
+    [{ side: 'left', finish: 'cuff', input: { unit: 'in', precision: 8, cuffDepth: DEPTHS[i % DEPTHS.length]!, available: `${5 + (i % 9) / 8}` } }],
+  );
+
+const chunks = Number(process.env.CHUNKS ?? 15);
+if (process.env.OUT) writeFileSync(process.env.OUT, await renderCutSheet(sheet(42)));
+for (let i = 0; i < 40; i++) await renderCutSheet(sheet(i));
+const cpu: number[] = [];
+for (let c = 0; c < chunks; c++) {
+  const start = process.cpuUsage();
+  for (let i = 0; i < 10; i++) await renderCutSheet(sheet(100 + c * 10 + i));
+  const u = process.cpuUsage(start);
+  cpu.push((u.user + u.system) / 1000 / 10);
+}
+cpu.sort((a, b) => a - b);
+console.log(`cpu ms/sheet: min ${cpu[0]!.toFixed(1)} median ${cpu[Math.floor(cpu.length / 2)]!.toFixed(1)}`);

@@ -1,0 +1,47 @@
+// fontkit answers the same questions about a static font again and again: textkit asks every
+// character's font for its units per em and whether it has the glyph, and every PDF's subset
+// decodes each glyph's outline anew. The answers never change for a face that has no variations.
+
+interface Glyph {
+  _font: object;
+  _decode: () => unknown;
+}
+
+interface Face {
+  unitsPerEm: number;
+  hasGlyphForCodePoint: (codePoint: number) => boolean;
+  getGlyph: (id: number) => Glyph;
+  _variationProcessor?: unknown;
+}
+
+const faces = new WeakSet<object>();
+const decoded = new WeakMap<object, unknown>();
+const patchedGlyphs = new WeakSet<object>();
+
+/** Keeps a loaded static face's answers (units per em, glyph coverage, decoded outlines) for the process. */
+export function memoiseFace(face: Face): void {
+  if (face._variationProcessor || faces.has(face)) return;
+  faces.add(face);
+  Object.defineProperty(face, 'unitsPerEm', { value: face.unitsPerEm });
+  const lookup = face.hasGlyphForCodePoint.bind(face);
+  // 0 not asked yet, 1 has the glyph, 2 has not; the basic plane covers every character we print.
+  const known = new Uint8Array(0x10000);
+  face.hasGlyphForCodePoint = (cp) => {
+    if (cp > 0xffff) return lookup(cp);
+    let k = known[cp]!;
+    if (k === 0) known[cp] = k = lookup(cp) ? 1 : 2;
+    return k === 1;
+  };
+  const proto = Object.getPrototypeOf(face.getGlyph(0)) as Glyph;
+  if (patchedGlyphs.has(proto)) return;
+  patchedGlyphs.add(proto);
+  const decode = proto._decode;
+  // The subsetter only reads the decoded glyph (its components); nothing writes to it for a static face.
+  proto._decode = function (this: Glyph) {
+    if (!faces.has(this._font)) return decode.call(this);
+    if (decoded.has(this)) return decoded.get(this);
+    const glyph = decode.call(this);
+    decoded.set(this, glyph);
+    return glyph;
+  };
+}
