@@ -51,8 +51,17 @@ async function load(): Promise<void> {
 function memoiseShaping(face: Shaper): void {
   const shape = face.layout.bind(face);
   const memo = new Map<string, unknown>();
+  // The same few feature objects come with every call: spell each one out once, not per run.
+  const spelt = new WeakMap<object, string>();
+  const spell = (x: unknown) => {
+    if (typeof x !== 'object' || x === null) return String(x);
+    let k = spelt.get(x);
+    if (k === undefined) spelt.set(x, (k = JSON.stringify(x)));
+    return k;
+  };
   face.layout = (text, ...rest) => {
-    const key = `${JSON.stringify(rest)}\u0000${text}`;
+    let key = text;
+    for (const x of rest) key = `${spell(x)}\u0000${key}`;
     let run = memo.get(key);
     if (run === undefined) {
       if (memo.size >= MEMO_LIMIT) memo.clear();

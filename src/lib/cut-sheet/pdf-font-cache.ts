@@ -14,7 +14,7 @@ interface FontDoc {
 
 let patched = false;
 
-/** Makes pdfkit reuse, within one document, the font it already made for the same font object. */
+/** Makes pdfkit reuse, within one document, the font it already made for the same font object, and load no default font. */
 export function cacheFontObjects(): void {
   if (patched) return;
   patched = true;
@@ -38,5 +38,12 @@ export function cacheFontObjects(): void {
     const out = original.call(this, src, family, size);
     mine.set(src, this._font);
     return out;
+  };
+  // Every new document also loads Helvetica as its default font, parsing the whole metrics file
+  // (a millisecond a sheet) though react-pdf names a font before every run. Load it only if named.
+  const docProto = PDFDocument.prototype as unknown as { initFonts: (font?: unknown, family?: unknown, size?: unknown) => void };
+  const initFonts = docProto.initFonts;
+  docProto.initFonts = function (_font?: unknown, family?: unknown, size?: unknown) {
+    initFonts.call(this, null, family ?? null, size ?? 12);
   };
 }
