@@ -58,7 +58,7 @@ function Strip({ strip, width }: { strip: GuideStrip; width: number }) {
 export function ChalkGuide({ strips, notes }: { strips: GuideStrip[]; notes: string[] }) {
   const width = strips.length > 1 ? 72 : 108;
   return (
-    <View>
+    <>
       <Text style={s.h2}>CHALK GUIDE 1:1</Text>
       <View style={{ flexDirection: 'row', justifyContent: 'space-between', alignItems: 'flex-end' }}>
         <Square side={INCH_PT} label="1 in" />
@@ -74,6 +74,6 @@ export function ChalkGuide({ strips, notes }: { strips: GuideStrip[]; notes: str
           <Strip key={i} strip={st} width={width} />
         ))}
       </View>
-    </View>
+    </>
   );
 }

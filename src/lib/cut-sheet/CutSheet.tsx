@@ -1,6 +1,6 @@
 // One garment's cut sheet as a react-pdf page. Plain data in; no database, no network.
 import { Document, Page, Path, Svg, Text, View, type DocumentProps } from '@react-pdf/renderer';
-import type { ReactElement } from 'react';
+import { Fragment, type ReactElement } from 'react';
 import { ChalkGuide } from './ChalkGuide';
 import { guideStrips } from './chalk-guide';
 import { sheetContent, type SheetContent, type SheetLegGroup } from './content';
@@ -74,7 +74,7 @@ function rawEdge(len: Len | null): { value: string; caption: string } {
 
 function LinesTable({ g }: { g: SheetLegGroup }) {
   return (
-    <View>
+    <>
       <View style={{ flexDirection: 'row', borderBottomWidth: 0.75, borderBottomColor: INK.text, paddingBottom: 1 }}>
         <Text style={[s.th, { flexGrow: 1 }]}>CHALK LINE</Text>
         <Text style={[s.th, { width: 78, textAlign: 'right' }]}>BELOW PIN MARK</Text>
@@ -85,7 +85,7 @@ function LinesTable({ g }: { g: SheetLegGroup }) {
         .map((l) => (
           <LineRow key={l.n} n={l.n} name={l.name} below={l.belowMark.text} above={l.aboveRawEdge?.text ?? '—'} />
         ))}
-    </View>
+    </>
   );
 }
 
@@ -153,7 +153,7 @@ function Steps({ c }: { c: SheetContent }) {
     <View wrap={false}>
       <Text style={s.h2}>AT THE BENCH, IN THIS ORDER</Text>
       {c.steps.map((block, b) => (
-        <View key={b}>
+        <Fragment key={b}>
           {block.heading && <Text style={[s.small, s.strong, { marginTop: 2 }]}>{block.heading}</Text>}
           {block.items.map((t, i) => (
             <View key={i} style={s.step}>
@@ -161,7 +161,7 @@ function Steps({ c }: { c: SheetContent }) {
               <Text style={s.stepText}>{t}</Text>
             </View>
           ))}
-        </View>
+        </Fragment>
       ))}
       <Text style={s.h2}>TAKE CARE</Text>
       {c.cautions.map((t, i) => (
