@@ -24,7 +24,7 @@ export function usePriceList() {
   return useQuery({ queryKey: ['prices'], queryFn: () => fetchJson<PriceListView>('/api/prices') });
 }
 
-/** A mutation on the ticket that refreshes the money and the notices after it. */
+/** A mutation on the ticket that refreshes the money, the notices and the ticket page's view after it. */
 export function useCounterAction<I, O = unknown>(ticketId: string, call: (input: I) => Promise<O>) {
   const client = useQueryClient();
   return useMutation({
@@ -32,6 +32,7 @@ export function useCounterAction<I, O = unknown>(ticketId: string, call: (input:
     onSettled: () => {
       void client.invalidateQueries({ queryKey: ['counter', ticketId] });
       void client.invalidateQueries({ queryKey: ['notices', ticketId] });
+      void client.invalidateQueries({ queryKey: ['ticket', ticketId] });
     },
   });
 }
