@@ -96,7 +96,7 @@ function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canA
         ) : fitting.isError ? (
           <p role="alert" className="font-semibold text-cut">{fitting.error.message}</p>
         ) : canEditFitting ? (
-          <FittingForm key={fitting.dataUpdatedAt ? 'loaded' : 'new'} garmentId={g.id} fitting={fitting.data} unit={unit} precision={precision} />
+          <FittingForm garmentId={g.id} fitting={fitting.data} unit={unit} precision={precision} />
         ) : (
           <FittingReadOnly fitting={fitting.data} unit={unit} precision={precision} />
         ))}
