@@ -1,4 +1,5 @@
 import type { AuditEntry } from '@/lib/bench-types';
+import { dateTimeText } from '@/lib/date-text';
 import { isGarmentStep, type GarmentStep } from '@/lib/garment-steps';
 import { FINISH_LABELS, LEG_LENGTH_LABELS, LEG_LENGTHS, type Finish, type LegLength } from '@/lib/measurement-request';
 
@@ -57,7 +58,7 @@ export function FittingHistory({ history, label }: Props) {
             <li key={e.id} className="flex flex-wrap items-baseline gap-x-4 px-4 py-2">
               <span className="measure font-semibold">{describe(e, label)}</span>
               <span className="text-base text-muted">
-                {e.actorName ?? 'Someone no longer here'} · <time dateTime={e.at}>{new Date(e.at).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })}</time>
+                {e.actorName ?? 'Someone no longer here'} · <time dateTime={e.at}>{dateTimeText(e.at)}</time>
               </span>
             </li>
           ))}

@@ -1,6 +1,7 @@
 // Notices to the customer: what was sent, what failed and why, retry, and the ready notice button.
 import type { Notice } from '@/db/schema/notices';
 import { FormMessage } from '@/components/Field';
+import { dateTimeText } from '@/lib/date-text';
 import type { CounterSummary } from '@/services/payments';
 import { post, useCounterAction, useNotices } from './counter-api';
 
@@ -10,17 +11,13 @@ const STATE: Record<Notice['status'], { text: string; look: string }> = {
   failed: { text: 'Not delivered', look: 'border-cut bg-cut-soft text-cut' },
 };
 
-function when(d: string | Date | null): string {
-  return d ? new Date(d).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' }) : '';
-}
-
 function NoticeRow({ n, canSend }: { n: Notice; canSend: boolean }) {
   const retry = useCounterAction(n.ticketId, () => post(n.ticketId, `notices/${n.id}/retry`));
   return (
     <li className={`rounded border-2 p-3 ${STATE[n.status].look}`}>
       <div className="font-semibold">
         Ready notice to {n.to}: {STATE[n.status].text}
-        {n.status === 'sent' && ` ${when(n.sentAt)}`}
+        {n.status === 'sent' && ` ${dateTimeText(n.sentAt)}`}
       </div>
       <div className="text-base">
         {n.attempts} attempt{n.attempts === 1 ? '' : 's'}
@@ -29,7 +26,7 @@ function NoticeRow({ n, canSend }: { n: Notice; canSend: boolean }) {
       {n.status === 'failed' && (
         <>
           <p className="text-base">Last error: {n.lastError}</p>
-          <p className="text-base">{n.nextAttemptAt ? `Next automatic try: ${when(n.nextAttemptAt)}` : 'No more automatic tries: retry by hand.'}</p>
+          <p className="text-base">{n.nextAttemptAt ? `Next automatic try: ${dateTimeText(n.nextAttemptAt)}` : 'No more automatic tries: retry by hand.'}</p>
           {canSend && (
             <button type="button" onClick={() => retry.mutate(undefined)} disabled={retry.isPending} className="mt-2 min-h-11 rounded border-2 border-ink bg-card px-4 py-2 font-semibold text-ink">
               Retry now

@@ -4,6 +4,7 @@ import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { FormMessage } from '@/components/Field';
 import { paymentInput } from '@/lib/counter-request';
+import { dateTimeText } from '@/lib/date-text';
 import { formatMoney } from '@/lib/pricing/money';
 import type { CounterSummary } from '@/services/payments';
 import { Money } from './Money';
@@ -118,7 +119,7 @@ export function PaymentsCard({ s, canTake }: { s: CounterSummary; canTake: boole
           {s.payments.map((p) => (
             <li key={p.id}>
               {PURPOSE[p.purpose]}, {METHOD[p.method]}: <Money minor={p.amountMinor} currency={s.currency} className="font-semibold" />{' '}
-              <span className="text-muted">({new Date(p.at).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })})</span>
+              <span className="text-muted">({dateTimeText(p.at)})</span>
             </li>
           ))}
         </ul>

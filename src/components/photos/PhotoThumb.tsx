@@ -1,10 +1,11 @@
 import { useState } from 'react';
+import { dateTimeText } from '@/lib/date-text';
 import type { PhotoView } from '@/lib/photo-view';
 
 /** One thumbnail linking to the full photo, with a remove button when allowed. */
 export function PhotoThumb({ photo, onRemove }: { photo: PhotoView; onRemove?: () => void }) {
   const [broken, setBroken] = useState(false);
-  const taken = new Date(photo.createdAt).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
+  const taken = dateTimeText(photo.createdAt);
   return (
     <li className="flex flex-col gap-1 rounded-md border-2 border-rule bg-card p-2">
       <a href={photo.url} target="_blank" rel="noopener" className="block aspect-[4/3] overflow-hidden rounded bg-paper">
