@@ -11,12 +11,15 @@ export class ApiError extends Error {
   }
 }
 
-/** Fetches JSON from the app; throws ApiError with the server's message when not OK. */
+/** Fetches JSON from the app (a FormData body goes as a multipart form); throws ApiError with the server's message when not OK. */
 export async function fetchJson<T>(url: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
+  const { body } = init;
+  const form = body instanceof FormData;
   const response = await fetch(url, {
-    method: init.method ?? (init.body === undefined ? 'GET' : 'POST'),
-    headers: init.body === undefined ? {} : { 'content-type': 'application/json' },
-    body: init.body === undefined ? undefined : JSON.stringify(init.body),
+    method: init.method ?? (body === undefined ? 'GET' : 'POST'),
+    // The browser writes a form's content type itself, boundary included.
+    headers: body === undefined || form ? {} : { 'content-type': 'application/json' },
+    body: body === undefined ? undefined : form ? body : JSON.stringify(body),
     credentials: 'same-origin',
   });
   const data = (await response.json().catch(() => ({}))) as Record<string, unknown>;
