@@ -92,12 +92,9 @@ export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
 
   const errorFor = (f: LegLength) => formState.errors.legs?.[leg]?.[f]?.message;
 
-  const applyPreset = (p: PresetSettings) => {
+  const applyPreset = (p: PresetSettings, preset: PresetView) => {
     const u = values.unit;
-    // The picker hands over the settings of one listed preset: its name is recorded with the leg.
-    const listed = client.getQueryData<PresetView[]>(['presets']) ?? [];
-    const name = listed.find((x) => x.settings === p || JSON.stringify(x.settings) === JSON.stringify(p))?.name ?? '';
-    setValue(`legs.${leg}.preset`, name, { shouldDirty: true });
+    setValue(`legs.${leg}.preset`, preset.name, { shouldDirty: true });
     const finish = p.finish === 'cuff' ? 'cuff' : p.slope ? 'slope' : 'plain';
     setValue(`legs.${leg}.finish`, finish, { shouldDirty: true });
     for (const f of ['cuffDepth', 'hemSection', 'turnUnder', 'hemAllowance', 'slope'] as const) {

@@ -13,8 +13,8 @@ export type { PresetSettings } from '@/lib/preset-settings';
 interface Props {
   /** the unit the plan is in: presets in it are listed first */
   unit: 'in' | 'cm' | 'mm';
-  /** called with the tapped preset's settings */
-  onApply: (settings: PresetSettings) => void;
+  /** called with the tapped preset's settings, and the preset itself (its name goes on record) */
+  onApply: (settings: PresetSettings, preset: PresetView) => void;
   /** the leg's settings now, to keep as a personal preset (no save form without them) */
   current?: PresetSettings;
 }
@@ -58,7 +58,7 @@ function Picker({ unit, onApply, current }: Props) {
   const selected = chosen ?? house.find((p) => p.isDefault)?.id ?? null;
   const tap = (p: PresetView) => {
     setChosen(p.id);
-    onApply(p.settings);
+    onApply(p.settings, p);
   };
   return (
     <div className="flex flex-col gap-4">
