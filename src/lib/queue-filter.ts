@@ -1,6 +1,7 @@
 // The queue's filters as one pure function: the queue island narrows its table with it and the
 // morning's batch of cut sheets (GET /api/queue/sheets) picks its garments with it, so "filtered
 // as on screen" is the same code on both sides. No zod here: it ships in the queue's island.
+import { dueState } from '@/components/bench/due';
 import type { QueueRow } from './bench-types';
 import type { GarmentStep } from './garment-steps';
 
@@ -16,12 +17,6 @@ export interface QueueFilter {
 
 /** The filters the queue opens with. */
 export const DEFAULT_QUEUE_FILTER: QueueFilter = { step: 'open', who: 'all', due: 'all', search: '' };
-
-/** Where a due date stands on a given day (ISO dates compare as text). */
-function dueState(dueOn: string | null, today: string): 'overdue' | 'today' | 'later' | 'none' {
-  if (!dueOn) return 'none';
-  return dueOn < today ? 'overdue' : dueOn === today ? 'today' : 'later';
-}
 
 /** True when the row passes the filters for this user on this day. */
 export function matchesQueue(row: QueueRow, f: QueueFilter, userId: string, today: string): boolean {

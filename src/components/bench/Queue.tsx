@@ -13,10 +13,10 @@ import { ticketLabel } from '@/lib/bench-requests';
 import type { QueueRow } from '@/lib/bench-types';
 import { fetchJson } from '@/lib/fetch-json';
 import { GARMENT_STEPS } from '@/lib/garment-steps';
-import { matchesQueue, queueRank, queueSheetsHref } from '@/lib/queue-filter';
+import { DEFAULT_QUEUE_FILTER, matchesQueue, queueRank, queueSheetsHref, type QueueFilter } from '@/lib/queue-filter';
 import { DueBadge } from './DueBadge';
 import { dueState, todayIso } from './due';
-import { QueueFilters, type Filters } from './QueueFilters';
+import { QueueFilters } from './QueueFilters';
 import { StepButton } from './StepButton';
 import { useAssignees, useStepLabel } from './use-bench';
 
@@ -34,7 +34,7 @@ function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) 
   const queue = useQuery({ queryKey: ['queue'], queryFn: () => fetchJson<QueueRow[]>('/api/garments'), refetchInterval: 60_000 });
   const people = useAssignees();
   const label = useStepLabel();
-  const [filters, setFilters] = useState<Filters>({ step: 'open', who: 'all', due: 'all', search: '' });
+  const [filters, setFilters] = useState<QueueFilter>(DEFAULT_QUEUE_FILTER);
   // Own work first, then unassigned, then the rest; within each, the earliest due first.
   const [sorting, setSorting] = useState<SortingState>([{ id: 'rank', desc: false }, { id: 'due', desc: false }]);
   const today = todayIso();

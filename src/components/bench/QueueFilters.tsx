@@ -1,15 +1,6 @@
 import type { Person } from '@/lib/bench-types';
 import { GARMENT_STEPS, type GarmentStep } from '@/lib/garment-steps';
-
-/** What the queue is narrowed to. */
-export interface Filters {
-  /** 'open' = everything not yet collected */
-  step: 'open' | 'all' | GarmentStep;
-  /** 'mine-open' = mine and unassigned; otherwise a user id */
-  who: string;
-  due: 'all' | 'today' | 'overdue';
-  search: string;
-}
+import type { QueueFilter as Filters } from '@/lib/queue-filter';
 
 interface Props {
   value: Filters;
