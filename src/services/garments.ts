@@ -1,6 +1,6 @@
 // Garments on the bench: the queue, one garment's page, adding and editing them, and moving one
 // step along. A ticket's status follows its least advanced garment.
-import { and, asc, eq, isNull, or } from 'drizzle-orm';
+import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm';
 import type { z } from 'zod';
 import { db } from '@/db';
 import { customers, garments, member, tickets, user, type Garment } from '@/db/schema';
@@ -87,13 +87,9 @@ export async function visibleGarment(actor: Actor, id: string): Promise<Garment>
 
 /** Summaries of garments with their assignees' names. */
 export async function summaries(rows: Garment[]): Promise<GarmentSummary[]> {
-  const names = new Map<string, string>();
-  for (const g of rows) {
-    if (g.assigneeId && !names.has(g.assigneeId)) {
-      const [u] = await db.select({ name: user.name }).from(user).where(eq(user.id, g.assigneeId));
-      names.set(g.assigneeId, u?.name ?? '');
-    }
-  }
+  const ids = [...new Set(rows.flatMap((g) => (g.assigneeId ? [g.assigneeId] : [])))];
+  const people = ids.length ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, ids)) : [];
+  const names = new Map(people.map((u) => [u.id, u.name]));
   return rows.map((g) => ({
     id: g.id,
     description: g.description ?? 'Trousers',
