@@ -115,10 +115,16 @@ export async function getGarment(actor: Actor, id: string): Promise<GarmentDetai
 
 /** Sets the ticket's status to its least advanced garment's step. */
 export async function refreshTicketStatus(shopId: string, ticketId: string): Promise<GarmentStep> {
-  const steps = (await garmentsOfTicket(shopId, ticketId)).map((g) => g.status);
-  const status = leastAdvanced(steps);
-  await db.update(tickets).set({ status, updatedAt: new Date() }).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId)));
-  return status;
+  const where = and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId));
+  // Two garments of one ticket moved at once: the ticket row is locked before its garments are
+  // read, so the later of the two writes from a read that sees both moves.
+  return db.transaction(async (tx) => {
+    await tx.select({ id: tickets.id }).from(tickets).where(where).for('update');
+    const steps = await tx.select({ status: garments.status }).from(garments).where(and(eq(garments.shopId, shopId), eq(garments.ticketId, ticketId)));
+    const status = leastAdvanced(steps.map((g) => g.status));
+    await tx.update(tickets).set({ status, updatedAt: new Date() }).where(where);
+    return status;
+  });
 }
 
 /** Adds a garment to a ticket of the shop. */
