@@ -1,5 +1,5 @@
 // The shop's price list and counter settings, and the price lines on its tickets.
-import { and, asc, eq } from 'drizzle-orm';
+import { and, asc, eq, inArray } from 'drizzle-orm';
 import type { z } from 'zod';
 import { db } from '@/db';
 import { counterSettings, garments, measurements, payments, priceItems, priceLines, tickets, type CounterSettings, type PriceLine, type Ticket } from '@/db/schema';
@@ -136,7 +136,7 @@ export async function addLine(actor: Actor, ticketId: string, input: z.infer<typ
 /** What the pricing needs to know of each garment on the ticket, read from its measurements. */
 export async function garmentFacts(shopId: string, ticketId: string): Promise<GarmentFacts[]> {
   const rows = await db.select().from(garments).where(and(eq(garments.shopId, shopId), eq(garments.ticketId, ticketId))).orderBy(asc(garments.position));
-  const legs = rows.length === 0 ? [] : await db.select().from(measurements).where(eq(measurements.shopId, shopId));
+  const legs = rows.length === 0 ? [] : await db.select().from(measurements).where(and(eq(measurements.shopId, shopId), inArray(measurements.garmentId, rows.map((g) => g.id))));
   return rows.map((g, i) => {
     const own = legs.filter((m) => m.garmentId === g.id);
     // The fitting's finish wins over the one noted at intake.
