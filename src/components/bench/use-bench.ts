@@ -1,5 +1,6 @@
 // The queries every bench island shares: the shop's settings and its people.
 import { useQuery } from '@tanstack/react-query';
+import { useCallback } from 'react';
 import type { BenchSettings, Person } from '@/lib/bench-types';
 import { fetchJson } from '@/lib/fetch-json';
 import { stepLabel, type GarmentStep } from '@/lib/garment-steps';
@@ -16,6 +17,7 @@ export function useAssignees() {
 
 /** A function naming steps in the shop's own words. */
 export function useStepLabel(): (step: GarmentStep) => string {
-  const settings = useBenchSettings();
-  return (step) => stepLabel(step, settings.data?.stepLabels);
+  const labels = useBenchSettings().data?.stepLabels;
+  // The same function until the names change, so the queue's columns are not rebuilt every render.
+  return useCallback((step) => stepLabel(step, labels), [labels]);
 }
