@@ -2,6 +2,8 @@
 // claim slip and handing over. Mounted on the ticket page and on /counter/[ticketId].
 import { useQuery } from '@tanstack/react-query';
 import { FormMessage } from '@/components/Field';
+import { DueBadge } from '@/components/bench/DueBadge';
+import { ticketLabel } from '@/lib/bench-requests';
 import { fetchJson } from '@/lib/fetch-json';
 import { isGarmentStep, stepLabel } from '@/lib/garment-steps';
 import { withQuery } from '@/components/WithQuery';
@@ -33,13 +35,13 @@ function Panel({ ticketId, role: given, withTicketHeader = true }: Props) {
     <div className="flex flex-col gap-4">
       <div className={withTicketHeader ? 'flex flex-wrap items-baseline gap-x-6 gap-y-2' : 'sr-only'}>
         <p className="text-4xl font-extrabold" data-testid="ticket-number">
-          T-{s.ticket.number}
+          {ticketLabel(s.ticket.number)}
         </p>
         <p className="text-xl">{s.ticket.customerName ?? 'No customer named'}</p>
         <p className="text-xl">
           Status: <strong data-testid="ticket-status">{isGarmentStep(s.ticket.status) ? stepLabel(s.ticket.status) : s.ticket.status}</strong>
         </p>
-        {s.ticket.dueOn && <p className="text-xl">Due {s.ticket.dueOn}</p>}
+        {s.ticket.dueOn && <p className="text-xl">Due <DueBadge dueOn={s.ticket.dueOn} /></p>}
       </div>
       <PriceLinesCard s={s} canChange={can(role, ['prices', 'adjust']) && !collected && !s.payments.some((p) => p.purpose === 'balance')} />
       <PaymentsCard s={s} canTake={can(role, ['payments', 'take'])} />
