@@ -79,7 +79,7 @@ function Intake() {
               </select>
             </div>
             {garments.fields.length > 1 && (
-              <button type="button" onClick={() => garments.remove(i)} className="min-h-11 rounded border-2 border-ink px-3 font-semibold">
+              <button type="button" aria-label={`Remove: garment ${i + 1}`} onClick={() => garments.remove(i)} className="min-h-11 rounded border-2 border-ink px-3 font-semibold">
                 Remove
               </button>
             )}

@@ -101,6 +101,7 @@ function MemberRow({ m, isMe }: { m: StaffMember; isMe: boolean }) {
         {!isMe && (
           <button
             type="button"
+            aria-label={`Remove: ${m.name}`}
             onClick={() => {
               if (window.confirm(`Remove ${m.name} from the shop?`)) remove.mutate();
             }}
