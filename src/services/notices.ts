@@ -8,6 +8,7 @@ import { sendMail } from '@/lib/mail';
 import { formatMoney } from '@/lib/pricing/money';
 import { audit } from './audit';
 import { ServiceError } from './errors';
+import { isUuid } from './garments';
 import { counterSummary } from './payments';
 import { counterSettingsOf, shopTicket } from './prices';
 
@@ -87,7 +88,7 @@ export async function sendReadyNotice(actor: Actor, ticketId: string): Promise<N
 /** Tries a failed notice again by hand, whatever its count of attempts. */
 export async function retryNotice(actor: Actor, ticketId: string, noticeId: string): Promise<Notice> {
   await shopTicket(actor, ticketId);
-  const [row] = /^[0-9a-f-]{36}$/i.test(noticeId)
+  const [row] = isUuid(noticeId)
     ? await db.select().from(notices).where(and(eq(notices.id, noticeId), eq(notices.ticketId, ticketId), eq(notices.shopId, actor.shopId)))
     : [];
   if (!row) throw new ServiceError(404, 'No such notice on this ticket.');

@@ -12,9 +12,8 @@ import { isPathLike, safeName } from '@/lib/storage/safe-name';
 import { sniffImage, type ImageType } from '@/lib/storage/sniff-image';
 import { ServiceError } from './errors';
 import { audit } from './audit';
-import { garmentVisibleTo } from './garments';
+import { garmentVisibleTo, isUuid } from './garments';
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const THUMB_PX = 480;
 
 /** An upload refused for what it is: 413 too large, 415 not an image we take, 422 a bad name. */
@@ -50,7 +49,7 @@ function viewOf(row: StoredFile & { uploadedBy?: string | null }): PhotoView {
 
 /** The garment when the actor may see it, else a 404 (checked before an upload is read). */
 export async function garmentInShop(actor: Actor, garmentId: string) {
-  if (!UUID.test(garmentId)) throw new ServiceError(404, 'No such garment in this shop.');
+  if (!isUuid(garmentId)) throw new ServiceError(404, 'No such garment in this shop.');
   const [g] = await db
     .select({ id: garments.id, ticketId: garments.ticketId })
     .from(garments)
@@ -144,7 +143,7 @@ export async function addPhotos(actor: Actor, garmentId: string, uploads: Upload
 }
 
 async function photoInShop(actor: Actor, id: string): Promise<StoredFile> {
-  if (!UUID.test(id)) throw new ServiceError(404, 'No such photo in this shop.');
+  if (!isUuid(id)) throw new ServiceError(404, 'No such photo in this shop.');
   const [found] = await db
     .select({ file: files })
     .from(files)

@@ -8,8 +8,8 @@ import { isAllowanceError, parseLength, validateCuffInput, validateHemInput } fr
 import { LENGTHS_OF, PRESET_LENGTHS, type PresetSettings, type PresetView, type presetCreateInput, type presetUpdateInput } from '@/lib/preset-settings';
 import { ServiceError } from './errors';
 import { audit } from './audit';
+import { isUuid } from './garments';
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** Keeps only the lengths the finish uses (a hem allowance means nothing on a cuff). */
 export function normaliseSettings(s: PresetSettings): PresetSettings {
@@ -61,7 +61,7 @@ export async function listPresets(actor: Actor): Promise<PresetView[]> {
 
 /** 'house' or 'own' for a preset the actor can see, or null (someone else's, another shop's, no such id). */
 export async function presetScope(actor: Actor, id: string): Promise<'house' | 'own' | null> {
-  if (!UUID.test(id)) return null;
+  if (!isUuid(id)) return null;
   const [row] = await db.select({ ownerId: presets.ownerId }).from(presets).where(and(eq(presets.id, id), visibleTo(actor)));
   if (!row) return null;
   return row.ownerId === null ? 'house' : 'own';
@@ -109,7 +109,7 @@ export async function createPreset(actor: Actor, input: z.output<typeof presetCr
 }
 
 async function visibleRow(actor: Actor, id: string): Promise<Preset> {
-  if (!UUID.test(id)) throw new ServiceError(404, 'No such preset.');
+  if (!isUuid(id)) throw new ServiceError(404, 'No such preset.');
   const [row] = await db.select().from(presets).where(and(eq(presets.id, id), visibleTo(actor)));
   if (!row) throw new ServiceError(404, 'No such preset.');
   return row;

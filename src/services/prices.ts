@@ -12,8 +12,7 @@ import { priceTicket, type GarmentFacts, type PriceList } from '@/lib/pricing/pr
 import { needsLetOut } from '@/lib/pricing/taper-let-out';
 import { audit } from './audit';
 import { ServiceError } from './errors';
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+import { isUuid } from './garments';
 
 /** The shop's counter settings as the counter reads them. */
 export interface CounterView {
@@ -30,7 +29,7 @@ export interface PriceListView extends CounterView {
 
 /** A ticket of the actor's shop; 404 for another shop's ticket or an id that is not one. */
 export async function shopTicket(actor: Pick<Actor, 'shopId'>, ticketId: string): Promise<Ticket> {
-  if (!UUID.test(ticketId)) throw new ServiceError(404, 'No such ticket in this shop.');
+  if (!isUuid(ticketId)) throw new ServiceError(404, 'No such ticket in this shop.');
   const [row] = await db.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
   if (!row) throw new ServiceError(404, 'No such ticket in this shop.');
   return row;
