@@ -1,5 +1,5 @@
 // A labelled input with its error message, wired to react-hook-form.
-import type { InputHTMLAttributes } from 'react';
+import type { InputHTMLAttributes, ReactNode } from 'react';
 import type { FieldError, UseFormRegisterReturn } from 'react-hook-form';
 
 interface Props extends InputHTMLAttributes<HTMLInputElement> {
@@ -9,34 +9,47 @@ interface Props extends InputHTMLAttributes<HTMLInputElement> {
   hint?: string;
 }
 
+/** The ids an input points to with aria-describedby: its error and its hint, when shown. */
+export function describedBy(id: string, error: unknown, hint: unknown): string | undefined {
+  return [error ? `${id}-error` : '', hint ? `${id}-hint` : ''].filter(Boolean).join(' ') || undefined;
+}
+
+/** A field's frame: label above, the input, then the hint and the error in words. */
+export function FieldFrame({ id, label, hint, error, children }: { id: string; label: string; hint?: string; error?: string; children: ReactNode }) {
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="font-semibold">
+        {label}
+      </label>
+      {children}
+      {hint && (
+        <p id={`${id}-hint`} className="text-sm text-muted">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p id={`${id}-error`} role="alert" className="text-sm font-semibold text-cut">
+          {error}
+        </p>
+      )}
+    </div>
+  );
+}
+
 /** One form field: label above, input, then the error in words. */
 export function Field({ label, registration, error, hint, id, ...input }: Props) {
   const fieldId = id ?? registration.name;
-  const describedBy = [error ? `${fieldId}-error` : '', hint ? `${fieldId}-hint` : ''].filter(Boolean).join(' ') || undefined;
   return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor={fieldId} className="font-semibold">
-        {label}
-      </label>
+    <FieldFrame id={fieldId} label={label} hint={hint} error={error?.message}>
       <input
         id={fieldId}
         {...input}
         {...registration}
         aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy}
+        aria-describedby={describedBy(fieldId, error, hint)}
         className="rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent"
       />
-      {hint && (
-        <p id={`${fieldId}-hint`} className="text-sm text-muted">
-          {hint}
-        </p>
-      )}
-      {error && (
-        <p id={`${fieldId}-error`} role="alert" className="text-sm font-semibold text-cut">
-          {error.message}
-        </p>
-      )}
-    </div>
+    </FieldFrame>
   );
 }
 
@@ -54,7 +67,7 @@ export function SubmitButton({ busy, children }: { busy: boolean; children: stri
 }
 
 /** A form-level message: error (red) or done (green). */
-export function FormMessage({ kind, children }: { kind: 'error' | 'ok'; children: React.ReactNode }) {
+export function FormMessage({ kind, children }: { kind: 'error' | 'ok'; children: ReactNode }) {
   const look = kind === 'error' ? 'border-cut bg-cut-soft text-cut' : 'border-ok bg-ok-soft text-ok';
   return (
     <p role={kind === 'error' ? 'alert' : 'status'} className={`rounded border-2 px-3 py-2 font-semibold ${look}`}>

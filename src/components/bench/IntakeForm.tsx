@@ -2,7 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation, useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useFieldArray, useForm, type Resolver } from 'react-hook-form';
-import { Field, FormMessage, SubmitButton } from '@/components/Field';
+import { describedBy, Field, FieldFrame, FormMessage, SubmitButton } from '@/components/Field';
 import { withQuery } from '@/components/WithQuery';
 import { intakeRequest, type Intake, type IntakeInput } from '@/lib/bench-requests';
 import type { CustomerCard } from '@/lib/bench-types';
@@ -47,14 +47,12 @@ function Intake() {
           </label>
         </div>
         {who === 'existing' ? (
-          <div className="flex flex-col gap-1">
-            <label htmlFor="customerId" className="font-semibold">Customer</label>
-            <select id="customerId" {...register('customerId')} className={SELECT} aria-invalid={e.customerId ? true : undefined}>
+          <FieldFrame id="customerId" label="Customer" error={e.customerId?.message}>
+            <select id="customerId" {...register('customerId')} className={SELECT} aria-invalid={e.customerId ? true : undefined} aria-describedby={describedBy('customerId', e.customerId, undefined)}>
               <option value="">{customers.isPending ? 'Loading…' : 'Choose…'}</option>
               {customers.data?.map((c) => <option key={c.id} value={c.id}>{c.name}{c.phone ? ` · ${c.phone}` : ''}</option>)}
             </select>
-            {e.customerId && <p role="alert" className="text-sm font-semibold text-cut">{e.customerId.message}</p>}
-          </div>
+          </FieldFrame>
         ) : (
           <div className="grid gap-3 sm:grid-cols-2">
             <Field label="Name" registration={register('customer.name')} error={e.customer?.name} id="c-name" autoComplete="off" />

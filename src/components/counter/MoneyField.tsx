@@ -1,6 +1,7 @@
 // A money input: the person types "25.00" (or "25,5"), the form holds integer minor units.
 import { useState } from 'react';
 import { useController, type Control, type FieldValues, type Path } from 'react-hook-form';
+import { describedBy, FieldFrame } from '@/components/Field';
 import { CURRENCIES, parseMoney, type Currency } from '@/lib/pricing/money';
 
 interface Props<T extends FieldValues> {
@@ -22,12 +23,8 @@ export function plainAmount(minor: number, currency: Currency): string {
 export function MoneyField<T extends FieldValues>({ control, name, label, currency, id, hint }: Props<T>) {
   const { field, fieldState } = useController({ control, name });
   const [text, setText] = useState(() => (typeof field.value === 'number' ? plainAmount(field.value, currency) : ''));
-  const describedBy = [fieldState.error ? `${id}-error` : '', hint ? `${id}-hint` : ''].filter(Boolean).join(' ') || undefined;
   return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="font-semibold">
-        {label}
-      </label>
+    <FieldFrame id={id} label={label} hint={hint} error={fieldState.error?.message}>
       <input
         id={id}
         ref={field.ref}
@@ -41,19 +38,9 @@ export function MoneyField<T extends FieldValues>({ control, name, label, curren
           field.onChange(parseMoney(e.target.value, currency) ?? Number.NaN);
         }}
         aria-invalid={fieldState.error ? true : undefined}
-        aria-describedby={describedBy}
+        aria-describedby={describedBy(id, fieldState.error, hint)}
         className="rounded border-2 border-rule bg-card px-3 py-2 text-lg tabular-nums focus:border-accent"
       />
-      {hint && (
-        <p id={`${id}-hint`} className="text-sm text-muted">
-          {hint}
-        </p>
-      )}
-      {fieldState.error && (
-        <p id={`${id}-error`} role="alert" className="text-sm font-semibold text-cut">
-          {fieldState.error.message}
-        </p>
-      )}
-    </div>
+    </FieldFrame>
   );
 }
