@@ -2,9 +2,9 @@
 // filtered on screen. Reads the garment, its ticket, customer, assignee and fitting, plans each
 // leg with the engine and renders with the cut-sheet renderer. Shop-scoped through the garment
 // services (another shop's garment, or an apprentice's invisible one, is 404).
-import { eq } from 'drizzle-orm';
+import { and, eq, inArray } from 'drizzle-orm';
 import { db } from '@/db';
-import { customers, tickets, user, type Garment } from '@/db/schema';
+import { customers, garments, tickets, user, type Garment } from '@/db/schema';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import type { Actor } from '@/lib/api';
 import { scaleUnit, ticketLabel } from '@/lib/bench-requests';
@@ -14,10 +14,11 @@ import type { CutSheetData, PageSize, Side } from '@/lib/cut-sheet/types';
 import { legMainRequest, legTaperRequest } from '@/lib/leg-plan';
 import { legFormValues, type LegValues, LEG_LENGTHS, type SavedLeg } from '@/lib/measurement-request';
 import { planRequest } from '@/lib/plan-request';
+import type { QueueRow } from '@/lib/bench-types';
 import { filterQueue, type QueueFilter } from '@/lib/queue-filter';
 import { ServiceError } from './errors';
-import { listQueue, visibleGarment } from './garments';
-import { legsOf } from './measurements';
+import { garmentVisibleTo, listQueue, visibleGarment } from './garments';
+import { legsOf, legsOfGarments } from './measurements';
 import { benchSettings } from './shop-settings';
 
 /** How a sheet is printed; anything left out comes from the shop's bench settings. */
@@ -92,28 +93,36 @@ export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precisio
   return orders;
 }
 
-async function headerOf(actor: Actor, g: Garment, baseUrl: string, pageSize: PageSize): Promise<SheetHeader & { number: number }> {
-  const [t] = await db.select({ number: tickets.number, customerId: tickets.customerId }).from(tickets).where(eq(tickets.id, g.ticketId));
-  const [c] = t?.customerId ? await db.select({ name: customers.name }).from(customers).where(eq(customers.id, t.customerId)) : [];
-  const [who] = g.assigneeId ? await db.select({ name: user.name }).from(user).where(eq(user.id, g.assigneeId)) : [];
+/** The names a sheet's header shows beside the garment (a queue row carries them already). */
+type HeaderNames = Pick<QueueRow, 'ticketNumber' | 'customerName' | 'assigneeName'>;
+
+function headerOf(actor: Actor, g: Garment, names: HeaderNames, baseUrl: string, pageSize: PageSize): SheetHeader {
   const what = g.description ?? 'Trousers';
   return {
-    number: t!.number,
     shop: actor.shopName,
-    ticket: ticketLabel(t!.number),
+    ticket: ticketLabel(names.ticketNumber),
     // The customer's name beside the garment matches the sheet to the bag it travels with.
-    garment: c?.name ? `${what} (${c.name})` : what,
+    garment: names.customerName ? `${what} (${names.customerName})` : what,
     due: g.dueOn,
-    assignee: who?.name ?? null,
+    assignee: names.assigneeName,
     link: `${baseUrl.replace(/\/+$/, '')}/garments/${g.id}`,
     pageSize,
   };
 }
 
-async function sheetOf(actor: Actor, g: Garment, baseUrl: string, scale: Awaited<ReturnType<typeof scaleOf>>): Promise<{ data: CutSheetData; number: number }> {
-  const orders = fittingOrders(await legsOf(g.id), scale.unit, scale.precision);
-  const { number, ...header } = await headerOf(actor, g, baseUrl, scale.pageSize);
-  return { data: buildCutSheet(header, orders), number };
+async function namesOf(g: Garment): Promise<HeaderNames> {
+  const [row] = await db
+    .select({ ticketNumber: tickets.number, customerName: customers.name, assigneeName: user.name })
+    .from(tickets)
+    .leftJoin(customers, eq(customers.id, tickets.customerId))
+    .leftJoin(user, eq(user.id, g.assigneeId ?? ''))
+    .where(eq(tickets.id, g.ticketId));
+  return row!;
+}
+
+function sheetOf(actor: Actor, g: Garment, saved: SavedLeg[], names: HeaderNames, baseUrl: string, scale: Awaited<ReturnType<typeof scaleOf>>): CutSheetData {
+  const orders = fittingOrders(saved, scale.unit, scale.precision);
+  return buildCutSheet(headerOf(actor, g, names, baseUrl, scale.pageSize), orders);
 }
 
 const slug = (text: string) =>
@@ -127,8 +136,9 @@ const slug = (text: string) =>
 export async function garmentSheet(actor: Actor, garmentId: string, opts: SheetOptions, baseUrl: string): Promise<SheetFile> {
   const g = await visibleGarment(actor, garmentId);
   const scale = await scaleOf(actor.shopId, opts);
-  const { data, number } = await sheetOf(actor, g, baseUrl, scale);
-  return { bytes: await renderCutSheet(data), filename: `${ticketLabel(number)}-${slug(g.description ?? 'trousers')}.pdf` };
+  const names = await namesOf(g);
+  const data = sheetOf(actor, g, await legsOf(g.id), names, baseUrl, scale);
+  return { bytes: await renderCutSheet(data), filename: `${ticketLabel(names.ticketNumber)}-${slug(g.description ?? 'trousers')}.pdf` };
 }
 
 /** The queue as filtered on screen, one sheet per garment; garments without a fitting are listed on a last page. */
@@ -136,13 +146,17 @@ export async function queueSheets(actor: Actor, filter: QueueFilter, today: stri
   const rows = filterQueue(await listQueue(actor), filter, actor.userId, today);
   if (rows.length === 0) throw new ServiceError(422, 'No garments in the queue with these filters.');
   const scale = await scaleOf(actor.shopId, opts);
+  const ids = rows.map((r) => r.id);
+  // listQueue only lists what the actor may see; the full rows are read once, scoped again.
+  const full = new Map((await db.select().from(garments).where(and(inArray(garments.id, ids), garmentVisibleTo(actor)))).map((g) => [g.id, g]));
+  const fittings = await legsOfGarments(ids);
   const sheets: CutSheetData[] = [];
   const skipped: string[] = [];
   for (const row of rows) {
-    // listQueue only lists what the actor may see; visibleGarment reads the full row, scoped again.
-    const g = await visibleGarment(actor, row.id);
+    const g = full.get(row.id);
+    if (!g) continue;
     try {
-      sheets.push((await sheetOf(actor, g, baseUrl, scale)).data);
+      sheets.push(sheetOf(actor, g, fittings.get(g.id) ?? [], row, baseUrl, scale));
     } catch (e) {
       if (!(e instanceof ServiceError)) throw e;
       skipped.push(`${ticketLabel(row.ticketNumber)} ${row.description}: ${e.message === NO_FITTING ? 'no fitting measurements yet' : e.message}`);

@@ -1,6 +1,6 @@
 // Fitting measurements per leg: read with the engine's parser on save, kept as typed plus exact
 // mm, and every changed value recorded in the audit history (who, when, old and new).
-import { asc, eq } from 'drizzle-orm';
+import { asc, eq, inArray } from 'drizzle-orm';
 import { db } from '@/db';
 import { measurements, user } from '@/db/schema';
 import { isAllowanceError, parseLength } from '@/lib/allowance';
@@ -36,21 +36,33 @@ export function readLengths(input: Measurements): ReadLengths {
 
 /** Both legs' saved measurements of a garment (none until the first fitting is saved). */
 export async function legsOf(garmentId: string): Promise<SavedLeg[]> {
+  return (await legsOfGarments([garmentId])).get(garmentId) ?? [];
+}
+
+/** The saved legs of several garments in one query, by garment id (absent until a fitting is saved). */
+export async function legsOfGarments(garmentIds: string[]): Promise<Map<string, SavedLeg[]>> {
+  const byGarment = new Map<string, SavedLeg[]>();
+  if (garmentIds.length === 0) return byGarment;
   const rows = await db
     .select({ m: measurements, takenBy: user.name })
     .from(measurements)
     .leftJoin(user, eq(user.id, measurements.takenById))
-    .where(eq(measurements.garmentId, garmentId))
+    .where(inArray(measurements.garmentId, garmentIds))
     .orderBy(asc(measurements.leg));
-  return rows.map(({ m, takenBy }) => ({
-    leg: m.leg,
-    unit: m.unit,
-    finish: m.finish,
-    preset: m.preset,
-    values: m.values as SavedLeg['values'],
-    takenAt: m.takenAt.toISOString(),
-    takenBy,
-  }));
+  for (const { m, takenBy } of rows) {
+    const legs = byGarment.get(m.garmentId) ?? [];
+    legs.push({
+      leg: m.leg,
+      unit: m.unit,
+      finish: m.finish,
+      preset: m.preset,
+      values: m.values as SavedLeg['values'],
+      takenAt: m.takenAt.toISOString(),
+      takenBy,
+    });
+    byGarment.set(m.garmentId, legs);
+  }
+  return byGarment;
 }
 
 /** Saves both legs; each value that changed becomes one audit event. Answers the fitting as saved. */
