@@ -9,7 +9,7 @@ import { formatMoney } from '@/lib/pricing/money';
 import { audit } from './audit';
 import { ServiceError } from './errors';
 import { isUuid } from './garments';
-import { counterSummary } from './payments';
+import { summaryOf } from './payments';
 import { counterSettingsOf, shopTicket } from './prices';
 
 /** Automatic retries before a notice waits for someone to press "retry". */
@@ -25,8 +25,8 @@ export async function listNotices(actor: Actor, ticketId: string): Promise<Notic
 
 /** The ready notice's subject and text: the balance due and the shop's hours. */
 export async function readyMessage(shopId: string, ticketId: string): Promise<{ to: string | null; subject: string; body: string }> {
-  const summary = await counterSummary({ shopId }, ticketId);
   const settings = await counterSettingsOf(shopId);
+  const summary = await summaryOf(await shopTicket({ shopId }, ticketId), settings);
   const [shop] = await db.select({ name: organization.name }).from(organization).where(eq(organization.id, shopId));
   const number = `T-${summary.ticket.number}`;
   const due = summary.due > 0 ? `Balance due at pickup: ${formatMoney(summary.due, summary.currency)}.` : 'Nothing is left to pay: the ticket is paid in full.';

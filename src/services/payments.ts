@@ -4,7 +4,7 @@ import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import type { z } from 'zod';
 import { db } from '@/db';
-import { customers, garments, paymentEvents, paymentLinks, payments, tickets, type Payment, type PaymentLink, type PriceLine } from '@/db/schema';
+import { customers, garments, paymentEvents, paymentLinks, payments, tickets, type Payment, type PaymentLink, type PriceLine, type Ticket } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import type { paymentInput } from '@/lib/counter-request';
 import { paymentClient, verifyWebhook, webhookSecret } from '@/lib/payment-service';
@@ -13,7 +13,7 @@ import type { Currency } from '@/lib/pricing/money';
 import { balanceOf } from '@/lib/pricing/price-lines';
 import { audit } from './audit';
 import { ServiceError } from './errors';
-import { counterSettingsOf, linesOf, shopTicket } from './prices';
+import { counterSettingsOf, linesOf, shopTicket, type CounterView } from './prices';
 
 /** Everything the counter panel shows about a ticket's money. */
 export interface CounterSummary {
@@ -30,11 +30,16 @@ export interface CounterSummary {
 /** The ticket's lines, payments, balance and open payment link. */
 export async function counterSummary(actor: Pick<Actor, 'shopId'>, ticketId: string): Promise<CounterSummary> {
   const ticket = await shopTicket(actor, ticketId);
+  return summaryOf(ticket, await counterSettingsOf(actor.shopId));
+}
+
+/** The summary of a ticket already read for the shop, with the shop's settings already read. */
+export async function summaryOf(ticket: Ticket, { currency }: Pick<CounterView, 'currency'>): Promise<CounterSummary> {
+  const { shopId, id: ticketId } = ticket;
   const [customer] = ticket.customerId ? await db.select().from(customers).where(eq(customers.id, ticket.customerId)) : [];
-  const lines = await linesOf(actor.shopId, ticketId);
-  const paidRows = await db.select().from(payments).where(and(eq(payments.shopId, actor.shopId), eq(payments.ticketId, ticketId))).orderBy(asc(payments.at));
-  const [link] = await db.select().from(paymentLinks).where(and(eq(paymentLinks.shopId, actor.shopId), eq(paymentLinks.ticketId, ticketId))).orderBy(desc(paymentLinks.createdAt)).limit(1);
-  const { currency } = await counterSettingsOf(actor.shopId);
+  const lines = await linesOf(shopId, ticketId);
+  const paidRows = await db.select().from(payments).where(and(eq(payments.shopId, shopId), eq(payments.ticketId, ticketId))).orderBy(asc(payments.at));
+  const [link] = await db.select().from(paymentLinks).where(and(eq(paymentLinks.shopId, shopId), eq(paymentLinks.ticketId, ticketId))).orderBy(desc(paymentLinks.createdAt)).limit(1);
   return {
     ticket: { id: ticket.id, number: ticket.number, status: ticket.status, dueOn: ticket.dueOn, customerName: customer?.name ?? null, customerEmail: customer?.email ?? null },
     currency,
@@ -196,9 +201,9 @@ export async function pickUp(actor: Actor, ticketId: string): Promise<CounterSum
 
 /** The claim slip's data for a ticket of the actor's shop. */
 export async function claimSlipData(actor: Actor, ticketId: string): Promise<ClaimSlipData> {
-  const summary = await counterSummary(actor, ticketId);
   const ticket = await shopTicket(actor, ticketId);
   const settings = await counterSettingsOf(actor.shopId);
+  const summary = await summaryOf(ticket, settings);
   const items = await db.select({ description: garments.description, kind: garments.kind }).from(garments).where(and(eq(garments.ticketId, ticketId), eq(garments.shopId, actor.shopId))).orderBy(asc(garments.position));
   return {
     shopName: actor.shopName,
