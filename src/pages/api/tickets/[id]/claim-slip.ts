@@ -1,9 +1,8 @@
 // The customer's claim slip for a ticket, as a PDF to print at intake.
 import type { APIRoute } from 'astro';
-import { guard } from '@/lib/api';
+import { guard, problem } from '@/lib/api';
 import { renderClaimSlip } from '@/lib/claim-slip/render';
 import { ServiceError } from '@/services/errors';
-import { problem } from '@/lib/api';
 import { claimSlipData } from '@/services/payments';
 
 export const prerender = false;

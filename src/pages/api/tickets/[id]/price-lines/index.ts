@@ -13,7 +13,7 @@ export const GET: APIRoute = async ({ locals, params }) => {
   return run(() => listLines(actor, params.id ?? ''));
 };
 
-/** Adds a line (the counter's money work is guarded by the pickup permission). */
+/** Adds a line from the list, or an adjustment with its reason. */
 export const POST: APIRoute = async ({ locals, request, params }) => {
   const actor = guard(locals, ['prices', 'adjust']);
   if (actor instanceof Response) return actor;
