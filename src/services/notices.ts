@@ -49,6 +49,16 @@ export async function readyMessage(shopId: string, ticketId: string): Promise<{ 
 /** Tries one delivery and records the outcome; a failure schedules the next automatic try. */
 export async function attemptDelivery(notice: Notice): Promise<Notice> {
   const attempts = notice.attempts + 1;
+  // The attempt is claimed first, so the timer and a retry by hand at the same moment send one mail.
+  const [claimed] = await db
+    .update(notices)
+    .set({ attempts, nextAttemptAt: null })
+    .where(and(eq(notices.id, notice.id), eq(notices.attempts, notice.attempts), ne(notices.status, 'sent')))
+    .returning({ id: notices.id });
+  if (!claimed) {
+    const [now] = await db.select().from(notices).where(eq(notices.id, notice.id));
+    return now!;
+  }
   try {
     await sendMail({ to: notice.to, subject: notice.subject, text: notice.body });
     const [row] = await db.update(notices).set({ status: 'sent', attempts, sentAt: new Date(), lastError: null, nextAttemptAt: null }).where(eq(notices.id, notice.id)).returning();
