@@ -9,7 +9,7 @@ import { nextStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
 import { can } from '@/lib/roles';
 import { audit } from './audit';
 import { ServiceError } from './errors';
-import { garmentsOfTicket, garmentVisibleTo, isUuid, moveVisible, refreshTicketStatus, staffOf, summaries } from './garments';
+import { garmentsOfTicket, garmentVisibleTo, isUuid, moveVisible, staffOf, summaries } from './garments';
 
 /** A ticket as listed: the row plus who it is for and how many garments it holds. */
 export type TicketListItem = Ticket & { customerName: string | null; garmentCount: number };
@@ -107,8 +107,8 @@ export async function moveTicket(actor: Actor, id: string, to: GarmentStep): Pro
     throw new ServiceError(422, `Some garments of T-${visible.number} are someone else's: move yours one by one.`);
   }
   if (behind.length === 0) throw new ServiceError(422, `Ticket T-${visible.number} has no garments yet: add one first.`);
+  // Each move sets the ticket's status from its garments; the last one leaves it right.
   for (const g of behind) await moveVisible(actor, g, to);
-  await refreshTicketStatus(actor.shopId, id);
   const [row] = await db.select().from(tickets).where(eq(tickets.id, id));
   return row!;
 }
