@@ -3,6 +3,9 @@
 import { z } from 'zod';
 import { GARMENT_STEPS } from './garment-steps';
 
+// Kept here for the services; the islands import it from garment-steps, which carries no zod.
+export { ticketLabel } from './garment-steps';
+
 const blankToNull = (v: string | null | undefined) => (v === '' || v === undefined ? null : v);
 
 /** A due date as typed in a date input: YYYY-MM-DD, or blank for none. */
@@ -72,11 +75,6 @@ export const settingsRequest = z.object({
   scale: z.enum(SCALES, { error: 'Choose inches (1/8 or 1/16), cm or mm.' }),
   stepLabels: z.partialRecord(z.enum(GARMENT_STEPS), z.string().trim().max(40, 'Keep a step name under 40 characters.')).default({}),
 });
-
-/** A ticket's number as said at the counter. */
-export function ticketLabel(number: number): string {
-  return `T-${number}`;
-}
 
 /** The body of PATCH /api/customers/[id]: any of name, phone, e-mail, notes. */
 export const customerPatch = newCustomer.partial();

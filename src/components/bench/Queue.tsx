@@ -9,10 +9,9 @@ import {
 } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { withQuery } from '@/components/WithQuery';
-import { ticketLabel } from '@/lib/bench-requests';
 import type { QueueRow } from '@/lib/bench-types';
 import { fetchJson } from '@/lib/fetch-json';
-import { GARMENT_STEPS } from '@/lib/garment-steps';
+import { GARMENT_STEPS, ticketLabel } from '@/lib/garment-steps';
 import { DEFAULT_QUEUE_FILTER, matchesQueue, queueRank, queueSheetsHref, type QueueFilter } from '@/lib/queue-filter';
 import { DueBadge } from './DueBadge';
 import { dueState, todayIso } from './due';

@@ -3,9 +3,8 @@
 import { useQuery } from '@tanstack/react-query';
 import { FormMessage } from '@/components/Field';
 import { DueBadge } from '@/components/bench/DueBadge';
-import { ticketLabel } from '@/lib/bench-requests';
 import { fetchJson } from '@/lib/fetch-json';
-import { isGarmentStep, stepLabel } from '@/lib/garment-steps';
+import { isGarmentStep, stepLabel, ticketLabel } from '@/lib/garment-steps';
 import { withQuery } from '@/components/WithQuery';
 import { can, type Role } from '@/lib/roles';
 import { NoticesCard } from './NoticesCard';
