@@ -13,6 +13,7 @@ import type { Currency } from '@/lib/pricing/money';
 import { balanceOf } from '@/lib/pricing/price-lines';
 import { audit } from './audit';
 import { ServiceError } from './errors';
+import { expireOpenLinks } from './payment-links';
 import { counterSettingsOf, linesOf, shopTicket, type CounterView } from './prices';
 
 /** Everything the counter panel shows about a ticket's money. */
@@ -77,22 +78,9 @@ export async function takePayment(actor: Actor, ticketId: string, input: z.infer
     throw e;
   }
   await audit(actor.shopId, actor.userId, `payment.${input.purpose}`, ticketId, { method: input.method, amountMinor: input.amountMinor });
+  // Once the balance is paid at the counter, the customer must not be able to pay it again online.
   if (input.purpose === 'balance') await expireOpenLinks(ticketId);
   return counterSummary(actor, ticketId);
-}
-
-// Once the balance is paid at the counter, the customer must not be able to pay it again online.
-async function expireOpenLinks(ticketId: string): Promise<void> {
-  const open = await db.select().from(paymentLinks).where(and(eq(paymentLinks.ticketId, ticketId), eq(paymentLinks.status, 'open')));
-  const client = paymentClient();
-  for (const link of open) {
-    try {
-      await client?.checkout.sessions.expire(link.sessionId);
-    } catch (e) {
-      console.warn(`Could not expire payment session ${link.sessionId}: ${(e as Error).message}`);
-    }
-    await db.update(paymentLinks).set({ status: 'expired' }).where(eq(paymentLinks.id, link.id));
-  }
 }
 
 /** A payment link for the balance due; an open link for the same amount is reused. */

@@ -13,6 +13,7 @@ import { needsLetOut } from '@/lib/pricing/taper-let-out';
 import { audit } from './audit';
 import { ServiceError } from './errors';
 import { isUuid } from './garments';
+import { expireOpenLinks } from './payment-links';
 
 /** The shop's counter settings as the counter reads them. */
 export interface CounterView {
@@ -114,6 +115,7 @@ export async function priceFromGarments(actor: Actor, ticketId: string, input: z
       await tx.insert(priceLines).values(lines.map((l, i) => ({ ...l, shopId: actor.shopId, ticketId, source: 'auto' as const, createdById: actor.userId, createdAt: new Date(at + i) })));
     }
   });
+  await expireOpenLinks(ticketId);
   await audit(actor.shopId, actor.userId, 'prices.from-garments', ticketId, { lines: lines.length, rush: input.rush });
   return { lines: await linesOf(actor.shopId, ticketId), unpriced };
 }
@@ -128,6 +130,7 @@ export async function addLine(actor: Actor, ticketId: string, input: z.infer<typ
       ? { key: input.key, label: entry!.label, amountMinor: entry!.amountMinor, reason: null }
       : { key: null, label: input.label, amountMinor: input.amountMinor, reason: input.reason };
   const [row] = await db.insert(priceLines).values({ ...values, source: input.source, shopId: actor.shopId, ticketId, createdById: actor.userId }).returning();
+  await expireOpenLinks(ticketId);
   await audit(actor.shopId, actor.userId, input.source === 'adjust' ? 'prices.adjusted' : 'prices.line-added', ticketId, { amountMinor: row!.amountMinor, reason: row!.reason });
   return row!;
 }

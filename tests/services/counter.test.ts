@@ -216,6 +216,15 @@ describe('payment webhook', () => {
     expect((await pay.receiveWebhook(late.payload, late.signature)).status).toBe(409);
     expect(await db.select().from(payments).where(eq(payments.ticketId, cash.id))).toHaveLength(1);
   });
+
+  it('refuses a link made before the price changed, so a stale amount cannot settle the balance', async () => {
+    const t = await priced(a);
+    const stale = await openLink(a, t.id, 2600);
+    await prices.addLine(a.counter, t.id, { source: 'list', key: 'rush' });
+    const paid = signedEvent(completed(stale, 2600));
+    expect((await pay.receiveWebhook(paid.payload, paid.signature)).status).toBe(409);
+    expect((await pay.counterSummary(a, t.id)).due).toBe(3600);
+  });
 });
 
 describe('ready notices', () => {
