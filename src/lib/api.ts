@@ -1,4 +1,5 @@
 // Small helpers every API route uses: typed JSON answers, the permission guard, body parsing.
+import { isAPIError } from 'better-auth/api';
 import type { z } from 'zod';
 import { ServiceError } from '@/services/errors';
 import { can, type Permission, type Role } from './roles';
@@ -58,12 +59,19 @@ export async function readBody<S extends z.ZodType>(request: Request, schema: S)
   return problem(422, 'Some fields need attention.', issues);
 }
 
-/** Runs a service call, turning ServiceError into its JSON answer. */
+/** The JSON answer for a refusal a service (or better-auth under it) threw; anything else is rethrown. */
+export function refusal(e: unknown): Response {
+  if (e instanceof ServiceError) return problem(e.status, e.message);
+  // better-auth refuses in its own terms: an address taken a moment ago, a member it will not change.
+  if (isAPIError(e) && e.statusCode >= 400 && e.statusCode < 500) return problem(e.statusCode, e.body?.message ?? e.message);
+  throw e;
+}
+
+/** Runs a service call, turning its refusals into their JSON answers. */
 export async function run<T>(work: () => Promise<T>, status = 200): Promise<Response> {
   try {
     return json(await work(), status);
   } catch (e) {
-    if (e instanceof ServiceError) return problem(e.status, e.message);
-    throw e;
+    return refusal(e);
   }
 }

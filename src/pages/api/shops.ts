@@ -1,9 +1,8 @@
 // Sign-up: creates a shop and its first lead, and signs the lead in.
 import type { APIRoute } from 'astro';
-import { json, problem, readBody } from '@/lib/api';
+import { json, readBody, refusal } from '@/lib/api';
 import { shopSignUpInput } from '@/lib/account-inputs';
 import { createShop } from '@/services/shops';
-import { ServiceError } from '@/services/errors';
 
 /** Public by design: anyone may open a new shop. */
 export const POST: APIRoute = async ({ request }) => {
@@ -13,7 +12,6 @@ export const POST: APIRoute = async ({ request }) => {
     const { shopId, headers } = await createShop(input);
     return json({ shopId }, 201, headers);
   } catch (e) {
-    if (e instanceof ServiceError) return problem(e.status, e.message);
-    throw e;
+    return refusal(e);
   }
 };

@@ -3,10 +3,9 @@
 // left out because they have no fitting yet.
 import type { APIRoute } from 'astro';
 import { BETTER_AUTH_URL } from 'astro:env/server';
-import { guard, problem } from '@/lib/api';
+import { guard, problem, refusal } from '@/lib/api';
 import { fieldMessages } from '@/lib/plan-request';
 import { batchQuery, queryObject, sheetOptions } from '@/lib/sheet-request';
-import { ServiceError } from '@/services/errors';
 import { queueSheets, serverToday } from '@/services/cut-sheets';
 
 export const prerender = false;
@@ -30,7 +29,6 @@ export const GET: APIRoute = async ({ locals, url }) => {
       },
     });
   } catch (e) {
-    if (e instanceof ServiceError) return problem(e.status, e.message);
-    throw e;
+    return refusal(e);
   }
 };

@@ -1,9 +1,8 @@
 // A garment's fitting photos: the list, and uploading from a phone or tablet (multipart form).
 import type { APIRoute } from 'astro';
 import { PHOTO_MAX_BYTES } from 'astro:env/server';
-import { guard, json, problem, run } from '@/lib/api';
+import { guard, json, problem, refusal, run } from '@/lib/api';
 import type { PhotoList } from '@/lib/photo-view';
-import { ServiceError } from '@/services/errors';
 import { addPhotos, garmentInShop, listPhotos, UploadRefused, type Upload } from '@/services/photos';
 
 export const prerender = false;
@@ -45,8 +44,7 @@ export const POST: APIRoute = async ({ locals, params, request }) => {
     // No need to read megabytes for a garment that is not there.
     await garmentInShop(actor, params.id ?? '');
   } catch (e) {
-    if (e instanceof ServiceError) return problem(e.status, e.message);
-    throw e;
+    return refusal(e);
   }
   const tooBig = `An upload may carry at most ${MAX_FILES} photos of ${Math.floor(PHOTO_MAX_BYTES / (1024 * 1024))} MB each.`;
   const limited = capped(request, PHOTO_MAX_BYTES * MAX_FILES + FORM_SLACK);
@@ -65,7 +63,6 @@ export const POST: APIRoute = async ({ locals, params, request }) => {
     return json(await addPhotos(actor, params.id ?? '', uploads, PHOTO_MAX_BYTES), 201);
   } catch (e) {
     if (e instanceof UploadRefused) return problem(e.status, e.message, { photos: e.message });
-    if (e instanceof ServiceError) return problem(e.status, e.message);
-    throw e;
+    return refusal(e);
   }
 };

@@ -2,10 +2,9 @@
 // shop's own scale), its QR code opening the garment's page at the app's public address.
 import type { APIRoute } from 'astro';
 import { BETTER_AUTH_URL } from 'astro:env/server';
-import { guard, problem } from '@/lib/api';
+import { guard, problem, refusal } from '@/lib/api';
 import { fieldMessages } from '@/lib/plan-request';
 import { queryObject, sheetOptions, sheetQuery } from '@/lib/sheet-request';
-import { ServiceError } from '@/services/errors';
 import { garmentSheet } from '@/services/cut-sheets';
 
 export const prerender = false;
@@ -22,7 +21,6 @@ export const GET: APIRoute = async ({ locals, params, url }) => {
       headers: { 'Content-Type': 'application/pdf', 'Content-Disposition': `inline; filename="${filename}"`, 'cache-control': 'no-store' },
     });
   } catch (e) {
-    if (e instanceof ServiceError) return problem(e.status, e.message);
-    throw e;
+    return refusal(e);
   }
 };

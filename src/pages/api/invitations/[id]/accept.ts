@@ -1,9 +1,8 @@
 // Accepting an invitation: as the signed-in invitee, or by creating the invitee's account.
 import type { APIRoute } from 'astro';
-import { json, problem, readBody } from '@/lib/api';
+import { json, readBody, refusal } from '@/lib/api';
 import { acceptInviteInput } from '@/lib/account-inputs';
 import { acceptInvitation, type Acceptor } from '@/services/invitations';
-import { ServiceError } from '@/services/errors';
 
 /** Public by design: the invitation id from the e-mail is the proof. */
 export const POST: APIRoute = async ({ params, request, locals }) => {
@@ -18,7 +17,6 @@ export const POST: APIRoute = async ({ params, request, locals }) => {
     const { shopName, headers } = await acceptInvitation(params.id ?? '', who);
     return json({ shopName }, 200, headers);
   } catch (e) {
-    if (e instanceof ServiceError) return problem(e.status, e.message);
-    throw e;
+    return refusal(e);
   }
 };

@@ -1,8 +1,7 @@
 // The customer's claim slip for a ticket, as a PDF to print at intake.
 import type { APIRoute } from 'astro';
-import { guard, problem } from '@/lib/api';
+import { guard, refusal } from '@/lib/api';
 import { renderClaimSlip } from '@/lib/claim-slip/render';
-import { ServiceError } from '@/services/errors';
 import { claimSlipData } from '@/services/payments';
 
 export const prerender = false;
@@ -18,7 +17,6 @@ export const GET: APIRoute = async ({ locals, params }) => {
       headers: { 'content-type': 'application/pdf', 'content-disposition': `inline; filename="claim-slip-T-${data.ticketNumber}.pdf"`, 'cache-control': 'no-store' },
     });
   } catch (e) {
-    if (e instanceof ServiceError) return problem(e.status, e.message);
-    throw e;
+    return refusal(e);
   }
 };
