@@ -1,7 +1,7 @@
 // The queue's filters as one pure function: the queue island narrows its table with it and the
 // morning's batch of cut sheets (GET /api/queue/sheets) picks its garments with it, so "filtered
 // as on screen" is the same code on both sides. No zod here: it ships in the queue's island.
-import { dueState } from '@/components/bench/due';
+import { dueState } from './due-date';
 import type { QueueRow } from './bench-types';
 import type { GarmentStep } from './garment-steps';
 

@@ -12,7 +12,7 @@ const { seedBenchDemo } = await import('@/services/demo-bench-seed');
 const { listQueue } = await import('@/services/garments');
 const { fittingOf } = await import('@/services/measurements');
 const { GARMENT_STEPS, leastAdvanced } = await import('@/lib/garment-steps');
-const { todayIso } = await import('@/components/bench/due');
+const { todayIso } = await import('@/lib/due-date');
 const { makeShop } = await import('./fixtures');
 
 let shop: Shop;

@@ -1,4 +1,4 @@
-import { dueState, dueText } from './due';
+import { dueState, dueText } from '@/lib/due-date';
 
 /** A due date with "Overdue" or "Due today" standing out in words and colour, never colour alone. */
 export function DueBadge({ dueOn }: { dueOn: string | null }) {

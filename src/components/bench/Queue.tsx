@@ -14,7 +14,7 @@ import { fetchJson } from '@/lib/fetch-json';
 import { GARMENT_STEPS, ticketLabel } from '@/lib/garment-steps';
 import { DEFAULT_QUEUE_FILTER, matchesQueue, queueRank, queueSheetsHref, type QueueFilter } from '@/lib/queue-filter';
 import { DueBadge } from './DueBadge';
-import { dueState, todayIso } from './due';
+import { dueState, todayIso } from '@/lib/due-date';
 import { QueueFilters } from './QueueFilters';
 import { StepButton } from './StepButton';
 import { useAssignees, useStepLabel } from './use-bench';
