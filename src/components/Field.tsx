@@ -15,7 +15,7 @@ export function describedBy(id: string, error: unknown, hint: unknown): string |
 }
 
 /** A field's frame: label above, the input, then the hint and the error in words. */
-export function FieldFrame({ id, label, hint, error, children }: { id: string; label: string; hint?: string; error?: string; children: ReactNode }) {
+export function FieldFrame({ id, label, hint, error, children }: { id: string; label: string; hint?: ReactNode; error?: string; children: ReactNode }) {
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={id} className="font-semibold">
@@ -28,7 +28,9 @@ export function FieldFrame({ id, label, hint, error, children }: { id: string; l
         </p>
       )}
       {error && (
-        <p id={`${id}-error`} role="alert" className="text-sm font-semibold text-cut">
+        // No alert role: the input is aria-invalid and points here, and react-hook-form focuses the
+        // first invalid field on submit, so the message is read without interrupting live typing.
+        <p id={`${id}-error`} className="rounded-sm border-l-4 border-cut bg-cut-soft px-2 py-1 text-base font-semibold text-cut">
           {error}
         </p>
       )}

@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import type { UseFormRegisterReturn } from 'react-hook-form';
+import { describedBy, FieldFrame } from './Field';
 
 interface Props {
   id: string;
@@ -14,12 +15,8 @@ interface Props {
 
 /** One labelled length as typed ("1 1/2", "38 mm"), the unit beside it, hint and error tied to it. */
 export function LengthInput({ id, label, unit, registration, hint, error, children }: Props) {
-  const describedBy = [hint ? `${id}-hint` : '', error ? `${id}-error` : ''].filter(Boolean).join(' ') || undefined;
   return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="text-base font-semibold">
-        {label}
-      </label>
+    <FieldFrame id={id} label={label} hint={hint} error={error}>
       <div className="flex items-stretch">
         <input
           id={id}
@@ -29,7 +26,7 @@ export function LengthInput({ id, label, unit, registration, hint, error, childr
           spellCheck={false}
           enterKeyHint="next"
           aria-invalid={error ? true : undefined}
-          aria-describedby={describedBy}
+          aria-describedby={describedBy(id, error, hint)}
           className={'measure w-full min-w-0 rounded-l-md border-2 bg-card px-3 text-xl ' + (error ? 'border-cut' : 'border-rule focus:border-accent')}
           {...registration}
         />
@@ -38,16 +35,6 @@ export function LengthInput({ id, label, unit, registration, hint, error, childr
         </span>
       </div>
       {children}
-      {hint && (
-        <p id={`${id}-hint`} className="text-sm text-muted">
-          {hint}
-        </p>
-      )}
-      {error && (
-        <p id={`${id}-error`} className="rounded-sm border-l-4 border-cut bg-cut-soft px-2 py-1 text-base font-semibold text-cut">
-          {error}
-        </p>
-      )}
-    </div>
+    </FieldFrame>
   );
 }
