@@ -9,6 +9,9 @@ import { ensureStarted } from '@/services/startup';
 const PUBLIC_PAGES = ['/', '/sign-in', '/sign-up', '/forgot', '/reset', '/paid'];
 const PUBLIC_PREFIXES = ['/invite/', '/api/', '/_astro/', '/_image', '/favicon'];
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
+// Routes that answer for themselves: better-auth resolves its own session, and the payment
+// webhook is proven by its signature. Looking the session up for them is work thrown away.
+const OWN_AUTH_PREFIXES = ['/api/auth/', '/api/payments/webhook'];
 
 function isPublic(path: string): boolean {
   return PUBLIC_PAGES.includes(path) || PUBLIC_PREFIXES.some((p) => path.startsWith(p));
@@ -35,6 +38,7 @@ export const onRequest = defineMiddleware(async (context, next) => {
   }
   locals.user = null;
   locals.member = null;
+  if (OWN_AUTH_PREFIXES.some((p) => url.pathname.startsWith(p))) return next();
   const session = await auth.api.getSession({ headers: request.headers });
   if (session) {
     const { id, name, email } = session.user;
