@@ -88,11 +88,6 @@ export async function createTicket(actor: Actor, typed: IntakeInput): Promise<Ti
   return row;
 }
 
-/** The one step after this status, or null at the end. */
-export function nextStatus(status: GarmentStep): GarmentStep | null {
-  return nextStep(status);
-}
-
 /** Moves every garment standing at the ticket's step on to the next one (pickup needs the pickup permission). */
 export async function moveTicket(actor: Actor, id: string, to: GarmentStep): Promise<Ticket> {
   if (!isUuid(id)) throw new ServiceError(404, 'No such ticket in this shop.');

@@ -8,7 +8,8 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { tickets, auditEvents } = await import('@/db/schema');
-const { createTicket, getTicket, listTickets, moveTicket, nextStatus } = await import('@/services/tickets');
+const { createTicket, getTicket, listTickets, moveTicket } = await import('@/services/tickets');
+const { nextStep } = await import('@/lib/garment-steps');
 const { garmentsOfTicket, moveGarment } = await import('@/services/garments');
 const { createCustomer } = await import('@/services/customers');
 const { ServiceError } = await import('@/services/errors');
@@ -94,7 +95,7 @@ describe('tickets', () => {
     expect((await garmentsOfTicket(a.shopId, t.id)).map((g) => g.status)).toEqual(['marked', 'marked']);
     expect((await moveTicket(a.apprentice, t.id, 'cut')).status).toBe('cut');
     await expect(moveTicket(a.apprentice, t.id, 'marked')).rejects.toBeInstanceOf(ServiceError);
-    expect(nextStatus('collected')).toBeNull();
+    expect(nextStep('collected')).toBeNull();
     const moves = await db.select().from(auditEvents).where(eq(auditEvents.action, 'garment.moved'));
     expect(moves.filter((e) => (e.detail as { to: string }).to === 'cut').length).toBeGreaterThanOrEqual(2);
   });
