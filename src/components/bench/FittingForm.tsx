@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { useEffect, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { useForm, useWatch, type Resolver } from 'react-hook-form';
 import { Segmented } from '@/components/calculator/Segmented';
 import { useDebounced } from '@/components/calculator/use-debounced';
@@ -18,6 +18,7 @@ import {
   type Measurements,
   type MeasurementsInput,
 } from '@/lib/measurement-request';
+import { afterSave } from './after-save';
 import { LegFields } from './LegFields';
 import { LegPlan } from './LegPlan';
 import { keepDraft, readDraft } from './use-draft';
@@ -46,13 +47,16 @@ function inUnit(text: string | undefined, from: Unit, to: Unit): string {
 export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
   const client = useQueryClient();
   const form = useForm<MeasurementsInput, unknown, Measurements>({ defaultValues: formValues(fitting, unit), resolver, mode: 'onChange' });
-  const { register, control, setValue, setError, reset, handleSubmit, formState } = form;
+  const { register, control, setValue, setError, reset, getValues, handleSubmit, formState } = form;
   const values = useWatch({ control }) as Measurements;
   const [leg, setLeg] = useState<Leg>('left');
   const current = useDebounced(values.legs[leg], 250);
   const other: Leg = leg === 'left' ? 'right' : 'left';
   const draftKey = `cuffwright:fitting-draft:${garmentId}`;
   const [restored, setRestored] = useState(false);
+  // The form as it stood when the last save was sent, to tell what was typed while it was on its way.
+  const sent = useRef<MeasurementsInput | null>(null);
+  const [typedWhileSaving, setTypedWhileSaving] = useState(false);
 
   // Lengths typed before a reload come back, marked unsaved, until saved or discarded.
   useEffect(() => {
@@ -68,7 +72,15 @@ export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
     mutationFn: (body: Measurements) => fetchJson<FittingView>(`/api/garments/${garmentId}/measurements`, { method: 'PUT', body }),
     onSuccess: (saved) => {
       client.setQueryData(['fitting', garmentId], saved);
-      reset(formValues(saved, unit));
+      const stored = formValues(saved, unit);
+      const { values: kept, newer } = afterSave(sent.current ?? getValues(), getValues(), stored);
+      reset(stored);
+      // Lengths typed during the save stay on screen and keep the form unsaved.
+      for (const path of newer) {
+        const value = path.split('.').reduce<unknown>((o, k) => (o as Record<string, unknown>)[k], kept);
+        setValue(path as `legs.left.${LegLength}`, value as string, { shouldDirty: true, shouldValidate: true });
+      }
+      setTypedWhileSaving(newer.length > 0);
       setRestored(false);
     },
     onError: (e) => {
@@ -112,7 +124,11 @@ export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
       <form
         aria-label="Fitting measurements"
         noValidate
-        onSubmit={handleSubmit((body) => save.mutate(body))}
+        onSubmit={handleSubmit((body) => {
+          sent.current = structuredClone(getValues());
+          setTypedWhileSaving(false);
+          save.mutate(body);
+        })}
         className="flex flex-col gap-5 rounded-lg border-2 border-rule bg-card p-4"
       >
         <Segmented name="leg" legend="Leg" value={leg} onChange={setLeg} options={LEGS.map((l) => ({ value: l, label: l === 'left' ? 'Left leg' : 'Right leg' }))} />
@@ -171,6 +187,11 @@ export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
           {save.isSuccess && !formState.isDirty && (
             <p role="status" className="rounded border-2 border-ok bg-ok-soft px-3 py-2 font-semibold text-ok">
               Saved both legs.
+            </p>
+          )}
+          {save.isSuccess && typedWhileSaving && formState.isDirty && (
+            <p role="status" className="rounded border-2 border-warn bg-warn-soft px-3 py-2 font-semibold text-warn">
+              Saved. What you typed while it was saving is kept here, not yet saved.
             </p>
           )}
           <button type="submit" disabled={save.isPending} className="min-h-14 rounded-lg bg-accent px-5 text-xl font-extrabold text-white disabled:opacity-60">

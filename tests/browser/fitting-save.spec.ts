@@ -1,0 +1,80 @@
+// A fitting saved while the tailor keeps typing: when the slow save comes back, the lengths typed
+// in the meantime stay on screen and the form stays unsaved; the rest shows what was saved.
+import { mkdirSync } from 'node:fs';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launch, ready, tabletPage } from './browser';
+import { signInAs } from './sign-in';
+
+let browser: Browser;
+
+beforeAll(async () => {
+  mkdirSync('test-results', { recursive: true });
+  browser = await launch();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
+
+/** Opens a ticket with one garment through the API, as the signed-in page, and returns the garment's id. */
+async function freshGarment(page: Page, description: string): Promise<string> {
+  return page.evaluate(async (description) => {
+    const post = await fetch('/api/tickets', {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ customer: { name: 'Ottoline Brask' }, garments: [{ description }] }),
+    });
+    const ticket = await post.json();
+    const detail = await (await fetch(`/api/tickets/${ticket.id}`)).json();
+    return detail.garments[0].id as string;
+  }, description);
+}
+
+describe('a fitting saved while typing goes on', () => {
+  it('keeps lengths typed during the save and shows the saved ones for the rest', async () => {
+    const page = await tabletPage(browser);
+    await signInAs(page, 'tailor', '/queue');
+    const id = await freshGarment(page, 'Slate flannel trousers');
+    await page.goto(`/garments/${id}`);
+    await ready(page);
+
+    await field(page, 'Pin at the back (finished length)').fill('31 1/4');
+    await field(page, 'Cuff depth').fill('1 1/2');
+
+    // Hold the save on its way, as a slow connection at the fitting would.
+    let release!: () => void;
+    const held = new Promise<void>((r) => (release = r));
+    await page.route('**/api/garments/*/measurements', async (route) => {
+      if (route.request().method() === 'PUT') await held;
+      await route.continue();
+    });
+    await page.getByRole('button', { name: /^Save measurements/ }).click();
+    await page.getByRole('button', { name: 'Saving…' }).waitFor();
+
+    // Typed while saving: a new length, and a sent one changed again.
+    await field(page, 'Cloth below the mark').fill('5');
+    await field(page, 'Pin at the back (finished length)').fill('31');
+    release();
+
+    await page.getByText('Saved. What you typed while it was saving is kept here, not yet saved.').waitFor();
+    expect(await field(page, 'Cloth below the mark').inputValue()).toBe('5');
+    expect(await field(page, 'Pin at the back (finished length)').inputValue()).toBe('31');
+    expect(await field(page, 'Cuff depth').inputValue()).toBe('1 1/2');
+    // Still unsaved: the button asks to save, not "(no changes)".
+    await page.getByRole('button', { name: 'Save measurements', exact: true }).waitFor();
+    const history = page.getByTestId('history');
+    await history.getByText('Left leg, Pin at the back (finished length): nothing → 31 1/4 in').waitFor();
+    expect(await history.getByText('Cloth below the mark').count()).toBe(0);
+    await page.screenshot({ path: 'test-results/fitting-typed-while-saving.png' });
+
+    await page.unroute('**/api/garments/*/measurements');
+    await page.getByRole('button', { name: 'Save measurements', exact: true }).click();
+    await page.getByText('Saved both legs.').waitFor();
+    await history.getByText('Left leg, Pin at the back (finished length): 31 1/4 in → 31 in').waitFor();
+    await history.getByText('Left leg, Cloth below the mark: nothing → 5 in').waitFor();
+    await page.getByRole('button', { name: 'Save measurements (no changes)' }).waitFor();
+    await page.context().close();
+  });
+});
