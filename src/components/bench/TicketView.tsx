@@ -6,7 +6,7 @@ import { Field, FormMessage, SubmitButton } from '@/components/Field';
 import { withQuery } from '@/components/WithQuery';
 import { garmentInput } from '@/lib/bench-requests';
 import type { TicketDetail } from '@/lib/bench-types';
-import { fetchJson } from '@/lib/fetch-json';
+import { ApiError, fetchJson } from '@/lib/fetch-json';
 import { nextStep, ticketLabel, type GarmentStep } from '@/lib/garment-steps';
 import type { z } from 'zod';
 import { CustomerEdit } from './CustomerEdit';
@@ -27,12 +27,22 @@ const resolver = zodResolver(garmentInput) as unknown as Resolver<GarmentForm, u
 
 function AddGarment({ ticketId }: { ticketId: string }) {
   const client = useQueryClient();
-  const { register, handleSubmit, reset, formState } = useForm<GarmentForm, unknown, z.output<typeof garmentInput>>({ resolver, defaultValues: { description: '', dueOn: '' } });
+  const { register, handleSubmit, reset, setError, formState } = useForm<GarmentForm, unknown, z.output<typeof garmentInput>>({ resolver, defaultValues: { description: '', dueOn: '' } });
   const add = useMutation({
     mutationFn: (body: z.output<typeof garmentInput>) => fetchJson(`/api/tickets/${ticketId}/garments`, { body }),
     onSuccess: () => {
       reset();
       void client.invalidateQueries({ queryKey: ['ticket', ticketId] });
+    },
+    onError: (e) => {
+      // The server's word on a field goes beside that field, the first one focused.
+      if (!(e instanceof ApiError)) return;
+      let first = true;
+      for (const [path, message] of Object.entries(e.issues)) {
+        if (path !== 'description' && path !== 'dueOn') continue;
+        setError(path, { type: 'server', message }, { shouldFocus: first });
+        first = false;
+      }
     },
   });
   return (
