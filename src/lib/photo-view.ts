@@ -9,7 +9,7 @@ export interface PhotoView {
   bytes: number;
   url: string;
   thumbUrl: string;
-  /** false when no smaller copy could be made here (HEIC): the thumbnail is the original */
+  /** false when no smaller copy could be made here (HEIC): the thumbnail is a placeholder tile */
   hasThumb: boolean;
   uploadedBy: string | null;
   createdAt: string;

@@ -8,6 +8,7 @@ import { files, garments, user, type StoredFile } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import type { PhotoView } from '@/lib/photo-view';
 import { fileStorage } from '@/lib/storage';
+import { PLACEHOLDER_THUMB } from '@/lib/storage/placeholder-thumb';
 import { isPathLike, safeName } from '@/lib/storage/safe-name';
 import { sniffImage, type ImageType } from '@/lib/storage/sniff-image';
 import { ServiceError } from './errors';
@@ -85,16 +86,27 @@ export function checkUploads(uploads: Upload[], maxBytes: number): (Upload & { t
   });
 }
 
-/** A WebP thumbnail, or null when this server cannot decode the type (HEIC); throws on a broken image. */
-async function thumbnail(bytes: Uint8Array, type: ImageType, name: string): Promise<Uint8Array | null> {
-  if (type.mime === 'image/heic') return null;
+/** What is kept of one upload: the picture without its metadata, and a WebP thumbnail. */
+interface Prepared {
+  bytes: Uint8Array;
+  thumb: Uint8Array | null;
+}
+
+// Phones write where and when a photo was taken (EXIF GPS, XMP) into the file; a fitting photo of
+// a customer's legs keeps none of that. The EXIF orientation is applied first (rotate()), as sharp
+// drops all metadata, orientation included, from what it writes unless asked to keep it.
+async function prepare(bytes: Uint8Array, type: ImageType, name: string): Promise<Prepared> {
+  // This server's sharp cannot decode HEIC: kept as it came, served with a placeholder thumbnail.
+  if (type.mime === 'image/heic') return { bytes, thumb: null };
   try {
-    const out = await sharp(bytes, { failOn: 'error' })
-      .rotate()
+    const upright = sharp(bytes, { failOn: 'error' }).rotate();
+    const clean = type.mime === 'image/jpeg' ? upright.jpeg({ quality: 92 }) : type.mime === 'image/png' ? upright.png() : upright.webp({ quality: 92 });
+    const stored = await clean.toBuffer();
+    const thumb = await sharp(stored)
       .resize({ width: THUMB_PX, height: THUMB_PX, fit: 'inside', withoutEnlargement: true })
       .webp({ quality: 72 })
       .toBuffer();
-    return new Uint8Array(out);
+    return { bytes: new Uint8Array(stored), thumb: new Uint8Array(thumb) };
   } catch {
     throw new UploadRefused(415, `${name} could not be read as an image: take the photo again.`, name);
   }
@@ -105,15 +117,18 @@ export async function addPhotos(actor: Actor, garmentId: string, uploads: Upload
   const garment = await garmentInShop(actor, garmentId);
   if (uploads.length === 0) throw new UploadRefused(422, 'Choose at least one photo.', '');
   const checked = checkUploads(uploads, maxBytes);
-  const thumbs = await Promise.all(checked.map((u) => thumbnail(u.bytes, u.type, u.name)));
+  // One at a time: each decode holds a full-size picture in memory, and the machine has two cores.
+  const prepared: Prepared[] = [];
+  for (const u of checked) prepared.push(await prepare(u.bytes, u.type, u.name));
   const storage = fileStorage();
   const added: PhotoView[] = [];
   for (const [i, u] of checked.entries()) {
+    const { bytes, thumb } = prepared[i]!;
     const id = randomUUID();
     const path = `${actor.shopId}/${id}.${u.type.ext}`;
-    const thumbPath = thumbs[i] ? `${actor.shopId}/${id}-thumb.webp` : null;
-    await storage.put(path, u.bytes, u.type.mime);
-    if (thumbPath) await storage.put(thumbPath, thumbs[i]!, 'image/webp');
+    const thumbPath = thumb ? `${actor.shopId}/${id}-thumb.webp` : null;
+    await storage.put(path, bytes, u.type.mime);
+    if (thumb && thumbPath) await storage.put(thumbPath, thumb, 'image/webp');
     try {
       const [row] = await db
         .insert(files)
@@ -126,18 +141,17 @@ export async function addPhotos(actor: Actor, garmentId: string, uploads: Upload
           path,
           thumbPath,
           mimeType: u.type.mime,
-          bytes: u.bytes.byteLength,
+          bytes: bytes.byteLength,
           originalName: u.name,
           uploadedById: actor.userId,
         })
         .returning();
       added.push(viewOf({ ...row!, uploadedBy: actor.userName }));
     } catch (e) {
-      await storage.delete(path);
-      if (thumbPath) await storage.delete(thumbPath);
+      await removeStored(id, [path, thumbPath]);
       throw e;
     }
-    await audit(actor.shopId, actor.userId, 'photo.added', id, { garmentId, name: u.name, bytes: u.bytes.byteLength, type: u.type.mime });
+    await audit(actor.shopId, actor.userId, 'photo.added', id, { garmentId, name: u.name, bytes: bytes.byteLength, type: u.type.mime });
   }
   return added;
 }
@@ -153,22 +167,37 @@ async function photoInShop(actor: Actor, id: string): Promise<StoredFile> {
   return found.file;
 }
 
-/** The photo's bytes and type (the thumbnail when asked and there is one). */
+/** The photo's bytes and type: the thumbnail when asked, a placeholder tile when none could be made. */
 export async function readPhoto(actor: Actor, id: string, size: 'full' | 'thumb' = 'full') {
   const row = await photoInShop(actor, id);
-  const thumb = size === 'thumb' && row.thumbPath !== null;
+  const name = row.originalName ?? 'photo';
+  if (size === 'thumb' && row.thumbPath === null) return { ...PLACEHOLDER_THUMB, name };
+  const thumb = size === 'thumb';
   const bytes = await fileStorage().get(thumb ? row.thumbPath! : row.path);
   if (!bytes) throw new ServiceError(404, 'This photo is missing from the storage.');
-  return { bytes, mimeType: thumb ? 'image/webp' : row.mimeType, name: row.originalName ?? 'photo' };
+  return { bytes, mimeType: thumb ? 'image/webp' : row.mimeType, name };
 }
 
-/** Removes a photo and its thumbnail. */
+/** Removes a photo's row, then its file and thumbnail from the storage. */
 export async function deletePhoto(actor: Actor, id: string): Promise<{ id: string; deleted: true }> {
   const row = await photoInShop(actor, id);
-  await db.delete(files).where(and(eq(files.id, id), eq(files.shopId, actor.shopId)));
-  const storage = fileStorage();
-  await storage.delete(row.path);
-  if (row.thumbPath) await storage.delete(row.thumbPath);
+  const [gone] = await db.delete(files).where(and(eq(files.id, id), eq(files.shopId, actor.shopId))).returning({ id: files.id });
+  if (!gone) throw new ServiceError(404, 'No such photo in this shop.');
   await audit(actor.shopId, actor.userId, 'photo.deleted', id, { garmentId: row.garmentId, name: row.originalName });
+  // The row is gone for good: a file the storage will not remove now is only logged (an orphan to
+  // sweep later), never a reason to answer as if the photo were still there.
+  await removeStored(id, [row.path, row.thumbPath]);
   return { id, deleted: true };
+}
+
+async function removeStored(photoId: string, keys: (string | null)[]): Promise<void> {
+  const storage = fileStorage();
+  for (const key of keys) {
+    if (!key) continue;
+    try {
+      await storage.delete(key);
+    } catch (e) {
+      console.warn(`Photo ${photoId}: could not remove ${key} from the storage: ${(e as Error).message}`);
+    }
+  }
 }

@@ -58,4 +58,27 @@ describe('fitting photos on the garment page', () => {
     await img.waitFor({ state: 'detached' });
     await page.context().close();
   });
+
+  it('a HEIC photo from a phone shows a tile saying there is no preview here, not a broken image', async () => {
+    const page = await tabletPage(browser);
+    await signInAs(page, 'tailor', '/queue');
+    const queue = (await (await page.request.get('/api/garments')).json()) as { id: string }[];
+    await page.goto(`/garments/${queue[queue.length - 1]!.id}`);
+    await ready(page);
+    const photos = page.getByRole('region', { name: 'Fitting photos' });
+    await photos.getByText(/No photos of this garment yet|Fitting photo/).first().waitFor();
+    // The bytes a phone's HEIC starts with; this server cannot decode the rest, so fill will do.
+    const heic = Buffer.from([0, 0, 0, 24, ...Buffer.from('ftypheic'), 0, 0, 0, 0, ...Buffer.from('mif1heic'), ...new Array(64).fill(7)]);
+    await photos.getByLabel('Choose photos').setInputFiles({ name: 'IMG_2207.HEIC', mimeType: 'image/heic', buffer: heic });
+    await photos.getByText('Photo added.').waitFor();
+    const tile = photos.getByRole('img', { name: 'Fitting photo IMG_2207.HEIC: no preview here, open to view' });
+    await tile.scrollIntoViewIfNeeded();
+    await expect.poll(() => tile.evaluate((el) => (el as HTMLImageElement).naturalWidth)).toBe(480);
+    await photos.getByText('No preview on this screen: open it on a device that reads HEIC.').waitFor();
+    await page.screenshot({ path: 'test-results/garment-photos-heic.png', fullPage: true });
+    page.once('dialog', (d) => d.accept());
+    await photos.getByRole('button', { name: 'Remove: IMG_2207.HEIC' }).click();
+    await tile.waitFor({ state: 'detached' });
+    await page.context().close();
+  });
 });

@@ -1,6 +1,6 @@
 // Fitting photos: only real JPEG/PNG/WebP/HEIC by their bytes, size-limited, names kept only as
 // safe text, stored under a random key with a thumbnail, seen only by the garment's shop, audited.
-import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import sharp from 'sharp';
@@ -37,6 +37,18 @@ async function garmentOf(shopId: string): Promise<string> {
 async function image(format: 'jpeg' | 'png' | 'webp', width = 1200, height = 900): Promise<Uint8Array> {
   const img = sharp({ create: { width, height, channels: 3, background: { r: 90, g: 100, b: 120 } } });
   return new Uint8Array(await img[format]().toBuffer());
+}
+
+/** True when the EXIF block (as sharp's metadata() gives it) has IFD0's pointer to a GPS IFD (tag 0x8825). */
+function hasGpsIfd(exif: Buffer | undefined): boolean {
+  if (!exif) return false;
+  const tiff = exif.subarray(exif.subarray(0, 6).toString('latin1') === 'Exif\0\0' ? 6 : 0);
+  const le = tiff.subarray(0, 2).toString('latin1') === 'II';
+  const u16 = (o: number) => (le ? tiff.readUInt16LE(o) : tiff.readUInt16BE(o));
+  const u32 = (o: number) => (le ? tiff.readUInt32LE(o) : tiff.readUInt32BE(o));
+  const ifd0 = u32(4);
+  for (let i = 0; i < u16(ifd0); i++) if (u16(ifd0 + 2 + i * 12) === 0x8825) return true;
+  return false;
 }
 
 beforeAll(async () => {
@@ -76,7 +88,8 @@ describe('fitting photos', () => {
     const meta = await sharp(thumb.bytes).metadata();
     expect(Math.max(meta.width!, meta.height!)).toBe(480);
     const full = await svc.readPhoto(a.counter, added[0]!.id);
-    expect(Buffer.from(full.bytes).equals(Buffer.from(jpeg))).toBe(true);
+    expect(full.mimeType).toBe('image/jpeg');
+    expect(await sharp(full.bytes).metadata()).toMatchObject({ format: 'jpeg', width: 1200, height: 900 });
     expect((await svc.listPhotos(a.lead, garmentA)).map((p) => p.id)).toEqual(added.map((p) => p.id));
   });
 
@@ -84,7 +97,41 @@ describe('fitting photos', () => {
     const heic = new Uint8Array([0, 0, 0, 24, ...Buffer.from('ftypheic'), 0, 0, 0, 0, ...Buffer.from('mif1heic'), ...new Array(64).fill(7)]);
     const [p] = await svc.addPhotos(a.tailor, garmentA, [{ name: 'IMG_0042.HEIC', bytes: heic }], 10 * MB);
     expect(p).toMatchObject({ mimeType: 'image/heic', hasThumb: false });
-    expect((await svc.readPhoto(a.tailor, p!.id, 'thumb')).mimeType).toBe('image/heic');
+    // This sharp cannot decode HEIC: the original is kept as it came, the thumbnail is our tile.
+    expect(Buffer.from((await svc.readPhoto(a.tailor, p!.id)).bytes).equals(Buffer.from(heic))).toBe(true);
+    const thumb = await svc.readPhoto(a.tailor, p!.id, 'thumb');
+    expect(thumb.mimeType).toBe('image/svg+xml');
+    expect(await sharp(thumb.bytes).metadata()).toMatchObject({ format: 'svg', width: 480, height: 360 });
+    expect(new TextDecoder().decode(thumb.bytes)).toContain('open to view');
+    expect(readdirSync(join(storageRoot, a.shopId)).filter((n) => n.startsWith(p!.id))).toEqual([`${p!.id}.heic`]);
+  });
+
+  it('keep no EXIF, GPS or XMP in the stored photo, turned upright by its EXIF orientation first', async () => {
+    // 1200 wide × 900 high as the sensor saw it, orientation 6: shown turned a quarter, 900 × 1200.
+    const tagged = await sharp({ create: { width: 1200, height: 900, channels: 3, background: { r: 90, g: 100, b: 120 } } })
+      .jpeg()
+      .withMetadata({ orientation: 6 })
+      .withExif({ IFD0: { Make: 'Invented Camera Co' }, IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '51/1 30/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '0/1 7/1 0/1' } })
+      .withXmp('<x:xmpmeta xmlns:x="adobe:ns:meta/"><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#"><rdf:Description xmlns:exif="http://ns.adobe.com/exif/1.0/" exif:GPSLatitude="51,30.0N"/></rdf:RDF></x:xmpmeta>')
+      .toBuffer();
+    const sent = await sharp(tagged).metadata();
+    expect(hasGpsIfd(sent.exif)).toBe(true);
+    expect(sent).toMatchObject({ orientation: 6, width: 1200, height: 900 });
+    expect(sent.xmp).toBeDefined();
+
+    const [p] = await svc.addPhotos(a.tailor, garmentA, [{ name: 'with-location.jpg', bytes: new Uint8Array(tagged) }], 10 * MB);
+    const [row] = await db.select().from(files).where(eq(files.id, p!.id));
+    const onDisk = readFileSync(join(storageRoot, row!.path));
+    const kept = await sharp(onDisk).metadata();
+    expect(kept.exif).toBeUndefined();
+    expect(kept.xmp).toBeUndefined();
+    expect(kept.iptc).toBeUndefined();
+    expect(kept.orientation).toBeUndefined();
+    expect([kept.format, kept.width, kept.height]).toEqual(['jpeg', 900, 1200]);
+    expect(onDisk.includes(Buffer.from('Invented Camera Co'))).toBe(false);
+    expect(row!.bytes).toBe(onDisk.byteLength);
+    const thumb = await sharp(readFileSync(join(storageRoot, row!.thumbPath!))).metadata();
+    expect([thumb.width, thumb.height, thumb.exif]).toEqual([360, 480, undefined]);
   });
 
   it('refuse what is not a photo by its bytes, whatever the name says: SVG, GIF, text, a broken JPEG', async () => {
@@ -126,7 +173,7 @@ describe('fitting photos', () => {
     await expect(svc.listPhotos(a.lead, garmentB)).rejects.toMatchObject({ status: 404 });
     await expect(svc.addPhotos(a.lead, garmentB, [{ name: 'x.jpg', bytes: jpeg }], 10 * MB)).rejects.toMatchObject({ status: 404 });
     await expect(svc.readPhoto(a.lead, '../../etc/passwd')).rejects.toMatchObject({ status: 404 });
-    expect((await svc.readPhoto(b.apprentice, theirs!.id)).bytes.byteLength).toBe(jpeg.byteLength);
+    expect((await svc.readPhoto(b.apprentice, theirs!.id)).bytes.byteLength).toBe(theirs!.bytes);
   });
 
   it("keep an apprentice to the queue's rule: no photos of a garment given to someone else", async () => {
@@ -149,5 +196,29 @@ describe('fitting photos', () => {
     const events = await db.select().from(auditEvents).where(and(eq(auditEvents.shopId, a.shopId), eq(auditEvents.subject, p!.id)));
     expect(events.map((e) => e.action)).toEqual(['photo.added', 'photo.deleted']);
     expect(events[0]!.detail).toMatchObject({ garmentId: garmentA, name: 'to-remove.jpg', type: 'image/jpeg' });
+  });
+
+  it('delete the row even when the storage will not remove the file: logged, and the photo stays gone', async () => {
+    const [p] = await svc.addPhotos(a.lead, garmentA, [{ name: 'stuck.jpg', bytes: jpeg }], 10 * MB);
+    const disk = new DiskStorage(storageRoot);
+    const refused: string[] = [];
+    useStorage({ put: disk.put.bind(disk), get: disk.get.bind(disk), delete: async (key) => { refused.push(key); throw new Error('disk is read-only'); } });
+    const warn = vi.spyOn(console, 'warn').mockImplementation(() => {});
+    let warnings: unknown[][] = [];
+    try {
+      expect(await svc.deletePhoto(a.lead, p!.id)).toEqual({ id: p!.id, deleted: true });
+      warnings = [...warn.mock.calls];
+    } finally {
+      useStorage(disk);
+      warn.mockRestore();
+    }
+    expect(refused).toEqual([`${a.shopId}/${p!.id}.jpg`, `${a.shopId}/${p!.id}-thumb.webp`]);
+    expect(warnings.map((w) => String(w[0]))).toEqual([
+      `Photo ${p!.id}: could not remove ${a.shopId}/${p!.id}.jpg from the storage: disk is read-only`,
+      `Photo ${p!.id}: could not remove ${a.shopId}/${p!.id}-thumb.webp from the storage: disk is read-only`,
+    ]);
+    expect(await db.select().from(files).where(eq(files.id, p!.id))).toEqual([]);
+    await expect(svc.readPhoto(a.lead, p!.id)).rejects.toMatchObject({ status: 404 });
+    await expect(svc.deletePhoto(a.lead, p!.id)).rejects.toMatchObject({ status: 404 });
   });
 });

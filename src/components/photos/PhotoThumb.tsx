@@ -12,12 +12,19 @@ export function PhotoThumb({ photo, onRemove }: { photo: PhotoView; onRemove?: (
         {broken ? (
           <span className="flex h-full items-center justify-center p-2 text-center text-sm text-muted">{photo.name} (open to view)</span>
         ) : (
-          <img src={photo.thumbUrl} alt={`Fitting photo ${photo.name}`} loading="lazy" onError={() => setBroken(true)} className="h-full w-full object-cover" />
+          <img
+            src={photo.thumbUrl}
+            alt={photo.hasThumb ? `Fitting photo ${photo.name}` : `Fitting photo ${photo.name}: no preview here, open to view`}
+            loading="lazy"
+            onError={() => setBroken(true)}
+            className={`h-full w-full ${photo.hasThumb ? 'object-cover' : 'object-contain'}`}
+          />
         )}
       </a>
       <span className="truncate text-sm" title={photo.name}>
         {photo.name}
       </span>
+      {!photo.hasThumb && <span className="text-sm font-semibold">No preview on this screen: open it on a device that reads HEIC.</span>}
       <span className="text-xs text-muted">
         {taken}
         {photo.uploadedBy ? ` · ${photo.uploadedBy}` : ''}

@@ -6,7 +6,7 @@ import { deletePhoto } from '@/services/photos';
 
 export const prerender = false;
 
-/** The photo as it was taken, to members of its shop only. */
+/** The photo as kept (upright, without its metadata), to members of its shop only. */
 export const GET: APIRoute = ({ locals, params }) => servePhoto(locals, params.id ?? '', 'full');
 
 /** Removes the photo and its thumbnail. */

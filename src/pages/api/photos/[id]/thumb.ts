@@ -1,4 +1,4 @@
-// A fitting photo's thumbnail (WebP), or the original when none could be made (HEIC).
+// A fitting photo's thumbnail (WebP), or a placeholder tile when none could be made (HEIC).
 import type { APIRoute } from 'astro';
 import { servePhoto } from '@/lib/serve-photo';
 
