@@ -3,6 +3,7 @@
 import { pgTable, text, timestamp, uuid, index, integer, jsonb, date, uniqueIndex } from 'drizzle-orm/pg-core';
 import { createSelectSchema } from 'drizzle-zod';
 import { z } from 'zod';
+import { DEFAULT_EXISTING_FINISH, EXISTING_FINISHES } from '../../lib/existing-finish';
 import { GARMENT_STEPS, type GarmentStep } from '../../lib/garment-steps';
 import { organization, user } from './auth';
 import { customers } from './customers';
@@ -41,6 +42,8 @@ export const garments = pgTable(
     ticketId: uuid('ticket_id').notNull().references(() => tickets.id, { onDelete: 'cascade' }),
     kind: text('kind').notNull().default('trousers'),
     finish: text('finish'),
+    /** how the bottoms came in: an old cuff is let down before the new finish is made */
+    existingFinish: text('existing_finish', { enum: EXISTING_FINISHES }).notNull().default(DEFAULT_EXISTING_FINISH),
     description: text('description'),
     position: integer('position').notNull().default(0),
     status: text('status', { enum: GARMENT_STEPS }).notNull().default('received'),

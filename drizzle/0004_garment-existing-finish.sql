@@ -1,0 +1,1 @@
+ALTER TABLE "garments" ADD COLUMN "existing_finish" text DEFAULT 'plain-hem' NOT NULL;
