@@ -2,8 +2,8 @@
 // step along. A ticket's status follows its least advanced garment.
 import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm';
 import type { z } from 'zod';
-import { db } from '@/db';
-import { customers, garments, member, tickets, user, type Garment } from '@/db/schema';
+import { db, type Db } from '@/db';
+import { customers, garments, member, tickets, user, type Garment, type Ticket } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import type { garmentInput, garmentPatch } from '@/lib/bench-requests';
 import type { GarmentDetail, GarmentSummary, Person, QueueRow } from '@/lib/bench-types';
@@ -108,23 +108,42 @@ export async function getGarment(actor: Actor, id: string): Promise<GarmentDetai
   const [summary] = await summaries([g]);
   return {
     ...summary!,
+    existingFinish: g.existingFinish,
     ticket: { id: t!.id, number: t!.number, status: t!.status, note: t!.note },
     customer: c ? { id: c.id, name: c.name, phone: c.phone, email: c.email, notes: c.notes } : null,
   };
 }
 
-/** Sets the ticket's status to its least advanced garment's step. */
-export async function refreshTicketStatus(shopId: string, ticketId: string): Promise<GarmentStep> {
+/** Locks a ticket of the shop until the transaction ends and returns it; 404 when there is none. */
+export async function lockTicket(tx: Db, shopId: string, ticketId: string): Promise<Ticket> {
+  if (!isUuid(ticketId)) throw new ServiceError(404, 'No such ticket in this shop.');
+  const [row] = await tx.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId))).for('update');
+  if (!row) throw new ServiceError(404, 'No such ticket in this shop.');
+  return row;
+}
+
+/** Runs work in one transaction holding the ticket's row lock: every write to its status, price
+ * lines, payments and links goes through here, so each one sees the others' finished work.
+ * Inside, query only through `tx` (PGlite has one connection: `db` would wait for this transaction). */
+export function withTicketLock<T>(shopId: string, ticketId: string, work: (tx: Db, ticket: Ticket) => Promise<T>): Promise<T> {
+  return db.transaction(async (tx) => work(tx, await lockTicket(tx, shopId, ticketId)));
+}
+
+async function writeTicketStatus(tx: Db, shopId: string, ticketId: string): Promise<GarmentStep> {
   const where = and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId));
+  const steps = await tx.select({ status: garments.status }).from(garments).where(and(eq(garments.shopId, shopId), eq(garments.ticketId, ticketId)));
+  const status = leastAdvanced(steps.map((g) => g.status));
+  await tx.update(tickets).set({ status, updatedAt: new Date() }).where(where);
+  return status;
+}
+
+/** Sets the ticket's status to its least advanced garment's step; inside a transaction that
+ * already holds the ticket's lock, pass it as `tx`. */
+export async function refreshTicketStatus(shopId: string, ticketId: string, tx?: Db): Promise<GarmentStep> {
+  if (tx) return writeTicketStatus(tx, shopId, ticketId);
   // Two garments of one ticket moved at once: the ticket row is locked before its garments are
   // read, so the later of the two writes from a read that sees both moves.
-  return db.transaction(async (tx) => {
-    await tx.select({ id: tickets.id }).from(tickets).where(where).for('update');
-    const steps = await tx.select({ status: garments.status }).from(garments).where(and(eq(garments.shopId, shopId), eq(garments.ticketId, ticketId)));
-    const status = leastAdvanced(steps.map((g) => g.status));
-    await tx.update(tickets).set({ status, updatedAt: new Date() }).where(where);
-    return status;
-  });
+  return withTicketLock(shopId, ticketId, (locked) => writeTicketStatus(locked, shopId, ticketId));
 }
 
 /** Adds a garment to a ticket of the shop. */
@@ -137,19 +156,19 @@ export async function addGarment(actor: Actor, ticketId: string, input: z.output
   const position = (await garmentsOfTicket(actor.shopId, ticketId)).length;
   const [row] = await db
     .insert(garments)
-    .values({ shopId: actor.shopId, ticketId, description: input.description, dueOn: input.dueOn ?? t.dueOn, assigneeId: input.assigneeId, position })
+    .values({ shopId: actor.shopId, ticketId, description: input.description, dueOn: input.dueOn ?? t.dueOn, assigneeId: input.assigneeId, existingFinish: input.existingFinish, position })
     .returning();
   await audit(actor.shopId, actor.userId, 'garment.added', row!.id, { ticket: t.number, description: input.description });
   await refreshTicketStatus(actor.shopId, ticketId);
   return row!;
 }
 
-/** Changes a garment's description, due date or assignee; each change is kept in the history. */
+/** Changes a garment's description, due date, assignee or existing finish; each change is kept in the history. */
 export async function updateGarment(actor: Actor, id: string, patch: z.output<typeof garmentPatch>): Promise<Garment> {
   const g = await visibleGarment(actor, id);
   await checkAssignee(actor, patch.assigneeId);
   const changes: Record<string, { old: unknown; new: unknown }> = {};
-  for (const key of ['description', 'dueOn', 'assigneeId'] as const) {
+  for (const key of ['description', 'dueOn', 'assigneeId', 'existingFinish'] as const) {
     if (key in patch && patch[key] !== undefined && patch[key] !== g[key]) changes[key] = { old: g[key], new: patch[key] };
   }
   if (Object.keys(changes).length === 0) return g;

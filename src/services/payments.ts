@@ -3,7 +3,7 @@
 import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import type { z } from 'zod';
-import { db } from '@/db';
+import { db, type Db } from '@/db';
 import { customers, garments, paymentEvents, paymentLinks, payments, tickets, type Payment, type PaymentLink, type PriceLine, type Ticket } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import type { paymentInput } from '@/lib/counter-request';
@@ -13,6 +13,7 @@ import type { Currency } from '@/lib/pricing/money';
 import { balanceOf } from '@/lib/pricing/price-lines';
 import { audit } from './audit';
 import { ServiceError } from './errors';
+import { lockTicket, withTicketLock } from './garments';
 import { expireOpenLinks } from './payment-links';
 import { counterSettingsOf, linesOf, shopTicket, type CounterView } from './prices';
 
@@ -34,13 +35,14 @@ export async function counterSummary(actor: Pick<Actor, 'shopId'>, ticketId: str
   return summaryOf(ticket, await counterSettingsOf(actor.shopId));
 }
 
-/** The summary of a ticket already read for the shop, with the shop's settings already read. */
-export async function summaryOf(ticket: Ticket, { currency }: Pick<CounterView, 'currency'>): Promise<CounterSummary> {
+/** The summary of a ticket already read for the shop, with the shop's settings already read
+ * (through `q`: the transaction holding the ticket's lock, when there is one). */
+export async function summaryOf(ticket: Ticket, { currency }: Pick<CounterView, 'currency'>, q: Db = db): Promise<CounterSummary> {
   const { shopId, id: ticketId } = ticket;
-  const [customer] = ticket.customerId ? await db.select().from(customers).where(eq(customers.id, ticket.customerId)) : [];
-  const lines = await linesOf(shopId, ticketId);
-  const paidRows = await db.select().from(payments).where(and(eq(payments.shopId, shopId), eq(payments.ticketId, ticketId))).orderBy(asc(payments.at));
-  const [link] = await db.select().from(paymentLinks).where(and(eq(paymentLinks.shopId, shopId), eq(paymentLinks.ticketId, ticketId))).orderBy(desc(paymentLinks.createdAt)).limit(1);
+  const [customer] = ticket.customerId ? await q.select().from(customers).where(eq(customers.id, ticket.customerId)) : [];
+  const lines = await linesOf(shopId, ticketId, q);
+  const paidRows = await q.select().from(payments).where(and(eq(payments.shopId, shopId), eq(payments.ticketId, ticketId))).orderBy(asc(payments.at));
+  const [link] = await q.select().from(paymentLinks).where(and(eq(paymentLinks.shopId, shopId), eq(paymentLinks.ticketId, ticketId))).orderBy(desc(paymentLinks.createdAt)).limit(1);
   return {
     ticket: { id: ticket.id, number: ticket.number, status: ticket.status, dueOn: ticket.dueOn, customerName: customer?.name ?? null, customerEmail: customer?.email ?? null },
     currency,
@@ -60,26 +62,29 @@ function isUniqueViolation(e: unknown): boolean {
 
 /** Takes a deposit (at most the total) or the exact balance due, in cash or by card at the counter. */
 export async function takePayment(actor: Actor, ticketId: string, input: z.infer<typeof paymentInput>): Promise<CounterSummary> {
-  const before = await counterSummary(actor, ticketId);
-  if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
-  if (before.payments.some((p) => p.purpose === 'balance')) throw new ServiceError(409, 'The balance of this ticket is already paid.');
-  if (input.purpose === 'deposit') {
-    if (before.payments.some((p) => p.purpose === 'deposit')) throw new ServiceError(409, 'A deposit is already on record for this ticket.');
-    if (input.amountMinor > before.total) throw new ServiceError(422, 'A deposit cannot be more than the ticket total.');
-  } else if (before.due === 0) {
-    throw new ServiceError(422, 'Nothing is due on this ticket.');
-  } else if (input.amountMinor !== before.due) {
-    throw new ServiceError(422, 'Take exactly the balance due (give change from cash).');
-  }
+  const settings = await counterSettingsOf(actor.shopId);
   try {
-    await db.insert(payments).values({ ...input, shopId: actor.shopId, ticketId, currency: before.currency, takenById: actor.userId });
+    await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
+      const before = await summaryOf(ticket, settings, tx);
+      if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
+      if (before.payments.some((p) => p.purpose === 'balance')) throw new ServiceError(409, 'The balance of this ticket is already paid.');
+      if (input.purpose === 'deposit') {
+        if (before.payments.some((p) => p.purpose === 'deposit')) throw new ServiceError(409, 'A deposit is already on record for this ticket.');
+        if (input.amountMinor > before.total) throw new ServiceError(422, 'A deposit cannot be more than the ticket total.');
+      } else if (before.due === 0) {
+        throw new ServiceError(422, 'Nothing is due on this ticket.');
+      } else if (input.amountMinor !== before.due) {
+        throw new ServiceError(422, 'Take exactly the balance due (give change from cash).');
+      }
+      await tx.insert(payments).values({ ...input, shopId: actor.shopId, ticketId, currency: before.currency, takenById: actor.userId });
+      // Once the balance is paid at the counter, the customer must not be able to pay it again online.
+      if (input.purpose === 'balance') await expireOpenLinks(tx, ticketId);
+    });
   } catch (e) {
     if (isUniqueViolation(e)) throw new ServiceError(409, `A ${input.purpose} is already on record for this ticket.`);
     throw e;
   }
   await audit(actor.shopId, actor.userId, `payment.${input.purpose}`, ticketId, { method: input.method, amountMinor: input.amountMinor });
-  // Once the balance is paid at the counter, the customer must not be able to pay it again online.
-  if (input.purpose === 'balance') await expireOpenLinks(ticketId);
   return counterSummary(actor, ticketId);
 }
 
@@ -91,7 +96,7 @@ export async function createPaymentLink(actor: Actor, ticketId: string, appOrigi
   if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
   if (before.due === 0) throw new ServiceError(422, 'Nothing is due on this ticket.');
   if (before.link?.status === 'open' && before.link.amountMinor === before.due) return before;
-  await expireOpenLinks(ticketId);
+  await withTicketLock(actor.shopId, ticketId, (tx) => expireOpenLinks(tx, ticketId));
   const session = await client.checkout.sessions.create({
     mode: 'payment',
     line_items: [
@@ -135,7 +140,12 @@ export async function receiveWebhook(payload: string, signature: string | null):
       if (event.type !== 'checkout.session.completed') return { status: 200 as const, message: 'Ignored.' };
       const session = event.data.object;
       if (session.payment_status !== 'paid') return { status: 200 as const, message: 'Not paid yet.' };
-      const [link] = await tx.select().from(paymentLinks).where(eq(paymentLinks.sessionId, session.id));
+      const [known] = await tx.select().from(paymentLinks).where(eq(paymentLinks.sessionId, session.id));
+      if (!known) return { status: 200 as const, message: 'Unknown session.' };
+      // Under the ticket's lock, like every other write to its money; the link is read again
+      // inside it, as a price change may have just expired it.
+      await lockTicket(tx, known.shopId, known.ticketId);
+      const [link] = await tx.select().from(paymentLinks).where(eq(paymentLinks.id, known.id));
       if (!link) return { status: 200 as const, message: 'Unknown session.' };
       if (link.status !== 'open') throw new WebhookRefusal('This payment link is no longer open.');
       const [existing] = await tx.select({ id: payments.id }).from(payments).where(and(eq(payments.ticketId, link.ticketId), eq(payments.purpose, 'balance')));
@@ -161,28 +171,37 @@ export async function receiveWebhook(payload: string, signature: string | null):
 
 class WebhookRefusal extends Error {}
 
-/** Throws 422 unless the ticket is ready and nothing is due: the check any path to "collected" needs. */
-export async function assertReadyToHandOver(actor: Pick<Actor, 'shopId'>, ticketId: string): Promise<CounterSummary> {
-  const before = await counterSummary(actor, ticketId);
-  if (before.ticket.status !== 'ready') throw new ServiceError(422, `Only a ready ticket can be handed over (this one is ${before.ticket.status}).`);
-  if (before.due > 0) throw new ServiceError(422, 'Take the balance before handing the trousers over.');
+/** The refusal when the ticket cannot be handed over (not ready, or money due), else null. */
+function handOverRefusal(summary: CounterSummary): ServiceError | null {
+  if (summary.ticket.status !== 'ready') return new ServiceError(422, `Only a ready ticket can be handed over (this one is ${summary.ticket.status}).`);
+  if (summary.due > 0) return new ServiceError(422, 'Take the balance before handing the trousers over.');
+  return null;
+}
+
+/** Throws 422 unless the ticket is ready and nothing is due: the check any path to "collected"
+ * needs. Inside the ticket's lock pass its transaction and the locked row, so the check holds
+ * until the move commits. */
+export async function assertReadyToHandOver(actor: Pick<Actor, 'shopId'>, ticketId: string, locked?: { tx: Db; ticket: Ticket }): Promise<CounterSummary> {
+  const settings = await counterSettingsOf(actor.shopId, locked?.tx);
+  const before = locked ? await summaryOf(locked.ticket, settings, locked.tx) : await summaryOf(await shopTicket(actor, ticketId), settings);
+  const refusal = handOverRefusal(before);
+  if (refusal) throw refusal;
   return before;
 }
 
 /** Hands a ready, fully paid ticket over: every garment and the ticket become collected. */
 export async function pickUp(actor: Actor, ticketId: string): Promise<CounterSummary> {
-  const before = await assertReadyToHandOver(actor, ticketId);
-  const done = await db.transaction(async (tx) => {
-    const [row] = await tx
-      .update(tickets)
-      .set({ status: 'collected', updatedAt: new Date() })
-      .where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId), eq(tickets.status, 'ready')))
-      .returning({ id: tickets.id });
-    if (!row) return false;
-    await tx.update(garments).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(garments.ticketId, ticketId), inArray(garments.status, ['ready'])));
-    return true;
+  const settings = await counterSettingsOf(actor.shopId);
+  // Checked and written under the ticket's lock: a price line or payment arriving meanwhile waits,
+  // and one that came first is in the balance checked here.
+  const before = await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
+    const summary = await summaryOf(ticket, settings, tx);
+    const refusal = handOverRefusal(summary);
+    if (refusal) throw refusal;
+    await tx.update(tickets).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
+    await tx.update(garments).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(garments.ticketId, ticketId), eq(garments.shopId, actor.shopId), inArray(garments.status, ['ready'])));
+    return summary;
   });
-  if (!done) throw new ServiceError(409, 'Someone else moved this ticket first: reload and try again.');
   await audit(actor.shopId, actor.userId, 'ticket.collected', ticketId, { paid: before.paid });
   return counterSummary(actor, ticketId);
 }

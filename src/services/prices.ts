@@ -1,7 +1,7 @@
 // The shop's price list and counter settings, and the price lines on its tickets.
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import type { z } from 'zod';
-import { db } from '@/db';
+import { db, type Db } from '@/db';
 import { counterSettings, garments, measurements, payments, priceItems, priceLines, tickets, type CounterSettings, type PriceLine, type Ticket } from '@/db/schema';
 import { checkTaper } from '@/lib/allowance';
 import type { Actor } from '@/lib/api';
@@ -12,7 +12,7 @@ import { priceTicket, type GarmentFacts, type PriceList } from '@/lib/pricing/pr
 import { needsLetOut } from '@/lib/pricing/taper-let-out';
 import { audit } from './audit';
 import { ServiceError } from './errors';
-import { isUuid } from './garments';
+import { isUuid, withTicketLock } from './garments';
 import { expireOpenLinks } from './payment-links';
 
 /** The shop's counter settings as the counter reads them. */
@@ -37,8 +37,8 @@ export async function shopTicket(actor: Pick<Actor, 'shopId'>, ticketId: string)
 }
 
 /** The shop's counter settings, the defaults when the lead has not set them. */
-export async function counterSettingsOf(shopId: string): Promise<CounterView & Pick<CounterSettings, 'autoReadySince'>> {
-  const [row] = await db.select().from(counterSettings).where(eq(counterSettings.shopId, shopId));
+export async function counterSettingsOf(shopId: string, q: Db = db): Promise<CounterView & Pick<CounterSettings, 'autoReadySince'>> {
+  const [row] = await q.select().from(counterSettings).where(eq(counterSettings.shopId, shopId));
   return {
     currency: row && isCurrency(row.currency) ? row.currency : 'EUR',
     hours: row?.hours ?? '',
@@ -90,49 +90,51 @@ export async function listLines(actor: Actor, ticketId: string): Promise<PriceLi
   return linesOf(actor.shopId, ticketId);
 }
 
-/** The lines of a ticket known to be the shop's. */
-export function linesOf(shopId: string, ticketId: string): Promise<PriceLine[]> {
-  return db.select().from(priceLines).where(and(eq(priceLines.shopId, shopId), eq(priceLines.ticketId, ticketId))).orderBy(asc(priceLines.createdAt), asc(priceLines.id));
+/** The lines of a ticket known to be the shop's (read through `q`, a transaction when given). */
+export function linesOf(shopId: string, ticketId: string, q: Db = db): Promise<PriceLine[]> {
+  return q.select().from(priceLines).where(and(eq(priceLines.shopId, shopId), eq(priceLines.ticketId, ticketId))).orderBy(asc(priceLines.createdAt), asc(priceLines.id));
 }
 
-async function refuseWhenSettled(ticket: Ticket): Promise<void> {
+async function refuseWhenSettled(tx: Db, ticket: Ticket): Promise<void> {
   if (ticket.status === 'collected') throw new ServiceError(422, 'This ticket is collected: its price is closed.');
-  const [paid] = await db.select({ id: payments.id }).from(payments).where(and(eq(payments.ticketId, ticket.id), eq(payments.purpose, 'balance')));
+  const [paid] = await tx.select({ id: payments.id }).from(payments).where(and(eq(payments.ticketId, ticket.id), eq(payments.purpose, 'balance')));
   if (paid) throw new ServiceError(422, 'The balance is paid: the price can no longer change.');
 }
 
 /** Replaces the ticket's worked-out lines with those its garments' finishes and plans call for. */
 export async function priceFromGarments(actor: Actor, ticketId: string, input: z.infer<typeof autoLinesInput>): Promise<{ lines: PriceLine[]; unpriced: string[] }> {
-  const ticket = await shopTicket(actor, ticketId);
-  await refuseWhenSettled(ticket);
+  await shopTicket(actor, ticketId);
   const facts = await garmentFacts(actor.shopId, ticketId);
   const { lines, unpriced } = priceTicket(facts, await priceListOf(actor.shopId), input);
-  await db.transaction(async (tx) => {
+  await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
+    await refuseWhenSettled(tx, ticket);
     await tx.delete(priceLines).where(and(eq(priceLines.ticketId, ticketId), eq(priceLines.shopId, actor.shopId), eq(priceLines.source, 'auto')));
     if (lines.length > 0) {
       // One transaction shares one now(): a millisecond apart keeps the lines in the garments' order.
       const at = Date.now();
       await tx.insert(priceLines).values(lines.map((l, i) => ({ ...l, shopId: actor.shopId, ticketId, source: 'auto' as const, createdById: actor.userId, createdAt: new Date(at + i) })));
     }
+    await expireOpenLinks(tx, ticketId);
   });
-  await expireOpenLinks(ticketId);
   await audit(actor.shopId, actor.userId, 'prices.from-garments', ticketId, { lines: lines.length, rush: input.rush });
   return { lines: await linesOf(actor.shopId, ticketId), unpriced };
 }
 
 /** Adds a line from the list, or an adjustment with its reason. */
 export async function addLine(actor: Actor, ticketId: string, input: z.infer<typeof lineInput>): Promise<PriceLine> {
-  const ticket = await shopTicket(actor, ticketId);
-  await refuseWhenSettled(ticket);
   const entry = input.source === 'list' ? (await priceListOf(actor.shopId))[input.key] : null;
   const values =
     input.source === 'list'
       ? { key: input.key, label: entry!.label, amountMinor: entry!.amountMinor, reason: null }
       : { key: null, label: input.label, amountMinor: input.amountMinor, reason: input.reason };
-  const [row] = await db.insert(priceLines).values({ ...values, source: input.source, shopId: actor.shopId, ticketId, createdById: actor.userId }).returning();
-  await expireOpenLinks(ticketId);
-  await audit(actor.shopId, actor.userId, input.source === 'adjust' ? 'prices.adjusted' : 'prices.line-added', ticketId, { amountMinor: row!.amountMinor, reason: row!.reason });
-  return row!;
+  const row = await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
+    await refuseWhenSettled(tx, ticket);
+    const [added] = await tx.insert(priceLines).values({ ...values, source: input.source, shopId: actor.shopId, ticketId, createdById: actor.userId }).returning();
+    await expireOpenLinks(tx, ticketId);
+    return added!;
+  });
+  await audit(actor.shopId, actor.userId, input.source === 'adjust' ? 'prices.adjusted' : 'prices.line-added', ticketId, { amountMinor: row.amountMinor, reason: row.reason });
+  return row;
 }
 
 /** What the pricing needs to know of each garment on the ticket, read from its measurements. */
@@ -148,7 +150,8 @@ export async function garmentFacts(shopId: string, ticketId: string): Promise<Ga
       label: g.description?.trim() || `Garment ${i + 1}`,
       finish,
       taperLetOut: finish === 'cuff' && own.some((m) => legNeedsLetOut(m.unit, m.values)),
-      oldCuff: own.some((m) => flag(m.values, 'oldCuff')),
+      // Noted at intake (or on the garment since): an old cuff is let down before it is made again.
+      oldCuff: g.existingFinish === 'cuff',
     };
   });
 }
@@ -166,10 +169,6 @@ function text(values: Stored, field: string): string | undefined {
   if (typeof v === 'string' || typeof v === 'number') return String(v);
   if (v && typeof v === 'object' && 'text' in v) return String((v as { text: unknown }).text);
   return undefined;
-}
-
-function flag(values: unknown, field: string): boolean {
-  return !!values && typeof values === 'object' && (values as Stored)[field] === true;
 }
 
 /** Runs the engine's taper check on a leg's stored lengths; false when the leg has no taper widths. */
