@@ -1,6 +1,7 @@
 // What the bench's API routes accept (intake, garments, step moves, shop bench settings), checked
 // the same way in the islands' forms and on the server. Plain zod: islands import it.
 import { z } from 'zod';
+import { EXISTING_FINISHES } from './existing-finish';
 import { GARMENT_STEPS } from './garment-steps';
 
 // Kept here for the services; the islands import it from garment-steps, which carries no zod.
@@ -25,9 +26,11 @@ export const garmentInput = z.object({
   description: z.string().trim().min(1, 'Describe the garment, e.g. "Navy wool trousers".').max(200, 'Keep it under 200 characters.'),
   dueOn: dueDate,
   assigneeId: assignee,
+  /** how the bottoms came in; left out, intake takes a plain hem (DEFAULT_EXISTING_FINISH) */
+  existingFinish: z.enum(EXISTING_FINISHES, { error: 'Choose plain hem, cuff or unfinished.' }).optional(),
 });
 
-/** A change to a garment's description, due date or assignee. */
+/** A change to a garment's description, due date, assignee or existing finish. */
 export const garmentPatch = garmentInput.partial();
 
 /** Optional text: blank or missing is null. */

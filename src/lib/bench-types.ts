@@ -1,4 +1,5 @@
 // The shapes the bench's API routes answer with, for the islands to type their queries.
+import type { ExistingFinish } from './existing-finish';
 import type { GarmentStep } from './garment-steps';
 import type { Scale } from './bench-requests';
 import type { SavedLeg } from './measurement-request';
@@ -65,6 +66,8 @@ export interface AuditEntry {
 
 /** A garment with its ticket and customer. */
 export interface GarmentDetail extends GarmentSummary {
+  /** how the bottoms came in (plain hem, cuff, unfinished) */
+  existingFinish: ExistingFinish;
   ticket: { id: string; number: number; status: GarmentStep; note: string | null };
   customer: CustomerCard | null;
 }

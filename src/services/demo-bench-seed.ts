@@ -4,6 +4,7 @@ import { db } from '@/db';
 import { auditMany } from './audit';
 import { garments, measurements, tickets } from '@/db/schema';
 import { parseLength } from '@/lib/allowance';
+import type { ExistingFinish } from '@/lib/existing-finish';
 import { leastAdvanced, type GarmentStep } from '@/lib/garment-steps';
 import type { Finish, LegLength, SavedLength } from '@/lib/measurement-request';
 import type { Role } from '@/lib/roles';
@@ -15,6 +16,8 @@ interface DemoGarment {
   who?: Role;
   dueIn: number;
   fitting?: { finish: Finish; left: Lengths; right?: Lengths };
+  /** how the pair came in; plain hem when not said */
+  existingFinish?: ExistingFinish;
 }
 interface DemoTicket {
   customer: number;
@@ -47,10 +50,11 @@ const TICKETS: DemoTicket[] = [
   },
   {
     customer: 3,
-    note: 'Let down and cuff; check the cloth.',
+    note: 'Came in with cuffs: let down and cuff again; check the cloth.',
     garments: [
       {
         description: 'Charcoal wool trousers',
+        existingFinish: 'cuff',
         status: 'stitched',
         who: 'tailor',
         dueIn: 1,
@@ -86,7 +90,7 @@ export async function seedBenchDemo(shopId: string, customerIds: string[], peopl
     for (const [position, g] of t.garments.entries()) {
       const [row] = await db
         .insert(garments)
-        .values({ shopId, ticketId: ticket!.id, position, description: g.description, status: g.status, dueOn: day(g.dueIn), assigneeId: g.who ? people[g.who] : null })
+        .values({ shopId, ticketId: ticket!.id, position, description: g.description, status: g.status, dueOn: day(g.dueIn), assigneeId: g.who ? people[g.who] : null, existingFinish: g.existingFinish })
         .returning();
       if (!g.fitting) continue;
       const legs = { left: g.fitting.left, right: g.fitting.right ?? g.fitting.left };

@@ -79,7 +79,7 @@ export async function createTicket(actor: Actor, typed: IntakeInput): Promise<Ti
       .returning();
     if (input.garments.length) {
       await tx.insert(garments).values(
-        input.garments.map((g, position) => ({ shopId: actor.shopId, ticketId: t!.id, position, description: g.description, dueOn: g.dueOn ?? input.dueOn, assigneeId: g.assigneeId })),
+        input.garments.map((g, position) => ({ shopId: actor.shopId, ticketId: t!.id, position, description: g.description, dueOn: g.dueOn ?? input.dueOn, assigneeId: g.assigneeId, existingFinish: g.existingFinish })),
       );
     }
     return t!;

@@ -9,7 +9,7 @@ vi.mock('@/db', () => import('../db/db-mock'));
 const { db, handle } = await import('@/db');
 const { customers, tickets } = await import('@/db/schema');
 const { seedBenchDemo } = await import('@/services/demo-bench-seed');
-const { listQueue } = await import('@/services/garments');
+const { getGarment, listQueue } = await import('@/services/garments');
 const { fittingOf } = await import('@/services/measurements');
 const { GARMENT_STEPS, leastAdvanced } = await import('@/lib/garment-steps');
 const { todayIso } = await import('@/lib/due-date');
@@ -51,5 +51,12 @@ describe('demo bench seed', () => {
     expect(left!.values.backPin).toEqual({ text: '31 1/4', mm: 793.75 });
     expect(right!.values.backPin).toEqual({ text: '31 1/2', mm: 800.1 });
     expect(fitting.history.filter((e) => e.action === 'measurement.changed')).toHaveLength(8);
+  });
+
+  it('brings one pair in with an old cuff (the charcoal wool), every other pair with a plain hem', async () => {
+    const queue = await listQueue(shop.lead);
+    const came = await Promise.all(queue.map(async (g) => [g.description, (await getGarment(shop.lead, g.id)).existingFinish]));
+    expect(came.filter(([, f]) => f === 'cuff')).toEqual([['Charcoal wool trousers', 'cuff']]);
+    expect(came.filter(([, f]) => f !== 'cuff' && f !== 'plain-hem')).toEqual([]);
   });
 });

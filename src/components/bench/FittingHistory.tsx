@@ -1,5 +1,6 @@
 import type { AuditEntry } from '@/lib/bench-types';
 import { dateTimeText } from '@/lib/date-text';
+import { EXISTING_FINISH_LABELS, type ExistingFinish } from '@/lib/existing-finish';
 import { isGarmentStep, type GarmentStep } from '@/lib/garment-steps';
 import { FINISH_LABELS, LEG_LENGTH_LABELS, LEG_LENGTHS, type Finish, type LegLength } from '@/lib/measurement-request';
 
@@ -8,7 +9,7 @@ interface Props {
   label: (s: GarmentStep) => string;
 }
 
-const OTHER_FIELDS: Record<string, string> = { finish: 'Finish', preset: 'Preset', unit: 'Unit', description: 'Description', dueOn: 'Due date', assigneeId: 'Given to' };
+const OTHER_FIELDS: Record<string, string> = { finish: 'Finish', preset: 'Preset', unit: 'Unit', description: 'Description', dueOn: 'Due date', assigneeId: 'Given to', existingFinish: 'Existing finish' };
 
 function fieldName(field: string): string {
   return LEG_LENGTH_LABELS[field as LegLength] ?? OTHER_FIELDS[field] ?? field;
@@ -17,6 +18,7 @@ function fieldName(field: string): string {
 function shown(field: string, value: unknown): string {
   if (value === null || value === undefined || value === '') return 'nothing';
   if (field === 'finish') return FINISH_LABELS[value as Finish] ?? String(value);
+  if (field === 'existingFinish') return EXISTING_FINISH_LABELS[value as ExistingFinish] ?? String(value);
   return String(value);
 }
 

@@ -4,6 +4,7 @@ import { GarmentPhotos } from '@/components/photos/GarmentPhotos';
 import { withQuery } from '@/components/WithQuery';
 import { scaleUnit } from '@/lib/bench-requests';
 import type { FittingView, GarmentDetail } from '@/lib/bench-types';
+import { EXISTING_FINISH_LABELS } from '@/lib/existing-finish';
 import { fetchJson } from '@/lib/fetch-json';
 import { GARMENT_STEPS, ticketLabel } from '@/lib/garment-steps';
 import { DueBadge } from './DueBadge';
@@ -54,6 +55,8 @@ function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canA
           <dd><DueBadge dueOn={g.dueOn} /></dd>
           <dt className="font-semibold">Given to</dt>
           <dd>{g.assigneeName ?? 'Nobody yet'}</dd>
+          <dt className="font-semibold">Existing finish</dt>
+          <dd>{EXISTING_FINISH_LABELS[g.existingFinish]}{g.existingFinish === 'cuff' && ': let down and press out the old creases first'}</dd>
           {g.customer?.notes && (
             <>
               <dt className="font-semibold">Customer notes</dt>
@@ -66,7 +69,7 @@ function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canA
             <GarmentEdit garment={g} onDone={() => setEditing(false)} />
           ) : (
             <button type="button" onClick={() => setEditing(true)} className="min-h-11 self-start rounded-md border-2 border-ink px-4 text-lg font-semibold">
-              Change description, due date or who
+              Change description, due date, who or existing finish
             </button>
           ))}
         <ol aria-label="Bench steps" className="flex flex-wrap gap-2">

@@ -6,19 +6,20 @@ import { Field, FormMessage, SubmitButton } from '@/components/Field';
 import { garmentPatch } from '@/lib/bench-requests';
 import type { GarmentDetail } from '@/lib/bench-types';
 import { ApiError, fetchJson } from '@/lib/fetch-json';
+import { ExistingFinishSelect } from './ExistingFinishSelect';
 import { useAssignees } from './use-bench';
 
 type Form = z.input<typeof garmentPatch>;
 type Patch = z.output<typeof garmentPatch>;
 const resolver = zodResolver(garmentPatch) as unknown as Resolver<Form, unknown, Patch>;
 
-/** Change a garment's description, due date or who works on it (each change lands in the history). */
+/** Change a garment's description, due date, who works on it or its existing finish (each change lands in the history). */
 export function GarmentEdit({ garment, onDone }: { garment: GarmentDetail; onDone: () => void }) {
   const client = useQueryClient();
   const people = useAssignees();
   const { register, handleSubmit, formState, setError } = useForm<Form, unknown, Patch>({
     resolver,
-    defaultValues: { description: garment.description, dueOn: garment.dueOn ?? '', assigneeId: garment.assigneeId ?? '' },
+    defaultValues: { description: garment.description, dueOn: garment.dueOn ?? '', assigneeId: garment.assigneeId ?? '', existingFinish: garment.existingFinish },
   });
   const save = useMutation({
     mutationFn: (body: Patch) => fetchJson(`/api/garments/${garment.id}`, { method: 'PATCH', body }),
@@ -32,7 +33,7 @@ export function GarmentEdit({ garment, onDone }: { garment: GarmentDetail; onDon
   });
   return (
     <form noValidate aria-label="Edit the garment" onSubmit={handleSubmit((v) => save.mutate(v))} className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4">
-      <div className="grid gap-3 sm:grid-cols-[2fr_1fr_1fr]">
+      <div className="grid items-start gap-3 sm:grid-cols-[2fr_1fr_1fr]">
         <Field label="Garment" registration={register('description')} error={formState.errors.description} id="edit-description" />
         <Field label="Due" type="date" registration={register('dueOn')} error={formState.errors.dueOn} id="edit-due" />
         <div className="flex flex-col gap-1">
@@ -42,6 +43,7 @@ export function GarmentEdit({ garment, onDone }: { garment: GarmentDetail; onDon
             {people.data?.filter((p) => p.role !== 'counter').map((p) => <option key={p.userId} value={p.userId}>{p.name}</option>)}
           </select>
         </div>
+        <ExistingFinishSelect id="edit-existing" registration={register('existingFinish')} error={formState.errors.existingFinish} />
       </div>
       {save.error && <FormMessage kind="error">Not saved: {save.error.message}</FormMessage>}
       <div className="flex flex-wrap gap-3">

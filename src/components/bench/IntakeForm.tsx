@@ -7,11 +7,15 @@ import { withQuery } from '@/components/WithQuery';
 import { intakeRequest, type Intake, type IntakeInput } from '@/lib/bench-requests';
 import type { CustomerCard } from '@/lib/bench-types';
 import { ApiError, fetchJson } from '@/lib/fetch-json';
+import { DEFAULT_EXISTING_FINISH } from '@/lib/existing-finish';
+import { ExistingFinishSelect } from './ExistingFinishSelect';
 import { useAssignees } from './use-bench';
 
 type Form = IntakeInput & { garments: NonNullable<IntakeInput['garments']> };
 const resolver = zodResolver(intakeRequest) as unknown as Resolver<Form, unknown, Intake>;
 const SELECT = 'min-h-11 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent';
+// A pair comes in with a plain hem unless the counter says otherwise (DEFAULT_EXISTING_FINISH).
+const NEW_GARMENT = { description: '', dueOn: '', assigneeId: '', existingFinish: DEFAULT_EXISTING_FINISH };
 
 function Intake() {
   const customers = useQuery({ queryKey: ['customers'], queryFn: () => fetchJson<CustomerCard[]>('/api/customers') });
@@ -19,7 +23,7 @@ function Intake() {
   const [who, setWho] = useState<'existing' | 'new'>('existing');
   const { register, control, handleSubmit, formState, setError, setValue } = useForm<Form, unknown, Intake>({
     resolver,
-    defaultValues: { customerId: '', note: '', dueOn: '', garments: [{ description: '', dueOn: '', assigneeId: '' }] },
+    defaultValues: { customerId: '', note: '', dueOn: '', garments: [{ ...NEW_GARMENT }] },
   });
   const garments = useFieldArray({ control, name: 'garments' });
   const open = useMutation({
@@ -66,8 +70,9 @@ function Intake() {
       <fieldset className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4">
         <legend className="px-1 text-xl font-extrabold">Garments</legend>
         {garments.fields.map((f, i) => (
-          <div key={f.id} className="grid items-end gap-3 border-b border-rule pb-3 sm:grid-cols-[2fr_1fr_1fr_auto]">
+          <div key={f.id} className="grid items-end gap-3 border-b border-rule pb-3 sm:grid-cols-[2fr_1fr_1fr_1fr_auto]">
             <Field label={`Garment ${i + 1}`} registration={register(`garments.${i}.description`)} error={e.garments?.[i]?.description} id={`g-${i}-description`} placeholder="e.g. Navy wool trousers, cuffs" />
+            <ExistingFinishSelect id={`g-${i}-existing`} registration={register(`garments.${i}.existingFinish`)} error={e.garments?.[i]?.existingFinish} hint={false} />
             <Field label="Due" type="date" registration={register(`garments.${i}.dueOn`)} error={e.garments?.[i]?.dueOn} id={`g-${i}-due`} />
             <div className="flex flex-col gap-1">
               <label htmlFor={`g-${i}-who`} className="font-semibold">Given to</label>
@@ -83,7 +88,8 @@ function Intake() {
             )}
           </div>
         ))}
-        <button type="button" onClick={() => garments.append({ description: '', dueOn: '', assigneeId: '' })} className="min-h-11 self-start rounded border-2 border-accent px-4 text-lg font-semibold text-accent">
+        <p className="text-sm text-muted">Existing finish: what the bottoms are now. An old cuff is let down and pressed out before the new finish is made, and the price list's line for that is added by itself.</p>
+        <button type="button" onClick={() => garments.append({ ...NEW_GARMENT })} className="min-h-11 self-start rounded border-2 border-accent px-4 text-lg font-semibold text-accent">
           Another garment
         </button>
       </fieldset>
