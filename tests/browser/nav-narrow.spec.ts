@@ -1,0 +1,63 @@
+// The signed-in header on a phone (390 px) and a tablet held upright (768 px): the lead's links,
+// name and sign-out wrap onto more lines, nothing runs off the side, and every link stays a
+// finger-sized target. Screenshots in test-results/nav-*.png.
+import { mkdirSync } from 'node:fs';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { inject } from 'vitest';
+import { launch, ready } from './browser';
+import { signInAs } from './sign-in';
+
+let browser: Browser;
+
+beforeAll(async () => {
+  mkdirSync('test-results', { recursive: true });
+  browser = await launch();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function pageAt(width: number): Promise<Page> {
+  const context = await browser.newContext({ baseURL: inject('baseURL'), viewport: { width, height: 900 }, hasTouch: true });
+  return context.newPage();
+}
+
+const overflow = (page: Page) => page.evaluate(() => ({ scroll: document.documentElement.scrollWidth, inner: window.innerWidth }));
+
+describe('signed-in nav on narrow screens', () => {
+  for (const width of [390, 768]) {
+    it(`wraps without running off the side at ${width} px`, async () => {
+      const page = await pageAt(width);
+      // The lead has the most links. Screens whose own content is wider than a phone are left out
+      // (the presets picker; intake's garment row while its existing-finish column is being added).
+      await signInAs(page, 'lead', '/queue');
+      for (const path of ['/prices', '/staff', '/queue']) {
+        await page.goto(path);
+        await ready(page);
+        const { scroll, inner } = await overflow(page);
+        expect(scroll, path).toBeLessThanOrEqual(inner);
+      }
+      const nav = page.getByRole('navigation', { name: 'Shop' });
+      const links = nav.getByRole('link');
+      expect(await links.count()).toBeGreaterThanOrEqual(5);
+
+      // Every link, the name and sign-out lie inside the screen and stay at least 44 px tall.
+      const boxes = [...(await links.all()), page.getByRole('button', { name: 'Sign out' })];
+      for (const item of boxes) {
+        const box = (await item.boundingBox())!;
+        expect(box.x).toBeGreaterThanOrEqual(0);
+        expect(box.x + box.width).toBeLessThanOrEqual(width);
+        expect(box.height).toBeGreaterThanOrEqual(44);
+      }
+      // Keyboard: the first link takes focus from the skip link onward and shows it.
+      await page.keyboard.press('Tab');
+      await page.keyboard.press('Tab');
+      await page.keyboard.press('Tab');
+      const focused = await page.evaluate(() => document.activeElement?.textContent?.trim());
+      expect(focused).toBe('Queue');
+      await page.screenshot({ path: `test-results/nav-${width}.png` });
+      await page.context().close();
+    });
+  }
+});
