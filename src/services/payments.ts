@@ -14,7 +14,7 @@ import { balanceOf } from '@/lib/pricing/price-lines';
 import { audit } from './audit';
 import { ServiceError } from './errors';
 import { lockTicket, withTicketLock } from './garments';
-import { expireOpenLinks } from './payment-links';
+import { expireOpenLinks, paymentServiceFailure } from './payment-links';
 import { counterSettingsOf, linesOf, shopTicket, type CounterView } from './prices';
 
 /** Everything the counter panel shows about a ticket's money. */
@@ -88,31 +88,41 @@ export async function takePayment(actor: Actor, ticketId: string, input: z.infer
   return counterSummary(actor, ticketId);
 }
 
-/** A payment link for the balance due; an open link for the same amount is reused. */
+/** A payment link for the balance due; an open link for the same amount is reused, also by a
+ * second click arriving while the first is still being made (both run under the ticket's lock). */
 export async function createPaymentLink(actor: Actor, ticketId: string, appOrigin: string): Promise<CounterSummary> {
   const client = paymentClient();
   if (!client) throw new ServiceError(422, 'Online payment is not set up on this server (PAYMENTS_API_KEY).');
-  const before = await counterSummary(actor, ticketId);
-  if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
-  if (before.due === 0) throw new ServiceError(422, 'Nothing is due on this ticket.');
-  if (before.link?.status === 'open' && before.link.amountMinor === before.due) return before;
-  await withTicketLock(actor.shopId, ticketId, (tx) => expireOpenLinks(tx, ticketId));
-  const session = await client.checkout.sessions.create({
-    mode: 'payment',
-    line_items: [
-      {
-        quantity: 1,
-        price_data: { currency: before.currency.toLowerCase(), unit_amount: before.due, product_data: { name: `${actor.shopName}: ticket T-${before.ticket.number}, balance` } },
-      },
-    ],
-    client_reference_id: ticketId,
-    metadata: { ticketId, shopId: actor.shopId },
-    success_url: `${appOrigin}/paid`,
-    cancel_url: `${appOrigin}/paid?cancelled=1`,
+  const settings = await counterSettingsOf(actor.shopId);
+  const made = await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
+    const before = await summaryOf(ticket, settings, tx);
+    if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
+    if (before.due === 0) throw new ServiceError(422, 'Nothing is due on this ticket.');
+    if (before.link?.status === 'open' && before.link.amountMinor === before.due) return null;
+    await expireOpenLinks(tx, ticketId);
+    let session: Stripe.Checkout.Session;
+    try {
+      session = await client.checkout.sessions.create({
+        mode: 'payment',
+        line_items: [
+          {
+            quantity: 1,
+            price_data: { currency: before.currency.toLowerCase(), unit_amount: before.due, product_data: { name: `${actor.shopName}: ticket T-${before.ticket.number}, balance` } },
+          },
+        ],
+        client_reference_id: ticketId,
+        metadata: { ticketId, shopId: actor.shopId },
+        success_url: `${appOrigin}/paid`,
+        cancel_url: `${appOrigin}/paid?cancelled=1`,
+      });
+    } catch (e) {
+      throw paymentServiceFailure(e, 'make a pay link');
+    }
+    if (!session.url) throw new ServiceError(502, 'The payment service gave no link: try again in a moment.');
+    await tx.insert(paymentLinks).values({ shopId: actor.shopId, ticketId, sessionId: session.id, url: session.url, amountMinor: before.due, currency: before.currency, createdById: actor.userId });
+    return before.due;
   });
-  if (!session.url) throw new ServiceError(422, 'The payment service gave no link.');
-  await db.insert(paymentLinks).values({ shopId: actor.shopId, ticketId, sessionId: session.id, url: session.url, amountMinor: before.due, currency: before.currency, createdById: actor.userId });
-  await audit(actor.shopId, actor.userId, 'payment.link', ticketId, { amountMinor: before.due });
+  if (made !== null) await audit(actor.shopId, actor.userId, 'payment.link', ticketId, { amountMinor: made });
   return counterSummary(actor, ticketId);
 }
 

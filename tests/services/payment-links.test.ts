@@ -63,6 +63,28 @@ afterAll(async () => {
   await handle.close();
 });
 
+describe('making a pay link', () => {
+  it('gives one link for a double click: concurrent calls all answer the same open link', async () => {
+    for (let round = 0; round < 3; round += 1) {
+      const t = await pricedTicket(a);
+      const answers = await Promise.all([1, 2, 3].map(() => pay.createPaymentLink(a.counter, t.id, ORIGIN)));
+      const rows = await linksOf(t.id);
+      expect(rows.map((l) => [l.status, l.amountMinor]), `round ${round}`).toEqual([['open', 1800]]);
+      expect(new Set(answers.map((s) => s.link?.url))).toEqual(new Set([rows[0]!.url]));
+    }
+  });
+
+  it('replaces the open link once the amount due has changed', async () => {
+    const t = await pricedTicket(a);
+    const first = await pay.createPaymentLink(a.counter, t.id, ORIGIN);
+    await pay.takePayment(a.counter, t.id, { purpose: 'deposit', method: 'cash', amountMinor: 500 });
+    const second = await pay.createPaymentLink(a.counter, t.id, ORIGIN);
+    expect(second.link).toMatchObject({ amountMinor: 1300, status: 'open' });
+    expect(second.link!.url).not.toBe(first.link!.url);
+    expect((await linksOf(t.id)).map((l) => l.status).sort()).toEqual(['expired', 'open']);
+  });
+});
+
 describe('a price change closes the open pay link at the service first', () => {
   it('marks the link expired once the service has expired it', async () => {
     const t = await pricedTicket(a);
