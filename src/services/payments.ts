@@ -77,8 +77,9 @@ export async function takePayment(actor: Actor, ticketId: string, input: z.infer
         throw new ServiceError(422, 'Take exactly the balance due (give change from cash).');
       }
       await tx.insert(payments).values({ ...input, shopId: actor.shopId, ticketId, currency: before.currency, takenById: actor.userId });
-      // Once the balance is paid at the counter, the customer must not be able to pay it again online.
-      if (input.purpose === 'balance') await expireOpenLinks(tx, ticketId);
+      // An open link asks for the old balance: paid at the counter, the customer must not pay it
+      // again online; after a deposit, its amount is more than is now due.
+      await expireOpenLinks(tx, ticketId);
     });
   } catch (e) {
     if (isUniqueViolation(e)) throw new ServiceError(409, `A ${input.purpose} is already on record for this ticket.`);

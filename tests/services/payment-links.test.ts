@@ -96,6 +96,15 @@ describe('a price change closes the open pay link at the service first', () => {
     expect(made.link?.status).toBe('open');
   });
 
+  it('a deposit taken at the counter closes it too: its amount is no longer the balance', async () => {
+    const t = await pricedTicket(a);
+    await pay.createPaymentLink(a.counter, t.id, ORIGIN);
+    const [link] = await linksOf(t.id);
+    await pay.takePayment(a.counter, t.id, { purpose: 'deposit', method: 'cash', amountMinor: 500 });
+    expect((await linksOf(t.id)).map((l) => l.status)).toEqual(['expired']);
+    expect((await service.checkout.sessions.retrieve(link!.sessionId)).status).toBe('expired');
+  });
+
   it('takes a link the service already expired by itself as expired', async () => {
     const t = await pricedTicket(a);
     await pay.createPaymentLink(a.counter, t.id, ORIGIN);
