@@ -12,7 +12,7 @@ export class ApiError extends Error {
 }
 
 /** Fetches JSON from the app (a FormData body goes as a multipart form); throws ApiError with the server's message when not OK. */
-export async function fetchJson<T>(url: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
+export async function fetchJson<T>(url: string, init: { method?: string; body?: unknown; signal?: AbortSignal } = {}): Promise<T> {
   const { body } = init;
   const form = body instanceof FormData;
   const response = await fetch(url, {
@@ -21,11 +21,13 @@ export async function fetchJson<T>(url: string, init: { method?: string; body?: 
     headers: body === undefined || form ? {} : { 'content-type': 'application/json' },
     body: body === undefined ? undefined : form ? body : JSON.stringify(body),
     credentials: 'same-origin',
+    signal: init.signal,
   });
   const data = (await response.json().catch(() => ({}))) as Record<string, unknown>;
   if (!response.ok) {
     const message = String(data.error ?? data.message ?? `The server answered ${response.status}.`);
-    throw new ApiError(response.status, message, (data.issues as Record<string, string>) ?? {});
+    // Field messages come as `issues` from the app's routes and as `fields` from the public /api/plan.
+    throw new ApiError(response.status, message, ((data.issues ?? data.fields) as Record<string, string>) ?? {});
   }
   return data as T;
 }
