@@ -1,12 +1,11 @@
 // The live plan for one leg: the same POST /api/plan the public calculator uses, fed from the
 // leg's saved or being-edited values, the last good plan kept while a field is being fixed.
-import { useEffect, useState } from 'react';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import { legMainRequest, legTaperRequest } from '@/lib/leg-plan';
 import type { LegValues } from '@/lib/measurement-request';
-import type { PlanResponse } from '@/lib/plan-request';
 import type { Problem } from '@/components/calculator/PlanView';
 import { usePlan } from '@/components/calculator/use-plan';
+import { useLastGoodPlan } from '@/components/calculator/use-last-good-plan';
 import type { TaperPlan } from '@/lib/allowance/types';
 
 /** What PlanView needs for one leg, plus the field messages of the engine. */
@@ -14,13 +13,7 @@ export function useLegPlan(leg: LegValues, unit: Unit, precision: Precision) {
   const mainReq = legMainRequest(leg, unit, precision);
   const main = usePlan(mainReq);
   const taper = usePlan(legTaperRequest(leg, unit, precision));
-  const [lastGood, setLastGood] = useState<PlanResponse | null>(null);
-  useEffect(() => {
-    if (main.data?.ok && !main.isPlaceholderData) setLastGood(main.data.plan);
-  }, [main.data, main.isPlaceholderData]);
-  const wanted = leg.finish === 'cuff' ? 'cuff' : 'hem';
-  const shown = main.data?.ok ? main.data.plan : lastGood;
-  const plan = shown && shown.kind === wanted ? shown : null;
+  const plan = useLastGoodPlan(main, leg.finish === 'cuff' ? 'cuff' : 'hem');
   const problem: Problem | null = !mainReq
     ? { kind: 'empty', text: 'Type the cuff depth, or tap a preset, and the chalk lines appear here.' }
     : !main.asked

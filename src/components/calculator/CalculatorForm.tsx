@@ -1,8 +1,8 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { useForm, useWatch, type Resolver } from 'react-hook-form';
 import type { Precision, Unit } from '@/lib/allowance/types';
-import { planRequest, type PlanRequest, type PlanResponse } from '@/lib/plan-request';
+import { planRequest, type PlanRequest } from '@/lib/plan-request';
 import { BLANK, LENGTH_FIELDS, mainRequest, taperRequest, type CalculatorValues, type LengthField } from './calculator-values';
 import { CuffFields } from './CuffFields';
 import { HemFields } from './HemFields';
@@ -10,6 +10,7 @@ import { PlanView, type Problem } from './PlanView';
 import { Segmented } from './Segmented';
 import { TaperFields } from './TaperFields';
 import { useDebounced } from './use-debounced';
+import { useLastGoodPlan } from './use-last-good-plan';
 import { usePlan, type PlanAnswer } from './use-plan';
 
 type Scale = 'in8' | 'in16' | 'cm' | 'mm';
@@ -44,10 +45,7 @@ export function CalculatorForm() {
   const main = usePlan(mainRequest(settled));
   const taper = usePlan(taperOpen ? taperRequest(settled) : null);
 
-  const [lastGood, setLastGood] = useState<PlanResponse | null>(null);
-  useEffect(() => {
-    if (main.data?.ok && !main.isPlaceholderData) setLastGood(main.data.plan);
-  }, [main.data, main.isPlaceholderData]);
+  const plan = useLastGoodPlan(main, values.kind);
 
   const errorFor = (f: LengthField): string | undefined =>
     formState.errors[f]?.message ?? serverMessage(main.data, f) ?? (taperOpen ? serverMessage(taper.data, f) : undefined);
@@ -70,8 +68,6 @@ export function CalculatorForm() {
     setValue('kind', kind);
   };
 
-  const shown = main.data?.ok ? main.data.plan : lastGood;
-  const plan = shown && shown.kind === values.kind ? shown : null;
   const blankDepth = settled.kind === 'cuff' && settled.cuffDepth.trim() === '';
   const problem: Problem | null = !main.asked
     ? blankDepth
