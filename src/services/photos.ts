@@ -8,6 +8,7 @@ import { files, garments, user, type StoredFile } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import type { PhotoView } from '@/lib/photo-view';
 import { fileStorage } from '@/lib/storage';
+import { stripHeifMetadata } from '@/lib/storage/heif-metadata';
 import { PLACEHOLDER_THUMB } from '@/lib/storage/placeholder-thumb';
 import { isPathLike, safeName } from '@/lib/storage/safe-name';
 import { sniffImage, type ImageType } from '@/lib/storage/sniff-image';
@@ -96,8 +97,13 @@ interface Prepared {
 // a customer's legs keeps none of that. The EXIF orientation is applied first (rotate()), as sharp
 // drops all metadata, orientation included, from what it writes unless asked to keep it.
 async function prepare(bytes: Uint8Array, type: ImageType, name: string): Promise<Prepared> {
-  // This server's sharp cannot decode HEIC: kept as it came, served with a placeholder thumbnail.
-  if (type.mime === 'image/heic') return { bytes, thumb: null };
+  // This server's sharp cannot decode HEIC: its EXIF and XMP items are zeroed in place instead, and
+  // it is served with a placeholder thumbnail. One whose boxes cannot be read is not kept at all.
+  if (type.mime === 'image/heic') {
+    const stripped = stripHeifMetadata(bytes);
+    if (!stripped) throw new UploadRefused(415, `${name} could not be read as a HEIC photo, so its location could not be removed: send it as a JPEG or take it again.`, name);
+    return { bytes: stripped.bytes, thumb: null };
+  }
   try {
     const upright = sharp(bytes, { failOn: 'error' }).rotate();
     const clean = type.mime === 'image/jpeg' ? upright.jpeg({ quality: 92 }) : type.mime === 'image/png' ? upright.png() : upright.webp({ quality: 92 });

@@ -16,6 +16,7 @@ const { useStorage } = await import('@/lib/storage');
 const { DiskStorage } = await import('@/lib/storage/disk-storage');
 const svc = await import('@/services/photos');
 const { makeShop } = await import('./fixtures');
+const { gpsExif, sampleHeif, SAMPLE_EXIF_MAKE, SAMPLE_PICTURE, SAMPLE_XMP_MARK } = await import('../lib/storage/heif-sample');
 
 const root = mkdtempSync(join(tmpdir(), 'cuffwright-photos-'));
 const storageRoot = join(root, 'files');
@@ -93,17 +94,27 @@ describe('fitting photos', () => {
     expect((await svc.listPhotos(a.lead, garmentA)).map((p) => p.id)).toEqual(added.map((p) => p.id));
   });
 
-  it('take a HEIC from a phone by its ftyp brand, kept without a thumbnail', async () => {
-    const heic = new Uint8Array([0, 0, 0, 24, ...Buffer.from('ftypheic'), 0, 0, 0, 0, ...Buffer.from('mif1heic'), ...new Array(64).fill(7)]);
-    const [p] = await svc.addPhotos(a.tailor, garmentA, [{ name: 'IMG_0042.HEIC', bytes: heic }], 10 * MB);
-    expect(p).toMatchObject({ mimeType: 'image/heic', hasThumb: false });
-    // This sharp cannot decode HEIC: the original is kept as it came, the thumbnail is our tile.
-    expect(Buffer.from((await svc.readPhoto(a.tailor, p!.id)).bytes).equals(Buffer.from(heic))).toBe(true);
+  it('take a HEIC from a phone by its ftyp brand, without its EXIF (GPS) and XMP, and with a placeholder thumbnail', async () => {
+    const heic = await sampleHeif();
+    const [p] = await svc.addPhotos(a.tailor, garmentA, [{ name: 'IMG_0042.HEIC', bytes: new Uint8Array(heic) }], 10 * MB);
+    expect(p).toMatchObject({ mimeType: 'image/heic', hasThumb: false, bytes: heic.byteLength });
+    // This sharp cannot decode HEIC: the metadata items are zeroed in place, the picture kept as it came.
+    const kept = Buffer.from((await svc.readPhoto(a.tailor, p!.id)).bytes);
+    expect(kept.length).toBe(heic.length);
+    expect(kept.includes(SAMPLE_PICTURE)).toBe(true);
+    expect(kept.includes((await gpsExif()).subarray(6))).toBe(false);
+    expect(kept.includes(Buffer.from(SAMPLE_EXIF_MAKE))).toBe(false);
+    expect(kept.includes(Buffer.from(SAMPLE_XMP_MARK))).toBe(false);
     const thumb = await svc.readPhoto(a.tailor, p!.id, 'thumb');
     expect(thumb.mimeType).toBe('image/svg+xml');
     expect(await sharp(thumb.bytes).metadata()).toMatchObject({ format: 'svg', width: 480, height: 360 });
     expect(new TextDecoder().decode(thumb.bytes)).toContain('open to view');
     expect(readdirSync(join(storageRoot, a.shopId)).filter((n) => n.startsWith(p!.id))).toEqual([`${p!.id}.heic`]);
+  });
+
+  it('refuse a HEIC whose boxes cannot be read, as its location could not be removed', async () => {
+    const broken = new Uint8Array([0, 0, 0, 24, ...Buffer.from('ftypheic'), 0, 0, 0, 0, ...Buffer.from('mif1heic'), ...new Array(64).fill(7)]);
+    await expect(svc.addPhotos(a.tailor, garmentA, [{ name: 'cut-short.heic', bytes: broken }], 10 * MB)).rejects.toMatchObject({ status: 415, message: expect.stringMatching(/location could not be removed/) });
   });
 
   it('keep no EXIF, GPS or XMP in the stored photo, turned upright by its EXIF orientation first', async () => {

@@ -58,9 +58,9 @@ function Photos({ garmentId, canUpload }: Props) {
             </label>
           </div>
           <p className="text-sm text-muted">
-            JPEG, PNG, WebP or HEIC{maxMb ? `, up to ${maxMb} MB each` : ''}. JPEG, PNG and WebP photos are kept upright and
-            without the location and other details the camera writes into them. HEIC photos are kept as they came and get no
-            preview here (a tile says so): open them on a device that reads HEIC.
+            JPEG, PNG, WebP or HEIC{maxMb ? `, up to ${maxMb} MB each` : ''}. Photos are kept without the location and other
+            details the camera writes into them. HEIC photos get no preview here (a tile says so): open them on a device that
+            reads HEIC.
           </p>
           {upload.isPending && <p role="status" className="font-semibold">Uploading…</p>}
           {upload.isError && <FormMessage kind="error">{upload.error.message}</FormMessage>}
