@@ -184,30 +184,30 @@ export async function updateGarment(actor: Actor, id: string, patch: z.output<ty
 /** Moves a garment one step on; pickup (ready → collected) needs the pickup permission. */
 export async function moveGarment(actor: Actor, id: string, to: GarmentStep): Promise<Garment> {
   const g = await visibleGarment(actor, id);
-  return moveVisible(actor, g, to);
-}
-
-/** Moves a garment already known to be visible to the actor (the ticket's move uses it too). */
-export async function moveVisible(actor: Actor, g: Garment, to: GarmentStep): Promise<Garment> {
   const next = nextStep(g.status);
   if (next !== to) {
     throw new ServiceError(422, next ? `This garment is ${stepLabel(g.status)}: it can only move on to ${stepLabel(next)}.` : 'This garment has been collected: there is no step after that.');
   }
   const allowed = to === 'collected' ? can(actor.role, ['tickets', 'pickup']) : can(actor.role, ['tickets', 'advance']);
   if (!allowed) throw new ServiceError(422, `Your role (${actor.role}) may not move a garment to ${stepLabel(to)}.`);
-  if (to === 'collected') {
-    // The counter's rule for every way to "collected": the ticket is ready and nothing is left to pay.
-    const { assertReadyToHandOver } = await import('./payments');
-    await assertReadyToHandOver(actor, g.ticketId);
-  }
-  const [row] = await db
-    .update(garments)
-    .set({ status: to, updatedAt: new Date() })
-    .where(and(eq(garments.id, g.id), eq(garments.shopId, actor.shopId), eq(garments.status, g.status)))
-    .returning();
-  if (!row) throw new ServiceError(409, 'Someone else moved this garment first: reload and try again.');
+  // Under the ticket's lock, like pickup and the counter's writes: a price line added meanwhile
+  // waits, or is already in the balance checked here.
+  const row = await withTicketLock(actor.shopId, g.ticketId, async (tx, ticket) => {
+    if (to === 'collected') {
+      // The counter's rule for every way to "collected": the ticket is ready and nothing is left to pay.
+      const { assertReadyToHandOver } = await import('./payments');
+      await assertReadyToHandOver(actor, g.ticketId, { tx, ticket });
+    }
+    const [moved] = await tx
+      .update(garments)
+      .set({ status: to, updatedAt: new Date() })
+      .where(and(eq(garments.id, g.id), eq(garments.shopId, actor.shopId), eq(garments.status, g.status)))
+      .returning();
+    if (!moved) throw new ServiceError(409, 'Someone else moved this garment first: reload and try again.');
+    await refreshTicketStatus(actor.shopId, g.ticketId, tx);
+    return moved;
+  });
   await audit(actor.shopId, actor.userId, 'garment.moved', g.id, { from: g.status, to });
-  await refreshTicketStatus(actor.shopId, g.ticketId);
   await onGarmentMoved(actor, row);
   return row;
 }

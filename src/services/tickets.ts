@@ -1,5 +1,5 @@
 // A shop's tickets: intake (with its garments), one ticket's page, and moving a whole ticket on.
-import { and, asc, desc, eq, isNull, or, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, isNull, or, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { customers, garments, tickets, type Ticket } from '@/db/schema';
 import type { Actor } from '@/lib/api';
@@ -7,9 +7,11 @@ import { intakeRequest, type IntakeInput } from '@/lib/bench-requests';
 import type { TicketDetail } from '@/lib/bench-types';
 import { nextStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
 import { can } from '@/lib/roles';
-import { audit } from './audit';
+import { audit, auditMany } from './audit';
 import { ServiceError } from './errors';
-import { garmentsOfTicket, garmentVisibleTo, isUuid, moveVisible, staffOf, summaries } from './garments';
+import { onGarmentMoved } from './garment-events';
+import { garmentVisibleTo, isUuid, refreshTicketStatus, staffOf, summaries, withTicketLock } from './garments';
+import { pickUp } from './payments';
 
 /** A ticket as listed: the row plus who it is for and how many garments it holds. */
 export type TicketListItem = Ticket & { customerName: string | null; garmentCount: number };
@@ -88,22 +90,46 @@ export async function createTicket(actor: Actor, typed: IntakeInput): Promise<Ti
   return row;
 }
 
-/** Moves every garment standing at the ticket's step on to the next one (pickup needs the pickup permission). */
+/** Moves every garment standing at the ticket's step on to the next one, all in one transaction
+ * or none; to "collected" it is the counter's pickup (ready, nothing due, the pickup permission). */
 export async function moveTicket(actor: Actor, id: string, to: GarmentStep): Promise<Ticket> {
   if (!isUuid(id)) throw new ServiceError(404, 'No such ticket in this shop.');
   const [visible] = await db.select().from(tickets).where(and(eq(tickets.id, id), visibleTo(actor)));
   if (!visible) throw new ServiceError(404, 'No such ticket in this shop.');
-  const next = nextStep(visible.status);
-  if (next !== to) {
-    throw new ServiceError(422, next ? `Ticket T-${visible.number} is ${stepLabel(visible.status)}: it can only move on to ${stepLabel(next)}.` : `Ticket T-${visible.number} has been collected.`);
+  assertNextStep(visible, to);
+  const allowed = to === 'collected' ? can(actor.role, ['tickets', 'pickup']) : can(actor.role, ['tickets', 'advance']);
+  if (!allowed) throw new ServiceError(422, `Your role (${actor.role}) may not move a ticket to ${stepLabel(to)}.`);
+  if (to === 'collected') {
+    await pickUp(actor, id);
+  } else {
+    const moved = await withTicketLock(actor.shopId, id, async (tx, ticket) => {
+      // Checked again under the lock: someone may have moved the ticket since it was read.
+      assertNextStep(ticket, to);
+      const behind = await tx.select().from(garments).where(and(eq(garments.shopId, actor.shopId), eq(garments.ticketId, id), eq(garments.status, ticket.status)));
+      if (!can(actor.role, ['tickets', 'read-all']) && behind.some((g) => g.assigneeId && g.assigneeId !== actor.userId)) {
+        throw new ServiceError(422, `Some garments of T-${ticket.number} are someone else's: move yours one by one.`);
+      }
+      if (behind.length === 0) throw new ServiceError(422, `Ticket T-${ticket.number} has no garments yet: add one first.`);
+      const rows = await tx
+        .update(garments)
+        .set({ status: to, updatedAt: new Date() })
+        .where(and(inArray(garments.id, behind.map((g) => g.id)), eq(garments.status, ticket.status)))
+        .returning();
+      // A garment moved on its own since it was read: none of this move is kept.
+      if (rows.length !== behind.length) throw new ServiceError(409, 'Someone else moved a garment of this ticket first: reload and try again.');
+      await refreshTicketStatus(actor.shopId, id, tx);
+      return { from: ticket.status, rows };
+    });
+    await auditMany(moved.rows.map((g) => ({ shopId: actor.shopId, actorId: actor.userId, action: 'garment.moved', subject: g.id, detail: { from: moved.from, to } })));
+    for (const g of moved.rows) await onGarmentMoved(actor, g);
   }
-  const behind = (await garmentsOfTicket(actor.shopId, id)).filter((g) => g.status === visible.status);
-  if (!can(actor.role, ['tickets', 'read-all']) && behind.some((g) => g.assigneeId && g.assigneeId !== actor.userId)) {
-    throw new ServiceError(422, `Some garments of T-${visible.number} are someone else's: move yours one by one.`);
-  }
-  if (behind.length === 0) throw new ServiceError(422, `Ticket T-${visible.number} has no garments yet: add one first.`);
-  // Each move sets the ticket's status from its garments; the last one leaves it right.
-  for (const g of behind) await moveVisible(actor, g, to);
   const [row] = await db.select().from(tickets).where(eq(tickets.id, id));
   return row!;
+}
+
+function assertNextStep(ticket: Ticket, to: GarmentStep): void {
+  const next = nextStep(ticket.status);
+  if (next !== to) {
+    throw new ServiceError(422, next ? `Ticket T-${ticket.number} is ${stepLabel(ticket.status)}: it can only move on to ${stepLabel(next)}.` : `Ticket T-${ticket.number} has been collected.`);
+  }
 }
