@@ -198,6 +198,21 @@ describe('fitting photos', () => {
     expect((await svc.listPhotos(a.apprentice, tailorsGarment)).map((x) => x.id)).toEqual([p!.id]);
   });
 
+  it('keep no EXIF or XMP in stored PNG and WebP photos either', async () => {
+    for (const format of ['png', 'webp'] as const) {
+      const tagged = await sharp({ create: { width: 300, height: 200, channels: 3, background: { r: 90, g: 100, b: 120 } } })
+        [format]()
+        .withExif({ IFD0: { Make: 'Invented Camera Co' }, IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '51/1 30/1 0/1' } })
+        .withXmp('<x:xmpmeta xmlns:x="adobe:ns:meta/"><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#"/></x:xmpmeta>')
+        .toBuffer();
+      const sent = await sharp(tagged).metadata();
+      expect([hasGpsIfd(sent.exif), sent.xmp !== undefined], format).toEqual([true, true]);
+      const [p] = await svc.addPhotos(a.tailor, garmentA, [{ name: `tagged.${format}`, bytes: new Uint8Array(tagged) }], 10 * MB);
+      const kept = await sharp((await svc.readPhoto(a.tailor, p!.id)).bytes).metadata();
+      expect([kept.format, kept.exif, kept.xmp, kept.width], format).toEqual([format, undefined, undefined, 300]);
+    }
+  });
+
   it('delete a photo with its thumbnail; adding and deleting are audited', async () => {
     const [p] = await svc.addPhotos(a.lead, garmentA, [{ name: 'to-remove.jpg', bytes: jpeg }], 10 * MB);
     expect(readdirSync(join(storageRoot, a.shopId)).filter((n) => n.startsWith(p!.id))).toHaveLength(2);
