@@ -1,0 +1,121 @@
+// Every cut sheet repeats the same paragraphs (bench steps, cautions, headings, line names) in the
+// same style at the same width, and react-pdf lays each one out again for every sheet: breaking
+// lines, bidi, glyph runs. Laying out a paragraph is a pure function of its text, its runs'
+// attributes, the box it flows into and the layout options, so the lines are kept per process
+// under a key made of exactly those. Nothing downstream writes to the lines (render copies the
+// glyphs it changes; page splits slice), so a kept answer is shared as it is.
+import { setLayoutTextHook } from '@react-pdf/layout';
+
+interface Run {
+  start: number;
+  end: number;
+  attributes: Record<string, unknown>;
+}
+interface AttributedString {
+  string: string;
+  runs: Run[];
+}
+interface Container {
+  x: number;
+  y: number;
+  width: number;
+  height: number;
+  maxLines?: number;
+  truncateMode?: string;
+  exclusions?: unknown[];
+}
+interface Options {
+  hyphenationPenalty?: number;
+  shrinkWhitespaceFactor?: unknown;
+  hyphenationCallback?: unknown;
+}
+
+/** Paragraph layouts kept at most; a sheet has about two hundred, most of them the same every time. */
+export const TEXT_LAYOUT_LIMIT = 3000;
+
+const ids = new WeakMap<object, number>();
+let nextId = 1;
+const idOf = (o: object): number => {
+  let id = ids.get(o);
+  if (id === undefined) ids.set(o, (id = nextId++));
+  return id;
+};
+
+function spell(value: unknown): string | null {
+  if (value === undefined) return '';
+  if (value === null) return 'null';
+  switch (typeof value) {
+    case 'string':
+      return JSON.stringify(value);
+    case 'number':
+    case 'boolean':
+      return String(value);
+    case 'function':
+      return `#${idOf(value)}`;
+    case 'object': {
+      if (Array.isArray(value)) {
+        const parts: string[] = [];
+        for (const v of value) {
+          const p = spell(v);
+          if (p === null) return null;
+          parts.push(p);
+        }
+        return `[${parts.join(',')}]`;
+      }
+      // Plain settings (font features) by content; anything else (a loaded font) by identity:
+      // fonts are loaded once per process.
+      const proto = Object.getPrototypeOf(value);
+      return proto === Object.prototype || proto === null ? JSON.stringify(value) : `#${idOf(value)}`;
+    }
+    default:
+      return null;
+  }
+}
+
+/** The key of one layout request, or null when it holds something not safely compared (images, exclusions). */
+export function layoutKey(text: AttributedString, container: Container, options: Options): string | null {
+  if (container.exclusions && container.exclusions.length > 0) return null;
+  let key = `${container.x},${container.y},${container.width},${container.height},${container.maxLines},${container.truncateMode}|${options.hyphenationPenalty}|${spell(options.hyphenationCallback)}|${JSON.stringify(options.shrinkWhitespaceFactor)}|`;
+  const spelt = new Map<object, string>();
+  for (const run of text.runs) {
+    const a = run.attributes;
+    if (a.attachment) return null;
+    let attrs = spelt.get(a);
+    if (attrs === undefined) {
+      attrs = '';
+      for (const name in a) {
+        const v = spell(a[name]);
+        if (v === null) return null;
+        attrs += `${name}=${v};`;
+      }
+      spelt.set(a, attrs);
+    }
+    key += `${run.start}-${run.end}{${attrs}}`;
+  }
+  return `${key}|${text.string}`;
+}
+
+const kept = new Map<string, unknown>();
+
+/** What layoutText would have computed, kept for the process under layoutKey. */
+export function rememberedLayout(text: AttributedString, container: Container, options: Options, compute: () => unknown): unknown {
+  const key = layoutKey(text, container, options);
+  if (key === null) return compute();
+  let lines = kept.get(key);
+  if (lines === undefined) {
+    if (kept.size >= TEXT_LAYOUT_LIMIT) kept.clear();
+    lines = compute();
+    kept.set(key, lines);
+  }
+  return lines;
+}
+
+/** Turns the paragraph layout memo on (the default once fonts are registered) or off, emptying it. */
+export function memoiseTextLayout(on: boolean): void {
+  kept.clear();
+  // The hook hands over textkit's own objects; rememberedLayout names the parts it reads.
+  setLayoutTextHook(on ? (rememberedLayout as Parameters<typeof setLayoutTextHook>[0]) : null);
+}
+
+/** How many paragraph layouts are kept now. */
+export const keptLayouts = (): number => kept.size;
