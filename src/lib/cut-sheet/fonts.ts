@@ -5,7 +5,9 @@ import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { Font } from '@react-pdf/renderer';
 import { memoiseFace } from './face-memo';
+import { memoiseShaping, type Shaper } from './shaping-memo';
 import { cacheFontObjects } from './pdf-font-cache';
+import { memoiseTextLayout } from './text-layout-memo';
 
 /** The font family the sheet is set in. */
 export const FAMILY = 'Inter';
@@ -15,13 +17,6 @@ const WEIGHTS = [
   [700, '700Bold/Inter_700Bold.ttf'],
   [800, '800ExtraBold/Inter_800ExtraBold.ttf'],
 ] as const;
-
-// Shaped runs kept per face; a sheet repeats the same few hundred words, so this stays small.
-const MEMO_LIMIT = 4000;
-
-interface Shaper {
-  layout: (text: string, ...rest: unknown[]) => unknown;
-}
 
 let ready: Promise<void> | null = null;
 
@@ -33,6 +28,7 @@ export function registerFonts(): Promise<void> {
 
 async function load(): Promise<void> {
   cacheFontObjects();
+  memoiseTextLayout(true);
   const require = createRequire(import.meta.url);
   const dir = dirname(require.resolve('@expo-google-fonts/inter/package.json'));
   Font.register({ family: FAMILY, fonts: WEIGHTS.map(([fontWeight, file]) => ({ src: join(dir, file), fontWeight })) });
@@ -44,30 +40,4 @@ async function load(): Promise<void> {
     memoiseShaping(source.data as unknown as Shaper);
     memoiseFace(source.data as unknown as Parameters<typeof memoiseFace>[0]);
   }
-}
-
-// fontkit shapes a string afresh on every call, and shaping is the largest part of a render.
-// Its result is read, never changed, by react-pdf (positions are copied before scaling).
-function memoiseShaping(face: Shaper): void {
-  const shape = face.layout.bind(face);
-  const memo = new Map<string, unknown>();
-  // The same few feature objects come with every call: spell each one out once, not per run.
-  const spelt = new WeakMap<object, string>();
-  const spell = (x: unknown) => {
-    if (typeof x !== 'object' || x === null) return String(x);
-    let k = spelt.get(x);
-    if (k === undefined) spelt.set(x, (k = JSON.stringify(x)));
-    return k;
-  };
-  face.layout = (text, ...rest) => {
-    let key = text;
-    for (const x of rest) key = `${spell(x)}\u0000${key}`;
-    let run = memo.get(key);
-    if (run === undefined) {
-      if (memo.size >= MEMO_LIMIT) memo.clear();
-      run = shape(text, ...rest);
-      memo.set(key, run);
-    }
-    return run;
-  };
 }

@@ -1,0 +1,78 @@
+// Shaping word by word must place every glyph where shaping the whole text would.
+import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { dirname, join } from 'node:path';
+import { setLayoutTextHook } from '@react-pdf/layout';
+import fc from 'fast-check';
+import * as fontkit from 'fontkit';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { renderCutSheet } from '@/lib/cut-sheet/render';
+import { memoiseShaping, wordsOf, type Shaper } from '@/lib/cut-sheet/shaping-memo';
+import { memoiseTextLayout } from '@/lib/cut-sheet/text-layout-memo';
+import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet, UNSAVED } from './sheets';
+
+const FILES = ['400Regular/Inter_400Regular.ttf', '700Bold/Inter_700Bold.ttf', '800ExtraBold/Inter_800ExtraBold.ttf'];
+const dir = dirname(createRequire(import.meta.url).resolve('@expo-google-fonts/inter/package.json'));
+const open = (file: string) => (fontkit as unknown as { create: (b: Buffer) => Shaper }).create(readFileSync(join(dir, file)));
+// The features the sheet's style asks for (src/lib/cut-sheet/styles.ts): kerning only.
+const FEATURES = { rvrn: false, ccmp: false, locl: false, rlig: false, mark: false, mkmk: false, calt: false, clig: false, liga: false, rclt: false, curs: false };
+
+interface Run {
+  glyphs: { id: number }[];
+  positions: { xAdvance: number; yAdvance: number; xOffset: number; yOffset: number }[];
+}
+const placed = (r: Run) => r.glyphs.map((g, i) => `${g.id}@${r.positions[i]!.xAdvance},${r.positions[i]!.yAdvance},${r.positions[i]!.xOffset},${r.positions[i]!.yOffset}`);
+
+// Every run of text the renderer lays out on a varied set of sheets, as textkit hands it to fontkit.
+const runs = new Set<string>();
+beforeAll(async () => {
+  await renderCutSheet(sheet([cuffInch]));
+  setLayoutTextHook((text, _c, _o, compute) => {
+    const t = text as { string: string; runs: { start: number; end: number }[] };
+    for (const r of t.runs) runs.add(t.string.slice(r.start, r.end));
+    return compute();
+  });
+  for (const legs of [[cuffInch], [cuffMetric], busyLegs, [hemSloped]]) await renderCutSheet(sheet(legs, { garment: 'Tan cotton chinos, “weekend” pair – café wash' }));
+  await renderCutSheet(sheet([cuffMetric], UNSAVED));
+  memoiseTextLayout(true);
+});
+afterAll(() => memoiseTextLayout(true));
+
+describe('shaping word by word', () => {
+  it('splits after each space and loses nothing', () => {
+    fc.assert(
+      fc.property(fc.string({ unit: fc.constantFrom('a', 'b', ' ', '4', ',', '/') }), (text) => {
+        const words = wordsOf(text);
+        expect(words.join('')).toBe(text);
+        for (const w of words.slice(0, -1)) expect(w.endsWith(' ')).toBe(true);
+        for (const w of words) expect(w.length).toBeGreaterThan(0);
+      }),
+    );
+  });
+
+  it('places every glyph of every run on the sheets as shaping the whole run does, in all three weights', () => {
+    expect(runs.size).toBeGreaterThan(80);
+    for (const file of FILES) {
+      const whole = open(file);
+      const kept = open(file);
+      memoiseShaping(kept);
+      for (const text of runs) {
+        // Twice: the second answer comes from the kept words.
+        for (let round = 0; round < 2; round++) {
+          const a = placed(whole.layout(text, FEATURES, undefined, undefined, 'ltr') as unknown as Run);
+          const b = placed(kept.layout(text, FEATURES, undefined, undefined, 'ltr') as unknown as Run);
+          expect(b, `${file}: ${text}`).toEqual(a);
+        }
+      }
+    }
+  });
+
+  it('shapes digits inside Latin text with kerning, as the whole text would', () => {
+    // "4," alone is not Latin to fontkit, and would lose the pair kerning it gets in a sentence.
+    const whole = open(FILES[0]!);
+    const kept = open(FILES[0]!);
+    memoiseShaping(kept);
+    const text = 'Cut on line 4, the cutting line.';
+    expect(placed(kept.layout(text, FEATURES, undefined, undefined, 'ltr') as unknown as Run)).toEqual(placed(whole.layout(text, FEATURES, undefined, undefined, 'ltr') as unknown as Run));
+  });
+});
