@@ -10,6 +10,7 @@ interface Glyph {
 interface Face {
   unitsPerEm: number;
   hasGlyphForCodePoint: (codePoint: number) => boolean;
+  glyphForCodePoint: (codePoint: number) => Glyph;
   getGlyph: (id: number) => Glyph;
   _variationProcessor?: unknown;
 }
@@ -18,7 +19,7 @@ const faces = new WeakSet<object>();
 const decoded = new WeakMap<object, unknown>();
 const patchedGlyphs = new WeakSet<object>();
 
-/** Keeps a loaded static face's answers (units per em, glyph coverage, decoded outlines) for the process. */
+/** Keeps a loaded static face's answers (units per em, glyph coverage, glyph per character, decoded outlines) for the process. */
 export function memoiseFace(face: Face): void {
   if (face._variationProcessor || faces.has(face)) return;
   faces.add(face);
@@ -31,6 +32,14 @@ export function memoiseFace(face: Face): void {
     let k = known[cp]!;
     if (k === 0) known[cp] = k = lookup(cp) ? 1 : 2;
     return k === 1;
+  };
+  // react-pdf asks each run's font for its space and object-replacement glyphs while drawing.
+  const glyphFor = face.glyphForCodePoint.bind(face);
+  const glyphs = new Map<number, Glyph>();
+  face.glyphForCodePoint = (cp) => {
+    let glyph = glyphs.get(cp);
+    if (glyph === undefined) glyphs.set(cp, (glyph = glyphFor(cp)));
+    return glyph;
   };
   const proto = Object.getPrototypeOf(face.getGlyph(0)) as Glyph;
   if (patchedGlyphs.has(proto)) return;

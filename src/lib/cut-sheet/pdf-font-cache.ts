@@ -4,6 +4,7 @@
 // table, about a tenth of a sheet's time. The first font made for an object is the one pdfkit
 // would end up using anyway: keep it per document and answer the next runs with it.
 import PDFDocument from 'pdfkit';
+import { seedSubset, type EmbeddedFontLike } from './subset-memo';
 
 interface FontDoc {
   _font: unknown;
@@ -37,6 +38,8 @@ export function cacheFontObjects(): void {
     }
     const out = original.call(this, src, family, size);
     mine.set(src, this._font);
+    // A font embedded from a file (not one of the PDF standard fonts) starts its subset seeded.
+    if (typeof this._font === 'object' && this._font !== null && 'subset' in this._font) seedSubset(this._font as EmbeddedFontLike);
     return out;
   };
   // Every new document also loads Helvetica as its default font, parsing the whole metrics file
