@@ -2,15 +2,10 @@
 // NODE_ENV=production node --cpu-prof node_modules/vite-node/vite-node.mjs bench/cut-sheet-profile.ts
 // Prints CPU per sheet over chunks of 10 distinct sheets: the lowest chunk is the least disturbed.
 import { writeFileSync } from 'node:fs';
-import { buildCutSheet } from '../src/lib/cut-sheet/build';
+import { sampleSheet } from './cut-sheet-sample';
 import { renderCutSheet } from '../src/lib/cut-sheet/render';
 
-const DEPTHS = ['1 1/4', '1 3/8', '1 1/2', '1 5/8', '1 3/4', '1 7/8', '2'];
-const sheet = (i: number) =>
-  buildCutSheet(
-    { shop: 'Hartley & Sons Alterations', ticket: String(1000 + i), garment: 'Navy wool flannel trousers', due: '2025-03-14', assignee: 'Sam Ortiz', link: `https://cuffwright.example/garments/${1000 + i}` },
-    [{ side: 'left', finish: 'cuff', input: { unit: 'in', precision: 8, cuffDepth: DEPTHS[i % DEPTHS.length]!, available: `${5 + (i % 9) / 8}` } }],
-  );
+const sheet = sampleSheet;
 
 const chunks = Number(process.env.CHUNKS ?? 15);
 if (process.env.OUT) writeFileSync(process.env.OUT, await renderCutSheet(sheet(42)));

@@ -1,0 +1,28 @@
+// The sheets the cut-sheet benchmarks render: sheet i is a different garment for every i in a
+// run (ticket, garment, due date, assignee, cuff depth and cloth all vary), so the figures on it
+// differ from sheet to sheet as they do in a shop's morning batch. Only the wording every sheet
+// shares (steps, cautions, headings) repeats. Invented shop, staff and garments.
+import { buildCutSheet } from '../src/lib/cut-sheet/build';
+
+const GARMENTS = ['Navy wool flannel trousers', 'Grey worsted suit trousers', 'Tan cotton chinos', 'Charcoal tweed trousers', 'Olive moleskin trousers'];
+const STAFF = ['Sam Ortiz', 'Priya Navarro', 'Jonah Whitcombe'];
+const DAY_MS = 86_400_000;
+const FIRST_DUE = Date.UTC(2025, 2, 3);
+
+/** Cut sheet number i of a benchmark run, in fractional inches to 1/16. */
+export function sampleSheet(i: number) {
+  // 13 cuff depths (1 1/4 to 2 in by 1/16) and 37 cloth lengths: 481 different plans before one repeats.
+  const depth = 20 + (i % 13);
+  const cloth = 64 + (i % 37);
+  return buildCutSheet(
+    {
+      shop: 'Hartley & Sons Alterations',
+      ticket: String(1000 + i),
+      garment: GARMENTS[i % GARMENTS.length]!,
+      due: new Date(FIRST_DUE + (i % 60) * DAY_MS).toISOString().slice(0, 10),
+      assignee: STAFF[i % STAFF.length]!,
+      link: `https://cuffwright.example/garments/${1000 + i}`,
+    },
+    [{ side: 'left', finish: 'cuff', input: { unit: 'in', precision: 16, cuffDepth: `${depth}/16`, available: `${cloth}/16` } }],
+  );
+}
