@@ -9,6 +9,7 @@ import type { acceptInviteInput } from '@/lib/account-inputs';
 import { isRole, type Role } from '@/lib/roles';
 import { ServiceError } from './errors';
 import { audit } from './audit';
+import { orUndoAccount } from './new-account';
 
 /** What an invitation link shows before it is accepted. */
 export interface InvitationView {
@@ -39,6 +40,7 @@ export async function acceptInvitation(id: string, who: Acceptor): Promise<{ sho
   const inv = await viewInvitation(id);
   let userId: string;
   let headers = new Headers();
+  let created = false;
   if ('signedInUserId' in who) {
     if (who.signedInEmail.toLowerCase() !== inv.email.toLowerCase()) {
       throw new ServiceError(409, `This invitation is for ${inv.email}: sign out and open the link again.`);
@@ -46,25 +48,31 @@ export async function acceptInvitation(id: string, who: Acceptor): Promise<{ sho
     userId = who.signedInUserId;
   } else {
     if (inv.hasAccount) throw new ServiceError(409, `${inv.email} already has an account: sign in first, then open the link again.`);
-    const created = await auth.api.signUpEmail({
+    const made = await auth.api.signUpEmail({
       body: { name: who.newAccount.name, email: inv.email.toLowerCase(), password: who.newAccount.password },
       returnHeaders: true,
     });
-    userId = created.response.user.id;
-    headers = created.headers;
+    userId = made.response.user.id;
+    headers = made.headers;
+    created = true;
   }
-  const [row] = await db.select().from(invitation).where(eq(invitation.id, id));
-  await db.transaction(async (tx) => {
-    const done = await tx
-      .update(invitation)
-      .set({ status: 'accepted' })
-      .where(and(eq(invitation.id, id), eq(invitation.status, 'pending')))
-      .returning({ id: invitation.id });
-    if (!done.length) throw new ServiceError(409, 'This invitation was already used.');
-    await tx.insert(member).values({ id: randomUUID(), organizationId: row!.organizationId, userId, role: inv.role, createdAt: new Date() });
-    // Opening the mailed link proves the address.
-    await tx.update(user).set({ emailVerified: true }).where(eq(user.id, userId));
-  });
-  await audit(row!.organizationId, userId, 'staff.joined', id, { role: inv.role });
+  const join = async () => {
+    const [row] = await db.select().from(invitation).where(eq(invitation.id, id));
+    await db.transaction(async (tx) => {
+      const done = await tx
+        .update(invitation)
+        .set({ status: 'accepted' })
+        .where(and(eq(invitation.id, id), eq(invitation.status, 'pending')))
+        .returning({ id: invitation.id });
+      if (!done.length) throw new ServiceError(409, 'This invitation was already used.');
+      await tx.insert(member).values({ id: randomUUID(), organizationId: row!.organizationId, userId, role: inv.role, createdAt: new Date() });
+      // Opening the mailed link proves the address.
+      await tx.update(user).set({ emailVerified: true }).where(eq(user.id, userId));
+    });
+    return row!.organizationId;
+  };
+  // A signed-in person's account is theirs to keep; one made just now goes if joining fails.
+  const shopId = await (created ? orUndoAccount(userId, join) : join());
+  await audit(shopId, userId, 'staff.joined', id, { role: inv.role });
   return { shopName: inv.shopName, headers };
 }

@@ -8,6 +8,7 @@ import { auth } from '@/lib/auth';
 import type { shopSignUpInput } from '@/lib/account-inputs';
 import { ServiceError } from './errors';
 import { audit } from './audit';
+import { orUndoAccount } from './new-account';
 
 function slugify(name: string): string {
   const base = name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 40) || 'shop';
@@ -24,10 +25,12 @@ export async function createShop(input: z.infer<typeof shopSignUpInput>): Promis
     returnHeaders: true,
   });
   const shopId = randomUUID();
-  await db.transaction(async (tx) => {
-    await tx.insert(organization).values({ id: shopId, name: input.shopName, slug: slugify(input.shopName), createdAt: new Date() });
-    await tx.insert(member).values({ id: randomUUID(), organizationId: shopId, userId: response.user.id, role: 'lead', createdAt: new Date() });
-  });
+  await orUndoAccount(response.user.id, () =>
+    db.transaction(async (tx) => {
+      await tx.insert(organization).values({ id: shopId, name: input.shopName, slug: slugify(input.shopName), createdAt: new Date() });
+      await tx.insert(member).values({ id: randomUUID(), organizationId: shopId, userId: response.user.id, role: 'lead', createdAt: new Date() });
+    }),
+  );
   await audit(shopId, response.user.id, 'shop.created', shopId);
   return { shopId, headers };
 }
