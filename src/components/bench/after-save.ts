@@ -20,5 +20,5 @@ export function afterSave<T extends Values>(sent: T, now: T, saved: T): { values
     newer.push(path);
     return n;
   };
-  return { values: walk(sent, now, saved) as T, newer };
+  return { values: walk(sent, now, saved, '') as T, newer };
 }
