@@ -61,6 +61,9 @@ export type Intake = z.output<typeof intakeRequest>;
 /** The body of POST /api/garments/[id]/step: the step to move to (the next one). */
 export const stepRequest = z.object({ to: z.enum(GARMENT_STEPS, { error: 'Choose one of the bench steps.' }) });
 
+/** The body of POST /api/garments/[id]/step-back: the step the garment stands at as seen, so a move made meanwhile is not undone blind. */
+export const stepBackRequest = z.object({ from: z.enum(GARMENT_STEPS, { error: 'Choose one of the bench steps.' }) });
+
 /** How a shop types and shows lengths: inches to 1/8 or 1/16, cm or mm. */
 export const SCALES = ['in8', 'in16', 'cm', 'mm'] as const;
 /** A shop's measuring scale. */

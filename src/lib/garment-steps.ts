@@ -27,6 +27,11 @@ export function nextStep(step: GarmentStep): GarmentStep | null {
   return GARMENT_STEPS[GARMENT_STEPS.indexOf(step) + 1] ?? null;
 }
 
+/** The step before this one, or null at the start. */
+export function previousStep(step: GarmentStep): GarmentStep | null {
+  return GARMENT_STEPS[GARMENT_STEPS.indexOf(step) - 1] ?? null;
+}
+
 /** The least advanced of some steps (a ticket stands where its slowest garment stands); 'received' for none. */
 export function leastAdvanced(steps: readonly GarmentStep[]): GarmentStep {
   if (steps.length === 0) return 'received';

@@ -20,7 +20,9 @@ export const statements = {
   // Fitting photos of a garment: every member sees them; the bench takes and removes them.
   photos: ['read', 'upload', 'delete'],
   customers: ['read', 'create', 'update'],
-  tickets: ['read', 'read-all', 'create', 'update', 'advance', 'pickup'],
+  // reopen: step a collected garment back to ready (a hand-over recorded by mistake); any other
+  // step back one is for whoever may move garments on (advance).
+  tickets: ['read', 'read-all', 'create', 'update', 'advance', 'pickup', 'reopen'],
   measurements: ['read', 'update'],
   plans: ['read', 'create'],
   cutsheets: ['print'],
@@ -46,7 +48,7 @@ export const grants = {
     presets: ['read', 'create-own', 'manage-house'],
     photos: ['read', 'upload', 'delete'],
     customers: ['read', 'create', 'update'],
-    tickets: ['read', 'read-all', 'create', 'update', 'advance', 'pickup'],
+    tickets: ['read', 'read-all', 'create', 'update', 'advance', 'pickup', 'reopen'],
     measurements: ['read', 'update'],
     plans: ['read', 'create'],
     cutsheets: ['print'],

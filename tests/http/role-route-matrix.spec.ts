@@ -322,6 +322,14 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       check: (a) => expect(a.body.status).toBe('cut'),
     },
   },
+  'garments/[id]/step-back': {
+    POST: {
+      // A fresh garment at "marked" goes back to "received"; the counter moves no bench steps.
+      request: async () => ({ path: `/api/garments/${await freshGarment()}/step-back`, body: { from: 'marked' } }),
+      expect: signedIn(200, { counter: 403, other: 404 }),
+      check: (a) => expect(a.body.status).toBe('received'),
+    },
+  },
   'garments/[id]/measurements': {
     GET: {
       request: async () => ({ path: `/api/garments/${await freshGarment()}/measurements` }),

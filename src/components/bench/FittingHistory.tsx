@@ -29,7 +29,9 @@ function describe(e: AuditEntry, label: Props['label']): string {
     const val = (v: unknown) => (v ? `${shown(String(d.field), v)}${unit}` : 'nothing');
     return `${String(d.leg) === 'left' ? 'Left' : 'Right'} leg, ${fieldName(String(d.field))}: ${val(d.old)} → ${val(d.new)}`;
   }
-  if (e.action === 'garment.moved' && isGarmentStep(d.from) && isGarmentStep(d.to)) return `Moved from ${label(d.from)} to ${label(d.to)}`;
+  if (e.action === 'garment.moved' && isGarmentStep(d.from) && isGarmentStep(d.to)) {
+    return d.back ? `Stepped back from ${label(d.from)} to ${label(d.to)}` : `Moved from ${label(d.from)} to ${label(d.to)}`;
+  }
   if (e.action === 'garment.changed') {
     return Object.entries(d as Record<string, { old: unknown; new: unknown }>)
       .map(([k, v]) => `${fieldName(k)}: ${k === 'assigneeId' ? (v.new ? 'someone new' : 'nobody') : `${shown(k, v.old)} → ${shown(k, v.new)}`}`)

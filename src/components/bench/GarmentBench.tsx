@@ -12,6 +12,7 @@ import { FittingForm } from './FittingForm';
 import { GarmentEdit } from './GarmentEdit';
 import { FittingHistory } from './FittingHistory';
 import { FittingReadOnly } from './FittingReadOnly';
+import { StepBackButton } from './StepBackButton';
 import { StepButton } from './StepButton';
 import { useBenchSettings, useStepLabel } from './use-bench';
 
@@ -23,10 +24,12 @@ interface Props {
   canReadFitting: boolean;
   canAdvance: boolean;
   canPickup: boolean;
+  /** may step a collected garment back to ready (the lead) */
+  canReopen?: boolean;
   canUploadPhotos: boolean;
 }
 
-function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canAdvance, canPickup, canUploadPhotos }: Props) {
+function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canAdvance, canPickup, canReopen = false, canUploadPhotos }: Props) {
   const garment = useQuery({ queryKey: ['garment', garmentId], queryFn: () => fetchJson<GarmentDetail>(`/api/garments/${garmentId}`) });
   const fitting = useQuery({
     queryKey: ['fitting', garmentId],
@@ -90,7 +93,10 @@ function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canA
         <p className="text-2xl">
           Now: <strong data-testid="garment-step">{label(g.status)}</strong>
         </p>
-        <StepButton garmentId={g.id} status={g.status} canAdvance={canAdvance} canPickup={canPickup} />
+        <div className="flex flex-wrap items-start gap-4">
+          <StepButton garmentId={g.id} status={g.status} canAdvance={canAdvance} canPickup={canPickup} canReopen={canReopen} />
+          <StepBackButton garmentId={g.id} status={g.status} canAdvance={canAdvance} canReopen={canReopen} />
+        </div>
       </header>
 
       {canReadFitting &&

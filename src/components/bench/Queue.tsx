@@ -86,7 +86,8 @@ function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) 
     [label, canAdvance, canPickup],
   );
 
-  const table = useReactTable({ data: rows, columns, state: { sorting }, onSortingChange: setSorting, sortDescFirst: false, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
+  // Rows keyed by garment, so a row's Undo offer stays with its garment when the order changes.
+  const table = useReactTable({ data: rows, columns, getRowId: (r) => r.id, state: { sorting }, onSortingChange: setSorting, sortDescFirst: false, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
 
   return (
     <div className="flex flex-col gap-4">

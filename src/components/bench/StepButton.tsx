@@ -1,7 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useEffect, useState } from 'react';
 import { fetchJson } from '@/lib/fetch-json';
 import { nextStep, type GarmentStep } from '@/lib/garment-steps';
 import { useStepLabel } from './use-bench';
+import { useStepBack } from './use-step-back';
 
 interface Props {
   garmentId: string;
@@ -10,42 +12,103 @@ interface Props {
   canAdvance: boolean;
   /** may hand over (ready → collected) */
   canPickup: boolean;
+  /** may step a collected garment back (the lead), so may undo a hand-over tapped by mistake */
+  canReopen?: boolean;
   /** 'big' on the garment page, 'row' in the queue */
   size?: 'big' | 'row';
   /** a label naming the garment, for screen readers in a table of many */
   what?: string;
 }
 
-/** The one tap that moves a garment to its next step; says what went wrong in words. */
-export function StepButton({ garmentId, status, canAdvance, canPickup, size = 'big', what }: Props) {
+// Long enough to notice a wrong tap and reach Undo; it stays while Undo has the focus.
+const UNDO_MS = 10_000;
+
+/** The one tap that moves a garment to its next step, with a short Undo after it; says what went wrong in words. */
+export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen = false, size = 'big', what }: Props) {
   const label = useStepLabel();
   const client = useQueryClient();
   const next = nextStep(status);
+  // The step a tap just moved the garment to, while Undo is offered.
+  const [undoable, setUndoable] = useState<{ from: GarmentStep; to: GarmentStep } | null>(null);
+  const [held, setHeld] = useState(false);
+  const [said, setSaid] = useState('');
   const move = useMutation({
-    mutationFn: (to: GarmentStep) => fetchJson<{ status: GarmentStep }>(`/api/garments/${garmentId}/step`, { method: 'POST', body: { to } }),
-    onSuccess: () => client.invalidateQueries(),
+    mutationFn: ({ to }: { from: GarmentStep; to: GarmentStep }) => fetchJson<{ status: GarmentStep }>(`/api/garments/${garmentId}/step`, { method: 'POST', body: { to } }),
+    onSuccess: (_moved, { from, to }) => {
+      const mayUndo = to === 'collected' ? canReopen : canAdvance;
+      setUndoable(mayUndo ? { from, to } : null);
+      setSaid(`Marked ${label(to)}.`);
+      return client.invalidateQueries();
+    },
   });
-  if (!next) return null;
-  const allowed = next === 'collected' ? canPickup : canAdvance;
-  if (!allowed) return size === 'big' ? <p className="text-lg text-muted">Next: {label(next)} (not your step to mark).</p> : null;
+  const back = useStepBack(garmentId);
+
+  useEffect(() => {
+    if ((!undoable && !said) || held) return;
+    const t = setTimeout(() => {
+      setUndoable(null);
+      setSaid('');
+    }, UNDO_MS);
+    return () => clearTimeout(t);
+  }, [undoable, said, held]);
+
+  const undo = () => {
+    if (!undoable) return;
+    const { from, to } = undoable;
+    back.mutate(to, {
+      onSuccess: () => {
+        setUndoable(null);
+        setHeld(false);
+        setSaid(`Stepped back to ${label(from)}.`);
+      },
+    });
+  };
+
+  const busy = move.isPending || back.isPending;
+  const allowed = next !== null && (next === 'collected' ? canPickup : canAdvance);
   const look =
     size === 'big'
       ? 'min-h-16 w-full rounded-lg bg-accent px-6 text-2xl font-extrabold text-white sm:w-auto'
       : 'min-h-12 rounded-md bg-accent px-4 text-lg font-bold text-white whitespace-nowrap';
+  if (!allowed && !undoable && !said) {
+    return next && size === 'big' ? <p className="text-lg text-muted">Next: {label(next)} (not your step to mark).</p> : null;
+  }
   return (
     <div className="flex flex-col gap-1">
-      <button
-        type="button"
-        className={look + ' disabled:opacity-60'}
-        disabled={move.isPending}
-        onClick={() => move.mutate(next)}
-        aria-label={what ? `Mark ${what} ${label(next)}` : undefined}
-      >
-        {move.isPending ? 'Moving…' : `Mark ${label(next)}`}
-      </button>
-      {move.error && (
+      {next && allowed && (
+        <button
+          type="button"
+          className={look + ' aria-disabled:opacity-60'}
+          // aria-disabled rather than disabled: a disabled button drops the keyboard focus mid-move.
+          aria-disabled={busy || undefined}
+          onClick={() => !busy && move.mutate({ from: status, to: next })}
+          aria-label={what ? `Mark ${what} ${label(next)}` : undefined}
+        >
+          {move.isPending ? 'Moving…' : `Mark ${label(next)}`}
+        </button>
+      )}
+      <div className="flex flex-wrap items-center gap-2">
+        {/* Polite: said once the tap lands, without cutting off what a screen reader is reading. */}
+        <p role="status" className="text-base font-semibold">
+          {said}
+        </p>
+        {undoable && (
+          <button
+            type="button"
+            onClick={undo}
+            onFocus={() => setHeld(true)}
+            onBlur={() => setHeld(false)}
+            disabled={back.isPending}
+            aria-label={`Undo: step ${what ?? 'the garment'} back to ${label(undoable.from)}`}
+            className="min-h-11 rounded-md border-2 border-ink bg-card px-4 text-lg font-bold disabled:opacity-60"
+          >
+            {back.isPending ? 'Undoing…' : 'Undo'}
+          </button>
+        )}
+      </div>
+      {(move.error ?? back.error) && (
         <p role="alert" className="text-base font-semibold text-cut">
-          {move.error.message}
+          {(move.error ?? back.error)!.message}
         </p>
       )}
     </div>

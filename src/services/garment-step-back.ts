@@ -1,0 +1,37 @@
+// Stepping a garment back one step after a wrong tap: the queue's "Undo" and the garment page's
+// "Step back". Whoever may move garments on may step one back; a collected garment goes back to
+// ready only by the lead (reopen), since pickup settled the ticket at the counter.
+import { and, eq } from 'drizzle-orm';
+import { db } from '@/db';
+import { garments, type Garment } from '@/db/schema';
+import type { Actor } from '@/lib/api';
+import { previousStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
+import { can } from '@/lib/roles';
+import { audit } from './audit';
+import { ServiceError } from './errors';
+import { onGarmentMoved } from './garment-events';
+import { refreshTicketStatus, visibleGarment } from './garments';
+
+/** Moves a garment standing at `from` back one step, recorded in its history as a move marked `back`. */
+export async function stepBackGarment(actor: Actor, id: string, from: GarmentStep): Promise<Garment> {
+  const g = await visibleGarment(actor, id);
+  if (g.status !== from) {
+    throw new ServiceError(409, `This garment is ${stepLabel(g.status)} now, not ${stepLabel(from)}: someone moved it meanwhile. Reload and look again.`);
+  }
+  const to = previousStep(g.status);
+  if (!to) throw new ServiceError(422, 'This garment has only been received: there is no step before that.');
+  const allowed = g.status === 'collected' ? can(actor.role, ['tickets', 'reopen']) : can(actor.role, ['tickets', 'advance']);
+  if (!allowed) {
+    throw new ServiceError(422, g.status === 'collected' ? 'Only the lead can step a collected garment back.' : `Your role (${actor.role}) may not move garments.`);
+  }
+  const [row] = await db
+    .update(garments)
+    .set({ status: to, updatedAt: new Date() })
+    .where(and(eq(garments.id, g.id), eq(garments.shopId, actor.shopId), eq(garments.status, g.status)))
+    .returning();
+  if (!row) throw new ServiceError(409, 'Someone else moved this garment first: reload and try again.');
+  await audit(actor.shopId, actor.userId, 'garment.moved', g.id, { from: g.status, to, back: true });
+  await refreshTicketStatus(actor.shopId, g.ticketId);
+  await onGarmentMoved(actor, row);
+  return row;
+}
