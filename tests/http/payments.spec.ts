@@ -93,6 +93,26 @@ describe('online payment through the local fake', () => {
     expect(after.body.payments.map((p: { method: string }) => p.method)).toEqual(['cash']);
   });
 
+  it('gives one link for a double click: both presses answer the same open link', async () => {
+    const id = await readyPricedTicket();
+    const [one, two] = await Promise.all([1, 2].map(() => call('POST', `/api/tickets/${id}/payments/link`, { cookie: counter })));
+    expect([one!.status, two!.status]).toEqual([201, 201]);
+    expect(one!.body.link).toMatchObject({ amountMinor: 2400, status: 'open' });
+    expect(two!.body.link.url).toBe(one!.body.link.url);
+  });
+
+  it('moves a ready ticket to collected only as pickup would: refused while the balance is due', async () => {
+    const id = await readyPricedTicket();
+    const early = await call('PATCH', `/api/tickets/${id}`, { cookie: counter, body: { status: 'collected' } });
+    expect(early.status).toBe(422);
+    expect(early.body.error).toMatch(/balance/);
+    await call('POST', `/api/tickets/${id}/payments`, { cookie: counter, body: { purpose: 'balance', method: 'cash', amountMinor: 2400 } });
+    const moved = await call('PATCH', `/api/tickets/${id}`, { cookie: counter, body: { status: 'collected' } });
+    expect([moved.status, moved.body.status]).toEqual([200, 'collected']);
+    const garments = await call('GET', `/api/tickets/${id}`, { cookie: counter });
+    expect(garments.body.garments.map((g: { status: string }) => g.status)).toEqual(['collected']);
+  });
+
   it('refuses a replayed event, a forged signature and a stale one', async () => {
     const id = await readyPricedTicket();
     const made = await call('POST', `/api/tickets/${id}/payments/link`, { cookie: counter });
