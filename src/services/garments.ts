@@ -196,7 +196,7 @@ export async function moveGarment(actor: Actor, id: string, to: GarmentStep): Pr
     if (to === 'collected') {
       // The counter's rule for every way to "collected": the ticket is ready and nothing is left to pay.
       const { assertReadyToHandOver } = await import('./payments');
-      await assertReadyToHandOver(actor, g.ticketId, { tx, ticket });
+      await assertReadyToHandOver(tx, ticket);
     }
     const [moved] = await tx
       .update(garments)

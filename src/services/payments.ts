@@ -190,25 +190,21 @@ function handOverRefusal(summary: CounterSummary): ServiceError | null {
 }
 
 /** Throws 422 unless the ticket is ready and nothing is due: the check any path to "collected"
- * needs. Inside the ticket's lock pass its transaction and the locked row, so the check holds
- * until the move commits. */
-export async function assertReadyToHandOver(actor: Pick<Actor, 'shopId'>, ticketId: string, locked?: { tx: Db; ticket: Ticket }): Promise<CounterSummary> {
-  const settings = await counterSettingsOf(actor.shopId, locked?.tx);
-  const before = locked ? await summaryOf(locked.ticket, settings, locked.tx) : await summaryOf(await shopTicket(actor, ticketId), settings);
-  const refusal = handOverRefusal(before);
+ * needs, made inside the ticket's lock (`withTicketLock`, its transaction and locked row) so it
+ * still holds when the move commits. */
+export async function assertReadyToHandOver(tx: Db, ticket: Ticket): Promise<CounterSummary> {
+  const summary = await summaryOf(ticket, await counterSettingsOf(ticket.shopId, tx), tx);
+  const refusal = handOverRefusal(summary);
   if (refusal) throw refusal;
-  return before;
+  return summary;
 }
 
 /** Hands a ready, fully paid ticket over: every garment and the ticket become collected. */
 export async function pickUp(actor: Actor, ticketId: string): Promise<CounterSummary> {
-  const settings = await counterSettingsOf(actor.shopId);
   // Checked and written under the ticket's lock: a price line or payment arriving meanwhile waits,
   // and one that came first is in the balance checked here.
   const before = await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
-    const summary = await summaryOf(ticket, settings, tx);
-    const refusal = handOverRefusal(summary);
-    if (refusal) throw refusal;
+    const summary = await assertReadyToHandOver(tx, ticket);
     await tx.update(tickets).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
     await tx.update(garments).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(garments.ticketId, ticketId), eq(garments.shopId, actor.shopId), inArray(garments.status, ['ready'])));
     return summary;
