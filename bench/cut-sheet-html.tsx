@@ -128,6 +128,6 @@ function Sheet({ data }: { data: CutSheetData }) {
 
 /** A whole HTML document of one cut sheet, Letter, fonts inlined. */
 export function cutSheetHtml(data: CutSheetData): string {
-  const css = `${fontFaces()}@page{size:Letter;margin:28pt}body{margin:0;font-family:Inter;font-size:8.5pt;color:#111}h2{font-size:9.5pt;font-weight:800;margin:5pt 0 2pt}ol,ul{margin:0;padding-left:14pt}`;
+  const css = `${fontFaces()}@page{size:Letter;margin:28pt}body{margin:0;font-family:Inter;font-size:8.5pt;color:#111;font-variant-numeric:tabular-nums}h2{font-size:9.5pt;font-weight:800;margin:5pt 0 2pt}ol,ul{margin:0;padding-left:14pt}`;
   return `<!doctype html><html><head><meta charset="utf-8"><style>${css}</style></head><body>${renderToStaticMarkup(<Sheet data={data} />)}</body></html>`;
 }

@@ -1,6 +1,7 @@
 // Sizes and colours of the sheet, in points (72 to the inch). Distances are read at arm's length.
 import { StyleSheet } from '@react-pdf/renderer';
 import { FAMILY } from './fonts';
+import { SHEET_FEATURES } from './shaping-features';
 
 /** Ink colours: the cut red is dark enough to print as near-black in greyscale. */
 export const INK = { text: '#111111', soft: '#555555', rule: '#999999', cut: '#b3121b', fill: '#f1efe9', warn: '#8a4b00' } as const;
@@ -8,13 +9,10 @@ export const INK = { text: '#111111', soft: '#555555', rule: '#999999', cut: '#b
 /** Width of the right-hand column that holds the chalk guide and calibration squares. */
 export const GUIDE_COLUMN = 162;
 
-// Shaping is most of the render time. Plain Latin text needs none of Inter's substitutions
-// (contextual alternates, ligatures, mark positioning); kerning stays on.
-const SHAPING = { rvrn: false, ccmp: false, locl: false, rlig: false, mark: false, mkmk: false, calt: false, clig: false, liga: false, rclt: false, curs: false };
 
 /** The sheet's text styles. */
 export const s = StyleSheet.create({
-  page: { fontFamily: FAMILY, fontSize: 8.5, color: INK.text, padding: 28, fontFeatureSettings: SHAPING },
+  page: { fontFamily: FAMILY, fontSize: 8.5, color: INK.text, padding: 28, fontFeatureSettings: SHEET_FEATURES },
   header: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'flex-start', borderBottomWidth: 2, borderBottomColor: INK.text, paddingBottom: 6, marginBottom: 8 },
   kicker: { fontSize: 8, fontWeight: 700, letterSpacing: 1.5, color: INK.soft },
   // One line each, whatever the shop typed: the header must not push the sheet off the page.

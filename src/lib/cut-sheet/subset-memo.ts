@@ -8,6 +8,7 @@
 
 import { deflateSync } from 'node:zlib';
 import { compressStreamsFast, useDeflated } from './pdf-streams';
+import { SHEET_FEATURES } from './shaping-features';
 
 interface Glyph {
   id: number;
@@ -25,7 +26,7 @@ interface Subset {
 
 /** The pdfkit font object made for one face in one document (only the fields touched here). */
 export interface EmbeddedFontLike {
-  font: { glyphForCodePoint: (cp: number) => Glyph; createSubset: () => Subset };
+  font: { layout: (text: string, features: object) => { glyphs: Glyph[] }; createSubset: () => Subset };
   subset: Subset;
   scale: number;
   widths: number[];
@@ -43,8 +44,8 @@ const patched = new WeakSet<object>();
 
 /** Adds the seed glyphs, in a fixed order, to a font that has not written any text yet. */
 export function seedSubset(font: EmbeddedFontLike): void {
-  for (const ch of SEED_CHARACTERS) {
-    const glyph = font.font.glyphForCodePoint(ch.codePointAt(0)!);
+  // Shaped with the sheet's own features, so the glyphs are the ones its text will use (tabular digits).
+  for (const glyph of font.font.layout(SEED_CHARACTERS, SHEET_FEATURES).glyphs) {
     if (glyph.id === 0) continue;
     const gid = font.subset.includeGlyph(glyph.id);
     // What pdfkit records the first time a glyph is written: its width and the text it stands for.

@@ -41,6 +41,18 @@ describe('a 1 1/2 in cuff with 5 in of cloth, inches', () => {
     expect(w.some((x) => x.text === 'CUT')).toBe(true);
   });
 
+  it('sets digits tabular, so "1 1/2" cannot close up into "11/2" and columns line up', () => {
+    // Common practice (no source): figures of equal width in tables of numbers. Inter's
+    // proportional "1" is narrow enough that "1 7/16" read as "17/16" at arm's length.
+    // Single digits set in the lines table's 14 pt (word boxes of one height), widths compared.
+    const digits = words(file).filter((x) => /^\d$/.test(x.text));
+    const height = (x: { yMin: number; yMax: number }) => Math.round((x.yMax - x.yMin) * 10);
+    const row = digits.filter((x) => height(x) === height(digits.find((d) => d.text === '1' && d.yMax - d.yMin > 16 && d.yMax - d.yMin < 20)!));
+    const widths = new Map(row.map((x) => [x.text, x.xMax - x.xMin]));
+    expect([...widths.keys()].sort()).toEqual(expect.arrayContaining(['0', '1', '3']));
+    for (const wd of widths.values()) expect(wd).toBeCloseTo(widths.get('1')!, 2);
+  });
+
   it('lists the bench steps in order, with stitch lengths in mm', () => {
     // TRADE.md common practice: dry chalk not wax; press at the seams first; turn-under with a long
     // stitch (about 4 mm); press with a cloth; tack a little below the cuff top, short stitch (about 2 mm).

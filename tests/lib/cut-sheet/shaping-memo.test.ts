@@ -7,6 +7,7 @@ import fc from 'fast-check';
 import * as fontkit from 'fontkit';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { renderCutSheet } from '@/lib/cut-sheet/render';
+import { SHEET_FEATURES } from '@/lib/cut-sheet/shaping-features';
 import { memoiseShaping, wordsOf, type Shaper } from '@/lib/cut-sheet/shaping-memo';
 import { memoiseTextLayout } from '@/lib/cut-sheet/text-layout-memo';
 import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet, UNSAVED } from './sheets';
@@ -14,8 +15,8 @@ import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet, UNSAVED } from './she
 const FILES = ['400Regular/Inter_400Regular.ttf', '700Bold/Inter_700Bold.ttf', '800ExtraBold/Inter_800ExtraBold.ttf'];
 const dir = dirname(createRequire(import.meta.url).resolve('@expo-google-fonts/inter/package.json'));
 const open = (file: string) => (fontkit as unknown as { create: (b: Buffer) => Shaper }).create(readFileSync(join(dir, file)));
-// The features the sheet's style asks for (src/lib/cut-sheet/styles.ts): kerning only.
-const FEATURES = { rvrn: false, ccmp: false, locl: false, rlig: false, mark: false, mkmk: false, calt: false, clig: false, liga: false, rclt: false, curs: false };
+// The features the sheet is set with.
+const FEATURES = SHEET_FEATURES;
 
 interface Run {
   glyphs: { id: number }[];

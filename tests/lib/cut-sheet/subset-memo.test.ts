@@ -6,6 +6,7 @@ import { dirname, join } from 'node:path';
 import * as fontkit from 'fontkit';
 import { describe, expect, it } from 'vitest';
 import { renderCutSheet } from '@/lib/cut-sheet/render';
+import { SHEET_FEATURES } from '@/lib/cut-sheet/shaping-features';
 import { SEED_CHARACTERS } from '@/lib/cut-sheet/subset-memo';
 import { pdfObjects, type PdfObject } from './pdf-objects';
 import { flatText, pdfFile } from './poppler';
@@ -14,6 +15,7 @@ import { cuffInch, cuffMetric, sheet } from './sheets';
 interface Face {
   postscriptName: string;
   glyphForCodePoint: (cp: number) => { id: number };
+  layout: (text: string, features: object) => { glyphs: { id: number }[] };
   createSubset: () => { includeGlyph: (id: number) => number; encode: () => Uint8Array };
 }
 const dir = dirname(createRequire(import.meta.url).resolve('@expo-google-fonts/inter/package.json'));
@@ -43,8 +45,9 @@ function embeddedFonts(pdf: Uint8Array) {
 function freshSubset(name: string, chars: number[]): Buffer {
   const face = FACES.find((f) => f.postscriptName === name)!;
   const subset = face.createSubset();
-  // CID 0 is the missing glyph, always first; then the glyphs in the order the PDF numbered them.
-  for (const cp of chars.slice(1)) subset.includeGlyph(face.glyphForCodePoint(cp).id);
+  // CID 0 is the missing glyph, always first; then the glyphs in the order the PDF numbered them,
+  // each as the sheet's features shape it (tabular digits).
+  for (const cp of chars.slice(1)) subset.includeGlyph(face.layout(String.fromCodePoint(cp), SHEET_FEATURES).glyphs[0]!.id);
   return Buffer.from(subset.encode());
 }
 
