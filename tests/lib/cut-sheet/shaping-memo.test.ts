@@ -14,7 +14,7 @@ import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet, UNSAVED } from './she
 
 const FILES = ['400Regular/Inter_400Regular.ttf', '700Bold/Inter_700Bold.ttf', '800ExtraBold/Inter_800ExtraBold.ttf'];
 const dir = dirname(createRequire(import.meta.url).resolve('@expo-google-fonts/inter/package.json'));
-const open = (file: string) => (fontkit as unknown as { create: (b: Buffer) => Shaper }).create(readFileSync(join(dir, file)));
+const open = (file: string) => fontkit.create(readFileSync(join(dir, file))) as Shaper;
 // The features the sheet is set with.
 const FEATURES = SHEET_FEATURES;
 

@@ -20,7 +20,7 @@ interface Face {
 }
 const dir = dirname(createRequire(import.meta.url).resolve('@expo-google-fonts/inter/package.json'));
 const FACES = ['400Regular/Inter_400Regular.ttf', '700Bold/Inter_700Bold.ttf', '800ExtraBold/Inter_800ExtraBold.ttf'].map(
-  (f) => (fontkit as unknown as { create: (b: Buffer) => Face }).create(readFileSync(join(dir, f))),
+  (f) => fontkit.create(readFileSync(join(dir, f))) as Face,
 );
 
 /** Each embedded font: its PostScript name, font file bytes and the characters its CIDs stand for, in CID order. */
