@@ -1,6 +1,6 @@
 // Money for a ticket: the counter's summary, deposits and balances taken at the counter, online
 // payment links through the payment service, its webhook, and handing the trousers over.
-import { and, asc, desc, eq, inArray } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, isNotNull } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import type { z } from 'zod';
 import { db, type Db } from '@/db';
@@ -26,7 +26,7 @@ export interface CounterSummary {
   paid: number;
   due: number;
   payments: Payment[];
-  link: Pick<PaymentLink, 'url' | 'amountMinor' | 'status'> | null;
+  link: { url: string; amountMinor: number; status: PaymentLink['status'] } | null;
 }
 
 /** The ticket's lines, payments, balance and open payment link. */
@@ -42,14 +42,20 @@ export async function summaryOf(ticket: Ticket, { currency }: Pick<CounterView, 
   const [customer] = ticket.customerId ? await q.select().from(customers).where(eq(customers.id, ticket.customerId)) : [];
   const lines = await linesOf(shopId, ticketId, q);
   const paidRows = await q.select().from(payments).where(and(eq(payments.shopId, shopId), eq(payments.ticketId, ticketId))).orderBy(asc(payments.at));
-  const [link] = await q.select().from(paymentLinks).where(and(eq(paymentLinks.shopId, shopId), eq(paymentLinks.ticketId, ticketId))).orderBy(desc(paymentLinks.createdAt)).limit(1);
+  // The latest link the service has made (one still being asked for has no address yet).
+  const [link] = await q
+    .select()
+    .from(paymentLinks)
+    .where(and(eq(paymentLinks.shopId, shopId), eq(paymentLinks.ticketId, ticketId), isNotNull(paymentLinks.url)))
+    .orderBy(desc(paymentLinks.createdAt))
+    .limit(1);
   return {
     ticket: { id: ticket.id, number: ticket.number, status: ticket.status, dueOn: ticket.dueOn, customerName: customer?.name ?? null, customerEmail: customer?.email ?? null },
     currency,
     lines,
     ...balanceOf(lines, paidRows),
     payments: paidRows,
-    link: link ? { url: link.url, amountMinor: link.amountMinor, status: link.status } : null,
+    link: link?.url ? { url: link.url, amountMinor: link.amountMinor, status: link.status } : null,
   };
 }
 
