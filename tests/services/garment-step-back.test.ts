@@ -6,7 +6,11 @@ import type { Shop } from './fixtures';
 
 vi.mock('@/db', () => import('../db/db-mock'));
 
-const { handle } = await import('@/db');
+const { db, handle } = await import('@/db');
+const { sql } = await import('drizzle-orm');
+const { pickUp } = await import('@/services/payments');
+const { garmentsOfTicket } = await import('@/services/garments');
+const { leastAdvanced } = await import('@/lib/garment-steps');
 const { getGarment, moveGarment } = await import('@/services/garments');
 const { stepBackGarment } = await import('@/services/garment-step-back');
 const { garmentMovedListeners } = await import('@/services/garment-events');
@@ -86,5 +90,32 @@ describe('stepping a garment back', () => {
     await expect(stepBackGarment(a.lead, foreign.id, 'marked')).rejects.toMatchObject({ status: 404 });
     await expect(stepBackGarment(a.apprentice, tailors.id, 'marked')).rejects.toMatchObject({ status: 404 });
     expect((await getGarment(b.lead, foreign.id)).status).toBe('marked');
+  });
+
+  it('under the ticket lock: pickup at the same moment never hands over a ticket with a garment stepped back', async () => {
+    for (let round = 0; round < 12; round += 1) {
+      const { ticket, garment } = await openTicket(a, { customer: { name: 'Step Back Race' }, garments: [{ description: 'Grey flannel' }, { description: 'Navy twill' }] });
+      const [, second] = await garmentsOfTicket(a.shopId, ticket.id);
+      for (const to of ['marked', 'cut', 'stitched', 'pressed', 'ready'] as const) {
+        await moveGarment(a.lead, garment.id, to);
+        await moveGarment(a.lead, second!.id, to);
+      }
+      // One of the two starts a few database round trips after the other: a different moment each round.
+      const hops = round % 6;
+      const later = async <T>(work: () => Promise<T>) => {
+        for (let hop = 0; hop < hops; hop += 1) await db.execute(sql`select 1`);
+        return work();
+      };
+      const pick = () => pickUp(a.counter, ticket.id);
+      const stepBack = () => stepBackGarment(a.lead, second!.id, 'ready');
+      const [picked, back] = round < 6 ? await Promise.allSettled([pick(), later(stepBack)]) : await Promise.allSettled([later(pick), stepBack()]);
+      const after = await garmentsOfTicket(a.shopId, ticket.id);
+      const seen = await getGarment(a.lead, garment.id);
+      expect(picked.status === 'fulfilled' || back.status === 'fulfilled', `round ${round}`).toBe(true);
+      // Pickup that went ahead took every garment; the ticket's status is its least advanced garment's.
+      if (picked.status === 'fulfilled') expect(after.map((g) => g.status), `round ${round}`).toEqual(['collected', 'collected']);
+      else expect(after.map((g) => g.status), `round ${round}`).toEqual(['ready', 'pressed']);
+      expect(seen.ticket.status, `round ${round}`).toBe(leastAdvanced(after.map((g) => g.status)));
+    }
   });
 });
