@@ -38,12 +38,11 @@ function Strip({ strip, width }: { strip: GuideStrip; width: number }) {
           {plain && <Path d={plain} fill={INK.text} />}
           {cut && <Path d={cut} fill={INK.cut} />}
         </Svg>
-        {/* One text block per tick, name over distance: two runs, not two boxes to lay out. */}
         {strip.ticks.map((t, i) => (
-          <Text key={i} style={{ position: 'absolute', left: textLeft, top: t.y + 2, fontSize: size, fontWeight: 700, color: t.cut ? INK.cut : INK.text }}>
-            <Text style={{ fontWeight: 800 }}>{`${t.n} ${t.name}\n`}</Text>
-            {t.text}
-          </Text>
+          <View key={i} style={{ position: 'absolute', left: textLeft, top: t.y + 2 }}>
+            <Text style={{ fontSize: size, fontWeight: 800, color: t.cut ? INK.cut : INK.text }}>{`${t.n} ${t.name}`}</Text>
+            <Text style={{ fontSize: size, fontWeight: 700, color: t.cut ? INK.cut : INK.text }}>{t.text}</Text>
+          </View>
         ))}
       </View>
       {strip.beyond.length > 0 && (
