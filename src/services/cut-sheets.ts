@@ -107,6 +107,8 @@ function headerOf(actor: Actor, g: Garment, names: HeaderNames, baseUrl: string,
     assignee: names.assigneeName,
     link: `${baseUrl.replace(/\/+$/, '')}/garments/${g.id}`,
     pageSize,
+    // An old cuff is let down before any chalk: the sheet's steps start there.
+    existingFinish: g.existingFinish,
   };
 }
 

@@ -1,6 +1,7 @@
 // The words and figures of a cut sheet, worked out once from the data. The PDF lays them out;
 // keeping them here lets the tests and any other rendering read the same sheet.
 import type { CreaseLanding, CuffLineName, Len, PlanWarning, Unit, WarningCode } from '@/lib/allowance/types';
+import type { ExistingFinish } from '@/lib/existing-finish';
 import type { CutSheetData, LegSheet } from './types';
 
 /** One chalk line as printed: number, name, distances. */
@@ -75,6 +76,13 @@ export const CAUTIONS = [
   "Your shop's own safety practice and local rules come first.",
 ] as const;
 
+/** The first bench step on a pair that came in with cuffs: old folds left in would throw the chalk lines out. */
+export const LET_DOWN_OLD_CUFF =
+  'Let down the old cuffs: unpick tacks and turn-under; press out old creases with a cloth.';
+
+/** The heading of the let-down step when each leg has its own steps after it. */
+export const LET_DOWN_HEADING = 'Both legs, first';
+
 const UNIT_NOTE: Record<Unit, string> = { in: 'inches', cm: 'centimetres', mm: 'millimetres' };
 
 /** Drops a leading minus sign: the sheet says "take in" rather than "-1/8 in". */
@@ -104,6 +112,29 @@ function sameWork(a: LegSheet, b: LegSheet): boolean {
 function creaseOf(leg: LegSheet): CreaseLanding | undefined {
   return leg.crease ?? (leg.finish === 'cuff' ? leg.plan.creaseLands : undefined);
 }
+
+// The engine advises pressing a showing crease out "before finishing"; on a pair that came with
+// cuffs the let-down step has already pressed it, before any chalk, so the note says that instead.
+const LET_DOWN_ADVICE: Partial<Record<CreaseLanding['place'], string>> = {
+  'leg-visible': 'Press it out as the old cuffs come down; if it still shows, choose a cuff depth that covers it.',
+  'cuff-face': 'Press it out as the old cuffs come down; if it still shows, change the cuff depth so it falls on a fold.',
+};
+
+function creaseNote(crease: CreaseLanding | undefined, existing: ExistingFinish | undefined): string | null {
+  if (!crease) return null;
+  let message = crease.message;
+  const advice = existing === 'cuff' ? LET_DOWN_ADVICE[crease.place] : undefined;
+  if (advice) {
+    // The old fold was a cuff's, not a hem's; the engine's first sentence says where it lands.
+    const where = /^(.*?\.)\s+(?=[A-Z])/.exec(message)?.[1] ?? message;
+    message = `${where.replace(/^the old hem crease/i, 'The old crease')} ${advice}`;
+  }
+  return /^the old crease/i.test(message) ? message : `Old crease: ${message}`;
+}
+
+// A new pair has no old fold: a crease noted on one means the intake or the fitting is wrong.
+const CREASE_ON_NEW =
+  'The pair came in unfinished, yet an old crease is noted: check whether an old hem or cuff must be let down first.';
 
 function clothCheck(leg: LegSheet): SheetLegGroup['cloth'] {
   const p = leg.plan;
@@ -161,7 +192,7 @@ function slopeNote(leg: LegSheet): string | null {
 // The cloth check and the taper note already say these in the sheet's own layout.
 const SAID_ELSEWHERE: ReadonlySet<WarningCode> = new Set(['not-enough-cloth', 'taper-beyond-tolerance']);
 
-function groupOf(leg: LegSheet, label: string): SheetLegGroup {
+function groupOf(leg: LegSheet, label: string, existing: ExistingFinish | undefined): SheetLegGroup {
   const p = leg.plan;
   const lines: SheetLine[] = p.lines.map((l) => ({
     n: l.n,
@@ -181,13 +212,14 @@ function groupOf(leg: LegSheet, label: string): SheetLegGroup {
     cloth: clothCheck(leg),
     slopeNote: slopeNote(leg),
     taper: taperOf(leg),
-    crease: crease ? (/^the old crease/i.test(crease.message) ? crease.message : `Old crease: ${crease.message}`) : null,
+    crease: creaseNote(crease, existing),
     warnings: [
-      ...new Set(
-        warnings
+      ...new Set([
+        ...warnings
           .filter((w) => !SAID_ELSEWHERE.has(w.code) && !(crease && w.code === 'old-crease-visible'))
           .map((w) => w.message),
-      ),
+        ...(crease && existing === 'unfinished' ? [CREASE_ON_NEW] : []),
+      ]),
     ],
     leg,
   };
@@ -245,6 +277,14 @@ function stepsOf(groups: SheetLegGroup[]): SheetContent['steps'] {
   return [{ heading: null, items: cuffSteps(first.plan.unit, turnUnder, taperStep) }];
 }
 
+// Old cuffs come down before anything else; with a block per leg the step stands in its own block first.
+function withLetDown(steps: SheetContent['steps'], existing: ExistingFinish | undefined): SheetContent['steps'] {
+  if (existing !== 'cuff') return steps;
+  const [only, ...rest] = steps;
+  if (only && rest.length === 0 && only.heading === null) return [{ heading: null, items: [LET_DOWN_OLD_CUFF, ...only.items] }];
+  return [{ heading: LET_DOWN_HEADING, items: [LET_DOWN_OLD_CUFF] }, ...steps];
+}
+
 /** Works out every word and figure of one sheet. */
 export function sheetContent(data: CutSheetData): SheetContent {
   const unsaved = !data.link;
@@ -252,8 +292,8 @@ export function sheetContent(data: CutSheetData): SheetContent {
   if (!first) throw new Error('A cut sheet needs at least one leg.');
   const groups =
     !second || sameWork(first, second)
-      ? [groupOf(first, 'Both legs')]
-      : data.legs.map((l) => groupOf(l, l.side === 'left' ? 'Left leg' : 'Right leg'));
+      ? [groupOf(first, 'Both legs', data.existingFinish)]
+      : data.legs.map((l) => groupOf(l, l.side === 'left' ? 'Left leg' : 'Right leg', data.existingFinish));
 
   const meta: string[] = [];
   if (data.ticket) meta.push(`Ticket ${data.ticket}`);
@@ -268,7 +308,7 @@ export function sheetContent(data: CutSheetData): SheetContent {
     meta,
     unitNote: `All lengths in ${UNIT_NOTE[data.unit]}${precision}.`,
     groups,
-    steps: stepsOf(groups),
+    steps: withLetDown(stepsOf(groups), data.existingFinish),
     cautions: [...CAUTIONS],
     guideNote: [
       'Print at 100 % (actual size), not "fit to page".',

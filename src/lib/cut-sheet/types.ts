@@ -11,6 +11,7 @@ import type {
   TaperPlan,
   Unit,
 } from '@/lib/allowance/types';
+import type { ExistingFinish } from '@/lib/existing-finish';
 
 /** The paper a sheet is printed on. */
 export type PageSize = 'LETTER' | 'A4';
@@ -62,4 +63,6 @@ export interface CutSheetData {
   link?: string;
   /** default LETTER */
   pageSize?: PageSize;
+  /** how the bottoms came in, from the garment's intake; absent on a calculator plan, which has no garment */
+  existingFinish?: ExistingFinish;
 }
