@@ -5,6 +5,9 @@ import { PAYMENTS_API_BASE, PAYMENTS_API_KEY, PAYMENTS_WEBHOOK_SECRET } from 'as
 
 let client: Stripe | null = null;
 
+/** How long one call to the service may take before the SDK gives up (a connection error: 503). */
+export const PAYMENT_TIMEOUT_MS = 5_000;
+
 /** The SDK client, or null when no API key is configured. */
 export function paymentClient(): Stripe | null {
   if (!PAYMENTS_API_KEY) return null;
@@ -14,8 +17,10 @@ export function paymentClient(): Stripe | null {
     ...(base
       ? { host: base.hostname, port: Number(base.port || (base.protocol === 'https:' ? 443 : 80)), protocol: base.protocol.replace(':', '') as 'http' | 'https' }
       : {}),
+    // One retry for reading and expiring sessions (safe to repeat); making one passes its own
+    // idempotency key and no retry (`maxNetworkRetries: 0` per call), so a click waits one timeout at most.
     maxNetworkRetries: 1,
-    timeout: 10_000,
+    timeout: PAYMENT_TIMEOUT_MS,
     telemetry: false,
   });
   return client;

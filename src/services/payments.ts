@@ -1,5 +1,6 @@
 // Money for a ticket: the counter's summary, deposits and balances taken at the counter, online
 // payment links through the payment service, its webhook, and handing the trousers over.
+import { randomUUID } from 'node:crypto';
 import { and, asc, desc, eq, inArray, isNotNull } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import type { z } from 'zod';
@@ -14,7 +15,17 @@ import { balanceOf } from '@/lib/pricing/price-lines';
 import { audit } from './audit';
 import { ServiceError } from './errors';
 import { lockTicket, withTicketLock } from './garments';
-import { expireOpenLinks, paymentServiceFailure } from './payment-links';
+import {
+  closeAtService,
+  closeCutShort,
+  cutShortLinks,
+  liveLinks,
+  markExpiring,
+  paymentServiceFailure,
+  sessionKey,
+  STALE_CREATING_SECONDS,
+  withLinksClosed,
+} from './payment-links';
 import { counterSettingsOf, linesOf, shopTicket, type CounterView } from './prices';
 
 /** Everything the counter panel shows about a ticket's money. */
@@ -66,27 +77,37 @@ function isUniqueViolation(e: unknown): boolean {
   return false;
 }
 
+/** The refusal of a payment the ticket cannot take now, else the summary it was checked against. */
+async function checkPayment(tx: Db, ticket: Ticket, settings: CounterView, input: z.infer<typeof paymentInput>): Promise<CounterSummary> {
+  const before = await summaryOf(ticket, settings, tx);
+  if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
+  if (before.payments.some((p) => p.purpose === 'balance')) throw new ServiceError(409, 'The balance of this ticket is already paid.');
+  if (input.purpose === 'deposit') {
+    if (before.payments.some((p) => p.purpose === 'deposit')) throw new ServiceError(409, 'A deposit is already on record for this ticket.');
+    if (input.amountMinor > before.total) throw new ServiceError(422, 'A deposit cannot be more than the ticket total.');
+  } else if (before.due === 0) {
+    throw new ServiceError(422, 'Nothing is due on this ticket.');
+  } else if (input.amountMinor !== before.due) {
+    throw new ServiceError(422, 'Take exactly the balance due (give change from cash).');
+  }
+  return before;
+}
+
 /** Takes a deposit (at most the total) or the exact balance due, in cash or by card at the counter. */
 export async function takePayment(actor: Actor, ticketId: string, input: z.infer<typeof paymentInput>): Promise<CounterSummary> {
   const settings = await counterSettingsOf(actor.shopId);
   try {
-    await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
-      const before = await summaryOf(ticket, settings, tx);
-      if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
-      if (before.payments.some((p) => p.purpose === 'balance')) throw new ServiceError(409, 'The balance of this ticket is already paid.');
-      if (input.purpose === 'deposit') {
-        if (before.payments.some((p) => p.purpose === 'deposit')) throw new ServiceError(409, 'A deposit is already on record for this ticket.');
-        if (input.amountMinor > before.total) throw new ServiceError(422, 'A deposit cannot be more than the ticket total.');
-      } else if (before.due === 0) {
-        throw new ServiceError(422, 'Nothing is due on this ticket.');
-      } else if (input.amountMinor !== before.due) {
-        throw new ServiceError(422, 'Take exactly the balance due (give change from cash).');
-      }
-      await tx.insert(payments).values({ ...input, shopId: actor.shopId, ticketId, currency: before.currency, takenById: actor.userId });
-      // An open link asks for the old balance: paid at the counter, the customer must not pay it
-      // again online; after a deposit, its amount is more than is now due.
-      await expireOpenLinks(tx, ticketId);
-    });
+    // An open link asks for the old balance: paid at the counter, the customer must not pay it
+    // again online; after a deposit, its amount is more than is now due. It is closed first.
+    await withLinksClosed(
+      actor.shopId,
+      ticketId,
+      (tx, ticket) => checkPayment(tx, ticket, settings, input),
+      async (tx, ticket) => {
+        const before = await checkPayment(tx, ticket, settings, input);
+        await tx.insert(payments).values({ ...input, shopId: actor.shopId, ticketId, currency: before.currency, takenById: actor.userId });
+      },
+    );
   } catch (e) {
     if (isUniqueViolation(e)) throw new ServiceError(409, `A ${input.purpose} is already on record for this ticket.`);
     throw e;
@@ -95,42 +116,146 @@ export async function takePayment(actor: Actor, ticketId: string, input: z.infer
   return counterSummary(actor, ticketId);
 }
 
+/** What making a pay link does next, decided under the ticket's lock. */
+type LinkPlan =
+  | { kind: 'ready' }
+  | { kind: 'wait'; linkId: string }
+  | { kind: 'close'; live: PaymentLink[] }
+  | { kind: 'make'; link: PaymentLink; request: Stripe.Checkout.SessionCreateParams };
+
+const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
+
+/** Waits (no transaction open) until a link another request is making is made or given up. */
+async function whileCreating(shopId: string, linkId: string): Promise<void> {
+  for (let waited = 0; waited <= (STALE_CREATING_SECONDS + 1) * 1000; waited += 100) {
+    await sleep(100);
+    const [row] = await db.select({ status: paymentLinks.status }).from(paymentLinks).where(and(eq(paymentLinks.id, linkId), eq(paymentLinks.shopId, shopId)));
+    if (row?.status !== 'creating') return;
+  }
+}
+
 /** A payment link for the balance due; an open link for the same amount is reused, also by a
- * second click arriving while the first is still being made (both run under the ticket's lock). */
+ * second click arriving while the first is still being made (it waits for that one). The service
+ * is called with no transaction open (see payment-links.ts); the link is saved only if the
+ * balance is still what it asks for, otherwise its session is closed and one is made again. */
 export async function createPaymentLink(actor: Actor, ticketId: string, appOrigin: string): Promise<CounterSummary> {
   const client = paymentClient();
   if (!client) throw new ServiceError(422, 'Online payment is not set up on this server (PAYMENTS_API_KEY).');
   const settings = await counterSettingsOf(actor.shopId);
-  const made = await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
-    const before = await summaryOf(ticket, settings, tx);
-    if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
-    if (before.due === 0) throw new ServiceError(422, 'Nothing is due on this ticket.');
-    if (before.link?.status === 'open' && before.link.amountMinor === before.due) return null;
-    await expireOpenLinks(tx, ticketId);
-    let session: Stripe.Checkout.Session;
-    try {
-      session = await client.checkout.sessions.create({
+  for (let round = 0; round < 4; round += 1) {
+    const { plan, cutShort } = await withTicketLock(actor.shopId, ticketId, async (tx, ticket): Promise<{ plan: LinkPlan; cutShort: PaymentLink[] }> => {
+      const before = await summaryOf(ticket, settings, tx);
+      if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
+      if (before.due === 0) throw new ServiceError(422, 'Nothing is due on this ticket.');
+      const cutShort = await cutShortLinks(tx, actor.shopId, ticketId);
+      const creating = await tx.select().from(paymentLinks).where(and(eq(paymentLinks.shopId, actor.shopId), eq(paymentLinks.ticketId, ticketId), eq(paymentLinks.status, 'creating')));
+      const making = creating.find((l) => !cutShort.some((c) => c.id === l.id));
+      const live = await liveLinks(tx, actor.shopId, ticketId);
+      if (live.some((l) => l.status === 'open' && l.amountMinor === before.due)) return { plan: { kind: 'ready' }, cutShort };
+      if (making) return { plan: { kind: 'wait', linkId: making.id }, cutShort };
+      if (live.length > 0) {
+        await markExpiring(tx, live);
+        return { plan: { kind: 'close', live }, cutShort };
+      }
+      const id = randomUUID();
+      const request: Stripe.Checkout.SessionCreateParams = {
         mode: 'payment',
         line_items: [
-          {
-            quantity: 1,
-            price_data: { currency: before.currency.toLowerCase(), unit_amount: before.due, product_data: { name: `${actor.shopName}: ticket T-${before.ticket.number}, balance` } },
-          },
+          { quantity: 1, price_data: { currency: before.currency.toLowerCase(), unit_amount: before.due, product_data: { name: `${actor.shopName}: ticket T-${before.ticket.number}, balance` } } },
         ],
         client_reference_id: ticketId,
-        metadata: { ticketId, shopId: actor.shopId },
+        metadata: { ticketId, shopId: actor.shopId, linkId: id },
         success_url: `${appOrigin}/paid`,
         cancel_url: `${appOrigin}/paid?cancelled=1`,
-      });
-    } catch (e) {
-      throw paymentServiceFailure(e, 'make a pay link');
+      };
+      const [link] = await tx
+        .insert(paymentLinks)
+        .values({ id, shopId: actor.shopId, ticketId, status: 'creating', amountMinor: before.due, currency: before.currency, createdById: actor.userId, request: request as Record<string, unknown> })
+        .returning();
+      return { plan: { kind: 'make', link: link!, request }, cutShort };
+    });
+    if (cutShort.length > 0) await closeCutShort(actor.shopId, ticketId, cutShort);
+    if (plan.kind === 'ready') return counterSummary(actor, ticketId);
+    if (plan.kind === 'wait') {
+      await whileCreating(actor.shopId, plan.linkId);
+      continue;
     }
-    if (!session.url) throw new ServiceError(502, 'The payment service gave no link: try again in a moment.');
-    await tx.insert(paymentLinks).values({ shopId: actor.shopId, ticketId, sessionId: session.id, url: session.url, amountMinor: before.due, currency: before.currency, createdById: actor.userId });
-    return before.due;
-  });
-  if (made !== null) await audit(actor.shopId, actor.userId, 'payment.link', ticketId, { amountMinor: made });
-  return counterSummary(actor, ticketId);
+    if (plan.kind === 'close') {
+      await closeAtService(actor.shopId, ticketId, plan.live, 'open');
+      continue;
+    }
+    const made = await makeAtService(client, plan.link, plan.request, settings);
+    if (made) {
+      await audit(actor.shopId, actor.userId, 'payment.link', ticketId, { amountMinor: plan.link.amountMinor });
+      return counterSummary(actor, ticketId);
+    }
+  }
+  throw new ServiceError(409, 'The balance kept changing while the pay link was made: reload and try again.');
+}
+
+/** Makes the link's session (no transaction open), then saves it under the ticket's lock if the
+ * balance due is still its amount; true when saved. A session that is not saved is closed again. */
+async function makeAtService(client: Stripe, link: PaymentLink, request: Stripe.Checkout.SessionCreateParams, settings: CounterView): Promise<boolean> {
+  const { shopId, ticketId } = link;
+  let session: Stripe.Checkout.Session;
+  try {
+    session = await client.checkout.sessions.create(request, { idempotencyKey: sessionKey(link.id), maxNetworkRetries: 0 });
+  } catch (e) {
+    const unreached = (e as { type?: string }).type === 'StripeConnectionError';
+    // Unreached (or timed out), the service may still have made it: the link is marked failed and its
+    // session closed later by replaying the request. A refusal made nothing: the row goes.
+    await withTicketLock(shopId, ticketId, (tx) =>
+      unreached
+        ? tx.update(paymentLinks).set({ status: 'failed' }).where(and(eq(paymentLinks.id, link.id), eq(paymentLinks.status, 'creating')))
+        : tx.delete(paymentLinks).where(and(eq(paymentLinks.id, link.id), eq(paymentLinks.status, 'creating'))),
+    );
+    throw paymentServiceFailure(e, 'make a pay link');
+  }
+  let saved: 'open' | 'stale' | 'no-url';
+  try {
+    saved = await withTicketLock(shopId, ticketId, async (tx, ticket) => {
+      const [row] = await tx.select().from(paymentLinks).where(eq(paymentLinks.id, link.id));
+      const current = await summaryOf(ticket, settings, tx);
+      if (!session.url) {
+        await tx.update(paymentLinks).set({ status: 'expiring', sessionId: session.id }).where(eq(paymentLinks.id, link.id));
+        return 'no-url';
+      }
+      if (row?.status === 'creating' && current.ticket.status !== 'collected' && current.due === link.amountMinor) {
+        await tx.update(paymentLinks).set({ status: 'open', sessionId: session.id, url: session.url }).where(eq(paymentLinks.id, link.id));
+        return 'open';
+      }
+      // The balance changed while the service made it (or the link was given up as cut short):
+      // nobody has seen this session, and it is closed below like any other.
+      await tx.update(paymentLinks).set({ status: 'expiring', sessionId: session.id }).where(eq(paymentLinks.id, link.id));
+      return 'stale';
+    });
+  } catch (e) {
+    // Saving failed: nobody has the link, so its session is closed rather than left payable. If
+    // that fails too, the link (failed, no session on record) is closed later by replaying it.
+    const closed = await closeQuietly(client, session.id);
+    try {
+      await withTicketLock(shopId, ticketId, (tx) =>
+        tx.update(paymentLinks).set({ status: 'failed', sessionId: closed ? session.id : null }).where(and(eq(paymentLinks.id, link.id), eq(paymentLinks.status, 'creating'))),
+      );
+    } catch {
+      // The database that refused the save may refuse this too: the link goes stale and is replayed.
+    }
+    throw e;
+  }
+  if (saved === 'open') return true;
+  await closeAtService(shopId, ticketId, [{ id: link.id, sessionId: session.id }], 'expiring');
+  if (saved === 'no-url') throw new ServiceError(502, 'The payment service gave no link: try again in a moment.');
+  return false;
+}
+
+async function closeQuietly(client: Stripe, sessionId: string): Promise<boolean> {
+  try {
+    await client.checkout.sessions.expire(sessionId);
+    return true;
+  } catch (e) {
+    console.warn(`[payments] session ${sessionId} was made but not saved, and could not be closed yet: ${(e as Error).message}`);
+    return false;
+  }
 }
 
 /** The outcome of a webhook call: its HTTP status and a short message. */
@@ -164,7 +289,8 @@ export async function receiveWebhook(payload: string, signature: string | null):
       await lockTicket(tx, known.shopId, known.ticketId);
       const [link] = await tx.select().from(paymentLinks).where(eq(paymentLinks.id, known.id));
       if (!link) return { status: 200 as const, message: 'Unknown session.' };
-      if (link.status !== 'open') throw new WebhookRefusal('This payment link is no longer open.');
+      // Being closed, it could still be paid until the service confirmed: the money was taken.
+      if (link.status !== 'open' && link.status !== 'expiring') throw new WebhookRefusal('This payment link is no longer open.');
       const [existing] = await tx.select({ id: payments.id }).from(payments).where(and(eq(payments.ticketId, link.ticketId), eq(payments.purpose, 'balance')));
       if (existing) throw new WebhookRefusal('The balance of this ticket is already paid.');
       await tx.insert(payments).values({

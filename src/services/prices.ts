@@ -12,8 +12,8 @@ import { priceTicket, type GarmentFacts, type PriceList } from '@/lib/pricing/pr
 import { needsLetOut } from '@/lib/pricing/taper-let-out';
 import { audit } from './audit';
 import { ServiceError } from './errors';
-import { isUuid, withTicketLock } from './garments';
-import { expireOpenLinks } from './payment-links';
+import { isUuid } from './garments';
+import { withLinksClosed } from './payment-links';
 
 /** The shop's counter settings as the counter reads them. */
 export interface CounterView {
@@ -106,7 +106,8 @@ export async function priceFromGarments(actor: Actor, ticketId: string, input: z
   await shopTicket(actor, ticketId);
   const facts = await garmentFacts(actor.shopId, ticketId);
   const { lines, unpriced } = priceTicket(facts, await priceListOf(actor.shopId), input);
-  await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
+  // The ticket's open pay link asks for the old balance: it is closed at the service first.
+  await withLinksClosed(actor.shopId, ticketId, refuseWhenSettled, async (tx, ticket) => {
     await refuseWhenSettled(tx, ticket);
     await tx.delete(priceLines).where(and(eq(priceLines.ticketId, ticketId), eq(priceLines.shopId, actor.shopId), eq(priceLines.source, 'auto')));
     if (lines.length > 0) {
@@ -114,7 +115,6 @@ export async function priceFromGarments(actor: Actor, ticketId: string, input: z
       const at = Date.now();
       await tx.insert(priceLines).values(lines.map((l, i) => ({ ...l, shopId: actor.shopId, ticketId, source: 'auto' as const, createdById: actor.userId, createdAt: new Date(at + i) })));
     }
-    await expireOpenLinks(tx, ticketId);
   });
   await audit(actor.shopId, actor.userId, 'prices.from-garments', ticketId, { lines: lines.length, rush: input.rush });
   return { lines: await linesOf(actor.shopId, ticketId), unpriced };
@@ -127,10 +127,9 @@ export async function addLine(actor: Actor, ticketId: string, input: z.infer<typ
     input.source === 'list'
       ? { key: input.key, label: entry!.label, amountMinor: entry!.amountMinor, reason: null }
       : { key: null, label: input.label, amountMinor: input.amountMinor, reason: input.reason };
-  const row = await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
+  const row = await withLinksClosed(actor.shopId, ticketId, refuseWhenSettled, async (tx, ticket) => {
     await refuseWhenSettled(tx, ticket);
     const [added] = await tx.insert(priceLines).values({ ...values, source: input.source, shopId: actor.shopId, ticketId, createdById: actor.userId }).returning();
-    await expireOpenLinks(tx, ticketId);
     return added!;
   });
   await audit(actor.shopId, actor.userId, input.source === 'adjust' ? 'prices.adjusted' : 'prices.line-added', ticketId, { amountMinor: row.amountMinor, reason: row.reason });

@@ -92,7 +92,7 @@ describe('a price change closes the open pay link at the service first', () => {
     const [link] = await linksOf(t.id);
     await prices.addLine(a.counter, t.id, rush);
     expect((await linksOf(t.id)).map((l) => l.status)).toEqual(['expired']);
-    expect((await service.checkout.sessions.retrieve(link!.sessionId)).status).toBe('expired');
+    expect((await service.checkout.sessions.retrieve(link!.sessionId!)).status).toBe('expired');
     expect(made.link?.status).toBe('open');
   });
 
@@ -102,14 +102,14 @@ describe('a price change closes the open pay link at the service first', () => {
     const [link] = await linksOf(t.id);
     await pay.takePayment(a.counter, t.id, { purpose: 'deposit', method: 'cash', amountMinor: 500 });
     expect((await linksOf(t.id)).map((l) => l.status)).toEqual(['expired']);
-    expect((await service.checkout.sessions.retrieve(link!.sessionId)).status).toBe('expired');
+    expect((await service.checkout.sessions.retrieve(link!.sessionId!)).status).toBe('expired');
   });
 
   it('takes a link the service already expired by itself as expired', async () => {
     const t = await pricedTicket(a);
     await pay.createPaymentLink(a.counter, t.id, ORIGIN);
     const [link] = await linksOf(t.id);
-    await service.checkout.sessions.expire(link!.sessionId);
+    await service.checkout.sessions.expire(link!.sessionId!);
     await prices.addLine(a.counter, t.id, rush);
     expect((await linksOf(t.id)).map((l) => l.status)).toEqual(['expired']);
     expect((await pay.counterSummary(a.counter, t.id)).due).toBe(2800);
