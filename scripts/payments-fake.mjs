@@ -64,6 +64,9 @@ export function startPaymentsFake({ port = 12111, host = '127.0.0.1', apiKey, we
     return res.ok;
   }
 
+  // Answers to POSTs by Idempotency-Key, kept while the fake runs.
+  const answered = new Map();
+
   const api = {
     'POST /v1/checkout/sessions': (_m, form) => {
       const item = form.line_items?.['0'];
@@ -125,7 +128,18 @@ export function startPaymentsFake({ port = 12111, host = '127.0.0.1', apiKey, we
       if (req.headers.authorization !== `Bearer ${apiKey}`) return send(401, { error: { type: 'invalid_request_error', message: 'Invalid API Key provided.' } });
       const handler = route(req.method, url.pathname);
       if (!handler) return send(404, { error: { type: 'invalid_request_error', message: `Unrecognized request URL (${req.method}: ${url.pathname}).` } });
+      // Like the hosted service: a POST repeated with the same Idempotency-Key gets the first
+      // answer again (for the same request), so a retried creation makes no second session.
+      const key = req.method === 'POST' ? req.headers['idempotency-key'] : undefined;
+      if (typeof key === 'string') {
+        const seen = answered.get(key);
+        if (seen) {
+          if (seen.request !== `${req.method} ${url.pathname} ${body}`) return send(400, { error: { type: 'idempotency_error', message: 'Keys for idempotent requests can only be used with the same parameters they were first used with.' } });
+          return send(seen.status, seen.data);
+        }
+      }
       const [status, data] = handler(parseForm(body));
+      if (typeof key === 'string') answered.set(key, { request: `${req.method} ${url.pathname} ${body}`, status, data });
       return send(status, data);
     }
     const pay = url.pathname.match(/^\/pay\/(cs_test_[a-f0-9]+)$/);
