@@ -29,6 +29,24 @@ interface Props {
 
 const col = createColumnHelper<QueueRow & { rank: number }>();
 
+// The card below lg: on a phone one column with the action full width at the bottom; on an upright
+// tablet the action stands at the right, in a column at least as wide in every card.
+const CARD =
+  "grid grid-cols-[auto_minmax(0,1fr)] items-center gap-x-4 gap-y-1 px-3 py-3 [grid-template-areas:'ticket_customer'_'garment_garment'_'due_due'_'step_step'_'whose_whose'_'move_move'] " +
+  "sm:grid-cols-[auto_auto_minmax(0,1fr)_minmax(15rem,min-content)] sm:[grid-template-areas:'ticket_customer_whose_move'_'garment_garment_garment_move'_'due_due_step_move'] " +
+  'lg:table-row lg:p-0';
+// Where each column's cell sits in the card, and the words that stand in for its header there.
+const CELL: Record<string, string> = {
+  rank: "[grid-area:whose] sm:max-lg:text-right max-lg:before:text-muted max-lg:before:content-['Whose:_']",
+  due: "[grid-area:due] max-lg:before:text-muted max-lg:before:content-['Due:_']",
+  ticketNumber: '[grid-area:ticket]',
+  customer: '[grid-area:customer] max-lg:font-semibold',
+  description: '[grid-area:garment] max-lg:text-xl',
+  step: "[grid-area:step] max-lg:before:text-muted max-lg:before:content-['Step:_']",
+  move: '[grid-area:move] max-sm:pt-2 max-lg:[&_button]:w-full',
+};
+const SORT_BY = "max-lg:before:font-semibold max-lg:before:text-muted max-lg:before:content-['Sort_by']";
+
 function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) {
   const queue = useQuery({ queryKey: ['queue'], queryFn: () => fetchJson<QueueRow[]>('/api/garments'), refetchInterval: 60_000 });
   const people = useAssignees();
@@ -103,16 +121,19 @@ function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) 
       ) : queue.isError ? (
         <p role="alert" className="font-semibold text-cut">The queue could not be loaded: {queue.error.message}</p>
       ) : (
-        <div className="overflow-x-auto rounded-lg border-2 border-rule bg-card">
-          <table className="w-full border-collapse text-left text-lg">
+        // Below lg (a tablet held upright, a phone) each row is a card with its action at the side or
+        // underneath, so "Mark …" and Undo are never cut off; the header row becomes the sort buttons.
+        // The roles are explicit because a table laid out as blocks and grids can lose them.
+        <div className="rounded-lg border-2 border-rule bg-card">
+          <table role="table" className="block w-full border-collapse text-left text-lg lg:table">
             <caption className="sr-only">Garments in the queue, {rows.length} shown</caption>
-            <thead>
+            <thead role="rowgroup" className="block lg:table-header-group">
               {table.getHeaderGroups().map((hg) => (
-                <tr key={hg.id} className="border-b-2 border-ink">
+                <tr key={hg.id} role="row" className={'flex flex-wrap items-center gap-x-3 border-b-2 border-ink px-3 py-1 lg:table-row lg:p-0 ' + SORT_BY}>
                   {hg.headers.map((h) => {
                     const sorted = h.column.getIsSorted();
                     return (
-                      <th key={h.id} scope="col" className="px-3 py-2 text-base" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
+                      <th key={h.id} role="columnheader" scope="col" className={'block text-base lg:table-cell lg:px-3 lg:py-2 ' + (h.column.getCanSort() ? '' : 'max-lg:sr-only')} aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
                         {h.column.getCanSort() ? (
                           <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex min-h-11 items-center gap-1 font-extrabold">
                             {flexRender(h.column.columnDef.header, h.getContext())}
@@ -127,14 +148,14 @@ function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) 
                 </tr>
               ))}
             </thead>
-            <tbody>
+            <tbody role="rowgroup" className="block lg:table-row-group">
               {table.getRowModel().rows.map((row) => {
                 const due = dueState(row.original.dueOn, today);
                 const edge = due === 'overdue' ? 'border-l-8 border-l-cut' : due === 'today' ? 'border-l-8 border-l-warn' : 'border-l-8 border-l-transparent';
                 return (
-                  <tr key={row.id} data-testid="queue-row" className={'border-b border-rule ' + edge}>
+                  <tr key={row.id} role="row" data-testid="queue-row" className={'border-b border-rule ' + CARD + ' ' + edge}>
                     {row.getVisibleCells().map((cell) => (
-                      <td key={cell.id} className="px-3 py-2 align-middle">
+                      <td key={cell.id} role="cell" className={'block lg:table-cell lg:px-3 lg:py-2 lg:align-middle ' + (CELL[cell.column.id] ?? '')}>
                         {flexRender(cell.column.columnDef.cell, cell.getContext())}
                       </td>
                     ))}
