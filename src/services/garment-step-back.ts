@@ -1,15 +1,12 @@
 // Stepping a garment back one step after a wrong tap: the queue's "Undo" and the garment page's
 // "Step back". Whoever may move garments on may step one back; a collected garment goes back to
 // ready only by the lead (reopen), since pickup settled the ticket at the counter.
-import { and, eq } from 'drizzle-orm';
-import { garments, type Garment } from '@/db/schema';
+import type { Garment } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import { previousStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
 import { can } from '@/lib/roles';
-import { audit } from './audit';
 import { ServiceError } from './errors';
-import { onGarmentMoved } from './garment-events';
-import { refreshTicketStatus, visibleGarment, withTicketLock } from './garments';
+import { visibleGarment, writeStep } from './garments';
 
 /** Moves a garment standing at `from` back one step, recorded in its history as a move marked `back`. */
 export async function stepBackGarment(actor: Actor, id: string, from: GarmentStep): Promise<Garment> {
@@ -23,19 +20,5 @@ export async function stepBackGarment(actor: Actor, id: string, from: GarmentSte
   if (!allowed) {
     throw new ServiceError(422, g.status === 'collected' ? 'Only the lead can step a collected garment back.' : `Your role (${actor.role}) may not move garments.`);
   }
-  // Under the ticket's lock like every other move: pickup or a whole-ticket move running at the
-  // same time sees either the garment still where it was or the ticket already following it.
-  const row = await withTicketLock(actor.shopId, g.ticketId, async (tx) => {
-    const [moved] = await tx
-      .update(garments)
-      .set({ status: to, updatedAt: new Date() })
-      .where(and(eq(garments.id, g.id), eq(garments.shopId, actor.shopId), eq(garments.status, g.status)))
-      .returning();
-    if (!moved) throw new ServiceError(409, 'Someone else moved this garment first: reload and try again.');
-    await refreshTicketStatus(actor.shopId, g.ticketId, tx);
-    return moved;
-  });
-  await audit(actor.shopId, actor.userId, 'garment.moved', g.id, { from: g.status, to, back: true });
-  await onGarmentMoved(actor, row);
-  return row;
+  return writeStep(actor, g, to, true);
 }

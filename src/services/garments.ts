@@ -190,8 +190,15 @@ export async function moveGarment(actor: Actor, id: string, to: GarmentStep): Pr
   }
   const allowed = to === 'collected' ? can(actor.role, ['tickets', 'pickup']) : can(actor.role, ['tickets', 'advance']);
   if (!allowed) throw new ServiceError(422, `Your role (${actor.role}) may not move a garment to ${stepLabel(to)}.`);
-  // Under the ticket's lock, like pickup and the counter's writes: a price line added meanwhile
-  // waits, or is already in the balance checked here.
+  return writeStep(actor, g, to, false);
+}
+
+/**
+ * Writes a garment's new step under its ticket's lock (like pickup and the counter's writes: a
+ * price line added meanwhile waits, or is already in the balance checked here), refreshes the
+ * ticket's status, records the move and tells the listeners. `back` marks a step back.
+ */
+export async function writeStep(actor: Actor, g: Garment, to: GarmentStep, back: boolean): Promise<Garment> {
   const row = await withTicketLock(actor.shopId, g.ticketId, async (tx, ticket) => {
     if (to === 'collected') {
       // The counter's rule for every way to "collected": the ticket is ready and nothing is left to pay.
@@ -207,7 +214,7 @@ export async function moveGarment(actor: Actor, id: string, to: GarmentStep): Pr
     await refreshTicketStatus(actor.shopId, g.ticketId, tx);
     return moved;
   });
-  await audit(actor.shopId, actor.userId, 'garment.moved', g.id, { from: g.status, to });
+  await audit(actor.shopId, actor.userId, 'garment.moved', g.id, back ? { from: g.status, to, back: true } : { from: g.status, to });
   await onGarmentMoved(actor, row);
   return row;
 }

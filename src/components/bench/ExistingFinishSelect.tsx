@@ -13,7 +13,7 @@ export function ExistingFinishSelect({ id, registration, error, hint = true }: {
         {...registration}
         aria-invalid={error ? true : undefined}
         aria-describedby={describedBy(id, error, hint ? HINT : undefined)}
-        className="min-h-11 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent"
+        className="min-h-12 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent"
       >
         {EXISTING_FINISHES.map((f) => (
           <option key={f} value={f}>

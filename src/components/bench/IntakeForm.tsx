@@ -13,7 +13,7 @@ import { useAssignees } from './use-bench';
 
 type Form = IntakeInput & { garments: NonNullable<IntakeInput['garments']> };
 const resolver = zodResolver(intakeRequest) as unknown as Resolver<Form, unknown, Intake>;
-const SELECT = 'min-h-11 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent';
+const SELECT = 'min-h-12 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent';
 // A pair comes in with a plain hem unless the counter says otherwise (DEFAULT_EXISTING_FINISH).
 const NEW_GARMENT = { description: '', dueOn: '', assigneeId: '', existingFinish: DEFAULT_EXISTING_FINISH };
 
@@ -70,7 +70,7 @@ function Intake() {
       <fieldset className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4">
         <legend className="px-1 text-xl font-extrabold">Garments</legend>
         {garments.fields.map((f, i) => (
-          <div key={f.id} className="grid items-end gap-3 border-b border-rule pb-3 sm:grid-cols-[2fr_1fr_1fr_1fr_auto]">
+          <div key={f.id} className="grid items-end gap-3 border-b border-rule pb-3 sm:grid-cols-2 lg:grid-cols-[minmax(0,2fr)_repeat(3,minmax(0,1fr))_auto]">
             <Field label={`Garment ${i + 1}`} registration={register(`garments.${i}.description`)} error={e.garments?.[i]?.description} id={`g-${i}-description`} placeholder="e.g. Navy wool trousers, cuffs" />
             <ExistingFinishSelect id={`g-${i}-existing`} registration={register(`garments.${i}.existingFinish`)} error={e.garments?.[i]?.existingFinish} hint={false} />
             <Field label="Due" type="date" registration={register(`garments.${i}.dueOn`)} error={e.garments?.[i]?.dueOn} id={`g-${i}-due`} />
@@ -82,7 +82,7 @@ function Intake() {
               </select>
             </div>
             {garments.fields.length > 1 && (
-              <button type="button" aria-label={`Remove: garment ${i + 1}`} onClick={() => garments.remove(i)} className="min-h-11 rounded border-2 border-ink px-3 font-semibold">
+              <button type="button" aria-label={`Remove: garment ${i + 1}`} onClick={() => garments.remove(i)} className="min-h-12 justify-self-start rounded border-2 border-ink px-3 font-semibold">
                 Remove
               </button>
             )}
