@@ -6,7 +6,7 @@ import { LENGTHS_OF, PRESET_LENGTHS, type PresetLength, type PresetSettings } fr
 export function LegSettings({ value, onChange }: { value: PresetSettings; onChange: (next: PresetSettings) => void }) {
   const setLength = (k: PresetLength, text: string) => onChange({ ...value, [k]: text === '' ? undefined : text });
   return (
-    <fieldset className="flex flex-col gap-4 rounded-lg border-2 border-ink bg-card p-5">
+    <fieldset className="flex min-w-0 flex-col gap-4 rounded-lg border-2 border-ink bg-card p-5">
       <legend className="px-1 text-2xl font-extrabold">Leg settings</legend>
       <div className="grid gap-4 sm:grid-cols-2">
         <Segmented
@@ -38,7 +38,7 @@ export function LegSettings({ value, onChange }: { value: PresetSettings; onChan
               value={value[k] ?? ''}
               placeholder="usual"
               onChange={(e) => setLength(k, e.target.value)}
-              className="measure rounded border-2 border-rule bg-card px-3 py-2 text-3xl font-extrabold focus:border-accent"
+              className="measure w-full min-w-0 rounded border-2 border-rule bg-card px-3 py-2 text-3xl font-extrabold focus:border-accent"
             />
           </div>
         ))}

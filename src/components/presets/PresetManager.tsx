@@ -18,7 +18,7 @@ export function PresetManager({ title, presets, canSetDefault }: { title: string
       <ul className="flex flex-col divide-y-2 divide-rule rounded-lg border-2 border-rule bg-card">
         {presets.map((p) => (
           <li key={p.id} className="flex flex-wrap items-center gap-3 px-4 py-3">
-            <div className="flex min-w-0 flex-1 flex-col">
+            <div className="flex min-w-0 flex-1 basis-56 flex-col">
               <span className="text-xl font-extrabold">
                 {p.name} {p.isDefault && <span className="ml-1 rounded bg-ink px-2 py-0.5 text-sm font-semibold text-paper">House default</span>}
               </span>

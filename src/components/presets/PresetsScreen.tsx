@@ -35,7 +35,7 @@ function PresetsScreen({ canManageHouse, canCreateOwn }: Props) {
       <section aria-labelledby="try-heading" className="flex flex-col gap-3">
         <h2 id="try-heading" className="text-2xl font-extrabold">Apply a preset</h2>
         <p className="text-muted">One tap fills the leg settings. Change any length, then keep it as your own preset.</p>
-        <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
+        <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
           <PresetPicker unit={settings.unit} onApply={setLeg} current={canCreateOwn ? settings : undefined} />
           <div className="lg:sticky lg:top-4 lg:self-start">
             <LegSettings value={settings} onChange={setLeg} />
