@@ -123,7 +123,7 @@ function Ticket({ ticketId, canAdvance, canPickup, canAddGarment, canEditCustome
           {t.garments.map((g) => (
             <li key={g.id} className="flex flex-wrap items-center justify-between gap-4 rounded-lg border-2 border-rule bg-card p-4">
               <div className="flex flex-col gap-1">
-                <a href={`/garments/${g.id}`} className="text-2xl font-extrabold text-accent underline">{g.description}</a>
+                <a href={`/garments/${g.id}`} className="flex min-h-11 items-center text-2xl font-extrabold text-accent underline">{g.description}</a>
                 <p className="text-lg">
                   <strong>{label(g.status)}</strong> · <DueBadge dueOn={g.dueOn} /> · {g.assigneeName ?? 'Unassigned'}
                 </p>

@@ -98,11 +98,12 @@ export function PriceLinesCard({ s, canChange }: { s: CounterSummary; canChange:
             </button>
           </div>
           <div className="mt-3 flex flex-wrap items-end gap-3">
-            <div className="flex flex-col gap-1">
+            {/* Shrinks on a phone: the list's longest line is wider than the screen. */}
+            <div className="flex min-w-0 max-w-full flex-col gap-1">
               <label htmlFor="list-line" className="font-semibold">
                 Line from the price list
               </label>
-              <select id="list-line" value={key} onChange={(e) => setKey(e.target.value as PriceKey)} className="min-h-11 rounded border-2 border-rule bg-card px-3 py-2 text-lg">
+              <select id="list-line" value={key} onChange={(e) => setKey(e.target.value as PriceKey)} className="min-h-11 w-full rounded border-2 border-rule bg-card px-3 py-2 text-lg">
                 {PRICE_KEYS.map((k) => {
                   const entry = list.data?.items.find((i) => i.key === k);
                   return (

@@ -76,40 +76,45 @@ function MemberRow({ m, isMe }: { m: StaffMember; isMe: boolean }) {
           {m.name}
           {isMe && ' (you)'}
         </div>
-        <div className="break-all text-muted">{m.email}</div>
+        {/* On a phone the address breaks at the @ before it breaks inside a word. */}
+        <div className="text-muted [overflow-wrap:anywhere]">
+          {m.email.split('@')[0]}
+          <wbr />@{m.email.split('@').slice(1).join('@')}
+        </div>
         {error && <p role="alert" className="font-semibold text-cut">{error.message}</p>}
       </td>
-      <td className="py-2 pr-4">
-        <label className="sr-only" htmlFor={`role-${m.id}`}>
-          Role of {m.name}
-        </label>
-        <select
-          id={`role-${m.id}`}
-          value={m.role}
-          disabled={setRole.isPending}
-          onChange={(e) => setRole.mutate(e.target.value as Role)}
-          className="rounded border-2 border-rule bg-card px-2 py-2"
-        >
-          {ROLES.map((r) => (
-            <option key={r} value={r}>
-              {ROLE_LABELS[r].name}
-            </option>
-          ))}
-        </select>
-      </td>
+      {/* The role and Remove share a cell and wrap under each other on a phone, leaving the person room. */}
       <td className="py-2">
-        {!isMe && (
-          <button
-            type="button"
-            aria-label={`Remove: ${m.name}`}
-            onClick={() => {
-              if (window.confirm(`Remove ${m.name} from the shop?`)) remove.mutate();
-            }}
-            className="min-h-11 rounded border-2 border-cut px-4 font-semibold text-cut"
+        <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
+          <label className="sr-only" htmlFor={`role-${m.id}`}>
+            Role of {m.name}
+          </label>
+          <select
+            id={`role-${m.id}`}
+            value={m.role}
+            disabled={setRole.isPending}
+            onChange={(e) => setRole.mutate(e.target.value as Role)}
+            className="rounded border-2 border-rule bg-card px-2 py-2"
           >
-            Remove
-          </button>
-        )}
+            {ROLES.map((r) => (
+              <option key={r} value={r}>
+                {ROLE_LABELS[r].name}
+              </option>
+            ))}
+          </select>
+          {!isMe && (
+            <button
+              type="button"
+              aria-label={`Remove: ${m.name}`}
+              onClick={() => {
+                if (window.confirm(`Remove ${m.name} from the shop?`)) remove.mutate();
+              }}
+              className="min-h-11 rounded border-2 border-cut px-4 font-semibold text-cut"
+            >
+              Remove
+            </button>
+          )}
+        </div>
       </td>
     </tr>
   );
@@ -132,9 +137,6 @@ function StaffManager({ myEmail }: { myEmail: string }) {
                 <tr>
                   <th className="pb-2">Person</th>
                   <th className="pb-2">Role</th>
-                  <th className="pb-2">
-                    <span className="sr-only">Actions</span>
-                  </th>
                 </tr>
               </thead>
               <tbody>
