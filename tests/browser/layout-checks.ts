@@ -1,0 +1,67 @@
+// What "fits the screen" means for the narrow-screen stories: no sideways scroll, every control
+// wholly on screen and not cut off by a frame that scrolls or clips, and every control a finger can hit.
+import type { Page } from 'playwright-core';
+
+/** One thing that does not fit, in words a test failure can show. */
+export type LayoutProblem = string;
+
+/** Waits until the page's islands are live (when it has any) and its data requests have settled. */
+export async function settled(page: Page): Promise<void> {
+  await page.waitForLoadState('load');
+  if ((await page.locator('astro-island').count()) > 0) {
+    await page.waitForSelector('astro-island:not([ssr])', { state: 'attached', timeout: 15_000 });
+  }
+  await page.waitForLoadState('networkidle');
+}
+
+/**
+ * Everything on the open page that runs off the side, hides behind a frame's edge, or is too
+ * small to tap: the page wider than the window, a control outside the window or outside an
+ * ancestor that clips or scrolls sideways, a button, field or block link under 44 px tall
+ * (links inside running text are exempt, as in WCAG's target-size rule).
+ */
+export function layoutProblems(page: Page): Promise<LayoutProblem[]> {
+  return page.evaluate(() => {
+    const problems: string[] = [];
+    const width = window.innerWidth;
+    const doc = document.documentElement.scrollWidth;
+    if (doc > width) problems.push(`page is ${doc} px wide in a ${width} px window`);
+    const name = (el: Element) => {
+      const text = (el.getAttribute('aria-label') ?? (el as HTMLElement).innerText ?? '').trim().replace(/\s+/g, ' ').slice(0, 40);
+      const id = el.id ? `#${el.id}` : '';
+      return `<${el.tagName.toLowerCase()}${id}> "${text}"`;
+    };
+    // A frame whose content scrolls sideways inside it hides part of what it holds.
+    for (const el of document.body.querySelectorAll('*')) {
+      const ox = getComputedStyle(el).overflowX;
+      if ((ox === 'auto' || ox === 'scroll') && el.scrollWidth > el.clientWidth + 1) {
+        problems.push(`<${el.tagName.toLowerCase()} class="${el.className}"> scrolls sideways (${el.scrollWidth} px in ${el.clientWidth} px)`);
+      }
+    }
+    const controls = document.querySelectorAll('a[href], button, input, select, textarea, summary, [role="button"], [tabindex]:not([tabindex="-1"])');
+    for (const el of controls) {
+      const r = el.getBoundingClientRect();
+      // Not shown (closed details, hidden panels) or visually hidden for screen readers only.
+      if (r.width <= 1 || r.height <= 1) continue;
+      const style = getComputedStyle(el);
+      if (style.visibility === 'hidden' || el.closest('.sr-only')) continue;
+      if (r.left < -0.5 || r.right > width + 0.5) problems.push(`${name(el)} runs off the screen (${Math.round(r.left)}–${Math.round(r.right)} px)`);
+      for (let a = el.parentElement; a && a !== document.body; a = a.parentElement) {
+        if (getComputedStyle(a).overflowX === 'visible') continue;
+        const f = a.getBoundingClientRect();
+        if (r.left < f.left - 0.5 || r.right > f.right + 0.5) {
+          problems.push(`${name(el)} is cut off by its frame <${a.tagName.toLowerCase()} class="${a.className}">`);
+          break;
+        }
+      }
+      const tag = el.tagName.toLowerCase();
+      const type = el.getAttribute('type');
+      if (type === 'checkbox' || type === 'radio' || type === 'hidden') continue;
+      const isLink = tag === 'a';
+      // A link in running text is exempt; a link laid out as its own target is not.
+      if (isLink && style.display === 'inline') continue;
+      if (r.height < 43.5) problems.push(`${name(el)} is only ${Math.round(r.height)} px tall`);
+    }
+    return problems;
+  });
+}
