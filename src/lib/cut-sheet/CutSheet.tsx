@@ -119,7 +119,7 @@ function CutLine({ g }: { g: SheetLegGroup }) {
 function LegBlock({ g, width }: { g: SheetLegGroup; width: number }) {
   const geo = legGeometry(g.leg, DRAWING_W, DRAWING_H);
   return (
-    <View style={{ marginBottom: 6 }} wrap={false}>
+    <View style={{ marginBottom: 4 }} wrap={false}>
       <View style={{ flexDirection: 'row', alignItems: 'baseline', marginBottom: 2 }}>
         <Text style={[s.legLabel, { width: 70 }]}>{g.label.toUpperCase()}</Text>
         <Text style={s.legTitle}>{g.title}</Text>

@@ -35,7 +35,7 @@ export const s = StyleSheet.create({
   small: { fontSize: 8.5 },
   strong: { fontWeight: 700 },
   h2: { fontSize: 9.5, fontWeight: 800, letterSpacing: 0.5, marginTop: 5, marginBottom: 2 },
-  step: { flexDirection: 'row', marginBottom: 0.8 },
+  step: { flexDirection: 'row', marginBottom: 0.5 },
   stepNo: { width: 13, fontWeight: 800 },
   stepText: { flex: 1 },
 });
