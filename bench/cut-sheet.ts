@@ -18,10 +18,10 @@ if (process.env.NODE_ENV !== 'production') {
   process.exit(r.status ?? 1);
 }
 
-const WARM_RUNS = 40;
+const WARM_RUNS = 100;
 const WARM_UP = 40;
 const BATCH = 100;
-const BROWSER_RUNS = 12;
+const BROWSER_RUNS = 20;
 
 const median = (xs: number[]) => {
   const s = [...xs].sort((a, b) => a - b);
@@ -37,8 +37,8 @@ async function time<T>(fn: () => Promise<T>): Promise<[number, T]> {
 }
 
 // Every benchmarked sheet is a different garment (bench/cut-sheet-sample.ts): nothing can answer
-// a render from a cache of whole sheets. Warm-up 0–39, singles 100–139 and batches 140–439 never
-// repeat a plan (the sample repeats after 481), so the figures on each are new to this process.
+// a render from a cache of whole sheets. Warm-up 0–39, singles 100–199 and batches 200–499 never
+// repeat a plan (the sample repeats after 533), so the figures on each are new to this process.
 const sheet = sampleSheet;
 
 const loadAtStart = loadavg()[0]!;
@@ -66,7 +66,7 @@ const warmCpuMs = median(warmCpu);
 
 const batches: { ms: number; cpuMs: number }[] = [];
 for (let b = 0; b < 3; b++) {
-  const list = Array.from({ length: BATCH }, (_, i) => sheet(140 + b * BATCH + i));
+  const list = Array.from({ length: BATCH }, (_, i) => sheet(200 + b * BATCH + i));
   const cpu = process.cpuUsage();
   const [ms] = await time(() => renderCutSheets(list));
   const used = process.cpuUsage(cpu);
