@@ -1,5 +1,5 @@
 // Cut sheets to PDF bytes. Server only: react-pdf and the font files never reach a browser.
-import { renderToBuffer } from '@react-pdf/renderer';
+import { renderPdf } from '../render-pdf';
 import { cutSheetDocument, PAGE_PT } from './CutSheet';
 import { registerFonts } from './fonts';
 import type { CutSheetData } from './types';
@@ -13,10 +13,10 @@ export function renderCutSheet(data: CutSheetData): Promise<Uint8Array<ArrayBuff
 export async function renderCutSheets(list: CutSheetData[], skipped: string[] = []): Promise<Uint8Array<ArrayBuffer>> {
   if (list.length === 0) throw new Error('No cut sheets to render.');
   await registerFonts();
-  const fast = await renderToBuffer(cutSheetDocument(list, false, skipped));
+  const fast = await renderPdf(cutSheetDocument(list, false, skipped));
   // A sheet too full for its paper came out as a taller page, which a printer would shrink and
   // the chalk guide would no longer be 1:1: render again, spilling onto a second page instead.
-  const bytes = atPaperSize(fast, list) ? fast : await renderToBuffer(cutSheetDocument(list, true, skipped));
+  const bytes = atPaperSize(fast, list) ? fast : await renderPdf(cutSheetDocument(list, true, skipped));
   // A copy owns a plain ArrayBuffer, which a Response body accepts as it is.
   return new Uint8Array(bytes);
 }

@@ -30,7 +30,7 @@ interface Options {
   hyphenationCallback?: unknown;
 }
 
-/** Paragraph layouts kept at most; a sheet has about two hundred, most of them the same every time. */
+/** Paragraph layouts kept at most after a second use; a sheet has about seventy, most of them the same every time. */
 export const TEXT_LAYOUT_LIMIT = 3000;
 
 const ids = new WeakMap<object, number>();
@@ -75,47 +75,61 @@ function spell(value: unknown): string | null {
 /** The key of one layout request, or null when it holds something not safely compared (images, exclusions). */
 export function layoutKey(text: AttributedString, container: Container, options: Options): string | null {
   if (container.exclusions && container.exclusions.length > 0) return null;
-  let key = `${container.x},${container.y},${container.width},${container.height},${container.maxLines},${container.truncateMode}|${options.hyphenationPenalty}|${spell(options.hyphenationCallback)}|${JSON.stringify(options.shrinkWhitespaceFactor)}|`;
+  // Parts joined once: a key built by += would be kept as a rope of hundreds of pieces.
+  const parts = [`${container.x},${container.y},${container.width},${container.height},${container.maxLines},${container.truncateMode}|${options.hyphenationPenalty}|${spell(options.hyphenationCallback)}|${JSON.stringify(options.shrinkWhitespaceFactor)}|`];
   const spelt = new Map<object, string>();
   for (const run of text.runs) {
     const a = run.attributes;
     if (a.attachment) return null;
     let attrs = spelt.get(a);
     if (attrs === undefined) {
-      attrs = '';
+      const named: string[] = [];
       for (const name in a) {
         const v = spell(a[name]);
         if (v === null) return null;
-        attrs += `${name}=${v};`;
+        named.push(`${name}=${v};`);
       }
-      spelt.set(a, attrs);
+      spelt.set(a, (attrs = named.join('')));
     }
-    key += `${run.start}-${run.end}{${attrs}}`;
+    parts.push(`${run.start}-${run.end}{${attrs}}`);
   }
-  return `${key}|${text.string}`;
+  parts.push(`|${text.string}`);
+  return parts.join('');
 }
 
+// Two generations: a paragraph laid out once waits in `fresh`; laid out again, it moves to `kept`.
+// The wording every sheet shares is kept after its second sheet, while one-off paragraphs (this
+// ticket's numbers) are dropped with `fresh` whenever it fills, instead of growing the heap.
+const fresh = new Map<string, unknown>();
 const kept = new Map<string, unknown>();
+const FRESH_LIMIT = 500;
 
 /** What layoutText would have computed, kept for the process under layoutKey. */
 export function rememberedLayout(text: AttributedString, container: Container, options: Options, compute: () => unknown): unknown {
   const key = layoutKey(text, container, options);
   if (key === null) return compute();
   let lines = kept.get(key);
-  if (lines === undefined) {
+  if (lines !== undefined) return lines;
+  lines = fresh.get(key);
+  if (lines !== undefined) {
+    fresh.delete(key);
     if (kept.size >= TEXT_LAYOUT_LIMIT) kept.clear();
-    lines = compute();
     kept.set(key, lines);
+    return lines;
   }
+  if (fresh.size >= FRESH_LIMIT) fresh.clear();
+  lines = compute();
+  fresh.set(key, lines);
   return lines;
 }
 
 /** Turns the paragraph layout memo on (the default once fonts are registered) or off, emptying it. */
 export function memoiseTextLayout(on: boolean): void {
+  fresh.clear();
   kept.clear();
   // The hook hands over textkit's own objects; rememberedLayout names the parts it reads.
   setLayoutTextHook(on ? (rememberedLayout as Parameters<typeof setLayoutTextHook>[0]) : null);
 }
 
-/** How many paragraph layouts are kept now. */
-export const keptLayouts = (): number => kept.size;
+/** How many paragraph layouts are kept now, laid out once or more. */
+export const keptLayouts = (): number => fresh.size + kept.size;

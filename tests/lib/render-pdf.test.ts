@@ -1,0 +1,46 @@
+// A long-running server prints thousands of sheets: rendering must not keep each document alive.
+// react-pdf's own renderToBuffer kept every document's whole tree (about 170 kB a sheet).
+import { setFlagsFromString } from 'node:v8';
+import { runInNewContext } from 'node:vm';
+import { describe, expect, it } from 'vitest';
+import { buildCutSheet } from '@/lib/cut-sheet/build';
+import { renderCutSheet } from '@/lib/cut-sheet/render';
+import { renderPdf } from '@/lib/render-pdf';
+import { cutSheetDocument } from '@/lib/cut-sheet/CutSheet';
+import { SHOP } from './cut-sheet/sheets';
+
+setFlagsFromString('--expose-gc');
+const gc = runInNewContext('gc') as () => void;
+
+// A different garment each time: ticket, cuff depth (1/16 steps) and cloth all vary.
+const sheet = (i: number) =>
+  buildCutSheet({ ...SHOP, ticket: String(3000 + i), link: `https://cuffwright.example/garments/${3000 + i}` }, [
+    { side: 'left', finish: 'cuff', input: { unit: 'in', precision: 16, cuffDepth: `${20 + (i % 13)}/16`, available: `${64 + (i % 41)}/16` } },
+  ]);
+
+const heapAfterGc = () => {
+  gc();
+  gc();
+  return process.memoryUsage().heapUsed;
+};
+
+describe('rendering PDFs through one root', () => {
+  it('keeps the heap flat over 150 different sheets', async () => {
+    for (let i = 0; i < 30; i++) await renderCutSheet(sheet(i));
+    const before = heapAfterGc();
+    for (let i = 30; i < 180; i++) await renderCutSheet(sheet(i));
+    const grown = heapAfterGc() - before;
+    // Kept layouts of one-off paragraphs are bounded; 150 documents kept alive would be ~25 MB.
+    expect(grown).toBeLessThan(8 * 1024 * 1024);
+  }, 120_000);
+
+  it('renders documents asked for at the same moment one at a time, each whole', async () => {
+    const pdfs = await Promise.all([0, 1, 2, 3].map((i) => renderPdf(cutSheetDocument([sheet(500 + i)]))));
+    pdfs.forEach((bytes, i) => {
+      const text = bytes.toString('latin1');
+      expect(text.startsWith('%PDF-')).toBe(true);
+      expect(text.trimEnd().endsWith('%%EOF')).toBe(true);
+      expect(text).toContain(`(Cut sheet ${3500 + i})`);
+    });
+  });
+});
