@@ -4,4 +4,4 @@
 // shaping without them is faster; kerning stays on.
 
 /** Feature settings for every run of text on a cut sheet. */
-export const SHEET_FEATURES = Object.freeze({ tnum: true, rvrn: false, ccmp: false, locl: false, rlig: false, mark: false, mkmk: false, calt: false, clig: false, liga: false, rclt: false, curs: false } as const);
+export const SHEET_FEATURES = { tnum: true, rvrn: false, ccmp: false, locl: false, rlig: false, mark: false, mkmk: false, calt: false, clig: false, liga: false, rclt: false, curs: false } as const;

@@ -41,9 +41,6 @@ const idOf = (o: object): number => {
   return id;
 };
 
-// Settings objects are not changed once a style holds them (react-pdf copies styles, never edits).
-const settings = new WeakMap<object, string>();
-
 function spell(value: unknown): string | null {
   if (value === undefined) return '';
   if (value === null) return 'null';
@@ -68,11 +65,7 @@ function spell(value: unknown): string | null {
       // Plain settings (font features) by content; anything else (a loaded font) by identity:
       // fonts are loaded once per process.
       const proto = Object.getPrototypeOf(value);
-      if (proto !== Object.prototype && proto !== null) return `#${idOf(value)}`;
-      // The same settings object comes with every run of a style: spelt once.
-      let json = settings.get(value);
-      if (json === undefined) settings.set(value, (json = JSON.stringify(value)));
-      return json;
+      return proto === Object.prototype || proto === null ? JSON.stringify(value) : `#${idOf(value)}`;
     }
     default:
       return null;
