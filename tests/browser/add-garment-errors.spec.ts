@@ -1,24 +1,14 @@
 // The ticket page's "Add a garment" form when the server refuses a field the form let through:
 // the server's message stands beside that field, tied to it, and nothing typed is lost.
-import { mkdirSync } from 'node:fs';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launch, ready, tabletPage } from './browser';
+import { describe, expect, it } from 'vitest';
+import { ready, sharedBrowser, tabletPage } from './browser';
 import { signInAs } from './sign-in';
 
-let browser: Browser;
-
-beforeAll(async () => {
-  mkdirSync('test-results', { recursive: true });
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = sharedBrowser();
 
 describe('add a garment: the server’s field messages', () => {
   it('shows the refused due date beside the Due field and keeps the description', async () => {
-    const page = await tabletPage(browser);
+    const page = await tabletPage(browser());
     await signInAs(page, 'tailor', '/queue');
     const ticketId = await page.evaluate(async () => {
       const r = await fetch('/api/tickets', {

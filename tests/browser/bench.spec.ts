@@ -2,21 +2,12 @@
 // depth for each leg on the garment page and reads the cutting line; a mistyped length is named
 // and kept. (3) An apprentice finds a garment in the queue, moves it on with one tap, and can read
 // but not change its measurements. Screenshots land in test-results/ to look at.
-import { mkdirSync } from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launch, ready, tabletPage } from './browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { ready, sharedBrowser, tabletPage } from './browser';
 import { signInAs } from './sign-in';
 
-let browser: Browser;
-
-beforeAll(async () => {
-  mkdirSync('test-results', { recursive: true });
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = sharedBrowser();
 
 const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
 const cutText = (page: Page) => page.getByTestId('cut-line').textContent({ timeout: 5_000 }).catch(() => null);
@@ -25,7 +16,7 @@ const choose = (page: Page, name: string) => page.locator('label', { has: page.g
 
 describe('story 1: a tailor takes in a garment and plans both legs', () => {
   it('opens a ticket, enters each leg, reads the cutting line, and keeps a mistyped length to fix', async () => {
-    const page = await tabletPage(browser);
+    const page = await tabletPage(browser());
     await signInAs(page, 'tailor', '/tickets/new');
 
     await page.getByRole('radio', { name: 'A new customer' }).check();
@@ -106,7 +97,7 @@ describe('story 1: a tailor takes in a garment and plans both legs', () => {
 
 describe('story 3: an apprentice works the queue', () => {
   it('finds the garment, moves it on with one tap, and reads its measurements without changing them', async () => {
-    const page = await tabletPage(browser);
+    const page = await tabletPage(browser());
     await signInAs(page, 'apprentice', '/queue');
     await page.getByTestId('queue-row').first().waitFor();
     // Only their own and unassigned work: the tailor's charcoal trousers are not listed.
@@ -155,7 +146,7 @@ describe('story 3: an apprentice works the queue', () => {
 
 describe('the queue for the lead', () => {
   it('filters to overdue work, sorts by ticket, and marks every overdue row in words', async () => {
-    const page = await tabletPage(browser);
+    const page = await tabletPage(browser());
     await signInAs(page, 'lead', '/queue');
     await page.getByTestId('queue-row').first().waitFor();
     const all = await page.getByTestId('queue-row').count();
@@ -179,7 +170,7 @@ describe('the queue for the lead', () => {
 
 describe('a tapered leg at the bench', () => {
   it('shows the taper check and the front-pin note from the saved fitting', async () => {
-    const page = await tabletPage(browser);
+    const page = await tabletPage(browser());
     await signInAs(page, 'tailor', '/queue');
     await page.getByLabel('Customer or ticket').fill('T-1004');
     await page.getByRole('link', { name: 'Charcoal wool trousers' }).click();

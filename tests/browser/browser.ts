@@ -1,6 +1,7 @@
 // Shared Chromium launch for the browser stories (Debian's Chromium, never a downloaded one).
 import { chromium, type Browser, type Page } from 'playwright-core';
-import { inject } from 'vitest';
+import { mkdirSync } from 'node:fs';
+import { afterAll, beforeAll, inject } from 'vitest';
 
 const ARGS = [
   '--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
@@ -10,6 +11,22 @@ const ARGS = [
 /** Launches headless Chromium from CHROMIUM_PATH (set by scripts/test.mjs) or /usr/bin/chromium. */
 export function launch(): Promise<Browser> {
   return chromium.launch({ executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium', args: ARGS });
+}
+
+/** Launches one Chromium for a test file (closed after its tests); screenshots go to test-results/. */
+export function sharedBrowser(): () => Browser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    mkdirSync('test-results', { recursive: true });
+    browser = await launch();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return () => {
+    if (!browser) throw new Error('The browser is launched in beforeAll: use it inside a test.');
+    return browser;
+  };
 }
 
 /** A fresh page in its own context, sized like a tablet held in landscape. */

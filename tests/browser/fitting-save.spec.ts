@@ -1,20 +1,11 @@
 // A fitting saved while the tailor keeps typing: when the slow save comes back, the lengths typed
 // in the meantime stay on screen and the form stays unsaved; the rest shows what was saved.
-import { mkdirSync } from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launch, ready, tabletPage } from './browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { ready, sharedBrowser, tabletPage } from './browser';
 import { signInAs } from './sign-in';
 
-let browser: Browser;
-
-beforeAll(async () => {
-  mkdirSync('test-results', { recursive: true });
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = sharedBrowser();
 
 const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
 
@@ -34,7 +25,7 @@ async function freshGarment(page: Page, description: string): Promise<string> {
 
 describe('a fitting saved while typing goes on', () => {
   it('keeps lengths typed during the save and shows the saved ones for the rest', async () => {
-    const page = await tabletPage(browser);
+    const page = await tabletPage(browser());
     await signInAs(page, 'tailor', '/queue');
     const id = await freshGarment(page, 'Slate flannel trousers');
     await page.goto(`/garments/${id}`);

@@ -1,25 +1,15 @@
 // The signed-in header on a phone (390 px) and a tablet held upright (768 px): the lead's links,
 // name and sign-out wrap onto more lines, nothing runs off the side, and every link stays a
 // finger-sized target. Screenshots in test-results/nav-*.png.
-import { mkdirSync } from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { inject } from 'vitest';
-import { launch, ready } from './browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
+import { ready, sharedBrowser } from './browser';
 import { signInAs } from './sign-in';
 
-let browser: Browser;
-
-beforeAll(async () => {
-  mkdirSync('test-results', { recursive: true });
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = sharedBrowser();
 
 async function pageAt(width: number): Promise<Page> {
-  const context = await browser.newContext({ baseURL: inject('baseURL'), viewport: { width, height: 900 }, hasTouch: true });
+  const context = await browser().newContext({ baseURL: inject('baseURL'), viewport: { width, height: 900 }, hasTouch: true });
   return context.newPage();
 }
 

@@ -1,21 +1,12 @@
 // A wrong tap at the bench, taken back: in the queue a tap offers Undo for a few seconds (reached
 // with the keyboard, announced politely), and the garment page has "Step back". The history shows
 // each move on and each step back. Screenshots in test-results/step-back-*.png.
-import { mkdirSync } from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launch, ready, tabletPage } from './browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { ready, sharedBrowser, tabletPage } from './browser';
 import { signInAs } from './sign-in';
 
-let browser: Browser;
-
-beforeAll(async () => {
-  mkdirSync('test-results', { recursive: true });
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = sharedBrowser();
 
 /** Opens a ticket with one unassigned garment through the API, as the signed-in page. */
 async function freshTicket(page: Page, description: string): Promise<{ number: number; garmentId: string }> {
@@ -33,7 +24,7 @@ async function freshTicket(page: Page, description: string): Promise<{ number: n
 
 describe('stepping back after a wrong tap', () => {
   it('undoes a tap in the queue from the keyboard, and steps back on the garment page; the history shows both', async () => {
-    const page = await tabletPage(browser);
+    const page = await tabletPage(browser());
     await signInAs(page, 'tailor', '/queue');
     const { number, garmentId } = await freshTicket(page, 'Heather tweed trousers');
     await page.reload();
