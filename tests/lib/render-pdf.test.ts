@@ -2,8 +2,11 @@
 // react-pdf's own renderToBuffer kept every document's whole tree (about 170 kB a sheet).
 import { setFlagsFromString } from 'node:v8';
 import { runInNewContext } from 'node:vm';
-import { describe, expect, it } from 'vitest';
+import { Document, Page, Text } from '@react-pdf/renderer';
+import { createElement } from 'react';
+import { describe, expect, it, vi } from 'vitest';
 import { buildCutSheet } from '@/lib/cut-sheet/build';
+import { registerFonts } from '@/lib/cut-sheet/fonts';
 import { renderCutSheet } from '@/lib/cut-sheet/render';
 import { renderPdf } from '@/lib/render-pdf';
 import { cutSheetDocument } from '@/lib/cut-sheet/CutSheet';
@@ -42,5 +45,23 @@ describe('rendering PDFs through one root', () => {
       expect(text.trimEnd().endsWith('%%EOF')).toBe(true);
       expect(text).toContain(`(Cut sheet ${3500 + i})`);
     });
+  });
+
+  it('refuses a document that fails while drawing instead of printing the one before it', async () => {
+    await registerFonts();
+    const good = await renderPdf(cutSheetDocument([sheet(600)]));
+    expect(good.toString('latin1')).toContain('(Cut sheet 3600)');
+    const Broken = () => {
+      throw new Error('a part of the sheet failed');
+    };
+    const quiet = vi.spyOn(console, 'error').mockImplementation(() => undefined);
+    try {
+      const broken = createElement(Document, { title: 'Broken sheet' }, createElement(Page, null, createElement(Broken)));
+      await expect(renderPdf(broken)).rejects.toThrow(/could not be drawn/);
+    } finally {
+      quiet.mockRestore();
+    }
+    const next = await renderPdf(createElement(Document, { title: 'Next sheet' }, createElement(Page, null, createElement(Text, null, 'next'))));
+    expect(next.toString('latin1')).toContain('(Next sheet)');
   });
 });
