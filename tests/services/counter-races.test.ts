@@ -11,7 +11,7 @@ const { db, handle } = await import('@/db');
 const { customers, garments, tickets } = await import('@/db/schema');
 const prices = await import('@/services/prices');
 const pay = await import('@/services/payments');
-const { makeShop } = await import('./fixtures');
+const { makeShop, TEST_PRICES } = await import('./fixtures');
 
 let a: Shop;
 let ticketNo = 5000;
@@ -29,19 +29,12 @@ async function readyAndPaid(shop: Shop) {
 
 beforeAll(async () => {
   a = await makeShop('Racing Hems');
-  // Invented amounts.
   await prices.savePriceList(a.lead, {
     currency: 'EUR',
     hours: '',
     location: '',
     autoReadyNotice: false,
-    items: [
-      { key: 'plain-hem', label: 'Plain hem', amountMinor: 1800 },
-      { key: 'cuff-from-hem', label: 'Cuff from a plain hem', amountMinor: 2600 },
-      { key: 'cuff-remake', label: 'Cuff re-made', amountMinor: 3200 },
-      { key: 'taper-let-out', label: 'Taper let-out', amountMinor: 1200 },
-      { key: 'rush', label: 'Rush', amountMinor: 1000 },
-    ],
+    items: [...TEST_PRICES],
   });
 });
 afterAll(() => handle.close());

@@ -29,7 +29,7 @@ const { customers, garments, measurements, notices, payments, paymentLinks, tick
 const prices = await import('@/services/prices');
 const pay = await import('@/services/payments');
 const notice = await import('@/services/notices');
-const { makeShop } = await import('./fixtures');
+const { makeShop, TEST_PRICES } = await import('./fixtures');
 const { startMailCapture } = await import('../../scripts/mail-capture.mjs');
 
 let a: Shop;
@@ -37,13 +37,7 @@ let b: Shop;
 let ticketNo = 1000;
 const signer = new Stripe('sk_test_signing_only');
 
-const LIST = [
-  { key: 'plain-hem', label: 'Plain hem', amountMinor: 1800 },
-  { key: 'cuff-from-hem', label: 'Cuff from a plain hem', amountMinor: 2600 },
-  { key: 'cuff-remake', label: 'Cuff re-made', amountMinor: 3200 },
-  { key: 'taper-let-out', label: 'Taper let-out', amountMinor: 1200 },
-  { key: 'rush', label: 'Rush', amountMinor: 1000 },
-] as const;
+const LIST = TEST_PRICES;
 
 async function ticketFor(shop: Shop, opts: { status?: 'received' | 'ready'; email?: string | null } = {}) {
   const [c] = await db.insert(customers).values({ shopId: shop.shopId, name: 'Wendel Orrin', email: opts.email === undefined ? 'wendel@example.com' : opts.email }).returning();

@@ -23,3 +23,12 @@ export async function makeShop(name: string, roles: Role[] = ['lead', 'tailor', 
 
 /** A shop made by makeShop, with an actor per role. */
 export type Shop = Awaited<ReturnType<typeof makeShop>>;
+
+/** An invented price list (amounts in cents) for counter tests. */
+export const TEST_PRICES = [
+  { key: 'plain-hem', label: 'Plain hem', amountMinor: 1800 },
+  { key: 'cuff-from-hem', label: 'Cuff from a plain hem', amountMinor: 2600 },
+  { key: 'cuff-remake', label: 'Cuff re-made', amountMinor: 3200 },
+  { key: 'taper-let-out', label: 'Taper let-out', amountMinor: 1200 },
+  { key: 'rush', label: 'Rush', amountMinor: 1000 },
+] as const;

@@ -20,7 +20,7 @@ const { customers, paymentLinks, priceLines, tickets } = await import('@/db/sche
 const prices = await import('@/services/prices');
 const pay = await import('@/services/payments');
 const priceLinesRoute = await import('@/pages/api/tickets/[id]/price-lines/index');
-const { makeShop } = await import('./fixtures');
+const { makeShop, TEST_PRICES } = await import('./fixtures');
 
 const ORIGIN = 'http://127.0.0.1:4321';
 const base = new URL(fake.base);
@@ -43,19 +43,12 @@ const rush = { source: 'list', key: 'rush' } as const;
 
 beforeAll(async () => {
   a = await makeShop('Linkside Hems');
-  // Invented amounts.
   await prices.savePriceList(a.lead, {
     currency: 'EUR',
     hours: '',
     location: '',
     autoReadyNotice: false,
-    items: [
-      { key: 'plain-hem', label: 'Plain hem', amountMinor: 1800 },
-      { key: 'cuff-from-hem', label: 'Cuff from a plain hem', amountMinor: 2600 },
-      { key: 'cuff-remake', label: 'Cuff re-made', amountMinor: 3200 },
-      { key: 'taper-let-out', label: 'Taper let-out', amountMinor: 1200 },
-      { key: 'rush', label: 'Rush', amountMinor: 1000 },
-    ],
+    items: [...TEST_PRICES],
   });
 });
 afterAll(async () => {
