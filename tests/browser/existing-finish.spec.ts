@@ -1,26 +1,16 @@
 // The counter takes in a pair that arrives with cuffs and says so at intake; after the fitting
 // decides on a cuff again, pricing the ticket from its garments brings the list's "cuff let down
 // and re-made" line by itself. The fitting goes through the API (the fitting form has its own story).
-import { mkdirSync } from 'node:fs';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { call, DEMO, signIn } from '../http/client';
-import { launch, ready, tabletPage } from './browser';
+import { ready, sharedBrowser, tabletPage } from './browser';
 import { signInAs } from './sign-in';
 
-let browser: Browser;
-
-beforeAll(async () => {
-  browser = await launch();
-  mkdirSync('test-results', { recursive: true });
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = sharedBrowser();
 
 describe('a pair that comes in with cuffs', () => {
   it('is noted at intake, shown on the garment, and priced as a cuff let down and re-made', async () => {
-    const page = await tabletPage(browser);
+    const page = await tabletPage(browser());
     await signInAs(page, 'counter', '/tickets/new');
     await page.getByRole('radio', { name: 'A new customer' }).check();
     await page.getByLabel('Name', { exact: true }).fill('Aurelio Penhallow');
@@ -60,7 +50,7 @@ describe('a pair that comes in with cuffs', () => {
     await page.context().close();
 
     // The tailor finds at the fitting that the old cuffs were faced, not turned: a plain hem after all.
-    const bench = await tabletPage(browser);
+    const bench = await tabletPage(browser());
     await signInAs(bench, 'tailor', `/garments/${garmentId}`);
     await bench.getByRole('button', { name: 'Change description, due date, who or existing finish' }).click();
     const edit = bench.getByRole('form', { name: 'Edit the garment' });

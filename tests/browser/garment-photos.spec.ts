@@ -1,23 +1,13 @@
 // A tailor photographs the pinned trousers on the garment page: the photo is uploaded from the
 // file picker (the camera input takes the same path), its thumbnail shows, and it can be removed;
 // something that is not a photo is refused in words.
-import { mkdirSync } from 'node:fs';
 import sharp from 'sharp';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { sampleHeif } from '../lib/storage/heif-sample';
-import { launch, ready, tabletPage } from './browser';
+import { ready, sharedBrowser, tabletPage } from './browser';
 import { signInAs } from './sign-in';
 
-let browser: Browser;
-
-beforeAll(async () => {
-  browser = await launch();
-  mkdirSync('test-results', { recursive: true });
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = sharedBrowser();
 
 async function photo(): Promise<Buffer> {
   // A plain test card: grey field with a darker band where a pin line would be.
@@ -30,7 +20,7 @@ async function photo(): Promise<Buffer> {
 
 describe('fitting photos on the garment page', () => {
   it('a tailor adds a photo from the file picker, sees its thumbnail, and removes it', async () => {
-    const page = await tabletPage(browser);
+    const page = await tabletPage(browser());
     await signInAs(page, 'tailor', '/queue');
     const queue = (await (await page.request.get('/api/garments')).json()) as { id: string }[];
     await page.goto(`/garments/${queue[queue.length - 1]!.id}`);
@@ -61,7 +51,7 @@ describe('fitting photos on the garment page', () => {
   });
 
   it('a HEIC photo from a phone shows a tile saying there is no preview here, not a broken image', async () => {
-    const page = await tabletPage(browser);
+    const page = await tabletPage(browser());
     await signInAs(page, 'tailor', '/queue');
     const queue = (await (await page.request.get('/api/garments')).json()) as { id: string }[];
     await page.goto(`/garments/${queue[queue.length - 1]!.id}`);

@@ -13,17 +13,11 @@ const { intakeRequest, garmentPatch } = await import('@/lib/bench-requests');
 const tickets = await import('@/services/tickets');
 const garmentsSvc = await import('@/services/garments');
 const prices = await import('@/services/prices');
-const { makeShop } = await import('./fixtures');
+const { makeShop, TEST_PRICES } = await import('./fixtures');
 
 let a: Shop;
 
-const LIST = [
-  { key: 'plain-hem', label: 'Plain hem', amountMinor: 1800 },
-  { key: 'cuff-from-hem', label: 'Cuff from a plain hem', amountMinor: 2600 },
-  { key: 'cuff-remake', label: 'Cuff let down and re-made', amountMinor: 3200 },
-  { key: 'taper-let-out', label: 'Taper let-out', amountMinor: 1200 },
-  { key: 'rush', label: 'Rush', amountMinor: 1000 },
-] as const;
+const LIST = TEST_PRICES;
 
 /** Notes the fitting's finish on both legs, as the fitting form saves it. */
 async function fitted(garmentId: string, finish: 'cuff' | 'plain') {

@@ -28,7 +28,7 @@ export type Shop = Awaited<ReturnType<typeof makeShop>>;
 export const TEST_PRICES = [
   { key: 'plain-hem', label: 'Plain hem', amountMinor: 1800 },
   { key: 'cuff-from-hem', label: 'Cuff from a plain hem', amountMinor: 2600 },
-  { key: 'cuff-remake', label: 'Cuff re-made', amountMinor: 3200 },
+  { key: 'cuff-remake', label: 'Cuff let down and re-made', amountMinor: 3200 },
   { key: 'taper-let-out', label: 'Taper let-out', amountMinor: 1200 },
   { key: 'rush', label: 'Rush', amountMinor: 1000 },
 ] as const;
