@@ -19,7 +19,7 @@ interface Reference {
 }
 
 /** zlib level for the streams written afresh for every sheet. */
-export const STREAM_LEVEL = 1;
+const STREAM_LEVEL = 1;
 
 const known = new WeakMap<Uint8Array, Uint8Array>();
 let patched = false;

@@ -31,7 +31,7 @@ interface Options {
 }
 
 /** Paragraph layouts kept at most after a second use; a sheet has about seventy, most of them the same every time. */
-export const TEXT_LAYOUT_LIMIT = 3000;
+const TEXT_LAYOUT_LIMIT = 3000;
 
 const ids = new WeakMap<object, number>();
 let nextId = 1;
@@ -105,7 +105,7 @@ const kept = new Map<string, unknown>();
 const FRESH_LIMIT = 500;
 
 /** What layoutText would have computed, kept for the process under layoutKey. */
-export function rememberedLayout(text: AttributedString, container: Container, options: Options, compute: () => unknown): unknown {
+function rememberedLayout(text: AttributedString, container: Container, options: Options, compute: () => unknown): unknown {
   const key = layoutKey(text, container, options);
   if (key === null) return compute();
   let lines = kept.get(key);
