@@ -20,12 +20,12 @@ const s = StyleSheet.create({
   big: { fontSize: 14, fontWeight: 800 },
 });
 
-/** The slip's document. */
-export function claimSlipDocument(d: ClaimSlipData): ReactElement<DocumentProps> {
+/** The slip's document; `family` is fontFamilyFor the slip's texts (Inter alone for Latin-only text). */
+export function claimSlipDocument(d: ClaimSlipData, family: string | string[] = FAMILY): ReactElement<DocumentProps> {
   const money = (n: number) => formatMoney(n, d.currency);
   return (
     <Document title={`Claim slip T-${d.ticketNumber}`} author={d.shopName}>
-      <Page size={[SLIP_PT.width, SLIP_PT.height]} style={s.page}>
+      <Page size={[SLIP_PT.width, SLIP_PT.height]} style={family === FAMILY ? s.page : [s.page, { fontFamily: family }]}>
         <Text style={s.shop}>{d.shopName}</Text>
         {d.location ? <Text style={s.soft}>{d.location}</Text> : null}
         {d.hours ? <Text style={s.soft}>Hours: {d.hours}</Text> : null}

@@ -1,11 +1,11 @@
 // Claim slips to PDF bytes with the cut sheets' PDF stack and fonts. Server only.
-import { registerFonts } from '@/lib/cut-sheet/fonts';
+import { fontFamilyFor, stringsIn } from '@/lib/cut-sheet/fonts';
 import { renderPdf } from '@/lib/render-pdf';
 import { claimSlipDocument } from './ClaimSlip';
 import type { ClaimSlipData } from './types';
 
 /** Renders one claim slip: a one-page A6 PDF. */
 export async function renderClaimSlip(data: ClaimSlipData): Promise<Uint8Array<ArrayBuffer>> {
-  await registerFonts();
-  return new Uint8Array(await renderPdf(claimSlipDocument(data)));
+  const family = await fontFamilyFor(stringsIn(data));
+  return new Uint8Array(await renderPdf(claimSlipDocument(data, family)));
 }

@@ -8,6 +8,7 @@ import { LegDrawing } from './LegDrawing';
 import { legGeometry } from './leg-geometry';
 import { qrPath } from './qr';
 import { SkippedNote } from './SkippedNote';
+import { FAMILY } from './fonts';
 import { GUIDE_COLUMN, INK, s } from './styles';
 import type { Len } from '@/lib/allowance/types';
 import type { CutSheetData, PageSize } from './types';
@@ -174,16 +175,18 @@ function Steps({ c }: { c: SheetContent }) {
 }
 
 /** One page for one garment: header, legs with drawings, bench steps, cautions and chalk guide. */
-export function CutSheetPage({ data, wrap }: { data: CutSheetData; wrap: boolean }) {
+export function CutSheetPage({ data, wrap, family = FAMILY }: { data: CutSheetData; wrap: boolean; family?: string | string[] }) {
   const size = data.pageSize ?? 'LETTER';
   const c = sheetContent(data);
   const page = PAGE_PT[size];
   const strips = guideStrips(c.groups, data.unit, page.height - 2 * PADDING - GUIDE_OVERHEAD);
   const mainWidth = page.width - 2 * PADDING - GUIDE_COLUMN;
+  // Only a sheet with text Inter cannot set names a font stack; the usual sheet keeps s.page as it is.
+  const style = family === FAMILY ? s.page : [s.page, { fontFamily: family }];
   // Unwrapped, react-pdf lays the page out once instead of twice, but the page then grows with
   // its content; the height keeps it at paper size when it fits (render.ts checks that it did).
   return (
-    <Page size={size} style={wrap ? s.page : [s.page, { height: page.height, minHeight: page.height }]} wrap={wrap}>
+    <Page size={size} style={wrap ? style : [style, { height: page.height, minHeight: page.height }].flat()} wrap={wrap}>
       <Header c={c} link={data.link} />
       <View style={s.body}>
         <View style={[s.main, { width: mainWidth }]}>
@@ -200,15 +203,15 @@ export function CutSheetPage({ data, wrap }: { data: CutSheetData; wrap: boolean
   );
 }
 
-/** A document of cut sheets, one page each; wrap lets an overfull sheet spill onto a second page; skipped garments get a last page. */
-export function cutSheetDocument(sheets: CutSheetData[], wrap = true, skipped: string[] = []): ReactElement<DocumentProps> {
+/** A document of cut sheets, one page each; wrap lets an overfull sheet spill onto a second page; skipped garments get a last page; family from fontFamilyFor. */
+export function cutSheetDocument(sheets: CutSheetData[], wrap = true, skipped: string[] = [], family: string | string[] = FAMILY): ReactElement<DocumentProps> {
   const first = sheets[0];
   return (
     <Document title={first && sheets.length === 1 ? `Cut sheet ${first.ticket ?? 'unsaved'}` : 'Cut sheets'} creator="Cuffwright" producer="Cuffwright">
       {sheets.map((d, i) => (
-        <CutSheetPage key={i} data={d} wrap={wrap} />
+        <CutSheetPage key={i} data={d} wrap={wrap} family={family} />
       ))}
-      {skipped.length > 0 && <SkippedNote skipped={skipped} size={first?.pageSize ?? 'LETTER'} />}
+      {skipped.length > 0 && <SkippedNote skipped={skipped} size={first?.pageSize ?? 'LETTER'} family={family} />}
     </Document>
   );
 }

@@ -1,13 +1,14 @@
 // The batch's last page when some garments of the filtered queue could not be planned: which
 // ones and why, so nobody looks for a sheet that was never printed.
 import { Page, Text, View } from '@react-pdf/renderer';
+import { FAMILY } from './fonts';
 import { INK, s } from './styles';
 import type { PageSize } from './types';
 
 /** A page listing the garments left out of a batch, each with its reason. */
-export function SkippedNote({ skipped, size }: { skipped: string[]; size: PageSize }) {
+export function SkippedNote({ skipped, size, family = FAMILY }: { skipped: string[]; size: PageSize; family?: string | string[] }) {
   return (
-    <Page size={size} style={s.page}>
+    <Page size={size} style={family === FAMILY ? s.page : [s.page, { fontFamily: family }]}>
       <View style={s.header}>
         <Text style={s.title}>Not in this batch</Text>
       </View>

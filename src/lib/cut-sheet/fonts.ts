@@ -1,26 +1,54 @@
 // Inter, read from the installed package at run time and embedded in every PDF: no network.
 // TTF, not WOFF2 (react-pdf cannot read WOFF2), and the full glyph set (⅓, –, ×). Three weights:
-// each one more is embedded (subset) again in every PDF.
+// each one more is embedded (subset) again in every PDF. Inter also has Latin Extended, Greek and
+// Cyrillic; names in scripts it lacks (Arabic, Hebrew, Devanagari, Chinese and Japanese) take a
+// Noto face after Inter in the document's font stack, loaded and embedded only for a document
+// that holds such a character, so a Latin-only document is made exactly as before.
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { Font } from '@react-pdf/renderer';
 import { memoiseFace } from './face-memo';
 import { memoiseShaping, type Shaper } from './shaping-memo';
 import { cacheFontObjects } from './pdf-font-cache';
+import { seedFace } from './subset-memo';
 import { memoiseTextLayout } from './text-layout-memo';
 
 /** The font family the sheet is set in. */
 export const FAMILY = 'Inter';
 
-const WEIGHTS = [
+type Weights = readonly (readonly [number, string])[];
+
+const WEIGHTS: Weights = [
   [400, '400Regular/Inter_400Regular.ttf'],
   [700, '700Bold/Inter_700Bold.ttf'],
   [800, '800ExtraBold/Inter_800ExtraBold.ttf'],
-] as const;
+];
+
+/**
+ * The faces tried, in this order, for a character Inter lacks. Regular and bold where the face is
+ * small (800 resolves to 700); the CJK face is 10 MB a weight, so one weight serves all. Noto Sans
+ * SC covers every Han character of GB 2312 and of JIS X 0208 and the kana, so Chinese and Japanese
+ * names (Japanese with Chinese letterforms for a few kanji); it has no Hangul.
+ */
+const FALLBACKS: readonly { family: string; pkg: string; weights: Weights }[] = [
+  { family: 'Noto Sans Arabic', pkg: '@expo-google-fonts/noto-sans-arabic', weights: [[400, '400Regular/NotoSansArabic_400Regular.ttf'], [700, '700Bold/NotoSansArabic_700Bold.ttf']] },
+  { family: 'Noto Sans Hebrew', pkg: '@expo-google-fonts/noto-sans-hebrew', weights: [[400, '400Regular/NotoSansHebrew_400Regular.ttf'], [700, '700Bold/NotoSansHebrew_700Bold.ttf']] },
+  { family: 'Noto Sans Devanagari', pkg: '@expo-google-fonts/noto-sans-devanagari', weights: [[400, '400Regular/NotoSansDevanagari_400Regular.ttf'], [700, '700Bold/NotoSansDevanagari_700Bold.ttf']] },
+  { family: 'Noto Sans SC', pkg: '@expo-google-fonts/noto-sans-sc', weights: [[400, '400Regular/NotoSansSC_400Regular.ttf']] },
+];
+
+interface Face extends Shaper {
+  hasGlyphForCodePoint: (codePoint: number) => boolean;
+}
 
 let ready: Promise<void> | null = null;
+let fallbacksReady: Promise<Face[][]> | null = null;
+let inter: Face | null = null;
 
-/** Registers Inter with react-pdf and loads it, once per process. */
+const require = createRequire(import.meta.url);
+const packageDir = (pkg: string) => dirname(require.resolve(`${pkg}/package.json`));
+
+/** Registers Inter (and, unloaded, the other scripts' faces) with react-pdf and loads Inter, once per process. */
 export function registerFonts(): Promise<void> {
   ready ??= load();
   return ready;
@@ -29,15 +57,82 @@ export function registerFonts(): Promise<void> {
 async function load(): Promise<void> {
   cacheFontObjects();
   memoiseTextLayout(true);
-  const require = createRequire(import.meta.url);
-  const dir = dirname(require.resolve('@expo-google-fonts/inter/package.json'));
+  const dir = packageDir('@expo-google-fonts/inter');
   Font.register({ family: FAMILY, fonts: WEIGHTS.map(([fontWeight, file]) => ({ src: join(dir, file), fontWeight })) });
+  for (const f of FALLBACKS) {
+    const fdir = packageDir(f.pkg);
+    Font.register({ family: f.family, fonts: f.weights.map(([fontWeight, file]) => ({ src: join(fdir, file), fontWeight })) });
+  }
   // Lengths such as "1 15/16 in" must never be split across lines by hyphenation.
   Font.registerHyphenationCallback((word) => [word]);
   for (const [fontWeight] of WEIGHTS) {
-    const source = Font.getFont({ fontFamily: FAMILY, fontWeight, fontStyle: 'normal' });
-    await source.load();
-    memoiseShaping(source.data as unknown as Shaper);
-    memoiseFace(source.data as unknown as Parameters<typeof memoiseFace>[0]);
+    const face = await loadFace(FAMILY, fontWeight);
+    inter ??= face;
+    seedFace(face);
+    memoiseShaping(face);
+    memoiseFace(face as unknown as Parameters<typeof memoiseFace>[0]);
   }
+}
+
+async function loadFace(fontFamily: string, fontWeight: number): Promise<Face> {
+  const source = Font.getFont({ fontFamily, fontWeight, fontStyle: 'normal' });
+  await source.load();
+  return source.data as unknown as Face;
+}
+
+// Loaded on the first document that needs one: together about 12 MB read once per process.
+function loadFallbacks(): Promise<Face[][]> {
+  fallbacksReady ??= Promise.all(
+    FALLBACKS.map((f) =>
+      Promise.all(
+        f.weights.map(async ([fontWeight]) => {
+          const face = await loadFace(f.family, fontWeight);
+          // The sheet's feature settings turn off what these scripts need (required ligatures,
+          // contextual forms, mark positioning): they shape with their script's defaults. Only
+          // characters Inter lacks reach them, so the sheet's tabular digits are untouched.
+          const layout = face.layout.bind(face);
+          face.layout = (text, _features, ...rest) => layout(text, undefined, ...rest);
+          memoiseShaping(face);
+          memoiseFace(face as unknown as Parameters<typeof memoiseFace>[0]);
+          return face;
+        }),
+      ),
+    ),
+  );
+  return fallbacksReady;
+}
+
+/** Every string inside a value (a document's data), for fontFamilyFor. */
+export function stringsIn(value: unknown, into: string[] = []): string[] {
+  if (typeof value === 'string') into.push(value);
+  else if (Array.isArray(value)) for (const v of value) stringsIn(v, into);
+  else if (typeof value === 'object' && value !== null) for (const k in value) stringsIn((value as Record<string, unknown>)[k], into);
+  return into;
+}
+
+// Printable ASCII and Latin-1: every character of it is in Inter, so most text is passed at a glance.
+const PLAIN = /^[\x20-\x7e\u00a0-\u00ff]*$/;
+
+/**
+ * The font family for a document holding these texts: Inter alone when it has every character
+ * (the usual case, and the fast one), else Inter followed by the faces that have the others, in
+ * FALLBACKS order. react-pdf then takes each character from the first face in the list that has it.
+ */
+export async function fontFamilyFor(texts: Iterable<string>): Promise<string | string[]> {
+  await registerFonts();
+  const missing = new Set<number>();
+  for (const text of texts) {
+    if (PLAIN.test(text)) continue;
+    for (let i = 0; i < text.length; i++) {
+      const cp = text.codePointAt(i)!;
+      if (cp > 0xffff) i++;
+      // Line breaks and other controls are never drawn from a font.
+      if (cp < 0x20 || inter!.hasGlyphForCodePoint(cp)) continue;
+      missing.add(cp);
+    }
+  }
+  if (missing.size === 0) return FAMILY;
+  const faces = await loadFallbacks();
+  const used = FALLBACKS.filter((_, i) => [...missing].some((cp) => faces[i]![0]!.hasGlyphForCodePoint(cp)));
+  return used.length === 0 ? FAMILY : [FAMILY, ...used.map((f) => f.family)];
 }

@@ -41,9 +41,20 @@ export const SEED_CHARACTERS = `${Array.from({ length: 0x7f - 0x20 }, (_, i) => 
 const SUBSET_LIMIT = 64;
 const encoded = new WeakMap<object, Map<string, { bytes: Uint8Array; glyphs: number[] }>>();
 const patched = new WeakSet<object>();
+// The faces whose subsets start seeded: Inter's. A face for another script draws only the few
+// characters Inter lacks, and the seed would add a hundred unused Latin glyphs to its subset.
+const seeded = new WeakSet<object>();
 
-/** Adds the seed glyphs, in a fixed order, to a font that has not written any text yet. */
+/** Marks a loaded face as one whose subsets start with the seed glyphs. */
+export function seedFace(face: object): void {
+  seeded.add(face);
+}
+
+/** Adds the seed glyphs, in a fixed order, to a font that has not written any text yet (if its face is seeded). */
 export function seedSubset(font: EmbeddedFontLike): void {
+  patchSubset(Object.getPrototypeOf(font.subset) as Subset);
+  compressStreamsFast(font.document._root);
+  if (!seeded.has(font.font)) return;
   // Shaped with the sheet's own features, so the glyphs are the ones its text will use (tabular digits).
   for (const glyph of font.font.layout(SEED_CHARACTERS, SHEET_FEATURES).glyphs) {
     if (glyph.id === 0) continue;
@@ -52,8 +63,6 @@ export function seedSubset(font: EmbeddedFontLike): void {
     font.widths[gid] ??= glyph.advanceWidth * font.scale;
     font.unicode[gid] ??= glyph.codePoints;
   }
-  patchSubset(Object.getPrototypeOf(font.subset) as Subset);
-  compressStreamsFast(font.document._root);
 }
 
 function patchSubset(proto: Subset): void {
