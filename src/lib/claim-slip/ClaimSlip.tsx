@@ -20,7 +20,7 @@ const s = StyleSheet.create({
   big: { fontSize: 14, fontWeight: 800 },
 });
 
-/** The slip's document; `family` is fontFamilyFor the slip's texts (Inter alone for Latin-only text). */
+/** The slip's document; `family` comes from typeset(data) (Inter alone for Latin-only text). */
 export function claimSlipDocument(d: ClaimSlipData, family: string | string[] = FAMILY): ReactElement<DocumentProps> {
   const money = (n: number) => formatMoney(n, d.currency);
   return (

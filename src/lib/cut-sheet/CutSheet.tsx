@@ -203,7 +203,7 @@ export function CutSheetPage({ data, wrap, family = FAMILY }: { data: CutSheetDa
   );
 }
 
-/** A document of cut sheets, one page each; wrap lets an overfull sheet spill onto a second page; skipped garments get a last page; family from fontFamilyFor. */
+/** A document of cut sheets, one page each; wrap lets an overfull sheet spill onto a second page; skipped garments get a last page; family from typeset(). */
 export function cutSheetDocument(sheets: CutSheetData[], wrap = true, skipped: string[] = [], family: string | string[] = FAMILY): ReactElement<DocumentProps> {
   const first = sheets[0];
   return (

@@ -102,7 +102,7 @@ function loadFallbacks(): Promise<Face[][]> {
   return fallbacksReady;
 }
 
-/** Every string inside a value (a document's data), for fontFamilyFor. */
+/** Every string inside a value (a document's data). */
 export function stringsIn(value: unknown, into: string[] = []): string[] {
   if (typeof value === 'string') into.push(value);
   else if (Array.isArray(value)) for (const v of value) stringsIn(v, into);
@@ -112,16 +112,39 @@ export function stringsIn(value: unknown, into: string[] = []): string[] {
 
 // Printable ASCII and Latin-1: every character of it is in Inter, so most text is passed at a glance.
 const PLAIN = /^[\x20-\x7e\u00a0-\u00ff]*$/;
+// Drawn for a character no shipped face has (Hangul, emoji): Inter's white square, embedded like
+// the rest, where react-pdf would have fallen back to an unembedded Helvetica with no such glyph.
+const NO_GLYPH = '\u25a1';
+const IGNORABLE = /^\p{Default_Ignorable_Code_Point}$/u;
+
+/** How a document is set: its font family, and its data with characters no face has made printable. */
+export interface Typeset {
+  /** Inter alone when it has every character, else Inter followed by the faces the text needs. */
+  family: string | string[];
+  /** The data as printed: unchanged (the same object) unless some character has no face. */
+  print: <T>(value: T) => T;
+}
+
+const same = <T>(value: T): T => value;
+
+function replaced<T>(value: T, swap: (text: string) => string): T {
+  if (typeof value === 'string') return swap(value) as T;
+  if (Array.isArray(value)) return value.map((v: unknown) => replaced(v, swap)) as T;
+  // Plain data only: class instances (exact fractions) hold no text typed by anyone.
+  if (typeof value !== 'object' || value === null || Object.getPrototypeOf(value) !== Object.prototype) return value;
+  return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, replaced(v, swap)])) as T;
+}
 
 /**
- * The font family for a document holding these texts: Inter alone when it has every character
- * (the usual case, and the fast one), else Inter followed by the faces that have the others, in
- * FALLBACKS order. react-pdf then takes each character from the first face in the list that has it.
+ * Which faces a document's text (every string in `data`) needs. react-pdf takes each character
+ * from the first face of the family list that has it, and from Helvetica, unembedded, when none
+ * has: so characters no shipped face has are replaced (a white square; invisible format
+ * characters dropped) by `print`.
  */
-export async function fontFamilyFor(texts: Iterable<string>): Promise<string | string[]> {
+export async function typeset(data: unknown): Promise<Typeset> {
   await registerFonts();
   const missing = new Set<number>();
-  for (const text of texts) {
+  for (const text of stringsIn(data)) {
     if (PLAIN.test(text)) continue;
     for (let i = 0; i < text.length; i++) {
       const cp = text.codePointAt(i)!;
@@ -131,8 +154,20 @@ export async function fontFamilyFor(texts: Iterable<string>): Promise<string | s
       missing.add(cp);
     }
   }
-  if (missing.size === 0) return FAMILY;
+  if (missing.size === 0) return { family: FAMILY, print: same };
   const faces = await loadFallbacks();
+  const has = (cp: number) => faces.some((f) => f[0]!.hasGlyphForCodePoint(cp));
   const used = FALLBACKS.filter((_, i) => [...missing].some((cp) => faces[i]![0]!.hasGlyphForCodePoint(cp)));
-  return used.length === 0 ? FAMILY : [FAMILY, ...used.map((f) => f.family)];
+  const family = used.length === 0 ? FAMILY : [FAMILY, ...used.map((f) => f.family)];
+  const none = new Set([...missing].filter((cp) => !has(cp)));
+  if (none.size === 0) return { family, print: same };
+  const swap = (text: string) => {
+    let out = '';
+    for (const ch of text) {
+      const cp = ch.codePointAt(0)!;
+      out += !none.has(cp) ? ch : IGNORABLE.test(ch) ? '' : NO_GLYPH;
+    }
+    return out;
+  };
+  return { family, print: (value) => replaced(value, swap) };
 }

@@ -1,7 +1,7 @@
 // Cut sheets to PDF bytes. Server only: react-pdf and the font files never reach a browser.
 import { renderPdf } from '../render-pdf';
 import { cutSheetDocument, PAGE_PT } from './CutSheet';
-import { fontFamilyFor, stringsIn } from './fonts';
+import { typeset } from './fonts';
 import type { CutSheetData } from './types';
 
 /** Renders one garment's cut sheet: a one-page PDF. */
@@ -13,11 +13,13 @@ export function renderCutSheet(data: CutSheetData): Promise<Uint8Array<ArrayBuff
 export async function renderCutSheets(list: CutSheetData[], skipped: string[] = []): Promise<Uint8Array<ArrayBuffer>> {
   if (list.length === 0) throw new Error('No cut sheets to render.');
   // Free text (shop, garment, assignee, skipped garments' labels) may be in any script.
-  const family = await fontFamilyFor(stringsIn([list, skipped]));
-  const fast = await renderPdf(cutSheetDocument(list, false, skipped, family));
+  const { family, print } = await typeset([list, skipped]);
+  const sheets = print(list);
+  const notes = print(skipped);
+  const fast = await renderPdf(cutSheetDocument(sheets, false, notes, family));
   // A sheet too full for its paper came out as a taller page, which a printer would shrink and
   // the chalk guide would no longer be 1:1: render again, spilling onto a second page instead.
-  const bytes = atPaperSize(fast, list) ? fast : await renderPdf(cutSheetDocument(list, true, skipped, family));
+  const bytes = atPaperSize(fast, list) ? fast : await renderPdf(cutSheetDocument(sheets, true, notes, family));
   // A copy owns a plain ArrayBuffer, which a Response body accepts as it is.
   return new Uint8Array(bytes);
 }

@@ -163,6 +163,20 @@ describe('right-to-left names', () => {
   });
 });
 
+describe('a character no shipped face has', () => {
+  // Hangul (the one CJK face is Chinese and Japanese) and an emoji: a white square from Inter,
+  // embedded, rather than an unembedded Helvetica that has no such glyph either.
+  const name = '한서윤 🧵 Ahn';
+  it.each([
+    ['claim slip', () => renderClaimSlip({ ...SLIP, customerName: name })],
+    ['cut sheet', () => renderCutSheet(sheet([cuffInch], { assignee: name }))],
+  ])('prints as a white square on the %s, in embedded fonts only', async (_doc, render) => {
+    const pdf = await render();
+    expectPrinted(pdf, '□□□ □ Ahn');
+    expect(embeddedFonts(pdf).every((f) => f.name.startsWith('Inter-'))).toBe(true);
+  });
+});
+
 describe('a Latin-only document', () => {
   it('embeds Inter and no other font, on the slip and on the sheet', async () => {
     for (const pdf of [await renderClaimSlip(SLIP), await renderCutSheet(sheet([cuffInch]))]) {
