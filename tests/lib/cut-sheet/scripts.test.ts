@@ -25,8 +25,6 @@ const NAMES = [
   ['Devanagari', 'कविता मेहरा'],
 ] as const;
 
-const RTL = /[\u0590-\u08ff]/;
-
 interface Glyph {
   id: number;
   codePoints: number[];
