@@ -42,6 +42,9 @@ export default defineConfig({
       PAYMENTS_WEBHOOK_SECRET: envField.string({ context: 'server', access: 'secret', optional: true }),
       // How often the server retries failed notices and sends automatic ready notices.
       NOTICE_TICK_SECONDS: envField.number({ context: 'server', access: 'secret', default: 30 }),
+      // How many reverse proxies in front of the server append to X-Forwarded-For (0: none, the
+      // client is the TCP peer). The limits take the client's address from it (README: Security).
+      TRUSTED_PROXY_HOPS: envField.number({ context: 'server', access: 'secret', default: 0, int: true, gte: 0 }),
     },
   },
   vite: {

@@ -1,48 +1,76 @@
-// Limits repeated failed sign-ins per account: after MAX_FAILURES within WINDOW_MS, sign-ins for
-// that e-mail are refused with 429 until the oldest failure ages out. Kept in memory: one process
-// serves the shop, and a restart clearing the count is acceptable.
-const MAX_FAILURES = 5;
-const WINDOW_MS = 15 * 60 * 1000;
-const failures = new Map<string, number[]>();
+// Failed sign-ins, limited in the database so every server process counts them (README: Security).
+// Three counts per attempt, whatever the body's encoding: the account from this address (a growing
+// wait after 5 failures, at most 5 min), the account from anywhere (after 10, a growing wait of at
+// most 1 min, so strangers guessing cannot keep the owner out for long) and the address across all
+// accounts (30 failures, then 15 min). An attempt is counted before the password is checked, so
+// many sent at once cannot slip past the count; it is taken back unless the password was wrong.
+import { problem } from './api';
+import { requestEmail } from './request-email';
+import type { Rule } from './rate-limit-rules';
+import { clearLimits, hitLimits, limitKey, unhitLimits, type Limit } from '@/services/rate-limits';
 
-function recent(email: string, now: number): number[] {
-  const list = (failures.get(email) ?? []).filter((t) => now - t < WINDOW_MS);
-  if (list.length) failures.set(email, list);
-  else failures.delete(email);
-  return list;
+const MINUTE = 60_000;
+
+/** The sign-in rules; the waits grow from base to cap with each further failure. */
+export const SIGN_IN_RULES = {
+  pair: { kind: 'growing', free: 5, baseMs: 30_000, capMs: 5 * MINUTE, quietMs: 15 * MINUTE },
+  account: { kind: 'growing', free: 10, baseMs: 5_000, capMs: MINUTE, quietMs: 15 * MINUTE },
+  address: { kind: 'fixed', max: 30, windowMs: 15 * MINUTE },
+} satisfies Record<string, Rule>;
+
+/** The limits one sign-in attempt counts against (only the address's when no e-mail was sent). */
+export function signInLimits(email: string, address: string): Limit[] {
+  const limits: Limit[] = [{ key: limitKey('signin:addr', address), rule: SIGN_IN_RULES.address }];
+  if (email) {
+    limits.push({ key: limitKey('signin:pair', email, address), rule: SIGN_IN_RULES.pair });
+    limits.push({ key: limitKey('signin:acct', email), rule: SIGN_IN_RULES.account });
+  }
+  return limits;
 }
 
-/** Seconds until this e-mail may try again, or 0 when it may sign in now. */
-export function signInBlockedFor(email: string, now = Date.now()): number {
-  const list = recent(email.toLowerCase(), now);
-  if (list.length < MAX_FAILURES) return 0;
-  return Math.ceil((list[0]! + WINDOW_MS - now) / 1000);
+const REFUSED: Record<string, string> = {
+  'signin:pair': 'this account from this address',
+  'signin:acct': 'this account',
+  'signin:addr': 'this address',
+};
+
+/** A 429 in JSON with Retry-After, for every limit. */
+export function tooMany(error: string, retryAfter: number): Response {
+  const res = problem(429, error);
+  res.headers.set('retry-after', String(retryAfter));
+  res.headers.set('cache-control', 'no-store');
+  return res;
 }
 
-/** Records a sign-in outcome: failures count, a success clears the count. */
-export function recordSignIn(email: string, ok: boolean, now = Date.now()): void {
-  const key = email.toLowerCase();
-  if (ok) failures.delete(key);
-  else failures.set(key, [...recent(key, now), now]);
+function minutes(seconds: number): string {
+  return seconds < 60 ? `${seconds} s` : `${Math.ceil(seconds / 60)} min`;
 }
 
-/** Wraps better-auth's e-mail sign-in with the limit. */
-export async function limitedSignIn(request: Request, handler: (r: Request) => Promise<Response>): Promise<Response> {
-  let email = '';
+/** Wraps better-auth's e-mail sign-in with the limits; `address` is the client's (client-address.ts). */
+export async function limitedSignIn(request: Request, address: string, handler: (r: Request) => Promise<Response>): Promise<Response> {
+  const email = await requestEmail(request);
+  const limits = signInLimits(email, address);
+  const hit = await hitLimits(limits);
+  if (!hit.ok) {
+    const kind = hit.key.slice(0, hit.key.lastIndexOf(':'));
+    console.warn(`[limits] sign-in refused: too many failures for ${REFUSED[kind] ?? kind} (address ${address}), retry in ${hit.retryAfter} s`);
+    return tooMany(`Too many failed sign-ins for ${REFUSED[kind] ?? 'this account'}. Try again in ${minutes(hit.retryAfter)}.`, hit.retryAfter);
+  }
+  const keys = limits.map((l) => l.key);
+  let response: Response;
   try {
-    const body = (await request.clone().json()) as { email?: unknown };
-    if (typeof body.email === 'string') email = body.email;
-  } catch {
-    /* better-auth answers the malformed body itself */
+    response = await handler(request);
+  } catch (e) {
+    await unhitLimits(keys);
+    throw e;
   }
-  const wait = email ? signInBlockedFor(email) : 0;
-  if (wait > 0) {
-    return new Response(
-      JSON.stringify({ error: `Too many failed sign-ins for this account. Try again in ${Math.ceil(wait / 60)} min.` }),
-      { status: 429, headers: { 'content-type': 'application/json', 'retry-after': String(wait) } },
-    );
+  if (response.status === 200) {
+    // The right password ends this address's streak on the account; the other counts only lose this attempt.
+    const pair = limits.filter((l) => l.key.startsWith('signin:pair:')).map((l) => l.key);
+    await clearLimits(pair);
+    await unhitLimits(keys.filter((k) => !pair.includes(k)));
+  } else if (response.status !== 401) {
+    await unhitLimits(keys);
   }
-  const response = await handler(request);
-  if (email && (response.status === 200 || response.status === 401)) recordSignIn(email, response.status === 200);
   return response;
 }

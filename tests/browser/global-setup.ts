@@ -74,6 +74,9 @@ export default async function setup(project: TestProject) {
       ...payments.env,
       // The notice timer ticks fast so automatic ready notices and retries show within a test.
       NOTICE_TICK_SECONDS: '1',
+      // As behind one reverse proxy: tests give each would-be client its own X-Forwarded-For address,
+      // so the per-address limits of one test do not fall on the others (all come from loopback).
+      TRUSTED_PROXY_HOPS: '1',
       ...(databaseUrl ? { DATABASE_URL: databaseUrl } : {}),
     },
     stdio: ['ignore', 'inherit', 'inherit'],

@@ -24,18 +24,21 @@ export interface Answer {
 export async function call(
   method: string,
   path: string,
-  opts: { cookie?: string; body?: unknown; origin?: string | null } = {},
+  opts: { cookie?: string; body?: unknown; form?: Record<string, string>; origin?: string | null; from?: string } = {},
 ): Promise<Answer> {
   const base = inject('baseURL');
   const headers: Record<string, string> = {};
   if (opts.cookie) headers.cookie = opts.cookie;
   if (opts.body !== undefined) headers['content-type'] = 'application/json';
+  if (opts.form) headers['content-type'] = 'application/x-www-form-urlencoded';
+  // The test server trusts one proxy hop (TRUSTED_PROXY_HOPS=1), so this stands for the client's address.
+  if (opts.from) headers['x-forwarded-for'] = opts.from;
   const origin = opts.origin === undefined ? base : opts.origin;
   if (origin && method !== 'GET') headers.origin = origin;
   const res = await fetch(base + path, {
     method,
     headers,
-    body: opts.body === undefined ? undefined : JSON.stringify(opts.body),
+    body: opts.form ? new URLSearchParams(opts.form).toString() : opts.body === undefined ? undefined : JSON.stringify(opts.body),
     redirect: 'manual',
   });
   const text = await res.text();

@@ -53,30 +53,65 @@ describe('cross-site writes', () => {
 });
 
 describe('failed sign-ins', () => {
-  it('after 5 wrong passwords the account answers 429, even to the right one; others are unaffected', async () => {
+  // Each test signs in from its own invented address (X-Forwarded-For; the test server trusts one hop).
+  const wrong = (email: string, from: string, i: number) =>
+    call('POST', '/api/auth/sign-in/email', { from, body: { email, password: `wrong-${i}-password` } });
+
+  it('after 5 wrong passwords from one address, that address answers 429 for the account, even to the right one; others are unaffected', async () => {
     const shop = await newShop('Rate Limit Hems');
-    for (let i = 0; i < 5; i += 1) {
-      const r = await call('POST', '/api/auth/sign-in/email', { body: { email: shop.email, password: `wrong-${i}-password` } });
-      expect(r.status).toBe(401);
-    }
-    const blocked = await call('POST', '/api/auth/sign-in/email', { body: { email: shop.email, password: 'a-long-password' } });
+    const from = '198.51.100.11';
+    for (let i = 0; i < 5; i += 1) expect((await wrong(shop.email, from, i)).status).toBe(401);
+    const blocked = await call('POST', '/api/auth/sign-in/email', { from, body: { email: shop.email, password: 'a-long-password' } });
     expect(blocked.status).toBe(429);
     expect(Number(blocked.headers.get('retry-after'))).toBeGreaterThan(0);
     expect(blocked.body.error).toMatch(/Too many failed sign-ins/);
     expect(cookieFrom(blocked.headers)).toBe('');
     // The same address in capitals is the same account.
-    const shouted = await call('POST', '/api/auth/sign-in/email', { body: { email: shop.email.toUpperCase(), password: 'a-long-password' } });
+    const shouted = await call('POST', '/api/auth/sign-in/email', { from, body: { email: shop.email.toUpperCase(), password: 'a-long-password' } });
     expect(shouted.status).toBe(429);
     expect(await signIn(DEMO.counter)).toContain('better-auth.session_token=');
   });
 
+  it('counts form-encoded wrong passwords like JSON ones, and refuses the sixth whatever its encoding', async () => {
+    const shop = await newShop('Form Guess Hems');
+    const from = '198.51.100.12';
+    for (let i = 0; i < 5; i += 1) {
+      const r = await call('POST', '/api/auth/sign-in/email', { from, form: { email: shop.email, password: `wrong-${i}-password` } });
+      expect(r.status).toBe(401);
+    }
+    const form = await call('POST', '/api/auth/sign-in/email', { from, form: { email: shop.email, password: 'a-long-password' } });
+    expect(form.status).toBe(429);
+    expect(form.body.error).toMatch(/Too many failed sign-ins/);
+    expect(cookieFrom(form.headers)).toBe('');
+    const asJson = await call('POST', '/api/auth/sign-in/email', { from, body: { email: shop.email, password: 'a-long-password' } });
+    expect(asJson.status).toBe(429);
+  });
+
+  it("an attacker's failures from another address do not keep the owner out of their account", async () => {
+    const shop = await newShop('Owner Still In Hems');
+    const attacker = '203.0.113.50';
+    for (let i = 0; i < 5; i += 1) expect((await wrong(shop.email, attacker, i)).status).toBe(401);
+    expect((await wrong(shop.email, attacker, 5)).status).toBe(429);
+    const owner = await call('POST', '/api/auth/sign-in/email', { from: '198.51.100.77', body: { email: shop.email, password: 'a-long-password' } });
+    expect(owner.status).toBe(200);
+    expect(cookieFrom(owner.headers)).toContain('better-auth.session_token=');
+  });
+
+  it('one address guessing across many accounts is refused after 30 failures, for any account', async () => {
+    const from = '203.0.113.60';
+    for (let i = 0; i < 30; i += 1) expect((await wrong(`nobody-${i}@guess.example`, from, i)).status).toBe(401);
+    const refused = await call('POST', '/api/auth/sign-in/email', { from, form: { email: DEMO.counter, password: DEMO_PASSWORD } });
+    expect(refused.status).toBe(429);
+    expect(Number(refused.headers.get('retry-after'))).toBeGreaterThan(0);
+    expect((await call('POST', '/api/auth/sign-in/email', { from: '203.0.113.61', body: { email: DEMO.counter, password: DEMO_PASSWORD } })).status).toBe(200);
+  });
+
   it('a success before the limit clears the count', async () => {
     const shop = await newShop('Reset Count Hems');
+    const from = '198.51.100.13';
     for (let round = 0; round < 2; round += 1) {
-      for (let i = 0; i < 4; i += 1) {
-        expect((await call('POST', '/api/auth/sign-in/email', { body: { email: shop.email, password: 'nope-nope-nope' } })).status).toBe(401);
-      }
-      expect(await signIn(shop.email, 'a-long-password')).toContain('better-auth.session_token=');
+      for (let i = 0; i < 4; i += 1) expect((await wrong(shop.email, from, i)).status).toBe(401);
+      expect((await call('POST', '/api/auth/sign-in/email', { from, body: { email: shop.email, password: 'a-long-password' } })).status).toBe(200);
     }
   });
 });

@@ -8,3 +8,4 @@ export * from './audit';
 export * from './prices';
 export * from './payments';
 export * from './notices';
+export * from './limits';
