@@ -1,0 +1,29 @@
+// Limits kept in the database, against the built server: password-reset mail per requested address
+// and per client address.
+// Each test speaks from its own invented address (X-Forwarded-For; the test server trusts one hop).
+import { describe, expect, it } from 'vitest';
+import { call, freshEmail, newShop } from './client';
+
+const reset = (email: string, from: string) =>
+  call('POST', '/api/auth/request-password-reset', { from, body: { email, redirectTo: '/reset' } });
+
+describe('password-reset mail', () => {
+  it('goes to one address at most 3 times an hour, whoever asks', async () => {
+    const shop = await newShop('Reset Flood Hems');
+    for (let i = 0; i < 3; i += 1) expect((await reset(shop.email, `198.51.100.${100 + i}`)).status).toBe(200);
+    const refused = await reset(shop.email.toUpperCase(), '198.51.100.110');
+    expect(refused.status).toBe(429);
+    expect(Number(refused.headers.get('retry-after'))).toBeGreaterThan(0);
+    expect(refused.body.error).toMatch(/Too many password-reset requests/);
+  });
+
+  it('is asked for at most 10 times an hour from one client address', async () => {
+    const from = '203.0.113.70';
+    for (let i = 0; i < 10; i += 1) expect((await reset(freshEmail('nobody-reset'), from)).status).toBe(200);
+    const refused = await reset(freshEmail('nobody-reset'), from);
+    expect(refused.status).toBe(429);
+    expect(Number(refused.headers.get('retry-after'))).toBeGreaterThan(0);
+    // Another address still may.
+    expect((await reset(freshEmail('nobody-reset'), '203.0.113.71')).status).toBe(200);
+  });
+});
