@@ -1,8 +1,8 @@
 // Limits kept in the database, against the built server: password-reset mail per requested address
-// and per client address.
+// and per client address, and anonymous cut sheets per client address (members are not limited).
 // Each test speaks from its own invented address (X-Forwarded-For; the test server trusts one hop).
 import { describe, expect, it } from 'vitest';
-import { call, freshEmail, newShop } from './client';
+import { call, DEMO, freshEmail, newShop, signIn } from './client';
 
 const reset = (email: string, from: string) =>
   call('POST', '/api/auth/request-password-reset', { from, body: { email, redirectTo: '/reset' } });
@@ -25,5 +25,28 @@ describe('password-reset mail', () => {
     expect(Number(refused.headers.get('retry-after'))).toBeGreaterThan(0);
     // Another address still may.
     expect((await reset(freshEmail('nobody-reset'), '203.0.113.71')).status).toBe(200);
+  });
+});
+
+describe('anonymous cut sheets', () => {
+  const plan = { kind: 'cuff', unit: 'in', cuffDepth: '1 1/2', available: '5' };
+
+  it('answer 429 with Retry-After and JSON past 30 from one address; a signed-in member there is not limited', async () => {
+    const from = '203.0.113.80';
+    for (let i = 0; i < 30; i += 1) {
+      const r = await call('POST', '/api/plan/sheet', { from, body: plan });
+      expect(r.status).toBe(200);
+    }
+    const refused = await call('POST', '/api/plan/sheet', { from, body: plan });
+    expect(refused.status).toBe(429);
+    expect(refused.headers.get('content-type')).toMatch(/application\/json/);
+    expect(Number(refused.headers.get('retry-after'))).toBeGreaterThan(0);
+    expect(refused.body.error).toMatch(/sign in/i);
+    const member = await signIn(DEMO.tailor);
+    const signedIn = await call('POST', '/api/plan/sheet', { from, cookie: member, body: plan });
+    expect(signedIn.status).toBe(200);
+    expect(signedIn.headers.get('content-type')).toBe('application/pdf');
+    // Another anonymous address still prints.
+    expect((await call('POST', '/api/plan/sheet', { from: '203.0.113.81', body: plan })).status).toBe(200);
   });
 });

@@ -1,5 +1,9 @@
-// POST /api/plan/sheet: the calculator's unsaved plan as a printable cut sheet (PDF). Public.
+// POST /api/plan/sheet: the calculator's unsaved plan as a printable cut sheet (PDF). Public:
+// signed out, it is limited per client address and waits in a queue of its own (anonymous-sheets.ts).
 import type { APIRoute } from 'astro';
+import { anonymousSheetRefusal, inAnonymousQueue } from '@/lib/anonymous-sheets';
+import { clientOf } from '@/lib/client-address';
+import { tooMany } from '@/lib/sign-in-limit';
 import { fieldMessages } from '@/lib/plan-request';
 import { buildCutSheet, refusedFields } from '@/lib/cut-sheet/build';
 import { renderCutSheet } from '@/lib/cut-sheet/render';
@@ -12,7 +16,13 @@ function bad(error: string, fields: Record<string, string>): Response {
 }
 
 /** Answers the cut sheet for the posted plan, or 400 with a message per field. */
-export const POST: APIRoute = async ({ request }) => {
+export const POST: APIRoute = async (context) => {
+  const { request, locals } = context;
+  const anonymous = !locals.member;
+  if (anonymous) {
+    const refused = await anonymousSheetRefusal(clientOf(context));
+    if (refused) return refused;
+  }
   let body: unknown;
   try {
     body = await request.json();
@@ -29,7 +39,9 @@ export const POST: APIRoute = async ({ request }) => {
   if (Object.keys(refused).length > 0) return bad(Object.values(refused)[0]!, refused);
 
   const sheet = buildCutSheet({ shop: null, ticket: null, garment: null, due: null, assignee: null, pageSize }, legs);
-  const bytes = await renderCutSheet(sheet);
+  const rendering = anonymous ? inAnonymousQueue(() => renderCutSheet(sheet)) : renderCutSheet(sheet);
+  if (!rendering) return tooMany('The calculator is printing many sheets for visitors just now. Try again in a few seconds, or sign in.', 5);
+  const bytes = await rendering;
   return new Response(bytes, {
     headers: {
       'Content-Type': 'application/pdf',

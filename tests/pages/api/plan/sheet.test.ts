@@ -1,16 +1,21 @@
 // POST /api/plan/sheet called as Astro calls it: a real Request in, a PDF or a 400 out.
 import type { APIContext } from 'astro';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { POST } from '@/pages/api/plan/sheet';
 import { flatText, layoutText, pageInfo, pdfFile } from '../../../lib/cut-sheet/poppler';
 
+// The anonymous limit counts in the database.
+vi.mock('@/db', () => import('../../../db/db-mock'));
+
+let calls = 0;
 async function post(body: unknown): Promise<Response> {
   const request = new Request('http://localhost/api/plan/sheet', {
     method: 'POST',
     headers: { 'content-type': 'application/json' },
     body: typeof body === 'string' ? body : JSON.stringify(body),
   });
-  return POST({ request } as unknown as APIContext);
+  // Signed out, so counted against the anonymous limit (tests/http/limits.spec.ts): an address per call.
+  return POST({ request, locals: { member: null }, clientAddress: `192.0.2.${(calls += 1)}` } as unknown as APIContext);
 }
 
 async function pdfOf(res: Response): Promise<string> {

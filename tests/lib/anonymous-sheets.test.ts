@@ -1,0 +1,35 @@
+// Anonymous sheets render one at a time per process, at most 8 waiting: a crowd of strangers queues
+// behind itself, and the queue refuses more rather than growing without end.
+import { describe, expect, it, vi } from 'vitest';
+import { inAnonymousQueue } from '@/lib/anonymous-sheets';
+
+vi.mock('@/db', () => import('../db/db-mock'));
+
+describe('the anonymous render queue', () => {
+  it('runs one render at a time, keeps 8 waiting and refuses the next', async () => {
+    let running = 0;
+    let most = 0;
+    const gates: (() => void)[] = [];
+    const work = () =>
+      new Promise<number>((resolve) => {
+        running += 1;
+        most = Math.max(most, running);
+        gates.push(() => {
+          running -= 1;
+          resolve(running);
+        });
+      });
+    const queued = Array.from({ length: 9 }, () => inAnonymousQueue(work));
+    expect(queued.every(Boolean)).toBe(true);
+    expect(inAnonymousQueue(work)).toBeUndefined();
+    await vi.waitFor(() => expect(gates).toHaveLength(1));
+    for (let i = 0; i < 9; i += 1) {
+      await vi.waitFor(() => expect(gates).toHaveLength(i + 1));
+      expect(running).toBe(1);
+      gates[i]!();
+    }
+    await Promise.all(queued);
+    expect(most).toBe(1);
+    expect(inAnonymousQueue(async () => 'again')).toBeDefined();
+  });
+});
