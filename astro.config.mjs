@@ -44,7 +44,7 @@ export default defineConfig({
       NOTICE_TICK_SECONDS: envField.number({ context: 'server', access: 'secret', default: 30 }),
       // How many reverse proxies in front of the server append to X-Forwarded-For (0: none, the
       // client is the TCP peer). The limits take the client's address from it (README: Security).
-      TRUSTED_PROXY_HOPS: envField.number({ context: 'server', access: 'secret', default: 0, int: true, gte: 0 }),
+      TRUSTED_PROXY_HOPS: envField.number({ context: 'server', access: 'secret', default: 0, int: true, min: 0 }),
     },
   },
   vite: {
