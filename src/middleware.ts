@@ -1,8 +1,10 @@
 // Every request: the database is ready, cross-site writes are refused, the session is resolved
 // into Astro.locals, and pages other than the public ones send signed-out visitors to sign-in.
+import type { MiddlewareHandler } from 'astro';
 import { defineMiddleware } from 'astro:middleware';
 import { BETTER_AUTH_URL } from 'astro:env/server';
 import { auth } from '@/lib/auth';
+import { memberRequestStarted } from '@/lib/member-activity';
 import { activeMembership } from '@/services/members';
 import { ensureStarted } from '@/services/startup';
 
@@ -26,8 +28,17 @@ function crossSite(request: Request, selfOrigin: string): boolean {
   return /better-auth\./.test(request.headers.get('cookie') ?? '') || request.headers.get('sec-fetch-site') === 'cross-site';
 }
 
-/** The one middleware. */
+/** The one middleware; a member's request is marked in flight so anonymous renders wait for it. */
 export const onRequest = defineMiddleware(async (context, next) => {
+  const done = memberRequestStarted(context.request);
+  try {
+    return await answer(context, next, done);
+  } finally {
+    done();
+  }
+});
+
+async function answer(context: Parameters<MiddlewareHandler>[0], next: Parameters<MiddlewareHandler>[1], notMember: () => void) {
   await ensureStarted();
   const { request, url, locals } = context;
   if (crossSite(request, url.origin)) {
@@ -45,8 +56,10 @@ export const onRequest = defineMiddleware(async (context, next) => {
     locals.user = { id, name, email };
     locals.member = await activeMembership(id, session.session.activeOrganizationId);
   }
+  // A cookie without a membership (an old session) is a stranger: it must not hold up anonymous work, its own included.
+  if (!locals.member) notMember();
   if (!locals.member && !isPublic(url.pathname)) {
     return context.redirect(`/sign-in?next=${encodeURIComponent(url.pathname + url.search)}`);
   }
   return next();
-});
+}

@@ -1,9 +1,11 @@
 // Cut sheets printed without signing in (the public calculator): 30 per 10 minutes per client
 // address, counted in the database, and rendered one at a time per process with at most 8
-// waiting, so strangers queue behind each other and a member's sheet waits for one at most.
+// waiting, each only once no member's request is in flight (member-activity.ts): strangers queue
+// behind each other and behind members, and a member's request waits for one render at most.
 import pLimit from 'p-limit';
 import type { Rule } from './rate-limit-rules';
-import { tooMany } from './sign-in-limit';
+import { tooMany } from './api';
+import { whenMembersIdle } from './member-activity';
 import { hitLimits, limitKey } from '@/services/rate-limits';
 
 /** At most 30 anonymous sheets per 10 minutes from one address. */
@@ -22,5 +24,8 @@ export async function anonymousSheetRefusal(address: string): Promise<Response |
 /** Runs an anonymous render in the per-process queue; undefined when the queue is full. */
 export function inAnonymousQueue<T>(work: () => Promise<T>): Promise<T> | undefined {
   if (slot.activeCount + slot.pendingCount > MAX_WAITING) return undefined;
-  return slot(work);
+  return slot(async () => {
+    await whenMembersIdle();
+    return work();
+  });
 }

@@ -49,4 +49,10 @@ describe('anonymous cut sheets', () => {
     // Another anonymous address still prints.
     expect((await call('POST', '/api/plan/sheet', { from: '203.0.113.81', body: plan })).status).toBe(200);
   });
+
+  it('print for a stranger carrying an old session cookie (not a member) as for anyone signed out', async () => {
+    const r = await call('POST', '/api/plan/sheet', { from: '203.0.113.82', cookie: 'better-auth.session_token=long-gone.signature', body: plan });
+    expect(r.status).toBe(200);
+    expect(r.headers.get('content-type')).toBe('application/pdf');
+  });
 });

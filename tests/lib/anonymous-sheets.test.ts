@@ -2,6 +2,7 @@
 // behind itself, and the queue refuses more rather than growing without end.
 import { describe, expect, it, vi } from 'vitest';
 import { inAnonymousQueue } from '@/lib/anonymous-sheets';
+import { memberRequestStarted } from '@/lib/member-activity';
 
 vi.mock('@/db', () => import('../db/db-mock'));
 
@@ -31,5 +32,20 @@ describe('the anonymous render queue', () => {
     await Promise.all(queued);
     expect(most).toBe(1);
     expect(inAnonymousQueue(async () => 'again')).toBeDefined();
+  });
+
+  it("starts no anonymous render while a member's request is in flight", async () => {
+    const member = memberRequestStarted(new Request('http://localhost/api/garments', { headers: { cookie: 'better-auth.session_token=abc' } }));
+    const stranger = memberRequestStarted(new Request('http://localhost/api/plan/sheet'));
+    let started = false;
+    const render = inAnonymousQueue(async () => {
+      started = true;
+    });
+    await new Promise((r) => setTimeout(r, 20));
+    expect(started).toBe(false);
+    stranger();
+    member();
+    await render;
+    expect(started).toBe(true);
   });
 });

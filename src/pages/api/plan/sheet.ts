@@ -3,7 +3,7 @@
 import type { APIRoute } from 'astro';
 import { anonymousSheetRefusal, inAnonymousQueue } from '@/lib/anonymous-sheets';
 import { clientOf } from '@/lib/client-address';
-import { tooMany } from '@/lib/sign-in-limit';
+import { tooMany } from '@/lib/api';
 import { fieldMessages } from '@/lib/plan-request';
 import { buildCutSheet, refusedFields } from '@/lib/cut-sheet/build';
 import { renderCutSheet } from '@/lib/cut-sheet/render';
@@ -18,11 +18,15 @@ function bad(error: string, fields: Record<string, string>): Response {
 /** Answers the cut sheet for the posted plan, or 400 with a message per field. */
 export const POST: APIRoute = async (context) => {
   const { request, locals } = context;
-  const anonymous = !locals.member;
-  if (anonymous) {
-    const refused = await anonymousSheetRefusal(clientOf(context));
-    if (refused) return refused;
-  }
+  if (locals.member) return answer(request);
+  const refused = await anonymousSheetRefusal(clientOf(context));
+  if (refused) return refused;
+  // All of a stranger's work (reading the plan too), behind members' requests.
+  const queued = inAnonymousQueue(() => answer(request));
+  return queued ?? tooMany('The calculator is printing many sheets for visitors just now. Try again in a few seconds, or sign in.', 5);
+};
+
+async function answer(request: Request): Promise<Response> {
   let body: unknown;
   try {
     body = await request.json();
@@ -39,9 +43,7 @@ export const POST: APIRoute = async (context) => {
   if (Object.keys(refused).length > 0) return bad(Object.values(refused)[0]!, refused);
 
   const sheet = buildCutSheet({ shop: null, ticket: null, garment: null, due: null, assignee: null, pageSize }, legs);
-  const rendering = anonymous ? inAnonymousQueue(() => renderCutSheet(sheet)) : renderCutSheet(sheet);
-  if (!rendering) return tooMany('The calculator is printing many sheets for visitors just now. Try again in a few seconds, or sign in.', 5);
-  const bytes = await rendering;
+  const bytes = await renderCutSheet(sheet);
   return new Response(bytes, {
     headers: {
       'Content-Type': 'application/pdf',
@@ -49,4 +51,4 @@ export const POST: APIRoute = async (context) => {
       'cache-control': 'no-store',
     },
   });
-};
+}
