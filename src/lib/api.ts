@@ -16,6 +16,14 @@ export function problem(status: number, error: string, issues?: Record<string, s
   return json(issues ? { error, issues } : { error }, status);
 }
 
+/** A 429 in JSON with Retry-After (seconds), for every limit. */
+export function tooMany(error: string, retryAfter: number): Response {
+  const res = problem(429, error);
+  res.headers.set('retry-after', String(retryAfter));
+  res.headers.set('cache-control', 'no-store');
+  return res;
+}
+
 /** The signed-in member an API route acts for. */
 export interface Actor {
   userId: string;

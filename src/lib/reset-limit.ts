@@ -3,7 +3,7 @@
 // account exists or not, so a refusal tells nothing about who has an account.
 import { requestEmail } from './request-email';
 import type { Rule } from './rate-limit-rules';
-import { tooMany } from './sign-in-limit';
+import { tooMany } from './api';
 import { hitLimits, limitKey, unhitLimits, type Limit } from '@/services/rate-limits';
 
 const HOUR = 3_600_000;

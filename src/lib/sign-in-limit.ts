@@ -4,7 +4,7 @@
 // most 1 min, so strangers guessing cannot keep the owner out for long) and the address across all
 // accounts (30 failures, then 15 min). An attempt is counted before the password is checked, so
 // many sent at once cannot slip past the count; it is taken back unless the password was wrong.
-import { problem } from './api';
+import { tooMany } from './api';
 import { requestEmail } from './request-email';
 import type { Rule } from './rate-limit-rules';
 import { clearLimits, hitLimits, limitKey, unhitLimits, type Limit } from '@/services/rate-limits';
@@ -33,14 +33,6 @@ const REFUSED: Record<string, string> = {
   'signin:acct': 'this account',
   'signin:addr': 'this address',
 };
-
-/** A 429 in JSON with Retry-After, for every limit. */
-export function tooMany(error: string, retryAfter: number): Response {
-  const res = problem(429, error);
-  res.headers.set('retry-after', String(retryAfter));
-  res.headers.set('cache-control', 'no-store');
-  return res;
-}
 
 function minutes(seconds: number): string {
   return seconds < 60 ? `${seconds} s` : `${Math.ceil(seconds / 60)} min`;
