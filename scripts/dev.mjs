@@ -9,7 +9,7 @@ const devEnv = { ...process.env, BETTER_AUTH_URL: env.BETTER_AUTH_URL || `http:/
 if (useCapture) {
   const { port } = await startMailCapture({ dir: captureDir, port: env.SMTP_PORT });
   Object.assign(devEnv, { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(port), MAIL_CAPTURE_DIR: captureDir });
-  console.log(`Mail capture on smtp://127.0.0.1:${port}: the lead reads it at /outbox`);
+  console.log(`Mail capture on smtp://127.0.0.1:${port}: a shop's lead reads what the shop sent at /sent-messages`);
 }
 if (!process.env.PAYMENTS_API_KEY) {
   const payments = await startLocalPayments({ appUrl: `http://127.0.0.1:${env.PORT}`, port: Number(process.env.PAYMENTS_FAKE_PORT || 12111) });

@@ -20,5 +20,5 @@ export const env = schema.parse(process.env);
 /** True when mail should go to the local capture (no real SMTP host configured). */
 export const useCapture = !env.SMTP_HOST || env.SMTP_HOST === '127.0.0.1' || env.SMTP_HOST === 'localhost';
 
-/** The folder the local capture writes and the outbox reads. */
+/** The folder the local capture writes and the sent-messages page reads. */
 export const captureDir = env.MAIL_CAPTURE_DIR || join(env.DATA_DIR, 'mail');

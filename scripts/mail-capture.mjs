@@ -1,5 +1,6 @@
 // A local SMTP capture for development and tests: accepts every message on loopback (no auth,
-// no TLS) and saves it as JSON in a folder the app's outbox page reads. Never for production.
+// no TLS) and saves it as JSON in a folder the app's sent-messages page reads (by Message-ID, for
+// the messages the database says a shop sent). Never for production.
 import { SMTPServer } from 'smtp-server';
 import { simpleParser } from 'mailparser';
 import { mkdirSync, writeFileSync, renameSync } from 'node:fs';
@@ -20,7 +21,7 @@ export function startMailCapture({ dir, port = 1025, host = '127.0.0.1', quiet =
           const at = new Date();
           const id = `${at.toISOString().replace(/[:.]/g, '-')}-${randomUUID().slice(0, 8)}`;
           const to = session.envelope.rcptTo.map((r) => r.address);
-          const record = { id, at: at.toISOString(), from: session.envelope.mailFrom?.address ?? '', to, subject: mail.subject ?? '', text: mail.text ?? '' };
+          const record = { id, at: at.toISOString(), messageId: mail.messageId ?? '', from: session.envelope.mailFrom?.address ?? '', to, subject: mail.subject ?? '', text: mail.text ?? '' };
           // Written then renamed, so a reader never sees half a message.
           const tmp = join(dir, `.${id}.tmp`);
           writeFileSync(tmp, JSON.stringify(record, null, 2));

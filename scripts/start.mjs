@@ -16,7 +16,7 @@ const serverEnv = {
 if (useCapture) {
   const { port } = await startMailCapture({ dir: captureDir, port: env.SMTP_PORT });
   Object.assign(serverEnv, { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(port), MAIL_CAPTURE_DIR: captureDir });
-  console.log(`Mail capture on smtp://127.0.0.1:${port}: the lead reads it at /outbox`);
+  console.log(`Mail capture on smtp://127.0.0.1:${port}: a shop's lead reads what the shop sent at /sent-messages`);
 }
 // Without a real payment service configured, payment links go to the local fake.
 if (!process.env.PAYMENTS_API_KEY) {

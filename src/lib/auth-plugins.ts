@@ -15,7 +15,7 @@ export const shopRoles = {
 
 /** What the plugin needs from the app: how to send an invitation. */
 export interface ShopPluginDeps {
-  sendInvitation: (invite: { id: string; email: string; role: string; shopName: string; inviterName: string }) => Promise<void>;
+  sendInvitation: (invite: { id: string; email: string; role: string; shopId: string; shopName: string; inviterName: string }) => Promise<void>;
 }
 
 /** The organization plugin configured with the shop roles. */
@@ -33,6 +33,7 @@ export function shopPlugin(deps: ShopPluginDeps) {
         id: data.id,
         email: data.email,
         role: data.role,
+        shopId: data.organization.id,
         shopName: data.organization.name,
         inviterName: data.inviter.user.name,
       }),

@@ -26,7 +26,7 @@ export const auth = betterAuth({
         to: user.email,
         subject: 'Reset your Cuffwright password',
         text: `Hello ${user.name},\n\nTo choose a new password, open this link within the hour:\n\n${url}\n\nIf you did not ask for this, ignore this message.`,
-      }),
+      }, { shopId: null, kind: 'password-reset' }),
   },
   session: { expiresIn: 60 * 60 * 24 * 7, updateAge: 60 * 60 * 24 },
   // Failed sign-ins are limited per account in src/lib/sign-in-limit.ts; better-auth's own
@@ -34,7 +34,7 @@ export const auth = betterAuth({
   rateLimit: { enabled: false },
   plugins: [
     shopPlugin({
-      sendInvitation: async ({ id, email, role, shopName, inviterName }) =>
+      sendInvitation: async ({ id, email, role, shopId, shopName, inviterName }) =>
         sendMail({
           to: email,
           subject: `${inviterName} invited you to ${shopName} on Cuffwright`,
@@ -42,7 +42,7 @@ export const auth = betterAuth({
             `${inviterName} invited you to join ${shopName} on Cuffwright as ` +
             `${isRole(role) ? ROLE_LABELS[role].name.toLowerCase() : role}.\n\n` +
             `Open this link to accept and choose your password:\n\n${BETTER_AUTH_URL}/invite/${id}\n`,
-        }),
+        }, { shopId, kind: 'invitation' }),
     }),
   ],
 });

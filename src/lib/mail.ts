@@ -2,6 +2,7 @@
 // npm start / dev / the tests; a real SMTP host is only a matter of SMTP_* variables.
 import nodemailer from 'nodemailer';
 import { MAIL_FROM, SMTP_HOST, SMTP_PASS, SMTP_PORT, SMTP_SECURE, SMTP_USER } from 'astro:env/server';
+import { recordSentMail, type MailOrigin } from '@/services/sent-mail';
 
 const transport = nodemailer.createTransport({
   host: SMTP_HOST,
@@ -17,7 +18,14 @@ export interface Mail {
   text: string;
 }
 
-/** Sends one message; throws when the SMTP host refuses it. */
-export async function sendMail(mail: Mail): Promise<void> {
-  await transport.sendMail({ from: MAIL_FROM, ...mail });
+/** Sends one message and records which shop (if any) caused it; throws when the SMTP host refuses it. */
+export async function sendMail(mail: Mail, origin: MailOrigin): Promise<void> {
+  const info = await transport.sendMail({ from: MAIL_FROM, ...mail });
+  try {
+    await recordSentMail(origin, { to: mail.to, subject: mail.subject, messageId: info.messageId });
+  } catch (e) {
+    // The message is out: failing here would make a notice retry and send it twice. Unrecorded,
+    // it is only missing from the shop's list, never shown to another shop.
+    console.error('sent mail not recorded:', e);
+  }
 }

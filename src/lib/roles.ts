@@ -27,7 +27,8 @@ export const statements = {
   plans: ['read', 'create'],
   cutsheets: ['print'],
   notices: ['send'],
-  outbox: ['read'],
+  // The messages the shop sent (invitations, ready notices), shown where mail goes to the local capture.
+  messages: ['read'],
 } as const;
 
 /** A resource name. */
@@ -53,7 +54,7 @@ export const grants = {
     plans: ['read', 'create'],
     cutsheets: ['print'],
     notices: ['send'],
-    outbox: ['read'],
+    messages: ['read'],
   },
   tailor: {
     prices: ['read'],

@@ -60,7 +60,7 @@ export async function attemptDelivery(notice: Notice): Promise<Notice> {
     return now!;
   }
   try {
-    await sendMail({ to: notice.to, subject: notice.subject, text: notice.body });
+    await sendMail({ to: notice.to, subject: notice.subject, text: notice.body }, { shopId: notice.shopId, kind: 'ready-notice' });
     const [row] = await db.update(notices).set({ status: 'sent', attempts, sentAt: new Date(), lastError: null, nextAttemptAt: null }).where(eq(notices.id, notice.id)).returning();
     return row!;
   } catch (e) {

@@ -38,7 +38,7 @@ function screens(ticketId: string, garmentId: string): Record<string, string> {
     presets: '/presets',
     prices: '/prices',
     staff: '/staff',
-    outbox: '/outbox',
+    'sent-messages': '/sent-messages',
     'bench-settings': '/bench-settings',
   };
 }

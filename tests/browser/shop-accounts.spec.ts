@@ -23,7 +23,7 @@ afterAll(async () => {
 });
 
 describe('a new shop and its first tailor', () => {
-  it('the lead signs up, invites a tailor, and finds the invitation in the outbox', async () => {
+  it('the lead signs up, invites a tailor, and finds the invitation in the shop’s sent messages', async () => {
     const page = await tabletPage(browser);
     await page.goto('/sign-up');
     await ready(page);
@@ -43,13 +43,13 @@ describe('a new shop and its first tailor', () => {
     await page.getByText(tailorEmail).first().waitFor();
     await page.screenshot({ path: 'test-results/staff.png', fullPage: true });
 
-    await page.getByRole('link', { name: 'Outbox' }).click();
-    await page.waitForURL('**/outbox');
+    await page.getByRole('link', { name: 'Sent messages' }).click();
+    await page.waitForURL('**/sent-messages');
     const link = page.getByRole('link', { name: /\/invite\// }).first();
     invitationLink = (await link.getAttribute('href')) ?? '';
     expect(invitationLink).toMatch(/\/invite\/\w+$/);
     await expect(page.getByText(`To ${tailorEmail}`).isVisible()).resolves.toBe(true);
-    await page.screenshot({ path: 'test-results/outbox.png', fullPage: true });
+    await page.screenshot({ path: 'test-results/sent-messages.png', fullPage: true });
     await page.context().close();
   });
 

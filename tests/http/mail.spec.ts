@@ -22,12 +22,12 @@ describe('invitation by e-mail', () => {
     expect(me.body).toMatchObject({ email, role: 'tailor', shop: { name: 'Pinmark & Hem' } });
     // The link works once.
     expect((await call('GET', `/api/invitations/${id}`)).status).toBe(404);
-    // The lead's outbox shows it; another shop's lead does not see it.
-    const outbox = await call('GET', '/api/outbox', { cookie: lead });
-    expect(outbox.body.some((m: { to: string[] }) => m.to.includes(email))).toBe(true);
-    const other = await newShop('Outbox Other');
-    const theirs = await call('GET', '/api/outbox', { cookie: other.cookie });
-    expect(theirs.body.some((m: { to: string[] }) => m.to.includes(email))).toBe(false);
+    // The lead's sent messages show it, with its text; another shop's lead does not see it.
+    const sent = await call('GET', '/api/sent-messages', { cookie: lead });
+    expect(sent.body.find((m: { to: string }) => m.to === email)).toMatchObject({ kind: 'invitation', text: expect.stringContaining(link.pathname) });
+    const other = await newShop('Sent Messages Other');
+    const theirs = await call('GET', '/api/sent-messages', { cookie: other.cookie });
+    expect(theirs.body.some((m: { to: string }) => m.to === email)).toBe(false);
   });
 });
 

@@ -483,12 +483,14 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       expect: all(400),
     },
   },
-  outbox: {
+  'sent-messages': {
     GET: {
-      request: () => ({ path: '/api/outbox' }),
+      request: () => ({ path: '/api/sent-messages' }),
       expect: signedIn(403, { lead: 200, other: 200 }),
       check: (a, actor) => {
         if (actor === 'lead') expect(a.body.length).toBeGreaterThan(0);
+        // The other shop lists only what it sent itself (its own invitations in other rows).
+        if (actor === 'other') for (const m of a.body) expect(m.subject).toContain('Other Shop Alterations');
       },
     },
   },
@@ -568,7 +570,7 @@ beforeAll(async () => {
   apprenticeUserId = staff.members.find((m) => m.role === 'apprentice')!.userId;
   markersOfA.push(shopA, ...customers.map((c) => c.id), ...tickets.map((t) => t.id), ...garments.map((g) => g.id), ...staff.members.flatMap((m) => [m.id, m.userId, m.email]));
   markersOfB.push(shopB, b.email);
-  // Something in the outbox for the lead: an invitation mail to shop A.
+  // Something in the lead's sent messages: an invitation mail from shop A.
   await freshInvitation();
 });
 

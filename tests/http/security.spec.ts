@@ -118,7 +118,7 @@ describe('failed sign-ins', () => {
 
 describe('pages', () => {
   it('send a signed-out visitor to sign-in, keeping where they were going', async () => {
-    for (const path of ['/bench', '/staff', '/outbox']) {
+    for (const path of ['/bench', '/staff', '/sent-messages']) {
       const r = await call('GET', path);
       expect(r.status).toBe(302);
       expect(r.headers.get('location')).toBe(`/sign-in?next=${encodeURIComponent(path)}`);

@@ -9,3 +9,4 @@ export * from './prices';
 export * from './payments';
 export * from './notices';
 export * from './limits';
+export * from './sent-mail';

@@ -1,0 +1,29 @@
+// Every message the app handed to the SMTP host, with the shop that caused it: a shop's list of
+// sent messages is read from here (never by matching addresses a shop typed in, which anyone can).
+import { index, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { organization } from './auth';
+
+/** What a message was: shop mail (invitation, ready notice) or account mail (password reset). */
+export const SENT_MAIL_KINDS = ['invitation', 'ready-notice', 'password-reset'] as const;
+/** A kind of sent message. */
+export type SentMailKind = (typeof SENT_MAIL_KINDS)[number];
+
+/** Messages accepted by the SMTP host. */
+export const sentMail = pgTable(
+  'sent_mail',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    /** the shop whose action sent it; null for account mail, which belongs to no shop's list */
+    shopId: text('shop_id').references(() => organization.id, { onDelete: 'cascade' }),
+    kind: text('kind', { enum: SENT_MAIL_KINDS }).notNull(),
+    to: text('to').notNull(),
+    subject: text('subject').notNull(),
+    /** the Message-ID header the SMTP host received (the local capture keeps it with the message) */
+    messageId: text('message_id').notNull(),
+    sentAt: timestamp('sent_at', { withTimezone: true }).defaultNow().notNull(),
+  },
+  (t) => [index('sent_mail_shop_idx').on(t.shopId, t.sentAt)],
+);
+
+/** A sent message as recorded. */
+export type SentMail = typeof sentMail.$inferSelect;
