@@ -58,12 +58,16 @@ export async function invite(actor: Actor, headers: Headers, input: z.infer<type
     .innerJoin(user, eq(user.id, member.userId))
     .where(and(eq(member.organizationId, actor.shopId), eq(user.email, email)));
   if (already) throw new ServiceError(409, `${email} is already on the staff.`);
+  // No `resend`: it would mail the pending invitation unchanged, old role and all. Without it the
+  // plugin cancels the pending one (cancelPendingInvitationsOnReInvite) and stores and mails a new
+  // one with this role, so the role sent, stored and answered is one and the same.
   const created = await auth.api.createInvitation({
     headers,
-    body: { email, role: input.role, organizationId: actor.shopId, resend: true },
+    body: { email, role: input.role, organizationId: actor.shopId },
   });
-  await audit(actor.shopId, actor.userId, 'staff.invited', created.id, { email, role: input.role });
-  return { id: created.id, email, role: input.role, expiresAt: new Date(created.expiresAt).toISOString() };
+  const role = created.role as Role;
+  await audit(actor.shopId, actor.userId, 'staff.invited', created.id, { email, role });
+  return { id: created.id, email, role, expiresAt: new Date(created.expiresAt).toISOString() };
 }
 
 async function leadsLeft(shopId: string, without: string): Promise<number> {

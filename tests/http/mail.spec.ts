@@ -1,7 +1,7 @@
 // E-mail through SMTP to the local capture: invitations and password reset, end to end over HTTP.
 import { describe, expect, it } from 'vitest';
 import { call, cookieFrom, DEMO, freshEmail, newShop, signIn } from './client';
-import { firstLink, waitForMail } from './mail';
+import { firstLink, waitForMail, waitForMailWith } from './mail';
 
 describe('invitation by e-mail', () => {
   it('reaches the invitee, and its link lets them join with the invited role', async () => {
@@ -28,6 +28,30 @@ describe('invitation by e-mail', () => {
     const other = await newShop('Sent Messages Other');
     const theirs = await call('GET', '/api/sent-messages', { cookie: other.cookie });
     expect(theirs.body.some((m: { to: string }) => m.to === email)).toBe(false);
+  });
+});
+
+describe('re-invitation with another role', () => {
+  it('sends, stores and answers the new role, and the person joins with it', async () => {
+    const lead = await signIn(DEMO.lead);
+    const email = freshEmail('re-invited');
+    const first = await call('POST', '/api/staff', { cookie: lead, body: { email, role: 'apprentice' } });
+    expect(first.body.role).toBe('apprentice');
+    const oldLink = new URL(firstLink(await waitForMail(email)));
+    const again = await call('POST', '/api/staff', { cookie: lead, body: { email, role: 'tailor' } });
+    expect(again.status).toBe(201);
+    expect(again.body.role).toBe('tailor');
+    const mail = await waitForMailWith(email, (m) => m.text.includes(again.body.id));
+    expect(mail.text).toMatch(/as tailor\./);
+    const staff = await call('GET', '/api/staff', { cookie: lead });
+    expect(staff.body.invitations.filter((i: { email: string }) => i.email === email).map((i: { role: string }) => i.role)).toEqual(['tailor']);
+    const link = new URL(firstLink(mail));
+    expect((await call('GET', `/api/invitations/${link.pathname.split('/').pop()}`)).body.role).toBe('tailor');
+    const joined = await call('POST', `/api/invitations/${link.pathname.split('/').pop()}/accept`, { body: { name: 'Re Invited', password: 'a-long-password' } });
+    expect(joined.status).toBe(200);
+    expect((await call('GET', '/api/me', { cookie: cookieFrom(joined.headers) })).body).toMatchObject({ email, role: 'tailor' });
+    // The first link, with the old role, no longer opens.
+    if (oldLink.pathname !== link.pathname) expect((await call('GET', `/api/invitations/${oldLink.pathname.split('/').pop()}`)).status).toBe(404);
   });
 });
 

@@ -12,6 +12,11 @@ export interface Captured {
 
 /** Waits for the newest message to `to` and returns it. */
 export async function waitForMail(to: string, ms = 10_000): Promise<Captured> {
+  return waitForMailWith(to, () => true, ms);
+}
+
+/** Waits for the newest message to `to` that passes `test` and returns it. */
+export async function waitForMailWith(to: string, test: (mail: Captured) => boolean, ms = 10_000): Promise<Captured> {
   const dir = inject('mailDir');
   const until = Date.now() + ms;
   while (Date.now() < until) {
@@ -23,7 +28,7 @@ export async function waitForMail(to: string, ms = 10_000): Promise<Captured> {
     }
     for (const name of names) {
       const mail = JSON.parse(readFileSync(join(dir, name), 'utf8')) as Captured;
-      if (mail.to.includes(to)) return mail;
+      if (mail.to.includes(to) && test(mail)) return mail;
     }
     await new Promise((r) => setTimeout(r, 100));
   }
