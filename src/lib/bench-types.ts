@@ -34,13 +34,13 @@ export interface QueueRow extends GarmentSummary {
   customerName: string | null;
 }
 
-/** The customer as a ticket or garment shows them. */
+/** The customer as a ticket or garment shows them; the contact details only to roles that may read customers. */
 export interface CustomerCard {
   id: string;
   name: string;
-  phone: string | null;
-  email: string | null;
-  notes: string | null;
+  phone?: string | null;
+  email?: string | null;
+  notes?: string | null;
 }
 
 /** A ticket with its customer and garments. */

@@ -2,6 +2,7 @@
 // Every garment, length and note here is invented for the demo.
 import { db } from '@/db';
 import { auditMany } from './audit';
+import { refreshTicketAssignee } from './garments';
 import { garments, measurements, tickets } from '@/db/schema';
 import { parseLength } from '@/lib/allowance';
 import type { ExistingFinish } from '@/lib/existing-finish';
@@ -109,5 +110,6 @@ export async function seedBenchDemo(shopId: string, customerIds: string[], peopl
         );
       }
     }
+    await refreshTicketAssignee(db, shopId, ticket!.id);
   }
 }

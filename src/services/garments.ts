@@ -1,12 +1,12 @@
 // Garments on the bench: the queue, one garment's page, adding and editing them, and moving one
 // step along. A ticket's status follows its least advanced garment.
-import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm';
+import { and, asc, eq, inArray, isNotNull, isNull, or } from 'drizzle-orm';
 import type { z } from 'zod';
 import { db, type Db } from '@/db';
 import { customers, garments, member, tickets, user, type Garment, type Ticket } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import type { garmentInput, garmentPatch } from '@/lib/bench-requests';
-import type { GarmentDetail, GarmentSummary, Person, QueueRow } from '@/lib/bench-types';
+import type { CustomerCard, GarmentDetail, GarmentSummary, Person, QueueRow } from '@/lib/bench-types';
 import { leastAdvanced, nextStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
 import { can } from '@/lib/roles';
 import { audit } from './audit';
@@ -26,6 +26,27 @@ export function garmentVisibleTo(actor: Actor) {
   return can(actor.role, ['tickets', 'read-all'])
     ? inShop
     : and(inShop, or(eq(garments.assigneeId, actor.userId), isNull(garments.assigneeId)));
+}
+
+/** The customer as a ticket or garment shows them: contact details (e-mail, phone, notes) only to
+ * roles that may read customers; an apprentice works the garment, never calls its owner. */
+export function customerCard(actor: Pick<Actor, 'role'>, c: { id: string; name: string; phone: string | null; email: string | null; notes: string | null }): CustomerCard {
+  if (!can(actor.role, ['customers', 'read'])) return { id: c.id, name: c.name };
+  return { id: c.id, name: c.name, phone: c.phone, email: c.email, notes: c.notes };
+}
+
+/** Sets a ticket's assignee to the person its first garment given to someone is given to (null
+ * when none is), so the ticket follows the work: call after garments are added or reassigned. */
+export async function refreshTicketAssignee(tx: Db, shopId: string, ticketId: string): Promise<string | null> {
+  const [first] = await tx
+    .select({ assigneeId: garments.assigneeId })
+    .from(garments)
+    .where(and(eq(garments.shopId, shopId), eq(garments.ticketId, ticketId), isNotNull(garments.assigneeId)))
+    .orderBy(asc(garments.position), asc(garments.createdAt))
+    .limit(1);
+  const assigneeId = first?.assigneeId ?? null;
+  await tx.update(tickets).set({ assigneeId }).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId)));
+  return assigneeId;
 }
 
 /** Every garment of a ticket of the shop, in the order they were taken in. */
@@ -110,7 +131,7 @@ export async function getGarment(actor: Actor, id: string): Promise<GarmentDetai
     ...summary!,
     existingFinish: g.existingFinish,
     ticket: { id: t!.id, number: t!.number, status: t!.status, note: t!.note },
-    customer: c ? { id: c.id, name: c.name, phone: c.phone, email: c.email, notes: c.notes } : null,
+    customer: c ? customerCard(actor, c) : null,
   };
 }
 
@@ -160,6 +181,7 @@ export async function addGarment(actor: Actor, ticketId: string, input: z.output
     .returning();
   await audit(actor.shopId, actor.userId, 'garment.added', row!.id, { ticket: t.number, description: input.description });
   await refreshTicketStatus(actor.shopId, ticketId);
+  if (input.assigneeId) await refreshTicketAssignee(db, actor.shopId, ticketId);
   return row!;
 }
 
@@ -178,6 +200,7 @@ export async function updateGarment(actor: Actor, id: string, patch: z.output<ty
     .where(and(eq(garments.id, id), eq(garments.shopId, actor.shopId)))
     .returning();
   await audit(actor.shopId, actor.userId, 'garment.changed', id, changes);
+  if ('assigneeId' in changes) await refreshTicketAssignee(db, actor.shopId, g.ticketId);
   return row!;
 }
 

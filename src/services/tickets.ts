@@ -1,5 +1,5 @@
 // A shop's tickets: intake (with its garments), one ticket's page, and moving a whole ticket on.
-import { and, asc, desc, eq, inArray, isNull, or, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, exists, inArray, isNull, or, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { customers, garments, tickets, type Ticket } from '@/db/schema';
 import type { Actor } from '@/lib/api';
@@ -10,17 +10,19 @@ import { can } from '@/lib/roles';
 import { audit, auditMany } from './audit';
 import { ServiceError } from './errors';
 import { onGarmentMoved } from './garment-events';
-import { garmentVisibleTo, isUuid, refreshTicketStatus, staffOf, summaries, withTicketLock } from './garments';
+import { customerCard, garmentVisibleTo, isUuid, refreshTicketAssignee, refreshTicketStatus, staffOf, summaries, withTicketLock } from './garments';
 import { pickUp } from './payments';
 
 /** A ticket as listed: the row plus who it is for and how many garments it holds. */
 export type TicketListItem = Ticket & { customerName: string | null; garmentCount: number };
 
+// Without read-all (the apprentice): the tickets given to them or to nobody yet, and those holding a
+// garment they see in the queue (theirs or nobody's), so each queue row's ticket opens for them.
 function visibleTo(actor: Actor) {
   const inShop = eq(tickets.shopId, actor.shopId);
-  return can(actor.role, ['tickets', 'read-all'])
-    ? inShop
-    : and(inShop, or(eq(tickets.assigneeId, actor.userId), isNull(tickets.assigneeId)));
+  if (can(actor.role, ['tickets', 'read-all'])) return inShop;
+  const holdsVisibleWork = exists(db.select({ one: sql`1` }).from(garments).where(and(eq(garments.ticketId, tickets.id), garmentVisibleTo(actor))));
+  return and(inShop, or(eq(tickets.assigneeId, actor.userId), isNull(tickets.assigneeId), holdsVisibleWork));
 }
 
 /** The actor's view of the shop's tickets: all of them, or only assigned-to-me and unassigned. */
@@ -52,7 +54,7 @@ export async function getTicket(actor: Actor, id: string): Promise<TicketDetail>
     note: t.note,
     dueOn: t.dueOn,
     createdAt: t.createdAt.toISOString(),
-    customer: c ? { id: c.id, name: c.name, phone: c.phone, email: c.email, notes: c.notes } : null,
+    customer: c ? customerCard(actor, c) : null,
     garments: await summaries(rows),
   };
 }
@@ -83,6 +85,8 @@ export async function createTicket(actor: Actor, typed: IntakeInput): Promise<Ti
       await tx.insert(garments).values(
         input.garments.map((g, position) => ({ shopId: actor.shopId, ticketId: t!.id, position, description: g.description, dueOn: g.dueOn ?? input.dueOn, assigneeId: g.assigneeId, existingFinish: g.existingFinish })),
       );
+      // Work given to someone at intake gives them the ticket.
+      return { ...t!, assigneeId: await refreshTicketAssignee(tx, actor.shopId, t!.id) };
     }
     return t!;
   });

@@ -1,5 +1,6 @@
-// Tickets: each shop sees only its own; an apprentice sees assigned-to-them and unassigned; a
-// ticket gets the shop's next number, and its status follows its least advanced garment.
+// Tickets: each shop sees only its own; an apprentice sees work given to them or to nobody yet,
+// without the customer's contact details; a ticket gets the shop's next number, and its status
+// follows its least advanced garment.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import type { Shop } from './fixtures';
 import { eq } from 'drizzle-orm';
@@ -10,7 +11,7 @@ const { db, handle } = await import('@/db');
 const { tickets, auditEvents } = await import('@/db/schema');
 const { createTicket, getTicket, listTickets, moveTicket } = await import('@/services/tickets');
 const { nextStep } = await import('@/lib/garment-steps');
-const { garmentsOfTicket, moveGarment } = await import('@/services/garments');
+const { addGarment, garmentsOfTicket, getGarment, moveGarment, updateGarment } = await import('@/services/garments');
 const { createCustomer } = await import('@/services/customers');
 const { ServiceError } = await import('@/services/errors');
 const { makeShop } = await import('./fixtures');
@@ -66,16 +67,47 @@ describe('tickets', () => {
     await expect(createTicket(a.counter, { garments: [{ description: 'x', assigneeId: b.tailor.userId }] })).rejects.toMatchObject({ status: 422 });
   });
 
-  it('show an apprentice only tickets assigned to them or to nobody', async () => {
-    const open = await createTicket(a.lead, { note: 'unassigned' });
-    const theirs = await createTicket(a.lead, { note: 'for the apprentice' });
-    const tailors = await createTicket(a.lead, { note: 'for the tailor' });
-    await db.update(tickets).set({ assigneeId: a.apprentice.userId }).where(eq(tickets.id, theirs.id));
-    await db.update(tickets).set({ assigneeId: a.tailor.userId }).where(eq(tickets.id, tailors.id));
+  it('show an apprentice only tickets whose work is given to them, or to nobody yet', async () => {
+    const open = await createTicket(a.lead, { note: 'unassigned', garments: [{ description: 'open' }] });
+    const theirs = await createTicket(a.lead, { note: 'for the apprentice', garments: [{ description: 'x', assigneeId: a.apprentice.userId }] });
+    const tailors = await createTicket(a.lead, { note: 'for the tailor', garments: [{ description: 'y', assigneeId: a.tailor.userId }] });
+    // Split work: the ticket stands under the first garment's person, and the apprentice still sees
+    // it, with only the garments the queue shows them (theirs, nobody's).
+    const split = await createTicket(a.lead, { garments: [{ description: 'p', assigneeId: a.tailor.userId }, { description: 'q', assigneeId: a.apprentice.userId }] });
+    const partOpen = await createTicket(a.lead, { garments: [{ description: 'r', assigneeId: a.tailor.userId }, { description: 's' }] });
+    expect([theirs.assigneeId, tailors.assigneeId, split.assigneeId, open.assigneeId]).toEqual([a.apprentice.userId, a.tailor.userId, a.tailor.userId, null]);
     const seen = (await listTickets(a.apprentice)).map((t) => t.id);
-    expect(seen).toEqual(expect.arrayContaining([open.id, theirs.id]));
+    expect(seen).toEqual(expect.arrayContaining([open.id, theirs.id, split.id, partOpen.id]));
     expect(seen).not.toContain(tailors.id);
-    expect((await listTickets(a.tailor)).map((t) => t.id)).toContain(tailors.id);
+    await expect(getTicket(a.apprentice, tailors.id)).rejects.toMatchObject({ status: 404 });
+    expect((await getTicket(a.apprentice, split.id)).garments.map((g) => g.description)).toEqual(['q']);
+    expect((await getTicket(a.apprentice, partOpen.id)).garments.map((g) => g.description)).toEqual(['s']);
+    expect((await listTickets(a.tailor)).map((t) => t.id)).toEqual(expect.arrayContaining([open.id, theirs.id, tailors.id, split.id]));
+  });
+
+  it("follow a garment given to someone else: the ticket's assignee and the apprentice's view change with it", async () => {
+    const t = await createTicket(a.lead, { garments: [{ description: 'moving work', assigneeId: a.tailor.userId }] });
+    const [g] = await garmentsOfTicket(a.shopId, t.id);
+    expect((await listTickets(a.apprentice)).map((x) => x.id)).not.toContain(t.id);
+    await updateGarment(a.lead, g!.id, { assigneeId: a.apprentice.userId });
+    expect((await db.select().from(tickets).where(eq(tickets.id, t.id)))[0]!.assigneeId).toBe(a.apprentice.userId);
+    expect((await listTickets(a.apprentice)).map((x) => x.id)).toContain(t.id);
+    // A garment added later and given to the tailor does not take the ticket from the apprentice.
+    await addGarment(a.lead, t.id, { description: 'second pair', assigneeId: a.tailor.userId });
+    expect((await listTickets(a.apprentice)).map((x) => x.id)).toContain(t.id);
+  });
+
+  it("show the customer's e-mail, phone and notes only to roles that may read customers", async () => {
+    const contact = { name: 'Contact Person', phone: '555-0199', email: 'contact-person@example.com', notes: 'Prefers a full break' };
+    const t = await createTicket(a.counter, { customer: contact, garments: [{ description: 'z', assigneeId: a.apprentice.userId }] });
+    const [g] = await garmentsOfTicket(a.shopId, t.id);
+    const forApprentice = await getTicket(a.apprentice, t.id);
+    expect(forApprentice.customer).toEqual({ id: expect.any(String), name: 'Contact Person' });
+    expect((await getGarment(a.apprentice, g!.id)).customer).toEqual({ id: expect.any(String), name: 'Contact Person' });
+    for (const who of [a.lead, a.tailor, a.counter]) {
+      expect((await getTicket(who, t.id)).customer).toMatchObject(contact);
+      expect((await getGarment(who, g!.id)).customer).toMatchObject(contact);
+    }
   });
 
   it('stand at the step of their least advanced garment', async () => {
