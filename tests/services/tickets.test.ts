@@ -93,7 +93,7 @@ describe('tickets', () => {
     expect((await db.select().from(tickets).where(eq(tickets.id, t.id)))[0]!.assigneeId).toBe(a.apprentice.userId);
     expect((await listTickets(a.apprentice)).map((x) => x.id)).toContain(t.id);
     // A garment added later and given to the tailor does not take the ticket from the apprentice.
-    await addGarment(a.lead, t.id, { description: 'second pair', assigneeId: a.tailor.userId });
+    await addGarment(a.lead, t.id, { description: 'second pair', dueOn: null, assigneeId: a.tailor.userId });
     expect((await listTickets(a.apprentice)).map((x) => x.id)).toContain(t.id);
   });
 
