@@ -34,8 +34,8 @@ interface Fallback {
 }
 
 /**
- * The faces tried, in this order, for a character Inter lacks. Regular and bold where the face is
- * small (800 resolves to 700); the CJK faces in regular only. Noto Sans SC covers every Han character of GB 2312
+ * The faces tried, in this order, for a character Inter lacks, each in regular and bold (800
+ * resolves to 700, so bold names stay bold). Noto Sans SC covers every Han character of GB 2312
  * and of JIS X 0208 and the kana, so Chinese and Japanese names (Japanese with Chinese letterforms
  * for a few kanji); it has no Hangul. Noto Sans KR (all 11,172 Hangul syllables) comes last, after
  * SC so Chinese and Japanese text keeps SC's forms; at 6 MB a weight it is read only for Hangul.
@@ -44,8 +44,8 @@ const FALLBACKS: readonly Fallback[] = [
   { family: 'Noto Sans Arabic', pkg: '@expo-google-fonts/noto-sans-arabic', weights: [[400, '400Regular/NotoSansArabic_400Regular.ttf'], [700, '700Bold/NotoSansArabic_700Bold.ttf']] },
   { family: 'Noto Sans Hebrew', pkg: '@expo-google-fonts/noto-sans-hebrew', weights: [[400, '400Regular/NotoSansHebrew_400Regular.ttf'], [700, '700Bold/NotoSansHebrew_700Bold.ttf']] },
   { family: 'Noto Sans Devanagari', pkg: '@expo-google-fonts/noto-sans-devanagari', weights: [[400, '400Regular/NotoSansDevanagari_400Regular.ttf'], [700, '700Bold/NotoSansDevanagari_700Bold.ttf']] },
-  { family: 'Noto Sans SC', pkg: '@expo-google-fonts/noto-sans-sc', weights: [[400, '400Regular/NotoSansSC_400Regular.ttf']] },
-  { family: 'Noto Sans KR', pkg: '@expo-google-fonts/noto-sans-kr', weights: [[400, '400Regular/NotoSansKR_400Regular.ttf']], only: /\p{Script=Hangul}/u },
+  { family: 'Noto Sans SC', pkg: '@expo-google-fonts/noto-sans-sc', weights: [[400, '400Regular/NotoSansSC_400Regular.ttf'], [700, '700Bold/NotoSansSC_700Bold.ttf']] },
+  { family: 'Noto Sans KR', pkg: '@expo-google-fonts/noto-sans-kr', weights: [[400, '400Regular/NotoSansKR_400Regular.ttf'], [700, '700Bold/NotoSansKR_700Bold.ttf']], only: /\p{Script=Hangul}/u },
 ];
 
 interface Face extends Shaper {

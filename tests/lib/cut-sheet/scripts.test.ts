@@ -176,6 +176,29 @@ describe('a character no shipped face has', () => {
   });
 });
 
+describe('a CJK name set in bold', () => {
+  // The slip sets the customer's name at 700 and the shop's at 800, the sheet its title (the shop)
+  // at 800: each prints in the face's bold, not its regular beside a bold Inter.
+  const cases = [
+    ['Chinese', '林雨桐', 'NotoSansSC-Bold'],
+    ['Korean', '하솔빈', 'NotoSansKR-Bold'],
+  ] as const;
+  const docs = [
+    ['claim slip (customer, 700)', (name: string) => renderClaimSlip({ ...SLIP, customerName: name })],
+    ['claim slip (shop, 800)', (name: string) => renderClaimSlip({ ...SLIP, shopName: name })],
+    ['cut sheet (shop, 800)', (name: string) => renderCutSheet(sheet([cuffInch], { shop: name, assignee: null, garment: null }))],
+  ] as const;
+  const rows = cases.flatMap(([script, name, bold]) => docs.map(([doc, render]) => [script, doc, name, bold, render] as const));
+  it.each(rows)('draws the %s name on the %s in the bold face', async (_script, _doc, name, bold, render) => {
+    const fonts = embeddedFonts(await render(name));
+    const face = fonts.find((f) => f.name === bold);
+    expect(face, `${bold} embedded`).toBeDefined();
+    for (const ch of name) expect(face!.chars.has(ch.codePointAt(0)!), `${ch} in ${bold}`).toBe(true);
+    // The name appears only in bold, so the regular face has nothing to draw.
+    expect(fonts.map((f) => f.name)).not.toContain(bold.replace('-Bold', '-Regular'));
+  });
+});
+
 describe('a Latin-only document', () => {
   it('embeds Inter and no other font, on the slip and on the sheet', async () => {
     for (const pdf of [await renderClaimSlip(SLIP), await renderCutSheet(sheet([cuffInch]))]) {
