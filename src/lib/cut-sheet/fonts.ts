@@ -1,9 +1,9 @@
 // Inter, read from the installed package at run time and embedded in every PDF: no network.
 // TTF, not WOFF2 (react-pdf cannot read WOFF2), and the full glyph set (⅓, –, ×). Three weights:
 // each one more is embedded (subset) again in every PDF. Inter also has Latin Extended, Greek and
-// Cyrillic; names in scripts it lacks (Arabic, Hebrew, Devanagari, Chinese and Japanese) take a
-// Noto face after Inter in the document's font stack, loaded and embedded only for a document
-// that holds such a character, so a Latin-only document is made exactly as before.
+// Cyrillic; names in scripts it lacks (Arabic, Hebrew, Devanagari, Chinese, Japanese and Korean)
+// take a Noto face after Inter in the document's font stack, loaded and embedded only for a
+// document that holds such a character, so a Latin-only document is made exactly as before.
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { Font } from '@react-pdf/renderer';
@@ -24,17 +24,28 @@ const WEIGHTS: Weights = [
   [800, '800ExtraBold/Inter_800ExtraBold.ttf'],
 ];
 
+interface Fallback {
+  family: string;
+  pkg: string;
+  /** Regular first: it alone is read to learn which characters the face has. */
+  weights: Weights;
+  /** Read only for a document with a character of this pattern (else for any Inter lacks). */
+  only?: RegExp;
+}
+
 /**
- * The faces tried, in this order, for a character Inter lacks. Regular and bold where the face is
- * small (800 resolves to 700); the CJK face is 10 MB a weight, so one weight serves all. Noto Sans
- * SC covers every Han character of GB 2312 and of JIS X 0208 and the kana, so Chinese and Japanese
- * names (Japanese with Chinese letterforms for a few kanji); it has no Hangul.
+ * The faces tried, in this order, for a character Inter lacks, each in regular and bold (800
+ * resolves to 700, so bold names stay bold). Noto Sans SC covers every Han character of GB 2312
+ * and of JIS X 0208 and the kana, so Chinese and Japanese names (Japanese with Chinese letterforms
+ * for a few kanji); it has no Hangul. Noto Sans KR (all 11,172 Hangul syllables) comes last, after
+ * SC so Chinese and Japanese text keeps SC's forms; at 6 MB a weight it is read only for Hangul.
  */
-const FALLBACKS: readonly { family: string; pkg: string; weights: Weights }[] = [
+const FALLBACKS: readonly Fallback[] = [
   { family: 'Noto Sans Arabic', pkg: '@expo-google-fonts/noto-sans-arabic', weights: [[400, '400Regular/NotoSansArabic_400Regular.ttf'], [700, '700Bold/NotoSansArabic_700Bold.ttf']] },
   { family: 'Noto Sans Hebrew', pkg: '@expo-google-fonts/noto-sans-hebrew', weights: [[400, '400Regular/NotoSansHebrew_400Regular.ttf'], [700, '700Bold/NotoSansHebrew_700Bold.ttf']] },
   { family: 'Noto Sans Devanagari', pkg: '@expo-google-fonts/noto-sans-devanagari', weights: [[400, '400Regular/NotoSansDevanagari_400Regular.ttf'], [700, '700Bold/NotoSansDevanagari_700Bold.ttf']] },
-  { family: 'Noto Sans SC', pkg: '@expo-google-fonts/noto-sans-sc', weights: [[400, '400Regular/NotoSansSC_400Regular.ttf']] },
+  { family: 'Noto Sans SC', pkg: '@expo-google-fonts/noto-sans-sc', weights: [[400, '400Regular/NotoSansSC_400Regular.ttf'], [700, '700Bold/NotoSansSC_700Bold.ttf']] },
+  { family: 'Noto Sans KR', pkg: '@expo-google-fonts/noto-sans-kr', weights: [[400, '400Regular/NotoSansKR_400Regular.ttf'], [700, '700Bold/NotoSansKR_700Bold.ttf']], only: /\p{Script=Hangul}/u },
 ];
 
 interface Face extends Shaper {
@@ -42,7 +53,7 @@ interface Face extends Shaper {
 }
 
 let ready: Promise<void> | null = null;
-let fallbacksReady: Promise<Face[][]> | null = null;
+const fallbackFaces = new Map<string, Promise<Face>>();
 let inter: Face | null = null;
 
 const require = createRequire(import.meta.url);
@@ -80,26 +91,24 @@ async function loadFace(fontFamily: string, fontWeight: number): Promise<Face> {
   return source.data as unknown as Face;
 }
 
-// Loaded on the first document that needs one: together about 12 MB read once per process.
-function loadFallbacks(): Promise<Face[][]> {
-  fallbacksReady ??= Promise.all(
-    FALLBACKS.map((f) =>
-      Promise.all(
-        f.weights.map(async ([fontWeight]) => {
-          const face = await loadFace(f.family, fontWeight);
-          // The sheet's feature settings turn off what these scripts need (required ligatures,
-          // contextual forms, mark positioning): they shape with their script's defaults. Only
-          // characters Inter lacks reach them, so the sheet's tabular digits are untouched.
-          const layout = face.layout.bind(face);
-          face.layout = (text, _features, ...rest) => layout(text, undefined, ...rest);
-          memoiseShaping(face);
-          memoiseFace(face as unknown as Parameters<typeof memoiseFace>[0]);
-          return face;
-        }),
-      ),
-    ),
-  );
-  return fallbacksReady;
+// Each read on the first document that needs it, once per process (SC about 10 MB a weight, KR 6 MB).
+function fallbackFace(f: Fallback, fontWeight: number): Promise<Face> {
+  const key = `${f.family}:${fontWeight}`;
+  let face = fallbackFaces.get(key);
+  if (!face) {
+    face = loadFace(f.family, fontWeight).then((face) => {
+      // The sheet's feature settings turn off what these scripts need (required ligatures,
+      // contextual forms, mark positioning): they shape with their script's defaults. Only
+      // characters Inter lacks reach them, so the sheet's tabular digits are untouched.
+      const layout = face.layout.bind(face);
+      face.layout = (text, _features, ...rest) => layout(text, undefined, ...rest);
+      memoiseShaping(face);
+      memoiseFace(face as unknown as Parameters<typeof memoiseFace>[0]);
+      return face;
+    });
+    fallbackFaces.set(key, face);
+  }
+  return face;
 }
 
 /** Every string inside a value (a document's data). */
@@ -112,7 +121,7 @@ export function stringsIn(value: unknown, into: string[] = []): string[] {
 
 // Printable ASCII and Latin-1: every character of it is in Inter, so most text is passed at a glance.
 const PLAIN = /^[\x20-\x7e\u00a0-\u00ff]*$/;
-// Drawn for a character no shipped face has (Hangul, emoji): Inter's white square, embedded like
+// Drawn for a character no shipped face has (an emoji): Inter's white square, embedded like
 // the rest, where react-pdf would have fallen back to an unembedded Helvetica with no such glyph.
 const NO_GLYPH = '\u25a1';
 const IGNORABLE = /^\p{Default_Ignorable_Code_Point}$/u;
@@ -155,9 +164,14 @@ export async function typeset(data: unknown): Promise<Typeset> {
     }
   }
   if (missing.size === 0) return { family: FAMILY, print: same };
-  const faces = await loadFallbacks();
-  const has = (cp: number) => faces.some((f) => f[0]!.hasGlyphForCodePoint(cp));
-  const used = FALLBACKS.filter((_, i) => [...missing].some((cp) => faces[i]![0]!.hasGlyphForCodePoint(cp)));
+  const chars = [...missing].map((cp) => String.fromCodePoint(cp));
+  const tried = FALLBACKS.filter((f) => !f.only || chars.some((ch) => f.only!.test(ch)));
+  const faces = await Promise.all(tried.map((f) => fallbackFace(f, f.weights[0]![0])));
+  const has = (cp: number) => faces.some((f) => f.hasGlyphForCodePoint(cp));
+  const used = tried.filter((_, i) => [...missing].some((cp) => faces[i]!.hasGlyphForCodePoint(cp)));
+  // react-pdf loads every weight of a family in the list that the document sets; loaded here
+  // first, they shape with the script's own features like the regular.
+  await Promise.all(used.flatMap((f) => f.weights.slice(1).map(([fontWeight]) => fallbackFace(f, fontWeight))));
   const family = used.length === 0 ? FAMILY : [FAMILY, ...used.map((f) => f.family)];
   const none = new Set([...missing].filter((cp) => !has(cp)));
   if (none.size === 0) return { family, print: same };

@@ -20,6 +20,7 @@ const NAMES = [
   ['Cyrillic', 'Зоя Веретенникова'],
   ['Japanese', '森川 ゆかり'],
   ['Chinese', '林雨桐'],
+  ['Korean', '하솔빈'],
   ['Arabic', 'سلامة النجار'],
   ['Hebrew', 'תמר אלון'],
   ['Devanagari', 'कविता मेहरा'],
@@ -162,16 +163,39 @@ describe('right-to-left names', () => {
 });
 
 describe('a character no shipped face has', () => {
-  // Hangul (the one CJK face is Chinese and Japanese) and an emoji: a white square from Inter,
-  // embedded, rather than an unembedded Helvetica that has no such glyph either.
-  const name = '한서윤 🧵 Ahn';
+  // An emoji (no shipped face has one): a white square from Inter, embedded, rather than an
+  // unembedded Helvetica that has no such glyph either.
+  const name = '🧵 Ahn 🪡';
   it.each([
     ['claim slip', () => renderClaimSlip({ ...SLIP, customerName: name })],
     ['cut sheet', () => renderCutSheet(sheet([cuffInch], { assignee: name }))],
   ])('prints as a white square on the %s, in embedded fonts only', async (_doc, render) => {
     const pdf = await render();
-    expectPrinted(pdf, '□□□ □ Ahn');
+    expectPrinted(pdf, '□ Ahn □');
     expect(embeddedFonts(pdf).every((f) => f.name.startsWith('Inter-'))).toBe(true);
+  });
+});
+
+describe('a CJK name set in bold', () => {
+  // The slip sets the customer's name at 700 and the shop's at 800, the sheet its title (the shop)
+  // at 800: each prints in the face's bold, not its regular beside a bold Inter.
+  const cases = [
+    ['Chinese', '林雨桐', 'NotoSansSC-Bold'],
+    ['Korean', '하솔빈', 'NotoSansKR-Bold'],
+  ] as const;
+  const docs = [
+    ['claim slip (customer, 700)', (name: string) => renderClaimSlip({ ...SLIP, customerName: name })],
+    ['claim slip (shop, 800)', (name: string) => renderClaimSlip({ ...SLIP, shopName: name })],
+    ['cut sheet (shop, 800)', (name: string) => renderCutSheet(sheet([cuffInch], { shop: name, assignee: null, garment: null }))],
+  ] as const;
+  const rows = cases.flatMap(([script, name, bold]) => docs.map(([doc, render]) => [script, doc, name, bold, render] as const));
+  it.each(rows)('draws the %s name on the %s in the bold face', async (_script, _doc, name, bold, render) => {
+    const fonts = embeddedFonts(await render(name));
+    const face = fonts.find((f) => f.name === bold);
+    expect(face, `${bold} embedded`).toBeDefined();
+    for (const ch of name) expect(face!.chars.has(ch.codePointAt(0)!), `${ch} in ${bold}`).toBe(true);
+    // The name appears only in bold, so the regular face has nothing to draw.
+    expect(fonts.map((f) => f.name)).not.toContain(bold.replace('-Bold', '-Regular'));
   });
 });
 
