@@ -5,6 +5,7 @@ import { drizzleAdapter } from 'better-auth/adapters/drizzle';
 import { BETTER_AUTH_SECRET, BETTER_AUTH_URL, DATA_DIR } from 'astro:env/server';
 import { db } from '@/db';
 import * as authSchema from '@/db/schema/auth';
+import { appAuthHooks } from './auth-hooks';
 import { shopPlugin } from './auth-plugins';
 import { authSecret } from './auth-secret';
 import { sendMail } from './mail';
@@ -33,6 +34,7 @@ export const auth = betterAuth({
   // limiter keys on a client IP header that a loopback deployment never sends.
   rateLimit: { enabled: false },
   plugins: [
+    appAuthHooks(),
     shopPlugin({
       sendInvitation: async ({ id, email, role, shopId, shopName, inviterName }) =>
         sendMail({

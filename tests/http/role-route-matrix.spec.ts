@@ -613,6 +613,52 @@ describe('role × route matrix', () => {
     });
   }
 
+  // better-auth's organization plugin answers under /api/auth/organization/*. The app manages
+  // staff through its own routes (lead-only /api/staff); better-auth's would give any member the
+  // staff list with e-mails, or let them act on the shop. Closed to every caller over HTTP.
+  const ORG_ENDPOINTS: [Method, string, unknown?][] = [
+    ['GET', 'get-full-organization'],
+    ['GET', 'list-members'],
+    ['GET', 'list-invitations'],
+    ['GET', 'list'],
+    ['GET', 'get-active-member'],
+    ['GET', 'get-active-member-role'],
+    ['GET', 'list-user-invitations'],
+    ['GET', 'get-invitation?id=x'],
+    ['POST', 'set-active', { organizationId: null }],
+    ['POST', 'has-permission', { permissions: { staff: ['read'] } }],
+    ['POST', 'check-slug', { slug: 'pinmark-hem' }],
+    ['POST', 'invite-member', { email: 'matrix-org@example.com', role: 'lead' }],
+    ['POST', 'update-member-role', { memberId: 'x', role: 'lead' }],
+    ['POST', 'remove-member', { memberIdOrEmail: DEMO.counter }],
+    ['POST', 'cancel-invitation', { invitationId: 'x' }],
+    ['POST', 'accept-invitation', { invitationId: 'x' }],
+    ['POST', 'reject-invitation', { invitationId: 'x' }],
+    ['POST', 'leave', { organizationId: 'x' }],
+    ['POST', 'update', { data: { name: 'Renamed by matrix' } }],
+    ['POST', 'delete', { organizationId: 'x' }],
+    ['POST', 'create', { name: 'Matrix Org', slug: 'matrix-org' }],
+  ];
+  for (const [method, endpoint, body] of ORG_ENDPOINTS) {
+    for (const actor of ACTORS) {
+      it(`${method} /api/auth/organization/${endpoint} as ${actor} → 404`, async () => {
+        const answer = await call(method, `/api/auth/organization/${endpoint}`, { cookie: cookies[actor], body });
+        expect(answer.status, JSON.stringify(answer.body)).toBe(404);
+        const text = JSON.stringify(answer.body);
+        for (const marker of [...markersOfA, ...markersOfB]) expect(text.includes(marker), `${marker} leaked`).toBe(false);
+        expect(typeof answer.body.error).toBe('string');
+      });
+    }
+  }
+
+  it("better-auth's organization endpoints change nothing: shop A keeps its name, members and roles", async () => {
+    const me = await call('GET', '/api/me', { cookie: cookies.lead });
+    expect(me.body.shop.id).toBe(shopA);
+    expect(me.body.shop.name).not.toBe('Renamed by matrix');
+    const staff = await call('GET', '/api/staff', { cookie: cookies.lead });
+    expect(staff.body.members.find((m: { email: string }) => m.email === DEMO.counter)?.role).toBe('counter');
+  });
+
   it('better-auth /api/auth/* knows each caller: no session signed out, the right person signed in', async () => {
     expect((await call('GET', '/api/auth/get-session')).body).toBeNull();
     for (const role of ['lead', 'tailor', 'apprentice', 'counter'] as const) {
