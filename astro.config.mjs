@@ -3,6 +3,22 @@ import { defineConfig, envField } from 'astro/config';
 import node from '@astrojs/node';
 import react from '@astrojs/react';
 import tailwindcss from '@tailwindcss/vite';
+import { fileURLToPath } from 'node:url';
+
+/** In the browser, `zod` resolves to src/lib/zod-jitless.ts (zod configured not to probe eval,
+ * which the CSP forbids); the server keeps zod's faster compiled parsers. */
+function zodJitlessInBrowser() {
+  const shim = fileURLToPath(new URL('./src/lib/zod-jitless.ts', import.meta.url));
+  return {
+    name: 'cuffwright:zod-jitless-in-browser',
+    enforce: /** @type {const} */ ('pre'),
+    /** @param {string} id @param {string | undefined} importer @param {{ ssr?: boolean }} [options] */
+    resolveId(id, importer, options) {
+      if (id !== 'zod' || options?.ssr || importer === shim) return null;
+      return shim;
+    },
+  };
+}
 
 export default defineConfig({
   output: 'server',
@@ -48,7 +64,7 @@ export default defineConfig({
     },
   },
   vite: {
-    plugins: [tailwindcss()],
+    plugins: [tailwindcss(), zodJitlessInBrowser()],
     // Heavy server-only libraries are never bundled for the browser.
     ssr: { external: ['@electric-sql/pglite'] },
   },

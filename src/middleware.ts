@@ -1,11 +1,13 @@
 // Every request: the database is ready, cross-site writes are refused, the session is resolved
 // into Astro.locals, and pages other than the public ones send signed-out visitors to sign-in.
+// Every answer, refusals and redirects included, leaves with the security headers.
 import type { MiddlewareHandler } from 'astro';
 import { defineMiddleware } from 'astro:middleware';
 import { BETTER_AUTH_URL } from 'astro:env/server';
 import { auth } from '@/lib/auth';
 import { memberRequestStarted } from '@/lib/member-activity';
 import { activeMembership } from '@/services/members';
+import { withSecurityHeaders } from '@/lib/security-headers';
 import { ensureStarted } from '@/services/startup';
 
 const PUBLIC_PAGES = ['/', '/sign-in', '/sign-up', '/forgot', '/reset', '/paid'];
@@ -28,17 +30,20 @@ function crossSite(request: Request, selfOrigin: string): boolean {
   return /better-auth\./.test(request.headers.get('cookie') ?? '') || request.headers.get('sec-fetch-site') === 'cross-site';
 }
 
-/** The one middleware; a member's request is marked in flight so anonymous renders wait for it. */
+/** The one middleware; a member's request is marked in flight so anonymous renders wait for it.
+ * Every answer leaves with the security headers; only `astro dev` (mode "development") goes
+ * without the CSP: Vite inlines scripts of its own there (the tests' build runs under
+ * NODE_ENV=test, so DEV is no guide). */
 export const onRequest = defineMiddleware(async (context, next) => {
   const done = memberRequestStarted(context.request);
   try {
-    return await answer(context, next, done);
+    return withSecurityHeaders(await answer(context, next, done), { csp: import.meta.env.MODE !== 'development' });
   } finally {
     done();
   }
 });
 
-async function answer(context: Parameters<MiddlewareHandler>[0], next: Parameters<MiddlewareHandler>[1], notMember: () => void) {
+async function answer(context: Parameters<MiddlewareHandler>[0], next: Parameters<MiddlewareHandler>[1], notMember: () => void): Promise<Response> {
   await ensureStarted();
   const { request, url, locals } = context;
   if (crossSite(request, url.origin)) {
