@@ -37,7 +37,8 @@ export default defineConfig({
       // postgres://… switches from the embedded PGlite in DATA_DIR to a PostgreSQL server.
       DATABASE_URL: envField.string({ context: 'server', access: 'secret', optional: true }),
       BETTER_AUTH_URL: envField.string({ context: 'server', access: 'secret', default: 'http://localhost:4321' }),
-      // Without it a random secret is kept in DATA_DIR/auth-secret (fine for one machine).
+      // Without it a random secret is kept in DATA_DIR/auth-secret (fine for one machine); required
+      // with DATABASE_URL (src/lib/deployment.ts).
       BETTER_AUTH_SECRET: envField.string({ context: 'server', access: 'secret', optional: true }),
       SMTP_HOST: envField.string({ context: 'server', access: 'secret', default: '127.0.0.1' }),
       SMTP_PORT: envField.number({ context: 'server', access: 'secret', default: 1025 }),
@@ -45,8 +46,9 @@ export default defineConfig({
       SMTP_USER: envField.string({ context: 'server', access: 'secret', optional: true }),
       SMTP_PASS: envField.string({ context: 'server', access: 'secret', optional: true }),
       MAIL_FROM: envField.string({ context: 'server', access: 'secret', default: 'Cuffwright <no-reply@cuffwright.test>' }),
-      // On the first start of an empty database, add the invented demo shop.
-      DEMO_SEED: envField.boolean({ context: 'server', access: 'secret', default: true }),
+      // The invented demo shop on the first start of an empty database: 'on' or 'off'; unset, it is
+      // on for the embedded database only (never on a PostgreSQL server unless asked).
+      DEMO_DATA: envField.enum({ context: 'server', access: 'secret', values: ['on', 'off'], optional: true }),
       // Set by npm start / npm run dev / the tests: the folder the local capture writes; enables /outbox.
       MAIL_CAPTURE_DIR: envField.string({ context: 'server', access: 'secret', optional: true }),
       // Largest fitting photo accepted, in bytes (10 MB: a phone's full-size photo fits).

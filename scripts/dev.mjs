@@ -4,15 +4,20 @@ import { spawn } from 'node:child_process';
 import { env, useCapture, captureDir } from './env.mjs';
 import { startMailCapture } from './mail-capture.mjs';
 import { startLocalPayments } from './payments-fake.mjs';
+import { listenOrExplain } from './port-taken.mjs';
 
 const devEnv = { ...process.env, BETTER_AUTH_URL: env.BETTER_AUTH_URL || `http://localhost:${env.PORT}` };
 if (useCapture) {
-  const { port } = await startMailCapture({ dir: captureDir, port: env.SMTP_PORT });
+  const { port } = await listenOrExplain(startMailCapture({ dir: captureDir, port: env.SMTP_PORT }), { port: env.SMTP_PORT, what: 'mail capture', setting: 'SMTP_PORT' });
   Object.assign(devEnv, { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(port), MAIL_CAPTURE_DIR: captureDir });
   console.log(`Mail capture on smtp://127.0.0.1:${port}: a shop's lead reads what the shop sent at /sent-messages`);
 }
 if (!process.env.PAYMENTS_API_KEY) {
-  const payments = await startLocalPayments({ appUrl: `http://127.0.0.1:${env.PORT}`, port: Number(process.env.PAYMENTS_FAKE_PORT || 12111) });
+  const payments = await listenOrExplain(startLocalPayments({ appUrl: `http://127.0.0.1:${env.PORT}`, port: env.PAYMENTS_FAKE_PORT }), {
+    port: env.PAYMENTS_FAKE_PORT,
+    what: 'local payment fake',
+    setting: 'PAYMENTS_FAKE_PORT',
+  });
   Object.assign(devEnv, payments.env);
   console.log(`Local payment service (no real money) on ${payments.base}`);
 }

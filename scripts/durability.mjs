@@ -5,6 +5,7 @@
 import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
+import { randomBytes } from 'node:crypto';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { buildIfNeeded } from './build-if-needed.mjs';
@@ -25,9 +26,13 @@ const base = `http://localhost:${port}`;
 const dataDir = mkdtempSync(join(tmpdir(), 'cuffwright-durability-'));
 const sleep = (ms) => new Promise((r) => setTimeout(r, ms));
 
+// The writers sign in as a demo account (asked for: off by default on PostgreSQL, which also needs
+// a session secret from the environment, the same across restarts).
+const secret = process.env.BETTER_AUTH_SECRET || randomBytes(32).toString('base64url');
+
 function startServer() {
   return spawn('node', [`${outDir}/server/entry.mjs`], {
-    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir, BETTER_AUTH_URL: base, SMTP_PORT: '9' },
+    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir, BETTER_AUTH_URL: base, SMTP_PORT: '9', DEMO_DATA: 'on', BETTER_AUTH_SECRET: secret },
     stdio: ['ignore', 'ignore', 'inherit'],
   });
 }

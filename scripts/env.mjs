@@ -12,6 +12,8 @@ const schema = z.object({
   SMTP_PORT: z.coerce.number().int().positive().default(1025),
   MAIL_CAPTURE_DIR: z.string().optional(),
   BETTER_AUTH_URL: z.url().optional(),
+  BETTER_AUTH_SECRET: z.string().optional(),
+  PAYMENTS_FAKE_PORT: z.coerce.number().int().positive().default(12111),
 });
 
 /** The parsed script environment. */
@@ -19,6 +21,15 @@ export const env = schema.parse(process.env);
 
 /** True when mail should go to the local capture (no real SMTP host configured). */
 export const useCapture = !env.SMTP_HOST || env.SMTP_HOST === '127.0.0.1' || env.SMTP_HOST === 'localhost';
+
+/** One line saying what to set when the server must not start (src/lib/deployment.ts has the
+ * server's copy of this rule): a shared database needs a session secret from the environment. */
+export function settingsProblem(e = env) {
+  if (e.DATABASE_URL && (e.BETTER_AUTH_SECRET ?? '').length < 32) {
+    return 'Cuffwright will not start: with DATABASE_URL set, set BETTER_AUTH_SECRET to the same random value of 32+ characters on every server (e.g. openssl rand -base64 32).';
+  }
+  return null;
+}
 
 /** The folder the local capture writes and the sent-messages page reads. */
 export const captureDir = env.MAIL_CAPTURE_DIR || join(env.DATA_DIR, 'mail');

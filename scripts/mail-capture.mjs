@@ -7,6 +7,7 @@ import { mkdirSync, writeFileSync, renameSync } from 'node:fs';
 import { join } from 'node:path';
 import { randomUUID } from 'node:crypto';
 import { fileURLToPath } from 'node:url';
+import { listenOrExplain } from './port-taken.mjs';
 
 /** Starts the capture on host:port (port 0 = any free one); resolves with the port and a closer. */
 export function startMailCapture({ dir, port = 1025, host = '127.0.0.1', quiet = false }) {
@@ -43,6 +44,7 @@ export function startMailCapture({ dir, port = 1025, host = '127.0.0.1', quiet =
 
 if (process.argv[1] === fileURLToPath(import.meta.url)) {
   const dir = process.env.MAIL_CAPTURE_DIR || join(process.env.DATA_DIR || './data', 'mail');
-  const { port } = await startMailCapture({ dir, port: Number(process.env.SMTP_PORT || 1025) });
+  const wanted = Number(process.env.SMTP_PORT || 1025);
+  const { port } = await listenOrExplain(startMailCapture({ dir, port: wanted }), { port: wanted, what: 'mail capture', setting: 'SMTP_PORT' });
   console.log(`Mail capture on smtp://127.0.0.1:${port}, saving to ${dir}`);
 }

@@ -6,6 +6,7 @@ import { createServer } from 'node:http';
 import { randomBytes } from 'node:crypto';
 import { fileURLToPath } from 'node:url';
 import Stripe from 'stripe';
+import { listenOrExplain } from './port-taken.mjs';
 
 const signer = new Stripe('sk_test_signing_only', { telemetry: false });
 
@@ -203,11 +204,15 @@ export async function startLocalPayments({ appUrl, port = 12111, quiet = false }
 }
 
 if (process.argv[1] === fileURLToPath(import.meta.url)) {
-  const { base } = await startPaymentsFake({
-    port: Number(process.env.PAYMENTS_FAKE_PORT || 12111),
-    apiKey: process.env.PAYMENTS_API_KEY || 'sk_test_cuffwright_local',
-    webhookSecret: process.env.PAYMENTS_WEBHOOK_SECRET || 'whsec_cuffwright_local',
-    webhookUrl: process.env.PAYMENTS_WEBHOOK_URL || 'http://localhost:4321/api/payments/webhook',
-  });
+  const port = Number(process.env.PAYMENTS_FAKE_PORT || 12111);
+  const { base } = await listenOrExplain(
+    startPaymentsFake({
+      port,
+      apiKey: process.env.PAYMENTS_API_KEY || 'sk_test_cuffwright_local',
+      webhookSecret: process.env.PAYMENTS_WEBHOOK_SECRET || 'whsec_cuffwright_local',
+      webhookUrl: process.env.PAYMENTS_WEBHOOK_URL || 'http://localhost:4321/api/payments/webhook',
+    }),
+    { port, what: 'local payment fake', setting: 'PAYMENTS_FAKE_PORT' },
+  );
   console.log(`Local payment service on ${base}`);
 }

@@ -2,19 +2,23 @@
 // invitations by e-mail, shops as organisations with the four roles.
 import { betterAuth } from 'better-auth';
 import { drizzleAdapter } from 'better-auth/adapters/drizzle';
-import { BETTER_AUTH_SECRET, BETTER_AUTH_URL, DATA_DIR } from 'astro:env/server';
+import { BETTER_AUTH_SECRET, BETTER_AUTH_URL, DATABASE_URL, DATA_DIR } from 'astro:env/server';
 import { db } from '@/db';
 import * as authSchema from '@/db/schema/auth';
 import { appAuthHooks } from './auth-hooks';
 import { shopPlugin } from './auth-plugins';
 import { authSecret } from './auth-secret';
+import { refuseUnsafeStart } from './deployment';
 import { sendMail } from './mail';
 import { ROLE_LABELS, isRole } from './roles';
+
+// The first request loads this module: a shared database without a session secret stops here.
+refuseUnsafeStart({ DATABASE_URL, BETTER_AUTH_SECRET });
 
 /** The better-auth instance; its HTTP handler answers /api/auth/*. */
 export const auth = betterAuth({
   baseURL: BETTER_AUTH_URL,
-  secret: authSecret(BETTER_AUTH_SECRET, DATA_DIR),
+  secret: authSecret(BETTER_AUTH_SECRET, DATA_DIR, DATABASE_URL),
   trustedOrigins: [BETTER_AUTH_URL],
   database: drizzleAdapter(db, { provider: 'pg', schema: authSchema }),
   emailAndPassword: {

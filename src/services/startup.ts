@@ -1,5 +1,6 @@
 // Brings the database up once per process before the first request: migrations, then demo data.
-import { DEMO_SEED, NOTICE_TICK_SECONDS } from 'astro:env/server';
+import { DATABASE_URL, DEMO_DATA, NOTICE_TICK_SECONDS } from 'astro:env/server';
+import { demoWanted } from '@/lib/deployment';
 import { handle } from '@/db';
 import { seedDemoIfEmpty } from './demo-seed';
 import { startNoticeTimer } from './notices';
@@ -10,7 +11,8 @@ const holder = globalThis as typeof globalThis & { __cuffwrightReady?: Promise<v
 async function start(): Promise<void> {
   const began = Date.now();
   await handle.migrate();
-  const seeded = !DEMO_SEED ? false : await seedDemoIfEmpty();
+  // The demo shop's password is in the README: only on the embedded database unless asked for.
+  const seeded = demoWanted({ DATABASE_URL, DEMO_DATA }) ? await seedDemoIfEmpty() : false;
   startNoticeTimer(NOTICE_TICK_SECONDS);
   console.log(`Database ready (${handle.kind}) in ${Date.now() - began} ms${seeded ? ', demo shop seeded' : ''}.`);
 }

@@ -6,6 +6,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createServer } from 'node:net';
+import { randomBytes } from 'node:crypto';
 import type { TestProject } from 'vitest/node';
 import { buildIfNeeded } from '../../scripts/build-if-needed.mjs';
 import { startMailCapture } from '../../scripts/mail-capture.mjs';
@@ -77,7 +78,10 @@ export default async function setup(project: TestProject) {
       // As behind one reverse proxy: tests give each would-be client its own X-Forwarded-For address,
       // so the per-address limits of one test do not fall on the others (all come from loopback).
       TRUSTED_PROXY_HOPS: '1',
-      ...(databaseUrl ? { DATABASE_URL: databaseUrl } : {}),
+      // The stories sign in as the demo shop's people: asked for explicitly, as it is off by
+      // default on PostgreSQL, which also needs a session secret from the environment.
+      DEMO_DATA: 'on',
+      ...(databaseUrl ? { DATABASE_URL: databaseUrl, BETTER_AUTH_SECRET: randomBytes(32).toString('base64url') } : {}),
     },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
