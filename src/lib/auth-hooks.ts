@@ -12,14 +12,15 @@ import { shopSignUpInput } from './account-inputs';
 const updateUserInput = shopSignUpInput.pick({ name: true }).strict();
 
 /** Paths whose JSON answers may carry the session token (top level or under `session`). */
-const TOKEN_PATHS = new Set(['/sign-in/email', '/sign-up/email', '/change-password', '/get-session']);
+const TOKEN_PATHS = new Set(['/sign-in/email', '/sign-up/email', '/change-password', '/get-session', '/list-sessions']);
 
 type Ctx = { path?: string; request?: Request };
 /** An HTTP request from outside, as opposed to a call the server makes through auth.api. */
 const fromHttp = (ctx: Ctx) => ctx.request !== undefined;
 
 function withoutToken(value: unknown): unknown {
-  if (!value || typeof value !== 'object' || Array.isArray(value)) return value;
+  if (Array.isArray(value)) return value.map(withoutToken);
+  if (!value || typeof value !== 'object') return value;
   const { token: _token, ...rest } = value as Record<string, unknown>;
   if (rest.session && typeof rest.session === 'object') {
     const { token: _sessionToken, ...session } = rest.session as Record<string, unknown>;

@@ -52,6 +52,25 @@ describe('sign-in answer', () => {
   });
 });
 
+describe('list-sessions', () => {
+  it('lists the sessions without their tokens', async () => {
+    const r = await call('GET', '/api/auth/list-sessions', { cookie: lead });
+    expect(r.status).toBe(200);
+    expect(r.body.length).toBeGreaterThan(0);
+    for (const s of r.body) expect(s.token).toBeUndefined();
+  });
+});
+
+describe("better-auth's own return addresses", () => {
+  // Already checked by better-auth (trustedOrigins, safe relative paths): kept so by this test.
+  for (const redirectTo of ['https://evil.example/reset', '/\\evil.example', '//evil.example/reset']) {
+    it(`request-password-reset refuses redirectTo ${redirectTo}`, async () => {
+      const r = await call('POST', '/api/auth/request-password-reset', { body: { email: DEMO.counter, redirectTo } });
+      expect(r.status).toBe(403);
+    });
+  }
+});
+
 describe('change password', () => {
   for (const revokeOtherSessions of [false, undefined]) {
     it(`ends every other session even when the client sends revokeOtherSessions: ${revokeOtherSessions}`, async () => {

@@ -14,7 +14,8 @@ import { DEMO, DEMO_PASSWORD } from './client';
 const entry = `${process.env.TEST_DIST_DIR || '.test-dist'}/server/entry.mjs`;
 const cleanups: (() => Promise<void> | void)[] = [];
 afterEach(async () => {
-  for (const c of cleanups.splice(0)) await c();
+  // Last made, first undone: the server stops before its database is dropped.
+  for (const c of cleanups.splice(0).reverse()) await c();
 });
 
 function freePort(): Promise<number> {
@@ -42,7 +43,7 @@ async function serve(env: Record<string, string>) {
   const exited = new Promise<number | null>((r) => child.on('exit', (code) => r(code)));
   cleanups.push(async () => {
     child.kill('SIGTERM');
-    await Promise.race([exited, new Promise((r) => setTimeout(r, 2000))]);
+    await Promise.race([exited, new Promise((r) => setTimeout(r, 5000))]);
     rmSync(dataDir, { recursive: true, force: true });
   });
   return { base, exited, stderr: () => stderr };
@@ -69,7 +70,8 @@ async function demoSignIn(base: string): Promise<number> {
   return r.status;
 }
 
-describe('the built server outside the demo', () => {
+// A fresh embedded database takes a while to set up on a loaded machine.
+describe('the built server outside the demo', { timeout: 180_000 }, () => {
   it('refuses DATABASE_URL without BETTER_AUTH_SECRET: one line, exit 1, nothing served', async () => {
     const s = await serve({ DATABASE_URL: 'postgres://shop@127.0.0.1:9/cuffwright' });
     const answer = await firstAnswer(s.base, s.exited).catch(() => 'exited' as const);
