@@ -41,7 +41,7 @@ export function pagePaths(ids: PageIds): Record<string, string> {
     forgot: '/forgot',
     'garments/[id]': `/garments/${ids.garmentId}`,
     'invite/[id]': `/invite/${ids.invitationId}`,
-    outbox: '/outbox',
+    'sent-messages': '/sent-messages',
     paid: '/paid',
     presets: '/presets',
     prices: '/prices',
