@@ -1,3 +1,6 @@
+import { typedAndRead } from '@/lib/length-reading';
+import { isUnit } from '@/lib/allowance/units';
+import type { Precision, Unit } from '@/lib/allowance/types';
 import type { AuditEntry } from '@/lib/bench-types';
 import { dateTimeText } from '@/lib/date-text';
 import { EXISTING_FINISH_LABELS, type ExistingFinish } from '@/lib/existing-finish';
@@ -7,6 +10,9 @@ import { FINISH_LABELS, LEG_LENGTH_LABELS, LEG_LENGTHS, type Finish, type LegLen
 interface Props {
   history: AuditEntry[];
   label: (s: GarmentStep) => string;
+  /** the shop's unit and precision, for the reading beside a length typed in another unit */
+  unit: Unit;
+  precision: Precision;
 }
 
 const OTHER_FIELDS: Record<string, string> = { finish: 'Finish', preset: 'Preset', unit: 'Unit', description: 'Description', dueOn: 'Due date', assigneeId: 'Given to', existingFinish: 'Existing finish' };
@@ -22,11 +28,13 @@ function shown(field: string, value: unknown): string {
   return String(value);
 }
 
-function describe(e: AuditEntry, label: Props['label']): string {
+function describe(e: AuditEntry, { label, unit: shopUnit, precision }: Omit<Props, 'history'>): string {
   const d = e.detail;
   if (e.action === 'measurement.changed') {
-    const unit = d.field === 'finish' || d.field === 'preset' || d.field === 'unit' ? '' : ` ${String(d.unit ?? '')}`;
-    const val = (v: unknown) => (v ? `${shown(String(d.field), v)}${unit}` : 'nothing');
+    const typedIn = isUnit(d.unit) ? d.unit : shopUnit;
+    const isLength = LEG_LENGTHS.includes(d.field as LegLength);
+    // A length as typed, with its own unit ("38 mm" stays 38 mm in an inch shop), and the shop's reading.
+    const val = (v: unknown) => (!v ? 'nothing' : isLength ? typedAndRead(String(v), typedIn, shopUnit, precision) : shown(String(d.field), v));
     return `${String(d.leg) === 'left' ? 'Left' : 'Right'} leg, ${fieldName(String(d.field))}: ${val(d.old)} → ${val(d.new)}`;
   }
   if (e.action === 'garment.moved' && isGarmentStep(d.from) && isGarmentStep(d.to)) {
@@ -50,7 +58,7 @@ function ordered(history: AuditEntry[]): AuditEntry[] {
 }
 
 /** Every change to the garment and its measurements: who, when, old and new value. */
-export function FittingHistory({ history, label }: Props) {
+export function FittingHistory({ history, label, unit, precision }: Props) {
   return (
     <section aria-labelledby="history-heading" className="flex flex-col gap-2">
       <h2 id="history-heading" className="text-2xl font-extrabold">History</h2>
@@ -60,7 +68,7 @@ export function FittingHistory({ history, label }: Props) {
         <ol className="flex flex-col divide-y divide-rule rounded-lg border-2 border-rule bg-card" data-testid="history">
           {ordered(history).map((e) => (
             <li key={e.id} className="flex flex-wrap items-baseline gap-x-4 px-4 py-2">
-              <span className="measure font-semibold">{describe(e, label)}</span>
+              <span className="measure font-semibold">{describe(e, { label, unit, precision })}</span>
               <span className="text-base text-muted">
                 {e.actorName ?? 'Someone no longer here'} · <time dateTime={e.at}>{dateTimeText(e.at)}</time>
               </span>

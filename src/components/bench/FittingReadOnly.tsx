@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { Segmented } from '@/components/calculator/Segmented';
+import { shopReading, typedWithUnit } from '@/lib/length-reading';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import type { FittingView } from '@/lib/bench-types';
 import { FINISH_LABELS, LEG_LENGTH_LABELS, LEG_LENGTHS, LEGS, legFormValues, type Leg } from '@/lib/measurement-request';
@@ -9,6 +10,17 @@ interface Props {
   fitting: FittingView;
   precision: Precision;
   unit: Unit;
+}
+
+/** A saved length as typed, in its own unit, and below it what it reads as in the shop's unit. */
+function SavedLengthText({ text, typedIn, unit, precision }: { text: string; typedIn: Unit; unit: Unit; precision: Precision }) {
+  const read = shopReading(text, typedIn, unit, precision);
+  return (
+    <>
+      <span className="whitespace-nowrap">{typedWithUnit(text, typedIn)}</span>
+      {read && <span className="block text-base font-semibold whitespace-nowrap text-muted">= {read}</span>}
+    </>
+  );
 }
 
 /** Both legs' saved measurements side by side, to read, and the chosen leg's plan. */
@@ -54,8 +66,8 @@ export function FittingReadOnly({ fitting, precision, unit }: Props) {
                 {LEGS.map((l) => {
                   const v = byLeg.get(l)?.values[f];
                   return (
-                    <td key={l} className="measure py-2 pr-2 text-2xl font-extrabold whitespace-nowrap">
-                      {v ? `${v.text} ${shownUnit}` : <span className="text-muted">—</span>}
+                    <td key={l} className="measure py-2 pr-2 text-2xl font-extrabold">
+                      {v ? <SavedLengthText text={v.text} typedIn={shownUnit} unit={unit} precision={precision} /> : <span className="text-muted">—</span>}
                     </td>
                   );
                 })}

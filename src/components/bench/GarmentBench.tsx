@@ -113,7 +113,7 @@ function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canA
       {/* The photos island brings its own "Fitting photos" heading. */}
       <GarmentPhotos garmentId={g.id} canUpload={canUploadPhotos} />
 
-      {canReadFitting && fitting.data && <FittingHistory history={fitting.data.history} label={label} />}
+      {canReadFitting && fitting.data && <FittingHistory history={fitting.data.history} label={label} unit={unit} precision={precision} />}
     </div>
   );
 }
