@@ -73,18 +73,20 @@ export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precisio
     const main = legMainRequest(leg, unit, precision);
     if (!main) throw new ServiceError(422, `The ${side} leg has no cuff depth yet: finish the fitting first.`);
     const parsed = planRequest.parse(main);
+    // The pinned length goes on the sheet as typed, in its own unit when the sheet's differs.
+    const finished = leg.backPin.trim() ? { finished: leg.backPin.trim() } : {};
     if (parsed.kind === 'cuff') {
       const { kind: _k, ...input } = parsed;
       const taperReq = legTaperRequest(leg, unit, precision);
       const taper = taperReq ? planRequest.parse(taperReq) : null;
       orders.push(
         taper?.kind === 'taper'
-          ? { side, finish: 'cuff', input, taper: { widthAtEdge: taper.widthAtEdge, widthAbove: taper.widthAbove, heightAbove: taper.heightAbove, seamAllowance: taper.seamAllowance } }
-          : { side, finish: 'cuff', input },
+          ? { side, finish: 'cuff', input, ...finished, taper: { widthAtEdge: taper.widthAtEdge, widthAbove: taper.widthAbove, heightAbove: taper.heightAbove, seamAllowance: taper.seamAllowance } }
+          : { side, finish: 'cuff', input, ...finished },
       );
     } else if (parsed.kind === 'hem') {
       const { kind: _k, ...input } = parsed;
-      orders.push({ side, finish: 'hem', input });
+      orders.push({ side, finish: 'hem', input, ...finished });
     }
   }
   const refused = refusedFields(orders);

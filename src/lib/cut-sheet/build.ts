@@ -15,8 +15,8 @@ export interface TaperWidths {
 
 /** What one leg should become: a cuff (maybe on a tapered leg) or a plain hem. */
 export type LegOrder =
-  | { side: Side; finish: 'cuff'; input: CuffInput; taper?: TaperWidths }
-  | { side: Side; finish: 'hem'; input: HemInput };
+  | { side: Side; finish: 'cuff'; input: CuffInput; taper?: TaperWidths; finished?: string }
+  | { side: Side; finish: 'hem'; input: HemInput; finished?: string };
 
 function taperInput(cuff: CuffInput, widths: TaperWidths) {
   const { unit, precision, cuffDepth, hemSection, clothThickness } = cuff;
@@ -46,9 +46,10 @@ export function refusedFields(legs: LegOrder[]): Record<string, string> {
 
 /** Plans one leg with the engine (throws the engine's AllowanceError on input it refuses). */
 export function planLeg(order: LegOrder): LegSheet {
-  if (order.finish === 'hem') return { side: order.side, finish: 'hem', input: order.input, plan: planHem(order.input) };
+  const finished = order.finished?.trim() ? { finished: order.finished.trim() } : {};
+  if (order.finish === 'hem') return { side: order.side, finish: 'hem', input: order.input, plan: planHem(order.input), ...finished };
   const plan = planCuff(order.input);
-  const leg: LegSheet = { side: order.side, finish: 'cuff', input: order.input, plan };
+  const leg: LegSheet = { side: order.side, finish: 'cuff', input: order.input, plan, ...finished };
   if (order.taper) {
     const input = taperInput(order.input, order.taper);
     leg.taper = { input, plan: checkTaper(input) };

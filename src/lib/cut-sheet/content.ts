@@ -2,6 +2,7 @@
 // keeping them here lets the tests and any other rendering read the same sheet.
 import type { CreaseLanding, CuffLineName, Len, PlanWarning, Unit, WarningCode } from '@/lib/allowance/types';
 import type { ExistingFinish } from '@/lib/existing-finish';
+import { finishedLine } from './finished-length';
 import type { CutSheetData, LegSheet } from './types';
 
 /** One chalk line as printed: number, name, distances. */
@@ -300,6 +301,8 @@ export function sheetContent(data: CutSheetData): SheetContent {
   if (data.garment) meta.push(data.garment);
   if (data.due) meta.push(`Due ${formatDue(data.due)}`);
   if (data.assignee) meta.push(`For ${data.assignee}`);
+  const finished = finishedLine(data.legs);
+  if (finished) meta.push(finished);
 
   const precision = data.unit === 'in' ? `, to 1/${data.precision}` : '';
   return {

@@ -28,6 +28,8 @@ export interface CuffLeg {
   taper?: { input: TaperInput; plan: TaperPlan };
   /** where an old hem crease lands; defaults to plan.creaseLands */
   crease?: CreaseLanding;
+  /** the finished length pinned at the back, as typed ("31 3/4 + 1/8"), in the plan's unit unless it names one */
+  finished?: string;
 }
 
 /** One leg finished with a plain hem. */
@@ -38,6 +40,8 @@ export interface HemLeg {
   plan: HemPlan;
   /** where an old hem crease lands, if the shop noted it */
   crease?: CreaseLanding;
+  /** the finished length pinned at the back, as typed, in the plan's unit unless it names one */
+  finished?: string;
 }
 
 /** One leg of the garment. */

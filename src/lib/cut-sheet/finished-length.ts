@@ -1,0 +1,21 @@
+// The finished length pinned at the fitting, as the sheet prints it: as typed, and what it reads as.
+// Relative imports, like the rest of the sheet, so bench/ can run it with plain vite-node.
+import { readLength, typedWithUnit } from '../length-reading';
+import type { Precision, Unit } from '../allowance/types';
+import type { LegSheet } from './types';
+
+/** A leg's pinned length as typed with its unit, and its reading in the sheet's unit when that differs ("31 3/4 + 1/8 in = 31 7/8 in"). */
+export function finishedText(typed: string, unit: Unit, precision: Precision): string {
+  const shown = typedWithUnit(typed.trim(), unit);
+  const read = readLength(typed, unit, precision);
+  return read && read !== shown ? `${shown} = ${read}` : shown;
+}
+
+/** The sheet's finished-length line: one figure for both legs, or each leg's; null when none was pinned. */
+export function finishedLine(legs: LegSheet[]): string | null {
+  const pinned = legs.filter((l) => l.finished);
+  if (pinned.length === 0) return null;
+  const texts = pinned.map((l) => finishedText(l.finished!, l.plan.unit, l.plan.precision));
+  if (legs.length === 1 || (pinned.length === legs.length && new Set(texts).size === 1)) return `Finished length (back pin) ${texts[0]}`;
+  return `Finished length (back pin): ${pinned.map((l, i) => `${l.side} ${texts[i]}`).join(', ')}`;
+}
