@@ -5,6 +5,10 @@ import { LINE_NAMES } from './line-names';
 
 /** Width of the flat-and-section drawings, in px. */
 export const DRAWING_WIDTH = 720;
+/** Width of a flat-and-section drawing stacked for a narrow screen, in px. */
+export const NARROW_WIDTH = 400;
+/** How far left the section moves when stacked, in px: its labels start about 320 px in. */
+export const NARROW_SHIFT = 320;
 /** Where the leg runs down in the section view, in px from the left. */
 export const SECTION_X = 510;
 /** Gap between layers in the section, in px: cloth thickness is not to scale. */
