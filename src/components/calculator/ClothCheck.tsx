@@ -4,7 +4,7 @@ interface Props {
   plan: CuffPlan | HemPlan;
 }
 
-/** Is there cloth enough below the mark? And if not, what still fits. */
+/** Is there cloth enough below the mark? When there is not, NoFit says so instead, as the headline. */
 export function ClothCheck({ plan }: Props) {
   const needs = (
     <>
@@ -12,11 +12,11 @@ export function ClothCheck({ plan }: Props) {
     </>
   );
   if (plan.enough === null) {
-    return <p className="rounded-md border-2 border-rule bg-card px-4 py-3 text-lg">{needs} Type the cloth below the mark to check it.</p>;
+    return <p className="rounded-md border-2 border-rule bg-card px-4 py-3 text-lg break-inside-avoid">{needs} Type the cloth below the mark to check it.</p>;
   }
   if (plan.enough) {
     return (
-      <p className="rounded-md border-2 border-ok bg-ok-soft px-4 py-3 text-lg text-ok">
+      <p className="rounded-md border-2 border-ok bg-ok-soft px-4 py-3 text-lg text-ok break-inside-avoid">
         <strong className="font-extrabold">Enough cloth.</strong> {needs}
         {plan.spare && (
           <>
@@ -26,11 +26,25 @@ export function ClothCheck({ plan }: Props) {
       </p>
     );
   }
+  return null;
+}
+
+/** The cloth is short: said first, as the headline, with what still fits before anything else. */
+export function NoFit({ plan }: Props) {
   const alt = plan.kind === 'cuff' ? plan.alternatives : null;
   return (
-    <div className="rounded-md border-2 border-cut bg-cut-soft px-4 py-3 text-lg text-cut">
-      <p>
-        <strong className="font-extrabold">Short by <span className="measure">{plan.shortBy?.text}</span>.</strong> {needs}
+    <section aria-labelledby="nofit-heading" data-testid="no-fit" className="rounded-lg border-4 border-cut bg-cut-soft px-5 py-4 text-lg text-cut break-inside-avoid">
+      <h2 id="nofit-heading" className="text-3xl leading-tight font-extrabold">
+        Does not fit: do not cut. Short by <span className="measure">{plan.shortBy?.text}</span>.
+      </h2>
+      <p className="mt-1">
+        This {plan.kind === 'cuff' ? 'cuff' : 'hem'} needs <span className="measure font-extrabold">{plan.required.text}</span> below the mark
+        {plan.lines[0]?.aboveRawEdge ? (
+          <>
+            ; there is <span className="measure font-extrabold">{plan.lines[0].aboveRawEdge.text}</span>
+          </>
+        ) : null}
+        .
       </p>
       {alt && (
         <>
@@ -54,6 +68,6 @@ export function ClothCheck({ plan }: Props) {
           </ul>
         </>
       )}
-    </div>
+    </section>
   );
 }

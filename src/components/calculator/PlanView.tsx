@@ -1,7 +1,7 @@
 import type { PlanResponse } from '@/lib/plan-request';
 import type { TaperPlan } from '@/lib/allowance/types';
 import { ChalkLines } from './ChalkLines';
-import { ClothCheck } from './ClothCheck';
+import { ClothCheck, NoFit } from './ClothCheck';
 import { CreaseNote } from './CreaseNote';
 import { CutLine } from './CutLine';
 import { FoldDrawing } from './FoldDrawing';
@@ -27,7 +27,7 @@ interface Props {
   taper: TaperPlan | null;
 }
 
-/** The plan for what is typed: the cutting line first, then the check, the lines, the drawing. */
+/** The plan for what is typed: the cutting line (or, short of cloth, what still fits) first, then the check, the lines, the drawing. */
 export function PlanView({ plan, problem, failure, taper }: Props) {
   const main = plan && plan.kind !== 'taper' ? plan : null;
   const stale = problem !== null;
@@ -53,7 +53,8 @@ export function PlanView({ plan, problem, failure, taper }: Props) {
         </div>
       ) : (
         <div className={'flex flex-col gap-4 ' + (stale ? 'opacity-60' : '')}>
-          <CutLine plan={main} stale={stale} />
+          {/* Short of cloth, the headline is that it does not fit and what would; never a line to cut at. */}
+          {main.enough === false ? <NoFit plan={main} /> : <CutLine plan={main} stale={stale} />}
           <ClothCheck plan={main} />
           {/* ClothCheck and CreaseNote already say these, with more beside them. */}
           <Warnings warnings={[...main.warnings, ...(taper?.warnings ?? [])].filter((w) => !SAID_ELSEWHERE.has(w.code))} />
