@@ -9,7 +9,7 @@ interface Props {
 export function ChalkLines({ plan }: Props) {
   const sloped = plan.kind === 'hem' && plan.slope.mm !== 0;
   return (
-    <section aria-labelledby="lines-heading">
+    <section aria-labelledby="lines-heading" className="break-inside-avoid">
       <h2 id="lines-heading" className="mb-2 text-xl font-extrabold">Chalk lines</h2>
       <table className="w-full border-collapse text-left text-lg">
         <thead>

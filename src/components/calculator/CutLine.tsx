@@ -13,7 +13,7 @@ export function CutLine({ plan, stale }: Props) {
   return (
     <section
       aria-labelledby="cut-heading"
-      className={'rounded-lg border-4 bg-card px-5 py-4 ' + (stale ? 'border-rule' : 'border-cut')}
+      className={'rounded-lg border-4 bg-card px-5 py-4 break-inside-avoid ' + (stale ? 'border-rule' : 'border-cut')}
     >
       <h2 id="cut-heading" className={'text-lg font-extrabold tracking-wide uppercase ' + (stale ? 'text-muted' : 'text-cut')}>
         Cut at line {cut.n}

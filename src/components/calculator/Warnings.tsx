@@ -11,7 +11,7 @@ export function Warnings({ warnings }: Props) {
       {warnings.length > 0 && (
         <ul aria-label="Warnings" className="flex flex-col gap-2">
           {warnings.map((w, i) => (
-            <li key={`${w.code}-${i}`} className="rounded-md border-l-8 border-warn bg-warn-soft px-4 py-3 text-lg text-warn">
+            <li key={`${w.code}-${i}`} className="rounded-md border-l-8 border-warn bg-warn-soft px-4 py-3 text-lg text-warn break-inside-avoid">
               <strong className="font-extrabold">Take care: </strong>
               {w.message}
             </li>
