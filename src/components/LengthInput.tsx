@@ -9,12 +9,17 @@ interface Props {
   registration: UseFormRegisterReturn;
   hint?: ReactNode;
   error?: string;
+  /** what the typed text reads as ("31 7/8 in"), shown beside it once it parses */
+  reading?: string | null;
+  /** a word about the value that is not an error (e.g. left as typed when the unit changed) */
+  note?: string | null;
   /** shown between the input and its hint, e.g. quick picks */
   children?: ReactNode;
 }
 
 /** One labelled length as typed ("1 1/2", "38 mm"), the unit beside it, hint and error tied to it. */
-export function LengthInput({ id, label, unit, registration, hint, error, children }: Props) {
+export function LengthInput({ id, label, unit, registration, hint, error, reading, note, children }: Props) {
+  const described = [describedBy(id, error, hint), reading ? `${id}-reading` : '', note ? `${id}-note` : ''].filter(Boolean).join(' ') || undefined;
   return (
     <FieldFrame id={id} label={label} hint={hint} error={error}>
       <div className="flex items-stretch">
@@ -26,7 +31,7 @@ export function LengthInput({ id, label, unit, registration, hint, error, childr
           spellCheck={false}
           enterKeyHint="next"
           aria-invalid={error ? true : undefined}
-          aria-describedby={describedBy(id, error, hint)}
+          aria-describedby={described}
           className={'measure w-full min-w-0 rounded-l-md border-2 bg-card px-3 text-xl ' + (error ? 'border-cut' : 'border-rule focus:border-accent')}
           {...registration}
         />
@@ -34,6 +39,16 @@ export function LengthInput({ id, label, unit, registration, hint, error, childr
           {unit}
         </span>
       </div>
+      {reading && (
+        <p id={`${id}-reading`} data-testid={`${id}-reading`} className="measure text-base font-semibold text-ok">
+          <span className="sr-only">Reads as </span>= {reading}
+        </p>
+      )}
+      {note && (
+        <p id={`${id}-note`} className="rounded-sm border-l-4 border-warn bg-warn-soft px-2 py-1 text-base font-semibold text-warn">
+          {note}
+        </p>
+      )}
       {children}
     </FieldFrame>
   );

@@ -54,9 +54,10 @@ describe('the hem and cuff calculator', () => {
     expect(await page.getByRole('img', { name: 'The cuff drawn to scale' }).isVisible()).toBe(true);
   });
 
-  it('switches to millimetres, keeps the cloth as measured, and reads the metric cut for a 40 mm cuff', async () => {
+  it('switches to millimetres, carries the cloth over as measured, and reads the metric cut for a 40 mm cuff', async () => {
     await choose('mm');
-    expect(await field('Cloth below the mark').inputValue()).toBe('5 in');
+    // 5 in = 127 mm (NBS 1959).
+    expect(await field('Cloth below the mark').inputValue()).toBe('127');
     await field('Cuff depth').fill('40');
     await expect.poll(cutText, { timeout: 10_000 }).toBe('120 mm');
     // 5 in = 127 mm (NBS 1959): 7 mm to spare below the cut.
@@ -70,7 +71,7 @@ describe('the hem and cuff calculator', () => {
     expect(await field('Cuff depth').getAttribute('aria-describedby')).toContain('f-cuffDepth-error');
     expect(await field('Cuff depth').getAttribute('aria-invalid')).toBe('true');
     expect(await field('Cuff depth').inputValue()).toBe('abc');
-    expect(await field('Cloth below the mark').inputValue()).toBe('5 in');
+    expect(await field('Cloth below the mark').inputValue()).toBe('127');
     expect(await page.getByRole('alert').first().textContent()).toMatch(/do not cut by them/);
     await field('Cuff depth').fill('40');
     await expect.poll(() => error.count(), { timeout: 10_000 }).toBe(0);

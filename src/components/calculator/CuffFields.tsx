@@ -1,20 +1,21 @@
 import type { UseFormRegister } from 'react-hook-form';
 import type { Unit } from '@/lib/allowance/types';
 import type { CalculatorValues, LengthField as Field } from './calculator-values';
-import { LengthField } from './LengthField';
+import { LengthField, type FieldInfo } from './LengthField';
 import { QuickPicks } from './QuickPicks';
 
 interface Props {
   register: UseFormRegister<CalculatorValues>;
   unit: Unit;
   errorFor: (f: Field) => string | undefined;
+  info: FieldInfo;
   cuffDepth: string;
   onPick: (value: string) => void;
 }
 
 /** The lengths a cuff needs: its depth, the sections and the cloth there is. */
-export function CuffFields({ register, unit, errorFor, cuffDepth, onPick }: Props) {
-  const common = { register, unit };
+export function CuffFields({ register, unit, errorFor, info, cuffDepth, onPick }: Props) {
+  const common = { register, unit, info };
   return (
     <div className="grid gap-4 sm:grid-cols-2">
       <div className="sm:col-span-2">

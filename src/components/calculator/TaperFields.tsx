@@ -1,7 +1,7 @@
 import type { UseFormRegister } from 'react-hook-form';
 import type { Unit } from '@/lib/allowance/types';
 import type { CalculatorValues, LengthField as Field } from './calculator-values';
-import { LengthField } from './LengthField';
+import { LengthField, type FieldInfo } from './LengthField';
 
 interface Props {
   open: boolean;
@@ -9,6 +9,7 @@ interface Props {
   register: UseFormRegister<CalculatorValues>;
   unit: Unit;
   errorFor: (f: Field) => string | undefined;
+  info: FieldInfo;
   /** open, but a width is still blank */
   waiting: boolean;
   /** the taper check's own message when it was refused */
@@ -16,8 +17,8 @@ interface Props {
 }
 
 /** The optional taper check, folded away until asked for: leg widths measured flat. */
-export function TaperFields({ open, onToggle, register, unit, errorFor, waiting, problem }: Props) {
-  const common = { register, unit };
+export function TaperFields({ open, onToggle, register, unit, errorFor, info, waiting, problem }: Props) {
+  const common = { register, unit, info };
   return (
     <details
       open={open}
