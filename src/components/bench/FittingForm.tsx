@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useRef, useState, type MutableRefObject } from 'react';
 import { useForm, useWatch, type Resolver } from 'react-hook-form';
 import { Segmented } from '@/components/calculator/Segmented';
 import { useDebounced } from '@/components/calculator/use-debounced';
@@ -18,6 +18,7 @@ import {
   type Measurements,
   type MeasurementsInput,
 } from '@/lib/measurement-request';
+import { readLength } from '@/lib/length-reading';
 import { afterSave } from './after-save';
 import { LegFields } from './LegFields';
 import { LegPlan } from './LegPlan';
@@ -28,6 +29,10 @@ interface Props {
   fitting: FittingView;
   unit: Unit;
   precision: Precision;
+  /** told whenever the form gains or loses unsaved changes */
+  onDirtyChange?: (dirty: boolean) => void;
+  /** filled with a function that saves the form as it stands: true once saved */
+  saveRef?: MutableRefObject<(() => Promise<boolean>) | null>;
 }
 
 const resolver = zodResolver(measurementsRequest) as unknown as Resolver<MeasurementsInput, unknown, Measurements>;
@@ -44,7 +49,7 @@ function inUnit(text: string | undefined, from: Unit, to: Unit): string {
 }
 
 /** Both legs' fitting as a form, the chosen leg's live plan beside it; nothing typed is lost on a failed save. */
-export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
+export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange, saveRef }: Props) {
   const client = useQueryClient();
   const form = useForm<MeasurementsInput, unknown, Measurements>({ defaultValues: formValues(fitting, unit), resolver, mode: 'onChange' });
   const { register, control, setValue, setError, reset, getValues, handleSubmit, formState } = form;
@@ -102,6 +107,22 @@ export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
     return () => window.removeEventListener('beforeunload', warn);
   }, [formState.isDirty]);
 
+  useEffect(() => onDirtyChange?.(formState.isDirty), [onDirtyChange, formState.isDirty]);
+
+  // One way to save, from the button or from printing: checked, sent, errors marked; true once saved.
+  const saveNow = (): Promise<boolean> => {
+    let saved = false;
+    return handleSubmit(async (body) => {
+      sent.current = structuredClone(getValues());
+      setTypedWhileSaving(false);
+      saved = await save.mutateAsync(body).then(
+        () => true,
+        () => false,
+      );
+    })().then(() => saved);
+  };
+  if (saveRef) saveRef.current = saveNow;
+
   const errorFor = (f: LegLength) => formState.errors.legs?.[leg]?.[f]?.message;
 
   const applyPreset = (p: PresetSettings, preset: PresetView) => {
@@ -124,11 +145,10 @@ export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
       <form
         aria-label="Fitting measurements"
         noValidate
-        onSubmit={handleSubmit((body) => {
-          sent.current = structuredClone(getValues());
-          setTypedWhileSaving(false);
-          save.mutate(body);
-        })}
+        onSubmit={(e) => {
+          e.preventDefault();
+          void saveNow();
+        }}
         className="flex flex-col gap-5 rounded-lg border-2 border-rule bg-card p-4"
       >
         <Segmented name="leg" legend="Leg" value={leg} onChange={setLeg} options={LEGS.map((l) => ({ value: l, label: l === 'left' ? 'Left leg' : 'Right leg' }))} />
@@ -159,6 +179,7 @@ export function FittingForm({ garmentId, fitting, unit, precision }: Props) {
           register={register}
           onFinish={(f) => setValue(`legs.${leg}.finish`, f, { shouldDirty: true })}
           errorFor={errorFor}
+          readingFor={(f) => readLength(values.legs[leg][f], values.unit, precision)}
         />
         <button type="button" onClick={copyOther} className="min-h-11 self-start rounded-md border-2 border-ink px-4 text-lg font-semibold">
           Same as the {other} leg

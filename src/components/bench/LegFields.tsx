@@ -10,6 +10,8 @@ interface Props {
   register: UseFormRegister<MeasurementsInput>;
   onFinish: (f: Finish) => void;
   errorFor: (field: LegLength) => string | undefined;
+  /** what a field's typed text reads as ("31 7/8 in"), or null */
+  readingFor: (field: LegLength) => string | null;
 }
 
 const HINTS: Partial<Record<LegLength, string>> = {
@@ -47,7 +49,7 @@ const GROUPS: Record<Finish, { title: string; fields: LegLength[] }[]> = {
 };
 
 /** One leg's fitting fields for its finish (the other finishes' values are kept, only hidden). */
-export function LegFields({ leg, finish, unit, register, onFinish, errorFor }: Props) {
+export function LegFields({ leg, finish, unit, register, onFinish, errorFor, readingFor }: Props) {
   return (
     <div className="flex flex-col gap-4">
       <Segmented
@@ -70,6 +72,7 @@ export function LegFields({ leg, finish, unit, register, onFinish, errorFor }: P
                 registration={register(`legs.${leg}.${f}`)}
                 hint={HINTS[f]}
                 error={errorFor(f)}
+                reading={readingFor(f)}
               />
             ))}
           </div>
