@@ -1,8 +1,9 @@
 import { useQuery } from '@tanstack/react-query';
-import { useState } from 'react';
+import { useRef, useState } from 'react';
 import { GarmentPhotos } from '@/components/photos/GarmentPhotos';
 import { withQuery } from '@/components/WithQuery';
-import { scaleUnit } from '@/lib/bench-requests';
+import { PrintCutSheet } from '@/components/cut-sheets/PrintCutSheet';
+import { scaleUnit, type Scale } from '@/lib/bench-requests';
 import type { FittingView, GarmentDetail } from '@/lib/bench-types';
 import { EXISTING_FINISH_LABELS } from '@/lib/existing-finish';
 import { fetchJson } from '@/lib/fetch-json';
@@ -27,9 +28,11 @@ interface Props {
   /** may step a collected garment back to ready (the lead) */
   canReopen?: boolean;
   canUploadPhotos: boolean;
+  /** the scale the cut sheet starts in, when this person may print it */
+  print?: { scale: Scale } | null;
 }
 
-function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canAdvance, canPickup, canReopen = false, canUploadPhotos }: Props) {
+function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canAdvance, canPickup, canReopen = false, canUploadPhotos, print = null }: Props) {
   const garment = useQuery({ queryKey: ['garment', garmentId], queryFn: () => fetchJson<GarmentDetail>(`/api/garments/${garmentId}`) });
   const fitting = useQuery({
     queryKey: ['fitting', garmentId],
@@ -39,6 +42,9 @@ function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canA
   const settings = useBenchSettings();
   const label = useStepLabel();
   const [editing, setEditing] = useState(false);
+  // The fitting form's unsaved state and its save, so printing never quietly prints stale lengths.
+  const [fittingDirty, setFittingDirty] = useState(false);
+  const saveFitting = useRef<(() => Promise<boolean>) | null>(null);
   if (garment.isError) return <p role="alert" className="text-xl font-semibold text-cut">{garment.error.message}</p>;
   if (garment.isPending || settings.isPending) return <p className="text-xl text-muted">Loading the garment…</p>;
   const g = garment.data;
@@ -105,10 +111,15 @@ function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canA
         ) : fitting.isError ? (
           <p role="alert" className="font-semibold text-cut">{fitting.error.message}</p>
         ) : canEditFitting ? (
-          <FittingForm garmentId={g.id} fitting={fitting.data} unit={unit} precision={precision} />
+          <FittingForm garmentId={g.id} fitting={fitting.data} unit={unit} precision={precision} onDirtyChange={setFittingDirty} saveRef={saveFitting} />
         ) : (
           <FittingReadOnly fitting={fitting.data} unit={unit} precision={precision} />
         ))}
+
+      {print && (
+        <PrintCutSheet garmentId={g.id} scale={print.scale} unsaved={canEditFitting && fittingDirty}
+          save={() => saveFitting.current?.() ?? Promise.resolve(false)} />
+      )}
 
       {/* The photos island brings its own "Fitting photos" heading. */}
       <GarmentPhotos garmentId={g.id} canUpload={canUploadPhotos} />

@@ -1,10 +1,15 @@
 import { useId, useState } from 'react';
 import { SCALE_LABELS, SCALES, scaleUnit, type Scale } from '@/lib/bench-requests';
+import { PrintOutcome, usePrintSheet } from './use-print-sheet';
 
 interface Props {
   garmentId: string;
   /** the shop's own scale, chosen first */
   scale: Scale;
+  /** the fitting on screen has changes not yet saved: the sheet would print the saved ones */
+  unsaved?: boolean;
+  /** saves the fitting on screen; true once saved */
+  save?: () => Promise<boolean>;
 }
 
 /** The address of a garment's cut sheet in the chosen scale and paper. */
@@ -15,14 +20,28 @@ export function sheetHref(garmentId: string, scale: Scale, page: 'LETTER' | 'A4'
   return `/api/garments/${encodeURIComponent(garmentId)}/sheet?${q}`;
 }
 
-/** "Print cut sheet": choose the unit and paper, open the PDF in a new tab. */
-export default function PrintCutSheet({ garmentId, scale: initial }: Props) {
+/** "Print cut sheet": choose the unit and paper, fetch the PDF and open it; unsaved changes are saved first or said. */
+export function PrintCutSheet({ garmentId, scale: initial, unsaved = false, save }: Props) {
   const [scale, setScale] = useState<Scale>(initial);
   const [page, setPage] = useState<'LETTER' | 'A4'>('LETTER');
+  const [asking, setAsking] = useState(false);
+  const [notSaved, setNotSaved] = useState(false);
+  const { state, print } = usePrintSheet();
   const id = useId();
   const select = 'min-h-12 rounded-md border-2 border-rule bg-card px-2 text-lg focus:border-accent';
+  const printSaved = () => {
+    setAsking(false);
+    setNotSaved(false);
+    void print(() => fetch(sheetHref(garmentId, scale, page), { credentials: 'same-origin' }));
+  };
+  const saveThenPrint = async () => {
+    setAsking(false);
+    const ok = save ? await save() : false;
+    if (ok) printSaved();
+    else setNotSaved(true);
+  };
   return (
-    <section aria-labelledby={`${id}-h`} className="mt-6 flex flex-wrap items-end gap-3 rounded-lg border-2 border-rule bg-card p-4">
+    <section aria-labelledby={`${id}-h`} className="flex flex-wrap items-end gap-3 rounded-lg border-2 border-rule bg-card p-4">
       <h2 id={`${id}-h`} className="sr-only">Cut sheet</h2>
       <div className="flex flex-col gap-1">
         <label htmlFor={`${id}-unit`} className="font-semibold">Sheet in</label>
@@ -39,9 +58,35 @@ export default function PrintCutSheet({ garmentId, scale: initial }: Props) {
           <option value="A4">A4</option>
         </select>
       </div>
-      <a href={sheetHref(garmentId, scale, page)} target="_blank" rel="noopener" className="inline-flex min-h-12 items-center rounded-lg bg-accent px-5 text-lg font-bold text-white">
-        Print cut sheet
-      </a>
+      <button
+        type="button"
+        disabled={state.status === 'busy'}
+        onClick={() => (unsaved ? setAsking(true) : printSaved())}
+        className="min-h-12 rounded-lg bg-accent px-5 text-lg font-bold text-white disabled:opacity-60"
+      >
+        {state.status === 'busy' ? 'Making the sheet…' : 'Print cut sheet'}
+      </button>
+      {asking && unsaved && (
+        <div role="alert" className="flex w-full flex-col gap-2 rounded border-2 border-warn bg-warn-soft px-3 py-2 text-lg font-semibold text-warn">
+          <p>The fitting has changes that are not saved. The sheet prints what is saved, not what is on screen.</p>
+          <div className="flex flex-wrap gap-3">
+            {save && (
+              <button type="button" onClick={() => void saveThenPrint()} className="min-h-11 rounded bg-accent px-4 text-white">
+                Save, then print
+              </button>
+            )}
+            <button type="button" onClick={printSaved} className="min-h-11 rounded border-2 border-warn bg-card px-4">
+              Print the saved measurements
+            </button>
+          </div>
+        </div>
+      )}
+      {notSaved && (
+        <p role="alert" className="w-full rounded border-2 border-cut bg-cut-soft px-3 py-2 text-lg font-semibold text-cut">
+          Not printed: the fitting could not be saved. Fix what is marked in the fitting, then print again.
+        </p>
+      )}
+      <PrintOutcome state={state} filename="cut-sheet.pdf" />
     </section>
   );
 }
