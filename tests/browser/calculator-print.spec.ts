@@ -152,9 +152,14 @@ describe('the fold drawing on a phone', () => {
             const box = t.getBoundingClientRect();
             // Screen px per drawing unit, from the two boxes, times the font size in drawing units.
             const rendered = (box.height / t.getBBox().height) * parseFloat(getComputedStyle(t).fontSize);
-            return { text: t.textContent, px: rendered, inside: box.left >= frame.left - 1 && box.right <= frame.right + 1 };
+            return { text: t.textContent, px: rendered, inside: box.left >= frame.left - 1 && box.right <= frame.right + 1, box: { l: box.left, r: box.right, t: box.top, b: box.bottom } };
           });
       });
+      // No word runs into another (boxes may touch by a pixel: line boxes are taller than the ink).
+      const clashes = words.flatMap((a, i) =>
+        words.slice(i + 1).filter((b) => Math.min(a.box.r, b.box.r) - Math.max(a.box.l, b.box.l) > 2 && Math.min(a.box.b, b.box.b) - Math.max(a.box.t, b.box.t) > 4).map((b) => `${a.text} / ${b.text}`),
+      );
+      expect(clashes).toEqual([]);
       expect(words.length).toBeGreaterThan(15);
       expect(words.filter((w) => w.px < 12)).toEqual([]);
       expect(words.filter((w) => !w.inside)).toEqual([]);

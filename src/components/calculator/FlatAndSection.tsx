@@ -45,7 +45,7 @@ export function FlatAndSection({ id, title, desc, unit, lines, rawMm, aboveMm, b
         {desc && <desc id={`${id}-desc`}>{desc}</desc>}
         <ShortHatch />
         <text x={56} y={18} className="fill-muted text-[13px] font-semibold tracking-wider uppercase">Flat, from the pin mark down</text>
-        <FlatCloth lines={lines} rawMm={rawMm} aboveMm={aboveMm} s={s} yMark={yMark} x={56} width={130} bands={bands} twoLine={narrow} />
+        <FlatCloth lines={lines} rawMm={rawMm} aboveMm={aboveMm} s={s} yMark={yMark} x={56} width={130} bands={bands} />
         <ScaleBar unit={unit} s={s} x={56} y={H - 16} />
         {/* Stacked, the section moves below the flat cloth and left into the narrow frame. */}
         <g transform={narrow ? `translate(${-NARROW_SHIFT} ${H})` : undefined}>

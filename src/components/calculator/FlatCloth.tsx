@@ -30,12 +30,10 @@ interface Props {
   width: number;
   /** stretches of cloth named inside the strip; the accented one is tinted (the cuff face) */
   bands?: Band[];
-  /** each line's name above its length rather than beside it, for a narrow drawing */
-  twoLine?: boolean;
 }
 
 /** The cloth laid flat below the pin mark with its chalk lines, to scale. */
-export function FlatCloth({ lines, rawMm, aboveMm, s, yMark, x, width, bands = [], twoLine = false }: Props) {
+export function FlatCloth({ lines, rawMm, aboveMm, s, yMark, x, width, bands = [] }: Props) {
   const cutMm = Math.max(...lines.map((l) => l.mm));
   const bottomMm = rawMm ?? cutMm + 8;
   const y = (mm: number) => yMark + mm * s;
@@ -86,7 +84,8 @@ export function FlatCloth({ lines, rawMm, aboveMm, s, yMark, x, width, bands = [
           <text x={x + width + 16} y={y(l.mm) + 5} textAnchor="middle" className="fill-paper text-[14px] font-extrabold">{l.n}</text>
           <text x={x + width + 33} y={y(l.mm) + 5} className={(l.cut ? 'fill-cut' : 'fill-ink') + ' text-[15px] font-semibold'}>
             {l.label}{' '}
-            <tspan className="measure font-extrabold" {...(twoLine ? { x: x + width + 33, dy: 20 } : {})}>{l.text}</tspan>
+            {/* The length under the name: beside it, it ran into the section's labels at the pin mark. */}
+            <tspan className="measure font-extrabold" x={x + width + 33} dy={20}>{l.text}</tspan>
           </text>
         </g>
       ))}
