@@ -1,5 +1,5 @@
 // The finished length pinned at the fitting is on the cut sheet, as typed and as it reads: a sum
-// typed as "31 3/4 + 1/8" is kept as typed and read as 31 7/8 in, in the sheet's own unit.
+// typed as "31 3/4 + 1/8" is kept as typed and read as 31 7/8 in; a sheet in mm gives it in mm only.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import type { Shop } from './fixtures';
 
@@ -33,8 +33,10 @@ describe('the finished length on a garment’s cut sheet', () => {
     expect(await text({})).toContain('Finished length (back pin) 31 3/4 + 1/8 in = 31 7/8 in');
   });
 
-  it('prints it in millimetres on a sheet in mm, keeping what was typed in inches', async () => {
+  it('prints it in millimetres on a sheet in mm, where every length is in mm', async () => {
     // 31 7/8 in × 25.4 = 809.625 mm (1 in = 25.4 mm, NBS 1959), to the half millimetre 809.5 mm.
-    expect(await text({ unit: 'mm' })).toContain('Finished length (back pin) 31 3/4 + 1/8 in = 809.5 mm');
+    const sheet = await text({ unit: 'mm' });
+    expect(sheet).toContain('Finished length (back pin) 809.5 mm');
+    expect(sheet).not.toContain('31 3/4');
   });
 });

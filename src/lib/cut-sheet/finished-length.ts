@@ -1,13 +1,27 @@
 // The finished length pinned at the fitting, as the sheet prints it: as typed, and what it reads as.
 // Relative imports, like the rest of the sheet, so bench/ can run it with plain vite-node.
+import { readLengthTerms } from '../allowance/length-terms';
 import { readLength, typedWithUnit } from '../length-reading';
 import type { Precision, Unit } from '../allowance/types';
 import type { LegSheet } from './types';
 
-/** A leg's pinned length as typed with its unit, and its reading in the sheet's unit when that differs ("31 3/4 + 1/8 in = 31 7/8 in"). */
+function namesOtherUnit(typed: string, unit: Unit): boolean {
+  try {
+    return readLengthTerms(typed).some((t) => t.unit !== null && t.unit !== unit);
+  } catch {
+    return false;
+  }
+}
+
+/**
+ * A leg's pinned length as typed, and its reading in the sheet's unit when that differs
+ * ("31 3/4 + 1/8 in = 31 7/8 in"). Typed in another unit, only the reading: every length on a
+ * sheet is in the sheet's unit.
+ */
 export function finishedText(typed: string, unit: Unit, precision: Precision): string {
   const shown = typedWithUnit(typed.trim(), unit);
   const read = readLength(typed, unit, precision);
+  if (read && namesOtherUnit(typed, unit)) return read;
   return read && read !== shown ? `${shown} = ${read}` : shown;
 }
 
