@@ -124,6 +124,7 @@ function LegBlock({ g, width }: { g: SheetLegGroup; width: number }) {
       <View style={{ flexDirection: 'row', alignItems: 'baseline', marginBottom: 2 }}>
         <Text style={[s.legLabel, { width: 70 }]}>{g.label.toUpperCase()}</Text>
         <Text style={s.legTitle}>{g.title}</Text>
+        {g.sections && <Text style={[s.small, { marginLeft: 6, flexShrink: 1 }]}>{`· ${g.sections}`}</Text>}
       </View>
       <View style={{ flexDirection: 'row', alignItems: 'flex-start' }}>
         <View style={{ width: width - DRAWING_W - 8, marginRight: 8 }}>
