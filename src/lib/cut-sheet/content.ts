@@ -174,12 +174,13 @@ function taperOf(leg: LegSheet, pp: PrintedPlan): SheetLegGroup['taper'] {
   const target = pp.taper.target.text;
   // No line with work to print (within tolerance, or under half a step everywhere): nothing to let out.
   if (!pp.taper.work) return { summary: `Taper within tolerance: no seam work needed (cuff top ${target} flat).`, work: null, rows };
-  const moves = pp.taper.lines
-    .filter((l) => l.sign !== 0)
-    .map((l) => `${l.sign > 0 ? 'let out' : 'take in'} ${l.perSeam.text} at line ${l.n} (${l.perSide.text} each side)`);
+  const moving = pp.taper.lines.filter((l) => l.sign !== 0);
+  const moves = moving.map((l) => `${l.sign > 0 ? 'let out' : 'take in'} ${l.perSeam.text} at line ${l.n}`);
+  // Each side's share in the same order, its unit said once at the end: "1/8, 1/4 in each side".
+  const sides = moving.map((l, i) => (i === moving.length - 1 ? l.perSide.text : l.perSide.text.replace(/ (in|cm|mm)$/, '')));
   return {
     summary: `Taper: keep the cuff-top width, ${target} flat, straight down to the cutting line.`,
-    work: `At each leg seam ${moves.join(', ')}.`,
+    work: `At each leg seam ${moves.join(', ')}; half of each at each side of the seam: ${sides.join(', ')} each side.`,
     rows,
   };
 }

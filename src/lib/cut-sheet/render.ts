@@ -27,5 +27,5 @@ export async function renderCutSheets(list: CutSheetData[], skipped: string[] = 
 function atPaperSize(pdf: Uint8Array, list: CutSheetData[]): boolean {
   const heights = [...Buffer.from(pdf).toString('latin1').matchAll(/\/MediaBox \[0 0 [\d.]+ ([\d.]+)\]/g)].map((m) => Number(m[1]));
   // The skipped-garments page (if any) comes last and is not a sheet: only the sheets are counted.
-  return heights.length >= list.length && heights.slice(0, list.length).every((h, i) => Math.abs(h - PAGE_PT[list[i]!.pageSize ?? 'LETTER'].height) < 0.5);
+  return heights.length >= list.length && heights.slice(0, list.length).every((h, i) => Math.abs(h - PAGE_PT[list[i]!.pageSize ?? 'LETTER'].height) < 0.01);
 }

@@ -190,13 +190,19 @@ describe('every printed cuff adds up as printed', () => {
           const half = stepMm(unit, unit === 'in' ? precision * 2 : precision);
           const words = [g.taper.summary, g.taper.work ?? '', ...g.warnings].join(' ');
           if (/no seam work needed/.test(words)) expect(words).not.toMatch(/let(ting)? out|take in/i);
-          const moves = [...(g.taper.work ?? '').matchAll(new RegExp(`(let out|take in) (${LEN}) at line (\\d) \\((${LEN}) each side\\)`, 'g'))];
-          if (g.taper.work) expect(moves.length).toBeGreaterThan(0);
-          for (const [, , seam, , side] of moves) {
-            const perSeam = steps(seam!, unit, half);
+          const work = g.taper.work ?? '';
+          const seams = [...work.matchAll(new RegExp(`(?:let out|take in) (${LEN}) at line \\d`, 'g'))].map((m) => m[1]!);
+          if (g.taper.work) expect(seams.length).toBeGreaterThan(0);
+          // Each side's share, in the same order, the unit said once at the end.
+          const sideList = /each side of the seam: (.*) each side\.$/.exec(work)?.[1] ?? '';
+          const unitWord = / (in|cm|mm)$/.exec(sideList)?.[1] ?? unit;
+          const sides = sideList ? sideList.replace(/ (in|cm|mm)$/, '').split(', ') : [];
+          expect(sides).toHaveLength(seams.length);
+          seams.forEach((seam, i) => {
+            const perSeam = steps(seam, unit, half);
             expect(perSeam).toBeGreaterThan(0);
-            expect(perSeam).toBe(2 * steps(side!, unit, half));
-          }
+            expect(perSeam).toBe(2 * steps(`${sides[i]} ${unitWord}`, unit, half));
+          });
           expect(words).not.toMatch(/(let out|take in) 0 (in|cm|mm)/);
         },
       ),
