@@ -248,13 +248,13 @@ export function CutSheetPage({ data, wrap, family = FAMILY }: { data: CutSheetDa
   );
 }
 
-/** A document of cut sheets, one page each; wrap lets an overfull sheet spill onto a second page; skipped garments get a last page; family from typeset(). */
-export function cutSheetDocument(sheets: CutSheetData[], wrap = true, skipped: string[] = [], family: string | string[] = FAMILY): ReactElement<DocumentProps> {
+/** A document of cut sheets, one page each; wrap (for all, or per sheet) lets an overfull sheet spill onto a second page; skipped garments get a last page; family from typeset(). */
+export function cutSheetDocument(sheets: CutSheetData[], wrap: boolean | boolean[] = true, skipped: string[] = [], family: string | string[] = FAMILY): ReactElement<DocumentProps> {
   const first = sheets[0];
   return (
     <Document title={first && sheets.length === 1 ? `Cut sheet ${first.ticket ?? 'unsaved'}` : 'Cut sheets'} creator="Cuffwright" producer="Cuffwright">
       {sheets.map((d, i) => (
-        <CutSheetPage key={i} data={d} wrap={wrap} family={family} />
+        <CutSheetPage key={i} data={d} wrap={Array.isArray(wrap) ? (wrap[i] ?? true) : wrap} family={family} />
       ))}
       {skipped.length > 0 && <SkippedNote skipped={skipped} size={first?.pageSize ?? 'LETTER'} family={family} />}
     </Document>
