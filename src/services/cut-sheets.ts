@@ -5,6 +5,7 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import { db } from '@/db';
 import { customers, garments, tickets, user, type Garment } from '@/db/schema';
+import { isAllowanceError } from '@/lib/allowance';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import type { Actor } from '@/lib/api';
 import { scaleUnit, ticketLabel } from '@/lib/bench-requests';
@@ -126,7 +127,14 @@ async function namesOf(g: Garment): Promise<HeaderNames> {
 
 function sheetOf(actor: Actor, g: Garment, saved: SavedLeg[], names: HeaderNames, baseUrl: string, scale: Awaited<ReturnType<typeof scaleOf>>): CutSheetData {
   const orders = fittingOrders(saved, scale.unit, scale.precision);
-  return buildCutSheet(headerOf(actor, g, names, baseUrl, scale.pageSize), orders);
+  try {
+    return buildCutSheet(headerOf(actor, g, names, baseUrl, scale.pageSize), orders);
+  } catch (e) {
+    // A fitting saved before the engine refused it (widths that give no leg, say) is the
+    // fitting's fault, not the server's: 422 with the engine's words.
+    if (isAllowanceError(e)) throw new ServiceError(422, `The fitting cannot be planned: ${e.message}`);
+    throw e;
+  }
 }
 
 const slug = (text: string) =>
@@ -166,7 +174,10 @@ export async function queueSheets(actor: Actor, filter: QueueFilter, today: stri
       skipped.push(`${ticketLabel(row.ticketNumber)} ${row.description}: ${e.message === NO_FITTING ? 'no fitting measurements yet' : e.message}`);
     }
   }
-  if (sheets.length === 0) throw new ServiceError(422, 'None of these garments has fitting measurements yet.');
+  if (sheets.length === 0) {
+    const why = skipped.every((line) => line.endsWith(': no fitting measurements yet')) ? 'has fitting measurements yet' : `can be printed: ${skipped.join('; ')}`;
+    throw new ServiceError(422, `None of these garments ${why}.`.replace(/\.\.$/, '.'));
+  }
   return { bytes: await renderCutSheets(sheets, skipped), filename: `cut-sheets-${today}.pdf`, sheets: sheets.length, skipped };
 }
 

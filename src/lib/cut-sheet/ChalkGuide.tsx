@@ -1,7 +1,7 @@
 // The full-size chalk guide: calibration squares, how to check them, and the strip(s) at 1:1.
 import { Path, Rect, Svg, Text, View } from '@react-pdf/renderer';
 import { INCH_PT, MM25_PT, type GuideStrip } from './chalk-guide';
-import { INK, s } from './styles';
+import { INK, READ_MIN, s } from './styles';
 
 /** Grey of the calibration squares: distinct from every other fill so a test can find them. */
 export const SQUARE_GREY = '#a0a0a0';
@@ -10,7 +10,7 @@ function Square({ side, label }: { side: number; label: string }) {
   return (
     <View style={{ alignItems: 'center' }}>
       <View style={{ width: side, height: side, backgroundColor: SQUARE_GREY }} />
-      <Text style={{ fontSize: 8, fontWeight: 800, marginTop: 2 }}>{label}</Text>
+      <Text style={{ fontSize: READ_MIN, fontWeight: 800, marginTop: 2 }}>{label}</Text>
     </View>
   );
 }
@@ -26,11 +26,11 @@ function Strip({ strip, width }: { strip: GuideStrip; width: number }) {
   const plain = bar(false);
   const cut = bar(true);
   const textLeft = 12;
-  const size = width < 90 ? 6.5 : 7.5;
+  const size = READ_MIN;
   return (
     <View style={{ width }}>
-      <Text style={{ fontSize: 8, fontWeight: 800, marginBottom: 1 }}>{strip.label}</Text>
-      <Text style={{ fontSize: 6.5, color: INK.soft, marginBottom: 1 }}>▼ top on the pin mark</Text>
+      <Text style={{ fontSize: READ_MIN, fontWeight: 800, marginBottom: 1 }}>{strip.label}</Text>
+      <Text style={{ fontSize: READ_MIN, color: INK.soft, marginBottom: 1 }}>▼ top on the pin mark</Text>
       <View style={{ width, height: strip.length, position: 'relative' }}>
         <Svg width={width} height={strip.length}>
           <Rect x={0.25} y={0} width={width - 0.5} height={strip.length} fill="none" stroke={INK.soft} strokeWidth={0.5} strokeDasharray="3 2" />
@@ -39,14 +39,14 @@ function Strip({ strip, width }: { strip: GuideStrip; width: number }) {
           {cut && <Path d={cut} fill={INK.cut} />}
         </Svg>
         {strip.ticks.map((t, i) => (
-          <View key={i} style={{ position: 'absolute', left: textLeft, top: t.y + 2 }}>
+          <View key={i} style={{ position: 'absolute', left: textLeft, top: t.y + 2, width: width - textLeft - 1 }}>
             <Text style={{ fontSize: size, fontWeight: 800, color: t.cut ? INK.cut : INK.text }}>{`${t.n} ${t.name}`}</Text>
             <Text style={{ fontSize: size, fontWeight: 700, color: t.cut ? INK.cut : INK.text }}>{t.text}</Text>
           </View>
         ))}
       </View>
       {strip.beyond.length > 0 && (
-        <Text style={{ fontSize: 7, fontWeight: 700, color: INK.cut, marginTop: 2 }}>
+        <Text style={{ fontSize: READ_MIN, fontWeight: 700, color: INK.cut, marginTop: 2 }}>
           {`Past the paper: ${strip.beyond.map((t) => `${t.n} ${t.name} at ${t.text}`).join(', ')}. Measure it.`}
         </Text>
       )}
@@ -65,7 +65,7 @@ export function ChalkGuide({ strips, notes }: { strips: GuideStrip[]; notes: str
         <Square side={MM25_PT} label="25 mm" />
       </View>
       {notes.map((n, i) => (
-        <Text key={i} style={{ fontSize: 7.5, marginTop: 2, fontWeight: i < 2 ? 700 : 400 }}>
+        <Text key={i} style={{ fontSize: READ_MIN, marginTop: 2, fontWeight: i < 2 ? 700 : 400 }}>
           {n}
         </Text>
       ))}

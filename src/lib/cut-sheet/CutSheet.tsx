@@ -6,10 +6,11 @@ import { guideStrips } from './chalk-guide';
 import { sheetContent, type SheetContent, type SheetLegGroup } from './content';
 import { LegDrawing } from './LegDrawing';
 import { legGeometry } from './leg-geometry';
+import { textWidth } from './measure';
 import { qrPath } from './qr';
 import { SkippedNote } from './SkippedNote';
 import { FAMILY } from './fonts';
-import { GUIDE_COLUMN, INK, s } from './styles';
+import { GUIDE_COLUMN, INK, READ_MIN, s } from './styles';
 import type { Len } from '@/lib/allowance/types';
 import type { CutSheetData, PageSize } from './types';
 
@@ -41,11 +42,11 @@ function Header({ c, link }: { c: SheetContent; link?: string }) {
           <Svg width={52} height={52} viewBox={`-2 -2 ${qr.size + 4} ${qr.size + 4}`}>
             <Path d={qr.d} fill={INK.text} />
           </Svg>
-          <Text style={{ fontSize: 6.5, color: INK.soft }}>Garment page</Text>
+          <Text style={{ fontSize: READ_MIN, color: INK.soft }}>Garment page</Text>
         </View>
       ) : (
         <View style={{ width: 170, marginLeft: 12, paddingTop: 18 }}>
-          <Text style={{ fontSize: 8, color: INK.soft }}>Customer / ticket</Text>
+          <Text style={{ fontSize: READ_MIN, color: INK.soft }}>Customer / ticket</Text>
           <View style={{ borderBottomWidth: 0.75, borderBottomColor: INK.text, height: 18 }} />
         </View>
       )}
@@ -53,15 +54,46 @@ function Header({ c, link }: { c: SheetContent; link?: string }) {
   );
 }
 
-function LineRow({ n, name, below, above }: { n: number; name: string; below: string; above: string }) {
+// Room between two columns of figures: they must never read as one number ("0 mm120.5 mm").
+const COLUMN_GAP = 8;
+const VALUE_SIZE = 14;
+const NAME_SIZE = 10;
+
+/** Column widths for a leg's lines table, from the widest text each column holds. */
+function tableColumns(g: SheetLegGroup) {
+  const rows = g.lines.filter((l) => !l.cut);
+  const widest = (texts: string[], weight: 400 | 700 | 800, size: number) => Math.max(0, ...texts.map((t) => textWidth(t, weight, size)));
+  // Headings wrap a word to a line at most, so their longest word sets their least width.
+  const heading = widest(['BELOW', 'ABOVE', 'MARK', 'EDGE'], 700, Number(s.th.fontSize));
+  const name = Math.max(...rows.map((l) => textWidth(`${l.n} `, 800, NAME_SIZE) + textWidth(l.name, 400, NAME_SIZE)), widest(['CHALK LINE'], 700, Number(s.th.fontSize)));
+  const below = Math.max(heading, widest(rows.map((l) => l.belowMark.text), 700, VALUE_SIZE)) + COLUMN_GAP;
+  const above = Math.max(heading, widest(rows.map((l) => l.aboveRawEdge?.text ?? '—'), 700, VALUE_SIZE)) + COLUMN_GAP;
+  return { name: Math.ceil(name) + 2, below: Math.ceil(below) + 1, above: Math.ceil(above) + 1 };
+}
+
+type Columns = ReturnType<typeof tableColumns>;
+
+// Headings on one line when the drawing can give up the width: a line less in every leg block.
+function oneLineHeadings(cols: Columns): Columns {
+  const th = Number(s.th.fontSize);
+  return { ...cols, below: Math.max(cols.below, Math.ceil(textWidth('BELOW PIN MARK', 700, th)) + COLUMN_GAP + 1), above: Math.max(cols.above, Math.ceil(textWidth('ABOVE RAW EDGE', 700, th)) + COLUMN_GAP + 1) };
+}
+
+function LineRow({ n, name, below, above, cols, stacked }: { n: number; name: string; below: string; above: string; cols: Columns; stacked: boolean }) {
+  const label = (
+    <Text style={[s.lineName, stacked ? {} : { flexGrow: 1, flexShrink: 1 }]}>
+      <Text style={s.lineNo}>{n} </Text>
+      {name}
+    </Text>
+  );
   return (
-    <View style={{ flexDirection: 'row', alignItems: 'flex-end', borderBottomWidth: 0.5, borderBottomColor: INK.rule, paddingVertical: 1.5 }}>
-      <Text style={[s.lineName, { flexGrow: 1 }]}>
-        <Text style={s.lineNo}>{n} </Text>
-        {name}
-      </Text>
-      <Text style={[s.value, { width: 78, textAlign: 'right' }]}>{below}</Text>
-      <Text style={[s.value, { width: 74, textAlign: 'right' }]}>{above}</Text>
+    <View style={{ borderBottomWidth: 0.5, borderBottomColor: INK.rule, paddingVertical: 1.5 }}>
+      {stacked && label}
+      <View style={{ flexDirection: 'row', alignItems: 'flex-end' }}>
+        {stacked ? <View style={{ flexGrow: 1 }} /> : label}
+        <Text style={[s.value, { width: cols.below, paddingLeft: COLUMN_GAP, textAlign: 'right', flexShrink: 0 }]}>{below}</Text>
+        <Text style={[s.value, { width: cols.above, paddingLeft: COLUMN_GAP, textAlign: 'right', flexShrink: 0 }]}>{above}</Text>
+      </View>
     </View>
   );
 }
@@ -73,18 +105,21 @@ function rawEdge(len: Len | null): { value: string; caption: string } {
   return { value: len.text, caption: 'above the raw edge' };
 }
 
-function LinesTable({ g }: { g: SheetLegGroup }) {
+function LinesTable({ g, cols, stacked }: { g: SheetLegGroup; cols: Columns; stacked: boolean }) {
+  const head = (text: string, width: number) => (
+    <Text style={[s.th, { width, paddingLeft: COLUMN_GAP, textAlign: 'right', flexShrink: 0 }]}>{text}</Text>
+  );
   return (
     <>
-      <View style={{ flexDirection: 'row', borderBottomWidth: 0.75, borderBottomColor: INK.text, paddingBottom: 1 }}>
-        <Text style={[s.th, { flexGrow: 1 }]}>CHALK LINE</Text>
-        <Text style={[s.th, { width: 78, textAlign: 'right' }]}>BELOW PIN MARK</Text>
-        <Text style={[s.th, { width: 74, textAlign: 'right' }]}>ABOVE RAW EDGE</Text>
+      <View style={{ flexDirection: 'row', alignItems: 'flex-end', borderBottomWidth: 0.75, borderBottomColor: INK.text, paddingBottom: 1 }}>
+        <Text style={[s.th, { flexGrow: 1, flexShrink: 1 }]}>CHALK LINE</Text>
+        {head('BELOW PIN MARK', cols.below)}
+        {head('ABOVE RAW EDGE', cols.above)}
       </View>
       {g.lines
         .filter((l) => !l.cut)
         .map((l) => (
-          <LineRow key={l.n} n={l.n} name={l.name} below={l.belowMark.text} above={l.aboveRawEdge?.text ?? '—'} />
+          <LineRow key={l.n} n={l.n} name={l.name} below={l.belowMark.text} above={l.aboveRawEdge?.text ?? '—'} cols={cols} stacked={stacked} />
         ))}
     </>
   );
@@ -95,7 +130,7 @@ function CutLine({ g }: { g: SheetLegGroup }) {
   const cut = g.lines.find((l) => l.cut);
   if (!cut) return null;
   const raw = rawEdge(cut.aboveRawEdge);
-  const caption = [s.cutCaption, { width: 50, marginLeft: 4, marginBottom: 3 }];
+  const caption = [s.cutCaption, { marginLeft: 6, marginBottom: 3, flexShrink: 1 }];
   const value = [s.cutValue, { flexShrink: 0 }];
   return (
     <View style={{ borderWidth: 2, borderColor: INK.cut, marginTop: 4, paddingHorizontal: 6, paddingVertical: 2, flexDirection: 'row' }}>
@@ -117,17 +152,27 @@ function CutLine({ g }: { g: SheetLegGroup }) {
   );
 }
 
+// The drawing gives up width to a table of wide figures, down to this; past it names go above their figures.
+const DRAWING_MIN_W = 96;
+
 function LegBlock({ g, width }: { g: SheetLegGroup; width: number }) {
-  const geo = legGeometry(g.leg, DRAWING_W, DRAWING_H);
+  const least = tableColumns(g);
+  const usual = oneLineHeadings(least);
+  const cols = usual.name + usual.below + usual.above <= width - 8 - DRAWING_MIN_W ? usual : least;
+  const tableNeeds = cols.name + cols.below + cols.above;
+  const drawingW = Math.max(DRAWING_MIN_W, Math.min(DRAWING_W, width - 8 - tableNeeds));
+  const stacked = tableNeeds > width - 8 - drawingW;
+  const geo = legGeometry(g.leg, drawingW, DRAWING_H);
   return (
     <View style={{ marginBottom: 4 }} wrap={false}>
       <View style={{ flexDirection: 'row', alignItems: 'baseline', marginBottom: 2 }}>
         <Text style={[s.legLabel, { width: 70 }]}>{g.label.toUpperCase()}</Text>
         <Text style={s.legTitle}>{g.title}</Text>
+        {g.sections && <Text style={[s.small, { marginLeft: 6, flexShrink: 1 }]}>{`· ${g.sections}`}</Text>}
       </View>
       <View style={{ flexDirection: 'row', alignItems: 'flex-start' }}>
-        <View style={{ width: width - DRAWING_W - 8, marginRight: 8 }}>
-          <LinesTable g={g} />
+        <View style={{ width: width - drawingW - 8, marginRight: 8 }}>
+          <LinesTable g={g} cols={cols} stacked={stacked} />
           <CutLine g={g} />
         </View>
         <LegDrawing g={geo} />
@@ -166,7 +211,7 @@ function Steps({ c }: { c: SheetContent }) {
       ))}
       <Text style={s.h2}>TAKE CARE</Text>
       {c.cautions.map((t, i) => (
-        <Text key={i} style={{ fontSize: 7.5, marginBottom: 1 }}>
+        <Text key={i} style={{ fontSize: READ_MIN, marginBottom: 1 }}>
           {`•  ${t}`}
         </Text>
       ))}
@@ -203,13 +248,13 @@ export function CutSheetPage({ data, wrap, family = FAMILY }: { data: CutSheetDa
   );
 }
 
-/** A document of cut sheets, one page each; wrap lets an overfull sheet spill onto a second page; skipped garments get a last page; family from typeset(). */
-export function cutSheetDocument(sheets: CutSheetData[], wrap = true, skipped: string[] = [], family: string | string[] = FAMILY): ReactElement<DocumentProps> {
+/** A document of cut sheets, one page each; wrap (for all, or per sheet) lets an overfull sheet spill onto a second page; skipped garments get a last page; family from typeset(). */
+export function cutSheetDocument(sheets: CutSheetData[], wrap: boolean | boolean[] = true, skipped: string[] = [], family: string | string[] = FAMILY): ReactElement<DocumentProps> {
   const first = sheets[0];
   return (
     <Document title={first && sheets.length === 1 ? `Cut sheet ${first.ticket ?? 'unsaved'}` : 'Cut sheets'} creator="Cuffwright" producer="Cuffwright">
       {sheets.map((d, i) => (
-        <CutSheetPage key={i} data={d} wrap={wrap} family={family} />
+        <CutSheetPage key={i} data={d} wrap={Array.isArray(wrap) ? (wrap[i] ?? true) : wrap} family={family} />
       ))}
       {skipped.length > 0 && <SkippedNote skipped={skipped} size={first?.pageSize ?? 'LETTER'} family={family} />}
     </Document>

@@ -1,6 +1,6 @@
 // Engine inputs → a cut sheet's data. The public calculator and a saved garment both come through
 // here. Relative imports keep it runnable by plain vite-node in bench/ (no @ alias there).
-import { checkTaper, planCuff, planHem, validateCuffInput, validateHemInput, validateTaperInput } from '../allowance/index';
+import { AllowanceError, checkTaper, isAllowanceError, planCuff, planHem, validateCuffInput, validateHemInput, validateTaperInput } from '../allowance/index';
 import type { CuffInput, HemInput, LengthInput } from '../allowance/types';
 import type { CutSheetData, LegSheet, Side } from './types';
 
@@ -60,9 +60,21 @@ export function planLeg(order: LegOrder): LegSheet {
 /** Everything on a sheet but the legs: who, what, when, and where the QR code points. */
 export type SheetHeader = Omit<CutSheetData, 'legs' | 'unit' | 'precision'>;
 
-/** Plans the legs and assembles the sheet; the first leg's unit and precision are the sheet's. */
+// The engine names the field it refused within one leg's input; the request spells it with the leg
+// ("right.taper.widthAbove", as refusedFields does).
+function planOrRefuse(order: LegOrder): LegSheet {
+  try {
+    return planLeg(order);
+  } catch (e) {
+    if (!isAllowanceError(e) || e.field === undefined) throw e;
+    const part = order.finish === 'cuff' && order.taper && validateCuffInput(order.input).length === 0 ? 'taper.' : '';
+    throw new AllowanceError(e.code, e.message, `${order.side === 'right' ? 'right.' : ''}${part}${e.field}`);
+  }
+}
+
+/** Plans the legs and assembles the sheet; the first leg's unit and precision are the sheet's (throws AllowanceError, field as the request spells it, when the engine refuses a leg). */
 export function buildCutSheet(header: SheetHeader, legs: LegOrder[]): CutSheetData {
-  const planned = legs.map(planLeg);
+  const planned = legs.map(planOrRefuse);
   const first = planned[0];
   if (!first) throw new Error('A cut sheet needs at least one leg.');
   return { ...header, unit: first.plan.unit, precision: first.plan.precision, legs: planned };

@@ -3,6 +3,7 @@
 import type { CreaseLanding, CuffLineName, Len, PlanWarning, Unit, WarningCode } from '@/lib/allowance/types';
 import type { ExistingFinish } from '@/lib/existing-finish';
 import { finishedLine } from './finished-length';
+import { printedPlan, type PrintedPlan, type PrintedSeamWork } from './printed';
 import type { CutSheetData, LegSheet } from './types';
 
 /** One chalk line as printed: number, name, distances. */
@@ -27,6 +28,8 @@ export interface SheetLegGroup {
   label: string;
   finish: 'cuff' | 'hem';
   title: string;
+  /** turn of cloth and third section, when the title's depth alone does not add up to the lines */
+  sections: string | null;
   lines: SheetLine[];
   cloth: { ok: boolean | null; text: string; options: string[] };
   slopeNote: string | null;
@@ -35,6 +38,8 @@ export interface SheetLegGroup {
   crease: string | null;
   warnings: string[];
   leg: LegSheet;
+  /** every figure the block prints, in whole display steps */
+  printed: PrintedPlan;
 }
 
 /** The whole sheet in words. */
@@ -137,92 +142,112 @@ function creaseNote(crease: CreaseLanding | undefined, existing: ExistingFinish 
 const CREASE_ON_NEW =
   'The pair came in unfinished, yet an old crease is noted: check whether an old hem or cuff must be let down first.';
 
-function clothCheck(leg: LegSheet): SheetLegGroup['cloth'] {
-  const p = leg.plan;
-  const has = p.lines[0]?.aboveRawEdge ?? null;
-  if (p.enough === null || has === null) {
-    return { ok: null, text: `Cloth not measured: this plan needs ${p.required.text} below the pin mark. Measure before cutting.`, options: [] };
+function clothCheck(pp: PrintedPlan): SheetLegGroup['cloth'] {
+  const c = pp.cloth;
+  if (c.enough === null || c.has === null) {
+    return { ok: null, text: `Cloth not measured: this plan needs ${c.needs.text} below the pin mark. Measure before cutting.`, options: [] };
   }
-  if (p.enough) {
-    const spare = p.spare ? `, ${p.spare.text} to spare` : '';
-    return { ok: true, text: `Cloth check: needs ${p.required.text} below the pin mark, has ${has.text}${spare}.`, options: [] };
+  if (c.enough) {
+    return { ok: true, text: `Cloth check: needs ${c.needs.text} below the pin mark, has ${c.has.text}, ${c.spare!.text} to spare.`, options: [] };
   }
-  const short = p.shortBy ? ` Short by ${p.shortBy.text}.` : '';
   const options: string[] = [];
-  if (p.kind === 'cuff' && p.alternatives) {
-    const alt = p.alternatives;
+  const alt = pp.alternatives;
+  if (alt) {
     if (alt.deepestCuff) options.push(`A shallower cuff: ${alt.deepestCuff.text} deep fits.`);
     options.push(`A plain hem needs ${alt.plainHem.required.text}: ${alt.plainHem.fits ? 'fits' : 'does not fit'}.`);
     options.push(`A faced cuff needs ${alt.facedCuff.required.text}: ${alt.facedCuff.fits ? 'fits' : 'does not fit'}.`);
   }
   return {
     ok: false,
-    text: `NOT ENOUGH CLOTH: do not cut. Needs ${p.required.text} below the pin mark, has ${has.text}.${short}`,
+    text: `NOT ENOUGH CLOTH: do not cut. Needs ${c.needs.text} below the pin mark, has ${c.has.text}. Short by ${c.shortBy!.text}.`,
     options,
   };
 }
 
-function taperOf(leg: LegSheet): SheetLegGroup['taper'] {
-  if (leg.finish !== 'cuff' || !leg.taper) return null;
+function taperOf(leg: LegSheet, pp: PrintedPlan): SheetLegGroup['taper'] {
+  if (leg.finish !== 'cuff' || !leg.taper || !pp.taper) return null;
   const t = leg.taper.plan;
-  const rows = t.lines.map((l) => ({
-    n: l.n,
-    name: LINE_NAMES[l.name],
-    width: l.width.text,
-    work:
-      l.change.mm === 0
-        ? 'as it is'
-        : `${l.change.mm > 0 ? 'let out' : 'take in'} ${unsigned(l.perSeam)} at each seam (${unsigned(l.perSide)} each side)`,
-  }));
-  let summary = `Taper: keep the cuff-top width, ${t.targetWidth.text} flat, straight down to the cutting line.`;
-  if (t.withinTolerance) summary = `Taper within tolerance: no seam work needed (cuff top ${t.targetWidth.text} flat).`;
-  const moves = t.lines
-    .filter((l) => l.change.mm !== 0)
-    .map((l) => `${l.change.mm > 0 ? 'let out' : 'take in'} ${unsigned(l.perSeam)} at line ${l.n}`);
-  const work = t.withinTolerance || moves.length === 0 ? null : `At each leg seam ${moves.join(', ')} (half of it each side of the seam).`;
-  return { summary, work, rows };
+  const work = (l: PrintedSeamWork) => `${l.sign > 0 ? 'let out' : 'take in'} ${l.perSeam.text} at each seam (${l.perSide.text} each side)`;
+  const rows = t.lines.map((l, k) => {
+    const printed = pp.taper!.lines[k]!;
+    return { n: l.n, name: LINE_NAMES[l.name], width: l.width.text, work: !pp.taper!.work || printed.sign === 0 ? 'as it is' : work(printed) };
+  });
+  const target = pp.taper.target.text;
+  // No line with work to print (within tolerance, or under half a step everywhere): nothing to let out.
+  if (!pp.taper.work) return { summary: `Taper within tolerance: no seam work needed (cuff top ${target} flat).`, work: null, rows };
+  const moving = pp.taper.lines.filter((l) => l.sign !== 0);
+  const moves = moving.map((l) => `${l.sign > 0 ? 'let out' : 'take in'} ${l.perSeam.text} at line ${l.n}`);
+  // Each side's share in the same order, its unit said once at the end: "1/8, 1/4 in each side".
+  const sides = moving.map((l, i) => (i === moving.length - 1 ? l.perSide.text : l.perSide.text.replace(/ (in|cm|mm)$/, '')));
+  return {
+    summary: `Taper: keep the cuff-top width, ${target} flat, straight down to the cutting line.`,
+    work: `At each leg seam ${moves.join(', ')}; half of each at each side of the seam: ${sides.join(', ')} each side.`,
+    rows,
+  };
 }
 
-function slopeNote(leg: LegSheet): string | null {
-  if (leg.finish !== 'hem' || leg.plan.slope.mm === 0) return null;
-  const [edge, cut] = leg.plan.lines;
-  if (!edge || !cut) return null;
-  return `Sloped hem: ${leg.plan.slope.text} lower at the back. At the front chalk the finished edge ${belowOrAbove(edge.frontBelowMark)} and the cutting line ${belowOrAbove(cut.frontBelowMark)} the back pin mark.`;
+function slopeNote(leg: LegSheet, pp: PrintedPlan): string | null {
+  if (leg.finish !== 'hem' || !pp.slope || pp.slope.mm === 0) return null;
+  const [edge, cut] = pp.lines;
+  if (!edge?.frontBelowMark || !cut?.frontBelowMark) return null;
+  return `Sloped hem: ${pp.slope.text} lower at the back. At the front chalk the finished edge ${belowOrAbove(edge.frontBelowMark)} and the cutting line ${belowOrAbove(cut.frontBelowMark)} the back pin mark.`;
 }
 
 // The cloth check and the taper note already say these in the sheet's own layout.
-const SAID_ELSEWHERE: ReadonlySet<WarningCode> = new Set(['not-enough-cloth', 'taper-beyond-tolerance']);
+const SAID_ELSEWHERE: ReadonlySet<WarningCode> = new Set(['not-enough-cloth', 'taper-beyond-tolerance', 'let-out-exceeds-seam-allowance']);
+
+// The sections a reader adds up to check the lines, when the title's depth alone does not say them.
+function sectionsNote(pp: PrintedPlan): string | null {
+  const parts: string[] = [];
+  if (pp.turnOfCloth) parts.push(`${pp.turnOfCloth.text} turn of cloth at each fold`);
+  if (pp.thirdSection && pp.thirdSection.text !== pp.depth.text) parts.push(`third section ${pp.thirdSection.text}`);
+  return parts.length > 0 ? parts.join(', ') : null;
+}
 
 function groupOf(leg: LegSheet, label: string, existing: ExistingFinish | undefined): SheetLegGroup {
   const p = leg.plan;
-  const lines: SheetLine[] = p.lines.map((l) => ({
+  const pp = printedPlan(leg);
+  const lines: SheetLine[] = pp.lines.map((l) => ({
     n: l.n,
     name: LINE_NAMES[l.name],
     cut: l.name === 'cut',
     belowMark: l.belowMark,
     aboveRawEdge: l.aboveRawEdge,
   }));
-  const title = p.kind === 'cuff' ? `Cuff, ${p.cuffDepth.text} deep` : `Plain hem, ${p.hemAllowance.text} allowance`;
+  const title = p.kind === 'cuff' ? `Cuff, ${pp.depth.text} deep` : `Plain hem, ${pp.depth.text} allowance`;
   const crease = creaseOf(leg);
   const warnings: PlanWarning[] = [...p.warnings, ...(leg.finish === 'cuff' && leg.taper ? leg.taper.plan.warnings : [])];
+  const beyond = pp.taper?.beyondSeamAllowance;
+  // The engine's let-out warning has its own rounding; the sheet says it with the figures it prints,
+  // and not at all beside "no seam work needed".
+  const letOut = beyond
+    ? [
+        beyond.perSide.mm > beyond.seamAllowance.mm
+          ? `Letting out needs ${beyond.perSide.text} on each side of each seam, but the seam allowance is only ${beyond.seamAllowance.text}. Choose a shallower cuff or a plain hem.`
+          : `Letting out needs a little more than the ${beyond.seamAllowance.text} seam allowance on each side of each seam. Choose a shallower cuff or a plain hem.`,
+      ]
+    : [];
   return {
     label,
     finish: leg.finish,
     title,
+    sections: sectionsNote(pp),
     lines,
-    cloth: clothCheck(leg),
-    slopeNote: slopeNote(leg),
-    taper: taperOf(leg),
+    cloth: clothCheck(pp),
+    slopeNote: slopeNote(leg, pp),
+    taper: taperOf(leg, pp),
     crease: creaseNote(crease, existing),
     warnings: [
       ...new Set([
         ...warnings
           .filter((w) => !SAID_ELSEWHERE.has(w.code) && !(crease && w.code === 'old-crease-visible'))
           .map((w) => w.message),
+        ...letOut,
         ...(crease && existing === 'unfinished' ? [CREASE_ON_NEW] : []),
       ]),
     ],
     leg,
+    printed: pp,
   };
 }
 
@@ -266,12 +291,12 @@ function stepsOf(groups: SheetLegGroup[]): SheetContent['steps'] {
   if (finishes.size > 1) {
     return groups.map((g) => ({ heading: g.label, items: stepsOf([g])[0]!.items }));
   }
-  const turnUnder = perLeg(groups, (g) => g.leg.plan.turnUnder.text);
+  const turnUnder = perLeg(groups, (g) => g.printed.turnUnder.text);
   const first = groups[0]!.leg;
   if (first.finish === 'hem') {
-    return [{ heading: null, items: hemSteps(turnUnder, groups.some((g) => g.leg.finish === 'hem' && g.leg.plan.slope.mm !== 0)) }];
+    return [{ heading: null, items: hemSteps(turnUnder, groups.some((g) => g.slopeNote !== null)) }];
   }
-  const tapered = groups.filter((g) => g.leg.finish === 'cuff' && g.leg.taper && !g.leg.taper.plan.withinTolerance);
+  const tapered = groups.filter((g) => g.taper?.work);
   const seamWork = 'Re-chalk both leg seams straight down from the cuff top to the cutting line, as in the taper note.';
   const taperStep =
     tapered.length === 0 ? null : tapered.length === groups.length ? seamWork : `${tapered.map((g) => g.label).join(', ')}: ${seamWork[0]!.toLowerCase()}${seamWork.slice(1)}`;

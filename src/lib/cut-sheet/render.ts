@@ -18,14 +18,17 @@ export async function renderCutSheets(list: CutSheetData[], skipped: string[] = 
   const notes = print(skipped);
   const fast = await renderPdf(cutSheetDocument(sheets, false, notes, family));
   // A sheet too full for its paper came out as a taller page, which a printer would shrink and
-  // the chalk guide would no longer be 1:1: render again, spilling onto a second page instead.
-  const bytes = atPaperSize(fast, list) ? fast : await renderPdf(cutSheetDocument(sheets, true, notes, family));
+  // the chalk guide would no longer be 1:1: render again with that sheet (and only that one)
+  // spilling onto a second page; the others keep the one-pass layout.
+  const over = overflowing(fast, list);
+  const bytes = over.some(Boolean) ? await renderPdf(cutSheetDocument(sheets, over, notes, family)) : fast;
   // A copy owns a plain ArrayBuffer, which a Response body accepts as it is.
   return new Uint8Array(bytes);
 }
 
-function atPaperSize(pdf: Uint8Array, list: CutSheetData[]): boolean {
+/** For each sheet of an unwrapped render, whether its page came out taller than its paper. */
+export function overflowing(pdf: Uint8Array, list: CutSheetData[]): boolean[] {
   const heights = [...Buffer.from(pdf).toString('latin1').matchAll(/\/MediaBox \[0 0 [\d.]+ ([\d.]+)\]/g)].map((m) => Number(m[1]));
-  // The skipped-garments page (if any) comes last and is not a sheet: only the sheets are counted.
-  return heights.length >= list.length && heights.slice(0, list.length).every((h, i) => Math.abs(h - PAGE_PT[list[i]!.pageSize ?? 'LETTER'].height) < 0.5);
+  // Unwrapped, each sheet is one page in order; the skipped-garments page (if any) comes last.
+  return list.map((d, i) => heights[i] === undefined || Math.abs(heights[i]! - PAGE_PT[d.pageSize ?? 'LETTER'].height) >= 0.01);
 }

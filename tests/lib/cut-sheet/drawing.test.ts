@@ -87,7 +87,8 @@ describe('the leg drawing', () => {
     const labels = w.filter((x) => /^[1-4]$/.test(x.text) && x.xMin > cap.xMin + 60 && x.xMin < cap.xMin + 165 && x.yMax < cap.yMin && x.yMin > cap.yMin - 140);
     expect(labels.map((x) => x.text)).toEqual(['1', '2', '3', '4']);
     const px = (pt: number) => Math.round((pt * g.dpi) / 72);
-    const box = { x0: px(cap.xMin + 5), x1: px(labels[0]!.xMin - 4), y0: px(labels[0]!.yMin - 2), y1: px(labels[3]!.yMax + 2) };
+    // Down to just past the cut line's label middle: the raw edge, 1/2 in below, stays out even at 1:10.
+    const box = { x0: px(cap.xMin + 5), x1: px(labels[0]!.xMin - 4), y0: px(labels[0]!.yMin - 2), y1: px((labels[3]!.yMin + labels[3]!.yMax) / 2 + 3) };
     const lines = horizontalLines(g, box, 120, Math.round((box.x1 - box.x0) * 0.5));
     expect(lines).toHaveLength(4);
     const step = (1.5 / scale) * g.dpi;

@@ -4,6 +4,7 @@ import type { APIRoute } from 'astro';
 import { anonymousSheetRefusal, inAnonymousQueue } from '@/lib/anonymous-sheets';
 import { clientOf } from '@/lib/client-address';
 import { tooMany } from '@/lib/api';
+import { isAllowanceError } from '@/lib/allowance';
 import { fieldMessages } from '@/lib/plan-request';
 import { buildCutSheet, refusedFields } from '@/lib/cut-sheet/build';
 import { renderCutSheet } from '@/lib/cut-sheet/render';
@@ -42,7 +43,14 @@ async function answer(request: Request): Promise<Response> {
   const refused = refusedFields(legs);
   if (Object.keys(refused).length > 0) return bad(Object.values(refused)[0]!, refused);
 
-  const sheet = buildCutSheet({ shop: null, ticket: null, garment: null, due: null, assignee: null, pageSize }, legs);
+  let sheet;
+  try {
+    sheet = buildCutSheet({ shop: null, ticket: null, garment: null, due: null, assignee: null, pageSize }, legs);
+  } catch (e) {
+    // Fields each sound, yet no plan (widths that give no leg at the cuff top): the engine says why.
+    if (!isAllowanceError(e)) throw e;
+    return bad(e.message, e.field ? { [e.field]: e.message } : {});
+  }
   const bytes = await renderCutSheet(sheet);
   return new Response(bytes, {
     headers: {

@@ -100,4 +100,17 @@ describe('POST /api/plan/sheet', () => {
     expect(broken.status).toBe(400);
     expect((await broken.json()).error).toMatch(/JSON/);
   });
+
+  it('answers 400, never 500, for taper widths each sound but giving no leg at the cuff top, on the leg at fault', async () => {
+    // 8 in flat at the edge and 1 in one inch higher: followed up 1 1/2 in there is no leg left.
+    const taper = { widthAtEdge: 8, widthAbove: 1, heightAbove: 1 };
+    const left = await post({ kind: 'cuff', unit: 'in', cuffDepth: 1.5, taper });
+    expect(left.status).toBe(400);
+    const body = await left.json();
+    expect(body.error).toMatch(/no leg/);
+    expect(Object.keys(body.fields)).toEqual(['taper.widthAbove']);
+    const right = await post({ kind: 'cuff', unit: 'in', cuffDepth: 1.5, right: { kind: 'cuff', unit: 'in', cuffDepth: 1.5, taper } });
+    expect(right.status).toBe(400);
+    expect(Object.keys((await right.json()).fields)).toEqual(['right.taper.widthAbove']);
+  });
 });
