@@ -4,7 +4,7 @@ import { fractionFromNumber } from './exact-number';
 import { formatExact } from './format-length';
 import { checkRange, parseExact } from './parse-length';
 import type { Precision, Unit } from './types';
-import { isUnit, mmPerUnitRatio } from './units';
+import { isPrecision, isUnit, mmPerUnitRatio } from './units';
 
 /** What a length field may hold beyond the ±200 in range. */
 export interface LengthRule {
@@ -13,10 +13,7 @@ export interface LengthRule {
   max?: Fraction;
 }
 
-/** True for 8, 16 and 32. */
-export function isPrecision(p: unknown): p is Precision {
-  return p === 8 || p === 16 || p === 32;
-}
+export { isPrecision } from './units';
 
 /**
  * Reads and checks a plan's inputs, naming the field in each AllowanceError. Throws the first
