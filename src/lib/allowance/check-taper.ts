@@ -1,7 +1,7 @@
 import Fraction from 'fraction.js';
 import { AllowanceError } from './allowance-error';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
-import { exactDefaults } from './defaults';
+import { exactDefaults, SHALLOWEST_CUFF_WHY } from './defaults';
 import { lenMaker } from './len';
 import { InputReader } from './read-input';
 import type { PlanWarning, Precision, TaperInput, TaperLine, TaperPlan, Unit } from './types';
@@ -27,7 +27,7 @@ const ONE = new Fraction(1);
 export function readTaperInput(input: TaperInput, r: InputReader): TaperValues {
   const defaults = exactDefaults(r.unit);
   const d =
-    r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', { required: true, min: 'positive', max: defaults.maxCuffDepth }) ??
+    r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', { required: true, min: 'positive', least: { value: defaults.shallowestCuff, why: SHALLOWEST_CUFF_WHY }, max: defaults.maxCuffDepth }) ??
     defaults.usualCuffDepth.min;
   const width = (value: unknown, field: string, label: string): Fraction =>
     r.length(value, field, label, { required: true, min: 'positive' }) ?? ONE;

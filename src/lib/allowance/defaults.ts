@@ -35,6 +35,9 @@ const inch = (n: number, d = 1): Fraction => new Fraction(n, d).mul(MM_PER_INCH)
 const mm = (n: number, d = 1): Fraction => new Fraction(n, d);
 const range = (min: Fraction, max: Fraction): ExactRange => ({ min, max, minMm: min.valueOf(), maxMm: max.valueOf() });
 
+/** Why a cuff shallower than the shallowest is refused, after "Cuff depth must be at least …". */
+export const SHALLOWEST_CUFF_WHY = 'a shallower cuff cannot be turned, pressed and tacked.';
+
 // Inch figures from TRADE.md; metric ones are our own round numbers near them (NIST: convert, then round sensibly).
 const IMPERIAL: ExactDefaults = {
   cuffTurnUnder: inch(1, 2),
@@ -42,7 +45,8 @@ const IMPERIAL: ExactDefaults = {
   hemTurnUnder: inch(1, 4),
   taperTolerance: inch(1, 8),
   facingSeam: inch(1, 2),
-  shallowestCuff: inch(1, 2),
+  // The smallest workable cuff (common practice, no source): shallower cannot be turned and tacked.
+  shallowestCuff: inch(3, 4),
   onFoldWithin: inch(1, 16),
   onFoldWithinMm: 25.4 / 16,
   maxCuffDepth: inch(6),
@@ -56,7 +60,7 @@ const METRIC: ExactDefaults = {
   hemTurnUnder: mm(6),
   taperTolerance: mm(3),
   facingSeam: mm(12),
-  shallowestCuff: mm(12),
+  shallowestCuff: mm(20),
   onFoldWithin: mm(3, 2),
   onFoldWithinMm: 1.5,
   maxCuffDepth: mm(150),

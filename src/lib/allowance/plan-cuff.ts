@@ -2,7 +2,7 @@ import Fraction from 'fraction.js';
 import { creaseLanding } from './crease-landing';
 import { cuffAlternatives } from './cuff-alternatives';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
-import { type ExactDefaults, exactDefaults } from './defaults';
+import { type ExactDefaults, exactDefaults, SHALLOWEST_CUFF_WHY } from './defaults';
 import { compareExact, type LenMaker, lenMaker } from './len';
 import { InputReader, type LengthRule } from './read-input';
 import type { CuffInput, CuffLine, CuffPlan, Len, PlanWarning, Precision, Unit } from './types';
@@ -31,6 +31,7 @@ export function readCuffInput(input: CuffInput, r: InputReader): CuffValues {
   const cuffDepth = r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', {
     required: true,
     min: 'positive',
+    least: { value: defaults.shallowestCuff, why: SHALLOWEST_CUFF_WHY },
     max: defaults.maxCuffDepth,
   });
   const d = cuffDepth ?? defaults.usualCuffDepth.min;

@@ -11,6 +11,8 @@ export interface LengthRule {
   required?: boolean;
   min?: 'positive' | 'non-negative';
   max?: Fraction;
+  /** the smallest workable value, with why (shown after "must be at least …") */
+  least?: { value: Fraction; why: string };
 }
 
 export { isPrecision } from './units';
@@ -68,6 +70,11 @@ export class InputReader {
     }
     if (rule.min === 'non-negative' && s < 0) {
       this.fail(new AllowanceError('negative', `${label} cannot be negative.`, field));
+      return null;
+    }
+    if (rule.least !== undefined && mm.compare(rule.least.value) < 0) {
+      const least = formatExact(rule.least.value, this.unit, this.precision);
+      this.fail(new AllowanceError('out-of-range', `${label} must be at least ${least}: ${rule.least.why}`, field));
       return null;
     }
     if (rule.max !== undefined && mm.compare(rule.max) > 0) {

@@ -53,7 +53,7 @@ export interface CuffLine {
 export interface CuffInput {
   unit: Unit;
   precision?: Precision;
-  /** finished height of the cuff */
+  /** finished height of the cuff; at least 3/4 in (20 mm metric), the shallowest workable */
   cuffDepth: LengthInput;
   /** third section, from the inner fold to the cut; default = cuffDepth */
   hemSection?: LengthInput;
@@ -84,7 +84,7 @@ export interface CreaseLanding {
 
 /** What can still be done when the cloth is short. */
 export interface CuffAlternatives {
-  /** deepest cuff, to the display step, that fits with three equal sections (null if under 1/2 in) */
+  /** deepest cuff, to the display step, that fits with three equal sections (null under the shallowest workable cuff, 3/4 in / 20 mm) */
   deepestCuff: Len | null;
   /** a plain hem with the usual allowance */
   plainHem: { required: Len; fits: boolean };

@@ -71,6 +71,8 @@ describe('checkTaper examples', () => {
     [{ tolerance: '-1/8' }, 'tolerance', 'negative'],
     [{ seamAllowance: -1 }, 'seamAllowance', 'negative'],
     [{ widthAtEdge: 1, widthAbove: 30, heightAbove: 2 }, 'widthAbove', 'out-of-range'],
+    // under the shallowest workable cuff, 3/4 in (common practice, no source)
+    [{ cuffDepth: 0.0001 }, 'cuffDepth', 'out-of-range'],
   ])('refuses %o in field %s (%s)', (fields, field, code) => {
     const input = { unit: 'in', cuffDepth: 1.5, widthAtEdge: 7, widthAbove: 8, heightAbove: 12, ...fields } as TaperInput;
     expect(() => checkTaper(input)).toThrow(AllowanceError);
@@ -81,7 +83,8 @@ describe('checkTaper examples', () => {
 describe('checkTaper laws', () => {
   const arb = fc.record({
     unit: fc.constantFrom<Unit>('in', 'cm', 'mm'),
-    d: fc.integer({ min: 16, max: 80 }),
+    // from the shallowest workable cuff (3/4 in / 20 mm; common practice, no source) up
+    d: fc.integer({ min: 40, max: 80 }),
     // realistic legs (1/32 in or half-mm steps): 5 to 12 in flat, 1½ in narrower to 3 in wider 6 to 25 in up
     wEdge: fc.integer({ min: 160, max: 400 }),
     delta: fc.integer({ min: -48, max: 96 }),

@@ -153,6 +153,15 @@ describe('planCuff: refusals carry the field', () => {
     expect(() => planCuff(null as unknown as CuffInput)).toThrow(AllowanceError);
   });
 
+  it('refuses a cuff under the shallowest workable, 3/4 in or 20 mm (common practice, no source): 0.0001 is no "0 in cuff"', () => {
+    for (const [unit, depth] of [['in', 0.0001], ['in', '11/16'], ['mm', 19.5], ['cm', '1.9']] as const) {
+      expect(() => planCuff({ unit, cuffDepth: depth })).toThrow(expect.objectContaining({ field: 'cuffDepth', code: 'out-of-range' }));
+    }
+    expect(() => planCuff({ unit: 'in', cuffDepth: 0.0001 })).toThrow(/at least 3\/4 in/);
+    expect(planCuff({ unit: 'in', cuffDepth: '3/4' }).cuffDepth.text).toBe('3/4 in');
+    expect(planCuff({ unit: 'mm', cuffDepth: 20 }).cuffDepth.text).toBe('20 mm');
+  });
+
   it('allows a 6 in cuff at most, 150 mm metric (our limit)', () => {
     expect(planCuff({ unit: 'in', cuffDepth: 6 }).cuffDepth.text).toBe('6 in');
     expect(() => planCuff({ unit: 'mm', cuffDepth: 150.5 })).toThrow(/at most 150 mm/);
@@ -177,7 +186,8 @@ interface Gen {
 const genArb: fc.Arbitrary<Gen> = fc
   .record({
     unit: fc.constantFrom<Unit>('in', 'cm', 'mm'),
-    d: fc.integer({ min: 1, max: 150 }),
+    // from the shallowest workable cuff (20 mm, 3/4 in; common practice, no source) up, in 1/32 in or 0.5 mm steps
+    d: fc.integer({ min: 40, max: 150 }),
     m: fc.option(fc.integer({ min: 1, max: 150 })),
     u: fc.option(fc.integer({ min: 0, max: 40 })),
     t: fc.integer({ min: 0, max: 4 }),
