@@ -23,6 +23,8 @@ export interface ExactDefaults {
   taperTolerance: Fraction;
   facingSeam: Fraction;
   shallowestCuff: Fraction;
+  /** cloth a third section needs above its turn-under to hold the stitch safely */
+  safeStitch: Fraction;
   onFoldWithin: Fraction;
   /** onFoldWithin as a number, for the quick test before the exact one */
   onFoldWithinMm: number;
@@ -47,6 +49,8 @@ const IMPERIAL: ExactDefaults = {
   facingSeam: inch(1, 2),
   // The smallest workable cuff (common practice, no source): shallower cannot be turned and tacked.
   shallowestCuff: inch(3, 4),
+  // A third section keeps the turn-under and 1/4 in above it for the stitch (common practice, no source).
+  safeStitch: inch(1, 4),
   onFoldWithin: inch(1, 16),
   onFoldWithinMm: 25.4 / 16,
   maxCuffDepth: inch(6),
@@ -61,6 +65,7 @@ const METRIC: ExactDefaults = {
   taperTolerance: mm(3),
   facingSeam: mm(12),
   shallowestCuff: mm(20),
+  safeStitch: mm(6),
   onFoldWithin: mm(3, 2),
   onFoldWithinMm: 1.5,
   maxCuffDepth: mm(150),
@@ -93,6 +98,7 @@ function shown(unit: Unit): PlanDefaults {
     taperTolerance: l(e.taperTolerance),
     facingSeam: l(e.facingSeam),
     shallowestCuff: l(e.shallowestCuff),
+    safeStitch: l(e.safeStitch),
     onFoldWithin: l(e.onFoldWithin),
     maxCuffDepth: l(e.maxCuffDepth),
     usualCuffDepth: { min: l(e.usualCuffDepth.min), max: l(e.usualCuffDepth.max) },

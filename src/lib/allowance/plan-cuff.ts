@@ -63,6 +63,13 @@ function cuffWarnings(v: CuffValues, shown: Shown, defaults: ExactDefaults, len:
       message: `The third section (${shown.section.text}) is no deeper than the turn-under (${shown.turnUnder.text}): nothing is left to hold the cuff inside. Make the third section deeper or the turn-under narrower.`,
     });
   }
+  // The turned-under edge's stitching sits (third section − turn-under) above the bottom: over the cuff top it shows.
+  if (v.hemSection.sub(v.turnUnder).compare(v.cuffDepth) > 0) {
+    warnings.push({
+      code: 'stitching-above-cuff',
+      message: `The third section (${shown.section.text}) less the turn-under (${shown.turnUnder.text}) is deeper than the ${shown.depth.text} cuff: the stitching would show above the cuff. Make the third section shorter.`,
+    });
+  }
   const usual = defaults.usualCuffDepth;
   const d = shown.depth.mm;
   if (compareExact(v.cuffDepth, d, usual.min, usual.minMm) < 0 || compareExact(v.cuffDepth, d, usual.max, usual.maxMm) > 0) {
@@ -80,8 +87,9 @@ function cuffWarnings(v: CuffValues, shown: Shown, defaults: ExactDefaults, len:
   return warnings;
 }
 
-function shortMessage(required: Len, available: Len, shortBy: Len, alt: NonNullable<CuffPlan['alternatives']>): string {
+function shortMessage(required: Len, available: Len, shortBy: Len, depth: Len, alt: NonNullable<CuffPlan['alternatives']>): string {
   const fits: string[] = [];
+  if (alt.shorterSection !== null) fits.push(`the ${depth.text} cuff with a ${alt.shorterSection.text} third section`);
   if (alt.deepestCuff !== null) fits.push(`a ${alt.deepestCuff.text} cuff with three equal sections`);
   if (alt.facedCuff.fits) fits.push(`a faced cuff (${alt.facedCuff.required.text} of this cloth and a facing)`);
   if (alt.plainHem.fits) fits.push(`a plain hem (${alt.plainHem.required.text})`);
@@ -129,6 +137,9 @@ export function planCuff(input: CuffInput): CuffPlan {
       shortBy = len(rest, true);
       alternatives = cuffAlternatives({
         available: A,
+        cuffDepth: v.cuffDepth,
+        hemSection: v.hemSection,
+        turnUnder: v.turnUnder,
         innerFold: positions.innerFold,
         clothThickness: v.clothThickness,
         unit: v.unit,
@@ -136,7 +147,7 @@ export function planCuff(input: CuffInput): CuffPlan {
         defaults,
         len,
       });
-      warnings.unshift({ code: 'not-enough-cloth', message: shortMessage(required, lines[0]!.aboveRawEdge!, shortBy, alternatives) });
+      warnings.unshift({ code: 'not-enough-cloth', message: shortMessage(required, lines[0]!.aboveRawEdge!, shortBy, depth, alternatives) });
     }
   }
   const plan: CuffPlan = {

@@ -28,6 +28,7 @@ export interface PlanWarning {
 export type WarningCode =
   | 'not-enough-cloth'
   | 'third-section-too-small'
+  | 'stitching-above-cuff'
   | 'cuff-depth-unusual'
   | 'slope-on-cuff'
   | 'old-crease-visible'
@@ -82,9 +83,11 @@ export interface CreaseLanding {
   message: string;
 }
 
-/** What can still be done when the cloth is short. */
+/** What can still be done when the cloth is short, in the order to offer them. */
 export interface CuffAlternatives {
-  /** deepest cuff, to the display step, that fits with three equal sections (null under the shallowest workable cuff, 3/4 in / 20 mm) */
+  /** the customer's cuff depth kept, on the longest third section that fits and still holds the turn-under and a safe stitch (null if none) */
+  shorterSection: Len | null;
+  /** deepest cuff shallower than asked, to the display step, that fits with three equal sections (null under the shallowest workable cuff, 3/4 in / 20 mm) */
   deepestCuff: Len | null;
   /** a plain hem with the usual allowance */
   plainHem: { required: Len; fits: boolean };

@@ -150,6 +150,7 @@ function clothCheck(leg: LegSheet): SheetLegGroup['cloth'] {
   const options: string[] = [];
   if (p.kind === 'cuff' && p.alternatives) {
     const alt = p.alternatives;
+    if (alt.shorterSection) options.push(`Keep the ${p.cuffDepth.text} cuff with a shorter third section: ${alt.shorterSection.text} fits.`);
     if (alt.deepestCuff) options.push(`A shallower cuff: ${alt.deepestCuff.text} deep fits.`);
     options.push(`A plain hem needs ${alt.plainHem.required.text}: ${alt.plainHem.fits ? 'fits' : 'does not fit'}.`);
     options.push(`A faced cuff needs ${alt.facedCuff.required.text}: ${alt.facedCuff.fits ? 'fits' : 'does not fit'}.`);

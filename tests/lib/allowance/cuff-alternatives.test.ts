@@ -9,6 +9,9 @@ const inch = (n: number, d = 1) => new Fraction(n, d).mul(new Fraction(127, 5));
 function ctx(available: Fraction, d: Fraction, t = new Fraction(0), precision: 8 | 16 = 16) {
   return {
     available,
+    cuffDepth: d,
+    hemSection: d,
+    turnUnder: inch(1, 2),
     innerFold: d.add(t).mul(2),
     clothThickness: t,
     unit: 'in' as const,

@@ -109,6 +109,35 @@ describe('planCuff: cloth check', () => {
     expect(plan.warnings[0]!.message).toMatch(/face the hem/);
   });
 
+  it('a shallower cuff is shallower: 1¼ in asked, third section 2¼ in, 4 11/16 in of cloth offers 1 3/16 in, never 1 9/16 in (arithmetic)', () => {
+    const plan = planCuff({ unit: 'in', cuffDepth: '1 1/4', hemSection: '2 1/4', available: '4 11/16' });
+    expect(plan.enough).toBe(false);
+    // 1¼ in less one 1/16 step (the three-times rule would allow 4 11/16 / 3 = 1 9/16 in)
+    expect(plan.alternatives?.deepestCuff?.text).toBe('1 3/16 in');
+  });
+
+  it('short cloth first offers the customer\'s depth on a shorter third section: 1½ in cuff in 4 1/4 in keeps 1½ in with 1¼ in (arithmetic; turn-under ½ in + ¼ in stitch, common practice (no source))', () => {
+    const plan = planCuff({ unit: 'in', cuffDepth: '1 1/2', available: '4 1/4' });
+    expect(plan.alternatives?.shorterSection?.text).toBe('1 1/4 in');
+    const message = plan.warnings.find((w) => w.code === 'not-enough-cloth')!.message;
+    expect(message).toContain('the 1 1/2 in cuff with a 1 1/4 in third section');
+    expect(message.indexOf('third section')).toBeLessThan(message.indexOf('three equal sections'));
+    // 3 in + 3/4 in is the least: turn-under 1/2 in and 1/4 in to stitch (common practice (no source))
+    expect(planCuff({ unit: 'in', cuffDepth: '1 1/2', available: '3 3/4' }).alternatives?.shorterSection?.text).toBe('3/4 in');
+    expect(planCuff({ unit: 'in', cuffDepth: '1 1/2', available: '3 11/16' }).alternatives?.shorterSection).toBeNull();
+    // the offer never puts the stitching above the cuff: at most cuff depth + turn-under, 1 3/4 in for a 1¼ in cuff
+    expect(planCuff({ unit: 'in', cuffDepth: '1 1/4', hemSection: '2 1/4', available: '4 11/16' }).alternatives?.shorterSection?.text).toBe('1 3/4 in');
+  });
+
+  it('warns when the third section less the turn-under is deeper than the cuff: the stitching would show (fold arithmetic)', () => {
+    const codes = (i: Partial<CuffInput>) => planCuff({ unit: 'in', cuffDepth: '1 1/4', ...i }).warnings.map((w) => w.code);
+    // 2 in − 1/2 in = 1 1/2 in > 1 1/4 in
+    expect(codes({ hemSection: '2' })).toContain('stitching-above-cuff');
+    // 1 3/4 in − 1/2 in = 1 1/4 in: level with the cuff top, not above it
+    expect(codes({ hemSection: '1 3/4' })).not.toContain('stitching-above-cuff');
+    expect(codes({})).not.toContain('stitching-above-cuff');
+  });
+
   it('metric shortfall rounds the deepest cuff down to 0.5 mm: 100 mm → 33 mm (100/3 = 33.33; arithmetic)', () => {
     const plan = planCuff({ unit: 'mm', cuffDepth: 40, available: 100 });
     expect(plan.shortBy?.text).toBe('20 mm');
@@ -274,7 +303,7 @@ describe('planCuff laws', () => {
     );
   });
 
-  it('the deepest cuff offered fits with three equal sections and one display step more would not', () => {
+  it('the deepest cuff offered fits with three equal sections and one display step more would not fit or would not be shallower', () => {
     fc.assert(
       fc.property(genArb, (g) => {
         const alt = planCuff(inputOf(g)).alternatives;
@@ -284,7 +313,24 @@ describe('planCuff laws', () => {
         const deep = mmOf(g, 0).add(alt.deepestCuff.mm.toString());
         const step = g.unit === 'in' ? new Fraction(254, 160) : new Fraction(1, 2);
         expect(deep.mul(3).add(t.mul(2)).compare(available)).toBeLessThanOrEqual(0);
-        expect(deep.add(step).mul(3).add(t.mul(2)).compare(available)).toBeGreaterThan(0);
+        const more = deep.add(step);
+        expect(more.mul(3).add(t.mul(2)).compare(available) > 0 || more.compare(mmOf(g, g.d)) >= 0).toBe(true);
+      }),
+    );
+  });
+
+  it('alternatives are always smaller than what was asked, and fit', () => {
+    fc.assert(
+      fc.property(genArb, (g) => {
+        const plan = planCuff(inputOf(g));
+        const alt = plan.alternatives;
+        if (alt === null) return;
+        if (alt.deepestCuff !== null) expect(alt.deepestCuff.mm).toBeLessThan(plan.cuffDepth.mm);
+        if (alt.shorterSection !== null) {
+          expect(alt.shorterSection.mm).toBeLessThan(plan.hemSection.mm);
+          expect(alt.shorterSection.mm).toBeGreaterThanOrEqual(plan.turnUnder.mm);
+          expect(plan.lines[2]!.belowMark.mm + alt.shorterSection.mm).toBeLessThanOrEqual(mmOf(g, g.a!).valueOf() + 1e-9);
+        }
       }),
     );
   });
