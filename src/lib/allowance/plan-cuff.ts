@@ -128,9 +128,8 @@ export function planCuff(input: CuffInput): CuffPlan {
   let alternatives: CuffPlan['alternatives'] = null;
   if (A !== null) {
     const rest = aboveRaw![3]!;
-    const restMm = lines[3]!.aboveRawEdge!.mm;
-    // The number's sign is the exact sign unless it is 0, which the Fraction then settles.
-    enough = restMm > 0 || (restMm === 0 && (rest.n === 0n || rest.s > 0n));
+    // Decided on the exact value: a float of it can be 0 or NaN (1e-310, huge denominators) and flip the check.
+    enough = rest.n === 0n || rest.s > 0n;
     if (enough) {
       spare = { ...lines[3]!.aboveRawEdge! };
     } else {

@@ -89,7 +89,9 @@ export class InputReader {
     if (typeof value === 'number') {
       if (!Number.isFinite(value)) throw new AllowanceError('not-a-length', 'A length must be a finite number.');
       const [a, b] = mmPerUnitRatio(this.unit);
-      if (Math.abs(value) * a > 5079 * b) return checkRange(fractionFromNumber(value, a, b));
+      // The range check also refuses 1e-310 and other lengths under a thousandth of a mm.
+      const tiny = value !== 0 && Math.abs(value) * a < b / 1000;
+      if (tiny || Math.abs(value) * a > 5079 * b) return checkRange(fractionFromNumber(value, a, b));
       return fractionFromNumber(value, a, b);
     }
     if (typeof value === 'string') return parseExact(value, this.unit);

@@ -138,6 +138,16 @@ describe('planCuff: cloth check', () => {
     expect(codes({})).not.toContain('stitching-above-cuff');
   });
 
+  it('a turn of cloth of 1e-310 is refused, not turned into a float that flips the cloth check (our rule: under 1/1000 mm is no length)', () => {
+    expect(() => planCuff({ unit: 'in', cuffDepth: 1.5, available: 5, clothThickness: 1e-310 })).toThrow(
+      expect.objectContaining({ field: 'clothThickness', code: 'out-of-range' }),
+    );
+    expect(() => planCuff({ unit: 'mm', cuffDepth: 38, available: 5, clothThickness: '1/10000' })).toThrow(/thousandth of a millimetre/);
+    // 0 stays 0, and a thousandth of a mm is still a length
+    expect(planCuff({ unit: 'in', cuffDepth: 1.5, available: 5, clothThickness: 0 }).enough).toBe(true);
+    expect(planCuff({ unit: 'mm', cuffDepth: 38, available: 115, clothThickness: '0.001' }).enough).toBe(true);
+  });
+
   it('metric shortfall rounds the deepest cuff down to 0.5 mm: 100 mm → 33 mm (100/3 = 33.33; arithmetic)', () => {
     const plan = planCuff({ unit: 'mm', cuffDepth: 40, available: 100 });
     expect(plan.shortBy?.text).toBe('20 mm');
