@@ -54,15 +54,32 @@ function isPositive(f: Fraction): boolean {
   return f.s > 0n && f.n !== 0n;
 }
 
-/** Check a tapered leg under a cuff: the work at each chalk line to keep the cuff-top width straight down. */
-export function checkTaper(input: TaperInput): TaperPlan {
-  const v = readTaperInput(input, new InputReader(input, false));
-  const len = lenMaker(v.unit, v.precision);
+/**
+ * Why these widths make no plan (the taper followed down gives no leg at the cuff top or at a line),
+ * or null. Checked on save too, so a fitting that cannot be planned is never kept.
+ */
+export function taperShapeError(v: TaperValues): AllowanceError | null {
   const slope = taperSlope(v);
   const target = v.widthAtEdge.add(slope.mul(v.cuffDepth));
   if (!isPositive(target)) {
-    throw new AllowanceError('out-of-range', 'These widths give no leg at the cuff top: check the two widths and the height.', 'widthAbove');
+    return new AllowanceError('out-of-range', 'These widths give no leg at the cuff top: check the two widths and the height.', 'widthAbove');
   }
+  const cut = cuffLinePositions(v.cuffDepth, v.hemSection, v.clothThickness).cut;
+  // The width is straight in the height, so the lowest line (the cut) is the narrowest or widest: check it.
+  if (!isPositive(v.widthAtEdge.sub(slope.mul(cut))) || !isPositive(v.widthAtEdge)) {
+    return new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove');
+  }
+  return null;
+}
+
+/** Check a tapered leg under a cuff: the work at each chalk line to keep the cuff-top width straight down. */
+export function checkTaper(input: TaperInput): TaperPlan {
+  const v = readTaperInput(input, new InputReader(input, false));
+  const shapeError = taperShapeError(v);
+  if (shapeError) throw shapeError;
+  const len = lenMaker(v.unit, v.precision);
+  const slope = taperSlope(v);
+  const target = v.widthAtEdge.add(slope.mul(v.cuffDepth));
   const positions = linePositionList(cuffLinePositions(v.cuffDepth, v.hemSection, v.clothThickness));
   let worst = ZERO;
   let mostPerSide: Fraction | null = null;
@@ -71,9 +88,6 @@ export function checkTaper(input: TaperInput): TaperPlan {
     // A line below the mark sits at height −below; the change is what brings it back to the target.
     const change = k === 0 ? target.sub(v.widthAtEdge) : slope.mul(v.cuffDepth.add(below));
     const width = target.sub(change);
-    if (!isPositive(width)) {
-      throw new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove');
-    }
     const perSide = change.div(2);
     const size = change.abs();
     if (size.compare(worst.abs()) > 0) worst = change;
@@ -103,7 +117,8 @@ export function checkTaper(input: TaperInput): TaperPlan {
         : `The leg widens below the cuff top: at worst ${by} wider (flat) than at the cuff top. Take in the inseam and outseam from the cuff top down to the cut, up to ${side} on each side of each seam, so the cuff lies flat.`,
     });
   }
-  const feasible = v.seamAllowance === null ? null : most.compare(v.seamAllowance) <= 0;
+  // Within tolerance no seam is touched, so even a seam with nothing to let out (flat-felled) will do.
+  const feasible = v.seamAllowance === null ? null : withinTolerance || most.compare(v.seamAllowance) <= 0;
   if (feasible === false) {
     warnings.push({
       code: 'let-out-exceeds-seam-allowance',

@@ -1,5 +1,5 @@
 import { AllowanceError } from './allowance-error';
-import { readTaperInput } from './check-taper';
+import { readTaperInput, taperShapeError } from './check-taper';
 import { readCuffInput } from './plan-cuff';
 import { readHemInput } from './plan-hem';
 import { InputReader } from './read-input';
@@ -26,7 +26,12 @@ export function validateHemInput(input: unknown): AllowanceError[] {
   return collect<HemInput>(input, readHemInput);
 }
 
-/** Every problem with a taper input, one AllowanceError per field (empty when the fields are sound). */
+/** Every problem with a taper input, one AllowanceError per field (empty when checkTaper will accept it). */
 export function validateTaperInput(input: unknown): AllowanceError[] {
-  return collect<TaperInput>(input, readTaperInput);
+  return collect<TaperInput>(input, (i, r) => {
+    const v = readTaperInput(i, r);
+    // The widths' shape is only judged once every field could be read.
+    const shape = r.errors.length === 0 ? taperShapeError(v) : null;
+    if (shape) r.errors.push(shape);
+  });
 }
