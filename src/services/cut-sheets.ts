@@ -5,6 +5,7 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import { db } from '@/db';
 import { customers, garments, tickets, user, type Garment } from '@/db/schema';
+import { isAllowanceError, withUnitsNamed } from '@/lib/allowance';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import type { Actor } from '@/lib/api';
 import { scaleUnit, ticketLabel } from '@/lib/bench-requests';
@@ -53,12 +54,19 @@ async function scaleOf(shopId: string, opts: SheetOptions): Promise<{ unit: Unit
 
 // A fitting typed in one unit and printed in another: the typed text keeps its own unit, so the
 // engine reads it exactly ("1 1/2 in" in a mm plan is 38.1 mm) rather than from a rounded mm.
+// Every bare part gets the fitting's unit ("30 + 5 mm" typed in inches is 30 in + 5 mm).
 function inUnit(leg: LegValues, from: Unit, to: Unit): LegValues {
   if (from === to) return leg;
   const out = { ...leg };
   for (const f of LEG_LENGTHS) {
     const text = out[f].trim();
-    if (text !== '' && !/[a-z"″]/i.test(text)) out[f] = `${text} ${from}`;
+    if (text === '') continue;
+    try {
+      out[f] = withUnitsNamed(text, from);
+    } catch (e) {
+      // Saved text the reader now refuses is left as typed; the plan's own check names the field.
+      if (!isAllowanceError(e)) throw e;
+    }
   }
   return out;
 }

@@ -4,7 +4,7 @@
 export type * from './types';
 export { AllowanceError, isAllowanceError, type AllowanceErrorCode } from './allowance-error';
 export { formatLength, splitFraction, type SplitFraction } from './format-length';
-export { parseLength } from './parse-length';
+export { parseLength, withUnitsNamed } from './parse-length';
 export { planCuff } from './plan-cuff';
 export { planHem } from './plan-hem';
 export { checkTaper } from './check-taper';

@@ -64,6 +64,22 @@ export function parseExactWithMathjs(text: string, unit: Unit): Fraction {
   return checkRange(evaluateTerms(terms, termUnits(terms, unit)));
 }
 
+/**
+ * Typed text rewritten with every part's unit named ("30 + 5 mm" in an inch plan → "30 in + 5 mm"),
+ * so it reads the same in a plan of another unit. Throws AllowanceError as parseLength does.
+ */
+export function withUnitsNamed(text: string, unit: Unit): string {
+  const terms = readLengthTerms(text);
+  const units = termUnits(terms, unit);
+  return terms
+    .map((t, k) => {
+      const number = [t.whole, t.num === null ? null : `${t.num}/${t.den}`].filter((p) => p !== null).join(' ');
+      const part = `${number} ${units[k]}`;
+      return k === 0 ? (t.sign < 0 ? `-${part}` : part) : `${t.sign < 0 ? '-' : '+'} ${part}`;
+    })
+    .join(' ');
+}
+
 /** Read typed text ("1 1/2", "1½", "38 mm", "31 3/4 + 1/8") as a length; the unit is the plan's unless named. */
 export function parseLength(text: string, unit: Unit, precision: Precision = 16): Len {
   if (typeof text !== 'string') throw new AllowanceError('not-a-length', 'A length must be given as text.');
