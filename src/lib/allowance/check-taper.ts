@@ -110,14 +110,18 @@ export function checkTaper(input: TaperInput): TaperPlan {
     const wider = worst.s > 0n;
     const by = len(worst.abs()).text;
     const side = len(worst.abs().div(2)).text;
+    // "From the cuff top" is ambiguous on the chalked leg: line 2, "Cuff top", is one depth BELOW the
+    // mark, but the width to keep is one depth ABOVE the finished edge. Name the distances instead.
+    const from = len(v.cuffDepth).text;
+    const to = len(positions[3]!).text;
+    const span = `from ${from} above the finished edge (the pin mark, line 1) down to the cutting line, ${to} below it`;
     warnings.push({
       code: 'taper-beyond-tolerance',
       message: wider
-        ? `The leg narrows below the cuff top: at worst ${by} narrower (flat) than at the cuff top. Let out the inseam and outseam from the cuff top down to the cut, up to ${side} on each side of each seam, so the cuff lies flat.`
-        : `The leg widens below the cuff top: at worst ${by} wider (flat) than at the cuff top. Take in the inseam and outseam from the cuff top down to the cut, up to ${side} on each side of each seam, so the cuff lies flat.`,
+        ? `The leg narrows below where the cuff top will sit (${from} above the finished edge): at worst ${by} narrower (flat) than there. Let out the inseam and outseam ${span}, up to ${side} on each side of each seam, so the cuff lies flat.`
+        : `The leg widens below where the cuff top will sit (${from} above the finished edge): at worst ${by} wider (flat) than there. Take in the inseam and outseam ${span}, up to ${side} on each side of each seam, so the cuff lies flat.`,
     });
   }
-  // Within tolerance no seam is touched, so even a seam with nothing to let out (flat-felled) will do.
   const feasible = v.seamAllowance === null ? null : withinTolerance || most.compare(v.seamAllowance) <= 0;
   if (feasible === false) {
     warnings.push({

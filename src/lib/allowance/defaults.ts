@@ -132,3 +132,11 @@ export const USUAL_CUFF_DEPTHS: Readonly<Record<Unit, readonly UsualCuffDepth[]>
   cm: usualDepths('cm'),
   mm: usualDepths('mm'),
 };
+
+/** The usual depths in words, inches listed and metric as a range, from the same figures: "1 1/4, 1 1/2 or 1 3/4 in, or 3.2–4.4 cm". */
+export function usualCuffDepthsText(): string {
+  const classic = (u: Unit) => USUAL_CUFF_DEPTHS[u].filter((d) => d.note !== 'modern').map((d) => d.depth.text);
+  const inches = classic('in').map((t) => t.replace(/ in$/, ''));
+  const cm = classic('cm');
+  return `${inches.slice(0, -1).join(', ')} or ${inches.at(-1)} in, or ${cm[0]!.replace(/ cm$/, '')}–${cm.at(-1)}`;
+}

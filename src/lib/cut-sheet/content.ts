@@ -61,6 +61,14 @@ export const UNSAVED_TITLE = 'Unsaved plan from the calculator';
 /** Stitch lengths printed on the sheet, in mm (TRADE.md, common practice). */
 export const STITCH = { long: 'about 4 mm', short: 'about 2 mm', standard: 'about 2.5–3 mm' } as const;
 
+// Inch shops set stitches per inch: 25.4/4 ≈ 6, 25.4/2 ≈ 13, 8–10 per inch (TRADE.md); mm beside.
+const STITCH_PER_INCH = { long: 'about 6 per inch, 4 mm', short: 'about 13 per inch, 2 mm', standard: '8–10 per inch, 2.5–3 mm' } as const;
+
+/** The stitch lengths as a sheet in this unit prints them: per inch (with mm) on inch sheets, mm on metric ones. */
+export function stitchLengths(unit: Unit): Record<keyof typeof STITCH, string> {
+  return unit === 'in' ? STITCH_PER_INCH : STITCH;
+}
+
 // Tack placement (TRADE.md: about 1/8 to 3/16 in below the cuff top, about 1/8 in wide).
 const TACK: Record<Unit, { below: string; wide: string }> = {
   in: { below: '1/8 to 3/16 in', wide: '1/8 in' },
@@ -150,7 +158,7 @@ function clothCheck(leg: LegSheet): SheetLegGroup['cloth'] {
   const options: string[] = [];
   if (p.kind === 'cuff' && p.alternatives) {
     const alt = p.alternatives;
-    if (alt.shorterSection) options.push(`Keep the ${p.cuffDepth.text} cuff with a shorter third section: ${alt.shorterSection.text} fits.`);
+    if (alt.shorterSection) options.push(`Same cuff, third section ${alt.shorterSection.text}: fits.`);
     if (alt.deepestCuff) options.push(`A shallower cuff: ${alt.deepestCuff.text} deep fits.`);
     options.push(`A plain hem needs ${alt.plainHem.required.text}: ${alt.plainHem.fits ? 'fits' : 'does not fit'}.`);
     options.push(`A faced cuff needs ${alt.facedCuff.required.text}: ${alt.facedCuff.fits ? 'fits' : 'does not fit'}.`);
@@ -174,8 +182,10 @@ function taperOf(leg: LegSheet): SheetLegGroup['taper'] {
         ? 'as it is'
         : `${l.change.mm > 0 ? 'let out' : 'take in'} ${unsigned(l.perSeam)} at each seam (${unsigned(l.perSide)} each side)`,
   }));
-  let summary = `Taper: keep the cuff-top width, ${t.targetWidth.text} flat, straight down to the cutting line.`;
-  if (t.withinTolerance) summary = `Taper within tolerance: no seam work needed (cuff top ${t.targetWidth.text} flat).`;
+  // Named by its height above the finished edge: the chalked "Cuff top" line is one depth below the mark.
+  const above = leg.plan.cuffDepth.text;
+  let summary = `Taper: keep the width ${above} above the finished edge (${t.targetWidth.text} flat) straight down to the cutting line.`;
+  if (t.withinTolerance) summary = `Taper within tolerance: no seam work needed (${t.targetWidth.text} flat ${above} above the edge).`;
   const moves = t.lines
     .filter((l) => l.change.mm !== 0)
     .map((l) => `${l.change.mm > 0 ? 'let out' : 'take in'} ${unsigned(l.perSeam)} at line ${l.n}`);
@@ -229,6 +239,7 @@ function groupOf(leg: LegSheet, label: string, existing: ExistingFinish | undefi
 /** Bench steps for a cuff, in the order they are done; taperStep is the seam work, if any. */
 export function cuffSteps(unit: Unit, turnUnder: string, taperStep: string | null): string[] {
   const tack = TACK[unit];
+  const STITCH = stitchLengths(unit);
   return [
     "Chalk the four lines level round the leg with dry tailor's chalk, not wax (wax leaves a mark under the iron). Measure each from the pin mark.",
     ...(taperStep ? [taperStep] : []),
@@ -241,8 +252,9 @@ export function cuffSteps(unit: Unit, turnUnder: string, taperStep: string | nul
   ];
 }
 
-/** Bench steps for a plain hem, in the order they are done. */
-export function hemSteps(turnUnder: string, sloped: boolean): string[] {
+/** Bench steps for a plain hem, in the order they are done (stitch lengths per inch on inch sheets). */
+export function hemSteps(turnUnder: string, sloped: boolean, unit: Unit = 'mm'): string[] {
+  const STITCH = stitchLengths(unit);
   return [
     `Chalk the two lines ${sloped ? 'round the leg, sloping down to the back,' : 'level round the leg'} with dry tailor's chalk, not wax (wax leaves a mark under the iron).`,
     'Cut on line 2, the cutting line.',
@@ -269,10 +281,13 @@ function stepsOf(groups: SheetLegGroup[]): SheetContent['steps'] {
   const turnUnder = perLeg(groups, (g) => g.leg.plan.turnUnder.text);
   const first = groups[0]!.leg;
   if (first.finish === 'hem') {
-    return [{ heading: null, items: hemSteps(turnUnder, groups.some((g) => g.leg.finish === 'hem' && g.leg.plan.slope.mm !== 0)) }];
+    return [{ heading: null, items: hemSteps(turnUnder, groups.some((g) => g.leg.finish === 'hem' && g.leg.plan.slope.mm !== 0), first.plan.unit) }];
   }
   const tapered = groups.filter((g) => g.leg.finish === 'cuff' && g.leg.taper && !g.leg.taper.plan.withinTolerance);
-  const seamWork = 'Re-chalk both leg seams straight down from the cuff top to the cutting line, as in the taper note.';
+  const from = perLeg(tapered.length ? tapered : groups, (g) => g.leg.plan.cuffDepth.text);
+  // Re-chalking alone leaves the old stitching: the seam is unpicked, sewn on the new line and pressed
+  // open before the bottom is cut and folded, or the cuff is folded over the old, tapered seam.
+  const seamWork = `Before cutting, unpick both leg seams from ${from} above the finished edge to the cut line; re-stitch straight down (taper note), press open (hot iron: your shop's way).`;
   const taperStep =
     tapered.length === 0 ? null : tapered.length === groups.length ? seamWork : `${tapered.map((g) => g.label).join(', ')}: ${seamWork[0]!.toLowerCase()}${seamWork.slice(1)}`;
   return [{ heading: null, items: cuffSteps(first.plan.unit, turnUnder, taperStep) }];

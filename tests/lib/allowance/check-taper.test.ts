@@ -29,7 +29,12 @@ describe('checkTaper examples', () => {
     expect(plan.withinTolerance).toBe(false);
     expect(plan.feasible).toBeNull();
     expect(plan.warnings.map((w) => w.code)).toEqual(['taper-beyond-tolerance']);
-    expect(plan.warnings[0]!.message).toMatch(/Let out the inseam and outseam from the cuff top down to the cut/);
+    // The let-out starts one cuff depth ABOVE the finished edge (TRADE.md fold plan), not at the chalked
+    // "Cuff top" line one depth below the mark: the message names the distances.
+    expect(plan.warnings[0]!.message).toContain(
+      'Let out the inseam and outseam from 1 1/2 in above the finished edge (the pin mark, line 1) down to the cutting line, 4 1/2 in below it, up to 1/8 in on each side of each seam',
+    );
+    expect(plan.warnings[0]!.message).not.toMatch(/from the cuff top/);
     expect(plan.warnings[0]!.message).toContain('1/8 in on each side');
   });
 

@@ -14,7 +14,43 @@ describe('cut sheet: cloth options', () => {
   it("offers the customer's cuff depth on a shorter third section before a shallower cuff (arithmetic: 4 1/4 in − 3 in)", () => {
     const c = sheet({ finish: 'cuff', input: { unit: 'in', cuffDepth: '1 1/2', available: '4 1/4' } });
     const options = c.groups[0]!.cloth.options;
-    expect(options[0]).toBe('Keep the 1 1/2 in cuff with a shorter third section: 1 1/4 in fits.');
+    expect(options[0]).toBe('Same cuff, third section 1 1/4 in: fits.');
     expect(options[1]).toMatch(/^A shallower cuff: 1 3\/8 in deep fits\.$/);
+  });
+});
+
+describe('cut sheet: the taper work', () => {
+  // 7 in flat at the edge, 8 in 24 in up, 1½ in cuff: ¼ in to let out at the cut (TRADE.md: Fit For A Queen 2012)
+  const tapered = sheet({ finish: 'cuff', input: { unit: 'in', cuffDepth: '1 1/2' }, taper: { widthAtEdge: '7', widthAbove: '8', heightAbove: '24' } });
+
+  it('names where the let-out starts by its distance from the finished edge, not "the cuff top" (TRADE.md fold plan)', () => {
+    const taper = tapered.groups[0]!.taper!;
+    expect(taper.summary).toContain('keep the width 1 1/2 in above the finished edge (7 1/16 in flat) straight down to the cutting line');
+    const warnings = tapered.groups[0]!.warnings.join(' ');
+    expect(warnings).not.toMatch(/from the cuff top/);
+  });
+
+  it('says unpick, re-stitch on the new line and press the seam open, before cutting, with the iron caution deferring to the shop (TRADE.md cautions)', () => {
+    const items = tapered.steps[0]!.items;
+    const step = items.findIndex((i) => /unpick both leg seams/.test(i));
+    expect(step).toBeGreaterThan(0);
+    expect(items[step]).toContain('Before cutting, unpick both leg seams from 1 1/2 in above the finished edge to the cut line');
+    expect(items[step]).toMatch(/re-stitch straight down \(taper note\), press open/);
+    expect(items[step]).toMatch(/hot iron: your shop's way/);
+    expect(step).toBeLessThan(items.findIndex((i) => i.startsWith('Cut on line 4')));
+    expect(items.join(' ')).not.toMatch(/^Re-chalk/m);
+  });
+});
+
+describe('cut sheet: stitch lengths', () => {
+  it('on an inch sheet in stitches per inch with mm beside; on a metric sheet in mm (TRADE.md: 2.5–3 mm = 8–10 per inch; 4 mm ≈ 6, 2 mm ≈ 13 per inch by 25.4 mm/in)', () => {
+    const inch = sheet({ finish: 'cuff', input: { unit: 'in', cuffDepth: '1 1/2' } }).steps[0]!.items.join(' ');
+    expect(inch).toContain('long stitch (about 6 per inch, 4 mm)');
+    expect(inch).toContain('short stitch (about 13 per inch, 2 mm)');
+    const hem = sheet({ finish: 'hem', input: { unit: 'in' } }).steps[0]!.items.join(' ');
+    expect(hem).toContain('standard stitch (8–10 per inch, 2.5–3 mm)');
+    const metric = sheet({ finish: 'hem', input: { unit: 'mm' } }).steps[0]!.items.join(' ');
+    expect(metric).toContain('standard stitch (about 2.5–3 mm)');
+    expect(metric).not.toContain('per inch');
   });
 });
