@@ -26,6 +26,8 @@ export interface ExactDefaults {
   /** cloth a third section needs above its turn-under to hold the stitch safely */
   safeStitch: Fraction;
   onFoldWithin: Fraction;
+  /** a crease on the leg this close to the cuff top's height may show at its edge: stated, not guessed */
+  nearCuffTop: Fraction;
   /** onFoldWithin as a number, for the quick test before the exact one */
   onFoldWithinMm: number;
   maxCuffDepth: Fraction;
@@ -52,6 +54,8 @@ const IMPERIAL: ExactDefaults = {
   // A third section keeps the turn-under and 1/4 in above it for the stitch (common practice, no source).
   safeStitch: inch(1, 4),
   onFoldWithin: inch(1, 16),
+  // Work to an eighth: a cuff an eighth over or under shows (TRADE.md, common practice).
+  nearCuffTop: inch(1, 8),
   onFoldWithinMm: 25.4 / 16,
   maxCuffDepth: inch(6),
   usualCuffDepth: range(inch(1), inch(9, 4)),
@@ -67,6 +71,7 @@ const METRIC: ExactDefaults = {
   shallowestCuff: mm(20),
   safeStitch: mm(6),
   onFoldWithin: mm(3, 2),
+  nearCuffTop: mm(3),
   onFoldWithinMm: 1.5,
   maxCuffDepth: mm(150),
   usualCuffDepth: range(mm(25), mm(57)),
@@ -100,6 +105,7 @@ function shown(unit: Unit): PlanDefaults {
     shallowestCuff: l(e.shallowestCuff),
     safeStitch: l(e.safeStitch),
     onFoldWithin: l(e.onFoldWithin),
+    nearCuffTop: l(e.nearCuffTop),
     maxCuffDepth: l(e.maxCuffDepth),
     usualCuffDepth: { min: l(e.usualCuffDepth.min), max: l(e.usualCuffDepth.max) },
     usualHemAllowance: { min: l(e.usualHemAllowance.min), max: l(e.usualHemAllowance.max) },

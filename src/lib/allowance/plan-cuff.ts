@@ -172,6 +172,7 @@ export function planCuff(input: CuffInput): CuffPlan {
       linesMm: lines.map((l) => l.belowMark.mm),
       onFoldWithin: defaults.onFoldWithin,
       onFoldWithinMm: defaults.onFoldWithinMm,
+      nearCuffTop: defaults.nearCuffTop,
       len,
     });
     plan.creaseLands = landing;

@@ -70,15 +70,18 @@ export interface CuffInput {
   slope?: LengthInput;
 }
 
-/** Where an old crease ends up once the cuff is made ('cut-away': below the cutting line). */
-export type CreasePlace = 'leg-visible' | 'behind-cuff' | 'cuff-face' | 'inside' | 'on-fold' | 'cut-away';
+/**
+ * Where an old crease ends up once the cuff is made ('cut-away': below the cutting line;
+ * 'at-cuff-top': on the leg within the stated tolerance of the cuff top, where it may show).
+ */
+export type CreasePlace = 'leg-visible' | 'at-cuff-top' | 'behind-cuff' | 'cuff-face' | 'inside' | 'on-fold' | 'cut-away';
 
 /** Where an old crease lands, in words and as a height above the finished edge. */
 export interface CreaseLanding {
   place: CreasePlace;
   /** height above the finished edge once the cuff is turned up ('cut-away': where it would have lain inside) */
   heightAboveEdge: Len;
-  /** true when it will show on the outside of the finished trouser */
+  /** true when it will or may show on the outside of the finished trouser */
   visible: boolean;
   message: string;
 }

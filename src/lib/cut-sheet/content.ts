@@ -124,8 +124,9 @@ function creaseOf(leg: LegSheet): CreaseLanding | undefined {
 // The engine advises pressing a showing crease out "before finishing"; on a pair that came with
 // cuffs the let-down step has already pressed it, before any chalk, so the note says that instead.
 const LET_DOWN_ADVICE: Partial<Record<CreaseLanding['place'], string>> = {
-  'leg-visible': 'Press it out as the old cuffs come down; if it still shows, choose a cuff depth that covers it.',
-  'cuff-face': 'Press it out as the old cuffs come down; if it still shows, change the cuff depth so it falls on a fold.',
+  'leg-visible': 'Press it out as the old cuffs come down; if it still shows, choose a cuff depth that covers it. Tell the customer it may not press out.',
+  'at-cuff-top': 'Press it out as the old cuffs come down. Tell the customer it may not press out.',
+  'cuff-face': 'Press it out as the old cuffs come down; if it still shows, change the cuff depth so it falls on a fold. Tell the customer it may not press out.',
 };
 
 function creaseNote(crease: CreaseLanding | undefined, existing: ExistingFinish | undefined): string | null {

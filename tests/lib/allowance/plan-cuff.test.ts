@@ -416,6 +416,8 @@ describe('the fold simulation agrees with every plan', () => {
 
   it('an old crease lands where the simulated fold puts it', () => {
     const within = (g: Gen) => (g.unit === 'in' ? 25.4 / 16 : 1.5);
+    // a crease on the leg within 1/8 in (3 mm) of the cuff top's height may show (TRADE.md: work to an eighth)
+    const nearTop = (g: Gen) => (g.unit === 'in' ? 25.4 / 8 : 3);
     fc.assert(
       fc.property(genArb, fc.integer({ min: -300, max: 700 }), (g, c) => {
         const input = { ...inputOf(g, false), oldCrease: asInput(g, c) };
@@ -429,12 +431,12 @@ describe('the fold simulation agrees with every plan', () => {
         let expected: string;
         if (onFold) expected = 'on-fold';
         else if (s > cut + 1e-9) expected = 'cut-away';
-        else if (s < 0) expected = sim.h >= d ? 'leg-visible' : 'behind-cuff';
+        else if (s < 0) expected = Math.abs(sim.h - d) <= nearTop(g) + 1e-9 ? 'at-cuff-top' : sim.h > d ? 'leg-visible' : 'behind-cuff';
         else if (sim.outside && sim.flips === 1) expected = 'behind-cuff';
         else if (sim.outside && sim.flips === 2) expected = 'cuff-face';
         else expected = 'inside';
         expect(landing.place).toBe(expected);
-        expect(landing.visible).toBe(expected === 'leg-visible' || expected === 'cuff-face');
+        expect(landing.visible).toBe(expected === 'leg-visible' || expected === 'at-cuff-top' || expected === 'cuff-face');
         if (expected !== 'on-fold' && expected !== 'cut-away') near(landing.heightAboveEdge.mm, sim.h);
         expect(plan.warnings.some((w) => w.code === 'old-crease-visible')).toBe(landing.visible);
       }),
