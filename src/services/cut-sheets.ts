@@ -12,7 +12,7 @@ import { scaleUnit, ticketLabel } from '@/lib/bench-requests';
 import { buildCutSheet, refusedFields, type LegOrder, type SheetHeader } from '@/lib/cut-sheet/build';
 import { renderCutSheet, renderCutSheets } from '@/lib/cut-sheet/render';
 import type { CutSheetData, PageSize, Side } from '@/lib/cut-sheet/types';
-import { legMainRequest, legTaperRequest } from '@/lib/leg-plan';
+import { legHemTaperRequest, legMainRequest, legTaperRequest } from '@/lib/leg-plan';
 import { legFormValues, type LegValues, LEG_LENGTHS, type SavedLeg } from '@/lib/measurement-request';
 import { planRequest } from '@/lib/plan-request';
 import type { QueueRow } from '@/lib/bench-types';
@@ -92,7 +92,13 @@ export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precisio
       );
     } else if (parsed.kind === 'hem') {
       const { kind: _k, ...input } = parsed;
-      orders.push({ side, finish: 'hem', input });
+      // A plain hem on a tapered leg is checked too: the hem turned up must lie flat.
+      const widths = legHemTaperRequest(leg, unit, precision);
+      orders.push(
+        widths
+          ? { side, finish: 'hem', input, taper: { widthAtEdge: widths.widthAtEdge, widthAbove: widths.widthAbove, heightAbove: widths.heightAbove, seamAllowance: widths.seamAllowance } }
+          : { side, finish: 'hem', input },
+      );
     }
   }
   const refused = refusedFields(orders);

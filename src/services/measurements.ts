@@ -3,8 +3,8 @@
 import { asc, eq, inArray } from 'drizzle-orm';
 import { db } from '@/db';
 import { measurements, user } from '@/db/schema';
-import { isAllowanceError, parseLength, validateCuffInput, validateHemInput, validateTaperInput } from '@/lib/allowance';
-import { legMainRequest, legTaperRequest } from '@/lib/leg-plan';
+import { isAllowanceError, parseLength, validateCuffInput, validateHemInput, validateHemTaperInput, validateTaperInput } from '@/lib/allowance';
+import { legHemTaperRequest, legMainRequest, legTaperRequest } from '@/lib/leg-plan';
 import type { Actor } from '@/lib/api';
 import type { FittingView } from '@/lib/bench-types';
 import { LEG_LENGTHS, LEGS, type Leg, type LegLength, type Measurements, type SavedLeg, type SavedLength } from '@/lib/measurement-request';
@@ -24,10 +24,11 @@ export function planIssues(input: Measurements): Record<string, string> {
   const issues: Record<string, string> = {};
   for (const leg of LEGS) {
     const typed = input.legs[leg];
-    const checks: [Record<string, unknown> | null, (i: unknown) => { field?: string; message: string }[]][] = [];
+    const checks: [object | null, (i: unknown) => { field?: string; message: string }[]][] = [];
     const main = legMainRequest(typed, input.unit);
     if (main) checks.push([main, main.kind === 'hem' ? validateHemInput : validateCuffInput]);
     checks.push([legTaperRequest(typed, input.unit), validateTaperInput]);
+    checks.push([legHemTaperRequest(typed, input.unit), validateHemTaperInput]);
     for (const [request, validate] of checks) {
       if (!request) continue;
       for (const e of validate(request)) {

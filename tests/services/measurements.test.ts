@@ -77,6 +77,13 @@ describe('measurements', () => {
     expect(readLengths(fittingRequest({ cuffDepth: '1 1/2', widthAtEdge: '7', widthAbove: '8', heightAbove: '24' })).ok).toBe(true);
   });
 
+  it('check a plain hem on a tapered leg too: impossible widths are refused on the field (arithmetic, as above)', () => {
+    const impossible = { hemAllowance: '40', widthAtEdge: '1.5', widthAbove: '220', heightAbove: '150' };
+    const read = readLengths(fittingRequest(impossible, {}, 'mm', 'plain'));
+    expect(read.ok).toBe(false);
+    if (!read.ok) expect(Object.keys(read.issues)).toEqual(['legs.left.widthAbove']);
+  });
+
   it('refuse a cuff the engine would refuse (under 3/4 in, common practice (no source)) on its field', () => {
     const read = readLengths(fittingRequest({ cuffDepth: '0.0001' }));
     expect(read.ok).toBe(false);

@@ -122,7 +122,8 @@ export function checkTaper(input: TaperInput): TaperPlan {
         : `The leg widens below where the cuff top will sit (${from} above the finished edge): at worst ${by} wider (flat) than there. Take in the inseam and outseam ${span}, up to ${side} on each side of each seam, so the cuff lies flat.`,
     });
   }
-  const feasible = v.seamAllowance === null ? null : withinTolerance || most.compare(v.seamAllowance) <= 0;
+  // (TypeScript cannot see the map callback clear withinTolerance, hence the widening.)
+  const feasible = v.seamAllowance === null ? null : (withinTolerance as boolean) || most.compare(v.seamAllowance) <= 0;
   if (feasible === false) {
     warnings.push({
       code: 'let-out-exceeds-seam-allowance',

@@ -182,6 +182,20 @@ export interface TaperInput {
   clothThickness?: LengthInput;
 }
 
+/** What a taper check under a plain hem takes. Widths are measured flat (half the round). */
+export interface HemTaperInput {
+  unit: Unit;
+  precision?: Precision;
+  /** default 1 1/2 in (40 mm metric), as planHem */
+  hemAllowance?: LengthInput;
+  widthAtEdge: LengthInput;
+  widthAbove: LengthInput;
+  heightAbove: LengthInput;
+  seamAllowance?: LengthInput;
+  /** default 1/8 in (3 mm metric) */
+  tolerance?: LengthInput;
+}
+
 /** The work at one chalk line to keep the cuff-top width straight down. */
 export interface TaperLine {
   n: 1 | 2 | 3 | 4;
@@ -200,9 +214,11 @@ export interface TaperLine {
 /** A taper check: how to keep the leg straight under the cuff. */
 export interface TaperPlan {
   kind: 'taper';
+  /** 'hem': checked under a plain hem (lines 1 and 2, the allowance flared to mirror the taper); absent: under a cuff */
+  finish?: 'hem';
   unit: Unit;
   precision: Precision;
-  /** flat width where the cuff top sits (one cuff depth above the finished edge) */
+  /** flat width where the cuff top sits (one cuff depth above the finished edge); under a hem, one hem allowance above it */
   targetWidth: Len;
   lines: TaperLine[];
   withinTolerance: boolean;

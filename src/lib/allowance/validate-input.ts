@@ -1,9 +1,10 @@
 import { AllowanceError } from './allowance-error';
 import { readTaperInput, taperShapeError } from './check-taper';
 import { readCuffInput } from './plan-cuff';
+import { hemTaperShapeError, readHemTaperInput } from './hem-taper';
 import { readHemInput } from './plan-hem';
 import { InputReader } from './read-input';
-import type { CuffInput, HemInput, TaperInput } from './types';
+import type { CuffInput, HemInput, HemTaperInput, TaperInput } from './types';
 
 function collect<T>(input: unknown, read: (input: T, r: InputReader) => unknown): AllowanceError[] {
   try {
@@ -32,6 +33,15 @@ export function validateTaperInput(input: unknown): AllowanceError[] {
     const v = readTaperInput(i, r);
     // The widths' shape is only judged once every field could be read.
     const shape = r.errors.length === 0 ? taperShapeError(v) : null;
+    if (shape) r.errors.push(shape);
+  });
+}
+
+/** Every problem with a taper check under a plain hem, one AllowanceError per field (empty when checkHemTaper will accept it). */
+export function validateHemTaperInput(input: unknown): AllowanceError[] {
+  return collect<HemTaperInput>(input, (i, r) => {
+    const v = readHemTaperInput(i, r);
+    const shape = r.errors.length === 0 ? hemTaperShapeError(v) : null;
     if (shape) r.errors.push(shape);
   });
 }

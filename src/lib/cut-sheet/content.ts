@@ -112,8 +112,7 @@ function formatDue(iso: string): string {
 }
 
 function sameWork(a: LegSheet, b: LegSheet): boolean {
-  const key = (l: LegSheet) =>
-    JSON.stringify([l.finish, l.plan, l.finish === 'cuff' ? l.taper?.plan : null, creaseOf(l)]);
+  const key = (l: LegSheet) => JSON.stringify([l.finish, l.plan, l.taper?.plan ?? null, creaseOf(l)]);
   return key(a) === key(b);
 }
 
@@ -172,7 +171,7 @@ function clothCheck(leg: LegSheet): SheetLegGroup['cloth'] {
 }
 
 function taperOf(leg: LegSheet): SheetLegGroup['taper'] {
-  if (leg.finish !== 'cuff' || !leg.taper) return null;
+  if (!leg.taper) return null;
   const t = leg.taper.plan;
   const rows = t.lines.map((l) => ({
     n: l.n,
@@ -184,7 +183,15 @@ function taperOf(leg: LegSheet): SheetLegGroup['taper'] {
         : `${l.change.mm > 0 ? 'let out' : 'take in'} ${unsigned(l.perSeam)} at each seam (${unsigned(l.perSide)} each side)`,
   }));
   // Named by its height above the finished edge: the chalked "Cuff top" line is one depth below the mark.
-  const above = leg.plan.cuffDepth.text;
+  const above = leg.finish === 'cuff' ? leg.plan.cuffDepth.text : leg.plan.hemAllowance.text;
+  if (leg.finish === 'hem') {
+    const cut = t.lines[t.lines.length - 1]!;
+    const summary = t.withinTolerance
+      ? `Taper within tolerance: the hem lies flat, no seam work needed.`
+      : `Taper: turned up, the hem must match the leg ${above} above the edge (${t.targetWidth.text} flat): flare the seams below the finished edge to it at the cutting line.`;
+    const work = t.withinTolerance ? null : `At each leg seam ${cut.change.mm > 0 ? 'let out' : 'take in'} ${unsigned(cut.perSeam)} at line 2, nothing at line 1 (half of it each side of the seam).`;
+    return { summary, work, rows };
+  }
   let summary = `Taper: keep the width ${above} above the finished edge (${t.targetWidth.text} flat) straight down to the cutting line.`;
   if (t.withinTolerance) summary = `Taper within tolerance: no seam work needed (${t.targetWidth.text} flat ${above} above the edge).`;
   const moves = t.lines
@@ -215,7 +222,7 @@ function groupOf(leg: LegSheet, label: string, existing: ExistingFinish | undefi
   }));
   const title = p.kind === 'cuff' ? `Cuff, ${p.cuffDepth.text} deep` : `Plain hem, ${p.hemAllowance.text} allowance`;
   const crease = creaseOf(leg);
-  const warnings: PlanWarning[] = [...p.warnings, ...(leg.finish === 'cuff' && leg.taper ? leg.taper.plan.warnings : [])];
+  const warnings: PlanWarning[] = [...p.warnings, ...(leg.taper ? leg.taper.plan.warnings : [])];
   return {
     label,
     finish: leg.finish,
@@ -253,11 +260,12 @@ export function cuffSteps(unit: Unit, turnUnder: string, taperStep: string | nul
   ];
 }
 
-/** Bench steps for a plain hem, in the order they are done (stitch lengths per inch on inch sheets). */
-export function hemSteps(turnUnder: string, sloped: boolean, unit: Unit = 'mm'): string[] {
+/** Bench steps for a plain hem, in the order they are done (stitch lengths per inch on inch sheets); taperStep is the seam work, if any. */
+export function hemSteps(turnUnder: string, sloped: boolean, unit: Unit = 'mm', taperStep: string | null = null): string[] {
   const STITCH = stitchLengths(unit);
   return [
     `Chalk the two lines ${sloped ? 'round the leg, sloping down to the back,' : 'level round the leg'} with dry tailor's chalk, not wax (wax leaves a mark under the iron).`,
+    ...(taperStep ? [taperStep] : []),
     'Cut on line 2, the cutting line.',
     `Turn under ${turnUnder} at the raw edge and stitch it with a standard stitch (${STITCH.standard}).`,
     'Fold up at line 1. Press the fold at the seams first, then front and back.',
@@ -281,11 +289,13 @@ function stepsOf(groups: SheetLegGroup[]): SheetContent['steps'] {
   }
   const turnUnder = perLeg(groups, (g) => g.leg.plan.turnUnder.text);
   const first = groups[0]!.leg;
+  const tapered = groups.filter((g) => g.leg.taper && !g.leg.taper.plan.withinTolerance);
   if (first.finish === 'hem') {
-    return [{ heading: null, items: hemSteps(turnUnder, groups.some((g) => g.leg.finish === 'hem' && g.leg.plan.slope.mm !== 0), first.plan.unit) }];
+    const hemWork = "Before cutting, unpick both leg seams below the finished edge; re-stitch them flaring out to the cutting line (taper note), press open (hot iron: your shop's way).";
+    const step = tapered.length === 0 ? null : tapered.length === groups.length ? hemWork : `${tapered.map((g) => g.label).join(', ')}: ${hemWork[0]!.toLowerCase()}${hemWork.slice(1)}`;
+    return [{ heading: null, items: hemSteps(turnUnder, groups.some((g) => g.leg.finish === 'hem' && g.leg.plan.slope.mm !== 0), first.plan.unit, step) }];
   }
-  const tapered = groups.filter((g) => g.leg.finish === 'cuff' && g.leg.taper && !g.leg.taper.plan.withinTolerance);
-  const from = perLeg(tapered.length ? tapered : groups, (g) => g.leg.plan.cuffDepth.text);
+  const from = perLeg(tapered.length ? tapered : groups, (g) => (g.leg.finish === 'cuff' ? g.leg.plan.cuffDepth.text : ''));
   // Re-chalking alone leaves the old stitching: the seam is unpicked, sewn on the new line and pressed
   // open before the bottom is cut and folded, or the cuff is folded over the old, tapered seam.
   const seamWork = `Before cutting, unpick both leg seams from ${from} above the finished edge to the cut line; re-stitch straight down (taper note), press open (hot iron: your shop's way).`;

@@ -6,6 +6,7 @@ import type {
   CuffPlan,
   HemInput,
   HemPlan,
+  HemTaperInput,
   Precision,
   TaperInput,
   TaperPlan,
@@ -36,6 +37,8 @@ export interface HemLeg {
   finish: 'hem';
   input: HemInput;
   plan: HemPlan;
+  /** on a tapered leg: the hem turned up must lie flat too */
+  taper?: { input: HemTaperInput; plan: TaperPlan };
   /** where an old hem crease lands, if the shop noted it */
   crease?: CreaseLanding;
 }

@@ -54,3 +54,20 @@ describe('cut sheet: stitch lengths', () => {
     expect(metric).not.toContain('per inch');
   });
 });
+
+describe('cut sheet: a plain hem on a tapered leg', () => {
+  // 7 in flat at the edge, 8 in 12 in up, 1½ in hem: the hem's top lies against 7 1/8 in of leg, the cut
+  // is 6 7/8 in: let out 1/4 in at the cut (arithmetic on the mirror rule; TRADE.md: Fit For A Queen 2012)
+  const c = sheet({ finish: 'hem', input: { unit: 'in', precision: 8 }, taper: { widthAtEdge: '7', widthAbove: '8', heightAbove: '12' } });
+
+  it('gets a taper check, so the hem turned up lies flat', () => {
+    const taper = c.groups[0]!.taper!;
+    expect(taper.summary).toContain('the hem must match the leg 1 1/2 in above the edge (7 1/8 in flat)');
+    expect(taper.work).toContain('let out 1/4 in at line 2');
+    expect(taper.rows.map((r) => r.work)).toEqual(['as it is', 'let out 1/4 in at each seam (1/8 in each side)']);
+    const items = c.steps[0]!.items;
+    const step = items.findIndex((i) => /unpick both leg seams below the finished edge/.test(i));
+    expect(step).toBeGreaterThan(0);
+    expect(step).toBeLessThan(items.findIndex((i) => i.startsWith('Cut on line 2')));
+  });
+});
