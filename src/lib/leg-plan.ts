@@ -1,6 +1,6 @@
 // Turns one leg's fitting measurements into requests for POST /api/plan: the cuff or plain hem,
 // and the taper check when the leg widths are given. Shared by the garment page and its tests.
-import type { Precision, Unit } from '@/lib/allowance/types';
+import type { HemTaperInput, Precision, Unit } from '@/lib/allowance/types';
 import type { LegLength, LegValues } from './measurement-request';
 import type { PlanRequestInput } from './plan-request';
 
@@ -46,4 +46,17 @@ export function frontPinNote(leg: LegValues): string | null {
   return leg.finish === 'cuff'
     ? 'Front pin recorded; a cuff is hemmed level, so the cut follows the back pin all round.'
     : 'Front pin recorded.';
+}
+
+/** The taper check for a plain-hemmed leg (the hem turned up must lie flat too), or null until all three widths are given. */
+export function legHemTaperRequest(leg: LegValues, unit: Unit, precision: Precision = 8): HemTaperInput | null {
+  const needed: LegLength[] = ['widthAtEdge', 'widthAbove', 'heightAbove'];
+  if (leg.finish === 'cuff' || needed.some((f) => leg[f].trim() === '')) return null;
+  return {
+    ...scale(unit, precision),
+    widthAtEdge: leg.widthAtEdge.trim(),
+    widthAbove: leg.widthAbove.trim(),
+    heightAbove: leg.heightAbove.trim(),
+    ...given(leg, ['hemAllowance', 'seamAllowance']),
+  };
 }

@@ -5,14 +5,14 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import { db } from '@/db';
 import { customers, garments, tickets, user, type Garment } from '@/db/schema';
-import { isAllowanceError } from '@/lib/allowance';
+import { isAllowanceError, withUnitsNamed } from '@/lib/allowance';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import type { Actor } from '@/lib/api';
 import { scaleUnit, ticketLabel } from '@/lib/bench-requests';
 import { buildCutSheet, refusedFields, type LegOrder, type SheetHeader } from '@/lib/cut-sheet/build';
 import { renderCutSheet, renderCutSheets } from '@/lib/cut-sheet/render';
 import type { CutSheetData, PageSize, Side } from '@/lib/cut-sheet/types';
-import { legMainRequest, legTaperRequest } from '@/lib/leg-plan';
+import { legHemTaperRequest, legMainRequest, legTaperRequest } from '@/lib/leg-plan';
 import { legFormValues, type LegValues, LEG_LENGTHS, type SavedLeg } from '@/lib/measurement-request';
 import { planRequest } from '@/lib/plan-request';
 import type { QueueRow } from '@/lib/bench-types';
@@ -54,12 +54,19 @@ async function scaleOf(shopId: string, opts: SheetOptions): Promise<{ unit: Unit
 
 // A fitting typed in one unit and printed in another: the typed text keeps its own unit, so the
 // engine reads it exactly ("1 1/2 in" in a mm plan is 38.1 mm) rather than from a rounded mm.
+// Every bare part gets the fitting's unit ("30 + 5 mm" typed in inches is 30 in + 5 mm).
 function inUnit(leg: LegValues, from: Unit, to: Unit): LegValues {
   if (from === to) return leg;
   const out = { ...leg };
   for (const f of LEG_LENGTHS) {
     const text = out[f].trim();
-    if (text !== '' && !/[a-z"″]/i.test(text)) out[f] = `${text} ${from}`;
+    if (text === '') continue;
+    try {
+      out[f] = withUnitsNamed(text, from);
+    } catch (e) {
+      // Saved text the reader now refuses is left as typed; the plan's own check names the field.
+      if (!isAllowanceError(e)) throw e;
+    }
   }
   return out;
 }
@@ -87,7 +94,13 @@ export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precisio
       );
     } else if (parsed.kind === 'hem') {
       const { kind: _k, ...input } = parsed;
-      orders.push({ side, finish: 'hem', input, ...finished });
+      // A plain hem on a tapered leg is checked too: the hem turned up must lie flat.
+      const widths = legHemTaperRequest(leg, unit, precision);
+      orders.push(
+        widths
+          ? { side, finish: 'hem', input, taper: { widthAtEdge: widths.widthAtEdge, widthAbove: widths.widthAbove, heightAbove: widths.heightAbove, seamAllowance: widths.seamAllowance }, ...finished }
+          : { side, finish: 'hem', input, ...finished },
+      );
     }
   }
   const refused = refusedFields(orders);

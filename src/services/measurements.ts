@@ -3,7 +3,8 @@
 import { asc, eq, inArray } from 'drizzle-orm';
 import { db } from '@/db';
 import { measurements, user } from '@/db/schema';
-import { isAllowanceError, parseLength } from '@/lib/allowance';
+import { isAllowanceError, parseLength, validateCuffInput, validateHemInput, validateHemTaperInput, validateTaperInput } from '@/lib/allowance';
+import { legHemTaperRequest, legMainRequest, legTaperRequest } from '@/lib/leg-plan';
 import type { Actor } from '@/lib/api';
 import type { FittingView } from '@/lib/bench-types';
 import { LEG_LENGTHS, LEGS, type Leg, type LegLength, type Measurements, type SavedLeg, type SavedLength } from '@/lib/measurement-request';
@@ -15,7 +16,33 @@ export type ReadLengths =
   | { ok: true; legs: Record<Leg, Partial<Record<LegLength, SavedLength>>> }
   | { ok: false; issues: Record<string, string> };
 
-/** Reads every length typed for both legs with parseLength; the issue keys are the form's paths. */
+/**
+ * What the engine would refuse in each leg's plans (cuff or hem, and the taper check), keyed by the
+ * form's paths: a fitting that cannot be planned is not saved, so its sheet can always be printed.
+ */
+export function planIssues(input: Measurements): Record<string, string> {
+  const issues: Record<string, string> = {};
+  for (const leg of LEGS) {
+    const typed = input.legs[leg];
+    const checks: [object | null, (i: unknown) => { field?: string; message: string }[]][] = [];
+    const main = legMainRequest(typed, input.unit);
+    if (main) checks.push([main, main.kind === 'hem' ? validateHemInput : validateCuffInput]);
+    checks.push([legTaperRequest(typed, input.unit), validateTaperInput]);
+    checks.push([legHemTaperRequest(typed, input.unit), validateHemTaperInput]);
+    for (const [request, validate] of checks) {
+      if (!request) continue;
+      for (const e of validate(request)) {
+        // Engine fields not on the form (unit, precision) fall back to the cuff depth, which every plan has.
+        const field = e.field && (LEG_LENGTHS as readonly string[]).includes(e.field) ? e.field : 'cuffDepth';
+        const key = `legs.${leg}.${field}`;
+        if (!(key in issues)) issues[key] = e.message;
+      }
+    }
+  }
+  return issues;
+}
+
+/** Reads every length typed for both legs with parseLength, then checks the legs' plans; the issue keys are the form's paths. */
 export function readLengths(input: Measurements): ReadLengths {
   const issues: Record<string, string> = {};
   const legs = { left: {}, right: {} } as Record<Leg, Partial<Record<LegLength, SavedLength>>>;
@@ -31,6 +58,7 @@ export function readLengths(input: Measurements): ReadLengths {
       }
     }
   }
+  if (Object.keys(issues).length === 0) Object.assign(issues, planIssues(input));
   return Object.keys(issues).length ? { ok: false, issues } : { ok: true, legs };
 }
 

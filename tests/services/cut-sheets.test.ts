@@ -166,6 +166,22 @@ describe('a metric fitting printed in inches', () => {
   });
 });
 
+describe('a fitting saved before save-time checks, with a taper that cannot be planned', () => {
+  it('is refused with 422 naming the field, never a 500 (arithmetic: 1.5 mm at the edge, 220 mm 150 mm up)', async () => {
+    const { g } = await garment(a, { description: 'Impossible taper trousers' });
+    const { saveMeasurements } = await import('@/services/measurements');
+    const input = fittingRequest({ cuffDepth: '38', widthAtEdge: '1.5', widthAbove: '220', heightAbove: '150' }, { cuffDepth: '38' }, 'mm');
+    const mm = (text: string) => ({ text, mm: Number(text) });
+    const left = { cuffDepth: mm('38'), widthAtEdge: mm('1.5'), widthAbove: mm('220'), heightAbove: mm('150') };
+    // Saved straight through the service, as a row from before the check would be.
+    await saveMeasurements(a.tailor, g.id, input, { left, right: { cuffDepth: mm('38') } });
+    const err = await garmentSheet(a.tailor, g.id, {}, BASE).catch((e) => e);
+    expect(err).toBeInstanceOf(ServiceError);
+    expect(err.status).toBe(422);
+    expect(err.message).toMatch(/widthAbove/);
+  });
+});
+
 describe('a garment without a fitting', () => {
   it('is refused with 422 "no fitting measurements yet"', async () => {
     const { g } = await garment(a, { description: 'Olive chinos' });

@@ -65,6 +65,31 @@ describe('measurements', () => {
     if (!read.ok) expect(Object.keys(read.issues).sort()).toEqual(['legs.left.cuffDepth', 'legs.right.backPin']);
   });
 
+  it('refuse a taper whose widths make the plan impossible, on the field, before it is saved (arithmetic: 1.5 mm at the edge, 220 mm 150 mm up gives no leg at the cut)', () => {
+    const impossible = { cuffDepth: '38', widthAtEdge: '1.5', widthAbove: '220', heightAbove: '150' };
+    const read = readLengths(fittingRequest(impossible, { cuffDepth: '38' }, 'mm'));
+    expect(read.ok).toBe(false);
+    if (!read.ok) {
+      expect(Object.keys(read.issues)).toEqual(['legs.left.widthAbove']);
+      expect(read.issues['legs.left.widthAbove']).toMatch(/no leg/);
+    }
+    // a sound taper still saves (7 in flat, 8 in 24 in up: TRADE.md, Fit For A Queen 2012 example)
+    expect(readLengths(fittingRequest({ cuffDepth: '1 1/2', widthAtEdge: '7', widthAbove: '8', heightAbove: '24' })).ok).toBe(true);
+  });
+
+  it('check a plain hem on a tapered leg too: impossible widths are refused on the field (arithmetic, as above)', () => {
+    const impossible = { hemAllowance: '40', widthAtEdge: '1.5', widthAbove: '220', heightAbove: '150' };
+    const read = readLengths(fittingRequest(impossible, {}, 'mm', 'plain'));
+    expect(read.ok).toBe(false);
+    if (!read.ok) expect(Object.keys(read.issues)).toEqual(['legs.left.widthAbove']);
+  });
+
+  it('refuse a cuff the engine would refuse (under 3/4 in, common practice (no source)) on its field', () => {
+    const read = readLengths(fittingRequest({ cuffDepth: '0.0001' }));
+    expect(read.ok).toBe(false);
+    if (!read.ok) expect(read.issues['legs.left.cuffDepth']).toMatch(/at least 3\/4 in/);
+  });
+
   it("refuse another shop's garment with 404", async () => {
     const g = await garmentOf(b);
     await expect(saveFitting(a.tailor, g.id, fittingRequest({ cuffDepth: '1 1/2' }))).rejects.toMatchObject({ status: 404 });

@@ -1,6 +1,8 @@
 import type { UseFormRegister } from 'react-hook-form';
 import { LengthInput } from '@/components/LengthInput';
 import { Segmented } from '@/components/calculator/Segmented';
+// The defaults module only (no parser, so no mathjs in the island).
+import { usualCuffDepthsText } from '@/lib/allowance/defaults';
 import { FINISH_LABELS, FINISHES, LEG_LENGTH_LABELS, type Finish, type Leg, type LegLength, type MeasurementsInput } from '@/lib/measurement-request';
 
 interface Props {
@@ -17,7 +19,7 @@ interface Props {
 const HINTS: Partial<Record<LegLength, string>> = {
   backPin: 'Measured the shop’s way, e.g. along the inseam to the pin.',
   frontPin: 'Optional. Recorded; a cuff is still hemmed level.',
-  cuffDepth: 'Usual: 1 1/4, 1 1/2 or 1 3/4 in, or 4–5 cm.',
+  cuffDepth: `Usual: ${usualCuffDepthsText()}.`,
   hemSection: 'Blank: the same as the cuff depth.',
   turnUnder: 'Blank: the usual.',
   hemAllowance: 'Blank: 1 1/2 in (40 mm).',

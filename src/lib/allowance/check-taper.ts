@@ -1,7 +1,7 @@
 import Fraction from 'fraction.js';
 import { AllowanceError } from './allowance-error';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
-import { exactDefaults } from './defaults';
+import { exactDefaults, SHALLOWEST_CUFF_WHY } from './defaults';
 import { lenMaker } from './len';
 import { InputReader } from './read-input';
 import type { PlanWarning, Precision, TaperInput, TaperLine, TaperPlan, Unit } from './types';
@@ -27,7 +27,7 @@ const ONE = new Fraction(1);
 export function readTaperInput(input: TaperInput, r: InputReader): TaperValues {
   const defaults = exactDefaults(r.unit);
   const d =
-    r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', { required: true, min: 'positive', max: defaults.maxCuffDepth }) ??
+    r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', { required: true, min: 'positive', least: { value: defaults.shallowestCuff, why: SHALLOWEST_CUFF_WHY }, max: defaults.maxCuffDepth }) ??
     defaults.usualCuffDepth.min;
   const width = (value: unknown, field: string, label: string): Fraction =>
     r.length(value, field, label, { required: true, min: 'positive' }) ?? ONE;
@@ -54,15 +54,32 @@ function isPositive(f: Fraction): boolean {
   return f.s > 0n && f.n !== 0n;
 }
 
-/** Check a tapered leg under a cuff: the work at each chalk line to keep the cuff-top width straight down. */
-export function checkTaper(input: TaperInput): TaperPlan {
-  const v = readTaperInput(input, new InputReader(input, false));
-  const len = lenMaker(v.unit, v.precision);
+/**
+ * Why these widths make no plan (the taper followed down gives no leg at the cuff top or at a line),
+ * or null. Checked on save too, so a fitting that cannot be planned is never kept.
+ */
+export function taperShapeError(v: TaperValues): AllowanceError | null {
   const slope = taperSlope(v);
   const target = v.widthAtEdge.add(slope.mul(v.cuffDepth));
   if (!isPositive(target)) {
-    throw new AllowanceError('out-of-range', 'These widths give no leg at the cuff top: check the two widths and the height.', 'widthAbove');
+    return new AllowanceError('out-of-range', 'These widths give no leg at the cuff top: check the two widths and the height.', 'widthAbove');
   }
+  const cut = cuffLinePositions(v.cuffDepth, v.hemSection, v.clothThickness).cut;
+  // The width is straight in the height, so the lowest line (the cut) is the narrowest or widest: check it.
+  if (!isPositive(v.widthAtEdge.sub(slope.mul(cut))) || !isPositive(v.widthAtEdge)) {
+    return new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove');
+  }
+  return null;
+}
+
+/** Check a tapered leg under a cuff: the work at each chalk line to keep the cuff-top width straight down. */
+export function checkTaper(input: TaperInput): TaperPlan {
+  const v = readTaperInput(input, new InputReader(input, false));
+  const shapeError = taperShapeError(v);
+  if (shapeError) throw shapeError;
+  const len = lenMaker(v.unit, v.precision);
+  const slope = taperSlope(v);
+  const target = v.widthAtEdge.add(slope.mul(v.cuffDepth));
   const positions = linePositionList(cuffLinePositions(v.cuffDepth, v.hemSection, v.clothThickness));
   let worst = ZERO;
   let mostPerSide: Fraction | null = null;
@@ -71,9 +88,6 @@ export function checkTaper(input: TaperInput): TaperPlan {
     // A line below the mark sits at height −below; the change is what brings it back to the target.
     const change = k === 0 ? target.sub(v.widthAtEdge) : slope.mul(v.cuffDepth.add(below));
     const width = target.sub(change);
-    if (!isPositive(width)) {
-      throw new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove');
-    }
     const perSide = change.div(2);
     const size = change.abs();
     if (size.compare(worst.abs()) > 0) worst = change;
@@ -96,14 +110,20 @@ export function checkTaper(input: TaperInput): TaperPlan {
     const wider = worst.s > 0n;
     const by = len(worst.abs()).text;
     const side = len(worst.abs().div(2)).text;
+    // "From the cuff top" is ambiguous on the chalked leg: line 2, "Cuff top", is one depth BELOW the
+    // mark, but the width to keep is one depth ABOVE the finished edge. Name the distances instead.
+    const from = len(v.cuffDepth).text;
+    const to = len(positions[3]!).text;
+    const span = `from ${from} above the finished edge (the pin mark, line 1) down to the cutting line, ${to} below it`;
     warnings.push({
       code: 'taper-beyond-tolerance',
       message: wider
-        ? `The leg narrows below the cuff top: at worst ${by} narrower (flat) than at the cuff top. Let out the inseam and outseam from the cuff top down to the cut, up to ${side} on each side of each seam, so the cuff lies flat.`
-        : `The leg widens below the cuff top: at worst ${by} wider (flat) than at the cuff top. Take in the inseam and outseam from the cuff top down to the cut, up to ${side} on each side of each seam, so the cuff lies flat.`,
+        ? `The leg narrows below where the cuff top will sit (${from} above the finished edge): at worst ${by} narrower (flat) than there. Let out the inseam and outseam ${span}, up to ${side} on each side of each seam, so the cuff lies flat.`
+        : `The leg widens below where the cuff top will sit (${from} above the finished edge): at worst ${by} wider (flat) than there. Take in the inseam and outseam ${span}, up to ${side} on each side of each seam, so the cuff lies flat.`,
     });
   }
-  const feasible = v.seamAllowance === null ? null : most.compare(v.seamAllowance) <= 0;
+  // (TypeScript cannot see the map callback clear withinTolerance, hence the widening.)
+  const feasible = v.seamAllowance === null ? null : (withinTolerance as boolean) || most.compare(v.seamAllowance) <= 0;
   if (feasible === false) {
     warnings.push({
       code: 'let-out-exceeds-seam-allowance',

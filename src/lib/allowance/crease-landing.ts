@@ -13,8 +13,13 @@ export interface CreaseContext {
   /** a crease this close to a new fold is taken by the fold */
   onFoldWithin: Fraction;
   onFoldWithinMm: number;
+  /** a crease on the leg within this of the cuff top's height may show at its edge */
+  nearCuffTop: Fraction;
   len: LenMaker;
 }
+
+// Shown wherever a crease will or may show: pressing out is not a promise (common practice, no source).
+const TELL = 'Tell the customer it may not press out.';
 
 const ZERO = new Fraction(0);
 
@@ -24,7 +29,7 @@ export function creaseLanding(crease: Fraction, ctx: CreaseContext): CreaseLandi
   const land = (place: CreasePlace, height: Len, message: string): CreaseLanding => ({
     place,
     heightAboveEdge: height,
-    visible: place === 'leg-visible' || place === 'cuff-face',
+    visible: place === 'leg-visible' || place === 'at-cuff-top' || place === 'cuff-face',
     message,
   });
   const c = mmNumber(crease);
@@ -43,13 +48,21 @@ export function creaseLanding(crease: Fraction, ctx: CreaseContext): CreaseLandi
     return land('on-fold', len(fold === 'cuff top' ? d : ZERO), `The old crease falls on the new ${fold}: the new fold takes it, so it will not show.`);
   }
   if (c < 0) {
-    // On the leg the height is −crease; it shows when it reaches the cuff top (−crease ≥ d).
+    // On the leg the height is −crease. Near the cuff top's height the verdict is "may show", with
+    // the tolerance stated, so 1/16 in either way cannot flip "hidden" to "will show" unannounced.
     const at = len(crease, true);
+    if (crease.add(d).abs().compare(ctx.nearCuffTop) <= 0) {
+      return land(
+        'at-cuff-top',
+        at,
+        `The old hem crease lies on the leg ${at.text} above the finished edge, within ${len(ctx.nearCuffTop).text} of the cuff top: it may show at the cuff's edge. Press or steam it out before finishing. ${TELL}`,
+      );
+    }
     if (compareExact(crease, c, d, -dMm, true) <= 0) {
       return land(
         'leg-visible',
         at,
-        `The old hem crease will show on the leg, ${at.text} above the finished edge, ${len(crease.add(d), true).text} above the cuff top. Press or steam it out before finishing, or choose a cuff depth that covers it.`,
+        `The old hem crease will show on the leg, ${at.text} above the finished edge, ${len(crease.add(d), true).text} above the cuff top. Press or steam it out before finishing, or choose a cuff depth that covers it. ${TELL}`,
       );
     }
     return land('behind-cuff', at, `The old crease lies on the leg behind the cuff, ${at.text} above the finished edge: the cuff hides it.`);
@@ -65,7 +78,7 @@ export function creaseLanding(crease: Fraction, ctx: CreaseContext): CreaseLandi
     return land(
       'cuff-face',
       h,
-      `The old crease will show on the face of the cuff, ${h.text} above the finished edge. Press or steam it out, or change the cuff depth so it falls on a fold.`,
+      `The old crease will show on the face of the cuff, ${h.text} above the finished edge. Press or steam it out, or change the cuff depth so it falls on a fold. ${TELL}`,
     );
   }
   const h = len(crease.sub(lines.innerFold));

@@ -7,6 +7,11 @@ import type { CuffAlternatives, Precision, Unit } from './types';
 /** What the alternatives need of a short cuff plan. */
 export interface AlternativesContext {
   available: Fraction;
+  /** the depth asked for: every cuff offered is shallower */
+  cuffDepth: Fraction;
+  /** the third section asked for, and the turn-under it must hold */
+  hemSection: Fraction;
+  turnUnder: Fraction;
   /** 2 × (cuff depth + turn of cloth): the inner fold's distance below the mark */
   innerFold: Fraction;
   clothThickness: Fraction;
@@ -30,23 +35,44 @@ function cuffLimitSteps(unit: Unit, precision: Precision, defaults: ExactDefault
   return found;
 }
 
-/** The deepest three-equal-section cuff (exact mm, down to the display step) that fits, or null under the shallowest. */
-export function deepestCuff(ctx: AlternativesContext): Fraction | null {
-  const { available, clothThickness: t, unit, precision, defaults } = ctx;
+/** The deepest three-equal-section cuff (exact mm, down to the display step) that fits, shallower than asked, or null under the shallowest. */
+export function deepestCuff(ctx: Omit<AlternativesContext, 'hemSection' | 'turnUnder'>): Fraction | null {
+  const { available, cuffDepth, clothThickness: t, unit, precision, defaults } = ctx;
   const room = t.n === 0n ? available : available.sub(t.mul(2));
   const [a, b] = stepRatio(unit, precision);
   const [shallowest, deepest] = cuffLimitSteps(unit, precision, defaults);
-  const steps = Math.min(floorSteps(room, a, 3 * b), deepest);
+  // Whole steps strictly under the asked depth: ceil(d / step) − 1. A "shallower" cuff is never as deep.
+  const under = -floorSteps(cuffDepth.neg(), a, b) - 1;
+  const steps = Math.min(floorSteps(room, a, 3 * b), deepest, under);
   return steps < shallowest ? null : stepsToMm(steps, unit, precision);
 }
 
-/** What still fits when the cloth is short: a shallower cuff, a plain hem, or a faced cuff. */
+/**
+ * The longest third section (down to the display step) that keeps the asked cuff depth and fits,
+ * shorter than asked, holding the turn-under and a safe stitch above it, its stitching no higher than
+ * the cuff top; else null.
+ */
+export function shorterSection(ctx: AlternativesContext): Fraction | null {
+  const { available, innerFold, hemSection, turnUnder, unit, precision, defaults } = ctx;
+  const [a, b] = stepRatio(unit, precision);
+  let room = stepsToMm(floorSteps(available.sub(innerFold), a, b), unit, precision);
+  // No longer than the cuff and its turn-under, or the stitching would show above the cuff top.
+  const highest = stepsToMm(floorSteps(ctx.cuffDepth.add(turnUnder), a, b), unit, precision);
+  if (room.compare(highest) > 0) room = highest;
+  const least = turnUnder.add(defaults.safeStitch);
+  if (room.compare(least) < 0 || room.compare(hemSection) >= 0) return null;
+  return room;
+}
+
+/** What still fits when the cloth is short: the same cuff on a shorter third section, a shallower cuff, a plain hem, or a faced cuff. */
 export function cuffAlternatives(ctx: AlternativesContext): CuffAlternatives {
   const { available, innerFold, defaults, len } = ctx;
   const deepest = deepestCuff(ctx);
+  const section = shorterSection(ctx);
   // A faced cuff keeps the two outer sections in the trouser cloth; a seam joins the facing (from memory).
   const faced = innerFold.add(defaults.facingSeam);
   return {
+    shorterSection: section === null ? null : len(section),
     deepestCuff: deepest === null ? null : len(deepest),
     plainHem: { required: len(defaults.hemAllowance), fits: available.compare(defaults.hemAllowance) >= 0 },
     facedCuff: { required: len(faced), fits: available.compare(faced) >= 0 },

@@ -23,7 +23,11 @@ export interface ExactDefaults {
   taperTolerance: Fraction;
   facingSeam: Fraction;
   shallowestCuff: Fraction;
+  /** cloth a third section needs above its turn-under to hold the stitch safely */
+  safeStitch: Fraction;
   onFoldWithin: Fraction;
+  /** a crease on the leg this close to the cuff top's height may show at its edge: stated, not guessed */
+  nearCuffTop: Fraction;
   /** onFoldWithin as a number, for the quick test before the exact one */
   onFoldWithinMm: number;
   maxCuffDepth: Fraction;
@@ -35,6 +39,9 @@ const inch = (n: number, d = 1): Fraction => new Fraction(n, d).mul(MM_PER_INCH)
 const mm = (n: number, d = 1): Fraction => new Fraction(n, d);
 const range = (min: Fraction, max: Fraction): ExactRange => ({ min, max, minMm: min.valueOf(), maxMm: max.valueOf() });
 
+/** Why a cuff shallower than the shallowest is refused, after "Cuff depth must be at least …". */
+export const SHALLOWEST_CUFF_WHY = 'a shallower cuff cannot be turned, pressed and tacked.';
+
 // Inch figures from TRADE.md; metric ones are our own round numbers near them (NIST: convert, then round sensibly).
 const IMPERIAL: ExactDefaults = {
   cuffTurnUnder: inch(1, 2),
@@ -42,8 +49,13 @@ const IMPERIAL: ExactDefaults = {
   hemTurnUnder: inch(1, 4),
   taperTolerance: inch(1, 8),
   facingSeam: inch(1, 2),
-  shallowestCuff: inch(1, 2),
+  // The smallest workable cuff (common practice, no source): shallower cannot be turned and tacked.
+  shallowestCuff: inch(3, 4),
+  // A third section keeps the turn-under and 1/4 in above it for the stitch (common practice, no source).
+  safeStitch: inch(1, 4),
   onFoldWithin: inch(1, 16),
+  // Work to an eighth: a cuff an eighth over or under shows (TRADE.md, common practice).
+  nearCuffTop: inch(1, 8),
   onFoldWithinMm: 25.4 / 16,
   maxCuffDepth: inch(6),
   usualCuffDepth: range(inch(1), inch(9, 4)),
@@ -56,8 +68,10 @@ const METRIC: ExactDefaults = {
   hemTurnUnder: mm(6),
   taperTolerance: mm(3),
   facingSeam: mm(12),
-  shallowestCuff: mm(12),
+  shallowestCuff: mm(20),
+  safeStitch: mm(6),
   onFoldWithin: mm(3, 2),
+  nearCuffTop: mm(3),
   onFoldWithinMm: 1.5,
   maxCuffDepth: mm(150),
   usualCuffDepth: range(mm(25), mm(57)),
@@ -89,7 +103,9 @@ function shown(unit: Unit): PlanDefaults {
     taperTolerance: l(e.taperTolerance),
     facingSeam: l(e.facingSeam),
     shallowestCuff: l(e.shallowestCuff),
+    safeStitch: l(e.safeStitch),
     onFoldWithin: l(e.onFoldWithin),
+    nearCuffTop: l(e.nearCuffTop),
     maxCuffDepth: l(e.maxCuffDepth),
     usualCuffDepth: { min: l(e.usualCuffDepth.min), max: l(e.usualCuffDepth.max) },
     usualHemAllowance: { min: l(e.usualHemAllowance.min), max: l(e.usualHemAllowance.max) },
@@ -122,3 +138,11 @@ export const USUAL_CUFF_DEPTHS: Readonly<Record<Unit, readonly UsualCuffDepth[]>
   cm: usualDepths('cm'),
   mm: usualDepths('mm'),
 };
+
+/** The usual depths in words, inches listed and metric as a range, from the same figures: "1 1/4, 1 1/2 or 1 3/4 in, or 3.2–4.4 cm". */
+export function usualCuffDepthsText(): string {
+  const classic = (u: Unit) => USUAL_CUFF_DEPTHS[u].filter((d) => d.note !== 'modern').map((d) => d.depth.text);
+  const inches = classic('in').map((t) => t.replace(/ in$/, ''));
+  const cm = classic('cm');
+  return `${inches.slice(0, -1).join(', ')} or ${inches.at(-1)} in, or ${cm[0]!.replace(/ cm$/, '')}–${cm.at(-1)}`;
+}

@@ -2,6 +2,7 @@ import Fraction from 'fraction.js';
 import { AllowanceError } from './allowance-error';
 import { fractionFromNumber } from './exact-number';
 import type { Precision, Unit } from './types';
+import { isPrecision, isUnit } from './units';
 
 /** An inch length split for drawing a stacked fraction: sign, whole inches, and a reduced num/den. */
 export interface SplitFraction {
@@ -133,13 +134,24 @@ function exactFromDisplayNumber(mm: number): Fraction {
   return fractionFromNumber(mm);
 }
 
+// Callers outside TypeScript (islands fed from JSON, scripts) can pass anything: 'ft' or 12 would print nonsense.
+function checkPrecision(precision: unknown): Precision {
+  if (precision === undefined) return 16;
+  if (!isPrecision(precision)) throw new AllowanceError('bad-precision', 'Show inches to 1/8, 1/16 or 1/32.');
+  return precision;
+}
+
 /** Show millimetres in a unit: inches to the nearest 1/precision ("1 9/16 in"), mm to 0.5 mm, cm to 0.05 cm. */
 export function formatLength(mm: number, opts: { unit: Unit; precision?: Precision }): string {
-  return formatExact(exactFromDisplayNumber(mm), opts.unit, opts.precision ?? 16);
+  if (typeof opts !== 'object' || opts === null || !isUnit(opts.unit)) {
+    throw new AllowanceError('bad-unit', 'Choose a unit: in, cm or mm.');
+  }
+  return formatExact(exactFromDisplayNumber(mm), opts.unit, checkPrecision(opts.precision));
 }
 
 /** Millimetres as inches rounded to 1/precision, split for a stacked fraction (same rounding as formatLength). */
 export function splitFraction(mm: number, precision: Precision = 16): SplitFraction {
+  checkPrecision(precision);
   const steps = roundSteps(exactFromDisplayNumber(mm), 5 * precision, 127);
   const abs = Math.abs(steps);
   const whole = Math.floor(abs / precision);

@@ -4,11 +4,12 @@
 export type * from './types';
 export { AllowanceError, isAllowanceError, type AllowanceErrorCode } from './allowance-error';
 export { formatLength, splitFraction, type SplitFraction } from './format-length';
-export { parseLength } from './parse-length';
+export { parseLength, withUnitsNamed } from './parse-length';
 export { planCuff } from './plan-cuff';
 export { planHem } from './plan-hem';
 export { checkTaper } from './check-taper';
-export { validateCuffInput, validateHemInput, validateTaperInput } from './validate-input';
+export { checkHemTaper } from './hem-taper';
+export { validateCuffInput, validateHemInput, validateHemTaperInput, validateTaperInput } from './validate-input';
 export { DEFAULTS, USUAL_CUFF_DEPTHS, type PlanDefaults, type UsualCuffDepth, type Usual } from './defaults';
 export { MM_PER_INCH, UNITS, isUnit, mmToUnit, toInches } from './units';
 export { isPrecision } from './read-input';

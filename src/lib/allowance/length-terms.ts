@@ -11,6 +11,8 @@ export interface LengthTerm {
   num: string | null;
   den: string | null;
   unit: Unit | null;
+  /** the number as typed when it had a decimal comma ("3,8"): metric lengths only */
+  comma?: string;
 }
 
 const HINT = 'Try 1 1/2, 1-1/2, 1½, 1.5, 38 mm or 31 3/4 + 1/8.';
@@ -104,7 +106,7 @@ class TermReader {
       (next?.kind === 'hyphen' && !next.space && !this.spaceAfter() && this.startsFraction(1));
     if (!mixed) {
       if (next?.kind === 'number') throw bad(`Two numbers in a row. ${HINT}`);
-      return { whole: t.digits, num: null, den: null };
+      return t.comma === undefined ? { whole: t.digits, num: null, den: null } : { whole: t.digits, num: null, den: null, comma: t.comma };
     }
     if (!isInteger(t.digits)) throw bad(`A decimal cannot take a fraction too. ${HINT}`);
     if (next.kind === 'hyphen') this.i += 1;
@@ -170,18 +172,17 @@ export function readLengthTerms(text: string): LengthTerm[] {
   return new TermReader(tokenizeLength(text)).read();
 }
 
-/** The unit each term stands in: its own, else the one unit named in the text, else the plan's. */
+/**
+ * The unit each term stands in: its own, else the plan's. A bare number always means the plan's
+ * unit, never a unit written elsewhere in the text ("30 + 5 mm" in an inch plan is 30 in + 5 mm).
+ * A decimal comma is for metric lengths only: in inches it is refused, repeating what was typed.
+ */
 export function termUnits(terms: LengthTerm[], planUnit: Unit): Unit[] {
-  let named: Unit | null = null;
-  let several = false;
-  for (const t of terms) {
-    if (t.unit === null) continue;
-    if (named !== null && t.unit !== named) several = true;
-    named ??= t.unit;
-  }
   return terms.map((t) => {
-    if (t.unit !== null) return t.unit;
-    if (several) throw new AllowanceError('bad-unit', 'This mixes units: give the unit of every part, e.g. 30 in + 5 mm.');
-    return named ?? planUnit;
+    const unit = t.unit ?? planUnit;
+    if (t.comma !== undefined && unit === 'in') {
+      throw bad(`“${t.comma}”: inches take a decimal point, as in ${t.comma.replace(',', '.')}, or a fraction such as 1 1/2.`);
+    }
+    return unit;
   });
 }

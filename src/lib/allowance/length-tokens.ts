@@ -3,7 +3,8 @@ import type { Unit } from './types';
 
 /** One token of typed length text. `space` says whether white space came just before it. */
 export type LengthToken =
-  | { kind: 'number'; digits: string; script: 'plain' | 'sup' | 'sub'; space: boolean }
+  /** `comma`: typed with a decimal comma ("3,8"), digits given with a point; only metric lengths take it */
+  | { kind: 'number'; digits: string; script: 'plain' | 'sup' | 'sub'; space: boolean; comma?: string }
   | { kind: 'slash'; space: boolean }
   | { kind: 'vulgar'; num: string; den: string; char: string; space: boolean }
   | { kind: 'unit'; unit: Unit; word: string; space: boolean }
@@ -44,8 +45,31 @@ function notALength(message: string): AllowanceError {
   return new AllowanceError('not-a-length', message);
 }
 
+// Format characters (zero-width space, BOM, soft hyphen, joiners, direction marks) come in with
+// pasted text and are invisible: they are dropped before reading, never refused.
+const INVISIBLE = /\p{Cf}/gu;
+
+/** Typed text without its invisible format characters. */
+export function withoutInvisible(text: string): string {
+  return text.replace(INVISIBLE, '');
+}
+
+// "3,8" or "1,50": a decimal comma. "1,500" (a thousands comma?) and "1,5,2" are refused as unclear.
+function commaNumber(text: string, i: number, j: number): { digits: string; typed: string; end: number } {
+  let end = j;
+  while (end < text.length && (isDigit(text[end]!) || text[end] === ',' || text[end] === '.')) end += 1;
+  const typed = text.slice(i, end);
+  if (!/^\d+,\d+$/.test(typed)) throw notALength(`“${typed}” is not a number: write one decimal comma or point, e.g. 3,8 or 3.8.`);
+  const [whole, decimals] = typed.split(',') as [string, string];
+  if (decimals.length === 3) {
+    throw notALength(`“${typed}” is unclear: is it ${whole}.${decimals} or ${whole}${decimals}? Type ${whole}.${decimals.replace(/0+$/, '') || '0'} or ${whole}${decimals}.`);
+  }
+  return { digits: `${whole}.${decimals}`, typed, end };
+}
+
 /** Split typed length text into tokens, checking every character. Throws AllowanceError. */
-export function tokenizeLength(text: string): LengthToken[] {
+export function tokenizeLength(typed: string): LengthToken[] {
+  const text = withoutInvisible(typed);
   if (text.trim() === '') throw new AllowanceError('empty', `No length given. ${EXAMPLE}`);
   if (text.length > MAX_TEXT_LENGTH) throw notALength(`That is too long for a length. ${EXAMPLE}`);
   const tokens: LengthToken[] = [];
@@ -67,7 +91,12 @@ export function tokenizeLength(text: string): LengthToken[] {
         throw notALength(`“${digits}” is not a number. ${EXAMPLE}`);
       }
       if (text[j] === ',' && isDigit(text[j + 1] ?? '')) {
-        throw notALength('Use a point for decimals: 1.5, not 1,5.');
+        if (dot >= 0) throw notALength(`“${text.slice(i, j + 2)}…” is not a number: use one decimal comma or point.`);
+        const c = commaNumber(text, i, j);
+        tokens.push({ kind: 'number', digits: c.digits, script: 'plain', space, comma: c.typed });
+        i = c.end;
+        space = false;
+        continue;
       }
       if ((text[j] === 'e' || text[j] === 'E') && /[0-9+-]/.test(text[j + 1] ?? '')) {
         const shown = /^[0-9.]+[eE][+-]?[0-9]*/.exec(text.slice(i))![0];

@@ -1,6 +1,7 @@
 import Fraction from 'fraction.js';
 import { AllowanceError } from './allowance-error';
 import { formatExact } from './format-length';
+import { fractionNumber } from './len';
 import { evaluateTerms } from './length-expression';
 import { type LengthTerm, readLengthTerms, termUnits } from './length-terms';
 import type { Len, Precision, Unit } from './types';
@@ -29,8 +30,15 @@ export function termMm(t: LengthTerm, unit: Unit): Fraction {
   return new Fraction(BigInt(t.sign) * n, d * BigInt(b) * 10n ** BigInt(places));
 }
 
-/** Check a length (mm) lies within ±200 in; throws AllowanceError 'too-large'. */
+/** Smallest length told apart from nothing: a thousandth of a millimetre. */
+export const LEAST_MM = new Fraction(1, 1000);
+
+/** Check a length (mm) lies within ±200 in and is 0 or at least a thousandth of a mm; throws AllowanceError. */
 export function checkRange(mm: Fraction): Fraction {
+  // Below a thousandth of a mm a length is noise; held exactly its huge denominator overflows every float.
+  if (mm.n !== 0n && mm.n * LEAST_MM.d < mm.d * LEAST_MM.n) {
+    throw new AllowanceError('out-of-range', 'A length under a thousandth of a millimetre is not a length: type 0 or a real length.');
+  }
   const v = mm.valueOf();
   // Exact comparison only near the limit.
   if ((v > 5079 || v < -5079) && mm.abs().compare(LIMIT_MM) > 0) {
@@ -56,10 +64,26 @@ export function parseExactWithMathjs(text: string, unit: Unit): Fraction {
   return checkRange(evaluateTerms(terms, termUnits(terms, unit)));
 }
 
+/**
+ * Typed text rewritten with every part's unit named ("30 + 5 mm" in an inch plan → "30 in + 5 mm"),
+ * so it reads the same in a plan of another unit. Throws AllowanceError as parseLength does.
+ */
+export function withUnitsNamed(text: string, unit: Unit): string {
+  const terms = readLengthTerms(text);
+  const units = termUnits(terms, unit);
+  return terms
+    .map((t, k) => {
+      const number = [t.whole, t.num === null ? null : `${t.num}/${t.den}`].filter((p) => p !== null).join(' ');
+      const part = `${number} ${units[k]}`;
+      return k === 0 ? (t.sign < 0 ? `-${part}` : part) : `${t.sign < 0 ? '-' : '+'} ${part}`;
+    })
+    .join(' ');
+}
+
 /** Read typed text ("1 1/2", "1½", "38 mm", "31 3/4 + 1/8") as a length; the unit is the plan's unless named. */
 export function parseLength(text: string, unit: Unit, precision: Precision = 16): Len {
   if (typeof text !== 'string') throw new AllowanceError('not-a-length', 'A length must be given as text.');
   if (!isUnit(unit)) throw new AllowanceError('bad-unit', 'The unit must be in, cm or mm.', 'unit');
   const mm = parseExact(text, unit);
-  return { mm: mm.valueOf(), text: formatExact(mm, unit, precision) };
+  return { mm: fractionNumber(mm), text: formatExact(mm, unit, precision) };
 }

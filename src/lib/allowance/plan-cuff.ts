@@ -2,7 +2,7 @@ import Fraction from 'fraction.js';
 import { creaseLanding } from './crease-landing';
 import { cuffAlternatives } from './cuff-alternatives';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
-import { type ExactDefaults, exactDefaults } from './defaults';
+import { type ExactDefaults, exactDefaults, SHALLOWEST_CUFF_WHY } from './defaults';
 import { compareExact, type LenMaker, lenMaker } from './len';
 import { InputReader, type LengthRule } from './read-input';
 import type { CuffInput, CuffLine, CuffPlan, Len, PlanWarning, Precision, Unit } from './types';
@@ -31,6 +31,7 @@ export function readCuffInput(input: CuffInput, r: InputReader): CuffValues {
   const cuffDepth = r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', {
     required: true,
     min: 'positive',
+    least: { value: defaults.shallowestCuff, why: SHALLOWEST_CUFF_WHY },
     max: defaults.maxCuffDepth,
   });
   const d = cuffDepth ?? defaults.usualCuffDepth.min;
@@ -62,6 +63,13 @@ function cuffWarnings(v: CuffValues, shown: Shown, defaults: ExactDefaults, len:
       message: `The third section (${shown.section.text}) is no deeper than the turn-under (${shown.turnUnder.text}): nothing is left to hold the cuff inside. Make the third section deeper or the turn-under narrower.`,
     });
   }
+  // The turned-under edge's stitching sits (third section − turn-under) above the bottom: over the cuff top it shows.
+  if (v.hemSection.sub(v.turnUnder).compare(v.cuffDepth) > 0) {
+    warnings.push({
+      code: 'stitching-above-cuff',
+      message: `The third section (${shown.section.text}) less the turn-under (${shown.turnUnder.text}) is deeper than the ${shown.depth.text} cuff: the stitching would show above the cuff. Make the third section shorter.`,
+    });
+  }
   const usual = defaults.usualCuffDepth;
   const d = shown.depth.mm;
   if (compareExact(v.cuffDepth, d, usual.min, usual.minMm) < 0 || compareExact(v.cuffDepth, d, usual.max, usual.maxMm) > 0) {
@@ -79,8 +87,9 @@ function cuffWarnings(v: CuffValues, shown: Shown, defaults: ExactDefaults, len:
   return warnings;
 }
 
-function shortMessage(required: Len, available: Len, shortBy: Len, alt: NonNullable<CuffPlan['alternatives']>): string {
+function shortMessage(required: Len, available: Len, shortBy: Len, depth: Len, alt: NonNullable<CuffPlan['alternatives']>): string {
   const fits: string[] = [];
+  if (alt.shorterSection !== null) fits.push(`the ${depth.text} cuff with a ${alt.shorterSection.text} third section`);
   if (alt.deepestCuff !== null) fits.push(`a ${alt.deepestCuff.text} cuff with three equal sections`);
   if (alt.facedCuff.fits) fits.push(`a faced cuff (${alt.facedCuff.required.text} of this cloth and a facing)`);
   if (alt.plainHem.fits) fits.push(`a plain hem (${alt.plainHem.required.text})`);
@@ -119,15 +128,17 @@ export function planCuff(input: CuffInput): CuffPlan {
   let alternatives: CuffPlan['alternatives'] = null;
   if (A !== null) {
     const rest = aboveRaw![3]!;
-    const restMm = lines[3]!.aboveRawEdge!.mm;
-    // The number's sign is the exact sign unless it is 0, which the Fraction then settles.
-    enough = restMm > 0 || (restMm === 0 && (rest.n === 0n || rest.s > 0n));
+    // Decided on the exact value: a float of it can be 0 or NaN (1e-310, huge denominators) and flip the check.
+    enough = rest.n === 0n || rest.s > 0n;
     if (enough) {
       spare = { ...lines[3]!.aboveRawEdge! };
     } else {
       shortBy = len(rest, true);
       alternatives = cuffAlternatives({
         available: A,
+        cuffDepth: v.cuffDepth,
+        hemSection: v.hemSection,
+        turnUnder: v.turnUnder,
         innerFold: positions.innerFold,
         clothThickness: v.clothThickness,
         unit: v.unit,
@@ -135,7 +146,7 @@ export function planCuff(input: CuffInput): CuffPlan {
         defaults,
         len,
       });
-      warnings.unshift({ code: 'not-enough-cloth', message: shortMessage(required, lines[0]!.aboveRawEdge!, shortBy, alternatives) });
+      warnings.unshift({ code: 'not-enough-cloth', message: shortMessage(required, lines[0]!.aboveRawEdge!, shortBy, depth, alternatives) });
     }
   }
   const plan: CuffPlan = {
@@ -161,6 +172,7 @@ export function planCuff(input: CuffInput): CuffPlan {
       linesMm: lines.map((l) => l.belowMark.mm),
       onFoldWithin: defaults.onFoldWithin,
       onFoldWithinMm: defaults.onFoldWithinMm,
+      nearCuffTop: defaults.nearCuffTop,
       len,
     });
     plan.creaseLands = landing;

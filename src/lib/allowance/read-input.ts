@@ -4,19 +4,18 @@ import { fractionFromNumber } from './exact-number';
 import { formatExact } from './format-length';
 import { checkRange, parseExact } from './parse-length';
 import type { Precision, Unit } from './types';
-import { isUnit, mmPerUnitRatio } from './units';
+import { isPrecision, isUnit, mmPerUnitRatio } from './units';
 
 /** What a length field may hold beyond the ±200 in range. */
 export interface LengthRule {
   required?: boolean;
   min?: 'positive' | 'non-negative';
   max?: Fraction;
+  /** the smallest workable value, with why (shown after "must be at least …") */
+  least?: { value: Fraction; why: string };
 }
 
-/** True for 8, 16 and 32. */
-export function isPrecision(p: unknown): p is Precision {
-  return p === 8 || p === 16 || p === 32;
-}
+export { isPrecision } from './units';
 
 /**
  * Reads and checks a plan's inputs, naming the field in each AllowanceError. Throws the first
@@ -73,6 +72,11 @@ export class InputReader {
       this.fail(new AllowanceError('negative', `${label} cannot be negative.`, field));
       return null;
     }
+    if (rule.least !== undefined && mm.compare(rule.least.value) < 0) {
+      const least = formatExact(rule.least.value, this.unit, this.precision);
+      this.fail(new AllowanceError('out-of-range', `${label} must be at least ${least}: ${rule.least.why}`, field));
+      return null;
+    }
     if (rule.max !== undefined && mm.compare(rule.max) > 0) {
       const most = formatExact(rule.max, this.unit, this.precision);
       this.fail(new AllowanceError('out-of-range', `${label} must be at most ${most}.`, field));
@@ -85,7 +89,9 @@ export class InputReader {
     if (typeof value === 'number') {
       if (!Number.isFinite(value)) throw new AllowanceError('not-a-length', 'A length must be a finite number.');
       const [a, b] = mmPerUnitRatio(this.unit);
-      if (Math.abs(value) * a > 5079 * b) return checkRange(fractionFromNumber(value, a, b));
+      // The range check also refuses 1e-310 and other lengths under a thousandth of a mm.
+      const tiny = value !== 0 && Math.abs(value) * a < b / 1000;
+      if (tiny || Math.abs(value) * a > 5079 * b) return checkRange(fractionFromNumber(value, a, b));
       return fractionFromNumber(value, a, b);
     }
     if (typeof value === 'string') return parseExact(value, this.unit);

@@ -28,6 +28,7 @@ export interface PlanWarning {
 export type WarningCode =
   | 'not-enough-cloth'
   | 'third-section-too-small'
+  | 'stitching-above-cuff'
   | 'cuff-depth-unusual'
   | 'slope-on-cuff'
   | 'old-crease-visible'
@@ -53,7 +54,7 @@ export interface CuffLine {
 export interface CuffInput {
   unit: Unit;
   precision?: Precision;
-  /** finished height of the cuff */
+  /** finished height of the cuff; at least 3/4 in (20 mm metric), the shallowest workable */
   cuffDepth: LengthInput;
   /** third section, from the inner fold to the cut; default = cuffDepth */
   hemSection?: LengthInput;
@@ -69,22 +70,27 @@ export interface CuffInput {
   slope?: LengthInput;
 }
 
-/** Where an old crease ends up once the cuff is made ('cut-away': below the cutting line). */
-export type CreasePlace = 'leg-visible' | 'behind-cuff' | 'cuff-face' | 'inside' | 'on-fold' | 'cut-away';
+/**
+ * Where an old crease ends up once the cuff is made ('cut-away': below the cutting line;
+ * 'at-cuff-top': on the leg within the stated tolerance of the cuff top, where it may show).
+ */
+export type CreasePlace = 'leg-visible' | 'at-cuff-top' | 'behind-cuff' | 'cuff-face' | 'inside' | 'on-fold' | 'cut-away';
 
 /** Where an old crease lands, in words and as a height above the finished edge. */
 export interface CreaseLanding {
   place: CreasePlace;
   /** height above the finished edge once the cuff is turned up ('cut-away': where it would have lain inside) */
   heightAboveEdge: Len;
-  /** true when it will show on the outside of the finished trouser */
+  /** true when it will or may show on the outside of the finished trouser */
   visible: boolean;
   message: string;
 }
 
-/** What can still be done when the cloth is short. */
+/** What can still be done when the cloth is short, in the order to offer them. */
 export interface CuffAlternatives {
-  /** deepest cuff, to the display step, that fits with three equal sections (null if under 1/2 in) */
+  /** the customer's cuff depth kept, on the longest third section that fits and still holds the turn-under and a safe stitch (null if none) */
+  shorterSection: Len | null;
+  /** deepest cuff shallower than asked, to the display step, that fits with three equal sections (null under the shallowest workable cuff, 3/4 in / 20 mm) */
   deepestCuff: Len | null;
   /** a plain hem with the usual allowance */
   plainHem: { required: Len; fits: boolean };
@@ -176,6 +182,20 @@ export interface TaperInput {
   clothThickness?: LengthInput;
 }
 
+/** What a taper check under a plain hem takes. Widths are measured flat (half the round). */
+export interface HemTaperInput {
+  unit: Unit;
+  precision?: Precision;
+  /** default 1 1/2 in (40 mm metric), as planHem */
+  hemAllowance?: LengthInput;
+  widthAtEdge: LengthInput;
+  widthAbove: LengthInput;
+  heightAbove: LengthInput;
+  seamAllowance?: LengthInput;
+  /** default 1/8 in (3 mm metric) */
+  tolerance?: LengthInput;
+}
+
 /** The work at one chalk line to keep the cuff-top width straight down. */
 export interface TaperLine {
   n: 1 | 2 | 3 | 4;
@@ -194,9 +214,11 @@ export interface TaperLine {
 /** A taper check: how to keep the leg straight under the cuff. */
 export interface TaperPlan {
   kind: 'taper';
+  /** 'hem': checked under a plain hem (lines 1 and 2, the allowance flared to mirror the taper); absent: under a cuff */
+  finish?: 'hem';
   unit: Unit;
   precision: Precision;
-  /** flat width where the cuff top sits (one cuff depth above the finished edge) */
+  /** flat width where the cuff top sits (one cuff depth above the finished edge); under a hem, one hem allowance above it */
   targetWidth: Len;
   lines: TaperLine[];
   withinTolerance: boolean;

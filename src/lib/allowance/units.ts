@@ -1,5 +1,5 @@
 import Fraction from 'fraction.js';
-import type { Unit } from './types';
+import type { Precision, Unit } from './types';
 
 /** Millimetres in one inch, exactly (1 in = 25.4 mm = 127/5 mm). */
 export const MM_PER_INCH = new Fraction(127, 5);
@@ -23,6 +23,11 @@ export function mmPerUnit(unit: Unit): Fraction {
 /** Millimetres in one of the unit as a ratio of integers [a, b] = a/b mm. */
 export function mmPerUnitRatio(unit: Unit): [number, number] {
   return unit === 'in' ? [127, 5] : unit === 'cm' ? [10, 1] : [1, 1];
+}
+
+/** True for 8, 16 and 32. */
+export function isPrecision(p: unknown): p is Precision {
+  return p === 8 || p === 16 || p === 32;
 }
 
 /** True for the metric units (cm, mm), which share metric defaults. */

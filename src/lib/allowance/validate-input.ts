@@ -1,9 +1,10 @@
 import { AllowanceError } from './allowance-error';
-import { readTaperInput } from './check-taper';
+import { readTaperInput, taperShapeError } from './check-taper';
 import { readCuffInput } from './plan-cuff';
+import { hemTaperShapeError, readHemTaperInput } from './hem-taper';
 import { readHemInput } from './plan-hem';
 import { InputReader } from './read-input';
-import type { CuffInput, HemInput, TaperInput } from './types';
+import type { CuffInput, HemInput, HemTaperInput, TaperInput } from './types';
 
 function collect<T>(input: unknown, read: (input: T, r: InputReader) => unknown): AllowanceError[] {
   try {
@@ -26,7 +27,21 @@ export function validateHemInput(input: unknown): AllowanceError[] {
   return collect<HemInput>(input, readHemInput);
 }
 
-/** Every problem with a taper input, one AllowanceError per field (empty when the fields are sound). */
+/** Every problem with a taper input, one AllowanceError per field (empty when checkTaper will accept it). */
 export function validateTaperInput(input: unknown): AllowanceError[] {
-  return collect<TaperInput>(input, readTaperInput);
+  return collect<TaperInput>(input, (i, r) => {
+    const v = readTaperInput(i, r);
+    // The widths' shape is only judged once every field could be read.
+    const shape = r.errors.length === 0 ? taperShapeError(v) : null;
+    if (shape) r.errors.push(shape);
+  });
+}
+
+/** Every problem with a taper check under a plain hem, one AllowanceError per field (empty when checkHemTaper will accept it). */
+export function validateHemTaperInput(input: unknown): AllowanceError[] {
+  return collect<HemTaperInput>(input, (i, r) => {
+    const v = readHemTaperInput(i, r);
+    const shape = r.errors.length === 0 ? hemTaperShapeError(v) : null;
+    if (shape) r.errors.push(shape);
+  });
 }

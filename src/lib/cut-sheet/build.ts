@@ -1,6 +1,6 @@
 // Engine inputs → a cut sheet's data. The public calculator and a saved garment both come through
 // here. Relative imports keep it runnable by plain vite-node in bench/ (no @ alias there).
-import { AllowanceError, checkTaper, isAllowanceError, planCuff, planHem, validateCuffInput, validateHemInput, validateTaperInput } from '../allowance/index';
+import { AllowanceError, checkHemTaper, checkTaper, isAllowanceError, planCuff, planHem, validateCuffInput, validateHemInput, validateHemTaperInput, validateTaperInput } from '../allowance/index';
 import type { CuffInput, HemInput, LengthInput } from '../allowance/types';
 import type { CutSheetData, LegSheet, Side } from './types';
 
@@ -16,7 +16,13 @@ export interface TaperWidths {
 /** What one leg should become: a cuff (maybe on a tapered leg) or a plain hem. */
 export type LegOrder =
   | { side: Side; finish: 'cuff'; input: CuffInput; taper?: TaperWidths; finished?: string }
-  | { side: Side; finish: 'hem'; input: HemInput; finished?: string };
+  | { side: Side; finish: 'hem'; input: HemInput; taper?: TaperWidths; finished?: string };
+
+// A plain hem's taper check takes the hem's own unit, precision and allowance.
+function hemTaperInput(hem: HemInput, widths: TaperWidths) {
+  const { unit, precision, hemAllowance } = hem;
+  return { unit, precision, hemAllowance, ...widths };
+}
 
 function taperInput(cuff: CuffInput, widths: TaperWidths) {
   const { unit, precision, cuffDepth, hemSection, clothThickness } = cuff;
@@ -36,6 +42,7 @@ export function refusedFields(legs: LegOrder[]): Record<string, string> {
     const prefix = leg.side === 'right' ? 'right.' : '';
     if (leg.finish === 'hem') {
       add(prefix, validateHemInput(leg.input));
+      if (leg.taper) add(`${prefix}taper.`, validateHemTaperInput(hemTaperInput(leg.input, leg.taper)));
       continue;
     }
     add(prefix, validateCuffInput(leg.input));
@@ -47,7 +54,14 @@ export function refusedFields(legs: LegOrder[]): Record<string, string> {
 /** Plans one leg with the engine (throws the engine's AllowanceError on input it refuses). */
 export function planLeg(order: LegOrder): LegSheet {
   const finished = order.finished?.trim() ? { finished: order.finished.trim() } : {};
-  if (order.finish === 'hem') return { side: order.side, finish: 'hem', input: order.input, plan: planHem(order.input), ...finished };
+  if (order.finish === 'hem') {
+    const hem: LegSheet = { side: order.side, finish: 'hem', input: order.input, plan: planHem(order.input), ...finished };
+    if (order.taper) {
+      const input = hemTaperInput(order.input, order.taper);
+      hem.taper = { input, plan: checkHemTaper(input) };
+    }
+    return hem;
+  }
   const plan = planCuff(order.input);
   const leg: LegSheet = { side: order.side, finish: 'cuff', input: order.input, plan, ...finished };
   if (order.taper) {

@@ -67,6 +67,14 @@ export const UNSAVED_TITLE = 'Unsaved plan from the calculator';
 /** Stitch lengths printed on the sheet, in mm (TRADE.md, common practice). */
 export const STITCH = { long: 'about 4 mm', short: 'about 2 mm', standard: 'about 2.5–3 mm' } as const;
 
+// Inch shops set stitches per inch: 25.4/4 ≈ 6, 25.4/2 ≈ 13, 8–10 per inch (TRADE.md); mm beside.
+const STITCH_PER_INCH = { long: 'about 6 per inch, 4 mm', short: 'about 13 per inch, 2 mm', standard: '8–10 per inch, 2.5–3 mm' } as const;
+
+/** The stitch lengths as a sheet in this unit prints them: per inch (with mm) on inch sheets, mm on metric ones. */
+export function stitchLengths(unit: Unit): Record<keyof typeof STITCH, string> {
+  return unit === 'in' ? STITCH_PER_INCH : STITCH;
+}
+
 // Tack placement (TRADE.md: about 1/8 to 3/16 in below the cuff top, about 1/8 in wide).
 const TACK: Record<Unit, { below: string; wide: string }> = {
   in: { below: '1/8 to 3/16 in', wide: '1/8 in' },
@@ -110,8 +118,7 @@ function formatDue(iso: string): string {
 }
 
 function sameWork(a: LegSheet, b: LegSheet): boolean {
-  const key = (l: LegSheet) =>
-    JSON.stringify([l.finish, l.plan, l.finish === 'cuff' ? l.taper?.plan : null, creaseOf(l)]);
+  const key = (l: LegSheet) => JSON.stringify([l.finish, l.plan, l.taper?.plan ?? null, creaseOf(l)]);
   return key(a) === key(b);
 }
 
@@ -122,8 +129,9 @@ function creaseOf(leg: LegSheet): CreaseLanding | undefined {
 // The engine advises pressing a showing crease out "before finishing"; on a pair that came with
 // cuffs the let-down step has already pressed it, before any chalk, so the note says that instead.
 const LET_DOWN_ADVICE: Partial<Record<CreaseLanding['place'], string>> = {
-  'leg-visible': 'Press it out as the old cuffs come down; if it still shows, choose a cuff depth that covers it.',
-  'cuff-face': 'Press it out as the old cuffs come down; if it still shows, change the cuff depth so it falls on a fold.',
+  'leg-visible': 'Press it out as the old cuffs come down; if it still shows, choose a cuff depth that covers it. Tell the customer it may not press out.',
+  'at-cuff-top': 'Press it out as the old cuffs come down. Tell the customer it may not press out.',
+  'cuff-face': 'Press it out as the old cuffs come down; if it still shows, change the cuff depth so it falls on a fold. Tell the customer it may not press out.',
 };
 
 function creaseNote(crease: CreaseLanding | undefined, existing: ExistingFinish | undefined): string | null {
@@ -153,6 +161,7 @@ function clothCheck(pp: PrintedPlan): SheetLegGroup['cloth'] {
   const options: string[] = [];
   const alt = pp.alternatives;
   if (alt) {
+    if (alt.shorterSection) options.push(`Same cuff, third section ${alt.shorterSection.text}: fits.`);
     if (alt.deepestCuff) options.push(`A shallower cuff: ${alt.deepestCuff.text} deep fits.`);
     options.push(`A plain hem needs ${alt.plainHem.required.text}: ${alt.plainHem.fits ? 'fits' : 'does not fit'}.`);
     options.push(`A faced cuff needs ${alt.facedCuff.required.text}: ${alt.facedCuff.fits ? 'fits' : 'does not fit'}.`);
@@ -165,7 +174,9 @@ function clothCheck(pp: PrintedPlan): SheetLegGroup['cloth'] {
 }
 
 function taperOf(leg: LegSheet, pp: PrintedPlan): SheetLegGroup['taper'] {
-  if (leg.finish !== 'cuff' || !leg.taper || !pp.taper) return null;
+  if (!leg.taper) return null;
+  if (leg.finish === 'hem') return hemTaperOf(leg);
+  if (!pp.taper) return null;
   const t = leg.taper.plan;
   const work = (l: PrintedSeamWork) => `${l.sign > 0 ? 'let out' : 'take in'} ${l.perSeam.text} at each seam (${l.perSide.text} each side)`;
   const rows = t.lines.map((l, k) => {
@@ -173,17 +184,46 @@ function taperOf(leg: LegSheet, pp: PrintedPlan): SheetLegGroup['taper'] {
     return { n: l.n, name: LINE_NAMES[l.name], width: l.width.text, work: !pp.taper!.work || printed.sign === 0 ? 'as it is' : work(printed) };
   });
   const target = pp.taper.target.text;
+  // Named by its height above the finished edge: the chalked "Cuff top" line is one depth below the mark.
+  const above = pp.depth.text;
   // No line with work to print (within tolerance, or under half a step everywhere): nothing to let out.
-  if (!pp.taper.work) return { summary: `Taper within tolerance: no seam work needed (cuff top ${target} flat).`, work: null, rows };
+  if (!pp.taper.work) return { summary: `Taper within tolerance: no seam work needed (${target} flat ${above} above the edge).`, work: null, rows };
   const moving = pp.taper.lines.filter((l) => l.sign !== 0);
   const moves = moving.map((l) => `${l.sign > 0 ? 'let out' : 'take in'} ${l.perSeam.text} at line ${l.n}`);
   // Each side's share in the same order, its unit said once at the end: "1/8, 1/4 in each side".
   const sides = moving.map((l, i) => (i === moving.length - 1 ? l.perSide.text : l.perSide.text.replace(/ (in|cm|mm)$/, '')));
   return {
-    summary: `Taper: keep the cuff-top width, ${target} flat, straight down to the cutting line.`,
+    summary: `Taper: keep the width ${above} above the finished edge (${target} flat) straight down to the cutting line.`,
     work: `At each leg seam ${moves.join(', ')}; half of each at each side of the seam: ${sides.join(', ')} each side.`,
     rows,
   };
+}
+
+// Under half a step the engine's figure prints as 0: never "let out 0 in" on a line.
+function printsZero(len: Len): boolean {
+  return /^0(\s|$)/.test(unsigned(len));
+}
+
+// A plain hem on a tapered leg: turned up, the hem must match the leg it lands on.
+function hemTaperOf(leg: LegSheet & { finish: 'hem' }): SheetLegGroup['taper'] {
+  const t = leg.taper!.plan;
+  const rows = t.lines.map((l) => ({
+    n: l.n,
+    name: LINE_NAMES[l.name],
+    width: l.width.text,
+    work:
+      l.change.mm === 0 || printsZero(l.perSeam)
+        ? 'as it is'
+        : `${l.change.mm > 0 ? 'let out' : 'take in'} ${unsigned(l.perSeam)} at each seam (${unsigned(l.perSide)} each side)`,
+  }));
+  const above = leg.plan.hemAllowance.text;
+  const cut = t.lines[t.lines.length - 1]!;
+  const flat = t.withinTolerance || cut.change.mm === 0 || printsZero(cut.perSeam);
+  const summary = flat
+    ? `Taper within tolerance: the hem lies flat, no seam work needed.`
+    : `Taper: turned up, the hem must match the leg ${above} above the edge (${t.targetWidth.text} flat): flare the seams below the finished edge to it at the cutting line.`;
+  const work = flat ? null : `At each leg seam ${cut.change.mm > 0 ? 'let out' : 'take in'} ${unsigned(cut.perSeam)} at line 2, nothing at line 1 (half of it each side of the seam).`;
+  return { summary, work, rows };
 }
 
 function slopeNote(leg: LegSheet, pp: PrintedPlan): string | null {
@@ -216,7 +256,7 @@ function groupOf(leg: LegSheet, label: string, existing: ExistingFinish | undefi
   }));
   const title = p.kind === 'cuff' ? `Cuff, ${pp.depth.text} deep` : `Plain hem, ${pp.depth.text} allowance`;
   const crease = creaseOf(leg);
-  const warnings: PlanWarning[] = [...p.warnings, ...(leg.finish === 'cuff' && leg.taper ? leg.taper.plan.warnings : [])];
+  const warnings: PlanWarning[] = [...p.warnings, ...(leg.taper ? leg.taper.plan.warnings : [])];
   const beyond = pp.taper?.beyondSeamAllowance;
   // The engine's let-out warning has its own rounding; the sheet says it with the figures it prints,
   // and not at all beside "no seam work needed".
@@ -254,6 +294,7 @@ function groupOf(leg: LegSheet, label: string, existing: ExistingFinish | undefi
 /** Bench steps for a cuff, in the order they are done; taperStep is the seam work, if any. */
 export function cuffSteps(unit: Unit, turnUnder: string, taperStep: string | null): string[] {
   const tack = TACK[unit];
+  const STITCH = stitchLengths(unit);
   return [
     "Chalk the four lines level round the leg with dry tailor's chalk, not wax (wax leaves a mark under the iron). Measure each from the pin mark.",
     ...(taperStep ? [taperStep] : []),
@@ -266,10 +307,12 @@ export function cuffSteps(unit: Unit, turnUnder: string, taperStep: string | nul
   ];
 }
 
-/** Bench steps for a plain hem, in the order they are done. */
-export function hemSteps(turnUnder: string, sloped: boolean): string[] {
+/** Bench steps for a plain hem, in the order they are done (stitch lengths per inch on inch sheets); taperStep is the seam work, if any. */
+export function hemSteps(turnUnder: string, sloped: boolean, unit: Unit = 'mm', taperStep: string | null = null): string[] {
+  const STITCH = stitchLengths(unit);
   return [
     `Chalk the two lines ${sloped ? 'round the leg, sloping down to the back,' : 'level round the leg'} with dry tailor's chalk, not wax (wax leaves a mark under the iron).`,
+    ...(taperStep ? [taperStep] : []),
     'Cut on line 2, the cutting line.',
     `Turn under ${turnUnder} at the raw edge and stitch it with a standard stitch (${STITCH.standard}).`,
     'Fold up at line 1. Press the fold at the seams first, then front and back.',
@@ -293,11 +336,16 @@ function stepsOf(groups: SheetLegGroup[]): SheetContent['steps'] {
   }
   const turnUnder = perLeg(groups, (g) => g.printed.turnUnder.text);
   const first = groups[0]!.leg;
-  if (first.finish === 'hem') {
-    return [{ heading: null, items: hemSteps(turnUnder, groups.some((g) => g.slopeNote !== null)) }];
-  }
   const tapered = groups.filter((g) => g.taper?.work);
-  const seamWork = 'Re-chalk both leg seams straight down from the cuff top to the cutting line, as in the taper note.';
+  if (first.finish === 'hem') {
+    const hemWork = "Before cutting, unpick both leg seams below the finished edge; re-stitch them flaring out to the cutting line (taper note), press open (hot iron: your shop's way).";
+    const step = tapered.length === 0 ? null : tapered.length === groups.length ? hemWork : `${tapered.map((g) => g.label).join(', ')}: ${hemWork[0]!.toLowerCase()}${hemWork.slice(1)}`;
+    return [{ heading: null, items: hemSteps(turnUnder, groups.some((g) => g.slopeNote !== null), first.plan.unit, step) }];
+  }
+  const from = perLeg(tapered.length ? tapered : groups, (g) => g.printed.depth.text);
+  // Re-chalking alone leaves the old stitching: the seam is unpicked, sewn on the new line and pressed
+  // open before the bottom is cut and folded, or the cuff is folded over the old, tapered seam.
+  const seamWork = `Before cutting, unpick both leg seams from ${from} above the finished edge to the cut line; re-stitch straight down (taper note), press open (hot iron: your shop's way).`;
   const taperStep =
     tapered.length === 0 ? null : tapered.length === groups.length ? seamWork : `${tapered.map((g) => g.label).join(', ')}: ${seamWork[0]!.toLowerCase()}${seamWork.slice(1)}`;
   return [{ heading: null, items: cuffSteps(first.plan.unit, turnUnder, taperStep) }];

@@ -58,6 +58,8 @@ export interface PrintedPlan {
   lines: PrintedLine[];
   cloth: PrintedCloth;
   alternatives: {
+    /** the customer's cuff depth with a shorter third section, rounded down so it fits as printed */
+    shorterSection: Len | null;
     deepestCuff: Len | null;
     plainHem: { required: Len; fits: boolean };
     facedCuff: { required: Len; fits: boolean };
@@ -198,7 +200,9 @@ export function printedPlan(leg: LegSheet): PrintedPlan {
       const req = up(st.of(mm));
       return { required: st.len(req), fits: fits && req <= has };
     };
+    const shorter = alt.shorterSection === null ? null : Math.min(Math.floor(st.of(alt.shorterSection.mm) + 1e-6), has - inner);
     alternatives = {
+      shorterSection: shorter === null || shorter < 1 ? null : st.len(shorter),
       deepestCuff: deepest === null || deepest < 1 ? null : st.len(deepest),
       plainHem: needs(alt.plainHem.required.mm, alt.plainHem.fits),
       facedCuff: needs(alt.facedCuff.required.mm, alt.facedCuff.fits),

@@ -6,6 +6,7 @@ import type {
   CuffPlan,
   HemInput,
   HemPlan,
+  HemTaperInput,
   Precision,
   TaperInput,
   TaperPlan,
@@ -38,6 +39,8 @@ export interface HemLeg {
   finish: 'hem';
   input: HemInput;
   plan: HemPlan;
+  /** on a tapered leg: the hem turned up must lie flat too */
+  taper?: { input: HemTaperInput; plan: TaperPlan };
   /** where an old hem crease lands, if the shop noted it */
   crease?: CreaseLanding;
   /** the finished length pinned at the back, as typed, in the plan's unit unless it names one */

@@ -17,6 +17,8 @@ function land(creaseIn: Fraction, unit: 'in' | 'mm' = 'in') {
     lines,
     linesMm: linePositionList(lines).map((f) => f.valueOf()),
     onFoldWithin: unit === 'in' ? inch(1, 16) : new Fraction(3, 2),
+    // work to an eighth (TRADE.md common practice); 3 mm metric
+    nearCuffTop: unit === 'in' ? inch(1, 8) : new Fraction(3),
     len: lenMaker(unit, 16),
   });
 }
@@ -25,7 +27,11 @@ function land(creaseIn: Fraction, unit: 'in' | 'mm' = 'in') {
 describe('creaseLanding', () => {
   it.each([
     [inch(-2), 'leg-visible', '2 in', true],
-    [inch(-3, 2), 'leg-visible', '1 1/2 in', true],
+    [inch(-3, 2), 'at-cuff-top', '1 1/2 in', true],
+    [inch(-23, 16), 'at-cuff-top', '1 7/16 in', true],
+    [inch(-13, 8), 'at-cuff-top', '1 5/8 in', true],
+    [inch(-27, 16), 'leg-visible', '1 11/16 in', true],
+    [inch(-21, 16), 'behind-cuff', '1 5/16 in', false],
     [inch(-1), 'behind-cuff', '1 in', false],
     [inch(3, 4), 'behind-cuff', '3/4 in', false],
     [inch(2), 'cuff-face', '1 in', true],
@@ -56,6 +62,18 @@ describe('creaseLanding', () => {
   it('takes a crease within 1.5 mm of a fold in metric plans, not 2 mm (our tolerance, 1/16 in ≈ 1.6 mm)', () => {
     expect(land(new Fraction(3, 2), 'mm').place).toBe('on-fold');
     expect(land(new Fraction(2), 'mm').place).toBe('behind-cuff');
+  });
+
+  it('a crease at the cuff-top height and one 1/16 in lower get the same verdict, with the 1/8 in tolerance stated and the customer told it may not press out (TRADE.md: work to an eighth)', () => {
+    const at = land(inch(-3, 2));
+    const lower = land(inch(-23, 16));
+    expect([at.place, at.visible]).toEqual([lower.place, lower.visible]);
+    for (const l of [at, lower]) {
+      expect(l.message).toContain('within 1/8 in of the cuff top');
+      expect(l.message).toContain('Tell the customer it may not press out.');
+    }
+    expect(land(inch(-2)).message).toContain('Tell the customer it may not press out.');
+    expect(land(inch(2)).message).toContain('Tell the customer it may not press out.');
   });
 
   it('names the fold it falls on', () => {

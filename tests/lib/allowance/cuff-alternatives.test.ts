@@ -9,6 +9,9 @@ const inch = (n: number, d = 1) => new Fraction(n, d).mul(new Fraction(127, 5));
 function ctx(available: Fraction, d: Fraction, t = new Fraction(0), precision: 8 | 16 = 16) {
   return {
     available,
+    cuffDepth: d,
+    hemSection: d,
+    turnUnder: inch(1, 2),
     innerFold: d.add(t).mul(2),
     clothThickness: t,
     unit: 'in' as const,
@@ -28,9 +31,9 @@ describe('cuff alternatives', () => {
     expect(lenMaker('in', 16)(deepestCuff(ctx(inch(4), inch(3, 2), inch(1, 8)))!).text).toBe('1 1/4 in');
   });
 
-  it('offers no cuff under ½ in (the brief; common practice (no source))', () => {
-    expect(deepestCuff(ctx(inch(3, 2), inch(3, 2)))).not.toBeNull();
-    expect(deepestCuff(ctx(inch(23, 16), inch(3, 2)))).toBeNull();
+  it('offers no cuff under the shallowest workable, 3/4 in (common practice (no source))', () => {
+    expect(lenMaker('in', 16)(deepestCuff(ctx(inch(9, 4), inch(3, 2)))!).text).toBe('3/4 in');
+    expect(deepestCuff(ctx(inch(35, 16), inch(3, 2)))).toBeNull();
   });
 
   it('plain hem 1½ in (TRADE.md: powersewing.com, 1¼ to 2 in) and faced cuff 2d + ½ in seam (from memory)', () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULTS, USUAL_CUFF_DEPTHS } from '@/lib/allowance';
-import { exactDefaults } from '@/lib/allowance/defaults';
+import { exactDefaults, usualCuffDepthsText } from '@/lib/allowance/defaults';
 
 describe('DEFAULTS', () => {
   it('inch defaults (TRADE.md: turn-under ½ in common practice; hem 1¼–2 in and turn-under ¼ in, powersewing.com; ⅛ in tolerance common practice)', () => {
@@ -52,5 +52,18 @@ describe('exact defaults', () => {
       expect(e.usualHemAllowance.maxMm).toBe(e.usualHemAllowance.max.valueOf());
     }
     expect(exactDefaults('in').onFoldWithinMm).toBe(1.5875);
+  });
+});
+
+describe('the usual cuff depths in words (the bench hint)', () => {
+  it('says 1 1/4, 1 1/2 or 1 3/4 in, or 3.2–4.4 cm: the same figures as the presets, not "4–5 cm" (TRADE.md: Encyclopedia of Men\'s Clothes; 32–44 mm our rounding)', () => {
+    expect(usualCuffDepthsText()).toBe('1 1/4, 1 1/2 or 1 3/4 in, or 3.2–4.4 cm');
+  });
+
+  it('the bench form shows that text, not its own figures', async () => {
+    const { readFile } = await import('node:fs/promises');
+    const source = await readFile(new URL('../../../src/components/bench/LegFields.tsx', import.meta.url), 'utf8');
+    expect(source).toContain('usualCuffDepthsText()');
+    expect(source).not.toMatch(/4–5 cm/);
   });
 });

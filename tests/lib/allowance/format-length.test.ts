@@ -55,6 +55,15 @@ describe('formatLength examples', () => {
     expect(formatLength(-0.2, { unit: 'cm' })).toBe('0 cm');
   });
 
+  it('refuses a unit or precision it does not know, instead of printing nonsense (our rule: in, cm, mm; 1/8, 1/16, 1/32)', () => {
+    const bad = (opts: unknown) => () => formatLength(25.4, opts as { unit: 'in' });
+    expect(bad({ unit: 'ft' })).toThrow(expect.objectContaining({ code: 'bad-unit' }));
+    expect(bad({ unit: 'in', precision: 12 })).toThrow(expect.objectContaining({ code: 'bad-precision' }));
+    expect(bad({ unit: 'mm', precision: 12 })).toThrow(expect.objectContaining({ code: 'bad-precision' }));
+    expect(bad(null)).toThrow(AllowanceError);
+    expect(() => splitFraction(25.4, 12 as 16)).toThrow(expect.objectContaining({ code: 'bad-precision' }));
+  });
+
   it('refuses NaN, Infinity and absurd sizes with an AllowanceError', () => {
     for (const bad of [Number.NaN, Infinity, -Infinity, 1e300]) {
       expect(() => formatLength(bad, { unit: 'in' })).toThrow(AllowanceError);

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import Fraction from 'fraction.js';
 import { describe, expect, it } from 'vitest';
-import { compareExact, lenMaker, mmNumber } from '@/lib/allowance/len';
+import { compareExact, fractionNumber, lenMaker, mmNumber } from '@/lib/allowance/len';
 
 describe('Len', () => {
   it('holds the exact mm as the nearest number and the text in the unit (1 in = 25.4 mm, NBS 1959)', () => {
@@ -38,5 +38,16 @@ describe('Len', () => {
         expect(compareExact(a, a.valueOf(), b, bb.valueOf(), negate)).toBe(a.compare(bb));
       }),
     );
+  });
+});
+
+describe('fractionNumber', () => {
+  it('gives the nearest number even past 1e308, where fraction.js valueOf gives NaN (arithmetic)', () => {
+    const big = 10n ** 400n;
+    const nearlyOne = new Fraction(big + 1n, big);
+    expect(Number.isNaN(nearlyOne.valueOf())).toBe(true);
+    expect(fractionNumber(nearlyOne)).toBe(1);
+    expect(fractionNumber(new Fraction(-(3n * big), 2n * big))).toBe(-1.5);
+    expect(fractionNumber(new Fraction(1n, big))).toBe(0);
   });
 });

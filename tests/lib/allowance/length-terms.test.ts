@@ -31,12 +31,13 @@ describe('termUnits', () => {
     expect(termUnits(readLengthTerms('1 + 2'), 'cm')).toEqual(['cm', 'cm']);
   });
 
-  it('lends the one named unit to the unnamed parts', () => {
-    expect(termUnits(readLengthTerms('30 in + 1/2'), 'mm')).toEqual(['in', 'in']);
+  it('never lends a named unit to the unnamed parts: a bare number is the plan unit', () => {
+    expect(termUnits(readLengthTerms('30 in + 1/2'), 'mm')).toEqual(['in', 'mm']);
+    expect(termUnits(readLengthTerms('30 + 5 mm'), 'in')).toEqual(['in', 'mm']);
   });
 
-  it('asks for every unit when two different ones are named', () => {
+  it('takes each named unit as named', () => {
     expect(termUnits(readLengthTerms('30 in + 5 mm'), 'cm')).toEqual(['in', 'mm']);
-    expect(() => termUnits(readLengthTerms('30 in + 5 mm + 1'), 'cm')).toThrow(/unit of every part/);
+    expect(termUnits(readLengthTerms('30 in + 5 mm + 1'), 'cm')).toEqual(['in', 'mm', 'cm']);
   });
 });

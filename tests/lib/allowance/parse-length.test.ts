@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { AllowanceError, formatLength, parseLength, type Precision, type Unit } from '@/lib/allowance';
-import { parseExact, parseExactWithMathjs } from '@/lib/allowance/parse-length';
+import Fraction from 'fraction.js';
+import { parseExact, parseExactWithMathjs, withUnitsNamed } from '@/lib/allowance/parse-length';
 
 // 1 in = 25.4 mm exactly (NBS 1959): every inch value below is that arithmetic.
 describe('parseLength accepts', () => {
@@ -32,7 +33,7 @@ describe('parseLength accepts', () => {
     ['32 − 1/4', 'in', 806.45, '31 3/4 in'],
     ['32-1/4', 'in', 819.15, '32 1/4 in'],
     ['30 in + 5 mm', 'in', 767, '30 3/16 in'],
-    ['30 in + 1/2', 'mm', 774.7, '774.5 mm'],
+    ['30 in + 1/2', 'mm', 762.5, '762.5 mm'],
     ['-1/4', 'in', -6.35, '-1/4 in'],
     ['- 1 1/4', 'in', -31.75, '-1 1/4 in'],
     ['  2  ', 'in', 50.8, '2 in'],
@@ -68,7 +69,10 @@ describe('parseLength refuses', () => {
     ['1 1/2/3', 'not-a-length'],
     ['2 in cm', 'bad-unit'],
     ['½½', 'not-a-length'],
+    // a decimal comma is for metric lengths: in an inch plan it is refused (our rule)
     ['1,5', 'not-a-length'],
+    ['1,500 mm', 'not-a-length'],
+    ['1,5,2 mm', 'not-a-length'],
     ['5-3', 'not-a-length'],
     ['32 -1/4', 'not-a-length'],
     ['1 3/2', 'not-a-length'],
@@ -82,7 +86,6 @@ describe('parseLength refuses', () => {
     ['in', 'not-a-length'],
     ['2 ft', 'bad-unit'],
     ["2'", 'bad-unit'],
-    ['30 in + 5 mm + 1', 'bad-unit'],
     ['201', 'too-large'],
     ['5081 mm', 'too-large'],
     ['99999999999999999999999', 'too-large'],
@@ -103,8 +106,60 @@ describe('parseLength refuses', () => {
     expect((caught as AllowanceError).message.length).toBeGreaterThan(10);
   });
 
-  it('explains the decimal comma', () => {
-    expect(() => parseLength('1,5', 'cm')).toThrow(/point/);
+  it('explains the decimal comma in inches, repeating what was typed', () => {
+    expect(() => parseLength('1,5', 'in')).toThrow(/“1,5”.*point/);
+  });
+
+  it.each([
+    // decimal commas as metric shops write them (arithmetic: 1 cm = 10 mm)
+    ['3,8 cm', 'in', 38],
+    ['3,8 cm', 'cm', 38],
+    ['1,5', 'cm', 15],
+    ['1,5', 'mm', 1.5],
+    ['38,5 mm', 'mm', 38.5],
+    ['1,50', 'cm', 15],
+    ['31,75 + 0,5', 'cm', 322.5],
+  ] as const)('reads the decimal comma in "%s" in a %s plan as %s mm (arithmetic)', (text, unit, mm) => {
+    expect(parseLength(text, unit).mm).toBeCloseTo(mm, 9);
+  });
+
+  it.each([
+    ['1,500', 'cm'],
+    ['1,5,2', 'mm'],
+    ['1,5.2', 'cm'],
+    ['1.5,2', 'mm'],
+  ] as const)('refuses the unclear "%s" in a %s plan with a message that repeats it', (text, unit) => {
+    expect(() => parseLength(text, unit)).toThrow(expect.objectContaining({ code: 'not-a-length' }));
+    let message = '';
+    try {
+      parseLength(text, unit);
+    } catch (e) {
+      message = (e as Error).message;
+    }
+    expect(message).toContain(text.startsWith('1.5,') ? '1.5,2' : text);
+  });
+
+  it('strips invisible characters (zero-width space, BOM, soft hyphen, word joiner) before reading (1 in = 25.4 mm, NBS 1959)', () => {
+    expect(parseLength('1\u200B 1/2', 'in').mm).toBeCloseTo(38.1, 9);
+    expect(parseLength('\uFEFF38 mm', 'in').mm).toBe(38);
+    expect(parseLength('3\u00AD8', 'mm').mm).toBe(38);
+    expect(parseLength('1\u2060½\u200E', 'in').mm).toBeCloseTo(38.1, 9);
+    expect(() => parseLength('\u200B\uFEFF', 'in')).toThrow(expect.objectContaining({ code: 'empty' }));
+  });
+
+  it('a bare number always means the plan unit: "30 + 5 mm" in an inch plan is 30 in + 5 mm = 767 mm, not 35 mm (NBS 1959 arithmetic)', () => {
+    expect(parseLength('30 + 5 mm', 'in').mm).toBeCloseTo(767, 9);
+    expect(parseLength('30 in + 1/2', 'mm').mm).toBeCloseTo(762.5, 9);
+    expect(parseLength('30 in + 5 mm + 1', 'cm').mm).toBeCloseTo(777, 9);
+  });
+
+  it('names every part\'s unit so the text reads the same in a plan of another unit', () => {
+    expect(withUnitsNamed('30 + 5 mm', 'in')).toBe('30 in + 5 mm');
+    expect(withUnitsNamed('-1 1/2 - 1/8', 'in')).toBe('-1 1/2 in - 1/8 in');
+    expect(withUnitsNamed('3,8', 'cm')).toBe('3.8 cm');
+    for (const [text, unit] of [['30 + 5 mm', 'in'], ['31 3/4 + 1/8', 'in'], ['3,8 + 2 mm', 'cm']] as const) {
+      expect(parseLength(withUnitsNamed(text, unit), 'mm').mm).toBe(parseLength(text, unit).mm);
+    }
   });
 
   it('refuses a unit outside in, cm, mm', () => {
@@ -149,13 +204,24 @@ describe('parseLength laws', () => {
       fc.property(simpleText, simpleText, fc.constantFrom(' + ', ' - ', '+', ' − '), unitArb, (a, b, op, unit) => {
         const pa = parseExact(a, unit);
         const pb = parseExact(b.replace(/^-/, ''), unit);
-        // Mixed named units are refused unless every part names one; keep to texts that agree
-        const named = [a, b].map((t) => /(in|mm|cm|")$/.exec(t)?.[1] ?? null);
-        fc.pre(named[0] === named[1] || (named[0] !== null && named[1] !== null));
+        // Each part is read alone, so a bare part takes the plan's unit whatever the other part names.
         const text = `${a}${op}${b.replace(/^-/, '')}`;
         const expected = op.includes('+') ? pa.add(pb) : pa.sub(pb);
         fc.pre(expected.abs().compare(5080) <= 0);
+        // Under a thousandth of a mm is no length (our rule), e.g. 0.04 in − 1 1/64 mm
+        fc.pre(expected.n === 0n || expected.abs().compare(new Fraction(1, 1000)) >= 0);
         expect(parseExact(text, unit).equals(expected)).toBe(true);
+      }),
+    );
+  });
+
+  it('a bare number takes the plan unit, whatever unit another part names', () => {
+    const bare = fc.tuple(fc.integer({ min: 0, max: 60 }), fc.integer({ min: 0, max: 15 })).map(([w, n]) => (n === 0 ? `${w}` : `${w} ${n}/16`));
+    const named = fc.tuple(fc.integer({ min: 1, max: 60 }), fc.constantFrom('in', 'mm', 'cm')).map(([w, u]) => `${w} ${u}`);
+    fc.assert(
+      fc.property(bare, named, unitArb, fc.boolean(), (a, b, unit, bareFirst) => {
+        const text = bareFirst ? `${a} + ${b}` : `${b} + ${a}`;
+        expect(parseExact(text, unit).equals(parseExact(a, unit).add(parseExact(b, unit)))).toBe(true);
       }),
     );
   });

@@ -28,4 +28,10 @@ describe('input validation', () => {
     expect(validateTaperInput({ unit: 'in', cuffDepth: 1.5, widthAtEdge: 7, widthAbove: 0 }).map((e) => e.field)).toEqual(['widthAbove', 'heightAbove']);
     expect(validateTaperInput({ unit: 'in', cuffDepth: 1.5, widthAtEdge: 7, widthAbove: 8, heightAbove: 12 })).toEqual([]);
   });
+
+  it('a taper whose widths give no leg at the cut is refused by validation too, on widthAbove (arithmetic: 1.5 mm − 218.5/150 × 114 mm < 0)', () => {
+    const errors = validateTaperInput({ unit: 'mm', cuffDepth: 38, widthAtEdge: 1.5, widthAbove: 220, heightAbove: 150 });
+    expect(errors.map((e) => [e.field, e.code])).toEqual([['widthAbove', 'out-of-range']]);
+    expect(errors[0]!.message).toMatch(/no leg/);
+  });
 });

@@ -112,7 +112,7 @@ describe('the old-crease note agrees with the let-down step', () => {
     // mark lies between the cuff top and the inner fold, 3 − 2 = 1 in above the finished edge.
     const g = sheetContent(sheet([cuffWithCrease(2)], { existingFinish: 'cuff' })).groups[0]!;
     expect(g.crease).toBe(
-      'The old crease will show on the face of the cuff, 1 in above the finished edge. Press it out as the old cuffs come down; if it still shows, change the cuff depth so it falls on a fold.',
+      'The old crease will show on the face of the cuff, 1 in above the finished edge. Press it out as the old cuffs come down; if it still shows, change the cuff depth so it falls on a fold. Tell the customer it may not press out.',
     );
   });
 

@@ -53,19 +53,20 @@ describe('a 1 1/2 in cuff with 5 in of cloth, inches', () => {
     for (const wd of widths.values()) expect(wd).toBeCloseTo(widths.get('1')!, 2);
   });
 
-  it('lists the bench steps in order, with stitch lengths in mm', () => {
+  it('lists the bench steps in order, with stitch lengths per inch and mm beside on an inch sheet', () => {
     // TRADE.md common practice: dry chalk not wax; press at the seams first; turn-under with a long
-    // stitch (about 4 mm); press with a cloth; tack a little below the cuff top, short stitch (about 2 mm).
+    // stitch (about 4 mm: 25.4/4 ≈ 6 per inch); press with a cloth; tack a little below the cuff top,
+    // short stitch (about 2 mm: 25.4/2 ≈ 13 per inch).
     const text = flatText(file);
     const order = [
       "dry tailor's chalk, not wax",
       'Cut on line 4',
       'Press the folds at the seams first, then front and back',
-      'Turn under 1/2 in at the raw edge and stitch it with a long stitch (about 4 mm)',
+      'Turn under 1/2 in at the raw edge and stitch it with a long stitch (about 6 per inch, 4 mm)',
       'Turn the bottom up to the outside at line 1',
       'Press with a cloth',
       '1/8 to 3/16 in below the cuff top',
-      'short stitch (about 2 mm), back-stitched',
+      'short stitch (about 13 per inch, 2 mm), back-stitched',
     ].map((p) => text.indexOf(p));
     expect(order.every((i) => i >= 0)).toBe(true);
     expect([...order].sort((a, b) => a - b)).toEqual(order);
@@ -142,7 +143,7 @@ describe('a plain hem sloped 1/2 in', () => {
     expect(layoutText(file)).toMatch(/1 1\/2 in\s+below the pin/);
     expect(text).toContain('Plain hem, 1 1/2 in allowance');
     expect(text).toContain('finished edge 1/2 in above and the cutting line 1 in below the back pin mark');
-    expect(text).toContain('standard stitch (about 2.5–3 mm)');
+    expect(text).toContain('standard stitch (8–10 per inch, 2.5–3 mm)');
     expect(text).not.toContain('Inner fold');
     expect(text).toContain('Both legs, at the back');
   });
@@ -185,7 +186,7 @@ describe('page sizes and batches', () => {
       expect(text).toContain('7 3/4 in flat');
       expect(text).toContain('let out 1/4 in at line 1');
       expect(text).toContain('let out 1 in at line 4');
-      expect(text).toContain('Left leg: re-chalk both leg seams');
+      expect(text).toContain('Left leg: before cutting, unpick both leg seams');
       expect(text).toMatch(/old crease/i);
       expect(text).toContain('AT THE BENCH');
       expect(text).toContain("local rules come first");

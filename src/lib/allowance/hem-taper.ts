@@ -1,0 +1,95 @@
+import Fraction from 'fraction.js';
+import { AllowanceError } from './allowance-error';
+import { exactDefaults } from './defaults';
+import { lenMaker } from './len';
+import { InputReader } from './read-input';
+import type { HemTaperInput, PlanWarning, TaperLine, TaperPlan } from './types';
+
+const ZERO = new Fraction(0);
+const ONE = new Fraction(1);
+
+/** A hem taper input read and checked: exact mm throughout. */
+export interface HemTaperValues {
+  hemAllowance: Fraction;
+  widthAtEdge: Fraction;
+  widthAbove: Fraction;
+  heightAbove: Fraction;
+  seamAllowance: Fraction | null;
+  tolerance: Fraction;
+}
+
+/** Read a hem taper input field by field (errors carry the field name). */
+export function readHemTaperInput(input: HemTaperInput, r: InputReader): HemTaperValues {
+  const defaults = exactDefaults(r.unit);
+  const width = (value: unknown, field: string, label: string): Fraction =>
+    r.length(value, field, label, { required: true, min: 'positive' }) ?? ONE;
+  return {
+    hemAllowance: r.length(input.hemAllowance, 'hemAllowance', 'Hem allowance', { min: 'positive' }) ?? defaults.hemAllowance,
+    widthAtEdge: width(input.widthAtEdge, 'widthAtEdge', 'Width at the finished edge'),
+    widthAbove: width(input.widthAbove, 'widthAbove', 'Width higher up'),
+    heightAbove: width(input.heightAbove, 'heightAbove', 'Height of the upper width'),
+    seamAllowance: r.length(input.seamAllowance, 'seamAllowance', 'Seam allowance', { min: 'non-negative' }),
+    tolerance: r.length(input.tolerance, 'tolerance', 'Tolerance', { min: 'non-negative' }) ?? defaults.taperTolerance,
+  };
+}
+
+function slopeOf(v: HemTaperValues): Fraction {
+  return v.widthAbove.sub(v.widthAtEdge).div(v.heightAbove);
+}
+
+/** Why these widths make no hem plan (no leg at the cut, or none at the hem's top), or null. */
+export function hemTaperShapeError(v: HemTaperValues): AllowanceError | null {
+  const rise = slopeOf(v).mul(v.hemAllowance);
+  if (v.widthAtEdge.sub(rise).compare(0) <= 0 || v.widthAtEdge.add(rise).compare(0) <= 0) {
+    return new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove');
+  }
+  return null;
+}
+
+/**
+ * Check a tapered leg under a plain hem. Turned up, the allowance x below the finished edge lies
+ * against the leg x above it, so it must be as wide as the leg there: the seams below the edge are
+ * the mirror of the taper above (a hem cut on the leg's own taper is too narrow and will not lie flat).
+ */
+export function checkHemTaper(input: HemTaperInput): TaperPlan {
+  const r = new InputReader(input, false);
+  const v = readHemTaperInput(input, r);
+  const shape = hemTaperShapeError(v);
+  if (shape) throw shape;
+  const len = lenMaker(r.unit, r.precision);
+  const slope = slopeOf(v);
+  const H = v.hemAllowance;
+  const change = slope.mul(H).mul(2);
+  const size = change.abs();
+  const withinTolerance = size.compare(v.tolerance) <= 0;
+  const perSide = change.div(2);
+  const line = (n: 1 | 2, below: Fraction, width: Fraction, ch: Fraction): TaperLine => {
+    const c = len(ch);
+    return { n, name: n === 1 ? 'finished-edge' : 'cut', belowMark: len(below), width: len(width), change: c, perSeam: { ...c }, perSide: len(ch.div(2)) };
+  };
+  const lines = [line(1, ZERO, v.widthAtEdge, ZERO), line(2, H, v.widthAtEdge.sub(slope.mul(H)), change)];
+  const target = v.widthAtEdge.add(slope.mul(H));
+  const warnings: PlanWarning[] = [];
+  if (!withinTolerance) {
+    const at = len(H).text;
+    const by = len(size).text;
+    const side = len(size.div(2)).text;
+    warnings.push({
+      code: 'taper-beyond-tolerance',
+      message:
+        change.s > 0n
+          ? `The leg narrows towards the hem: turned up, the hem would be ${by} narrower (flat) than the leg it lies against. Let out the inseam and outseam below the finished edge, flaring out to ${by} more at the cutting line, ${at} below it (${side} on each side of each seam), so the hem lies flat.`
+          : `The leg widens towards the hem: turned up, the hem would be ${by} wider (flat) than the leg it lies against. Take in the inseam and outseam below the finished edge, to ${by} less at the cutting line, ${at} below it (${side} on each side of each seam), so the hem lies flat.`,
+    });
+  }
+  const most = perSide.compare(0) > 0 ? perSide : ZERO;
+  // Within tolerance no seam is touched, so even a seam with nothing to let out will do.
+  const feasible = v.seamAllowance === null ? null : withinTolerance || most.compare(v.seamAllowance) <= 0;
+  if (feasible === false) {
+    warnings.push({
+      code: 'let-out-exceeds-seam-allowance',
+      message: `Letting out needs ${len(most).text} on each side of each seam, but the seam allowance is only ${len(v.seamAllowance!).text}. Choose a shallower hem or face it.`,
+    });
+  }
+  return { kind: 'taper', finish: 'hem', unit: r.unit, precision: r.precision, targetWidth: len(target), lines, withinTolerance, feasible, warnings };
+}
