@@ -74,7 +74,7 @@ function Leg({ g }: { g: SheetLegGroup }) {
 
 function Sheet({ data }: { data: CutSheetData }) {
   const c = sheetContent(data);
-  const strips = guideStrips(c.groups, data.unit, 792 - 56 - 258);
+  const strips = guideStrips(c.groups, data.unit, 792 - 56 - 300);
   const qr = data.link ? qrPath(data.link) : null;
   const w = strips.length > 1 ? 72 : 108;
   return (
@@ -106,10 +106,10 @@ function Sheet({ data }: { data: CutSheetData }) {
             {strips.map((st, i) => (
               <div key={i}>
                 <b>{st.label}</b>
-                <svg width={`${w}pt`} height={`${st.length}pt`} viewBox={`0 0 ${w} ${st.length}`} style={{ display: 'block' }}>
-                  <rect x={0.25} y={0} width={w - 0.5} height={st.length} fill="none" stroke="#555" strokeWidth={0.5} strokeDasharray="3 2" />
-                  <path d={st.ruler.map((m) => `M0 ${m.y}h${m.len}`).join('')} stroke="#555" strokeWidth={0.4} />
-                  {st.ticks.map((t, j) => (
+                <svg width={`${w}pt`} height={`${st.segments[0]!.length}pt`} viewBox={`0 0 ${w} ${st.segments[0]!.length}`} style={{ display: 'block' }}>
+                  <rect x={0.25} y={0} width={w - 0.5} height={st.segments[0]!.length} fill="none" stroke="#555" strokeWidth={0.5} strokeDasharray="3 2" />
+                  <path d={st.segments[0]!.ruler.map((m) => `M0 ${m.y}h${m.len}`).join('')} stroke="#555" strokeWidth={0.4} />
+                  {st.segments[0]!.ticks.map((t, j) => (
                     <g key={j}>
                       <rect x={0} y={t.y - 0.5} width={w} height={t.cut ? 2 : 1} fill={t.cut ? CUT : '#111'} />
                       <text x={12} y={t.y + 9} fontSize={7} fontWeight={800} fill={t.cut ? CUT : '#111'}>{`${t.n} ${t.name}`}</text>

@@ -1,6 +1,6 @@
 // The full-size chalk guide: calibration squares, how to check them, and the strip(s) at 1:1.
 import { Path, Rect, Svg, Text, View } from '@react-pdf/renderer';
-import { INCH_PT, MM25_PT, type GuideStrip } from './chalk-guide';
+import { INCH_PT, MM25_PT, type GuideSegment, type GuideStrip, type MatchMark } from './chalk-guide';
 import { INK, READ_MIN, s } from './styles';
 
 /** Grey of the calibration squares: distinct from every other fill so a test can find them. */
@@ -15,48 +15,87 @@ function Square({ side, label }: { side: number; label: string }) {
   );
 }
 
-function Strip({ strip, width }: { strip: GuideStrip; width: number }) {
-  const rulerPath = strip.ruler.map((m) => `M0 ${m.y.toFixed(3)}h${m.len}`).join('');
+/** One column of the chalk guide: a segment of a strip, with its strip's label. */
+export interface StripColumn {
+  label: string;
+  part: number;
+  segment: GuideSegment;
+}
+
+/** The strips' segments in print order: each strip's segments one after another. */
+export function stripColumns(strips: GuideStrip[]): StripColumn[] {
+  // Part by part: with two legs, both first parts stand in the guide column and the rest go on.
+  const all = strips.flatMap((st, k) => st.segments.map((segment, i) => ({ label: st.label, part: i + 1, segment, k })));
+  return all.sort((a, b) => a.part - b.part || a.k - b.k).map(({ k: _k, ...c }) => c);
+}
+
+function matchText(m: MatchMark) {
+  return `match \u25B2 ${m.letter}`;
+}
+
+function Strip({ column, width }: { column: StripColumn; width: number }) {
+  const seg = column.segment;
+  const rulerPath = seg.ruler.map((m) => `M0 ${m.y.toFixed(3)}h${m.len}`).join('');
   // Every tick of a colour in one filled path: fewer nodes to lay out and draw than a Rect each.
   const bar = (cut: boolean) =>
-    strip.ticks
+    seg.ticks
       .filter((t) => t.cut === cut)
       .map((t) => `M0 ${Math.max(0, t.y - (cut ? 1 : 0.5)).toFixed(3)}h${width}v${cut ? 2 : 1}h${-width}z`)
       .join('');
   const plain = bar(false);
   const cut = bar(true);
+  const matches = [seg.matchAbove, seg.matchBelow].filter((m): m is MatchMark => m !== null);
+  const matchPath = matches.map((m) => `M0 ${m.y.toFixed(3)}h${width}`).join('');
   const textLeft = 12;
   const size = READ_MIN;
+  const first = column.part === 1;
   return (
     <View style={{ width }}>
-      <Text style={{ fontSize: READ_MIN, fontWeight: 800, marginBottom: 1 }}>{strip.label}</Text>
-      <Text style={{ fontSize: READ_MIN, color: INK.soft, marginBottom: 1 }}>▼ top on the pin mark</Text>
-      <View style={{ width, height: strip.length, position: 'relative' }}>
-        <Svg width={width} height={strip.length}>
-          <Rect x={0.25} y={0} width={width - 0.5} height={strip.length} fill="none" stroke={INK.soft} strokeWidth={0.5} strokeDasharray="3 2" />
+      <Text style={{ fontSize: READ_MIN, fontWeight: 800, marginBottom: 1 }}>{first ? column.label : `${column.label.split(',')[0]}, ${column.part}`}</Text>
+      <Text style={{ fontSize: READ_MIN, color: INK.soft, marginBottom: 1 }}>{first ? '\u25BC top on the pin mark' : `\u25B2 ${seg.matchAbove!.letter} on \u25B2 ${seg.matchAbove!.letter}`}</Text>
+      <View style={{ width, height: seg.length, position: 'relative' }}>
+        <Svg width={width} height={seg.length}>
+          <Rect x={0.25} y={0} width={width - 0.5} height={seg.length} fill="none" stroke={INK.soft} strokeWidth={0.5} strokeDasharray="3 2" />
           <Path d={rulerPath} stroke={INK.soft} strokeWidth={0.4} />
+          {matchPath && <Path d={matchPath} stroke={INK.text} strokeWidth={1} strokeDasharray="4 2" />}
           {plain && <Path d={plain} fill={INK.text} />}
           {cut && <Path d={cut} fill={INK.cut} />}
         </Svg>
-        {strip.ticks.map((t, i) => (
+        {matches.map((m, i) => (
+          <Text key={`m${i}`} style={{ position: 'absolute', left: textLeft, top: m.y - 13, fontSize: size, fontWeight: 700 }}>
+            {matchText(m)}
+          </Text>
+        ))}
+        {seg.ticks.map((t, i) => (
           <View key={i} style={{ position: 'absolute', left: textLeft, top: t.y + 2, width: width - textLeft - 1 }}>
             <Text style={{ fontSize: size, fontWeight: 800, color: t.cut ? INK.cut : INK.text }}>{`${t.n} ${t.name}`}</Text>
             <Text style={{ fontSize: size, fontWeight: 700, color: t.cut ? INK.cut : INK.text }}>{t.text}</Text>
           </View>
         ))}
       </View>
-      {strip.beyond.length > 0 && (
-        <Text style={{ fontSize: READ_MIN, fontWeight: 700, color: INK.cut, marginTop: 2 }}>
-          {`Past the paper: ${strip.beyond.map((t) => `${t.n} ${t.name} at ${t.text}`).join(', ')}. Measure it.`}
-        </Text>
-      )}
     </View>
   );
 }
 
-/** The right-hand column: squares to check the print, then the strip(s). */
-export function ChalkGuide({ strips, notes }: { strips: GuideStrip[]; notes: string[] }) {
-  const width = strips.length > 1 ? 72 : 108;
+/** Columns side by side: two fit the guide column, more a page of their own. */
+export function StripRow({ columns, width, gap }: { columns: StripColumn[]; width: number; gap?: number }) {
+  return (
+    <View style={{ flexDirection: 'row', justifyContent: gap === undefined ? 'space-between' : 'flex-start', marginTop: 8 }}>
+      {columns.map((c, i) => (
+        <View key={i} style={{ marginLeft: i > 0 && gap !== undefined ? gap : 0 }}>
+          <Strip column={c} width={width} />
+        </View>
+      ))}
+    </View>
+  );
+}
+
+/** How many strip columns the guide column holds side by side. */
+export const COLUMN_STRIPS = 2;
+
+/** The right-hand column: squares to check the print, then the strip(s), as many as it holds. */
+export function ChalkGuide({ columns, notes }: { columns: StripColumn[]; notes: string[] }) {
+  const width = columns.length > 1 ? 72 : 108;
   return (
     <>
       <Text style={s.h2}>CHALK GUIDE 1:1</Text>
@@ -69,11 +108,7 @@ export function ChalkGuide({ strips, notes }: { strips: GuideStrip[]; notes: str
           {n}
         </Text>
       ))}
-      <View style={{ flexDirection: 'row', justifyContent: 'space-between', marginTop: 8 }}>
-        {strips.map((st, i) => (
-          <Strip key={i} strip={st} width={width} />
-        ))}
-      </View>
+      <StripRow columns={columns.slice(0, COLUMN_STRIPS)} width={width} />
     </>
   );
 }

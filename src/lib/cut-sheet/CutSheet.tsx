@@ -1,7 +1,7 @@
 // One garment's cut sheet as a react-pdf page. Plain data in; no database, no network.
-import { Document, Page, Path, Svg, Text, View, type DocumentProps } from '@react-pdf/renderer';
+import { Document, Page, Path, Svg, Text, View, type DocumentProps, type PageProps } from '@react-pdf/renderer';
 import { Fragment, type ReactElement } from 'react';
-import { ChalkGuide } from './ChalkGuide';
+import { ChalkGuide, COLUMN_STRIPS, StripRow, stripColumns, type StripColumn } from './ChalkGuide';
 import { guideStrips } from './chalk-guide';
 import { sheetContent, type SheetContent, type SheetLegGroup } from './content';
 import { LegDrawing } from './LegDrawing';
@@ -20,8 +20,9 @@ export const PAGE_PT: Record<PageSize, { width: number; height: number }> = {
   A4: { width: 595.28, height: 841.89 },
 };
 const PADDING = 28;
-// Header, calibration squares and notes, strip captions: what the strip cannot use.
-const GUIDE_OVERHEAD = 258;
+// Header, calibration squares and notes, strip captions: what the strip cannot use (measured
+// about 285 on both papers; kept generous, since a longer strip goes on in a second segment).
+const GUIDE_OVERHEAD = 300;
 const DRAWING_W = 160;
 const MAIN_GUTTER = 12;
 const DRAWING_H = 136;
@@ -219,32 +220,62 @@ function Steps({ c }: { c: SheetContent }) {
   );
 }
 
-/** One page for one garment: header, legs with drawings, bench steps, cautions and chalk guide. */
+/** The chalk guide's strip columns of a sheet: those its guide column holds, and the rest for a page of strip. */
+export function sheetStripColumns(data: CutSheetData): { column: StripColumn[]; page: StripColumn[] } {
+  const c = sheetContent(data);
+  return stripColumnsOf(c, data);
+}
+
+function stripColumnsOf(c: SheetContent, data: CutSheetData) {
+  const page = PAGE_PT[data.pageSize ?? 'LETTER'];
+  const all = stripColumns(guideStrips(c.groups, data.unit, page.height - 2 * PADDING - GUIDE_OVERHEAD));
+  return { column: all.slice(0, COLUMN_STRIPS), page: all.slice(COLUMN_STRIPS) };
+}
+
+// The strip's parts the guide column could not hold, side by side at 1:1, with the squares again:
+// a page printed on its own must be checked on its own.
+function StripPage({ c, columns, size, style }: { c: SheetContent; columns: StripColumn[]; size: PageSize; style: PageProps['style'] }) {
+  return (
+    <Page size={size} style={[style, { height: PAGE_PT[size].height, minHeight: PAGE_PT[size].height }].flat() as PageProps['style']} wrap={false}>
+      <Text style={s.kicker}>{`CUT SHEET, CHALK GUIDE CONTINUED      ${c.unitNote}`}</Text>
+      <Text style={[s.meta, { marginBottom: 4 }]}>{[c.title, ...c.meta.slice(0, 2)].join('   ·   ')}</Text>
+      <View style={{ width: GUIDE_COLUMN }}>
+        <ChalkGuide columns={[]} notes={c.guideNote.slice(0, 2)} />
+      </View>
+      <StripRow columns={columns} width={108} gap={16} />
+    </Page>
+  );
+}
+
+/** One page for one garment: header, legs with drawings, bench steps, cautions and chalk guide; a strip too long for the column goes on over a second page. */
 export function CutSheetPage({ data, wrap, family = FAMILY }: { data: CutSheetData; wrap: boolean; family?: string | string[] }) {
   const size = data.pageSize ?? 'LETTER';
   const c = sheetContent(data);
   const page = PAGE_PT[size];
-  const strips = guideStrips(c.groups, data.unit, page.height - 2 * PADDING - GUIDE_OVERHEAD);
+  const strips = stripColumnsOf(c, data);
   const mainWidth = page.width - 2 * PADDING - GUIDE_COLUMN;
   // Only a sheet with text Inter cannot set names a font stack; the usual sheet keeps s.page as it is.
   const style = family === FAMILY ? s.page : [s.page, { fontFamily: family }];
   // Unwrapped, react-pdf lays the page out once instead of twice, but the page then grows with
   // its content; the height keeps it at paper size when it fits (render.ts checks that it did).
   return (
-    <Page size={size} style={wrap ? style : [style, { height: page.height, minHeight: page.height }].flat()} wrap={wrap}>
-      <Header c={c} link={data.link} />
-      <View style={s.body}>
-        <View style={[s.main, { width: mainWidth }]}>
-          {c.groups.map((g, i) => (
-            <LegBlock key={i} g={g} width={mainWidth - MAIN_GUTTER} />
-          ))}
-          <Steps c={c} />
+    <>
+      <Page size={size} style={wrap ? style : [style, { height: page.height, minHeight: page.height }].flat()} wrap={wrap}>
+        <Header c={c} link={data.link} />
+        <View style={s.body}>
+          <View style={[s.main, { width: mainWidth }]}>
+            {c.groups.map((g, i) => (
+              <LegBlock key={i} g={g} width={mainWidth - MAIN_GUTTER} />
+            ))}
+            <Steps c={c} />
+          </View>
+          <View style={[s.side, { width: GUIDE_COLUMN }]}>
+            <ChalkGuide columns={strips.column} notes={c.guideNote} />
+          </View>
         </View>
-        <View style={[s.side, { width: GUIDE_COLUMN }]}>
-          <ChalkGuide strips={strips} notes={c.guideNote} />
-        </View>
-      </View>
-    </Page>
+      </Page>
+      {strips.page.length > 0 && <StripPage c={c} columns={strips.page} size={size} style={style} />}
+    </>
   );
 }
 

@@ -18,15 +18,33 @@ export interface GuideTick {
   cut: boolean;
 }
 
+/** Where two segments of one strip line up: the same cloth distance drawn on both. */
+export interface MatchMark {
+  /** down the segment, in points */
+  y: number;
+  /** below the pin mark, in points */
+  cloth: number;
+  letter: string;
+}
+
+/** One piece of a strip at 1:1; a strip longer than the paper allows is cut into several, each overlapping the next at a match mark. */
+export interface GuideSegment {
+  /** distance below the pin mark of the segment's top edge, in points */
+  from: number;
+  length: number;
+  /** y down the segment */
+  ticks: GuideTick[];
+  ruler: { y: number; len: number; label: string | null }[];
+  /** the mark shared with the segment before (near the top) */
+  matchAbove: MatchMark | null;
+  /** the mark shared with the segment after (near the bottom) */
+  matchBelow: MatchMark | null;
+}
+
 /** One strip, for both legs or for one of them. */
 export interface GuideStrip {
   label: string;
-  length: number;
-  ticks: GuideTick[];
-  /** the plan's lines that fall beyond the end of the paper */
-  beyond: GuideTick[];
-  /** ruler marks along the edge: y and length in points */
-  ruler: { y: number; len: number; label: string | null }[];
+  segments: GuideSegment[];
 }
 
 const SHORT: Record<string, string> = {
@@ -36,8 +54,8 @@ const SHORT: Record<string, string> = {
   'Cutting line': 'CUT',
 };
 
-function ruler(unit: Unit, length: number): GuideStrip['ruler'] {
-  const marks: GuideStrip['ruler'] = [];
+function ruler(unit: Unit, length: number): GuideSegment['ruler'] {
+  const marks: GuideSegment['ruler'] = [];
   if (unit === 'in') {
     for (let i = 1; i * 9 <= length; i++) {
       const inch = i % 8 === 0;
@@ -52,8 +70,29 @@ function ruler(unit: Unit, length: number): GuideStrip['ruler'] {
   return marks;
 }
 
-/** Lays out one strip per group, each at most maxLength points long (the paper's limit). */
+/** Room below a tick for its two lines of label (number and name, then the distance). */
+export const TICK_LABEL = 26;
+// A match mark takes its line and, above it, one line of text ("match ▲ A").
+const MATCH_ABOVE = 14;
+// A tick's label may wrap its name onto a second line in a narrow column: three lines in all.
+const TICK_LABEL_WRAPPED = 36;
+const MATCH_BELOW = 3;
+// A segment ends this far below its match mark, and the next starts this far above it.
+const END_BELOW_MATCH = 6;
+const START_ABOVE_MATCH = MATCH_ABOVE + 4;
+
+// Where to cut a strip: the deepest point, no lower than `limit`, whose match mark and its text
+// touch no tick or tick label, so every line keeps its number, name and distance whole on one segment.
+function matchPoint(ticks: GuideTick[], from: number, limit: number): number {
+  const free = (m: number) => ticks.every((t) => t.y + TICK_LABEL_WRAPPED < m - MATCH_ABOVE || t.y - 2 > m + MATCH_BELOW);
+  for (let m = Math.floor(limit); m > from + START_ABOVE_MATCH + 24; m--) if (free(m)) return m;
+  return limit;
+}
+
+/** Lays out one strip per group, each cut into segments of at most maxLength points (the paper's limit), every chalk line on one of them. */
 export function guideStrips(groups: SheetLegGroup[], unit: Unit, maxLength: number): GuideStrip[] {
+  // Letters run on across the strips, so the left leg's A is never laid on the right leg's.
+  let letter = 0;
   return groups.map((g) => {
     const ticks = g.lines.map((l) => ({
       y: l.belowMark.mm * PT_PER_MM,
@@ -62,15 +101,32 @@ export function guideStrips(groups: SheetLegGroup[], unit: Unit, maxLength: numb
       text: l.belowMark.text,
       cut: l.cut,
     }));
-    const deepest = Math.max(...ticks.map((t) => t.y));
-    const length = Math.min(maxLength, deepest + 26);
+    const end = Math.max(...ticks.map((t) => t.y)) + TICK_LABEL;
+    const marks = ruler(unit, end);
+    const segments: GuideSegment[] = [];
+    let from = 0;
+    let above: MatchMark | null = null;
+    for (;;) {
+      const last = end - from <= maxLength;
+      const m = last ? 0 : matchPoint(ticks, from, from + maxLength - END_BELOW_MATCH);
+      const to = last ? end : m + END_BELOW_MATCH;
+      const below: MatchMark | null = last ? null : { y: m - from, cloth: m, letter: String.fromCharCode(65 + letter++) };
+      segments.push({
+        from,
+        length: to - from,
+        ticks: ticks.filter((t) => t.y >= from && t.y < to && (last || t.y < m)).map((t) => ({ ...t, y: t.y - from })),
+        ruler: marks.filter((r) => r.y > from && r.y <= to).map((r) => ({ ...r, y: r.y - from })),
+        matchAbove: above,
+        matchBelow: below,
+      });
+      if (last) break;
+      from = m - START_ABOVE_MATCH;
+      above = { y: START_ABOVE_MATCH, cloth: m, letter: below!.letter };
+    }
     return {
       // A sloped hem's lines are planned at the back, where the pin is.
       label: (g.label === 'Both legs' ? g.label : g.label.replace(' leg', '')) + (g.slopeNote ? ', at the back' : ''),
-      length,
-      ticks: ticks.filter((t) => t.y <= length),
-      beyond: ticks.filter((t) => t.y > length),
-      ruler: ruler(unit, length),
+      segments,
     };
   });
 }

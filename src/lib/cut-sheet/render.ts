@@ -1,6 +1,6 @@
 // Cut sheets to PDF bytes. Server only: react-pdf and the font files never reach a browser.
 import { renderPdf } from '../render-pdf';
-import { cutSheetDocument, PAGE_PT } from './CutSheet';
+import { cutSheetDocument, PAGE_PT, sheetStripColumns } from './CutSheet';
 import { typeset } from './fonts';
 import type { CutSheetData } from './types';
 
@@ -29,6 +29,12 @@ export async function renderCutSheets(list: CutSheetData[], skipped: string[] = 
 /** For each sheet of an unwrapped render, whether its page came out taller than its paper. */
 export function overflowing(pdf: Uint8Array, list: CutSheetData[]): boolean[] {
   const heights = [...Buffer.from(pdf).toString('latin1').matchAll(/\/MediaBox \[0 0 [\d.]+ ([\d.]+)\]/g)].map((m) => Number(m[1]));
-  // Unwrapped, each sheet is one page in order; the skipped-garments page (if any) comes last.
-  return list.map((d, i) => heights[i] === undefined || Math.abs(heights[i]! - PAGE_PT[d.pageSize ?? 'LETTER'].height) >= 0.01);
+  // Unwrapped, each sheet is one page in order (two when its strip goes on over a page of strip);
+  // the skipped-garments page (if any) comes last.
+  let page = 0;
+  return list.map((d) => {
+    const h = heights[page];
+    page += sheetStripColumns(d).page.length > 0 ? 2 : 1;
+    return h === undefined || Math.abs(h - PAGE_PT[d.pageSize ?? 'LETTER'].height) >= 0.01;
+  });
 }

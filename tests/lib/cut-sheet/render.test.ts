@@ -215,10 +215,12 @@ describe('page sizes and batches', () => {
     for (const [pageSize, height] of [['LETTER', 792], ['A4', 841.89]] as const) {
       const file = pdfFile(await renderCutSheet({ ...sheet([heavy('left', '7'), heavy('right', '6 1/2')]), pageSize }));
       const info = pageInfo(file);
-      expect(info.pages).toBe(2);
+      // The two 2 1/4 in strips go on over a page of strip after the sheet's own two pages.
+      expect(info.pages).toBe(3);
       expect(info.height).toBe(height);
       expect(flatText(file, 1)).toContain('CHALK GUIDE 1:1');
       expect(flatText(file, 2)).toContain('local rules come first');
+      expect(flatText(file, 3)).toContain('CHALK GUIDE CONTINUED');
     }
   });
 
