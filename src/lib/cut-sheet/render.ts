@@ -1,5 +1,5 @@
 // Cut sheets to PDF bytes. Server only: react-pdf and the font files never reach a browser.
-import { renderPdf } from '../render-pdf';
+import { renderPdfRelaid } from '../render-pdf';
 import { cutSheetDocument, PAGE_PT, sheetStripColumns } from './CutSheet';
 import { typeset } from './fonts';
 import type { CutSheetData } from './types';
@@ -16,25 +16,33 @@ export async function renderCutSheets(list: CutSheetData[], skipped: string[] = 
   const { family, print } = await typeset([list, skipped]);
   const sheets = print(list);
   const notes = print(skipped);
-  const fast = await renderPdf(cutSheetDocument(sheets, false, notes, family));
-  // A sheet too full for its paper came out as a taller page, which a printer would shrink and
-  // the chalk guide would no longer be 1:1: render again with that sheet (and only that one)
-  // spilling onto a second page; the others keep the one-pass layout.
-  const over = overflowing(fast, list);
-  const bytes = over.some(Boolean) ? await renderPdf(cutSheetDocument(sheets, over, notes, family)) : fast;
+  // Laid out in one pass (unwrapped) first. A sheet too full for its paper comes out as a taller
+  // page, which a printer would shrink and the chalk guide would no longer be 1:1: that sheet alone
+  // is laid out again to spill onto a second page, its pages put in place of the tall one, and the
+  // batch is drawn once (drawing it twice took 100 sheets from 1.4 s to 2.6 s).
+  const bytes = await renderPdfRelaid(cutSheetDocument(sheets, false, notes, family), async (layout, layOut) => {
+    const pages = [...(layout.children ?? [])];
+    const spans = pageSpans(list);
+    const over = spans.filter(([start], i) => Math.abs((pages[start]?.box?.height ?? 0) - PAGE_PT[list[i]!.pageSize ?? 'LETTER'].height) >= 0.01);
+    if (over.length === 0) return layout;
+    // From the last, so the earlier spans keep their places.
+    for (const [start, count, i] of over.reverse()) {
+      const again = await layOut(cutSheetDocument([sheets[i]!], true, [], family));
+      pages.splice(start, count, ...(again.children ?? []));
+    }
+    return { ...layout, children: pages };
+  });
   // A copy owns a plain ArrayBuffer, which a Response body accepts as it is.
   return new Uint8Array(bytes);
 }
 
-/** For each sheet of an unwrapped render, whether its page came out taller than its paper. */
-export function overflowing(pdf: Uint8Array, list: CutSheetData[]): boolean[] {
-  const heights = [...Buffer.from(pdf).toString('latin1').matchAll(/\/MediaBox \[0 0 [\d.]+ ([\d.]+)\]/g)].map((m) => Number(m[1]));
-  // Unwrapped, each sheet is one page in order (two when its strip goes on over a page of strip);
-  // the skipped-garments page (if any) comes last.
+// Each sheet's first page and page count in an unwrapped layout: one page, two when its strip
+// goes on over a page of strip; the skipped-garments page (if any) comes last.
+function pageSpans(list: CutSheetData[]): [start: number, count: number, sheet: number][] {
   let page = 0;
-  return list.map((d) => {
-    const h = heights[page];
-    page += sheetStripColumns(d).page.length > 0 ? 2 : 1;
-    return h === undefined || Math.abs(h - PAGE_PT[d.pageSize ?? 'LETTER'].height) >= 0.01;
+  return list.map((d, i) => {
+    const count = sheetStripColumns(d).page.length > 0 ? 2 : 1;
+    page += count;
+    return [page - count, count, i];
   });
 }
