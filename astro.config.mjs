@@ -4,6 +4,7 @@ import node from '@astrojs/node';
 import react from '@astrojs/react';
 import tailwindcss from '@tailwindcss/vite';
 import { fileURLToPath } from 'node:url';
+import { nodeWorker } from './scripts/vite-node-worker.mjs';
 
 /** In the browser, `zod` resolves to src/lib/zod-jitless.ts (zod configured not to probe eval,
  * which the CSP forbids); the server keeps zod's faster compiled parsers. */
@@ -66,7 +67,8 @@ export default defineConfig({
     },
   },
   vite: {
-    plugins: [tailwindcss(), zodJitlessInBrowser()],
+    // nodeWorker: `?node-worker` imports (the thread that renders strangers' cut sheets).
+    plugins: [tailwindcss(), zodJitlessInBrowser(), nodeWorker()],
     // Heavy server-only libraries are never bundled for the browser.
     ssr: { external: ['@electric-sql/pglite'] },
   },
