@@ -64,6 +64,8 @@ export default defineConfig({
       // How many reverse proxies in front of the server append to X-Forwarded-For (0: none, the
       // client is the TCP peer). The limits take the client's address from it (README: Security).
       TRUSTED_PROXY_HOPS: envField.number({ context: 'server', access: 'secret', default: 0, int: true, min: 0 }),
+      // Set by the HTTP tests: anonymous cut sheets say which thread drew them (X-Rendered-By: worker or main).
+      SHEET_RENDER_TRACE: envField.boolean({ context: 'server', access: 'secret', default: false }),
     },
   },
   vite: {
