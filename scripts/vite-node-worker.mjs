@@ -8,7 +8,10 @@ import { basename, dirname, extname, resolve } from 'node:path';
 const QUERY = '?node-worker';
 const PREFIX = '\0node-worker:';
 
-/** The Vite plugin behind `?node-worker` imports (astro.config.mjs adds it). */
+/**
+ * The Vite plugin behind `?node-worker` imports (astro.config.mjs adds it).
+ * @returns {import('vite').Plugin}
+ */
 export function nodeWorker() {
   let building = false;
   return {

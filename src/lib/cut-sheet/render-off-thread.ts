@@ -37,7 +37,7 @@ interface Job {
   timer: NodeJS.Timeout;
 }
 
-const reason = (e: unknown) => (e instanceof Error ? e.message : String(e)).split('\n')[0];
+const reason = (e: unknown) => (e instanceof Error ? e.message : String(e)).split('\n')[0] ?? '';
 
 /** One worker from `url` (the built `?node-worker` entry, or null), started on first use. */
 export function offThreadRenderer(url: string | URL | null, options: Options = {}): OffThreadRenderer {
