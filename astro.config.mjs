@@ -4,6 +4,7 @@ import node from '@astrojs/node';
 import react from '@astrojs/react';
 import tailwindcss from '@tailwindcss/vite';
 import { fileURLToPath } from 'node:url';
+import { nodeWorker } from './scripts/vite-node-worker.mjs';
 
 /** In the browser, `zod` resolves to src/lib/zod-jitless.ts (zod configured not to probe eval,
  * which the CSP forbids); the server keeps zod's faster compiled parsers. */
@@ -63,10 +64,13 @@ export default defineConfig({
       // How many reverse proxies in front of the server append to X-Forwarded-For (0: none, the
       // client is the TCP peer). The limits take the client's address from it (README: Security).
       TRUSTED_PROXY_HOPS: envField.number({ context: 'server', access: 'secret', default: 0, int: true, min: 0 }),
+      // Set by the HTTP tests: anonymous cut sheets say which thread drew them (X-Rendered-By: worker or main).
+      SHEET_RENDER_TRACE: envField.boolean({ context: 'server', access: 'secret', default: false }),
     },
   },
   vite: {
-    plugins: [tailwindcss(), zodJitlessInBrowser()],
+    // nodeWorker: `?node-worker` imports (the thread that renders strangers' cut sheets).
+    plugins: [tailwindcss(), zodJitlessInBrowser(), nodeWorker()],
     // Heavy server-only libraries are never bundled for the browser.
     ssr: { external: ['@electric-sql/pglite'] },
   },

@@ -9,3 +9,9 @@ declare namespace App {
     member: import('@/services/members').Membership | null;
   }
 }
+
+/** A worker_threads entry built beside the server (scripts/vite-node-worker.mjs); null in dev and tests. */
+declare module '*?node-worker' {
+  const url: string | null;
+  export default url;
+}

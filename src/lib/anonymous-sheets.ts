@@ -1,7 +1,8 @@
 // Cut sheets printed without signing in (the public calculator): 30 per 10 minutes per client
 // address, counted in the database, and rendered one at a time per process with at most 8
 // waiting, each only once no member's request is in flight (member-activity.ts): strangers queue
-// behind each other and behind members, and a member's request waits for one render at most.
+// behind each other and behind members. The render itself runs in the sheet worker
+// (cut-sheet/render-off-thread.ts), so a member's request arriving meanwhile is not held up.
 import pLimit from 'p-limit';
 import type { Rule } from './rate-limit-rules';
 import { tooMany } from './api';

@@ -81,6 +81,8 @@ export default async function setup(project: TestProject) {
       // The stories sign in as the demo shop's people: asked for explicitly, as it is off by
       // default on PostgreSQL, which also needs a session secret from the environment.
       DEMO_DATA: 'on',
+      // Anonymous cut sheets say which thread drew them (X-Rendered-By), for tests/http/limits.spec.ts.
+      SHEET_RENDER_TRACE: 'true',
       ...(databaseUrl ? { DATABASE_URL: databaseUrl, BETTER_AUTH_SECRET: randomBytes(32).toString('base64url') } : {}),
     },
     stdio: ['ignore', 'inherit', 'inherit'],

@@ -1,7 +1,9 @@
 // Limits kept in the database, against the built server: password-reset mail per requested address
-// and per client address, and anonymous cut sheets per client address (members are not limited).
+// and per client address, and anonymous cut sheets per client address (members are not limited),
+// drawn in the sheet worker, off the thread serving members.
 // Each test speaks from its own invented address (X-Forwarded-For; the test server trusts one hop).
-import { describe, expect, it } from 'vitest';
+import { describe, expect, inject, it } from 'vitest';
+import { flatText, pageInfo, pdfFile } from '../lib/cut-sheet/poppler';
 import { call, DEMO, freshEmail, newShop, signIn } from './client';
 
 const reset = (email: string, from: string) =>
@@ -54,5 +56,31 @@ describe('anonymous cut sheets', () => {
     const r = await call('POST', '/api/plan/sheet', { from: '203.0.113.82', cookie: 'better-auth.session_token=long-gone.signature', body: plan });
     expect(r.status).toBe(200);
     expect(r.headers.get('content-type')).toBe('application/pdf');
+  });
+
+  // The test server sets SHEET_RENDER_TRACE, so each sheet answers which thread drew it.
+  async function sheet(plan: object, opts: { from: string; cookie?: string }) {
+    const res = await fetch(inject('baseURL') + '/api/plan/sheet', {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', origin: inject('baseURL'), 'x-forwarded-for': opts.from, ...(opts.cookie ? { cookie: opts.cookie } : {}) },
+      body: JSON.stringify(plan),
+    });
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-type')).toBe('application/pdf');
+    return { by: res.headers.get('x-rendered-by'), file: pdfFile(new Uint8Array(await res.arrayBuffer())) };
+  }
+
+  it("are drawn in the sheet worker, not on the thread serving members, the same as a member's", async () => {
+    const mm = { kind: 'cuff', unit: 'mm', cuffDepth: 40, available: 150, pageSize: 'A4' };
+    const strangers = await Promise.all(['203.0.113.83', '203.0.113.84', '203.0.113.85'].map((from) => sheet(mm, { from })));
+    expect(strangers.map((s) => s.by)).toEqual(['worker', 'worker', 'worker']);
+    const member = await sheet(mm, { from: '203.0.113.86', cookie: await signIn(DEMO.tailor) });
+    expect(member.by).toBe('main');
+    for (const s of strangers) {
+      expect(pageInfo(s.file)).toEqual(pageInfo(member.file));
+      expect(flatText(s.file)).toBe(flatText(member.file));
+    }
+    // TRADE.md: three cuff depths, 3 × 40 = 120 mm.
+    expect(flatText(strangers[0]!.file)).toContain('120 mm');
   });
 });

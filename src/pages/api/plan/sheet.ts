@@ -1,33 +1,41 @@
 // POST /api/plan/sheet: the calculator's unsaved plan as a printable cut sheet (PDF). Public:
-// signed out, it is limited per client address and waits in a queue of its own (anonymous-sheets.ts).
+// signed out, it is limited per client address, waits in a queue of its own (anonymous-sheets.ts)
+// and is drawn in the sheet worker (render-off-thread.ts), not on the thread serving members.
 import type { APIRoute } from 'astro';
+import { SHEET_RENDER_TRACE } from 'astro:env/server';
+import { isAllowanceError } from '@/lib/allowance';
 import { anonymousSheetRefusal, inAnonymousQueue } from '@/lib/anonymous-sheets';
 import { clientOf } from '@/lib/client-address';
 import { tooMany } from '@/lib/api';
-import { isAllowanceError } from '@/lib/allowance';
 import { fieldMessages } from '@/lib/plan-request';
 import { buildCutSheet, refusedFields } from '@/lib/cut-sheet/build';
 import { renderCutSheet } from '@/lib/cut-sheet/render';
+import { renderForStranger, type Rendered } from '@/lib/cut-sheet/render-off-thread';
 import { legOrders, sheetRequest } from '@/lib/cut-sheet/request';
+import type { CutSheetData } from '@/lib/cut-sheet/types';
 
 export const prerender = false;
 
-function bad(error: string, fields: Record<string, string>): Response {
-  return Response.json({ error, fields }, { status: 400, headers: { 'cache-control': 'no-store' } });
+type Render = (sheet: CutSheetData) => Promise<Rendered>;
+
+const onThisThread: Render = async (sheet) => ({ bytes: await renderCutSheet(sheet), by: 'main' });
+
+function bad(error: string, fields: Record<string, string>, status = 400): Response {
+  return Response.json({ error, fields }, { status, headers: { 'cache-control': 'no-store' } });
 }
 
 /** Answers the cut sheet for the posted plan, or 400 with a message per field. */
 export const POST: APIRoute = async (context) => {
   const { request, locals } = context;
-  if (locals.member) return answer(request);
+  if (locals.member) return answer(request, onThisThread);
   const refused = await anonymousSheetRefusal(clientOf(context));
   if (refused) return refused;
   // All of a stranger's work (reading the plan too), behind members' requests.
-  const queued = inAnonymousQueue(() => answer(request));
+  const queued = inAnonymousQueue(() => answer(request, renderForStranger));
   return queued ?? tooMany('The calculator is printing many sheets for visitors just now. Try again in a few seconds, or sign in.', 5);
 };
 
-async function answer(request: Request): Promise<Response> {
+async function answer(request: Request, render: Render): Promise<Response> {
   let body: unknown;
   try {
     body = await request.json();
@@ -51,12 +59,19 @@ async function answer(request: Request): Promise<Response> {
     if (!isAllowanceError(e)) throw e;
     return bad(e.message, e.field ? { [e.field]: e.message } : {});
   }
-  const bytes = await renderCutSheet(sheet);
-  return new Response(bytes, {
+  let rendered: Rendered;
+  try {
+    rendered = await render(sheet);
+  } catch (e) {
+    console.error('[sheets] a calculator cut sheet could not be drawn:', e);
+    return bad('The cut sheet could not be drawn. Try again in a moment.', {}, 500);
+  }
+  return new Response(rendered.bytes, {
     headers: {
       'Content-Type': 'application/pdf',
       'Content-Disposition': 'inline; filename="cut-sheet-unsaved.pdf"',
       'cache-control': 'no-store',
+      ...(SHEET_RENDER_TRACE ? { 'X-Rendered-By': rendered.by } : {}),
     },
   });
 }
