@@ -6,6 +6,7 @@ import { defineMiddleware } from 'astro:middleware';
 import { BETTER_AUTH_URL } from 'astro:env/server';
 import { auth } from '@/lib/auth';
 import { memberRequestStarted } from '@/lib/member-activity';
+import { badIdParam } from '@/lib/ids';
 import { activeMembership } from '@/services/members';
 import { withSecurityHeaders } from '@/lib/security-headers';
 import { ensureStarted } from '@/services/startup';
@@ -54,6 +55,15 @@ async function answer(context: Parameters<MiddlewareHandler>[0], next: Parameter
   }
   locals.user = null;
   locals.member = null;
+  // Every [id] of every route and page, checked once here before any handler can query with it.
+  const badId = badIdParam(context.params, context.routePattern);
+  if (badId) {
+    const api = url.pathname.startsWith('/api/');
+    return new Response(api ? JSON.stringify({ error: `No such record: the ${badId} in the address is not an id.` }) : 'Not found: the address does not name a record.', {
+      status: 404,
+      headers: { 'content-type': api ? 'application/json' : 'text/plain; charset=utf-8' },
+    });
+  }
   if (OWN_AUTH_PREFIXES.some((p) => url.pathname.startsWith(p))) return next();
   const session = await auth.api.getSession({ headers: request.headers });
   if (session) {

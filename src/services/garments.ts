@@ -13,12 +13,10 @@ import { audit } from './audit';
 import { ServiceError } from './errors';
 import { onGarmentMoved } from './garment-events';
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+import { isUuid } from '@/lib/ids';
 
-/** True when the text is a uuid (anything else cannot name a row: 404, not a database error). */
-export function isUuid(id: string): boolean {
-  return UUID.test(id);
-}
+// The one id check (src/lib/ids.ts), here too for the services that already import it from here.
+export { isUuid };
 
 /** Garments the actor may see: all of the shop's, or (apprentice) their own and unassigned. */
 export function garmentVisibleTo(actor: Actor) {

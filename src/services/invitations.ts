@@ -6,6 +6,7 @@ import { db } from '@/db';
 import { invitation, member, organization, user } from '@/db/schema';
 import { auth } from '@/lib/auth';
 import type { acceptInviteInput } from '@/lib/account-inputs';
+import { isRecordId } from '@/lib/ids';
 import { isRole, type Role } from '@/lib/roles';
 import { ServiceError } from './errors';
 import { audit } from './audit';
@@ -22,6 +23,7 @@ export interface InvitationView {
 
 /** The pending, unexpired invitation with this id, or a 404. */
 export async function viewInvitation(id: string): Promise<InvitationView> {
+  if (!isRecordId(id)) throw new ServiceError(404, 'This invitation is not valid any more: ask the lead for a new one.');
   const [row] = await db
     .select({ id: invitation.id, email: invitation.email, role: invitation.role, shopName: organization.name })
     .from(invitation)
