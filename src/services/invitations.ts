@@ -70,11 +70,11 @@ export async function acceptInvitation(id: string, who: Acceptor): Promise<{ sho
       await tx.insert(member).values({ id: randomUUID(), organizationId: row!.organizationId, userId, role: inv.role, createdAt: new Date() });
       // Opening the mailed link proves the address.
       await tx.update(user).set({ emailVerified: true }).where(eq(user.id, userId));
+      await audit(tx, row!.organizationId, userId, 'staff.joined', id, { role: inv.role });
     });
     return row!.organizationId;
   };
   // A signed-in person's account is theirs to keep; one made just now goes if joining fails.
-  const shopId = await (created ? orUndoAccount(userId, join) : join());
-  await audit(shopId, userId, 'staff.joined', id, { role: inv.role });
+  await (created ? orUndoAccount(userId, join) : join());
   return { shopName: inv.shopName, headers };
 }

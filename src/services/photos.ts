@@ -136,28 +136,31 @@ export async function addPhotos(actor: Actor, garmentId: string, uploads: Upload
     await storage.put(path, bytes, u.type.mime);
     if (thumb && thumbPath) await storage.put(thumbPath, thumb, 'image/webp');
     try {
-      const [row] = await db
-        .insert(files)
-        .values({
-          id,
-          shopId: actor.shopId,
-          ticketId: garment.ticketId,
-          garmentId,
-          kind: 'fitting-photo',
-          path,
-          thumbPath,
-          mimeType: u.type.mime,
-          bytes: bytes.byteLength,
-          originalName: u.name,
-          uploadedById: actor.userId,
-        })
-        .returning();
+      const [row] = await db.transaction(async (tx) => {
+        const inserted = await tx
+          .insert(files)
+          .values({
+            id,
+            shopId: actor.shopId,
+            ticketId: garment.ticketId,
+            garmentId,
+            kind: 'fitting-photo',
+            path,
+            thumbPath,
+            mimeType: u.type.mime,
+            bytes: bytes.byteLength,
+            originalName: u.name,
+            uploadedById: actor.userId,
+          })
+          .returning();
+        await audit(tx, actor.shopId, actor.userId, 'photo.added', id, { garmentId, name: u.name, bytes: bytes.byteLength, type: u.type.mime });
+        return inserted;
+      });
       added.push(viewOf({ ...row!, uploadedBy: actor.userName }));
     } catch (e) {
       await removeStored(id, [path, thumbPath]);
       throw e;
     }
-    await audit(actor.shopId, actor.userId, 'photo.added', id, { garmentId, name: u.name, bytes: bytes.byteLength, type: u.type.mime });
   }
   return added;
 }
@@ -187,9 +190,11 @@ export async function readPhoto(actor: Actor, id: string, size: 'full' | 'thumb'
 /** Removes a photo's row, then its file and thumbnail from the storage. */
 export async function deletePhoto(actor: Actor, id: string): Promise<{ id: string; deleted: true }> {
   const row = await photoInShop(actor, id);
-  const [gone] = await db.delete(files).where(and(eq(files.id, id), eq(files.shopId, actor.shopId))).returning({ id: files.id });
-  if (!gone) throw new ServiceError(404, 'No such photo in this shop.');
-  await audit(actor.shopId, actor.userId, 'photo.deleted', id, { garmentId: row.garmentId, name: row.originalName });
+  await db.transaction(async (tx) => {
+    const [gone] = await tx.delete(files).where(and(eq(files.id, id), eq(files.shopId, actor.shopId))).returning({ id: files.id });
+    if (!gone) throw new ServiceError(404, 'No such photo in this shop.');
+    await audit(tx, actor.shopId, actor.userId, 'photo.deleted', id, { garmentId: row.garmentId, name: row.originalName });
+  });
   // The row is gone for good: a file the storage will not remove now is only logged (an orphan to
   // sweep later), never a reason to answer as if the photo were still there.
   await removeStored(id, [row.path, row.thumbPath]);
