@@ -31,6 +31,18 @@ function crossSite(request: Request, selfOrigin: string): boolean {
   return /better-auth\./.test(request.headers.get('cookie') ?? '') || request.headers.get('sec-fetch-site') === 'cross-site';
 }
 
+/** An API answer of 4xx/5xx that is not JSON (Astro's 404 page for a path no route matches,
+ * better-auth's bare 404) as JSON with the same status, so every client can read every refusal. */
+async function jsonRefusal(path: string, response: Response): Promise<Response> {
+  if (!path.startsWith('/api/') || response.status < 400 || (response.headers.get('content-type') ?? '').includes('json')) return response;
+  await response.body?.cancel().catch(() => {});
+  const headers = new Headers(response.headers);
+  headers.set('content-type', 'application/json');
+  headers.delete('content-length');
+  const error = response.status === 404 ? 'No such API route.' : response.statusText || 'The request was refused.';
+  return new Response(JSON.stringify({ error }), { status: response.status, headers });
+}
+
 /** The one middleware; a member's request is marked in flight so anonymous renders wait for it.
  * Every answer leaves with the security headers; only `astro dev` (mode "development") goes
  * without the CSP: Vite inlines scripts of its own there (the tests' build runs under
@@ -38,7 +50,7 @@ function crossSite(request: Request, selfOrigin: string): boolean {
 export const onRequest = defineMiddleware(async (context, next) => {
   const done = memberRequestStarted(context.request);
   try {
-    return withSecurityHeaders(await answer(context, next, done), { csp: import.meta.env.MODE !== 'development' });
+    return withSecurityHeaders(await jsonRefusal(context.url.pathname, await answer(context, next, done)), { csp: import.meta.env.MODE !== 'development' });
   } finally {
     done();
   }
