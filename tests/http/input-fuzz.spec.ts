@@ -237,7 +237,8 @@ afterAll(async () => {
   if (saved.defaultPreset) await call('PATCH', `/api/presets/${saved.defaultPreset}`, { cookie, body: { isDefault: true } });
 });
 
-describe('no input breaks a route (2xx/3xx, or 4xx JSON; never 5xx)', () => {
+// Route files run side by side (the server is one process; this keeps its queue full).
+describe.concurrent('no input breaks a route (2xx/3xx, or 4xx JSON; never 5xx)', () => {
   it('knows every route file (found on disk)', () => {
     expect(ROUTES.length).toBeGreaterThan(30);
     expect(ROUTES.map((r) => r.key)).toContain('plan');
