@@ -160,3 +160,21 @@ describe('ids that cannot be ids', () => {
     expect(n.status).toBe(404);
   });
 });
+
+describe("better-auth's own routes", () => {
+  it('refuse a NUL or a lone surrogate in a field or the query with 422 JSON naming it, signed in or out', async () => {
+    const lead2 = await signIn(DEMO.lead);
+    const before = (await call('GET', '/api/me', { cookie: lead2 })).body.name;
+    for (const bad of ['a\u0000b', 'pair \ud800']) {
+      const rename = await call('POST', '/api/auth/update-user', { cookie: lead2, body: { name: bad } });
+      expect(rename.status, JSON.stringify(bad)).toBe(422);
+      expect(Object.keys(rename.body.issues)).toEqual(['name']);
+      const signInAs = await call('POST', '/api/auth/sign-in/email', { body: { email: `x${bad}@example.com`, password: 'whatever-it-is' } });
+      expect(signInAs.status).toBeGreaterThanOrEqual(400);
+      expect(signInAs.status).toBeLessThan(500);
+    }
+    const verify = await call('GET', '/api/auth/verify-email?token=a%00b');
+    expect(verify.status).toBe(422);
+    expect((await call('GET', '/api/me', { cookie: lead2 })).body.name).toBe(before);
+  });
+});

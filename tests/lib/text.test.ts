@@ -10,7 +10,7 @@ import { measurementsRequest, blankLeg } from '@/lib/measurement-request';
 import { planRequest } from '@/lib/plan-request';
 import { presetCreateInput, presetUpdateInput } from '@/lib/preset-settings';
 import { batchQuery } from '@/lib/sheet-request';
-import { isUnstorable, text } from '@/lib/text';
+import { isUnstorable, text, unstorablePath } from '@/lib/text';
 import { PRICE_KEYS } from '@/lib/pricing/price-keys';
 
 const BAD = ['pair \u0000 one', 'pair \ud800', '\udc00 pair', 'a\ud83d'];
@@ -61,4 +61,12 @@ describe('text()', () => {
       }
     });
   }
+
+  it('unstorablePath finds the first field (or key) a body holds that PostgreSQL cannot keep', () => {
+    expect(unstorablePath({ name: 'Lee', email: 'a@example.com', nested: [{ ok: 1 }] })).toBeNull();
+    expect(unstorablePath({ name: 'a\u0000b' })).toBe('name');
+    expect(unstorablePath({ user: { names: ['ok', 'x\ud800'] } })).toBe('user.names.1');
+    expect(unstorablePath({ ['k\u0000']: 1 })).toBe('_');
+    expect(unstorablePath('\udc00')).toBe('_');
+  });
 });
