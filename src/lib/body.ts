@@ -35,12 +35,13 @@ async function nextChunk(reader: Reader, idleMs: number) {
   return Promise.race([reader.read(), stalled]).finally(() => clearTimeout(timer));
 }
 
-/** Reads and drops the rest of a refused body in the background, then lets it go. */
+/** Reads and drops the rest of a refused body in the background (for idleMs at most), then lets it go. */
 function drain(reader: Reader, idleMs: number): void {
+  const until = Date.now() + idleMs;
   void (async () => {
     let dropped = 0;
     for (;;) {
-      const next = await nextChunk(reader, idleMs);
+      const next = await nextChunk(reader, Math.max(1, until - Date.now()));
       if (next === 'stalled' || next.done) break;
       dropped += next.value.byteLength;
       if (dropped > DRAIN_LIMIT) break;
