@@ -59,6 +59,8 @@ export default defineConfig({
       PAYMENTS_API_KEY: envField.string({ context: 'server', access: 'secret', optional: true }),
       PAYMENTS_API_BASE: envField.string({ context: 'server', access: 'secret', optional: true }),
       PAYMENTS_WEBHOOK_SECRET: envField.string({ context: 'server', access: 'secret', optional: true }),
+      // A request body (JSON or an upload) that sends nothing for this long is answered 408.
+      BODY_IDLE_SECONDS: envField.number({ context: 'server', access: 'secret', default: 20 }),
       // How often the server retries failed notices and sends automatic ready notices.
       NOTICE_TICK_SECONDS: envField.number({ context: 'server', access: 'secret', default: 30 }),
       // How many reverse proxies in front of the server append to X-Forwarded-For (0: none, the

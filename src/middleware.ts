@@ -6,6 +6,7 @@ import { defineMiddleware } from 'astro:middleware';
 import { BETTER_AUTH_URL } from 'astro:env/server';
 import { auth } from '@/lib/auth';
 import { memberRequestStarted } from '@/lib/member-activity';
+import { badIdParam } from '@/lib/ids';
 import { activeMembership } from '@/services/members';
 import { withSecurityHeaders } from '@/lib/security-headers';
 import { ensureStarted } from '@/services/startup';
@@ -30,6 +31,18 @@ function crossSite(request: Request, selfOrigin: string): boolean {
   return /better-auth\./.test(request.headers.get('cookie') ?? '') || request.headers.get('sec-fetch-site') === 'cross-site';
 }
 
+/** An API answer of 4xx/5xx that is not JSON (Astro's 404 page for a path no route matches,
+ * better-auth's bare 404) as JSON with the same status, so every client can read every refusal. */
+async function jsonRefusal(path: string, response: Response): Promise<Response> {
+  if (!path.startsWith('/api/') || response.status < 400 || (response.headers.get('content-type') ?? '').includes('json')) return response;
+  await response.body?.cancel().catch(() => {});
+  const headers = new Headers(response.headers);
+  headers.set('content-type', 'application/json');
+  headers.delete('content-length');
+  const error = response.status === 404 ? 'No such API route.' : response.statusText || 'The request was refused.';
+  return new Response(JSON.stringify({ error }), { status: response.status, headers });
+}
+
 /** The one middleware; a member's request is marked in flight so anonymous renders wait for it.
  * Every answer leaves with the security headers; only `astro dev` (mode "development") goes
  * without the CSP: Vite inlines scripts of its own there (the tests' build runs under
@@ -37,7 +50,7 @@ function crossSite(request: Request, selfOrigin: string): boolean {
 export const onRequest = defineMiddleware(async (context, next) => {
   const done = memberRequestStarted(context.request);
   try {
-    return withSecurityHeaders(await answer(context, next, done), { csp: import.meta.env.MODE !== 'development' });
+    return withSecurityHeaders(await jsonRefusal(context.url.pathname, await answer(context, next, done)), { csp: import.meta.env.MODE !== 'development' });
   } finally {
     done();
   }
@@ -54,6 +67,15 @@ async function answer(context: Parameters<MiddlewareHandler>[0], next: Parameter
   }
   locals.user = null;
   locals.member = null;
+  // Every [id] of every route and page, checked once here before any handler can query with it.
+  const badId = badIdParam(context.params, context.routePattern);
+  if (badId) {
+    const api = url.pathname.startsWith('/api/');
+    return new Response(api ? JSON.stringify({ error: `No such record: the ${badId} in the address is not an id.` }) : 'Not found: the address does not name a record.', {
+      status: 404,
+      headers: { 'content-type': api ? 'application/json' : 'text/plain; charset=utf-8' },
+    });
+  }
   if (OWN_AUTH_PREFIXES.some((p) => url.pathname.startsWith(p))) return next();
   const session = await auth.api.getSession({ headers: request.headers });
   if (session) {

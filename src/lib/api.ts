@@ -2,6 +2,7 @@
 import { isAPIError } from 'better-auth/api';
 import type { z } from 'zod';
 import { ServiceError } from '@/services/errors';
+import { BodyRefused, JSON_BODY_LIMIT, readLimited } from './body';
 import { can, type Permission, type Role } from './roles';
 
 /** A JSON response, optionally carrying extra headers (such as a new session cookie). */
@@ -52,15 +53,27 @@ export function guard(locals: App.Locals, permission: Permission): Actor | Respo
   };
 }
 
-/** Parses the JSON body with the schema; a 400/422 response when it does not fit. */
-export async function readBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S> | Response> {
-  let raw: unknown;
+/** The JSON body, read to at most JSON_BODY_LIMIT bytes; the 400/408/413 response when it cannot be. */
+export async function readJson(request: Request): Promise<{ value: unknown } | Response> {
+  let bytes: Uint8Array;
   try {
-    raw = await request.json();
+    bytes = await readLimited(request, JSON_BODY_LIMIT);
+  } catch (e) {
+    if (e instanceof BodyRefused) return problem(e.status, e.message);
+    throw e;
+  }
+  try {
+    return { value: JSON.parse(new TextDecoder().decode(bytes)) };
   } catch {
     return problem(400, 'Send a JSON body.');
   }
-  const parsed = schema.safeParse(raw);
+}
+
+/** Parses the JSON body with the schema; a 400/408/413/422 response when it does not fit. */
+export async function readBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S> | Response> {
+  const raw = await readJson(request);
+  if (raw instanceof Response) return raw;
+  const parsed = schema.safeParse(raw.value);
   if (parsed.success) return parsed.data;
   const issues: Record<string, string> = {};
   for (const issue of parsed.error.issues) issues[issue.path.join('.') || '_'] ??= issue.message;

@@ -1,6 +1,7 @@
 // What the bench's API routes accept (intake, garments, step moves, shop bench settings), checked
 // the same way in the islands' forms and on the server. Plain zod: islands import it.
 import { z } from 'zod';
+import { text } from './text';
 import { EXISTING_FINISHES } from './existing-finish';
 import { GARMENT_STEPS } from './garment-steps';
 
@@ -17,13 +18,13 @@ export const dueDate = z
 
 /** Who works on it: a person's user id, or blank for nobody yet. */
 export const assignee = z
-  .union([z.string().trim().max(64, 'Choose someone from the list.'), z.null()])
+  .union([text().trim().max(64, 'Choose someone from the list.'), z.null()])
   .optional()
   .transform(blankToNull);
 
 /** One garment as intake or the ticket page types it. */
 export const garmentInput = z.object({
-  description: z.string().trim().min(1, 'Describe the garment, e.g. "Navy wool trousers".').max(200, 'Keep it under 200 characters.'),
+  description: text().trim().min(1, 'Describe the garment, e.g. "Navy wool trousers".').max(200, 'Keep it under 200 characters.'),
   dueOn: dueDate,
   assigneeId: assignee,
   /** how the bottoms came in; left out, intake takes a plain hem (DEFAULT_EXISTING_FINISH) */
@@ -34,11 +35,11 @@ export const garmentInput = z.object({
 export const garmentPatch = garmentInput.partial();
 
 /** Optional text: blank or missing is null. */
-const optionalText = (max: number, message: string) => z.union([z.string().trim().max(max, message), z.null()]).optional().transform(blankToNull);
+const optionalText = (max: number, message: string) => z.union([text().trim().max(max, message), z.null()]).optional().transform(blankToNull);
 
 /** A new customer typed at intake. */
 export const newCustomer = z.object({
-  name: z.string().trim().min(1, 'Give the customer a name').max(120, 'Keep the name under 120 characters.'),
+  name: text().trim().min(1, 'Give the customer a name').max(120, 'Keep the name under 120 characters.'),
   phone: optionalText(40, 'Keep the phone number under 40 characters.'),
   email: z.union([z.email('Enter an e-mail address like name@example.com').max(200), z.literal(''), z.null()]).optional().transform(blankToNull),
   notes: optionalText(2000, 'Keep the notes under 2000 characters.'),
@@ -79,7 +80,7 @@ export function scaleUnit(scale: Scale): { unit: 'in' | 'cm' | 'mm'; precision: 
 /** The body of PUT /api/bench-settings. */
 export const settingsRequest = z.object({
   scale: z.enum(SCALES, { error: 'Choose inches (1/8 or 1/16), cm or mm.' }),
-  stepLabels: z.partialRecord(z.enum(GARMENT_STEPS), z.string().trim().max(40, 'Keep a step name under 40 characters.')).default({}),
+  stepLabels: z.partialRecord(z.enum(GARMENT_STEPS), text().trim().max(40, 'Keep a step name under 40 characters.')).default({}),
 });
 
 /** The body of PATCH /api/customers/[id]: any of name, phone, e-mail, notes. */

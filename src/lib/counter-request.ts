@@ -1,5 +1,6 @@
 // What the counter's routes accept, checked the same way in the islands' forms and on the server.
 import { z } from 'zod';
+import { text } from './text';
 import { CURRENCIES } from './pricing/money';
 import { PRICE_KEYS } from './pricing/price-keys';
 
@@ -15,15 +16,15 @@ const amount = (what: string) =>
 /** One priced piece of work as the lead sets it. */
 export const priceItemInput = z.object({
   key: z.enum(PRICE_KEYS),
-  label: z.string().trim().min(1, 'Name the line.').max(80, 'Keep the name under 80 characters.'),
+  label: text().trim().min(1, 'Name the line.').max(80, 'Keep the name under 80 characters.'),
   amountMinor: amount('price'),
 });
 
 /** The lead's price list page: currency, hours, automatic ready notice and every line. */
 export const priceListInput = z.object({
   currency: z.enum(Object.keys(CURRENCIES) as [keyof typeof CURRENCIES, ...(keyof typeof CURRENCIES)[]], { error: 'Choose a currency from the list.' }),
-  hours: z.string().trim().max(300, 'Keep the hours under 300 characters.'),
-  location: z.string().trim().max(120, 'Keep the address under 120 characters.'),
+  hours: text().trim().max(300, 'Keep the hours under 300 characters.'),
+  location: text().trim().max(120, 'Keep the address under 120 characters.'),
   autoReadyNotice: z.boolean(),
   items: z.array(priceItemInput).length(PRICE_KEYS.length, 'Send every line of the list.'),
 });
@@ -36,9 +37,9 @@ export const lineInput = z.discriminatedUnion('source', [
   z.object({ source: z.literal('list'), key: z.enum(PRICE_KEYS, { error: 'Choose a line from the price list.' }) }),
   z.object({
     source: z.literal('adjust'),
-    label: z.string().trim().min(1, 'Say what the adjustment is for.').max(80, 'Keep it under 80 characters.'),
+    label: text().trim().min(1, 'Say what the adjustment is for.').max(80, 'Keep it under 80 characters.'),
     amountMinor: z.number({ error: 'Enter the amount.' }).int('Whole minor units only.').min(-MAX_MINOR).max(MAX_MINOR).refine((n) => n !== 0, 'An adjustment of nothing changes nothing.'),
-    reason: z.string().trim().min(3, 'Give the reason for the adjustment.').max(300, 'Keep the reason under 300 characters.'),
+    reason: text().trim().min(3, 'Give the reason for the adjustment.').max(300, 'Keep the reason under 300 characters.'),
   }),
 ]);
 

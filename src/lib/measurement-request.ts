@@ -2,6 +2,7 @@
 // server (PUT /api/garments/[id]/measurements). Only the shape is checked here; the server reads
 // each length with the engine's parseLength and answers 422 for the field it cannot read.
 import { z } from 'zod';
+import { text } from './text';
 import { unitSchema } from './plan-request';
 
 /** The two legs, left first; they are measured apart because they can differ. */
@@ -43,12 +44,12 @@ export const LEG_LENGTH_LABELS: Record<LegLength, string> = {
 };
 
 const length = (what: string) =>
-  z.string({ error: `${what}: type a length such as 1 1/2 or 38.` }).trim().max(40, `${what} is too long: type a length such as 1 1/2.`);
+  text({ error: `${what}: type a length such as 1 1/2 or 38.` }).trim().max(40, `${what} is too long: type a length such as 1 1/2.`);
 
 /** One leg as typed: the finish, an optional preset name, and every length as text ('' = not taken). */
 export const legInput = z.object({
   finish: z.enum(FINISHES, { error: 'Choose cuff, plain hem or sloped hem.' }),
-  preset: z.string().trim().max(60, 'Keep the preset name under 60 characters.').default(''),
+  preset: text().trim().max(60, 'Keep the preset name under 60 characters.').default(''),
   ...(Object.fromEntries(LEG_LENGTHS.map((f) => [f, length(LEG_LENGTH_LABELS[f]).default('')])) as Record<
     LegLength,
     z.ZodDefault<z.ZodString>

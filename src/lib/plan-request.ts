@@ -1,6 +1,7 @@
 // What POST /api/plan accepts, checked the same way in the calculator's form and on the server.
 // Only the shape is checked here: what a length *means* ("1 1/2", "38 mm") is the engine's call.
 import { z } from 'zod';
+import { text } from './text';
 import type { CuffPlan, HemPlan, TaperPlan } from '@/lib/allowance/types';
 
 // Generous bounds: a length outside them is a slip of the keyboard, never a trouser.
@@ -14,7 +15,7 @@ function lengthOf(what: string) {
         .number()
         .min(-MAX_NUMBER, `${what} is far too large to be a length.`)
         .max(MAX_NUMBER, `${what} is far too large to be a length.`),
-      z.string().trim().max(MAX_TEXT, `${what} is too long: type a length such as 1 1/2.`),
+      text().trim().max(MAX_TEXT, `${what} is too long: type a length such as 1 1/2.`),
     ],
     { error: (iss) => (iss.input === undefined ? `Enter the ${what.toLowerCase()}.` : `${what}: type a length such as 1 1/2 or 38.`) },
   );

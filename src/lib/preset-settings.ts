@@ -1,12 +1,12 @@
 // What a preset holds and what the presets API accepts, checked the same way in the islands and on
 // the server. Only the shape is checked here: what a length means is the engine's call (server).
 import { z } from 'zod';
+import { text } from './text';
 
 const MAX_TEXT = 40;
 
 function length(what: string) {
-  return z
-    .string({ error: `${what}: type a length such as 1 1/2 or 38.` })
+  return text({ error: `${what}: type a length such as 1 1/2 or 38.` })
     .trim()
     .max(MAX_TEXT, `${what} is too long: type a length such as 1 1/2.`)
     .transform((v) => (v === '' ? undefined : v))
@@ -45,8 +45,7 @@ export const presetSettings = z.object({
 /** Preset settings as checked (blank lengths dropped). */
 export type PresetSettings = z.output<typeof presetSettings>;
 
-const name = z
-  .string({ error: 'Give the preset a name.' })
+const name = text({ error: 'Give the preset a name.' })
   .trim()
   .min(1, 'Give the preset a name.')
   .max(60, 'Keep the name under 60 characters.');

@@ -1,6 +1,7 @@
 // The query of the cut-sheet PDFs: GET /api/garments/[id]/sheet and GET /api/queue/sheets. Left
 // out, the unit and precision come from the shop's bench settings and the paper is Letter.
 import { z } from 'zod';
+import { text } from './text';
 import { GARMENT_STEPS } from './garment-steps';
 
 const ISO_DAY = /^\d{4}-\d{2}-\d{2}$/;
@@ -8,11 +9,11 @@ const ISO_DAY = /^\d{4}-\d{2}-\d{2}$/;
 // The queue screen's filters as query parameters, with the device's "today" for due dates.
 const queueFilterQuery = z.object({
   step: z.enum(['open', 'all', ...GARMENT_STEPS] as const, { error: 'Choose a step, "open" or "all".' }).default('open'),
-  who: z.string().trim().min(1, 'Choose who: all, mine, mine-open, nobody or a person.').max(100, 'Choose who: all, mine, mine-open, nobody or a person.').default('all'),
+  who: text().trim().min(1, 'Choose who: all, mine, mine-open, nobody or a person.').max(100, 'Choose who: all, mine, mine-open, nobody or a person.').default('all'),
   due: z.enum(['all', 'today', 'overdue'], { error: 'Choose due: all, today or overdue.' }).default('all'),
-  search: z.string().max(100, 'Keep the search under 100 characters.').default(''),
+  search: text().max(100, 'Keep the search under 100 characters.').default(''),
   // The queue reads due dates against the device's own calendar; the batch must use the same day.
-  today: z.string().regex(ISO_DAY, 'Give today as YYYY-MM-DD.').optional(),
+  today: text().regex(ISO_DAY, 'Give today as YYYY-MM-DD.').optional(),
 });
 
 /** unit=in|cm|mm, precision=8|16 (inches only), page=LETTER|A4. */

@@ -1,17 +1,21 @@
 // Writes and reads audit events: who changed what in a shop, and when.
 import { and, desc, eq, inArray } from 'drizzle-orm';
-import { db } from '@/db';
+import { db, type Db } from '@/db';
 import { auditEvents, user } from '@/db/schema';
 import type { AuditEntry } from '@/lib/bench-types';
 
-/** Records one event for the shop. */
-export async function audit(shopId: string, actorId: string | null, action: string, subject?: string, detail: Record<string, unknown> = {}) {
-  await db.insert(auditEvents).values({ shopId, actorId, action, subject, detail });
+// Each event is written by the transaction of the change it records (`tx`): both are kept or
+// neither, so a change never stands without its history, and a refused event (text PostgreSQL
+// cannot keep) undoes the change instead of answering 500 after it was written.
+
+/** Records one event for the shop, inside the change's own transaction. */
+export async function audit(tx: Db, shopId: string, actorId: string | null, action: string, subject?: string, detail: Record<string, unknown> = {}) {
+  await tx.insert(auditEvents).values({ shopId, actorId, action, subject, detail });
 }
 
-/** Records several events at once (one change of many fields). */
-export async function auditMany(rows: { shopId: string; actorId: string | null; action: string; subject: string; detail: Record<string, unknown> }[]) {
-  if (rows.length) await db.insert(auditEvents).values(rows);
+/** Records several events at once (one change of many fields), inside the change's transaction. */
+export async function auditMany(tx: Db, rows: { shopId: string; actorId: string | null; action: string; subject: string; detail: Record<string, unknown> }[]) {
+  if (rows.length) await tx.insert(auditEvents).values(rows);
 }
 
 /** The shop's events about some subjects (e.g. a garment), newest first, with who did them. */

@@ -17,9 +17,11 @@ export async function listCustomers(actor: Actor): Promise<Customer[]> {
 
 /** Adds a customer to the actor's shop. */
 export async function createCustomer(actor: Actor, input: z.infer<typeof customerInput>): Promise<Customer> {
-  const [row] = await db.insert(customers).values({ ...input, shopId: actor.shopId }).returning();
-  await audit(actor.shopId, actor.userId, 'customer.created', row!.id);
-  return row!;
+  return db.transaction(async (tx) => {
+    const [row] = await tx.insert(customers).values({ ...input, shopId: actor.shopId }).returning();
+    await audit(tx, actor.shopId, actor.userId, 'customer.created', row!.id);
+    return row!;
+  });
 }
 
 /** One customer of the actor's shop; 404 for anyone else's. */
@@ -38,11 +40,13 @@ export async function updateCustomer(actor: Actor, id: string, patch: z.output<t
     if (patch[key] !== undefined && patch[key] !== was[key]) changes[key] = { old: was[key], new: patch[key] };
   }
   if (Object.keys(changes).length === 0) return was;
-  const [row] = await db
-    .update(customers)
-    .set(Object.fromEntries(Object.entries(changes).map(([k, v]) => [k, v.new])))
-    .where(and(eq(customers.id, id), eq(customers.shopId, actor.shopId)))
-    .returning();
-  await audit(actor.shopId, actor.userId, 'customer.changed', id, changes);
-  return row!;
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .update(customers)
+      .set(Object.fromEntries(Object.entries(changes).map(([k, v]) => [k, v.new])))
+      .where(and(eq(customers.id, id), eq(customers.shopId, actor.shopId)))
+      .returning();
+    await audit(tx, actor.shopId, actor.userId, 'customer.changed', id, changes);
+    return row!;
+  });
 }

@@ -100,6 +100,7 @@ export async function seedBenchDemo(shopId: string, customerIds: string[], peopl
         // The fitting's history, as if typed in at the fitting.
         const typed = [['finish', g.fitting.finish], ...Object.entries(legs[leg])];
         await auditMany(
+          db,
           typed.map(([field, value]) => ({
             shopId,
             actorId: people.tailor ?? null,

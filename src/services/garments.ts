@@ -13,12 +13,10 @@ import { audit } from './audit';
 import { ServiceError } from './errors';
 import { onGarmentMoved } from './garment-events';
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+import { isUuid } from '@/lib/ids';
 
-/** True when the text is a uuid (anything else cannot name a row: 404, not a database error). */
-export function isUuid(id: string): boolean {
-  return UUID.test(id);
-}
+// The one id check (src/lib/ids.ts), here too for the services that already import it from here.
+export { isUuid };
 
 /** Garments the actor may see: all of the shop's, or (apprentice) their own and unassigned. */
 export function garmentVisibleTo(actor: Actor) {
@@ -175,14 +173,16 @@ export async function addGarment(actor: Actor, ticketId: string, input: z.output
   if (t.status === 'collected') throw new ServiceError(422, `Ticket T-${t.number} is collected: open a new ticket.`);
   await checkAssignee(actor, input.assigneeId);
   const position = (await garmentsOfTicket(actor.shopId, ticketId)).length;
-  const [row] = await db
-    .insert(garments)
-    .values({ shopId: actor.shopId, ticketId, description: input.description, dueOn: input.dueOn ?? t.dueOn, assigneeId: input.assigneeId, existingFinish: input.existingFinish, position })
-    .returning();
-  await audit(actor.shopId, actor.userId, 'garment.added', row!.id, { ticket: t.number, description: input.description });
-  await refreshTicketStatus(actor.shopId, ticketId);
-  if (input.assigneeId) await refreshTicketAssignee(db, actor.shopId, ticketId);
-  return row!;
+  return withTicketLock(actor.shopId, ticketId, async (tx) => {
+    const [row] = await tx
+      .insert(garments)
+      .values({ shopId: actor.shopId, ticketId, description: input.description, dueOn: input.dueOn ?? t.dueOn, assigneeId: input.assigneeId, existingFinish: input.existingFinish, position })
+      .returning();
+    await audit(tx, actor.shopId, actor.userId, 'garment.added', row!.id, { ticket: t.number, description: input.description });
+    await refreshTicketStatus(actor.shopId, ticketId, tx);
+    if (input.assigneeId) await refreshTicketAssignee(tx, actor.shopId, ticketId);
+    return row!;
+  });
 }
 
 /** Changes a garment's description, due date, assignee or existing finish; each change is kept in the history. */
@@ -194,14 +194,16 @@ export async function updateGarment(actor: Actor, id: string, patch: z.output<ty
     if (key in patch && patch[key] !== undefined && patch[key] !== g[key]) changes[key] = { old: g[key], new: patch[key] };
   }
   if (Object.keys(changes).length === 0) return g;
-  const [row] = await db
-    .update(garments)
-    .set({ ...Object.fromEntries(Object.entries(changes).map(([k, v]) => [k, v.new])), updatedAt: new Date() })
-    .where(and(eq(garments.id, id), eq(garments.shopId, actor.shopId)))
-    .returning();
-  await audit(actor.shopId, actor.userId, 'garment.changed', id, changes);
-  if ('assigneeId' in changes) await refreshTicketAssignee(db, actor.shopId, g.ticketId);
-  return row!;
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .update(garments)
+      .set({ ...Object.fromEntries(Object.entries(changes).map(([k, v]) => [k, v.new])), updatedAt: new Date() })
+      .where(and(eq(garments.id, id), eq(garments.shopId, actor.shopId)))
+      .returning();
+    await audit(tx, actor.shopId, actor.userId, 'garment.changed', id, changes);
+    if ('assigneeId' in changes) await refreshTicketAssignee(tx, actor.shopId, g.ticketId);
+    return row!;
+  });
 }
 
 /** Moves a garment one step on; pickup (ready → collected) needs the pickup permission. */
@@ -235,9 +237,9 @@ export async function writeStep(actor: Actor, g: Garment, to: GarmentStep, back:
       .returning();
     if (!moved) throw new ServiceError(409, 'Someone else moved this garment first: reload and try again.');
     await refreshTicketStatus(actor.shopId, g.ticketId, tx);
+    await audit(tx, actor.shopId, actor.userId, 'garment.moved', g.id, back ? { from: g.status, to, back: true } : { from: g.status, to });
     return moved;
   });
-  await audit(actor.shopId, actor.userId, 'garment.moved', g.id, back ? { from: g.status, to, back: true } : { from: g.status, to });
   await onGarmentMoved(actor, row);
   return row;
 }

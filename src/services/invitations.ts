@@ -6,6 +6,7 @@ import { db } from '@/db';
 import { invitation, member, organization, user } from '@/db/schema';
 import { auth } from '@/lib/auth';
 import type { acceptInviteInput } from '@/lib/account-inputs';
+import { isRecordId } from '@/lib/ids';
 import { isRole, type Role } from '@/lib/roles';
 import { ServiceError } from './errors';
 import { audit } from './audit';
@@ -22,6 +23,7 @@ export interface InvitationView {
 
 /** The pending, unexpired invitation with this id, or a 404. */
 export async function viewInvitation(id: string): Promise<InvitationView> {
+  if (!isRecordId(id)) throw new ServiceError(404, 'This invitation is not valid any more: ask the lead for a new one.');
   const [row] = await db
     .select({ id: invitation.id, email: invitation.email, role: invitation.role, shopName: organization.name })
     .from(invitation)
@@ -68,11 +70,11 @@ export async function acceptInvitation(id: string, who: Acceptor): Promise<{ sho
       await tx.insert(member).values({ id: randomUUID(), organizationId: row!.organizationId, userId, role: inv.role, createdAt: new Date() });
       // Opening the mailed link proves the address.
       await tx.update(user).set({ emailVerified: true }).where(eq(user.id, userId));
+      await audit(tx, row!.organizationId, userId, 'staff.joined', id, { role: inv.role });
     });
     return row!.organizationId;
   };
   // A signed-in person's account is theirs to keep; one made just now goes if joining fails.
-  const shopId = await (created ? orUndoAccount(userId, join) : join());
-  await audit(shopId, userId, 'staff.joined', id, { role: inv.role });
+  await (created ? orUndoAccount(userId, join) : join());
   return { shopName: inv.shopName, headers };
 }

@@ -102,7 +102,7 @@ export async function saveMeasurements(
 ): Promise<FittingView> {
   await visibleGarment(actor, garmentId);
   const before = new Map((await legsOf(garmentId)).map((l) => [l.leg, l]));
-  const events: Parameters<typeof auditMany>[0] = [];
+  const events: Parameters<typeof auditMany>[1] = [];
   const change = (leg: Leg, field: string, old: string | null, now: string | null) => {
     if ((old ?? '') !== (now ?? '')) {
       events.push({ shopId: actor.shopId, actorId: actor.userId, action: 'measurement.changed', subject: garmentId, detail: { leg, field, old: old || null, new: now || null, unit: input.unit } });
@@ -122,8 +122,8 @@ export async function saveMeasurements(
         .values({ shopId: actor.shopId, garmentId, leg, ...row })
         .onConflictDoUpdate({ target: [measurements.garmentId, measurements.leg], set: row });
     }
+    await auditMany(tx, events);
   });
-  await auditMany(events);
   return fittingOf(actor, garmentId);
 }
 

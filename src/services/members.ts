@@ -3,6 +3,7 @@ import { and, asc, eq } from 'drizzle-orm';
 import { db } from '@/db';
 import { member, organization } from '@/db/schema';
 import { isRole, type Role } from '@/lib/roles';
+import { isRecordId } from '@/lib/ids';
 
 /** A membership resolved for the session. */
 export interface Membership {
@@ -27,6 +28,7 @@ export async function activeMembership(userId: string, activeShopId?: string | n
 
 /** The member row of a shop by id, or null when it belongs to another shop. */
 export async function memberInShop(shopId: string, memberId: string) {
+  if (!isRecordId(memberId)) return null;
   const [row] = await db
     .select()
     .from(member)

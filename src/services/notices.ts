@@ -77,14 +77,18 @@ export async function attemptDelivery(notice: Notice): Promise<Notice> {
 /** Queues the ready notice of a ready ticket and tries to send it at once. */
 async function queueReady(shopId: string, ticketId: string, actorId: string | null): Promise<Notice> {
   const message = await readyMessage(shopId, ticketId);
-  if (!message.to) throw new ServiceError(422, 'The customer has no e-mail address: add one, or call them.');
-  const [row] = await db
-    .insert(notices)
-    .values({ shopId, ticketId, kind: 'ready', to: message.to, subject: message.subject, body: message.body, createdById: actorId })
-    .onConflictDoNothing()
-    .returning();
-  if (!row) throw new ServiceError(409, 'The ready notice of this ticket is already on record.');
-  await audit(shopId, actorId, 'notice.queued', ticketId, { kind: 'ready', automatic: actorId === null });
+  const to = message.to;
+  if (!to) throw new ServiceError(422, 'The customer has no e-mail address: add one, or call them.');
+  const row = await db.transaction(async (tx) => {
+    const [queued] = await tx
+      .insert(notices)
+      .values({ shopId, ticketId, kind: 'ready', to, subject: message.subject, body: message.body, createdById: actorId })
+      .onConflictDoNothing()
+      .returning();
+    if (!queued) throw new ServiceError(409, 'The ready notice of this ticket is already on record.');
+    await audit(tx, shopId, actorId, 'notice.queued', ticketId, { kind: 'ready', automatic: actorId === null });
+    return queued;
+  });
   return attemptDelivery(row);
 }
 
@@ -103,7 +107,8 @@ export async function retryNotice(actor: Actor, ticketId: string, noticeId: stri
     : [];
   if (!row) throw new ServiceError(404, 'No such notice on this ticket.');
   if (row.status === 'sent') throw new ServiceError(409, 'This notice was already sent.');
-  await audit(actor.shopId, actor.userId, 'notice.retried', ticketId, { noticeId });
+  // The retry itself changes no row (the attempt below records its own outcome): a lone entry.
+  await audit(db, actor.shopId, actor.userId, 'notice.retried', ticketId, { noticeId });
   return attemptDelivery(row);
 }
 

@@ -106,13 +106,13 @@ export async function takePayment(actor: Actor, ticketId: string, input: z.infer
       async (tx, ticket) => {
         const before = await checkPayment(tx, ticket, settings, input);
         await tx.insert(payments).values({ ...input, shopId: actor.shopId, ticketId, currency: before.currency, takenById: actor.userId });
+        await audit(tx, actor.shopId, actor.userId, `payment.${input.purpose}`, ticketId, { method: input.method, amountMinor: input.amountMinor });
       },
     );
   } catch (e) {
     if (isUniqueViolation(e)) throw new ServiceError(409, `A ${input.purpose} is already on record for this ticket.`);
     throw e;
   }
-  await audit(actor.shopId, actor.userId, `payment.${input.purpose}`, ticketId, { method: input.method, amountMinor: input.amountMinor });
   return counterSummary(actor, ticketId);
 }
 
@@ -185,10 +185,7 @@ export async function createPaymentLink(actor: Actor, ticketId: string, appOrigi
       continue;
     }
     const made = await makeAtService(client, plan.link, plan.request, settings);
-    if (made) {
-      await audit(actor.shopId, actor.userId, 'payment.link', ticketId, { amountMinor: plan.link.amountMinor });
-      return counterSummary(actor, ticketId);
-    }
+    if (made) return counterSummary(actor, ticketId);
   }
   throw new ServiceError(409, 'The balance kept changing while the pay link was made: reload and try again.');
 }
@@ -222,6 +219,7 @@ async function makeAtService(client: Stripe, link: PaymentLink, request: Stripe.
       }
       if (row?.status === 'creating' && current.ticket.status !== 'collected' && current.due === link.amountMinor) {
         await tx.update(paymentLinks).set({ status: 'open', sessionId: session.id, url: session.url }).where(eq(paymentLinks.id, link.id));
+        await audit(tx, shopId, link.createdById, 'payment.link', ticketId, { amountMinor: link.amountMinor });
         return 'open';
       }
       // The balance changed while the service made it (or the link was given up as cut short):
@@ -335,13 +333,12 @@ export async function assertReadyToHandOver(tx: Db, ticket: Ticket): Promise<Cou
 export async function pickUp(actor: Actor, ticketId: string): Promise<CounterSummary> {
   // Checked and written under the ticket's lock: a price line or payment arriving meanwhile waits,
   // and one that came first is in the balance checked here.
-  const before = await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
+  await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
     const summary = await assertReadyToHandOver(tx, ticket);
     await tx.update(tickets).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
     await tx.update(garments).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(garments.ticketId, ticketId), eq(garments.shopId, actor.shopId), inArray(garments.status, ['ready'])));
-    return summary;
+    await audit(tx, actor.shopId, actor.userId, 'ticket.collected', ticketId, { paid: summary.paid });
   });
-  await audit(actor.shopId, actor.userId, 'ticket.collected', ticketId, { paid: before.paid });
   return counterSummary(actor, ticketId);
 }
 

@@ -8,7 +8,7 @@ import { files, garments, user, type StoredFile } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import type { PhotoView } from '@/lib/photo-view';
 import { fileStorage } from '@/lib/storage';
-import { stripHeifMetadata } from '@/lib/storage/heif-metadata';
+import { readHeifImage, stripHeifMetadata } from '@/lib/storage/heif-metadata';
 import { PLACEHOLDER_THUMB } from '@/lib/storage/placeholder-thumb';
 import { isPathLike, safeName } from '@/lib/storage/safe-name';
 import { sniffImage, type ImageType } from '@/lib/storage/sniff-image';
@@ -17,6 +17,9 @@ import { audit } from './audit';
 import { garmentVisibleTo, isUuid } from './garments';
 
 const THUMB_PX = 480;
+/** The most pixels a photo may have (a 48 MP phone camera fits): read from its header, before any
+ * decoding, since a few KB of PNG can declare 16,000 × 16,000 pixels and cost 100s of MB to open. */
+export const MAX_PIXELS = 50_000_000;
 
 /** An upload refused for what it is: 413 too large, 415 not an image we take, 422 a bad name. */
 export class UploadRefused extends Error {
@@ -87,6 +90,28 @@ export function checkUploads(uploads: Upload[], maxBytes: number): (Upload & { t
   });
 }
 
+/** Refuses a file whose header does not describe a picture we take, or one of too many pixels. */
+export async function checkPicture(bytes: Uint8Array, type: ImageType, name: string): Promise<void> {
+  let size: { width: number; height: number } | null;
+  if (type.mime === 'image/heic') {
+    // Its picture is never decoded here: its boxes must show one, with its size (ispe).
+    size = readHeifImage(bytes);
+    if (!size) throw new UploadRefused(415, `${name} could not be read as a HEIC photo, so its location could not be removed: send it as a JPEG or take it again.`, name);
+  } else {
+    try {
+      // metadata() reads the header only.
+      const m = await sharp(bytes, { limitInputPixels: false }).metadata();
+      size = m.width && m.height ? { width: m.width, height: m.height * (m.pages ?? 1) } : null;
+    } catch {
+      size = null;
+    }
+    if (!size) throw new UploadRefused(415, `${name} could not be read as an image: take the photo again.`, name);
+  }
+  if (size.width * size.height > MAX_PIXELS) {
+    throw new UploadRefused(413, `${name} is ${size.width} × ${size.height} pixels: send a photo of at most ${MAX_PIXELS / 1_000_000} megapixels.`, name);
+  }
+}
+
 /** What is kept of one upload: the picture without its metadata, and a WebP thumbnail. */
 interface Prepared {
   bytes: Uint8Array;
@@ -105,7 +130,7 @@ async function prepare(bytes: Uint8Array, type: ImageType, name: string): Promis
     return { bytes: stripped.bytes, thumb: null };
   }
   try {
-    const upright = sharp(bytes, { failOn: 'error' }).rotate();
+    const upright = sharp(bytes, { failOn: 'error', limitInputPixels: MAX_PIXELS }).rotate();
     const clean = type.mime === 'image/jpeg' ? upright.jpeg({ quality: 92 }) : type.mime === 'image/png' ? upright.png() : upright.webp({ quality: 92 });
     const stored = await clean.toBuffer();
     const thumb = await sharp(stored)
@@ -123,6 +148,7 @@ export async function addPhotos(actor: Actor, garmentId: string, uploads: Upload
   const garment = await garmentInShop(actor, garmentId);
   if (uploads.length === 0) throw new UploadRefused(422, 'Choose at least one photo.', '');
   const checked = checkUploads(uploads, maxBytes);
+  for (const u of checked) await checkPicture(u.bytes, u.type, u.name);
   // One at a time: each decode holds a full-size picture in memory, and the machine has two cores.
   const prepared: Prepared[] = [];
   for (const u of checked) prepared.push(await prepare(u.bytes, u.type, u.name));
@@ -136,28 +162,31 @@ export async function addPhotos(actor: Actor, garmentId: string, uploads: Upload
     await storage.put(path, bytes, u.type.mime);
     if (thumb && thumbPath) await storage.put(thumbPath, thumb, 'image/webp');
     try {
-      const [row] = await db
-        .insert(files)
-        .values({
-          id,
-          shopId: actor.shopId,
-          ticketId: garment.ticketId,
-          garmentId,
-          kind: 'fitting-photo',
-          path,
-          thumbPath,
-          mimeType: u.type.mime,
-          bytes: bytes.byteLength,
-          originalName: u.name,
-          uploadedById: actor.userId,
-        })
-        .returning();
+      const [row] = await db.transaction(async (tx) => {
+        const inserted = await tx
+          .insert(files)
+          .values({
+            id,
+            shopId: actor.shopId,
+            ticketId: garment.ticketId,
+            garmentId,
+            kind: 'fitting-photo',
+            path,
+            thumbPath,
+            mimeType: u.type.mime,
+            bytes: bytes.byteLength,
+            originalName: u.name,
+            uploadedById: actor.userId,
+          })
+          .returning();
+        await audit(tx, actor.shopId, actor.userId, 'photo.added', id, { garmentId, name: u.name, bytes: bytes.byteLength, type: u.type.mime });
+        return inserted;
+      });
       added.push(viewOf({ ...row!, uploadedBy: actor.userName }));
     } catch (e) {
       await removeStored(id, [path, thumbPath]);
       throw e;
     }
-    await audit(actor.shopId, actor.userId, 'photo.added', id, { garmentId, name: u.name, bytes: bytes.byteLength, type: u.type.mime });
   }
   return added;
 }
@@ -187,9 +216,11 @@ export async function readPhoto(actor: Actor, id: string, size: 'full' | 'thumb'
 /** Removes a photo's row, then its file and thumbnail from the storage. */
 export async function deletePhoto(actor: Actor, id: string): Promise<{ id: string; deleted: true }> {
   const row = await photoInShop(actor, id);
-  const [gone] = await db.delete(files).where(and(eq(files.id, id), eq(files.shopId, actor.shopId))).returning({ id: files.id });
-  if (!gone) throw new ServiceError(404, 'No such photo in this shop.');
-  await audit(actor.shopId, actor.userId, 'photo.deleted', id, { garmentId: row.garmentId, name: row.originalName });
+  await db.transaction(async (tx) => {
+    const [gone] = await tx.delete(files).where(and(eq(files.id, id), eq(files.shopId, actor.shopId))).returning({ id: files.id });
+    if (!gone) throw new ServiceError(404, 'No such photo in this shop.');
+    await audit(tx, actor.shopId, actor.userId, 'photo.deleted', id, { garmentId: row.garmentId, name: row.originalName });
+  });
   // The row is gone for good: a file the storage will not remove now is only logged (an orphan to
   // sweep later), never a reason to answer as if the photo were still there.
   await removeStored(id, [row.path, row.thumbPath]);

@@ -102,9 +102,9 @@ export async function createPreset(actor: Actor, input: z.output<typeof presetCr
       .insert(presets)
       .values({ shopId: actor.shopId, ownerId, name: input.name, settings, isDefault: Boolean(input.isDefault) })
       .returning();
+    await audit(tx, actor.shopId, actor.userId, 'preset.created', created!.id, { name: created!.name, house, isDefault: created!.isDefault });
     return created!;
   });
-  await audit(actor.shopId, actor.userId, 'preset.created', row.id, { name: row.name, house, isDefault: row.isDefault });
   return view(row);
 }
 
@@ -132,18 +132,20 @@ export async function updatePreset(actor: Actor, id: string, input: z.output<typ
       .set({ name: input.name, settings, isDefault: input.isDefault, updatedAt: new Date() })
       .where(and(eq(presets.id, id), eq(presets.shopId, actor.shopId)))
       .returning();
+    const changed = Object.keys(input).filter((k) => input[k as keyof typeof input] !== undefined);
+    await audit(tx, actor.shopId, actor.userId, input.isDefault ? 'preset.default-set' : 'preset.updated', id, { name: updated!.name, changed });
     return updated!;
   });
-  const changed = Object.keys(input).filter((k) => input[k as keyof typeof input] !== undefined);
-  await audit(actor.shopId, actor.userId, input.isDefault ? 'preset.default-set' : 'preset.updated', id, { name: row.name, changed });
   return view(row);
 }
 
 /** Removes a preset; removing the house default leaves the shop without one until the lead picks another. */
 export async function deletePreset(actor: Actor, id: string): Promise<{ id: string; deleted: true }> {
   const row = await visibleRow(actor, id);
-  await db.delete(presets).where(and(eq(presets.id, id), eq(presets.shopId, actor.shopId)));
-  await audit(actor.shopId, actor.userId, 'preset.deleted', id, { name: row.name, house: row.ownerId === null });
+  await db.transaction(async (tx) => {
+    await tx.delete(presets).where(and(eq(presets.id, id), eq(presets.shopId, actor.shopId)));
+    await audit(tx, actor.shopId, actor.userId, 'preset.deleted', id, { name: row.name, house: row.ownerId === null });
+  });
   return { id, deleted: true };
 }
 

@@ -79,8 +79,8 @@ export async function savePriceList(actor: Actor, input: z.infer<typeof priceLis
         .values({ shopId: actor.shopId, ...item })
         .onConflictDoUpdate({ target: [priceItems.shopId, priceItems.key], set: { label: item.label, amountMinor: item.amountMinor, updatedAt: new Date() } });
     }
+    await audit(tx, actor.shopId, actor.userId, 'prices.saved', actor.shopId, { currency: input.currency });
   });
-  await audit(actor.shopId, actor.userId, 'prices.saved', actor.shopId, { currency: input.currency });
   return getPriceList(actor);
 }
 
@@ -115,8 +115,8 @@ export async function priceFromGarments(actor: Actor, ticketId: string, input: z
       const at = Date.now();
       await tx.insert(priceLines).values(lines.map((l, i) => ({ ...l, shopId: actor.shopId, ticketId, source: 'auto' as const, createdById: actor.userId, createdAt: new Date(at + i) })));
     }
+    await audit(tx, actor.shopId, actor.userId, 'prices.from-garments', ticketId, { lines: lines.length, rush: input.rush });
   });
-  await audit(actor.shopId, actor.userId, 'prices.from-garments', ticketId, { lines: lines.length, rush: input.rush });
   return { lines: await linesOf(actor.shopId, ticketId), unpriced };
 }
 
@@ -130,9 +130,9 @@ export async function addLine(actor: Actor, ticketId: string, input: z.infer<typ
   const row = await withLinksClosed(actor.shopId, ticketId, refuseWhenSettled, async (tx, ticket) => {
     await refuseWhenSettled(tx, ticket);
     const [added] = await tx.insert(priceLines).values({ ...values, source: input.source, shopId: actor.shopId, ticketId, createdById: actor.userId }).returning();
+    await audit(tx, actor.shopId, actor.userId, input.source === 'adjust' ? 'prices.adjusted' : 'prices.line-added', ticketId, { amountMinor: added!.amountMinor, reason: added!.reason });
     return added!;
   });
-  await audit(actor.shopId, actor.userId, input.source === 'adjust' ? 'prices.adjusted' : 'prices.line-added', ticketId, { amountMinor: row.amountMinor, reason: row.reason });
   return row;
 }
 

@@ -17,7 +17,9 @@ export async function benchSettings(shopId: string): Promise<BenchSettings> {
 /** Saves the shop's settings. */
 export async function saveBenchSettings(actor: Actor, input: z.output<typeof settingsRequest>): Promise<BenchSettings> {
   const values = { scale: input.scale, stepLabels: input.stepLabels, updatedAt: new Date() };
-  await db.insert(shopSettings).values({ shopId: actor.shopId, ...values }).onConflictDoUpdate({ target: shopSettings.shopId, set: values });
-  await audit(actor.shopId, actor.userId, 'settings.bench', actor.shopId, values);
+  await db.transaction(async (tx) => {
+    await tx.insert(shopSettings).values({ shopId: actor.shopId, ...values }).onConflictDoUpdate({ target: shopSettings.shopId, set: values });
+    await audit(tx, actor.shopId, actor.userId, 'settings.bench', actor.shopId, values);
+  });
   return benchSettings(actor.shopId);
 }

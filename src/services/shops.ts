@@ -29,8 +29,8 @@ export async function createShop(input: z.infer<typeof shopSignUpInput>): Promis
     db.transaction(async (tx) => {
       await tx.insert(organization).values({ id: shopId, name: input.shopName, slug: slugify(input.shopName), createdAt: new Date() });
       await tx.insert(member).values({ id: randomUUID(), organizationId: shopId, userId: response.user.id, role: 'lead', createdAt: new Date() });
+      await audit(tx, shopId, response.user.id, 'shop.created', shopId);
     }),
   );
-  await audit(shopId, response.user.id, 'shop.created', shopId);
   return { shopId, headers };
 }

@@ -66,7 +66,7 @@ export async function invite(actor: Actor, headers: Headers, input: z.infer<type
     body: { email, role: input.role, organizationId: actor.shopId },
   });
   const role = created.role as Role;
-  await audit(actor.shopId, actor.userId, 'staff.invited', created.id, { email, role });
+  await audit(db, actor.shopId, actor.userId, 'staff.invited', created.id, { email, role });
   return { id: created.id, email, role, expiresAt: new Date(created.expiresAt).toISOString() };
 }
 
@@ -85,8 +85,10 @@ export async function changeRole(actor: Actor, headers: Headers, memberId: strin
   if (target.role === 'lead' && input.role !== 'lead' && (await leadsLeft(actor.shopId, memberId)) === 0) {
     throw new ServiceError(422, 'The shop needs at least one lead: make someone else lead first.');
   }
+  // better-auth writes the change through its own adapter, outside any transaction of ours: the
+  // entry follows it (its detail is only checked roles and addresses, nothing PostgreSQL refuses).
   await auth.api.updateMemberRole({ headers, body: { memberId, role: input.role, organizationId: actor.shopId } });
-  await audit(actor.shopId, actor.userId, 'staff.role-changed', memberId, { from: target.role, to: input.role });
+  await audit(db, actor.shopId, actor.userId, 'staff.role-changed', memberId, { from: target.role, to: input.role });
   return { id: memberId, role: input.role };
 }
 
@@ -98,6 +100,6 @@ export async function removeMember(actor: Actor, headers: Headers, memberId: str
     throw new ServiceError(422, 'The shop needs at least one lead: make someone else lead first.');
   }
   await auth.api.removeMember({ headers, body: { memberIdOrEmail: memberId, organizationId: actor.shopId } });
-  await audit(actor.shopId, actor.userId, 'staff.removed', memberId);
+  await audit(db, actor.shopId, actor.userId, 'staff.removed', memberId);
   return { id: memberId, removed: true };
 }

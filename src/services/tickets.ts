@@ -88,9 +88,9 @@ export async function createTicket(actor: Actor, typed: IntakeInput): Promise<Ti
       // Work given to someone at intake gives them the ticket.
       return { ...t!, assigneeId: await refreshTicketAssignee(tx, actor.shopId, t!.id) };
     }
+    await audit(tx, actor.shopId, actor.userId, 'ticket.created', t!.id, { number: t!.number, garments: input.garments.length });
     return t!;
   });
-  await audit(actor.shopId, actor.userId, 'ticket.created', row.id, { number: row.number, garments: input.garments.length });
   return row;
 }
 
@@ -122,9 +122,9 @@ export async function moveTicket(actor: Actor, id: string, to: GarmentStep): Pro
       // A garment moved on its own since it was read: none of this move is kept.
       if (rows.length !== behind.length) throw new ServiceError(409, 'Someone else moved a garment of this ticket first: reload and try again.');
       await refreshTicketStatus(actor.shopId, id, tx);
+      await auditMany(tx, rows.map((g) => ({ shopId: actor.shopId, actorId: actor.userId, action: 'garment.moved', subject: g.id, detail: { from: ticket.status, to } })));
       return { from: ticket.status, rows };
     });
-    await auditMany(moved.rows.map((g) => ({ shopId: actor.shopId, actorId: actor.userId, action: 'garment.moved', subject: g.id, detail: { from: moved.from, to } })));
     for (const g of moved.rows) await onGarmentMoved(actor, g);
   }
   const [row] = await db.select().from(tickets).where(eq(tickets.id, id));

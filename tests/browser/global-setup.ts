@@ -78,6 +78,8 @@ export default async function setup(project: TestProject) {
       // As behind one reverse proxy: tests give each would-be client its own X-Forwarded-For address,
       // so the per-address limits of one test do not fall on the others (all come from loopback).
       TRUSTED_PROXY_HOPS: '1',
+      // A stalled upload is answered 408 after this long (tests/http/input-limits.spec.ts waits for it).
+      BODY_IDLE_SECONDS: '3',
       // The stories sign in as the demo shop's people: asked for explicitly, as it is off by
       // default on PostgreSQL, which also needs a session secret from the environment.
       DEMO_DATA: 'on',

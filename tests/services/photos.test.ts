@@ -3,6 +3,7 @@
 import { mkdtempSync, readFileSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import zlib from 'node:zlib';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { and, eq } from 'drizzle-orm';
@@ -115,6 +116,39 @@ describe('fitting photos', () => {
   it('refuse a HEIC whose boxes cannot be read, as its location could not be removed', async () => {
     const broken = new Uint8Array([0, 0, 0, 24, ...Buffer.from('ftypheic'), 0, 0, 0, 0, ...Buffer.from('mif1heic'), ...new Array(64).fill(7)]);
     await expect(svc.addPhotos(a.tailor, garmentA, [{ name: 'cut-short.heic', bytes: broken }], 10 * MB)).rejects.toMatchObject({ status: 415, message: expect.stringMatching(/location could not be removed/) });
+  });
+
+  it('refuse a file that only starts like a HEIC: a HEIC header then HTML, or nothing', async () => {
+    const header = new Uint8Array([0, 0, 0, 24, ...Buffer.from('ftypheic'), 0, 0, 0, 0, ...Buffer.from('mif1heic')]);
+    for (const tail of [Buffer.from('<html><body><script>alert(document.cookie)</script></body></html>'), Buffer.alloc(0)]) {
+      const bytes = new Uint8Array([...header, ...tail]);
+      await expect(svc.addPhotos(a.tailor, garmentA, [{ name: 'IMG_1.HEIC', bytes }], 10 * MB)).rejects.toMatchObject({ status: 415 });
+    }
+  });
+
+  it('refuse a picture of more pixels than MAX_PIXELS from its header, before decoding it (PNG and HEIC)', async () => {
+    // A PNG header declaring 16,000 x 16,000 pixels; the pixels themselves are never read.
+    const chunk = (type: string, data: Buffer) => {
+      const body = Buffer.concat([Buffer.from(type, 'latin1'), data]);
+      const len = Buffer.alloc(4);
+      len.writeUInt32BE(data.length);
+      const crc = Buffer.alloc(4);
+      crc.writeUInt32BE(zlib.crc32(body));
+      return Buffer.concat([len, body, crc]);
+    };
+    const ihdr = Buffer.alloc(13);
+    ihdr.writeUInt32BE(16000, 0);
+    ihdr.writeUInt32BE(16000, 4);
+    ihdr.set([8, 2, 0, 0, 0], 8);
+    const png = Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk('IHDR', ihdr), chunk('IDAT', zlib.deflateSync(Buffer.alloc(1000))), chunk('IEND', Buffer.alloc(0))]);
+    expect(await sharp(png).metadata()).toMatchObject({ width: 16000, height: 16000 });
+    const heic = await sampleHeif({ width: 16000, height: 16000 });
+    for (const [name, bytes] of [['huge.png', png], ['huge.heic', heic]] as const) {
+      await expect(svc.addPhotos(a.tailor, garmentA, [{ name, bytes: new Uint8Array(bytes) }], 10 * MB), name).rejects.toMatchObject({ status: 413, message: expect.stringMatching(/16000 × 16000 pixels/) });
+    }
+    // Just under the limit is still a photo (a 48 MP phone camera's, 8000 x 6000).
+    await expect(svc.checkPicture(new Uint8Array(await sampleHeif({ width: 8000, height: 6000 })), { mime: 'image/heic', ext: 'heic' }, 'big.heic')).resolves.toBeUndefined();
+    expect(svc.MAX_PIXELS).toBeGreaterThanOrEqual(48_000_000);
   });
 
   it('keep no EXIF, GPS or XMP in the stored photo, turned upright by its EXIF orientation first', async () => {

@@ -2,6 +2,7 @@
 import { pgTable, text, timestamp, uuid, index } from 'drizzle-orm/pg-core';
 import { createInsertSchema, createSelectSchema } from 'drizzle-zod';
 import { z } from 'zod';
+import { text as safeText } from '../../lib/text';
 import { organization } from './auth';
 
 /** Customers, each belonging to one shop. */
@@ -24,10 +25,11 @@ export const customerRow = createSelectSchema(customers);
 
 /** What a member types to add a customer (the shop comes from the session). */
 export const customerInput = createInsertSchema(customers, {
-  name: (s) => s.trim().min(1, 'Give the customer a name').max(120),
-  phone: (s) => s.trim().max(40),
+  // text(): drizzle-zod's own strings let a NUL or a lone surrogate through to PostgreSQL.
+  name: () => safeText().trim().min(1, 'Give the customer a name').max(120),
+  phone: () => safeText().trim().max(40),
   email: () => z.email('Enter an e-mail address like name@example.com').max(200),
-  notes: (s) => s.max(2000),
+  notes: () => safeText().max(2000),
 })
   .pick({ name: true, phone: true, email: true, notes: true })
   .partial({ phone: true, email: true, notes: true });

@@ -111,9 +111,17 @@ function metadataItems(b: Uint8Array, iinf: Box): Set<number> {
   return ids;
 }
 
-/** Zeroes the bytes of the given items where `iloc` puts them (in the file or in `idat`). */
-function blankItems(out: Uint8Array, iloc: Box, idat: Box | undefined, ids: Set<number>): number {
-  const r = new Reader(out, iloc.start, iloc.end);
+/** One item's place as `iloc` gives it: how it is built (0 file, 1 idat, 2 other items) and its extents. */
+interface ItemPlace {
+  id: number;
+  method: number;
+  base: number;
+  extents: { offset: number; length: number }[];
+}
+
+/** Every item's place, read from `iloc`. */
+function itemPlaces(b: Uint8Array, iloc: Box): ItemPlace[] {
+  const r = new Reader(b, iloc.start, iloc.end);
   const version = r.uint(1);
   r.skip(3);
   const sizes = r.uint(1);
@@ -121,18 +129,28 @@ function blankItems(out: Uint8Array, iloc: Box, idat: Box | undefined, ids: Set<
   const [offsetSize, lengthSize, baseSize] = [sizes >> 4, sizes & 15, more >> 4];
   const indexSize = version === 1 || version === 2 ? more & 15 : 0;
   const count = r.uint(version < 2 ? 2 : 4);
-  let blanked = 0;
+  const places: ItemPlace[] = [];
   for (let i = 0; i < count; i++) {
     const id = r.uint(version < 2 ? 2 : 4);
     const method = version === 1 || version === 2 ? r.uint(2) & 15 : 0;
     r.uint(2);
     const base = r.uint(baseSize);
-    const extents = r.uint(2);
-    for (let x = 0; x < extents; x++) {
+    const extents = [];
+    for (let x = r.uint(2); x > 0; x--) {
       r.uint(indexSize);
-      const offset = r.uint(offsetSize);
-      const length = r.uint(lengthSize);
-      if (!ids.has(id)) continue;
+      extents.push({ offset: r.uint(offsetSize), length: r.uint(lengthSize) });
+    }
+    places.push({ id, method, base, extents });
+  }
+  return places;
+}
+
+/** Zeroes the bytes of the given items where `iloc` puts them (in the file or in `idat`). */
+function blankItems(out: Uint8Array, iloc: Box, idat: Box | undefined, ids: Set<number>): number {
+  let blanked = 0;
+  for (const { id, method, base, extents } of itemPlaces(out, iloc)) {
+    if (!ids.has(id)) continue;
+    for (const { offset, length } of extents) {
       // Length 0 ("the rest of the container") and items built from other items are not ours to guess at.
       if (length === 0 || method > 1 || (method === 1 && !idat)) throw new Malformed('metadata item laid out in a way not handled');
       const from = method === 1 ? idat!.start + base + offset : base + offset;
@@ -143,6 +161,83 @@ function blankItems(out: Uint8Array, iloc: Box, idat: Box | undefined, ids: Set<
     }
   }
   return blanked;
+}
+
+// Item types that are a picture in a HEIC still: an HEVC image, or a grid/overlay/derived one.
+const IMAGE_ITEMS = new Set(['hvc1', 'grid', 'iovl', 'iden']);
+
+/** Every item's id and type, read from `iinf`. */
+function itemTypes(b: Uint8Array, iinf: Box): Map<number, string> {
+  const r = new Reader(b, iinf.start, iinf.end);
+  const version = r.uint(1);
+  r.skip(3);
+  r.uint(version === 0 ? 2 : 4);
+  const types = new Map<number, string>();
+  for (const infe of readBoxes(b, r.at, iinf.end)) {
+    if (infe.type !== 'infe') continue;
+    const e = new Reader(b, infe.start, infe.end);
+    const v = e.uint(1);
+    e.skip(3);
+    // Versions 0 and 1 name no item type: they predate images as items.
+    if (v < 2) continue;
+    const id = e.uint(v === 2 ? 2 : 4);
+    e.uint(2);
+    types.set(id, e.fourcc());
+  }
+  return types;
+}
+
+/** What reading a HEIC's boxes proved: it holds a picture, this wide and high (the largest `ispe`). */
+export interface HeifImage {
+  width: number;
+  height: number;
+}
+
+/**
+ * The picture a HEIC file declares, or null unless its boxes say it is one: `ftyp` first, a `meta`
+ * whose handler is 'pict', a primary item (`pitm`) that `iinf` types as an image and `iloc` places
+ * inside the file, and its size in an `ispe` property. A HEIC header before anything else is not.
+ */
+export function readHeifImage(bytes: Uint8Array): HeifImage | null {
+  try {
+    const top = readBoxes(bytes, 0, bytes.byteLength);
+    if (top[0]?.type !== 'ftyp') return null;
+    const meta = top.find((box) => box.type === 'meta');
+    if (!meta) return null;
+    const children = readBoxes(bytes, meta.start + 4, meta.end);
+    const find = (type: string) => children.find((c) => c.type === type);
+    const [hdlr, pitm, iinf, iloc, iprp] = ['hdlr', 'pitm', 'iinf', 'iloc', 'iprp'].map(find);
+    if (!hdlr || !pitm || !iinf || !iloc || !iprp) return null;
+    const h = new Reader(bytes, hdlr.start, hdlr.end);
+    h.skip(8); // version, flags, pre_defined
+    if (h.fourcc() !== 'pict') return null;
+    const p = new Reader(bytes, pitm.start, pitm.end);
+    const primary = p.uint(1) === 0 ? (p.skip(3), p.uint(2)) : (p.skip(3), p.uint(4));
+    if (!IMAGE_ITEMS.has(itemTypes(bytes, iinf).get(primary) ?? '')) return null;
+    const place = itemPlaces(bytes, iloc).find((pl) => pl.id === primary);
+    if (!place || place.extents.length === 0) return null;
+    const idat = find('idat');
+    for (const { offset, length } of place.extents) {
+      if (place.method > 1 || (place.method === 1 && !idat)) return null;
+      const from = place.method === 1 ? idat!.start + place.base + offset : place.base + offset;
+      const limit = place.method === 1 ? idat!.end : bytes.byteLength;
+      if (length === 0 || from + length > limit) return null;
+    }
+    const ipco = readBoxes(bytes, iprp.start, iprp.end).find((c) => c.type === 'ipco');
+    if (!ipco) return null;
+    let best: HeifImage | null = null;
+    for (const prop of readBoxes(bytes, ipco.start, ipco.end)) {
+      if (prop.type !== 'ispe') continue;
+      const r = new Reader(bytes, prop.start, prop.end);
+      r.skip(4);
+      const size = { width: r.uint(4), height: r.uint(4) };
+      if (!best || size.width * size.height > best.width * best.height) best = size;
+    }
+    return best && best.width > 0 && best.height > 0 ? best : null;
+  } catch (e) {
+    if (e instanceof Malformed || e instanceof RangeError) return null;
+    throw e;
+  }
 }
 
 /** What stripping a HEIF found: the copy with EXIF and XMP zeroed, and how many extents it blanked. */

@@ -11,6 +11,7 @@ import {
   validateTaperInput,
   type AllowanceErrorCode,
 } from '@/lib/allowance';
+import { readJson } from '@/lib/api';
 import { fieldMessages, planRequest, type PlanErrorBody, type PlanRequest, type PlanResponse } from '@/lib/plan-request';
 
 export const prerender = false;
@@ -50,12 +51,12 @@ function refused(req: PlanRequest, err: AllowanceError): Response {
 
 /** Plans a cuff, a plain hem or a taper check from the posted lengths. */
 export const POST: APIRoute = async ({ request }) => {
-  let body: unknown;
-  try {
-    body = await request.json();
-  } catch {
+  const read = await readJson(request);
+  if (read instanceof Response) {
+    if (read.status !== 400) return read;
     return json(400, { error: 'Send the plan as JSON, for example {"kind":"cuff","unit":"in","cuffDepth":"1 1/2"}.', fields: {} });
   }
+  const body = read.value;
 
   const parsed = planRequest.safeParse(body);
   if (!parsed.success) {

@@ -1,7 +1,7 @@
 // EXIF and XMP out of a HEIC without decoding it: the items' bytes are zeroed where iloc puts them,
 // everything else (sizes, offsets, the picture) stays byte for byte; what cannot be read is null.
 import { describe, expect, it } from 'vitest';
-import { stripHeifMetadata } from '@/lib/storage/heif-metadata';
+import { readHeifImage, stripHeifMetadata } from '@/lib/storage/heif-metadata';
 import { gpsExif, sampleHeif, SAMPLE_EXIF_MAKE, SAMPLE_PICTURE, SAMPLE_XMP_MARK } from './heif-sample';
 
 const has = (hay: Uint8Array, needle: string | Buffer) => Buffer.from(hay).includes(typeof needle === 'string' ? Buffer.from(needle, 'latin1') : needle);
@@ -43,5 +43,32 @@ describe('stripHeifMetadata', () => {
     const heif = await sampleHeif();
     expect(stripHeifMetadata(heif.subarray(0, heif.length - 10))).toBeNull();
     expect(stripHeifMetadata(new Uint8Array([0, 0, 0, 24, ...Buffer.from('ftypheic'), 0, 0, 0, 0, ...Buffer.from('mif1heic'), 7, 7, 7, 7, 7, 7, 7, 7, 7]))).toBeNull();
+  });
+});
+
+describe('readHeifImage', () => {
+  const u32 = (n: number) => Buffer.from([n >>> 24, (n >> 16) & 255, (n >> 8) & 255, n & 255]);
+  const ftyp = Buffer.concat([u32(24), Buffer.from('ftypheic', 'latin1'), u32(0), Buffer.from('mif1heic', 'latin1')]);
+
+  it('reads a well-formed still: a pict handler, a primary hvc1 item placed in the file, its ispe size', async () => {
+    expect(readHeifImage(await sampleHeif())).toEqual({ width: 4032, height: 3024 });
+    expect(readHeifImage(await sampleHeif({ width: 16000, height: 16000 }))).toEqual({ width: 16000, height: 16000 });
+  });
+
+  it('is null for a HEIC header followed by anything else: HTML, nothing, zeros', () => {
+    for (const tail of [Buffer.from('<html><script>alert(1)</script></html>'), Buffer.alloc(0), Buffer.alloc(64)]) {
+      expect(readHeifImage(Buffer.concat([ftyp, tail]))).toBeNull();
+    }
+  });
+
+  it('is null when a required part is missing or false: handler, primary item, its place, its size', async () => {
+    const good = await sampleHeif();
+    const swap = (from: string, to: string) => Buffer.from(good.toString('latin1').replace(from, to), 'latin1');
+    expect(readHeifImage(swap('pict', 'vide'))).toBeNull();
+    expect(readHeifImage(swap('hvc1', 'Exif'))).toBeNull();
+    expect(readHeifImage(swap('ispe', 'free'))).toBeNull();
+    expect(readHeifImage(swap('pitm', 'free'))).toBeNull();
+    // Cut off inside mdat: the primary item's bytes run past the end of the file.
+    expect(readHeifImage(good.subarray(0, good.length - 300))).toBeNull();
   });
 });

@@ -2,13 +2,20 @@
 // replayed events change nothing.
 import type { APIRoute } from 'astro';
 import { problem, json } from '@/lib/api';
+import { BodyRefused, JSON_BODY_LIMIT, readLimited } from '@/lib/body';
 import { receiveWebhook } from '@/services/payments';
 
 export const prerender = false;
 
 /** Verifies the event against the raw body and applies it once. */
 export const POST: APIRoute = async ({ request }) => {
-  const payload = await request.text();
+  let payload: string;
+  try {
+    payload = new TextDecoder().decode(await readLimited(request, JSON_BODY_LIMIT));
+  } catch (e) {
+    if (e instanceof BodyRefused) return problem(e.status, e.message);
+    throw e;
+  }
   const outcome = await receiveWebhook(payload, request.headers.get('stripe-signature'));
   return outcome.status === 200 ? json({ received: true, message: outcome.message }) : problem(outcome.status, outcome.message);
 };

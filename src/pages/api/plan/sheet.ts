@@ -6,7 +6,7 @@ import { SHEET_RENDER_TRACE } from 'astro:env/server';
 import { isAllowanceError } from '@/lib/allowance';
 import { anonymousSheetRefusal, inAnonymousQueue } from '@/lib/anonymous-sheets';
 import { clientOf } from '@/lib/client-address';
-import { tooMany } from '@/lib/api';
+import { readJson, tooMany } from '@/lib/api';
 import { fieldMessages } from '@/lib/plan-request';
 import { buildCutSheet, refusedFields } from '@/lib/cut-sheet/build';
 import { renderCutSheet } from '@/lib/cut-sheet/render';
@@ -36,12 +36,9 @@ export const POST: APIRoute = async (context) => {
 };
 
 async function answer(request: Request, render: Render): Promise<Response> {
-  let body: unknown;
-  try {
-    body = await request.json();
-  } catch {
-    return bad('Send the plan as JSON, for example {"kind":"cuff","unit":"in","cuffDepth":"1 1/2"}.', {});
-  }
+  const read = await readJson(request);
+  if (read instanceof Response) return read.status === 400 ? bad('Send the plan as JSON, for example {"kind":"cuff","unit":"in","cuffDepth":"1 1/2"}.', {}) : read;
+  const body = read.value;
   const parsed = sheetRequest.safeParse(body);
   if (!parsed.success) {
     const fields = fieldMessages(parsed.error);

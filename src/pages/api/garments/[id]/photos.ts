@@ -2,6 +2,7 @@
 import type { APIRoute } from 'astro';
 import { PHOTO_MAX_BYTES } from 'astro:env/server';
 import { guard, json, problem, refusal, run } from '@/lib/api';
+import { BodyRefused, readLimited } from '@/lib/body';
 import type { PhotoList } from '@/lib/photo-view';
 import { addPhotos, garmentInShop, listPhotos, UploadRefused, type Upload } from '@/services/photos';
 
@@ -19,23 +20,6 @@ export const GET: APIRoute = async ({ locals, params }) => {
   return run(async (): Promise<PhotoList> => ({ photos: await listPhotos(actor, params.id ?? ''), maxBytes: PHOTO_MAX_BYTES }));
 };
 
-/** The body, refused once it grows past the limit, so a huge upload is never held in memory whole. */
-function capped(request: Request, limit: number): Request | null {
-  const declared = Number(request.headers.get('content-length') ?? '0');
-  if (declared > limit || !request.body) return declared > limit ? null : request;
-  let seen = 0;
-  const body = request.body.pipeThrough(
-    new TransformStream<Uint8Array, Uint8Array>({
-      transform(chunk, controller) {
-        seen += chunk.byteLength;
-        if (seen > limit) controller.error(new RangeError('too large'));
-        else controller.enqueue(chunk);
-      },
-    }),
-  );
-  return new Request(request.url, { method: 'POST', headers: request.headers, body, duplex: 'half' } as RequestInit);
-}
-
 /** Adds the photos in the form's `photos` fields; every file is checked before any is kept. */
 export const POST: APIRoute = async ({ locals, params, request }) => {
   const actor = guard(locals, ['photos', 'upload']);
@@ -47,13 +31,18 @@ export const POST: APIRoute = async ({ locals, params, request }) => {
     return refusal(e);
   }
   const tooBig = `An upload may carry at most ${MAX_FILES} photos of ${Math.floor(PHOTO_MAX_BYTES / (1024 * 1024))} MB each.`;
-  const limited = capped(request, PHOTO_MAX_BYTES * MAX_FILES + FORM_SLACK);
-  if (!limited) return problem(413, tooBig);
+  // Counted as it arrives (never held past the limit) and given up when it stops arriving.
+  let body: Uint8Array;
+  try {
+    body = await readLimited(request, PHOTO_MAX_BYTES * MAX_FILES + FORM_SLACK);
+  } catch (e) {
+    if (e instanceof BodyRefused) return problem(e.status, e.status === 413 ? tooBig : e.message);
+    throw e;
+  }
   let form: FormData;
   try {
-    form = await limited.formData();
-  } catch (e) {
-    if (e instanceof RangeError || (e instanceof TypeError && e.cause instanceof RangeError)) return problem(413, tooBig);
+    form = await new Response(body as BodyInit, { headers: { 'content-type': request.headers.get('content-type') ?? '' } }).formData();
+  } catch {
     return problem(400, 'Send the photos as a multipart form with one or more "photos" fields.');
   }
   const entries = form.getAll('photos').filter((v): v is File => typeof v !== 'string');
