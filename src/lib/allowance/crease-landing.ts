@@ -78,7 +78,7 @@ export function creaseLanding(crease: Fraction, ctx: CreaseContext): CreaseLandi
     return land(
       'cuff-face',
       h,
-      `The old crease will show on the face of the cuff, ${h.text} above the finished edge. Press or steam it out, or change the cuff depth so it falls on a fold. ${TELL}`,
+      `The old crease will show on the face of the cuff, ${h.text} above the finished edge. Press it out, or change the cuff depth so it falls on a fold. ${TELL}`,
     );
   }
   const h = len(crease.sub(lines.innerFold));

@@ -303,7 +303,7 @@ export function cuffSteps(unit: Unit, turnUnder: string, taperStep: string | nul
     `Turn under ${turnUnder} at the raw edge and stitch it with a long stitch (${STITCH.long}).`,
     'Turn the bottom up to the outside at line 1: lines 1 and 3 meet at the bottom, line 2 becomes the cuff top.',
     'Press with a cloth on the outside, so the cloth takes no shine; wool takes steam.',
-    `Tack at the inseam and the outseam, ${tack.below} below the cuff top and about ${tack.wide} wide: short stitch (${STITCH.short}), back-stitched. Leave the top edge free.`,
+    `Tack at the inseam and outseam, ${tack.below} below the cuff top and about ${tack.wide} wide: short stitch (${STITCH.short}), back-stitched. Leave the top free.`,
   ];
 }
 

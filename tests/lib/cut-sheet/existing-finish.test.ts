@@ -139,9 +139,13 @@ describe('the old-crease note agrees with the let-down step', () => {
 });
 
 describe('the fullest sheet with old cuffs', () => {
-  it('fits on one A4 page, down to the last caution', async () => {
+  // With the let-out named from the finished edge, the shorter-third-section offer and the word to
+  // the customer, this sheet no longer fits one A4 page: the bench steps go whole onto page 2.
+  it('on A4, the figures and the 1:1 guide on page 1, the bench steps whole on page 2, down to the last caution', async () => {
     const file = pdfFile(await renderCutSheet({ ...sheet(busyLegs), pageSize: 'A4', existingFinish: 'cuff' }));
-    expect(pageInfo(file)).toEqual({ pages: 1, width: 595.28, height: 841.89 });
+    expect(pageInfo(file)).toEqual({ pages: 2, width: 595.28, height: 841.89 });
+    expect(flatText(file, 1)).toContain('CHALK GUIDE 1:1');
+    expect(flatText(file, 2)).toMatch(/^\s*AT THE BENCH/);
     const text = flatText(file);
     expect(text).toContain(LET_DOWN_OLD_CUFF);
     // The right leg's old fold (2 1/2 in below the mark, 1 3/4 in cuff: lines at 1 3/4 and 3 1/2 in)
