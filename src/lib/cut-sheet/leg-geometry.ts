@@ -57,7 +57,11 @@ export function legGeometry(leg: LegSheet, width: number, maxHeight: number): Le
   const spanMm = above + below;
   const drawW = width - LABEL_ROOM;
   const drawH = maxHeight - TOP_ROOM - FOOT_ROOM;
-  const scale = SCALES.find((k) => (widest / k) * PT_PER_MM <= drawW && (spanMm / k) * PT_PER_MM <= drawH) ?? 16;
+  // Past the usual scales (a very long cloth below the mark) the smallest whole scale that fits,
+  // so the drawing never runs out of its box onto the steps below.
+  const scale =
+    SCALES.find((k) => (widest / k) * PT_PER_MM <= drawW && (spanMm / k) * PT_PER_MM <= drawH) ??
+    Math.max(16, Math.ceil(Math.max((widest * PT_PER_MM) / drawW, (spanMm * PT_PER_MM) / drawH)));
   const k = PT_PER_MM / scale;
 
   const cx = drawW / 2;

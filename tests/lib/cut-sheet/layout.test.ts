@@ -42,13 +42,19 @@ describe('no two runs of text touch on a line', () => {
     });
   }
 
+  it('a 20 mm cuff with 3228.6 mm of cloth on Letter: the leg drawing scales past 1:16 and stays off the steps', async () => {
+    const pdf = await renderCutSheet({ ...buildCutSheet(SHOP, [order({ scale: ['in', 8], finish: 'cuff', depthMm: 20, availableMm: 3228.6, pageSize: 'LETTER' })]), pageSize: 'LETTER' });
+    expect(describeCrowded(pdf)).toEqual([]);
+  });
+
   it('over generated sheets: cuffs and hems, every unit and precision, both papers, figures up to 200 in', async () => {
     await fc.assert(
       fc.asyncProperty(leg, async (o) => {
         const pdf = await renderCutSheet({ ...buildCutSheet(SHOP, [order(o)]), pageSize: o.pageSize });
         expect(describeCrowded(pdf)).toEqual([]);
       }),
-      { numRuns: 25 },
+      // A fixed seed keeps CI steady; the case a random run found is kept as its own example below.
+      { numRuns: 25, seed: 20261203 },
     );
   });
 });
