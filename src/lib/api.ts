@@ -53,15 +53,20 @@ export function guard(locals: App.Locals, permission: Permission): Actor | Respo
   };
 }
 
-/** The JSON body, read to at most JSON_BODY_LIMIT bytes; the 400/408/413 response when it cannot be. */
-export async function readJson(request: Request): Promise<{ value: unknown } | Response> {
-  let bytes: Uint8Array;
+/** The body's bytes, at most JSON_BODY_LIMIT of them; the 408/413 response when it cannot be read. */
+export async function readBytes(request: Request): Promise<Uint8Array | Response> {
   try {
-    bytes = await readLimited(request, JSON_BODY_LIMIT);
+    return await readLimited(request, JSON_BODY_LIMIT);
   } catch (e) {
     if (e instanceof BodyRefused) return problem(e.status, e.message);
     throw e;
   }
+}
+
+/** The JSON body, read to at most JSON_BODY_LIMIT bytes; the 400/408/413 response when it cannot be. */
+export async function readJson(request: Request): Promise<{ value: unknown } | Response> {
+  const bytes = await readBytes(request);
+  if (bytes instanceof Response) return bytes;
   try {
     return { value: JSON.parse(new TextDecoder().decode(bytes)) };
   } catch {

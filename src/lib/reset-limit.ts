@@ -4,7 +4,7 @@
 import { requestEmail } from './request-email';
 import type { Rule } from './rate-limit-rules';
 import { tooMany } from './api';
-import { hitLimits, limitKey, unhitLimits, type Limit } from '@/services/rate-limits';
+import { hitLimits, limitKey, runCounted, unhitLimits, type Limit } from '@/services/rate-limits';
 
 const HOUR = 3_600_000;
 
@@ -29,13 +29,7 @@ export async function limitedResetRequest(request: Request, address: string, han
     );
   }
   const keys = limits.map((l) => l.key);
-  let response: Response;
-  try {
-    response = await handler(request);
-  } catch (e) {
-    await unhitLimits(keys);
-    throw e;
-  }
+  const response = await runCounted(keys, () => handler(request));
   // A refused body (bad address, 400) sent no mail; only the requests better-auth took count.
   if (response.status !== 200) await unhitLimits(keys);
   return response;

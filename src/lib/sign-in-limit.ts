@@ -7,7 +7,7 @@
 import { tooMany } from './api';
 import { requestEmail } from './request-email';
 import type { Rule } from './rate-limit-rules';
-import { clearLimits, hitLimits, limitKey, unhitLimits, type Limit } from '@/services/rate-limits';
+import { clearLimits, hitLimits, limitKey, runCounted, unhitLimits, type Limit } from '@/services/rate-limits';
 
 const MINUTE = 60_000;
 
@@ -49,13 +49,7 @@ export async function limitedSignIn(request: Request, address: string, handler: 
     return tooMany(`Too many failed sign-ins for ${REFUSED[kind] ?? 'this account'}. Try again in ${minutes(hit.retryAfter)}.`, hit.retryAfter);
   }
   const keys = limits.map((l) => l.key);
-  let response: Response;
-  try {
-    response = await handler(request);
-  } catch (e) {
-    await unhitLimits(keys);
-    throw e;
-  }
+  const response = await runCounted(keys, () => handler(request));
   if (response.status === 200) {
     // The right password ends this address's streak on the account; the other counts only lose this attempt.
     const pair = limits.filter((l) => l.key.startsWith('signin:pair:')).map((l) => l.key);

@@ -78,6 +78,16 @@ export async function unhitLimits(keys: string[], database: Db = db): Promise<vo
     .where(inArray(rateLimits.key, keys));
 }
 
+/** Runs a counted request; the counts are given back if it throws, so a crash costs no one a try. */
+export async function runCounted(keys: string[], run: () => Promise<Response>): Promise<Response> {
+  try {
+    return await run();
+  } catch (e) {
+    await unhitLimits(keys);
+    throw e;
+  }
+}
+
 /** Forgets the keys' counts altogether (a correct password ends its streak of failures). */
 export async function clearLimits(keys: string[], database: Db = db): Promise<void> {
   if (keys.length === 0) return;

@@ -1,8 +1,8 @@
 // better-auth's own endpoints (/api/auth/*), with failed sign-ins and reset mail limited.
 import type { APIRoute } from 'astro';
 import { auth } from '@/lib/auth';
-import { problem } from '@/lib/api';
-import { BodyRefused, JSON_BODY_LIMIT, readLimited, withBody } from '@/lib/body';
+import { problem, readBytes } from '@/lib/api';
+import { withBody } from '@/lib/body';
 import { clientOf } from '@/lib/client-address';
 import { limitedResetRequest } from '@/lib/reset-limit';
 import { limitedSignIn } from '@/lib/sign-in-limit';
@@ -34,13 +34,8 @@ export const ALL: APIRoute = async (context) => {
   // better-auth stores what it is sent: a NUL or a lone surrogate would fail its write with a 500.
   let fields: Record<string, unknown> = Object.fromEntries(new URL(request.url).searchParams);
   if (request.method !== 'GET' && request.method !== 'HEAD') {
-    let bytes: Uint8Array;
-    try {
-      bytes = await readLimited(request, JSON_BODY_LIMIT);
-    } catch (e) {
-      if (e instanceof BodyRefused) return problem(e.status, e.message);
-      throw e;
-    }
+    const bytes = await readBytes(request);
+    if (bytes instanceof Response) return bytes;
     capped = withBody(request, bytes);
     fields = { ...fields, ...parsedBody(bytes, request.headers.get('content-type')) };
   }
