@@ -96,7 +96,8 @@ describe('update-user', () => {
     ['null', null],
     ['empty', ''],
     ['only spaces', '   '],
-    ['100,000 characters', 'n'.repeat(100_000)],
+    // 10,000 rather than 100,000: a body over 64 KB is refused whole (413) before any rule reads it.
+    ['10,000 characters', 'n'.repeat(10_000)],
     ['a number', 42],
   ];
   for (const [what, name] of bad) {
