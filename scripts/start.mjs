@@ -15,6 +15,8 @@ if (problem) {
 }
 const serverEnv = {
   ...process.env,
+  // React's production build and the same mode the bench measures (STACK.md pitfall 17).
+  NODE_ENV: 'production',
   PORT: String(env.PORT),
   HOST: env.HOST,
   BETTER_AUTH_URL: env.BETTER_AUTH_URL || `http://localhost:${env.PORT}`,
