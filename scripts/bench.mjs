@@ -1,11 +1,11 @@
-// npm run bench: every benchmark in bench/, one after another, on this machine as it is.
+// npm run bench: every benchmark in benchmarks/, one after another, on this machine as it is.
 import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 
 const runs = [
-  ['engine: plans per second', ['node_modules/.bin/vite-node', 'bench/engine.ts']],
-  ['pages: JavaScript bytes sent', ['node', 'bench/page-bytes.mjs']],
-  ['cut sheet: react-pdf vs Chromium print', ['node_modules/.bin/vite-node', 'bench/cut-sheet.ts']],
+  ['engine: plans per second', ['node_modules/.bin/vite-node', 'benchmarks/engine.ts']],
+  ['pages: JavaScript bytes sent', ['node', 'benchmarks/page-bytes.mjs']],
+  ['cut sheet: react-pdf vs Chromium print', ['node_modules/.bin/vite-node', 'benchmarks/cut-sheet.ts']],
 ];
 let failed = false;
 for (const [name, [cmd, file, ...rest]] of runs) {

@@ -1,5 +1,5 @@
 // Engine inputs → a cut sheet's data. The public calculator and a saved garment both come through
-// here. Relative imports keep it runnable by plain vite-node in bench/ (no @ alias there).
+// here. Relative imports keep it runnable by plain vite-node in benchmarks/ (no @ alias there).
 import { AllowanceError, checkHemTaper, checkTaper, isAllowanceError, planCuff, planHem, validateCuffInput, validateHemInput, validateHemTaperInput, validateTaperInput } from '../allowance/index';
 import type { CuffInput, HemInput, LengthInput } from '../allowance/types';
 import type { CutSheetData, LegSheet, Side } from './types';

@@ -1,5 +1,5 @@
 // The finished length pinned at the fitting, as the sheet prints it: as typed, and what it reads as.
-// Relative imports, like the rest of the sheet, so bench/ can run it with plain vite-node.
+// Relative imports, like the rest of the sheet, so benchmarks/ can run it with plain vite-node.
 import { readLengthTerms } from '../allowance/length-terms';
 import { readLength, typedWithUnit } from '../length-reading';
 import type { Precision, Unit } from '../allowance/types';

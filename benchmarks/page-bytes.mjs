@@ -1,5 +1,5 @@
 // Measures the JavaScript each page sends: loads it in headless Chromium from a built server and
-// sums the gzip size of every script response. Prints a table and writes bench-results/pages.json.
+// sums the gzip size of every script response. Prints a table and writes benchmark-results/pages.json.
 import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync, mkdirSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -91,6 +91,6 @@ if (import.meta.url === `file://${process.argv[1]}`) {
   for (const r of rows) {
     console.log(`  ${r.path.padEnd(28)} ${String(r.files).padStart(3)} files  ${(r.gzipBytes / 1024).toFixed(1).padStart(7)} KiB gzip  (${(r.rawBytes / 1024).toFixed(1)} KiB raw)`);
   }
-  mkdirSync('bench-results', { recursive: true });
-  writeFileSync('bench-results/pages.json', JSON.stringify(rows, null, 2));
+  mkdirSync('benchmark-results', { recursive: true });
+  writeFileSync('benchmark-results/pages.json', JSON.stringify(rows, null, 2));
 }

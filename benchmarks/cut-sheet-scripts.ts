@@ -1,5 +1,5 @@
 // Warm cut sheets with names in other scripts, beside the usual Latin-only sheet (a measurement,
-// not a test): NODE_ENV=production node_modules/.bin/vite-node bench/cut-sheet-scripts.ts
+// not a test): NODE_ENV=production node_modules/.bin/vite-node benchmarks/cut-sheet-scripts.ts
 // Prints CPU per sheet (min and median over chunks of 10 distinct sheets, the kinds interleaved
 // so that load on the machine falls on each alike) and the PDF's size. OUT=file writes a Latin
 // sheet, to compare two versions byte for byte. Invented names.

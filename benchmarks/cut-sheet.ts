@@ -1,6 +1,6 @@
 // Cut sheet speed: a warm single sheet, a 100-sheet batch, and the same sheet printed to PDF by
 // headless Chromium, in the same run. Goal: warm ≤ 40 ms and ≥ 10× faster than the browser.
-// Run: node_modules/.bin/vite-node bench/cut-sheet.ts
+// Run: node_modules/.bin/vite-node benchmarks/cut-sheet.ts
 import { spawnSync } from 'node:child_process';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { loadavg } from 'node:os';
@@ -36,7 +36,7 @@ async function time<T>(fn: () => Promise<T>): Promise<[number, T]> {
   return [performance.now() - t, out];
 }
 
-// Every benchmarked sheet is a different garment (bench/cut-sheet-sample.ts): nothing can answer
+// Every benchmarked sheet is a different garment (benchmarks/cut-sheet-sample.ts): nothing can answer
 // a render from a cache of whole sheets. Warm-up 0–39, singles 100–199 and batches 200–499 never
 // repeat a plan (the sample repeats after 533), so the figures on each are new to this process.
 const sheet = sampleSheet;
@@ -107,5 +107,5 @@ const result = {
   goals: { warmSingleAtMost40Ms: warmMs <= 40, atLeast10xFasterThanChromium: browserMs / warmMs >= 10, warmSingleCpuAtMost40Ms: warmCpuMs <= 40 },
 };
 console.log(JSON.stringify(result, null, 2));
-mkdirSync('bench-results', { recursive: true });
-writeFileSync('bench-results/cut-sheet.json', `${JSON.stringify(result, null, 2)}\n`);
+mkdirSync('benchmark-results', { recursive: true });
+writeFileSync('benchmark-results/cut-sheet.json', `${JSON.stringify(result, null, 2)}\n`);

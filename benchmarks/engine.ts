@@ -1,5 +1,5 @@
 // Plans per second for the allowance engine, on one core of this machine as it is.
-// Run: node_modules/.bin/vite-node bench/engine.ts   (results also in bench-results/engine.json)
+// Run: node_modules/.bin/vite-node benchmarks/engine.ts   (results also in benchmark-results/engine.json)
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { cpus, loadavg } from 'node:os';
 import { checkTaper, type CuffInput, type HemInput, planCuff, planHem, type TaperInput } from '../src/lib/allowance/index';
@@ -118,9 +118,9 @@ console.log(`slowest everyday cuff case: ${slowest.name}, ${fmt(slowest.plansPer
 const load1 = loadavg()[0]!;
 console.log(`load average ${load0.toFixed(2)} → ${load1.toFixed(2)} (other work on the machine lowers these numbers)`);
 
-mkdirSync('bench-results', { recursive: true });
+mkdirSync('benchmark-results', { recursive: true });
 writeFileSync(
-  'bench-results/engine.json',
+  'benchmark-results/engine.json',
   `${JSON.stringify({ date: new Date().toISOString(), node: process.version, cores: cpus().length, loadAverage: [load0, load1], goal: GOAL, goalMet: met, judgedBy: 'plans per CPU-second, depth-only cuff plans', runs: RUNS, runMs: RUN_MS, results }, null, 2)}\n`,
 );
-console.log('written: bench-results/engine.json');
+console.log('written: benchmark-results/engine.json');

@@ -2,7 +2,7 @@
 // server in production mode: phases alternate A (member alone) and B (four strangers printing
 // without pause, each sheet from a new address so the per-address limit stays out of the way),
 // and the member's GET /api/garments is timed in each. Run it alone (not through npm run bench):
-//   node bench/member-beside-strangers.mjs [distDir]      ROUNDS=4 GETS=40 THINK_MS=50
+//   node benchmarks/member-beside-strangers.mjs [distDir]      ROUNDS=4 GETS=40 THINK_MS=50
 import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';

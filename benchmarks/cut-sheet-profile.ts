@@ -1,5 +1,5 @@
 // Warm cut-sheet renders in a loop, for a CPU profile or a quick A/B on a busy machine:
-// NODE_ENV=production node --cpu-prof node_modules/vite-node/vite-node.mjs bench/cut-sheet-profile.ts
+// NODE_ENV=production node --cpu-prof node_modules/vite-node/vite-node.mjs benchmarks/cut-sheet-profile.ts
 // Prints CPU per sheet over chunks of 10 distinct sheets: the lowest chunk is the least disturbed.
 import { writeFileSync } from 'node:fs';
 import { sampleSheet } from './cut-sheet-sample';
@@ -12,7 +12,7 @@ if (process.env.OUT) writeFileSync(process.env.OUT, await renderCutSheet(sheet(4
 for (let i = 0; i < 40; i++) await renderCutSheet(sheet(i));
 const cpu: number[] = [];
 for (let c = 0; c < chunks; c++) {
-  // Planned before the clock starts, as in bench/cut-sheet.ts: only the render is timed.
+  // Planned before the clock starts, as in benchmarks/cut-sheet.ts: only the render is timed.
   const list = Array.from({ length: 10 }, (_, i) => sheet(100 + c * 10 + i));
   const start = process.cpuUsage();
   for (const data of list) await renderCutSheet(data);
