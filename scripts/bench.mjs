@@ -1,17 +1,36 @@
-// npm run bench: every benchmark in benchmarks/, one after another, on this machine as it is.
+// npm run bench: every benchmark in benchmarks/, one after another, on this machine as it is; then
+// every figure they wrote to benchmark-results/ beside its goal (median and range over the runs).
 import { spawnSync } from 'node:child_process';
-import { existsSync } from 'node:fs';
+import { existsSync, rmSync } from 'node:fs';
+import { formatFigure, readAllFigures, RESULTS_DIR } from '../benchmarks/lib/figures.mjs';
 
+const vn = 'node_modules/.bin/vite-node';
 const runs = [
-  ['engine: plans per second', ['node_modules/.bin/vite-node', 'benchmarks/engine.ts']],
+  ['engine: plans per second', [vn, 'benchmarks/engine.ts']],
   ['pages: JavaScript bytes sent', ['node', 'benchmarks/page-bytes.mjs']],
-  ['cut sheet: react-pdf vs Chromium print', ['node_modules/.bin/vite-node', 'benchmarks/cut-sheet.ts']],
+  ['cut sheet: react-pdf vs Chromium print', [vn, 'benchmarks/cut-sheet.ts']],
 ];
+const only = process.argv.slice(2);
+rmSync(RESULTS_DIR, { recursive: true, force: true });
 let failed = false;
 for (const [name, [cmd, file, ...rest]] of runs) {
   if (!existsSync(file)) continue;
+  if (only.length && !only.some((o) => file.includes(o))) continue;
   console.log(`\n=== ${name} ===`);
-  const r = spawnSync(cmd, [file, ...rest], { stdio: 'inherit' });
+  const r = spawnSync(cmd, [file, ...rest], { stdio: 'inherit', env: { ...process.env, NODE_ENV: 'production' } });
   if (r.status !== 0) failed = true;
+}
+const all = readAllFigures();
+if (all.length) {
+  console.log('\n=== every figure beside its goal (median, range) ===');
+  let unmet = 0;
+  for (const b of all) {
+    console.log(`\n${b.bench}`);
+    for (const f of b.figures) {
+      console.log(`  ${formatFigure(f)}`);
+      if (f.met === false) unmet += 1;
+    }
+  }
+  console.log(`\n${unmet === 0 ? 'every goal met' : `${unmet} goal(s) not met`} on this machine (${new Date().toISOString()})`);
 }
 process.exit(failed ? 1 : 0);
