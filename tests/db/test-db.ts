@@ -1,11 +1,11 @@
 // A fresh, migrated database for one test file: PGlite from the snapshot, or a new database on
 // the PostgreSQL server at TEST_DATABASE_URL (CI). Use it through vi.mock('@/db', …).
-import { readFileSync } from 'node:fs';
 import { randomUUID } from 'node:crypto';
 import { PGlite } from '@electric-sql/pglite';
 import { inject } from 'vitest';
 import { openDatabase, type DbHandle } from '@/db/open';
 import { createServerDatabase, dropServerDatabase } from './server-database';
+import { migratedSnapshot } from './snapshot';
 
 /** Opens this file's database; close() drops it again on a server. */
 export async function openTestDb(): Promise<DbHandle> {
@@ -22,7 +22,7 @@ export async function openTestDb(): Promise<DbHandle> {
       },
     };
   }
-  const snapshot = readFileSync(inject('pgliteSnapshot'));
+  const snapshot = await migratedSnapshot(inject('pgliteSnapshotDir'));
   const pglite = new PGlite({ loadDataDir: new Blob([snapshot]) });
   const handle = openDatabase({ pglite });
   await handle.migrate();
