@@ -1,96 +1,128 @@
-// Measures the JavaScript each page sends: loads it in headless Chromium from a built server and
-// sums the gzip size of every script response. Prints a table and writes benchmark-results/pages.json.
-import { spawn } from 'node:child_process';
-import { mkdtempSync, rmSync, mkdirSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+// Measures the JavaScript each page sends, from the app as `npm start` runs it (startShipped):
+// each page is loaded several times in headless Chromium, each load in a fresh context (cold
+// cache). Per load it sums, over every script response: the gzip size of the body (level 9, what
+// the page would weigh if served gzipped), the bytes Chromium received for it (the transfer size,
+// whatever encoding the server chose), and the bytes the server sends for the same URLs when asked
+// with Accept-Encoding "br, gzip" and "gzip" (Chromium asks for br only over HTTPS). Writes its
+// figures to benchmark-results/pages.json through benchmarks/lib/figures.mjs.
+import http from 'node:http';
 import { gzipSync } from 'node:zlib';
 import { chromium } from 'playwright-core';
-import { buildIfNeeded } from '../scripts/build-if-needed.mjs';
 import { ensureChromium } from '../scripts/chromium.mjs';
+import { figure, writeFigures } from './lib/figures.mjs';
+import { startShipped } from './lib/shipped-server.mjs';
 
-/** Pages to weigh: path, and whether a demo sign-in is needed first. */
+/** Pages to weigh: path, a demo sign-in when needed first, and the goal (KiB of gzip) if the issue sets one. */
 export const PAGES = [
-  { path: '/', signIn: null },
-  { path: '/queue', signIn: signInAs('tailor@pinmark.test') },
-  { path: '/tickets/new', signIn: signInAs('counter@pinmark.test') },
-  { path: '/presets', signIn: signInAs('lead@pinmark.test') },
+  { path: '/', signIn: null, goalKiB: 100 },
+  { path: '/queue', signIn: 'tailor@pinmark.test', goalKiB: null },
+  { path: '/tickets/new', signIn: 'counter@pinmark.test', goalKiB: null },
+  { path: '/presets', signIn: 'lead@pinmark.test', goalKiB: null },
 ];
 
+/** How many cold loads of each page (PAGE_LOADS, default 5). */
+const LOADS = Number(process.env.PAGE_LOADS || 5);
+
 /** Signs the tab's context in as a demo account (every demo account shares one password). */
-function signInAs(email) {
-  return async (tab) => {
-    const res = await tab.context().request.post(`${BASE}/api/auth/sign-in/email`, { data: { email, password: 'cuffwright-demo' }, headers: { origin: BASE } });
-    if (!res.ok()) throw new Error(`sign-in of ${email} answered ${res.status()}`);
-  };
+async function signInAs(tab, base, email) {
+  const res = await tab.context().request.post(`${base}/api/auth/sign-in/email`, { data: { email, password: 'cuffwright-demo' }, headers: { origin: base } });
+  if (!res.ok()) throw new Error(`sign-in of ${email} answered ${res.status()}`);
 }
 
-const PORT = Number(process.env.BENCH_PORT || 4399);
-const BASE = `http://localhost:${PORT}`;
-
-async function waitFor(url, ms) {
-  const until = Date.now() + ms;
-  while (Date.now() < until) {
-    try {
-      if ((await fetch(url)).status < 500) return;
-    } catch {}
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`no answer from ${url}`);
-}
-
-/** Weighs each page's scripts; resolves to rows { path, files, rawBytes, gzipBytes }. */
-export async function weighPages(pages = PAGES) {
-  buildIfNeeded('.bench-dist');
-  const dataDir = mkdtempSync(join(tmpdir(), 'cuffwright-bench-'));
-  const server = spawn('node', ['.bench-dist/server/entry.mjs'], {
-    env: { ...process.env, PORT: String(PORT), HOST: '127.0.0.1', DATA_DIR: dataDir, BETTER_AUTH_URL: BASE },
-    stdio: 'ignore',
+/** The bytes of a response body as sent (not decoded) for one Accept-Encoding, and the encoding the server chose. */
+function wireBytes(url, acceptEncoding, cookie) {
+  return new Promise((resolve, reject) => {
+    const req = http.get(url, { headers: { 'accept-encoding': acceptEncoding, ...(cookie ? { cookie } : {}) } }, (res) => {
+      let n = 0;
+      res.on('data', (chunk) => (n += chunk.length));
+      res.on('end', () => resolve({ bytes: n, encoding: res.headers['content-encoding'] ?? 'identity', status: res.statusCode }));
+      res.on('error', reject);
+    });
+    req.on('error', reject);
   });
+}
+
+/** One cold load of a page: its scripts, and their sizes summed four ways. */
+async function loadOnce(browser, base, page) {
+  const context = await browser.newContext({ baseURL: base });
+  const tab = await context.newPage();
+  if (page.signIn) await signInAs(tab, base, page.signIn);
+  const scripts = new Map();
+  tab.on('requestfinished', (req) => {
+    const url = req.url();
+    if (req.resourceType() !== 'script' && !url.endsWith('.js')) return;
+    scripts.set(
+      url,
+      (async () => {
+        const res = await req.response();
+        const [body, sizes, headers] = await Promise.all([res.body(), req.sizes(), res.allHeaders()]);
+        return { body, received: sizes.responseBodySize, encoding: headers['content-encoding'] ?? 'identity', asked: (await req.allHeaders())['accept-encoding'] ?? '' };
+      })(),
+    );
+  });
+  await tab.goto(page.path, { waitUntil: 'networkidle' });
+  const cookie = (await context.cookies()).map((c) => `${c.name}=${c.value}`).join('; ');
+  const load = { files: [], raw: 0, gzip: 0, chromium: 0, br: 0, gzipWire: 0 };
+  for (const [url, pending] of scripts) {
+    const s = await pending;
+    const gz = gzipSync(s.body, { level: 9 }).length;
+    const [br, gzw] = [await wireBytes(url, 'br, gzip', cookie), await wireBytes(url, 'gzip', cookie)];
+    load.files.push({ path: new URL(url).pathname, raw: s.body.length, gzip: gz, chromium: s.received, chromiumEncoding: s.encoding, chromiumAsked: s.asked, br: br.bytes, brEncoding: br.encoding, gzipWire: gzw.bytes, gzipEncoding: gzw.encoding });
+    load.raw += s.body.length;
+    load.gzip += gz;
+    load.chromium += s.received;
+    load.br += br.bytes;
+    load.gzipWire += gzw.bytes;
+  }
+  await context.close();
+  return load;
+}
+
+/** Loads every page LOADS times (pages alternated, each load cold); resolves to { page, loads }[] . */
+export async function weighPages(pages = PAGES, loads = LOADS) {
+  const app = await startShipped();
   const browser = await chromium.launch({
     executablePath: ensureChromium(),
     args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
       '--disable-background-networking', '--disable-component-update', '--disable-sync'],
   });
-  const rows = [];
+  const out = pages.map((page) => ({ page, loads: [] }));
   try {
-    await waitFor(`${BASE}/`, 60_000);
-    for (const page of pages) {
-      const context = await browser.newContext({ baseURL: BASE });
-      const tab = await context.newPage();
-      if (page.signIn) await page.signIn(tab);
-      const scripts = new Map();
-      tab.on('response', async (res) => {
-        const url = res.url();
-        if (res.request().resourceType() !== 'script' && !url.endsWith('.js')) return;
-        scripts.set(url, res.body().catch(() => Buffer.alloc(0)));
-      });
-      await tab.goto(page.path, { waitUntil: 'networkidle' });
-      let raw = 0;
-      let gz = 0;
-      for (const body of scripts.values()) {
-        const buf = await body;
-        raw += buf.length;
-        gz += gzipSync(buf, { level: 9 }).length;
-      }
-      rows.push({ path: page.path, files: scripts.size, rawBytes: raw, gzipBytes: gz });
-      await context.close();
+    for (let i = 0; i < loads; i++) {
+      for (const row of out) row.loads.push(await loadOnce(browser, app.base, row.page));
     }
   } finally {
     await browser.close();
-    server.kill('SIGTERM');
-    await new Promise((r) => setTimeout(r, 300));
-    rmSync(dataDir, { recursive: true, force: true });
+    await app.stop();
   }
-  return rows;
+  return out;
+}
+
+const kib = (n) => n / 1024;
+
+/** The figures for one page's loads. */
+export function pageFigures({ page, loads }) {
+  const p = page.path;
+  const files = `${loads[0].files.length} files`;
+  return [
+    figure(`${p} JS sent (gzip)`, 'KiB', loads.map((l) => kib(l.gzip)), page.goalKiB == null ? null : { max: page.goalKiB }, `${files}, gzip -9 of each script body`),
+    figure(`${p} JS on the wire to Chromium`, 'KiB', loads.map((l) => kib(l.chromium)), null, `transfer size; Chromium asked "${loads[0].files[0]?.chromiumAsked ?? ''}"`),
+    figure(`${p} JS on the wire, Accept-Encoding br`, 'KiB', loads.map((l) => kib(l.br)), null, 'bytes of each script response as sent'),
+    figure(`${p} JS on the wire, Accept-Encoding gzip`, 'KiB', loads.map((l) => kib(l.gzipWire)), null, 'bytes of each script response as sent'),
+    figure(`${p} JS decoded`, 'KiB', loads.map((l) => kib(l.raw))),
+  ];
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) {
   const rows = await weighPages();
-  console.log('\nJavaScript sent per page (gzip, level 9):');
-  for (const r of rows) {
-    console.log(`  ${r.path.padEnd(28)} ${String(r.files).padStart(3)} files  ${(r.gzipBytes / 1024).toFixed(1).padStart(7)} KiB gzip  (${(r.rawBytes / 1024).toFixed(1)} KiB raw)`);
+  const figures = rows.flatMap(pageFigures);
+  console.log(`\nJavaScript sent per page (${LOADS} cold loads each; median, KiB):`);
+  console.log(`  ${'page'.padEnd(16)} ${'files'.padStart(5)} ${'gzip -9'.padStart(9)} ${'Chromium'.padStart(9)} ${'br'.padStart(9)} ${'gzip'.padStart(9)} ${'decoded'.padStart(9)}`);
+  for (let i = 0; i < rows.length; i++) {
+    const f = figures.slice(i * 5, i * 5 + 5).map((x) => x.median.toFixed(1).padStart(9));
+    console.log(`  ${rows[i].page.path.padEnd(16)} ${String(rows[i].loads[0].files.length).padStart(5)} ${f.join(' ')}`);
   }
-  mkdirSync('benchmark-results', { recursive: true });
-  writeFileSync('benchmark-results/pages.json', JSON.stringify(rows, null, 2));
+  const encodings = [...new Set(rows.flatMap((r) => r.loads[0].files.map((f) => `${f.chromiumEncoding}/${f.brEncoding}/${f.gzipEncoding}`)))];
+  console.log(`  encodings seen (Chromium/br/gzip): ${encodings.join(', ')}`);
+  writeFigures('pages', figures, { files: Object.fromEntries(rows.map((r) => [r.page.path, r.loads[0].files])) });
 }
