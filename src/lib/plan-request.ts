@@ -1,29 +1,36 @@
-// What POST /api/plan accepts, checked the same way in the calculator's form and on the server.
+// What POST /api/plan accepts, checked on the server; the public calculator checks the same in the
+// browser without zod (plan-check.ts), from the same bounds and messages (plan-messages.ts).
 // Only the shape is checked here: what a length *means* ("1 1/2", "38 mm") is the engine's call.
 import { z } from 'zod';
 import { text } from './text';
 import type { CuffPlan, HemPlan, TaperPlan } from '@/lib/allowance/types';
+import {
+  KIND_MESSAGE,
+  lengthMessages,
+  MAX_LENGTH_NUMBER,
+  MAX_LENGTH_TEXT,
+  PLAN_FIELD_NAMES as N,
+  PRECISION_MESSAGE,
+  SHAPE_MESSAGE,
+  UNIT_MESSAGE,
+} from './plan-messages';
 
-// Generous bounds: a length outside them is a slip of the keyboard, never a trouser.
-const MAX_NUMBER = 100_000;
-const MAX_TEXT = 40;
-
+// Bounds and messages live in plan-messages.ts: the public calculator checks with them in the
+// browser without zod (plan-check.ts), and a test proves both give the same message.
 function lengthOf(what: string) {
+  const say = lengthMessages(what);
   return z.union(
     [
-      z
-        .number()
-        .min(-MAX_NUMBER, `${what} is far too large to be a length.`)
-        .max(MAX_NUMBER, `${what} is far too large to be a length.`),
-      text().trim().max(MAX_TEXT, `${what} is too long: type a length such as 1 1/2.`),
+      z.number().min(-MAX_LENGTH_NUMBER, say.farTooLarge).max(MAX_LENGTH_NUMBER, say.farTooLarge),
+      text().trim().max(MAX_LENGTH_TEXT, say.tooLong),
     ],
-    { error: (iss) => (iss.input === undefined ? `Enter the ${what.toLowerCase()}.` : `${what}: type a length such as 1 1/2 or 38.`) },
+    { error: (iss) => (iss.input === undefined ? say.enter : say.notALength) },
   );
 }
 
 /** A length the plan cannot do without: a number, or text that is not blank. */
 function required(what: string) {
-  return lengthOf(what).refine((v) => v !== '', `Enter the ${what.toLowerCase()}.`);
+  return lengthOf(what).refine((v) => v !== '', lengthMessages(what).enter);
 }
 
 /** A length that may be left blank; blank means "use the usual". */
@@ -34,12 +41,10 @@ function optional(what: string) {
 }
 
 /** The unit a plan is typed and shown in. */
-export const unitSchema = z.enum(['in', 'cm', 'mm'], { error: 'Choose inches, cm or mm.' });
+export const unitSchema = z.enum(['in', 'cm', 'mm'], { error: UNIT_MESSAGE });
 
 /** How finely inches are shown: eighths, sixteenths or thirty-seconds. */
-export const precisionSchema = z.union([z.literal(8), z.literal(16), z.literal(32)], {
-  error: 'Show inches to 1/8, 1/16 or 1/32.',
-});
+export const precisionSchema = z.union([z.literal(8), z.literal(16), z.literal(32)], { error: PRECISION_MESSAGE });
 
 const common = {
   unit: unitSchema,
@@ -50,45 +55,42 @@ const common = {
 export const cuffRequest = z.object({
   kind: z.literal('cuff'),
   ...common,
-  cuffDepth: required('Cuff depth'),
-  hemSection: optional('Third section'),
-  turnUnder: optional('Turn-under'),
-  available: optional('Cloth below the mark'),
-  clothThickness: optional('Turn of cloth'),
-  oldCrease: optional('Old crease'),
-  slope: optional('Slope'),
+  cuffDepth: required(N.cuffDepth),
+  hemSection: optional(N.hemSection),
+  turnUnder: optional(N.turnUnder),
+  available: optional(N.available),
+  clothThickness: optional(N.clothThickness),
+  oldCrease: optional(N.oldCrease),
+  slope: optional(N.slope),
 });
 
 /** A plain hem: finished edge and cutting line, level or sloped. */
 export const hemRequest = z.object({
   kind: z.literal('hem'),
   ...common,
-  hemAllowance: optional('Hem allowance'),
-  turnUnder: optional('Turn-under'),
-  available: optional('Cloth below the mark'),
-  slope: optional('Slope'),
+  hemAllowance: optional(N.hemAllowance),
+  turnUnder: optional(N.turnUnder),
+  available: optional(N.available),
+  slope: optional(N.slope),
 });
 
 /** A taper check: can the cuff-top width be kept straight down to the cut? */
 export const taperRequest = z.object({
   kind: z.literal('taper'),
   ...common,
-  cuffDepth: required('Cuff depth'),
-  hemSection: optional('Third section'),
-  widthAtEdge: required('Width at the finished edge'),
-  widthAbove: required('Width higher up'),
-  heightAbove: required('Height above the edge'),
-  seamAllowance: optional('Seam allowance'),
-  tolerance: optional('Tolerance'),
-  clothThickness: optional('Turn of cloth'),
+  cuffDepth: required(N.cuffDepth),
+  hemSection: optional(N.hemSection),
+  widthAtEdge: required(N.widthAtEdge),
+  widthAbove: required(N.widthAbove),
+  heightAbove: required(N.heightAbove),
+  seamAllowance: optional(N.seamAllowance),
+  tolerance: optional(N.tolerance),
+  clothThickness: optional(N.clothThickness),
 });
 
 /** The body of POST /api/plan: one plan of one kind. */
 export const planRequest = z.discriminatedUnion('kind', [cuffRequest, hemRequest, taperRequest], {
-  error: (iss) =>
-    iss.code === 'invalid_union'
-      ? 'Choose a cuff, a plain hem or a taper check.'
-      : 'Send the plan as an object with a kind (cuff, hem or taper), a unit and the lengths.',
+  error: (iss) => (iss.code === 'invalid_union' ? KIND_MESSAGE : SHAPE_MESSAGE),
 });
 
 /** A plan request as typed (blank optional lengths allowed). */

@@ -2,17 +2,9 @@
 // and jsonb refuses a lone UTF-16 surrogate, so either would fail a write half-way (a 500, and a
 // retry that writes twice). Refusing them here answers 422 naming the field before any write.
 import { z } from 'zod';
+import { isUnstorable, UNSTORABLE_MESSAGE } from './unstorable';
 
-// A NUL, or a high surrogate not followed by a low one, or a low surrogate not preceded by a high one.
-const UNSTORABLE = /\u0000|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
-
-/** Why a text cannot be kept. */
-export const UNSTORABLE_MESSAGE = 'Remove the hidden character (a NUL or a broken emoji) from this field.';
-
-/** True when the text holds a NUL or a lone surrogate (nothing PostgreSQL could keep). */
-export function isUnstorable(value: string): boolean {
-  return UNSTORABLE.test(value);
-}
+export { isUnstorable, UNSTORABLE_MESSAGE };
 
 /** A string PostgreSQL can keep; chain .trim(), .min(), .max() on it as on z.string(). */
 export function text(params?: Parameters<typeof z.string>[0]) {
