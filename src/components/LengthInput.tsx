@@ -1,12 +1,20 @@
-import type { ReactNode } from 'react';
-import type { UseFormRegisterReturn } from 'react-hook-form';
+import type { ChangeEventHandler, FocusEventHandler, ReactNode, Ref } from 'react';
 import { describedBy, FieldFrame } from './Field';
+
+/** What ties the input to its form: react-hook-form's register(name), or a value and onChange of plain state. */
+export interface InputBinding {
+  name: string;
+  value?: string;
+  onChange?: ChangeEventHandler<HTMLInputElement>;
+  onBlur?: FocusEventHandler<HTMLInputElement>;
+  ref?: Ref<HTMLInputElement>;
+}
 
 interface Props {
   id: string;
   label: string;
   unit: string;
-  registration: UseFormRegisterReturn;
+  registration: InputBinding;
   hint?: ReactNode;
   error?: string;
   /** what the typed text reads as ("31 7/8 in"), shown beside it once it parses */

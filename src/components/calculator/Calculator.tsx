@@ -1,5 +1,4 @@
-import { withQuery } from '@/components/WithQuery';
 import { CalculatorForm } from './CalculatorForm';
 
-/** The hem-and-cuff calculator island: the form and the plan, on the page's query client like the other islands. */
-export default withQuery(CalculatorForm);
+/** The hem-and-cuff calculator island: the form and the plan, on plain React state (no query client: the page stays light). */
+export default CalculatorForm;

@@ -1,13 +1,12 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
-import { useForm, useWatch, type Resolver } from 'react-hook-form';
+import { useState, type SubmitEvent } from 'react';
 import type { Precision, Unit } from '@/lib/allowance/types';
-import { planRequest, type PlanRequest } from '@/lib/plan-request';
+import { checkPlanRequest } from '@/lib/plan-check';
+import type { PlanRequestInput } from '@/lib/plan-request';
 import { BLANK, LENGTH_FIELDS, mainRequest, taperRequest, type CalculatorValues, type LengthField } from './calculator-values';
 import { convertTyped, readLength } from '@/lib/length-reading';
 import { CuffFields } from './CuffFields';
 import { HemFields } from './HemFields';
-import type { FieldInfo } from './LengthField';
+import type { Bind, FieldInfo } from './LengthField';
 import { PlanView, type Problem } from './PlanView';
 import { PrintPlan } from './PrintPlan';
 import { Segmented } from './Segmented';
@@ -29,24 +28,22 @@ function serverMessage(answer: PlanAnswer | undefined, field: string): string | 
   return answer && !answer.ok ? answer.fields[field] : undefined;
 }
 
+/** The server's own rules, checked in the browser: a message per field of the request, or none. */
+function ownMessages(request: PlanRequestInput | null): Record<string, string> {
+  const checked = request ? checkPlanRequest(request) : null;
+  return checked && !checked.ok ? checked.fields : {};
+}
+
 const UNIT_WORDS: Record<Unit, string> = { in: 'inches', cm: 'centimetres', mm: 'millimetres' };
 
 /** Fields whose text could not be carried to the new unit: the text left, and the unit it was typed in. */
 type Unconverted = Partial<Record<LengthField, { text: string; from: Unit }>>;
 
-// Same schema as the API. The form holds every finish's fields at once; zod checks the chosen
-// kind's and drops the rest, which the resolver's key-by-key typing cannot express.
-const resolver = zodResolver(planRequest) as unknown as Resolver<CalculatorValues, unknown, PlanRequest>;
-
 /** The form on the left, the plan on the right; the plan follows the typing a quarter-second behind. */
 export function CalculatorForm() {
-  const form = useForm<CalculatorValues, unknown, PlanRequest>({
-    defaultValues: BLANK,
-    resolver,
-    mode: 'onChange',
-  });
-  const { register, setValue, control, formState, clearErrors, handleSubmit } = form;
-  const values = useWatch({ control }) as CalculatorValues;
+  const [values, setValues] = useState<CalculatorValues>(BLANK);
+  // A field's own message shows once it has been typed in (or the form was submitted), as it is typed.
+  const [typedIn, setTypedIn] = useState<ReadonlySet<LengthField>>(() => new Set());
   const settled = useDebounced(values, 250);
   const [taperOpen, setTaperOpen] = useState(false);
   const [unconverted, setUnconverted] = useState<Unconverted>({});
@@ -56,12 +53,21 @@ export function CalculatorForm() {
 
   const plan = useLastGoodPlan(main, values.kind);
 
+  const setField = (f: LengthField, text: string) => {
+    setValues((v) => ({ ...v, [f]: text }));
+    setTypedIn((seen) => (seen.has(f) ? seen : new Set(seen).add(f)));
+  };
+  const bind: Bind = (f) => ({ name: f, value: values[f], onChange: (e) => setField(f, e.target.value) });
+
+  // Checked as typed, with the server's rules and words; the engine's own (what a length means) come from the answer.
+  const own = { ...(taperOpen ? ownMessages(taperRequest(values)) : {}), ...ownMessages(mainRequest(values)) };
   const errorFor = (f: LengthField): string | undefined =>
-    formState.errors[f]?.message ?? serverMessage(main.data, f) ?? (taperOpen ? serverMessage(taper.data, f) : undefined);
+    (typedIn.has(f) ? own[f] : undefined) ?? serverMessage(main.data, f) ?? (taperOpen ? serverMessage(taper.data, f) : undefined);
 
   const setScale = (s: Scale) => {
     const unit: Unit = s === 'in8' || s === 'in16' ? 'in' : s;
     const precision: Precision = s === 'in16' ? 16 : 8;
+    const next: CalculatorValues = { ...values, unit, precision };
     if (unit !== values.unit) {
       // A length typed in the old unit keeps its meaning, written as the new unit writes it
       // ("1 1/2" in inches becomes "3.8" in cm); what cannot be read stays as typed, flagged.
@@ -69,7 +75,7 @@ export function CalculatorForm() {
       for (const f of LENGTH_FIELDS) {
         const carried = convertTyped(values[f], values.unit, unit, precision);
         if (carried.ok) {
-          setValue(f, carried.text);
+          next[f] = carried.text;
           continue;
         }
         // Flagged until it is retyped, or until the unit it was typed in comes back.
@@ -78,8 +84,7 @@ export function CalculatorForm() {
       }
       setUnconverted(left);
     }
-    setValue('unit', unit);
-    setValue('precision', precision);
+    setValues(next);
   };
 
   const info: FieldInfo = (f) => {
@@ -91,8 +96,17 @@ export function CalculatorForm() {
   };
 
   const setKind = (kind: CalculatorValues['kind']) => {
-    clearErrors();
-    setValue('kind', kind);
+    // The other finish's fields start afresh: no message until typed in.
+    setTypedIn(new Set());
+    setValues((v) => ({ ...v, kind }));
+  };
+
+  // Enter in a field: every message shows, and the first field at fault takes the focus.
+  const onSubmit = (e: SubmitEvent<HTMLFormElement>) => {
+    e.preventDefault();
+    setTypedIn(new Set(LENGTH_FIELDS));
+    const first = LENGTH_FIELDS.find((f) => own[f] ?? serverMessage(main.data, f));
+    if (first) document.getElementById(`f-${first}`)?.focus();
   };
 
   const blankDepth = settled.kind === 'cuff' && settled.cuffDepth.trim() === '';
@@ -125,7 +139,7 @@ export function CalculatorForm() {
         <form
           aria-label="Measurements"
           noValidate
-          onSubmit={handleSubmit(() => undefined)}
+          onSubmit={onSubmit}
           className="flex flex-col gap-5 rounded-lg border-2 border-rule bg-card p-4"
         >
           <Segmented
@@ -140,13 +154,13 @@ export function CalculatorForm() {
           />
           <Segmented name="scale" legend="Measure in" value={toScale(values.unit, values.precision)} onChange={setScale} options={SCALES} />
           {values.kind === 'cuff' ? (
-            <CuffFields register={register} unit={unitLabel} errorFor={errorFor} info={info} cuffDepth={values.cuffDepth}
-              onPick={(v) => setValue('cuffDepth', v, { shouldValidate: true })} />
+            <CuffFields bind={bind} unit={unitLabel} errorFor={errorFor} info={info} cuffDepth={values.cuffDepth}
+              onPick={(v) => setField('cuffDepth', v)} />
           ) : (
-            <HemFields register={register} unit={unitLabel} errorFor={errorFor} info={info} />
+            <HemFields bind={bind} unit={unitLabel} errorFor={errorFor} info={info} />
           )}
           {values.kind === 'cuff' && (
-            <TaperFields open={taperOpen} onToggle={setTaperOpen} register={register} unit={unitLabel} errorFor={errorFor} info={info}
+            <TaperFields open={taperOpen} onToggle={setTaperOpen} bind={bind} unit={unitLabel} errorFor={errorFor} info={info}
               waiting={taperOpen && !taper.asked}
               problem={taper.data && !taper.data.ok ? taper.data.error : null} />
           )}

@@ -1,11 +1,10 @@
-import type { UseFormRegister } from 'react-hook-form';
 import type { Unit } from '@/lib/allowance/types';
-import type { CalculatorValues, LengthField as Field } from './calculator-values';
-import { LengthField, type FieldInfo } from './LengthField';
+import type { LengthField as Field } from './calculator-values';
+import { LengthField, type Bind, type FieldInfo } from './LengthField';
 import { QuickPicks } from './QuickPicks';
 
 interface Props {
-  register: UseFormRegister<CalculatorValues>;
+  bind: Bind;
   unit: Unit;
   errorFor: (f: Field) => string | undefined;
   info: FieldInfo;
@@ -14,8 +13,8 @@ interface Props {
 }
 
 /** The lengths a cuff needs: its depth, the sections and the cloth there is. */
-export function CuffFields({ register, unit, errorFor, info, cuffDepth, onPick }: Props) {
-  const common = { register, unit, info };
+export function CuffFields({ bind, unit, errorFor, info, cuffDepth, onPick }: Props) {
+  const common = { bind, unit, info };
   return (
     <div className="grid gap-4 sm:grid-cols-2">
       <div className="sm:col-span-2">

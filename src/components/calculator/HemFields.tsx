@@ -1,18 +1,17 @@
-import type { UseFormRegister } from 'react-hook-form';
 import type { Unit } from '@/lib/allowance/types';
-import type { CalculatorValues, LengthField as Field } from './calculator-values';
-import { LengthField, type FieldInfo } from './LengthField';
+import type { LengthField as Field } from './calculator-values';
+import { LengthField, type Bind, type FieldInfo } from './LengthField';
 
 interface Props {
-  register: UseFormRegister<CalculatorValues>;
+  bind: Bind;
   unit: Unit;
   errorFor: (f: Field) => string | undefined;
   info: FieldInfo;
 }
 
 /** The lengths a plain hem needs: allowance, turn-under, cloth there is and the slope. */
-export function HemFields({ register, unit, errorFor, info }: Props) {
-  const common = { register, unit, info };
+export function HemFields({ bind, unit, errorFor, info }: Props) {
+  const common = { bind, unit, info };
   const inch = unit === 'in';
   return (
     <div className="grid gap-4 sm:grid-cols-2">

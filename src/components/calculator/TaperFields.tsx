@@ -1,12 +1,11 @@
-import type { UseFormRegister } from 'react-hook-form';
 import type { Unit } from '@/lib/allowance/types';
-import type { CalculatorValues, LengthField as Field } from './calculator-values';
-import { LengthField, type FieldInfo } from './LengthField';
+import type { LengthField as Field } from './calculator-values';
+import { LengthField, type Bind, type FieldInfo } from './LengthField';
 
 interface Props {
   open: boolean;
   onToggle: (open: boolean) => void;
-  register: UseFormRegister<CalculatorValues>;
+  bind: Bind;
   unit: Unit;
   errorFor: (f: Field) => string | undefined;
   info: FieldInfo;
@@ -17,8 +16,8 @@ interface Props {
 }
 
 /** The optional taper check, folded away until asked for: leg widths measured flat. */
-export function TaperFields({ open, onToggle, register, unit, errorFor, info, waiting, problem }: Props) {
-  const common = { register, unit, info };
+export function TaperFields({ open, onToggle, bind, unit, errorFor, info, waiting, problem }: Props) {
+  const common = { bind, unit, info };
   return (
     <details
       open={open}

@@ -3,7 +3,7 @@
 // calculator and the garment page's leg plan.
 import { useState } from 'react';
 import type { PlanResponse } from '@/lib/plan-request';
-import type { PlanAnswer } from './use-plan';
+import type { PlanAnswer } from './ask-plan';
 
 /** What a plan query holds: its answer, and whether that answer is still the previous request's. */
 export interface PlanQueryState {

@@ -2,7 +2,7 @@
 // API's field messages for 400/422 (answers about the input, shown beside the fields), and a
 // failure for anything else. fetch is stubbed with the API's own answer shapes.
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { askPlan } from '@/components/calculator/use-plan';
+import { askPlan, planState, type PlanAnswer } from '@/components/calculator/use-plan';
 
 function answer(status: number, body: unknown) {
   return vi.fn(async () => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } }));
@@ -44,5 +44,24 @@ describe('askPlan', () => {
   it('fails saying entries are kept when the network does not answer', async () => {
     vi.stubGlobal('fetch', vi.fn(async () => Promise.reject(new TypeError('Failed to fetch'))));
     await expect(askPlan(REQUEST)).rejects.toThrow('The calculator did not answer. Your entries are kept; try again.');
+  });
+});
+
+describe('planState: what the plan hook shows for the request typed now', () => {
+  const a: PlanAnswer = { ok: true, plan: { kind: 'cuff' } as never };
+  const b: PlanAnswer = { ok: false, error: 'x', fields: {} };
+  it('shows the kept answer for this request as fresh', () => {
+    expect(planState('k2', b, { key: 'k1', data: a })).toEqual({ data: b, isPlaceholderData: false, error: null, asked: true });
+  });
+  it('shows the previous request’s answer as a placeholder while this one is on its way', () => {
+    expect(planState('k2', undefined, { key: 'k1', data: a })).toEqual({ data: a, isPlaceholderData: true, error: null, asked: true });
+  });
+  it('keeps the previous answer, as a placeholder, while nothing can be asked', () => {
+    expect(planState(null, undefined, { key: 'k1', data: a })).toEqual({ data: a, isPlaceholderData: true, error: null, asked: false });
+  });
+  it('tells a failure of this request, not of an earlier one', () => {
+    const error = new Error('The calculator did not answer. Your entries are kept; try again.');
+    expect(planState('k1', undefined, { key: 'k1', error })).toEqual({ data: undefined, isPlaceholderData: false, error, asked: true });
+    expect(planState('k2', undefined, { key: 'k1', error }).error).toBeNull();
   });
 });
