@@ -29,7 +29,7 @@ export function ClothCheck({ plan }: Props) {
   return null;
 }
 
-/** The cloth is short: said first, as the headline, with what still fits before anything else. */
+/** The cloth is short: said first, as the headline, then what still fits (the customer's cuff on a shorter third section first), then the figures. */
 export function NoFit({ plan }: Props) {
   const alt = plan.kind === 'cuff' ? plan.alternatives : null;
   return (
@@ -37,24 +37,22 @@ export function NoFit({ plan }: Props) {
       <h2 id="nofit-heading" className="text-3xl leading-tight font-extrabold">
         Does not fit: do not cut. Short by <span className="measure">{plan.shortBy?.text}</span>.
       </h2>
-      <p className="mt-1">
-        This {plan.kind === 'cuff' ? 'cuff' : 'hem'} needs <span className="measure font-extrabold">{plan.required.text}</span> below the mark
-        {plan.lines[0]?.aboveRawEdge ? (
-          <>
-            ; there is <span className="measure font-extrabold">{plan.lines[0].aboveRawEdge.text}</span>
-          </>
-        ) : null}
-        .
-      </p>
-      {alt && (
+      {plan.kind === 'cuff' && alt && (
         <>
           <p className="mt-2 font-semibold text-ink">What still fits:</p>
-          <ul className="ml-5 list-disc text-ink">
+          <ul className="ml-5 list-disc text-ink" data-testid="what-fits">
+            {alt.shorterSection && (
+              // The depth the customer chose, kept: only the hidden third section is shorter.
+              <li>
+                The <span className="measure font-extrabold">{plan.cuffDepth.text}</span> cuff as asked, with a shorter third section
+                of <span className="measure font-extrabold">{alt.shorterSection.text}</span> (still room for the turn-under and a safe stitch).
+              </li>
+            )}
             <li>
               {alt.deepestCuff ? (
-                <>A cuff of <span className="measure font-extrabold">{alt.deepestCuff.text}</span>, three equal sections.</>
+                <>A shallower cuff of <span className="measure font-extrabold">{alt.deepestCuff.text}</span>, three equal sections.</>
               ) : (
-                'No cuff of a sensible depth.'
+                'No shallower cuff of a sensible depth.'
               )}
             </li>
             <li>
@@ -68,6 +66,15 @@ export function NoFit({ plan }: Props) {
           </ul>
         </>
       )}
+      <p className="mt-2">
+        This {plan.kind === 'cuff' ? 'cuff' : 'hem'} needs <span className="measure font-extrabold">{plan.required.text}</span> below the mark
+        {plan.lines[0]?.aboveRawEdge ? (
+          <>
+            ; there is <span className="measure font-extrabold">{plan.lines[0].aboveRawEdge.text}</span>
+          </>
+        ) : null}
+        .
+      </p>
     </section>
   );
 }
