@@ -12,3 +12,16 @@ export function useNarrow(ref: RefObject<Element | null>, px: number): boolean {
   }, [ref, px]);
   return narrow;
 }
+
+/** The element's rendered width in px, followed as it changes; null until measured (on the server and at the first render). */
+export function useWidth(ref: RefObject<Element | null>): number | null {
+  const [width, setWidth] = useState<number | null>(null);
+  useEffect(() => {
+    const el = ref.current;
+    if (!el || typeof ResizeObserver === 'undefined') return;
+    const observer = new ResizeObserver(([entry]) => setWidth(entry ? Math.round(entry.contentRect.width) : null));
+    observer.observe(el);
+    return () => observer.disconnect();
+  }, [ref]);
+  return width;
+}
