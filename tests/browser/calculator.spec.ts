@@ -97,6 +97,26 @@ describe('the hem and cuff calculator', () => {
     await expect.poll(cutText, { timeout: 10_000 }).toBe('1 1/2 in');
   });
 
+  it('says the server’s own words beside a length too long or cleared, checked in the page', async () => {
+    await page.goto('/');
+    await ready(page);
+    const error = page.locator('#f-cuffDepth-error');
+    const message = () => error.textContent({ timeout: 5_000 }).catch(() => null);
+    // 41 characters: over the 40 the API takes for a length.
+    const long = '1 1/2 + 1/8 + 1/8 + 1/8 + 1/8 + 1/8 + 1/8';
+    await field('Cuff depth').fill(long);
+    await expect.poll(message).toBe('Cuff depth is too long: type a length such as 1 1/2.');
+    expect(await field('Cuff depth').getAttribute('aria-invalid')).toBe('true');
+    // The same words as the API answers for the same entry.
+    const answer = await page.request.post('/api/plan', { data: { kind: 'cuff', unit: 'in', precision: 8, cuffDepth: long } });
+    expect(answer.status()).toBe(400);
+    expect((await answer.json()).fields.cuffDepth).toBe(await message());
+    await field('Cuff depth').fill('');
+    await expect.poll(message).toBe('Enter the cuff depth.');
+    await field('Cuff depth').fill('1 1/2');
+    await expect.poll(() => error.count()).toBe(0);
+  });
+
   it('keeps every tap target at least 44 px tall and loads nothing from elsewhere', async () => {
     await choose('Cuff');
     await field('Cuff depth').fill('1 1/2');
