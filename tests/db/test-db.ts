@@ -23,7 +23,7 @@ export async function openTestDb(): Promise<DbHandle> {
     };
   }
   const snapshot = await migratedSnapshot(inject('pgliteSnapshotDir'));
-  const pglite = new PGlite({ loadDataDir: new Blob([snapshot]) });
+  const pglite = new PGlite({ loadDataDir: new Blob([new Uint8Array(snapshot)]) });
   const handle = openDatabase({ pglite });
   await handle.migrate();
   return handle;
