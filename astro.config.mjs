@@ -68,6 +68,9 @@ export default defineConfig({
       TRUSTED_PROXY_HOPS: envField.number({ context: 'server', access: 'secret', default: 0, int: true, min: 0 }),
       // Set by the HTTP tests: anonymous cut sheets say which thread drew them (X-Rendered-By: worker or main).
       SHEET_RENDER_TRACE: envField.boolean({ context: 'server', access: 'secret', default: false }),
+      // off: none of the PDF speed patches (src/lib/pdf-platform). Read there from process.env, as
+      // the sheet worker and the benchmarks have no astro:env; declared here so a typo is refused.
+      PDF_SPEED_PATCHES: envField.enum({ context: 'server', access: 'secret', values: ['on', 'off'], default: 'on' }),
     },
   },
   vite: {

@@ -1,5 +1,7 @@
 // The cut sheet as HTML, for the benchmark's comparison with the browser's own print to PDF.
 // Same words, same drawing and guide geometry, same Inter TTF (inlined, as the PDF embeds it).
+// The shell (fonts, styles) is opened once; each sheet replaces only the body, as a print service
+// keeping a warm page would (re-sending and decoding the inlined fonts took most of each print).
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
@@ -126,8 +128,15 @@ function Sheet({ data }: { data: CutSheetData }) {
   );
 }
 
-/** A whole HTML document of one cut sheet, Letter, fonts inlined. */
-export function cutSheetHtml(data: CutSheetData): string {
-  const css = `${fontFaces()}@page{size:Letter;margin:28pt}body{margin:0;font-family:Inter;font-size:8.5pt;color:#111;font-variant-numeric:tabular-nums}h2{font-size:9.5pt;font-weight:800;margin:5pt 0 2pt}ol,ul{margin:0;padding-left:14pt}`;
-  return `<!doctype html><html><head><meta charset="utf-8"><style>${css}</style></head><body>${renderToStaticMarkup(<Sheet data={data} />)}</body></html>`;
+/** The page Chromium keeps open: Letter, the sheet's styles, Inter inlined and already drawn in all three weights, and an empty #sheet to fill. */
+export function cutSheetShell(): string {
+  const css = `${fontFaces()}@page{size:Letter;margin:28pt}body{margin:0;font-family:Inter;font-size:8.5pt;color:#111;font-variant-numeric:tabular-nums}h2{font-size:9.5pt;font-weight:800;margin:5pt 0 2pt}ol,ul{margin:0;padding-left:14pt}#warm{position:absolute;left:-9999px}`;
+  // Text in each weight, off the page, so every face is decoded once when the page opens, not per print.
+  const warm = '<div id="warm" aria-hidden="true"><span style="font-weight:400">Aa 0123456789 ½¼</span><b style="font-weight:700">Aa 0123456789</b><b style="font-weight:800">Aa 0123456789</b></div>';
+  return `<!doctype html><html><head><meta charset="utf-8"><style>${css}</style></head><body>${warm}<div id="sheet"></div></body></html>`;
+}
+
+/** One cut sheet's markup, to put into the shell's #sheet. */
+export function cutSheetBody(data: CutSheetData): string {
+  return renderToStaticMarkup(<Sheet data={data} />);
 }

@@ -1,11 +1,12 @@
 // Warm cut-sheet renders in a loop, for a CPU profile or a quick A/B on a busy machine:
 // NODE_ENV=production node --cpu-prof node_modules/vite-node/vite-node.mjs benchmarks/cut-sheet-profile.ts
 // Prints CPU per sheet over chunks of 10 distinct sheets: the lowest chunk is the least disturbed.
+// SHEETS=single profiles the one-leg sheet; the default is the benchmark's (two tapered legs).
 import { writeFileSync } from 'node:fs';
-import { sampleSheet } from './cut-sheet-sample';
+import { sampleSheet, taperedPairSheet } from './cut-sheet-sample';
 import { renderCutSheet } from '../src/lib/cut-sheet/render';
 
-const sheet = sampleSheet;
+const sheet = process.env.SHEETS === 'single' ? sampleSheet : taperedPairSheet;
 
 const chunks = Number(process.env.CHUNKS ?? 15);
 if (process.env.OUT) writeFileSync(process.env.OUT, await renderCutSheet(sheet(42)));

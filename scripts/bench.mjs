@@ -8,7 +8,7 @@ const vn = 'node_modules/.bin/vite-node';
 const runs = [
   ['engine: plans per second', [vn, 'benchmarks/engine.ts']],
   ['pages: JavaScript bytes sent', ['node', 'benchmarks/page-bytes.mjs']],
-  ['cut sheet: react-pdf vs Chromium print', [vn, 'benchmarks/cut-sheet.ts']],
+  ['cut sheet: ours vs Chromium printing from a warm page, alternated', [vn, 'benchmarks/cut-sheet.ts']],
 ];
 const only = process.argv.slice(2);
 rmSync(RESULTS_DIR, { recursive: true, force: true });

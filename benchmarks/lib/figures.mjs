@@ -23,6 +23,11 @@ export function percentile(samples, p) {
 /**
  * One figure: `samples` are the per-run values (the median is reported, with the range);
  * `goal` is { max } or { min } in the same unit, or null for a figure reported without a goal.
+ * @param {string} name
+ * @param {string} unit
+ * @param {number[]} samples
+ * @param {{ max: number, min?: undefined } | { min: number, max?: undefined } | null} [goal]
+ * @param {string} [note]
  */
 export function figure(name, unit, samples, goal = null, note = '') {
   const st = stats(samples);

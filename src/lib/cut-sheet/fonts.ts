@@ -7,11 +7,8 @@
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { Font } from '@react-pdf/renderer';
-import { memoiseFace } from './face-memo';
-import { memoiseShaping, type Shaper } from './shaping-memo';
-import { cacheFontObjects } from './pdf-font-cache';
-import { seedFace } from './subset-memo';
-import { memoiseTextLayout } from './text-layout-memo';
+import { adoptFace, installPdfPlatform, type PlatformFace } from '../pdf-platform/index';
+import { SEED_CHARACTERS, SHEET_FEATURES } from './shaping-features';
 
 /** The font family the sheet is set in. */
 export const FAMILY = 'Inter';
@@ -48,9 +45,7 @@ const FALLBACKS: readonly Fallback[] = [
   { family: 'Noto Sans KR', pkg: '@expo-google-fonts/noto-sans-kr', weights: [[400, '400Regular/NotoSansKR_400Regular.ttf'], [700, '700Bold/NotoSansKR_700Bold.ttf']], only: /\p{Script=Hangul}/u },
 ];
 
-interface Face extends Shaper {
-  hasGlyphForCodePoint: (codePoint: number) => boolean;
-}
+type Face = PlatformFace;
 
 let ready: Promise<void> | null = null;
 const fallbackFaces = new Map<string, Promise<Face>>();
@@ -66,8 +61,8 @@ export function registerFonts(): Promise<void> {
 }
 
 async function load(): Promise<void> {
-  cacheFontObjects();
-  memoiseTextLayout(true);
+  // The PDF speed layer (src/lib/pdf-platform): patches that fit the installed packages.
+  installPdfPlatform();
   const dir = packageDir('@expo-google-fonts/inter');
   Font.register({ family: FAMILY, fonts: WEIGHTS.map(([fontWeight, file]) => ({ src: join(dir, file), fontWeight })) });
   for (const f of FALLBACKS) {
@@ -79,9 +74,8 @@ async function load(): Promise<void> {
   for (const [fontWeight] of WEIGHTS) {
     const face = await loadFace(FAMILY, fontWeight);
     inter ??= face;
-    seedFace(face);
-    memoiseShaping(face);
-    memoiseFace(face as unknown as Parameters<typeof memoiseFace>[0]);
+    // Every Inter font in a PDF starts with the same glyphs, so a usual sheet's font files repeat.
+    adoptFace(face, { seed: { text: SEED_CHARACTERS, features: SHEET_FEATURES } });
   }
 }
 
@@ -102,8 +96,7 @@ function fallbackFace(f: Fallback, fontWeight: number): Promise<Face> {
       // characters Inter lacks reach them, so the sheet's tabular digits are untouched.
       const layout = face.layout.bind(face);
       face.layout = (text, _features, ...rest) => layout(text, undefined, ...rest);
-      memoiseShaping(face);
-      memoiseFace(face as unknown as Parameters<typeof memoiseFace>[0]);
+      adoptFace(face);
       return face;
     });
     fallbackFaces.set(key, face);

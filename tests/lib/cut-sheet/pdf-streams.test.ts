@@ -1,6 +1,6 @@
 // Streams compressed by the fast path: every one marked, complete and readable.
 import { describe, expect, it } from 'vitest';
-import { keepStreamText } from '@/lib/cut-sheet/pdf-streams';
+import { keepStreamText } from '@/lib/pdf-platform/pdf-streams';
 import { renderCutSheet, renderCutSheets } from '@/lib/cut-sheet/render';
 import { comparable, pdfObjects } from './pdf-objects';
 import { flatText, pdfFile } from './poppler';

@@ -1,6 +1,6 @@
 // Reads rendered PDFs back with Debian's poppler-utils: text, word boxes, pages, fonts, pixels.
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 
@@ -89,4 +89,24 @@ export function gray(file: string, dpi: number): Gray {
   if (!header) throw new Error('not a PGM');
   const start = header[0].length;
   return { width: +header[1]!, height: +header[2]!, px: buf.subarray(start), dpi };
+}
+
+/** Every page as a greyscale raster (pdftoppm), in page order. */
+export function grayPages(file: string, dpi: number): Gray[] {
+  const name = `pages-${++seq}`;
+  run('pdftoppm', ['-gray', '-r', String(dpi), file, join(dir, name)]);
+  return readdirSync(dir)
+    .filter((f) => f.startsWith(`${name}-`) && f.endsWith('.pgm'))
+    .sort((a, b) => Number(/-(\d+)\.pgm$/.exec(a)![1]) - Number(/-(\d+)\.pgm$/.exec(b)![1]))
+    .map((f) => {
+      const buf = readFileSync(join(dir, f));
+      const header = /^P5\s+(\d+)\s+(\d+)\s+(\d+)\s/.exec(buf.subarray(0, 64).toString('latin1'))!;
+      return { width: +header[1]!, height: +header[2]!, px: buf.subarray(header[0].length), dpi };
+    });
+}
+
+/** Every word on every page with its box (pdftotext -bbox), one string per word. */
+export function allWords(file: string): string[] {
+  const html = spawnSync('pdftotext', ['-bbox', file, '-'], { encoding: 'utf8' }).stdout;
+  return [...html.matchAll(/<page [^>]*>|<word [^>]*>[^<]*<\/word>/g)].map((m) => m[0]);
 }

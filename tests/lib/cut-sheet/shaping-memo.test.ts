@@ -8,8 +8,8 @@ import * as fontkit from 'fontkit';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { renderCutSheet } from '@/lib/cut-sheet/render';
 import { SHEET_FEATURES } from '@/lib/cut-sheet/shaping-features';
-import { memoiseShaping, wordsOf, type Shaper } from '@/lib/cut-sheet/shaping-memo';
-import { memoiseTextLayout } from '@/lib/cut-sheet/text-layout-memo';
+import { memoiseShaping, wordsOf, type Shaper } from '@/lib/pdf-platform/shaping-memo';
+import { memoiseTextLayout } from '@/lib/pdf-platform/text-layout-memo';
 import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet, UNSAVED } from './sheets';
 
 const FILES = ['400Regular/Inter_400Regular.ttf', '700Bold/Inter_700Bold.ttf', '800ExtraBold/Inter_800ExtraBold.ttf'];

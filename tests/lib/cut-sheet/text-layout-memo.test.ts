@@ -2,7 +2,7 @@
 import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
 import { renderCutSheet, renderCutSheets } from '@/lib/cut-sheet/render';
-import { keptLayouts, layoutKey, memoiseTextLayout } from '@/lib/cut-sheet/text-layout-memo';
+import { keptLayouts, layoutKey, memoiseTextLayout } from '@/lib/pdf-platform/text-layout-memo';
 import { comparable } from './pdf-objects';
 import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet, UNSAVED } from './sheets';
 import type { CutSheetData } from '@/lib/cut-sheet/types';

@@ -6,6 +6,8 @@
 // a stream about 2 kB larger. A stream whose bytes were compressed before (a kept font subset) is
 // given that compressed form instead.
 import { deflateSync } from 'node:zlib';
+import PDFDocument from 'pdfkit';
+import { override } from './override';
 
 interface Reference {
   buffer: Uint8Array[];
@@ -22,7 +24,6 @@ interface Reference {
 const STREAM_LEVEL = 1;
 
 const known = new WeakMap<Uint8Array, Uint8Array>();
-let patched = false;
 let textKept = true;
 
 /** Remembers the compressed form of an exact byte array (by identity) for any stream that is just that array. */
@@ -41,13 +42,13 @@ function flushText(ref: Reference): void {
   ref.pending = [];
 }
 
-/** Makes pdfkit's references (found through any one of them) write text in one go, compress fast, or reuse a known form. */
-export function compressStreamsFast(anyReference: object): void {
-  if (patched) return;
-  patched = true;
-  const proto = Object.getPrototypeOf(anyReference) as Reference;
+/** Makes pdfkit's references write text in one go, compress fast, or reuse a known form; returns how to undo it. */
+export function compressStreamsFast(): () => void {
+  // pdfkit exports no reference class: a document's root is one of its references.
+  const Ctor = PDFDocument as unknown as new (options: object) => { _root: object };
+  const proto = Object.getPrototypeOf(new Ctor({ autoFirstPage: false })._root) as Reference;
   const write = proto.write;
-  proto.write = function (this: Reference, chunk: string | Uint8Array) {
+  const undoWrite = override(proto, 'write', function (this: Reference, chunk: string | Uint8Array) {
     if (!textKept || typeof chunk !== 'string') {
       flushText(this);
       return write.call(this, chunk);
@@ -58,9 +59,9 @@ export function compressStreamsFast(anyReference: object): void {
     this.data.Length = ((this.data.Length as number | undefined) ?? 0) + line.length;
     if (this.compress) this.data.Filter = 'FlateDecode';
     (this.pending ??= []).push(line);
-  };
+  });
   const finalize = proto.finalize;
-  proto.finalize = function (this: Reference) {
+  const undoFinalize = override(proto, 'finalize', function (this: Reference) {
     flushText(this);
     if (this.compress && this.buffer.length > 0) {
       const only = this.buffer.length === 1 ? this.buffer[0]! : undefined;
@@ -71,5 +72,9 @@ export function compressStreamsFast(anyReference: object): void {
       this.data.Filter = 'FlateDecode';
     }
     finalize.call(this);
+  });
+  return () => {
+    undoFinalize();
+    undoWrite();
   };
 }

@@ -5,6 +5,7 @@
 // script fontkit would find for the whole text, else "4," alone would be shaped without kerning.
 // It changes nothing on the page as long as no kerning pair spans a space, which the tests check
 // for every sheet's text. Results are read, never changed, by react-pdf (positions are copied).
+import { override } from './override';
 
 interface GlyphRun {
   glyphs: unknown[];
@@ -40,8 +41,8 @@ export function wordsOf(text: string): string[] {
   return words;
 }
 
-/** Makes a face keep its shaped words, and shape long text word by word. */
-export function memoiseShaping(face: Shaper): void {
+/** Makes a face keep its shaped words, and shape long text word by word; returns how to undo it. */
+export function memoiseShaping(face: Shaper): () => void {
   const shape = face.layout.bind(face);
   const memo = new Map<string, GlyphRun>();
   // The same few feature objects come with every call: spell each one out once, not per run.
@@ -64,7 +65,7 @@ export function memoiseShaping(face: Shaper): void {
   };
   // The tag fontkit gives Latin text, read from the face rather than assumed.
   const latin = shape('a').script;
-  face.layout = (text, ...rest) => {
+  return override(face, 'layout', (text: string, ...rest: unknown[]): GlyphRun => {
     let prefix = '';
     for (const x of rest) prefix += `${spell(x)}\u0000`;
     // Only the call textkit makes (features, no script, no language, left to right) is split.
@@ -83,5 +84,5 @@ export function memoiseShaping(face: Shaper): void {
       for (const p of run.positions) positions.push(p);
     }
     return { glyphs, positions };
-  };
+  });
 }

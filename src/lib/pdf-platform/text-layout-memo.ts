@@ -3,8 +3,9 @@
 // lines, bidi, glyph runs. Laying out a paragraph is a pure function of its text, its runs'
 // attributes, the box it flows into and the layout options, so the lines are kept per process
 // under a key made of exactly those. Nothing downstream writes to the lines (render copies the
-// glyphs it changes; page splits slice), so a kept answer is shared as it is.
-import { setLayoutTextHook } from '@react-pdf/layout';
+// glyphs it changes; page splits slice), so a kept answer is shared as it is. The hook into
+// react-pdf's layout is ours: patches/@react-pdf+layout+*.patch (patch-package) adds it.
+import * as reactPdfLayout from '@react-pdf/layout';
 
 interface Run {
   start: number;
@@ -123,12 +124,23 @@ function rememberedLayout(text: AttributedString, container: Container, options:
   return lines;
 }
 
-/** Turns the paragraph layout memo on (the default once fonts are registered) or off, emptying it. */
+type Hook = Parameters<typeof reactPdfLayout.setLayoutTextHook>[0];
+
+/** Turns the paragraph layout memo on or off, emptying it; throws if react-pdf's layout has no hook (our patch not applied). */
 export function memoiseTextLayout(on: boolean): void {
   fresh.clear();
   kept.clear();
+  // Read from the namespace: a missing export is then a clear error here, not a failed import.
+  const setHook = (reactPdfLayout as { setLayoutTextHook?: (hook: Hook) => void }).setLayoutTextHook;
+  if (typeof setHook !== 'function') throw new Error('@react-pdf/layout has no setLayoutTextHook: patches/@react-pdf+layout+*.patch is not applied');
   // The hook hands over textkit's own objects; rememberedLayout names the parts it reads.
-  setLayoutTextHook(on ? (rememberedLayout as Parameters<typeof setLayoutTextHook>[0]) : null);
+  setHook(on ? (rememberedLayout as Hook) : null);
+}
+
+/** Turns the paragraph layout memo on; returns how to turn it off. */
+export function keepTextLayouts(): () => void {
+  memoiseTextLayout(true);
+  return () => memoiseTextLayout(false);
 }
 
 /** How many paragraph layouts are kept now, laid out once or more. */

@@ -1,5 +1,0 @@
-// pdfkit ships no types; only its document class is touched here (pdf-font-cache.ts).
-declare module 'pdfkit' {
-  const PDFDocument: { prototype: object };
-  export default PDFDocument;
-}
