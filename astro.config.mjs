@@ -5,6 +5,7 @@ import react from '@astrojs/react';
 import tailwindcss from '@tailwindcss/vite';
 import { fileURLToPath } from 'node:url';
 import { nodeWorker } from './scripts/vite-node-worker.mjs';
+import { precompress } from './scripts/precompress.mjs';
 
 /** In the browser, `zod` resolves to src/lib/zod-jitless.ts (zod configured not to probe eval,
  * which the CSP forbids); the server keeps zod's faster compiled parsers. */
@@ -26,7 +27,8 @@ export default defineConfig({
   // Tests build into their own folder so a running `npm start` keeps its dist/.
   outDir: process.env.ASTRO_OUT_DIR || './dist',
   adapter: node({ mode: 'standalone' }),
-  integrations: [react()],
+  // precompress: .br and .gz beside each /_astro/ script and stylesheet, served by Accept-Encoding.
+  integrations: [react(), precompress()],
   server: { port: 4321, host: '127.0.0.1' },
   // Without this Astro ignores the Host header: Astro.url loses the port and same-site POSTs get 403.
   security: { allowedDomains: [{ hostname: 'localhost' }, { hostname: '127.0.0.1' }] },
