@@ -22,6 +22,20 @@ function zodJitlessInBrowser() {
   };
 }
 
+/** The built server begins loading the app (middleware, auth, and the database: PGlite opens on
+ * import) as soon as it starts listening, instead of at the first request, so PGlite's start
+ * overlaps the rest of the start-up. A failure here is left to the first request to report. */
+function appLoadsAtStart() {
+  return {
+    name: 'cuffwright:app-loads-at-start',
+    /** @param {string} code @param {string} id */
+    transform(code, id) {
+      if (id !== '\0@astrojs-ssr-virtual-entry' || !code.includes('const _manifest')) return null;
+      return `${code}\n_manifest.middleware?.().catch(() => {});\n`;
+    },
+  };
+}
+
 export default defineConfig({
   output: 'server',
   // Tests build into their own folder so a running `npm start` keeps its dist/.
@@ -74,7 +88,8 @@ export default defineConfig({
   },
   vite: {
     // nodeWorker: `?node-worker` imports (the thread that renders strangers' cut sheets).
-    plugins: [tailwindcss(), zodJitlessInBrowser(), nodeWorker()],
+    // appLoadsAtStart: the built server loads the middleware and opens the database at start.
+    plugins: [tailwindcss(), zodJitlessInBrowser(), nodeWorker(), appLoadsAtStart()],
     // Heavy server-only libraries are never bundled for the browser.
     ssr: { external: ['@electric-sql/pglite'] },
   },
