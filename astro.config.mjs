@@ -5,6 +5,7 @@ import react from '@astrojs/react';
 import tailwindcss from '@tailwindcss/vite';
 import { fileURLToPath } from 'node:url';
 import { nodeWorker } from './scripts/vite-node-worker.mjs';
+import { precompress } from './scripts/precompress.mjs';
 
 /** In the browser, `zod` resolves to src/lib/zod-jitless.ts (zod configured not to probe eval,
  * which the CSP forbids); the server keeps zod's faster compiled parsers. */
@@ -21,12 +22,27 @@ function zodJitlessInBrowser() {
   };
 }
 
+/** The built server begins loading the app (middleware, auth, and the database: PGlite opens on
+ * import) as soon as it starts listening, instead of at the first request, so PGlite's start
+ * overlaps the rest of the start-up. A failure here is left to the first request to report. */
+function appLoadsAtStart() {
+  return {
+    name: 'cuffwright:app-loads-at-start',
+    /** @param {string} code @param {string} id */
+    transform(code, id) {
+      if (id !== '\0@astrojs-ssr-virtual-entry' || !code.includes('const _manifest')) return null;
+      return `${code}\n_manifest.middleware?.().catch(() => {});\n`;
+    },
+  };
+}
+
 export default defineConfig({
   output: 'server',
   // Tests build into their own folder so a running `npm start` keeps its dist/.
   outDir: process.env.ASTRO_OUT_DIR || './dist',
   adapter: node({ mode: 'standalone' }),
-  integrations: [react()],
+  // precompress: .br and .gz beside each /_astro/ script and stylesheet, served by Accept-Encoding.
+  integrations: [react(), precompress()],
   server: { port: 4321, host: '127.0.0.1' },
   // Without this Astro ignores the Host header: Astro.url loses the port and same-site POSTs get 403.
   security: { allowedDomains: [{ hostname: 'localhost' }, { hostname: '127.0.0.1' }] },
@@ -75,7 +91,8 @@ export default defineConfig({
   },
   vite: {
     // nodeWorker: `?node-worker` imports (the thread that renders strangers' cut sheets).
-    plugins: [tailwindcss(), zodJitlessInBrowser(), nodeWorker()],
+    // appLoadsAtStart: the built server loads the middleware and opens the database at start.
+    plugins: [tailwindcss(), zodJitlessInBrowser(), nodeWorker(), appLoadsAtStart()],
     // Heavy server-only libraries are never bundled for the browser.
     ssr: { external: ['@electric-sql/pglite'] },
   },

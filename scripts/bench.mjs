@@ -9,6 +9,7 @@ const runs = [
   ['engine: plans per second', [vn, 'benchmarks/engine.ts']],
   ['pages: JavaScript bytes sent', ['node', 'benchmarks/page-bytes.mjs']],
   ['cut sheet: ours vs Chromium printing from a warm page, alternated', [vn, 'benchmarks/cut-sheet.ts']],
+  ['start: npm start to first 200, idle memory', ['node', 'benchmarks/start.mjs']],
 ];
 const only = process.argv.slice(2);
 rmSync(RESULTS_DIR, { recursive: true, force: true });

@@ -2,10 +2,10 @@
 // host) and the payment fake (unless PAYMENTS_API_KEY is set), build if needed, then serve the
 // built app on http://localhost:4321. Problems are told in one line naming the setting to change.
 import { spawn } from 'node:child_process';
+import { randomBytes } from 'node:crypto';
+import { createServer } from 'node:net';
 import { buildIfNeeded } from './build-if-needed.mjs';
 import { env, useCapture, captureDir, settingsProblem } from './env.mjs';
-import { startMailCapture } from './mail-capture.mjs';
-import { startLocalPayments } from './payments-fake.mjs';
 import { listenOrExplain } from './port-taken.mjs';
 
 const problem = settingsProblem();
@@ -21,24 +21,45 @@ const serverEnv = {
   HOST: env.HOST,
   BETTER_AUTH_URL: env.BETTER_AUTH_URL || `http://localhost:${env.PORT}`,
 };
-// The stand-ins start before the build, so a taken port is told at once.
-if (useCapture) {
-  const { port } = await listenOrExplain(startMailCapture({ dir: captureDir, port: env.SMTP_PORT }), { port: env.SMTP_PORT, what: 'mail capture', setting: 'SMTP_PORT' });
-  Object.assign(serverEnv, { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(port), MAIL_CAPTURE_DIR: captureDir });
-  console.log(`Mail capture on smtp://127.0.0.1:${port}: a shop's lead reads what the shop sent at /sent-messages`);
-}
-// Without a real payment service configured, payment links go to the local fake.
-if (!process.env.PAYMENTS_API_KEY) {
-  const payments = await listenOrExplain(startLocalPayments({ appUrl: `http://127.0.0.1:${env.PORT}`, port: env.PAYMENTS_FAKE_PORT }), {
-    port: env.PAYMENTS_FAKE_PORT,
-    what: 'local payment fake',
-    setting: 'PAYMENTS_FAKE_PORT',
+
+/** Resolves when the port can be listened on (and frees it again); rejects as listen() would. */
+function portFree(port) {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once('error', reject);
+    probe.listen(port, '127.0.0.1', () => probe.close(() => resolve()));
   });
-  Object.assign(serverEnv, payments.env);
-  console.log(`Local payment service (no real money) on ${payments.base}`);
+}
+
+const mail = { port: env.SMTP_PORT, what: 'mail capture', setting: 'SMTP_PORT' };
+const pay = { port: env.PAYMENTS_FAKE_PORT, what: 'local payment fake', setting: 'PAYMENTS_FAKE_PORT' };
+const fakePayments = !process.env.PAYMENTS_API_KEY;
+// Ports are checked before the build, so a taken one is told at once; the stand-ins themselves
+// start beside the server (their modules cost half a second the server need not wait for).
+if (useCapture) await listenOrExplain(portFree(mail.port), mail);
+if (fakePayments) await listenOrExplain(portFree(pay.port), pay);
+if (useCapture) Object.assign(serverEnv, { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(mail.port), MAIL_CAPTURE_DIR: captureDir });
+// Without a real payment service configured, payment links go to the local fake.
+const payments = { apiKey: `sk_test_local_${randomBytes(12).toString('hex')}`, webhookSecret: `whsec_${randomBytes(24).toString('hex')}` };
+if (fakePayments) {
+  Object.assign(serverEnv, { PAYMENTS_API_KEY: payments.apiKey, PAYMENTS_API_BASE: `http://127.0.0.1:${pay.port}`, PAYMENTS_WEBHOOK_SECRET: payments.webhookSecret });
 }
 buildIfNeeded('dist');
 console.log(`Cuffwright on http://localhost:${env.PORT}`);
 const server = spawn('node', ['dist/server/entry.mjs'], { stdio: 'inherit', env: serverEnv });
 for (const sig of ['SIGINT', 'SIGTERM']) process.on(sig, () => server.kill(sig));
+// A stand-in that cannot start after all (its port taken since the check) stops the server too.
+process.on('exit', () => server.kill());
 server.on('exit', (code) => process.exit(code ?? 0));
+
+if (useCapture) {
+  const { startMailCapture } = await import('./mail-capture.mjs');
+  await listenOrExplain(startMailCapture({ dir: captureDir, port: mail.port }), mail);
+  console.log(`Mail capture on smtp://127.0.0.1:${mail.port}: a shop's lead reads what the shop sent at /sent-messages`);
+}
+if (fakePayments) {
+  const { startPaymentsFake } = await import('./payments-fake.mjs');
+  const webhookUrl = new URL('/api/payments/webhook', `http://127.0.0.1:${env.PORT}`).toString();
+  const { base } = await listenOrExplain(startPaymentsFake({ port: pay.port, ...payments, webhookUrl }), pay);
+  console.log(`Local payment service (no real money) on ${base}`);
+}

@@ -1,6 +1,6 @@
 // What a typed length reads as, worked out in the browser with the engine's own grammar and exact
-// arithmetic. A sum ("31 3/4 + 1/8") is added term by term with fraction.js, so mathjs (which the
-// engine uses for sums on the server) never reaches the page.
+// arithmetic. A sum ("31 3/4 + 1/8") is added term by term with fraction.js, as the engine does,
+// so mathjs never reaches the page.
 import Fraction from 'fraction.js';
 import { formatExact } from './allowance/format-length';
 import { readLengthTerms, termUnits } from './allowance/length-terms';

@@ -1,5 +1,5 @@
 // The hem-and-cuff allowance engine: exact lengths in, chalk lines and warnings out.
-// Pure TypeScript; mathjs loads only when a typed sum ("31 3/4 + 1/8") is first worked out.
+// Pure TypeScript; sums ("31 3/4 + 1/8") are added with fraction.js, so the app never loads mathjs.
 
 export type * from './types';
 export { AllowanceError, isAllowanceError, type AllowanceErrorCode } from './allowance-error';

@@ -2,7 +2,6 @@ import Fraction from 'fraction.js';
 import { AllowanceError } from './allowance-error';
 import { formatExact } from './format-length';
 import { fractionNumber } from './len';
-import { evaluateTerms } from './length-expression';
 import { type LengthTerm, readLengthTerms, termUnits } from './length-terms';
 import type { Len, Precision, Unit } from './types';
 import { isUnit, mmPerUnitRatio } from './units';
@@ -48,20 +47,16 @@ export function checkRange(mm: Fraction): Fraction {
 }
 
 /**
- * Typed text to an exact length in mm. One term (a number, fraction or mixed number) goes
- * straight to fraction.js; sums and differences go through mathjs in Fraction mode.
+ * Typed text to an exact length in mm: each term (a number, fraction or mixed number) built with
+ * fraction.js and the terms added exactly. mathjs is left out on purpose: importing it costs about
+ * half a second at server start; `parseExactWithMathjs` (length-expression.ts) checks this in tests.
  */
 export function parseExact(text: string, unit: Unit): Fraction {
   const terms = readLengthTerms(text);
   const units = termUnits(terms, unit);
-  const mm = terms.length === 1 ? termMm(terms[0]!, units[0]!) : evaluateTerms(terms, units);
+  let mm = termMm(terms[0]!, units[0]!);
+  for (let k = 1; k < terms.length; k++) mm = mm.add(termMm(terms[k]!, units[k]!));
   return checkRange(mm);
-}
-
-/** The same as parseExact but always through mathjs: the slow path, kept to check the fast one. */
-export function parseExactWithMathjs(text: string, unit: Unit): Fraction {
-  const terms = readLengthTerms(text);
-  return checkRange(evaluateTerms(terms, termUnits(terms, unit)));
 }
 
 /**

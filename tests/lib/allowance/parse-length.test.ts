@@ -2,7 +2,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { AllowanceError, formatLength, parseLength, type Precision, type Unit } from '@/lib/allowance';
 import Fraction from 'fraction.js';
-import { parseExact, parseExactWithMathjs, withUnitsNamed } from '@/lib/allowance/parse-length';
+import { parseExact, withUnitsNamed } from '@/lib/allowance/parse-length';
+import { parseExactWithMathjs } from '@/lib/allowance/length-expression';
 
 // 1 in = 25.4 mm exactly (NBS 1959): every inch value below is that arithmetic.
 describe('parseLength accepts', () => {
@@ -195,6 +196,32 @@ describe('parseLength laws', () => {
     fc.assert(
       fc.property(simpleText, unitArb, (text, unit) => {
         expect(parseExact(text, unit).equals(parseExactWithMathjs(text, unit))).toBe(true);
+      }),
+    );
+  });
+
+  it('a sum added with fraction.js equals the sum worked out by mathjs (mathjs in Fraction mode)', () => {
+    const op = fc.constantFrom(' + ', ' - ', '+', ' − ');
+    fc.assert(
+      fc.property(simpleText, fc.array(fc.tuple(op, simpleText), { minLength: 1, maxLength: 4 }), unitArb, (first, rest, unit) => {
+        const text = first + rest.map(([o, t]) => o + t.replace(/^-/, '')).join('');
+        let ours: Fraction | string;
+        let theirs: Fraction | string;
+        try {
+          ours = parseExact(text, unit);
+        } catch (e) {
+          if (!(e instanceof AllowanceError)) throw e;
+          ours = e.code;
+        }
+        try {
+          theirs = parseExactWithMathjs(text, unit);
+        } catch (e) {
+          if (!(e instanceof AllowanceError)) throw e;
+          theirs = e.code;
+        }
+        // Both read the same value, or both refuse it for the same reason (out of range, too small).
+        if (typeof ours === 'string' || typeof theirs === 'string') expect(ours).toBe(theirs);
+        else expect(ours.equals(theirs)).toBe(true);
       }),
     );
   });

@@ -1,0 +1,44 @@
+// What the server loads for its first request: the middleware and everything it imports (the
+// session, the database, migrations and the demo seed). Each package here costs start-up time, so
+// the heavy ones that only some requests need stay out of this graph (issue 12: start ≤ 2 s).
+import { build } from 'esbuild';
+import { describe, expect, it } from 'vitest';
+
+/** The packages the middleware's module graph imports, found by bundling it with esbuild. */
+async function packagesOfMiddleware(): Promise<Set<string>> {
+  const result = await build({
+    entryPoints: ['src/middleware.ts'],
+    bundle: true,
+    write: false,
+    metafile: true,
+    platform: 'node',
+    format: 'esm',
+    packages: 'external',
+    logLevel: 'silent',
+    plugins: [
+      {
+        name: 'astro-virtual-modules',
+        // astro:* modules and Vite's ?query imports exist only inside Astro's build.
+        setup(b) {
+          b.onResolve({ filter: /^astro:|\?/ }, (a) => ({ path: a.path, external: true }));
+        },
+      },
+    ],
+  });
+  const packages = new Set<string>();
+  for (const input of Object.values(result.metafile.inputs)) {
+    for (const i of input.imports) if (i.external) packages.add(i.path);
+  }
+  return packages;
+}
+
+describe('the first request', () => {
+  it('loads the modules of the middleware, a real graph (better-auth, drizzle-orm, fraction.js)', async () => {
+    const packages = await packagesOfMiddleware();
+    for (const p of ['better-auth', 'drizzle-orm', 'fraction.js']) expect(packages).toContain(p);
+  });
+
+  it('never loads mathjs (half a second at start): the engine adds typed sums with fraction.js', async () => {
+    expect(await packagesOfMiddleware()).not.toContain('mathjs');
+  });
+});
