@@ -3,6 +3,7 @@ import { AllowanceError } from './allowance-error';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
 import { exactDefaults, SHALLOWEST_CUFF_WHY } from './defaults';
 import { lenMaker } from './len';
+import { letDownShapeError, letDownWidth, type LetDownWidths } from './let-down-width';
 import { InputReader } from './read-input';
 import type { PlanWarning, Precision, TaperInput, TaperLine, TaperPlan, Unit } from './types';
 
@@ -18,6 +19,10 @@ export interface TaperValues {
   seamAllowance: Fraction | null;
   tolerance: Fraction;
   clothThickness: Fraction;
+  /** measured flat at the cutting line on a let-down leg, or null to follow the taper down */
+  widthAtCut: Fraction | null;
+  /** the old hem fold below the mark, where the taper stops holding on a let-down leg */
+  oldFold: Fraction | null;
 }
 
 const ZERO = new Fraction(0);
@@ -42,12 +47,19 @@ export function readTaperInput(input: TaperInput, r: InputReader): TaperValues {
     seamAllowance: r.length(input.seamAllowance, 'seamAllowance', 'Seam allowance', { min: 'non-negative' }),
     tolerance: r.length(input.tolerance, 'tolerance', 'Tolerance', { min: 'non-negative' }) ?? defaults.taperTolerance,
     clothThickness: r.length(input.clothThickness, 'clothThickness', 'Turn of cloth', { min: 'non-negative' }) ?? ZERO,
+    widthAtCut: r.length(input.widthAtCut, 'widthAtCut', 'Width at the cutting line', { min: 'positive' }),
+    oldFold: r.length(input.oldCrease, 'oldCrease', 'Old crease'),
   };
 }
 
 /** How much the flat width grows per unit of height: the taper through the two measurements, followed straight on below the edge. */
 export function taperSlope(v: TaperValues): Fraction {
   return v.widthAbove.sub(v.widthAtEdge).div(v.heightAbove);
+}
+
+// The let-down leg's widths below the old fold, when the width at the cut was measured.
+function letDownOf(v: TaperValues, cut: Fraction): LetDownWidths | null {
+  return v.widthAtCut === null ? null : { widthAtEdge: v.widthAtEdge, slope: taperSlope(v), cut, widthAtCut: v.widthAtCut, oldFold: v.oldFold };
 }
 
 function isPositive(f: Fraction): boolean {
@@ -65,6 +77,9 @@ export function taperShapeError(v: TaperValues): AllowanceError | null {
     return new AllowanceError('out-of-range', 'These widths give no leg at the cuff top: check the two widths and the height.', 'widthAbove');
   }
   const cut = cuffLinePositions(v.cuffDepth, v.hemSection, v.clothThickness).cut;
+  // Measured at the cut, the taper need only reach the old fold (the measured width is positive).
+  const letDown = letDownOf(v, cut);
+  if (letDown) return letDownShapeError(letDown);
   // The width is straight in the height, so the lowest line (the cut) is the narrowest or widest: check it.
   if (!isPositive(v.widthAtEdge.sub(slope.mul(cut))) || !isPositive(v.widthAtEdge)) {
     return new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove');
@@ -81,12 +96,15 @@ export function checkTaper(input: TaperInput): TaperPlan {
   const slope = taperSlope(v);
   const target = v.widthAtEdge.add(slope.mul(v.cuffDepth));
   const positions = linePositionList(cuffLinePositions(v.cuffDepth, v.hemSection, v.clothThickness));
+  const letDown = letDownOf(v, positions[3]);
   let worst = ZERO;
   let mostPerSide: Fraction | null = null;
   let withinTolerance = true;
   const lines: TaperLine[] = positions.map((below, k) => {
     // A line below the mark sits at height −below; the change is what brings it back to the target.
-    const change = k === 0 ? target.sub(v.widthAtEdge) : slope.mul(v.cuffDepth.add(below));
+    const followed = k === 0 ? target.sub(v.widthAtEdge) : slope.mul(v.cuffDepth.add(below));
+    const measured = letDown && letDownWidth(letDown, below);
+    const change = measured ? target.sub(measured) : followed;
     const width = target.sub(change);
     const perSide = change.div(2);
     const size = change.abs();
@@ -102,6 +120,7 @@ export function checkTaper(input: TaperInput): TaperPlan {
       change: changeLen,
       perSeam: { ...changeLen },
       perSide: len(perSide),
+      ...(letDown && k === 3 ? { measured: true } : {}),
     };
   });
   const warnings: PlanWarning[] = [];

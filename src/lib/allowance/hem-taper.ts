@@ -16,6 +16,8 @@ export interface HemTaperValues {
   heightAbove: Fraction;
   seamAllowance: Fraction | null;
   tolerance: Fraction;
+  /** measured flat at the cutting line on a let-down leg, or null to follow the taper down */
+  widthAtCut: Fraction | null;
 }
 
 /** Read a hem taper input field by field (errors carry the field name). */
@@ -30,6 +32,7 @@ export function readHemTaperInput(input: HemTaperInput, r: InputReader): HemTape
     heightAbove: width(input.heightAbove, 'heightAbove', 'Height of the upper width'),
     seamAllowance: r.length(input.seamAllowance, 'seamAllowance', 'Seam allowance', { min: 'non-negative' }),
     tolerance: r.length(input.tolerance, 'tolerance', 'Tolerance', { min: 'non-negative' }) ?? defaults.taperTolerance,
+    widthAtCut: r.length(input.widthAtCut, 'widthAtCut', 'Width at the cutting line', { min: 'positive' }),
   };
 }
 
@@ -40,7 +43,9 @@ function slopeOf(v: HemTaperValues): Fraction {
 /** Why these widths make no hem plan (no leg at the cut, or none at the hem's top), or null. */
 export function hemTaperShapeError(v: HemTaperValues): AllowanceError | null {
   const rise = slopeOf(v).mul(v.hemAllowance);
-  if (v.widthAtEdge.sub(rise).compare(0) <= 0 || v.widthAtEdge.add(rise).compare(0) <= 0) {
+  // Measured at the cut (a let-down leg), only the leg the hem lies against must be there.
+  const cutWidth = v.widthAtCut ?? v.widthAtEdge.sub(rise);
+  if (cutWidth.compare(0) <= 0 || v.widthAtEdge.add(rise).compare(0) <= 0) {
     return new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove');
   }
   return null;
@@ -59,15 +64,18 @@ export function checkHemTaper(input: HemTaperInput): TaperPlan {
   const len = lenMaker(r.unit, r.precision);
   const slope = slopeOf(v);
   const H = v.hemAllowance;
-  const change = slope.mul(H).mul(2);
+  // On a let-down leg the width at the cut is the one measured there: the old hem may flare below its fold.
+  const cutWidth = v.widthAtCut ?? v.widthAtEdge.sub(slope.mul(H));
+  const change = v.widthAtEdge.add(slope.mul(H)).sub(cutWidth);
   const size = change.abs();
   const withinTolerance = size.compare(v.tolerance) <= 0;
   const perSide = change.div(2);
   const line = (n: 1 | 2, below: Fraction, width: Fraction, ch: Fraction): TaperLine => {
     const c = len(ch);
-    return { n, name: n === 1 ? 'finished-edge' : 'cut', belowMark: len(below), width: len(width), change: c, perSeam: { ...c }, perSide: len(ch.div(2)) };
+    const measured = n === 2 && v.widthAtCut !== null ? { measured: true } : {};
+    return { n, name: n === 1 ? 'finished-edge' : 'cut', belowMark: len(below), width: len(width), change: c, perSeam: { ...c }, perSide: len(ch.div(2)), ...measured };
   };
-  const lines = [line(1, ZERO, v.widthAtEdge, ZERO), line(2, H, v.widthAtEdge.sub(slope.mul(H)), change)];
+  const lines = [line(1, ZERO, v.widthAtEdge, ZERO), line(2, H, cutWidth, change)];
   const target = v.widthAtEdge.add(slope.mul(H));
   const warnings: PlanWarning[] = [];
   if (!withinTolerance) {

@@ -180,6 +180,13 @@ export interface TaperInput {
   /** flat difference that needs no work; default 1/8 in (3 mm metric) */
   tolerance?: LengthInput;
   clothThickness?: LengthInput;
+  /**
+   * on a let-down leg: the width measured flat at the cutting line, used there instead of the taper
+   * followed down (the old hem's allowance often flares below the old fold)
+   */
+  widthAtCut?: LengthInput;
+  /** with widthAtCut: the old hem fold below the mark; the taper holds down to it (without it, down to the finished edge) */
+  oldCrease?: LengthInput;
 }
 
 /** What a taper check under a plain hem takes. Widths are measured flat (half the round). */
@@ -194,6 +201,8 @@ export interface HemTaperInput {
   seamAllowance?: LengthInput;
   /** default 1/8 in (3 mm metric) */
   tolerance?: LengthInput;
+  /** on a let-down leg: the width measured flat at the cutting line, used instead of the taper followed down */
+  widthAtCut?: LengthInput;
 }
 
 /** The work at one chalk line to keep the cuff-top width straight down. */
@@ -209,6 +218,8 @@ export interface TaperLine {
   perSeam: Len;
   /** moved on each side of each seam (= change / 2) */
   perSide: Len;
+  /** true on the cutting line when its width was measured there (widthAtCut), not followed down from the taper */
+  measured?: boolean;
 }
 
 /** A taper check: how to keep the leg straight under the cuff. */
