@@ -15,3 +15,12 @@ export const EXISTING_FINISH_LABELS: Record<ExistingFinish, string> = {
   cuff: 'Cuff',
   unfinished: 'Unfinished (new trousers)',
 };
+
+/**
+ * Whether an old hem or cuff is let down before the new finish is made (every pair but new,
+ * unfinished ones). Its old allowance often flares below the old fold, so the bench asks for the
+ * width measured at the cutting line there instead of following the taper down.
+ */
+export function letDownFirst(finish: ExistingFinish): boolean {
+  return finish !== 'unfinished';
+}

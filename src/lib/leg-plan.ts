@@ -10,6 +10,19 @@ function given(leg: LegValues, fields: readonly LegLength[]): Partial<Record<Leg
   return out;
 }
 
+/** How the garment came in, as far as a leg's plan cares. */
+export interface LegPlanOptions {
+  /** an old hem or cuff is let down first (letDownFirst): the width measured at the cutting line is used */
+  letDown?: boolean;
+}
+
+// On a let-down pair the width measured at the cut replaces the taper followed down there; a cuff's
+// old fold says where the taper stops holding. Saved values may predate the field (drafts too).
+function letDownWidths(leg: LegValues, opts: LegPlanOptions, fields: readonly LegLength[]): Partial<Record<LegLength, string>> {
+  if (!opts.letDown || !(leg.widthAtCut ?? '').trim()) return {};
+  return given({ ...leg, widthAtCut: leg.widthAtCut ?? '' }, fields);
+}
+
 function scale(unit: Unit, precision: Precision) {
   return unit === 'in' ? { unit, precision } : { unit };
 }
@@ -26,7 +39,7 @@ export function legMainRequest(leg: LegValues, unit: Unit, precision: Precision 
 }
 
 /** The taper check for a cuffed leg, or null until the depth and all three widths are given. */
-export function legTaperRequest(leg: LegValues, unit: Unit, precision: Precision = 8): PlanRequestInput | null {
+export function legTaperRequest(leg: LegValues, unit: Unit, precision: Precision = 8, opts: LegPlanOptions = {}): PlanRequestInput | null {
   const needed: LegLength[] = ['cuffDepth', 'widthAtEdge', 'widthAbove', 'heightAbove'];
   if (leg.finish !== 'cuff' || needed.some((f) => leg[f].trim() === '')) return null;
   return {
@@ -37,6 +50,7 @@ export function legTaperRequest(leg: LegValues, unit: Unit, precision: Precision
     widthAbove: leg.widthAbove.trim(),
     heightAbove: leg.heightAbove.trim(),
     ...given(leg, ['hemSection', 'seamAllowance']),
+    ...letDownWidths(leg, opts, ['widthAtCut', 'oldCrease']),
   };
 }
 
@@ -49,7 +63,7 @@ export function frontPinNote(leg: LegValues): string | null {
 }
 
 /** The taper check for a plain-hemmed leg (the hem turned up must lie flat too), or null until all three widths are given. */
-export function legHemTaperRequest(leg: LegValues, unit: Unit, precision: Precision = 8): HemTaperInput | null {
+export function legHemTaperRequest(leg: LegValues, unit: Unit, precision: Precision = 8, opts: LegPlanOptions = {}): HemTaperInput | null {
   const needed: LegLength[] = ['widthAtEdge', 'widthAbove', 'heightAbove'];
   if (leg.finish === 'cuff' || needed.some((f) => leg[f].trim() === '')) return null;
   return {
@@ -58,5 +72,6 @@ export function legHemTaperRequest(leg: LegValues, unit: Unit, precision: Precis
     widthAbove: leg.widthAbove.trim(),
     heightAbove: leg.heightAbove.trim(),
     ...given(leg, ['hemAllowance', 'seamAllowance']),
+    ...letDownWidths(leg, opts, ['widthAtCut']),
   };
 }

@@ -21,7 +21,7 @@ export const FINISH_LABELS: Record<Finish, string> = { cuff: 'Cuff', plain: 'Pla
 /** Every length a leg can record, in the order the form asks for them. */
 export const LEG_LENGTHS = [
   'backPin', 'frontPin', 'cuffDepth', 'hemSection', 'turnUnder', 'hemAllowance', 'slope',
-  'available', 'oldCrease', 'widthAtEdge', 'widthAbove', 'heightAbove', 'seamAllowance',
+  'available', 'oldCrease', 'widthAtEdge', 'widthAbove', 'heightAbove', 'widthAtCut', 'seamAllowance',
 ] as const;
 /** One recorded length of a leg. */
 export type LegLength = (typeof LEG_LENGTHS)[number];
@@ -40,6 +40,7 @@ export const LEG_LENGTH_LABELS: Record<LegLength, string> = {
   widthAtEdge: 'Width at the finished edge (flat)',
   widthAbove: 'Width higher up (flat)',
   heightAbove: 'Height of that width above the edge',
+  widthAtCut: 'Width at the cutting line (flat)',
   seamAllowance: 'Seam allowance at each seam',
 };
 

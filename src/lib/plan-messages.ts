@@ -22,6 +22,7 @@ export const PLAN_FIELD_NAMES = {
   heightAbove: 'Height above the edge',
   seamAllowance: 'Seam allowance',
   tolerance: 'Tolerance',
+  widthAtCut: 'Width at the cutting line',
 } as const;
 
 /** One length of a plan request, by its key. */
@@ -32,12 +33,17 @@ export const PLAN_FIELDS = {
   cuff: { fields: ['cuffDepth', 'hemSection', 'turnUnder', 'available', 'clothThickness', 'oldCrease', 'slope'], required: ['cuffDepth'] },
   hem: { fields: ['hemAllowance', 'turnUnder', 'available', 'slope'], required: [] },
   taper: {
-    fields: ['cuffDepth', 'hemSection', 'widthAtEdge', 'widthAbove', 'heightAbove', 'seamAllowance', 'tolerance', 'clothThickness'],
+    fields: ['cuffDepth', 'hemSection', 'widthAtEdge', 'widthAbove', 'heightAbove', 'seamAllowance', 'tolerance', 'clothThickness', 'widthAtCut', 'oldCrease'],
     required: ['cuffDepth', 'widthAtEdge', 'widthAbove', 'heightAbove'],
+  },
+  // A plain hem's taper check (the bench's; the calculator does not send it).
+  'hem-taper': {
+    fields: ['hemAllowance', 'widthAtEdge', 'widthAbove', 'heightAbove', 'widthAtCut', 'seamAllowance', 'tolerance'],
+    required: ['widthAtEdge', 'widthAbove', 'heightAbove'],
   },
 } as const satisfies Record<string, { fields: readonly PlanField[]; required: readonly PlanField[] }>;
 
-/** The kinds of plan: a cuff, a plain hem, a taper check. */
+/** The kinds of plan: a cuff, a plain hem, a taper check under a cuff or under a plain hem. */
 export type PlanKind = keyof typeof PLAN_FIELDS;
 
 /** The messages about one length, named as `what` ("Cuff depth"). */
@@ -61,4 +67,4 @@ export const PRECISION_MESSAGE = 'Show inches to 1/8, 1/16 or 1/32.';
 /** When the kind is not cuff, hem or taper. */
 export const KIND_MESSAGE = 'Choose a cuff, a plain hem or a taper check.';
 /** When the body is not an object with a kind. */
-export const SHAPE_MESSAGE = 'Send the plan as an object with a kind (cuff, hem or taper), a unit and the lengths.';
+export const SHAPE_MESSAGE = 'Send the plan as an object with a kind (cuff, hem, taper or hem-taper), a unit and the lengths.';

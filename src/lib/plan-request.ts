@@ -86,10 +86,26 @@ export const taperRequest = z.object({
   seamAllowance: optional(N.seamAllowance),
   tolerance: optional(N.tolerance),
   clothThickness: optional(N.clothThickness),
+  // A let-down leg: the width measured at the cut, and the old fold the taper holds down to.
+  widthAtCut: optional(N.widthAtCut),
+  oldCrease: optional(N.oldCrease),
+});
+
+/** A taper check under a plain hem: will the hem, turned up, lie flat on the tapered leg? */
+export const hemTaperRequest = z.object({
+  kind: z.literal('hem-taper'),
+  ...common,
+  hemAllowance: optional(N.hemAllowance),
+  widthAtEdge: required(N.widthAtEdge),
+  widthAbove: required(N.widthAbove),
+  heightAbove: required(N.heightAbove),
+  widthAtCut: optional(N.widthAtCut),
+  seamAllowance: optional(N.seamAllowance),
+  tolerance: optional(N.tolerance),
 });
 
 /** The body of POST /api/plan: one plan of one kind. */
-export const planRequest = z.discriminatedUnion('kind', [cuffRequest, hemRequest, taperRequest], {
+export const planRequest = z.discriminatedUnion('kind', [cuffRequest, hemRequest, taperRequest, hemTaperRequest], {
   error: (iss) => (iss.code === 'invalid_union' ? KIND_MESSAGE : SHAPE_MESSAGE),
 });
 

@@ -12,7 +12,8 @@ import { scaleUnit, ticketLabel } from '@/lib/bench-requests';
 import { buildCutSheet, refusedFields, type LegOrder, type SheetHeader } from '@/lib/cut-sheet/build';
 import { renderCutSheet, renderCutSheets } from '@/lib/cut-sheet/render';
 import type { CutSheetData, PageSize, Side } from '@/lib/cut-sheet/types';
-import { legHemTaperRequest, legMainRequest, legTaperRequest } from '@/lib/leg-plan';
+import { letDownFirst } from '@/lib/existing-finish';
+import { legHemTaperRequest, legMainRequest, legTaperRequest, type LegPlanOptions } from '@/lib/leg-plan';
 import { legFormValues, type LegValues, LEG_LENGTHS, type SavedLeg } from '@/lib/measurement-request';
 import { planRequest } from '@/lib/plan-request';
 import type { QueueRow } from '@/lib/bench-types';
@@ -71,8 +72,8 @@ function inUnit(leg: LegValues, from: Unit, to: Unit): LegValues {
   return out;
 }
 
-/** The engine's orders for both legs of a saved fitting, or a refusal saying what is missing. */
-export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precision): LegOrder[] {
+/** The engine's orders for both legs of a saved fitting, or a refusal saying what is missing (a let-down pair's measured width at the cut used). */
+export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precision, opts: LegPlanOptions = {}): LegOrder[] {
   if (saved.length === 0) throw new ServiceError(422, NO_FITTING);
   const orders: LegOrder[] = [];
   for (const s of saved) {
@@ -85,20 +86,20 @@ export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precisio
     const finished = leg.backPin.trim() ? { finished: leg.backPin.trim() } : {};
     if (parsed.kind === 'cuff') {
       const { kind: _k, ...input } = parsed;
-      const taperReq = legTaperRequest(leg, unit, precision);
+      const taperReq = legTaperRequest(leg, unit, precision, opts);
       const taper = taperReq ? planRequest.parse(taperReq) : null;
       orders.push(
         taper?.kind === 'taper'
-          ? { side, finish: 'cuff', input, ...finished, taper: { widthAtEdge: taper.widthAtEdge, widthAbove: taper.widthAbove, heightAbove: taper.heightAbove, seamAllowance: taper.seamAllowance } }
+          ? { side, finish: 'cuff', input, ...finished, taper: { widthAtEdge: taper.widthAtEdge, widthAbove: taper.widthAbove, heightAbove: taper.heightAbove, seamAllowance: taper.seamAllowance, widthAtCut: taper.widthAtCut } }
           : { side, finish: 'cuff', input, ...finished },
       );
     } else if (parsed.kind === 'hem') {
       const { kind: _k, ...input } = parsed;
       // A plain hem on a tapered leg is checked too: the hem turned up must lie flat.
-      const widths = legHemTaperRequest(leg, unit, precision);
+      const widths = legHemTaperRequest(leg, unit, precision, opts);
       orders.push(
         widths
-          ? { side, finish: 'hem', input, taper: { widthAtEdge: widths.widthAtEdge, widthAbove: widths.widthAbove, heightAbove: widths.heightAbove, seamAllowance: widths.seamAllowance }, ...finished }
+          ? { side, finish: 'hem', input, taper: { widthAtEdge: widths.widthAtEdge, widthAbove: widths.widthAbove, heightAbove: widths.heightAbove, seamAllowance: widths.seamAllowance, widthAtCut: widths.widthAtCut }, ...finished }
           : { side, finish: 'hem', input, ...finished },
       );
     }
@@ -139,7 +140,7 @@ async function namesOf(g: Garment): Promise<HeaderNames> {
 }
 
 function sheetOf(actor: Actor, g: Garment, saved: SavedLeg[], names: HeaderNames, baseUrl: string, scale: Awaited<ReturnType<typeof scaleOf>>): CutSheetData {
-  const orders = fittingOrders(saved, scale.unit, scale.precision);
+  const orders = fittingOrders(saved, scale.unit, scale.precision, { letDown: letDownFirst(g.existingFinish) });
   try {
     return buildCutSheet(headerOf(actor, g, names, baseUrl, scale.pageSize), orders);
   } catch (e) {

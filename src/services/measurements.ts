@@ -19,6 +19,8 @@ export type ReadLengths =
 /**
  * What the engine would refuse in each leg's plans (cuff or hem, and the taper check), keyed by the
  * form's paths: a fitting that cannot be planned is not saved, so its sheet can always be printed.
+ * A width at the cutting line is used only on a pair let down first, and the existing finish can be
+ * changed after the fitting: the taper is checked both with it and without it.
  */
 export function planIssues(input: Measurements): Record<string, string> {
   const issues: Record<string, string> = {};
@@ -27,8 +29,10 @@ export function planIssues(input: Measurements): Record<string, string> {
     const checks: [object | null, (i: unknown) => { field?: string; message: string }[]][] = [];
     const main = legMainRequest(typed, input.unit);
     if (main) checks.push([main, main.kind === 'hem' ? validateHemInput : validateCuffInput]);
-    checks.push([legTaperRequest(typed, input.unit), validateTaperInput]);
-    checks.push([legHemTaperRequest(typed, input.unit), validateHemTaperInput]);
+    for (const letDown of typed.widthAtCut.trim() ? [false, true] : [false]) {
+      checks.push([legTaperRequest(typed, input.unit, 8, { letDown }), validateTaperInput]);
+      checks.push([legHemTaperRequest(typed, input.unit, 8, { letDown }), validateHemTaperInput]);
+    }
     for (const [request, validate] of checks) {
       if (!request) continue;
       for (const e of validate(request)) {

@@ -1,7 +1,7 @@
 // A leg's fitting turned into plan requests: a cuff needs its depth, is planned level whatever the
 // front pin says, and gets a taper check only with all three widths.
 import { describe, expect, it } from 'vitest';
-import { frontPinNote, legMainRequest, legTaperRequest } from '@/lib/leg-plan';
+import { frontPinNote, legHemTaperRequest, legMainRequest, legTaperRequest } from '@/lib/leg-plan';
 import { blankLeg } from '@/lib/measurement-request';
 import { GARMENT_STEPS, leastAdvanced, nextStep, stepLabel } from '@/lib/garment-steps';
 
@@ -25,6 +25,18 @@ describe('leg plan requests', () => {
     const leg = { ...blankLeg(), cuffDepth: '1 3/4', widthAtEdge: '8', widthAbove: '8 3/4' };
     expect(legTaperRequest(leg, 'in')).toBeNull();
     expect(legTaperRequest({ ...leg, heightAbove: '6', seamAllowance: '1/2' }, 'in')).toMatchObject({ kind: 'taper', heightAbove: '6', seamAllowance: '1/2' });
+  });
+
+  it('send the width at the cutting line (and a cuff’s old fold) only for a pair let down first', () => {
+    const cuff = { ...blankLeg(), cuffDepth: '1 1/2', oldCrease: '3', widthAtEdge: '7', widthAbove: '8', heightAbove: '24', widthAtCut: ' 7 3/8 ' };
+    expect(legTaperRequest(cuff, 'in')).not.toHaveProperty('widthAtCut');
+    expect(legTaperRequest(cuff, 'in', 8, { letDown: true })).toMatchObject({ kind: 'taper', widthAtCut: '7 3/8', oldCrease: '3' });
+    const hem = { ...cuff, finish: 'plain' as const };
+    expect(legHemTaperRequest(hem, 'in')).not.toHaveProperty('widthAtCut');
+    expect(legHemTaperRequest(hem, 'in', 8, { letDown: true })).toEqual({ unit: 'in', precision: 8, widthAtEdge: '7', widthAbove: '8', heightAbove: '24', widthAtCut: '7 3/8' });
+    // A draft kept from before the field existed has no widthAtCut at all.
+    const { widthAtCut: _w, ...old } = hem;
+    expect(legHemTaperRequest(old as typeof hem, 'in', 8, { letDown: true })).not.toHaveProperty('widthAtCut');
   });
 
   it('note a front pin on a cuff as recorded but hemmed level (cuffs are hemmed level: TRADE.md, Encyclopedia of Men’s Clothes)', () => {

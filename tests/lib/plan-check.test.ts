@@ -32,7 +32,7 @@ const length = fc.oneof(
 
 const body = fc.record(
   {
-    kind: fc.oneof({ weight: 8, arbitrary: fc.constantFrom('cuff', 'hem', 'taper') }, { weight: 1, arbitrary: fc.constantFrom(undefined, 'sleeve', 3) }),
+    kind: fc.oneof({ weight: 8, arbitrary: fc.constantFrom('cuff', 'hem', 'taper', 'hem-taper') }, { weight: 1, arbitrary: fc.constantFrom(undefined, 'sleeve', 3) }),
     unit: fc.oneof({ weight: 8, arbitrary: fc.constantFrom('in', 'cm', 'mm') }, { weight: 1, arbitrary: fc.constantFrom(undefined, 'ft', 'IN') }),
     precision: fc.constantFrom(undefined, 8, 16, 32, 4, '8'),
     ...Object.fromEntries(Object.keys(PLAN_FIELD_NAMES).map((k) => [k, length])),

@@ -11,6 +11,8 @@ export interface TaperWidths {
   heightAbove: LengthInput;
   seamAllowance?: LengthInput;
   tolerance?: LengthInput;
+  /** on a let-down pair: measured flat at the cutting line, used there instead of the taper followed down */
+  widthAtCut?: LengthInput;
 }
 
 /** What one leg should become: a cuff (maybe on a tapered leg) or a plain hem. */
@@ -26,7 +28,9 @@ function hemTaperInput(hem: HemInput, widths: TaperWidths) {
 
 function taperInput(cuff: CuffInput, widths: TaperWidths) {
   const { unit, precision, cuffDepth, hemSection, clothThickness } = cuff;
-  return { unit, precision, cuffDepth, hemSection, clothThickness, ...widths };
+  // Measured at the cut, the old fold says where the taper stops holding.
+  const oldCrease = widths.widthAtCut === undefined ? {} : { oldCrease: cuff.oldCrease };
+  return { unit, precision, cuffDepth, hemSection, clothThickness, ...oldCrease, ...widths };
 }
 
 /** Every length the engine would refuse, keyed by field path as the request spells it ("right.taper.widthAbove"). */

@@ -1,6 +1,6 @@
 // The words and figures of a cut sheet, worked out once from the data. The PDF lays them out;
 // keeping them here lets the tests and any other rendering read the same sheet.
-import type { CreaseLanding, CuffLineName, Len, PlanWarning, Unit, WarningCode } from '@/lib/allowance/types';
+import type { CreaseLanding, CuffLineName, Len, PlanWarning, TaperLine, TaperPlan, Unit, WarningCode } from '@/lib/allowance/types';
 import type { ExistingFinish } from '@/lib/existing-finish';
 import { finishedLine } from './finished-length';
 import { printedPlan, type PrintedPlan, type PrintedSeamWork } from './printed';
@@ -173,6 +173,16 @@ function clothCheck(pp: PrintedPlan): SheetLegGroup['cloth'] {
   };
 }
 
+// On a let-down pair the width at the cut was measured there, not followed down from the taper: say so.
+function measuredNote(t: TaperPlan): string {
+  const cut = t.lines[t.lines.length - 1];
+  return cut?.measured ? ` Width at the cutting line measured on the let-down leg: ${cut.width.text} flat (not followed down from the taper).` : '';
+}
+
+function rowWidth(l: TaperLine): string {
+  return l.measured ? `${l.width.text} (measured)` : l.width.text;
+}
+
 function taperOf(leg: LegSheet, pp: PrintedPlan): SheetLegGroup['taper'] {
   if (!leg.taper) return null;
   if (leg.finish === 'hem') return hemTaperOf(leg);
@@ -181,19 +191,20 @@ function taperOf(leg: LegSheet, pp: PrintedPlan): SheetLegGroup['taper'] {
   const work = (l: PrintedSeamWork) => `${l.sign > 0 ? 'let out' : 'take in'} ${l.perSeam.text} at each seam (${l.perSide.text} each side)`;
   const rows = t.lines.map((l, k) => {
     const printed = pp.taper!.lines[k]!;
-    return { n: l.n, name: LINE_NAMES[l.name], width: l.width.text, work: !pp.taper!.work || printed.sign === 0 ? 'as it is' : work(printed) };
+    return { n: l.n, name: LINE_NAMES[l.name], width: rowWidth(l), work: !pp.taper!.work || printed.sign === 0 ? 'as it is' : work(printed) };
   });
   const target = pp.taper.target.text;
   // Named by its height above the finished edge: the chalked "Cuff top" line is one depth below the mark.
   const above = pp.depth.text;
   // No line with work to print (within tolerance, or under half a step everywhere): nothing to let out.
-  if (!pp.taper.work) return { summary: `Taper within tolerance: no seam work needed (${target} flat ${above} above the edge).`, work: null, rows };
+  const measured = measuredNote(t);
+  if (!pp.taper.work) return { summary: `Taper within tolerance: no seam work needed (${target} flat ${above} above the edge).${measured}`, work: null, rows };
   const moving = pp.taper.lines.filter((l) => l.sign !== 0);
   const moves = moving.map((l) => `${l.sign > 0 ? 'let out' : 'take in'} ${l.perSeam.text} at line ${l.n}`);
   // Each side's share in the same order, its unit said once at the end: "1/8, 1/4 in each side".
   const sides = moving.map((l, i) => (i === moving.length - 1 ? l.perSide.text : l.perSide.text.replace(/ (in|cm|mm)$/, '')));
   return {
-    summary: `Taper: keep the width ${above} above the finished edge (${target} flat) straight down to the cutting line.`,
+    summary: `Taper: keep the width ${above} above the finished edge (${target} flat) straight down to the cutting line.${measured}`,
     work: `At each leg seam ${moves.join(', ')}; half of each at each side of the seam: ${sides.join(', ')} each side.`,
     rows,
   };
@@ -210,7 +221,7 @@ function hemTaperOf(leg: LegSheet & { finish: 'hem' }): SheetLegGroup['taper'] {
   const rows = t.lines.map((l) => ({
     n: l.n,
     name: LINE_NAMES[l.name],
-    width: l.width.text,
+    width: rowWidth(l),
     work:
       l.change.mm === 0 || printsZero(l.perSeam)
         ? 'as it is'
@@ -219,9 +230,12 @@ function hemTaperOf(leg: LegSheet & { finish: 'hem' }): SheetLegGroup['taper'] {
   const above = leg.plan.hemAllowance.text;
   const cut = t.lines[t.lines.length - 1]!;
   const flat = t.withinTolerance || cut.change.mm === 0 || printsZero(cut.perSeam);
-  const summary = flat
-    ? `Taper within tolerance: the hem lies flat, no seam work needed.`
-    : `Taper: turned up, the hem must match the leg ${above} above the edge (${t.targetWidth.text} flat): flare the seams below the finished edge to it at the cutting line.`;
+  // A let-down hem may have flared past the leg it lands on: then the seams come in, not out.
+  const seams = cut.change.mm > 0 ? 'flare the seams below the finished edge to it' : 'take the seams in below the finished edge to it';
+  const summary =
+    (flat
+      ? `Taper within tolerance: the hem lies flat, no seam work needed.`
+      : `Taper: turned up, the hem must match the leg ${above} above the edge (${t.targetWidth.text} flat): ${seams} at the cutting line.`) + measuredNote(t);
   const work = flat ? null : `At each leg seam ${cut.change.mm > 0 ? 'let out' : 'take in'} ${unsigned(cut.perSeam)} at line 2, nothing at line 1 (half of it each side of the seam).`;
   return { summary, work, rows };
 }
@@ -338,7 +352,8 @@ function stepsOf(groups: SheetLegGroup[]): SheetContent['steps'] {
   const first = groups[0]!.leg;
   const tapered = groups.filter((g) => g.taper?.work);
   if (first.finish === 'hem') {
-    const hemWork = "Before cutting, unpick both leg seams below the finished edge; re-stitch them flaring out to the cutting line (taper note), press open (hot iron: your shop's way).";
+    const outward = tapered.every((g) => (g.leg.taper?.plan.lines.at(-1)?.change.mm ?? 0) > 0);
+    const hemWork = `Before cutting, unpick both leg seams below the finished edge; re-stitch them ${outward ? 'flaring out' : 'on the new line'} to the cutting line (taper note), press open (hot iron: your shop's way).`;
     const step = tapered.length === 0 ? null : tapered.length === groups.length ? hemWork : `${tapered.map((g) => g.label).join(', ')}: ${hemWork[0]!.toLowerCase()}${hemWork.slice(1)}`;
     return [{ heading: null, items: hemSteps(turnUnder, groups.some((g) => g.slopeNote !== null), first.plan.unit, step) }];
   }

@@ -2,12 +2,14 @@
 import type { APIRoute } from 'astro';
 import {
   AllowanceError,
+  checkHemTaper,
   checkTaper,
   isAllowanceError,
   planCuff,
   planHem,
   validateCuffInput,
   validateHemInput,
+  validateHemTaperInput,
   validateTaperInput,
   type AllowanceErrorCode,
 } from '@/lib/allowance';
@@ -31,12 +33,14 @@ function plan(req: PlanRequest): PlanResponse {
       return planHem(req);
     case 'taper':
       return checkTaper(req);
+    case 'hem-taper':
+      return checkHemTaper(req);
   }
 }
 
 /** Every field the engine refuses, not just the first, so the form can mark them all at once. */
 function allRefusals(req: PlanRequest, first: AllowanceError): AllowanceError[] {
-  const validate = { cuff: validateCuffInput, hem: validateHemInput, taper: validateTaperInput }[req.kind];
+  const validate = { cuff: validateCuffInput, hem: validateHemInput, taper: validateTaperInput, 'hem-taper': validateHemTaperInput }[req.kind];
   const all = validate(req);
   return all.length ? all : [first];
 }
@@ -49,7 +53,7 @@ function refused(req: PlanRequest, err: AllowanceError): Response {
   return json(status, { error: errors[0]?.message ?? err.message, fields });
 }
 
-/** Plans a cuff, a plain hem or a taper check from the posted lengths. */
+/** Plans a cuff, a plain hem or a taper check (under a cuff or a plain hem) from the posted lengths. */
 export const POST: APIRoute = async ({ request }) => {
   const read = await readJson(request);
   if (read instanceof Response) {

@@ -134,6 +134,21 @@ describe('POST /api/plan: published figures', () => {
     expect(2 * edge.perSeam.mm).toBeCloseTo(12.7, 9);
   });
 
+  it('a plain hem on a tapered leg (kind hem-taper), and a let-down leg measured at the cut (arithmetic on Fit For A Queen 2012: 7 in flat, 8 in 12 in up)', async () => {
+    const base = { kind: 'hem-taper', unit: 'in', widthAtEdge: '7', widthAbove: '8', heightAbove: '12' };
+    const followed = await post(base);
+    expect(followed.status).toBe(200);
+    expect(followed.json).toMatchObject({ kind: 'taper', finish: 'hem', targetWidth: { text: '7 1/8 in' } });
+    expect(line(followed.json, 'cut').change.text).toBe('1/4 in');
+    const measured = await post({ ...base, widthAtCut: '7 1/2' });
+    expect(line(measured.json, 'cut')).toMatchObject({ width: { text: '7 1/2 in' }, change: { text: '-3/8 in' }, measured: true });
+    const cuff = await post({ kind: 'taper', unit: 'in', cuffDepth: '1 1/2', widthAtEdge: '7', widthAbove: '8', heightAbove: '24', widthAtCut: '7 3/8', oldCrease: '3' });
+    expect(line(cuff.json, 'cut').change.text).toBe('-5/16 in');
+    const refused = await post({ ...base, widthAtCut: '0' });
+    expect(refused.status).toBe(422);
+    expect(refused.json.fields).toEqual({ widthAtCut: 'Width at the cutting line must be more than 0.' });
+  });
+
   it('US National Bureau of Standards (1959): 1 in = 25.4 mm exactly, whatever unit the plan is shown in', async () => {
     const inch = await post({ kind: 'cuff', unit: 'in', cuffDepth: '1 1/2' });
     const metric = await post({ kind: 'cuff', unit: 'mm', cuffDepth: '1 1/2 in' });
@@ -231,12 +246,12 @@ describe('POST /api/plan: bad input is answered, never a 500', () => {
     const body = fc.oneof(
       fc.record(
         {
-          kind: fc.constantFrom('cuff', 'hem', 'taper', 'other'),
+          kind: fc.constantFrom('cuff', 'hem', 'taper', 'hem-taper', 'other'),
           unit: fc.constantFrom('in', 'cm', 'mm', 'ft'),
           precision: fc.constantFrom(8, 16, 32, 0, '8'),
           cuffDepth: length, hemSection: length, turnUnder: length, available: length, oldCrease: length,
           clothThickness: length, slope: length, hemAllowance: length, widthAtEdge: length, widthAbove: length,
-          heightAbove: length, seamAllowance: length, tolerance: length,
+          heightAbove: length, seamAllowance: length, tolerance: length, widthAtCut: length,
         },
         { requiredKeys: ['kind', 'unit'] },
       ),
