@@ -33,6 +33,8 @@ interface Props {
   onDirtyChange?: (dirty: boolean) => void;
   /** filled with a function that saves the form as it stands: true once saved */
   saveRef?: MutableRefObject<(() => Promise<boolean>) | null>;
+  /** the pair's old hem or cuff is let down first (letDownFirst): the width at the cut is asked for and used */
+  letDown?: boolean;
 }
 
 const resolver = zodResolver(measurementsRequest) as unknown as Resolver<MeasurementsInput, unknown, Measurements>;
@@ -49,7 +51,7 @@ function inUnit(text: string | undefined, from: Unit, to: Unit): string {
 }
 
 /** Both legs' fitting as a form, the chosen leg's live plan beside it; nothing typed is lost on a failed save. */
-export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange, saveRef }: Props) {
+export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange, saveRef, letDown = false }: Props) {
   const client = useQueryClient();
   const form = useForm<MeasurementsInput, unknown, Measurements>({ defaultValues: formValues(fitting, unit), resolver, mode: 'onChange' });
   const { register, control, setValue, setError, reset, getValues, handleSubmit, formState } = form;
@@ -180,6 +182,7 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
           onFinish={(f) => setValue(`legs.${leg}.finish`, f, { shouldDirty: true })}
           errorFor={errorFor}
           readingFor={(f) => readLength(values.legs[leg][f], values.unit, precision)}
+          letDown={letDown}
         />
         <button type="button" onClick={copyOther} className="min-h-11 self-start rounded-md border-2 border-ink px-4 text-lg font-semibold">
           Same as the {other} leg
@@ -220,7 +223,7 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
           </button>
         </div>
       </form>
-      <LegPlan leg={leg} values={current} unit={values.unit} precision={precision} />
+      <LegPlan leg={leg} values={current} unit={values.unit} precision={precision} letDown={letDown} />
     </div>
   );
 }

@@ -10,6 +10,8 @@ interface Props {
   fitting: FittingView;
   precision: Precision;
   unit: Unit;
+  /** the pair is let down first: the width measured at the cut is used in the plan */
+  letDown?: boolean;
 }
 
 /** A saved length as typed, in its own unit, and below it what it reads as in the shop's unit. */
@@ -24,7 +26,7 @@ function SavedLengthText({ text, typedIn, unit, precision }: { text: string; typ
 }
 
 /** Both legs' saved measurements side by side, to read, and the chosen leg's plan. */
-export function FittingReadOnly({ fitting, precision, unit }: Props) {
+export function FittingReadOnly({ fitting, precision, unit, letDown = false }: Props) {
   const [leg, setLeg] = useState<Leg>('left');
   const byLeg = new Map(fitting.legs.map((l) => [l.leg, l]));
   if (fitting.legs.length === 0) {
@@ -77,7 +79,7 @@ export function FittingReadOnly({ fitting, precision, unit }: Props) {
         </table>
         <Segmented name="plan-leg" legend="Plan for" value={leg} onChange={setLeg} options={LEGS.map((l) => ({ value: l, label: l === 'left' ? 'Left leg' : 'Right leg' }))} />
       </section>
-      <LegPlan leg={leg} values={legFormValues(byLeg.get(leg))} unit={shownUnit} precision={precision} />
+      <LegPlan leg={leg} values={legFormValues(byLeg.get(leg))} unit={shownUnit} precision={precision} letDown={letDown} />
     </div>
   );
 }

@@ -5,7 +5,7 @@ import { withQuery } from '@/components/WithQuery';
 import { PrintCutSheet } from '@/components/cut-sheets/PrintCutSheet';
 import { scaleUnit, type Scale } from '@/lib/bench-requests';
 import type { FittingView, GarmentDetail } from '@/lib/bench-types';
-import { EXISTING_FINISH_LABELS } from '@/lib/existing-finish';
+import { EXISTING_FINISH_LABELS, letDownFirst } from '@/lib/existing-finish';
 import { fetchJson } from '@/lib/fetch-json';
 import { GARMENT_STEPS, ticketLabel } from '@/lib/garment-steps';
 import { DueBadge } from './DueBadge';
@@ -111,9 +111,17 @@ function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canA
         ) : fitting.isError ? (
           <p role="alert" className="font-semibold text-cut">{fitting.error.message}</p>
         ) : canEditFitting ? (
-          <FittingForm garmentId={g.id} fitting={fitting.data} unit={unit} precision={precision} onDirtyChange={setFittingDirty} saveRef={saveFitting} />
+          <FittingForm
+            garmentId={g.id}
+            fitting={fitting.data}
+            unit={unit}
+            precision={precision}
+            onDirtyChange={setFittingDirty}
+            saveRef={saveFitting}
+            letDown={letDownFirst(g.existingFinish)}
+          />
         ) : (
-          <FittingReadOnly fitting={fitting.data} unit={unit} precision={precision} />
+          <FittingReadOnly fitting={fitting.data} unit={unit} precision={precision} letDown={letDownFirst(g.existingFinish)} />
         ))}
 
       {print && (

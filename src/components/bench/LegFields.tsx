@@ -14,6 +14,8 @@ interface Props {
   errorFor: (field: LegLength) => string | undefined;
   /** what a field's typed text reads as ("31 7/8 in"), or null */
   readingFor: (field: LegLength) => string | null;
+  /** the pair's old hem or cuff is let down first: the width at the cutting line is asked for */
+  letDown?: boolean;
 }
 
 const HINTS: Partial<Record<LegLength, string>> = {
@@ -28,7 +30,11 @@ const HINTS: Partial<Record<LegLength, string>> = {
   oldCrease: 'Where the old hem fold is, below the mark (negative above).',
   heightAbove: 'Where the higher width was taken, above the finished edge.',
   seamAllowance: 'Left on each side of each leg seam, to let out.',
+  widthAtCut: 'Let down first: the old hem often flares below its fold, so measure flat where you will cut. Blank: the taper followed down.',
 };
+
+const TAPER = 'Taper check (flat widths)';
+const TAPER_FIELDS: LegLength[] = ['widthAtEdge', 'widthAbove', 'heightAbove', 'seamAllowance'];
 
 /** Which lengths each finish asks for, in order, grouped. */
 const GROUPS: Record<Finish, { title: string; fields: LegLength[] }[]> = {
@@ -36,22 +42,30 @@ const GROUPS: Record<Finish, { title: string; fields: LegLength[] }[]> = {
     { title: 'Pins', fields: ['backPin', 'frontPin'] },
     { title: 'Cuff', fields: ['cuffDepth', 'hemSection', 'turnUnder'] },
     { title: 'Cloth', fields: ['available', 'oldCrease'] },
-    { title: 'Taper check (flat widths)', fields: ['widthAtEdge', 'widthAbove', 'heightAbove', 'seamAllowance'] },
+    { title: TAPER, fields: TAPER_FIELDS },
   ],
+  // A plain hem on a tapered leg is checked too: turned up, it must lie flat on the leg above.
   plain: [
     { title: 'Pins', fields: ['backPin', 'frontPin'] },
     { title: 'Hem', fields: ['hemAllowance', 'turnUnder'] },
     { title: 'Cloth', fields: ['available'] },
+    { title: TAPER, fields: TAPER_FIELDS },
   ],
   slope: [
     { title: 'Pins', fields: ['backPin', 'frontPin'] },
     { title: 'Hem', fields: ['slope', 'hemAllowance', 'turnUnder'] },
     { title: 'Cloth', fields: ['available'] },
+    { title: TAPER, fields: TAPER_FIELDS },
   ],
 };
 
+// On a pair let down first the width at the cut is measured, not followed down: asked after the three widths.
+function fieldsOf(title: string, fields: LegLength[], letDown: boolean): LegLength[] {
+  return letDown && title === TAPER ? [...fields.slice(0, 3), 'widthAtCut', ...fields.slice(3)] : fields;
+}
+
 /** One leg's fitting fields for its finish (the other finishes' values are kept, only hidden). */
-export function LegFields({ leg, finish, unit, register, onFinish, errorFor, readingFor }: Props) {
+export function LegFields({ leg, finish, unit, register, onFinish, errorFor, readingFor, letDown = false }: Props) {
   return (
     <div className="flex flex-col gap-4">
       <Segmented
@@ -65,7 +79,7 @@ export function LegFields({ leg, finish, unit, register, onFinish, errorFor, rea
         <fieldset key={g.title} className="flex flex-col gap-3">
           <legend className="mb-1 text-lg font-extrabold">{g.title}</legend>
           <div className="grid gap-3 sm:grid-cols-2">
-            {g.fields.map((f) => (
+            {fieldsOf(g.title, g.fields, letDown).map((f) => (
               <LengthInput
                 key={f}
                 id={`m-legs-${leg}-${f}`}

@@ -3,6 +3,7 @@ import { PlanView } from '@/components/calculator/PlanView';
 import { readLength, typedWithUnit } from '@/lib/length-reading';
 import { frontPinNote } from '@/lib/leg-plan';
 import type { Leg, LegValues } from '@/lib/measurement-request';
+import { HemTaperCheck } from './HemTaperCheck';
 import { useLegPlan } from './use-leg-plan';
 
 interface Props {
@@ -10,14 +11,17 @@ interface Props {
   values: LegValues;
   unit: Unit;
   precision: Precision;
+  /** the pair is let down first: the width measured at the cutting line is used there */
+  letDown?: boolean;
 }
 
-/** One leg's plan from the engine, drawn by the calculator's own components, with the front-pin note. */
-export function LegPlan({ leg, values, unit, precision }: Props) {
-  const { plan, problem, failure, taper } = useLegPlan(values, unit, precision);
+/** One leg's plan from the engine, drawn by the calculator's own components, with the front-pin note and a plain hem's taper check. */
+export function LegPlan({ leg, values, unit, precision, letDown = false }: Props) {
+  const { plan, problem, failure, taper, taperProblem } = useLegPlan(values, unit, precision, letDown);
   const note = frontPinNote(values);
   const pinned = values.backPin.trim();
   const finished = pinned ? readLength(pinned, unit, precision) : null;
+  const cut = taper?.lines.at(-1);
   return (
     <div className="flex flex-col gap-3" data-testid={`plan-${leg}`}>
       <h2 className="text-2xl font-extrabold">Plan for the {leg} leg</h2>
@@ -32,7 +36,19 @@ export function LegPlan({ leg, values, unit, precision }: Props) {
         </p>
       )}
       {note && <p className="rounded-md border-l-8 border-accent bg-accent-soft px-4 py-2 text-lg font-semibold">{note}</p>}
-      <PlanView plan={plan} problem={problem} failure={failure} taper={taper} />
+      {/* The calculator's taper view speaks of the cuff top: a plain hem's check has its own below. */}
+      <PlanView plan={plan} problem={problem} failure={failure} taper={taper?.finish === 'hem' ? null : taper} />
+      {taper?.finish === 'hem' && <HemTaperCheck taper={taper} />}
+      {cut?.measured && (
+        <p data-testid={`measured-cut-${leg}`} className="rounded-md border-l-8 border-accent bg-accent-soft px-4 py-2 text-lg font-semibold">
+          Width at the cutting line measured on the let-down leg: <span className="measure">{cut.width.text}</span> flat, used there instead of the taper followed down.
+        </p>
+      )}
+      {taperProblem && (
+        <p role="alert" className="rounded-md border-l-8 border-cut bg-card px-4 py-2 text-lg font-semibold">
+          Taper check: {taperProblem}
+        </p>
+      )}
     </div>
   );
 }

@@ -1,18 +1,28 @@
 // The live plan for one leg: the same POST /api/plan the public calculator uses, fed from the
 // leg's saved or being-edited values, the last good plan kept while a field is being fixed.
 import type { Precision, Unit } from '@/lib/allowance/types';
-import { legMainRequest, legTaperRequest } from '@/lib/leg-plan';
+import { legHemTaperRequest, legMainRequest, legTaperRequest } from '@/lib/leg-plan';
 import type { LegValues } from '@/lib/measurement-request';
+import type { PlanRequestInput } from '@/lib/plan-request';
 import type { Problem } from '@/components/calculator/PlanView';
 import { usePlan } from '@/components/calculator/use-plan';
 import { useLastGoodPlan } from '@/components/calculator/use-last-good-plan';
 import type { TaperPlan } from '@/lib/allowance/types';
 
-/** What PlanView needs for one leg, plus the field messages of the engine. */
-export function useLegPlan(leg: LegValues, unit: Unit, precision: Precision) {
+// A cuff's taper check, or a plain hem's (the hem turned up must lie flat on the tapered leg too).
+function taperRequest(leg: LegValues, unit: Unit, precision: Precision, letDown: boolean): PlanRequestInput | null {
+  if (leg.finish === 'cuff') return legTaperRequest(leg, unit, precision, { letDown });
+  // Each side is half a seam's work: in inches it is asked in half steps, so 3/8 at a seam is 3/16
+  // each side, never 1/4 rounded to the shop's eighths.
+  const hem = legHemTaperRequest(leg, unit, unit === 'in' ? (Math.min(32, precision * 2) as Precision) : precision, { letDown });
+  return hem && { kind: 'hem-taper', ...hem };
+}
+
+/** What PlanView needs for one leg, plus the field messages of the engine; `letDown`: the width measured at the cut is used. */
+export function useLegPlan(leg: LegValues, unit: Unit, precision: Precision, letDown = false) {
   const mainReq = legMainRequest(leg, unit, precision);
   const main = usePlan(mainReq);
-  const taper = usePlan(legTaperRequest(leg, unit, precision));
+  const taper = usePlan(taperRequest(leg, unit, precision, letDown));
   const plan = useLastGoodPlan(main, leg.finish === 'cuff' ? 'cuff' : 'hem');
   const problem: Problem | null = !mainReq
     ? { kind: 'empty', text: 'Type the cuff depth, or tap a preset, and the chalk lines appear here.' }
@@ -25,6 +35,10 @@ export function useLegPlan(leg: LegValues, unit: Unit, precision: Precision) {
     ...(taper.data && !taper.data.ok ? taper.data.fields : {}),
     ...(main.data && !main.data.ok ? main.data.fields : {}),
   };
-  const taperPlan: TaperPlan | null = taper.data?.ok && taper.data.plan.kind === 'taper' ? taper.data.plan : null;
-  return { plan, problem, failure: main.error ? main.error.message : null, taper: taperPlan, fields };
+  // Only an answer for this leg's own finish: a placeholder kept from a cuff is no hem's check.
+  const answered = taper.asked && taper.data?.ok && taper.data.plan.kind === 'taper' ? taper.data.plan : null;
+  const taperPlan: TaperPlan | null = answered && (answered.finish === 'hem') === (leg.finish !== 'cuff') ? answered : null;
+  // The engine's word on widths it cannot check (a width of 0 at the cut, a taper with no leg).
+  const taperProblem = taper.asked && taper.data && !taper.data.ok ? taper.data.error : null;
+  return { plan, problem, failure: main.error ? main.error.message : null, taper: taperPlan, taperProblem, fields };
 }

@@ -86,8 +86,8 @@ export function checkHemTaper(input: HemTaperInput): TaperPlan {
       code: 'taper-beyond-tolerance',
       message:
         change.s > 0n
-          ? `The leg narrows towards the hem: turned up, the hem would be ${by} narrower (flat) than the leg it lies against. Let out the inseam and outseam below the finished edge, flaring out to ${by} more at the cutting line, ${at} below it (${side} on each side of each seam), so the hem lies flat.`
-          : `The leg widens towards the hem: turned up, the hem would be ${by} wider (flat) than the leg it lies against. Take in the inseam and outseam below the finished edge, to ${by} less at the cutting line, ${at} below it (${side} on each side of each seam), so the hem lies flat.`,
+          ? `${v.widthAtCut ? `Measured at the cutting line (${len(v.widthAtCut).text} flat), the let-down leg is narrower than the leg above the edge` : 'The leg narrows towards the hem'}: turned up, the hem would be ${by} narrower (flat) than the leg it lies against. Let out the inseam and outseam below the finished edge, flaring out to ${by} more at the cutting line, ${at} below it (${side} on each side of each seam), so the hem lies flat.`
+          : `${v.widthAtCut ? `Measured at the cutting line (${len(v.widthAtCut).text} flat), the let-down leg flares wider than the leg above the edge` : 'The leg widens towards the hem'}: turned up, the hem would be ${by} wider (flat) than the leg it lies against. Take in the inseam and outseam below the finished edge, to ${by} less at the cutting line, ${at} below it (${side} on each side of each seam), so the hem lies flat.`,
     });
   }
   const most = perSide.compare(0) > 0 ? perSide : ZERO;

@@ -109,6 +109,8 @@ describe('checkHemTaper on a let-down leg', () => {
     expect(plan.withinTolerance).toBe(false);
     expect(plan.feasible).toBe(true);
     expect(plan.warnings[0]!.message).toContain('Take in the inseam and outseam below the finished edge');
+    // The leg narrows (7 in at the edge, 8 in above); it is the old hem that flares: say that, not "the leg widens".
+    expect(plan.warnings[0]!.message).toMatch(/^Measured at the cutting line \(7 1\/2 in flat\), the let-down leg flares wider than the leg above the edge: /);
   });
 
   it('a negative width at the cut is refused on its own field; a measured cut makes widths that run out below the edge plannable', () => {

@@ -1,0 +1,55 @@
+import type { TaperPlan } from '@/lib/allowance/types';
+import { LINE_NAMES, seamWork } from '@/components/calculator/line-names';
+import { Warnings } from '@/components/calculator/Warnings';
+
+// The column says let out or take in; the figure beside it is a size.
+const size = (text: string) => text.replace(/^[-−]/, '');
+
+/** A plain hem's taper check at the bench: turned up, the hem must be as wide as the leg it lies against. */
+export function HemTaperCheck({ taper }: { taper: TaperPlan }) {
+  const [, cut] = taper.lines;
+  if (!cut) return null;
+  return (
+    <section aria-labelledby="hem-taper-heading" data-testid="hem-taper" className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4">
+      <h3 id="hem-taper-heading" className="text-xl font-extrabold">Tapered leg under a plain hem</h3>
+      <p className="text-lg">
+        Turned up, the hem lies against the leg <span className="measure font-extrabold">{cut.belowMark.text}</span> above the finished edge, where it is{' '}
+        <span className="measure font-extrabold">{taper.targetWidth.text}</span> flat.{' '}
+        {taper.withinTolerance ? (
+          <strong className="text-ok">Within tolerance: the hem lies flat, no seam work needed.</strong>
+        ) : taper.feasible === false ? (
+          <strong className="text-cut">The seam allowance is not enough for this let-out.</strong>
+        ) : null}
+      </p>
+      <table className="w-full border-collapse text-left text-lg">
+        <thead>
+          <tr className="border-b-2 border-ink text-base">
+            <th scope="col" className="py-2 pr-2">Line</th>
+            <th scope="col" className="py-2 pr-2">Width now</th>
+            <th scope="col" className="py-2 pr-2">At each seam</th>
+            <th scope="col" className="py-2">Each side of the seam</th>
+          </tr>
+        </thead>
+        <tbody>
+          {taper.lines.map((l) => (
+            <tr key={l.n} className="border-b border-rule">
+              <th scope="row" className="py-2 pr-2 font-semibold">
+                {l.n} {LINE_NAMES[l.name]}
+              </th>
+              <td className="measure py-2 pr-2">
+                {l.width.text}
+                {l.measured && <span className="block text-base text-muted">measured</span>}
+              </td>
+              <td className="py-2 pr-2">
+                <span className="text-muted">{seamWork(l.change.mm)} </span>
+                <span className="measure text-xl font-extrabold">{size(l.perSeam.text)}</span>
+              </td>
+              <td className="measure py-2 text-xl font-semibold">{size(l.perSide.text)}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <Warnings warnings={taper.warnings} />
+    </section>
+  );
+}
