@@ -5,6 +5,7 @@ import { db, type Db } from '@/db';
 import { counterSettings, garments, measurements, payments, priceItems, priceLines, tickets, type CounterSettings, type PriceLine, type Ticket } from '@/db/schema';
 import { checkTaper } from '@/lib/allowance';
 import type { Actor } from '@/lib/api';
+import { letDownFirst } from '@/lib/existing-finish';
 import type { autoLinesInput, lineInput, priceListInput } from '@/lib/counter-request';
 import { isCurrency, type Currency } from '@/lib/pricing/money';
 import { DEFAULT_PRICE_LABELS, PRICE_KEYS } from '@/lib/pricing/price-keys';
@@ -148,7 +149,7 @@ export async function garmentFacts(shopId: string, ticketId: string): Promise<Ga
       garmentId: g.id,
       label: g.description?.trim() || `Garment ${i + 1}`,
       finish,
-      taperLetOut: finish === 'cuff' && own.some((m) => legNeedsLetOut(m.unit, m.values)),
+      taperLetOut: finish === 'cuff' && own.some((m) => legNeedsLetOut(m.unit, m.values, letDownFirst(g.existingFinish))),
       // Noted at intake (or on the garment since): an old cuff is let down before it is made again.
       oldCuff: g.existingFinish === 'cuff',
     };
@@ -170,8 +171,8 @@ function text(values: Stored, field: string): string | undefined {
   return undefined;
 }
 
-/** Runs the engine's taper check on a leg's stored lengths; false when the leg has no taper widths. */
-function legNeedsLetOut(unit: string, raw: unknown): boolean {
+/** Runs the engine's taper check on a leg's stored lengths (as the sheet does: a let-down pair's width at the cut used); false when the leg has no taper widths. */
+function legNeedsLetOut(unit: string, raw: unknown, letDown: boolean): boolean {
   const values = (raw ?? {}) as Stored;
   const [cuffDepth, widthAtEdge, widthAbove, heightAbove] = ['cuffDepth', 'widthAtEdge', 'widthAbove', 'heightAbove'].map((f) => text(values, f));
   if (!cuffDepth || !widthAtEdge || !widthAbove || !heightAbove) return false;
@@ -184,6 +185,7 @@ function legNeedsLetOut(unit: string, raw: unknown): boolean {
       heightAbove,
       hemSection: text(values, 'hemSection'),
       seamAllowance: text(values, 'seamAllowance'),
+      ...(letDown ? { widthAtCut: text(values, 'widthAtCut'), oldCrease: text(values, 'oldCrease') } : {}),
     });
     return needsLetOut(plan);
   } catch {

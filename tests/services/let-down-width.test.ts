@@ -12,6 +12,7 @@ const { handle } = await import('@/db');
 const { readLengths } = await import('@/services/measurements');
 const { updateGarment } = await import('@/services/garments');
 const { garmentSheet } = await import('@/services/cut-sheets');
+const { garmentFacts } = await import('@/services/prices');
 const { makeShop } = await import('./fixtures');
 const { fittingRequest, openTicket, saveFitting } = await import('./garment-fixtures');
 const { flatText, pdfFile } = await import('../lib/cut-sheet/poppler');
@@ -80,5 +81,17 @@ describe('a plain hem on a tapered leg, from the bench', () => {
     await saveFitting(a.tailor, g.id, fittingRequest(leg, leg, 'in', 'slope'));
     const text = await sheetText(g.id);
     expect(text).toContain('the hem must match the leg 1 1/2 in above the edge (7 1/8 in flat)');
+  });
+});
+
+describe('the price of a taper let-out', () => {
+  it('follows the width measured at the cut on a let-down pair, as the sheet does (arithmetic: 7 1/8 in at the cut is within 1/8 in of every line; followed down, 1/4 in to let out)', async () => {
+    const leg = { cuffDepth: '1 1/2', widthAtEdge: '7', widthAbove: '8', heightAbove: '24', widthAtCut: '7 1/8' };
+    const g = await garment('cuff');
+    await saveFitting(a.tailor, g.id, fittingRequest(leg));
+    const facts = async () => (await garmentFacts(a.shopId, g.ticketId)).find((f) => f.garmentId === g.id)!;
+    expect((await facts()).taperLetOut).toBe(false);
+    await updateGarment(a.counter, g.id, { existingFinish: 'unfinished' });
+    expect((await facts()).taperLetOut).toBe(true);
   });
 });
