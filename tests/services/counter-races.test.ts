@@ -9,8 +9,8 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { customers, garments, tickets } = await import('@/db/schema');
-const prices = await import('@/services/prices');
-const pay = await import('@/services/payments');
+const prices = await import('@/services/counter/prices');
+const pay = await import('@/services/counter/payments');
 const { makeShop, TEST_PRICES } = await import('./fixtures');
 
 let a: Shop;

@@ -26,8 +26,8 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { customers, garments, measurements, notices, payments, paymentLinks, tickets } = await import('@/db/schema');
-const prices = await import('@/services/prices');
-const pay = await import('@/services/payments');
+const prices = await import('@/services/counter/prices');
+const pay = await import('@/services/counter/payments');
 const notice = await import('@/services/notices');
 const { makeShop, TEST_PRICES } = await import('./fixtures');
 const { startMailCapture } = await import('../../scripts/mail-capture.mjs');

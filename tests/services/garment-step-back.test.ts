@@ -8,7 +8,7 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { sql } = await import('drizzle-orm');
-const { pickUp } = await import('@/services/payments');
+const { pickUp } = await import('@/services/counter/payments');
 const { garmentsOfTicket } = await import('@/services/garments');
 const { leastAdvanced } = await import('@/lib/garment-steps');
 const { getGarment, moveGarment } = await import('@/services/garments');

@@ -52,7 +52,7 @@ describe('garments', () => {
   });
 
   it('hand over only a ready ticket with nothing left to pay (the counter’s rule)', async () => {
-    const { addLine } = await import('@/services/prices');
+    const { addLine } = await import('@/services/counter/prices');
     const g = await oneGarment();
     for (const to of ['marked', 'cut', 'stitched', 'pressed', 'ready'] as const) await moveGarment(a.tailor, g.id, to);
     await addLine(a.counter, g.ticketId, { source: 'adjust', label: 'Shorten with cuffs', amountMinor: 2500, reason: 'Agreed at the counter' });

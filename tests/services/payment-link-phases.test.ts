@@ -21,9 +21,9 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { customers, paymentLinks, priceLines, tickets } = await import('@/db/schema');
-const prices = await import('@/services/prices');
-const pay = await import('@/services/payments');
-const { sessionKey } = await import('@/services/payment-links');
+const prices = await import('@/services/counter/prices');
+const pay = await import('@/services/counter/payments');
+const { sessionKey } = await import('@/services/counter/payment-links');
 const { makeShop } = await import('./fixtures');
 
 const ORIGIN = 'http://127.0.0.1:4321';

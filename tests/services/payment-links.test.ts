@@ -17,8 +17,8 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { customers, paymentLinks, priceLines, tickets } = await import('@/db/schema');
-const prices = await import('@/services/prices');
-const pay = await import('@/services/payments');
+const prices = await import('@/services/counter/prices');
+const pay = await import('@/services/counter/payments');
 const priceLinesRoute = await import('@/pages/api/tickets/[id]/price-lines/index');
 const { makeShop, TEST_PRICES } = await import('./fixtures');
 

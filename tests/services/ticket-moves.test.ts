@@ -10,8 +10,8 @@ const { db, handle } = await import('@/db');
 const { garments, tickets } = await import('@/db/schema');
 const { createTicket, moveTicket } = await import('@/services/tickets');
 const { garmentsOfTicket } = await import('@/services/garments');
-const prices = await import('@/services/prices');
-const pay = await import('@/services/payments');
+const prices = await import('@/services/counter/prices');
+const pay = await import('@/services/counter/payments');
 const { makeShop } = await import('./fixtures');
 
 let a: Shop;

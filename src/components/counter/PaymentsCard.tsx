@@ -6,7 +6,7 @@ import { FormMessage } from '@/components/Field';
 import { paymentInput } from '@/lib/counter-request';
 import { dateTimeText } from '@/lib/date-text';
 import { formatMoney } from '@/lib/pricing/money';
-import type { CounterSummary } from '@/services/payments';
+import type { CounterSummary } from '@/services/counter/payments';
 import { Money } from './Money';
 import { MoneyField } from './MoneyField';
 import { post, useCounterAction } from './counter-api';

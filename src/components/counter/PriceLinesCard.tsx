@@ -7,7 +7,7 @@ import { Field, FormMessage } from '@/components/Field';
 import { lineInput } from '@/lib/counter-request';
 import { formatMoney } from '@/lib/pricing/money';
 import { PRICE_KEYS, type PriceKey } from '@/lib/pricing/price-keys';
-import type { CounterSummary } from '@/services/payments';
+import type { CounterSummary } from '@/services/counter/payments';
 import { Money } from './Money';
 import { MoneyField } from './MoneyField';
 import { post, useCounterAction, usePriceList } from './counter-api';

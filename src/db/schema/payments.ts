@@ -37,7 +37,7 @@ export const LINK_STATUSES = ['creating', 'open', 'expiring', 'paid', 'expired',
 export const LIVE_LINK_STATUSES = ['open', 'expiring'] as const;
 
 /** Payment links made with the payment service for a ticket's balance; the service is called
- * between two short transactions, never inside one (see `src/services/payment-links.ts`). */
+ * between two short transactions, never inside one (see `src/services/counter/payment-links.ts`). */
 export const paymentLinks = pgTable(
   'payment_links',
   {

@@ -5,7 +5,7 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { renderToStaticMarkup } from 'react-dom/server';
 import type { Notice } from '@/db/schema/notices';
 import { NoticesCard } from '@/components/counter/NoticesCard';
-import type { CounterSummary } from '@/services/payments';
+import type { CounterSummary } from '@/services/counter/payments';
 
 const TICKET = '00000000-0000-4000-8000-000000000001';
 

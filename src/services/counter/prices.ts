@@ -10,9 +10,9 @@ import { isCurrency, type Currency } from '@/lib/pricing/money';
 import { DEFAULT_PRICE_LABELS, PRICE_KEYS } from '@/lib/pricing/price-keys';
 import { priceTicket, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
 import { needsLetOut } from '@/lib/pricing/taper-let-out';
-import { audit } from './audit';
-import { ServiceError } from './errors';
-import { isUuid } from './garments';
+import { audit } from '../audit';
+import { ServiceError } from '../errors';
+import { shopTicket } from '../ticket-core';
 import { withLinksClosed } from './payment-links';
 
 /** The shop's counter settings as the counter reads them. */
@@ -26,14 +26,6 @@ export interface CounterView {
 /** The price list page's data: settings and one entry per priced piece of work. */
 export interface PriceListView extends CounterView {
   items: { key: (typeof PRICE_KEYS)[number]; label: string; amountMinor: number }[];
-}
-
-/** A ticket of the actor's shop; 404 for another shop's ticket or an id that is not one. */
-export async function shopTicket(actor: Pick<Actor, 'shopId'>, ticketId: string): Promise<Ticket> {
-  if (!isUuid(ticketId)) throw new ServiceError(404, 'No such ticket in this shop.');
-  const [row] = await db.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
-  if (!row) throw new ServiceError(404, 'No such ticket in this shop.');
-  return row;
 }
 
 /** The shop's counter settings, the defaults when the lead has not set them. */

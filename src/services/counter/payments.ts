@@ -1,20 +1,18 @@
-// Money for a ticket: the counter's summary, deposits and balances taken at the counter, online
-// payment links through the payment service, its webhook, and handing the trousers over.
+// Money taken for a ticket: payments at the counter, online payment links through the payment
+// service, its webhook, and the claim slip's figures.
 import { randomUUID } from 'node:crypto';
-import { and, asc, desc, eq, inArray, isNotNull } from 'drizzle-orm';
+import { and, asc, eq } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import type { z } from 'zod';
 import { db, type Db } from '@/db';
-import { customers, garments, paymentEvents, paymentLinks, payments, tickets, type Payment, type PaymentLink, type PriceLine, type Ticket } from '@/db/schema';
+import { garments, paymentEvents, paymentLinks, payments, type PaymentLink, type Ticket } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import type { paymentInput } from '@/lib/counter-request';
 import { paymentClient, verifyWebhook, webhookSecret } from '@/lib/payment-service';
 import type { ClaimSlipData } from '@/lib/claim-slip/types';
-import type { Currency } from '@/lib/pricing/money';
-import { balanceOf } from '@/lib/pricing/price-lines';
-import { audit } from './audit';
-import { ServiceError } from './errors';
-import { lockTicket, withTicketLock } from './garments';
+import { audit } from '../audit';
+import { ServiceError } from '../errors';
+import { lockTicket, shopTicket, withTicketLock } from '../ticket-core';
 import {
   closeAtService,
   closeCutShort,
@@ -26,49 +24,11 @@ import {
   STALE_CREATING_SECONDS,
   withLinksClosed,
 } from './payment-links';
-import { counterSettingsOf, linesOf, shopTicket, type CounterView } from './prices';
+import { counterSettingsOf, type CounterView } from './prices';
+import { counterSummary, summaryOf, type CounterSummary } from './summary';
 
-/** Everything the counter panel shows about a ticket's money. */
-export interface CounterSummary {
-  ticket: { id: string; number: number; status: string; dueOn: string | null; customerName: string | null; customerEmail: string | null };
-  currency: Currency;
-  lines: PriceLine[];
-  total: number;
-  paid: number;
-  due: number;
-  payments: Payment[];
-  link: { url: string; amountMinor: number; status: PaymentLink['status'] } | null;
-}
-
-/** The ticket's lines, payments, balance and open payment link. */
-export async function counterSummary(actor: Pick<Actor, 'shopId'>, ticketId: string): Promise<CounterSummary> {
-  const ticket = await shopTicket(actor, ticketId);
-  return summaryOf(ticket, await counterSettingsOf(actor.shopId));
-}
-
-/** The summary of a ticket already read for the shop, with the shop's settings already read
- * (through `q`: the transaction holding the ticket's lock, when there is one). */
-export async function summaryOf(ticket: Ticket, { currency }: Pick<CounterView, 'currency'>, q: Db = db): Promise<CounterSummary> {
-  const { shopId, id: ticketId } = ticket;
-  const [customer] = ticket.customerId ? await q.select().from(customers).where(eq(customers.id, ticket.customerId)) : [];
-  const lines = await linesOf(shopId, ticketId, q);
-  const paidRows = await q.select().from(payments).where(and(eq(payments.shopId, shopId), eq(payments.ticketId, ticketId))).orderBy(asc(payments.at));
-  // The latest link the service has made (one still being asked for has no address yet).
-  const [link] = await q
-    .select()
-    .from(paymentLinks)
-    .where(and(eq(paymentLinks.shopId, shopId), eq(paymentLinks.ticketId, ticketId), isNotNull(paymentLinks.url)))
-    .orderBy(desc(paymentLinks.createdAt))
-    .limit(1);
-  return {
-    ticket: { id: ticket.id, number: ticket.number, status: ticket.status, dueOn: ticket.dueOn, customerName: customer?.name ?? null, customerEmail: customer?.email ?? null },
-    currency,
-    lines,
-    ...balanceOf(lines, paidRows),
-    payments: paidRows,
-    link: link?.url ? { url: link.url, amountMinor: link.amountMinor, status: link.status } : null,
-  };
-}
+export { counterSummary, summaryOf, type CounterSummary };
+export { assertReadyToHandOver, pickUp } from './hand-over';
 
 function isUniqueViolation(e: unknown): boolean {
   for (let err = e as { code?: string; cause?: unknown } | undefined; err; err = err.cause as typeof err) {
@@ -311,36 +271,6 @@ export async function receiveWebhook(payload: string, signature: string | null):
 }
 
 class WebhookRefusal extends Error {}
-
-/** The refusal when the ticket cannot be handed over (not ready, or money due), else null. */
-function handOverRefusal(summary: CounterSummary): ServiceError | null {
-  if (summary.ticket.status !== 'ready') return new ServiceError(422, `Only a ready ticket can be handed over (this one is ${summary.ticket.status}).`);
-  if (summary.due > 0) return new ServiceError(422, 'Take the balance before handing the trousers over.');
-  return null;
-}
-
-/** Throws 422 unless the ticket is ready and nothing is due: the check any path to "collected"
- * needs, made inside the ticket's lock (`withTicketLock`, its transaction and locked row) so it
- * still holds when the move commits. */
-export async function assertReadyToHandOver(tx: Db, ticket: Ticket): Promise<CounterSummary> {
-  const summary = await summaryOf(ticket, await counterSettingsOf(ticket.shopId, tx), tx);
-  const refusal = handOverRefusal(summary);
-  if (refusal) throw refusal;
-  return summary;
-}
-
-/** Hands a ready, fully paid ticket over: every garment and the ticket become collected. */
-export async function pickUp(actor: Actor, ticketId: string): Promise<CounterSummary> {
-  // Checked and written under the ticket's lock: a price line or payment arriving meanwhile waits,
-  // and one that came first is in the balance checked here.
-  await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
-    const summary = await assertReadyToHandOver(tx, ticket);
-    await tx.update(tickets).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
-    await tx.update(garments).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(garments.ticketId, ticketId), eq(garments.shopId, actor.shopId), inArray(garments.status, ['ready'])));
-    await audit(tx, actor.shopId, actor.userId, 'ticket.collected', ticketId, { paid: summary.paid });
-  });
-  return counterSummary(actor, ticketId);
-}
 
 /** The claim slip's data for a ticket of the actor's shop. */
 export async function claimSlipData(actor: Actor, ticketId: string): Promise<ClaimSlipData> {
