@@ -23,7 +23,7 @@ async function readyAndPaid(shop: Shop) {
   const [t] = await db.insert(tickets).values({ shopId: shop.shopId, number: ticketNo, customerId: c!.id, status: 'ready' }).returning();
   await db.insert(garments).values({ shopId: shop.shopId, ticketId: t!.id, status: 'ready', position: 0 });
   await prices.addLine(shop.counter, t!.id, { source: 'list', key: 'plain-hem' });
-  await pay.takePayment(shop.counter, t!.id, { purpose: 'deposit', method: 'cash', amountMinor: 1800 });
+  await pay.takePayment(shop.counter, t!.id, { method: 'cash', amountMinor: 1800 });
   return t!;
 }
 

@@ -47,6 +47,9 @@ describe('garments', () => {
     await expect(moveGarment(a.apprentice, g.id, 'cut')).rejects.toMatchObject({ status: 422 });
     for (const to of ['marked', 'cut', 'stitched', 'pressed', 'ready'] as const) expect((await moveGarment(a.apprentice, g.id, to)).status).toBe(to);
     await expect(moveGarment(a.apprentice, g.id, 'collected')).rejects.toMatchObject({ status: 422 });
+    // Unpriced work is handed over only as "no charge" with a reason (issue 14).
+    const { addLine } = await import('@/services/counter/prices');
+    await addLine(a.counter, g.ticketId, { source: 'no-charge', reason: 'Test work, not priced' });
     expect((await moveGarment(a.counter, g.id, 'collected')).status).toBe('collected');
     await expect(moveGarment(a.lead, g.id, 'collected')).rejects.toMatchObject({ status: 422 });
   });

@@ -234,7 +234,7 @@ describe('closing links in two phases', () => {
     await pay.createPaymentLink(a.counter, t.id, ORIGIN);
     const [link] = await linksOf(t.id);
     await db.update(paymentLinks).set({ status: 'expiring' }).where(eq(paymentLinks.id, link!.id));
-    await pay.takePayment(a.counter, t.id, { purpose: 'deposit', method: 'cash', amountMinor: 500 });
+    await pay.takePayment(a.counter, t.id, { method: 'cash', amountMinor: 500 });
     expect((await linksOf(t.id)).map((l) => l.status)).toEqual(['expired']);
     expect((await service.checkout.sessions.retrieve(link!.sessionId!)).status).toBe('expired');
   });

@@ -1,5 +1,7 @@
-// Handing the trousers over: the one rule every path to "collected" checks (ready, nothing due),
-// and the counter's pickup, which closes the ticket and every ready garment.
+// Handing the trousers over: the one rule every path to "collected" checks (ready, priced or
+// marked "no charge" with a reason, nothing due), and the counter's pickup, which closes the
+// ticket and every ready garment. A credit owed to the customer does not hold the hand-over up:
+// it stays on the ticket until it is settled (refunds.ts).
 import { and, eq, inArray } from 'drizzle-orm';
 import type { Db } from '@/db';
 import { garments, tickets, type Ticket } from '@/db/schema';
@@ -10,9 +12,12 @@ import { withTicketLock } from '../ticket-core';
 import { counterSettingsOf } from './prices';
 import { counterSummary, summaryOf, type CounterSummary } from './summary';
 
-/** The refusal when the ticket cannot be handed over (not ready, or money due), else null. */
+/** The refusal when the ticket cannot be handed over (not ready, no price, or money due), else null. */
 function handOverRefusal(summary: CounterSummary): ServiceError | null {
   if (summary.ticket.status !== 'ready') return new ServiceError(422, `Only a ready ticket can be handed over (this one is ${summary.ticket.status}).`);
+  if (!summary.lines.some((l) => !l.voidedAt)) {
+    return new ServiceError(422, 'This ticket has no price: price the work, or mark it "no charge" with a reason, before handing it over.');
+  }
   if (summary.due > 0) return new ServiceError(422, 'Take the balance before handing the trousers over.');
   return null;
 }
@@ -35,7 +40,7 @@ export async function pickUp(actor: Actor, ticketId: string): Promise<CounterSum
     const summary = await assertReadyToHandOver(tx, ticket);
     await tx.update(tickets).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
     await tx.update(garments).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(garments.ticketId, ticketId), eq(garments.shopId, actor.shopId), inArray(garments.status, ['ready'])));
-    await audit(tx, actor.shopId, actor.userId, 'ticket.collected', ticketId, { paid: summary.paid });
+    await audit(tx, actor.shopId, actor.userId, 'ticket.collected', ticketId, { total: summary.total, paid: summary.paid, refunded: summary.refunded, credit: summary.credit });
   });
   return counterSummary(actor, ticketId);
 }

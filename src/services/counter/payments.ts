@@ -5,7 +5,8 @@ import { and, asc, eq } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import type { z } from 'zod';
 import { db, type Db } from '@/db';
-import { garments, paymentEvents, paymentLinks, payments, type PaymentLink, type Ticket } from '@/db/schema';
+import { customers, garments, paymentEvents, paymentLinks, payments, type PaymentLink, type Ticket } from '@/db/schema';
+import { formatMoney, isCurrency } from '@/lib/pricing/money';
 import type { Actor } from '@/lib/api';
 import type { paymentInput } from '@/lib/counter-request';
 import { paymentClient, verifyWebhook, webhookSecret } from '@/lib/payment-service';
@@ -25,7 +26,8 @@ import {
   withLinksClosed,
 } from './payment-links';
 import { counterSettingsOf, type CounterView } from './prices';
-import { counterSummary, summaryOf, type CounterSummary } from './summary';
+import { applyRefundEvent } from './refunds';
+import { counterSummary, customerCreditOf, summaryOf, type CounterSummary } from './summary';
 
 export { counterSummary, summaryOf, type CounterSummary };
 export { assertReadyToHandOver, pickUp } from './hand-over';
@@ -37,42 +39,45 @@ function isUniqueViolation(e: unknown): boolean {
   return false;
 }
 
+/** Locks the ticket's customer (after the ticket: always in that order) and returns their kept
+ * credit, so two tickets of one customer cannot spend the same credit at once. */
+export async function lockCustomerCredit(tx: Db, ticket: Ticket): Promise<number> {
+  if (!ticket.customerId) return 0;
+  await tx.select({ id: customers.id }).from(customers).where(and(eq(customers.id, ticket.customerId), eq(customers.shopId, ticket.shopId))).for('update');
+  return customerCreditOf(ticket.shopId, ticket.customerId, tx);
+}
+
 /** The refusal of a payment the ticket cannot take now, else the summary it was checked against. */
 async function checkPayment(tx: Db, ticket: Ticket, settings: CounterView, input: z.infer<typeof paymentInput>): Promise<CounterSummary> {
   const before = await summaryOf(ticket, settings, tx);
   if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
-  if (before.payments.some((p) => p.purpose === 'balance')) throw new ServiceError(409, 'The balance of this ticket is already paid.');
-  if (input.purpose === 'deposit') {
-    if (before.payments.some((p) => p.purpose === 'deposit')) throw new ServiceError(409, 'A deposit is already on record for this ticket.');
-    if (input.amountMinor > before.total) throw new ServiceError(422, 'A deposit cannot be more than the ticket total.');
-  } else if (before.due === 0) {
-    throw new ServiceError(422, 'Nothing is due on this ticket.');
-  } else if (input.amountMinor !== before.due) {
-    throw new ServiceError(422, 'Take exactly the balance due (give change from cash).');
+  if (before.due === 0) throw new ServiceError(422, 'Nothing is due on this ticket.');
+  if (input.amountMinor > before.due) throw new ServiceError(422, `Take at most what is due (${formatMoney(before.due, before.currency)}); give change from cash.`);
+  if (input.method === 'credit') {
+    if (!ticket.customerId) throw new ServiceError(422, 'This ticket has no customer, so no credit kept on one.');
+    const credit = await lockCustomerCredit(tx, ticket);
+    if (input.amountMinor > credit) throw new ServiceError(422, `The customer has ${formatMoney(credit, before.currency)} of credit kept.`);
   }
   return before;
 }
 
-/** Takes a deposit (at most the total) or the exact balance due, in cash or by card at the counter. */
+/** Takes any amount up to what is due, in cash, by card at the counter or from the customer's kept
+ * credit; each payment is kept with who took it, how and when. */
 export async function takePayment(actor: Actor, ticketId: string, input: z.infer<typeof paymentInput>): Promise<CounterSummary> {
   const settings = await counterSettingsOf(actor.shopId);
-  try {
-    // An open link asks for the old balance: paid at the counter, the customer must not pay it
-    // again online; after a deposit, its amount is more than is now due. It is closed first.
-    await withLinksClosed(
-      actor.shopId,
-      ticketId,
-      (tx, ticket) => checkPayment(tx, ticket, settings, input),
-      async (tx, ticket) => {
-        const before = await checkPayment(tx, ticket, settings, input);
-        await tx.insert(payments).values({ ...input, shopId: actor.shopId, ticketId, currency: before.currency, takenById: actor.userId });
-        await audit(tx, actor.shopId, actor.userId, `payment.${input.purpose}`, ticketId, { method: input.method, amountMinor: input.amountMinor });
-      },
-    );
-  } catch (e) {
-    if (isUniqueViolation(e)) throw new ServiceError(409, `A ${input.purpose} is already on record for this ticket.`);
-    throw e;
-  }
+  // An open link asks for the old balance: paid at the counter, the customer must not pay it
+  // again online; after a part payment, its amount is more than is now due. It is closed first.
+  await withLinksClosed(
+    actor.shopId,
+    ticketId,
+    (tx, ticket) => checkPayment(tx, ticket, settings, input),
+    async (tx, ticket) => {
+      const before = await checkPayment(tx, ticket, settings, input);
+      const purpose = input.amountMinor === before.due ? 'balance' : 'deposit';
+      await tx.insert(payments).values({ ...input, purpose, shopId: actor.shopId, ticketId, currency: before.currency, takenById: actor.userId });
+      await audit(tx, actor.shopId, actor.userId, `payment.${purpose}`, ticketId, { method: input.method, amountMinor: input.amountMinor });
+    },
+  );
   return counterSummary(actor, ticketId);
 }
 
@@ -237,6 +242,7 @@ export async function receiveWebhook(payload: string, signature: string | null):
     return await db.transaction(async (tx) => {
       const [fresh] = await tx.insert(paymentEvents).values({ id: event.id, type: event.type }).onConflictDoNothing().returning();
       if (!fresh) return { status: 409 as const, message: 'Event already processed.' };
+      if (event.type === 'refund.created' || event.type === 'refund.updated') return { status: 200 as const, message: await applyRefundEvent(tx, event.data.object) };
       if (event.type !== 'checkout.session.completed') return { status: 200 as const, message: 'Ignored.' };
       const session = event.data.object;
       if (session.payment_status !== 'paid') return { status: 200 as const, message: 'Not paid yet.' };
@@ -244,19 +250,21 @@ export async function receiveWebhook(payload: string, signature: string | null):
       if (!known) return { status: 200 as const, message: 'Unknown session.' };
       // Under the ticket's lock, like every other write to its money; the link is read again
       // inside it, as a price change may have just expired it.
-      await lockTicket(tx, known.shopId, known.ticketId);
+      const ticket = await lockTicket(tx, known.shopId, known.ticketId);
       const [link] = await tx.select().from(paymentLinks).where(eq(paymentLinks.id, known.id));
       if (!link) return { status: 200 as const, message: 'Unknown session.' };
       // Being closed, it could still be paid until the service confirmed: the money was taken.
       if (link.status !== 'open' && link.status !== 'expiring') throw new WebhookRefusal('This payment link is no longer open.');
-      const [existing] = await tx.select({ id: payments.id }).from(payments).where(and(eq(payments.ticketId, link.ticketId), eq(payments.purpose, 'balance')));
-      if (existing) throw new WebhookRefusal('The balance of this ticket is already paid.');
+      // The service took the money: it is recorded even if the balance changed since (a payment at
+      // the counter racing the customer online); anything beyond the total shows as a credit owed.
+      const amountMinor = session.amount_total ?? link.amountMinor;
+      const before = await summaryOf(ticket, { currency: isCurrency(link.currency) ? link.currency : 'EUR' }, tx);
       await tx.insert(payments).values({
         shopId: link.shopId,
         ticketId: link.ticketId,
-        purpose: 'balance',
+        purpose: amountMinor >= before.due ? 'balance' : 'deposit',
         method: 'online',
-        amountMinor: session.amount_total ?? link.amountMinor,
+        amountMinor,
         currency: link.currency,
         reference: session.id,
       });
@@ -287,7 +295,7 @@ export async function claimSlipData(actor: Actor, ticketId: string): Promise<Cla
     receivedOn: ticket.createdAt.toISOString().slice(0, 10),
     dueOn: ticket.dueOn,
     garments: items.map((g) => g.description?.trim() || g.kind),
-    lines: summary.lines.map((l) => ({ label: l.reason ? `${l.label} (${l.reason})` : l.label, amountMinor: l.amountMinor })),
+    lines: summary.lines.filter((l) => !l.voidedAt).map((l) => ({ label: l.reason ? `${l.label} (${l.reason})` : l.label, amountMinor: l.amountMinor })),
     currency: summary.currency,
     total: summary.total,
     paid: summary.paid,
