@@ -40,12 +40,12 @@ describe('money that adds up at the counter', () => {
     await page.getByTestId('price-line').first().waitFor();
     await page.getByLabel('Line from the price list').selectOption('cuff-remake');
     await page.getByRole('button', { name: 'Add the line' }).click();
-    await expect.poll(() => page.getByTestId('price-line').count()).toBe(2);
+    await page.getByTestId('price-line').nth(1).waitFor();
     const wrong = page.getByRole('button', { name: /^Void Cuff let down/ });
     await wrong.focus();
     await page.keyboard.press('Enter');
     const reason = page.getByLabel(/Why is .* wrong\?/);
-    await expect.poll(() => reason.evaluate((el) => el === document.activeElement)).toBe(true);
+    await expect.poll(() => reason.evaluate((el) => el === document.activeElement), { timeout: 15_000 }).toBe(true);
     await page.keyboard.type('No old cuff on these: a plain hem only');
     await page.keyboard.press('Enter');
     const voided = page.getByTestId('voided-line');
@@ -60,12 +60,13 @@ describe('money that adds up at the counter', () => {
     await page.getByLabel('Cash', { exact: true }).check();
     await page.getByLabel('Amount (EUR)', { exact: true }).fill('5.00');
     await page.getByRole('button', { name: 'Record the payment' }).click();
-    await expect.poll(() => page.getByTestId('balance-due').textContent()).toBe('€11.50');
+    await page.getByTestId('balance-due').filter({ hasText: '€11.50' }).waitFor();
     await page.getByLabel('Card (at the counter)').check();
     await page.getByLabel('Amount (EUR)', { exact: true }).fill('4.00');
     await page.getByRole('button', { name: 'Record the payment' }).click();
-    await expect.poll(() => page.getByTestId('balance-due').textContent()).toBe('€7.50');
+    await page.getByTestId('balance-due').filter({ hasText: '€7.50' }).waitFor();
     const rows = page.getByTestId('payment-row');
+    await rows.nth(1).waitFor();
     await expect(rows.allTextContents()).resolves.toEqual([expect.stringMatching(/Paid by cash: €5\.00 .*taken by /), expect.stringMatching(/Paid by card at the counter: €4\.00 .*taken by /)]);
   });
 
@@ -78,13 +79,13 @@ describe('money that adds up at the counter', () => {
     await customer.waitForURL('**/paid');
     await customer.context().close();
     await page.reload();
-    await expect.poll(() => page.getByTestId('balance-due').textContent()).toBe('€0.00');
+    await page.getByTestId('balance-due').filter({ hasText: '€0.00' }).waitFor();
 
     await page.getByLabel('Adjustment').fill('Hem turned shorter than asked');
     await page.getByLabel('Amount (EUR, minus to take off)').fill('-3.00');
     await page.getByLabel('Reason').fill('Customer agreed to a discount');
     await page.getByRole('button', { name: 'Add the adjustment' }).click();
-    await expect.poll(() => page.getByTestId('credit-owed').textContent()).toBe('€3.00');
+    await page.getByTestId('credit-owed').filter({ hasText: '€3.00' }).waitFor();
     await page.getByText('The customer has paid €3.00 more than the total: settle it below.').waitFor();
     await page.screenshot({ path: 'test-results/counter-money-credit.png', fullPage: true });
 
@@ -92,13 +93,13 @@ describe('money that adds up at the counter', () => {
     await settle.getByLabel('Refund the online payment').check();
     await expect(settle.getByLabel('Amount (EUR)').inputValue()).resolves.toBe('3.00');
     await settle.getByRole('button', { name: 'Record how it was settled' }).click();
-    await expect.poll(() => page.getByTestId('credit-owed').textContent()).toBe('€0.00');
+    await page.getByTestId('credit-owed').filter({ hasText: '€0.00' }).waitFor();
     // Pending until the service's signed webhook confirms it.
     await expect
       .poll(async () => {
         await page.reload();
         return page.getByTestId('refund-row').first().textContent();
-      }, { timeout: 10_000 })
+      }, { timeout: 30_000, interval: 500 })
       .toMatch(/Online refund: €3\.00 \(done/);
     await page.screenshot({ path: 'test-results/counter-money-refunded.png', fullPage: true });
   });
