@@ -4,7 +4,6 @@
 // short ones under the ticket's lock (like pay links): the refund is recorded `pending` first, so
 // the credit cannot be given back twice meanwhile, then what the service answered is written; its
 // signed webhook (`refund.updated`) confirms a refund still pending, or fails it (the credit returns).
-import { randomUUID } from 'node:crypto';
 import { and, eq, inArray, isNull } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import type { z } from 'zod';
