@@ -1,7 +1,9 @@
 // A local stand-in for the hosted payment service, for development and tests only: the few API
-// endpoints the app calls through the official SDK (checkout sessions: create, read, expire), a
-// hosted "pay" page on loopback, and a webhook signed with the SDK's documented scheme when the
-// customer presses pay. No money moves; sessions live in memory.
+// endpoints the app calls through the official SDK (checkout sessions: create, read, expire;
+// refunds: create, read), a hosted "pay" page on loopback, and webhooks signed with the SDK's
+// documented scheme: `checkout.session.completed` when the customer presses pay, and
+// `refund.updated` a moment after a refund is asked for (it answers `pending` first, as the hosted
+// service may). No money moves; sessions and refunds live in memory.
 import { createServer } from 'node:http';
 import { randomBytes } from 'node:crypto';
 import { fileURLToPath } from 'node:url';
@@ -46,7 +48,7 @@ export function startPaymentsFake({ port = 12111, host = '127.0.0.1', apiKey, we
   const sessions = new Map();
   let base = '';
 
-  async function sendWebhook(session) {
+  async function sendWebhook(session, type = 'checkout.session.completed') {
     const event = {
       id: id('evt'),
       object: 'event',
@@ -55,7 +57,7 @@ export function startPaymentsFake({ port = 12111, host = '127.0.0.1', apiKey, we
       livemode: false,
       pending_webhooks: 1,
       request: { id: null, idempotency_key: null },
-      type: 'checkout.session.completed',
+      type,
       data: { object: session },
     };
     const payload = JSON.stringify(event);
@@ -67,6 +69,20 @@ export function startPaymentsFake({ port = 12111, host = '127.0.0.1', apiKey, we
 
   // Answers to POSTs by Idempotency-Key, kept while the fake runs.
   const answered = new Map();
+  // Paid sessions' payment intents, and the refunds made against them.
+  const intents = new Map();
+  const refunds = new Map();
+
+  function settleRefund(refund) {
+    setTimeout(async () => {
+      refund.status = 'succeeded';
+      try {
+        await sendWebhook(refund, 'refund.updated');
+      } catch (e) {
+        if (!quiet) console.log(`[payments] refund webhook failed: ${e.message}`);
+      }
+    }, 50);
+  }
 
   const api = {
     'POST /v1/checkout/sessions': (_m, form) => {
@@ -95,6 +111,30 @@ export function startPaymentsFake({ port = 12111, host = '127.0.0.1', apiKey, we
       sessions.set(sid, session);
       return [200, session];
     },
+    'POST /v1/refunds': (_m, form) => {
+      const intent = intents.get(form.payment_intent);
+      if (!intent) return [404, { error: { type: 'invalid_request_error', message: `No such payment_intent: '${form.payment_intent}'` } }];
+      const amount = form.amount === undefined ? intent.amount - intent.refunded : Number(form.amount);
+      if (!Number.isInteger(amount) || amount <= 0) return [400, { error: { type: 'invalid_request_error', message: 'amount must be a positive integer' } }];
+      if (amount > intent.amount - intent.refunded) {
+        return [400, { error: { type: 'invalid_request_error', code: 'charge_already_refunded', message: `Refund amount (${amount}) is greater than unrefunded amount on charge (${intent.amount - intent.refunded})` } }];
+      }
+      intent.refunded += amount;
+      const refund = {
+        id: id('re'),
+        object: 'refund',
+        amount,
+        currency: intent.currency,
+        payment_intent: form.payment_intent,
+        status: 'pending',
+        metadata: form.metadata ?? {},
+        created: Math.floor(Date.now() / 1000),
+      };
+      refunds.set(refund.id, refund);
+      settleRefund(refund);
+      return [200, { ...refund }];
+    },
+    'GET /v1/refunds/:id': ([rid]) => (refunds.has(rid) ? [200, refunds.get(rid)] : [404, { error: { type: 'invalid_request_error', message: `No such refund: '${rid}'` } }]),
     'GET /v1/checkout/sessions/:id': ([sid]) => (sessions.has(sid) ? [200, sessions.get(sid)] : [404, { error: { type: 'invalid_request_error', message: `No such checkout.session: ${sid}` } }]),
     'POST /v1/checkout/sessions/:id/expire': ([sid]) => {
       const s = sessions.get(sid);
@@ -164,6 +204,8 @@ ${open ? `<form method="post"><button type="submit">Pay ${escape(money(session.a
       if (session.status !== 'open') return send(409, page('Not open', `<h1>This link is ${session.status === 'complete' ? 'already paid' : 'no longer open'}</h1>`), 'text/html; charset=utf-8');
       session.status = 'complete';
       session.payment_status = 'paid';
+      session.payment_intent = id('pi');
+      intents.set(session.payment_intent, { amount: session.amount_total, currency: session.currency, refunded: 0 });
       let delivered = false;
       try {
         delivered = await sendWebhook(session);
@@ -190,7 +232,7 @@ ${open ? `<form method="post"><button type="submit">Pay ${escape(money(session.a
       const address = server.address();
       const actual = typeof address === 'object' && address ? address.port : port;
       base = `http://${host}:${actual}`;
-      resolve({ port: actual, base, close: () => new Promise((r) => server.close(r)) });
+      resolve({ port: actual, base, refunds, close: () => new Promise((r) => server.close(r)) });
     });
   });
 }

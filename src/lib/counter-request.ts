@@ -41,13 +41,30 @@ export const lineInput = z.discriminatedUnion('source', [
     amountMinor: z.number({ error: 'Enter the amount.' }).int('Whole minor units only.').min(-MAX_MINOR).max(MAX_MINOR).refine((n) => n !== 0, 'An adjustment of nothing changes nothing.'),
     reason: text().trim().min(3, 'Give the reason for the adjustment.').max(300, 'Keep the reason under 300 characters.'),
   }),
+  z.object({
+    source: z.literal('no-charge'),
+    reason: text().trim().min(3, 'Say why this work is handed over with no charge.').max(300, 'Keep the reason under 300 characters.'),
+  }),
 ]);
 
-/** A payment taken at the counter: the deposit at intake, or the balance at pickup. */
+/** Voiding a wrong price line: it stays on the ticket, struck through, with this reason. */
+export const voidLineInput = z.object({
+  reason: text().trim().min(3, 'Give the reason the line is wrong.').max(300, 'Keep the reason under 300 characters.'),
+});
+
+/** A payment taken at the counter, any amount up to what is due: in cash, by card, or from the
+ * credit kept on the customer. Deposit or balance is worked out from what it leaves due. */
 export const paymentInput = z.object({
-  purpose: z.enum(['deposit', 'balance'], { error: 'Choose deposit or balance.' }),
-  method: z.enum(['cash', 'card'], { error: 'Choose cash or card.' }),
+  method: z.enum(['cash', 'card', 'credit'], { error: 'Choose cash, card or kept credit.' }),
   amountMinor: amount('amount').refine((n) => n > 0, 'Enter an amount above zero.'),
+});
+
+/** Settling a credit owed to the customer: cash back, a refund on the counter's card terminal, a
+ * refund of an online payment through the payment service, or kept as credit on the customer. */
+export const refundInput = z.object({
+  method: z.enum(['cash', 'card', 'online', 'credit'], { error: 'Choose how the credit is settled.' }),
+  amountMinor: amount('amount').refine((n) => n > 0, 'Enter an amount above zero.'),
+  reason: text().trim().max(300, 'Keep the note under 300 characters.').optional(),
 });
 
 /** A notice the counter sends by hand. */

@@ -12,8 +12,9 @@ export const statements = {
   ac: ['create', 'read', 'update', 'delete'],
   staff: ['read', 'invite', 'change-role', 'remove'],
   settings: ['update'],
-  // update: the price list; adjust: a ticket's price lines, with a reason.
-  prices: ['read', 'update', 'adjust'],
+  // update: the price list; adjust: a ticket's price lines, with a reason; reduce-any: take off more
+  // than half a ticket's total (LEAD_REDUCTION_SHARE in lib/pricing/price-lines.ts).
+  prices: ['read', 'update', 'adjust', 'reduce-any'],
   // Deposits, balances and online pay links, taken at the counter.
   payments: ['take'],
   presets: ['read', 'create-own', 'manage-house'],
@@ -44,7 +45,7 @@ export const grants = {
     invitation: ['create', 'cancel'],
     staff: ['read', 'invite', 'change-role', 'remove'],
     settings: ['update'],
-    prices: ['read', 'update', 'adjust'],
+    prices: ['read', 'update', 'adjust', 'reduce-any'],
     payments: ['take'],
     presets: ['read', 'create-own', 'manage-house'],
     photos: ['read', 'upload', 'delete'],

@@ -3,7 +3,7 @@
 import { and, asc, eq, inArray, isNotNull, isNull, or } from 'drizzle-orm';
 import type { z } from 'zod';
 import { db, type Db } from '@/db';
-import { customers, garments, member, tickets, user, type Garment, type Ticket } from '@/db/schema';
+import { customers, garments, member, tickets, user, type Garment } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import type { garmentInput, garmentPatch } from '@/lib/bench-requests';
 import type { CustomerCard, GarmentDetail, GarmentSummary, Person, QueueRow } from '@/lib/bench-types';
@@ -11,12 +11,12 @@ import { leastAdvanced, nextStep, stepLabel, type GarmentStep } from '@/lib/garm
 import { can } from '@/lib/roles';
 import { audit } from './audit';
 import { ServiceError } from './errors';
+import { assertReadyToHandOver } from './counter/hand-over';
 import { onGarmentMoved } from './garment-events';
+import { isUuid, lockTicket, withTicketLock } from './ticket-core';
 
-import { isUuid } from '@/lib/ids';
-
-// The one id check (src/lib/ids.ts), here too for the services that already import it from here.
-export { isUuid };
+// The ticket core, here too for the services that already import it from here.
+export { isUuid, lockTicket, withTicketLock };
 
 /** Garments the actor may see: all of the shop's, or (apprentice) their own and unassigned. */
 export function garmentVisibleTo(actor: Actor) {
@@ -133,21 +133,6 @@ export async function getGarment(actor: Actor, id: string): Promise<GarmentDetai
   };
 }
 
-/** Locks a ticket of the shop until the transaction ends and returns it; 404 when there is none. */
-export async function lockTicket(tx: Db, shopId: string, ticketId: string): Promise<Ticket> {
-  if (!isUuid(ticketId)) throw new ServiceError(404, 'No such ticket in this shop.');
-  const [row] = await tx.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId))).for('update');
-  if (!row) throw new ServiceError(404, 'No such ticket in this shop.');
-  return row;
-}
-
-/** Runs work in one transaction holding the ticket's row lock: every write to its status, price
- * lines, payments and links goes through here, so each one sees the others' finished work.
- * Inside, query only through `tx` (PGlite has one connection: `db` would wait for this transaction). */
-export function withTicketLock<T>(shopId: string, ticketId: string, work: (tx: Db, ticket: Ticket) => Promise<T>): Promise<T> {
-  return db.transaction(async (tx) => work(tx, await lockTicket(tx, shopId, ticketId)));
-}
-
 async function writeTicketStatus(tx: Db, shopId: string, ticketId: string): Promise<GarmentStep> {
   const where = and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId));
   const steps = await tx.select({ status: garments.status }).from(garments).where(and(eq(garments.shopId, shopId), eq(garments.ticketId, ticketId)));
@@ -227,7 +212,6 @@ export async function writeStep(actor: Actor, g: Garment, to: GarmentStep, back:
   const row = await withTicketLock(actor.shopId, g.ticketId, async (tx, ticket) => {
     if (to === 'collected') {
       // The counter's rule for every way to "collected": the ticket is ready and nothing is left to pay.
-      const { assertReadyToHandOver } = await import('./payments');
       await assertReadyToHandOver(tx, ticket);
     }
     const [moved] = await tx

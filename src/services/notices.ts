@@ -9,8 +9,9 @@ import { formatMoney } from '@/lib/pricing/money';
 import { audit } from './audit';
 import { ServiceError } from './errors';
 import { isUuid } from './garments';
-import { summaryOf } from './payments';
-import { counterSettingsOf, shopTicket } from './prices';
+import { summaryOf } from './counter/payments';
+import { counterSettingsOf } from './counter/prices';
+import { shopTicket } from './ticket-core';
 
 /** Automatic retries before a notice waits for someone to press "retry". */
 export const MAX_AUTO_ATTEMPTS = 5;

@@ -11,7 +11,7 @@ import { audit, auditMany } from './audit';
 import { ServiceError } from './errors';
 import { onGarmentMoved } from './garment-events';
 import { customerCard, garmentVisibleTo, isUuid, refreshTicketAssignee, refreshTicketStatus, staffOf, summaries, withTicketLock } from './garments';
-import { pickUp } from './payments';
+import { pickUp } from './counter/hand-over';
 
 /** A ticket as listed: the row plus who it is for and how many garments it holds. */
 export type TicketListItem = Ticket & { customerName: string | null; garmentCount: number };

@@ -65,11 +65,10 @@ describe('a ticket across the counter, from deposit to a paid pickup', () => {
     const price = page.getByRole('region', { name: 'Price' });
     await expect(price.getByRole('row', { name: /Total/ }).textContent()).resolves.toContain('€35.00');
 
-    await page.getByLabel('Deposit').check();
-    await page.getByLabel('Cash').check();
+    await page.getByLabel('Cash', { exact: true }).check();
     await page.getByLabel('Amount (EUR)', { exact: true }).fill('10.00');
     await page.getByRole('button', { name: 'Record the payment' }).click();
-    await page.getByText(/Deposit, cash:/).waitFor();
+    await page.getByText(/Paid by cash:/).waitFor();
     await expect(page.getByTestId('balance-due').textContent()).resolves.toBe('€25.00');
 
     const slip = await page.request.get(`/api/tickets/${ticketId}/claim-slip`);
@@ -113,7 +112,7 @@ describe('a ticket across the counter, from deposit to a paid pickup', () => {
     await signInAs(page, 'counter', `/counter/${ticketId}`);
     await expect(page.getByTestId('balance-due').textContent()).resolves.toBe('€0.00');
     await page.getByText('Paid in full.').waitFor();
-    await page.getByText(/Balance, online:/).waitFor();
+    await page.getByText(/Paid by online:/).waitFor();
     await page.getByText(/Ready notice to .*: Sent/).waitFor();
     await page.getByText('sent by the shop setting', { exact: false }).waitFor();
     await page.getByRole('button', { name: 'Hand over and close the ticket' }).click();

@@ -51,7 +51,7 @@ beforeAll(async () => {
 describe('online payment through the local fake', () => {
   it('pays the balance on the hosted page; the webhook records it once and the link closes', async () => {
     const id = await readyPricedTicket();
-    await call('POST', `/api/tickets/${id}/payments`, { cookie: counter, body: { purpose: 'deposit', method: 'cash', amountMinor: 400 } });
+    await call('POST', `/api/tickets/${id}/payments`, { cookie: counter, body: { method: 'cash', amountMinor: 400 } });
     const made = await call('POST', `/api/tickets/${id}/payments/link`, { cookie: counter });
     expect(made.status).toBe(201);
     expect(made.body.link).toMatchObject({ amountMinor: 2000, status: 'open' });
@@ -72,18 +72,42 @@ describe('online payment through the local fake', () => {
     // Paying twice: the hosted page refuses, no new link can be made, the counter cannot take it again.
     expect((await fetch(url, { method: 'POST', redirect: 'manual' })).status).toBe(409);
     expect((await call('POST', `/api/tickets/${id}/payments/link`, { cookie: counter })).status).toBe(422);
-    expect((await call('POST', `/api/tickets/${id}/payments`, { cookie: counter, body: { purpose: 'balance', method: 'cash', amountMinor: 2000 } })).status).toBe(409);
+    expect((await call('POST', `/api/tickets/${id}/payments`, { cookie: counter, body: { method: 'cash', amountMinor: 2000 } })).status).toBe(422);
 
     const handed = await call('POST', `/api/tickets/${id}/pickup`, { cookie: counter });
     expect(handed.status).toBe(200);
     expect(handed.body.ticket.status).toBe('collected');
   });
 
+  it('refunds a credit owed through the payment service: pending, then done by its signed webhook (issue 14)', async () => {
+    const id = await readyPricedTicket();
+    const made = await call('POST', `/api/tickets/${id}/payments/link`, { cookie: counter });
+    expect((await fetch(made.body.link.url, { method: 'POST', redirect: 'manual' })).status).toBe(303);
+    const cut = await call('POST', `/api/tickets/${id}/price-lines`, { cookie: counter, body: { source: 'adjust', label: 'Shorter than asked', amountMinor: -400, reason: 'customer agreed' } });
+    expect(cut.status).toBe(201);
+    const owed = await call('GET', `/api/tickets/${id}/payments`, { cookie: counter });
+    expect([owed.body.total, owed.body.paid, owed.body.due, owed.body.credit]).toEqual([2000, 2400, 0, 400]);
+    // More than is owed back is refused before the service is asked.
+    expect((await call('POST', `/api/tickets/${id}/refunds`, { cookie: counter, body: { method: 'online', amountMinor: 401 } })).status).toBe(422);
+    const asked = await call('POST', `/api/tickets/${id}/refunds`, { cookie: counter, body: { method: 'online', amountMinor: 400 } });
+    expect(asked.status).toBe(201);
+    expect(asked.body.credit).toBe(0);
+    expect(asked.body.refunds[0]).toMatchObject({ method: 'online', amountMinor: 400, reference: expect.stringMatching(/^re_test_/) });
+    let status = asked.body.refunds[0].status;
+    for (let i = 0; i < 50 && status !== 'done'; i += 1) {
+      await new Promise((r) => setTimeout(r, 100));
+      status = (await call('GET', `/api/tickets/${id}/payments`, { cookie: counter })).body.refunds[0].status;
+    }
+    expect(status).toBe('done');
+    const handed = await call('POST', `/api/tickets/${id}/pickup`, { cookie: counter });
+    expect([handed.status, handed.body.credit, handed.body.refunded]).toEqual([200, 0, 400]);
+  });
+
   it('closes the open link when the balance is paid at the counter, so it cannot be paid again online', async () => {
     const id = await readyPricedTicket();
     const made = await call('POST', `/api/tickets/${id}/payments/link`, { cookie: counter });
     const url: string = made.body.link.url;
-    const cash = await call('POST', `/api/tickets/${id}/payments`, { cookie: counter, body: { purpose: 'balance', method: 'cash', amountMinor: 2400 } });
+    const cash = await call('POST', `/api/tickets/${id}/payments`, { cookie: counter, body: { method: 'cash', amountMinor: 2400 } });
     expect(cash.status).toBe(201);
     expect(cash.body.link.status).toBe('expired');
     // The session was expired through the SDK: the hosted page no longer takes money.
@@ -106,7 +130,7 @@ describe('online payment through the local fake', () => {
     const early = await call('PATCH', `/api/tickets/${id}`, { cookie: counter, body: { status: 'collected' } });
     expect(early.status).toBe(422);
     expect(early.body.error).toMatch(/balance/);
-    await call('POST', `/api/tickets/${id}/payments`, { cookie: counter, body: { purpose: 'balance', method: 'cash', amountMinor: 2400 } });
+    await call('POST', `/api/tickets/${id}/payments`, { cookie: counter, body: { method: 'cash', amountMinor: 2400 } });
     const moved = await call('PATCH', `/api/tickets/${id}`, { cookie: counter, body: { status: 'collected' } });
     expect([moved.status, moved.body.status]).toEqual([200, 'collected']);
     const garments = await call('GET', `/api/tickets/${id}`, { cookie: counter });

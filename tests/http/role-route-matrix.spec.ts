@@ -116,6 +116,22 @@ async function pricedTicket(): Promise<string> {
   return id;
 }
 
+/** A priced ticket paid in full, then reduced by 1.00: 1.00 is owed back to the customer. */
+async function creditTicket(): Promise<string> {
+  const id = await pricedTicket();
+  expect((await call('POST', `/api/tickets/${id}/payments`, { cookie: cookies.lead, body: { method: 'cash', amountMinor: 2400 } })).status).toBe(201);
+  const adjusted = await call('POST', `/api/tickets/${id}/price-lines`, { cookie: cookies.lead, body: { source: 'adjust', label: 'Matrix', amountMinor: -100, reason: 'matrix credit' } });
+  expect(adjusted.status).toBe(201);
+  return id;
+}
+
+/** The path that voids the only line of a fresh priced ticket. */
+async function lineToVoid(): Promise<string> {
+  const id = await pricedTicket();
+  const lines = await call('GET', `/api/tickets/${id}/price-lines`, { cookie: cookies.lead });
+  return `/api/tickets/${id}/price-lines/${lines.body[0].id}/void`;
+}
+
 /** A fresh shop A ticket moved to ready, for a customer with an e-mail address. */
 async function readyTicket(): Promise<string> {
   const c = await call('POST', '/api/customers', { cookie: cookies.lead, body: { name: 'Matrix Customer', email: freshEmail('ready') } });
@@ -415,6 +431,20 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       check: (a) => expect([a.body.amountMinor, a.body.reason]).toEqual([-100, 'matrix check']),
     },
   },
+  'tickets/[id]/price-lines/[lineId]/void': {
+    POST: {
+      request: async () => ({ path: await lineToVoid(), body: { reason: 'matrix: wrong line' } }),
+      expect: signedIn(403, { lead: 200, counter: 200, other: 404 }),
+      check: (a) => expect([a.body.voidReason, typeof a.body.voidedAt]).toEqual(['matrix: wrong line', 'string']),
+    },
+  },
+  'tickets/[id]/refunds': {
+    POST: {
+      request: async () => ({ path: `/api/tickets/${await creditTicket()}/refunds`, body: { method: 'cash', amountMinor: 100 } }),
+      expect: signedIn(403, { lead: 201, counter: 201, other: 404 }),
+      check: (a) => expect([a.body.credit, a.body.refunded, a.body.refunds[0].method]).toEqual([0, 100, 'cash']),
+    },
+  },
   'tickets/[id]/price-lines/auto': {
     POST: {
       request: async () => ({ path: `/api/tickets/${await freshTicket()}/price-lines/auto`, body: { rush: false } }),
@@ -430,7 +460,7 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       check: (a) => expect([a.body.total, a.body.paid, a.body.due, a.body.currency]).toEqual([2400, 0, 2400, 'EUR']),
     },
     POST: {
-      request: async () => ({ path: `/api/tickets/${await pricedTicket()}/payments`, body: { purpose: 'deposit', method: 'cash', amountMinor: 1000 } }),
+      request: async () => ({ path: `/api/tickets/${await pricedTicket()}/payments`, body: { method: 'cash', amountMinor: 1000 } }),
       expect: signedIn(403, { lead: 201, counter: 201, other: 404 }),
       check: (a) => expect([a.body.paid, a.body.due]).toEqual([1000, 1400]),
     },
@@ -470,8 +500,13 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
   },
   'tickets/[id]/pickup': {
     POST: {
-      // Ready with nothing priced: nothing due, so those allowed hand it over.
-      request: async () => ({ path: `/api/tickets/${await readyTicket()}/pickup` }),
+      // Ready, marked "no charge" with a reason: nothing due, so those allowed hand it over.
+      request: async () => {
+        const id = await readyTicket();
+        const free = await call('POST', `/api/tickets/${id}/price-lines`, { cookie: cookies.lead, body: { source: 'no-charge', reason: 'matrix: nothing to charge' } });
+        expect(free.status).toBe(201);
+        return { path: `/api/tickets/${id}/pickup` };
+      },
       expect: signedIn(403, { lead: 200, counter: 200, other: 404 }),
       check: (a) => expect(a.body.ticket.status).toBe('collected'),
     },

@@ -9,8 +9,8 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { customers, garments, tickets } = await import('@/db/schema');
-const prices = await import('@/services/prices');
-const pay = await import('@/services/payments');
+const prices = await import('@/services/counter/prices');
+const pay = await import('@/services/counter/payments');
 const { makeShop, TEST_PRICES } = await import('./fixtures');
 
 let a: Shop;
@@ -23,7 +23,7 @@ async function readyAndPaid(shop: Shop) {
   const [t] = await db.insert(tickets).values({ shopId: shop.shopId, number: ticketNo, customerId: c!.id, status: 'ready' }).returning();
   await db.insert(garments).values({ shopId: shop.shopId, ticketId: t!.id, status: 'ready', position: 0 });
   await prices.addLine(shop.counter, t!.id, { source: 'list', key: 'plain-hem' });
-  await pay.takePayment(shop.counter, t!.id, { purpose: 'deposit', method: 'cash', amountMinor: 1800 });
+  await pay.takePayment(shop.counter, t!.id, { method: 'cash', amountMinor: 1800 });
   return t!;
 }
 

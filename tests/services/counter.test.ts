@@ -1,5 +1,5 @@
-// The counter on the database: price list, lines from garments, payments (one deposit, one
-// balance), the signed and idempotent webhook, pickup, and ready notices through a real SMTP
+// The counter on the database: price list, lines from garments, payments (any number, up to what
+// is due), the signed and idempotent webhook, pickup, and ready notices through a real SMTP
 // capture, including a failure on a closed port and its retry.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import type { Shop } from './fixtures';
@@ -26,8 +26,8 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { customers, garments, measurements, notices, payments, paymentLinks, tickets } = await import('@/db/schema');
-const prices = await import('@/services/prices');
-const pay = await import('@/services/payments');
+const prices = await import('@/services/counter/prices');
+const pay = await import('@/services/counter/payments');
 const notice = await import('@/services/notices');
 const { makeShop, TEST_PRICES } = await import('./fixtures');
 const { startMailCapture } = await import('../../scripts/mail-capture.mjs');
@@ -123,33 +123,34 @@ describe('price lines', () => {
   it("answer 404 for another shop's ticket", async () => {
     const t = await ticketFor(b);
     await expect(prices.listLines(a.counter, t.id)).rejects.toMatchObject({ status: 404 });
-    await expect(pay.takePayment(a.counter, t.id, { purpose: 'deposit', method: 'cash', amountMinor: 100 })).rejects.toMatchObject({ status: 404 });
+    await expect(pay.takePayment(a.counter, t.id, { method: 'cash', amountMinor: 100 })).rejects.toMatchObject({ status: 404 });
   });
 });
 
 describe('payments at the counter', () => {
-  it('take a deposit, then exactly the balance; a second balance is refused', async () => {
+  it('take part payments up to what is due; nothing once paid; a later price rise is due again', async () => {
     const t = await priced(a);
-    const afterDeposit = await pay.takePayment(a.counter, t.id, { purpose: 'deposit', method: 'cash', amountMinor: 1000 });
+    const afterDeposit = await pay.takePayment(a.counter, t.id, { method: 'cash', amountMinor: 1000 });
     expect([afterDeposit.paid, afterDeposit.due]).toEqual([1000, 1600]);
-    await expect(pay.takePayment(a.counter, t.id, { purpose: 'deposit', method: 'card', amountMinor: 500 })).rejects.toMatchObject({ status: 409 });
-    await expect(pay.takePayment(a.counter, t.id, { purpose: 'balance', method: 'card', amountMinor: 1500 })).rejects.toMatchObject({ status: 422 });
-    const paid = await pay.takePayment(a.counter, t.id, { purpose: 'balance', method: 'card', amountMinor: 1600 });
+    await pay.takePayment(a.counter, t.id, { method: 'card', amountMinor: 500 });
+    await expect(pay.takePayment(a.counter, t.id, { method: 'card', amountMinor: 1101 })).rejects.toMatchObject({ status: 422 });
+    const paid = await pay.takePayment(a.counter, t.id, { method: 'card', amountMinor: 1100 });
     expect(paid.due).toBe(0);
-    await expect(pay.takePayment(a.counter, t.id, { purpose: 'balance', method: 'cash', amountMinor: 1600 })).rejects.toMatchObject({ status: 409 });
-    await expect(prices.addLine(a.counter, t.id, { source: 'list', key: 'rush' })).rejects.toMatchObject({ status: 422 });
+    await expect(pay.takePayment(a.counter, t.id, { method: 'cash', amountMinor: 1600 })).rejects.toMatchObject({ status: 422 });
+    await prices.addLine(a.counter, t.id, { source: 'list', key: 'rush' });
+    expect((await pay.counterSummary(a.counter, t.id)).due).toBe(1000);
   });
 
   it('refuse a deposit above the total', async () => {
     const t = await priced(a);
-    await expect(pay.takePayment(a.counter, t.id, { purpose: 'deposit', method: 'cash', amountMinor: 2601 })).rejects.toMatchObject({ status: 422 });
+    await expect(pay.takePayment(a.counter, t.id, { method: 'cash', amountMinor: 2601 })).rejects.toMatchObject({ status: 422 });
   });
 
   it('hand over only a ready ticket with nothing due, closing every garment', async () => {
     const t = await priced(a, { status: 'ready' });
     await db.insert(garments).values({ shopId: a.shopId, ticketId: t.id, finish: 'cuff', status: 'ready' });
     await expect(pay.pickUp(a.counter, t.id)).rejects.toMatchObject({ status: 422 });
-    await pay.takePayment(a.counter, t.id, { purpose: 'balance', method: 'cash', amountMinor: 2600 });
+    await pay.takePayment(a.counter, t.id, { method: 'cash', amountMinor: 2600 });
     const done = await pay.pickUp(a.counter, t.id);
     expect(done.ticket.status).toBe('collected');
     const left = await db.select().from(garments).where(eq(garments.ticketId, t.id));
@@ -194,18 +195,20 @@ describe('payment webhook', () => {
     expect(await db.select().from(payments).where(eq(payments.ticketId, t.id))).toEqual([]);
   });
 
-  it('refuses to take the balance twice: a second link paid after the first, or after cash', async () => {
+  it('records money the service took twice as a credit owed; a link closed before cash was taken stays refused', async () => {
     const t = await priced(a);
     const first = await openLink(a, t.id, 2600);
     const second = await openLink(a, t.id, 2600);
     const one = signedEvent(completed(first, 2600));
     const two = signedEvent(completed(second, 2600));
     expect((await pay.receiveWebhook(one.payload, one.signature)).status).toBe(200);
-    expect(await pay.receiveWebhook(two.payload, two.signature)).toEqual({ status: 409, message: 'The balance of this ticket is already paid.' });
+    // The service took the money twice: it is on record, and owed back, never lost.
+    expect((await pay.receiveWebhook(two.payload, two.signature)).status).toBe(200);
+    expect(await pay.counterSummary(a.counter, t.id)).toMatchObject({ paid: 5200, due: 0, credit: 2600 });
 
     const cash = await priced(a);
     const link = await openLink(a, cash.id, 2600);
-    await pay.takePayment(a.counter, cash.id, { purpose: 'balance', method: 'cash', amountMinor: 2600 });
+    await pay.takePayment(a.counter, cash.id, { method: 'cash', amountMinor: 2600 });
     const late = signedEvent(completed(link, 2600));
     expect((await pay.receiveWebhook(late.payload, late.signature)).status).toBe(409);
     expect(await db.select().from(payments).where(eq(payments.ticketId, cash.id))).toHaveLength(1);
@@ -234,7 +237,7 @@ describe('ready notices', () => {
   it('go out through SMTP with the balance due and the shop hours', async () => {
     mailTarget.port = capture.port;
     const t = await priced(a, { status: 'ready', email: 'orrin.ready@example.com' });
-    await pay.takePayment(a.counter, t.id, { purpose: 'deposit', method: 'cash', amountMinor: 1000 });
+    await pay.takePayment(a.counter, t.id, { method: 'cash', amountMinor: 1000 });
     const sent = await notice.sendReadyNotice(a.counter, t.id);
     expect([sent.status, sent.attempts]).toEqual(['sent', 1]);
     const mail = captured().find((m) => m.to.includes('orrin.ready@example.com'))!;

@@ -12,7 +12,7 @@ const { auditEvents, measurements } = await import('@/db/schema');
 const { intakeRequest, garmentPatch } = await import('@/lib/bench-requests');
 const tickets = await import('@/services/tickets');
 const garmentsSvc = await import('@/services/garments');
-const prices = await import('@/services/prices');
+const prices = await import('@/services/counter/prices');
 const { makeShop, TEST_PRICES } = await import('./fixtures');
 
 let a: Shop;

@@ -8,7 +8,7 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { sql } = await import('drizzle-orm');
-const { pickUp } = await import('@/services/payments');
+const { pickUp } = await import('@/services/counter/payments');
 const { garmentsOfTicket } = await import('@/services/garments');
 const { leastAdvanced } = await import('@/lib/garment-steps');
 const { getGarment, moveGarment } = await import('@/services/garments');
@@ -17,6 +17,10 @@ const { garmentMovedListeners } = await import('@/services/garment-events');
 const { fittingOf } = await import('@/services/measurements');
 const { makeShop } = await import('./fixtures');
 const { openTicket } = await import('./garment-fixtures');
+const { addLine } = await import('@/services/counter/prices');
+
+/** Unpriced work is handed over only as "no charge" with a reason (issue 14): these tests price nothing. */
+const noCharge = (shop: Shop, ticketId: string) => addLine(shop.counter, ticketId, { source: 'no-charge', reason: 'Test work, not priced' });
 
 let a: Shop;
 let b: Shop;
@@ -28,7 +32,8 @@ beforeAll(async () => {
 afterAll(() => handle.close());
 
 async function garmentAt(steps: readonly string[], shop = a, assigneeId: string | null = null) {
-  const { garment } = await openTicket(shop, { customer: { name: 'Step Back Customer' }, garments: [{ description: 'Test trousers', assigneeId }] });
+  const { ticket, garment } = await openTicket(shop, { customer: { name: 'Step Back Customer' }, garments: [{ description: 'Test trousers', assigneeId }] });
+  if (steps.includes('collected')) await noCharge(shop, ticket.id);
   for (const to of steps) await moveGarment(to === 'collected' ? shop.counter : shop.lead, garment.id, to as never);
   return garment;
 }
@@ -96,6 +101,7 @@ describe('stepping a garment back', () => {
     for (let round = 0; round < 12; round += 1) {
       const { ticket, garment } = await openTicket(a, { customer: { name: 'Step Back Race' }, garments: [{ description: 'Grey flannel' }, { description: 'Navy twill' }] });
       const [, second] = await garmentsOfTicket(a.shopId, ticket.id);
+      await noCharge(a, ticket.id);
       for (const to of ['marked', 'cut', 'stitched', 'pressed', 'ready'] as const) {
         await moveGarment(a.lead, garment.id, to);
         await moveGarment(a.lead, second!.id, to);

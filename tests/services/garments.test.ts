@@ -47,12 +47,15 @@ describe('garments', () => {
     await expect(moveGarment(a.apprentice, g.id, 'cut')).rejects.toMatchObject({ status: 422 });
     for (const to of ['marked', 'cut', 'stitched', 'pressed', 'ready'] as const) expect((await moveGarment(a.apprentice, g.id, to)).status).toBe(to);
     await expect(moveGarment(a.apprentice, g.id, 'collected')).rejects.toMatchObject({ status: 422 });
+    // Unpriced work is handed over only as "no charge" with a reason (issue 14).
+    const { addLine } = await import('@/services/counter/prices');
+    await addLine(a.counter, g.ticketId, { source: 'no-charge', reason: 'Test work, not priced' });
     expect((await moveGarment(a.counter, g.id, 'collected')).status).toBe('collected');
     await expect(moveGarment(a.lead, g.id, 'collected')).rejects.toMatchObject({ status: 422 });
   });
 
   it('hand over only a ready ticket with nothing left to pay (the counter’s rule)', async () => {
-    const { addLine } = await import('@/services/prices');
+    const { addLine } = await import('@/services/counter/prices');
     const g = await oneGarment();
     for (const to of ['marked', 'cut', 'stitched', 'pressed', 'ready'] as const) await moveGarment(a.tailor, g.id, to);
     await addLine(a.counter, g.ticketId, { source: 'adjust', label: 'Shorten with cuffs', amountMinor: 2500, reason: 'Agreed at the counter' });

@@ -21,9 +21,9 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { customers, paymentLinks, priceLines, tickets } = await import('@/db/schema');
-const prices = await import('@/services/prices');
-const pay = await import('@/services/payments');
-const { sessionKey } = await import('@/services/payment-links');
+const prices = await import('@/services/counter/prices');
+const pay = await import('@/services/counter/payments');
+const { sessionKey } = await import('@/services/counter/payment-links');
 const { makeShop } = await import('./fixtures');
 
 const ORIGIN = 'http://127.0.0.1:4321';
@@ -234,7 +234,7 @@ describe('closing links in two phases', () => {
     await pay.createPaymentLink(a.counter, t.id, ORIGIN);
     const [link] = await linksOf(t.id);
     await db.update(paymentLinks).set({ status: 'expiring' }).where(eq(paymentLinks.id, link!.id));
-    await pay.takePayment(a.counter, t.id, { purpose: 'deposit', method: 'cash', amountMinor: 500 });
+    await pay.takePayment(a.counter, t.id, { method: 'cash', amountMinor: 500 });
     expect((await linksOf(t.id)).map((l) => l.status)).toEqual(['expired']);
     expect((await service.checkout.sessions.retrieve(link!.sessionId!)).status).toBe('expired');
   });

@@ -17,8 +17,8 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { customers, paymentLinks, priceLines, tickets } = await import('@/db/schema');
-const prices = await import('@/services/prices');
-const pay = await import('@/services/payments');
+const prices = await import('@/services/counter/prices');
+const pay = await import('@/services/counter/payments');
 const priceLinesRoute = await import('@/pages/api/tickets/[id]/price-lines/index');
 const { makeShop, TEST_PRICES } = await import('./fixtures');
 
@@ -70,7 +70,7 @@ describe('making a pay link', () => {
   it('replaces the open link once the amount due has changed', async () => {
     const t = await pricedTicket(a);
     const first = await pay.createPaymentLink(a.counter, t.id, ORIGIN);
-    await pay.takePayment(a.counter, t.id, { purpose: 'deposit', method: 'cash', amountMinor: 500 });
+    await pay.takePayment(a.counter, t.id, { method: 'cash', amountMinor: 500 });
     const second = await pay.createPaymentLink(a.counter, t.id, ORIGIN);
     expect(second.link).toMatchObject({ amountMinor: 1300, status: 'open' });
     expect(second.link!.url).not.toBe(first.link!.url);
@@ -93,7 +93,7 @@ describe('a price change closes the open pay link at the service first', () => {
     const t = await pricedTicket(a);
     await pay.createPaymentLink(a.counter, t.id, ORIGIN);
     const [link] = await linksOf(t.id);
-    await pay.takePayment(a.counter, t.id, { purpose: 'deposit', method: 'cash', amountMinor: 500 });
+    await pay.takePayment(a.counter, t.id, { method: 'cash', amountMinor: 500 });
     expect((await linksOf(t.id)).map((l) => l.status)).toEqual(['expired']);
     expect((await service.checkout.sessions.retrieve(link!.sessionId!)).status).toBe('expired');
   });
@@ -126,7 +126,7 @@ describe('when the payment service cannot be reached', () => {
     await pay.createPaymentLink(a.counter, t.id, ORIGIN);
     await fake.close();
     await expect(prices.addLine(a.counter, t.id, rush)).rejects.toMatchObject({ status: 503 });
-    await expect(pay.takePayment(a.counter, t.id, { purpose: 'balance', method: 'cash', amountMinor: 1800 })).rejects.toMatchObject({ status: 503 });
+    await expect(pay.takePayment(a.counter, t.id, { method: 'cash', amountMinor: 1800 })).rejects.toMatchObject({ status: 503 });
 
     // The same through the endpoint: JSON with the reason, not a 500.
     const c = a.counter;

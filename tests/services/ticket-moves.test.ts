@@ -10,8 +10,8 @@ const { db, handle } = await import('@/db');
 const { garments, tickets } = await import('@/db/schema');
 const { createTicket, moveTicket } = await import('@/services/tickets');
 const { garmentsOfTicket } = await import('@/services/garments');
-const prices = await import('@/services/prices');
-const pay = await import('@/services/payments');
+const prices = await import('@/services/counter/prices');
+const pay = await import('@/services/counter/payments');
 const { makeShop } = await import('./fixtures');
 
 let a: Shop;
@@ -64,7 +64,7 @@ describe('moving a ticket', () => {
     for (const step of STEPS_TO_READY) await moveTicket(a.lead, t.id, step);
     await prices.addLine(a.counter, t.id, { source: 'adjust', label: 'Two hems', amountMinor: 3000, reason: 'agreed at intake' });
     await expect(moveTicket(a.counter, t.id, 'collected')).rejects.toMatchObject({ status: 422, message: expect.stringMatching(/balance/) });
-    await pay.takePayment(a.counter, t.id, { purpose: 'balance', method: 'card', amountMinor: 3000 });
+    await pay.takePayment(a.counter, t.id, { method: 'card', amountMinor: 3000 });
 
     await jam(second.id);
     await expect(moveTicket(a.counter, t.id, 'collected')).rejects.toThrow();

@@ -142,6 +142,10 @@ describe('tickets', () => {
     for (const s of ['marked', 'cut', 'stitched', 'pressed', 'ready'] as const) await moveTicket(a.tailor, t.id, s);
     await expect(moveTicket(a.apprentice, t.id, 'collected')).rejects.toMatchObject({ status: 422 });
     await expect(moveTicket(a.tailor, t.id, 'collected')).rejects.toMatchObject({ status: 422 });
+    // Unpriced work is handed over only as "no charge" with a reason (issue 14).
+    await expect(moveTicket(a.counter, t.id, 'collected')).rejects.toMatchObject({ status: 422, message: expect.stringMatching(/no price/) });
+    const { addLine } = await import('@/services/counter/prices');
+    await addLine(a.counter, t.id, { source: 'no-charge', reason: 'Test work, not priced' });
     expect((await moveTicket(a.counter, t.id, 'collected')).status).toBe('collected');
   });
 

@@ -2,7 +2,7 @@
 import type { Notice } from '@/db/schema/notices';
 import { FormMessage } from '@/components/Field';
 import { dateTimeText } from '@/lib/date-text';
-import type { CounterSummary } from '@/services/payments';
+import type { CounterSummary } from '@/services/counter/payments';
 import { post, useCounterAction, useNotices } from './counter-api';
 
 const STATE: Record<Notice['status'], { text: string; look: string }> = {

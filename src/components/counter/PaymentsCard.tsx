@@ -1,62 +1,90 @@
-// Deposit, balance and payments: take cash or card at the counter, or make an online payment link.
+// Money at the counter: total, paid, due or the credit owed to the customer; every payment and
+// refund with who, how and when; taking any amount up to what is due; settling a credit (cash
+// back, card terminal, online refund through the payment service, or kept on the customer); and
+// an online payment link.
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { FormMessage } from '@/components/Field';
-import { paymentInput } from '@/lib/counter-request';
+import { paymentInput, refundInput } from '@/lib/counter-request';
 import { dateTimeText } from '@/lib/date-text';
 import { formatMoney } from '@/lib/pricing/money';
-import type { CounterSummary } from '@/services/payments';
+import type { CounterSummary } from '@/services/counter/payments';
 import { Money } from './Money';
 import { MoneyField } from './MoneyField';
 import { post, useCounterAction } from './counter-api';
 
 type Pay = z.infer<typeof paymentInput>;
-const PURPOSE = { deposit: 'Deposit', balance: 'Balance' } as const;
-const METHOD = { cash: 'cash', card: 'card', online: 'online' } as const;
+type Refund = z.infer<typeof refundInput>;
+const PAID_BY = { cash: 'cash', card: 'card at the counter', online: 'online', credit: 'kept credit' } as const;
+const GIVEN_BACK = { cash: 'Cash back', card: 'Card refund at the counter', online: 'Online refund', credit: 'Kept as credit' } as const;
+const REFUND_STATE = { pending: 'waiting for the payment service', done: 'done', failed: 'failed' } as const;
+
+function Choice<T extends string>({ name, options, register, legend }: { name: string; options: [T, string, boolean?][]; register: (n: never) => object; legend: string }) {
+  return (
+    <fieldset className="flex flex-wrap gap-4">
+      <legend className="mb-1 font-semibold">{legend}</legend>
+      {options.map(([value, label, disabled]) => (
+        <label key={value} className="inline-flex min-h-11 items-center gap-2 text-lg">
+          <input type="radio" value={value} {...register(name as never)} disabled={disabled} className="h-6 w-6" />
+          {label}
+        </label>
+      ))}
+    </fieldset>
+  );
+}
 
 function TakePayment({ s }: { s: CounterSummary }) {
-  const hasDeposit = s.payments.some((p) => p.purpose === 'deposit');
-  const purpose = hasDeposit || s.paid > 0 ? 'balance' : 'deposit';
-  const { register, handleSubmit, control, watch } = useForm<Pay>({
-    resolver: zodResolver(paymentInput),
-    defaultValues: { purpose, method: 'cash', amountMinor: purpose === 'balance' ? s.due : Number.NaN },
-  });
+  const { register, handleSubmit, control } = useForm<Pay>({ resolver: zodResolver(paymentInput), defaultValues: { method: 'cash', amountMinor: s.due } });
   const take = useCounterAction(s.ticket.id, (v: Pay) => post(s.ticket.id, 'payments', v));
-  const chosen = watch('purpose');
   return (
     <form noValidate aria-label="Take a payment" onSubmit={handleSubmit((v) => take.mutate(v))} className="mt-4 flex flex-col gap-3 border-t border-rule pt-4">
-      <fieldset className="flex flex-wrap gap-4">
-        <legend className="mb-1 font-semibold">For</legend>
-        {(['deposit', 'balance'] as const).map((p) => (
-          <label key={p} className="inline-flex min-h-11 items-center gap-2 text-lg">
-            <input type="radio" value={p} {...register('purpose')} disabled={p === 'deposit' && hasDeposit} className="h-6 w-6" />
-            {PURPOSE[p]}
-          </label>
-        ))}
-      </fieldset>
-      <fieldset className="flex flex-wrap gap-4">
-        <legend className="mb-1 font-semibold">Paid by</legend>
-        {(['cash', 'card'] as const).map((m) => (
-          <label key={m} className="inline-flex min-h-11 items-center gap-2 text-lg">
-            <input type="radio" value={m} {...register('method')} className="h-6 w-6" />
-            {m === 'cash' ? 'Cash' : 'Card (at the counter)'}
-          </label>
-        ))}
-      </fieldset>
-      <MoneyField
-        control={control}
-        name="amountMinor"
-        label={`Amount (${s.currency})`}
-        id="pay-amount"
-        currency={s.currency}
-        hint={chosen === 'balance' ? `The balance due is ${formatMoney(s.due, s.currency)}.` : 'Up to the ticket total.'}
+      <h3 className="font-extrabold">Take a payment</h3>
+      <Choice<Pay['method']>
+        legend="Paid by"
+        register={register as never}
+        name="method"
+        options={[
+          ['cash', 'Cash'],
+          ['card', 'Card (at the counter)'],
+          ['credit', `Kept credit (${formatMoney(s.customerCredit, s.currency)})`, s.customerCredit <= 0],
+        ]}
       />
+      <MoneyField control={control} name="amountMinor" label={`Amount (${s.currency})`} id="pay-amount" currency={s.currency} hint={`Any amount up to the ${formatMoney(s.due, s.currency)} due; split it over several payments if the customer wants.`} />
       <div className="flex flex-wrap items-center gap-3">
         <button type="submit" disabled={take.isPending} className="min-h-11 rounded bg-accent px-5 py-2 text-lg font-semibold text-white disabled:opacity-60">
           Record the payment
         </button>
         {take.error && <FormMessage kind="error">{take.error.message}</FormMessage>}
+      </div>
+    </form>
+  );
+}
+
+function SettleCredit({ s }: { s: CounterSummary }) {
+  const online = s.payments.some((p) => p.method === 'online');
+  const { register, handleSubmit, control } = useForm<Refund>({ resolver: zodResolver(refundInput), defaultValues: { method: online ? 'online' : 'cash', amountMinor: s.credit, reason: '' } });
+  const settle = useCounterAction(s.ticket.id, (v: Refund) => post(s.ticket.id, 'refunds', v));
+  return (
+    <form noValidate aria-label="Settle the credit" onSubmit={handleSubmit((v) => settle.mutate(v))} className="mt-4 flex flex-col gap-3 border-t border-rule pt-4">
+      <h3 className="font-extrabold">Settle the credit owed</h3>
+      <Choice<Refund['method']>
+        legend="Give it back as"
+        register={register as never}
+        name="method"
+        options={[
+          ['cash', 'Cash back'],
+          ['card', 'Card refund at the counter'],
+          ['online', 'Refund the online payment', !online],
+          ['credit', 'Keep as credit for the customer', !s.ticket.customerId],
+        ]}
+      />
+      <MoneyField control={control} name="amountMinor" label={`Amount (${s.currency})`} id="refund-amount" currency={s.currency} hint={`Up to the ${formatMoney(s.credit, s.currency)} owed.`} />
+      <div className="flex flex-wrap items-center gap-3">
+        <button type="submit" disabled={settle.isPending} className="min-h-11 rounded bg-accent px-5 py-2 text-lg font-semibold text-white disabled:opacity-60">
+          Record how it was settled
+        </button>
+        {settle.error && <FormMessage kind="error">{settle.error.message}</FormMessage>}
       </div>
     </form>
   );
@@ -86,15 +114,16 @@ function PayLink({ s }: { s: CounterSummary }) {
   );
 }
 
-/** Total, paid and due in large figures, the payments on record, and taking the next one. */
+/** Total, paid and due (or the credit owed) in large figures, the money on record, and the next step. */
 export function PaymentsCard({ s, canTake }: { s: CounterSummary; canTake: boolean }) {
-  const settled = s.payments.some((p) => p.purpose === 'balance') || (s.total > 0 && s.due === 0);
+  const settled = s.total > 0 && s.due === 0 && s.credit === 0;
+  const open = s.ticket.status !== 'collected';
   return (
     <section aria-labelledby="pay-h" className="rounded border-2 border-rule bg-card p-4">
       <h2 id="pay-h" className="text-xl font-extrabold">
         Payments
       </h2>
-      <dl className="mt-2 grid grid-cols-3 gap-3 text-center">
+      <dl className="mt-2 grid grid-cols-2 gap-3 text-center sm:grid-cols-4">
         <div>
           <dt className="text-muted">Total</dt>
           <dd className="text-2xl font-bold">
@@ -102,9 +131,9 @@ export function PaymentsCard({ s, canTake }: { s: CounterSummary; canTake: boole
           </dd>
         </div>
         <div>
-          <dt className="text-muted">Paid</dt>
+          <dt className="text-muted">Paid{s.refunded > 0 ? ' (less given back)' : ''}</dt>
           <dd className="text-2xl font-bold">
-            <Money minor={s.paid} currency={s.currency} />
+            <Money minor={s.paid - s.refunded} currency={s.currency} />
           </dd>
         </div>
         <div>
@@ -113,21 +142,47 @@ export function PaymentsCard({ s, canTake }: { s: CounterSummary; canTake: boole
             <Money minor={s.due} currency={s.currency} />
           </dd>
         </div>
+        <div>
+          <dt className="text-muted">Owed to the customer</dt>
+          <dd className={`text-4xl font-extrabold ${s.credit > 0 ? 'text-warn' : ''}`} data-testid="credit-owed">
+            <Money minor={s.credit} currency={s.currency} />
+          </dd>
+        </div>
       </dl>
-      {s.payments.length > 0 && (
-        <ul className="mt-3 flex flex-col gap-1 text-lg" aria-label="Payments on record">
+      {s.credit > 0 && (
+        <p className="mt-3 rounded border-2 border-warn px-3 py-2 font-semibold text-warn" role="status">
+          The customer has paid {formatMoney(s.credit, s.currency)} more than the total: settle it below.
+        </p>
+      )}
+      {(s.payments.length > 0 || s.refunds.length > 0) && (
+        <ul className="mt-3 flex flex-col gap-1 text-lg" aria-label="Money on record">
           {s.payments.map((p) => (
-            <li key={p.id}>
-              {PURPOSE[p.purpose]}, {METHOD[p.method]}: <Money minor={p.amountMinor} currency={s.currency} className="font-semibold" />{' '}
-              <span className="text-muted">({dateTimeText(p.at)})</span>
+            <li key={p.id} data-testid="payment-row">
+              Paid by {PAID_BY[p.method]}: <Money minor={p.amountMinor} currency={s.currency} className="font-semibold" />{' '}
+              <span className="text-muted">
+                ({dateTimeText(p.at)}
+                {p.takenByName ? `, taken by ${p.takenByName}` : p.method === 'online' ? ', through the payment link' : ''})
+              </span>
+            </li>
+          ))}
+          {s.refunds.map((r) => (
+            <li key={r.id} data-testid="refund-row">
+              {GIVEN_BACK[r.method]}: <Money minor={r.amountMinor} currency={s.currency} className="font-semibold" />{' '}
+              <span className={r.status === 'failed' ? 'font-semibold text-cut' : 'text-muted'}>
+                ({REFUND_STATE[r.status]}, {dateTimeText(r.at)}
+                {r.byName ? `, by ${r.byName}` : ''}
+                {r.failure ? `: ${r.failure}` : ''})
+              </span>
             </li>
           ))}
         </ul>
       )}
+      {s.customerCredit > 0 && <p className="mt-2 text-base">Credit kept for this customer: {formatMoney(s.customerCredit, s.currency)}.</p>}
       {settled && <p className="mt-3 rounded border-2 border-ok bg-ok-soft px-3 py-2 font-semibold text-ok">Paid in full.</p>}
-      {canTake && !settled && s.ticket.status !== 'collected' && s.total > 0 && (
+      {canTake && s.credit > 0 && <SettleCredit key={`${s.credit}-${s.refunds.length}`} s={s} />}
+      {canTake && open && s.due > 0 && (
         <>
-          <TakePayment key={s.payments.length} s={s} />
+          <TakePayment key={`${s.due}-${s.payments.length}`} s={s} />
           <PayLink s={s} />
         </>
       )}

@@ -30,6 +30,7 @@ function Panel({ ticketId, role: given, withTicketHeader = true }: Props) {
   const s = summary.data;
   const canPickup = can(role, ['tickets', 'pickup']);
   const collected = s.ticket.status === 'collected';
+  const priced = s.lines.some((l) => !l.voidedAt);
   return (
     <div className="flex flex-col gap-4">
       <div className={withTicketHeader ? 'flex flex-wrap items-baseline gap-x-6 gap-y-2' : 'sr-only'}>
@@ -42,7 +43,7 @@ function Panel({ ticketId, role: given, withTicketHeader = true }: Props) {
         </p>
         {s.ticket.dueOn && <p className="text-xl">Due <DueBadge dueOn={s.ticket.dueOn} /></p>}
       </div>
-      <PriceLinesCard s={s} canChange={can(role, ['prices', 'adjust']) && !collected && !s.payments.some((p) => p.purpose === 'balance')} />
+      <PriceLinesCard s={s} canChange={can(role, ['prices', 'adjust']) && !collected} />
       <PaymentsCard s={s} canTake={can(role, ['payments', 'take'])} />
       <NoticesCard s={s} canSend={can(role, ['notices', 'send'])} />
       <section aria-labelledby="hand-h" className="rounded border-2 border-rule bg-card p-4">
@@ -62,7 +63,7 @@ function Panel({ ticketId, role: given, withTicketHeader = true }: Props) {
             <button
               type="button"
               onClick={() => handOver.mutate(undefined)}
-              disabled={handOver.isPending || s.ticket.status !== 'ready' || s.due > 0}
+              disabled={handOver.isPending || s.ticket.status !== 'ready' || s.due > 0 || !priced}
               className="min-h-11 rounded bg-ink px-5 py-2 text-lg font-semibold text-white disabled:opacity-50"
             >
               Hand over and close the ticket
@@ -70,6 +71,8 @@ function Panel({ ticketId, role: given, withTicketHeader = true }: Props) {
           )}
         </div>
         {!collected && s.ticket.status === 'ready' && s.due > 0 && <p className="mt-2 text-warn font-semibold">Take the balance before handing over.</p>}
+        {!collected && !priced && <p className="mt-2 text-warn font-semibold">No price yet: price the work, or mark it no charge with a reason, before handing over.</p>}
+        {s.credit > 0 && <p className="mt-2 font-semibold text-warn">{`Owed back to the customer: settle the credit under Payments.`}</p>}
         {collected && <p className="mt-2 rounded border-2 border-ok bg-ok-soft px-3 py-2 text-lg font-semibold text-ok">Collected: the ticket is closed with its payment on record.</p>}
         {handOver.error && <FormMessage kind="error">{handOver.error.message}</FormMessage>}
       </section>

@@ -2,8 +2,8 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { Notice } from '@/db/schema/notices';
 import { fetchJson } from '@/lib/fetch-json';
-import type { PriceListView } from '@/services/prices';
-import type { CounterSummary } from '@/services/payments';
+import type { PriceListView } from '@/services/counter/prices';
+import type { CounterSummary } from '@/services/counter/payments';
 
 /** The ticket's money: lines, total, payments, balance, link. */
 export function useSummary(ticketId: string) {

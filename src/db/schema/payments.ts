@@ -1,16 +1,18 @@
-// Money taken for a ticket: at most one deposit and one balance payment each (so a paid balance
-// cannot be paid again), the online payment links, and the webhook events already processed.
-import { index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+// Money taken for a ticket and given back: any number of payments up to what is due, refunds of
+// a credit (money paid beyond the total), the online payment links, and the webhook events
+// already processed.
+import { index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { createSelectSchema } from 'drizzle-zod';
 import { organization, user } from './auth';
+import { customers } from './customers';
 import { tickets } from './tickets';
 
-/** What a payment is for. */
+/** What a payment was when taken: `deposit` left money due, `balance` settled what was due. */
 export const PAYMENT_PURPOSES = ['deposit', 'balance'] as const;
-/** How it was paid: at the counter, or online through a payment link. */
-export const PAYMENT_METHODS = ['cash', 'card', 'online'] as const;
+/** How it was paid: at the counter, online through a payment link, or from the customer's kept credit. */
+export const PAYMENT_METHODS = ['cash', 'card', 'online', 'credit'] as const;
 
-/** Payments received, one per ticket and purpose. */
+/** Payments received: several per ticket, each with who took it, how and when. */
 export const payments = pgTable(
   'payments',
   {
@@ -26,7 +28,42 @@ export const payments = pgTable(
     takenById: text('taken_by_id').references(() => user.id, { onDelete: 'set null' }),
     at: timestamp('at', { withTimezone: true }).defaultNow().notNull(),
   },
-  (t) => [uniqueIndex('payments_ticket_purpose_uidx').on(t.ticketId, t.purpose)],
+  (t) => [index('payments_ticket_idx').on(t.shopId, t.ticketId)],
+);
+
+/** How a credit owed to the customer was settled: cash back, a card refund at the counter's
+ * terminal, a refund of an online payment through the payment service, or kept as credit on the
+ * customer for a later ticket. */
+export const REFUND_METHODS = ['cash', 'card', 'online', 'credit'] as const;
+/** A refund through the payment service is `pending` until the service confirms it (its answer or
+ * its signed webhook); one it refuses is `failed` and gives the credit back. Others are `done` at once. */
+export const REFUND_STATUSES = ['pending', 'done', 'failed'] as const;
+/** The statuses of a refund that counts against the credit (money given back, or promised). */
+export const COUNTED_REFUND_STATUSES = ['pending', 'done'] as const;
+
+/** Money given back to the customer (or kept as their credit) out of a ticket's credit. */
+export const refunds = pgTable(
+  'refunds',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
+    ticketId: uuid('ticket_id').notNull().references(() => tickets.id, { onDelete: 'cascade' }),
+    /** the customer a kept credit belongs to */
+    customerId: uuid('customer_id').references(() => customers.id, { onDelete: 'set null' }),
+    method: text('method', { enum: REFUND_METHODS }).notNull(),
+    status: text('status', { enum: REFUND_STATUSES }).notNull(),
+    amountMinor: integer('amount_minor').notNull(),
+    currency: text('currency').notNull(),
+    /** the online payment refunded through the service */
+    paymentId: uuid('payment_id').references(() => payments.id, { onDelete: 'set null' }),
+    /** the payment service's refund id */
+    reference: text('reference').unique(),
+    reason: text('reason'),
+    failure: text('failure'),
+    byId: text('by_id').references(() => user.id, { onDelete: 'set null' }),
+    at: timestamp('at', { withTimezone: true }).defaultNow().notNull(),
+  },
+  (t) => [index('refunds_ticket_idx').on(t.shopId, t.ticketId), index('refunds_customer_idx').on(t.customerId)],
 );
 
 /** Where an online payment link stands: `creating` while the service is asked for it (no session
@@ -37,7 +74,7 @@ export const LINK_STATUSES = ['creating', 'open', 'expiring', 'paid', 'expired',
 export const LIVE_LINK_STATUSES = ['open', 'expiring'] as const;
 
 /** Payment links made with the payment service for a ticket's balance; the service is called
- * between two short transactions, never inside one (see `src/services/payment-links.ts`). */
+ * between two short transactions, never inside one (see `src/services/counter/payment-links.ts`). */
 export const paymentLinks = pgTable(
   'payment_links',
   {
@@ -69,5 +106,7 @@ export const paymentEvents = pgTable('payment_events', {
 export const paymentRow = createSelectSchema(payments);
 /** A payment. */
 export type Payment = typeof payments.$inferSelect;
+/** A refund (or credit kept on the customer). */
+export type Refund = typeof refunds.$inferSelect;
 /** A payment link. */
 export type PaymentLink = typeof paymentLinks.$inferSelect;

@@ -32,10 +32,12 @@ export const counterSettings = pgTable('counter_settings', {
   updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull(),
 });
 
-/** How a line came onto a ticket: worked out from the garments, picked from the list, or adjusted. */
-export const LINE_SOURCES = ['auto', 'list', 'adjust'] as const;
+/** How a line came onto a ticket: worked out from the garments, picked from the list, adjusted, or
+ * "no charge" (0.00 with its reason: work handed over without a price, said so on purpose). */
+export const LINE_SOURCES = ['auto', 'list', 'adjust', 'no-charge'] as const;
 
-/** The priced lines of a ticket; its total is their sum. */
+/** The priced lines of a ticket; its total is the sum of those not voided. A wrong line is voided
+ * with a reason, never deleted: it stays on the ticket, struck through. */
 export const priceLines = pgTable(
   'price_lines',
   {
@@ -51,6 +53,9 @@ export const priceLines = pgTable(
     reason: text('reason'),
     createdById: text('created_by_id').references(() => user.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).defaultNow().notNull(),
+    voidedAt: timestamp('voided_at', { withTimezone: true }),
+    voidedById: text('voided_by_id').references(() => user.id, { onDelete: 'set null' }),
+    voidReason: text('void_reason'),
   },
   (t) => [index('price_lines_ticket_idx').on(t.shopId, t.ticketId)],
 );

@@ -46,8 +46,9 @@ export function finishKey(g: GarmentFacts): PriceKey | null {
   return null;
 }
 
-/** Prices a ticket's garments from the list; rush adds one surcharge line for the ticket. */
-export function priceTicket(garments: readonly GarmentFacts[], list: PriceList, opts: { rush: boolean }): PricedTicket {
+/** Prices a ticket's garments from the list; rush adds one surcharge line for the ticket when it
+ * has work priced on it: these garments' lines, or `otherWork` (lines added by hand). See `RUSH_RULE`. */
+export function priceTicket(garments: readonly GarmentFacts[], list: PriceList, opts: { rush: boolean; otherWork?: boolean }): PricedTicket {
   const lines: ComputedLine[] = [];
   const unpriced: string[] = [];
   const line = (garmentId: string | null, key: PriceKey, suffix = ''): ComputedLine => ({
@@ -67,7 +68,7 @@ export function priceTicket(garments: readonly GarmentFacts[], list: PriceList, 
     // A let-out only matters under a cuff: a plain hem has no cuff top to keep straight.
     if (g.taperLetOut && g.finish === 'cuff') lines.push(line(g.garmentId, 'taper-let-out', of));
   }
-  if (opts.rush && lines.length > 0) lines.push(line(null, 'rush'));
+  if (opts.rush && (lines.length > 0 || opts.otherWork)) lines.push(line(null, 'rush'));
   return { lines, unpriced };
 }
 
@@ -76,9 +77,43 @@ export function sumMinor(items: readonly { amountMinor: number }[]): number {
   return items.reduce((total, i) => total + i.amountMinor, 0);
 }
 
-/** Total, what has been paid and what is still due; never below zero due. */
-export function balanceOf(lines: readonly { amountMinor: number }[], payments: readonly { amountMinor: number }[]) {
-  const total = sumMinor(lines);
+/** The one rush rule, for every way a line is added: rush is one surcharge per ticket, on a ticket
+ * with work priced on it (a line other than rush, an adjustment or "no charge"), whether the work
+ * was priced from the garments or added from the list by hand. */
+export const RUSH_RULE = 'Rush is one surcharge per ticket with work on it, however its lines were added.';
+
+/** True when a line is work that rush may be charged on (see `RUSH_RULE`). */
+export function isRushableWork(line: { key: string | null; source: string; voidedAt?: Date | string | null }): boolean {
+  return !line.voidedAt && line.key !== null && line.key !== 'rush' && (line.source === 'auto' || line.source === 'list');
+}
+
+/** The share of the ticket's total a reduction may take off without the lead: 50 %. */
+export const LEAD_REDUCTION_SHARE = 0.5;
+
+/** True when an adjustment takes off more than `LEAD_REDUCTION_SHARE` of the total it is made on. */
+export function reductionNeedsLead(amountMinor: number, totalBefore: number): boolean {
+  return amountMinor < 0 && -amountMinor > totalBefore * LEAD_REDUCTION_SHARE;
+}
+
+/** A ticket's money: the total of its live lines, what was paid and given back, and either what is
+ * still due or the credit owed to the customer (never both). Failed refunds give nothing back. */
+export interface Balance {
+  total: number;
+  paid: number;
+  refunded: number;
+  due: number;
+  credit: number;
+}
+
+/** The balance of live (not voided) lines against payments and refunds, in minor units. */
+export function balanceOf(
+  lines: readonly { amountMinor: number; voidedAt?: Date | string | null }[],
+  payments: readonly { amountMinor: number }[],
+  refunds: readonly { amountMinor: number; status: string }[] = [],
+): Balance {
+  const total = sumMinor(lines.filter((l) => !l.voidedAt));
   const paid = sumMinor(payments);
-  return { total, paid, due: Math.max(0, total - paid) };
+  const refunded = sumMinor(refunds.filter((r) => r.status !== 'failed'));
+  const net = paid - refunded;
+  return { total, paid, refunded, due: Math.max(0, total - net), credit: Math.max(0, net - total) };
 }

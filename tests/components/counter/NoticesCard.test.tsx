@@ -5,11 +5,11 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { renderToStaticMarkup } from 'react-dom/server';
 import type { Notice } from '@/db/schema/notices';
 import { NoticesCard } from '@/components/counter/NoticesCard';
-import type { CounterSummary } from '@/services/payments';
+import type { CounterSummary } from '@/services/counter/payments';
 
 const TICKET = '00000000-0000-4000-8000-000000000001';
 
-const summary = { ticket: { id: TICKET, number: 1042, status: 'ready', dueOn: null, customerName: 'Wendel Orrin', customerEmail: 'wendel@example.com' }, currency: 'EUR', lines: [], total: 2400, paid: 0, due: 2400, payments: [], link: null } as CounterSummary;
+const summary = { ticket: { id: TICKET, number: 1042, status: 'ready', dueOn: null, customerId: null, customerName: 'Wendel Orrin', customerEmail: 'wendel@example.com' }, currency: 'EUR', lines: [], total: 2400, paid: 0, refunded: 0, due: 2400, credit: 0, payments: [], refunds: [], customerCredit: 0, link: null } as CounterSummary;
 
 function notice(over: Partial<Notice>): Notice {
   return { id: 'n1', shopId: 's', ticketId: TICKET, kind: 'ready', to: 'wendel@example.com', subject: 'Ready', body: '', status: 'sent', attempts: 1, lastError: null, nextAttemptAt: null, sentAt: new Date('2026-12-01T10:00:00Z'), createdById: 'u', createdAt: new Date('2026-12-01T10:00:00Z'), ...over };

@@ -2,7 +2,7 @@
 // Amounts are an invented shop's list; the taper cases go through the real engine (checkTaper).
 import { describe, expect, it } from 'vitest';
 import { checkTaper } from '@/lib/allowance';
-import { balanceOf, finishKey, priceTicket, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
+import { balanceOf, finishKey, priceTicket, reductionNeedsLead, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
 import { needsLetOut } from '@/lib/pricing/taper-let-out';
 
 // An invented list (minor units): not anyone's real prices.
@@ -53,8 +53,27 @@ describe('priceTicket', () => {
 
 describe('balanceOf', () => {
   it('takes payments off the total and never shows a negative balance', () => {
-    expect(balanceOf([{ amountMinor: 2600 }, { amountMinor: 1200 }], [{ amountMinor: 1000 }])).toEqual({ total: 3800, paid: 1000, due: 2800 });
-    expect(balanceOf([{ amountMinor: 2600 }, { amountMinor: -600 }], [{ amountMinor: 2000 }])).toEqual({ total: 2000, paid: 2000, due: 0 });
+    expect(balanceOf([{ amountMinor: 2600 }, { amountMinor: 1200 }], [{ amountMinor: 1000 }])).toEqual({ total: 3800, paid: 1000, refunded: 0, due: 2800, credit: 0 });
+    expect(balanceOf([{ amountMinor: 2600 }, { amountMinor: -600 }], [{ amountMinor: 2000 }])).toEqual({ total: 2000, paid: 2000, refunded: 0, due: 0, credit: 0 });
+  });
+
+  it('shows money paid beyond the total as a credit owed, less what was given back (issue 14)', () => {
+    // Line 20.00, deposit 20.00, adjustment -15.00: 15.00 is owed back, not lost.
+    expect(balanceOf([{ amountMinor: 2000 }, { amountMinor: -1500 }], [{ amountMinor: 2000 }])).toMatchObject({ total: 500, due: 0, credit: 1500 });
+    const refunds = [{ amountMinor: 1000, status: 'done' }, { amountMinor: 500, status: 'failed' }];
+    expect(balanceOf([{ amountMinor: 2000 }, { amountMinor: -1500 }], [{ amountMinor: 2000 }], refunds)).toMatchObject({ refunded: 1000, credit: 500, due: 0 });
+  });
+
+  it('leaves voided lines out of the total', () => {
+    expect(balanceOf([{ amountMinor: 2600 }, { amountMinor: 1800, voidedAt: new Date() }], []).total).toBe(2600);
+  });
+});
+
+describe('reductionNeedsLead', () => {
+  it('asks for the lead when a reduction takes off more than half the total', () => {
+    expect(reductionNeedsLead(-1000, 2000)).toBe(false);
+    expect(reductionNeedsLead(-1001, 2000)).toBe(true);
+    expect(reductionNeedsLead(5000, 2000)).toBe(false);
   });
 });
 

@@ -3,7 +3,7 @@
 import type { APIRoute } from 'astro';
 import { problem, json } from '@/lib/api';
 import { BodyRefused, JSON_BODY_LIMIT, readLimited } from '@/lib/body';
-import { receiveWebhook } from '@/services/payments';
+import { receiveWebhook } from '@/services/counter/payments';
 
 export const prerender = false;
 

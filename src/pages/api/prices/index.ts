@@ -2,7 +2,7 @@
 import type { APIRoute } from 'astro';
 import { guard, readBody, run } from '@/lib/api';
 import { priceListInput } from '@/lib/counter-request';
-import { getPriceList, savePriceList } from '@/services/prices';
+import { getPriceList, savePriceList } from '@/services/counter/prices';
 
 export const prerender = false;
 

@@ -2,7 +2,7 @@
 import type { APIRoute } from 'astro';
 import { guard, refusal } from '@/lib/api';
 import { renderClaimSlip } from '@/lib/claim-slip/render';
-import { claimSlipData } from '@/services/payments';
+import { claimSlipData } from '@/services/counter/payments';
 
 export const prerender = false;
 

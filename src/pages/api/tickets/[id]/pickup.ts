@@ -1,7 +1,7 @@
 // Hands a ready, paid ticket over to the customer: it is closed as collected.
 import type { APIRoute } from 'astro';
 import { guard, run } from '@/lib/api';
-import { pickUp } from '@/services/payments';
+import { pickUp } from '@/services/counter/payments';
 
 export const prerender = false;
 

@@ -2,7 +2,7 @@
 import type { APIRoute } from 'astro';
 import { guard, readBody, run } from '@/lib/api';
 import { paymentInput } from '@/lib/counter-request';
-import { counterSummary, takePayment } from '@/services/payments';
+import { counterSummary, takePayment } from '@/services/counter/payments';
 
 export const prerender = false;
 

@@ -1,7 +1,7 @@
 // An online payment link for the balance due, made through the payment service.
 import type { APIRoute } from 'astro';
 import { guard, run } from '@/lib/api';
-import { createPaymentLink } from '@/services/payments';
+import { createPaymentLink } from '@/services/counter/payments';
 
 export const prerender = false;
 

@@ -2,7 +2,7 @@
 import type { APIRoute } from 'astro';
 import { guard, readBody, run } from '@/lib/api';
 import { autoLinesInput } from '@/lib/counter-request';
-import { priceFromGarments } from '@/services/prices';
+import { priceFromGarments } from '@/services/counter/prices';
 
 export const prerender = false;
 

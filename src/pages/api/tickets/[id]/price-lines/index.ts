@@ -2,7 +2,7 @@
 import type { APIRoute } from 'astro';
 import { guard, readBody, run } from '@/lib/api';
 import { lineInput } from '@/lib/counter-request';
-import { addLine, listLines } from '@/services/prices';
+import { addLine, listLines } from '@/services/counter/prices';
 
 export const prerender = false;
 

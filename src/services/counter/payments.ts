@@ -1,20 +1,19 @@
-// Money for a ticket: the counter's summary, deposits and balances taken at the counter, online
-// payment links through the payment service, its webhook, and handing the trousers over.
+// Money taken for a ticket: payments at the counter, online payment links through the payment
+// service, its webhook, and the claim slip's figures.
 import { randomUUID } from 'node:crypto';
-import { and, asc, desc, eq, inArray, isNotNull } from 'drizzle-orm';
+import { and, asc, eq } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import type { z } from 'zod';
 import { db, type Db } from '@/db';
-import { customers, garments, paymentEvents, paymentLinks, payments, tickets, type Payment, type PaymentLink, type PriceLine, type Ticket } from '@/db/schema';
+import { customers, garments, paymentEvents, paymentLinks, payments, type PaymentLink, type Ticket } from '@/db/schema';
+import { formatMoney, isCurrency } from '@/lib/pricing/money';
 import type { Actor } from '@/lib/api';
 import type { paymentInput } from '@/lib/counter-request';
 import { paymentClient, verifyWebhook, webhookSecret } from '@/lib/payment-service';
 import type { ClaimSlipData } from '@/lib/claim-slip/types';
-import type { Currency } from '@/lib/pricing/money';
-import { balanceOf } from '@/lib/pricing/price-lines';
-import { audit } from './audit';
-import { ServiceError } from './errors';
-import { lockTicket, withTicketLock } from './garments';
+import { audit } from '../audit';
+import { ServiceError } from '../errors';
+import { lockTicket, shopTicket, withTicketLock } from '../ticket-core';
 import {
   closeAtService,
   closeCutShort,
@@ -26,49 +25,12 @@ import {
   STALE_CREATING_SECONDS,
   withLinksClosed,
 } from './payment-links';
-import { counterSettingsOf, linesOf, shopTicket, type CounterView } from './prices';
+import { counterSettingsOf, type CounterView } from './prices';
+import { applyRefundEvent } from './refunds';
+import { counterSummary, customerCreditOf, summaryOf, type CounterSummary } from './summary';
 
-/** Everything the counter panel shows about a ticket's money. */
-export interface CounterSummary {
-  ticket: { id: string; number: number; status: string; dueOn: string | null; customerName: string | null; customerEmail: string | null };
-  currency: Currency;
-  lines: PriceLine[];
-  total: number;
-  paid: number;
-  due: number;
-  payments: Payment[];
-  link: { url: string; amountMinor: number; status: PaymentLink['status'] } | null;
-}
-
-/** The ticket's lines, payments, balance and open payment link. */
-export async function counterSummary(actor: Pick<Actor, 'shopId'>, ticketId: string): Promise<CounterSummary> {
-  const ticket = await shopTicket(actor, ticketId);
-  return summaryOf(ticket, await counterSettingsOf(actor.shopId));
-}
-
-/** The summary of a ticket already read for the shop, with the shop's settings already read
- * (through `q`: the transaction holding the ticket's lock, when there is one). */
-export async function summaryOf(ticket: Ticket, { currency }: Pick<CounterView, 'currency'>, q: Db = db): Promise<CounterSummary> {
-  const { shopId, id: ticketId } = ticket;
-  const [customer] = ticket.customerId ? await q.select().from(customers).where(eq(customers.id, ticket.customerId)) : [];
-  const lines = await linesOf(shopId, ticketId, q);
-  const paidRows = await q.select().from(payments).where(and(eq(payments.shopId, shopId), eq(payments.ticketId, ticketId))).orderBy(asc(payments.at));
-  // The latest link the service has made (one still being asked for has no address yet).
-  const [link] = await q
-    .select()
-    .from(paymentLinks)
-    .where(and(eq(paymentLinks.shopId, shopId), eq(paymentLinks.ticketId, ticketId), isNotNull(paymentLinks.url)))
-    .orderBy(desc(paymentLinks.createdAt))
-    .limit(1);
-  return {
-    ticket: { id: ticket.id, number: ticket.number, status: ticket.status, dueOn: ticket.dueOn, customerName: customer?.name ?? null, customerEmail: customer?.email ?? null },
-    currency,
-    lines,
-    ...balanceOf(lines, paidRows),
-    payments: paidRows,
-    link: link?.url ? { url: link.url, amountMinor: link.amountMinor, status: link.status } : null,
-  };
-}
+export { counterSummary, summaryOf, type CounterSummary };
+export { assertReadyToHandOver, pickUp } from './hand-over';
 
 function isUniqueViolation(e: unknown): boolean {
   for (let err = e as { code?: string; cause?: unknown } | undefined; err; err = err.cause as typeof err) {
@@ -77,42 +39,45 @@ function isUniqueViolation(e: unknown): boolean {
   return false;
 }
 
+/** Locks the ticket's customer (after the ticket: always in that order) and returns their kept
+ * credit, so two tickets of one customer cannot spend the same credit at once. */
+export async function lockCustomerCredit(tx: Db, ticket: Ticket): Promise<number> {
+  if (!ticket.customerId) return 0;
+  await tx.select({ id: customers.id }).from(customers).where(and(eq(customers.id, ticket.customerId), eq(customers.shopId, ticket.shopId))).for('update');
+  return customerCreditOf(ticket.shopId, ticket.customerId, tx);
+}
+
 /** The refusal of a payment the ticket cannot take now, else the summary it was checked against. */
 async function checkPayment(tx: Db, ticket: Ticket, settings: CounterView, input: z.infer<typeof paymentInput>): Promise<CounterSummary> {
   const before = await summaryOf(ticket, settings, tx);
   if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
-  if (before.payments.some((p) => p.purpose === 'balance')) throw new ServiceError(409, 'The balance of this ticket is already paid.');
-  if (input.purpose === 'deposit') {
-    if (before.payments.some((p) => p.purpose === 'deposit')) throw new ServiceError(409, 'A deposit is already on record for this ticket.');
-    if (input.amountMinor > before.total) throw new ServiceError(422, 'A deposit cannot be more than the ticket total.');
-  } else if (before.due === 0) {
-    throw new ServiceError(422, 'Nothing is due on this ticket.');
-  } else if (input.amountMinor !== before.due) {
-    throw new ServiceError(422, 'Take exactly the balance due (give change from cash).');
+  if (before.due === 0) throw new ServiceError(422, 'Nothing is due on this ticket.');
+  if (input.amountMinor > before.due) throw new ServiceError(422, `Take at most what is due (${formatMoney(before.due, before.currency)}); give change from cash.`);
+  if (input.method === 'credit') {
+    if (!ticket.customerId) throw new ServiceError(422, 'This ticket has no customer, so no credit kept on one.');
+    const credit = await lockCustomerCredit(tx, ticket);
+    if (input.amountMinor > credit) throw new ServiceError(422, `The customer has ${formatMoney(credit, before.currency)} of credit kept.`);
   }
   return before;
 }
 
-/** Takes a deposit (at most the total) or the exact balance due, in cash or by card at the counter. */
+/** Takes any amount up to what is due, in cash, by card at the counter or from the customer's kept
+ * credit; each payment is kept with who took it, how and when. */
 export async function takePayment(actor: Actor, ticketId: string, input: z.infer<typeof paymentInput>): Promise<CounterSummary> {
   const settings = await counterSettingsOf(actor.shopId);
-  try {
-    // An open link asks for the old balance: paid at the counter, the customer must not pay it
-    // again online; after a deposit, its amount is more than is now due. It is closed first.
-    await withLinksClosed(
-      actor.shopId,
-      ticketId,
-      (tx, ticket) => checkPayment(tx, ticket, settings, input),
-      async (tx, ticket) => {
-        const before = await checkPayment(tx, ticket, settings, input);
-        await tx.insert(payments).values({ ...input, shopId: actor.shopId, ticketId, currency: before.currency, takenById: actor.userId });
-        await audit(tx, actor.shopId, actor.userId, `payment.${input.purpose}`, ticketId, { method: input.method, amountMinor: input.amountMinor });
-      },
-    );
-  } catch (e) {
-    if (isUniqueViolation(e)) throw new ServiceError(409, `A ${input.purpose} is already on record for this ticket.`);
-    throw e;
-  }
+  // An open link asks for the old balance: paid at the counter, the customer must not pay it
+  // again online; after a part payment, its amount is more than is now due. It is closed first.
+  await withLinksClosed(
+    actor.shopId,
+    ticketId,
+    (tx, ticket) => checkPayment(tx, ticket, settings, input),
+    async (tx, ticket) => {
+      const before = await checkPayment(tx, ticket, settings, input);
+      const purpose = input.amountMinor === before.due ? 'balance' : 'deposit';
+      await tx.insert(payments).values({ ...input, purpose, shopId: actor.shopId, ticketId, currency: before.currency, takenById: actor.userId });
+      await audit(tx, actor.shopId, actor.userId, `payment.${purpose}`, ticketId, { method: input.method, amountMinor: input.amountMinor });
+    },
+  );
   return counterSummary(actor, ticketId);
 }
 
@@ -277,6 +242,7 @@ export async function receiveWebhook(payload: string, signature: string | null):
     return await db.transaction(async (tx) => {
       const [fresh] = await tx.insert(paymentEvents).values({ id: event.id, type: event.type }).onConflictDoNothing().returning();
       if (!fresh) return { status: 409 as const, message: 'Event already processed.' };
+      if (event.type === 'refund.created' || event.type === 'refund.updated') return { status: 200 as const, message: await applyRefundEvent(tx, event.data.object) };
       if (event.type !== 'checkout.session.completed') return { status: 200 as const, message: 'Ignored.' };
       const session = event.data.object;
       if (session.payment_status !== 'paid') return { status: 200 as const, message: 'Not paid yet.' };
@@ -284,19 +250,21 @@ export async function receiveWebhook(payload: string, signature: string | null):
       if (!known) return { status: 200 as const, message: 'Unknown session.' };
       // Under the ticket's lock, like every other write to its money; the link is read again
       // inside it, as a price change may have just expired it.
-      await lockTicket(tx, known.shopId, known.ticketId);
+      const ticket = await lockTicket(tx, known.shopId, known.ticketId);
       const [link] = await tx.select().from(paymentLinks).where(eq(paymentLinks.id, known.id));
       if (!link) return { status: 200 as const, message: 'Unknown session.' };
       // Being closed, it could still be paid until the service confirmed: the money was taken.
       if (link.status !== 'open' && link.status !== 'expiring') throw new WebhookRefusal('This payment link is no longer open.');
-      const [existing] = await tx.select({ id: payments.id }).from(payments).where(and(eq(payments.ticketId, link.ticketId), eq(payments.purpose, 'balance')));
-      if (existing) throw new WebhookRefusal('The balance of this ticket is already paid.');
+      // The service took the money: it is recorded even if the balance changed since (a payment at
+      // the counter racing the customer online); anything beyond the total shows as a credit owed.
+      const amountMinor = session.amount_total ?? link.amountMinor;
+      const before = await summaryOf(ticket, { currency: isCurrency(link.currency) ? link.currency : 'EUR' }, tx);
       await tx.insert(payments).values({
         shopId: link.shopId,
         ticketId: link.ticketId,
-        purpose: 'balance',
+        purpose: amountMinor >= before.due ? 'balance' : 'deposit',
         method: 'online',
-        amountMinor: session.amount_total ?? link.amountMinor,
+        amountMinor,
         currency: link.currency,
         reference: session.id,
       });
@@ -311,36 +279,6 @@ export async function receiveWebhook(payload: string, signature: string | null):
 }
 
 class WebhookRefusal extends Error {}
-
-/** The refusal when the ticket cannot be handed over (not ready, or money due), else null. */
-function handOverRefusal(summary: CounterSummary): ServiceError | null {
-  if (summary.ticket.status !== 'ready') return new ServiceError(422, `Only a ready ticket can be handed over (this one is ${summary.ticket.status}).`);
-  if (summary.due > 0) return new ServiceError(422, 'Take the balance before handing the trousers over.');
-  return null;
-}
-
-/** Throws 422 unless the ticket is ready and nothing is due: the check any path to "collected"
- * needs, made inside the ticket's lock (`withTicketLock`, its transaction and locked row) so it
- * still holds when the move commits. */
-export async function assertReadyToHandOver(tx: Db, ticket: Ticket): Promise<CounterSummary> {
-  const summary = await summaryOf(ticket, await counterSettingsOf(ticket.shopId, tx), tx);
-  const refusal = handOverRefusal(summary);
-  if (refusal) throw refusal;
-  return summary;
-}
-
-/** Hands a ready, fully paid ticket over: every garment and the ticket become collected. */
-export async function pickUp(actor: Actor, ticketId: string): Promise<CounterSummary> {
-  // Checked and written under the ticket's lock: a price line or payment arriving meanwhile waits,
-  // and one that came first is in the balance checked here.
-  await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
-    const summary = await assertReadyToHandOver(tx, ticket);
-    await tx.update(tickets).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
-    await tx.update(garments).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(garments.ticketId, ticketId), eq(garments.shopId, actor.shopId), inArray(garments.status, ['ready'])));
-    await audit(tx, actor.shopId, actor.userId, 'ticket.collected', ticketId, { paid: summary.paid });
-  });
-  return counterSummary(actor, ticketId);
-}
 
 /** The claim slip's data for a ticket of the actor's shop. */
 export async function claimSlipData(actor: Actor, ticketId: string): Promise<ClaimSlipData> {
@@ -357,7 +295,7 @@ export async function claimSlipData(actor: Actor, ticketId: string): Promise<Cla
     receivedOn: ticket.createdAt.toISOString().slice(0, 10),
     dueOn: ticket.dueOn,
     garments: items.map((g) => g.description?.trim() || g.kind),
-    lines: summary.lines.map((l) => ({ label: l.reason ? `${l.label} (${l.reason})` : l.label, amountMinor: l.amountMinor })),
+    lines: summary.lines.filter((l) => !l.voidedAt).map((l) => ({ label: l.reason ? `${l.label} (${l.reason})` : l.label, amountMinor: l.amountMinor })),
     currency: summary.currency,
     total: summary.total,
     paid: summary.paid,

@@ -9,8 +9,8 @@ import type Stripe from 'stripe';
 import type { Db } from '@/db';
 import { LIVE_LINK_STATUSES, paymentLinks, type PaymentLink, type Ticket } from '@/db/schema';
 import { paymentClient } from '@/lib/payment-service';
-import { ServiceError } from './errors';
-import { withTicketLock } from './garments';
+import { ServiceError } from '../errors';
+import { withTicketLock } from '../ticket-core';
 
 /** After this long a link still `creating` is taken as cut short (the server stopped between the
  * phases): it no longer holds up the ticket, and whatever session it made is closed. Far above

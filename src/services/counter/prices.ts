@@ -1,19 +1,20 @@
 // The shop's price list and counter settings, and the price lines on its tickets.
-import { and, asc, eq, inArray } from 'drizzle-orm';
+import { and, asc, eq, inArray, isNull } from 'drizzle-orm';
 import type { z } from 'zod';
 import { db, type Db } from '@/db';
-import { counterSettings, garments, measurements, payments, priceItems, priceLines, tickets, type CounterSettings, type PriceLine, type Ticket } from '@/db/schema';
+import { counterSettings, garments, measurements, priceItems, priceLines, type CounterSettings, type PriceLine, type Ticket } from '@/db/schema';
 import { checkTaper } from '@/lib/allowance';
 import type { Actor } from '@/lib/api';
 import { letDownFirst } from '@/lib/existing-finish';
-import type { autoLinesInput, lineInput, priceListInput } from '@/lib/counter-request';
+import type { autoLinesInput, lineInput, priceListInput, voidLineInput } from '@/lib/counter-request';
 import { isCurrency, type Currency } from '@/lib/pricing/money';
 import { DEFAULT_PRICE_LABELS, PRICE_KEYS } from '@/lib/pricing/price-keys';
-import { priceTicket, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
+import { isRushableWork, LEAD_REDUCTION_SHARE, priceTicket, reductionNeedsLead, sumMinor, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
+import { can } from '@/lib/roles';
 import { needsLetOut } from '@/lib/pricing/taper-let-out';
-import { audit } from './audit';
-import { ServiceError } from './errors';
-import { isUuid } from './garments';
+import { audit } from '../audit';
+import { ServiceError } from '../errors';
+import { isUuid, shopTicket } from '../ticket-core';
 import { withLinksClosed } from './payment-links';
 
 /** The shop's counter settings as the counter reads them. */
@@ -27,14 +28,6 @@ export interface CounterView {
 /** The price list page's data: settings and one entry per priced piece of work. */
 export interface PriceListView extends CounterView {
   items: { key: (typeof PRICE_KEYS)[number]; label: string; amountMinor: number }[];
-}
-
-/** A ticket of the actor's shop; 404 for another shop's ticket or an id that is not one. */
-export async function shopTicket(actor: Pick<Actor, 'shopId'>, ticketId: string): Promise<Ticket> {
-  if (!isUuid(ticketId)) throw new ServiceError(404, 'No such ticket in this shop.');
-  const [row] = await db.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
-  if (!row) throw new ServiceError(404, 'No such ticket in this shop.');
-  return row;
 }
 
 /** The shop's counter settings, the defaults when the lead has not set them. */
@@ -96,21 +89,44 @@ export function linesOf(shopId: string, ticketId: string, q: Db = db): Promise<P
   return q.select().from(priceLines).where(and(eq(priceLines.shopId, shopId), eq(priceLines.ticketId, ticketId))).orderBy(asc(priceLines.createdAt), asc(priceLines.id));
 }
 
-async function refuseWhenSettled(tx: Db, ticket: Ticket): Promise<void> {
+async function refuseWhenSettled(_tx: Db, ticket: Ticket): Promise<void> {
+  // Until the hand-over the price may change either way: a rise is due again, a drop paid for
+  // already is a credit owed to the customer (see summary.ts), never lost.
   if (ticket.status === 'collected') throw new ServiceError(422, 'This ticket is collected: its price is closed.');
-  const [paid] = await tx.select({ id: payments.id }).from(payments).where(and(eq(payments.ticketId, ticket.id), eq(payments.purpose, 'balance')));
-  if (paid) throw new ServiceError(422, 'The balance is paid: the price can no longer change.');
 }
 
-/** Replaces the ticket's worked-out lines with those its garments' finishes and plans call for. */
+const live = (lines: PriceLine[]) => lines.filter((l) => !l.voidedAt);
+
+/** Refuses a change that would leave the ticket's total below zero. */
+function refuseBelowZero(totalAfter: number): void {
+  if (totalAfter < 0) throw new ServiceError(422, 'That would take the ticket total below zero: a total is never less than 0.00.');
+}
+
+/** Replaces the ticket's worked-out lines with those its garments' finishes and plans call for;
+ * rush follows `RUSH_RULE` (one line, on any work, also work added by hand). */
 export async function priceFromGarments(actor: Actor, ticketId: string, input: z.infer<typeof autoLinesInput>): Promise<{ lines: PriceLine[]; unpriced: string[] }> {
   await shopTicket(actor, ticketId);
   const facts = await garmentFacts(actor.shopId, ticketId);
-  const { lines, unpriced } = priceTicket(facts, await priceListOf(actor.shopId), input);
+  const list = await priceListOf(actor.shopId);
+  let unpriced: string[] = [];
   // The ticket's open pay link asks for the old balance: it is closed at the service first.
   await withLinksClosed(actor.shopId, ticketId, refuseWhenSettled, async (tx, ticket) => {
     await refuseWhenSettled(tx, ticket);
-    await tx.delete(priceLines).where(and(eq(priceLines.ticketId, ticketId), eq(priceLines.shopId, actor.shopId), eq(priceLines.source, 'auto')));
+    const kept = live(await linesOf(actor.shopId, ticketId, tx)).filter((l) => l.source !== 'auto');
+    const handRush = kept.filter((l) => l.key === 'rush');
+    // A rush line added by hand counts as the rush: the box adds none beside it, and unticked takes it off.
+    const priced = priceTicket(facts, list, { rush: input.rush && handRush.length === 0, otherWork: kept.some(isRushableWork) });
+    unpriced = priced.unpriced;
+    const lines = priced.lines;
+    if (!input.rush && handRush.length > 0) {
+      await tx
+        .update(priceLines)
+        .set({ voidedAt: new Date(), voidedById: actor.userId, voidReason: 'Rush unticked when pricing from the garments' })
+        .where(inArray(priceLines.id, handRush.map((l) => l.id)));
+    }
+    await tx.delete(priceLines).where(and(eq(priceLines.ticketId, ticketId), eq(priceLines.shopId, actor.shopId), eq(priceLines.source, 'auto'), isNull(priceLines.voidedAt)));
+    const keptTotal = sumMinor(kept.filter((l) => input.rush || l.key !== 'rush'));
+    refuseBelowZero(keptTotal + sumMinor(lines));
     if (lines.length > 0) {
       // One transaction shares one now(): a millisecond apart keeps the lines in the garments' order.
       const at = Date.now();
@@ -121,20 +137,66 @@ export async function priceFromGarments(actor: Actor, ticketId: string, input: z
   return { lines: await linesOf(actor.shopId, ticketId), unpriced };
 }
 
-/** Adds a line from the list, or an adjustment with its reason. */
+/** Adds a line from the list, an adjustment with its reason, or "no charge" with its reason. A
+ * reduction below zero is refused; one over `LEAD_REDUCTION_SHARE` of the total needs the lead. */
 export async function addLine(actor: Actor, ticketId: string, input: z.infer<typeof lineInput>): Promise<PriceLine> {
   const entry = input.source === 'list' ? (await priceListOf(actor.shopId))[input.key] : null;
   const values =
     input.source === 'list'
       ? { key: input.key, label: entry!.label, amountMinor: entry!.amountMinor, reason: null }
-      : { key: null, label: input.label, amountMinor: input.amountMinor, reason: input.reason };
-  const row = await withLinksClosed(actor.shopId, ticketId, refuseWhenSettled, async (tx, ticket) => {
+      : input.source === 'adjust'
+        ? { key: null, label: input.label, amountMinor: input.amountMinor, reason: input.reason }
+        : { key: null, label: 'No charge', amountMinor: 0, reason: input.reason };
+  const check = async (tx: Db, ticket: Ticket) => {
     await refuseWhenSettled(tx, ticket);
+    const lines = live(await linesOf(actor.shopId, ticketId, tx));
+    const total = sumMinor(lines);
+    if (input.source === 'list' && input.key === 'rush') {
+      if (lines.some((l) => l.key === 'rush')) throw new ServiceError(409, 'Rush is already on this ticket: it is charged once per ticket.');
+      if (!lines.some(isRushableWork)) throw new ServiceError(422, 'Rush goes on a ticket with work priced on it: price the work first.');
+    }
+    if (input.source === 'no-charge') {
+      if (total !== 0 || lines.some((l) => l.source === 'no-charge')) throw new ServiceError(422, 'No charge is only for a ticket whose total is 0.00, once.');
+    }
+    refuseBelowZero(total + values.amountMinor);
+    if (input.source === 'adjust' && reductionNeedsLead(values.amountMinor, total) && !can(actor.role, ['prices', 'reduce-any'])) {
+      throw new ServiceError(422, `Taking off more than ${LEAD_REDUCTION_SHARE * 100} % of the ticket total needs the lead.`);
+    }
+  };
+  const row = await withLinksClosed(actor.shopId, ticketId, check, async (tx, ticket) => {
+    await check(tx, ticket);
     const [added] = await tx.insert(priceLines).values({ ...values, source: input.source, shopId: actor.shopId, ticketId, createdById: actor.userId }).returning();
-    await audit(tx, actor.shopId, actor.userId, input.source === 'adjust' ? 'prices.adjusted' : 'prices.line-added', ticketId, { amountMinor: added!.amountMinor, reason: added!.reason });
+    const action = input.source === 'adjust' ? 'prices.adjusted' : input.source === 'no-charge' ? 'prices.no-charge' : 'prices.line-added';
+    await audit(tx, actor.shopId, actor.userId, action, ticketId, { line: added!.id, amountMinor: added!.amountMinor, reason: added!.reason });
     return added!;
   });
   return row;
+}
+
+/** Voids a wrong line with its reason: it stays on the ticket (struck through) and in the history,
+ * and leaves the total. Refused when the total would go below zero (void the reduction first). */
+export async function voidLine(actor: Actor, ticketId: string, lineId: string, input: z.infer<typeof voidLineInput>): Promise<PriceLine> {
+  await shopTicket(actor, ticketId);
+  if (!isUuid(lineId)) throw new ServiceError(404, 'No such line on this ticket.');
+  const check = async (tx: Db, ticket: Ticket) => {
+    await refuseWhenSettled(tx, ticket);
+    const lines = await linesOf(actor.shopId, ticketId, tx);
+    const line = lines.find((l) => l.id === lineId);
+    if (!line) throw new ServiceError(404, 'No such line on this ticket.');
+    if (line.voidedAt) throw new ServiceError(409, 'This line is already voided.');
+    refuseBelowZero(sumMinor(live(lines)) - line.amountMinor);
+    return line;
+  };
+  return withLinksClosed(actor.shopId, ticketId, check, async (tx, ticket) => {
+    const line = await check(tx, ticket);
+    const [voided] = await tx
+      .update(priceLines)
+      .set({ voidedAt: new Date(), voidedById: actor.userId, voidReason: input.reason })
+      .where(and(eq(priceLines.id, line.id), isNull(priceLines.voidedAt)))
+      .returning();
+    await audit(tx, actor.shopId, actor.userId, 'prices.line-voided', ticketId, { line: line.id, label: line.label, amountMinor: line.amountMinor, reason: input.reason });
+    return voided!;
+  });
 }
 
 /** What the pricing needs to know of each garment on the ticket, read from its measurements. */
