@@ -133,20 +133,27 @@ export async function* renderPdfParts(parts: Iterable<PdfPart>, props: DocumentP
     pending = [];
     return out;
   };
-  for (const { doc, adjust } of parts) {
-    await turn(async () => {
-      const first = await layOut(doc);
-      const layout = adjust ? await adjust(first.layout, async (other) => (await layOut(other)).layout) : first.layout;
-      drawOpen(ctx, layout);
-    });
-    // pdfkit writes a page when the next one begins: what is out so far goes now.
-    const out = await take();
-    if (out.length > 0) yield out;
+  let released = false;
+  try {
+    for (const { doc, adjust } of parts) {
+      await turn(async () => {
+        const first = await layOut(doc);
+        const layout = adjust ? await adjust(first.layout, async (other) => (await layOut(other)).layout) : first.layout;
+        drawOpen(ctx, layout);
+      });
+      // pdfkit writes a page when the next one begins: what is out so far goes now.
+      const out = await take();
+      if (out.length > 0) yield out;
+    }
+    ctx.end();
+    await ended;
+    await turn(release);
+    released = true;
+    yield await take();
+  } finally {
+    // A reader that stopped part way (a closed connection) lets go of the parts too.
+    if (!released) void turn(release);
   }
-  ctx.end();
-  await ended;
-  await turn(release);
-  yield await take();
 }
 
 // The root keeps the last document committed (and React the one before): an empty document in

@@ -66,6 +66,14 @@ interface Slot {
 
 const reason = (e: unknown) => (e instanceof Error ? e.message : String(e)).split('\n')[0] ?? '';
 
+/**
+ * A worker's old generation is capped: left to V8's defaults (a quarter of the machine's memory)
+ * a worker let a 500-sheet batch's garbage pile up to hundreds of MB before collecting it. Its live
+ * set (fonts, memos, one part's layout) is far smaller; a worker that still runs out fails its
+ * jobs and is replaced, like one that dies.
+ */
+export const WORKER_HEAP_MB = 256;
+
 /** The pool's size on this machine: one worker a core beyond the main thread's, at least one and at most four. */
 export function poolSize(cores = availableParallelism()): number {
   return Math.max(1, Math.min(4, cores - 1));
@@ -102,7 +110,7 @@ export function offThreadRenderer(url: string | URL | null, options: Options = {
     return new Promise((resolve) => {
       let w: Worker;
       try {
-        w = new Worker(typeof url === 'string' ? new URL(url) : url);
+        w = new Worker(typeof url === 'string' ? new URL(url) : url, { resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB } });
       } catch (e) {
         resolve(giveUp(reason(e)));
         return;
