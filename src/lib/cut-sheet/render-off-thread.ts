@@ -11,7 +11,7 @@ import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import workerUrl from './render-worker.ts?node-worker';
 import { streamCutSheets } from './render';
-import { FIRST_CREDIT, type RenderJob, type RenderReply } from './render-worker';
+import type { RenderJob, RenderReply } from './render-worker';
 import type { CutSheetData } from './types';
 
 /** A rendered sheet and the thread that drew it. */
@@ -235,7 +235,7 @@ export function offThreadRenderer(url: string | URL | null, options: Options = {
   }
 
   async function stream(sheets: CutSheetData[], skipped: string[] = []): Promise<Streamed> {
-    // Pieces that arrived before the reader asked for them (at most FIRST_CREDIT + the pulls sent).
+    // Pieces that arrived before the reader asked for them (at most the worker's FIRST_CREDIT plus the pulls sent).
     const ready: Uint8Array[] = [];
     let finished = false;
     let failure: Error | null = null;
