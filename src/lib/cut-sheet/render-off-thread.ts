@@ -46,6 +46,8 @@ interface Options {
   size?: number;
   /** a job with no piece in this long fails and its worker is replaced */
   timeoutMs?: number;
+  /** a worker not ready in this long is given up on (timeoutMs unless said) */
+  startTimeoutMs?: number;
   log?: (line: string) => void;
 }
 
@@ -69,10 +71,11 @@ const reason = (e: unknown) => (e instanceof Error ? e.message : String(e)).spli
 /**
  * A worker's old generation is capped: left to V8's defaults (a quarter of the machine's memory)
  * a worker let a 500-sheet batch's garbage pile up to hundreds of MB before collecting it. Its live
- * set (fonts, memos, one part's layout) is far smaller; a worker that still runs out fails its
+ * set (fonts, memos, one part's layout) is far smaller (under 90 MB after 100-sheet batches,
+ * measured in process); a worker that still runs out fails its
  * jobs and is replaced, like one that dies.
  */
-export const WORKER_HEAP_MB = 256;
+export const WORKER_HEAP_MB = 128;
 
 /** The pool's size on this machine: one worker a core beyond the main thread's, at least one and at most four. */
 export function poolSize(cores = availableParallelism()): number {
@@ -82,6 +85,7 @@ export function poolSize(cores = availableParallelism()): number {
 /** A pool of `size` workers from `url` (the built `?node-worker` entry, or null), each started on first use. */
 export function offThreadRenderer(url: string | URL | null, options: Options = {}): OffThreadRenderer {
   const { inProcess = streamCutSheets, size = poolSize(), timeoutMs = 60_000, log = console.warn } = options;
+  const startTimeoutMs = options.startTimeoutMs ?? timeoutMs;
   const slots: Slot[] = Array.from({ length: Math.max(1, size) }, () => ({ starting: null, current: null, jobs: new Map(), busy: 0 }));
   let unavailable = false;
   let nextId = 0;
@@ -118,8 +122,8 @@ export function offThreadRenderer(url: string | URL | null, options: Options = {
       let ready = false;
       const notReady = setTimeout(() => {
         void w.terminate();
-        resolve(giveUp(`not ready in ${timeoutMs} ms`));
-      }, timeoutMs);
+        resolve(giveUp(`not ready in ${startTimeoutMs} ms`));
+      }, startTimeoutMs);
       // Idle, the worker does not keep the process alive; it is held while a job is out.
       w.unref();
       w.on('message', (m: 'ready' | RenderReply) => {

@@ -49,7 +49,7 @@ describe('rendering strangers’ sheets off the main thread', () => {
   });
 
   it('fails a render not answered in time, and starts a new worker for the next', async () => {
-    renderer = offThreadRenderer(fake, { inProcess, log: vi.fn(), timeoutMs: 300 });
+    renderer = offThreadRenderer(fake, { inProcess, log: vi.fn(), timeoutMs: 300, startTimeoutMs: 60_000 });
     await expect(renderer.render(sheet('hang'))).rejects.toThrow(/no answer in 300 ms/);
     expect(text((await renderer.render(sheet('next'))).bytes)).toMatch(/^drawn in thread \d+: next$/);
   });
@@ -96,7 +96,7 @@ describe('rendering strangers’ sheets off the main thread', () => {
   });
 
   it('fails a batch whose worker stops answering part way, its stream erroring', async () => {
-    renderer = offThreadRenderer(fake, { inProcess, log: vi.fn(), size: 1, timeoutMs: 300 });
+    renderer = offThreadRenderer(fake, { inProcess, log: vi.fn(), size: 1, timeoutMs: 300, startTimeoutMs: 60_000 });
     const { body } = await renderer.stream([sheet('stall-after-one'), sheet('never')]);
     const reader = body.getReader();
     expect(text((await reader.read()).value!)).toMatch(/stall-after-one/);
