@@ -10,6 +10,7 @@ const runs = [
   ['pages: JavaScript bytes sent', ['node', 'benchmarks/page-bytes.mjs']],
   ['cut sheet: ours vs Chromium printing from a warm page, alternated', [vn, 'benchmarks/cut-sheet.ts']],
   ['start: npm start to first 200, idle memory', ['node', 'benchmarks/start.mjs']],
+  ['morning batch: 100 and 500 sheets, memory, a member beside it', ['node', 'benchmarks/batch.mjs']],
 ];
 const only = process.argv.slice(2);
 rmSync(RESULTS_DIR, { recursive: true, force: true });

@@ -10,7 +10,7 @@ import type { Precision, Unit } from '@/lib/allowance/types';
 import type { Actor } from '@/lib/api';
 import { scaleUnit, ticketLabel } from '@/lib/bench-requests';
 import { buildCutSheet, refusedFields, type LegOrder, type SheetHeader } from '@/lib/cut-sheet/build';
-import { renderCutSheet, renderCutSheets } from '@/lib/cut-sheet/render';
+import { renderInPool, streamInPool } from '@/lib/cut-sheet/render-off-thread';
 import type { CutSheetData, PageSize, Side } from '@/lib/cut-sheet/types';
 import { letDownFirst } from '@/lib/existing-finish';
 import { legHemTaperRequest, legMainRequest, legTaperRequest, type LegPlanOptions } from '@/lib/leg-plan';
@@ -30,13 +30,23 @@ export interface SheetOptions {
   pageSize?: PageSize;
 }
 
-/** A rendered PDF and the file name it is offered under. */
+/** A rendered PDF, the file name it is offered under, and the thread that drew it. */
 export interface SheetFile {
   bytes: Uint8Array<ArrayBuffer>;
   filename: string;
+  by: 'worker' | 'main';
 }
 
-/** The morning's batch: the PDF and the garments left out for want of a fitting. */
+/** The morning's batch as it streams from the sheet pool, and the garments left out for want of a fitting. */
+export interface BatchStream {
+  body: ReadableStream<Uint8Array>;
+  filename: string;
+  by: 'worker' | 'main';
+  sheets: number;
+  skipped: string[];
+}
+
+/** The morning's batch read whole: the PDF and the garments left out. */
 export interface BatchFile extends SheetFile {
   sheets: number;
   skipped: string[];
@@ -164,11 +174,12 @@ export async function garmentSheet(actor: Actor, garmentId: string, opts: SheetO
   const scale = await scaleOf(actor.shopId, opts);
   const names = await namesOf(g);
   const data = sheetOf(actor, g, await legsOf(g.id), names, baseUrl, scale);
-  return { bytes: await renderCutSheet(data), filename: `${ticketLabel(names.ticketNumber)}-${slug(g.description ?? 'trousers')}.pdf` };
+  const { bytes, by } = await renderInPool(data);
+  return { bytes, by, filename: `${ticketLabel(names.ticketNumber)}-${slug(g.description ?? 'trousers')}.pdf` };
 }
 
-/** The queue as filtered on screen, one sheet per garment; garments without a fitting are listed on a last page. */
-export async function queueSheets(actor: Actor, filter: QueueFilter, today: string, opts: SheetOptions, baseUrl: string): Promise<BatchFile> {
+/** The queue as filtered on screen, one sheet per garment (garments without a fitting listed on a last page), streamed as it is drawn. */
+export async function queueSheetsStream(actor: Actor, filter: QueueFilter, today: string, opts: SheetOptions, baseUrl: string): Promise<BatchStream> {
   const rows = filterQueue(await listQueue(actor), filter, actor.userId, today);
   if (rows.length === 0) throw new ServiceError(422, 'No garments in the queue with these filters.');
   const scale = await scaleOf(actor.shopId, opts);
@@ -192,7 +203,15 @@ export async function queueSheets(actor: Actor, filter: QueueFilter, today: stri
     const why = skipped.every((line) => line.endsWith(': no fitting measurements yet')) ? 'has fitting measurements yet' : `can be printed: ${skipped.join('; ')}`;
     throw new ServiceError(422, `None of these garments ${why}.`.replace(/\.\.$/, '.'));
   }
-  return { bytes: await renderCutSheets(sheets, skipped), filename: `cut-sheets-${today}.pdf`, sheets: sheets.length, skipped };
+  // Drawn in the sheet pool part by part; the database work above is done before the first byte.
+  const { body, by } = await streamInPool(sheets, skipped);
+  return { body, by, filename: `cut-sheets-${today}.pdf`, sheets: sheets.length, skipped };
+}
+
+/** The same batch read whole (what the stream carries). */
+export async function queueSheets(actor: Actor, filter: QueueFilter, today: string, opts: SheetOptions, baseUrl: string): Promise<BatchFile> {
+  const { body, ...batch } = await queueSheetsStream(actor, filter, today, opts, baseUrl);
+  return { ...batch, bytes: new Uint8Array(await new Response(body).arrayBuffer()) };
 }
 
 /** The server's own date, YYYY-MM-DD, for a batch asked for without the device's day. */

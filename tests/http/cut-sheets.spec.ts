@@ -41,6 +41,8 @@ describe("the demo garment's cut sheet", () => {
     const r = await raw(`/api/garments/${navy}/sheet?unit=in&precision=8`, cookie.tailor);
     expect(r.status).toBe(200);
     expect(r.type).toBe('application/pdf');
+    // A member's sheet is drawn in the sheet pool too, off the thread serving requests.
+    expect(r.headers.get('x-rendered-by')).toBe('worker');
     expect(r.headers.get('content-disposition')).toMatch(/^inline; filename="T-\d+-navy-suit-trousers\.pdf"$/);
     const file = pdfFile(r.bytes);
     const text = layoutText(file);
@@ -148,6 +150,8 @@ describe("the morning's batch", () => {
     expect(fitted).toBeGreaterThan(0);
     expect(Number(r.headers.get('x-sheets'))).toBe(fitted);
     expect(Number(r.headers.get('x-skipped'))).toBe(rows.length - fitted);
+    // Drawn in the sheet pool and streamed (the test server sets SHEET_RENDER_TRACE).
+    expect(r.headers.get('x-rendered-by')).toBe('worker');
     const file = pdfFile(r.bytes);
     expect(pageInfo(file).pages).toBe(fitted + (rows.length > fitted ? 1 : 0));
     for (let p = 1; p <= fitted; p++) expect(flatText(file, p)).toMatch(/CUT SHEET/);

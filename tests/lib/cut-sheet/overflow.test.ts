@@ -15,15 +15,21 @@ vi.mock('@/lib/render-pdf', async (importOriginal) => {
       documents.push(doc);
       return real.renderPdf(doc as Parameters<typeof real.renderPdf>[0]);
     },
-    renderPdfRelaid: (doc: ReactElement, adjust: import('@/lib/render-pdf').Relayout) => {
-      documents.push(doc);
-      return real.renderPdfRelaid(doc as Parameters<typeof real.renderPdf>[0], (layout, layOut) =>
-        adjust(layout, (other) => {
-          laidOut.push(other);
-          return layOut(other);
+    renderPdfParts: (parts: Iterable<import('@/lib/render-pdf').PdfPart>, props: import('@react-pdf/renderer').DocumentProps) =>
+      real.renderPdfParts(
+        [...parts].map(({ doc, adjust }) => {
+          documents.push(doc);
+          return {
+            doc,
+            adjust: adjust && ((layout, layOut) =>
+              adjust(layout, (other) => {
+                laidOut.push(other);
+                return layOut(other);
+              })),
+          };
         }),
-      );
-    },
+        props,
+      ),
   };
 });
 

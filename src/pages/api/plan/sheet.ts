@@ -1,6 +1,6 @@
 // POST /api/plan/sheet: the calculator's unsaved plan as a printable cut sheet (PDF). Public:
-// signed out, it is limited per client address, waits in a queue of its own (anonymous-sheets.ts)
-// and is drawn in the sheet worker (render-off-thread.ts), not on the thread serving members.
+// signed out, it is limited per client address and waits in a queue of its own (anonymous-sheets.ts).
+// Every sheet, a member's or a stranger's, is drawn in the sheet pool (render-off-thread.ts).
 import type { APIRoute } from 'astro';
 import { SHEET_RENDER_TRACE } from 'astro:env/server';
 import { isAllowanceError } from '@/lib/allowance';
@@ -9,16 +9,13 @@ import { clientOf } from '@/lib/client-address';
 import { readJson, tooMany } from '@/lib/api';
 import { fieldMessages } from '@/lib/plan-request';
 import { buildCutSheet, refusedFields } from '@/lib/cut-sheet/build';
-import { renderCutSheet } from '@/lib/cut-sheet/render';
-import { renderForStranger, type Rendered } from '@/lib/cut-sheet/render-off-thread';
+import { renderInPool, type Rendered } from '@/lib/cut-sheet/render-off-thread';
 import { legOrders, sheetRequest } from '@/lib/cut-sheet/request';
 import type { CutSheetData } from '@/lib/cut-sheet/types';
 
 export const prerender = false;
 
 type Render = (sheet: CutSheetData) => Promise<Rendered>;
-
-const onThisThread: Render = async (sheet) => ({ bytes: await renderCutSheet(sheet), by: 'main' });
 
 function bad(error: string, fields: Record<string, string>, status = 400): Response {
   return Response.json({ error, fields }, { status, headers: { 'cache-control': 'no-store' } });
@@ -27,11 +24,11 @@ function bad(error: string, fields: Record<string, string>, status = 400): Respo
 /** Answers the cut sheet for the posted plan, or 400 with a message per field. */
 export const POST: APIRoute = async (context) => {
   const { request, locals } = context;
-  if (locals.member) return answer(request, onThisThread);
+  if (locals.member) return answer(request, renderInPool);
   const refused = await anonymousSheetRefusal(clientOf(context));
   if (refused) return refused;
   // All of a stranger's work (reading the plan too), behind members' requests.
-  const queued = inAnonymousQueue(() => answer(request, renderForStranger));
+  const queued = inAnonymousQueue(() => answer(request, renderInPool));
   return queued ?? tooMany('The calculator is printing many sheets for visitors just now. Try again in a few seconds, or sign in.', 5);
 };
 

@@ -1,7 +1,7 @@
 // GET /api/garments/[id]/sheet: the garment's cut sheet as a PDF, in the unit asked for (or the
 // shop's own scale), its QR code opening the garment's page at the app's public address.
 import type { APIRoute } from 'astro';
-import { BETTER_AUTH_URL } from 'astro:env/server';
+import { BETTER_AUTH_URL, SHEET_RENDER_TRACE } from 'astro:env/server';
 import { guard, problem, refusal } from '@/lib/api';
 import { fieldMessages } from '@/lib/plan-request';
 import { queryObject, sheetOptions, sheetQuery } from '@/lib/sheet-request';
@@ -16,9 +16,14 @@ export const GET: APIRoute = async ({ locals, params, url }) => {
   const q = sheetQuery.safeParse(queryObject(url.searchParams));
   if (!q.success) return problem(400, 'Some of the sheet options are not understood.', fieldMessages(q.error));
   try {
-    const { bytes, filename } = await garmentSheet(actor, params.id ?? '', sheetOptions(q.data), BETTER_AUTH_URL);
+    const { bytes, filename, by } = await garmentSheet(actor, params.id ?? '', sheetOptions(q.data), BETTER_AUTH_URL);
     return new Response(bytes, {
-      headers: { 'Content-Type': 'application/pdf', 'Content-Disposition': `inline; filename="${filename}"`, 'cache-control': 'no-store' },
+      headers: {
+        'Content-Type': 'application/pdf',
+        'Content-Disposition': `inline; filename="${filename}"`,
+        'cache-control': 'no-store',
+        ...(SHEET_RENDER_TRACE ? { 'X-Rendered-By': by } : {}),
+      },
     });
   } catch (e) {
     return refusal(e);
