@@ -1,9 +1,8 @@
 import type { TaperPlan } from '@/lib/allowance/types';
-import { LINE_NAMES, seamWork } from '@/components/calculator/line-names';
+import { LINE_NAMES } from '@/components/calculator/line-names';
+import { seamFigures } from '@/components/calculator/seam-figures';
 import { Warnings } from '@/components/calculator/Warnings';
 
-// The column says let out or take in; the figure beside it is a size.
-const size = (text: string) => text.replace(/^[-−]/, '');
 
 /** A plain hem's taper check at the bench: turned up, the hem must be as wide as the leg it lies against. */
 export function HemTaperCheck({ taper }: { taper: TaperPlan }) {
@@ -41,10 +40,10 @@ export function HemTaperCheck({ taper }: { taper: TaperPlan }) {
                 {l.measured && <span className="block text-base text-muted">measured</span>}
               </td>
               <td className="py-2 pr-2">
-                <span className="text-muted">{seamWork(l.change.mm)} </span>
-                <span className="measure text-xl font-extrabold">{size(l.perSeam.text)}</span>
+                <span className="text-muted">{seamFigures(l.change.mm, taper.unit, taper.precision).verb} </span>
+                <span className="measure text-xl font-extrabold">{seamFigures(l.change.mm, taper.unit, taper.precision).perSeam}</span>
               </td>
-              <td className="measure py-2 text-xl font-semibold">{size(l.perSide.text)}</td>
+              <td className="measure py-2 text-xl font-semibold">{seamFigures(l.change.mm, taper.unit, taper.precision).perSide}</td>
             </tr>
           ))}
         </tbody>

@@ -2,7 +2,7 @@ import { useRef } from 'react';
 import type { TaperPlan } from '@/lib/allowance/types';
 import { Hatch } from './Hatch';
 import { spread } from './label-spread';
-import { seamWork } from './line-names';
+import { seamFigures } from './seam-figures';
 import { useWidth } from './use-narrow';
 
 const W = 640;
@@ -20,7 +20,7 @@ export function TaperDrawing({ taper }: { taper: TaperPlan }) {
   const font = Math.max(14, (MIN_PX * W) / (shown ?? W));
   const labels = [
     { y: 0, mm: -depthOf(taper), top: true, text: '', n: 0 },
-    ...taper.lines.map((l) => ({ y: 0, mm: l.belowMark.mm, top: false, text: `${l.n} · ${seamWork(l.change.mm)} ${l.perSide.text} each side`, n: l.n })),
+    ...taper.lines.map((l) => ({ y: 0, mm: l.belowMark.mm, top: false, text: `${l.n} · ${seamFigures(l.change.mm, taper.unit, taper.precision).verb} ${seamFigures(l.change.mm, taper.unit, taper.precision).perSide} each side`, n: l.n })),
   ];
   const topText = `cuff top width ${taper.targetWidth.text}`;
   const labelRoom = Math.max(topText.length, ...labels.map((l) => l.text.length)) * CHAR_EM * font;
@@ -68,7 +68,7 @@ export function TaperDrawing({ taper }: { taper: TaperPlan }) {
                 </text>
               ) : (
                 <text x={labelX} y={l.y} fontSize={font} className="fill-ink">
-                  {l.n} · {seamWork(line!.change.mm)} <tspan className="measure font-extrabold">{line!.perSide.text}</tspan> each side
+                  {l.n} · {seamFigures(line!.change.mm, taper.unit, taper.precision).verb} <tspan className="measure font-extrabold">{seamFigures(line!.change.mm, taper.unit, taper.precision).perSide}</tspan> each side
                 </text>
               )}
             </g>

@@ -1,5 +1,6 @@
 import type { TaperPlan } from '@/lib/allowance/types';
-import { LINE_NAMES, seamWork } from './line-names';
+import { LINE_NAMES } from './line-names';
+import { seamFigures } from './seam-figures';
 import { TaperDrawing } from './TaperDrawing';
 
 /** The taper check: the width to keep, and the let-out at each chalk line per seam and per side. */
@@ -25,19 +26,22 @@ export function TaperResult({ taper }: { taper: TaperPlan }) {
           </tr>
         </thead>
         <tbody>
-          {taper.lines.map((l) => (
-            <tr key={l.n} className="border-b border-rule">
-              <th scope="row" className="py-2 pr-2 font-semibold">
-                {l.n} {LINE_NAMES[l.name]}
-              </th>
-              <td className="measure py-2 pr-2">{l.width.text}</td>
-              <td className="py-2 pr-2">
-                <span className="text-muted">{seamWork(l.change.mm)} </span>
-                <span className="measure text-xl font-extrabold">{l.perSeam.text}</span>
-              </td>
-              <td className="measure py-2 text-xl font-semibold">{l.perSide.text}</td>
-            </tr>
-          ))}
+          {taper.lines.map((l) => {
+            const work = seamFigures(l.change.mm, taper.unit, taper.precision);
+            return (
+              <tr key={l.n} className="border-b border-rule">
+                <th scope="row" className="py-2 pr-2 font-semibold">
+                  {l.n} {LINE_NAMES[l.name]}
+                </th>
+                <td className="measure py-2 pr-2">{l.width.text}</td>
+                <td className="py-2 pr-2">
+                  <span className="text-muted">{work.verb} </span>
+                  <span className="measure text-xl font-extrabold">{work.perSeam}</span>
+                </td>
+                <td className="measure py-2 text-xl font-semibold">{work.perSide}</td>
+              </tr>
+            );
+          })}
         </tbody>
       </table>
       <TaperDrawing taper={taper} />
