@@ -50,7 +50,8 @@ export default defineConfig({
     // All 'secret': Astro inlines 'public' server variables at build time, and these must be read
     // when the server starts (tests and scripts set them per run).
     schema: {
-      DATA_DIR: envField.string({ context: 'server', access: 'secret', default: './data' }),
+      // Unset: the app's own data/ folder (src/db/app-paths.ts), wherever the server is started from.
+      DATA_DIR: envField.string({ context: 'server', access: 'secret', optional: true }),
       // postgres://… switches from the embedded PGlite in DATA_DIR to a PostgreSQL server.
       DATABASE_URL: envField.string({ context: 'server', access: 'secret', optional: true }),
       BETTER_AUTH_URL: envField.string({ context: 'server', access: 'secret', default: 'http://localhost:4321' }),
@@ -82,6 +83,17 @@ export default defineConfig({
       // How many reverse proxies in front of the server append to X-Forwarded-For (0: none, the
       // client is the TCP peer). The limits take the client's address from it (README: Security).
       TRUSTED_PROXY_HOPS: envField.number({ context: 'server', access: 'secret', default: 0, int: true, min: 0 }),
+      // Where fitting photos are kept: 'disk' (DATA_DIR/files, one machine) or 's3' (an S3-compatible
+      // object store shared by several servers; README: Running several servers).
+      STORAGE: envField.enum({ context: 'server', access: 'secret', values: ['disk', 's3'], default: 'disk' }),
+      S3_BUCKET: envField.string({ context: 'server', access: 'secret', optional: true }),
+      S3_PREFIX: envField.string({ context: 'server', access: 'secret', optional: true }),
+      S3_REGION: envField.string({ context: 'server', access: 'secret', optional: true }),
+      // A non-AWS store (or the local fake): its URL; path-style addressing is then the default.
+      S3_ENDPOINT: envField.string({ context: 'server', access: 'secret', optional: true }),
+      S3_ACCESS_KEY_ID: envField.string({ context: 'server', access: 'secret', optional: true }),
+      S3_SECRET_ACCESS_KEY: envField.string({ context: 'server', access: 'secret', optional: true }),
+      S3_FORCE_PATH_STYLE: envField.boolean({ context: 'server', access: 'secret', optional: true }),
       // Set by the HTTP tests: anonymous cut sheets say which thread drew them (X-Rendered-By: worker or main).
       SHEET_RENDER_TRACE: envField.boolean({ context: 'server', access: 'secret', default: false }),
       // off: none of the PDF speed patches (src/lib/pdf-platform). Read there from process.env, as
