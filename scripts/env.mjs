@@ -1,11 +1,16 @@
 // The environment the scripts read (start, dev, durability), parsed once with zod.
 import { z } from 'zod';
-import { join } from 'node:path';
+import { join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+/** The app's folder (the one above scripts/), whatever folder a script is started from. */
+export const appDir = fileURLToPath(new URL('..', import.meta.url));
 
 const schema = z.object({
   PORT: z.coerce.number().int().positive().default(4321),
   HOST: z.string().default('127.0.0.1'),
-  DATA_DIR: z.string().default('./data'),
+  // Relative to the folder started from; unset, the app's own data/ (as the server decides).
+  DATA_DIR: z.string().optional().transform((d) => (d ? resolve(d) : join(appDir, 'data'))),
   DATABASE_URL: z.string().startsWith('postgres').optional(),
   // When SMTP_HOST names a real server, no capture is started and SMTP_* pass through unchanged.
   SMTP_HOST: z.string().optional(),

@@ -5,7 +5,8 @@ import { spawn } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import { createServer } from 'node:net';
 import { buildIfNeeded } from './build-if-needed.mjs';
-import { env, useCapture, captureDir, settingsProblem } from './env.mjs';
+import { join } from 'node:path';
+import { appDir, env, useCapture, captureDir, settingsProblem } from './env.mjs';
 import { listenOrExplain } from './port-taken.mjs';
 
 const problem = settingsProblem();
@@ -19,6 +20,7 @@ const serverEnv = {
   NODE_ENV: 'production',
   PORT: String(env.PORT),
   HOST: env.HOST,
+  DATA_DIR: env.DATA_DIR,
   BETTER_AUTH_URL: env.BETTER_AUTH_URL || `http://localhost:${env.PORT}`,
 };
 
@@ -44,9 +46,10 @@ const payments = { apiKey: `sk_test_local_${randomBytes(12).toString('hex')}`, w
 if (fakePayments) {
   Object.assign(serverEnv, { PAYMENTS_API_KEY: payments.apiKey, PAYMENTS_API_BASE: `http://127.0.0.1:${pay.port}`, PAYMENTS_WEBHOOK_SECRET: payments.webhookSecret });
 }
+process.chdir(appDir);
 buildIfNeeded('dist');
 console.log(`Cuffwright on http://localhost:${env.PORT}`);
-const server = spawn('node', ['dist/server/entry.mjs'], { stdio: 'inherit', env: serverEnv });
+const server = spawn(process.execPath, [join(appDir, 'dist/server/entry.mjs')], { stdio: 'inherit', env: serverEnv });
 for (const sig of ['SIGINT', 'SIGTERM']) process.on(sig, () => server.kill(sig));
 // A stand-in that cannot start after all (its port taken since the check) stops the server too.
 process.on('exit', () => server.kill());

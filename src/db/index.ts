@@ -3,12 +3,13 @@
 import { join } from 'node:path';
 import { DATA_DIR, DATABASE_URL } from 'astro:env/server';
 import { openDatabase, type DbHandle } from './open';
+import { dataDir } from './app-paths';
 
 const holder = globalThis as typeof globalThis & { __cuffwrightDb?: DbHandle };
 
 /** The open database handle (driver, migrator, closer). */
 export const handle: DbHandle = (holder.__cuffwrightDb ??= openDatabase(
-  DATABASE_URL ? { url: DATABASE_URL } : { dataDir: join(DATA_DIR, 'pglite') },
+  DATABASE_URL ? { url: DATABASE_URL } : { dataDir: join(dataDir(DATA_DIR), 'pglite') },
 ));
 
 /** The Drizzle database every service uses. */

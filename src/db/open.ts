@@ -9,6 +9,7 @@ import { migrate as migratePg } from 'drizzle-orm/node-postgres/migrator';
 import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
 import pg from 'pg';
 import * as schema from './schema/index';
+import { migrationsDir } from './app-paths';
 
 /** The Drizzle database, whichever driver is underneath. */
 export type Db = PgDatabase<PgQueryResultHKT, typeof schema>;
@@ -18,14 +19,20 @@ export interface DbHandle {
   db: Db;
   kind: 'pglite' | 'postgres';
   migrate: () => Promise<void>;
+  /** Runs fn while holding the start lock: on PostgreSQL a session advisory lock, so of several
+   * servers starting together one migrates and seeds while the others wait; PGlite has one process. */
+  withStartLock: <T>(fn: () => Promise<T>) => Promise<T>;
   close: () => Promise<void>;
 }
+
+/** The advisory lock key of migrations and the demo seed (any fixed 64-bit number of our own). */
+export const START_LOCK_KEY = 72_270_420_001;
 
 /** Where to open: a postgres:// URL, a PGlite folder, or a ready PGlite instance (tests). */
 export type DbTarget = { url: string } | { dataDir: string } | { pglite: PGlite };
 
 /** Opens the database; call migrate() before use. */
-export function openDatabase(target: DbTarget, migrationsFolder = './drizzle'): DbHandle {
+export function openDatabase(target: DbTarget, migrationsFolder = migrationsDir()): DbHandle {
   if ('url' in target) {
     const pool = new pg.Pool({ connectionString: target.url, max: 10 });
     const db = drizzlePg(pool, { schema });
@@ -33,6 +40,16 @@ export function openDatabase(target: DbTarget, migrationsFolder = './drizzle'): 
       db: db as unknown as Db,
       kind: 'postgres',
       migrate: () => migratePg(db, { migrationsFolder }),
+      withStartLock: async (fn) => {
+        const client = await pool.connect();
+        try {
+          await client.query('select pg_advisory_lock($1)', [START_LOCK_KEY]);
+          return await fn();
+        } finally {
+          await client.query('select pg_advisory_unlock($1)', [START_LOCK_KEY]).catch(() => {});
+          client.release();
+        }
+      },
       close: () => pool.end(),
     };
   }
@@ -48,6 +65,7 @@ export function openDatabase(target: DbTarget, migrationsFolder = './drizzle'): 
     db: db as unknown as Db,
     kind: 'pglite',
     migrate: () => migratePglite(db, { migrationsFolder }),
+    withStartLock: (fn) => fn(),
     close: () => client.close(),
   };
 }

@@ -3,6 +3,7 @@
 import { betterAuth } from 'better-auth';
 import { drizzleAdapter } from 'better-auth/adapters/drizzle';
 import { BETTER_AUTH_SECRET, BETTER_AUTH_URL, DATABASE_URL, DATA_DIR } from 'astro:env/server';
+import { dataDir } from '@/db/app-paths';
 import { db } from '@/db';
 import * as authSchema from '@/db/schema/auth';
 import { appAuthHooks } from './auth-hooks';
@@ -18,7 +19,7 @@ refuseUnsafeStart({ DATABASE_URL, BETTER_AUTH_SECRET });
 /** The better-auth instance; its HTTP handler answers /api/auth/*. */
 export const auth = betterAuth({
   baseURL: BETTER_AUTH_URL,
-  secret: authSecret(BETTER_AUTH_SECRET, DATA_DIR, DATABASE_URL),
+  secret: authSecret(BETTER_AUTH_SECRET, dataDir(DATA_DIR), DATABASE_URL),
   trustedOrigins: [BETTER_AUTH_URL],
   database: drizzleAdapter(db, { provider: 'pg', schema: authSchema }),
   emailAndPassword: {

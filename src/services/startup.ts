@@ -10,9 +10,12 @@ const holder = globalThis as typeof globalThis & { __cuffwrightReady?: Promise<v
 
 async function start(): Promise<void> {
   const began = Date.now();
-  await handle.migrate();
-  // The demo shop's password is in the README: only on the embedded database unless asked for.
-  const seeded = demoWanted({ DATABASE_URL, DEMO_DATA }) ? await seedDemoIfEmpty() : false;
+  // Under the start lock: two servers starting on one PostgreSQL neither migrate nor seed twice.
+  const seeded = await handle.withStartLock(async () => {
+    await handle.migrate();
+    // The demo shop's password is in the README: only on the embedded database unless asked for.
+    return demoWanted({ DATABASE_URL, DEMO_DATA }) ? await seedDemoIfEmpty() : false;
+  });
   startNoticeTimer(NOTICE_TICK_SECONDS);
   console.log(`Database ready (${handle.kind}) in ${Date.now() - began} ms${seeded ? ', demo shop seeded' : ''}.`);
 }
