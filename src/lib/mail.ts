@@ -9,6 +9,11 @@ const transport = nodemailer.createTransport({
   port: SMTP_PORT,
   secure: SMTP_SECURE,
   auth: SMTP_USER ? { user: SMTP_USER, pass: SMTP_PASS ?? '' } : undefined,
+  // Bounded well inside a notice's send lease (services/notices.ts): a send either ends or fails
+  // before another server may take it over.
+  connectionTimeout: 30_000,
+  greetingTimeout: 20_000,
+  socketTimeout: 60_000,
 });
 
 /** A message to send. */

@@ -17,6 +17,9 @@ import { shopTicket } from './ticket-core';
 export const MAX_AUTO_ATTEMPTS = 5;
 // 30 s, 1 min, 2 min, 4 min: a mail server back from a restart is caught soon, a dead one is not hammered.
 const BACKOFF_MS = 30_000;
+/** How long a claimed send is left to its server before another server may try it: longer than
+ * the mail transport's own timeouts (src/lib/mail.ts), so only a server that died mid-send is overtaken. */
+export const SEND_LEASE_MS = 3 * 60_000;
 
 /** The ticket's notices, oldest first. */
 export async function listNotices(actor: Actor, ticketId: string): Promise<Notice[]> {
@@ -50,10 +53,12 @@ export async function readyMessage(shopId: string, ticketId: string): Promise<{ 
 /** Tries one delivery and records the outcome; a failure schedules the next automatic try. */
 export async function attemptDelivery(notice: Notice): Promise<Notice> {
   const attempts = notice.attempts + 1;
-  // The attempt is claimed first, so the timer and a retry by hand at the same moment send one mail.
+  // The attempt is claimed first, so the timer and a retry by hand at the same moment (on this
+  // server or another) send one mail. The claim is a lease: if this server dies before recording
+  // the outcome, the notice falls due again when the lease ends and another server's timer sends it.
   const [claimed] = await db
     .update(notices)
-    .set({ attempts, nextAttemptAt: null })
+    .set({ attempts, nextAttemptAt: new Date(Date.now() + SEND_LEASE_MS) })
     .where(and(eq(notices.id, notice.id), eq(notices.attempts, notice.attempts), ne(notices.status, 'sent')))
     .returning({ id: notices.id });
   if (!claimed) {
@@ -113,9 +118,10 @@ export async function retryNotice(actor: Actor, ticketId: string, noticeId: stri
   return attemptDelivery(row);
 }
 
-/** Retries every failed notice whose next try is due; returns how many were tried. */
+/** Tries every unsent notice whose next try is due (a failure's retry, or a send whose server
+ * died before recording it); returns how many were tried. */
 export async function retryDueNotices(now = new Date()): Promise<number> {
-  const due = await db.select().from(notices).where(and(eq(notices.status, 'failed'), lte(notices.nextAttemptAt, now)));
+  const due = await db.select().from(notices).where(and(ne(notices.status, 'sent'), lte(notices.nextAttemptAt, now)));
   for (const n of due) await attemptDelivery(n);
   return due.length;
 }

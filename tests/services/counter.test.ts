@@ -271,6 +271,25 @@ describe('ready notices', () => {
     expect(captured().some((m) => m.to.includes('orrin.retry@example.com'))).toBe(true);
   });
 
+  it('claimed by a server that died before sending are sent by another once the lease ends, once', async () => {
+    mailTarget.port = capture.port;
+    const t = await priced(a, { status: 'ready', email: 'orrin.lease@example.com' });
+    // The row as a server leaves it when killed between claiming the attempt and sending.
+    const [claimed] = await db
+      .insert(notices)
+      .values({ shopId: a.shopId, ticketId: t.id, kind: 'ready', to: 'orrin.lease@example.com', subject: 'Ready', body: 'Ready.', attempts: 1, nextAttemptAt: new Date(Date.now() + notice.SEND_LEASE_MS) })
+      .returning();
+    expect(await notice.retryDueNotices(new Date())).toBe(0);
+    const later = new Date(Date.now() + notice.SEND_LEASE_MS + 1000);
+    // Two servers' timers at the same moment: one mail.
+    const tried = await Promise.all([notice.retryDueNotices(later), notice.retryDueNotices(later)]);
+    expect(tried.reduce((x, y) => x + y, 0)).toBeGreaterThanOrEqual(1);
+    const [row] = await db.select().from(notices).where(eq(notices.id, claimed!.id));
+    expect([row!.status, row!.attempts]).toEqual(['sent', 2]);
+    expect(captured().filter((m) => m.to.includes('orrin.lease@example.com'))).toHaveLength(1);
+    expect(await notice.retryDueNotices(new Date(Date.now() + 10 * notice.SEND_LEASE_MS))).toBe(0);
+  });
+
   it('retry by hand after the automatic tries give up', async () => {
     mailTarget.port = await freePort();
     const t = await priced(a, { status: 'ready', email: 'orrin.manual@example.com' });
