@@ -14,6 +14,7 @@ import { ensureStarted } from '@/services/startup';
 const PUBLIC_PAGES = ['/', '/sign-in', '/sign-up', '/forgot', '/reset', '/paid'];
 const PUBLIC_PREFIXES = ['/invite/', '/api/', '/_astro/', '/_image', '/favicon'];
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
+const HEALTH_PATH = '/api/health';
 // Routes that answer for themselves: better-auth resolves its own session, and the payment
 // webhook is proven by its signature. Looking the session up for them is work thrown away.
 const OWN_AUTH_PREFIXES = ['/api/auth/', '/api/payments/webhook'];
@@ -57,6 +58,8 @@ export const onRequest = defineMiddleware(async (context, next) => {
 });
 
 async function answer(context: Parameters<MiddlewareHandler>[0], next: Parameters<MiddlewareHandler>[1], notMember: () => void): Promise<Response> {
+  // Health answers for itself, even while the database is down or not yet migrated.
+  if (context.url.pathname === HEALTH_PATH) return next();
   await ensureStarted();
   const { request, url, locals } = context;
   if (crossSite(request, url.origin)) {

@@ -190,6 +190,14 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
   plan: 'public: calculator',
   'plan/sheet': 'public: calculator',
   'auth/[...all]': 'auth: better-auth',
+  // For load balancers: open to all, the same answer for everyone, no shop data (markers checked).
+  health: {
+    GET: {
+      request: () => ({ path: '/api/health' }),
+      expect: all(200),
+      check: (r) => expect(r.body).toMatchObject({ ok: true, database: 'reachable', migrations: 'current' }),
+    },
+  },
   me: {
     GET: {
       request: () => ({ path: '/api/me' }),
