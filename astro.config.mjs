@@ -83,6 +83,8 @@ export default defineConfig({
       // How many reverse proxies in front of the server append to X-Forwarded-For (0: none, the
       // client is the TCP peer). The limits take the client's address from it (README: Security).
       TRUSTED_PROXY_HOPS: envField.number({ context: 'server', access: 'secret', default: 0, int: true, min: 0 }),
+      // 'json': one JSON line per request on stdout (npm run serve sets it); 'off' otherwise.
+      REQUEST_LOG: envField.enum({ context: 'server', access: 'secret', values: ['json', 'off'], default: 'off' }),
       // Where fitting photos are kept: 'disk' (DATA_DIR/files, one machine) or 's3' (an S3-compatible
       // object store shared by several servers; README: Running several servers).
       STORAGE: envField.enum({ context: 'server', access: 'secret', values: ['disk', 's3'], default: 'disk' }),

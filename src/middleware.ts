@@ -9,6 +9,7 @@ import { memberRequestStarted } from '@/lib/member-activity';
 import { badIdParam } from '@/lib/ids';
 import { activeMembership } from '@/services/members';
 import { withSecurityHeaders } from '@/lib/security-headers';
+import { logError, logRequest } from '@/lib/request-log';
 import { ensureStarted } from '@/services/startup';
 
 const PUBLIC_PAGES = ['/', '/sign-in', '/sign-up', '/forgot', '/reset', '/paid'];
@@ -50,16 +51,28 @@ async function jsonRefusal(path: string, response: Response): Promise<Response> 
  * NODE_ENV=test, so DEV is no guide). */
 export const onRequest = defineMiddleware(async (context, next) => {
   const done = memberRequestStarted(context.request);
+  const began = performance.now();
+  let status = 500;
   try {
-    return withSecurityHeaders(await jsonRefusal(context.url.pathname, await answer(context, next, done)), { csp: import.meta.env.MODE !== 'development' });
+    const res = withSecurityHeaders(await jsonRefusal(context.url.pathname, await answer(context, next, done)), { csp: import.meta.env.MODE !== 'development' });
+    status = res.status;
+    return res;
+  } catch (e) {
+    logError(context.routePattern, e);
+    throw e;
   } finally {
     done();
+    logRequest({ method: context.request.method, route: context.routePattern, status, ms: performance.now() - began, shop: context.locals.member?.shopId ?? null });
   }
 });
 
 async function answer(context: Parameters<MiddlewareHandler>[0], next: Parameters<MiddlewareHandler>[1], notMember: () => void): Promise<Response> {
-  // Health answers for itself, even while the database is down or not yet migrated.
-  if (context.url.pathname === HEALTH_PATH) return next();
+  // Health answers for itself, even while the database is down or not yet migrated; asking it
+  // also starts the database (migrations) if no request has yet.
+  if (context.url.pathname === HEALTH_PATH) {
+    ensureStarted().catch(() => {});
+    return next();
+  }
   await ensureStarted();
   const { request, url, locals } = context;
   if (crossSite(request, url.origin)) {
