@@ -80,6 +80,8 @@ export default defineConfig({
       BODY_IDLE_SECONDS: envField.number({ context: 'server', access: 'secret', default: 20 }),
       // How often the server retries failed notices and sends automatic ready notices.
       NOTICE_TICK_SECONDS: envField.number({ context: 'server', access: 'secret', default: 30 }),
+      // How long a server's claim on sending a notice lasts before another server may send it.
+      NOTICE_LEASE_SECONDS: envField.number({ context: 'server', access: 'secret', default: 180, min: 1 }),
       // How many reverse proxies in front of the server append to X-Forwarded-For (0: none, the
       // client is the TCP peer). The limits take the client's address from it (README: Security).
       TRUSTED_PROXY_HOPS: envField.number({ context: 'server', access: 'secret', default: 0, int: true, min: 0 }),

@@ -1,6 +1,7 @@
 // Notices to customers: the ready notice, sent by the counter or by the shop's setting, kept with
 // its delivery state; a failed send is retried on a timer and by hand, and stays visible.
 import { and, asc, eq, gte, isNull, lte, ne, sql } from 'drizzle-orm';
+import { NOTICE_LEASE_SECONDS } from 'astro:env/server';
 import { db } from '@/db';
 import { counterSettings, customers, garments, notices, organization, tickets, type Notice } from '@/db/schema';
 import type { Actor } from '@/lib/api';
@@ -17,9 +18,9 @@ import { shopTicket } from './ticket-core';
 export const MAX_AUTO_ATTEMPTS = 5;
 // 30 s, 1 min, 2 min, 4 min: a mail server back from a restart is caught soon, a dead one is not hammered.
 const BACKOFF_MS = 30_000;
-/** How long a claimed send is left to its server before another server may try it: longer than
+/** How long (NOTICE_LEASE_SECONDS, 3 min) a claimed send is left to its server before another server may try it: longer than
  * the mail transport's own timeouts (src/lib/mail.ts), so only a server that died mid-send is overtaken. */
-export const SEND_LEASE_MS = 3 * 60_000;
+export const SEND_LEASE_MS = NOTICE_LEASE_SECONDS * 1000;
 
 /** The ticket's notices, oldest first. */
 export async function listNotices(actor: Actor, ticketId: string): Promise<Notice[]> {
