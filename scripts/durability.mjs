@@ -1,7 +1,8 @@
 // Durability: writers open tickets through the API while the server is killed with SIGKILL at a
 // random moment; after a restart every write the server acknowledged (201) must be there.
-// Usage: node scripts/durability.mjs [rounds=5]   (DATABASE_URL=postgres://… to test a server)
-// Only talks to the server it starts on 127.0.0.1; every loop is bounded.
+// Usage: node scripts/durability.mjs [rounds=5]   (DATABASE_URL=postgres://… to test a server;
+// with it, SERVERS=2 runs two app servers on that database, writers on both, one killed per round)
+// Only talks to the servers it starts on 127.0.0.1; every loop is bounded.
 import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
@@ -15,14 +16,18 @@ const WRITERS = 4;
 const outDir = process.env.TEST_DIST_DIR || '.test-dist-durability';
 buildIfNeeded(outDir);
 
-const port = await new Promise((resolve) => {
-  const s = createServer();
-  s.listen(0, '127.0.0.1', () => {
-    const p = s.address().port;
-    s.close(() => resolve(p));
+const SERVERS = process.env.DATABASE_URL ? Number(process.env.SERVERS ?? 1) : 1;
+const freePort = () =>
+  new Promise((resolve) => {
+    const s = createServer();
+    s.listen(0, '127.0.0.1', () => {
+      const p = s.address().port;
+      s.close(() => resolve(p));
+    });
   });
-});
-const base = `http://localhost:${port}`;
+const ports = [];
+for (let i = 0; i < SERVERS; i += 1) ports.push(await freePort());
+const bases = ports.map((p) => `http://localhost:${p}`);
 const dataDir = mkdtempSync(join(tmpdir(), 'cuffwright-durability-'));
 const sleep = (ms) => new Promise((r) => setTimeout(r, ms));
 
@@ -30,18 +35,18 @@ const sleep = (ms) => new Promise((r) => setTimeout(r, ms));
 // a session secret from the environment, the same across restarts).
 const secret = process.env.BETTER_AUTH_SECRET || randomBytes(32).toString('base64url');
 
-function startServer() {
+function startServer(i) {
   return spawn('node', [`${outDir}/server/entry.mjs`], {
-    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir, BETTER_AUTH_URL: base, SMTP_PORT: '9', DEMO_DATA: 'on', BETTER_AUTH_SECRET: secret },
+    env: { ...process.env, PORT: String(ports[i]), HOST: '127.0.0.1', DATA_DIR: join(dataDir, String(i)), BETTER_AUTH_URL: bases[i], SMTP_PORT: '9', DEMO_DATA: 'on', BETTER_AUTH_SECRET: secret },
     stdio: ['ignore', 'ignore', 'inherit'],
   });
 }
 
-async function waitUp(ms = 60_000) {
+async function waitUp(i, ms = 60_000) {
   const until = Date.now() + ms;
   while (Date.now() < until) {
     try {
-      if ((await fetch(`${base}/`)).status === 200) return;
+      if ((await fetch(`${bases[i]}/`)).status === 200) return;
     } catch {
       /* not up yet */
     }
@@ -51,6 +56,7 @@ async function waitUp(ms = 60_000) {
 }
 
 async function signIn() {
+  const base = bases[0];
   const r = await fetch(`${base}/api/auth/sign-in/email`, {
     method: 'POST',
     headers: { 'content-type': 'application/json', origin: base },
@@ -61,6 +67,8 @@ async function signIn() {
 }
 
 async function writer(cookie, round, w, acked, stop) {
+  // With two servers, writers take turns: half write to each.
+  const base = bases[w % bases.length];
   for (let i = 0; !stop.now && i < 100_000; i += 1) {
     const note = `durability r${round} w${w} #${i}`;
     try {
@@ -76,8 +84,9 @@ async function writer(cookie, round, w, acked, stop) {
   }
 }
 
-let server = startServer();
-await waitUp();
+const servers = bases.map((_, i) => startServer(i));
+// Together, as a group's servers start: migrations and the seed run once, under the start lock.
+await Promise.all(bases.map((_, i) => waitUp(i, 120_000)));
 const cookie = await signIn();
 const results = [];
 let allAcked = [];
@@ -87,22 +96,25 @@ try {
     const stop = { now: false };
     const writers = Array.from({ length: WRITERS }, (_, w) => writer(cookie, round, w, acked, stop));
     await sleep(1000 + Math.random() * 2000);
-    server.kill('SIGKILL');
-    await new Promise((r) => server.once('exit', r));
+    const victim = Math.floor(Math.random() * servers.length);
+    servers[victim].kill('SIGKILL');
+    await new Promise((r) => servers[victim].once('exit', r));
     stop.now = true;
     await Promise.all(writers);
     allAcked = allAcked.concat(acked);
-    server = startServer();
-    await waitUp();
-    const r = await fetch(`${base}/api/tickets`, { headers: { cookie } });
+    servers[victim] = startServer(victim);
+    await waitUp(victim);
+    // Read back through the other server when there is one, the restarted one otherwise.
+    const reader = bases[(victim + 1) % bases.length];
+    const r = await fetch(`${reader}/api/tickets`, { headers: { cookie } });
     if (r.status !== 200) throw new Error(`listing after restart answered ${r.status}`);
     const present = new Map((await r.json()).map((t) => [t.id, t.note]));
     const missing = allAcked.filter((a) => present.get(a.id) !== a.note);
     results.push({ round, acked: acked.length, checked: allAcked.length, missing: missing.length });
-    console.log(`round ${round}: ${acked.length} writes acknowledged before SIGKILL; after restart ${allAcked.length - missing.length}/${allAcked.length} acknowledged writes present`);
+    console.log(`round ${round}: ${acked.length} writes acknowledged before SIGKILL of server ${victim + 1}/${servers.length}; after restart ${allAcked.length - missing.length}/${allAcked.length} acknowledged writes present`);
   }
 } finally {
-  server.kill('SIGTERM');
+  for (const server of servers) server.kill('SIGTERM');
   await sleep(500);
   rmSync(dataDir, { recursive: true, force: true });
 }
