@@ -1,7 +1,7 @@
 // The public calculator says the truth and prints: what each field was read as, lengths carried
 // over when the unit changes, "does not fit" when the cloth is short, a Print button that fetches
 // the cut sheet, a page that prints whole from the browser, and a drawing legible on a phone.
-// 1 in = 25.4 mm exactly (NBS 1959, ../shared/TRADE.md); a cuff takes three cuff depths below the
+// 1 in = 25.4 mm exactly (NBS 1959, docs/TRADE.md); a cuff takes three cuff depths below the
 // mark (TRADE.md: cuff depth, cuff face, third section), so 1 1/2 in cuts at 4 1/2 in.
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';

@@ -1,5 +1,5 @@
 // The reading shown beside a length field and the carrying of typed lengths to another unit.
-// 1 in = 25.4 mm exactly (NBS 1959, ../shared/TRADE.md): every inch figure below is that arithmetic.
+// 1 in = 25.4 mm exactly (NBS 1959, docs/TRADE.md): every inch figure below is that arithmetic.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parseLength, type Unit } from '@/lib/allowance';

@@ -1,6 +1,6 @@
 // Short of cloth, the calculator's headline says it does not fit and lists what still fits, the
 // customer's own cuff depth on a shorter third section first (issue 11), then a shallower cuff.
-// A cuff takes three sections below the mark (../shared/TRADE.md): 1 1/2 in needs 4 1/2 in, its
+// A cuff takes three sections below the mark (docs/TRADE.md): 1 1/2 in needs 4 1/2 in, its
 // inner fold is 3 in below the mark; with 4 1/4 in of cloth the third section can be 1 1/4 in
 // (4 1/4 − 3), which still holds the 1/2 in turn-under and the engine's 1/4 in safe stitch
 // (common practice, no source).
