@@ -1,6 +1,7 @@
 import Fraction from 'fraction.js';
 import { AllowanceError } from './allowance-error';
 import { formatExact } from './format-length';
+import { Exact } from './exact';
 import { fractionNumber } from './len';
 import { type LengthTerm, readLengthTerms, termUnits } from './length-terms';
 import type { Len, Precision, Unit } from './types';
@@ -29,6 +30,24 @@ export function termMm(t: LengthTerm, unit: Unit): Fraction {
   return new Fraction(BigInt(t.sign) * n, d * BigInt(b) * 10n ** BigInt(places));
 }
 
+/** termMm as an Exact: safe integers for everyday text ("1 1/2", "38.5"), fraction.js beyond. */
+export function termExact(t: LengthTerm, unit: Unit): Exact {
+  const whole = t.whole ?? '0';
+  const num = t.num ?? '0';
+  const den = t.den ?? '1';
+  if (whole.length + den.length <= 12 && num.length <= 12) {
+    const dot = whole.indexOf('.');
+    const places = dot < 0 ? 0 : whole.length - dot - 1;
+    const [a, b] = mmPerUnitRatio(unit);
+    const wholeDigits = dot < 0 ? whole : whole.slice(0, dot) + whole.slice(dot + 1);
+    const d = Number(den);
+    const n = (Number(wholeDigits) * d + Number(num) * 10 ** places) * a;
+    const dd = d * b * 10 ** places;
+    if (Number.isSafeInteger(n) && Number.isSafeInteger(dd) && dd !== 0) return Exact.ratio(t.sign * n, dd);
+  }
+  return Exact.from(termMm(t, unit));
+}
+
 /** Smallest length told apart from nothing: a thousandth of a millimetre. */
 export const LEAST_MM = new Fraction(1, 1000);
 
@@ -44,6 +63,25 @@ export function checkRange(mm: Fraction): Fraction {
     throw new AllowanceError('too-large', 'A length must be within 200 in (5080 mm) either way.');
   }
   return mm;
+}
+
+/** checkRange for an Exact (the same refusals and messages). */
+export function checkRangeExact(mm: Exact): Exact {
+  if (mm.big !== null) {
+    checkRange(mm.big);
+    return mm;
+  }
+  const n = mm.n < 0 ? -mm.n : mm.n;
+  if (n !== 0 && n * 1000 < mm.d) checkRange(mm.toFraction());
+  if (n > 5079 * mm.d) checkRange(mm.toFraction());
+  return mm;
+}
+
+/** Typed text to an exact length in mm, as an Exact (parseExact's answer without building a Fraction for one term). */
+export function readExact(text: string, unit: Unit): Exact {
+  const terms = readLengthTerms(text);
+  const units = termUnits(terms, unit);
+  return checkRangeExact(terms.length === 1 ? termExact(terms[0]!, units[0]!) : Exact.from(evaluateTerms(terms, units)));
 }
 
 /**
