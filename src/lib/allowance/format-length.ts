@@ -147,10 +147,22 @@ function cmText(halfMm: number): string {
   return `${sign}${whole}.${rest < 10 ? '0' : ''}${rest} cm`;
 }
 
-/** The display text of a signed whole number of display steps. */
-export function stepsText(steps: number, unit: Unit, precision: Precision): string {
+function buildText(steps: number, unit: Unit, precision: Precision): string {
   if (unit === 'in') return inchText(steps, precision);
   return unit === 'mm' ? mmText(steps) : cmText(steps);
+}
+
+// Texts of step counts within ±200 in (±10,160 half-mm) are kept once made, per unit and precision:
+// every plan shows the same few dozen lengths, and building "1 9/16 in" each time was a plan's main cost.
+const TEXT_RANGE = 10_240;
+const texts: ((string | undefined)[] | undefined)[] = [];
+
+/** The display text of a signed whole number of display steps. */
+export function stepsText(steps: number, unit: Unit, precision: Precision): string {
+  if (steps < -TEXT_RANGE || steps > TEXT_RANGE) return buildText(steps, unit, precision);
+  const t = unit === 'in' ? precision : unit === 'mm' ? 1 : 2;
+  const table = (texts[t] ??= new Array<string | undefined>(2 * TEXT_RANGE + 1).fill(undefined));
+  return (table[steps + TEXT_RANGE] ??= buildText(steps, unit, precision));
 }
 
 /** Format an exact length (mm) in a unit, rounded to the display step. */

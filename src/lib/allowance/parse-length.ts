@@ -77,8 +77,30 @@ export function checkRangeExact(mm: Exact): Exact {
   return mm;
 }
 
+// The shapes nearly everything typed takes: "1", "1.5", ".5", "3/4", "1 1/2", each maybe with a "-"
+// before it and spaces round it. Anything else (units, sums, ½, commas, odd spacing) goes through
+// the full reader, which also gives every refusal its message.
+const PLAIN = /^\s*(-?)(?:(\d{1,15}(?:\.\d{1,15})?|\.\d{1,15})|(?:(\d{1,15})\s+)?(\d{1,15})\/(\d{1,15}))\s*$/;
+
+// The term the full reader would make of plain text, or null when the text is not plain.
+function plainTerm(text: string): LengthTerm | null {
+  if (text.length > 120) return null;
+  const m = PLAIN.exec(text);
+  if (m === null) return null;
+  const sign = m[1] === '-' ? -1 : 1;
+  if (m[2] !== undefined) return { sign, whole: m[2], num: null, den: null, unit: null };
+  const num = m[4]!;
+  const den = m[5]!;
+  const d = Number(den);
+  // 0 below the line, or a mixed number whose fraction is not under 1: the full reader says why.
+  if (d === 0 || (m[3] !== undefined && Number(num) >= d)) return null;
+  return { sign, whole: m[3] ?? null, num, den, unit: null };
+}
+
 /** Typed text to an exact length in mm, as an Exact (parseExact's answer without building a Fraction for one term). */
 export function readExact(text: string, unit: Unit): Exact {
+  const plain = plainTerm(text);
+  if (plain !== null) return checkRangeExact(termExact(plain, unit));
   const terms = readLengthTerms(text);
   const units = termUnits(terms, unit);
   return checkRangeExact(terms.length === 1 ? termExact(terms[0]!, units[0]!) : Exact.from(evaluateTerms(terms, units)));
