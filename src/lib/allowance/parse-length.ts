@@ -82,25 +82,43 @@ export function checkRangeExact(mm: Exact): Exact {
 // the full reader, which also gives every refusal its message.
 const PLAIN = /^\s*(-?)(?:(\d{1,15}(?:\.\d{1,15})?|\.\d{1,15})|(?:(\d{1,15})\s+)?(\d{1,15})\/(\d{1,15}))\s*$/;
 
-// The term the full reader would make of plain text, or null when the text is not plain.
-function plainTerm(text: string): LengthTerm | null {
+// The exact mm of plain text (the full reader's value for it), or null when the text is not plain or
+// its digits pass the safe integers (the full reader then works it out with BigInt).
+function plainExact(text: string, unit: Unit): Exact | null {
   if (text.length > 120) return null;
   const m = PLAIN.exec(text);
   if (m === null) return null;
+  const [a, b] = mmPerUnitRatio(unit);
   const sign = m[1] === '-' ? -1 : 1;
-  if (m[2] !== undefined) return { sign, whole: m[2], num: null, den: null, unit: null };
-  const num = m[4]!;
-  const den = m[5]!;
-  const d = Number(den);
-  // 0 below the line, or a mixed number whose fraction is not under 1: the full reader says why.
-  if (d === 0 || (m[3] !== undefined && Number(num) >= d)) return null;
-  return { sign, whole: m[3] ?? null, num, den, unit: null };
+  const decimal = m[2];
+  let n: number;
+  let d: number;
+  if (decimal !== undefined) {
+    const dot = decimal.indexOf('.');
+    if (dot < 0) {
+      n = Number(decimal);
+      d = 1;
+    } else {
+      n = Number(decimal.slice(0, dot) + decimal.slice(dot + 1));
+      d = 10 ** (decimal.length - dot - 1);
+    }
+  } else {
+    d = Number(m[5]);
+    const num = Number(m[4]);
+    // 0 below the line, or a mixed number whose fraction is not under 1: the full reader says why.
+    if (d === 0 || (m[3] !== undefined && num >= d)) return null;
+    n = m[3] === undefined ? num : Number(m[3]) * d + num;
+  }
+  n *= a;
+  d *= b;
+  if (!Number.isSafeInteger(n) || !Number.isSafeInteger(d)) return null;
+  return Exact.ratio(sign * n, d);
 }
 
 /** Typed text to an exact length in mm, as an Exact (parseExact's answer without building a Fraction for one term). */
 export function readExact(text: string, unit: Unit): Exact {
-  const plain = plainTerm(text);
-  if (plain !== null) return checkRangeExact(termExact(plain, unit));
+  const plain = plainExact(text, unit);
+  if (plain !== null) return checkRangeExact(plain);
   const terms = readLengthTerms(text);
   const units = termUnits(terms, unit);
   return checkRangeExact(terms.length === 1 ? termExact(terms[0]!, units[0]!) : Exact.from(evaluateTerms(terms, units)));

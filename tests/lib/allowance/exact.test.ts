@@ -5,7 +5,7 @@ import { Exact, gcd } from '@/lib/allowance/exact';
 import { exactFromNumber, fractionFromNumber } from '@/lib/allowance/exact-number';
 import { floorExactSteps, floorSteps, formatExact, formatExactQ, roundExactSteps, roundSteps } from '@/lib/allowance/format-length';
 import { readLengthTerms } from '@/lib/allowance/length-terms';
-import { checkRange, checkRangeExact, termExact, termMm } from '@/lib/allowance/parse-length';
+import { checkRange, checkRangeExact, parseExact, readExact, termExact, termMm } from '@/lib/allowance/parse-length';
 
 // The judge throughout is fraction.js (BigInt, exact): the integer layer must give the same numbers.
 const SAFE = BigInt(Number.MAX_SAFE_INTEGER);
@@ -171,6 +171,31 @@ describe('the engine helpers on Exact agree with their fraction.js versions', ()
         expect(fromExact).toBe(fromFraction);
       }),
       { numRuns: 1000 },
+    );
+  });
+
+  it('plain typed text read by the quick pattern gives what the full reader gives, refusals included', () => {
+    const digits = fc.stringMatching(/^[0-9]{1,17}$/);
+    const space = fc.constantFrom('', ' ', '  ', '\t', '\u00a0', '\u200b');
+    const text = fc.oneof(
+      fc.tuple(space, fc.constantFrom('', '-', '- ', '+'), digits, space).map(([s1, sign, w, s2]) => `${s1}${sign}${w}${s2}`),
+      fc.tuple(fc.constantFrom('', '-'), fc.option(digits), digits).map(([sign, w, f]) => `${sign}${w ?? ''}.${f}`),
+      fc.tuple(fc.constantFrom('', '-'), fc.option(digits), space, digits, digits).map(([sign, w, sp, n, d]) => `${sign}${w === null ? '' : `${w}${sp || ' '}`}${n}/${d}`),
+      fc.tuple(fc.nat(40), fc.nat(40), fc.nat(40)).map(([w, n, d]) => `${w} ${n}/${d}`),
+      fc.constantFrom('1 1/2 in', '38 mm', '1½', '1-1/2', '3,8', '1 1/2 + 1/8', '', ' ', '.', '5.', '1/0', '1 3/3', '0 0/1'),
+    );
+    const outcome = (f: () => Fraction) => {
+      try {
+        return f().toFraction();
+      } catch (e) {
+        return `${(e as { code?: string }).code}: ${(e as Error).message}`;
+      }
+    };
+    fc.assert(
+      fc.property(text, fc.constantFrom('in' as const, 'cm' as const, 'mm' as const), (t, unit) => {
+        expect(outcome(() => readExact(t, unit).toFraction())).toBe(outcome(() => parseExact(t, unit)));
+      }),
+      { numRuns: 2000 },
     );
   });
 });
