@@ -77,38 +77,82 @@ export function checkRangeExact(mm: Exact): Exact {
   return mm;
 }
 
-// The shapes nearly everything typed takes: "1", "1.5", ".5", "3/4", "1 1/2", each maybe with a "-"
-// before it and spaces round it. Anything else (units, sums, ½, commas, odd spacing) goes through
-// the full reader, which also gives every refusal its message.
-const PLAIN = /^\s*(-?)(?:(\d{1,15}(?:\.\d{1,15})?|\.\d{1,15})|(?:(\d{1,15})\s+)?(\d{1,15})\/(\d{1,15}))\s*$/;
+// The plain reader's place in the text, and the value and count of the digits it read last (module
+// state rather than a closure per length read; nothing else touches them).
+let i = 0;
+let v = 0;
+let k = 0;
 
-// The exact mm of plain text (the full reader's value for it), or null when the text is not plain or
-// its digits pass the safe integers (the full reader then works it out with BigInt).
-function plainExact(text: string, unit: Unit): Exact | null {
-  if (text.length > 120) return null;
-  const m = PLAIN.exec(text);
-  if (m === null) return null;
-  const [a, b] = mmPerUnitRatio(unit);
-  const sign = m[1] === '-' ? -1 : 1;
-  const decimal = m[2];
-  let n: number;
-  let d: number;
-  if (decimal !== undefined) {
-    const dot = decimal.indexOf('.');
-    if (dot < 0) {
-      n = Number(decimal);
-      d = 1;
-    } else {
-      n = Number(decimal.slice(0, dot) + decimal.slice(dot + 1));
-      d = 10 ** (decimal.length - dot - 1);
-    }
-  } else {
-    d = Number(m[5]);
-    const num = Number(m[4]);
-    // 0 below the line, or a mixed number whose fraction is not under 1: the full reader says why.
-    if (d === 0 || (m[3] !== undefined && num >= d)) return null;
-    n = m[3] === undefined ? num : Number(m[3]) * d + num;
+// Reads up to 15 digits of text from i into v (their count in k); false when none or too many.
+function digits(text: string): boolean {
+  v = 0;
+  k = 0;
+  for (let c = text.charCodeAt(i); c >= 48 && c <= 57; c = text.charCodeAt(i)) {
+    if (++k > 15) return false;
+    v = v * 10 + (c - 48);
+    i++;
   }
+  return k > 0;
+}
+
+// ASCII white space, as the full reader skips it (any other character sends the text to the full reader).
+function isSpace(c: number): boolean {
+  return c === 32 || (c >= 9 && c <= 13);
+}
+
+// The shapes nearly everything typed takes: "1", "1.5", ".5", "3/4", "1 1/2", each maybe with a "-"
+// before it and ASCII spaces round it, up to 15 digits a number. The exact mm of such text (the full
+// reader's value for it), or null for anything else (units, sums, ½, commas, odd spacing) or digits
+// past the safe integers: the full reader then works it out, or says why not.
+function plainExact(text: string, unit: Unit): Exact | null {
+  const end = text.length;
+  if (end > 120) return null;
+  i = 0;
+  while (i < end && isSpace(text.charCodeAt(i))) i++;
+  let sign = 1;
+  if (text.charCodeAt(i) === 45) {
+    sign = -1;
+    i++;
+  }
+  let n: number;
+  let d = 1;
+  const first = text.charCodeAt(i);
+  if (first === 46) {
+    i++;
+    if (!digits(text)) return null;
+    n = v;
+    d = 10 ** k;
+  } else {
+    if (!digits(text)) return null;
+    n = v;
+    const c = text.charCodeAt(i);
+    if (c === 46) {
+      i++;
+      if (!digits(text)) return null;
+      d = 10 ** k;
+      n = n * d + v;
+    } else if (c === 47) {
+      i++;
+      if (!digits(text) || v === 0) return null;
+      d = v;
+    } else if (isSpace(c)) {
+      while (i < end && isSpace(text.charCodeAt(i))) i++;
+      if (i < end) {
+        const whole = n;
+        if (!digits(text)) return null;
+        const num = v;
+        if (text.charCodeAt(i) !== 47) return null;
+        i++;
+        // 0 below the line, or a fraction not under 1 in a mixed number: the full reader says why.
+        if (!digits(text) || v === 0 || num >= v) return null;
+        d = v;
+        n = whole * d + num;
+      }
+    }
+  }
+  while (i < end && isSpace(text.charCodeAt(i))) i++;
+  if (i !== end) return null;
+  const [a, b] = mmPerUnitRatio(unit);
   n *= a;
   d *= b;
   if (!Number.isSafeInteger(n) || !Number.isSafeInteger(d)) return null;
