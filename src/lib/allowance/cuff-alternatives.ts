@@ -22,15 +22,16 @@ export interface AlternativesContext {
 }
 
 // Shallowest and deepest cuff in whole display steps, per unit and precision: constants, worked out once.
-const limits = new Map<string, [number, number]>();
+const limits: ([number, number] | undefined)[] = [];
 
 function cuffLimitSteps(unit: Unit, precision: Precision, defaults: ExactDefaults): [number, number] {
-  const key = `${unit}/${precision}`;
-  let found = limits.get(key);
+  // Indexed by a small number per unit and precision (inch precisions are 8, 16, 32; mm 1, cm 2).
+  const key = unit === 'in' ? precision : unit === 'mm' ? 1 : 2;
+  let found = limits[key];
   if (found === undefined) {
     const [a, b] = stepRatio(unit, precision);
     found = [-floorExactSteps(defaults.shallowestCuff.neg(), a, b), floorExactSteps(defaults.maxCuffDepth, a, b)];
-    limits.set(key, found);
+    limits[key] = found;
   }
   return found;
 }
