@@ -82,7 +82,7 @@ const cases: Case[] = [
   { name: 'planCuff, numbers, available + old crease', goal: null, run: over(cuffNumbersFull, planCuff, cuffRead) },
   { name: 'planCuff, typed, depth only', goal: null, run: over(cuffStrings, planCuff, cuffRead) },
   { name: 'planCuff, mm numbers, available + old crease', goal: null, run: over(cuffMetric, planCuff, cuffRead) },
-  { name: 'planCuff, typed sums (mathjs path)', goal: null, run: over(cuffSums, planCuff, cuffRead) },
+  { name: 'planCuff, typed sums', goal: null, run: over(cuffSums, planCuff, cuffRead) },
   { name: 'planCuff + JSON.stringify, typed full plan', goal: null, run: over(fullCuffText, planCuff, (p) => JSON.stringify(p).length) },
   { name: 'checkTaper, numbers', goal: null, run: over(tapersNumbers, checkTaper, taperRead) },
   { name: 'planHem, numbers, slope + available', goal: null, run: over(hems, planHem, (p) => p.required.text.length + p.lines[0]!.frontBelowMark.text.length) },

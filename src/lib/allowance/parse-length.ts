@@ -165,7 +165,10 @@ export function readExact(text: string, unit: Unit): Exact {
   if (plain !== null) return checkRangeExact(plain);
   const terms = readLengthTerms(text);
   const units = termUnits(terms, unit);
-  return checkRangeExact(terms.length === 1 ? termExact(terms[0]!, units[0]!) : Exact.from(evaluateTerms(terms, units)));
+  // As parseExact: each term exact, the terms added exactly (no mathjs).
+  let mm = termExact(terms[0]!, units[0]!);
+  for (let k = 1; k < terms.length; k++) mm = mm.add(termExact(terms[k]!, units[k]!));
+  return checkRangeExact(mm);
 }
 
 /**
