@@ -1,7 +1,7 @@
-import Fraction from 'fraction.js';
 import { AllowanceError } from './allowance-error';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
 import { exactDefaults, SHALLOWEST_CUFF_WHY } from './defaults';
+import { Exact, ZERO } from './exact';
 import { lenMaker } from './len';
 import { letDownShapeError, letDownWidth, type LetDownWidths } from './let-down-width';
 import { InputReader } from './read-input';
@@ -11,22 +11,21 @@ import type { PlanWarning, Precision, TaperInput, TaperLine, TaperPlan, Unit } f
 export interface TaperValues {
   unit: Unit;
   precision: Precision;
-  cuffDepth: Fraction;
-  hemSection: Fraction;
-  widthAtEdge: Fraction;
-  widthAbove: Fraction;
-  heightAbove: Fraction;
-  seamAllowance: Fraction | null;
-  tolerance: Fraction;
-  clothThickness: Fraction;
+  cuffDepth: Exact;
+  hemSection: Exact;
+  widthAtEdge: Exact;
+  widthAbove: Exact;
+  heightAbove: Exact;
+  seamAllowance: Exact | null;
+  tolerance: Exact;
+  clothThickness: Exact;
   /** measured flat at the cutting line on a let-down leg, or null to follow the taper down */
-  widthAtCut: Fraction | null;
+  widthAtCut: Exact | null;
   /** the old hem fold below the mark, where the taper stops holding on a let-down leg */
-  oldFold: Fraction | null;
+  oldFold: Exact | null;
 }
 
-const ZERO = new Fraction(0);
-const ONE = new Fraction(1);
+const ONE = Exact.int(1);
 
 /** Read a taper input field by field (errors carry the field name). */
 export function readTaperInput(input: TaperInput, r: InputReader): TaperValues {
@@ -34,7 +33,7 @@ export function readTaperInput(input: TaperInput, r: InputReader): TaperValues {
   const d =
     r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', { required: true, min: 'positive', least: { value: defaults.shallowestCuff, why: SHALLOWEST_CUFF_WHY }, max: defaults.maxCuffDepth }) ??
     defaults.usualCuffDepth.min;
-  const width = (value: unknown, field: string, label: string): Fraction =>
+  const width = (value: unknown, field: string, label: string): Exact =>
     r.length(value, field, label, { required: true, min: 'positive' }) ?? ONE;
   return {
     unit: r.unit,
@@ -53,17 +52,17 @@ export function readTaperInput(input: TaperInput, r: InputReader): TaperValues {
 }
 
 /** How much the flat width grows per unit of height: the taper through the two measurements, followed straight on below the edge. */
-export function taperSlope(v: TaperValues): Fraction {
+export function taperSlope(v: TaperValues): Exact {
   return v.widthAbove.sub(v.widthAtEdge).div(v.heightAbove);
 }
 
 // The let-down leg's widths below the old fold, when the width at the cut was measured.
-function letDownOf(v: TaperValues, cut: Fraction): LetDownWidths | null {
+function letDownOf(v: TaperValues, cut: Exact): LetDownWidths | null {
   return v.widthAtCut === null ? null : { widthAtEdge: v.widthAtEdge, slope: taperSlope(v), cut, widthAtCut: v.widthAtCut, oldFold: v.oldFold };
 }
 
-function isPositive(f: Fraction): boolean {
-  return f.s > 0n && f.n !== 0n;
+function isPositive(f: Exact): boolean {
+  return f.sign() > 0;
 }
 
 /**
@@ -98,7 +97,7 @@ export function checkTaper(input: TaperInput): TaperPlan {
   const positions = linePositionList(cuffLinePositions(v.cuffDepth, v.hemSection, v.clothThickness));
   const letDown = letDownOf(v, positions[3]);
   let worst = ZERO;
-  let mostPerSide: Fraction | null = null;
+  let mostPerSide: Exact | null = null;
   let withinTolerance = true;
   const lines: TaperLine[] = positions.map((below, k) => {
     // A line below the mark sits at height −below; the change is what brings it back to the target.
@@ -106,7 +105,7 @@ export function checkTaper(input: TaperInput): TaperPlan {
     const measured = letDown && letDownWidth(letDown, below);
     const change = measured ? target.sub(measured) : followed;
     const width = target.sub(change);
-    const perSide = change.div(2);
+    const perSide = change.half();
     const size = change.abs();
     if (size.compare(worst.abs()) > 0) worst = change;
     if (size.compare(v.tolerance) > 0) withinTolerance = false;
@@ -126,9 +125,9 @@ export function checkTaper(input: TaperInput): TaperPlan {
   const warnings: PlanWarning[] = [];
   const most = mostPerSide ?? ZERO;
   if (!withinTolerance) {
-    const wider = worst.s > 0n;
+    const wider = worst.sign() > 0;
     const by = len(worst.abs()).text;
-    const side = len(worst.abs().div(2)).text;
+    const side = len(worst.abs().half()).text;
     // "From the cuff top" is ambiguous on the chalked leg: line 2, "Cuff top", is one depth BELOW the
     // mark, but the width to keep is one depth ABOVE the finished edge. Name the distances instead.
     const from = len(v.cuffDepth).text;

@@ -1,47 +1,44 @@
-import Fraction from 'fraction.js';
 import type { CuffLinePositions } from './cuff-lines';
-import { compareExact, type LenMaker, mmNumber } from './len';
+import { type Exact, ZERO } from './exact';
+import type { LenMaker } from './len';
 import type { CreaseLanding, CreasePlace, Len } from './types';
 
 /** What crease landing needs of a plan: exact lengths, with their nearest numbers for quick comparisons. */
 export interface CreaseContext {
-  cuffDepth: Fraction;
+  cuffDepth: Exact;
   cuffDepthMm: number;
   lines: CuffLinePositions;
   /** the lines' mm as numbers, top to bottom */
   linesMm: readonly number[];
   /** a crease this close to a new fold is taken by the fold */
-  onFoldWithin: Fraction;
+  onFoldWithin: Exact;
   onFoldWithinMm: number;
   /** a crease on the leg within this of the cuff top's height may show at its edge */
-  nearCuffTop: Fraction;
+  nearCuffTop: Exact;
   len: LenMaker;
 }
 
 // Shown wherever a crease will or may show: pressing out is not a promise (common practice, no source).
 const TELL = 'Tell the customer it may not press out.';
 
-const ZERO = new Fraction(0);
+function land(place: CreasePlace, height: Len, message: string): CreaseLanding {
+  return { place, heightAboveEdge: height, visible: place === 'leg-visible' || place === 'at-cuff-top' || place === 'cuff-face', message };
+}
+
+// The exact test runs only when the numbers say the crease is near the fold.
+function onFold(crease: Exact, c: number, at: Exact, atMm: number, ctx: CreaseContext): boolean {
+  return Math.abs(c - atMm) <= ctx.onFoldWithinMm + 1e-6 && crease.sub(at).abs().compare(ctx.onFoldWithin) <= 0;
+}
 
 /** Follow an old crease (mm below the mark, negative above) through the cuff's folds. */
-export function creaseLanding(crease: Fraction, ctx: CreaseContext): CreaseLanding {
-  const { cuffDepth: d, cuffDepthMm: dMm, lines, linesMm, onFoldWithin, len } = ctx;
-  const land = (place: CreasePlace, height: Len, message: string): CreaseLanding => ({
-    place,
-    heightAboveEdge: height,
-    visible: place === 'leg-visible' || place === 'at-cuff-top' || place === 'cuff-face',
-    message,
-  });
-  const c = mmNumber(crease);
-  const near = ctx.onFoldWithinMm + 1e-6;
-  // The exact test runs only when the numbers say the crease is near a fold.
-  const onFold = (at: Fraction, atMm: number) =>
-    Math.abs(c - atMm) <= near && crease.sub(at).abs().compare(onFoldWithin) <= 0;
-  const fold = onFold(lines.finishedEdge, 0)
+export function creaseLanding(crease: Exact, ctx: CreaseContext): CreaseLanding {
+  const { cuffDepth: d, lines, linesMm, len } = ctx;
+  const c = crease.valueOf();
+  const fold = onFold(crease, c, lines.finishedEdge, 0, ctx)
     ? 'finished edge'
-    : onFold(lines.cuffTop, linesMm[1]!)
+    : onFold(crease, c, lines.cuffTop, linesMm[1]!, ctx)
       ? 'cuff top'
-      : onFold(lines.innerFold, linesMm[2]!)
+      : onFold(crease, c, lines.innerFold, linesMm[2]!, ctx)
         ? 'inner fold'
         : null;
   if (fold !== null) {
@@ -58,7 +55,7 @@ export function creaseLanding(crease: Fraction, ctx: CreaseContext): CreaseLandi
         `The old hem crease lies on the leg ${at.text} above the finished edge, within ${len(ctx.nearCuffTop).text} of the cuff top: it may show at the cuff's edge. Press or steam it out before finishing. ${TELL}`,
       );
     }
-    if (compareExact(crease, c, d, -dMm, true) <= 0) {
+    if (crease.compare(d.neg()) <= 0) {
       return land(
         'leg-visible',
         at,
@@ -67,14 +64,14 @@ export function creaseLanding(crease: Fraction, ctx: CreaseContext): CreaseLandi
     }
     return land('behind-cuff', at, `The old crease lies on the leg behind the cuff, ${at.text} above the finished edge: the cuff hides it.`);
   }
-  if (compareExact(crease, c, lines.cuffTop, linesMm[1]!) <= 0) {
+  if (crease.compare(lines.cuffTop) <= 0) {
     // With a turn of cloth the first section is longer than the cuff is high; the cuff top caps it.
-    const h = len(compareExact(crease, c, d, dMm) <= 0 ? crease : d);
+    const h = len(crease.compare(d) <= 0 ? crease : d);
     return land('behind-cuff', h, `The old crease lies under the cuff face, ${h.text} above the finished edge: hidden.`);
   }
-  if (compareExact(crease, c, lines.innerFold, linesMm[2]!) <= 0) {
+  if (crease.compare(lines.innerFold) <= 0) {
     const up = lines.innerFold.sub(crease);
-    const h = len(compareExact(up, linesMm[2]! - c, d, dMm) <= 0 ? up : d);
+    const h = len(up.compare(d) <= 0 ? up : d);
     return land(
       'cuff-face',
       h,
@@ -82,7 +79,7 @@ export function creaseLanding(crease: Fraction, ctx: CreaseContext): CreaseLandi
     );
   }
   const h = len(crease.sub(lines.innerFold));
-  if (compareExact(crease, c, lines.cut, linesMm[3]!) <= 0) {
+  if (crease.compare(lines.cut) <= 0) {
     return land('inside', h, `The old crease ends up inside the leg, ${h.text} above the finished edge: hidden.`);
   }
   return land('cut-away', h, `The old crease lies ${len(crease.sub(lines.cut)).text} below the cutting line and is cut away.`);

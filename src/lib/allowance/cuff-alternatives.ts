@@ -1,20 +1,20 @@
-import type Fraction from 'fraction.js';
+import type { Exact } from './exact';
 import type { ExactDefaults } from './defaults';
-import { floorSteps, stepRatio, stepsToMm } from './format-length';
+import { floorExactSteps, stepRatio, stepsToExact } from './format-length';
 import type { LenMaker } from './len';
 import type { CuffAlternatives, Precision, Unit } from './types';
 
 /** What the alternatives need of a short cuff plan. */
 export interface AlternativesContext {
-  available: Fraction;
+  available: Exact;
   /** the depth asked for: every cuff offered is shallower */
-  cuffDepth: Fraction;
+  cuffDepth: Exact;
   /** the third section asked for, and the turn-under it must hold */
-  hemSection: Fraction;
-  turnUnder: Fraction;
+  hemSection: Exact;
+  turnUnder: Exact;
   /** 2 × (cuff depth + turn of cloth): the inner fold's distance below the mark */
-  innerFold: Fraction;
-  clothThickness: Fraction;
+  innerFold: Exact;
+  clothThickness: Exact;
   unit: Unit;
   precision: Precision;
   defaults: ExactDefaults;
@@ -22,29 +22,30 @@ export interface AlternativesContext {
 }
 
 // Shallowest and deepest cuff in whole display steps, per unit and precision: constants, worked out once.
-const limits = new Map<string, [number, number]>();
+const limits: ([number, number] | undefined)[] = [];
 
 function cuffLimitSteps(unit: Unit, precision: Precision, defaults: ExactDefaults): [number, number] {
-  const key = `${unit}/${precision}`;
-  let found = limits.get(key);
+  // Indexed by a small number per unit and precision (inch precisions are 8, 16, 32; mm 1, cm 2).
+  const key = unit === 'in' ? precision : unit === 'mm' ? 1 : 2;
+  let found = limits[key];
   if (found === undefined) {
     const [a, b] = stepRatio(unit, precision);
-    found = [-floorSteps(defaults.shallowestCuff.neg(), a, b), floorSteps(defaults.maxCuffDepth, a, b)];
-    limits.set(key, found);
+    found = [-floorExactSteps(defaults.shallowestCuff.neg(), a, b), floorExactSteps(defaults.maxCuffDepth, a, b)];
+    limits[key] = found;
   }
   return found;
 }
 
 /** The deepest three-equal-section cuff (exact mm, down to the display step) that fits, shallower than asked, or null under the shallowest. */
-export function deepestCuff(ctx: Omit<AlternativesContext, 'hemSection' | 'turnUnder'>): Fraction | null {
+export function deepestCuff(ctx: Omit<AlternativesContext, 'hemSection' | 'turnUnder'>): Exact | null {
   const { available, cuffDepth, clothThickness: t, unit, precision, defaults } = ctx;
-  const room = t.n === 0n ? available : available.sub(t.mul(2));
+  const room = t.isZero() ? available : available.sub(t.add(t));
   const [a, b] = stepRatio(unit, precision);
   const [shallowest, deepest] = cuffLimitSteps(unit, precision, defaults);
   // Whole steps strictly under the asked depth: ceil(d / step) − 1. A "shallower" cuff is never as deep.
-  const under = -floorSteps(cuffDepth.neg(), a, b) - 1;
-  const steps = Math.min(floorSteps(room, a, 3 * b), deepest, under);
-  return steps < shallowest ? null : stepsToMm(steps, unit, precision);
+  const under = -floorExactSteps(cuffDepth.neg(), a, b) - 1;
+  const steps = Math.min(floorExactSteps(room, a, 3 * b), deepest, under);
+  return steps < shallowest ? null : stepsToExact(steps, unit, precision);
 }
 
 /**
@@ -52,12 +53,12 @@ export function deepestCuff(ctx: Omit<AlternativesContext, 'hemSection' | 'turnU
  * shorter than asked, holding the turn-under and a safe stitch above it, its stitching no higher than
  * the cuff top; else null.
  */
-export function shorterSection(ctx: AlternativesContext): Fraction | null {
+export function shorterSection(ctx: AlternativesContext): Exact | null {
   const { available, innerFold, hemSection, turnUnder, unit, precision, defaults } = ctx;
   const [a, b] = stepRatio(unit, precision);
-  let room = stepsToMm(floorSteps(available.sub(innerFold), a, b), unit, precision);
+  let room = stepsToExact(floorExactSteps(available.sub(innerFold), a, b), unit, precision);
   // No longer than the cuff and its turn-under, or the stitching would show above the cuff top.
-  const highest = stepsToMm(floorSteps(ctx.cuffDepth.add(turnUnder), a, b), unit, precision);
+  const highest = stepsToExact(floorExactSteps(ctx.cuffDepth.add(turnUnder), a, b), unit, precision);
   if (room.compare(highest) > 0) room = highest;
   const least = turnUnder.add(defaults.safeStitch);
   if (room.compare(least) < 0 || room.compare(hemSection) >= 0) return null;

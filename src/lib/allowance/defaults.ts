@@ -1,7 +1,7 @@
-import Fraction from 'fraction.js';
-import { formatExact } from './format-length';
+import { Exact } from './exact';
+import { formatExactQ } from './format-length';
 import type { Len, Unit } from './types';
-import { MM_PER_INCH, isMetric } from './units';
+import { isMetric } from './units';
 
 /** A range of usual values, inclusive. */
 export interface Usual<T> {
@@ -10,34 +10,34 @@ export interface Usual<T> {
 }
 
 /** A usual range held exactly, with its nearest numbers for quick comparisons. */
-export interface ExactRange extends Usual<Fraction> {
+export interface ExactRange extends Usual<Exact> {
   minMm: number;
   maxMm: number;
 }
 
 /** The engine's defaults and usual ranges for one unit system, exact, in mm. */
 export interface ExactDefaults {
-  cuffTurnUnder: Fraction;
-  hemAllowance: Fraction;
-  hemTurnUnder: Fraction;
-  taperTolerance: Fraction;
-  facingSeam: Fraction;
-  shallowestCuff: Fraction;
+  cuffTurnUnder: Exact;
+  hemAllowance: Exact;
+  hemTurnUnder: Exact;
+  taperTolerance: Exact;
+  facingSeam: Exact;
+  shallowestCuff: Exact;
   /** cloth a third section needs above its turn-under to hold the stitch safely */
-  safeStitch: Fraction;
-  onFoldWithin: Fraction;
+  safeStitch: Exact;
+  onFoldWithin: Exact;
   /** a crease on the leg this close to the cuff top's height may show at its edge: stated, not guessed */
-  nearCuffTop: Fraction;
+  nearCuffTop: Exact;
   /** onFoldWithin as a number, for the quick test before the exact one */
   onFoldWithinMm: number;
-  maxCuffDepth: Fraction;
+  maxCuffDepth: Exact;
   usualCuffDepth: ExactRange;
   usualHemAllowance: ExactRange;
 }
 
-const inch = (n: number, d = 1): Fraction => new Fraction(n, d).mul(MM_PER_INCH);
-const mm = (n: number, d = 1): Fraction => new Fraction(n, d);
-const range = (min: Fraction, max: Fraction): ExactRange => ({ min, max, minMm: min.valueOf(), maxMm: max.valueOf() });
+const inch = (n: number, d = 1): Exact => Exact.ratio(n * 127, d * 5);
+const mm = (n: number, d = 1): Exact => Exact.ratio(n, d);
+const range = (min: Exact, max: Exact): ExactRange => ({ min, max, minMm: min.valueOf(), maxMm: max.valueOf() });
 
 /** Why a cuff shallower than the shallowest is refused, after "Cuff depth must be at least …". */
 export const SHALLOWEST_CUFF_WHY = 'a shallower cuff cannot be turned, pressed and tacked.';
@@ -88,13 +88,13 @@ export type PlanDefaults = { precision: 16 } & {
   [K in Exclude<keyof ExactDefaults, 'onFoldWithinMm'>]: ExactDefaults[K] extends ExactRange ? Usual<Len> : Len;
 };
 
-function lenOf(f: Fraction, unit: Unit): Len {
-  return { mm: f.valueOf(), text: formatExact(f, unit, 16) };
+function lenOf(f: Exact, unit: Unit): Len {
+  return { mm: f.valueOf(), text: formatExactQ(f, unit, 16) };
 }
 
 function shown(unit: Unit): PlanDefaults {
   const e = exactDefaults(unit);
-  const l = (f: Fraction): Len => lenOf(f, unit);
+  const l = (f: Exact): Len => lenOf(f, unit);
   return {
     precision: 16,
     cuffTurnUnder: l(e.cuffTurnUnder),
@@ -123,7 +123,7 @@ export interface UsualCuffDepth {
 
 function usualDepths(unit: Unit): UsualCuffDepth[] {
   // TRADE.md: 1¼, 1½, 1¾ in, and 5 cm / 2 in as a modern standard; metric rounded to whole mm.
-  const depths: [Fraction, Fraction, UsualCuffDepth['note']][] = [
+  const depths: [Exact, Exact, UsualCuffDepth['note']][] = [
     [inch(5, 4), mm(32), 'trim'],
     [inch(3, 2), mm(38), 'classic'],
     [inch(7, 4), mm(44), 'wide'],

@@ -1,4 +1,5 @@
 import Fraction from 'fraction.js';
+import { Exact } from './exact';
 
 const DECIMAL = /^(-?)(\d+)(?:\.(\d+))?(?:e([+-]?\d+))?$/;
 const SAFE = Number.MAX_SAFE_INTEGER;
@@ -22,6 +23,21 @@ export function fractionFromNumber(x: number, a = 1, b = 1): Fraction {
   const m = DECIMAL.exec(String(x));
   if (m === null) throw new RangeError(`not a finite number: ${x}`);
   return fractionFromDecimal(m[1] === '-', m[2]!, m[3] ?? '', m[4] === undefined ? 0 : Number(m[4])).mul(a).div(b);
+}
+
+/** fractionFromNumber as an Exact: safe integers all the way for everyday inputs (1.5, 0.0625, 38). */
+export function exactFromNumber(x: number, a = 1, b = 1): Exact {
+  if (Number.isInteger(x) && Math.abs(x * a) <= SAFE) return Exact.ratio(x * a, b);
+  if (Math.abs(x) < 1e6) {
+    for (let p = 10; p <= 1e9; p *= 10) {
+      const n = Math.round(x * p);
+      if (n / p === x) {
+        if (Math.abs(n * a) > SAFE || p * b > SAFE) break;
+        return Exact.ratio(n * a, p * b);
+      }
+    }
+  }
+  return Exact.from(fractionFromNumber(x, a, b));
 }
 
 /** An exact Fraction from the digits of a decimal: sign, whole digits, decimal digits, power of ten. */

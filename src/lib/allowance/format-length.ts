@@ -1,5 +1,6 @@
 import Fraction from 'fraction.js';
 import { AllowanceError } from './allowance-error';
+import { Exact } from './exact';
 import { fractionFromNumber } from './exact-number';
 import type { Precision, Unit } from './types';
 import { isPrecision, isUnit } from './units';
@@ -73,6 +74,36 @@ export function floorSteps(mm: Fraction, a: number, b: number): number {
   return Number(q);
 }
 
+/** roundSteps for an Exact: plain numbers while small, fraction.js when big. */
+export function roundExactSteps(mm: Exact, a: number, b: number): number {
+  if (mm.big !== null) return roundSteps(mm.big, a, b);
+  const n = mm.n;
+  if (n === 0) return 0;
+  const q = roundRatio(n < 0 ? -n : n, mm.d, a, b);
+  if (Number.isNaN(q)) return roundSteps(mm.toFraction(), a, b);
+  return q === 0 ? 0 : n < 0 ? -q : q;
+}
+
+/** floorSteps for an Exact: plain numbers while small, fraction.js when big. */
+export function floorExactSteps(mm: Exact, a: number, b: number): number {
+  if (mm.big !== null) return floorSteps(mm.big, a, b);
+  const num = mm.n * a;
+  const den = mm.d * b;
+  if (Math.abs(num) > SAFE || den > SAFE) return floorSteps(mm.toFraction(), a, b);
+  let q = Math.floor(num / den);
+  // The float quotient can be one off either way: correct it with the exact remainder.
+  const r = num - q * den;
+  if (r < 0) q -= 1;
+  else if (r >= den) q += 1;
+  return q;
+}
+
+/** Exact mm of a whole number of display steps, as an Exact. */
+export function stepsToExact(steps: number, unit: Unit, precision: Precision): Exact {
+  const [a, b] = stepRatio(unit, precision);
+  return Exact.ratio(steps * b, a);
+}
+
 /** The display step of a unit as (a, b): one step is b/a mm (1/p in = 127/(5p) mm; 0.5 mm metric). */
 export function stepRatio(unit: Unit, precision: Precision): [number, number] {
   return unit === 'in' ? [5 * precision, 127] : [2, 1];
@@ -116,16 +147,34 @@ function cmText(halfMm: number): string {
   return `${sign}${whole}.${rest < 10 ? '0' : ''}${rest} cm`;
 }
 
-/** The display text of a signed whole number of display steps. */
-export function stepsText(steps: number, unit: Unit, precision: Precision): string {
+function buildText(steps: number, unit: Unit, precision: Precision): string {
   if (unit === 'in') return inchText(steps, precision);
   return unit === 'mm' ? mmText(steps) : cmText(steps);
+}
+
+// Texts of step counts within ±200 in (±10,160 half-mm) are kept once made, per unit and precision:
+// every plan shows the same few dozen lengths, and building "1 9/16 in" each time was a plan's main cost.
+const TEXT_RANGE = 10_240;
+const texts: ((string | undefined)[] | undefined)[] = [];
+
+/** The display text of a signed whole number of display steps. */
+export function stepsText(steps: number, unit: Unit, precision: Precision): string {
+  if (steps < -TEXT_RANGE || steps > TEXT_RANGE) return buildText(steps, unit, precision);
+  const t = unit === 'in' ? precision : unit === 'mm' ? 1 : 2;
+  const table = (texts[t] ??= new Array<string | undefined>(2 * TEXT_RANGE + 1).fill(undefined));
+  return (table[steps + TEXT_RANGE] ??= buildText(steps, unit, precision));
 }
 
 /** Format an exact length (mm) in a unit, rounded to the display step. */
 export function formatExact(mm: Fraction, unit: Unit, precision: Precision = 16): string {
   const [a, b] = stepRatio(unit, precision);
   return stepsText(roundSteps(mm, a, b), unit, precision);
+}
+
+/** formatExact for an Exact. */
+export function formatExactQ(mm: Exact, unit: Unit, precision: Precision = 16): string {
+  const [a, b] = stepRatio(unit, precision);
+  return stepsText(roundExactSteps(mm, a, b), unit, precision);
 }
 
 function exactFromDisplayNumber(mm: number): Fraction {

@@ -1,29 +1,28 @@
-import Fraction from 'fraction.js';
 import { AllowanceError } from './allowance-error';
 import { exactDefaults } from './defaults';
+import { Exact, ZERO } from './exact';
 import { lenMaker } from './len';
 import { InputReader } from './read-input';
 import type { HemTaperInput, PlanWarning, TaperLine, TaperPlan } from './types';
 
-const ZERO = new Fraction(0);
-const ONE = new Fraction(1);
+const ONE = Exact.int(1);
 
 /** A hem taper input read and checked: exact mm throughout. */
 export interface HemTaperValues {
-  hemAllowance: Fraction;
-  widthAtEdge: Fraction;
-  widthAbove: Fraction;
-  heightAbove: Fraction;
-  seamAllowance: Fraction | null;
-  tolerance: Fraction;
+  hemAllowance: Exact;
+  widthAtEdge: Exact;
+  widthAbove: Exact;
+  heightAbove: Exact;
+  seamAllowance: Exact | null;
+  tolerance: Exact;
   /** measured flat at the cutting line on a let-down leg, or null to follow the taper down */
-  widthAtCut: Fraction | null;
+  widthAtCut: Exact | null;
 }
 
 /** Read a hem taper input field by field (errors carry the field name). */
 export function readHemTaperInput(input: HemTaperInput, r: InputReader): HemTaperValues {
   const defaults = exactDefaults(r.unit);
-  const width = (value: unknown, field: string, label: string): Fraction =>
+  const width = (value: unknown, field: string, label: string): Exact =>
     r.length(value, field, label, { required: true, min: 'positive' }) ?? ONE;
   return {
     hemAllowance: r.length(input.hemAllowance, 'hemAllowance', 'Hem allowance', { min: 'positive' }) ?? defaults.hemAllowance,
@@ -36,7 +35,7 @@ export function readHemTaperInput(input: HemTaperInput, r: InputReader): HemTape
   };
 }
 
-function slopeOf(v: HemTaperValues): Fraction {
+function slopeOf(v: HemTaperValues): Exact {
   return v.widthAbove.sub(v.widthAtEdge).div(v.heightAbove);
 }
 
@@ -45,7 +44,7 @@ export function hemTaperShapeError(v: HemTaperValues): AllowanceError | null {
   const rise = slopeOf(v).mul(v.hemAllowance);
   // Measured at the cut (a let-down leg), only the leg the hem lies against must be there.
   const cutWidth = v.widthAtCut ?? v.widthAtEdge.sub(rise);
-  if (cutWidth.compare(0) <= 0 || v.widthAtEdge.add(rise).compare(0) <= 0) {
+  if (cutWidth.sign() <= 0 || v.widthAtEdge.add(rise).sign() <= 0) {
     return new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove');
   }
   return null;
@@ -69,11 +68,11 @@ export function checkHemTaper(input: HemTaperInput): TaperPlan {
   const change = v.widthAtEdge.add(slope.mul(H)).sub(cutWidth);
   const size = change.abs();
   const withinTolerance = size.compare(v.tolerance) <= 0;
-  const perSide = change.div(2);
-  const line = (n: 1 | 2, below: Fraction, width: Fraction, ch: Fraction): TaperLine => {
+  const perSide = change.half();
+  const line = (n: 1 | 2, below: Exact, width: Exact, ch: Exact): TaperLine => {
     const c = len(ch);
     const measured = n === 2 && v.widthAtCut !== null ? { measured: true } : {};
-    return { n, name: n === 1 ? 'finished-edge' : 'cut', belowMark: len(below), width: len(width), change: c, perSeam: { ...c }, perSide: len(ch.div(2)), ...measured };
+    return { n, name: n === 1 ? 'finished-edge' : 'cut', belowMark: len(below), width: len(width), change: c, perSeam: { ...c }, perSide: len(ch.half()), ...measured };
   };
   const lines = [line(1, ZERO, v.widthAtEdge, ZERO), line(2, H, cutWidth, change)];
   const target = v.widthAtEdge.add(slope.mul(H));
@@ -81,16 +80,16 @@ export function checkHemTaper(input: HemTaperInput): TaperPlan {
   if (!withinTolerance) {
     const at = len(H).text;
     const by = len(size).text;
-    const side = len(size.div(2)).text;
+    const side = len(size.half()).text;
     warnings.push({
       code: 'taper-beyond-tolerance',
       message:
-        change.s > 0n
+        change.sign() > 0
           ? `${v.widthAtCut ? `Measured at the cutting line (${len(v.widthAtCut).text} flat), the let-down leg is narrower than the leg above the edge` : 'The leg narrows towards the hem'}: turned up, the hem would be ${by} narrower (flat) than the leg it lies against. Let out the inseam and outseam below the finished edge, flaring out to ${by} more at the cutting line, ${at} below it (${side} on each side of each seam), so the hem lies flat.`
           : `${v.widthAtCut ? `Measured at the cutting line (${len(v.widthAtCut).text} flat), the let-down leg flares wider than the leg above the edge` : 'The leg widens towards the hem'}: turned up, the hem would be ${by} wider (flat) than the leg it lies against. Take in the inseam and outseam below the finished edge, to ${by} less at the cutting line, ${at} below it (${side} on each side of each seam), so the hem lies flat.`,
     });
   }
-  const most = perSide.compare(0) > 0 ? perSide : ZERO;
+  const most = perSide.sign() > 0 ? perSide : ZERO;
   // Within tolerance no seam is touched, so even a seam with nothing to let out will do.
   const feasible = v.seamAllowance === null ? null : withinTolerance || most.compare(v.seamAllowance) <= 0;
   if (feasible === false) {

@@ -1,25 +1,23 @@
-import Fraction from 'fraction.js';
 import { AllowanceError } from './allowance-error';
-
-const ZERO = new Fraction(0);
+import { type Exact, ZERO } from './exact';
 
 /** A leg's widths below the mark once the width at the cutting line was measured (a let-down leg). */
 export interface LetDownWidths {
-  widthAtEdge: Fraction;
+  widthAtEdge: Exact;
   /** flat width gained per unit of height (the taper) */
-  slope: Fraction;
+  slope: Exact;
   /** the cutting line, below the mark */
-  cut: Fraction;
+  cut: Exact;
   /** measured flat at the cutting line */
-  widthAtCut: Fraction;
+  widthAtCut: Exact;
   /** the old hem fold below the mark, when noted (negative above it) */
-  oldFold: Fraction | null;
+  oldFold: Exact | null;
 }
 
 // Where the taper stops holding: at the old fold, kept between the finished edge and the cut.
-function knotOf(w: LetDownWidths): Fraction {
+function knotOf(w: LetDownWidths): Exact {
   const fold = w.oldFold ?? ZERO;
-  if (fold.compare(0) < 0) return ZERO;
+  if (fold.sign() < 0) return ZERO;
   return fold.compare(w.cut) > 0 ? w.cut : fold;
 }
 
@@ -29,7 +27,7 @@ function knotOf(w: LetDownWidths): Fraction {
  * at the cut, instead of the taper followed down. Null where the taper still holds (at or above the
  * fold; without a noted fold, the finished edge stands for it).
  */
-export function letDownWidth(w: LetDownWidths, below: Fraction): Fraction | null {
+export function letDownWidth(w: LetDownWidths, below: Exact): Exact | null {
   if (below.equals(w.cut)) return w.widthAtCut;
   const knot = knotOf(w);
   if (below.compare(knot) <= 0) return null;
@@ -40,6 +38,6 @@ export function letDownWidth(w: LetDownWidths, below: Fraction): Fraction | null
 /** Why the taper followed down to the old fold gives no leg there, or null (the measured width is joined to it). */
 export function letDownShapeError(w: LetDownWidths): AllowanceError | null {
   const atKnot = w.widthAtEdge.sub(w.slope.mul(knotOf(w)));
-  if (atKnot.compare(0) > 0) return null;
+  if (atKnot.sign() > 0) return null;
   return new AllowanceError('out-of-range', 'Followed down to the old fold, this taper gives no leg at all: check the two widths and the height.', 'widthAbove');
 }

@@ -1,9 +1,9 @@
-import Fraction from 'fraction.js';
 import { creaseLanding } from './crease-landing';
 import { cuffAlternatives } from './cuff-alternatives';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
 import { type ExactDefaults, exactDefaults, SHALLOWEST_CUFF_WHY } from './defaults';
-import { compareExact, type LenMaker, lenMaker } from './len';
+import { type Exact, ZERO } from './exact';
+import { type LenMaker, lenMaker } from './len';
 import { InputReader, type LengthRule } from './read-input';
 import type { CuffInput, CuffLine, CuffPlan, Len, PlanWarning, Precision, Unit } from './types';
 
@@ -11,16 +11,15 @@ import type { CuffInput, CuffLine, CuffPlan, Len, PlanWarning, Precision, Unit }
 export interface CuffValues {
   unit: Unit;
   precision: Precision;
-  cuffDepth: Fraction;
-  hemSection: Fraction;
-  turnUnder: Fraction;
-  available: Fraction | null;
-  clothThickness: Fraction;
-  oldCrease: Fraction | null;
-  slope: Fraction | null;
+  cuffDepth: Exact;
+  hemSection: Exact;
+  turnUnder: Exact;
+  available: Exact | null;
+  clothThickness: Exact;
+  oldCrease: Exact | null;
+  slope: Exact | null;
 }
 
-const ZERO = new Fraction(0);
 const POSITIVE: LengthRule = { min: 'positive' };
 const NON_NEGATIVE: LengthRule = { min: 'non-negative' };
 const ANY: LengthRule = {};
@@ -57,7 +56,7 @@ interface Shown {
 
 function cuffWarnings(v: CuffValues, shown: Shown, defaults: ExactDefaults, len: LenMaker): PlanWarning[] {
   const warnings: PlanWarning[] = [];
-  if (compareExact(v.hemSection, shown.section.mm, v.turnUnder, shown.turnUnder.mm) <= 0) {
+  if (v.hemSection.compare(v.turnUnder) <= 0) {
     warnings.push({
       code: 'third-section-too-small',
       message: `The third section (${shown.section.text}) is no deeper than the turn-under (${shown.turnUnder.text}): nothing is left to hold the cuff inside. Make the third section deeper or the turn-under narrower.`,
@@ -71,14 +70,13 @@ function cuffWarnings(v: CuffValues, shown: Shown, defaults: ExactDefaults, len:
     });
   }
   const usual = defaults.usualCuffDepth;
-  const d = shown.depth.mm;
-  if (compareExact(v.cuffDepth, d, usual.min, usual.minMm) < 0 || compareExact(v.cuffDepth, d, usual.max, usual.maxMm) > 0) {
+  if (v.cuffDepth.compare(usual.min) < 0 || v.cuffDepth.compare(usual.max) > 0) {
     warnings.push({
       code: 'cuff-depth-unusual',
       message: `A ${shown.depth.text} cuff is outside the usual ${len(usual.min).text} to ${len(usual.max).text}. Check the depth with the customer.`,
     });
   }
-  if (v.slope !== null && v.slope.n !== 0n) {
+  if (v.slope !== null && !v.slope.isZero()) {
     warnings.push({
       code: 'slope-on-cuff',
       message: `Cuffs are made level, so the ${len(v.slope.abs()).text} slope was left out: this plan is level all round.`,
@@ -129,7 +127,7 @@ export function planCuff(input: CuffInput): CuffPlan {
   if (A !== null) {
     const rest = aboveRaw![3]!;
     // Decided on the exact value: a float of it can be 0 or NaN (1e-310, huge denominators) and flip the check.
-    enough = rest.n === 0n || rest.s > 0n;
+    enough = rest.sign() >= 0;
     if (enough) {
       spare = { ...lines[3]!.aboveRawEdge! };
     } else {

@@ -1,6 +1,6 @@
-import Fraction from 'fraction.js';
 import { exactDefaults } from './defaults';
-import { floorSteps, stepRatio, stepsToMm } from './format-length';
+import { type Exact, ZERO } from './exact';
+import { floorExactSteps, stepRatio, stepsToExact } from './format-length';
 import { lenMaker } from './len';
 import { InputReader } from './read-input';
 import type { HemInput, HemLine, HemPlan, Len, PlanWarning, Precision, Unit } from './types';
@@ -9,13 +9,11 @@ import type { HemInput, HemLine, HemPlan, Len, PlanWarning, Precision, Unit } fr
 export interface HemValues {
   unit: Unit;
   precision: Precision;
-  hemAllowance: Fraction;
-  turnUnder: Fraction;
-  available: Fraction | null;
-  slope: Fraction;
+  hemAllowance: Exact;
+  turnUnder: Exact;
+  available: Exact | null;
+  slope: Exact;
 }
-
-const ZERO = new Fraction(0);
 
 /** Read a plain hem input field by field (errors carry the field name). */
 export function readHemInput(input: HemInput, r: InputReader): HemValues {
@@ -37,7 +35,7 @@ export function planHem(input: HemInput): HemPlan {
   const defaults = exactDefaults(v.unit);
   const len = lenMaker(v.unit, v.precision);
   const A = v.available;
-  const positions: [HemLine['name'], Fraction][] = [
+  const positions: [HemLine['name'], Exact][] = [
     ['finished-edge', ZERO],
     ['cut', v.hemAllowance],
   ];
@@ -54,14 +52,14 @@ export function planHem(input: HemInput): HemPlan {
   let shortBy: Len | null = null;
   if (A !== null) {
     const rest = A.sub(v.hemAllowance);
-    enough = rest.s > 0n || rest.n === 0n;
+    enough = rest.sign() >= 0;
     if (enough) spare = len(rest);
     else {
       shortBy = len(rest.neg());
       const [a, b] = stepRatio(v.unit, v.precision);
-      const most = stepsToMm(floorSteps(A, a, b), v.unit, v.precision);
+      const most = stepsToExact(floorExactSteps(A, a, b), v.unit, v.precision);
       const fits =
-        most.n === 0n
+        most.isZero()
           ? 'Face the hem with a strip of other cloth.'
           : `A ${len(most).text} hem is the most that fits; for more, face the hem with a strip of other cloth.`;
       warnings.push({

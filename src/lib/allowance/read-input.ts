@@ -1,8 +1,8 @@
-import Fraction from 'fraction.js';
 import { AllowanceError } from './allowance-error';
-import { fractionFromNumber } from './exact-number';
-import { formatExact } from './format-length';
-import { checkRange, parseExact } from './parse-length';
+import type { Exact } from './exact';
+import { exactFromNumber } from './exact-number';
+import { formatExactQ } from './format-length';
+import { checkRangeExact, readExact } from './parse-length';
 import type { Precision, Unit } from './types';
 import { isPrecision, isUnit, mmPerUnitRatio } from './units';
 
@@ -10,9 +10,9 @@ import { isPrecision, isUnit, mmPerUnitRatio } from './units';
 export interface LengthRule {
   required?: boolean;
   min?: 'positive' | 'non-negative';
-  max?: Fraction;
+  max?: Exact;
   /** the smallest workable value, with why (shown after "must be at least …") */
-  least?: { value: Fraction; why: string };
+  least?: { value: Exact; why: string };
 }
 
 export { isPrecision } from './units';
@@ -49,12 +49,12 @@ export class InputReader {
   }
 
   /** A length field in mm, or null when absent (blank text counts as absent). */
-  length(value: unknown, field: string, label: string, rule: LengthRule = {}): Fraction | null {
+  length(value: unknown, field: string, label: string, rule: LengthRule = {}): Exact | null {
     if (value === undefined || value === null || (typeof value === 'string' && value.trim() === '')) {
       if (rule.required) this.fail(new AllowanceError('missing', `${label} is needed.`, field));
       return null;
     }
-    let mm: Fraction;
+    let mm: Exact;
     try {
       mm = this.exact(value);
     } catch (e) {
@@ -62,8 +62,8 @@ export class InputReader {
       this.fail(new AllowanceError(e.code, `${label}: ${e.message}`, field));
       return null;
     }
-    // A number input carries its sign; only text needs the Fraction asked.
-    const s = typeof value === 'number' ? Math.sign(value) : mm.n === 0n ? 0 : mm.s < 0n ? -1 : 1;
+    // A number input carries its sign; only text needs the exact value asked.
+    const s = typeof value === 'number' ? Math.sign(value) : mm.sign();
     if (rule.min === 'positive' && s <= 0) {
       this.fail(new AllowanceError('not-positive', `${label} must be more than 0.`, field));
       return null;
@@ -73,28 +73,28 @@ export class InputReader {
       return null;
     }
     if (rule.least !== undefined && mm.compare(rule.least.value) < 0) {
-      const least = formatExact(rule.least.value, this.unit, this.precision);
+      const least = formatExactQ(rule.least.value, this.unit, this.precision);
       this.fail(new AllowanceError('out-of-range', `${label} must be at least ${least}: ${rule.least.why}`, field));
       return null;
     }
     if (rule.max !== undefined && mm.compare(rule.max) > 0) {
-      const most = formatExact(rule.max, this.unit, this.precision);
+      const most = formatExactQ(rule.max, this.unit, this.precision);
       this.fail(new AllowanceError('out-of-range', `${label} must be at most ${most}.`, field));
       return null;
     }
     return mm;
   }
 
-  private exact(value: unknown): Fraction {
+  private exact(value: unknown): Exact {
     if (typeof value === 'number') {
       if (!Number.isFinite(value)) throw new AllowanceError('not-a-length', 'A length must be a finite number.');
       const [a, b] = mmPerUnitRatio(this.unit);
       // The range check also refuses 1e-310 and other lengths under a thousandth of a mm.
       const tiny = value !== 0 && Math.abs(value) * a < b / 1000;
-      if (tiny || Math.abs(value) * a > 5079 * b) return checkRange(fractionFromNumber(value, a, b));
-      return fractionFromNumber(value, a, b);
+      if (tiny || Math.abs(value) * a > 5079 * b) return checkRangeExact(exactFromNumber(value, a, b));
+      return exactFromNumber(value, a, b);
     }
-    if (typeof value === 'string') return parseExact(value, this.unit);
+    if (typeof value === 'string') return readExact(value, this.unit);
     throw new AllowanceError('not-a-length', 'Give a number or text such as 1 1/2.');
   }
 }

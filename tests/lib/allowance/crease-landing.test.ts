@@ -1,6 +1,7 @@
 import Fraction from 'fraction.js';
 import { describe, expect, it } from 'vitest';
 import { creaseLanding } from '@/lib/allowance/crease-landing';
+import { Exact } from '@/lib/allowance/exact';
 import { cuffLinePositions, linePositionList } from '@/lib/allowance/cuff-lines';
 import { lenMaker } from '@/lib/allowance/len';
 
@@ -9,16 +10,17 @@ const inch = (n: number, d = 1) => new Fraction(n, d).mul(new Fraction(127, 5));
 function land(creaseIn: Fraction, unit: 'in' | 'mm' = 'in') {
   // A 1½ in cuff, three equal sections: lines at 0, 1½, 3 and 4½ in (TRADE.md: Seam2Seam 2014)
   const d = inch(3, 2);
-  const lines = cuffLinePositions(d, d, new Fraction(0));
-  return creaseLanding(creaseIn, {
-    cuffDepth: d,
+  const lines = cuffLinePositions(Exact.from(d), Exact.from(d), Exact.int(0));
+  const x = Exact.from;
+  return creaseLanding(x(creaseIn), {
+    cuffDepth: x(d),
     cuffDepthMm: d.valueOf(),
     onFoldWithinMm: unit === 'in' ? 25.4 / 16 : 1.5,
     lines,
     linesMm: linePositionList(lines).map((f) => f.valueOf()),
-    onFoldWithin: unit === 'in' ? inch(1, 16) : new Fraction(3, 2),
+    onFoldWithin: x(unit === 'in' ? inch(1, 16) : new Fraction(3, 2)),
     // work to an eighth (TRADE.md common practice); 3 mm metric
-    nearCuffTop: unit === 'in' ? inch(1, 8) : new Fraction(3),
+    nearCuffTop: x(unit === 'in' ? inch(1, 8) : new Fraction(3)),
     len: lenMaker(unit, 16),
   });
 }

@@ -2,18 +2,20 @@ import Fraction from 'fraction.js';
 import { describe, expect, it } from 'vitest';
 import { cuffAlternatives, deepestCuff } from '@/lib/allowance/cuff-alternatives';
 import { exactDefaults } from '@/lib/allowance/defaults';
+import { Exact } from '@/lib/allowance/exact';
 import { lenMaker } from '@/lib/allowance/len';
 
 const inch = (n: number, d = 1) => new Fraction(n, d).mul(new Fraction(127, 5));
 
 function ctx(available: Fraction, d: Fraction, t = new Fraction(0), precision: 8 | 16 = 16) {
+  const x = Exact.from;
   return {
-    available,
-    cuffDepth: d,
-    hemSection: d,
-    turnUnder: inch(1, 2),
-    innerFold: d.add(t).mul(2),
-    clothThickness: t,
+    available: x(available),
+    cuffDepth: x(d),
+    hemSection: x(d),
+    turnUnder: x(inch(1, 2)),
+    innerFold: x(d.add(t).mul(2)),
+    clothThickness: x(t),
     unit: 'in' as const,
     precision,
     defaults: exactDefaults('in'),

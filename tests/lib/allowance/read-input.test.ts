@@ -1,14 +1,15 @@
 import Fraction from 'fraction.js';
 import { describe, expect, it } from 'vitest';
 import { AllowanceError } from '@/lib/allowance';
+import { Exact } from '@/lib/allowance/exact';
 import { InputReader, isPrecision } from '@/lib/allowance/read-input';
 
 describe('InputReader', () => {
   it('reads numbers in the plan unit and text with its own unit, exactly (1 in = 25.4 mm, NBS 1959)', () => {
     const r = new InputReader({ unit: 'in' }, false);
-    expect(r.length(1.5, 'f', 'F')!.equals(new Fraction(381, 10))).toBe(true);
-    expect(r.length('38 mm', 'f', 'F')!.equals(38)).toBe(true);
-    expect(new InputReader({ unit: 'cm' }, false).length(3.85, 'f', 'F')!.equals(new Fraction(385, 10))).toBe(true);
+    expect(r.length(1.5, 'f', 'F')!.toFraction().equals(new Fraction(381, 10))).toBe(true);
+    expect(r.length('38 mm', 'f', 'F')!.toFraction().equals(38)).toBe(true);
+    expect(new InputReader({ unit: 'cm' }, false).length(3.85, 'f', 'F')!.toFraction().equals(new Fraction(385, 10))).toBe(true);
   });
 
   it('treats absent and blank as missing, and says so only when required', () => {
@@ -32,11 +33,11 @@ describe('InputReader', () => {
 
   it('checks the bounds exactly: 6 in is allowed, 6 in + 1/1000 mm is not', () => {
     const r = new InputReader({ unit: 'in' }, false);
-    const max = new Fraction(6).mul(new Fraction(127, 5));
+    const max = Exact.from(new Fraction(6).mul(new Fraction(127, 5)));
     expect(r.length(6, 'f', 'F', { max })).not.toBeNull();
     expect(() => r.length('6 in + 0.001 mm', 'f', 'F', { max })).toThrow(/at most 6 in/);
     expect(() => r.length(0, 'f', 'F', { min: 'positive' })).toThrow(/more than 0/);
-    expect(r.length(0, 'f', 'F', { min: 'non-negative' })!.equals(0)).toBe(true);
+    expect(r.length(0, 'f', 'F', { min: 'non-negative' })!.isZero()).toBe(true);
     expect(() => r.length(-0.001, 'f', 'F', { min: 'non-negative' })).toThrow(/negative/);
   });
 
