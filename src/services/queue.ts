@@ -4,20 +4,19 @@
 // leave the database for it); every ETag also holds who asks, so it never matches across shops,
 // people or roles.
 import { createHash } from 'node:crypto';
-import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
+import { and, sql, type SQL } from 'drizzle-orm';
 import { db } from '@/db';
-import { customers, garments, tickets, user } from '@/db/schema';
+import { garments } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import type { QueueRow } from '@/lib/bench-types';
-import { isUuid } from '@/lib/ids';
+import { encodeCursor, type QueueCursor } from '@/lib/queue-request';
 import { garmentVisibleTo } from './garments';
-import { ServiceError } from './errors';
 
 /** What the queue API is asked: open work, or a page of history after a cursor. */
 export interface QueueQuery {
   view: 'open' | 'history';
   /** the cursor of the last row of the page before (history only) */
-  after?: string;
+  after?: QueueCursor;
   /** rows per history page */
   limit: number;
 }
@@ -33,33 +32,45 @@ export interface QueueAnswer {
 const OPEN = sql`${garments.status} <> 'collected'`;
 const COLLECTED = sql`${garments.status} = 'collected'`;
 
-const columns = {
-  id: garments.id,
-  description: garments.description,
-  status: garments.status,
-  dueOn: garments.dueOn,
-  assigneeId: garments.assigneeId,
-  assigneeName: user.name,
-  ticketId: garments.ticketId,
-  ticketNumber: tickets.number,
-  customerName: customers.name,
-};
+// Ticket, customer and assignee read per row by primary key (correlated subqueries): with joins
+// the planner, misjudging how many rows are open, hashed every ticket of the database instead.
+// Plain SQL: in a one-table select Drizzle leaves column names unqualified, which a subquery would
+// read as its own table's.
+const ticketNumber = sql<number>`(select t.number from tickets t where t.id = "garments"."ticket_id")`;
+const customerOf = <T>(col: 'name' | 'updated_at') => sql<T>`(select ${sql.raw(`c.${col}`)} from tickets t join customers c on c.id = t.customer_id where t.id = "garments"."ticket_id")`;
+const assigneeOf = <T>(col: 'name' | 'updated_at') => sql<T>`(select ${sql.raw(`u.${col}`)} from "user" u where u.id = "garments"."assignee_id")`;
 
 function rowsOf(where: SQL | undefined) {
   return db
-    .select({ ...columns, createdAt: sql<string>`${garments.createdAt}::text` })
+    .select({
+      id: garments.id,
+      description: garments.description,
+      status: garments.status,
+      dueOn: garments.dueOn,
+      assigneeId: garments.assigneeId,
+      assigneeName: assigneeOf<string | null>('name'),
+      ticketId: garments.ticketId,
+      ticketNumber: ticketNumber.mapWith(Number),
+      customerName: customerOf<string | null>('name'),
+      position: garments.position,
+      createdAt: sql<string>`"garments"."created_at"::text`,
+    })
     .from(garments)
-    .innerJoin(tickets, eq(tickets.id, garments.ticketId))
-    .leftJoin(customers, eq(customers.id, tickets.customerId))
-    .leftJoin(user, eq(user.id, garments.assigneeId))
     .where(where);
 }
 
-const shown = ({ createdAt: _, ...r }: QueueRow & { createdAt: string }): QueueRow => ({ ...r, description: r.description ?? 'Trousers' });
+type Read = Omit<QueueRow, 'description'> & { description: string | null; createdAt: string; position: number };
+const shown = ({ createdAt: _, position: __, ...r }: Read): QueueRow => ({ ...r, description: r.description ?? 'Trousers' });
+
+// The open list's order, as listQueue's SQL had it: due day (none last), ticket, place on the ticket, id.
+function byDue(a: Read, b: Read): number {
+  const due = (r: Read) => r.dueOn ?? '~';
+  return due(a) < due(b) ? -1 : due(a) > due(b) ? 1 : a.ticketNumber - b.ticketNumber || a.position - b.position || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
+}
 
 /** The ETag of an answer: who asks (shop, person, role), what they asked, and a fingerprint of the data. */
 function etagOf(actor: Actor, q: QueueQuery, fingerprint: string): string {
-  const h = createHash('sha256').update(JSON.stringify([actor.shopId, actor.userId, actor.role, q.view, q.after ?? '', q.limit, fingerprint]));
+  const h = createHash('sha256').update(JSON.stringify([actor.shopId, actor.userId, actor.role, q.view, q.after ?? null, q.limit, fingerprint]));
   return `"q-${h.digest('base64url').slice(0, 32)}"`;
 }
 
@@ -70,30 +81,14 @@ async function openFingerprint(actor: Actor): Promise<string> {
     .select({
       n: sql<string>`count(*)::text`,
       // Which rows, with which customer and assignee: a swap keeps the counts but not this sum.
-      ids: sql<string>`coalesce(sum(hashtext(${garments.id}::text || coalesce(${tickets.customerId}::text, '') || coalesce(${user.id}, ''))::bigint), 0)::text`,
-      g: sql<string>`max(${garments.updatedAt})::text`,
-      c: sql<string>`max(${customers.updatedAt})::text`,
-      u: sql<string>`max(${user.updatedAt})::text`,
+      ids: sql<string>`coalesce(sum(hashtext("garments"."id"::text || coalesce((select t.customer_id from tickets t where t.id = "garments"."ticket_id")::text, '') || coalesce("garments"."assignee_id", ''))::bigint), 0)::text`,
+      g: sql<string>`max("garments"."updated_at")::text`,
+      c: sql<string>`max(${customerOf('updated_at')})::text`,
+      u: sql<string>`max(${assigneeOf('updated_at')})::text`,
     })
     .from(garments)
-    .innerJoin(tickets, eq(tickets.id, garments.ticketId))
-    .leftJoin(customers, eq(customers.id, tickets.customerId))
-    .leftJoin(user, eq(user.id, garments.assigneeId))
     .where(and(garmentVisibleTo(actor), OPEN));
   return JSON.stringify(f);
-}
-
-/** A history cursor: the last row's intake time (as the database prints it, to the microsecond) and id. */
-export function encodeCursor(createdAt: string, id: string): string {
-  return Buffer.from(`${createdAt}|${id}`).toString('base64url');
-}
-
-function decodeCursor(cursor: string): { createdAt: string; id: string } {
-  const [createdAt = '', id = ''] = Buffer.from(cursor, 'base64url').toString().split('|');
-  if (!/^\d{4}-\d\d-\d\d \d\d:\d\d:\d\d(\.\d{1,6})?[+-]\d\d(:\d\d)?$/.test(createdAt) || !isUuid(id)) {
-    throw new ServiceError(400, 'The page cursor is not one this queue gave out; start again from the first page.');
-  }
-  return { createdAt, id };
 }
 
 /** The queue for the actor: open work by due day, or one page of collected history, newest first. */
@@ -101,19 +96,19 @@ export async function readQueue(actor: Actor, q: QueueQuery, ifNoneMatch: string
   if (q.view === 'open') {
     const etag = etagOf(actor, q, await openFingerprint(actor));
     if (matches(ifNoneMatch, etag)) return { etag, rows: null, next: null };
-    const rows = await rowsOf(and(garmentVisibleTo(actor), OPEN)).orderBy(asc(garments.dueOn), asc(tickets.number), asc(garments.position), asc(garments.id));
-    return { etag, rows: rows.map(shown), next: null };
+    const rows = (await rowsOf(and(garmentVisibleTo(actor), OPEN))) as Read[];
+    return { etag, rows: rows.sort(byDue).map(shown), next: null };
   }
-  const after = q.after ? decodeCursor(q.after) : null;
-  const page = await rowsOf(
+  const after = q.after ?? null;
+  const page = (await rowsOf(
     and(garmentVisibleTo(actor), COLLECTED, after ? sql`(${garments.createdAt}, ${garments.id}) < (${after.createdAt}::timestamptz, ${after.id}::uuid)` : undefined),
   )
     .orderBy(sql`${garments.createdAt} desc nulls last`, sql`${garments.id} desc nulls last`)
-    .limit(q.limit + 1);
+    .limit(q.limit + 1)) as Read[];
   const more = page.length > q.limit;
   const rows = page.slice(0, q.limit);
   const last = rows.at(-1);
-  const next = more && last ? encodeCursor(last.createdAt, last.id) : null;
+  const next = more && last ? encodeCursor(last) : null;
   const shownRows = rows.map(shown);
   // A history page is read rarely: its ETag is simply the page itself.
   const etag = etagOf(actor, q, createHash('sha256').update(JSON.stringify([shownRows, next])).digest('base64url'));
