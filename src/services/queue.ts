@@ -28,7 +28,7 @@ export interface QueueAnswer {
   next: string | null;
 }
 
-// Literal, not a parameter: the partial indexes' predicates (drizzle/0009) only match literals.
+// Literal, not a parameter: the partial indexes' predicates (drizzle/0010) only match literals.
 const OPEN = sql`${garments.status} <> 'collected'`;
 const COLLECTED = sql`${garments.status} = 'collected'`;
 
