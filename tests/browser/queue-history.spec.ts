@@ -21,6 +21,8 @@ describe('the queue and its history', () => {
       const r = await page.request.post('/api/tickets', { headers, data: { customerId, note: 'history', garments } });
       expect(r.status()).toBe(201);
       const id = (await r.json()).id;
+      // A ticket is handed over only priced: this work goes out with no charge.
+      expect((await page.request.post(`/api/tickets/${id}/price-lines`, { headers, data: { source: 'no-charge', reason: 'history fixture' } })).status()).toBe(201);
       for (const status of ['marked', 'cut', 'stitched', 'pressed', 'ready', 'collected']) {
         expect((await page.request.patch(`/api/tickets/${id}`, { headers, data: { status } })).status()).toBe(200);
       }

@@ -52,6 +52,8 @@ beforeAll(async () => {
   // Five collected garments on five tickets, taken in one after another.
   for (let i = 0; i < 5; i++) {
     const t = await ticket([{ description: `Collected pair ${i + 1}` }]);
+    // A ticket is handed over only priced: this work goes out with no charge.
+    expect((await call('POST', `/api/tickets/${t.id}/price-lines`, { cookie: lead, body: { source: 'no-charge', reason: 'queue fixture' } })).status).toBe(201);
     for (const status of ['marked', 'cut', 'stitched', 'pressed', 'ready', 'collected']) {
       const moved = await call('PATCH', `/api/tickets/${t.id}`, { cookie: lead, body: { status } });
       expect(moved.status, status).toBe(200);
