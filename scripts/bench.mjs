@@ -11,6 +11,7 @@ const runs = [
   ['cut sheet: ours vs Chromium printing from a warm page, alternated', [vn, 'benchmarks/cut-sheet.ts']],
   ['start: npm start to first 200, idle memory', ['node', 'benchmarks/start.mjs']],
   ['morning batch: 100 and 500 sheets, memory, a member beside it', ['node', 'benchmarks/batch.mjs']],
+  ['queue: reads at a steady 200 req/s and on a 10,000-garment shop', ['node', 'benchmarks/queue.mjs']],
 ];
 const only = process.argv.slice(2);
 rmSync(RESULTS_DIR, { recursive: true, force: true });

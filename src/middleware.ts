@@ -4,10 +4,9 @@
 import type { MiddlewareHandler } from 'astro';
 import { defineMiddleware } from 'astro:middleware';
 import { BETTER_AUTH_URL } from 'astro:env/server';
-import { auth } from '@/lib/auth';
 import { memberRequestStarted } from '@/lib/member-activity';
 import { badIdParam } from '@/lib/ids';
-import { activeMembership } from '@/services/members';
+import { forgetSessions, lookUpSession } from '@/services/session-lookup';
 import { withSecurityHeaders } from '@/lib/security-headers';
 import { logError, logRequest } from '@/lib/request-log';
 import { ensureStarted } from '@/services/startup';
@@ -62,6 +61,8 @@ export const onRequest = defineMiddleware(async (context, next) => {
     throw e;
   } finally {
     done();
+    // A write may sign out, remove a member or change a role: kept session lookups go (services/session-lookup.ts).
+    if (!SAFE_METHODS.has(context.request.method)) forgetSessions();
     logRequest({ method: context.request.method, route: context.routePattern, status, ms: performance.now() - began, shop: context.locals.member?.shopId ?? null });
   }
 });
@@ -93,12 +94,10 @@ async function answer(context: Parameters<MiddlewareHandler>[0], next: Parameter
     });
   }
   if (OWN_AUTH_PREFIXES.some((p) => url.pathname.startsWith(p))) return next();
-  const session = await auth.api.getSession({ headers: request.headers });
-  if (session) {
-    const { id, name, email } = session.user;
-    locals.user = { id, name, email };
-    locals.member = await activeMembership(id, session.session.activeOrganizationId);
-  }
+  const { user, member } = await lookUpSession(request.headers);
+  // Copies: the lookup is shared by every request of the session while it is kept.
+  locals.user = user && { ...user };
+  locals.member = member && { ...member };
   // A cookie without a membership (an old session) is a stranger: it must not hold up anonymous work, its own included.
   if (!locals.member) notMember();
   if (!locals.member && !isPublic(url.pathname)) {

@@ -1,4 +1,4 @@
-import { useQuery } from '@tanstack/react-query';
+import { useInfiniteQuery, useQuery } from '@tanstack/react-query';
 import {
   createColumnHelper,
   flexRender,
@@ -10,7 +10,7 @@ import {
 import { useMemo, useState } from 'react';
 import { withQuery } from '@/components/WithQuery';
 import type { QueueRow } from '@/lib/bench-types';
-import { fetchJson } from '@/lib/fetch-json';
+import { ApiError, fetchJson } from '@/lib/fetch-json';
 import { GARMENT_STEPS, ticketLabel } from '@/lib/garment-steps';
 import { DEFAULT_QUEUE_FILTER, matchesQueue, queueRank, queueSheetsHref, type QueueFilter } from '@/lib/queue-filter';
 import { DueBadge } from './DueBadge';
@@ -45,9 +45,18 @@ const CELL: Record<string, string> = {
   step: "[grid-area:step] max-lg:before:text-muted max-lg:before:content-['Step:_']",
   move: '[grid-area:move] max-sm:pt-2 max-lg:[&_button]:w-full',
 };
+/** One page of collected history (GET /api/garments?view=history) and the next page's cursor. */
+async function historyPage(after: string): Promise<{ rows: QueueRow[]; next: string | null }> {
+  const res = await fetch(`/api/garments?view=history${after ? `&after=${encodeURIComponent(after)}` : ''}`, { credentials: 'same-origin' });
+  const body = (await res.json().catch(() => ({}))) as QueueRow[] | { error?: string };
+  if (!res.ok || !Array.isArray(body)) throw new ApiError(res.status, (!Array.isArray(body) && body.error) || `The server answered ${res.status}.`);
+  return { rows: body, next: res.headers.get('x-next-cursor') };
+}
+
 const SORT_BY = "max-lg:before:font-semibold max-lg:before:text-muted max-lg:before:content-['Sort_by']";
 
 function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) {
+  // Open work (the server's default); an unchanged list comes back as 304 to the browser's copy.
   const queue = useQuery({ queryKey: ['queue'], queryFn: () => fetchJson<QueueRow[]>('/api/garments'), refetchInterval: 60_000 });
   const people = useAssignees();
   const label = useStepLabel();
@@ -56,13 +65,22 @@ function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) 
   const [sorting, setSorting] = useState<SortingState>([{ id: 'rank', desc: false }, { id: 'due', desc: false }]);
   const today = todayIso();
 
-  const rows = useMemo(
-    () =>
-      (queue.data ?? [])
-        .filter((r) => matchesQueue(r, filters, userId, today))
-        .map((r) => ({ ...r, rank: queueRank(r, userId) })),
-    [queue.data, filters, userId, today],
-  );
+  // Collected work is history: read a page at a time, only when the step filter asks for it.
+  const wantsHistory = filters.step === 'all' || filters.step === 'collected';
+  const history = useInfiniteQuery({
+    queryKey: ['queue', 'history'],
+    queryFn: ({ pageParam }) => historyPage(pageParam),
+    initialPageParam: '',
+    getNextPageParam: (last) => last.next ?? undefined,
+    enabled: wantsHistory,
+  });
+
+  const rows = useMemo(() => {
+    const open = queue.data ?? [];
+    const ids = new Set(open.map((r) => r.id));
+    const older = wantsHistory ? (history.data?.pages ?? []).flatMap((p) => p.rows).filter((r) => !ids.has(r.id)) : [];
+    return [...open, ...older].filter((r) => matchesQueue(r, filters, userId, today)).map((r) => ({ ...r, rank: queueRank(r, userId) }));
+  }, [queue.data, history.data, wantsHistory, filters, userId, today]);
 
   const columns = useMemo(
     () => [
@@ -166,6 +184,23 @@ function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) 
           </table>
           {rows.length === 0 && <p className="px-4 py-6 text-lg text-muted">Nothing here with these filters.</p>}
         </div>
+      )}
+      {wantsHistory ? (
+        history.isError ? (
+          <p role="alert" className="font-semibold text-cut">Collected work could not be loaded: {history.error.message}</p>
+        ) : history.isPending || history.isFetchingNextPage ? (
+          <p className="text-lg text-muted">Loading collected work…</p>
+        ) : history.hasNextPage ? (
+          <button type="button" onClick={() => void history.fetchNextPage()} className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-ink bg-card px-5 text-lg font-bold">
+            Show older collected work
+          </button>
+        ) : (
+          <p className="text-muted">That is all the collected work.</p>
+        )
+      ) : (
+        <button type="button" onClick={() => setFilters({ ...filters, step: 'all' })} className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-rule bg-card px-5 text-lg font-semibold">
+          Show collected work too (history)
+        </button>
       )}
     </div>
   );

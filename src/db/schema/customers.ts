@@ -16,6 +16,8 @@ export const customers = pgTable(
     email: text('email'),
     notes: text('notes'),
     createdAt: timestamp('created_at', { withTimezone: true }).defaultNow().notNull(),
+    // Moves on every change: the queue's ETag (services/queue.ts) shows the customer's name.
+    updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull().$onUpdate(() => new Date()),
   },
   (t) => [index('customers_shop_idx').on(t.shopId)],
 );

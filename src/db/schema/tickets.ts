@@ -1,6 +1,7 @@
 // A shop's jobs: a ticket per visit, the garments on it and their fitting measurements per leg,
 // and the shop's bench settings (measuring unit, its names for the steps).
 import { pgTable, text, timestamp, uuid, index, integer, jsonb, date, uniqueIndex } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
 import { createSelectSchema } from 'drizzle-zod';
 import { z } from 'zod';
 import { DEFAULT_EXISTING_FINISH, EXISTING_FINISHES } from '../../lib/existing-finish';
@@ -50,9 +51,17 @@ export const garments = pgTable(
     assigneeId: text('assignee_id').references(() => user.id, { onDelete: 'set null' }),
     dueOn: date('due_on'),
     createdAt: timestamp('created_at', { withTimezone: true }).defaultNow().notNull(),
-    updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull(),
+    // Moves on every update through Drizzle: the queue's ETag (services/queue.ts) is built on it.
+    updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull().$onUpdate(() => new Date()),
   },
-  (t) => [index('garments_shop_status_idx').on(t.shopId, t.status), index('garments_ticket_idx').on(t.ticketId)],
+  (t) => [
+    index('garments_shop_status_idx').on(t.shopId, t.status),
+    index('garments_ticket_idx').on(t.ticketId),
+    // The queue's two reads (services/queue.ts): open work by due day, and history newest first.
+    // The predicates are literal so the queries' literal conditions match them.
+    index('garments_shop_open_idx').on(t.shopId, t.dueOn).where(sql`status <> 'collected'`),
+    index('garments_shop_history_idx').on(t.shopId, t.createdAt.desc(), t.id.desc()).where(sql`status = 'collected'`),
+  ],
 );
 
 /** Fitting measurements: one row per garment and leg, each length as typed and in exact mm. */

@@ -1,0 +1,3 @@
+ALTER TABLE "customers" ADD COLUMN "updated_at" timestamp with time zone DEFAULT now() NOT NULL;--> statement-breakpoint
+CREATE INDEX "garments_shop_open_idx" ON "garments" USING btree ("shop_id","due_on") WHERE status <> 'collected';--> statement-breakpoint
+CREATE INDEX "garments_shop_history_idx" ON "garments" USING btree ("shop_id","created_at" DESC NULLS LAST,"id" DESC NULLS LAST) WHERE status = 'collected';

@@ -1,0 +1,38 @@
+// Who a request is: the better-auth session and the shop membership behind its cookie, kept per
+// session token for SESSION_CACHE_TTL_MS so a busy screen's reads do not ask the database twice
+// each. Every write request on this server forgets them all (sign-out, a removed member, a changed
+// role take effect on the next request); another server (DATABASE_URL) sees it within the TTL.
+import { auth } from '@/lib/auth';
+import { lookupCache } from '@/lib/lookup-cache';
+import { SESSION_CACHE_TTL_MS, sessionToken } from '@/lib/session-key';
+import { activeMembership, type Membership } from './members';
+
+/** The signed-in person and their membership, or nulls. */
+export interface SessionLookup {
+  user: { id: string; name: string; email: string } | null;
+  member: Membership | null;
+}
+
+const cache = lookupCache<SessionLookup>(SESSION_CACHE_TTL_MS, 10_000);
+const SIGNED_OUT: SessionLookup = { user: null, member: null };
+
+async function load(headers: Headers) {
+  const session = await auth.api.getSession({ headers });
+  if (!session) return { value: SIGNED_OUT };
+  const { id, name, email } = session.user;
+  const member = await activeMembership(id, session.session.activeOrganizationId);
+  return { value: { user: { id, name, email }, member }, expiresAt: new Date(session.session.expiresAt).getTime() };
+}
+
+/** The request's person and membership, from the cache when looked up less than the TTL ago. */
+export function lookUpSession(headers: Headers): Promise<SessionLookup> {
+  const token = sessionToken(headers.get('cookie'));
+  // Without a token there is nobody to look up; a token is the key as sent, so only its holder hits it.
+  if (!token) return Promise.resolve(SIGNED_OUT);
+  return cache.get(token, () => load(headers));
+}
+
+/** Forgets every kept lookup: called after each write request, so the change is seen at once here. */
+export function forgetSessions(): void {
+  cache.clear();
+}
