@@ -12,13 +12,14 @@ const runs = [
   ['start: npm start to first 200, idle memory', ['node', 'benchmarks/start.mjs']],
   ['morning batch: 100 and 500 sheets, memory, a member beside it', ['node', 'benchmarks/batch.mjs']],
   ['queue: reads at a steady 200 req/s and on a 10,000-garment shop', ['node', 'benchmarks/queue.mjs']],
+  ['queue on PostgreSQL: one server against two', ['bash', 'scripts/with-postgres.sh', 'node', 'benchmarks/queue-servers.mjs']],
 ];
 const only = process.argv.slice(2);
 rmSync(RESULTS_DIR, { recursive: true, force: true });
 let failed = false;
 for (const [name, [cmd, file, ...rest]] of runs) {
   if (!existsSync(file)) continue;
-  if (only.length && !only.some((o) => file.includes(o))) continue;
+  if (only.length && !only.some((o) => [file, ...rest].some((a) => a.includes(o)))) continue;
   console.log(`\n=== ${name} ===`);
   const r = spawnSync(cmd, [file, ...rest], { stdio: 'inherit', env: { ...process.env, NODE_ENV: 'production' } });
   if (r.status !== 0) failed = true;
