@@ -3,6 +3,10 @@
 import { DeleteObjectCommand, GetObjectCommand, NoSuchKey, PutObjectCommand, S3Client, type S3ClientConfig } from '@aws-sdk/client-s3';
 import { checkKey, type Storage } from './storage';
 
+// The pinned SDK runs on Node 20 (tested against the S3 fake); its notice that later versions will
+// need Node 22 would otherwise print in every server's log. Set the variable to 'false' to see it.
+process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
+
 /** Where the objects go: bucket, optional key prefix, and the client's settings. */
 export interface S3StorageOptions {
   bucket: string;
