@@ -1,5 +1,6 @@
 // One garment's cut sheet as a react-pdf page. Plain data in; no database, no network.
 import { Document, Page, Path, Svg, Text, View, type DocumentProps, type PageProps } from '@react-pdf/renderer';
+import type { SafePageNode } from '@react-pdf/layout';
 import { Fragment, type ReactElement } from 'react';
 import { ChalkGuide, COLUMN_STRIPS, StripRow, stripColumns, type StripColumn } from './ChalkGuide';
 import { guideStrips } from './chalk-guide';
@@ -245,6 +246,16 @@ function StripPage({ c, columns, size, style }: { c: SheetContent; columns: Stri
       <StripRow columns={columns} width={108} gap={16} />
     </Page>
   );
+}
+
+/**
+ * A sheet's page from an unwrapped layout, as the same page wrapped stands before react-pdf splits
+ * it: the two differ only in `wrap` and the min-height CutSheetPage gives an unwrapped page (its
+ * height is the paper's either way), and min-height reaches nothing on a page taller than it.
+ */
+export function asWrapped(page: SafePageNode): SafePageNode {
+  const { minHeight: _minHeight, ...style } = page.style as Record<string, unknown>;
+  return { ...page, style: style as SafePageNode['style'], props: { ...page.props, wrap: true } };
 }
 
 /** One page for one garment: header, legs with drawings, bench steps, cautions and chalk guide; a strip too long for the column goes on over a second page. */

@@ -11,6 +11,7 @@ import { cacheFontObjects } from './pdf-font-cache';
 import { compressStreamsFast } from './pdf-streams';
 import { memoiseShaping, type Shaper } from './shaping-memo';
 import { keepSubsets, type Seed } from './subset-memo';
+import { splitFromFirstLayout } from './split-laid-out';
 import { keepTextLayouts } from './text-layout-memo';
 import { installedVersion } from './versions';
 
@@ -39,6 +40,7 @@ export interface PdfPatch {
 /** The patches, in install order. A version bump means reading the package's changes, then the patch, then the tests. */
 export const PDF_PATCHES: readonly PdfPatch[] = [
   { name: 'text-layout-memo', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: keepTextLayouts },
+  { name: 'split-laid-out', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: splitFromFirstLayout },
   { name: 'pdf-streams', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: compressStreamsFast },
   { name: 'pdf-font-cache', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: cacheFontObjects },
   { name: 'subset-memo', pkg: 'fontkit', via: '@react-pdf/font', writtenFor: '2.0.4', face: (face, o) => keepSubsets(face, o.seed) },
