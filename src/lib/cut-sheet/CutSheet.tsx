@@ -223,8 +223,21 @@ function Steps({ c }: { c: SheetContent }) {
 
 /** The chalk guide's strip columns of a sheet: those its guide column holds, and the rest for a page of strip. */
 export function sheetStripColumns(data: CutSheetData): { column: StripColumn[]; page: StripColumn[] } {
-  const c = sheetContent(data);
-  return stripColumnsOf(c, data);
+  return workedOut(data).strips;
+}
+
+// A sheet's words and strip columns, worked out once per data object: render.ts asks for the strip
+// columns to find each sheet's pages and the page itself needs both (twice the work per sheet
+// before). Data is never changed once built; weakly held, a batch's go with its data.
+const worked = new WeakMap<CutSheetData, { c: SheetContent; strips: ReturnType<typeof stripColumnsOf> }>();
+
+function workedOut(data: CutSheetData) {
+  let w = worked.get(data);
+  if (!w) {
+    const c = sheetContent(data);
+    worked.set(data, (w = { c, strips: stripColumnsOf(c, data) }));
+  }
+  return w;
 }
 
 function stripColumnsOf(c: SheetContent, data: CutSheetData) {
@@ -261,9 +274,8 @@ export function asWrapped(page: SafePageNode): SafePageNode {
 /** One page for one garment: header, legs with drawings, bench steps, cautions and chalk guide; a strip too long for the column goes on over a second page. */
 export function CutSheetPage({ data, wrap, family = FAMILY }: { data: CutSheetData; wrap: boolean; family?: string | string[] }) {
   const size = data.pageSize ?? 'LETTER';
-  const c = sheetContent(data);
+  const { c, strips } = workedOut(data);
   const page = PAGE_PT[size];
-  const strips = stripColumnsOf(c, data);
   const mainWidth = page.width - 2 * PADDING - GUIDE_COLUMN;
   // Only a sheet with text Inter cannot set names a font stack; the usual sheet keeps s.page as it is.
   const style = family === FAMILY ? s.page : [s.page, { fontFamily: family }];
