@@ -8,7 +8,7 @@ import { renderCutSheet } from '../src/lib/cut-sheet/render';
 import { splitFromFirstLayout } from '../src/lib/pdf-platform/split-laid-out';
 for (let i = 0; i < 40; i++) await renderCutSheet(taperedPairSheet(i));
 const res: Record<string, number[]> = { on: [], off: [], overOn: [], overOff: [] };
-const load0 = loadavg()[0];
+const load0 = loadavg()[0]!;
 for (let r = 0; r < 8; r++) {
   for (const mode of r % 2 ? ['off', 'on'] : ['on', 'off']) {
     const undo = splitFromFirstLayout();
@@ -28,4 +28,4 @@ for (let r = 0; r < 8; r++) {
 }
 const med = (a: number[]) => [...a].sort((x, y) => x - y)[Math.floor(a.length / 2)]!.toFixed(1);
 const min = (a: number[]) => Math.min(...a).toFixed(1);
-console.log(`load ${load0.toFixed(1)}→${loadavg()[0].toFixed(1)}; cpu ms/sheet (1 in 4 overfull) split off: median ${med(res.off!)} min ${min(res.off!)}; on: median ${med(res.on!)} min ${min(res.on!)}; overfull alone off: median ${med(res.overOff!)} min ${min(res.overOff!)}; on: median ${med(res.overOn!)} min ${min(res.overOn!)}`);
+console.log(`load ${load0.toFixed(1)}→${loadavg()[0]!.toFixed(1)}; cpu ms/sheet (1 in 4 overfull) split off: median ${med(res.off!)} min ${min(res.off!)}; on: median ${med(res.on!)} min ${min(res.on!)}; overfull alone off: median ${med(res.overOff!)} min ${min(res.overOff!)}; on: median ${med(res.overOn!)} min ${min(res.overOn!)}`);
