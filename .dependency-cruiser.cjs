@@ -1,0 +1,132 @@
+// The direction of imports in src/ (DEVELOPERS.md "Layers"). `npm run check:imports` runs it; CI
+// fails on any error. tests/layers/import-rules.test.ts proves each rule still catches a
+// forbidden import, so a broken pattern here cannot pass silently.
+//
+// Type-only imports (`import type`) are erased before anything runs: the island rules let them
+// through, every other rule counts them like any import.
+
+/** Server-only modules of src/lib: they read secrets, the database, the disk or Node's APIs and
+ * must never be bundled into an island. A new server adapter in src/lib goes on this list. */
+const SERVER_ONLY_LIB = [
+  '^src/lib/(auth|auth-hooks|auth-plugins|auth-secret)\\.ts$', // better-auth + the database + the secret
+  '^src/lib/mail\\.ts$', // nodemailer, SMTP settings
+  '^src/lib/payment-service\\.ts$', // the payment service's secret key
+  '^src/lib/render-pdf\\.ts$', // react-pdf + pdfkit
+  '^src/lib/(cut-sheet|claim-slip|pdf-platform|storage)/', // PDF drawing, fonts, files on disk
+  '^src/lib/(api|body|client-address|deployment|security-headers|serve-photo)\\.ts$', // endpoint plumbing
+  '^src/lib/(anonymous-sheets|member-activity|sign-in-limit|reset-limit)\\.ts$', // per-request limits
+];
+
+/** The type-only exceptions for islands: a shape an island only reads. */
+const TYPES_ONLY = { dependencyTypesNot: ['type-only'] };
+
+module.exports = {
+  forbidden: [
+    {
+      name: 'engine-is-pure',
+      comment:
+        'The hem-and-cuff engine imports only its own files and npm packages: no app code, no Astro ' +
+        '(astro:*), no Node built-ins, so it runs anywhere, the browser included.',
+      severity: 'error',
+      from: { path: '^src/lib/allowance/' },
+      to: { pathNot: ['^src/lib/allowance/', '^node_modules/'] },
+    },
+    {
+      name: 'engine-no-builtins',
+      comment: 'The engine runs in the browser too: no node:fs, node:crypto, ...',
+      severity: 'error',
+      from: { path: '^src/lib/allowance/' },
+      to: { dependencyTypes: ['core'] },
+    },
+    {
+      name: 'pricing-is-pure',
+      comment:
+        'Price computation imports only its own files, the engine and npm packages: no app code, ' +
+        'no Astro, no Node built-ins.',
+      severity: 'error',
+      from: { path: '^src/lib/pricing/' },
+      to: { pathNot: ['^src/lib/pricing/', '^src/lib/allowance/', '^node_modules/'] },
+    },
+    {
+      name: 'pricing-no-builtins',
+      comment: 'Prices are computed in islands too: no Node built-ins.',
+      severity: 'error',
+      from: { path: '^src/lib/pricing/' },
+      to: { dependencyTypes: ['core'] },
+    },
+    {
+      name: 'lib-not-upward',
+      comment:
+        'src/lib is below everything that serves a request: it never imports services, pages, ' +
+        'components or the middleware (a lib module that needs a service belongs in services/).',
+      severity: 'error',
+      from: { path: '^src/lib/' },
+      to: { path: ['^src/services/', '^src/pages/', '^src/components/', '^src/middleware\\.ts$'] },
+    },
+    {
+      name: 'db-not-upward',
+      comment: 'The database module and its tables import no services, pages, components or middleware.',
+      severity: 'error',
+      from: { path: '^src/db/' },
+      to: { path: ['^src/services/', '^src/pages/', '^src/components/', '^src/middleware\\.ts$'] },
+    },
+    {
+      name: 'services-not-upward',
+      comment: 'Services do the work behind endpoints and pages: they never import a page, a screen or the middleware.',
+      severity: 'error',
+      from: { path: '^src/services/' },
+      to: { path: ['^src/pages/', '^src/components/', '^src/middleware\\.ts$'] },
+    },
+    {
+      name: 'islands-no-db',
+      comment:
+        'Islands reach the browser: no database module or table (a shape they read comes from a ' +
+        'shared schema in src/lib, dates as strings).',
+      severity: 'error',
+      from: { path: '^src/components/' },
+      to: { path: '^src/db/', ...TYPES_ONLY },
+    },
+    {
+      name: 'islands-no-services',
+      comment: 'Islands reach the browser: no service (they call the API through fetch).',
+      severity: 'error',
+      from: { path: '^src/components/' },
+      to: { path: '^src/services/', ...TYPES_ONLY },
+    },
+    {
+      name: 'islands-no-server-lib',
+      comment: 'Islands reach the browser: no server-only module of src/lib (SERVER_ONLY_LIB above).',
+      severity: 'error',
+      from: { path: '^src/components/' },
+      to: { path: SERVER_ONLY_LIB, ...TYPES_ONLY },
+    },
+    {
+      name: 'islands-no-builtins',
+      comment: 'Islands reach the browser: no Node built-ins.',
+      severity: 'error',
+      from: { path: '^src/components/' },
+      to: { dependencyTypes: ['core'], ...TYPES_ONLY },
+    },
+    {
+      name: 'no-circular',
+      comment: 'No import cycles anywhere in src/ (a cycle makes load order decide what is undefined).',
+      severity: 'error',
+      from: { path: '^src/' },
+      to: { circular: true },
+    },
+  ],
+  options: {
+    doNotFollow: { path: 'node_modules' },
+    exclude: { path: '\\.astro/' },
+    // Parse TypeScript with the compiler before compilation, so `import type` is seen and labelled
+    // 'type-only' (the island rules let those through).
+    tsPreCompilationDeps: true,
+    tsConfig: { fileName: 'tsconfig.json' },
+    enhancedResolveOptions: {
+      exportsFields: ['exports'],
+      conditionNames: ['import', 'require', 'node', 'default', 'types'],
+      extensions: ['.ts', '.tsx', '.js', '.mjs', '.cjs', '.jsx', '.d.ts', '.json'],
+    },
+    moduleSystems: ['es6', 'cjs'],
+  },
+};
