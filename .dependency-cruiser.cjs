@@ -9,12 +9,12 @@
  * must never be bundled into an island. A new server adapter in src/lib goes on this list. */
 const SERVER_ONLY_LIB = [
   '^src/lib/(auth|auth-hooks|auth-plugins|auth-secret)\\.ts$', // better-auth + the database + the secret
-  '^src/lib/mail\\.ts$', // nodemailer, SMTP settings
+  '^src/lib/(mail|sent-mail-record)\\.ts$', // nodemailer, SMTP settings, the sent-mail table
   '^src/lib/payment-service\\.ts$', // the payment service's secret key
   '^src/lib/render-pdf\\.ts$', // react-pdf + pdfkit
   '^src/lib/(cut-sheet|claim-slip|pdf-platform|storage)/', // PDF drawing, fonts, files on disk
-  '^src/lib/(api|body|client-address|deployment|security-headers|serve-photo)\\.ts$', // endpoint plumbing
-  '^src/lib/(anonymous-sheets|member-activity|sign-in-limit|reset-limit)\\.ts$', // per-request limits
+  '^src/lib/(api|body|client-address|deployment|security-headers)\\.ts$', // endpoint plumbing
+  '^src/lib/member-activity\\.ts$', // requests in flight, per process
 ];
 
 /** The type-only exceptions for islands: a shape an island only reads. */

@@ -1,7 +1,7 @@
 // Small helpers every API route uses: typed JSON answers, the permission guard, body parsing.
 import { isAPIError } from 'better-auth/api';
 import type { z } from 'zod';
-import { ServiceError } from '@/services/errors';
+import { ServiceError } from './service-error';
 import { BodyRefused, JSON_BODY_LIMIT, readLimited } from './body';
 import { can, type Permission, type Role } from './roles';
 

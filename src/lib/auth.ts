@@ -35,7 +35,7 @@ export const auth = betterAuth({
       }, { shopId: null, kind: 'password-reset' }),
   },
   session: { expiresIn: 60 * 60 * 24 * 7, updateAge: 60 * 60 * 24 },
-  // Failed sign-ins are limited per account in src/lib/sign-in-limit.ts; better-auth's own
+  // Failed sign-ins are limited per account in src/services/sign-in-limit.ts; better-auth's own
   // limiter keys on a client IP header that a loopback deployment never sends.
   rateLimit: { enabled: false },
   // better-auth turns its origin and callback-URL checks off by itself when NODE_ENV is "test",

@@ -2,7 +2,7 @@
 // npm start / dev / the tests; a real SMTP host is only a matter of SMTP_* variables.
 import nodemailer from 'nodemailer';
 import { MAIL_FROM, SMTP_HOST, SMTP_PASS, SMTP_PORT, SMTP_SECURE, SMTP_USER } from 'astro:env/server';
-import { recordSentMail, type MailOrigin } from '@/services/sent-mail';
+import { recordSentMail, type MailOrigin } from './sent-mail-record';
 
 const transport = nodemailer.createTransport({
   host: SMTP_HOST,

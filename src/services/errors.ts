@@ -1,12 +1,3 @@
-// The errors services throw for the API to answer with a status instead of a 500.
-
-/** A refusal with an HTTP meaning: 404 not in this shop, 409 conflict, 422 not allowed as asked,
- * 502 the payment service refused, 503 the payment service could not be reached. */
-export class ServiceError extends Error {
-  constructor(
-    public status: 404 | 409 | 422 | 502 | 503,
-    message: string,
-  ) {
-    super(message);
-  }
-}
+// The errors services throw. The class lives in src/lib/service-error.ts (lib/api.ts answers it,
+// and lib never imports services); services keep importing it from here.
+export { ServiceError } from '@/lib/service-error';

@@ -7,11 +7,8 @@ import { desc, eq } from 'drizzle-orm';
 import { db } from '@/db';
 import { sentMail, type SentMailKind } from '@/db/schema';
 
-/** Who caused a message: a shop (its list shows it) or nobody (account mail: password reset). */
-export interface MailOrigin {
-  shopId: string | null;
-  kind: SentMailKind;
-}
+// Recording lives beside the mailer (lib/mail.ts sends, then records; lib never imports services).
+export { recordSentMail, type MailOrigin } from '@/lib/sent-mail-record';
 
 /** One message in a shop's list. */
 export interface SentMessage {
@@ -22,11 +19,6 @@ export interface SentMessage {
   subject: string;
   /** the text as the capture saved it; null when the capture no longer holds it */
   text: string | null;
-}
-
-/** Records a message the SMTP host accepted. */
-export async function recordSentMail(origin: MailOrigin, mail: { to: string; subject: string; messageId: string }): Promise<void> {
-  await db.insert(sentMail).values({ shopId: origin.shopId, kind: origin.kind, to: mail.to, subject: mail.subject, messageId: mail.messageId });
 }
 
 // The capture saves one JSON file per message, named so that newest sorts last.

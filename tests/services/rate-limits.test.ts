@@ -5,7 +5,7 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, describe, expect, it, vi } from 'vitest';
 import { openDatabase, type Db } from '@/db/open';
 import { rateLimits } from '@/db/schema';
-import { SIGN_IN_RULES, signInLimits } from '@/lib/sign-in-limit';
+import { SIGN_IN_RULES, signInLimits } from '@/services/sign-in-limit';
 import { hitLimits, limitKey, sweepRateLimits, unhitLimits } from '@/services/rate-limits';
 import { createServerDatabase, dropServerDatabase } from '../db/server-database';
 import { db } from '../db/db-mock';

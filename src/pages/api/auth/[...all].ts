@@ -4,8 +4,8 @@ import { auth } from '@/lib/auth';
 import { problem, readBytes } from '@/lib/api';
 import { withBody } from '@/lib/body';
 import { clientOf } from '@/lib/client-address';
-import { limitedResetRequest } from '@/lib/reset-limit';
-import { limitedSignIn } from '@/lib/sign-in-limit';
+import { limitedResetRequest } from '@/services/reset-limit';
+import { limitedSignIn } from '@/services/sign-in-limit';
 import { UNSTORABLE_MESSAGE, unstorablePath } from '@/lib/text';
 
 export const prerender = false;

@@ -4,7 +4,7 @@
 import type { APIRoute } from 'astro';
 import { SHEET_RENDER_TRACE } from 'astro:env/server';
 import { isAllowanceError } from '@/lib/allowance';
-import { anonymousSheetRefusal, inAnonymousQueue } from '@/lib/anonymous-sheets';
+import { anonymousSheetRefusal, inAnonymousQueue } from '@/services/anonymous-sheets';
 import { clientOf } from '@/lib/client-address';
 import { readJson, tooMany } from '@/lib/api';
 import { fieldMessages } from '@/lib/plan-request';

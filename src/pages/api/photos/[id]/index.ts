@@ -1,7 +1,7 @@
 // One fitting photo: the full picture, or removing it.
 import type { APIRoute } from 'astro';
 import { guard, run } from '@/lib/api';
-import { servePhoto } from '@/lib/serve-photo';
+import { servePhoto } from '@/services/serve-photo';
 import { deletePhoto } from '@/services/photos';
 
 export const prerender = false;

@@ -1,6 +1,6 @@
 // A fitting photo's thumbnail (WebP), or a placeholder tile when none could be made (HEIC).
 import type { APIRoute } from 'astro';
-import { servePhoto } from '@/lib/serve-photo';
+import { servePhoto } from '@/services/serve-photo';
 
 export const prerender = false;
 

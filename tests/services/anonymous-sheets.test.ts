@@ -1,7 +1,7 @@
 // Anonymous sheets render one at a time per process, at most 8 waiting: a crowd of strangers queues
 // behind itself, and the queue refuses more rather than growing without end.
 import { describe, expect, it, vi } from 'vitest';
-import { inAnonymousQueue } from '@/lib/anonymous-sheets';
+import { inAnonymousQueue } from '@/services/anonymous-sheets';
 import { memberRequestStarted } from '@/lib/member-activity';
 
 vi.mock('@/db', () => import('../db/db-mock'));

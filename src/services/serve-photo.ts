@@ -1,7 +1,7 @@
 // How a stored photo is answered: its own type, kept private, never sniffed into something else.
 import { guard, problem } from '@/lib/api';
-import { ServiceError } from '@/services/errors';
-import { readPhoto } from '@/services/photos';
+import { ServiceError } from './errors';
+import { readPhoto } from './photos';
 
 /** The photo's bytes for a member of its shop; 404 to everyone else. */
 export async function servePhoto(locals: App.Locals, id: string, size: 'full' | 'thumb'): Promise<Response> {

@@ -4,10 +4,10 @@
 // behind each other and behind members. The render itself runs in the sheet worker
 // (cut-sheet/render-off-thread.ts), so a member's request arriving meanwhile is not held up.
 import pLimit from 'p-limit';
-import type { Rule } from './rate-limit-rules';
-import { tooMany } from './api';
-import { whenMembersIdle } from './member-activity';
-import { hitLimits, limitKey } from '@/services/rate-limits';
+import type { Rule } from '@/lib/rate-limit-rules';
+import { tooMany } from '@/lib/api';
+import { whenMembersIdle } from '@/lib/member-activity';
+import { hitLimits, limitKey } from './rate-limits';
 
 /** At most 30 anonymous sheets per 10 minutes from one address. */
 export const ANONYMOUS_SHEET_RULE = { kind: 'fixed', max: 30, windowMs: 10 * 60_000 } satisfies Rule;

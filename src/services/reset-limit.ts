@@ -1,10 +1,10 @@
 // Password-reset mail, limited in the database (README: Security): at most 3 requests an hour for one
 // e-mail address, whoever asks, and 10 an hour from one client address. The same count whether the
 // account exists or not, so a refusal tells nothing about who has an account.
-import { requestEmail } from './request-email';
-import type { Rule } from './rate-limit-rules';
-import { tooMany } from './api';
-import { hitLimits, limitKey, runCounted, unhitLimits, type Limit } from '@/services/rate-limits';
+import { requestEmail } from '@/lib/request-email';
+import type { Rule } from '@/lib/rate-limit-rules';
+import { tooMany } from '@/lib/api';
+import { hitLimits, limitKey, runCounted, unhitLimits, type Limit } from './rate-limits';
 
 const HOUR = 3_600_000;
 
