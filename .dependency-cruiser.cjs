@@ -2,8 +2,9 @@
 // fails on any error. tests/layers/import-rules.test.ts proves each rule still catches a
 // forbidden import, so a broken pattern here cannot pass silently.
 //
-// Type-only imports (`import type`) are erased before anything runs: the island rules let them
-// through, every other rule counts them like any import.
+// Type-only imports (`import type`) are erased before anything runs, but they still tie a screen to
+// a server module's shapes (Date fields that arrive as strings): every rule counts them, except
+// islands reading a type from a server-only lib module (SERVER_ONLY_LIB) or a built-in.
 
 /** Server-only modules of src/lib: they read secrets, the database, the disk or Node's APIs and
  * must never be bundled into an island. A new server adapter in src/lib goes on this list. */
@@ -21,7 +22,7 @@ const SERVER_ONLY_LIB = [
  * npm-no-pkg is a package found without a package.json listing it, as in the test's fixture). */
 const NPM_PACKAGE = ['npm', 'npm-no-pkg'];
 
-/** The type-only exceptions for islands: a shape an island only reads. */
+/** The type-only exception for islands: a plain shape an island only reads (e.g. PageSize). */
 const TYPES_ONLY = { dependencyTypesNot: ['type-only'] };
 
 module.exports = {
@@ -88,14 +89,15 @@ module.exports = {
         'shared schema in src/lib, dates as strings).',
       severity: 'error',
       from: { path: '^src/components/' },
-      to: { path: '^src/db/', ...TYPES_ONLY },
+      to: { path: '^src/db/' },
     },
     {
       name: 'islands-no-services',
-      comment: 'Islands reach the browser: no service (they call the API through fetch).',
+      comment: 'Islands reach the browser: no service, not even its types (they call the API through fetch; ' +
+        'response shapes live in src/lib, e.g. counter-views.ts, dates as strings).',
       severity: 'error',
       from: { path: '^src/components/' },
-      to: { path: '^src/services/', ...TYPES_ONLY },
+      to: { path: '^src/services/' },
     },
     {
       name: 'islands-no-server-lib',

@@ -8,27 +8,13 @@ import { auth } from '@/lib/auth';
 import type { Actor } from '@/lib/api';
 import type { inviteInput, roleChangeInput } from '@/lib/account-inputs';
 import type { Role } from '@/lib/roles';
+import type { PendingInvite, StaffMember } from '@/lib/staff-views';
 import { ServiceError } from './errors';
 import { audit } from './audit';
 import { memberInShop } from './members';
 
-/** One person on the staff list. */
-export interface StaffMember {
-  id: string;
-  userId: string;
-  name: string;
-  email: string;
-  role: Role;
-  since: string;
-}
-
-/** A pending invitation on the staff list. */
-export interface PendingInvite {
-  id: string;
-  email: string;
-  role: Role;
-  expiresAt: string;
-}
+// The shapes live in lib (the staff screen reads them too); exported here for the services' importers.
+export type { PendingInvite, StaffMember };
 
 /** The shop's members and its pending invitations. */
 export async function listStaff(actor: Actor): Promise<{ members: StaffMember[]; invitations: PendingInvite[] }> {

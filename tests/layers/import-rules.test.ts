@@ -1,7 +1,8 @@
-// The import rules bite: dependency-cruiser runs with the project's own .dependency-cruiser.cjs over a
-// tiny src/ written to a temporary folder, one forbidden import per rule plus allowed ones (type-only
-// island imports, the engine's own files, pricing on the engine), and must report exactly the
-// forbidden ones. A pattern broken in the config, or a rule added without a case here, fails.
+// The import rules bite: dependency-cruiser runs with the project's own .dependency-cruiser.cjs over
+// a tiny src/ written to a temporary folder, one forbidden import per rule plus allowed ones (an
+// island's type-only import of a server-only lib module, the engine's own files, pricing on the
+// engine), and must report exactly the forbidden ones. A pattern broken in the config, or a rule
+// added without a case here, fails.
 import { spawnSync } from 'node:child_process';
 import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -46,10 +47,10 @@ const files: Record<string, string> = {
   'src/db/row.ts': 'export interface Row { at: string }\n',
   'src/components/Island.tsx': [
     "import { db } from '@/db';", // islands-no-db
-    "import type { Row } from '@/db/row';", // allowed: type-only
+    "import type { Row } from '@/db/row';", // islands-no-db: types count too
     "import { thing } from '@/services/thing';", // islands-no-services
     "import { mail } from '@/lib/mail';", // islands-no-server-lib
-    "import type { Session } from '@/lib/auth';", // allowed: type-only
+    "import type { Session } from '@/lib/auth';", // allowed: a type from a server-only lib module
     "import { join } from 'node:path';", // islands-no-builtins
     'export const island = (r: Row, s: Session) => [db, thing, mail, join, r, s];',
   ].join('\n'),
@@ -69,6 +70,7 @@ const expected = [
   'services-not-upward src/services/thing.ts → src/pages/page.ts',
   'db-not-upward src/db/index.ts → src/services/thing.ts',
   'islands-no-db src/components/Island.tsx → src/db/index.ts',
+  'islands-no-db src/components/Island.tsx → src/db/row.ts',
   'islands-no-services src/components/Island.tsx → src/services/thing.ts',
   'islands-no-server-lib src/components/Island.tsx → src/lib/mail.ts',
   'islands-no-builtins src/components/Island.tsx → path',

@@ -1,8 +1,8 @@
 // Notices to the customer: what was sent, what failed and why, retry, and the ready notice button.
-import type { Notice } from '@/db/schema/notices';
+import type { NoticeJson as Notice } from '@/lib/counter-views';
 import { FormMessage } from '@/components/Field';
 import { dateTimeText } from '@/lib/date-text';
-import type { CounterSummary } from '@/services/counter/payments';
+import type { CounterSummaryJson as CounterSummary } from '@/lib/counter-views';
 import { post, useCounterAction, useNotices } from './counter-api';
 
 const STATE: Record<Notice['status'], { text: string; look: string }> = {

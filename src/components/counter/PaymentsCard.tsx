@@ -9,7 +9,7 @@ import { FormMessage } from '@/components/Field';
 import { paymentInput, refundInput } from '@/lib/counter-request';
 import { dateTimeText } from '@/lib/date-text';
 import { formatMoney } from '@/lib/pricing/money';
-import type { CounterSummary } from '@/services/counter/payments';
+import type { CounterSummaryJson as CounterSummary } from '@/lib/counter-views';
 import { Money } from './Money';
 import { MoneyField } from './MoneyField';
 import { post, useCounterAction } from './counter-api';

@@ -9,7 +9,7 @@ import { lineInput, voidLineInput } from '@/lib/counter-request';
 import { dateTimeText } from '@/lib/date-text';
 import { formatMoney } from '@/lib/pricing/money';
 import { PRICE_KEYS, type PriceKey } from '@/lib/pricing/price-keys';
-import type { CounterSummary } from '@/services/counter/payments';
+import type { CounterSummaryJson as CounterSummary } from '@/lib/counter-views';
 import { Money } from './Money';
 import { MoneyField } from './MoneyField';
 import { post, useCounterAction, usePriceList } from './counter-api';

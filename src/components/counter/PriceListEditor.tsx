@@ -9,7 +9,7 @@ import { withQuery } from '@/components/WithQuery';
 import { priceListInput } from '@/lib/counter-request';
 import { fetchJson } from '@/lib/fetch-json';
 import { CURRENCIES, type Currency } from '@/lib/pricing/money';
-import type { PriceListView } from '@/services/counter/prices';
+import type { PriceListView } from '@/lib/counter-views';
 import { MoneyField } from './MoneyField';
 
 type List = z.infer<typeof priceListInput>;

@@ -1,9 +1,9 @@
 // The counter panel's queries and mutations: one place for the URLs and the cache keys.
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Notice } from '@/db/schema/notices';
+import type { NoticeJson as Notice } from '@/lib/counter-views';
 import { fetchJson } from '@/lib/fetch-json';
-import type { PriceListView } from '@/services/counter/prices';
-import type { CounterSummary } from '@/services/counter/payments';
+import type { PriceListView } from '@/lib/counter-views';
+import type { CounterSummaryJson as CounterSummary } from '@/lib/counter-views';
 
 /** The ticket's money: lines, total, payments, balance, link. */
 export function useSummary(ticketId: string) {

@@ -6,7 +6,7 @@ import type { z } from 'zod';
 import { inviteInput } from '@/lib/account-inputs';
 import { fetchJson } from '@/lib/fetch-json';
 import { ROLES, ROLE_LABELS, type Role } from '@/lib/roles';
-import type { PendingInvite, StaffMember } from '@/services/staff';
+import type { PendingInvite, StaffMember } from '@/lib/staff-views';
 import { withQuery } from '@/components/WithQuery';
 import { Field, FormMessage, SubmitButton } from '@/components/Field';
 

@@ -7,7 +7,7 @@ import { checkTaper } from '@/lib/allowance';
 import type { Actor } from '@/lib/api';
 import { letDownFirst } from '@/lib/existing-finish';
 import type { autoLinesInput, lineInput, priceListInput, voidLineInput } from '@/lib/counter-request';
-import { isCurrency, type Currency } from '@/lib/pricing/money';
+import { isCurrency } from '@/lib/pricing/money';
 import { DEFAULT_PRICE_LABELS, PRICE_KEYS } from '@/lib/pricing/price-keys';
 import { isRushableWork, LEAD_REDUCTION_SHARE, priceTicket, reductionNeedsLead, sumMinor, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
 import { can } from '@/lib/roles';
@@ -16,19 +16,10 @@ import { audit } from '../audit';
 import { ServiceError } from '../errors';
 import { isUuid, shopTicket } from '../ticket-core';
 import { withLinksClosed } from './payment-links';
+import type { CounterView, PriceListView } from '@/lib/counter-views';
 
-/** The shop's counter settings as the counter reads them. */
-export interface CounterView {
-  currency: Currency;
-  hours: string;
-  location: string;
-  autoReadyNotice: boolean;
-}
-
-/** The price list page's data: settings and one entry per priced piece of work. */
-export interface PriceListView extends CounterView {
-  items: { key: (typeof PRICE_KEYS)[number]; label: string; amountMinor: number }[];
-}
+// The shapes live in lib (islands read them too); exported here for the services' importers.
+export type { CounterView, PriceListView };
 
 /** The shop's counter settings, the defaults when the lead has not set them. */
 export async function counterSettingsOf(shopId: string, q: Db = db): Promise<CounterView & Pick<CounterSettings, 'autoReadySince'>> {

@@ -3,25 +3,15 @@
 // link; read under the ticket's lock when the caller holds it.
 import { and, asc, desc, eq, inArray, isNotNull, sql } from 'drizzle-orm';
 import { db, type Db } from '@/db';
-import { COUNTED_REFUND_STATUSES, customers, paymentLinks, payments, refunds, tickets, user, type Payment, type PaymentLink, type PriceLine, type Refund, type Ticket } from '@/db/schema';
+import { COUNTED_REFUND_STATUSES, customers, paymentLinks, payments, refunds, tickets, user, type Ticket } from '@/db/schema';
 import type { Actor } from '@/lib/api';
-import type { Currency } from '@/lib/pricing/money';
-import { balanceOf, type Balance } from '@/lib/pricing/price-lines';
+import { balanceOf } from '@/lib/pricing/price-lines';
 import { shopTicket } from '../ticket-core';
 import { counterSettingsOf, linesOf, type CounterView } from './prices';
+import type { CounterSummary } from '@/lib/counter-views';
 
-/** Everything the counter panel shows about a ticket's money. */
-export interface CounterSummary extends Balance {
-  ticket: { id: string; number: number; status: string; dueOn: string | null; customerId: string | null; customerName: string | null; customerEmail: string | null };
-  currency: Currency;
-  /** every line, voided ones included (`voidedAt`, `voidReason`); the total counts the others */
-  lines: PriceLine[];
-  payments: (Payment & { takenByName: string | null })[];
-  refunds: (Refund & { byName: string | null })[];
-  /** credit kept on the customer from earlier tickets (and this one), not yet spent */
-  customerCredit: number;
-  link: { url: string; amountMinor: number; status: PaymentLink['status'] } | null;
-}
+// The shape lives in lib (islands read it too); exported here for the services' importers.
+export type { CounterSummary };
 
 /** The ticket's lines, payments, balance and open payment link. */
 export async function counterSummary(actor: Pick<Actor, 'shopId'>, ticketId: string): Promise<CounterSummary> {

@@ -1,0 +1,40 @@
+// What the counter's routes answer. The services build these shapes (with Date values); islands
+// read them through JSON, as `AsJson<…>` (dates as strings). Here, beside the counter's request
+// schemas, so islands need no import from services or the database (DEVELOPERS.md "Layers").
+import type { Notice, Payment, PaymentLink, PriceLine, Refund } from '@/db/schema';
+import type { AsJson } from './as-json';
+import type { Currency } from './pricing/money';
+import type { PRICE_KEYS } from './pricing/price-keys';
+import type { Balance } from './pricing/price-lines';
+
+/** The shop's counter settings as the counter shows them. */
+export interface CounterView {
+  currency: Currency;
+  hours: string;
+  location: string;
+  autoReadyNotice: boolean;
+}
+
+/** The price list page's data: settings and one entry per priced piece of work. */
+export interface PriceListView extends CounterView {
+  items: { key: (typeof PRICE_KEYS)[number]; label: string; amountMinor: number }[];
+}
+
+/** Everything the counter panel shows about a ticket's money. */
+export interface CounterSummary extends Balance {
+  ticket: { id: string; number: number; status: string; dueOn: string | null; customerId: string | null; customerName: string | null; customerEmail: string | null };
+  currency: Currency;
+  /** every line, voided ones included (`voidedAt`, `voidReason`); the total counts the others */
+  lines: PriceLine[];
+  payments: (Payment & { takenByName: string | null })[];
+  refunds: (Refund & { byName: string | null })[];
+  /** credit kept on the customer from earlier tickets (and this one), not yet spent */
+  customerCredit: number;
+  link: { url: string; amountMinor: number; status: PaymentLink['status'] } | null;
+}
+
+/** The counter summary as an island receives it (dates as strings). */
+export type CounterSummaryJson = AsJson<CounterSummary>;
+
+/** A notice to the customer as an island receives it (dates as strings). */
+export type NoticeJson = AsJson<Notice>;
