@@ -69,6 +69,22 @@ module.exports = {
       to: { path: ['^src/services/', '^src/pages/', '^src/components/', '^src/middleware\\.ts$'] },
     },
     {
+      name: 'shared-lib-not-server',
+      comment:
+        'A src/lib module not on SERVER_ONLY_LIB may reach the browser: at run time it imports no ' +
+        'database module and no server-only lib module (types are erased, so they may come along).',
+      severity: 'error',
+      from: { path: '^src/lib/', pathNot: SERVER_ONLY_LIB },
+      to: { path: ['^src/db/', ...SERVER_ONLY_LIB], dependencyTypesNot: ['type-only'] },
+    },
+    {
+      name: 'shared-lib-no-builtins',
+      comment: 'A src/lib module not on SERVER_ONLY_LIB may reach the browser: no Node built-ins.',
+      severity: 'error',
+      from: { path: '^src/lib/', pathNot: SERVER_ONLY_LIB },
+      to: { dependencyTypes: ['core'], dependencyTypesNot: ['type-only'] },
+    },
+    {
       name: 'db-not-upward',
       comment: 'The database module and its tables import no services, pages, components or middleware.',
       severity: 'error',

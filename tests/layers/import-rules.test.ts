@@ -36,7 +36,14 @@ const files: Record<string, string> = {
     "import { onRequest } from '../middleware';", // lib-not-upward
     'export const helper = [thing, onRequest];',
   ].join('\n'),
-  'src/lib/mail.ts': 'export const mail = 1;\n',
+  'src/lib/shared.ts': [
+    "import { db } from '@/db';", // shared-lib-not-server
+    "import { mail } from './mail';", // shared-lib-not-server
+    "import type { Row } from '@/db/row';", // allowed: types are erased
+    "import { hostname } from 'node:os';", // shared-lib-no-builtins
+    'export const shared = (r: Row) => [db, mail, hostname, r];',
+  ].join('\n'),
+  'src/lib/mail.ts': "import { db } from '@/db';\nexport const mail = db;\n", // allowed: a server adapter on the db
   'src/lib/auth.ts': 'export interface Session { id: string }\n',
   'src/lib/cycle-a.ts': "import { b } from './cycle-b';\nexport const a = () => b;\n", // no-circular
   'src/lib/cycle-b.ts': "import { a } from './cycle-a';\nexport const b = () => a;\n", // no-circular
@@ -66,6 +73,11 @@ const expected = [
   'pricing-is-pure src/lib/pricing/price.ts → crypto',
   'pricing-no-builtins src/lib/pricing/price.ts → crypto',
   'lib-not-upward src/lib/helper.ts → src/services/thing.ts',
+  'shared-lib-not-server src/lib/shared.ts → src/db/index.ts',
+  'shared-lib-not-server src/lib/shared.ts → src/lib/mail.ts',
+  'shared-lib-no-builtins src/lib/shared.ts → os',
+  'shared-lib-no-builtins src/lib/allowance/plan.ts → fs',
+  'shared-lib-no-builtins src/lib/pricing/price.ts → crypto',
   'lib-not-upward src/lib/helper.ts → src/middleware.ts',
   'services-not-upward src/services/thing.ts → src/pages/page.ts',
   'db-not-upward src/db/index.ts → src/services/thing.ts',
