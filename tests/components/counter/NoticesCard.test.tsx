@@ -3,16 +3,16 @@
 import { describe, expect, it } from 'vitest';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { renderToStaticMarkup } from 'react-dom/server';
-import type { Notice } from '@/db/schema/notices';
 import { NoticesCard } from '@/components/counter/NoticesCard';
-import type { CounterSummary } from '@/services/counter/payments';
+// What the island receives: JSON, dates as strings.
+import type { CounterSummaryJson as CounterSummary, NoticeJson as Notice } from '@/lib/counter-views';
 
 const TICKET = '00000000-0000-4000-8000-000000000001';
 
 const summary = { ticket: { id: TICKET, number: 1042, status: 'ready', dueOn: null, customerId: null, customerName: 'Wendel Orrin', customerEmail: 'wendel@example.com' }, currency: 'EUR', lines: [], total: 2400, paid: 0, refunded: 0, due: 2400, credit: 0, payments: [], refunds: [], customerCredit: 0, link: null } as CounterSummary;
 
 function notice(over: Partial<Notice>): Notice {
-  return { id: 'n1', shopId: 's', ticketId: TICKET, kind: 'ready', to: 'wendel@example.com', subject: 'Ready', body: '', status: 'sent', attempts: 1, lastError: null, nextAttemptAt: null, sentAt: new Date('2026-12-01T10:00:00Z'), createdById: 'u', createdAt: new Date('2026-12-01T10:00:00Z'), ...over };
+  return { id: 'n1', shopId: 's', ticketId: TICKET, kind: 'ready', to: 'wendel@example.com', subject: 'Ready', body: '', status: 'sent', attempts: 1, lastError: null, nextAttemptAt: null, sentAt: '2026-12-01T10:00:00Z', createdById: 'u', createdAt: '2026-12-01T10:00:00Z', ...over };
 }
 
 function render(notices: Notice[], canSend = true): string {
@@ -27,7 +27,7 @@ function render(notices: Notice[], canSend = true): string {
 
 describe('NoticesCard', () => {
   it('shows a failed notice with its error, next try and a retry button', () => {
-    const html = render([notice({ status: 'failed', attempts: 2, sentAt: null, lastError: 'connect ECONNREFUSED 127.0.0.1:2525', nextAttemptAt: new Date('2026-12-01T10:02:00Z') })]);
+    const html = render([notice({ status: 'failed', attempts: 2, sentAt: null, lastError: 'connect ECONNREFUSED 127.0.0.1:2525', nextAttemptAt: '2026-12-01T10:02:00Z' })]);
     expect(html).toContain('Ready notice to wendel@example.com: Not delivered');
     expect(html).toContain('2 attempts');
     expect(html).toContain('Last error: connect ECONNREFUSED 127.0.0.1:2525');
