@@ -41,7 +41,8 @@ const files: Record<string, string> = {
     "import { mail } from './mail';", // shared-lib-not-server
     "import type { Row } from '@/db/row';", // allowed: types are erased
     "import { hostname } from 'node:os';", // shared-lib-no-builtins
-    'export const shared = (r: Row) => [db, mail, hostname, r];',
+    "import { SMTP_HOST } from 'astro:env/server';", // shared-lib-not-server
+    'export const shared = (r: Row) => [db, mail, hostname, SMTP_HOST, r];',
   ].join('\n'),
   'src/lib/mail.ts': "import { db } from '@/db';\nexport const mail = db;\n", // allowed: a server adapter on the db
   'src/lib/auth.ts': 'export interface Session { id: string }\n',
@@ -59,7 +60,8 @@ const files: Record<string, string> = {
     "import { mail } from '@/lib/mail';", // islands-no-server-lib
     "import type { Session } from '@/lib/auth';", // allowed: a type from a server-only lib module
     "import { join } from 'node:path';", // islands-no-builtins
-    'export const island = (r: Row, s: Session) => [db, thing, mail, join, r, s];',
+    "import { MAIL_FROM } from 'astro:env/server';", // islands-no-server-lib
+    'export const island = (r: Row, s: Session) => [db, thing, mail, join, MAIL_FROM, r, s];',
   ].join('\n'),
 };
 
@@ -76,6 +78,8 @@ const expected = [
   'shared-lib-not-server src/lib/shared.ts → src/db/index.ts',
   'shared-lib-not-server src/lib/shared.ts → src/lib/mail.ts',
   'shared-lib-no-builtins src/lib/shared.ts → os',
+  'shared-lib-not-server src/lib/shared.ts → astro:env/server',
+  'shared-lib-not-server src/lib/allowance/plan.ts → astro:env/server',
   'shared-lib-no-builtins src/lib/allowance/plan.ts → fs',
   'shared-lib-no-builtins src/lib/pricing/price.ts → crypto',
   'lib-not-upward src/lib/helper.ts → src/middleware.ts',
@@ -85,6 +89,7 @@ const expected = [
   'islands-no-db src/components/Island.tsx → src/db/row.ts',
   'islands-no-services src/components/Island.tsx → src/services/thing.ts',
   'islands-no-server-lib src/components/Island.tsx → src/lib/mail.ts',
+  'islands-no-server-lib src/components/Island.tsx → astro:env/server',
   'islands-no-builtins src/components/Island.tsx → path',
   'no-circular src/lib/cycle-a.ts → src/lib/cycle-b.ts',
 ].sort();
