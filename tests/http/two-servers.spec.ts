@@ -177,7 +177,7 @@ describe.skipIf(!serverUrl)('two app servers on one PostgreSQL', () => {
   });
 
   it('failed sign-ins on A and B add up to one lock', async () => {
-    // SIGN_IN_RULES.pair in src/lib/sign-in-limit.ts: five free tries per account from one address.
+    // SIGN_IN_RULES.pair in src/services/sign-in-limit.ts: five free tries per account from one address.
     const free = 5;
     const statuses: number[] = [];
     for (let i = 0; i < free + 1; i += 1) statuses.push((await signIn(i % 2 ? apps.B : apps.A, DEMO.tailor, 'not-the-password')).status);
