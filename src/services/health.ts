@@ -30,10 +30,11 @@ export async function health(timeoutMs = 3000): Promise<Health> {
   const ours = shipped();
   const base = { kind: handle.kind, shipped: ours.length } as const;
   try {
-    const rows = await Promise.race([
+    // `db` is typed as either driver, so the race loses the result type; cast to the shapes handled.
+    const rows = (await Promise.race([
       db.execute<{ n: number; last: string | null }>(sql`select count(*)::int as n, max(created_at)::text as last from drizzle.__drizzle_migrations`),
       new Promise<never>((_, reject) => setTimeout(() => reject(new Error(`no answer in ${timeoutMs} ms`)), timeoutMs).unref()),
-    ]);
+    ])) as { rows: unknown[] } | unknown[];
     const row = ('rows' in rows ? rows.rows : rows)[0] as { n: number; last: string | null } | undefined;
     const applied = row?.n ?? 0;
     const last = row?.last == null ? null : Number(row.last);

@@ -11,7 +11,6 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { openDatabase } from '@/db/open';
 import { auditEvents as audit, customers, garments, member, organization, tickets, user } from '@/db/schema';
 import { createServerDatabase, dropServerDatabase } from './server-database';
-// @ts-expect-error: a plain .mjs script without types
 import { moveToPostgres } from '../../scripts/move-to-postgres.mjs';
 
 const serverUrl = process.env.TEST_DATABASE_URL;

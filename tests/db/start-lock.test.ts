@@ -32,7 +32,7 @@ describe('the start lock', () => {
     const b = openDatabase({ url });
     try {
       const marks = await twoStarts(a, b);
-      const first = marks[0].split(' ')[0];
+      const first = marks[0]!.split(' ')[0];
       const second = first === 'A' ? 'B' : 'A';
       expect(marks).toEqual([`${first} in`, `${first} out`, `${second} in`, `${second} out`]);
       // Racing migrations under the lock both succeed (the second finds nothing to do).

@@ -8,7 +8,6 @@ import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
-// @ts-expect-error: a plain .mjs script without types
 import { serveProblems } from '../../scripts/serve-settings.mjs';
 
 const dist = process.env.TEST_DIST_DIR || '.test-dist';

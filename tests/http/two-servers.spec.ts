@@ -17,9 +17,7 @@ import { customers, garments, notices, organization, tickets, user } from '@/db/
 import { createServerDatabase, dropServerDatabase } from '../db/server-database';
 import { DEMO, DEMO_PASSWORD } from './client';
 import { sampleJpeg } from './photo-upload';
-// @ts-expect-error: plain .mjs scripts without types
 import { startMailCapture } from '../../scripts/mail-capture.mjs';
-// @ts-expect-error: plain .mjs scripts without types
 import { startS3Fake } from '../../scripts/s3-fake.mjs';
 
 const serverUrl = process.env.TEST_DATABASE_URL;

@@ -8,7 +8,6 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DiskStorage } from '@/lib/storage/disk-storage';
 import { S3Storage, s3FromSettings } from '@/lib/storage/s3-storage';
 import type { Storage } from '@/lib/storage/storage';
-// @ts-expect-error: a plain .mjs script without types
 import { startS3Fake } from '../../../scripts/s3-fake.mjs';
 
 const dirs: string[] = [];
@@ -33,7 +32,7 @@ afterAll(async () => {
 });
 
 describe.each(['disk', 's3'])('%s storage', (kind) => {
-  const store = () => stores[kind]();
+  const store = () => stores[kind]!();
 
   it('gives back what was put, byte for byte, and the last put wins', async () => {
     const s = store();
