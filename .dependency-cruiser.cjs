@@ -4,7 +4,8 @@
 //
 // Type-only imports (`import type`) are erased before anything runs, but they still tie a screen to
 // a server module's shapes (Date fields that arrive as strings): every rule counts them, except
-// islands reading a type from a server-only lib module (SERVER_ONLY_LIB) or a built-in.
+// that an island may read a type from a server-only lib module (SERVER_ONLY_LIB), and a shared lib
+// module a type from db/ or a server-only module (e.g. lib/counter-views.ts reads row types).
 
 /** Server-only modules of src/lib: they read secrets, the database, the disk or Node's APIs and
  * must never be bundled into an island. A new server adapter in src/lib goes on this list. */
