@@ -158,7 +158,7 @@ describe('the queue for the lead', () => {
     for (const text of await rows.allInnerTexts()) expect(text).toContain('Overdue');
 
     await page.getByLabel('Due', { exact: true }).selectOption('all');
-    await page.getByRole('button', { name: 'Ticket' }).click();
+    await page.getByRole('button', { name: 'Ticket no.' }).click();
     await expect.poll(async () => {
       const numbers = (await page.getByTestId('queue-row').locator('td:nth-child(3)').allInnerTexts()).map((t) => Number(t.replace('PH ', '')));
       return numbers.every((n, i) => i === 0 || numbers[i - 1]! <= n);
