@@ -114,7 +114,7 @@ describe('story 3: an apprentice works the queue', () => {
     const box = await tap.boundingBox();
     expect(box!.height).toBeGreaterThanOrEqual(44);
     await tap.click();
-    await expect.poll(() => row.locator('td').nth(5).textContent()).toBe('Turned and stitched');
+    await expect.poll(() => row.locator('td').nth(5).getByTestId('stage-name').textContent()).toBe('Turned and stitched');
 
     await row.getByRole('link', { name: 'Navy suit trousers' }).click();
     await page.waitForURL(/\/garments\/[0-9a-f-]{36}$/);

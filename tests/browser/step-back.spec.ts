@@ -38,7 +38,7 @@ describe('stepping back after a wrong tap', () => {
     await mark.focus();
     await page.keyboard.press('Enter');
     await row.getByRole('status').getByText('Marked Chalk-marked.').waitFor();
-    await expect.poll(() => row.locator('td').nth(5).textContent()).toBe('Chalk-marked');
+    await expect.poll(() => row.locator('td').nth(5).getByTestId('stage-name').textContent()).toBe('Chalk-marked');
     const undo = row.getByRole('button', { name: `Undo: step PH ${number} Heather tweed trousers back to Received` });
     await undo.waitFor();
     expect((await undo.boundingBox())!.height).toBeGreaterThanOrEqual(44);
@@ -47,7 +47,7 @@ describe('stepping back after a wrong tap', () => {
     await page.screenshot({ path: 'test-results/step-back-undo.png' });
     await page.keyboard.press('Enter');
     await row.getByRole('status').getByText('Stepped back to Received.').waitFor();
-    await expect.poll(() => row.locator('td').nth(5).textContent()).toBe('Received');
+    await expect.poll(() => row.locator('td').nth(5).getByTestId('stage-name').textContent()).toBe('Received');
     expect(await undo.count()).toBe(0);
 
     // On the garment page: a tap, then "Step back" a moment later.

@@ -9,7 +9,7 @@ export function StageMarks({ status, label }: { status: GarmentStep; label: stri
       <span aria-hidden="true" data-testid="stage-marks" className="font-normal tracking-tight text-muted whitespace-nowrap">
         {GARMENT_STEPS.map((_, i) => (i <= at ? '●' : '○')).join('')}
       </span>
-      <span>{label}</span>
+      <span data-testid="stage-name">{label}</span>
     </span>
   );
 }
