@@ -11,6 +11,7 @@ vi.mock('@/db', () => import('../db/db-mock'));
 const { handle } = await import('@/db');
 const { moveGarment } = await import('@/services/garments');
 const { saveBenchSettings } = await import('@/services/shop-settings');
+const { addLine } = await import('@/services/counter/prices');
 const { garmentSheet, queueSheets, NO_FITTING } = await import('@/services/cut-sheets');
 const { ServiceError } = await import('@/services/errors');
 const { planCuff, planHem } = await import('@/lib/allowance');
@@ -205,8 +206,10 @@ describe('the batch for the queue', () => {
     }
     await garment(shop, { description: 'Unfitted pair', dueOn: '2026-12-01' });
     // A collected garment is not in the open queue.
-    const { g: done } = await garment(shop, { description: 'Collected pair', dueOn: '2026-11-20' });
+    const { g: done, ticket: doneTicket } = await garment(shop, { description: 'Collected pair', dueOn: '2026-11-20' });
     await fit(shop, done.id, 'cuff', { cuffDepth: '2', available: '7' });
+    // A ticket is handed over only priced (the counter's rule): this one goes out with no charge.
+    await addLine(shop.counter, doneTicket.id, { source: 'no-charge', reason: 'batch fixture' });
     for (const step of ['marked', 'cut', 'stitched', 'pressed', 'ready', 'collected'] as const) await moveGarment(shop.lead, done.id, step);
   });
 
