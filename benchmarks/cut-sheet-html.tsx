@@ -6,7 +6,7 @@ import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { renderToStaticMarkup } from 'react-dom/server';
-import { guideStrips, INCH_PT, MM25_PT } from '../src/lib/cut-sheet/chalk-guide';
+import { checkRuler, guideStrips } from '../src/lib/cut-sheet/chalk-guide';
 import { sheetContent, type SheetLegGroup } from '../src/lib/cut-sheet/content';
 import { legGeometry } from '../src/lib/cut-sheet/leg-geometry';
 import { qrPath } from '../src/lib/cut-sheet/qr';
@@ -77,6 +77,7 @@ function Leg({ g }: { g: SheetLegGroup }) {
 function Sheet({ data }: { data: CutSheetData }) {
   const c = sheetContent(data);
   const strips = guideStrips(c.groups, data.unit, 792 - 56 - 300);
+  const ruler = checkRuler(data.unit);
   const qr = data.link ? qrPath(data.link) : null;
   const w = strips.length > 1 ? 72 : 108;
   return (
@@ -94,15 +95,16 @@ function Sheet({ data }: { data: CutSheetData }) {
           {c.groups.map((g, i) => <Leg key={i} g={g} />)}
           <h2>AT THE BENCH, IN THIS ORDER</h2>
           {c.steps.map((b, i) => <ol key={i}>{b.items.map((t, j) => <li key={j}>{t}</li>)}</ol>)}
-          <h2>TAKE CARE</h2>
+          <h2>MIND YOUR HANDS</h2>
           <ul style={{ fontSize: '7.5pt' }}>{c.cautions.map((t, i) => <li key={i}>{t}</li>)}</ul>
         </main>
         <aside style={{ width: '162pt', borderLeft: '0.75pt solid #999', paddingLeft: 8 }}>
           <h2>CHALK GUIDE 1:1</h2>
-          <div style={{ display: 'flex', justifyContent: 'space-between', textAlign: 'center' }}>
-            <div><div style={{ width: `${INCH_PT}pt`, height: `${INCH_PT}pt`, background: '#a0a0a0' }} /><b>1 in</b></div>
-            <div><div style={{ width: `${MM25_PT}pt`, height: `${MM25_PT}pt`, background: '#a0a0a0' }} /><b>25 mm</b></div>
-          </div>
+          <svg width={`${ruler.length + 8}pt`} height="26pt" viewBox={`0 0 ${ruler.length + 8} 26`} style={{ display: 'block', background: '#f1efe9' }}>
+            <path d={`M0 0.3h${ruler.length + 8}`} stroke="#111" strokeWidth={0.6} />
+            <path d={ruler.ticks.map((t) => `M${t.x + 4} 0v${t.len}`).join('')} stroke="#111" strokeWidth={0.6} />
+            {ruler.ticks.filter((t) => t.label !== null).map((t, i) => <text key={i} x={t.x + 4} y={22} fontSize={9} fontWeight={700} textAnchor="middle">{t.label}</text>)}
+          </svg>
           {c.guideNote.map((n, i) => <p key={i} style={{ fontSize: '7.5pt', margin: '2pt 0' }}>{n}</p>)}
           <div style={{ display: 'flex', justifyContent: 'space-between' }}>
             {strips.map((st, i) => (

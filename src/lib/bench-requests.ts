@@ -5,9 +5,6 @@ import { text } from './text';
 import { EXISTING_FINISHES } from './existing-finish';
 import { GARMENT_STEPS } from './garment-steps';
 
-// Kept here for the services; the islands import it from garment-steps, which carries no zod.
-export { ticketLabel } from './garment-steps';
-
 const blankToNull = (v: string | null | undefined) => (v === '' || v === undefined ? null : v);
 
 /** A due date as typed in a date input: YYYY-MM-DD, or blank for none. */

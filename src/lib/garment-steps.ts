@@ -42,8 +42,3 @@ export function leastAdvanced(steps: readonly GarmentStep[]): GarmentStep {
 export function stepLabel(step: GarmentStep, renames: Partial<Record<GarmentStep, string>> = {}): string {
   return renames[step]?.trim() || DEFAULT_STEP_LABELS[step];
 }
-
-/** A ticket's number as said at the counter. */
-export function ticketLabel(number: number): string {
-  return `T-${number}`;
-}

@@ -4,6 +4,7 @@
 import { dueState } from './due-date';
 import type { QueueRow } from './bench-types';
 import type { GarmentStep } from './garment-steps';
+import { ticketSearchNumber } from './ticket-number';
 
 /** What the queue is narrowed to. */
 export interface QueueFilter {
@@ -28,8 +29,10 @@ export function matchesQueue(row: QueueRow, f: QueueFilter, userId: string, toda
   const due = dueState(row.dueOn, today);
   if (f.due === 'overdue' && due !== 'overdue') return false;
   if (f.due === 'today' && due !== 'today' && due !== 'overdue') return false;
-  const q = f.search.trim().toLowerCase().replace(/^t-?/, '');
-  if (q && !String(row.ticketNumber).includes(q) && !(row.customerName ?? '').toLowerCase().includes(f.search.trim().toLowerCase())) return false;
+  // A ticket number as the shop writes it ("PH 1001"), bare, or in the old "T-1001" form; else a name.
+  const q = f.search.trim().toLowerCase();
+  const n = ticketSearchNumber(q);
+  if (q && !(n !== null && String(row.ticketNumber).includes(n)) && !(row.customerName ?? '').toLowerCase().includes(q)) return false;
   return true;
 }
 

@@ -8,7 +8,8 @@ import { customers, garments, tickets, user, type Garment } from '@/db/schema';
 import { isAllowanceError, withUnitsNamed } from '@/lib/allowance';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import type { Actor } from '@/lib/api';
-import { scaleUnit, ticketLabel } from '@/lib/bench-requests';
+import { scaleUnit } from '@/lib/bench-requests';
+import { ticketLabel } from '@/lib/ticket-number';
 import { buildCutSheet, refusedFields, type LegOrder, type SheetHeader } from '@/lib/cut-sheet/build';
 import { renderInPool, streamInPool } from '@/lib/cut-sheet/render-off-thread';
 import type { CutSheetData, PageSize, Side } from '@/lib/cut-sheet/types';
@@ -127,7 +128,7 @@ function headerOf(actor: Actor, g: Garment, names: HeaderNames, baseUrl: string,
   const what = g.description ?? 'Trousers';
   return {
     shop: actor.shopName,
-    ticket: ticketLabel(names.ticketNumber),
+    ticket: ticketLabel(names.ticketNumber, actor.shopName),
     // The customer's name beside the garment matches the sheet to the bag it travels with.
     garment: names.customerName ? `${what} (${names.customerName})` : what,
     due: g.dueOn,
@@ -175,7 +176,7 @@ export async function garmentSheet(actor: Actor, garmentId: string, opts: SheetO
   const names = await namesOf(g);
   const data = sheetOf(actor, g, await legsOf(g.id), names, baseUrl, scale);
   const { bytes, by } = await renderInPool(data);
-  return { bytes, by, filename: `${ticketLabel(names.ticketNumber)}-${slug(g.description ?? 'trousers')}.pdf` };
+  return { bytes, by, filename: `${slug(ticketLabel(names.ticketNumber, actor.shopName))}-${slug(g.description ?? 'trousers')}.pdf` };
 }
 
 /** The queue as filtered on screen, one sheet per garment (garments without a fitting listed on a last page), streamed as it is drawn. */
@@ -196,7 +197,7 @@ export async function queueSheetsStream(actor: Actor, filter: QueueFilter, today
       sheets.push(sheetOf(actor, g, fittings.get(g.id) ?? [], row, baseUrl, scale));
     } catch (e) {
       if (!(e instanceof ServiceError)) throw e;
-      skipped.push(`${ticketLabel(row.ticketNumber)} ${row.description}: ${e.message === NO_FITTING ? 'no fitting measurements yet' : e.message}`);
+      skipped.push(`${ticketLabel(row.ticketNumber, actor.shopName)} ${row.description}: ${e.message === NO_FITTING ? 'no fitting measurements yet' : e.message}`);
     }
   }
   if (sheets.length === 0) {

@@ -14,6 +14,7 @@ import { ServiceError } from './errors';
 import { assertReadyToHandOver } from './counter/hand-over';
 import { onGarmentMoved } from './garment-events';
 import { isUuid, lockTicket, withTicketLock } from './ticket-core';
+import { ticketLabel } from '@/lib/ticket-number';
 
 // The ticket core, here too for the services that already import it from here.
 export { isUuid, lockTicket, withTicketLock };
@@ -155,7 +156,7 @@ export async function addGarment(actor: Actor, ticketId: string, input: z.output
   if (!isUuid(ticketId)) throw new ServiceError(404, 'No such ticket in this shop.');
   const [t] = await db.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
   if (!t) throw new ServiceError(404, 'No such ticket in this shop.');
-  if (t.status === 'collected') throw new ServiceError(422, `Ticket T-${t.number} is collected: open a new ticket.`);
+  if (t.status === 'collected') throw new ServiceError(422, `Ticket ${ticketLabel(t.number, actor.shopName)} is collected: open a new ticket.`);
   await checkAssignee(actor, input.assigneeId);
   const position = (await garmentsOfTicket(actor.shopId, ticketId)).length;
   return withTicketLock(actor.shopId, ticketId, async (tx) => {

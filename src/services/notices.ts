@@ -13,6 +13,7 @@ import { isUuid } from './garments';
 import { summaryOf } from './counter/payments';
 import { counterSettingsOf } from './counter/prices';
 import { shopTicket } from './ticket-core';
+import { ticketLabel } from '@/lib/ticket-number';
 
 /** Automatic retries before a notice waits for someone to press "retry". */
 export const MAX_AUTO_ATTEMPTS = 5;
@@ -33,7 +34,7 @@ export async function readyMessage(shopId: string, ticketId: string): Promise<{ 
   const settings = await counterSettingsOf(shopId);
   const summary = await summaryOf(await shopTicket({ shopId }, ticketId), settings);
   const [shop] = await db.select({ name: organization.name }).from(organization).where(eq(organization.id, shopId));
-  const number = `T-${summary.ticket.number}`;
+  const number = ticketLabel(summary.ticket.number, shop?.name ?? '');
   const due = summary.due > 0 ? `Balance due at pickup: ${formatMoney(summary.due, summary.currency)}.` : 'Nothing is left to pay: the ticket is paid in full.';
   const pay = summary.due > 0 && summary.link?.status === 'open' ? [`You may pay ahead online: ${summary.link.url}`] : [];
   const body = [

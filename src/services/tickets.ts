@@ -12,6 +12,7 @@ import { ServiceError } from './errors';
 import { onGarmentMoved } from './garment-events';
 import { customerCard, garmentVisibleTo, isUuid, refreshTicketAssignee, refreshTicketStatus, staffOf, summaries, withTicketLock } from './garments';
 import { pickUp } from './counter/hand-over';
+import { ticketLabel } from '@/lib/ticket-number';
 
 /** A ticket as listed: the row plus who it is for and how many garments it holds. */
 export type TicketListItem = Ticket & { customerName: string | null; garmentCount: number };
@@ -100,7 +101,7 @@ export async function moveTicket(actor: Actor, id: string, to: GarmentStep): Pro
   if (!isUuid(id)) throw new ServiceError(404, 'No such ticket in this shop.');
   const [visible] = await db.select().from(tickets).where(and(eq(tickets.id, id), visibleTo(actor)));
   if (!visible) throw new ServiceError(404, 'No such ticket in this shop.');
-  assertNextStep(visible, to);
+  assertNextStep(visible, to, actor.shopName);
   const allowed = to === 'collected' ? can(actor.role, ['tickets', 'pickup']) : can(actor.role, ['tickets', 'advance']);
   if (!allowed) throw new ServiceError(422, `Your role (${actor.role}) may not move a ticket to ${stepLabel(to)}.`);
   if (to === 'collected') {
@@ -108,12 +109,12 @@ export async function moveTicket(actor: Actor, id: string, to: GarmentStep): Pro
   } else {
     const moved = await withTicketLock(actor.shopId, id, async (tx, ticket) => {
       // Checked again under the lock: someone may have moved the ticket since it was read.
-      assertNextStep(ticket, to);
+      assertNextStep(ticket, to, actor.shopName);
       const behind = await tx.select().from(garments).where(and(eq(garments.shopId, actor.shopId), eq(garments.ticketId, id), eq(garments.status, ticket.status)));
       if (!can(actor.role, ['tickets', 'read-all']) && behind.some((g) => g.assigneeId && g.assigneeId !== actor.userId)) {
-        throw new ServiceError(422, `Some garments of T-${ticket.number} are someone else's: move yours one by one.`);
+        throw new ServiceError(422, `Some garments of ${ticketLabel(ticket.number, actor.shopName)} are someone else's: move yours one by one.`);
       }
-      if (behind.length === 0) throw new ServiceError(422, `Ticket T-${ticket.number} has no garments yet: add one first.`);
+      if (behind.length === 0) throw new ServiceError(422, `Ticket ${ticketLabel(ticket.number, actor.shopName)} has no garments yet: add one first.`);
       const rows = await tx
         .update(garments)
         .set({ status: to, updatedAt: new Date() })
@@ -131,9 +132,9 @@ export async function moveTicket(actor: Actor, id: string, to: GarmentStep): Pro
   return row!;
 }
 
-function assertNextStep(ticket: Ticket, to: GarmentStep): void {
+function assertNextStep(ticket: Ticket, to: GarmentStep, shopName: string): void {
   const next = nextStep(ticket.status);
   if (next !== to) {
-    throw new ServiceError(422, next ? `Ticket T-${ticket.number} is ${stepLabel(ticket.status)}: it can only move on to ${stepLabel(next)}.` : `Ticket T-${ticket.number} has been collected.`);
+    throw new ServiceError(422, next ? `Ticket ${ticketLabel(ticket.number, shopName)} is ${stepLabel(ticket.status)}: it can only move on to ${stepLabel(next)}.` : `Ticket ${ticketLabel(ticket.number, shopName)} has been collected.`);
   }
 }

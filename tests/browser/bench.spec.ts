@@ -27,7 +27,7 @@ describe('story 1: a tailor takes in a garment and plans both legs', () => {
     await page.getByRole('button', { name: 'Open ticket' }).click();
     await page.waitForURL(/\/tickets\/[0-9a-f-]{36}$/);
     await ready(page);
-    expect(await page.getByTestId('ticket-page-number').textContent()).toMatch(/^T-\d{4}$/);
+    expect(await page.getByTestId('ticket-page-number').textContent()).toMatch(/^PH \d{4}$/);
     await page.getByText('Perpetua Lindqvist').first().waitFor();
     await page.screenshot({ path: 'test-results/ticket.png', fullPage: true });
 
@@ -103,18 +103,18 @@ describe('story 3: an apprentice works the queue', () => {
     // Only their own and unassigned work: the tailor's charcoal trousers are not listed.
     expect(await page.getByText('Charcoal wool trousers').count()).toBe(0);
 
-    await page.getByLabel('Customer or ticket').fill('T-1003');
+    await page.getByLabel('Customer or ticket').fill('PH 1003');
     await expect.poll(() => page.getByTestId('queue-row').count()).toBe(1);
     const row = page.getByTestId('queue-row');
     await row.getByText('Navy suit trousers').waitFor();
     await row.getByText('Overdue').waitFor();
     await page.screenshot({ path: 'test-results/queue-apprentice.png', fullPage: true });
 
-    const tap = row.getByRole('button', { name: /Mark T-1003 Navy suit trousers Turned and stitched/ });
+    const tap = row.getByRole('button', { name: /Mark PH 1003 Navy suit trousers Turned and stitched/ });
     const box = await tap.boundingBox();
     expect(box!.height).toBeGreaterThanOrEqual(44);
     await tap.click();
-    await expect.poll(() => row.locator('td').nth(5).textContent()).toBe('Turned and stitched');
+    await expect.poll(() => row.locator('td').nth(5).getByTestId('stage-name').textContent()).toBe('Turned and stitched');
 
     await row.getByRole('link', { name: 'Navy suit trousers' }).click();
     await page.waitForURL(/\/garments\/[0-9a-f-]{36}$/);
@@ -158,9 +158,9 @@ describe('the queue for the lead', () => {
     for (const text of await rows.allInnerTexts()) expect(text).toContain('Overdue');
 
     await page.getByLabel('Due', { exact: true }).selectOption('all');
-    await page.getByRole('button', { name: 'Ticket' }).click();
+    await page.getByRole('button', { name: 'Ticket no.' }).click();
     await expect.poll(async () => {
-      const numbers = (await page.getByTestId('queue-row').locator('td:nth-child(3)').allInnerTexts()).map((t) => Number(t.replace('T-', '')));
+      const numbers = (await page.getByTestId('queue-row').locator('td:nth-child(3)').allInnerTexts()).map((t) => Number(t.replace('PH ', '')));
       return numbers.every((n, i) => i === 0 || numbers[i - 1]! <= n);
     }).toBe(true);
     await page.screenshot({ path: 'test-results/queue-lead.png', fullPage: true });
@@ -172,7 +172,7 @@ describe('a tapered leg at the bench', () => {
   it('shows the taper check and the front-pin note from the saved fitting', async () => {
     const page = await tabletPage(browser());
     await signInAs(page, 'tailor', '/queue');
-    await page.getByLabel('Customer or ticket').fill('T-1004');
+    await page.getByLabel('Customer or ticket').fill('1004');
     await page.getByRole('link', { name: 'Charcoal wool trousers' }).click();
     await page.waitForURL(/\/garments\/[0-9a-f-]{36}$/);
     await ready(page);

@@ -90,7 +90,7 @@ describe('a ticket across the counter, from deposit to a paid pickup', () => {
       expect(moved.status, JSON.stringify(moved.body)).toBe(200);
     }
     const mail = await waitForMail(customerEmail, 15_000);
-    expect(mail.subject).toMatch(/^Ready to collect: ticket T-\d+$/);
+    expect(mail.subject).toMatch(/^Ready to collect: ticket PH \d+$/);
     expect(mail.text).toContain('Balance due at pickup: €25.00.');
     expect(mail.text).toContain('Opening hours: Tue–Fri 9:00–18:00, Sat 9:00–13:00');
     expect(firstLink(mail)).toBe(payLink);

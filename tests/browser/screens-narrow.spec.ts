@@ -105,11 +105,11 @@ describe('the queue on an upright tablet and a phone', () => {
     });
     await page.reload();
     await ready(page);
-    await page.getByLabel('Customer or ticket').fill(`T-${number}`);
+    await page.getByLabel('Customer or ticket').fill(`PH ${number}`);
     await expect.poll(() => page.getByTestId('queue-row').count()).toBe(1);
     const row = page.getByTestId('queue-row');
     const garment = row.getByRole('link', { name: 'Dove grey flannel trousers' });
-    const mark = row.getByRole('button', { name: `Mark T-${number} Dove grey flannel trousers Chalk-marked` });
+    const mark = row.getByRole('button', { name: `Mark PH ${number} Dove grey flannel trousers Chalk-marked` });
 
     const [g768, m768, r768] = await Promise.all([garment.boundingBox(), mark.boundingBox(), row.boundingBox()]);
     // Beside: the button starts right of the garment's name, inside the card, at the same height.
@@ -119,7 +119,7 @@ describe('the queue on an upright tablet and a phone', () => {
     expect(m768!.height).toBeGreaterThanOrEqual(44);
 
     await mark.click();
-    const undo = row.getByRole('button', { name: `Undo: step T-${number} Dove grey flannel trousers back to Received` });
+    const undo = row.getByRole('button', { name: `Undo: step PH ${number} Dove grey flannel trousers back to Received` });
     await undo.waitFor();
     for (const width of [768, 390]) {
       await page.setViewportSize({ width, height: 900 });

@@ -29,25 +29,25 @@ describe('stepping back after a wrong tap', () => {
     const { number, garmentId } = await freshTicket(page, 'Heather tweed trousers');
     await page.reload();
     await ready(page);
-    await page.getByLabel('Customer or ticket').fill(`T-${number}`);
+    await page.getByLabel('Customer or ticket').fill(`PH ${number}`);
     await expect.poll(() => page.getByTestId('queue-row').count()).toBe(1);
     const row = page.getByTestId('queue-row');
 
     // The tap, by keyboard: focus stays on the button, Undo is the next stop.
-    const mark = row.getByRole('button', { name: `Mark T-${number} Heather tweed trousers Chalk-marked` });
+    const mark = row.getByRole('button', { name: `Mark PH ${number} Heather tweed trousers Chalk-marked` });
     await mark.focus();
     await page.keyboard.press('Enter');
     await row.getByRole('status').getByText('Marked Chalk-marked.').waitFor();
-    await expect.poll(() => row.locator('td').nth(5).textContent()).toBe('Chalk-marked');
-    const undo = row.getByRole('button', { name: `Undo: step T-${number} Heather tweed trousers back to Received` });
+    await expect.poll(() => row.locator('td').nth(5).getByTestId('stage-name').textContent()).toBe('Chalk-marked');
+    const undo = row.getByRole('button', { name: `Undo: step PH ${number} Heather tweed trousers back to Received` });
     await undo.waitFor();
     expect((await undo.boundingBox())!.height).toBeGreaterThanOrEqual(44);
     await page.keyboard.press('Tab');
-    expect(await page.evaluate(() => document.activeElement?.getAttribute('aria-label'))).toBe(`Undo: step T-${number} Heather tweed trousers back to Received`);
+    expect(await page.evaluate(() => document.activeElement?.getAttribute('aria-label'))).toBe(`Undo: step PH ${number} Heather tweed trousers back to Received`);
     await page.screenshot({ path: 'test-results/step-back-undo.png' });
     await page.keyboard.press('Enter');
     await row.getByRole('status').getByText('Stepped back to Received.').waitFor();
-    await expect.poll(() => row.locator('td').nth(5).textContent()).toBe('Received');
+    await expect.poll(() => row.locator('td').nth(5).getByTestId('stage-name').textContent()).toBe('Received');
     expect(await undo.count()).toBe(0);
 
     // On the garment page: a tap, then "Step back" a moment later.

@@ -69,7 +69,7 @@ describe('GET /api/garments/[id]/sheet', () => {
 describe('the batch and the calculator', () => {
   it("GET /api/queue/sheets prints the step on the cuffed pair's page", async () => {
     const { number } = await takenIn('Moss cord trousers', 'cuff', 'Ysolde Brackwater');
-    const file = await pdf(`/api/queue/sheets?search=T-${number}`, cookie.lead);
+    const file = await pdf(`/api/queue/sheets?search=PH%20${number}`, cookie.lead);
     expect(pageInfo(file).pages).toBe(1);
     expect(flatText(file)).toContain('Moss cord trousers (Ysolde Brackwater)');
     expect(flatText(file)).toContain(LET_DOWN_OLD_CUFF);

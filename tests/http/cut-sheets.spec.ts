@@ -43,7 +43,7 @@ describe("the demo garment's cut sheet", () => {
     expect(r.type).toBe('application/pdf');
     // A member's sheet is drawn in the sheet pool too, off the thread serving requests.
     expect(r.headers.get('x-rendered-by')).toBe('worker');
-    expect(r.headers.get('content-disposition')).toMatch(/^inline; filename="T-\d+-navy-suit-trousers\.pdf"$/);
+    expect(r.headers.get('content-disposition')).toMatch(/^inline; filename="ph-\d+-navy-suit-trousers\.pdf"$/);
     const file = pdfFile(r.bytes);
     const text = layoutText(file);
     // The legs differ (5 in and 4 3/4 in of cloth): each is printed with its own plan.
@@ -160,11 +160,11 @@ describe("the morning's batch", () => {
 
   it('narrows by search like the screen: one ticket, one sheet', async () => {
     const navyRow = ((await call('GET', '/api/garments', { cookie: cookie.lead })).body as QueueRow[]).find((g) => g.id === navy)!;
-    const r = await raw(`/api/queue/sheets?search=T-${navyRow.ticketNumber}&unit=cm`, cookie.tailor);
+    const r = await raw(`/api/queue/sheets?search=PH%20${navyRow.ticketNumber}&unit=cm`, cookie.tailor);
     expect(r.status).toBe(200);
     const file = pdfFile(r.bytes);
     expect(pageInfo(file).pages).toBe(1);
-    expect(flatText(file)).toContain(`Ticket T-${navyRow.ticketNumber}`);
+    expect(flatText(file)).toContain(`Ticket PH ${navyRow.ticketNumber}`);
     expect(flatText(file)).toContain('All lengths in centimetres.');
   });
 

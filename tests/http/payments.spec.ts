@@ -168,7 +168,7 @@ describe('ready notice through the mail capture', () => {
     expect(sent.status).toBe(201);
     expect(sent.body.status).toBe('sent');
     const mail = await waitForMail(email);
-    expect(mail.subject).toMatch(/^Ready to collect: ticket T-\d+$/);
+    expect(mail.subject).toMatch(/^Ready to collect: ticket PH \d+$/);
     expect(mail.text).toContain('Balance due at pickup: €24.00.');
     expect(mail.text).toContain('Opening hours: Tue–Fri 9:00–18:00, Sat 9:00–13:00');
     const list = await call('GET', `/api/tickets/${id}/notices`, { cookie: counter });

@@ -44,8 +44,8 @@ describe('filterQueue', () => {
     expect(ids(filterQueue(ROWS, { ...DEFAULT_QUEUE_FILTER, due: 'overdue' }, ME, '2026-11-30'))).toEqual(['e']);
   });
 
-  it('searches the ticket number (with or without T-) and the customer name', () => {
-    expect(ids(filterQueue(ROWS, { ...DEFAULT_QUEUE_FILTER, search: 'T-1003' }, ME, TODAY))).toEqual(['c']);
+  it('searches the ticket number (as the shop writes it, bare, or the old T- form) and the customer name', () => {
+    for (const search of ['PH 1003', 'ph1003', '1003', 'T-1003']) expect(ids(filterQueue(ROWS, { ...DEFAULT_QUEUE_FILTER, search }, ME, TODAY))).toEqual(['c']);
     expect(ids(filterQueue(ROWS, { ...DEFAULT_QUEUE_FILTER, search: 'quen' }, ME, TODAY))).toEqual(['a']);
   });
 

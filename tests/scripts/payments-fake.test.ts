@@ -17,7 +17,7 @@ afterAll(() => fake?.close());
 
 const session = (amount: number) => ({
   mode: 'payment' as const,
-  line_items: [{ quantity: 1, price_data: { currency: 'eur', unit_amount: amount, product_data: { name: 'Balance for T-1001' } } }],
+  line_items: [{ quantity: 1, price_data: { currency: 'eur', unit_amount: amount, product_data: { name: 'Balance for PH 1001' } } }],
   success_url: 'http://127.0.0.1/ok',
 });
 

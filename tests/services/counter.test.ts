@@ -241,7 +241,7 @@ describe('ready notices', () => {
     const sent = await notice.sendReadyNotice(a.counter, t.id);
     expect([sent.status, sent.attempts]).toEqual(['sent', 1]);
     const mail = captured().find((m) => m.to.includes('orrin.ready@example.com'))!;
-    expect(mail.subject).toBe(`Ready to collect: ticket T-${t.number}`);
+    expect(mail.subject).toBe(`Ready to collect: ticket FA ${t.number}`);
     expect(mail.text).toContain('Balance due at pickup: €16.00.');
     expect(mail.text).toContain('Opening hours: Tue–Sat 9:00–17:30');
     await expect(notice.sendReadyNotice(a.counter, t.id)).rejects.toMatchObject({ status: 409 });

@@ -77,7 +77,7 @@ describe('a saved fitting the engine refuses', () => {
   it('prints every other garment of the batch and names this one with the reason on the last page', async () => {
     const batch = await queueSheets(shop.tailor, DEFAULT_QUEUE_FILTER, TODAY, {}, BASE);
     expect(batch.sheets).toBe(1);
-    expect(batch.skipped).toEqual([expect.stringMatching(new RegExp(`^T-${badTicket} Impossible taper pair: .*no leg`))]);
+    expect(batch.skipped).toEqual([expect.stringMatching(new RegExp(`^RSS ${badTicket} Impossible taper pair: .*no leg`))]);
     const path = pdfFile(batch.bytes);
     expect(pageInfo(path).pages).toBe(2);
     expect(flatText(path, 1)).toContain('Sound pair');

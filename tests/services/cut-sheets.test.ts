@@ -11,6 +11,7 @@ vi.mock('@/db', () => import('../db/db-mock'));
 const { handle } = await import('@/db');
 const { moveGarment } = await import('@/services/garments');
 const { saveBenchSettings } = await import('@/services/shop-settings');
+const { addLine } = await import('@/services/counter/prices');
 const { garmentSheet, queueSheets, NO_FITTING } = await import('@/services/cut-sheets');
 const { ServiceError } = await import('@/services/errors');
 const { planCuff, planHem } = await import('@/lib/allowance');
@@ -80,7 +81,8 @@ describe('one garment with a 1 1/2 in cuff and 5 in of cloth, fitted in inches',
     expect(text).toMatch(/4 1\/2 in\s+below the pin/);
     expect(text).toMatch(/2 Cuff top\s+1 1\/2 in\s+3 1\/2 in/);
     expect(flatText(path)).toContain('All lengths in inches, to 1/8.');
-    expect(filename).toBe(`T-${number}-navy-suit-trousers.pdf`);
+    // The shop's initials (Sheet Shop A) and the number, as on its ticket book; ASCII for the header.
+    expect(filename).toBe(`ssa-${number}-navy-suit-trousers.pdf`);
     expect(pageInfo(path)).toMatchObject({ pages: 1, width: 612, height: 792 });
   });
 
@@ -92,7 +94,7 @@ describe('one garment with a 1 1/2 in cuff and 5 in of cloth, fitted in inches',
     expect(plan.lines.find((l) => l.name === 'cut')!.belowMark.mm).toBeCloseTo(114.3, 9);
     expectPlanPrinted(text, plan);
     expect(text).toMatch(/mm\s+below the pin/);
-    // Only the calibration squares name inches ("1 in", "25 mm"); no planned length is in inches.
+    // No planned length is in inches (the check ruler is in mm too).
     expect(text).not.toMatch(/\d\/\d+ in\b|\b[2-9]\d* in\b/);
     expect(flatText(path)).toContain('All lengths in millimetres.');
     expect(pageInfo(path)).toMatchObject({ pages: 1, width: 595.28, height: 841.89 });
@@ -111,7 +113,7 @@ describe('one garment with a 1 1/2 in cuff and 5 in of cloth, fitted in inches',
   it('heads the sheet with shop, ticket, garment, due date and assignee', async () => {
     const text = flatText((await sheetOf(a.tailor, id)).path);
     expect(text).toContain('Sheet Shop A');
-    expect(text).toContain(`Ticket T-${number}`);
+    expect(text).toContain(`Ticket SSA ${number}`);
     expect(text).toContain('Navy suit trousers (Wren Halloway)');
     expect(text).toMatch(/Due [^·]*4[^·]*Dec/);
     expect(text).toContain('For tailor of Sheet Shop A');
@@ -204,15 +206,17 @@ describe('the batch for the queue', () => {
     }
     await garment(shop, { description: 'Unfitted pair', dueOn: '2026-12-01' });
     // A collected garment is not in the open queue.
-    const { g: done } = await garment(shop, { description: 'Collected pair', dueOn: '2026-11-20' });
+    const { g: done, ticket: doneTicket } = await garment(shop, { description: 'Collected pair', dueOn: '2026-11-20' });
     await fit(shop, done.id, 'cuff', { cuffDepth: '2', available: '7' });
+    // A ticket is handed over only priced (the counter's rule): this one goes out with no charge.
+    await addLine(shop.counter, doneTicket.id, { source: 'no-charge', reason: 'batch fixture' });
     for (const step of ['marked', 'cut', 'stitched', 'pressed', 'ready', 'collected'] as const) await moveGarment(shop.lead, done.id, step);
   });
 
   it('prints one page per fitted garment of the open queue, in queue order, and lists the unfitted one on a last page', async () => {
     const batch = await queueSheets(shop.tailor, DEFAULT_QUEUE_FILTER, TODAY, {}, BASE);
     expect(batch.sheets).toBe(3);
-    expect(batch.skipped).toEqual([expect.stringMatching(/^T-\d+ Unfitted pair: no fitting measurements yet$/)]);
+    expect(batch.skipped).toEqual([expect.stringMatching(/^BS \d+ Unfitted pair: no fitting measurements yet$/)]);
     const path = pdfFile(batch.bytes);
     expect(pageInfo(path).pages).toBe(4);
     // Own work first (the tailor's two, earliest due first), then someone else's.

@@ -28,7 +28,7 @@ beforeAll(async () => {
 afterAll(() => handle.close());
 
 describe('demo bench seed', () => {
-  it('numbers six tickets from T-1001, each standing at its least advanced garment', async () => {
+  it('numbers six tickets from 1001, each standing at its least advanced garment', async () => {
     const rows = await db.select().from(tickets).where(eq(tickets.shopId, shop.shopId)).orderBy(asc(tickets.number));
     expect(rows.map((t) => t.number)).toEqual([1001, 1002, 1003, 1004, 1005, 1006]);
     const queue = await listQueue(shop.lead);

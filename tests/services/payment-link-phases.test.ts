@@ -159,7 +159,7 @@ describe('making a link in two phases', () => {
     const id = crypto.randomUUID();
     const request = {
       mode: 'payment',
-      line_items: [{ quantity: 1, price_data: { currency: 'eur', unit_amount: 1800, product_data: { name: `Phase Hems A: ticket T-${t.number}, balance` } } }],
+      line_items: [{ quantity: 1, price_data: { currency: 'eur', unit_amount: 1800, product_data: { name: `Phase Hems A: ticket PHA ${t.number}, balance` } } }],
       client_reference_id: t.id,
       metadata: { ticketId: t.id, shopId: a.shopId, linkId: id },
       success_url: `${ORIGIN}/paid`,

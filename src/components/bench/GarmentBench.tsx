@@ -7,7 +7,8 @@ import { scaleUnit, type Scale } from '@/lib/bench-requests';
 import type { FittingView, GarmentDetail } from '@/lib/bench-types';
 import { EXISTING_FINISH_LABELS, letDownFirst } from '@/lib/existing-finish';
 import { fetchJson } from '@/lib/fetch-json';
-import { GARMENT_STEPS, ticketLabel } from '@/lib/garment-steps';
+import { GARMENT_STEPS } from '@/lib/garment-steps';
+import { ticketLabel } from '@/lib/ticket-number';
 import { DueBadge } from './DueBadge';
 import { FittingForm } from './FittingForm';
 import { GarmentEdit } from './GarmentEdit';
@@ -19,6 +20,8 @@ import { useBenchSettings, useStepLabel } from './use-bench';
 
 interface Props {
   garmentId: string;
+  /** the shop's name: its initials start the ticket number */
+  shopName: string;
   /** may change description, due date and assignee */
   canEditGarment: boolean;
   canEditFitting: boolean;
@@ -32,7 +35,7 @@ interface Props {
   print?: { scale: Scale } | null;
 }
 
-function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canAdvance, canPickup, canReopen = false, canUploadPhotos, print = null }: Props) {
+function Bench({ garmentId, shopName, canEditGarment, canEditFitting, canReadFitting, canAdvance, canPickup, canReopen = false, canUploadPhotos, print = null }: Props) {
   const garment = useQuery({ queryKey: ['garment', garmentId], queryFn: () => fetchJson<GarmentDetail>(`/api/garments/${garmentId}`) });
   const fitting = useQuery({
     queryKey: ['fitting', garmentId],
@@ -54,7 +57,7 @@ function Bench({ garmentId, canEditGarment, canEditFitting, canReadFitting, canA
     <div className="flex flex-col gap-6">
       <header className="flex flex-col gap-3">
         <p className="text-lg">
-          <a href={`/tickets/${g.ticket.id}`} className="font-extrabold text-accent underline">{ticketLabel(g.ticket.number)}</a>
+          <a href={`/tickets/${g.ticket.id}`} className="font-extrabold text-accent underline">{ticketLabel(g.ticket.number, shopName)}</a>
           {g.customer && <> · {g.customer.name}</>}
           {g.customer?.phone && <span className="text-muted"> · {g.customer.phone}</span>}
         </p>

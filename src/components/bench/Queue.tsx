@@ -11,16 +11,20 @@ import { useMemo, useState } from 'react';
 import { withQuery } from '@/components/WithQuery';
 import type { QueueRow } from '@/lib/bench-types';
 import { ApiError, fetchJson } from '@/lib/fetch-json';
-import { GARMENT_STEPS, ticketLabel } from '@/lib/garment-steps';
+import { GARMENT_STEPS } from '@/lib/garment-steps';
+import { ticketLabel } from '@/lib/ticket-number';
+import { StageMarks } from './StageMarks';
 import { DEFAULT_QUEUE_FILTER, matchesQueue, queueRank, queueSheetsHref, type QueueFilter } from '@/lib/queue-filter';
 import { DueBadge } from './DueBadge';
-import { dueState, todayIso } from '@/lib/due-date';
+import { todayIso } from '@/lib/due-date';
 import { QueueFilters } from './QueueFilters';
 import { StepButton } from './StepButton';
 import { useAssignees, useStepLabel } from './use-bench';
 
 interface Props {
   userId: string;
+  /** the shop's name: its initials start every ticket number */
+  shopName: string;
   canAdvance: boolean;
   canPickup: boolean;
   /** may print cut sheets (apprentice, tailor, lead) */
@@ -37,12 +41,12 @@ const CARD =
   'lg:table-row lg:p-0';
 // Where each column's cell sits in the card, and the words that stand in for its header there.
 const CELL: Record<string, string> = {
-  rank: "[grid-area:whose] sm:max-lg:text-right max-lg:before:text-muted max-lg:before:content-['Whose:_']",
-  due: "[grid-area:due] max-lg:before:text-muted max-lg:before:content-['Due:_']",
+  rank: "[grid-area:whose] sm:max-lg:text-right max-lg:before:text-muted max-lg:before:content-['Tailor:_']",
+  due: "[grid-area:due] max-lg:before:text-muted max-lg:before:content-['Wanted_by:_']",
   ticketNumber: '[grid-area:ticket]',
   customer: '[grid-area:customer] max-lg:font-semibold',
   description: '[grid-area:garment] max-lg:text-xl',
-  step: "[grid-area:step] max-lg:before:text-muted max-lg:before:content-['Step:_']",
+  step: "[grid-area:step] max-lg:before:text-muted max-lg:before:content-['Stage:_']",
   move: '[grid-area:move] max-sm:pt-2 max-lg:[&_button]:w-full',
 };
 /** One page of collected history (GET /api/garments?view=history) and the next page's cursor. */
@@ -55,7 +59,7 @@ async function historyPage(after: string): Promise<{ rows: QueueRow[]; next: str
 
 const SORT_BY = "max-lg:before:font-semibold max-lg:before:text-muted max-lg:before:content-['Sort_by']";
 
-function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) {
+function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false }: Props) {
   // Open work (the server's default); an unchanged list comes back as 304 to the browser's copy.
   const queue = useQuery({ queryKey: ['queue'], queryFn: () => fetchJson<QueueRow[]>('/api/garments'), refetchInterval: 60_000 });
   const people = useAssignees();
@@ -84,13 +88,13 @@ function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) 
 
   const columns = useMemo(
     () => [
-      col.accessor('rank', { header: 'Whose', cell: (c) => (c.getValue() === 0 ? 'Yours' : c.getValue() === 1 ? 'Unassigned' : c.row.original.assigneeName ?? '') }),
-      col.accessor((r) => r.dueOn ?? '9999-12-31', { id: 'due', header: 'Due', cell: (c) => <DueBadge dueOn={c.row.original.dueOn} /> }),
+      col.accessor('rank', { header: 'Tailor', cell: (c) => (c.getValue() === 0 ? 'You' : c.getValue() === 1 ? 'Not yet taken' : c.row.original.assigneeName ?? '') }),
+      col.accessor((r) => r.dueOn ?? '9999-12-31', { id: 'due', header: 'Wanted by', cell: (c) => <DueBadge dueOn={c.row.original.dueOn} /> }),
       col.accessor('ticketNumber', {
-        header: 'Ticket',
+        header: 'Ticket no.',
         cell: (c) => (
           <a href={`/tickets/${c.row.original.ticketId}`} className="inline-flex min-h-11 items-center font-extrabold whitespace-nowrap text-accent underline">
-            {ticketLabel(c.getValue())}
+            {ticketLabel(c.getValue(), shopName)}
           </a>
         ),
       }),
@@ -103,7 +107,7 @@ function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) 
           </a>
         ),
       }),
-      col.accessor((r) => GARMENT_STEPS.indexOf(r.status), { id: 'step', header: 'Step', cell: (c) => <span className="font-semibold">{label(c.row.original.status)}</span> }),
+      col.accessor((r) => GARMENT_STEPS.indexOf(r.status), { id: 'step', header: 'Stage', cell: (c) => <StageMarks status={c.row.original.status} label={label(c.row.original.status)} /> }),
       col.display({
         id: 'move',
         header: 'Move on',
@@ -114,12 +118,12 @@ function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) 
             canAdvance={canAdvance}
             canPickup={canPickup}
             size="row"
-            what={`${ticketLabel(c.row.original.ticketNumber)} ${c.row.original.description}`}
+            what={`${ticketLabel(c.row.original.ticketNumber, shopName)} ${c.row.original.description}`}
           />
         ),
       }),
     ],
-    [label, canAdvance, canPickup],
+    [label, canAdvance, canPickup, shopName],
   );
 
   // Rows keyed by garment, so a row's Undo offer stays with its garment when the order changes.
@@ -168,10 +172,8 @@ function QueueTable({ userId, canAdvance, canPickup, canPrint = false }: Props) 
             </thead>
             <tbody role="rowgroup" className="block lg:table-row-group">
               {table.getRowModel().rows.map((row) => {
-                const due = dueState(row.original.dueOn, today);
-                const edge = due === 'overdue' ? 'border-l-8 border-l-cut' : due === 'today' ? 'border-l-8 border-l-warn' : 'border-l-8 border-l-transparent';
                 return (
-                  <tr key={row.id} role="row" data-testid="queue-row" className={'border-b border-rule ' + CARD + ' ' + edge}>
+                  <tr key={row.id} role="row" data-testid="queue-row" className={'border-b border-rule ' + CARD}>
                     {row.getVisibleCells().map((cell) => (
                       <td key={cell.id} role="cell" className={'block lg:table-cell lg:px-3 lg:py-2 lg:align-middle ' + (CELL[cell.column.id] ?? '')}>
                         {flexRender(cell.column.columnDef.cell, cell.getContext())}

@@ -7,7 +7,8 @@ import { withQuery } from '@/components/WithQuery';
 import { garmentInput } from '@/lib/bench-requests';
 import type { TicketDetail } from '@/lib/bench-types';
 import { ApiError, fetchJson } from '@/lib/fetch-json';
-import { nextStep, ticketLabel, type GarmentStep } from '@/lib/garment-steps';
+import { nextStep, type GarmentStep } from '@/lib/garment-steps';
+import { ticketLabel } from '@/lib/ticket-number';
 import type { z } from 'zod';
 import { CustomerEdit } from './CustomerEdit';
 import { DueBadge } from './DueBadge';
@@ -16,6 +17,8 @@ import { useStepLabel } from './use-bench';
 
 interface Props {
   ticketId: string;
+  /** the shop's name: its initials start the ticket number */
+  shopName: string;
   canAdvance: boolean;
   canPickup: boolean;
   canAddGarment: boolean;
@@ -78,7 +81,7 @@ function MoveAll({ ticket, canAdvance, canPickup }: { ticket: TicketDetail; canA
   );
 }
 
-function Ticket({ ticketId, canAdvance, canPickup, canAddGarment, canEditCustomer }: Props) {
+function Ticket({ ticketId, shopName, canAdvance, canPickup, canAddGarment, canEditCustomer }: Props) {
   const ticket = useQuery({ queryKey: ['ticket', ticketId], queryFn: () => fetchJson<TicketDetail>(`/api/tickets/${ticketId}`) });
   const label = useStepLabel();
   const [editing, setEditing] = useState(false);
@@ -89,7 +92,7 @@ function Ticket({ ticketId, canAdvance, canPickup, canAddGarment, canEditCustome
     <div className="flex flex-col gap-6">
       <header className="flex flex-col gap-2">
         <h1 className="text-4xl font-extrabold">
-          Ticket <span data-testid="ticket-page-number">{ticketLabel(t.number)}</span>
+          Ticket <span data-testid="ticket-page-number">{ticketLabel(t.number, shopName)}</span>
         </h1>
         <p className="text-2xl">
           Stands at <strong>{label(t.status)}</strong>

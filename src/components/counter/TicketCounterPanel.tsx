@@ -4,7 +4,8 @@ import { useQuery } from '@tanstack/react-query';
 import { FormMessage } from '@/components/Field';
 import { DueBadge } from '@/components/bench/DueBadge';
 import { fetchJson } from '@/lib/fetch-json';
-import { isGarmentStep, stepLabel, ticketLabel } from '@/lib/garment-steps';
+import { isGarmentStep, stepLabel } from '@/lib/garment-steps';
+import { ticketLabel } from '@/lib/ticket-number';
 import { withQuery } from '@/components/WithQuery';
 import { can, type Role } from '@/lib/roles';
 import { NoticesCard } from './NoticesCard';
@@ -14,13 +15,15 @@ import { post, useCounterAction, useSummary } from './counter-api';
 
 interface Props {
   ticketId: string;
+  /** the shop's name: its initials start the ticket number */
+  shopName: string;
   /** the viewer's role when the page knows it; otherwise read from /api/me */
   role?: Role;
   /** false where the page already shows the ticket's number, customer and step */
   withTicketHeader?: boolean;
 }
 
-function Panel({ ticketId, role: given, withTicketHeader = true }: Props) {
+function Panel({ ticketId, shopName, role: given, withTicketHeader = true }: Props) {
   const summary = useSummary(ticketId);
   const me = useQuery({ queryKey: ['me'], queryFn: () => fetchJson<{ role: Role }>('/api/me'), enabled: !given });
   const role = given ?? me.data?.role;
@@ -35,7 +38,7 @@ function Panel({ ticketId, role: given, withTicketHeader = true }: Props) {
     <div className="flex flex-col gap-4">
       <div className={withTicketHeader ? 'flex flex-wrap items-baseline gap-x-6 gap-y-2' : 'sr-only'}>
         <p className="text-4xl font-extrabold" data-testid="ticket-number">
-          {ticketLabel(s.ticket.number)}
+          {ticketLabel(s.ticket.number, shopName)}
         </p>
         <p className="text-xl">{s.ticket.customerName ?? 'No customer named'}</p>
         <p className="text-xl">

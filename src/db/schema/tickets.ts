@@ -20,7 +20,7 @@ export const tickets = pgTable(
   {
     id: uuid('id').primaryKey().defaultRandom(),
     shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
-    /** said at the counter: T-1001, T-1002 … per shop */
+    /** said at the counter with the shop's initials (lib/ticket-number.ts): PH 1001, PH 1002 … per shop */
     number: integer('number').notNull(),
     customerId: uuid('customer_id').references(() => customers.id, { onDelete: 'set null' }),
     status: text('status', { enum: GARMENT_STEPS }).notNull().default('received'),

@@ -4,6 +4,7 @@ import type { ReactElement } from 'react';
 import { FAMILY } from '@/lib/cut-sheet/fonts';
 import { formatMoney } from '@/lib/pricing/money';
 import type { ClaimSlipData } from './types';
+import { ticketLabel } from '@/lib/ticket-number';
 
 /** A6 in points (105 × 148 mm). */
 export const SLIP_PT = { width: 297.64, height: 419.53 } as const;
@@ -24,13 +25,13 @@ const s = StyleSheet.create({
 export function claimSlipDocument(d: ClaimSlipData, family: string | string[] = FAMILY): ReactElement<DocumentProps> {
   const money = (n: number) => formatMoney(n, d.currency);
   return (
-    <Document title={`Claim slip T-${d.ticketNumber}`} author={d.shopName}>
+    <Document title={`Claim slip ${ticketLabel(d.ticketNumber, d.shopName)}`} author={d.shopName}>
       <Page size={[SLIP_PT.width, SLIP_PT.height]} style={family === FAMILY ? s.page : [s.page, { fontFamily: family }]}>
         <Text style={s.shop}>{d.shopName}</Text>
         {d.location ? <Text style={s.soft}>{d.location}</Text> : null}
         {d.hours ? <Text style={s.soft}>Hours: {d.hours}</Text> : null}
         <Text style={s.kicker}>CLAIM SLIP</Text>
-        <Text style={s.number}>T-{d.ticketNumber}</Text>
+        <Text style={s.number}>{ticketLabel(d.ticketNumber, d.shopName)}</Text>
         {d.customerName ? <Text style={s.strong}>{d.customerName}</Text> : null}
         <View style={s.rule}>
           <View style={s.row}>

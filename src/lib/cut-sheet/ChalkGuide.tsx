@@ -1,16 +1,32 @@
-// The full-size chalk guide: calibration squares, how to check them, and the strip(s) at 1:1.
+// The full-size chalk guide: the check ruler, how to read it, and the strip(s) at 1:1.
 import { Path, Rect, Svg, Text, View } from '@react-pdf/renderer';
-import { INCH_PT, MM25_PT, type GuideSegment, type GuideStrip, type MatchMark } from './chalk-guide';
+import type { Unit } from '@/lib/allowance/types';
+import { checkRuler, type GuideSegment, type GuideStrip, type MatchMark } from './chalk-guide';
 import { INK, READ_MIN, s } from './styles';
 
-/** Grey of the calibration squares: distinct from every other fill so a test can find them. */
-export const SQUARE_GREY = '#a0a0a0';
+// Room left and right of the ruler's 0 and last tick for their numbers.
+const RULER_SIDE = 4;
+const RULER_H = 26;
 
-function Square({ side, label }: { side: number; label: string }) {
+/** The printer check: a short length of tape measure at 1:1, ticks hanging from its edge, numbered below. */
+function CheckRulerStrip({ unit }: { unit: Unit }) {
+  const r = checkRuler(unit);
+  const width = r.length + 2 * RULER_SIDE;
+  const ticks = r.ticks.map((t) => `M${(t.x + RULER_SIDE).toFixed(3)} 0v${t.len}`).join('');
   return (
-    <View style={{ alignItems: 'center' }}>
-      <View style={{ width: side, height: side, backgroundColor: SQUARE_GREY }} />
-      <Text style={{ fontSize: READ_MIN, fontWeight: 800, marginTop: 2 }}>{label}</Text>
+    <View style={{ width, height: RULER_H, position: 'relative' }}>
+      <Svg width={width} height={RULER_H}>
+        <Rect x={0} y={0} width={width} height={RULER_H} fill={INK.fill} />
+        <Path d={`M0 0.3h${width}`} stroke={INK.text} strokeWidth={0.6} />
+        <Path d={ticks} stroke={INK.text} strokeWidth={0.6} />
+      </Svg>
+      {r.ticks
+        .filter((t) => t.label !== null)
+        .map((t, i) => (
+          <Text key={i} style={{ position: 'absolute', left: t.x + RULER_SIDE - 10, top: 13, width: 20, textAlign: 'center', fontSize: READ_MIN, fontWeight: 700 }}>
+            {t.label}
+          </Text>
+        ))}
     </View>
   );
 }
@@ -93,16 +109,13 @@ export function StripRow({ columns, width, gap }: { columns: StripColumn[]; widt
 /** How many strip columns the guide column holds side by side. */
 export const COLUMN_STRIPS = 2;
 
-/** The right-hand column: squares to check the print, then the strip(s), as many as it holds. */
-export function ChalkGuide({ columns, notes }: { columns: StripColumn[]; notes: string[] }) {
+/** The right-hand column: the ruler to check the printer, then the strip(s), as many as it holds. */
+export function ChalkGuide({ columns, notes, unit }: { columns: StripColumn[]; notes: string[]; unit: Unit }) {
   const width = columns.length > 1 ? 72 : 108;
   return (
     <>
       <Text style={s.h2}>CHALK GUIDE 1:1</Text>
-      <View style={{ flexDirection: 'row', justifyContent: 'space-between', alignItems: 'flex-end' }}>
-        <Square side={INCH_PT} label="1 in" />
-        <Square side={MM25_PT} label="25 mm" />
-      </View>
+      <CheckRulerStrip unit={unit} />
       {notes.map((n, i) => (
         <Text key={i} style={{ fontSize: READ_MIN, marginTop: 2, fontWeight: i < 2 ? 700 : 400 }}>
           {n}

@@ -11,8 +11,9 @@ import { textWidth } from './measure';
 import { qrPath } from './qr';
 import { SkippedNote } from './SkippedNote';
 import { FAMILY } from './fonts';
+import { SAFETY_HEADING } from '@/lib/bench-safety';
 import { GUIDE_COLUMN, INK, READ_MIN, s } from './styles';
-import type { Len } from '@/lib/allowance/types';
+import type { Len, Unit } from '@/lib/allowance/types';
 import type { CutSheetData, PageSize } from './types';
 
 /** Page size in points, Letter and A4. */
@@ -21,7 +22,7 @@ export const PAGE_PT: Record<PageSize, { width: number; height: number }> = {
   A4: { width: 595.28, height: 841.89 },
 };
 const PADDING = 28;
-// Header, calibration squares and notes, strip captions: what the strip cannot use (measured
+// Header, check ruler and notes, strip captions: what the strip cannot use (measured
 // about 285 on both papers; kept generous, since a longer strip goes on in a second segment).
 const GUIDE_OVERHEAD = 300;
 const DRAWING_W = 160;
@@ -211,7 +212,7 @@ function Steps({ c }: { c: SheetContent }) {
           ))}
         </Fragment>
       ))}
-      <Text style={s.h2}>TAKE CARE</Text>
+      <Text style={s.h2}>{SAFETY_HEADING.toUpperCase()}</Text>
       {c.cautions.map((t, i) => (
         <Text key={i} style={{ fontSize: READ_MIN, marginBottom: 1 }}>
           {`•  ${t}`}
@@ -246,15 +247,15 @@ function stripColumnsOf(c: SheetContent, data: CutSheetData) {
   return { column: all.slice(0, COLUMN_STRIPS), page: all.slice(COLUMN_STRIPS) };
 }
 
-// The strip's parts the guide column could not hold, side by side at 1:1, with the squares again:
+// The strip's parts the guide column could not hold, side by side at 1:1, with the check ruler again:
 // a page printed on its own must be checked on its own.
-function StripPage({ c, columns, size, style }: { c: SheetContent; columns: StripColumn[]; size: PageSize; style: PageProps['style'] }) {
+function StripPage({ c, columns, size, style, unit }: { c: SheetContent; columns: StripColumn[]; size: PageSize; style: PageProps['style']; unit: Unit }) {
   return (
     <Page size={size} style={[style, { height: PAGE_PT[size].height, minHeight: PAGE_PT[size].height }].flat() as PageProps['style']} wrap={false}>
       <Text style={s.kicker}>{`CUT SHEET, CHALK GUIDE CONTINUED      ${c.unitNote}`}</Text>
       <Text style={[s.meta, { marginBottom: 4 }]}>{[c.title, ...c.meta.slice(0, 2)].join('   ·   ')}</Text>
       <View style={{ width: GUIDE_COLUMN }}>
-        <ChalkGuide columns={[]} notes={c.guideNote.slice(0, 2)} />
+        <ChalkGuide columns={[]} notes={c.guideNote.slice(0, 2)} unit={unit} />
       </View>
       <StripRow columns={columns} width={108} gap={16} />
     </Page>
@@ -293,11 +294,11 @@ export function CutSheetPage({ data, wrap, family = FAMILY }: { data: CutSheetDa
             <Steps c={c} />
           </View>
           <View style={[s.side, { width: GUIDE_COLUMN }]}>
-            <ChalkGuide columns={strips.column} notes={c.guideNote} />
+            <ChalkGuide columns={strips.column} notes={c.guideNote} unit={data.unit} />
           </View>
         </View>
       </Page>
-      {strips.page.length > 0 && <StripPage c={c} columns={strips.page} size={size} style={style} />}
+      {strips.page.length > 0 && <StripPage c={c} columns={strips.page} size={size} style={style} unit={data.unit} />}
     </>
   );
 }

@@ -4,10 +4,34 @@ import type { SheetLegGroup } from './content';
 
 const PT_PER_MM = 72 / 25.4;
 
-/** Side of the inch calibration square, in points. */
+/** One inch, in points. */
 export const INCH_PT = 72;
-/** Side of the 25 mm calibration square, in points. */
-export const MM25_PT = 25 * PT_PER_MM;
+
+/** The printer check: a short tape-measure ruler in the sheet's unit, its ticks across in points from its 0. */
+export interface CheckRuler {
+  /** from the 0 tick to the last, in points */
+  length: number;
+  /** what it must measure on paper, as said on the sheet ("2 in", "5 cm", "50 mm") */
+  says: string;
+  ticks: { x: number; len: number; label: string | null }[];
+}
+
+/** The check ruler for a sheet in this unit: 2 in by eighths, or 5 cm by millimetres (numbered in cm, or every 10 mm on a mm sheet); it fits the guide column. */
+export function checkRuler(unit: Unit): CheckRuler {
+  const ticks: CheckRuler['ticks'] = [];
+  if (unit === 'in') {
+    for (let i = 0; i <= 16; i++) {
+      const inch = i % 8 === 0;
+      ticks.push({ x: i * 9, len: inch ? 12 : i % 4 === 0 ? 9 : i % 2 === 0 ? 6 : 4, label: inch ? `${i / 8}` : null });
+    }
+    return { length: 16 * 9, says: '2 in', ticks };
+  }
+  for (let i = 0; i <= 50; i++) {
+    const cm = i % 10 === 0;
+    ticks.push({ x: i * PT_PER_MM, len: cm ? 12 : i % 5 === 0 ? 8 : 4, label: cm ? `${unit === 'mm' ? i : i / 10}` : null });
+  }
+  return { length: 50 * PT_PER_MM, says: unit === 'mm' ? '50 mm' : '5 cm', ticks };
+}
 
 /** One chalk line on the strip. */
 export interface GuideTick {

@@ -2,6 +2,8 @@
 // keeping them here lets the tests and any other rendering read the same sheet.
 import type { CreaseLanding, CuffLineName, Len, PlanWarning, TaperLine, TaperPlan, Unit, WarningCode } from '@/lib/allowance/types';
 import type { ExistingFinish } from '@/lib/existing-finish';
+import { SAFETY_DEFER_SHEET, SAFETY_NOTES } from '@/lib/bench-safety';
+import { checkRuler } from './chalk-guide';
 import { finishedLine } from './finished-length';
 import { printedPlan, type PrintedPlan, type PrintedSeamWork } from './printed';
 import type { CutSheetData, LegSheet } from './types';
@@ -83,12 +85,7 @@ const TACK: Record<Unit, { below: string; wide: string }> = {
 };
 
 /** The cautions every sheet carries (TRADE.md, "Cautions to show"). */
-export const CAUTIONS = [
-  'Hot iron and steam burn: unplug the iron to fill or empty it.',
-  'Blades and seam rippers: cut away from your body; close or cover them after use; dispose of blades safely.',
-  'Needles and pins: keep count; broken ones go in the sharps jar.',
-  "Your shop's own safety practice and local rules come first.",
-] as const;
+export const CAUTIONS = [...SAFETY_NOTES.map((n) => n.sheet), SAFETY_DEFER_SHEET] as const;
 
 /** The first bench step on a pair that came in with cuffs: old folds left in would throw the chalk lines out. */
 export const LET_DOWN_OLD_CUFF =
@@ -402,8 +399,8 @@ export function sheetContent(data: CutSheetData): SheetContent {
     steps: withLetDown(stepsOf(groups), data.existingFinish),
     cautions: [...CAUTIONS],
     guideNote: [
-      'Print at 100 % (actual size), not "fit to page".',
-      'Check before use: the squares must measure 1 in and 25 mm.',
+      `Check the printer: this ruler should measure exactly ${checkRuler(data.unit).says}.`,
+      'Short or long? The page was scaled: print it again unscaled.',
       'Lay the top of the strip on the pin mark and chalk at each line.',
     ],
   };

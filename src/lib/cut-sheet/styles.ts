@@ -7,7 +7,7 @@ import { SHEET_FEATURES } from './shaping-features';
 /** Ink colours: the cut red is dark enough to print as near-black in greyscale. */
 export const INK = { text: '#111111', soft: '#555555', rule: '#999999', cut: '#b3121b', fill: '#f1efe9', warn: '#8a4b00' } as const;
 
-/** Width of the right-hand column that holds the chalk guide and calibration squares. */
+/** Width of the right-hand column that holds the check ruler and the chalk guide. */
 export const GUIDE_COLUMN = 162;
 
 

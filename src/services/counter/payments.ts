@@ -28,6 +28,7 @@ import {
 import { counterSettingsOf, type CounterView } from './prices';
 import { applyRefundEvent } from './refunds';
 import { counterSummary, customerCreditOf, summaryOf, type CounterSummary } from './summary';
+import { ticketLabel } from '@/lib/ticket-number';
 
 export { counterSummary, summaryOf, type CounterSummary };
 export { assertReadyToHandOver, pickUp } from './hand-over';
@@ -126,7 +127,7 @@ export async function createPaymentLink(actor: Actor, ticketId: string, appOrigi
       const request: Stripe.Checkout.SessionCreateParams = {
         mode: 'payment',
         line_items: [
-          { quantity: 1, price_data: { currency: before.currency.toLowerCase(), unit_amount: before.due, product_data: { name: `${actor.shopName}: ticket T-${before.ticket.number}, balance` } } },
+          { quantity: 1, price_data: { currency: before.currency.toLowerCase(), unit_amount: before.due, product_data: { name: `${actor.shopName}: ticket ${ticketLabel(before.ticket.number, actor.shopName)}, balance` } } },
         ],
         client_reference_id: ticketId,
         metadata: { ticketId, shopId: actor.shopId, linkId: id },

@@ -36,7 +36,7 @@ describe('claim slip', () => {
   it('carries the ticket number, customer, garments, due date and every amount', async () => {
     const file = pdfFile(await renderClaimSlip(SLIP));
     const text = flatText(file);
-    for (const words of ['T-1007', 'Perrin Loame', '1. Charcoal flannel', '2. Brown moleskin', 'Ready by 2026-12-08', 'Hours: Tue–Fri 9:00–18:00']) {
+    for (const words of ['PH 1007', 'Perrin Loame', '1. Charcoal flannel', '2. Brown moleskin', 'Ready by 2026-12-08', 'Hours: Tue–Fri 9:00–18:00']) {
       expect(text).toContain(words);
     }
     const rows = layoutText(file);

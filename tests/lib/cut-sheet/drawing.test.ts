@@ -27,26 +27,6 @@ function horizontalLines(g: Gray, box: { x0: number; x1: number; y0: number; y1:
   return rows.length ? lines : [];
 }
 
-/** Runs of pixels within ±tol of a grey level, per row: [start, length] of runs at least minLen long. */
-function greyRuns(g: Gray, level: number, tol: number, minLen: number): { y: number; x: number; len: number }[] {
-  const out: { y: number; x: number; len: number }[] = [];
-  for (let y = 0; y < g.height; y++) {
-    let x = 0;
-    while (x < g.width) {
-      if (Math.abs(g.px[y * g.width + x]! - level) > tol) {
-        x++;
-        continue;
-      }
-      const s = x;
-      while (x < g.width && Math.abs(g.px[y * g.width + x]! - level) <= tol) x++;
-      if (x - s >= minLen) out.push({ y, x: s, len: x - s });
-    }
-  }
-  return out;
-}
-
-const median = (a: number[]) => [...a].sort((p, q) => p - q)[Math.floor(a.length / 2)]!;
-
 /** The strip's line-number labels: same x as the "1" before "finished", top to bottom. */
 function stripNumbers(w: Word[]): Word[] {
   const i = w.findIndex((x) => x.text === 'finished');
@@ -97,17 +77,48 @@ describe('the leg drawing', () => {
 });
 
 describe('the chalk guide is full size', () => {
-  it('prints a 1 in square and a 25 mm square at their true size', async () => {
-    // 1 in = 25.4 mm exactly (TRADE.md, NBS 1959): at 300 dpi, 1 in = 300 px and 25 mm = 295.3 px.
-    const g = gray(pdfFile(await renderCutSheet(sheet([cuffInch]))), 300);
-    const runs = greyRuns(g, 160, 6, 200);
-    const left = Math.min(...runs.map((r) => r.x));
-    const inch = runs.filter((r) => r.x < left + 50);
-    const mm25 = runs.filter((r) => r.x > left + 250);
-    expect(Math.abs(median(inch.map((r) => r.len)) - 300)).toBeLessThanOrEqual(2);
-    expect(Math.abs(median(mm25.map((r) => r.len)) - (25 / 25.4) * 300)).toBeLessThanOrEqual(2);
-    expect(Math.abs(inch.length - 300)).toBeLessThanOrEqual(2);
-    expect(Math.abs(mm25.length - (25 / 25.4) * 300)).toBeLessThanOrEqual(2);
+  /** The check ruler's tick centres (px) on a 300 dpi raster, found from its numbers: the row just under its edge with the most ticks. */
+  async function rulerTicks(order: Parameters<typeof buildCutSheet>[1], numbers: string[]): Promise<{ ticks: number[]; dpi: number }> {
+    const file = pdfFile(await renderCutSheet(buildCutSheet(UNSAVED, order)));
+    const g = gray(file, 300);
+    const w = words(file);
+    // The ruler's numbers stand in one row, in order, below the check sentence's "ruler".
+    const said = w.find((x) => x.text === 'ruler')!;
+    const row = w.filter((x) => x.yMin < said.yMin && x.xMin > said.xMin - 160 && numbers.includes(x.text));
+    const zero = row.find((x) => x.text === '0')!;
+    const inRow = row.filter((x) => Math.abs(x.yMin - zero.yMin) < 1).sort((p, q) => p.xMin - q.xMin);
+    expect(inRow.map((x) => x.text)).toEqual(numbers);
+    const px = (pt: number) => Math.round((pt * g.dpi) / 72);
+    const x0 = px(inRow[0]!.xMin - 8);
+    const x1 = px(inRow.at(-1)!.xMax + 8);
+    let best: number[] = [];
+    for (let y = px(zero.yMin - 14); y < px(zero.yMin); y++) {
+      const centres: number[] = [];
+      for (let x = x0; x < x1; x++) {
+        if (g.px[y * g.width + x]! >= 100) continue;
+        const s0 = x;
+        while (x < x1 && g.px[y * g.width + x]! < 100) x++;
+        centres.push((s0 + x - 1) / 2);
+      }
+      if (centres.length > best.length) best = centres;
+    }
+    return { ticks: best, dpi: g.dpi };
+  }
+
+  it('prints a 2 in check ruler by eighths at its true size', async () => {
+    // 72 pt to the inch: at 300 dpi, 1/8 in = 37.5 px and 2 in = 600 px (TRADE.md, NBS 1959).
+    const { ticks } = await rulerTicks([cuffInch], ['0', '1', '2']);
+    expect(ticks).toHaveLength(17);
+    expect(Math.abs(ticks.at(-1)! - ticks[0]! - 600)).toBeLessThanOrEqual(2);
+    for (let i = 1; i < ticks.length; i++) expect(Math.abs(ticks[i]! - ticks[i - 1]! - 37.5)).toBeLessThanOrEqual(1.5);
+  });
+
+  it('prints a 50 mm check ruler by millimetres at its true size on a metric sheet', async () => {
+    // 1 in = 25.4 mm exactly (TRADE.md, NBS 1959): at 300 dpi, 1 mm = 11.81 px and 50 mm = 590.6 px.
+    const { ticks } = await rulerTicks([cuffMetric], ['0', '10', '20', '30', '40', '50']);
+    expect(ticks).toHaveLength(51);
+    expect(Math.abs(ticks.at(-1)! - ticks[0]! - (50 / 25.4) * 300)).toBeLessThanOrEqual(2);
+    for (let i = 1; i < ticks.length; i++) expect(Math.abs(ticks[i]! - ticks[i - 1]! - 300 / 25.4)).toBeLessThanOrEqual(1.5);
   });
 
   it('spaces the strip lines as planned, in points: 1 1/2 in cuff → 108, 216, 324 pt', async () => {

@@ -75,20 +75,23 @@ describe('a 1 1/2 in cuff with 5 in of cloth, inches', () => {
   it('shows the usual cautions and defers to the shop', () => {
     // TRADE.md, "Cautions to show".
     const text = flatText(file);
-    expect(text).toContain('unplug the iron to fill or empty it');
-    expect(text).toContain('cut away from your body');
-    expect(text).toContain('close or cover them after use');
-    expect(text).toMatch(/keep count.*sharps jar/);
-    expect(text).toContain('dispose of blades safely');
-    expect(text).toContain("shop's own safety practice and local rules");
+    expect(text).toContain('Iron and steam burn: rest the iron on its heel; unplug it to fill or empty.');
+    expect(text).toContain('cut away from you;');
+    expect(text).toContain('close or cover them');
+    expect(text).toMatch(/count them out and back.*sharps jar/);
+    expect(text).toContain('spent blades in the sharps jar');
+    expect(text).toContain("shop's own practice and local rules come first");
   });
 
   it('shows the shop, ticket, garment, due date and assignee, and how to check the print', () => {
     const text = flatText(file);
     for (const t of ['Hartley & Sons Alterations', 'Ticket 1042', 'Navy wool flannel trousers', 'Due Fri, 14 Mar 2025', 'For Sam Ortiz'])
       expect(text).toContain(t);
-    expect(text).toContain('Print at 100 %');
-    expect(text).toContain('the squares must measure 1 in and 25 mm');
+    // Our own printer check (issue 15): a ruler in the sheet's unit, not the home-pattern squares.
+    expect(text).toContain('Check the printer: this ruler should measure exactly 2 in.');
+    expect(text).not.toContain('100 %');
+    expect(text).not.toContain('fit to page');
+    expect(text).not.toContain('squares');
     expect(text).not.toContain(UNSAVED_TITLE);
   });
 
@@ -123,8 +126,9 @@ describe('a 40 mm cuff with 150 mm of cloth, metric, unsaved', () => {
     expect(text).toContain('Turn under 12 mm');
     expect(text).toContain('3 to 5 mm below the cuff top');
     expect(text).toContain('long stitch (about 4 mm)');
-    // Inches appear only on the calibration square and in its note.
-    expect(text.match(/[\d/]+ in\b/g)).toEqual(['1 in', '1 in']);
+    // No inches at all: the check ruler is in the sheet's unit.
+    expect(text.match(/[\d/]+ in\b/g)).toBeNull();
+    expect(text).toContain('this ruler should measure exactly 50 mm');
   });
 
   it('says it is an unsaved plan from the calculator, with no shop or ticket', () => {

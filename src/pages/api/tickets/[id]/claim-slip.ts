@@ -14,7 +14,7 @@ export const GET: APIRoute = async ({ locals, params }) => {
     const data = await claimSlipData(actor, params.id ?? '');
     const pdf = await renderClaimSlip(data);
     return new Response(pdf, {
-      headers: { 'content-type': 'application/pdf', 'content-disposition': `inline; filename="claim-slip-T-${data.ticketNumber}.pdf"`, 'cache-control': 'no-store' },
+      headers: { 'content-type': 'application/pdf', 'content-disposition': `inline; filename="claim-slip-${data.ticketNumber}.pdf"`, 'cache-control': 'no-store' },
     });
   } catch (e) {
     return refusal(e);
