@@ -1,10 +1,10 @@
 import { AllowanceError } from './allowance-error';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
-import { exactDefaults, SHALLOWEST_CUFF_WHY } from './defaults';
+import { cuffDepthRule, exactDefaults } from './defaults';
 import { Exact, ZERO } from './exact';
 import { lenMaker } from './len';
 import { letDownShapeError, letDownWidth, type LetDownWidths } from './let-down-width';
-import { InputReader } from './read-input';
+import { InputReader, type LengthRule } from './read-input';
 import type { PlanWarning, Precision, TaperInput, TaperLine, TaperPlan, Unit } from './types';
 
 /** A taper input read and checked: exact mm throughout. */
@@ -27,26 +27,28 @@ export interface TaperValues {
 
 const ONE = Exact.int(1);
 
+const POSITIVE: LengthRule = { min: 'positive' };
+const NON_NEGATIVE: LengthRule = { min: 'non-negative' };
+const WIDTH: LengthRule = { required: true, min: 'positive' };
+
 /** Read a taper input field by field (errors carry the field name). */
 export function readTaperInput(input: TaperInput, r: InputReader): TaperValues {
   const defaults = exactDefaults(r.unit);
   const d =
-    r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', { required: true, min: 'positive', least: { value: defaults.shallowestCuff, why: SHALLOWEST_CUFF_WHY }, max: defaults.maxCuffDepth }) ??
+    r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', cuffDepthRule(r.unit)) ??
     defaults.usualCuffDepth.min;
-  const width = (value: unknown, field: string, label: string): Exact =>
-    r.length(value, field, label, { required: true, min: 'positive' }) ?? ONE;
   return {
     unit: r.unit,
     precision: r.precision,
     cuffDepth: d,
-    hemSection: r.length(input.hemSection, 'hemSection', 'Third section', { min: 'positive' }) ?? d,
-    widthAtEdge: width(input.widthAtEdge, 'widthAtEdge', 'Width at the finished edge'),
-    widthAbove: width(input.widthAbove, 'widthAbove', 'Width higher up'),
-    heightAbove: width(input.heightAbove, 'heightAbove', 'Height of the upper width'),
-    seamAllowance: r.length(input.seamAllowance, 'seamAllowance', 'Seam allowance', { min: 'non-negative' }),
-    tolerance: r.length(input.tolerance, 'tolerance', 'Tolerance', { min: 'non-negative' }) ?? defaults.taperTolerance,
-    clothThickness: r.length(input.clothThickness, 'clothThickness', 'Turn of cloth', { min: 'non-negative' }) ?? ZERO,
-    widthAtCut: r.length(input.widthAtCut, 'widthAtCut', 'Width at the cutting line', { min: 'positive' }),
+    hemSection: r.length(input.hemSection, 'hemSection', 'Third section', POSITIVE) ?? d,
+    widthAtEdge: r.length(input.widthAtEdge, 'widthAtEdge', 'Width at the finished edge', WIDTH) ?? ONE,
+    widthAbove: r.length(input.widthAbove, 'widthAbove', 'Width higher up', WIDTH) ?? ONE,
+    heightAbove: r.length(input.heightAbove, 'heightAbove', 'Height of the upper width', WIDTH) ?? ONE,
+    seamAllowance: r.length(input.seamAllowance, 'seamAllowance', 'Seam allowance', NON_NEGATIVE),
+    tolerance: r.length(input.tolerance, 'tolerance', 'Tolerance', NON_NEGATIVE) ?? defaults.taperTolerance,
+    clothThickness: r.length(input.clothThickness, 'clothThickness', 'Turn of cloth', NON_NEGATIVE) ?? ZERO,
+    widthAtCut: r.length(input.widthAtCut, 'widthAtCut', 'Width at the cutting line', POSITIVE),
     oldFold: r.length(input.oldCrease, 'oldCrease', 'Old crease'),
   };
 }
