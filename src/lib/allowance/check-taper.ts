@@ -70,15 +70,19 @@ function isPositive(f: Exact): boolean {
 /** The taper's shape worked out once: its slope, the width to keep, and the chalk lines below the mark. */
 interface TaperShape {
   slope: Exact;
+  /** slope × cuff depth: how much wider the leg is at the cuff top's height than at the finished edge */
+  rise: Exact;
   target: Exact;
   positions: [Exact, Exact, Exact, Exact];
 }
 
 function taperShape(v: TaperValues): TaperShape {
   const slope = taperSlope(v);
+  const rise = slope.mul(v.cuffDepth);
   return {
     slope,
-    target: v.widthAtEdge.add(slope.mul(v.cuffDepth)),
+    rise,
+    target: v.widthAtEdge.add(rise),
     positions: linePositionList(cuffLinePositions(v.cuffDepth, v.hemSection, v.clothThickness)),
   };
 }
@@ -114,7 +118,7 @@ export function checkTaper(input: TaperInput): TaperPlan {
   const shapeError = shapeErrorOf(v, shape);
   if (shapeError) throw shapeError;
   const len = lenMaker(v.unit, v.precision);
-  const { slope, target, positions } = shape;
+  const { slope, rise, target, positions } = shape;
   const letDown = letDownOf(v, slope, positions[3]);
   let worst = ZERO;
   let worstSize = ZERO;
@@ -125,7 +129,7 @@ export function checkTaper(input: TaperInput): TaperPlan {
     const below = positions[k]!;
     // A line below the mark sits at height −below; the change is what brings it back to the target.
     const measured = letDown && letDownWidth(letDown, below);
-    const change = measured ? target.sub(measured) : k === 0 ? target.sub(v.widthAtEdge) : slope.mul(v.cuffDepth.add(below));
+    const change = measured ? target.sub(measured) : k === 0 ? rise : slope.mul(v.cuffDepth.add(below));
     const perSide = change.half();
     const size = change.abs();
     if (size.compare(worstSize) > 0) {
