@@ -15,7 +15,7 @@ export const CUFF_LINE_NAMES: readonly CuffLineName[] = ['finished-edge', 'cuff-
 /** Where the lines fall for cuff depth d, third section m and turn of cloth t (taken at each fold). */
 export function cuffLinePositions(d: Exact, m: Exact, t: Exact): CuffLinePositions {
   const cuffTop = t.isZero() ? d : d.add(t);
-  const innerFold = cuffTop.add(cuffTop);
+  const innerFold = cuffTop.twice();
   return { finishedEdge: ZERO, cuffTop, innerFold, cut: innerFold.add(m) };
 }
 

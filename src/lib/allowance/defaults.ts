@@ -1,5 +1,6 @@
 import { Exact } from './exact';
 import { formatExactQ } from './format-length';
+import type { LengthRule } from './read-input';
 import type { Len, Unit } from './types';
 import { isMetric } from './units';
 
@@ -81,6 +82,20 @@ const METRIC: ExactDefaults = {
 /** The exact defaults for a unit: inch figures for 'in', metric ones for 'cm' and 'mm'. */
 export function exactDefaults(unit: Unit): ExactDefaults {
   return isMetric(unit) ? METRIC : IMPERIAL;
+}
+
+const depthRule = (e: ExactDefaults): LengthRule => ({
+  required: true,
+  min: 'positive',
+  least: { value: e.shallowestCuff, why: SHALLOWEST_CUFF_WHY },
+  max: e.maxCuffDepth,
+});
+const IMPERIAL_DEPTH = depthRule(IMPERIAL);
+const METRIC_DEPTH = depthRule(METRIC);
+
+/** What a cuff depth must be in a unit (needed, more than 0, from the shallowest cuff to the deepest), made once per unit system. */
+export function cuffDepthRule(unit: Unit): LengthRule {
+  return isMetric(unit) ? METRIC_DEPTH : IMPERIAL_DEPTH;
 }
 
 /** Defaults and usual ranges of one unit, as lengths shown in that unit. */

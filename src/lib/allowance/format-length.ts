@@ -157,12 +157,19 @@ function buildText(steps: number, unit: Unit, precision: Precision): string {
 const TEXT_RANGE = 10_240;
 const texts: ((string | undefined)[] | undefined)[] = [];
 
+/** The kept texts of one unit and precision, indexed by steps + STEPS_TEXT_RANGE (filled as stepsText makes them). */
+export function stepsTextTable(unit: Unit, precision: Precision): (string | undefined)[] {
+  const t = unit === 'in' ? precision : unit === 'mm' ? 1 : 2;
+  return (texts[t] ??= new Array<string | undefined>(2 * TEXT_RANGE + 1).fill(undefined));
+}
+
+/** Step counts within ± this have their texts kept in stepsTextTable. */
+export const STEPS_TEXT_RANGE = TEXT_RANGE;
+
 /** The display text of a signed whole number of display steps. */
 export function stepsText(steps: number, unit: Unit, precision: Precision): string {
   if (steps < -TEXT_RANGE || steps > TEXT_RANGE) return buildText(steps, unit, precision);
-  const t = unit === 'in' ? precision : unit === 'mm' ? 1 : 2;
-  const table = (texts[t] ??= new Array<string | undefined>(2 * TEXT_RANGE + 1).fill(undefined));
-  return (table[steps + TEXT_RANGE] ??= buildText(steps, unit, precision));
+  return (stepsTextTable(unit, precision)[steps + TEXT_RANGE] ??= buildText(steps, unit, precision));
 }
 
 /** Format an exact length (mm) in a unit, rounded to the display step. */

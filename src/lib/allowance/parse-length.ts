@@ -159,8 +159,28 @@ function plainExact(text: string, unit: Unit): Exact | null {
   return Exact.ratio(sign * n, d);
 }
 
+// Typed texts already read, per unit (in, cm, mm), to their checked exact mm: a plan reads the cuff
+// depth for its cuff and again for its taper, and a batch of sheets or a day's fittings repeats the
+// same few dozen texts. Bounded: emptied when full, so any stream of texts holds at most READ_MEMO
+// entries per unit. Only texts that read cleanly are kept (an error is worked out again each time).
+const READ_MEMO = 512;
+const MEMO_TEXT_LENGTH = 40;
+const readMemo: Record<Unit, Map<string, Exact>> = { in: new Map(), cm: new Map(), mm: new Map() };
+
 /** Typed text to an exact length in mm, as an Exact (parseExact's answer without building a Fraction for one term). */
 export function readExact(text: string, unit: Unit): Exact {
+  if (text.length > MEMO_TEXT_LENGTH) return readExactFresh(text, unit);
+  const memo = readMemo[unit];
+  let mm = memo.get(text);
+  if (mm === undefined) {
+    mm = readExactFresh(text, unit);
+    if (memo.size >= READ_MEMO) memo.clear();
+    memo.set(text, mm);
+  }
+  return mm;
+}
+
+function readExactFresh(text: string, unit: Unit): Exact {
   const plain = plainExact(text, unit);
   if (plain !== null) return checkRangeExact(plain);
   const terms = readLengthTerms(text);

@@ -1,7 +1,7 @@
 import { creaseLanding } from './crease-landing';
 import { cuffAlternatives } from './cuff-alternatives';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
-import { type ExactDefaults, exactDefaults, SHALLOWEST_CUFF_WHY } from './defaults';
+import { cuffDepthRule, type ExactDefaults, exactDefaults } from './defaults';
 import { type Exact, ZERO } from './exact';
 import { type LenMaker, lenMaker } from './len';
 import { InputReader, type LengthRule } from './read-input';
@@ -27,12 +27,7 @@ const ANY: LengthRule = {};
 /** Read a cuff input field by field (errors carry the field name). */
 export function readCuffInput(input: CuffInput, r: InputReader): CuffValues {
   const defaults = exactDefaults(r.unit);
-  const cuffDepth = r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', {
-    required: true,
-    min: 'positive',
-    least: { value: defaults.shallowestCuff, why: SHALLOWEST_CUFF_WHY },
-    max: defaults.maxCuffDepth,
-  });
+  const cuffDepth = r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', cuffDepthRule(r.unit));
   const d = cuffDepth ?? defaults.usualCuffDepth.min;
   return {
     unit: r.unit,
@@ -107,29 +102,32 @@ export function planCuff(input: CuffInput): CuffPlan {
   const A = v.available;
   const below = linePositionList(positions);
   // Above the raw edge = A − below the mark; for the finished edge that is A itself.
-  const aboveRaw = A === null ? null : below.map((b, k) => (k === 0 ? A : A.sub(b)));
-  const lines: CuffLine[] = below.map((b, k) => ({
-    n: (k + 1) as CuffLine['n'],
-    name: CUFF_LINE_NAMES[k]!,
-    belowMark: len(b),
-    aboveRawEdge: aboveRaw === null ? null : len(aboveRaw[k]!),
-  }));
+  const lines: CuffLine[] = [];
+  let rest: Exact | null = null;
+  for (let k = 0; k < 4; k++) {
+    const b = below[k]!;
+    const above = A === null ? null : k === 0 ? A : A.sub(b);
+    if (k === 3) rest = above;
+    lines.push({ n: (k + 1) as CuffLine['n'], name: CUFF_LINE_NAMES[k]!, belowMark: len(b), aboveRawEdge: above === null ? null : len(above) });
+  }
   // The same exact values are not formatted twice (copies, so no two plan fields share an object).
-  const depth = positions.cuffTop === v.cuffDepth ? { ...lines[1]!.belowMark } : len(v.cuffDepth);
-  const required = { ...lines[3]!.belowMark };
-  const section = v.hemSection === v.cuffDepth ? { ...depth } : len(v.hemSection);
+  const top = lines[1]!.belowMark;
+  const cut = lines[3]!.belowMark;
+  const depth = positions.cuffTop === v.cuffDepth ? { mm: top.mm, text: top.text } : len(v.cuffDepth);
+  const required = { mm: cut.mm, text: cut.text };
+  const section = v.hemSection === v.cuffDepth ? { mm: depth.mm, text: depth.text } : len(v.hemSection);
   const turnUnder = len(v.turnUnder);
   const warnings = cuffWarnings(v, { depth, section, turnUnder }, defaults, len);
   let enough: boolean | null = null;
   let spare: Len | null = null;
   let shortBy: Len | null = null;
   let alternatives: CuffPlan['alternatives'] = null;
-  if (A !== null) {
-    const rest = aboveRaw![3]!;
+  if (A !== null && rest !== null) {
     // Decided on the exact value: a float of it can be 0 or NaN (1e-310, huge denominators) and flip the check.
     enough = rest.sign() >= 0;
     if (enough) {
-      spare = { ...lines[3]!.aboveRawEdge! };
+      const above = lines[3]!.aboveRawEdge!;
+      spare = { mm: above.mm, text: above.text };
     } else {
       shortBy = len(rest, true);
       alternatives = cuffAlternatives({
@@ -167,7 +165,7 @@ export function planCuff(input: CuffInput): CuffPlan {
       cuffDepth: v.cuffDepth,
       cuffDepthMm: depth.mm,
       lines: positions,
-      linesMm: lines.map((l) => l.belowMark.mm),
+      linesMm: [lines[0]!.belowMark.mm, top.mm, lines[2]!.belowMark.mm, cut.mm],
       onFoldWithin: defaults.onFoldWithin,
       onFoldWithinMm: defaults.onFoldWithinMm,
       nearCuffTop: defaults.nearCuffTop,

@@ -17,6 +17,16 @@ export interface LengthRule {
 
 export { isPrecision } from './units';
 
+// As value.trim() === '' (the same white space), without making the trimmed copy of every typed length.
+function isBlank(text: string): boolean {
+  for (let k = 0; k < text.length; k++) {
+    const c = text.charCodeAt(k);
+    if (c > 32 && c < 127) return false;
+    if (!(c === 32 || (c >= 9 && c <= 13)) && text.slice(k, k + 1).trim() !== '') return false;
+  }
+  return true;
+}
+
 /**
  * Reads and checks a plan's inputs, naming the field in each AllowanceError. Throws the first
  * error, or, when collecting, keeps them all and goes on with a stand-in value.
@@ -50,7 +60,7 @@ export class InputReader {
 
   /** A length field in mm, or null when absent (blank text counts as absent). */
   length(value: unknown, field: string, label: string, rule: LengthRule = {}): Exact | null {
-    if (value === undefined || value === null || (typeof value === 'string' && value.trim() === '')) {
+    if (value === undefined || value === null || (typeof value === 'string' && isBlank(value))) {
       if (rule.required) this.fail(new AllowanceError('missing', `${label} is needed.`, field));
       return null;
     }

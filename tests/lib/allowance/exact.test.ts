@@ -199,3 +199,21 @@ describe('the engine helpers on Exact agree with their fraction.js versions', ()
     );
   });
 });
+
+describe('readExact remembers texts it has read', () => {
+  it('keeps each unit apart, stays right past its bound, and refuses bad text every time', () => {
+    // 1 1/2 in = 38.1 mm = 381/10 (1 in = 25.4 mm exactly, NIST SP 811); 1 1/2 cm = 15 mm; 1 1/2 mm as typed.
+    for (let round = 0; round < 2; round++) {
+      expect(readExact('1 1/2', 'in').toFraction().equals(new Fraction(381, 10))).toBe(true);
+      expect(readExact('1 1/2', 'cm').toFraction().equals(new Fraction(15))).toBe(true);
+      expect(readExact('1 1/2', 'mm').toFraction().equals(new Fraction(3, 2))).toBe(true);
+      expect(() => readExact('1 1/0', 'in')).toThrow();
+    }
+    // More distinct texts than the memo holds (512 per unit): each still reads as parseExact reads it.
+    for (let k = 1; k <= 1200; k++) {
+      const t = (k / 10).toFixed(1);
+      expect(readExact(t, 'in').toFraction().equals(parseExact(t, 'in'))).toBe(true);
+    }
+    expect(readExact('1 1/2', 'in').toFraction().equals(new Fraction(381, 10))).toBe(true);
+  });
+});
