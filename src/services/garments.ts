@@ -14,6 +14,7 @@ import { ServiceError } from './errors';
 import { assertReadyToHandOver } from './counter/hand-over';
 import { onGarmentMoved } from './garment-events';
 import { isUuid, lockTicket, withTicketLock } from './ticket-core';
+import { copyFittings } from './fitting-copy';
 
 // The ticket core, here too for the services that already import it from here.
 export { isUuid, lockTicket, withTicketLock };
@@ -164,6 +165,7 @@ export async function addGarment(actor: Actor, ticketId: string, input: z.output
       .values({ shopId: actor.shopId, ticketId, description: input.description, dueOn: input.dueOn ?? t.dueOn, assigneeId: input.assigneeId, existingFinish: input.existingFinish, position })
       .returning();
     await audit(tx, actor.shopId, actor.userId, 'garment.added', row!.id, { ticket: t.number, description: input.description });
+    if (input.fittingFrom) await copyFittings(tx, actor, t.customerId, [{ to: row!.id, from: input.fittingFrom }]);
     await refreshTicketStatus(actor.shopId, ticketId, tx);
     if (input.assigneeId) await refreshTicketAssignee(tx, actor.shopId, ticketId);
     return row!;
