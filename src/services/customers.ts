@@ -32,7 +32,10 @@ const likeEscaped = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
  */
 export async function searchCustomers(actor: Actor, typed: string): Promise<CustomerHit[]> {
   const q = typed.trim().toLowerCase();
-  const lastTicket = sql<number | null>`(select max(${tickets.number}) from ${tickets} where ${tickets.customerId} = ${customers.id} and ${tickets.shopId} = ${actor.shopId})`;
+  // Spelled out with an alias: drizzle leaves the table off columns of a one-table select, and
+  // "id" inside the subquery would then be the ticket's own.
+  const theirTickets = sql`from tickets t where t.customer_id = "customers"."id" and t.shop_id = ${actor.shopId}`;
+  const lastTicket = sql<number | null>`(select max(t.number) ${theirTickets})`;
   const base = db
     .select({ id: customers.id, name: customers.name, phone: customers.phone, email: customers.email, lastTicket })
     .from(customers);
@@ -48,7 +51,7 @@ export async function searchCustomers(actor: Actor, typed: string): Promise<Cust
     // Three digits at least, so a house number in a name search does not find every phone.
     digits.length >= 3 ? sql`${customers.phoneDigits} like ${`%${digits}%`}` : undefined,
     ticket
-      ? sql`exists (select 1 from ${tickets} where ${tickets.customerId} = ${customers.id} and ${tickets.shopId} = ${actor.shopId} and ${tickets.number} = ${Number(ticket[1])})`
+      ? sql`exists (select 1 ${theirTickets} and t.number = ${Number(ticket[1])})`
       : undefined,
   );
   return base.where(and(inShop, matches)).orderBy(asc(customers.name)).limit(SEARCH_LIMIT);

@@ -87,6 +87,7 @@ export async function listQueue(actor: Actor): Promise<QueueRow[]> {
       ticketId: garments.ticketId,
       ticketNumber: tickets.number,
       customerName: customers.name,
+      customerPhone: customers.phone,
     })
     .from(garments)
     .innerJoin(tickets, eq(tickets.id, garments.ticketId))
@@ -94,7 +95,9 @@ export async function listQueue(actor: Actor): Promise<QueueRow[]> {
     .leftJoin(user, eq(user.id, garments.assigneeId))
     .where(garmentVisibleTo(actor))
     .orderBy(asc(garments.dueOn), asc(tickets.number), asc(garments.position));
-  return rows.map((r) => ({ ...r, description: r.description ?? 'Trousers' }));
+  // An apprentice works the garment, never calls its owner (as customerCard): no phone for them.
+  const phones = can(actor.role, ['customers', 'read']);
+  return rows.map(({ customerPhone, ...r }) => ({ ...r, description: r.description ?? 'Trousers', ...(phones ? { customerPhone } : {}) }));
 }
 
 /** The garment when the actor may see it, otherwise 404. */
