@@ -155,7 +155,7 @@ export async function refreshTicketStatus(shopId: string, ticketId: string, tx?:
 }
 
 /** Adds a garment to a ticket of the shop. */
-export async function addGarment(actor: Actor, ticketId: string, input: z.output<typeof garmentInput>): Promise<Garment> {
+export async function addGarment(actor: Actor, ticketId: string, input: Omit<z.output<typeof garmentInput>, 'fittingFrom'> & { fittingFrom?: string | null }): Promise<Garment> {
   if (!isUuid(ticketId)) throw new ServiceError(404, 'No such ticket in this shop.');
   const [t] = await db.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
   if (!t) throw new ServiceError(404, 'No such ticket in this shop.');

@@ -5,7 +5,7 @@ import { mkdirSync } from 'node:fs';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { call, DEMO, signIn } from '../http/client';
-import { launch, tabletPage } from './browser';
+import { launch, ready, tabletPage } from './browser';
 import { layoutProblems, settled } from './layout-checks';
 import { signInAs } from './sign-in';
 
@@ -101,7 +101,9 @@ describe('customers', () => {
 
   it('the lead erases the customer on their request: the name reads "erased", the tickets stay', async () => {
     const page = await tabletPage(browser);
-    await signInAs(page, 'lead', `/customers?c=${customerId}`);
+    await signInAs(page, 'lead', '/customers');
+    await page.goto(`/customers?c=${customerId}`);
+    await ready(page);
     await page.getByRole('heading', { name: NAME, level: 2 }).waitFor();
     await page.getByRole('button', { name: 'Erase personal details…' }).click();
     await page.getByRole('button', { name: `Yes, erase ${NAME}` }).click();

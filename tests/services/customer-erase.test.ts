@@ -35,7 +35,7 @@ async function customerWithMoney(shop: Shop) {
   await updateCustomer(shop.counter, c.id, { phone: '555 010 4040' });
   const t = await createTicket(shop.counter, { customerId: c.id, garments: [{ description: 'Charcoal flannels' }] });
   const [g] = await garmentsOfTicket(shop.shopId, t.id);
-  await db.insert(priceLines).values({ shopId: shop.shopId, ticketId: t.id, garmentId: g!.id, source: 'manual', label: 'Plain hem', amountMinor: 1800 });
+  await db.insert(priceLines).values({ shopId: shop.shopId, ticketId: t.id, garmentId: g!.id, source: 'list', key: 'plain-hem', label: 'Plain hem', amountMinor: 1800 });
   await db.insert(payments).values({ shopId: shop.shopId, ticketId: t.id, purpose: 'deposit', method: 'cash', amountMinor: 1000, currency: 'EUR' });
   const key = `${shop.shopId}/erase-${g!.id}.jpg`;
   mkdirSync(join(root, shop.shopId), { recursive: true });

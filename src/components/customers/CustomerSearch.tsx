@@ -79,7 +79,7 @@ export function CustomerSearch({ id, label, chosen, onChoose, error, hint }: Pro
         className={BOX}
       />
       {hint && <p id={`${id}-hint`} className="text-sm text-muted">{hint}</p>}
-      <ul id={list} role="listbox" aria-label={`${label}: found`} hidden={!open} className="flex flex-col rounded border-2 border-rule bg-card">
+      <ul id={list} role="listbox" aria-label="Customers found" hidden={!open} className="flex flex-col rounded border-2 border-rule bg-card">
         {hits.map((c, i) => (
           <li
             key={c.id}
