@@ -27,8 +27,9 @@ export function CustomerSearch({ id, label, chosen, onChoose, error, hint }: Pro
   const [typed, setTyped] = useState('');
   const [active, setActive] = useState(0);
   const list = `${useId()}-list`;
-  const found = useCustomerSearch(typed, typed.trim().length > 0 && !chosen);
-  const hits = typed.trim() ? (found.data ?? []) : [];
+  const found = useCustomerSearch(typed, { enabled: !chosen });
+  // Only the answer for what stands in the box is offered: Enter must not pick a stale one.
+  const hits = typed.trim() && found.current ? (found.data ?? []) : [];
   const choose = (c: CustomerHit) => {
     onChoose(c);
     setTyped('');
@@ -94,7 +95,7 @@ export function CustomerSearch({ id, label, chosen, onChoose, error, hint }: Pro
           </li>
         ))}
       </ul>
-      {typed.trim() && found.isSuccess && !found.isPlaceholderData && hits.length === 0 && (
+      {typed.trim() && found.current && hits.length === 0 && (
         <p role="status" className="text-muted">Nobody found for “{typed.trim()}”.</p>
       )}
       {error && <p id={`${id}-error`} className="rounded-sm border-l-4 border-cut bg-cut-soft px-2 py-1 text-base font-semibold text-cut">{error}</p>}

@@ -18,7 +18,7 @@ function Customers({ canEdit, canErase }: Props) {
   const [typed, setTyped] = useState('');
   const [open, setOpen] = useState<string | null>(null);
   useEffect(() => setOpen(openedInAddress()), []);
-  const found = useCustomerSearch(typed);
+  const found = useCustomerSearch(typed, { allowEmpty: true });
   const choose = (id: string) => {
     setOpen(id);
     const url = new URL(window.location.href);
