@@ -32,6 +32,8 @@ export interface CustomerTicket {
   createdAt: string;
   garments: { id: string; description: string; status: GarmentStep }[];
   payments: { id: string; method: string; amountMinor: number; currency: string; at: string }[];
+  /** money given back or kept as the customer's credit */
+  refunds: { id: string; method: string; status: string; amountMinor: number; currency: string; at: string }[];
   notices: { id: string; kind: string; status: string; sentAt: string | null }[];
 }
 

@@ -2,7 +2,7 @@
 // notices, history), changes with their history, and erasure on the customer's request.
 import { and, asc, desc, eq, inArray, isNull, or, sql } from 'drizzle-orm';
 import { db } from '@/db';
-import { auditEvents, customers, files, garments, notices, payments, sentMail, tickets, type Customer } from '@/db/schema';
+import { auditEvents, customers, files, garments, notices, payments, refunds, sentMail, tickets, type Customer } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import { phoneDigits, type CustomerPatch, type NewCustomer } from '@/lib/customer-request';
 import type { CustomerDetails, CustomerFile, CustomerHit } from '@/lib/customer-types';
@@ -105,7 +105,7 @@ export async function customerFile(actor: Actor, id: string): Promise<CustomerFi
   const c = await getCustomer(actor, id);
   const ts = await db.select().from(tickets).where(and(eq(tickets.shopId, actor.shopId), eq(tickets.customerId, c.id))).orderBy(desc(tickets.number));
   const ids = ts.map((t) => t.id);
-  const [gs, ps, ns] = ids.length
+  const [gs, ps, ns, rs] = ids.length
     ? await Promise.all([
         db.select().from(garments).where(and(eq(garments.shopId, actor.shopId), inArray(garments.ticketId, ids))).orderBy(asc(garments.position)),
         db
@@ -118,8 +118,13 @@ export async function customerFile(actor: Actor, id: string): Promise<CustomerFi
           .from(notices)
           .where(and(eq(notices.shopId, actor.shopId), inArray(notices.ticketId, ids)))
           .orderBy(asc(notices.createdAt)),
+        db
+          .select({ id: refunds.id, ticketId: refunds.ticketId, method: refunds.method, status: refunds.status, amountMinor: refunds.amountMinor, currency: refunds.currency, at: refunds.at })
+          .from(refunds)
+          .where(and(eq(refunds.shopId, actor.shopId), inArray(refunds.ticketId, ids)))
+          .orderBy(asc(refunds.at)),
       ])
-    : [[], [], []];
+    : [[], [], [], []];
   return {
     customer: details(c),
     tickets: ts.map((t) => ({
@@ -130,6 +135,7 @@ export async function customerFile(actor: Actor, id: string): Promise<CustomerFi
       createdAt: t.createdAt.toISOString(),
       garments: gs.filter((g) => g.ticketId === t.id).map((g) => ({ id: g.id, description: g.description ?? 'Trousers', status: g.status })),
       payments: ps.filter((p) => p.ticketId === t.id).map(({ ticketId: _, at, ...p }) => ({ ...p, at: at.toISOString() })),
+      refunds: rs.filter((r) => r.ticketId === t.id).map(({ ticketId: _, at, ...r }) => ({ ...r, at: at.toISOString() })),
       notices: ns.filter((n) => n.ticketId === t.id).map(({ ticketId: _, sentAt, ...n }) => ({ ...n, sentAt: sentAt?.toISOString() ?? null })),
     })),
     history: await auditOf(actor.shopId, [c.id]),

@@ -107,6 +107,9 @@ export function CustomerFileView({ id, canEdit, canErase }: { id: string; canEdi
               <p>
                 Paid: {t.payments.length === 0 ? 'nothing yet' : <><span className="tabular-nums">{isCurrency(currency) ? formatMoney(paid, currency) : (paid / 100).toFixed(2)}</span> ({t.payments.map((p) => `${p.method}, ${dateTimeText(p.at)}`).join('; ')})</>}
               </p>
+              {t.refunds.length > 0 && (
+                <p>Given back: {t.refunds.map((r) => `${isCurrency(r.currency) ? formatMoney(r.amountMinor, r.currency) : (r.amountMinor / 100).toFixed(2)} ${r.method === 'credit' ? 'kept as credit' : r.method} (${r.status}), ${dateTimeText(r.at)}`).join('; ')}</p>
+              )}
               {t.notices.length > 0 && <p>Notices: {t.notices.map((n) => `${n.kind} ${n.status}${n.sentAt ? ` ${dateTimeText(n.sentAt)}` : ''}`).join('; ')}</p>}
             </div>
           );
