@@ -54,7 +54,7 @@ describe('customers', () => {
     await expect(copy.textContent()).resolves.toMatch(/finished length 31 1\/8 in, cuff 1 5\/8 in, preset Deep cuff/);
     await copy.click();
     await expect(copy.getAttribute('aria-pressed')).resolves.toBe('true');
-    await page.getByLabel('Garment 1').fill('Moss green cords, second pair');
+    await page.getByLabel('Garment 1', { exact: true }).fill('Moss green cords, second pair');
     await settled(page);
     expect(await layoutProblems(page)).toEqual([]);
     await page.screenshot({ path: 'test-results/customers-intake.png', fullPage: true });
