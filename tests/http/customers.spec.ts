@@ -52,6 +52,16 @@ describe('customers over HTTP', () => {
     expect((await call('GET', `/api/customers/${customerId}/fittings`, { cookie: cookies.stranger })).status).toBe(404);
   });
 
+  it("gives the queue the customer's phone for its search, but not to the apprentice", async () => {
+    const mine = (rows: { ticketNumber: number; customerPhone?: string | null }[]) => rows.find((r) => r.ticketNumber === ticketNumber);
+    const counter = await call('GET', '/api/garments', { cookie: cookies.counter });
+    expect(mine(counter.body)?.customerPhone).toBe(PHONE);
+    const apprentice = await call('GET', '/api/garments', { cookie: cookies.apprentice });
+    // The fixture's garment is unassigned, so the apprentice sees it, without the phone.
+    expect(mine(apprentice.body)).toBeDefined();
+    expect(JSON.stringify(apprentice.body)).not.toContain('6230');
+  });
+
   it('refuses a search longer than a search box needs with 422', async () => {
     const r = await search('lead', 'x'.repeat(81));
     expect(r.status).toBe(422);
