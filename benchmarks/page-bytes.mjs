@@ -18,6 +18,7 @@ export const PAGES = [
   { path: '/queue', signIn: 'tailor@pinmark.test', goalKiB: null },
   { path: '/tickets/new', signIn: 'counter@pinmark.test', goalKiB: null },
   { path: '/presets', signIn: 'lead@pinmark.test', goalKiB: null },
+  { path: '/customers', signIn: 'counter@pinmark.test', goalKiB: null },
 ];
 
 /** How many cold loads of each page (PAGE_LOADS, default 5). */

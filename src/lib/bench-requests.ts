@@ -26,21 +26,19 @@ export const garmentInput = z.object({
   assigneeId: assignee,
   /** how the bottoms came in; left out, intake takes a plain hem (DEFAULT_EXISTING_FINISH) */
   existingFinish: z.enum(EXISTING_FINISHES, { error: 'Choose plain hem, cuff or unfinished.' }).optional(),
+  /** "same as last time": a garment of the same customer whose fitting is copied into this one */
+  fittingFrom: z.union([z.uuid('Choose a fitting from the list.'), z.literal(''), z.null()]).optional().transform(blankToNull),
 });
 
 /** A change to a garment's description, due date, assignee or existing finish. */
-export const garmentPatch = garmentInput.partial();
+export const garmentPatch = garmentInput.omit({ fittingFrom: true }).partial();
 
 /** Optional text: blank or missing is null. */
 const optionalText = (max: number, message: string) => z.union([text().trim().max(max, message), z.null()]).optional().transform(blankToNull);
 
-/** A new customer typed at intake. */
-export const newCustomer = z.object({
-  name: text().trim().min(1, 'Give the customer a name').max(120, 'Keep the name under 120 characters.'),
-  phone: optionalText(40, 'Keep the phone number under 40 characters.'),
-  email: z.union([z.email('Enter an e-mail address like name@example.com').max(200), z.literal(''), z.null()]).optional().transform(blankToNull),
-  notes: optionalText(2000, 'Keep the notes under 2000 characters.'),
-});
+/** A new customer typed at intake: the one customer schema (customer-request.ts). */
+export { newCustomer, customerPatch } from './customer-request';
+import { newCustomer } from './customer-request';
 
 /** The body of POST /api/tickets: an existing or a new customer, a note, and the garments brought in. */
 export const intakeRequest = z.object({
@@ -79,6 +77,3 @@ export const settingsRequest = z.object({
   scale: z.enum(SCALES, { error: 'Choose inches (1/8 or 1/16), cm or mm.' }),
   stepLabels: z.partialRecord(z.enum(GARMENT_STEPS), text().trim().max(40, 'Keep a step name under 40 characters.')).default({}),
 });
-
-/** The body of PATCH /api/customers/[id]: any of name, phone, e-mail, notes. */
-export const customerPatch = newCustomer.partial();

@@ -32,6 +32,8 @@ export interface QueueRow extends GarmentSummary {
   ticketId: string;
   ticketNumber: number;
   customerName: string | null;
+  /** only for roles that may read customers: the queue's search finds by it */
+  customerPhone?: string | null;
 }
 
 /** The customer as a ticket or garment shows them; the contact details only to roles that may read customers. */

@@ -29,11 +29,23 @@ export function matchesQueue(row: QueueRow, f: QueueFilter, userId: string, toda
   const due = dueState(row.dueOn, today);
   if (f.due === 'overdue' && due !== 'overdue') return false;
   if (f.due === 'today' && due !== 'today' && due !== 'overdue') return false;
-  // A ticket number as the shop writes it ("PH 1001"), bare, or in the old "T-1001" form; else a name.
-  const q = f.search.trim().toLowerCase();
-  const n = ticketSearchNumber(q);
-  if (q && !(n !== null && String(row.ticketNumber).includes(n)) && !(row.customerName ?? '').toLowerCase().includes(q)) return false;
+  if (f.search.trim() && !matchesSearch(row, f.search)) return false;
   return true;
+}
+
+/** True when the typed search names the row: its ticket number (T- optional), customer name,
+ * garment description, or (3 digits at least, however written) the customer's phone. */
+export function matchesSearch(row: QueueRow, search: string): boolean {
+  const typed = search.trim().toLowerCase();
+  // A ticket number as the shop writes it ("PH 1001"), bare, or in the old "T-1001" form.
+  const number = ticketSearchNumber(typed);
+  const digits = typed.replace(/\D+/g, '');
+  return (
+    (number !== null && String(row.ticketNumber).includes(number)) ||
+    (row.customerName ?? '').toLowerCase().includes(typed) ||
+    row.description.toLowerCase().includes(typed) ||
+    (digits.length >= 3 && (row.customerPhone ?? '').replace(/\D+/g, '').includes(digits))
+  );
 }
 
 /** 0 own work, 1 unassigned, 2 someone else's: the queue's first sort key. */

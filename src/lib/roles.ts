@@ -20,7 +20,9 @@ export const statements = {
   presets: ['read', 'create-own', 'manage-house'],
   // Fitting photos of a garment: every member sees them; the bench takes and removes them.
   photos: ['read', 'upload', 'delete'],
-  customers: ['read', 'create', 'update'],
+  // browse: the customers screen (each customer's tickets, payments, notices); erase: forget a
+  // customer's personal details on their request, keeping the money records.
+  customers: ['read', 'create', 'update', 'browse', 'erase'],
   // reopen: step a collected garment back to ready (a hand-over recorded by mistake); any other
   // step back one is for whoever may move garments on (advance).
   tickets: ['read', 'read-all', 'create', 'update', 'advance', 'pickup', 'reopen'],
@@ -49,7 +51,7 @@ export const grants = {
     payments: ['take'],
     presets: ['read', 'create-own', 'manage-house'],
     photos: ['read', 'upload', 'delete'],
-    customers: ['read', 'create', 'update'],
+    customers: ['read', 'create', 'update', 'browse', 'erase'],
     tickets: ['read', 'read-all', 'create', 'update', 'advance', 'pickup', 'reopen'],
     measurements: ['read', 'update'],
     plans: ['read', 'create'],
@@ -80,7 +82,7 @@ export const grants = {
     prices: ['read', 'adjust'],
     payments: ['take'],
     photos: ['read'],
-    customers: ['read', 'create', 'update'],
+    customers: ['read', 'create', 'update', 'browse'],
     tickets: ['read', 'read-all', 'create', 'pickup'],
     plans: ['read'],
     notices: ['send'],

@@ -15,6 +15,7 @@ import { assertReadyToHandOver } from './counter/hand-over';
 import { onGarmentMoved } from './garment-events';
 import { isUuid, lockTicket, withTicketLock } from './ticket-core';
 import { ticketLabel } from '@/lib/ticket-number';
+import { copyFittings } from './fitting-copy';
 
 // The ticket core, here too for the services that already import it from here.
 export { isUuid, lockTicket, withTicketLock };
@@ -87,6 +88,7 @@ export async function listQueue(actor: Actor): Promise<QueueRow[]> {
       ticketId: garments.ticketId,
       ticketNumber: tickets.number,
       customerName: customers.name,
+      customerPhone: customers.phone,
     })
     .from(garments)
     .innerJoin(tickets, eq(tickets.id, garments.ticketId))
@@ -94,7 +96,9 @@ export async function listQueue(actor: Actor): Promise<QueueRow[]> {
     .leftJoin(user, eq(user.id, garments.assigneeId))
     .where(garmentVisibleTo(actor))
     .orderBy(asc(garments.dueOn), asc(tickets.number), asc(garments.position));
-  return rows.map((r) => ({ ...r, description: r.description ?? 'Trousers' }));
+  // An apprentice works the garment, never calls its owner (as customerCard): no phone for them.
+  const phones = can(actor.role, ['customers', 'read']);
+  return rows.map(({ customerPhone, ...r }) => ({ ...r, description: r.description ?? 'Trousers', ...(phones ? { customerPhone } : {}) }));
 }
 
 /** The garment when the actor may see it, otherwise 404. */
@@ -152,7 +156,7 @@ export async function refreshTicketStatus(shopId: string, ticketId: string, tx?:
 }
 
 /** Adds a garment to a ticket of the shop. */
-export async function addGarment(actor: Actor, ticketId: string, input: z.output<typeof garmentInput>): Promise<Garment> {
+export async function addGarment(actor: Actor, ticketId: string, input: Omit<z.output<typeof garmentInput>, 'fittingFrom'> & { fittingFrom?: string | null }): Promise<Garment> {
   if (!isUuid(ticketId)) throw new ServiceError(404, 'No such ticket in this shop.');
   const [t] = await db.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
   if (!t) throw new ServiceError(404, 'No such ticket in this shop.');
@@ -165,6 +169,7 @@ export async function addGarment(actor: Actor, ticketId: string, input: z.output
       .values({ shopId: actor.shopId, ticketId, description: input.description, dueOn: input.dueOn ?? t.dueOn, assigneeId: input.assigneeId, existingFinish: input.existingFinish, position })
       .returning();
     await audit(tx, actor.shopId, actor.userId, 'garment.added', row!.id, { ticket: t.number, description: input.description });
+    if (input.fittingFrom) await copyFittings(tx, actor, t.customerId, [{ to: row!.id, from: input.fittingFrom }]);
     await refreshTicketStatus(actor.shopId, ticketId, tx);
     if (input.assigneeId) await refreshTicketAssignee(tx, actor.shopId, ticketId);
     return row!;

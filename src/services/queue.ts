@@ -10,6 +10,7 @@ import { garments } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import type { QueueRow } from '@/lib/bench-types';
 import { encodeCursor, type QueueCursor } from '@/lib/queue-request';
+import { can } from '@/lib/roles';
 import { garmentVisibleTo } from './garments';
 
 /** What the queue API is asked: open work, or a page of history after a cursor. */
@@ -37,10 +38,12 @@ const COLLECTED = sql`${garments.status} = 'collected'`;
 // Plain SQL: in a one-table select Drizzle leaves column names unqualified, which a subquery would
 // read as its own table's.
 const ticketNumber = sql<number>`(select t.number from tickets t where t.id = "garments"."ticket_id")`;
-const customerOf = <T>(col: 'name' | 'updated_at') => sql<T>`(select ${sql.raw(`c.${col}`)} from tickets t join customers c on c.id = t.customer_id where t.id = "garments"."ticket_id")`;
+const customerOf = <T>(col: 'name' | 'phone' | 'updated_at') => sql<T>`(select ${sql.raw(`c.${col}`)} from tickets t join customers c on c.id = t.customer_id where t.id = "garments"."ticket_id")`;
 const assigneeOf = <T>(col: 'name' | 'updated_at') => sql<T>`(select ${sql.raw(`u.${col}`)} from "user" u where u.id = "garments"."assignee_id")`;
 
-function rowsOf(where: SQL | undefined) {
+// The customer's phone only for roles that read customers (the queue's search finds by it); an
+// apprentice works the garment, never calls its owner.
+function rowsOf(where: SQL | undefined, phones: boolean) {
   return db
     .select({
       id: garments.id,
@@ -52,6 +55,7 @@ function rowsOf(where: SQL | undefined) {
       ticketId: garments.ticketId,
       ticketNumber: ticketNumber.mapWith(Number),
       customerName: customerOf<string | null>('name'),
+      ...(phones ? { customerPhone: customerOf<string | null>('phone') } : {}),
       position: garments.position,
       createdAt: sql<string>`"garments"."created_at"::text`,
     })
@@ -96,12 +100,13 @@ export async function readQueue(actor: Actor, q: QueueQuery, ifNoneMatch: string
   if (q.view === 'open') {
     const etag = etagOf(actor, q, await openFingerprint(actor));
     if (matches(ifNoneMatch, etag)) return { etag, rows: null, next: null };
-    const rows = (await rowsOf(and(garmentVisibleTo(actor), OPEN))) as Read[];
+    const rows = (await rowsOf(and(garmentVisibleTo(actor), OPEN), can(actor.role, ['customers', 'read']))) as Read[];
     return { etag, rows: rows.sort(byDue).map(shown), next: null };
   }
   const after = q.after ?? null;
   const page = (await rowsOf(
     and(garmentVisibleTo(actor), COLLECTED, after ? sql`(${garments.createdAt}, ${garments.id}) < (${after.createdAt}::timestamptz, ${after.id}::uuid)` : undefined),
+    can(actor.role, ['customers', 'read']),
   )
     .orderBy(sql`${garments.createdAt} desc nulls last`, sql`${garments.id} desc nulls last`)
     .limit(q.limit + 1)) as Read[];

@@ -13,6 +13,7 @@ import { onGarmentMoved } from './garment-events';
 import { customerCard, garmentVisibleTo, isUuid, refreshTicketAssignee, refreshTicketStatus, staffOf, summaries, withTicketLock } from './garments';
 import { pickUp } from './counter/hand-over';
 import { ticketLabel } from '@/lib/ticket-number';
+import { copyFittings } from './fitting-copy';
 
 /** A ticket as listed: the row plus who it is for and how many garments it holds. */
 export type TicketListItem = Ticket & { customerName: string | null; garmentCount: number };
@@ -83,9 +84,15 @@ export async function createTicket(actor: Actor, typed: IntakeInput): Promise<Ti
       .values({ shopId: actor.shopId, number: (last?.n ?? 1000) + 1, customerId, note: input.note, dueOn: input.dueOn, createdById: actor.userId })
       .returning();
     if (input.garments.length) {
-      await tx.insert(garments).values(
-        input.garments.map((g, position) => ({ shopId: actor.shopId, ticketId: t!.id, position, description: g.description, dueOn: g.dueOn ?? input.dueOn, assigneeId: g.assigneeId, existingFinish: g.existingFinish })),
-      );
+      const made = await tx
+        .insert(garments)
+        .values(
+          input.garments.map((g, position) => ({ shopId: actor.shopId, ticketId: t!.id, position, description: g.description, dueOn: g.dueOn ?? input.dueOn, assigneeId: g.assigneeId, existingFinish: g.existingFinish })),
+        )
+        .returning({ id: garments.id, position: garments.position });
+      // "Same as last time": only an existing customer has a last time.
+      const copies = input.garments.flatMap((g, i) => (g.fittingFrom ? [{ to: made.find((m) => m.position === i)!.id, from: g.fittingFrom }] : []));
+      await copyFittings(tx, actor, input.customerId, copies);
       // Work given to someone at intake gives them the ticket.
       return { ...t!, assigneeId: await refreshTicketAssignee(tx, actor.shopId, t!.id) };
     }

@@ -35,6 +35,7 @@ function screens(ticketId: string, garmentId: string): Record<string, string> {
     'new-ticket': '/tickets/new',
     garment: `/garments/${garmentId}`,
     counter: `/counter/${ticketId}`,
+    customers: '/customers',
     presets: '/presets',
     prices: '/prices',
     staff: '/staff',

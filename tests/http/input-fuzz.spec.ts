@@ -150,7 +150,7 @@ function paramFor(valid: string | undefined): fc.Arbitrary<string> {
   return valid ? fc.oneof({ weight: 2, arbitrary: fc.constant(valid) }, { weight: 3, arbitrary: bad }) : bad;
 }
 
-const QUERY_KEYS = ['unit', 'precision', 'page', 'step', 'who', 'due', 'search', 'today', 'token', 'callbackURL', 'x'];
+const QUERY_KEYS = ['unit', 'precision', 'page', 'step', 'who', 'due', 'search', 'q', 'today', 'token', 'callbackURL', 'x'];
 const QUERY_VALUES = ['in', 'cm', '8', '16', 'A4', 'LETTER', 'open', 'all', 'mine', 'nobody', 'today', '2027-01-02', '%00', 'a%00b', '%F0%9F%98%80', 'x'.repeat(3000), '', '%25', '1e308'];
 const query = fc
   .array(fc.tuple(fc.constantFrom(...QUERY_KEYS), fc.oneof(fc.constantFrom(...QUERY_VALUES), fc.string({ maxLength: 20 }).map(encodeURIComponent))), { maxLength: 4 })

@@ -38,6 +38,7 @@ export function pagePaths(ids: PageIds): Record<string, string> {
     bench: '/bench',
     'bench-settings': '/bench-settings',
     'counter/[ticketId]': `/counter/${ids.ticketId}`,
+    customers: '/customers',
     forgot: '/forgot',
     'garments/[id]': `/garments/${ids.garmentId}`,
     'invite/[id]': `/invite/${ids.invitationId}`,

@@ -276,6 +276,29 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       check: (a) => expect(a.body.notes).toBe('Prefers a deep cuff.'),
     },
   },
+  'customers/[id]/file': {
+    GET: {
+      // The customers screen: the lead and the counter.
+      request: async () => ({ path: `/api/customers/${await freshCustomer()}/file` }),
+      expect: signedIn(403, { lead: 200, counter: 200, other: 404 }),
+      check: (a) => expect(a.body.customer.name).toBe('Matrix Customer'),
+    },
+  },
+  'customers/[id]/erase': {
+    POST: {
+      request: async () => ({ path: `/api/customers/${await freshCustomer()}/erase`, body: {} }),
+      expect: signedIn(403, { lead: 200, other: 404 }),
+      check: (a) => expect(a.body).toMatchObject({ name: 'erased', phone: null, email: null }),
+    },
+  },
+  'customers/[id]/fittings': {
+    GET: {
+      // "Same as last time": whoever takes garments in.
+      request: async () => ({ path: `/api/customers/${await freshCustomer()}/fittings` }),
+      expect: signedIn(200, { apprentice: 403, other: 404 }),
+      check: (a) => expect(a.body).toEqual([]),
+    },
+  },
   tickets: {
     GET: {
       request: () => ({ path: '/api/tickets' }),

@@ -2,7 +2,7 @@
 // refused with an issue on that field, so it never reaches PostgreSQL (which refuses both).
 import { describe, expect, it } from 'vitest';
 import type { z } from 'zod';
-import { customerInput } from '@/db/schema/customers';
+import { newCustomer as customerInput } from '@/lib/customer-request';
 import { acceptInviteInput, shopSignUpInput } from '@/lib/account-inputs';
 import { customerPatch, garmentPatch, intakeRequest, settingsRequest } from '@/lib/bench-requests';
 import { lineInput, priceListInput } from '@/lib/counter-request';

@@ -3,7 +3,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useForm, type Resolver } from 'react-hook-form';
 import type { z } from 'zod';
 import { Field, FormMessage, SubmitButton } from '@/components/Field';
-import { customerPatch } from '@/lib/bench-requests';
+import { customerPatch } from '@/lib/customer-request';
 import type { CustomerCard } from '@/lib/bench-types';
 import { ApiError, fetchJson } from '@/lib/fetch-json';
 

@@ -1,11 +1,13 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useMutation, useQuery } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import { useState } from 'react';
-import { useFieldArray, useForm, type Resolver } from 'react-hook-form';
-import { describedBy, Field, FieldFrame, FormMessage, SubmitButton } from '@/components/Field';
+import { useFieldArray, useForm, useWatch, type Resolver } from 'react-hook-form';
+import { Field, FormMessage, SubmitButton } from '@/components/Field';
 import { withQuery } from '@/components/WithQuery';
 import { intakeRequest, type Intake, type IntakeInput } from '@/lib/bench-requests';
-import type { CustomerCard } from '@/lib/bench-types';
+import type { CustomerHit } from '@/lib/customer-types';
+import { CustomerSearch } from '@/components/customers/CustomerSearch';
+import { SameAsLastTime, usePreviousFittings } from '@/components/customers/SameAsLastTime';
 import { ApiError, fetchJson } from '@/lib/fetch-json';
 import { DEFAULT_EXISTING_FINISH } from '@/lib/existing-finish';
 import { ExistingFinishSelect } from './ExistingFinishSelect';
@@ -15,17 +17,26 @@ type Form = IntakeInput & { garments: NonNullable<IntakeInput['garments']> };
 const resolver = zodResolver(intakeRequest) as unknown as Resolver<Form, unknown, Intake>;
 const SELECT = 'min-h-12 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent';
 // A pair comes in with a plain hem unless the counter says otherwise (DEFAULT_EXISTING_FINISH).
-const NEW_GARMENT = { description: '', dueOn: '', assigneeId: '', existingFinish: DEFAULT_EXISTING_FINISH };
+const NEW_GARMENT = { description: '', dueOn: '', assigneeId: '', existingFinish: DEFAULT_EXISTING_FINISH, fittingFrom: '' };
 
 function Intake() {
-  const customers = useQuery({ queryKey: ['customers'], queryFn: () => fetchJson<CustomerCard[]>('/api/customers') });
   const people = useAssignees();
   const [who, setWho] = useState<'existing' | 'new'>('existing');
+  const [known, setKnown] = useState<CustomerHit | null>(null);
   const { register, control, handleSubmit, formState, setError, setValue } = useForm<Form, unknown, Intake>({
     resolver,
     defaultValues: { customerId: '', note: '', dueOn: '', garments: [{ ...NEW_GARMENT }] },
   });
   const garments = useFieldArray({ control, name: 'garments' });
+  const fittingFrom = useWatch({ control, name: 'garments' }).map((g) => g?.fittingFrom);
+  const previous = usePreviousFittings(who === 'existing' ? (known?.id ?? null) : null);
+  const offers = who === 'existing' && known ? (previous.data ?? []) : [];
+  const chooseKnown = (c: CustomerHit | null) => {
+    setKnown(c);
+    setValue('customerId', c?.id ?? '', { shouldValidate: formState.isSubmitted });
+    // Another customer's fittings are not this one's.
+    garments.fields.forEach((_, i) => setValue(`garments.${i}.fittingFrom`, ''));
+  };
   const open = useMutation({
     mutationFn: (body: Intake) => fetchJson<{ id: string }>('/api/tickets', { body }),
     onSuccess: (t) => window.location.assign(`/tickets/${t.id}`),
@@ -35,7 +46,7 @@ function Intake() {
   });
   const submit = handleSubmit((v) => {
     if (who === 'existing' && !v.customerId) return setError('customerId', { message: 'Choose a customer, or add a new one.' });
-    open.mutate(who === 'existing' ? { ...v, customer: undefined } : { ...v, customerId: null });
+    open.mutate(who === 'existing' ? { ...v, customer: undefined } : { ...v, customerId: null, garments: v.garments.map((g) => ({ ...g, fittingFrom: null })) });
   });
   const e = formState.errors;
   return (
@@ -47,16 +58,11 @@ function Intake() {
             <input type="radio" name="who" checked={who === 'existing'} onChange={() => setWho('existing')} className="size-5" /> Someone we know
           </label>
           <label className="inline-flex min-h-11 items-center gap-2">
-            <input type="radio" name="who" checked={who === 'new'} onChange={() => { setWho('new'); setValue('customerId', ''); }} className="size-5" /> A new customer
+            <input type="radio" name="who" checked={who === 'new'} onChange={() => { setWho('new'); chooseKnown(null); }} className="size-5" /> A new customer
           </label>
         </div>
         {who === 'existing' ? (
-          <FieldFrame id="customerId" label="Customer" error={e.customerId?.message}>
-            <select id="customerId" {...register('customerId')} className={SELECT} aria-invalid={e.customerId ? true : undefined} aria-describedby={describedBy('customerId', e.customerId, undefined)}>
-              <option value="">{customers.isPending ? 'Loading…' : 'Choose…'}</option>
-              {customers.data?.map((c) => <option key={c.id} value={c.id}>{c.name}{c.phone ? ` · ${c.phone}` : ''}</option>)}
-            </select>
-          </FieldFrame>
+          <CustomerSearch id="customerId" label="Find the customer" chosen={known} onChoose={chooseKnown} error={e.customerId?.message} hint="Type a name, a phone number (any part), an e-mail or a ticket number." />
         ) : (
           <div className="grid gap-3 sm:grid-cols-2">
             <Field label="Name" registration={register('customer.name')} error={e.customer?.name} id="c-name" autoComplete="off" />
@@ -85,6 +91,11 @@ function Intake() {
               <button type="button" aria-label={`Remove: garment ${i + 1}`} onClick={() => garments.remove(i)} className="min-h-12 justify-self-start rounded border-2 border-ink px-3 font-semibold">
                 Remove
               </button>
+            )}
+            {offers.length > 0 && (
+              <div className="sm:col-span-2 lg:col-span-5">
+                <SameAsLastTime garmentLabel={`garment ${i + 1}`} fittings={offers} chosen={fittingFrom[i]} onChoose={(id) => setValue(`garments.${i}.fittingFrom`, id ?? '')} />
+              </div>
             )}
           </div>
         ))}

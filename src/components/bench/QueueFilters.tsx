@@ -18,7 +18,7 @@ export function QueueFilters({ value, onChange, people, label }: Props) {
     <form role="search" aria-label="Filter the queue" onSubmit={(e) => e.preventDefault()} className="grid gap-3 rounded-lg border-2 border-rule bg-card p-3 sm:grid-cols-2 lg:grid-cols-4">
       <div className="flex flex-col gap-1">
         <label htmlFor="q-search" className="font-semibold">Customer or ticket</label>
-        <input id="q-search" type="search" value={value.search} onChange={(e) => set({ search: e.target.value })} placeholder="Ticket no. or a name" className={SELECT} autoComplete="off" />
+        <input id="q-search" type="search" value={value.search} onChange={(e) => set({ search: e.target.value })} placeholder="Ticket no., name, phone or garment" className={SELECT} autoComplete="off" />
       </div>
       <div className="flex flex-col gap-1">
         <label htmlFor="q-step" className="font-semibold">Step</label>

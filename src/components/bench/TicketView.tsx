@@ -1,7 +1,8 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import { useForm, type Resolver } from 'react-hook-form';
+import { useForm, useWatch, type Resolver } from 'react-hook-form';
+import { SameAsLastTime, usePreviousFittings } from '@/components/customers/SameAsLastTime';
 import { Field, FormMessage, SubmitButton } from '@/components/Field';
 import { withQuery } from '@/components/WithQuery';
 import { garmentInput } from '@/lib/bench-requests';
@@ -28,9 +29,11 @@ interface Props {
 type GarmentForm = z.input<typeof garmentInput>;
 const resolver = zodResolver(garmentInput) as unknown as Resolver<GarmentForm, unknown, z.output<typeof garmentInput>>;
 
-function AddGarment({ ticketId }: { ticketId: string }) {
+function AddGarment({ ticketId, customerId }: { ticketId: string; customerId: string | null }) {
   const client = useQueryClient();
-  const { register, handleSubmit, reset, setError, formState } = useForm<GarmentForm, unknown, z.output<typeof garmentInput>>({ resolver, defaultValues: { description: '', dueOn: '' } });
+  const { register, handleSubmit, reset, setError, setValue, control, formState } = useForm<GarmentForm, unknown, z.output<typeof garmentInput>>({ resolver, defaultValues: { description: '', dueOn: '', fittingFrom: '' } });
+  const fittingFrom = useWatch({ control, name: 'fittingFrom' });
+  const previous = usePreviousFittings(customerId);
   const add = useMutation({
     mutationFn: (body: z.output<typeof garmentInput>) => fetchJson(`/api/tickets/${ticketId}/garments`, { body }),
     onSuccess: () => {
@@ -56,6 +59,7 @@ function AddGarment({ ticketId }: { ticketId: string }) {
         <Field label="Due" type="date" registration={register('dueOn')} error={formState.errors.dueOn} id="add-due" />
       </div>
       {add.error && <FormMessage kind="error">{add.error.message}</FormMessage>}
+      <SameAsLastTime garmentLabel="the new garment" fittings={previous.data ?? []} chosen={fittingFrom} onChoose={(id) => setValue('fittingFrom', id ?? '')} />
       <div><SubmitButton busy={add.isPending}>Add garment</SubmitButton></div>
     </form>
   );
@@ -136,7 +140,7 @@ function Ticket({ ticketId, shopName, canAdvance, canPickup, canAddGarment, canE
           ))}
         </ul>
       </section>
-      {canAddGarment && t.status !== 'collected' && <AddGarment ticketId={t.id} />}
+      {canAddGarment && t.status !== 'collected' && <AddGarment ticketId={t.id} customerId={t.customer?.id ?? null} />}
     </div>
   );
 }

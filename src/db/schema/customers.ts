@@ -1,8 +1,7 @@
 // A shop's customers: who brought the trousers in and how to reach them.
+import { sql, type SQL } from 'drizzle-orm';
 import { pgTable, text, timestamp, uuid, index } from 'drizzle-orm/pg-core';
-import { createInsertSchema, createSelectSchema } from 'drizzle-zod';
-import { z } from 'zod';
-import { text as safeText } from '../../lib/text';
+import { createSelectSchema } from 'drizzle-zod';
 import { organization } from './auth';
 
 /** Customers, each belonging to one shop. */
@@ -15,26 +14,26 @@ export const customers = pgTable(
     phone: text('phone'),
     email: text('email'),
     notes: text('notes'),
+    /** the phone's digits alone, so "555 0101", "(555) 0101" and "5550101" are found alike */
+    phoneDigits: text('phone_digits').generatedAlwaysAs((): SQL => sql`regexp_replace(coalesce(${customers.phone}, ''), '[^0-9]', '', 'g')`),
+    /** set when the customer asked to be forgotten: personal details cleared, money records kept */
+    erasedAt: timestamp('erased_at', { withTimezone: true }),
     createdAt: timestamp('created_at', { withTimezone: true }).defaultNow().notNull(),
     // Moves on every change: the queue's ETag (services/queue.ts) shows the customer's name.
     updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull().$onUpdate(() => new Date()),
   },
-  (t) => [index('customers_shop_idx').on(t.shopId)],
+  // Search as you type is a prefix match (LIKE 'q%'): text_pattern_ops lets these indexes serve it
+  // whatever the collation; pg_trgm is not there on PGlite.
+  (t) => [
+    index('customers_shop_idx').on(t.shopId),
+    index('customers_shop_name_idx').using('btree', t.shopId, sql`lower(${t.name}) text_pattern_ops`),
+    index('customers_shop_email_idx').using('btree', t.shopId, sql`lower(${t.email}) text_pattern_ops`),
+    index('customers_shop_phone_idx').using('btree', t.shopId, sql`${t.phoneDigits} text_pattern_ops`),
+  ],
 );
 
 /** A customer row as read. */
 export const customerRow = createSelectSchema(customers);
-
-/** What a member types to add a customer (the shop comes from the session). */
-export const customerInput = createInsertSchema(customers, {
-  // text(): drizzle-zod's own strings let a NUL or a lone surrogate through to PostgreSQL.
-  name: () => safeText().trim().min(1, 'Give the customer a name').max(120),
-  phone: () => safeText().trim().max(40),
-  email: () => z.email('Enter an e-mail address like name@example.com').max(200),
-  notes: () => safeText().max(2000),
-})
-  .pick({ name: true, phone: true, email: true, notes: true })
-  .partial({ phone: true, email: true, notes: true });
 
 /** A customer as the API returns it. */
 export type Customer = typeof customers.$inferSelect;

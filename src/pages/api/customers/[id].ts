@@ -1,7 +1,7 @@
 // One customer: read, or change their name, phone, e-mail or notes.
 import type { APIRoute } from 'astro';
 import { guard, readBody, run } from '@/lib/api';
-import { customerPatch } from '@/lib/bench-requests';
+import { customerPatch } from '@/lib/customer-request';
 import { getCustomer, updateCustomer } from '@/services/customers';
 
 /** The customer, when they are the shop's. */
