@@ -1,6 +1,13 @@
 // The full-size chalk guide worked out in points: 1 in = 72 pt exactly, 25 mm = 70.866 pt.
-import type { Unit } from '@/lib/allowance/types';
-import type { SheetLegGroup } from './content';
+import type { Len, Unit } from '@/lib/allowance/types';
+
+/** What a strip needs of a leg group (content.ts's SheetLegGroup has these; declared here so the
+ * sheet's content can use the ruler without an import cycle). */
+export interface GuideGroup {
+  label: string;
+  slopeNote: string | null;
+  lines: { n: number; name: string; cut: boolean; belowMark: Len }[];
+}
 
 const PT_PER_MM = 72 / 25.4;
 
@@ -114,7 +121,7 @@ function matchPoint(ticks: GuideTick[], from: number, limit: number): number {
 }
 
 /** Lays out one strip per group, each cut into segments of at most maxLength points (the paper's limit), every chalk line on one of them. */
-export function guideStrips(groups: SheetLegGroup[], unit: Unit, maxLength: number): GuideStrip[] {
+export function guideStrips(groups: GuideGroup[], unit: Unit, maxLength: number): GuideStrip[] {
   // Letters run on across the strips, so the left leg's A is never laid on the right leg's.
   let letter = 0;
   return groups.map((g) => {
