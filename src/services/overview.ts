@@ -2,7 +2,7 @@
 // with SQL aggregates on the shop's own rows only. Days are the shop's, in its time zone: the day
 // boundaries come from `dayBounds` (Intl) and SQL's width_bucket puts each moment between them, so
 // the database's own time-zone data never decides a day.
-import { and, count, eq, gte, inArray, lt, ne, notInArray, sql, type SQL } from 'drizzle-orm';
+import { and, count, eq, gte, inArray, lt, ne, notInArray, sql, type SQL, type SQLWrapper } from 'drizzle-orm';
 import { db } from '@/db';
 import { auditEvents, counterSettings, garments, payments } from '@/db/schema';
 import { GARMENT_STEPS, stepLabel, type GarmentStep } from '@/lib/garment-steps';
@@ -26,7 +26,7 @@ export async function shopOverview(shopId: string, period: Period, now = new Dat
   const end = bounds[bounds.length - 1]!;
   // width_bucket gives 1 for the first day … n for the last (0 and n+1 lie outside, filtered out).
   const edges = sql.join(bounds.map((b) => sql`${b.toISOString()}::timestamptz`), sql`, `);
-  const bucket = (at: SQL | typeof garments.createdAt) => sql<number>`width_bucket(${at}, array[${edges}])`.mapWith(Number);
+  const bucket = (at: SQLWrapper) => sql<number>`width_bucket(${at}, array[${edges}])`.mapWith(Number);
   const n = sql<number>`count(*)`.mapWith(Number);
   const moved = (to: GarmentStep) =>
     and(eq(auditEvents.shopId, shopId), eq(auditEvents.action, 'garment.moved'), sql`${auditEvents.detail}->>'to' = ${to}`, sql`${auditEvents.detail}->>'back' is null`, gte(auditEvents.at, start), lt(auditEvents.at, end));
