@@ -3,7 +3,8 @@
 // downloaded; a tailor finds neither the link nor the page.
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { ready, sharedBrowser, tabletPage } from './browser';
+import { sharedBrowser, tabletPage } from './browser';
+import { settled } from './layout-checks';
 import { signInAs } from './sign-in';
 
 const browser = sharedBrowser();
@@ -33,7 +34,7 @@ describe('the lead reads the shop week at a glance', () => {
     scripts.length = 0;
     await page.getByRole('navigation', { name: 'Shop' }).getByRole('link', { name: 'Overview' }).click();
     await page.waitForURL((u) => u.pathname === '/overview');
-    await ready(page);
+    await settled(page);
     expect(scripts).toEqual([]);
     expect(await page.locator('script[src], script[type="module"]').count()).toBe(0);
     await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toMatch(/^This week at Pinmark & Hem/);
@@ -44,7 +45,7 @@ describe('the lead reads the shop week at a glance', () => {
       if (period === '4w') {
         await page.getByRole('navigation', { name: 'Period' }).getByRole('link', { name: 'Last 4 weeks' }).click();
         await page.waitForURL((u) => u.searchParams.get('period') === '4w');
-        await ready(page);
+        await settled(page);
       }
       const rows = await page.locator('table[data-table="days"] tbody tr').count();
       expect(rows).toBe(period === 'week' ? 7 : 28);
