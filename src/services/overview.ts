@@ -4,7 +4,7 @@
 // the database's own time-zone data never decides a day.
 import { and, count, eq, gte, inArray, lt, ne, notInArray, sql, type SQL, type SQLWrapper } from 'drizzle-orm';
 import { db } from '@/db';
-import { auditEvents, counterSettings, garments, payments } from '@/db/schema';
+import { auditEvents, counterSettings, garments, payments, refunds } from '@/db/schema';
 import { GARMENT_STEPS, stepLabel, type GarmentStep } from '@/lib/garment-steps';
 import type { Overview, OverviewDay } from '@/lib/overview/overview-types';
 import { isCurrency, type Currency } from '@/lib/pricing/money';
@@ -31,7 +31,7 @@ export async function shopOverview(shopId: string, period: Period, now = new Dat
   const moved = (to: GarmentStep) =>
     and(eq(auditEvents.shopId, shopId), eq(auditEvents.action, 'garment.moved'), sql`${auditEvents.detail}->>'to' = ${to}`, sql`${auditEvents.detail}->>'back' is null`, gte(auditEvents.at, start), lt(auditEvents.at, end));
 
-  const [takenIn, movedOut, pickedUp, due, before, overdueNow, waiting, takings, ready] = await Promise.all([
+  const [takenIn, movedOut, pickedUp, due, before, overdueNow, waiting, takings, givenBack, ready] = await Promise.all([
     db.select({ b: bucket(garments.createdAt), n }).from(garments).where(and(eq(garments.shopId, shopId), gte(garments.createdAt, start), lt(garments.createdAt, end))).groupBy(sql`1`),
     // Handed over one garment at a time…
     db.select({ b: bucket(auditEvents.at), n }).from(auditEvents).where(moved('collected')).groupBy(sql`1`),
@@ -57,8 +57,16 @@ export async function shopOverview(shopId: string, period: Period, now = new Dat
     db
       .select({ b: bucket(payments.at), method: payments.method, sum: sql<number>`sum(${payments.amountMinor})`.mapWith(Number), n })
       .from(payments)
-      .where(and(eq(payments.shopId, shopId), gte(payments.at, start), lt(payments.at, end)))
+      // A payment from kept credit brings no money in: it was taken when the credit was.
+      .where(and(eq(payments.shopId, shopId), ne(payments.method, 'credit'), gte(payments.at, start), lt(payments.at, end)))
       .groupBy(sql`1`, payments.method),
+    // Money given back (done; a pending online refund has not left yet), out of the takings of its
+    // method on the day it went; a credit kept for the customer is still in the till.
+    db
+      .select({ b: bucket(refunds.at), method: refunds.method, sum: sql<number>`sum(${refunds.amountMinor})`.mapWith(Number) })
+      .from(refunds)
+      .where(and(eq(refunds.shopId, shopId), eq(refunds.status, 'done'), ne(refunds.method, 'credit'), gte(refunds.at, start), lt(refunds.at, end)))
+      .groupBy(sql`1`, refunds.method),
     readyTimes(shopId, moved('ready')),
   ]);
 
@@ -68,6 +76,7 @@ export async function shopOverview(shopId: string, period: Period, now = new Dat
   for (const r of takenIn) at(r.b).takenIn += r.n;
   for (const r of [...movedOut, ...pickedUp]) at(r.b).handedOver += r.n;
   for (const r of takings) at(r.b).takings[r.method] = (at(r.b).takings[r.method] ?? 0) + r.sum;
+  for (const r of givenBack) at(r.b).takings[r.method] = (at(r.b).takings[r.method] ?? 0) - r.sum;
   for (const r of due) {
     const d = perDay.find((p) => p.day === r.day);
     if (!d) continue;
@@ -75,11 +84,10 @@ export async function shopOverview(shopId: string, period: Period, now = new Dat
     if (r.day! < today) d.overdue += r.open;
     else d.dueOpen += r.open;
   }
-  const methods = new Map<string, { amountMinor: number; payments: number }>();
-  for (const r of takings) {
-    const m = methods.get(r.method) ?? { amountMinor: 0, payments: 0 };
-    methods.set(r.method, { amountMinor: m.amountMinor + r.sum, payments: m.payments + r.n });
-  }
+  const methods = new Map<string, { amountMinor: number; payments: number; refundedMinor: number }>();
+  const method = (name: string) => methods.get(name) ?? methods.set(name, { amountMinor: 0, payments: 0, refundedMinor: 0 }).get(name)!;
+  for (const r of takings) Object.assign(method(r.method), { amountMinor: method(r.method).amountMinor + r.sum, payments: method(r.method).payments + r.n });
+  for (const r of givenBack) Object.assign(method(r.method), { amountMinor: method(r.method).amountMinor - r.sum, refundedMinor: method(r.method).refundedMinor + r.sum });
   const renames = bench.stepLabels;
   return {
     period,

@@ -206,7 +206,7 @@ function describeAttempt(a: Attempt): string {
 }
 
 // Shop-wide settings a valid fuzzed write may change, put back afterwards for the other test files.
-let saved: { bench: unknown; prices: Record<string, unknown>; name: string; defaultPreset?: string } | undefined;
+let saved: { bench: unknown; timeZone: string; prices: Record<string, unknown>; name: string; defaultPreset?: string } | undefined;
 
 beforeAll(async () => {
   lead = await signIn(DEMO.lead);

@@ -13,7 +13,7 @@ const { seedBenchDemo } = await import('@/services/demo-bench-seed');
 const { seedCounterDemo } = await import('@/services/demo-counter-seed');
 const { seedOverviewDemo } = await import('@/services/demo-overview-seed');
 const { shopOverview } = await import('@/services/overview');
-const { counterSummary } = await import('@/services/payments');
+const { counterSummary } = await import('@/services/counter/summary');
 const { makeShop } = await import('./fixtures');
 
 let shop: Shop;
@@ -39,8 +39,8 @@ describe('demo overview seed', () => {
     expect(sum((d) => d.takenIn)).toBe(7);
     expect(sum((d) => d.handedOver)).toBe(1);
     expect(o.takings).toEqual([
-      { method: 'cash', amountMinor: 650 + 1500, payments: 2 },
-      { method: 'card', amountMinor: 1000, payments: 1 },
+      { method: 'cash', amountMinor: 650 + 1500, payments: 2, refundedMinor: 0 },
+      { method: 'card', amountMinor: 1000, payments: 1, refundedMinor: 0 },
     ]);
     expect(o.intakeToReady.garments).toBeGreaterThanOrEqual(1);
     expect(o.intakeToReady.averageDays).toBeGreaterThan(0);
@@ -53,7 +53,7 @@ describe('demo overview seed', () => {
   it('keeps the counter sums: the linen pair paid in full, the chinos with a deposit below their total', async () => {
     const rows = await db.select().from(tickets).where(eq(tickets.shopId, shop.shopId));
     const linen = await counterSummary(shop, rows.find((t) => t.status === 'collected')!.id);
-    expect([linen.total, linen.paid, linen.due]).toEqual([1650, 1650, 0]);
+    expect([linen.total, linen.paid, linen.due, linen.credit]).toEqual([1650, 1650, 0, 0]);
     const chinos = await counterSummary(shop, rows.find((t) => t.number === 1002)!.id);
     expect([chinos.total, chinos.paid, chinos.due]).toEqual([3300, 1500, 1800]);
   });

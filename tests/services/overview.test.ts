@@ -7,7 +7,7 @@ import type { Shop } from './fixtures';
 vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
-const { auditEvents, customers, garments, payments, tickets } = await import('@/db/schema');
+const { auditEvents, customers, garments, payments, refunds, tickets } = await import('@/db/schema');
 const { shopOverview } = await import('@/services/overview');
 const { saveShopTimeZone, shopTimeZone } = await import('@/services/shop-time-zone');
 const { countByDay, dayBounds } = await import('@/lib/overview/shop-days');
@@ -43,7 +43,7 @@ async function moved(shop: Shop, garmentId: string, to: string, at: string, back
   await db.insert(auditEvents).values({ shopId: shop.shopId, action: 'garment.moved', subject: garmentId, detail: back ? { to, back: true } : { to }, at: new Date(at) });
 }
 
-async function paid(shop: Shop, ticketId: string, method: 'cash' | 'card' | 'online', amountMinor: number, at: string, purpose: 'deposit' | 'balance' = 'deposit') {
+async function paid(shop: Shop, ticketId: string, method: 'cash' | 'card' | 'online' | 'credit', amountMinor: number, at: string, purpose: 'deposit' | 'balance' = 'deposit') {
   await db.insert(payments).values({ shopId: shop.shopId, ticketId, purpose, method, amountMinor, currency: 'EUR', at: new Date(at) });
 }
 
@@ -107,8 +107,8 @@ describe('the shop overview', () => {
     expect(o.overdueNow).toBe(2);
     expect(o.days.map((d) => d.takings)).toEqual([{ cash: 1650 }, {}, {}, { card: 2400, cash: 550 }, {}, {}, {}]);
     expect(o.takings).toEqual([
-      { method: 'card', amountMinor: 2400, payments: 1 },
-      { method: 'cash', amountMinor: 2200, payments: 2 },
+      { method: 'card', amountMinor: 2400, payments: 1, refundedMinor: 0 },
+      { method: 'cash', amountMinor: 2200, payments: 2, refundedMinor: 0 },
     ]);
     for (const t of o.takings) expect(o.days.reduce((s, d) => s + (d.takings[t.method] ?? 0), 0)).toBe(t.amountMinor);
     expect(o.intakeToReady).toEqual({ garments: 1, averageDays: 4 });
@@ -128,7 +128,7 @@ describe('the shop overview', () => {
     const o = await shopOverview(b.shopId, 'week', NOW);
     expect(o.days.map((d) => d.takenIn)).toEqual([0, 6, 0, 0, 0, 0, 0]);
     expect(o.days.map((d) => d.handedOver)).toEqual([0, 0, 6, 0, 0, 0, 0]);
-    expect(o.takings).toEqual([{ method: 'card', amountMinor: 600_000, payments: 6 }]);
+    expect(o.takings).toEqual([{ method: 'card', amountMinor: 600_000, payments: 6, refundedMinor: 0 }]);
     expect(o.intakeToReady).toEqual({ garments: 6, averageDays: 1 });
     expect(o.overdueBefore).toBe(0);
     expect(o.waiting.reduce((s, w) => s + w.garments, 0)).toBe(6);
@@ -138,6 +138,22 @@ describe('the shop overview', () => {
     expect(e.days).toHaveLength(28);
     expect(e.days.every((d) => d.takenIn === 0 && d.handedOver === 0 && Object.keys(d.takings).length === 0)).toBe(true);
     expect(e.intakeToReady).toEqual({ garments: 0, averageDays: null });
+  });
+
+  it('takings are money in: refunds given back come off their method and day, kept credit and pending refunds do not', async () => {
+    const shop = await makeShop('Overview Refunds');
+    const t = await ticketOf(shop);
+    await paid(shop, t.id, 'card', 3000, '2026-03-23T10:00:00Z');
+    await paid(shop, t.id, 'credit', 500, '2026-03-24T10:00:00Z', 'balance');
+    const refund = (method: 'cash' | 'card' | 'online' | 'credit', status: 'pending' | 'done' | 'failed', amountMinor: number, at: string) =>
+      db.insert(refunds).values({ shopId: shop.shopId, ticketId: t.id, method, status, amountMinor, currency: 'EUR', at: new Date(at) });
+    await refund('card', 'done', 700, '2026-03-25T10:00:00Z');
+    await refund('online', 'pending', 100, '2026-03-25T10:00:00Z');
+    await refund('cash', 'failed', 100, '2026-03-25T10:00:00Z');
+    await refund('credit', 'done', 200, '2026-03-25T10:00:00Z');
+    const o = await shopOverview(shop.shopId, 'week', NOW);
+    expect(o.takings).toEqual([{ method: 'card', amountMinor: 2300, payments: 1, refundedMinor: 700 }]);
+    expect(o.days.map((d) => d.takings)).toEqual([{ card: 3000 }, {}, { card: -700 }, {}, {}, {}, {}]);
   });
 
   it('four weeks reach back three weeks before this one', async () => {

@@ -4,10 +4,13 @@ import { PAYMENT_METHODS } from '../../db/schema/payments';
 import { CURRENCIES } from '../pricing/money';
 import type { Overview } from './overview-types';
 
-/** The payment methods to give a column: the usual ones, then any other that took money. */
+// Paying from kept credit brings no money in: no takings column.
+const MONEY_IN: readonly string[] = PAYMENT_METHODS.filter((m) => m !== 'credit');
+
+/** The payment methods to give a column: cash, card, online, then any other that took money. */
 export function takingMethods(o: Overview): string[] {
-  const seen = o.takings.map((t) => t.method).filter((m) => !(PAYMENT_METHODS as readonly string[]).includes(m));
-  return [...PAYMENT_METHODS, ...seen];
+  const seen = o.takings.map((t) => t.method).filter((m) => !MONEY_IN.includes(m));
+  return [...MONEY_IN, ...seen];
 }
 
 /** The CSV text of the overview (header row, a row per day, a totals row; CRLF as RFC 4180 says). */

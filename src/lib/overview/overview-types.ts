@@ -17,7 +17,7 @@ export interface OverviewDay {
   dueOpen: number;
   /** garments due that day, not ready yet, the day past */
   overdue: number;
-  /** money taken that day per payment method, in minor units */
+  /** money taken that day per payment method less refunds given back that day, in minor units */
   takings: Record<string, number>;
 }
 
@@ -35,8 +35,8 @@ export interface Overview {
   overdueNow: number;
   /** garments at each step now, received to ready (collected is handed over, not waiting) */
   waiting: { step: GarmentStep; label: string; garments: number }[];
-  /** money taken in the period per payment method, in minor units */
-  takings: { method: string; amountMinor: number; payments: number }[];
+  /** money taken in the period per payment method, less what was refunded (refundedMinor), in minor units */
+  takings: { method: string; amountMinor: number; payments: number; refundedMinor: number }[];
   /** garments that became ready in the period, and their average days from intake (null: none) */
   intakeToReady: { garments: number; averageDays: number | null };
 }
