@@ -32,6 +32,8 @@ export const statements = {
   notices: ['send'],
   // The messages the shop sent (invitations, ready notices), shown where mail goes to the local capture.
   messages: ['read'],
+  // The shop's week at a glance (/overview): intake, hand-overs, due work, takings.
+  overview: ['read'],
 } as const;
 
 /** A resource name. */
@@ -58,6 +60,7 @@ export const grants = {
     cutsheets: ['print'],
     notices: ['send'],
     messages: ['read'],
+    overview: ['read'],
   },
   tailor: {
     prices: ['read'],

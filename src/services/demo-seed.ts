@@ -9,6 +9,7 @@ import type { Role } from '@/lib/roles';
 import { seedHousePresets } from './presets';
 import { seedBenchDemo } from './demo-bench-seed';
 import { seedCounterDemo } from './demo-counter-seed';
+import { seedOverviewDemo } from './demo-overview-seed';
 
 /** The demo shop's name. */
 export const DEMO_SHOP = 'Pinmark & Hem';
@@ -53,5 +54,6 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
   await seedBenchDemo(shopId, people.map((p) => p.id), ids);
   await seedHousePresets(shopId);
   await seedCounterDemo(shopId);
+  await seedOverviewDemo(shopId, ids);
   return true;
 }

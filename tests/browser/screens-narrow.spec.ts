@@ -41,6 +41,7 @@ function screens(ticketId: string, garmentId: string): Record<string, string> {
     staff: '/staff',
     'sent-messages': '/sent-messages',
     'bench-settings': '/bench-settings',
+    overview: '/overview?period=4w',
   };
 }
 const SCREEN_NAMES = Object.keys(screens('', ''));

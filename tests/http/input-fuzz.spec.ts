@@ -78,6 +78,7 @@ const SEEDS: Record<string, unknown> = {
   'POST tickets/[id]/refunds': { method: 'cash', amountMinor: 100, reason: 'fuzzing a refund' },
   'POST tickets': { customer: { name: 'Fuzz Walk-in', phone: '555' }, note: 'fuzz', dueOn: '2027-01-02', garments: [{ description: 'Fuzz trousers' }] },
   'PUT bench-settings': { scale: 'in16', stepLabels: { marked: 'Chalked' } },
+  'PUT shop-time-zone': { timeZone: 'Europe/Berlin' },
   'POST auth/[...all]': { email: 'nobody-fuzz@example.com', password: 'not-the-password', name: 'Fuzz', token: 'x', newPassword: 'another-long-one' },
 };
 
@@ -205,7 +206,7 @@ function describeAttempt(a: Attempt): string {
 }
 
 // Shop-wide settings a valid fuzzed write may change, put back afterwards for the other test files.
-let saved: { bench: unknown; prices: Record<string, unknown>; name: string; defaultPreset?: string } | undefined;
+let saved: { bench: unknown; timeZone: string; prices: Record<string, unknown>; name: string; defaultPreset?: string } | undefined;
 
 beforeAll(async () => {
   lead = await signIn(DEMO.lead);
@@ -225,6 +226,7 @@ beforeAll(async () => {
   const prices = await call('GET', '/api/prices', { cookie: lead });
   saved = {
     bench: (await call('GET', '/api/bench-settings', { cookie: lead })).body,
+    timeZone: (await call('GET', '/api/shop-time-zone', { cookie: lead })).body.timeZone,
     prices: prices.body,
     name: (await call('GET', '/api/me', { cookie: lead })).body.name,
     defaultPreset: presets.body.find((p: { house: boolean; isDefault: boolean }) => p.house && p.isDefault)?.id,
@@ -239,6 +241,7 @@ afterAll(async () => {
   const { currency, hours, location, autoReadyNotice, items } = saved.prices as Record<string, unknown>;
   await call('PUT', '/api/prices', { cookie, body: { currency, hours, location, autoReadyNotice, items } });
   await call('PUT', '/api/bench-settings', { cookie, body: saved.bench });
+  await call('PUT', '/api/shop-time-zone', { cookie, body: { timeZone: saved.timeZone } });
   await call('POST', '/api/auth/update-user', { cookie, body: { name: saved.name } });
   if (saved.defaultPreset) await call('PATCH', `/api/presets/${saved.defaultPreset}`, { cookie, body: { isDefault: true } });
 });

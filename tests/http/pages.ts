@@ -43,6 +43,7 @@ export function pagePaths(ids: PageIds): Record<string, string> {
     'garments/[id]': `/garments/${ids.garmentId}`,
     'invite/[id]': `/invite/${ids.invitationId}`,
     'sent-messages': '/sent-messages',
+    overview: '/overview',
     paid: '/paid',
     presets: '/presets',
     prices: '/prices',

@@ -549,6 +549,42 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       expect: all(400),
     },
   },
+  overview: {
+    GET: {
+      request: () => ({ path: '/api/overview?period=4w' }),
+      expect: signedIn(403, { lead: 200, other: 200 }),
+      check: (a, actor) => {
+        expect(a.body.days).toHaveLength(28);
+        const takenIn = a.body.days.reduce((s: number, d: { takenIn: number }) => s + d.takenIn, 0);
+        // The demo shop's seeded weeks; the other shop's figures are its own (a new shop's, empty).
+        if (actor === 'lead') expect(a.body.takings.length).toBeGreaterThan(0);
+        if (actor === 'other') expect([takenIn, a.body.takings]).toEqual([0, []]);
+      },
+    },
+  },
+  'overview.csv': {
+    GET: {
+      request: () => ({ path: '/api/overview.csv?period=week' }),
+      expect: signedIn(403, { lead: 200, other: 200 }),
+      check: (a) => {
+        expect(a.headers.get('content-type')).toBe('text/csv; charset=utf-8');
+        expect(String(a.body).split('\r\n')[0]).toMatch(/^date,taken_in,handed_over,/);
+      },
+    },
+  },
+  'shop-time-zone': {
+    GET: {
+      request: () => ({ path: '/api/shop-time-zone' }),
+      expect: signedIn(200),
+      check: (a) => expect(typeof a.body.timeZone).toBe('string'),
+    },
+    PUT: {
+      // The demo shop keeps the default zone: the browser stories run on the same server.
+      request: () => ({ path: '/api/shop-time-zone', body: { timeZone: 'Europe/London' } }),
+      expect: signedIn(403, { lead: 200, other: 200 }),
+      check: (a) => expect(a.body).toEqual({ timeZone: 'Europe/London', chosen: true }),
+    },
+  },
   'sent-messages': {
     GET: {
       request: () => ({ path: '/api/sent-messages' }),

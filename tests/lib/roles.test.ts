@@ -15,7 +15,7 @@ describe('roles', () => {
   it('only the lead manages staff, house presets, prices and settings', () => {
     const leadOnly: Permission[] = [
       ['staff', 'read'], ['staff', 'invite'], ['staff', 'change-role'], ['staff', 'remove'],
-      ['presets', 'manage-house'], ['prices', 'update'], ['settings', 'update'], ['messages', 'read'], ['tickets', 'reopen'],
+      ['presets', 'manage-house'], ['prices', 'update'], ['settings', 'update'], ['messages', 'read'], ['tickets', 'reopen'], ['overview', 'read'],
       ['invitation', 'create'], ['member', 'update'], ['member', 'delete'],
     ];
     for (const p of leadOnly) for (const role of ROLES) expect(can(role, p), `${role} ${p.join(':')}`).toBe(role === 'lead');

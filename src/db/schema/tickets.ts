@@ -88,6 +88,8 @@ export const shopSettings = pgTable('shop_settings', {
   shopId: text('shop_id').primaryKey().references(() => organization.id, { onDelete: 'cascade' }),
   scale: text('scale', { enum: ['in8', 'in16', 'cm', 'mm'] }).notNull().default('in8'),
   stepLabels: jsonb('step_labels').notNull().default({}),
+  /** the shop's IANA time zone, where its days begin and end; null: DEFAULT_TIME_ZONE (src/lib/overview/shop-days.ts) */
+  timeZone: text('time_zone'),
   updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull(),
 });
 
