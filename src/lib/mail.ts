@@ -21,6 +21,8 @@ export interface Mail {
   to: string;
   subject: string;
   text: string;
+  /** files sent with it (a receipt's PDF) */
+  attachments?: { filename: string; content: Buffer; contentType: string }[];
 }
 
 /** Sends one message and records which shop (if any) caused it; throws when the SMTP host refuses it. */

@@ -3,8 +3,8 @@
 import { index, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { organization } from './auth';
 
-/** What a message was: shop mail (invitation, ready notice) or account mail (password reset). */
-export const SENT_MAIL_KINDS = ['invitation', 'ready-notice', 'password-reset'] as const;
+/** What a message was: shop mail (invitation, ready notice, receipt) or account mail (password reset). */
+export const SENT_MAIL_KINDS = ['invitation', 'ready-notice', 'receipt', 'password-reset'] as const;
 /** A kind of sent message. */
 export type SentMailKind = (typeof SENT_MAIL_KINDS)[number];
 
