@@ -14,7 +14,7 @@ const SEED = 20261203;
 // Inputs per route file (split over its methods and the two callers); PDF routes render, so fewer.
 const RUNS = 80;
 const PDF_RUNS = 15;
-const PDF_ROUTES = new Set(['garments/[id]/sheet', 'queue/sheets', 'plan/sheet', 'tickets/[id]/claim-slip']);
+const PDF_ROUTES = new Set(['garments/[id]/sheet', 'queue/sheets', 'plan/sheet', 'tickets/[id]/claim-slip', 'tickets/[id]/payments/[paymentId]/receipt']);
 // better-auth's catch-all holds a dozen endpoints: more inputs.
 const AUTH_RUNS = 150;
 

@@ -8,6 +8,7 @@ export interface Captured {
   to: string[];
   subject: string;
   text: string;
+  attachments?: { filename: string; contentType: string; size: number }[];
 }
 
 /** Waits for the newest message to `to` and returns it. */

@@ -125,6 +125,14 @@ async function creditTicket(): Promise<string> {
   return id;
 }
 
+/** The receipt path of a cash payment of 10.00 on a fresh priced ticket (no customer, so no e-mail). */
+async function receiptPath(): Promise<string> {
+  const id = await pricedTicket();
+  const paid = await call('POST', `/api/tickets/${id}/payments`, { cookie: cookies.lead, body: { method: 'cash', amountMinor: 1000 } });
+  expect(paid.status).toBe(201);
+  return `/api/tickets/${id}/payments/${paid.body.payments[0].id}/receipt`;
+}
+
 /** The path that voids the only line of a fresh priced ticket. */
 async function lineToVoid(): Promise<string> {
   const id = await pricedTicket();
@@ -501,6 +509,18 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       request: async () => ({ path: `/api/tickets/${await pricedTicket()}/payments/link` }),
       expect: signedIn(403, { lead: 201, counter: 201, other: 404 }),
       check: (a) => expect(a.body.link).toMatchObject({ amountMinor: 2400, status: 'open', url: expect.stringMatching(/^http:\/\/127\.0\.0\.1:\d+\/pay\/cs_test_/) }),
+    },
+  },
+  'tickets/[id]/payments/[paymentId]/receipt': {
+    GET: {
+      request: async () => ({ path: await receiptPath() }),
+      expect: signedIn(200, { apprentice: 403, other: 404 }),
+      check: (a) => expect(String(a.body).startsWith('%PDF-')).toBe(true),
+    },
+    POST: {
+      // The fixture's ticket has no customer, so no address to e-mail: those allowed get 422.
+      request: async () => ({ path: await receiptPath() }),
+      expect: signedIn(403, { lead: 422, counter: 422, other: 404 }),
     },
   },
   'tickets/[id]/notices': {

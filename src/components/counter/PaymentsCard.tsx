@@ -114,6 +114,30 @@ function PayLink({ s }: { s: CounterSummary }) {
   );
 }
 
+/** A payment's receipt: printed as a PDF, or e-mailed to the customer (refused, with the reason, without an address). */
+function PaymentReceipt({ s, paymentId, canSend }: { s: CounterSummary; paymentId: string; canSend: boolean }) {
+  const send = useCounterAction(s.ticket.id, () => post<{ to: string }>(s.ticket.id, `payments/${paymentId}/receipt`));
+  return (
+    <div className="mt-1 flex flex-wrap items-center gap-2">
+      <a
+        href={`/api/tickets/${s.ticket.id}/payments/${paymentId}/receipt`}
+        target="_blank"
+        rel="noopener"
+        className="inline-flex min-h-11 items-center rounded border-2 border-accent px-3 text-base font-semibold text-accent"
+      >
+        Receipt
+      </a>
+      {canSend && (
+        <button type="button" onClick={() => send.mutate(undefined)} disabled={send.isPending} className="min-h-11 rounded border-2 border-accent px-3 text-base font-semibold text-accent disabled:opacity-50">
+          E-mail receipt
+        </button>
+      )}
+      {send.isSuccess && <FormMessage kind="ok">Receipt sent to {send.data.to}.</FormMessage>}
+      {send.error && <FormMessage kind="error">{send.error.message}</FormMessage>}
+    </div>
+  );
+}
+
 /** Total, paid and due (or the credit owed) in large figures, the money on record, and the next step. */
 export function PaymentsCard({ s, canTake }: { s: CounterSummary; canTake: boolean }) {
   const settled = s.total > 0 && s.due === 0 && s.credit === 0;
@@ -163,6 +187,7 @@ export function PaymentsCard({ s, canTake }: { s: CounterSummary; canTake: boole
                 ({dateTimeText(p.at)}
                 {p.takenByName ? `, taken by ${p.takenByName}` : p.method === 'online' ? ', through the payment link' : ''})
               </span>
+              <PaymentReceipt s={s} paymentId={p.id} canSend={canTake} />
             </li>
           ))}
           {s.refunds.map((r) => (
