@@ -214,7 +214,8 @@ ${open ? `<form method="post"><button type="submit">Pay ${escape(money(session.a
       }
       // Like the hosted service: back to the shop's page once paid, when it gave one.
       if (session.success_url) {
-        res.writeHead(303, { location: session.success_url });
+        // The hosted service fills in the session's id where the return address asks for it.
+        res.writeHead(303, { location: session.success_url.replaceAll('{CHECKOUT_SESSION_ID}', session.id) });
         return res.end();
       }
       return send(

@@ -62,7 +62,8 @@ describe('online payment through the local fake', () => {
     expect(pagehtml).toContain('€20.00');
     const paid = await fetch(url, { method: 'POST', redirect: 'manual' });
     expect(paid.status).toBe(303);
-    expect(paid.headers.get('location')).toBe(`${inject('baseURL')}/paid`);
+    // Back to /paid with the session filled in, as the hosted service does.
+    expect(paid.headers.get('location')).toBe(`${inject('baseURL')}/paid?session_id=${url.split('/pay/')[1]}`);
 
     const after = await call('GET', `/api/tickets/${id}/payments`, { cookie: counter });
     expect([after.body.total, after.body.paid, after.body.due]).toEqual([2400, 2400, 0]);
@@ -77,6 +78,36 @@ describe('online payment through the local fake', () => {
     const handed = await call('POST', `/api/tickets/${id}/pickup`, { cookie: counter });
     expect(handed.status).toBe(200);
     expect(handed.body.ticket.status).toBe('collected');
+  });
+
+  it('/paid shows the ticket number and amount its session proves, and nothing of the shop or customer (issue 14)', async () => {
+    const id = await readyPricedTicket();
+    const number = (await call('GET', `/api/tickets/${id}`, { cookie: counter })).body.number;
+    await call('POST', `/api/tickets/${id}/payments`, { cookie: counter, body: { method: 'cash', amountMinor: 400 } });
+    const made = await call('POST', `/api/tickets/${id}/payments/link`, { cookie: counter });
+    const sid = String(made.body.link.url).split('/pay/')[1];
+    // Before paying: the session is known and open, so the page says it is being confirmed.
+    const before = await call('GET', `/paid?session_id=${sid}`);
+    expect(before.status).toBe(200);
+    expect(before.body).toContain(`T-${number}`);
+    expect(before.body).toContain('Being paid');
+    const paid = await fetch(made.body.link.url, { method: 'POST', redirect: 'manual' });
+    const back = new URL(paid.headers.get('location')!);
+    const page = await call('GET', back.pathname + back.search);
+    expect(page.status).toBe(200);
+    expect(page.headers.get('cache-control')).toBe('no-store');
+    const dl = String(page.body).match(/<dl[^>]*data-testid="paid-session"[\s\S]*?<\/dl>/)?.[0] ?? '';
+    expect(dl.replace(/<[^>]+>/g, ' ').replace(/\s+/g, ' ').trim()).toBe(`Ticket T-${number} Paid €20.00`);
+    // Nothing personal or of the shop: not the customer's name, not the shop's name.
+    expect(page.body).not.toContain('Perrin Loame');
+    expect(page.body).not.toContain('Pinmark');
+    // An unknown, malformed or missing session shows no ticket at all.
+    for (const q of ['?session_id=cs_test_000000000000000000000000', '?session_id=../../etc', '']) {
+      const other = await call('GET', `/paid${q}`);
+      expect(other.status).toBe(200);
+      expect(other.body).not.toContain('paid-session');
+      expect(other.body).not.toMatch(/T-\d+/);
+    }
   });
 
   it('refunds a credit owed through the payment service: pending, then done by its signed webhook (issue 14)', async () => {

@@ -131,7 +131,8 @@ export async function createPaymentLink(actor: Actor, ticketId: string, appOrigi
         ],
         client_reference_id: ticketId,
         metadata: { ticketId, shopId: actor.shopId, linkId: id },
-        success_url: `${appOrigin}/paid`,
+        // The service fills in the session's id: /paid shows what that session proves, nothing more.
+        success_url: `${appOrigin}/paid?session_id={CHECKOUT_SESSION_ID}`,
         cancel_url: `${appOrigin}/paid?cancelled=1`,
       };
       const [link] = await tx
