@@ -69,3 +69,9 @@ export const refundInput = z.object({
 
 /** A notice the counter sends by hand. */
 export const noticeInput = z.object({ kind: z.literal('ready', { error: 'Only the ready notice can be sent.' }) });
+
+/** The claim slip's copies: 1–3 slips and 0–3 tear-off tags per garment (query ?slips=&tags=). */
+export const slipCopiesQuery = z.object({
+  slips: z.coerce.number().int('Print a whole number of slips.').min(1, 'Print at least one slip.').max(3, 'Print at most 3 slips.').default(1),
+  tags: z.coerce.number().int('Print a whole number of tags.').min(0, 'Tags cannot be fewer than none.').max(3, 'Print at most 3 tags per garment.').default(1),
+});

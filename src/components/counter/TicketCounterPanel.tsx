@@ -1,6 +1,7 @@
 // The counter's panel for one ticket: price lines, total, deposit, balance, payments, notices,
 // claim slip and handing over. Mounted on the ticket page and on /counter/[ticketId].
 import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
 import { FormMessage } from '@/components/Field';
 import { DueBadge } from '@/components/bench/DueBadge';
 import { fetchJson } from '@/lib/fetch-json';
@@ -21,6 +22,38 @@ interface Props {
   role?: Role;
   /** false where the page already shows the ticket's number, customer and step */
   withTicketHeader?: boolean;
+}
+
+/** The claim slip link with its copies: 1–3 slips and 0–3 tear-off tags per garment. */
+function SlipPrint({ ticketId }: { ticketId: string }) {
+  const [slips, setSlips] = useState(1);
+  const [tags, setTags] = useState(1);
+  const pick = (label: string, value: number, set: (n: number) => void, from: number) => (
+    <label className="inline-flex min-h-11 items-center gap-2">
+      {label}
+      <select value={value} onChange={(e) => set(Number(e.target.value))} className="min-h-11 rounded border-2 border-rule bg-card px-2">
+        {[0, 1, 2, 3].filter((n) => n >= from).map((n) => (
+          <option key={n} value={n}>
+            {n}
+          </option>
+        ))}
+      </select>
+    </label>
+  );
+  return (
+    <>
+      {pick('Slips', slips, setSlips, 1)}
+      {pick('Tags per garment', tags, setTags, 0)}
+      <a
+        href={`/api/tickets/${ticketId}/claim-slip?slips=${slips}&tags=${tags}`}
+        target="_blank"
+        rel="noopener"
+        className="inline-flex min-h-11 items-center rounded border-2 border-accent px-4 font-semibold text-accent"
+      >
+        Print the claim slip (PDF)
+      </a>
+    </>
+  );
 }
 
 function Panel({ ticketId, shopName, role: given, withTicketHeader = true }: Props) {
@@ -54,14 +87,7 @@ function Panel({ ticketId, shopName, role: given, withTicketHeader = true }: Pro
           Claim slip and pickup
         </h2>
         <div className="mt-2 flex flex-wrap items-center gap-3">
-          <a
-            href={`/api/tickets/${ticketId}/claim-slip`}
-            target="_blank"
-            rel="noopener"
-            className="inline-flex min-h-11 items-center rounded border-2 border-accent px-4 font-semibold text-accent"
-          >
-            Print the claim slip (PDF)
-          </a>
+          <SlipPrint ticketId={ticketId} />
           {canPickup && !collected && (
             <button
               type="button"

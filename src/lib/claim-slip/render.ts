@@ -2,11 +2,11 @@
 import { typeset } from '@/lib/cut-sheet/fonts';
 import { renderPdf } from '@/lib/render-pdf';
 import { claimSlipDocument } from './ClaimSlip';
-import type { ClaimSlipData } from './types';
+import { DEFAULT_COPIES, type ClaimSlipData, type SlipCopies } from './types';
 
-/** Renders one claim slip: a one-page A6 PDF. */
-export async function renderClaimSlip(data: ClaimSlipData): Promise<Uint8Array<ArrayBuffer>> {
+/** Renders a claim slip as A6 pages: the slip (1–3 copies), then its tear-off garment tags. */
+export async function renderClaimSlip(data: ClaimSlipData, copies: SlipCopies = DEFAULT_COPIES): Promise<Uint8Array<ArrayBuffer>> {
   // Names, garments and the shop's details may be in any script.
   const { family, print } = await typeset(data);
-  return new Uint8Array(await renderPdf(claimSlipDocument(print(data), family)));
+  return new Uint8Array(await renderPdf(claimSlipDocument(print(data), family, copies)));
 }

@@ -8,7 +8,9 @@ export interface ClaimSlipData {
   hours: string;
   ticketNumber: number;
   customerName: string | null;
+  /** YYYY-MM-DD, printed in the shop's date style ("Tue 1 Dec") */
   receivedOn: string;
+  /** YYYY-MM-DD, printed in the shop's date style; null when no date is set */
   dueOn: string | null;
   garments: string[];
   lines: { label: string; amountMinor: number }[];
@@ -17,3 +19,12 @@ export interface ClaimSlipData {
   paid: number;
   due: number;
 }
+
+/** How many of each to print: slips (1–3) and tear-off tags per garment (0–3). */
+export interface SlipCopies {
+  slips: number;
+  tags: number;
+}
+
+/** One slip and one tag per garment, unless the counter asks for more. */
+export const DEFAULT_COPIES: SlipCopies = { slips: 1, tags: 1 };

@@ -11,6 +11,7 @@ import type { Actor } from '@/lib/api';
 import type { paymentInput } from '@/lib/counter-request';
 import { paymentClient, verifyWebhook, webhookSecret } from '@/lib/payment-service';
 import type { ClaimSlipData } from '@/lib/claim-slip/types';
+import { todayIso } from '@/lib/due-date';
 import { audit } from '../audit';
 import { ServiceError } from '../errors';
 import { lockTicket, shopTicket, withTicketLock } from '../ticket-core';
@@ -294,7 +295,8 @@ export async function claimSlipData(actor: Actor, ticketId: string): Promise<Cla
     hours: settings.hours,
     ticketNumber: summary.ticket.number,
     customerName: summary.ticket.customerName,
-    receivedOn: ticket.createdAt.toISOString().slice(0, 10),
+    // The calendar day the screens read it on (their dates are the device's own calendar).
+    receivedOn: todayIso(ticket.createdAt),
     dueOn: ticket.dueOn,
     garments: items.map((g) => g.description?.trim() || g.kind),
     lines: summary.lines.filter((l) => !l.voidedAt).map((l) => ({ label: l.reason ? `${l.label} (${l.reason})` : l.label, amountMinor: l.amountMinor })),
