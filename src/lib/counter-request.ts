@@ -68,7 +68,11 @@ export const refundInput = z.object({
 });
 
 /** A notice the counter sends by hand. */
-export const noticeInput = z.object({ kind: z.literal('ready', { error: 'Only the ready notice can be sent.' }) });
+export const noticeInput = z.object({
+  kind: z.literal('ready', { error: 'Only the ready notice can be sent.' }),
+  /** true: send it again after it has gone (a new, numbered notice) */
+  again: z.boolean({ error: 'Say whether to send it again (true or false).' }).optional(),
+});
 
 /** The claim slip's copies: 1–3 slips and 0–3 tear-off tags per garment (query ?slips=&tags=). */
 export const slipCopiesQuery = z.object({

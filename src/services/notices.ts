@@ -1,6 +1,6 @@
 // Notices to customers: the ready notice, sent by the counter or by the shop's setting, kept with
 // its delivery state; a failed send is retried on a timer and by hand, and stays visible.
-import { and, asc, eq, gte, isNull, lte, ne, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, gte, isNull, lte, ne, sql } from 'drizzle-orm';
 import { NOTICE_LEASE_SECONDS } from 'astro:env/server';
 import { db } from '@/db';
 import { counterSettings, customers, garments, notices, organization, tickets, type Notice } from '@/db/schema';
@@ -93,7 +93,7 @@ async function queueReady(shopId: string, ticketId: string, actorId: string | nu
       .values({ shopId, ticketId, kind: 'ready', to, subject: message.subject, body: message.body, createdById: actorId })
       .onConflictDoNothing()
       .returning();
-    if (!queued) throw new ServiceError(409, 'The ready notice of this ticket is already on record.');
+    if (!queued) throw new ServiceError(409, 'The ready notice of this ticket is already on record: send it again if the customer needs it.');
     await audit(tx, shopId, actorId, 'notice.queued', ticketId, { kind: 'ready', automatic: actorId === null });
     return queued;
   });
@@ -105,6 +105,37 @@ export async function sendReadyNotice(actor: Actor, ticketId: string): Promise<N
   const ticket = await shopTicket(actor, ticketId);
   if (ticket.status !== 'ready') throw new ServiceError(422, `The ticket is not ready yet (it is ${ticket.status}).`);
   return queueReady(actor.shopId, ticketId, actor.userId);
+}
+
+/** Sends the ready notice of a ready ticket again (the customer lost it, or asks again): a new
+ * notices row, numbered after the last, with the message as it reads now (balance, pay link) and
+ * its own delivery state; the first send's record is left as it was. Audited as notice.resent. */
+export async function resendReadyNotice(actor: Actor, ticketId: string): Promise<Notice> {
+  const ticket = await shopTicket(actor, ticketId);
+  if (ticket.status !== 'ready') throw new ServiceError(422, `The ticket is not ready (it is ${ticket.status}).`);
+  const message = await readyMessage(actor.shopId, ticketId);
+  if (!message.to) throw new ServiceError(422, 'The customer has no e-mail address: add one, or call them.');
+  const to = message.to;
+  const row = await db.transaction(async (tx) => {
+    const [last] = await tx
+      .select()
+      .from(notices)
+      .where(and(eq(notices.shopId, actor.shopId), eq(notices.ticketId, ticketId), eq(notices.kind, 'ready')))
+      .orderBy(desc(notices.sequence))
+      .limit(1);
+    if (!last) throw new ServiceError(409, 'The ready notice has not been sent yet: send it first.');
+    if (last.status !== 'sent') throw new ServiceError(409, 'The last ready notice is not delivered yet: retry that one instead.');
+    // Two re-sends at once both ask for the next number: the unique index lets one through.
+    const [queued] = await tx
+      .insert(notices)
+      .values({ shopId: actor.shopId, ticketId, kind: 'ready', sequence: last.sequence + 1, to, subject: message.subject, body: message.body, createdById: actor.userId })
+      .onConflictDoNothing()
+      .returning();
+    if (!queued) throw new ServiceError(409, 'The ready notice is being sent again already.');
+    await audit(tx, actor.shopId, actor.userId, 'notice.resent', ticketId, { kind: 'ready', noticeId: queued.id, sequence: queued.sequence, previousId: last.id });
+    return queued;
+  });
+  return attemptDelivery(row);
 }
 
 /** Tries a failed notice again by hand, whatever its count of attempts. */

@@ -4,7 +4,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { inject } from 'vitest';
 import Stripe from 'stripe';
-import { call, DEMO, freshEmail, signIn } from './client';
+import { call, DEMO, freshEmail, newShop, signIn } from './client';
 import { waitForMail } from './mail';
 
 let counter = '';
@@ -204,5 +204,18 @@ describe('ready notice through the mail capture', () => {
     expect(mail.text).toContain('Opening hours: Tue–Fri 9:00–18:00, Sat 9:00–13:00');
     const list = await call('GET', `/api/tickets/${id}/notices`, { cookie: counter });
     expect(list.body.map((n: { status: string; attempts: number }) => [n.status, n.attempts])).toEqual([['sent', 1]]);
+  });
+
+  it('is sent again on request once it has gone, as a second numbered notice; the apprentice and other shops may not (issue 14)', async () => {
+    const email = freshEmail('ready-again');
+    const id = await readyPricedTicket(email);
+    expect((await call('POST', `/api/tickets/${id}/notices`, { cookie: counter, body: { kind: 'ready' } })).status).toBe(201);
+    expect((await call('POST', `/api/tickets/${id}/notices`, { cookie: counter, body: { kind: 'ready' } })).status).toBe(409);
+    expect((await call('POST', `/api/tickets/${id}/notices`, { cookie: await signIn(DEMO.apprentice), body: { kind: 'ready', again: true } })).status).toBe(403);
+    expect((await call('POST', `/api/tickets/${id}/notices`, { cookie: (await newShop('Resend Stranger HTTP')).cookie, body: { kind: 'ready', again: true } })).status).toBe(404);
+    const again = await call('POST', `/api/tickets/${id}/notices`, { cookie: counter, body: { kind: 'ready', again: true } });
+    expect([again.status, again.body.sequence, again.body.status]).toEqual([201, 2, 'sent']);
+    const list = await call('GET', `/api/tickets/${id}/notices`, { cookie: counter });
+    expect(list.body.map((n: { sequence: number; status: string }) => [n.sequence, n.status])).toEqual([[1, 'sent'], [2, 'sent']]);
   });
 });

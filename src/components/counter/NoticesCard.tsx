@@ -16,7 +16,7 @@ function NoticeRow({ n, canSend }: { n: Notice; canSend: boolean }) {
   return (
     <li className={`rounded border-2 p-3 ${STATE[n.status].look}`}>
       <div className="font-semibold">
-        Ready notice to {n.to}: {STATE[n.status].text}
+        Ready notice{n.sequence > 1 ? ` (sent again, ${n.sequence})` : ''} to {n.to}: {STATE[n.status].text}
         {n.status === 'sent' && ` ${dateTimeText(n.sentAt)}`}
       </div>
       <div className="text-base">
@@ -43,7 +43,11 @@ function NoticeRow({ n, canSend }: { n: Notice; canSend: boolean }) {
 export function NoticesCard({ s, canSend }: { s: CounterSummary; canSend: boolean }) {
   const notices = useNotices(s.ticket.id);
   const send = useCounterAction(s.ticket.id, () => post(s.ticket.id, 'notices', { kind: 'ready' }));
-  const hasReady = notices.data?.some((n) => n.kind === 'ready');
+  const again = useCounterAction(s.ticket.id, () => post(s.ticket.id, 'notices', { kind: 'ready', again: true }));
+  const ready = notices.data?.filter((n) => n.kind === 'ready') ?? [];
+  const hasReady = ready.length > 0;
+  // Sent again only after the last one went (a failed one is retried instead).
+  const lastSent = hasReady && ready.reduce((a, b) => (b.sequence > a.sequence ? b : a)).status === 'sent';
   return (
     <section aria-labelledby="notices-h" className="rounded border-2 border-rule bg-card p-4">
       <h2 id="notices-h" className="text-xl font-extrabold">
@@ -69,7 +73,15 @@ export function NoticesCard({ s, canSend }: { s: CounterSummary; canSend: boolea
           {!s.ticket.customerEmail && <p className="text-base text-warn">No e-mail address for this customer: call them instead.</p>}
         </div>
       )}
+      {canSend && lastSent && s.ticket.status === 'ready' && (
+        <div className="mt-3">
+          <button type="button" onClick={() => again.mutate(undefined)} disabled={again.isPending} className="min-h-11 rounded border-2 border-accent px-4 py-2 font-semibold text-accent disabled:opacity-50">
+            Send the ready notice again
+          </button>
+        </div>
+      )}
       {send.error && <FormMessage kind="error">{send.error.message}</FormMessage>}
+      {again.error && <FormMessage kind="error">{again.error.message}</FormMessage>}
     </section>
   );
 }

@@ -5,7 +5,7 @@ import { createSelectSchema } from 'drizzle-zod';
 import { organization, user } from './auth';
 import { tickets } from './tickets';
 
-/** Kinds of notice; one of each per ticket. */
+/** Kinds of notice; one of each per ticket, then any re-sends of it (numbered by `sequence`). */
 export const NOTICE_KINDS = ['ready'] as const;
 /** Delivery states: waiting, delivered to the mail server, or failed (retried until it gives up). */
 export const NOTICE_STATUSES = ['queued', 'sent', 'failed'] as const;
@@ -18,6 +18,8 @@ export const notices = pgTable(
     shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
     ticketId: uuid('ticket_id').notNull().references(() => tickets.id, { onDelete: 'cascade' }),
     kind: text('kind', { enum: NOTICE_KINDS }).notNull(),
+    /** 1 for the first notice of its kind, 2 for the first re-send, and so on: each send keeps its own delivery state */
+    sequence: integer('sequence').notNull().default(1),
     to: text('to').notNull(),
     subject: text('subject').notNull(),
     body: text('body').notNull(),
@@ -30,7 +32,7 @@ export const notices = pgTable(
     createdById: text('created_by_id').references(() => user.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).defaultNow().notNull(),
   },
-  (t) => [uniqueIndex('notices_ticket_kind_uidx').on(t.ticketId, t.kind), index('notices_due_idx').on(t.status, t.nextAttemptAt)],
+  (t) => [uniqueIndex('notices_ticket_kind_seq_uidx').on(t.ticketId, t.kind, t.sequence), index('notices_due_idx').on(t.status, t.nextAttemptAt)],
 );
 
 /** A notice as the API returns it. */

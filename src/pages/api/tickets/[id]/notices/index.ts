@@ -2,7 +2,7 @@
 import type { APIRoute } from 'astro';
 import { guard, readBody, run } from '@/lib/api';
 import { noticeInput } from '@/lib/counter-request';
-import { listNotices, sendReadyNotice } from '@/services/notices';
+import { listNotices, resendReadyNotice, sendReadyNotice } from '@/services/notices';
 
 export const prerender = false;
 
@@ -13,11 +13,11 @@ export const GET: APIRoute = async ({ locals, params }) => {
   return run(() => listNotices(actor, params.id ?? ''));
 };
 
-/** Sends the ready notice now. */
+/** Sends the ready notice now, or (`again: true`) once more after it has gone. */
 export const POST: APIRoute = async ({ locals, request, params }) => {
   const actor = guard(locals, ['notices', 'send']);
   if (actor instanceof Response) return actor;
   const input = await readBody(request, noticeInput);
   if (input instanceof Response) return input;
-  return run(() => sendReadyNotice(actor, params.id ?? ''), 201);
+  return run(() => (input.again ? resendReadyNotice(actor, params.id ?? '') : sendReadyNotice(actor, params.id ?? '')), 201);
 };
