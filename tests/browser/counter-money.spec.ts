@@ -76,7 +76,7 @@ describe('money that adds up at the counter', () => {
     const customer = await tabletPage(browser);
     await customer.goto(link);
     await customer.getByRole('button', { name: 'Pay €7.50' }).click();
-    await customer.waitForURL('**/paid');
+    await customer.waitForURL(/\/paid\?session_id=cs_/);
     await customer.context().close();
     await page.reload();
     await page.getByTestId('balance-due').filter({ hasText: '€0.00' }).waitFor();

@@ -102,8 +102,10 @@ describe('a ticket across the counter, from deposit to a paid pickup', () => {
     await page.getByText('€25.00').first().waitFor();
     await page.screenshot({ path: 'test-results/counter-pay-page.png', fullPage: true });
     await page.getByRole('button', { name: 'Pay €25.00' }).click();
-    await page.waitForURL('**/paid');
+    await page.waitForURL(/\/paid\?session_id=cs_/);
     await page.getByRole('heading', { name: /Thank you/ }).waitFor();
+    // Only what the payment session proves: the ticket number and the amount.
+    await expect(page.getByTestId('paid-session').textContent()).resolves.toMatch(/^TicketT-\d+Paid€25\.00$/);
     await page.context().close();
   });
 

@@ -1,7 +1,7 @@
 // The claim slip as react-pdf pages (A6): ticket number large, garments, due date, money; then
 // the tear-off garment tags (ticket number, garment, due date), four to a page, to pin on each pair.
 import { Document, Page, StyleSheet, Text, View, type DocumentProps } from '@react-pdf/renderer';
-import type { ReactElement } from 'react';
+import type { ComponentProps, ReactElement } from 'react';
 import { FAMILY } from '@/lib/cut-sheet/fonts';
 import { dueText } from '@/lib/due-date';
 import { ticketLabel } from '@/lib/ticket-number';
@@ -12,6 +12,9 @@ import { DEFAULT_COPIES, type ClaimSlipData, type SlipCopies } from './types';
 export const SLIP_PT = { width: 297.64, height: 419.53 } as const;
 /** Tear-off tags on one A6 page. */
 export const TAGS_PER_PAGE = 4;
+
+// react-pdf's own style type, as its Page takes it (the package does not export it by name).
+type Style = Exclude<NonNullable<ComponentProps<typeof Page>['style']>, readonly unknown[]>;
 
 const s = StyleSheet.create({
   page: { fontFamily: FAMILY, fontSize: 9, color: '#111111', padding: 18 },
@@ -33,7 +36,7 @@ function day(iso: string): string {
   return dueText(iso);
 }
 
-function slipPage(d: ClaimSlipData, style: object, key: number): ReactElement {
+function slipPage(d: ClaimSlipData, style: Style[], key: number): ReactElement {
   const money = (n: number) => formatMoney(n, d.currency);
   return (
     <Page key={`slip-${key}`} size={[SLIP_PT.width, SLIP_PT.height]} style={style}>
@@ -93,7 +96,7 @@ export function tagsOf(d: ClaimSlipData, tags: number): { garment: string; index
   return d.garments.flatMap((garment, index) => Array.from({ length: tags }, () => ({ garment, index })));
 }
 
-function tagPages(d: ClaimSlipData, tags: number, style: object): ReactElement[] {
+function tagPages(d: ClaimSlipData, tags: number, style: Style[]): ReactElement[] {
   const all = tagsOf(d, tags);
   const pages: ReactElement[] = [];
   for (let start = 0; start < all.length; start += TAGS_PER_PAGE) {
@@ -120,7 +123,7 @@ function tagPages(d: ClaimSlipData, tags: number, style: object): ReactElement[]
 
 /** The slip's document: `copies.slips` slips, then `copies.tags` tags per garment; `family` comes from typeset(data). */
 export function claimSlipDocument(d: ClaimSlipData, family: string | string[] = FAMILY, copies: SlipCopies = DEFAULT_COPIES): ReactElement<DocumentProps> {
-  const font = family === FAMILY ? {} : { fontFamily: family };
+  const font: Style = family === FAMILY ? {} : { fontFamily: family as Style['fontFamily'] };
   const slips = Array.from({ length: copies.slips }, (_, i) => slipPage(d, [s.page, font], i));
   return (
     <Document title={`Claim slip ${ticketLabel(d.ticketNumber, d.shopName)}`} author={d.shopName}>

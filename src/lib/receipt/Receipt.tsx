@@ -1,11 +1,14 @@
 // A payment receipt as a react-pdf page (A6, like the claim slip): the shop, the ticket, the
 // payment it is for (how, when, taken by whom), the live lines, and the account as printed.
 import { Document, Page, StyleSheet, Text, View, type DocumentProps } from '@react-pdf/renderer';
-import type { ReactElement } from 'react';
+import type { ComponentProps, ReactElement } from 'react';
 import { SLIP_PT } from '@/lib/claim-slip/ClaimSlip';
 import { FAMILY } from '@/lib/cut-sheet/fonts';
 import { formatMoney } from '@/lib/pricing/money';
 import type { ReceiptData } from './types';
+
+// react-pdf's own style type, as its Page takes it (the package does not export it by name).
+type Style = Exclude<NonNullable<ComponentProps<typeof Page>['style']>, readonly unknown[]>;
 
 const s = StyleSheet.create({
   page: { fontFamily: FAMILY, fontSize: 9, color: '#111111', padding: 18 },
@@ -22,10 +25,10 @@ const s = StyleSheet.create({
 /** The receipt's document; `family` comes from typeset(data) (Inter alone for Latin-only text). */
 export function receiptDocument(d: ReceiptData, family: string | string[] = FAMILY): ReactElement<DocumentProps> {
   const money = (n: number) => formatMoney(n, d.currency);
-  const row = (left: string, right: string, style?: object) => (
+  const row = (left: string, right: string, style: Style = {}) => (
     <View style={s.row}>
-      <Text style={[{ flexShrink: 1, paddingRight: 6 }, style ?? {}]}>{left}</Text>
-      <Text style={style ?? {}}>{right}</Text>
+      <Text style={[{ flexShrink: 1, paddingRight: 6 }, style]}>{left}</Text>
+      <Text style={style}>{right}</Text>
     </View>
   );
   return (

@@ -12,7 +12,7 @@ const TICKET = '00000000-0000-4000-8000-000000000001';
 const summary = { ticket: { id: TICKET, number: 1042, status: 'ready', dueOn: null, customerId: null, customerName: 'Wendel Orrin', customerEmail: 'wendel@example.com' }, currency: 'EUR', lines: [], total: 2400, paid: 0, refunded: 0, due: 2400, credit: 0, payments: [], refunds: [], customerCredit: 0, link: null } as CounterSummary;
 
 function notice(over: Partial<Notice>): Notice {
-  return { id: 'n1', shopId: 's', ticketId: TICKET, kind: 'ready', to: 'wendel@example.com', subject: 'Ready', body: '', status: 'sent', attempts: 1, lastError: null, nextAttemptAt: null, sentAt: '2026-12-01T10:00:00Z', createdById: 'u', createdAt: '2026-12-01T10:00:00Z', ...over };
+  return { id: 'n1', shopId: 's', ticketId: TICKET, kind: 'ready', to: 'wendel@example.com', subject: 'Ready', body: '', status: 'sent', attempts: 1, lastError: null, nextAttemptAt: null, sentAt: '2026-12-01T10:00:00Z', createdById: 'u', sequence: 1, createdAt: '2026-12-01T10:00:00Z', ...over };
 }
 
 function render(notices: Notice[], canSend = true): string {
@@ -41,11 +41,19 @@ describe('NoticesCard', () => {
     expect(html).not.toContain('Retry now');
   });
 
-  it('marks a notice the shop setting sent, and offers no second ready notice', () => {
+  it('marks a notice the shop setting sent, and offers to send it again rather than a first one', () => {
     const html = render([notice({ createdById: null })]);
     expect(html).toContain('Sent');
     expect(html).toContain('sent by the shop setting');
-    expect(html).not.toContain('Send the ready notice');
+    expect(html).not.toContain('>Send the ready notice<');
+    expect(html).toContain('Send the ready notice again');
+  });
+
+  it('numbers a re-send, and offers no re-send while the last one is undelivered or to those who may not send (issue 14)', () => {
+    const html = render([notice({}), notice({ id: 'n2', sequence: 2 })]);
+    expect(html).toContain('Ready notice (sent again, 2) to wendel@example.com: Sent');
+    expect(render([notice({}), notice({ id: 'n2', sequence: 2, status: 'failed', sentAt: null, lastError: 'timeout' })])).not.toContain('Send the ready notice again');
+    expect(render([notice({})], false)).not.toContain('Send the ready notice again');
   });
 
   it('offers the ready notice when none was sent', () => {

@@ -50,7 +50,7 @@ describe('claim slip', () => {
   });
 
   it('says the shop will let the customer know when no date is set', async () => {
-    const text = flatText(pdfFile(await renderClaimSlip({ ...SLIP, dueOn: null }), 1));
+    const text = flatText(pdfFile(await renderClaimSlip({ ...SLIP, dueOn: null })), 1);
     expect(text).toContain('Ready by we will let you know');
   });
 
