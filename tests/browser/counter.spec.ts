@@ -105,7 +105,7 @@ describe('a ticket across the counter, from deposit to a paid pickup', () => {
     await page.waitForURL(/\/paid\?session_id=cs_/);
     await page.getByRole('heading', { name: /Thank you/ }).waitFor();
     // Only what the payment session proves: the ticket number and the amount.
-    await expect(page.getByTestId('paid-session').textContent()).resolves.toMatch(/^\s*Ticket\s+T-\d+\s+Paid\s+€25\.00\s*$/);
+    await expect(page.getByTestId('paid-session').textContent()).resolves.toMatch(/^\s*Ticket\s+PH \d+\s+Paid\s+€25\.00\s*$/);
     await page.context().close();
   });
 

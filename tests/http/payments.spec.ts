@@ -89,7 +89,7 @@ describe('online payment through the local fake', () => {
     // Before paying: the session is known and open, so the page says it is being confirmed.
     const before = await call('GET', `/paid?session_id=${sid}`);
     expect(before.status).toBe(200);
-    expect(before.body).toContain(`T-${number}`);
+    expect(before.body).toContain(`PH ${number}`);
     expect(before.body).toContain('Being paid');
     const paid = await fetch(made.body.link.url, { method: 'POST', redirect: 'manual' });
     const back = new URL(paid.headers.get('location')!);
@@ -97,7 +97,7 @@ describe('online payment through the local fake', () => {
     expect(page.status).toBe(200);
     expect(page.headers.get('cache-control')).toBe('no-store');
     const dl = String(page.body).match(/<dl[^>]*data-testid="paid-session"[\s\S]*?<\/dl>/)?.[0] ?? '';
-    expect(dl.replace(/<[^>]+>/g, ' ').replace(/\s+/g, ' ').trim()).toBe(`Ticket T-${number} Paid €20.00`);
+    expect(dl.replace(/<[^>]+>/g, ' ').replace(/\s+/g, ' ').trim()).toBe(`Ticket PH ${number} Paid €20.00`);
     // Nothing personal or of the shop: not the customer's name, not the shop's name.
     expect(page.body).not.toContain('Perrin Loame');
     expect(page.body).not.toContain('Pinmark');
@@ -106,7 +106,7 @@ describe('online payment through the local fake', () => {
       const other = await call('GET', `/paid${q}`);
       expect(other.status).toBe(200);
       expect(other.body).not.toContain('paid-session');
-      expect(other.body).not.toMatch(/T-\d+/);
+      expect(other.body).not.toMatch(/PH \d+/);
     }
   });
 

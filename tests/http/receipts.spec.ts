@@ -45,7 +45,7 @@ describe('GET a payment receipt', () => {
       const r = await pdfText(path, cookie);
       expect([r.status, r.type]).toEqual([200, 'application/pdf']);
       expect(r.text).toContain('Pinmark & Hem');
-      expect(r.text).toContain(`Ticket T-${number}`);
+      expect(r.text).toContain(`Ticket PH ${number}`);
       expect(r.text).toContain('Received with thanks €10.00 By cash');
     }
   });
@@ -69,8 +69,8 @@ describe('POST (e-mail) a payment receipt', () => {
     const r = await call('POST', path, { cookie: counter });
     expect([r.status, r.body]).toEqual([200, { to: email }]);
     const mail = await waitForMail(email);
-    expect(mail.subject).toBe(`Receipt for ticket T-${number}: €10.00`);
-    expect(mail.attachments).toEqual([expect.objectContaining({ filename: `receipt-T-${number}.pdf`, contentType: 'application/pdf' })]);
+    expect(mail.subject).toBe(`Receipt for ticket PH ${number}: €10.00`);
+    expect(mail.attachments).toEqual([expect.objectContaining({ filename: `receipt-${number}.pdf`, contentType: 'application/pdf' })]);
     const sent = await call('GET', '/api/sent-messages', { cookie: lead });
     expect(sent.body.find((m: { to: string }) => m.to === email)).toMatchObject({ kind: 'receipt' });
   });

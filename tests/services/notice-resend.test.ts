@@ -52,7 +52,7 @@ describe('sending the ready notice again', () => {
     mail.sent.length = 0;
     const again = await notice.resendReadyNotice(a.counter, t.id);
     expect([again.sequence, again.status, again.attempts, again.to]).toEqual([2, 'sent', 1, 'bertil.quern@example.com']);
-    expect(mail.sent.map((m) => m.subject)).toEqual([`Ready to collect: ticket T-${t.number}`]);
+    expect(mail.sent.map((m) => m.subject)).toEqual([`Ready to collect: ticket RH ${t.number}`]);
     const third = await notice.resendReadyNotice(a.lead, t.id);
     expect(third.sequence).toBe(3);
     const rows = await readyRows(t.id);

@@ -56,10 +56,10 @@ describe('a payment receipt', () => {
   it('reads back with the shop, the live lines, each payment with how and when, refunds and the credit owed', async () => {
     const { t, payments } = await paidTicket();
     const { pdf, fileName } = await receiptPdf(a.counter, t.id, payments[1]!.id);
-    expect(fileName).toBe(`receipt-T-${t.number}.pdf`);
+    expect(fileName).toBe(`receipt-${t.number}.pdf`);
     const file = pdfFile(pdf);
     const text = flatText(file);
-    for (const words of ['Tackstitch Alterations', '12 Selvedge Yard, Nethercombe', 'Hours: Mon–Sat 9:00–17:00', 'RECEIPT', `Ticket T-${t.number}`, 'Odile Farthing', 'taken by counter of Tackstitch Alterations']) {
+    for (const words of ['Tackstitch Alterations', '12 Selvedge Yard, Nethercombe', 'Hours: Mon–Sat 9:00–17:00', 'RECEIPT', `Ticket TA ${t.number}`, 'Odile Farthing', 'taken by counter of Tackstitch Alterations']) {
       expect(text).toContain(words);
     }
     expect(text).not.toContain('Wrong tape charge');
@@ -93,8 +93,8 @@ describe('an e-mailed receipt', () => {
     expect(sent).toHaveLength(1);
     const [{ mail, origin }] = sent as [(typeof sent)[number]];
     expect(origin).toEqual({ shopId: a.shopId, kind: 'receipt' });
-    expect(mail.subject).toBe(`Receipt for ticket T-${t.number}: €10.00`);
-    expect(mail.attachments?.[0]).toMatchObject({ filename: `receipt-T-${t.number}.pdf`, contentType: 'application/pdf' });
+    expect(mail.subject).toBe(`Receipt for ticket TA ${t.number}: €10.00`);
+    expect(mail.attachments?.[0]).toMatchObject({ filename: `receipt-${t.number}.pdf`, contentType: 'application/pdf' });
     expect(flatText(pdfFile(new Uint8Array(mail.attachments![0]!.content)))).toMatch(/Received with thanks €10\.00 By cash, /);
     const events = await db.select().from(auditEvents).where(eq(auditEvents.subject, t.id));
     expect(events.map((e) => e.action)).toContain('receipt.emailed');

@@ -112,7 +112,7 @@ function tagPages(d: ClaimSlipData, tags: number, style: Style[]): ReactElement[
             </View>
             <Text style={s.strong}>{t.garment}</Text>
             <Text>Ready by {d.dueOn ? day(d.dueOn) : 'date to come'}</Text>
-            <Text style={s.soft}>{d.shopName} · tear along the dashes and pin to the garment</Text>
+            <Text style={s.soft}>Tear along the dashes and pin to the garment.</Text>
           </View>
         ))}
       </Page>,

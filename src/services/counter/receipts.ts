@@ -4,7 +4,7 @@ import { db } from '@/db';
 import { organization } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import { dateTimeText } from '@/lib/date-text';
-import { ticketLabel } from '@/lib/garment-steps';
+import { ticketLabel } from '@/lib/ticket-number';
 import { sendMail } from '@/lib/mail';
 import { formatMoney } from '@/lib/pricing/money';
 import { renderReceipt } from '@/lib/receipt/render';
@@ -34,7 +34,7 @@ function receiptOf(shop: { name: string; location: string; hours: string }, summ
     shopName: shop.name,
     location: shop.location,
     hours: shop.hours,
-    ticketNumber: ticketLabel(summary.ticket.number),
+    ticketNumber: ticketLabel(summary.ticket.number, shop.name),
     customerName: summary.ticket.customerName,
     printedAt: dateTimeText(now),
     payment: { how: PAID_HOW[payment.method], at: dateTimeText(payment.at), amountMinor: payment.amountMinor, takenBy: payment.takenByName },
@@ -64,7 +64,9 @@ export async function receiptData(actor: Pick<Actor, 'shopId' | 'shopName'>, tic
 /** The receipt as PDF bytes with its file name. */
 export async function receiptPdf(actor: Pick<Actor, 'shopId' | 'shopName'>, ticketId: string, paymentId: string): Promise<{ pdf: Uint8Array<ArrayBuffer>; fileName: string }> {
   const data = await receiptData(actor, ticketId, paymentId);
-  return { pdf: await renderReceipt(data), fileName: `receipt-${data.ticketNumber}.pdf` };
+  const { number } = await shopTicket(actor, ticketId);
+  // The file name keeps to the digits: a header cannot carry the initials of every script.
+  return { pdf: await renderReceipt(data), fileName: `receipt-${number}.pdf` };
 }
 
 /** E-mails a payment's receipt (PDF attached) to the ticket's customer; refused without an address. */
@@ -84,7 +86,7 @@ export async function emailReceipt(actor: Actor, ticketId: string, paymentId: st
     'Your receipt is attached.',
   ].join('\n');
   await sendMail(
-    { to, subject: `Receipt for ticket ${data.ticketNumber}: ${amount}`, text, attachments: [{ filename: `receipt-${data.ticketNumber}.pdf`, content: Buffer.from(pdf), contentType: 'application/pdf' }] },
+    { to, subject: `Receipt for ticket ${data.ticketNumber}: ${amount}`, text, attachments: [{ filename: `receipt-${summary.ticket.number}.pdf`, content: Buffer.from(pdf), contentType: 'application/pdf' }] },
     { shopId: actor.shopId, kind: 'receipt' },
   );
   await audit(db, actor.shopId, actor.userId, 'receipt.emailed', ticketId, { paymentId });

@@ -67,8 +67,9 @@ describe('claim slip', () => {
     const file = pdfFile(await renderClaimSlip(SLIP));
     expect(pageInfo(file).pages).toBe(2);
     const tags = flatText(file, 2);
-    expect(tags).toContain('PH 1007 Garment 1 of 2 Charcoal flannel Ready by Tue 8 Dec');
-    expect(tags).toContain('PH 1007 Garment 2 of 2 Brown moleskin Ready by Tue 8 Dec');
+    // pdftotext may read a tag's corner note before or after its lines: each part is checked.
+    expect(tags.match(/PH 1007/g)).toHaveLength(2);
+    for (const words of ['Garment 1 of 2', 'Garment 2 of 2', 'Charcoal flannel Ready by Tue 8 Dec', 'Brown moleskin Ready by Tue 8 Dec']) expect(tags).toContain(words);
     expect(tags).not.toContain('Balance due');
   });
 
