@@ -61,7 +61,8 @@ describe('the lead reads the shop week at a glance', () => {
       expect(Object.entries(table).filter(([k]) => k.startsWith('takenIn|')).reduce((s, [, v]) => s + v, 0)).toBeGreaterThan(0);
     }
     // Four weeks of the demo shop: paid by card and in cash.
-    expect(Object.keys(await barsOf(page, 'takings')).sort()).toEqual(['takings|card', 'takings|cash']);
+    // Other stories may add online payments to the shared demo shop: card and cash are there whatever.
+    expect(Object.keys(await barsOf(page, 'takings'))).toEqual(expect.arrayContaining(['takings|card', 'takings|cash']));
     await page.screenshot({ path: 'test-results/overview-4w.png', fullPage: true });
     await page.setViewportSize({ width: 390, height: 900 });
     await page.screenshot({ path: 'test-results/overview-390.png', fullPage: true });

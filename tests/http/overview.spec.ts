@@ -52,7 +52,8 @@ describe('the overview over HTTP', () => {
     const o = (await call('GET', '/api/overview?period=4w', { cookie: cookies.lead })).body;
     expect(o.days.reduce((s: number, d: { takenIn: number }) => s + d.takenIn, 0)).toBeGreaterThan(0);
     expect(o.days.reduce((s: number, d: { handedOver: number }) => s + d.handedOver, 0)).toBeGreaterThan(0);
-    expect(o.takings.map((t: { method: string }) => t.method).sort()).toEqual(['card', 'cash']);
+    // Other tests may pay online in the shared demo shop: card and cash are there whatever.
+    expect(o.takings.map((t: { method: string }) => t.method)).toEqual(expect.arrayContaining(['card', 'cash']));
     expect(o.intakeToReady.averageDays).toBeGreaterThan(0);
   });
 
