@@ -30,7 +30,9 @@ export function HemTaperCheck({ taper }: { taper: TaperPlan }) {
           </tr>
         </thead>
         <tbody>
-          {taper.lines.map((l) => (
+          {taper.lines.map((l) => {
+            const work = seamFigures(l.change.mm, taper.unit, taper.precision);
+            return (
             <tr key={l.n} className="border-b border-rule">
               <th scope="row" className="py-2 pr-2 font-semibold">
                 {l.n} {LINE_NAMES[l.name]}
@@ -40,12 +42,13 @@ export function HemTaperCheck({ taper }: { taper: TaperPlan }) {
                 {l.measured && <span className="block text-base text-muted">measured</span>}
               </td>
               <td className="py-2 pr-2">
-                <span className="text-muted">{seamFigures(l.change.mm, taper.unit, taper.precision).verb} </span>
-                <span className="measure text-xl font-extrabold">{seamFigures(l.change.mm, taper.unit, taper.precision).perSeam}</span>
+                <span className="text-muted">{work.verb} </span>
+                <span className="measure text-xl font-extrabold">{work.perSeam}</span>
               </td>
-              <td className="measure py-2 text-xl font-semibold">{seamFigures(l.change.mm, taper.unit, taper.precision).perSide}</td>
+              <td className="measure py-2 text-xl font-semibold">{work.perSide}</td>
             </tr>
-          ))}
+            );
+          })}
         </tbody>
       </table>
       <Warnings warnings={taper.warnings} />

@@ -19,8 +19,11 @@ export function TaperDrawing({ taper }: { taper: TaperPlan }) {
   const shown = useWidth(ref);
   const font = Math.max(14, (MIN_PX * W) / (shown ?? W));
   const labels = [
-    { y: 0, mm: -depthOf(taper), top: true, text: '', n: 0 },
-    ...taper.lines.map((l) => ({ y: 0, mm: l.belowMark.mm, top: false, text: `${l.n} · ${seamFigures(l.change.mm, taper.unit, taper.precision).verb} ${seamFigures(l.change.mm, taper.unit, taper.precision).perSide} each side`, n: l.n })),
+    { y: 0, mm: -depthOf(taper), top: true, text: '', n: 0, work: null },
+    ...taper.lines.map((l) => {
+      const work = seamFigures(l.change.mm, taper.unit, taper.precision);
+      return { y: 0, mm: l.belowMark.mm, top: false, text: `${l.n} · ${work.verb} ${work.perSide} each side`, n: l.n, work };
+    }),
   ];
   const topText = `cuff top width ${taper.targetWidth.text}`;
   const labelRoom = Math.max(topText.length, ...labels.map((l) => l.text.length)) * CHAR_EM * font;
@@ -58,7 +61,6 @@ export function TaperDrawing({ taper }: { taper: TaperPlan }) {
             className={l.name === 'cut' ? 'stroke-cut' : 'stroke-rule'} strokeWidth={l.name === 'cut' ? 3 : 1.5} />
         ))}
         {placed.map((l) => {
-          const line = taper.lines.find((t) => t.n === l.n);
           return (
             <g key={l.top ? 'top' : l.n}>
               {l.y - l.at > font && <polyline points={`${cx + half * s + 15},${l.at} ${labelX - 4},${l.y - font * 0.35}`} fill="none" className="stroke-muted" strokeWidth={1} />}
@@ -68,7 +70,7 @@ export function TaperDrawing({ taper }: { taper: TaperPlan }) {
                 </text>
               ) : (
                 <text x={labelX} y={l.y} fontSize={font} className="fill-ink">
-                  {l.n} · {seamFigures(line!.change.mm, taper.unit, taper.precision).verb} <tspan className="measure font-extrabold">{seamFigures(line!.change.mm, taper.unit, taper.precision).perSide}</tspan> each side
+                  {l.n} · {l.work?.verb} <tspan className="measure font-extrabold">{l.work?.perSide}</tspan> each side
                 </text>
               )}
             </g>
