@@ -14,7 +14,7 @@ const SERVER_ONLY_LIB = [
   '^src/lib/(mail|sent-mail-record)\\.ts$', // nodemailer, SMTP settings, the sent-mail table
   '^src/lib/payment-service\\.ts$', // the payment service's secret key
   '^src/lib/render-pdf\\.ts$', // react-pdf + pdfkit
-  '^src/lib/(cut-sheet|claim-slip|pdf-platform|storage)/', // PDF drawing, fonts, files on disk
+  '^src/lib/(cut-sheet|claim-slip|receipt|pdf-platform|storage)/', // PDF drawing, fonts, files on disk
   '^src/lib/(api|body|client-address|deployment|security-headers)\\.ts$', // endpoint plumbing
   '^src/lib/member-activity\\.ts$', // requests in flight, per process
   '^src/lib/request-log\\.ts$', // pino, REQUEST_LOG
