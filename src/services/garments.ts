@@ -12,7 +12,7 @@ import { can } from '@/lib/roles';
 import { audit } from './audit';
 import { ServiceError } from './errors';
 import { assertReadyToHandOver } from './counter/hand-over';
-import { onGarmentMoved } from './garment-events';
+import { moveGarmentsLocked, tellMoved, writeTicketStatus } from './garment-moves';
 import { isUuid, lockTicket, withTicketLock } from './ticket-core';
 import { ticketLabel } from '@/lib/ticket-number';
 import { copyFittings } from './fitting-copy';
@@ -138,14 +138,6 @@ export async function getGarment(actor: Actor, id: string): Promise<GarmentDetai
   };
 }
 
-async function writeTicketStatus(tx: Db, shopId: string, ticketId: string): Promise<GarmentStep> {
-  const where = and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId));
-  const steps = await tx.select({ status: garments.status }).from(garments).where(and(eq(garments.shopId, shopId), eq(garments.ticketId, ticketId)));
-  const status = leastAdvanced(steps.map((g) => g.status));
-  await tx.update(tickets).set({ status, updatedAt: new Date() }).where(where);
-  return status;
-}
-
 /** Sets the ticket's status to its least advanced garment's step; inside a transaction that
  * already holds the ticket's lock, pass it as `tx`. */
 export async function refreshTicketStatus(shopId: string, ticketId: string, tx?: Db): Promise<GarmentStep> {
@@ -220,16 +212,9 @@ export async function writeStep(actor: Actor, g: Garment, to: GarmentStep, back:
       // The counter's rule for every way to "collected": the ticket is ready and nothing is left to pay.
       await assertReadyToHandOver(tx, ticket);
     }
-    const [moved] = await tx
-      .update(garments)
-      .set({ status: to, updatedAt: new Date() })
-      .where(and(eq(garments.id, g.id), eq(garments.shopId, actor.shopId), eq(garments.status, g.status)))
-      .returning();
-    if (!moved) throw new ServiceError(409, 'Someone else moved this garment first: reload and try again.');
-    await refreshTicketStatus(actor.shopId, g.ticketId, tx);
-    await audit(tx, actor.shopId, actor.userId, 'garment.moved', g.id, back ? { from: g.status, to, back: true } : { from: g.status, to });
-    return moved;
+    const [moved] = await moveGarmentsLocked(tx, actor, g.ticketId, [g.id], g.status, to, back);
+    return moved!;
   });
-  await onGarmentMoved(actor, row);
+  await tellMoved(actor, [row]);
   return row;
 }

@@ -35,11 +35,20 @@ export async function shopOverview(shopId: string, period: Period, now = new Dat
     db.select({ b: bucket(garments.createdAt), n }).from(garments).where(and(eq(garments.shopId, shopId), gte(garments.createdAt, start), lt(garments.createdAt, end))).groupBy(sql`1`),
     // Handed over one garment at a time…
     db.select({ b: bucket(auditEvents.at), n }).from(auditEvents).where(moved('collected')).groupBy(sql`1`),
-    // …or a whole ticket at the counter (pickUp): its garments now collected.
+    // …or a whole ticket at the counter before pickups recorded each garment's move: its garments
+    // collected without a move of their own (a pickup now writes garment.moved, counted above).
     db
       .select({ b: bucket(auditEvents.at), n: sql<number>`count(${garments.id})`.mapWith(Number) })
       .from(auditEvents)
-      .innerJoin(garments, and(eq(garments.shopId, auditEvents.shopId), sql`${garments.ticketId}::text = ${auditEvents.subject}`, eq(garments.status, 'collected')))
+      .innerJoin(
+        garments,
+        and(
+          eq(garments.shopId, auditEvents.shopId),
+          sql`${garments.ticketId}::text = ${auditEvents.subject}`,
+          eq(garments.status, 'collected'),
+          sql`not exists (select 1 from ${auditEvents} m where m.shop_id = ${garments.shopId} and m.action = 'garment.moved' and m.subject = ${garments.id}::text and m.detail->>'to' = 'collected')`,
+        ),
+      )
       .where(and(eq(auditEvents.shopId, shopId), eq(auditEvents.action, 'ticket.collected'), gte(auditEvents.at, start), lt(auditEvents.at, end)))
       .groupBy(sql`1`),
     db

@@ -9,7 +9,7 @@ import { nextStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
 import { can } from '@/lib/roles';
 import { audit, auditMany } from './audit';
 import { ServiceError } from './errors';
-import { onGarmentMoved } from './garment-events';
+import { moveGarmentsLocked, tellMoved } from './garment-moves';
 import { customerCard, garmentVisibleTo, isUuid, refreshTicketAssignee, refreshTicketStatus, staffOf, summaries, withTicketLock } from './garments';
 import { pickUp } from './counter/hand-over';
 import { ticketLabel } from '@/lib/ticket-number';
@@ -122,18 +122,10 @@ export async function moveTicket(actor: Actor, id: string, to: GarmentStep): Pro
         throw new ServiceError(422, `Some garments of ${ticketLabel(ticket.number, actor.shopName)} are someone else's: move yours one by one.`);
       }
       if (behind.length === 0) throw new ServiceError(422, `Ticket ${ticketLabel(ticket.number, actor.shopName)} has no garments yet: add one first.`);
-      const rows = await tx
-        .update(garments)
-        .set({ status: to, updatedAt: new Date() })
-        .where(and(inArray(garments.id, behind.map((g) => g.id)), eq(garments.status, ticket.status)))
-        .returning();
-      // A garment moved on its own since it was read: none of this move is kept.
-      if (rows.length !== behind.length) throw new ServiceError(409, 'Someone else moved a garment of this ticket first: reload and try again.');
-      await refreshTicketStatus(actor.shopId, id, tx);
-      await auditMany(tx, rows.map((g) => ({ shopId: actor.shopId, actorId: actor.userId, action: 'garment.moved', subject: g.id, detail: { from: ticket.status, to } })));
+      const rows = await moveGarmentsLocked(tx, actor, id, behind.map((g) => g.id), ticket.status, to);
       return { from: ticket.status, rows };
     });
-    for (const g of moved.rows) await onGarmentMoved(actor, g);
+    await tellMoved(actor, moved.rows);
   }
   const [row] = await db.select().from(tickets).where(eq(tickets.id, id));
   return row!;

@@ -2,12 +2,13 @@
 // marked "no charge" with a reason, nothing due), and the counter's pickup, which closes the
 // ticket and every ready garment. A credit owed to the customer does not hold the hand-over up:
 // it stays on the ticket until it is settled (refunds.ts).
-import { and, eq, inArray } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import type { Db } from '@/db';
-import { garments, tickets, type Ticket } from '@/db/schema';
+import { garments, type Ticket } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import { audit } from '../audit';
 import { ServiceError } from '../errors';
+import { moveGarmentsLocked, tellMoved } from '../garment-moves';
 import { withTicketLock } from '../ticket-core';
 import { counterSettingsOf } from './prices';
 import { counterSummary, summaryOf, type CounterSummary } from './summary';
@@ -36,12 +37,15 @@ export async function assertReadyToHandOver(tx: Db, ticket: Ticket): Promise<Cou
 export async function pickUp(actor: Actor, ticketId: string): Promise<CounterSummary> {
   // Checked and written under the ticket's lock: a price line or payment arriving meanwhile waits,
   // and one that came first is in the balance checked here.
-  await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
+  const moved = await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
     const summary = await assertReadyToHandOver(tx, ticket);
-    await tx.update(tickets).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
-    await tx.update(garments).set({ status: 'collected', updatedAt: new Date() }).where(and(eq(garments.ticketId, ticketId), eq(garments.shopId, actor.shopId), inArray(garments.status, ['ready'])));
+    const ready = await tx.select({ id: garments.id }).from(garments).where(and(eq(garments.ticketId, ticketId), eq(garments.shopId, actor.shopId), eq(garments.status, 'ready')));
+    // The same move as a garment handed over on its own: recorded per garment, listeners told.
+    const rows = await moveGarmentsLocked(tx, actor, ticketId, ready.map((g) => g.id), 'ready', 'collected');
     await audit(tx, actor.shopId, actor.userId, 'ticket.collected', ticketId, { total: summary.total, paid: summary.paid, refunded: summary.refunded, credit: summary.credit });
+    return rows;
   });
+  await tellMoved(actor, moved);
   return counterSummary(actor, ticketId);
 }
 
