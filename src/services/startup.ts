@@ -6,7 +6,7 @@ import { seedDemoIfEmpty } from './demo-seed';
 import { startNoticeTimer } from './notices';
 import './ready-notice-listener';
 
-const holder = globalThis as typeof globalThis & { __cuffwrightReady?: Promise<void> };
+const holder = globalThis as typeof globalThis & { __cuffwrightReady?: Promise<void>; __cuffwrightStarted?: boolean };
 
 async function start(): Promise<void> {
   const began = Date.now();
@@ -17,6 +17,7 @@ async function start(): Promise<void> {
     return demoWanted({ DATABASE_URL, DEMO_DATA }) ? await seedDemoIfEmpty() : false;
   });
   startNoticeTimer(NOTICE_TICK_SECONDS);
+  holder.__cuffwrightStarted = true;
   console.log(`Database ready (${handle.kind}) in ${Date.now() - began} ms${seeded ? ', demo shop seeded' : ''}.`);
 }
 
@@ -27,4 +28,9 @@ export function ensureStarted(): Promise<void> {
     throw e;
   });
   return holder.__cuffwrightReady;
+}
+
+/** Whether this process has finished its start-up work (migrations, the demo seed, the timers). */
+export function startedUp(): boolean {
+  return holder.__cuffwrightStarted === true;
 }

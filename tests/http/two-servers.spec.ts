@@ -75,8 +75,8 @@ async function startApp(name: 'A' | 'B', smtpPort: number): Promise<App> {
     },
   });
   const exited = new Promise<void>((r) => child.once('exit', () => r()));
-  // Health turns 200 once migrations are current; the demo seed (under the same start lock) may
-  // still be writing then, so also wait for the server's own "Database ready" line.
+  // Health turns 200 once start-up (migrations, then the demo seed under the same start lock) is
+  // done, the moment the server also logs its "Database ready" line.
   let out = '';
   child.stdout!.on('data', (d) => (out += d));
   for (let i = 0; ; i += 1) {
