@@ -1,35 +1,28 @@
 // The claim slip as react-pdf pages (A6): ticket number large, garments, due date, money; then
 // the tear-off garment tags (ticket number, garment, due date), four to a page, to pin on each pair.
 import { Document, Page, StyleSheet, Text, View, type DocumentProps } from '@react-pdf/renderer';
-import type { ComponentProps, ReactElement } from 'react';
+import type { ReactElement } from 'react';
 import { FAMILY } from '@/lib/cut-sheet/fonts';
 import { dueText } from '@/lib/due-date';
 import { ticketLabel } from '@/lib/ticket-number';
 import { formatMoney } from '@/lib/pricing/money';
+import { SLIP_PT, slipStyles, type Style } from './slip-styles';
 import { DEFAULT_COPIES, type ClaimSlipData, type SlipCopies } from './types';
 
-/** A6 in points (105 × 148 mm). */
-export const SLIP_PT = { width: 297.64, height: 419.53 } as const;
+export { SLIP_PT };
+
 /** Tear-off tags on one A6 page. */
 export const TAGS_PER_PAGE = 4;
 
-// react-pdf's own style type, as its Page takes it (the package does not export it by name).
-type Style = Exclude<NonNullable<ComponentProps<typeof Page>['style']>, readonly unknown[]>;
-
-const s = StyleSheet.create({
-  page: { fontFamily: FAMILY, fontSize: 9, color: '#111111', padding: 18 },
-  shop: { fontSize: 12, fontWeight: 800 },
-  soft: { fontSize: 8, color: '#555555' },
-  kicker: { fontSize: 8, fontWeight: 700, letterSpacing: 1.5, color: '#555555', marginTop: 10 },
-  number: { fontSize: 30, fontWeight: 800 },
-  row: { flexDirection: 'row', justifyContent: 'space-between', paddingVertical: 1.5 },
-  rule: { borderTopWidth: 0.75, borderTopColor: '#999999', marginTop: 6, paddingTop: 4 },
-  strong: { fontWeight: 700 },
-  big: { fontSize: 14, fontWeight: 800 },
-  tagPage: { fontFamily: FAMILY, fontSize: 9, color: '#111111', paddingHorizontal: 18, paddingVertical: 8 },
-  tag: { height: (SLIP_PT.height - 16) / TAGS_PER_PAGE, borderBottomWidth: 0.75, borderBottomColor: '#777777', borderStyle: 'dashed', paddingVertical: 6 },
-  tagNumber: { fontSize: 22, fontWeight: 800 },
-});
+const s = {
+  ...slipStyles,
+  ...StyleSheet.create({
+    number: { fontSize: 30, fontWeight: 800 },
+    tagPage: { fontFamily: FAMILY, fontSize: 9, color: '#111111', paddingHorizontal: 18, paddingVertical: 8 },
+    tag: { height: (SLIP_PT.height - 16) / TAGS_PER_PAGE, borderBottomWidth: 0.75, borderBottomColor: '#777777', borderStyle: 'dashed', paddingVertical: 6 },
+    tagNumber: { fontSize: 22, fontWeight: 800 },
+  }),
+};
 
 /** A date on the slip the way every screen says it ("Tue 8 Dec"). */
 function day(iso: string): string {

@@ -1,26 +1,13 @@
 // A payment receipt as a react-pdf page (A6, like the claim slip): the shop, the ticket, the
 // payment it is for (how, when, taken by whom), the live lines, and the account as printed.
 import { Document, Page, StyleSheet, Text, View, type DocumentProps } from '@react-pdf/renderer';
-import type { ComponentProps, ReactElement } from 'react';
-import { SLIP_PT } from '@/lib/claim-slip/ClaimSlip';
+import type { ReactElement } from 'react';
+import { SLIP_PT, slipStyles, type Style } from '@/lib/claim-slip/slip-styles';
 import { FAMILY } from '@/lib/cut-sheet/fonts';
 import { formatMoney } from '@/lib/pricing/money';
 import type { ReceiptData } from './types';
 
-// react-pdf's own style type, as its Page takes it (the package does not export it by name).
-type Style = Exclude<NonNullable<ComponentProps<typeof Page>['style']>, readonly unknown[]>;
-
-const s = StyleSheet.create({
-  page: { fontFamily: FAMILY, fontSize: 9, color: '#111111', padding: 18 },
-  shop: { fontSize: 12, fontWeight: 800 },
-  soft: { fontSize: 8, color: '#555555' },
-  kicker: { fontSize: 8, fontWeight: 700, letterSpacing: 1.5, color: '#555555', marginTop: 10 },
-  number: { fontSize: 18, fontWeight: 800 },
-  row: { flexDirection: 'row', justifyContent: 'space-between', paddingVertical: 1.5 },
-  rule: { borderTopWidth: 0.75, borderTopColor: '#999999', marginTop: 6, paddingTop: 4 },
-  strong: { fontWeight: 700 },
-  big: { fontSize: 14, fontWeight: 800 },
-});
+const s = { ...slipStyles, ...StyleSheet.create({ number: { fontSize: 18, fontWeight: 800 } }) };
 
 /** The receipt's document; `family` comes from typeset(data) (Inter alone for Latin-only text). */
 export function receiptDocument(d: ReceiptData, family: string | string[] = FAMILY): ReactElement<DocumentProps> {
