@@ -47,10 +47,12 @@ export const LEG_LENGTH_LABELS: Record<LegLength, string> = {
 const length = (what: string) =>
   text({ error: `${what}: type a length such as 1 1/2 or 38.` }).trim().max(40, `${what} is too long: type a length such as 1 1/2.`);
 
-/** One leg as typed: the finish, an optional preset name, and every length as text ('' = not taken). */
+/** One leg as typed: the finish, the preset applied (its id; the name only to show), and every length as text ('' = not taken). */
 export const legInput = z.object({
   finish: z.enum(FINISHES, { error: 'Choose cuff, plain hem or sloped hem.' }),
   preset: text().trim().max(60, 'Keep the preset name under 60 characters.').default(''),
+  /** the preset applied, by id ('' = none): the server records it only if it is the shop's and usable by the actor */
+  presetId: text().trim().max(40, 'Choose the preset from the list.').default(''),
   ...(Object.fromEntries(LEG_LENGTHS.map((f) => [f, length(LEG_LENGTH_LABELS[f]).default('')])) as Record<
     LegLength,
     z.ZodDefault<z.ZodString>
@@ -81,7 +83,10 @@ export interface SavedLeg {
   leg: Leg;
   unit: 'in' | 'cm' | 'mm';
   finish: Finish;
+  /** the preset's current name (or, once it is removed, its name when applied) */
   preset: string | null;
+  /** the preset applied, while it exists */
+  presetId: string | null;
   values: Partial<Record<LegLength, SavedLength>>;
   takenAt: string;
   takenBy: string | null;
@@ -89,7 +94,7 @@ export interface SavedLeg {
 
 /** A blank leg, ready for a cuff. */
 export function blankLeg(finish: Finish = 'cuff'): LegValues {
-  return { finish, preset: '', ...(Object.fromEntries(LEG_LENGTHS.map((f) => [f, ''])) as Record<LegLength, string>) };
+  return { finish, preset: '', presetId: '', ...(Object.fromEntries(LEG_LENGTHS.map((f) => [f, ''])) as Record<LegLength, string>) };
 }
 
 /** The form's values for a saved leg (or a blank one). */
@@ -97,6 +102,7 @@ export function legFormValues(saved: SavedLeg | undefined): LegValues {
   if (!saved) return blankLeg();
   const leg = blankLeg(saved.finish);
   leg.preset = saved.preset ?? '';
+  leg.presetId = saved.presetId ?? '';
   for (const f of LEG_LENGTHS) leg[f] = saved.values[f]?.text ?? '';
   return leg;
 }

@@ -72,3 +72,17 @@ export interface PresetView {
   isDefault: boolean;
   settings: PresetSettings;
 }
+
+/** The fields of a preset whose edits are kept in its history (old → new). */
+export const PRESET_FIELDS = { name: 'Name', finish: 'Finish', unit: 'Unit', isDefault: 'House default', ...PRESET_LENGTHS } as const;
+
+/** One kept edit of a preset: who changed which field, when, from what to what. */
+export interface PresetChange {
+  id: string;
+  at: string;
+  actorName: string | null;
+  /** a key of PRESET_FIELDS, or 'created' for the first entry */
+  field: string;
+  old: string | boolean | null;
+  new: string | boolean | null;
+}

@@ -2,7 +2,7 @@
 // in, and copied into the new garment's fitting in one tap (each copied value audited like a typed one).
 import { and, desc, eq, inArray } from 'drizzle-orm';
 import { db, type Db } from '@/db';
-import { garments, measurements, tickets } from '@/db/schema';
+import { garments, measurements, presets, tickets } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import type { PreviousFitting } from '@/lib/customer-types';
 import { LEG_LENGTHS, type SavedLength } from '@/lib/measurement-request';
@@ -18,14 +18,16 @@ export const FITTINGS_PER_KIND = 3;
 export async function previousFittings(actor: Actor, customerId: string): Promise<PreviousFitting[]> {
   const c = await getCustomer(actor, customerId);
   const rows = await db
-    .select({ m: measurements, kind: garments.kind, description: garments.description, number: tickets.number })
+    .select({ m: measurements, kind: garments.kind, description: garments.description, number: tickets.number, presetName: presets.name })
     .from(measurements)
     .innerJoin(garments, eq(garments.id, measurements.garmentId))
     .innerJoin(tickets, eq(tickets.id, garments.ticketId))
+    // The preset's current name through its id, within this shop only.
+    .leftJoin(presets, and(eq(presets.id, measurements.presetId), eq(presets.shopId, actor.shopId)))
     .where(and(eq(measurements.shopId, actor.shopId), eq(garments.shopId, actor.shopId), eq(tickets.shopId, actor.shopId), eq(tickets.customerId, c.id)))
     .orderBy(desc(measurements.takenAt), desc(tickets.number));
   const byGarment = new Map<string, PreviousFitting>();
-  for (const { m, kind, description, number } of rows) {
+  for (const { m, kind, description, number, presetName } of rows) {
     const values = m.values as Record<string, SavedLength | undefined>;
     const fitting = byGarment.get(m.garmentId) ?? {
       garmentId: m.garmentId,
@@ -37,7 +39,7 @@ export async function previousFittings(actor: Actor, customerId: string): Promis
       unit: m.unit,
       legs: [],
     };
-    fitting.legs.push({ leg: m.leg, finish: m.finish, preset: m.preset, finishedLength: values.backPin?.text ?? null, cuffDepth: values.cuffDepth?.text ?? null });
+    fitting.legs.push({ leg: m.leg, finish: m.finish, preset: presetName ?? m.preset, finishedLength: values.backPin?.text ?? null, cuffDepth: values.cuffDepth?.text ?? null });
     byGarment.set(m.garmentId, fitting);
   }
   const perKind = new Map<string, number>();
@@ -60,22 +62,26 @@ export async function copyFittings(tx: Db, actor: Actor, customerId: string | nu
   if (!customerId) throw new ServiceError(422, 'Choose the customer before copying a fitting from last time.');
   const sources = [...new Set(pairs.map((p) => p.from))];
   const rows = await tx
-    .select({ m: measurements, number: tickets.number })
+    .select({ m: measurements, number: tickets.number, presetName: presets.name })
     .from(measurements)
     .innerJoin(garments, eq(garments.id, measurements.garmentId))
     .innerJoin(tickets, eq(tickets.id, garments.ticketId))
+    .leftJoin(presets, and(eq(presets.id, measurements.presetId), eq(presets.shopId, actor.shopId)))
     .where(and(inArray(measurements.garmentId, sources), eq(garments.shopId, actor.shopId), eq(tickets.shopId, actor.shopId), eq(tickets.customerId, customerId)));
   const events: Parameters<typeof auditMany>[1] = [];
   for (const { to, from } of pairs) {
     const legs = rows.filter((r) => r.m.garmentId === from);
     if (legs.length === 0) throw new ServiceError(422, "That fitting is not one of this customer's: choose one from the list.");
-    for (const { m, number } of legs) {
+    for (const { m, number, presetName } of legs) {
       const values = m.values as Record<string, SavedLength | undefined>;
-      await tx.insert(measurements).values({ shopId: actor.shopId, garmentId: to, leg: m.leg, unit: m.unit, finish: m.finish, preset: m.preset, values, takenById: actor.userId });
+      // The copy points at the same preset (this shop's, by the join) under its current name.
+      const preset = presetName ?? m.preset;
+      const presetId = presetName === null ? null : m.presetId;
+      await tx.insert(measurements).values({ shopId: actor.shopId, garmentId: to, leg: m.leg, unit: m.unit, finish: m.finish, preset, presetId, values, takenById: actor.userId });
       const detail = (field: string, value: string | null) => ({ leg: m.leg, field, old: null, new: value, unit: m.unit, copiedFrom: ticketLabel(number, actor.shopName) });
       const push = (field: string, value: string | null) => value && events.push({ shopId: actor.shopId, actorId: actor.userId, action: 'measurement.changed', subject: to, detail: detail(field, value) });
       push('finish', m.finish);
-      push('preset', m.preset);
+      push('preset', preset);
       for (const field of LEG_LENGTHS) push(field, values[field]?.text ?? null);
     }
   }

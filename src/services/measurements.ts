@@ -1,8 +1,8 @@
 // Fitting measurements per leg: read with the engine's parser on save, kept as typed plus exact
 // mm, and every changed value recorded in the audit history (who, when, old and new).
-import { asc, eq, inArray } from 'drizzle-orm';
-import { db } from '@/db';
-import { measurements, user } from '@/db/schema';
+import { and, asc, eq, inArray } from 'drizzle-orm';
+import { db, type Db } from '@/db';
+import { measurements, presets, user } from '@/db/schema';
 import { isAllowanceError, parseLength, validateCuffInput, validateHemInput, validateHemTaperInput, validateTaperInput } from '@/lib/allowance';
 import { legHemTaperRequest, legMainRequest, legTaperRequest } from '@/lib/leg-plan';
 import type { Actor } from '@/lib/api';
@@ -10,6 +10,8 @@ import type { FittingView } from '@/lib/bench-types';
 import { LEG_LENGTHS, LEGS, type Leg, type LegLength, type Measurements, type SavedLeg, type SavedLength } from '@/lib/measurement-request';
 import { auditMany, auditOf } from './audit';
 import { visibleGarment } from './garments';
+import { ServiceError } from './errors';
+import { usablePreset } from './presets';
 
 /** Both legs' lengths read exactly, or a message for each field that could not be read. */
 export type ReadLengths =
@@ -75,19 +77,23 @@ export async function legsOf(garmentId: string): Promise<SavedLeg[]> {
 export async function legsOfGarments(garmentIds: string[]): Promise<Map<string, SavedLeg[]>> {
   const byGarment = new Map<string, SavedLeg[]>();
   if (garmentIds.length === 0) return byGarment;
+  // The preset is read through its id, and only within the fitting's own shop: a rename shows at
+  // once, and an id from elsewhere (never accepted on save) could not show another shop's name.
   const rows = await db
-    .select({ m: measurements, takenBy: user.name })
+    .select({ m: measurements, takenBy: user.name, presetId: presets.id, presetName: presets.name })
     .from(measurements)
     .leftJoin(user, eq(user.id, measurements.takenById))
+    .leftJoin(presets, and(eq(presets.id, measurements.presetId), eq(presets.shopId, measurements.shopId)))
     .where(inArray(measurements.garmentId, garmentIds))
     .orderBy(asc(measurements.leg));
-  for (const { m, takenBy } of rows) {
+  for (const { m, takenBy, presetId, presetName } of rows) {
     const legs = byGarment.get(m.garmentId) ?? [];
     legs.push({
       leg: m.leg,
       unit: m.unit,
       finish: m.finish,
-      preset: m.preset,
+      preset: presetName ?? m.preset,
+      presetId,
       values: m.values as SavedLeg['values'],
       takenAt: m.takenAt.toISOString(),
       takenBy,
@@ -95,6 +101,20 @@ export async function legsOfGarments(garmentIds: string[]): Promise<Map<string, 
     byGarment.set(m.garmentId, legs);
   }
   return byGarment;
+}
+
+/**
+ * The preset a leg records, by id: the one it already had (kept even if it is a colleague's own),
+ * or a new one only if the actor may use it (the shop's house presets, their own); any other id is
+ * refused alike, so another shop's ids cannot be told apart from made-up ones. With no id, only a
+ * removed preset's name already on the leg stays.
+ */
+async function presetOfLeg(tx: Db, actor: Actor, leg: Leg, typed: Measurements['legs'][Leg], was: SavedLeg | undefined): Promise<{ id: string | null; name: string | null }> {
+  if (typed.presetId === '') return { id: null, name: !was?.presetId && was?.preset && was.preset === typed.preset ? was.preset : null };
+  if (was?.presetId === typed.presetId) return { id: was.presetId, name: was.preset };
+  const p = await usablePreset(tx, actor, typed.presetId);
+  if (!p) throw new ServiceError(422, `The ${leg} leg's preset is not one you can use here: choose one from the list.`);
+  return p;
 }
 
 /** Saves both legs; each value that changed becomes one audit event. Answers the fitting as saved. */
@@ -116,11 +136,12 @@ export async function saveMeasurements(
     for (const leg of LEGS) {
       const was = before.get(leg);
       const typed = input.legs[leg];
+      const preset = await presetOfLeg(tx, actor, leg, typed, was);
       change(leg, 'finish', was?.finish ?? null, typed.finish);
-      change(leg, 'preset', was?.preset ?? null, typed.preset || null);
+      change(leg, 'preset', was?.preset ?? null, preset.name);
       if (was && was.unit !== input.unit) change(leg, 'unit', was.unit, input.unit);
       for (const field of LEG_LENGTHS) change(leg, field, was?.values[field]?.text ?? null, read[leg][field]?.text ?? null);
-      const row = { unit: input.unit, finish: typed.finish, preset: typed.preset || null, values: read[leg], takenById: actor.userId, takenAt: new Date() };
+      const row = { unit: input.unit, finish: typed.finish, preset: preset.name, presetId: preset.id, values: read[leg], takenById: actor.userId, takenAt: new Date() };
       await tx
         .insert(measurements)
         .values({ shopId: actor.shopId, garmentId, leg, ...row })

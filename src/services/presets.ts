@@ -1,14 +1,14 @@
 // House presets (kept by the lead) and each person's own: named settings that fill a leg's plan.
 import { and, asc, desc, eq, isNull, ne, or, sql } from 'drizzle-orm';
 import type { z } from 'zod';
-import { db } from '@/db';
-import { presets, type Preset } from '@/db/schema';
+import { db, type Db } from '@/db';
+import { measurements, presets, type Preset } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import { isAllowanceError, parseLength, validateCuffInput, validateHemInput } from '@/lib/allowance';
-import { LENGTHS_OF, PRESET_LENGTHS, type PresetSettings, type PresetView, type presetCreateInput, type presetUpdateInput } from '@/lib/preset-settings';
+import { LENGTHS_OF, PRESET_LENGTHS, type PresetChange, type PresetLength, type PresetSettings, type PresetView, type presetCreateInput, type presetUpdateInput } from '@/lib/preset-settings';
 import { ServiceError } from './errors';
-import { audit } from './audit';
-import { isUuid } from './garments';
+import { audit, auditMany, auditOf } from './audit';
+import { isUuid } from './ticket-core';
 
 
 /** Keeps only the lengths the finish uses (a hem allowance means nothing on a cuff). */
@@ -67,8 +67,8 @@ export async function presetScope(actor: Actor, id: string): Promise<'house' | '
   return row.ownerId === null ? 'house' : 'own';
 }
 
-async function nameTaken(actor: Actor, ownerId: string | null, name: string, except?: string) {
-  const [row] = await db
+async function nameTaken(tx: Db, actor: Actor, ownerId: string | null, name: string, except?: string) {
+  const [row] = await tx
     .select({ id: presets.id })
     .from(presets)
     .where(
@@ -95,9 +95,16 @@ export async function createPreset(actor: Actor, input: z.output<typeof presetCr
   if (input.isDefault && !house) throw new ServiceError(422, 'Only a house preset can be the default.');
   const settings = checkSettings(input.settings);
   const ownerId = house ? null : actor.userId;
-  if (await nameTaken(actor, ownerId, input.name)) throw new ServiceError(409, `There is already a preset called ${input.name}.`);
+  if (await nameTaken(db, actor, ownerId, input.name)) throw new ServiceError(409, `There is already a preset called ${input.name}.`);
   const row = await db.transaction(async (tx) => {
-    if (input.isDefault) await tx.update(presets).set({ isDefault: false }).where(and(eq(presets.shopId, actor.shopId), isNull(presets.ownerId)));
+    if (input.isDefault) {
+      const moved = await tx
+        .update(presets)
+        .set({ isDefault: false, updatedAt: new Date() })
+        .where(and(eq(presets.shopId, actor.shopId), isNull(presets.ownerId), eq(presets.isDefault, true)))
+        .returning({ id: presets.id });
+      await auditMany(tx, moved.flatMap((m) => changeEvents(actor, m.id, { isDefault: true }, { isDefault: false })));
+    }
     const [created] = await tx
       .insert(presets)
       .values({ shopId: actor.shopId, ownerId, name: input.name, settings, isDefault: Boolean(input.isDefault) })
@@ -115,28 +122,88 @@ async function visibleRow(actor: Actor, id: string): Promise<Preset> {
   return row;
 }
 
-/** Renames a preset, changes its settings, or makes a house preset the one default. */
+type FieldValue = string | boolean | null;
+
+/** Each field of a preset as its history names it (a key of PRESET_FIELDS). */
+function fieldsOf(row: Pick<Preset, 'name' | 'settings' | 'isDefault'>): Record<string, FieldValue> {
+  const out: Record<string, FieldValue> = { name: row.name, finish: row.settings.finish, unit: row.settings.unit, isDefault: row.isDefault };
+  for (const k of Object.keys(PRESET_LENGTHS) as PresetLength[]) out[k] = row.settings[k] ?? null;
+  return out;
+}
+
+/** One `preset.changed` event per field whose value moved (who and when come with the event). */
+function changeEvents(actor: Actor, id: string, before: Record<string, FieldValue>, after: Record<string, FieldValue>) {
+  return Object.keys(after)
+    .filter((field) => before[field] !== after[field])
+    .map((field) => ({ shopId: actor.shopId, actorId: actor.userId, action: 'preset.changed', subject: id, detail: { field, old: before[field], new: after[field] } }));
+}
+
+/**
+ * Renames a preset, changes its settings, or makes a house preset the one default. Each value that
+ * moved is kept in the preset's history (who, when, old → new); fittings keep pointing at it by id.
+ */
 export async function updatePreset(actor: Actor, id: string, input: z.output<typeof presetUpdateInput>): Promise<PresetView> {
-  const before = await visibleRow(actor, id);
-  if (input.isDefault && before.ownerId !== null) throw new ServiceError(422, 'Only a house preset can be the default.');
+  if (!isUuid(id)) throw new ServiceError(404, 'No such preset.');
   const settings = input.settings ? checkSettings(input.settings) : undefined;
-  if (input.name && (await nameTaken(actor, before.ownerId, input.name, id))) {
-    throw new ServiceError(409, `There is already a preset called ${input.name}.`);
-  }
   const row = await db.transaction(async (tx) => {
-    if (input.isDefault) {
-      await tx.update(presets).set({ isDefault: false }).where(and(eq(presets.shopId, actor.shopId), isNull(presets.ownerId), ne(presets.id, id)));
+    // Read under the row lock, so the history's "old" is what this edit replaced.
+    const [before] = await tx.select().from(presets).where(and(eq(presets.id, id), visibleTo(actor))).for('update');
+    if (!before) throw new ServiceError(404, 'No such preset.');
+    if (input.isDefault && before.ownerId !== null) throw new ServiceError(422, 'Only a house preset can be the default.');
+    if (input.name && (await nameTaken(tx, actor, before.ownerId, input.name, id))) {
+      throw new ServiceError(409, `There is already a preset called ${input.name}.`);
+    }
+    const events: Parameters<typeof auditMany>[1] = [];
+    if (input.isDefault && !before.isDefault) {
+      const moved = await tx
+        .update(presets)
+        .set({ isDefault: false, updatedAt: new Date() })
+        .where(and(eq(presets.shopId, actor.shopId), isNull(presets.ownerId), eq(presets.isDefault, true), ne(presets.id, id)))
+        .returning({ id: presets.id });
+      for (const m of moved) events.push(...changeEvents(actor, m.id, { isDefault: true }, { isDefault: false }));
     }
     const [updated] = await tx
       .update(presets)
       .set({ name: input.name, settings, isDefault: input.isDefault, updatedAt: new Date() })
       .where(and(eq(presets.id, id), eq(presets.shopId, actor.shopId)))
       .returning();
-    const changed = Object.keys(input).filter((k) => input[k as keyof typeof input] !== undefined);
-    await audit(tx, actor.shopId, actor.userId, input.isDefault ? 'preset.default-set' : 'preset.updated', id, { name: updated!.name, changed });
+    if (updated!.name !== before.name) {
+      // Fittings show the name through the id; the name they keep is for after a removal, kept current.
+      await tx.update(measurements).set({ preset: updated!.name }).where(and(eq(measurements.presetId, id), eq(measurements.shopId, actor.shopId)));
+    }
+    events.push(...changeEvents(actor, id, fieldsOf(before), fieldsOf(updated!)));
+    await auditMany(tx, events);
     return updated!;
   });
   return view(row);
+}
+
+/** A preset's kept edits, newest first (its creation last); 404 for a preset the actor cannot see. */
+export async function presetHistory(actor: Actor, id: string): Promise<PresetChange[]> {
+  const row = await visibleRow(actor, id);
+  const entries = await auditOf(actor.shopId, [row.id], ['preset.created', 'preset.changed']);
+  return entries.map((e) => {
+    const d = e.detail;
+    const created = e.action === 'preset.created';
+    return {
+      id: e.id,
+      at: e.at,
+      actorName: e.actorName,
+      field: created ? 'created' : String(d.field),
+      old: created ? null : ((d.old ?? null) as FieldValue),
+      new: created ? String(d.name) : ((d.new ?? null) as FieldValue),
+    };
+  });
+}
+
+/**
+ * The preset a fitting may record: a house preset of the actor's shop or the actor's own, else
+ * null (another shop's, someone else's, removed, not an id): a stranger's id is never usable.
+ */
+export async function usablePreset(tx: Db, actor: Actor, id: string): Promise<{ id: string; name: string } | null> {
+  if (!isUuid(id)) return null;
+  const [row] = await tx.select({ id: presets.id, name: presets.name }).from(presets).where(and(eq(presets.id, id), visibleTo(actor)));
+  return row ?? null;
 }
 
 /** Removes a preset; removing the house default leaves the shop without one until the lead picks another. */

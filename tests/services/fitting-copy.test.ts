@@ -13,6 +13,7 @@ const { legsOf } = await import('@/services/measurements');
 const { createTicket } = await import('@/services/tickets');
 const { auditOf } = await import('@/services/audit');
 const { makeShop } = await import('./fixtures');
+const { createPreset } = await import('@/services/presets');
 const { ticketLabel } = await import('@/lib/ticket-number');
 const { fittingRequest, openTicket, saveFitting } = await import('./garment-fixtures');
 
@@ -21,6 +22,7 @@ let b: Shop;
 let customerId = '';
 let lastGarment = '';
 let lastTicket = 0;
+let deepCuff = '';
 
 beforeAll(async () => {
   a = await makeShop('Fitting Copy A');
@@ -28,7 +30,8 @@ beforeAll(async () => {
   customerId = (await createCustomer(a.counter, { name: 'Lune Abernath', phone: '555 020 1111' })).id;
   const { ticket, garment } = await openTicket(a, { customerId, garments: [{ description: 'Olive cords' }] });
   // Finished length and cuff depth: invented figures in the range of common practice (no source).
-  await saveFitting(a.tailor, garment.id, fittingRequest({ backPin: '30 1/2', cuffDepth: '1 3/4', preset: 'Deep cuff' }));
+  deepCuff = (await createPreset(a.lead, { name: 'Deep cuff', scope: 'house', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 3/4' } })).id;
+  await saveFitting(a.tailor, garment.id, fittingRequest({ backPin: '30 1/2', cuffDepth: '1 3/4', presetId: deepCuff }));
   lastGarment = garment.id;
   lastTicket = ticket.number;
 });
@@ -48,9 +51,10 @@ describe('same as last time', () => {
     const t = await createTicket(a.counter, { customerId, garments: [{ description: 'Olive cords, again', fittingFrom: lastGarment }, { description: 'No fitting yet' }] });
     const [copied, plain] = await garmentsOfTicket(a.shopId, t.id);
     const legs = await legsOf(copied!.id);
-    expect(legs.map((l) => [l.leg, l.preset, l.values.backPin?.text, l.values.cuffDepth?.text])).toEqual([
-      ['left', 'Deep cuff', '30 1/2', '1 3/4'],
-      ['right', 'Deep cuff', '30 1/2', '1 3/4'],
+    // The copy points at the same preset by id.
+    expect(legs.map((l) => [l.leg, l.preset, l.presetId, l.values.backPin?.text, l.values.cuffDepth?.text])).toEqual([
+      ['left', 'Deep cuff', deepCuff, '30 1/2', '1 3/4'],
+      ['right', 'Deep cuff', deepCuff, '30 1/2', '1 3/4'],
     ]);
     expect(await legsOf(plain!.id)).toEqual([]);
     const history = await auditOf(a.shopId, [copied!.id], ['measurement.changed']);

@@ -49,7 +49,8 @@ describe('presets', () => {
     await svc.updatePreset(a.lead, one.id, { isDefault: true });
     defaults = (await svc.listPresets(a.lead)).filter((p) => p.isDefault);
     expect(defaults.map((p) => p.id)).toEqual([one.id]);
-    expect(await auditActions(a.shopId, one.id)).toEqual(['preset.created', 'preset.default-set']);
+    // Created as the default, moved away by `two`, taken back: each move kept on the preset.
+    expect(await auditActions(a.shopId, one.id)).toEqual(['preset.created', 'preset.changed', 'preset.changed']);
   });
 
   it('refuse a personal preset as the default', async () => {
@@ -103,7 +104,8 @@ describe('presets', () => {
     await expect(svc.updatePreset(a.tailor, p.id, { settings: { ...classic, cuffDepth: 'deep' } })).rejects.toMatchObject({ status: 422 });
     expect(await svc.deletePreset(a.tailor, p.id)).toEqual({ id: p.id, deleted: true });
     expect(await svc.presetScope(a.tailor, p.id)).toBeNull();
-    expect(await auditActions(a.shopId, p.id)).toEqual(['preset.created', 'preset.updated', 'preset.deleted']);
+    // One event per changed value (name, cuff depth).
+    expect(await auditActions(a.shopId, p.id)).toEqual(['preset.created', 'preset.changed', 'preset.changed', 'preset.deleted']);
   });
 
   it('seed the starter house presets with the classic cuff as the default', async () => {

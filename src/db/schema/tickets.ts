@@ -8,6 +8,7 @@ import { DEFAULT_EXISTING_FINISH, EXISTING_FINISHES } from '../../lib/existing-f
 import { GARMENT_STEPS, type GarmentStep } from '../../lib/garment-steps';
 import { organization, user } from './auth';
 import { customers } from './customers';
+import { presets } from './presets';
 
 /** Where a ticket stands: the step of its least advanced garment (kept by services/garments.ts). */
 export const TICKET_STATUSES = GARMENT_STEPS;
@@ -74,13 +75,16 @@ export const measurements = pgTable(
     leg: text('leg', { enum: ['left', 'right'] }).notNull().default('left'),
     unit: text('unit', { enum: ['in', 'cm', 'mm'] }).notNull().default('in'),
     finish: text('finish', { enum: ['plain', 'slope', 'cuff'] }).notNull().default('cuff'),
+    /** the preset's name when it was applied: shown only once the preset itself is removed */
     preset: text('preset'),
+    /** the preset applied (house or the taker's own, same shop): its current name is shown through it */
+    presetId: uuid('preset_id').references(() => presets.id, { onDelete: 'set null' }),
     /** { field: { text, mm } } for each length given (see src/lib/measurement-request.ts) */
     values: jsonb('values').notNull().default({}),
     takenById: text('taken_by_id').references(() => user.id, { onDelete: 'set null' }),
     takenAt: timestamp('taken_at', { withTimezone: true }).defaultNow().notNull(),
   },
-  (t) => [uniqueIndex('measurements_garment_leg_uidx').on(t.garmentId, t.leg)],
+  (t) => [uniqueIndex('measurements_garment_leg_uidx').on(t.garmentId, t.leg), index('measurements_preset_idx').on(t.presetId)],
 );
 
 /** A shop's bench settings: how lengths are typed and shown, and its own names for the steps. */
