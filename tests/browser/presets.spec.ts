@@ -1,8 +1,9 @@
-// Story (2): the lead saves a house preset and makes it the default; a tailor finds it
-// preselected, applies presets in one tap, adjusts a length and keeps it as their own preset.
-// The presets page has the fuller trial panel; the garment page (another worker's) mounts the same picker.
+// Story (2): the lead saves a house preset and makes it the default; a tailor keeps and edits their
+// own; on a garment page presets fill a leg in one tap, and a new fitting starts from the house
+// default, said on screen. Issue 15: the lead edits a house preset (name and depth) and a fitting
+// that used it shows the new name.
 import { mkdirSync } from 'node:fs';
-import type { Browser } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launch, ready, tabletPage } from './browser';
 import { signInAs } from './sign-in';
@@ -42,38 +43,35 @@ describe('house presets from the lead to the bench', () => {
     await page.context().close();
   });
 
-  it('a tailor finds it preselected, applies presets in one tap and keeps an adjusted one', async () => {
+  it('a tailor keeps a preset of their own and edits it; house presets are theirs to read only', async () => {
     const page = await tabletPage(browser);
     await signInAs(page, 'tailor', '/presets');
-    const depth = page.getByLabel('Cuff depth (in)', { exact: true });
-    // The house default fills the leg before anything is tapped.
-    await expect.poll(() => depth.inputValue()).toBe('1 3/8');
-    const chosen = page.getByRole('button', { name: new RegExp(`^${houseName}`) });
-    await expect.poll(() => chosen.getAttribute('aria-pressed')).toBe('true');
-
-    await page.getByRole('button', { name: /^Wide cuff/ }).click();
-    await expect.poll(() => depth.inputValue()).toBe('1 3/4');
-    await page.getByRole('button', { name: /^Metric cuff 35/ }).click();
-    await expect.poll(() => page.getByLabel('Cuff depth (mm)', { exact: true }).inputValue()).toBe('35');
-    await expect.poll(() => page.getByRole('radio', { name: 'mm' }).isChecked()).toBe(true);
-    await chosen.click();
-    await expect.poll(() => depth.inputValue()).toBe('1 3/8');
-    await expect.poll(() => chosen.getAttribute('aria-pressed')).toBe('true');
-
-    await depth.fill('1 5/16');
-    await page.getByLabel('Name for your preset').fill(ownName);
-    await page.getByRole('button', { name: 'Save as my preset' }).click();
-    await page.getByText(`Saved as ${ownName}.`).waitFor();
-    const own = page.getByRole('region', { name: 'Your presets', exact: true });
-    await own.getByRole('button', { name: new RegExp(`^${ownName}`) }).waitFor();
-    // The tailor keeps no house presets: no form for them.
+    const house = page.getByRole('region', { name: 'House presets', exact: true });
+    await house.getByRole('listitem').filter({ hasText: houseName }).getByText('House default').waitFor();
+    // The tailor keeps no house presets: no form, no edit or remove on them.
     expect(await page.getByRole('form', { name: 'New house preset' }).count()).toBe(0);
-    await page.screenshot({ path: 'test-results/presets-tailor.png', fullPage: true });
+    expect(await house.getByRole('button', { name: /^(Edit|Remove|Make default):/ }).count()).toBe(0);
+    // No trial panel that fills nothing: presets are applied on a garment's fitting.
+    expect(await page.getByRole('heading', { name: 'Apply a preset' }).count()).toBe(0);
 
-    // One tap on their own preset after another brings the adjusted depth back.
-    await page.getByRole('button', { name: /^Wide cuff/ }).click();
-    await own.getByRole('button', { name: new RegExp(`^${ownName}`) }).click();
-    await expect.poll(() => depth.inputValue()).toBe('1 5/16');
+    const form = page.getByRole('form', { name: 'New preset of your own' });
+    await form.getByLabel('Preset name').fill(ownName);
+    await form.getByLabel('Cuff depth (in)').fill('1 5/16');
+    await form.getByRole('button', { name: 'Save my preset' }).click();
+    await page.getByText(`Your preset ${ownName} saved.`).waitFor();
+    const own = page.getByRole('region', { name: 'Manage your own presets' });
+    await own.getByRole('button', { name: `Edit: ${ownName}` }).click();
+    const edit = own.getByRole('form', { name: `Edit ${ownName}` });
+    await edit.getByLabel('Cuff depth (in)').fill('1 3/8');
+    await edit.getByRole('button', { name: 'Save changes' }).click();
+    const row = own.getByRole('listitem').filter({ hasText: ownName });
+    await row.getByText('1 3/8 in').waitFor();
+    await row.getByText(`History of ${ownName}`).click();
+    await row.getByText('Cuff depth: 1 5/16 → 1 3/8').waitFor();
+    await page.screenshot({ path: 'test-results/presets-tailor.png', fullPage: true });
+    page.once('dialog', (d) => d.accept());
+    await own.getByRole('button', { name: `Remove: ${ownName}` }).click();
+    await row.waitFor({ state: 'detached' });
     await page.context().close();
   });
 
@@ -108,4 +106,104 @@ describe('house presets from the lead to the bench', () => {
     await list.getByRole('listitem').filter({ hasText: houseName }).waitFor({ state: 'detached' });
     await page.context().close();
   });
+
+  it('a new fitting starts from the house default, said on screen, one tap from another preset', async () => {
+    const page = await tabletPage(browser);
+    await signInAs(page, 'tailor', '/queue');
+    const id = await freshGarment(page, `Default story trousers ${stamp}`);
+    await page.goto(`/garments/${id}`);
+    await ready(page);
+    const fitting = page.getByRole('form', { name: 'Fitting measurements' });
+    const depth = fitting.getByLabel('Cuff depth', { exact: true });
+    // Classic cuff: 1 1/2 in (the house standard, common practice, no source; TRADE.md).
+    await fitting.getByText('From house default:').waitFor();
+    expect(await fitting.locator('p', { hasText: 'From house default:' }).innerText()).toContain('Classic cuff (cuff 1 1/2 in)');
+    expect(await depth.inputValue()).toBe('1 1/2');
+    await page.screenshot({ path: 'test-results/presets-new-fitting-default.png', fullPage: true });
+    // Both legs start from it.
+    await fitting.getByRole('radio', { name: 'Right leg' }).check();
+    await expect.poll(() => depth.inputValue()).toBe('1 1/2');
+    await fitting.getByText('From house default:').waitFor();
+    // One tap opens the list, one tap changes it.
+    await fitting.getByRole('button', { name: 'Change' }).click();
+    await fitting.getByRole('button', { name: /^Wide cuff/ }).click();
+    await expect.poll(() => depth.inputValue()).toBe('1 3/4');
+    await fitting.getByText('From the preset').waitFor();
+    await fitting.getByLabel('Pin at the back (finished length)').fill('31');
+    await fitting.getByRole('radio', { name: 'Left leg' }).check();
+    await fitting.getByLabel('Pin at the back (finished length)').fill('31');
+    await fitting.getByRole('button', { name: /^Save measurements/ }).click();
+    await page.getByText('Saved both legs.').waitFor();
+    const saved = await apiGet(page, `/api/garments/${id}/measurements`);
+    expect(saved.legs.map((l: { leg: string; preset: string; values: { cuffDepth: { text: string } } }) => [l.leg, l.preset, l.values.cuffDepth.text])).toEqual([
+      ['left', 'Classic cuff', '1 1/2'],
+      ['right', 'Wide cuff', '1 3/4'],
+    ]);
+    await page.context().close();
+  });
+
+  it('the lead edits a house preset’s depth and name, and a fitting that used it shows the new name', async () => {
+    const page = await tabletPage(browser);
+    await signInAs(page, 'lead', '/presets');
+    const before = `Story cuff ${stamp}`;
+    const after = `Story cuff 1 5/8 ${stamp}`;
+    const preset = await apiSend(page, 'POST', '/api/presets', { name: before, scope: 'house', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2', turnUnder: '1/2' } });
+    const id = await freshGarment(page, `Renamed preset trousers ${stamp}`);
+    const leg = { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2', turnUnder: '1/2', presetId: preset.id };
+    await apiSend(page, 'PUT', `/api/garments/${id}/measurements`, { unit: 'in', legs: { left: leg, right: leg } });
+
+    await page.reload();
+    await ready(page);
+    const list = page.getByRole('region', { name: 'Manage house presets' });
+    await list.getByRole('button', { name: `Edit: ${before}` }).click();
+    const edit = list.getByRole('form', { name: `Edit ${before}` });
+    await edit.getByLabel('Preset name').fill(after);
+    await edit.getByLabel('Cuff depth (in)').fill('1 5/8');
+    await edit.getByRole('button', { name: 'Save changes' }).click();
+    const row = list.getByRole('listitem').filter({ hasText: after });
+    await row.getByText('1 5/8 in').waitFor();
+    await row.getByText(`History of ${after}`).click();
+    await row.getByText(`Name: ${before} → ${after}`).waitFor();
+    await row.getByText('Cuff depth: 1 1/2 → 1 5/8').waitFor();
+    expect(await row.getByText('lead', { exact: false }).count()).toBeGreaterThan(0);
+    await page.screenshot({ path: 'test-results/presets-lead-edit.png', fullPage: true });
+
+    // The fitting points at the preset by id: its page shows the new name.
+    await page.goto(`/garments/${id}`);
+    await ready(page);
+    const fitting = page.getByRole('form', { name: 'Fitting measurements' });
+    await fitting.locator('strong', { hasText: after }).waitFor();
+    // The apprentice reads it the same way.
+    const reader = await tabletPage(browser);
+    await signInAs(reader, 'apprentice', '/queue');
+    await reader.goto(`/garments/${id}`);
+    await ready(reader);
+    await reader.getByRole('row', { name: /^Preset/ }).getByText(after).first().waitFor();
+    await reader.context().close();
+    await apiSend(page, 'DELETE', `/api/presets/${preset.id}`);
+    await page.context().close();
+  });
 });
+
+/** Opens a ticket with one garment through the API, as the signed-in page, and returns the garment's id. */
+async function freshGarment(page: Page, description: string): Promise<string> {
+  const ticket = await apiSend(page, 'POST', '/api/tickets', { customer: { name: 'Ysolde Varrick' }, garments: [{ description }] });
+  return (await apiGet(page, `/api/tickets/${ticket.id}`)).garments[0].id as string;
+}
+
+/** A JSON call from the signed-in page; fails the story on an error answer. */
+async function apiSend(page: Page, method: string, path: string, body?: unknown) {
+  const r = await page.evaluate(
+    async ({ method, path, body }) => {
+      const res = await fetch(path, { method, headers: { 'content-type': 'application/json' }, body: body === undefined ? undefined : JSON.stringify(body) });
+      return { status: res.status, body: await res.json() };
+    },
+    { method, path, body },
+  );
+  if (r.status >= 300) throw new Error(`${method} ${path}: ${r.status} ${JSON.stringify(r.body)}`);
+  return r.body;
+}
+
+async function apiGet(page: Page, path: string) {
+  return apiSend(page, 'GET', path);
+}

@@ -1,13 +1,19 @@
 // The presets API over HTTP: validation answers per field, who may change which preset, one
 // house default at a time (role × route statuses are in role-route-matrix.spec.ts).
 import { beforeAll, describe, expect, inject, it } from 'vitest';
-import { call, DEMO, freshEmail, signIn } from './client';
+import { call, DEMO, freshEmail, newShop, signIn } from './client';
 
 const cookies: Record<'lead' | 'tailor' | 'apprentice', string> = { lead: '', tailor: '', apprentice: '' };
 
 beforeAll(async () => {
   for (const role of ['lead', 'tailor', 'apprentice'] as const) cookies[role] = await signIn(DEMO[role]);
 });
+
+let stranger: Awaited<ReturnType<typeof newShop>> | undefined;
+/** A shop any stranger could sign up, made once for this file. */
+async function strangerShop() {
+  return (stranger ??= await newShop(`Stranger Alterations ${Date.now().toString(36)}`));
+}
 
 const cuff = (cuffDepth: string, unit = 'in') => ({ finish: 'cuff', unit, cuffDepth });
 
@@ -84,5 +90,47 @@ describe('presets API', () => {
     const again = await call('POST', '/api/presets', { cookie: cookies.lead, body: { name: name.toUpperCase(), scope: 'house', settings: cuff('1 1/2') } });
     expect(again.status).toBe(409);
     expect(again.body.error).toContain('already');
+  });
+
+  it('lets only the shop lead edit a house preset; its history names the lead, old → new; another shop gets 404', async () => {
+    const made = await call('POST', '/api/presets', { cookie: cookies.lead, body: { name: freshEmail('edit'), scope: 'house', settings: cuff('1 1/2') } });
+    expect(made.status).toBe(201);
+    const path = `/api/presets/${made.body.id}`;
+    const change = { name: `${made.body.name} wide`, settings: cuff('1 3/4') };
+    expect((await call('PATCH', path, { cookie: cookies.tailor, body: change })).status).toBe(403);
+    expect((await call('PATCH', path, { cookie: cookies.apprentice, body: change })).status).toBe(403);
+    const stranger = await strangerShop();
+    expect((await call('PATCH', path, { cookie: stranger.cookie, body: change })).status).toBe(404);
+    expect((await call('GET', `${path}/history`, { cookie: stranger.cookie })).status).toBe(404);
+    const edited = await call('PATCH', path, { cookie: cookies.lead, body: change });
+    expect(edited.status).toBe(200);
+    expect(edited.body).toMatchObject({ name: change.name, settings: { cuffDepth: '1 3/4' } });
+    const history = await call('GET', `${path}/history`, { cookie: cookies.tailor });
+    expect(history.status).toBe(200);
+    const fields = history.body.map((h: { field: string; old: unknown; new: unknown; actorName: string }) => [h.field, h.old, h.new, h.actorName]);
+    expect(fields).toEqual(
+      expect.arrayContaining([
+        ['name', made.body.name, change.name, expect.any(String)],
+        ['cuffDepth', '1 1/2', '1 3/4', expect.any(String)],
+      ]),
+    );
+    // Only the lead's edits: nothing the refused callers sent was kept.
+    expect(new Set(history.body.filter((h: { field: string }) => h.field !== 'created').map((h: { actorName: string }) => h.actorName)).size).toBe(1);
+    expect((await call('DELETE', path, { cookie: cookies.lead })).status).toBe(200);
+  });
+
+  it("refuses another shop's preset id on a fitting with 422, as a made-up one", async () => {
+    const demoDefault = (await call('GET', '/api/presets', { cookie: cookies.tailor })).body.find((p: { isDefault: boolean }) => p.isDefault);
+    const stranger = await strangerShop();
+    const ticket = await call('POST', '/api/tickets', { cookie: stranger.cookie, body: { garments: [{ description: 'Stranger trousers' }] } });
+    expect(ticket.status).toBe(201);
+    const garment = (await call('GET', `/api/tickets/${ticket.body.id}`, { cookie: stranger.cookie })).body.garments[0].id;
+    const fitting = (presetId: string) => ({ unit: 'in', legs: { left: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2', presetId }, right: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2' } } });
+    const theirs = await call('PUT', `/api/garments/${garment}/measurements`, { cookie: stranger.cookie, body: fitting(demoDefault.id) });
+    const madeUp = await call('PUT', `/api/garments/${garment}/measurements`, { cookie: stranger.cookie, body: fitting('00000000-0000-4000-8000-000000000000') });
+    expect(theirs.status).toBe(422);
+    expect(madeUp.status).toBe(422);
+    expect(theirs.body.error).toBe(madeUp.body.error);
+    expect((await call('GET', `/api/garments/${garment}/measurements`, { cookie: stranger.cookie })).body.legs).toEqual([]);
   });
 });

@@ -645,6 +645,14 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       check: (a) => expect(a.body.deleted).toBe(true),
     },
   },
+  'presets/[id]/history': {
+    GET: {
+      // Everyone who reads presets reads a house preset's history; another shop's is 404.
+      request: async () => ({ path: `/api/presets/${await freshHousePreset()}/history` }),
+      expect: signedIn(200, { counter: 403, other: 404 }),
+      check: (a) => expect(a.body.map((h: { field: string }) => h.field)).toEqual(['created']),
+    },
+  },
   'garments/[id]/photos': {
     GET: {
       request: async () => ({ path: `/api/garments/${await garmentOfA()}/photos` }),

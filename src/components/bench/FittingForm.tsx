@@ -5,6 +5,7 @@ import { useForm, useWatch, type Resolver } from 'react-hook-form';
 import { Segmented } from '@/components/calculator/Segmented';
 import { useDebounced } from '@/components/calculator/use-debounced';
 import { PresetPicker, type PresetSettings } from '@/components/presets/PresetPicker';
+import { usePresets } from '@/components/presets/use-presets';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import type { FittingView } from '@/lib/bench-types';
 import type { PresetView } from '@/lib/preset-settings';
@@ -44,10 +45,32 @@ function formValues(fitting: FittingView, unit: Unit): MeasurementsInput {
   return { unit: fitting.legs[0]?.unit ?? unit, legs: { left: legFormValues(byLeg.get('left')), right: legFormValues(byLeg.get('right')) } };
 }
 
+/** A preset's main length as a short note, e.g. "cuff 1 1/2 in". */
+function presetLine(preset: PresetView | undefined): string {
+  if (!preset) return '';
+  const s = preset.settings;
+  const main = s.finish === 'cuff' ? s.cuffDepth && `cuff ${s.cuffDepth} ${s.unit}` : s.hemAllowance && `hem ${s.hemAllowance} ${s.unit}`;
+  return main ? `(${main})` : '';
+}
+
 /** Typed text from a preset, carrying the preset's unit when it differs from the form's. */
 function inUnit(text: string | undefined, from: Unit, to: Unit): string {
   if (!text) return '';
   return from === to || /[a-z"″]/i.test(text) ? text : `${text} ${from}`;
+}
+
+/** The form with a preset's finish and lengths on the given legs (its id recorded, its name shown). */
+function withPreset(form: MeasurementsInput, legs: readonly Leg[], preset: PresetView): MeasurementsInput {
+  const next = structuredClone(form);
+  const p = preset.settings;
+  for (const l of legs) {
+    const typed = next.legs[l];
+    typed.preset = preset.name;
+    typed.presetId = preset.id;
+    typed.finish = p.finish === 'cuff' ? 'cuff' : p.slope ? 'slope' : 'plain';
+    for (const f of ['cuffDepth', 'hemSection', 'turnUnder', 'hemAllowance', 'slope'] as const) typed[f] = inUnit(p[f], p.unit, next.unit);
+  }
+  return next;
 }
 
 /** Both legs' fitting as a form, the chosen leg's live plan beside it; nothing typed is lost on a failed save. */
@@ -127,15 +150,27 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
 
   const errorFor = (f: LegLength) => formState.errors.legs?.[leg]?.[f]?.message;
 
-  const applyPreset = (p: PresetSettings, preset: PresetView) => {
-    const u = values.unit;
-    setValue(`legs.${leg}.preset`, preset.name, { shouldDirty: true });
-    const finish = p.finish === 'cuff' ? 'cuff' : p.slope ? 'slope' : 'plain';
-    setValue(`legs.${leg}.finish`, finish, { shouldDirty: true });
-    for (const f of ['cuffDepth', 'hemSection', 'turnUnder', 'hemAllowance', 'slope'] as const) {
-      setValue(`legs.${leg}.${f}`, inUnit(p[f], p.unit, u), { shouldDirty: true, shouldValidate: true });
-    }
+  const applyPreset = (_settings: PresetSettings, preset: PresetView) => {
+    setLegs(withPreset(getValues(), [leg], preset), { shouldDirty: true, shouldValidate: true });
+    setFromDefault(null);
   };
+  const setLegs = (next: MeasurementsInput, how: { shouldDirty: boolean; shouldValidate: boolean }) => {
+    for (const l of LEGS) for (const [k, v] of Object.entries(next.legs[l])) setValue(`legs.${l}.${k as LegLength}`, v as string, how);
+  };
+
+  // A new fitting starts from the house default, said on screen, one tap from another preset.
+  const presets = usePresets();
+  const [fromDefault, setFromDefault] = useState<string | null>(null);
+  const prefilled = useRef(false);
+  useEffect(() => {
+    const houseDefault = presets.data?.find((p) => p.house && p.isDefault);
+    if (prefilled.current || !houseDefault || fitting.legs.length > 0 || readDraft(draftKey)) return;
+    prefilled.current = true;
+    // As the form's starting point, not a change: opening a garment alone asks nothing on leaving.
+    reset(withPreset(getValues(), LEGS, houseDefault));
+    setFromDefault(houseDefault.id);
+  }, [presets.data, fitting.legs.length, draftKey, reset, getValues]);
+  const presetsRef = useRef<HTMLDetailsElement>(null);
 
   const copyOther = () => {
     const from = values.legs[other];
@@ -157,7 +192,7 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
         <p className="text-base text-muted">
           Lengths in <strong className="text-ink">{values.unit}</strong>; fractions welcome (1 1/2, 1½, 31 3/4 + 1/8), or name a unit (38 mm).
         </p>
-        <details className="rounded-md border-2 border-rule p-3">
+        <details ref={presetsRef} className="rounded-md border-2 border-rule p-3">
           <summary className="min-h-11 cursor-pointer content-center text-lg font-extrabold">Presets for the {leg} leg</summary>
           <div className="mt-3">
             <PresetPicker unit={values.unit} onApply={applyPreset} />
@@ -165,10 +200,35 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
         </details>
         {values.legs[leg].preset && (
           <p className="flex flex-wrap items-center gap-3 text-lg">
-            <span>
-              From the preset <strong>{values.legs[leg].preset}</strong>
-            </span>
-            <button type="button" onClick={() => setValue(`legs.${leg}.preset`, '', { shouldDirty: true })} className="min-h-11 rounded border-2 border-ink px-3 text-base font-semibold">
+            {fromDefault && values.legs[leg].presetId === fromDefault ? (
+              <>
+                <span>
+                  From house default: <strong>{values.legs[leg].preset}</strong> {presetLine(presets.data?.find((p) => p.id === fromDefault))}
+                </span>
+                <button
+                  type="button"
+                  onClick={() => {
+                    if (presetsRef.current) presetsRef.current.open = true;
+                    presetsRef.current?.scrollIntoView({ block: 'nearest' });
+                  }}
+                  className="min-h-11 rounded border-2 border-accent px-3 text-base font-semibold text-accent"
+                >
+                  Change
+                </button>
+              </>
+            ) : (
+              <span>
+                From the preset <strong>{values.legs[leg].preset}</strong>
+              </span>
+            )}
+            <button
+              type="button"
+              onClick={() => {
+                setValue(`legs.${leg}.preset`, '', { shouldDirty: true });
+                setValue(`legs.${leg}.presetId`, '', { shouldDirty: true });
+              }}
+              className="min-h-11 rounded border-2 border-ink px-3 text-base font-semibold"
+            >
               Not from a preset
             </button>
           </p>
@@ -219,7 +279,7 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
             </p>
           )}
           <button type="submit" disabled={save.isPending} className="min-h-14 rounded-lg bg-accent px-5 text-xl font-extrabold text-white disabled:opacity-60">
-            {save.isPending ? 'Saving…' : formState.isDirty ? 'Save measurements' : 'Save measurements (no changes)'}
+            {save.isPending ? 'Saving…' : formState.isDirty || (fromDefault && fitting.legs.length === 0) ? 'Save measurements' : 'Save measurements (no changes)'}
           </button>
         </div>
       </form>

@@ -1,12 +1,9 @@
-// The presets page: the lead keeps the house presets and picks the house default (first, as it is
-// the lead's page); everyone tries presets on a leg's settings and keeps their own.
-import { useEffect, useState } from 'react';
+// The presets page: the lead keeps the house presets and picks the house default; everyone reads
+// them and their history; tailors keep their own. Presets are applied on a garment's fitting,
+// where a new fitting starts from the house default.
 import { withQuery } from '@/components/WithQuery';
-import type { PresetSettings } from '@/lib/preset-settings';
-import { HousePresetForm } from './HousePresetForm';
-import { LegSettings } from './LegSettings';
+import { PresetForm } from './PresetForm';
 import { PresetManager } from './PresetManager';
-import { PresetPicker } from './PresetPicker';
 import { usePresets } from './use-presets';
 
 interface Props {
@@ -14,35 +11,27 @@ interface Props {
   canCreateOwn: boolean;
 }
 
-const BLANK: PresetSettings = { finish: 'cuff', unit: 'in' };
-
 function PresetsScreen({ canManageHouse, canCreateOwn }: Props) {
   const presets = usePresets();
-  const [leg, setLeg] = useState<PresetSettings | null>(null);
-  // The house default is preselected: it fills the leg until someone taps another preset.
-  useEffect(() => {
-    if (leg === null && presets.data) setLeg(presets.data.find((p) => p.house && p.isDefault)?.settings ?? BLANK);
-  }, [leg, presets.data]);
-  const settings = leg ?? BLANK;
+  if (presets.isError) return <p role="alert" className="font-semibold text-cut">Presets could not be loaded: {presets.error.message}</p>;
+  const house = presets.data?.filter((p) => p.house) ?? [];
+  const own = presets.data?.filter((p) => !p.house) ?? [];
   return (
     <div className="flex flex-col gap-8">
-      {canManageHouse && (
+      {canManageHouse && <PresetForm scope="house" />}
+      <PresetManager title={canManageHouse ? 'Manage house presets' : 'House presets'} presets={house} canChange={canManageHouse} canSetDefault={canManageHouse} />
+      {canCreateOwn && (
         <>
-          <HousePresetForm />
-          <PresetManager title="Manage house presets" presets={presets.data?.filter((p) => p.house) ?? []} canSetDefault />
+          <PresetForm scope="personal" />
+          <PresetManager title="Manage your own presets" presets={own} canChange canSetDefault={false} />
         </>
       )}
-      <section aria-labelledby="try-heading" className="flex flex-col gap-3">
-        <h2 id="try-heading" className="text-2xl font-extrabold">Apply a preset</h2>
-        <p className="text-muted">One tap fills the leg settings. Change any length, then keep it as your own preset.</p>
-        <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
-          <PresetPicker unit={settings.unit} onApply={setLeg} current={canCreateOwn ? settings : undefined} />
-          <div className="lg:sticky lg:top-4 lg:self-start">
-            <LegSettings value={settings} onChange={setLeg} />
-          </div>
-        </div>
-      </section>
-      {canCreateOwn && <PresetManager title="Manage your own presets" presets={presets.data?.filter((p) => !p.house) ?? []} canSetDefault={false} />}
+      <p className="text-muted">
+        To apply a preset, open a garment: its fitting lists these presets, and a new fitting starts from the house default.{' '}
+        <a href="/bench" className="font-semibold text-accent">
+          Go to the bench
+        </a>
+      </p>
     </div>
   );
 }

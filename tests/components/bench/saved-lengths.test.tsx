@@ -31,7 +31,7 @@ describe('the apprentice’s table of the fitting', () => {
   it('shows each length with its own unit and the shop reading below', () => {
     const fitting: FittingView = {
       history: [],
-      legs: [{ leg: 'left', unit: 'in', finish: 'cuff', preset: null, takenAt: '2026-12-01T10:00:00Z', takenBy: null, values: { cuffDepth: { text: '38 mm', mm: 38 }, available: { text: '5', mm: 127 } } }],
+      legs: [{ leg: 'left', unit: 'in', finish: 'cuff', preset: null, presetId: null, takenAt: '2026-12-01T10:00:00Z', takenBy: null, values: { cuffDepth: { text: '38 mm', mm: 38 }, available: { text: '5', mm: 127 } } }],
     };
     const html = text(
       renderToStaticMarkup(
