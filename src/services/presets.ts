@@ -202,7 +202,8 @@ export async function presetHistory(actor: Actor, id: string): Promise<PresetCha
  */
 export async function usablePreset(tx: Db, actor: Actor, id: string): Promise<{ id: string; name: string } | null> {
   if (!isUuid(id)) return null;
-  const [row] = await tx.select({ id: presets.id, name: presets.name }).from(presets).where(and(eq(presets.id, id), visibleTo(actor)));
+  // Held until the fitting's transaction ends: a removal at the same moment waits, never a broken link.
+  const [row] = await tx.select({ id: presets.id, name: presets.name }).from(presets).where(and(eq(presets.id, id), visibleTo(actor))).for('share');
   return row ?? null;
 }
 
