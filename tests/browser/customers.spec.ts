@@ -15,7 +15,9 @@ let lastTicket = 0;
 // Invented customer; lengths in the range of common practice (no source).
 const NAME = 'Thessaly Brookmere';
 const PHONE = '555 013 9902';
-const LEG = { finish: 'cuff', preset: 'Deep cuff', backPin: '31 1/8', cuffDepth: '1 5/8', available: '5' };
+// The tailor's own preset, recorded on the fitting by its id (issue 15).
+const PRESET = `Deep cuff ${Date.now().toString(36)}`;
+const LEG = { finish: 'cuff', presetId: '', backPin: '31 1/8', cuffDepth: '1 5/8', available: '5' };
 
 beforeAll(async () => {
   browser = await launch();
@@ -28,6 +30,9 @@ beforeAll(async () => {
   const t = await call('POST', '/api/tickets', { cookie: counter, body: { customerId, garments: [{ description: 'Moss green cords' }] } });
   lastTicket = t.body.number;
   const garmentId = (await call('GET', `/api/tickets/${t.body.id}`, { cookie: counter })).body.garments[0].id;
+  const preset = await call('POST', '/api/presets', { cookie: tailor, body: { name: PRESET, settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 5/8' } } });
+  expect(preset.status).toBe(201);
+  LEG.presetId = preset.body.id;
   const fitted = await call('PUT', `/api/garments/${garmentId}/measurements`, { cookie: tailor, body: { unit: 'in', legs: { left: LEG, right: LEG } } });
   expect(fitted.status).toBe(200);
 });
@@ -51,7 +56,7 @@ describe('customers', () => {
     const offer = page.getByRole('group', { name: 'Same as last time: garment 1' });
     const copy = offer.getByRole('button', { name: /Moss green cords/ });
     await copy.waitFor();
-    await expect(copy.textContent()).resolves.toMatch(/finished length 31 1\/8 in, cuff 1 5\/8 in, preset Deep cuff/);
+    await expect(copy.textContent()).resolves.toContain(`finished length 31 1/8 in, cuff 1 5/8 in, preset ${PRESET}`);
     await copy.click();
     await expect(copy.getAttribute('aria-pressed')).resolves.toBe('true');
     await page.getByLabel('Garment 1', { exact: true }).fill('Moss green cords, second pair');
@@ -67,8 +72,8 @@ describe('customers', () => {
     expect(ticket.body.customer.id).toBe(customerId);
     const fitting = await call('GET', `/api/garments/${ticket.body.garments[0].id}/measurements`, { cookie: tailor });
     expect(fitting.body.legs.map((l: { leg: string; preset: string; values: Record<string, { text: string }> }) => [l.leg, l.preset, l.values.backPin?.text, l.values.cuffDepth?.text])).toEqual([
-      ['left', 'Deep cuff', '31 1/8', '1 5/8'],
-      ['right', 'Deep cuff', '31 1/8', '1 5/8'],
+      ['left', PRESET, '31 1/8', '1 5/8'],
+      ['right', PRESET, '31 1/8', '1 5/8'],
     ]);
     await page.context().close();
   });
