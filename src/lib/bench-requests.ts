@@ -46,7 +46,10 @@ export const INTAKE_FINISHES = ['hem', 'cuff'] as const;
 /** A garment as intake takes it in, priced there when the counter picks its finish or kinds of work. */
 export const intakeGarment = garmentInput.extend({
   /** the finish the customer asks for, priced from the list as an estimate until the fitting's */
-  finish: z.union([z.enum(INTAKE_FINISHES, { error: 'Choose a plain hem or a cuff.' }), z.literal(''), z.null()]).optional().transform(blankToNull),
+  finish: z
+    .union([z.enum(INTAKE_FINISHES, { error: 'Choose a plain hem or a cuff.' }), z.literal(''), z.null()])
+    .optional()
+    .transform((v): (typeof INTAKE_FINISHES)[number] | null => (v === 'hem' || v === 'cuff' ? v : null)),
   /** the lead's kinds of work picked for this garment ("Replace zip"), each once */
   work: z
     .array(z.uuid('Choose kinds of work from the price list.'))
