@@ -30,7 +30,7 @@ export function GarmentPricing({ index, list, finish, work, onFinish, onWork }: 
         <label htmlFor={id} className="font-semibold">
           Finish asked for (priced as an estimate)
         </label>
-        <select id={id} value={finish} onChange={(e) => onFinish(e.target.value)} className={SELECT}>
+        <select id={id} value={finish} onChange={(e) => onFinish(e.target.value)} className={`${SELECT} sm:max-w-sm`}>
           <option value="">Not priced until the fitting</option>
           {INTAKE_FINISHES.map((f) => (
             <option key={f} value={f}>
