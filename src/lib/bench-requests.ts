@@ -40,14 +40,39 @@ const optionalText = (max: number, message: string) => z.union([text().trim().ma
 export { newCustomer, customerPatch } from './customer-request';
 import { newCustomer } from './customer-request';
 
-/** The body of POST /api/tickets: an existing or a new customer, a note, and the garments brought in. */
+/** The finishes a garment can be priced for at intake, before the fitting decides (an estimate). */
+export const INTAKE_FINISHES = ['hem', 'cuff'] as const;
+
+/** A garment as intake takes it in, priced there when the counter picks its finish or kinds of work. */
+export const intakeGarment = garmentInput.extend({
+  /** the finish the customer asks for, priced from the list as an estimate until the fitting's */
+  finish: z
+    .union([z.enum(INTAKE_FINISHES, { error: 'Choose a plain hem or a cuff.' }), z.literal(''), z.null()])
+    .optional()
+    .transform((v): (typeof INTAKE_FINISHES)[number] | null => (v === 'hem' || v === 'cuff' ? v : null)),
+  /** the lead's kinds of work picked for this garment ("Replace zip"), each once */
+  work: z
+    .array(z.uuid('Choose kinds of work from the price list.'))
+    .max(12, 'Pick at most 12 kinds of work per garment.')
+    .refine((ids) => new Set(ids).size === ids.length, 'Pick each kind of work once per garment.')
+    .default([]),
+});
+
+/** The body of POST /api/tickets: an existing or a new customer, a note, the garments brought in,
+ * and whether the ticket is a rush (priced at intake with the garments' finishes and work). */
 export const intakeRequest = z.object({
   customerId: z.union([z.uuid('Choose a customer from the list.'), z.literal(''), z.null()]).optional().transform(blankToNull),
   customer: newCustomer.optional(),
   note: optionalText(2000, 'Keep the note under 2000 characters.'),
   dueOn: dueDate,
-  garments: z.array(garmentInput).max(20, 'Open a second ticket for more than 20 garments.').default([]),
+  garments: z.array(intakeGarment).max(20, 'Open a second ticket for more than 20 garments.').default([]),
+  rush: z.boolean({ error: 'Say whether the ticket is a rush (true or false).' }).default(false),
 });
+
+/** True when intake asks for pricing (a finish, a kind of work or rush): the counter's or the lead's work. */
+export function pricesAtIntake(input: Pick<z.output<typeof intakeRequest>, 'garments' | 'rush'>): boolean {
+  return input.rush || input.garments.some((g) => g.finish !== null || g.work.length > 0);
+}
 
 /** Intake as typed. */
 export type IntakeInput = z.input<typeof intakeRequest>;

@@ -29,12 +29,33 @@ export const priceListInput = z.object({
   items: z.array(priceItemInput).length(PRICE_KEYS.length, 'Send every line of the list.'),
 });
 
+const kindName = text().trim().min(1, 'Name the kind of work, e.g. "Replace zip".').max(80, 'Keep the name under 80 characters.');
+
+/** A kind of work the lead adds to the price list: a flat price, and whether rush applies to it. */
+export const priceKindInput = z.object({
+  name: kindName,
+  amountMinor: amount('price'),
+  rushApplies: z.boolean({ error: 'Say whether rush applies (true or false).' }),
+});
+
+/** A change to a kind of work: rename, re-price, rush or not, retire (or bring back). Old tickets keep their lines. */
+export const priceKindPatch = z
+  .object({
+    name: kindName.optional(),
+    amountMinor: amount('price').optional(),
+    rushApplies: z.boolean({ error: 'Say whether rush applies (true or false).' }).optional(),
+    retired: z.boolean({ error: 'Say whether the kind is retired (true or false).' }).optional(),
+  })
+  .refine((p) => Object.values(p).some((v) => v !== undefined), 'Change at least one thing.');
+
 /** Lines worked out from the garments' finishes and plans, with or without rush. */
 export const autoLinesInput = z.object({ rush: z.boolean() });
 
 /** A line added at the counter: from the list, or an adjustment with its reason. */
 export const lineInput = z.discriminatedUnion('source', [
   z.object({ source: z.literal('list'), key: z.enum(PRICE_KEYS, { error: 'Choose a line from the price list.' }) }),
+  // One of the lead's kinds of work; kept on the ticket as a line from the list.
+  z.object({ source: z.literal('kind'), kindId: z.uuid('Choose a kind of work from the price list.') }),
   z.object({
     source: z.literal('adjust'),
     label: text().trim().min(1, 'Say what the adjustment is for.').max(80, 'Keep it under 80 characters.'),

@@ -15,9 +15,32 @@ export interface CounterView {
   autoReadyNotice: boolean;
 }
 
-/** The price list page's data: settings and one entry per priced piece of work. */
+/** A kind of work the lead added to the list (flat price); retired ones are kept, `retiredAt` set. */
+export interface PriceKindView {
+  id: string;
+  name: string;
+  amountMinor: number;
+  rushApplies: boolean;
+  retiredAt: Date | null;
+}
+
+/** The price list page's data: settings, one entry per worked-out line, and the lead's kinds of work. */
 export interface PriceListView extends CounterView {
   items: { key: (typeof PRICE_KEYS)[number]; label: string; amountMinor: number }[];
+  /** live kinds first, then retired ones, each in the order they were added */
+  kinds: PriceKindView[];
+}
+
+/** One change to the price list: who, when, which line, and each field's old and new value. */
+export interface PriceChange {
+  id: string;
+  at: string;
+  actorName: string | null;
+  /** price-kind.added, price-kind.changed or price-item.changed */
+  action: string;
+  /** the line's name as it was after the change */
+  line: string;
+  changes: { field: 'name' | 'amountMinor' | 'rushApplies' | 'retired'; from: string | number | boolean | null; to: string | number | boolean | null }[];
 }
 
 /** Everything the counter panel shows about a ticket's money. */

@@ -1,6 +1,6 @@
 // The demo shop's counter: an invented town, euro prices, opening hours. Every figure is made up.
 import { db } from '@/db';
-import { counterSettings, priceItems } from '@/db/schema';
+import { counterSettings, priceItems, priceKinds } from '@/db/schema';
 import type { PriceKey } from '@/lib/pricing/price-keys';
 import { DEFAULT_PRICE_LABELS } from '@/lib/pricing/price-keys';
 
@@ -13,7 +13,14 @@ const DEMO_PRICES: Record<PriceKey, number> = {
   rush: 900,
 };
 
-/** Gives the demo shop its price list and counter settings (ready notices sent by the counter). */
+// Invented kinds of work beside the five lines (flat euro cents); pressing alone is never rushed.
+const DEMO_KINDS = [
+  { name: 'Take in waist', amountMinor: 1800, rushApplies: true },
+  { name: 'Replace zip', amountMinor: 1400, rushApplies: true },
+  { name: 'Press only', amountMinor: 600, rushApplies: false },
+];
+
+/** Gives the demo shop its price list (with a few kinds of work) and counter settings (ready notices sent by the counter). */
 export async function seedCounterDemo(shopId: string): Promise<void> {
   await db.insert(counterSettings).values({
     shopId,
@@ -25,4 +32,7 @@ export async function seedCounterDemo(shopId: string): Promise<void> {
   await db.insert(priceItems).values(
     (Object.keys(DEMO_PRICES) as PriceKey[]).map((key) => ({ shopId, key, label: DEFAULT_PRICE_LABELS[key], amountMinor: DEMO_PRICES[key] })),
   );
+  // A millisecond apart: the list shows kinds in the order added.
+  const at = Date.now();
+  await db.insert(priceKinds).values(DEMO_KINDS.map((k, i) => ({ shopId, ...k, createdAt: new Date(at + i) })));
 }

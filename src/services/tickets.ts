@@ -12,6 +12,7 @@ import { ServiceError } from './errors';
 import { moveGarmentsLocked, tellMoved } from './garment-moves';
 import { customerCard, garmentVisibleTo, isUuid, refreshTicketAssignee, refreshTicketStatus, staffOf, summaries, withTicketLock } from './garments';
 import { pickUp } from './counter/hand-over';
+import { priceAtIntake } from './counter/intake-prices';
 import { ticketLabel } from '@/lib/ticket-number';
 import { copyFittings } from './fitting-copy';
 
@@ -68,6 +69,7 @@ export async function createTicket(actor: Actor, typed: IntakeInput): Promise<Ti
     const [c] = await db.select({ id: customers.id }).from(customers).where(and(eq(customers.id, input.customerId), eq(customers.shopId, actor.shopId)));
     if (!c) throw new ServiceError(422, 'No such customer in this shop.');
   }
+  if (input.rush && input.garments.length === 0) throw new ServiceError(422, 'Rush goes on a ticket with work priced on it: add a garment and its work first.');
   const people = new Set((await staffOf(actor)).map((p) => p.userId));
   if (input.garments.some((g) => g.assigneeId && !people.has(g.assigneeId))) throw new ServiceError(422, 'Give each garment to someone in this shop.');
   const row = await db.transaction(async (tx) => {
@@ -87,12 +89,19 @@ export async function createTicket(actor: Actor, typed: IntakeInput): Promise<Ti
       const made = await tx
         .insert(garments)
         .values(
-          input.garments.map((g, position) => ({ shopId: actor.shopId, ticketId: t!.id, position, description: g.description, dueOn: g.dueOn ?? input.dueOn, assigneeId: g.assigneeId, existingFinish: g.existingFinish })),
+          // The finish asked for at intake is kept on the garment: the fitting's own finish wins over it.
+          input.garments.map((g, position) => ({ shopId: actor.shopId, ticketId: t!.id, position, description: g.description, dueOn: g.dueOn ?? input.dueOn, assigneeId: g.assigneeId, existingFinish: g.existingFinish, finish: g.finish })),
         )
-        .returning({ id: garments.id, position: garments.position });
+        .returning({ id: garments.id, position: garments.position, existingFinish: garments.existingFinish });
       // "Same as last time": only an existing customer has a last time.
       const copies = input.garments.flatMap((g, i) => (g.fittingFrom ? [{ to: made.find((m) => m.position === i)!.id, from: g.fittingFrom }] : []));
       await copyFittings(tx, actor, input.customerId, copies);
+      // Priced at intake when asked (a finish, kinds of work, rush), in the same transaction.
+      const taken = input.garments.map((g, i) => {
+        const m = made.find((x) => x.position === i)!;
+        return { id: m.id, label: g.description, finish: g.finish, existingFinish: m.existingFinish, work: g.work };
+      });
+      await priceAtIntake(tx, actor, t!.id, taken, input.rush);
       // Work given to someone at intake gives them the ticket.
       return { ...t!, assigneeId: await refreshTicketAssignee(tx, actor.shopId, t!.id) };
     }

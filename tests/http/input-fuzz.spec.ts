@@ -64,6 +64,8 @@ const SEEDS: Record<string, unknown> = {
   'POST plan/sheet': { kind: 'hem', unit: 'cm', hemAllowance: '4', turnUnder: '1', pageSize: 'A4' },
   'POST presets': { name: 'Fuzz preset', scope: 'personal', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } },
   'PATCH presets/[id]': { name: 'Fuzz preset 2', settings: { finish: 'hem', unit: 'cm', hemAllowance: '4' } },
+  'POST prices/kinds': { name: 'Fuzz kind', amountMinor: 1200, rushApplies: true },
+  'PATCH prices/kinds/[id]': { name: 'Fuzz kind renamed', amountMinor: 1300, rushApplies: false, retired: true },
   'PUT prices': { currency: 'USD', hours: 'Mon-Fri', location: '1 Invented Row', autoReadyNotice: false, items: [] },
   'POST shops': { shopName: 'Fuzz Alterations', name: 'Fuzz Lead', email: 'fuzz-lead@example.com', password: 'a-long-password' },
   'PATCH staff/[memberId]': { role: 'counter' },
@@ -206,6 +208,7 @@ function describeAttempt(a: Attempt): string {
 }
 
 // Shop-wide settings a valid fuzzed write may change, put back afterwards for the other test files.
+let kindsBefore = new Set<string>();
 let saved: { bench: unknown; timeZone: string; prices: Record<string, unknown>; name: string; defaultPreset?: string } | undefined;
 
 beforeAll(async () => {
@@ -223,7 +226,12 @@ beforeAll(async () => {
   const photo = await upload(lead, ids.garments!, [{ name: 'fuzz.jpg', bytes: await sampleJpeg(64, 48) }]);
   ids.photos = photo.body[0].id;
   const presets = await call('GET', '/api/presets', { cookie: lead });
+  // A kind of work to aim PATCH prices/kinds/[id] at, retired so the stories' intake never offers it.
+  const kind = await call('POST', '/api/prices/kinds', { cookie: lead, body: { name: freshEmail('fuzz-kind'), amountMinor: 100, rushApplies: true } });
+  ids.prices = kind.body.id;
+  await call('PATCH', `/api/prices/kinds/${kind.body.id}`, { cookie: lead, body: { retired: true } });
   const prices = await call('GET', '/api/prices', { cookie: lead });
+  kindsBefore = new Set((prices.body.kinds as { id: string }[]).map((k) => k.id));
   saved = {
     bench: (await call('GET', '/api/bench-settings', { cookie: lead })).body,
     timeZone: (await call('GET', '/api/shop-time-zone', { cookie: lead })).body.timeZone,
@@ -240,6 +248,10 @@ afterAll(async () => {
   const cookie = await signIn(DEMO.lead);
   const { currency, hours, location, autoReadyNotice, items } = saved.prices as Record<string, unknown>;
   await call('PUT', '/api/prices', { cookie, body: { currency, hours, location, autoReadyNotice, items } });
+  // Kinds of work the fuzzing added leave the list (retired: kinds are never deleted).
+  for (const k of (await call('GET', '/api/prices', { cookie })).body.kinds as { id: string; retiredAt: string | null }[]) {
+    if ((!kindsBefore.has(k.id) || k.id === ids.prices) && !k.retiredAt) await call('PATCH', `/api/prices/kinds/${k.id}`, { cookie, body: { retired: true } });
+  }
   await call('PUT', '/api/bench-settings', { cookie, body: saved.bench });
   await call('PUT', '/api/shop-time-zone', { cookie, body: { timeZone: saved.timeZone } });
   await call('POST', '/api/auth/update-user', { cookie, body: { name: saved.name } });

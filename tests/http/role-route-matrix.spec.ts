@@ -4,7 +4,7 @@
 // permission check fails its row (a signed-out or unprivileged caller gets through).
 import { readdirSync, readFileSync } from 'node:fs';
 import { join, relative, sep } from 'node:path';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { call, DEMO, freshEmail, newShop, signIn, type Answer } from './client';
 import { sampleJpeg, someGarment, upload } from './photo-upload';
 
@@ -172,6 +172,16 @@ const PRICE_LIST = {
     { key: 'rush', label: 'Rush surcharge (per ticket)', amountMinor: 900 },
   ],
 };
+
+let kindNo = 0;
+/** A fresh kind of work on shop A's list, made by its lead and retired at once (the browser stories share the demo list). */
+async function freshKind(): Promise<string> {
+  kindNo += 1;
+  const r = await call('POST', '/api/prices/kinds', { cookie: cookies.lead, body: { name: `Matrix kind ${Date.now().toString(36)} ${kindNo}`, amountMinor: 1500, rushApplies: true } });
+  expect(r.status).toBe(201);
+  expect((await call('PATCH', `/api/prices/kinds/${r.body.id}`, { cookie: cookies.lead, body: { retired: true } })).status).toBe(200);
+  return r.body.id;
+}
 
 let photoGarmentOfA = '';
 async function garmentOfA(): Promise<string> {
@@ -458,6 +468,32 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       check: (a) => expect(a.body.hours).toBe(PRICE_LIST.hours),
     },
   },
+  'prices/kinds': {
+    POST: {
+      // Retired by the cleanup after the matrix: the demo list stays as the stories expect it.
+      request: () => ({ path: '/api/prices/kinds', body: { name: `Matrix new kind ${freshEmail('k')}`, amountMinor: 1250, rushApplies: false } }),
+      expect: signedIn(403, { lead: 201, other: 201 }),
+      check: (a) => expect([a.body.amountMinor, a.body.rushApplies, a.body.retiredAt]).toEqual([1250, false, null]),
+    },
+  },
+  'prices/kinds/[id]': {
+    PATCH: {
+      request: async () => ({ path: `/api/prices/kinds/${await freshKind()}`, body: { amountMinor: 1700 } }),
+      expect: signedIn(403, { lead: 200, other: 404 }),
+      check: (a) => expect([a.body.amountMinor, typeof a.body.retiredAt]).toEqual([1700, 'string']),
+    },
+  },
+  'prices/history': {
+    GET: {
+      request: () => ({ path: '/api/prices/history' }),
+      expect: signedIn(403, { lead: 200, other: 200 }),
+      check: (a, actor) => {
+        expect(Array.isArray(a.body)).toBe(true);
+        // The other shop's lead changed nothing on shop A's list: none of its kinds in their history.
+        if (actor === 'other') expect(a.body.every((h: { line: string }) => !h.line.startsWith('Matrix kind'))).toBe(true);
+      },
+    },
+  },
   'tickets/[id]/price-lines': {
     GET: {
       request: async () => ({ path: `/api/tickets/${await pricedTicket()}/price-lines` }),
@@ -702,6 +738,14 @@ beforeAll(async () => {
   markersOfB.push(shopB, b.email);
   // Something in the lead's sent messages: an invitation mail from shop A.
   await freshInvitation();
+});
+
+afterAll(async () => {
+  // The kinds the matrix added to the demo shop leave its list (retired, as the lead would).
+  const list = await call('GET', '/api/prices', { cookie: cookies.lead });
+  for (const k of list.body.kinds as { id: string; name: string; retiredAt: string | null }[]) {
+    if (k.name.startsWith('Matrix') && !k.retiredAt) await call('PATCH', `/api/prices/kinds/${k.id}`, { cookie: cookies.lead, body: { retired: true } });
+  }
 });
 
 describe('role × route matrix', () => {

@@ -18,15 +18,18 @@ const { customers, garments, payments, priceLines, refunds, tickets } = await im
 const prices = await import('@/services/counter/prices');
 const pay = await import('@/services/counter/payments');
 const { settleCredit } = await import('@/services/counter/refunds');
+const { addKind } = await import('@/services/counter/price-kinds');
 const { ServiceError } = await import('@/services/errors');
 const { PRICE_KEYS } = await import('@/lib/pricing/price-keys');
 const { makeShop, TEST_PRICES } = await import('./fixtures');
 
 let a: Shop;
+const kindIds = { rush: '', noRush: '' };
 let ticketNo = 20_000;
 
 type Op =
   | { kind: 'line'; key: (typeof PRICE_KEYS)[number] }
+  | { kind: 'kind-line'; rushApplies: boolean }
   | { kind: 'adjust'; amountMinor: number; lead: boolean }
   | { kind: 'void'; pick: number }
   | { kind: 'pay'; method: 'cash' | 'card' | 'credit'; amountMinor: number }
@@ -37,6 +40,8 @@ type Step = Op | { kind: 'race'; one: Op; two: Op; sameTicket: boolean };
 
 const op: fc.Arbitrary<Op> = fc.oneof(
   fc.record({ kind: fc.constant('line' as const), key: fc.constantFrom(...PRICE_KEYS) }),
+  // One of the lead's kinds of work: one rush applies to, one it does not (RUSH_RULE holds for both).
+  fc.record({ kind: fc.constant('kind-line' as const), rushApplies: fc.boolean() }),
   fc.record({ kind: fc.constant('adjust' as const), amountMinor: fc.integer({ min: -4000, max: 3000 }).filter((n) => n !== 0), lead: fc.boolean() }),
   fc.record({ kind: fc.constant('void' as const), pick: fc.nat(20) }),
   fc.record({ kind: fc.constant('pay' as const), method: fc.constantFrom('cash' as const, 'card' as const, 'credit' as const), amountMinor: fc.integer({ min: 1, max: 5000 }) }),
@@ -58,6 +63,8 @@ async function apply(ticketId: string, o: Op): Promise<unknown> {
   switch (o.kind) {
     case 'line':
       return prices.addLine(a.counter, ticketId, { source: 'list', key: o.key });
+    case 'kind-line':
+      return prices.addLine(a.counter, ticketId, { source: 'kind', kindId: o.rushApplies ? kindIds.rush : kindIds.noRush });
     case 'adjust':
       return prices.addLine(o.lead ? a.lead : a.counter, ticketId, { source: 'adjust', label: 'Generated', amountMinor: o.amountMinor, reason: 'property test' });
     case 'void': {
@@ -110,6 +117,9 @@ async function checkLaws(ticketId: string, customerId: string, trail: string): P
   expect(s.credit, `credit = max(net − total, 0) — ${trail}`).toBe(Math.max(net - total, 0));
   expect(Math.min(s.due, s.credit), trail).toBe(0);
   if (ticket!.status === 'collected') expect(s.due, `collected only with due 0 — ${trail}`).toBe(0);
+  // RUSH_RULE, however the lines came (kinds of work included): at most one live rush line.
+  const rushes = lines.filter((l) => !l.voidedAt && l.key === 'rush');
+  expect(rushes.length, `one rush at most — ${trail}`).toBeLessThanOrEqual(1);
   // Kept credit is never spent beyond what was kept, across the customer's tickets.
   expect(s.customerCredit, trail).toBeGreaterThanOrEqual(0);
   const kept = await db.select().from(refunds).where(and(eq(refunds.customerId, customerId), eq(refunds.method, 'credit')));
@@ -119,6 +129,8 @@ async function checkLaws(ticketId: string, customerId: string, trail: string): P
 beforeAll(async () => {
   a = await makeShop('Ledger Lane Hems');
   await prices.savePriceList(a.lead, { currency: 'EUR', hours: '', location: '', autoReadyNotice: false, items: [...TEST_PRICES] });
+  kindIds.rush = (await addKind(a.lead, { name: 'Replace zip', amountMinor: 1500, rushApplies: true })).id;
+  kindIds.noRush = (await addKind(a.lead, { name: 'Press only', amountMinor: 500, rushApplies: false })).id;
 });
 afterAll(() => handle.close());
 
@@ -157,6 +169,6 @@ describe('money laws', () => {
   }
 
   it('were checked on work that went through, not only on refusals', () => {
-    expect(Object.keys(done).sort()).toEqual(['adjust', 'line', 'no-charge', 'pay', 'pickup', 'refund', 'void']);
+    expect(Object.keys(done).sort()).toEqual(['adjust', 'kind-line', 'line', 'no-charge', 'pay', 'pickup', 'refund', 'void']);
   });
 });

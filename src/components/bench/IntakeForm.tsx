@@ -12,23 +12,30 @@ import { ApiError, fetchJson } from '@/lib/fetch-json';
 import { DEFAULT_EXISTING_FINISH } from '@/lib/existing-finish';
 import { ExistingFinishSelect } from './ExistingFinishSelect';
 import { useAssignees } from './use-bench';
+import { usePriceList } from '@/components/counter/counter-api';
+import { GarmentPricing, IntakeTotal } from './IntakePricing';
 
 type Form = IntakeInput & { garments: NonNullable<IntakeInput['garments']> };
 const resolver = zodResolver(intakeRequest) as unknown as Resolver<Form, unknown, Intake>;
 const SELECT = 'min-h-12 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent';
 // A pair comes in with a plain hem unless the counter says otherwise (DEFAULT_EXISTING_FINISH).
-const NEW_GARMENT = { description: '', dueOn: '', assigneeId: '', existingFinish: DEFAULT_EXISTING_FINISH, fittingFrom: '' };
+const NEW_GARMENT = { description: '', dueOn: '', assigneeId: '', existingFinish: DEFAULT_EXISTING_FINISH, fittingFrom: '', finish: '' as '' | 'hem' | 'cuff', work: [] as string[] };
 
-function Intake() {
+/** Pricing at intake is the counter's and the lead's (prices/adjust): others take work in unpriced. */
+function Intake({ canPrice = false }: { canPrice?: boolean }) {
   const people = useAssignees();
+  const prices = usePriceList();
+  const list = canPrice ? prices.data : undefined;
   const [who, setWho] = useState<'existing' | 'new'>('existing');
   const [known, setKnown] = useState<CustomerHit | null>(null);
   const { register, control, handleSubmit, formState, setError, setValue } = useForm<Form, unknown, Intake>({
     resolver,
-    defaultValues: { customerId: '', note: '', dueOn: '', garments: [{ ...NEW_GARMENT }] },
+    defaultValues: { customerId: '', note: '', dueOn: '', garments: [{ ...NEW_GARMENT }], rush: false },
   });
   const garments = useFieldArray({ control, name: 'garments' });
-  const fittingFrom = useWatch({ control, name: 'garments' }).map((g) => g?.fittingFrom);
+  const typed = useWatch({ control, name: 'garments' });
+  const rush = useWatch({ control, name: 'rush' }) ?? false;
+  const fittingFrom = typed.map((g) => g?.fittingFrom);
   const previous = usePreviousFittings(who === 'existing' ? (known?.id ?? null) : null);
   const offers = who === 'existing' && known ? (previous.data ?? []) : [];
   const chooseKnown = (c: CustomerHit | null) => {
@@ -92,6 +99,16 @@ function Intake() {
                 Remove
               </button>
             )}
+            {canPrice && (
+              <GarmentPricing
+                index={i}
+                list={list}
+                finish={typed[i]?.finish ?? ''}
+                work={(typed[i]?.work ?? []).filter((w): w is string => !!w)}
+                onFinish={(f) => setValue(`garments.${i}.finish`, f as 'hem' | 'cuff' | '')}
+                onWork={(ids) => setValue(`garments.${i}.work`, ids)}
+              />
+            )}
             {offers.length > 0 && (
               <div className="sm:col-span-2 lg:col-span-5">
                 <SameAsLastTime garmentLabel={`garment ${i + 1}`} fittings={offers} chosen={fittingFrom[i]} onChoose={(id) => setValue(`garments.${i}.fittingFrom`, id ?? '')} />
@@ -109,6 +126,7 @@ function Intake() {
         <legend className="px-1 text-xl font-extrabold">Ticket</legend>
         <Field label="Note for the bench" registration={register('note')} error={e.note} id="t-note" autoComplete="off" />
         <Field label="Due (all garments, unless set above)" type="date" registration={register('dueOn')} error={e.dueOn} id="t-due" />
+        {canPrice && <IntakeTotal list={list} garments={typed} rush={rush} onRush={(r) => setValue('rush', r)} />}
       </fieldset>
 
       {open.error && <FormMessage kind="error">Not opened: {open.error.message} Everything you typed is still here.</FormMessage>}

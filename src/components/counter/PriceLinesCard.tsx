@@ -126,9 +126,12 @@ function NoChargeForm({ s }: { s: CounterSummary }) {
 export function PriceLinesCard({ s, canChange }: { s: CounterSummary; canChange: boolean }) {
   const list = usePriceList();
   const [rush, setRush] = useState(false);
-  const [key, setKey] = useState<PriceKey>('plain-hem');
+  // A worked-out line's key, or "kind:<id>" for one of the lead's kinds of work.
+  const [key, setKey] = useState<string>('plain-hem');
   const auto = useCounterAction(s.ticket.id, () => post<{ unpriced: string[] }>(s.ticket.id, 'price-lines/auto', { rush }));
-  const pick = useCounterAction(s.ticket.id, () => post(s.ticket.id, 'price-lines', { source: 'list', key }));
+  const pick = useCounterAction(s.ticket.id, () =>
+    post(s.ticket.id, 'price-lines', key.startsWith('kind:') ? { source: 'kind', kindId: key.slice('kind:'.length) } : { source: 'list', key: key as PriceKey }),
+  );
   const error = auto.error ?? pick.error;
   return (
     <section aria-labelledby="lines-h" className="rounded border-2 border-rule bg-card p-4">
@@ -177,7 +180,7 @@ export function PriceLinesCard({ s, canChange }: { s: CounterSummary; canChange:
               <label htmlFor="list-line" className="font-semibold">
                 Line from the price list
               </label>
-              <select id="list-line" value={key} onChange={(e) => setKey(e.target.value as PriceKey)} className="min-h-11 w-full rounded border-2 border-rule bg-card px-3 py-2 text-lg">
+              <select id="list-line" value={key} onChange={(e) => setKey(e.target.value)} className="min-h-11 w-full rounded border-2 border-rule bg-card px-3 py-2 text-lg">
                 {PRICE_KEYS.map((k) => {
                   const entry = list.data?.items.find((i) => i.key === k);
                   return (
@@ -186,6 +189,13 @@ export function PriceLinesCard({ s, canChange }: { s: CounterSummary; canChange:
                     </option>
                   );
                 })}
+                {list.data?.kinds
+                  .filter((k) => !k.retiredAt)
+                  .map((k) => (
+                    <option key={k.id} value={`kind:${k.id}`}>
+                      {`${k.name} — ${formatMoney(k.amountMinor, list.data!.currency)}`}
+                    </option>
+                  ))}
               </select>
             </div>
             <button type="button" className={button} disabled={pick.isPending} onClick={() => pick.mutate(undefined)}>

@@ -10,16 +10,22 @@ import { priceListInput } from '@/lib/counter-request';
 import { fetchJson } from '@/lib/fetch-json';
 import { CURRENCIES, type Currency } from '@/lib/pricing/money';
 import type { PriceListView } from '@/lib/counter-views';
+import type { AsJson } from '@/lib/as-json';
 import { MoneyField } from './MoneyField';
+import { PriceHistoryCard } from './PriceHistoryCard';
+import { PriceKindsCard } from './PriceKindsCard';
 
 type List = z.infer<typeof priceListInput>;
 
-function Editor({ list }: { list: PriceListView }) {
+function Editor({ list }: { list: AsJson<PriceListView> }) {
   const client = useQueryClient();
-  const { register, handleSubmit, formState, watch, control } = useForm<List>({ resolver: zodResolver(priceListInput), defaultValues: list });
+  const { register, handleSubmit, formState, watch, control } = useForm<List>({ resolver: zodResolver(priceListInput), defaultValues: { currency: list.currency, hours: list.hours, location: list.location, autoReadyNotice: list.autoReadyNotice, items: list.items } });
   const save = useMutation({
-    mutationFn: (v: List) => fetchJson<PriceListView>('/api/prices', { method: 'PUT', body: v }),
-    onSuccess: (data) => client.setQueryData(['prices'], data),
+    mutationFn: (v: List) => fetchJson<AsJson<PriceListView>>('/api/prices', { method: 'PUT', body: v }),
+    onSuccess: (data) => {
+      client.setQueryData(['prices'], data);
+      void client.invalidateQueries({ queryKey: ['price-history'] });
+    },
   });
   const currency = watch('currency') as Currency;
   return (
@@ -70,10 +76,17 @@ function Editor({ list }: { list: PriceListView }) {
 }
 
 function PriceList() {
-  const list = useQuery({ queryKey: ['prices'], queryFn: () => fetchJson<PriceListView>('/api/prices') });
+  const list = useQuery({ queryKey: ['prices'], queryFn: () => fetchJson<AsJson<PriceListView>>('/api/prices') });
   if (list.isPending) return <p role="status">Loading the price list…</p>;
   if (list.error) return <FormMessage kind="error">{list.error.message}</FormMessage>;
-  return <Editor list={list.data} />;
+  // The five lines and the settings are one form; the kinds are saved one by one, each with its history.
+  return (
+    <div className="flex flex-col gap-5">
+      <Editor list={list.data} />
+      <PriceKindsCard list={list.data} />
+      <PriceHistoryCard currency={list.data.currency} />
+    </div>
+  );
 }
 
 /** The price list island. */

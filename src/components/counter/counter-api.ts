@@ -3,6 +3,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { NoticeJson as Notice } from '@/lib/counter-views';
 import { fetchJson } from '@/lib/fetch-json';
 import type { PriceListView } from '@/lib/counter-views';
+import type { AsJson } from '@/lib/as-json';
 import type { CounterSummaryJson as CounterSummary } from '@/lib/counter-views';
 
 /** The ticket's money: lines, total, payments, balance, link. */
@@ -21,7 +22,7 @@ export function useNotices(ticketId: string) {
 
 /** The shop's price list (for "add from the list"). */
 export function usePriceList() {
-  return useQuery({ queryKey: ['prices'], queryFn: () => fetchJson<PriceListView>('/api/prices') });
+  return useQuery({ queryKey: ['prices'], queryFn: () => fetchJson<AsJson<PriceListView>>('/api/prices') });
 }
 
 /** A mutation on the ticket that refreshes the money, the notices and the ticket page's view after it. */

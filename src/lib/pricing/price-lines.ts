@@ -82,9 +82,12 @@ export function sumMinor(items: readonly { amountMinor: number }[]): number {
  * was priced from the garments or added from the list by hand. */
 export const RUSH_RULE = 'Rush is one surcharge per ticket with work on it, however its lines were added.';
 
-/** True when a line is work that rush may be charged on (see `RUSH_RULE`). */
-export function isRushableWork(line: { key: string | null; source: string; voidedAt?: Date | string | null }): boolean {
-  return !line.voidedAt && line.key !== null && line.key !== 'rush' && (line.source === 'auto' || line.source === 'list');
+/** True when a line is work that rush may be charged on (see `RUSH_RULE`): a worked-out line or
+ * one from the list, or a kind of work the lead said rush applies to (as it stood when added). */
+export function isRushableWork(line: { key: string | null; kindId?: string | null; rushApplies?: boolean | null; source: string; voidedAt?: Date | string | null }): boolean {
+  if (line.voidedAt || (line.source !== 'auto' && line.source !== 'list')) return false;
+  if (line.kindId) return line.rushApplies === true;
+  return line.key !== null && line.key !== 'rush';
 }
 
 /** The share of the ticket's total a reduction may take off without the lead: 50 %. */

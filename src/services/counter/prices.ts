@@ -16,6 +16,7 @@ import { audit } from '../audit';
 import { ServiceError } from '../errors';
 import { isUuid, shopTicket } from '../ticket-core';
 import { withLinksClosed } from './payment-links';
+import { kindsOf, liveKinds } from './price-kinds';
 import type { CounterView, PriceListView } from '@/lib/counter-views';
 
 // The shapes live in lib (islands read them too); exported here for the services' importers.
@@ -33,9 +34,9 @@ export async function counterSettingsOf(shopId: string, q: Db = db): Promise<Cou
   };
 }
 
-/** The shop's price list: every key, with the lead's label and amount (0 until set). */
-export async function priceListOf(shopId: string): Promise<PriceList> {
-  const rows = await db.select().from(priceItems).where(eq(priceItems.shopId, shopId));
+/** The shop's price list: every key, with the lead's label and amount (0 until set); read through `q` inside a transaction. */
+export async function priceListOf(shopId: string, q: Db = db): Promise<PriceList> {
+  const rows = await q.select().from(priceItems).where(eq(priceItems.shopId, shopId));
   const byKey = new Map(rows.map((r) => [r.key, r]));
   return Object.fromEntries(
     PRICE_KEYS.map((key) => [key, { label: byKey.get(key)?.label ?? DEFAULT_PRICE_LABELS[key], amountMinor: byKey.get(key)?.amountMinor ?? 0 }]),
@@ -46,7 +47,7 @@ export async function priceListOf(shopId: string): Promise<PriceList> {
 export async function getPriceList(actor: Actor): Promise<PriceListView> {
   const { autoReadySince: _, ...settings } = await counterSettingsOf(actor.shopId);
   const list = await priceListOf(actor.shopId);
-  return { ...settings, items: PRICE_KEYS.map((key) => ({ key, ...list[key] })) };
+  return { ...settings, items: PRICE_KEYS.map((key) => ({ key, ...list[key] })), kinds: await kindsOf(actor.shopId) };
 }
 
 /** Saves the lead's price list and settings; turning the automatic notice on starts it from now. */
@@ -54,6 +55,7 @@ export async function savePriceList(actor: Actor, input: z.infer<typeof priceLis
   const keys = new Set(input.items.map((i) => i.key));
   if (keys.size !== PRICE_KEYS.length) throw new ServiceError(422, 'Send each line of the price list once.');
   const before = await counterSettingsOf(actor.shopId);
+  const listBefore = await priceListOf(actor.shopId);
   const since = input.autoReadyNotice ? (before.autoReadyNotice && before.autoReadySince ? before.autoReadySince : new Date()) : null;
   await db.transaction(async (tx) => {
     const settings = { currency: input.currency, hours: input.hours, location: input.location, autoReadyNotice: input.autoReadyNotice, autoReadySince: since, updatedAt: new Date() };
@@ -65,6 +67,15 @@ export async function savePriceList(actor: Actor, input: z.infer<typeof priceLis
         .onConflictDoUpdate({ target: [priceItems.shopId, priceItems.key], set: { label: item.label, amountMinor: item.amountMinor, updatedAt: new Date() } });
     }
     await audit(tx, actor.shopId, actor.userId, 'prices.saved', actor.shopId, { currency: input.currency });
+    // The price list's history: each worked-out line whose name or amount changed (old → new).
+    for (const item of input.items) {
+      const was = listBefore[item.key];
+      const changes = [
+        ...(was.label !== item.label ? [{ field: 'name', from: was.label, to: item.label }] : []),
+        ...(was.amountMinor !== item.amountMinor ? [{ field: 'amountMinor', from: was.amountMinor, to: item.amountMinor }] : []),
+      ];
+      if (changes.length) await audit(tx, actor.shopId, actor.userId, 'price-item.changed', actor.shopId, { key: item.key, line: item.label, changes });
+    }
   });
   return getPriceList(actor);
 }
@@ -131,13 +142,19 @@ export async function priceFromGarments(actor: Actor, ticketId: string, input: z
 /** Adds a line from the list, an adjustment with its reason, or "no charge" with its reason. A
  * reduction below zero is refused; one over `LEAD_REDUCTION_SHARE` of the total needs the lead. */
 export async function addLine(actor: Actor, ticketId: string, input: z.infer<typeof lineInput>): Promise<PriceLine> {
+  // Checked on the ticket first: another shop's ticket is 404 whatever the body names.
+  await shopTicket(actor, ticketId);
   const entry = input.source === 'list' ? (await priceListOf(actor.shopId))[input.key] : null;
+  // A kind of work is copied onto the line (name, amount, rush): later changes to the list leave it as it was.
+  const kind = input.source === 'kind' ? (await liveKinds(db, actor.shopId, [input.kindId])).get(input.kindId)! : null;
   const values =
     input.source === 'list'
       ? { key: input.key, label: entry!.label, amountMinor: entry!.amountMinor, reason: null }
-      : input.source === 'adjust'
+      : kind
+        ? { key: null, kindId: kind.id, rushApplies: kind.rushApplies, label: kind.name, amountMinor: kind.amountMinor, reason: null }
+        : input.source === 'adjust'
         ? { key: null, label: input.label, amountMinor: input.amountMinor, reason: input.reason }
-        : { key: null, label: 'No charge', amountMinor: 0, reason: input.reason };
+          : { key: null, label: 'No charge', amountMinor: 0, reason: input.source === 'no-charge' ? input.reason : '' };
   const check = async (tx: Db, ticket: Ticket) => {
     await refuseWhenSettled(tx, ticket);
     const lines = live(await linesOf(actor.shopId, ticketId, tx));
@@ -156,7 +173,9 @@ export async function addLine(actor: Actor, ticketId: string, input: z.infer<typ
   };
   const row = await withLinksClosed(actor.shopId, ticketId, check, async (tx, ticket) => {
     await check(tx, ticket);
-    const [added] = await tx.insert(priceLines).values({ ...values, source: input.source, shopId: actor.shopId, ticketId, createdById: actor.userId }).returning();
+    // A kind's line is a line from the list: the same rush rule and the same history.
+    const source = input.source === 'kind' ? ('list' as const) : input.source;
+    const [added] = await tx.insert(priceLines).values({ ...values, source, shopId: actor.shopId, ticketId, createdById: actor.userId }).returning();
     const action = input.source === 'adjust' ? 'prices.adjusted' : input.source === 'no-charge' ? 'prices.no-charge' : 'prices.line-added';
     await audit(tx, actor.shopId, actor.userId, action, ticketId, { line: added!.id, amountMinor: added!.amountMinor, reason: added!.reason });
     return added!;

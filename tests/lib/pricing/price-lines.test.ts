@@ -2,7 +2,7 @@
 // Amounts are an invented shop's list; the taper cases go through the real engine (checkTaper).
 import { describe, expect, it } from 'vitest';
 import { checkTaper } from '@/lib/allowance';
-import { balanceOf, finishKey, priceTicket, reductionNeedsLead, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
+import { balanceOf, finishKey, isRushableWork, priceTicket, reductionNeedsLead, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
 import { needsLetOut } from '@/lib/pricing/taper-let-out';
 
 // An invented list (minor units): not anyone's real prices.
@@ -48,6 +48,24 @@ describe('priceTicket', () => {
     const { lines, unpriced } = priceTicket([garment({ garmentId: 'x', finish: null })], LIST, { rush: true });
     expect(lines).toEqual([]);
     expect(unpriced).toEqual(['x']);
+  });
+});
+
+describe('isRushableWork (RUSH_RULE) with the lead’s kinds of work', () => {
+  it('counts a kind’s line only when rush applied to the kind, and never a voided or adjusted line', () => {
+    const kindLine = { key: null, kindId: 'k1', source: 'list' };
+    expect(isRushableWork({ ...kindLine, rushApplies: true })).toBe(true);
+    expect(isRushableWork({ ...kindLine, rushApplies: false })).toBe(false);
+    expect(isRushableWork({ ...kindLine, rushApplies: true, voidedAt: '2026-12-03T10:00:00Z' })).toBe(false);
+    expect(isRushableWork({ key: 'plain-hem', source: 'list' })).toBe(true);
+    expect(isRushableWork({ key: 'rush', source: 'auto' })).toBe(false);
+    expect(isRushableWork({ key: null, source: 'adjust' })).toBe(false);
+  });
+
+  it('makes a ticket of kinds alone a rush ticket through priceTicket’s otherWork, once', () => {
+    const { lines } = priceTicket([], LIST, { rush: true, otherWork: isRushableWork({ key: null, kindId: 'k1', rushApplies: true, source: 'list' }) });
+    expect(lines).toEqual([{ garmentId: null, key: 'rush', label: 'Rush', amountMinor: 1000 }]);
+    expect(priceTicket([], LIST, { rush: true, otherWork: false }).lines).toEqual([]);
   });
 });
 
