@@ -1,7 +1,7 @@
 import { AllowanceError } from './allowance-error';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
 import { cuffDepthRule, exactDefaults } from './defaults';
-import { Exact, gcd, ZERO } from './exact';
+import { Exact, lcm, ZERO } from './exact';
 import { type LenMaker, lenMaker, ratioLenMaker } from './len';
 import { letDownShapeError, letDownWidth, type LetDownWidths } from './let-down-width';
 import { InputReader, type LengthRule } from './read-input';
@@ -173,12 +173,12 @@ export function quickTaper(v: TaperValues): TaperPlan | null {
   let D = lcm(lcm(lcm(cuffDepth.d, hemSection.d), lcm(clothThickness.d, widthAtEdge.d)), lcm(widthAbove.d, tolerance.d));
   if (seamAllowance !== null) D = lcm(D, seamAllowance.d);
   if (D > HALF_SAFE) return null;
-  const E = over(widthAtEdge, D);
-  const dd = over(cuffDepth, D);
-  const cuffTop = dd + over(clothThickness, D);
-  const below = [0, cuffTop, 2 * cuffTop, 2 * cuffTop + over(hemSection, D)] as const;
+  const E = widthAtEdge.over(D);
+  const dd = cuffDepth.over(D);
+  const cuffTop = dd + clothThickness.over(D);
+  const below = [0, cuffTop, 2 * cuffTop, 2 * cuffTop + hemSection.over(D)] as const;
   // slope = (widthAbove − widthAtEdge) / heightAbove = sN / (sD · D); every line's value is over CD = sD · D.
-  const Aw = over(widthAbove, D);
+  const Aw = widthAbove.over(D);
   const sN = (Aw - E) * heightAbove.d;
   const sD = D * heightAbove.n;
   const CD = sD * D;
@@ -186,8 +186,8 @@ export function quickTaper(v: TaperValues): TaperPlan | null {
   const cut = below[3];
   const rise = sN * dd;
   const deepest = sN * (dd + cut);
-  const tol = over(tolerance, D) * sD;
-  const seam = seamAllowance === null ? 0 : 2 * over(seamAllowance, D) * sD;
+  const tol = tolerance.over(D) * sD;
+  const seam = seamAllowance === null ? 0 : 2 * seamAllowance.over(D) * sD;
   const limit = Math.max(Math.abs(E), Math.abs(Aw), Math.abs(sN), cut, 2 * CD, Math.abs(edge), Math.abs(sN * cut), Math.abs(deepest), tol, seam);
   if (!(limit <= HALF_SAFE)) return null;
   // The shape checks of shapeErrorOf: a leg at the cuff top and at the cut (exactTaper says why not).
@@ -232,14 +232,7 @@ export function quickTaper(v: TaperValues): TaperPlan | null {
   return { kind: 'taper', unit: v.unit, precision: v.precision, targetWidth: ratio(target, CD), lines, withinTolerance, feasible, warnings };
 }
 
-function lcm(a: number, b: number): number {
-  return a === b ? a : (a / gcd(a, b)) * b;
-}
 
-// x as a numerator over D mm (D a multiple of x's denominator).
-function over(x: Exact, D: number): number {
-  return x.n * (D / x.d);
-}
 
 /** checkTaper on Exact values: any input, a let-down leg, and every refusal of the shape. */
 export function exactTaper(v: TaperValues): TaperPlan {

@@ -2,7 +2,7 @@ import { creaseLanding, quickCreaseLanding } from './crease-landing';
 import { cuffAlternatives } from './cuff-alternatives';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
 import { cuffDepthRule, type ExactDefaults, exactDefaults } from './defaults';
-import { type Exact, gcd, ZERO } from './exact';
+import { type Exact, lcm, ZERO } from './exact';
 import { type LenMaker, lenMaker, ratioLenMaker } from './len';
 import { InputReader, type LengthRule } from './read-input';
 import type { CuffInput, CuffLine, CuffPlan, Len, PlanWarning, Precision, Unit } from './types';
@@ -123,14 +123,14 @@ export function planCuff(input: CuffInput): CuffPlan {
 // 5,080 mm, so its numerator over D (and a few summed) stays far under 2^53.
 const QUICK_DENOMINATOR = 2 ** 30;
 
-function lcm(a: number, b: number): number {
-  return a === b ? a : (a / gcd(a, b)) * b;
+// The denominators quickCuff meets among a unit's defaults (usual depths, on-fold and near-cuff-top), made once.
+function defaultsDenominator(unit: Unit): number {
+  const e = exactDefaults(unit);
+  return lcm(lcm(e.usualCuffDepth.min.d, e.usualCuffDepth.max.d), lcm(e.onFoldWithin.d, e.nearCuffTop.d));
 }
+const DEFAULTS_DENOMINATOR: Record<Unit, number> = { in: defaultsDenominator('in'), cm: defaultsDenominator('cm'), mm: defaultsDenominator('mm') };
 
-// x as a numerator over D mm (D a multiple of x's denominator).
-function over(x: Exact, D: number): number {
-  return x.n * (D / x.d);
-}
+
 
 /**
  * planCuff's answer worked out on plain integers over one common denominator D (the lines, the cloth
@@ -144,18 +144,18 @@ export function quickCuff(v: CuffValues): CuffPlan | null {
   if (cuffDepth.big || hemSection.big || turnUnder.big || clothThickness.big) return null;
   if ((available !== null && available.big) || (oldCrease !== null && oldCrease.big) || (slope !== null && slope.big)) return null;
   let D = lcm(lcm(cuffDepth.d, hemSection.d), lcm(turnUnder.d, clothThickness.d));
-  D = lcm(D, lcm(lcm(usual.min.d, usual.max.d), lcm(defaults.onFoldWithin.d, defaults.nearCuffTop.d)));
+  D = lcm(D, DEFAULTS_DENOMINATOR[v.unit]);
   if (available !== null) D = lcm(D, available.d);
   if (oldCrease !== null) D = lcm(D, oldCrease.d);
   if (slope !== null) D = lcm(D, slope.d);
   if (!(D <= QUICK_DENOMINATOR)) return null;
   const ratio = ratioLenMaker(v.unit, v.precision);
-  const d = over(cuffDepth, D);
-  const m = over(hemSection, D);
-  const u = over(turnUnder, D);
-  const cuffTop = d + over(clothThickness, D);
+  const d = cuffDepth.over(D);
+  const m = hemSection.over(D);
+  const u = turnUnder.over(D);
+  const cuffTop = d + clothThickness.over(D);
   const below = [0, cuffTop, 2 * cuffTop, 2 * cuffTop + m] as const;
-  const A = available === null ? null : over(available, D);
+  const A = available === null ? null : available.over(D);
   const lines: CuffLine[] = [];
   for (let k = 0; k < 4; k++) {
     const b = below[k]!;
@@ -166,13 +166,13 @@ export function quickCuff(v: CuffValues): CuffPlan | null {
   const depth = clothThickness.isZero() ? { mm: top.mm, text: top.text } : ratio(d, D);
   const section = hemSection === cuffDepth ? { mm: depth.mm, text: depth.text } : ratio(m, D);
   const shown = { depth, section, turnUnder: ratio(u, D) };
-  const unusual = d < over(usual.min, D) || d > over(usual.max, D);
-  const s = slope === null ? 0 : over(slope, D);
+  const unusual = d < usual.min.over(D) || d > usual.max.over(D);
+  const s = slope === null ? 0 : slope.over(D);
   const warnings = cuffWarnings(
     {
       sectionTooSmall: m <= u,
       stitchingShows: m - u > d,
-      unusual: unusual ? [ratio(over(usual.min, D), D).text, ratio(over(usual.max, D), D).text] : null,
+      unusual: unusual ? [ratio(usual.min.over(D), D).text, ratio(usual.max.over(D), D).text] : null,
       slope: s === 0 ? null : ratio(s < 0 ? -s : s, D).text,
     },
     shown,
@@ -190,13 +190,13 @@ export function quickCuff(v: CuffValues): CuffPlan | null {
     }
   }
   if (oldCrease !== null) {
-    const landing = quickCreaseLanding(over(oldCrease, D), {
+    const landing = quickCreaseLanding(oldCrease.over(D), {
       d,
       cuffTop,
       innerFold: below[2],
       cut: below[3],
-      onFoldWithin: over(defaults.onFoldWithin, D),
-      nearCuffTop: over(defaults.nearCuffTop, D),
+      onFoldWithin: defaults.onFoldWithin.over(D),
+      nearCuffTop: defaults.nearCuffTop.over(D),
       D,
       ratio,
     });
