@@ -232,8 +232,6 @@ export function quickTaper(v: TaperValues): TaperPlan | null {
   return { kind: 'taper', unit: v.unit, precision: v.precision, targetWidth: ratio(target, CD), lines, withinTolerance, feasible, warnings };
 }
 
-
-
 /** checkTaper on Exact values: any input, a let-down leg, and every refusal of the shape. */
 export function exactTaper(v: TaperValues): TaperPlan {
   const shape = taperShape(v);

@@ -130,8 +130,6 @@ function defaultsDenominator(unit: Unit): number {
 }
 const DEFAULTS_DENOMINATOR: Record<Unit, number> = { in: defaultsDenominator('in'), cm: defaultsDenominator('cm'), mm: defaultsDenominator('mm') };
 
-
-
 /**
  * planCuff's answer worked out on plain integers over one common denominator D (the lines, the cloth
  * check, the warnings and the old crease; no Exact built or reduced per step), or null when a value
