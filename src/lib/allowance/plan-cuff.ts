@@ -1,5 +1,5 @@
 import { creaseLanding, quickCreaseLanding } from './crease-landing';
-import { cuffAlternatives } from './cuff-alternatives';
+import { cuffAlternatives, quickAlternatives } from './cuff-alternatives';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
 import { cuffDepthRule, type ExactDefaults, exactDefaults } from './defaults';
 import { type Exact, lcm, ZERO } from './exact';
@@ -123,10 +123,12 @@ export function planCuff(input: CuffInput): CuffPlan {
 // 5,080 mm, so its numerator over D (and a few summed) stays far under 2^53.
 const QUICK_DENOMINATOR = 2 ** 30;
 
-// The denominators quickCuff meets among a unit's defaults (usual depths, on-fold and near-cuff-top), made once.
+// The denominators quickCuff meets among a unit's defaults (usual depths, on-fold and near-cuff-top,
+// and for short cloth the safe stitch, facing seam and plain hem), made once.
 function defaultsDenominator(unit: Unit): number {
   const e = exactDefaults(unit);
-  return lcm(lcm(e.usualCuffDepth.min.d, e.usualCuffDepth.max.d), lcm(e.onFoldWithin.d, e.nearCuffTop.d));
+  const quick = lcm(lcm(e.usualCuffDepth.min.d, e.usualCuffDepth.max.d), lcm(e.onFoldWithin.d, e.nearCuffTop.d));
+  return lcm(quick, lcm(lcm(e.safeStitch.d, e.facingSeam.d), e.hemAllowance.d));
 }
 const DEFAULTS_DENOMINATOR: Record<Unit, number> = { in: defaultsDenominator('in'), cm: defaultsDenominator('cm'), mm: defaultsDenominator('mm') };
 
@@ -184,7 +186,23 @@ export function quickCuff(v: CuffValues): CuffPlan | null {
       plan.spare = { mm: above.mm, text: above.text };
     } else {
       plan.shortBy = ratio(-rest, D);
-      short(plan, v, cuffLinePositions(cuffDepth, hemSection, clothThickness).innerFold, defaults);
+      plan.alternatives = quickAlternatives({
+        available: A,
+        cuffDepth: d,
+        hemSection: m,
+        turnUnder: u,
+        innerFold: below[2],
+        clothThickness: cuffTop - d,
+        safeStitch: defaults.safeStitch.over(D),
+        facingSeam: defaults.facingSeam.over(D),
+        hemAllowance: defaults.hemAllowance.over(D),
+        D,
+        unit: v.unit,
+        precision: v.precision,
+        defaults,
+        ratio,
+      });
+      notEnough(plan);
     }
   }
   if (oldCrease !== null) {
@@ -223,23 +241,10 @@ function cuffPlan(v: CuffValues, shown: Shown, lines: CuffLine[], required: Len,
   };
 }
 
-// A short plan's alternatives and its not-enough-cloth warning, first among the warnings.
-function short(plan: CuffPlan, v: CuffValues, innerFold: Exact, defaults: ExactDefaults): void {
-  const len = lenMaker(v.unit, v.precision);
-  const alternatives = cuffAlternatives({
-    available: v.available!,
-    cuffDepth: v.cuffDepth,
-    hemSection: v.hemSection,
-    turnUnder: v.turnUnder,
-    innerFold,
-    clothThickness: v.clothThickness,
-    unit: v.unit,
-    precision: v.precision,
-    defaults,
-    len,
-  });
-  plan.alternatives = alternatives;
-  plan.warnings.unshift({ code: 'not-enough-cloth', message: shortMessage(plan.required, plan.lines[0]!.aboveRawEdge!, plan.shortBy!, plan.cuffDepth, alternatives) });
+// A short plan's not-enough-cloth warning, first among the warnings.
+function notEnough(plan: CuffPlan): void {
+  const message = shortMessage(plan.required, plan.lines[0]!.aboveRawEdge!, plan.shortBy!, plan.cuffDepth, plan.alternatives!);
+  plan.warnings.unshift({ code: 'not-enough-cloth', message });
 }
 
 /** planCuff on Exact values: any input, however big or finely divided. */
@@ -274,7 +279,19 @@ export function exactCuff(v: CuffValues): CuffPlan {
       plan.spare = { mm: above.mm, text: above.text };
     } else {
       plan.shortBy = len(rest, true);
-      short(plan, v, positions.innerFold, defaults);
+      plan.alternatives = cuffAlternatives({
+        available: A,
+        cuffDepth: v.cuffDepth,
+        hemSection: v.hemSection,
+        turnUnder: v.turnUnder,
+        innerFold: positions.innerFold,
+        clothThickness: v.clothThickness,
+        unit: v.unit,
+        precision: v.precision,
+        defaults,
+        len,
+      });
+      notEnough(plan);
     }
   }
   if (v.oldCrease !== null) {
