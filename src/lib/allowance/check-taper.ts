@@ -1,8 +1,8 @@
 import { AllowanceError } from './allowance-error';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
 import { cuffDepthRule, exactDefaults } from './defaults';
-import { Exact, ZERO } from './exact';
-import { lenMaker } from './len';
+import { Exact, lcm, ZERO } from './exact';
+import { type LenMaker, lenMaker, ratioLenMaker } from './len';
 import { letDownShapeError, letDownWidth, type LetDownWidths } from './let-down-width';
 import { InputReader, type LengthRule } from './read-input';
 import type { PlanWarning, Precision, TaperInput, TaperLine, TaperPlan, Unit } from './types';
@@ -114,6 +114,126 @@ export function taperShapeError(v: TaperValues): AllowanceError | null {
 /** Check a tapered leg under a cuff: the work at each chalk line to keep the cuff-top width straight down. */
 export function checkTaper(input: TaperInput): TaperPlan {
   const v = readTaperInput(input, new InputReader(input, false));
+  return quickTaper(v) ?? exactTaper(v);
+}
+
+/** What the warnings need: the worst change (as shown, halved per side), and the most let out per side. */
+interface TaperVerdict {
+  withinTolerance: boolean;
+  /** the worst change lets out (the leg narrows below the cuff top) */
+  wider: boolean;
+  /** |worst change| as shown, and half of it ('' within tolerance: not shown) */
+  by: string;
+  side: string;
+  /** the cut's depth below the mark as shown ('' within tolerance) */
+  cutText: string;
+  feasible: boolean | null;
+  /** the most let out on each side of a seam, as shown ('' unless not feasible) */
+  most: string;
+}
+
+function taperWarnings(v: TaperValues, len: LenMaker, t: TaperVerdict): PlanWarning[] {
+  const warnings: PlanWarning[] = [];
+  if (!t.withinTolerance) {
+    // "From the cuff top" is ambiguous on the chalked leg: line 2, "Cuff top", is one depth BELOW the
+    // mark, but the width to keep is one depth ABOVE the finished edge. Name the distances instead.
+    const from = len(v.cuffDepth).text;
+    const span = `from ${from} above the finished edge (the pin mark, line 1) down to the cutting line, ${t.cutText} below it`;
+    warnings.push({
+      code: 'taper-beyond-tolerance',
+      message: t.wider
+        ? `The leg narrows below where the cuff top will sit (${from} above the finished edge): at worst ${t.by} narrower (flat) than there. Let out the inseam and outseam ${span}, up to ${t.side} on each side of each seam, so the cuff lies flat.`
+        : `The leg widens below where the cuff top will sit (${from} above the finished edge): at worst ${t.by} wider (flat) than there. Take in the inseam and outseam ${span}, up to ${t.side} on each side of each seam, so the cuff lies flat.`,
+    });
+  }
+  if (t.feasible === false) {
+    warnings.push({
+      code: 'let-out-exceeds-seam-allowance',
+      message: `Letting out needs ${t.most} on each side of each seam, but the seam allowance is only ${len(v.seamAllowance!).text}. Choose a shallower cuff or a plain hem.`,
+    });
+  }
+  return warnings;
+}
+
+// Past this a product of two of quickTaper's integers could pass 2^53; a sum of two stays under it.
+const HALF_SAFE = Number.MAX_SAFE_INTEGER / 2;
+
+/**
+ * checkTaper's answer worked out on plain integers over one common denominator (no Exact built per
+ * line, no gcd per step), for the leg followed down (no width measured at the cut). Null when a value
+ * is big or a product could pass 2^53, or when the shape is refused: exactTaper then answers or
+ * throws. Every length, text and verdict is the one exactTaper gives (a Len does not depend on
+ * n/d being reduced).
+ */
+export function quickTaper(v: TaperValues): TaperPlan | null {
+  const { cuffDepth, hemSection, clothThickness, widthAtEdge, widthAbove, heightAbove, tolerance, seamAllowance } = v;
+  if (v.widthAtCut !== null || cuffDepth.big || hemSection.big || clothThickness.big || widthAtEdge.big || widthAbove.big || heightAbove.big || tolerance.big) return null;
+  if (seamAllowance !== null && seamAllowance.big) return null;
+  // The lengths as numerators over D mm (D: the least common denominator of their denominators).
+  let D = lcm(lcm(lcm(cuffDepth.d, hemSection.d), lcm(clothThickness.d, widthAtEdge.d)), lcm(widthAbove.d, tolerance.d));
+  if (seamAllowance !== null) D = lcm(D, seamAllowance.d);
+  if (D > HALF_SAFE) return null;
+  const E = widthAtEdge.over(D);
+  const dd = cuffDepth.over(D);
+  const cuffTop = dd + clothThickness.over(D);
+  const below = [0, cuffTop, 2 * cuffTop, 2 * cuffTop + hemSection.over(D)] as const;
+  // slope = (widthAbove − widthAtEdge) / heightAbove = sN / (sD · D); every line's value is over CD = sD · D.
+  const Aw = widthAbove.over(D);
+  const sN = (Aw - E) * heightAbove.d;
+  const sD = D * heightAbove.n;
+  const CD = sD * D;
+  const edge = E * sD;
+  const cut = below[3];
+  const rise = sN * dd;
+  const deepest = sN * (dd + cut);
+  const tol = tolerance.over(D) * sD;
+  const seam = seamAllowance === null ? 0 : 2 * seamAllowance.over(D) * sD;
+  const limit = Math.max(Math.abs(E), Math.abs(Aw), Math.abs(sN), cut, 2 * CD, Math.abs(edge), Math.abs(sN * cut), Math.abs(deepest), tol, seam);
+  if (!(limit <= HALF_SAFE)) return null;
+  // The shape checks of shapeErrorOf: a leg at the cuff top and at the cut (exactTaper says why not).
+  if (edge + rise <= 0 || edge - sN * cut <= 0 || E <= 0) return null;
+  const len = lenMaker(v.unit, v.precision);
+  const ratio = ratioLenMaker(v.unit, v.precision);
+  const target = edge + rise;
+  let worst = 0;
+  let mostPerSide = 0;
+  let withinTolerance = true;
+  const lines: TaperLine[] = [];
+  for (let k = 0; k < 4; k++) {
+    const b = below[k]!;
+    // The change that brings the line back to the target: slope × (cuff depth + below), over CD.
+    const change = k === 0 ? rise : sN * (dd + b);
+    const size = change < 0 ? -change : change;
+    if (size > (worst < 0 ? -worst : worst)) worst = change;
+    if (size > tol) withinTolerance = false;
+    if (k === 0 || change > mostPerSide) mostPerSide = change;
+    const changeLen = ratio(change, CD);
+    lines.push({
+      n: (k + 1) as TaperLine['n'],
+      name: CUFF_LINE_NAMES[k]!,
+      belowMark: ratio(b, D),
+      width: ratio(target - change, CD),
+      change: changeLen,
+      perSeam: { mm: changeLen.mm, text: changeLen.text },
+      perSide: ratio(change, 2 * CD),
+    });
+  }
+  const worstSize = worst < 0 ? -worst : worst;
+  const feasible = seamAllowance === null ? null : withinTolerance || mostPerSide <= seam;
+  const warnings = taperWarnings(v, len, {
+    withinTolerance,
+    wider: worst > 0,
+    by: withinTolerance ? '' : ratio(worstSize, CD).text,
+    side: withinTolerance ? '' : ratio(worstSize, 2 * CD).text,
+    cutText: withinTolerance ? '' : ratio(cut, D).text,
+    feasible,
+    most: feasible === false ? ratio(mostPerSide, 2 * CD).text : '',
+  });
+  return { kind: 'taper', unit: v.unit, precision: v.precision, targetWidth: ratio(target, CD), lines, withinTolerance, feasible, warnings };
+}
+
+/** checkTaper on Exact values: any input, a let-down leg, and every refusal of the shape. */
+export function exactTaper(v: TaperValues): TaperPlan {
   const shape = taperShape(v);
   const shapeError = shapeErrorOf(v, shape);
   if (shapeError) throw shapeError;
@@ -151,30 +271,16 @@ export function checkTaper(input: TaperInput): TaperPlan {
     if (letDown && k === 3) line.measured = true;
     lines.push(line);
   }
-  const warnings: PlanWarning[] = [];
   const most = mostPerSide ?? ZERO;
-  if (!withinTolerance) {
-    const wider = worst.sign() > 0;
-    const by = len(worstSize).text;
-    const side = len(worstSize.half()).text;
-    // "From the cuff top" is ambiguous on the chalked leg: line 2, "Cuff top", is one depth BELOW the
-    // mark, but the width to keep is one depth ABOVE the finished edge. Name the distances instead.
-    const from = len(v.cuffDepth).text;
-    const to = len(positions[3]!).text;
-    const span = `from ${from} above the finished edge (the pin mark, line 1) down to the cutting line, ${to} below it`;
-    warnings.push({
-      code: 'taper-beyond-tolerance',
-      message: wider
-        ? `The leg narrows below where the cuff top will sit (${from} above the finished edge): at worst ${by} narrower (flat) than there. Let out the inseam and outseam ${span}, up to ${side} on each side of each seam, so the cuff lies flat.`
-        : `The leg widens below where the cuff top will sit (${from} above the finished edge): at worst ${by} wider (flat) than there. Take in the inseam and outseam ${span}, up to ${side} on each side of each seam, so the cuff lies flat.`,
-    });
-  }
   const feasible = v.seamAllowance === null ? null : withinTolerance || most.compare(v.seamAllowance) <= 0;
-  if (feasible === false) {
-    warnings.push({
-      code: 'let-out-exceeds-seam-allowance',
-      message: `Letting out needs ${len(most).text} on each side of each seam, but the seam allowance is only ${len(v.seamAllowance!).text}. Choose a shallower cuff or a plain hem.`,
-    });
-  }
+  const warnings = taperWarnings(v, len, {
+    withinTolerance,
+    wider: worst.sign() > 0,
+    by: withinTolerance ? '' : len(worstSize).text,
+    side: withinTolerance ? '' : len(worstSize.half()).text,
+    cutText: withinTolerance ? '' : len(positions[3]!).text,
+    feasible,
+    most: feasible === false ? len(most).text : '',
+  });
   return { kind: 'taper', unit: v.unit, precision: v.precision, targetWidth: len(target), lines, withinTolerance, feasible, warnings };
 }

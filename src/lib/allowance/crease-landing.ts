@@ -1,6 +1,6 @@
 import type { CuffLinePositions } from './cuff-lines';
 import { type Exact, ZERO } from './exact';
-import type { LenMaker } from './len';
+import type { LenMaker, RatioLenMaker } from './len';
 import type { CreaseLanding, CreasePlace, Len } from './types';
 
 /** What crease landing needs of a plan: exact lengths, with their nearest numbers for quick comparisons. */
@@ -30,6 +30,20 @@ function onFold(crease: Exact, c: number, at: Exact, atMm: number, ctx: CreaseCo
   return Math.abs(c - atMm) <= ctx.onFoldWithinMm + 1e-6 && crease.sub(at).abs().compare(ctx.onFoldWithin) <= 0;
 }
 
+// The verdicts' words, shared by the Exact and the integer landing so both say the same.
+const say = {
+  onFold: (fold: string) => `The old crease falls on the new ${fold}: the new fold takes it, so it will not show.`,
+  atCuffTop: (at: string, near: string) =>
+    `The old hem crease lies on the leg ${at} above the finished edge, within ${near} of the cuff top: it may show at the cuff's edge. Press or steam it out before finishing. ${TELL}`,
+  legVisible: (at: string, aboveTop: string) =>
+    `The old hem crease will show on the leg, ${at} above the finished edge, ${aboveTop} above the cuff top. Press or steam it out before finishing, or choose a cuff depth that covers it. ${TELL}`,
+  behindLeg: (at: string) => `The old crease lies on the leg behind the cuff, ${at} above the finished edge: the cuff hides it.`,
+  underFace: (h: string) => `The old crease lies under the cuff face, ${h} above the finished edge: hidden.`,
+  cuffFace: (h: string) => `The old crease will show on the face of the cuff, ${h} above the finished edge. Press it out, or change the cuff depth so it falls on a fold. ${TELL}`,
+  inside: (h: string) => `The old crease ends up inside the leg, ${h} above the finished edge: hidden.`,
+  cutAway: (below: string) => `The old crease lies ${below} below the cutting line and is cut away.`,
+};
+
 /** Follow an old crease (mm below the mark, negative above) through the cuff's folds. */
 export function creaseLanding(crease: Exact, ctx: CreaseContext): CreaseLanding {
   const { cuffDepth: d, lines, linesMm, len } = ctx;
@@ -41,46 +55,72 @@ export function creaseLanding(crease: Exact, ctx: CreaseContext): CreaseLanding 
       : onFold(crease, c, lines.innerFold, linesMm[2]!, ctx)
         ? 'inner fold'
         : null;
-  if (fold !== null) {
-    return land('on-fold', len(fold === 'cuff top' ? d : ZERO), `The old crease falls on the new ${fold}: the new fold takes it, so it will not show.`);
-  }
+  if (fold !== null) return land('on-fold', len(fold === 'cuff top' ? d : ZERO), say.onFold(fold));
   if (c < 0) {
     // On the leg the height is −crease. Near the cuff top's height the verdict is "may show", with
     // the tolerance stated, so 1/16 in either way cannot flip "hidden" to "will show" unannounced.
     const at = len(crease, true);
-    if (crease.add(d).abs().compare(ctx.nearCuffTop) <= 0) {
-      return land(
-        'at-cuff-top',
-        at,
-        `The old hem crease lies on the leg ${at.text} above the finished edge, within ${len(ctx.nearCuffTop).text} of the cuff top: it may show at the cuff's edge. Press or steam it out before finishing. ${TELL}`,
-      );
-    }
-    if (crease.compare(d.neg()) <= 0) {
-      return land(
-        'leg-visible',
-        at,
-        `The old hem crease will show on the leg, ${at.text} above the finished edge, ${len(crease.add(d), true).text} above the cuff top. Press or steam it out before finishing, or choose a cuff depth that covers it. ${TELL}`,
-      );
-    }
-    return land('behind-cuff', at, `The old crease lies on the leg behind the cuff, ${at.text} above the finished edge: the cuff hides it.`);
+    // crease + d: how far the crease lies below the cuff top's height (negative above it); once.
+    const fromTop = crease.add(d);
+    if (fromTop.abs().compare(ctx.nearCuffTop) <= 0) return land('at-cuff-top', at, say.atCuffTop(at.text, len(ctx.nearCuffTop).text));
+    if (fromTop.sign() <= 0) return land('leg-visible', at, say.legVisible(at.text, len(fromTop, true).text));
+    return land('behind-cuff', at, say.behindLeg(at.text));
   }
   if (crease.compare(lines.cuffTop) <= 0) {
     // With a turn of cloth the first section is longer than the cuff is high; the cuff top caps it.
     const h = len(crease.compare(d) <= 0 ? crease : d);
-    return land('behind-cuff', h, `The old crease lies under the cuff face, ${h.text} above the finished edge: hidden.`);
+    return land('behind-cuff', h, say.underFace(h.text));
   }
   if (crease.compare(lines.innerFold) <= 0) {
     const up = lines.innerFold.sub(crease);
     const h = len(up.compare(d) <= 0 ? up : d);
-    return land(
-      'cuff-face',
-      h,
-      `The old crease will show on the face of the cuff, ${h.text} above the finished edge. Press it out, or change the cuff depth so it falls on a fold. ${TELL}`,
-    );
+    return land('cuff-face', h, say.cuffFace(h.text));
   }
   const h = len(crease.sub(lines.innerFold));
-  if (crease.compare(lines.cut) <= 0) {
-    return land('inside', h, `The old crease ends up inside the leg, ${h.text} above the finished edge: hidden.`);
+  if (crease.compare(lines.cut) <= 0) return land('inside', h, say.inside(h.text));
+  return land('cut-away', h, say.cutAway(len(crease.sub(lines.cut)).text));
+}
+
+/** What creaseLanding needs, as integers over one denominator D mm (see quickCreaseLanding). */
+export interface QuickCreaseContext {
+  /** cuff depth, and the cuff top, inner fold and cut below the mark */
+  d: number;
+  cuffTop: number;
+  innerFold: number;
+  cut: number;
+  onFoldWithin: number;
+  nearCuffTop: number;
+  D: number;
+  ratio: RatioLenMaker;
+}
+
+// |c − at| ≤ within.
+function within(c: number, at: number, w: number): boolean {
+  return (c < at ? at - c : c - at) <= w;
+}
+
+/** creaseLanding on integers over one denominator (each verdict and Len the same): the crease is c/D mm below the mark. */
+export function quickCreaseLanding(c: number, ctx: QuickCreaseContext): CreaseLanding {
+  const { d, cuffTop, innerFold, cut, onFoldWithin: w, D, ratio } = ctx;
+  const fold = within(c, 0, w) ? 'finished edge' : within(c, cuffTop, w) ? 'cuff top' : within(c, innerFold, w) ? 'inner fold' : null;
+  if (fold !== null) return land('on-fold', ratio(fold === 'cuff top' ? d : 0, D), say.onFold(fold));
+  if (c < 0) {
+    const at = ratio(-c, D);
+    const fromTop = c + d;
+    if ((fromTop < 0 ? -fromTop : fromTop) <= ctx.nearCuffTop) return land('at-cuff-top', at, say.atCuffTop(at.text, ratio(ctx.nearCuffTop, D).text));
+    if (fromTop <= 0) return land('leg-visible', at, say.legVisible(at.text, ratio(-fromTop, D).text));
+    return land('behind-cuff', at, say.behindLeg(at.text));
   }
-  return land('cut-away', h, `The old crease lies ${len(crease.sub(lines.cut)).text} below the cutting line and is cut away.`);
+  if (c <= cuffTop) {
+    const h = ratio(c <= d ? c : d, D);
+    return land('behind-cuff', h, say.underFace(h.text));
+  }
+  if (c <= innerFold) {
+    const up = innerFold - c;
+    const h = ratio(up <= d ? up : d, D);
+    return land('cuff-face', h, say.cuffFace(h.text));
+  }
+  const h = ratio(c - innerFold, D);
+  if (c <= cut) return land('inside', h, say.inside(h.text));
+  return land('cut-away', h, say.cutAway(ratio(c - cut, D).text));
 }

@@ -1,7 +1,7 @@
 import type { Exact } from './exact';
 import type { ExactDefaults } from './defaults';
 import { floorExactSteps, stepRatio, stepsToExact } from './format-length';
-import type { LenMaker } from './len';
+import type { LenMaker, RatioLenMaker } from './len';
 import type { CuffAlternatives, Precision, Unit } from './types';
 
 /** What the alternatives need of a short cuff plan. */
@@ -24,7 +24,8 @@ export interface AlternativesContext {
 // Shallowest and deepest cuff in whole display steps, per unit and precision: constants, worked out once.
 const limits: ([number, number] | undefined)[] = [];
 
-function cuffLimitSteps(unit: Unit, precision: Precision, defaults: ExactDefaults): [number, number] {
+/** The shallowest and deepest cuff in whole display steps of a unit and precision (worked out once each). */
+export function cuffLimitSteps(unit: Unit, precision: Precision, defaults: ExactDefaults): [number, number] {
   // Indexed by a small number per unit and precision (inch precisions are 8, 16, 32; mm 1, cm 2).
   const key = unit === 'in' ? precision : unit === 'mm' ? 1 : 2;
   let found = limits[key];
@@ -77,5 +78,55 @@ export function cuffAlternatives(ctx: AlternativesContext): CuffAlternatives {
     deepestCuff: deepest === null ? null : len(deepest),
     plainHem: { required: len(defaults.hemAllowance), fits: available.compare(defaults.hemAllowance) >= 0 },
     facedCuff: { required: len(faced), fits: available.compare(faced) >= 0 },
+  };
+}
+
+/** What quickAlternatives needs: the short plan's lengths as integers over one denominator D mm. */
+export interface QuickAlternativesContext {
+  available: number;
+  cuffDepth: number;
+  hemSection: number;
+  turnUnder: number;
+  innerFold: number;
+  clothThickness: number;
+  /** the unit's safe stitch, facing seam and plain hem allowance over D */
+  safeStitch: number;
+  facingSeam: number;
+  hemAllowance: number;
+  D: number;
+  unit: Unit;
+  precision: Precision;
+  defaults: ExactDefaults;
+  ratio: RatioLenMaker;
+}
+
+// floor(n / d) for safe integers n and d > 0, exactly (the float quotient corrected by the remainder).
+function floorDiv(n: number, d: number): number {
+  let q = Math.floor(n / d);
+  const r = n - q * d;
+  if (r < 0) q -= 1;
+  else if (r >= d) q += 1;
+  return q;
+}
+
+/** cuffAlternatives on integers over one denominator (quickCuff's short plans): the same offers, lengths and texts. */
+export function quickAlternatives(c: QuickAlternativesContext): CuffAlternatives {
+  const { available: A, cuffDepth: d, turnUnder: u, innerFold, D, ratio } = c;
+  const [a, b] = stepRatio(c.unit, c.precision);
+  // One display step is b/a mm = b·D/a over D: a length x over D is x·a/(b·D) steps.
+  const bD = b * D;
+  const [shallowest, deepest] = cuffLimitSteps(c.unit, c.precision, c.defaults);
+  const under = -floorDiv(-d * a, bD) - 1;
+  const cuffSteps = Math.min(floorDiv((A - 2 * c.clothThickness) * a, 3 * bD), deepest, under);
+  // The longest third section: whole steps of the room below the inner fold, no higher than the cuff and its turn-under.
+  const sectionSteps = Math.min(floorDiv((A - innerFold) * a, bD), floorDiv((d + u) * a, bD));
+  // steps·b/a mm against x/D mm: steps·b·D against x·a.
+  const fitsSection = sectionSteps * bD >= (u + c.safeStitch) * a && sectionSteps * bD < c.hemSection * a;
+  const faced = innerFold + c.facingSeam;
+  return {
+    shorterSection: fitsSection ? ratio(sectionSteps * b, a) : null,
+    deepestCuff: cuffSteps < shallowest ? null : ratio(cuffSteps * b, a),
+    plainHem: { required: ratio(c.hemAllowance, D), fits: A >= c.hemAllowance },
+    facedCuff: { required: ratio(faced, D), fits: A >= faced },
   };
 }

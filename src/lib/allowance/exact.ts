@@ -18,6 +18,14 @@ export function gcd(a: number, b: number): number {
   return a;
 }
 
+/** Least common multiple of two positive safe integers (past 2^53 it is only a bound: callers check). */
+export function lcm(a: number, b: number): number {
+  // Most denominators a plan meets divide one another (5, 10, 40, 80): one remainder decides.
+  if (a % b === 0) return a;
+  if (b % a === 0) return b;
+  return (a / gcd(a, b)) * b;
+}
+
 /**
  * A Fraction as a JS number even when its numerator and denominator overflow a double: fraction.js's
  * valueOf divides Number(n) by Number(d), which is ∞/∞ = NaN past 1e308 and would flip a sign check.
@@ -85,6 +93,11 @@ export class Exact {
   /** The value as a fraction.js Fraction (for callers outside the hot path). */
   toFraction(): Fraction {
     return this.big ?? new Fraction(this.n, this.d);
+  }
+
+  /** n·(D/d): this value as a numerator over D, for D a multiple of d (small values only). */
+  over(D: number): number {
+    return this.n * (D / this.d);
   }
 
   /** −1, 0 or 1. */

@@ -1,4 +1,4 @@
-import type { Exact } from './exact';
+import { Exact } from './exact';
 import { formatExactQ, STEPS_TEXT_RANGE, stepRatio, stepsText, stepsTextTable } from './format-length';
 import type { Len, Precision, Unit } from './types';
 
@@ -7,9 +7,46 @@ export { fractionNumber } from './exact';
 /** Makes Len values in one plan's unit and precision; `negate` shows −mm without building it. */
 export type LenMaker = (mm: Exact, negate?: boolean) => Len;
 
+/** Makes Len values from n/d mm for safe integers n and d > 0, in lowest terms or not (same Len either way). */
+export type RatioLenMaker = (n: number, d: number) => Len;
+
 const SAFE = Number.MAX_SAFE_INTEGER;
 // Read once into a local constant: every shown length checks it.
 const RANGE = STEPS_TEXT_RANGE;
+
+// n/d mm as a Len, one step being b/a mm; the kept texts in `table`. Every shown length goes through
+// here, so it is one plain function the makers below call (and the compiler inlines).
+function ratioLen(n: number, d: number, unit: Unit, precision: Precision, a: number, b: number, table: (string | undefined)[]): Len {
+  // `n === 0 ? 0` keeps a −0 (a negative times 0) from showing as mm: -0.
+  const abs = n < 0 ? -n : n === 0 ? 0 : n;
+  // Steps = abs·a / (d·b) rounded, ties up (roundRatio, inline). Neither the steps nor the nearest
+  // number (a correctly rounded quotient of two exact integers) depend on n/d being reduced.
+  const num = abs * a;
+  const den = d * b;
+  if (num <= SAFE && den <= SAFE) {
+    let q = Math.floor(num / den);
+    let r = num - q * den;
+    if (r < 0) {
+      q -= 1;
+      r += den;
+    } else if (r >= den) {
+      q += 1;
+      r -= den;
+    }
+    if (2 * r >= den) q += 1;
+    const steps = q === 0 ? 0 : n < 0 ? -q : q;
+    const text = (steps >= -RANGE && steps <= RANGE ? table[steps + RANGE] : undefined) ?? stepsText(steps, unit, precision);
+    return { mm: n < 0 ? -abs / d : abs / d, text };
+  }
+  const exact = Exact.ratio(n, d);
+  return { mm: exact.valueOf(), text: formatExactQ(exact, unit, precision) };
+}
+
+function makeRatioLen(unit: Unit, precision: Precision): RatioLenMaker {
+  const [a, b] = stepRatio(unit, precision);
+  const table = stepsTextTable(unit, precision);
+  return (n, d) => ratioLen(n, d, unit, precision, a, b, table);
+}
 
 function makeLen(unit: Unit, precision: Precision): LenMaker {
   const [a, b] = stepRatio(unit, precision);
@@ -19,7 +56,7 @@ function makeLen(unit: Unit, precision: Precision): LenMaker {
       const n = mm.n;
       const d = mm.d;
       const abs = n < 0 ? -n : n;
-      // Steps = abs·a / (d·b) rounded, ties up (roundRatio, inline: this is every shown length's cost).
+      // As ratioLen, inline: most shown lengths come through here.
       const num = abs * a;
       const den = d * b;
       if (num <= SAFE && den <= SAFE) {
@@ -44,14 +81,20 @@ function makeLen(unit: Unit, precision: Precision): LenMaker {
   };
 }
 
+function makers(unit: Unit): Record<Precision, [LenMaker, RatioLenMaker]> {
+  const pair = (p: Precision): [LenMaker, RatioLenMaker] => [makeLen(unit, p), makeRatioLen(unit, p)];
+  return { 8: pair(8), 16: pair(16), 32: pair(32) };
+}
+
 // One maker per unit and precision, made once: plans share them instead of making closures.
-const MAKERS: Record<Unit, Record<Precision, LenMaker>> = {
-  in: { 8: makeLen('in', 8), 16: makeLen('in', 16), 32: makeLen('in', 32) },
-  cm: { 8: makeLen('cm', 8), 16: makeLen('cm', 16), 32: makeLen('cm', 32) },
-  mm: { 8: makeLen('mm', 8), 16: makeLen('mm', 16), 32: makeLen('mm', 32) },
-};
+const MAKERS: Record<Unit, Record<Precision, [LenMaker, RatioLenMaker]>> = { in: makers('in'), cm: makers('cm'), mm: makers('mm') };
 
 /** The Len maker for a unit and precision: exact mm as a number plus the display text. */
 export function lenMaker(unit: Unit, precision: Precision): LenMaker {
-  return MAKERS[unit][precision];
+  return MAKERS[unit][precision][0];
+}
+
+/** The Len maker for n/d mm given as two safe integers (no Exact built), in a unit and precision. */
+export function ratioLenMaker(unit: Unit, precision: Precision): RatioLenMaker {
+  return MAKERS[unit][precision][1];
 }

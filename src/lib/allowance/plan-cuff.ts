@@ -1,9 +1,9 @@
-import { creaseLanding } from './crease-landing';
-import { cuffAlternatives } from './cuff-alternatives';
+import { creaseLanding, quickCreaseLanding } from './crease-landing';
+import { cuffAlternatives, quickAlternatives } from './cuff-alternatives';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
 import { cuffDepthRule, type ExactDefaults, exactDefaults } from './defaults';
-import { type Exact, ZERO } from './exact';
-import { type LenMaker, lenMaker } from './len';
+import { type Exact, lcm, ZERO } from './exact';
+import { type LenMaker, lenMaker, ratioLenMaker } from './len';
 import { InputReader, type LengthRule } from './read-input';
 import type { CuffInput, CuffLine, CuffPlan, Len, PlanWarning, Precision, Unit } from './types';
 
@@ -49,53 +49,206 @@ interface Shown {
   turnUnder: Len;
 }
 
-function cuffWarnings(v: CuffValues, shown: Shown, defaults: ExactDefaults, len: LenMaker): PlanWarning[] {
+/** Which of the cuff's own warnings apply, worked out exactly by either path. */
+interface CuffChecks {
+  /** third section ≤ turn-under */
+  sectionTooSmall: boolean;
+  /** third section − turn-under > cuff depth */
+  stitchingShows: boolean;
+  /** the usual depths as shown, when the depth is outside them (else null) */
+  unusual: [string, string] | null;
+  /** |slope| as shown, when a slope was asked (else null) */
+  slope: string | null;
+}
+
+function cuffWarnings(c: CuffChecks, shown: Shown): PlanWarning[] {
   const warnings: PlanWarning[] = [];
-  if (v.hemSection.compare(v.turnUnder) <= 0) {
+  if (c.sectionTooSmall) {
     warnings.push({
       code: 'third-section-too-small',
       message: `The third section (${shown.section.text}) is no deeper than the turn-under (${shown.turnUnder.text}): nothing is left to hold the cuff inside. Make the third section deeper or the turn-under narrower.`,
     });
   }
   // The turned-under edge's stitching sits (third section − turn-under) above the bottom: over the cuff top it shows.
-  if (v.hemSection.sub(v.turnUnder).compare(v.cuffDepth) > 0) {
+  if (c.stitchingShows) {
     warnings.push({
       code: 'stitching-above-cuff',
       message: `The third section (${shown.section.text}) less the turn-under (${shown.turnUnder.text}) is deeper than the ${shown.depth.text} cuff: the stitching would show above the cuff. Make the third section shorter.`,
     });
   }
-  const usual = defaults.usualCuffDepth;
-  if (v.cuffDepth.compare(usual.min) < 0 || v.cuffDepth.compare(usual.max) > 0) {
+  if (c.unusual !== null) {
     warnings.push({
       code: 'cuff-depth-unusual',
-      message: `A ${shown.depth.text} cuff is outside the usual ${len(usual.min).text} to ${len(usual.max).text}. Check the depth with the customer.`,
+      message: `A ${shown.depth.text} cuff is outside the usual ${c.unusual[0]} to ${c.unusual[1]}. Check the depth with the customer.`,
     });
   }
-  if (v.slope !== null && !v.slope.isZero()) {
+  if (c.slope !== null) {
     warnings.push({
       code: 'slope-on-cuff',
-      message: `Cuffs are made level, so the ${len(v.slope.abs()).text} slope was left out: this plan is level all round.`,
+      message: `Cuffs are made level, so the ${c.slope} slope was left out: this plan is level all round.`,
     });
   }
   return warnings;
 }
 
+function exactChecks(v: CuffValues, defaults: ExactDefaults, len: LenMaker): CuffChecks {
+  const usual = defaults.usualCuffDepth;
+  const unusual = v.cuffDepth.compare(usual.min) < 0 || v.cuffDepth.compare(usual.max) > 0;
+  return {
+    sectionTooSmall: v.hemSection.compare(v.turnUnder) <= 0,
+    stitchingShows: v.hemSection.sub(v.turnUnder).compare(v.cuffDepth) > 0,
+    unusual: unusual ? [len(usual.min).text, len(usual.max).text] : null,
+    slope: v.slope !== null && !v.slope.isZero() ? len(v.slope.abs()).text : null,
+  };
+}
+
 function shortMessage(required: Len, available: Len, shortBy: Len, depth: Len, alt: NonNullable<CuffPlan['alternatives']>): string {
-  const fits: string[] = [];
-  if (alt.shorterSection !== null) fits.push(`the ${depth.text} cuff with a ${alt.shorterSection.text} third section`);
-  if (alt.deepestCuff !== null) fits.push(`a ${alt.deepestCuff.text} cuff with three equal sections`);
-  if (alt.facedCuff.fits) fits.push(`a faced cuff (${alt.facedCuff.required.text} of this cloth and a facing)`);
-  if (alt.plainHem.fits) fits.push(`a plain hem (${alt.plainHem.required.text})`);
-  const what =
-    fits.length > 0
-      ? `What still fits: ${fits.join('; ')}.`
-      : `Not even a plain hem (${alt.plainHem.required.text}) fits: face the hem with other cloth.`;
+  // Joined as it goes (no list to join): this message is built for every short plan.
+  let fits = '';
+  if (alt.shorterSection !== null) fits = `the ${depth.text} cuff with a ${alt.shorterSection.text} third section`;
+  if (alt.deepestCuff !== null) fits += `${fits === '' ? '' : '; '}a ${alt.deepestCuff.text} cuff with three equal sections`;
+  if (alt.facedCuff.fits) fits += `${fits === '' ? '' : '; '}a faced cuff (${alt.facedCuff.required.text} of this cloth and a facing)`;
+  if (alt.plainHem.fits) fits += `${fits === '' ? '' : '; '}a plain hem (${alt.plainHem.required.text})`;
+  const what = fits !== '' ? `What still fits: ${fits}.` : `Not even a plain hem (${alt.plainHem.required.text}) fits: face the hem with other cloth.`;
   return `Not enough cloth: the cuff needs ${required.text} below the mark and there is ${available.text}, short by ${shortBy.text}. ${what}`;
 }
 
 /** Plan a cuff from a pin mark: the four chalk lines, the cloth check, the old crease and the warnings. */
 export function planCuff(input: CuffInput): CuffPlan {
   const v = readCuffInput(input, new InputReader(input, false));
+  return quickCuff(v) ?? exactCuff(v);
+}
+
+// Past this common denominator quickCuff leaves the plan to exactCuff: every length is within
+// 5,080 mm, so its numerator over D (and a few summed) stays far under 2^53.
+const QUICK_DENOMINATOR = 2 ** 30;
+
+// The denominators quickCuff meets among a unit's defaults (usual depths, on-fold and near-cuff-top,
+// and for short cloth the safe stitch, facing seam and plain hem), made once.
+function defaultsDenominator(unit: Unit): number {
+  const e = exactDefaults(unit);
+  const quick = lcm(lcm(e.usualCuffDepth.min.d, e.usualCuffDepth.max.d), lcm(e.onFoldWithin.d, e.nearCuffTop.d));
+  return lcm(quick, lcm(lcm(e.safeStitch.d, e.facingSeam.d), e.hemAllowance.d));
+}
+const DEFAULTS_DENOMINATOR: Record<Unit, number> = { in: defaultsDenominator('in'), cm: defaultsDenominator('cm'), mm: defaultsDenominator('mm') };
+
+/**
+ * planCuff's answer worked out on plain integers over one common denominator D (the lines, the cloth
+ * check, the warnings and the old crease; no Exact built or reduced per step), or null when a value
+ * is big or D passes 2^30: exactCuff then answers. Every Len, text and verdict is exactCuff's.
+ */
+export function quickCuff(v: CuffValues): CuffPlan | null {
+  const { cuffDepth, hemSection, turnUnder, available, clothThickness, oldCrease, slope } = v;
+  const defaults = exactDefaults(v.unit);
+  const usual = defaults.usualCuffDepth;
+  if (cuffDepth.big || hemSection.big || turnUnder.big || clothThickness.big) return null;
+  if ((available !== null && available.big) || (oldCrease !== null && oldCrease.big) || (slope !== null && slope.big)) return null;
+  let D = lcm(lcm(cuffDepth.d, hemSection.d), lcm(turnUnder.d, clothThickness.d));
+  D = lcm(D, DEFAULTS_DENOMINATOR[v.unit]);
+  if (available !== null) D = lcm(D, available.d);
+  if (oldCrease !== null) D = lcm(D, oldCrease.d);
+  if (slope !== null) D = lcm(D, slope.d);
+  if (!(D <= QUICK_DENOMINATOR)) return null;
+  const ratio = ratioLenMaker(v.unit, v.precision);
+  const d = cuffDepth.over(D);
+  const m = hemSection.over(D);
+  const u = turnUnder.over(D);
+  const cuffTop = d + clothThickness.over(D);
+  const below = [0, cuffTop, 2 * cuffTop, 2 * cuffTop + m] as const;
+  const A = available === null ? null : available.over(D);
+  const lines: CuffLine[] = [];
+  for (let k = 0; k < 4; k++) {
+    const b = below[k]!;
+    lines.push({ n: (k + 1) as CuffLine['n'], name: CUFF_LINE_NAMES[k]!, belowMark: ratio(b, D), aboveRawEdge: A === null ? null : ratio(A - b, D) });
+  }
+  const top = lines[1]!.belowMark;
+  const cut = lines[3]!.belowMark;
+  const depth = clothThickness.isZero() ? { mm: top.mm, text: top.text } : ratio(d, D);
+  const section = hemSection === cuffDepth ? { mm: depth.mm, text: depth.text } : ratio(m, D);
+  const shown = { depth, section, turnUnder: ratio(u, D) };
+  const unusual = d < usual.min.over(D) || d > usual.max.over(D);
+  const s = slope === null ? 0 : slope.over(D);
+  const warnings = cuffWarnings(
+    {
+      sectionTooSmall: m <= u,
+      stitchingShows: m - u > d,
+      unusual: unusual ? [ratio(usual.min.over(D), D).text, ratio(usual.max.over(D), D).text] : null,
+      slope: s === 0 ? null : ratio(s < 0 ? -s : s, D).text,
+    },
+    shown,
+  );
+  const plan = cuffPlan(v, shown, lines, { mm: cut.mm, text: cut.text }, warnings);
+  if (A !== null) {
+    const rest = A - below[3];
+    plan.enough = rest >= 0;
+    if (plan.enough) {
+      const above = lines[3]!.aboveRawEdge!;
+      plan.spare = { mm: above.mm, text: above.text };
+    } else {
+      plan.shortBy = ratio(-rest, D);
+      plan.alternatives = quickAlternatives({
+        available: A,
+        cuffDepth: d,
+        hemSection: m,
+        turnUnder: u,
+        innerFold: below[2],
+        clothThickness: cuffTop - d,
+        safeStitch: defaults.safeStitch.over(D),
+        facingSeam: defaults.facingSeam.over(D),
+        hemAllowance: defaults.hemAllowance.over(D),
+        D,
+        unit: v.unit,
+        precision: v.precision,
+        defaults,
+        ratio,
+      });
+      notEnough(plan);
+    }
+  }
+  if (oldCrease !== null) {
+    const landing = quickCreaseLanding(oldCrease.over(D), {
+      d,
+      cuffTop,
+      innerFold: below[2],
+      cut: below[3],
+      onFoldWithin: defaults.onFoldWithin.over(D),
+      nearCuffTop: defaults.nearCuffTop.over(D),
+      D,
+      ratio,
+    });
+    plan.creaseLands = landing;
+    if (landing.visible) warnings.push({ code: 'old-crease-visible', message: landing.message });
+  }
+  return plan;
+}
+
+// The plan without its cloth check (filled in by the caller when the cloth is known).
+function cuffPlan(v: CuffValues, shown: Shown, lines: CuffLine[], required: Len, warnings: PlanWarning[]): CuffPlan {
+  return {
+    kind: 'cuff',
+    unit: v.unit,
+    precision: v.precision,
+    cuffDepth: shown.depth,
+    hemSection: shown.section,
+    turnUnder: shown.turnUnder,
+    lines,
+    required,
+    enough: null,
+    shortBy: null,
+    spare: null,
+    alternatives: null,
+    warnings,
+  };
+}
+
+// A short plan's not-enough-cloth warning, first among the warnings.
+function notEnough(plan: CuffPlan): void {
+  const message = shortMessage(plan.required, plan.lines[0]!.aboveRawEdge!, plan.shortBy!, plan.cuffDepth, plan.alternatives!);
+  plan.warnings.unshift({ code: 'not-enough-cloth', message });
+}
+
+/** planCuff on Exact values: any input, however big or finely divided. */
+export function exactCuff(v: CuffValues): CuffPlan {
   const defaults = exactDefaults(v.unit);
   const len = lenMaker(v.unit, v.precision);
   const positions = cuffLinePositions(v.cuffDepth, v.hemSection, v.clothThickness);
@@ -114,23 +267,19 @@ export function planCuff(input: CuffInput): CuffPlan {
   const top = lines[1]!.belowMark;
   const cut = lines[3]!.belowMark;
   const depth = positions.cuffTop === v.cuffDepth ? { mm: top.mm, text: top.text } : len(v.cuffDepth);
-  const required = { mm: cut.mm, text: cut.text };
   const section = v.hemSection === v.cuffDepth ? { mm: depth.mm, text: depth.text } : len(v.hemSection);
-  const turnUnder = len(v.turnUnder);
-  const warnings = cuffWarnings(v, { depth, section, turnUnder }, defaults, len);
-  let enough: boolean | null = null;
-  let spare: Len | null = null;
-  let shortBy: Len | null = null;
-  let alternatives: CuffPlan['alternatives'] = null;
+  const shown = { depth, section, turnUnder: len(v.turnUnder) };
+  const warnings = cuffWarnings(exactChecks(v, defaults, len), shown);
+  const plan = cuffPlan(v, shown, lines, { mm: cut.mm, text: cut.text }, warnings);
   if (A !== null && rest !== null) {
     // Decided on the exact value: a float of it can be 0 or NaN (1e-310, huge denominators) and flip the check.
-    enough = rest.sign() >= 0;
-    if (enough) {
+    plan.enough = rest.sign() >= 0;
+    if (plan.enough) {
       const above = lines[3]!.aboveRawEdge!;
-      spare = { mm: above.mm, text: above.text };
+      plan.spare = { mm: above.mm, text: above.text };
     } else {
-      shortBy = len(rest, true);
-      alternatives = cuffAlternatives({
+      plan.shortBy = len(rest, true);
+      plan.alternatives = cuffAlternatives({
         available: A,
         cuffDepth: v.cuffDepth,
         hemSection: v.hemSection,
@@ -142,24 +291,9 @@ export function planCuff(input: CuffInput): CuffPlan {
         defaults,
         len,
       });
-      warnings.unshift({ code: 'not-enough-cloth', message: shortMessage(required, lines[0]!.aboveRawEdge!, shortBy, depth, alternatives) });
+      notEnough(plan);
     }
   }
-  const plan: CuffPlan = {
-    kind: 'cuff',
-    unit: v.unit,
-    precision: v.precision,
-    cuffDepth: depth,
-    hemSection: section,
-    turnUnder,
-    lines,
-    required,
-    enough,
-    shortBy,
-    spare,
-    alternatives,
-    warnings,
-  };
   if (v.oldCrease !== null) {
     const landing = creaseLanding(v.oldCrease, {
       cuffDepth: v.cuffDepth,

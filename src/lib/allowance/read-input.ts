@@ -17,6 +17,10 @@ export interface LengthRule {
 
 export { isPrecision } from './units';
 
+const NO_RULE: LengthRule = {};
+// Never pushed to: a reader that does not collect throws its first error instead.
+const NO_ERRORS = Object.freeze([]) as readonly AllowanceError[] as AllowanceError[];
+
 // As value.trim() === '' (the same white space), without making the trimmed copy of every typed length.
 function isBlank(text: string): boolean {
   for (let k = 0; k < text.length; k++) {
@@ -32,7 +36,8 @@ function isBlank(text: string): boolean {
  * error, or, when collecting, keeps them all and goes on with a stand-in value.
  */
 export class InputReader {
-  readonly errors: AllowanceError[] = [];
+  /** the errors kept when collecting (always empty otherwise: the first error is thrown) */
+  readonly errors: AllowanceError[];
   readonly unit: Unit;
   readonly precision: Precision;
 
@@ -40,6 +45,8 @@ export class InputReader {
     input: unknown,
     private readonly collect: boolean,
   ) {
+    // Every plan reads its input once; only validation collects, so only it needs a list.
+    this.errors = collect ? [] : NO_ERRORS;
     if (typeof input !== 'object' || input === null) {
       throw new AllowanceError('bad-input', 'The plan input must be an object.');
     }
@@ -59,7 +66,7 @@ export class InputReader {
   }
 
   /** A length field in mm, or null when absent (blank text counts as absent). */
-  length(value: unknown, field: string, label: string, rule: LengthRule = {}): Exact | null {
+  length(value: unknown, field: string, label: string, rule: LengthRule = NO_RULE): Exact | null {
     if (value === undefined || value === null || (typeof value === 'string' && isBlank(value))) {
       if (rule.required) this.fail(new AllowanceError('missing', `${label} is needed.`, field));
       return null;
