@@ -150,14 +150,14 @@ describe('the queue for the lead', () => {
     await signInAs(page, 'lead', '/queue');
     await page.getByTestId('queue-row').first().waitFor();
     const all = await page.getByTestId('queue-row').count();
-    await page.getByLabel('Due', { exact: true }).selectOption('overdue');
+    await page.getByLabel('Wanted by', { exact: true }).selectOption('overdue');
     await expect.poll(() => page.getByTestId('queue-row').count()).toBeLessThan(all);
     const rows = page.getByTestId('queue-row');
     // The demo seed has at least two overdue garments not yet collected.
     expect(await rows.count()).toBeGreaterThanOrEqual(2);
     for (const text of await rows.allInnerTexts()) expect(text).toContain('Overdue');
 
-    await page.getByLabel('Due', { exact: true }).selectOption('all');
+    await page.getByLabel('Wanted by', { exact: true }).selectOption('all');
     await page.getByRole('button', { name: 'Ticket no.' }).click();
     await expect.poll(async () => {
       const numbers = (await page.getByTestId('queue-row').locator('td:nth-child(3)').allInnerTexts()).map((t) => Number(t.replace('PH ', '')));

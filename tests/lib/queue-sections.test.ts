@@ -38,7 +38,7 @@ describe('bench work and work waiting for pickup', () => {
     expect(readyAge(at('2026-12-02'), TODAY)).toEqual({ days: 1, text: 'Ready 1 day' });
     expect(readyAge(at(TODAY), TODAY)).toEqual({ days: 0, text: 'Ready today' });
     // Across a month's end and a year's end (calendar days, not 24-hour spans).
-    expect(readyAge(at('2026-12-31'), '2027-01-02').days).toBe(2);
+    expect(readyAge(at('2026-12-31'), '2027-01-02')?.days).toBe(2);
     expect(readyAge(null, TODAY)).toBeNull();
   });
 });
