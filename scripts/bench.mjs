@@ -12,6 +12,7 @@ const runs = [
   ['start: npm start to first 200, idle memory', ['node', 'benchmarks/start.mjs']],
   ['morning batch: 100 and 500 sheets, memory, a member beside it', ['node', 'benchmarks/batch.mjs']],
   ['queue: reads at a steady 200 req/s and on a 10,000-garment shop', ['node', 'benchmarks/queue.mjs']],
+  ['queue page: drawing 1,178 open garments in Chromium', ['node', 'benchmarks/queue-draw.mjs']],
   ['queue on PostgreSQL: one server against two', ['bash', 'scripts/with-postgres.sh', 'node', 'benchmarks/queue-servers.mjs']],
 ];
 const only = process.argv.slice(2);

@@ -34,6 +34,14 @@ export interface QueueRow extends GarmentSummary {
   customerName: string | null;
   /** only for roles that may read customers: the queue's search finds by it */
   customerPhone?: string | null;
+  /** a ready garment's last move to ready (ISO, UTC): how long it has waited for its customer; null otherwise */
+  readyAt?: string | null;
+}
+
+/** One choice of the queue's "Tailor" (who) filter: a value matchesQueue reads and its words. */
+export interface WhoOption {
+  value: string;
+  label: string;
 }
 
 /** The customer as a ticket or garment shows them; the contact details only to roles that may read customers. */

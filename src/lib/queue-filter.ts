@@ -1,8 +1,8 @@
 // The queue's filters as one pure function: the queue island narrows its table with it and the
 // morning's batch of cut sheets (GET /api/queue/sheets) picks its garments with it, so "filtered
 // as on screen" is the same code on both sides. No zod here: it ships in the queue's island.
-import { dueState } from './due-date';
-import type { QueueRow } from './bench-types';
+import { dueState, type DueState } from './due-date';
+import type { QueueRow, WhoOption } from './bench-types';
 import type { GarmentStep } from './garment-steps';
 import { ticketSearchNumber } from './ticket-number';
 
@@ -26,11 +26,52 @@ export function matchesQueue(row: QueueRow, f: QueueFilter, userId: string, toda
   if (f.who === 'mine-open' && row.assigneeId !== userId && row.assigneeId !== null) return false;
   if (f.who === 'nobody' && row.assigneeId !== null) return false;
   if (!['all', 'mine', 'mine-open', 'nobody'].includes(f.who) && row.assigneeId !== f.who) return false;
-  const due = dueState(row.dueOn, today);
+  const due = workDueState(row, today);
   if (f.due === 'overdue' && due !== 'overdue') return false;
   if (f.due === 'today' && due !== 'today' && due !== 'overdue') return false;
   if (f.search.trim() && !matchesSearch(row, f.search)) return false;
   return true;
+}
+
+/** Where a row stands in the queue: still at the bench, ready and waiting for its customer (the
+ * counter's work), or collected (history). */
+export type QueueSection = 'bench' | 'waiting' | 'collected';
+
+/** The queue section of a row, by its step. */
+export function queueSection(row: Pick<QueueRow, 'status'>): QueueSection {
+  return row.status === 'ready' ? 'waiting' : row.status === 'collected' ? 'collected' : 'bench';
+}
+
+/** The due state of the work itself: only work not yet ready can be late or due today; a ready or
+ * collected garment is done at the bench whatever its date said ('none'). */
+export function workDueState(row: Pick<QueueRow, 'status' | 'dueOn'>, today: string): DueState {
+  return queueSection(row) === 'bench' ? dueState(row.dueOn, today) : 'none';
+}
+
+/** How long a ready garment has waited for its customer, in calendar days on this device, and in
+ * words ("Ready 3 days"); null when the moment it became ready is not known. */
+export function readyAge(readyAt: string | null | undefined, today: string): { days: number; text: string } | null {
+  if (!readyAt) return null;
+  const at = new Date(readyAt);
+  if (Number.isNaN(at.getTime())) return null;
+  // Both days as UTC midnights of their local calendar dates: whole days, whatever the clock change.
+  const [y, m, d] = today.split('-').map(Number) as [number, number, number];
+  const days = Math.max(0, Math.round((Date.UTC(y, m - 1, d) - Date.UTC(at.getFullYear(), at.getMonth(), at.getDate())) / 86_400_000));
+  return { days, text: days === 0 ? 'Ready today' : `Ready ${days} ${days === 1 ? 'day' : 'days'}` };
+}
+
+/** The "Tailor" filter's choices for a role: with every garment in sight (read-all) everyone,
+ * the unassigned and each other person; otherwise (the apprentice sees only their own and
+ * unassigned work) only what can match: no one else's name, and "everything" is "mine and unassigned". */
+export function whoOptions(seesAll: boolean, people: { userId: string; name: string }[], userId: string): WhoOption[] {
+  if (!seesAll) return [{ value: 'all', label: 'Mine and unassigned' }, { value: 'mine', label: 'Mine' }, { value: 'nobody', label: 'Unassigned' }];
+  return [
+    { value: 'all', label: 'Everyone' },
+    { value: 'mine-open', label: 'Mine and unassigned' },
+    { value: 'mine', label: 'Mine' },
+    { value: 'nobody', label: 'Unassigned' },
+    ...people.filter((p) => p.userId !== userId).map((p) => ({ value: p.userId, label: p.name })),
+  ];
 }
 
 /** True when the typed search names the row: its ticket number (T- optional), customer name,

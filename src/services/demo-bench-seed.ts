@@ -3,7 +3,7 @@
 import { db } from '@/db';
 import { auditMany } from './audit';
 import { refreshTicketAssignee } from './garments';
-import { garments, measurements, tickets } from '@/db/schema';
+import { auditEvents, garments, measurements, tickets } from '@/db/schema';
 import { parseLength } from '@/lib/allowance';
 import type { ExistingFinish } from '@/lib/existing-finish';
 import { leastAdvanced, type GarmentStep } from '@/lib/garment-steps';
@@ -19,6 +19,8 @@ interface DemoGarment {
   fitting?: { finish: Finish; left: Lengths; right?: Lengths };
   /** how the pair came in; plain hem when not said */
   existingFinish?: ExistingFinish;
+  /** a ready pair: days since it became ready (the queue shows "Ready 3 days") */
+  readyDaysAgo?: number;
 }
 interface DemoTicket {
   customer: number;
@@ -63,7 +65,7 @@ const TICKETS: DemoTicket[] = [
       },
     ],
   },
-  { customer: 0, note: 'Corduroy: shortened, plain hem.', garments: [{ description: 'Brown corduroy trousers', status: 'ready', dueIn: -2 }] },
+  { customer: 0, note: 'Corduroy: shortened, plain hem.', garments: [{ description: 'Brown corduroy trousers', status: 'ready', dueIn: -2, readyDaysAgo: 3 }] },
   { customer: 1, note: 'Linen trousers: taken up ¾ in.', garments: [{ description: 'Linen trousers', status: 'collected', dueIn: -5 }] },
 ];
 
@@ -73,6 +75,12 @@ function day(offset: number): string {
   d.setDate(d.getDate() + offset);
   const pad = (n: number) => String(n).padStart(2, '0');
   return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`;
+}
+
+// A ticket whose work became ready days ago came in a week before that; the others today.
+function takenIn(t: DemoTicket): Date {
+  const ready = Math.max(0, ...t.garments.map((g) => g.readyDaysAgo ?? 0));
+  return new Date(Date.now() - (ready ? ready + 7 : 0) * 86_400_000);
 }
 
 function read(lengths: Lengths): Partial<Record<LegLength, SavedLength>> {
@@ -86,13 +94,18 @@ export async function seedBenchDemo(shopId: string, customerIds: string[], peopl
     number += 1;
     const [ticket] = await db
       .insert(tickets)
-      .values({ shopId, number, customerId: customerIds[t.customer], note: t.note, status: leastAdvanced(t.garments.map((g) => g.status)), createdById: people.counter })
+      .values({ shopId, number, customerId: customerIds[t.customer], note: t.note, status: leastAdvanced(t.garments.map((g) => g.status)), createdById: people.counter, createdAt: takenIn(t) })
       .returning();
     for (const [position, g] of t.garments.entries()) {
       const [row] = await db
         .insert(garments)
-        .values({ shopId, ticketId: ticket!.id, position, description: g.description, status: g.status, dueOn: day(g.dueIn), assigneeId: g.who ? people[g.who] : null, existingFinish: g.existingFinish })
+        .values({ shopId, ticketId: ticket!.id, position, description: g.description, status: g.status, dueOn: day(g.dueIn), assigneeId: g.who ? people[g.who] : null, existingFinish: g.existingFinish, createdAt: ticket!.createdAt })
         .returning();
+      if (g.readyDaysAgo !== undefined) {
+        // Its move to ready, back then, as the bench would have recorded it.
+        const at = new Date(Date.now() - g.readyDaysAgo * 86_400_000);
+        await db.insert(auditEvents).values({ shopId, actorId: people.tailor ?? null, action: 'garment.moved', subject: row!.id, detail: { from: 'pressed', to: 'ready' }, at });
+      }
       if (!g.fitting) continue;
       const legs = { left: g.fitting.left, right: g.fitting.right ?? g.fitting.left };
       for (const leg of ['left', 'right'] as const) {

@@ -8,10 +8,11 @@ import { and, sql, type SQL } from 'drizzle-orm';
 import { db } from '@/db';
 import { garments } from '@/db/schema';
 import type { Actor } from '@/lib/api';
-import type { QueueRow } from '@/lib/bench-types';
+import type { QueueRow, WhoOption } from '@/lib/bench-types';
+import { whoOptions } from '@/lib/queue-filter';
 import { encodeCursor, type QueueCursor } from '@/lib/queue-request';
 import { can } from '@/lib/roles';
-import { garmentVisibleTo } from './garments';
+import { garmentVisibleTo, staffOf } from './garments';
 
 /** What the queue API is asked: open work, or a page of history after a cursor. */
 export interface QueueQuery {
@@ -41,6 +42,12 @@ const ticketNumber = sql<number>`(select t.number from tickets t where t.id = "g
 const customerOf = <T>(col: 'name' | 'phone' | 'updated_at') => sql<T>`(select ${sql.raw(`c.${col}`)} from tickets t join customers c on c.id = t.customer_id where t.id = "garments"."ticket_id")`;
 const assigneeOf = <T>(col: 'name' | 'updated_at') => sql<T>`(select ${sql.raw(`u.${col}`)} from "user" u where u.id = "garments"."assignee_id")`;
 
+// A ready garment's wait counts from its last move to ready (the garment.moved audit events, as
+// the overview reads them; audit_events_subject_idx finds them), read only for ready rows; a ready
+// garment with no such event (written straight into the database) counts from its last change.
+// ISO in UTC, so every browser's Date reads it.
+const readyAt = sql<string | null>`case when "garments"."status" = 'ready' then to_char(coalesce((select max(a.at) from audit_events a where a.shop_id = "garments"."shop_id" and a.subject = "garments"."id"::text and a.action = 'garment.moved' and a.detail->>'to' = 'ready'), "garments"."updated_at") at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"') end`;
+
 // The customer's phone only for roles that read customers (the queue's search finds by it); an
 // apprentice works the garment, never calls its owner.
 function rowsOf(where: SQL | undefined, phones: boolean) {
@@ -56,6 +63,7 @@ function rowsOf(where: SQL | undefined, phones: boolean) {
       ticketNumber: ticketNumber.mapWith(Number),
       customerName: customerOf<string | null>('name'),
       ...(phones ? { customerPhone: customerOf<string | null>('phone') } : {}),
+      readyAt,
       position: garments.position,
       createdAt: sql<string>`"garments"."created_at"::text`,
     })
@@ -118,6 +126,12 @@ export async function readQueue(actor: Actor, q: QueueQuery, ifNoneMatch: string
   // A history page is read rarely: its ETag is simply the page itself.
   const etag = etagOf(actor, q, createHash('sha256').update(JSON.stringify([shownRows, next])).digest('base64url'));
   return { etag, rows: matches(ifNoneMatch, etag) ? null : shownRows, next };
+}
+
+/** The queue's "Tailor" filter for the actor: only choices that can match a row they may see. */
+export async function queueWhoOptions(actor: Actor): Promise<WhoOption[]> {
+  const seesAll = can(actor.role, ['tickets', 'read-all']);
+  return whoOptions(seesAll, seesAll ? await staffOf(actor) : [], actor.userId);
 }
 
 /** True when an If-None-Match header names the ETag (weak comparison, as for GET). */

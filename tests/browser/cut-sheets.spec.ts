@@ -41,7 +41,7 @@ describe('printing cut sheets', () => {
   it('an apprentice prints the morning’s sheets of the queue as filtered', async () => {
     const page = await tabletPage(browser);
     await signInAs(page, 'apprentice', '/queue');
-    await page.getByLabel('Due').selectOption('today');
+    await page.getByLabel('Wanted by', { exact: true }).selectOption('today');
     const r = await opensPdf(page.context(), () => page.getByRole('link', { name: 'Print the morning’s sheets' }).click(), /\/api\/queue\/sheets$/);
     expect(r.status).toBe(200);
     expect(r.type).toBe('application/pdf');

@@ -1,11 +1,14 @@
-import { dueState, dueText } from '@/lib/due-date';
+import { dueState, dueText, todayIso } from '@/lib/due-date';
+import type { GarmentStep } from '@/lib/garment-steps';
+import { workDueState } from '@/lib/queue-filter';
 
-/** A due date with "Overdue" or "Due today" standing out in words and colour, never colour alone. */
-export function DueBadge({ dueOn }: { dueOn: string | null }) {
-  const state = dueState(dueOn);
+/** A due date with "Overdue" or "Due today" standing out in words and colour, never colour alone;
+ * given the garment's step, only work not yet ready is ever overdue or due today. */
+export function DueBadge({ dueOn, status }: { dueOn: string | null; status?: GarmentStep }) {
+  const state = status ? workDueState({ dueOn, status }, todayIso()) : dueState(dueOn);
   return (
     <span className="inline-flex flex-wrap items-center gap-2">
-      <span className={state === 'none' ? 'text-muted' : ''}>{dueText(dueOn)}</span>
+      <span className={!dueOn ? 'text-muted' : ''}>{dueText(dueOn)}</span>
       {state === 'overdue' && <span className="rounded bg-cut px-2 py-0.5 text-sm font-extrabold text-white">Overdue</span>}
       {state === 'today' && <span className="rounded border-2 border-warn bg-warn-soft px-2 py-0.5 text-sm font-extrabold text-warn">Due today</span>}
     </span>

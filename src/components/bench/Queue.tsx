@@ -1,25 +1,20 @@
 import { useInfiniteQuery, useQuery } from '@tanstack/react-query';
-import {
-  createColumnHelper,
-  flexRender,
-  getCoreRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type SortingState,
-} from '@tanstack/react-table';
-import { useMemo, useState } from 'react';
+import { createColumnHelper, type SortingState, type Updater } from '@tanstack/react-table';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { withQuery } from '@/components/WithQuery';
-import type { QueueRow } from '@/lib/bench-types';
+import type { QueueRow, WhoOption } from '@/lib/bench-types';
+import { todayIso } from '@/lib/due-date';
 import { ApiError, fetchJson } from '@/lib/fetch-json';
 import { GARMENT_STEPS } from '@/lib/garment-steps';
+import { matchesQueue, queueRank, queueSection, queueSheetsHref, readyAge, type QueueFilter, type QueueSection as Section } from '@/lib/queue-filter';
+import { queueUrlSearch, readQueueUrl } from '@/lib/queue-url';
 import { ticketLabel } from '@/lib/ticket-number';
-import { StageMarks } from './StageMarks';
-import { DEFAULT_QUEUE_FILTER, matchesQueue, queueRank, queueSheetsHref, type QueueFilter } from '@/lib/queue-filter';
 import { DueBadge } from './DueBadge';
-import { todayIso } from '@/lib/due-date';
 import { QueueFilters } from './QueueFilters';
+import { QueueSection, type RankedRow } from './QueueSection';
+import { StageMarks } from './StageMarks';
 import { StepButton } from './StepButton';
-import { useAssignees, useStepLabel } from './use-bench';
+import { useStepLabel } from './use-bench';
 
 interface Props {
   userId: string;
@@ -29,26 +24,20 @@ interface Props {
   canPickup: boolean;
   /** may print cut sheets (apprentice, tailor, lead) */
   canPrint?: boolean;
+  /** the Tailor filter's choices for this reader: only what can match (services/queue.ts) */
+  who: WhoOption[];
+  /** the page address's query as the server read it (filters, sort, search), so the first draw
+   * on the server and in the browser agree */
+  search?: string;
+  /** the counter's view: work waiting for pickup comes before bench work */
+  pickupFirst?: boolean;
 }
 
-const col = createColumnHelper<QueueRow & { rank: number }>();
+/** Rows per page of bench work and of work waiting for pickup. */
+const PAGE_SIZE = 50;
 
-// The card below lg: on a phone one column with the action full width at the bottom; on an upright
-// tablet the action stands at the right, in a column at least as wide in every card.
-const CARD =
-  "grid grid-cols-[auto_minmax(0,1fr)] items-center gap-x-4 gap-y-1 px-3 py-3 [grid-template-areas:'ticket_customer'_'garment_garment'_'due_due'_'step_step'_'whose_whose'_'move_move'] " +
-  "sm:grid-cols-[auto_auto_minmax(0,1fr)_minmax(15rem,min-content)] sm:[grid-template-areas:'ticket_customer_whose_move'_'garment_garment_garment_move'_'due_due_step_move'] " +
-  'lg:table-row lg:p-0';
-// Where each column's cell sits in the card, and the words that stand in for its header there.
-const CELL: Record<string, string> = {
-  rank: "[grid-area:whose] sm:max-lg:text-right max-lg:before:text-muted max-lg:before:content-['Tailor:_']",
-  due: "[grid-area:due] max-lg:before:text-muted max-lg:before:content-['Wanted_by:_']",
-  ticketNumber: '[grid-area:ticket]',
-  customer: '[grid-area:customer] max-lg:font-semibold',
-  description: '[grid-area:garment] max-lg:text-xl',
-  step: "[grid-area:step] max-lg:before:text-muted max-lg:before:content-['Stage:_']",
-  move: '[grid-area:move] max-sm:pt-2 max-lg:[&_button]:w-full',
-};
+const col = createColumnHelper<RankedRow>();
+
 /** One page of collected history (GET /api/garments?view=history) and the next page's cursor. */
 async function historyPage(after: string): Promise<{ rows: QueueRow[]; next: string | null }> {
   const res = await fetch(`/api/garments?view=history${after ? `&after=${encodeURIComponent(after)}` : ''}`, { credentials: 'same-origin' });
@@ -57,19 +46,32 @@ async function historyPage(after: string): Promise<{ rows: QueueRow[]; next: str
   return { rows: body, next: res.headers.get('x-next-cursor') };
 }
 
-const SORT_BY = "max-lg:before:font-semibold max-lg:before:text-muted max-lg:before:content-['Sort_by']";
+// What each section shows: a ready garment's wait instead of its stage (every one is ready).
+const HIDDEN: Record<Section, Record<string, boolean>> = {
+  bench: { waiting: false },
+  waiting: { step: false },
+  collected: { waiting: false },
+};
 
-function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false }: Props) {
+function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false, who, search = '', pickupFirst = false }: Props) {
   // Open work (the server's default); an unchanged list comes back as 304 to the browser's copy.
   const queue = useQuery({ queryKey: ['queue'], queryFn: () => fetchJson<QueueRow[]>('/api/garments'), refetchInterval: 60_000 });
-  const people = useAssignees();
   const label = useStepLabel();
-  const [filters, setFilters] = useState<QueueFilter>(DEFAULT_QUEUE_FILTER);
-  // Own work first, then unassigned, then the rest; within each, the earliest due first.
-  const [sorting, setSorting] = useState<SortingState>([{ id: 'rank', desc: false }, { id: 'due', desc: false }]);
+  // Filters, sort and search start from the address, so a reload or a shared link opens this queue.
+  const [start] = useState(() => readQueueUrl(search, who.map((o) => o.value)));
+  const [filters, setFilters] = useState<QueueFilter>(start.filter);
+  const [sorting, setSorting] = useState<SortingState>(start.sort);
   const today = todayIso();
 
-  // Collected work is history: read a page at a time, only when the step filter asks for it.
+  // Kept in the address as they change. replaceState, not pushState: Back leaves the queue for the
+  // page before it instead of stepping through every letter typed, and coming Back to the queue
+  // opens it as it was left.
+  useEffect(() => {
+    const want = `${location.pathname}${queueUrlSearch(filters, sorting)}${location.hash}`;
+    if (want !== `${location.pathname}${location.search}${location.hash}`) window.history.replaceState(window.history.state, '', want);
+  }, [filters, sorting]);
+
+  // Collected work is history: read a page at a time, only when the stage filter asks for it.
   const wantsHistory = filters.step === 'all' || filters.step === 'collected';
   const history = useInfiniteQuery({
     queryKey: ['queue', 'history'],
@@ -79,17 +81,39 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false 
     enabled: wantsHistory,
   });
 
-  const rows = useMemo(() => {
+  // A garment just moved on stays in its section while its "Marked …" and Undo show, so a wrong
+  // tap can be taken back where it was made (pressed → ready would otherwise jump to pickup).
+  const [stay, setStay] = useState<ReadonlyMap<string, Section>>(new Map());
+  const sectionOf = useRef(new Map<string, Section>());
+  const onOffer = useCallback((id: string, showing: boolean) => {
+    setStay((m) => {
+      if (showing === m.has(id)) return m;
+      const next = new Map(m);
+      if (showing) next.set(id, sectionOf.current.get(id) ?? 'bench');
+      else next.delete(id);
+      return next;
+    });
+  }, []);
+
+  const sections = useMemo(() => {
     const open = queue.data ?? [];
     const ids = new Set(open.map((r) => r.id));
     const older = wantsHistory ? (history.data?.pages ?? []).flatMap((p) => p.rows).filter((r) => !ids.has(r.id)) : [];
-    return [...open, ...older].filter((r) => matchesQueue(r, filters, userId, today)).map((r) => ({ ...r, rank: queueRank(r, userId) }));
-  }, [queue.data, history.data, wantsHistory, filters, userId, today]);
+    const parts: Record<Section, RankedRow[]> = { bench: [], waiting: [], collected: [] };
+    for (const r of [...open, ...older]) {
+      if (!matchesQueue(r, filters, userId, today)) continue;
+      parts[stay.get(r.id) ?? queueSection(r)].push({ ...r, rank: queueRank(r, userId) });
+    }
+    return parts;
+  }, [queue.data, history.data, wantsHistory, filters, userId, today, stay]);
+  useEffect(() => {
+    sectionOf.current = new Map(Object.entries(sections).flatMap(([s, rows]) => rows.map((r) => [r.id, s as Section] as const)));
+  }, [sections]);
 
   const columns = useMemo(
     () => [
       col.accessor('rank', { header: 'Tailor', cell: (c) => (c.getValue() === 0 ? 'You' : c.getValue() === 1 ? 'Not yet taken' : c.row.original.assigneeName ?? '') }),
-      col.accessor((r) => r.dueOn ?? '9999-12-31', { id: 'due', header: 'Wanted by', cell: (c) => <DueBadge dueOn={c.row.original.dueOn} /> }),
+      col.accessor((r) => r.dueOn ?? '9999-12-31', { id: 'due', header: 'Wanted by', cell: (c) => <DueBadge dueOn={c.row.original.dueOn} status={c.row.original.status} /> }),
       col.accessor('ticketNumber', {
         header: 'Ticket no.',
         cell: (c) => (
@@ -108,6 +132,12 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false 
         ),
       }),
       col.accessor((r) => GARMENT_STEPS.indexOf(r.status), { id: 'step', header: 'Stage', cell: (c) => <StageMarks status={c.row.original.status} label={label(c.row.original.status)} /> }),
+      // The oldest wait first when sorted up: ISO times sort as text.
+      col.accessor((r) => r.readyAt ?? '~', {
+        id: 'waiting',
+        header: 'Waiting',
+        cell: (c) => <span data-testid="ready-age">{readyAge(c.row.original.readyAt, todayIso())?.text ?? label('ready')}</span>,
+      }),
       col.display({
         id: 'move',
         header: 'Move on',
@@ -119,22 +149,31 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false 
             canPickup={canPickup}
             size="row"
             what={`${ticketLabel(c.row.original.ticketNumber, shopName)} ${c.row.original.description}`}
+            onOffer={(showing) => onOffer(c.row.original.id, showing)}
           />
         ),
       }),
     ],
-    [label, canAdvance, canPickup, shopName],
+    [label, canAdvance, canPickup, shopName, onOffer],
   );
 
-  // Rows keyed by garment, so a row's Undo offer stays with its garment when the order changes.
-  const table = useReactTable({ data: rows, columns, getRowId: (r) => r.id, state: { sorting }, onSortingChange: setSorting, sortDescFirst: false, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
+  const onSortingChange = (u: Updater<SortingState>) => setSorting((s) => (typeof u === 'function' ? u(s) : u));
+  const resetKey = queueUrlSearch(filters, sorting);
+  const parts: { key: Section; title: string; what: string }[] = [
+    { key: 'bench', title: 'At the bench', what: 'Garments at the bench' },
+    { key: 'waiting', title: 'Ready, waiting for pickup', what: 'Ready garments waiting for pickup' },
+  ];
+  if (pickupFirst) parts.reverse();
+  parts.push({ key: 'collected', title: 'Collected', what: 'Collected garments' });
+  const shown = parts.filter((p) => sections[p.key].length > 0);
+  const count = shown.reduce((n, p) => n + sections[p.key].length, 0);
 
   return (
     <div className="flex flex-col gap-4">
-      <QueueFilters value={filters} onChange={setFilters} people={people.data ?? []} label={label} />
-      {canPrint && rows.length > 0 && (
+      <QueueFilters value={filters} onChange={setFilters} who={who} label={label} />
+      {canPrint && count > 0 && (
         // The same filters and day as the table: the PDF holds exactly the garments shown.
-        <a href={queueSheetsHref(filters, today)} target="_blank" rel="noopener" className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-ink bg-card px-5 text-lg font-bold">
+        <a href={queueSheetsHref(filters, today)} target="_blank" rel="noopener" className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-ink bg-card px-5 text-lg font-bold max-sm:order-last">
           Print the morning’s sheets
         </a>
       )}
@@ -142,50 +181,24 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false 
         <p className="text-lg text-muted">Loading the queue…</p>
       ) : queue.isError ? (
         <p role="alert" className="font-semibold text-cut">The queue could not be loaded: {queue.error.message}</p>
+      ) : shown.length === 0 ? (
+        <p className="rounded-lg border-2 border-rule bg-card px-4 py-6 text-lg text-muted">Nothing here with these filters.</p>
       ) : (
-        // Below lg (a tablet held upright, a phone) each row is a card with its action at the side or
-        // underneath, so "Mark …" and Undo are never cut off; the header row becomes the sort buttons.
-        // The roles are explicit because a table laid out as blocks and grids can lose them.
-        <div className="rounded-lg border-2 border-rule bg-card">
-          <table role="table" className="block w-full border-collapse text-left text-lg lg:table">
-            <caption className="sr-only">Garments in the queue, {rows.length} shown</caption>
-            <thead role="rowgroup" className="block lg:table-header-group">
-              {table.getHeaderGroups().map((hg) => (
-                <tr key={hg.id} role="row" className={'flex flex-wrap items-center gap-x-3 border-b-2 border-ink px-3 py-1 lg:table-row lg:p-0 ' + SORT_BY}>
-                  {hg.headers.map((h) => {
-                    const sorted = h.column.getIsSorted();
-                    return (
-                      <th key={h.id} role="columnheader" scope="col" className={'block text-base lg:table-cell lg:px-3 lg:py-2 ' + (h.column.getCanSort() ? '' : 'max-lg:sr-only')} aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
-                        {h.column.getCanSort() ? (
-                          <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex min-h-11 items-center gap-1 font-extrabold">
-                            {flexRender(h.column.columnDef.header, h.getContext())}
-                            <span aria-hidden="true">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}</span>
-                          </button>
-                        ) : (
-                          flexRender(h.column.columnDef.header, h.getContext())
-                        )}
-                      </th>
-                    );
-                  })}
-                </tr>
-              ))}
-            </thead>
-            <tbody role="rowgroup" className="block lg:table-row-group">
-              {table.getRowModel().rows.map((row) => {
-                return (
-                  <tr key={row.id} role="row" data-testid="queue-row" className={'border-b border-rule ' + CARD}>
-                    {row.getVisibleCells().map((cell) => (
-                      <td key={cell.id} role="cell" className={'block lg:table-cell lg:px-3 lg:py-2 lg:align-middle ' + (CELL[cell.column.id] ?? '')}>
-                        {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                      </td>
-                    ))}
-                  </tr>
-                );
-              })}
-            </tbody>
-          </table>
-          {rows.length === 0 && <p className="px-4 py-6 text-lg text-muted">Nothing here with these filters.</p>}
-        </div>
+        shown.map((p) => (
+          <QueueSection
+            key={p.key}
+            title={p.title}
+            what={p.what}
+            testId={`queue-${p.key}`}
+            rows={sections[p.key]}
+            columns={columns}
+            hidden={HIDDEN[p.key]}
+            sorting={sorting}
+            onSortingChange={onSortingChange}
+            pageSize={p.key === 'collected' ? null : PAGE_SIZE}
+            resetKey={resetKey}
+          />
+        ))
       )}
       {wantsHistory ? (
         history.isError ? (
@@ -208,5 +221,6 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false 
   );
 }
 
-/** The queue island: the shop's garments as a table to filter, sort and move along. */
+/** The queue island: the shop's garments to filter, sort and move along, bench work apart from
+ * work waiting for pickup, each a page at a time. */
 export default withQuery(QueueTable);

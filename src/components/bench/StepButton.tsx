@@ -18,13 +18,15 @@ interface Props {
   size?: 'big' | 'row';
   /** a label naming the garment, for screen readers in a table of many */
   what?: string;
+  /** told when the word after a tap (and its Undo) appears and goes, so a list can keep the row where it was meanwhile */
+  onOffer?: (showing: boolean) => void;
 }
 
 // Long enough to notice a wrong tap and reach Undo; it stays while Undo has the focus.
 const UNDO_MS = 10_000;
 
 /** The one tap that moves a garment to its next step, with a short Undo after it; says what went wrong in words. */
-export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen = false, size = 'big', what }: Props) {
+export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen = false, size = 'big', what, onOffer }: Props) {
   const label = useStepLabel();
   const client = useQueryClient();
   const next = nextStep(status);
@@ -42,6 +44,8 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
     },
   });
   const back = useStepBack(garmentId);
+  const showing = Boolean(undoable || said);
+  useEffect(() => onOffer?.(showing), [onOffer, showing]);
 
   useEffect(() => {
     if ((!undoable && !said) || held) return;
