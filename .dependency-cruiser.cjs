@@ -13,6 +13,7 @@ const SERVER_ONLY_LIB = [
   '^src/lib/(auth|auth-hooks|auth-plugins|auth-secret)\\.ts$', // better-auth + the database + the secret
   '^src/lib/(mail|sent-mail-record)\\.ts$', // nodemailer, SMTP settings, the sent-mail table
   '^src/lib/payment-service\\.ts$', // the payment service's secret key
+  '^src/lib/(sms|sms-service)\\.ts$', // the SMS service's token and its SDK
   '^src/lib/render-pdf\\.ts$', // react-pdf + pdfkit
   '^src/lib/(cut-sheet|claim-slip|receipt|pdf-platform|storage)/', // PDF drawing, fonts, files on disk
   '^src/lib/(api|body|client-address|deployment|security-headers)\\.ts$', // endpoint plumbing

@@ -45,7 +45,10 @@ export default defineConfig({
   integrations: [react(), precompress()],
   server: { port: 4321, host: '127.0.0.1' },
   // Without this Astro ignores the Host header: Astro.url loses the port and same-site POSTs get 403.
-  security: { allowedDomains: [{ hostname: 'localhost' }, { hostname: '127.0.0.1' }] },
+  // Astro's own origin check refuses every form POST without a matching Origin, the SMS service's
+  // signed status callback (/api/sms/status) included; src/middleware.ts refuses cross-site writes
+  // itself (crossSite: a foreign Origin, or no Origin with the session cookie).
+  security: { allowedDomains: [{ hostname: 'localhost' }, { hostname: '127.0.0.1' }], checkOrigin: false },
   env: {
     // All 'secret': Astro inlines 'public' server variables at build time, and these must be read
     // when the server starts (tests and scripts set them per run).
@@ -76,6 +79,13 @@ export default defineConfig({
       PAYMENTS_API_KEY: envField.string({ context: 'server', access: 'secret', optional: true }),
       PAYMENTS_API_BASE: envField.string({ context: 'server', access: 'secret', optional: true }),
       PAYMENTS_WEBHOOK_SECRET: envField.string({ context: 'server', access: 'secret', optional: true }),
+      // Text messages through the SMS service's SDK (account id, token, sending number); SMS_API_BASE
+      // points it at the local fake (http://127.0.0.1:port) and is left unset for the real service.
+      // Without an account id and token, notices go by e-mail and the counter is told why.
+      SMS_ACCOUNT_SID: envField.string({ context: 'server', access: 'secret', optional: true }),
+      SMS_AUTH_TOKEN: envField.string({ context: 'server', access: 'secret', optional: true }),
+      SMS_FROM: envField.string({ context: 'server', access: 'secret', optional: true }),
+      SMS_API_BASE: envField.string({ context: 'server', access: 'secret', optional: true }),
       // A request body (JSON or an upload) that sends nothing for this long is answered 408.
       BODY_IDLE_SECONDS: envField.number({ context: 'server', access: 'secret', default: 20 }),
       // How often the server retries failed notices and sends automatic ready notices.

@@ -19,6 +19,9 @@ const schema = z.object({
   BETTER_AUTH_URL: z.url().optional(),
   BETTER_AUTH_SECRET: z.string().optional(),
   PAYMENTS_FAKE_PORT: z.coerce.number().int().positive().default(12111),
+  // The local SMS stand-in (scripts/sms-fake.mjs), started unless SMS_ACCOUNT_SID names a real account.
+  SMS_FAKE_PORT: z.coerce.number().int().positive().default(12112),
+  SMS_ACCOUNT_SID: z.string().optional(),
 });
 
 /** The parsed script environment. */

@@ -1,5 +1,5 @@
 // npm start: refuse unsafe settings, start the local mail capture (unless SMTP_HOST names a real
-// host) and the payment fake (unless PAYMENTS_API_KEY is set), build if needed, then serve the
+// host), the payment fake (unless PAYMENTS_API_KEY is set) and the SMS fake (unless SMS_ACCOUNT_SID is set), build if needed, then serve the
 // built app on http://localhost:4321. Problems are told in one line naming the setting to change.
 import { spawn } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
@@ -36,15 +36,23 @@ function portFree(port) {
 const mail = { port: env.SMTP_PORT, what: 'mail capture', setting: 'SMTP_PORT' };
 const pay = { port: env.PAYMENTS_FAKE_PORT, what: 'local payment fake', setting: 'PAYMENTS_FAKE_PORT' };
 const fakePayments = !process.env.PAYMENTS_API_KEY;
+const sms = { port: env.SMS_FAKE_PORT, what: 'local SMS service', setting: 'SMS_FAKE_PORT' };
+const fakeSms = !env.SMS_ACCOUNT_SID;
 // Ports are checked before the build, so a taken one is told at once; the stand-ins themselves
 // start beside the server (their modules cost half a second the server need not wait for).
 if (useCapture) await listenOrExplain(portFree(mail.port), mail);
 if (fakePayments) await listenOrExplain(portFree(pay.port), pay);
+if (fakeSms) await listenOrExplain(portFree(sms.port), sms);
 if (useCapture) Object.assign(serverEnv, { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(mail.port), MAIL_CAPTURE_DIR: captureDir });
 // Without a real payment service configured, payment links go to the local fake.
 const payments = { apiKey: `sk_test_local_${randomBytes(12).toString('hex')}`, webhookSecret: `whsec_${randomBytes(24).toString('hex')}` };
 if (fakePayments) {
   Object.assign(serverEnv, { PAYMENTS_API_KEY: payments.apiKey, PAYMENTS_API_BASE: `http://127.0.0.1:${pay.port}`, PAYMENTS_WEBHOOK_SECRET: payments.webhookSecret });
+}
+// Without a real SMS account configured, texts go to the local fake (fresh account id and token).
+const smsAccount = { accountSid: `AC${randomBytes(16).toString('hex')}`, authToken: randomBytes(16).toString('hex') };
+if (fakeSms) {
+  Object.assign(serverEnv, { SMS_ACCOUNT_SID: smsAccount.accountSid, SMS_AUTH_TOKEN: smsAccount.authToken, SMS_FROM: '+15005550006', SMS_API_BASE: `http://127.0.0.1:${sms.port}` });
 }
 process.chdir(appDir);
 buildIfNeeded('dist');
@@ -65,4 +73,9 @@ if (fakePayments) {
   const webhookUrl = new URL('/api/payments/webhook', `http://127.0.0.1:${env.PORT}`).toString();
   const { base } = await listenOrExplain(startPaymentsFake({ port: pay.port, ...payments, webhookUrl }), pay);
   console.log(`Local payment service (no real money) on ${base}`);
+}
+if (fakeSms) {
+  const { startSmsFake } = await import('./sms-fake.mjs');
+  const { base } = await listenOrExplain(startSmsFake({ port: sms.port, ...smsAccount }), sms);
+  console.log(`Local SMS service (no text leaves the machine) on ${base}: what it was asked to send at ${base}/`);
 }

@@ -16,8 +16,9 @@ const PUBLIC_PREFIXES = ['/invite/', '/api/', '/_astro/', '/_image', '/favicon']
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 const HEALTH_PATH = '/api/health';
 // Routes that answer for themselves: better-auth resolves its own session, and the payment
-// webhook is proven by its signature. Looking the session up for them is work thrown away.
-const OWN_AUTH_PREFIXES = ['/api/auth/', '/api/payments/webhook'];
+// webhook and the SMS status callback are proven by their signatures. Looking the session up for
+// them is work thrown away.
+const OWN_AUTH_PREFIXES = ['/api/auth/', '/api/payments/webhook', '/api/sms/status'];
 
 function isPublic(path: string): boolean {
   return PUBLIC_PAGES.includes(path) || PUBLIC_PREFIXES.some((p) => path.startsWith(p));

@@ -88,12 +88,22 @@ export const refundInput = z.object({
   reason: text().trim().max(300, 'Keep the note under 300 characters.').optional(),
 });
 
-/** A notice the counter sends by hand. */
-export const noticeInput = z.object({
-  kind: z.literal('ready', { error: 'Only the ready notice can be sent.' }),
-  /** true: send it again after it has gone (a new, numbered notice) */
-  again: z.boolean({ error: 'Say whether to send it again (true or false).' }).optional(),
-});
+/** A notice the counter sends by hand: the ready notice, or the open pay link by e-mail or text. */
+export const noticeInput = z.discriminatedUnion(
+  'kind',
+  [
+    z.object({
+      kind: z.literal('ready'),
+      /** true: send it again after it has gone (a new, numbered notice) */
+      again: z.boolean({ error: 'Say whether to send it again (true or false).' }).optional(),
+    }),
+    z.object({
+      kind: z.literal('pay-link'),
+      channel: z.enum(['email', 'sms'], { error: 'Send the pay link by e-mail or by text (email or sms).' }),
+    }),
+  ],
+  { error: 'Send the ready notice (kind "ready") or the pay link (kind "pay-link").' },
+);
 
 /** The claim slip's copies: 1–3 slips and 0–3 tear-off tags per garment (query ?slips=&tags=). */
 export const slipCopiesQuery = z.object({

@@ -1,6 +1,7 @@
 // What the counter's routes answer. The services build these shapes (with Date values); islands
 // read them through JSON, as `AsJson<…>` (dates as strings). Here, beside the counter's request
 // schemas, so islands need no import from services or the database (DEVELOPERS.md "Layers").
+import type { ContactPreference } from './contact-channels';
 import type { Notice, Payment, PaymentLink, PriceLine, Refund } from '@/db/schema';
 import type { AsJson } from './as-json';
 import type { Currency } from './pricing/money';
@@ -45,7 +46,9 @@ export interface PriceChange {
 
 /** Everything the counter panel shows about a ticket's money. */
 export interface CounterSummary extends Balance {
-  ticket: { id: string; number: number; status: string; dueOn: string | null; customerId: string | null; customerName: string | null; customerEmail: string | null };
+  ticket: { id: string; number: number; status: string; dueOn: string | null; customerId: string | null; customerName: string | null; customerEmail: string | null; customerPhone: string | null; contactBy: ContactPreference };
+  /** true when the SMS service is configured: without it, notices go by e-mail */
+  textsReady: boolean;
   currency: Currency;
   /** every line, voided ones included (`voidedAt`, `voidReason`); the total counts the others */
   lines: PriceLine[];

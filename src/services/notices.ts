@@ -1,11 +1,17 @@
-// Notices to customers: the ready notice, sent by the counter or by the shop's setting, kept with
-// its delivery state; a failed send is retried on a timer and by hand, and stays visible.
-import { and, asc, desc, eq, gte, isNull, lte, ne, sql } from 'drizzle-orm';
+// Notices to customers: the ready notice, sent by the counter or by the shop's setting, and the pay
+// link sent from the counter; each goes by e-mail, text message or both as the customer prefers
+// (one row per channel), kept with its delivery state; a failed send is retried on a timer and by
+// hand, and stays visible. A text's delivery report arrives later by the SMS service's signed
+// status callback (recordDeliveryReport).
+import { and, asc, desc, eq, gte, isNull, lte, ne, or, sql } from 'drizzle-orm';
 import { NOTICE_LEASE_SECONDS } from 'astro:env/server';
 import { db } from '@/db';
-import { counterSettings, customers, garments, notices, organization, tickets, type Notice } from '@/db/schema';
+import { counterSettings, customers, garments, notices, organization, tickets, type DELIVERY_REPORTS, type Notice } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import { sendMail } from '@/lib/mail';
+import { recordSentMail } from '@/lib/sent-mail-record';
+import { plannedSends, type Channel, type ContactPreference, type PlannedSend } from '@/lib/contact-channels';
+import { sendText, smsConfigured, statusCallbackUrl } from '@/lib/sms-service';
 import { formatMoney } from '@/lib/pricing/money';
 import { audit } from './audit';
 import { ServiceError } from './errors';
@@ -29,14 +35,15 @@ export async function listNotices(actor: Actor, ticketId: string): Promise<Notic
   return db.select().from(notices).where(and(eq(notices.shopId, actor.shopId), eq(notices.ticketId, ticketId))).orderBy(asc(notices.createdAt));
 }
 
-/** The ready notice's subject and text: the balance due and the shop's hours. */
-export async function readyMessage(shopId: string, ticketId: string): Promise<{ to: string | null; subject: string; body: string }> {
+/** The ready notice's subject and text (e-mail), its short form (text message), and who gets it. */
+export async function readyMessage(shopId: string, ticketId: string): Promise<Message> {
   const settings = await counterSettingsOf(shopId);
   const summary = await summaryOf(await shopTicket({ shopId }, ticketId), settings);
   const [shop] = await db.select({ name: organization.name }).from(organization).where(eq(organization.id, shopId));
   const number = ticketLabel(summary.ticket.number, shop?.name ?? '');
   const due = summary.due > 0 ? `Balance due at pickup: ${formatMoney(summary.due, summary.currency)}.` : 'Nothing is left to pay: the ticket is paid in full.';
-  const pay = summary.due > 0 && summary.link?.status === 'open' ? [`You may pay ahead online: ${summary.link.url}`] : [];
+  const payUrl = summary.due > 0 && summary.link?.status === 'open' ? summary.link.url : null;
+  const pay = payUrl ? [`You may pay ahead online: ${payUrl}`] : [];
   const body = [
     `Hello ${summary.ticket.customerName ?? ''}`.trim() + ',',
     '',
@@ -49,7 +56,58 @@ export async function readyMessage(shopId: string, ticketId: string): Promise<{ 
     '',
     `Bring your claim slip or quote ${number}.`,
   ].join('\n');
-  return { to: summary.ticket.customerEmail, subject: `Ready to collect: ticket ${number}`, body };
+  // A text is read on a phone: the same facts, shorter.
+  const text = [
+    `${shop?.name ?? 'The shop'}: your trousers on ticket ${number} are ready to collect.`,
+    summary.due > 0 ? `Due at pickup: ${formatMoney(summary.due, summary.currency)}.` : 'Paid in full.',
+    ...(payUrl ? [`Pay ahead: ${payUrl}`] : []),
+    ...(settings.hours ? [`Hours: ${settings.hours}`] : []),
+  ].join('\n');
+  return { ...recipientOf(summary.ticket), subject: `Ready to collect: ticket ${number}`, body, text };
+}
+
+/** A message to a customer: e-mail subject and body, the text message's words, and the customer's ways to be reached. */
+export interface Message {
+  to: string | null;
+  phone: string | null;
+  contactBy: ContactPreference;
+  subject: string;
+  body: string;
+  text: string;
+}
+
+function recipientOf(t: { customerEmail: string | null; customerPhone: string | null; contactBy: ContactPreference }) {
+  return { to: t.customerEmail, phone: t.customerPhone, contactBy: t.contactBy };
+}
+
+/** The sends of a message as the customer prefers and the shop can (422 when none can go). */
+function sendsOf(message: Message): PlannedSend[] {
+  const { sends, refused } = plannedSends({ email: message.to, phone: message.phone, contactBy: message.contactBy }, smsConfigured());
+  if (refused) throw new ServiceError(422, refused);
+  return sends;
+}
+
+/** The row of one send: the e-mail, or the text's words (kept in `body`, as sent). */
+function rowOf(shopId: string, ticketId: string, kind: Notice['kind'], message: Message, send: PlannedSend, sequence: number, createdById: string | null) {
+  const words = send.channel === 'sms' ? message.text : message.body;
+  return { shopId, ticketId, kind, sequence, channel: send.channel, to: send.to, note: send.note, subject: message.subject, body: words, createdById };
+}
+
+const SENT_KIND = { ready: 'ready-notice', 'pay-link': 'pay-link' } as const;
+
+async function deliver(notice: Notice): Promise<{ providerId: string | null }> {
+  if (notice.channel === 'sms') {
+    const sent = await sendText({ to: notice.to, body: notice.body, statusCallback: statusCallbackUrl(notice.id) });
+    try {
+      await recordSentMail({ shopId: notice.shopId, kind: SENT_KIND[notice.kind] }, { to: notice.to, subject: notice.subject, messageId: sent.sid, channel: 'sms', body: notice.body });
+    } catch (e) {
+      // As for e-mail (lib/mail.ts): the text is out, and a retry would send it twice.
+      console.error('sent text not recorded:', e);
+    }
+    return { providerId: sent.sid };
+  }
+  await sendMail({ to: notice.to, subject: notice.subject, text: notice.body }, { shopId: notice.shopId, kind: SENT_KIND[notice.kind] });
+  return { providerId: null };
 }
 
 /** Tries one delivery and records the outcome; a failure schedules the next automatic try. */
@@ -68,8 +126,8 @@ export async function attemptDelivery(notice: Notice): Promise<Notice> {
     return now!;
   }
   try {
-    await sendMail({ to: notice.to, subject: notice.subject, text: notice.body }, { shopId: notice.shopId, kind: 'ready-notice' });
-    const [row] = await db.update(notices).set({ status: 'sent', attempts, sentAt: new Date(), lastError: null, nextAttemptAt: null }).where(eq(notices.id, notice.id)).returning();
+    const { providerId } = await deliver(notice);
+    const [row] = await db.update(notices).set({ status: 'sent', attempts, sentAt: new Date(), lastError: null, nextAttemptAt: null, providerId }).where(eq(notices.id, notice.id)).returning();
     return row!;
   } catch (e) {
     const next = attempts < MAX_AUTO_ATTEMPTS ? new Date(Date.now() + BACKOFF_MS * 2 ** (attempts - 1)) : null;
@@ -82,22 +140,28 @@ export async function attemptDelivery(notice: Notice): Promise<Notice> {
   }
 }
 
-/** Queues the ready notice of a ready ticket and tries to send it at once. */
+/** Queues the ready notice of a ready ticket by the customer's channels and tries each at once;
+ * answers the first channel's row (the ticket's list has them all). */
 async function queueReady(shopId: string, ticketId: string, actorId: string | null): Promise<Notice> {
   const message = await readyMessage(shopId, ticketId);
-  const to = message.to;
-  if (!to) throw new ServiceError(422, 'The customer has no e-mail address: add one, or call them.');
-  const row = await db.transaction(async (tx) => {
-    const [queued] = await tx
+  const sends = sendsOf(message);
+  const rows = await db.transaction(async (tx) => {
+    const queued = await tx
       .insert(notices)
-      .values({ shopId, ticketId, kind: 'ready', to, subject: message.subject, body: message.body, createdById: actorId })
+      .values(sends.map((send) => rowOf(shopId, ticketId, 'ready', message, send, 1, actorId)))
       .onConflictDoNothing()
       .returning();
-    if (!queued) throw new ServiceError(409, 'The ready notice of this ticket is already on record: send it again if the customer needs it.');
-    await audit(tx, shopId, actorId, 'notice.queued', ticketId, { kind: 'ready', automatic: actorId === null });
+    if (queued.length < sends.length) throw new ServiceError(409, 'The ready notice of this ticket is already on record: send it again if the customer needs it.');
+    await audit(tx, shopId, actorId, 'notice.queued', ticketId, { kind: 'ready', automatic: actorId === null, channels: sends.map((x) => x.channel) });
     return queued;
   });
-  return attemptDelivery(row);
+  return deliverAll(rows);
+}
+
+async function deliverAll(rows: Notice[]): Promise<Notice> {
+  const done: Notice[] = [];
+  for (const row of rows) done.push(await attemptDelivery(row));
+  return done[0]!;
 }
 
 /** The counter's button: sends the ready notice of a ready ticket. */
@@ -114,9 +178,8 @@ export async function resendReadyNotice(actor: Actor, ticketId: string): Promise
   const ticket = await shopTicket(actor, ticketId);
   if (ticket.status !== 'ready') throw new ServiceError(422, `The ticket is not ready (it is ${ticket.status}).`);
   const message = await readyMessage(actor.shopId, ticketId);
-  if (!message.to) throw new ServiceError(422, 'The customer has no e-mail address: add one, or call them.');
-  const to = message.to;
-  const row = await db.transaction(async (tx) => {
+  const sends = sendsOf(message);
+  const rows = await db.transaction(async (tx) => {
     const [last] = await tx
       .select()
       .from(notices)
@@ -124,18 +187,94 @@ export async function resendReadyNotice(actor: Actor, ticketId: string): Promise
       .orderBy(desc(notices.sequence))
       .limit(1);
     if (!last) throw new ServiceError(409, 'The ready notice has not been sent yet: send it first.');
-    if (last.status !== 'sent') throw new ServiceError(409, 'The last ready notice is not delivered yet: retry that one instead.');
+    // Every channel of the last send must have gone (a failed one is retried instead).
+    const lastRows = await tx.select().from(notices).where(and(eq(notices.shopId, actor.shopId), eq(notices.ticketId, ticketId), eq(notices.kind, 'ready'), eq(notices.sequence, last.sequence)));
+    if (lastRows.some((r) => r.status !== 'sent')) throw new ServiceError(409, 'The last ready notice is not delivered yet: retry that one instead.');
     // Two re-sends at once both ask for the next number: the unique index lets one through.
-    const [queued] = await tx
+    const queued = await tx
       .insert(notices)
-      .values({ shopId: actor.shopId, ticketId, kind: 'ready', sequence: last.sequence + 1, to, subject: message.subject, body: message.body, createdById: actor.userId })
+      .values(sends.map((send) => rowOf(actor.shopId, ticketId, 'ready', message, send, last.sequence + 1, actor.userId)))
       .onConflictDoNothing()
       .returning();
-    if (!queued) throw new ServiceError(409, 'The ready notice is being sent again already.');
-    await audit(tx, actor.shopId, actor.userId, 'notice.resent', ticketId, { kind: 'ready', noticeId: queued.id, sequence: queued.sequence, previousId: last.id });
+    if (queued.length < sends.length) throw new ServiceError(409, 'The ready notice is being sent again already.');
+    await audit(tx, actor.shopId, actor.userId, 'notice.resent', ticketId, { kind: 'ready', noticeId: queued[0]!.id, sequence: queued[0]!.sequence, previousId: last.id, channels: sends.map((x) => x.channel) });
+    return queued;
+  });
+  return deliverAll(rows);
+}
+
+/** The open pay link's message: the amount and the link, as an e-mail and as a text. */
+async function payLinkMessage(shopId: string, ticketId: string): Promise<Message> {
+  const settings = await counterSettingsOf(shopId);
+  const summary = await summaryOf(await shopTicket({ shopId }, ticketId), settings);
+  if (!(summary.link?.status === 'open' && summary.link.amountMinor === summary.due && summary.due > 0)) {
+    throw new ServiceError(409, 'There is no open pay link for the balance: make one first.');
+  }
+  const [shop] = await db.select({ name: organization.name }).from(organization).where(eq(organization.id, shopId));
+  const number = ticketLabel(summary.ticket.number, shop?.name ?? '');
+  const amount = formatMoney(summary.due, summary.currency);
+  const body = [
+    `Hello ${summary.ticket.customerName ?? ''}`.trim() + ',',
+    '',
+    `You may pay ${amount} for ticket ${number} at ${shop?.name ?? 'the shop'} online:`,
+    summary.link.url,
+    '',
+    'Or pay at the counter when you collect.',
+  ].join('\n');
+  const text = `${shop?.name ?? 'The shop'}: pay ${amount} for ticket ${number} online: ${summary.link.url}`;
+  return { ...recipientOf(summary.ticket), subject: `Pay online: ticket ${number}`, body, text };
+}
+
+/** Sends the ticket's open pay link to the customer by the channel the counter chose (a new
+ * numbered notice of kind pay-link, with its own delivery state); 422 when that channel cannot
+ * reach the customer, saying why. */
+export async function sendPayLink(actor: Actor, ticketId: string, channel: Channel): Promise<Notice> {
+  await shopTicket(actor, ticketId);
+  const message = await payLinkMessage(actor.shopId, ticketId);
+  let to: string | null;
+  if (channel === 'sms') {
+    if (!smsConfigured()) throw new ServiceError(422, 'Text messages are not set up for this shop: send the link by e-mail instead.');
+    to = message.phone?.trim() || null;
+    if (!to) throw new ServiceError(422, 'Not sent by text: no phone number. Add one, or send it by e-mail.');
+  } else {
+    to = message.to?.trim() || null;
+    if (!to) throw new ServiceError(422, 'The customer has no e-mail address: add one, or send the link by text.');
+  }
+  const send: PlannedSend = { channel, to, note: null };
+  const row = await db.transaction(async (tx) => {
+    const [last] = await tx
+      .select({ sequence: notices.sequence })
+      .from(notices)
+      .where(and(eq(notices.shopId, actor.shopId), eq(notices.ticketId, ticketId), eq(notices.kind, 'pay-link'), eq(notices.channel, channel)))
+      .orderBy(desc(notices.sequence))
+      .limit(1);
+    const [queued] = await tx
+      .insert(notices)
+      .values(rowOf(actor.shopId, ticketId, 'pay-link', message, send, (last?.sequence ?? 0) + 1, actor.userId))
+      .onConflictDoNothing()
+      .returning();
+    if (!queued) throw new ServiceError(409, 'The pay link is being sent already.');
+    await audit(tx, actor.shopId, actor.userId, 'notice.queued', ticketId, { kind: 'pay-link', channel, noticeId: queued.id });
     return queued;
   });
   return attemptDelivery(row);
+}
+
+const REPORTS: Record<string, (typeof DELIVERY_REPORTS)[number]> = { delivered: 'delivered', undelivered: 'undelivered', failed: 'failed' };
+
+/** Records a text's delivery report from the SMS service's status callback (its signature already
+ * checked): only on the notice the callback's address names AND whose text the service says it
+ * is, so a report can never land on another notice or another shop's. Reports other than
+ * delivered / undelivered / failed (queued, sent) change nothing. Returns whether a notice changed. */
+export async function recordDeliveryReport(noticeId: string, report: { messageSid: string; status: string; errorCode?: string | null }): Promise<boolean> {
+  const delivery = REPORTS[report.status];
+  if (!delivery || !isUuid(noticeId) || !report.messageSid) return false;
+  const [row] = await db
+    .update(notices)
+    .set({ delivery, deliveryError: delivery === 'delivered' ? null : report.errorCode ? `error ${report.errorCode}`.slice(0, 100) : null, deliveryAt: new Date() })
+    .where(and(eq(notices.id, noticeId), eq(notices.channel, 'sms'), eq(notices.providerId, report.messageSid)))
+    .returning({ id: notices.id });
+  return Boolean(row);
 }
 
 /** Tries a failed notice again by hand, whatever its count of attempts. */
@@ -193,7 +332,8 @@ export async function sweepReadyTickets(): Promise<number> {
         eq(counterSettings.autoReadyNotice, true),
         gte(tickets.updatedAt, sql`coalesce(${counterSettings.autoReadySince}, now())`),
         isNull(notices.id),
-        ne(sql`coalesce(${customers.email}, '')`, ''),
+        // Reachable somehow: the preference and the shop's texts decide in queueReady.
+        or(ne(sql`coalesce(${customers.email}, '')`, ''), ne(sql`coalesce(${customers.phone}, '')`, '')),
       ),
     );
   let sent = 0;

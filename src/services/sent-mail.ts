@@ -15,6 +15,8 @@ export interface SentMessage {
   id: string;
   at: string;
   kind: SentMailKind;
+  /** e-mail, or a text message */
+  channel: 'email' | 'sms';
   to: string;
   subject: string;
   /** the text as the capture saved it; null when the capture no longer holds it */
@@ -50,6 +52,7 @@ export async function listSentMail(shopId: string, captureDir: string, limit = 5
     .where(eq(sentMail.shopId, shopId))
     .orderBy(desc(sentMail.sentAt))
     .limit(limit);
-  const texts = await capturedTexts(captureDir, new Set(rows.map((r) => r.messageId)));
-  return rows.map((r) => ({ id: r.id, at: r.sentAt.toISOString(), kind: r.kind, to: r.to, subject: r.subject, text: texts.get(r.messageId) ?? null }));
+  const texts = await capturedTexts(captureDir, new Set(rows.filter((r) => r.channel === 'email').map((r) => r.messageId)));
+  // A text's words are kept on its row: the mail capture never saw it.
+  return rows.map((r) => ({ id: r.id, at: r.sentAt.toISOString(), kind: r.kind, channel: r.channel, to: r.to, subject: r.subject, text: r.channel === 'sms' ? r.body : (texts.get(r.messageId) ?? null) }));
 }

@@ -11,6 +11,7 @@ import type { TestProject } from 'vitest/node';
 import { buildIfNeeded } from '../../scripts/build-if-needed.mjs';
 import { startMailCapture } from '../../scripts/mail-capture.mjs';
 import { startLocalPayments } from '../../scripts/payments-fake.mjs';
+import { startLocalSms } from '../../scripts/sms-fake.mjs';
 import { createServerDatabase } from '../db/server-database';
 
 declare module 'vitest' {
@@ -19,6 +20,9 @@ declare module 'vitest' {
     dataDir: string;
     mailDir: string;
     paymentsEnv: { PAYMENTS_API_KEY: string; PAYMENTS_API_BASE: string; PAYMENTS_WEBHOOK_SECRET: string };
+    /** the local SMS fake: its address (GET /messages lists what it was asked to send) and the app's SMS_* settings */
+    smsBase: string;
+    smsEnv: { SMS_ACCOUNT_SID: string; SMS_AUTH_TOKEN: string; SMS_FROM: string; SMS_API_BASE: string };
   }
 }
 
@@ -62,6 +66,7 @@ export default async function setup(project: TestProject) {
   const databaseUrl = process.env.TEST_DATABASE_URL ? await createServerDatabase(process.env.TEST_DATABASE_URL, `cw_http_${Date.now().toString(36)}`) : undefined;
   const capture = await startMailCapture({ dir: mailDir, port: 0, quiet: true });
   const payments = await startLocalPayments({ appUrl: `http://127.0.0.1:${port}`, port: 0, quiet: true });
+  const sms = await startLocalSms({ port: 0, quiet: true });
   server = spawn('node', [`${outDir}/server/entry.mjs`], {
     env: {
       ...process.env,
@@ -73,6 +78,7 @@ export default async function setup(project: TestProject) {
       SMTP_PORT: String(capture.port),
       MAIL_CAPTURE_DIR: mailDir,
       ...payments.env,
+      ...sms.env,
       // The notice timer ticks fast so automatic ready notices and retries show within a test.
       NOTICE_TICK_SECONDS: '1',
       // As behind one reverse proxy: tests give each would-be client its own X-Forwarded-For address,
@@ -94,10 +100,13 @@ export default async function setup(project: TestProject) {
   project.provide('dataDir', dataDir);
   project.provide('mailDir', mailDir);
   project.provide('paymentsEnv', payments.env);
+  project.provide('smsBase', sms.base);
+  project.provide('smsEnv', sms.env);
   return async () => {
     server?.kill('SIGTERM');
     await capture.close();
     await payments.close();
+    await sms.close();
     await new Promise((r) => setTimeout(r, 300));
     rmSync(dataDir, { recursive: true, force: true });
   };

@@ -2,6 +2,7 @@
 import { sql, type SQL } from 'drizzle-orm';
 import { pgTable, text, timestamp, uuid, index } from 'drizzle-orm/pg-core';
 import { createSelectSchema } from 'drizzle-zod';
+import { CONTACT_PREFERENCES } from '../../lib/contact-channels';
 import { organization } from './auth';
 
 /** Customers, each belonging to one shop. */
@@ -14,6 +15,8 @@ export const customers = pgTable(
     phone: text('phone'),
     email: text('email'),
     notes: text('notes'),
+    /** how the customer wants notices and pay links: e-mail, text message, or both */
+    contactBy: text('contact_by', { enum: CONTACT_PREFERENCES }).notNull().default('email'),
     /** the phone's digits alone, so "555 0101", "(555) 0101" and "5550101" are found alike */
     phoneDigits: text('phone_digits').generatedAlwaysAs((): SQL => sql`regexp_replace(coalesce(${customers.phone}, ''), '[^0-9]', '', 'g')`),
     /** set when the customer asked to be forgotten: personal details cleared, money records kept */

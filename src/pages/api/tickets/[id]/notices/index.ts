@@ -2,7 +2,7 @@
 import type { APIRoute } from 'astro';
 import { guard, readBody, run } from '@/lib/api';
 import { noticeInput } from '@/lib/counter-request';
-import { listNotices, resendReadyNotice, sendReadyNotice } from '@/services/notices';
+import { listNotices, resendReadyNotice, sendPayLink, sendReadyNotice } from '@/services/notices';
 
 export const prerender = false;
 
@@ -13,11 +13,13 @@ export const GET: APIRoute = async ({ locals, params }) => {
   return run(() => listNotices(actor, params.id ?? ''));
 };
 
-/** Sends the ready notice now, or (`again: true`) once more after it has gone. */
+/** Sends the ready notice now, or (`again: true`) once more after it has gone; or the open pay link by e-mail or text. */
 export const POST: APIRoute = async ({ locals, request, params }) => {
   const actor = guard(locals, ['notices', 'send']);
   if (actor instanceof Response) return actor;
   const input = await readBody(request, noticeInput);
   if (input instanceof Response) return input;
-  return run(() => (input.again ? resendReadyNotice(actor, params.id ?? '') : sendReadyNotice(actor, params.id ?? '')), 201);
+  const id = params.id ?? '';
+  if (input.kind === 'pay-link') return run(() => sendPayLink(actor, id, input.channel), 201);
+  return run(() => (input.again ? resendReadyNotice(actor, id) : sendReadyNotice(actor, id)), 201);
 };
