@@ -1,4 +1,5 @@
 // The shapes the bench's API routes answer with, for the islands to type their queries.
+import type { ContactPreference } from './contact-channels';
 import type { ExistingFinish } from './existing-finish';
 import type { GarmentStep } from './garment-steps';
 import type { Scale } from './bench-requests';
@@ -51,6 +52,8 @@ export interface CustomerCard {
   phone?: string | null;
   email?: string | null;
   notes?: string | null;
+  /** how notices reach them (only with the contact details) */
+  contactBy?: ContactPreference;
 }
 
 /** A ticket with its customer and garments. */

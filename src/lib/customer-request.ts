@@ -3,6 +3,7 @@
 // islands import it.
 import { z } from 'zod';
 import { text } from './text';
+import { CONTACT_PREFERENCES } from './contact-channels';
 
 const blankToNull = (v: string | null | undefined) => (v === '' || v === undefined ? null : v);
 const optionalText = (max: number, message: string) => z.union([text().trim().max(max, message), z.null()]).optional().transform(blankToNull);
@@ -16,12 +17,21 @@ export const customerFields = z.object({
     .optional()
     .transform(blankToNull),
   notes: optionalText(2000, 'Keep the notes under 2000 characters.'),
+  /** how notices and pay links reach them; left out, by e-mail */
+  contactBy: z.enum(CONTACT_PREFERENCES, { error: 'Choose e-mail, text message or both.' }).optional(),
 });
 
-/** A new customer (intake, POST /api/customers): the name is needed, the rest may be left out. */
-export const newCustomer = customerFields;
+/** The message when texts are asked for without a number to send them to. */
+export const TEXT_NEEDS_PHONE = 'A text message needs a phone number: add one, or choose e-mail.';
 
-/** The body of PATCH /api/customers/[id]: any of name, phone, e-mail, notes; a field left out is kept. */
+/** A new customer (intake, POST /api/customers): the name is needed, the rest may be left out;
+ * texts need a phone number. */
+export const newCustomer = customerFields.superRefine((c, ctx) => {
+  if ((c.contactBy === 'text' || c.contactBy === 'both') && !c.phone) ctx.addIssue({ code: 'custom', path: ['contactBy'], message: TEXT_NEEDS_PHONE });
+});
+
+/** The body of PATCH /api/customers/[id]: any of name, phone, e-mail, notes, contact preference; a
+ * field left out is kept (the service checks texts against the phone as it will stand). */
 export const customerPatch = customerFields.partial();
 
 /** A new customer once checked. */

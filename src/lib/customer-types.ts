@@ -1,4 +1,5 @@
 // The shapes the customers routes answer with, for the islands to type their queries.
+import type { ContactPreference } from './contact-channels';
 import type { AuditEntry } from './bench-types';
 import type { GarmentStep } from './garment-steps';
 import type { Finish, Leg } from './measurement-request';
@@ -21,6 +22,8 @@ export interface CustomerDetails {
   phone: string | null;
   email: string | null;
   notes: string | null;
+  /** how notices and pay links reach them */
+  contactBy: ContactPreference;
   erasedAt: string | null;
   createdAt: string;
 }

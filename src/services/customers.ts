@@ -4,7 +4,7 @@ import { and, asc, desc, eq, inArray, isNull, or, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { auditEvents, customers, files, garments, notices, payments, refunds, sentMail, tickets, type Customer } from '@/db/schema';
 import type { Actor } from '@/lib/api';
-import { phoneDigits, type CustomerPatch, type NewCustomer } from '@/lib/customer-request';
+import { phoneDigits, TEXT_NEEDS_PHONE, type CustomerPatch, type NewCustomer } from '@/lib/customer-request';
 import type { CustomerDetails, CustomerFile, CustomerHit } from '@/lib/customer-types';
 import { fileStorage } from '@/lib/storage';
 import { can } from '@/lib/roles';
@@ -78,14 +78,19 @@ export async function getCustomer(actor: Actor, id: string): Promise<Customer> {
   return row;
 }
 
-/** Changes a customer's name, phone, e-mail or notes; the old and new values are audited. */
+/** Changes a customer's name, phone, e-mail, notes or contact preference; the old and new values are
+ * audited; texts need a phone number (422). */
 export async function updateCustomer(actor: Actor, id: string, patch: CustomerPatch): Promise<Customer> {
   const was = await getCustomer(actor, id);
   if (was.erasedAt) throw new ServiceError(409, 'This customer asked to be forgotten: their details cannot be filled in again.');
   const changes: Record<string, { old: unknown; new: unknown }> = {};
-  for (const key of ['name', 'phone', 'email', 'notes'] as const) {
+  for (const key of ['name', 'phone', 'email', 'notes', 'contactBy'] as const) {
     if (patch[key] !== undefined && patch[key] !== was[key]) changes[key] = { old: was[key], new: patch[key] };
   }
+  const contactBy = patch.contactBy ?? was.contactBy;
+  const phone = patch.phone !== undefined ? patch.phone : was.phone;
+  // Only a change to either is checked: an edit of the notes never trips on an older record.
+  if ((changes.contactBy || changes.phone) && contactBy !== 'email' && !phone?.trim()) throw new ServiceError(422, TEXT_NEEDS_PHONE);
   if (Object.keys(changes).length === 0) return was;
   return db.transaction(async (tx) => {
     const [row] = await tx
@@ -100,7 +105,7 @@ export async function updateCustomer(actor: Actor, id: string, patch: CustomerPa
 }
 
 function details(c: Customer): CustomerDetails {
-  return { id: c.id, name: c.name, phone: c.phone, email: c.email, notes: c.notes, erasedAt: c.erasedAt?.toISOString() ?? null, createdAt: c.createdAt.toISOString() };
+  return { id: c.id, name: c.name, phone: c.phone, email: c.email, notes: c.notes, contactBy: c.contactBy, erasedAt: c.erasedAt?.toISOString() ?? null, createdAt: c.createdAt.toISOString() };
 }
 
 /** The customers screen's view of one customer: details, every ticket with its garments, payments
@@ -190,7 +195,7 @@ export async function eraseCustomer(actor: Actor, id: string): Promise<CustomerD
     }
     const [row] = await tx
       .update(customers)
-      .set({ name: ERASED_NAME, phone: null, email: null, notes: null, erasedAt: new Date() })
+      .set({ name: ERASED_NAME, phone: null, email: null, notes: null, contactBy: 'email', erasedAt: new Date() })
       .where(and(eq(customers.id, c.id), eq(customers.shopId, actor.shopId)))
       .returning();
     await audit(tx, actor.shopId, actor.userId, 'customer.erased', c.id, { tickets: ticketIds.length, photos: photos.length });

@@ -1,5 +1,6 @@
 // Garments on the bench: the queue, one garment's page, adding and editing them, and moving one
 // step along. A ticket's status follows its least advanced garment.
+import type { ContactPreference } from '@/lib/contact-channels';
 import { and, asc, eq, inArray, isNotNull, isNull, or } from 'drizzle-orm';
 import type { z } from 'zod';
 import { db, type Db } from '@/db';
@@ -30,9 +31,9 @@ export function garmentVisibleTo(actor: Actor) {
 
 /** The customer as a ticket or garment shows them: contact details (e-mail, phone, notes) only to
  * roles that may read customers; an apprentice works the garment, never calls its owner. */
-export function customerCard(actor: Pick<Actor, 'role'>, c: { id: string; name: string; phone: string | null; email: string | null; notes: string | null }): CustomerCard {
+export function customerCard(actor: Pick<Actor, 'role'>, c: { id: string; name: string; phone: string | null; email: string | null; notes: string | null; contactBy?: ContactPreference }): CustomerCard {
   if (!can(actor.role, ['customers', 'read'])) return { id: c.id, name: c.name };
-  return { id: c.id, name: c.name, phone: c.phone, email: c.email, notes: c.notes };
+  return { id: c.id, name: c.name, phone: c.phone, email: c.email, notes: c.notes, contactBy: c.contactBy ?? 'email' };
 }
 
 /** Sets a ticket's assignee to the person its first garment given to someone is given to (null

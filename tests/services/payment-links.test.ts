@@ -12,7 +12,7 @@ const fake = await vi.hoisted(async () => {
   // The webhook goes nowhere (port 9): these tests look at the links, not at recording payments.
   return startPaymentsFake({ port: 0, apiKey: 'sk_test_links_only', webhookSecret: 'whsec_links_only', webhookUrl: 'http://127.0.0.1:9/api/payments/webhook', quiet: true });
 });
-vi.mock('astro:env/server', () => ({ BODY_IDLE_SECONDS: 20, NOTICE_LEASE_SECONDS: 180, PAYMENTS_API_KEY: 'sk_test_links_only', PAYMENTS_API_BASE: fake.base, PAYMENTS_WEBHOOK_SECRET: 'whsec_links_only' }));
+vi.mock('astro:env/server', () => ({ BODY_IDLE_SECONDS: 20, NOTICE_LEASE_SECONDS: 180, PAYMENTS_API_KEY: 'sk_test_links_only', PAYMENTS_API_BASE: fake.base, PAYMENTS_WEBHOOK_SECRET: 'whsec_links_only', SMS_ACCOUNT_SID: undefined, SMS_AUTH_TOKEN: undefined, SMS_FROM: undefined, SMS_API_BASE: undefined, BETTER_AUTH_URL: 'http://localhost:4321' }));
 vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');

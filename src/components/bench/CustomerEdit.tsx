@@ -3,6 +3,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useForm, type Resolver } from 'react-hook-form';
 import type { z } from 'zod';
 import { Field, FormMessage, SubmitButton } from '@/components/Field';
+import { ContactByField } from '@/components/customers/ContactByField';
 import { customerPatch } from '@/lib/customer-request';
 import type { CustomerCard } from '@/lib/bench-types';
 import { ApiError, fetchJson } from '@/lib/fetch-json';
@@ -11,12 +12,12 @@ type Form = z.input<typeof customerPatch>;
 type Patch = z.output<typeof customerPatch>;
 const resolver = zodResolver(customerPatch) as unknown as Resolver<Form, unknown, Patch>;
 
-/** Change a customer's name, phone, e-mail or notes. */
+/** Change a customer's name, phone, e-mail, notes or how notices reach them. */
 export function CustomerEdit({ customer, onDone }: { customer: CustomerCard; onDone: () => void }) {
   const client = useQueryClient();
   const { register, handleSubmit, formState, setError } = useForm<Form, unknown, Patch>({
     resolver,
-    defaultValues: { name: customer.name, phone: customer.phone ?? '', email: customer.email ?? '', notes: customer.notes ?? '' },
+    defaultValues: { name: customer.name, phone: customer.phone ?? '', email: customer.email ?? '', notes: customer.notes ?? '', contactBy: customer.contactBy ?? 'email' },
   });
   const save = useMutation({
     mutationFn: (body: Patch) => fetchJson(`/api/customers/${customer.id}`, { method: 'PATCH', body }),
@@ -36,6 +37,7 @@ export function CustomerEdit({ customer, onDone }: { customer: CustomerCard; onD
         <Field label="Phone" type="tel" registration={register('phone')} error={e.phone} id="cust-phone" autoComplete="off" />
         <Field label="E-mail" type="email" registration={register('email')} error={e.email} id="cust-email" autoComplete="off" />
         <Field label="Notes" registration={register('notes')} error={e.notes} id="cust-notes" autoComplete="off" />
+        <ContactByField id="cust-contact-by" registration={register('contactBy')} error={e.contactBy} />
       </div>
       {save.error && <FormMessage kind="error">Not saved: {save.error.message}</FormMessage>}
       <div className="flex flex-wrap gap-3">

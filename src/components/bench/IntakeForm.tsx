@@ -7,6 +7,7 @@ import { withQuery } from '@/components/WithQuery';
 import { intakeRequest, type Intake, type IntakeInput } from '@/lib/bench-requests';
 import type { CustomerHit } from '@/lib/customer-types';
 import { CustomerSearch } from '@/components/customers/CustomerSearch';
+import { ContactByField } from '@/components/customers/ContactByField';
 import { SameAsLastTime, usePreviousFittings } from '@/components/customers/SameAsLastTime';
 import { ApiError, fetchJson } from '@/lib/fetch-json';
 import { DEFAULT_EXISTING_FINISH } from '@/lib/existing-finish';
@@ -76,6 +77,7 @@ function Intake({ canPrice = false }: { canPrice?: boolean }) {
             <Field label="Phone" type="tel" registration={register('customer.phone')} error={e.customer?.phone} id="c-phone" autoComplete="off" />
             <Field label="E-mail" type="email" registration={register('customer.email')} error={e.customer?.email} id="c-email" autoComplete="off" />
             <Field label="Notes" registration={register('customer.notes')} error={e.customer?.notes} id="c-notes" autoComplete="off" />
+            <ContactByField id="c-contact-by" registration={register('customer.contactBy')} error={e.customer?.contactBy} />
           </div>
         )}
       </fieldset>

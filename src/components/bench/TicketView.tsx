@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { PREFERENCE_LABEL } from '@/lib/contact-channels';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useForm, useWatch, type Resolver } from 'react-hook-form';
@@ -107,6 +108,7 @@ function Ticket({ ticketId, shopName, canAdvance, canPickup, canAddGarment, canE
             <strong>{t.customer.name}</strong>
             {t.customer.phone && <> · {t.customer.phone}</>}
             {t.customer.email && <> · {t.customer.email}</>}
+            {t.customer.contactBy && <span className="text-muted"> · notices by {PREFERENCE_LABEL[t.customer.contactBy].toLowerCase()}</span>}
           </p>
         ) : (
           <p className="text-lg text-muted">No customer recorded.</p>

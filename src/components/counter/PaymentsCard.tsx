@@ -3,6 +3,7 @@
 // back, card terminal, online refund through the payment service, or kept on the customer); and
 // an online payment link.
 import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { FormMessage } from '@/components/Field';
@@ -90,19 +91,65 @@ function SettleCredit({ s }: { s: CounterSummary }) {
   );
 }
 
-function PayLink({ s }: { s: CounterSummary }) {
+/** Copies the link to the clipboard; says so, or why it could not (an older browser, a page not served over https). */
+function CopyLink({ url }: { url: string }) {
+  const [copied, setCopied] = useState<'yes' | 'no' | null>(null);
+  const copy = async () => {
+    try {
+      await navigator.clipboard.writeText(url);
+      setCopied('yes');
+    } catch {
+      setCopied('no');
+    }
+  };
+  return (
+    <>
+      <button type="button" onClick={() => void copy()} className="min-h-11 rounded bg-accent px-4 py-2 font-semibold text-white">
+        Copy link
+      </button>
+      {copied === 'yes' && <FormMessage kind="ok">Link copied: paste it where the customer will read it.</FormMessage>}
+      {copied === 'no' && <FormMessage kind="error">This browser would not copy: open the pay page and copy its address instead.</FormMessage>}
+    </>
+  );
+}
+
+/** The open pay link as buttons (copy, send by e-mail, send by text), never as the service's raw
+ * address with its session id; or the button that makes one. */
+function PayLink({ s, canSend }: { s: CounterSummary; canSend: boolean }) {
   const make = useCounterAction(s.ticket.id, () => post(s.ticket.id, 'payments/link'));
+  const send = useCounterAction(s.ticket.id, (channel: 'email' | 'sms') => post<{ channel: string; to: string }>(s.ticket.id, 'notices', { kind: 'pay-link', channel }));
   const open = s.link?.status === 'open' && s.link.amountMinor === s.due;
+  const t = s.ticket;
   return (
     <div className="mt-4 border-t border-rule pt-4">
       <h3 className="font-extrabold">Pay ahead online</h3>
       {open ? (
-        <p className="mt-1 break-all">
-          Link for <Money minor={s.link!.amountMinor} currency={s.currency} />:{' '}
-          <a href={s.link!.url} className="font-semibold text-accent" data-testid="pay-link">
-            {s.link!.url}
-          </a>
-        </p>
+        <>
+          <p className="mt-1">
+            A pay link for <Money minor={s.link!.amountMinor} currency={s.currency} className="font-semibold" /> is open.{' '}
+            <a href={s.link!.url} target="_blank" rel="noopener" className="font-semibold text-accent" data-testid="pay-link">
+              Open the pay page
+            </a>
+          </p>
+          <div className="mt-2 flex flex-wrap items-center gap-2">
+            <CopyLink url={s.link!.url} />
+            {canSend && (
+              <>
+                <button type="button" onClick={() => send.mutate('email')} disabled={send.isPending || !t.customerEmail} className="min-h-11 rounded border-2 border-accent px-4 py-2 font-semibold text-accent disabled:opacity-50">
+                  Send by e-mail
+                </button>
+                <button type="button" onClick={() => send.mutate('sms')} disabled={send.isPending || !t.customerPhone || !s.textsReady} className="min-h-11 rounded border-2 border-accent px-4 py-2 font-semibold text-accent disabled:opacity-50">
+                  Send by text
+                </button>
+              </>
+            )}
+          </div>
+          {canSend && !s.textsReady && <p className="text-base text-muted">Text messages are not set up for this shop: send the link by e-mail or copy it.</p>}
+          {canSend && s.textsReady && !t.customerPhone && <p className="text-base text-muted">Not by text: no phone number for this customer.</p>}
+          {canSend && !t.customerEmail && <p className="text-base text-muted">Not by e-mail: no e-mail address for this customer.</p>}
+          {send.isSuccess && <FormMessage kind="ok">Pay link sent by {send.data.channel === 'sms' ? 'text' : 'e-mail'} to {send.data.to}.</FormMessage>}
+          {send.error && <FormMessage kind="error">{send.error.message}</FormMessage>}
+        </>
       ) : (
         <button type="button" onClick={() => make.mutate(undefined)} disabled={make.isPending} className="mt-2 min-h-11 rounded border-2 border-accent px-4 py-2 font-semibold text-accent disabled:opacity-50">
           Make a payment link for the balance
@@ -139,7 +186,7 @@ function PaymentReceipt({ s, paymentId, canSend }: { s: CounterSummary; paymentI
 }
 
 /** Total, paid and due (or the credit owed) in large figures, the money on record, and the next step. */
-export function PaymentsCard({ s, canTake }: { s: CounterSummary; canTake: boolean }) {
+export function PaymentsCard({ s, canTake, canSend = false }: { s: CounterSummary; canTake: boolean; canSend?: boolean }) {
   const settled = s.total > 0 && s.due === 0 && s.credit === 0;
   const open = s.ticket.status !== 'collected';
   return (
@@ -208,7 +255,7 @@ export function PaymentsCard({ s, canTake }: { s: CounterSummary; canTake: boole
       {canTake && open && s.due > 0 && (
         <>
           <TakePayment key={`${s.due}-${s.payments.length}`} s={s} />
-          <PayLink s={s} />
+          <PayLink s={s} canSend={canSend} />
         </>
       )}
     </section>

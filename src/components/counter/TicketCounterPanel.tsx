@@ -80,7 +80,7 @@ function Panel({ ticketId, shopName, role: given, withTicketHeader = true }: Pro
         {s.ticket.dueOn && <p className="text-xl">Due <DueBadge dueOn={s.ticket.dueOn} /></p>}
       </div>
       <PriceLinesCard s={s} canChange={can(role, ['prices', 'adjust']) && !collected} />
-      <PaymentsCard s={s} canTake={can(role, ['payments', 'take'])} />
+      <PaymentsCard s={s} canTake={can(role, ['payments', 'take'])} canSend={can(role, ['notices', 'send'])} />
       <NoticesCard s={s} canSend={can(role, ['notices', 'send'])} />
       <section aria-labelledby="hand-h" className="rounded border-2 border-rule bg-card p-4">
         <h2 id="hand-h" className="text-xl font-extrabold">

@@ -5,10 +5,11 @@ import { CustomerEdit } from '@/components/bench/CustomerEdit';
 import { useStepLabel } from '@/components/bench/use-bench';
 import type { CustomerFile } from '@/lib/customer-types';
 import { dateTimeText } from '@/lib/date-text';
+import { PREFERENCE_LABEL } from '@/lib/contact-channels';
 import { fetchJson } from '@/lib/fetch-json';
 import { formatMoney, isCurrency } from '@/lib/pricing/money';
 
-const FIELD_NAMES: Record<string, string> = { name: 'name', phone: 'phone', email: 'e-mail', notes: 'notes' };
+const FIELD_NAMES: Record<string, string> = { name: 'name', phone: 'phone', email: 'e-mail', notes: 'notes', contactBy: 'notices by' };
 
 /** One line of the details' history in words: who changed which fields, with old → new while kept. */
 function historyText(action: string, detail: Record<string, unknown>): string {
@@ -73,6 +74,7 @@ export function CustomerFileView({ id, canEdit, canErase }: { id: string; canEdi
             <dt className="font-semibold">Phone</dt><dd className="[overflow-wrap:anywhere]">{c.phone || '—'}</dd>
             <dt className="font-semibold">E-mail</dt><dd className="[overflow-wrap:anywhere]">{c.email || '—'}</dd>
             <dt className="font-semibold">Notes</dt><dd className="[overflow-wrap:anywhere]">{c.notes || '—'}</dd>
+            <dt className="font-semibold">Notices by</dt><dd data-testid="contact-by">{PREFERENCE_LABEL[c.contactBy]}</dd>
           </dl>
         )}
         {canEdit && !erased && (editing ? (
