@@ -11,7 +11,8 @@ import type { Actor } from '@/lib/api';
 import type { paymentInput } from '@/lib/counter-request';
 import { paymentClient, verifyWebhook, webhookSecret } from '@/lib/payment-service';
 import type { ClaimSlipData } from '@/lib/claim-slip/types';
-import { todayIso } from '@/lib/due-date';
+import { dayOf } from '@/lib/overview/shop-days';
+import { shopTimeZone } from '../shop-time-zone';
 import { audit } from '../audit';
 import { ServiceError } from '../errors';
 import { lockTicket, shopTicket, withTicketLock } from '../ticket-core';
@@ -295,8 +296,8 @@ export async function claimSlipData(actor: Actor, ticketId: string): Promise<Cla
     hours: settings.hours,
     ticketNumber: summary.ticket.number,
     customerName: summary.ticket.customerName,
-    // The calendar day the screens read it on (their dates are the device's own calendar).
-    receivedOn: todayIso(ticket.createdAt),
+    // The shop's calendar day (shop_settings.time_zone), not the server's.
+    receivedOn: dayOf(ticket.createdAt, (await shopTimeZone(actor.shopId)).timeZone),
     dueOn: ticket.dueOn,
     garments: items.map((g) => g.description?.trim() || g.kind),
     lines: summary.lines.filter((l) => !l.voidedAt).map((l) => ({ label: l.reason ? `${l.label} (${l.reason})` : l.label, amountMinor: l.amountMinor })),

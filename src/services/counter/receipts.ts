@@ -12,6 +12,7 @@ import type { ReceiptData } from '@/lib/receipt/types';
 import { eq } from 'drizzle-orm';
 import { audit } from '../audit';
 import { ServiceError } from '../errors';
+import { shopTimeZone } from '../shop-time-zone';
 import { isUuid, shopTicket } from '../ticket-core';
 import { counterSettingsOf } from './prices';
 import { summaryOf, type CounterSummary } from './summary';
@@ -29,23 +30,25 @@ async function paymentOf(actor: Pick<Actor, 'shopId'>, ticketId: string, payment
   return { summary, payment };
 }
 
-function receiptOf(shop: { name: string; location: string; hours: string }, summary: CounterSummary, payment: CounterSummary['payments'][number], now: Date): ReceiptData {
+function receiptOf(shop: { name: string; location: string; hours: string; timeZone: string }, summary: CounterSummary, payment: CounterSummary['payments'][number], now: Date): ReceiptData {
+  // Printed on the server: every moment in the shop's zone, not the server's.
+  const when = (at: Date) => dateTimeText(at, shop.timeZone);
   return {
     shopName: shop.name,
     location: shop.location,
     hours: shop.hours,
     ticketNumber: ticketLabel(summary.ticket.number, shop.name),
     customerName: summary.ticket.customerName,
-    printedAt: dateTimeText(now),
-    payment: { how: PAID_HOW[payment.method], at: dateTimeText(payment.at), amountMinor: payment.amountMinor, takenBy: payment.takenByName },
+    printedAt: when(now),
+    payment: { how: PAID_HOW[payment.method], at: when(payment.at), amountMinor: payment.amountMinor, takenBy: payment.takenByName },
     lines: summary.lines.filter((l) => !l.voidedAt).map((l) => ({ label: l.reason ? `${l.label} (${l.reason})` : l.label, amountMinor: l.amountMinor })),
     currency: summary.currency,
     total: summary.total,
-    payments: summary.payments.map((p) => ({ how: PAID_HOW[p.method], at: dateTimeText(p.at), amountMinor: p.amountMinor })),
+    payments: summary.payments.map((p) => ({ how: PAID_HOW[p.method], at: when(p.at), amountMinor: p.amountMinor })),
     // A failed refund gave nothing back; a pending one counts, as in the balance.
     refunds: summary.refunds
       .filter((r) => r.status !== 'failed')
-      .map((r) => ({ how: r.status === 'pending' ? `${GIVEN_BACK[r.method]} (on its way)` : GIVEN_BACK[r.method], at: dateTimeText(r.at), amountMinor: r.amountMinor })),
+      .map((r) => ({ how: r.status === 'pending' ? `${GIVEN_BACK[r.method]} (on its way)` : GIVEN_BACK[r.method], at: when(r.at), amountMinor: r.amountMinor })),
     paid: summary.paid,
     refunded: summary.refunded,
     due: summary.due,
@@ -58,7 +61,8 @@ export async function receiptData(actor: Pick<Actor, 'shopId' | 'shopName'>, tic
   const { summary, payment } = await paymentOf(actor, ticketId, paymentId);
   const settings = await counterSettingsOf(actor.shopId);
   const [shop] = await db.select({ name: organization.name }).from(organization).where(eq(organization.id, actor.shopId));
-  return receiptOf({ name: shop?.name ?? actor.shopName, location: settings.location, hours: settings.hours }, summary, payment, now);
+  const { timeZone } = await shopTimeZone(actor.shopId);
+  return receiptOf({ name: shop?.name ?? actor.shopName, location: settings.location, hours: settings.hours, timeZone }, summary, payment, now);
 }
 
 /** The receipt as PDF bytes with its file name. */
