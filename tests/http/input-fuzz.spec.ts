@@ -73,6 +73,7 @@ const SEEDS: Record<string, unknown> = {
   'PATCH tickets/[id]': { status: 'marked' },
   'POST tickets/[id]/garments': { description: 'Fuzz second pair', existingFinish: 'cuff' },
   'POST tickets/[id]/notices': { kind: 'ready' },
+  'POST sms/status': { MessageSid: 'SM0', MessageStatus: 'delivered' },
   'POST tickets/[id]/payments': { method: 'cash', amountMinor: 100 },
   'POST tickets/[id]/price-lines': { source: 'adjust', label: 'Fuzz', amountMinor: 100, reason: 'fuzzing' },
   'POST tickets/[id]/price-lines/auto': { rush: false },

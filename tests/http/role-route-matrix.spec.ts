@@ -605,6 +605,13 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       expect: all(400),
     },
   },
+  'sms/status': {
+    POST: {
+      // Public by design (the SMS service calls it): without the service's signature, refused for all.
+      request: () => ({ path: '/api/sms/status?notice=00000000-0000-4000-8000-000000000000', body: { MessageSid: 'SM_forged', MessageStatus: 'delivered' } }),
+      expect: all(403),
+    },
+  },
   overview: {
     GET: {
       request: () => ({ path: '/api/overview?period=4w' }),
