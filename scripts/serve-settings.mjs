@@ -18,6 +18,10 @@ const schema = z
     PAYMENTS_API_KEY: z.string().optional(),
     PAYMENTS_WEBHOOK_SECRET: z.string().optional(),
     PAYMENTS_API_BASE: z.string().optional(),
+    SMS_ACCOUNT_SID: z.string().optional(),
+    SMS_AUTH_TOKEN: z.string().optional(),
+    SMS_FROM: z.string().optional(),
+    SMS_API_BASE: z.string().optional(),
   });
 
 /** Rules across settings, checked on the raw environment whatever the single settings say. */
@@ -30,6 +34,10 @@ function crossProblems(e) {
   if (Boolean(e.S3_ACCESS_KEY_ID) !== Boolean(e.S3_SECRET_ACCESS_KEY)) add('S3_SECRET_ACCESS_KEY', 'and S3_ACCESS_KEY_ID go together: set both, or neither');
   if (e.PAYMENTS_API_KEY && !e.PAYMENTS_WEBHOOK_SECRET) add('PAYMENTS_WEBHOOK_SECRET', 'is required with PAYMENTS_API_KEY: the signing secret of the payment webhook');
   if (e.PAYMENTS_API_BASE) add('PAYMENTS_API_BASE', 'points payments at a local fake: unset it in production');
+  // Texts are optional (without them notices go by e-mail, and the counter is told why); half set up is a mistake.
+  const sms = ['SMS_ACCOUNT_SID', 'SMS_AUTH_TOKEN', 'SMS_FROM'].filter((k) => e[k]);
+  if (sms.length > 0 && sms.length < 3) add(['SMS_ACCOUNT_SID', 'SMS_AUTH_TOKEN', 'SMS_FROM'].find((k) => !e[k]), 'goes with the other SMS settings: set SMS_ACCOUNT_SID, SMS_AUTH_TOKEN and SMS_FROM together, or none');
+  if (e.SMS_API_BASE) add('SMS_API_BASE', 'points text messages at a local fake: unset it in production');
   if (e.DATABASE_URL && e.STORAGE !== 's3') add('STORAGE', "should be 's3' with DATABASE_URL: photos on one server's disk are missing on the others");
   return out;
 }

@@ -39,10 +39,10 @@ function serve(env: Record<string, string | undefined>): { child: ChildProcess; 
 
 describe('npm run serve', () => {
   it('names every missing or unsafe setting on its own line and does not start', async () => {
-    const s = serve({ DATABASE_URL: 'postgres://x@127.0.0.1:1/x', SMTP_HOST: '127.0.0.1', STORAGE: 's3', PAYMENTS_API_BASE: 'http://127.0.0.1:9' });
+    const s = serve({ DATABASE_URL: 'postgres://x@127.0.0.1:1/x', SMTP_HOST: '127.0.0.1', STORAGE: 's3', PAYMENTS_API_BASE: 'http://127.0.0.1:9', SMS_ACCOUNT_SID: 'AC0', SMS_API_BASE: 'http://127.0.0.1:9' });
     expect(await s.exited).toBe(1);
     const lines = s.out();
-    for (const setting of ['BETTER_AUTH_URL', 'BETTER_AUTH_SECRET', 'SMTP_HOST', 'S3_BUCKET', 'PAYMENTS_API_BASE']) expect(lines).toMatch(new RegExp(`^  ${setting}: `, 'm'));
+    for (const setting of ['BETTER_AUTH_URL', 'BETTER_AUTH_SECRET', 'SMTP_HOST', 'S3_BUCKET', 'PAYMENTS_API_BASE', 'SMS_AUTH_TOKEN', 'SMS_API_BASE']) expect(lines).toMatch(new RegExp(`^  ${setting}: `, 'm'));
     expect(serveProblems({ BETTER_AUTH_URL: 'https://shop.example.com', SMTP_HOST: 'mail.example.com' })).toEqual([]);
   });
 
