@@ -263,16 +263,18 @@ export async function sendPayLink(actor: Actor, ticketId: string, channel: Chann
 const REPORTS: Record<string, (typeof DELIVERY_REPORTS)[number]> = { delivered: 'delivered', undelivered: 'undelivered', failed: 'failed' };
 
 /** Records a text's delivery report from the SMS service's status callback (its signature already
- * checked): only on the notice the callback's address names AND whose text the service says it
- * is, so a report can never land on another notice or another shop's. Reports other than
- * delivered / undelivered / failed (queued, sent) change nothing. Returns whether a notice changed. */
+ * checked): only on the text notice the callback's address names AND whose text the service says
+ * it is, so a report can never land on another notice or another shop's. A report may come before
+ * this server has written the service's id down (a fast phone, a slow database): then the id is
+ * written with it. Reports other than delivered / undelivered / failed (queued, sent) change
+ * nothing. Returns whether a notice changed. */
 export async function recordDeliveryReport(noticeId: string, report: { messageSid: string; status: string; errorCode?: string | null }): Promise<boolean> {
   const delivery = REPORTS[report.status];
   if (!delivery || !isUuid(noticeId) || !report.messageSid) return false;
   const [row] = await db
     .update(notices)
-    .set({ delivery, deliveryError: delivery === 'delivered' ? null : report.errorCode ? `error ${report.errorCode}`.slice(0, 100) : null, deliveryAt: new Date() })
-    .where(and(eq(notices.id, noticeId), eq(notices.channel, 'sms'), eq(notices.providerId, report.messageSid)))
+    .set({ providerId: report.messageSid, delivery, deliveryError: delivery === 'delivered' ? null : report.errorCode ? `error ${report.errorCode}`.slice(0, 100) : null, deliveryAt: new Date() })
+    .where(and(eq(notices.id, noticeId), eq(notices.channel, 'sms'), or(eq(notices.providerId, report.messageSid), isNull(notices.providerId))))
     .returning({ id: notices.id });
   return Boolean(row);
 }
@@ -332,8 +334,8 @@ export async function sweepReadyTickets(): Promise<number> {
         eq(counterSettings.autoReadyNotice, true),
         gte(tickets.updatedAt, sql`coalesce(${counterSettings.autoReadySince}, now())`),
         isNull(notices.id),
-        // Reachable somehow: the preference and the shop's texts decide in queueReady.
-        or(ne(sql`coalesce(${customers.email}, '')`, ''), ne(sql`coalesce(${customers.phone}, '')`, '')),
+        // Reachable by what they prefer: the shop's texts (and any fallback) are decided in queueReady.
+        or(ne(sql`coalesce(${customers.email}, '')`, ''), and(ne(sql`coalesce(${customers.phone}, '')`, ''), ne(customers.contactBy, 'email'))),
       ),
     );
   let sent = 0;

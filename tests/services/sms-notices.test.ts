@@ -253,4 +253,20 @@ describe('the status callback', () => {
     const junk = await callRoute(signedReport('not-an-id', { MessageSid: na.providerId!, MessageStatus: 'failed' }));
     expect([junk.status, await junk.json()]).toEqual([200, { received: true, recorded: false }]);
   });
+
+  it('takes a report that comes before the send is written down, on that text notice only', async () => {
+    const t = await readyTicket(a, { email: 'early@example.com', phone: '07700 900555', contactBy: 'both' });
+    // As the rows stand between the service's answer and this server writing its id down.
+    const [text] = await db.insert(notices).values({ shopId: a.shopId, ticketId: t.id, kind: 'ready', channel: 'sms', to: '07700 900555', subject: 's', body: 'b', status: 'queued', attempts: 1 }).returning();
+    const [email] = await db.insert(notices).values({ shopId: a.shopId, ticketId: t.id, kind: 'ready', channel: 'email', to: 'early@example.com', subject: 's', body: 'b', status: 'sent', attempts: 1 }).returning();
+    const onEmail = await callRoute(signedReport(email!.id, { MessageSid: 'SMearly000', MessageStatus: 'delivered' }));
+    expect(await onEmail.json()).toEqual({ received: true, recorded: false });
+    const early = await callRoute(signedReport(text!.id, { MessageSid: 'SMearly000', MessageStatus: 'delivered' }));
+    expect(await early.json()).toEqual({ received: true, recorded: true });
+    const [row] = await db.select().from(notices).where(eq(notices.id, text!.id));
+    expect([row!.providerId, row!.delivery]).toEqual(['SMearly000', 'delivered']);
+    // Once written down, another text's report no longer fits it.
+    const other = await callRoute(signedReport(text!.id, { MessageSid: 'SMother000', MessageStatus: 'failed' }));
+    expect(await other.json()).toEqual({ received: true, recorded: false });
+  });
 });
