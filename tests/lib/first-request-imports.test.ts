@@ -4,8 +4,9 @@
 import { build } from 'esbuild';
 import { describe, expect, it } from 'vitest';
 
-/** The packages the middleware's module graph imports, found by bundling it with esbuild. */
-async function packagesOfMiddleware(): Promise<Set<string>> {
+/** The packages the middleware's module graph imports, found by bundling it with esbuild
+ * (`loadedLater`: only through a dynamic import, so not loaded by the first request). */
+async function packagesOfMiddleware(loadedLater = false): Promise<Set<string>> {
   const result = await build({
     entryPoints: ['src/middleware.ts'],
     bundle: true,
@@ -27,7 +28,7 @@ async function packagesOfMiddleware(): Promise<Set<string>> {
   });
   const packages = new Set<string>();
   for (const input of Object.values(result.metafile.inputs)) {
-    for (const i of input.imports) if (i.external) packages.add(i.path);
+    for (const i of input.imports) if (i.external && (i.kind === 'dynamic-import') === loadedLater) packages.add(i.path);
   }
   return packages;
 }
@@ -40,5 +41,10 @@ describe('the first request', () => {
 
   it('never loads mathjs (half a second at start): the engine adds typed sums with fraction.js', async () => {
     expect(await packagesOfMiddleware()).not.toContain('mathjs');
+  });
+
+  it('loads the SMS SDK only when a text goes or a status report comes (a dynamic import)', async () => {
+    expect(await packagesOfMiddleware()).not.toContain('twilio');
+    expect(await packagesOfMiddleware(true)).toContain('twilio');
   });
 });

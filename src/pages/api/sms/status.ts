@@ -19,7 +19,7 @@ export const POST: APIRoute = async ({ request, url }) => {
     throw e;
   }
   const params = Object.fromEntries(new URLSearchParams(raw));
-  if (!verifyStatusCallback(request.headers.get('x-twilio-signature'), signedUrlOf(request.url), params)) {
+  if (!(await verifyStatusCallback(request.headers.get('x-twilio-signature'), signedUrlOf(request.url), params))) {
     return problem(403, 'The status report is not signed by the SMS service.');
   }
   const recorded = await recordDeliveryReport(url.searchParams.get('notice') ?? '', { messageSid: params.MessageSid ?? '', status: params.MessageStatus ?? '', errorCode: params.ErrorCode ?? null });
