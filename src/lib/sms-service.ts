@@ -4,6 +4,7 @@
 // token and checked here with the SDK's own validator. The SDK is loaded on first use, never at
 // start-up: the server's first answer does not wait for it (DEVELOPERS.md "Start-up").
 import type Twilio from 'twilio';
+import type RequestClient from 'twilio/lib/base/RequestClient';
 import { BETTER_AUTH_URL, SMS_ACCOUNT_SID, SMS_API_BASE, SMS_AUTH_TOKEN, SMS_FROM } from 'astro:env/server';
 
 /** How long one call to the service may take: well inside a notice's send lease (services/notices.ts). */
@@ -25,9 +26,9 @@ const loadSdk = (): Promise<Sdk> => (sdk ??= import('twilio').then((m) => (m as 
 // sends every request to SMS_API_BASE instead of the service's host, path and query unchanged.
 function baseAddressClient(twilio: Sdk, base: URL): Twilio.RequestClient {
   class BaseAddressClient extends twilio.RequestClient {
-    override request<T>(opts: Parameters<Twilio.RequestClient['request']>[0]) {
+    override request<T>(opts: RequestClient.RequestOptions<T>) {
       const to = new URL(opts.uri);
-      return super.request<T>({ ...opts, uri: new URL(to.pathname + to.search, base).href } as typeof opts);
+      return super.request<T>({ ...opts, uri: new URL(to.pathname + to.search, base).href });
     }
   }
   return new BaseAddressClient({ timeout: SMS_TIMEOUT_MS });
