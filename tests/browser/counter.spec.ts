@@ -115,7 +115,7 @@ describe('a ticket across the counter, from deposit to a paid pickup', () => {
     await expect(page.getByTestId('balance-due').textContent()).resolves.toBe('€0.00');
     await page.getByText('Paid in full.').waitFor();
     await page.getByText(/Paid by online:/).waitFor();
-    await page.getByText(/Ready notice to .*: Sent/).waitFor();
+    await page.getByText(/Ready notice by e-mail to .*: Sent/).waitFor();
     await page.getByText('sent by the shop setting', { exact: false }).waitFor();
     await page.getByRole('button', { name: 'Hand over and close the ticket' }).click();
     await page.getByText('Collected: the ticket is closed with its payment on record.').waitFor();

@@ -54,7 +54,7 @@ describe('a ready notice by text message', () => {
     await page.getByRole('button', { name: 'Change the customer’s details' }).click();
     await page.getByLabel('Text message', { exact: true }).check();
     await page.getByRole('button', { name: 'Save customer' }).click();
-    await page.getByText('notices by text message').waitFor();
+    await page.getByText('· notices by text message').waitFor();
 
     await page.goto(`/counter/${ticketId}`);
     await page.getByTestId('contact-preference').getByText('The customer wants notices by text message.').waitFor();

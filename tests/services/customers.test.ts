@@ -35,4 +35,16 @@ describe('customers', () => {
     await expect(updateCustomer(a.lead, theirs.id, { name: 'Renamed' })).rejects.toMatchObject({ status: 404 });
     expect((await getCustomer(b.lead, theirs.id)).name).toBe('Stays in B');
   });
+
+  it('keep how notices reach them (issue 14): texts need a phone number, kept or sent with it, and the change is audited', async () => {
+    const c = await createCustomer(a.counter, { name: 'Wenna Colley', email: 'wenna@example.com' });
+    expect(c.contactBy).toBe('email');
+    await expect(updateCustomer(a.counter, c.id, { contactBy: 'text' })).rejects.toMatchObject({ status: 422, message: 'A text message needs a phone number: add one, or choose e-mail.' });
+    const both = await updateCustomer(a.counter, c.id, { contactBy: 'both', phone: '07700 900200' });
+    expect([both.contactBy, both.phone]).toEqual(['both', '07700 900200']);
+    // Taking the phone away from a customer who wants texts is refused the same way.
+    await expect(updateCustomer(a.counter, c.id, { phone: null })).rejects.toMatchObject({ status: 422 });
+    const events = await db.select().from(auditEvents).where(and(eq(auditEvents.subject, c.id), eq(auditEvents.action, 'customer.changed')));
+    expect(events.map((e) => e.detail)).toEqual([{ phone: { old: null, new: '07700 900200' }, contactBy: { old: 'email', new: 'both' } }]);
+  });
 });
