@@ -71,7 +71,7 @@ export function NoticesCard({ s, canSend }: { s: CounterSummary; canSend: boolea
   const lastSequence = Math.max(0, ...ready.map((n) => n.sequence));
   const lastSent = hasReady && ready.filter((n) => n.sequence === lastSequence).every((n) => n.status === 'sent');
   const t = s.ticket;
-  const reach = reachLine(t.contactBy, t.customerEmail, t.customerPhone, s.textsReady);
+  const reach = reachLine(t.contactBy, t.customerEmail, t.customerPhone, s.textsReady === true);
   return (
     <section aria-labelledby="notices-h" className="rounded border-2 border-rule bg-card p-4">
       <h2 id="notices-h" className="text-xl font-extrabold">

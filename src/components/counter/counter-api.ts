@@ -11,12 +11,16 @@ export function useSummary(ticketId: string) {
   return useQuery({ queryKey: ['counter', ticketId], queryFn: () => fetchJson<CounterSummary>(`/api/tickets/${ticketId}/payments`) });
 }
 
-/** The ticket's notices; polled while one waits for a retry. */
+// A text's delivery report comes a moment after the send: looked for this long after it.
+const REPORT_WAIT_MS = 2 * 60_000;
+const awaitingReport = (n: Notice) => n.channel === 'sms' && n.status === 'sent' && !n.delivery && Date.now() - Date.parse(n.sentAt ?? '') < REPORT_WAIT_MS;
+
+/** The ticket's notices; polled while one waits for a retry or a text for its delivery report. */
 export function useNotices(ticketId: string) {
   return useQuery({
     queryKey: ['notices', ticketId],
     queryFn: () => fetchJson<Notice[]>(`/api/tickets/${ticketId}/notices`),
-    refetchInterval: (q) => (q.state.data?.some((n) => n.status !== 'sent') ? 5_000 : false),
+    refetchInterval: (q) => (q.state.data?.some((n) => n.status !== 'sent' || awaitingReport(n)) ? 5_000 : false),
   });
 }
 

@@ -1,7 +1,6 @@
 // What the counter shows of a ticket's money: its lines (voided ones too, struck through), the
 // payments and refunds with who took them, the balance or the credit owed, and the latest pay
 // link; read under the ticket's lock when the caller holds it.
-import { smsConfigured } from '@/lib/sms-service';
 import { and, asc, desc, eq, inArray, isNotNull, sql } from 'drizzle-orm';
 import { db, type Db } from '@/db';
 import { COUNTED_REFUND_STATUSES, customers, paymentLinks, payments, refunds, tickets, user, type Ticket } from '@/db/schema';
@@ -64,7 +63,6 @@ export async function summaryOf(ticket: Ticket, { currency }: Pick<CounterView, 
   const given = refundRows.map((r) => ({ ...r.r, byName: r.byName }));
   return {
     ticket: { id: ticket.id, number: ticket.number, status: ticket.status, dueOn: ticket.dueOn, customerId: ticket.customerId, customerName: customer?.name ?? null, customerEmail: customer?.email ?? null, customerPhone: customer?.phone ?? null, contactBy: customer?.contactBy ?? 'email' },
-    textsReady: smsConfigured(),
     currency,
     lines,
     ...balanceOf(lines, paid, given),

@@ -2,15 +2,16 @@
 import type { APIRoute } from 'astro';
 import { guard, readBody, run } from '@/lib/api';
 import { paymentInput } from '@/lib/counter-request';
+import { smsConfigured } from '@/lib/sms-service';
 import { counterSummary, takePayment } from '@/services/counter/payments';
 
 export const prerender = false;
 
-/** Lines, total, payments, balance due and the payment link. */
+/** Lines, total, payments, balance due and the payment link, and whether texts are set up. */
 export const GET: APIRoute = async ({ locals, params }) => {
   const actor = guard(locals, ['prices', 'read']);
   if (actor instanceof Response) return actor;
-  return run(() => counterSummary(actor, params.id ?? ''));
+  return run(async () => ({ ...(await counterSummary(actor, params.id ?? '')), textsReady: smsConfigured() }));
 };
 
 /** Takes a deposit or the balance in cash or by card. */
