@@ -25,5 +25,5 @@ export function passesMarked(from: GarmentStep, to: GarmentStep): boolean {
 
 /** What the server answers when the shop's rule refuses the move (`what`: the garment, or how many). */
 export function noFittingRefusal(what: string, step: string): string {
-  return `No fitting is saved for ${what}, and the shop’s rule is to save the fitting before a garment is marked ${step}: save the fitting first.`;
+  return `No fitting to cut by is saved for ${what} (both legs, each with its plan), and the shop’s rule is to save the fitting before a garment is marked ${step}: save the fitting first.`;
 }
