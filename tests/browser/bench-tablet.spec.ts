@@ -162,6 +162,7 @@ describe('the step record and the move past Chalk-marked', () => {
     await page.goto(`/garments/${id}`);
     await ready(page);
     const record = page.getByRole('list', { name: 'Bench steps' });
+    await record.locator('[aria-current="step"]').waitFor();
     expect(await record.locator('button, a, input, [role=button], [tabindex]').count()).toBe(0);
     // No outline or fill: nothing about it says "tap me".
     const looks = await record.locator('li, li > span').evaluateAll((els) =>
@@ -170,6 +171,7 @@ describe('the step record and the move past Chalk-marked', () => {
         return { border: s.borderTopWidth, background: s.backgroundColor, cursor: s.cursor };
       }),
     );
+    expect(looks.length).toBeGreaterThanOrEqual(7);
     for (const l of looks) expect(l).toEqual({ border: '0px', background: 'rgba(0, 0, 0, 0)', cursor: 'auto' });
     expect(await record.locator('[aria-current="step"]').textContent()).toBe('Received');
     await page.context().close();
@@ -241,12 +243,24 @@ describe('the step record and the move past Chalk-marked', () => {
       await ready(page);
       await page.getByRole('button', { name: 'Mark Chalk-marked' }).click();
       await page.getByTestId('garment-step').getByText('Chalk-marked').waitFor();
-      await page.getByTestId('no-fitting-note').getByText('the shop’s rule is to save one before Cut').waitFor();
-      await page.getByRole('button', { name: 'Mark Cut' }).click();
-      await page.getByRole('alert').getByText('save the fitting first').waitFor();
-      expect(await page.getByRole('dialog').count()).toBe(0);
-      expect(await page.getByTestId('garment-step').textContent()).toBe('Chalk-marked');
+      // Known to have no fitting: no button that could only be refused, the note says why.
+      await page.getByTestId('no-fitting-note').getByText('the shop’s rule is to save one (both legs) before marking it Cut').waitFor();
+      expect(await page.getByRole('button', { name: 'Mark Cut' }).count()).toBe(0);
       await page.screenshot({ path: 'test-results/bench-tablet-no-fitting-refused.png' });
+
+      // From the queue (which does not know): the tap reads the garment, and says why it does not move.
+      const number = await page.evaluate(async (id) => (await (await fetch(`/api/garments/${id}`)).json()).ticket.number as number, id);
+      await page.goto('/queue');
+      await ready(page);
+      await page.getByLabel('Customer or ticket').fill(`PH ${number}`);
+      await expect.poll(() => page.getByTestId('queue-row').count()).toBe(1);
+      const row = page.getByTestId('queue-row');
+      await row.getByRole('button', { name: `Mark PH ${number} Ink blue serge Cut` }).click();
+      await row.getByRole('alert').getByText('save the fitting first').waitFor();
+      expect(await page.getByRole('dialog').count()).toBe(0);
+      await page.goto(`/garments/${id}`);
+      await ready(page);
+      expect(await page.getByTestId('garment-step').textContent()).toBe('Chalk-marked');
 
       // Past the screen, straight to the server: refused there too.
       const direct = await page.evaluate(async (id) => {

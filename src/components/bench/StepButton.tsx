@@ -89,9 +89,12 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
   if (!allowed && !undoable && !said) {
     return next && size === 'big' ? <p className="text-lg text-muted">Next: {label(next)} (not your step to mark).</p> : null;
   }
+  // Known here to have no fitting, and the shop refuses: no button that can only be refused, the note says why.
+  const unfitted = next !== null && allowed && size === 'big' && fitted === false && passesMarked(status, next);
+  const blocked = unfitted && gate.rule === 'refuse';
   return (
     <div className="flex flex-col gap-1">
-      {next && allowed && (
+      {next && allowed && !blocked && (
         <button
           type="button"
           className={look + ' aria-disabled:opacity-60'}
@@ -122,9 +125,10 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
           </button>
         )}
       </div>
-      {next && allowed && size === 'big' && fitted === false && passesMarked(status, next) && (
+      {unfitted && (
         <p data-testid="no-fitting-note" className="rounded-md border-l-8 border-warn bg-warn-soft px-3 py-2 text-lg font-semibold text-warn">
-          No fitting to cut by saved yet{gate.rule === 'refuse' ? `: the shop’s rule is to save one before ${label(next)}.` : `: you will be asked before marking it ${label(next)}.`}
+          No fitting to cut by saved yet
+          {blocked ? `: the shop’s rule is to save one (both legs) before marking it ${label(next)}.` : `: you will be asked before marking it ${label(next)}.`}
         </p>
       )}
       {gate.refused && (
