@@ -143,11 +143,12 @@ describe('the preset list opens without moving the form', () => {
       // By keyboard alone: open, Tab to a preset, Enter fills the leg and closes the list.
       await page.keyboard.press('Enter');
       await dialog.waitFor();
-      const classic = dialog.getByRole('button', { name: /^Classic cuff/ });
-      for (let i = 0; i < 12 && !(await classic.evaluate((b) => b === document.activeElement)); i++) await page.keyboard.press('Tab');
+      // Wide cuff: not the house default (a new fitting starts from that one already).
+      const wide = dialog.getByRole('button', { name: /^Wide cuff/ });
+      for (let i = 0; i < 12 && !(await wide.evaluate((b) => b === document.activeElement)); i++) await page.keyboard.press('Tab');
       await page.keyboard.press('Enter');
       await dialog.waitFor({ state: 'hidden' });
-      await expect.poll(() => field(page, 'Cuff depth').inputValue()).not.toBe('');
+      await expect.poll(() => field(page, 'Cuff depth').inputValue()).toBe('1 3/4');
       await page.getByText('From the preset').waitFor();
       // Applied, the leg has a plan: the bar above the form may grow by a line, but inside the form
       // nothing moves between the presets button and the fields (the preset's name takes no new line).
