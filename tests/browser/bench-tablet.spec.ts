@@ -116,6 +116,9 @@ describe('the preset list opens without moving the form', () => {
       if (!id) id = await freshGarment(page, 'Sand linen trousers');
       await page.goto(`/garments/${id}`);
       await ready(page);
+      // A new fitting starts from the house default once the presets have loaded: measure after that.
+      await page.getByText('From house default:').waitFor();
+      await expect.poll(() => page.getByTestId('summary-cut').count()).toBe(1);
       const first = field(page, 'Pin at the back (finished length)');
       const open = page.getByRole('button', { name: 'Presets for the left leg…' });
       await open.scrollIntoViewIfNeeded();
