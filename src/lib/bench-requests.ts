@@ -3,6 +3,7 @@
 import { z } from 'zod';
 import { text } from './text';
 import { EXISTING_FINISHES } from './existing-finish';
+import { FITTING_RULES } from './fitting-rule';
 import { GARMENT_STEPS } from './garment-steps';
 
 const blankToNull = (v: string | null | undefined) => (v === '' || v === undefined ? null : v);
@@ -101,4 +102,6 @@ export function scaleUnit(scale: Scale): { unit: 'in' | 'cm' | 'mm'; precision: 
 export const settingsRequest = z.object({
   scale: z.enum(SCALES, { error: 'Choose inches (1/8 or 1/16), cm or mm.' }),
   stepLabels: z.partialRecord(z.enum(GARMENT_STEPS), text().trim().max(40, 'Keep a step name under 40 characters.')).default({}),
+  // Left out, the shop's rule stays as it was: a client that only changes the scale never loosens it.
+  fittingRule: z.enum(FITTING_RULES, { error: 'Choose warn or refuse.' }).optional(),
 });

@@ -3,6 +3,7 @@ import type { ContactPreference } from './contact-channels';
 import type { ExistingFinish } from './existing-finish';
 import type { GarmentStep } from './garment-steps';
 import type { Scale } from './bench-requests';
+import type { FittingRule } from './fitting-rule';
 import type { SavedLeg } from './measurement-request';
 
 /** A person a garment can be given to. */
@@ -16,6 +17,8 @@ export interface Person {
 export interface BenchSettings {
   scale: Scale;
   stepLabels: Partial<Record<GarmentStep, string>>;
+  /** a garment passing Chalk-marked with no fitting saved: warned on screen, or refused by the server */
+  fittingRule: FittingRule;
 }
 
 /** A garment as listed on its ticket. */
@@ -65,7 +68,13 @@ export interface TicketDetail {
   dueOn: string | null;
   createdAt: string;
   customer: CustomerCard | null;
-  garments: GarmentSummary[];
+  garments: TicketGarment[];
+}
+
+/** A garment on its ticket's page: also whether a fitting is saved, so moving it past Chalk-marked can ask first. */
+export interface TicketGarment extends GarmentSummary {
+  /** a fitting is saved and can be cut by (a plan for each leg) */
+  fitted: boolean;
 }
 
 /** One recorded change, newest first on screen. */
@@ -78,7 +87,7 @@ export interface AuditEntry {
 }
 
 /** A garment with its ticket and customer. */
-export interface GarmentDetail extends GarmentSummary {
+export interface GarmentDetail extends TicketGarment {
   /** how the bottoms came in (plain hem, cuff, unfinished) */
   existingFinish: ExistingFinish;
   ticket: { id: string; number: number; status: GarmentStep; note: string | null };

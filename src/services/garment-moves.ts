@@ -10,6 +10,7 @@ import { leastAdvanced, type GarmentStep } from '@/lib/garment-steps';
 import { auditMany } from './audit';
 import { ServiceError } from './errors';
 import { onGarmentMoved } from './garment-events';
+import { assertFittingRule } from './fitting-rule';
 
 /** Sets the ticket's status to its least advanced garment's step, inside the ticket's lock `tx`. */
 export async function writeTicketStatus(tx: Db, shopId: string, ticketId: string): Promise<GarmentStep> {
@@ -32,6 +33,8 @@ export async function moveGarmentsLocked(
   back = false,
 ): Promise<Garment[]> {
   if (ids.length === 0) return [];
+  // The shop may refuse cutting a garment with no fitting saved (a step back is never held up).
+  if (!back) await assertFittingRule(tx, actor.shopId, ids, from, to);
   const rows = await tx
     .update(garments)
     .set({ status: to, updatedAt: new Date() })

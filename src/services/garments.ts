@@ -7,7 +7,7 @@ import { db, type Db } from '@/db';
 import { customers, garments, member, tickets, user, type Garment } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import type { garmentInput, garmentPatch } from '@/lib/bench-requests';
-import type { CustomerCard, GarmentDetail, GarmentSummary, Person, QueueRow } from '@/lib/bench-types';
+import type { CustomerCard, GarmentDetail, Person, QueueRow, TicketGarment } from '@/lib/bench-types';
 import { leastAdvanced, nextStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
 import { can } from '@/lib/roles';
 import { audit } from './audit';
@@ -17,6 +17,7 @@ import { moveGarmentsLocked, tellMoved, writeTicketStatus } from './garment-move
 import { isUuid, lockTicket, withTicketLock } from './ticket-core';
 import { ticketLabel } from '@/lib/ticket-number';
 import { copyFittings } from './fitting-copy';
+import { fittedGarments } from './fitting-rule';
 
 // The ticket core, here too for the services that already import it from here.
 export { isUuid, lockTicket, withTicketLock };
@@ -110,11 +111,12 @@ export async function visibleGarment(actor: Actor, id: string): Promise<Garment>
   return g;
 }
 
-/** Summaries of garments with their assignees' names. */
-export async function summaries(rows: Garment[]): Promise<GarmentSummary[]> {
+/** Summaries of garments with their assignees' names and whether each has a fitting saved. */
+export async function summaries(rows: Garment[]): Promise<TicketGarment[]> {
   const ids = [...new Set(rows.flatMap((g) => (g.assigneeId ? [g.assigneeId] : [])))];
   const people = ids.length ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, ids)) : [];
   const names = new Map(people.map((u) => [u.id, u.name]));
+  const fitted = await fittedGarments(db, rows.map((g) => g.id));
   return rows.map((g) => ({
     id: g.id,
     description: g.description ?? 'Trousers',
@@ -122,6 +124,7 @@ export async function summaries(rows: Garment[]): Promise<GarmentSummary[]> {
     dueOn: g.dueOn,
     assigneeId: g.assigneeId,
     assigneeName: g.assigneeId ? names.get(g.assigneeId) || null : null,
+    fitted: fitted.has(g.id),
   }));
 }
 

@@ -89,6 +89,8 @@ describe('house presets from the lead to the bench', () => {
     await expect(house.getByText('House default').isVisible()).resolves.toBe(true);
     await house.click();
     await expect.poll(() => fitting.getByLabel('Cuff depth', { exact: true }).inputValue()).toMatch(/^1 3\/8( in)?$/);
+    // A tap applies the preset and closes the list: open it again for another.
+    await fitting.getByText('Presets for the left leg').click();
     await fitting.getByRole('button', { name: /^Wide cuff/ }).click();
     await expect.poll(() => fitting.getByLabel('Cuff depth', { exact: true }).inputValue()).toMatch(/^1 3\/4( in)?$/);
     await page.screenshot({ path: 'test-results/presets-garment.png', fullPage: true });

@@ -165,9 +165,10 @@ describe('bench settings', () => {
     const put = await call('PUT', '/api/bench-settings', { cookie: cookie.lead, body: { scale: 'mm', stepLabels: { marked: 'Pinned and chalked' } } });
     expect(put.status).toBe(200);
     const seen = await call('GET', '/api/bench-settings', { cookie: cookie.apprentice });
-    expect(seen.body).toEqual({ scale: 'mm', stepLabels: { marked: 'Pinned and chalked' } });
+    // The shop's fitting rule, not sent, stays as it was (issue 15).
+    expect(seen.body).toEqual({ scale: 'mm', stepLabels: { marked: 'Pinned and chalked' }, fittingRule: 'warn' });
     const back = await call('PUT', '/api/bench-settings', { cookie: cookie.lead, body: { scale: 'in8', stepLabels: {} } });
-    expect(back.body).toEqual({ scale: 'in8', stepLabels: {} });
+    expect(back.body).toEqual({ scale: 'in8', stepLabels: {}, fittingRule: 'warn' });
   });
 
   it('answer 422 for a scale that is not one', async () => {

@@ -7,7 +7,8 @@ import { withQuery } from '@/components/WithQuery';
 import { SCALE_LABELS, SCALES, settingsRequest } from '@/lib/bench-requests';
 import type { BenchSettings } from '@/lib/bench-types';
 import { fetchJson } from '@/lib/fetch-json';
-import { DEFAULT_STEP_LABELS, GARMENT_STEPS } from '@/lib/garment-steps';
+import { FITTING_RULE_LABELS, FITTING_RULES } from '@/lib/fitting-rule';
+import { DEFAULT_STEP_LABELS, GARMENT_STEPS, stepLabel } from '@/lib/garment-steps';
 import { useBenchSettings } from './use-bench';
 
 type Form = z.input<typeof settingsRequest>;
@@ -39,6 +40,15 @@ function SettingsForm({ initial }: { initial: BenchSettings }) {
           <Field key={s} label={`Step ${i + 1}`} registration={register(`stepLabels.${s}`)} placeholder={DEFAULT_STEP_LABELS[s]} id={`step-${s}`} error={formState.errors.stepLabels?.[s]} />
         ))}
       </fieldset>
+      <fieldset className="flex flex-col gap-2 rounded-lg border-2 border-rule bg-card p-4">
+        <legend className="px-1 text-xl font-extrabold">A garment with no fitting saved</legend>
+        <p className="text-muted">When someone marks it past {stepLabel('marked', initial.stepLabels)}, with nothing saved to cut by:</p>
+        {FITTING_RULES.map((r) => (
+          <label key={r} className="inline-flex min-h-11 items-center gap-3 text-lg">
+            <input type="radio" value={r} {...register('fittingRule')} className="size-5" /> {FITTING_RULE_LABELS[r]}
+          </label>
+        ))}
+      </fieldset>
       {save.error && <FormMessage kind="error">Not saved: {save.error.message}</FormMessage>}
       {save.isSuccess && <FormMessage kind="ok">Saved.</FormMessage>}
       <div><SubmitButton busy={save.isPending}>Save settings</SubmitButton></div>
@@ -53,5 +63,5 @@ function Loader() {
   return <SettingsForm initial={settings.data} />;
 }
 
-/** The lead's bench settings island: the measuring scale and the shop's names for the steps. */
+/** The lead's bench settings island: the measuring scale, the shop's names for the steps, its rule for cutting with no fitting. */
 export default withQuery(Loader);

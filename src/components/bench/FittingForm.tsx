@@ -3,6 +3,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useRef, useState, type MutableRefObject } from 'react';
 import { useForm, useWatch, type Resolver } from 'react-hook-form';
 import { Segmented } from '@/components/calculator/Segmented';
+import { Dialog } from '@/components/Dialog';
 import { useDebounced } from '@/components/calculator/use-debounced';
 import { PresetPicker, type PresetSettings } from '@/components/presets/PresetPicker';
 import { usePresets } from '@/components/presets/use-presets';
@@ -22,7 +23,9 @@ import {
 import { readLength } from '@/lib/length-reading';
 import { afterSave } from './after-save';
 import { LegFields } from './LegFields';
-import { LegPlan } from './LegPlan';
+import { LegPlanView } from './LegPlan';
+import { PlanSummary } from './PlanSummary';
+import { useLegPlan } from './use-leg-plan';
 import { keepDraft, readDraft } from './use-draft';
 
 interface Props {
@@ -81,6 +84,9 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
   const values = useWatch({ control }) as Measurements;
   const [leg, setLeg] = useState<Leg>('left');
   const current = useDebounced(values.legs[leg], 250);
+  // Asked once for the leg: the summary bar and the full plan show the same answer.
+  const planned = useLegPlan(current, values.unit, precision, letDown);
+  const [presetsOpen, setPresetsOpen] = useState(false);
   const other: Leg = leg === 'left' ? 'right' : 'left';
   const draftKey = `cuffwright:fitting-draft:${garmentId}`;
   const [restored, setRestored] = useState(false);
@@ -102,6 +108,8 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
     mutationFn: (body: Measurements) => fetchJson<FittingView>(`/api/garments/${garmentId}/measurements`, { method: 'PUT', body }),
     onSuccess: (saved) => {
       client.setQueryData(['fitting', garmentId], saved);
+      // The garment's "fitting saved" (asked before it passes Chalk-marked) may have changed.
+      void client.invalidateQueries({ queryKey: ['garment', garmentId] });
       const stored = formValues(saved, unit);
       const { values: kept, newer } = afterSave(sent.current ?? getValues(), getValues(), stored);
       reset(stored);
@@ -170,7 +178,6 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
     reset(withPreset(getValues(), LEGS, houseDefault));
     setFromDefault(houseDefault.id);
   }, [presets.data, fitting.legs.length, draftKey, reset, getValues]);
-  const presetsRef = useRef<HTMLDetailsElement>(null);
 
   const copyOther = () => {
     const from = values.legs[other];
@@ -178,112 +185,126 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
   };
 
   return (
-    <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,30rem)_minmax(0,1fr)]">
-      <form
-        aria-label="Fitting measurements"
-        noValidate
-        onSubmit={(e) => {
-          e.preventDefault();
-          void saveNow();
-        }}
-        className="flex flex-col gap-5 rounded-lg border-2 border-rule bg-card p-4"
-      >
-        <Segmented name="leg" legend="Leg" value={leg} onChange={setLeg} options={LEGS.map((l) => ({ value: l, label: l === 'left' ? 'Left leg' : 'Right leg' }))} />
-        <p className="text-base text-muted">
-          Lengths in <strong className="text-ink">{values.unit}</strong>; fractions welcome (1 1/2, 1½, 31 3/4 + 1/8), or name a unit (38 mm).
-        </p>
-        <details ref={presetsRef} className="rounded-md border-2 border-rule p-3">
-          <summary className="min-h-11 cursor-pointer content-center text-lg font-extrabold">Presets for the {leg} leg</summary>
-          <div className="mt-3">
-            <PresetPicker unit={values.unit} onApply={applyPreset} />
-          </div>
-        </details>
-        {values.legs[leg].preset && (
-          <p className="flex flex-wrap items-center gap-3 text-lg">
-            {fromDefault && values.legs[leg].presetId === fromDefault ? (
+    <div className="flex flex-col gap-4">
+      <PlanSummary leg={leg} planned={planned} />
+      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,30rem)_minmax(0,1fr)]">
+        <form
+          aria-label="Fitting measurements"
+          noValidate
+          onSubmit={(e) => {
+            e.preventDefault();
+            void saveNow();
+          }}
+          // A field brought into view (focus, Tab) stops below the summary bar, never under it.
+          className="flex flex-col gap-5 rounded-lg border-2 border-rule bg-card p-4 [&_input]:scroll-mt-48"
+        >
+          <Segmented name="leg" legend="Leg" value={leg} onChange={setLeg} options={LEGS.map((l) => ({ value: l, label: l === 'left' ? 'Left leg' : 'Right leg' }))} />
+          <p className="text-base text-muted">
+            Lengths in <strong className="text-ink">{values.unit}</strong>; fractions welcome (1 1/2, 1½, 31 3/4 + 1/8), or name a unit (38 mm).
+          </p>
+          {/* In a dialog on the top layer: opening the list moves no field (it used to push them 500 px down). */}
+          <button
+            type="button"
+            aria-haspopup="dialog"
+            onClick={() => setPresetsOpen(true)}
+            className="min-h-11 self-start rounded-md border-2 border-ink bg-card px-4 text-lg font-extrabold"
+          >
+            Presets for the {leg} leg…
+          </button>
+          <Dialog open={presetsOpen} onClose={() => setPresetsOpen(false)} title={`Presets for the ${leg} leg`} testId="presets-dialog">
+            <p className="text-base text-muted">A tap fills the {leg} leg’s finish and allowances; the pins and widths stay as typed.</p>
+            {values.legs[leg].preset && (
+              <button
+                type="button"
+                onClick={() => {
+                  setValue(`legs.${leg}.preset`, '', { shouldDirty: true });
+                  setValue(`legs.${leg}.presetId`, '', { shouldDirty: true });
+                  setPresetsOpen(false);
+                }}
+                className="min-h-11 self-start rounded border-2 border-ink px-3 text-lg font-semibold"
+              >
+                Not from a preset (keep the lengths)
+              </button>
+            )}
+            <PresetPicker
+              unit={values.unit}
+              onApply={(p, preset) => {
+                applyPreset(p, preset);
+                setPresetsOpen(false);
+              }}
+            />
+          </Dialog>
+          {/* Always one line, preset or none ("not from a preset" is in the list): applying one moves no field either. */}
+          <p data-testid="leg-preset" className="flex min-h-11 flex-wrap items-center gap-x-3 text-lg">
+            {values.legs[leg].preset && fromDefault && values.legs[leg].presetId === fromDefault ? (
               <>
                 <span>
                   From house default: <strong>{values.legs[leg].preset}</strong> {presetLine(presets.data?.find((p) => p.id === fromDefault))}
                 </span>
-                <button
-                  type="button"
-                  onClick={() => {
-                    if (presetsRef.current) presetsRef.current.open = true;
-                    presetsRef.current?.scrollIntoView({ block: 'nearest' });
-                  }}
-                  className="min-h-11 rounded border-2 border-accent px-3 text-base font-semibold text-accent"
-                >
+                <button type="button" onClick={() => setPresetsOpen(true)} className="min-h-11 rounded border-2 border-accent px-3 text-base font-semibold text-accent">
                   Change
                 </button>
               </>
-            ) : (
+            ) : values.legs[leg].preset ? (
               <span>
                 From the preset <strong>{values.legs[leg].preset}</strong>
               </span>
+            ) : (
+              <span className="text-muted">Not from a preset.</span>
             )}
-            <button
-              type="button"
-              onClick={() => {
-                setValue(`legs.${leg}.preset`, '', { shouldDirty: true });
-                setValue(`legs.${leg}.presetId`, '', { shouldDirty: true });
-              }}
-              className="min-h-11 rounded border-2 border-ink px-3 text-base font-semibold"
-            >
-              Not from a preset
-            </button>
           </p>
-        )}
-        <LegFields
-          key={leg}
-          leg={leg}
-          finish={values.legs[leg].finish}
-          unit={values.unit}
-          register={register}
-          onFinish={(f) => setValue(`legs.${leg}.finish`, f, { shouldDirty: true })}
-          errorFor={errorFor}
-          readingFor={(f) => readLength(values.legs[leg][f], values.unit, precision)}
-          letDown={letDown}
-        />
-        <button type="button" onClick={copyOther} className="min-h-11 self-start rounded-md border-2 border-ink px-4 text-lg font-semibold">
-          Same as the {other} leg
-        </button>
-        <div className="flex flex-col gap-2 border-t-2 border-rule pt-3">
-          {restored && formState.isDirty && (
-            <div role="status" className="flex flex-col gap-2 rounded border-2 border-warn bg-warn-soft px-3 py-2 font-semibold text-warn">
-              <p>Lengths typed here before the page was reloaded are back, not yet saved.</p>
-              <button
-                type="button"
-                onClick={() => {
-                  reset(formValues(fitting, unit));
-                  setRestored(false);
-                }}
-                className="min-h-11 self-start rounded border-2 border-warn bg-card px-3"
-              >
-                Discard them
-              </button>
-            </div>
-          )}
-          {save.error && (
-            <p role="alert" className="rounded border-2 border-cut bg-cut-soft px-3 py-2 font-semibold text-cut">
-              Not saved: {save.error.message} Everything you typed is still here.
-            </p>
-          )}
-          {save.isSuccess && !formState.isDirty && (
-            <p role="status" className="rounded border-2 border-ok bg-ok-soft px-3 py-2 font-semibold text-ok">
-              Saved both legs.
-            </p>
-          )}
-          {save.isSuccess && typedWhileSaving && formState.isDirty && (
-            <p role="status" className="rounded border-2 border-warn bg-warn-soft px-3 py-2 font-semibold text-warn">
-              Saved. What you typed while it was saving is kept here, not yet saved.
-            </p>
-          )}
-          <button type="submit" disabled={save.isPending} className="min-h-14 rounded-lg bg-accent px-5 text-xl font-extrabold text-white disabled:opacity-60">
-            {save.isPending ? 'Saving…' : formState.isDirty || (fromDefault && fitting.legs.length === 0) ? 'Save measurements' : 'Save measurements (no changes)'}
+          <LegFields
+            key={leg}
+            leg={leg}
+            finish={values.legs[leg].finish}
+            unit={values.unit}
+            register={register}
+            onFinish={(f) => setValue(`legs.${leg}.finish`, f, { shouldDirty: true })}
+            errorFor={errorFor}
+            readingFor={(f) => readLength(values.legs[leg][f], values.unit, precision)}
+            letDown={letDown}
+          />
+          <button type="button" onClick={copyOther} className="min-h-11 self-start rounded-md border-2 border-ink px-4 text-lg font-semibold">
+            Same as the {other} leg
           </button>
-        </div>
-      </form>
-      <LegPlan leg={leg} values={current} unit={values.unit} precision={precision} letDown={letDown} />
+          <div className="flex flex-col gap-2 border-t-2 border-rule pt-3">
+            {restored && formState.isDirty && (
+              <div role="status" className="flex flex-col gap-2 rounded border-2 border-warn bg-warn-soft px-3 py-2 font-semibold text-warn">
+                <p>Lengths typed here before the page was reloaded are back, not yet saved.</p>
+                <button
+                  type="button"
+                  onClick={() => {
+                    reset(formValues(fitting, unit));
+                    setRestored(false);
+                  }}
+                  className="min-h-11 self-start rounded border-2 border-warn bg-card px-3"
+                >
+                  Discard them
+                </button>
+              </div>
+            )}
+            {save.error && (
+              <p role="alert" className="rounded border-2 border-cut bg-cut-soft px-3 py-2 font-semibold text-cut">
+                Not saved: {save.error.message} Everything you typed is still here.
+              </p>
+            )}
+            {save.isSuccess && !formState.isDirty && (
+              <p role="status" className="rounded border-2 border-ok bg-ok-soft px-3 py-2 font-semibold text-ok">
+                Saved both legs.
+              </p>
+            )}
+            {save.isSuccess && typedWhileSaving && formState.isDirty && (
+              <p role="status" className="rounded border-2 border-warn bg-warn-soft px-3 py-2 font-semibold text-warn">
+                Saved. What you typed while it was saving is kept here, not yet saved.
+              </p>
+            )}
+            <button type="submit" disabled={save.isPending} className="min-h-14 rounded-lg bg-accent px-5 text-xl font-extrabold text-white disabled:opacity-60">
+              {save.isPending ? 'Saving…' : formState.isDirty || (fromDefault && fitting.legs.length === 0) ? 'Save measurements' : 'Save measurements (no changes)'}
+            </button>
+          </div>
+        </form>
+        <LegPlanView leg={leg} values={current} unit={values.unit} precision={precision} planned={planned} />
+      </div>
     </div>
   );
 }

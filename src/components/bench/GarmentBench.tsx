@@ -84,18 +84,17 @@ function Bench({ garmentId, shopName, canEditGarment, canEditFitting, canReadFit
               Change description, due date, who or existing finish
             </button>
           ))}
-        <ol aria-label="Bench steps" className="flex flex-wrap gap-2">
+        {/* A record of where the garment stands, drawn as text (no outlines, no fills) so nothing
+            looks tappable: the one way to move it is the button below, with its rules. */}
+        <ol aria-label="Bench steps" data-testid="step-record" className="flex flex-wrap items-baseline gap-x-2 gap-y-1 text-lg">
           {GARMENT_STEPS.map((s, i) => (
-            <li
-              key={s}
-              aria-current={i === at ? 'step' : undefined}
-              className={
-                'rounded-full border-2 px-3 py-1 text-base font-semibold ' +
-                (i === at ? 'border-ink bg-ink text-paper' : i < at ? 'border-ok bg-ok-soft text-ok' : 'border-rule text-muted')
-              }
-            >
-              {i < at && <span aria-hidden="true">✓ </span>}
-              {label(s)}
+            <li key={s} aria-current={i === at ? 'step' : undefined} className="inline-flex items-baseline gap-2">
+              {i > 0 && <span aria-hidden="true" className="text-muted">›</span>}
+              <span className={i === at ? 'font-extrabold text-ink underline decoration-4 underline-offset-4' : i < at ? 'text-ok' : 'text-muted'}>
+                {i < at && <span aria-hidden="true">✓ </span>}
+                {label(s)}
+                {i < at && <span className="sr-only"> (done)</span>}
+              </span>
             </li>
           ))}
         </ol>
@@ -103,7 +102,7 @@ function Bench({ garmentId, shopName, canEditGarment, canEditFitting, canReadFit
           Now: <strong data-testid="garment-step">{label(g.status)}</strong>
         </p>
         <div className="flex flex-wrap items-start gap-4">
-          <StepButton garmentId={g.id} status={g.status} canAdvance={canAdvance} canPickup={canPickup} canReopen={canReopen} />
+          <StepButton garmentId={g.id} status={g.status} canAdvance={canAdvance} canPickup={canPickup} canReopen={canReopen} fitted={g.fitted} />
           <StepBackButton garmentId={g.id} status={g.status} canAdvance={canAdvance} canReopen={canReopen} />
         </div>
       </header>

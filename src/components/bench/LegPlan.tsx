@@ -4,7 +4,7 @@ import { readLength, typedWithUnit } from '@/lib/length-reading';
 import { frontPinNote } from '@/lib/leg-plan';
 import type { Leg, LegValues } from '@/lib/measurement-request';
 import { HemTaperCheck } from './HemTaperCheck';
-import { useLegPlan } from './use-leg-plan';
+import { useLegPlan, type LegPlanState } from './use-leg-plan';
 
 interface Props {
   leg: Leg;
@@ -17,7 +17,12 @@ interface Props {
 
 /** One leg's plan from the engine, drawn by the calculator's own components, with the front-pin note and a plain hem's taper check. */
 export function LegPlan({ leg, values, unit, precision, letDown = false }: Props) {
-  const { plan, problem, failure, taper, taperProblem } = useLegPlan(values, unit, precision, letDown);
+  return <LegPlanView leg={leg} values={values} unit={unit} precision={precision} planned={useLegPlan(values, unit, precision, letDown)} />;
+}
+
+/** LegPlan drawn from a plan already asked for (the fitting form asks once, for this and its summary bar). */
+export function LegPlanView({ leg, values, unit, precision, planned }: Omit<Props, 'letDown'> & { planned: LegPlanState }) {
+  const { plan, problem, failure, taper, taperProblem } = planned;
   const note = frontPinNote(values);
   const pinned = values.backPin.trim();
   const finished = pinned ? readLength(pinned, unit, precision) : null;

@@ -1,8 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
+import type { GarmentDetail } from '@/lib/bench-types';
 import { fetchJson } from '@/lib/fetch-json';
+import { passesMarked } from '@/lib/fitting-rule';
 import { nextStep, type GarmentStep } from '@/lib/garment-steps';
+import { NoFittingAsk } from './NoFittingAsk';
 import { useStepLabel } from './use-bench';
+import { useFittingGate } from './use-fitting-gate';
 import { useStepBack } from './use-step-back';
 
 interface Props {
@@ -20,13 +24,15 @@ interface Props {
   what?: string;
   /** told when the word after a tap (and its Undo) appears and goes, so a list can keep the row where it was meanwhile */
   onOffer?: (showing: boolean) => void;
+  /** whether a fitting is saved, when the page knows (it is read again at the tap that passes Chalk-marked) */
+  fitted?: boolean;
 }
 
 // Long enough to notice a wrong tap and reach Undo; it stays while Undo has the focus.
 const UNDO_MS = 10_000;
 
 /** The one tap that moves a garment to its next step, with a short Undo after it; says what went wrong in words. */
-export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen = false, size = 'big', what, onOffer }: Props) {
+export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen = false, size = 'big', what, onOffer, fitted }: Props) {
   const label = useStepLabel();
   const client = useQueryClient();
   const next = nextStep(status);
@@ -46,6 +52,12 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
   const back = useStepBack(garmentId);
   const showing = Boolean(undoable || said);
   useEffect(() => onOffer?.(showing), [onOffer, showing]);
+  const gate = useFittingGate(what ? `“${what}”` : 'this garment');
+  // Read fresh at the tap: someone may have saved the fitting since the list was drawn. Unreadable: the server decides.
+  const fittedNow = () =>
+    client
+      .fetchQuery({ queryKey: ['garment', garmentId], queryFn: () => fetchJson<GarmentDetail>(`/api/garments/${garmentId}`), staleTime: 0 })
+      .then((g) => g.fitted, () => true);
 
   useEffect(() => {
     if ((!undoable && !said) || held) return;
@@ -77,15 +89,18 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
   if (!allowed && !undoable && !said) {
     return next && size === 'big' ? <p className="text-lg text-muted">Next: {label(next)} (not your step to mark).</p> : null;
   }
+  // Known here to have no fitting, and the shop refuses: no button that can only be refused, the note says why.
+  const unfitted = next !== null && allowed && size === 'big' && fitted === false && passesMarked(status, next);
+  const blocked = unfitted && gate.rule === 'refuse';
   return (
     <div className="flex flex-col gap-1">
-      {next && allowed && (
+      {next && allowed && !blocked && (
         <button
           type="button"
           className={look + ' aria-disabled:opacity-60'}
           // aria-disabled rather than disabled: a disabled button drops the keyboard focus mid-move.
           aria-disabled={busy || undefined}
-          onClick={() => !busy && move.mutate({ from: status, to: next })}
+          onClick={() => !busy && void gate.check(status, next, fittedNow, () => move.mutate({ from: status, to: next }))}
           aria-label={what ? `Mark ${what} ${label(next)}` : undefined}
         >
           {move.isPending ? 'Moving…' : `Mark ${label(next)}`}
@@ -110,6 +125,18 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
           </button>
         )}
       </div>
+      {unfitted && (
+        <p data-testid="no-fitting-note" className="rounded-md border-l-8 border-warn bg-warn-soft px-3 py-2 text-lg font-semibold text-warn">
+          No fitting to cut by saved yet
+          {blocked ? `: the shop’s rule is to save one (both legs) before marking it ${label(next)}.` : `: you will be asked before marking it ${label(next)}.`}
+        </p>
+      )}
+      {gate.refused && (
+        <p role="alert" className="text-base font-semibold text-cut">
+          {gate.refused}
+        </p>
+      )}
+      <NoFittingAsk {...gate.ask} />
       {(move.error ?? back.error) && (
         <p role="alert" className="text-base font-semibold text-cut">
           {(move.error ?? back.error)!.message}

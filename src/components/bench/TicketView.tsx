@@ -14,7 +14,9 @@ import { ticketLabel } from '@/lib/ticket-number';
 import type { z } from 'zod';
 import { CustomerEdit } from './CustomerEdit';
 import { DueBadge } from './DueBadge';
+import { NoFittingAsk } from './NoFittingAsk';
 import { StepButton } from './StepButton';
+import { useFittingGate } from './use-fitting-gate';
 import { useStepLabel } from './use-bench';
 
 interface Props {
@@ -75,12 +77,21 @@ function MoveAll({ ticket, canAdvance, canPickup }: { ticket: TicketDetail; canA
     onSuccess: () => client.invalidateQueries(),
   });
   const behind = ticket.garments.filter((g) => g.status === ticket.status).length;
+  const unfitted = (t: TicketDetail) => t.garments.filter((g) => g.status === t.status && !g.fitted).length;
+  const gate = useFittingGate(unfitted(ticket) === 1 ? 'one of these garments' : `${unfitted(ticket)} of these garments`);
   if (!next || ticket.garments.length < 2 || !(next === 'collected' ? canPickup : canAdvance)) return null;
+  // Read fresh at the tap: a fitting may have been saved on another screen since the page was drawn.
+  const allFitted = () =>
+    client
+      .fetchQuery({ queryKey: ['ticket', ticket.id], queryFn: () => fetchJson<TicketDetail>(`/api/tickets/${ticket.id}`), staleTime: 0 })
+      .then((t) => unfitted(t) === 0, () => true);
   return (
     <div className="flex flex-col gap-1">
-      <button type="button" onClick={() => move.mutate(next)} disabled={move.isPending} className="min-h-14 self-start rounded-lg border-2 border-accent px-5 text-xl font-bold text-accent disabled:opacity-60">
+      <button type="button" onClick={() => void gate.check(ticket.status, next, allFitted, () => move.mutate(next))} disabled={move.isPending} className="min-h-14 self-start rounded-lg border-2 border-accent px-5 text-xl font-bold text-accent disabled:opacity-60">
         Mark {behind === 1 ? 'the garment' : `all ${behind}`} at {label(ticket.status)} as {label(next)}
       </button>
+      {gate.refused && <p role="alert" className="font-semibold text-cut">{gate.refused}</p>}
+      <NoFittingAsk {...gate.ask} />
       {move.error && <p role="alert" className="font-semibold text-cut">{move.error.message}</p>}
     </div>
   );
@@ -137,7 +148,7 @@ function Ticket({ ticketId, shopName, canAdvance, canPickup, canAddGarment, canE
                   <strong>{label(g.status)}</strong> · <DueBadge dueOn={g.dueOn} /> · {g.assigneeName ?? 'Unassigned'}
                 </p>
               </div>
-              <StepButton garmentId={g.id} status={g.status} canAdvance={canAdvance} canPickup={canPickup} size="row" what={g.description} />
+              <StepButton garmentId={g.id} status={g.status} canAdvance={canAdvance} canPickup={canPickup} size="row" what={g.description} fitted={g.fitted} />
             </li>
           ))}
         </ul>

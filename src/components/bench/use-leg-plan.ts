@@ -18,6 +18,9 @@ function taperRequest(leg: LegValues, unit: Unit, precision: Precision, letDown:
   return hem && { kind: 'hem-taper', ...hem };
 }
 
+/** What useLegPlan gives: the plan to draw (or why none), the taper check, the engine's field messages. */
+export type LegPlanState = ReturnType<typeof useLegPlan>;
+
 /** What PlanView needs for one leg, plus the field messages of the engine; `letDown`: the width measured at the cut is used. */
 export function useLegPlan(leg: LegValues, unit: Unit, precision: Precision, letDown = false) {
   const mainReq = legMainRequest(leg, unit, precision);

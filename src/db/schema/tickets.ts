@@ -6,6 +6,7 @@ import { createSelectSchema } from 'drizzle-zod';
 import { z } from 'zod';
 import { DEFAULT_EXISTING_FINISH, EXISTING_FINISHES } from '../../lib/existing-finish';
 import { GARMENT_STEPS, type GarmentStep } from '../../lib/garment-steps';
+import { FITTING_RULES } from '../../lib/fitting-rule';
 import { organization, user } from './auth';
 import { customers } from './customers';
 import { presets } from './presets';
@@ -94,6 +95,8 @@ export const shopSettings = pgTable('shop_settings', {
   stepLabels: jsonb('step_labels').notNull().default({}),
   /** the shop's IANA time zone, where its days begin and end; null: DEFAULT_TIME_ZONE (src/lib/overview/shop-days.ts) */
   timeZone: text('time_zone'),
+  /** a garment passing Chalk-marked with no fitting saved: 'warn' (a confirm on screen) or 'refuse' (the server says no) */
+  fittingRule: text('fitting_rule', { enum: FITTING_RULES }).notNull().default('warn'),
   updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull(),
 });
 

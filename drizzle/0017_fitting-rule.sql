@@ -1,0 +1,1 @@
+ALTER TABLE "shop_settings" ADD COLUMN "fitting_rule" text DEFAULT 'warn' NOT NULL;

@@ -1,0 +1,81 @@
+import type { CuffPlan, HemPlan } from '@/lib/allowance/types';
+import type { Leg } from '@/lib/measurement-request';
+import type { LegPlanState } from './use-leg-plan';
+import { worstWarning } from './worst-warning';
+
+interface Props {
+  leg: Leg;
+  planned: LegPlanState;
+}
+
+function Cloth({ plan }: { plan: CuffPlan | HemPlan }) {
+  if (plan.enough === null) return <span className="text-base text-muted">Cloth not checked</span>;
+  return (
+    <span className="text-base font-bold text-ok">
+      <span aria-hidden="true">✓ </span>Enough cloth
+    </span>
+  );
+}
+
+/**
+ * The leg's plan in one short bar that stays at the top of the screen while the fields are typed
+ * (the full plan stays below or beside): where to cut, whether the cloth is enough, the worst
+ * warning. Short on purpose: at 390 px the on-screen keyboard leaves little room above the field.
+ */
+export function PlanSummary({ leg, planned }: Props) {
+  const { plan, problem, failure, taper, taperProblem } = planned;
+  const main = plan && plan.kind !== 'taper' ? plan : null;
+  const stale = problem !== null;
+  const cut = main?.lines.find((l) => l.name === 'cut');
+  const worst = main ? worstWarning([...main.warnings, ...(taper?.warnings ?? [])], taperProblem) : taperProblem ? worstWarning([], taperProblem) : null;
+  return (
+    <div
+      role="region"
+      aria-label={`Plan in short, ${leg} leg`}
+      data-testid="plan-summary"
+      className="sticky top-0 z-20 -mx-4 flex flex-col border-b-4 border-ink bg-card px-4 py-1.5 shadow-md sm:mx-0 sm:rounded-b-lg sm:border-x-2"
+    >
+      <p className="flex flex-wrap items-baseline gap-x-2.5">
+        <span className="text-sm font-extrabold tracking-wide uppercase">{leg === 'left' ? 'Left' : 'Right'} leg</span>
+        {failure ? (
+          <span className="text-lg font-semibold text-cut">{failure}</span>
+        ) : !main ? (
+          <span className={'text-lg ' + (problem?.kind === 'error' ? 'font-semibold text-cut' : 'text-muted')}>{problem?.text ?? 'Working out the plan…'}</span>
+        ) : main.enough === false ? (
+          // Short of cloth there is no line to cut at, here as in the full plan.
+          <span data-testid="summary-no-fit" className="text-2xl font-extrabold text-cut">
+            Does not fit: short by <span className="measure">{main.shortBy?.text}</span>
+          </span>
+        ) : (
+          cut && (
+            <>
+              <span className="text-lg font-semibold">Cut</span>
+              <span data-testid="summary-cut" className={'measure text-4xl leading-tight font-extrabold ' + (stale ? 'text-muted' : 'text-cut')}>
+                {cut.belowMark.text}
+              </span>
+              <span className="text-base">below the mark</span>
+            </>
+          )
+        )}
+      </p>
+      {(main || worst) && (
+        <p className="flex min-w-0 items-baseline gap-x-3 text-base font-semibold">
+          {main && stale ? (
+            <span className="shrink-0 text-cut">Not for what is typed now</span>
+          ) : main && main.enough !== false ? (
+            <span className="shrink-0">
+              <Cloth plan={main} />
+            </span>
+          ) : null}
+          {worst && (
+            <span data-testid="summary-warning" className="min-w-0 truncate text-warn md:line-clamp-2 md:whitespace-normal">
+              <span aria-hidden="true">⚠ </span>
+              {worst.message}
+              {worst.others > 0 && <span className="text-muted"> (+{worst.others} more in the plan)</span>}
+            </span>
+          )}
+        </p>
+      )}
+    </div>
+  );
+}
