@@ -18,7 +18,7 @@ function ResetForm({ token }: { token: string }) {
   if (reset.isSuccess) {
     return (
       <FormMessage kind="ok">
-        Your password is changed. <a href="/sign-in">Sign in</a> with it.
+        Your password is changed. <a href="/sign-in" className="text-accent underline">Sign in</a> with it.
       </FormMessage>
     );
   }

@@ -102,7 +102,7 @@ export function CustomerFileView({ id, canEdit, canErase }: { id: string; canEdi
               </p>
               <ul className="list-disc pl-6">
                 {t.garments.map((g) => (
-                  <li key={g.id}><a href={`/garments/${g.id}`} className="text-accent">{g.description}</a> · {stepName(g.status)}</li>
+                  <li key={g.id}><a href={`/garments/${g.id}`} className="text-accent underline">{g.description}</a> · {stepName(g.status)}</li>
                 ))}
               </ul>
               <p>
