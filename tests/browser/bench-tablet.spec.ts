@@ -258,7 +258,7 @@ describe('the step record and the move past Chalk-marked', () => {
       await page.getByLabel('Customer or ticket').fill(`PH ${number}`);
       await expect.poll(() => page.getByTestId('queue-row').count()).toBe(1);
       const row = page.getByTestId('queue-row');
-      await row.getByRole('button', { name: `Mark PH ${number} Ink blue serge Cut` }).click();
+      await row.getByRole('button', { name: `Mark Cut: PH ${number} Ink blue serge` }).click();
       await row.getByRole('alert').getByText('save the fitting first').waitFor();
       expect(await page.getByRole('dialog').count()).toBe(0);
       await page.goto(`/garments/${id}`);

@@ -110,7 +110,7 @@ describe('story 3: an apprentice works the queue', () => {
     await row.getByText('Overdue').waitFor();
     await page.screenshot({ path: 'test-results/queue-apprentice.png', fullPage: true });
 
-    const tap = row.getByRole('button', { name: /Mark PH 1003 Navy suit trousers Turned and stitched/ });
+    const tap = row.getByRole('button', { name: /Mark Turned and stitched: PH 1003 Navy suit trousers/ });
     const box = await tap.boundingBox();
     expect(box!.height).toBeGreaterThanOrEqual(44);
     await tap.click();

@@ -111,7 +111,7 @@ describe('the queue on an upright tablet and a phone', () => {
     await expect.poll(() => page.getByTestId('queue-row').count()).toBe(1);
     const row = page.getByTestId('queue-row');
     const garment = row.getByRole('link', { name: 'Dove grey flannel trousers' });
-    const mark = row.getByRole('button', { name: `Mark PH ${number} Dove grey flannel trousers Chalk-marked` });
+    const mark = row.getByRole('button', { name: `Mark Chalk-marked: PH ${number} Dove grey flannel trousers` });
 
     const [g768, m768, r768] = await Promise.all([garment.boundingBox(), mark.boundingBox(), row.boundingBox()]);
     // Beside: the button starts right of the garment's name, inside the card, at the same height.

@@ -34,7 +34,7 @@ describe('stepping back after a wrong tap', () => {
     const row = page.getByTestId('queue-row');
 
     // The tap, by keyboard: focus stays on the button, Undo is the next stop.
-    const mark = row.getByRole('button', { name: `Mark PH ${number} Heather tweed trousers Chalk-marked` });
+    const mark = row.getByRole('button', { name: `Mark Chalk-marked: PH ${number} Heather tweed trousers` });
     await mark.focus();
     await page.keyboard.press('Enter');
     await row.getByRole('status').getByText('Marked Chalk-marked.').waitFor();

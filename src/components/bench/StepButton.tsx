@@ -101,7 +101,9 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
           // aria-disabled rather than disabled: a disabled button drops the keyboard focus mid-move.
           aria-disabled={busy || undefined}
           onClick={() => !busy && void gate.check(status, next, fittedNow, () => move.mutate({ from: status, to: next }))}
-          aria-label={what ? `Mark ${what} ${label(next)}` : undefined}
+          // The name begins with the words on the button (WCAG 2.5.3: "Mark Cut" said aloud finds it),
+          // then says which garment, for a list of many such buttons.
+          aria-label={what && !move.isPending ? `Mark ${label(next)}: ${what}` : undefined}
         >
           {move.isPending ? 'Moving…' : `Mark ${label(next)}`}
         </button>
