@@ -63,7 +63,7 @@ describe('the safety notes and the payment fake’s words', () => {
     for (const path of [`/garments/${id}`, '/']) {
       await page.goto(path);
       await ready(page);
-      const care = page.locator('aside[aria-labelledby="care-heading"]');
+      const care = page.locator('section[aria-labelledby="care-heading"]');
       expect(await care.getByRole('heading').innerText()).toBe('Mind your hands');
       const text = await care.innerText();
       for (const caution of ['Iron and steam', 'pull the plug before you fill or empty it', 'seam rippers', 'sharps jar', 'Needles and pins', 'local rules come first'])
