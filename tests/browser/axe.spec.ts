@@ -15,6 +15,7 @@ import { pageFiles, pageIds } from '../http/pages';
 import { axeProblems, type AxeResults } from './axe-report';
 import { sharedBrowser } from './browser';
 import { settled } from './layout-checks';
+import { colourOnlyLinks } from './link-checks';
 import { signInAs } from './sign-in';
 
 const AXE_SOURCE = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
@@ -133,14 +134,14 @@ async function paidFixture(): Promise<{ paidTicketId: string; sessionId: string 
 // was reported with: a complementary landmark (aside) nested in another landmark.
 const AXE_OPTIONS = { resultTypes: ['violations'], rules: { 'landmark-complementary-is-top-level': { enabled: true } } };
 
-/** Loads axe-core into the open page (once per document) and runs it; the violations, readable. */
+/** Loads axe-core into the open page (once per document) and runs it; its violations, readable, and any link told by colour alone. */
 async function check(page: Page): Promise<string[]> {
   if (!(await page.evaluate(() => 'axe' in window))) await page.evaluate(AXE_SOURCE);
   const results = await page.evaluate(
     (options) => (window as unknown as { axe: { run: (c: Document, o: object) => Promise<unknown> } }).axe.run(document, options),
     AXE_OPTIONS,
   );
-  return axeProblems(results as AxeResults);
+  return [...axeProblems(results as AxeResults), ...(await colourOnlyLinks(page))];
 }
 
 const browser = sharedBrowser();
