@@ -127,7 +127,7 @@ function PayLink({ s, canSend }: { s: CounterSummary; canSend: boolean }) {
         <>
           <p className="mt-1">
             A pay link for <Money minor={s.link!.amountMinor} currency={s.currency} className="font-semibold" /> is open.{' '}
-            <a href={s.link!.url} target="_blank" rel="noopener" className="font-semibold text-accent" data-testid="pay-link">
+            <a href={s.link!.url} target="_blank" rel="noopener" className="font-semibold text-accent underline" data-testid="pay-link">
               Open the pay page
             </a>
           </p>
