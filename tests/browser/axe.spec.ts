@@ -1,9 +1,9 @@
 // Accessibility (issue 15): axe-core on every screen, for every role and signed out, on a phone
 // (390 × 844) and an upright tablet (768 × 1024), must find nothing. The screens include their
-// states worth checking: the calculator's warnings and its dimmed last good plan, the garment page
-// with the presets open, the counter with a payment and its receipt, /paid with a real session,
-// the outbox with a receipt in it, and every refusal (403) a role meets. The table of screens must
-// name every page file in src/pages, so a new page cannot be left out unnoticed.
+// states worth checking: the calculator's warnings, its taper check and its dimmed last good plan,
+// the garment page with the presets open, the counter with a payment and its receipt, /paid with a
+// real session, the outbox with a receipt in it, and every refusal (403) a role meets. The table of
+// screens must name every page file in src/pages, so a new page cannot be left out unnoticed.
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import type { BrowserContext, Page } from 'playwright-core';
@@ -54,6 +54,16 @@ async function unusualCuff(page: Page): Promise<void> {
   await page.getByText('Take care:').first().waitFor();
 }
 
+/** Then the taper check opened and filled: its result table and the leg drawn flat. */
+async function taperedLeg(page: Page): Promise<void> {
+  await page.getByText('Tapered leg: check the width').click();
+  await field(page, 'Width at the finished edge').fill('8');
+  await field(page, 'Width higher up').fill('10');
+  await field(page, '…measured this high above the edge').fill('12');
+  await field(page, 'Seam allowance (optional)').fill('1/2');
+  await expect.poll(() => page.getByRole('heading', { name: 'Tapered leg' }).isVisible(), { timeout: 10_000 }).toBe(true);
+}
+
 /** Then a mistyped depth: the last good plan stays on screen, dimmed, under the message. */
 async function staleCuff(page: Page): Promise<void> {
   await field(page, 'Cuff depth').fill('abc');
@@ -78,6 +88,7 @@ function screens(f: Fixture): Record<string, Visit[]> {
         path: '/',
         steps: [
           { label: 'with a warning', run: unusualCuff },
+          { label: 'with a tapered leg', run: taperedLeg },
           { label: 'with its last good plan dimmed', run: staleCuff },
         ],
       },
