@@ -28,7 +28,7 @@ function PresetsScreen({ canManageHouse, canCreateOwn }: Props) {
       )}
       <p className="text-muted">
         To apply a preset, open a garment: its fitting lists these presets, and a new fitting starts from the house default.{' '}
-        <a href="/bench" className="font-semibold text-accent">
+        <a href="/bench" className="font-semibold text-accent underline">
           Go to the bench
         </a>
       </p>
