@@ -11,7 +11,7 @@ import { textWidth } from './measure';
 import { qrPath } from './qr';
 import { SkippedNote } from './SkippedNote';
 import { FAMILY } from './fonts';
-import { SAFETY_HEADING } from '@/lib/bench-safety';
+import { SAFETY_HEADING } from '../bench-safety';
 import { GUIDE_COLUMN, INK, READ_MIN, s } from './styles';
 import type { Len, Unit } from '@/lib/allowance/types';
 import type { CutSheetData, PageSize } from './types';

@@ -2,7 +2,7 @@
 // keeping them here lets the tests and any other rendering read the same sheet.
 import type { CreaseLanding, CuffLineName, Len, PlanWarning, TaperLine, TaperPlan, Unit, WarningCode } from '@/lib/allowance/types';
 import type { ExistingFinish } from '@/lib/existing-finish';
-import { SAFETY_DEFER_SHEET, SAFETY_NOTES } from '@/lib/bench-safety';
+import { SAFETY_DEFER_SHEET, SAFETY_NOTES } from '../bench-safety';
 import { checkRuler } from './chalk-guide';
 import { finishedLine } from './finished-length';
 import { printedPlan, type PrintedPlan, type PrintedSeamWork } from './printed';
