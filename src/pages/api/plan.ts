@@ -66,7 +66,9 @@ export const POST = route(
       return res;
     } catch (err) {
       if (isAllowanceError(err)) return refused(body, err);
-      throw err;
+      // A fault of ours: the details go to the log, never to a stranger.
+      console.error('POST /api/plan failed', err);
+      return problem(500, 'The calculator hit a problem on our side. Your entries are kept; try again.');
     }
   },
 );
