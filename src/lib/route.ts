@@ -106,8 +106,8 @@ function queryObject(url: URL): Record<string, string> {
 }
 
 /** Refuses with 403 unless the actor's role has the permission (a route's narrower case). */
-export function demand(actor: Actor, permission: Permission): void {
-  if (!can(actor.role, permission)) throw new ServiceError(403, `Your role (${actor.role}) may not do this.`);
+export function demand(actor: Actor, permission: Permission, what = 'do this'): void {
+  if (!can(actor.role, permission)) throw new ServiceError(403, `Your role (${actor.role}) may not ${what}.`);
 }
 
 /** Declares an API route: permission, body and query checked in that order, then the handler;
