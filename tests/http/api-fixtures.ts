@@ -67,6 +67,9 @@ export function fixtures(lead: string) {
     'GET /api/photos/{id}/thumb': async () => ({ id: await photo() }),
     'PATCH /api/presets/{id}': async () =>
       ({ id: (await ok('POST', '/api/presets', { name: freshEmail('preset'), scope: 'personal', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } })).id }),
+    // A house preset, which every member may read (a colleague's own is hidden from the others).
+    'GET /api/presets/{id}/history': async () =>
+      ({ id: (await ok('POST', '/api/presets', { name: freshEmail('house'), scope: 'house', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } })).id }),
     'DELETE /api/presets/{id}': async () =>
       ({ id: (await ok('POST', '/api/presets', { name: freshEmail('preset'), scope: 'personal', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } })).id }),
     'PATCH /api/staff/{memberId}': async () => ({ memberId: await member() }),
