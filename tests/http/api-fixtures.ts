@@ -72,6 +72,7 @@ export function fixtures(lead: string) {
       ({ id: (await ok('POST', '/api/presets', { name: freshEmail('house'), scope: 'house', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } })).id }),
     'DELETE /api/presets/{id}': async () =>
       ({ id: (await ok('POST', '/api/presets', { name: freshEmail('preset'), scope: 'personal', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } })).id }),
+    'PATCH /api/prices/kinds/{id}': async () => ({ id: (await ok('POST', '/api/prices/kinds', { name: freshEmail('kind'), amountMinor: 1200, rushApplies: true })).id }),
     'PATCH /api/staff/{memberId}': async () => ({ memberId: await member() }),
     'DELETE /api/staff/{memberId}': async () => ({ memberId: await member() }),
     'GET /api/tickets/{id}': async () => ({ id: await ticket() }),
