@@ -16,7 +16,7 @@ const SERVER_ONLY_LIB = [
   '^src/lib/(sms|sms-service)\\.ts$', // the SMS service's token and its SDK
   '^src/lib/render-pdf\\.ts$', // react-pdf + pdfkit
   '^src/lib/(cut-sheet|claim-slip|receipt|pdf-platform|storage)/', // PDF drawing, fonts, files on disk
-  '^src/lib/(api|body|client-address|deployment|security-headers)\\.ts$', // endpoint plumbing
+  '^src/lib/(api|body|client-address|deployment|security-headers|route|openapi)\\.ts$', // endpoint plumbing
   '^src/lib/member-activity\\.ts$', // requests in flight, per process
   '^src/lib/request-log\\.ts$', // pino, REQUEST_LOG
 ];

@@ -21,6 +21,8 @@ export const PAGES = [
   { path: '/customers', signIn: 'counter@pinmark.test', goalKiB: null },
   // Charts drawn on the server: the overview sends no script of its own.
   { path: '/overview?period=4w', signIn: 'lead@pinmark.test', goalKiB: 5 },
+  // Drawn on the server from the API document: no script of its own.
+  { path: '/api-reference', signIn: null, goalKiB: null },
 ];
 
 /** How many cold loads of each page (PAGE_LOADS, default 5). */

@@ -11,7 +11,7 @@ import { withSecurityHeaders } from '@/lib/security-headers';
 import { logError, logRequest } from '@/lib/request-log';
 import { ensureStarted } from '@/services/startup';
 
-const PUBLIC_PAGES = ['/', '/sign-in', '/sign-up', '/forgot', '/reset', '/paid'];
+const PUBLIC_PAGES = ['/', '/sign-in', '/sign-up', '/forgot', '/reset', '/paid', '/api-reference'];
 const PUBLIC_PREFIXES = ['/invite/', '/api/', '/_astro/', '/_image', '/favicon'];
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 const HEALTH_PATH = '/api/health';

@@ -36,12 +36,11 @@ export interface Actor {
   shopName: string;
 }
 
-/** The actor when signed in with the permission, otherwise the 401/403 response to return. */
-export function guard(locals: App.Locals, permission: Permission): Actor | Response {
-  const { user, member } = locals;
-  if (!user) return problem(401, 'Sign in first.');
-  if (!member) return problem(403, 'You are not a member of a shop.');
-  if (!can(member.role, permission)) return problem(403, `Your role (${member.role}) may not do this.`);
+/** The signed-in member as an Actor, or null (signed out, or not a member of a shop). */
+export function actorOf(locals: App.Locals | undefined): Actor | null {
+  const user = locals?.user;
+  const member = locals?.member;
+  if (!user || !member) return null;
   return {
     userId: user.id,
     userName: user.name,
@@ -51,6 +50,15 @@ export function guard(locals: App.Locals, permission: Permission): Actor | Respo
     shopId: member.shopId,
     shopName: member.shopName,
   };
+}
+
+/** The actor when signed in with the permission, otherwise the 401/403 response to return. */
+export function guard(locals: App.Locals, permission: Permission): Actor | Response {
+  const { user, member } = locals;
+  if (!user) return problem(401, 'Sign in first.');
+  if (!member) return problem(403, 'You are not a member of a shop.');
+  if (!can(member.role, permission)) return problem(403, `Your role (${member.role}) may not do this.`);
+  return actorOf(locals)!;
 }
 
 /** The body's bytes, at most JSON_BODY_LIMIT of them; the 408/413 response when it cannot be read. */
@@ -64,25 +72,26 @@ export async function readBytes(request: Request): Promise<Uint8Array | Response
 }
 
 /** The JSON body, read to at most JSON_BODY_LIMIT bytes; the 400/408/413 response when it cannot be. */
-export async function readJson(request: Request): Promise<{ value: unknown } | Response> {
+export async function readJson(request: Request, unreadable = 'Send a JSON body.'): Promise<{ value: unknown } | Response> {
   const bytes = await readBytes(request);
   if (bytes instanceof Response) return bytes;
   try {
     return { value: JSON.parse(new TextDecoder().decode(bytes)) };
   } catch {
-    return problem(400, 'Send a JSON body.');
+    return problem(400, unreadable);
   }
 }
 
 /** Parses the JSON body with the schema; a 400/408/413/422 response when it does not fit. */
-export async function readBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S> | Response> {
-  const raw = await readJson(request);
+export async function readBody<S extends z.ZodType>(request: Request, schema: S, unreadable?: string): Promise<z.infer<S> | Response> {
+  const raw = await readJson(request, unreadable);
   if (raw instanceof Response) return raw;
   const parsed = schema.safeParse(raw.value);
   if (parsed.success) return parsed.data;
   const issues: Record<string, string> = {};
   for (const issue of parsed.error.issues) issues[issue.path.join('.') || '_'] ??= issue.message;
-  return problem(422, 'Some fields need attention.', issues);
+  // The first field's own message says more than "some fields": a form can show it as it is.
+  return problem(422, Object.values(issues)[0] ?? 'Some fields need attention.', issues);
 }
 
 /** The JSON answer for a refusal a service (or better-auth under it) threw; anything else is rethrown. */

@@ -26,8 +26,8 @@ export async function fetchJson<T>(url: string, init: { method?: string; body?: 
   const data = (await response.json().catch(() => ({}))) as Record<string, unknown>;
   if (!response.ok) {
     const message = String(data.error ?? data.message ?? `The server answered ${response.status}.`);
-    // Field messages come as `issues` from the app's routes and as `fields` from the public /api/plan.
-    throw new ApiError(response.status, message, ((data.issues ?? data.fields) as Record<string, string>) ?? {});
+    // Every route answers field messages as `issues` (src/lib/route.ts).
+    throw new ApiError(response.status, message, (data.issues as Record<string, string>) ?? {});
   }
   return data as T;
 }

@@ -17,7 +17,7 @@ import {
 import { isUnstorable, UNSTORABLE_MESSAGE } from './unstorable';
 
 /** A checked request as the server's schema would output it (trimmed, blanks dropped), or one message per field at fault. */
-export type PlanCheck = { ok: true; value: PlanRequest } | { ok: false; error: string; fields: Record<string, string> };
+export type PlanCheck = { ok: true; value: PlanRequest } | { ok: false; error: string; issues: Record<string, string> };
 
 const UNITS: readonly unknown[] = ['in', 'cm', 'mm'];
 const PRECISIONS: readonly unknown[] = [8, 16, 32];
@@ -41,10 +41,10 @@ function checkLength(field: PlanField, v: unknown, needed: boolean): { value?: s
 
 /** Checks a plan request as POST /api/plan's schema does, with the same messages. */
 export function checkPlanRequest(input: unknown): PlanCheck {
-  if (typeof input !== 'object' || input === null || Array.isArray(input)) return { ok: false, error: SHAPE_MESSAGE, fields: {} };
+  if (typeof input !== 'object' || input === null || Array.isArray(input)) return { ok: false, error: SHAPE_MESSAGE, issues: {} };
   const body = input as Record<string, unknown>;
   const kind = body.kind;
-  if (typeof kind !== 'string' || !Object.hasOwn(PLAN_FIELDS, kind)) return { ok: false, error: KIND_MESSAGE, fields: { kind: KIND_MESSAGE } };
+  if (typeof kind !== 'string' || !Object.hasOwn(PLAN_FIELDS, kind)) return { ok: false, error: KIND_MESSAGE, issues: { kind: KIND_MESSAGE } };
   const fields: Record<string, string> = {};
   const out: Record<string, unknown> = { kind };
   if (!UNITS.includes(body.unit)) fields.unit = UNIT_MESSAGE;
@@ -58,5 +58,5 @@ export function checkPlanRequest(input: unknown): PlanCheck {
     else if (value !== undefined) out[f] = value;
   }
   const first = Object.values(fields)[0];
-  return first === undefined ? { ok: true, value: out as PlanRequest } : { ok: false, error: first, fields };
+  return first === undefined ? { ok: true, value: out as PlanRequest } : { ok: false, error: first, issues: fields };
 }

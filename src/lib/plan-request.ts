@@ -117,11 +117,8 @@ export type PlanRequest = z.output<typeof planRequest>;
 /** What POST /api/plan answers with 200. */
 export type PlanResponse = CuffPlan | HemPlan | TaperPlan;
 
-/** What POST /api/plan answers with 4xx/5xx: a message, and one per field at fault. */
-export interface PlanErrorBody {
-  error: string;
-  fields: Record<string, string>;
-}
+/** The 400 message for a plan that is not JSON at all, with an example of one. */
+export const PLAN_UNREADABLE = 'Send the plan as JSON, for example {"kind":"cuff","unit":"in","cuffDepth":"1 1/2"}.';
 
 /** Turns zod's issues into one message per field path ("cuffDepth", "kind"…), first issue wins. */
 export function fieldMessages(error: z.ZodError): Record<string, string> {

@@ -119,9 +119,9 @@ describe('refusals', () => {
     expect(foreign.body.error).toMatch(/No such garment/);
   });
 
-  it('a bad unit, precision or paper is 400 with the field named', async () => {
+  it('a bad unit, precision or paper is 422 with the field named', async () => {
     const r = await call('GET', `/api/garments/${navy}/sheet?unit=furlong&precision=3&page=B5`, { cookie: cookie.lead });
-    expect(r.status).toBe(400);
+    expect(r.status).toBe(422);
     expect(Object.keys(r.body.issues).sort()).toEqual(['page', 'precision', 'unit']);
   });
 
@@ -168,10 +168,10 @@ describe("the morning's batch", () => {
     expect(flatText(file)).toContain('All lengths in centimetres.');
   });
 
-  it('refuses the counter (403) and a bad filter (400)', async () => {
+  it('refuses the counter (403) and a bad filter (422)', async () => {
     expect((await call('GET', '/api/queue/sheets', { cookie: cookie.counter })).status).toBe(403);
     const bad = await call('GET', '/api/queue/sheets?due=someday&today=tomorrow', { cookie: cookie.lead });
-    expect(bad.status).toBe(400);
+    expect(bad.status).toBe(422);
     expect(Object.keys(bad.body.issues).sort()).toEqual(['due', 'today']);
   });
 });

@@ -35,6 +35,7 @@ export function pagePaths(ids: PageIds): Record<string, string> {
   return {
     '': '/',
     '404': '/no-such-page',
+    'api-reference': '/api-reference',
     bench: '/bench',
     'bench-settings': '/bench-settings',
     'counter/[ticketId]': `/counter/${ids.ticketId}`,

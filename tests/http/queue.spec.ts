@@ -90,10 +90,10 @@ describe('GET /api/garments', () => {
     expect(seen).toEqual([...collected].reverse());
   });
 
-  it('refuses a cursor it never gave out and a page size out of range with 400', async () => {
+  it('refuses a cursor it never gave out and a page size out of range with 422', async () => {
     for (const q of ['view=history&after=bm90LWEtY3Vyc29y', 'view=history&limit=0', 'view=history&limit=201', 'view=everything']) {
       const r = await call('GET', `/api/garments?${q}`, { cookie: lead });
-      expect(r.status, q).toBe(400);
+      expect(r.status, q).toBe(422);
       expect(typeof r.body.error, q).toBe('string');
     }
   });

@@ -216,6 +216,14 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       check: (r) => expect(r.body).toMatchObject({ ok: true, database: 'reachable', migrations: 'current' }),
     },
   },
+  // The API document: open to all, the same for everyone (it describes routes, holds no shop data).
+  'openapi.json': {
+    GET: {
+      request: () => ({ path: '/api/openapi.json' }),
+      expect: all(200),
+      check: (r) => expect(r.body.openapi).toBe('3.1.0'),
+    },
+  },
   me: {
     GET: {
       request: () => ({ path: '/api/me' }),

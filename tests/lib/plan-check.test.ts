@@ -13,7 +13,7 @@ function server(body: unknown) {
   const parsed = planRequest.safeParse(body);
   if (parsed.success) return { ok: true as const, value: JSON.parse(JSON.stringify(parsed.data)) };
   const fields = fieldMessages(parsed.error);
-  return { ok: false as const, error: Object.values(fields)[0] ?? parsed.error.issues[0]?.message, fields };
+  return { ok: false as const, error: Object.values(fields)[0] ?? parsed.error.issues[0]?.message, issues: fields };
 }
 
 function client(body: unknown) {
@@ -62,8 +62,8 @@ describe('the calculator’s check answers as the server’s schema does', () =>
     ];
     for (const [b, field, message] of cases) {
       const c = checkPlanRequest(b);
-      expect(c.ok === false && c.fields[field], JSON.stringify(b)).toBe(message);
-      expect(server(b).fields?.[field]).toBe(message);
+      expect(c.ok === false && c.issues[field], JSON.stringify(b)).toBe(message);
+      expect(server(b).issues?.[field]).toBe(message);
     }
   });
 

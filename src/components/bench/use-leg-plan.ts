@@ -35,8 +35,8 @@ export function useLegPlan(leg: LegValues, unit: Unit, precision: Precision, let
         ? { kind: 'error', text: main.data.error }
         : null;
   const fields = {
-    ...(taper.data && !taper.data.ok ? taper.data.fields : {}),
-    ...(main.data && !main.data.ok ? main.data.fields : {}),
+    ...(taper.data && !taper.data.ok ? taper.data.issues : {}),
+    ...(main.data && !main.data.ok ? main.data.issues : {}),
   };
   // Only an answer for this leg's own finish: a placeholder kept from a cuff is no hem's check.
   const answered = taper.asked && taper.data?.ok && taper.data.plan.kind === 'taper' ? taper.data.plan : null;

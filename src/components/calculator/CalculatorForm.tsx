@@ -25,13 +25,13 @@ const SCALES: { value: Scale; label: string }[] = [
 const toScale = (unit: Unit, precision: Precision): Scale => (unit === 'in' ? (precision === 16 ? 'in16' : 'in8') : unit);
 
 function serverMessage(answer: PlanAnswer | undefined, field: string): string | undefined {
-  return answer && !answer.ok ? answer.fields[field] : undefined;
+  return answer && !answer.ok ? answer.issues[field] : undefined;
 }
 
 /** The server's own rules, checked in the browser: a message per field of the request, or none. */
 function ownMessages(request: PlanRequestInput | null): Record<string, string> {
   const checked = request ? checkPlanRequest(request) : null;
-  return checked && !checked.ok ? checked.fields : {};
+  return checked && !checked.ok ? checked.issues : {};
 }
 
 const UNIT_WORDS: Record<Unit, string> = { in: 'inches', cm: 'centimetres', mm: 'millimetres' };

@@ -5,7 +5,7 @@ import type { PlanResponse } from '@/lib/plan-request';
 /** What the calculator makes of one answer: a plan, or the API's message per field. */
 export type PlanAnswer =
   | { ok: true; plan: PlanResponse }
-  | { ok: false; error: string; fields: Record<string, string> };
+  | { ok: false; error: string; issues: Record<string, string> };
 
 const NO_ANSWER = 'The calculator did not answer. Your entries are kept; try again.';
 
@@ -15,7 +15,7 @@ export async function askPlan(body: unknown, signal?: AbortSignal): Promise<Plan
     return { ok: true, plan: await fetchJson<PlanResponse>('/api/plan', { body, signal }) };
   } catch (e) {
     // 400/422 are answers about the input, not failures: show them beside the fields.
-    if (e instanceof ApiError && (e.status === 400 || e.status === 422)) return { ok: false, error: e.message, fields: e.issues };
+    if (e instanceof ApiError && (e.status === 400 || e.status === 422)) return { ok: false, error: e.message, issues: e.issues };
     if (e instanceof ApiError || signal?.aborted) throw e;
     throw new Error(NO_ANSWER);
   }

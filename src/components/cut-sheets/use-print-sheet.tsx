@@ -15,7 +15,7 @@ export async function pdfOf(response: Response): Promise<Blob> {
   if (response.ok && (response.headers.get('content-type') ?? '').includes('application/pdf')) return response.blob();
   const data = (await response.json().catch(() => ({}))) as Record<string, unknown>;
   const message = String(data.error ?? data.message ?? `The sheet could not be made (the server answered ${response.status}).`);
-  throw new ApiError(response.status, message, ((data.issues ?? data.fields) as Record<string, string>) ?? {});
+  throw new ApiError(response.status, message, (data.issues as Record<string, string>) ?? {});
 }
 
 /** Fetches a sheet and opens it in a new tab; the state keeps a link to it in case the tab was blocked. */

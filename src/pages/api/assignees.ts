@@ -1,11 +1,6 @@
 // The people of the shop a garment can be given to, for the pickers on the bench screens.
-import type { APIRoute } from 'astro';
-import { guard, run } from '@/lib/api';
+import { route } from '@/lib/route';
 import { staffOf } from '@/services/garments';
 
 /** The shop's people by name, with their roles. */
-export const GET: APIRoute = async ({ locals }) => {
-  const actor = guard(locals, ['tickets', 'read']);
-  if (actor instanceof Response) return actor;
-  return run(() => staffOf(actor));
-};
+export const GET = route({ summary: "The shop's people a garment can be given to, with their roles.", permission: ['tickets', 'read'] }, ({ actor }) => staffOf(actor));

@@ -1,17 +1,23 @@
 // For a load balancer or a deploy script: 200 when this server's database answers, its
 // migrations are current and its start-up work (the demo seed included) is done, 503 otherwise;
 // no session needed, no shop data in it.
-import type { APIRoute } from 'astro';
 import { json } from '@/lib/api';
+import { route } from '@/lib/route';
 import { health } from '@/services/health';
 import { startedUp } from '@/services/startup';
 
 /** The server's health (see services/health.ts). */
-export const GET: APIRoute = async () => {
-  const started = startedUp();
-  const report = await health();
-  const ok = report.ok && started;
-  const res = json({ ...report, ok, started }, ok ? 200 : 503);
-  res.headers.set('cache-control', 'no-store');
-  return res;
-};
+export const GET = route(
+  {
+    summary: "This server's health: 200 when its database answers, its migrations are current and its start-up work is done; 503 otherwise.",
+    permission: 'public',
+  },
+  async () => {
+    const started = startedUp();
+    const report = await health();
+    const ok = report.ok && started;
+    const res = json({ ...report, ok, started }, ok ? 200 : 503);
+    res.headers.set('cache-control', 'no-store');
+    return res;
+  },
+);

@@ -1,17 +1,19 @@
 // The shop's overview per day as a CSV download (lead).
-import type { APIRoute } from 'astro';
-import { guard, problem, refusal } from '@/lib/api';
 import { overviewCsv, overviewCsvName } from '@/lib/overview/overview-csv';
-import { readPeriod } from '@/lib/overview/period-request';
+import { periodQuery } from '@/lib/overview/period-request';
+import { route } from '@/lib/route';
 import { shopOverview } from '@/services/overview';
 
 /** text/csv for `?period=week|4w`, named after the period's first and last day. */
-export const GET: APIRoute = async ({ locals, url }) => {
-  const actor = guard(locals, ['overview', 'read']);
-  if (actor instanceof Response) return actor;
-  const query = readPeriod(url);
-  if ('error' in query) return problem(422, 'Some fields need attention.', { period: query.error });
-  try {
+export const GET = route(
+  {
+    summary: "The shop's overview per day as a CSV file, for this week or the last four weeks.",
+    permission: ['overview', 'read'],
+    query: periodQuery,
+    answer: 'text/csv',
+    examples: [{ summary: 'This week', query: { period: 'week' } }],
+  },
+  async ({ actor, query }) => {
     const o = await shopOverview(actor.shopId, query.period);
     return new Response(overviewCsv(o), {
       headers: {
@@ -20,7 +22,5 @@ export const GET: APIRoute = async ({ locals, url }) => {
         'cache-control': 'no-store',
       },
     });
-  } catch (e) {
-    return refusal(e);
-  }
-};
+  },
+);

@@ -1,5 +1,4 @@
 // POST /api/plan: the public calculator's one endpoint. Parse, ask the engine, answer JSON.
-import type { APIRoute } from 'astro';
 import {
   AllowanceError,
   checkHemTaper,
@@ -11,19 +10,12 @@ import {
   validateHemInput,
   validateHemTaperInput,
   validateTaperInput,
-  type AllowanceErrorCode,
 } from '@/lib/allowance';
-import { readJson } from '@/lib/api';
-import { fieldMessages, planRequest, type PlanErrorBody, type PlanRequest, type PlanResponse } from '@/lib/plan-request';
+import { json, problem } from '@/lib/api';
+import { planRequest, PLAN_UNREADABLE, type PlanRequest, type PlanResponse } from '@/lib/plan-request';
+import { route } from '@/lib/route';
 
 export const prerender = false;
-
-// Lengths that read fine but cannot be made (a cuff of 0, a taper with no leg) are 422; unreadable ones 400.
-const IMPOSSIBLE: ReadonlySet<AllowanceErrorCode> = new Set(['not-positive', 'negative', 'out-of-range']);
-
-function json(status: number, body: PlanResponse | PlanErrorBody): Response {
-  return Response.json(body, { status, headers: { 'cache-control': 'no-store' } });
-}
 
 function plan(req: PlanRequest): PlanResponse {
   switch (req.kind) {
@@ -45,35 +37,38 @@ function allRefusals(req: PlanRequest, first: AllowanceError): AllowanceError[] 
   return all.length ? all : [first];
 }
 
+// Lengths that cannot be read ("1 1/2 furlongs") and lengths that cannot be made (a cuff of 0)
+// are both refusals of a readable request: 422, one message per field.
 function refused(req: PlanRequest, err: AllowanceError): Response {
   const errors = allRefusals(req, err);
-  const fields: Record<string, string> = {};
-  for (const e of errors) if (e.field && !(e.field in fields)) fields[e.field] = e.message;
-  const status = errors.every((e) => IMPOSSIBLE.has(e.code)) ? 422 : 400;
-  return json(status, { error: errors[0]?.message ?? err.message, fields });
+  const issues: Record<string, string> = {};
+  for (const e of errors) if (e.field && !(e.field in issues)) issues[e.field] = e.message;
+  return problem(422, errors[0]?.message ?? err.message, issues);
 }
 
 /** Plans a cuff, a plain hem or a taper check (under a cuff or a plain hem) from the posted lengths. */
-export const POST: APIRoute = async ({ request }) => {
-  const read = await readJson(request);
-  if (read instanceof Response) {
-    if (read.status !== 400) return read;
-    return json(400, { error: 'Send the plan as JSON, for example {"kind":"cuff","unit":"in","cuffDepth":"1 1/2"}.', fields: {} });
-  }
-  const body = read.value;
-
-  const parsed = planRequest.safeParse(body);
-  if (!parsed.success) {
-    const fields = fieldMessages(parsed.error);
-    const first = Object.values(fields)[0] ?? parsed.error.issues[0]?.message ?? 'The plan is not in the expected shape.';
-    return json(400, { error: first, fields });
-  }
-
-  try {
-    return json(200, plan(parsed.data));
-  } catch (err) {
-    if (isAllowanceError(err)) return refused(parsed.data, err);
-    console.error('POST /api/plan failed', err);
-    return json(500, { error: 'The calculator hit a problem on our side. Your entries are kept; try again.', fields: {} });
-  }
-};
+export const POST = route(
+  {
+    summary: 'Plans a cuff or a plain hem, or checks a taper under either, from lengths as typed ("1 1/2", "38 mm").',
+    description: 'Public: the calculator on the home page. Lengths may be numbers or text with fractions; blank optional lengths use the usual allowances.',
+    permission: 'public',
+    body: planRequest,
+    unreadable: PLAN_UNREADABLE,
+    examples: [
+      { summary: 'A 1 1/2 in cuff', body: { kind: 'cuff', unit: 'in', cuffDepth: '1 1/2' } },
+      { summary: 'A plain hem in centimetres', body: { kind: 'hem', unit: 'cm', hemAllowance: '4', turnUnder: '1' } },
+    ],
+  },
+  ({ body }) => {
+    try {
+      const res = json(plan(body));
+      res.headers.set('cache-control', 'no-store');
+      return res;
+    } catch (err) {
+      if (isAllowanceError(err)) return refused(body, err);
+      // A fault of ours: the details go to the log, never to a stranger.
+      console.error('POST /api/plan failed', err);
+      return problem(500, 'The calculator hit a problem on our side. Your entries are kept; try again.');
+    }
+  },
+);

@@ -1,17 +1,20 @@
 // Sign-up: creates a shop and its first lead, and signs the lead in.
-import type { APIRoute } from 'astro';
-import { json, readBody, refusal } from '@/lib/api';
+import { json } from '@/lib/api';
 import { shopSignUpInput } from '@/lib/account-inputs';
+import { route } from '@/lib/route';
 import { createShop } from '@/services/shops';
 
 /** Public by design: anyone may open a new shop. */
-export const POST: APIRoute = async ({ request }) => {
-  const input = await readBody(request, shopSignUpInput);
-  if (input instanceof Response) return input;
-  try {
-    const { shopId, headers } = await createShop(input);
+export const POST = route(
+  {
+    summary: 'Opens a new shop with its first lead, and signs the lead in (the session cookie comes back).',
+    permission: 'public',
+    body: shopSignUpInput,
+    status: 201,
+    examples: [{ summary: 'A new shop', body: { shopName: 'Example Hems', name: 'Alex Example', email: 'alex@example-hems.test', password: 'a-long-password' } }],
+  },
+  async ({ body }) => {
+    const { shopId, headers } = await createShop(body);
     return json({ shopId }, 201, headers);
-  } catch (e) {
-    return refusal(e);
-  }
-};
+  },
+);

@@ -25,19 +25,19 @@ describe('askPlan', () => {
   });
 
   it('turns a 422 into the message and the per-field messages', async () => {
-    vi.stubGlobal('fetch', answer(422, { error: 'The cuff depth must be more than 0.', fields: { cuffDepth: 'The cuff depth must be more than 0.' } }));
-    expect(await askPlan({ ...REQUEST, cuffDepth: '0' })).toEqual({ ok: false, error: 'The cuff depth must be more than 0.', fields: { cuffDepth: 'The cuff depth must be more than 0.' } });
+    vi.stubGlobal('fetch', answer(422, { error: 'The cuff depth must be more than 0.', issues: { cuffDepth: 'The cuff depth must be more than 0.' } }));
+    expect(await askPlan({ ...REQUEST, cuffDepth: '0' })).toEqual({ ok: false, error: 'The cuff depth must be more than 0.', issues: { cuffDepth: 'The cuff depth must be more than 0.' } });
   });
 
   it('turns a 400 into field messages too', async () => {
-    vi.stubGlobal('fetch', answer(400, { error: 'Cuff depth: type a length such as 1 1/2 or 38.', fields: { cuffDepth: 'Cuff depth: type a length such as 1 1/2 or 38.' } }));
+    vi.stubGlobal('fetch', answer(400, { error: 'Cuff depth: type a length such as 1 1/2 or 38.', issues: { cuffDepth: 'Cuff depth: type a length such as 1 1/2 or 38.' } }));
     const got = await askPlan({ ...REQUEST, cuffDepth: 'zz' });
     expect(got.ok).toBe(false);
-    expect(got.ok === false && got.fields.cuffDepth).toMatch(/type a length/);
+    expect(got.ok === false && got.issues.cuffDepth).toMatch(/type a length/);
   });
 
   it('fails with the server’s own message on a 500', async () => {
-    vi.stubGlobal('fetch', answer(500, { error: 'The calculator hit a problem on our side. Your entries are kept; try again.', fields: {} }));
+    vi.stubGlobal('fetch', answer(500, { error: 'The calculator hit a problem on our side. Your entries are kept; try again.', issues: {} }));
     await expect(askPlan(REQUEST)).rejects.toThrow('The calculator hit a problem on our side.');
   });
 
@@ -49,7 +49,7 @@ describe('askPlan', () => {
 
 describe('planState: what the plan hook shows for the request typed now', () => {
   const a: PlanAnswer = { ok: true, plan: { kind: 'cuff' } as never };
-  const b: PlanAnswer = { ok: false, error: 'x', fields: {} };
+  const b: PlanAnswer = { ok: false, error: 'x', issues: {} };
   it('shows the kept answer for this request as fresh', () => {
     expect(planState('k2', b, { key: 'k1', data: a })).toEqual({ data: b, isPlaceholderData: false, error: null, asked: true });
   });

@@ -146,7 +146,7 @@ describe('POST /api/plan: published figures', () => {
     expect(line(cuff.json, 'cut').change.text).toBe('-5/16 in');
     const refused = await post({ ...base, widthAtCut: '0' });
     expect(refused.status).toBe(422);
-    expect(refused.json.fields).toEqual({ widthAtCut: 'Width at the cutting line must be more than 0.' });
+    expect(refused.json.issues).toEqual({ widthAtCut: 'Width at the cutting line must be more than 0.' });
   });
 
   it('US National Bureau of Standards (1959): 1 in = 25.4 mm exactly, whatever unit the plan is shown in', async () => {
@@ -184,31 +184,31 @@ describe('POST /api/plan: published figures', () => {
 describe('POST /api/plan: bad input is answered, never a 500', () => {
   it.each([
     { why: 'not JSON', raw: '{"kind":"cuff",', status: 400, field: null },
-    { why: 'a JSON array', body: [], status: 400, field: null },
-    { why: 'JSON null', body: null, status: 400, field: null },
-    { why: 'no kind', body: { unit: 'in', cuffDepth: '1' }, status: 400, field: 'kind' },
-    { why: 'an unknown kind', body: { kind: 'hemline', unit: 'in' }, status: 400, field: 'kind' },
-    { why: 'no unit', body: { kind: 'cuff', cuffDepth: '1' }, status: 400, field: 'unit' },
-    { why: 'feet', body: { kind: 'cuff', unit: 'ft', cuffDepth: '1' }, status: 400, field: 'unit' },
-    { why: 'a precision of 10', body: { kind: 'cuff', unit: 'in', precision: 10, cuffDepth: '1' }, status: 400, field: 'precision' },
-    { why: 'precision as text', body: { kind: 'cuff', unit: 'in', precision: '16', cuffDepth: '1' }, status: 400, field: 'precision' },
-    { why: 'no cuff depth', body: { kind: 'cuff', unit: 'in' }, status: 400, field: 'cuffDepth' },
-    { why: 'a blank cuff depth', body: { kind: 'cuff', unit: 'in', cuffDepth: '   ' }, status: 400, field: 'cuffDepth' },
-    { why: 'a cuff depth of true', body: { kind: 'cuff', unit: 'in', cuffDepth: true }, status: 400, field: 'cuffDepth' },
-    { why: 'a cuff depth as an object', body: { kind: 'cuff', unit: 'in', cuffDepth: { mm: 38 } }, status: 400, field: 'cuffDepth' },
-    { why: 'a huge number', body: { kind: 'cuff', unit: 'in', cuffDepth: 1e308 }, status: 400, field: 'cuffDepth' },
-    { why: 'a novel in a length', body: { kind: 'cuff', unit: 'in', cuffDepth: '1'.repeat(500) }, status: 400, field: 'cuffDepth' },
-    { why: 'letters', body: { kind: 'cuff', unit: 'in', cuffDepth: 'abc' }, status: 400, field: 'cuffDepth' },
-    { why: 'a fraction over 0', body: { kind: 'cuff', unit: 'in', cuffDepth: '1/0' }, status: 400, field: 'cuffDepth' },
-    { why: 'mixed units in one length', body: { kind: 'cuff', unit: 'in', cuffDepth: '1 in + 5 furlongs' }, status: 400, field: 'cuffDepth' },
+    { why: 'a JSON array', body: [], status: 422, field: null },
+    { why: 'JSON null', body: null, status: 422, field: null },
+    { why: 'no kind', body: { unit: 'in', cuffDepth: '1' }, status: 422, field: 'kind' },
+    { why: 'an unknown kind', body: { kind: 'hemline', unit: 'in' }, status: 422, field: 'kind' },
+    { why: 'no unit', body: { kind: 'cuff', cuffDepth: '1' }, status: 422, field: 'unit' },
+    { why: 'feet', body: { kind: 'cuff', unit: 'ft', cuffDepth: '1' }, status: 422, field: 'unit' },
+    { why: 'a precision of 10', body: { kind: 'cuff', unit: 'in', precision: 10, cuffDepth: '1' }, status: 422, field: 'precision' },
+    { why: 'precision as text', body: { kind: 'cuff', unit: 'in', precision: '16', cuffDepth: '1' }, status: 422, field: 'precision' },
+    { why: 'no cuff depth', body: { kind: 'cuff', unit: 'in' }, status: 422, field: 'cuffDepth' },
+    { why: 'a blank cuff depth', body: { kind: 'cuff', unit: 'in', cuffDepth: '   ' }, status: 422, field: 'cuffDepth' },
+    { why: 'a cuff depth of true', body: { kind: 'cuff', unit: 'in', cuffDepth: true }, status: 422, field: 'cuffDepth' },
+    { why: 'a cuff depth as an object', body: { kind: 'cuff', unit: 'in', cuffDepth: { mm: 38 } }, status: 422, field: 'cuffDepth' },
+    { why: 'a huge number', body: { kind: 'cuff', unit: 'in', cuffDepth: 1e308 }, status: 422, field: 'cuffDepth' },
+    { why: 'a novel in a length', body: { kind: 'cuff', unit: 'in', cuffDepth: '1'.repeat(500) }, status: 422, field: 'cuffDepth' },
+    { why: 'letters', body: { kind: 'cuff', unit: 'in', cuffDepth: 'abc' }, status: 422, field: 'cuffDepth' },
+    { why: 'a fraction over 0', body: { kind: 'cuff', unit: 'in', cuffDepth: '1/0' }, status: 422, field: 'cuffDepth' },
+    { why: 'mixed units in one length', body: { kind: 'cuff', unit: 'in', cuffDepth: '1 in + 5 furlongs' }, status: 422, field: 'cuffDepth' },
     { why: 'a cuff depth of 0', body: { kind: 'cuff', unit: 'in', cuffDepth: '0' }, status: 422, field: 'cuffDepth' },
     { why: 'a negative cuff depth', body: { kind: 'cuff', unit: 'in', cuffDepth: -1.5 }, status: 422, field: 'cuffDepth' },
     { why: 'a cuff deeper than any trouser', body: { kind: 'cuff', unit: 'in', cuffDepth: '7' }, status: 422, field: 'cuffDepth' },
     { why: 'a negative third section', body: { kind: 'cuff', unit: 'in', cuffDepth: '1 1/2', hemSection: '-2' }, status: 422, field: 'hemSection' },
-    { why: 'cloth given as words', body: { kind: 'cuff', unit: 'in', cuffDepth: '1 1/2', available: 'plenty' }, status: 400, field: 'available' },
-    { why: 'a hem allowance as a list', body: { kind: 'hem', unit: 'mm', hemAllowance: [40] }, status: 400, field: 'hemAllowance' },
-    { why: 'a slope that is not a length', body: { kind: 'hem', unit: 'in', slope: 'half' }, status: 400, field: 'slope' },
-    { why: 'a taper without widths', body: { kind: 'taper', unit: 'in', cuffDepth: '1 1/2' }, status: 400, field: 'widthAtEdge' },
+    { why: 'cloth given as words', body: { kind: 'cuff', unit: 'in', cuffDepth: '1 1/2', available: 'plenty' }, status: 422, field: 'available' },
+    { why: 'a hem allowance as a list', body: { kind: 'hem', unit: 'mm', hemAllowance: [40] }, status: 422, field: 'hemAllowance' },
+    { why: 'a slope that is not a length', body: { kind: 'hem', unit: 'in', slope: 'half' }, status: 422, field: 'slope' },
+    { why: 'a taper without widths', body: { kind: 'taper', unit: 'in', cuffDepth: '1 1/2' }, status: 422, field: 'widthAtEdge' },
     {
       why: 'a taper that runs out of leg',
       body: { kind: 'taper', unit: 'in', cuffDepth: '1 1/2', widthAtEdge: 1, widthAbove: 10, heightAbove: 1 },
@@ -222,17 +222,21 @@ describe('POST /api/plan: bad input is answered, never a 500', () => {
     expect(typeof res.json.error).toBe('string');
     expect(res.json.error.length).toBeGreaterThan(5);
     if (field) {
-      expect(typeof res.json.fields[field]).toBe('string');
-      expect(res.json.fields[field].length).toBeGreaterThan(5);
+      expect(typeof res.json.issues[field]).toBe('string');
+      expect(res.json.issues[field].length).toBeGreaterThan(5);
+    } else if (status === 400) {
+      // Not JSON at all: a message, no field to mark.
+      expect(res.json.issues).toBeUndefined();
     } else {
-      expect(res.json.fields).toEqual({});
+      // Not a plan (an array, null): the message names the body itself, no field of the form.
+      expect(Object.keys(res.json.issues)).toEqual(['_']);
     }
   });
 
   it('marks every field at fault at once, not only the first', async () => {
     const { status, json } = await post({ kind: 'cuff', unit: 'in', cuffDepth: 'abc', available: 'lots', turnUnder: '1/0' });
-    expect(status).toBe(400);
-    expect(Object.keys(json.fields).sort()).toEqual(['available', 'cuffDepth', 'turnUnder']);
+    expect(status).toBe(422);
+    expect(Object.keys(json.issues).sort()).toEqual(['available', 'cuffDepth', 'turnUnder']);
   });
 
   it('whatever JSON is posted, the answer is 200, 400 or 422, with a message when it is not 200', async () => {

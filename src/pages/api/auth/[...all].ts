@@ -1,7 +1,7 @@
 // better-auth's own endpoints (/api/auth/*), with failed sign-ins and reset mail limited.
-import type { APIRoute } from 'astro';
 import { auth } from '@/lib/auth';
 import { problem, readBytes } from '@/lib/api';
+import { route } from '@/lib/route';
 import { withBody } from '@/lib/body';
 import { clientOf } from '@/lib/client-address';
 import { limitedResetRequest } from '@/services/reset-limit';
@@ -22,26 +22,57 @@ function parsedBody(bytes: Uint8Array, type: string | null): Record<string, unkn
   }
 }
 
-/** Hands every /api/auth request to better-auth. */
-export const ALL: APIRoute = async (context) => {
-  const { request } = context;
-  const path = new URL(request.url).pathname;
-  // Accounts come only with a shop (/api/shops) or an invitation (/api/invitations/…).
-  if (path === '/api/auth/sign-up/email') return problem(404, 'Sign up through /sign-up.');
-  if (path === '/api/auth/organization/create') return problem(404, 'Shops are created through /sign-up.');
-  // better-auth reads the whole body as it comes: it gets the bytes once they are counted.
-  let capped = request;
-  // better-auth stores what it is sent: a NUL or a lone surrogate would fail its write with a 500.
-  let fields: Record<string, unknown> = Object.fromEntries(new URL(request.url).searchParams);
-  if (request.method !== 'GET' && request.method !== 'HEAD') {
-    const bytes = await readBytes(request);
-    if (bytes instanceof Response) return bytes;
-    capped = withBody(request, bytes);
-    fields = { ...fields, ...parsedBody(bytes, request.headers.get('content-type')) };
+/** better-auth's refusals ({ code, message }) in the API's one error shape, keeping its own fields
+ * (its client reads `message` and `code`). */
+async function oneShape(res: Response): Promise<Response> {
+  if (res.status < 400 || !res.headers.get('content-type')?.includes('application/json')) return res;
+  const text = await res.text();
+  let data: unknown = null;
+  try {
+    data = JSON.parse(text);
+  } catch {
+    // Not JSON after all: passed on as it came.
   }
-  const bad = unstorablePath(fields);
-  if (bad) return problem(422, 'Some fields need attention.', { [bad]: UNSTORABLE_MESSAGE });
-  if (capped.method === 'POST' && path === '/api/auth/sign-in/email') return limitedSignIn(capped, clientOf(context), auth.handler);
-  if (capped.method === 'POST' && path === '/api/auth/request-password-reset') return limitedResetRequest(capped, clientOf(context), auth.handler);
-  return auth.handler(capped);
-};
+  if (!data || typeof data !== 'object' || Array.isArray(data) || typeof (data as { error?: unknown }).error === 'string') {
+    return new Response(text, { status: res.status, statusText: res.statusText, headers: res.headers });
+  }
+  const fields = data as Record<string, unknown>;
+  const error = typeof fields.message === 'string' && fields.message ? fields.message : `The request was refused (${res.status}).`;
+  const headers = new Headers(res.headers);
+  headers.delete('content-length');
+  return new Response(JSON.stringify({ ...fields, error }), { status: res.status, statusText: res.statusText, headers });
+}
+
+/** Hands every /api/auth request to better-auth. */
+export const ALL = route(
+  {
+    summary: "better-auth's own endpoints: sign-in/email, sign-out, get-session, request-password-reset, reset-password, change-password, update-user…",
+    description:
+      'Public. Sign in with POST /api/auth/sign-in/email {email, password}: the answer sets the session cookie every other route reads. ' +
+      'Sign-up is POST /api/shops or an invitation; better-auth\'s organization endpoints answer 404 (staff work goes through /api/staff).',
+    permission: 'public',
+    rawBody: { type: 'application/json' },
+    examples: [{ summary: 'The session of the caller (null signed out)', params: { all: 'get-session' } }],
+  },
+  async ({ context, request }) => {
+    const path = new URL(request.url).pathname;
+    // Accounts come only with a shop (/api/shops) or an invitation (/api/invitations/…).
+    if (path === '/api/auth/sign-up/email') return problem(404, 'Sign up through /sign-up.');
+    if (path === '/api/auth/organization/create') return problem(404, 'Shops are created through /sign-up.');
+    // better-auth reads the whole body as it comes: it gets the bytes once they are counted.
+    let capped = request;
+    // better-auth stores what it is sent: a NUL or a lone surrogate would fail its write with a 500.
+    let fields: Record<string, unknown> = Object.fromEntries(new URL(request.url).searchParams);
+    if (request.method !== 'GET' && request.method !== 'HEAD') {
+      const bytes = await readBytes(request);
+      if (bytes instanceof Response) return bytes;
+      capped = withBody(request, bytes);
+      fields = { ...fields, ...parsedBody(bytes, request.headers.get('content-type')) };
+    }
+    const bad = unstorablePath(fields);
+    if (bad) return problem(422, 'Some fields need attention.', { [bad]: UNSTORABLE_MESSAGE });
+    if (capped.method === 'POST' && path === '/api/auth/sign-in/email') return oneShape(await limitedSignIn(capped, clientOf(context), auth.handler));
+    if (capped.method === 'POST' && path === '/api/auth/request-password-reset') return oneShape(await limitedResetRequest(capped, clientOf(context), auth.handler));
+    return oneShape(await auth.handler(capped));
+  },
+);

@@ -1,21 +1,18 @@
 // One customer: read, or change their name, phone, e-mail or notes.
-import type { APIRoute } from 'astro';
-import { guard, readBody, run } from '@/lib/api';
+import { route } from '@/lib/route';
 import { customerPatch } from '@/lib/customer-request';
 import { getCustomer, updateCustomer } from '@/services/customers';
 
 /** The customer, when they are the shop's. */
-export const GET: APIRoute = async ({ locals, params }) => {
-  const actor = guard(locals, ['customers', 'read']);
-  if (actor instanceof Response) return actor;
-  return run(() => getCustomer(actor, params.id ?? ''));
-};
+export const GET = route({ summary: 'One customer of the shop.', permission: ['customers', 'read'] }, ({ actor, params }) => getCustomer(actor, params.id!));
 
 /** Changes the customer's details (old and new values kept in the audit). */
-export const PATCH: APIRoute = async ({ locals, request, params }) => {
-  const actor = guard(locals, ['customers', 'update']);
-  if (actor instanceof Response) return actor;
-  const input = await readBody(request, customerPatch);
-  if (input instanceof Response) return input;
-  return run(() => updateCustomer(actor, params.id ?? '', input));
-};
+export const PATCH = route(
+  {
+    summary: "Changes the customer's name, phone, e-mail or notes (old and new values kept in the history).",
+    permission: ['customers', 'update'],
+    body: customerPatch,
+    examples: [{ summary: 'A note for next time', body: { notes: 'Prefers a deep cuff.' } }],
+  },
+  ({ actor, params, body }) => updateCustomer(actor, params.id!, body),
+);

@@ -1,25 +1,28 @@
 // The shop's customers: search (or list) and add.
-import type { APIRoute } from 'astro';
-import { guard, problem, readBody, run } from '@/lib/api';
+import { z } from 'zod';
+import { route } from '@/lib/route';
 import { customerQuery, newCustomer } from '@/lib/customer-request';
 import { createCustomer, listCustomers, searchCustomers } from '@/services/customers';
 
 /** With ?q=: the shop's customers found by name, phone, e-mail or ticket number; without: every one. */
-export const GET: APIRoute = async ({ locals, url }) => {
-  const actor = guard(locals, ['customers', 'read']);
-  if (actor instanceof Response) return actor;
-  const typed = url.searchParams.get('q');
-  if (typed === null) return run(() => listCustomers(actor));
-  const q = customerQuery.safeParse(typed);
-  if (!q.success) return problem(422, 'Some fields need attention.', { q: q.error.issues[0]!.message });
-  return run(() => searchCustomers(actor, q.data));
-};
+export const GET = route(
+  {
+    summary: "The shop's customers; with q, those found by name, phone, e-mail or ticket number.",
+    permission: ['customers', 'read'],
+    query: z.object({ q: customerQuery.optional() }),
+    examples: [{ summary: 'Every customer' }, { summary: 'Found by a phone number', query: { q: '555' } }],
+  },
+  ({ actor, query }) => (query.q === undefined ? listCustomers(actor) : searchCustomers(actor, query.q)),
+);
 
 /** Adds a customer (the same schema as intake's new customer: a blank e-mail is none). */
-export const POST: APIRoute = async ({ locals, request }) => {
-  const actor = guard(locals, ['customers', 'create']);
-  if (actor instanceof Response) return actor;
-  const input = await readBody(request, newCustomer);
-  if (input instanceof Response) return input;
-  return run(() => createCustomer(actor, input), 201);
-};
+export const POST = route(
+  {
+    summary: 'Adds a customer (a blank e-mail is none).',
+    permission: ['customers', 'create'],
+    body: newCustomer,
+    status: 201,
+    examples: [{ summary: 'A walk-in with a phone number', body: { name: 'Rowan Example', phone: '555 0100' } }],
+  },
+  ({ actor, body }) => createCustomer(actor, body),
+);

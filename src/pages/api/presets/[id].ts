@@ -1,34 +1,47 @@
 // One preset: change it or remove it. House presets are the lead's; your own are yours.
-import type { APIContext, APIRoute } from 'astro';
-import { guard, problem, readBody, run, type Actor } from '@/lib/api';
+import { problem } from '@/lib/api';
 import { presetUpdateInput } from '@/lib/preset-settings';
+import { demand, route } from '@/lib/route';
+import type { Actor } from '@/lib/api';
+import type { Permission } from '@/lib/roles';
 import { deletePreset, presetScope, settingsIssues, updatePreset } from '@/services/presets';
 
 export const prerender = false;
 
-/** The actor allowed to change this preset, or the 401/403/404 answer. */
-async function changer({ locals, params }: APIContext): Promise<Actor | Response> {
-  const reader = guard(locals, ['presets', 'read']);
-  if (reader instanceof Response) return reader;
-  const scope = await presetScope(reader, params.id ?? '');
+// Either permission lets the caller look; the preset's scope decides which one it needs.
+const CHANGERS: Permission[] = [
+  ['presets', 'create-own'],
+  ['presets', 'manage-house'],
+];
+
+/** Refuses unless the actor may change this preset: a house preset is the lead's (404 when not the shop's). */
+async function mayChange(actor: Actor, id: string): Promise<Response | null> {
+  const scope = await presetScope(actor, id);
   if (!scope) return problem(404, 'No such preset.');
-  return guard(locals, ['presets', scope === 'house' ? 'manage-house' : 'create-own']);
+  demand(actor, ['presets', scope === 'house' ? 'manage-house' : 'create-own']);
+  return null;
 }
 
 /** Renames it, changes its settings, or makes it the house default. */
-export const PATCH: APIRoute = async (context) => {
-  const actor = await changer(context);
-  if (actor instanceof Response) return actor;
-  const input = await readBody(context.request, presetUpdateInput);
-  if (input instanceof Response) return input;
-  const issues = input.settings ? settingsIssues(input.settings) : {};
-  if (Object.keys(issues).length) return problem(422, Object.values(issues)[0]!, issues);
-  return run(() => updatePreset(actor, context.params.id ?? '', input));
-};
+export const PATCH = route(
+  {
+    summary: 'Renames a preset, changes its settings, or makes a house preset the default (house presets: the lead).',
+    permission: CHANGERS,
+    body: presetUpdateInput,
+    examples: [{ summary: 'A new name', body: { name: 'Deep cuff' } }],
+  },
+  async ({ actor, params, body }) => {
+    const refused = await mayChange(actor, params.id!);
+    if (refused) return refused;
+    const issues = body.settings ? settingsIssues(body.settings) : {};
+    if (Object.keys(issues).length) return problem(422, Object.values(issues)[0]!, issues);
+    return updatePreset(actor, params.id!, body);
+  },
+);
 
 /** Removes it. */
-export const DELETE: APIRoute = async (context) => {
-  const actor = await changer(context);
-  if (actor instanceof Response) return actor;
-  return run(() => deletePreset(actor, context.params.id ?? ''));
-};
+export const DELETE = route({ summary: 'Removes a preset (house presets: the lead).', permission: CHANGERS }, async ({ actor, params }) => {
+  const refused = await mayChange(actor, params.id!);
+  if (refused) return refused;
+  return deletePreset(actor, params.id!);
+});

@@ -1,26 +1,30 @@
 // Presets: the shop's house presets and your own; adding one.
-import type { APIRoute } from 'astro';
-import { guard, problem, readBody, run } from '@/lib/api';
+import { problem } from '@/lib/api';
 import { presetCreateInput } from '@/lib/preset-settings';
+import { demand, route } from '@/lib/route';
 import { createPreset, listPresets, settingsIssues } from '@/services/presets';
 
 export const prerender = false;
 
 /** House presets (the default first) and the caller's own. */
-export const GET: APIRoute = async ({ locals }) => {
-  const actor = guard(locals, ['presets', 'read']);
-  if (actor instanceof Response) return actor;
-  return run(() => listPresets(actor));
-};
+export const GET = route({ summary: "The shop's house presets (the default first) and the caller's own.", permission: ['presets', 'read'] }, ({ actor }) => listPresets(actor));
 
 /** Adds a house preset (lead only) or a personal one; lengths are read by the engine (422 per field). */
-export const POST: APIRoute = async ({ locals, request }) => {
-  const input = await readBody(request.clone(), presetCreateInput);
-  const house = !(input instanceof Response) && input.scope === 'house';
-  const actor = guard(locals, ['presets', house ? 'manage-house' : 'create-own']);
-  if (actor instanceof Response) return actor;
-  if (input instanceof Response) return input;
-  const issues = settingsIssues(input.settings);
-  if (Object.keys(issues).length) return problem(422, Object.values(issues)[0]!, issues);
-  return run(() => createPreset(actor, input), 201);
-};
+export const POST = route(
+  {
+    summary: 'Adds a personal preset, or a house preset (the lead); lengths are read as the calculator reads them.',
+    permission: [
+      ['presets', 'create-own'],
+      ['presets', 'manage-house'],
+    ],
+    body: presetCreateInput,
+    status: 201,
+    examples: [{ summary: 'My usual cuff', body: { name: 'My 1 1/2 in cuff', scope: 'personal', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } } }],
+  },
+  ({ actor, body }) => {
+    demand(actor, ['presets', body.scope === 'house' ? 'manage-house' : 'create-own']);
+    const issues = settingsIssues(body.settings);
+    if (Object.keys(issues).length) return problem(422, Object.values(issues)[0]!, issues);
+    return createPreset(actor, body);
+  },
+);

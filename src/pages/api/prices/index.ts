@@ -1,23 +1,39 @@
 // The shop's price list and counter settings: everyone at the counter reads it, the lead keeps it.
-import type { APIRoute } from 'astro';
-import { guard, readBody, run } from '@/lib/api';
+import { route } from '@/lib/route';
 import { priceListInput } from '@/lib/counter-request';
 import { getPriceList, savePriceList } from '@/services/counter/prices';
 
 export const prerender = false;
 
 /** The price list with currency, hours and the automatic-notice setting. */
-export const GET: APIRoute = async ({ locals }) => {
-  const actor = guard(locals, ['prices', 'read']);
-  if (actor instanceof Response) return actor;
-  return run(() => getPriceList(actor));
-};
+export const GET = route({ summary: 'The price list with currency, opening hours, address and the automatic ready notice.', permission: ['prices', 'read'] }, ({ actor }) =>
+  getPriceList(actor),
+);
 
 /** Saves the whole list and the settings. */
-export const PUT: APIRoute = async ({ locals, request }) => {
-  const actor = guard(locals, ['prices', 'update']);
-  if (actor instanceof Response) return actor;
-  const input = await readBody(request, priceListInput);
-  if (input instanceof Response) return input;
-  return run(() => savePriceList(actor, input));
-};
+export const PUT = route(
+  {
+    summary: 'Saves the whole price list and the counter settings (amounts in minor units: cents).',
+    permission: ['prices', 'update'],
+    body: priceListInput,
+    examples: [
+      {
+        summary: 'Every line of the list, in euros',
+        body: {
+          currency: 'EUR',
+          hours: 'Tue–Fri 9:00–18:00, Sat 9:00–13:00',
+          location: '7 Bobbin Row, Wickhollow',
+          autoReadyNotice: false,
+          items: [
+            { key: 'plain-hem', label: 'Plain hem', amountMinor: 1650 },
+            { key: 'cuff-from-hem', label: 'Cuff from a plain hem', amountMinor: 2400 },
+            { key: 'cuff-remake', label: 'Cuff let down and re-made', amountMinor: 2950 },
+            { key: 'taper-let-out', label: 'Taper let-out at the cuff (per pair)', amountMinor: 1100 },
+            { key: 'rush', label: 'Rush surcharge (per ticket)', amountMinor: 900 },
+          ],
+        },
+      },
+    ],
+  },
+  ({ actor, body }) => savePriceList(actor, body),
+);

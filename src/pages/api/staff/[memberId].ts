@@ -1,21 +1,15 @@
 // One member of the staff: change the role or remove (lead).
-import type { APIRoute } from 'astro';
-import { guard, readBody, run } from '@/lib/api';
+import { route } from '@/lib/route';
 import { roleChangeInput } from '@/lib/account-inputs';
 import { changeRole, removeMember } from '@/services/staff';
 
 /** Changes the member's role. */
-export const PATCH: APIRoute = async ({ locals, request, params }) => {
-  const actor = guard(locals, ['staff', 'change-role']);
-  if (actor instanceof Response) return actor;
-  const input = await readBody(request, roleChangeInput);
-  if (input instanceof Response) return input;
-  return run(() => changeRole(actor, request.headers, params.memberId ?? '', input));
-};
+export const PATCH = route(
+  { summary: "Changes a member's role.", permission: ['staff', 'change-role'], body: roleChangeInput, examples: [{ summary: 'Now a tailor', body: { role: 'tailor' } }] },
+  ({ actor, params, body, request }) => changeRole(actor, request.headers, params.memberId!, body),
+);
 
 /** Removes the member from the shop. */
-export const DELETE: APIRoute = async ({ locals, request, params }) => {
-  const actor = guard(locals, ['staff', 'remove']);
-  if (actor instanceof Response) return actor;
-  return run(() => removeMember(actor, request.headers, params.memberId ?? ''));
-};
+export const DELETE = route({ summary: 'Removes a member from the shop.', permission: ['staff', 'remove'] }, ({ actor, params, request }) =>
+  removeMember(actor, request.headers, params.memberId!),
+);

@@ -1,22 +1,26 @@
 // One ticket: read it with its customer and garments, or move it (all its garments at its step) on.
-import type { APIRoute } from 'astro';
-import { guard, readBody, run } from '@/lib/api';
+import { demand, route } from '@/lib/route';
 import { ticketStatusInput } from '@/db/schema/tickets';
 import { getTicket, moveTicket } from '@/services/tickets';
 
 /** The ticket with its customer and the garments the role may see. */
-export const GET: APIRoute = async ({ locals, params }) => {
-  const actor = guard(locals, ['tickets', 'read']);
-  if (actor instanceof Response) return actor;
-  return run(() => getTicket(actor, params.id ?? ''));
-};
+export const GET = route({ summary: 'One ticket with its customer and the garments the role may see.', permission: ['tickets', 'read'] }, ({ actor, params }) =>
+  getTicket(actor, params.id!),
+);
 
 /** Moves the ticket to its next step. */
-export const PATCH: APIRoute = async ({ locals, request, params }) => {
-  const input = await readBody(request.clone(), ticketStatusInput);
-  const permission = input instanceof Response || input.status !== 'collected' ? 'advance' : 'pickup';
-  const actor = guard(locals, ['tickets', permission]);
-  if (actor instanceof Response) return actor;
-  if (input instanceof Response) return input;
-  return run(() => moveTicket(actor, params.id ?? '', input.status));
-};
+export const PATCH = route(
+  {
+    summary: 'Moves the ticket (every garment at its step) to the next step (to collected: the pickup permission).',
+    permission: [
+      ['tickets', 'advance'],
+      ['tickets', 'pickup'],
+    ],
+    body: ticketStatusInput,
+    examples: [{ summary: 'Received to marked', body: { status: 'marked' } }],
+  },
+  ({ actor, params, body }) => {
+    demand(actor, ['tickets', body.status === 'collected' ? 'pickup' : 'advance']);
+    return moveTicket(actor, params.id!, body.status);
+  },
+);

@@ -1,24 +1,32 @@
 // The shop's tickets: the list as the role sees it, and intake with the garments brought in.
-import type { APIRoute } from 'astro';
-import { guard, problem, readBody, run } from '@/lib/api';
+import { route, demand } from '@/lib/route';
 import { intakeRequest, pricesAtIntake } from '@/lib/bench-requests';
-import { can } from '@/lib/roles';
 import { createTicket, listTickets } from '@/services/tickets';
 
 /** Tickets visible to the role (an apprentice sees assigned-to-them and unassigned), newest number first. */
-export const GET: APIRoute = async ({ locals }) => {
-  const actor = guard(locals, ['tickets', 'read']);
-  if (actor instanceof Response) return actor;
-  return run(() => listTickets(actor));
-};
+export const GET = route(
+  { summary: 'The tickets the role may see (an apprentice: theirs and unassigned), newest number first.', permission: ['tickets', 'read'] },
+  ({ actor }) => listTickets(actor),
+);
 
 /** Opens a ticket: an existing customer or a new one, and its garments, priced at intake when asked (the counter and the lead). */
-export const POST: APIRoute = async ({ locals, request }) => {
-  const actor = guard(locals, ['tickets', 'create']);
-  if (actor instanceof Response) return actor;
-  const input = await readBody(request, intakeRequest);
-  if (input instanceof Response) return input;
-  if (input.customer && !can(actor.role, ['customers', 'create'])) return problem(403, `Your role (${actor.role}) may not add customers.`);
-  if (pricesAtIntake(input) && !can(actor.role, ['prices', 'adjust'])) return problem(403, `Your role (${actor.role}) may not price work at intake.`);
-  return run(() => createTicket(actor, input), 201);
-};
+export const POST = route(
+  {
+    summary:
+      'Opens a ticket for an existing customer (customerId) or a new one (customer: also customers.create), with its garments; priced at intake when asked (also prices.adjust).',
+    permission: ['tickets', 'create'],
+    body: intakeRequest,
+    status: 201,
+    examples: [
+      {
+        summary: 'A walk-in with one pair',
+        body: { customer: { name: 'Robin Example', phone: '555 0123' }, dueOn: '2027-03-01', garments: [{ description: 'Navy wool trousers' }] },
+      },
+    ],
+  },
+  ({ actor, body }) => {
+    if (body.customer) demand(actor, ['customers', 'create'], 'add customers');
+    if (pricesAtIntake(body)) demand(actor, ['prices', 'adjust'], 'price work at intake');
+    return createTicket(actor, body);
+  },
+);

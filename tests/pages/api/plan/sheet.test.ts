@@ -63,54 +63,54 @@ describe('POST /api/plan/sheet', () => {
     expect(flatText(await pdfOf(res))).toContain('Plain hem, 1 1/2 in allowance');
   });
 
-  it('answers 400 with a message per field for a missing cuff depth', async () => {
+  it('answers 422 with a message per field for a missing cuff depth', async () => {
     const res = await post({ kind: 'cuff', unit: 'in' });
-    expect(res.status).toBe(400);
+    expect(res.status).toBe(422);
     const body = await res.json();
-    expect(body.fields.cuffDepth).toMatch(/cuff depth/i);
+    expect(body.issues.cuffDepth).toMatch(/cuff depth/i);
   });
 
-  it('answers 400 for a length the engine cannot read, on the leg and field at fault', async () => {
+  it('answers 422 for a length the engine cannot read, on the leg and field at fault', async () => {
     const res = await post({ kind: 'cuff', unit: 'in', cuffDepth: '1 1/2', right: { kind: 'cuff', unit: 'in', cuffDepth: 'deep' } });
-    expect(res.status).toBe(400);
+    expect(res.status).toBe(422);
     const body = await res.json();
-    expect(Object.keys(body.fields)).toEqual(['right.cuffDepth']);
+    expect(Object.keys(body.issues)).toEqual(['right.cuffDepth']);
     expect(typeof body.error).toBe('string');
   });
 
-  it('answers 400 for an unreadable taper width', async () => {
+  it('answers 422 for an unreadable taper width', async () => {
     const res = await post({ kind: 'cuff', unit: 'in', cuffDepth: 1.5, taper: { widthAtEdge: 'wide', widthAbove: 8.5, heightAbove: 6 } });
-    expect(res.status).toBe(400);
-    expect(Object.keys((await res.json()).fields)).toContain('taper.widthAtEdge');
+    expect(res.status).toBe(422);
+    expect(Object.keys((await res.json()).issues)).toContain('taper.widthAtEdge');
   });
 
-  it('answers 400 for legs in different units, a bad page size, an unknown kind and broken JSON', async () => {
+  it('answers 422 for legs in different units, a bad page size and an unknown kind; 400 for broken JSON', async () => {
     const mixed = await post({ kind: 'cuff', unit: 'in', cuffDepth: 1.5, right: { kind: 'hem', unit: 'mm' } });
-    expect(mixed.status).toBe(400);
-    expect((await mixed.json()).fields['right.unit']).toMatch(/same unit/);
+    expect(mixed.status).toBe(422);
+    expect((await mixed.json()).issues['right.unit']).toMatch(/same unit/);
 
     const paper = await post({ kind: 'hem', unit: 'in', pageSize: 'A3' });
-    expect(paper.status).toBe(400);
-    expect((await paper.json()).fields.pageSize).toMatch(/Letter or A4/);
+    expect(paper.status).toBe(422);
+    expect((await paper.json()).issues.pageSize).toMatch(/Letter or A4/);
 
     const kind = await post({ kind: 'taper', unit: 'in' });
-    expect(kind.status).toBe(400);
+    expect(kind.status).toBe(422);
 
     const broken = await post('{"kind":');
     expect(broken.status).toBe(400);
     expect((await broken.json()).error).toMatch(/JSON/);
   });
 
-  it('answers 400, never 500, for taper widths each sound but giving no leg at the cuff top, on the leg at fault', async () => {
+  it('answers 422, never 500, for taper widths each sound but giving no leg at the cuff top, on the leg at fault', async () => {
     // 8 in flat at the edge and 1 in one inch higher: followed up 1 1/2 in there is no leg left.
     const taper = { widthAtEdge: 8, widthAbove: 1, heightAbove: 1 };
     const left = await post({ kind: 'cuff', unit: 'in', cuffDepth: 1.5, taper });
-    expect(left.status).toBe(400);
+    expect(left.status).toBe(422);
     const body = await left.json();
     expect(body.error).toMatch(/no leg/);
-    expect(Object.keys(body.fields)).toEqual(['taper.widthAbove']);
+    expect(Object.keys(body.issues)).toEqual(['taper.widthAbove']);
     const right = await post({ kind: 'cuff', unit: 'in', cuffDepth: 1.5, right: { kind: 'cuff', unit: 'in', cuffDepth: 1.5, taper } });
-    expect(right.status).toBe(400);
-    expect(Object.keys((await right.json()).fields)).toEqual(['right.taper.widthAbove']);
+    expect(right.status).toBe(422);
+    expect(Object.keys((await right.json()).issues)).toEqual(['right.taper.widthAbove']);
   });
 });

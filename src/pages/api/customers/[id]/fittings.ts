@@ -1,11 +1,9 @@
 // "Same as last time": the customer's earlier fittings, offered when a garment is taken in.
-import type { APIRoute } from 'astro';
-import { guard, run } from '@/lib/api';
+import { route } from '@/lib/route';
 import { previousFittings } from '@/services/fitting-copy';
 
 /** The customer's latest fittings per garment kind; for whoever takes garments in. */
-export const GET: APIRoute = async ({ locals, params }) => {
-  const actor = guard(locals, ['tickets', 'create']);
-  if (actor instanceof Response) return actor;
-  return run(() => previousFittings(actor, params.id ?? ''));
-};
+export const GET = route(
+  { summary: "The customer's latest fittings per garment kind (\"same as last time\" at intake).", permission: ['tickets', 'create'] },
+  ({ actor, params }) => previousFittings(actor, params.id!),
+);

@@ -1,23 +1,37 @@
 // A garment's fitting measurements per leg: read them with their history; save both legs.
-import type { APIRoute } from 'astro';
-import { guard, problem, readBody, run } from '@/lib/api';
+import { problem } from '@/lib/api';
+import { route } from '@/lib/route';
 import { measurementsRequest } from '@/lib/measurement-request';
 import { fittingOf, readLengths, saveMeasurements } from '@/services/measurements';
 
 /** Both legs as saved and every change to them, newest first. */
-export const GET: APIRoute = async ({ locals, params }) => {
-  const actor = guard(locals, ['measurements', 'read']);
-  if (actor instanceof Response) return actor;
-  return run(() => fittingOf(actor, params.id ?? ''));
-};
+export const GET = route(
+  { summary: "The garment's fitting: both legs as saved and every change to them, newest first.", permission: ['measurements', 'read'] },
+  ({ actor, params }) => fittingOf(actor, params.id!),
+);
 
 /** Saves both legs; a length the engine cannot read is 422 with a message for that field. */
-export const PUT: APIRoute = async ({ locals, request, params }) => {
-  const actor = guard(locals, ['measurements', 'update']);
-  if (actor instanceof Response) return actor;
-  const input = await readBody(request, measurementsRequest);
-  if (input instanceof Response) return input;
-  const read = readLengths(input);
-  if (!read.ok) return problem(422, 'Some lengths could not be read.', read.issues);
-  return run(() => saveMeasurements(actor, params.id ?? '', input, read.legs));
-};
+export const PUT = route(
+  {
+    summary: 'Saves both legs of the fitting; a length that cannot be read is refused for its field.',
+    permission: ['measurements', 'update'],
+    body: measurementsRequest,
+    examples: [
+      {
+        summary: 'A cuff on both legs, in inches',
+        body: {
+          unit: 'in',
+          legs: {
+            left: { finish: 'cuff', backPin: '31 1/4', cuffDepth: '1 1/2', available: '5' },
+            right: { finish: 'cuff', backPin: '31 1/2', cuffDepth: '1 1/2', available: '4 3/4' },
+          },
+        },
+      },
+    ],
+  },
+  ({ actor, params, body }) => {
+    const read = readLengths(body);
+    if (!read.ok) return problem(422, 'Some lengths could not be read.', read.issues);
+    return saveMeasurements(actor, params.id!, body, read.legs);
+  },
+);

@@ -1,7 +1,9 @@
 // What an invitation link offers (public: the id itself is the secret from the e-mail).
-import type { APIRoute } from 'astro';
-import { run } from '@/lib/api';
+import { route } from '@/lib/route';
 import { viewInvitation } from '@/services/invitations';
 
 /** The pending invitation's shop, role and e-mail. */
-export const GET: APIRoute = async ({ params }) => run(() => viewInvitation(params.id ?? ''));
+export const GET = route(
+  { summary: "A pending invitation's shop, role and e-mail (public: the id from the e-mail is the secret).", permission: 'public' },
+  ({ params }) => viewInvitation(params.id!),
+);

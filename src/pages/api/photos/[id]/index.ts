@@ -1,17 +1,15 @@
 // One fitting photo: the full picture, or removing it.
-import type { APIRoute } from 'astro';
-import { guard, run } from '@/lib/api';
+import { route } from '@/lib/route';
 import { servePhoto } from '@/services/serve-photo';
 import { deletePhoto } from '@/services/photos';
 
 export const prerender = false;
 
 /** The photo as kept (upright, without its metadata), to members of its shop only. */
-export const GET: APIRoute = ({ locals, params }) => servePhoto(locals, params.id ?? '', 'full');
+export const GET = route(
+  { summary: 'The photo as kept (upright, without its metadata).', permission: ['photos', 'read'], answer: 'image/*' },
+  ({ context, params }) => servePhoto(context.locals, params.id!, 'full'),
+);
 
 /** Removes the photo and its thumbnail. */
-export const DELETE: APIRoute = async ({ locals, params }) => {
-  const actor = guard(locals, ['photos', 'delete']);
-  if (actor instanceof Response) return actor;
-  return run(() => deletePhoto(actor, params.id ?? ''));
-};
+export const DELETE = route({ summary: 'Removes the photo and its thumbnail.', permission: ['photos', 'delete'] }, ({ actor, params }) => deletePhoto(actor, params.id!));

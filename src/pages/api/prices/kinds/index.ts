@@ -1,16 +1,18 @@
 // The lead's kinds of work on the price list: a new one ("Replace zip"), with a flat price.
-import type { APIRoute } from 'astro';
-import { guard, readBody, run } from '@/lib/api';
 import { priceKindInput } from '@/lib/counter-request';
+import { route } from '@/lib/route';
 import { addKind } from '@/services/counter/price-kinds';
 
 export const prerender = false;
 
 /** Adds a kind of work; 409 when a kind on the list already has that name. */
-export const POST: APIRoute = async ({ locals, request }) => {
-  const actor = guard(locals, ['prices', 'update']);
-  if (actor instanceof Response) return actor;
-  const input = await readBody(request, priceKindInput);
-  if (input instanceof Response) return input;
-  return run(() => addKind(actor, input), 201);
-};
+export const POST = route(
+  {
+    summary: 'Adds a kind of work with a flat price (minor units); 409 when a kind on the list has that name.',
+    permission: ['prices', 'update'],
+    body: priceKindInput,
+    status: 201,
+    examples: [{ summary: 'Shorten a lining', body: { name: 'Shorten a lining', amountMinor: 1400, rushApplies: true } }],
+  },
+  ({ actor, body }) => addKind(actor, body),
+);

@@ -1,14 +1,16 @@
 // Adds a garment to a ticket (a second pair brought in at the counter, or found at the bench).
-import type { APIRoute } from 'astro';
-import { guard, readBody, run } from '@/lib/api';
+import { route } from '@/lib/route';
 import { garmentInput } from '@/lib/bench-requests';
 import { addGarment } from '@/services/garments';
 
 /** Adds one garment to the ticket. */
-export const POST: APIRoute = async ({ locals, request, params }) => {
-  const actor = guard(locals, ['tickets', 'create']);
-  if (actor instanceof Response) return actor;
-  const input = await readBody(request, garmentInput);
-  if (input instanceof Response) return input;
-  return run(() => addGarment(actor, params.id ?? '', input), 201);
-};
+export const POST = route(
+  {
+    summary: 'Adds one garment to the ticket.',
+    permission: ['tickets', 'create'],
+    body: garmentInput,
+    status: 201,
+    examples: [{ summary: 'A second pair', body: { description: 'Grey flannel trousers' } }],
+  },
+  ({ actor, params, body }) => addGarment(actor, params.id!, body),
+);

@@ -1,6 +1,5 @@
 // A ticket's money at the counter: the summary (lines, total, payments, balance) and taking a payment.
-import type { APIRoute } from 'astro';
-import { guard, readBody, run } from '@/lib/api';
+import { route } from '@/lib/route';
 import { paymentInput } from '@/lib/counter-request';
 import { smsConfigured } from '@/lib/sms-service';
 import { counterSummary, takePayment } from '@/services/counter/payments';
@@ -8,17 +7,19 @@ import { counterSummary, takePayment } from '@/services/counter/payments';
 export const prerender = false;
 
 /** Lines, total, payments, balance due and the payment link, and whether texts are set up. */
-export const GET: APIRoute = async ({ locals, params }) => {
-  const actor = guard(locals, ['prices', 'read']);
-  if (actor instanceof Response) return actor;
-  return run(async () => ({ ...(await counterSummary(actor, params.id ?? '')), textsReady: smsConfigured() }));
-};
+export const GET = route(
+  { summary: "The ticket's money: lines, total, payments, balance due, the payment link, and whether texts are set up.", permission: ['prices', 'read'] },
+  async ({ actor, params }) => ({ ...(await counterSummary(actor, params.id!)), textsReady: smsConfigured() }),
+);
 
 /** Takes a deposit or the balance in cash or by card. */
-export const POST: APIRoute = async ({ locals, request, params }) => {
-  const actor = guard(locals, ['payments', 'take']);
-  if (actor instanceof Response) return actor;
-  const input = await readBody(request, paymentInput);
-  if (input instanceof Response) return input;
-  return run(() => takePayment(actor, params.id ?? '', input), 201);
-};
+export const POST = route(
+  {
+    summary: 'Takes a deposit or the balance in cash or by card (amounts in minor units: cents).',
+    permission: ['payments', 'take'],
+    body: paymentInput,
+    status: 201,
+    examples: [{ summary: 'A 10.00 deposit in cash', body: { method: 'cash', amountMinor: 1000 } }],
+  },
+  ({ actor, params, body }) => takePayment(actor, params.id!, body),
+);

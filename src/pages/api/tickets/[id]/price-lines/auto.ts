@@ -1,16 +1,17 @@
 // Prices the ticket from its garments' finishes and plans (taper let-out included), with or without rush.
-import type { APIRoute } from 'astro';
-import { guard, readBody, run } from '@/lib/api';
+import { route } from '@/lib/route';
 import { autoLinesInput } from '@/lib/counter-request';
 import { priceFromGarments } from '@/services/counter/prices';
 
 export const prerender = false;
 
 /** Replaces the worked-out lines; hand-added lines and adjustments stay. */
-export const POST: APIRoute = async ({ locals, request, params }) => {
-  const actor = guard(locals, ['prices', 'adjust']);
-  if (actor instanceof Response) return actor;
-  const input = await readBody(request, autoLinesInput);
-  if (input instanceof Response) return input;
-  return run(() => priceFromGarments(actor, params.id ?? '', input));
-};
+export const POST = route(
+  {
+    summary: "Prices the ticket from its garments' finishes and plans, with or without rush; hand-added lines stay.",
+    permission: ['prices', 'adjust'],
+    body: autoLinesInput,
+    examples: [{ summary: 'No rush', body: { rush: false } }],
+  },
+  ({ actor, params, body }) => priceFromGarments(actor, params.id!, body),
+);

@@ -1,23 +1,24 @@
 // A ticket's price lines: read them, or add one from the list or an adjustment with its reason.
-import type { APIRoute } from 'astro';
-import { guard, readBody, run } from '@/lib/api';
+import { route } from '@/lib/route';
 import { lineInput } from '@/lib/counter-request';
 import { addLine, listLines } from '@/services/counter/prices';
 
 export const prerender = false;
 
 /** The ticket's lines. */
-export const GET: APIRoute = async ({ locals, params }) => {
-  const actor = guard(locals, ['prices', 'read']);
-  if (actor instanceof Response) return actor;
-  return run(() => listLines(actor, params.id ?? ''));
-};
+export const GET = route({ summary: "The ticket's price lines.", permission: ['prices', 'read'] }, ({ actor, params }) => listLines(actor, params.id!));
 
 /** Adds a line from the list, or an adjustment with its reason. */
-export const POST: APIRoute = async ({ locals, request, params }) => {
-  const actor = guard(locals, ['prices', 'adjust']);
-  if (actor instanceof Response) return actor;
-  const input = await readBody(request, lineInput);
-  if (input instanceof Response) return input;
-  return run(() => addLine(actor, params.id ?? '', input), 201);
-};
+export const POST = route(
+  {
+    summary: 'Adds a line from the price list, an adjustment with its reason, or "no charge" with its reason.',
+    permission: ['prices', 'adjust'],
+    body: lineInput,
+    status: 201,
+    examples: [
+      { summary: 'A cuff from the list', body: { source: 'list', key: 'cuff-from-hem' } },
+      { summary: 'A 1.00 reduction', body: { source: 'adjust', label: 'Loyal customer', amountMinor: -100, reason: 'Third pair this month' } },
+    ],
+  },
+  ({ actor, params, body }) => addLine(actor, params.id!, body),
+);

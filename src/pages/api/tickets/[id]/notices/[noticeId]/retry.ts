@@ -1,13 +1,11 @@
 // Tries a failed notice again now.
-import type { APIRoute } from 'astro';
-import { guard, run } from '@/lib/api';
+import { route } from '@/lib/route';
 import { retryNotice } from '@/services/notices';
 
 export const prerender = false;
 
 /** One more delivery attempt; the notice comes back with its new state. */
-export const POST: APIRoute = async ({ locals, params }) => {
-  const actor = guard(locals, ['notices', 'send']);
-  if (actor instanceof Response) return actor;
-  return run(() => retryNotice(actor, params.id ?? '', params.noticeId ?? ''));
-};
+export const POST = route(
+  { summary: 'Tries a failed notice again now (409 for one that went); answers the notice with its new state.', permission: ['notices', 'send'] },
+  ({ actor, params }) => retryNotice(actor, params.id!, params.noticeId!),
+);
