@@ -51,9 +51,7 @@ module.exports = {
     },
     {
       name: 'pricing-is-pure',
-      comment:
-        'Price computation imports only its own files, the engine and npm packages: no app code, ' +
-        'no Astro, no Node built-ins.',
+      comment: 'Price computation imports only its own files, the engine and npm packages: no app code, ' + 'no Astro, no Node built-ins.',
       severity: 'error',
       from: { path: '^src/lib/pricing/' },
       to: { pathNot: ['^src/lib/pricing/', '^src/lib/allowance/'], dependencyTypesNot: NPM_PACKAGE },
@@ -107,16 +105,15 @@ module.exports = {
     },
     {
       name: 'islands-no-db',
-      comment:
-        'Islands reach the browser: no database module or table (a shape they read comes from a ' +
-        'shared schema in src/lib, dates as strings).',
+      comment: 'Islands reach the browser: no database module or table (a shape they read comes from a ' + 'shared schema in src/lib, dates as strings).',
       severity: 'error',
       from: { path: '^src/components/' },
       to: { path: '^src/db/' },
     },
     {
       name: 'islands-no-services',
-      comment: 'Islands reach the browser: no service, not even its types (they call the API through fetch; ' +
+      comment:
+        'Islands reach the browser: no service, not even its types (they call the API through fetch; ' +
         'response shapes live in src/lib, e.g. counter-views.ts, dates as strings).',
       severity: 'error',
       from: { path: '^src/components/' },

@@ -42,14 +42,38 @@ async function api(method, path, cookie, body) {
 // Invented figures a shop might take: cuff depths in eighths, cloth three depths and a bit more.
 const DEPTHS = ['1 1/4', '1 3/8', '1 1/2', '1 5/8', '1 3/4'];
 const CLOTHS = ['Navy twill', 'Grey flannel', 'Tan chino', 'Olive cord', 'Charcoal serge', 'Stone drill'];
-const blank = { backPin: '', frontPin: '', cuffDepth: '', hemSection: '', turnUnder: '', hemAllowance: '', slope: '', available: '', oldCrease: '', widthAtEdge: '', widthAbove: '', heightAbove: '', seamAllowance: '' };
+const blank = {
+  backPin: '',
+  frontPin: '',
+  cuffDepth: '',
+  hemSection: '',
+  turnUnder: '',
+  hemAllowance: '',
+  slope: '',
+  available: '',
+  oldCrease: '',
+  widthAtEdge: '',
+  widthAbove: '',
+  heightAbove: '',
+  seamAllowance: '',
+};
 function fitting(i, full) {
   if (full) {
     // The fullest sheet: a tapered left leg, a right leg short of cloth with an old crease.
     return {
       unit: 'in',
       legs: {
-        left: { ...blank, finish: 'cuff', cuffDepth: '1 1/2', available: '5', widthAtEdge: '7 1/2', widthAbove: '8 1/2', heightAbove: '6', seamAllowance: '1', backPin: '31' },
+        left: {
+          ...blank,
+          finish: 'cuff',
+          cuffDepth: '1 1/2',
+          available: '5',
+          widthAtEdge: '7 1/2',
+          widthAbove: '8 1/2',
+          heightAbove: '6',
+          seamAllowance: '1',
+          backPin: '31',
+        },
         right: { ...blank, finish: 'cuff', cuffDepth: '1 3/4', available: '4 3/4', oldCrease: '2 1/2', backPin: '31' },
       },
     };
@@ -159,7 +183,9 @@ for (let round = 0; round < ROUNDS; round++) {
   byRound.beside50.push(p(b, 50));
   byRound.beside99.push(p(b, 99));
 }
-console.log(`member GET alone: p50 ${p(alone, 50).toFixed(1)} ms, p99 ${p(alone, 99).toFixed(1)} ms; while a batch of ${SMALL} prints: p50 ${p(beside, 50).toFixed(1)} ms, p99 ${p(beside, 99).toFixed(1)} ms`);
+console.log(
+  `member GET alone: p50 ${p(alone, 50).toFixed(1)} ms, p99 ${p(alone, 99).toFixed(1)} ms; while a batch of ${SMALL} prints: p50 ${p(beside, 50).toFixed(1)} ms, p99 ${p(beside, 99).toFixed(1)} ms`,
+);
 
 const note = `${made} fitted garments, 1 in 10 overfull (2 pages); served by npm start`;
 writeFigures('batch', [

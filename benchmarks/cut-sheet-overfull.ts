@@ -28,4 +28,6 @@ for (let r = 0; r < 8; r++) {
 }
 const med = (a: number[]) => [...a].sort((x, y) => x - y)[Math.floor(a.length / 2)]!.toFixed(1);
 const min = (a: number[]) => Math.min(...a).toFixed(1);
-console.log(`load ${load0.toFixed(1)}→${loadavg()[0]!.toFixed(1)}; cpu ms/sheet (1 in 4 overfull) split off: median ${med(res.off!)} min ${min(res.off!)}; on: median ${med(res.on!)} min ${min(res.on!)}; overfull alone off: median ${med(res.overOff!)} min ${min(res.overOff!)}; on: median ${med(res.overOn!)} min ${min(res.overOn!)}`);
+console.log(
+  `load ${load0.toFixed(1)}→${loadavg()[0]!.toFixed(1)}; cpu ms/sheet (1 in 4 overfull) split off: median ${med(res.off!)} min ${min(res.off!)}; on: median ${med(res.on!)} min ${min(res.on!)}; overfull alone off: median ${med(res.overOff!)} min ${min(res.overOff!)}; on: median ${med(res.overOn!)} min ${min(res.overOn!)}`,
+);

@@ -43,7 +43,13 @@ export function taperedPairSheet(i: number) {
     return {
       side,
       finish: 'cuff' as const,
-      input: { unit: 'in' as const, precision: 16 as const, cuffDepth: `${depth}/16`, available: `${cloth + (differ ? 3 : 0)}/16`, ...(overfull ? { oldCrease: `${24 + (i % 9) + (differ ? 2 : 0)}/16` } : {}) },
+      input: {
+        unit: 'in' as const,
+        precision: 16 as const,
+        cuffDepth: `${depth}/16`,
+        available: `${cloth + (differ ? 3 : 0)}/16`,
+        ...(overfull ? { oldCrease: `${24 + (i % 9) + (differ ? 2 : 0)}/16` } : {}),
+      },
       taper: { widthAtEdge: `${edge}/16`, widthAbove: `${edge + 16 + (i % 5)}/16`, heightAbove: 6, seamAllowance: 1 },
     };
   };

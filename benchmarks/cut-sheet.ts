@@ -44,7 +44,16 @@ for (let i = 0; i < OUR_WARM_UP; i++) await renderCutSheet(sheet(i));
 
 const browser = await chromium.launch({
   executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-  args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  args: [
+    '--headless',
+    '--no-sandbox',
+    '--disable-gpu',
+    '--disable-quic',
+    '--no-first-run',
+    '--disable-background-networking',
+    '--disable-component-update',
+    '--disable-sync',
+  ],
 });
 const page = await browser.newPage();
 t = performance.now();
@@ -116,4 +125,7 @@ const figures = [
   figure('cut sheet: Chromium opening the warm page (fonts decoded), once', 'ms', [shellMs], null),
 ];
 writeFigures('cut-sheet', figures, { loadAverage1m: load, node: process.version });
-for (const f of figures) console.log(`${f.name}: ${f.median.toFixed(1)} ${f.unit} (${f.min.toFixed(1)}–${f.max.toFixed(1)})${f.met === null ? '' : f.met ? ' goal met' : ' GOAL NOT MET'}`);
+for (const f of figures)
+  console.log(
+    `${f.name}: ${f.median.toFixed(1)} ${f.unit} (${f.min.toFixed(1)}–${f.max.toFixed(1)})${f.met === null ? '' : f.met ? ' goal met' : ' GOAL NOT MET'}`,
+  );

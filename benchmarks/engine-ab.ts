@@ -48,11 +48,13 @@ type Taper = ReturnType<typeof B.checkTaper>;
 const cuffRead = (p: Cuff) => p.required.text.length + p.lines[1]!.belowMark.text.length + p.warnings.length;
 const taperRead = (p: Taper) => p.targetWidth.text.length + p.lines.at(-1)!.perSide.text.length + p.warnings.length;
 const legRead = (l: ReturnType<typeof BB.planLeg>) => (l.plan.kind === 'cuff' ? cuffRead(l.plan) : 0) + (l.taper ? taperRead(l.taper.plan) : 0);
-const over = <T, P>(inputs: T[], plan: (i: T) => P, read: (p: P) => number) => () => {
-  let sum = 0;
-  for (const input of inputs) sum += read(plan(input));
-  return sum;
-};
+const over =
+  <T, P>(inputs: T[], plan: (i: T) => P, read: (p: P) => number) =>
+  () => {
+    let sum = 0;
+    for (const input of inputs) sum += read(plan(input));
+    return sum;
+  };
 const cases = (E: typeof B, L: typeof BB): [string, () => number][] => [
   ['full cuff plan (typed)', over(fullCuffText, E.planCuff, cuffRead)],
   ['checkTaper (typed)', over(tapersText, E.checkTaper, taperRead)],
@@ -97,6 +99,8 @@ for (let k = 0; k < ca.length; k++) {
     }
   }
   const pairs = a.map((x, i) => b[i]! / x);
-  console.log(`${name.padEnd(28)} A ${fmt(median(a)).padStart(9)}  B ${fmt(median(b)).padStart(9)}  B/A ${(median(b) / median(a)).toFixed(2)}  (pairwise median ${median(pairs).toFixed(2)}, ${Math.min(...pairs).toFixed(2)}–${Math.max(...pairs).toFixed(2)})`);
+  console.log(
+    `${name.padEnd(28)} A ${fmt(median(a)).padStart(9)}  B ${fmt(median(b)).padStart(9)}  B/A ${(median(b) / median(a)).toFixed(2)}  (pairwise median ${median(pairs).toFixed(2)}, ${Math.min(...pairs).toFixed(2)}–${Math.max(...pairs).toFixed(2)})`,
+  );
 }
 console.log(`load ${loadavg()[0]!.toFixed(2)}`);

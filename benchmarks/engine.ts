@@ -65,14 +65,17 @@ interface Case {
 }
 
 // Each case returns a checksum read from the plans' text, so no plan or text goes unused.
-const over = <T, P>(inputs: T[], plan: (i: T) => P, read: (p: P) => number) => () => {
-  let sum = 0;
-  for (const input of inputs) sum += read(plan(input));
-  return sum;
-};
+const over =
+  <T, P>(inputs: T[], plan: (i: T) => P, read: (p: P) => number) =>
+  () => {
+    let sum = 0;
+    for (const input of inputs) sum += read(plan(input));
+    return sum;
+  };
 const cuffRead = (p: ReturnType<typeof planCuff>) => p.required.text.length + p.lines[1]!.belowMark.text.length + p.warnings.length;
 const taperRead = (p: ReturnType<typeof checkTaper>) => p.targetWidth.text.length + p.lines.at(-1)!.perSide.text.length + p.warnings.length;
-const legRead = (l: ReturnType<typeof planLeg>) => (l.plan.kind === 'cuff' ? cuffRead(l.plan) : 0) + (l.taper ? taperRead(l.taper.plan as ReturnType<typeof checkTaper>) : 0);
+const legRead = (l: ReturnType<typeof planLeg>) =>
+  (l.plan.kind === 'cuff' ? cuffRead(l.plan) : 0) + (l.taper ? taperRead(l.taper.plan as ReturnType<typeof checkTaper>) : 0);
 
 const cases: Case[] = [
   { name: 'full cuff plan (typed: depth, cloth, old crease)', goal: 600_000, run: over(fullCuffText, planCuff, cuffRead) },
@@ -108,17 +111,27 @@ function rate(run: () => number, ms: number): { wall: number; cpu: number; check
 
 const fmt = (n: number) => Math.round(n).toLocaleString('en-US');
 const load0 = loadavg()[0]!;
-console.log(`allowance engine, node ${process.version}, ${cpus().length} cores (${cpus()[0]?.model ?? '?'}), load ${load0.toFixed(2)}, NODE_ENV=${process.env.NODE_ENV ?? ''}`);
+console.log(
+  `allowance engine, node ${process.version}, ${cpus().length} cores (${cpus()[0]?.model ?? '?'}), load ${load0.toFixed(2)}, NODE_ENV=${process.env.NODE_ENV ?? ''}`,
+);
 console.log(`median of ${RUNS} runs of ${RUN_MS} ms after ${WARM_MS} ms warm-up; 1,000 varied inputs per case; plans per CPU-second\n`);
 
 const figures = [];
 for (const c of cases) {
   rate(c.run, WARM_MS);
   const runs = Array.from({ length: RUNS }, () => rate(c.run, RUN_MS));
-  const f = figure(c.name, 'plans/s', runs.map((r) => Math.round(r.cpu)), c.goal === null ? null : { min: c.goal }, 'per CPU-second, one core');
+  const f = figure(
+    c.name,
+    'plans/s',
+    runs.map((r) => Math.round(r.cpu)),
+    c.goal === null ? null : { min: c.goal },
+    'per CPU-second, one core',
+  );
   figures.push(f);
   const wall = [...runs.map((r) => r.wall)].sort((a, b) => a - b)[RUNS >> 1]!;
-  console.log(`${c.name.padEnd(56)} ${fmt(f.median).padStart(10)} plans/s (${fmt(f.min)}–${fmt(f.max)}; wall ${fmt(wall)})${c.goal === null ? '' : `  goal ≥ ${fmt(c.goal)}: ${f.met ? 'met' : 'NOT MET'}`}`);
+  console.log(
+    `${c.name.padEnd(56)} ${fmt(f.median).padStart(10)} plans/s (${fmt(f.min)}–${fmt(f.max)}; wall ${fmt(wall)})${c.goal === null ? '' : `  goal ≥ ${fmt(c.goal)}: ${f.met ? 'met' : 'NOT MET'}`}`,
+  );
 }
 const load1 = loadavg()[0]!;
 console.log(`\nload average ${load0.toFixed(2)} → ${load1.toFixed(2)} (other work on the machine lowers these numbers)`);

@@ -40,7 +40,10 @@ process.on('exit', stop);
 
 for (let up = false, until = Date.now() + 180_000; !up; ) {
   if (Date.now() > until) throw new Error('the server did not answer in 3 min');
-  up = await fetch(`${base}/`).then((r) => r.status < 500, () => false);
+  up = await fetch(`${base}/`).then(
+    (r) => r.status < 500,
+    () => false,
+  );
   if (!up) await sleep(500);
 }
 
@@ -50,7 +53,10 @@ const signIn = await fetch(`${base}/api/auth/sign-in/email`, {
   body: JSON.stringify({ email: 'tailor@pinmark.test', password: 'cuffwright-demo' }),
 });
 if (signIn.status !== 200) throw new Error(`sign-in answered ${signIn.status}`);
-const cookie = signIn.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+const cookie = signIn.headers
+  .getSetCookie()
+  .map((c) => c.split(';')[0])
+  .join('; ');
 
 async function memberGet() {
   const t = performance.now();

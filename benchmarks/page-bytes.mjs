@@ -61,7 +61,12 @@ async function loadOnce(browser, base, page) {
       (async () => {
         const res = await req.response();
         const [body, sizes, headers] = await Promise.all([res.body(), req.sizes(), res.allHeaders()]);
-        return { body, received: sizes.responseBodySize, encoding: headers['content-encoding'] ?? 'identity', asked: (await req.allHeaders())['accept-encoding'] ?? '' };
+        return {
+          body,
+          received: sizes.responseBodySize,
+          encoding: headers['content-encoding'] ?? 'identity',
+          asked: (await req.allHeaders())['accept-encoding'] ?? '',
+        };
       })(),
     );
   });
@@ -72,7 +77,18 @@ async function loadOnce(browser, base, page) {
     const s = await pending;
     const gz = gzipSync(s.body, { level: 9 }).length;
     const [br, gzw] = [await wireBytes(url, 'br, gzip', cookie), await wireBytes(url, 'gzip', cookie)];
-    load.files.push({ path: new URL(url).pathname, raw: s.body.length, gzip: gz, chromium: s.received, chromiumEncoding: s.encoding, chromiumAsked: s.asked, br: br.bytes, brEncoding: br.encoding, gzipWire: gzw.bytes, gzipEncoding: gzw.encoding });
+    load.files.push({
+      path: new URL(url).pathname,
+      raw: s.body.length,
+      gzip: gz,
+      chromium: s.received,
+      chromiumEncoding: s.encoding,
+      chromiumAsked: s.asked,
+      br: br.bytes,
+      brEncoding: br.encoding,
+      gzipWire: gzw.bytes,
+      gzipEncoding: gzw.encoding,
+    });
     load.raw += s.body.length;
     load.gzip += gz;
     load.chromium += s.received;
@@ -88,8 +104,16 @@ export async function weighPages(pages = PAGES, loads = LOADS) {
   const app = await startShipped();
   const browser = await chromium.launch({
     executablePath: ensureChromium(),
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
-      '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   const out = pages.map((page) => ({ page, loads: [] }));
   try {
@@ -110,11 +134,39 @@ export function pageFigures({ page, loads }) {
   const p = page.path;
   const files = `${loads[0].files.length} files`;
   return [
-    figure(`${p} JS sent (gzip)`, 'KiB', loads.map((l) => kib(l.gzip)), page.goalKiB == null ? null : { max: page.goalKiB }, `${files}, gzip -9 of each script body`),
-    figure(`${p} JS on the wire to Chromium`, 'KiB', loads.map((l) => kib(l.chromium)), null, `transfer size; Chromium asked "${loads[0].files[0]?.chromiumAsked ?? ''}"`),
-    figure(`${p} JS on the wire, Accept-Encoding br`, 'KiB', loads.map((l) => kib(l.br)), null, 'bytes of each script response as sent'),
-    figure(`${p} JS on the wire, Accept-Encoding gzip`, 'KiB', loads.map((l) => kib(l.gzipWire)), null, 'bytes of each script response as sent'),
-    figure(`${p} JS decoded`, 'KiB', loads.map((l) => kib(l.raw))),
+    figure(
+      `${p} JS sent (gzip)`,
+      'KiB',
+      loads.map((l) => kib(l.gzip)),
+      page.goalKiB == null ? null : { max: page.goalKiB },
+      `${files}, gzip -9 of each script body`,
+    ),
+    figure(
+      `${p} JS on the wire to Chromium`,
+      'KiB',
+      loads.map((l) => kib(l.chromium)),
+      null,
+      `transfer size; Chromium asked "${loads[0].files[0]?.chromiumAsked ?? ''}"`,
+    ),
+    figure(
+      `${p} JS on the wire, Accept-Encoding br`,
+      'KiB',
+      loads.map((l) => kib(l.br)),
+      null,
+      'bytes of each script response as sent',
+    ),
+    figure(
+      `${p} JS on the wire, Accept-Encoding gzip`,
+      'KiB',
+      loads.map((l) => kib(l.gzipWire)),
+      null,
+      'bytes of each script response as sent',
+    ),
+    figure(
+      `${p} JS decoded`,
+      'KiB',
+      loads.map((l) => kib(l.raw)),
+    ),
   ];
 }
 
@@ -122,7 +174,9 @@ if (import.meta.url === `file://${process.argv[1]}`) {
   const rows = await weighPages();
   const figures = rows.flatMap(pageFigures);
   console.log(`\nJavaScript sent per page (${LOADS} cold loads each; median, KiB):`);
-  console.log(`  ${'page'.padEnd(16)} ${'files'.padStart(5)} ${'gzip -9'.padStart(9)} ${'Chromium'.padStart(9)} ${'br'.padStart(9)} ${'gzip'.padStart(9)} ${'decoded'.padStart(9)}`);
+  console.log(
+    `  ${'page'.padEnd(16)} ${'files'.padStart(5)} ${'gzip -9'.padStart(9)} ${'Chromium'.padStart(9)} ${'br'.padStart(9)} ${'gzip'.padStart(9)} ${'decoded'.padStart(9)}`,
+  );
   for (let i = 0; i < rows.length; i++) {
     const f = figures.slice(i * 5, i * 5 + 5).map((x) => x.median.toFixed(1).padStart(9));
     console.log(`  ${rows[i].page.path.padEnd(16)} ${String(rows[i].loads[0].files.length).padStart(5)} ${f.join(' ')}`);

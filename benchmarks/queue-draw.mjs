@@ -13,7 +13,16 @@ import { newShop, seedShop, signIn } from './lib/queue-load.mjs';
 import { startShipped } from './lib/shipped-server.mjs';
 
 const RUNS = Number(process.argv[2] ?? 5);
-const ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+const ARGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
 const dir = mkdtempSync(join(tmpdir(), 'cuffwright-queue-draw-'));
 const email = `lead-draw-${Date.now()}@bench.test`;
 let server;
@@ -25,14 +34,19 @@ try {
   const pg = new PGlite(join(dir, 'pglite'));
   // 1,400 garments, the newest 1,178 not yet collected (two a ticket).
   await seedShop(pg, email, 1400, 1178);
-  const { rows } = await pg.query(`select count(*)::int as n from garments g join member m on m.organization_id = g.shop_id join "user" u on u.id = m.user_id where u.email = $1 and g.status <> 'collected'`, [email]);
+  const { rows } = await pg.query(
+    `select count(*)::int as n from garments g join member m on m.organization_id = g.shop_id join "user" u on u.id = m.user_id where u.email = $1 and g.status <> 'collected'`,
+    [email],
+  );
   await pg.close();
   server = await startShipped({ dataDir: dir, timeoutMs: 600_000 });
   const cookie = await signIn(server.base, email);
   browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium', args: ARGS });
   const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
   const url = new URL(server.base);
-  await context.addCookies(cookie.split('; ').map((c) => ({ name: c.slice(0, c.indexOf('=')), value: c.slice(c.indexOf('=') + 1), domain: url.hostname, path: '/' })));
+  await context.addCookies(
+    cookie.split('; ').map((c) => ({ name: c.slice(0, c.indexOf('=')), value: c.slice(c.indexOf('=') + 1), domain: url.hostname, path: '/' })),
+  );
   const page = await context.newPage();
   const firstRow = [];
   const whole = [];
@@ -43,11 +57,16 @@ try {
     const first = await page.evaluate(() => performance.now());
     // The page is whole once the bench section's pager is there (drawn with its rows). A build
     // without pages (before issue 15) draws every row in the commit that draws the first.
-    const paged = await page.waitForSelector('nav[aria-label^="Pages of"]', { timeout: 5000 }).then(() => true, () => false);
+    const paged = await page.waitForSelector('nav[aria-label^="Pages of"]', { timeout: 5000 }).then(
+      () => true,
+      () => false,
+    );
     const done = paged ? await page.evaluate(() => performance.now()) : first;
     const drawn = await page.locator('[data-testid=queue-row]').count();
     if (!paged) {
-      console.log(`run ${r}: first row (every row) ${first.toFixed(0)} ms, ${drawn} rows drawn of ${rows[0].n} open, no pages (load ${loadavg()[0].toFixed(2)})`);
+      console.log(
+        `run ${r}: first row (every row) ${first.toFixed(0)} ms, ${drawn} rows drawn of ${rows[0].n} open, no pages (load ${loadavg()[0].toFixed(2)})`,
+      );
       if (r > 0) firstRow.push(first);
       continue;
     }
@@ -68,7 +87,9 @@ try {
           [...document.querySelectorAll('button')].find((b) => b.textContent === 'Next page').click();
         }),
     );
-    console.log(`run ${r}${r === 0 ? ' (warm-up)' : ''}: first row ${first.toFixed(0)} ms, whole ${done.toFixed(0)} ms, ${drawn} rows drawn of ${rows[0].n} open; next page ${t.toFixed(0)} ms (load ${loadavg()[0].toFixed(2)})`);
+    console.log(
+      `run ${r}${r === 0 ? ' (warm-up)' : ''}: first row ${first.toFixed(0)} ms, whole ${done.toFixed(0)} ms, ${drawn} rows drawn of ${rows[0].n} open; next page ${t.toFixed(0)} ms (load ${loadavg()[0].toFixed(2)})`,
+    );
     if (r === 0) continue;
     firstRow.push(first);
     whole.push(done);
@@ -76,16 +97,19 @@ try {
   }
   const load = loadavg()[0].toFixed(2);
   if (!turn.length) {
-    console.log(`no pages: navigation to every row drawn, median ${firstRow.sort((a, b) => a - b)[Math.floor(firstRow.length / 2)].toFixed(0)} ms (load ${load})`);
-  } else writeFigures(
-    'queue-draw',
-    [
-      figure(`queue page, ${rows[0].n} open garments: navigation to first row drawn`, 'ms', firstRow, { max: 1000 }),
-      figure(`queue page, ${rows[0].n} open garments: navigation to the page whole (pager shown)`, 'ms', whole, { max: 1200 }),
-      figure('queue page: Next page to its rows drawn', 'ms', turn, { max: 200 }),
-    ],
-    { load, runs: RUNS },
-  );
+    console.log(
+      `no pages: navigation to every row drawn, median ${firstRow.sort((a, b) => a - b)[Math.floor(firstRow.length / 2)].toFixed(0)} ms (load ${load})`,
+    );
+  } else
+    writeFigures(
+      'queue-draw',
+      [
+        figure(`queue page, ${rows[0].n} open garments: navigation to first row drawn`, 'ms', firstRow, { max: 1000 }),
+        figure(`queue page, ${rows[0].n} open garments: navigation to the page whole (pager shown)`, 'ms', whole, { max: 1200 }),
+        figure('queue page: Next page to its rows drawn', 'ms', turn, { max: 200 }),
+      ],
+      { load, runs: RUNS },
+    );
 } finally {
   await browser?.close();
   await server?.stop();

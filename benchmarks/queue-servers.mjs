@@ -42,12 +42,17 @@ try {
   await steady(two, cookie, 2); // warm both
   const res = { one: { served: [], p50: [], p99: [] }, two: { served: [], p50: [], p99: [] } };
   for (let r = 0; r < RUNS; r++) {
-    for (const [label, urls] of [['one', one], ['two', two]]) {
+    for (const [label, urls] of [
+      ['one', one],
+      ['two', two],
+    ]) {
       const run = await steady(urls, cookie, SECONDS);
       res[label].served.push(run.served);
       res[label].p50.push(run.p50);
       res[label].p99.push(run.p99);
-      console.log(`run ${r + 1}, ${label === 'one' ? 'one server' : 'two servers'}: ${run.ok}/${run.n} answered 200, ${run.served.toFixed(1)}/s, p50 ${run.p50.toFixed(1)} ms, p99 ${run.p99.toFixed(1)} ms (load ${loadavg()[0].toFixed(2)})`);
+      console.log(
+        `run ${r + 1}, ${label === 'one' ? 'one server' : 'two servers'}: ${run.ok}/${run.n} answered 200, ${run.served.toFixed(1)}/s, p50 ${run.p50.toFixed(1)} ms, p99 ${run.p99.toFixed(1)} ms (load ${loadavg()[0].toFixed(2)})`,
+      );
     }
   }
   writeFigures(

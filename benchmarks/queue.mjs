@@ -42,7 +42,9 @@ try {
     const run = await steady(url, smallCookie, SECONDS);
     served.push(run.served);
     p99.push(run.p99);
-    console.log(`run ${r + 1}: ${run.ok}/${run.n} answered 200, ${run.served.toFixed(1)}/s served, p50 ${run.p50.toFixed(1)} ms, p99 ${run.p99.toFixed(1)} ms (load ${loadavg()[0].toFixed(2)})`);
+    console.log(
+      `run ${r + 1}: ${run.ok}/${run.n} answered 200, ${run.served.toFixed(1)}/s served, p50 ${run.p50.toFixed(1)} ms, p99 ${run.p99.toFixed(1)} ms (load ${loadavg()[0].toFixed(2)})`,
+    );
   }
   const open = await oneAtATime(url, { cookie: bigCookie }, 21);
   const history = await oneAtATime(`${url}?view=history`, { cookie: bigCookie }, 21);
@@ -61,7 +63,9 @@ try {
     ],
     { load, runs: RUNS, seconds: SECONDS, rate: RATE },
   );
-  console.log(`10,000-garment shop: open ${open.median.toFixed(1)} ms ${open.bytes} B; history page ${history.median.toFixed(1)} ms ${history.bytes} B; 304 ${unchanged.median.toFixed(1)} ms (load ${load})`);
+  console.log(
+    `10,000-garment shop: open ${open.median.toFixed(1)} ms ${open.bytes} B; history page ${history.median.toFixed(1)} ms ${history.bytes} B; 304 ${unchanged.median.toFixed(1)} ms (load ${load})`,
+  );
 } finally {
   await server?.stop();
   agent.destroy();

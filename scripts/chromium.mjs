@@ -10,7 +10,7 @@ export function ensureChromium() {
   const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
   const hasApt = existsSync('/usr/bin/apt-get');
   if (!process.env.CHROMIUM_PATH && isRoot && hasApt) {
-    console.log('Chromium is missing: installing Debian\'s chromium package with apt-get…');
+    console.log("Chromium is missing: installing Debian's chromium package with apt-get…");
     execSync('apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium', {
       stdio: 'inherit',
     });

@@ -9,7 +9,11 @@ import { listenOrExplain } from './port-taken.mjs';
 
 const devEnv = { ...process.env, BETTER_AUTH_URL: env.BETTER_AUTH_URL || `http://localhost:${env.PORT}` };
 if (useCapture) {
-  const { port } = await listenOrExplain(startMailCapture({ dir: captureDir, port: env.SMTP_PORT }), { port: env.SMTP_PORT, what: 'mail capture', setting: 'SMTP_PORT' });
+  const { port } = await listenOrExplain(startMailCapture({ dir: captureDir, port: env.SMTP_PORT }), {
+    port: env.SMTP_PORT,
+    what: 'mail capture',
+    setting: 'SMTP_PORT',
+  });
   Object.assign(devEnv, { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(port), MAIL_CAPTURE_DIR: captureDir });
   console.log(`Mail capture on smtp://127.0.0.1:${port}: a shop's lead reads what the shop sent at /sent-messages`);
 }
@@ -23,7 +27,11 @@ if (!process.env.PAYMENTS_API_KEY) {
   console.log(`Local payment service (no real money) on ${payments.base}`);
 }
 if (!env.SMS_ACCOUNT_SID) {
-  const sms = await listenOrExplain(startLocalSms({ port: env.SMS_FAKE_PORT }), { port: env.SMS_FAKE_PORT, what: 'local SMS service', setting: 'SMS_FAKE_PORT' });
+  const sms = await listenOrExplain(startLocalSms({ port: env.SMS_FAKE_PORT }), {
+    port: env.SMS_FAKE_PORT,
+    what: 'local SMS service',
+    setting: 'SMS_FAKE_PORT',
+  });
   Object.assign(devEnv, sms.env);
   console.log(`Local SMS service (no text leaves the machine) on ${sms.base}: what it was asked to send at ${sms.base}/`);
 }

@@ -37,7 +37,16 @@ const secret = process.env.BETTER_AUTH_SECRET || randomBytes(32).toString('base6
 
 function startServer(i) {
   return spawn('node', [`${outDir}/server/entry.mjs`], {
-    env: { ...process.env, PORT: String(ports[i]), HOST: '127.0.0.1', DATA_DIR: join(dataDir, String(i)), BETTER_AUTH_URL: bases[i], SMTP_PORT: '9', DEMO_DATA: 'on', BETTER_AUTH_SECRET: secret },
+    env: {
+      ...process.env,
+      PORT: String(ports[i]),
+      HOST: '127.0.0.1',
+      DATA_DIR: join(dataDir, String(i)),
+      BETTER_AUTH_URL: bases[i],
+      SMTP_PORT: '9',
+      DEMO_DATA: 'on',
+      BETTER_AUTH_SECRET: secret,
+    },
     stdio: ['ignore', 'ignore', 'inherit'],
   });
 }
@@ -63,7 +72,10 @@ async function signIn() {
     body: JSON.stringify({ email: 'counter@pinmark.test', password: 'cuffwright-demo' }),
   });
   if (r.status !== 200) throw new Error(`sign-in answered ${r.status}`);
-  return r.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+  return r.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
 }
 
 async function writer(cookie, round, w, acked, stop) {
@@ -111,7 +123,9 @@ try {
     const present = new Map((await r.json()).map((t) => [t.id, t.note]));
     const missing = allAcked.filter((a) => present.get(a.id) !== a.note);
     results.push({ round, acked: acked.length, checked: allAcked.length, missing: missing.length });
-    console.log(`round ${round}: ${acked.length} writes acknowledged before SIGKILL of server ${victim + 1}/${servers.length}; after restart ${allAcked.length - missing.length}/${allAcked.length} acknowledged writes present`);
+    console.log(
+      `round ${round}: ${acked.length} writes acknowledged before SIGKILL of server ${victim + 1}/${servers.length}; after restart ${allAcked.length - missing.length}/${allAcked.length} acknowledged writes present`,
+    );
   }
 } finally {
   for (const server of servers) server.kill('SIGTERM');

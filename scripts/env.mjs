@@ -10,7 +10,10 @@ const schema = z.object({
   PORT: z.coerce.number().int().positive().default(4321),
   HOST: z.string().default('127.0.0.1'),
   // Relative to the folder started from; unset, the app's own data/ (as the server decides).
-  DATA_DIR: z.string().optional().transform((d) => (d ? resolve(d) : join(appDir, 'data'))),
+  DATA_DIR: z
+    .string()
+    .optional()
+    .transform((d) => (d ? resolve(d) : join(appDir, 'data'))),
   DATABASE_URL: z.string().startsWith('postgres').optional(),
   // When SMTP_HOST names a real server, no capture is started and SMTP_* pass through unchanged.
   SMTP_HOST: z.string().optional(),

@@ -22,7 +22,16 @@ export function startMailCapture({ dir, port = 1025, host = '127.0.0.1', quiet =
           const at = new Date();
           const id = `${at.toISOString().replace(/[:.]/g, '-')}-${randomUUID().slice(0, 8)}`;
           const to = session.envelope.rcptTo.map((r) => r.address);
-          const record = { id, at: at.toISOString(), messageId: mail.messageId ?? '', from: session.envelope.mailFrom?.address ?? '', to, subject: mail.subject ?? '', text: mail.text ?? '', attachments: (mail.attachments ?? []).map((a) => ({ filename: a.filename ?? '', contentType: a.contentType, size: a.size })) };
+          const record = {
+            id,
+            at: at.toISOString(),
+            messageId: mail.messageId ?? '',
+            from: session.envelope.mailFrom?.address ?? '',
+            to,
+            subject: mail.subject ?? '',
+            text: mail.text ?? '',
+            attachments: (mail.attachments ?? []).map((a) => ({ filename: a.filename ?? '', contentType: a.contentType, size: a.size })),
+          };
           // Written then renamed, so a reader never sees half a message.
           const tmp = join(dir, `.${id}.tmp`);
           writeFileSync(tmp, JSON.stringify(record, null, 2));

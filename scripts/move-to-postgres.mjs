@@ -16,7 +16,9 @@ const quote = (name) => `"${name.replace(/"/g, '""')}"`;
 
 /** Tables of the public schema, parents before children (by their foreign keys). */
 async function tablesInOrder(client) {
-  const { rows: tables } = await client.query(`select table_name as t from information_schema.tables where table_schema = 'public' and table_type = 'BASE TABLE' order by 1`);
+  const { rows: tables } = await client.query(
+    `select table_name as t from information_schema.tables where table_schema = 'public' and table_type = 'BASE TABLE' order by 1`,
+  );
   const { rows: edges } = await client.query(`
     select c.relname as child, p.relname as parent from pg_constraint k
     join pg_class c on c.oid = k.conrelid join pg_class p on p.oid = k.confrelid
@@ -55,7 +57,10 @@ export async function moveToPostgres({ dataDir, url, log = () => {} }) {
       for (const table of order) {
         const { rows } = await source.query(`select row_to_json(t)::text as r from ${quote(table)} t`);
         for (let i = 0; i < rows.length; i += CHUNK) {
-          const batch = `[${rows.slice(i, i + CHUNK).map((r) => r.r).join(',')}]`;
+          const batch = `[${rows
+            .slice(i, i + CHUNK)
+            .map((r) => r.r)
+            .join(',')}]`;
           await target.query(`insert into ${quote(table)} select * from json_populate_recordset(null::${quote(table)}, $1::json)`, [batch]);
         }
         const { rows: count } = await target.query(`select count(*)::int as n from ${quote(table)}`);

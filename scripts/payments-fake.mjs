@@ -89,7 +89,8 @@ export function startPaymentsFake({ port = 12111, host = '127.0.0.1', apiKey, we
       const item = form.line_items?.['0'];
       const amount = Number(item?.price_data?.unit_amount) * Number(item?.quantity ?? 1);
       const currency = item?.price_data?.currency;
-      if (!Number.isInteger(amount) || amount <= 0 || !currency) return [400, { error: { type: 'invalid_request_error', message: 'line_items[0] needs price_data.unit_amount and currency' } }];
+      if (!Number.isInteger(amount) || amount <= 0 || !currency)
+        return [400, { error: { type: 'invalid_request_error', message: 'line_items[0] needs price_data.unit_amount and currency' } }];
       const sid = id('cs');
       const session = {
         id: sid,
@@ -117,7 +118,16 @@ export function startPaymentsFake({ port = 12111, host = '127.0.0.1', apiKey, we
       const amount = form.amount === undefined ? intent.amount - intent.refunded : Number(form.amount);
       if (!Number.isInteger(amount) || amount <= 0) return [400, { error: { type: 'invalid_request_error', message: 'amount must be a positive integer' } }];
       if (amount > intent.amount - intent.refunded) {
-        return [400, { error: { type: 'invalid_request_error', code: 'charge_already_refunded', message: `Refund amount (${amount}) is greater than unrefunded amount on charge (${intent.amount - intent.refunded})` } }];
+        return [
+          400,
+          {
+            error: {
+              type: 'invalid_request_error',
+              code: 'charge_already_refunded',
+              message: `Refund amount (${amount}) is greater than unrefunded amount on charge (${intent.amount - intent.refunded})`,
+            },
+          },
+        ];
       }
       intent.refunded += amount;
       const refund = {
@@ -134,12 +144,15 @@ export function startPaymentsFake({ port = 12111, host = '127.0.0.1', apiKey, we
       settleRefund(refund);
       return [200, { ...refund }];
     },
-    'GET /v1/refunds/:id': ([rid]) => (refunds.has(rid) ? [200, refunds.get(rid)] : [404, { error: { type: 'invalid_request_error', message: `No such refund: '${rid}'` } }]),
-    'GET /v1/checkout/sessions/:id': ([sid]) => (sessions.has(sid) ? [200, sessions.get(sid)] : [404, { error: { type: 'invalid_request_error', message: `No such checkout.session: ${sid}` } }]),
+    'GET /v1/refunds/:id': ([rid]) =>
+      refunds.has(rid) ? [200, refunds.get(rid)] : [404, { error: { type: 'invalid_request_error', message: `No such refund: '${rid}'` } }],
+    'GET /v1/checkout/sessions/:id': ([sid]) =>
+      sessions.has(sid) ? [200, sessions.get(sid)] : [404, { error: { type: 'invalid_request_error', message: `No such checkout.session: ${sid}` } }],
     'POST /v1/checkout/sessions/:id/expire': ([sid]) => {
       const s = sessions.get(sid);
       if (!s) return [404, { error: { type: 'invalid_request_error', message: `No such checkout.session: ${sid}` } }];
-      if (s.status !== 'open') return [400, { error: { type: 'invalid_request_error', message: `Only open sessions can be expired (this one is ${s.status}).` } }];
+      if (s.status !== 'open')
+        return [400, { error: { type: 'invalid_request_error', message: `Only open sessions can be expired (this one is ${s.status}).` } }];
       s.status = 'expired';
       s.url = null;
       return [200, s];
@@ -166,7 +179,8 @@ export function startPaymentsFake({ port = 12111, host = '127.0.0.1', apiKey, we
       res.end(type === 'application/json' ? JSON.stringify(data) : data);
     };
     if (url.pathname.startsWith('/v1/')) {
-      if (req.headers.authorization !== `Bearer ${apiKey}`) return send(401, { error: { type: 'invalid_request_error', message: 'Invalid API Key provided.' } });
+      if (req.headers.authorization !== `Bearer ${apiKey}`)
+        return send(401, { error: { type: 'invalid_request_error', message: 'Invalid API Key provided.' } });
       const handler = route(req.method, url.pathname);
       if (!handler) return send(404, { error: { type: 'invalid_request_error', message: `Unrecognized request URL (${req.method}: ${url.pathname}).` } });
       // Like the hosted service: a POST repeated with the same Idempotency-Key gets the first
@@ -175,7 +189,13 @@ export function startPaymentsFake({ port = 12111, host = '127.0.0.1', apiKey, we
       if (typeof key === 'string') {
         const seen = answered.get(key);
         if (seen) {
-          if (seen.request !== `${req.method} ${url.pathname} ${body}`) return send(400, { error: { type: 'idempotency_error', message: 'Keys for idempotent requests can only be used with the same parameters they were first used with.' } });
+          if (seen.request !== `${req.method} ${url.pathname} ${body}`)
+            return send(400, {
+              error: {
+                type: 'idempotency_error',
+                message: 'Keys for idempotent requests can only be used with the same parameters they were first used with.',
+              },
+            });
           return send(seen.status, seen.data);
         }
       }
@@ -185,7 +205,12 @@ export function startPaymentsFake({ port = 12111, host = '127.0.0.1', apiKey, we
     }
     const pay = url.pathname.match(/^\/pay\/(cs_test_[a-f0-9]+)$/);
     const session = pay && sessions.get(pay[1]);
-    if (!session) return send(404, page('Unknown link', '<h1>This payment link is unknown</h1><p>It may be from before the local payment service restarted.</p>'), 'text/html; charset=utf-8');
+    if (!session)
+      return send(
+        404,
+        page('Unknown link', '<h1>This payment link is unknown</h1><p>It may be from before the local payment service restarted.</p>'),
+        'text/html; charset=utf-8',
+      );
     if (req.method === 'GET') {
       const open = session.status === 'open';
       return send(
@@ -201,7 +226,12 @@ ${open ? `<form method="post"><button type="submit">Pay ${escape(money(session.a
       );
     }
     if (req.method === 'POST') {
-      if (session.status !== 'open') return send(409, page('Not open', `<h1>This link is ${session.status === 'complete' ? 'already paid' : 'no longer open'}</h1>`), 'text/html; charset=utf-8');
+      if (session.status !== 'open')
+        return send(
+          409,
+          page('Not open', `<h1>This link is ${session.status === 'complete' ? 'already paid' : 'no longer open'}</h1>`),
+          'text/html; charset=utf-8',
+        );
       session.status = 'complete';
       session.payment_status = 'paid';
       session.payment_intent = id('pi');
@@ -220,7 +250,10 @@ ${open ? `<form method="post"><button type="submit">Pay ${escape(money(session.a
       }
       return send(
         200,
-        page('Paid', `<h1>Payment received</h1><p class="amount">${escape(money(session.amount_total, session.currency))}</p><p>${delivered ? 'The shop has been told. You may close this page.' : 'The shop could not be told yet: show this page at the counter.'}</p>`),
+        page(
+          'Paid',
+          `<h1>Payment received</h1><p class="amount">${escape(money(session.amount_total, session.currency))}</p><p>${delivered ? 'The shop has been told. You may close this page.' : 'The shop could not be told yet: show this page at the counter.'}</p>`,
+        ),
         'text/html; charset=utf-8',
       );
     }

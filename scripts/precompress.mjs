@@ -18,7 +18,9 @@ export function precompressDir(dir) {
     if (!COMPRESSED_TYPES.test(name)) continue;
     const path = join(dir, name);
     const data = readFileSync(path);
-    const br = brotliCompressSync(data, { params: { [constants.BROTLI_PARAM_QUALITY]: constants.BROTLI_MAX_QUALITY, [constants.BROTLI_PARAM_SIZE_HINT]: data.length } });
+    const br = brotliCompressSync(data, {
+      params: { [constants.BROTLI_PARAM_QUALITY]: constants.BROTLI_MAX_QUALITY, [constants.BROTLI_PARAM_SIZE_HINT]: data.length },
+    });
     const gz = gzipSync(data, { level: constants.Z_BEST_COMPRESSION });
     // A copy no smaller than the file would only cost the client a decode.
     if (br.length < data.length) writeFileSync(`${path}.br`, br);

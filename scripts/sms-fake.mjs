@@ -25,11 +25,24 @@ export function startSmsFake({ port = 12112, host = '127.0.0.1', accountSid, aut
 
   async function callback(message) {
     if (!message.statusCallback) return;
-    const params = { AccountSid: accountSid, MessageSid: message.sid, SmsSid: message.sid, MessageStatus: message.status, SmsStatus: message.status, To: message.to, From: message.from, ApiVersion: '2010-04-01' };
+    const params = {
+      AccountSid: accountSid,
+      MessageSid: message.sid,
+      SmsSid: message.sid,
+      MessageStatus: message.status,
+      SmsStatus: message.status,
+      To: message.to,
+      From: message.from,
+      ApiVersion: '2010-04-01',
+    };
     if (message.errorCode) params.ErrorCode = String(message.errorCode);
     const signature = twilio.getExpectedTwilioSignature(authToken, message.statusCallback, params);
     try {
-      const res = await fetch(message.statusCallback, { method: 'POST', headers: { 'content-type': 'application/x-www-form-urlencoded', 'x-twilio-signature': signature }, body: new URLSearchParams(params).toString() });
+      const res = await fetch(message.statusCallback, {
+        method: 'POST',
+        headers: { 'content-type': 'application/x-www-form-urlencoded', 'x-twilio-signature': signature },
+        body: new URLSearchParams(params).toString(),
+      });
       message.callbacks.push({ status: message.status, answer: res.status });
       if (!quiet) console.log(`[sms] status ${message.status} for ${message.sid} → ${res.status}`);
     } catch (e) {
@@ -59,7 +72,8 @@ export function startSmsFake({ port = 12112, host = '127.0.0.1', accountSid, aut
       if (!authorized(req) || create[1] !== accountSid) return send(res, 401, { code: 20003, message: 'Authenticate', status: 401 });
       const form = Object.fromEntries(new URLSearchParams(body));
       if (!form.To || !form.Body || !form.From) return send(res, 400, { code: 21604, message: "A 'To', 'From' and 'Body' are required.", status: 400 });
-      if (form.To.replace(/\D/g, '').length < 6) return send(res, 400, { code: 21211, message: `The 'To' number ${form.To} is not a valid phone number.`, status: 400 });
+      if (form.To.replace(/\D/g, '').length < 6)
+        return send(res, 400, { code: 21211, message: `The 'To' number ${form.To} is not a valid phone number.`, status: 400 });
       const now = new Date().toUTCString();
       const message = {
         sid: `SM${hex(16)}`,
@@ -88,7 +102,11 @@ export function startSmsFake({ port = 12112, host = '127.0.0.1', accountSid, aut
       return send(res, 201, message);
     }
     if (req.method === 'GET' && url.pathname === '/messages') {
-      return send(res, 200, messages.map(({ sid, to, from, body: text, status, errorCode, callbacks, at }) => ({ sid, to, from, body: text, status, errorCode, callbacks, at })));
+      return send(
+        res,
+        200,
+        messages.map(({ sid, to, from, body: text, status, errorCode, callbacks, at }) => ({ sid, to, from, body: text, status, errorCode, callbacks, at })),
+      );
     }
     if (req.method === 'GET' && url.pathname === '/') {
       const rows = messages
@@ -96,7 +114,12 @@ export function startSmsFake({ port = 12112, host = '127.0.0.1', accountSid, aut
         .reverse()
         .map((m) => `<li><strong>${escape(m.to)}</strong> · ${escape(m.status)} · ${escape(m.at)}<pre>${escape(m.body)}</pre></li>`)
         .join('');
-      return send(res, 200, `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>Local text messages</title></head><body><h1>Text messages sent (local stand-in, newest first)</h1><ol>${rows || '<li>None yet.</li>'}</ol></body></html>`, 'text/html; charset=utf-8');
+      return send(
+        res,
+        200,
+        `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>Local text messages</title></head><body><h1>Text messages sent (local stand-in, newest first)</h1><ol>${rows || '<li>None yet.</li>'}</ol></body></html>`,
+        'text/html; charset=utf-8',
+      );
     }
     return send(res, 404, { code: 20404, message: 'The requested resource was not found', status: 404 });
   });
@@ -123,5 +146,9 @@ export async function startLocalSms({ port = 12112, quiet = false } = {}) {
 if (process.argv[1] === fileURLToPath(import.meta.url)) {
   const port = Number(process.env.SMS_FAKE_PORT || 12112);
   const { base, env } = await listenOrExplain(startLocalSms({ port }), { port, what: 'local SMS service', setting: 'SMS_FAKE_PORT' });
-  console.log(`Local SMS service on ${base}; the app's settings: ${Object.entries(env).map(([k, v]) => `${k}=${v}`).join(' ')}`);
+  console.log(
+    `Local SMS service on ${base}; the app's settings: ${Object.entries(env)
+      .map(([k, v]) => `${k}=${v}`)
+      .join(' ')}`,
+  );
 }

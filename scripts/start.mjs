@@ -47,12 +47,21 @@ if (useCapture) Object.assign(serverEnv, { SMTP_HOST: '127.0.0.1', SMTP_PORT: St
 // Without a real payment service configured, payment links go to the local fake.
 const payments = { apiKey: `sk_test_local_${randomBytes(12).toString('hex')}`, webhookSecret: `whsec_${randomBytes(24).toString('hex')}` };
 if (fakePayments) {
-  Object.assign(serverEnv, { PAYMENTS_API_KEY: payments.apiKey, PAYMENTS_API_BASE: `http://127.0.0.1:${pay.port}`, PAYMENTS_WEBHOOK_SECRET: payments.webhookSecret });
+  Object.assign(serverEnv, {
+    PAYMENTS_API_KEY: payments.apiKey,
+    PAYMENTS_API_BASE: `http://127.0.0.1:${pay.port}`,
+    PAYMENTS_WEBHOOK_SECRET: payments.webhookSecret,
+  });
 }
 // Without a real SMS account configured, texts go to the local fake (fresh account id and token).
 const smsAccount = { accountSid: `AC${randomBytes(16).toString('hex')}`, authToken: randomBytes(16).toString('hex') };
 if (fakeSms) {
-  Object.assign(serverEnv, { SMS_ACCOUNT_SID: smsAccount.accountSid, SMS_AUTH_TOKEN: smsAccount.authToken, SMS_FROM: '+15005550006', SMS_API_BASE: `http://127.0.0.1:${sms.port}` });
+  Object.assign(serverEnv, {
+    SMS_ACCOUNT_SID: smsAccount.accountSid,
+    SMS_AUTH_TOKEN: smsAccount.authToken,
+    SMS_FROM: '+15005550006',
+    SMS_API_BASE: `http://127.0.0.1:${sms.port}`,
+  });
 }
 process.chdir(appDir);
 buildIfNeeded('dist');

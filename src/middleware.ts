@@ -54,7 +54,9 @@ export const onRequest = defineMiddleware(async (context, next) => {
   const began = performance.now();
   let status = 500;
   try {
-    const res = withSecurityHeaders(await jsonRefusal(context.url.pathname, await answer(context, next, done)), { csp: import.meta.env.MODE !== 'development' });
+    const res = withSecurityHeaders(await jsonRefusal(context.url.pathname, await answer(context, next, done)), {
+      csp: import.meta.env.MODE !== 'development',
+    });
     status = res.status;
     return res;
   } catch (e) {
@@ -64,7 +66,13 @@ export const onRequest = defineMiddleware(async (context, next) => {
     done();
     // A write may sign out, remove a member or change a role: kept session lookups go (services/session-lookup.ts).
     if (!SAFE_METHODS.has(context.request.method)) forgetSessions();
-    logRequest({ method: context.request.method, route: context.routePattern, status, ms: performance.now() - began, shop: context.locals.member?.shopId ?? null });
+    logRequest({
+      method: context.request.method,
+      route: context.routePattern,
+      status,
+      ms: performance.now() - began,
+      shop: context.locals.member?.shopId ?? null,
+    });
   }
 });
 
@@ -89,10 +97,13 @@ async function answer(context: Parameters<MiddlewareHandler>[0], next: Parameter
   const badId = badIdParam(context.params, context.routePattern);
   if (badId) {
     const api = url.pathname.startsWith('/api/');
-    return new Response(api ? JSON.stringify({ error: `No such record: the ${badId} in the address is not an id.` }) : 'Not found: the address does not name a record.', {
-      status: 404,
-      headers: { 'content-type': api ? 'application/json' : 'text/plain; charset=utf-8' },
-    });
+    return new Response(
+      api ? JSON.stringify({ error: `No such record: the ${badId} in the address is not an id.` }) : 'Not found: the address does not name a record.',
+      {
+        status: 404,
+        headers: { 'content-type': api ? 'application/json' : 'text/plain; charset=utf-8' },
+      },
+    );
   }
   if (OWN_AUTH_PREFIXES.some((p) => url.pathname.startsWith(p))) return next();
   const { user, member } = await lookUpSession(request.headers);

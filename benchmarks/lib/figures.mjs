@@ -45,7 +45,9 @@ export function writeFigures(bench, figures, extra = {}) {
 export function readAllFigures() {
   let names = [];
   try {
-    names = readdirSync(RESULTS_DIR).filter((n) => n.endsWith('.json')).sort();
+    names = readdirSync(RESULTS_DIR)
+      .filter((n) => n.endsWith('.json'))
+      .sort();
   } catch {
     return [];
   }

@@ -24,7 +24,10 @@ export async function signIn(base, email) {
     body: JSON.stringify({ email, password: PASSWORD }),
   });
   if (r.status !== 200) throw new Error(`sign-in answered ${r.status}`);
-  return r.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+  return r.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
 }
 
 /** Writes `total` garments (two per ticket, invented customers) into the shop led by `email`; the newest `open` are not collected. */
@@ -109,4 +112,3 @@ export async function oneAtATime(url, headers, times) {
   }
   return { ...stats(ms), bytes: last.bytes, status: last.status, etag: last.etag, next: last.next };
 }
-

@@ -34,14 +34,26 @@ export async function startShipped({ dataDir, env = {}, timeoutMs = 180_000, qui
   const t0 = performance.now();
   const child = spawn('node', ['scripts/start.mjs'], {
     stdio: quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
-    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dir, SMTP_PORT: String(smtp), PAYMENTS_FAKE_PORT: String(pay), BETTER_AUTH_URL: base, ...env },
+    env: {
+      ...process.env,
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      DATA_DIR: dir,
+      SMTP_PORT: String(smtp),
+      PAYMENTS_FAKE_PORT: String(pay),
+      BETTER_AUTH_URL: base,
+      ...env,
+    },
   });
   let exited = null;
   child.on('exit', (code) => (exited = code));
   for (;;) {
     if (exited != null) throw new Error(`npm start exited with ${exited} before answering`);
     if (performance.now() - t0 > timeoutMs) throw new Error(`no 200 from ${base}/ in ${timeoutMs} ms`);
-    const ok = await fetch(`${base}/`).then(async (r) => (await r.arrayBuffer(), r.status === 200), () => false);
+    const ok = await fetch(`${base}/`).then(
+      async (r) => (await r.arrayBuffer(), r.status === 200),
+      () => false,
+    );
     if (ok) break;
     await sleep(20);
   }
@@ -70,7 +82,9 @@ export function serverPid(startPid) {
 
 /** Resident memory (MB) of a process, from /proc. */
 export function rssMb(pid) {
-  const line = readFileSync(`/proc/${pid}/status`, 'utf8').split('\n').find((l) => l.startsWith('VmRSS:'));
+  const line = readFileSync(`/proc/${pid}/status`, 'utf8')
+    .split('\n')
+    .find((l) => l.startsWith('VmRSS:'));
   return Number(line.split(/\s+/)[1]) / 1024;
 }
 
@@ -82,5 +96,8 @@ export async function signIn(base, email, password = 'cuffwright-demo') {
     body: JSON.stringify({ email, password }),
   });
   if (r.status !== 200) throw new Error(`sign-in of ${email} answered ${r.status}`);
-  return r.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+  return r.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
 }

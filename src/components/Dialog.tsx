@@ -44,15 +44,17 @@ export function Dialog({ open, onClose, title, children, size = 'panel', testId 
     >
       {/* Nothing inside while closed: no hidden copy of its title or buttons for a search to find. */}
       {open && (
-      <div className="flex flex-col gap-4 p-4">
-        <div className="flex items-start justify-between gap-3">
-          <h2 id={titleId} className="text-2xl font-extrabold">{title}</h2>
-          <button type="button" onClick={onClose} className="min-h-11 shrink-0 rounded-md border-2 border-ink px-4 text-lg font-semibold">
-            Close
-          </button>
+        <div className="flex flex-col gap-4 p-4">
+          <div className="flex items-start justify-between gap-3">
+            <h2 id={titleId} className="text-2xl font-extrabold">
+              {title}
+            </h2>
+            <button type="button" onClick={onClose} className="min-h-11 shrink-0 rounded-md border-2 border-ink px-4 text-lg font-semibold">
+              Close
+            </button>
+          </div>
+          {children}
         </div>
-        {children}
-      </div>
       )}
     </dialog>
   );

@@ -58,11 +58,7 @@ export function Field({ label, registration, error, hint, id, ...input }: Props)
 /** The main button of a form. */
 export function SubmitButton({ busy, children }: { busy: boolean; children: string }) {
   return (
-    <button
-      type="submit"
-      disabled={busy}
-      className="min-h-11 rounded bg-accent px-5 py-2 text-lg font-semibold text-white disabled:opacity-60"
-    >
+    <button type="submit" disabled={busy} className="min-h-11 rounded bg-accent px-5 py-2 text-lg font-semibold text-white disabled:opacity-60">
       {busy ? 'Working…' : children}
     </button>
   );

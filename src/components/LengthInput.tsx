@@ -43,7 +43,10 @@ export function LengthInput({ id, label, unit, registration, hint, error, readin
           className={'measure w-full min-w-0 rounded-l-md border-2 bg-card px-3 text-xl ' + (error ? 'border-cut' : 'border-rule focus:border-accent')}
           {...registration}
         />
-        <span aria-hidden="true" className="flex min-w-12 items-center justify-center rounded-r-md border-2 border-l-0 border-rule bg-paper px-2 text-base text-muted">
+        <span
+          aria-hidden="true"
+          className="flex min-w-12 items-center justify-center rounded-r-md border-2 border-l-0 border-rule bg-paper px-2 text-base text-muted"
+        >
           {unit}
         </span>
       </div>

@@ -8,9 +8,7 @@ import { dataDir } from './app-paths';
 const holder = globalThis as typeof globalThis & { __cuffwrightDb?: DbHandle };
 
 /** The open database handle (driver, migrator, closer). */
-export const handle: DbHandle = (holder.__cuffwrightDb ??= openDatabase(
-  DATABASE_URL ? { url: DATABASE_URL } : { dataDir: join(dataDir(DATA_DIR), 'pglite') },
-));
+export const handle: DbHandle = (holder.__cuffwrightDb ??= openDatabase(DATABASE_URL ? { url: DATABASE_URL } : { dataDir: join(dataDir(DATA_DIR), 'pglite') }));
 
 /** The Drizzle database every service uses. */
 export const db = handle.db;

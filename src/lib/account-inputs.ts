@@ -12,9 +12,7 @@ const person = z.object({
 });
 
 /** A new password: long enough to resist guessing. */
-export const newPassword = text()
-  .min(10, 'Use at least 10 characters')
-  .max(128, 'Keep the password under 128 characters');
+export const newPassword = text().min(10, 'Use at least 10 characters').max(128, 'Keep the password under 128 characters');
 
 /** Sign-in form. */
 export const signInInput = person.pick({ email: true }).extend({

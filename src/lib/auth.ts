@@ -28,11 +28,14 @@ export const auth = betterAuth({
     resetPasswordTokenExpiresIn: 3600,
     revokeSessionsOnPasswordReset: true,
     sendResetPassword: async ({ user, url }) =>
-      sendMail({
-        to: user.email,
-        subject: 'Reset your Cuffwright password',
-        text: `Hello ${user.name},\n\nTo choose a new password, open this link within the hour:\n\n${url}\n\nIf you did not ask for this, ignore this message.`,
-      }, { shopId: null, kind: 'password-reset' }),
+      sendMail(
+        {
+          to: user.email,
+          subject: 'Reset your Cuffwright password',
+          text: `Hello ${user.name},\n\nTo choose a new password, open this link within the hour:\n\n${url}\n\nIf you did not ask for this, ignore this message.`,
+        },
+        { shopId: null, kind: 'password-reset' },
+      ),
   },
   session: { expiresIn: 60 * 60 * 24 * 7, updateAge: 60 * 60 * 24 },
   // Failed sign-ins are limited per account in src/services/sign-in-limit.ts; better-auth's own
@@ -45,14 +48,17 @@ export const auth = betterAuth({
     appAuthHooks(),
     shopPlugin({
       sendInvitation: async ({ id, email, role, shopId, shopName, inviterName }) =>
-        sendMail({
-          to: email,
-          subject: `${inviterName} invited you to ${shopName} on Cuffwright`,
-          text:
-            `${inviterName} invited you to join ${shopName} on Cuffwright as ` +
-            `${isRole(role) ? ROLE_LABELS[role].name.toLowerCase() : role}.\n\n` +
-            `Open this link to accept and choose your password:\n\n${BETTER_AUTH_URL}/invite/${id}\n`,
-        }, { shopId, kind: 'invitation' }),
+        sendMail(
+          {
+            to: email,
+            subject: `${inviterName} invited you to ${shopName} on Cuffwright`,
+            text:
+              `${inviterName} invited you to join ${shopName} on Cuffwright as ` +
+              `${isRole(role) ? ROLE_LABELS[role].name.toLowerCase() : role}.\n\n` +
+              `Open this link to accept and choose your password:\n\n${BETTER_AUTH_URL}/invite/${id}\n`,
+          },
+          { shopId, kind: 'invitation' },
+        ),
     }),
   ],
 });

@@ -28,14 +28,21 @@ export const garmentInput = z.object({
   /** how the bottoms came in; left out, intake takes a plain hem (DEFAULT_EXISTING_FINISH) */
   existingFinish: z.enum(EXISTING_FINISHES, { error: 'Choose plain hem, cuff or unfinished.' }).optional(),
   /** "same as last time": a garment of the same customer whose fitting is copied into this one */
-  fittingFrom: z.union([z.uuid('Choose a fitting from the list.'), z.literal(''), z.null()]).optional().transform(blankToNull),
+  fittingFrom: z
+    .union([z.uuid('Choose a fitting from the list.'), z.literal(''), z.null()])
+    .optional()
+    .transform(blankToNull),
 });
 
 /** A change to a garment's description, due date, assignee or existing finish. */
 export const garmentPatch = garmentInput.omit({ fittingFrom: true }).partial();
 
 /** Optional text: blank or missing is null. */
-const optionalText = (max: number, message: string) => z.union([text().trim().max(max, message), z.null()]).optional().transform(blankToNull);
+const optionalText = (max: number, message: string) =>
+  z
+    .union([text().trim().max(max, message), z.null()])
+    .optional()
+    .transform(blankToNull);
 
 /** A new customer typed at intake: the one customer schema (customer-request.ts). */
 export { newCustomer, customerPatch } from './customer-request';
@@ -62,7 +69,10 @@ export const intakeGarment = garmentInput.extend({
 /** The body of POST /api/tickets: an existing or a new customer, a note, the garments brought in,
  * and whether the ticket is a rush (priced at intake with the garments' finishes and work). */
 export const intakeRequest = z.object({
-  customerId: z.union([z.uuid('Choose a customer from the list.'), z.literal(''), z.null()]).optional().transform(blankToNull),
+  customerId: z
+    .union([z.uuid('Choose a customer from the list.'), z.literal(''), z.null()])
+    .optional()
+    .transform(blankToNull),
   customer: newCustomer.optional(),
   note: optionalText(2000, 'Keep the note under 2000 characters.'),
   dueOn: dueDate,

@@ -18,7 +18,9 @@ export class BodyRefused extends Error {
 
 /** The messages for each refusal, with the limit in words. */
 export function tooLargeMessage(limit: number): string {
-  return limit >= 1024 * 1024 ? `The request is larger than ${Math.floor(limit / (1024 * 1024))} MB.` : `The request is larger than ${Math.floor(limit / 1024)} KB.`;
+  return limit >= 1024 * 1024
+    ? `The request is larger than ${Math.floor(limit / (1024 * 1024))} MB.`
+    : `The request is larger than ${Math.floor(limit / 1024)} KB.`;
 }
 const STALLED = 'The request stopped arriving before it was complete: send it again.';
 
@@ -93,5 +95,10 @@ export async function readLimited(request: Request, limit: number, idleMs = BODY
 /** The request again, its body the bytes already read (for handlers that read it themselves). */
 export function withBody(request: Request, bytes: Uint8Array): Request {
   const hasBody = request.method !== 'GET' && request.method !== 'HEAD';
-  return new Request(request.url, { method: request.method, headers: request.headers, body: hasBody ? (bytes as BodyInit) : undefined, signal: request.signal });
+  return new Request(request.url, {
+    method: request.method,
+    headers: request.headers,
+    body: hasBody ? (bytes as BodyInit) : undefined,
+    signal: request.signal,
+  });
 }

@@ -14,12 +14,22 @@ export function addressKey(address: string): string {
   const left = head ? head.split(':') : [];
   const right = tail ? tail.split(':') : [];
   const groups = a.includes('::') ? [...left, ...Array(8 - left.length - right.length).fill('0'), ...right] : left;
-  return `${groups.slice(0, 4).map((g) => g.replace(/^0+(?=.)/, '')).join(':')}::/64`;
+  return `${groups
+    .slice(0, 4)
+    .map((g) => g.replace(/^0+(?=.)/, ''))
+    .join(':')}::/64`;
 }
 
 /** The address `hops` entries back: the peer itself with 0, else from the right of X-Forwarded-For. */
 export function clientAddressOf(peer: string, forwardedFor: string | null, hops: number): string {
-  const chain = [peer, ...(forwardedFor ?? '').split(',').map((s) => s.trim()).filter(Boolean).reverse()];
+  const chain = [
+    peer,
+    ...(forwardedFor ?? '')
+      .split(',')
+      .map((s) => s.trim())
+      .filter(Boolean)
+      .reverse(),
+  ];
   return addressKey(chain[Math.min(hops, chain.length - 1)]!);
 }
 

@@ -26,7 +26,10 @@ export const TEXTS_NOT_SET_UP = 'Text messages are not set up for this shop';
 export const NO_PHONE = 'Not sent by text: no phone number';
 
 /** The sends of one message to a customer (none, with `refused` saying why). */
-export function plannedSends(customer: { email: string | null; phone: string | null; contactBy: ContactPreference }, textsReady: boolean): { sends: PlannedSend[]; refused: string | null } {
+export function plannedSends(
+  customer: { email: string | null; phone: string | null; contactBy: ContactPreference },
+  textsReady: boolean,
+): { sends: PlannedSend[]; refused: string | null } {
   const email = customer.email?.trim() || null;
   const phone = customer.phone?.trim() || null;
   const wantsEmail = customer.contactBy !== 'text';

@@ -59,7 +59,12 @@ export const lineInput = z.discriminatedUnion('source', [
   z.object({
     source: z.literal('adjust'),
     label: text().trim().min(1, 'Say what the adjustment is for.').max(80, 'Keep it under 80 characters.'),
-    amountMinor: z.number({ error: 'Enter the amount.' }).int('Whole minor units only.').min(-MAX_MINOR).max(MAX_MINOR).refine((n) => n !== 0, 'An adjustment of nothing changes nothing.'),
+    amountMinor: z
+      .number({ error: 'Enter the amount.' })
+      .int('Whole minor units only.')
+      .min(-MAX_MINOR)
+      .max(MAX_MINOR)
+      .refine((n) => n !== 0, 'An adjustment of nothing changes nothing.'),
     reason: text().trim().min(3, 'Give the reason for the adjustment.').max(300, 'Keep the reason under 300 characters.'),
   }),
   z.object({

@@ -46,7 +46,17 @@ export interface PriceChange {
 
 /** Everything the counter panel shows about a ticket's money. */
 export interface CounterSummary extends Balance {
-  ticket: { id: string; number: number; status: string; dueOn: string | null; customerId: string | null; customerName: string | null; customerEmail: string | null; customerPhone: string | null; contactBy: ContactPreference };
+  ticket: {
+    id: string;
+    number: number;
+    status: string;
+    dueOn: string | null;
+    customerId: string | null;
+    customerName: string | null;
+    customerEmail: string | null;
+    customerPhone: string | null;
+    contactBy: ContactPreference;
+  };
   /** true when the SMS service is configured (without it, notices go by e-mail); told by the
    * counter screen's own read, GET /api/tickets/[id]/payments, not by every money answer */
   textsReady?: boolean;

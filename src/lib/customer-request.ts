@@ -6,7 +6,11 @@ import { text } from './text';
 import { CONTACT_PREFERENCES } from './contact-channels';
 
 const blankToNull = (v: string | null | undefined) => (v === '' || v === undefined ? null : v);
-const optionalText = (max: number, message: string) => z.union([text().trim().max(max, message), z.null()]).optional().transform(blankToNull);
+const optionalText = (max: number, message: string) =>
+  z
+    .union([text().trim().max(max, message), z.null()])
+    .optional()
+    .transform(blankToNull);
 
 /** Every customer field as typed: a name, and a phone, e-mail and notes that may be blank (blank = none). */
 export const customerFields = z.object({

@@ -57,9 +57,7 @@ export function legTaperRequest(leg: LegValues, unit: Unit, precision: Precision
 /** The note a leg's plan carries when a front pin was taken on a cuffed leg. */
 export function frontPinNote(leg: LegValues): string | null {
   if (leg.frontPin.trim() === '') return null;
-  return leg.finish === 'cuff'
-    ? 'Front pin recorded; a cuff is hemmed level, so the cut follows the back pin all round.'
-    : 'Front pin recorded.';
+  return leg.finish === 'cuff' ? 'Front pin recorded; a cuff is hemmed level, so the cut follows the back pin all round.' : 'Front pin recorded.';
 }
 
 /** The taper check for a plain-hemmed leg (the hem turned up must lie flat too), or null until all three widths are given. */

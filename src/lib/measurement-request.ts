@@ -20,8 +20,20 @@ export const FINISH_LABELS: Record<Finish, string> = { cuff: 'Cuff', plain: 'Pla
 
 /** Every length a leg can record, in the order the form asks for them. */
 export const LEG_LENGTHS = [
-  'backPin', 'frontPin', 'cuffDepth', 'hemSection', 'turnUnder', 'hemAllowance', 'slope',
-  'available', 'oldCrease', 'widthAtEdge', 'widthAbove', 'heightAbove', 'widthAtCut', 'seamAllowance',
+  'backPin',
+  'frontPin',
+  'cuffDepth',
+  'hemSection',
+  'turnUnder',
+  'hemAllowance',
+  'slope',
+  'available',
+  'oldCrease',
+  'widthAtEdge',
+  'widthAbove',
+  'heightAbove',
+  'widthAtCut',
+  'seamAllowance',
 ] as const;
 /** One recorded length of a leg. */
 export type LegLength = (typeof LEG_LENGTHS)[number];
@@ -45,7 +57,9 @@ export const LEG_LENGTH_LABELS: Record<LegLength, string> = {
 };
 
 const length = (what: string) =>
-  text({ error: `${what}: type a length such as 1 1/2 or 38.` }).trim().max(40, `${what} is too long: type a length such as 1 1/2.`);
+  text({ error: `${what}: type a length such as 1 1/2 or 38.` })
+    .trim()
+    .max(40, `${what} is too long: type a length such as 1 1/2.`);
 
 /** One leg as typed: the finish, the preset applied (its id; the name only to show), and every length as text ('' = not taken). */
 export const legInput = z.object({
@@ -53,10 +67,7 @@ export const legInput = z.object({
   preset: text().trim().max(60, 'Keep the preset name under 60 characters.').default(''),
   /** the preset applied, by id ('' = none): the server records it only if it is the shop's and usable by the actor */
   presetId: text().trim().max(40, 'Choose the preset from the list.').default(''),
-  ...(Object.fromEntries(LEG_LENGTHS.map((f) => [f, length(LEG_LENGTH_LABELS[f]).default('')])) as Record<
-    LegLength,
-    z.ZodDefault<z.ZodString>
-  >),
+  ...(Object.fromEntries(LEG_LENGTHS.map((f) => [f, length(LEG_LENGTH_LABELS[f]).default('')])) as Record<LegLength, z.ZodDefault<z.ZodString>>),
 });
 
 /** The body of PUT /api/garments/[id]/measurements: the unit typed in and both legs. */

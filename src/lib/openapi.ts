@@ -96,8 +96,14 @@ function operationOf(path: string, method: string, spec: RouteSpec): Operation {
         required: Boolean(spec.body),
         content: {
           [bodyType]: {
-            schema: bodySchema ? jsonSchemaOf(bodySchema) : bodyType.startsWith('multipart/') ? { type: 'object', properties: { photos: { type: 'array', items: BINARY } } } : {},
-            ...(bodyExamples.length ? { examples: Object.fromEntries(bodyExamples.map((e, i) => [`example${i + 1}`, { summary: e.summary, value: e.body }])) } : {}),
+            schema: bodySchema
+              ? jsonSchemaOf(bodySchema)
+              : bodyType.startsWith('multipart/')
+                ? { type: 'object', properties: { photos: { type: 'array', items: BINARY } } }
+                : {},
+            ...(bodyExamples.length
+              ? { examples: Object.fromEntries(bodyExamples.map((e, i) => [`example${i + 1}`, { summary: e.summary, value: e.body }])) }
+              : {}),
           },
         },
       }
@@ -147,7 +153,7 @@ export function openApiDocument(entries: RouteEntry[], version: string): OpenApi
       description:
         "The JSON API behind Cuffwright's screens, open to other shop tools. Sign in with POST /api/auth/sign-in/email " +
         '{email, password}; the session cookie it sets is what every non-public route reads, and x-permission names the ' +
-        'permission a role needs (src/lib/roles.ts). A write from a browser must carry the site\'s own Origin. ' +
+        "permission a role needs (src/lib/roles.ts). A write from a browser must carry the site's own Origin. " +
         'Errors are always {error} or {error, issues} (one message per field): 400 the body is not JSON, 401 not signed in, ' +
         '403 the role may not, 404 not in your shop, 409 a conflict, 413 too large, 422 refused as sent, 429 too many.',
     },
@@ -165,7 +171,10 @@ export function openApiDocument(entries: RouteEntry[], version: string): OpenApi
         },
       },
       responses: {
-        Problem: { description: 'Refused: see the status and the message.', content: { 'application/json': { schema: { $ref: '#/components/schemas/Error' } } } },
+        Problem: {
+          description: 'Refused: see the status and the message.',
+          content: { 'application/json': { schema: { $ref: '#/components/schemas/Error' } } },
+        },
       },
       securitySchemes: {
         session: {

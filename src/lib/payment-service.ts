@@ -15,7 +15,11 @@ export function paymentClient(): Stripe | null {
   const base = PAYMENTS_API_BASE ? new URL(PAYMENTS_API_BASE) : null;
   client = new Stripe(PAYMENTS_API_KEY, {
     ...(base
-      ? { host: base.hostname, port: Number(base.port || (base.protocol === 'https:' ? 443 : 80)), protocol: base.protocol.replace(':', '') as 'http' | 'https' }
+      ? {
+          host: base.hostname,
+          port: Number(base.port || (base.protocol === 'https:' ? 443 : 80)),
+          protocol: base.protocol.replace(':', '') as 'http' | 'https',
+        }
       : {}),
     // One retry for reading and expiring sessions (safe to repeat); making one passes its own
     // idempotency key and no retry (`maxNetworkRetries: 0` per call), so a click waits one timeout at most.

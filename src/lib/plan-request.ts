@@ -20,10 +20,7 @@ import {
 function lengthOf(what: string) {
   const say = lengthMessages(what);
   return z.union(
-    [
-      z.number().min(-MAX_LENGTH_NUMBER, say.farTooLarge).max(MAX_LENGTH_NUMBER, say.farTooLarge),
-      text().trim().max(MAX_LENGTH_TEXT, say.tooLong),
-    ],
+    [z.number().min(-MAX_LENGTH_NUMBER, say.farTooLarge).max(MAX_LENGTH_NUMBER, say.farTooLarge), text().trim().max(MAX_LENGTH_TEXT, say.tooLong)],
     { error: (iss) => (iss.input === undefined ? say.enter : say.notALength) },
   );
 }

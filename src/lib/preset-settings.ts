@@ -45,10 +45,7 @@ export const presetSettings = z.object({
 /** Preset settings as checked (blank lengths dropped). */
 export type PresetSettings = z.output<typeof presetSettings>;
 
-const name = text({ error: 'Give the preset a name.' })
-  .trim()
-  .min(1, 'Give the preset a name.')
-  .max(60, 'Keep the name under 60 characters.');
+const name = text({ error: 'Give the preset a name.' }).trim().min(1, 'Give the preset a name.').max(60, 'Keep the name under 60 characters.');
 
 /** POST /api/presets: a new house preset (lead) or one of your own. */
 export const presetCreateInput = z.object({

@@ -64,7 +64,12 @@ export function readyAge(readyAt: string | null | undefined, today: string): { d
  * the unassigned and each other person; otherwise (the apprentice sees only their own and
  * unassigned work) only what can match: no one else's name, and "everything" is "mine and unassigned". */
 export function whoOptions(seesAll: boolean, people: { userId: string; name: string }[], userId: string): WhoOption[] {
-  if (!seesAll) return [{ value: 'all', label: 'Mine and unassigned' }, { value: 'mine', label: 'Mine' }, { value: 'nobody', label: 'Unassigned' }];
+  if (!seesAll)
+    return [
+      { value: 'all', label: 'Mine and unassigned' },
+      { value: 'mine', label: 'Mine' },
+      { value: 'nobody', label: 'Unassigned' },
+    ];
   return [
     { value: 'all', label: 'Everyone' },
     { value: 'mine-open', label: 'Mine and unassigned' },

@@ -30,7 +30,11 @@ export const queueQuery = z.object({
   view: z.enum(['open', 'history'], { error: 'Choose view=open or view=history.' }).default('open'),
   after: text()
     .max(200)
-    .transform((a, ctx) => decodeCursor(a) ?? (ctx.addIssue({ code: 'custom', message: 'The page cursor is not one this queue gave out; start again from the first page.' }), z.NEVER))
+    .transform(
+      (a, ctx) =>
+        decodeCursor(a) ??
+        (ctx.addIssue({ code: 'custom', message: 'The page cursor is not one this queue gave out; start again from the first page.' }), z.NEVER),
+    )
     .optional(),
   limit: z.coerce
     .number({ error: `Give limit as a whole number from 1 to ${HISTORY_PAGE.max}.` })

@@ -6,9 +6,7 @@
  * `growing` lets `free` hits through, then each further one must wait base·2^(n−free) (at most
  * `capMs`) after the last, and the count is forgotten after `quietMs` without a hit.
  */
-export type Rule =
-  | { kind: 'fixed'; max: number; windowMs: number }
-  | { kind: 'growing'; free: number; baseMs: number; capMs: number; quietMs: number };
+export type Rule = { kind: 'fixed'; max: number; windowMs: number } | { kind: 'growing'; free: number; baseMs: number; capMs: number; quietMs: number };
 
 /** A key's counter: hits so far, when its window began and when the last hit came (ms). */
 export interface Counter {

@@ -60,7 +60,9 @@ export type Relayout = (layout: SafeDocumentNode, layOut: (doc: ReactElement<Doc
 // A pdfkit document as react-pdf's own toBuffer makes it, for the props our documents use.
 function newPdf(props: DocumentProps): { ctx: PdfCtx; stream: NodeJS.ReadableStream } {
   const { title, creator = 'react-pdf', producer = 'react-pdf' } = props;
-  const info = Object.fromEntries(Object.entries({ Title: title, Creator: creator, Producer: producer, CreationDate: new Date() }).filter(([, v]) => v !== undefined));
+  const info = Object.fromEntries(
+    Object.entries({ Title: title, Creator: creator, Producer: producer, CreationDate: new Date() }).filter(([, v]) => v !== undefined),
+  );
   const Ctor = PDFDocument as unknown as new (options: object) => PdfCtx;
   const ctx = new Ctor({ compress: true, displayTitle: true, autoFirstPage: false, info });
   return { ctx, stream: ctx as unknown as NodeJS.ReadableStream };

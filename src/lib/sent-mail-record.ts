@@ -11,6 +11,19 @@ export interface MailOrigin {
 }
 
 /** Records a message the SMTP host (or, for a text, the SMS service with its words) accepted. */
-export async function recordSentMail(origin: MailOrigin, mail: { to: string; subject: string; messageId: string; channel?: 'email' | 'sms'; body?: string }): Promise<void> {
-  await db.insert(sentMail).values({ shopId: origin.shopId, kind: origin.kind, to: mail.to, subject: mail.subject, messageId: mail.messageId, channel: mail.channel ?? 'email', body: mail.body ?? null });
+export async function recordSentMail(
+  origin: MailOrigin,
+  mail: { to: string; subject: string; messageId: string; channel?: 'email' | 'sms'; body?: string },
+): Promise<void> {
+  await db
+    .insert(sentMail)
+    .values({
+      shopId: origin.shopId,
+      kind: origin.kind,
+      to: mail.to,
+      subject: mail.subject,
+      messageId: mail.messageId,
+      channel: mail.channel ?? 'email',
+      body: mail.body ?? null,
+    });
 }

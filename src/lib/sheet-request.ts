@@ -9,7 +9,11 @@ const ISO_DAY = /^\d{4}-\d{2}-\d{2}$/;
 // The queue screen's filters as query parameters, with the device's "today" for due dates.
 const queueFilterQuery = z.object({
   step: z.enum(['open', 'all', ...GARMENT_STEPS] as const, { error: 'Choose a step, "open" or "all".' }).default('open'),
-  who: text().trim().min(1, 'Choose who: all, mine, mine-open, nobody or a person.').max(100, 'Choose who: all, mine, mine-open, nobody or a person.').default('all'),
+  who: text()
+    .trim()
+    .min(1, 'Choose who: all, mine, mine-open, nobody or a person.')
+    .max(100, 'Choose who: all, mine, mine-open, nobody or a person.')
+    .default('all'),
   due: z.enum(['all', 'today', 'overdue'], { error: 'Choose due: all, today or overdue.' }).default('all'),
   search: text().max(100, 'Keep the search under 100 characters.').default(''),
   // The queue reads due dates against the device's own calendar; the batch must use the same day.

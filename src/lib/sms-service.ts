@@ -67,7 +67,12 @@ export function signedUrlOf(requestUrl: string): string {
 
 /** Sends one text; resolves with the service's message id, throws when the service refuses it. */
 export async function sendText(message: { to: string; body: string; statusCallback: string }): Promise<{ sid: string; status: string }> {
-  const sent = await (await smsClient()).messages.create({ to: dialable(message.to), from: SMS_FROM!, body: message.body, statusCallback: message.statusCallback });
+  const sent = await (await smsClient()).messages.create({
+    to: dialable(message.to),
+    from: SMS_FROM!,
+    body: message.body,
+    statusCallback: message.statusCallback,
+  });
   return { sid: sent.sid, status: sent.status };
 }
 

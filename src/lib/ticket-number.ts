@@ -7,7 +7,10 @@ const JOINERS = new Set(['and', 'of', 'the', 'de', 'la', 'le', 'du', 'der', 'die
 
 /** The shop's initials for its ticket book: first letter of each word (joiners and "&" skipped), at most 3, upper case; '' when the name has no letters. */
 export function shopInitials(shopName: string): string {
-  const words = shopName.trim().split(/[\s\-–—_/.,]+/u).filter((w) => /\p{L}/u.test(w));
+  const words = shopName
+    .trim()
+    .split(/[\s\-–—_/.,]+/u)
+    .filter((w) => /\p{L}/u.test(w));
   const kept = words.filter((w) => !JOINERS.has(w.toLowerCase()));
   const letters = (kept.length > 0 ? kept : words).map((w) => w.match(/\p{L}/u)![0]);
   return letters.slice(0, 3).join('').toLocaleUpperCase();

@@ -19,7 +19,10 @@ export async function anonymousSheetRefusal(address: string): Promise<Response |
   const hit = await hitLimits([{ key: limitKey('sheet:addr', address), rule: ANONYMOUS_SHEET_RULE }]);
   if (hit.ok) return null;
   console.warn(`[limits] anonymous cut sheet refused (address ${address}), retry in ${hit.retryAfter} s`);
-  return tooMany(`Too many cut sheets from this address without signing in. Sign in to print more, or try again in ${Math.ceil(hit.retryAfter / 60)} min.`, hit.retryAfter);
+  return tooMany(
+    `Too many cut sheets from this address without signing in. Sign in to print more, or try again in ${Math.ceil(hit.retryAfter / 60)} min.`,
+    hit.retryAfter,
+  );
 }
 
 /** Runs an anonymous render in the per-process queue; undefined when the queue is full. */

@@ -24,13 +24,7 @@ export async function auditOf(shopId: string, subjects: string[], actions?: stri
     .select({ id: auditEvents.id, at: auditEvents.at, actorName: user.name, action: auditEvents.action, detail: auditEvents.detail })
     .from(auditEvents)
     .leftJoin(user, eq(user.id, auditEvents.actorId))
-    .where(
-      and(
-        eq(auditEvents.shopId, shopId),
-        inArray(auditEvents.subject, subjects),
-        actions ? inArray(auditEvents.action, actions) : undefined,
-      ),
-    )
+    .where(and(eq(auditEvents.shopId, shopId), inArray(auditEvents.subject, subjects), actions ? inArray(auditEvents.action, actions) : undefined))
     .orderBy(desc(auditEvents.at), desc(auditEvents.id));
   return rows.map((r) => ({ ...r, at: r.at.toISOString(), detail: r.detail as Record<string, unknown> }));
 }

@@ -37,9 +37,7 @@ export async function searchCustomers(actor: Actor, typed: string): Promise<Cust
   // "id" inside the subquery would then be the ticket's own.
   const theirTickets = sql`from tickets t where t.customer_id = "customers"."id" and t.shop_id = ${actor.shopId}`;
   const lastTicket = sql<number | null>`(select max(t.number) ${theirTickets})`;
-  const base = db
-    .select({ id: customers.id, name: customers.name, phone: customers.phone, email: customers.email, lastTicket })
-    .from(customers);
+  const base = db.select({ id: customers.id, name: customers.name, phone: customers.phone, email: customers.email, lastTicket }).from(customers);
   const inShop = and(eq(customers.shopId, actor.shopId), isNull(customers.erasedAt));
   const labelled = (rows: Omit<CustomerHit, 'lastTicketLabel'>[]): CustomerHit[] =>
     rows.map((r) => ({ ...r, lastTicketLabel: r.lastTicket === null ? null : ticketLabel(r.lastTicket, actor.shopName) }));
@@ -54,17 +52,21 @@ export async function searchCustomers(actor: Actor, typed: string): Promise<Cust
     sql`lower(${customers.email}) like ${prefix}`,
     // Three digits at least, so a house number in a name search does not find every phone.
     digits.length >= 3 ? sql`${customers.phoneDigits} like ${`%${digits}%`}` : undefined,
-    ticket
-      ? sql`exists (select 1 ${theirTickets} and t.number = ${Number(ticket[1])})`
-      : undefined,
+    ticket ? sql`exists (select 1 ${theirTickets} and t.number = ${Number(ticket[1])})` : undefined,
   );
   return labelled(await base.where(and(inShop, matches)).orderBy(asc(customers.name)).limit(SEARCH_LIMIT));
 }
 
 /** Adds a customer to the actor's shop. */
-export async function createCustomer(actor: Actor, input: NewCustomer | { name: string; phone?: string | null; email?: string | null; notes?: string | null }): Promise<Customer> {
+export async function createCustomer(
+  actor: Actor,
+  input: NewCustomer | { name: string; phone?: string | null; email?: string | null; notes?: string | null },
+): Promise<Customer> {
   return db.transaction(async (tx) => {
-    const [row] = await tx.insert(customers).values({ ...input, shopId: actor.shopId }).returning();
+    const [row] = await tx
+      .insert(customers)
+      .values({ ...input, shopId: actor.shopId })
+      .returning();
     await audit(tx, actor.shopId, actor.userId, 'customer.created', row!.id);
     return row!;
   });
@@ -73,7 +75,10 @@ export async function createCustomer(actor: Actor, input: NewCustomer | { name: 
 /** One customer of the actor's shop; 404 for anyone else's. */
 export async function getCustomer(actor: Actor, id: string): Promise<Customer> {
   if (!isUuid(id)) throw new ServiceError(404, 'No such customer in this shop.');
-  const [row] = await db.select().from(customers).where(and(eq(customers.id, id), eq(customers.shopId, actor.shopId)));
+  const [row] = await db
+    .select()
+    .from(customers)
+    .where(and(eq(customers.id, id), eq(customers.shopId, actor.shopId)));
   if (!row) throw new ServiceError(404, 'No such customer in this shop.');
   return row;
 }
@@ -105,20 +110,44 @@ export async function updateCustomer(actor: Actor, id: string, patch: CustomerPa
 }
 
 function details(c: Customer): CustomerDetails {
-  return { id: c.id, name: c.name, phone: c.phone, email: c.email, notes: c.notes, contactBy: c.contactBy, erasedAt: c.erasedAt?.toISOString() ?? null, createdAt: c.createdAt.toISOString() };
+  return {
+    id: c.id,
+    name: c.name,
+    phone: c.phone,
+    email: c.email,
+    notes: c.notes,
+    contactBy: c.contactBy,
+    erasedAt: c.erasedAt?.toISOString() ?? null,
+    createdAt: c.createdAt.toISOString(),
+  };
 }
 
 /** The customers screen's view of one customer: details, every ticket with its garments, payments
  * and notices (newest ticket first), and the history of changes to the details. */
 export async function customerFile(actor: Actor, id: string): Promise<CustomerFile> {
   const c = await getCustomer(actor, id);
-  const ts = await db.select().from(tickets).where(and(eq(tickets.shopId, actor.shopId), eq(tickets.customerId, c.id))).orderBy(desc(tickets.number));
+  const ts = await db
+    .select()
+    .from(tickets)
+    .where(and(eq(tickets.shopId, actor.shopId), eq(tickets.customerId, c.id)))
+    .orderBy(desc(tickets.number));
   const ids = ts.map((t) => t.id);
   const [gs, ps, ns, rs] = ids.length
     ? await Promise.all([
-        db.select().from(garments).where(and(eq(garments.shopId, actor.shopId), inArray(garments.ticketId, ids))).orderBy(asc(garments.position)),
         db
-          .select({ id: payments.id, ticketId: payments.ticketId, method: payments.method, amountMinor: payments.amountMinor, currency: payments.currency, at: payments.at })
+          .select()
+          .from(garments)
+          .where(and(eq(garments.shopId, actor.shopId), inArray(garments.ticketId, ids)))
+          .orderBy(asc(garments.position)),
+        db
+          .select({
+            id: payments.id,
+            ticketId: payments.ticketId,
+            method: payments.method,
+            amountMinor: payments.amountMinor,
+            currency: payments.currency,
+            at: payments.at,
+          })
           .from(payments)
           .where(and(eq(payments.shopId, actor.shopId), inArray(payments.ticketId, ids)))
           .orderBy(asc(payments.at)),
@@ -128,7 +157,15 @@ export async function customerFile(actor: Actor, id: string): Promise<CustomerFi
           .where(and(eq(notices.shopId, actor.shopId), inArray(notices.ticketId, ids)))
           .orderBy(asc(notices.createdAt)),
         db
-          .select({ id: refunds.id, ticketId: refunds.ticketId, method: refunds.method, status: refunds.status, amountMinor: refunds.amountMinor, currency: refunds.currency, at: refunds.at })
+          .select({
+            id: refunds.id,
+            ticketId: refunds.ticketId,
+            method: refunds.method,
+            status: refunds.status,
+            amountMinor: refunds.amountMinor,
+            currency: refunds.currency,
+            at: refunds.at,
+          })
           .from(refunds)
           .where(and(eq(refunds.shopId, actor.shopId), inArray(refunds.ticketId, ids)))
           .orderBy(asc(refunds.at)),
@@ -163,7 +200,12 @@ export async function eraseCustomer(actor: Actor, id: string): Promise<CustomerD
   const c = await getCustomer(actor, id);
   if (c.erasedAt) return details(c);
   const { row, keys } = await db.transaction(async (tx) => {
-    const ticketIds = (await tx.select({ id: tickets.id }).from(tickets).where(and(eq(tickets.shopId, actor.shopId), eq(tickets.customerId, c.id)))).map((t) => t.id);
+    const ticketIds = (
+      await tx
+        .select({ id: tickets.id })
+        .from(tickets)
+        .where(and(eq(tickets.shopId, actor.shopId), eq(tickets.customerId, c.id)))
+    ).map((t) => t.id);
     const photos = ticketIds.length
       ? await tx
           .delete(files)
@@ -172,18 +214,30 @@ export async function eraseCustomer(actor: Actor, id: string): Promise<CustomerD
               eq(files.shopId, actor.shopId),
               or(
                 inArray(files.ticketId, ticketIds),
-                inArray(files.garmentId, tx.select({ id: garments.id }).from(garments).where(and(eq(garments.shopId, actor.shopId), inArray(garments.ticketId, ticketIds)))),
+                inArray(
+                  files.garmentId,
+                  tx
+                    .select({ id: garments.id })
+                    .from(garments)
+                    .where(and(eq(garments.shopId, actor.shopId), inArray(garments.ticketId, ticketIds))),
+                ),
               ),
             ),
           )
           .returning({ path: files.path, thumbPath: files.thumbPath })
       : [];
     if (ticketIds.length) {
-      await tx.update(notices).set({ to: ERASED_NAME, body: '' }).where(and(eq(notices.shopId, actor.shopId), inArray(notices.ticketId, ticketIds)));
+      await tx
+        .update(notices)
+        .set({ to: ERASED_NAME, body: '' })
+        .where(and(eq(notices.shopId, actor.shopId), inArray(notices.ticketId, ticketIds)));
     }
     // The shop's own record of mail it sent them (never another shop's rows).
     if (c.email) {
-      await tx.update(sentMail).set({ to: ERASED_NAME }).where(and(eq(sentMail.shopId, actor.shopId), sql`lower(${sentMail.to}) = ${c.email.toLowerCase()}`));
+      await tx
+        .update(sentMail)
+        .set({ to: ERASED_NAME })
+        .where(and(eq(sentMail.shopId, actor.shopId), sql`lower(${sentMail.to}) = ${c.email.toLowerCase()}`));
     }
     // The history keeps who changed what and when, not the old values themselves.
     const changed = await tx
@@ -191,7 +245,10 @@ export async function eraseCustomer(actor: Actor, id: string): Promise<CustomerD
       .from(auditEvents)
       .where(and(eq(auditEvents.shopId, actor.shopId), eq(auditEvents.subject, c.id), eq(auditEvents.action, 'customer.changed')));
     for (const e of changed) {
-      await tx.update(auditEvents).set({ detail: { fields: Object.keys(e.detail as object), erased: true } }).where(eq(auditEvents.id, e.id));
+      await tx
+        .update(auditEvents)
+        .set({ detail: { fields: Object.keys(e.detail as object), erased: true } })
+        .where(eq(auditEvents.id, e.id));
     }
     const [row] = await tx
       .update(customers)

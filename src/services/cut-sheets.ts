@@ -101,7 +101,19 @@ export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precisio
       const taper = taperReq ? planRequest.parse(taperReq) : null;
       orders.push(
         taper?.kind === 'taper'
-          ? { side, finish: 'cuff', input, ...finished, taper: { widthAtEdge: taper.widthAtEdge, widthAbove: taper.widthAbove, heightAbove: taper.heightAbove, seamAllowance: taper.seamAllowance, widthAtCut: taper.widthAtCut } }
+          ? {
+              side,
+              finish: 'cuff',
+              input,
+              ...finished,
+              taper: {
+                widthAtEdge: taper.widthAtEdge,
+                widthAbove: taper.widthAbove,
+                heightAbove: taper.heightAbove,
+                seamAllowance: taper.seamAllowance,
+                widthAtCut: taper.widthAtCut,
+              },
+            }
           : { side, finish: 'cuff', input, ...finished },
       );
     } else if (parsed.kind === 'hem') {
@@ -110,7 +122,19 @@ export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precisio
       const widths = legHemTaperRequest(leg, unit, precision, opts);
       orders.push(
         widths
-          ? { side, finish: 'hem', input, taper: { widthAtEdge: widths.widthAtEdge, widthAbove: widths.widthAbove, heightAbove: widths.heightAbove, seamAllowance: widths.seamAllowance, widthAtCut: widths.widthAtCut }, ...finished }
+          ? {
+              side,
+              finish: 'hem',
+              input,
+              taper: {
+                widthAtEdge: widths.widthAtEdge,
+                widthAbove: widths.widthAbove,
+                heightAbove: widths.heightAbove,
+                seamAllowance: widths.seamAllowance,
+                widthAtCut: widths.widthAtCut,
+              },
+              ...finished,
+            }
           : { side, finish: 'hem', input, ...finished },
       );
     }
@@ -186,7 +210,14 @@ export async function queueSheetsStream(actor: Actor, filter: QueueFilter, today
   const scale = await scaleOf(actor.shopId, opts);
   const ids = rows.map((r) => r.id);
   // listQueue only lists what the actor may see; the full rows are read once, scoped again.
-  const full = new Map((await db.select().from(garments).where(and(inArray(garments.id, ids), garmentVisibleTo(actor)))).map((g) => [g.id, g]));
+  const full = new Map(
+    (
+      await db
+        .select()
+        .from(garments)
+        .where(and(inArray(garments.id, ids), garmentVisibleTo(actor)))
+    ).map((g) => [g.id, g]),
+  );
   const fittings = await legsOfGarments(ids);
   const sheets: CutSheetData[] = [];
   const skipped: string[] = [];
@@ -197,11 +228,15 @@ export async function queueSheetsStream(actor: Actor, filter: QueueFilter, today
       sheets.push(sheetOf(actor, g, fittings.get(g.id) ?? [], row, baseUrl, scale));
     } catch (e) {
       if (!(e instanceof ServiceError)) throw e;
-      skipped.push(`${ticketLabel(row.ticketNumber, actor.shopName)} ${row.description}: ${e.message === NO_FITTING ? 'no fitting measurements yet' : e.message}`);
+      skipped.push(
+        `${ticketLabel(row.ticketNumber, actor.shopName)} ${row.description}: ${e.message === NO_FITTING ? 'no fitting measurements yet' : e.message}`,
+      );
     }
   }
   if (sheets.length === 0) {
-    const why = skipped.every((line) => line.endsWith(': no fitting measurements yet')) ? 'has fitting measurements yet' : `can be printed: ${skipped.join('; ')}`;
+    const why = skipped.every((line) => line.endsWith(': no fitting measurements yet'))
+      ? 'has fitting measurements yet'
+      : `can be printed: ${skipped.join('; ')}`;
     throw new ServiceError(422, `None of these garments ${why}.`.replace(/\.\.$/, '.'));
   }
   // Drawn in the sheet pool part by part; the database work above is done before the first byte.

@@ -34,7 +34,12 @@ const TICKETS: DemoTicket[] = [
     customer: 1,
     note: 'Two pairs of chinos: plain hem.',
     garments: [
-      { description: 'Stone chinos', status: 'marked', dueIn: 0, fitting: { finish: 'plain', left: { backPin: '30 1/2', available: '2 3/4', hemAllowance: '1 1/2' } } },
+      {
+        description: 'Stone chinos',
+        status: 'marked',
+        dueIn: 0,
+        fitting: { finish: 'plain', left: { backPin: '30 1/2', available: '2 3/4', hemAllowance: '1 1/2' } },
+      },
       { description: 'Olive chinos', status: 'received', dueIn: 0 },
     ],
   },
@@ -47,7 +52,11 @@ const TICKETS: DemoTicket[] = [
         status: 'cut',
         who: 'apprentice',
         dueIn: -1,
-        fitting: { finish: 'cuff', left: { backPin: '31 1/4', cuffDepth: '1 1/2', available: '5' }, right: { backPin: '31 1/2', cuffDepth: '1 1/2', available: '4 3/4' } },
+        fitting: {
+          finish: 'cuff',
+          left: { backPin: '31 1/4', cuffDepth: '1 1/2', available: '5' },
+          right: { backPin: '31 1/2', cuffDepth: '1 1/2', available: '4 3/4' },
+        },
       },
     ],
   },
@@ -61,7 +70,19 @@ const TICKETS: DemoTicket[] = [
         status: 'stitched',
         who: 'tailor',
         dueIn: 1,
-        fitting: { finish: 'cuff', left: { backPin: '33', frontPin: '32 3/4', cuffDepth: '1 3/4', available: '5 1/4', widthAtEdge: '8', widthAbove: '8 3/4', heightAbove: '6', seamAllowance: '1/2' } },
+        fitting: {
+          finish: 'cuff',
+          left: {
+            backPin: '33',
+            frontPin: '32 3/4',
+            cuffDepth: '1 3/4',
+            available: '5 1/4',
+            widthAtEdge: '8',
+            widthAbove: '8 3/4',
+            heightAbove: '6',
+            seamAllowance: '1/2',
+          },
+        },
       },
     ],
   },
@@ -94,22 +115,44 @@ export async function seedBenchDemo(shopId: string, customerIds: string[], peopl
     number += 1;
     const [ticket] = await db
       .insert(tickets)
-      .values({ shopId, number, customerId: customerIds[t.customer], note: t.note, status: leastAdvanced(t.garments.map((g) => g.status)), createdById: people.counter, createdAt: takenIn(t) })
+      .values({
+        shopId,
+        number,
+        customerId: customerIds[t.customer],
+        note: t.note,
+        status: leastAdvanced(t.garments.map((g) => g.status)),
+        createdById: people.counter,
+        createdAt: takenIn(t),
+      })
       .returning();
     for (const [position, g] of t.garments.entries()) {
       const [row] = await db
         .insert(garments)
-        .values({ shopId, ticketId: ticket!.id, position, description: g.description, status: g.status, dueOn: day(g.dueIn), assigneeId: g.who ? people[g.who] : null, existingFinish: g.existingFinish, createdAt: ticket!.createdAt })
+        .values({
+          shopId,
+          ticketId: ticket!.id,
+          position,
+          description: g.description,
+          status: g.status,
+          dueOn: day(g.dueIn),
+          assigneeId: g.who ? people[g.who] : null,
+          existingFinish: g.existingFinish,
+          createdAt: ticket!.createdAt,
+        })
         .returning();
       if (g.readyDaysAgo !== undefined) {
         // Its move to ready, back then, as the bench would have recorded it.
         const at = new Date(Date.now() - g.readyDaysAgo * 86_400_000);
-        await db.insert(auditEvents).values({ shopId, actorId: people.tailor ?? null, action: 'garment.moved', subject: row!.id, detail: { from: 'pressed', to: 'ready' }, at });
+        await db
+          .insert(auditEvents)
+          .values({ shopId, actorId: people.tailor ?? null, action: 'garment.moved', subject: row!.id, detail: { from: 'pressed', to: 'ready' }, at });
       }
       if (!g.fitting) continue;
       const legs = { left: g.fitting.left, right: g.fitting.right ?? g.fitting.left };
       for (const leg of ['left', 'right'] as const) {
-        await db.insert(measurements).values({ shopId, garmentId: row!.id, leg, unit: 'in', finish: g.fitting.finish, values: read(legs[leg]), takenById: people.tailor });
+        await db
+          .insert(measurements)
+          .values({ shopId, garmentId: row!.id, leg, unit: 'in', finish: g.fitting.finish, values: read(legs[leg]), takenById: people.tailor });
         // The fitting's history, as if typed in at the fitting.
         const typed = [['finish', g.fitting.finish], ...Object.entries(legs[leg])];
         await auditMany(

@@ -29,9 +29,9 @@ export async function seedCounterDemo(shopId: string): Promise<void> {
     location: '7 Bobbin Row, Wickhollow',
     autoReadyNotice: false,
   });
-  await db.insert(priceItems).values(
-    (Object.keys(DEMO_PRICES) as PriceKey[]).map((key) => ({ shopId, key, label: DEFAULT_PRICE_LABELS[key], amountMinor: DEMO_PRICES[key] })),
-  );
+  await db
+    .insert(priceItems)
+    .values((Object.keys(DEMO_PRICES) as PriceKey[]).map((key) => ({ shopId, key, label: DEFAULT_PRICE_LABELS[key], amountMinor: DEMO_PRICES[key] })));
   // A millisecond apart: the list shows kinds in the order added.
   const at = Date.now();
   await db.insert(priceKinds).values(DEMO_KINDS.map((k, i) => ({ shopId, ...k, createdAt: new Date(at + i) })));

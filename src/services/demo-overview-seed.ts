@@ -25,7 +25,10 @@ export async function seedOverviewDemo(shopId: string, people: Partial<Record<Ro
   const intakeOf = new Map<string, Date>();
   for (const g of rows) {
     const intake = new Date(now.getTime() - DAYS_AGO[g.status] * DAY);
-    await db.update(garments).set({ createdAt: intake }).where(and(eq(garments.id, g.id), eq(garments.shopId, shopId)));
+    await db
+      .update(garments)
+      .set({ createdAt: intake })
+      .where(and(eq(garments.id, g.id), eq(garments.shopId, shopId)));
     const first = intakeOf.get(g.ticketId);
     if (!first || intake < first) intakeOf.set(g.ticketId, intake);
     // The moves spread between intake and two hours ago, one step at a time.
@@ -42,7 +45,11 @@ export async function seedOverviewDemo(shopId: string, people: Partial<Record<Ro
     if (moves.length) await db.insert(auditEvents).values(moves);
     if (moves.length) lastMove.set(g.ticketId, moves[moves.length - 1]!.at);
   }
-  for (const [ticketId, at] of intakeOf) await db.update(tickets).set({ createdAt: at }).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId)));
+  for (const [ticketId, at] of intakeOf)
+    await db
+      .update(tickets)
+      .set({ createdAt: at })
+      .where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId)));
 
   const linen = rows.find((g) => g.status === 'collected');
   const chinos = rows.filter((g) => g.description?.endsWith('chinos'));
@@ -54,19 +61,56 @@ export async function seedOverviewDemo(shopId: string, people: Partial<Record<Ro
   }
   if (chinos.length) {
     const at = intakeOf.get(chinos[0]!.ticketId)!;
-    await priced(shopId, chinos[0]!.ticketId, chinos.map((g) => g.id), people, at);
+    await priced(
+      shopId,
+      chinos[0]!.ticketId,
+      chinos.map((g) => g.id),
+      people,
+      at,
+    );
     await paid(shopId, chinos[0]!.ticketId, 'deposit', 'cash', 1500, at, people);
   }
 }
 
 async function priced(shopId: string, ticketId: string, garmentIds: string[], people: Partial<Record<Role, string>>, at: Date) {
-  await db.insert(priceLines).values(
-    garmentIds.map((garmentId) => ({ shopId, ticketId, garmentId, key: 'plain-hem' as const, source: 'list' as const, label: 'Plain hem', amountMinor: PLAIN_HEM, createdById: people.counter, createdAt: at })),
-  );
-  await db.insert(auditEvents).values({ shopId, actorId: people.counter ?? null, action: 'prices.line-added', subject: ticketId, detail: { amountMinor: PLAIN_HEM * garmentIds.length }, at });
+  await db
+    .insert(priceLines)
+    .values(
+      garmentIds.map((garmentId) => ({
+        shopId,
+        ticketId,
+        garmentId,
+        key: 'plain-hem' as const,
+        source: 'list' as const,
+        label: 'Plain hem',
+        amountMinor: PLAIN_HEM,
+        createdById: people.counter,
+        createdAt: at,
+      })),
+    );
+  await db
+    .insert(auditEvents)
+    .values({
+      shopId,
+      actorId: people.counter ?? null,
+      action: 'prices.line-added',
+      subject: ticketId,
+      detail: { amountMinor: PLAIN_HEM * garmentIds.length },
+      at,
+    });
 }
 
-async function paid(shopId: string, ticketId: string, purpose: 'deposit' | 'balance', method: 'cash' | 'card', amountMinor: number, at: Date, people: Partial<Record<Role, string>>) {
+async function paid(
+  shopId: string,
+  ticketId: string,
+  purpose: 'deposit' | 'balance',
+  method: 'cash' | 'card',
+  amountMinor: number,
+  at: Date,
+  people: Partial<Record<Role, string>>,
+) {
   await db.insert(payments).values({ shopId, ticketId, purpose, method, amountMinor, currency: 'EUR', takenById: people.counter, at });
-  await db.insert(auditEvents).values({ shopId, actorId: people.counter ?? null, action: `payment.${purpose}`, subject: ticketId, detail: { method, amountMinor }, at });
+  await db
+    .insert(auditEvents)
+    .values({ shopId, actorId: people.counter ?? null, action: `payment.${purpose}`, subject: ticketId, detail: { method, amountMinor }, at });
 }

@@ -51,7 +51,11 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
     .insert(customers)
     .values(DEMO_CUSTOMERS.map((c) => ({ ...c, shopId })))
     .returning({ id: customers.id });
-  await seedBenchDemo(shopId, people.map((p) => p.id), ids);
+  await seedBenchDemo(
+    shopId,
+    people.map((p) => p.id),
+    ids,
+  );
   await seedHousePresets(shopId);
   await seedCounterDemo(shopId);
   await seedOverviewDemo(shopId, ids);

@@ -39,7 +39,13 @@ export async function previousFittings(actor: Actor, customerId: string): Promis
       unit: m.unit,
       legs: [],
     };
-    fitting.legs.push({ leg: m.leg, finish: m.finish, preset: presetName ?? m.preset, finishedLength: values.backPin?.text ?? null, cuffDepth: values.cuffDepth?.text ?? null });
+    fitting.legs.push({
+      leg: m.leg,
+      finish: m.finish,
+      preset: presetName ?? m.preset,
+      finishedLength: values.backPin?.text ?? null,
+      cuffDepth: values.cuffDepth?.text ?? null,
+    });
     byGarment.set(m.garmentId, fitting);
   }
   const perKind = new Map<string, number>();
@@ -67,7 +73,9 @@ export async function copyFittings(tx: Db, actor: Actor, customerId: string | nu
     .innerJoin(garments, eq(garments.id, measurements.garmentId))
     .innerJoin(tickets, eq(tickets.id, garments.ticketId))
     .leftJoin(presets, and(eq(presets.id, measurements.presetId), eq(presets.shopId, actor.shopId)))
-    .where(and(inArray(measurements.garmentId, sources), eq(garments.shopId, actor.shopId), eq(tickets.shopId, actor.shopId), eq(tickets.customerId, customerId)));
+    .where(
+      and(inArray(measurements.garmentId, sources), eq(garments.shopId, actor.shopId), eq(tickets.shopId, actor.shopId), eq(tickets.customerId, customerId)),
+    );
   const events: Parameters<typeof auditMany>[1] = [];
   for (const { to, from } of pairs) {
     const legs = rows.filter((r) => r.m.garmentId === from);
@@ -77,9 +85,19 @@ export async function copyFittings(tx: Db, actor: Actor, customerId: string | nu
       // The copy points at the same preset (this shop's, by the join) under its current name.
       const preset = presetName ?? m.preset;
       const presetId = presetName === null ? null : m.presetId;
-      await tx.insert(measurements).values({ shopId: actor.shopId, garmentId: to, leg: m.leg, unit: m.unit, finish: m.finish, preset, presetId, values, takenById: actor.userId });
-      const detail = (field: string, value: string | null) => ({ leg: m.leg, field, old: null, new: value, unit: m.unit, copiedFrom: ticketLabel(number, actor.shopName) });
-      const push = (field: string, value: string | null) => value && events.push({ shopId: actor.shopId, actorId: actor.userId, action: 'measurement.changed', subject: to, detail: detail(field, value) });
+      await tx
+        .insert(measurements)
+        .values({ shopId: actor.shopId, garmentId: to, leg: m.leg, unit: m.unit, finish: m.finish, preset, presetId, values, takenById: actor.userId });
+      const detail = (field: string, value: string | null) => ({
+        leg: m.leg,
+        field,
+        old: null,
+        new: value,
+        unit: m.unit,
+        copiedFrom: ticketLabel(number, actor.shopName),
+      });
+      const push = (field: string, value: string | null) =>
+        value && events.push({ shopId: actor.shopId, actorId: actor.userId, action: 'measurement.changed', subject: to, detail: detail(field, value) });
       push('finish', m.finish);
       push('preset', preset);
       for (const field of LEG_LENGTHS) push(field, values[field]?.text ?? null);

@@ -20,7 +20,13 @@ export function isFitted(legs: readonly SavedForPlan[]): boolean {
 export async function fittedGarments(q: Db, garmentIds: string[]): Promise<Set<string>> {
   if (garmentIds.length === 0) return new Set();
   const rows = await q
-    .select({ garmentId: measurements.garmentId, finish: measurements.finish, preset: measurements.preset, values: measurements.values, unit: measurements.unit })
+    .select({
+      garmentId: measurements.garmentId,
+      finish: measurements.finish,
+      preset: measurements.preset,
+      values: measurements.values,
+      unit: measurements.unit,
+    })
     .from(measurements)
     .where(inArray(measurements.garmentId, garmentIds));
   const byGarment = new Map<string, SavedForPlan[]>();
@@ -44,7 +50,10 @@ export async function assertFittingRule(tx: Db, shopId: string, ids: string[], f
   const fitted = await fittedGarments(tx, ids);
   const missing = ids.filter((id) => !fitted.has(id));
   if (missing.length === 0) return;
-  const [first] = await tx.select({ description: garments.description }).from(garments).where(and(eq(garments.shopId, shopId), eq(garments.id, missing[0]!)));
+  const [first] = await tx
+    .select({ description: garments.description })
+    .from(garments)
+    .where(and(eq(garments.shopId, shopId), eq(garments.id, missing[0]!)));
   const what = missing.length === 1 ? `“${first?.description ?? 'Trousers'}”` : `${missing.length} of these garments`;
   throw new ServiceError(409, noFittingRefusal(what, stepLabel(to)));
 }

@@ -14,9 +14,15 @@ import { assertFittingRule } from './fitting-rule';
 
 /** Sets the ticket's status to its least advanced garment's step, inside the ticket's lock `tx`. */
 export async function writeTicketStatus(tx: Db, shopId: string, ticketId: string): Promise<GarmentStep> {
-  const steps = await tx.select({ status: garments.status }).from(garments).where(and(eq(garments.shopId, shopId), eq(garments.ticketId, ticketId)));
+  const steps = await tx
+    .select({ status: garments.status })
+    .from(garments)
+    .where(and(eq(garments.shopId, shopId), eq(garments.ticketId, ticketId)));
   const status = leastAdvanced(steps.map((g) => g.status));
-  await tx.update(tickets).set({ status, updatedAt: new Date() }).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId)));
+  await tx
+    .update(tickets)
+    .set({ status, updatedAt: new Date() })
+    .where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId)));
   return status;
 }
 
@@ -41,11 +47,19 @@ export async function moveGarmentsLocked(
     .where(and(eq(garments.shopId, actor.shopId), eq(garments.ticketId, ticketId), inArray(garments.id, ids), eq(garments.status, from)))
     .returning();
   if (rows.length !== ids.length) {
-    throw new ServiceError(409, ids.length === 1 ? 'Someone else moved this garment first: reload and try again.' : 'Someone else moved a garment of this ticket first: reload and try again.');
+    throw new ServiceError(
+      409,
+      ids.length === 1
+        ? 'Someone else moved this garment first: reload and try again.'
+        : 'Someone else moved a garment of this ticket first: reload and try again.',
+    );
   }
   await writeTicketStatus(tx, actor.shopId, ticketId);
   const detail = back ? { from, to, back: true } : { from, to };
-  await auditMany(tx, rows.map((g) => ({ shopId: actor.shopId, actorId: actor.userId, action: 'garment.moved', subject: g.id, detail })));
+  await auditMany(
+    tx,
+    rows.map((g) => ({ shopId: actor.shopId, actorId: actor.userId, action: 'garment.moved', subject: g.id, detail })),
+  );
   return rows;
 }
 

@@ -18,7 +18,10 @@ export async function stepBackGarment(actor: Actor, id: string, from: GarmentSte
   if (!to) throw new ServiceError(422, 'This garment has only been received: there is no step before that.');
   const allowed = g.status === 'collected' ? can(actor.role, ['tickets', 'reopen']) : can(actor.role, ['tickets', 'advance']);
   if (!allowed) {
-    throw new ServiceError(422, g.status === 'collected' ? 'Only the lead can step a collected garment back.' : `Your role (${actor.role}) may not move garments.`);
+    throw new ServiceError(
+      422,
+      g.status === 'collected' ? 'Only the lead can step a collected garment back.' : `Your role (${actor.role}) may not move garments.`,
+    );
   }
   return writeStep(actor, g, to, true);
 }

@@ -25,14 +25,15 @@ export { isUuid, lockTicket, withTicketLock };
 /** Garments the actor may see: all of the shop's, or (apprentice) their own and unassigned. */
 export function garmentVisibleTo(actor: Actor) {
   const inShop = eq(garments.shopId, actor.shopId);
-  return can(actor.role, ['tickets', 'read-all'])
-    ? inShop
-    : and(inShop, or(eq(garments.assigneeId, actor.userId), isNull(garments.assigneeId)));
+  return can(actor.role, ['tickets', 'read-all']) ? inShop : and(inShop, or(eq(garments.assigneeId, actor.userId), isNull(garments.assigneeId)));
 }
 
 /** The customer as a ticket or garment shows them: contact details (e-mail, phone, notes) only to
  * roles that may read customers; an apprentice works the garment, never calls its owner. */
-export function customerCard(actor: Pick<Actor, 'role'>, c: { id: string; name: string; phone: string | null; email: string | null; notes: string | null; contactBy?: ContactPreference }): CustomerCard {
+export function customerCard(
+  actor: Pick<Actor, 'role'>,
+  c: { id: string; name: string; phone: string | null; email: string | null; notes: string | null; contactBy?: ContactPreference },
+): CustomerCard {
   if (!can(actor.role, ['customers', 'read'])) return { id: c.id, name: c.name };
   return { id: c.id, name: c.name, phone: c.phone, email: c.email, notes: c.notes, contactBy: c.contactBy ?? 'email' };
 }
@@ -47,7 +48,10 @@ export async function refreshTicketAssignee(tx: Db, shopId: string, ticketId: st
     .orderBy(asc(garments.position), asc(garments.createdAt))
     .limit(1);
   const assigneeId = first?.assigneeId ?? null;
-  await tx.update(tickets).set({ assigneeId }).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId)));
+  await tx
+    .update(tickets)
+    .set({ assigneeId })
+    .where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId)));
   return assigneeId;
 }
 
@@ -73,7 +77,10 @@ export async function staffOf(actor: Actor): Promise<Person[]> {
 
 async function checkAssignee(actor: Actor, assigneeId: string | null | undefined): Promise<void> {
   if (!assigneeId) return;
-  const [m] = await db.select({ id: member.id }).from(member).where(and(eq(member.organizationId, actor.shopId), eq(member.userId, assigneeId)));
+  const [m] = await db
+    .select({ id: member.id })
+    .from(member)
+    .where(and(eq(member.organizationId, actor.shopId), eq(member.userId, assigneeId)));
   if (!m) throw new ServiceError(422, 'Give the garment to someone in this shop.');
 }
 
@@ -106,7 +113,10 @@ export async function listQueue(actor: Actor): Promise<QueueRow[]> {
 /** The garment when the actor may see it, otherwise 404. */
 export async function visibleGarment(actor: Actor, id: string): Promise<Garment> {
   if (!isUuid(id)) throw new ServiceError(404, 'No such garment in this shop.');
-  const [g] = await db.select().from(garments).where(and(eq(garments.id, id), garmentVisibleTo(actor)));
+  const [g] = await db
+    .select()
+    .from(garments)
+    .where(and(eq(garments.id, id), garmentVisibleTo(actor)));
   if (!g) throw new ServiceError(404, 'No such garment in this shop.');
   return g;
 }
@@ -116,7 +126,10 @@ export async function summaries(rows: Garment[]): Promise<TicketGarment[]> {
   const ids = [...new Set(rows.flatMap((g) => (g.assigneeId ? [g.assigneeId] : [])))];
   const people = ids.length ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, ids)) : [];
   const names = new Map(people.map((u) => [u.id, u.name]));
-  const fitted = await fittedGarments(db, rows.map((g) => g.id));
+  const fitted = await fittedGarments(
+    db,
+    rows.map((g) => g.id),
+  );
   return rows.map((g) => ({
     id: g.id,
     description: g.description ?? 'Trousers',
@@ -152,9 +165,16 @@ export async function refreshTicketStatus(shopId: string, ticketId: string, tx?:
 }
 
 /** Adds a garment to a ticket of the shop. */
-export async function addGarment(actor: Actor, ticketId: string, input: Omit<z.output<typeof garmentInput>, 'fittingFrom'> & { fittingFrom?: string | null }): Promise<Garment> {
+export async function addGarment(
+  actor: Actor,
+  ticketId: string,
+  input: Omit<z.output<typeof garmentInput>, 'fittingFrom'> & { fittingFrom?: string | null },
+): Promise<Garment> {
   if (!isUuid(ticketId)) throw new ServiceError(404, 'No such ticket in this shop.');
-  const [t] = await db.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
+  const [t] = await db
+    .select()
+    .from(tickets)
+    .where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
   if (!t) throw new ServiceError(404, 'No such ticket in this shop.');
   if (t.status === 'collected') throw new ServiceError(422, `Ticket ${ticketLabel(t.number, actor.shopName)} is collected: open a new ticket.`);
   await checkAssignee(actor, input.assigneeId);
@@ -162,7 +182,15 @@ export async function addGarment(actor: Actor, ticketId: string, input: Omit<z.o
   return withTicketLock(actor.shopId, ticketId, async (tx) => {
     const [row] = await tx
       .insert(garments)
-      .values({ shopId: actor.shopId, ticketId, description: input.description, dueOn: input.dueOn ?? t.dueOn, assigneeId: input.assigneeId, existingFinish: input.existingFinish, position })
+      .values({
+        shopId: actor.shopId,
+        ticketId,
+        description: input.description,
+        dueOn: input.dueOn ?? t.dueOn,
+        assigneeId: input.assigneeId,
+        existingFinish: input.existingFinish,
+        position,
+      })
       .returning();
     await audit(tx, actor.shopId, actor.userId, 'garment.added', row!.id, { ticket: t.number, description: input.description });
     if (input.fittingFrom) await copyFittings(tx, actor, t.customerId, [{ to: row!.id, from: input.fittingFrom }]);
@@ -198,7 +226,12 @@ export async function moveGarment(actor: Actor, id: string, to: GarmentStep): Pr
   const g = await visibleGarment(actor, id);
   const next = nextStep(g.status);
   if (next !== to) {
-    throw new ServiceError(422, next ? `This garment is ${stepLabel(g.status)}: it can only move on to ${stepLabel(next)}.` : 'This garment has been collected: there is no step after that.');
+    throw new ServiceError(
+      422,
+      next
+        ? `This garment is ${stepLabel(g.status)}: it can only move on to ${stepLabel(next)}.`
+        : 'This garment has been collected: there is no step after that.',
+    );
   }
   const allowed = to === 'collected' ? can(actor.role, ['tickets', 'pickup']) : can(actor.role, ['tickets', 'advance']);
   if (!allowed) throw new ServiceError(422, `Your role (${actor.role}) may not move a garment to ${stepLabel(to)}.`);

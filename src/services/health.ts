@@ -21,7 +21,9 @@ let shippedWhen: number[] | undefined;
 
 /** The `when` stamps of the migrations this build ships, oldest first. */
 function shipped(): number[] {
-  shippedWhen ??= (JSON.parse(readFileSync(join(migrationsDir(), 'meta', '_journal.json'), 'utf8')) as { entries: { when: number }[] }).entries.map((e) => e.when);
+  shippedWhen ??= (JSON.parse(readFileSync(join(migrationsDir(), 'meta', '_journal.json'), 'utf8')) as { entries: { when: number }[] }).entries.map(
+    (e) => e.when,
+  );
   return shippedWhen;
 }
 

@@ -14,9 +14,7 @@ import { ServiceError } from './errors';
 import { usablePreset } from './presets';
 
 /** Both legs' lengths read exactly, or a message for each field that could not be read. */
-export type ReadLengths =
-  | { ok: true; legs: Record<Leg, Partial<Record<LegLength, SavedLength>>> }
-  | { ok: false; issues: Record<string, string> };
+export type ReadLengths = { ok: true; legs: Record<Leg, Partial<Record<LegLength, SavedLength>>> } | { ok: false; issues: Record<string, string> };
 
 /**
  * What the engine would refuse in each leg's plans (cuff or hem, and the taper check), keyed by the
@@ -109,7 +107,13 @@ export async function legsOfGarments(garmentIds: string[]): Promise<Map<string, 
  * refused alike, so another shop's ids cannot be told apart from made-up ones. With no id, only a
  * removed preset's name already on the leg stays.
  */
-async function presetOfLeg(tx: Db, actor: Actor, leg: Leg, typed: Measurements['legs'][Leg], was: SavedLeg | undefined): Promise<{ id: string | null; name: string | null }> {
+async function presetOfLeg(
+  tx: Db,
+  actor: Actor,
+  leg: Leg,
+  typed: Measurements['legs'][Leg],
+  was: SavedLeg | undefined,
+): Promise<{ id: string | null; name: string | null }> {
   if (typed.presetId === '') return { id: null, name: !was?.presetId && was?.preset && was.preset === typed.preset ? was.preset : null };
   if (was?.presetId === typed.presetId) return { id: was.presetId, name: was.preset };
   const p = await usablePreset(tx, actor, typed.presetId);
@@ -129,7 +133,13 @@ export async function saveMeasurements(
   const events: Parameters<typeof auditMany>[1] = [];
   const change = (leg: Leg, field: string, old: string | null, now: string | null) => {
     if ((old ?? '') !== (now ?? '')) {
-      events.push({ shopId: actor.shopId, actorId: actor.userId, action: 'measurement.changed', subject: garmentId, detail: { leg, field, old: old || null, new: now || null, unit: input.unit } });
+      events.push({
+        shopId: actor.shopId,
+        actorId: actor.userId,
+        action: 'measurement.changed',
+        subject: garmentId,
+        detail: { leg, field, old: old || null, new: now || null, unit: input.unit },
+      });
     }
   };
   await db.transaction(async (tx) => {
@@ -141,7 +151,15 @@ export async function saveMeasurements(
       change(leg, 'preset', was?.preset ?? null, preset.name);
       if (was && was.unit !== input.unit) change(leg, 'unit', was.unit, input.unit);
       for (const field of LEG_LENGTHS) change(leg, field, was?.values[field]?.text ?? null, read[leg][field]?.text ?? null);
-      const row = { unit: input.unit, finish: typed.finish, preset: preset.name, presetId: preset.id, values: read[leg], takenById: actor.userId, takenAt: new Date() };
+      const row = {
+        unit: input.unit,
+        finish: typed.finish,
+        preset: preset.name,
+        presetId: preset.id,
+        values: read[leg],
+        takenById: actor.userId,
+        takenAt: new Date(),
+      };
       await tx
         .insert(measurements)
         .values({ shopId: actor.shopId, garmentId, leg, ...row })

@@ -32,7 +32,11 @@ export const SEND_LEASE_MS = NOTICE_LEASE_SECONDS * 1000;
 /** The ticket's notices, oldest first. */
 export async function listNotices(actor: Actor, ticketId: string): Promise<Notice[]> {
   await shopTicket(actor, ticketId);
-  return db.select().from(notices).where(and(eq(notices.shopId, actor.shopId), eq(notices.ticketId, ticketId))).orderBy(asc(notices.createdAt));
+  return db
+    .select()
+    .from(notices)
+    .where(and(eq(notices.shopId, actor.shopId), eq(notices.ticketId, ticketId)))
+    .orderBy(asc(notices.createdAt));
 }
 
 /** The ready notice's subject and text (e-mail), its short form (text message), and who gets it. */
@@ -99,7 +103,10 @@ async function deliver(notice: Notice): Promise<{ providerId: string | null }> {
   if (notice.channel === 'sms') {
     const sent = await sendText({ to: notice.to, body: notice.body, statusCallback: statusCallbackUrl(notice.id) });
     try {
-      await recordSentMail({ shopId: notice.shopId, kind: SENT_KIND[notice.kind] }, { to: notice.to, subject: notice.subject, messageId: sent.sid, channel: 'sms', body: notice.body });
+      await recordSentMail(
+        { shopId: notice.shopId, kind: SENT_KIND[notice.kind] },
+        { to: notice.to, subject: notice.subject, messageId: sent.sid, channel: 'sms', body: notice.body },
+      );
     } catch (e) {
       // As for e-mail (lib/mail.ts): the text is out, and a retry would send it twice.
       console.error('sent text not recorded:', e);
@@ -127,7 +134,11 @@ export async function attemptDelivery(notice: Notice): Promise<Notice> {
   }
   try {
     const { providerId } = await deliver(notice);
-    const [row] = await db.update(notices).set({ status: 'sent', attempts, sentAt: new Date(), lastError: null, nextAttemptAt: null, providerId }).where(eq(notices.id, notice.id)).returning();
+    const [row] = await db
+      .update(notices)
+      .set({ status: 'sent', attempts, sentAt: new Date(), lastError: null, nextAttemptAt: null, providerId })
+      .where(eq(notices.id, notice.id))
+      .returning();
     return row!;
   } catch (e) {
     const next = attempts < MAX_AUTO_ATTEMPTS ? new Date(Date.now() + BACKOFF_MS * 2 ** (attempts - 1)) : null;
@@ -151,7 +162,8 @@ async function queueReady(shopId: string, ticketId: string, actorId: string | nu
       .values(sends.map((send) => rowOf(shopId, ticketId, 'ready', message, send, 1, actorId)))
       .onConflictDoNothing()
       .returning();
-    if (queued.length < sends.length) throw new ServiceError(409, 'The ready notice of this ticket is already on record: send it again if the customer needs it.');
+    if (queued.length < sends.length)
+      throw new ServiceError(409, 'The ready notice of this ticket is already on record: send it again if the customer needs it.');
     await audit(tx, shopId, actorId, 'notice.queued', ticketId, { kind: 'ready', automatic: actorId === null, channels: sends.map((x) => x.channel) });
     return queued;
   });
@@ -188,7 +200,10 @@ export async function resendReadyNotice(actor: Actor, ticketId: string): Promise
       .limit(1);
     if (!last) throw new ServiceError(409, 'The ready notice has not been sent yet: send it first.');
     // Every channel of the last send must have gone (a failed one is retried instead).
-    const lastRows = await tx.select().from(notices).where(and(eq(notices.shopId, actor.shopId), eq(notices.ticketId, ticketId), eq(notices.kind, 'ready'), eq(notices.sequence, last.sequence)));
+    const lastRows = await tx
+      .select()
+      .from(notices)
+      .where(and(eq(notices.shopId, actor.shopId), eq(notices.ticketId, ticketId), eq(notices.kind, 'ready'), eq(notices.sequence, last.sequence)));
     if (lastRows.some((r) => r.status !== 'sent')) throw new ServiceError(409, 'The last ready notice is not delivered yet: retry that one instead.');
     // Two re-sends at once both ask for the next number: the unique index lets one through.
     const queued = await tx
@@ -197,7 +212,13 @@ export async function resendReadyNotice(actor: Actor, ticketId: string): Promise
       .onConflictDoNothing()
       .returning();
     if (queued.length < sends.length) throw new ServiceError(409, 'The ready notice is being sent again already.');
-    await audit(tx, actor.shopId, actor.userId, 'notice.resent', ticketId, { kind: 'ready', noticeId: queued[0]!.id, sequence: queued[0]!.sequence, previousId: last.id, channels: sends.map((x) => x.channel) });
+    await audit(tx, actor.shopId, actor.userId, 'notice.resent', ticketId, {
+      kind: 'ready',
+      noticeId: queued[0]!.id,
+      sequence: queued[0]!.sequence,
+      previousId: last.id,
+      channels: sends.map((x) => x.channel),
+    });
     return queued;
   });
   return deliverAll(rows);
@@ -273,7 +294,12 @@ export async function recordDeliveryReport(noticeId: string, report: { messageSi
   if (!delivery || !isUuid(noticeId) || !report.messageSid) return false;
   const [row] = await db
     .update(notices)
-    .set({ providerId: report.messageSid, delivery, deliveryError: delivery === 'delivered' ? null : report.errorCode ? `error ${report.errorCode}`.slice(0, 100) : null, deliveryAt: new Date() })
+    .set({
+      providerId: report.messageSid,
+      delivery,
+      deliveryError: delivery === 'delivered' ? null : report.errorCode ? `error ${report.errorCode}`.slice(0, 100) : null,
+      deliveryAt: new Date(),
+    })
     .where(and(eq(notices.id, noticeId), eq(notices.channel, 'sms'), or(eq(notices.providerId, report.messageSid), isNull(notices.providerId))))
     .returning({ id: notices.id });
   return Boolean(row);
@@ -283,7 +309,10 @@ export async function recordDeliveryReport(noticeId: string, report: { messageSi
 export async function retryNotice(actor: Actor, ticketId: string, noticeId: string): Promise<Notice> {
   await shopTicket(actor, ticketId);
   const [row] = isUuid(noticeId)
-    ? await db.select().from(notices).where(and(eq(notices.id, noticeId), eq(notices.ticketId, ticketId), eq(notices.shopId, actor.shopId)))
+    ? await db
+        .select()
+        .from(notices)
+        .where(and(eq(notices.id, noticeId), eq(notices.ticketId, ticketId), eq(notices.shopId, actor.shopId)))
     : [];
   if (!row) throw new ServiceError(404, 'No such notice on this ticket.');
   if (row.status === 'sent') throw new ServiceError(409, 'This notice was already sent.');
@@ -295,7 +324,10 @@ export async function retryNotice(actor: Actor, ticketId: string, noticeId: stri
 /** Tries every unsent notice whose next try is due (a failure's retry, or a send whose server
  * died before recording it); returns how many were tried. */
 export async function retryDueNotices(now = new Date()): Promise<number> {
-  const due = await db.select().from(notices).where(and(ne(notices.status, 'sent'), lte(notices.nextAttemptAt, now)));
+  const due = await db
+    .select()
+    .from(notices)
+    .where(and(ne(notices.status, 'sent'), lte(notices.nextAttemptAt, now)));
   for (const n of due) await attemptDelivery(n);
   return due.length;
 }
@@ -304,12 +336,18 @@ export async function retryDueNotices(now = new Date()): Promise<number> {
 export async function autoReadyNotice(shopId: string, ticketId: string): Promise<Notice | null> {
   const settings = await counterSettingsOf(shopId);
   if (!settings.autoReadyNotice) return null;
-  const [ticket] = await db.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId)));
+  const [ticket] = await db
+    .select()
+    .from(tickets)
+    .where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId)));
   if (!ticket) return null;
   const steps = await db.select({ status: garments.status }).from(garments).where(eq(garments.ticketId, ticketId));
   const ready = steps.length > 0 ? steps.every((g) => g.status === 'ready') : ticket.status === 'ready';
   if (!ready) return null;
-  const [already] = await db.select({ id: notices.id }).from(notices).where(and(eq(notices.ticketId, ticketId), eq(notices.kind, 'ready')));
+  const [already] = await db
+    .select({ id: notices.id })
+    .from(notices)
+    .where(and(eq(notices.ticketId, ticketId), eq(notices.kind, 'ready')));
   if (already) return null;
   try {
     return await queueReady(shopId, ticketId, null);

@@ -25,16 +25,34 @@ export async function shopOverview(shopId: string, period: Period, now = new Dat
   const start = bounds[0]!;
   const end = bounds[bounds.length - 1]!;
   // width_bucket gives 1 for the first day … n for the last (0 and n+1 lie outside, filtered out).
-  const edges = sql.join(bounds.map((b) => sql`${b.toISOString()}::timestamptz`), sql`, `);
+  const edges = sql.join(
+    bounds.map((b) => sql`${b.toISOString()}::timestamptz`),
+    sql`, `,
+  );
   const bucket = (at: SQLWrapper) => sql<number>`width_bucket(${at}, array[${edges}])`.mapWith(Number);
   const n = sql<number>`count(*)`.mapWith(Number);
   const moved = (to: GarmentStep) =>
-    and(eq(auditEvents.shopId, shopId), eq(auditEvents.action, 'garment.moved'), sql`${auditEvents.detail}->>'to' = ${to}`, sql`${auditEvents.detail}->>'back' is null`, gte(auditEvents.at, start), lt(auditEvents.at, end));
+    and(
+      eq(auditEvents.shopId, shopId),
+      eq(auditEvents.action, 'garment.moved'),
+      sql`${auditEvents.detail}->>'to' = ${to}`,
+      sql`${auditEvents.detail}->>'back' is null`,
+      gte(auditEvents.at, start),
+      lt(auditEvents.at, end),
+    );
 
   const [takenIn, movedOut, pickedUp, due, before, overdueNow, waiting, takings, givenBack, ready] = await Promise.all([
-    db.select({ b: bucket(garments.createdAt), n }).from(garments).where(and(eq(garments.shopId, shopId), gte(garments.createdAt, start), lt(garments.createdAt, end))).groupBy(sql`1`),
+    db
+      .select({ b: bucket(garments.createdAt), n })
+      .from(garments)
+      .where(and(eq(garments.shopId, shopId), gte(garments.createdAt, start), lt(garments.createdAt, end)))
+      .groupBy(sql`1`),
     // Handed over one garment at a time…
-    db.select({ b: bucket(auditEvents.at), n }).from(auditEvents).where(moved('collected')).groupBy(sql`1`),
+    db
+      .select({ b: bucket(auditEvents.at), n })
+      .from(auditEvents)
+      .where(moved('collected'))
+      .groupBy(sql`1`),
     // …or a whole ticket at the counter before pickups recorded each garment's move: its garments
     // collected without a move of their own (a pickup now writes garment.moved, counted above).
     db
@@ -60,9 +78,19 @@ export async function shopOverview(shopId: string, period: Period, now = new Dat
       .from(garments)
       .where(and(eq(garments.shopId, shopId), gte(garments.dueOn, days[0]!), sql`${garments.dueOn} <= ${days[days.length - 1]!}`))
       .groupBy(garments.dueOn),
-    db.select({ n: count() }).from(garments).where(and(eq(garments.shopId, shopId), inArray(garments.status, NOT_READY), lt(garments.dueOn, days[0]!))),
-    db.select({ n: count() }).from(garments).where(and(eq(garments.shopId, shopId), inArray(garments.status, NOT_READY), lt(garments.dueOn, today))),
-    db.select({ step: garments.status, n }).from(garments).where(and(eq(garments.shopId, shopId), ne(garments.status, 'collected'))).groupBy(garments.status),
+    db
+      .select({ n: count() })
+      .from(garments)
+      .where(and(eq(garments.shopId, shopId), inArray(garments.status, NOT_READY), lt(garments.dueOn, days[0]!))),
+    db
+      .select({ n: count() })
+      .from(garments)
+      .where(and(eq(garments.shopId, shopId), inArray(garments.status, NOT_READY), lt(garments.dueOn, today))),
+    db
+      .select({ step: garments.status, n })
+      .from(garments)
+      .where(and(eq(garments.shopId, shopId), ne(garments.status, 'collected')))
+      .groupBy(garments.status),
     db
       .select({ b: bucket(payments.at), method: payments.method, sum: sql<number>`sum(${payments.amountMinor})`.mapWith(Number), n })
       .from(payments)
@@ -96,7 +124,8 @@ export async function shopOverview(shopId: string, period: Period, now = new Dat
   const methods = new Map<string, { amountMinor: number; payments: number; refundedMinor: number }>();
   const method = (name: string) => methods.get(name) ?? methods.set(name, { amountMinor: 0, payments: 0, refundedMinor: 0 }).get(name)!;
   for (const r of takings) Object.assign(method(r.method), { amountMinor: method(r.method).amountMinor + r.sum, payments: method(r.method).payments + r.n });
-  for (const r of givenBack) Object.assign(method(r.method), { amountMinor: method(r.method).amountMinor - r.sum, refundedMinor: method(r.method).refundedMinor + r.sum });
+  for (const r of givenBack)
+    Object.assign(method(r.method), { amountMinor: method(r.method).amountMinor - r.sum, refundedMinor: method(r.method).refundedMinor + r.sum });
   const renames = bench.stepLabels;
   return {
     period,
@@ -106,7 +135,11 @@ export async function shopOverview(shopId: string, period: Period, now = new Dat
     days: perDay,
     overdueBefore: before[0]?.n ?? 0,
     overdueNow: overdueNow[0]?.n ?? 0,
-    waiting: GARMENT_STEPS.filter((s) => s !== 'collected').map((step) => ({ step, label: stepLabel(step, renames), garments: waiting.find((w) => w.step === step)?.n ?? 0 })),
+    waiting: GARMENT_STEPS.filter((s) => s !== 'collected').map((step) => ({
+      step,
+      label: stepLabel(step, renames),
+      garments: waiting.find((w) => w.step === step)?.n ?? 0,
+    })),
     takings: [...methods].map(([method, m]) => ({ method, ...m })).sort((a, b) => b.amountMinor - a.amountMinor || a.method.localeCompare(b.method)),
     intakeToReady: ready,
   };
@@ -121,7 +154,10 @@ async function readyTimes(shopId: string, readyInPeriod: SQL | undefined): Promi
     .groupBy(auditEvents.subject)
     .as('last_ready');
   const [row] = await db
-    .select({ n: count(), seconds: sql<number | null>`avg(extract(epoch from (${last.at} - ${garments.createdAt})))`.mapWith((v) => (v === null ? null : Number(v))) })
+    .select({
+      n: count(),
+      seconds: sql<number | null>`avg(extract(epoch from (${last.at} - ${garments.createdAt})))`.mapWith((v) => (v === null ? null : Number(v))),
+    })
     .from(last)
     .innerJoin(garments, and(eq(garments.shopId, shopId), sql`${garments.id}::text = ${last.subject}`));
   const seconds = row?.seconds ?? null;

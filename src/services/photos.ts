@@ -96,7 +96,12 @@ export async function checkPicture(bytes: Uint8Array, type: ImageType, name: str
   if (type.mime === 'image/heic') {
     // Its picture is never decoded here: its boxes must show one, with its size (ispe).
     size = readHeifImage(bytes);
-    if (!size) throw new UploadRefused(415, `${name} could not be read as a HEIC photo, so its location could not be removed: send it as a JPEG or take it again.`, name);
+    if (!size)
+      throw new UploadRefused(
+        415,
+        `${name} could not be read as a HEIC photo, so its location could not be removed: send it as a JPEG or take it again.`,
+        name,
+      );
   } else {
     try {
       // metadata() reads the header only.
@@ -126,17 +131,19 @@ async function prepare(bytes: Uint8Array, type: ImageType, name: string): Promis
   // it is served with a placeholder thumbnail. One whose boxes cannot be read is not kept at all.
   if (type.mime === 'image/heic') {
     const stripped = stripHeifMetadata(bytes);
-    if (!stripped) throw new UploadRefused(415, `${name} could not be read as a HEIC photo, so its location could not be removed: send it as a JPEG or take it again.`, name);
+    if (!stripped)
+      throw new UploadRefused(
+        415,
+        `${name} could not be read as a HEIC photo, so its location could not be removed: send it as a JPEG or take it again.`,
+        name,
+      );
     return { bytes: stripped.bytes, thumb: null };
   }
   try {
     const upright = sharp(bytes, { failOn: 'error', limitInputPixels: MAX_PIXELS }).rotate();
     const clean = type.mime === 'image/jpeg' ? upright.jpeg({ quality: 92 }) : type.mime === 'image/png' ? upright.png() : upright.webp({ quality: 92 });
     const stored = await clean.toBuffer();
-    const thumb = await sharp(stored)
-      .resize({ width: THUMB_PX, height: THUMB_PX, fit: 'inside', withoutEnlargement: true })
-      .webp({ quality: 72 })
-      .toBuffer();
+    const thumb = await sharp(stored).resize({ width: THUMB_PX, height: THUMB_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 72 }).toBuffer();
     return { bytes: new Uint8Array(stored), thumb: new Uint8Array(thumb) };
   } catch {
     throw new UploadRefused(415, `${name} could not be read as an image: take the photo again.`, name);
@@ -217,7 +224,10 @@ export async function readPhoto(actor: Actor, id: string, size: 'full' | 'thumb'
 export async function deletePhoto(actor: Actor, id: string): Promise<{ id: string; deleted: true }> {
   const row = await photoInShop(actor, id);
   await db.transaction(async (tx) => {
-    const [gone] = await tx.delete(files).where(and(eq(files.id, id), eq(files.shopId, actor.shopId))).returning({ id: files.id });
+    const [gone] = await tx
+      .delete(files)
+      .where(and(eq(files.id, id), eq(files.shopId, actor.shopId)))
+      .returning({ id: files.id });
     if (!gone) throw new ServiceError(404, 'No such photo in this shop.');
     await audit(tx, actor.shopId, actor.userId, 'photo.deleted', id, { garmentId: row.garmentId, name: row.originalName });
   });

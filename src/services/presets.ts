@@ -5,11 +5,19 @@ import { db, type Db } from '@/db';
 import { measurements, presets, type Preset } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import { isAllowanceError, parseLength, validateCuffInput, validateHemInput } from '@/lib/allowance';
-import { LENGTHS_OF, PRESET_LENGTHS, type PresetChange, type PresetLength, type PresetSettings, type PresetView, type presetCreateInput, type presetUpdateInput } from '@/lib/preset-settings';
+import {
+  LENGTHS_OF,
+  PRESET_LENGTHS,
+  type PresetChange,
+  type PresetLength,
+  type PresetSettings,
+  type PresetView,
+  type presetCreateInput,
+  type presetUpdateInput,
+} from '@/lib/preset-settings';
 import { ServiceError } from './errors';
 import { audit, auditMany, auditOf } from './audit';
 import { isUuid } from './ticket-core';
-
 
 /** Keeps only the lengths the finish uses (a hem allowance means nothing on a cuff). */
 export function normaliseSettings(s: PresetSettings): PresetSettings {
@@ -51,18 +59,17 @@ function visibleTo(actor: Actor) {
 
 /** The shop's house presets (the default first) then the actor's own, by name. */
 export async function listPresets(actor: Actor): Promise<PresetView[]> {
-  const rows = await db
-    .select()
-    .from(presets)
-    .where(visibleTo(actor))
-    .orderBy(sql`${presets.ownerId} is not null`, desc(presets.isDefault), asc(presets.name));
+  const rows = await db.select().from(presets).where(visibleTo(actor)).orderBy(sql`${presets.ownerId} is not null`, desc(presets.isDefault), asc(presets.name));
   return rows.map(view);
 }
 
 /** 'house' or 'own' for a preset the actor can see, or null (someone else's, another shop's, no such id). */
 export async function presetScope(actor: Actor, id: string): Promise<'house' | 'own' | null> {
   if (!isUuid(id)) return null;
-  const [row] = await db.select({ ownerId: presets.ownerId }).from(presets).where(and(eq(presets.id, id), visibleTo(actor)));
+  const [row] = await db
+    .select({ ownerId: presets.ownerId })
+    .from(presets)
+    .where(and(eq(presets.id, id), visibleTo(actor)));
   if (!row) return null;
   return row.ownerId === null ? 'house' : 'own';
 }
@@ -103,7 +110,10 @@ export async function createPreset(actor: Actor, input: z.output<typeof presetCr
         .set({ isDefault: false, updatedAt: new Date() })
         .where(and(eq(presets.shopId, actor.shopId), isNull(presets.ownerId), eq(presets.isDefault, true)))
         .returning({ id: presets.id });
-      await auditMany(tx, moved.flatMap((m) => changeEvents(actor, m.id, { isDefault: true }, { isDefault: false })));
+      await auditMany(
+        tx,
+        moved.flatMap((m) => changeEvents(actor, m.id, { isDefault: true }, { isDefault: false })),
+      );
     }
     const [created] = await tx
       .insert(presets)
@@ -117,7 +127,10 @@ export async function createPreset(actor: Actor, input: z.output<typeof presetCr
 
 async function visibleRow(actor: Actor, id: string): Promise<Preset> {
   if (!isUuid(id)) throw new ServiceError(404, 'No such preset.');
-  const [row] = await db.select().from(presets).where(and(eq(presets.id, id), visibleTo(actor)));
+  const [row] = await db
+    .select()
+    .from(presets)
+    .where(and(eq(presets.id, id), visibleTo(actor)));
   if (!row) throw new ServiceError(404, 'No such preset.');
   return row;
 }
@@ -135,7 +148,13 @@ function fieldsOf(row: Pick<Preset, 'name' | 'settings' | 'isDefault'>): Record<
 function changeEvents(actor: Actor, id: string, before: Record<string, FieldValue>, after: Record<string, FieldValue>) {
   return Object.keys(after)
     .filter((field) => before[field] !== after[field])
-    .map((field) => ({ shopId: actor.shopId, actorId: actor.userId, action: 'preset.changed', subject: id, detail: { field, old: before[field], new: after[field] } }));
+    .map((field) => ({
+      shopId: actor.shopId,
+      actorId: actor.userId,
+      action: 'preset.changed',
+      subject: id,
+      detail: { field, old: before[field], new: after[field] },
+    }));
 }
 
 /**
@@ -147,7 +166,11 @@ export async function updatePreset(actor: Actor, id: string, input: z.output<typ
   const settings = input.settings ? checkSettings(input.settings) : undefined;
   const row = await db.transaction(async (tx) => {
     // Read under the row lock, so the history's "old" is what this edit replaced.
-    const [before] = await tx.select().from(presets).where(and(eq(presets.id, id), visibleTo(actor))).for('update');
+    const [before] = await tx
+      .select()
+      .from(presets)
+      .where(and(eq(presets.id, id), visibleTo(actor)))
+      .for('update');
     if (!before) throw new ServiceError(404, 'No such preset.');
     if (input.isDefault && before.ownerId !== null) throw new ServiceError(422, 'Only a house preset can be the default.');
     if (input.name && (await nameTaken(tx, actor, before.ownerId, input.name, id))) {
@@ -169,7 +192,10 @@ export async function updatePreset(actor: Actor, id: string, input: z.output<typ
       .returning();
     if (updated!.name !== before.name) {
       // Fittings show the name through the id; the name they keep is for after a removal, kept current.
-      await tx.update(measurements).set({ preset: updated!.name }).where(and(eq(measurements.presetId, id), eq(measurements.shopId, actor.shopId)));
+      await tx
+        .update(measurements)
+        .set({ preset: updated!.name })
+        .where(and(eq(measurements.presetId, id), eq(measurements.shopId, actor.shopId)));
     }
     events.push(...changeEvents(actor, id, fieldsOf(before), fieldsOf(updated!)));
     await auditMany(tx, events);
@@ -203,7 +229,11 @@ export async function presetHistory(actor: Actor, id: string): Promise<PresetCha
 export async function usablePreset(tx: Db, actor: Actor, id: string): Promise<{ id: string; name: string } | null> {
   if (!isUuid(id)) return null;
   // Held until the fitting's transaction ends: a removal at the same moment waits, never a broken link.
-  const [row] = await tx.select({ id: presets.id, name: presets.name }).from(presets).where(and(eq(presets.id, id), visibleTo(actor))).for('share');
+  const [row] = await tx
+    .select({ id: presets.id, name: presets.name })
+    .from(presets)
+    .where(and(eq(presets.id, id), visibleTo(actor)))
+    .for('share');
   return row ?? null;
 }
 
@@ -231,5 +261,7 @@ export const STARTER_HOUSE_PRESETS: { name: string; isDefault?: boolean; setting
 
 /** Gives a shop the starter house presets (demo seed). */
 export async function seedHousePresets(shopId: string): Promise<void> {
-  await db.insert(presets).values(STARTER_HOUSE_PRESETS.map((p) => ({ shopId, ownerId: null, name: p.name, settings: p.settings, isDefault: Boolean(p.isDefault) })));
+  await db
+    .insert(presets)
+    .values(STARTER_HOUSE_PRESETS.map((p) => ({ shopId, ownerId: null, name: p.name, settings: p.settings, isDefault: Boolean(p.isDefault) })));
 }

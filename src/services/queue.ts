@@ -39,14 +39,17 @@ const COLLECTED = sql`${garments.status} = 'collected'`;
 // Plain SQL: in a one-table select Drizzle leaves column names unqualified, which a subquery would
 // read as its own table's.
 const ticketNumber = sql<number>`(select t.number from tickets t where t.id = "garments"."ticket_id")`;
-const customerOf = <T>(col: 'name' | 'phone' | 'updated_at') => sql<T>`(select ${sql.raw(`c.${col}`)} from tickets t join customers c on c.id = t.customer_id where t.id = "garments"."ticket_id")`;
+const customerOf = <T>(col: 'name' | 'phone' | 'updated_at') =>
+  sql<T>`(select ${sql.raw(`c.${col}`)} from tickets t join customers c on c.id = t.customer_id where t.id = "garments"."ticket_id")`;
 const assigneeOf = <T>(col: 'name' | 'updated_at') => sql<T>`(select ${sql.raw(`u.${col}`)} from "user" u where u.id = "garments"."assignee_id")`;
 
 // A ready garment's wait counts from its last move to ready (the garment.moved audit events, as
 // the overview reads them; audit_events_subject_idx finds them), read only for ready rows; a ready
 // garment with no such event (written straight into the database) counts from its last change.
 // ISO in UTC, so every browser's Date reads it.
-const readyAt = sql<string | null>`case when "garments"."status" = 'ready' then to_char(coalesce((select max(a.at) from audit_events a where a.shop_id = "garments"."shop_id" and a.subject = "garments"."id"::text and a.action = 'garment.moved' and a.detail->>'to' = 'ready'), "garments"."updated_at") at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"') end`;
+const readyAt = sql<
+  string | null
+>`case when "garments"."status" = 'ready' then to_char(coalesce((select max(a.at) from audit_events a where a.shop_id = "garments"."shop_id" and a.subject = "garments"."id"::text and a.action = 'garment.moved' and a.detail->>'to' = 'ready'), "garments"."updated_at") at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"') end`;
 
 // The customer's phone only for roles that read customers (the queue's search finds by it); an
 // apprentice works the garment, never calls its owner.
@@ -113,7 +116,11 @@ export async function readQueue(actor: Actor, q: QueueQuery, ifNoneMatch: string
   }
   const after = q.after ?? null;
   const page = (await rowsOf(
-    and(garmentVisibleTo(actor), COLLECTED, after ? sql`(${garments.createdAt}, ${garments.id}) < (${after.createdAt}::timestamptz, ${after.id}::uuid)` : undefined),
+    and(
+      garmentVisibleTo(actor),
+      COLLECTED,
+      after ? sql`(${garments.createdAt}, ${garments.id}) < (${after.createdAt}::timestamptz, ${after.id}::uuid)` : undefined,
+    ),
     can(actor.role, ['customers', 'read']),
   )
     .orderBy(sql`${garments.createdAt} desc nulls last`, sql`${garments.id} desc nulls last`)
@@ -124,7 +131,13 @@ export async function readQueue(actor: Actor, q: QueueQuery, ifNoneMatch: string
   const next = more && last ? encodeCursor(last) : null;
   const shownRows = rows.map(shown);
   // A history page is read rarely: its ETag is simply the page itself.
-  const etag = etagOf(actor, q, createHash('sha256').update(JSON.stringify([shownRows, next])).digest('base64url'));
+  const etag = etagOf(
+    actor,
+    q,
+    createHash('sha256')
+      .update(JSON.stringify([shownRows, next]))
+      .digest('base64url'),
+  );
   return { etag, rows: matches(ifNoneMatch, etag) ? null : shownRows, next };
 }
 

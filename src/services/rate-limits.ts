@@ -43,9 +43,7 @@ export async function hitLimits(limits: Limit[], now = new Date(), database: Db 
       .values(keys.map((key) => ({ key, count: 0, windowStart: now, lastAt: now, expiresAt: now })))
       .onConflictDoNothing();
     const rows = await tx.select().from(rateLimits).where(inArray(rateLimits.key, keys)).orderBy(asc(rateLimits.key)).for('update');
-    const counters = new Map<string, Counter>(
-      rows.map((r) => [r.key, { count: r.count, windowStart: r.windowStart.getTime(), lastAt: r.lastAt.getTime() }]),
-    );
+    const counters = new Map<string, Counter>(rows.map((r) => [r.key, { count: r.count, windowStart: r.windowStart.getTime(), lastAt: r.lastAt.getTime() }]));
     let refused: HitResult = { ok: true };
     for (const key of keys) {
       const wait = waitMs(byKey.get(key)!, counters.get(key), t);

@@ -22,7 +22,9 @@ export async function limitedResetRequest(request: Request, address: string, han
   const hit = await hitLimits(limits);
   if (!hit.ok) {
     const perEmail = hit.key.startsWith('reset:email:');
-    console.warn(`[limits] password reset refused: too many for ${perEmail ? 'one e-mail address' : 'this address'} (address ${address}), retry in ${hit.retryAfter} s`);
+    console.warn(
+      `[limits] password reset refused: too many for ${perEmail ? 'one e-mail address' : 'this address'} (address ${address}), retry in ${hit.retryAfter} s`,
+    );
     return tooMany(
       `Too many password-reset requests ${perEmail ? 'for this e-mail address' : 'from this address'}. Try again in ${Math.ceil(hit.retryAfter / 60)} min.`,
       hit.retryAfter,

@@ -46,13 +46,16 @@ async function capturedTexts(dir: string, wanted: Set<string>): Promise<Map<stri
 
 /** The newest messages this shop sent (newest first), with their text from the local capture. */
 export async function listSentMail(shopId: string, captureDir: string, limit = 50): Promise<SentMessage[]> {
-  const rows = await db
-    .select()
-    .from(sentMail)
-    .where(eq(sentMail.shopId, shopId))
-    .orderBy(desc(sentMail.sentAt))
-    .limit(limit);
+  const rows = await db.select().from(sentMail).where(eq(sentMail.shopId, shopId)).orderBy(desc(sentMail.sentAt)).limit(limit);
   const texts = await capturedTexts(captureDir, new Set(rows.filter((r) => r.channel === 'email').map((r) => r.messageId)));
   // A text's words are kept on its row: the mail capture never saw it.
-  return rows.map((r) => ({ id: r.id, at: r.sentAt.toISOString(), kind: r.kind, channel: r.channel, to: r.to, subject: r.subject, text: r.channel === 'sms' ? r.body : (texts.get(r.messageId) ?? null) }));
+  return rows.map((r) => ({
+    id: r.id,
+    at: r.sentAt.toISOString(),
+    kind: r.kind,
+    channel: r.channel,
+    to: r.to,
+    subject: r.subject,
+    text: r.channel === 'sms' ? r.body : (texts.get(r.messageId) ?? null),
+  }));
 }

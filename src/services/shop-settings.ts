@@ -12,14 +12,21 @@ import { audit } from './audit';
 /** The shop's settings, or the defaults (inches to 1/8, the usual step names, warn) before any were saved. */
 export async function benchSettings(shopId: string): Promise<BenchSettings> {
   const [row] = await db.select().from(shopSettings).where(eq(shopSettings.shopId, shopId));
-  return { scale: row?.scale ?? 'in8', stepLabels: (row?.stepLabels as BenchSettings['stepLabels']) ?? {}, fittingRule: row?.fittingRule ?? DEFAULT_FITTING_RULE };
+  return {
+    scale: row?.scale ?? 'in8',
+    stepLabels: (row?.stepLabels as BenchSettings['stepLabels']) ?? {},
+    fittingRule: row?.fittingRule ?? DEFAULT_FITTING_RULE,
+  };
 }
 
 /** Saves the shop's settings. */
 export async function saveBenchSettings(actor: Actor, input: z.output<typeof settingsRequest>): Promise<BenchSettings> {
   const values = { scale: input.scale, stepLabels: input.stepLabels, ...(input.fittingRule ? { fittingRule: input.fittingRule } : {}), updatedAt: new Date() };
   await db.transaction(async (tx) => {
-    await tx.insert(shopSettings).values({ shopId: actor.shopId, ...values }).onConflictDoUpdate({ target: shopSettings.shopId, set: values });
+    await tx
+      .insert(shopSettings)
+      .values({ shopId: actor.shopId, ...values })
+      .onConflictDoUpdate({ target: shopSettings.shopId, set: values });
     await audit(tx, actor.shopId, actor.userId, 'settings.bench', actor.shopId, values);
   });
   return benchSettings(actor.shopId);

@@ -11,7 +11,12 @@ import { audit } from './audit';
 import { orUndoAccount } from './new-account';
 
 function slugify(name: string): string {
-  const base = name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 40) || 'shop';
+  const base =
+    name
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, '-')
+      .replace(/^-|-$/g, '')
+      .slice(0, 40) || 'shop';
   return `${base}-${randomUUID().slice(0, 6)}`;
 }
 

@@ -18,7 +18,10 @@ export function noSuchTicket(): ServiceError {
 /** A ticket of the actor's shop; 404 for another shop's ticket or an id that is not one. */
 export async function shopTicket(actor: Pick<Actor, 'shopId'>, ticketId: string): Promise<Ticket> {
   if (!isUuid(ticketId)) throw noSuchTicket();
-  const [row] = await db.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
+  const [row] = await db
+    .select()
+    .from(tickets)
+    .where(and(eq(tickets.id, ticketId), eq(tickets.shopId, actor.shopId)));
   if (!row) throw noSuchTicket();
   return row;
 }
@@ -26,7 +29,11 @@ export async function shopTicket(actor: Pick<Actor, 'shopId'>, ticketId: string)
 /** Locks a ticket of the shop until the transaction ends and returns it; 404 when there is none. */
 export async function lockTicket(tx: Db, shopId: string, ticketId: string): Promise<Ticket> {
   if (!isUuid(ticketId)) throw noSuchTicket();
-  const [row] = await tx.select().from(tickets).where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId))).for('update');
+  const [row] = await tx
+    .select()
+    .from(tickets)
+    .where(and(eq(tickets.id, ticketId), eq(tickets.shopId, shopId)))
+    .for('update');
   if (!row) throw noSuchTicket();
   return row;
 }

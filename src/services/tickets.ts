@@ -24,7 +24,12 @@ export type TicketListItem = Ticket & { customerName: string | null; garmentCoun
 function visibleTo(actor: Actor) {
   const inShop = eq(tickets.shopId, actor.shopId);
   if (can(actor.role, ['tickets', 'read-all'])) return inShop;
-  const holdsVisibleWork = exists(db.select({ one: sql`1` }).from(garments).where(and(eq(garments.ticketId, tickets.id), garmentVisibleTo(actor))));
+  const holdsVisibleWork = exists(
+    db
+      .select({ one: sql`1` })
+      .from(garments)
+      .where(and(eq(garments.ticketId, tickets.id), garmentVisibleTo(actor))),
+  );
   return and(inShop, or(eq(tickets.assigneeId, actor.userId), isNull(tickets.assigneeId), holdsVisibleWork));
 }
 
@@ -46,10 +51,17 @@ export async function listTickets(actor: Actor): Promise<TicketListItem[]> {
 /** One ticket with its customer and the garments the actor may see. */
 export async function getTicket(actor: Actor, id: string): Promise<TicketDetail> {
   if (!isUuid(id)) throw new ServiceError(404, 'No such ticket in this shop.');
-  const [t] = await db.select().from(tickets).where(and(eq(tickets.id, id), visibleTo(actor)));
+  const [t] = await db
+    .select()
+    .from(tickets)
+    .where(and(eq(tickets.id, id), visibleTo(actor)));
   if (!t) throw new ServiceError(404, 'No such ticket in this shop.');
   const [c] = t.customerId ? await db.select().from(customers).where(eq(customers.id, t.customerId)) : [];
-  const rows = await db.select().from(garments).where(and(eq(garments.ticketId, id), garmentVisibleTo(actor))).orderBy(asc(garments.position));
+  const rows = await db
+    .select()
+    .from(garments)
+    .where(and(eq(garments.ticketId, id), garmentVisibleTo(actor)))
+    .orderBy(asc(garments.position));
   return {
     id: t.id,
     number: t.number,
@@ -66,7 +78,10 @@ export async function getTicket(actor: Actor, id: string): Promise<TicketDetail>
 export async function createTicket(actor: Actor, typed: IntakeInput): Promise<Ticket> {
   const input = intakeRequest.parse(typed);
   if (input.customerId) {
-    const [c] = await db.select({ id: customers.id }).from(customers).where(and(eq(customers.id, input.customerId), eq(customers.shopId, actor.shopId)));
+    const [c] = await db
+      .select({ id: customers.id })
+      .from(customers)
+      .where(and(eq(customers.id, input.customerId), eq(customers.shopId, actor.shopId)));
     if (!c) throw new ServiceError(422, 'No such customer in this shop.');
   }
   if (input.rush && input.garments.length === 0) throw new ServiceError(422, 'Rush goes on a ticket with work priced on it: add a garment and its work first.');
@@ -75,10 +90,16 @@ export async function createTicket(actor: Actor, typed: IntakeInput): Promise<Ti
   const row = await db.transaction(async (tx) => {
     // One number at a time per shop, also when several counters take work in at once.
     await tx.execute(sql`select pg_advisory_xact_lock(hashtext(${actor.shopId}))`);
-    const [last] = await tx.select({ n: sql<number | null>`max(${tickets.number})` }).from(tickets).where(eq(tickets.shopId, actor.shopId));
+    const [last] = await tx
+      .select({ n: sql<number | null>`max(${tickets.number})` })
+      .from(tickets)
+      .where(eq(tickets.shopId, actor.shopId));
     let customerId = input.customerId;
     if (!customerId && input.customer) {
-      const [c] = await tx.insert(customers).values({ ...input.customer, shopId: actor.shopId }).returning({ id: customers.id });
+      const [c] = await tx
+        .insert(customers)
+        .values({ ...input.customer, shopId: actor.shopId })
+        .returning({ id: customers.id });
       customerId = c!.id;
     }
     const [t] = await tx
@@ -90,7 +111,16 @@ export async function createTicket(actor: Actor, typed: IntakeInput): Promise<Ti
         .insert(garments)
         .values(
           // The finish asked for at intake is kept on the garment: the fitting's own finish wins over it.
-          input.garments.map((g, position) => ({ shopId: actor.shopId, ticketId: t!.id, position, description: g.description, dueOn: g.dueOn ?? input.dueOn, assigneeId: g.assigneeId, existingFinish: g.existingFinish, finish: g.finish })),
+          input.garments.map((g, position) => ({
+            shopId: actor.shopId,
+            ticketId: t!.id,
+            position,
+            description: g.description,
+            dueOn: g.dueOn ?? input.dueOn,
+            assigneeId: g.assigneeId,
+            existingFinish: g.existingFinish,
+            finish: g.finish,
+          })),
         )
         .returning({ id: garments.id, position: garments.position, existingFinish: garments.existingFinish });
       // "Same as last time": only an existing customer has a last time.
@@ -115,7 +145,10 @@ export async function createTicket(actor: Actor, typed: IntakeInput): Promise<Ti
  * or none; to "collected" it is the counter's pickup (ready, nothing due, the pickup permission). */
 export async function moveTicket(actor: Actor, id: string, to: GarmentStep): Promise<Ticket> {
   if (!isUuid(id)) throw new ServiceError(404, 'No such ticket in this shop.');
-  const [visible] = await db.select().from(tickets).where(and(eq(tickets.id, id), visibleTo(actor)));
+  const [visible] = await db
+    .select()
+    .from(tickets)
+    .where(and(eq(tickets.id, id), visibleTo(actor)));
   if (!visible) throw new ServiceError(404, 'No such ticket in this shop.');
   assertNextStep(visible, to, actor.shopName);
   const allowed = to === 'collected' ? can(actor.role, ['tickets', 'pickup']) : can(actor.role, ['tickets', 'advance']);
@@ -126,12 +159,22 @@ export async function moveTicket(actor: Actor, id: string, to: GarmentStep): Pro
     const moved = await withTicketLock(actor.shopId, id, async (tx, ticket) => {
       // Checked again under the lock: someone may have moved the ticket since it was read.
       assertNextStep(ticket, to, actor.shopName);
-      const behind = await tx.select().from(garments).where(and(eq(garments.shopId, actor.shopId), eq(garments.ticketId, id), eq(garments.status, ticket.status)));
+      const behind = await tx
+        .select()
+        .from(garments)
+        .where(and(eq(garments.shopId, actor.shopId), eq(garments.ticketId, id), eq(garments.status, ticket.status)));
       if (!can(actor.role, ['tickets', 'read-all']) && behind.some((g) => g.assigneeId && g.assigneeId !== actor.userId)) {
         throw new ServiceError(422, `Some garments of ${ticketLabel(ticket.number, actor.shopName)} are someone else's: move yours one by one.`);
       }
       if (behind.length === 0) throw new ServiceError(422, `Ticket ${ticketLabel(ticket.number, actor.shopName)} has no garments yet: add one first.`);
-      const rows = await moveGarmentsLocked(tx, actor, id, behind.map((g) => g.id), ticket.status, to);
+      const rows = await moveGarmentsLocked(
+        tx,
+        actor,
+        id,
+        behind.map((g) => g.id),
+        ticket.status,
+        to,
+      );
       return { from: ticket.status, rows };
     });
     await tellMoved(actor, moved.rows);
@@ -143,6 +186,11 @@ export async function moveTicket(actor: Actor, id: string, to: GarmentStep): Pro
 function assertNextStep(ticket: Ticket, to: GarmentStep, shopName: string): void {
   const next = nextStep(ticket.status);
   if (next !== to) {
-    throw new ServiceError(422, next ? `Ticket ${ticketLabel(ticket.number, shopName)} is ${stepLabel(ticket.status)}: it can only move on to ${stepLabel(next)}.` : `Ticket ${ticketLabel(ticket.number, shopName)} has been collected.`);
+    throw new ServiceError(
+      422,
+      next
+        ? `Ticket ${ticketLabel(ticket.number, shopName)} is ${stepLabel(ticket.status)}: it can only move on to ${stepLabel(next)}.`
+        : `Ticket ${ticketLabel(ticket.number, shopName)} has been collected.`,
+    );
   }
 }

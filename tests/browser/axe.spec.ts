@@ -44,7 +44,11 @@ interface Visit {
 }
 
 const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
-const cutText = (page: Page) => page.getByTestId('cut-line').textContent({ timeout: 5_000 }).catch(() => null);
+const cutText = (page: Page) =>
+  page
+    .getByTestId('cut-line')
+    .textContent({ timeout: 5_000 })
+    .catch(() => null);
 
 /** A cuff outside the usual depths: the plan carries a "Take care" warning. */
 async function unusualCuff(page: Page): Promise<void> {
@@ -72,7 +76,10 @@ async function staleCuff(page: Page): Promise<void> {
 
 /** Opens the leg's presets on the garment page (there for those who may change the fitting). */
 async function presetsOpen(page: Page): Promise<void> {
-  const opener = page.locator('summary, button').filter({ hasText: /^Presets\b/ }).first();
+  const opener = page
+    .locator('summary, button')
+    .filter({ hasText: /^Presets\b/ })
+    .first();
   await opener.click();
   await page.getByRole('heading', { name: 'House presets' }).waitFor();
 }

@@ -267,7 +267,11 @@ describe('the step record and the move past Chalk-marked', () => {
 
       // Past the screen, straight to the server: refused there too.
       const direct = await page.evaluate(async (id) => {
-        const r = await fetch(`/api/garments/${id}/step`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ to: 'cut' }) });
+        const r = await fetch(`/api/garments/${id}/step`, {
+          method: 'POST',
+          headers: { 'content-type': 'application/json' },
+          body: JSON.stringify({ to: 'cut' }),
+        });
         return { status: r.status, body: await r.json() };
       }, id);
       expect(direct.status).toBe(409);

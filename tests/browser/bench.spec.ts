@@ -10,7 +10,11 @@ import { signInAs } from './sign-in';
 const browser = sharedBrowser();
 
 const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
-const cutText = (page: Page) => page.getByTestId('cut-line').textContent({ timeout: 5_000 }).catch(() => null);
+const cutText = (page: Page) =>
+  page
+    .getByTestId('cut-line')
+    .textContent({ timeout: 5_000 })
+    .catch(() => null);
 // Segmented switches hide the radio itself: tap its label, as a finger would.
 const choose = (page: Page, name: string) => page.locator('label', { has: page.getByRole('radio', { name, exact: true }) }).click();
 
@@ -163,10 +167,12 @@ describe('the queue for the lead', () => {
     // Bench work and ready work are two tables sharing one sort: sorted within each.
     const bench = page.getByTestId('queue-bench');
     await bench.getByRole('button', { name: 'Ticket no.' }).click();
-    await expect.poll(async () => {
-      const numbers = (await bench.getByTestId('queue-row').locator('td:nth-child(3)').allInnerTexts()).map((t) => Number(t.replace('PH ', '')));
-      return numbers.every((n, i) => i === 0 || numbers[i - 1]! <= n);
-    }).toBe(true);
+    await expect
+      .poll(async () => {
+        const numbers = (await bench.getByTestId('queue-row').locator('td:nth-child(3)').allInnerTexts()).map((t) => Number(t.replace('PH ', '')));
+        return numbers.every((n, i) => i === 0 || numbers[i - 1]! <= n);
+      })
+      .toBe(true);
     await page.screenshot({ path: 'test-results/queue-lead.png', fullPage: true });
     await page.context().close();
   });

@@ -22,7 +22,15 @@ async function words(page: Page, name: string | RegExp) {
       .map((t) => {
         const box = t.getBoundingClientRect();
         const px = (box.height / (t as SVGTextElement).getBBox().height) * parseFloat(getComputedStyle(t).fontSize);
-        return { text: t.textContent ?? '', px, inside: box.left >= frame.left - 1 && box.right <= frame.right + 1, l: box.left, r: box.right, t: box.top, b: box.bottom };
+        return {
+          text: t.textContent ?? '',
+          px,
+          inside: box.left >= frame.left - 1 && box.right <= frame.right + 1,
+          l: box.left,
+          r: box.right,
+          t: box.top,
+          b: box.bottom,
+        };
       });
   });
 }
@@ -31,7 +39,10 @@ function problems(found: Awaited<ReturnType<typeof words>>): string[] {
   const small = found.filter((w) => w.px < 12).map((w) => `${w.text}: ${w.px.toFixed(1)} px`);
   const outside = found.filter((w) => !w.inside).map((w) => `${w.text}: outside the frame`);
   const clashes = found.flatMap((a, i) =>
-    found.slice(i + 1).filter((b) => Math.min(a.r, b.r) - Math.max(a.l, b.l) > 2 && Math.min(a.b, b.b) - Math.max(a.t, b.t) > 4).map((b) => `${a.text} / ${b.text}`),
+    found
+      .slice(i + 1)
+      .filter((b) => Math.min(a.r, b.r) - Math.max(a.l, b.l) > 2 && Math.min(a.b, b.b) - Math.max(a.t, b.t) > 4)
+      .map((b) => `${a.text} / ${b.text}`),
   );
   return [...small, ...outside, ...clashes];
 }

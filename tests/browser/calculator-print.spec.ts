@@ -15,11 +15,18 @@ const browser = sharedBrowser();
 const dir = mkdtempSync(join(tmpdir(), 'calculator-print-'));
 
 const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
-const reading = (page: Page, name: string) => page.getByTestId(`f-${name}-reading`).textContent({ timeout: 5_000 }).catch(() => null);
+const reading = (page: Page, name: string) =>
+  page
+    .getByTestId(`f-${name}-reading`)
+    .textContent({ timeout: 5_000 })
+    .catch(() => null);
 const choose = (page: Page, name: string) => page.locator('label', { has: page.getByRole('radio', { name, exact: true }) }).click();
 
 async function calculator(b: Browser, width = 1180): Promise<Page> {
-  const page = width === 1180 ? await tabletPage(b) : await (await b.newContext({ baseURL: inject('baseURL'), viewport: { width, height: 900 }, hasTouch: true })).newPage();
+  const page =
+    width === 1180
+      ? await tabletPage(b)
+      : await (await b.newContext({ baseURL: inject('baseURL'), viewport: { width, height: 900 }, hasTouch: true })).newPage();
   await page.goto('/');
   await ready(page);
   return page;
@@ -59,7 +66,9 @@ describe('the calculator reads back and carries lengths', () => {
     expect(await field(page, 'Cuff depth').inputValue()).toBe('3.8');
     expect(await field(page, 'Cloth below the mark').inputValue()).toBe('12.7');
     expect(await field(page, 'Turn-under').inputValue()).toBe('1/2 +');
-    expect(await page.locator('#f-turnUnder-note').textContent()).toBe('Left as typed in inches: it could not be read, so it was not changed to centimetres. Check it.');
+    expect(await page.locator('#f-turnUnder-note').textContent()).toBe(
+      'Left as typed in inches: it could not be read, so it was not changed to centimetres. Check it.',
+    );
     // Back in inches, it means what it was typed to mean again: no flag.
     await choose(page, 'mm');
     expect(await page.locator('#f-turnUnder-note').textContent()).toContain('Left as typed in inches');
@@ -77,7 +86,9 @@ describe('short of cloth', () => {
     await field(page, 'Cloth below the mark').fill('1');
     // Needs 4 1/2 in, has 1 in: short by 3 1/2 in.
     const headline = page.getByRole('heading', { name: /Does not fit/ });
-    await expect.poll(() => headline.textContent({ timeout: 10_000 }).catch(() => null), { timeout: 10_000 }).toBe('Does not fit: do not cut. Short by 3 1/2 in.');
+    await expect
+      .poll(() => headline.textContent({ timeout: 10_000 }).catch(() => null), { timeout: 10_000 })
+      .toBe('Does not fit: do not cut. Short by 3 1/2 in.');
     expect(await page.getByTestId('cut-line').count()).toBe(0);
     expect(await page.getByRole('heading', { name: /Cut at line/i }).count()).toBe(0);
     // The first thing in the plan is the verdict with the alternatives.
@@ -94,7 +105,16 @@ describe('printing the calculator', () => {
     await choose(page, 'cm');
     await field(page, 'Cuff depth').fill('4');
     await field(page, 'Cloth below the mark').fill('13');
-    await expect.poll(() => page.getByTestId('cut-line').textContent().catch(() => null), { timeout: 10_000 }).toBe('12 cm');
+    await expect
+      .poll(
+        () =>
+          page
+            .getByTestId('cut-line')
+            .textContent()
+            .catch(() => null),
+        { timeout: 10_000 },
+      )
+      .toBe('12 cm');
     await page.getByLabel('Paper').selectOption('A4');
     const answer = page.waitForResponse((r) => new URL(r.url()).pathname === '/api/plan/sheet');
     const popup = page.context().waitForEvent('page');
@@ -152,12 +172,20 @@ describe('the fold drawing on a phone', () => {
             const box = t.getBoundingClientRect();
             // Screen px per drawing unit, from the two boxes, times the font size in drawing units.
             const rendered = (box.height / t.getBBox().height) * parseFloat(getComputedStyle(t).fontSize);
-            return { text: t.textContent, px: rendered, inside: box.left >= frame.left - 1 && box.right <= frame.right + 1, box: { l: box.left, r: box.right, t: box.top, b: box.bottom } };
+            return {
+              text: t.textContent,
+              px: rendered,
+              inside: box.left >= frame.left - 1 && box.right <= frame.right + 1,
+              box: { l: box.left, r: box.right, t: box.top, b: box.bottom },
+            };
           });
       });
       // No word runs into another (boxes may touch by a pixel: line boxes are taller than the ink).
       const clashes = words.flatMap((a, i) =>
-        words.slice(i + 1).filter((b) => Math.min(a.box.r, b.box.r) - Math.max(a.box.l, b.box.l) > 2 && Math.min(a.box.b, b.box.b) - Math.max(a.box.t, b.box.t) > 4).map((b) => `${a.text} / ${b.text}`),
+        words
+          .slice(i + 1)
+          .filter((b) => Math.min(a.box.r, b.box.r) - Math.max(a.box.l, b.box.l) > 2 && Math.min(a.box.b, b.box.b) - Math.max(a.box.t, b.box.t) > 4)
+          .map((b) => `${a.text} / ${b.text}`),
       );
       expect(clashes).toEqual([]);
       expect(words.length).toBeGreaterThan(15);

@@ -25,7 +25,10 @@ afterAll(async () => {
 });
 
 const cut = () => page.getByTestId('cut-line');
-const cutText = () => cut().textContent({ timeout: 5_000 }).catch(() => null);
+const cutText = () =>
+  cut()
+    .textContent({ timeout: 5_000 })
+    .catch(() => null);
 const field = (label: string) => page.getByLabel(label, { exact: true });
 // Tap the switch segment, as a finger would: the radio inside it is visually hidden.
 const choose = (name: string) => page.locator('label', { has: page.getByRole('radio', { name, exact: true }) }).click();

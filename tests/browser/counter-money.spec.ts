@@ -67,7 +67,10 @@ describe('money that adds up at the counter', () => {
     await page.getByTestId('balance-due').filter({ hasText: '€7.50' }).waitFor();
     const rows = page.getByTestId('payment-row');
     await rows.nth(1).waitFor();
-    await expect(rows.allTextContents()).resolves.toEqual([expect.stringMatching(/Paid by cash: €5\.00 .*taken by /), expect.stringMatching(/Paid by card at the counter: €4\.00 .*taken by /)]);
+    await expect(rows.allTextContents()).resolves.toEqual([
+      expect.stringMatching(/Paid by cash: €5\.00 .*taken by /),
+      expect.stringMatching(/Paid by card at the counter: €4\.00 .*taken by /),
+    ]);
   });
 
   it('takes the rest online, then a reduction leaves a credit owed, refunded to the card through the payment service', async () => {
@@ -96,10 +99,13 @@ describe('money that adds up at the counter', () => {
     await page.getByTestId('credit-owed').filter({ hasText: '€0.00' }).waitFor();
     // Pending until the service's signed webhook confirms it.
     await expect
-      .poll(async () => {
-        await page.reload();
-        return page.getByTestId('refund-row').first().textContent();
-      }, { timeout: 30_000, interval: 500 })
+      .poll(
+        async () => {
+          await page.reload();
+          return page.getByTestId('refund-row').first().textContent();
+        },
+        { timeout: 30_000, interval: 500 },
+      )
       .toMatch(/Online refund: €3\.00 \(done/);
     await page.screenshot({ path: 'test-results/counter-money-refunded.png', fullPage: true });
   });

@@ -52,7 +52,16 @@ describe('a ticket across the counter, from deposit to a paid pickup', () => {
     expect(t.status).toBe(201);
     ticketId = t.body.id;
     garmentId = (await call('GET', `/api/tickets/${ticketId}`, { cookie: counter })).body.garments[0].id;
-    const leg = { finish: 'cuff', backPin: '31 1/4', cuffDepth: '1 1/2', available: '5', widthAtEdge: '8', widthAbove: '9', heightAbove: '10', seamAllowance: '1' };
+    const leg = {
+      finish: 'cuff',
+      backPin: '31 1/4',
+      cuffDepth: '1 1/2',
+      available: '5',
+      widthAtEdge: '8',
+      widthAbove: '9',
+      heightAbove: '10',
+      seamAllowance: '1',
+    };
     const fitted = await call('PUT', `/api/garments/${garmentId}/measurements`, { cookie: tailor, body: { unit: 'in', legs: { left: leg, right: leg } } });
     expect(fitted.status).toBe(200);
 

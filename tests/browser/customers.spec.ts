@@ -71,7 +71,14 @@ describe('customers', () => {
     const ticket = await call('GET', `/api/tickets/${ticketId}`, { cookie: tailor });
     expect(ticket.body.customer.id).toBe(customerId);
     const fitting = await call('GET', `/api/garments/${ticket.body.garments[0].id}/measurements`, { cookie: tailor });
-    expect(fitting.body.legs.map((l: { leg: string; preset: string; values: Record<string, { text: string }> }) => [l.leg, l.preset, l.values.backPin?.text, l.values.cuffDepth?.text])).toEqual([
+    expect(
+      fitting.body.legs.map((l: { leg: string; preset: string; values: Record<string, { text: string }> }) => [
+        l.leg,
+        l.preset,
+        l.values.backPin?.text,
+        l.values.cuffDepth?.text,
+      ]),
+    ).toEqual([
       ['left', PRESET, '31 1/8', '1 5/8'],
       ['right', PRESET, '31 1/8', '1 5/8'],
     ]);

@@ -11,7 +11,9 @@ const browser = sharedBrowser();
 
 async function photo(): Promise<Buffer> {
   // A plain test card: grey field with a darker band where a pin line would be.
-  const band = await sharp({ create: { width: 1200, height: 40, channels: 3, background: { r: 40, g: 40, b: 48 } } }).png().toBuffer();
+  const band = await sharp({ create: { width: 1200, height: 40, channels: 3, background: { r: 40, g: 40, b: 48 } } })
+    .png()
+    .toBuffer();
   return sharp({ create: { width: 1200, height: 900, channels: 3, background: { r: 150, g: 146, b: 138 } } })
     .composite([{ input: band, top: 600, left: 0 }])
     .jpeg()
@@ -26,7 +28,10 @@ describe('fitting photos on the garment page', () => {
     await page.goto(`/garments/${queue[queue.length - 1]!.id}`);
     await ready(page);
     const photos = page.getByRole('region', { name: 'Fitting photos' });
-    await photos.getByText(/No photos of this garment yet|Fitting photo/).first().waitFor();
+    await photos
+      .getByText(/No photos of this garment yet|Fitting photo/)
+      .first()
+      .waitFor();
     const before = await photos.getByRole('img').count();
 
     // Both ways in are there, labelled; the camera one asks for the back camera.
@@ -40,7 +45,9 @@ describe('fitting photos on the garment page', () => {
     await expect.poll(() => img.evaluate((el) => (el as HTMLImageElement).naturalWidth)).toBe(480);
     expect(await photos.getByRole('img').count()).toBe(before + 1);
 
-    await photos.getByLabel('Choose photos').setInputFiles({ name: 'notes.svg', mimeType: 'image/svg+xml', buffer: Buffer.from('<svg xmlns="http://www.w3.org/2000/svg"/>') });
+    await photos
+      .getByLabel('Choose photos')
+      .setInputFiles({ name: 'notes.svg', mimeType: 'image/svg+xml', buffer: Buffer.from('<svg xmlns="http://www.w3.org/2000/svg"/>') });
     await photos.getByText('notes.svg is not a photo we take').waitFor();
     await page.screenshot({ path: 'test-results/garment-photos.png', fullPage: true });
 
@@ -57,7 +64,10 @@ describe('fitting photos on the garment page', () => {
     await page.goto(`/garments/${queue[queue.length - 1]!.id}`);
     await ready(page);
     const photos = page.getByRole('region', { name: 'Fitting photos' });
-    await photos.getByText(/No photos of this garment yet|Fitting photo/).first().waitFor();
+    await photos
+      .getByText(/No photos of this garment yet|Fitting photo/)
+      .first()
+      .waitFor();
     // A HEIC's boxes around placeholder picture bytes: this server cannot decode HEVC anyway.
     const heic = await sampleHeif();
     await photos.getByLabel('Choose photos').setInputFiles({ name: 'IMG_2207.HEIC', mimeType: 'image/heic', buffer: heic });

@@ -44,7 +44,14 @@ describe('typing lengths at the fitting', () => {
     // 38 mm = 1.496 in: 1 1/2 in to the eighth.
     expect(await page.getByTestId('m-legs-left-cuffDepth-reading').textContent()).toContain('= 1 1/2 in');
     await expect
-      .poll(() => page.getByTestId('finished-left').textContent().catch(() => null), { timeout: 10_000 })
+      .poll(
+        () =>
+          page
+            .getByTestId('finished-left')
+            .textContent()
+            .catch(() => null),
+        { timeout: 10_000 },
+      )
       .toBe('Finished length (back pin): 31 3/4 + 1/8 in = 31 7/8 in');
     await page.getByRole('button', { name: 'Save measurements' }).click();
     await page.getByText('Saved both legs.').waitFor();

@@ -63,7 +63,9 @@ export default async function setup(project: TestProject) {
   const baseURL = `http://localhost:${port}`;
   const mailDir = join(dataDir, 'mail');
   // With TEST_DATABASE_URL (scripts/with-postgres.sh) the server runs on a fresh PostgreSQL database.
-  const databaseUrl = process.env.TEST_DATABASE_URL ? await createServerDatabase(process.env.TEST_DATABASE_URL, `cw_http_${Date.now().toString(36)}`) : undefined;
+  const databaseUrl = process.env.TEST_DATABASE_URL
+    ? await createServerDatabase(process.env.TEST_DATABASE_URL, `cw_http_${Date.now().toString(36)}`)
+    : undefined;
   const capture = await startMailCapture({ dir: mailDir, port: 0, quiet: true });
   const payments = await startLocalPayments({ appUrl: `http://127.0.0.1:${port}`, port: 0, quiet: true });
   const sms = await startLocalSms({ port: 0, quiet: true });

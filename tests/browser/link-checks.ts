@@ -33,7 +33,9 @@ export function colourOnlyLinks(page: Page): Promise<string[]> {
         words += t.textContent ?? '';
       }
       if (/[\p{L}\p{N}]/u.test(words)) {
-        found.push(`link "${(link.textContent ?? '').trim().slice(0, 60)}" (${link.getAttribute('href')}) sits among the words "${words.replace(/\s+/g, ' ').trim().slice(0, 80)}" told apart by colour alone: underline it`);
+        found.push(
+          `link "${(link.textContent ?? '').trim().slice(0, 60)}" (${link.getAttribute('href')}) sits among the words "${words.replace(/\s+/g, ' ').trim().slice(0, 80)}" told apart by colour alone: underline it`,
+        );
       }
     }
     return found;

@@ -11,18 +11,33 @@ const browser = sharedBrowser();
 
 /** Every bar's value in a chart, keyed by series and day (or row key). */
 async function barsOf(page: Page, chart: string): Promise<Record<string, number>> {
-  return page.locator(`svg[data-chart="${chart}"] rect[data-value]`).evaluateAll((rects) =>
-    Object.fromEntries(rects.map((r) => [`${r.getAttribute('data-series')}|${r.getAttribute('data-day') ?? r.getAttribute('data-key')}`, Number(r.getAttribute('data-value'))])),
-  );
+  return page
+    .locator(`svg[data-chart="${chart}"] rect[data-value]`)
+    .evaluateAll((rects) =>
+      Object.fromEntries(
+        rects.map((r) => [
+          `${r.getAttribute('data-series')}|${r.getAttribute('data-day') ?? r.getAttribute('data-key')}`,
+          Number(r.getAttribute('data-value')),
+        ]),
+      ),
+    );
 }
 
 /** Every table cell's number for the series, keyed the same way. */
 async function cellsOf(page: Page, series: string[], attr = 'data-value'): Promise<Record<string, number>> {
   const sel = series.map((s) => `td[data-series="${s}"]`).join(', ');
-  return page.locator(sel).evaluateAll(
-    (cells, a) => Object.fromEntries(cells.map((c) => [`${c.getAttribute('data-series')}|${c.getAttribute('data-day') ?? c.getAttribute('data-key')}`, Number(c.getAttribute(a as string) ?? c.textContent)])),
-    attr,
-  );
+  return page
+    .locator(sel)
+    .evaluateAll(
+      (cells, a) =>
+        Object.fromEntries(
+          cells.map((c) => [
+            `${c.getAttribute('data-series')}|${c.getAttribute('data-day') ?? c.getAttribute('data-key')}`,
+            Number(c.getAttribute(a as string) ?? c.textContent),
+          ]),
+        ),
+      attr,
+    );
 }
 
 describe('the lead reads the shop week at a glance', () => {
@@ -58,7 +73,11 @@ describe('the lead reads the shop week at a glance', () => {
       expect(await barsOf(page, 'takings')).toEqual(await cellsOf(page, ['takings']));
       // The seeded shop: garments at the bench, something taken in.
       expect(Object.values(await barsOf(page, 'waiting')).reduce((a, b) => a + b, 0)).toBeGreaterThan(0);
-      expect(Object.entries(table).filter(([k]) => k.startsWith('takenIn|')).reduce((s, [, v]) => s + v, 0)).toBeGreaterThan(0);
+      expect(
+        Object.entries(table)
+          .filter(([k]) => k.startsWith('takenIn|'))
+          .reduce((s, [, v]) => s + v, 0),
+      ).toBeGreaterThan(0);
     }
     // Four weeks of the demo shop: paid by card and in cash.
     // Other stories may add online payments to the shared demo shop: card and cash are there whatever.

@@ -66,7 +66,14 @@ describe('the safety notes and the payment fake’s words', () => {
       const care = page.locator('section[aria-labelledby="care-heading"]');
       expect(await care.getByRole('heading').innerText()).toBe('Mind your hands');
       const text = await care.innerText();
-      for (const caution of ['Iron and steam', 'pull the plug before you fill or empty it', 'seam rippers', 'sharps jar', 'Needles and pins', 'local rules come first'])
+      for (const caution of [
+        'Iron and steam',
+        'pull the plug before you fill or empty it',
+        'seam rippers',
+        'sharps jar',
+        'Needles and pins',
+        'local rules come first',
+      ])
         expect(text).toContain(caution);
       expect(await page.locator('body').innerText()).not.toContain('Take care');
     }
@@ -75,7 +82,19 @@ describe('the safety notes and the payment fake’s words', () => {
 
   it('no screen of the shop, for any role, carries the payment fake’s wording; nor does any mail sent', async () => {
     const { id, ticketId } = await someOpenGarment();
-    const screens = ['/', '/queue', `/tickets/${ticketId}`, `/garments/${id}`, `/counter/${ticketId}`, '/prices', '/presets', '/bench-settings', '/staff', '/sent-messages', '/tickets/new'];
+    const screens = [
+      '/',
+      '/queue',
+      `/tickets/${ticketId}`,
+      `/garments/${id}`,
+      `/counter/${ticketId}`,
+      '/prices',
+      '/presets',
+      '/bench-settings',
+      '/staff',
+      '/sent-messages',
+      '/tickets/new',
+    ];
     const seen: string[] = [];
     for (const role of ['lead', 'counter'] as const) {
       const page = await tabletPage(browser());

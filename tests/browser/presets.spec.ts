@@ -137,10 +137,12 @@ describe('house presets from the lead to the bench', () => {
     await fitting.getByRole('button', { name: /^Save measurements/ }).click();
     await page.getByText('Saved both legs.').waitFor();
     const saved = await apiGet(page, `/api/garments/${id}/measurements`);
-    expect(saved.legs.map((l: { leg: string; preset: string; values: { cuffDepth: { text: string } } }) => [l.leg, l.preset, l.values.cuffDepth.text])).toEqual([
-      ['left', 'Classic cuff', '1 1/2'],
-      ['right', 'Wide cuff', '1 3/4'],
-    ]);
+    expect(saved.legs.map((l: { leg: string; preset: string; values: { cuffDepth: { text: string } } }) => [l.leg, l.preset, l.values.cuffDepth.text])).toEqual(
+      [
+        ['left', 'Classic cuff', '1 1/2'],
+        ['right', 'Wide cuff', '1 3/4'],
+      ],
+    );
     await page.context().close();
   });
 
@@ -149,7 +151,11 @@ describe('house presets from the lead to the bench', () => {
     await signInAs(page, 'lead', '/presets');
     const before = `Story cuff ${stamp}`;
     const after = `Story cuff 1 5/8 ${stamp}`;
-    const preset = await apiSend(page, 'POST', '/api/presets', { name: before, scope: 'house', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2', turnUnder: '1/2' } });
+    const preset = await apiSend(page, 'POST', '/api/presets', {
+      name: before,
+      scope: 'house',
+      settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2', turnUnder: '1/2' },
+    });
     const id = await freshGarment(page, `Renamed preset trousers ${stamp}`);
     const leg = { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2', turnUnder: '1/2', presetId: preset.id };
     await apiSend(page, 'PUT', `/api/garments/${id}/measurements`, { unit: 'in', legs: { left: leg, right: leg } });
@@ -181,7 +187,11 @@ describe('house presets from the lead to the bench', () => {
     await signInAs(reader, 'apprentice', '/queue');
     await reader.goto(`/garments/${id}`);
     await ready(reader);
-    await reader.getByRole('row', { name: /^Preset/ }).getByText(after).first().waitFor();
+    await reader
+      .getByRole('row', { name: /^Preset/ })
+      .getByText(after)
+      .first()
+      .waitFor();
     await reader.context().close();
     await apiSend(page, 'DELETE', `/api/presets/${preset.id}`);
     await page.context().close();

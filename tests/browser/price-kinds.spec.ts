@@ -55,7 +55,10 @@ describe('kinds of work, priced at intake', () => {
     await page.getByLabel('Name').fill('Orla Finchwood');
     await page.getByLabel('Garment 1', { exact: true }).fill(GARMENT);
     await page.getByLabel('Finish asked for (priced as an estimate)').selectOption('hem');
-    await page.getByRole('group', { name: 'Work from the price list: garment 1' }).getByLabel(new RegExp(`^${KIND} `)).check();
+    await page
+      .getByRole('group', { name: 'Work from the price list: garment 1' })
+      .getByLabel(new RegExp(`^${KIND} `))
+      .check();
     // The estimate before opening: €16.50 plain hem + €15.00 (demo list and the kind above).
     await expect(page.getByTestId('intake-estimate').textContent()).resolves.toContain('€31.50');
     await settled(page);

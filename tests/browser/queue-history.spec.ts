@@ -12,7 +12,10 @@ describe('the queue and its history', () => {
     const headers = { origin };
     // A shop of its own (the page's context keeps the new lead's cookie): 60 collected, 1 open.
     const email = `queue-history-${Date.now().toString(36)}@example.com`;
-    const shop = await page.request.post('/api/shops', { headers, data: { shopName: 'History Hems', name: 'History Lead', email, password: 'a-long-password' } });
+    const shop = await page.request.post('/api/shops', {
+      headers,
+      data: { shopName: 'History Hems', name: 'History Lead', email, password: 'a-long-password' },
+    });
     expect(shop.status()).toBe(201);
     const c = await page.request.post('/api/customers', { headers, data: { name: 'Ottoline Pageworth' } });
     const customerId = (await c.json()).id;
@@ -22,12 +25,16 @@ describe('the queue and its history', () => {
       expect(r.status()).toBe(201);
       const id = (await r.json()).id;
       // A ticket is handed over only priced: this work goes out with no charge.
-      expect((await page.request.post(`/api/tickets/${id}/price-lines`, { headers, data: { source: 'no-charge', reason: 'history fixture' } })).status()).toBe(201);
+      expect((await page.request.post(`/api/tickets/${id}/price-lines`, { headers, data: { source: 'no-charge', reason: 'history fixture' } })).status()).toBe(
+        201,
+      );
       for (const status of ['marked', 'cut', 'stitched', 'pressed', 'ready', 'collected']) {
         expect((await page.request.patch(`/api/tickets/${id}`, { headers, data: { status } })).status()).toBe(200);
       }
     }
-    expect((await page.request.post('/api/tickets', { headers, data: { customerId, note: 'open', garments: [{ description: 'Open flannels' }] } })).status()).toBe(201);
+    expect(
+      (await page.request.post('/api/tickets', { headers, data: { customerId, note: 'open', garments: [{ description: 'Open flannels' }] } })).status(),
+    ).toBe(201);
 
     await page.goto('/queue');
     await ready(page);

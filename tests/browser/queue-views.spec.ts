@@ -11,7 +11,10 @@ import { signInAs } from './sign-in';
 const browser = sharedBrowser();
 
 /** Signs up a new shop in the page's context (the context keeps the lead's cookie); returns a customer id. */
-async function newShop(page: Page, name: string): Promise<{ customerId: string; post: (path: string, data: unknown) => Promise<{ status: number; body: { id: string; number: number } }> }> {
+async function newShop(
+  page: Page,
+  name: string,
+): Promise<{ customerId: string; post: (path: string, data: unknown) => Promise<{ status: number; body: { id: string; number: number } }> }> {
   const headers = { origin: inject('baseURL') };
   const email = `${name.toLowerCase().replace(/\W+/g, '-')}-${Date.now().toString(36)}@example.com`;
   const shop = await page.request.post('/api/shops', { headers, data: { shopName: name, name: `${name} Lead`, email, password: 'a-long-password' } });

@@ -47,7 +47,8 @@ describe('a ready notice by text message', () => {
     const line = await call('POST', `/api/tickets/${ticketId}/price-lines`, { cookie: counter, body: { source: 'list', key: 'plain-hem' } });
     expect(line.status).toBe(201);
     const lead = await signIn(DEMO.lead);
-    for (const status of ['marked', 'cut', 'stitched', 'pressed', 'ready']) expect((await call('PATCH', `/api/tickets/${ticketId}`, { cookie: lead, body: { status } })).status).toBe(200);
+    for (const status of ['marked', 'cut', 'stitched', 'pressed', 'ready'])
+      expect((await call('PATCH', `/api/tickets/${ticketId}`, { cookie: lead, body: { status } })).status).toBe(200);
 
     const page = await tabletPage(browser);
     await signInAs(page, 'counter', `/tickets/${ticketId}`);

@@ -43,7 +43,9 @@ describe('stepping back after a wrong tap', () => {
     await undo.waitFor();
     expect((await undo.boundingBox())!.height).toBeGreaterThanOrEqual(44);
     await page.keyboard.press('Tab');
-    expect(await page.evaluate(() => document.activeElement?.getAttribute('aria-label'))).toBe(`Undo: step PH ${number} Heather tweed trousers back to Received`);
+    expect(await page.evaluate(() => document.activeElement?.getAttribute('aria-label'))).toBe(
+      `Undo: step PH ${number} Heather tweed trousers back to Received`,
+    );
     await page.screenshot({ path: 'test-results/step-back-undo.png' });
     await page.keyboard.press('Enter');
     await row.getByRole('status').getByText('Stepped back to Received.').waitFor();

@@ -32,7 +32,11 @@ async function freshGarment(page: Page, description: string, existingFinish: 'pl
 
 /** The cutting line's row of the plain hem's taper check, as its text. */
 const cutRow = (page: Page) =>
-  page.getByTestId('hem-taper').getByRole('row', { name: /Cutting line/ }).textContent({ timeout: 5_000 }).catch(() => null);
+  page
+    .getByTestId('hem-taper')
+    .getByRole('row', { name: /Cutting line/ })
+    .textContent({ timeout: 5_000 })
+    .catch(() => null);
 
 describe('a plain hem on a tapered leg, let down first', () => {
   it('checks the taper of a plain hem and uses the width measured at the cutting line', async () => {

@@ -28,7 +28,9 @@ async function embeddedShop(): Promise<string> {
   const shopId = randomUUID();
   await h.db.insert(organization).values({ id: shopId, name: 'Quillon Hems', slug: 'quillon-hems', createdAt: new Date('2026-11-02T09:15:00Z') });
   const userId = randomUUID();
-  await h.db.insert(user).values({ id: userId, name: 'Ysolde Marchetti', email: 'ysolde@quillon.test', emailVerified: false, createdAt: new Date(), updatedAt: new Date() });
+  await h.db
+    .insert(user)
+    .values({ id: userId, name: 'Ysolde Marchetti', email: 'ysolde@quillon.test', emailVerified: false, createdAt: new Date(), updatedAt: new Date() });
   await h.db.insert(member).values({ id: randomUUID(), organizationId: shopId, userId, role: 'lead', createdAt: new Date() });
   const people = await h.db
     .insert(customers)

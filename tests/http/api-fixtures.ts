@@ -27,7 +27,10 @@ export function fixtures(lead: string) {
     const id = await garmentOf(await moved(await ticket(), 'marked'));
     await ok('PUT', `/api/garments/${id}/measurements`, {
       unit: 'in',
-      legs: { left: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2', available: '5' }, right: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2', available: '5' } },
+      legs: {
+        left: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2', available: '5' },
+        right: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2', available: '5' },
+      },
     });
     return id;
   };
@@ -65,14 +68,21 @@ export function fixtures(lead: string) {
     'GET /api/photos/{id}': async () => ({ id: await photo() }),
     'DELETE /api/photos/{id}': async () => ({ id: await photo() }),
     'GET /api/photos/{id}/thumb': async () => ({ id: await photo() }),
-    'PATCH /api/presets/{id}': async () =>
-      ({ id: (await ok('POST', '/api/presets', { name: freshEmail('preset'), scope: 'personal', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } })).id }),
+    'PATCH /api/presets/{id}': async () => ({
+      id: (await ok('POST', '/api/presets', { name: freshEmail('preset'), scope: 'personal', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } }))
+        .id,
+    }),
     // A house preset, which every member may read (a colleague's own is hidden from the others).
-    'GET /api/presets/{id}/history': async () =>
-      ({ id: (await ok('POST', '/api/presets', { name: freshEmail('house'), scope: 'house', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } })).id }),
-    'DELETE /api/presets/{id}': async () =>
-      ({ id: (await ok('POST', '/api/presets', { name: freshEmail('preset'), scope: 'personal', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } })).id }),
-    'PATCH /api/prices/kinds/{id}': async () => ({ id: (await ok('POST', '/api/prices/kinds', { name: freshEmail('kind'), amountMinor: 1200, rushApplies: true })).id }),
+    'GET /api/presets/{id}/history': async () => ({
+      id: (await ok('POST', '/api/presets', { name: freshEmail('house'), scope: 'house', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } })).id,
+    }),
+    'DELETE /api/presets/{id}': async () => ({
+      id: (await ok('POST', '/api/presets', { name: freshEmail('preset'), scope: 'personal', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } }))
+        .id,
+    }),
+    'PATCH /api/prices/kinds/{id}': async () => ({
+      id: (await ok('POST', '/api/prices/kinds', { name: freshEmail('kind'), amountMinor: 1200, rushApplies: true })).id,
+    }),
     'PATCH /api/staff/{memberId}': async () => ({ memberId: await member() }),
     'DELETE /api/staff/{memberId}': async () => ({ memberId: await member() }),
     'GET /api/tickets/{id}': async () => ({ id: await ticket() }),

@@ -20,7 +20,10 @@ async function garmentOf(ticketId: string, n = 0): Promise<string> {
 
 describe('intake', () => {
   it('numbers tickets one after another and keeps a new customer and the garments', async () => {
-    const first = await intake({ customer: { name: 'Alder Quenby', phone: '555-0133' }, garments: [{ description: 'Tan chinos' }, { description: 'Blue chinos', dueOn: '2026-12-20' }] });
+    const first = await intake({
+      customer: { name: 'Alder Quenby', phone: '555-0133' },
+      garments: [{ description: 'Tan chinos' }, { description: 'Blue chinos', dueOn: '2026-12-20' }],
+    });
     const second = await intake({ customer: { name: 'Alder Quenby' } });
     expect(first.status).toBe(201);
     expect(second.body.number).toBe(first.body.number + 1);
@@ -41,7 +44,11 @@ describe('intake', () => {
 
   it('answers 400 for a body that is not JSON', async () => {
     const base = inject('baseURL');
-    const r = await fetch(`${base}/api/tickets`, { method: 'POST', headers: { cookie: cookie.counter, origin: base, 'content-type': 'application/json' }, body: '{nope' });
+    const r = await fetch(`${base}/api/tickets`, {
+      method: 'POST',
+      headers: { cookie: cookie.counter, origin: base, 'content-type': 'application/json' },
+      body: '{nope',
+    });
     expect(r.status).toBe(400);
   });
 });
@@ -64,7 +71,10 @@ describe('garments on a ticket', () => {
     expect(names).toEqual(expect.arrayContaining(['Ada Penhallow', 'Mina Okoro', 'Rosa Quill', 'Teodor Vasko']));
     expect(names).toEqual([...names].sort((x, y) => (x < y ? -1 : x > y ? 1 : 0)));
     const t = await intake({ garments: [{ description: 'Given' }] });
-    const stranger = await call('POST', `/api/tickets/${t.body.id}/garments`, { cookie: cookie.counter, body: { description: 'x', assigneeId: 'nobody-here' } });
+    const stranger = await call('POST', `/api/tickets/${t.body.id}/garments`, {
+      cookie: cookie.counter,
+      body: { description: 'x', assigneeId: 'nobody-here' },
+    });
     expect(stranger.status).toBe(422);
   });
 });
@@ -111,7 +121,10 @@ describe('fitting measurements', () => {
   it('answer 422 naming each length the engine cannot read, and save nothing', async () => {
     const t = await intake({ garments: [{ description: 'Mistyped' }] });
     const g = await garmentOf(t.body.id);
-    const r = await call('PUT', `/api/garments/${g}/measurements`, { cookie: cookie.tailor, body: fitting({ cuffDepth: '1 1/2', available: 'five' }, { cuffDepth: '1//2' }) });
+    const r = await call('PUT', `/api/garments/${g}/measurements`, {
+      cookie: cookie.tailor,
+      body: fitting({ cuffDepth: '1 1/2', available: 'five' }, { cuffDepth: '1//2' }),
+    });
     expect(r.status).toBe(422);
     expect(Object.keys(r.body.issues).sort()).toEqual(['legs.left.available', 'legs.right.cuffDepth']);
     expect((await call('GET', `/api/garments/${g}/measurements`, { cookie: cookie.tailor })).body.legs).toEqual([]);
@@ -119,7 +132,10 @@ describe('fitting measurements', () => {
 
   it('answer 422 for a finish that is not one, with the field named', async () => {
     const t = await intake({ garments: [{ description: 'Odd finish' }] });
-    const r = await call('PUT', `/api/garments/${await garmentOf(t.body.id)}/measurements`, { cookie: cookie.tailor, body: { unit: 'in', legs: { left: { finish: 'frayed' }, right: { finish: 'cuff' } } } });
+    const r = await call('PUT', `/api/garments/${await garmentOf(t.body.id)}/measurements`, {
+      cookie: cookie.tailor,
+      body: { unit: 'in', legs: { left: { finish: 'frayed' }, right: { finish: 'cuff' } } },
+    });
     expect(r.status).toBe(422);
     expect(r.body.issues['legs.left.finish']).toBe('Choose cuff, plain hem or sloped hem.');
   });
@@ -128,7 +144,10 @@ describe('fitting measurements', () => {
     const t = await intake({ garments: [{ description: 'Audited' }] });
     const g = await garmentOf(t.body.id);
     await call('PUT', `/api/garments/${g}/measurements`, { cookie: cookie.tailor, body: fitting({ backPin: '30 3/4', cuffDepth: '1 1/2' }) });
-    const r = await call('PUT', `/api/garments/${g}/measurements`, { cookie: cookie.lead, body: fitting({ backPin: '30 3/4', cuffDepth: '1 3/4' }, { backPin: '30 3/4', cuffDepth: '1 1/2' }) });
+    const r = await call('PUT', `/api/garments/${g}/measurements`, {
+      cookie: cookie.lead,
+      body: fitting({ backPin: '30 3/4', cuffDepth: '1 3/4' }, { backPin: '30 3/4', cuffDepth: '1 1/2' }),
+    });
     expect(r.status).toBe(200);
     expect(r.body.legs[0].values.backPin).toEqual({ text: '30 3/4', mm: 781.05 });
     expect(r.body.legs[0].values.cuffDepth).toEqual({ text: '1 3/4', mm: 44.45 });

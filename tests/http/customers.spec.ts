@@ -34,7 +34,10 @@ describe('customers over HTTP', () => {
     for (const who of ['lead', 'counter', 'tailor'] as const) {
       const r = await search(who, '017 6230');
       expect(r.status, who).toBe(200);
-      expect(r.body.map((h: { id: string }) => h.id), who).toEqual([customerId]);
+      expect(
+        r.body.map((h: { id: string }) => h.id),
+        who,
+      ).toEqual([customerId]);
       expect(r.body[0]).toMatchObject({ name: 'Wrenna Holloway', phone: PHONE, lastTicket: ticketNumber });
     }
     expect((await search('apprentice', 'Wrenna')).status).toBe(403);
@@ -70,7 +73,10 @@ describe('customers over HTTP', () => {
 
   it('lets the counter edit details with history; not the apprentice', async () => {
     expect((await call('PATCH', `/api/customers/${customerId}`, { cookie: cookies.apprentice, body: { notes: 'x' } })).status).toBe(403);
-    const r = await call('PATCH', `/api/customers/${customerId}`, { cookie: cookies.counter, body: { notes: 'Prefers a deep cuff.', email: 'wrenna@example.com' } });
+    const r = await call('PATCH', `/api/customers/${customerId}`, {
+      cookie: cookies.counter,
+      body: { notes: 'Prefers a deep cuff.', email: 'wrenna@example.com' },
+    });
     expect(r.status).toBe(200);
     const blank = await call('PATCH', `/api/customers/${customerId}`, { cookie: cookies.counter, body: { email: '' } });
     expect(blank.body.email).toBeNull();

@@ -29,7 +29,11 @@ function routeFiles(dir = API_DIR): string[] {
 
 /** Route key of a file: its path under src/pages/api without extension or trailing /index. */
 function routeKey(file: string): string {
-  return relative(API_DIR, file).split(sep).join('/').replace(/\.(ts|js|mjs)$/, '').replace(/(^|\/)index$/, '');
+  return relative(API_DIR, file)
+    .split(sep)
+    .join('/')
+    .replace(/\.(ts|js|mjs)$/, '')
+    .replace(/(^|\/)index$/, '');
 }
 
 function methodsOf(file: string): Method[] {
@@ -55,7 +59,10 @@ const SEEDS: Record<string, unknown> = {
   'PATCH garments/[id]': { description: 'Fuzz trousers', dueOn: '2027-01-02', assigneeId: null },
   'PUT garments/[id]/measurements': {
     unit: 'in',
-    legs: { left: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2', available: '5' }, right: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2', available: '5' } },
+    legs: {
+      left: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2', available: '5' },
+      right: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2', available: '5' },
+    },
   },
   'POST garments/[id]/step': { to: 'marked' },
   'POST garments/[id]/step-back': { from: 'marked' },
@@ -87,12 +94,37 @@ const SEEDS: Record<string, unknown> = {
 
 // better-auth endpoints to aim at (sign-out and the like end the lead's session: left out).
 const AUTH_PATHS = [
-  'sign-in/email', 'get-session', 'request-password-reset', 'reset-password', 'update-user', 'change-password',
-  'organization/set-active', 'organization/get-full-organization', 'list-sessions', 'verify-email', 'sign-in/social', 'no/such/endpoint',
+  'sign-in/email',
+  'get-session',
+  'request-password-reset',
+  'reset-password',
+  'update-user',
+  'change-password',
+  'organization/set-active',
+  'organization/get-full-organization',
+  'list-sessions',
+  'verify-email',
+  'sign-in/social',
+  'no/such/endpoint',
 ];
 
 // Text no route may choke on.
-const NASTY_TEXT = ['\u0000', 'pair \u0000 one', 'pair \ud800', '\udc00', 'x\ud83d', '😀', '\u202e\u200b', '<script>alert(1)</script>', "' or 1=1 --", '../../etc/passwd', '%00', '', ' ', '1 1/2\u0000'];
+const NASTY_TEXT = [
+  '\u0000',
+  'pair \u0000 one',
+  'pair \ud800',
+  '\udc00',
+  'x\ud83d',
+  '😀',
+  '\u202e\u200b',
+  '<script>alert(1)</script>',
+  "' or 1=1 --",
+  '../../etc/passwd',
+  '%00',
+  '',
+  ' ',
+  '1 1/2\u0000',
+];
 const nastyText = fc.oneof(
   fc.constantFrom(...NASTY_TEXT),
   fc.string({ unit: 'binary', maxLength: 40 }),
@@ -108,7 +140,11 @@ const nastyValue: fc.Arbitrary<unknown> = fc.oneof(
 );
 
 /** A body: the route's seed with a field set to something nasty, random JSON, or bytes that are not JSON. */
-type Body = { kind: 'none' } | { kind: 'json'; value: unknown } | { kind: 'raw'; text: string; type: string } | { kind: 'form'; name: string; bytes: Uint8Array };
+type Body =
+  | { kind: 'none' }
+  | { kind: 'json'; value: unknown }
+  | { kind: 'raw'; text: string; type: string }
+  | { kind: 'form'; name: string; bytes: Uint8Array };
 
 function bodyFor(seedKey: string): fc.Arbitrary<Body> {
   const seed = (SEEDS[seedKey] ?? {}) as Record<string, unknown>;
@@ -135,11 +171,20 @@ function bodyFor(seedKey: string): fc.Arbitrary<Body> {
       arbitrary: fc
         .tuple(
           fc.constantFrom('{', '{"a":', '\ufeff{}', 'null', '"\u0000"', '{"name":"a\\u0000b"}', '{"name":"\\ud800"}', 'name=a%00b&email=x', '\u0000', ''),
-          fc.constantFrom('application/json', 'text/plain', 'application/x-www-form-urlencoded', 'multipart/form-data; boundary=zz', 'application/json; charset=latin1'),
+          fc.constantFrom(
+            'application/json',
+            'text/plain',
+            'application/x-www-form-urlencoded',
+            'multipart/form-data; boundary=zz',
+            'application/json; charset=latin1',
+          ),
         )
         .map(([text, type]): Body => ({ kind: 'raw', text, type })),
     },
-    { weight: 1, arbitrary: fc.tuple(nastyText, fc.uint8Array({ maxLength: 64 })).map(([name, bytes]): Body => ({ kind: 'form', name: name.slice(0, 200), bytes })) },
+    {
+      weight: 1,
+      arbitrary: fc.tuple(nastyText, fc.uint8Array({ maxLength: 64 })).map(([name, bytes]): Body => ({ kind: 'form', name: name.slice(0, 200), bytes })),
+    },
     { weight: 1, arbitrary: fc.constant<Body>({ kind: 'none' }) },
   );
 }
@@ -155,9 +200,31 @@ function paramFor(valid: string | undefined): fc.Arbitrary<string> {
 }
 
 const QUERY_KEYS = ['unit', 'precision', 'page', 'step', 'who', 'due', 'search', 'q', 'today', 'token', 'callbackURL', 'x'];
-const QUERY_VALUES = ['in', 'cm', '8', '16', 'A4', 'LETTER', 'open', 'all', 'mine', 'nobody', 'today', '2027-01-02', '%00', 'a%00b', '%F0%9F%98%80', 'x'.repeat(3000), '', '%25', '1e308'];
+const QUERY_VALUES = [
+  'in',
+  'cm',
+  '8',
+  '16',
+  'A4',
+  'LETTER',
+  'open',
+  'all',
+  'mine',
+  'nobody',
+  'today',
+  '2027-01-02',
+  '%00',
+  'a%00b',
+  '%F0%9F%98%80',
+  'x'.repeat(3000),
+  '',
+  '%25',
+  '1e308',
+];
 const query = fc
-  .array(fc.tuple(fc.constantFrom(...QUERY_KEYS), fc.oneof(fc.constantFrom(...QUERY_VALUES), fc.string({ maxLength: 20 }).map(encodeURIComponent))), { maxLength: 4 })
+  .array(fc.tuple(fc.constantFrom(...QUERY_KEYS), fc.oneof(fc.constantFrom(...QUERY_VALUES), fc.string({ maxLength: 20 }).map(encodeURIComponent))), {
+    maxLength: 4,
+  })
   .map((pairs) => (pairs.length ? `?${pairs.map(([k, v]) => `${k}=${v}`).join('&')}` : ''));
 
 interface Attempt {
@@ -170,15 +237,13 @@ interface Attempt {
 function attempts(key: string, methods: Method[]): fc.Arbitrary<Attempt> {
   const params = [...key.matchAll(/\[(\.\.\.)?([^\]]+)\]/g)];
   const parts = params.map((m) => (m[1] ? fc.constantFrom(...AUTH_PATHS) : paramFor(ids[m[2] === 'id' ? key.split('/')[0]! : m[2]!])));
-  return fc
-    .tuple(fc.constantFrom(...methods), fc.tuple(...parts), query, fc.boolean())
-    .chain(([method, values, q, signedIn]) => {
-      let i = 0;
-      const path = `/api/${key.replace(/\[[^\]]+\]/g, () => values[i++]!)}${method === 'GET' || key.startsWith('auth/') ? q : ''}`;
-      const seedKey = `${method} ${key}`;
-      const body = method === 'GET' || method === 'DELETE' ? fc.constant<Body>({ kind: 'none' }) : bodyFor(seedKey);
-      return body.map((b): Attempt => ({ method, path, body: b, signedIn }));
-    });
+  return fc.tuple(fc.constantFrom(...methods), fc.tuple(...parts), query, fc.boolean()).chain(([method, values, q, signedIn]) => {
+    let i = 0;
+    const path = `/api/${key.replace(/\[[^\]]+\]/g, () => values[i++]!)}${method === 'GET' || key.startsWith('auth/') ? q : ''}`;
+    const seedKey = `${method} ${key}`;
+    const body = method === 'GET' || method === 'DELETE' ? fc.constant<Body>({ kind: 'none' }) : bodyFor(seedKey);
+    return body.map((b): Attempt => ({ method, path, body: b, signedIn }));
+  });
 }
 
 async function send(a: Attempt): Promise<{ status: number; type: string; text: string }> {
@@ -214,7 +279,10 @@ let saved: { bench: unknown; timeZone: string; prices: Record<string, unknown>; 
 
 beforeAll(async () => {
   lead = await signIn(DEMO.lead);
-  const t = await call('POST', '/api/tickets', { cookie: lead, body: { customer: { name: 'Fuzz Fixture', email: freshEmail('fuzz') }, garments: [{ description: 'Fuzz fixture trousers' }] } });
+  const t = await call('POST', '/api/tickets', {
+    cookie: lead,
+    body: { customer: { name: 'Fuzz Fixture', email: freshEmail('fuzz') }, garments: [{ description: 'Fuzz fixture trousers' }] },
+  });
   expect(t.status).toBe(201);
   ids.tickets = t.body.id;
   const ticket = await call('GET', `/api/tickets/${t.body.id}`, { cookie: lead });
@@ -241,7 +309,13 @@ beforeAll(async () => {
     defaultPreset: presets.body.find((p: { house: boolean; isDefault: boolean }) => p.house && p.isDefault)?.id,
   };
   // Valid price lists need every line: the seed is the shop's own list.
-  SEEDS['PUT prices'] = { currency: prices.body.currency, hours: prices.body.hours, location: prices.body.location, autoReadyNotice: prices.body.autoReadyNotice, items: prices.body.items };
+  SEEDS['PUT prices'] = {
+    currency: prices.body.currency,
+    hours: prices.body.hours,
+    location: prices.body.location,
+    autoReadyNotice: prices.body.autoReadyNotice,
+    items: prices.body.items,
+  };
 });
 
 afterAll(async () => {

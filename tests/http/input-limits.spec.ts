@@ -110,7 +110,9 @@ describe('a body that stops arriving', () => {
   });
 
   it('a JSON body cut off halfway is answered 408 JSON too', async () => {
-    const head = [`POST /api/plan HTTP/1.1`, `Host: ${new URL(inject('baseURL')).host}`, `Content-Type: application/json`, `Content-Length: 5000`, '', ''].join('\r\n');
+    const head = [`POST /api/plan HTTP/1.1`, `Host: ${new URL(inject('baseURL')).host}`, `Content-Type: application/json`, `Content-Length: 5000`, '', ''].join(
+      '\r\n',
+    );
     const answer = await rawExchange(head + '{"kind":"cuff",', 30_000);
     expect(answer).toMatch(/^HTTP\/1\.1 408/);
   });

@@ -15,7 +15,10 @@ beforeAll(async () => {
 
 /** A pair taken in with a plain hem (let down first), and its garment id. */
 async function letDownPair(): Promise<string> {
-  const t = await call('POST', '/api/tickets', { cookie: cookie.counter, body: { customer: { name: 'Rosalind Ferrow' }, garments: [{ description: 'Fawn twill trousers', existingFinish: 'plain-hem' }] } });
+  const t = await call('POST', '/api/tickets', {
+    cookie: cookie.counter,
+    body: { customer: { name: 'Rosalind Ferrow' }, garments: [{ description: 'Fawn twill trousers', existingFinish: 'plain-hem' }] },
+  });
   expect(t.status).toBe(201);
   return (await call('GET', `/api/tickets/${t.body.id}`, { cookie: cookie.counter })).body.garments[0].id as string;
 }
@@ -25,7 +28,10 @@ const leg = (widthAtCut: string) => ({ finish: 'plain', backPin: '32', widthAtEd
 describe('PUT /api/garments/[id]/measurements with a width at the cutting line', () => {
   it('saves it as typed and in exact mm (7 1/2 in = 190.5 mm: TRADE.md, NBS 1959), and the sheet says it was measured', async () => {
     const id = await letDownPair();
-    const r = await call('PUT', `/api/garments/${id}/measurements`, { cookie: cookie.tailor, body: { unit: 'in', legs: { left: leg('7 1/2'), right: leg('7 1/2') } } });
+    const r = await call('PUT', `/api/garments/${id}/measurements`, {
+      cookie: cookie.tailor,
+      body: { unit: 'in', legs: { left: leg('7 1/2'), right: leg('7 1/2') } },
+    });
     expect(r.status).toBe(200);
     expect(r.body.legs[0].values.widthAtCut).toEqual({ text: '7 1/2', mm: 190.5 });
     const sheet = await fetch(`${inject('baseURL')}/api/garments/${id}/sheet`, { headers: { cookie: cookie.tailor } });
@@ -38,7 +44,10 @@ describe('PUT /api/garments/[id]/measurements with a width at the cutting line',
 
   it('answers 422 naming the field for a width of 0, and saves nothing', async () => {
     const id = await letDownPair();
-    const r = await call('PUT', `/api/garments/${id}/measurements`, { cookie: cookie.tailor, body: { unit: 'in', legs: { left: leg('0'), right: leg('7 1/2') } } });
+    const r = await call('PUT', `/api/garments/${id}/measurements`, {
+      cookie: cookie.tailor,
+      body: { unit: 'in', legs: { left: leg('0'), right: leg('7 1/2') } },
+    });
     expect(r.status).toBe(422);
     expect(r.body.issues).toEqual({ 'legs.left.widthAtCut': 'Width at the cutting line must be more than 0.' });
     expect((await call('GET', `/api/garments/${id}/measurements`, { cookie: cookie.tailor })).body.legs).toEqual([]);

@@ -6,8 +6,7 @@ import { describe, expect, inject, it } from 'vitest';
 import { flatText, pageInfo, pdfFile } from '../lib/cut-sheet/poppler';
 import { call, DEMO, freshEmail, newShop, signIn } from './client';
 
-const reset = (email: string, from: string) =>
-  call('POST', '/api/auth/request-password-reset', { from, body: { email, redirectTo: '/reset' } });
+const reset = (email: string, from: string) => call('POST', '/api/auth/request-password-reset', { from, body: { email, redirectTo: '/reset' } });
 
 describe('password-reset mail', () => {
   it('goes to one address at most 3 times an hour, whoever asks', async () => {

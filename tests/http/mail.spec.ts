@@ -47,7 +47,9 @@ describe('re-invitation with another role', () => {
     expect(staff.body.invitations.filter((i: { email: string }) => i.email === email).map((i: { role: string }) => i.role)).toEqual(['tailor']);
     const link = new URL(firstLink(mail));
     expect((await call('GET', `/api/invitations/${link.pathname.split('/').pop()}`)).body.role).toBe('tailor');
-    const joined = await call('POST', `/api/invitations/${link.pathname.split('/').pop()}/accept`, { body: { name: 'Re Invited', password: 'a-long-password' } });
+    const joined = await call('POST', `/api/invitations/${link.pathname.split('/').pop()}/accept`, {
+      body: { name: 'Re Invited', password: 'a-long-password' },
+    });
     expect(joined.status).toBe(200);
     expect((await call('GET', '/api/me', { cookie: cookieFrom(joined.headers) })).body).toMatchObject({ email, role: 'tailor' });
     // The first link, with the old role, no longer opens.

@@ -23,7 +23,10 @@ export async function waitForMailWith(to: string, test: (mail: Captured) => bool
   while (Date.now() < until) {
     let names: string[] = [];
     try {
-      names = readdirSync(dir).filter((n) => n.endsWith('.json')).sort().reverse();
+      names = readdirSync(dir)
+        .filter((n) => n.endsWith('.json'))
+        .sort()
+        .reverse();
     } catch {
       /* no mail yet */
     }

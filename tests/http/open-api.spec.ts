@@ -46,7 +46,11 @@ function routeFiles(dir = API_DIR): string[] {
 
 /** The address of a route file, written out here rather than taken from the app's own helper. */
 function pathOf(file: string): string {
-  const key = relative(API_DIR, file).split(sep).join('/').replace(/\.(ts|js|mjs)$/, '').replace(/(^|\/)index$/, '');
+  const key = relative(API_DIR, file)
+    .split(sep)
+    .join('/')
+    .replace(/\.(ts|js|mjs)$/, '')
+    .replace(/(^|\/)index$/, '');
   return `/api/${key}`.replace(/\[(?:\.\.\.)?([^\]]+)\]/g, '{$1}');
 }
 
@@ -67,7 +71,9 @@ export function roleFor(op: Operation): Role | null {
 }
 
 const doc = (await call('GET', '/api/openapi.json')).body as Doc;
-const operations = Object.entries(doc.paths).flatMap(([path, methods]) => Object.entries(methods).map(([method, op]) => ({ path, method, op, key: `${method.toUpperCase()} ${path}` })));
+const operations = Object.entries(doc.paths).flatMap(([path, methods]) =>
+  Object.entries(methods).map(([method, op]) => ({ path, method, op, key: `${method.toUpperCase()} ${path}` })),
+);
 
 const cookies = {} as Record<Role, string>;
 let make: ReturnType<typeof fixtures>;
@@ -120,7 +126,11 @@ describe('the API document (/api/openapi.json)', () => {
       const json = op.requestBody?.content['application/json'];
       if (json && Object.keys(json.schema).length && !(key in NOT_SENT)) expect(op['x-examples'].length, `${key} has a body but no example`).toBeGreaterThan(0);
       // The examples in the standard place are the same requests as x-examples.
-      for (const e of Object.values(json?.examples ?? {})) expect(op['x-examples'].map((x) => x.body), key).toContainEqual(e.value);
+      for (const e of Object.values(json?.examples ?? {}))
+        expect(
+          op['x-examples'].map((x) => x.body),
+          key,
+        ).toContainEqual(e.value);
     }
   });
 

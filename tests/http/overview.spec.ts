@@ -37,7 +37,14 @@ describe('the overview over HTTP', () => {
       for (const [i, d] of json.days.entries()) {
         const money = (m: string) => ((d.takings[m] ?? 0) / 100).toFixed(2);
         const total = (Object.values(d.takings) as number[]).reduce((a, b) => a + b, 0);
-        expect(rows[i]).toEqual([d.day, ...[d.takenIn, d.handedOver, d.dueDone, d.dueOpen, d.overdue].map(String), money('cash'), money('card'), money('online'), (total / 100).toFixed(2)]);
+        expect(rows[i]).toEqual([
+          d.day,
+          ...[d.takenIn, d.handedOver, d.dueDone, d.dueOpen, d.overdue].map(String),
+          money('cash'),
+          money('card'),
+          money('online'),
+          (total / 100).toFixed(2),
+        ]);
       }
       // The totals row is the sum of the days, and the takings total the JSON's per-method sums.
       const totals = rows.at(-1)!;
@@ -75,7 +82,10 @@ describe('the overview over HTTP', () => {
     const csv = await call('GET', '/api/overview.csv?period=4w', { cookie: other.cookie });
     expect(String(csv.body).trimEnd().split('\r\n').at(-1)).toBe('total,0,0,0,0,0,0.00,0.00,0.00,0.00');
     // Its time zone is its own: choosing one changes nothing for the demo shop.
-    expect((await call('PUT', '/api/shop-time-zone', { cookie: other.cookie, body: { timeZone: 'Pacific/Auckland' } })).body).toEqual({ timeZone: 'Pacific/Auckland', chosen: true });
+    expect((await call('PUT', '/api/shop-time-zone', { cookie: other.cookie, body: { timeZone: 'Pacific/Auckland' } })).body).toEqual({
+      timeZone: 'Pacific/Auckland',
+      chosen: true,
+    });
     expect((await call('GET', '/api/overview', { cookie: other.cookie })).body.timeZone).toBe('Pacific/Auckland');
     expect((await call('GET', '/api/overview', { cookie: cookies.lead })).body.timeZone).toBe('Europe/London');
   });

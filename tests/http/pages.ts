@@ -11,7 +11,13 @@ export function pageFiles(dir = PAGES_DIR): string[] {
   return readdirSync(dir, { withFileTypes: true }).flatMap((e) => {
     if (e.isDirectory()) return e.name === 'api' ? [] : pageFiles(join(dir, e.name));
     if (!e.name.endsWith('.astro')) return [];
-    return [relative(PAGES_DIR, join(dir, e.name)).split(sep).join('/').replace(/\.astro$/, '').replace(/(^|\/)index$/, '')];
+    return [
+      relative(PAGES_DIR, join(dir, e.name))
+        .split(sep)
+        .join('/')
+        .replace(/\.astro$/, '')
+        .replace(/(^|\/)index$/, ''),
+    ];
   });
 }
 

@@ -29,7 +29,11 @@ function signed(event: object, secret = inject('paymentsEnv').PAYMENTS_WEBHOOK_S
 }
 
 async function webhook({ payload, signature }: { payload: string; signature: string }) {
-  const res = await fetch(`${inject('baseURL')}/api/payments/webhook`, { method: 'POST', headers: { 'content-type': 'application/json', 'stripe-signature': signature }, body: payload });
+  const res = await fetch(`${inject('baseURL')}/api/payments/webhook`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', 'stripe-signature': signature },
+    body: payload,
+  });
   return { status: res.status, body: (await res.json()) as { error?: string; message?: string } };
 }
 
@@ -97,7 +101,12 @@ describe('online payment through the local fake', () => {
     expect(page.status).toBe(200);
     expect(page.headers.get('cache-control')).toBe('no-store');
     const dl = String(page.body).match(/<dl[^>]*data-testid="paid-session"[\s\S]*?<\/dl>/)?.[0] ?? '';
-    expect(dl.replace(/<[^>]+>/g, ' ').replace(/\s+/g, ' ').trim()).toBe(`Ticket PH ${number} Paid €20.00`);
+    expect(
+      dl
+        .replace(/<[^>]+>/g, ' ')
+        .replace(/\s+/g, ' ')
+        .trim(),
+    ).toBe(`Ticket PH ${number} Paid €20.00`);
     // Nothing personal or of the shop: not the customer's name, not the shop's name.
     expect(page.body).not.toContain('Perrin Loame');
     expect(page.body).not.toContain('Pinmark');
@@ -114,7 +123,10 @@ describe('online payment through the local fake', () => {
     const id = await readyPricedTicket();
     const made = await call('POST', `/api/tickets/${id}/payments/link`, { cookie: counter });
     expect((await fetch(made.body.link.url, { method: 'POST', redirect: 'manual' })).status).toBe(303);
-    const cut = await call('POST', `/api/tickets/${id}/price-lines`, { cookie: counter, body: { source: 'adjust', label: 'Shorter than asked', amountMinor: -400, reason: 'customer agreed' } });
+    const cut = await call('POST', `/api/tickets/${id}/price-lines`, {
+      cookie: counter,
+      body: { source: 'adjust', label: 'Shorter than asked', amountMinor: -400, reason: 'customer agreed' },
+    });
     expect(cut.status).toBe(201);
     const owed = await call('GET', `/api/tickets/${id}/payments`, { cookie: counter });
     expect([owed.body.total, owed.body.paid, owed.body.due, owed.body.credit]).toEqual([2000, 2400, 0, 400]);
@@ -211,11 +223,19 @@ describe('ready notice through the mail capture', () => {
     const id = await readyPricedTicket(email);
     expect((await call('POST', `/api/tickets/${id}/notices`, { cookie: counter, body: { kind: 'ready' } })).status).toBe(201);
     expect((await call('POST', `/api/tickets/${id}/notices`, { cookie: counter, body: { kind: 'ready' } })).status).toBe(409);
-    expect((await call('POST', `/api/tickets/${id}/notices`, { cookie: await signIn(DEMO.apprentice), body: { kind: 'ready', again: true } })).status).toBe(403);
-    expect((await call('POST', `/api/tickets/${id}/notices`, { cookie: (await newShop('Resend Stranger HTTP')).cookie, body: { kind: 'ready', again: true } })).status).toBe(404);
+    expect((await call('POST', `/api/tickets/${id}/notices`, { cookie: await signIn(DEMO.apprentice), body: { kind: 'ready', again: true } })).status).toBe(
+      403,
+    );
+    expect(
+      (await call('POST', `/api/tickets/${id}/notices`, { cookie: (await newShop('Resend Stranger HTTP')).cookie, body: { kind: 'ready', again: true } }))
+        .status,
+    ).toBe(404);
     const again = await call('POST', `/api/tickets/${id}/notices`, { cookie: counter, body: { kind: 'ready', again: true } });
     expect([again.status, again.body.sequence, again.body.status]).toEqual([201, 2, 'sent']);
     const list = await call('GET', `/api/tickets/${id}/notices`, { cookie: counter });
-    expect(list.body.map((n: { sequence: number; status: string }) => [n.sequence, n.status])).toEqual([[1, 'sent'], [2, 'sent']]);
+    expect(list.body.map((n: { sequence: number; status: string }) => [n.sequence, n.status])).toEqual([
+      [1, 'sent'],
+      [2, 'sent'],
+    ]);
   });
 });

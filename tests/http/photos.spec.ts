@@ -28,7 +28,9 @@ beforeAll(async () => {
 function storedFiles(): string[] {
   const root = join(inject('dataDir'), 'files');
   try {
-    return readdirSync(root, { recursive: true, withFileTypes: true }).filter((e) => e.isFile()).map((e) => join(e.parentPath, e.name).slice(inject('dataDir').length + 1));
+    return readdirSync(root, { recursive: true, withFileTypes: true })
+      .filter((e) => e.isFile())
+      .map((e) => join(e.parentPath, e.name).slice(inject('dataDir').length + 1));
   } catch {
     return [];
   }
@@ -60,7 +62,11 @@ describe('fitting photos over HTTP', () => {
 
   it('refuses SVG, HTML and text, whatever their name or declared type says (415)', async () => {
     const svg = new TextEncoder().encode('<svg xmlns="http://www.w3.org/2000/svg" onload="alert(1)"/>');
-    for (const [name, type] of [['mark.svg', 'image/svg+xml'], ['mark.jpg', 'image/jpeg'], ['page.html', 'text/html']] as const) {
+    for (const [name, type] of [
+      ['mark.svg', 'image/svg+xml'],
+      ['mark.jpg', 'image/jpeg'],
+      ['page.html', 'text/html'],
+    ] as const) {
       const r = await upload(tailor, garment, [{ name, bytes: svg, type }]);
       expect(r.status, name).toBe(415);
       expect(r.body.issues.photos).toMatch(/not a photo we take/);
@@ -71,7 +77,10 @@ describe('fitting photos over HTTP', () => {
     const before = storedFiles().length;
     const big = new Uint8Array(10 * 1024 * 1024 + 1);
     big.set(jpeg.subarray(0, 3));
-    const r = await upload(tailor, garment, [{ name: 'fine.jpg', bytes: jpeg }, { name: 'huge.jpg', bytes: big }]);
+    const r = await upload(tailor, garment, [
+      { name: 'fine.jpg', bytes: jpeg },
+      { name: 'huge.jpg', bytes: big },
+    ]);
     expect(r.status).toBe(413);
     expect(storedFiles().length).toBe(before);
   });
@@ -100,7 +109,7 @@ describe('fitting photos over HTTP', () => {
     expect((await call('GET', `/api/photos/${id}`, { cookie: lead })).status).toBe(200);
   });
 
-  it('answers a HEIC photo\'s thumbnail with the placeholder tile, an image, not an error or a broken picture', async () => {
+  it("answers a HEIC photo's thumbnail with the placeholder tile, an image, not an error or a broken picture", async () => {
     const r = await upload(tailor, garment, [{ name: 'IMG_0107.HEIC', bytes: new Uint8Array(await sampleHeif()), type: 'image/heic' }]);
     expect(r.status).toBe(201);
     expect(r.body[0].hasThumb).toBe(false);

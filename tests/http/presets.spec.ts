@@ -22,10 +22,19 @@ describe('presets API', () => {
     const r = await call('GET', '/api/presets', { cookie: cookies.apprentice });
     expect(r.status).toBe(200);
     // Cuff depths 1¼ trim, 1½ classic, 1¾ wide (TRADE.md, common practice, no source); 35 and 40 mm (common practice, no source).
-    const house = r.body.filter((p: { house: boolean }) => p.house).map((p: { name: string; settings: { cuffDepth: string } }) => [p.name, p.settings.cuffDepth]);
+    const house = r.body
+      .filter((p: { house: boolean }) => p.house)
+      .map((p: { name: string; settings: { cuffDepth: string } }) => [p.name, p.settings.cuffDepth]);
     // Other tests on this server add house presets: the seeded ones are checked among them.
     expect(house[0]).toEqual(['Classic cuff', '1 1/2']);
-    expect(house).toEqual(expect.arrayContaining([['Trim cuff', '1 1/4'], ['Wide cuff', '1 3/4'], ['Metric cuff 35', '35'], ['Metric cuff 40', '40']]));
+    expect(house).toEqual(
+      expect.arrayContaining([
+        ['Trim cuff', '1 1/4'],
+        ['Wide cuff', '1 3/4'],
+        ['Metric cuff 35', '35'],
+        ['Metric cuff 40', '40'],
+      ]),
+    );
   });
 
   it('answers 400 for a body that is not JSON and 422 per field for bad shapes', async () => {
@@ -74,7 +83,10 @@ describe('presets API', () => {
 
   it('keeps one house default: a new default replaces the old one, and the old one can take it back', async () => {
     const before = (await call('GET', '/api/presets', { cookie: cookies.lead })).body.find((p: { isDefault: boolean }) => p.isDefault);
-    const made = await call('POST', '/api/presets', { cookie: cookies.lead, body: { name: freshEmail('wide'), scope: 'house', isDefault: true, settings: cuff('45', 'mm') } });
+    const made = await call('POST', '/api/presets', {
+      cookie: cookies.lead,
+      body: { name: freshEmail('wide'), scope: 'house', isDefault: true, settings: cuff('45', 'mm') },
+    });
     expect(made.status).toBe(201);
     let defaults = (await call('GET', '/api/presets', { cookie: cookies.tailor })).body.filter((p: { isDefault: boolean }) => p.isDefault);
     expect(defaults.map((p: { id: string }) => p.id)).toEqual([made.body.id]);
@@ -125,9 +137,15 @@ describe('presets API', () => {
     const ticket = await call('POST', '/api/tickets', { cookie: stranger.cookie, body: { garments: [{ description: 'Stranger trousers' }] } });
     expect(ticket.status).toBe(201);
     const garment = (await call('GET', `/api/tickets/${ticket.body.id}`, { cookie: stranger.cookie })).body.garments[0].id;
-    const fitting = (presetId: string) => ({ unit: 'in', legs: { left: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2', presetId }, right: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2' } } });
+    const fitting = (presetId: string) => ({
+      unit: 'in',
+      legs: { left: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2', presetId }, right: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2' } },
+    });
     const theirs = await call('PUT', `/api/garments/${garment}/measurements`, { cookie: stranger.cookie, body: fitting(demoDefault.id) });
-    const madeUp = await call('PUT', `/api/garments/${garment}/measurements`, { cookie: stranger.cookie, body: fitting('00000000-0000-4000-8000-000000000000') });
+    const madeUp = await call('PUT', `/api/garments/${garment}/measurements`, {
+      cookie: stranger.cookie,
+      body: fitting('00000000-0000-4000-8000-000000000000'),
+    });
     expect(theirs.status).toBe(422);
     expect(madeUp.status).toBe(422);
     expect(theirs.body.error).toBe(madeUp.body.error);

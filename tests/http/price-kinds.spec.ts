@@ -91,7 +91,10 @@ describe('another shop’s kind of work', () => {
     const nothing = await call('POST', `/api/tickets/${t.body.id}/price-lines`, { cookie: cookies.other, body: { source: 'kind', kindId: NOWHERE } });
     expect([theirs.status, theirs.body]).toEqual([422, nothing.body]);
     const intake = await call('POST', '/api/tickets', { cookie: cookies.other, body: { garments: [{ description: 'Stranger trousers', work: [kindId] }] } });
-    const intakeNothing = await call('POST', '/api/tickets', { cookie: cookies.other, body: { garments: [{ description: 'Stranger trousers', work: [NOWHERE] }] } });
+    const intakeNothing = await call('POST', '/api/tickets', {
+      cookie: cookies.other,
+      body: { garments: [{ description: 'Stranger trousers', work: [NOWHERE] }] },
+    });
     expect([intake.status, intake.body]).toEqual([422, intakeNothing.body]);
     const before = (await call('GET', '/api/tickets', { cookie: cookies.other })).body.length;
     expect(before).toBe(1);
@@ -113,7 +116,11 @@ describe('pricing at intake', () => {
     const money = await call('GET', `/api/tickets/${t.body.id}/payments`, { cookie: cookies.counter });
     const list = (await call('GET', '/api/prices', { cookie: cookies.counter })).body as { items: { key: string; amountMinor: number }[] };
     const at = (key: string) => list.items.find((i) => i.key === key)!.amountMinor;
-    expect(money.body.lines.map((l: { label: string }) => l.label)).toEqual([expect.stringMatching(/— HTTP navy trousers$/), `${kindName} — HTTP navy trousers`, expect.any(String)]);
+    expect(money.body.lines.map((l: { label: string }) => l.label)).toEqual([
+      expect.stringMatching(/— HTTP navy trousers$/),
+      `${kindName} — HTTP navy trousers`,
+      expect.any(String),
+    ]);
     expect(money.body.lines.at(-1).key).toBe('rush');
     expect(money.body.total).toBe(at('plain-hem') + 1500 + at('rush'));
   });
@@ -122,10 +129,16 @@ describe('pricing at intake', () => {
     const noRush = await kind({ name: `Press only ${Date.now().toString(36)}`, amountMinor: 400, rushApplies: false });
     const tickets = async () => (await call('GET', '/api/tickets', { cookie: cookies.counter })).body.length;
     const before = await tickets();
-    const rushed = await call('POST', '/api/tickets', { cookie: cookies.counter, body: { rush: true, garments: [{ description: 'HTTP linen', work: [noRush.body.id] }] } });
+    const rushed = await call('POST', '/api/tickets', {
+      cookie: cookies.counter,
+      body: { rush: true, garments: [{ description: 'HTTP linen', work: [noRush.body.id] }] },
+    });
     expect([rushed.status, rushed.body.error]).toEqual([422, expect.stringContaining('Rush')]);
     await call('PATCH', `/api/prices/kinds/${noRush.body.id}`, { cookie: cookies.lead, body: { retired: true } });
-    const retired = await call('POST', '/api/tickets', { cookie: cookies.counter, body: { garments: [{ description: 'HTTP linen', work: [noRush.body.id] }] } });
+    const retired = await call('POST', '/api/tickets', {
+      cookie: cookies.counter,
+      body: { garments: [{ description: 'HTTP linen', work: [noRush.body.id] }] },
+    });
     expect([retired.status, retired.body.error]).toEqual([422, expect.stringContaining('retired')]);
     const twice = await call('POST', '/api/tickets', { cookie: cookies.counter, body: { garments: [{ description: 'HTTP linen', work: [kindId, kindId] }] } });
     expect(twice.status).toBe(422);

@@ -58,12 +58,14 @@ describe('GET a payment receipt', () => {
     const theirs = await call('GET', path, { cookie: other.cookie });
     expect(theirs.status).toBe(404);
     expect(JSON.stringify(theirs.body)).not.toContain('Ivo Gusset');
-    expect((await call('GET', path.replace(/payments\/[^/]+\/receipt$/, 'payments/00000000-0000-4000-8000-000000000000/receipt'), { cookie: counter })).status).toBe(404);
+    expect(
+      (await call('GET', path.replace(/payments\/[^/]+\/receipt$/, 'payments/00000000-0000-4000-8000-000000000000/receipt'), { cookie: counter })).status,
+    ).toBe(404);
   });
 });
 
 describe('POST (e-mail) a payment receipt', () => {
-  it('sends it with the PDF attached, listed in the shop\'s sent messages as a receipt', async () => {
+  it("sends it with the PDF attached, listed in the shop's sent messages as a receipt", async () => {
     const email = freshEmail('receipt');
     const { number, path } = await paidTicket(email);
     const r = await call('POST', path, { cookie: counter });

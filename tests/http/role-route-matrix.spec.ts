@@ -25,7 +25,11 @@ const API_DIR = join(process.cwd(), 'src', 'pages', 'api');
 
 /** Route key of a file: its path under src/pages/api without extension or trailing /index. */
 function routeKey(file: string): string {
-  return relative(API_DIR, file).split(sep).join('/').replace(/\.(ts|js|mjs)$/, '').replace(/(^|\/)index$/, '');
+  return relative(API_DIR, file)
+    .split(sep)
+    .join('/')
+    .replace(/\.(ts|js|mjs)$/, '')
+    .replace(/(^|\/)index$/, '');
 }
 
 function routeFiles(dir = API_DIR): string[] {
@@ -120,7 +124,10 @@ async function pricedTicket(): Promise<string> {
 async function creditTicket(): Promise<string> {
   const id = await pricedTicket();
   expect((await call('POST', `/api/tickets/${id}/payments`, { cookie: cookies.lead, body: { method: 'cash', amountMinor: 2400 } })).status).toBe(201);
-  const adjusted = await call('POST', `/api/tickets/${id}/price-lines`, { cookie: cookies.lead, body: { source: 'adjust', label: 'Matrix', amountMinor: -100, reason: 'matrix credit' } });
+  const adjusted = await call('POST', `/api/tickets/${id}/price-lines`, {
+    cookie: cookies.lead,
+    body: { source: 'adjust', label: 'Matrix', amountMinor: -100, reason: 'matrix credit' },
+  });
   expect(adjusted.status).toBe(201);
   return id;
 }
@@ -143,7 +150,10 @@ async function lineToVoid(): Promise<string> {
 /** A fresh shop A ticket moved to ready, for a customer with an e-mail address. */
 async function readyTicket(): Promise<string> {
   const c = await call('POST', '/api/customers', { cookie: cookies.lead, body: { name: 'Matrix Customer', email: freshEmail('ready') } });
-  const t = await call('POST', '/api/tickets', { cookie: cookies.lead, body: { customerId: c.body.id, note: 'matrix ready', garments: [{ description: 'Matrix trousers' }] } });
+  const t = await call('POST', '/api/tickets', {
+    cookie: cookies.lead,
+    body: { customerId: c.body.id, note: 'matrix ready', garments: [{ description: 'Matrix trousers' }] },
+  });
   for (const status of ['marked', 'cut', 'stitched', 'pressed', 'ready']) {
     const moved = await call('PATCH', `/api/tickets/${t.body.id}`, { cookie: cookies.lead, body: { status } });
     expect(moved.status).toBe(200);
@@ -177,7 +187,10 @@ let kindNo = 0;
 /** A fresh kind of work on shop A's list, made by its lead and retired at once (the browser stories share the demo list). */
 async function freshKind(): Promise<string> {
   kindNo += 1;
-  const r = await call('POST', '/api/prices/kinds', { cookie: cookies.lead, body: { name: `Matrix kind ${Date.now().toString(36)} ${kindNo}`, amountMinor: 1500, rushApplies: true } });
+  const r = await call('POST', '/api/prices/kinds', {
+    cookie: cookies.lead,
+    body: { name: `Matrix kind ${Date.now().toString(36)} ${kindNo}`, amountMinor: 1500, rushApplies: true },
+  });
   expect(r.status).toBe(201);
   expect((await call('PATCH', `/api/prices/kinds/${r.body.id}`, { cookie: cookies.lead, body: { retired: true } })).status).toBe(200);
   return r.body.id;
@@ -190,7 +203,10 @@ async function garmentOfA(): Promise<string> {
 
 /** A fresh house preset of shop A, made by its lead. */
 async function freshHousePreset(): Promise<string> {
-  const r = await call('POST', '/api/presets', { cookie: cookies.lead, body: { name: freshEmail('house'), scope: 'house', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } } });
+  const r = await call('POST', '/api/presets', {
+    cookie: cookies.lead,
+    body: { name: freshEmail('house'), scope: 'house', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } },
+  });
   expect(r.status).toBe(201);
   return r.body.id;
 }
@@ -509,7 +525,10 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       check: (a) => expect(a.body.map((l: { amountMinor: number }) => l.amountMinor)).toEqual([2400]),
     },
     POST: {
-      request: async () => ({ path: `/api/tickets/${await pricedTicket()}/price-lines`, body: { source: 'adjust', label: 'Matrix', amountMinor: -100, reason: 'matrix check' } }),
+      request: async () => ({
+        path: `/api/tickets/${await pricedTicket()}/price-lines`,
+        body: { source: 'adjust', label: 'Matrix', amountMinor: -100, reason: 'matrix check' },
+      }),
       expect: signedIn(403, { lead: 201, counter: 201, other: 404 }),
       check: (a) => expect([a.body.amountMinor, a.body.reason]).toEqual([-100, 'matrix check']),
     },
@@ -552,7 +571,8 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
     POST: {
       request: async () => ({ path: `/api/tickets/${await pricedTicket()}/payments/link` }),
       expect: signedIn(403, { lead: 201, counter: 201, other: 404 }),
-      check: (a) => expect(a.body.link).toMatchObject({ amountMinor: 2400, status: 'open', url: expect.stringMatching(/^http:\/\/127\.0\.0\.1:\d+\/pay\/cs_test_/) }),
+      check: (a) =>
+        expect(a.body.link).toMatchObject({ amountMinor: 2400, status: 'open', url: expect.stringMatching(/^http:\/\/127\.0\.0\.1:\d+\/pay\/cs_test_/) }),
     },
   },
   'tickets/[id]/payments/[paymentId]/receipt': {
@@ -598,7 +618,10 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       // Ready, marked "no charge" with a reason: nothing due, so those allowed hand it over.
       request: async () => {
         const id = await readyTicket();
-        const free = await call('POST', `/api/tickets/${id}/price-lines`, { cookie: cookies.lead, body: { source: 'no-charge', reason: 'matrix: nothing to charge' } });
+        const free = await call('POST', `/api/tickets/${id}/price-lines`, {
+          cookie: cookies.lead,
+          body: { source: 'no-charge', reason: 'matrix: nothing to charge' },
+        });
         expect(free.status).toBe(201);
         return { path: `/api/tickets/${id}/pickup` };
       },
@@ -679,7 +702,10 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
     },
     POST: {
       // A house preset: the lead's alone (a tailor's own presets are in presets.spec.ts).
-      request: () => ({ path: '/api/presets', body: { name: freshEmail('matrix'), scope: 'house', settings: { finish: 'cuff', unit: 'mm', cuffDepth: '40' } } }),
+      request: () => ({
+        path: '/api/presets',
+        body: { name: freshEmail('matrix'), scope: 'house', settings: { finish: 'cuff', unit: 'mm', cuffDepth: '40' } },
+      }),
       expect: signedIn(403, { lead: 201, other: 201 }),
       check: (a) => expect(a.body).toMatchObject({ house: true, settings: { cuffDepth: '40', unit: 'mm' } }),
     },
@@ -749,7 +775,13 @@ beforeAll(async () => {
   const staff = (await call('GET', '/api/staff', { cookie: cookies.lead })).body as { members: { id: string; userId: string; email: string; role: string }[] };
   aCustomerId = customers[0]!.id;
   apprenticeUserId = staff.members.find((m) => m.role === 'apprentice')!.userId;
-  markersOfA.push(shopA, ...customers.map((c) => c.id), ...tickets.map((t) => t.id), ...garments.map((g) => g.id), ...staff.members.flatMap((m) => [m.id, m.userId, m.email]));
+  markersOfA.push(
+    shopA,
+    ...customers.map((c) => c.id),
+    ...tickets.map((t) => t.id),
+    ...garments.map((g) => g.id),
+    ...staff.members.flatMap((m) => [m.id, m.userId, m.email]),
+  );
   markersOfB.push(shopB, b.email);
   // Something in the lead's sent messages: an invitation mail from shop A.
   await freshInvitation();

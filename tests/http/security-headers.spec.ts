@@ -47,7 +47,10 @@ function expectPagePolicy(a: Answer) {
     expect(sources, directive).toContain("'self'");
     expect(sources, directive).not.toContain("'unsafe-inline'");
     expect(sources, directive).not.toContain("'unsafe-eval'");
-    expect(sources.some((s) => s === '*' || s.endsWith(':')), `${directive} allows a whole scheme or any host`).toBe(false);
+    expect(
+      sources.some((s) => s === '*' || s.endsWith(':')),
+      `${directive} allows a whole scheme or any host`,
+    ).toBe(false);
   }
   expect(a.headers.get('x-frame-options')).toBe('DENY');
   // Whatever the page inlines is allowed by its exact hash: nothing else inline can run.

@@ -34,7 +34,7 @@ describe('cross-site writes', () => {
     expect(r.status).toBe(403);
   });
 
-  it("refuses a cross-site form POST to sign-out, keeping the session", async () => {
+  it('refuses a cross-site form POST to sign-out, keeping the session', async () => {
     const res = await fetch(`${inject('baseURL')}/sign-out`, {
       method: 'POST',
       headers: { cookie: lead, origin: 'http://evil.example', 'content-type': 'application/x-www-form-urlencoded' },
@@ -54,8 +54,7 @@ describe('cross-site writes', () => {
 
 describe('failed sign-ins', () => {
   // Each test signs in from its own invented address (X-Forwarded-For; the test server trusts one hop).
-  const wrong = (email: string, from: string, i: number) =>
-    call('POST', '/api/auth/sign-in/email', { from, body: { email, password: `wrong-${i}-password` } });
+  const wrong = (email: string, from: string, i: number) => call('POST', '/api/auth/sign-in/email', { from, body: { email, password: `wrong-${i}-password` } });
 
   it('after 5 wrong passwords from one address, that address answers 429 for the account, even to the right one; others are unaffected', async () => {
     const shop = await newShop('Rate Limit Hems');

@@ -52,7 +52,7 @@ describe("a shop's sent messages", () => {
     expect((await sentBy(victim.cookie)).some((m) => to(m, victim.email))).toBe(false);
   });
 
-  it("do not show a password reset to the shop that invited that address", async () => {
+  it('do not show a password reset to the shop that invited that address', async () => {
     const victim = await newShop('Invited Victim Hems');
     const attacker = await newShop('Inviting Attacker Hems');
     expect((await call('POST', '/api/staff', { cookie: attacker.cookie, body: { email: victim.email, role: 'apprentice' } })).status).toBe(201);
@@ -100,7 +100,9 @@ describe("a shop's sent messages", () => {
       const c = await call('POST', '/api/customers', { cookie: counter, body: { name: 'Shared Customer', email: shared } });
       const t = await call('POST', '/api/tickets', { cookie: counter, body: { customerId: c.body.id, garments: [{ description: 'Olive chinos' }] } });
       expect(t.status).toBe(201);
-      expect((await call('POST', `/api/tickets/${t.body.id}/price-lines`, { cookie: counter, body: { source: 'list', key: 'cuff-from-hem' } })).status).toBe(201);
+      expect((await call('POST', `/api/tickets/${t.body.id}/price-lines`, { cookie: counter, body: { source: 'list', key: 'cuff-from-hem' } })).status).toBe(
+        201,
+      );
       for (const status of ['marked', 'cut', 'stitched', 'pressed', 'ready']) {
         expect((await call('PATCH', `/api/tickets/${t.body.id}`, { cookie: lead, body: { status } })).status).toBe(200);
       }

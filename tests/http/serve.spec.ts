@@ -28,7 +28,14 @@ function freePort(): Promise<number> {
 /** Starts `node scripts/serve.mjs` with the test build; collects its output. */
 function serve(env: Record<string, string | undefined>): { child: ChildProcess; out: () => string; exited: Promise<number | null> } {
   let out = '';
-  const base = { ...process.env, DIST_DIR: dist, MAIL_CAPTURE_DIR: '/tmp/never-used', SMTP_HOST: undefined, BETTER_AUTH_URL: undefined, DATABASE_URL: undefined };
+  const base = {
+    ...process.env,
+    DIST_DIR: dist,
+    MAIL_CAPTURE_DIR: '/tmp/never-used',
+    SMTP_HOST: undefined,
+    BETTER_AUTH_URL: undefined,
+    DATABASE_URL: undefined,
+  };
   const child = spawn(process.execPath, ['scripts/serve.mjs'], { env: { ...base, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });
   child.stdout!.on('data', (d) => (out += d));
   child.stderr!.on('data', (d) => (out += d));
@@ -39,10 +46,18 @@ function serve(env: Record<string, string | undefined>): { child: ChildProcess; 
 
 describe('npm run serve', () => {
   it('names every missing or unsafe setting on its own line and does not start', async () => {
-    const s = serve({ DATABASE_URL: 'postgres://x@127.0.0.1:1/x', SMTP_HOST: '127.0.0.1', STORAGE: 's3', PAYMENTS_API_BASE: 'http://127.0.0.1:9', SMS_ACCOUNT_SID: 'AC0', SMS_API_BASE: 'http://127.0.0.1:9' });
+    const s = serve({
+      DATABASE_URL: 'postgres://x@127.0.0.1:1/x',
+      SMTP_HOST: '127.0.0.1',
+      STORAGE: 's3',
+      PAYMENTS_API_BASE: 'http://127.0.0.1:9',
+      SMS_ACCOUNT_SID: 'AC0',
+      SMS_API_BASE: 'http://127.0.0.1:9',
+    });
     expect(await s.exited).toBe(1);
     const lines = s.out();
-    for (const setting of ['BETTER_AUTH_URL', 'BETTER_AUTH_SECRET', 'SMTP_HOST', 'S3_BUCKET', 'PAYMENTS_API_BASE', 'SMS_AUTH_TOKEN', 'SMS_API_BASE']) expect(lines).toMatch(new RegExp(`^  ${setting}: `, 'm'));
+    for (const setting of ['BETTER_AUTH_URL', 'BETTER_AUTH_SECRET', 'SMTP_HOST', 'S3_BUCKET', 'PAYMENTS_API_BASE', 'SMS_AUTH_TOKEN', 'SMS_API_BASE'])
+      expect(lines).toMatch(new RegExp(`^  ${setting}: `, 'm'));
     expect(serveProblems({ BETTER_AUTH_URL: 'https://shop.example.com', SMTP_HOST: 'mail.example.com' })).toEqual([]);
   });
 
@@ -53,7 +68,10 @@ describe('npm run serve', () => {
     const base = `http://127.0.0.1:${port}`;
     const s = serve({ PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir, BETTER_AUTH_URL: base, SMTP_HOST: 'mail.invalid', DEMO_DATA: 'off' });
     for (let i = 0; ; i += 1) {
-      const ok = await fetch(`${base}/api/health`).then((r) => r.status === 200, () => false);
+      const ok = await fetch(`${base}/api/health`).then(
+        (r) => r.status === 200,
+        () => false,
+      );
       if (ok) break;
       if (i > 1800) throw new Error(`serve did not answer: ${s.out()}`);
       await new Promise((r) => setTimeout(r, 100));
@@ -61,11 +79,15 @@ describe('npm run serve', () => {
     // A calculator request whose body is half sent when the signal arrives.
     const body = JSON.stringify({ kind: 'cuff', unit: 'in', cuffDepth: '1 1/2', available: '5' });
     const answered = new Promise<{ status: number; text: string }>((resolve, reject) => {
-      const req = request(`${base}/api/plan`, { method: 'POST', headers: { 'content-type': 'application/json', 'content-length': Buffer.byteLength(body) } }, (res) => {
-        let text = '';
-        res.on('data', (d) => (text += d));
-        res.on('end', () => resolve({ status: res.statusCode!, text }));
-      });
+      const req = request(
+        `${base}/api/plan`,
+        { method: 'POST', headers: { 'content-type': 'application/json', 'content-length': Buffer.byteLength(body) } },
+        (res) => {
+          let text = '';
+          res.on('data', (d) => (text += d));
+          res.on('end', () => resolve({ status: res.statusCode!, text }));
+        },
+      );
       req.on('error', reject);
       req.write(body.slice(0, 10));
       setTimeout(() => {

@@ -92,7 +92,10 @@ describe('POST /api/sms/status', () => {
     const phone = freshPhone();
     const id = await readyTicketFor(lead, { name: 'Maud Lintott', phone, contactBy: 'text' });
     const mine = (await call('POST', `/api/tickets/${id}/notices`, { cookie: lead, body: { kind: 'ready' } })).body;
-    await until(async () => (await call('GET', `/api/tickets/${id}/notices`, { cookie: lead })).body[0].delivery, (d) => d === 'delivered');
+    await until(
+      async () => (await call('GET', `/api/tickets/${id}/notices`, { cookie: lead })).body[0].delivery,
+      (d) => d === 'delivered',
+    );
 
     const fields = { MessageSid: mine.providerId, MessageStatus: 'failed', ErrorCode: '30008' };
     expect((await report(mine.id, fields, null)).status).toBe(403);
@@ -104,7 +107,10 @@ describe('POST /api/sms/status', () => {
     const otherPhone = freshPhone();
     const otherTicket = await readyTicketFor(other.cookie, { name: 'Osric Pell', phone: otherPhone, contactBy: 'text' });
     const theirs = (await call('POST', `/api/tickets/${otherTicket}/notices`, { cookie: other.cookie, body: { kind: 'ready' } })).body;
-    await until(async () => (await call('GET', `/api/tickets/${otherTicket}/notices`, { cookie: other.cookie })).body[0].delivery, (d) => d === 'delivered');
+    await until(
+      async () => (await call('GET', `/api/tickets/${otherTicket}/notices`, { cookie: other.cookie })).body[0].delivery,
+      (d) => d === 'delivered',
+    );
     const replay = await report(theirs.id, fields, token);
     expect(replay).toEqual({ status: 200, body: { received: true, recorded: false } });
     expect((await call('GET', `/api/tickets/${otherTicket}/notices`, { cookie: other.cookie })).body[0].delivery).toBe('delivered');

@@ -17,13 +17,16 @@ interface Operation {
 type Doc = { paths: Record<string, Record<string, Operation>> };
 
 const doc = (await call('GET', '/api/openapi.json')).body as Doc;
-const operations = Object.entries(doc.paths).flatMap(([path, methods]) => Object.entries(methods).map(([method, op]) => ({ path, method: method.toUpperCase(), op })));
+const operations = Object.entries(doc.paths).flatMap(([path, methods]) =>
+  Object.entries(methods).map(([method, op]) => ({ path, method: method.toUpperCase(), op })),
+);
 
 const permissionsOf = (op: Operation) => (op['x-permission'] === 'public' ? [] : op['x-permission'].map((s) => s.split('.') as unknown as Permission));
 /** A role let in (granted one of the permissions: the route narrows later), or null signed out. */
 const admitted = (op: Operation): Role | null => (op['x-permission'] === 'public' ? null : ROLES.find((r) => permissionsOf(op).some((p) => can(r, p)))!);
 /** A demo role granted none of the permissions, when there is one. */
-const refused = (op: Operation): Role | undefined => (op['x-permission'] === 'public' ? undefined : ROLES.find((r) => permissionsOf(op).every((p) => !can(r, p))));
+const refused = (op: Operation): Role | undefined =>
+  op['x-permission'] === 'public' ? undefined : ROLES.find((r) => permissionsOf(op).every((p) => !can(r, p)));
 
 // Ids that name nothing: the checks above all come before any row is looked up.
 const NOBODY = '00000000-0000-4000-8000-000000000000';

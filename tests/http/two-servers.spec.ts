@@ -80,7 +80,10 @@ async function startApp(name: 'A' | 'B', smtpPort: number): Promise<App> {
   let out = '';
   child.stdout!.on('data', (d) => (out += d));
   for (let i = 0; ; i += 1) {
-    const ok = await fetch(`${base}/api/health`).then((r) => r.status === 200, () => false);
+    const ok = await fetch(`${base}/api/health`).then(
+      (r) => r.status === 200,
+      () => false,
+    );
     if (ok && out.includes('Database ready')) break;
     if (i > 1800) throw new Error(`server ${name} did not come up`);
     await sleep(100);
@@ -114,7 +117,11 @@ async function signIn(app: App, email: string, password = DEMO_PASSWORD) {
   return call(app, 'POST', '/api/auth/sign-in/email', { body: { email, password } });
 }
 
-const cookieOf = (headers: Headers) => headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+const cookieOf = (headers: Headers) =>
+  headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
 
 /** The demo shop's id. */
 async function demoShop(): Promise<string> {
@@ -127,8 +134,14 @@ async function freshGarment(status: (typeof garments.$inferInsert)['status'] = '
   const shopId = await demoShop();
   const [c] = await handle.db.insert(customers).values({ shopId, name: 'Odile Pairweather', email }).returning();
   const number = 50_000 + Math.floor(Math.random() * 40_000);
-  const [t] = await handle.db.insert(tickets).values({ shopId, number, customerId: c!.id, status: status === 'ready' ? 'ready' : 'received' }).returning();
-  const [g] = await handle.db.insert(garments).values({ shopId, ticketId: t!.id, description: 'Grey flannel', finish: 'cuff', position: 0, status }).returning();
+  const [t] = await handle.db
+    .insert(tickets)
+    .values({ shopId, number, customerId: c!.id, status: status === 'ready' ? 'ready' : 'received' })
+    .returning();
+  const [g] = await handle.db
+    .insert(garments)
+    .values({ shopId, ticketId: t!.id, description: 'Grey flannel', finish: 'cuff', position: 0, status })
+    .returning();
   return { shopId, ticketId: t!.id, garmentId: g!.id };
 }
 
@@ -206,7 +219,12 @@ describe.skipIf(!serverUrl)('two app servers on one PostgreSQL', () => {
     expect((await fetch(`${apps.A.base}/api/photos/${photo!.id}`, { headers: { cookie } })).status).toBe(404);
     // Nothing of the shop's photos is left in the bucket.
     const { S3Client, ListObjectsV2Command } = await import('@aws-sdk/client-s3');
-    const client = new S3Client({ region: 'us-east-1', endpoint: s3.env.S3_ENDPOINT, forcePathStyle: true, credentials: { accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' } });
+    const client = new S3Client({
+      region: 'us-east-1',
+      endpoint: s3.env.S3_ENDPOINT,
+      forcePathStyle: true,
+      credentials: { accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' },
+    });
     const listed = await client.send(new ListObjectsV2Command({ Bucket: s3.env.S3_BUCKET }));
     expect((listed.Contents ?? []).map((o) => o.Key)).toEqual([]);
   });
@@ -231,7 +249,19 @@ describe.skipIf(!serverUrl)('two app servers on one PostgreSQL', () => {
   it('a notice falling due while both servers run is sent exactly once', async () => {
     const to = 'odile.due@example.com';
     const { shopId, ticketId } = await freshGarment('ready', to);
-    await handle.db.insert(notices).values({ shopId, ticketId, kind: 'ready', to, subject: 'Ready to collect', body: 'Ready.', status: 'failed', attempts: 1, nextAttemptAt: new Date(Date.now() + 1500) });
+    await handle.db
+      .insert(notices)
+      .values({
+        shopId,
+        ticketId,
+        kind: 'ready',
+        to,
+        subject: 'Ready to collect',
+        body: 'Ready.',
+        status: 'failed',
+        attempts: 1,
+        nextAttemptAt: new Date(Date.now() + 1500),
+      });
     for (let i = 0; i < 200; i += 1) {
       const [n] = await handle.db.select({ status: notices.status }).from(notices).where(eq(notices.ticketId, ticketId));
       if (n!.status === 'sent') break;
@@ -255,7 +285,10 @@ describe.skipIf(!serverUrl)('two app servers on one PostgreSQL', () => {
     void call(apps.A, 'POST', `/api/tickets/${ticketId}/notices`, { cookie: counter, body: { kind: 'ready' } }).catch(() => {});
     // Wait until A has claimed the send (attempts 1, not sent), then kill it.
     for (let i = 0; ; i += 1) {
-      const [n] = await handle.db.select().from(notices).where(and(eq(notices.ticketId, ticketId), eq(notices.kind, 'ready')));
+      const [n] = await handle.db
+        .select()
+        .from(notices)
+        .where(and(eq(notices.ticketId, ticketId), eq(notices.kind, 'ready')));
       if (n && n.attempts === 1) break;
       if (i > 300) throw new Error('A never claimed the notice');
       await sleep(50);

@@ -15,7 +15,9 @@ const configPath = join(root, '.dependency-cruiser.cjs');
 const cli = join(root, 'node_modules/dependency-cruiser/bin/dependency-cruise.mjs');
 
 const files: Record<string, string> = {
-  'tsconfig.json': JSON.stringify({ compilerOptions: { baseUrl: '.', paths: { '@/*': ['src/*'] }, jsx: 'react-jsx', module: 'esnext', moduleResolution: 'bundler' } }),
+  'tsconfig.json': JSON.stringify({
+    compilerOptions: { baseUrl: '.', paths: { '@/*': ['src/*'] }, jsx: 'react-jsx', module: 'esnext', moduleResolution: 'bundler' },
+  }),
   'src/lib/allowance/len.ts': 'export const len = 1;\n',
   'src/lib/allowance/plan.ts': [
     "import { len } from './len';", // allowed: its own file

@@ -33,7 +33,14 @@ describe('leg plan requests', () => {
     expect(legTaperRequest(cuff, 'in', 8, { letDown: true })).toMatchObject({ kind: 'taper', widthAtCut: '7 3/8', oldCrease: '3' });
     const hem = { ...cuff, finish: 'plain' as const };
     expect(legHemTaperRequest(hem, 'in')).not.toHaveProperty('widthAtCut');
-    expect(legHemTaperRequest(hem, 'in', 8, { letDown: true })).toEqual({ unit: 'in', precision: 8, widthAtEdge: '7', widthAbove: '8', heightAbove: '24', widthAtCut: '7 3/8' });
+    expect(legHemTaperRequest(hem, 'in', 8, { letDown: true })).toEqual({
+      unit: 'in',
+      precision: 8,
+      widthAtEdge: '7',
+      widthAbove: '8',
+      heightAbove: '24',
+      widthAtCut: '7 3/8',
+    });
     // A draft kept from before the field existed has no widthAtCut at all.
     const { widthAtCut: _w, ...old } = hem;
     expect(legHemTaperRequest(old as typeof hem, 'in', 8, { letDown: true })).not.toHaveProperty('widthAtCut');

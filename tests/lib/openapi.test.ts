@@ -25,7 +25,11 @@ describe('openApiDocument', () => {
   const doc = openApiDocument(
     [
       { file: 'presets/index.ts', method: 'POST', spec },
-      { file: 'auth/[...all].ts', method: 'ALL', spec: { summary: "better-auth's endpoints.", permission: 'public', examples: [{ summary: 'Session', params: { all: 'get-session' } }] } },
+      {
+        file: 'auth/[...all].ts',
+        method: 'ALL',
+        spec: { summary: "better-auth's endpoints.", permission: 'public', examples: [{ summary: 'Session', params: { all: 'get-session' } }] },
+      },
     ],
     '9.9.9',
   );

@@ -32,7 +32,10 @@ const length = fc.oneof(
 
 const body = fc.record(
   {
-    kind: fc.oneof({ weight: 8, arbitrary: fc.constantFrom('cuff', 'hem', 'taper', 'hem-taper') }, { weight: 1, arbitrary: fc.constantFrom(undefined, 'sleeve', 3) }),
+    kind: fc.oneof(
+      { weight: 8, arbitrary: fc.constantFrom('cuff', 'hem', 'taper', 'hem-taper') },
+      { weight: 1, arbitrary: fc.constantFrom(undefined, 'sleeve', 3) },
+    ),
     unit: fc.oneof({ weight: 8, arbitrary: fc.constantFrom('in', 'cm', 'mm') }, { weight: 1, arbitrary: fc.constantFrom(undefined, 'ft', 'IN') }),
     precision: fc.constantFrom(undefined, 8, 16, 32, 4, '8'),
     ...Object.fromEntries(Object.keys(PLAN_FIELD_NAMES).map((k) => [k, length])),
@@ -55,10 +58,22 @@ describe('the calculator’s check answers as the server’s schema does', () =>
       [{ kind: 'cuff', unit: 'in', cuffDepth: '' }, 'cuffDepth', 'Enter the cuff depth.'],
       [{ kind: 'cuff', unit: 'in', cuffDepth: '    ' }, 'cuffDepth', 'Enter the cuff depth.'],
       [{ kind: 'cuff', unit: 'in', cuffDepth: '1 1/2 + '.repeat(6) }, 'cuffDepth', 'Cuff depth is too long: type a length such as 1 1/2.'],
-      [{ kind: 'cuff', unit: 'mm', cuffDepth: '40', available: 'a\u0000' }, 'available', 'Remove the hidden character (a NUL or a broken emoji) from this field.'],
+      [
+        { kind: 'cuff', unit: 'mm', cuffDepth: '40', available: 'a\u0000' },
+        'available',
+        'Remove the hidden character (a NUL or a broken emoji) from this field.',
+      ],
       [{ kind: 'hem', unit: 'cm', slope: 'x'.repeat(41) }, 'slope', 'Slope is too long: type a length such as 1 1/2.'],
-      [{ kind: 'taper', unit: 'in', cuffDepth: '1 1/2', widthAtEdge: '8', widthAbove: '10', heightAbove: '' }, 'heightAbove', 'Enter the height above the edge.'],
-      [{ kind: 'taper', unit: 'in', cuffDepth: '1 1/2', widthAtEdge: '8', widthAbove: '10', heightAbove: '12', seamAllowance: 'y'.repeat(45) }, 'seamAllowance', 'Seam allowance is too long: type a length such as 1 1/2.'],
+      [
+        { kind: 'taper', unit: 'in', cuffDepth: '1 1/2', widthAtEdge: '8', widthAbove: '10', heightAbove: '' },
+        'heightAbove',
+        'Enter the height above the edge.',
+      ],
+      [
+        { kind: 'taper', unit: 'in', cuffDepth: '1 1/2', widthAtEdge: '8', widthAbove: '10', heightAbove: '12', seamAllowance: 'y'.repeat(45) },
+        'seamAllowance',
+        'Seam allowance is too long: type a length such as 1 1/2.',
+      ],
     ];
     for (const [b, field, message] of cases) {
       const c = checkPlanRequest(b);

@@ -5,8 +5,16 @@ import type { QueueRow } from '@/lib/bench-types';
 import { DEFAULT_QUEUE_FILTER, filterQueue } from '@/lib/queue-filter';
 
 const row = (id: string, over: Partial<QueueRow>): QueueRow => ({
-  id, description: 'Trousers', status: 'received', dueOn: null, assigneeId: null, assigneeName: null,
-  ticketId: `t-${id}`, ticketNumber: 1000, customerName: null, ...over,
+  id,
+  description: 'Trousers',
+  status: 'received',
+  dueOn: null,
+  assigneeId: null,
+  assigneeName: null,
+  ticketId: `t-${id}`,
+  ticketNumber: 1000,
+  customerName: null,
+  ...over,
 });
 const ROWS = [
   row('a', { ticketNumber: 1001, customerName: 'Quenby Marsh', customerPhone: '(555) 014-7788', description: 'Navy wool trousers, cuffs' }),
@@ -14,7 +22,10 @@ const ROWS = [
   // An apprentice's row carries no phone at all.
   row('c', { ticketNumber: 1003, customerName: 'Brannoc Hale', description: 'Linen trousers' }),
 ];
-const found = (search: string) => filterQueue(ROWS, { ...DEFAULT_QUEUE_FILTER, search }, 'me', '2026-12-01').map((r) => r.id).sort();
+const found = (search: string) =>
+  filterQueue(ROWS, { ...DEFAULT_QUEUE_FILTER, search }, 'me', '2026-12-01')
+    .map((r) => r.id)
+    .sort();
 
 describe('queue search', () => {
   it('finds by the customer phone, typed with or without spaces and dashes', () => {

@@ -5,8 +5,17 @@ import type { QueueRow } from '@/lib/bench-types';
 import { DEFAULT_QUEUE_FILTER, filterQueue, queueSection, readyAge, workDueState } from '@/lib/queue-filter';
 
 const row = (id: string, over: Partial<QueueRow>): QueueRow => ({
-  id, description: 'Trousers', status: 'received', dueOn: null, assigneeId: null, assigneeName: null,
-  ticketId: `t-${id}`, ticketNumber: 1000, customerName: null, readyAt: null, ...over,
+  id,
+  description: 'Trousers',
+  status: 'received',
+  dueOn: null,
+  assigneeId: null,
+  assigneeName: null,
+  ticketId: `t-${id}`,
+  ticketNumber: 1000,
+  customerName: null,
+  readyAt: null,
+  ...over,
 });
 const TODAY = '2026-12-03';
 const ROWS = [

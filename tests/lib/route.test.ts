@@ -20,7 +20,12 @@ async function answer(res: Response | Promise<Response>) {
 }
 
 const saveScale = route(
-  { summary: 'Saves a scale.', permission: ['settings', 'update'], body: z.object({ scale: z.enum(['in8', 'mm'], { error: 'Choose a scale.' }) }), status: 201 },
+  {
+    summary: 'Saves a scale.',
+    permission: ['settings', 'update'],
+    body: z.object({ scale: z.enum(['in8', 'mm'], { error: 'Choose a scale.' }) }),
+    status: 201,
+  },
   ({ actor, body, params }) => ({ by: actor.role, scale: body.scale, id: params.id }),
 );
 
@@ -39,14 +44,20 @@ describe('route(): checks in one order, refusals in one shape', () => {
   it('400 { error } for a body that is not JSON; 422 { error, issues } for one the schema refuses', async () => {
     const unreadable = await answer(saveScale(ctx(member('lead'), '{"scale":')));
     expect(unreadable).toEqual({ status: 400, body: { error: 'Send a JSON body.' } });
-    expect(await answer(saveScale(ctx(member('lead'), '{"scale":"cubits"}')))).toEqual({ status: 422, body: { error: 'Choose a scale.', issues: { scale: 'Choose a scale.' } } });
+    expect(await answer(saveScale(ctx(member('lead'), '{"scale":"cubits"}')))).toEqual({
+      status: 422,
+      body: { error: 'Choose a scale.', issues: { scale: 'Choose a scale.' } },
+    });
     const notAnObject = await answer(saveScale(ctx(member('lead'), '42')));
     expect(notAnObject.status).toBe(422);
     expect(Object.keys(notAnObject.body.issues)).toEqual(['_']);
   });
 
   it('422 naming the query field the schema refuses, before the body', async () => {
-    const read = route({ summary: 'Reads.', permission: 'public', query: z.object({ period: z.enum(['week', '4w']).default('week') }), body: z.object({}) }, ({ query }) => query);
+    const read = route(
+      { summary: 'Reads.', permission: 'public', query: z.object({ period: z.enum(['week', '4w']).default('week') }), body: z.object({}) },
+      ({ query }) => query,
+    );
     expect(await answer(read(ctx(signedOut, '{}')))).toEqual({ status: 200, body: { period: 'week' } });
     const bad = await answer(read(ctx(signedOut, 'not json', '?period=year')));
     expect(bad.status).toBe(422);
@@ -54,17 +65,37 @@ describe('route(): checks in one order, refusals in one shape', () => {
   });
 
   it('any one of several permissions lets in; demand() narrows with a 403; a ServiceError keeps its status', async () => {
-    const move = route({ summary: 'Moves.', permission: [['tickets', 'advance'], ['tickets', 'pickup']], body: z.object({ to: z.string() }) }, ({ actor, body }) => {
-      demand(actor, ['tickets', body.to === 'collected' ? 'pickup' : 'advance']);
-      if (body.to === 'nowhere') throw new ServiceError(409, 'It moved meanwhile.');
-      return { moved: body.to };
-    });
+    const move = route(
+      {
+        summary: 'Moves.',
+        permission: [
+          ['tickets', 'advance'],
+          ['tickets', 'pickup'],
+        ],
+        body: z.object({ to: z.string() }),
+      },
+      ({ actor, body }) => {
+        demand(actor, ['tickets', body.to === 'collected' ? 'pickup' : 'advance']);
+        if (body.to === 'nowhere') throw new ServiceError(409, 'It moved meanwhile.');
+        return { moved: body.to };
+      },
+    );
     expect((await answer(move(ctx(member('counter'), '{"to":"collected"}')))).status).toBe(200);
     expect((await answer(move(ctx(member('counter'), '{"to":"cut"}')))).status).toBe(403);
     expect(await answer(move(ctx(member('lead'), '{"to":"nowhere"}')))).toEqual({ status: 409, body: { error: 'It moved meanwhile.' } });
     expect((await answer(move(ctx(member('apprentice'), '{"to":"cut"}')))).status).toBe(200);
     // Neither permission (the tailor has neither settings one): refused at the door, body unread.
-    const settings = route({ summary: 'Settles.', permission: [['settings', 'update'], ['staff', 'invite']], body: z.object({}) }, () => ({}));
+    const settings = route(
+      {
+        summary: 'Settles.',
+        permission: [
+          ['settings', 'update'],
+          ['staff', 'invite'],
+        ],
+        body: z.object({}),
+      },
+      () => ({}),
+    );
     expect((await answer(settings(ctx(member('tailor'), 'not json')))).status).toBe(403);
   });
 

@@ -9,7 +9,13 @@ let stripe: Stripe;
 
 beforeAll(async () => {
   const { startPaymentsFake } = await import('../../scripts/payments-fake.mjs');
-  fake = (await startPaymentsFake({ port: 0, apiKey: 'sk_test_fake_only', webhookSecret: 'whsec_fake_only', webhookUrl: 'http://127.0.0.1:9/none', quiet: true })) as Fake;
+  fake = (await startPaymentsFake({
+    port: 0,
+    apiKey: 'sk_test_fake_only',
+    webhookSecret: 'whsec_fake_only',
+    webhookUrl: 'http://127.0.0.1:9/none',
+    quiet: true,
+  })) as Fake;
   const url = new URL(fake.base);
   stripe = new Stripe('sk_test_fake_only', { host: url.hostname, port: Number(url.port), protocol: 'http', maxNetworkRetries: 0 });
 });

@@ -72,7 +72,11 @@ describe('a taken port', () => {
 
 describe('a shared database', () => {
   it('npm start refuses DATABASE_URL without BETTER_AUTH_SECRET, in one line', async () => {
-    const r = await run('scripts/start.mjs', { DATABASE_URL: 'postgres://shop@127.0.0.1:9/cuffwright', SMTP_HOST: 'mail.example.org', PAYMENTS_API_KEY: 'sk_test_unused' });
+    const r = await run('scripts/start.mjs', {
+      DATABASE_URL: 'postgres://shop@127.0.0.1:9/cuffwright',
+      SMTP_HOST: 'mail.example.org',
+      PAYMENTS_API_KEY: 'sk_test_unused',
+    });
     expect(r.code).toBe(1);
     expectOneLine(r.stderr, 'BETTER_AUTH_SECRET');
   });

@@ -59,7 +59,9 @@ describe('sign-up', () => {
   });
 
   it('refuses an e-mail that already has an account', async () => {
-    await expect(createShop({ shopName: 'Again', name: 'Fern', email: 'fern@example.com', password: 'a-long-password' })).rejects.toMatchObject({ status: 409 });
+    await expect(createShop({ shopName: 'Again', name: 'Fern', email: 'fern@example.com', password: 'a-long-password' })).rejects.toMatchObject({
+      status: 409,
+    });
     const [n] = await db.select({ n: sql<number>`count(*)::int` }).from(organization).where(eq(organization.name, 'Again'));
     expect(n!.n).toBe(0);
   });
@@ -114,7 +116,10 @@ describe('customers', () => {
   it("are listed only to their own shop's members", async () => {
     const a = await makeShop('Cust A', ['counter']);
     const b = await makeShop('Cust B', ['counter']);
-    await db.insert(customers).values([{ shopId: a.shopId, name: 'Only A' }, { shopId: b.shopId, name: 'Only B' }]);
+    await db.insert(customers).values([
+      { shopId: a.shopId, name: 'Only A' },
+      { shopId: b.shopId, name: 'Only B' },
+    ]);
     expect((await listCustomers(a.counter)).map((c) => c.name)).toEqual(['Only A']);
     expect((await listCustomers(b.counter)).map((c) => c.name)).toEqual(['Only B']);
   });

@@ -9,10 +9,12 @@ vi.mock('@/db', () => import('../db/db-mock'));
 const failing = vi.hoisted(() => ({ on: false }));
 vi.mock('@/services/audit', async (importOriginal) => {
   const real = await importOriginal<typeof import('@/services/audit')>();
-  const gate = <A extends unknown[], R>(fn: (...args: A) => R) => (...args: A): R => {
-    if (failing.on) throw new Error('audit entry lost');
-    return fn(...args);
-  };
+  const gate =
+    <A extends unknown[], R>(fn: (...args: A) => R) =>
+    (...args: A): R => {
+      if (failing.on) throw new Error('audit entry lost');
+      return fn(...args);
+    };
   return { ...real, audit: gate(real.audit), auditMany: gate(real.auditMany) };
 });
 

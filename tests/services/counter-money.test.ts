@@ -6,7 +6,17 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { and, eq } from 'drizzle-orm';
 import type { Shop } from './fixtures';
 
-vi.mock('astro:env/server', () => ({ BODY_IDLE_SECONDS: 20, PAYMENTS_API_KEY: undefined, PAYMENTS_API_BASE: undefined, PAYMENTS_WEBHOOK_SECRET: undefined, SMS_ACCOUNT_SID: undefined, SMS_AUTH_TOKEN: undefined, SMS_FROM: undefined, SMS_API_BASE: undefined, BETTER_AUTH_URL: 'http://localhost:4321' }));
+vi.mock('astro:env/server', () => ({
+  BODY_IDLE_SECONDS: 20,
+  PAYMENTS_API_KEY: undefined,
+  PAYMENTS_API_BASE: undefined,
+  PAYMENTS_WEBHOOK_SECRET: undefined,
+  SMS_ACCOUNT_SID: undefined,
+  SMS_AUTH_TOKEN: undefined,
+  SMS_FROM: undefined,
+  SMS_API_BASE: undefined,
+  BETTER_AUTH_URL: 'http://localhost:4321',
+}));
 vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
@@ -103,8 +113,14 @@ describe('a wrong line', () => {
     expect([voided.voidReason, voided.voidedById]).toEqual(['No old cuff on these', a.counter.userId]);
     const s = await pay.counterSummary(a.counter, t.id);
     expect(s.total).toBe(1800);
-    expect(s.lines.map((l) => [l.key, l.voidReason])).toEqual([['plain-hem', null], ['cuff-remake', 'No old cuff on these']]);
-    const events = await db.select().from(auditEvents).where(and(eq(auditEvents.subject, t.id), eq(auditEvents.action, 'prices.line-voided')));
+    expect(s.lines.map((l) => [l.key, l.voidReason])).toEqual([
+      ['plain-hem', null],
+      ['cuff-remake', 'No old cuff on these'],
+    ]);
+    const events = await db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.subject, t.id), eq(auditEvents.action, 'prices.line-voided')));
     expect(events.map((e) => (e.detail as { reason: string }).reason)).toEqual(['No old cuff on these']);
     await expect(prices.voidLine(a.counter, t.id, wrong.id, { reason: 'again' })).rejects.toMatchObject({ status: 409 });
   });

@@ -4,7 +4,18 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { sql } from 'drizzle-orm';
 import type { Shop } from './fixtures';
 
-vi.mock('astro:env/server', () => ({ BODY_IDLE_SECONDS: 20, NOTICE_LEASE_SECONDS: 180, PAYMENTS_API_KEY: undefined, PAYMENTS_API_BASE: undefined, PAYMENTS_WEBHOOK_SECRET: undefined, SMS_ACCOUNT_SID: undefined, SMS_AUTH_TOKEN: undefined, SMS_FROM: undefined, SMS_API_BASE: undefined, BETTER_AUTH_URL: 'http://localhost:4321' }));
+vi.mock('astro:env/server', () => ({
+  BODY_IDLE_SECONDS: 20,
+  NOTICE_LEASE_SECONDS: 180,
+  PAYMENTS_API_KEY: undefined,
+  PAYMENTS_API_BASE: undefined,
+  PAYMENTS_WEBHOOK_SECRET: undefined,
+  SMS_ACCOUNT_SID: undefined,
+  SMS_AUTH_TOKEN: undefined,
+  SMS_FROM: undefined,
+  SMS_API_BASE: undefined,
+  BETTER_AUTH_URL: 'http://localhost:4321',
+}));
 vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
@@ -50,7 +61,10 @@ describe('pickup against a price change at the same moment', () => {
       };
       const results = await Promise.allSettled([pay.pickUp(a.counter, t.id), lateLine()]);
       const after = await pay.counterSummary(a.counter, t.id);
-      expect(results.some((r) => r.status === 'fulfilled'), `round ${round}`).toBe(true);
+      expect(
+        results.some((r) => r.status === 'fulfilled'),
+        `round ${round}`,
+      ).toBe(true);
       expect(after.ticket.status === 'collected' && after.due > 0, `round ${round}: collected with ${after.due} due`).toBe(false);
     }
   });

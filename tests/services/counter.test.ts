@@ -14,7 +14,18 @@ import Stripe from 'stripe';
 const WEBHOOK_SECRET = 'whsec_counter_test_secret';
 const mailTarget = vi.hoisted(() => ({ port: 1 }));
 
-vi.mock('astro:env/server', () => ({ BODY_IDLE_SECONDS: 20, NOTICE_LEASE_SECONDS: 180, PAYMENTS_API_KEY: undefined, PAYMENTS_API_BASE: undefined, PAYMENTS_WEBHOOK_SECRET: 'whsec_counter_test_secret', SMS_ACCOUNT_SID: undefined, SMS_AUTH_TOKEN: undefined, SMS_FROM: undefined, SMS_API_BASE: undefined, BETTER_AUTH_URL: 'http://localhost:4321' }));
+vi.mock('astro:env/server', () => ({
+  BODY_IDLE_SECONDS: 20,
+  NOTICE_LEASE_SECONDS: 180,
+  PAYMENTS_API_KEY: undefined,
+  PAYMENTS_API_BASE: undefined,
+  PAYMENTS_WEBHOOK_SECRET: 'whsec_counter_test_secret',
+  SMS_ACCOUNT_SID: undefined,
+  SMS_AUTH_TOKEN: undefined,
+  SMS_FROM: undefined,
+  SMS_API_BASE: undefined,
+  BETTER_AUTH_URL: 'http://localhost:4321',
+}));
 // The real mail path minus astro:env: nodemailer over SMTP to whatever port the test points at.
 vi.mock('@/lib/mail', () => ({
   sendMail: async (m: { to: string; subject: string; text: string }) => {
@@ -40,9 +51,15 @@ const signer = new Stripe('sk_test_signing_only');
 const LIST = TEST_PRICES;
 
 async function ticketFor(shop: Shop, opts: { status?: 'received' | 'ready'; email?: string | null } = {}) {
-  const [c] = await db.insert(customers).values({ shopId: shop.shopId, name: 'Wendel Orrin', email: opts.email === undefined ? 'wendel@example.com' : opts.email }).returning();
+  const [c] = await db
+    .insert(customers)
+    .values({ shopId: shop.shopId, name: 'Wendel Orrin', email: opts.email === undefined ? 'wendel@example.com' : opts.email })
+    .returning();
   ticketNo += 1;
-  const [t] = await db.insert(tickets).values({ shopId: shop.shopId, number: ticketNo, customerId: c!.id, status: opts.status ?? 'received' }).returning();
+  const [t] = await db
+    .insert(tickets)
+    .values({ shopId: shop.shopId, number: ticketNo, customerId: c!.id, status: opts.status ?? 'received' })
+    .returning();
   return t!;
 }
 
@@ -58,7 +75,12 @@ function signedEvent(event: object, secret = WEBHOOK_SECRET, timestamp?: number)
 }
 
 function completed(sessionId: string, amount: number, eventId = `evt_${Math.random().toString(36).slice(2)}`) {
-  return { id: eventId, object: 'event', type: 'checkout.session.completed', data: { object: { id: sessionId, object: 'checkout.session', payment_status: 'paid', amount_total: amount, currency: 'eur' } } };
+  return {
+    id: eventId,
+    object: 'event',
+    type: 'checkout.session.completed',
+    data: { object: { id: sessionId, object: 'checkout.session', payment_status: 'paid', amount_total: amount, currency: 'eur' } },
+  };
 }
 
 async function openLink(shop: Shop, ticketId: string, amountMinor: number) {
@@ -80,7 +102,13 @@ function freePort(): Promise<number> {
 beforeAll(async () => {
   a = await makeShop('Fenmarsh Alterations');
   b = await makeShop('Other Hems');
-  await prices.savePriceList(a.lead, { currency: 'EUR', hours: 'Tue–Sat 9:00–17:30', location: '4 Tallow Lane, Lower Fenmarsh', autoReadyNotice: false, items: [...LIST] });
+  await prices.savePriceList(a.lead, {
+    currency: 'EUR',
+    hours: 'Tue–Sat 9:00–17:30',
+    location: '4 Tallow Lane, Lower Fenmarsh',
+    autoReadyNotice: false,
+    items: [...LIST],
+  });
 });
 afterAll(() => handle.close());
 
@@ -100,7 +128,22 @@ describe('price lines', () => {
     const [g1] = await db.insert(garments).values({ shopId: a.shopId, ticketId: t.id, description: 'Navy twill', finish: 'cuff', position: 0 }).returning();
     await db.insert(garments).values({ shopId: a.shopId, ticketId: t.id, description: 'Chinos', finish: 'plain', position: 1 });
     // A leg narrowing 1 in over 10 in towards the hem under a 1½ in cuff: the engine asks for a let-out.
-    await db.insert(measurements).values({ shopId: a.shopId, garmentId: g1!.id, leg: 'left', unit: 'in', finish: 'cuff', values: { cuffDepth: { text: '1 1/2' }, widthAtEdge: { text: '8' }, widthAbove: { text: '9' }, heightAbove: { text: '10' }, seamAllowance: { text: '1' } } });
+    await db
+      .insert(measurements)
+      .values({
+        shopId: a.shopId,
+        garmentId: g1!.id,
+        leg: 'left',
+        unit: 'in',
+        finish: 'cuff',
+        values: {
+          cuffDepth: { text: '1 1/2' },
+          widthAtEdge: { text: '8' },
+          widthAbove: { text: '9' },
+          heightAbove: { text: '10' },
+          seamAllowance: { text: '1' },
+        },
+      });
     const { lines } = await prices.priceFromGarments(a.counter, t.id, { rush: true });
     expect(lines.map((l) => [l.key, l.amountMinor])).toEqual([
       ['cuff-from-hem', 2600],
@@ -232,7 +275,10 @@ describe('ready notices', () => {
     capture = await startMailCapture({ dir, port: 0, quiet: true });
   });
   afterAll(() => capture.close());
-  const captured = () => readdirSync(dir).filter((n) => n.endsWith('.json')).map((n) => JSON.parse(readFileSync(join(dir, n), 'utf8')) as { to: string[]; subject: string; text: string });
+  const captured = () =>
+    readdirSync(dir)
+      .filter((n) => n.endsWith('.json'))
+      .map((n) => JSON.parse(readFileSync(join(dir, n), 'utf8')) as { to: string[]; subject: string; text: string });
 
   it('go out through SMTP with the balance due and the shop hours', async () => {
     mailTarget.port = capture.port;
@@ -277,7 +323,16 @@ describe('ready notices', () => {
     // The row as a server leaves it when killed between claiming the attempt and sending.
     const [claimed] = await db
       .insert(notices)
-      .values({ shopId: a.shopId, ticketId: t.id, kind: 'ready', to: 'orrin.lease@example.com', subject: 'Ready', body: 'Ready.', attempts: 1, nextAttemptAt: new Date(Date.now() + notice.SEND_LEASE_MS) })
+      .values({
+        shopId: a.shopId,
+        ticketId: t.id,
+        kind: 'ready',
+        to: 'orrin.lease@example.com',
+        subject: 'Ready',
+        body: 'Ready.',
+        attempts: 1,
+        nextAttemptAt: new Date(Date.now() + notice.SEND_LEASE_MS),
+      })
       .returning();
     expect(await notice.retryDueNotices(new Date())).toBe(0);
     const later = new Date(Date.now() + notice.SEND_LEASE_MS + 1000);
@@ -305,7 +360,10 @@ describe('ready notices', () => {
   it('go out by themselves for a shop that turned it on, only for tickets ready since then', async () => {
     mailTarget.port = capture.port;
     const before = await ticketFor(a, { status: 'ready', email: 'orrin.before@example.com' });
-    await db.update(tickets).set({ updatedAt: new Date(Date.now() - 3_600_000) }).where(eq(tickets.id, before.id));
+    await db
+      .update(tickets)
+      .set({ updatedAt: new Date(Date.now() - 3_600_000) })
+      .where(eq(tickets.id, before.id));
     await prices.savePriceList(a.lead, { currency: 'EUR', hours: 'Tue–Sat 9:00–17:30', location: '', autoReadyNotice: true, items: [...LIST] });
     const after = await ticketFor(a, { status: 'ready', email: 'orrin.auto@example.com' });
     expect(await notice.sweepReadyTickets()).toBeGreaterThanOrEqual(1);

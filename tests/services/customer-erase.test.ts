@@ -35,12 +35,25 @@ async function customerWithMoney(shop: Shop) {
   await updateCustomer(shop.counter, c.id, { phone: '555 010 4040' });
   const t = await createTicket(shop.counter, { customerId: c.id, garments: [{ description: 'Charcoal flannels' }] });
   const [g] = await garmentsOfTicket(shop.shopId, t.id);
-  await db.insert(priceLines).values({ shopId: shop.shopId, ticketId: t.id, garmentId: g!.id, source: 'list', key: 'plain-hem', label: 'Plain hem', amountMinor: 1800 });
+  await db
+    .insert(priceLines)
+    .values({ shopId: shop.shopId, ticketId: t.id, garmentId: g!.id, source: 'list', key: 'plain-hem', label: 'Plain hem', amountMinor: 1800 });
   await db.insert(payments).values({ shopId: shop.shopId, ticketId: t.id, purpose: 'deposit', method: 'cash', amountMinor: 1000, currency: 'EUR' });
   const key = `${shop.shopId}/erase-${g!.id}.jpg`;
   mkdirSync(join(root, shop.shopId), { recursive: true });
   writeFileSync(join(root, key), 'not really a picture');
-  await db.insert(files).values({ shopId: shop.shopId, ticketId: t.id, garmentId: g!.id, kind: 'fitting-photo', path: key, mimeType: 'image/jpeg', bytes: 20, originalName: 'hem.jpg' });
+  await db
+    .insert(files)
+    .values({
+      shopId: shop.shopId,
+      ticketId: t.id,
+      garmentId: g!.id,
+      kind: 'fitting-photo',
+      path: key,
+      mimeType: 'image/jpeg',
+      bytes: 20,
+      originalName: 'hem.jpg',
+    });
   return { c, t, g: g!, key };
 }
 
@@ -61,7 +74,10 @@ describe('erasing a customer', () => {
     expect(await db.select().from(files).where(eq(files.garmentId, g.id))).toEqual([]);
     expect(existsSync(join(root, key))).toBe(false);
     // The history keeps who changed what, never the old phone number.
-    const history = await db.select().from(auditEvents).where(and(eq(auditEvents.shopId, a.shopId), eq(auditEvents.subject, c.id)));
+    const history = await db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.shopId, a.shopId), eq(auditEvents.subject, c.id)));
     expect(JSON.stringify(history.map((h) => h.detail))).not.toMatch(/555|oriel|Oriel|shorter/);
     expect(history.map((h) => h.action)).toContain('customer.erased');
     const file = await customerFile(a.lead, c.id);

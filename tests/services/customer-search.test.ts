@@ -56,8 +56,14 @@ describe('customer search', () => {
   it("never finds another shop's customers, by name, phone, e-mail or ticket number", async () => {
     for (const q of ['Ivo', '0132288', 'ivo.q@', `T-${ticketNumber}`, 'Marta', '']) {
       const hits = await searchCustomers(stranger.lead, q);
-      expect(hits.map((h) => h.id), q).not.toContain(ivo);
-      expect(hits.every((h) => h.lastTicket === null), q).toBe(true);
+      expect(
+        hits.map((h) => h.id),
+        q,
+      ).not.toContain(ivo);
+      expect(
+        hits.every((h) => h.lastTicket === null),
+        q,
+      ).toBe(true);
     }
     expect(await names(stranger, 'qu')).toEqual(['Ivo Quendell']);
   });

@@ -24,7 +24,10 @@ describe('customers', () => {
     const c = await createCustomer(a.counter, { name: 'Hollis Brandt', phone: '555-0101' });
     const changed = await updateCustomer(a.tailor, c.id, { phone: '555-0102', notes: 'Likes a short break.' });
     expect(changed).toMatchObject({ name: 'Hollis Brandt', phone: '555-0102', notes: 'Likes a short break.' });
-    const [event] = await db.select().from(auditEvents).where(and(eq(auditEvents.subject, c.id), eq(auditEvents.action, 'customer.changed')));
+    const [event] = await db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.subject, c.id), eq(auditEvents.action, 'customer.changed')));
     expect(event!.actorId).toBe(a.tailor.userId);
     expect(event!.detail).toEqual({ phone: { old: '555-0101', new: '555-0102' }, notes: { old: null, new: 'Likes a short break.' } });
   });
@@ -39,12 +42,18 @@ describe('customers', () => {
   it('keep how notices reach them (issue 14): texts need a phone number, kept or sent with it, and the change is audited', async () => {
     const c = await createCustomer(a.counter, { name: 'Wenna Colley', email: 'wenna@example.com' });
     expect(c.contactBy).toBe('email');
-    await expect(updateCustomer(a.counter, c.id, { contactBy: 'text' })).rejects.toMatchObject({ status: 422, message: 'A text message needs a phone number: add one, or choose e-mail.' });
+    await expect(updateCustomer(a.counter, c.id, { contactBy: 'text' })).rejects.toMatchObject({
+      status: 422,
+      message: 'A text message needs a phone number: add one, or choose e-mail.',
+    });
     const both = await updateCustomer(a.counter, c.id, { contactBy: 'both', phone: '07700 900200' });
     expect([both.contactBy, both.phone]).toEqual(['both', '07700 900200']);
     // Taking the phone away from a customer who wants texts is refused the same way.
     await expect(updateCustomer(a.counter, c.id, { phone: null })).rejects.toMatchObject({ status: 422 });
-    const events = await db.select().from(auditEvents).where(and(eq(auditEvents.subject, c.id), eq(auditEvents.action, 'customer.changed')));
+    const events = await db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.subject, c.id), eq(auditEvents.action, 'customer.changed')));
     expect(events.map((e) => e.detail)).toEqual([{ phone: { old: null, new: '07700 900200' }, contactBy: { old: 'email', new: 'both' } }]);
   });
 });

@@ -33,7 +33,16 @@ async function fitted(description: string, existingFinish: Finish, customer: str
   await saveFitting(
     a.tailor,
     garment.id,
-    fittingRequest({ backPin: '33', cuffDepth: '1 3/4', available: '5 1/4', oldCrease: '-2', widthAtEdge: '8', widthAbove: '8 3/4', heightAbove: '6', seamAllowance: '1/2' }),
+    fittingRequest({
+      backPin: '33',
+      cuffDepth: '1 3/4',
+      available: '5 1/4',
+      oldCrease: '-2',
+      widthAtEdge: '8',
+      widthAbove: '8 3/4',
+      heightAbove: '6',
+      seamAllowance: '1/2',
+    }),
   );
   return garment.id;
 }

@@ -32,7 +32,10 @@ let badTicket = 0;
 async function seedImpossibleTaper(garmentId: string) {
   const inch = (text: string) => ({ text, mm: Number(text) * 25.4 });
   for (const leg of ['left', 'right'] as const) {
-    const [row] = await db.select().from(measurements).where(and(eq(measurements.garmentId, garmentId), eq(measurements.leg, leg)));
+    const [row] = await db
+      .select()
+      .from(measurements)
+      .where(and(eq(measurements.garmentId, garmentId), eq(measurements.leg, leg)));
     const values = { ...(row!.values as Record<string, unknown>), widthAtEdge: inch('8'), widthAbove: inch('1'), heightAbove: inch('1') };
     await db.update(measurements).set({ values }).where(eq(measurements.id, row!.id));
   }
@@ -40,12 +43,18 @@ async function seedImpossibleTaper(garmentId: string) {
 
 beforeAll(async () => {
   shop = await makeShop('Refused Sheet Shop');
-  const first = await openTicket(shop, { customer: { name: 'Ansel Brightwater' }, garments: [{ description: 'Impossible taper pair', dueOn: '2026-12-01', assigneeId: shop.tailor.userId }] });
+  const first = await openTicket(shop, {
+    customer: { name: 'Ansel Brightwater' },
+    garments: [{ description: 'Impossible taper pair', dueOn: '2026-12-01', assigneeId: shop.tailor.userId }],
+  });
   bad = first.garment.id;
   badTicket = first.ticket.number;
   await saveFitting(shop.tailor, bad, fittingRequest({ cuffDepth: '1 1/2', available: '5', widthAtEdge: '8', widthAbove: '8 1/2', heightAbove: '6' }));
   await seedImpossibleTaper(bad);
-  const second = await openTicket(shop, { customer: { name: 'Ines Marchbank' }, garments: [{ description: 'Sound pair', dueOn: '2026-12-02', assigneeId: shop.tailor.userId }] });
+  const second = await openTicket(shop, {
+    customer: { name: 'Ines Marchbank' },
+    garments: [{ description: 'Sound pair', dueOn: '2026-12-02', assigneeId: shop.tailor.userId }],
+  });
   good = second.garment.id;
   await saveFitting(shop.tailor, good, fittingRequest({ cuffDepth: '1 1/2', available: '5' }));
 });

@@ -33,7 +33,10 @@ beforeAll(async () => {
 afterAll(() => handle.close());
 
 async function garment(shop = a, extra: { description?: string; dueOn?: string; assigneeId?: string | null } = {}) {
-  const { ticket, garment: g } = await openTicket(shop, { customer: { name: 'Wren Halloway' }, garments: [{ description: extra.description ?? 'Navy suit trousers', dueOn: extra.dueOn, assigneeId: extra.assigneeId ?? null }] });
+  const { ticket, garment: g } = await openTicket(shop, {
+    customer: { name: 'Wren Halloway' },
+    garments: [{ description: extra.description ?? 'Navy suit trousers', dueOn: extra.dueOn, assigneeId: extra.assigneeId ?? null }],
+  });
   return { ticket, g };
 }
 
@@ -200,7 +203,11 @@ describe('the batch for the queue', () => {
   beforeAll(async () => {
     shop = await makeShop('Batch Shop');
     for (const [i, depth] of ['1 1/4', '1 1/2', '1 3/4'].entries()) {
-      const { g } = await garment(shop, { description: `Fitted pair ${i + 1}`, dueOn: `2026-12-0${i + 1}`, assigneeId: i === 2 ? shop.lead.userId : shop.tailor.userId });
+      const { g } = await garment(shop, {
+        description: `Fitted pair ${i + 1}`,
+        dueOn: `2026-12-0${i + 1}`,
+        assigneeId: i === 2 ? shop.lead.userId : shop.tailor.userId,
+      });
       await fit(shop, g.id, 'cuff', { cuffDepth: depth, available: '6' });
       fitted.push(g.id);
     }

@@ -23,7 +23,11 @@ beforeAll(async () => {
     .insert(customers)
     .values(['One', 'Two', 'Three', 'Four'].map((name) => ({ name, shopId: shop.shopId })))
     .returning({ id: customers.id });
-  await seedBenchDemo(shop.shopId, people.map((p) => p.id), { tailor: shop.tailor.userId, apprentice: shop.apprentice.userId, counter: shop.counter.userId });
+  await seedBenchDemo(
+    shop.shopId,
+    people.map((p) => p.id),
+    { tailor: shop.tailor.userId, apprentice: shop.apprentice.userId, counter: shop.counter.userId },
+  );
 });
 afterAll(() => handle.close());
 

@@ -4,7 +4,17 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import type { Shop } from './fixtures';
 import { eq } from 'drizzle-orm';
 
-vi.mock('astro:env/server', () => ({ BODY_IDLE_SECONDS: 20, PAYMENTS_API_KEY: undefined, PAYMENTS_API_BASE: undefined, PAYMENTS_WEBHOOK_SECRET: 'whsec_demo_overview', SMS_ACCOUNT_SID: undefined, SMS_AUTH_TOKEN: undefined, SMS_FROM: undefined, SMS_API_BASE: undefined, BETTER_AUTH_URL: 'http://localhost:4321' }));
+vi.mock('astro:env/server', () => ({
+  BODY_IDLE_SECONDS: 20,
+  PAYMENTS_API_KEY: undefined,
+  PAYMENTS_API_BASE: undefined,
+  PAYMENTS_WEBHOOK_SECRET: 'whsec_demo_overview',
+  SMS_ACCOUNT_SID: undefined,
+  SMS_AUTH_TOKEN: undefined,
+  SMS_FROM: undefined,
+  SMS_API_BASE: undefined,
+  BETTER_AUTH_URL: 'http://localhost:4321',
+}));
 vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
@@ -26,7 +36,11 @@ beforeAll(async () => {
     .values(['One', 'Two', 'Three', 'Four'].map((name) => ({ name, shopId: shop.shopId })))
     .returning({ id: customers.id });
   const ids = { lead: shop.lead.userId, tailor: shop.tailor.userId, apprentice: shop.apprentice.userId, counter: shop.counter.userId };
-  await seedBenchDemo(shop.shopId, people.map((p) => p.id), ids);
+  await seedBenchDemo(
+    shop.shopId,
+    people.map((p) => p.id),
+    ids,
+  );
   await seedCounterDemo(shop.shopId);
   await seedOverviewDemo(shop.shopId, ids, NOW);
 });

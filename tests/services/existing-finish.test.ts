@@ -36,7 +36,11 @@ describe('existing finish at intake', () => {
   it('is a plain hem unless the counter says otherwise, and is kept per garment', async () => {
     const t = await tickets.createTicket(a.counter, {
       customer: { name: 'Odile Farrant' },
-      garments: [{ description: 'Fawn cavalry twill' }, { description: 'Black dinner trousers', existingFinish: 'cuff' }, { description: 'New grey worsted', existingFinish: 'unfinished' }],
+      garments: [
+        { description: 'Fawn cavalry twill' },
+        { description: 'Black dinner trousers', existingFinish: 'cuff' },
+        { description: 'New grey worsted', existingFinish: 'unfinished' },
+      ],
     });
     const ids = (await garmentsSvc.garmentsOfTicket(a.shopId, t.id)).map((g) => g.id);
     const shown = await Promise.all(ids.map((id) => garmentsSvc.getGarment(a.tailor, id)));
@@ -57,7 +61,9 @@ describe('pricing from the garments', () => {
     await fitted(g!.id, 'cuff');
     const { lines, unpriced } = await prices.priceFromGarments(a.counter, t.id, { rush: false });
     expect(unpriced).toEqual([]);
-    expect(lines.map((l) => [l.source, l.key, l.label, l.amountMinor, l.garmentId])).toEqual([['auto', 'cuff-remake', 'Cuff let down and re-made — Brown tweed', 3200, g!.id]]);
+    expect(lines.map((l) => [l.source, l.key, l.label, l.amountMinor, l.garmentId])).toEqual([
+      ['auto', 'cuff-remake', 'Cuff let down and re-made — Brown tweed', 3200, g!.id],
+    ]);
   });
 
   it('keeps the other ways in to their own lines: plain hem or new trousers to a cuff, and an old cuff to a plain hem', async () => {
@@ -92,7 +98,10 @@ describe('pricing from the garments', () => {
     expect(updated.existingFinish).toBe('cuff');
     const repriced = await prices.priceFromGarments(a.counter, t.id, { rush: false });
     expect(repriced.lines.map((l) => [l.key, l.amountMinor])).toEqual([['cuff-remake', 3200]]);
-    const events = await db.select().from(auditEvents).where(and(eq(auditEvents.subject, g!.id), eq(auditEvents.action, 'garment.changed')));
+    const events = await db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.subject, g!.id), eq(auditEvents.action, 'garment.changed')));
     expect(events.map((e) => e.detail)).toEqual([{ existingFinish: { old: 'plain-hem', new: 'cuff' } }]);
 
     // A patch that does not name the finish leaves it alone.

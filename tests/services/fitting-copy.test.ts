@@ -48,7 +48,10 @@ describe('same as last time', () => {
   });
 
   it('copies it into a garment taken in at intake, each value in the history', async () => {
-    const t = await createTicket(a.counter, { customerId, garments: [{ description: 'Olive cords, again', fittingFrom: lastGarment }, { description: 'No fitting yet' }] });
+    const t = await createTicket(a.counter, {
+      customerId,
+      garments: [{ description: 'Olive cords, again', fittingFrom: lastGarment }, { description: 'No fitting yet' }],
+    });
     const [copied, plain] = await garmentsOfTicket(a.shopId, t.id);
     const legs = await legsOf(copied!.id);
     // The copy points at the same preset by id.
@@ -58,7 +61,10 @@ describe('same as last time', () => {
     ]);
     expect(await legsOf(plain!.id)).toEqual([]);
     const history = await auditOf(a.shopId, [copied!.id], ['measurement.changed']);
-    expect(history.filter((h) => h.detail.field === 'backPin').map((h) => h.detail.copiedFrom)).toEqual([ticketLabel(lastTicket, 'Fitting Copy A'), ticketLabel(lastTicket, 'Fitting Copy A')]);
+    expect(history.filter((h) => h.detail.field === 'backPin').map((h) => h.detail.copiedFrom)).toEqual([
+      ticketLabel(lastTicket, 'Fitting Copy A'),
+      ticketLabel(lastTicket, 'Fitting Copy A'),
+    ]);
   });
 
   it('copies it into a garment added to a ticket', async () => {
@@ -69,11 +75,17 @@ describe('same as last time', () => {
 
   it("refuses another customer's fitting, or another shop's, and opens no ticket", async () => {
     const other = (await createCustomer(a.counter, { name: 'Someone Else' })).id;
-    await expect(createTicket(a.counter, { customerId: other, garments: [{ description: 'x', fittingFrom: lastGarment }] })).rejects.toMatchObject({ status: 422 });
-    await expect(createTicket(a.counter, { customer: { name: 'New Person' }, garments: [{ description: 'x', fittingFrom: lastGarment }] })).rejects.toMatchObject({ status: 422 });
+    await expect(createTicket(a.counter, { customerId: other, garments: [{ description: 'x', fittingFrom: lastGarment }] })).rejects.toMatchObject({
+      status: 422,
+    });
+    await expect(
+      createTicket(a.counter, { customer: { name: 'New Person' }, garments: [{ description: 'x', fittingFrom: lastGarment }] }),
+    ).rejects.toMatchObject({ status: 422 });
     const theirs = (await createCustomer(b.counter, { name: 'Lune Abernath' })).id;
     await expect(previousFittings(b.counter, customerId)).rejects.toMatchObject({ status: 404 });
-    await expect(createTicket(b.counter, { customerId: theirs, garments: [{ description: 'x', fittingFrom: lastGarment }] })).rejects.toMatchObject({ status: 422 });
+    await expect(createTicket(b.counter, { customerId: theirs, garments: [{ description: 'x', fittingFrom: lastGarment }] })).rejects.toMatchObject({
+      status: 422,
+    });
     expect(await previousFittings(a.counter, other)).toEqual([]);
   });
 });

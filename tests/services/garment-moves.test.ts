@@ -40,12 +40,16 @@ async function paidReadyTicket() {
 describe('the counter handing a ticket over', () => {
   it('records garment.moved ready → collected for each garment, and tells the listeners', async () => {
     const heard: string[] = [];
-    const listener = async (actor: { role: string }, garment: { id: string; status: string }) => void heard.push(`${actor.role}:${garment.status}:${garment.id}`);
+    const listener = async (actor: { role: string }, garment: { id: string; status: string }) =>
+      void heard.push(`${actor.role}:${garment.status}:${garment.id}`);
     garmentMovedListeners.push(listener);
     try {
       const { ticket, garments: gs } = await paidReadyTicket();
       await pay.pickUp(a.counter, ticket.id);
-      const moves = await db.select().from(auditEvents).where(and(eq(auditEvents.shopId, a.shopId), eq(auditEvents.action, 'garment.moved')));
+      const moves = await db
+        .select()
+        .from(auditEvents)
+        .where(and(eq(auditEvents.shopId, a.shopId), eq(auditEvents.action, 'garment.moved')));
       expect(moves.map((m) => [m.subject, m.detail]).sort()).toEqual(gs.map((g) => [g.id, { from: 'ready', to: 'collected' }]).sort());
       expect(heard.sort()).toEqual(gs.map((g) => `counter:collected:${g.id}`).sort());
       const [t] = await db.select().from(tickets).where(eq(tickets.id, ticket.id));

@@ -99,7 +99,10 @@ describe('stepping a garment back', () => {
 
   it('under the ticket lock: pickup at the same moment never hands over a ticket with a garment stepped back', async () => {
     for (let round = 0; round < 12; round += 1) {
-      const { ticket, garment } = await openTicket(a, { customer: { name: 'Step Back Race' }, garments: [{ description: 'Grey flannel' }, { description: 'Navy twill' }] });
+      const { ticket, garment } = await openTicket(a, {
+        customer: { name: 'Step Back Race' },
+        garments: [{ description: 'Grey flannel' }, { description: 'Navy twill' }],
+      });
       const [, second] = await garmentsOfTicket(a.shopId, ticket.id);
       await noCharge(a, ticket.id);
       for (const to of ['marked', 'cut', 'stitched', 'pressed', 'ready'] as const) {
@@ -119,8 +122,16 @@ describe('stepping a garment back', () => {
       const seen = await getGarment(a.lead, garment.id);
       expect(picked.status === 'fulfilled' || back.status === 'fulfilled', `round ${round}`).toBe(true);
       // Pickup that went ahead took every garment; the ticket's status is its least advanced garment's.
-      if (picked.status === 'fulfilled') expect(after.map((g) => g.status), `round ${round}`).toEqual(['collected', 'collected']);
-      else expect(after.map((g) => g.status), `round ${round}`).toEqual(['ready', 'pressed']);
+      if (picked.status === 'fulfilled')
+        expect(
+          after.map((g) => g.status),
+          `round ${round}`,
+        ).toEqual(['collected', 'collected']);
+      else
+        expect(
+          after.map((g) => g.status),
+          `round ${round}`,
+        ).toEqual(['ready', 'pressed']);
       expect(seen.ticket.status, `round ${round}`).toBe(leastAdvanced(after.map((g) => g.status)));
     }
   });

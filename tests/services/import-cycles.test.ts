@@ -73,7 +73,10 @@ describe('services', () => {
     expect(counter.length).toBeGreaterThanOrEqual(4);
     for (const f of counter) {
       const bench = (edges.get(f) ?? []).filter((t) => /services\/(garments|tickets)\.ts$/.test(t));
-      expect(bench.map((t) => relative(SRC, t)), relative(SRC, f)).toEqual([]);
+      expect(
+        bench.map((t) => relative(SRC, t)),
+        relative(SRC, f),
+      ).toEqual([]);
     }
   });
 });

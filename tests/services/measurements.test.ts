@@ -26,7 +26,11 @@ async function garmentOf(shop = a) {
 describe('measurements', () => {
   it('keep each leg as typed and in exact mm (1 in = 25.4 mm exactly: TRADE.md, NBS 1959)', async () => {
     const g = await garmentOf();
-    const saved = await saveFitting(a.tailor, g.id, fittingRequest({ backPin: '31 1/4', cuffDepth: '1 1/2', available: '5' }, { backPin: '31 1/2', cuffDepth: '1½' }));
+    const saved = await saveFitting(
+      a.tailor,
+      g.id,
+      fittingRequest({ backPin: '31 1/4', cuffDepth: '1 1/2', available: '5' }, { backPin: '31 1/2', cuffDepth: '1½' }),
+    );
     const left = saved.legs.find((l) => l.leg === 'left')!;
     const right = saved.legs.find((l) => l.leg === 'right')!;
     expect(left.values.backPin).toEqual({ text: '31 1/4', mm: 793.75 });
@@ -46,7 +50,10 @@ describe('measurements', () => {
     await saveFitting(a.lead, g.id, fittingRequest({ cuffDepth: '1 3/4', available: '5' }, { cuffDepth: '1 1/2', available: '5' }));
     const history = (await fittingOf(a.lead, g.id)).history.filter((e) => e.action === 'measurement.changed');
     expect(history).toHaveLength(7);
-    expect(history[0]).toMatchObject({ actorName: 'lead of Fitting Shop A', detail: { leg: 'left', field: 'cuffDepth', old: '1 1/2', new: '1 3/4', unit: 'in' } });
+    expect(history[0]).toMatchObject({
+      actorName: 'lead of Fitting Shop A',
+      detail: { leg: 'left', field: 'cuffDepth', old: '1 1/2', new: '1 3/4', unit: 'in' },
+    });
     expect(Date.parse(history[0]!.at)).toBeGreaterThan(Date.now() - 60_000);
   });
 

@@ -10,7 +10,17 @@ import fc from 'fast-check';
 import { and, eq } from 'drizzle-orm';
 import type { Shop } from './fixtures';
 
-vi.mock('astro:env/server', () => ({ BODY_IDLE_SECONDS: 20, PAYMENTS_API_KEY: undefined, PAYMENTS_API_BASE: undefined, PAYMENTS_WEBHOOK_SECRET: undefined, SMS_ACCOUNT_SID: undefined, SMS_AUTH_TOKEN: undefined, SMS_FROM: undefined, SMS_API_BASE: undefined, BETTER_AUTH_URL: 'http://localhost:4321' }));
+vi.mock('astro:env/server', () => ({
+  BODY_IDLE_SECONDS: 20,
+  PAYMENTS_API_KEY: undefined,
+  PAYMENTS_API_BASE: undefined,
+  PAYMENTS_WEBHOOK_SECRET: undefined,
+  SMS_ACCOUNT_SID: undefined,
+  SMS_AUTH_TOKEN: undefined,
+  SMS_FROM: undefined,
+  SMS_API_BASE: undefined,
+  BETTER_AUTH_URL: 'http://localhost:4321',
+}));
 vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
@@ -44,13 +54,24 @@ const op: fc.Arbitrary<Op> = fc.oneof(
   fc.record({ kind: fc.constant('kind-line' as const), rushApplies: fc.boolean() }),
   fc.record({ kind: fc.constant('adjust' as const), amountMinor: fc.integer({ min: -4000, max: 3000 }).filter((n) => n !== 0), lead: fc.boolean() }),
   fc.record({ kind: fc.constant('void' as const), pick: fc.nat(20) }),
-  fc.record({ kind: fc.constant('pay' as const), method: fc.constantFrom('cash' as const, 'card' as const, 'credit' as const), amountMinor: fc.integer({ min: 1, max: 5000 }) }),
+  fc.record({
+    kind: fc.constant('pay' as const),
+    method: fc.constantFrom('cash' as const, 'card' as const, 'credit' as const),
+    amountMinor: fc.integer({ min: 1, max: 5000 }),
+  }),
   // A share of the credit owed when it runs (over 100 % asks for more than is owed).
-  fc.record({ kind: fc.constant('refund' as const), method: fc.constantFrom('cash' as const, 'card' as const, 'credit' as const), percent: fc.integer({ min: 1, max: 120 }) }),
+  fc.record({
+    kind: fc.constant('refund' as const),
+    method: fc.constantFrom('cash' as const, 'card' as const, 'credit' as const),
+    percent: fc.integer({ min: 1, max: 120 }),
+  }),
   fc.constant({ kind: 'no-charge' as const }),
   fc.constant({ kind: 'pickup' as const }),
 );
-const step: fc.Arbitrary<Step> = fc.oneof({ weight: 4, arbitrary: op }, { weight: 1, arbitrary: fc.record({ kind: fc.constant('race' as const), one: op, two: op, sameTicket: fc.boolean() }) });
+const step: fc.Arbitrary<Step> = fc.oneof(
+  { weight: 4, arbitrary: op },
+  { weight: 1, arbitrary: fc.record({ kind: fc.constant('race' as const), one: op, two: op, sameTicket: fc.boolean() }) },
+);
 
 async function freshTicket(customerId: string) {
   ticketNo += 1;
@@ -66,7 +87,12 @@ async function apply(ticketId: string, o: Op): Promise<unknown> {
     case 'kind-line':
       return prices.addLine(a.counter, ticketId, { source: 'kind', kindId: o.rushApplies ? kindIds.rush : kindIds.noRush });
     case 'adjust':
-      return prices.addLine(o.lead ? a.lead : a.counter, ticketId, { source: 'adjust', label: 'Generated', amountMinor: o.amountMinor, reason: 'property test' });
+      return prices.addLine(o.lead ? a.lead : a.counter, ticketId, {
+        source: 'adjust',
+        label: 'Generated',
+        amountMinor: o.amountMinor,
+        reason: 'property test',
+      });
     case 'void': {
       const lines = await db.select().from(priceLines).where(eq(priceLines.ticketId, ticketId));
       if (lines.length === 0) return null;
@@ -122,7 +148,10 @@ async function checkLaws(ticketId: string, customerId: string, trail: string): P
   expect(rushes.length, `one rush at most — ${trail}`).toBeLessThanOrEqual(1);
   // Kept credit is never spent beyond what was kept, across the customer's tickets.
   expect(s.customerCredit, trail).toBeGreaterThanOrEqual(0);
-  const kept = await db.select().from(refunds).where(and(eq(refunds.customerId, customerId), eq(refunds.method, 'credit')));
+  const kept = await db
+    .select()
+    .from(refunds)
+    .where(and(eq(refunds.customerId, customerId), eq(refunds.method, 'credit')));
   expect(sum(kept), trail).toBeGreaterThanOrEqual(s.customerCredit);
 }
 

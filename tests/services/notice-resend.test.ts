@@ -6,7 +6,18 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import type { Shop } from './fixtures';
 
 const mail = vi.hoisted(() => ({ sent: [] as { to: string; subject: string; text: string }[], fail: false }));
-vi.mock('astro:env/server', () => ({ BODY_IDLE_SECONDS: 20, NOTICE_LEASE_SECONDS: 180, PAYMENTS_API_KEY: undefined, PAYMENTS_API_BASE: undefined, PAYMENTS_WEBHOOK_SECRET: undefined, SMS_ACCOUNT_SID: undefined, SMS_AUTH_TOKEN: undefined, SMS_FROM: undefined, SMS_API_BASE: undefined, BETTER_AUTH_URL: 'http://localhost:4321' }));
+vi.mock('astro:env/server', () => ({
+  BODY_IDLE_SECONDS: 20,
+  NOTICE_LEASE_SECONDS: 180,
+  PAYMENTS_API_KEY: undefined,
+  PAYMENTS_API_BASE: undefined,
+  PAYMENTS_WEBHOOK_SECRET: undefined,
+  SMS_ACCOUNT_SID: undefined,
+  SMS_AUTH_TOKEN: undefined,
+  SMS_FROM: undefined,
+  SMS_API_BASE: undefined,
+  BETTER_AUTH_URL: 'http://localhost:4321',
+}));
 vi.mock('@/lib/mail', () => ({
   sendMail: vi.fn(async (m: { to: string; subject: string; text: string }) => {
     if (mail.fail) throw new Error('connection refused (test)');
@@ -33,7 +44,12 @@ async function readyTicket(status: 'ready' | 'received' = 'ready') {
   return t!;
 }
 
-const readyRows = (ticketId: string) => db.select().from(notices).where(and(eq(notices.ticketId, ticketId), eq(notices.kind, 'ready'))).orderBy(asc(notices.sequence));
+const readyRows = (ticketId: string) =>
+  db
+    .select()
+    .from(notices)
+    .where(and(eq(notices.ticketId, ticketId), eq(notices.kind, 'ready')))
+    .orderBy(asc(notices.sequence));
 
 beforeAll(async () => {
   a = await makeShop('Resend Hems');
@@ -56,9 +72,16 @@ describe('sending the ready notice again', () => {
     const third = await notice.resendReadyNotice(a.lead, t.id);
     expect(third.sequence).toBe(3);
     const rows = await readyRows(t.id);
-    expect(rows.map((r) => [r.sequence, r.status])).toEqual([[1, 'sent'], [2, 'sent'], [3, 'sent']]);
+    expect(rows.map((r) => [r.sequence, r.status])).toEqual([
+      [1, 'sent'],
+      [2, 'sent'],
+      [3, 'sent'],
+    ]);
     expect(rows[0]).toEqual(first);
-    const audit = await db.select().from(auditEvents).where(and(eq(auditEvents.subject, t.id), eq(auditEvents.action, 'notice.resent')));
+    const audit = await db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.subject, t.id), eq(auditEvents.action, 'notice.resent')));
     expect(audit.map((e) => (e.detail as { sequence: number }).sequence).sort()).toEqual([2, 3]);
     expect(audit.map((e) => e.actorId).sort()).toEqual([a.counter.userId, a.lead.userId].sort());
   });

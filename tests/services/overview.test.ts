@@ -34,16 +34,32 @@ async function garment(shop: Shop, opts: { createdAt: string; status?: (typeof g
   const t = await ticketOf(shop);
   const [g] = await db
     .insert(garments)
-    .values({ shopId: shop.shopId, ticketId: t.id, description: 'Test trousers', status: opts.status ?? 'received', dueOn: opts.dueOn, createdAt: new Date(opts.createdAt) })
+    .values({
+      shopId: shop.shopId,
+      ticketId: t.id,
+      description: 'Test trousers',
+      status: opts.status ?? 'received',
+      dueOn: opts.dueOn,
+      createdAt: new Date(opts.createdAt),
+    })
     .returning();
   return { ticket: t, garment: g! };
 }
 
 async function moved(shop: Shop, garmentId: string, to: string, at: string, back = false) {
-  await db.insert(auditEvents).values({ shopId: shop.shopId, action: 'garment.moved', subject: garmentId, detail: back ? { to, back: true } : { to }, at: new Date(at) });
+  await db
+    .insert(auditEvents)
+    .values({ shopId: shop.shopId, action: 'garment.moved', subject: garmentId, detail: back ? { to, back: true } : { to }, at: new Date(at) });
 }
 
-async function paid(shop: Shop, ticketId: string, method: 'cash' | 'card' | 'online' | 'credit', amountMinor: number, at: string, purpose: 'deposit' | 'balance' = 'deposit') {
+async function paid(
+  shop: Shop,
+  ticketId: string,
+  method: 'cash' | 'card' | 'online' | 'credit',
+  amountMinor: number,
+  at: string,
+  purpose: 'deposit' | 'balance' = 'deposit',
+) {
   await db.insert(payments).values({ shopId: shop.shopId, ticketId, purpose, method, amountMinor, currency: 'EUR', at: new Date(at) });
 }
 
@@ -102,7 +118,15 @@ describe('the shop overview', () => {
   it('hands over, due, overdue and takings per day; totals are the sums of the days', async () => {
     const o = await shopOverview(a.shopId, 'week', NOW);
     expect(o.days.map((d) => d.handedOver)).toEqual([0, 0, 1, 0, 0, 0, 1]);
-    expect(o.days.map((d) => [d.dueDone, d.dueOpen, d.overdue])).toEqual([[0, 0, 0], [1, 0, 1], [0, 0, 0], [0, 0, 0], [0, 0, 0], [0, 2, 0], [0, 0, 0]]);
+    expect(o.days.map((d) => [d.dueDone, d.dueOpen, d.overdue])).toEqual([
+      [0, 0, 0],
+      [1, 0, 1],
+      [0, 0, 0],
+      [0, 0, 0],
+      [0, 0, 0],
+      [0, 2, 0],
+      [0, 0, 0],
+    ]);
     expect(o.overdueBefore).toBe(1);
     expect(o.overdueNow).toBe(2);
     expect(o.days.map((d) => d.takings)).toEqual([{ cash: 1650 }, {}, {}, { card: 2400, cash: 550 }, {}, {}, {}]);

@@ -13,10 +13,27 @@ const { fake, proxy } = await vi.hoisted(async () => {
   const { startPaymentsFake } = await import('../../scripts/payments-fake.mjs');
   const { startPaymentsProxy } = await import('./payments-proxy');
   // The fake's own webhook goes nowhere (port 9): webhooks are handed to the service directly here.
-  const fake = await startPaymentsFake({ port: 0, apiKey: 'sk_test_phases', webhookSecret: 'whsec_phases', webhookUrl: 'http://127.0.0.1:9/api/payments/webhook', quiet: true });
+  const fake = await startPaymentsFake({
+    port: 0,
+    apiKey: 'sk_test_phases',
+    webhookSecret: 'whsec_phases',
+    webhookUrl: 'http://127.0.0.1:9/api/payments/webhook',
+    quiet: true,
+  });
   return { fake, proxy: await startPaymentsProxy(fake.base) };
 });
-vi.mock('astro:env/server', () => ({ BODY_IDLE_SECONDS: 20, NOTICE_LEASE_SECONDS: 180, PAYMENTS_API_KEY: 'sk_test_phases', PAYMENTS_API_BASE: proxy.base, PAYMENTS_WEBHOOK_SECRET: 'whsec_phases', SMS_ACCOUNT_SID: undefined, SMS_AUTH_TOKEN: undefined, SMS_FROM: undefined, SMS_API_BASE: undefined, BETTER_AUTH_URL: 'http://localhost:4321' }));
+vi.mock('astro:env/server', () => ({
+  BODY_IDLE_SECONDS: 20,
+  NOTICE_LEASE_SECONDS: 180,
+  PAYMENTS_API_KEY: 'sk_test_phases',
+  PAYMENTS_API_BASE: proxy.base,
+  PAYMENTS_WEBHOOK_SECRET: 'whsec_phases',
+  SMS_ACCOUNT_SID: undefined,
+  SMS_AUTH_TOKEN: undefined,
+  SMS_FROM: undefined,
+  SMS_API_BASE: undefined,
+  BETTER_AUTH_URL: 'http://localhost:4321',
+}));
 vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
@@ -159,14 +176,27 @@ describe('making a link in two phases', () => {
     const id = crypto.randomUUID();
     const request = {
       mode: 'payment',
-      line_items: [{ quantity: 1, price_data: { currency: 'eur', unit_amount: 1800, product_data: { name: `Phase Hems A: ticket PHA ${t.number}, balance` } } }],
+      line_items: [
+        { quantity: 1, price_data: { currency: 'eur', unit_amount: 1800, product_data: { name: `Phase Hems A: ticket PHA ${t.number}, balance` } } },
+      ],
       client_reference_id: t.id,
       metadata: { ticketId: t.id, shopId: a.shopId, linkId: id },
       success_url: `${ORIGIN}/paid`,
       cancel_url: `${ORIGIN}/paid?cancelled=1`,
     } satisfies Stripe.Checkout.SessionCreateParams;
     const orphan = await serviceViaProxy.checkout.sessions.create(request, { idempotencyKey: sessionKey(id) });
-    await db.insert(paymentLinks).values({ id, shopId: a.shopId, ticketId: t.id, status: 'creating', amountMinor: 1800, currency: 'EUR', request, createdAt: new Date(Date.now() - 60_000) });
+    await db
+      .insert(paymentLinks)
+      .values({
+        id,
+        shopId: a.shopId,
+        ticketId: t.id,
+        status: 'creating',
+        amountMinor: 1800,
+        currency: 'EUR',
+        request,
+        createdAt: new Date(Date.now() - 60_000),
+      });
 
     const made = await pay.createPaymentLink(a.counter, t.id, ORIGIN);
     expect(made.link).toMatchObject({ amountMinor: 1800, status: 'open' });
@@ -214,7 +244,9 @@ describe('saving a link the service made', () => {
     const before = createdSessions().length;
     // A real database refusal on the finalising write, for this amount only.
     await db.execute(sql`create function refuse_4242() returns trigger language plpgsql as $$ begin raise exception 'refused for the test'; end $$`);
-    await db.execute(sql`create trigger refuse_4242 before update on payment_links for each row when (new.status = 'open' and new.amount_minor = 4242) execute function refuse_4242()`);
+    await db.execute(
+      sql`create trigger refuse_4242 before update on payment_links for each row when (new.status = 'open' and new.amount_minor = 4242) execute function refuse_4242()`,
+    );
     try {
       await expect(pay.createPaymentLink(a.counter, t.id, ORIGIN)).rejects.toThrow();
     } finally {

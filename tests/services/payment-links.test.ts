@@ -10,9 +10,26 @@ import type { Shop } from './fixtures';
 const fake = await vi.hoisted(async () => {
   const { startPaymentsFake } = await import('../../scripts/payments-fake.mjs');
   // The webhook goes nowhere (port 9): these tests look at the links, not at recording payments.
-  return startPaymentsFake({ port: 0, apiKey: 'sk_test_links_only', webhookSecret: 'whsec_links_only', webhookUrl: 'http://127.0.0.1:9/api/payments/webhook', quiet: true });
+  return startPaymentsFake({
+    port: 0,
+    apiKey: 'sk_test_links_only',
+    webhookSecret: 'whsec_links_only',
+    webhookUrl: 'http://127.0.0.1:9/api/payments/webhook',
+    quiet: true,
+  });
 });
-vi.mock('astro:env/server', () => ({ BODY_IDLE_SECONDS: 20, NOTICE_LEASE_SECONDS: 180, PAYMENTS_API_KEY: 'sk_test_links_only', PAYMENTS_API_BASE: fake.base, PAYMENTS_WEBHOOK_SECRET: 'whsec_links_only', SMS_ACCOUNT_SID: undefined, SMS_AUTH_TOKEN: undefined, SMS_FROM: undefined, SMS_API_BASE: undefined, BETTER_AUTH_URL: 'http://localhost:4321' }));
+vi.mock('astro:env/server', () => ({
+  BODY_IDLE_SECONDS: 20,
+  NOTICE_LEASE_SECONDS: 180,
+  PAYMENTS_API_KEY: 'sk_test_links_only',
+  PAYMENTS_API_BASE: fake.base,
+  PAYMENTS_WEBHOOK_SECRET: 'whsec_links_only',
+  SMS_ACCOUNT_SID: undefined,
+  SMS_AUTH_TOKEN: undefined,
+  SMS_FROM: undefined,
+  SMS_API_BASE: undefined,
+  BETTER_AUTH_URL: 'http://localhost:4321',
+}));
 vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
@@ -62,7 +79,10 @@ describe('making a pay link', () => {
       const t = await pricedTicket(a);
       const answers = await Promise.all([1, 2, 3].map(() => pay.createPaymentLink(a.counter, t.id, ORIGIN)));
       const rows = await linksOf(t.id);
-      expect(rows.map((l) => [l.status, l.amountMinor]), `round ${round}`).toEqual([['open', 1800]]);
+      expect(
+        rows.map((l) => [l.status, l.amountMinor]),
+        `round ${round}`,
+      ).toEqual([['open', 1800]]);
       expect(new Set(answers.map((s) => s.link?.url))).toEqual(new Set([rows[0]!.url]));
     }
   });
@@ -133,7 +153,11 @@ describe('when the payment service cannot be reached', () => {
     const res = await priceLinesRoute.POST({
       locals: { user: { id: c.userId, name: c.userName, email: c.email }, member: { id: c.memberId, role: c.role, shopId: c.shopId, shopName: c.shopName } },
       params: { id: t.id },
-      request: new Request(`${ORIGIN}/api/tickets/${t.id}/price-lines`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(rush) }),
+      request: new Request(`${ORIGIN}/api/tickets/${t.id}/price-lines`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify(rush),
+      }),
     } as unknown as APIContext);
     expect(res.status).toBe(503);
     expect(res.headers.get('content-type')).toBe('application/json');

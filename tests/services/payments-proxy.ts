@@ -51,7 +51,10 @@ export function startPaymentsProxy(upstream: string): Promise<PaymentsProxy> {
       await gate.released;
     }
     const key = typeof req.headers['idempotency-key'] === 'string' ? req.headers['idempotency-key'] : null;
-    const headers = { authorization: String(req.headers.authorization ?? ''), 'content-type': String(req.headers['content-type'] ?? 'application/x-www-form-urlencoded') };
+    const headers = {
+      authorization: String(req.headers.authorization ?? ''),
+      'content-type': String(req.headers['content-type'] ?? 'application/x-www-form-urlencoded'),
+    };
     const cacheKey = key && method === 'POST' ? `${key} ${path}` : null;
     let answer = cacheKey ? answered.get(cacheKey) : undefined;
     if (!answer) {

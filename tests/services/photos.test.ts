@@ -31,7 +31,10 @@ let garmentB = '';
 let jpeg: Uint8Array;
 
 async function garmentOf(shopId: string): Promise<string> {
-  const [t] = await db.insert(tickets).values({ shopId, number: Math.floor(Math.random() * 1e6) }).returning();
+  const [t] = await db
+    .insert(tickets)
+    .values({ shopId, number: Math.floor(Math.random() * 1e6) })
+    .returning();
   const [g] = await db.insert(garments).values({ shopId, ticketId: t!.id, description: 'Grey flannel trousers' }).returning();
   return g!.id;
 }
@@ -115,7 +118,10 @@ describe('fitting photos', () => {
 
   it('refuse a HEIC whose boxes cannot be read, as its location could not be removed', async () => {
     const broken = new Uint8Array([0, 0, 0, 24, ...Buffer.from('ftypheic'), 0, 0, 0, 0, ...Buffer.from('mif1heic'), ...new Array(64).fill(7)]);
-    await expect(svc.addPhotos(a.tailor, garmentA, [{ name: 'cut-short.heic', bytes: broken }], 10 * MB)).rejects.toMatchObject({ status: 415, message: expect.stringMatching(/location could not be removed/) });
+    await expect(svc.addPhotos(a.tailor, garmentA, [{ name: 'cut-short.heic', bytes: broken }], 10 * MB)).rejects.toMatchObject({
+      status: 415,
+      message: expect.stringMatching(/location could not be removed/),
+    });
   });
 
   it('refuse a file that only starts like a HEIC: a HEIC header then HTML, or nothing', async () => {
@@ -140,14 +146,27 @@ describe('fitting photos', () => {
     ihdr.writeUInt32BE(16000, 0);
     ihdr.writeUInt32BE(16000, 4);
     ihdr.set([8, 2, 0, 0, 0], 8);
-    const png = Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk('IHDR', ihdr), chunk('IDAT', zlib.deflateSync(Buffer.alloc(1000))), chunk('IEND', Buffer.alloc(0))]);
+    const png = Buffer.concat([
+      Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+      chunk('IHDR', ihdr),
+      chunk('IDAT', zlib.deflateSync(Buffer.alloc(1000))),
+      chunk('IEND', Buffer.alloc(0)),
+    ]);
     expect(await sharp(png).metadata()).toMatchObject({ width: 16000, height: 16000 });
     const heic = await sampleHeif({ width: 16000, height: 16000 });
-    for (const [name, bytes] of [['huge.png', png], ['huge.heic', heic]] as const) {
-      await expect(svc.addPhotos(a.tailor, garmentA, [{ name, bytes: new Uint8Array(bytes) }], 10 * MB), name).rejects.toMatchObject({ status: 413, message: expect.stringMatching(/16000 × 16000 pixels/) });
+    for (const [name, bytes] of [
+      ['huge.png', png],
+      ['huge.heic', heic],
+    ] as const) {
+      await expect(svc.addPhotos(a.tailor, garmentA, [{ name, bytes: new Uint8Array(bytes) }], 10 * MB), name).rejects.toMatchObject({
+        status: 413,
+        message: expect.stringMatching(/16000 × 16000 pixels/),
+      });
     }
     // Just under the limit is still a photo (a 48 MP phone camera's, 8000 x 6000).
-    await expect(svc.checkPicture(new Uint8Array(await sampleHeif({ width: 8000, height: 6000 })), { mime: 'image/heic', ext: 'heic' }, 'big.heic')).resolves.toBeUndefined();
+    await expect(
+      svc.checkPicture(new Uint8Array(await sampleHeif({ width: 8000, height: 6000 })), { mime: 'image/heic', ext: 'heic' }, 'big.heic'),
+    ).resolves.toBeUndefined();
     expect(svc.MAX_PIXELS).toBeGreaterThanOrEqual(48_000_000);
   });
 
@@ -156,8 +175,13 @@ describe('fitting photos', () => {
     const tagged = await sharp({ create: { width: 1200, height: 900, channels: 3, background: { r: 90, g: 100, b: 120 } } })
       .jpeg()
       .withMetadata({ orientation: 6 })
-      .withExif({ IFD0: { Make: 'Invented Camera Co' }, IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '51/1 30/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '0/1 7/1 0/1' } })
-      .withXmp('<x:xmpmeta xmlns:x="adobe:ns:meta/"><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#"><rdf:Description xmlns:exif="http://ns.adobe.com/exif/1.0/" exif:GPSLatitude="51,30.0N"/></rdf:RDF></x:xmpmeta>')
+      .withExif({
+        IFD0: { Make: 'Invented Camera Co' },
+        IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '51/1 30/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '0/1 7/1 0/1' },
+      })
+      .withXmp(
+        '<x:xmpmeta xmlns:x="adobe:ns:meta/"><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#"><rdf:Description xmlns:exif="http://ns.adobe.com/exif/1.0/" exif:GPSLatitude="51,30.0N"/></rdf:RDF></x:xmpmeta>',
+      )
       .toBuffer();
     const sent = await sharp(tagged).metadata();
     expect(hasGpsIfd(sent.exif)).toBe(true);
@@ -194,7 +218,10 @@ describe('fitting photos', () => {
 
   it('refuse a photo over the size limit, and store none of the batch', async () => {
     const before = readdirSync(join(storageRoot, a.shopId)).length;
-    const uploads = [{ name: 'small.jpg', bytes: await image('jpeg', 40, 30) }, { name: 'big.jpg', bytes: jpeg }];
+    const uploads = [
+      { name: 'small.jpg', bytes: await image('jpeg', 40, 30) },
+      { name: 'big.jpg', bytes: jpeg },
+    ];
     await expect(svc.addPhotos(a.tailor, garmentA, uploads, jpeg.byteLength - 1)).rejects.toMatchObject({ status: 413 });
     expect(readdirSync(join(storageRoot, a.shopId))).toHaveLength(before);
   });
@@ -253,7 +280,10 @@ describe('fitting photos', () => {
     expect(await svc.deletePhoto(a.tailor, p!.id)).toEqual({ id: p!.id, deleted: true });
     expect(readdirSync(join(storageRoot, a.shopId)).filter((n) => n.startsWith(p!.id))).toEqual([]);
     await expect(svc.readPhoto(a.lead, p!.id)).rejects.toMatchObject({ status: 404 });
-    const events = await db.select().from(auditEvents).where(and(eq(auditEvents.shopId, a.shopId), eq(auditEvents.subject, p!.id)));
+    const events = await db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.shopId, a.shopId), eq(auditEvents.subject, p!.id)));
     expect(events.map((e) => e.action)).toEqual(['photo.added', 'photo.deleted']);
     expect(events[0]!.detail).toMatchObject({ garmentId: garmentA, name: 'to-remove.jpg', type: 'image/jpeg' });
   });
@@ -262,7 +292,14 @@ describe('fitting photos', () => {
     const [p] = await svc.addPhotos(a.lead, garmentA, [{ name: 'stuck.jpg', bytes: jpeg }], 10 * MB);
     const disk = new DiskStorage(storageRoot);
     const refused: string[] = [];
-    useStorage({ put: disk.put.bind(disk), get: disk.get.bind(disk), delete: async (key) => { refused.push(key); throw new Error('disk is read-only'); } });
+    useStorage({
+      put: disk.put.bind(disk),
+      get: disk.get.bind(disk),
+      delete: async (key) => {
+        refused.push(key);
+        throw new Error('disk is read-only');
+      },
+    });
     const warn = vi.spyOn(console, 'warn').mockImplementation(() => {});
     let warnings: unknown[][] = [];
     try {

@@ -41,7 +41,12 @@ describe('editing a preset keeps its history', () => {
     await svc.updatePreset(a.lead, p.id, { name: 'Classic 1½', settings: { ...classic, cuffDepth: '1 5/8' } });
     const history = await svc.presetHistory(a.tailor, p.id);
     const fields = history.map((h) => [h.field, h.old, h.new]);
-    expect(fields).toEqual(expect.arrayContaining([['name', 'Classic A', 'Classic 1½'], ['cuffDepth', '1 1/2', '1 5/8']]));
+    expect(fields).toEqual(
+      expect.arrayContaining([
+        ['name', 'Classic A', 'Classic 1½'],
+        ['cuffDepth', '1 1/2', '1 5/8'],
+      ]),
+    );
     expect(fields).toHaveLength(3);
     expect(history.at(-1)).toMatchObject({ field: 'created', new: 'Classic A' });
     for (const h of history) expect(h.actorName).toBe('lead of Link Shop A');
@@ -72,9 +77,15 @@ describe('a fitting points at its preset by id', () => {
     const p = await svc.createPreset(a.lead, { name: 'Trim A', scope: 'house', settings: { ...classic, cuffDepth: '1 1/4' } });
     const g = await garmentOf(a);
     const saved = await saveFitting(a.tailor, g.id, withPreset(p.id, '1 1/4'));
-    expect(saved.legs.map((l) => [l.preset, l.presetId])).toEqual([['Trim A', p.id], ['Trim A', p.id]]);
+    expect(saved.legs.map((l) => [l.preset, l.presetId])).toEqual([
+      ['Trim A', p.id],
+      ['Trim A', p.id],
+    ]);
     await svc.updatePreset(a.lead, p.id, { name: 'Trim 1¼' });
-    expect((await legsOf(g.id)).map((l) => [l.preset, l.presetId])).toEqual([['Trim 1¼', p.id], ['Trim 1¼', p.id]]);
+    expect((await legsOf(g.id)).map((l) => [l.preset, l.presetId])).toEqual([
+      ['Trim 1¼', p.id],
+      ['Trim 1¼', p.id],
+    ]);
     // Saving the fitting again as it stands records no change of preset.
     const before = (await fittingOf(a.lead, g.id)).history.length;
     await saveFitting(a.tailor, g.id, withPreset(p.id, '1 1/4'));
@@ -87,7 +98,10 @@ describe('a fitting points at its preset by id', () => {
     await saveFitting(a.tailor, g.id, withPreset(p.id));
     await svc.updatePreset(a.lead, p.id, { name: 'Gone now' });
     await svc.deletePreset(a.lead, p.id);
-    expect((await legsOf(g.id)).map((l) => [l.preset, l.presetId])).toEqual([['Gone now', null], ['Gone now', null]]);
+    expect((await legsOf(g.id)).map((l) => [l.preset, l.presetId])).toEqual([
+      ['Gone now', null],
+      ['Gone now', null],
+    ]);
     // Saved again untouched, the name stays; "not from a preset" clears it.
     const form = fittingRequest({ backPin: '31', cuffDepth: '1 1/2', preset: 'Gone now' });
     await saveFitting(a.tailor, g.id, form);
@@ -135,7 +149,10 @@ describe('another shop’s preset is never readable or usable', () => {
     await saveFitting(b.tailor, g.id, fittingRequest({ backPin: '31', cuffDepth: '1 1/2' }));
     // A row that somehow points across shops (the service never writes one).
     await db.update(measurements).set({ presetId: theirs.id }).where(eq(measurements.garmentId, g.id));
-    expect((await legsOf(g.id)).map((l) => [l.preset, l.presetId])).toEqual([[null, null], [null, null]]);
+    expect((await legsOf(g.id)).map((l) => [l.preset, l.presetId])).toEqual([
+      [null, null],
+      [null, null],
+    ]);
   });
 
   it('refuses a colleague’s own preset, but keeps one a colleague put on the fitting', async () => {
@@ -162,17 +179,26 @@ describe('migration 0014: fittings linked from the name they recorded', () => {
     const gGone = await garmentOf(a);
     for (const g of [gHouse, gOwn, gCross, gGone]) await saveFitting(a.tailor, g.id, fittingRequest({ backPin: '31', cuffDepth: '1 1/2' }));
     // As the rows stood before the migration: a name, no id.
-    const named = async (garmentId: string, name: string) => db.update(measurements).set({ preset: name, presetId: null }).where(eq(measurements.garmentId, garmentId));
+    const named = async (garmentId: string, name: string) =>
+      db.update(measurements).set({ preset: name, presetId: null }).where(eq(measurements.garmentId, garmentId));
     await named(gHouse.id, 'Backfill cuff');
     await named(gOwn.id, 'Backfill own');
     await named(gCross.id, 'Backfill B');
     await named(gGone.id, 'Long gone');
     const sqlText = readFileSync('drizzle/0014_preset-ids.sql', 'utf8');
-    const updates = sqlText.split('--> statement-breakpoint').map((s) => s.trim()).filter((s) => /^(--.*\n)*UPDATE/.test(s));
+    const updates = sqlText
+      .split('--> statement-breakpoint')
+      .map((s) => s.trim())
+      .filter((s) => /^(--.*\n)*UPDATE/.test(s));
     expect(updates).toHaveLength(2);
     for (const u of updates) await db.execute(sql.raw(u));
     const idsOf = async (garmentId: string) =>
-      (await db.select({ id: measurements.presetId }).from(measurements).where(and(eq(measurements.garmentId, garmentId)))).map((r) => r.id);
+      (
+        await db
+          .select({ id: measurements.presetId })
+          .from(measurements)
+          .where(and(eq(measurements.garmentId, garmentId)))
+      ).map((r) => r.id);
     expect(await idsOf(gHouse.id)).toEqual([house.id, house.id]);
     expect(await idsOf(gOwn.id)).toEqual([own.id, own.id]);
     expect(await idsOf(gCross.id)).toEqual([null, null]);

@@ -23,7 +23,10 @@ afterAll(() => handle.close());
 const classic = { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2', turnUnder: '1/2' } as const;
 
 async function auditActions(shopId: string, subject: string) {
-  const rows = await db.select().from(auditEvents).where(and(eq(auditEvents.shopId, shopId), eq(auditEvents.subject, subject)));
+  const rows = await db
+    .select()
+    .from(auditEvents)
+    .where(and(eq(auditEvents.shopId, shopId), eq(auditEvents.subject, subject)));
   return rows.map((r) => r.action);
 }
 
@@ -54,7 +57,9 @@ describe('presets', () => {
   });
 
   it('refuse a personal preset as the default', async () => {
-    await expect(svc.createPreset(a.tailor, { name: 'Mine default', scope: 'personal', isDefault: true, settings: classic })).rejects.toMatchObject({ status: 422 });
+    await expect(svc.createPreset(a.tailor, { name: 'Mine default', scope: 'personal', isDefault: true, settings: classic })).rejects.toMatchObject({
+      status: 422,
+    });
     const own = await svc.createPreset(a.tailor, { name: 'Own', scope: 'personal', settings: classic });
     await expect(svc.updatePreset(a.tailor, own.id, { isDefault: true })).rejects.toMatchObject({ status: 422 });
   });
@@ -72,7 +77,11 @@ describe('presets', () => {
     // "cuffs are hemmed level, not sloped": The Encyclopedia of Men's Clothes (TRADE.md).
     const p = await svc.createPreset(a.tailor, { name: 'Cuff no slope', scope: 'personal', settings: { ...classic, slope: '1/2', hemAllowance: '2' } });
     expect(p.settings).toEqual(classic);
-    const hem = await svc.createPreset(a.tailor, { name: 'Plain sloped', scope: 'personal', settings: { finish: 'hem', unit: 'in', hemAllowance: '1 1/2', turnUnder: '1/4', slope: '1/2', cuffDepth: '2' } });
+    const hem = await svc.createPreset(a.tailor, {
+      name: 'Plain sloped',
+      scope: 'personal',
+      settings: { finish: 'hem', unit: 'in', hemAllowance: '1 1/2', turnUnder: '1/4', slope: '1/2', cuffDepth: '2' },
+    });
     expect(hem.settings).toEqual({ finish: 'hem', unit: 'in', hemAllowance: '1 1/2', turnUnder: '1/4', slope: '1/2' });
   });
 

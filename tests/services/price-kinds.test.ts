@@ -68,7 +68,10 @@ describe('kinds of work on the price list', () => {
     expect([kept!.label, kept!.amountMinor]).toEqual(['Take in waist', 1800]);
     expect((await pay.counterSummary(a.counter, t.id)).total).toBe(1800);
     // Retired: off the counter's choices, still listed for the lead, after the live ones.
-    await expect(prices.addLine(a.counter, t.id, { source: 'kind', kindId: k.id })).rejects.toMatchObject({ status: 422, message: expect.stringContaining('retired') });
+    await expect(prices.addLine(a.counter, t.id, { source: 'kind', kindId: k.id })).rejects.toMatchObject({
+      status: 422,
+      message: expect.stringContaining('retired'),
+    });
     const list = await prices.getPriceList(a.lead);
     expect(list.kinds.at(-1)).toMatchObject({ id: k.id, name: 'Take in waist (centre back)', amountMinor: 2000 });
     // Brought back: usable again at its new price.
@@ -77,13 +80,29 @@ describe('kinds of work on the price list', () => {
   });
 
   it('are kept in the history: who, when, old → new, also for the worked-out lines', async () => {
-    await prices.savePriceList(a.lead, { currency: 'EUR', hours: '', location: '', autoReadyNotice: false, items: TEST_PRICES.map((i) => (i.key === 'plain-hem' ? { ...i, amountMinor: 1900 } : i)) });
+    await prices.savePriceList(a.lead, {
+      currency: 'EUR',
+      hours: '',
+      location: '',
+      autoReadyNotice: false,
+      items: TEST_PRICES.map((i) => (i.key === 'plain-hem' ? { ...i, amountMinor: 1900 } : i)),
+    });
     await kinds.changeKind(a.lead, zip, { amountMinor: 1600 });
     const history = await kinds.priceHistory(a.lead);
-    expect(history[0]).toMatchObject({ action: 'price-kind.changed', actorName: 'lead of Thimble Row Alterations', line: 'Replace zip', changes: [{ field: 'amountMinor', from: 1500, to: 1600 }] });
+    expect(history[0]).toMatchObject({
+      action: 'price-kind.changed',
+      actorName: 'lead of Thimble Row Alterations',
+      line: 'Replace zip',
+      changes: [{ field: 'amountMinor', from: 1500, to: 1600 }],
+    });
     expect(Date.parse(history[0]!.at)).toBeGreaterThan(Date.now() - 60_000);
-    expect(history.find((h) => h.action === 'price-item.changed')).toMatchObject({ line: 'Plain hem', changes: [{ field: 'amountMinor', from: 1800, to: 1900 }] });
-    expect(history.filter((h) => h.action === 'price-kind.added').map((h) => h.line)).toEqual(expect.arrayContaining(['Replace zip', 'Taper legs', 'Press only']));
+    expect(history.find((h) => h.action === 'price-item.changed')).toMatchObject({
+      line: 'Plain hem',
+      changes: [{ field: 'amountMinor', from: 1800, to: 1900 }],
+    });
+    expect(history.filter((h) => h.action === 'price-kind.added').map((h) => h.line)).toEqual(
+      expect.arrayContaining(['Replace zip', 'Taper legs', 'Press only']),
+    );
     // A change to nothing is no change: no entry.
     await kinds.changeKind(a.lead, zip, { amountMinor: 1600 });
     expect((await kinds.priceHistory(a.lead)).length).toBe(history.length);
@@ -104,7 +123,11 @@ describe('across shops', () => {
     await expect(kinds.changeKind(b.lead, 'not-a-uuid', { amountMinor: 1 })).rejects.toMatchObject({ status: 404 });
 
     const tb = await createTicket(b.counter, { garments: [{ description: 'Rust chinos' }] });
-    const refusal = (p: Promise<unknown>) => p.then(() => [0, 'accepted'], (e: { status: number; message: string }) => [e.status, e.message]);
+    const refusal = (p: Promise<unknown>) =>
+      p.then(
+        () => [0, 'accepted'],
+        (e: { status: number; message: string }) => [e.status, e.message],
+      );
     const onTicket = await refusal(prices.addLine(b.counter, tb.id, { source: 'kind', kindId: zip }));
     const nothing = await refusal(prices.addLine(b.counter, tb.id, { source: 'kind', kindId: missing }));
     expect(onTicket).toEqual(nothing);
@@ -121,7 +144,9 @@ describe('across shops', () => {
 
   it('the database itself refuses a line of one shop carrying another shop’s kind', async () => {
     const tb = await createTicket(b.counter, { garments: [{ description: 'Rust chinos' }] });
-    await expect(db.insert(priceLines).values({ shopId: b.shopId, ticketId: tb.id, kindId: zip, source: 'list', label: 'Replace zip', amountMinor: 1500 })).rejects.toThrow();
+    await expect(
+      db.insert(priceLines).values({ shopId: b.shopId, ticketId: tb.id, kindId: zip, source: 'list', label: 'Replace zip', amountMinor: 1500 }),
+    ).rejects.toThrow();
   });
 });
 
@@ -151,7 +176,22 @@ describe('pricing at intake', () => {
     const [g] = await db.select().from(garments).where(eq(garments.ticketId, t.id));
     expect(g!.finish).toBe('hem');
     // The fitting decides a cuff whose leg narrows 1 in over 10 in: a let-out too.
-    await db.insert(measurements).values({ shopId: a.shopId, garmentId: g!.id, leg: 'left', unit: 'in', finish: 'cuff', values: { cuffDepth: { text: '1 1/2' }, widthAtEdge: { text: '8' }, widthAbove: { text: '9' }, heightAbove: { text: '10' }, seamAllowance: { text: '1' } } });
+    await db
+      .insert(measurements)
+      .values({
+        shopId: a.shopId,
+        garmentId: g!.id,
+        leg: 'left',
+        unit: 'in',
+        finish: 'cuff',
+        values: {
+          cuffDepth: { text: '1 1/2' },
+          widthAtEdge: { text: '8' },
+          widthAbove: { text: '9' },
+          heightAbove: { text: '10' },
+          seamAllowance: { text: '1' },
+        },
+      });
     const { lines } = await prices.priceFromGarments(a.counter, t.id, { rush: false });
     expect(live(lines).map((l) => [l.label, l.amountMinor])).toEqual([
       ['Replace zip — Navy twill', 1500],
@@ -169,7 +209,13 @@ describe('pricing at intake', () => {
 
 describe('rush counts the same everywhere (RUSH_RULE), kinds of work included', () => {
   it('at intake: once per ticket with work rush applies to; refused on work it does not apply to', async () => {
-    const t = await createTicket(a.counter, { rush: true, garments: [{ description: 'Navy wool', work: [zip] }, { description: 'Grey wool', work: [taper], finish: 'hem' }] });
+    const t = await createTicket(a.counter, {
+      rush: true,
+      garments: [
+        { description: 'Navy wool', work: [zip] },
+        { description: 'Grey wool', work: [taper], finish: 'hem' },
+      ],
+    });
     const lines = await prices.listLines(a.counter, t.id);
     expect(lines.filter((l) => l.key === 'rush').map((l) => [l.garmentId, l.amountMinor])).toEqual([[null, 1000]]);
     expect(lines.at(-1)!.key).toBe('rush');

@@ -62,7 +62,10 @@ describe('the Who filter per role', () => {
   });
 
   it('each option the apprentice is offered can match a row the apprentice sees', async () => {
-    const { garment: mine } = await openTicket(a, { customer: { name: 'Apprentice Customer' }, garments: [{ description: 'Apprentice pair', assigneeId: a.apprentice.userId }] });
+    const { garment: mine } = await openTicket(a, {
+      customer: { name: 'Apprentice Customer' },
+      garments: [{ description: 'Apprentice pair', assigneeId: a.apprentice.userId }],
+    });
     const rows = await open(a.apprentice);
     expect(rows.some((r) => r.id === mine.id)).toBe(true);
     expect(rows.every((r) => r.assigneeId === null || r.assigneeId === a.apprentice.userId)).toBe(true);

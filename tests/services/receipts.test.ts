@@ -6,8 +6,25 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import type { Shop } from './fixtures';
 
-const sent = vi.hoisted(() => [] as { mail: { to: string; subject: string; text: string; attachments?: { filename: string; content: Buffer; contentType: string }[] }; origin: unknown }[]);
-vi.mock('astro:env/server', () => ({ BODY_IDLE_SECONDS: 20, NOTICE_LEASE_SECONDS: 180, PAYMENTS_API_KEY: undefined, PAYMENTS_API_BASE: undefined, PAYMENTS_WEBHOOK_SECRET: undefined, SMS_ACCOUNT_SID: undefined, SMS_AUTH_TOKEN: undefined, SMS_FROM: undefined, SMS_API_BASE: undefined, BETTER_AUTH_URL: 'http://localhost:4321' }));
+const sent = vi.hoisted(
+  () =>
+    [] as {
+      mail: { to: string; subject: string; text: string; attachments?: { filename: string; content: Buffer; contentType: string }[] };
+      origin: unknown;
+    }[],
+);
+vi.mock('astro:env/server', () => ({
+  BODY_IDLE_SECONDS: 20,
+  NOTICE_LEASE_SECONDS: 180,
+  PAYMENTS_API_KEY: undefined,
+  PAYMENTS_API_BASE: undefined,
+  PAYMENTS_WEBHOOK_SECRET: undefined,
+  SMS_ACCOUNT_SID: undefined,
+  SMS_AUTH_TOKEN: undefined,
+  SMS_FROM: undefined,
+  SMS_API_BASE: undefined,
+  BETTER_AUTH_URL: 'http://localhost:4321',
+}));
 vi.mock('@/lib/mail', () => ({ sendMail: vi.fn(async (mail: (typeof sent)[number]['mail'], origin: unknown) => void sent.push({ mail, origin })) }));
 vi.mock('@/db', () => import('../db/db-mock'));
 
@@ -35,7 +52,13 @@ async function ticketFor(shop: Shop, email: string | null = 'odile.farthing@exam
 beforeAll(async () => {
   a = await makeShop('Tackstitch Alterations');
   b = await makeShop('Other Seam Shop');
-  await prices.savePriceList(a.lead, { currency: 'EUR', hours: 'Mon–Sat 9:00–17:00', location: '12 Selvedge Yard, Nethercombe', autoReadyNotice: false, items: [...TEST_PRICES] });
+  await prices.savePriceList(a.lead, {
+    currency: 'EUR',
+    hours: 'Mon–Sat 9:00–17:00',
+    location: '12 Selvedge Yard, Nethercombe',
+    autoReadyNotice: false,
+    items: [...TEST_PRICES],
+  });
 });
 afterAll(() => handle.close());
 
@@ -59,7 +82,15 @@ describe('a payment receipt', () => {
     expect(fileName).toBe(`receipt-${t.number}.pdf`);
     const file = pdfFile(pdf);
     const text = flatText(file);
-    for (const words of ['Tackstitch Alterations', '12 Selvedge Yard, Nethercombe', 'Hours: Mon–Sat 9:00–17:00', 'RECEIPT', `Ticket TA ${t.number}`, 'Odile Farthing', 'taken by counter of Tackstitch Alterations']) {
+    for (const words of [
+      'Tackstitch Alterations',
+      '12 Selvedge Yard, Nethercombe',
+      'Hours: Mon–Sat 9:00–17:00',
+      'RECEIPT',
+      `Ticket TA ${t.number}`,
+      'Odile Farthing',
+      'taken by counter of Tackstitch Alterations',
+    ]) {
       expect(text).toContain(words);
     }
     expect(text).not.toContain('Wrong tape charge');

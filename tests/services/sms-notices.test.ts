@@ -66,7 +66,8 @@ async function callRoute(request: Request): Promise<Response> {
 beforeAll(async () => {
   a = await makeShop('Textline Hems');
   b = await makeShop('Other Town Turn-ups');
-  for (const s of [a, b]) await prices.savePriceList(s.lead, { currency: 'EUR', hours: 'Tue–Sat 9:30–17:30', location: '', autoReadyNotice: false, items: [...TEST_PRICES] });
+  for (const s of [a, b])
+    await prices.savePriceList(s.lead, { currency: 'EUR', hours: 'Tue–Sat 9:30–17:30', location: '', autoReadyNotice: false, items: [...TEST_PRICES] });
   // The app's address: the fake's status callbacks come here and go to the real route handler.
   bridge = createServer(async (req, res) => {
     const chunks: Buffer[] = [];
@@ -87,7 +88,10 @@ afterAll(async () => {
 
 async function readyTicket(shop: Shop, customer: { email?: string | null; phone?: string | null; contactBy: 'email' | 'text' | 'both' }) {
   ticketNo += 1;
-  const [c] = await db.insert(customers).values({ shopId: shop.shopId, name: 'Ysolde Marrow', email: customer.email ?? null, phone: customer.phone ?? null, contactBy: customer.contactBy }).returning();
+  const [c] = await db
+    .insert(customers)
+    .values({ shopId: shop.shopId, name: 'Ysolde Marrow', email: customer.email ?? null, phone: customer.phone ?? null, contactBy: customer.contactBy })
+    .returning();
   const [t] = await db.insert(tickets).values({ shopId: shop.shopId, number: ticketNo, customerId: c!.id, status: 'ready' }).returning();
   await prices.addLine(shop.counter, t!.id, { source: 'list', key: 'plain-hem' });
   return t!;
@@ -128,10 +132,16 @@ describe('the ready notice by the customer preference', () => {
     expect(mail.sent).toEqual([]);
     const [recorded] = await db.select().from(sentMail).where(eq(sentMail.messageId, text!.sid));
     expect([recorded!.shopId, recorded!.channel, recorded!.kind, recorded!.body]).toEqual([a.shopId, 'sms', 'ready-notice', text!.body]);
-    const [delivered] = await until(() => rowsOf(t.id), (rows) => rows[0]?.delivery === 'delivered');
+    const [delivered] = await until(
+      () => rowsOf(t.id),
+      (rows) => rows[0]?.delivery === 'delivered',
+    );
     expect([delivered!.delivery, delivered!.deliveryError]).toEqual(['delivered', null]);
     // The fake notes the app's answer once it arrives (after the row is written).
-    await until(async () => text!.callbacks.length, (n) => n > 0);
+    await until(
+      async () => text!.callbacks.length,
+      (n) => n > 0,
+    );
     expect(text!.callbacks).toEqual([{ status: 'delivered', answer: 200 }]);
   });
 
@@ -153,7 +163,10 @@ describe('the ready notice by the customer preference', () => {
     sms.on = true;
     const t = await readyTicket(a, { phone: '+1 555 010 9999', contactBy: 'text' });
     await notice.sendReadyNotice(a.counter, t.id);
-    const [row] = await until(() => rowsOf(t.id), (rows) => rows[0]?.delivery === 'failed');
+    const [row] = await until(
+      () => rowsOf(t.id),
+      (rows) => rows[0]?.delivery === 'failed',
+    );
     expect([row!.status, row!.delivery, row!.deliveryError]).toEqual(['sent', 'failed', 'error 30003']);
   });
 
@@ -170,7 +183,10 @@ describe('the ready notice by the customer preference', () => {
     expect(mail.sent.map((m) => m.to)).toEqual(['off@example.com', 'nophone@example.com']);
     const nobody = await readyTicket(a, { phone: '07700 900321', contactBy: 'text' });
     sms.on = false;
-    await expect(notice.sendReadyNotice(a.counter, nobody.id)).rejects.toMatchObject({ status: 422, message: 'Text messages are not set up for this shop, and the customer has no e-mail address: add one, or call them.' });
+    await expect(notice.sendReadyNotice(a.counter, nobody.id)).rejects.toMatchObject({
+      status: 422,
+      message: 'Text messages are not set up for this shop, and the customer has no e-mail address: add one, or call them.',
+    });
     expect(await rowsOf(nobody.id)).toEqual([]);
     sms.on = true;
   });
@@ -197,7 +213,9 @@ describe('the pay link by text or e-mail', () => {
     const t = await readyTicket(a, { email: 'payer@example.com', phone: '07700 900111', contactBy: 'email' });
     await expect(notice.sendPayLink(a.counter, t.id, 'sms')).rejects.toMatchObject({ status: 409 });
     const url = 'http://127.0.0.1:9/pay/cs_test_invented';
-    await db.insert(paymentLinks).values({ shopId: a.shopId, ticketId: t.id, sessionId: `cs_test_${t.id}`, url, amountMinor: 1800, currency: 'EUR', status: 'open' });
+    await db
+      .insert(paymentLinks)
+      .values({ shopId: a.shopId, ticketId: t.id, sessionId: `cs_test_${t.id}`, url, amountMinor: 1800, currency: 'EUR', status: 'open' });
     const byText = await notice.sendPayLink(a.counter, t.id, 'sms');
     expect([byText.kind, byText.channel, byText.sequence, byText.status]).toEqual(['pay-link', 'sms', 1, 'sent']);
     expect(textsTo('07700900111').map((m: { body: string }) => m.body)).toEqual([`Textline Hems: pay €18.00 for ticket TH ${t.number} online: ${url}`]);
@@ -207,7 +225,10 @@ describe('the pay link by text or e-mail', () => {
     const again = await notice.sendPayLink(a.counter, t.id, 'sms');
     expect(again.sequence).toBe(2);
     sms.on = false;
-    await expect(notice.sendPayLink(a.counter, t.id, 'sms')).rejects.toMatchObject({ status: 422, message: 'Text messages are not set up for this shop: send the link by e-mail instead.' });
+    await expect(notice.sendPayLink(a.counter, t.id, 'sms')).rejects.toMatchObject({
+      status: 422,
+      message: 'Text messages are not set up for this shop: send the link by e-mail instead.',
+    });
     sms.on = true;
     await expect(notice.sendPayLink(b.counter, t.id, 'sms')).rejects.toMatchObject({ status: 404 });
   });
@@ -218,7 +239,10 @@ describe('the status callback', () => {
     sms.on = true;
     const t = await readyTicket(a, { phone: '07700 900222', contactBy: 'text' });
     const sent = await notice.sendReadyNotice(a.counter, t.id);
-    await until(() => rowsOf(t.id), (rows) => rows[0]?.delivery === 'delivered');
+    await until(
+      () => rowsOf(t.id),
+      (rows) => rows[0]?.delivery === 'delivered',
+    );
     const fields = { MessageSid: sent.providerId!, MessageStatus: 'failed', ErrorCode: '30005', AccountSid: sms.account.accountSid };
     expect((await callRoute(signedReport(sent.id, fields, sms.account.authToken, null))).status).toBe(403);
     expect((await callRoute(signedReport(sent.id, fields, 'another-accounts-token'))).status).toBe(403);
@@ -241,12 +265,21 @@ describe('the status callback', () => {
     const tb = await readyTicket(b, { phone: '07700 900444', contactBy: 'text' });
     const na = await notice.sendReadyNotice(a.counter, ta.id);
     const nb = await notice.sendReadyNotice(b.counter, tb.id);
-    await until(() => rowsOf(tb.id), (rows) => rows[0]?.delivery === 'delivered');
-    await until(() => rowsOf(ta.id), (rows) => rows[0]?.delivery === 'delivered');
+    await until(
+      () => rowsOf(tb.id),
+      (rows) => rows[0]?.delivery === 'delivered',
+    );
+    await until(
+      () => rowsOf(ta.id),
+      (rows) => rows[0]?.delivery === 'delivered',
+    );
     // Replayed with B's notice id in the address (and a valid signature over it).
     const replay = await callRoute(signedReport(nb.id, { MessageSid: na.providerId!, MessageStatus: 'undelivered', ErrorCode: '30006' }));
     expect([replay.status, await replay.json()]).toEqual([200, { received: true, recorded: false }]);
-    const [rowB] = await db.select().from(notices).where(and(eq(notices.id, nb.id), eq(notices.shopId, b.shopId)));
+    const [rowB] = await db
+      .select()
+      .from(notices)
+      .where(and(eq(notices.id, nb.id), eq(notices.shopId, b.shopId)));
     const [rowA] = await db.select().from(notices).where(eq(notices.id, na.id));
     expect([rowA!.delivery, rowB!.delivery]).toEqual(['delivered', 'delivered']);
     // Not a notice id at all: nothing recorded, no error.
@@ -257,8 +290,24 @@ describe('the status callback', () => {
   it('takes a report that comes before the send is written down, on that text notice only', async () => {
     const t = await readyTicket(a, { email: 'early@example.com', phone: '07700 900555', contactBy: 'both' });
     // As the rows stand between the service's answer and this server writing its id down.
-    const [text] = await db.insert(notices).values({ shopId: a.shopId, ticketId: t.id, kind: 'ready', channel: 'sms', to: '07700 900555', subject: 's', body: 'b', status: 'queued', attempts: 1 }).returning();
-    const [email] = await db.insert(notices).values({ shopId: a.shopId, ticketId: t.id, kind: 'ready', channel: 'email', to: 'early@example.com', subject: 's', body: 'b', status: 'sent', attempts: 1 }).returning();
+    const [text] = await db
+      .insert(notices)
+      .values({ shopId: a.shopId, ticketId: t.id, kind: 'ready', channel: 'sms', to: '07700 900555', subject: 's', body: 'b', status: 'queued', attempts: 1 })
+      .returning();
+    const [email] = await db
+      .insert(notices)
+      .values({
+        shopId: a.shopId,
+        ticketId: t.id,
+        kind: 'ready',
+        channel: 'email',
+        to: 'early@example.com',
+        subject: 's',
+        body: 'b',
+        status: 'sent',
+        attempts: 1,
+      })
+      .returning();
     const onEmail = await callRoute(signedReport(email!.id, { MessageSid: 'SMearly000', MessageStatus: 'delivered' }));
     expect(await onEmail.json()).toEqual({ received: true, recorded: false });
     const early = await callRoute(signedReport(text!.id, { MessageSid: 'SMearly000', MessageStatus: 'delivered' }));

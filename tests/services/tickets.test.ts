@@ -73,7 +73,12 @@ describe('tickets', () => {
     const tailors = await createTicket(a.lead, { note: 'for the tailor', garments: [{ description: 'y', assigneeId: a.tailor.userId }] });
     // Split work: the ticket stands under the first garment's person, and the apprentice still sees
     // it, with only the garments the queue shows them (theirs, nobody's).
-    const split = await createTicket(a.lead, { garments: [{ description: 'p', assigneeId: a.tailor.userId }, { description: 'q', assigneeId: a.apprentice.userId }] });
+    const split = await createTicket(a.lead, {
+      garments: [
+        { description: 'p', assigneeId: a.tailor.userId },
+        { description: 'q', assigneeId: a.apprentice.userId },
+      ],
+    });
     const partOpen = await createTicket(a.lead, { garments: [{ description: 'r', assigneeId: a.tailor.userId }, { description: 's' }] });
     expect([theirs.assigneeId, tailors.assigneeId, split.assigneeId, open.assigneeId]).toEqual([a.apprentice.userId, a.tailor.userId, a.tailor.userId, null]);
     const seen = (await listTickets(a.apprentice)).map((t) => t.id);

@@ -20,11 +20,7 @@ function AcceptInviteForm({ id, email, signedIn }: { id: string; email: string; 
     return (
       <div className="flex flex-col gap-4">
         {accept.error && <FormMessage kind="error">{accept.error.message}</FormMessage>}
-        <button
-          type="button"
-          onClick={() => accept.mutate(undefined)}
-          className="min-h-11 rounded bg-accent px-5 py-2 text-lg font-semibold text-white"
-        >
+        <button type="button" onClick={() => accept.mutate(undefined)} className="min-h-11 rounded bg-accent px-5 py-2 text-lg font-semibold text-white">
           Join the shop
         </button>
       </div>
@@ -36,7 +32,14 @@ function AcceptInviteForm({ id, email, signedIn }: { id: string; email: string; 
         Your sign-in will be <strong>{email}</strong>.
       </p>
       <Field label="Your name" autoComplete="name" registration={register('name')} error={formState.errors.name} />
-      <Field label="Choose a password" type="password" autoComplete="new-password" hint="At least 10 characters." registration={register('password')} error={formState.errors.password} />
+      <Field
+        label="Choose a password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters."
+        registration={register('password')}
+        error={formState.errors.password}
+      />
       {accept.error && <FormMessage kind="error">{accept.error.message}</FormMessage>}
       <SubmitButton busy={accept.isPending || accept.isSuccess}>Join the shop</SubmitButton>
     </form>

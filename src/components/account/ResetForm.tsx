@@ -18,13 +18,24 @@ function ResetForm({ token }: { token: string }) {
   if (reset.isSuccess) {
     return (
       <FormMessage kind="ok">
-        Your password is changed. <a href="/sign-in" className="text-accent underline">Sign in</a> with it.
+        Your password is changed.{' '}
+        <a href="/sign-in" className="text-accent underline">
+          Sign in
+        </a>{' '}
+        with it.
       </FormMessage>
     );
   }
   return (
     <form onSubmit={handleSubmit((v) => reset.mutate(v))} className="flex flex-col gap-4" noValidate>
-      <Field label="New password" type="password" autoComplete="new-password" hint="At least 10 characters." registration={register('password')} error={formState.errors.password} />
+      <Field
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters."
+        registration={register('password')}
+        error={formState.errors.password}
+      />
       <Field label="The same again" type="password" autoComplete="new-password" registration={register('confirm')} error={formState.errors.confirm} />
       {reset.error && <FormMessage kind="error">{reset.error.message}</FormMessage>}
       <SubmitButton busy={reset.isPending}>Change the password</SubmitButton>

@@ -37,7 +37,14 @@ function SettingsForm({ initial }: { initial: BenchSettings }) {
         <legend className="px-1 text-xl font-extrabold">The shop’s words for the steps</legend>
         <p className="text-muted sm:col-span-2">Leave a name blank for the usual one. The order stays as it is.</p>
         {GARMENT_STEPS.map((s, i) => (
-          <Field key={s} label={`Step ${i + 1}`} registration={register(`stepLabels.${s}`)} placeholder={DEFAULT_STEP_LABELS[s]} id={`step-${s}`} error={formState.errors.stepLabels?.[s]} />
+          <Field
+            key={s}
+            label={`Step ${i + 1}`}
+            registration={register(`stepLabels.${s}`)}
+            placeholder={DEFAULT_STEP_LABELS[s]}
+            id={`step-${s}`}
+            error={formState.errors.stepLabels?.[s]}
+          />
         ))}
       </fieldset>
       <fieldset className="flex flex-col gap-2 rounded-lg border-2 border-rule bg-card p-4">
@@ -51,14 +58,21 @@ function SettingsForm({ initial }: { initial: BenchSettings }) {
       </fieldset>
       {save.error && <FormMessage kind="error">Not saved: {save.error.message}</FormMessage>}
       {save.isSuccess && <FormMessage kind="ok">Saved.</FormMessage>}
-      <div><SubmitButton busy={save.isPending}>Save settings</SubmitButton></div>
+      <div>
+        <SubmitButton busy={save.isPending}>Save settings</SubmitButton>
+      </div>
     </form>
   );
 }
 
 function Loader() {
   const settings = useBenchSettings();
-  if (settings.isError) return <p role="alert" className="font-semibold text-cut">{settings.error.message}</p>;
+  if (settings.isError)
+    return (
+      <p role="alert" className="font-semibold text-cut">
+        {settings.error.message}
+      </p>
+    );
   if (settings.isPending) return <p className="text-muted">Loading…</p>;
   return <SettingsForm initial={settings.data} />;
 }

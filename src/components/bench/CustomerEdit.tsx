@@ -17,7 +17,13 @@ export function CustomerEdit({ customer, onDone }: { customer: CustomerCard; onD
   const client = useQueryClient();
   const { register, handleSubmit, formState, setError } = useForm<Form, unknown, Patch>({
     resolver,
-    defaultValues: { name: customer.name, phone: customer.phone ?? '', email: customer.email ?? '', notes: customer.notes ?? '', contactBy: customer.contactBy ?? 'email' },
+    defaultValues: {
+      name: customer.name,
+      phone: customer.phone ?? '',
+      email: customer.email ?? '',
+      notes: customer.notes ?? '',
+      contactBy: customer.contactBy ?? 'email',
+    },
   });
   const save = useMutation({
     mutationFn: (body: Patch) => fetchJson(`/api/customers/${customer.id}`, { method: 'PATCH', body }),
@@ -31,7 +37,12 @@ export function CustomerEdit({ customer, onDone }: { customer: CustomerCard; onD
   });
   const e = formState.errors;
   return (
-    <form noValidate aria-label="Edit the customer" onSubmit={handleSubmit((v) => save.mutate(v))} className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4">
+    <form
+      noValidate
+      aria-label="Edit the customer"
+      onSubmit={handleSubmit((v) => save.mutate(v))}
+      className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4"
+    >
       <div className="grid gap-3 sm:grid-cols-2">
         <Field label="Name" registration={register('name')} error={e.name} id="cust-name" autoComplete="off" />
         <Field label="Phone" type="tel" registration={register('phone')} error={e.phone} id="cust-phone" autoComplete="off" />
@@ -42,7 +53,9 @@ export function CustomerEdit({ customer, onDone }: { customer: CustomerCard; onD
       {save.error && <FormMessage kind="error">Not saved: {save.error.message}</FormMessage>}
       <div className="flex flex-wrap gap-3">
         <SubmitButton busy={save.isPending}>Save customer</SubmitButton>
-        <button type="button" onClick={onDone} className="min-h-11 rounded border-2 border-ink px-4 text-lg font-semibold">Cancel</button>
+        <button type="button" onClick={onDone} className="min-h-11 rounded border-2 border-ink px-4 text-lg font-semibold">
+          Cancel
+        </button>
       </div>
     </form>
   );

@@ -5,7 +5,17 @@ import { EXISTING_FINISHES, EXISTING_FINISH_LABELS } from '@/lib/existing-finish
 const HINT = 'What the bottoms are now. An old cuff is let down and pressed out before the new finish is made.';
 
 /** The "Existing finish" choice of a garment (plain hem, cuff, unfinished), labelled, with its hint. */
-export function ExistingFinishSelect({ id, registration, error, hint = true }: { id: string; registration: UseFormRegisterReturn; error?: FieldError; hint?: boolean }) {
+export function ExistingFinishSelect({
+  id,
+  registration,
+  error,
+  hint = true,
+}: {
+  id: string;
+  registration: UseFormRegisterReturn;
+  error?: FieldError;
+  hint?: boolean;
+}) {
   return (
     <FieldFrame id={id} label="Existing finish" hint={hint ? HINT : undefined} error={error?.message}>
       <select

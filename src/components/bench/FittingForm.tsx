@@ -11,15 +11,7 @@ import type { Precision, Unit } from '@/lib/allowance/types';
 import type { FittingView } from '@/lib/bench-types';
 import type { PresetView } from '@/lib/preset-settings';
 import { ApiError, fetchJson } from '@/lib/fetch-json';
-import {
-  LEGS,
-  legFormValues,
-  measurementsRequest,
-  type Leg,
-  type LegLength,
-  type Measurements,
-  type MeasurementsInput,
-} from '@/lib/measurement-request';
+import { LEGS, legFormValues, measurementsRequest, type Leg, type LegLength, type Measurements, type MeasurementsInput } from '@/lib/measurement-request';
 import { readLength } from '@/lib/length-reading';
 import { afterSave } from './after-save';
 import { LegFields } from './LegFields';
@@ -198,7 +190,13 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
           // A field brought into view (focus, Tab) stops below the summary bar, never under it.
           className="flex flex-col gap-5 rounded-lg border-2 border-rule bg-card p-4 [&_input]:scroll-mt-48"
         >
-          <Segmented name="leg" legend="Leg" value={leg} onChange={setLeg} options={LEGS.map((l) => ({ value: l, label: l === 'left' ? 'Left leg' : 'Right leg' }))} />
+          <Segmented
+            name="leg"
+            legend="Leg"
+            value={leg}
+            onChange={setLeg}
+            options={LEGS.map((l) => ({ value: l, label: l === 'left' ? 'Left leg' : 'Right leg' }))}
+          />
           <p className="text-base text-muted">
             Lengths in <strong className="text-ink">{values.unit}</strong>; fractions welcome (1 1/2, 1½, 31 3/4 + 1/8), or name a unit (38 mm).
           </p>
@@ -241,7 +239,11 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
                 <span>
                   From house default: <strong>{values.legs[leg].preset}</strong> {presetLine(presets.data?.find((p) => p.id === fromDefault))}
                 </span>
-                <button type="button" onClick={() => setPresetsOpen(true)} className="min-h-11 rounded border-2 border-accent px-3 text-base font-semibold text-accent">
+                <button
+                  type="button"
+                  onClick={() => setPresetsOpen(true)}
+                  className="min-h-11 rounded border-2 border-accent px-3 text-base font-semibold text-accent"
+                >
                   Change
                 </button>
               </>
@@ -298,8 +300,16 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
                 Saved. What you typed while it was saving is kept here, not yet saved.
               </p>
             )}
-            <button type="submit" disabled={save.isPending} className="min-h-14 rounded-lg bg-accent px-5 text-xl font-extrabold text-white disabled:opacity-60">
-              {save.isPending ? 'Saving…' : formState.isDirty || (fromDefault && fitting.legs.length === 0) ? 'Save measurements' : 'Save measurements (no changes)'}
+            <button
+              type="submit"
+              disabled={save.isPending}
+              className="min-h-14 rounded-lg bg-accent px-5 text-xl font-extrabold text-white disabled:opacity-60"
+            >
+              {save.isPending
+                ? 'Saving…'
+                : formState.isDirty || (fromDefault && fitting.legs.length === 0)
+                  ? 'Save measurements'
+                  : 'Save measurements (no changes)'}
             </button>
           </div>
         </form>

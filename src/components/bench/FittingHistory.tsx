@@ -15,7 +15,15 @@ interface Props {
   precision: Precision;
 }
 
-const OTHER_FIELDS: Record<string, string> = { finish: 'Finish', preset: 'Preset', unit: 'Unit', description: 'Description', dueOn: 'Due date', assigneeId: 'Given to', existingFinish: 'Existing finish' };
+const OTHER_FIELDS: Record<string, string> = {
+  finish: 'Finish',
+  preset: 'Preset',
+  unit: 'Unit',
+  description: 'Description',
+  dueOn: 'Due date',
+  assigneeId: 'Given to',
+  existingFinish: 'Existing finish',
+};
 
 function fieldName(field: string): string {
   return LEG_LENGTH_LABELS[field as LegLength] ?? OTHER_FIELDS[field] ?? field;
@@ -61,7 +69,9 @@ function ordered(history: AuditEntry[]): AuditEntry[] {
 export function FittingHistory({ history, label, unit, precision }: Props) {
   return (
     <section aria-labelledby="history-heading" className="flex flex-col gap-2">
-      <h2 id="history-heading" className="text-2xl font-extrabold">History</h2>
+      <h2 id="history-heading" className="text-2xl font-extrabold">
+        History
+      </h2>
       {history.length === 0 ? (
         <p className="text-muted">No changes recorded yet.</p>
       ) : (

@@ -35,7 +35,18 @@ interface Props {
   print?: { scale: Scale } | null;
 }
 
-function Bench({ garmentId, shopName, canEditGarment, canEditFitting, canReadFitting, canAdvance, canPickup, canReopen = false, canUploadPhotos, print = null }: Props) {
+function Bench({
+  garmentId,
+  shopName,
+  canEditGarment,
+  canEditFitting,
+  canReadFitting,
+  canAdvance,
+  canPickup,
+  canReopen = false,
+  canUploadPhotos,
+  print = null,
+}: Props) {
   const garment = useQuery({ queryKey: ['garment', garmentId], queryFn: () => fetchJson<GarmentDetail>(`/api/garments/${garmentId}`) });
   const fitting = useQuery({
     queryKey: ['fitting', garmentId],
@@ -48,7 +59,12 @@ function Bench({ garmentId, shopName, canEditGarment, canEditFitting, canReadFit
   // The fitting form's unsaved state and its save, so printing never quietly prints stale lengths.
   const [fittingDirty, setFittingDirty] = useState(false);
   const saveFitting = useRef<(() => Promise<boolean>) | null>(null);
-  if (garment.isError) return <p role="alert" className="text-xl font-semibold text-cut">{garment.error.message}</p>;
+  if (garment.isError)
+    return (
+      <p role="alert" className="text-xl font-semibold text-cut">
+        {garment.error.message}
+      </p>
+    );
   if (garment.isPending || settings.isPending) return <p className="text-xl text-muted">Loading the garment…</p>;
   const g = garment.data;
   const { unit, precision } = scaleUnit(settings.data?.scale ?? 'in8');
@@ -57,18 +73,25 @@ function Bench({ garmentId, shopName, canEditGarment, canEditFitting, canReadFit
     <div className="flex flex-col gap-6">
       <header className="flex flex-col gap-3">
         <p className="text-lg">
-          <a href={`/tickets/${g.ticket.id}`} className="font-extrabold text-accent underline">{ticketLabel(g.ticket.number, shopName)}</a>
+          <a href={`/tickets/${g.ticket.id}`} className="font-extrabold text-accent underline">
+            {ticketLabel(g.ticket.number, shopName)}
+          </a>
           {g.customer && <> · {g.customer.name}</>}
           {g.customer?.phone && <span className="text-muted"> · {g.customer.phone}</span>}
         </p>
         <h1 className="text-4xl font-extrabold">{g.description}</h1>
         <dl className="grid gap-x-8 gap-y-1 text-lg sm:grid-cols-[auto_1fr]">
           <dt className="font-semibold">Due</dt>
-          <dd><DueBadge dueOn={g.dueOn} /></dd>
+          <dd>
+            <DueBadge dueOn={g.dueOn} />
+          </dd>
           <dt className="font-semibold">Given to</dt>
           <dd>{g.assigneeName ?? 'Nobody yet'}</dd>
           <dt className="font-semibold">Existing finish</dt>
-          <dd>{EXISTING_FINISH_LABELS[g.existingFinish]}{g.existingFinish === 'cuff' && ': let down and press out the old creases first'}</dd>
+          <dd>
+            {EXISTING_FINISH_LABELS[g.existingFinish]}
+            {g.existingFinish === 'cuff' && ': let down and press out the old creases first'}
+          </dd>
           {g.customer?.notes && (
             <>
               <dt className="font-semibold">Customer notes</dt>
@@ -89,7 +112,11 @@ function Bench({ garmentId, shopName, canEditGarment, canEditFitting, canReadFit
         <ol aria-label="Bench steps" data-testid="step-record" className="flex flex-wrap items-baseline gap-x-2 gap-y-1 text-lg">
           {GARMENT_STEPS.map((s, i) => (
             <li key={s} aria-current={i === at ? 'step' : undefined} className="inline-flex items-baseline gap-2">
-              {i > 0 && <span aria-hidden="true" className="text-muted">›</span>}
+              {i > 0 && (
+                <span aria-hidden="true" className="text-muted">
+                  ›
+                </span>
+              )}
               <span className={i === at ? 'font-extrabold text-ink underline decoration-4 underline-offset-4' : i < at ? 'text-ok' : 'text-muted'}>
                 {i < at && <span aria-hidden="true">✓ </span>}
                 {label(s)}
@@ -111,7 +138,9 @@ function Bench({ garmentId, shopName, canEditGarment, canEditFitting, canReadFit
         (fitting.isPending ? (
           <p className="text-lg text-muted">Loading the fitting…</p>
         ) : fitting.isError ? (
-          <p role="alert" className="font-semibold text-cut">{fitting.error.message}</p>
+          <p role="alert" className="font-semibold text-cut">
+            {fitting.error.message}
+          </p>
         ) : canEditFitting ? (
           <FittingForm
             garmentId={g.id}
@@ -127,8 +156,12 @@ function Bench({ garmentId, shopName, canEditGarment, canEditFitting, canReadFit
         ))}
 
       {print && (
-        <PrintCutSheet garmentId={g.id} scale={print.scale} unsaved={canEditFitting && fittingDirty}
-          save={() => saveFitting.current?.() ?? Promise.resolve(false)} />
+        <PrintCutSheet
+          garmentId={g.id}
+          scale={print.scale}
+          unsaved={canEditFitting && fittingDirty}
+          save={() => saveFitting.current?.() ?? Promise.resolve(false)}
+        />
       )}
 
       {/* The photos island brings its own "Fitting photos" heading. */}

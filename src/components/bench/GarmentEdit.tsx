@@ -19,7 +19,12 @@ export function GarmentEdit({ garment, onDone }: { garment: GarmentDetail; onDon
   const people = useAssignees();
   const { register, handleSubmit, formState, setError } = useForm<Form, unknown, Patch>({
     resolver,
-    defaultValues: { description: garment.description, dueOn: garment.dueOn ?? '', assigneeId: garment.assigneeId ?? '', existingFinish: garment.existingFinish },
+    defaultValues: {
+      description: garment.description,
+      dueOn: garment.dueOn ?? '',
+      assigneeId: garment.assigneeId ?? '',
+      existingFinish: garment.existingFinish,
+    },
   });
   const save = useMutation({
     mutationFn: (body: Patch) => fetchJson(`/api/garments/${garment.id}`, { method: 'PATCH', body }),
@@ -32,15 +37,28 @@ export function GarmentEdit({ garment, onDone }: { garment: GarmentDetail; onDon
     },
   });
   return (
-    <form noValidate aria-label="Edit the garment" onSubmit={handleSubmit((v) => save.mutate(v))} className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4">
+    <form
+      noValidate
+      aria-label="Edit the garment"
+      onSubmit={handleSubmit((v) => save.mutate(v))}
+      className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4"
+    >
       <div className="grid items-start gap-3 sm:grid-cols-[2fr_1fr_1fr]">
         <Field label="Garment" registration={register('description')} error={formState.errors.description} id="edit-description" />
         <Field label="Due" type="date" registration={register('dueOn')} error={formState.errors.dueOn} id="edit-due" />
         <div className="flex flex-col gap-1">
-          <label htmlFor="edit-who" className="font-semibold">Given to</label>
+          <label htmlFor="edit-who" className="font-semibold">
+            Given to
+          </label>
           <select id="edit-who" {...register('assigneeId')} className="min-h-11 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent">
             <option value="">Nobody yet</option>
-            {people.data?.filter((p) => p.role !== 'counter').map((p) => <option key={p.userId} value={p.userId}>{p.name}</option>)}
+            {people.data
+              ?.filter((p) => p.role !== 'counter')
+              .map((p) => (
+                <option key={p.userId} value={p.userId}>
+                  {p.name}
+                </option>
+              ))}
           </select>
         </div>
         <ExistingFinishSelect id="edit-existing" registration={register('existingFinish')} error={formState.errors.existingFinish} />
@@ -48,7 +66,9 @@ export function GarmentEdit({ garment, onDone }: { garment: GarmentDetail; onDon
       {save.error && <FormMessage kind="error">Not saved: {save.error.message}</FormMessage>}
       <div className="flex flex-wrap gap-3">
         <SubmitButton busy={save.isPending}>Save</SubmitButton>
-        <button type="button" onClick={onDone} className="min-h-11 rounded border-2 border-ink px-4 text-lg font-semibold">Cancel</button>
+        <button type="button" onClick={onDone} className="min-h-11 rounded border-2 border-ink px-4 text-lg font-semibold">
+          Cancel
+        </button>
       </div>
     </form>
   );

@@ -8,7 +8,9 @@ export function HemTaperCheck({ taper }: { taper: TaperPlan }) {
   if (!cut) return null;
   return (
     <section aria-labelledby="hem-taper-heading" data-testid="hem-taper" className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4">
-      <h3 id="hem-taper-heading" className="text-xl font-extrabold">Tapered leg under a plain hem</h3>
+      <h3 id="hem-taper-heading" className="text-xl font-extrabold">
+        Tapered leg under a plain hem
+      </h3>
       <p className="text-lg">
         Turned up, the hem lies against the leg <span className="measure font-extrabold">{cut.belowMark.text}</span> above the finished edge, where it is{' '}
         <span className="measure font-extrabold">{taper.targetWidth.text}</span> flat.{' '}

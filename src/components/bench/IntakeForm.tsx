@@ -20,7 +20,15 @@ type Form = IntakeInput & { garments: NonNullable<IntakeInput['garments']> };
 const resolver = zodResolver(intakeRequest) as unknown as Resolver<Form, unknown, Intake>;
 const SELECT = 'min-h-12 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent';
 // A pair comes in with a plain hem unless the counter says otherwise (DEFAULT_EXISTING_FINISH).
-const NEW_GARMENT = { description: '', dueOn: '', assigneeId: '', existingFinish: DEFAULT_EXISTING_FINISH, fittingFrom: '', finish: '' as '' | 'hem' | 'cuff', work: [] as string[] };
+const NEW_GARMENT = {
+  description: '',
+  dueOn: '',
+  assigneeId: '',
+  existingFinish: DEFAULT_EXISTING_FINISH,
+  fittingFrom: '',
+  finish: '' as '' | 'hem' | 'cuff',
+  work: [] as string[],
+};
 
 /** Pricing at intake is the counter's and the lead's (prices/adjust): others take work in unpriced. */
 function Intake({ canPrice = false }: { canPrice?: boolean }) {
@@ -54,7 +62,9 @@ function Intake({ canPrice = false }: { canPrice?: boolean }) {
   });
   const submit = handleSubmit((v) => {
     if (who === 'existing' && !v.customerId) return setError('customerId', { message: 'Choose a customer, or add a new one.' });
-    open.mutate(who === 'existing' ? { ...v, customer: undefined } : { ...v, customerId: null, garments: v.garments.map((g) => ({ ...g, fittingFrom: null })) });
+    open.mutate(
+      who === 'existing' ? { ...v, customer: undefined } : { ...v, customerId: null, garments: v.garments.map((g) => ({ ...g, fittingFrom: null })) },
+    );
   });
   const e = formState.errors;
   return (
@@ -66,11 +76,28 @@ function Intake({ canPrice = false }: { canPrice?: boolean }) {
             <input type="radio" name="who" checked={who === 'existing'} onChange={() => setWho('existing')} className="size-5" /> Someone we know
           </label>
           <label className="inline-flex min-h-11 items-center gap-2">
-            <input type="radio" name="who" checked={who === 'new'} onChange={() => { setWho('new'); chooseKnown(null); }} className="size-5" /> A new customer
+            <input
+              type="radio"
+              name="who"
+              checked={who === 'new'}
+              onChange={() => {
+                setWho('new');
+                chooseKnown(null);
+              }}
+              className="size-5"
+            />{' '}
+            A new customer
           </label>
         </div>
         {who === 'existing' ? (
-          <CustomerSearch id="customerId" label="Find the customer" chosen={known} onChoose={chooseKnown} error={e.customerId?.message} hint="Type a name, a phone number (any part), an e-mail or a ticket number." />
+          <CustomerSearch
+            id="customerId"
+            label="Find the customer"
+            chosen={known}
+            onChoose={chooseKnown}
+            error={e.customerId?.message}
+            hint="Type a name, a phone number (any part), an e-mail or a ticket number."
+          />
         ) : (
           <div className="grid gap-3 sm:grid-cols-2">
             <Field label="Name" registration={register('customer.name')} error={e.customer?.name} id="c-name" autoComplete="off" />
@@ -86,18 +113,42 @@ function Intake({ canPrice = false }: { canPrice?: boolean }) {
         <legend className="px-1 text-xl font-extrabold">Garments</legend>
         {garments.fields.map((f, i) => (
           <div key={f.id} className="grid items-end gap-3 border-b border-rule pb-3 sm:grid-cols-2 lg:grid-cols-[minmax(0,2fr)_repeat(3,minmax(0,1fr))_auto]">
-            <Field label={`Garment ${i + 1}`} registration={register(`garments.${i}.description`)} error={e.garments?.[i]?.description} id={`g-${i}-description`} placeholder="e.g. Navy wool trousers, cuffs" />
-            <ExistingFinishSelect id={`g-${i}-existing`} registration={register(`garments.${i}.existingFinish`)} error={e.garments?.[i]?.existingFinish} hint={false} />
+            <Field
+              label={`Garment ${i + 1}`}
+              registration={register(`garments.${i}.description`)}
+              error={e.garments?.[i]?.description}
+              id={`g-${i}-description`}
+              placeholder="e.g. Navy wool trousers, cuffs"
+            />
+            <ExistingFinishSelect
+              id={`g-${i}-existing`}
+              registration={register(`garments.${i}.existingFinish`)}
+              error={e.garments?.[i]?.existingFinish}
+              hint={false}
+            />
             <Field label="Due" type="date" registration={register(`garments.${i}.dueOn`)} error={e.garments?.[i]?.dueOn} id={`g-${i}-due`} />
             <div className="flex flex-col gap-1">
-              <label htmlFor={`g-${i}-who`} className="font-semibold">Given to</label>
+              <label htmlFor={`g-${i}-who`} className="font-semibold">
+                Given to
+              </label>
               <select id={`g-${i}-who`} {...register(`garments.${i}.assigneeId`)} className={SELECT}>
                 <option value="">Nobody yet</option>
-                {people.data?.filter((p) => p.role !== 'counter').map((p) => <option key={p.userId} value={p.userId}>{p.name}</option>)}
+                {people.data
+                  ?.filter((p) => p.role !== 'counter')
+                  .map((p) => (
+                    <option key={p.userId} value={p.userId}>
+                      {p.name}
+                    </option>
+                  ))}
               </select>
             </div>
             {garments.fields.length > 1 && (
-              <button type="button" aria-label={`Remove: garment ${i + 1}`} onClick={() => garments.remove(i)} className="min-h-12 justify-self-start rounded border-2 border-ink px-3 font-semibold">
+              <button
+                type="button"
+                aria-label={`Remove: garment ${i + 1}`}
+                onClick={() => garments.remove(i)}
+                className="min-h-12 justify-self-start rounded border-2 border-ink px-3 font-semibold"
+              >
                 Remove
               </button>
             )}
@@ -113,13 +164,25 @@ function Intake({ canPrice = false }: { canPrice?: boolean }) {
             )}
             {offers.length > 0 && (
               <div className="sm:col-span-2 lg:col-span-5">
-                <SameAsLastTime garmentLabel={`garment ${i + 1}`} fittings={offers} chosen={fittingFrom[i]} onChoose={(id) => setValue(`garments.${i}.fittingFrom`, id ?? '')} />
+                <SameAsLastTime
+                  garmentLabel={`garment ${i + 1}`}
+                  fittings={offers}
+                  chosen={fittingFrom[i]}
+                  onChoose={(id) => setValue(`garments.${i}.fittingFrom`, id ?? '')}
+                />
               </div>
             )}
           </div>
         ))}
-        <p className="text-sm text-muted">Existing finish: what the bottoms are now. An old cuff is let down and pressed out before the new finish is made, and the price list's line for that is added by itself.</p>
-        <button type="button" onClick={() => garments.append({ ...NEW_GARMENT })} className="min-h-11 self-start rounded border-2 border-accent px-4 text-lg font-semibold text-accent">
+        <p className="text-sm text-muted">
+          Existing finish: what the bottoms are now. An old cuff is let down and pressed out before the new finish is made, and the price list's line for that
+          is added by itself.
+        </p>
+        <button
+          type="button"
+          onClick={() => garments.append({ ...NEW_GARMENT })}
+          className="min-h-11 self-start rounded border-2 border-accent px-4 text-lg font-semibold text-accent"
+        >
           Another garment
         </button>
       </fieldset>

@@ -21,7 +21,21 @@ export interface TypedGarment {
 }
 
 /** The "Finish asked for" choice and the kinds of work of one garment. */
-export function GarmentPricing({ index, list, finish, work, onFinish, onWork }: { index: number; list: List | undefined; finish: string; work: string[]; onFinish: (f: string) => void; onWork: (ids: string[]) => void }) {
+export function GarmentPricing({
+  index,
+  list,
+  finish,
+  work,
+  onFinish,
+  onWork,
+}: {
+  index: number;
+  list: List | undefined;
+  finish: string;
+  work: string[];
+  onFinish: (f: string) => void;
+  onWork: (ids: string[]) => void;
+}) {
   const kinds = list?.kinds.filter((k) => !k.retiredAt) ?? [];
   const id = `g-${index}-finish`;
   return (
@@ -60,15 +74,25 @@ export function GarmentPricing({ index, list, finish, work, onFinish, onWork }: 
 }
 
 /** The ticket's estimate as it will be priced: lines by the list and `RUSH_RULE`, or null with nothing picked. */
-export function intakeEstimate(list: List | undefined, garments: readonly TypedGarment[], rush: boolean): { total: number; rushed: boolean; lines: number } | null {
+export function intakeEstimate(
+  list: List | undefined,
+  garments: readonly TypedGarment[],
+  rush: boolean,
+): { total: number; rushed: boolean; lines: number } | null {
   if (!list) return null;
   const prices = Object.fromEntries(list.items.map((i) => [i.key, { label: i.label, amountMinor: i.amountMinor }])) as PriceList;
   const facts = garments.flatMap((g, i): GarmentFacts[] => {
     const finish = g.finish;
-    return finish === 'hem' || finish === 'cuff' ? [{ garmentId: String(i), label: g.description ?? '', finish, taperLetOut: false, oldCuff: g.existingFinish === 'cuff' }] : [];
+    return finish === 'hem' || finish === 'cuff'
+      ? [{ garmentId: String(i), label: g.description ?? '', finish, taperLetOut: false, oldCuff: g.existingFinish === 'cuff' }]
+      : [];
   });
   const byId = new Map(list.kinds.map((k) => [k.id, k]));
-  const kindLines = garments.flatMap((g) => (g.work ?? []).flatMap((id) => (id && byId.has(id) ? [byId.get(id)!] : [])).map((k) => ({ key: null, kindId: k.id, rushApplies: k.rushApplies, source: 'list', amountMinor: k.amountMinor })));
+  const kindLines = garments.flatMap((g) =>
+    (g.work ?? [])
+      .flatMap((id) => (id && byId.has(id) ? [byId.get(id)!] : []))
+      .map((k) => ({ key: null, kindId: k.id, rushApplies: k.rushApplies, source: 'list', amountMinor: k.amountMinor })),
+  );
   const priced = priceTicket(facts, prices, { rush, otherWork: kindLines.some(isRushableWork) });
   const lines = priced.lines.length + kindLines.length;
   if (lines === 0) return null;
@@ -76,7 +100,17 @@ export function intakeEstimate(list: List | undefined, garments: readonly TypedG
 }
 
 /** The rush box and the estimate line under the garments. */
-export function IntakeTotal({ list, garments, rush, onRush }: { list: List | undefined; garments: readonly TypedGarment[]; rush: boolean; onRush: (r: boolean) => void }) {
+export function IntakeTotal({
+  list,
+  garments,
+  rush,
+  onRush,
+}: {
+  list: List | undefined;
+  garments: readonly TypedGarment[];
+  rush: boolean;
+  onRush: (r: boolean) => void;
+}) {
   const estimate = intakeEstimate(list, garments, rush);
   return (
     <div className="flex flex-col gap-2 sm:col-span-2">
@@ -90,7 +124,8 @@ export function IntakeTotal({ list, garments, rush, onRush }: { list: List | und
       <p className="text-lg" data-testid="intake-estimate">
         {estimate && list ? (
           <>
-            Estimate: <span className="font-extrabold tabular-nums">{formatMoney(estimate.total, list.currency)}</span> ({estimate.lines} line{estimate.lines === 1 ? '' : 's'}
+            Estimate: <span className="font-extrabold tabular-nums">{formatMoney(estimate.total, list.currency)}</span> ({estimate.lines} line
+            {estimate.lines === 1 ? '' : 's'}
             {rush && !estimate.rushed ? '; rush needs work it applies to' : ''}). The fitting prices the finish again.
           </>
         ) : (

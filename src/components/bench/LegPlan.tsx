@@ -35,7 +35,8 @@ export function LegPlanView({ leg, values, unit, precision, planned }: Omit<Prop
           Finished length (back pin): <span className="measure font-extrabold">{typedWithUnit(pinned, unit)}</span>
           {finished && finished !== typedWithUnit(pinned, unit) && (
             <>
-              {' '}= <span className="measure font-extrabold">{finished}</span>
+              {' '}
+              = <span className="measure font-extrabold">{finished}</span>
             </>
           )}
         </p>
@@ -46,7 +47,8 @@ export function LegPlanView({ leg, values, unit, precision, planned }: Omit<Prop
       {taper?.finish === 'hem' && <HemTaperCheck taper={taper} />}
       {cut?.measured && (
         <p data-testid={`measured-cut-${leg}`} className="rounded-md border-l-8 border-accent bg-accent-soft px-4 py-2 text-lg font-semibold">
-          Width at the cutting line measured on the let-down leg: <span className="measure">{cut.width.text}</span> flat, used there instead of the taper followed down.
+          Width at the cutting line measured on the let-down leg: <span className="measure">{cut.width.text}</span> flat, used there instead of the taper
+          followed down.
         </p>
       )}
       {taperProblem && (

@@ -58,7 +58,12 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
   const queue = useQuery({ queryKey: ['queue'], queryFn: () => fetchJson<QueueRow[]>('/api/garments'), refetchInterval: 60_000 });
   const label = useStepLabel();
   // Filters, sort and search start from the address, so a reload or a shared link opens this queue.
-  const [start] = useState(() => readQueueUrl(search, who.map((o) => o.value)));
+  const [start] = useState(() =>
+    readQueueUrl(
+      search,
+      who.map((o) => o.value),
+    ),
+  );
   const [filters, setFilters] = useState<QueueFilter>(start.filter);
   const [sorting, setSorting] = useState<SortingState>(start.sort);
   const today = todayIso();
@@ -112,8 +117,15 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
 
   const columns = useMemo(
     () => [
-      col.accessor('rank', { header: 'Tailor', cell: (c) => (c.getValue() === 0 ? 'You' : c.getValue() === 1 ? 'Not yet taken' : c.row.original.assigneeName ?? '') }),
-      col.accessor((r) => r.dueOn ?? '9999-12-31', { id: 'due', header: 'Wanted by', cell: (c) => <DueBadge dueOn={c.row.original.dueOn} status={c.row.original.status} /> }),
+      col.accessor('rank', {
+        header: 'Tailor',
+        cell: (c) => (c.getValue() === 0 ? 'You' : c.getValue() === 1 ? 'Not yet taken' : (c.row.original.assigneeName ?? '')),
+      }),
+      col.accessor((r) => r.dueOn ?? '9999-12-31', {
+        id: 'due',
+        header: 'Wanted by',
+        cell: (c) => <DueBadge dueOn={c.row.original.dueOn} status={c.row.original.status} />,
+      }),
       col.accessor('ticketNumber', {
         header: 'Ticket no.',
         cell: (c) => (
@@ -131,7 +143,11 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
           </a>
         ),
       }),
-      col.accessor((r) => GARMENT_STEPS.indexOf(r.status), { id: 'step', header: 'Stage', cell: (c) => <StageMarks status={c.row.original.status} label={label(c.row.original.status)} /> }),
+      col.accessor((r) => GARMENT_STEPS.indexOf(r.status), {
+        id: 'step',
+        header: 'Stage',
+        cell: (c) => <StageMarks status={c.row.original.status} label={label(c.row.original.status)} />,
+      }),
       // The oldest wait first when sorted up: ISO times sort as text.
       col.accessor((r) => r.readyAt ?? '~', {
         id: 'waiting',
@@ -173,14 +189,21 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
       <QueueFilters value={filters} onChange={setFilters} who={who} label={label} />
       {canPrint && count > 0 && (
         // The same filters and day as the table: the PDF holds exactly the garments shown.
-        <a href={queueSheetsHref(filters, today)} target="_blank" rel="noopener" className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-ink bg-card px-5 text-lg font-bold max-sm:order-last">
+        <a
+          href={queueSheetsHref(filters, today)}
+          target="_blank"
+          rel="noopener"
+          className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-ink bg-card px-5 text-lg font-bold max-sm:order-last"
+        >
           Print the morning’s sheets
         </a>
       )}
       {queue.isPending ? (
         <p className="text-lg text-muted">Loading the queue…</p>
       ) : queue.isError ? (
-        <p role="alert" className="font-semibold text-cut">The queue could not be loaded: {queue.error.message}</p>
+        <p role="alert" className="font-semibold text-cut">
+          The queue could not be loaded: {queue.error.message}
+        </p>
       ) : shown.length === 0 ? (
         <p className="rounded-lg border-2 border-rule bg-card px-4 py-6 text-lg text-muted">Nothing here with these filters.</p>
       ) : (
@@ -202,18 +225,28 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
       )}
       {wantsHistory ? (
         history.isError ? (
-          <p role="alert" className="font-semibold text-cut">Collected work could not be loaded: {history.error.message}</p>
+          <p role="alert" className="font-semibold text-cut">
+            Collected work could not be loaded: {history.error.message}
+          </p>
         ) : history.isPending || history.isFetchingNextPage ? (
           <p className="text-lg text-muted">Loading collected work…</p>
         ) : history.hasNextPage ? (
-          <button type="button" onClick={() => void history.fetchNextPage()} className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-ink bg-card px-5 text-lg font-bold">
+          <button
+            type="button"
+            onClick={() => void history.fetchNextPage()}
+            className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-ink bg-card px-5 text-lg font-bold"
+          >
             Show older collected work
           </button>
         ) : (
           <p className="text-muted">That is all the collected work.</p>
         )
       ) : (
-        <button type="button" onClick={() => setFilters({ ...filters, step: 'all' })} className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-rule bg-card px-5 text-lg font-semibold">
+        <button
+          type="button"
+          onClick={() => setFilters({ ...filters, step: 'all' })}
+          className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-rule bg-card px-5 text-lg font-semibold"
+        >
           Show collected work too (history)
         </button>
       )}

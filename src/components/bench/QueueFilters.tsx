@@ -28,10 +28,25 @@ export function QueueFilters({ value, onChange, who, label }: Props) {
     if (!open) requestAnimationFrame(() => first.current?.focus());
   };
   return (
-    <form role="search" aria-label="Filter the queue" onSubmit={(e) => e.preventDefault()} className="grid gap-3 rounded-lg border-2 border-rule bg-card p-3 max-sm:grid-cols-[minmax(0,1fr)_auto] max-sm:items-end sm:grid-cols-2 lg:grid-cols-4">
+    <form
+      role="search"
+      aria-label="Filter the queue"
+      onSubmit={(e) => e.preventDefault()}
+      className="grid gap-3 rounded-lg border-2 border-rule bg-card p-3 max-sm:grid-cols-[minmax(0,1fr)_auto] max-sm:items-end sm:grid-cols-2 lg:grid-cols-4"
+    >
       <div className="flex min-w-0 flex-col gap-1">
-        <label htmlFor="q-search" className="font-semibold">Customer or ticket</label>
-        <input id="q-search" type="search" value={value.search} onChange={(e) => set({ search: e.target.value })} placeholder="Ticket no., name, phone or garment" className={SELECT} autoComplete="off" />
+        <label htmlFor="q-search" className="font-semibold">
+          Customer or ticket
+        </label>
+        <input
+          id="q-search"
+          type="search"
+          value={value.search}
+          onChange={(e) => set({ search: e.target.value })}
+          placeholder="Ticket no., name, phone or garment"
+          className={SELECT}
+          autoComplete="off"
+        />
       </div>
       <button
         type="button"
@@ -46,21 +61,35 @@ export function QueueFilters({ value, onChange, who, label }: Props) {
       {/* contents: the three filters sit in the form's grid beside the search on wider screens. */}
       <div id={more} className={'gap-3 max-sm:col-span-2 max-sm:flex-col sm:contents ' + (open ? 'flex' : 'max-sm:hidden')}>
         <div className="flex flex-col gap-1">
-          <label htmlFor="q-step" className="font-semibold">Stage</label>
+          <label htmlFor="q-step" className="font-semibold">
+            Stage
+          </label>
           <select ref={first} id="q-step" value={value.step} onChange={(e) => set({ step: e.target.value as Filters['step'] })} className={SELECT}>
             <option value="open">All not collected</option>
             <option value="all">All, collected too</option>
-            {GARMENT_STEPS.map((s) => <option key={s} value={s}>{label(s)}</option>)}
+            {GARMENT_STEPS.map((s) => (
+              <option key={s} value={s}>
+                {label(s)}
+              </option>
+            ))}
           </select>
         </div>
         <div className="flex flex-col gap-1">
-          <label htmlFor="q-who" className="font-semibold">Tailor</label>
+          <label htmlFor="q-who" className="font-semibold">
+            Tailor
+          </label>
           <select id="q-who" value={value.who} onChange={(e) => set({ who: e.target.value })} className={SELECT}>
-            {who.map((o) => <option key={o.value} value={o.value}>{o.label}</option>)}
+            {who.map((o) => (
+              <option key={o.value} value={o.value}>
+                {o.label}
+              </option>
+            ))}
           </select>
         </div>
         <div className="flex flex-col gap-1">
-          <label htmlFor="q-due" className="font-semibold">Wanted by</label>
+          <label htmlFor="q-due" className="font-semibold">
+            Wanted by
+          </label>
           <select id="q-due" value={value.due} onChange={(e) => set({ due: e.target.value as Filters['due'] })} className={SELECT}>
             <option value="all">Any day</option>
             <option value="today">Today or overdue</option>

@@ -52,7 +52,8 @@ const CELL: Record<string, string> = {
   move: '[grid-area:move] max-sm:pt-2 max-lg:[&_button]:w-full',
 };
 const SORT_BY = "max-lg:before:font-semibold max-lg:before:text-muted max-lg:before:content-['Sort_by']";
-const PAGER_BUTTON = 'inline-flex min-h-12 items-center rounded-lg border-2 border-ink bg-card px-5 text-lg font-bold aria-disabled:border-rule aria-disabled:text-muted';
+const PAGER_BUTTON =
+  'inline-flex min-h-12 items-center rounded-lg border-2 border-ink bg-card px-5 text-lg font-bold aria-disabled:border-rule aria-disabled:text-muted';
 
 /**
  * One part of the queue (bench work, work waiting for pickup, collected work) as a table, drawn a
@@ -117,7 +118,13 @@ export function QueueSection({ title, what, testId, rows, columns, hidden, sorti
                 {hg.headers.map((h) => {
                   const sorted = h.column.getIsSorted();
                   return (
-                    <th key={h.id} role="columnheader" scope="col" className={'block text-base lg:table-cell lg:px-3 lg:py-2 ' + (h.column.getCanSort() ? '' : 'max-lg:sr-only')} aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
+                    <th
+                      key={h.id}
+                      role="columnheader"
+                      scope="col"
+                      className={'block text-base lg:table-cell lg:px-3 lg:py-2 ' + (h.column.getCanSort() ? '' : 'max-lg:sr-only')}
+                      aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
+                    >
                       {h.column.getCanSort() ? (
                         <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex min-h-11 items-center gap-1 font-extrabold">
                           {flexRender(h.column.columnDef.header, h.getContext())}
@@ -152,7 +159,10 @@ export function QueueSection({ title, what, testId, rows, columns, hidden, sorti
             Previous page
           </button>
           <p className="text-lg" aria-live="polite">
-            Page {index + 1} of {pages} <span className="text-muted">({first}–{last} of {rows.length})</span>
+            Page {index + 1} of {pages}{' '}
+            <span className="text-muted">
+              ({first}–{last} of {rows.length})
+            </span>
           </p>
           <button type="button" className={PAGER_BUTTON} aria-disabled={index === pages - 1 || undefined} onClick={() => go(index + 1)}>
             Next page

@@ -41,7 +41,8 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
   const [held, setHeld] = useState(false);
   const [said, setSaid] = useState('');
   const move = useMutation({
-    mutationFn: ({ to }: { from: GarmentStep; to: GarmentStep }) => fetchJson<{ status: GarmentStep }>(`/api/garments/${garmentId}/step`, { method: 'POST', body: { to } }),
+    mutationFn: ({ to }: { from: GarmentStep; to: GarmentStep }) =>
+      fetchJson<{ status: GarmentStep }>(`/api/garments/${garmentId}/step`, { method: 'POST', body: { to } }),
     onSuccess: (_moved, { from, to }) => {
       const mayUndo = to === 'collected' ? canReopen : canAdvance;
       setUndoable(mayUndo ? { from, to } : null);
@@ -55,9 +56,10 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
   const gate = useFittingGate(what ? `“${what}”` : 'this garment');
   // Read fresh at the tap: someone may have saved the fitting since the list was drawn. Unreadable: the server decides.
   const fittedNow = () =>
-    client
-      .fetchQuery({ queryKey: ['garment', garmentId], queryFn: () => fetchJson<GarmentDetail>(`/api/garments/${garmentId}`), staleTime: 0 })
-      .then((g) => g.fitted, () => true);
+    client.fetchQuery({ queryKey: ['garment', garmentId], queryFn: () => fetchJson<GarmentDetail>(`/api/garments/${garmentId}`), staleTime: 0 }).then(
+      (g) => g.fitted,
+      () => true,
+    );
 
   useEffect(() => {
     if ((!undoable && !said) || held) return;

@@ -34,7 +34,10 @@ const resolver = zodResolver(garmentInput) as unknown as Resolver<GarmentForm, u
 
 function AddGarment({ ticketId, customerId }: { ticketId: string; customerId: string | null }) {
   const client = useQueryClient();
-  const { register, handleSubmit, reset, setError, setValue, control, formState } = useForm<GarmentForm, unknown, z.output<typeof garmentInput>>({ resolver, defaultValues: { description: '', dueOn: '', fittingFrom: '' } });
+  const { register, handleSubmit, reset, setError, setValue, control, formState } = useForm<GarmentForm, unknown, z.output<typeof garmentInput>>({
+    resolver,
+    defaultValues: { description: '', dueOn: '', fittingFrom: '' },
+  });
   const fittingFrom = useWatch({ control, name: 'fittingFrom' });
   const previous = usePreviousFittings(customerId);
   const add = useMutation({
@@ -55,15 +58,28 @@ function AddGarment({ ticketId, customerId }: { ticketId: string; customerId: st
     },
   });
   return (
-    <form noValidate onSubmit={handleSubmit((v) => add.mutate(v))} aria-label="Add a garment" className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4">
+    <form
+      noValidate
+      onSubmit={handleSubmit((v) => add.mutate(v))}
+      aria-label="Add a garment"
+      className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4"
+    >
       <h2 className="text-xl font-extrabold">Add a garment</h2>
       <div className="grid gap-3 sm:grid-cols-[2fr_1fr]">
-        <Field label="Garment" registration={register('description')} error={formState.errors.description} id="add-description" placeholder="e.g. Brown tweed trousers" />
+        <Field
+          label="Garment"
+          registration={register('description')}
+          error={formState.errors.description}
+          id="add-description"
+          placeholder="e.g. Brown tweed trousers"
+        />
         <Field label="Due" type="date" registration={register('dueOn')} error={formState.errors.dueOn} id="add-due" />
       </div>
       {add.error && <FormMessage kind="error">{add.error.message}</FormMessage>}
       <SameAsLastTime garmentLabel="the new garment" fittings={previous.data ?? []} chosen={fittingFrom} onChoose={(id) => setValue('fittingFrom', id ?? '')} />
-      <div><SubmitButton busy={add.isPending}>Add garment</SubmitButton></div>
+      <div>
+        <SubmitButton busy={add.isPending}>Add garment</SubmitButton>
+      </div>
     </form>
   );
 }
@@ -82,17 +98,31 @@ function MoveAll({ ticket, canAdvance, canPickup }: { ticket: TicketDetail; canA
   if (!next || ticket.garments.length < 2 || !(next === 'collected' ? canPickup : canAdvance)) return null;
   // Read fresh at the tap: a fitting may have been saved on another screen since the page was drawn.
   const allFitted = () =>
-    client
-      .fetchQuery({ queryKey: ['ticket', ticket.id], queryFn: () => fetchJson<TicketDetail>(`/api/tickets/${ticket.id}`), staleTime: 0 })
-      .then((t) => unfitted(t) === 0, () => true);
+    client.fetchQuery({ queryKey: ['ticket', ticket.id], queryFn: () => fetchJson<TicketDetail>(`/api/tickets/${ticket.id}`), staleTime: 0 }).then(
+      (t) => unfitted(t) === 0,
+      () => true,
+    );
   return (
     <div className="flex flex-col gap-1">
-      <button type="button" onClick={() => void gate.check(ticket.status, next, allFitted, () => move.mutate(next))} disabled={move.isPending} className="min-h-14 self-start rounded-lg border-2 border-accent px-5 text-xl font-bold text-accent disabled:opacity-60">
+      <button
+        type="button"
+        onClick={() => void gate.check(ticket.status, next, allFitted, () => move.mutate(next))}
+        disabled={move.isPending}
+        className="min-h-14 self-start rounded-lg border-2 border-accent px-5 text-xl font-bold text-accent disabled:opacity-60"
+      >
         Mark {behind === 1 ? 'the garment' : `all ${behind}`} at {label(ticket.status)} as {label(next)}
       </button>
-      {gate.refused && <p role="alert" className="font-semibold text-cut">{gate.refused}</p>}
+      {gate.refused && (
+        <p role="alert" className="font-semibold text-cut">
+          {gate.refused}
+        </p>
+      )}
       <NoFittingAsk {...gate.ask} />
-      {move.error && <p role="alert" className="font-semibold text-cut">{move.error.message}</p>}
+      {move.error && (
+        <p role="alert" className="font-semibold text-cut">
+          {move.error.message}
+        </p>
+      )}
     </div>
   );
 }
@@ -101,7 +131,12 @@ function Ticket({ ticketId, shopName, canAdvance, canPickup, canAddGarment, canE
   const ticket = useQuery({ queryKey: ['ticket', ticketId], queryFn: () => fetchJson<TicketDetail>(`/api/tickets/${ticketId}`) });
   const label = useStepLabel();
   const [editing, setEditing] = useState(false);
-  if (ticket.isError) return <p role="alert" className="text-xl font-semibold text-cut">{ticket.error.message}</p>;
+  if (ticket.isError)
+    return (
+      <p role="alert" className="text-xl font-semibold text-cut">
+        {ticket.error.message}
+      </p>
+    );
   if (ticket.isPending) return <p className="text-xl text-muted">Loading the ticket…</p>;
   const t = ticket.data;
   return (
@@ -125,7 +160,8 @@ function Ticket({ ticketId, shopName, canAdvance, canPickup, canAddGarment, canE
           <p className="text-lg text-muted">No customer recorded.</p>
         )}
         {t.customer?.notes && <p className="text-lg">Customer notes: {t.customer.notes}</p>}
-        {t.customer && canEditCustomer &&
+        {t.customer &&
+          canEditCustomer &&
           (editing ? (
             <CustomerEdit customer={t.customer} onDone={() => setEditing(false)} />
           ) : (
@@ -137,13 +173,17 @@ function Ticket({ ticketId, shopName, canAdvance, canPickup, canAddGarment, canE
       </header>
       <MoveAll ticket={t} canAdvance={canAdvance} canPickup={canPickup} />
       <section aria-labelledby="garments-heading" className="flex flex-col gap-3">
-        <h2 id="garments-heading" className="text-2xl font-extrabold">Garments</h2>
+        <h2 id="garments-heading" className="text-2xl font-extrabold">
+          Garments
+        </h2>
         {t.garments.length === 0 && <p className="text-lg text-muted">No garments on this ticket yet.</p>}
         <ul className="flex flex-col gap-3">
           {t.garments.map((g) => (
             <li key={g.id} className="flex flex-wrap items-center justify-between gap-4 rounded-lg border-2 border-rule bg-card p-4">
               <div className="flex flex-col gap-1">
-                <a href={`/garments/${g.id}`} className="flex min-h-11 items-center text-2xl font-extrabold text-accent underline">{g.description}</a>
+                <a href={`/garments/${g.id}`} className="flex min-h-11 items-center text-2xl font-extrabold text-accent underline">
+                  {g.description}
+                </a>
                 <p className="text-lg">
                   <strong>{label(g.status)}</strong> · <DueBadge dueOn={g.dueOn} /> · {g.assigneeName ?? 'Unassigned'}
                 </p>

@@ -127,7 +127,14 @@ export function CalculatorForm() {
       : {
           ...mainRequest(settled),
           ...(taperPlan && taperAsked?.kind === 'taper'
-            ? { taper: { widthAtEdge: taperAsked.widthAtEdge, widthAbove: taperAsked.widthAbove, heightAbove: taperAsked.heightAbove, seamAllowance: taperAsked.seamAllowance } }
+            ? {
+                taper: {
+                  widthAtEdge: taperAsked.widthAtEdge,
+                  widthAbove: taperAsked.widthAbove,
+                  heightAbove: taperAsked.heightAbove,
+                  seamAllowance: taperAsked.seamAllowance,
+                },
+              }
             : {}),
         };
 
@@ -136,12 +143,7 @@ export function CalculatorForm() {
     // On paper the form is hidden and the plan takes the whole width, whatever the screen was.
     <div className="grid items-start gap-6 [font-feature-settings:'cv11'_1] lg:grid-cols-[minmax(0,27rem)_minmax(0,1fr)] print:block">
       <div className="flex flex-col gap-6 print:hidden">
-        <form
-          aria-label="Measurements"
-          noValidate
-          onSubmit={onSubmit}
-          className="flex flex-col gap-5 rounded-lg border-2 border-rule bg-card p-4"
-        >
+        <form aria-label="Measurements" noValidate onSubmit={onSubmit} className="flex flex-col gap-5 rounded-lg border-2 border-rule bg-card p-4">
           <Segmented
             name="finish"
             legend="Finish"
@@ -154,25 +156,26 @@ export function CalculatorForm() {
           />
           <Segmented name="scale" legend="Measure in" value={toScale(values.unit, values.precision)} onChange={setScale} options={SCALES} />
           {values.kind === 'cuff' ? (
-            <CuffFields bind={bind} unit={unitLabel} errorFor={errorFor} info={info} cuffDepth={values.cuffDepth}
-              onPick={(v) => setField('cuffDepth', v)} />
+            <CuffFields bind={bind} unit={unitLabel} errorFor={errorFor} info={info} cuffDepth={values.cuffDepth} onPick={(v) => setField('cuffDepth', v)} />
           ) : (
             <HemFields bind={bind} unit={unitLabel} errorFor={errorFor} info={info} />
           )}
           {values.kind === 'cuff' && (
-            <TaperFields open={taperOpen} onToggle={setTaperOpen} bind={bind} unit={unitLabel} errorFor={errorFor} info={info}
+            <TaperFields
+              open={taperOpen}
+              onToggle={setTaperOpen}
+              bind={bind}
+              unit={unitLabel}
+              errorFor={errorFor}
+              info={info}
               waiting={taperOpen && !taper.asked}
-              problem={taper.data && !taper.data.ok ? taper.data.error : null} />
+              problem={taper.data && !taper.data.ok ? taper.data.error : null}
+            />
           )}
         </form>
         <PrintPlan body={sheetBody} blocked={sheetBody ? null : 'The sheet can be printed once the plan is worked out.'} />
       </div>
-      <PlanView
-        plan={plan}
-        problem={problem}
-        failure={main.error ? main.error.message : null}
-        taper={taperPlan}
-      />
+      <PlanView plan={plan} problem={problem} failure={main.error ? main.error.message : null} taper={taperPlan} />
     </div>
   );
 }

@@ -10,14 +10,26 @@ export function ChalkLines({ plan }: Props) {
   const sloped = plan.kind === 'hem' && plan.slope.mm !== 0;
   return (
     <section aria-labelledby="lines-heading" className="break-inside-avoid">
-      <h2 id="lines-heading" className="mb-2 text-xl font-extrabold">Chalk lines</h2>
+      <h2 id="lines-heading" className="mb-2 text-xl font-extrabold">
+        Chalk lines
+      </h2>
       <table className="w-full border-collapse text-left text-lg">
         <thead>
           <tr className="border-b-2 border-ink text-base">
-            <th scope="col" className="py-2 pr-2">Line</th>
-            <th scope="col" className="py-2 pr-2">{sloped ? 'Below the mark, back' : 'Below the mark'}</th>
-            {sloped && <th scope="col" className="py-2 pr-2">Front</th>}
-            <th scope="col" className="py-2">Above the raw edge</th>
+            <th scope="col" className="py-2 pr-2">
+              Line
+            </th>
+            <th scope="col" className="py-2 pr-2">
+              {sloped ? 'Below the mark, back' : 'Below the mark'}
+            </th>
+            {sloped && (
+              <th scope="col" className="py-2 pr-2">
+                Front
+              </th>
+            )}
+            <th scope="col" className="py-2">
+              Above the raw edge
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -30,7 +42,13 @@ export function ChalkLines({ plan }: Props) {
               <td className="measure py-2 pr-2 text-2xl font-extrabold">{l.belowMark.text}</td>
               {sloped && 'frontBelowMark' in l && <td className="measure py-2 pr-2 text-2xl font-semibold">{l.frontBelowMark.text}</td>}
               <td className="measure py-2 text-xl">
-                {!l.aboveRawEdge ? <span className="text-muted">—</span> : l.aboveRawEdge.mm < 0 ? <span className="font-semibold text-cut">past the raw edge</span> : l.aboveRawEdge.text}
+                {!l.aboveRawEdge ? (
+                  <span className="text-muted">—</span>
+                ) : l.aboveRawEdge.mm < 0 ? (
+                  <span className="font-semibold text-cut">past the raw edge</span>
+                ) : (
+                  l.aboveRawEdge.text
+                )}
               </td>
             </tr>
           ))}

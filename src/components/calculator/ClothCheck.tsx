@@ -20,7 +20,8 @@ export function ClothCheck({ plan }: Props) {
         <strong className="font-extrabold">Enough cloth.</strong> {needs}
         {plan.spare && (
           <>
-            {' '}Spare: <span className="measure font-extrabold">{plan.spare.text}</span>.
+            {' '}
+            Spare: <span className="measure font-extrabold">{plan.spare.text}</span>.
           </>
         )}
       </p>
@@ -33,7 +34,11 @@ export function ClothCheck({ plan }: Props) {
 export function NoFit({ plan }: Props) {
   const alt = plan.kind === 'cuff' ? plan.alternatives : null;
   return (
-    <section aria-labelledby="nofit-heading" data-testid="no-fit" className="rounded-lg border-4 border-cut bg-cut-soft px-5 py-4 text-lg text-cut break-inside-avoid">
+    <section
+      aria-labelledby="nofit-heading"
+      data-testid="no-fit"
+      className="rounded-lg border-4 border-cut bg-cut-soft px-5 py-4 text-lg text-cut break-inside-avoid"
+    >
       <h2 id="nofit-heading" className="text-3xl leading-tight font-extrabold">
         Does not fit: do not cut. Short by <span className="measure">{plan.shortBy?.text}</span>.
       </h2>
@@ -44,20 +49,21 @@ export function NoFit({ plan }: Props) {
             {alt.shorterSection && (
               // The depth the customer chose, kept: only the hidden third section is shorter.
               <li>
-                The <span className="measure font-extrabold">{plan.cuffDepth.text}</span> cuff as asked, with a shorter third section
-                of <span className="measure font-extrabold">{alt.shorterSection.text}</span> (still room for the turn-under and a safe stitch).
+                The <span className="measure font-extrabold">{plan.cuffDepth.text}</span> cuff as asked, with a shorter third section of{' '}
+                <span className="measure font-extrabold">{alt.shorterSection.text}</span> (still room for the turn-under and a safe stitch).
               </li>
             )}
             <li>
               {alt.deepestCuff ? (
-                <>A shallower cuff of <span className="measure font-extrabold">{alt.deepestCuff.text}</span>, three equal sections.</>
+                <>
+                  A shallower cuff of <span className="measure font-extrabold">{alt.deepestCuff.text}</span>, three equal sections.
+                </>
               ) : (
                 'No shallower cuff of a sensible depth.'
               )}
             </li>
             <li>
-              A plain hem needs <span className="measure font-extrabold">{alt.plainHem.required.text}</span>:{' '}
-              {alt.plainHem.fits ? 'fits.' : 'does not fit.'}
+              A plain hem needs <span className="measure font-extrabold">{alt.plainHem.required.text}</span>: {alt.plainHem.fits ? 'fits.' : 'does not fit.'}
             </li>
             <li>
               A faced cuff needs <span className="measure font-extrabold">{alt.facedCuff.required.text}</span> of own cloth:{' '}

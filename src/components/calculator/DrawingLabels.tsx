@@ -5,7 +5,9 @@ export function Num({ n, cx, cy, cut = false }: { n: number; cx: number; cy: num
   return (
     <g>
       <circle cx={cx} cy={cy} r={10} className={cut ? 'fill-cut' : 'fill-ink'} />
-      <text x={cx} y={cy + 4.5} textAnchor="middle" className="fill-paper text-[13px] font-extrabold">{n}</text>
+      <text x={cx} y={cy + 4.5} textAnchor="middle" className="fill-paper text-[13px] font-extrabold">
+        {n}
+      </text>
     </g>
   );
 }
@@ -35,11 +37,12 @@ export function Labels({ labels, x, anchor }: { labels: Label[]; x: number; anch
             {(l.n ?? []).map((n, i) => (
               <Num key={n} n={n} cx={discX + i * 24} cy={l.y - 5} cut={l.cut} />
             ))}
-            <text x={textX} y={l.y} textAnchor={anchor} className={(l.accent ? 'fill-accent font-semibold' : 'fill-ink') + ' text-[15px]'}>{l.text}</text>
+            <text x={textX} y={l.y} textAnchor={anchor} className={(l.accent ? 'fill-accent font-semibold' : 'fill-ink') + ' text-[15px]'}>
+              {l.text}
+            </text>
           </g>
         );
       })}
     </g>
   );
 }
-

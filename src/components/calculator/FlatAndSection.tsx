@@ -44,12 +44,16 @@ export function FlatAndSection({ id, title, desc, unit, lines, rawMm, aboveMm, b
         <title id={`${id}-title`}>{title}</title>
         {desc && <desc id={`${id}-desc`}>{desc}</desc>}
         <ShortHatch />
-        <text x={56} y={18} className="fill-muted text-[13px] font-semibold tracking-wider uppercase">Flat, from the pin mark down</text>
+        <text x={56} y={18} className="fill-muted text-[13px] font-semibold tracking-wider uppercase">
+          Flat, from the pin mark down
+        </text>
         <FlatCloth lines={lines} rawMm={rawMm} aboveMm={aboveMm} s={s} yMark={yMark} x={56} width={130} bands={bands} />
         <ScaleBar unit={unit} s={s} x={56} y={H - 16} />
         {/* Stacked, the section moves below the flat cloth and left into the narrow frame. */}
         <g transform={narrow ? `translate(${-NARROW_SHIFT} ${H})` : undefined}>
-          <text x={W - 12} y={18} textAnchor="end" className="fill-muted text-[13px] font-semibold tracking-wider uppercase">Finished, in section</text>
+          <text x={W - 12} y={18} textAnchor="end" className="fill-muted text-[13px] font-semibold tracking-wider uppercase">
+            Finished, in section
+          </text>
           <line x1={SECTION_X - 70} x2={W - 12} y1={yMark} y2={yMark} className="stroke-rule" strokeWidth={1} strokeDasharray="2 4" />
           {children}
         </g>

@@ -64,10 +64,7 @@ export function FoldDrawing({ plan }: { plan: CuffPlan }) {
       <Labels
         x={x3 - 36}
         anchor="end"
-        labels={[
-          ...turn.labels,
-          { y: (yInside + yFold) / 2 + 30, to: [x3 - 3, (yInside + yFold) / 2 + 20], text: 'inside section' },
-        ]}
+        labels={[...turn.labels, { y: (yInside + yFold) / 2 + 30, to: [x3 - 3, (yInside + yFold) / 2 + 20], text: 'inside section' }]}
       />
     </FlatAndSection>
   );

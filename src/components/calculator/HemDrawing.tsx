@@ -14,11 +14,7 @@ export function HemDrawing({ plan }: { plan: HemPlan }) {
   const [xh, xt] = [xL - 2 * G, xL - G];
   const yIn = up(A - T);
   const turn = turnUnder(xt, yIn, T * s, 2);
-  const section = [
-    `M${xL},${up(aboveMm - 6)} V${yMark - G}`,
-    `A${G},${G} 0 0 1 ${xh},${yMark - G}`,
-    turn.path,
-  ].join(' ');
+  const section = [`M${xL},${up(aboveMm - 6)} V${yMark - G}`, `A${G},${G} 0 0 1 ${xh},${yMark - G}`, turn.path].join(' ');
   return (
     <FlatAndSection
       id="hem"
@@ -47,14 +43,7 @@ export function HemDrawing({ plan }: { plan: HemPlan }) {
           { y: yMark + 24, to: [xL + 2, yMark - 4], text: 'finished edge', n: [1] },
         ]}
       />
-      <Labels
-        x={xh - 40}
-        anchor="end"
-        labels={[
-          ...turn.labels,
-          { y: (yIn + yMark) / 2 + 14, to: [xh - 3, (yIn + yMark) / 2 + 9], text: 'hem allowance' },
-        ]}
-      />
+      <Labels x={xh - 40} anchor="end" labels={[...turn.labels, { y: (yIn + yMark) / 2 + 14, to: [xh - 3, (yIn + yMark) / 2 + 9], text: 'hem allowance' }]} />
     </FlatAndSection>
   );
 }

@@ -16,15 +16,29 @@ export function HemFields({ bind, unit, errorFor, info }: Props) {
   return (
     <div className="grid gap-4 sm:grid-cols-2">
       <div className="sm:col-span-2">
-        <LengthField {...common} name="available" label="Cloth below the mark" error={errorFor('available')}
-          hint="Let the old hem down first, then measure from the pin mark to the raw edge." />
+        <LengthField
+          {...common}
+          name="available"
+          label="Cloth below the mark"
+          error={errorFor('available')}
+          hint="Let the old hem down first, then measure from the pin mark to the raw edge."
+        />
       </div>
-      <LengthField {...common} name="hemAllowance" label="Hem allowance" error={errorFor('hemAllowance')}
-        hint={inch ? 'Blank: 1 1/2 in, turn-under included.' : 'Blank: 40 mm, turn-under included.'} />
-      <LengthField {...common} name="turnUnder" label="Turn-under" error={errorFor('turnUnder')}
-        hint={inch ? 'Blank: 1/4 in.' : 'Blank: 6 mm.'} />
-      <LengthField {...common} name="slope" label="Slope (optional)" error={errorFor('slope')}
-        hint={inch ? 'How much lower at the back than the front, often 1/2 in.' : 'How much lower at the back than the front, often 12 mm.'} />
+      <LengthField
+        {...common}
+        name="hemAllowance"
+        label="Hem allowance"
+        error={errorFor('hemAllowance')}
+        hint={inch ? 'Blank: 1 1/2 in, turn-under included.' : 'Blank: 40 mm, turn-under included.'}
+      />
+      <LengthField {...common} name="turnUnder" label="Turn-under" error={errorFor('turnUnder')} hint={inch ? 'Blank: 1/4 in.' : 'Blank: 6 mm.'} />
+      <LengthField
+        {...common}
+        name="slope"
+        label="Slope (optional)"
+        error={errorFor('slope')}
+        hint={inch ? 'How much lower at the back than the front, often 1/2 in.' : 'How much lower at the back than the front, often 12 mm.'}
+      />
     </div>
   );
 }

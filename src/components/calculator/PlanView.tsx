@@ -34,7 +34,9 @@ export function PlanView({ plan, problem, failure, taper }: Props) {
   return (
     <section aria-label="Plan" className="flex flex-col gap-4">
       {failure && (
-        <p role="alert" className="rounded-md border-2 border-cut bg-cut-soft px-4 py-3 text-lg font-semibold text-cut">{failure}</p>
+        <p role="alert" className="rounded-md border-2 border-cut bg-cut-soft px-4 py-3 text-lg font-semibold text-cut">
+          {failure}
+        </p>
       )}
       {main && problem && (
         <p role="alert" className="rounded-md border-l-8 border-cut bg-card px-4 py-3 text-lg font-semibold">

@@ -25,17 +25,29 @@ export function PrintPlan({ body, blocked }: Props) {
     );
   return (
     <section aria-labelledby={`${id}-h`} className="flex flex-wrap items-end gap-3 rounded-lg border-2 border-rule bg-card p-4 print:hidden">
-      <h2 id={`${id}-h`} className="w-full text-xl font-extrabold">Cut sheet</h2>
+      <h2 id={`${id}-h`} className="w-full text-xl font-extrabold">
+        Cut sheet
+      </h2>
       <div className="flex flex-col gap-1">
-        <label htmlFor={`${id}-page`} className="font-semibold">Paper</label>
-        <select id={`${id}-page`} value={page} onChange={(e) => setPage(e.target.value as PageSize)}
-          className="min-h-12 rounded-md border-2 border-rule bg-card px-2 text-lg focus:border-accent">
+        <label htmlFor={`${id}-page`} className="font-semibold">
+          Paper
+        </label>
+        <select
+          id={`${id}-page`}
+          value={page}
+          onChange={(e) => setPage(e.target.value as PageSize)}
+          className="min-h-12 rounded-md border-2 border-rule bg-card px-2 text-lg focus:border-accent"
+        >
           <option value="LETTER">Letter</option>
           <option value="A4">A4</option>
         </select>
       </div>
-      <button type="button" onClick={onPrint} disabled={!body || state.status === 'busy'}
-        className="min-h-12 rounded-lg bg-accent px-5 text-lg font-bold text-white disabled:opacity-60">
+      <button
+        type="button"
+        onClick={onPrint}
+        disabled={!body || state.status === 'busy'}
+        className="min-h-12 rounded-lg bg-accent px-5 text-lg font-bold text-white disabled:opacity-60"
+      >
         {state.status === 'busy' ? 'Making the sheet…' : 'Print cut sheet'}
       </button>
       {blocked && <p className="w-full text-base text-muted">{blocked}</p>}

@@ -9,7 +9,9 @@ export function ScaleBar({ unit, s, x, y }: { unit: Unit; s: number; x: number; 
       <line x1={x} x2={x + mm * s} y1={y} y2={y} className="stroke-ink" strokeWidth={2} />
       <line x1={x} x2={x} y1={y - 5} y2={y + 5} className="stroke-ink" strokeWidth={2} />
       <line x1={x + mm * s} x2={x + mm * s} y1={y - 5} y2={y + 5} className="stroke-ink" strokeWidth={2} />
-      <text x={x + mm * s + 8} y={y + 5} className="fill-muted text-[13px]">{label} · drawn to scale</text>
+      <text x={x + mm * s + 8} y={y + 5} className="fill-muted text-[13px]">
+        {label} · drawn to scale
+      </text>
     </g>
   );
 }

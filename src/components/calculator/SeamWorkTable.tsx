@@ -8,10 +8,18 @@ export function SeamWorkTable({ taper }: { taper: TaperPlan }) {
     <table className="w-full border-collapse text-left text-lg">
       <thead>
         <tr className="border-b-2 border-ink text-base">
-          <th scope="col" className="py-2 pr-2">Line</th>
-          <th scope="col" className="py-2 pr-2">Width now</th>
-          <th scope="col" className="py-2 pr-2">At each seam</th>
-          <th scope="col" className="py-2">Each side of the seam</th>
+          <th scope="col" className="py-2 pr-2">
+            Line
+          </th>
+          <th scope="col" className="py-2 pr-2">
+            Width now
+          </th>
+          <th scope="col" className="py-2 pr-2">
+            At each seam
+          </th>
+          <th scope="col" className="py-2">
+            Each side of the seam
+          </th>
         </tr>
       </thead>
       <tbody>

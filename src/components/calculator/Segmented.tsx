@@ -26,14 +26,7 @@ export function Segmented<T extends string>({ name, legend, options, value, onCh
               (o.value === value ? 'bg-ink text-paper' : 'text-ink hover:bg-accent-soft')
             }
           >
-            <input
-              type="radio"
-              name={name}
-              value={o.value}
-              checked={o.value === value}
-              onChange={() => onChange(o.value)}
-              className="sr-only"
-            />
+            <input type="radio" name={name} value={o.value} checked={o.value === value} onChange={() => onChange(o.value)} className="sr-only" />
             <span className="measure">{o.label}</span>
           </label>
         ))}

@@ -38,7 +38,10 @@ export function TaperDrawing({ taper }: { taper: TaperPlan }) {
   const y = (mm: number) => 10 + font + (mm + depth) * s;
   const labelX = cx + half * s + 22;
   // Each label at its line, pushed down clear of the one above when lines are close; a leader shows which line.
-  const placed = spread(labels.map((l) => ({ ...l, at: y(l.mm), y: y(l.mm) + font * 0.35 })), font * 1.3);
+  const placed = spread(
+    labels.map((l) => ({ ...l, at: y(l.mm), y: y(l.mm) + font * 0.35 })),
+    font * 1.3,
+  );
   const H = Math.max(y(cutMm), ...placed.map((l) => l.y)) + 40;
   const side = (sign: 1 | -1) => pts.map((p) => `${cx + (sign * p.w * s) / 2},${y(p.mm)}`);
   const straight = (sign: 1 | -1) => [`${cx + sign * half * s},${y(cutMm)}`, `${cx + sign * half * s},${y(-depth)}`];
@@ -57,13 +60,22 @@ export function TaperDrawing({ taper }: { taper: TaperPlan }) {
           <polyline key={sign} points={straight(sign).join(' ')} fill="none" className="stroke-accent" strokeWidth={2.5} strokeDasharray="8 5" />
         ))}
         {taper.lines.map((l) => (
-          <line key={l.n} x1={cx - half * s - 14} x2={cx + half * s + 14} y1={y(l.belowMark.mm)} y2={y(l.belowMark.mm)}
-            className={l.name === 'cut' ? 'stroke-cut' : 'stroke-rule'} strokeWidth={l.name === 'cut' ? 3 : 1.5} />
+          <line
+            key={l.n}
+            x1={cx - half * s - 14}
+            x2={cx + half * s + 14}
+            y1={y(l.belowMark.mm)}
+            y2={y(l.belowMark.mm)}
+            className={l.name === 'cut' ? 'stroke-cut' : 'stroke-rule'}
+            strokeWidth={l.name === 'cut' ? 3 : 1.5}
+          />
         ))}
         {placed.map((l) => {
           return (
             <g key={l.top ? 'top' : l.n}>
-              {l.y - l.at > font && <polyline points={`${cx + half * s + 15},${l.at} ${labelX - 4},${l.y - font * 0.35}`} fill="none" className="stroke-muted" strokeWidth={1} />}
+              {l.y - l.at > font && (
+                <polyline points={`${cx + half * s + 15},${l.at} ${labelX - 4},${l.y - font * 0.35}`} fill="none" className="stroke-muted" strokeWidth={1} />
+              )}
               {l.top ? (
                 <text x={labelX} y={l.y} fontSize={font} className="fill-accent font-semibold">
                   cuff top width <tspan className="measure">{taper.targetWidth.text}</tspan>

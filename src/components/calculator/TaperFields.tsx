@@ -19,14 +19,8 @@ interface Props {
 export function TaperFields({ open, onToggle, bind, unit, errorFor, info, waiting, problem }: Props) {
   const common = { bind, unit, info };
   return (
-    <details
-      open={open}
-      onToggle={(e) => onToggle(e.currentTarget.open)}
-      className="rounded-md border-2 border-rule bg-paper"
-    >
-      <summary className="flex min-h-11 cursor-pointer items-center px-3 text-lg font-semibold">
-        Tapered leg: check the width
-      </summary>
+    <details open={open} onToggle={(e) => onToggle(e.currentTarget.open)} className="rounded-md border-2 border-rule bg-paper">
+      <summary className="flex min-h-11 cursor-pointer items-center px-3 text-lg font-semibold">Tapered leg: check the width</summary>
       <div className="grid gap-4 border-t-2 border-rule p-3 sm:grid-cols-2">
         <p className="text-base text-muted sm:col-span-2">
           Measure the leg flat. The width at the cuff top must run straight down to the cut, or the cuff will not lie flat.
@@ -34,8 +28,13 @@ export function TaperFields({ open, onToggle, bind, unit, errorFor, info, waitin
         <LengthField {...common} name="widthAtEdge" label="Width at the finished edge" error={errorFor('widthAtEdge')} />
         <LengthField {...common} name="widthAbove" label="Width higher up" error={errorFor('widthAbove')} />
         <LengthField {...common} name="heightAbove" label="…measured this high above the edge" error={errorFor('heightAbove')} />
-        <LengthField {...common} name="seamAllowance" label="Seam allowance (optional)" error={errorFor('seamAllowance')}
-          hint="Cloth beyond the stitching at each seam." />
+        <LengthField
+          {...common}
+          name="seamAllowance"
+          label="Seam allowance (optional)"
+          error={errorFor('seamAllowance')}
+          hint="Cloth beyond the stitching at each seam."
+        />
         {waiting && <p className="text-base text-muted sm:col-span-2">Type the cuff depth and the three widths to see the let-out.</p>}
         {!waiting && problem && <p className="text-base font-semibold text-cut sm:col-span-2">{problem}</p>}
       </div>

@@ -6,7 +6,9 @@ import { TaperDrawing } from './TaperDrawing';
 export function TaperResult({ taper }: { taper: TaperPlan }) {
   return (
     <section aria-labelledby="taper-heading" className="flex flex-col gap-3 break-inside-avoid">
-      <h2 id="taper-heading" className="text-xl font-extrabold">Tapered leg</h2>
+      <h2 id="taper-heading" className="text-xl font-extrabold">
+        Tapered leg
+      </h2>
       <p className="text-lg">
         Keep the width at the cuff top, <span className="measure font-extrabold">{taper.targetWidth.text}</span> flat, straight down to the cut.{' '}
         {taper.withinTolerance ? (

@@ -3,9 +3,7 @@ import { ApiError, fetchJson } from '@/lib/fetch-json';
 import type { PlanResponse } from '@/lib/plan-request';
 
 /** What the calculator makes of one answer: a plan, or the API's message per field. */
-export type PlanAnswer =
-  | { ok: true; plan: PlanResponse }
-  | { ok: false; error: string; issues: Record<string, string> };
+export type PlanAnswer = { ok: true; plan: PlanResponse } | { ok: false; error: string; issues: Record<string, string> };
 
 const NO_ANSWER = 'The calculator did not answer. Your entries are kept; try again.';
 

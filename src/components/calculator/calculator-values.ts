@@ -4,8 +4,18 @@ import type { PlanRequestInput } from '@/lib/plan-request';
 
 /** Every length the form holds, as typed. */
 export const LENGTH_FIELDS = [
-  'cuffDepth', 'hemSection', 'turnUnder', 'available', 'oldCrease', 'clothThickness',
-  'hemAllowance', 'slope', 'widthAtEdge', 'widthAbove', 'heightAbove', 'seamAllowance',
+  'cuffDepth',
+  'hemSection',
+  'turnUnder',
+  'available',
+  'oldCrease',
+  'clothThickness',
+  'hemAllowance',
+  'slope',
+  'widthAtEdge',
+  'widthAbove',
+  'heightAbove',
+  'seamAllowance',
 ] as const;
 
 /** The name of one length field of the form. */

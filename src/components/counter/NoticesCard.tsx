@@ -15,7 +15,11 @@ const STATE: Record<Notice['status'], { text: string; look: string }> = {
 
 const WHAT: Record<Notice['kind'], string> = { ready: 'Ready notice', 'pay-link': 'Pay link' };
 const BY: Record<Notice['channel'], string> = { email: 'e-mail', sms: 'text' };
-const REPORT: Record<NonNullable<Notice['delivery']>, string> = { delivered: 'delivered to the phone', undelivered: 'not delivered to the phone', failed: 'the phone could not be reached' };
+const REPORT: Record<NonNullable<Notice['delivery']>, string> = {
+  delivered: 'delivered to the phone',
+  undelivered: 'not delivered to the phone',
+  failed: 'the phone could not be reached',
+};
 
 function NoticeRow({ n, canSend }: { n: Notice; canSend: boolean }) {
   const retry = useCounterAction(n.ticketId, () => post(n.ticketId, `notices/${n.id}/retry`));
@@ -32,7 +36,11 @@ function NoticeRow({ n, canSend }: { n: Notice; canSend: boolean }) {
           {n.deliveryError ? ` (${n.deliveryError})` : ''}, {dateTimeText(n.deliveryAt)}
         </div>
       )}
-      {n.note && <div className="text-base text-warn" data-testid="notice-note">{n.note}</div>}
+      {n.note && (
+        <div className="text-base text-warn" data-testid="notice-note">
+          {n.note}
+        </div>
+      )}
       <div className="text-base">
         {n.attempts} attempt{n.attempts === 1 ? '' : 's'}
         {n.createdById === null && ' · sent by the shop setting'}
@@ -42,7 +50,12 @@ function NoticeRow({ n, canSend }: { n: Notice; canSend: boolean }) {
           <p className="text-base">Last error: {n.lastError}</p>
           <p className="text-base">{n.nextAttemptAt ? `Next automatic try: ${dateTimeText(n.nextAttemptAt)}` : 'No more automatic tries: retry by hand.'}</p>
           {canSend && (
-            <button type="button" onClick={() => retry.mutate(undefined)} disabled={retry.isPending} className="mt-2 min-h-11 rounded border-2 border-ink bg-card px-4 py-2 font-semibold text-ink">
+            <button
+              type="button"
+              onClick={() => retry.mutate(undefined)}
+              disabled={retry.isPending}
+              className="mt-2 min-h-11 rounded border-2 border-ink bg-card px-4 py-2 font-semibold text-ink"
+            >
               Retry now
             </button>
           )}
@@ -78,8 +91,7 @@ export function NoticesCard({ s, canSend }: { s: CounterSummary; canSend: boolea
         Notices to the customer
       </h2>
       <p className="mt-1 text-base" data-testid="contact-preference">
-        The customer wants notices by {PREFERENCE_LABEL[t.contactBy].toLowerCase()}.
-        {reach && <span className="text-warn"> {reach}</span>}
+        The customer wants notices by {PREFERENCE_LABEL[t.contactBy].toLowerCase()}.{reach && <span className="text-warn"> {reach}</span>}
       </p>
       {notices.data && notices.data.length === 0 && <p className="mt-2 text-muted">Nothing sent yet.</p>}
       <ul className="mt-2 flex flex-col gap-2">
@@ -98,12 +110,16 @@ export function NoticesCard({ s, canSend }: { s: CounterSummary; canSend: boolea
             Send the ready notice
           </button>
           {s.ticket.status !== 'ready' && <p className="text-base text-muted">Possible once every garment is ready.</p>}
-
         </div>
       )}
       {canSend && lastSent && s.ticket.status === 'ready' && (
         <div className="mt-3">
-          <button type="button" onClick={() => again.mutate(undefined)} disabled={again.isPending} className="min-h-11 rounded border-2 border-accent px-4 py-2 font-semibold text-accent disabled:opacity-50">
+          <button
+            type="button"
+            onClick={() => again.mutate(undefined)}
+            disabled={again.isPending}
+            className="min-h-11 rounded border-2 border-accent px-4 py-2 font-semibold text-accent disabled:opacity-50"
+          >
             Send the ready notice again
           </button>
         </div>

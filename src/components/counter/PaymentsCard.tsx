@@ -21,7 +21,17 @@ const PAID_BY = { cash: 'cash', card: 'card at the counter', online: 'online', c
 const GIVEN_BACK = { cash: 'Cash back', card: 'Card refund at the counter', online: 'Online refund', credit: 'Kept as credit' } as const;
 const REFUND_STATE = { pending: 'waiting for the payment service', done: 'done', failed: 'failed' } as const;
 
-function Choice<T extends string>({ name, options, register, legend }: { name: string; options: [T, string, boolean?][]; register: (n: never) => object; legend: string }) {
+function Choice<T extends string>({
+  name,
+  options,
+  register,
+  legend,
+}: {
+  name: string;
+  options: [T, string, boolean?][];
+  register: (n: never) => object;
+  legend: string;
+}) {
   return (
     <fieldset className="flex flex-wrap gap-4">
       <legend className="mb-1 font-semibold">{legend}</legend>
@@ -51,7 +61,14 @@ function TakePayment({ s }: { s: CounterSummary }) {
           ['credit', `Kept credit (${formatMoney(s.customerCredit, s.currency)})`, s.customerCredit <= 0],
         ]}
       />
-      <MoneyField control={control} name="amountMinor" label={`Amount (${s.currency})`} id="pay-amount" currency={s.currency} hint={`Any amount up to the ${formatMoney(s.due, s.currency)} due; split it over several payments if the customer wants.`} />
+      <MoneyField
+        control={control}
+        name="amountMinor"
+        label={`Amount (${s.currency})`}
+        id="pay-amount"
+        currency={s.currency}
+        hint={`Any amount up to the ${formatMoney(s.due, s.currency)} due; split it over several payments if the customer wants.`}
+      />
       <div className="flex flex-wrap items-center gap-3">
         <button type="submit" disabled={take.isPending} className="min-h-11 rounded bg-accent px-5 py-2 text-lg font-semibold text-white disabled:opacity-60">
           Record the payment
@@ -64,10 +81,18 @@ function TakePayment({ s }: { s: CounterSummary }) {
 
 function SettleCredit({ s }: { s: CounterSummary }) {
   const online = s.payments.some((p) => p.method === 'online');
-  const { register, handleSubmit, control } = useForm<Refund>({ resolver: zodResolver(refundInput), defaultValues: { method: online ? 'online' : 'cash', amountMinor: s.credit, reason: '' } });
+  const { register, handleSubmit, control } = useForm<Refund>({
+    resolver: zodResolver(refundInput),
+    defaultValues: { method: online ? 'online' : 'cash', amountMinor: s.credit, reason: '' },
+  });
   const settle = useCounterAction(s.ticket.id, (v: Refund) => post(s.ticket.id, 'refunds', v));
   return (
-    <form noValidate aria-label="Settle the credit" onSubmit={handleSubmit((v) => settle.mutate(v))} className="mt-4 flex flex-col gap-3 border-t border-rule pt-4">
+    <form
+      noValidate
+      aria-label="Settle the credit"
+      onSubmit={handleSubmit((v) => settle.mutate(v))}
+      className="mt-4 flex flex-col gap-3 border-t border-rule pt-4"
+    >
       <h3 className="font-extrabold">Settle the credit owed</h3>
       <Choice<Refund['method']>
         legend="Give it back as"
@@ -80,7 +105,14 @@ function SettleCredit({ s }: { s: CounterSummary }) {
           ['credit', 'Keep as credit for the customer', !s.ticket.customerId],
         ]}
       />
-      <MoneyField control={control} name="amountMinor" label={`Amount (${s.currency})`} id="refund-amount" currency={s.currency} hint={`Up to the ${formatMoney(s.credit, s.currency)} owed.`} />
+      <MoneyField
+        control={control}
+        name="amountMinor"
+        label={`Amount (${s.currency})`}
+        id="refund-amount"
+        currency={s.currency}
+        hint={`Up to the ${formatMoney(s.credit, s.currency)} owed.`}
+      />
       <div className="flex flex-wrap items-center gap-3">
         <button type="submit" disabled={settle.isPending} className="min-h-11 rounded bg-accent px-5 py-2 text-lg font-semibold text-white disabled:opacity-60">
           Record how it was settled
@@ -117,7 +149,9 @@ function CopyLink({ url }: { url: string }) {
  * address with its session id; or the button that makes one. */
 function PayLink({ s, canSend }: { s: CounterSummary; canSend: boolean }) {
   const make = useCounterAction(s.ticket.id, () => post(s.ticket.id, 'payments/link'));
-  const send = useCounterAction(s.ticket.id, (channel: 'email' | 'sms') => post<{ channel: string; to: string }>(s.ticket.id, 'notices', { kind: 'pay-link', channel }));
+  const send = useCounterAction(s.ticket.id, (channel: 'email' | 'sms') =>
+    post<{ channel: string; to: string }>(s.ticket.id, 'notices', { kind: 'pay-link', channel }),
+  );
   const open = s.link?.status === 'open' && s.link.amountMinor === s.due;
   const t = s.ticket;
   return (
@@ -135,10 +169,20 @@ function PayLink({ s, canSend }: { s: CounterSummary; canSend: boolean }) {
             <CopyLink url={s.link!.url} />
             {canSend && (
               <>
-                <button type="button" onClick={() => send.mutate('email')} disabled={send.isPending || !t.customerEmail} className="min-h-11 rounded border-2 border-accent px-4 py-2 font-semibold text-accent disabled:opacity-50">
+                <button
+                  type="button"
+                  onClick={() => send.mutate('email')}
+                  disabled={send.isPending || !t.customerEmail}
+                  className="min-h-11 rounded border-2 border-accent px-4 py-2 font-semibold text-accent disabled:opacity-50"
+                >
                   Send by e-mail
                 </button>
-                <button type="button" onClick={() => send.mutate('sms')} disabled={send.isPending || !t.customerPhone || !s.textsReady} className="min-h-11 rounded border-2 border-accent px-4 py-2 font-semibold text-accent disabled:opacity-50">
+                <button
+                  type="button"
+                  onClick={() => send.mutate('sms')}
+                  disabled={send.isPending || !t.customerPhone || !s.textsReady}
+                  className="min-h-11 rounded border-2 border-accent px-4 py-2 font-semibold text-accent disabled:opacity-50"
+                >
                   Send by text
                 </button>
               </>
@@ -147,11 +191,20 @@ function PayLink({ s, canSend }: { s: CounterSummary; canSend: boolean }) {
           {canSend && !s.textsReady && <p className="text-base text-muted">Text messages are not set up for this shop: send the link by e-mail or copy it.</p>}
           {canSend && s.textsReady && !t.customerPhone && <p className="text-base text-muted">Not by text: no phone number for this customer.</p>}
           {canSend && !t.customerEmail && <p className="text-base text-muted">Not by e-mail: no e-mail address for this customer.</p>}
-          {send.isSuccess && <FormMessage kind="ok">Pay link sent by {send.data.channel === 'sms' ? 'text' : 'e-mail'} to {send.data.to}.</FormMessage>}
+          {send.isSuccess && (
+            <FormMessage kind="ok">
+              Pay link sent by {send.data.channel === 'sms' ? 'text' : 'e-mail'} to {send.data.to}.
+            </FormMessage>
+          )}
           {send.error && <FormMessage kind="error">{send.error.message}</FormMessage>}
         </>
       ) : (
-        <button type="button" onClick={() => make.mutate(undefined)} disabled={make.isPending} className="mt-2 min-h-11 rounded border-2 border-accent px-4 py-2 font-semibold text-accent disabled:opacity-50">
+        <button
+          type="button"
+          onClick={() => make.mutate(undefined)}
+          disabled={make.isPending}
+          className="mt-2 min-h-11 rounded border-2 border-accent px-4 py-2 font-semibold text-accent disabled:opacity-50"
+        >
           Make a payment link for the balance
         </button>
       )}
@@ -175,7 +228,12 @@ function PaymentReceipt({ s, paymentId, canSend }: { s: CounterSummary; paymentI
         Receipt
       </a>
       {canSend && (
-        <button type="button" onClick={() => send.mutate(undefined)} disabled={send.isPending} className="min-h-11 rounded border-2 border-accent px-3 text-base font-semibold text-accent disabled:opacity-50">
+        <button
+          type="button"
+          onClick={() => send.mutate(undefined)}
+          disabled={send.isPending}
+          className="min-h-11 rounded border-2 border-accent px-3 text-base font-semibold text-accent disabled:opacity-50"
+        >
           E-mail receipt
         </button>
       )}

@@ -31,7 +31,8 @@ export function PriceHistoryCard({ currency }: { currency: Currency }) {
           {history.data.map((h) => (
             <li key={h.id} className="border-t border-rule pt-2" data-testid="price-change">
               <span className="font-semibold">{h.line}</span>
-              {h.action === 'price-kind.added' ? ' added' : ''}: {h.changes.map((c) => `${FIELD[c.field]} ${shown(c.field, c.from, currency)} → ${shown(c.field, c.to, currency)}`).join('; ')}
+              {h.action === 'price-kind.added' ? ' added' : ''}:{' '}
+              {h.changes.map((c) => `${FIELD[c.field]} ${shown(c.field, c.from, currency)} → ${shown(c.field, c.to, currency)}`).join('; ')}
               <div className="text-base text-muted">
                 {h.actorName ?? 'Someone no longer on the staff'}, {dateTimeText(h.at)}
               </div>

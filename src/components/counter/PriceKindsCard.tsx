@@ -30,12 +30,20 @@ function useListChange<I, O = unknown>(call: (input: I) => Promise<O>) {
 }
 
 function KindRow({ kind, currency }: { kind: Kind; currency: Currency }) {
-  const { register, handleSubmit, formState, control } = useForm<KindForm>({ resolver: zodResolver(priceKindInput), defaultValues: { name: kind.name, amountMinor: kind.amountMinor, rushApplies: kind.rushApplies } });
+  const { register, handleSubmit, formState, control } = useForm<KindForm>({
+    resolver: zodResolver(priceKindInput),
+    defaultValues: { name: kind.name, amountMinor: kind.amountMinor, rushApplies: kind.rushApplies },
+  });
   const change = useListChange((body: Partial<KindForm> & { retired?: boolean }) => fetchJson(`/api/prices/kinds/${kind.id}`, { method: 'PATCH', body }));
   const retired = kind.retiredAt !== null;
   return (
     <li className={`border-t border-rule pt-3 ${retired ? 'text-muted' : ''}`} data-testid="price-kind">
-      <form noValidate aria-label={`Kind of work: ${kind.name}`} onSubmit={handleSubmit((v) => change.mutate(v))} className="grid items-end gap-3 sm:grid-cols-[2fr_1fr_auto]">
+      <form
+        noValidate
+        aria-label={`Kind of work: ${kind.name}`}
+        onSubmit={handleSubmit((v) => change.mutate(v))}
+        className="grid items-end gap-3 sm:grid-cols-[2fr_1fr_auto]"
+      >
         <Field label="Name" id={`kind-${kind.id}-name`} registration={register('name')} error={formState.errors.name} />
         <MoneyField control={control} name="amountMinor" label={`Price (${currency})`} id={`kind-${kind.id}-amount`} currency={currency} />
         <label className="inline-flex min-h-11 items-center gap-2 font-semibold">
@@ -62,8 +70,19 @@ function AddKind({ currency }: { currency: Currency }) {
   const { register, handleSubmit, formState, control, reset } = useForm<KindForm>({ resolver: zodResolver(priceKindInput), defaultValues: blank });
   const add = useListChange((body: KindForm) => fetchJson<Kind>('/api/prices/kinds', { body }));
   return (
-    <form noValidate aria-label="Add a kind of work" onSubmit={handleSubmit((v) => add.mutate(v, { onSuccess: () => reset(blank) }))} className="mt-4 grid items-end gap-3 border-t-2 border-ink pt-3 sm:grid-cols-[2fr_1fr_auto]">
-      <Field label="New kind of work" id="new-kind-name" registration={register('name')} error={formState.errors.name} hint='e.g. "Replace zip", "Taper legs"' />
+    <form
+      noValidate
+      aria-label="Add a kind of work"
+      onSubmit={handleSubmit((v) => add.mutate(v, { onSuccess: () => reset(blank) }))}
+      className="mt-4 grid items-end gap-3 border-t-2 border-ink pt-3 sm:grid-cols-[2fr_1fr_auto]"
+    >
+      <Field
+        label="New kind of work"
+        id="new-kind-name"
+        registration={register('name')}
+        error={formState.errors.name}
+        hint='e.g. "Replace zip", "Taper legs"'
+      />
       {/* A fresh field after each addition: the typed amount goes with the kind it priced. */}
       <MoneyField key={add.data?.id ?? 'new'} control={control} name="amountMinor" label={`Its price (${currency})`} id="new-kind-amount" currency={currency} />
       <label className="inline-flex min-h-11 items-center gap-2 font-semibold">
@@ -89,7 +108,8 @@ export function PriceKindsCard({ list }: { list: AsJson<PriceListView> }) {
         Kinds of work
       </h2>
       <p className="text-muted">
-        Flat-priced work beside the lines above, picked per garment at intake or at the counter. Rush applies: a rush ticket with this work pays the rush surcharge (once per ticket).
+        Flat-priced work beside the lines above, picked per garment at intake or at the counter. Rush applies: a rush ticket with this work pays the rush
+        surcharge (once per ticket).
       </p>
       {list.kinds.length === 0 ? (
         <p className="mt-2">None yet.</p>

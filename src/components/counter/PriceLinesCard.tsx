@@ -36,7 +36,15 @@ function AdjustForm({ s, canChange }: { s: CounterSummary; canChange: boolean })
     >
       <input type="hidden" {...register('source')} />
       <Field label="Adjustment" registration={register('label')} error={errors.label as never} hint="e.g. Second pair, same cloth" id="adjust-label" />
-      <MoneyField key={add.data ? String((add.data as { id?: string }).id) : "new"} control={control} name="amountMinor" label={`Amount (${s.currency}, minus to take off)`} id="adjust-amount" currency={s.currency} hint="e.g. -5.00; taking off more than half the total needs the lead" />
+      <MoneyField
+        key={add.data ? String((add.data as { id?: string }).id) : 'new'}
+        control={control}
+        name="amountMinor"
+        label={`Amount (${s.currency}, minus to take off)`}
+        id="adjust-amount"
+        currency={s.currency}
+        hint="e.g. -5.00; taking off more than half the total needs the lead"
+      />
       <Field label="Reason" registration={register('reason')} error={errors.reason as never} id="adjust-reason" hint="Kept on the ticket" />
       <div className="sm:col-span-3 flex flex-wrap items-center gap-3">
         <button type="submit" disabled={!canChange || add.isPending} className={button}>
@@ -52,8 +60,20 @@ function VoidForm({ s, line, onDone }: { s: CounterSummary; line: PriceLine; onD
   const { register, handleSubmit, formState } = useForm<Void>({ resolver: zodResolver(voidLineInput), defaultValues: { reason: '' } });
   const cancel = useCounterAction(s.ticket.id, (v: Void) => post(s.ticket.id, `price-lines/${line.id}/void`, v));
   return (
-    <form noValidate aria-label={`Void ${line.label}`} onSubmit={handleSubmit((v) => cancel.mutate(v, { onSuccess: onDone }))} className="mt-2 flex flex-col gap-2">
-      <Field label={`Why is “${line.label}” wrong?`} id={`void-${line.id}`} registration={register('reason')} error={formState.errors.reason} autoFocus hint="Kept on the ticket and in its history" />
+    <form
+      noValidate
+      aria-label={`Void ${line.label}`}
+      onSubmit={handleSubmit((v) => cancel.mutate(v, { onSuccess: onDone }))}
+      className="mt-2 flex flex-col gap-2"
+    >
+      <Field
+        label={`Why is “${line.label}” wrong?`}
+        id={`void-${line.id}`}
+        registration={register('reason')}
+        error={formState.errors.reason}
+        autoFocus
+        hint="Kept on the ticket and in its history"
+      />
       <div className="flex flex-wrap gap-2">
         <button type="submit" disabled={cancel.isPending} className={button}>
           Void the line
@@ -81,7 +101,12 @@ function LineRow({ s, line, canChange }: { s: CounterSummary; line: PriceLine; c
           </div>
         )}
         {canChange && !voided && !voiding && (
-          <button type="button" onClick={() => setVoiding(true)} className="mt-1 min-h-11 rounded border-2 border-rule px-3 py-1 text-base font-semibold" aria-label={`Void ${line.label}`}>
+          <button
+            type="button"
+            onClick={() => setVoiding(true)}
+            className="mt-1 min-h-11 rounded border-2 border-rule px-3 py-1 text-base font-semibold"
+            aria-label={`Void ${line.label}`}
+          >
             Void…
           </button>
         )}
@@ -130,7 +155,11 @@ export function PriceLinesCard({ s, canChange }: { s: CounterSummary; canChange:
   const [key, setKey] = useState<string>('plain-hem');
   const auto = useCounterAction(s.ticket.id, () => post<{ unpriced: string[] }>(s.ticket.id, 'price-lines/auto', { rush }));
   const pick = useCounterAction(s.ticket.id, () =>
-    post(s.ticket.id, 'price-lines', key.startsWith('kind:') ? { source: 'kind', kindId: key.slice('kind:'.length) } : { source: 'list', key: key as PriceKey }),
+    post(
+      s.ticket.id,
+      'price-lines',
+      key.startsWith('kind:') ? { source: 'kind', kindId: key.slice('kind:'.length) } : { source: 'list', key: key as PriceKey },
+    ),
   );
   const error = auto.error ?? pick.error;
   return (
@@ -180,7 +209,12 @@ export function PriceLinesCard({ s, canChange }: { s: CounterSummary; canChange:
               <label htmlFor="list-line" className="font-semibold">
                 Line from the price list
               </label>
-              <select id="list-line" value={key} onChange={(e) => setKey(e.target.value)} className="min-h-11 w-full rounded border-2 border-rule bg-card px-3 py-2 text-lg">
+              <select
+                id="list-line"
+                value={key}
+                onChange={(e) => setKey(e.target.value)}
+                className="min-h-11 w-full rounded border-2 border-rule bg-card px-3 py-2 text-lg"
+              >
                 {PRICE_KEYS.map((k) => {
                   const entry = list.data?.items.find((i) => i.key === k);
                   return (

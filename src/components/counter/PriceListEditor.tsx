@@ -19,7 +19,10 @@ type List = z.infer<typeof priceListInput>;
 
 function Editor({ list }: { list: AsJson<PriceListView> }) {
   const client = useQueryClient();
-  const { register, handleSubmit, formState, watch, control } = useForm<List>({ resolver: zodResolver(priceListInput), defaultValues: { currency: list.currency, hours: list.hours, location: list.location, autoReadyNotice: list.autoReadyNotice, items: list.items } });
+  const { register, handleSubmit, formState, watch, control } = useForm<List>({
+    resolver: zodResolver(priceListInput),
+    defaultValues: { currency: list.currency, hours: list.hours, location: list.location, autoReadyNotice: list.autoReadyNotice, items: list.items },
+  });
   const save = useMutation({
     mutationFn: (v: List) => fetchJson<AsJson<PriceListView>>('/api/prices', { method: 'PUT', body: v }),
     onSuccess: (data) => {
@@ -39,8 +42,19 @@ function Editor({ list }: { list: AsJson<PriceListView> }) {
           {list.items.map((item, i) => (
             <div key={item.key} className="grid gap-3 sm:grid-cols-[2fr_1fr]">
               <input type="hidden" {...register(`items.${i}.key`)} />
-              <Field label={`Line ${i + 1}: name`} id={`item-${item.key}-label`} registration={register(`items.${i}.label`)} error={formState.errors.items?.[i]?.label} />
-              <MoneyField control={control} name={`items.${i}.amountMinor`} label={`Line ${i + 1}: price (${currency})`} id={`item-${item.key}-amount`} currency={currency} />
+              <Field
+                label={`Line ${i + 1}: name`}
+                id={`item-${item.key}-label`}
+                registration={register(`items.${i}.label`)}
+                error={formState.errors.items?.[i]?.label}
+              />
+              <MoneyField
+                control={control}
+                name={`items.${i}.amountMinor`}
+                label={`Line ${i + 1}: price (${currency})`}
+                id={`item-${item.key}-amount`}
+                currency={currency}
+              />
             </div>
           ))}
         </div>
@@ -60,7 +74,13 @@ function Editor({ list }: { list: AsJson<PriceListView> }) {
           </select>
         </div>
         <Field label="Where the shop is (on the claim slip)" id="location" registration={register('location')} error={formState.errors.location} />
-        <Field label="Opening hours (in the ready notice)" id="hours" registration={register('hours')} error={formState.errors.hours} hint="e.g. Tue–Fri 9:00–17:30, Sat 9:00–13:00" />
+        <Field
+          label="Opening hours (in the ready notice)"
+          id="hours"
+          registration={register('hours')}
+          error={formState.errors.hours}
+          hint="e.g. Tue–Fri 9:00–17:30, Sat 9:00–13:00"
+        />
         <label className="inline-flex min-h-11 items-center gap-3 text-lg font-semibold sm:col-span-2">
           <input type="checkbox" {...register('autoReadyNotice')} className="h-6 w-6" />
           Send the ready notice by itself when every garment of a ticket is ready

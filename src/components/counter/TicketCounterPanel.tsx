@@ -32,11 +32,13 @@ function SlipPrint({ ticketId }: { ticketId: string }) {
     <label className="inline-flex min-h-11 items-center gap-2">
       {label}
       <select value={value} onChange={(e) => set(Number(e.target.value))} className="min-h-11 rounded border-2 border-rule bg-card px-2">
-        {[0, 1, 2, 3].filter((n) => n >= from).map((n) => (
-          <option key={n} value={n}>
-            {n}
-          </option>
-        ))}
+        {[0, 1, 2, 3]
+          .filter((n) => n >= from)
+          .map((n) => (
+            <option key={n} value={n}>
+              {n}
+            </option>
+          ))}
       </select>
     </label>
   );
@@ -77,7 +79,11 @@ function Panel({ ticketId, shopName, role: given, withTicketHeader = true }: Pro
         <p className="text-xl">
           Status: <strong data-testid="ticket-status">{isGarmentStep(s.ticket.status) ? stepLabel(s.ticket.status) : s.ticket.status}</strong>
         </p>
-        {s.ticket.dueOn && <p className="text-xl">Due <DueBadge dueOn={s.ticket.dueOn} /></p>}
+        {s.ticket.dueOn && (
+          <p className="text-xl">
+            Due <DueBadge dueOn={s.ticket.dueOn} />
+          </p>
+        )}
       </div>
       <PriceLinesCard s={s} canChange={can(role, ['prices', 'adjust']) && !collected} />
       <PaymentsCard s={s} canTake={can(role, ['payments', 'take'])} canSend={can(role, ['notices', 'send'])} />
@@ -100,9 +106,15 @@ function Panel({ ticketId, shopName, role: given, withTicketHeader = true }: Pro
           )}
         </div>
         {!collected && s.ticket.status === 'ready' && s.due > 0 && <p className="mt-2 text-warn font-semibold">Take the balance before handing over.</p>}
-        {!collected && !priced && <p className="mt-2 text-warn font-semibold">No price yet: price the work, or mark it no charge with a reason, before handing over.</p>}
+        {!collected && !priced && (
+          <p className="mt-2 text-warn font-semibold">No price yet: price the work, or mark it no charge with a reason, before handing over.</p>
+        )}
         {s.credit > 0 && <p className="mt-2 font-semibold text-warn">{`Owed back to the customer: settle the credit under Payments.`}</p>}
-        {collected && <p className="mt-2 rounded border-2 border-ok bg-ok-soft px-3 py-2 text-lg font-semibold text-ok">Collected: the ticket is closed with its payment on record.</p>}
+        {collected && (
+          <p className="mt-2 rounded border-2 border-ok bg-ok-soft px-3 py-2 text-lg font-semibold text-ok">
+            Collected: the ticket is closed with its payment on record.
+          </p>
+        )}
         {handOver.error && <FormMessage kind="error">{handOver.error.message}</FormMessage>}
       </section>
     </div>

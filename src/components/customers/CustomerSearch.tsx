@@ -46,7 +46,9 @@ export function CustomerSearch({ id, label, chosen, onChoose, error, hint }: Pro
       <div className="flex flex-col gap-1">
         <span className="font-semibold">{label}</span>
         <div className="flex flex-wrap items-center gap-3 rounded border-2 border-ok bg-card px-3 py-2 text-lg">
-          <span className="min-w-0 [overflow-wrap:anywhere]" data-testid="chosen-customer">{hitText(chosen)}</span>
+          <span className="min-w-0 [overflow-wrap:anywhere]" data-testid="chosen-customer">
+            {hitText(chosen)}
+          </span>
           <button type="button" onClick={() => onChoose(null)} className="ml-auto min-h-11 rounded border-2 border-ink px-3 font-semibold">
             Change
           </button>
@@ -57,7 +59,9 @@ export function CustomerSearch({ id, label, chosen, onChoose, error, hint }: Pro
   const open = hits.length > 0;
   return (
     <div className="relative flex flex-col gap-1">
-      <label htmlFor={id} className="font-semibold">{label}</label>
+      <label htmlFor={id} className="font-semibold">
+        {label}
+      </label>
       <input
         id={id}
         type="search"
@@ -78,7 +82,11 @@ export function CustomerSearch({ id, label, chosen, onChoose, error, hint }: Pro
         placeholder="Name, phone, e-mail or ticket no."
         className={BOX}
       />
-      {hint && <p id={`${id}-hint`} className="text-sm text-muted">{hint}</p>}
+      {hint && (
+        <p id={`${id}-hint`} className="text-sm text-muted">
+          {hint}
+        </p>
+      )}
       <ul id={list} role="listbox" aria-label="Customers found" hidden={!open} className="flex flex-col rounded border-2 border-rule bg-card">
         {hits.map((c, i) => (
           <li
@@ -95,9 +103,15 @@ export function CustomerSearch({ id, label, chosen, onChoose, error, hint }: Pro
         ))}
       </ul>
       {typed.trim() && found.current && hits.length === 0 && (
-        <p role="status" className="text-muted">Nobody found for “{typed.trim()}”.</p>
+        <p role="status" className="text-muted">
+          Nobody found for “{typed.trim()}”.
+        </p>
       )}
-      {error && <p id={`${id}-error`} className="rounded-sm border-l-4 border-cut bg-cut-soft px-2 py-1 text-base font-semibold text-cut">{error}</p>}
+      {error && (
+        <p id={`${id}-error`} className="rounded-sm border-l-4 border-cut bg-cut-soft px-2 py-1 text-base font-semibold text-cut">
+          {error}
+        </p>
+      )}
     </div>
   );
 }

@@ -27,9 +27,13 @@ function Customers({ canEdit, canErase }: Props) {
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,2fr)]">
       <section aria-labelledby="find-title" className="flex min-w-0 flex-col gap-3">
-        <h2 id="find-title" className="sr-only">Find a customer</h2>
+        <h2 id="find-title" className="sr-only">
+          Find a customer
+        </h2>
         <form role="search" aria-label="Find a customer" onSubmit={(e) => e.preventDefault()} className="flex flex-col gap-1">
-          <label htmlFor="customer-q" className="font-semibold">Name, phone, e-mail or ticket number</label>
+          <label htmlFor="customer-q" className="font-semibold">
+            Name, phone, e-mail or ticket number
+          </label>
           <input
             id="customer-q"
             type="search"
@@ -53,14 +57,20 @@ function Customers({ canEdit, canErase }: Props) {
                 className="flex min-h-11 w-full flex-col items-start rounded border-2 border-rule bg-card px-3 py-2 text-left aria-[current=true]:border-accent aria-[current=true]:bg-accent-soft"
               >
                 <span className="text-lg font-semibold [overflow-wrap:anywhere]">{c.name}</span>
-                <span className="text-muted [overflow-wrap:anywhere]">{[c.phone, c.email, c.lastTicketLabel ? `last ${c.lastTicketLabel}` : null].filter(Boolean).join(' · ') || 'No contact details'}</span>
+                <span className="text-muted [overflow-wrap:anywhere]">
+                  {[c.phone, c.email, c.lastTicketLabel ? `last ${c.lastTicketLabel}` : null].filter(Boolean).join(' · ') || 'No contact details'}
+                </span>
               </button>
             </li>
           ))}
         </ul>
       </section>
       <div className="min-w-0">
-        {open ? <CustomerFileView key={open} id={open} canEdit={canEdit} canErase={canErase} /> : <p className="text-lg text-muted">Find a customer to see their tickets, payments and notices.</p>}
+        {open ? (
+          <CustomerFileView key={open} id={open} canEdit={canEdit} canErase={canErase} />
+        ) : (
+          <p className="text-lg text-muted">Find a customer to see their tickets, payments and notices.</p>
+        )}
       </div>
     </div>
   );

@@ -16,7 +16,12 @@ export function usePreviousFittings(customerId: string | null) {
 /** One leg (or both, when alike) as the offer reads: finish, finished length, cuff depth, preset. */
 function legsText(f: PreviousFitting): string {
   const say = (l: PreviousFitting['legs'][number]) =>
-    [FINISH_LABELS[l.finish], l.finishedLength && `finished length ${l.finishedLength} ${f.unit}`, l.cuffDepth && l.finish === 'cuff' && `cuff ${l.cuffDepth} ${f.unit}`, l.preset && `preset ${l.preset}`]
+    [
+      FINISH_LABELS[l.finish],
+      l.finishedLength && `finished length ${l.finishedLength} ${f.unit}`,
+      l.cuffDepth && l.finish === 'cuff' && `cuff ${l.cuffDepth} ${f.unit}`,
+      l.preset && `preset ${l.preset}`,
+    ]
       .filter(Boolean)
       .join(', ');
   const [left, right] = [f.legs.find((l) => l.leg === 'left'), f.legs.find((l) => l.leg === 'right')];
@@ -54,7 +59,9 @@ export function SameAsLastTime({ garmentLabel, fittings, chosen, onChoose }: Pro
           </button>
         );
       })}
-      {chosen && <p className="text-sm text-muted">The fitting is copied into this garment when the ticket is opened; the bench checks it at the fitting as usual.</p>}
+      {chosen && (
+        <p className="text-sm text-muted">The fitting is copied into this garment when the ticket is opened; the bench checks it at the fitting as usual.</p>
+      )}
     </div>
   );
 }

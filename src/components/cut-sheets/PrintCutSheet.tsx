@@ -42,17 +42,25 @@ export function PrintCutSheet({ garmentId, scale: initial, unsaved = false, save
   };
   return (
     <section aria-labelledby={`${id}-h`} className="flex flex-wrap items-end gap-3 rounded-lg border-2 border-rule bg-card p-4">
-      <h2 id={`${id}-h`} className="sr-only">Cut sheet</h2>
+      <h2 id={`${id}-h`} className="sr-only">
+        Cut sheet
+      </h2>
       <div className="flex flex-col gap-1">
-        <label htmlFor={`${id}-unit`} className="font-semibold">Sheet in</label>
+        <label htmlFor={`${id}-unit`} className="font-semibold">
+          Sheet in
+        </label>
         <select id={`${id}-unit`} value={scale} onChange={(e) => setScale(e.target.value as Scale)} className={select}>
           {SCALES.map((s) => (
-            <option key={s} value={s}>{SCALE_LABELS[s]}</option>
+            <option key={s} value={s}>
+              {SCALE_LABELS[s]}
+            </option>
           ))}
         </select>
       </div>
       <div className="flex flex-col gap-1">
-        <label htmlFor={`${id}-page`} className="font-semibold">Paper</label>
+        <label htmlFor={`${id}-page`} className="font-semibold">
+          Paper
+        </label>
         <select id={`${id}-page`} value={page} onChange={(e) => setPage(e.target.value as 'LETTER' | 'A4')} className={select}>
           <option value="LETTER">Letter</option>
           <option value="A4">A4</option>

@@ -4,11 +4,7 @@ import { useEffect, useState } from 'react';
 import { ApiError } from '@/lib/fetch-json';
 
 /** Where a print stands: nothing yet, on its way, the sheet (and whether the new tab opened), or why not. */
-export type PrintState =
-  | { status: 'idle' }
-  | { status: 'busy' }
-  | { status: 'done'; url: string; opened: boolean }
-  | { status: 'error'; message: string };
+export type PrintState = { status: 'idle' } | { status: 'busy' } | { status: 'done'; url: string; opened: boolean } | { status: 'error'; message: string };
 
 /** Reads a PDF response: the sheet's bytes, or an ApiError with the server's words. */
 export async function pdfOf(response: Response): Promise<Blob> {
@@ -53,8 +49,12 @@ export function PrintOutcome({ state, filename }: { state: PrintState; filename:
   return (
     <p role="status" className="flex w-full flex-wrap items-center gap-x-4 text-lg">
       <span>{state.opened ? 'The sheet opened in a new tab: print it from there at 100 %.' : 'The sheet is ready: open it, then print at 100 %.'}</span>
-      <a href={state.url} target="_blank" rel="noopener" className={link}>Open the sheet</a>
-      <a href={state.url} download={filename} className={link}>Download the PDF</a>
+      <a href={state.url} target="_blank" rel="noopener" className={link}>
+        Open the sheet
+      </a>
+      <a href={state.url} download={filename} className={link}>
+        Download the PDF
+      </a>
     </p>
   );
 }

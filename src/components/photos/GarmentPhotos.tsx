@@ -14,7 +14,8 @@ interface Props {
   canUpload: boolean;
 }
 
-const PICK = 'inline-flex min-h-11 cursor-pointer items-center justify-center rounded-md border-2 px-4 text-lg font-semibold has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-offset-2 has-[:focus-visible]:outline-accent';
+const PICK =
+  'inline-flex min-h-11 cursor-pointer items-center justify-center rounded-md border-2 px-4 text-lg font-semibold has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-offset-2 has-[:focus-visible]:outline-accent';
 
 function Photos({ garmentId, canUpload }: Props) {
   const key = ['photos', garmentId];
@@ -34,7 +35,9 @@ function Photos({ garmentId, canUpload }: Props) {
   const maxMb = list.data ? Math.floor(list.data.maxBytes / (1024 * 1024)) : null;
   return (
     <section aria-labelledby={`${ids}-h`} className="flex flex-col gap-3">
-      <h2 id={`${ids}-h`} className="text-2xl font-extrabold">Fitting photos</h2>
+      <h2 id={`${ids}-h`} className="text-2xl font-extrabold">
+        Fitting photos
+      </h2>
       {list.isPending && <p className="text-muted">Loading photos…</p>}
       {list.isError && <FormMessage kind="error">Photos could not be loaded: {list.error.message}</FormMessage>}
       {list.data && list.data.photos.length === 0 && <p className="text-muted">No photos of this garment yet.</p>}
@@ -58,11 +61,14 @@ function Photos({ garmentId, canUpload }: Props) {
             </label>
           </div>
           <p className="text-sm text-muted">
-            JPEG, PNG, WebP or HEIC{maxMb ? `, up to ${maxMb} MB each` : ''}. Photos are kept without the location and other
-            details the camera writes into them. HEIC photos get no preview here (a tile says so): open them on a device that
-            reads HEIC.
+            JPEG, PNG, WebP or HEIC{maxMb ? `, up to ${maxMb} MB each` : ''}. Photos are kept without the location and other details the camera writes into
+            them. HEIC photos get no preview here (a tile says so): open them on a device that reads HEIC.
           </p>
-          {upload.isPending && <p role="status" className="font-semibold">Uploading…</p>}
+          {upload.isPending && (
+            <p role="status" className="font-semibold">
+              Uploading…
+            </p>
+          )}
           {upload.isError && <FormMessage kind="error">{upload.error.message}</FormMessage>}
           {upload.isSuccess && <FormMessage kind="ok">{upload.data.length === 1 ? 'Photo added.' : `${upload.data.length} photos added.`}</FormMessage>}
           {remove.isError && <FormMessage kind="error">{remove.error.message}</FormMessage>}

@@ -30,7 +30,12 @@ export function PhotoThumb({ photo, onRemove }: { photo: PhotoView; onRemove?: (
         {photo.uploadedBy ? ` · ${photo.uploadedBy}` : ''}
       </span>
       {onRemove && (
-        <button type="button" aria-label={`Remove: ${photo.name}`} onClick={onRemove} className="min-h-11 rounded border-2 border-cut px-3 font-semibold text-cut">
+        <button
+          type="button"
+          aria-label={`Remove: ${photo.name}`}
+          onClick={onRemove}
+          className="min-h-11 rounded border-2 border-cut px-3 font-semibold text-cut"
+        >
           Remove
         </button>
       )}

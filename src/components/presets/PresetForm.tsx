@@ -24,9 +24,7 @@ const UNITS = [
 
 const BLANK_LENGTHS = { cuffDepth: '', hemSection: '', turnUnder: '', hemAllowance: '', slope: '' };
 
-type Props =
-  | { scope: 'house' | 'personal'; editing?: undefined; onDone?: undefined }
-  | { scope?: undefined; editing: PresetView; onDone: () => void };
+type Props = { scope: 'house' | 'personal'; editing?: undefined; onDone?: undefined } | { scope?: undefined; editing: PresetView; onDone: () => void };
 
 /** Name, finish, unit and lengths; a new house preset may also become the house default. */
 export function PresetForm({ scope, editing, onDone }: Props) {
@@ -35,7 +33,10 @@ export function PresetForm({ scope, editing, onDone }: Props) {
   const start: Input = editing
     ? { name: editing.name, scope: house ? 'house' : 'personal', settings: { ...BLANK_LENGTHS, ...editing.settings } }
     : { name: '', scope: house ? 'house' : 'personal', isDefault: false, settings: { finish: 'cuff', unit: 'in' } };
-  const { register, handleSubmit, formState, watch, setValue, setError, reset } = useForm<Input>({ resolver: zodResolver(presetCreateInput), defaultValues: start });
+  const { register, handleSubmit, formState, watch, setValue, setError, reset } = useForm<Input>({
+    resolver: zodResolver(presetCreateInput),
+    defaultValues: start,
+  });
   const create = useCreatePreset();
   const update = useUpdatePreset();
   const finish = watch('settings.finish');
@@ -53,9 +54,7 @@ export function PresetForm({ scope, editing, onDone }: Props) {
   return (
     <form noValidate onSubmit={submit} aria-label={title} className="flex flex-col gap-4 rounded-lg border-2 border-ink bg-card p-5">
       <h2 className="text-2xl font-extrabold">{title}</h2>
-      {editing && (
-        <p className="text-muted">Fittings that used this preset keep pointing at it and show its new name; the change is kept in its history.</p>
-      )}
+      {editing && <p className="text-muted">Fittings that used this preset keep pointing at it and show its new name; the change is kept in its history.</p>}
       <Field label="Preset name" id={`${idPrefix}-name`} autoComplete="off" registration={register('name')} error={formState.errors.name} />
       <div className="grid gap-4 sm:grid-cols-2">
         <Segmented name={`${idPrefix}-finish`} legend="Finish" options={FINISHES} value={finish} onChange={(v) => setValue('settings.finish', v)} />
@@ -69,9 +68,15 @@ export function PresetForm({ scope, editing, onDone }: Props) {
         </label>
       )}
       {failed && <FormMessage kind="error">{failed.message}</FormMessage>}
-      {!editing && create.isSuccess && <FormMessage kind="ok">{house ? 'House preset' : 'Your preset'} {create.data.name} saved.</FormMessage>}
+      {!editing && create.isSuccess && (
+        <FormMessage kind="ok">
+          {house ? 'House preset' : 'Your preset'} {create.data.name} saved.
+        </FormMessage>
+      )}
       <div className="flex flex-wrap gap-3">
-        <SubmitButton busy={editing ? update.isPending : create.isPending}>{editing ? 'Save changes' : house ? 'Save house preset' : 'Save my preset'}</SubmitButton>
+        <SubmitButton busy={editing ? update.isPending : create.isPending}>
+          {editing ? 'Save changes' : house ? 'Save house preset' : 'Save my preset'}
+        </SubmitButton>
         {editing && (
           <button type="button" onClick={onDone} className="min-h-11 rounded border-2 border-ink px-4 font-semibold">
             Cancel

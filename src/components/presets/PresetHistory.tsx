@@ -21,7 +21,12 @@ function line(c: PresetChange): string {
 function Entries({ id }: { id: string }) {
   const history = useQuery({ queryKey: ['presets', id, 'history'], queryFn: () => fetchJson<PresetChange[]>(`/api/presets/${id}/history`) });
   if (history.isPending) return <p className="text-muted">Loading…</p>;
-  if (history.isError) return <p role="alert" className="font-semibold text-cut">History could not be loaded: {history.error.message}</p>;
+  if (history.isError)
+    return (
+      <p role="alert" className="font-semibold text-cut">
+        History could not be loaded: {history.error.message}
+      </p>
+    );
   if (history.data.length === 0) return <p className="text-muted">Nothing recorded yet.</p>;
   return (
     <ol className="flex flex-col divide-y divide-rule">

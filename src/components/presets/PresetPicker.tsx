@@ -52,9 +52,20 @@ function Picker({ unit, onApply, current }: Props) {
     if (chosen === null && presets.data) setChosen(presets.data.find((p) => p.house && p.isDefault)?.id ?? '');
   }, [chosen, presets.data]);
   if (presets.isPending) return <p className="text-muted">Loading presets…</p>;
-  if (presets.isError) return <p role="alert" className="font-semibold text-cut">Presets could not be loaded: {presets.error.message}</p>;
-  const house = byUnit(presets.data.filter((p) => p.house), unit);
-  const own = byUnit(presets.data.filter((p) => !p.house), unit);
+  if (presets.isError)
+    return (
+      <p role="alert" className="font-semibold text-cut">
+        Presets could not be loaded: {presets.error.message}
+      </p>
+    );
+  const house = byUnit(
+    presets.data.filter((p) => p.house),
+    unit,
+  );
+  const own = byUnit(
+    presets.data.filter((p) => !p.house),
+    unit,
+  );
   const selected = chosen ?? house.find((p) => p.isDefault)?.id ?? null;
   const tap = (p: PresetView) => {
     setChosen(p.id);
@@ -63,22 +74,30 @@ function Picker({ unit, onApply, current }: Props) {
   return (
     <div className="flex flex-col gap-4">
       <section aria-labelledby="house-presets-heading">
-        <h3 id="house-presets-heading" className="mb-2 text-lg font-extrabold">House presets</h3>
+        <h3 id="house-presets-heading" className="mb-2 text-lg font-extrabold">
+          House presets
+        </h3>
         {house.length === 0 ? (
           <p className="text-muted">The lead has not set any house presets yet.</p>
         ) : (
           <ul className="flex flex-col gap-2">
-            {house.map((p) => <PresetButton key={p.id} preset={p} chosen={selected === p.id} onTap={() => tap(p)} />)}
+            {house.map((p) => (
+              <PresetButton key={p.id} preset={p} chosen={selected === p.id} onTap={() => tap(p)} />
+            ))}
           </ul>
         )}
       </section>
       <section aria-labelledby="own-presets-heading">
-        <h3 id="own-presets-heading" className="mb-2 text-lg font-extrabold">Your presets</h3>
+        <h3 id="own-presets-heading" className="mb-2 text-lg font-extrabold">
+          Your presets
+        </h3>
         {own.length === 0 ? (
           <p className="text-muted">None yet{current ? ': save the settings you use often below.' : '.'}</p>
         ) : (
           <ul className="flex flex-col gap-2">
-            {own.map((p) => <PresetButton key={p.id} preset={p} chosen={selected === p.id} onTap={() => tap(p)} />)}
+            {own.map((p) => (
+              <PresetButton key={p.id} preset={p} chosen={selected === p.id} onTap={() => tap(p)} />
+            ))}
           </ul>
         )}
       </section>

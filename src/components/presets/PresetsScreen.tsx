@@ -13,13 +13,23 @@ interface Props {
 
 function PresetsScreen({ canManageHouse, canCreateOwn }: Props) {
   const presets = usePresets();
-  if (presets.isError) return <p role="alert" className="font-semibold text-cut">Presets could not be loaded: {presets.error.message}</p>;
+  if (presets.isError)
+    return (
+      <p role="alert" className="font-semibold text-cut">
+        Presets could not be loaded: {presets.error.message}
+      </p>
+    );
   const house = presets.data?.filter((p) => p.house) ?? [];
   const own = presets.data?.filter((p) => !p.house) ?? [];
   return (
     <div className="flex flex-col gap-8">
       {canManageHouse && <PresetForm scope="house" />}
-      <PresetManager title={canManageHouse ? 'Manage house presets' : 'House presets'} presets={house} canChange={canManageHouse} canSetDefault={canManageHouse} />
+      <PresetManager
+        title={canManageHouse ? 'Manage house presets' : 'House presets'}
+        presets={house}
+        canChange={canManageHouse}
+        canSetDefault={canManageHouse}
+      />
       {canCreateOwn && (
         <>
           <PresetForm scope="personal" />

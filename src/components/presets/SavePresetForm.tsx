@@ -18,10 +18,22 @@ export function SavePresetForm({ current, onSaved }: { current: PresetSettings; 
     <form
       noValidate
       aria-labelledby="save-preset-heading"
-      onSubmit={handleSubmit((v) => save.mutate({ name: v.name, scope: 'personal', settings: current }, { onSuccess: (p) => { reset(); onSaved?.(p); } }))}
+      onSubmit={handleSubmit((v) =>
+        save.mutate(
+          { name: v.name, scope: 'personal', settings: current },
+          {
+            onSuccess: (p) => {
+              reset();
+              onSaved?.(p);
+            },
+          },
+        ),
+      )}
       className="flex flex-col gap-3 rounded-md border-2 border-dashed border-rule p-4"
     >
-      <h3 id="save-preset-heading" className="text-lg font-extrabold">Keep these settings as your preset</h3>
+      <h3 id="save-preset-heading" className="text-lg font-extrabold">
+        Keep these settings as your preset
+      </h3>
       <PresetSummary settings={current} />
       <Field label="Name for your preset" id="own-preset-name" autoComplete="off" registration={register('name')} error={formState.errors.name} />
       {save.isError && <FormMessage kind="error">{save.error.message}</FormMessage>}

@@ -81,7 +81,11 @@ function MemberRow({ m, isMe }: { m: StaffMember; isMe: boolean }) {
           {m.email.split('@')[0]}
           <wbr />@{m.email.split('@').slice(1).join('@')}
         </div>
-        {error && <p role="alert" className="font-semibold text-cut">{error.message}</p>}
+        {error && (
+          <p role="alert" className="font-semibold text-cut">
+            {error.message}
+          </p>
+        )}
       </td>
       {/* The role and Remove share a cell and wrap under each other on a phone, leaving the person room. */}
       <td className="py-2">
@@ -152,7 +156,8 @@ function StaffManager({ myEmail }: { myEmail: string }) {
               <ul className="flex flex-col gap-1">
                 {staff.data.invitations.map((i) => (
                   <li key={i.id}>
-                    {i.email}: {ROLE_LABELS[i.role].name}, until {new Date(i.expiresAt).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' })}
+                    {i.email}: {ROLE_LABELS[i.role].name}, until{' '}
+                    {new Date(i.expiresAt).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' })}
                   </li>
                 ))}
               </ul>

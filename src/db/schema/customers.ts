@@ -10,7 +10,9 @@ export const customers = pgTable(
   'customers',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
+    shopId: text('shop_id')
+      .notNull()
+      .references(() => organization.id, { onDelete: 'cascade' }),
     name: text('name').notNull(),
     phone: text('phone'),
     email: text('email'),
@@ -23,7 +25,10 @@ export const customers = pgTable(
     erasedAt: timestamp('erased_at', { withTimezone: true }),
     createdAt: timestamp('created_at', { withTimezone: true }).defaultNow().notNull(),
     // Moves on every change: the queue's ETag (services/queue.ts) shows the customer's name.
-    updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull().$onUpdate(() => new Date()),
+    updatedAt: timestamp('updated_at', { withTimezone: true })
+      .defaultNow()
+      .notNull()
+      .$onUpdate(() => new Date()),
   },
   // Search as you type is a prefix match (LIKE 'q%'): text_pattern_ops lets these indexes serve it
   // whatever the collation; pg_trgm is not there on PGlite.

@@ -13,7 +13,9 @@ export const files = pgTable(
   'files',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
+    shopId: text('shop_id')
+      .notNull()
+      .references(() => organization.id, { onDelete: 'cascade' }),
     ticketId: uuid('ticket_id').references(() => tickets.id, { onDelete: 'cascade' }),
     garmentId: uuid('garment_id').references(() => garments.id, { onDelete: 'cascade' }),
     kind: text('kind', { enum: FILE_KINDS }).notNull(),

@@ -19,8 +19,12 @@ export const notices = pgTable(
   'notices',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
-    ticketId: uuid('ticket_id').notNull().references(() => tickets.id, { onDelete: 'cascade' }),
+    shopId: text('shop_id')
+      .notNull()
+      .references(() => organization.id, { onDelete: 'cascade' }),
+    ticketId: uuid('ticket_id')
+      .notNull()
+      .references(() => tickets.id, { onDelete: 'cascade' }),
     kind: text('kind', { enum: NOTICE_KINDS }).notNull(),
     /** 1 for the first notice of its kind, 2 for the first re-send, and so on: each send keeps its own delivery state */
     sequence: integer('sequence').notNull().default(1),
@@ -47,7 +51,11 @@ export const notices = pgTable(
     createdById: text('created_by_id').references(() => user.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).defaultNow().notNull(),
   },
-  (t) => [uniqueIndex('notices_ticket_kind_channel_seq_uidx').on(t.ticketId, t.kind, t.channel, t.sequence), index('notices_provider_idx').on(t.providerId), index('notices_due_idx').on(t.status, t.nextAttemptAt)],
+  (t) => [
+    uniqueIndex('notices_ticket_kind_channel_seq_uidx').on(t.ticketId, t.kind, t.channel, t.sequence),
+    index('notices_provider_idx').on(t.providerId),
+    index('notices_due_idx').on(t.status, t.nextAttemptAt),
+  ],
 );
 
 /** A notice as the API returns it. */

@@ -17,8 +17,12 @@ export const payments = pgTable(
   'payments',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
-    ticketId: uuid('ticket_id').notNull().references(() => tickets.id, { onDelete: 'cascade' }),
+    shopId: text('shop_id')
+      .notNull()
+      .references(() => organization.id, { onDelete: 'cascade' }),
+    ticketId: uuid('ticket_id')
+      .notNull()
+      .references(() => tickets.id, { onDelete: 'cascade' }),
     purpose: text('purpose', { enum: PAYMENT_PURPOSES }).notNull(),
     method: text('method', { enum: PAYMENT_METHODS }).notNull(),
     amountMinor: integer('amount_minor').notNull(),
@@ -46,8 +50,12 @@ export const refunds = pgTable(
   'refunds',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
-    ticketId: uuid('ticket_id').notNull().references(() => tickets.id, { onDelete: 'cascade' }),
+    shopId: text('shop_id')
+      .notNull()
+      .references(() => organization.id, { onDelete: 'cascade' }),
+    ticketId: uuid('ticket_id')
+      .notNull()
+      .references(() => tickets.id, { onDelete: 'cascade' }),
     /** the customer a kept credit belongs to */
     customerId: uuid('customer_id').references(() => customers.id, { onDelete: 'set null' }),
     method: text('method', { enum: REFUND_METHODS }).notNull(),
@@ -79,8 +87,12 @@ export const paymentLinks = pgTable(
   'payment_links',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
-    ticketId: uuid('ticket_id').notNull().references(() => tickets.id, { onDelete: 'cascade' }),
+    shopId: text('shop_id')
+      .notNull()
+      .references(() => organization.id, { onDelete: 'cascade' }),
+    ticketId: uuid('ticket_id')
+      .notNull()
+      .references(() => tickets.id, { onDelete: 'cascade' }),
     /** null until the service has made the session */
     sessionId: text('session_id').unique(),
     url: text('url'),

@@ -11,7 +11,9 @@ export const presets = pgTable(
   'presets',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
+    shopId: text('shop_id')
+      .notNull()
+      .references(() => organization.id, { onDelete: 'cascade' }),
     ownerId: text('owner_id').references(() => user.id, { onDelete: 'cascade' }),
     name: text('name').notNull(),
     settings: jsonb('settings').$type<PresetSettings>().notNull(),

@@ -12,7 +12,9 @@ export const priceItems = pgTable(
   'price_items',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
+    shopId: text('shop_id')
+      .notNull()
+      .references(() => organization.id, { onDelete: 'cascade' }),
     key: text('key', { enum: PRICE_KEYS }).notNull(),
     label: text('label').notNull(),
     amountMinor: integer('amount_minor').notNull(),
@@ -28,7 +30,9 @@ export const priceKinds = pgTable(
   'price_kinds',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
+    shopId: text('shop_id')
+      .notNull()
+      .references(() => organization.id, { onDelete: 'cascade' }),
     name: text('name').notNull(),
     amountMinor: integer('amount_minor').notNull(),
     /** a ticket with this work pays the rush surcharge when rushed (see RUSH_RULE) */
@@ -38,12 +42,18 @@ export const priceKinds = pgTable(
     updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull(),
   },
   // One live kind per name in a shop: two "Replace zip" lines at the counter would be a guess.
-  (t) => [index('price_kinds_shop_idx').on(t.shopId, t.createdAt), uniqueIndex('price_kinds_shop_id_uidx').on(t.shopId, t.id), uniqueIndex('price_kinds_live_name_uidx').on(t.shopId, sql`lower(${t.name})`).where(sql`retired_at is null`)],
+  (t) => [
+    index('price_kinds_shop_idx').on(t.shopId, t.createdAt),
+    uniqueIndex('price_kinds_shop_id_uidx').on(t.shopId, t.id),
+    uniqueIndex('price_kinds_live_name_uidx').on(t.shopId, sql`lower(${t.name})`).where(sql`retired_at is null`),
+  ],
 );
 
 /** Counter settings of a shop; a shop without a row uses the defaults. */
 export const counterSettings = pgTable('counter_settings', {
-  shopId: text('shop_id').primaryKey().references(() => organization.id, { onDelete: 'cascade' }),
+  shopId: text('shop_id')
+    .primaryKey()
+    .references(() => organization.id, { onDelete: 'cascade' }),
   currency: text('currency').notNull().default('EUR'),
   hours: text('hours').notNull().default(''),
   location: text('location').notNull().default(''),
@@ -63,8 +73,12 @@ export const priceLines = pgTable(
   'price_lines',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
-    ticketId: uuid('ticket_id').notNull().references(() => tickets.id, { onDelete: 'cascade' }),
+    shopId: text('shop_id')
+      .notNull()
+      .references(() => organization.id, { onDelete: 'cascade' }),
+    ticketId: uuid('ticket_id')
+      .notNull()
+      .references(() => tickets.id, { onDelete: 'cascade' }),
     garmentId: uuid('garment_id').references(() => garments.id, { onDelete: 'set null' }),
     key: text('key', { enum: PRICE_KEYS }),
     /** the lead's kind of work this line was priced from (its label and amount copied when added) */

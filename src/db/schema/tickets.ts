@@ -21,7 +21,9 @@ export const tickets = pgTable(
   'tickets',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
+    shopId: text('shop_id')
+      .notNull()
+      .references(() => organization.id, { onDelete: 'cascade' }),
     /** said at the counter with the shop's initials (lib/ticket-number.ts): PH 1001, PH 1002 … per shop */
     number: integer('number').notNull(),
     customerId: uuid('customer_id').references(() => customers.id, { onDelete: 'set null' }),
@@ -41,8 +43,12 @@ export const garments = pgTable(
   'garments',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
-    ticketId: uuid('ticket_id').notNull().references(() => tickets.id, { onDelete: 'cascade' }),
+    shopId: text('shop_id')
+      .notNull()
+      .references(() => organization.id, { onDelete: 'cascade' }),
+    ticketId: uuid('ticket_id')
+      .notNull()
+      .references(() => tickets.id, { onDelete: 'cascade' }),
     kind: text('kind').notNull().default('trousers'),
     finish: text('finish'),
     /** how the bottoms came in: an old cuff is let down before the new finish is made */
@@ -54,7 +60,10 @@ export const garments = pgTable(
     dueOn: date('due_on'),
     createdAt: timestamp('created_at', { withTimezone: true }).defaultNow().notNull(),
     // Moves on every update through Drizzle: the queue's ETag (services/queue.ts) is built on it.
-    updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull().$onUpdate(() => new Date()),
+    updatedAt: timestamp('updated_at', { withTimezone: true })
+      .defaultNow()
+      .notNull()
+      .$onUpdate(() => new Date()),
   },
   (t) => [
     index('garments_shop_status_idx').on(t.shopId, t.status),
@@ -71,11 +80,21 @@ export const measurements = pgTable(
   'measurements',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: text('shop_id').notNull().references(() => organization.id, { onDelete: 'cascade' }),
-    garmentId: uuid('garment_id').notNull().references(() => garments.id, { onDelete: 'cascade' }),
-    leg: text('leg', { enum: ['left', 'right'] }).notNull().default('left'),
-    unit: text('unit', { enum: ['in', 'cm', 'mm'] }).notNull().default('in'),
-    finish: text('finish', { enum: ['plain', 'slope', 'cuff'] }).notNull().default('cuff'),
+    shopId: text('shop_id')
+      .notNull()
+      .references(() => organization.id, { onDelete: 'cascade' }),
+    garmentId: uuid('garment_id')
+      .notNull()
+      .references(() => garments.id, { onDelete: 'cascade' }),
+    leg: text('leg', { enum: ['left', 'right'] })
+      .notNull()
+      .default('left'),
+    unit: text('unit', { enum: ['in', 'cm', 'mm'] })
+      .notNull()
+      .default('in'),
+    finish: text('finish', { enum: ['plain', 'slope', 'cuff'] })
+      .notNull()
+      .default('cuff'),
     /** the preset's name when it was applied: shown only once the preset itself is removed */
     preset: text('preset'),
     /** the preset applied (house or the taker's own, same shop): its current name is shown through it */
@@ -90,8 +109,12 @@ export const measurements = pgTable(
 
 /** A shop's bench settings: how lengths are typed and shown, and its own names for the steps. */
 export const shopSettings = pgTable('shop_settings', {
-  shopId: text('shop_id').primaryKey().references(() => organization.id, { onDelete: 'cascade' }),
-  scale: text('scale', { enum: ['in8', 'in16', 'cm', 'mm'] }).notNull().default('in8'),
+  shopId: text('shop_id')
+    .primaryKey()
+    .references(() => organization.id, { onDelete: 'cascade' }),
+  scale: text('scale', { enum: ['in8', 'in16', 'cm', 'mm'] })
+    .notNull()
+    .default('in8'),
   stepLabels: jsonb('step_labels').notNull().default({}),
   /** the shop's IANA time zone, where its days begin and end; null: DEFAULT_TIME_ZONE (src/lib/overview/shop-days.ts) */
   timeZone: text('time_zone'),

@@ -34,9 +34,7 @@ const WIDTH: LengthRule = { required: true, min: 'positive' };
 /** Read a taper input field by field (errors carry the field name). */
 export function readTaperInput(input: TaperInput, r: InputReader): TaperValues {
   const defaults = exactDefaults(r.unit);
-  const d =
-    r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', cuffDepthRule(r.unit)) ??
-    defaults.usualCuffDepth.min;
+  const d = r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', cuffDepthRule(r.unit)) ?? defaults.usualCuffDepth.min;
   return {
     unit: r.unit,
     precision: r.precision,
@@ -167,7 +165,8 @@ const HALF_SAFE = Number.MAX_SAFE_INTEGER / 2;
  */
 export function quickTaper(v: TaperValues): TaperPlan | null {
   const { cuffDepth, hemSection, clothThickness, widthAtEdge, widthAbove, heightAbove, tolerance, seamAllowance } = v;
-  if (v.widthAtCut !== null || cuffDepth.big || hemSection.big || clothThickness.big || widthAtEdge.big || widthAbove.big || heightAbove.big || tolerance.big) return null;
+  if (v.widthAtCut !== null || cuffDepth.big || hemSection.big || clothThickness.big || widthAtEdge.big || widthAbove.big || heightAbove.big || tolerance.big)
+    return null;
   if (seamAllowance !== null && seamAllowance.big) return null;
   // The lengths as numerators over D mm (D: the least common denominator of their denominators).
   let D = lcm(lcm(lcm(cuffDepth.d, hemSection.d), lcm(clothThickness.d, widthAtEdge.d)), lcm(widthAbove.d, tolerance.d));

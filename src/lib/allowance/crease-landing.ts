@@ -39,7 +39,8 @@ const say = {
     `The old hem crease will show on the leg, ${at} above the finished edge, ${aboveTop} above the cuff top. Press or steam it out before finishing, or choose a cuff depth that covers it. ${TELL}`,
   behindLeg: (at: string) => `The old crease lies on the leg behind the cuff, ${at} above the finished edge: the cuff hides it.`,
   underFace: (h: string) => `The old crease lies under the cuff face, ${h} above the finished edge: hidden.`,
-  cuffFace: (h: string) => `The old crease will show on the face of the cuff, ${h} above the finished edge. Press it out, or change the cuff depth so it falls on a fold. ${TELL}`,
+  cuffFace: (h: string) =>
+    `The old crease will show on the face of the cuff, ${h} above the finished edge. Press it out, or change the cuff depth so it falls on a fold. ${TELL}`,
   inside: (h: string) => `The old crease ends up inside the leg, ${h} above the finished edge: hidden.`,
   cutAway: (below: string) => `The old crease lies ${below} below the cutting line and is cut away.`,
 };

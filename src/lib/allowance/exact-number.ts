@@ -22,7 +22,9 @@ export function fractionFromNumber(x: number, a = 1, b = 1): Fraction {
   }
   const m = DECIMAL.exec(String(x));
   if (m === null) throw new RangeError(`not a finite number: ${x}`);
-  return fractionFromDecimal(m[1] === '-', m[2]!, m[3] ?? '', m[4] === undefined ? 0 : Number(m[4])).mul(a).div(b);
+  return fractionFromDecimal(m[1] === '-', m[2]!, m[3] ?? '', m[4] === undefined ? 0 : Number(m[4]))
+    .mul(a)
+    .div(b);
 }
 
 /** fractionFromNumber as an Exact: safe integers all the way for everyday inputs (1.5, 0.0625, 38). */

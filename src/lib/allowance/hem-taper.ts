@@ -22,8 +22,7 @@ export interface HemTaperValues {
 /** Read a hem taper input field by field (errors carry the field name). */
 export function readHemTaperInput(input: HemTaperInput, r: InputReader): HemTaperValues {
   const defaults = exactDefaults(r.unit);
-  const width = (value: unknown, field: string, label: string): Exact =>
-    r.length(value, field, label, { required: true, min: 'positive' }) ?? ONE;
+  const width = (value: unknown, field: string, label: string): Exact => r.length(value, field, label, { required: true, min: 'positive' }) ?? ONE;
   return {
     hemAllowance: r.length(input.hemAllowance, 'hemAllowance', 'Hem allowance', { min: 'positive' }) ?? defaults.hemAllowance,
     widthAtEdge: width(input.widthAtEdge, 'widthAtEdge', 'Width at the finished edge'),
@@ -72,7 +71,16 @@ export function checkHemTaper(input: HemTaperInput): TaperPlan {
   const line = (n: 1 | 2, below: Exact, width: Exact, ch: Exact): TaperLine => {
     const c = len(ch);
     const measured = n === 2 && v.widthAtCut !== null ? { measured: true } : {};
-    return { n, name: n === 1 ? 'finished-edge' : 'cut', belowMark: len(below), width: len(width), change: c, perSeam: { ...c }, perSide: len(ch.half()), ...measured };
+    return {
+      n,
+      name: n === 1 ? 'finished-edge' : 'cut',
+      belowMark: len(below),
+      width: len(width),
+      change: c,
+      perSeam: { ...c },
+      perSide: len(ch.half()),
+      ...measured,
+    };
   };
   const lines = [line(1, ZERO, v.widthAtEdge, ZERO), line(2, H, cutWidth, change)];
   const target = v.widthAtEdge.add(slope.mul(H));

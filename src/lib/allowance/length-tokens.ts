@@ -18,17 +18,45 @@ export type LengthToken =
 export const MAX_TEXT_LENGTH = 120;
 
 const VULGAR: Record<string, [string, string]> = {
-  '¼': ['1', '4'], '½': ['1', '2'], '¾': ['3', '4'], '⅐': ['1', '7'], '⅑': ['1', '9'], '⅒': ['1', '10'],
-  '⅓': ['1', '3'], '⅔': ['2', '3'], '⅕': ['1', '5'], '⅖': ['2', '5'], '⅗': ['3', '5'], '⅘': ['4', '5'],
-  '⅙': ['1', '6'], '⅚': ['5', '6'], '⅛': ['1', '8'], '⅜': ['3', '8'], '⅝': ['5', '8'], '⅞': ['7', '8'],
+  '¼': ['1', '4'],
+  '½': ['1', '2'],
+  '¾': ['3', '4'],
+  '⅐': ['1', '7'],
+  '⅑': ['1', '9'],
+  '⅒': ['1', '10'],
+  '⅓': ['1', '3'],
+  '⅔': ['2', '3'],
+  '⅕': ['1', '5'],
+  '⅖': ['2', '5'],
+  '⅗': ['3', '5'],
+  '⅘': ['4', '5'],
+  '⅙': ['1', '6'],
+  '⅚': ['5', '6'],
+  '⅛': ['1', '8'],
+  '⅜': ['3', '8'],
+  '⅝': ['5', '8'],
+  '⅞': ['7', '8'],
 };
 const SUP = '⁰¹²³⁴⁵⁶⁷⁸⁹';
 const SUB = '₀₁₂₃₄₅₆₇₈₉';
 
 const UNIT_WORDS: Record<string, Unit> = {
-  in: 'in', inch: 'in', inches: 'in', '"': 'in', '″': 'in', '”': 'in',
-  mm: 'mm', millimeter: 'mm', millimeters: 'mm', millimetre: 'mm', millimetres: 'mm',
-  cm: 'cm', centimeter: 'cm', centimeters: 'cm', centimetre: 'cm', centimetres: 'cm',
+  in: 'in',
+  inch: 'in',
+  inches: 'in',
+  '"': 'in',
+  '″': 'in',
+  '”': 'in',
+  mm: 'mm',
+  millimeter: 'mm',
+  millimeters: 'mm',
+  millimetre: 'mm',
+  millimetres: 'mm',
+  cm: 'cm',
+  centimeter: 'cm',
+  centimeters: 'cm',
+  centimetre: 'cm',
+  centimetres: 'cm',
 };
 
 const EXAMPLE = 'Type a length such as 1 1/2, 1½, 1.5 or 38 mm.';
@@ -62,7 +90,9 @@ function commaNumber(text: string, i: number, j: number): { digits: string; type
   if (!/^\d+,\d+$/.test(typed)) throw notALength(`“${typed}” is not a number: write one decimal comma or point, e.g. 3,8 or 3.8.`);
   const [whole, decimals] = typed.split(',') as [string, string];
   if (decimals.length === 3) {
-    throw notALength(`“${typed}” is unclear: is it ${whole}.${decimals} or ${whole}${decimals}? Type ${whole}.${decimals.replace(/0+$/, '') || '0'} or ${whole}${decimals}.`);
+    throw notALength(
+      `“${typed}” is unclear: is it ${whole}.${decimals} or ${whole}${decimals}? Type ${whole}.${decimals.replace(/0+$/, '') || '0'} or ${whole}${decimals}.`,
+    );
   }
   return { digits: `${whole}.${decimals}`, typed, end };
 }

@@ -39,5 +39,9 @@ export function letDownWidth(w: LetDownWidths, below: Exact): Exact | null {
 export function letDownShapeError(w: LetDownWidths): AllowanceError | null {
   const atKnot = w.widthAtEdge.sub(w.slope.mul(knotOf(w)));
   if (atKnot.sign() > 0) return null;
-  return new AllowanceError('out-of-range', 'Followed down to the old fold, this taper gives no leg at all: check the two widths and the height.', 'widthAbove');
+  return new AllowanceError(
+    'out-of-range',
+    'Followed down to the old fold, this taper gives no leg at all: check the two widths and the height.',
+    'widthAbove',
+  );
 }

@@ -21,8 +21,7 @@ export function readHemInput(input: HemInput, r: InputReader): HemValues {
   return {
     unit: r.unit,
     precision: r.precision,
-    hemAllowance:
-      r.length(input.hemAllowance, 'hemAllowance', 'Hem allowance', { min: 'positive' }) ?? defaults.hemAllowance,
+    hemAllowance: r.length(input.hemAllowance, 'hemAllowance', 'Hem allowance', { min: 'positive' }) ?? defaults.hemAllowance,
     turnUnder: r.length(input.turnUnder, 'turnUnder', 'Turn-under', { min: 'non-negative' }) ?? defaults.hemTurnUnder,
     available: r.length(input.available, 'available', 'Cloth below the mark', { min: 'non-negative' }),
     slope: r.length(input.slope, 'slope', 'Slope', { min: 'non-negative' }) ?? ZERO,
@@ -58,10 +57,9 @@ export function planHem(input: HemInput): HemPlan {
       shortBy = len(rest.neg());
       const [a, b] = stepRatio(v.unit, v.precision);
       const most = stepsToExact(floorExactSteps(A, a, b), v.unit, v.precision);
-      const fits =
-        most.isZero()
-          ? 'Face the hem with a strip of other cloth.'
-          : `A ${len(most).text} hem is the most that fits; for more, face the hem with a strip of other cloth.`;
+      const fits = most.isZero()
+        ? 'Face the hem with a strip of other cloth.'
+        : `A ${len(most).text} hem is the most that fits; for more, face the hem with a strip of other cloth.`;
       warnings.push({
         code: 'not-enough-cloth',
         message: `Not enough cloth for a ${len(v.hemAllowance).text} hem: there is ${len(A).text} below the mark, short by ${shortBy.text}. ${fits}`,

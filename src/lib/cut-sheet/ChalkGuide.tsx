@@ -23,7 +23,10 @@ function CheckRulerStrip({ unit }: { unit: Unit }) {
       {r.ticks
         .filter((t) => t.label !== null)
         .map((t, i) => (
-          <Text key={i} style={{ position: 'absolute', left: t.x + RULER_SIDE - 10, top: 13, width: 20, textAlign: 'center', fontSize: READ_MIN, fontWeight: 700 }}>
+          <Text
+            key={i}
+            style={{ position: 'absolute', left: t.x + RULER_SIDE - 10, top: 13, width: 20, textAlign: 'center', fontSize: READ_MIN, fontWeight: 700 }}
+          >
             {t.label}
           </Text>
         ))}
@@ -68,7 +71,9 @@ function Strip({ column, width }: { column: StripColumn; width: number }) {
   return (
     <View style={{ width }}>
       <Text style={{ fontSize: READ_MIN, fontWeight: 800, marginBottom: 1 }}>{first ? column.label : `${column.label.split(',')[0]}, ${column.part}`}</Text>
-      <Text style={{ fontSize: READ_MIN, color: INK.soft, marginBottom: 1 }}>{first ? '\u25BC top on the pin mark' : `\u25B2 ${seg.matchAbove!.letter} on \u25B2 ${seg.matchAbove!.letter}`}</Text>
+      <Text style={{ fontSize: READ_MIN, color: INK.soft, marginBottom: 1 }}>
+        {first ? '\u25BC top on the pin mark' : `\u25B2 ${seg.matchAbove!.letter} on \u25B2 ${seg.matchAbove!.letter}`}
+      </Text>
       <View style={{ width, height: seg.length, position: 'relative' }}>
         <Svg width={width} height={seg.length}>
           <Rect x={0.25} y={0} width={width - 0.5} height={seg.length} fill="none" stroke={INK.soft} strokeWidth={0.5} strokeDasharray="3 2" />

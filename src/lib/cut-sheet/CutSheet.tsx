@@ -68,9 +68,28 @@ function tableColumns(g: SheetLegGroup) {
   const widest = (texts: string[], weight: 400 | 700 | 800, size: number) => Math.max(0, ...texts.map((t) => textWidth(t, weight, size)));
   // Headings wrap a word to a line at most, so their longest word sets their least width.
   const heading = widest(['BELOW', 'ABOVE', 'MARK', 'EDGE'], 700, Number(s.th.fontSize));
-  const name = Math.max(...rows.map((l) => textWidth(`${l.n} `, 800, NAME_SIZE) + textWidth(l.name, 400, NAME_SIZE)), widest(['CHALK LINE'], 700, Number(s.th.fontSize)));
-  const below = Math.max(heading, widest(rows.map((l) => l.belowMark.text), 700, VALUE_SIZE)) + COLUMN_GAP;
-  const above = Math.max(heading, widest(rows.map((l) => l.aboveRawEdge?.text ?? '—'), 700, VALUE_SIZE)) + COLUMN_GAP;
+  const name = Math.max(
+    ...rows.map((l) => textWidth(`${l.n} `, 800, NAME_SIZE) + textWidth(l.name, 400, NAME_SIZE)),
+    widest(['CHALK LINE'], 700, Number(s.th.fontSize)),
+  );
+  const below =
+    Math.max(
+      heading,
+      widest(
+        rows.map((l) => l.belowMark.text),
+        700,
+        VALUE_SIZE,
+      ),
+    ) + COLUMN_GAP;
+  const above =
+    Math.max(
+      heading,
+      widest(
+        rows.map((l) => l.aboveRawEdge?.text ?? '—'),
+        700,
+        VALUE_SIZE,
+      ),
+    ) + COLUMN_GAP;
   return { name: Math.ceil(name) + 2, below: Math.ceil(below) + 1, above: Math.ceil(above) + 1 };
 }
 
@@ -79,7 +98,11 @@ type Columns = ReturnType<typeof tableColumns>;
 // Headings on one line when the drawing can give up the width: a line less in every leg block.
 function oneLineHeadings(cols: Columns): Columns {
   const th = Number(s.th.fontSize);
-  return { ...cols, below: Math.max(cols.below, Math.ceil(textWidth('BELOW PIN MARK', 700, th)) + COLUMN_GAP + 1), above: Math.max(cols.above, Math.ceil(textWidth('ABOVE RAW EDGE', 700, th)) + COLUMN_GAP + 1) };
+  return {
+    ...cols,
+    below: Math.max(cols.below, Math.ceil(textWidth('BELOW PIN MARK', 700, th)) + COLUMN_GAP + 1),
+    above: Math.max(cols.above, Math.ceil(textWidth('ABOVE RAW EDGE', 700, th)) + COLUMN_GAP + 1),
+  };
 }
 
 function LineRow({ n, name, below, above, cols, stacked }: { n: number; name: string; below: string; above: string; cols: Columns; stacked: boolean }) {
@@ -109,9 +132,7 @@ function rawEdge(len: Len | null): { value: string; caption: string } {
 }
 
 function LinesTable({ g, cols, stacked }: { g: SheetLegGroup; cols: Columns; stacked: boolean }) {
-  const head = (text: string, width: number) => (
-    <Text style={[s.th, { width, paddingLeft: COLUMN_GAP, textAlign: 'right', flexShrink: 0 }]}>{text}</Text>
-  );
+  const head = (text: string, width: number) => <Text style={[s.th, { width, paddingLeft: COLUMN_GAP, textAlign: 'right', flexShrink: 0 }]}>{text}</Text>;
   return (
     <>
       <View style={{ flexDirection: 'row', alignItems: 'flex-end', borderBottomWidth: 0.75, borderBottomColor: INK.text, paddingBottom: 1 }}>
@@ -304,7 +325,12 @@ export function CutSheetPage({ data, wrap, family = FAMILY }: { data: CutSheetDa
 }
 
 /** A document of cut sheets, one page each; wrap (for all, or per sheet) lets an overfull sheet spill onto a second page; skipped garments get a last page; family from typeset(). */
-export function cutSheetDocument(sheets: CutSheetData[], wrap: boolean | boolean[] = true, skipped: string[] = [], family: string | string[] = FAMILY): ReactElement<DocumentProps> {
+export function cutSheetDocument(
+  sheets: CutSheetData[],
+  wrap: boolean | boolean[] = true,
+  skipped: string[] = [],
+  family: string | string[] = FAMILY,
+): ReactElement<DocumentProps> {
   const first = sheets[0];
   return (
     <Document title={first && sheets.length === 1 ? `Cut sheet ${first.ticket ?? 'unsaved'}` : 'Cut sheets'} creator="Cuffwright" producer="Cuffwright">

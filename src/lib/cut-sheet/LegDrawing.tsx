@@ -35,25 +35,25 @@ export function LegDrawing({ g }: { g: LegGeometry }) {
   return (
     <View style={{ width: g.width, flexShrink: 0 }}>
       <View style={{ width: g.width, height: Math.max(g.height - FOOT, (tops.at(-1) ?? 0) + LABEL_SIZE * 1.25), position: 'relative' }}>
-      <Svg width={g.width} height={g.height}>
-        <Polygon points={pts(g.outline)} fill={INK.fill} stroke="none" />
-        {g.cutAway.length > 0 && <Polygon points={pts(g.cutAway)} fill="#d9d6cf" stroke="none" />}
-        <Path d={`M${tl![0]} ${tl![1]} L${bl![0]} ${bl![1]} M${tr![0]} ${tr![1]} L${br![0]} ${br![1]}`} stroke={INK.text} strokeWidth={1} />
-        <Path d={breakPath} stroke={INK.soft} strokeWidth={0.6} fill="none" />
-        <Line x1={bl![0]} y1={bl![1]} x2={br![0]} y2={br![1]} stroke={INK.soft} strokeWidth={0.8} strokeDasharray={g.rawEdgeKnown ? undefined : '2 2'} />
-        {seams && <Path d={seams} stroke={INK.text} strokeWidth={0.8} strokeDasharray="3 2" fill="none" />}
-        {chalk && <Path d={chalk} stroke={INK.text} strokeWidth={0.9} fill="none" />}
-        {cutLine && <Path d={cutLine} stroke={INK.cut} strokeWidth={2.2} strokeDasharray="5 2" fill="none" />}
-        {leaders && <Path d={leaders} stroke={INK.soft} strokeWidth={0.5} fill="none" />}
-      </Svg>
-      {g.lines.map((l, i) => (
-        <Text
-          key={i}
-          style={{ position: 'absolute', left: labelX + 2, top: tops[i], fontSize: LABEL_SIZE, fontWeight: 800, color: l.cut ? INK.cut : INK.text }}
-        >
-          {l.label}
-        </Text>
-      ))}
+        <Svg width={g.width} height={g.height}>
+          <Polygon points={pts(g.outline)} fill={INK.fill} stroke="none" />
+          {g.cutAway.length > 0 && <Polygon points={pts(g.cutAway)} fill="#d9d6cf" stroke="none" />}
+          <Path d={`M${tl![0]} ${tl![1]} L${bl![0]} ${bl![1]} M${tr![0]} ${tr![1]} L${br![0]} ${br![1]}`} stroke={INK.text} strokeWidth={1} />
+          <Path d={breakPath} stroke={INK.soft} strokeWidth={0.6} fill="none" />
+          <Line x1={bl![0]} y1={bl![1]} x2={br![0]} y2={br![1]} stroke={INK.soft} strokeWidth={0.8} strokeDasharray={g.rawEdgeKnown ? undefined : '2 2'} />
+          {seams && <Path d={seams} stroke={INK.text} strokeWidth={0.8} strokeDasharray="3 2" fill="none" />}
+          {chalk && <Path d={chalk} stroke={INK.text} strokeWidth={0.9} fill="none" />}
+          {cutLine && <Path d={cutLine} stroke={INK.cut} strokeWidth={2.2} strokeDasharray="5 2" fill="none" />}
+          {leaders && <Path d={leaders} stroke={INK.soft} strokeWidth={0.5} fill="none" />}
+        </Svg>
+        {g.lines.map((l, i) => (
+          <Text
+            key={i}
+            style={{ position: 'absolute', left: labelX + 2, top: tops[i], fontSize: LABEL_SIZE, fontWeight: 800, color: l.cut ? INK.cut : INK.text }}
+          >
+            {l.label}
+          </Text>
+        ))}
       </View>
       {/* Below the labels, in the flow: a label spread downwards never runs into it. */}
       <Text style={{ fontSize: LABEL_SIZE, color: INK.soft }}>{g.caption}</Text>

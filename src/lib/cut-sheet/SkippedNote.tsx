@@ -12,7 +12,9 @@ export function SkippedNote({ skipped, size, family = FAMILY }: { skipped: strin
       <View style={s.header}>
         <Text style={s.title}>Not in this batch</Text>
       </View>
-      <Text style={[s.small, { marginBottom: 6, color: INK.soft }]}>These garments of the queue have no sheet above; finish their fitting and print them from the garment page.</Text>
+      <Text style={[s.small, { marginBottom: 6, color: INK.soft }]}>
+        These garments of the queue have no sheet above; finish their fitting and print them from the garment page.
+      </Text>
       {skipped.map((line, i) => (
         <Text key={i} style={{ fontSize: 11, marginBottom: 3 }}>
           {`•  ${line}`}

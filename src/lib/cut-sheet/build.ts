@@ -1,6 +1,17 @@
 // Engine inputs → a cut sheet's data. The public calculator and a saved garment both come through
 // here. Relative imports keep it runnable by plain vite-node in benchmarks/ (no @ alias there).
-import { AllowanceError, checkHemTaper, checkTaper, isAllowanceError, planCuff, planHem, validateCuffInput, validateHemInput, validateHemTaperInput, validateTaperInput } from '../allowance/index';
+import {
+  AllowanceError,
+  checkHemTaper,
+  checkTaper,
+  isAllowanceError,
+  planCuff,
+  planHem,
+  validateCuffInput,
+  validateHemInput,
+  validateHemTaperInput,
+  validateTaperInput,
+} from '../allowance/index';
 import type { CuffInput, HemInput, LengthInput, TaperInput } from '../allowance/types';
 import type { CutSheetData, LegSheet, Side } from './types';
 

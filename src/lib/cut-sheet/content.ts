@@ -88,8 +88,7 @@ const TACK: Record<Unit, { below: string; wide: string }> = {
 export const CAUTIONS = [...SAFETY_NOTES.map((n) => n.sheet), SAFETY_DEFER_SHEET] as const;
 
 /** The first bench step on a pair that came in with cuffs: old folds left in would throw the chalk lines out. */
-export const LET_DOWN_OLD_CUFF =
-  'Let down the old cuffs: unpick tacks and turn-under; press out old creases with a cloth.';
+export const LET_DOWN_OLD_CUFF = 'Let down the old cuffs: unpick tacks and turn-under; press out old creases with a cloth.';
 
 /** The heading of the let-down step when each leg has its own steps after it. */
 export const LET_DOWN_HEADING = 'Both legs, first';
@@ -128,7 +127,8 @@ function creaseOf(leg: LegSheet): CreaseLanding | undefined {
 const LET_DOWN_ADVICE: Partial<Record<CreaseLanding['place'], string>> = {
   'leg-visible': 'Press it out as the old cuffs come down; if it still shows, choose a cuff depth that covers it. Tell the customer it may not press out.',
   'at-cuff-top': 'Press it out as the old cuffs come down. Tell the customer it may not press out.',
-  'cuff-face': 'Press it out as the old cuffs come down; if it still shows, change the cuff depth so it falls on a fold. Tell the customer it may not press out.',
+  'cuff-face':
+    'Press it out as the old cuffs come down; if it still shows, change the cuff depth so it falls on a fold. Tell the customer it may not press out.',
 };
 
 function creaseNote(crease: CreaseLanding | undefined, existing: ExistingFinish | undefined): string | null {
@@ -144,8 +144,7 @@ function creaseNote(crease: CreaseLanding | undefined, existing: ExistingFinish 
 }
 
 // A new pair has no old fold: a crease noted on one means the intake or the fitting is wrong.
-const CREASE_ON_NEW =
-  'The pair came in unfinished, yet an old crease is noted: check whether an old hem or cuff must be let down first.';
+const CREASE_ON_NEW = 'The pair came in unfinished, yet an old crease is noted: check whether an old hem or cuff must be let down first.';
 
 function clothCheck(pp: PrintedPlan): SheetLegGroup['cloth'] {
   const c = pp.cloth;
@@ -233,7 +232,9 @@ function hemTaperOf(leg: LegSheet & { finish: 'hem' }): SheetLegGroup['taper'] {
     (flat
       ? `Taper within tolerance: the hem lies flat, no seam work needed.`
       : `Taper: turned up, the hem must match the leg ${above} above the edge (${t.targetWidth.text} flat): ${seams} at the cutting line.`) + measuredNote(t);
-  const work = flat ? null : `At each leg seam ${cut.change.mm > 0 ? 'let out' : 'take in'} ${unsigned(cut.perSeam)} at line 2, nothing at line 1 (half of it each side of the seam).`;
+  const work = flat
+    ? null
+    : `At each leg seam ${cut.change.mm > 0 ? 'let out' : 'take in'} ${unsigned(cut.perSeam)} at line 2, nothing at line 1 (half of it each side of the seam).`;
   return { summary, work, rows };
 }
 
@@ -290,9 +291,7 @@ function groupOf(leg: LegSheet, label: string, existing: ExistingFinish | undefi
     crease: creaseNote(crease, existing),
     warnings: [
       ...new Set([
-        ...warnings
-          .filter((w) => !SAID_ELSEWHERE.has(w.code) && !(crease && w.code === 'old-crease-visible'))
-          .map((w) => w.message),
+        ...warnings.filter((w) => !SAID_ELSEWHERE.has(w.code) && !(crease && w.code === 'old-crease-visible')).map((w) => w.message),
         ...letOut,
         ...(crease && existing === 'unfinished' ? [CREASE_ON_NEW] : []),
       ]),
@@ -351,15 +350,34 @@ function stepsOf(groups: SheetLegGroup[]): SheetContent['steps'] {
   if (first.finish === 'hem') {
     const outward = tapered.every((g) => (g.leg.taper?.plan.lines.at(-1)?.change.mm ?? 0) > 0);
     const hemWork = `Before cutting, unpick both leg seams below the finished edge; re-stitch them ${outward ? 'flaring out' : 'on the new line'} to the cutting line (taper note), press open (hot iron: your shop's way).`;
-    const step = tapered.length === 0 ? null : tapered.length === groups.length ? hemWork : `${tapered.map((g) => g.label).join(', ')}: ${hemWork[0]!.toLowerCase()}${hemWork.slice(1)}`;
-    return [{ heading: null, items: hemSteps(turnUnder, groups.some((g) => g.slopeNote !== null), first.plan.unit, step) }];
+    const step =
+      tapered.length === 0
+        ? null
+        : tapered.length === groups.length
+          ? hemWork
+          : `${tapered.map((g) => g.label).join(', ')}: ${hemWork[0]!.toLowerCase()}${hemWork.slice(1)}`;
+    return [
+      {
+        heading: null,
+        items: hemSteps(
+          turnUnder,
+          groups.some((g) => g.slopeNote !== null),
+          first.plan.unit,
+          step,
+        ),
+      },
+    ];
   }
   const from = perLeg(tapered.length ? tapered : groups, (g) => g.printed.depth.text);
   // Re-chalking alone leaves the old stitching: the seam is unpicked, sewn on the new line and pressed
   // open before the bottom is cut and folded, or the cuff is folded over the old, tapered seam.
   const seamWork = `Before cutting, unpick both leg seams from ${from} above the finished edge to the cut line; re-stitch straight down (taper note), press open (hot iron: your shop's way).`;
   const taperStep =
-    tapered.length === 0 ? null : tapered.length === groups.length ? seamWork : `${tapered.map((g) => g.label).join(', ')}: ${seamWork[0]!.toLowerCase()}${seamWork.slice(1)}`;
+    tapered.length === 0
+      ? null
+      : tapered.length === groups.length
+        ? seamWork
+        : `${tapered.map((g) => g.label).join(', ')}: ${seamWork[0]!.toLowerCase()}${seamWork.slice(1)}`;
   return [{ heading: null, items: cuffSteps(first.plan.unit, turnUnder, taperStep) }];
 }
 

@@ -38,11 +38,47 @@ interface Fallback {
  * SC so Chinese and Japanese text keeps SC's forms; at 6 MB a weight it is read only for Hangul.
  */
 const FALLBACKS: readonly Fallback[] = [
-  { family: 'Noto Sans Arabic', pkg: '@expo-google-fonts/noto-sans-arabic', weights: [[400, '400Regular/NotoSansArabic_400Regular.ttf'], [700, '700Bold/NotoSansArabic_700Bold.ttf']] },
-  { family: 'Noto Sans Hebrew', pkg: '@expo-google-fonts/noto-sans-hebrew', weights: [[400, '400Regular/NotoSansHebrew_400Regular.ttf'], [700, '700Bold/NotoSansHebrew_700Bold.ttf']] },
-  { family: 'Noto Sans Devanagari', pkg: '@expo-google-fonts/noto-sans-devanagari', weights: [[400, '400Regular/NotoSansDevanagari_400Regular.ttf'], [700, '700Bold/NotoSansDevanagari_700Bold.ttf']] },
-  { family: 'Noto Sans SC', pkg: '@expo-google-fonts/noto-sans-sc', weights: [[400, '400Regular/NotoSansSC_400Regular.ttf'], [700, '700Bold/NotoSansSC_700Bold.ttf']] },
-  { family: 'Noto Sans KR', pkg: '@expo-google-fonts/noto-sans-kr', weights: [[400, '400Regular/NotoSansKR_400Regular.ttf'], [700, '700Bold/NotoSansKR_700Bold.ttf']], only: /\p{Script=Hangul}/u },
+  {
+    family: 'Noto Sans Arabic',
+    pkg: '@expo-google-fonts/noto-sans-arabic',
+    weights: [
+      [400, '400Regular/NotoSansArabic_400Regular.ttf'],
+      [700, '700Bold/NotoSansArabic_700Bold.ttf'],
+    ],
+  },
+  {
+    family: 'Noto Sans Hebrew',
+    pkg: '@expo-google-fonts/noto-sans-hebrew',
+    weights: [
+      [400, '400Regular/NotoSansHebrew_400Regular.ttf'],
+      [700, '700Bold/NotoSansHebrew_700Bold.ttf'],
+    ],
+  },
+  {
+    family: 'Noto Sans Devanagari',
+    pkg: '@expo-google-fonts/noto-sans-devanagari',
+    weights: [
+      [400, '400Regular/NotoSansDevanagari_400Regular.ttf'],
+      [700, '700Bold/NotoSansDevanagari_700Bold.ttf'],
+    ],
+  },
+  {
+    family: 'Noto Sans SC',
+    pkg: '@expo-google-fonts/noto-sans-sc',
+    weights: [
+      [400, '400Regular/NotoSansSC_400Regular.ttf'],
+      [700, '700Bold/NotoSansSC_700Bold.ttf'],
+    ],
+  },
+  {
+    family: 'Noto Sans KR',
+    pkg: '@expo-google-fonts/noto-sans-kr',
+    weights: [
+      [400, '400Regular/NotoSansKR_400Regular.ttf'],
+      [700, '700Bold/NotoSansKR_700Bold.ttf'],
+    ],
+    only: /\p{Script=Hangul}/u,
+  },
 ];
 
 type Face = PlatformFace;

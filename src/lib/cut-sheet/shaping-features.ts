@@ -4,7 +4,20 @@
 // shaping without them is faster; kerning stays on.
 
 /** Feature settings for every run of text on a cut sheet. */
-export const SHEET_FEATURES = { tnum: true, rvrn: false, ccmp: false, locl: false, rlig: false, mark: false, mkmk: false, calt: false, clig: false, liga: false, rclt: false, curs: false } as const;
+export const SHEET_FEATURES = {
+  tnum: true,
+  rvrn: false,
+  ccmp: false,
+  locl: false,
+  rlig: false,
+  mark: false,
+  mkmk: false,
+  calt: false,
+  clig: false,
+  liga: false,
+  rclt: false,
+  curs: false,
+} as const;
 
 /** Characters every Inter font in a PDF starts with (pdf-platform's subset seed): printable ASCII and the signs the sheet uses. */
 export const SEED_CHARACTERS = `${Array.from({ length: 0x7f - 0x20 }, (_, i) => String.fromCharCode(0x20 + i)).join('')}·–—−×•▼→½¼¾⅛⅜⅝⅞`;

@@ -10,14 +10,21 @@ export const INK = { text: '#111111', soft: '#555555', rule: '#999999', cut: '#b
 /** Width of the right-hand column that holds the check ruler and the chalk guide. */
 export const GUIDE_COLUMN = 162;
 
-
 /** The least size of any text read at the bench (pressing table, arm's length). */
 export const READ_MIN = 9;
 
 /** The sheet's text styles. */
 export const s = StyleSheet.create({
   page: { fontFamily: FAMILY, fontSize: READ_MIN, color: INK.text, padding: 28, fontFeatureSettings: SHEET_FEATURES },
-  header: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'flex-start', borderBottomWidth: 2, borderBottomColor: INK.text, paddingBottom: 6, marginBottom: 8 },
+  header: {
+    flexDirection: 'row',
+    justifyContent: 'space-between',
+    alignItems: 'flex-start',
+    borderBottomWidth: 2,
+    borderBottomColor: INK.text,
+    paddingBottom: 6,
+    marginBottom: 8,
+  },
   kicker: { fontSize: READ_MIN, fontWeight: 700, letterSpacing: 1.5, color: INK.soft },
   // One line each, whatever the shop typed: the header must not push the sheet off the page.
   title: { fontSize: 17, fontWeight: 800, maxLines: 1, textOverflow: 'ellipsis' },

@@ -1,17 +1,6 @@
 // What a cut sheet is made from: plain data, no database. A saved garment and the public
 // calculator both build one of these and hand it to renderCutSheet.
-import type {
-  CreaseLanding,
-  CuffInput,
-  CuffPlan,
-  HemInput,
-  HemPlan,
-  HemTaperInput,
-  Precision,
-  TaperInput,
-  TaperPlan,
-  Unit,
-} from '@/lib/allowance/types';
+import type { CreaseLanding, CuffInput, CuffPlan, HemInput, HemPlan, HemTaperInput, Precision, TaperInput, TaperPlan, Unit } from '@/lib/allowance/types';
 import type { ExistingFinish } from '@/lib/existing-finish';
 
 /** The paper a sheet is printed on. */

@@ -18,7 +18,16 @@ export function overviewCsv(o: Overview): string {
   const methods = takingMethods(o);
   const digits = CURRENCIES[o.currency];
   const money = (minor: number) => (minor / 10 ** digits).toFixed(digits);
-  const header = ['date', 'taken_in', 'handed_over', 'due_done', 'due_open', 'overdue', ...methods.map((m) => `takings_${m}_${o.currency}`), `takings_total_${o.currency}`];
+  const header = [
+    'date',
+    'taken_in',
+    'handed_over',
+    'due_done',
+    'due_open',
+    'overdue',
+    ...methods.map((m) => `takings_${m}_${o.currency}`),
+    `takings_total_${o.currency}`,
+  ];
   const row = (label: string, d: Omit<Overview['days'][number], 'day'>) => {
     const amounts = methods.map((m) => d.takings[m] ?? 0);
     return [label, d.takenIn, d.handedOver, d.dueDone, d.dueOpen, d.overdue, ...amounts.map(money), money(amounts.reduce((a, b) => a + b, 0))].join(',');

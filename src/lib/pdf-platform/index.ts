@@ -83,7 +83,8 @@ export function installPdfPlatform(options: InstallOptions = {}): PatchStatus[] 
   active = [];
   const off = setting?.trim().toLowerCase() === 'off';
   if (off) log('pdf-platform: PDF_SPEED_PATCHES=off, no speed patches installed');
-  else if (setting !== undefined && !['', 'on'].includes(setting.trim().toLowerCase())) log(`pdf-platform: PDF_SPEED_PATCHES=${setting} is neither on nor off; taken as on`);
+  else if (setting !== undefined && !['', 'on'].includes(setting.trim().toLowerCase()))
+    log(`pdf-platform: PDF_SPEED_PATCHES=${setting} is neither on nor off; taken as on`);
   statuses = patches.map((patch) => {
     const installed = versions(patch.pkg, patch.via);
     const status: PatchStatus = { name: patch.name, pkg: patch.pkg, writtenFor: patch.writtenFor, installed, on: false };

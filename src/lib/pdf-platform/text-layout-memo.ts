@@ -77,7 +77,9 @@ function spell(value: unknown): string | null {
 export function layoutKey(text: AttributedString, container: Container, options: Options): string | null {
   if (container.exclusions && container.exclusions.length > 0) return null;
   // Parts joined once: a key built by += would be kept as a rope of hundreds of pieces.
-  const parts = [`${container.x},${container.y},${container.width},${container.height},${container.maxLines},${container.truncateMode}|${options.hyphenationPenalty}|${spell(options.hyphenationCallback)}|${JSON.stringify(options.shrinkWhitespaceFactor)}|`];
+  const parts = [
+    `${container.x},${container.y},${container.width},${container.height},${container.maxLines},${container.truncateMode}|${options.hyphenationPenalty}|${spell(options.hyphenationCallback)}|${JSON.stringify(options.shrinkWhitespaceFactor)}|`,
+  ];
   const spelt = new Map<object, string>();
   for (const run of text.runs) {
     const a = run.attributes;

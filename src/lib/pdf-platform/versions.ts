@@ -12,7 +12,7 @@ export function installedVersion(pkg: string, via?: string): string | null {
   try {
     const from = via ? createRequire(packageJsonOf(via, require) ?? require.resolve(via)) : require;
     const file = packageJsonOf(pkg, from);
-    return file ? (JSON.parse(readFileSync(file, 'utf8')) as { version?: string }).version ?? null : null;
+    return file ? ((JSON.parse(readFileSync(file, 'utf8')) as { version?: string }).version ?? null) : null;
   } catch {
     return null;
   }

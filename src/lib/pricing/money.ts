@@ -13,13 +13,18 @@ export function isCurrency(code: unknown): code is Currency {
 /** Minor units as money text, e.g. 4550 EUR → "€45.50". */
 export function formatMoney(minor: number, currency: Currency, locale = 'en-GB'): string {
   const digits = CURRENCIES[currency];
-  return new Intl.NumberFormat(locale, { style: 'currency', currency, minimumFractionDigits: digits, maximumFractionDigits: digits }).format(minor / 10 ** digits);
+  return new Intl.NumberFormat(locale, { style: 'currency', currency, minimumFractionDigits: digits, maximumFractionDigits: digits }).format(
+    minor / 10 ** digits,
+  );
 }
 
 /** Money as typed ("45.50", "45,5", "45") to minor units; null when it is not an amount. */
 export function parseMoney(text: string, currency: Currency): number | null {
   const digits = CURRENCIES[currency];
-  const clean = text.trim().replace(/^[^\d-]+/, '').replace(',', '.');
+  const clean = text
+    .trim()
+    .replace(/^[^\d-]+/, '')
+    .replace(',', '.');
   const re = digits === 0 ? /^-?\d+$/ : new RegExp(`^-?\\d+(\\.\\d{1,${digits}})?$`);
   if (!re.test(clean)) return null;
   const [whole, frac = ''] = clean.replace('-', '').split('.');

@@ -84,7 +84,13 @@ export const RUSH_RULE = 'Rush is one surcharge per ticket with work on it, howe
 
 /** True when a line is work that rush may be charged on (see `RUSH_RULE`): a worked-out line or
  * one from the list, or a kind of work the lead said rush applies to (as it stood when added). */
-export function isRushableWork(line: { key: string | null; kindId?: string | null; rushApplies?: boolean | null; source: string; voidedAt?: Date | string | null }): boolean {
+export function isRushableWork(line: {
+  key: string | null;
+  kindId?: string | null;
+  rushApplies?: boolean | null;
+  source: string;
+  voidedAt?: Date | string | null;
+}): boolean {
   if (line.voidedAt || (line.source !== 'auto' && line.source !== 'list')) return false;
   if (line.kindId) return line.rushApplies === true;
   return line.key !== null && line.key !== 'rush';

@@ -259,7 +259,15 @@ export function stripHeifMetadata(bytes: Uint8Array): HeifStripped | null {
     if (!iinf || !iloc) return { bytes: out, blanked: 0 };
     const ids = metadataItems(out, iinf);
     if (ids.size === 0) return { bytes: out, blanked: 0 };
-    return { bytes: out, blanked: blankItems(out, iloc, children.find((c) => c.type === 'idat'), ids) };
+    return {
+      bytes: out,
+      blanked: blankItems(
+        out,
+        iloc,
+        children.find((c) => c.type === 'idat'),
+        ids,
+      ),
+    };
   } catch (e) {
     if (e instanceof Malformed || e instanceof RangeError) return null;
     throw e;

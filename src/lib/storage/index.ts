@@ -1,17 +1,7 @@
 // The app's file storage: files on disk beside the database (one machine), or an S3-compatible
 // object store when STORAGE=s3 (several servers), unless something else is plugged in.
 import { join } from 'node:path';
-import {
-  DATA_DIR,
-  STORAGE,
-  S3_BUCKET,
-  S3_PREFIX,
-  S3_REGION,
-  S3_ENDPOINT,
-  S3_ACCESS_KEY_ID,
-  S3_SECRET_ACCESS_KEY,
-  S3_FORCE_PATH_STYLE,
-} from 'astro:env/server';
+import { DATA_DIR, STORAGE, S3_BUCKET, S3_PREFIX, S3_REGION, S3_ENDPOINT, S3_ACCESS_KEY_ID, S3_SECRET_ACCESS_KEY, S3_FORCE_PATH_STYLE } from 'astro:env/server';
 import { dataDir } from '@/db/app-paths';
 import { DiskStorage } from './disk-storage';
 import { s3FromSettings } from './s3-storage';

@@ -65,8 +65,7 @@ export interface StorageSettings {
 /** The S3 storage the settings describe, or a one-line reason they are incomplete. */
 export function s3FromSettings(s: StorageSettings): S3Storage | string {
   if (!s.S3_BUCKET) return 'STORAGE=s3 needs S3_BUCKET (the bucket photos are kept in).';
-  const credentials =
-    s.S3_ACCESS_KEY_ID && s.S3_SECRET_ACCESS_KEY ? { accessKeyId: s.S3_ACCESS_KEY_ID, secretAccessKey: s.S3_SECRET_ACCESS_KEY } : undefined;
+  const credentials = s.S3_ACCESS_KEY_ID && s.S3_SECRET_ACCESS_KEY ? { accessKeyId: s.S3_ACCESS_KEY_ID, secretAccessKey: s.S3_SECRET_ACCESS_KEY } : undefined;
   if (Boolean(s.S3_ACCESS_KEY_ID) !== Boolean(s.S3_SECRET_ACCESS_KEY)) {
     return 'Set both S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY, or neither (then the SDK finds credentials itself).';
   }

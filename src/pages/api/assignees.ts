@@ -3,4 +3,6 @@ import { route } from '@/lib/route';
 import { staffOf } from '@/services/garments';
 
 /** The shop's people by name, with their roles. */
-export const GET = route({ summary: "The shop's people a garment can be given to, with their roles.", permission: ['tickets', 'read'] }, ({ actor }) => staffOf(actor));
+export const GET = route({ summary: "The shop's people a garment can be given to, with their roles.", permission: ['tickets', 'read'] }, ({ actor }) =>
+  staffOf(actor),
+);

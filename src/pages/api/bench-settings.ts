@@ -4,7 +4,9 @@ import { settingsRequest } from '@/lib/bench-requests';
 import { benchSettings, saveBenchSettings } from '@/services/shop-settings';
 
 /** The shop's scale and step names (everyone at the bench reads them). */
-export const GET = route({ summary: "The shop's measuring scale and its names for the steps.", permission: ['tickets', 'read'] }, ({ actor }) => benchSettings(actor.shopId));
+export const GET = route({ summary: "The shop's measuring scale and its names for the steps.", permission: ['tickets', 'read'] }, ({ actor }) =>
+  benchSettings(actor.shopId),
+);
 
 /** Saves the shop's scale and step names (the lead). */
 export const PUT = route(

@@ -4,7 +4,9 @@ import { timeZoneRequest } from '@/lib/time-zone-request';
 import { saveShopTimeZone, shopTimeZone } from '@/services/shop-time-zone';
 
 /** The shop's time zone and whether it was chosen (every member reads it). */
-export const GET = route({ summary: "The shop's time zone and whether it was chosen.", permission: ['tickets', 'read'] }, ({ actor }) => shopTimeZone(actor.shopId));
+export const GET = route({ summary: "The shop's time zone and whether it was chosen.", permission: ['tickets', 'read'] }, ({ actor }) =>
+  shopTimeZone(actor.shopId),
+);
 
 /** Saves the shop's time zone (the lead); 422 for a name Intl does not know. */
 export const PUT = route(

@@ -11,7 +11,9 @@ export const POST = route(
     permission: 'public',
     body: shopSignUpInput,
     status: 201,
-    examples: [{ summary: 'A new shop', body: { shopName: 'Example Hems', name: 'Alex Example', email: 'alex@example-hems.test', password: 'a-long-password' } }],
+    examples: [
+      { summary: 'A new shop', body: { shopName: 'Example Hems', name: 'Alex Example', email: 'alex@example-hems.test', password: 'a-long-password' } },
+    ],
   },
   async ({ body }) => {
     const { shopId, headers } = await createShop(body);

@@ -39,13 +39,27 @@ export async function pickUp(actor: Actor, ticketId: string): Promise<CounterSum
   // and one that came first is in the balance checked here.
   const moved = await withTicketLock(actor.shopId, ticketId, async (tx, ticket) => {
     const summary = await assertReadyToHandOver(tx, ticket);
-    const ready = await tx.select({ id: garments.id }).from(garments).where(and(eq(garments.ticketId, ticketId), eq(garments.shopId, actor.shopId), eq(garments.status, 'ready')));
+    const ready = await tx
+      .select({ id: garments.id })
+      .from(garments)
+      .where(and(eq(garments.ticketId, ticketId), eq(garments.shopId, actor.shopId), eq(garments.status, 'ready')));
     // The same move as a garment handed over on its own: recorded per garment, listeners told.
-    const rows = await moveGarmentsLocked(tx, actor, ticketId, ready.map((g) => g.id), 'ready', 'collected');
-    await audit(tx, actor.shopId, actor.userId, 'ticket.collected', ticketId, { total: summary.total, paid: summary.paid, refunded: summary.refunded, credit: summary.credit });
+    const rows = await moveGarmentsLocked(
+      tx,
+      actor,
+      ticketId,
+      ready.map((g) => g.id),
+      'ready',
+      'collected',
+    );
+    await audit(tx, actor.shopId, actor.userId, 'ticket.collected', ticketId, {
+      total: summary.total,
+      paid: summary.paid,
+      refunded: summary.refunded,
+      credit: summary.credit,
+    });
     return rows;
   });
   await tellMoved(actor, moved);
   return counterSummary(actor, ticketId);
 }
-

@@ -26,25 +26,42 @@ export interface IntakeGarment {
  * worked-out one (`auto`): pricing from the fitting later replaces it. Kinds are lines from the list. */
 export async function priceAtIntake(tx: Db, actor: Actor, ticketId: string, garments: readonly IntakeGarment[], rush: boolean): Promise<number> {
   if (!rush && garments.every((g) => g.finish === null && g.work.length === 0)) return 0;
-  if (!can(actor.role, ['prices', 'adjust'])) throw new ServiceError(422, `Your role (${actor.role}) may not price work: leave the finish, the kinds of work and rush to the counter.`);
+  if (!can(actor.role, ['prices', 'adjust']))
+    throw new ServiceError(422, `Your role (${actor.role}) may not price work: leave the finish, the kinds of work and rush to the counter.`);
   const list = await priceListOf(actor.shopId, tx);
-  const kinds = await liveKinds(tx, actor.shopId, garments.flatMap((g) => g.work));
+  const kinds = await liveKinds(
+    tx,
+    actor.shopId,
+    garments.flatMap((g) => g.work),
+  );
   const facts: GarmentFacts[] = garments
     .filter((g) => g.finish !== null)
     .map((g) => ({ garmentId: g.id, label: g.label, finish: g.finish, taperLetOut: false, oldCuff: g.existingFinish === 'cuff' }));
   const kindLines = garments.flatMap((g) =>
     g.work.map((id) => {
       const k = kinds.get(id)!;
-      return { garmentId: g.id, key: null, kindId: k.id, rushApplies: k.rushApplies, source: 'list' as const, label: `${k.name} — ${g.label}`, amountMinor: k.amountMinor };
+      return {
+        garmentId: g.id,
+        key: null,
+        kindId: k.id,
+        rushApplies: k.rushApplies,
+        source: 'list' as const,
+        label: `${k.name} — ${g.label}`,
+        amountMinor: k.amountMinor,
+      };
     }),
   );
   // The same pure rule as every other way of pricing (RUSH_RULE): kinds count as work when rush applies to them.
   const priced = priceTicket(facts, list, { rush, otherWork: kindLines.some(isRushableWork) });
   const rushLines = priced.lines.filter((l) => l.key === 'rush');
-  if (rush && rushLines.length === 0) throw new ServiceError(422, 'Rush goes on a ticket with work priced on it: pick a finish, or a kind of work rush applies to.');
+  if (rush && rushLines.length === 0)
+    throw new ServiceError(422, 'Rush goes on a ticket with work priced on it: pick a finish, or a kind of work rush applies to.');
   // Each garment's lines together (finish, then its kinds), rush last, as the ticket shows them.
   const ordered = [
-    ...garments.flatMap((g) => [...priced.lines.filter((l) => l.garmentId === g.id).map((l) => ({ ...l, source: 'auto' as const })), ...kindLines.filter((l) => l.garmentId === g.id)]),
+    ...garments.flatMap((g) => [
+      ...priced.lines.filter((l) => l.garmentId === g.id).map((l) => ({ ...l, source: 'auto' as const })),
+      ...kindLines.filter((l) => l.garmentId === g.id),
+    ]),
     ...rushLines.map((l) => ({ ...l, source: 'auto' as const })),
   ];
   if (ordered.length === 0) return 0;

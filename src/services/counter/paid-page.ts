@@ -24,7 +24,15 @@ const SESSION_ID = /^cs_[A-Za-z0-9_]{8,200}$/;
 export async function paidSession(sessionId: string | null): Promise<PaidSession | null> {
   if (!sessionId || !SESSION_ID.test(sessionId)) return null;
   const [link] = await db
-    .select({ shopId: paymentLinks.shopId, ticketId: paymentLinks.ticketId, status: paymentLinks.status, amountMinor: paymentLinks.amountMinor, currency: paymentLinks.currency, number: tickets.number, shopName: organization.name })
+    .select({
+      shopId: paymentLinks.shopId,
+      ticketId: paymentLinks.ticketId,
+      status: paymentLinks.status,
+      amountMinor: paymentLinks.amountMinor,
+      currency: paymentLinks.currency,
+      number: tickets.number,
+      shopName: organization.name,
+    })
     .from(paymentLinks)
     .innerJoin(tickets, and(eq(tickets.id, paymentLinks.ticketId), eq(tickets.shopId, paymentLinks.shopId)))
     .innerJoin(organization, eq(organization.id, paymentLinks.shopId))

@@ -52,7 +52,10 @@ async function expireAtService(client: Stripe, sessionId: string): Promise<void>
   }
   if (session.status === 'expired') return;
   if (session.status === 'complete') {
-    throw new ServiceError(409, 'The customer has just paid the open pay link online: wait a moment for the payment to arrive, reload, and change the price after that if still needed.');
+    throw new ServiceError(
+      409,
+      'The customer has just paid the open pay link online: wait a moment for the payment to arrive, reload, and change the price after that if still needed.',
+    );
   }
   throw paymentServiceFailure(refused, 'close the open pay link');
 }
@@ -68,14 +71,30 @@ export function liveLinks(tx: Db, shopId: string, ticketId: string): Promise<Pay
 /** Marks links `expiring` (inside the ticket's lock), before the service is asked to close them. */
 export async function markExpiring(tx: Db, links: Pick<PaymentLink, 'id'>[]): Promise<void> {
   if (links.length === 0) return;
-  await tx.update(paymentLinks).set({ status: 'expiring' }).where(and(inArray(paymentLinks.id, links.map((l) => l.id)), inArray(paymentLinks.status, [...LIVE_LINK_STATUSES])));
+  await tx
+    .update(paymentLinks)
+    .set({ status: 'expiring' })
+    .where(
+      and(
+        inArray(
+          paymentLinks.id,
+          links.map((l) => l.id),
+        ),
+        inArray(paymentLinks.status, [...LIVE_LINK_STATUSES]),
+      ),
+    );
 }
 
 /** Asks the service to close each link, with no transaction open, then records under the ticket's
  * lock what it confirmed (expired) and, for a link that was open for the balance as it stands
  * (`unconfirmed: 'open'`), reopens the rest; a discarded session stays `expiring` until closed.
  * Throws the first refusal (409/502/503); the links after it are not tried. */
-export async function closeAtService(shopId: string, ticketId: string, links: Pick<PaymentLink, 'id' | 'sessionId'>[], unconfirmed: 'open' | 'expiring'): Promise<void> {
+export async function closeAtService(
+  shopId: string,
+  ticketId: string,
+  links: Pick<PaymentLink, 'id' | 'sessionId'>[],
+  unconfirmed: 'open' | 'expiring',
+): Promise<void> {
   const client = paymentClient();
   const closed: string[] = [];
   let refusal: unknown = null;
@@ -93,8 +112,16 @@ export async function closeAtService(shopId: string, ticketId: string, links: Pi
   const rest = links.map((l) => l.id).filter((id) => !closed.includes(id));
   await withTicketLock(shopId, ticketId, async (tx) => {
     // A webhook may have recorded a payment meanwhile: a paid link stays paid.
-    if (closed.length > 0) await tx.update(paymentLinks).set({ status: 'expired' }).where(and(inArray(paymentLinks.id, closed), inArray(paymentLinks.status, [...LIVE_LINK_STATUSES])));
-    if (rest.length > 0 && unconfirmed === 'open') await tx.update(paymentLinks).set({ status: 'open' }).where(and(inArray(paymentLinks.id, rest), eq(paymentLinks.status, 'expiring')));
+    if (closed.length > 0)
+      await tx
+        .update(paymentLinks)
+        .set({ status: 'expired' })
+        .where(and(inArray(paymentLinks.id, closed), inArray(paymentLinks.status, [...LIVE_LINK_STATUSES])));
+    if (rest.length > 0 && unconfirmed === 'open')
+      await tx
+        .update(paymentLinks)
+        .set({ status: 'open' })
+        .where(and(inArray(paymentLinks.id, rest), eq(paymentLinks.status, 'expiring')));
   });
   if (refusal) throw paymentServiceFailure(refusal, 'close the open pay link');
 }
@@ -106,7 +133,12 @@ const ROUNDS = 3;
  * `check` refuses early (under the lock) so a change that would be refused closes nothing; `change`
  * must check again, as it runs in a later transaction. When the service does not confirm, throws
  * 409/502/503 and the change is not made. */
-export async function withLinksClosed<T>(shopId: string, ticketId: string, check: (tx: Db, ticket: Ticket) => Promise<unknown>, change: (tx: Db, ticket: Ticket) => Promise<T>): Promise<T> {
+export async function withLinksClosed<T>(
+  shopId: string,
+  ticketId: string,
+  check: (tx: Db, ticket: Ticket) => Promise<unknown>,
+  change: (tx: Db, ticket: Ticket) => Promise<T>,
+): Promise<T> {
   for (let round = 0; round < ROUNDS; round += 1) {
     const step = await withTicketLock(shopId, ticketId, async (tx, ticket) => {
       const live = await liveLinks(tx, shopId, ticketId);
@@ -148,7 +180,10 @@ export async function closeCutShort(shopId: string, ticketId: string, links: Pay
     try {
       let sessionId: string | null = null;
       if (client && link.request) {
-        const session = await client.checkout.sessions.create(link.request as Stripe.Checkout.SessionCreateParams, { idempotencyKey: sessionKey(link.id), maxNetworkRetries: 0 });
+        const session = await client.checkout.sessions.create(link.request as Stripe.Checkout.SessionCreateParams, {
+          idempotencyKey: sessionKey(link.id),
+          maxNetworkRetries: 0,
+        });
         await expireAtService(client, session.id);
         sessionId = session.id;
       }

@@ -46,7 +46,11 @@ function isUniqueViolation(e: unknown): boolean {
  * credit, so two tickets of one customer cannot spend the same credit at once. */
 export async function lockCustomerCredit(tx: Db, ticket: Ticket): Promise<number> {
   if (!ticket.customerId) return 0;
-  await tx.select({ id: customers.id }).from(customers).where(and(eq(customers.id, ticket.customerId), eq(customers.shopId, ticket.shopId))).for('update');
+  await tx
+    .select({ id: customers.id })
+    .from(customers)
+    .where(and(eq(customers.id, ticket.customerId), eq(customers.shopId, ticket.shopId)))
+    .for('update');
   return customerCreditOf(ticket.shopId, ticket.customerId, tx);
 }
 
@@ -55,7 +59,8 @@ async function checkPayment(tx: Db, ticket: Ticket, settings: CounterView, input
   const before = await summaryOf(ticket, settings, tx);
   if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
   if (before.due === 0) throw new ServiceError(422, 'Nothing is due on this ticket.');
-  if (input.amountMinor > before.due) throw new ServiceError(422, `Take at most what is due (${formatMoney(before.due, before.currency)}); give change from cash.`);
+  if (input.amountMinor > before.due)
+    throw new ServiceError(422, `Take at most what is due (${formatMoney(before.due, before.currency)}); give change from cash.`);
   if (input.method === 'credit') {
     if (!ticket.customerId) throw new ServiceError(422, 'This ticket has no customer, so no credit kept on one.');
     const credit = await lockCustomerCredit(tx, ticket);
@@ -97,7 +102,10 @@ const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 async function whileCreating(shopId: string, linkId: string): Promise<void> {
   for (let waited = 0; waited <= (STALE_CREATING_SECONDS + 1) * 1000; waited += 100) {
     await sleep(100);
-    const [row] = await db.select({ status: paymentLinks.status }).from(paymentLinks).where(and(eq(paymentLinks.id, linkId), eq(paymentLinks.shopId, shopId)));
+    const [row] = await db
+      .select({ status: paymentLinks.status })
+      .from(paymentLinks)
+      .where(and(eq(paymentLinks.id, linkId), eq(paymentLinks.shopId, shopId)));
     if (row?.status !== 'creating') return;
   }
 }
@@ -116,7 +124,10 @@ export async function createPaymentLink(actor: Actor, ticketId: string, appOrigi
       if (before.ticket.status === 'collected') throw new ServiceError(422, 'This ticket is already collected.');
       if (before.due === 0) throw new ServiceError(422, 'Nothing is due on this ticket.');
       const cutShort = await cutShortLinks(tx, actor.shopId, ticketId);
-      const creating = await tx.select().from(paymentLinks).where(and(eq(paymentLinks.shopId, actor.shopId), eq(paymentLinks.ticketId, ticketId), eq(paymentLinks.status, 'creating')));
+      const creating = await tx
+        .select()
+        .from(paymentLinks)
+        .where(and(eq(paymentLinks.shopId, actor.shopId), eq(paymentLinks.ticketId, ticketId), eq(paymentLinks.status, 'creating')));
       const making = creating.find((l) => !cutShort.some((c) => c.id === l.id));
       const live = await liveLinks(tx, actor.shopId, ticketId);
       if (live.some((l) => l.status === 'open' && l.amountMinor === before.due)) return { plan: { kind: 'ready' }, cutShort };
@@ -129,7 +140,14 @@ export async function createPaymentLink(actor: Actor, ticketId: string, appOrigi
       const request: Stripe.Checkout.SessionCreateParams = {
         mode: 'payment',
         line_items: [
-          { quantity: 1, price_data: { currency: before.currency.toLowerCase(), unit_amount: before.due, product_data: { name: `${actor.shopName}: ticket ${ticketLabel(before.ticket.number, actor.shopName)}, balance` } } },
+          {
+            quantity: 1,
+            price_data: {
+              currency: before.currency.toLowerCase(),
+              unit_amount: before.due,
+              product_data: { name: `${actor.shopName}: ticket ${ticketLabel(before.ticket.number, actor.shopName)}, balance` },
+            },
+          },
         ],
         client_reference_id: ticketId,
         metadata: { ticketId, shopId: actor.shopId, linkId: id },
@@ -139,7 +157,16 @@ export async function createPaymentLink(actor: Actor, ticketId: string, appOrigi
       };
       const [link] = await tx
         .insert(paymentLinks)
-        .values({ id, shopId: actor.shopId, ticketId, status: 'creating', amountMinor: before.due, currency: before.currency, createdById: actor.userId, request: request as Record<string, unknown> })
+        .values({
+          id,
+          shopId: actor.shopId,
+          ticketId,
+          status: 'creating',
+          amountMinor: before.due,
+          currency: before.currency,
+          createdById: actor.userId,
+          request: request as Record<string, unknown>,
+        })
         .returning();
       return { plan: { kind: 'make', link: link!, request }, cutShort };
     });
@@ -172,7 +199,10 @@ async function makeAtService(client: Stripe, link: PaymentLink, request: Stripe.
     // session closed later by replaying the request. A refusal made nothing: the row goes.
     await withTicketLock(shopId, ticketId, (tx) =>
       unreached
-        ? tx.update(paymentLinks).set({ status: 'failed' }).where(and(eq(paymentLinks.id, link.id), eq(paymentLinks.status, 'creating')))
+        ? tx
+            .update(paymentLinks)
+            .set({ status: 'failed' })
+            .where(and(eq(paymentLinks.id, link.id), eq(paymentLinks.status, 'creating')))
         : tx.delete(paymentLinks).where(and(eq(paymentLinks.id, link.id), eq(paymentLinks.status, 'creating'))),
     );
     throw paymentServiceFailure(e, 'make a pay link');
@@ -202,7 +232,10 @@ async function makeAtService(client: Stripe, link: PaymentLink, request: Stripe.
     const closed = await closeQuietly(client, session.id);
     try {
       await withTicketLock(shopId, ticketId, (tx) =>
-        tx.update(paymentLinks).set({ status: 'failed', sessionId: closed ? session.id : null }).where(and(eq(paymentLinks.id, link.id), eq(paymentLinks.status, 'creating'))),
+        tx
+          .update(paymentLinks)
+          .set({ status: 'failed', sessionId: closed ? session.id : null })
+          .where(and(eq(paymentLinks.id, link.id), eq(paymentLinks.status, 'creating'))),
       );
     } catch {
       // The database that refused the save may refuse this too: the link goes stale and is replayed.
@@ -246,7 +279,8 @@ export async function receiveWebhook(payload: string, signature: string | null):
     return await db.transaction(async (tx) => {
       const [fresh] = await tx.insert(paymentEvents).values({ id: event.id, type: event.type }).onConflictDoNothing().returning();
       if (!fresh) return { status: 409 as const, message: 'Event already processed.' };
-      if (event.type === 'refund.created' || event.type === 'refund.updated') return { status: 200 as const, message: await applyRefundEvent(tx, event.data.object) };
+      if (event.type === 'refund.created' || event.type === 'refund.updated')
+        return { status: 200 as const, message: await applyRefundEvent(tx, event.data.object) };
       if (event.type !== 'checkout.session.completed') return { status: 200 as const, message: 'Ignored.' };
       const session = event.data.object;
       if (session.payment_status !== 'paid') return { status: 200 as const, message: 'Not paid yet.' };
@@ -289,7 +323,11 @@ export async function claimSlipData(actor: Actor, ticketId: string): Promise<Cla
   const ticket = await shopTicket(actor, ticketId);
   const settings = await counterSettingsOf(actor.shopId);
   const summary = await summaryOf(ticket, settings);
-  const items = await db.select({ description: garments.description, kind: garments.kind }).from(garments).where(and(eq(garments.ticketId, ticketId), eq(garments.shopId, actor.shopId))).orderBy(asc(garments.position));
+  const items = await db
+    .select({ description: garments.description, kind: garments.kind })
+    .from(garments)
+    .where(and(eq(garments.ticketId, ticketId), eq(garments.shopId, actor.shopId)))
+    .orderBy(asc(garments.position));
   return {
     shopName: actor.shopName,
     location: settings.location,

@@ -40,7 +40,14 @@ async function refuseTakenName(tx: Db, shopId: string, name: string, except?: st
   const [other] = await tx
     .select({ id: priceKinds.id })
     .from(priceKinds)
-    .where(and(eq(priceKinds.shopId, shopId), isNull(priceKinds.retiredAt), sql`lower(${priceKinds.name}) = lower(${name})`, except ? ne(priceKinds.id, except) : undefined));
+    .where(
+      and(
+        eq(priceKinds.shopId, shopId),
+        isNull(priceKinds.retiredAt),
+        sql`lower(${priceKinds.name}) = lower(${name})`,
+        except ? ne(priceKinds.id, except) : undefined,
+      ),
+    );
   if (other) throw nameTaken(name);
 }
 
@@ -69,7 +76,10 @@ export async function addKind(actor: Actor, input: z.infer<typeof priceKindInput
   return withNameCheck(input.name, () =>
     db.transaction(async (tx) => {
       await refuseTakenName(tx, actor.shopId, input.name);
-      const [row] = await tx.insert(priceKinds).values({ shopId: actor.shopId, name: input.name, amountMinor: input.amountMinor, rushApplies: input.rushApplies }).returning();
+      const [row] = await tx
+        .insert(priceKinds)
+        .values({ shopId: actor.shopId, name: input.name, amountMinor: input.amountMinor, rushApplies: input.rushApplies })
+        .returning();
       const changes: Change[] = [
         { field: 'name', from: null, to: row!.name },
         { field: 'amountMinor', from: null, to: row!.amountMinor },
@@ -87,7 +97,11 @@ export async function changeKind(actor: Actor, kindId: string, patch: z.infer<ty
   const name = patch.name ?? '';
   return withNameCheck(name, () =>
     db.transaction(async (tx) => {
-      const [was] = await tx.select().from(priceKinds).where(and(eq(priceKinds.id, kindId), eq(priceKinds.shopId, actor.shopId))).for('update');
+      const [was] = await tx
+        .select()
+        .from(priceKinds)
+        .where(and(eq(priceKinds.id, kindId), eq(priceKinds.shopId, actor.shopId)))
+        .for('update');
       if (!was) throw noSuchKind(404);
       const retiredNow = patch.retired === undefined ? was.retiredAt !== null : patch.retired;
       const next = { name: patch.name ?? was.name, amountMinor: patch.amountMinor ?? was.amountMinor, rushApplies: patch.rushApplies ?? was.rushApplies };
@@ -98,9 +112,14 @@ export async function changeKind(actor: Actor, kindId: string, patch: z.infer<ty
       if (retiredNow !== (was.retiredAt !== null)) changes.push({ field: 'retired', from: was.retiredAt !== null, to: retiredNow });
       if (changes.length === 0) return view(was);
       // A kind back on the list (or renamed while on it) must not share a live kind's name.
-      if (!retiredNow && (next.name.toLowerCase() !== was.name.toLowerCase() || was.retiredAt !== null)) await refuseTakenName(tx, actor.shopId, next.name, was.id);
+      if (!retiredNow && (next.name.toLowerCase() !== was.name.toLowerCase() || was.retiredAt !== null))
+        await refuseTakenName(tx, actor.shopId, next.name, was.id);
       const retiredAt = retiredNow ? (was.retiredAt ?? new Date()) : null;
-      const [row] = await tx.update(priceKinds).set({ ...next, retiredAt, updatedAt: new Date() }).where(eq(priceKinds.id, was.id)).returning();
+      const [row] = await tx
+        .update(priceKinds)
+        .set({ ...next, retiredAt, updatedAt: new Date() })
+        .where(eq(priceKinds.id, was.id))
+        .returning();
       await audit(tx, actor.shopId, actor.userId, 'price-kind.changed', was.id, { line: row!.name, changes });
       return view(row!);
     }),
@@ -112,7 +131,10 @@ export async function changeKind(actor: Actor, kindId: string, patch: z.infer<ty
 export async function liveKinds(q: Db, shopId: string, ids: readonly string[]): Promise<Map<string, PriceKind>> {
   const wanted = [...new Set(ids)];
   if (wanted.length === 0) return new Map();
-  const rows = await q.select().from(priceKinds).where(and(eq(priceKinds.shopId, shopId), inArray(priceKinds.id, wanted)));
+  const rows = await q
+    .select()
+    .from(priceKinds)
+    .where(and(eq(priceKinds.shopId, shopId), inArray(priceKinds.id, wanted)));
   const byId = new Map(rows.map((r) => [r.id, r]));
   for (const id of wanted) {
     const k = byId.get(id);

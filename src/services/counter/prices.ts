@@ -58,8 +58,18 @@ export async function savePriceList(actor: Actor, input: z.infer<typeof priceLis
   const listBefore = await priceListOf(actor.shopId);
   const since = input.autoReadyNotice ? (before.autoReadyNotice && before.autoReadySince ? before.autoReadySince : new Date()) : null;
   await db.transaction(async (tx) => {
-    const settings = { currency: input.currency, hours: input.hours, location: input.location, autoReadyNotice: input.autoReadyNotice, autoReadySince: since, updatedAt: new Date() };
-    await tx.insert(counterSettings).values({ shopId: actor.shopId, ...settings }).onConflictDoUpdate({ target: counterSettings.shopId, set: settings });
+    const settings = {
+      currency: input.currency,
+      hours: input.hours,
+      location: input.location,
+      autoReadyNotice: input.autoReadyNotice,
+      autoReadySince: since,
+      updatedAt: new Date(),
+    };
+    await tx
+      .insert(counterSettings)
+      .values({ shopId: actor.shopId, ...settings })
+      .onConflictDoUpdate({ target: counterSettings.shopId, set: settings });
     for (const item of input.items) {
       await tx
         .insert(priceItems)
@@ -88,7 +98,11 @@ export async function listLines(actor: Actor, ticketId: string): Promise<PriceLi
 
 /** The lines of a ticket known to be the shop's (read through `q`, a transaction when given). */
 export function linesOf(shopId: string, ticketId: string, q: Db = db): Promise<PriceLine[]> {
-  return q.select().from(priceLines).where(and(eq(priceLines.shopId, shopId), eq(priceLines.ticketId, ticketId))).orderBy(asc(priceLines.createdAt), asc(priceLines.id));
+  return q
+    .select()
+    .from(priceLines)
+    .where(and(eq(priceLines.shopId, shopId), eq(priceLines.ticketId, ticketId)))
+    .orderBy(asc(priceLines.createdAt), asc(priceLines.id));
 }
 
 async function refuseWhenSettled(_tx: Db, ticket: Ticket): Promise<void> {
@@ -106,7 +120,11 @@ function refuseBelowZero(totalAfter: number): void {
 
 /** Replaces the ticket's worked-out lines with those its garments' finishes and plans call for;
  * rush follows `RUSH_RULE` (one line, on any work, also work added by hand). */
-export async function priceFromGarments(actor: Actor, ticketId: string, input: z.infer<typeof autoLinesInput>): Promise<{ lines: PriceLine[]; unpriced: string[] }> {
+export async function priceFromGarments(
+  actor: Actor,
+  ticketId: string,
+  input: z.infer<typeof autoLinesInput>,
+): Promise<{ lines: PriceLine[]; unpriced: string[] }> {
   await shopTicket(actor, ticketId);
   const facts = await garmentFacts(actor.shopId, ticketId);
   const list = await priceListOf(actor.shopId);
@@ -124,15 +142,26 @@ export async function priceFromGarments(actor: Actor, ticketId: string, input: z
       await tx
         .update(priceLines)
         .set({ voidedAt: new Date(), voidedById: actor.userId, voidReason: 'Rush unticked when pricing from the garments' })
-        .where(inArray(priceLines.id, handRush.map((l) => l.id)));
+        .where(
+          inArray(
+            priceLines.id,
+            handRush.map((l) => l.id),
+          ),
+        );
     }
-    await tx.delete(priceLines).where(and(eq(priceLines.ticketId, ticketId), eq(priceLines.shopId, actor.shopId), eq(priceLines.source, 'auto'), isNull(priceLines.voidedAt)));
+    await tx
+      .delete(priceLines)
+      .where(and(eq(priceLines.ticketId, ticketId), eq(priceLines.shopId, actor.shopId), eq(priceLines.source, 'auto'), isNull(priceLines.voidedAt)));
     const keptTotal = sumMinor(kept.filter((l) => input.rush || l.key !== 'rush'));
     refuseBelowZero(keptTotal + sumMinor(lines));
     if (lines.length > 0) {
       // One transaction shares one now(): a millisecond apart keeps the lines in the garments' order.
       const at = Date.now();
-      await tx.insert(priceLines).values(lines.map((l, i) => ({ ...l, shopId: actor.shopId, ticketId, source: 'auto' as const, createdById: actor.userId, createdAt: new Date(at + i) })));
+      await tx
+        .insert(priceLines)
+        .values(
+          lines.map((l, i) => ({ ...l, shopId: actor.shopId, ticketId, source: 'auto' as const, createdById: actor.userId, createdAt: new Date(at + i) })),
+        );
     }
     await audit(tx, actor.shopId, actor.userId, 'prices.from-garments', ticketId, { lines: lines.length, rush: input.rush });
   });
@@ -153,7 +182,7 @@ export async function addLine(actor: Actor, ticketId: string, input: z.infer<typ
       : kind
         ? { key: null, kindId: kind.id, rushApplies: kind.rushApplies, label: kind.name, amountMinor: kind.amountMinor, reason: null }
         : input.source === 'adjust'
-        ? { key: null, label: input.label, amountMinor: input.amountMinor, reason: input.reason }
+          ? { key: null, label: input.label, amountMinor: input.amountMinor, reason: input.reason }
           : { key: null, label: 'No charge', amountMinor: 0, reason: input.source === 'no-charge' ? input.reason : '' };
   const check = async (tx: Db, ticket: Ticket) => {
     await refuseWhenSettled(tx, ticket);
@@ -175,7 +204,10 @@ export async function addLine(actor: Actor, ticketId: string, input: z.infer<typ
     await check(tx, ticket);
     // A kind's line is a line from the list: the same rush rule and the same history.
     const source = input.source === 'kind' ? ('list' as const) : input.source;
-    const [added] = await tx.insert(priceLines).values({ ...values, source, shopId: actor.shopId, ticketId, createdById: actor.userId }).returning();
+    const [added] = await tx
+      .insert(priceLines)
+      .values({ ...values, source, shopId: actor.shopId, ticketId, createdById: actor.userId })
+      .returning();
     const action = input.source === 'adjust' ? 'prices.adjusted' : input.source === 'no-charge' ? 'prices.no-charge' : 'prices.line-added';
     await audit(tx, actor.shopId, actor.userId, action, ticketId, { line: added!.id, amountMinor: added!.amountMinor, reason: added!.reason });
     return added!;
@@ -204,15 +236,38 @@ export async function voidLine(actor: Actor, ticketId: string, lineId: string, i
       .set({ voidedAt: new Date(), voidedById: actor.userId, voidReason: input.reason })
       .where(and(eq(priceLines.id, line.id), isNull(priceLines.voidedAt)))
       .returning();
-    await audit(tx, actor.shopId, actor.userId, 'prices.line-voided', ticketId, { line: line.id, label: line.label, amountMinor: line.amountMinor, reason: input.reason });
+    await audit(tx, actor.shopId, actor.userId, 'prices.line-voided', ticketId, {
+      line: line.id,
+      label: line.label,
+      amountMinor: line.amountMinor,
+      reason: input.reason,
+    });
     return voided!;
   });
 }
 
 /** What the pricing needs to know of each garment on the ticket, read from its measurements. */
 export async function garmentFacts(shopId: string, ticketId: string): Promise<GarmentFacts[]> {
-  const rows = await db.select().from(garments).where(and(eq(garments.shopId, shopId), eq(garments.ticketId, ticketId))).orderBy(asc(garments.position));
-  const legs = rows.length === 0 ? [] : await db.select().from(measurements).where(and(eq(measurements.shopId, shopId), inArray(measurements.garmentId, rows.map((g) => g.id))));
+  const rows = await db
+    .select()
+    .from(garments)
+    .where(and(eq(garments.shopId, shopId), eq(garments.ticketId, ticketId)))
+    .orderBy(asc(garments.position));
+  const legs =
+    rows.length === 0
+      ? []
+      : await db
+          .select()
+          .from(measurements)
+          .where(
+            and(
+              eq(measurements.shopId, shopId),
+              inArray(
+                measurements.garmentId,
+                rows.map((g) => g.id),
+              ),
+            ),
+          );
   return rows.map((g, i) => {
     const own = legs.filter((m) => m.garmentId === g.id);
     // The fitting's finish wins over the one noted at intake.

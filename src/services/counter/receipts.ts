@@ -30,7 +30,12 @@ async function paymentOf(actor: Pick<Actor, 'shopId'>, ticketId: string, payment
   return { summary, payment };
 }
 
-function receiptOf(shop: { name: string; location: string; hours: string; timeZone: string }, summary: CounterSummary, payment: CounterSummary['payments'][number], now: Date): ReceiptData {
+function receiptOf(
+  shop: { name: string; location: string; hours: string; timeZone: string },
+  summary: CounterSummary,
+  payment: CounterSummary['payments'][number],
+  now: Date,
+): ReceiptData {
   // Printed on the server: every moment in the shop's zone, not the server's.
   const when = (at: Date) => dateTimeText(at, shop.timeZone);
   return {
@@ -48,7 +53,11 @@ function receiptOf(shop: { name: string; location: string; hours: string; timeZo
     // A failed refund gave nothing back; a pending one counts, as in the balance.
     refunds: summary.refunds
       .filter((r) => r.status !== 'failed')
-      .map((r) => ({ how: r.status === 'pending' ? `${GIVEN_BACK[r.method]} (on its way)` : GIVEN_BACK[r.method], at: when(r.at), amountMinor: r.amountMinor })),
+      .map((r) => ({
+        how: r.status === 'pending' ? `${GIVEN_BACK[r.method]} (on its way)` : GIVEN_BACK[r.method],
+        at: when(r.at),
+        amountMinor: r.amountMinor,
+      })),
     paid: summary.paid,
     refunded: summary.refunded,
     due: summary.due,
@@ -66,7 +75,11 @@ export async function receiptData(actor: Pick<Actor, 'shopId' | 'shopName'>, tic
 }
 
 /** The receipt as PDF bytes with its file name. */
-export async function receiptPdf(actor: Pick<Actor, 'shopId' | 'shopName'>, ticketId: string, paymentId: string): Promise<{ pdf: Uint8Array<ArrayBuffer>; fileName: string }> {
+export async function receiptPdf(
+  actor: Pick<Actor, 'shopId' | 'shopName'>,
+  ticketId: string,
+  paymentId: string,
+): Promise<{ pdf: Uint8Array<ArrayBuffer>; fileName: string }> {
   const data = await receiptData(actor, ticketId, paymentId);
   const { number } = await shopTicket(actor, ticketId);
   // The file name keeps to the digits: a header cannot carry the initials of every script.
@@ -85,12 +98,21 @@ export async function emailReceipt(actor: Actor, ticketId: string, paymentId: st
     `Hello ${summary.ticket.customerName ?? ''}`.trim() + ',',
     '',
     `Thank you: ${data.shopName} received ${amount} (${data.payment.how}, ${data.payment.at}) for ticket ${data.ticketNumber}.`,
-    summary.due > 0 ? `Balance still due: ${formatMoney(summary.due, summary.currency)}.` : summary.credit > 0 ? `We owe you ${formatMoney(summary.credit, summary.currency)}.` : 'Nothing is left to pay.',
+    summary.due > 0
+      ? `Balance still due: ${formatMoney(summary.due, summary.currency)}.`
+      : summary.credit > 0
+        ? `We owe you ${formatMoney(summary.credit, summary.currency)}.`
+        : 'Nothing is left to pay.',
     '',
     'Your receipt is attached.',
   ].join('\n');
   await sendMail(
-    { to, subject: `Receipt for ticket ${data.ticketNumber}: ${amount}`, text, attachments: [{ filename: `receipt-${summary.ticket.number}.pdf`, content: Buffer.from(pdf), contentType: 'application/pdf' }] },
+    {
+      to,
+      subject: `Receipt for ticket ${data.ticketNumber}: ${amount}`,
+      text,
+      attachments: [{ filename: `receipt-${summary.ticket.number}.pdf`, content: Buffer.from(pdf), contentType: 'application/pdf' }],
+    },
     { shopId: actor.shopId, kind: 'receipt' },
   );
   await audit(db, actor.shopId, actor.userId, 'receipt.emailed', ticketId, { paymentId });

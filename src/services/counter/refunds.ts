@@ -30,8 +30,14 @@ export function refundKey(refundId: string): string {
 
 /** What is left to refund of each online payment of the ticket, newest first. */
 async function refundable(tx: Db, shopId: string, ticketId: string): Promise<{ payment: Payment; left: number }[]> {
-  const online = await tx.select().from(payments).where(and(eq(payments.shopId, shopId), eq(payments.ticketId, ticketId), eq(payments.method, 'online')));
-  const given = await tx.select().from(refunds).where(and(eq(refunds.ticketId, ticketId), eq(refunds.method, 'online'), inArray(refunds.status, [...COUNTED_REFUND_STATUSES])));
+  const online = await tx
+    .select()
+    .from(payments)
+    .where(and(eq(payments.shopId, shopId), eq(payments.ticketId, ticketId), eq(payments.method, 'online')));
+  const given = await tx
+    .select()
+    .from(refunds)
+    .where(and(eq(refunds.ticketId, ticketId), eq(refunds.method, 'online'), inArray(refunds.status, [...COUNTED_REFUND_STATUSES])));
   return online
     .map((payment) => ({ payment, left: payment.amountMinor - sumMinor(given.filter((r) => r.paymentId === payment.id)) }))
     .filter((p) => p.left > 0 && p.payment.reference)
@@ -46,7 +52,8 @@ async function recordRefund(actor: Actor, ticketId: string, input: RefundRequest
     const before = await summaryOf(ticket, settings, tx);
     if (before.credit === 0) throw new ServiceError(422, 'Nothing is owed back to the customer on this ticket.');
     if (input.amountMinor > before.credit) throw new ServiceError(422, `Give back at most the credit owed (${formatMoney(before.credit, before.currency)}).`);
-    if (input.method === 'credit' && !ticket.customerId) throw new ServiceError(422, 'This ticket has no customer to keep the credit for: give it back instead.');
+    if (input.method === 'credit' && !ticket.customerId)
+      throw new ServiceError(422, 'This ticket has no customer to keep the credit for: give it back instead.');
     let payment: Payment | null = null;
     if (input.method === 'online') {
       payment = (await refundable(tx, actor.shopId, ticketId)).find((p) => p.left >= input.amountMinor)?.payment ?? null;
@@ -68,7 +75,11 @@ async function recordRefund(actor: Actor, ticketId: string, input: RefundRequest
         byId: actor.userId,
       })
       .returning();
-    await audit(tx, actor.shopId, actor.userId, `refund.${input.method}`, ticketId, { refund: refund!.id, amountMinor: input.amountMinor, reason: input.reason ?? null });
+    await audit(tx, actor.shopId, actor.userId, `refund.${input.method}`, ticketId, {
+      refund: refund!.id,
+      amountMinor: input.amountMinor,
+      reason: input.reason ?? null,
+    });
     return { refund: refund!, payment };
   });
 }
@@ -97,7 +108,10 @@ async function refundAtService(actor: Actor, refund: Refund, payment: Payment): 
     // have made it after all, its webhook (matched by the refund's id in its metadata) marks it done.
     const failure = paymentServiceFailure(e, 'refund the online payment');
     await withTicketLock(refund.shopId, refund.ticketId, async (tx) => {
-      await tx.update(refunds).set({ status: 'failed', failure: failure.message }).where(and(eq(refunds.id, refund.id), eq(refunds.status, 'pending')));
+      await tx
+        .update(refunds)
+        .set({ status: 'failed', failure: failure.message })
+        .where(and(eq(refunds.id, refund.id), eq(refunds.status, 'pending')));
       await audit(tx, actor.shopId, actor.userId, 'refund.failed', refund.ticketId, { refund: refund.id, failure: failure.message });
     });
     throw failure;
@@ -108,7 +122,10 @@ async function refundAtService(actor: Actor, refund: Refund, payment: Payment): 
 /** Writes the service's word on a refund: its id, and done or failed once it says so (a webhook
  * may have come first: a refund already done stays done unless the service now says it failed). */
 async function writeServiceRefund(tx: Db, refundId: string, answer: Pick<Stripe.Refund, 'id' | 'status' | 'failure_reason'>): Promise<Refund | null> {
-  await tx.update(refunds).set({ reference: answer.id }).where(and(eq(refunds.id, refundId), isNull(refunds.reference)));
+  await tx
+    .update(refunds)
+    .set({ reference: answer.id })
+    .where(and(eq(refunds.id, refundId), isNull(refunds.reference)));
   const status = answer.status === 'succeeded' ? 'done' : answer.status === 'failed' || answer.status === 'canceled' ? 'failed' : null;
   if (!status) {
     const [row] = await tx.select().from(refunds).where(eq(refunds.id, refundId));
@@ -116,7 +133,10 @@ async function writeServiceRefund(tx: Db, refundId: string, answer: Pick<Stripe.
   }
   const [row] = await tx
     .update(refunds)
-    .set({ status, failure: status === 'failed' ? `The payment service says ${answer.status}${answer.failure_reason ? ` (${answer.failure_reason})` : ''}.` : null })
+    .set({
+      status,
+      failure: status === 'failed' ? `The payment service says ${answer.status}${answer.failure_reason ? ` (${answer.failure_reason})` : ''}.` : null,
+    })
     .where(eq(refunds.id, refundId))
     .returning();
   return row ?? null;

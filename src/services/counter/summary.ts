@@ -25,7 +25,9 @@ export async function customerCreditOf(shopId: string, customerId: string | null
   const [kept] = await q
     .select({ n: sql<number>`coalesce(sum(${refunds.amountMinor}), 0)::int` })
     .from(refunds)
-    .where(and(eq(refunds.shopId, shopId), eq(refunds.customerId, customerId), eq(refunds.method, 'credit'), inArray(refunds.status, [...COUNTED_REFUND_STATUSES])));
+    .where(
+      and(eq(refunds.shopId, shopId), eq(refunds.customerId, customerId), eq(refunds.method, 'credit'), inArray(refunds.status, [...COUNTED_REFUND_STATUSES])),
+    );
   const [spent] = await q
     .select({ n: sql<number>`coalesce(sum(${payments.amountMinor}), 0)::int` })
     .from(payments)
@@ -62,7 +64,17 @@ export async function summaryOf(ticket: Ticket, { currency }: Pick<CounterView, 
   const paid = paidRows.map((r) => ({ ...r.p, takenByName: r.takenByName }));
   const given = refundRows.map((r) => ({ ...r.r, byName: r.byName }));
   return {
-    ticket: { id: ticket.id, number: ticket.number, status: ticket.status, dueOn: ticket.dueOn, customerId: ticket.customerId, customerName: customer?.name ?? null, customerEmail: customer?.email ?? null, customerPhone: customer?.phone ?? null, contactBy: customer?.contactBy ?? 'email' },
+    ticket: {
+      id: ticket.id,
+      number: ticket.number,
+      status: ticket.status,
+      dueOn: ticket.dueOn,
+      customerId: ticket.customerId,
+      customerName: customer?.name ?? null,
+      customerEmail: customer?.email ?? null,
+      customerPhone: customer?.phone ?? null,
+      contactBy: customer?.contactBy ?? 'email',
+    },
     currency,
     lines,
     ...balanceOf(lines, paid, given),

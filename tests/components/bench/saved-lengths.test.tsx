@@ -8,10 +8,20 @@ import { FittingHistory } from '@/components/bench/FittingHistory';
 import { FittingReadOnly } from '@/components/bench/FittingReadOnly';
 import type { AuditEntry, FittingView } from '@/lib/bench-types';
 
-const text = (html: string) => html.replace(/<[^>]+>/g, ' ').replace(/&#x27;/g, "'").replace(/\s+/g, ' ');
+const text = (html: string) =>
+  html
+    .replace(/<[^>]+>/g, ' ')
+    .replace(/&#x27;/g, "'")
+    .replace(/\s+/g, ' ');
 
 function change(field: string, old: string, now: string): AuditEntry {
-  return { id: field, at: '2026-12-01T10:00:00Z', actorName: 'Ilse Marrow', action: 'measurement.changed', detail: { leg: 'left', field, unit: 'in', old, new: now } };
+  return {
+    id: field,
+    at: '2026-12-01T10:00:00Z',
+    actorName: 'Ilse Marrow',
+    action: 'measurement.changed',
+    detail: { leg: 'left', field, unit: 'in', old, new: now },
+  };
 }
 
 describe('the fitting history', () => {
@@ -31,7 +41,18 @@ describe('the apprentice’s table of the fitting', () => {
   it('shows each length with its own unit and the shop reading below', () => {
     const fitting: FittingView = {
       history: [],
-      legs: [{ leg: 'left', unit: 'in', finish: 'cuff', preset: null, presetId: null, takenAt: '2026-12-01T10:00:00Z', takenBy: null, values: { cuffDepth: { text: '38 mm', mm: 38 }, available: { text: '5', mm: 127 } } }],
+      legs: [
+        {
+          leg: 'left',
+          unit: 'in',
+          finish: 'cuff',
+          preset: null,
+          presetId: null,
+          takenAt: '2026-12-01T10:00:00Z',
+          takenBy: null,
+          values: { cuffDepth: { text: '38 mm', mm: 38 }, available: { text: '5', mm: 127 } },
+        },
+      ],
     };
     const html = text(
       renderToStaticMarkup(

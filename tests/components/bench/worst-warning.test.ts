@@ -12,7 +12,10 @@ describe('worstWarning', () => {
   });
 
   it('puts work that cannot be done before a figure merely out of the usual, and counts the rest', () => {
-    expect(worstWarning([w('cuff-depth-unusual'), w('let-out-exceeds-seam-allowance'), w('old-crease-visible')])).toEqual({ message: 'let-out-exceeds-seam-allowance', others: 2 });
+    expect(worstWarning([w('cuff-depth-unusual'), w('let-out-exceeds-seam-allowance'), w('old-crease-visible')])).toEqual({
+      message: 'let-out-exceeds-seam-allowance',
+      others: 2,
+    });
   });
 
   it('says a warning raised by both the plan and its taper check once', () => {
@@ -20,6 +23,9 @@ describe('worstWarning', () => {
   });
 
   it('puts a taper the engine refused before every warning', () => {
-    expect(worstWarning([w('third-section-too-small')], 'A width of 0 cannot be checked.')).toEqual({ message: 'Taper check: A width of 0 cannot be checked.', others: 1 });
+    expect(worstWarning([w('third-section-too-small')], 'A width of 0 cannot be checked.')).toEqual({
+      message: 'Taper check: A width of 0 cannot be checked.',
+      others: 1,
+    });
   });
 });

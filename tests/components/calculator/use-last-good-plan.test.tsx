@@ -13,7 +13,10 @@ const hem = { kind: 'hem', tag: 'h' } as unknown as PlanResponse;
 
 const fresh = (plan: PlanResponse): PlanQueryState => ({ data: { ok: true, plan }, isPlaceholderData: false });
 const placeholder = (plan: PlanResponse): PlanQueryState => ({ data: { ok: true, plan }, isPlaceholderData: true });
-const refused: PlanQueryState = { data: { ok: false, error: 'Cuff depth: type a length such as 1 1/2 or 38.', issues: { cuffDepth: 'x' } }, isPlaceholderData: false };
+const refused: PlanQueryState = {
+  data: { ok: false, error: 'Cuff depth: type a length such as 1 1/2 or 38.', issues: { cuffDepth: 'x' } },
+  isPlaceholderData: false,
+};
 const pending: PlanQueryState = { data: undefined, isPlaceholderData: false };
 
 describe('keepLastGood', () => {

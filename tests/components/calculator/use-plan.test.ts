@@ -26,11 +26,18 @@ describe('askPlan', () => {
 
   it('turns a 422 into the message and the per-field messages', async () => {
     vi.stubGlobal('fetch', answer(422, { error: 'The cuff depth must be more than 0.', issues: { cuffDepth: 'The cuff depth must be more than 0.' } }));
-    expect(await askPlan({ ...REQUEST, cuffDepth: '0' })).toEqual({ ok: false, error: 'The cuff depth must be more than 0.', issues: { cuffDepth: 'The cuff depth must be more than 0.' } });
+    expect(await askPlan({ ...REQUEST, cuffDepth: '0' })).toEqual({
+      ok: false,
+      error: 'The cuff depth must be more than 0.',
+      issues: { cuffDepth: 'The cuff depth must be more than 0.' },
+    });
   });
 
   it('turns a 400 into field messages too', async () => {
-    vi.stubGlobal('fetch', answer(400, { error: 'Cuff depth: type a length such as 1 1/2 or 38.', issues: { cuffDepth: 'Cuff depth: type a length such as 1 1/2 or 38.' } }));
+    vi.stubGlobal(
+      'fetch',
+      answer(400, { error: 'Cuff depth: type a length such as 1 1/2 or 38.', issues: { cuffDepth: 'Cuff depth: type a length such as 1 1/2 or 38.' } }),
+    );
     const got = await askPlan({ ...REQUEST, cuffDepth: 'zz' });
     expect(got.ok).toBe(false);
     expect(got.ok === false && got.issues.cuffDepth).toMatch(/type a length/);
@@ -42,7 +49,10 @@ describe('askPlan', () => {
   });
 
   it('fails saying entries are kept when the network does not answer', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => Promise.reject(new TypeError('Failed to fetch'))));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => Promise.reject(new TypeError('Failed to fetch'))),
+    );
     await expect(askPlan(REQUEST)).rejects.toThrow('The calculator did not answer. Your entries are kept; try again.');
   });
 });

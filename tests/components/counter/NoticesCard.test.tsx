@@ -9,10 +9,57 @@ import type { CounterSummaryJson as CounterSummary, NoticeJson as Notice } from 
 
 const TICKET = '00000000-0000-4000-8000-000000000001';
 
-const summary = { ticket: { id: TICKET, number: 1042, status: 'ready', dueOn: null, customerId: null, customerName: 'Wendel Orrin', customerEmail: 'wendel@example.com', customerPhone: '07700 900100', contactBy: 'email' }, textsReady: true, currency: 'EUR', lines: [], total: 2400, paid: 0, refunded: 0, due: 2400, credit: 0, payments: [], refunds: [], customerCredit: 0, link: null } as CounterSummary;
+const summary = {
+  ticket: {
+    id: TICKET,
+    number: 1042,
+    status: 'ready',
+    dueOn: null,
+    customerId: null,
+    customerName: 'Wendel Orrin',
+    customerEmail: 'wendel@example.com',
+    customerPhone: '07700 900100',
+    contactBy: 'email',
+  },
+  textsReady: true,
+  currency: 'EUR',
+  lines: [],
+  total: 2400,
+  paid: 0,
+  refunded: 0,
+  due: 2400,
+  credit: 0,
+  payments: [],
+  refunds: [],
+  customerCredit: 0,
+  link: null,
+} as CounterSummary;
 
 function notice(over: Partial<Notice>): Notice {
-  return { id: 'n1', shopId: 's', ticketId: TICKET, kind: 'ready', to: 'wendel@example.com', subject: 'Ready', body: '', status: 'sent', attempts: 1, lastError: null, nextAttemptAt: null, sentAt: '2026-12-01T10:00:00Z', createdById: 'u', sequence: 1, createdAt: '2026-12-01T10:00:00Z', channel: 'email', note: null, providerId: null, delivery: null, deliveryError: null, deliveryAt: null, ...over };
+  return {
+    id: 'n1',
+    shopId: 's',
+    ticketId: TICKET,
+    kind: 'ready',
+    to: 'wendel@example.com',
+    subject: 'Ready',
+    body: '',
+    status: 'sent',
+    attempts: 1,
+    lastError: null,
+    nextAttemptAt: null,
+    sentAt: '2026-12-01T10:00:00Z',
+    createdById: 'u',
+    sequence: 1,
+    createdAt: '2026-12-01T10:00:00Z',
+    channel: 'email',
+    note: null,
+    providerId: null,
+    delivery: null,
+    deliveryError: null,
+    deliveryAt: null,
+    ...over,
+  };
 }
 
 function render(notices: Notice[], canSend = true, s: CounterSummary = summary): string {
@@ -27,7 +74,9 @@ function render(notices: Notice[], canSend = true, s: CounterSummary = summary):
 
 describe('NoticesCard', () => {
   it('shows a failed notice with its error, next try and a retry button', () => {
-    const html = render([notice({ status: 'failed', attempts: 2, sentAt: null, lastError: 'connect ECONNREFUSED 127.0.0.1:2525', nextAttemptAt: '2026-12-01T10:02:00Z' })]);
+    const html = render([
+      notice({ status: 'failed', attempts: 2, sentAt: null, lastError: 'connect ECONNREFUSED 127.0.0.1:2525', nextAttemptAt: '2026-12-01T10:02:00Z' }),
+    ]);
     expect(html).toContain('Ready notice by e-mail to wendel@example.com: Not delivered');
     expect(html).toContain('2 attempts');
     expect(html).toContain('Last error: connect ECONNREFUSED 127.0.0.1:2525');
@@ -52,7 +101,9 @@ describe('NoticesCard', () => {
   it('numbers a re-send, and offers no re-send while the last one is undelivered or to those who may not send (issue 14)', () => {
     const html = render([notice({}), notice({ id: 'n2', sequence: 2 })]);
     expect(html).toContain('Ready notice (sent again, 2) by e-mail to wendel@example.com: Sent');
-    expect(render([notice({}), notice({ id: 'n2', sequence: 2, status: 'failed', sentAt: null, lastError: 'timeout' })])).not.toContain('Send the ready notice again');
+    expect(render([notice({}), notice({ id: 'n2', sequence: 2, status: 'failed', sentAt: null, lastError: 'timeout' })])).not.toContain(
+      'Send the ready notice again',
+    );
     expect(render([notice({})], false)).not.toContain('Send the ready notice again');
   });
 

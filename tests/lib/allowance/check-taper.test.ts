@@ -119,7 +119,7 @@ describe('checkTaper laws', () => {
     ...more,
   });
 
-  it('after the change every line\'s width equals the target', () => {
+  it("after the change every line's width equals the target", () => {
     fc.assert(
       fc.property(arb, (g) => {
         const plan = checkTaper(leg(g, { clothThickness: text(g.unit, g.t) }));

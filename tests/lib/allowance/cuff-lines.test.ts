@@ -10,7 +10,7 @@ describe('cuffLinePositions', () => {
     expect(linePositionList(p).map((f) => f.toFraction().toFraction(true))).toEqual(['0', '1 1/2', '3', '4 1/2']);
   });
 
-  it('turn of cloth added at each fold: d + t, 2d + 2t, 2d + 2t + m (the brief\'s fold law)', () => {
+  it("turn of cloth added at each fold: d + t, 2d + 2t, 2d + 2t + m (the brief's fold law)", () => {
     const p = cuffLinePositions(Exact.ratio(3, 2), Exact.int(1), Exact.ratio(1, 16));
     expect(linePositionList(p).map((f) => f.toFraction().toFraction(true))).toEqual(['0', '1 9/16', '3 1/8', '4 1/8']);
   });

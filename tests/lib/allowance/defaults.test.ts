@@ -13,7 +13,12 @@ describe('DEFAULTS', () => {
   });
 
   it('metric defaults are our round numbers (the brief: 12 mm, 40 mm, 6 mm, 3 mm)', () => {
-    expect([DEFAULTS.mm.cuffTurnUnder.text, DEFAULTS.mm.hemAllowance.text, DEFAULTS.mm.hemTurnUnder.text, DEFAULTS.mm.taperTolerance.text]).toEqual(['12 mm', '40 mm', '6 mm', '3 mm']);
+    expect([DEFAULTS.mm.cuffTurnUnder.text, DEFAULTS.mm.hemAllowance.text, DEFAULTS.mm.hemTurnUnder.text, DEFAULTS.mm.taperTolerance.text]).toEqual([
+      '12 mm',
+      '40 mm',
+      '6 mm',
+      '3 mm',
+    ]);
     expect(DEFAULTS.cm.hemAllowance.text).toBe('4 cm');
     expect(DEFAULTS.cm.hemAllowance.mm).toBe(DEFAULTS.mm.hemAllowance.mm);
   });
@@ -27,7 +32,7 @@ describe('DEFAULTS', () => {
 });
 
 describe('USUAL_CUFF_DEPTHS', () => {
-  it('1¼, 1½, 1¾ and 2 in (TRADE.md: Encyclopedia of Men\'s Clothes; Permanent Style 2020)', () => {
+  it("1¼, 1½, 1¾ and 2 in (TRADE.md: Encyclopedia of Men's Clothes; Permanent Style 2020)", () => {
     expect(USUAL_CUFF_DEPTHS.in.map((u) => [u.depth.text, u.note])).toEqual([
       ['1 1/4 in', 'trim'],
       ['1 1/2 in', 'classic'],

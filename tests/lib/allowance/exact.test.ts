@@ -20,7 +20,11 @@ const bigPart = fc.oneof(
   fc.bigInt({ min: 0n, max: 10n ** 30n }),
 );
 const fractionArb = fc
-  .tuple(fc.boolean(), bigPart, bigPart.map((d) => (d === 0n ? 1n : d)))
+  .tuple(
+    fc.boolean(),
+    bigPart,
+    bigPart.map((d) => (d === 0n ? 1n : d)),
+  )
   .map(([neg, n, d]) => new Fraction(neg ? -n : n, d));
 // Lengths as plans meet them: inch fractions and decimals times 127/5, half-millimetres, odd typed fractions.
 const lengthArb = fc.oneof(
@@ -84,7 +88,12 @@ describe('Exact: the safe-integer layer agrees with fraction.js', () => {
     expect(p.toFraction().equals(new Fraction((2n ** 27n + 1n) * (2n ** 27n + 3n), 21n))).toBe(true);
     // and back to small once a result fits again
     expect(big.add(Exact.int(1)).sub(Exact.int(2)).big).toBeNull();
-    expect(Exact.ratio(1, 2 ** 30).mul(Exact.ratio(1, 2 ** 30)).mul(Exact.int(2 ** 40)).equals(Exact.ratio(1, 2 ** 20))).toBe(true);
+    expect(
+      Exact.ratio(1, 2 ** 30)
+        .mul(Exact.ratio(1, 2 ** 30))
+        .mul(Exact.int(2 ** 40))
+        .equals(Exact.ratio(1, 2 ** 20)),
+    ).toBe(true);
   });
 
   it('arithmetic laws: commutative, associative, distributive, inverses', () => {
@@ -93,8 +102,18 @@ describe('Exact: the safe-integer layer agrees with fraction.js', () => {
         const [x, y, z] = [Exact.from(a), Exact.from(b), Exact.from(c)];
         expect(x.add(y).equals(y.add(x))).toBe(true);
         expect(x.mul(y).equals(y.mul(x))).toBe(true);
-        expect(x.add(y).add(z).equals(x.add(y.add(z)))).toBe(true);
-        expect(x.mul(y).mul(z).equals(x.mul(y.mul(z)))).toBe(true);
+        expect(
+          x
+            .add(y)
+            .add(z)
+            .equals(x.add(y.add(z))),
+        ).toBe(true);
+        expect(
+          x
+            .mul(y)
+            .mul(z)
+            .equals(x.mul(y.mul(z))),
+        ).toBe(true);
         expect(x.mul(y.add(z)).equals(x.mul(y).add(x.mul(z)))).toBe(true);
         expect(x.sub(x).isZero()).toBe(true);
         expect(x.add(y).sub(y).equals(x)).toBe(true);
@@ -134,7 +153,11 @@ describe('the engine helpers on Exact agree with their fraction.js versions', ()
 
   it('numbers typed in a unit (any double, times 127/5, 10 or 1)', () => {
     const unit = fc.constantFrom<[number, number]>([127, 5], [10, 1], [1, 1]);
-    const x = fc.oneof(fc.double({ noNaN: true, noDefaultInfinity: true }), fc.integer({ min: -8000, max: 8000 }).map((k) => k / 64), fc.integer({ min: -99999, max: 99999 }).map((k) => k / 1000));
+    const x = fc.oneof(
+      fc.double({ noNaN: true, noDefaultInfinity: true }),
+      fc.integer({ min: -8000, max: 8000 }).map((k) => k / 64),
+      fc.integer({ min: -99999, max: 99999 }).map((k) => k / 1000),
+    );
     fc.assert(
       fc.property(x, unit, (v, [a, b]) => {
         same(exactFromNumber(v, a, b), fractionFromNumber(v, a, b));
@@ -180,7 +203,9 @@ describe('the engine helpers on Exact agree with their fraction.js versions', ()
     const text = fc.oneof(
       fc.tuple(space, fc.constantFrom('', '-', '- ', '+'), digits, space).map(([s1, sign, w, s2]) => `${s1}${sign}${w}${s2}`),
       fc.tuple(fc.constantFrom('', '-'), fc.option(digits), digits).map(([sign, w, f]) => `${sign}${w ?? ''}.${f}`),
-      fc.tuple(fc.constantFrom('', '-'), fc.option(digits), space, digits, digits).map(([sign, w, sp, n, d]) => `${sign}${w === null ? '' : `${w}${sp || ' '}`}${n}/${d}`),
+      fc
+        .tuple(fc.constantFrom('', '-'), fc.option(digits), space, digits, digits)
+        .map(([sign, w, sp, n, d]) => `${sign}${w === null ? '' : `${w}${sp || ' '}`}${n}/${d}`),
       fc.tuple(fc.nat(40), fc.nat(40), fc.nat(40)).map(([w, n, d]) => `${w} ${n}/${d}`),
       fc.constantFrom('1 1/2 in', '38 mm', '1½', '1-1/2', '3,8', '1 1/2 + 1/8', '', ' ', '.', '5.', '1/0', '1 3/3', '0 0/1'),
     );

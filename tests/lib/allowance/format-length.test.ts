@@ -101,16 +101,22 @@ describe('step rounding laws', () => {
     const big = fc.bigInt({ min: -(10n ** 24n), max: 10n ** 24n });
     const small = fc.bigInt({ min: -(10n ** 9n), max: 10n ** 9n });
     fc.assert(
-      fc.property(fc.oneof(big, small), fc.oneof(fc.bigInt({ min: 10n ** 9n, max: 10n ** 20n }), fc.bigInt({ min: 1n, max: 1000n })), fc.integer({ min: 1, max: 200 }), fc.integer({ min: 1, max: 200 }), (n, d, a, b) => {
-        const f = new Fraction(n, d);
-        const exact = f.mul(a).div(b);
-        // roundSteps answers a JS number: exact while the step count stays a safe integer
-        fc.pre(exact.abs().compare(Number.MAX_SAFE_INTEGER - 1) < 0);
-        const q = roundSteps(f, a, b);
-        const gap = exact.sub(q).abs().compare(new Fraction(1, 2));
-        expect(gap).toBeLessThanOrEqual(0);
-        if (gap === 0) expect(Math.abs(q)).toBeGreaterThan(exact.abs().valueOf());
-      }),
+      fc.property(
+        fc.oneof(big, small),
+        fc.oneof(fc.bigInt({ min: 10n ** 9n, max: 10n ** 20n }), fc.bigInt({ min: 1n, max: 1000n })),
+        fc.integer({ min: 1, max: 200 }),
+        fc.integer({ min: 1, max: 200 }),
+        (n, d, a, b) => {
+          const f = new Fraction(n, d);
+          const exact = f.mul(a).div(b);
+          // roundSteps answers a JS number: exact while the step count stays a safe integer
+          fc.pre(exact.abs().compare(Number.MAX_SAFE_INTEGER - 1) < 0);
+          const q = roundSteps(f, a, b);
+          const gap = exact.sub(q).abs().compare(new Fraction(1, 2));
+          expect(gap).toBeLessThanOrEqual(0);
+          if (gap === 0) expect(Math.abs(q)).toBeGreaterThan(exact.abs().valueOf());
+        },
+      ),
     );
   });
 

@@ -3,7 +3,19 @@ import * as engine from '@/lib/allowance';
 
 describe('the engine entry point', () => {
   it('exports the contract', () => {
-    for (const name of ['parseLength', 'formatLength', 'planCuff', 'planHem', 'checkTaper', 'splitFraction', 'toInches', 'validateCuffInput', 'validateHemInput', 'validateTaperInput', 'isAllowanceError']) {
+    for (const name of [
+      'parseLength',
+      'formatLength',
+      'planCuff',
+      'planHem',
+      'checkTaper',
+      'splitFraction',
+      'toInches',
+      'validateCuffInput',
+      'validateHemInput',
+      'validateTaperInput',
+      'isAllowanceError',
+    ]) {
       expect(typeof (engine as Record<string, unknown>)[name]).toBe('function');
     }
     expect(new engine.AllowanceError('empty', 'x')).toBeInstanceOf(Error);

@@ -25,7 +25,13 @@ describe('tokenizeLength', () => {
   });
 
   it('knows the unit words and marks', () => {
-    for (const [text, unit] of [['2in', 'in'], ['2 inch', 'in'], ['2″', 'in'], ['2 Millimetres', 'mm'], ['2 centimeter', 'cm']] as const) {
+    for (const [text, unit] of [
+      ['2in', 'in'],
+      ['2 inch', 'in'],
+      ['2″', 'in'],
+      ['2 Millimetres', 'mm'],
+      ['2 centimeter', 'cm'],
+    ] as const) {
       expect(tokenizeLength(text)[1]).toMatchObject({ kind: 'unit', unit });
     }
   });

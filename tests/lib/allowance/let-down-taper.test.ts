@@ -52,7 +52,14 @@ describe('checkTaper on a let-down leg (width measured at the cutting line)', ()
         fc.option(fc.integer({ min: -64, max: 200 }), { nil: undefined }),
         (w, delta, h, fold) => {
           // sixteenths of an inch; the cut of a 1 1/2 in cuff is 4 1/2 in (72 sixteenths) below the mark
-          const base = { unit: 'in' as const, precision: 32 as const, cuffDepth: '1 1/2', widthAtEdge: `${w}/16`, widthAbove: `${w + delta}/16`, heightAbove: `${h}/16` };
+          const base = {
+            unit: 'in' as const,
+            precision: 32 as const,
+            cuffDepth: '1 1/2',
+            widthAtEdge: `${w}/16`,
+            widthAbove: `${w + delta}/16`,
+            heightAbove: `${h}/16`,
+          };
           const followed = checkTaper(base);
           const measured = checkTaper({ ...base, widthAtCut: `${w * h - 72 * delta}/${16 * h}`, oldCrease: fold === undefined ? undefined : `${fold}/16` });
           expect(measured.lines.map((l) => [l.width.mm, l.change.mm])).toEqual(followed.lines.map((l) => [l.width.mm, l.change.mm]));
@@ -73,7 +80,13 @@ describe('checkTaper on a let-down leg (width measured at the cutting line)', ()
         fc.integer({ min: 0, max: 200 }),
         (unit, w, delta, h, cut, fold) => {
           const step = unit === 'in' ? 1 / 32 : unit === 'mm' ? 0.5 : 0.05;
-          const base = { unit, cuffDepth: unit === 'in' ? 1.5 : unit === 'mm' ? 38 : 3.8, widthAtEdge: w * step, widthAbove: (w + delta) * step, heightAbove: h * step };
+          const base = {
+            unit,
+            cuffDepth: unit === 'in' ? 1.5 : unit === 'mm' ? 38 : 3.8,
+            widthAtEdge: w * step,
+            widthAbove: (w + delta) * step,
+            heightAbove: h * step,
+          };
           const followed = checkTaper(base);
           const plan = checkTaper({ ...base, widthAtCut: cut * step, oldCrease: fold * step });
           const foldMm = fold * step * (unit === 'in' ? 25.4 : unit === 'cm' ? 10 : 1);

@@ -154,11 +154,15 @@ describe('parseLength refuses', () => {
     expect(parseLength('30 in + 5 mm + 1', 'cm').mm).toBeCloseTo(777, 9);
   });
 
-  it('names every part\'s unit so the text reads the same in a plan of another unit', () => {
+  it("names every part's unit so the text reads the same in a plan of another unit", () => {
     expect(withUnitsNamed('30 + 5 mm', 'in')).toBe('30 in + 5 mm');
     expect(withUnitsNamed('-1 1/2 - 1/8', 'in')).toBe('-1 1/2 in - 1/8 in');
     expect(withUnitsNamed('3,8', 'cm')).toBe('3.8 cm');
-    for (const [text, unit] of [['30 + 5 mm', 'in'], ['31 3/4 + 1/8', 'in'], ['3,8 + 2 mm', 'cm']] as const) {
+    for (const [text, unit] of [
+      ['30 + 5 mm', 'in'],
+      ['31 3/4 + 1/8', 'in'],
+      ['3,8 + 2 mm', 'cm'],
+    ] as const) {
       expect(parseLength(withUnitsNamed(text, unit), 'mm').mm).toBe(parseLength(text, unit).mm);
     }
   });
@@ -184,10 +188,15 @@ const simpleText = fc
   .map(([w, n, d, unit, form, neg]) => {
     const num = n % d;
     const body =
-      form === 'mixed' && num > 0 ? `${w} ${num}/${d}` :
-      form === 'hyphen' && num > 0 ? `${w}-${num}/${d}` :
-      form === 'fraction' ? `${w * d + num}/${d}` :
-      form === 'decimal' ? `${w}.${n}` : `${w}`;
+      form === 'mixed' && num > 0
+        ? `${w} ${num}/${d}`
+        : form === 'hyphen' && num > 0
+          ? `${w}-${num}/${d}`
+          : form === 'fraction'
+            ? `${w * d + num}/${d}`
+            : form === 'decimal'
+              ? `${w}.${n}`
+              : `${w}`;
     return `${neg ? '-' : ''}${body}${unit}`;
   });
 

@@ -51,12 +51,12 @@ describe('planCuff: published examples', () => {
     expect(planCuff({ unit: 'mm', cuffDepth: 38 }).turnUnder.text).toBe('12 mm');
   });
 
-  it('usual depths 1¼, 1½, 1¾, 2 in raise no depth warning; ¾ and 2½ in do (TRADE.md: Encyclopedia of Men\'s Clothes; Permanent Style 2020)', () => {
+  it("usual depths 1¼, 1½, 1¾, 2 in raise no depth warning; ¾ and 2½ in do (TRADE.md: Encyclopedia of Men's Clothes; Permanent Style 2020)", () => {
     for (const d of ['1 1/4', '1 1/2', '1 3/4', '2', '1', '2 1/4']) expect(codes(planCuff({ unit: 'in', cuffDepth: d }))).not.toContain('cuff-depth-unusual');
     for (const d of ['3/4', '2 1/2']) expect(codes(planCuff({ unit: 'in', cuffDepth: d }))).toContain('cuff-depth-unusual');
   });
 
-  it('a cuff is planned level even when a slope is asked for (TRADE.md: Encyclopedia of Men\'s Clothes, cuffs hemmed level)', () => {
+  it("a cuff is planned level even when a slope is asked for (TRADE.md: Encyclopedia of Men's Clothes, cuffs hemmed level)", () => {
     const plan = planCuff({ unit: 'in', cuffDepth: 1.5, slope: '1/2' });
     expect(codes(plan)).toEqual(['slope-on-cuff']);
     expect(plan.warnings[0]!.message).toContain('1/2 in');
@@ -116,7 +116,7 @@ describe('planCuff: cloth check', () => {
     expect(plan.alternatives?.deepestCuff?.text).toBe('1 3/16 in');
   });
 
-  it('short cloth first offers the customer\'s depth on a shorter third section: 1½ in cuff in 4 1/4 in keeps 1½ in with 1¼ in (arithmetic; turn-under ½ in + ¼ in stitch, common practice (no source))', () => {
+  it("short cloth first offers the customer's depth on a shorter third section: 1½ in cuff in 4 1/4 in keeps 1½ in with 1¼ in (arithmetic; turn-under ½ in + ¼ in stitch, common practice (no source))", () => {
     const plan = planCuff({ unit: 'in', cuffDepth: '1 1/2', available: '4 1/4' });
     expect(plan.alternatives?.shorterSection?.text).toBe('1 1/4 in');
     const message = plan.warnings.find((w) => w.code === 'not-enough-cloth')!.message;
@@ -193,7 +193,12 @@ describe('planCuff: refusals carry the field', () => {
   });
 
   it('refuses a cuff under the shallowest workable, 3/4 in or 20 mm (common practice, no source): 0.0001 is no "0 in cuff"', () => {
-    for (const [unit, depth] of [['in', 0.0001], ['in', '11/16'], ['mm', 19.5], ['cm', '1.9']] as const) {
+    for (const [unit, depth] of [
+      ['in', 0.0001],
+      ['in', '11/16'],
+      ['mm', 19.5],
+      ['cm', '1.9'],
+    ] as const) {
       expect(() => planCuff({ unit, cuffDepth: depth })).toThrow(expect.objectContaining({ field: 'cuffDepth', code: 'out-of-range' }));
     }
     expect(() => planCuff({ unit: 'in', cuffDepth: 0.0001 })).toThrow(/at least 3\/4 in/);
@@ -347,11 +352,7 @@ describe('planCuff laws', () => {
 
   it('every Len text is its mm formatted in the plan unit and precision', () => {
     const lens = (x: unknown): { mm: number; text: string }[] =>
-      x === null || typeof x !== 'object'
-        ? []
-        : 'mm' in x && 'text' in x
-          ? [x as { mm: number; text: string }]
-          : Object.values(x).flatMap(lens);
+      x === null || typeof x !== 'object' ? [] : 'mm' in x && 'text' in x ? [x as { mm: number; text: string }] : Object.values(x).flatMap(lens);
     fc.assert(
       fc.property(genArb, fc.constantFrom<8 | 16 | 32>(8, 16, 32), (g, precision) => {
         const plan = planCuff({ ...inputOf(g), precision, oldCrease: asInput(g, g.d + 3) });

@@ -12,17 +12,45 @@ const fractionText = (sign: string, whole: number, num: number, den: number) => 
 const length = (lo: number, hi: number, signed = false) =>
   fc.tuple(signed ? fc.constantFrom('', '-') : fc.constant('')).chain(([sign]) =>
     fc.oneof(
-      fc.tuple(fc.integer({ min: lo, max: hi }), fc.integer({ min: 0, max: 31 }), fc.constantFrom(2, 4, 8, 16, 32)).map(([w, n, d]) => fractionText(sign, w, n % d, d)),
+      fc
+        .tuple(fc.integer({ min: lo, max: hi }), fc.integer({ min: 0, max: 31 }), fc.constantFrom(2, 4, 8, 16, 32))
+        .map(([w, n, d]) => fractionText(sign, w, n % d, d)),
       fc.tuple(fc.integer({ min: lo, max: hi }), fc.integer({ min: 0, max: 999 })).map(([w, f]) => `${sign}${w}.${f}`),
-      fc.tuple(fc.integer({ min: lo, max: hi }), fc.integer({ min: 1, max: 126 }), fc.constantFrom(3, 7, 13, 127)).map(([w, n, d]) => fractionText(sign, w, n % d, d)),
+      fc
+        .tuple(fc.integer({ min: lo, max: hi }), fc.integer({ min: 1, max: 126 }), fc.constantFrom(3, 7, 13, 127))
+        .map(([w, n, d]) => fractionText(sign, w, n % d, d)),
     ),
   );
 
 // Ranges per unit (cuff depth, cloth below the mark, old crease, third section, turn-under, turn of cloth, slope).
 const RANGES: Record<Unit, number[][]> = {
-  in: [[0, 3], [2, 8], [0, 6], [0, 3], [0, 1], [0, 0], [0, 1]],
-  cm: [[2, 7], [5, 20], [0, 15], [1, 7], [0, 2], [0, 0], [0, 2]],
-  mm: [[20, 70], [50, 200], [0, 150], [10, 70], [0, 20], [0, 1], [0, 20]],
+  in: [
+    [0, 3],
+    [2, 8],
+    [0, 6],
+    [0, 3],
+    [0, 1],
+    [0, 0],
+    [0, 1],
+  ],
+  cm: [
+    [2, 7],
+    [5, 20],
+    [0, 15],
+    [1, 7],
+    [0, 2],
+    [0, 0],
+    [0, 2],
+  ],
+  mm: [
+    [20, 70],
+    [50, 200],
+    [0, 150],
+    [10, 70],
+    [0, 20],
+    [0, 1],
+    [0, 20],
+  ],
 };
 const cuff = fc.constantFrom<Unit>('in', 'cm', 'mm').chain((unit) => {
   const [depth, available, crease, section, turnUnder, thickness, slope] = RANGES[unit]!.map(([lo, hi]) => [lo!, hi!] as const);
@@ -39,7 +67,10 @@ const cuff = fc.constantFrom<Unit>('in', 'cm', 'mm').chain((unit) => {
   });
 });
 
-type Generated = { unit: Unit; precision: 8 | 16 | 32 | undefined; depth: string } & Record<'available' | 'crease' | 'section' | 'turnUnder' | 'thickness' | 'slope', string | null>;
+type Generated = { unit: Unit; precision: 8 | 16 | 32 | undefined; depth: string } & Record<
+  'available' | 'crease' | 'section' | 'turnUnder' | 'thickness' | 'slope',
+  string | null
+>;
 
 function input(g: Generated): CuffInput {
   const i: CuffInput = { unit: g.unit, cuffDepth: g.depth };

@@ -18,9 +18,36 @@ const length = (lo: number, hi: number) =>
 
 // Ranges per unit that make a leg (cuff depth, widths, height, seam, tolerance, thickness, third section).
 const RANGES: Record<Unit, number[][]> = {
-  in: [[1, 2], [5, 12], [5, 13], [6, 25], [0, 1], [0, 1], [0, 0], [1, 3]],
-  cm: [[3, 5], [13, 30], [13, 33], [15, 63], [0, 2], [0, 1], [0, 0], [3, 7]],
-  mm: [[25, 55], [130, 300], [130, 330], [150, 630], [0, 20], [0, 5], [0, 1], [25, 70]],
+  in: [
+    [1, 2],
+    [5, 12],
+    [5, 13],
+    [6, 25],
+    [0, 1],
+    [0, 1],
+    [0, 0],
+    [1, 3],
+  ],
+  cm: [
+    [3, 5],
+    [13, 30],
+    [13, 33],
+    [15, 63],
+    [0, 2],
+    [0, 1],
+    [0, 0],
+    [3, 7],
+  ],
+  mm: [
+    [25, 55],
+    [130, 300],
+    [130, 330],
+    [150, 630],
+    [0, 20],
+    [0, 5],
+    [0, 1],
+    [25, 70],
+  ],
 };
 const leg = fc.constantFrom<Unit>('in', 'cm', 'mm').chain((unit) => {
   const [depth, edge, above, height, seam, tolerance, thickness, section] = RANGES[unit].map(([lo, hi]) => length(lo!, hi!));
@@ -38,7 +65,18 @@ const leg = fc.constantFrom<Unit>('in', 'cm', 'mm').chain((unit) => {
   });
 });
 
-function input(g: { unit: Unit; precision: 8 | 16 | 32 | undefined; depth: string; edge: string; above: string; height: string; seam: string | null; tolerance: string | null; thickness: string | null; section: string | null }): TaperInput {
+function input(g: {
+  unit: Unit;
+  precision: 8 | 16 | 32 | undefined;
+  depth: string;
+  edge: string;
+  above: string;
+  height: string;
+  seam: string | null;
+  tolerance: string | null;
+  thickness: string | null;
+  section: string | null;
+}): TaperInput {
   const i: TaperInput = { unit: g.unit, cuffDepth: g.depth, widthAtEdge: g.edge, widthAbove: g.above, heightAbove: g.height };
   if (g.precision !== undefined) i.precision = g.precision;
   if (g.seam !== null) i.seamAllowance = g.seam;

@@ -19,7 +19,9 @@ describe('units', () => {
       fc.property(fc.integer({ min: 1, max: 6400 }), (k) => {
         const text = `${k}/32`;
         const ours = parseLength(text, 'in').mm;
-        const theirs = convert(k / 32).from('in').to('mm');
+        const theirs = convert(k / 32)
+          .from('in')
+          .to('mm');
         expect(Math.abs(ours - theirs) / theirs).toBeLessThan(1e-6);
       }),
     );

@@ -69,7 +69,8 @@ describe('claim slip', () => {
     const tags = flatText(file, 2);
     // pdftotext may read a tag's corner note before or after its lines: each part is checked.
     expect(tags.match(/PH 1007/g)).toHaveLength(2);
-    for (const words of ['Garment 1 of 2', 'Garment 2 of 2', 'Charcoal flannel Ready by Tue 8 Dec', 'Brown moleskin Ready by Tue 8 Dec']) expect(tags).toContain(words);
+    for (const words of ['Garment 1 of 2', 'Garment 2 of 2', 'Charcoal flannel Ready by Tue 8 Dec', 'Brown moleskin Ready by Tue 8 Dec'])
+      expect(tags).toContain(words);
     expect(tags).not.toContain('Balance due');
   });
 

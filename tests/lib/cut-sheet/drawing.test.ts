@@ -33,9 +33,7 @@ function stripNumbers(w: Word[]): Word[] {
   const one = w[i - 1]!;
   expect(one.text).toBe('1');
   const names = new Set(['finished', 'cuff', 'inner', 'CUT']);
-  return w
-    .filter((x, j) => /^[1-4]$/.test(x.text) && Math.abs(x.xMin - one.xMin) < 0.5 && names.has(w[j + 1]?.text ?? ''))
-    .sort((a, b) => a.yMin - b.yMin);
+  return w.filter((x, j) => /^[1-4]$/.test(x.text) && Math.abs(x.xMin - one.xMin) < 0.5 && names.has(w[j + 1]?.text ?? '')).sort((a, b) => a.yMin - b.yMin);
 }
 
 describe('the leg drawing', () => {

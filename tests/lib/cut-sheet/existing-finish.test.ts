@@ -10,7 +10,11 @@ import { flatText, pageInfo, pdfFile, words } from './poppler';
 import { busyLegs, cuffInch, hemSloped, sheet, UNSAVED } from './sheets';
 
 /** A 1 1/2 in cuff with 5 in of cloth and the old fold at `oldCrease` below the mark. */
-const cuffWithCrease = (oldCrease: number | string): LegOrder => ({ side: 'left', finish: 'cuff', input: { unit: 'in', precision: 8, cuffDepth: '1 1/2', available: 5, oldCrease } });
+const cuffWithCrease = (oldCrease: number | string): LegOrder => ({
+  side: 'left',
+  finish: 'cuff',
+  input: { unit: 'in', precision: 8, cuffDepth: '1 1/2', available: 5, oldCrease },
+});
 
 /** One page's size in points (pdfinfo of that page alone). */
 function pageSizeOf(file: string, page: number): { width: number; height: number } {

@@ -10,14 +10,23 @@ import { renderCutSheet } from '@/lib/cut-sheet/render';
 import { crowdedRuns, textRuns } from './pdf-runs';
 import { SHOP } from './sheets';
 
-const scales: [Unit, 8 | 16 | 32][] = [['in', 8], ['in', 16], ['in', 32], ['cm', 8], ['mm', 8]];
+const scales: [Unit, 8 | 16 | 32][] = [
+  ['in', 8],
+  ['in', 16],
+  ['in', 32],
+  ['cm', 8],
+  ['mm', 8],
+];
 
 const leg = fc.record({
   scale: fc.constantFrom(...scales),
   finish: fc.constantFrom('cuff', 'hem'),
   depthMm: fc.integer({ min: 200, max: 700 }).map((k) => k / 10),
   // Cloth below the mark up to the engine's 200 in limit: the widest figures a table can hold.
-  availableMm: fc.option(fc.oneof(fc.integer({ min: 0, max: 3000 }), fc.integer({ min: 0, max: 50800 })).map((k) => k / 10), { nil: undefined }),
+  availableMm: fc.option(
+    fc.oneof(fc.integer({ min: 0, max: 3000 }), fc.integer({ min: 0, max: 50800 })).map((k) => k / 10),
+    { nil: undefined },
+  ),
   pageSize: fc.constantFrom<'LETTER' | 'A4'>('LETTER', 'A4'),
 });
 
@@ -37,13 +46,18 @@ describe('no two runs of text touch on a line', () => {
   for (const [unit, precision] of scales) {
     it(`a 1 1/2 in cuff with 4 3/4 in of cloth printed in ${unit}${unit === 'in' ? ` to 1/${precision}` : ''}`, async () => {
       // The case from the shop: "0 cm12.05 cm", "0 mm120.5 mm" on the metric sheets.
-      const pdf = await renderCutSheet(buildCutSheet(SHOP, [{ side: 'left', finish: 'cuff', input: { unit, precision, cuffDepth: '1 1/2 in', available: '4 3/4 in' } }]));
+      const pdf = await renderCutSheet(
+        buildCutSheet(SHOP, [{ side: 'left', finish: 'cuff', input: { unit, precision, cuffDepth: '1 1/2 in', available: '4 3/4 in' } }]),
+      );
       expect(describeCrowded(pdf)).toEqual([]);
     });
   }
 
   it('a 20 mm cuff with 3228.6 mm of cloth on Letter: the leg drawing scales past 1:16 and stays off the steps', async () => {
-    const pdf = await renderCutSheet({ ...buildCutSheet(SHOP, [order({ scale: ['in', 8], finish: 'cuff', depthMm: 20, availableMm: 3228.6, pageSize: 'LETTER' })]), pageSize: 'LETTER' });
+    const pdf = await renderCutSheet({
+      ...buildCutSheet(SHOP, [order({ scale: ['in', 8], finish: 'cuff', depthMm: 20, availableMm: 3228.6, pageSize: 'LETTER' })]),
+      pageSize: 'LETTER',
+    });
     expect(describeCrowded(pdf)).toEqual([]);
   });
 

@@ -28,7 +28,11 @@ describe('cut sheet: a let-down cuff measured at the cutting line', () => {
   });
 
   it('follows the taper down when nothing was measured at the cut', () => {
-    const followed = sheet({ finish: 'cuff', input: { unit: 'in', precision: 16, cuffDepth: '1 1/2', oldCrease: '3' }, taper: { widthAtEdge: '7', widthAbove: '8', heightAbove: '24' } });
+    const followed = sheet({
+      finish: 'cuff',
+      input: { unit: 'in', precision: 16, cuffDepth: '1 1/2', oldCrease: '3' },
+      taper: { widthAtEdge: '7', widthAbove: '8', heightAbove: '24' },
+    });
     expect(followed.groups[0]!.taper!.summary).not.toContain('measured');
     expect(followed.groups[0]!.taper!.work).toContain('let out 1/4 in at line 4');
   });
@@ -41,7 +45,9 @@ describe('cut sheet: a let-down plain hem measured at the cutting line', () => {
   it('an old hem flared to 7 1/8 in at the cut lies flat under a 1 1/2 in hem: no seam work, and the measured width said', () => {
     const c = hem('7 1/8');
     const taper = c.groups[0]!.taper!;
-    expect(taper.summary).toBe('Taper within tolerance: the hem lies flat, no seam work needed. Width at the cutting line measured on the let-down leg: 7 1/8 in flat (not followed down from the taper).');
+    expect(taper.summary).toBe(
+      'Taper within tolerance: the hem lies flat, no seam work needed. Width at the cutting line measured on the let-down leg: 7 1/8 in flat (not followed down from the taper).',
+    );
     expect(taper.work).toBeNull();
     expect(c.steps[0]!.items.join(' ')).not.toMatch(/unpick both leg seams/);
   });

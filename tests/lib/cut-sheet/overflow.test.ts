@@ -23,11 +23,13 @@ vi.mock('@/lib/render-pdf', async (importOriginal) => {
           documents.push(doc);
           return {
             doc,
-            adjust: adjust && ((layout, layOut) =>
-              adjust(layout, (other) => {
-                laidOut.push(other);
-                return layOut(other);
-              })),
+            adjust:
+              adjust &&
+              ((layout, layOut) =>
+                adjust(layout, (other) => {
+                  laidOut.push(other);
+                  return layOut(other);
+                })),
           };
         }),
         props,
@@ -51,7 +53,9 @@ const longCuff = { side: 'right' as const, finish: 'cuff' as const, input: { uni
 /** The wrap setting of each sheet page of a rendered document. */
 function wraps(doc: ReactElement): boolean[] {
   const children = (doc.props as { children: unknown[] }).children;
-  const pages = children.flat().filter((c): c is ReactElement => !!c && typeof c === 'object' && 'props' in c && 'data' in ((c as ReactElement).props as object));
+  const pages = children
+    .flat()
+    .filter((c): c is ReactElement => !!c && typeof c === 'object' && 'props' in c && 'data' in ((c as ReactElement).props as object));
   return pages.map((p) => (p.props as { wrap: boolean }).wrap);
 }
 

@@ -221,7 +221,10 @@ describe('every printed plain hem adds up as printed', () => {
         const h = steps(grab(g.title, new RegExp(`^Plain hem, (${LEN}) allowance$`))![0]!, unit, step);
         expect(lineSteps(g, unit, step).map((l) => l.below)).toEqual([0, h]);
         if (g.slopeNote) {
-          const [s, edge, edgeWhere, cut, cutWhere] = grab(g.slopeNote, new RegExp(`(${LEN}) lower at the back\\. At the front chalk the finished edge (${LEN}) (above|below) and the cutting line (${LEN}) (above|below)`))!;
+          const [s, edge, edgeWhere, cut, cutWhere] = grab(
+            g.slopeNote,
+            new RegExp(`(${LEN}) lower at the back\\. At the front chalk the finished edge (${LEN}) (above|below) and the cutting line (${LEN}) (above|below)`),
+          )!;
           const signed = (text: string, where: string) => steps(text, unit, step) * (where === 'above' ? -1 : 1);
           expect(signed(edge!, edgeWhere!)).toBe(-steps(s!, unit, step));
           expect(signed(cut!, cutWhere!)).toBe(h - steps(s!, unit, step));

@@ -92,7 +92,12 @@ describe('rendering strangers’ sheets off the main thread', () => {
     await new Promise((r) => setTimeout(r, 100));
     const rest: string[] = [];
     for (let r = await reader.read(); !r.done; r = await reader.read()) rest.push(text(r.value));
-    expect([text(first.value!), ...rest].join('').split('\n').map((l) => l.replace(/^drawn in thread \d+: /, ''))).toEqual(names);
+    expect(
+      [text(first.value!), ...rest]
+        .join('')
+        .split('\n')
+        .map((l) => l.replace(/^drawn in thread \d+: /, '')),
+    ).toEqual(names);
   });
 
   it('fails a batch whose worker stops answering part way, its stream erroring', async () => {

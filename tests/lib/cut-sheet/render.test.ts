@@ -193,7 +193,7 @@ describe('page sizes and batches', () => {
       expect(text).toContain('Left leg: before cutting, unpick both leg seams');
       expect(text).toMatch(/old crease/i);
       expect(text).toContain('AT THE BENCH');
-      expect(text).toContain("local rules come first");
+      expect(text).toContain('local rules come first');
     });
   }
 
@@ -216,7 +216,10 @@ describe('page sizes and batches', () => {
       input: { unit: 'in', precision: 16, cuffDepth: '2 1/4', available, oldCrease: side === 'left' ? 1 : '2 1/2', clothThickness: '1/16' },
       taper: { widthAtEdge: 7.5, widthAbove: 9.5, heightAbove: 5, seamAllowance: '1/4' },
     });
-    for (const [pageSize, height] of [['LETTER', 792], ['A4', 841.89]] as const) {
+    for (const [pageSize, height] of [
+      ['LETTER', 792],
+      ['A4', 841.89],
+    ] as const) {
       const file = pdfFile(await renderCutSheet({ ...sheet([heavy('left', '7'), heavy('right', '6 1/2')]), pageSize }));
       const info = pageInfo(file);
       // The two 2 1/4 in strips go on over a page of strip after the sheet's own two pages.

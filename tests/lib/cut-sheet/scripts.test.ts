@@ -107,7 +107,10 @@ function expectPrinted(pdf: Uint8Array, name: string): void {
   expect(embedded.length).toBe(used.length);
   for (const ch of name.replace(/\s/g, '')) {
     const cp = ch.codePointAt(0)!;
-    expect(embedded.some((f) => f.chars.has(cp)), `U+${cp.toString(16)} drawn by an embedded font`).toBe(true);
+    expect(
+      embedded.some((f) => f.chars.has(cp)),
+      `U+${cp.toString(16)} drawn by an embedded font`,
+    ).toBe(true);
   }
   // Poppler puts a right-to-left run drawn right to left back into typing order (between
   // embedding marks): it reads back as typed only if the page drew it in the right order.
@@ -144,7 +147,10 @@ describe('right-to-left names', () => {
   it.each(rows)('draws the %s name on the %s right to left, with its joined forms', async (script, _doc, name, pkg, file, postscript, render) => {
     const pdf = await render(name);
     const f = face(pkg, file);
-    const visual = name.split(' ').reverse().flatMap((w) => shaped(f, w).reverse());
+    const visual = name
+      .split(' ')
+      .reverse()
+      .flatMap((w) => shaped(f, w).reverse());
     const subset = f.createSubset();
     for (const g of visual) subset.includeGlyph(g.id);
     const objects = pdfObjects(pdf);
@@ -202,7 +208,11 @@ describe('a CJK name set in bold', () => {
 describe('a Latin-only document', () => {
   it('embeds Inter and no other font, on the slip and on the sheet', async () => {
     for (const pdf of [await renderClaimSlip(SLIP), await renderCutSheet(sheet([cuffInch]))]) {
-      expect(embeddedFonts(pdf).map((f) => f.name).sort()).toEqual(expect.arrayContaining(['Inter-Bold', 'Inter-ExtraBold']));
+      expect(
+        embeddedFonts(pdf)
+          .map((f) => f.name)
+          .sort(),
+      ).toEqual(expect.arrayContaining(['Inter-Bold', 'Inter-ExtraBold']));
       for (const f of embeddedFonts(pdf)) expect(f.name).toMatch(/^Inter-/);
     }
   });

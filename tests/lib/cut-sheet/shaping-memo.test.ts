@@ -22,7 +22,8 @@ interface Run {
   glyphs: { id: number }[];
   positions: { xAdvance: number; yAdvance: number; xOffset: number; yOffset: number }[];
 }
-const placed = (r: Run) => r.glyphs.map((g, i) => `${g.id}@${r.positions[i]!.xAdvance},${r.positions[i]!.yAdvance},${r.positions[i]!.xOffset},${r.positions[i]!.yOffset}`);
+const placed = (r: Run) =>
+  r.glyphs.map((g, i) => `${g.id}@${r.positions[i]!.xAdvance},${r.positions[i]!.yAdvance},${r.positions[i]!.xOffset},${r.positions[i]!.yOffset}`);
 
 // Every run of text the renderer lays out on a varied set of sheets, as textkit hands it to fontkit.
 const runs = new Set<string>();
@@ -33,7 +34,8 @@ beforeAll(async () => {
     for (const r of t.runs) runs.add(t.string.slice(r.start, r.end));
     return compute();
   });
-  for (const legs of [[cuffInch], [cuffMetric], busyLegs, [hemSloped]]) await renderCutSheet(sheet(legs, { garment: 'Tan cotton chinos, “weekend” pair – café wash' }));
+  for (const legs of [[cuffInch], [cuffMetric], busyLegs, [hemSloped]])
+    await renderCutSheet(sheet(legs, { garment: 'Tan cotton chinos, “weekend” pair – café wash' }));
   await renderCutSheet(sheet([cuffMetric], UNSAVED));
   memoiseTextLayout(true);
 });
@@ -74,6 +76,8 @@ describe('shaping word by word', () => {
     const kept = open(FILES[0]!);
     memoiseShaping(kept);
     const text = 'Cut on line 4, the cutting line.';
-    expect(placed(kept.layout(text, FEATURES, undefined, undefined, 'ltr') as unknown as Run)).toEqual(placed(whole.layout(text, FEATURES, undefined, undefined, 'ltr') as unknown as Run));
+    expect(placed(kept.layout(text, FEATURES, undefined, undefined, 'ltr') as unknown as Run)).toEqual(
+      placed(whole.layout(text, FEATURES, undefined, undefined, 'ltr') as unknown as Run),
+    );
   });
 });

@@ -105,10 +105,18 @@ describe('the strip reaches the cutting line', () => {
     // The engine's usual ranges (src/lib/allowance/defaults.ts, from TRADE.md): cuffs 1 to 2 1/4 in
     // or 25 to 57 mm, hems 1 1/4 to 2 in or 32 to 51 mm.
     const leg = fc.oneof(
-      fc.integer({ min: 8, max: 18 }).map((k): LegOrder => ({ side: 'left', finish: 'cuff', input: { unit: 'in', precision: 8, cuffDepth: `${k}/8`, available: 12 } })),
-      fc.integer({ min: 25, max: 57 }).map((d): LegOrder => ({ side: 'left', finish: 'cuff', input: { unit: 'mm', precision: 8, cuffDepth: d, available: 300 } })),
-      fc.integer({ min: 10, max: 16 }).map((k): LegOrder => ({ side: 'left', finish: 'hem', input: { unit: 'in', precision: 8, hemAllowance: `${k}/8`, available: 5 } })),
-      fc.integer({ min: 32, max: 51 }).map((d): LegOrder => ({ side: 'left', finish: 'hem', input: { unit: 'mm', precision: 8, hemAllowance: d, available: 120 } })),
+      fc
+        .integer({ min: 8, max: 18 })
+        .map((k): LegOrder => ({ side: 'left', finish: 'cuff', input: { unit: 'in', precision: 8, cuffDepth: `${k}/8`, available: 12 } })),
+      fc
+        .integer({ min: 25, max: 57 })
+        .map((d): LegOrder => ({ side: 'left', finish: 'cuff', input: { unit: 'mm', precision: 8, cuffDepth: d, available: 300 } })),
+      fc
+        .integer({ min: 10, max: 16 })
+        .map((k): LegOrder => ({ side: 'left', finish: 'hem', input: { unit: 'in', precision: 8, hemAllowance: `${k}/8`, available: 5 } })),
+      fc
+        .integer({ min: 32, max: 51 })
+        .map((d): LegOrder => ({ side: 'left', finish: 'hem', input: { unit: 'mm', precision: 8, hemAllowance: d, available: 120 } })),
     );
     await fc.assert(
       fc.asyncProperty(leg, fc.constantFrom<PageSize>('LETTER', 'A4'), async (l, paper) => {

@@ -52,12 +52,20 @@ describe('the paragraph layout memo', () => {
 
   it('gives two requests the same key only when text, style and box are the same', () => {
     fc.assert(
-      fc.property(fc.string(), fc.string(), fc.integer({ min: 1, max: 600 }), fc.integer({ min: 1, max: 600 }), fc.constantFrom(8, 8.5, 10), fc.constantFrom(8, 8.5, 10), (t1, t2, w1, w2, f1, f2) => {
-        const a = request(t1, w1, f1);
-        const b = request(t2, w2, f2);
-        const same = t1 === t2 && w1 === w2 && f1 === f2;
-        expect(layoutKey(a.text, a.container, a.options) === layoutKey(b.text, b.container, b.options)).toBe(same);
-      }),
+      fc.property(
+        fc.string(),
+        fc.string(),
+        fc.integer({ min: 1, max: 600 }),
+        fc.integer({ min: 1, max: 600 }),
+        fc.constantFrom(8, 8.5, 10),
+        fc.constantFrom(8, 8.5, 10),
+        (t1, t2, w1, w2, f1, f2) => {
+          const a = request(t1, w1, f1);
+          const b = request(t2, w2, f2);
+          const same = t1 === t2 && w1 === w2 && f1 === f2;
+          expect(layoutKey(a.text, a.container, a.options) === layoutKey(b.text, b.container, b.options)).toBe(same);
+        },
+      ),
     );
   });
 

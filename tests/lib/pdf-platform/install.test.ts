@@ -38,7 +38,11 @@ describe('installing the PDF speed patches', () => {
     uninstallPdfPlatform();
     expect(patched()).toBe(false);
     const lines: string[] = [];
-    const status = installPdfPlatform({ setting: undefined, versions: (pkg, via) => (pkg === 'pdfkit' ? '0.21.0' : installedVersion(pkg, via)), log: (l) => lines.push(l) });
+    const status = installPdfPlatform({
+      setting: undefined,
+      versions: (pkg, via) => (pkg === 'pdfkit' ? '0.21.0' : installedVersion(pkg, via)),
+      log: (l) => lines.push(l),
+    });
     expect(lines).toEqual([
       'pdf-platform: pdf-streams skipped: written for pdfkit 0.20.1, installed 0.21.0',
       'pdf-platform: pdf-font-cache skipped: written for pdfkit 0.20.1, installed 0.21.0',
@@ -71,7 +75,15 @@ describe('installing the PDF speed patches', () => {
     uninstallPdfPlatform();
     const lines: string[] = [];
     let undone = 0;
-    const broken = { name: 'broken', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: () => { throw new Error('no such method'); } };
+    const broken = {
+      name: 'broken',
+      pkg: 'pdfkit',
+      via: '@react-pdf/renderer',
+      writtenFor: '0.20.1',
+      install: () => {
+        throw new Error('no such method');
+      },
+    };
     const fine = { name: 'fine', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: () => () => void (undone += 1) };
     const status = installPdfPlatform({ patches: [broken, fine], log: (l) => lines.push(l), setting: 'on' });
     expect(lines).toEqual(['pdf-platform: broken skipped: no such method']);

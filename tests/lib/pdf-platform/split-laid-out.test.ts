@@ -22,7 +22,12 @@ describe('splitting a laid-out page', () => {
     const patch = PDF_PATCHES.find((p) => p.name === 'split-laid-out')!;
     uninstallPdfPlatform();
     const lines: string[] = [];
-    const status = installPdfPlatform({ setting: 'on', log: (l) => lines.push(l), versions: () => patch.writtenFor, patches: [{ ...patch, install: () => splitFromFirstLayout(unpatched) }] });
+    const status = installPdfPlatform({
+      setting: 'on',
+      log: (l) => lines.push(l),
+      versions: () => patch.writtenFor,
+      patches: [{ ...patch, install: () => splitFromFirstLayout(unpatched) }],
+    });
     expect(status).toMatchObject([{ name: 'split-laid-out', on: false }]);
     expect(lines).toEqual([expect.stringMatching(/^pdf-platform: split-laid-out skipped: .*paginateLaidOutPage/)]);
     expect(await splitLaidOut({} as never, {} as never)).toBeNull();

@@ -14,7 +14,14 @@ const LIST: PriceList = {
   rush: { label: 'Rush', amountMinor: 1000 },
 };
 
-const garment = (over: Partial<GarmentFacts>): GarmentFacts => ({ garmentId: 'g1', label: 'Grey flannel', finish: 'hem', taperLetOut: false, oldCuff: false, ...over });
+const garment = (over: Partial<GarmentFacts>): GarmentFacts => ({
+  garmentId: 'g1',
+  label: 'Grey flannel',
+  finish: 'hem',
+  taperLetOut: false,
+  oldCuff: false,
+  ...over,
+});
 
 describe('priceTicket', () => {
   it('gives a plain hem its one line at the list price', () => {
@@ -71,14 +78,29 @@ describe('isRushableWork (RUSH_RULE) with the lead’s kinds of work', () => {
 
 describe('balanceOf', () => {
   it('takes payments off the total and never shows a negative balance', () => {
-    expect(balanceOf([{ amountMinor: 2600 }, { amountMinor: 1200 }], [{ amountMinor: 1000 }])).toEqual({ total: 3800, paid: 1000, refunded: 0, due: 2800, credit: 0 });
-    expect(balanceOf([{ amountMinor: 2600 }, { amountMinor: -600 }], [{ amountMinor: 2000 }])).toEqual({ total: 2000, paid: 2000, refunded: 0, due: 0, credit: 0 });
+    expect(balanceOf([{ amountMinor: 2600 }, { amountMinor: 1200 }], [{ amountMinor: 1000 }])).toEqual({
+      total: 3800,
+      paid: 1000,
+      refunded: 0,
+      due: 2800,
+      credit: 0,
+    });
+    expect(balanceOf([{ amountMinor: 2600 }, { amountMinor: -600 }], [{ amountMinor: 2000 }])).toEqual({
+      total: 2000,
+      paid: 2000,
+      refunded: 0,
+      due: 0,
+      credit: 0,
+    });
   });
 
   it('shows money paid beyond the total as a credit owed, less what was given back (issue 14)', () => {
     // Line 20.00, deposit 20.00, adjustment -15.00: 15.00 is owed back, not lost.
     expect(balanceOf([{ amountMinor: 2000 }, { amountMinor: -1500 }], [{ amountMinor: 2000 }])).toMatchObject({ total: 500, due: 0, credit: 1500 });
-    const refunds = [{ amountMinor: 1000, status: 'done' }, { amountMinor: 500, status: 'failed' }];
+    const refunds = [
+      { amountMinor: 1000, status: 'done' },
+      { amountMinor: 500, status: 'failed' },
+    ];
     expect(balanceOf([{ amountMinor: 2000 }, { amountMinor: -1500 }], [{ amountMinor: 2000 }], refunds)).toMatchObject({ refunded: 1000, credit: 500, due: 0 });
   });
 

@@ -42,7 +42,9 @@ describe('stripHeifMetadata', () => {
   it('answers null for boxes that run past the file or are cut short', async () => {
     const heif = await sampleHeif();
     expect(stripHeifMetadata(heif.subarray(0, heif.length - 10))).toBeNull();
-    expect(stripHeifMetadata(new Uint8Array([0, 0, 0, 24, ...Buffer.from('ftypheic'), 0, 0, 0, 0, ...Buffer.from('mif1heic'), 7, 7, 7, 7, 7, 7, 7, 7, 7]))).toBeNull();
+    expect(
+      stripHeifMetadata(new Uint8Array([0, 0, 0, 24, ...Buffer.from('ftypheic'), 0, 0, 0, 0, ...Buffer.from('mif1heic'), 7, 7, 7, 7, 7, 7, 7, 7, 7])),
+    ).toBeNull();
   });
 });
 

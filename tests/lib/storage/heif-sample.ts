@@ -29,7 +29,10 @@ export const SAMPLE_PICTURE = Buffer.from('HEVC-PICTURE-DATA-'.repeat(8), 'latin
 export async function gpsExif(): Promise<Buffer> {
   const jpeg = await sharp({ create: { width: 8, height: 8, channels: 3, background: '#777' } })
     .jpeg()
-    .withExif({ IFD0: { Make: SAMPLE_EXIF_MAKE }, IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '51/1 30/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '0/1 7/1 0/1' } })
+    .withExif({
+      IFD0: { Make: SAMPLE_EXIF_MAKE },
+      IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '51/1 30/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '0/1 7/1 0/1' },
+    })
     .toBuffer();
   return (await sharp(jpeg).metadata()).exif!;
 }
@@ -38,7 +41,9 @@ export async function gpsExif(): Promise<Buffer> {
  * declared `size` pixels (ispe; 4032 × 3024 as a 12 MP phone camera writes). */
 export async function sampleHeif(size = { width: 4032, height: 3024 }): Promise<Buffer> {
   const exif = Buffer.concat([u32(6), await gpsExif()]);
-  const xmp = enc(`<x:xmpmeta xmlns:x="adobe:ns:meta/"><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#"><rdf:Description xmlns:exif="http://ns.adobe.com/exif/1.0/" ${SAMPLE_XMP_MARK}/></rdf:RDF></x:xmpmeta>`);
+  const xmp = enc(
+    `<x:xmpmeta xmlns:x="adobe:ns:meta/"><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#"><rdf:Description xmlns:exif="http://ns.adobe.com/exif/1.0/" ${SAMPLE_XMP_MARK}/></rdf:RDF></x:xmpmeta>`,
+  );
   const ftyp = box('ftyp', enc('heic'), u32(0), enc('mif1heic'));
   const items = [SAMPLE_PICTURE, exif, xmp];
   const build = (mdatAt: number) => {
@@ -57,7 +62,11 @@ export async function sampleHeif(size = { width: 4032, height: 3024 }): Promise<
       fullBox('iinf', 0, u16(3), infe(1, 'hvc1'), infe(2, 'Exif'), infe(3, 'mime', 'application/rdf+xml')),
       fullBox('iloc', 0, Buffer.from([0x44, 0x00]), u16(items.length), ...locs),
       // The picture's properties: its size (ispe), tied to item 1 by ipma (one property, essential).
-      box('iprp', box('ipco', fullBox('ispe', 0, u32(size.width), u32(size.height))), fullBox('ipma', 0, u32(1), u16(1), Buffer.from([1]), Buffer.from([0x81]))),
+      box(
+        'iprp',
+        box('ipco', fullBox('ispe', 0, u32(size.width), u32(size.height))),
+        fullBox('ipma', 0, u32(1), u16(1), Buffer.from([1]), Buffer.from([0x81])),
+      ),
     );
     return meta;
   };

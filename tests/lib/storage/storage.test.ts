@@ -8,8 +8,7 @@ import { isPathLike, safeName } from '@/lib/storage/safe-name';
 import { sniffImage } from '@/lib/storage/sniff-image';
 import { checkKey } from '@/lib/storage/storage';
 
-const bytes = (...parts: (number[] | string)[]) =>
-  new Uint8Array(parts.flatMap((p) => (typeof p === 'string' ? [...Buffer.from(p, 'latin1')] : p)));
+const bytes = (...parts: (number[] | string)[]) => new Uint8Array(parts.flatMap((p) => (typeof p === 'string' ? [...Buffer.from(p, 'latin1')] : p)));
 
 describe('sniffImage', () => {
   // Signatures: JPEG FF D8 FF; PNG 89 'PNG' 0D 0A 1A 0A; WebP 'RIFF' size 'WEBP'; HEIF 'ftyp' + brand

@@ -84,16 +84,13 @@ describe('POST /api/plan: published figures', () => {
     },
   );
 
-  it.each(['1 1/4', '1 1/2', '1 3/4'])(
-    'The Encyclopedia of Men\'s Clothes: %s in is a usual cuff depth, no warning about it',
-    async (cuffDepth) => {
-      const { status, json } = await post({ kind: 'cuff', unit: 'in', cuffDepth });
-      expect(status).toBe(200);
-      expect(json.warnings.map((w: { code: string }) => w.code)).not.toContain('cuff-depth-unusual');
-    },
-  );
+  it.each(['1 1/4', '1 1/2', '1 3/4'])("The Encyclopedia of Men's Clothes: %s in is a usual cuff depth, no warning about it", async (cuffDepth) => {
+    const { status, json } = await post({ kind: 'cuff', unit: 'in', cuffDepth });
+    expect(status).toBe(200);
+    expect(json.warnings.map((w: { code: string }) => w.code)).not.toContain('cuff-depth-unusual');
+  });
 
-  it('The Encyclopedia of Men\'s Clothes: cuffs are hemmed level, so a slope on a cuff is warned and left out', async () => {
+  it("The Encyclopedia of Men's Clothes: cuffs are hemmed level, so a slope on a cuff is warned and left out", async () => {
     const { status, json } = await post({ kind: 'cuff', unit: 'in', cuffDepth: '1 1/2', slope: '1/2' });
     expect(status).toBe(200);
     expect(json.warnings.map((w: { code: string }) => w.code)).toContain('slope-on-cuff');
@@ -122,7 +119,13 @@ describe('POST /api/plan: published figures', () => {
   it('Fit For A Queen, "Hemming Tapered Pants" (2012): 1/4 in short flat is 1/2 in round the leg, 1/4 in at each of the two seams', async () => {
     // 8 in flat at the edge, 10 in flat 12 in up: the cuff top (1 1/2 in up) is 1/4 in wider than the edge.
     const { status, json } = await post({
-      kind: 'taper', unit: 'in', cuffDepth: '1 1/2', widthAtEdge: '8', widthAbove: '10', heightAbove: '12', seamAllowance: '1/2',
+      kind: 'taper',
+      unit: 'in',
+      cuffDepth: '1 1/2',
+      widthAtEdge: '8',
+      widthAbove: '10',
+      heightAbove: '12',
+      seamAllowance: '1/2',
     });
     expect(status).toBe(200);
     expect(json.kind).toBe('taper');
@@ -142,7 +145,16 @@ describe('POST /api/plan: published figures', () => {
     expect(line(followed.json, 'cut').change.text).toBe('1/4 in');
     const measured = await post({ ...base, widthAtCut: '7 1/2' });
     expect(line(measured.json, 'cut')).toMatchObject({ width: { text: '7 1/2 in' }, change: { text: '-3/8 in' }, measured: true });
-    const cuff = await post({ kind: 'taper', unit: 'in', cuffDepth: '1 1/2', widthAtEdge: '7', widthAbove: '8', heightAbove: '24', widthAtCut: '7 3/8', oldCrease: '3' });
+    const cuff = await post({
+      kind: 'taper',
+      unit: 'in',
+      cuffDepth: '1 1/2',
+      widthAtEdge: '7',
+      widthAbove: '8',
+      heightAbove: '24',
+      widthAtCut: '7 3/8',
+      oldCrease: '3',
+    });
     expect(line(cuff.json, 'cut').change.text).toBe('-5/16 in');
     const refused = await post({ ...base, widthAtCut: '0' });
     expect(refused.status).toBe(422);
@@ -173,7 +185,7 @@ describe('POST /api/plan: published figures', () => {
     },
   );
 
-  it('blank optional fields from a form are left to the engine\'s defaults', async () => {
+  it("blank optional fields from a form are left to the engine's defaults", async () => {
     const { status, json } = await post({ kind: 'cuff', unit: 'in', cuffDepth: '1 1/2', hemSection: '', turnUnder: '  ', available: '' });
     expect(status).toBe(200);
     expect(json.hemSection.text).toBe('1 1/2 in');
@@ -253,9 +265,20 @@ describe('POST /api/plan: bad input is answered, never a 500', () => {
           kind: fc.constantFrom('cuff', 'hem', 'taper', 'hem-taper', 'other'),
           unit: fc.constantFrom('in', 'cm', 'mm', 'ft'),
           precision: fc.constantFrom(8, 16, 32, 0, '8'),
-          cuffDepth: length, hemSection: length, turnUnder: length, available: length, oldCrease: length,
-          clothThickness: length, slope: length, hemAllowance: length, widthAtEdge: length, widthAbove: length,
-          heightAbove: length, seamAllowance: length, tolerance: length, widthAtCut: length,
+          cuffDepth: length,
+          hemSection: length,
+          turnUnder: length,
+          available: length,
+          oldCrease: length,
+          clothThickness: length,
+          slope: length,
+          hemAllowance: length,
+          widthAtEdge: length,
+          widthAbove: length,
+          heightAbove: length,
+          seamAllowance: length,
+          tolerance: length,
+          widthAtCut: length,
         },
         { requiredKeys: ['kind', 'unit'] },
       ),

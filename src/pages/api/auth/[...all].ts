@@ -49,7 +49,7 @@ export const ALL = route(
     summary: "better-auth's own endpoints: sign-in/email, sign-out, get-session, request-password-reset, reset-password, change-password, update-user…",
     description:
       'Public. Sign in with POST /api/auth/sign-in/email {email, password}: the answer sets the session cookie every other route reads. ' +
-      'Sign-up is POST /api/shops or an invitation; better-auth\'s organization endpoints answer 404 (staff work goes through /api/staff).',
+      "Sign-up is POST /api/shops or an invitation; better-auth's organization endpoints answer 404 (staff work goes through /api/staff).",
     permission: 'public',
     rawBody: { type: 'application/json' },
     examples: [{ summary: 'The session of the caller (null signed out)', params: { all: 'get-session' } }],
@@ -72,7 +72,8 @@ export const ALL = route(
     const bad = unstorablePath(fields);
     if (bad) return problem(422, 'Some fields need attention.', { [bad]: UNSTORABLE_MESSAGE });
     if (capped.method === 'POST' && path === '/api/auth/sign-in/email') return oneShape(await limitedSignIn(capped, clientOf(context), auth.handler));
-    if (capped.method === 'POST' && path === '/api/auth/request-password-reset') return oneShape(await limitedResetRequest(capped, clientOf(context), auth.handler));
+    if (capped.method === 'POST' && path === '/api/auth/request-password-reset')
+      return oneShape(await limitedResetRequest(capped, clientOf(context), auth.handler));
     return oneShape(await auth.handler(capped));
   },
 );

@@ -4,7 +4,9 @@ import { garmentPatch } from '@/lib/bench-requests';
 import { getGarment, updateGarment } from '@/services/garments';
 
 /** The garment with its ticket and customer. */
-export const GET = route({ summary: 'One garment with its ticket and customer.', permission: ['tickets', 'read'] }, ({ actor, params }) => getGarment(actor, params.id!));
+export const GET = route({ summary: 'One garment with its ticket and customer.', permission: ['tickets', 'read'] }, ({ actor, params }) =>
+  getGarment(actor, params.id!),
+);
 
 /** Changes the garment's description, due date or assignee (each change kept in its history). */
 export const PATCH = route(

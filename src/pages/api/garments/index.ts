@@ -9,7 +9,8 @@ import { readQueue } from '@/services/queue';
 export const GET = route(
   {
     summary: 'The queue: open garments, or with view=history the collected ones a page at a time (Link rel="next").',
-    description: 'Each answer carries an ETag; sent back in If-None-Match, the answer is 304 while the list is unchanged. An apprentice sees their own garments and unassigned ones.',
+    description:
+      'Each answer carries an ETag; sent back in If-None-Match, the answer is 304 while the list is unchanged. An apprentice sees their own garments and unassigned ones.',
     permission: ['tickets', 'read'],
     query: queueQuery,
     examples: [{ summary: 'Open work' }, { summary: 'The latest 20 collected', query: { view: 'history', limit: '20' } }],

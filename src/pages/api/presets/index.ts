@@ -7,7 +7,9 @@ import { createPreset, listPresets, settingsIssues } from '@/services/presets';
 export const prerender = false;
 
 /** House presets (the default first) and the caller's own. */
-export const GET = route({ summary: "The shop's house presets (the default first) and the caller's own.", permission: ['presets', 'read'] }, ({ actor }) => listPresets(actor));
+export const GET = route({ summary: "The shop's house presets (the default first) and the caller's own.", permission: ['presets', 'read'] }, ({ actor }) =>
+  listPresets(actor),
+);
 
 /** Adds a house preset (lead only) or a personal one; lengths are read by the engine (422 per field). */
 export const POST = route(
@@ -19,7 +21,9 @@ export const POST = route(
     ],
     body: presetCreateInput,
     status: 201,
-    examples: [{ summary: 'My usual cuff', body: { name: 'My 1 1/2 in cuff', scope: 'personal', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } } }],
+    examples: [
+      { summary: 'My usual cuff', body: { name: 'My 1 1/2 in cuff', scope: 'personal', settings: { finish: 'cuff', unit: 'in', cuffDepth: '1 1/2' } } },
+    ],
   },
   ({ actor, body }) => {
     demand(actor, ['presets', body.scope === 'house' ? 'manage-house' : 'create-own']);

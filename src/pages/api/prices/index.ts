@@ -6,8 +6,9 @@ import { getPriceList, savePriceList } from '@/services/counter/prices';
 export const prerender = false;
 
 /** The price list with currency, hours and the automatic-notice setting. */
-export const GET = route({ summary: 'The price list with currency, opening hours, address and the automatic ready notice.', permission: ['prices', 'read'] }, ({ actor }) =>
-  getPriceList(actor),
+export const GET = route(
+  { summary: 'The price list with currency, opening hours, address and the automatic ready notice.', permission: ['prices', 'read'] },
+  ({ actor }) => getPriceList(actor),
 );
 
 /** Saves the whole list and the settings. */

@@ -13,7 +13,7 @@ export const prerender = false;
 export const POST = route(
   {
     summary: "The SMS service's delivery report for one text (?notice=id): form fields signed with X-Twilio-Signature; unsigned answers 403.",
-    description: 'Called by the SMS service, not by clients: no example, since only a report signed with the service\'s token is accepted.',
+    description: "Called by the SMS service, not by clients: no example, since only a report signed with the service's token is accepted.",
     permission: 'public',
     rawBody: { type: 'application/x-www-form-urlencoded' },
   },

@@ -5,7 +5,12 @@ import { changeRole, removeMember } from '@/services/staff';
 
 /** Changes the member's role. */
 export const PATCH = route(
-  { summary: "Changes a member's role.", permission: ['staff', 'change-role'], body: roleChangeInput, examples: [{ summary: 'Now a tailor', body: { role: 'tailor' } }] },
+  {
+    summary: "Changes a member's role.",
+    permission: ['staff', 'change-role'],
+    body: roleChangeInput,
+    examples: [{ summary: 'Now a tailor', body: { role: 'tailor' } }],
+  },
   ({ actor, params, body, request }) => changeRole(actor, request.headers, params.memberId!, body),
 );
 

@@ -4,6 +4,6 @@ import { previousFittings } from '@/services/fitting-copy';
 
 /** The customer's latest fittings per garment kind; for whoever takes garments in. */
 export const GET = route(
-  { summary: "The customer's latest fittings per garment kind (\"same as last time\" at intake).", permission: ['tickets', 'create'] },
+  { summary: 'The customer\'s latest fittings per garment kind ("same as last time" at intake).', permission: ['tickets', 'create'] },
   ({ actor, params }) => previousFittings(actor, params.id!),
 );

@@ -12,4 +12,6 @@ export const GET = route(
 );
 
 /** Removes the photo and its thumbnail. */
-export const DELETE = route({ summary: 'Removes the photo and its thumbnail.', permission: ['photos', 'delete'] }, ({ actor, params }) => deletePhoto(actor, params.id!));
+export const DELETE = route({ summary: 'Removes the photo and its thumbnail.', permission: ['photos', 'delete'] }, ({ actor, params }) =>
+  deletePhoto(actor, params.id!),
+);

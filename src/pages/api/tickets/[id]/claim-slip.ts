@@ -19,7 +19,11 @@ export const GET = route(
     const data = await claimSlipData(actor, params.id!);
     const pdf = await renderClaimSlip(data, query);
     return new Response(pdf, {
-      headers: { 'content-type': 'application/pdf', 'content-disposition': `inline; filename="claim-slip-${data.ticketNumber}.pdf"`, 'cache-control': 'no-store' },
+      headers: {
+        'content-type': 'application/pdf',
+        'content-disposition': `inline; filename="claim-slip-${data.ticketNumber}.pdf"`,
+        'cache-control': 'no-store',
+      },
     });
   },
 );

@@ -6,8 +6,9 @@ import { listNotices, resendReadyNotice, sendPayLink, sendReadyNotice } from '@/
 export const prerender = false;
 
 /** Every notice of the ticket with its state, attempts and last error. */
-export const GET = route({ summary: "The ticket's notices with their delivery state, attempts and last error.", permission: ['tickets', 'read-all'] }, ({ actor, params }) =>
-  listNotices(actor, params.id!),
+export const GET = route(
+  { summary: "The ticket's notices with their delivery state, attempts and last error.", permission: ['tickets', 'read-all'] },
+  ({ actor, params }) => listNotices(actor, params.id!),
 );
 
 /** Sends the ready notice now, or (`again: true`) once more after it has gone; or the open pay link by e-mail or text. */
