@@ -33,10 +33,10 @@ function money(minor, currency) {
   return new Intl.NumberFormat('en-GB', { style: 'currency', currency: currency.toUpperCase() }).format(minor / 10 ** digits);
 }
 
-const escape = (s) => String(s).replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
+const escapeHtml = (s) => String(s).replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
 function page(title, inner) {
-  return `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>${escape(title)}</title>
+  return `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>${escapeHtml(title)}</title>
 <style>body{font:18px/1.5 system-ui,sans-serif;background:#f6f4ef;color:#111;margin:0;padding:2rem}main{max-width:30rem;margin:auto;background:#fff;border:2px solid #111;padding:1.5rem}
 .amount{font-size:2.5rem;font-weight:800}.note{border:2px dashed #8a4b00;color:#8a4b00;padding:.5rem;font-weight:600}
 button{font:inherit;font-weight:700;min-height:48px;padding:.5rem 1.5rem;background:#0b4f6c;color:#fff;border:0;border-radius:4px;cursor:pointer}button:focus-visible{outline:4px solid #e0a100;outline-offset:2px}</style></head>
@@ -218,9 +218,9 @@ export function startPaymentsFake({ port = 12111, host = '127.0.0.1', apiKey, we
         page(
           'Pay your balance',
           `<p class="note">Local test payment service: no real money moves.</p>
-<h1>${escape(session.description)}</h1>
-<p class="amount">${escape(money(session.amount_total, session.currency))}</p>
-${open ? `<form method="post"><button type="submit">Pay ${escape(money(session.amount_total, session.currency))}</button></form>` : `<p><strong>This link is ${session.status === 'complete' ? 'already paid' : 'no longer open'}.</strong></p>`}`,
+<h1>${escapeHtml(session.description)}</h1>
+<p class="amount">${escapeHtml(money(session.amount_total, session.currency))}</p>
+${open ? `<form method="post"><button type="submit">Pay ${escapeHtml(money(session.amount_total, session.currency))}</button></form>` : `<p><strong>This link is ${session.status === 'complete' ? 'already paid' : 'no longer open'}.</strong></p>`}`,
         ),
         'text/html; charset=utf-8',
       );
@@ -252,7 +252,7 @@ ${open ? `<form method="post"><button type="submit">Pay ${escape(money(session.a
         200,
         page(
           'Paid',
-          `<h1>Payment received</h1><p class="amount">${escape(money(session.amount_total, session.currency))}</p><p>${delivered ? 'The shop has been told. You may close this page.' : 'The shop could not be told yet: show this page at the counter.'}</p>`,
+          `<h1>Payment received</h1><p class="amount">${escapeHtml(money(session.amount_total, session.currency))}</p><p>${delivered ? 'The shop has been told. You may close this page.' : 'The shop could not be told yet: show this page at the counter.'}</p>`,
         ),
         'text/html; charset=utf-8',
       );

@@ -11,7 +11,7 @@ import twilio from 'twilio';
 import { listenOrExplain } from './port-taken.mjs';
 
 const hex = (n) => randomBytes(n).toString('hex');
-const escape = (s) => String(s).replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
+const escapeHtml = (s) => String(s).replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
 /** True for a number the fake reports as undeliverable (its digits end in 999). */
 export function failsDelivery(to) {
@@ -112,7 +112,7 @@ export function startSmsFake({ port = 12112, host = '127.0.0.1', accountSid, aut
       const rows = messages
         .slice()
         .reverse()
-        .map((m) => `<li><strong>${escape(m.to)}</strong> · ${escape(m.status)} · ${escape(m.at)}<pre>${escape(m.body)}</pre></li>`)
+        .map((m) => `<li><strong>${escapeHtml(m.to)}</strong> · ${escapeHtml(m.status)} · ${escapeHtml(m.at)}<pre>${escapeHtml(m.body)}</pre></li>`)
         .join('');
       return send(
         res,

@@ -40,7 +40,7 @@ export function LengthInput({ id, label, unit, registration, hint, error, readin
           enterKeyHint="next"
           aria-invalid={error ? true : undefined}
           aria-describedby={described}
-          className={'measure w-full min-w-0 rounded-l-md border-2 bg-card px-3 text-xl ' + (error ? 'border-cut' : 'border-rule focus:border-accent')}
+          className={`measure w-full min-w-0 rounded-l-md border-2 bg-card px-3 text-xl ${error ? 'border-cut' : 'border-rule focus:border-accent'}`}
           {...registration}
         />
         <span

@@ -15,15 +15,13 @@ export async function recordSentMail(
   origin: MailOrigin,
   mail: { to: string; subject: string; messageId: string; channel?: 'email' | 'sms'; body?: string },
 ): Promise<void> {
-  await db
-    .insert(sentMail)
-    .values({
-      shopId: origin.shopId,
-      kind: origin.kind,
-      to: mail.to,
-      subject: mail.subject,
-      messageId: mail.messageId,
-      channel: mail.channel ?? 'email',
-      body: mail.body ?? null,
-    });
+  await db.insert(sentMail).values({
+    shopId: origin.shopId,
+    kind: origin.kind,
+    to: mail.to,
+    subject: mail.subject,
+    messageId: mail.messageId,
+    channel: mail.channel ?? 'email',
+    body: mail.body ?? null,
+  });
 }

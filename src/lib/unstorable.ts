@@ -2,6 +2,7 @@
 // No zod here, so the public calculator can check text in the browser without loading zod.
 
 // A NUL, or a high surrogate not followed by a low one, or a low surrogate not preceded by a high one.
+// biome-ignore lint/suspicious/noControlCharactersInRegex: the NUL is what is refused
 const UNSTORABLE = /\u0000|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
 
 /** Why a text cannot be kept. */

@@ -73,31 +73,27 @@ export async function seedOverviewDemo(shopId: string, people: Partial<Record<Ro
 }
 
 async function priced(shopId: string, ticketId: string, garmentIds: string[], people: Partial<Record<Role, string>>, at: Date) {
-  await db
-    .insert(priceLines)
-    .values(
-      garmentIds.map((garmentId) => ({
-        shopId,
-        ticketId,
-        garmentId,
-        key: 'plain-hem' as const,
-        source: 'list' as const,
-        label: 'Plain hem',
-        amountMinor: PLAIN_HEM,
-        createdById: people.counter,
-        createdAt: at,
-      })),
-    );
-  await db
-    .insert(auditEvents)
-    .values({
+  await db.insert(priceLines).values(
+    garmentIds.map((garmentId) => ({
       shopId,
-      actorId: people.counter ?? null,
-      action: 'prices.line-added',
-      subject: ticketId,
-      detail: { amountMinor: PLAIN_HEM * garmentIds.length },
-      at,
-    });
+      ticketId,
+      garmentId,
+      key: 'plain-hem' as const,
+      source: 'list' as const,
+      label: 'Plain hem',
+      amountMinor: PLAIN_HEM,
+      createdById: people.counter,
+      createdAt: at,
+    })),
+  );
+  await db.insert(auditEvents).values({
+    shopId,
+    actorId: people.counter ?? null,
+    action: 'prices.line-added',
+    subject: ticketId,
+    detail: { amountMinor: PLAIN_HEM * garmentIds.length },
+    at,
+  });
 }
 
 async function paid(

@@ -8,7 +8,7 @@ import { customers, garments, member, tickets, user, type Garment } from '@/db/s
 import type { Actor } from '@/lib/api';
 import type { garmentInput, garmentPatch } from '@/lib/bench-requests';
 import type { CustomerCard, GarmentDetail, Person, QueueRow, TicketGarment } from '@/lib/bench-types';
-import { leastAdvanced, nextStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
+import { nextStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
 import { can } from '@/lib/roles';
 import { audit } from './audit';
 import { ServiceError } from './errors';

@@ -49,7 +49,7 @@ export async function readyMessage(shopId: string, ticketId: string): Promise<Me
   const payUrl = summary.due > 0 && summary.link?.status === 'open' ? summary.link.url : null;
   const pay = payUrl ? [`You may pay ahead online: ${payUrl}`] : [];
   const body = [
-    `Hello ${summary.ticket.customerName ?? ''}`.trim() + ',',
+    `${`Hello ${summary.ticket.customerName ?? ''}`.trim()},`,
     '',
     `Your trousers on ticket ${number} at ${shop?.name ?? 'the shop'} are ready to collect.`,
     due,
@@ -235,7 +235,7 @@ async function payLinkMessage(shopId: string, ticketId: string): Promise<Message
   const number = ticketLabel(summary.ticket.number, shop?.name ?? '');
   const amount = formatMoney(summary.due, summary.currency);
   const body = [
-    `Hello ${summary.ticket.customerName ?? ''}`.trim() + ',',
+    `${`Hello ${summary.ticket.customerName ?? ''}`.trim()},`,
     '',
     `You may pay ${amount} for ticket ${number} at ${shop?.name ?? 'the shop'} online:`,
     summary.link.url,

@@ -1,5 +1,5 @@
 // A shop's tickets: intake (with its garments), one ticket's page, and moving a whole ticket on.
-import { and, asc, desc, eq, exists, inArray, isNull, or, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, exists, isNull, or, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { customers, garments, tickets, type Ticket } from '@/db/schema';
 import type { Actor } from '@/lib/api';
@@ -7,10 +7,10 @@ import { intakeRequest, type IntakeInput } from '@/lib/bench-requests';
 import type { TicketDetail } from '@/lib/bench-types';
 import { nextStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
 import { can } from '@/lib/roles';
-import { audit, auditMany } from './audit';
+import { audit } from './audit';
 import { ServiceError } from './errors';
 import { moveGarmentsLocked, tellMoved } from './garment-moves';
-import { customerCard, garmentVisibleTo, isUuid, refreshTicketAssignee, refreshTicketStatus, staffOf, summaries, withTicketLock } from './garments';
+import { customerCard, garmentVisibleTo, isUuid, refreshTicketAssignee, staffOf, summaries, withTicketLock } from './garments';
 import { pickUp } from './counter/hand-over';
 import { priceAtIntake } from './counter/intake-prices';
 import { ticketLabel } from '@/lib/ticket-number';

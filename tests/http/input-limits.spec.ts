@@ -15,7 +15,7 @@ beforeAll(async () => {
 /** Posts `bytes` of JSON-ish filler, optionally as a chunked stream with no Content-Length. */
 async function postBig(path: string, bytes: number, opts: { cookie?: string; chunked?: boolean } = {}) {
   const base = inject('baseURL');
-  const filler = '{"kind":"cuff","unit":"in","cuffDepth":"' + 'x'.repeat(bytes) + '"}';
+  const filler = `{"kind":"cuff","unit":"in","cuffDepth":"${'x'.repeat(bytes)}"}`;
   const body = opts.chunked
     ? new ReadableStream<Uint8Array>({
         start(c) {
@@ -113,7 +113,7 @@ describe('a body that stops arriving', () => {
     const head = [`POST /api/plan HTTP/1.1`, `Host: ${new URL(inject('baseURL')).host}`, `Content-Type: application/json`, `Content-Length: 5000`, '', ''].join(
       '\r\n',
     );
-    const answer = await rawExchange(head + '{"kind":"cuff",', 30_000);
+    const answer = await rawExchange(`${head}{"kind":"cuff",`, 30_000);
     expect(answer).toMatch(/^HTTP\/1\.1 408/);
   });
 });

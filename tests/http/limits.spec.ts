@@ -59,7 +59,7 @@ describe('anonymous cut sheets', () => {
 
   // The test server sets SHEET_RENDER_TRACE, so each sheet answers which thread drew it.
   async function sheet(plan: object, opts: { from: string; cookie?: string }) {
-    const res = await fetch(inject('baseURL') + '/api/plan/sheet', {
+    const res = await fetch(`${inject('baseURL')}/api/plan/sheet`, {
       method: 'POST',
       headers: { 'content-type': 'application/json', origin: inject('baseURL'), 'x-forwarded-for': opts.from, ...(opts.cookie ? { cookie: opts.cookie } : {}) },
       body: JSON.stringify(plan),

@@ -6,7 +6,7 @@
 // a PostgreSQL server (CI's PostgreSQL run: scripts/with-postgres.sh).
 import { spawn, type ChildProcess } from 'node:child_process';
 import { randomBytes, randomUUID } from 'node:crypto';
-import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync } from 'node:fs';
 import { createServer, type Server } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -249,19 +249,17 @@ describe.skipIf(!serverUrl)('two app servers on one PostgreSQL', () => {
   it('a notice falling due while both servers run is sent exactly once', async () => {
     const to = 'odile.due@example.com';
     const { shopId, ticketId } = await freshGarment('ready', to);
-    await handle.db
-      .insert(notices)
-      .values({
-        shopId,
-        ticketId,
-        kind: 'ready',
-        to,
-        subject: 'Ready to collect',
-        body: 'Ready.',
-        status: 'failed',
-        attempts: 1,
-        nextAttemptAt: new Date(Date.now() + 1500),
-      });
+    await handle.db.insert(notices).values({
+      shopId,
+      ticketId,
+      kind: 'ready',
+      to,
+      subject: 'Ready to collect',
+      body: 'Ready.',
+      status: 'failed',
+      attempts: 1,
+      nextAttemptAt: new Date(Date.now() + 1500),
+    });
     for (let i = 0; i < 200; i += 1) {
       const [n] = await handle.db.select({ status: notices.status }).from(notices).where(eq(notices.ticketId, ticketId));
       if (n!.status === 'sent') break;

@@ -69,17 +69,15 @@ describe('accepting an invitation with a new account', () => {
     const shop = await makeShop('Saltmarsh Tailoring', ['lead']);
     const id = randomUUID();
     const email = 'new.tailor@example.com';
-    await db
-      .insert(invitation)
-      .values({
-        id,
-        organizationId: shop.shopId,
-        email,
-        role: 'tailor',
-        status: 'pending',
-        expiresAt: new Date(Date.now() + 3600_000),
-        inviterId: shop.lead.userId,
-      });
+    await db.insert(invitation).values({
+      id,
+      organizationId: shop.shopId,
+      email,
+      role: 'tailor',
+      status: 'pending',
+      expiresAt: new Date(Date.now() + 3600_000),
+      inviterId: shop.lead.userId,
+    });
     await refuseShop('Saltmarsh Tailoring');
     await expect(acceptInvitation(id, { newAccount: { name: 'New Tailor', password: 'a-long-password' } })).rejects.toMatchObject(refused);
     expect(await traces(email)).toEqual(none);
@@ -95,17 +93,15 @@ describe('accepting an invitation with a new account', () => {
     const shop = await makeShop('Reedbed Alterations', ['lead']);
     const other = await makeShop('Elsewhere Hems', ['tailor']);
     const id = randomUUID();
-    await db
-      .insert(invitation)
-      .values({
-        id,
-        organizationId: shop.shopId,
-        email: other.tailor.email,
-        role: 'tailor',
-        status: 'pending',
-        expiresAt: new Date(Date.now() + 3600_000),
-        inviterId: shop.lead.userId,
-      });
+    await db.insert(invitation).values({
+      id,
+      organizationId: shop.shopId,
+      email: other.tailor.email,
+      role: 'tailor',
+      status: 'pending',
+      expiresAt: new Date(Date.now() + 3600_000),
+      inviterId: shop.lead.userId,
+    });
     await refuseShop('Reedbed Alterations');
     await expect(acceptInvitation(id, { signedInUserId: other.tailor.userId, signedInEmail: other.tailor.email })).rejects.toMatchObject(refused);
     expect((await traces(other.tailor.email)).users).toBe(1);

@@ -128,22 +128,20 @@ describe('price lines', () => {
     const [g1] = await db.insert(garments).values({ shopId: a.shopId, ticketId: t.id, description: 'Navy twill', finish: 'cuff', position: 0 }).returning();
     await db.insert(garments).values({ shopId: a.shopId, ticketId: t.id, description: 'Chinos', finish: 'plain', position: 1 });
     // A leg narrowing 1 in over 10 in towards the hem under a 1½ in cuff: the engine asks for a let-out.
-    await db
-      .insert(measurements)
-      .values({
-        shopId: a.shopId,
-        garmentId: g1!.id,
-        leg: 'left',
-        unit: 'in',
-        finish: 'cuff',
-        values: {
-          cuffDepth: { text: '1 1/2' },
-          widthAtEdge: { text: '8' },
-          widthAbove: { text: '9' },
-          heightAbove: { text: '10' },
-          seamAllowance: { text: '1' },
-        },
-      });
+    await db.insert(measurements).values({
+      shopId: a.shopId,
+      garmentId: g1!.id,
+      leg: 'left',
+      unit: 'in',
+      finish: 'cuff',
+      values: {
+        cuffDepth: { text: '1 1/2' },
+        widthAtEdge: { text: '8' },
+        widthAbove: { text: '9' },
+        heightAbove: { text: '10' },
+        seamAllowance: { text: '1' },
+      },
+    });
     const { lines } = await prices.priceFromGarments(a.counter, t.id, { rush: true });
     expect(lines.map((l) => [l.key, l.amountMinor])).toEqual([
       ['cuff-from-hem', 2600],

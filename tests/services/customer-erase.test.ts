@@ -42,18 +42,16 @@ async function customerWithMoney(shop: Shop) {
   const key = `${shop.shopId}/erase-${g!.id}.jpg`;
   mkdirSync(join(root, shop.shopId), { recursive: true });
   writeFileSync(join(root, key), 'not really a picture');
-  await db
-    .insert(files)
-    .values({
-      shopId: shop.shopId,
-      ticketId: t.id,
-      garmentId: g!.id,
-      kind: 'fitting-photo',
-      path: key,
-      mimeType: 'image/jpeg',
-      bytes: 20,
-      originalName: 'hem.jpg',
-    });
+  await db.insert(files).values({
+    shopId: shop.shopId,
+    ticketId: t.id,
+    garmentId: g!.id,
+    kind: 'fitting-photo',
+    path: key,
+    mimeType: 'image/jpeg',
+    bytes: 20,
+    originalName: 'hem.jpg',
+  });
   return { c, t, g: g!, key };
 }
 

@@ -40,7 +40,7 @@ async function garment(shop = a, extra: { description?: string; dueOn?: string; 
   return { ticket, g };
 }
 
-async function fit(shop: Shop, garmentId: string, finish: 'cuff' | 'plain', left: Record<string, string>, right = left, unit: 'in' | 'cm' | 'mm' = 'in') {
+async function fitLegs(shop: Shop, garmentId: string, finish: 'cuff' | 'plain', left: Record<string, string>, right = left, unit: 'in' | 'cm' | 'mm' = 'in') {
   await saveFitting(shop.tailor, garmentId, fittingRequest(left, right, unit, finish));
 }
 
@@ -72,7 +72,7 @@ describe('one garment with a 1 1/2 in cuff and 5 in of cloth, fitted in inches',
     const { g, ticket } = await garment(a, { dueOn: '2026-12-04', assigneeId: a.tailor.userId });
     id = g.id;
     number = ticket.number;
-    await fit(a, id, 'cuff', { backPin: '31 1/4', cuffDepth: '1 1/2', available: '5' });
+    await fitLegs(a, id, 'cuff', { backPin: '31 1/4', cuffDepth: '1 1/2', available: '5' });
   });
 
   it('prints the engine plan in inches to 1/8 by default, cut 4 1/2 in below the mark (three cuff depths)', async () => {
@@ -159,7 +159,7 @@ describe('one garment with a 1 1/2 in cuff and 5 in of cloth, fitted in inches',
 describe('a metric fitting printed in inches', () => {
   it('reads the typed mm exactly and prints the engine plan in inches (plain hem, 40 mm allowance)', async () => {
     const { g } = await garment(a, { description: 'Grey chinos' });
-    await fit(a, g.id, 'plain', { backPin: '790', hemAllowance: '40', available: '60' }, undefined, 'mm');
+    await fitLegs(a, g.id, 'plain', { backPin: '790', hemAllowance: '40', available: '60' }, undefined, 'mm');
     const text = layoutText((await sheetOf(a.tailor, g.id, { unit: 'in', precision: 16 })).path);
     const plan = planHem({ unit: 'in', precision: 16, hemAllowance: '40 mm', available: '60 mm' });
     const cut = plan.lines.find((l) => l.name === 'cut')!;
@@ -208,13 +208,13 @@ describe('the batch for the queue', () => {
         dueOn: `2026-12-0${i + 1}`,
         assigneeId: i === 2 ? shop.lead.userId : shop.tailor.userId,
       });
-      await fit(shop, g.id, 'cuff', { cuffDepth: depth, available: '6' });
+      await fitLegs(shop, g.id, 'cuff', { cuffDepth: depth, available: '6' });
       fitted.push(g.id);
     }
     await garment(shop, { description: 'Unfitted pair', dueOn: '2026-12-01' });
     // A collected garment is not in the open queue.
     const { g: done, ticket: doneTicket } = await garment(shop, { description: 'Collected pair', dueOn: '2026-11-20' });
-    await fit(shop, done.id, 'cuff', { cuffDepth: '2', available: '7' });
+    await fitLegs(shop, done.id, 'cuff', { cuffDepth: '2', available: '7' });
     // A ticket is handed over only priced (the counter's rule): this one goes out with no charge.
     await addLine(shop.counter, doneTicket.id, { source: 'no-charge', reason: 'batch fixture' });
     for (const step of ['marked', 'cut', 'stitched', 'pressed', 'ready', 'collected'] as const) await moveGarment(shop.lead, done.id, step);

@@ -185,18 +185,16 @@ describe('making a link in two phases', () => {
       cancel_url: `${ORIGIN}/paid?cancelled=1`,
     } satisfies Stripe.Checkout.SessionCreateParams;
     const orphan = await serviceViaProxy.checkout.sessions.create(request, { idempotencyKey: sessionKey(id) });
-    await db
-      .insert(paymentLinks)
-      .values({
-        id,
-        shopId: a.shopId,
-        ticketId: t.id,
-        status: 'creating',
-        amountMinor: 1800,
-        currency: 'EUR',
-        request,
-        createdAt: new Date(Date.now() - 60_000),
-      });
+    await db.insert(paymentLinks).values({
+      id,
+      shopId: a.shopId,
+      ticketId: t.id,
+      status: 'creating',
+      amountMinor: 1800,
+      currency: 'EUR',
+      request,
+      createdAt: new Date(Date.now() - 60_000),
+    });
 
     const made = await pay.createPaymentLink(a.counter, t.id, ORIGIN);
     expect(made.link).toMatchObject({ amountMinor: 1800, status: 'open' });

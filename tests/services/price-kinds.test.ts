@@ -176,22 +176,20 @@ describe('pricing at intake', () => {
     const [g] = await db.select().from(garments).where(eq(garments.ticketId, t.id));
     expect(g!.finish).toBe('hem');
     // The fitting decides a cuff whose leg narrows 1 in over 10 in: a let-out too.
-    await db
-      .insert(measurements)
-      .values({
-        shopId: a.shopId,
-        garmentId: g!.id,
-        leg: 'left',
-        unit: 'in',
-        finish: 'cuff',
-        values: {
-          cuffDepth: { text: '1 1/2' },
-          widthAtEdge: { text: '8' },
-          widthAbove: { text: '9' },
-          heightAbove: { text: '10' },
-          seamAllowance: { text: '1' },
-        },
-      });
+    await db.insert(measurements).values({
+      shopId: a.shopId,
+      garmentId: g!.id,
+      leg: 'left',
+      unit: 'in',
+      finish: 'cuff',
+      values: {
+        cuffDepth: { text: '1 1/2' },
+        widthAtEdge: { text: '8' },
+        widthAbove: { text: '9' },
+        heightAbove: { text: '10' },
+        seamAllowance: { text: '1' },
+      },
+    });
     const { lines } = await prices.priceFromGarments(a.counter, t.id, { rush: false });
     expect(live(lines).map((l) => [l.label, l.amountMinor])).toEqual([
       ['Replace zip — Navy twill', 1500],

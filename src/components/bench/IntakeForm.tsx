@@ -31,7 +31,7 @@ const NEW_GARMENT = {
 };
 
 /** Pricing at intake is the counter's and the lead's (prices/adjust): others take work in unpriced. */
-function Intake({ canPrice = false }: { canPrice?: boolean }) {
+function IntakeScreen({ canPrice = false }: { canPrice?: boolean }) {
   const people = useAssignees();
   const prices = usePriceList();
   const list = canPrice ? prices.data : undefined;
@@ -203,4 +203,4 @@ function Intake({ canPrice = false }: { canPrice?: boolean }) {
 }
 
 /** The intake island: customer, garments brought in, a note and a due date; opens the ticket. */
-export default withQuery(Intake);
+export default withQuery(IntakeScreen);

@@ -40,7 +40,7 @@ export function PlanSummary({ leg, planned }: Props) {
         {failure ? (
           <span className="text-lg font-semibold text-cut">{failure}</span>
         ) : !main ? (
-          <span className={'text-lg ' + (problem?.kind === 'error' ? 'font-semibold text-cut' : 'text-muted')}>{problem?.text ?? 'Working out the plan…'}</span>
+          <span className={`text-lg ${problem?.kind === 'error' ? 'font-semibold text-cut' : 'text-muted'}`}>{problem?.text ?? 'Working out the plan…'}</span>
         ) : main.enough === false ? (
           // Short of cloth there is no line to cut at, here as in the full plan.
           <span data-testid="summary-no-fit" className="text-2xl font-extrabold text-cut">
@@ -50,7 +50,7 @@ export function PlanSummary({ leg, planned }: Props) {
           cut && (
             <>
               <span className="text-lg font-semibold">Cut</span>
-              <span data-testid="summary-cut" className={'measure text-4xl leading-tight font-extrabold ' + (stale ? 'text-muted' : 'text-cut')}>
+              <span data-testid="summary-cut" className={`measure text-4xl leading-tight font-extrabold ${stale ? 'text-muted' : 'text-cut'}`}>
                 {cut.belowMark.text}
               </span>
               <span className="text-base">below the mark</span>

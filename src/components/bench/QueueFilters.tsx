@@ -59,7 +59,7 @@ export function QueueFilters({ value, onChange, who, label }: Props) {
         <span aria-hidden="true">{open ? '▲' : '▼'}</span>
       </button>
       {/* contents: the three filters sit in the form's grid beside the search on wider screens. */}
-      <div id={more} className={'gap-3 max-sm:col-span-2 max-sm:flex-col sm:contents ' + (open ? 'flex' : 'max-sm:hidden')}>
+      <div id={more} className={`gap-3 max-sm:col-span-2 max-sm:flex-col sm:contents ${open ? 'flex' : 'max-sm:hidden'}`}>
         <div className="flex flex-col gap-1">
           <label htmlFor="q-step" className="font-semibold">
             Stage

@@ -23,6 +23,7 @@ interface Props {
   testId: string;
   rows: RankedRow[];
   // any: TanStack's column list mixes value types (strings, numbers, none for the action column)
+  // biome-ignore lint/suspicious/noExplicitAny: as the comment above says
   columns: ColumnDef<RankedRow, any>[];
   hidden: VisibilityState;
   sorting: SortingState;
@@ -108,21 +109,20 @@ export function QueueSection({ title, what, testId, rows, columns, hidden, sorti
           underneath, so "Mark …" and Undo are never cut off; the header row becomes the sort buttons.
           The roles are explicit because a table laid out as blocks and grids can lose them. */}
       <div className="rounded-lg border-2 border-rule bg-card">
-        <table role="table" className="block w-full border-collapse text-left text-lg lg:table">
+        <table className="block w-full border-collapse text-left text-lg lg:table">
           <caption className="sr-only">
             {what}, {shown} shown{pages > 1 ? `, page ${index + 1} of ${pages}` : ''}
           </caption>
-          <thead role="rowgroup" className="block lg:table-header-group">
+          <thead className="block lg:table-header-group">
             {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id} role="row" className={'flex flex-wrap items-center gap-x-3 border-b-2 border-ink px-3 py-1 lg:table-row lg:p-0 ' + SORT_BY}>
+              <tr key={hg.id} className={`flex flex-wrap items-center gap-x-3 border-b-2 border-ink px-3 py-1 lg:table-row lg:p-0 ${SORT_BY}`}>
                 {hg.headers.map((h) => {
                   const sorted = h.column.getIsSorted();
                   return (
                     <th
                       key={h.id}
-                      role="columnheader"
                       scope="col"
-                      className={'block text-base lg:table-cell lg:px-3 lg:py-2 ' + (h.column.getCanSort() ? '' : 'max-lg:sr-only')}
+                      className={`block text-base lg:table-cell lg:px-3 lg:py-2 ${h.column.getCanSort() ? '' : 'max-lg:sr-only'}`}
                       aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
                     >
                       {h.column.getCanSort() ? (
@@ -139,11 +139,11 @@ export function QueueSection({ title, what, testId, rows, columns, hidden, sorti
               </tr>
             ))}
           </thead>
-          <tbody role="rowgroup" className="block lg:table-row-group">
+          <tbody className="block lg:table-row-group">
             {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} role="row" data-testid="queue-row" className={'border-b border-rule ' + CARD}>
+              <tr key={row.id} data-testid="queue-row" className={`border-b border-rule ${CARD}`}>
                 {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} role="cell" className={'block lg:table-cell lg:px-3 lg:py-2 lg:align-middle ' + (CELL[cell.column.id] ?? '')}>
+                  <td key={cell.id} className={`block lg:table-cell lg:px-3 lg:py-2 lg:align-middle ${CELL[cell.column.id] ?? ''}`}>
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>
                 ))}

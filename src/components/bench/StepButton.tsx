@@ -99,7 +99,7 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
       {next && allowed && !blocked && (
         <button
           type="button"
-          className={look + ' aria-disabled:opacity-60'}
+          className={`${look} aria-disabled:opacity-60`}
           // aria-disabled rather than disabled: a disabled button drops the keyboard focus mid-move.
           aria-disabled={busy || undefined}
           onClick={() => !busy && void gate.check(status, next, fittedNow, () => move.mutate({ from: status, to: next }))}

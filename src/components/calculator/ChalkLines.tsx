@@ -34,7 +34,7 @@ export function ChalkLines({ plan }: Props) {
         </thead>
         <tbody>
           {plan.lines.map((l) => (
-            <tr key={l.n} className={'border-b border-rule ' + (l.name === 'cut' ? 'text-cut' : '')}>
+            <tr key={l.n} className={`border-b border-rule ${l.name === 'cut' ? 'text-cut' : ''}`}>
               <th scope="row" className="py-2 pr-2 font-semibold">
                 <span className="mr-2 inline-flex size-8 items-center justify-center rounded-full border-2 border-current text-base">{l.n}</span>{' '}
                 {LINE_NAMES[l.name]}

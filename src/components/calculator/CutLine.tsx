@@ -11,12 +11,12 @@ export function CutLine({ plan, stale }: Props) {
   if (!cut) return null;
   const front = plan.kind === 'hem' && plan.slope.mm !== 0 ? plan.lines.find((l) => l.name === 'cut')?.frontBelowMark : null;
   return (
-    <section aria-labelledby="cut-heading" className={'rounded-lg border-4 bg-card px-5 py-4 break-inside-avoid ' + (stale ? 'border-rule' : 'border-cut')}>
-      <h2 id="cut-heading" className={'text-lg font-extrabold tracking-wide uppercase ' + (stale ? 'text-muted' : 'text-cut')}>
+    <section aria-labelledby="cut-heading" className={`rounded-lg border-4 bg-card px-5 py-4 break-inside-avoid ${stale ? 'border-rule' : 'border-cut'}`}>
+      <h2 id="cut-heading" className={`text-lg font-extrabold tracking-wide uppercase ${stale ? 'text-muted' : 'text-cut'}`}>
         Cut at line {cut.n}
       </h2>
       <p aria-live="polite" aria-atomic="true" className="flex flex-wrap items-baseline gap-x-4">
-        <span data-testid="cut-line" className={'measure text-7xl leading-tight font-extrabold ' + (stale ? 'text-muted' : 'text-cut')}>
+        <span data-testid="cut-line" className={`measure text-7xl leading-tight font-extrabold ${stale ? 'text-muted' : 'text-cut'}`}>
           {cut.belowMark.text}
         </span>
         <span className="text-2xl font-semibold">below the pin mark{front ? ' at the back' : ''}</span>

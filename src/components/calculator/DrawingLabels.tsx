@@ -37,7 +37,7 @@ export function Labels({ labels, x, anchor }: { labels: Label[]; x: number; anch
             {(l.n ?? []).map((n, i) => (
               <Num key={n} n={n} cx={discX + i * 24} cy={l.y - 5} cut={l.cut} />
             ))}
-            <text x={textX} y={l.y} textAnchor={anchor} className={(l.accent ? 'fill-accent font-semibold' : 'fill-ink') + ' text-[15px]'}>
+            <text x={textX} y={l.y} textAnchor={anchor} className={`${l.accent ? 'fill-accent font-semibold' : 'fill-ink'} text-[15px]`}>
               {l.text}
             </text>
           </g>

@@ -39,7 +39,7 @@ export function FlatAndSection({ id, title, desc, unit, lines, rawMm, aboveMm, b
         role="img"
         aria-labelledby={desc ? `${id}-title ${id}-desc` : `${id}-title`}
         data-layout={narrow ? 'stacked' : 'side-by-side'}
-        className={'h-auto w-full print:max-h-[8in] ' + (narrow ? '[&_text]:text-[16px]' : '')}
+        className={`h-auto w-full print:max-h-[8in] ${narrow ? '[&_text]:text-[16px]' : ''}`}
       >
         <title id={`${id}-title`}>{title}</title>
         {desc && <desc id={`${id}-desc`}>{desc}</desc>}

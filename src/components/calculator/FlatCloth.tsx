@@ -52,7 +52,7 @@ export function FlatCloth({ lines, rawMm, aboveMm, s, yMark, x, width, bands = [
               x={x + width / 2}
               y={y((b.from + b.to) / 2) + 5}
               textAnchor="middle"
-              className={(b.accent ? 'fill-accent font-semibold' : 'fill-muted') + ' text-[14px]'}
+              className={`${b.accent ? 'fill-accent font-semibold' : 'fill-muted'} text-[14px]`}
             >
               {b.text}
             </text>
@@ -94,7 +94,7 @@ export function FlatCloth({ lines, rawMm, aboveMm, s, yMark, x, width, bands = [
           <text x={x + width + 16} y={y(l.mm) + 5} textAnchor="middle" className="fill-paper text-[14px] font-extrabold">
             {l.n}
           </text>
-          <text x={x + width + 33} y={y(l.mm) + 5} className={(l.cut ? 'fill-cut' : 'fill-ink') + ' text-[15px] font-semibold'}>
+          <text x={x + width + 33} y={y(l.mm) + 5} className={`${l.cut ? 'fill-cut' : 'fill-ink'} text-[15px] font-semibold`}>
             {l.label} {/* The length under the name: beside it, it ran into the section's labels at the pin mark. */}
             <tspan className="measure font-extrabold" x={x + width + 33} dy={20}>
               {l.text}

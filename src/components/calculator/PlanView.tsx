@@ -55,7 +55,7 @@ export function PlanView({ plan, problem, failure, taper }: Props) {
         </div>
       ) : (
         // Stale: drained of colour, not faded, so every word keeps its contrast (issue 15); the alert above says why.
-        <div className={'flex flex-col gap-4 ' + (stale ? 'grayscale' : '')}>
+        <div className={`flex flex-col gap-4 ${stale ? 'grayscale' : ''}`}>
           {/* Short of cloth, the headline is that it does not fit and what would; never a line to cut at. */}
           {main.enough === false ? <NoFit plan={main} /> : <CutLine plan={main} stale={stale} />}
           <ClothCheck plan={main} />

@@ -167,7 +167,7 @@ export function quickTaper(v: TaperValues): TaperPlan | null {
   const { cuffDepth, hemSection, clothThickness, widthAtEdge, widthAbove, heightAbove, tolerance, seamAllowance } = v;
   if (v.widthAtCut !== null || cuffDepth.big || hemSection.big || clothThickness.big || widthAtEdge.big || widthAbove.big || heightAbove.big || tolerance.big)
     return null;
-  if (seamAllowance !== null && seamAllowance.big) return null;
+  if (seamAllowance?.big) return null;
   // The lengths as numerators over D mm (D: the least common denominator of their denominators).
   let D = lcm(lcm(lcm(cuffDepth.d, hemSection.d), lcm(clothThickness.d, widthAtEdge.d)), lcm(widthAbove.d, tolerance.d));
   if (seamAllowance !== null) D = lcm(D, seamAllowance.d);

@@ -113,11 +113,13 @@ export function quickCreaseLanding(c: number, ctx: QuickCreaseContext): CreaseLa
     return land('behind-cuff', at, say.behindLeg(at.text));
   }
   if (c <= cuffTop) {
+    // biome-ignore lint/complexity/useMathMinMax: integers on the hot path, compared in place
     const h = ratio(c <= d ? c : d, D);
     return land('behind-cuff', h, say.underFace(h.text));
   }
   if (c <= innerFold) {
     const up = innerFold - c;
+    // biome-ignore lint/complexity/useMathMinMax: integers on the hot path, compared in place
     const h = ratio(up <= d ? up : d, D);
     return land('cuff-face', h, say.cuffFace(h.text));
   }

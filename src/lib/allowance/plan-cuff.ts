@@ -142,7 +142,7 @@ export function quickCuff(v: CuffValues): CuffPlan | null {
   const defaults = exactDefaults(v.unit);
   const usual = defaults.usualCuffDepth;
   if (cuffDepth.big || hemSection.big || turnUnder.big || clothThickness.big) return null;
-  if ((available !== null && available.big) || (oldCrease !== null && oldCrease.big) || (slope !== null && slope.big)) return null;
+  if (available?.big || oldCrease?.big || slope?.big) return null;
   let D = lcm(lcm(cuffDepth.d, hemSection.d), lcm(turnUnder.d, clothThickness.d));
   D = lcm(D, DEFAULTS_DENOMINATOR[v.unit]);
   if (available !== null) D = lcm(D, available.d);

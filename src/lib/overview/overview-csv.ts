@@ -41,7 +41,7 @@ export function overviewCsv(o: Overview): string {
     overdue: sum((d) => d.overdue),
     takings: Object.fromEntries(methods.map((m) => [m, sum((d) => d.takings[m] ?? 0)])),
   };
-  return [header.join(','), ...o.days.map((d) => row(d.day, d)), row('total', totals)].join('\r\n') + '\r\n';
+  return `${[header.join(','), ...o.days.map((d) => row(d.day, d)), row('total', totals)].join('\r\n')}\r\n`;
 }
 
 /** The download's file name: the shop's period, e.g. cuffwright-overview-2026-11-30-to-2026-12-06.csv. */

@@ -11,6 +11,7 @@ export function isPathLike(name: string): boolean {
 export function safeName(name: string): string {
   const cleaned = name
     .normalize('NFC')
+    // biome-ignore lint/suspicious/noControlCharactersInRegex: control characters are what is taken out
     .replace(/[\u0000-\u001f\u007f]/g, '')
     .replace(/[^\p{L}\p{N} ._()-]/gu, '_')
     .replace(/\s+/g, ' ')

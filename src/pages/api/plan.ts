@@ -1,6 +1,6 @@
 // POST /api/plan: the public calculator's one endpoint. Parse, ask the engine, answer JSON.
 import {
-  AllowanceError,
+  type AllowanceError,
   checkHemTaper,
   checkTaper,
   isAllowanceError,

@@ -95,7 +95,7 @@ export async function emailReceipt(actor: Actor, ticketId: string, paymentId: st
   const pdf = await renderReceipt(data);
   const amount = formatMoney(payment.amountMinor, summary.currency);
   const text = [
-    `Hello ${summary.ticket.customerName ?? ''}`.trim() + ',',
+    `${`Hello ${summary.ticket.customerName ?? ''}`.trim()},`,
     '',
     `Thank you: ${data.shopName} received ${amount} (${data.payment.how}, ${data.payment.at}) for ticket ${data.ticketNumber}.`,
     summary.due > 0

@@ -148,7 +148,7 @@ export async function applyRefundEvent(tx: Db, object: Stripe.Refund): Promise<s
   const ownId = object.metadata?.refundId;
   const byOwnId = byReference.length === 0 && ownId && isUuid(ownId) ? await tx.select().from(refunds).where(eq(refunds.id, ownId)) : [];
   const known = byReference[0] ?? byOwnId[0];
-  if (!known || known.method !== 'online') return 'Unknown refund.';
+  if (known?.method !== 'online') return 'Unknown refund.';
   // Under the ticket's lock, like every other write to its money.
   await lockTicket(tx, known.shopId, known.ticketId);
   const row = await writeServiceRefund(tx, known.id, object);

@@ -47,7 +47,7 @@ describe('file names', () => {
     expect(safeName('..hidden.jpg')).toBe('hidden.jpg');
     expect(safeName('a\u0000b\u001fc<d>.png')).toBe('abc_d_.png');
     expect(safeName('\u0000')).toBe('photo');
-    expect(safeName('x'.repeat(300) + '.jpg')).toHaveLength(100);
+    expect(safeName(`${'x'.repeat(300)}.jpg`)).toHaveLength(100);
   });
 });
 

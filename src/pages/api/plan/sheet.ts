@@ -44,7 +44,7 @@ async function answer(request: Request, render: Render): Promise<Response> {
   const refused = refusedFields(legs);
   if (Object.keys(refused).length > 0) return problem(422, Object.values(refused)[0]!, refused);
 
-  let sheet;
+  let sheet: ReturnType<typeof buildCutSheet>;
   try {
     sheet = buildCutSheet({ shop: null, ticket: null, garment: null, due: null, assignee: null, pageSize }, legs);
   } catch (e) {
