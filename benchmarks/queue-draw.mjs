@@ -78,7 +78,7 @@ try {
           const t0 = performance.now();
           const obs = new MutationObserver(() => {
             const now = document.querySelector('[data-testid=queue-row]');
-            if (now && now !== before && /Page 2 of/.test(document.body.textContent)) {
+            if (now && now !== before && /Page 2 of/.test(document.body.innerText)) {
               obs.disconnect();
               requestAnimationFrame(() => resolve(performance.now() - t0));
             }

@@ -27,7 +27,7 @@ export function layoutProblems(page: Page): Promise<LayoutProblem[]> {
     const doc = document.documentElement.scrollWidth;
     if (doc > width) problems.push(`page is ${doc} px wide in a ${width} px window`);
     const name = (el: Element) => {
-      const text = (el.getAttribute('aria-label') ?? (el as HTMLElement).textContent ?? '').trim().replace(/\s+/g, ' ').slice(0, 40);
+      const text = (el.getAttribute('aria-label') ?? (el as HTMLElement).innerText ?? '').trim().replace(/\s+/g, ' ').slice(0, 40);
       const id = el.id ? `#${el.id}` : '';
       return `<${el.tagName.toLowerCase()}${id}> "${text}"`;
     };

@@ -34,9 +34,9 @@ describe('the queue in the shop’s own words', () => {
     const numbers = await page.getByTestId('queue-row').locator('td:nth-child(3)').allInnerTexts();
     expect(numbers.length).toBeGreaterThan(0);
     for (const n of numbers) expect(n.trim()).toMatch(TICKET_NO);
-    expect(await page.locator('main').textContent()).not.toMatch(/\bT-\d/);
+    expect(await page.locator('main').innerText()).not.toMatch(/\bT-\d/);
     // The calm marker: a row of stage tacks beside the stage's name; no row has a coloured left edge.
-    expect(await page.getByTestId('stage-marks').first().textContent()).toMatch(/^[●○]{7}$/);
+    expect(await page.getByTestId('stage-marks').first().innerText()).toMatch(/^[●○]{7}$/);
     const edges = await page.getByTestId('queue-row').evaluateAll((rows) => rows.map((r) => parseFloat(getComputedStyle(r).borderLeftWidth)));
     expect(Math.max(...edges)).toBeLessThan(1);
     await page.screenshot({ path: 'test-results/own-words-queue.png', fullPage: true });
@@ -47,9 +47,9 @@ describe('the queue in the shop’s own words', () => {
     const { ticketId } = await someOpenGarment();
     const page = await tabletPage(browser());
     await signInAs(page, 'counter', `/counter/${ticketId}`);
-    const shown = (await page.getByTestId('ticket-number').textContent()).trim();
+    const shown = (await page.getByTestId('ticket-number').innerText()).trim();
     expect(shown).toMatch(TICKET_NO);
-    expect(await page.locator('main').textContent()).not.toMatch(/\bT-\d/);
+    expect(await page.locator('main').innerText()).not.toMatch(/\bT-\d/);
     await page.screenshot({ path: 'test-results/own-words-counter.png', fullPage: true });
     await page.context().close();
   });
@@ -64,8 +64,8 @@ describe('the safety notes and the payment fake’s words', () => {
       await page.goto(path);
       await ready(page);
       const care = page.locator('section[aria-labelledby="care-heading"]');
-      expect(await care.getByRole('heading').textContent()).toBe('Mind your hands');
-      const text = await care.textContent();
+      expect(await care.getByRole('heading').innerText()).toBe('Mind your hands');
+      const text = await care.innerText();
       for (const caution of [
         'Iron and steam',
         'pull the plug before you fill or empty it',
@@ -75,7 +75,7 @@ describe('the safety notes and the payment fake’s words', () => {
         'local rules come first',
       ])
         expect(text).toContain(caution);
-      expect(await page.locator('body').textContent()).not.toContain('Take care');
+      expect(await page.locator('body').innerText()).not.toContain('Take care');
     }
     await page.context().close();
   });
@@ -104,7 +104,7 @@ describe('the safety notes and the payment fake’s words', () => {
         if (!r || r.status() >= 400) continue;
         // Some screens are plain pages with no island to wait for.
         if ((await page.locator('astro-island').count()) > 0) await ready(page);
-        const text = await page.locator('body').textContent();
+        const text = await page.locator('body').innerText();
         for (const words of FAKE_WORDS) expect(text, `${role} on ${path}`).not.toMatch(words);
         seen.push(`${role} ${path}`);
       }
@@ -114,7 +114,7 @@ describe('the safety notes and the payment fake’s words', () => {
     const page = await tabletPage(browser());
     for (const path of ['/paid', '/paid?cancelled', '/sign-in']) {
       await page.goto(path);
-      for (const words of FAKE_WORDS) expect(await page.locator('body').textContent(), path).not.toMatch(words);
+      for (const words of FAKE_WORDS) expect(await page.locator('body').innerText(), path).not.toMatch(words);
     }
     await page.context().close();
     expect(seen.length).toBeGreaterThan(10);

@@ -119,7 +119,7 @@ describe('house presets from the lead to the bench', () => {
     const depth = fitting.getByLabel('Cuff depth', { exact: true });
     // Classic cuff: 1 1/2 in (the house standard, common practice, no source; TRADE.md).
     await fitting.getByText('From house default:').waitFor();
-    expect(await fitting.locator('p', { hasText: 'From house default:' }).textContent()).toContain('Classic cuff (cuff 1 1/2 in)');
+    expect(await fitting.locator('p', { hasText: 'From house default:' }).innerText()).toContain('Classic cuff (cuff 1 1/2 in)');
     expect(await depth.inputValue()).toBe('1 1/2');
     await page.screenshot({ path: 'test-results/presets-new-fitting-default.png', fullPage: true });
     // Both legs start from it.

@@ -62,7 +62,7 @@ describe('bench work and work waiting for pickup', () => {
     const benchRow = atBench.getByTestId('queue-row').filter({ hasText: 'Bench flannels' });
     const readyRow = waiting.getByTestId('queue-row').filter({ hasText: 'Ready chinos' });
     await benchRow.getByText('Overdue').waitFor();
-    expect(await readyRow.getByTestId('ready-age').textContent()).toBe('Ready 3 days');
+    expect(await readyRow.getByTestId('ready-age').innerText()).toBe('Ready 3 days');
     expect(await waiting.getByText('Overdue').count()).toBe(0);
     expect(await atBench.getByText('Ready chinos').count()).toBe(0);
     await page.screenshot({ path: 'test-results/queue-apart.png', fullPage: true });
@@ -104,7 +104,7 @@ describe('the queue’s address', () => {
       expect(await p.getByLabel('Wanted by', { exact: true }).inputValue()).toBe('overdue');
       expect(await p.getByRole('columnheader', { name: 'Ticket no.' }).getAttribute('aria-sort')).toBe('descending');
       // Descending: the later ticket (Sage cords) first.
-      expect(await p.getByTestId('queue-row').first().textContent()).toContain('Sage cords');
+      expect(await p.getByTestId('queue-row').first().innerText()).toContain('Sage cords');
     };
     await page.reload();
     await ready(page);
@@ -151,7 +151,7 @@ describe('the queue on a phone', () => {
     await page.keyboard.press('Enter');
     await expect.poll(() => filters.getAttribute('aria-expanded')).toBe('false');
     // A filter left on says so on the folded button.
-    expect(await filters.textContent()).toContain('1 on');
+    expect(await filters.innerText()).toContain('1 on');
     await page.screenshot({ path: 'test-results/queue-phone-filtered.png' });
     await context.close();
   });
@@ -188,7 +188,7 @@ describe('a long queue', () => {
     await pager.getByText('Page 3 of 3').waitFor();
     expect(await rows.count()).toBe(20);
     // The caption tells a screen reader which part of the list this is.
-    expect(await bench.locator('caption').textContent()).toContain('101–120 of 120 shown, page 3 of 3');
+    expect(await bench.locator('caption').innerText()).toContain('101–120 of 120 shown, page 3 of 3');
 
     // A search narrows the list and starts again from its first page.
     await page.getByLabel('Customer or ticket').fill('Pair 11');
