@@ -101,6 +101,7 @@ function screens(f: Fixture): Record<string, Visit[]> {
       },
     ],
     '404': [{ label: 'not found', path: '/no-such-page' }],
+    'api-reference': [{ label: 'API reference', path: '/api-reference' }],
     bench: [{ label: 'bench', path: '/bench' }],
     'bench-settings': [{ label: 'bench settings', path: '/bench-settings' }],
     'counter/[ticketId]': [

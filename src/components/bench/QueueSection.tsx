@@ -122,7 +122,7 @@ export function QueueSection({ title, what, testId, rows, columns, hidden, sorti
                     <th
                       key={h.id}
                       scope="col"
-                      className={`block text-base lg:table-cell lg:px-3 lg:py-2 ${h.column.getCanSort() ? '' : 'max-lg:sr-only'}`}
+                      className={`block text-base lg:table-cell lg:px-2 lg:py-2 ${h.column.getCanSort() ? '' : 'max-lg:sr-only'}`}
                       aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
                     >
                       {h.column.getCanSort() ? (
@@ -143,7 +143,7 @@ export function QueueSection({ title, what, testId, rows, columns, hidden, sorti
             {table.getRowModel().rows.map((row) => (
               <tr key={row.id} data-testid="queue-row" className={`border-b border-rule ${CARD}`}>
                 {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className={`block lg:table-cell lg:px-3 lg:py-2 lg:align-middle ${CELL[cell.column.id] ?? ''}`}>
+                  <td key={cell.id} className={`block lg:table-cell lg:px-2 lg:py-2 lg:align-middle ${CELL[cell.column.id] ?? ''}`}>
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>
                 ))}
