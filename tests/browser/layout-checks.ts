@@ -36,7 +36,8 @@ export function layoutProblems(page: Page): Promise<LayoutProblem[]> {
       const ox = getComputedStyle(el).overflowX;
       // Exempt: a data table in its own labelled, focusable scroll region (WCAG 1.4.10 lets tables
       // that need two dimensions scroll; the keyboard reaches the region, a screen reader names it).
-      const tableRegion = el.getAttribute('role') === 'region' && el.hasAttribute('aria-label') && el.getAttribute('tabindex') === '0' && el.querySelector(':scope > table');
+      const tableRegion =
+        el.getAttribute('role') === 'region' && el.hasAttribute('aria-label') && el.getAttribute('tabindex') === '0' && el.querySelector(':scope > table');
       if ((ox === 'auto' || ox === 'scroll') && el.scrollWidth > el.clientWidth + 1 && !tableRegion) {
         problems.push(`<${el.tagName.toLowerCase()} class="${el.className}"> scrolls sideways (${el.scrollWidth} px in ${el.clientWidth} px)`);
       }
