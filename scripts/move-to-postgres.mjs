@@ -55,13 +55,20 @@ export async function moveToPostgres({ dataDir, url, log = () => {} }) {
       const order = await tablesInOrder(target);
       await target.query('begin');
       for (const table of order) {
+        // Generated columns are computed by the target again; PostgreSQL refuses a value for them.
+        const { rows: cols } = await target.query(
+          `select column_name as c from information_schema.columns
+           where table_schema = 'public' and table_name = $1 and is_generated = 'NEVER' order by ordinal_position`,
+          [table],
+        );
+        const list = cols.map(({ c }) => quote(c)).join(', ');
         const { rows } = await source.query(`select row_to_json(t)::text as r from ${quote(table)} t`);
         for (let i = 0; i < rows.length; i += CHUNK) {
           const batch = `[${rows
             .slice(i, i + CHUNK)
             .map((r) => r.r)
             .join(',')}]`;
-          await target.query(`insert into ${quote(table)} select * from json_populate_recordset(null::${quote(table)}, $1::json)`, [batch]);
+          await target.query(`insert into ${quote(table)} (${list}) select ${list} from json_populate_recordset(null::${quote(table)}, $1::json)`, [batch]);
         }
         const { rows: count } = await target.query(`select count(*)::int as n from ${quote(table)}`);
         if (count[0].n !== rows.length) throw new Error(`${table}: ${rows.length} rows read, ${count[0].n} written.`);
