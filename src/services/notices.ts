@@ -118,14 +118,15 @@ async function deliver(notice: Notice): Promise<{ providerId: string | null }> {
 }
 
 /** Tries one delivery and records the outcome; a failure schedules the next automatic try. */
-export async function attemptDelivery(notice: Notice): Promise<Notice> {
+export async function attemptDelivery(notice: Notice, now = new Date()): Promise<Notice> {
   const attempts = notice.attempts + 1;
   // The attempt is claimed first, so the timer and a retry by hand at the same moment (on this
   // server or another) send one mail. The claim is a lease: if this server dies before recording
   // the outcome, the notice falls due again when the lease ends and another server's timer sends it.
   const [claimed] = await db
     .update(notices)
-    .set({ attempts, nextAttemptAt: new Date(Date.now() + SEND_LEASE_MS) })
+    // The lease runs on the caller's clock, the one that found the notice due.
+    .set({ attempts, nextAttemptAt: new Date(now.getTime() + SEND_LEASE_MS) })
     .where(and(eq(notices.id, notice.id), eq(notices.attempts, notice.attempts), ne(notices.status, 'sent')))
     .returning({ id: notices.id });
   if (!claimed) {
@@ -141,7 +142,7 @@ export async function attemptDelivery(notice: Notice): Promise<Notice> {
       .returning();
     return row!;
   } catch (e) {
-    const next = attempts < MAX_AUTO_ATTEMPTS ? new Date(Date.now() + BACKOFF_MS * 2 ** (attempts - 1)) : null;
+    const next = attempts < MAX_AUTO_ATTEMPTS ? new Date(now.getTime() + BACKOFF_MS * 2 ** (attempts - 1)) : null;
     const [row] = await db
       .update(notices)
       .set({ status: 'failed', attempts, lastError: String((e as Error).message ?? e).slice(0, 500), nextAttemptAt: next })
@@ -328,7 +329,7 @@ export async function retryDueNotices(now = new Date()): Promise<number> {
     .select()
     .from(notices)
     .where(and(ne(notices.status, 'sent'), lte(notices.nextAttemptAt, now)));
-  for (const n of due) await attemptDelivery(n);
+  for (const n of due) await attemptDelivery(n, now);
   return due.length;
 }
 
