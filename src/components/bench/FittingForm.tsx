@@ -9,7 +9,8 @@ import { PresetPicker, type PresetSettings } from '@/components/presets/PresetPi
 import { usePresets } from '@/components/presets/use-presets';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import type { FittingView } from '@/lib/bench-types';
-import type { PresetView } from '@/lib/preset-settings';
+import { PRESET_LENGTHS, type PresetLength, type PresetView } from '@/lib/preset-settings';
+import { readFinish } from '@/lib/fitting/kinds';
 import { ApiError, fetchJson } from '@/lib/fetch-json';
 import { LEGS, legFormValues, measurementsRequest, type Leg, type LegLength, type Measurements, type MeasurementsInput } from '@/lib/measurement-request';
 import { readLength } from '@/lib/length-reading';
@@ -62,8 +63,8 @@ function withPreset(form: MeasurementsInput, legs: readonly Leg[], preset: Prese
     const typed = next.legs[l];
     typed.preset = preset.name;
     typed.presetId = preset.id;
-    typed.finish = p.finish === 'cuff' ? 'cuff' : p.slope ? 'slope' : 'plain';
-    for (const f of ['cuffDepth', 'hemSection', 'turnUnder', 'hemAllowance', 'slope'] as const) typed[f] = inUnit(p[f], p.unit, next.unit);
+    typed.finish = readFinish(p.finish, Boolean(p.slope)) ?? 'plain';
+    for (const f of Object.keys(PRESET_LENGTHS) as PresetLength[]) typed[f] = inUnit(p[f], p.unit, next.unit);
   }
   return next;
 }

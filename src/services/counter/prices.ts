@@ -6,6 +6,7 @@ import { counterSettings, garments, measurements, priceItems, priceLines, type C
 import { checkTaper } from '@/lib/allowance';
 import type { Actor } from '@/lib/api';
 import { letDownFirst } from '@/lib/existing-finish';
+import { partOf, readFinish } from '@/lib/fitting/kinds';
 import type { autoLinesInput, lineInput, priceListInput, voidLineInput } from '@/lib/counter-request';
 import { isCurrency } from '@/lib/pricing/money';
 import { DEFAULT_PRICE_LABELS, PRICE_KEYS } from '@/lib/pricing/price-keys';
@@ -283,10 +284,10 @@ export async function garmentFacts(shopId: string, ticketId: string): Promise<Ga
   });
 }
 
+// Measurements store cuff|plain|slope, garments cuff|hem: the registry reads both; pricing wants the part.
 function finishOf(value: string | null): GarmentFacts['finish'] {
-  if (value === 'cuff') return 'cuff';
-  if (value === 'hem' || value === 'plain' || value === 'slope') return 'hem';
-  return null;
+  const finish = readFinish(value);
+  return finish ? partOf(finish) : null;
 }
 
 type Stored = Record<string, unknown>;
