@@ -37,9 +37,9 @@ function hemTaperInput(hem: HemInput, widths: TaperWidths) {
   return { unit, precision, hemAllowance, ...widths };
 }
 
-// Spelled out rather than spread: a tapered leg is planned for every sheet, and copying by spread
-// was a tenth of a leg's planning time.
-function taperInput(cuff: CuffInput, widths: TaperWidths): TaperInput {
+/** A cuff's taper check input: the cuff's depth, sections and unit with the leg's widths (spelled
+ * out rather than spread: a tapered leg is planned for every sheet, and a spread cost a tenth of it). */
+export function taperInput(cuff: CuffInput, widths: TaperWidths): TaperInput {
   const input: TaperInput = {
     unit: cuff.unit,
     precision: cuff.precision,
