@@ -4,7 +4,7 @@
 import { isAllowanceError, withUnitsNamed } from '../allowance/index';
 import type { CuffInput, HemInput, Precision, Unit } from '../allowance/types';
 import type { LegOrder, TaperWidths } from '../cut-sheet/build';
-import { FIELD_KEYS, type FieldKey, type Finish } from './kinds';
+import { FIELD_KEYS, fieldsOf, type FieldKey, type Finish } from './kinds';
 import { planLengths, plansOf, type LegTexts } from './plan-lengths';
 
 /** A leg as saved (the API's SavedLeg, or a measurements row): its side, unit, finish and lengths as typed. */
@@ -46,6 +46,9 @@ export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision
   const widths = planLengths(plans.taper, saved.finish, texts, opts.letDown);
   // The pinned length goes on the sheet as typed, in its own unit when the sheet's differs.
   const finished = texts.backPin ? { finished: texts.backPin } : {};
+  // The finish's lengths no plan uses but the bench needs (the registry's 'listed'), as typed.
+  const listed = fieldsOf(saved.finish).filter((f) => f.printed === 'listed' && texts[f.key as FieldKey]);
+  const recorded = listed.length ? { recorded: listed.map((f) => ({ label: f.label, text: texts[f.key as FieldKey]! })) } : {};
   const taper: { taper?: TaperWidths } = widths
     ? {
         taper: {
@@ -57,8 +60,8 @@ export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision
         },
       }
     : {};
-  if (plans.main === 'cuff') return { side: saved.leg, finish: 'cuff', input: { ...scale, ...main } as CuffInput, ...finished, ...taper };
-  return { side: saved.leg, finish: 'hem', input: { ...scale, ...main } as HemInput, ...finished, ...taper };
+  if (plans.main === 'cuff') return { side: saved.leg, finish: 'cuff', input: { ...scale, ...main } as CuffInput, ...finished, ...recorded, ...taper };
+  return { side: saved.leg, finish: 'hem', input: { ...scale, ...main } as HemInput, ...finished, ...recorded, ...taper };
 }
 
 /** True when a saved leg has what its plan needs (a cuff its depth): what the sheet asks of a fitting. */
