@@ -4,7 +4,7 @@ import type { CreaseLanding, CuffLineName, Len, PlanWarning, TaperLine, TaperPla
 import type { ExistingFinish } from '@/lib/existing-finish';
 import { SAFETY_DEFER_SHEET, SAFETY_NOTES } from '../bench-safety';
 import { checkRuler } from './chalk-guide';
-import { finishedLine, finishedText } from './finished-length';
+import { finishedLine, recordedText } from './finished-length';
 import { printedPlan, type PrintedPlan, type PrintedSeamWork } from './printed';
 import type { CutSheetData, LegSheet } from './types';
 
@@ -258,10 +258,10 @@ function sectionsNote(pp: PrintedPlan): string | null {
   return parts.length > 0 ? parts.join(', ') : null;
 }
 
-// Each recorded length as typed, with its reading in the sheet's unit (as the finished length is printed).
+// Each recorded length as typed, with its reading when typed in another unit than the sheet's.
 function recordedNote(leg: LegSheet): string | null {
   if (!leg.recorded?.length) return null;
-  return `Recorded at the fitting: ${leg.recorded.map((r) => `${r.label} ${finishedText(r.text, leg.plan.unit, leg.plan.precision)}`).join('; ')}.`;
+  return `Recorded at the fitting: ${leg.recorded.map((r) => `${r.label} ${recordedText(r.text, leg.plan.unit, leg.plan.precision)}`).join('; ')}.`;
 }
 
 function groupOf(leg: LegSheet, label: string, existing: ExistingFinish | undefined): SheetLegGroup {
