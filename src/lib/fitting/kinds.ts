@@ -135,6 +135,20 @@ const TROUSER_FIELDS = [
     printed: 'plan',
   },
   {
+    // The sheet gives the usual range (1/8 to 3/16 in below the top, TRADE.md); the fitter may choose
+    // one figure (lower on a heavy cloth, or where the customer wants no tack showing at the lip), and
+    // the bench needs that figure where it tacks, not the range.
+    key: 'tackBelowTop',
+    label: 'Tack below the cuff top',
+    hint: 'Where the seam tacks go, below the cuff top. Blank: the usual, a little below the top.',
+    unit: 'length',
+    finishes: ['cuff'],
+    group: 'part',
+    engine: {},
+    preset: true,
+    printed: 'listed',
+  },
+  {
     key: 'available',
     label: 'Cloth below the mark',
     hint: 'From the pin mark to the raw edge, once the old hem is let down.',

@@ -109,3 +109,18 @@ describe('the fitting registry', () => {
     }
   });
 });
+
+describe('the tack height below the cuff top (the registry’s proof field)', () => {
+  it('prints as recorded, with its reading in a metric sheet (3/16 in = 4.7625 mm: 1 in = 25.4 mm, NBS 1959)', () => {
+    const leg: StoredLeg = { leg: 'left', unit: 'in', finish: 'cuff', values: { cuffDepth: { text: '1 1/2' }, tackBelowTop: { text: '3/16' } } };
+    const inches = sheetContent(buildCutSheet({ shop: null, ticket: null, garment: null, due: null, assignee: null }, [savedLegOrder(leg, 'in', 8)!]));
+    expect(inches.groups[0]!.recorded).toBe('Recorded at the fitting: Tack below the cuff top 3/16 in.');
+    const mm = sheetContent(buildCutSheet({ shop: null, ticket: null, garment: null, due: null, assignee: null }, [savedLegOrder(leg, 'mm', 8)!]));
+    expect(mm.groups[0]!.recorded).toBe('Recorded at the fitting: Tack below the cuff top 3/16 in = 5 mm.');
+    // A plain hem has no cuff top: the field is neither asked nor printed.
+    const hem = sheetContent(
+      buildCutSheet({ shop: null, ticket: null, garment: null, due: null, assignee: null }, [savedLegOrder({ ...leg, finish: 'plain' }, 'in', 8)!]),
+    );
+    expect(hem.groups[0]!.recorded).toBeNull();
+  });
+});

@@ -12,6 +12,8 @@ export const FITTING_VALUES: Record<FieldKey, string> = {
   slope: '1/2',
   hemAllowance: '1 1/2',
   turnUnder: '1/2',
+  // TRADE.md: tack about 1/8 to 3/16 in below the cuff top.
+  tackBelowTop: '3/16',
   available: '6',
   oldCrease: '2',
   widthAtEdge: '8',
