@@ -2,7 +2,7 @@
 // and the taper check when the leg widths are given. Which lengths go where is the registry's
 // (fitting/plan-lengths.ts); this adds the kind and the scale. Shared by the garment page and its tests.
 import type { HemTaperInput, Precision, Unit } from '@/lib/allowance/types';
-import { planLengths, plansOf } from './fitting/plan-lengths';
+import { planLengths, planScale, plansOf } from './fitting/plan-lengths';
 import type { LegValues } from './measurement-request';
 import type { PlanRequestInput } from './plan-request';
 
@@ -12,22 +12,18 @@ export interface LegPlanOptions {
   letDown?: boolean;
 }
 
-function scale(unit: Unit, precision: Precision) {
-  return unit === 'in' ? { unit, precision } : { unit };
-}
-
 /** The main plan for a leg, or null while a cuff has no depth yet (a cuff is hemmed level: the front pin is recorded, never turned into a slope). */
 export function legMainRequest(leg: LegValues, unit: Unit, precision: Precision = 8): PlanRequestInput | null {
   const kind = plansOf(leg.finish).main as 'cuff' | 'hem';
   const lengths = planLengths(kind, leg.finish, leg);
-  return lengths && ({ kind, ...scale(unit, precision), ...lengths } as PlanRequestInput);
+  return lengths && ({ kind, ...planScale(unit, precision), ...lengths } as PlanRequestInput);
 }
 
 /** The taper check for a cuffed leg, or null until the depth and all three widths are given. */
 export function legTaperRequest(leg: LegValues, unit: Unit, precision: Precision = 8, opts: LegPlanOptions = {}): PlanRequestInput | null {
   if (leg.finish !== 'cuff') return null;
   const lengths = planLengths('taper', leg.finish, leg, opts.letDown);
-  return lengths && ({ kind: 'taper', ...scale(unit, precision), ...lengths } as PlanRequestInput);
+  return lengths && ({ kind: 'taper', ...planScale(unit, precision), ...lengths } as PlanRequestInput);
 }
 
 /** The note a leg's plan carries when a front pin was taken on a cuffed leg. */
@@ -40,5 +36,5 @@ export function frontPinNote(leg: LegValues): string | null {
 export function legHemTaperRequest(leg: LegValues, unit: Unit, precision: Precision = 8, opts: LegPlanOptions = {}): HemTaperInput | null {
   if (leg.finish === 'cuff') return null;
   const lengths = planLengths('hemTaper', leg.finish, leg, opts.letDown);
-  return lengths && ({ ...scale(unit, precision), ...lengths } as HemTaperInput);
+  return lengths && ({ ...planScale(unit, precision), ...lengths } as HemTaperInput);
 }

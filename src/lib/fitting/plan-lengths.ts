@@ -10,6 +10,11 @@ export function plansOf(finish: Finish): { main: EnginePlan; taper: EnginePlan }
   return partOf(finish) === 'cuff' ? { main: 'cuff', taper: 'taper' } : { main: 'hem', taper: 'hemTaper' };
 }
 
+/** The scale a plan is asked in: inches carry their precision, metric needs none. */
+export function planScale<U extends 'in' | 'cm' | 'mm', P extends number>(unit: U, precision: P): { unit: U; precision?: P } {
+  return unit === 'in' ? { unit, precision } : { unit };
+}
+
 /**
  * The lengths (trimmed) one plan takes from a leg of this finish, or null while a length it needs
  * is blank. Only the finish's own fields are read (a plain hem's slope stays out); the let-down
@@ -18,11 +23,17 @@ export function plansOf(finish: Finish): { main: EnginePlan; taper: EnginePlan }
  */
 export function planLengths(plan: EnginePlan, finish: Finish, texts: LegTexts, letDown = false): Partial<Record<FieldKey, string>> | null {
   const asked = new Set(fieldsOf(finish, true).map((f) => f.key));
+  for (const { key, use } of engineFields(plan)) if (use === 'required' && (!asked.has(key) || (texts[key] ?? '').trim() === '')) return null;
+  return givenLengths(plan, finish, texts, letDown);
+}
+
+/** The lengths given for one plan, as planLengths reads them, without asking for the needed ones (the engine names what is missing). */
+export function givenLengths(plan: EnginePlan, finish: Finish, texts: LegTexts, letDown = false): Partial<Record<FieldKey, string>> {
+  const asked = new Set(fieldsOf(finish, true).map((f) => f.key));
   const measuredAtCut = letDown && (texts.widthAtCut ?? '').trim() !== '';
   const out: Partial<Record<FieldKey, string>> = {};
   for (const { key, use } of engineFields(plan)) {
     const value = (texts[key] ?? '').trim();
-    if (use === 'required' && (value === '' || !asked.has(key))) return null;
     if (value === '' || !asked.has(key) || (use === 'letDown' && !measuredAtCut)) continue;
     out[key] = value;
   }

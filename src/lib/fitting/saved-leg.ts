@@ -1,9 +1,9 @@
 // The one way from a saved leg to the engine's input: the cut sheet and the pricing read the saved
 // lengths straight into the engine's order (no form values, no request body, no second parse of
 // the schema); which length goes where is the registry's. Pure: the engine and the sheet's types only.
-import { isAllowanceError, withUnitsNamed } from '../allowance/index';
 import type { CuffInput, HemInput, Precision, Unit } from '../allowance/types';
 import type { LegOrder, TaperWidths } from '../cut-sheet/build';
+import { typedForUnit } from '../length-reading';
 import { FIELD_KEYS, fieldsOf, type FieldKey, type Finish } from './kinds';
 import { planLengths, plansOf, type LegTexts } from './plan-lengths';
 
@@ -24,14 +24,7 @@ export function savedTexts(saved: StoredLeg, to: Unit): LegTexts {
   const out: LegTexts = {};
   for (const key of FIELD_KEYS) {
     const text = saved.values[key]?.text?.trim();
-    if (!text) continue;
-    try {
-      out[key] = saved.unit === to ? text : withUnitsNamed(text, saved.unit);
-    } catch (e) {
-      // Saved text the reader now refuses is left as typed; the plan's own check names the field.
-      if (!isAllowanceError(e)) throw e;
-      out[key] = text;
-    }
+    if (text) out[key] = typedForUnit(text, saved.unit, to);
   }
   return out;
 }
