@@ -29,7 +29,7 @@ function groupsOf(finish: Finish, letDown: boolean): { title: string; fields: Le
   const fields = fieldsOf(finish, letDown);
   return (Object.keys(GROUPS) as GroupId[])
     .map((g) => ({
-      title: g === 'part' ? KINDS.trousers.parts[partOf(finish)] : GROUPS[g],
+      title: g === 'part' ? KINDS.trousers.parts[partOf(finish)].group : GROUPS[g],
       fields: fields.filter((f) => f.group === g).map((f) => f.key as LegLength),
     }))
     .filter((g) => g.fields.length > 0);

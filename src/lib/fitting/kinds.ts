@@ -26,6 +26,8 @@ export interface FittingField {
   /** the shorter words a preset list uses (default: label) */
   shortLabel?: string;
   hint?: string;
+  /** the hint on the preset form, where it differs (a preset is no one leg) */
+  presetHint?: string;
   unit: UnitKind;
   /** the finishes whose form asks for it */
   finishes: readonly Finish[];
@@ -81,6 +83,7 @@ const TROUSER_FIELDS = [
   {
     key: 'cuffDepth',
     label: 'Cuff depth',
+    presetHint: 'Finished height of the cuff, e.g. 1 1/2 or 38',
     // The form adds the usual depths from the engine's defaults (not imported here: no engine in this file).
     unit: 'length',
     finishes: ['cuff'],
@@ -93,6 +96,7 @@ const TROUSER_FIELDS = [
     key: 'hemSection',
     label: 'Third section',
     hint: 'Blank: the same as the cuff depth.',
+    presetHint: 'Blank: same as the cuff depth',
     unit: 'length',
     finishes: ['cuff'],
     group: 'part',
@@ -105,6 +109,7 @@ const TROUSER_FIELDS = [
     label: 'Slope (lower at the back)',
     shortLabel: 'Slope',
     hint: 'How much lower the back sits; often about 1/2 in.',
+    presetHint: 'How much lower at the back than the front. Blank: level',
     unit: 'length',
     finishes: ['slope'],
     group: 'part',
@@ -116,6 +121,7 @@ const TROUSER_FIELDS = [
     key: 'hemAllowance',
     label: 'Hem allowance',
     hint: 'Blank: 1 1/2 in (40 mm).',
+    presetHint: 'Cloth below the finished edge, turn-under included. Blank: the usual',
     unit: 'length',
     finishes: HEMS,
     group: 'part',
@@ -127,6 +133,7 @@ const TROUSER_FIELDS = [
     key: 'turnUnder',
     label: 'Turn-under',
     hint: 'Blank: the usual.',
+    presetHint: 'Blank: the usual (1/2 in or 12 mm on a cuff, 1/4 in or 6 mm on a hem)',
     unit: 'length',
     finishes: ALL,
     group: 'part',
@@ -232,8 +239,8 @@ export interface GarmentKind {
   label: string;
   /** each finish, in the order offered, with the part it makes and its label on screen */
   finishes: Record<Finish, { part: Part; label: string }>;
-  /** each part's title on the form */
-  parts: Record<Part, string>;
+  /** each part: its name when chosen (presets, intake, pricing) and its group's title on the bench form */
+  parts: Record<Part, { label: string; group: string }>;
   fields: readonly FittingField[];
 }
 
@@ -246,7 +253,7 @@ export const KINDS = {
       plain: { part: 'hem', label: 'Plain hem' },
       slope: { part: 'hem', label: 'Plain, sloped' },
     },
-    parts: { cuff: 'Cuff', hem: 'Hem' },
+    parts: { cuff: { label: 'Cuff', group: 'Cuff' }, hem: { label: 'Plain hem', group: 'Hem' } },
     fields: TROUSER_FIELDS,
   },
 } as const satisfies Record<string, GarmentKind>;
@@ -271,6 +278,9 @@ export const FINISH_IDS = ['cuff', 'plain', 'slope'] as const satisfies readonly
 
 /** The parts (the engine's plans of a finish), in order. */
 export const PART_IDS = ['cuff', 'hem'] as const satisfies readonly Part[];
+
+/** Each part's name when chosen: "Cuff", "Plain hem". */
+export const PART_LABELS: Record<Part, string> = { cuff: KINDS.trousers.parts.cuff.label, hem: KINDS.trousers.parts.hem.label };
 
 /** What a finish makes: a cuff, or a hem (plain or sloped). */
 export function partOf(finish: Finish): Part {

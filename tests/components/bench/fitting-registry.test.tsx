@@ -16,6 +16,8 @@ import { savedLegOrder, type StoredLeg } from '@/lib/fitting/saved-leg';
 import type { AuditEntry, FittingView } from '@/lib/bench-types';
 import { blankLeg, legInput, type MeasurementsInput } from '@/lib/measurement-request';
 import { LENGTHS_OF, presetSettings } from '@/lib/preset-settings';
+import { cuffRequest, hemRequest, hemTaperRequest, taperRequest } from '@/lib/plan-request';
+import { engineFields } from '@/lib/fitting/kinds';
 import { FITTING_VALUES } from './fitting-values';
 
 const text = (html: string) =>
@@ -59,6 +61,15 @@ describe('the fitting registry', () => {
     for (const key of FIELD_KEYS.filter((k) => FIELD[k].preset)) {
       expect(presetSettings.shape, key).toHaveProperty(key);
       for (const finish of FIELD[key].finishes) expect(LENGTHS_OF[partOf(finish)], key).toContain(key);
+    }
+  });
+
+  it('feeds the engine only lengths its plan requests take (POST /api/plan and the engine read the same keys)', () => {
+    const schemas = { cuff: cuffRequest, hem: hemRequest, taper: taperRequest, hemTaper: hemTaperRequest };
+    for (const [plan, schema] of Object.entries(schemas)) {
+      const fields = engineFields(plan as keyof typeof schemas);
+      expect(fields.length, plan).toBeGreaterThan(0);
+      for (const { key } of fields) expect(schema.shape, `${key} in ${plan}`).toHaveProperty(key);
     }
   });
 
