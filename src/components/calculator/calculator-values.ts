@@ -43,5 +43,5 @@ export function mainRequest(v: CalculatorValues): PlanRequestInput {
 /** The taper check for a cuff, or null until the cuff depth and all three taper lengths are typed. */
 export function taperRequest(v: CalculatorValues): PlanRequestInput | null {
   const lengths = v.kind === 'cuff' ? planLengths('taper', 'cuff', v) : null;
-  return lengths && { kind: 'taper', ...planScale(v.unit, v.precision), ...lengths, ...cloth(v) };
+  return lengths && ({ kind: 'taper', ...planScale(v.unit, v.precision), ...lengths, ...cloth(v) } as PlanRequestInput);
 }

@@ -111,8 +111,8 @@ describe('the fitting registry', () => {
         if (f.printed === 'listed') expect(group.recorded, `${key} (${finish})`).toContain(`${f.label} ${value}`);
         if (f.printed !== 'plan') continue;
         const inOrder = [
-          (order.input as Record<string, unknown>)[key],
-          (order.taper as Record<string, unknown> | undefined)?.[key],
+          (order.input as unknown as Record<string, unknown>)[key],
+          (order.taper as unknown as Record<string, unknown> | undefined)?.[key],
           key === 'backPin' ? order.finished : undefined,
         ];
         expect(inOrder, `${key} (${finish})`).toContain(value);
