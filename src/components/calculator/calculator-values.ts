@@ -11,7 +11,14 @@ export type LengthField = FieldKey | 'clothThickness';
 
 /** Every length the form holds, as typed: what the cuff, hem and taper plans take (not a let-down pair's), and the turn of cloth. */
 export const LENGTH_FIELDS: readonly LengthField[] = [
-  ...new Set([...(['cuff', 'hem', 'taper'] as const).flatMap((p) => engineFields(p).filter((f) => f.use !== 'letDown').map((f) => f.key)), 'clothThickness' as const]),
+  ...new Set([
+    ...(['cuff', 'hem', 'taper'] as const).flatMap((p) =>
+      engineFields(p)
+        .filter((f) => f.use !== 'letDown')
+        .map((f) => f.key),
+    ),
+    'clothThickness' as const,
+  ]),
 ];
 
 /** Everything the calculator's form holds: the finish, the unit and the lengths as typed. */

@@ -3,7 +3,6 @@ import { Field } from '@/components/Field';
 import { FIELD, type Part } from '@/lib/fitting/kinds';
 import { LENGTHS_OF, PRESET_LENGTHS } from '@/lib/preset-settings';
 
-
 type WithSettings = { settings: Record<string, unknown> };
 
 /** The length fields a finish uses, each labelled with its unit. */

@@ -304,8 +304,7 @@ export function fieldsOf(finish: Finish, letDown = false): FittingField[] {
 
 /** The fields a preset may hold, for a part (a cuff is hemmed level: slope is a hem's only). */
 export function presetFieldsOf(part: Part): PresetFieldKey[] {
-  return TROUSER_FIELDS.filter(
-(f) => f.preset && (f.finishes as readonly Finish[]).some((x) => partOf(x) === part)).map((f) => f.key as PresetFieldKey);
+  return TROUSER_FIELDS.filter((f) => f.preset && (f.finishes as readonly Finish[]).some((x) => partOf(x) === part)).map((f) => f.key as PresetFieldKey);
 }
 
 /** The fields an engine plan takes, with how it takes each. */

@@ -2,7 +2,17 @@
 import { and, asc, eq, inArray, isNull } from 'drizzle-orm';
 import type { z } from 'zod';
 import { db, type Db } from '@/db';
-import { counterSettings, garments, measurements, priceItems, priceLines, type CounterSettings, type MeasurementRow, type PriceLine, type Ticket } from '@/db/schema';
+import {
+  counterSettings,
+  garments,
+  measurements,
+  priceItems,
+  priceLines,
+  type CounterSettings,
+  type MeasurementRow,
+  type PriceLine,
+  type Ticket,
+} from '@/db/schema';
 import { checkTaper } from '@/lib/allowance';
 import type { Actor } from '@/lib/api';
 import { letDownFirst } from '@/lib/existing-finish';

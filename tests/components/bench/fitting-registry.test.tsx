@@ -29,9 +29,7 @@ const text = (html: string) =>
 
 function Form({ finish }: { finish: Finish }) {
   const { register } = useForm<MeasurementsInput>({ defaultValues: { unit: 'in', legs: { left: blankLeg(finish), right: blankLeg(finish) } } });
-  return (
-    <LegFields leg="left" finish={finish} unit="in" register={register} onFinish={() => {}} errorFor={() => undefined} readingFor={() => null} letDown />
-  );
+  return <LegFields leg="left" finish={finish} unit="in" register={register} onFinish={() => {}} errorFor={() => undefined} readingFor={() => null} letDown />;
 }
 
 function stored(finish: Finish): StoredLeg {
