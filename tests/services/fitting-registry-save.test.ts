@@ -1,5 +1,6 @@
 // Every field of the fitting registry is saved and read back (measurements.values is jsonb: one
-// key per field, so a new field needs no column), for each finish that asks for it.
+// key per field, so a new field needs no column), for each finish that asks for it; a recorded
+// field is on the garment's printed cut sheet.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import type { Shop } from './fixtures';
 import { FITTING_VALUES } from '../components/bench/fitting-values';
@@ -11,6 +12,8 @@ const { fittingOf } = await import('@/services/measurements');
 const { makeShop } = await import('./fixtures');
 const { fittingRequest, openTicket, saveFitting } = await import('./garment-fixtures');
 const { fieldsOf, FINISH_IDS } = await import('@/lib/fitting/kinds');
+const { garmentSheet } = await import('@/services/cut-sheets');
+const { flatText, pdfFile } = await import('../lib/cut-sheet/poppler');
 
 let a: Shop;
 
@@ -33,6 +36,11 @@ describe('every registry field', () => {
         expect(left.values[k]?.text, `${k} (${finish})`).toBe(FITTING_VALUES[k]);
         expect(changed.has(k), `${k} in the history (${finish})`).toBe(true);
       }
+      // The garment's printed sheet carries each recorded ('listed') field, as typed with its unit.
+      const listed = fieldsOf(finish).filter((f) => f.printed === 'listed');
+      if (listed.length === 0) continue;
+      const sheet = flatText(pdfFile((await garmentSheet(a.tailor, garment.id, {}, 'https://bench.cuffwright.test')).bytes));
+      for (const f of listed) expect(sheet, `${f.key} printed (${finish})`).toContain(`${f.label} ${FITTING_VALUES[f.key as keyof typeof FITTING_VALUES]} in`);
     }
   });
 });
