@@ -47,9 +47,10 @@ const optionalText = (max: number, message: string) =>
 /** A new customer typed at intake: the one customer schema (customer-request.ts). */
 export { newCustomer, customerPatch } from './customer-request';
 import { newCustomer } from './customer-request';
+import type { Part } from './fitting/kinds';
 
 /** The finishes a garment can be priced for at intake, before the fitting decides (an estimate). */
-export const INTAKE_FINISHES = ['hem', 'cuff'] as const;
+export const INTAKE_FINISHES = ['hem', 'cuff'] as const satisfies readonly Part[];
 
 /** A garment as intake takes it in, priced there when the counter picks its finish or kinds of work. */
 export const intakeGarment = garmentInput.extend({

@@ -4,7 +4,8 @@
 import Fraction from 'fraction.js';
 import { formatExact } from './allowance/format-length';
 import { readLengthTerms, termUnits } from './allowance/length-terms';
-import { checkRange, termMm } from './allowance/parse-length';
+import { isAllowanceError } from './allowance/allowance-error';
+import { checkRange, termMm, withUnitsNamed } from './allowance/parse-length';
 import type { Precision, Unit } from './allowance/types';
 
 /** The exact length in mm of typed text in a unit, or null when it is blank or cannot be read. */
@@ -37,6 +38,21 @@ export function namesUnit(text: string): boolean {
 /** A typed length with the unit it was typed in: its own when it names one, else the form's. */
 export function typedWithUnit(text: string, unit: Unit): string {
   return namesUnit(text) ? text : `${text} ${unit}`;
+}
+
+/**
+ * Typed text to be read in another unit than it was typed in: every bare part gets the unit it was
+ * typed in ("30 + 5 mm" typed in inches → "30 in + 5 mm"), so it reads exactly, never from a rounded
+ * figure. The same unit, or text the reader refuses, comes back as typed (the plan's check names it).
+ */
+export function typedForUnit(text: string, from: Unit, to: Unit): string {
+  if (from === to || text.trim() === '') return text;
+  try {
+    return withUnitsNamed(text, from);
+  } catch (e) {
+    if (!isAllowanceError(e)) throw e;
+    return text;
+  }
 }
 
 /** A typed length carried to another unit: its exact value written as the new unit writes it, or unchanged (ok false) when it does not read. */

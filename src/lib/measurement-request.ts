@@ -4,57 +4,28 @@
 import { z } from 'zod';
 import { text } from './text';
 import { unitSchema } from './plan-request';
+import { FIELD, FIELD_KEYS, FINISH_IDS, KINDS, type FieldKey, type Finish as RegistryFinish } from './fitting/kinds';
 
 /** The two legs, left first; they are measured apart because they can differ. */
 export const LEGS = ['left', 'right'] as const;
 /** A leg. */
 export type Leg = (typeof LEGS)[number];
 
-/** How a leg is finished. */
-export const FINISHES = ['cuff', 'plain', 'slope'] as const;
+/** How a leg is finished (the registry's finishes). */
+export const FINISHES = FINISH_IDS;
 /** A finish. */
-export type Finish = (typeof FINISHES)[number];
+export type Finish = RegistryFinish;
 
 /** Each finish on screen. */
-export const FINISH_LABELS: Record<Finish, string> = { cuff: 'Cuff', plain: 'Plain hem', slope: 'Plain, sloped' };
+export const FINISH_LABELS: Record<Finish, string> = Object.fromEntries(FINISH_IDS.map((f) => [f, KINDS.trousers.finishes[f].label])) as Record<Finish, string>;
 
-/** Every length a leg can record, in the order the form asks for them. */
-export const LEG_LENGTHS = [
-  'backPin',
-  'frontPin',
-  'cuffDepth',
-  'hemSection',
-  'turnUnder',
-  'hemAllowance',
-  'slope',
-  'available',
-  'oldCrease',
-  'widthAtEdge',
-  'widthAbove',
-  'heightAbove',
-  'widthAtCut',
-  'seamAllowance',
-] as const;
+/** Every length a leg can record, in the order the form asks for them (from the registry). */
+export const LEG_LENGTHS = FIELD_KEYS;
 /** One recorded length of a leg. */
-export type LegLength = (typeof LEG_LENGTHS)[number];
+export type LegLength = FieldKey;
 
 /** Each length's label, in trade words. */
-export const LEG_LENGTH_LABELS: Record<LegLength, string> = {
-  backPin: 'Pin at the back (finished length)',
-  frontPin: 'Front pin',
-  cuffDepth: 'Cuff depth',
-  hemSection: 'Third section',
-  turnUnder: 'Turn-under',
-  hemAllowance: 'Hem allowance',
-  slope: 'Slope (lower at the back)',
-  available: 'Cloth below the mark',
-  oldCrease: 'Old crease below the mark',
-  widthAtEdge: 'Width at the finished edge (flat)',
-  widthAbove: 'Width higher up (flat)',
-  heightAbove: 'Height of that width above the edge',
-  widthAtCut: 'Width at the cutting line (flat)',
-  seamAllowance: 'Seam allowance at each seam',
-};
+export const LEG_LENGTH_LABELS: Record<LegLength, string> = Object.fromEntries(FIELD_KEYS.map((k) => [k, FIELD[k].label])) as Record<LegLength, string>;
 
 const length = (what: string) =>
   text({ error: `${what}: type a length such as 1 1/2 or 38.` })

@@ -2,6 +2,7 @@
 // the server. Only the shape is checked here: what a length means is the engine's call (server).
 import { z } from 'zod';
 import { text } from './text';
+import { FIELD, FIELD_KEYS, PART_IDS, presetFieldsOf, type Part, type PresetFieldKey } from './fitting/kinds';
 
 const MAX_TEXT = 40;
 
@@ -13,33 +14,22 @@ function length(what: string) {
     .optional();
 }
 
-/** The lengths a preset can carry, with the words shown for each. */
-export const PRESET_LENGTHS = {
-  cuffDepth: 'Cuff depth',
-  hemSection: 'Third section',
-  turnUnder: 'Turn-under',
-  hemAllowance: 'Hem allowance',
-  slope: 'Slope',
-} as const;
+const PRESET_KEYS = FIELD_KEYS.filter((k) => FIELD[k].preset) as PresetFieldKey[];
+
+/** The lengths a preset can carry, with the words shown for each (from the fitting registry). */
+export const PRESET_LENGTHS = Object.fromEntries(PRESET_KEYS.map((k) => [k, FIELD[k].shortLabel ?? FIELD[k].label])) as Record<PresetFieldKey, string>;
 
 /** A preset's length field name. */
-export type PresetLength = keyof typeof PRESET_LENGTHS;
+export type PresetLength = PresetFieldKey;
 
-/** Which lengths each finish uses (a cuff is hemmed level: no slope). */
-export const LENGTHS_OF: Record<'cuff' | 'hem', PresetLength[]> = {
-  cuff: ['cuffDepth', 'hemSection', 'turnUnder'],
-  hem: ['hemAllowance', 'turnUnder', 'slope'],
-};
+/** Which lengths each part uses (a cuff is hemmed level: no slope). */
+export const LENGTHS_OF: Record<Part, PresetLength[]> = { cuff: presetFieldsOf('cuff'), hem: presetFieldsOf('hem') };
 
 /** The settings a preset fills into a leg's plan; lengths as typed, in the preset's unit. */
 export const presetSettings = z.object({
-  finish: z.enum(['cuff', 'hem'], { error: 'Choose a cuff or a plain hem.' }),
+  finish: z.enum(PART_IDS, { error: 'Choose a cuff or a plain hem.' }),
   unit: z.enum(['in', 'cm', 'mm'], { error: 'Choose inches, cm or mm.' }),
-  cuffDepth: length('Cuff depth'),
-  hemSection: length('Third section'),
-  turnUnder: length('Turn-under'),
-  hemAllowance: length('Hem allowance'),
-  slope: length('Slope'),
+  ...(Object.fromEntries(PRESET_KEYS.map((k) => [k, length(PRESET_LENGTHS[k])])) as Record<PresetLength, ReturnType<typeof length>>),
 });
 
 /** Preset settings as checked (blank lengths dropped). */
@@ -71,7 +61,7 @@ export interface PresetView {
 }
 
 /** The fields of a preset whose edits are kept in its history (old → new). */
-export const PRESET_FIELDS = { name: 'Name', finish: 'Finish', unit: 'Unit', isDefault: 'House default', ...PRESET_LENGTHS } as const;
+export const PRESET_FIELDS: Record<string, string> = { name: 'Name', finish: 'Finish', unit: 'Unit', isDefault: 'House default', ...PRESET_LENGTHS };
 
 /** One kept edit of a preset: who changed which field, when, from what to what. */
 export interface PresetChange {

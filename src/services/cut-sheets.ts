@@ -5,18 +5,18 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import { db } from '@/db';
 import { customers, garments, tickets, user, type Garment } from '@/db/schema';
-import { isAllowanceError, withUnitsNamed } from '@/lib/allowance';
+import { isAllowanceError } from '@/lib/allowance';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import type { Actor } from '@/lib/api';
 import { scaleUnit } from '@/lib/bench-requests';
 import { ticketLabel } from '@/lib/ticket-number';
 import { buildCutSheet, refusedFields, type LegOrder, type SheetHeader } from '@/lib/cut-sheet/build';
 import { renderInPool, streamInPool } from '@/lib/cut-sheet/render-off-thread';
-import type { CutSheetData, PageSize, Side } from '@/lib/cut-sheet/types';
+import type { CutSheetData, PageSize } from '@/lib/cut-sheet/types';
 import { letDownFirst } from '@/lib/existing-finish';
-import { legHemTaperRequest, legMainRequest, legTaperRequest, type LegPlanOptions } from '@/lib/leg-plan';
-import { legFormValues, type LegValues, LEG_LENGTHS, type SavedLeg } from '@/lib/measurement-request';
-import { planRequest } from '@/lib/plan-request';
+import { savedLegOrder } from '@/lib/fitting/saved-leg';
+import type { LegPlanOptions } from '@/lib/leg-plan';
+import type { SavedLeg } from '@/lib/measurement-request';
 import type { QueueRow } from '@/lib/bench-types';
 import { filterQueue, type QueueFilter } from '@/lib/queue-filter';
 import { ServiceError } from './errors';
@@ -64,80 +64,14 @@ async function scaleOf(shopId: string, opts: SheetOptions): Promise<{ unit: Unit
   return { unit, precision, pageSize: opts.pageSize ?? 'LETTER' };
 }
 
-// A fitting typed in one unit and printed in another: the typed text keeps its own unit, so the
-// engine reads it exactly ("1 1/2 in" in a mm plan is 38.1 mm) rather than from a rounded mm.
-// Every bare part gets the fitting's unit ("30 + 5 mm" typed in inches is 30 in + 5 mm).
-function inUnit(leg: LegValues, from: Unit, to: Unit): LegValues {
-  if (from === to) return leg;
-  const out = { ...leg };
-  for (const f of LEG_LENGTHS) {
-    const text = out[f].trim();
-    if (text === '') continue;
-    try {
-      out[f] = withUnitsNamed(text, from);
-    } catch (e) {
-      // Saved text the reader now refuses is left as typed; the plan's own check names the field.
-      if (!isAllowanceError(e)) throw e;
-    }
-  }
-  return out;
-}
-
-/** The engine's orders for both legs of a saved fitting, or a refusal saying what is missing (a let-down pair's measured width at the cut used). */
+/** The engine's orders for both legs of a saved fitting, read straight from the saved lengths, or a refusal saying what is missing (a let-down pair's measured width at the cut used). */
 export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precision, opts: LegPlanOptions = {}): LegOrder[] {
   if (saved.length === 0) throw new ServiceError(422, NO_FITTING);
   const orders: LegOrder[] = [];
   for (const s of saved) {
-    const side: Side = s.leg;
-    const leg = inUnit(legFormValues(s), s.unit, unit);
-    const main = legMainRequest(leg, unit, precision);
-    if (!main) throw new ServiceError(422, `The ${side} leg has no cuff depth yet: finish the fitting first.`);
-    const parsed = planRequest.parse(main);
-    // The pinned length goes on the sheet as typed, in its own unit when the sheet's differs.
-    const finished = leg.backPin.trim() ? { finished: leg.backPin.trim() } : {};
-    if (parsed.kind === 'cuff') {
-      const { kind: _k, ...input } = parsed;
-      const taperReq = legTaperRequest(leg, unit, precision, opts);
-      const taper = taperReq ? planRequest.parse(taperReq) : null;
-      orders.push(
-        taper?.kind === 'taper'
-          ? {
-              side,
-              finish: 'cuff',
-              input,
-              ...finished,
-              taper: {
-                widthAtEdge: taper.widthAtEdge,
-                widthAbove: taper.widthAbove,
-                heightAbove: taper.heightAbove,
-                seamAllowance: taper.seamAllowance,
-                widthAtCut: taper.widthAtCut,
-              },
-            }
-          : { side, finish: 'cuff', input, ...finished },
-      );
-    } else if (parsed.kind === 'hem') {
-      const { kind: _k, ...input } = parsed;
-      // A plain hem on a tapered leg is checked too: the hem turned up must lie flat.
-      const widths = legHemTaperRequest(leg, unit, precision, opts);
-      orders.push(
-        widths
-          ? {
-              side,
-              finish: 'hem',
-              input,
-              taper: {
-                widthAtEdge: widths.widthAtEdge,
-                widthAbove: widths.widthAbove,
-                heightAbove: widths.heightAbove,
-                seamAllowance: widths.seamAllowance,
-                widthAtCut: widths.widthAtCut,
-              },
-              ...finished,
-            }
-          : { side, finish: 'hem', input, ...finished },
-      );
-    }
+    const order = savedLegOrder(s, unit, precision, opts);
+    if (!order) throw new ServiceError(422, `The ${s.leg} leg has no cuff depth yet: finish the fitting first.`);
+    orders.push(order);
   }
   const refused = refusedFields(orders);
   const first = Object.entries(refused)[0];

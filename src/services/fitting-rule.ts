@@ -5,15 +5,15 @@ import type { Db } from '@/db';
 import { garments, measurements, shopSettings } from '@/db/schema';
 import { DEFAULT_FITTING_RULE, noFittingRefusal, passesMarked, type FittingRule } from '@/lib/fitting-rule';
 import { stepLabel, type GarmentStep } from '@/lib/garment-steps';
-import { legMainRequest } from '@/lib/leg-plan';
-import { legFormValues, type SavedLeg } from '@/lib/measurement-request';
+import { canBePlanned } from '@/lib/fitting/saved-leg';
+import type { SavedLeg } from '@/lib/measurement-request';
 import { ServiceError } from './errors';
 
 type SavedForPlan = Pick<SavedLeg, 'finish' | 'preset' | 'values' | 'unit'>;
 
 /** True when a saved fitting can be cut by: legs saved and each has a plan (what its cut sheet needs). */
 export function isFitted(legs: readonly SavedForPlan[]): boolean {
-  return legs.length > 0 && legs.every((l) => legMainRequest(legFormValues(l as SavedLeg), l.unit) !== null);
+  return legs.length > 0 && legs.every((l) => canBePlanned(l));
 }
 
 /** The ids among `garmentIds` whose fitting is saved and can be cut by (one query). */

@@ -9,10 +9,11 @@ import { PresetPicker, type PresetSettings } from '@/components/presets/PresetPi
 import { usePresets } from '@/components/presets/use-presets';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import type { FittingView } from '@/lib/bench-types';
-import type { PresetView } from '@/lib/preset-settings';
+import { PRESET_LENGTHS, type PresetLength, type PresetView } from '@/lib/preset-settings';
+import { readFinish } from '@/lib/fitting/kinds';
 import { ApiError, fetchJson } from '@/lib/fetch-json';
 import { LEGS, legFormValues, measurementsRequest, type Leg, type LegLength, type Measurements, type MeasurementsInput } from '@/lib/measurement-request';
-import { readLength } from '@/lib/length-reading';
+import { readLength, typedForUnit } from '@/lib/length-reading';
 import { afterSave } from './after-save';
 import { LegFields } from './LegFields';
 import { LegPlanView } from './LegPlan';
@@ -48,12 +49,6 @@ function presetLine(preset: PresetView | undefined): string {
   return main ? `(${main})` : '';
 }
 
-/** Typed text from a preset, carrying the preset's unit when it differs from the form's. */
-function inUnit(text: string | undefined, from: Unit, to: Unit): string {
-  if (!text) return '';
-  return from === to || /[a-z"″]/i.test(text) ? text : `${text} ${from}`;
-}
-
 /** The form with a preset's finish and lengths on the given legs (its id recorded, its name shown). */
 function withPreset(form: MeasurementsInput, legs: readonly Leg[], preset: PresetView): MeasurementsInput {
   const next = structuredClone(form);
@@ -62,8 +57,8 @@ function withPreset(form: MeasurementsInput, legs: readonly Leg[], preset: Prese
     const typed = next.legs[l];
     typed.preset = preset.name;
     typed.presetId = preset.id;
-    typed.finish = p.finish === 'cuff' ? 'cuff' : p.slope ? 'slope' : 'plain';
-    for (const f of ['cuffDepth', 'hemSection', 'turnUnder', 'hemAllowance', 'slope'] as const) typed[f] = inUnit(p[f], p.unit, next.unit);
+    typed.finish = readFinish(p.finish, Boolean(p.slope)) ?? 'plain';
+    for (const f of Object.keys(PRESET_LENGTHS) as PresetLength[]) typed[f] = typedForUnit(p[f] ?? '', p.unit, next.unit);
   }
   return next;
 }

@@ -4,12 +4,12 @@
 import type { AsJson } from '@/lib/as-json';
 import type { PriceListView } from '@/lib/counter-views';
 import { INTAKE_FINISHES } from '@/lib/bench-requests';
+import { PART_LABELS } from '@/lib/fitting/kinds';
 import type { ExistingFinish } from '@/lib/existing-finish';
 import { formatMoney } from '@/lib/pricing/money';
 import { isRushableWork, priceTicket, sumMinor, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
 
 type List = AsJson<PriceListView>;
-const FINISH_LABELS: Record<(typeof INTAKE_FINISHES)[number], string> = { hem: 'Plain hem', cuff: 'Cuff' };
 const SELECT = 'min-h-12 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent';
 
 /** What the estimate needs of one garment as typed. */
@@ -48,7 +48,7 @@ export function GarmentPricing({
           <option value="">Not priced until the fitting</option>
           {INTAKE_FINISHES.map((f) => (
             <option key={f} value={f}>
-              {FINISH_LABELS[f]}
+              {PART_LABELS[f]}
             </option>
           ))}
         </select>

@@ -1,25 +1,25 @@
-// The calculator form's state and how it becomes requests for POST /api/plan.
+// The calculator form's state and how it becomes requests for POST /api/plan. Which length goes
+// into which plan is the fitting registry's (the bench's leg plans read the same); the calculator
+// adds only the turn of cloth, which the bench does not ask.
 import type { Precision, Unit } from '@/lib/allowance/types';
+import { engineFields, FIELD_KEYS, type FieldKey } from '@/lib/fitting/kinds';
+import { givenLengths, planLengths, planScale } from '@/lib/fitting/plan-lengths';
 import type { PlanRequestInput } from '@/lib/plan-request';
 
-/** Every length the form holds, as typed. */
-export const LENGTH_FIELDS = [
-  'cuffDepth',
-  'hemSection',
-  'turnUnder',
-  'available',
-  'oldCrease',
-  'clothThickness',
-  'hemAllowance',
-  'slope',
-  'widthAtEdge',
-  'widthAbove',
-  'heightAbove',
-  'seamAllowance',
-] as const;
+/** The name of one length field of the form: a registry field, or the turn of cloth. */
+export type LengthField = FieldKey | 'clothThickness';
 
-/** The name of one length field of the form. */
-export type LengthField = (typeof LENGTH_FIELDS)[number];
+/** Every length the form holds, as typed: what the cuff, hem and taper plans take (not a let-down pair's), and the turn of cloth. */
+export const LENGTH_FIELDS: readonly LengthField[] = [
+  ...new Set([
+    ...(['cuff', 'hem', 'taper'] as const).flatMap((p) =>
+      engineFields(p)
+        .filter((f) => f.use !== 'letDown')
+        .map((f) => f.key),
+    ),
+    'clothThickness' as const,
+  ]),
+];
 
 /** Everything the calculator's form holds: the finish, the unit and the lengths as typed. */
 export type CalculatorValues = {
@@ -33,43 +33,22 @@ export const BLANK: CalculatorValues = {
   kind: 'cuff',
   unit: 'in',
   precision: 8,
-  ...(Object.fromEntries(LENGTH_FIELDS.map((f) => [f, ''])) as Record<LengthField, string>),
+  // Every registry field too (the bench's own ones stay blank here): the values are one complete record.
+  ...(Object.fromEntries([...FIELD_KEYS, 'clothThickness'].map((f) => [f, ''])) as Record<LengthField, string>),
 };
 
-function pick(v: CalculatorValues, fields: readonly LengthField[]): Partial<Record<LengthField, string>> {
-  const out: Partial<Record<LengthField, string>> = {};
-  for (const f of fields) if (v[f].trim() !== '') out[f] = v[f];
-  return out;
-}
+const cloth = (v: CalculatorValues) => (v.clothThickness.trim() ? { clothThickness: v.clothThickness } : {});
 
-function scale(v: CalculatorValues) {
-  return v.unit === 'in' ? { unit: v.unit, precision: v.precision } : { unit: v.unit };
-}
-
-/** The request for the main plan (a cuff or a plain hem), blank fields left out. */
+/** The request for the main plan (a cuff, or a plain hem that slopes when a slope is typed), blank fields left out. */
 export function mainRequest(v: CalculatorValues): PlanRequestInput {
-  if (v.kind === 'hem') {
-    return { kind: 'hem', ...scale(v), ...pick(v, ['hemAllowance', 'turnUnder', 'available', 'slope']) };
-  }
-  return {
-    kind: 'cuff',
-    ...scale(v),
-    cuffDepth: v.cuffDepth,
-    ...pick(v, ['hemSection', 'turnUnder', 'available', 'clothThickness', 'oldCrease']),
-  };
+  const scale = planScale(v.unit, v.precision);
+  if (v.kind === 'hem') return { kind: 'hem', ...scale, ...givenLengths('hem', 'slope', v) };
+  // The depth is always sent: the server's message asks for it when it is blank.
+  return { kind: 'cuff', ...scale, ...givenLengths('cuff', 'cuff', v), cuffDepth: v.cuffDepth, ...cloth(v) };
 }
 
 /** The taper check for a cuff, or null until the cuff depth and all three taper lengths are typed. */
 export function taperRequest(v: CalculatorValues): PlanRequestInput | null {
-  const needed: LengthField[] = ['cuffDepth', 'widthAtEdge', 'widthAbove', 'heightAbove'];
-  if (v.kind !== 'cuff' || needed.some((f) => v[f].trim() === '')) return null;
-  return {
-    kind: 'taper',
-    ...scale(v),
-    cuffDepth: v.cuffDepth,
-    widthAtEdge: v.widthAtEdge,
-    widthAbove: v.widthAbove,
-    heightAbove: v.heightAbove,
-    ...pick(v, ['hemSection', 'seamAllowance', 'clothThickness']),
-  };
+  const lengths = v.kind === 'cuff' ? planLengths('taper', 'cuff', v) : null;
+  return lengths && ({ kind: 'taper', ...planScale(v.unit, v.precision), ...lengths, ...cloth(v) } as PlanRequestInput);
 }

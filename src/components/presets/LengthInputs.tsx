@@ -1,14 +1,7 @@
 import type { UseFormRegister, FieldErrors } from 'react-hook-form';
 import { Field } from '@/components/Field';
+import { FIELD, type Part } from '@/lib/fitting/kinds';
 import { LENGTHS_OF, PRESET_LENGTHS } from '@/lib/preset-settings';
-
-const HINTS: Record<string, string> = {
-  cuffDepth: 'Finished height of the cuff, e.g. 1 1/2 or 38',
-  hemSection: 'Blank: same as the cuff depth',
-  turnUnder: 'Blank: the usual (1/2 in or 12 mm on a cuff, 1/4 in or 6 mm on a hem)',
-  hemAllowance: 'Cloth below the finished edge, turn-under included. Blank: the usual',
-  slope: 'How much lower at the back than the front. Blank: level',
-};
 
 type WithSettings = { settings: Record<string, unknown> };
 
@@ -20,7 +13,7 @@ export function LengthInputs<T extends WithSettings>({
   errors,
   idPrefix,
 }: {
-  finish: 'cuff' | 'hem';
+  finish: Part;
   unit: string;
   register: UseFormRegister<T>;
   errors: FieldErrors<T>;
@@ -34,7 +27,7 @@ export function LengthInputs<T extends WithSettings>({
           key={k}
           id={`${idPrefix}-${k}`}
           label={`${PRESET_LENGTHS[k]} (${unit})`}
-          hint={HINTS[k]}
+          hint={FIELD[k].presetHint ?? FIELD[k].hint}
           inputMode="text"
           autoComplete="off"
           spellCheck={false}

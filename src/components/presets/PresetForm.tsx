@@ -7,15 +7,13 @@ import { Segmented } from '@/components/calculator/Segmented';
 import { Field, FormMessage, SubmitButton } from '@/components/Field';
 import { ApiError } from '@/lib/fetch-json';
 import { presetCreateInput, type PresetView } from '@/lib/preset-settings';
+import { PART_IDS, PART_LABELS } from '@/lib/fitting/kinds';
 import { LengthInputs } from './LengthInputs';
 import { useCreatePreset, useUpdatePreset } from './use-presets';
 
 type Input = z.input<typeof presetCreateInput>;
 
-const FINISHES = [
-  { value: 'cuff' as const, label: 'Cuff' },
-  { value: 'hem' as const, label: 'Plain hem' },
-];
+const FINISHES = PART_IDS.map((p) => ({ value: p, label: PART_LABELS[p] }));
 const UNITS = [
   { value: 'in' as const, label: 'in' },
   { value: 'cm' as const, label: 'cm' },

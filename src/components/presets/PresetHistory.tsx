@@ -3,8 +3,9 @@ import { useQuery } from '@tanstack/react-query';
 import { dateTimeText } from '@/lib/date-text';
 import { fetchJson } from '@/lib/fetch-json';
 import { PRESET_FIELDS, type PresetChange, type PresetView } from '@/lib/preset-settings';
+import { PART_LABELS } from '@/lib/fitting/kinds';
 
-const FINISH_WORDS: Record<string, string> = { cuff: 'Cuff', hem: 'Plain hem' };
+const FINISH_WORDS: Record<string, string> = PART_LABELS;
 
 function shown(field: string, value: PresetChange['old']): string {
   if (value === null || value === '') return 'nothing';

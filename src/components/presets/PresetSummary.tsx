@@ -1,3 +1,4 @@
+import { PART_LABELS } from '@/lib/fitting/kinds';
 import { LENGTHS_OF, PRESET_LENGTHS, type PresetSettings } from '@/lib/preset-settings';
 
 const UNIT_TEXT = { in: 'in', cm: 'cm', mm: 'mm' } as const;
@@ -7,7 +8,7 @@ export function PresetSummary({ settings }: { settings: PresetSettings }) {
   const parts = LENGTHS_OF[settings.finish].filter((k) => settings[k] !== undefined);
   return (
     <span className="flex flex-wrap gap-x-3 gap-y-0.5 text-base text-muted">
-      <span className="font-semibold text-ink">{settings.finish === 'cuff' ? 'Cuff' : 'Plain hem'}</span>
+      <span className="font-semibold text-ink">{PART_LABELS[settings.finish]}</span>
       {parts.map((k) => (
         <span key={k}>
           {k === 'cuffDepth' ? '' : `${PRESET_LENGTHS[k].toLowerCase()} `}

@@ -209,6 +209,7 @@ function LegBlock({ g, width }: { g: SheetLegGroup; width: number }) {
       {g.taper && <Text style={[s.small, s.strong, { marginTop: 2 }]}>{g.taper.summary}</Text>}
       {g.taper?.work && <Text style={[s.small, { marginTop: 1 }]}>{g.taper.work}</Text>}
       {g.crease && <Text style={[s.small, { marginTop: 2 }]}>{g.crease}</Text>}
+      {g.recorded && <Text style={[s.small, { marginTop: 2 }]}>{g.recorded}</Text>}
       {g.warnings.map((w, i) => (
         <Text key={i} style={[s.small, { marginTop: 2, color: INK.warn, fontWeight: 700 }]}>
           {`Check: ${w}`}

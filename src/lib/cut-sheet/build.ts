@@ -13,7 +13,7 @@ import {
   validateTaperInput,
 } from '../allowance/index';
 import type { CuffInput, HemInput, LengthInput, TaperInput } from '../allowance/types';
-import type { CutSheetData, LegSheet, Side } from './types';
+import type { CutSheetData, LegSheet, RecordedLength, Side } from './types';
 
 /** Leg widths for a taper check; the cuff's own depth, sections and unit are taken from the cuff. */
 export interface TaperWidths {
@@ -28,8 +28,8 @@ export interface TaperWidths {
 
 /** What one leg should become: a cuff (maybe on a tapered leg) or a plain hem. */
 export type LegOrder =
-  | { side: Side; finish: 'cuff'; input: CuffInput; taper?: TaperWidths; finished?: string }
-  | { side: Side; finish: 'hem'; input: HemInput; taper?: TaperWidths; finished?: string };
+  | { side: Side; finish: 'cuff'; input: CuffInput; taper?: TaperWidths; finished?: string; recorded?: RecordedLength[] }
+  | { side: Side; finish: 'hem'; input: HemInput; taper?: TaperWidths; finished?: string; recorded?: RecordedLength[] };
 
 // A plain hem's taper check takes the hem's own unit, precision and allowance.
 function hemTaperInput(hem: HemInput, widths: TaperWidths) {
@@ -37,9 +37,9 @@ function hemTaperInput(hem: HemInput, widths: TaperWidths) {
   return { unit, precision, hemAllowance, ...widths };
 }
 
-// Spelled out rather than spread: a tapered leg is planned for every sheet, and copying by spread
-// was a tenth of a leg's planning time.
-function taperInput(cuff: CuffInput, widths: TaperWidths): TaperInput {
+/** A cuff's taper check input: the cuff's depth, sections and unit with the leg's widths (spelled
+ * out rather than spread: a tapered leg is planned for every sheet, and a spread cost a tenth of it). */
+export function taperInput(cuff: CuffInput, widths: TaperWidths): TaperInput {
   const input: TaperInput = {
     unit: cuff.unit,
     precision: cuff.precision,
@@ -87,6 +87,7 @@ export function planLeg(order: LegOrder): LegSheet {
   if (order.finish === 'hem') {
     const finished = order.finished?.trim() ? { finished: order.finished.trim() } : {};
     const hem: LegSheet = { side: order.side, finish: 'hem', input: order.input, plan: planHem(order.input), ...finished };
+    if (order.recorded?.length) hem.recorded = order.recorded;
     if (order.taper) {
       const input = hemTaperInput(order.input, order.taper);
       hem.taper = { input, plan: checkHemTaper(input) };
@@ -97,6 +98,7 @@ export function planLeg(order: LegOrder): LegSheet {
   const leg: LegSheet = { side: order.side, finish: 'cuff', input: order.input, plan };
   const text = order.finished?.trim();
   if (text) leg.finished = text;
+  if (order.recorded?.length) leg.recorded = order.recorded;
   if (order.taper) {
     const input = taperInput(order.input, order.taper);
     leg.taper = { input, plan: checkTaper(input) };

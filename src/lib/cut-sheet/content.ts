@@ -4,7 +4,7 @@ import type { CreaseLanding, CuffLineName, Len, PlanWarning, TaperLine, TaperPla
 import type { ExistingFinish } from '@/lib/existing-finish';
 import { SAFETY_DEFER_SHEET, SAFETY_NOTES } from '../bench-safety';
 import { checkRuler } from './chalk-guide';
-import { finishedLine } from './finished-length';
+import { finishedLine, recordedText } from './finished-length';
 import { printedPlan, type PrintedPlan, type PrintedSeamWork } from './printed';
 import type { CutSheetData, LegSheet } from './types';
 
@@ -38,6 +38,8 @@ export interface SheetLegGroup {
   /** summary, then the seam work line by line in one sentence (null when none is needed) */
   taper: { summary: string; work: string | null; rows: SheetTaperRow[] } | null;
   crease: string | null;
+  /** what the fitting recorded for the bench beyond the plan ("Recorded at the fitting: ..."), or null */
+  recorded: string | null;
   warnings: string[];
   leg: LegSheet;
   /** every figure the block prints, in whole display steps */
@@ -114,7 +116,7 @@ function formatDue(iso: string): string {
 }
 
 function sameWork(a: LegSheet, b: LegSheet): boolean {
-  const key = (l: LegSheet) => JSON.stringify([l.finish, l.plan, l.taper?.plan ?? null, creaseOf(l)]);
+  const key = (l: LegSheet) => JSON.stringify([l.finish, l.plan, l.taper?.plan ?? null, creaseOf(l), l.recorded ?? null]);
   return key(a) === key(b);
 }
 
@@ -256,6 +258,12 @@ function sectionsNote(pp: PrintedPlan): string | null {
   return parts.length > 0 ? parts.join(', ') : null;
 }
 
+// Each recorded length as typed, with its reading when typed in another unit than the sheet's.
+function recordedNote(leg: LegSheet): string | null {
+  if (!leg.recorded?.length) return null;
+  return `Recorded at the fitting: ${leg.recorded.map((r) => `${r.label} ${recordedText(r.text, leg.plan.unit, leg.plan.precision)}`).join('; ')}.`;
+}
+
 function groupOf(leg: LegSheet, label: string, existing: ExistingFinish | undefined): SheetLegGroup {
   const p = leg.plan;
   const pp = printedPlan(leg);
@@ -289,6 +297,7 @@ function groupOf(leg: LegSheet, label: string, existing: ExistingFinish | undefi
     slopeNote: slopeNote(leg, pp),
     taper: taperOf(leg, pp),
     crease: creaseNote(crease, existing),
+    recorded: recordedNote(leg),
     warnings: [
       ...new Set([
         ...warnings.filter((w) => !SAID_ELSEWHERE.has(w.code) && !(crease && w.code === 'old-crease-visible')).map((w) => w.message),

@@ -33,3 +33,15 @@ export function finishedLine(legs: LegSheet[]): string | null {
   if (legs.length === 1 || (pinned.length === legs.length && new Set(texts).size === 1)) return `Finished length (back pin) ${texts[0]}`;
   return `Finished length (back pin): ${pinned.map((l, i) => `${l.side} ${texts[i]}`).join(', ')}`;
 }
+
+/**
+ * A length recorded for the bench, as typed with its unit; typed in another unit than the sheet's,
+ * its reading follows ("3/16 in = 5 mm"). Never rounded in its own unit: a 3/16 in tack height is
+ * not an eighths sheet's 1/4 in.
+ */
+export function recordedText(typed: string, unit: Unit, precision: Precision): string {
+  const shown = typedWithUnit(typed.trim(), unit);
+  if (!namesOtherUnit(typed, unit)) return shown;
+  const read = readLength(typed, unit, precision);
+  return read && read !== shown ? `${shown} = ${read}` : shown;
+}

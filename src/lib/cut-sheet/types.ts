@@ -9,6 +9,12 @@ export type PageSize = 'LETTER' | 'A4';
 /** Which leg of the trouser. */
 export type Side = 'left' | 'right';
 
+/** A length the fitting recorded for the bench that the engine does not plan with (a label and the text as typed). */
+export interface RecordedLength {
+  label: string;
+  text: string;
+}
+
 /** One leg finished with a cuff: the engine's input, its plan and, on a tapered leg, the taper check. */
 export interface CuffLeg {
   side: Side;
@@ -20,6 +26,8 @@ export interface CuffLeg {
   crease?: CreaseLanding;
   /** the finished length pinned at the back, as typed ("31 3/4 + 1/8"), in the plan's unit unless it names one */
   finished?: string;
+  /** lengths recorded at the fitting that no plan uses, printed as typed (the registry's 'listed' fields) */
+  recorded?: RecordedLength[];
 }
 
 /** One leg finished with a plain hem. */
@@ -34,6 +42,8 @@ export interface HemLeg {
   crease?: CreaseLanding;
   /** the finished length pinned at the back, as typed, in the plan's unit unless it names one */
   finished?: string;
+  /** lengths recorded at the fitting that no plan uses, printed as typed (the registry's 'listed' fields) */
+  recorded?: RecordedLength[];
 }
 
 /** One leg of the garment. */

@@ -1,5 +1,6 @@
 // Pure price computation: garments (finish, taper, old cuff) and the shop's list in, lines out.
 // No database, no dates, no rounding: amounts are integer minor units and are only added.
+import type { Part } from '../fitting/kinds';
 import type { PriceKey } from './price-keys';
 
 /** What the pricing needs to know about one garment, read from its measurements and plan. */
@@ -8,7 +9,7 @@ export interface GarmentFacts {
   /** shown beside its lines, e.g. "Grey flannel trousers" */
   label: string;
   /** null while the fitting has not decided the finish */
-  finish: 'cuff' | 'hem' | null;
+  finish: Part | null;
   /** the taper check says the leg must be let out to keep the cuff-top width down to the cut */
   taperLetOut: boolean;
   /** the trousers came in with a cuff that is let down and made again */

@@ -2,10 +2,23 @@
 import { and, asc, eq, inArray, isNull } from 'drizzle-orm';
 import type { z } from 'zod';
 import { db, type Db } from '@/db';
-import { counterSettings, garments, measurements, priceItems, priceLines, type CounterSettings, type PriceLine, type Ticket } from '@/db/schema';
+import {
+  counterSettings,
+  garments,
+  measurements,
+  priceItems,
+  priceLines,
+  type CounterSettings,
+  type MeasurementRow,
+  type PriceLine,
+  type Ticket,
+} from '@/db/schema';
 import { checkTaper } from '@/lib/allowance';
 import type { Actor } from '@/lib/api';
 import { letDownFirst } from '@/lib/existing-finish';
+import { partOf, readFinish } from '@/lib/fitting/kinds';
+import { savedLegOrder, type StoredLeg } from '@/lib/fitting/saved-leg';
+import { taperInput } from '@/lib/cut-sheet/build';
 import type { autoLinesInput, lineInput, priceListInput, voidLineInput } from '@/lib/counter-request';
 import { isCurrency } from '@/lib/pricing/money';
 import { DEFAULT_PRICE_LABELS, PRICE_KEYS } from '@/lib/pricing/price-keys';
@@ -276,47 +289,38 @@ export async function garmentFacts(shopId: string, ticketId: string): Promise<Ga
       garmentId: g.id,
       label: g.description?.trim() || `Garment ${i + 1}`,
       finish,
-      taperLetOut: finish === 'cuff' && own.some((m) => legNeedsLetOut(m.unit, m.values, letDownFirst(g.existingFinish))),
+      taperLetOut: finish === 'cuff' && own.some((m) => legNeedsLetOut(m, letDownFirst(g.existingFinish))),
       // Noted at intake (or on the garment since): an old cuff is let down before it is made again.
       oldCuff: g.existingFinish === 'cuff',
     };
   });
 }
 
+// Measurements store cuff|plain|slope, garments cuff|hem: the registry reads both; pricing wants the part.
 function finishOf(value: string | null): GarmentFacts['finish'] {
-  if (value === 'cuff') return 'cuff';
-  if (value === 'hem' || value === 'plain' || value === 'slope') return 'hem';
-  return null;
+  const finish = readFinish(value);
+  return finish ? partOf(finish) : null;
 }
 
-type Stored = Record<string, unknown>;
-
-function text(values: Stored, field: string): string | undefined {
-  const v = values[field];
-  if (typeof v === 'string' || typeof v === 'number') return String(v);
-  if (v && typeof v === 'object' && 'text' in v) return String((v as { text: unknown }).text);
-  return undefined;
-}
-
-/** Runs the engine's taper check on a leg's stored lengths (as the sheet does: a let-down pair's width at the cut used); false when the leg has no taper widths. */
-function legNeedsLetOut(unit: string, raw: unknown, letDown: boolean): boolean {
-  const values = (raw ?? {}) as Stored;
-  const [cuffDepth, widthAtEdge, widthAbove, heightAbove] = ['cuffDepth', 'widthAtEdge', 'widthAbove', 'heightAbove'].map((f) => text(values, f));
-  if (!cuffDepth || !widthAtEdge || !widthAbove || !heightAbove) return false;
+/** Runs the engine's taper check on a leg's stored lengths, read as the sheet reads them (savedLegOrder; a let-down pair's width at the cut used); false when the leg has no taper widths. */
+function legNeedsLetOut(m: MeasurementRow, letDown: boolean): boolean {
+  const unit = m.unit === 'cm' || m.unit === 'mm' ? m.unit : 'in';
+  const order = savedLegOrder({ leg: m.leg, unit, finish: m.finish, values: storedValues(m.values) }, unit, 8, { letDown });
+  if (order?.finish !== 'cuff' || !order.taper) return false;
   try {
-    const plan = checkTaper({
-      unit: unit === 'cm' || unit === 'mm' ? unit : 'in',
-      cuffDepth,
-      widthAtEdge,
-      widthAbove,
-      heightAbove,
-      hemSection: text(values, 'hemSection'),
-      seamAllowance: text(values, 'seamAllowance'),
-      ...(letDown ? { widthAtCut: text(values, 'widthAtCut'), oldCrease: text(values, 'oldCrease') } : {}),
-    });
-    return needsLetOut(plan);
+    return needsLetOut(checkTaper(taperInput(order.input, order.taper)));
   } catch {
     // Lengths the engine refuses leave the price to the counter, who can add the line by hand.
     return false;
   }
+}
+
+// Each stored length is { text, mm }; a bare string or number is read as its text.
+function storedValues(raw: unknown): StoredLeg['values'] {
+  const out: Record<string, { text: string }> = {};
+  for (const [k, v] of Object.entries((raw ?? {}) as Record<string, unknown>)) {
+    if (typeof v === 'string' || typeof v === 'number') out[k] = { text: String(v) };
+    else if (v && typeof v === 'object' && 'text' in v) out[k] = { text: String((v as { text: unknown }).text) };
+  }
+  return out;
 }

@@ -1,0 +1,24 @@
+// One plausible length for every field of the fitting registry, in inches, as a tailor would type
+// it: a cuffed leg with a gentle taper (figures from TRADE.md's usual ranges, else common practice,
+// no source). The registry tests require one here for every field.
+import type { FieldKey } from '@/lib/fitting/kinds';
+
+/** A sample typed value for every registry field. */
+export const FITTING_VALUES: Record<FieldKey, string> = {
+  backPin: '31 1/2',
+  frontPin: '31 1/4',
+  cuffDepth: '1 1/2',
+  hemSection: '1 1/2',
+  slope: '1/2',
+  hemAllowance: '1 1/2',
+  turnUnder: '1/2',
+  // TRADE.md: tack about 1/8 to 3/16 in below the cuff top.
+  tackBelowTop: '3/16',
+  available: '6',
+  oldCrease: '2',
+  widthAtEdge: '8',
+  widthAbove: '8 3/4',
+  heightAbove: '12',
+  widthAtCut: '8 1/8',
+  seamAllowance: '1/2',
+};
