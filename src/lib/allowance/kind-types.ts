@@ -1,0 +1,83 @@
+// The public shapes of the newer kinds of work (issue 17): skirt and dress hems, hems levelled from
+// the floor, jacket sleeves shortened at the cuff, jeans keeping the factory hem, a pending waist
+// change, and shrinkage. Warnings and advice are codes with values (the words live in the catalog).
+import type { CautionCode, Note } from './notes';
+import type { LengthInput, Len, Precision, Unit } from './types';
+
+/** How the skirt flares: straight, a fraction of a circle, the flat pattern's angle, or two rounds measured. */
+export type SkirtFlare =
+  | { kind: 'straight' }
+  /** 1 a full circle skirt, 1/2 a half circle, 1/4 a quarter circle (up to 4 for layered circles) */
+  | { kind: 'circle'; fraction: number | string }
+  /** the flat pattern's whole angle round the body, degrees (360 a full circle) */
+  | { kind: 'angle'; degrees: number | string }
+  /** A-line and gored skirts: the round higher up and its height above the finished edge, along the skirt */
+  | { kind: 'measured'; upperCircumference: LengthInput; heightAbove: LengthInput };
+
+/** What a skirt or dress hem plan takes. */
+export interface FlaredHemInput {
+  unit: Unit;
+  precision?: Precision;
+  flare: SkirtFlare;
+  /** round of the skirt at its finished edge (for a circle or an angle: this, or waist and skirt length) */
+  hemCircumference?: LengthInput;
+  /** round at the waist seam (circle or angle, with skirtLength, when the hem's round is not measured) */
+  waistCircumference?: LengthInput;
+  /** waist seam to finished edge, along the skirt */
+  skirtLength?: LengthInput;
+  /** the hem depth asked; default 2 in (50 mm) */
+  hemDepth?: LengthInput;
+  turnUnder?: LengthInput;
+  /** shop may change: the most fullness eased in, percent of the round where the hem lands; default 3 */
+  easeLimitPercent?: number | string;
+  /** shop may change: narrower than this a hem is rolled, not turned; default 1/2 in (12 mm) */
+  narrowestTurnedHem?: LengthInput;
+  /** shop may change: a narrow rolled hem's width; default 1/8 in (3 mm) */
+  rolledHemWidth?: LengthInput;
+}
+
+/** How to finish a skirt hem. */
+export type SkirtHemFinish = 'turned' | 'turned-narrower' | 'rolled' | 'faced';
+
+/** The notes a skirt hem plan can carry. */
+export type FlaredHemNoteCode =
+  | 'ease-fullness'
+  | 'depth-reduced'
+  | 'face-to-keep-depth'
+  | 'rolled-hem'
+  | 'faced-hem'
+  | 'let-out-hem-seams'
+  | 'turn-under-too-large';
+
+/** A skirt or dress hem: the fullness a turned hem must ease in, the deepest hem that lies flat, and how to finish. */
+export interface FlaredHemPlan {
+  kind: 'flared-hem';
+  unit: Unit;
+  precision: Precision;
+  /** 'flared' wider at the hem, 'tapered' narrower at the hem (a pegged skirt), 'straight' neither */
+  shape: 'straight' | 'flared' | 'tapered';
+  hemDepth: Len;
+  turnUnder: Len;
+  hemCircumference: Len;
+  /** the flat pattern's radius to the hem (the cone's slant height), null when straight or tapered */
+  slantRadius: Len | null;
+  /** the flat pattern's whole angle, degrees (360 a full circle; negative tapered) */
+  flareDegrees: number;
+  /** round fullness per unit of hem depth (2π for a full circle skirt) */
+  fullnessPerDepth: number;
+  /** how much longer the turned-up edge is than the round it lands on (negative: shorter) */
+  fullness: Len;
+  /** the round where the turned-up edge lands, one hem depth above the finished edge */
+  landingCircumference: Len;
+  /** fullness as a percent of the landing round */
+  easePercent: number;
+  /** the deepest hem whose fullness still eases in, to the display step (null: any depth, no fullness) */
+  liesFlatTo: Len | null;
+  finish: SkirtHemFinish;
+  /** the depth to turn or roll (null for a facing) */
+  finishDepth: Len | null;
+  notes: Note<FlaredHemNoteCode>[];
+  cautions: CautionCode[];
+  /** where each rule and figure comes from */
+  sources: Readonly<Record<string, string>>;
+}

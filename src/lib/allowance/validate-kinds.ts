@@ -1,0 +1,14 @@
+// Validation of the newer kinds' inputs: every refusal at once, one per field, for forms.
+import type { AllowanceError } from './allowance-error';
+import { flaredHemShapeError, readFlaredHemInput } from './flared-hem';
+import type { FlaredHemInput } from './kind-types';
+import { collect } from './validate-input';
+
+/** Every problem with a skirt hem input, one AllowanceError per field (empty when planFlaredHem will accept it). */
+export function validateFlaredHemInput(input: unknown): AllowanceError[] {
+  return collect<FlaredHemInput>(input, (i, r) => {
+    const v = readFlaredHemInput(i, r);
+    const shape = r.errors.length === 0 ? flaredHemShapeError(v) : null;
+    if (shape) r.errors.push(shape);
+  });
+}
