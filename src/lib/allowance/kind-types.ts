@@ -81,3 +81,66 @@ export interface FlaredHemPlan {
   /** where each rule and figure comes from */
   sources: Readonly<Record<string, string>>;
 }
+
+/** A place round the hem where the marker's line is measured (the sheet names it). */
+export type HemPoint = 'centre-front' | 'left-front' | 'left-side' | 'left-back' | 'centre-back' | 'right-back' | 'right-side' | 'right-front';
+
+/** One place round the hem, measured at the fitting. */
+export interface LevelPointInput {
+  at: HemPoint;
+  /** the marker's pin or chalk line above the garment's present finished edge there */
+  pinAboveEdge: LengthInput;
+  /** cloth below the present edge once the old hem is let down (optional: checks the cloth) */
+  cloth?: LengthInput;
+}
+
+/** What levelling a hem from the floor takes. */
+export interface LevelHemInput {
+  unit: Unit;
+  precision?: Precision;
+  /** the hem marker's line above the floor, as set at the fitting */
+  markerHeight: LengthInput;
+  /** the finished hem's height above the floor wanted, in the shoes to be worn */
+  hemFromFloor: LengthInput;
+  /** how far the shoes worn at the marking raise the wearer (about the heel less the sole under the ball); default 0 */
+  shoesAtMarking?: LengthInput;
+  /** the same for the shoes the garment will be worn with; default: the marking's */
+  shoesToWear?: LengthInput;
+  /** hem depth below the new hem line; default 2 in (50 mm) */
+  hemDepth?: LengthInput;
+  points: LevelPointInput[];
+}
+
+/** The new hem line at one place round the hem. */
+export interface LevelPoint {
+  at: HemPoint;
+  pinAboveEdge: Len;
+  /** the new hem line above the present edge: + shorten by this, − let down by this */
+  newLineAboveEdge: Len;
+  /** the cutting line (one hem depth below the new line) above the present edge; negative: inside the let-down hem */
+  cutAboveEdge: Len;
+  /** cloth left below the cutting line (null when the cloth there is not given) */
+  spare: Len | null;
+  enough: boolean | null;
+}
+
+/** The notes a levelled hem can carry. */
+export type LevelHemNoteCode = 'chalk-from-pins' | 'shoes-differ' | 'not-enough-cloth' | 'old-hem-line-shows' | 'uneven-hem';
+
+/** A hem levelled from the floor: where the new line runs at each place measured. */
+export interface LevelHemPlan {
+  kind: 'level-hem';
+  unit: Unit;
+  precision: Precision;
+  /** how far below the marker's line the new hem line runs, all round (negative: above it) */
+  newLineBelowPins: Len;
+  /** how much higher the wearer stands in the shoes to be worn than at the marking */
+  shoeRise: Len;
+  hemDepth: Len;
+  points: LevelPoint[];
+  /** the largest less the smallest change round the hem: how uneven the present hem hangs */
+  unevenBy: Len;
+  notes: Note<LevelHemNoteCode>[];
+  cautions: CautionCode[];
+  sources: Readonly<Record<string, string>>;
+}

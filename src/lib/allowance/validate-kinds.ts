@@ -1,7 +1,8 @@
 // Validation of the newer kinds' inputs: every refusal at once, one per field, for forms.
 import type { AllowanceError } from './allowance-error';
 import { flaredHemShapeError, readFlaredHemInput } from './flared-hem';
-import type { FlaredHemInput } from './kind-types';
+import type { FlaredHemInput, LevelHemInput } from './kind-types';
+import { readLevelHemInput } from './level-hem';
 import { collect } from './validate-input';
 
 /** Every problem with a skirt hem input, one AllowanceError per field (empty when planFlaredHem will accept it). */
@@ -11,4 +12,9 @@ export function validateFlaredHemInput(input: unknown): AllowanceError[] {
     const shape = r.errors.length === 0 ? flaredHemShapeError(v) : null;
     if (shape) r.errors.push(shape);
   });
+}
+
+/** Every problem with a levelling input, one AllowanceError per field (empty when levelHem will accept it). */
+export function validateLevelHemInput(input: unknown): AllowanceError[] {
+  return collect<LevelHemInput>(input, readLevelHemInput);
 }
