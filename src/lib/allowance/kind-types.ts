@@ -108,7 +108,7 @@ export interface LevelHemInput {
   shoesToWear?: LengthInput;
   /** hem depth below the new hem line; default 2 in (50 mm) */
   hemDepth?: LengthInput;
-  points: LevelPointInput[];
+  points: readonly LevelPointInput[];
 }
 
 /** The new hem line at one place round the hem. */
