@@ -19,4 +19,5 @@ export type { CautionCode, Note, NoteValue, ShopDefault } from './notes';
 export { planFlaredHem, FLARED_HEM_SOURCES } from './flared-hem';
 export { KIND_DEFAULTS, KIND_LENGTHS, HEM_EASE_LIMIT, SHRINKAGE_PERCENT, NO_SOURCE, type ShrinkCloth, type KindLengthName } from './kind-defaults';
 export { levelHem, HEM_POINTS, LEVEL_HEM_SOURCES } from './level-hem';
-export { validateFlaredHemInput, validateLevelHemInput } from './validate-kinds';
+export { shortenSleeve, SLEEVE_SOURCES } from './sleeve-shorten';
+export { validateFlaredHemInput, validateLevelHemInput, validateSleeveInput } from './validate-kinds';

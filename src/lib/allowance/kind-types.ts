@@ -144,3 +144,87 @@ export interface LevelHemPlan {
   cautions: CautionCode[];
   sources: Readonly<Record<string, string>>;
 }
+
+/** The sleeve's buttonholes: none (buttons sewn on a closed vent), decorative (stitched, not cut) or working (cut open). */
+export type SleeveButtonholes = 'none' | 'decorative' | 'working';
+
+/** What shortening a jacket or coat sleeve takes. */
+export interface SleeveInput {
+  unit: Unit;
+  precision?: Precision;
+  /** how much shorter the sleeve is to be */
+  shortenBy: LengthInput;
+  buttonholes: SleeveButtonholes;
+  /** buttons on the vent; default 4 */
+  buttons?: number | string;
+  /** finished edge to the lowest button's centre, now; default 1 1/4 in (32 mm) */
+  bottomButtonAboveEdge?: LengthInput;
+  /** buttons centre to centre; default 5/8 in (16 mm) */
+  buttonSpacing?: LengthInput;
+  /** the vent's top above the present finished edge (optional: checks the buttons still fit) */
+  ventLength?: LengthInput;
+  /** the sleeve's hem depth; default 1 1/2 in (40 mm) */
+  hemDepth?: LengthInput;
+  /** the lining's fold above the present edge, as it is now (optional; default: as wanted) */
+  liningFoldNow?: LengthInput;
+  /** the lining's ease pleat as it is now (optional; default: as wanted) */
+  liningPleatNow?: LengthInput;
+  /** shop may change: the lining's fold above the finished edge; default 1/2 in (12 mm) */
+  liningFoldAboveEdge?: LengthInput;
+  /** shop may change: the lining's ease pleat; default 1/2 in (12 mm) */
+  liningEasePleat?: LengthInput;
+  /** shop may change: cloth between the top button's centre and the vent's top; default 1/2 in (12 mm) */
+  ventTopMargin?: LengthInput;
+  /** shop may change: how much a sleeve with working buttonholes may still be shortened at the cuff; default 0 */
+  workingButtonholeSlack?: LengthInput;
+}
+
+/** One button on the vent after the work, lowest first. */
+export interface SleeveButton {
+  n: number;
+  /** its centre above the new finished edge */
+  aboveNewEdge: Len;
+  /** how far it is moved up the sleeve (0: left where it is) */
+  moveUp: Len;
+}
+
+/** The notes a sleeve plan can carry. */
+export type SleeveNoteCode =
+  | 'move-buttons'
+  | 'restitch-buttonholes'
+  | 'remake-vent-corners'
+  | 'buttonholes-closer-to-edge'
+  | 'working-buttonholes-shorten-at-shoulder'
+  | 'vent-cut-away-shorten-at-shoulder'
+  | 'recut-sleeve-head'
+  | 'vent-too-short-for-buttons';
+
+/** A sleeve shortened at the cuff (keeping the vent and buttons) or, when it must be, from the shoulder. */
+export interface SleevePlan {
+  kind: 'sleeve';
+  unit: Unit;
+  precision: Precision;
+  method: 'cuff' | 'shoulder';
+  shortenBy: Len;
+  hemDepth: Len;
+  /** at the cuff: the new finished edge above the present one (null from the shoulder) */
+  newEdgeAboveEdge: Len | null;
+  /** at the cuff: the cutting line above the present edge (negative: inside the unfolded hem; null from the shoulder) */
+  cutAboveEdge: Len | null;
+  buttons: SleeveButton[];
+  /** buttonholes moved up this far (decorative ones restitched), 0 when they stay */
+  buttonholesMoveUp: Len;
+  /** the vent after the work, from the new edge to its top (null when the vent's length is not given) */
+  ventAfter: Len | null;
+  /** room between the top button and the vent's top after the work, less the margin (negative: they do not fit) */
+  ventRoom: Len | null;
+  lining: {
+    /** how much shorter the lining is made (at the cuff, or at the sleeve head from the shoulder) */
+    shortenBy: Len;
+    foldAboveEdge: Len;
+    easePleat: Len;
+  };
+  notes: Note<SleeveNoteCode>[];
+  cautions: CautionCode[];
+  sources: Readonly<Record<string, string>>;
+}

@@ -1,7 +1,8 @@
 // Validation of the newer kinds' inputs: every refusal at once, one per field, for forms.
 import type { AllowanceError } from './allowance-error';
 import { flaredHemShapeError, readFlaredHemInput } from './flared-hem';
-import type { FlaredHemInput, LevelHemInput } from './kind-types';
+import type { FlaredHemInput, LevelHemInput, SleeveInput } from './kind-types';
+import { readSleeveInput, sleeveShapeError } from './sleeve-shorten';
 import { readLevelHemInput } from './level-hem';
 import { collect } from './validate-input';
 
@@ -17,4 +18,13 @@ export function validateFlaredHemInput(input: unknown): AllowanceError[] {
 /** Every problem with a levelling input, one AllowanceError per field (empty when levelHem will accept it). */
 export function validateLevelHemInput(input: unknown): AllowanceError[] {
   return collect<LevelHemInput>(input, readLevelHemInput);
+}
+
+/** Every problem with a sleeve input, one AllowanceError per field (empty when shortenSleeve will accept it). */
+export function validateSleeveInput(input: unknown): AllowanceError[] {
+  return collect<SleeveInput>(input, (i, r) => {
+    const v = readSleeveInput(i, r);
+    const shape = r.errors.length === 0 ? sleeveShapeError(v) : null;
+    if (shape) r.errors.push(shape);
+  });
 }
