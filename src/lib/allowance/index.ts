@@ -20,4 +20,5 @@ export { planFlaredHem, FLARED_HEM_SOURCES } from './flared-hem';
 export { KIND_DEFAULTS, KIND_LENGTHS, HEM_EASE_LIMIT, SHRINKAGE_PERCENT, NO_SOURCE, type ShrinkCloth, type KindLengthName } from './kind-defaults';
 export { levelHem, HEM_POINTS, LEVEL_HEM_SOURCES } from './level-hem';
 export { shortenSleeve, SLEEVE_SOURCES } from './sleeve-shorten';
-export { validateFlaredHemInput, validateLevelHemInput, validateSleeveInput } from './validate-kinds';
+export { planOriginalHem, ORIGINAL_HEM_SOURCES } from './original-hem';
+export { validateFlaredHemInput, validateLevelHemInput, validateOriginalHemInput, validateSleeveInput } from './validate-kinds';

@@ -228,3 +228,56 @@ export interface SleevePlan {
   cautions: CautionCode[];
   sources: Readonly<Record<string, string>>;
 }
+
+/** What shortening jeans while keeping the factory hem takes. */
+export interface OriginalHemInput {
+  unit: Unit;
+  precision?: Precision;
+  /** how much shorter the leg is to be */
+  shortenBy: LengthInput;
+  /** the factory hem's depth: from the present edge to the top of its stitching */
+  factoryHem: LengthInput;
+  /** shop may change: seam allowance on each side of the join; default 3/8 in (10 mm) */
+  seamAllowance?: LengthInput;
+  /** the inseam now, crotch to the present edge (optional: gives the two pieces' lengths) */
+  inseamNow?: LengthInput;
+  /** taper check (optional, all three): leg width flat at the present edge … */
+  widthAtEdge?: LengthInput;
+  /** … and higher up … */
+  widthAbove?: LengthInput;
+  /** … this far above the present edge */
+  heightAbove?: LengthInput;
+  /** flat difference at the join that needs no work; default 1/8 in (3 mm) */
+  tolerance?: LengthInput;
+}
+
+/** A chalk line of the original-hem method, top to bottom. */
+export type OriginalHemLineName = 'join' | 'leg-cut' | 'fold' | 'band-cut' | 'band-top' | 'present-edge';
+
+/** The notes an original-hem plan can carry. */
+export type OriginalHemNoteCode = 'fold-only' | 'take-in-leg-above-join' | 'take-in-band' | 'chalk-on-both-legs';
+
+/** Jeans shortened keeping the factory hem: where to chalk, the seam allowance taken twice, the taper at the new height. */
+export interface OriginalHemPlan {
+  kind: 'original-hem';
+  unit: Unit;
+  precision: Precision;
+  shortenBy: Len;
+  factoryHem: Len;
+  seamAllowance: Len;
+  /** 'cut-and-join': the band cut off and sewn back; 'fold-only': too little to cut away, the tuck stays inside */
+  method: 'cut-and-join' | 'fold-only';
+  /** below the pin mark (the new finished edge) on the leg as it hangs; negative above it */
+  lines: { name: OriginalHemLineName; belowMark: Len }[];
+  /** cloth cut away between the two cutting lines: shortenBy − 2 × seam allowance */
+  removed: Len;
+  /** length the join takes: 2 × seam allowance */
+  seamTakes: Len;
+  /** the two pieces before joining, crotch to leg cut and band cut to edge; with the inseam now */
+  pieces: { leg: Len | null; band: Len; total: Len | null; newInseam: Len | null };
+  /** flat widths at the join: the leg's there less the band top's (+ leg wider), null without widths */
+  taper: { mismatch: Len; perSeam: Len; perSide: Len; withinTolerance: boolean } | null;
+  notes: Note<OriginalHemNoteCode>[];
+  cautions: CautionCode[];
+  sources: Readonly<Record<string, string>>;
+}

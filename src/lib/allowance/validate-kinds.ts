@@ -1,7 +1,8 @@
 // Validation of the newer kinds' inputs: every refusal at once, one per field, for forms.
 import type { AllowanceError } from './allowance-error';
 import { flaredHemShapeError, readFlaredHemInput } from './flared-hem';
-import type { FlaredHemInput, LevelHemInput, SleeveInput } from './kind-types';
+import type { FlaredHemInput, LevelHemInput, OriginalHemInput, SleeveInput } from './kind-types';
+import { readOriginalHemInput } from './original-hem';
 import { readSleeveInput, sleeveShapeError } from './sleeve-shorten';
 import { readLevelHemInput } from './level-hem';
 import { collect } from './validate-input';
@@ -27,4 +28,9 @@ export function validateSleeveInput(input: unknown): AllowanceError[] {
     const shape = r.errors.length === 0 ? sleeveShapeError(v) : null;
     if (shape) r.errors.push(shape);
   });
+}
+
+/** Every problem with an original-hem input, one AllowanceError per field (empty when planOriginalHem will accept it). */
+export function validateOriginalHemInput(input: unknown): AllowanceError[] {
+  return collect<OriginalHemInput>(input, readOriginalHemInput);
 }
