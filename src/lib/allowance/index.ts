@@ -21,4 +21,13 @@ export { KIND_DEFAULTS, KIND_LENGTHS, HEM_EASE_LIMIT, SHRINKAGE_PERCENT, NO_SOUR
 export { levelHem, HEM_POINTS, LEVEL_HEM_SOURCES } from './level-hem';
 export { shortenSleeve, SLEEVE_SOURCES } from './sleeve-shorten';
 export { planOriginalHem, ORIGINAL_HEM_SOURCES } from './original-hem';
-export { validateFlaredHemInput, validateLevelHemInput, validateOriginalHemInput, validateSleeveInput } from './validate-kinds';
+export { waistMovesHem, WAIST_MOVE_SOURCES } from './waist-move';
+export { shrinkAllowance, SHRINK_SOURCES } from './shrink-allowance';
+export {
+  validateFlaredHemInput,
+  validateLevelHemInput,
+  validateOriginalHemInput,
+  validateShrinkInput,
+  validateSleeveInput,
+  validateWaistMoveInput,
+} from './validate-kinds';

@@ -281,3 +281,91 @@ export interface OriginalHemPlan {
   cautions: CautionCode[];
   sources: Readonly<Record<string, string>>;
 }
+
+/** How a pending waist change is taken at the fitting: the pin mark moved for it, or the waist done first. */
+export type WaistPolicy = 'record' | 'waist-first';
+
+/** The rule that says how far the trousers move: from the wearer's girths, or the shop's own ratio. */
+export type WaistMoveRule = 'girth-slope' | 'shop-ratio';
+
+/** What the pin mark's move for a pending waist or seat change takes. */
+export interface WaistMoveInput {
+  unit: Unit;
+  precision?: Precision;
+  /** the shop's choice; default 'record' */
+  policy?: WaistPolicy;
+  /** the pending change round the waistband: negative taken in, positive let out */
+  waistChange: LengthInput;
+  /** the pending change round the seat: negative taken in, positive let out; default 0 */
+  seatChange?: LengthInput;
+  rule: WaistMoveRule;
+  /** girth-slope: the wearer's waist girth where the band sits … */
+  waistGirth?: LengthInput;
+  /** … the seat girth … */
+  seatGirth?: LengthInput;
+  /** … and the depth between them, down the body */
+  waistToSeat?: LengthInput;
+  /** shop-ratio: the trousers' rise per unit taken in at the waist (the shop's own figure) */
+  waistRatio?: number | string;
+  /** shop-ratio: the same per unit taken in at the seat; default 0 */
+  seatRatio?: number | string;
+  /** optional: the most the trousers can rise (to the natural waist, say) */
+  mostRise?: LengthInput;
+}
+
+/** The notes a waist move can carry. */
+export type WaistMoveNoteCode = 'waist-first' | 'pin-mark-moves' | 'seat-change-not-counted' | 'rise-capped' | 'check-at-next-fitting';
+
+/** How far the pin mark moves for a pending waist change, with the rule and its source. */
+export interface WaistMovePlan {
+  kind: 'waist-move';
+  unit: Unit;
+  precision: Precision;
+  policy: WaistPolicy;
+  /** how much higher the trousers will sit once the change is made (negative: lower); null when the waist is done first */
+  rise: Len | null;
+  /** how far the pin mark moves down the leg to keep the finished length where it was pinned (negative: up); null when the waist is done first */
+  pinMarkMoves: Len | null;
+  direction: 'down' | 'up' | 'none' | null;
+  rule: { code: WaistMoveRule; waistRatio: number; seatRatio: number; source: string };
+  notes: Note<WaistMoveNoteCode>[];
+  sources: Readonly<Record<string, string>>;
+}
+
+/** What a shrink allowance on a plain hem takes. */
+export interface ShrinkInput {
+  unit: Unit;
+  precision?: Precision;
+  /** the cloth: a preset with its expected shrinkage, or 'other' with shrinkPercent */
+  cloth: 'raw-denim' | 'sanforized-denim' | 'unwashed-cotton' | 'prewashed' | 'other';
+  /** shop may change: expected length shrinkage at the first wash, percent (needed for 'other') */
+  shrinkPercent?: number | string;
+  /** the length that shrinks down to the pin mark: the inseam from the crotch, or the length from the waist */
+  lengthToMark: LengthInput;
+  /** the hem allowance wanted after washing; default 1 1/2 in (40 mm) */
+  hemAllowance?: LengthInput;
+}
+
+/** The notes a shrink allowance can carry. */
+export type ShrinkNoteCode = 'shrink-allowance' | 'wash-first-advised' | 'no-shrinkage';
+
+/** A plain hem made long enough to shrink to the pinned length. */
+export interface ShrinkPlan {
+  kind: 'shrink';
+  unit: Unit;
+  precision: Precision;
+  percent: number;
+  /** where the percent comes from (the preset's source, or the shop's own figure) */
+  percentSource: string;
+  /** the finished edge chalked this far below the pin mark (unwashed) */
+  finishedEdgeBelowMark: Len;
+  /** the hem allowance cut before washing, so it shrinks to the one wanted */
+  hemAllowanceUnwashed: Len;
+  /** the cutting line below the pin mark */
+  cutBelowMark: Len;
+  /** a check: the finished length after washing (equal to the length pinned) */
+  lengthAfterWash: Len;
+  notes: Note<ShrinkNoteCode>[];
+  cautions: CautionCode[];
+  sources: Readonly<Record<string, string>>;
+}

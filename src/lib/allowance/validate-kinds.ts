@@ -1,7 +1,9 @@
 // Validation of the newer kinds' inputs: every refusal at once, one per field, for forms.
 import type { AllowanceError } from './allowance-error';
 import { flaredHemShapeError, readFlaredHemInput } from './flared-hem';
-import type { FlaredHemInput, LevelHemInput, OriginalHemInput, SleeveInput } from './kind-types';
+import type { FlaredHemInput, LevelHemInput, OriginalHemInput, ShrinkInput, SleeveInput, WaistMoveInput } from './kind-types';
+import { readShrinkInput } from './shrink-allowance';
+import { readWaistMoveInput } from './waist-move';
 import { readOriginalHemInput } from './original-hem';
 import { readSleeveInput, sleeveShapeError } from './sleeve-shorten';
 import { readLevelHemInput } from './level-hem';
@@ -33,4 +35,14 @@ export function validateSleeveInput(input: unknown): AllowanceError[] {
 /** Every problem with an original-hem input, one AllowanceError per field (empty when planOriginalHem will accept it). */
 export function validateOriginalHemInput(input: unknown): AllowanceError[] {
   return collect<OriginalHemInput>(input, readOriginalHemInput);
+}
+
+/** Every problem with a waist move input, one AllowanceError per field (empty when waistMovesHem will accept it). */
+export function validateWaistMoveInput(input: unknown): AllowanceError[] {
+  return collect<WaistMoveInput>(input, readWaistMoveInput);
+}
+
+/** Every problem with a shrink input, one AllowanceError per field (empty when shrinkAllowance will accept it). */
+export function validateShrinkInput(input: unknown): AllowanceError[] {
+  return collect<ShrinkInput>(input, readShrinkInput);
 }
