@@ -10,19 +10,28 @@ export type AllowanceErrorCode =
   | 'missing'
   | 'not-positive'
   | 'negative'
-  | 'out-of-range';
+  | 'out-of-range'
+  | 'bad-choice'
+  | 'not-a-number'
+  | 'impossible-shape';
+
+/** What a refusal names beside its code (a length as text, a number, a field), for the message catalog. */
+export type RefusalValues = Readonly<Record<string, string | number>>;
 
 /** A refused input: a code for programs, a human message, and the input field when there is one. */
 export class AllowanceError extends Error {
   readonly code: AllowanceErrorCode;
   // Declared only, so an error without a field has no `field` key at all.
   declare readonly field?: string;
+  // Declared only as well: the figures a catalog message needs (refusals of the newer kinds carry them).
+  declare readonly values?: RefusalValues;
 
-  constructor(code: AllowanceErrorCode, message: string, field?: string) {
+  constructor(code: AllowanceErrorCode, message: string, field?: string, values?: RefusalValues) {
     super(message);
     this.name = 'AllowanceError';
     this.code = code;
     if (field !== undefined) this.field = field;
+    if (values !== undefined) this.values = values;
   }
 }
 

@@ -65,6 +65,11 @@ export class InputReader {
     this.errors.push(e);
   }
 
+  /** Refuse a field read elsewhere (numbers, choices): thrown, or kept when collecting. */
+  refuse(e: AllowanceError): void {
+    this.fail(e);
+  }
+
   /** A length field in mm, or null when absent (blank text counts as absent). */
   length(value: unknown, field: string, label: string, rule: LengthRule = NO_RULE): Exact | null {
     if (value === undefined || value === null || (typeof value === 'string' && isBlank(value))) {

@@ -6,7 +6,8 @@ import { readHemInput } from './plan-hem';
 import { InputReader } from './read-input';
 import type { CuffInput, HemInput, HemTaperInput, TaperInput } from './types';
 
-function collect<T>(input: unknown, read: (input: T, r: InputReader) => unknown): AllowanceError[] {
+/** Read an input with a collecting reader: every field's refusal, or the one thrown before any field. */
+export function collect<T>(input: unknown, read: (input: T, r: InputReader) => unknown): AllowanceError[] {
   try {
     const r = new InputReader(input, true);
     read(input as T, r);
