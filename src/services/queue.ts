@@ -29,7 +29,7 @@ export interface QueueAnswer {
   /** shared with other answers of the same version: never change them */
   rows: readonly QueueRow[] | null;
   /** the rows as JSON in UTF-8, as the endpoint sends them (shared too) */
-  body: Uint8Array | null;
+  body: Uint8Array<ArrayBuffer> | null;
   next: string | null;
 }
 
@@ -108,7 +108,7 @@ const VERSION_SQL = 'select version::text as v from shop_list_versions where sho
 interface Computed {
   rows: QueueRow[];
   /** UTF-8 once, not per answer */
-  body: Uint8Array;
+  body: Uint8Array<ArrayBuffer>;
   next: string | null;
 }
 

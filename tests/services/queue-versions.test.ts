@@ -10,7 +10,7 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { eq, sql } = await import('drizzle-orm');
-const { auditEvents, customers, garments, user } = await import('@/db/schema');
+const { auditEvents, customers, garments, shopListVersions, user } = await import('@/db/schema');
 const { readQueue } = await import('@/services/queue');
 const { addGarment, moveGarment, updateGarment } = await import('@/services/garments');
 const { stepBackGarment } = await import('@/services/garment-step-back');
@@ -30,8 +30,13 @@ beforeAll(async () => {
 });
 afterAll(() => handle.close());
 
-const versionOf = async (shopId: string) =>
-  (await db.execute<{ v: string }>(sql`select version::text as v from shop_list_versions where shop_id = ${shopId}`)).rows[0]?.v ?? '0';
+const versionOf = async (shopId: string) => {
+  const [row] = await db
+    .select({ v: sql<string>`${shopListVersions.version}::text` })
+    .from(shopListVersions)
+    .where(eq(shopListVersions.shopId, shopId));
+  return row?.v ?? '0';
+};
 const rowOf = (answer: QueueAnswer, id: string) => answer.rows?.find((r) => r.id === id);
 
 /** Reads A's list (keeping the answer), runs the write, and reads again with the old ETag: the
@@ -69,7 +74,7 @@ describe('every write the queue shows moves the shop version', () => {
     const { ticket } = await openTicket(a, { customer: { name: 'Adding Customer' }, garments: [{ description: 'First pair' }] });
     let id = '';
     const after = await afterWrite(async () => {
-      id = (await addGarment(a.lead, ticket.id, { description: 'Second pair', existingFinish: 'plain' } as Parameters<typeof addGarment>[2])).id;
+      id = (await addGarment(a.lead, ticket.id, { description: 'Second pair', dueOn: null, assigneeId: null, existingFinish: 'plain-hem' })).id;
     });
     expect(rowOf(after, id)).toMatchObject({ description: 'Second pair' });
   });

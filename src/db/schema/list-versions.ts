@@ -10,5 +10,5 @@ export const shopListVersions = pgTable('shop_list_versions', {
     .primaryKey()
     .references(() => organization.id, { onDelete: 'cascade' }),
   /** microseconds since the epoch of the last change, or one more than before: never repeats, even across a restored database */
-  version: bigint('version', { mode: 'string' }).notNull(),
+  version: bigint('version', { mode: 'bigint' }).notNull(),
 });
