@@ -112,3 +112,64 @@ export async function oneAtATime(url, headers, times) {
   }
   return { ...stats(ms), bytes: last.bytes, status: last.status, etag: last.etag, next: last.next };
 }
+
+/**
+ * The queue as browsers read it, at `rate` requests a second for `seconds`: `clients` tabs (over
+ * the given session cookies in turn) read in turn, each keeping the ETag of its last 200. One
+ * request in `fresh` of each tab is unconditional (a first visit, a cleared cache, another device),
+ * the others send If-None-Match as the browser's cache does when the page polls, refocuses or
+ * reopens. Meanwhile `write()` runs `writesPerSecond` times a second (a garment moved at the bench),
+ * so conditional requests after each write get the changed list (200), not only 304s. Latency is
+ * from each read's scheduled time; writes are not counted. Served: 200s and 304s per second.
+ */
+export async function browserMix(url, cookies, seconds, { clients = 20, fresh = 4, write, writesPerSecond = 1, rate = RATE } = {}) {
+  const n = rate * seconds;
+  const etags = new Array(clients).fill(undefined);
+  const latencies = [];
+  const counts = { 200: 0, 304: 0, other: 0, writes: 0, writeFailures: 0 };
+  let lastEnd = 0;
+  const t0 = performance.now() + 50;
+  const pending = [];
+  let writing = Promise.resolve();
+  let nextWrite = t0 + 1000 / writesPerSecond / 2;
+  for (let i = 0; i < n; i++) {
+    const due = t0 + (i * 1000) / rate;
+    const wait = due - performance.now();
+    if (wait > 1) await sleep(wait);
+    if (write && performance.now() >= nextWrite) {
+      nextWrite += 1000 / writesPerSecond;
+      // One write at a time, as one person at the bench taps.
+      writing = writing.then(() =>
+        write().then(
+          (ok) => (ok ? (counts.writes += 1) : (counts.writeFailures += 1)),
+          () => (counts.writeFailures += 1),
+        ),
+      );
+    }
+    const c = i % clients;
+    const round = Math.floor(i / clients);
+    const headers = { cookie: cookies[c % cookies.length] };
+    if (etags[c] && round % fresh !== 0) headers['if-none-match'] = etags[c];
+    pending.push(
+      get(url, headers).then((r) => {
+        const end = performance.now();
+        latencies.push(end - due);
+        if (r.status === 200) {
+          counts[200] += 1;
+          etags[c] = r.etag;
+        } else if (r.status === 304) counts[304] += 1;
+        else counts.other += 1;
+        lastEnd = Math.max(lastEnd, end);
+      }),
+    );
+  }
+  await Promise.all(pending);
+  await writing;
+  return {
+    served: (counts[200] + counts[304]) / ((lastEnd - t0) / 1000),
+    p99: percentile(latencies, 99),
+    p50: percentile(latencies, 50),
+    n,
+    ...counts,
+  };
+}

@@ -1,8 +1,8 @@
 // The queue as the API reads it: open work (not yet collected) by default, the collected history
 // a page at a time (newest taken in first, by cursor), each answer with an ETag so an unchanged
-// list costs a 304. The open list's ETag comes from one aggregate over the same rows (no rows
-// leave the database for it); every ETag also holds who asks, so it never matches across shops,
-// people or roles.
+// list costs a 304. The ETag is the shop's list version (one row, moved by database triggers with
+// every write the list shows) and who asks, so it never matches across shops, people or roles; an
+// answer's rows and JSON are kept per version, so other clients' 200s do not read them again.
 import { createHash } from 'node:crypto';
 import { and, sql, type SQL } from 'drizzle-orm';
 import { db } from '@/db';
@@ -26,7 +26,10 @@ export interface QueueQuery {
 /** An answer: the rows (null when the client's ETag still holds), the ETag, and the next page's cursor. */
 export interface QueueAnswer {
   etag: string;
-  rows: QueueRow[] | null;
+  /** shared with other answers of the same version: never change them */
+  rows: readonly QueueRow[] | null;
+  /** the rows as JSON in UTF-8, as the endpoint sends them (shared too) */
+  body: Uint8Array<ArrayBuffer> | null;
   next: string | null;
 }
 
@@ -83,36 +86,46 @@ function byDue(a: Read, b: Read): number {
   return due(a) < due(b) ? -1 : due(a) > due(b) ? 1 : a.ticketNumber - b.ticketNumber || a.position - b.position || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
 }
 
-/** The ETag of an answer: who asks (shop, person, role), what they asked, and a fingerprint of the data. */
-function etagOf(actor: Actor, q: QueueQuery, fingerprint: string): string {
-  const h = createHash('sha256').update(JSON.stringify([actor.shopId, actor.userId, actor.role, q.view, q.after ?? null, q.limit, fingerprint]));
+/** The ETag of an answer: who asks (shop, person, role), what they asked, and the shop's list version. */
+function etagOf(actor: Actor, q: QueueQuery, version: string): string {
+  const h = createHash('sha256').update(JSON.stringify([actor.shopId, actor.userId, actor.role, q.view, q.after ?? null, q.limit, version]));
   return `"q-${h.digest('base64url').slice(0, 32)}"`;
 }
 
-/** A fingerprint of the open rows without reading them out: how many, which, and the newest change
- * of each table the rows show (garments, customers, assignees' names). Any edit moves one of these. */
-async function openFingerprint(actor: Actor): Promise<string> {
-  const [f] = await db
-    .select({
-      n: sql<string>`count(*)::text`,
-      // Which rows, with which customer and assignee: a swap keeps the counts but not this sum.
-      ids: sql<string>`coalesce(sum(hashtext("garments"."id"::text || coalesce((select t.customer_id from tickets t where t.id = "garments"."ticket_id")::text, '') || coalesce("garments"."assignee_id", ''))::bigint), 0)::text`,
-      g: sql<string>`max("garments"."updated_at")::text`,
-      c: sql<string>`max(${customerOf('updated_at')})::text`,
-      u: sql<string>`max(${assigneeOf('updated_at')})::text`,
-    })
-    .from(garments)
-    .where(and(garmentVisibleTo(actor), OPEN));
-  return JSON.stringify(f);
+/** The shop's queue-list version: moved by the database's triggers in the same transaction as every
+ * write the list shows (drizzle/0018_list-versions.sql); '0' for a shop not written since. */
+async function listVersion(shopId: string): Promise<string> {
+  // Asked of the driver's client (PGlite or pg's pool, same call), not through Drizzle: this read is
+  // most of a 304's work, and through Drizzle PGlite copies its whole table of type parsers per query
+  // (half the read's CPU, measured).
+  const { rows } = await (db as unknown as { $client: VersionClient }).$client.query(VERSION_SQL, [shopId]);
+  return rows[0]?.v ?? '0';
+}
+type VersionClient = { query(text: string, values: unknown[]): Promise<{ rows: { v: string }[] }> };
+const VERSION_SQL = 'select version::text as v from shop_list_versions where shop_id = $1';
+
+/** A computed answer: the rows, their JSON as sent, and the next page's cursor. */
+interface Computed {
+  rows: QueueRow[];
+  /** UTF-8 once, not per answer */
+  body: Uint8Array<ArrayBuffer>;
+  next: string | null;
 }
 
-/** The queue for the actor: open work by due day, or one page of collected history, newest first. */
-export async function readQueue(actor: Actor, q: QueueQuery, ifNoneMatch: string | null): Promise<QueueAnswer> {
+// Answers kept in this process per question (shop, what the role may see, view, page), each with the
+// version it was read at, and used only while the database still says that version: a write
+// anywhere (another server too) moves the version, so a kept answer is never served stale. Bounded,
+// oldest question out. Rows are read after the version, so a kept answer is never older than its version.
+const KEPT_MAX = 200;
+const kept = new Map<string, { version: string; answer: Promise<Computed> }>();
+
+const utf8 = (rows: QueueRow[]) => Buffer.from(JSON.stringify(rows));
+
+async function compute(actor: Actor, q: QueueQuery): Promise<Computed> {
+  const phones = can(actor.role, ['customers', 'read']);
   if (q.view === 'open') {
-    const etag = etagOf(actor, q, await openFingerprint(actor));
-    if (matches(ifNoneMatch, etag)) return { etag, rows: null, next: null };
-    const rows = (await rowsOf(and(garmentVisibleTo(actor), OPEN), can(actor.role, ['customers', 'read']))) as Read[];
-    return { etag, rows: rows.sort(byDue).map(shown), next: null };
+    const rows = ((await rowsOf(and(garmentVisibleTo(actor), OPEN), phones)) as Read[]).sort(byDue).map(shown);
+    return { rows, body: utf8(rows), next: null };
   }
   const after = q.after ?? null;
   const page = (await rowsOf(
@@ -121,24 +134,44 @@ export async function readQueue(actor: Actor, q: QueueQuery, ifNoneMatch: string
       COLLECTED,
       after ? sql`(${garments.createdAt}, ${garments.id}) < (${after.createdAt}::timestamptz, ${after.id}::uuid)` : undefined,
     ),
-    can(actor.role, ['customers', 'read']),
+    phones,
   )
     .orderBy(sql`${garments.createdAt} desc nulls last`, sql`${garments.id} desc nulls last`)
     .limit(q.limit + 1)) as Read[];
-  const more = page.length > q.limit;
-  const rows = page.slice(0, q.limit);
-  const last = rows.at(-1);
-  const next = more && last ? encodeCursor(last) : null;
-  const shownRows = rows.map(shown);
-  // A history page is read rarely: its ETag is simply the page itself.
-  const etag = etagOf(
-    actor,
-    q,
-    createHash('sha256')
-      .update(JSON.stringify([shownRows, next]))
-      .digest('base64url'),
-  );
-  return { etag, rows: matches(ifNoneMatch, etag) ? null : shownRows, next };
+  const last = page.length > q.limit ? page[q.limit - 1] : undefined;
+  const rows = page.slice(0, q.limit).map(shown);
+  return { rows, body: utf8(rows), next: last ? encodeCursor(last) : null };
+}
+
+/** The kept answer to this question at this version, or a new one (one read however many ask at once). */
+function answerAt(actor: Actor, q: QueueQuery, version: string): Promise<Computed> {
+  // What the rows depend on besides the shop: everything (or only their own and unassigned work), phones or not.
+  const scope = can(actor.role, ['tickets', 'read-all']) ? '*' : `u:${actor.userId}`;
+  const key = JSON.stringify([actor.shopId, scope, can(actor.role, ['customers', 'read']), q.view, q.after ?? null, q.view === 'open' ? null : q.limit]);
+  const hit = kept.get(key);
+  if (hit?.version === version) return hit.answer;
+  const answer = compute(actor, q);
+  // A slower request that read an older version does not push out a newer answer.
+  if (!hit || BigInt(version) > BigInt(hit.version)) {
+    kept.delete(key);
+    if (kept.size >= KEPT_MAX) kept.delete(kept.keys().next().value!);
+    kept.set(key, { version, answer });
+    answer.catch(() => kept.get(key)?.answer === answer && kept.delete(key));
+  }
+  return answer;
+}
+
+/** The queue for the actor: open work by due day, or one page of collected history, newest first.
+ * An unchanged list (the shop's version as the client's ETag says) costs one read by primary key. */
+export async function readQueue(actor: Actor, q: QueueQuery, ifNoneMatch: string | null): Promise<QueueAnswer> {
+  const version = await listVersion(actor.shopId);
+  const etag = etagOf(actor, q, version);
+  // The next cursor is in the ETag's question (q.after) and version, so a 304 needs no rows; a history
+  // 304 still reads its page for the Link header, from the kept answer when there is one.
+  if (matches(ifNoneMatch, etag) && q.view === 'open') return { etag, rows: null, body: null, next: null };
+  const answer = await answerAt(actor, q, version);
+  if (matches(ifNoneMatch, etag)) return { etag, rows: null, body: null, next: answer.next };
+  return { etag, rows: answer.rows, body: answer.body, next: answer.next };
 }
 
 /** The queue's "Tailor" filter for the actor: only choices that can match a row they may see. */

@@ -98,8 +98,8 @@ async function stopApp(app: App, signal: NodeJS.Signals = 'SIGTERM'): Promise<vo
 }
 
 /** One JSON call to a server; the answer's status and parsed body. */
-async function call(app: App, method: string, path: string, opts: { cookie?: string; body?: unknown } = {}) {
-  const headers: Record<string, string> = { origin: app.base };
+async function call(app: App, method: string, path: string, opts: { cookie?: string; body?: unknown; headers?: Record<string, string> } = {}) {
+  const headers: Record<string, string> = { origin: app.base, ...opts.headers };
   if (opts.cookie) headers.cookie = opts.cookie;
   if (opts.body !== undefined) headers['content-type'] = 'application/json';
   const res = await fetch(`${app.base}${path}`, { method, headers, body: opts.body === undefined ? undefined : JSON.stringify(opts.body), redirect: 'manual' });
@@ -142,7 +142,7 @@ async function freshGarment(status: (typeof garments.$inferInsert)['status'] = '
     .insert(garments)
     .values({ shopId, ticketId: t!.id, description: 'Grey flannel', finish: 'cuff', position: 0, status })
     .returning();
-  return { shopId, ticketId: t!.id, garmentId: g!.id };
+  return { shopId, ticketId: t!.id, garmentId: g!.id, customerId: c!.id };
 }
 
 /** Messages a capture folder holds for one recipient. */
@@ -244,6 +244,27 @@ describe.skipIf(!serverUrl)('two app servers on one PostgreSQL', () => {
     expect([409, 422]).toContain(statuses[1]);
     const [row] = await handle.db.select({ status: garments.status }).from(garments).where(eq(garments.id, garmentId));
     expect(row!.status).toBe('cut');
+  });
+
+  it('the queue kept on B is not answered after a move on A, nor after a write straight into the database', async () => {
+    const cookie = cookieOf((await signIn(apps.A, DEMO.lead)).headers);
+    const { garmentId, customerId } = await freshGarment('received');
+    const read = (app: App, etag?: string) => call(app, 'GET', '/api/garments', { cookie, headers: etag ? { 'if-none-match': etag } : {} });
+    const first = await read(apps.B);
+    expect(first.body.find((r: { id: string }) => r.id === garmentId)).toMatchObject({ status: 'received' });
+    const etag = first.headers.get('etag')!;
+    // Unchanged: both servers answer 304 to B's ETag (the version is the database's, not one server's).
+    expect((await read(apps.B, etag)).status).toBe(304);
+    expect((await read(apps.A, etag)).status).toBe(304);
+    expect((await call(apps.A, 'POST', `/api/garments/${garmentId}/step`, { cookie, body: { to: 'marked' } })).status).toBe(200);
+    const after = await read(apps.B, etag);
+    expect(after.status).toBe(200);
+    expect(after.body.find((r: { id: string }) => r.id === garmentId)).toMatchObject({ status: 'marked' });
+    // A script or another program writing the database: B sees it on its next read too.
+    await handle.db.update(customers).set({ name: 'Odile Renamed' }).where(eq(customers.id, customerId));
+    const renamed = await read(apps.B, after.headers.get('etag')!);
+    expect(renamed.status).toBe(200);
+    expect(renamed.body.find((r: { id: string }) => r.id === garmentId)).toMatchObject({ customerName: 'Odile Renamed' });
   });
 
   it('a notice falling due while both servers run is sent exactly once', async () => {

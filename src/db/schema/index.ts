@@ -10,3 +10,4 @@ export * from './payments';
 export * from './notices';
 export * from './limits';
 export * from './sent-mail';
+export * from './list-versions';
