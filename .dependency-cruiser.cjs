@@ -51,10 +51,19 @@ module.exports = {
     },
     {
       name: 'pricing-is-pure',
-      comment: 'Price computation imports only its own files, the engine and npm packages: no app code, ' + 'no Astro, no Node built-ins.',
+      comment:
+        'Price computation imports only its own files, the engine, the fitting vocabulary (kinds.ts, which imports nothing) ' +
+        'and npm packages: no app code, no Astro, no Node built-ins.',
       severity: 'error',
       from: { path: '^src/lib/pricing/' },
-      to: { pathNot: ['^src/lib/pricing/', '^src/lib/allowance/'], dependencyTypesNot: NPM_PACKAGE },
+      to: { pathNot: ['^src/lib/pricing/', '^src/lib/allowance/', '^src/lib/fitting/kinds\\.ts$'], dependencyTypesNot: NPM_PACKAGE },
+    },
+    {
+      name: 'fitting-vocabulary-imports-nothing',
+      comment: 'The fitting vocabulary is plain data that the engine-side pricing reads: it imports nothing.',
+      severity: 'error',
+      from: { path: '^src/lib/fitting/kinds\\.ts$' },
+      to: {},
     },
     {
       name: 'pricing-no-builtins',
