@@ -4,10 +4,10 @@
 // step record is not a control; a garment with no fitting is asked about before it passes
 // Chalk-marked, and refused outright once the lead makes that the rule.
 // Screenshots in test-results/bench-tablet-*.png.
-import type { Browser, Locator, Page } from 'playwright-core';
-import { describe, expect, inject, it } from 'vitest';
+import type { Locator, Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { ready, sharedBrowser } from './browser';
-import { signInAs } from './sign-in';
+import { signedInPage } from './sign-in';
 
 const browser = sharedBrowser();
 
@@ -19,11 +19,6 @@ const SCREENS = [
   { width: 768, height: 1024 },
   { width: 1024, height: 768 },
 ];
-
-async function pageAt(b: Browser, size: { width: number; height: number }): Promise<Page> {
-  const context = await b.newContext({ baseURL: inject('baseURL'), viewport: size, hasTouch: true });
-  return context.newPage();
-}
 
 /** Opens a ticket with one garment through the API, as the signed-in page; the garment's id. */
 async function freshGarment(page: Page, description: string): Promise<string> {
@@ -68,8 +63,7 @@ describe('the plan stays in sight while the fitting is typed', () => {
   let id = '';
   for (const size of SCREENS) {
     it(`at ${size.width} × ${size.height}: the summary bar's cut line is on screen and clear of the field, for every length field focused in turn`, async () => {
-      const page = await pageAt(browser(), size);
-      await signInAs(page, 'tailor', '/queue');
+      const page = await signedInPage(browser(), 'tailor', '/queue', { viewport: size, hasTouch: true });
       if (!id) id = await freshGarment(page, 'Bottle green moleskin');
       await page.goto(`/garments/${id}`);
       await ready(page);
@@ -111,8 +105,7 @@ describe('the preset list opens without moving the form', () => {
   let id = '';
   for (const size of SCREENS.filter((s) => s.height > 480)) {
     it(`at ${size.width} px: opens a labelled dialog over the form; no field moves, Escape closes it, the keyboard picks a preset`, async () => {
-      const page = await pageAt(browser(), size);
-      await signInAs(page, 'tailor', '/queue');
+      const page = await signedInPage(browser(), 'tailor', '/queue', { viewport: size, hasTouch: true });
       if (!id) id = await freshGarment(page, 'Sand linen trousers');
       await page.goto(`/garments/${id}`);
       await ready(page);
@@ -159,8 +152,7 @@ describe('the preset list opens without moving the form', () => {
 
 describe('the step record and the move past Chalk-marked', () => {
   it('draws the steps as a record, not as controls', async () => {
-    const page = await pageAt(browser(), { width: 768, height: 1024 });
-    await signInAs(page, 'tailor', '/queue');
+    const page = await signedInPage(browser(), 'tailor', '/queue', { viewport: { width: 768, height: 1024 }, hasTouch: true });
     const id = await freshGarment(page, 'Ash flannel');
     await page.goto(`/garments/${id}`);
     await ready(page);
@@ -181,8 +173,7 @@ describe('the step record and the move past Chalk-marked', () => {
   });
 
   it('asks before a garment with no fitting is marked Cut (warn), and goes on only when told', async () => {
-    const page = await pageAt(browser(), { width: 1024, height: 768 });
-    await signInAs(page, 'tailor', '/queue');
+    const page = await signedInPage(browser(), 'tailor', '/queue', { viewport: { width: 1024, height: 768 }, hasTouch: true });
     const id = await freshGarment(page, 'Mist grey twill');
     await page.goto(`/garments/${id}`);
     await ready(page);
@@ -210,8 +201,7 @@ describe('the step record and the move past Chalk-marked', () => {
   });
 
   it('goes straight on, with no question, once the fitting is saved', async () => {
-    const page = await pageAt(browser(), { width: 768, height: 1024 });
-    await signInAs(page, 'tailor', '/queue');
+    const page = await signedInPage(browser(), 'tailor', '/queue', { viewport: { width: 768, height: 1024 }, hasTouch: true });
     const id = await freshGarment(page, 'Camel cavalry twill');
     await page.goto(`/garments/${id}`);
     await ready(page);
@@ -228,8 +218,7 @@ describe('the step record and the move past Chalk-marked', () => {
   });
 
   it('the lead makes it a rule: refused on screen and by the server until a fitting is saved', async () => {
-    const lead = await pageAt(browser(), { width: 1024, height: 768 });
-    await signInAs(lead, 'lead', '/bench-settings');
+    const lead = await signedInPage(browser(), 'lead', '/bench-settings', { viewport: { width: 1024, height: 768 }, hasTouch: true });
     const setRule = async (label: RegExp) => {
       await lead.goto('/bench-settings');
       await ready(lead);
@@ -239,8 +228,7 @@ describe('the step record and the move past Chalk-marked', () => {
     };
     await setRule(/^Refuse/);
     try {
-      const page = await pageAt(browser(), { width: 768, height: 1024 });
-      await signInAs(page, 'tailor', '/queue');
+      const page = await signedInPage(browser(), 'tailor', '/queue', { viewport: { width: 768, height: 1024 }, hasTouch: true });
       const id = await freshGarment(page, 'Ink blue serge');
       await page.goto(`/garments/${id}`);
       await ready(page);

@@ -4,8 +4,8 @@
 // but not change its measurements. Screenshots land in test-results/ to look at.
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { ready, sharedBrowser, tabletPage } from './browser';
-import { signInAs } from './sign-in';
+import { ready, sharedBrowser, TABLET } from './browser';
+import { signedInPage } from './sign-in';
 
 const browser = sharedBrowser();
 
@@ -20,8 +20,7 @@ const choose = (page: Page, name: string) => page.locator('label', { has: page.g
 
 describe('story 1: a tailor takes in a garment and plans both legs', () => {
   it('opens a ticket, enters each leg, reads the cutting line, and keeps a mistyped length to fix', async () => {
-    const page = await tabletPage(browser());
-    await signInAs(page, 'tailor', '/tickets/new');
+    const page = await signedInPage(browser(), 'tailor', '/tickets/new', TABLET);
 
     await page.getByRole('radio', { name: 'A new customer' }).check();
     await field(page, 'Name').fill('Perpetua Lindqvist');
@@ -101,8 +100,7 @@ describe('story 1: a tailor takes in a garment and plans both legs', () => {
 
 describe('story 3: an apprentice works the queue', () => {
   it('finds the garment, moves it on with one tap, and reads its measurements without changing them', async () => {
-    const page = await tabletPage(browser());
-    await signInAs(page, 'apprentice', '/queue');
+    const page = await signedInPage(browser(), 'apprentice', '/queue', TABLET);
     await page.getByTestId('queue-row').first().waitFor();
     // Only their own and unassigned work: the tailor's charcoal trousers are not listed.
     expect(await page.getByText('Charcoal wool trousers').count()).toBe(0);
@@ -150,8 +148,7 @@ describe('story 3: an apprentice works the queue', () => {
 
 describe('the queue for the lead', () => {
   it('filters to overdue work, sorts by ticket, and marks every overdue row in words', async () => {
-    const page = await tabletPage(browser());
-    await signInAs(page, 'lead', '/queue');
+    const page = await signedInPage(browser(), 'lead', '/queue', TABLET);
     await page.getByTestId('queue-row').first().waitFor();
     const all = await page.getByTestId('queue-row').count();
     await page.getByLabel('Wanted by', { exact: true }).selectOption('overdue');
@@ -180,8 +177,7 @@ describe('the queue for the lead', () => {
 
 describe('a tapered leg at the bench', () => {
   it('shows the taper check and the front-pin note from the saved fitting', async () => {
-    const page = await tabletPage(browser());
-    await signInAs(page, 'tailor', '/queue');
+    const page = await signedInPage(browser(), 'tailor', '/queue', TABLET);
     await page.getByLabel('Customer or ticket').fill('1004');
     await page.getByRole('link', { name: 'Charcoal wool trousers' }).click();
     await page.waitForURL(/\/garments\/[0-9a-f-]{36}$/);

@@ -35,13 +35,12 @@ export function sharedBrowser(): () => Browser {
   };
 }
 
+/** A tablet held in landscape, as a context's options. */
+export const TABLET = { viewport: { width: 1180, height: 820 }, hasTouch: true };
+
 /** A fresh page in its own context, sized like a tablet held in landscape. */
 export async function tabletPage(browser: Browser): Promise<Page> {
-  const context = await browser.newContext({
-    baseURL: inject('baseURL'),
-    viewport: { width: 1180, height: 820 },
-    hasTouch: true,
-  });
+  const context = await browser.newContext({ baseURL: inject('baseURL'), ...TABLET });
   return context.newPage();
 }
 

@@ -2,6 +2,7 @@
 // folder (the demo shop is seeded on first start) and the local mail capture; every browser story
 // and HTTP test reaches it through inject('baseURL'), and reads captured mail in inject('mailDir').
 import { spawn, type ChildProcess } from 'node:child_process';
+import { once } from 'node:events';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -105,11 +106,13 @@ export default async function setup(project: TestProject) {
   project.provide('smsBase', sms.base);
   project.provide('smsEnv', sms.env);
   return async () => {
+    // The data folder goes once the server has let go of it: wait for its exit, not a fixed time.
+    const exited = server && server.exitCode === null && server.signalCode === null ? once(server, 'exit') : Promise.resolve();
     server?.kill('SIGTERM');
     await capture.close();
     await payments.close();
     await sms.close();
-    await new Promise((r) => setTimeout(r, 300));
+    await Promise.race([exited, new Promise((r) => setTimeout(r, 10_000).unref())]);
     rmSync(dataDir, { recursive: true, force: true });
   };
 }

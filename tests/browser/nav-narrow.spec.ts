@@ -20,7 +20,7 @@ describe('signed-in nav on narrow screens', () => {
     it(`wraps without running off the side at ${width} px`, async () => {
       const page = await pageAt(width);
       // The lead has the most links. Every screen's own content, for every role and at 1024 px
-      // too, is checked in screens-narrow.spec.ts; here the lead's screens reached from the nav.
+      // too, is checked in sweep.spec.ts; here the lead's screens reached from the nav.
       await signInAs(page, 'lead', '/queue');
       for (const path of ['/presets', '/tickets/new', '/prices', '/staff', '/bench-settings', '/queue']) {
         await page.goto(path);

@@ -6,8 +6,8 @@ import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, inject, it } from 'vitest';
 import { call, DEMO, signIn } from '../http/client';
-import { ready, sharedBrowser, tabletPage } from './browser';
-import { signInAs } from './sign-in';
+import { ready, sharedBrowser, TABLET, tabletPage } from './browser';
+import { signedInPage } from './sign-in';
 
 const browser = sharedBrowser();
 // The demo shop is Pinmark & Hem: its ticket book is numbered "PH 1001", "PH 1002", ...
@@ -24,9 +24,7 @@ async function someOpenGarment(): Promise<{ id: string; ticketId: string }> {
 
 describe('the queue in the shop’s own words', () => {
   it('heads its columns Tailor, Wanted by, Ticket no. and Stage, numbers tickets as PH 1001, and has no coloured edge stripes', async () => {
-    const page = await tabletPage(browser());
-    await page.setViewportSize({ width: 1280, height: 900 });
-    await signInAs(page, 'lead', '/queue');
+    const page = await signedInPage(browser(), 'lead', '/queue', { ...TABLET, viewport: { width: 1280, height: 900 } });
     await page.getByTestId('queue-row').first().waitFor();
     const headers = (await page.getByRole('columnheader').allInnerTexts()).map((t) => t.replace(/[▲▼]/g, '').trim());
     expect(headers).toEqual(expect.arrayContaining(['Tailor', 'Wanted by', 'Ticket no.', 'Stage']));
@@ -45,8 +43,7 @@ describe('the queue in the shop’s own words', () => {
 
   it('the counter shows the same ticket number, from the shop’s ticket book', async () => {
     const { ticketId } = await someOpenGarment();
-    const page = await tabletPage(browser());
-    await signInAs(page, 'counter', `/counter/${ticketId}`);
+    const page = await signedInPage(browser(), 'counter', `/counter/${ticketId}`, TABLET);
     const shown = (await page.getByTestId('ticket-number').innerText()).trim();
     expect(shown).toMatch(TICKET_NO);
     expect(await page.locator('main').innerText()).not.toMatch(/\bT-\d/);
@@ -58,8 +55,7 @@ describe('the queue in the shop’s own words', () => {
 describe('the safety notes and the payment fake’s words', () => {
   it('the garment and home pages say "Mind your hands" in the shop’s voice, with the same cautions', async () => {
     const { id } = await someOpenGarment();
-    const page = await tabletPage(browser());
-    await signInAs(page, 'tailor', `/garments/${id}`);
+    const page = await signedInPage(browser(), 'tailor', `/garments/${id}`, TABLET);
     for (const path of [`/garments/${id}`, '/']) {
       await page.goto(path);
       await ready(page);
@@ -97,8 +93,7 @@ describe('the safety notes and the payment fake’s words', () => {
     ];
     const seen: string[] = [];
     for (const role of ['lead', 'counter'] as const) {
-      const page = await tabletPage(browser());
-      await signInAs(page, role, '/');
+      const page = await signedInPage(browser(), role, '/', TABLET);
       for (const path of screens) {
         const r = await page.goto(path);
         if (!r || r.status() >= 400) continue;

@@ -5,8 +5,8 @@
 import { mkdirSync } from 'node:fs';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launch, ready, tabletPage } from './browser';
-import { signInAs } from './sign-in';
+import { launch, ready, TABLET } from './browser';
+import { signedInPage } from './sign-in';
 
 let browser: Browser;
 const stamp = Date.now().toString(36);
@@ -23,8 +23,7 @@ afterAll(async () => {
 
 describe('house presets from the lead to the bench', () => {
   it('the lead saves a house preset and makes it the house default', async () => {
-    const page = await tabletPage(browser);
-    await signInAs(page, 'lead', '/presets');
+    const page = await signedInPage(browser, 'lead', '/presets', TABLET);
     await expect(page.getByRole('link', { name: 'Presets' }).getAttribute('aria-current')).resolves.toBe('page');
     const form = page.getByRole('form', { name: 'New house preset' });
     await form.getByLabel('Preset name').fill(houseName);
@@ -44,8 +43,7 @@ describe('house presets from the lead to the bench', () => {
   });
 
   it('a tailor keeps a preset of their own and edits it; house presets are theirs to read only', async () => {
-    const page = await tabletPage(browser);
-    await signInAs(page, 'tailor', '/presets');
+    const page = await signedInPage(browser, 'tailor', '/presets', TABLET);
     const house = page.getByRole('region', { name: 'House presets', exact: true });
     await house.getByRole('listitem').filter({ hasText: houseName }).getByText('House default').waitFor();
     // The tailor keeps no house presets: no form, no edit or remove on them.
@@ -76,8 +74,7 @@ describe('house presets from the lead to the bench', () => {
   });
 
   it('on a garment page, the tailor fills a leg with the house preset in one tap', async () => {
-    const page = await tabletPage(browser);
-    await signInAs(page, 'tailor', '/presets');
+    const page = await signedInPage(browser, 'tailor', '/presets', TABLET);
     const queue = (await (await page.request.get('/api/garments')).json()) as { id: string }[];
     await page.goto(`/garments/${queue[0]!.id}`);
     await ready(page);
@@ -98,8 +95,7 @@ describe('house presets from the lead to the bench', () => {
   });
 
   it('the lead gives the house default back to the classic cuff and removes the trial preset', async () => {
-    const page = await tabletPage(browser);
-    await signInAs(page, 'lead', '/presets');
+    const page = await signedInPage(browser, 'lead', '/presets', TABLET);
     const list = page.getByRole('region', { name: 'Manage house presets' });
     await list.getByRole('button', { name: 'Make default: Classic cuff' }).click();
     await list.getByRole('listitem').filter({ hasText: 'Classic cuff' }).getByText('House default').waitFor();
@@ -110,8 +106,7 @@ describe('house presets from the lead to the bench', () => {
   });
 
   it('a new fitting starts from the house default, said on screen, one tap from another preset', async () => {
-    const page = await tabletPage(browser);
-    await signInAs(page, 'tailor', '/queue');
+    const page = await signedInPage(browser, 'tailor', '/queue', TABLET);
     const id = await freshGarment(page, `Default story trousers ${stamp}`);
     await page.goto(`/garments/${id}`);
     await ready(page);
@@ -147,8 +142,7 @@ describe('house presets from the lead to the bench', () => {
   });
 
   it('the lead edits a house preset’s depth and name, and a fitting that used it shows the new name', async () => {
-    const page = await tabletPage(browser);
-    await signInAs(page, 'lead', '/presets');
+    const page = await signedInPage(browser, 'lead', '/presets', TABLET);
     const before = `Story cuff ${stamp}`;
     const after = `Story cuff 1 5/8 ${stamp}`;
     const preset = await apiSend(page, 'POST', '/api/presets', {
@@ -183,8 +177,7 @@ describe('house presets from the lead to the bench', () => {
     const fitting = page.getByRole('form', { name: 'Fitting measurements' });
     await fitting.locator('strong', { hasText: after }).waitFor();
     // The apprentice reads it the same way.
-    const reader = await tabletPage(browser);
-    await signInAs(reader, 'apprentice', '/queue');
+    const reader = await signedInPage(browser, 'apprentice', '/queue', TABLET);
     await reader.goto(`/garments/${id}`);
     await ready(reader);
     await reader

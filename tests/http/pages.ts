@@ -1,5 +1,5 @@
-// Every page file under src/pages, as an address to open: the header and CSP tests cover them
-// all, and a page file missing here fails them (add its address below).
+// Every page file under src/pages, as an address to open: the header test covers them all, and a
+// page file missing here fails it (add its address below; the browser sweep has its own table).
 import { readdirSync } from 'node:fs';
 import { join, relative, sep } from 'node:path';
 import { call, DEMO, signIn } from './client';
