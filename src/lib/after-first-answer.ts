@@ -7,7 +7,7 @@ let armed = false;
 export function afterFirstAnswer(response: Response, then: () => void): Response {
   if (armed) return response;
   armed = true;
-  const later = () => setImmediate(then);
+  const later = () => void setImmediate(then);
   if (!response.body) {
     later();
     return response;
