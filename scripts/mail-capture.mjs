@@ -2,7 +2,6 @@
 // no TLS) and saves it as JSON in a folder the app's sent-messages page reads (by Message-ID, for
 // the messages the database says a shop sent). Never for production.
 import { SMTPServer } from 'smtp-server';
-import { simpleParser } from 'mailparser';
 import { mkdirSync, writeFileSync, renameSync } from 'node:fs';
 import { join } from 'node:path';
 import { randomUUID } from 'node:crypto';
@@ -17,7 +16,9 @@ export function startMailCapture({ dir, port = 1025, host = '127.0.0.1', quiet =
     disabledCommands: ['STARTTLS', 'AUTH'],
     logger: false,
     onData(stream, session, callback) {
-      simpleParser(stream)
+      // mailparser loads at the first message: npm start need not pay its modules while the server starts.
+      import('mailparser')
+        .then(({ simpleParser }) => simpleParser(stream))
         .then((mail) => {
           const at = new Date();
           const id = `${at.toISOString().replace(/[:.]/g, '-')}-${randomUUID().slice(0, 8)}`;

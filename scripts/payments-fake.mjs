@@ -7,10 +7,17 @@
 import { createServer } from 'node:http';
 import { randomBytes } from 'node:crypto';
 import { fileURLToPath } from 'node:url';
-import Stripe from 'stripe';
 import { listenOrExplain } from './port-taken.mjs';
 
-const signer = new Stripe('sk_test_signing_only', { telemetry: false });
+// The SDK (only to sign webhooks as the real service does) loads at the first webhook, not while npm start starts the server.
+let sdk = null;
+async function stripeSdk() {
+  if (!sdk) {
+    const Stripe = (await import('stripe')).default;
+    sdk = { Stripe, signer: new Stripe('sk_test_signing_only', { telemetry: false }) };
+  }
+  return sdk;
+}
 
 /** Reads nested form fields (line_items[0][price_data][currency]=eur) into plain objects. */
 export function parseForm(body) {
@@ -49,6 +56,7 @@ export function startPaymentsFake({ port = 12111, host = '127.0.0.1', apiKey, we
   let base = '';
 
   async function sendWebhook(session, type = 'checkout.session.completed') {
+    const { Stripe, signer } = await stripeSdk();
     const event = {
       id: id('evt'),
       object: 'event',

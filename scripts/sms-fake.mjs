@@ -7,7 +7,6 @@
 import { createServer } from 'node:http';
 import { randomBytes } from 'node:crypto';
 import { fileURLToPath } from 'node:url';
-import twilio from 'twilio';
 import { listenOrExplain } from './port-taken.mjs';
 
 const hex = (n) => randomBytes(n).toString('hex');
@@ -36,6 +35,8 @@ export function startSmsFake({ port = 12112, host = '127.0.0.1', accountSid, aut
       ApiVersion: '2010-04-01',
     };
     if (message.errorCode) params.ErrorCode = String(message.errorCode);
+    // The SDK (only to sign callbacks as the real service does) loads at the first callback, not at start.
+    const twilio = (await import('twilio')).default;
     const signature = twilio.getExpectedTwilioSignature(authToken, message.statusCallback, params);
     try {
       const res = await fetch(message.statusCallback, {

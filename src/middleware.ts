@@ -6,7 +6,8 @@ import { defineMiddleware } from 'astro:middleware';
 import { BETTER_AUTH_URL } from 'astro:env/server';
 import { memberRequestStarted } from '@/lib/member-activity';
 import { badIdParam } from '@/lib/ids';
-import { forgetSessions, lookUpSession } from '@/services/session-lookup';
+import { forgetSessions, lookUpSession, warmAuth } from '@/services/session-lookup';
+import { afterFirstAnswer } from '@/lib/after-first-answer';
 import { withSecurityHeaders } from '@/lib/security-headers';
 import { logError, logRequest } from '@/lib/request-log';
 import { ensureStarted } from '@/services/startup';
@@ -54,9 +55,11 @@ export const onRequest = defineMiddleware(async (context, next) => {
   const began = performance.now();
   let status = 500;
   try {
-    const res = withSecurityHeaders(await jsonRefusal(context.url.pathname, await answer(context, next, done)), {
+    const answered = withSecurityHeaders(await jsonRefusal(context.url.pathname, await answer(context, next, done)), {
       csp: import.meta.env.MODE !== 'development',
     });
+    // better-auth is not needed to answer a signed-out page: it loads once the first answer is out.
+    const res = afterFirstAnswer(answered, () => void warmAuth().catch(() => {}));
     status = res.status;
     return res;
   } catch (e) {

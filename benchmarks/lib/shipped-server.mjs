@@ -29,7 +29,8 @@ export async function startShipped({ dataDir, env = {}, timeoutMs = 180_000, qui
   buildIfNeeded('dist');
   const ownDir = !dataDir;
   const dir = dataDir ?? mkdtempSync(join(tmpdir(), 'cuffwright-bench-'));
-  const [port, smtp, pay] = [await freePort(), await freePort(), await freePort()];
+  // Every stand-in on its own free port: two benchmarks (or helpers) may run at once.
+  const [port, smtp, pay, sms] = [await freePort(), await freePort(), await freePort(), await freePort()];
   const base = `http://localhost:${port}`;
   const t0 = performance.now();
   const child = spawn('node', ['scripts/start.mjs'], {
@@ -41,6 +42,7 @@ export async function startShipped({ dataDir, env = {}, timeoutMs = 180_000, qui
       DATA_DIR: dir,
       SMTP_PORT: String(smtp),
       PAYMENTS_FAKE_PORT: String(pay),
+      SMS_FAKE_PORT: String(sms),
       BETTER_AUTH_URL: base,
       ...env,
     },

@@ -13,7 +13,7 @@ import { refuseUnsafeStart } from './deployment';
 import { sendMail } from './mail';
 import { ROLE_LABELS, isRole } from './roles';
 
-// The first request loads this module: a shared database without a session secret stops here.
+// A shared database without a session secret stops here (and in services/startup.ts, at start).
 refuseUnsafeStart({ DATABASE_URL, BETTER_AUTH_SECRET });
 
 /** The better-auth instance; its HTTP handler answers /api/auth/*. */

@@ -1,20 +1,27 @@
 // Outgoing e-mail over SMTP with nodemailer. Locally the host is the capture service started by
 // npm start / dev / the tests; a real SMTP host is only a matter of SMTP_* variables.
-import nodemailer from 'nodemailer';
+// nodemailer is loaded at the first message, not at start-up.
+import type { Transporter } from 'nodemailer';
 import { MAIL_FROM, SMTP_HOST, SMTP_PASS, SMTP_PORT, SMTP_SECURE, SMTP_USER } from 'astro:env/server';
 import { recordSentMail, type MailOrigin } from './sent-mail-record';
 
-const transport = nodemailer.createTransport({
-  host: SMTP_HOST,
-  port: SMTP_PORT,
-  secure: SMTP_SECURE,
-  auth: SMTP_USER ? { user: SMTP_USER, pass: SMTP_PASS ?? '' } : undefined,
-  // Bounded well inside a notice's send lease (services/notices.ts): a send either ends or fails
-  // before another server may take it over.
-  connectionTimeout: 30_000,
-  greetingTimeout: 20_000,
-  socketTimeout: 60_000,
-});
+let transport: Promise<Transporter> | null = null;
+
+/** The SMTP transport, made once at the first message. */
+async function makeTransport(): Promise<Transporter> {
+  const nodemailer = (await import('nodemailer')).default;
+  return nodemailer.createTransport({
+    host: SMTP_HOST,
+    port: SMTP_PORT,
+    secure: SMTP_SECURE,
+    auth: SMTP_USER ? { user: SMTP_USER, pass: SMTP_PASS ?? '' } : undefined,
+    // Bounded well inside a notice's send lease (services/notices.ts): a send either ends or fails
+    // before another server may take it over.
+    connectionTimeout: 30_000,
+    greetingTimeout: 20_000,
+    socketTimeout: 60_000,
+  });
+}
 
 /** A message to send. */
 export interface Mail {
@@ -27,7 +34,7 @@ export interface Mail {
 
 /** Sends one message and records which shop (if any) caused it; throws when the SMTP host refuses it. */
 export async function sendMail(mail: Mail, origin: MailOrigin): Promise<void> {
-  const info = await transport.sendMail({ from: MAIL_FROM, ...mail });
+  const info = await (await (transport ??= makeTransport())).sendMail({ from: MAIL_FROM, ...mail });
   try {
     await recordSentMail(origin, { to: mail.to, subject: mail.subject, messageId: info.messageId });
   } catch (e) {

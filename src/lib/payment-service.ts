@@ -1,6 +1,7 @@
 // The hosted payment service through its official SDK. Configuration alone decides where it
 // talks: PAYMENTS_API_BASE names the local fake; unset, the SDK's own default host is used.
-import Stripe from 'stripe';
+// The SDK (some 200 modules) is loaded at the first payment call, not at start-up.
+import type Stripe from 'stripe';
 import { PAYMENTS_API_BASE, PAYMENTS_API_KEY, PAYMENTS_WEBHOOK_SECRET } from 'astro:env/server';
 
 let client: Stripe | null = null;
@@ -8,12 +9,23 @@ let client: Stripe | null = null;
 /** How long one call to the service may take before the SDK gives up (a connection error: 503). */
 export const PAYMENT_TIMEOUT_MS = 5_000;
 
+/** Whether an API key is configured (the client itself loads on first use). */
+export function paymentsConfigured(): boolean {
+  return Boolean(PAYMENTS_API_KEY);
+}
+
+/** The SDK's class, loaded once on first use. */
+async function sdk(): Promise<typeof Stripe> {
+  return (await import('stripe')).default;
+}
+
 /** The SDK client, or null when no API key is configured. */
-export function paymentClient(): Stripe | null {
+export async function paymentClient(): Promise<Stripe | null> {
   if (!PAYMENTS_API_KEY) return null;
   if (client) return client;
+  const Sdk = await sdk();
   const base = PAYMENTS_API_BASE ? new URL(PAYMENTS_API_BASE) : null;
-  client = new Stripe(PAYMENTS_API_KEY, {
+  client ??= new Sdk(PAYMENTS_API_KEY, {
     ...(base
       ? {
           host: base.hostname,
@@ -36,6 +48,6 @@ export function webhookSecret(): string | null {
 }
 
 /** Checks a webhook's signature (and age) and returns its event; throws when it does not verify. */
-export function verifyWebhook(payload: string, signature: string, secret: string): Stripe.Event {
-  return Stripe.webhooks.constructEvent(payload, signature, secret);
+export async function verifyWebhook(payload: string, signature: string, secret: string): Promise<Stripe.Event> {
+  return (await sdk()).webhooks.constructEvent(payload, signature, secret);
 }

@@ -1,10 +1,11 @@
 // One JSON line per request (pino) when REQUEST_LOG=json: time, method, route pattern, status,
 // milliseconds and the shop, never the path's ids, the query or a body. Off by default (npm start,
 // tests); `npm run serve` turns it on.
-import pino from 'pino';
 import { REQUEST_LOG } from 'astro:env/server';
 
-const logger = REQUEST_LOG === 'json' ? pino({ base: { app: 'cuffwright' }, timestamp: pino.stdTimeFunctions.isoTime }) : null;
+// pino is loaded only when the log is on (npm start leaves it off and need not pay its modules).
+const pino = REQUEST_LOG === 'json' ? (await import('pino')).default : null;
+const logger = pino ? pino({ base: { app: 'cuffwright' }, timestamp: pino.stdTimeFunctions.isoTime }) : null;
 
 /** What one request line holds. */
 export interface RequestLine {

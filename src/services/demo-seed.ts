@@ -1,15 +1,12 @@
 // Demo data for a first start on an empty database: an invented shop, one person in each role,
 // a few customers and tickets at different steps (demo-bench-seed.ts). Every name here is made up.
+// The seeders and auth are loaded only when the database is empty: every later start on existing
+// data asks one count and goes on, without their modules.
 import { randomUUID } from 'node:crypto';
 import { sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { customers, member, organization, user } from '@/db/schema';
-import { auth } from '@/lib/auth';
 import type { Role } from '@/lib/roles';
-import { seedHousePresets } from './presets';
-import { seedBenchDemo } from './demo-bench-seed';
-import { seedCounterDemo } from './demo-counter-seed';
-import { seedOverviewDemo } from './demo-overview-seed';
 
 /** The demo shop's name. */
 export const DEMO_SHOP = 'Pinmark & Hem';
@@ -39,6 +36,13 @@ async function isEmpty(): Promise<boolean> {
 /** Seeds the demo shop when the database is empty; returns whether it did. */
 export async function seedDemoIfEmpty(): Promise<boolean> {
   if (!(await isEmpty())) return false;
+  const [{ auth }, { seedHousePresets }, { seedBenchDemo }, { seedCounterDemo }, { seedOverviewDemo }] = await Promise.all([
+    import('@/lib/auth'),
+    import('./presets'),
+    import('./demo-bench-seed'),
+    import('./demo-counter-seed'),
+    import('./demo-overview-seed'),
+  ]);
   const shopId = randomUUID();
   await db.insert(organization).values({ id: shopId, name: DEMO_SHOP, slug: 'pinmark-hem', createdAt: new Date() });
   const ids: Partial<Record<Role, string>> = {};

@@ -2,7 +2,8 @@
 // session token for SESSION_CACHE_TTL_MS so a busy screen's reads do not ask the database twice
 // each. Every write request on this server forgets them all (sign-out, a removed member, a changed
 // role take effect on the next request); another server (DATABASE_URL) sees it within the TTL.
-import { auth } from '@/lib/auth';
+// better-auth (half a second of modules) is loaded at the first request with a session cookie, or
+// by warmAuth() once the server has answered its first request, not before a signed-out page.
 import { lookupCache } from '@/lib/lookup-cache';
 import { SESSION_CACHE_TTL_MS, sessionToken } from '@/lib/session-key';
 import { activeMembership, type Membership } from './members';
@@ -16,7 +17,13 @@ export interface SessionLookup {
 const cache = lookupCache<SessionLookup>(SESSION_CACHE_TTL_MS, 10_000);
 const SIGNED_OUT: SessionLookup = { user: null, member: null };
 
+/** Loads the auth module (once); called after start-up so the first sign-in does not wait for it. */
+export function warmAuth(): Promise<unknown> {
+  return import('@/lib/auth');
+}
+
 async function load(headers: Headers) {
+  const { auth } = await import('@/lib/auth');
   const session = await auth.api.getSession({ headers });
   if (!session) return { value: SIGNED_OUT };
   const { id, name, email } = session.user;

@@ -1,10 +1,14 @@
 // Brings the database up once per process before the first request: migrations, then demo data.
-import { DATABASE_URL, DEMO_DATA, NOTICE_TICK_SECONDS } from 'astro:env/server';
-import { demoWanted } from '@/lib/deployment';
+import { BETTER_AUTH_SECRET, DATABASE_URL, DEMO_DATA, NOTICE_TICK_SECONDS } from 'astro:env/server';
+import { demoWanted, refuseUnsafeStart } from '@/lib/deployment';
 import { handle } from '@/db';
 import { seedDemoIfEmpty } from './demo-seed';
 import { startNoticeTimer } from './notices';
 import './ready-notice-listener';
+
+// A shared database without a session secret stops here, as the server loads (auth.ts, which says
+// the same, now loads only at the first signed-in request).
+refuseUnsafeStart({ DATABASE_URL, BETTER_AUTH_SECRET });
 
 const holder = globalThis as typeof globalThis & { __cuffwrightReady?: Promise<void>; __cuffwrightStarted?: boolean };
 

@@ -43,6 +43,17 @@ describe('the first request', () => {
     expect(await packagesOfMiddleware()).not.toContain('mathjs');
   });
 
+  it('loads the payment SDK, nodemailer, the S3 SDK and pino only at their first use (dynamic imports)', async () => {
+    // better-auth too, behind a dynamic import of src/lib/auth.ts, which this bundle cannot tell
+    // apart: tests/services/startup-loads.test.ts proves start-up does not load it.
+    const first = await packagesOfMiddleware();
+    const later = await packagesOfMiddleware(true);
+    for (const p of ['stripe', 'nodemailer', '@aws-sdk/client-s3', 'pino']) {
+      expect(first).not.toContain(p);
+      expect(later).toContain(p);
+    }
+  });
+
   it('loads the SMS SDK only when a text goes or a status report comes (a dynamic import)', async () => {
     expect(await packagesOfMiddleware()).not.toContain('twilio');
     expect(await packagesOfMiddleware(true)).toContain('twilio');

@@ -1,6 +1,7 @@
 // Storage in an S3-compatible object store (the S3 API through the official AWS SDK v3), so every
-// server of a group sees the same photos.
-import { DeleteObjectCommand, GetObjectCommand, NoSuchKey, PutObjectCommand, S3Client, type S3ClientConfig } from '@aws-sdk/client-s3';
+// server of a group sees the same photos. The SDK (hundreds of modules) is loaded at the first
+// call, so a server on disk storage, and start-up on any, never pays for it.
+import type { S3Client, S3ClientConfig } from '@aws-sdk/client-s3';
 import { checkKey, type Storage } from './storage';
 
 // The pinned SDK runs on Node 20 (tested against the S3 fake); its notice that later versions will
@@ -16,14 +17,21 @@ export interface S3StorageOptions {
 
 /** Keeps each key as an object `prefix + key` in one bucket. */
 export class S3Storage implements Storage {
-  private readonly s3: S3Client;
+  private s3: Promise<{ client: S3Client; sdk: typeof import('@aws-sdk/client-s3') }> | null = null;
+  private readonly config: S3ClientConfig;
   private readonly bucket: string;
   private readonly prefix: string;
 
   constructor(options: S3StorageOptions) {
-    this.s3 = new S3Client(options.client);
+    this.config = options.client;
     this.bucket = options.bucket;
     this.prefix = options.prefix ?? '';
+  }
+
+  /** The SDK and its client, loaded and made at the first call. */
+  private sdk() {
+    this.s3 ??= import('@aws-sdk/client-s3').then((sdk) => ({ sdk, client: new sdk.S3Client(this.config) }));
+    return this.s3;
   }
 
   private keyOf(key: string): string {
@@ -31,22 +39,25 @@ export class S3Storage implements Storage {
   }
 
   async put(key: string, bytes: Uint8Array, contentType: string): Promise<void> {
-    await this.s3.send(new PutObjectCommand({ Bucket: this.bucket, Key: this.keyOf(key), Body: bytes, ContentType: contentType }));
+    const { sdk, client } = await this.sdk();
+    await client.send(new sdk.PutObjectCommand({ Bucket: this.bucket, Key: this.keyOf(key), Body: bytes, ContentType: contentType }));
   }
 
   async get(key: string): Promise<Uint8Array | null> {
+    const { sdk, client } = await this.sdk();
     try {
-      const out = await this.s3.send(new GetObjectCommand({ Bucket: this.bucket, Key: this.keyOf(key) }));
+      const out = await client.send(new sdk.GetObjectCommand({ Bucket: this.bucket, Key: this.keyOf(key) }));
       return out.Body ? await out.Body.transformToByteArray() : new Uint8Array();
     } catch (e) {
-      if (e instanceof NoSuchKey || (e as { name?: string }).name === 'NoSuchKey') return null;
+      if (e instanceof sdk.NoSuchKey || (e as { name?: string }).name === 'NoSuchKey') return null;
       throw e;
     }
   }
 
   async delete(key: string): Promise<void> {
     // S3 answers a delete of a missing key with success, as the interface asks.
-    await this.s3.send(new DeleteObjectCommand({ Bucket: this.bucket, Key: this.keyOf(key) }));
+    const { sdk, client } = await this.sdk();
+    await client.send(new sdk.DeleteObjectCommand({ Bucket: this.bucket, Key: this.keyOf(key) }));
   }
 }
 

@@ -95,7 +95,7 @@ export async function closeAtService(
   links: Pick<PaymentLink, 'id' | 'sessionId'>[],
   unconfirmed: 'open' | 'expiring',
 ): Promise<void> {
-  const client = paymentClient();
+  const client = await paymentClient();
   const closed: string[] = [];
   let refusal: unknown = null;
   for (const link of links) {
@@ -175,7 +175,7 @@ export async function cutShortLinks(tx: Db, shopId: string, ticketId: string): P
  * the session the service made (or makes one), which is then expired; the link is marked failed
  * with it. Best effort, with no transaction open: one that cannot be closed now is tried next time. */
 export async function closeCutShort(shopId: string, ticketId: string, links: PaymentLink[]): Promise<void> {
-  const client = paymentClient();
+  const client = await paymentClient();
   for (const link of links) {
     try {
       let sessionId: string | null = null;

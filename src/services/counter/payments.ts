@@ -115,7 +115,7 @@ async function whileCreating(shopId: string, linkId: string): Promise<void> {
  * is called with no transaction open (see payment-links.ts); the link is saved only if the
  * balance is still what it asks for, otherwise its session is closed and one is made again. */
 export async function createPaymentLink(actor: Actor, ticketId: string, appOrigin: string): Promise<CounterSummary> {
-  const client = paymentClient();
+  const client = await paymentClient();
   if (!client) throw new ServiceError(422, 'Online payment is not set up on this server (PAYMENTS_API_KEY).');
   const settings = await counterSettingsOf(actor.shopId);
   for (let round = 0; round < 4; round += 1) {
@@ -271,7 +271,7 @@ export async function receiveWebhook(payload: string, signature: string | null):
   if (!signature) return { status: 400, message: 'Missing signature.' };
   let event: Stripe.Event;
   try {
-    event = verifyWebhook(payload, signature, secret);
+    event = await verifyWebhook(payload, signature, secret);
   } catch {
     return { status: 400, message: 'Signature does not verify.' };
   }

@@ -11,7 +11,7 @@ import type { Db } from '@/db';
 import { COUNTED_REFUND_STATUSES, payments, refunds, type Payment, type Refund } from '@/db/schema';
 import type { Actor } from '@/lib/api';
 import type { refundInput } from '@/lib/counter-request';
-import { paymentClient } from '@/lib/payment-service';
+import { paymentClient, paymentsConfigured } from '@/lib/payment-service';
 import { formatMoney } from '@/lib/pricing/money';
 import { sumMinor } from '@/lib/pricing/price-lines';
 import { audit } from '../audit';
@@ -58,7 +58,7 @@ async function recordRefund(actor: Actor, ticketId: string, input: RefundRequest
     if (input.method === 'online') {
       payment = (await refundable(tx, actor.shopId, ticketId)).find((p) => p.left >= input.amountMinor)?.payment ?? null;
       if (!payment) throw new ServiceError(422, 'No online payment on this ticket has that much left to refund: give it back in cash or keep it as credit.');
-      if (!paymentClient()) throw new ServiceError(422, 'Online payment is not set up on this server (PAYMENTS_API_KEY).');
+      if (!paymentsConfigured()) throw new ServiceError(422, 'Online payment is not set up on this server (PAYMENTS_API_KEY).');
     }
     const [refund] = await tx
       .insert(refunds)
@@ -93,7 +93,7 @@ export async function settleCredit(actor: Actor, ticketId: string, input: Refund
 
 /** Asks the service for the refund (no transaction open), then writes what it answered. */
 async function refundAtService(actor: Actor, refund: Refund, payment: Payment): Promise<void> {
-  const client = paymentClient()!;
+  const client = (await paymentClient())!;
   let answer: Stripe.Refund;
   try {
     const session = await client.checkout.sessions.retrieve(payment.reference!);
