@@ -1,7 +1,7 @@
 // The catalog in the islands: a page says its language once (the shop's, or the visitor's on the
 // public calculator), and every component under it renders its words with useT().
-import { createContext, useContext, useMemo, type ComponentType, type ReactNode } from 'react';
-import { translator, type Translate } from '@/lib/i18n/catalog';
+import { createContext, Fragment, useContext, useMemo, type ComponentType, type ReactNode } from 'react';
+import { partsTranslator, translator, type MessageKey, type Translate } from '@/lib/i18n/catalog';
 import { DEFAULT_LANGUAGE, intlLocale, type Language } from '@/lib/i18n/languages';
 
 const LanguageContext = createContext<Language>(DEFAULT_LANGUAGE);
@@ -25,6 +25,15 @@ export function useIntlLocale(): string {
 export function useT(): Translate {
   const language = useLanguage();
   return useMemo(() => translator(language), [language]);
+}
+
+/** The catalog in the page's language for messages with elements among their values (a styled length). */
+export function useRich(): (key: MessageKey, values: Record<string, ReactNode>) => ReactNode {
+  const language = useLanguage();
+  return useMemo(() => {
+    const parts = partsTranslator(language);
+    return (key, values) => parts<ReactNode>(key, values as Record<string, ReactNode>).map((p, i) => <Fragment key={i}>{p}</Fragment>);
+  }, [language]);
 }
 
 /** Wraps an island so its page can give it a `language` prop (English when left out). */

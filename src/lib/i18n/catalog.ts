@@ -45,3 +45,14 @@ export function translator(language: Language): Translate {
 export function catalogKeys(language: Language): string[] {
   return Object.keys(CATALOGS[language]);
 }
+
+/** Renders a message whose values may be elements (a length in its own styled span): the parts in order. */
+export type TranslateParts = <T>(key: MessageKey, values?: Record<string, string | number | T>) => (string | T)[];
+
+/** The catalog's messages in one language, as parts, for values that are not text. */
+export function partsTranslator(language: Language): TranslateParts {
+  return (key, values) => {
+    const out = formatOf(language, key).format(values as never);
+    return Array.isArray(out) ? out : [out as string];
+  };
+}
