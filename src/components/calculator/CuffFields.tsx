@@ -20,7 +20,7 @@ export function CuffFields({ bind, unit, errorFor, info, cuffDepth, onPick }: Pr
   return (
     <div className="grid gap-4 sm:grid-cols-2">
       <div className="sm:col-span-2">
-        <LengthField {...common} name="cuffDepth" label={t('field.cuffDepth')} error={errorFor('cuffDepth')}>
+        <LengthField {...common} name="cuffDepth" label={t('calc.field.cuffDepth')} error={errorFor('cuffDepth')}>
           <QuickPicks unit={unit} current={cuffDepth} onPick={onPick} />
         </LengthField>
       </div>
@@ -28,18 +28,18 @@ export function CuffFields({ bind, unit, errorFor, info, cuffDepth, onPick }: Pr
         <LengthField
           {...common}
           name="available"
-          label={t('field.available')}
+          label={t('calc.field.available')}
           error={errorFor('available')}
           hint={t('calc.hint.available')}
         />
       </div>
-      <LengthField {...common} name="hemSection" label={t('field.hemSection')} error={errorFor('hemSection')} hint={t('calc.hint.hemSection')} />
-      <LengthField {...common} name="turnUnder" label={t('field.turnUnder')} error={errorFor('turnUnder')} hint={t('calc.hint.blank', { length: unit === 'in' ? '1/2 in' : '12 mm' })} />
-      <LengthField {...common} name="oldCrease" label={t('calc.optional', { label: t('field.oldCrease') })} error={errorFor('oldCrease')} hint={t('calc.hint.oldCrease')} />
+      <LengthField {...common} name="hemSection" label={t('calc.field.hemSection')} error={errorFor('hemSection')} hint={t('calc.hint.hemSection')} />
+      <LengthField {...common} name="turnUnder" label={t('calc.field.turnUnder')} error={errorFor('turnUnder')} hint={t('calc.hint.blank', { length: unit === 'in' ? '1/2 in' : '12 mm' })} />
+      <LengthField {...common} name="oldCrease" label={t('calc.optional', { label: t('calc.field.oldCrease') })} error={errorFor('oldCrease')} hint={t('calc.hint.oldCrease')} />
       <LengthField
         {...common}
         name="clothThickness"
-        label={t('calc.optional', { label: t('field.clothThickness') })}
+        label={t('calc.optional', { label: t('calc.field.clothThickness') })}
         error={errorFor('clothThickness')}
         hint={t('calc.hint.clothThickness')}
       />

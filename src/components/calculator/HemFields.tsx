@@ -21,7 +21,7 @@ export function HemFields({ bind, unit, errorFor, info }: Props) {
         <LengthField
           {...common}
           name="available"
-          label={t('field.available')}
+          label={t('calc.field.available')}
           error={errorFor('available')}
           hint={t('calc.hint.available')}
         />
@@ -29,15 +29,15 @@ export function HemFields({ bind, unit, errorFor, info }: Props) {
       <LengthField
         {...common}
         name="hemAllowance"
-        label={t('field.hemAllowance')}
+        label={t('calc.field.hemAllowance')}
         error={errorFor('hemAllowance')}
         hint={t('calc.hint.hemAllowance', { length: inch ? '1 1/2 in' : '40 mm' })}
       />
-      <LengthField {...common} name="turnUnder" label={t('field.turnUnder')} error={errorFor('turnUnder')} hint={t('calc.hint.blank', { length: inch ? '1/4 in' : '6 mm' })} />
+      <LengthField {...common} name="turnUnder" label={t('calc.field.turnUnder')} error={errorFor('turnUnder')} hint={t('calc.hint.blank', { length: inch ? '1/4 in' : '6 mm' })} />
       <LengthField
         {...common}
         name="slope"
-        label={t('calc.optional', { label: t('field.slope') })}
+        label={t('calc.optional', { label: t('calc.field.slope') })}
         error={errorFor('slope')}
         hint={t('calc.hint.slope', { length: inch ? '1/2 in' : '12 mm' })}
       />

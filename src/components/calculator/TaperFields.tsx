@@ -27,13 +27,13 @@ export function TaperFields({ open, onToggle, bind, unit, errorFor, info, waitin
         <p className="text-base text-muted sm:col-span-2">
           {t('calc.taper.intro')}
         </p>
-        <LengthField {...common} name="widthAtEdge" label={t('field.widthAtEdge')} error={errorFor('widthAtEdge')} />
-        <LengthField {...common} name="widthAbove" label={t('field.widthAbove')} error={errorFor('widthAbove')} />
-        <LengthField {...common} name="heightAbove" label={t('field.heightAbove')} error={errorFor('heightAbove')} />
+        <LengthField {...common} name="widthAtEdge" label={t('calc.field.widthAtEdge')} error={errorFor('widthAtEdge')} />
+        <LengthField {...common} name="widthAbove" label={t('calc.field.widthAbove')} error={errorFor('widthAbove')} />
+        <LengthField {...common} name="heightAbove" label={t('calc.field.heightAbove')} error={errorFor('heightAbove')} />
         <LengthField
           {...common}
           name="seamAllowance"
-          label={t('calc.optional', { label: t('field.seamAllowance') })}
+          label={t('calc.optional', { label: t('calc.field.seamAllowance') })}
           error={errorFor('seamAllowance')}
           hint={t('calc.hint.seamAllowance')}
         />
