@@ -151,6 +151,11 @@ function LinesTable({ g, cols, stacked, t }: { g: SheetLegGroup; cols: Columns; 
   );
 }
 
+// The cut badge's width: its letters (800 weight), a point of spacing after each, 4 pt padding each side.
+function badgeWidth(text: string): number {
+  return Math.ceil(textWidth(text, 800, Number(s.badge.fontSize)) + [...text].length * Number(s.badge.letterSpacing) + 2 * Number(s.badge.paddingHorizontal));
+}
+
 // The one line that cannot be undone: biggest type, boxed, in cut red and labelled for greyscale.
 function CutLine({ g, t }: { g: SheetLegGroup; t: Translate }) {
   const cut = g.lines.find((l) => l.cut);
@@ -160,7 +165,8 @@ function CutLine({ g, t }: { g: SheetLegGroup; t: Translate }) {
   const value = [s.cutValue, { flexShrink: 0 }];
   return (
     <View style={{ borderWidth: 2, borderColor: INK.cut, marginTop: 4, paddingHorizontal: 6, paddingVertical: 2, flexDirection: 'row' }}>
-      <View style={{ marginRight: 6, marginTop: 6 }}>
+      {/* As wide as the badge's letters with their spacing and padding (the layout leaves the spacing out). */}
+      <View style={{ marginRight: 6, marginTop: 6, minWidth: badgeWidth(t('sheet.cutBadge')) }}>
         <Text style={s.badge}>{t('sheet.cutBadge')}</Text>
         <Text style={[s.th, { marginTop: 1 }]}>{t('sheet.lineN', { n: cut.n })}</Text>
       </View>
@@ -188,7 +194,7 @@ function LegBlock({ g, width, t }: { g: SheetLegGroup; width: number; t: Transla
   const tableNeeds = cols.name + cols.below + cols.above;
   const drawingW = Math.max(DRAWING_MIN_W, Math.min(DRAWING_W, width - 8 - tableNeeds));
   const stacked = tableNeeds > width - 8 - drawingW;
-  const geo = legGeometry(g.leg, drawingW, DRAWING_H);
+  const geo = legGeometry(g.leg, drawingW, DRAWING_H, t);
   return (
     <View style={{ marginBottom: 4 }} wrap={false}>
       <View style={{ flexDirection: 'row', alignItems: 'baseline', marginBottom: 2 }}>
