@@ -122,7 +122,7 @@ export function ChalkGuide({ columns, notes, unit, t = EN }: { columns: StripCol
   const width = columns.length > 1 ? 72 : 108;
   return (
     <>
-      <Text style={s.h2}>CHALK GUIDE 1:1</Text>
+      <Text style={s.h2}>{t('sheet.guide.heading')}</Text>
       <CheckRulerStrip unit={unit} />
       {notes.map((n, i) => (
         <Text key={i} style={{ fontSize: READ_MIN, marginTop: 2, fontWeight: i < 2 ? 700 : 400 }}>
