@@ -17,6 +17,9 @@ export const LANGUAGE_NAMES: Record<Language, string> = { en: 'English', fr: 'Fr
 // French as France writes it. One place, so no screen hard-codes a locale.
 const INTL_LOCALE: Record<Language, string> = { en: 'en-GB', fr: 'fr-FR' };
 
+/** The Intl locale of the default language, for text with no shop or visitor to ask (and the default of the formatters). */
+export const DEFAULT_LOCALE = INTL_LOCALE[DEFAULT_LANGUAGE];
+
 /** True when the value is a language of the catalog. */
 export function isLanguage(v: unknown): v is Language {
   return typeof v === 'string' && (LANGUAGES as readonly string[]).includes(v);

@@ -110,7 +110,7 @@ export function periodDays(period: Period, today: string): string[] {
 }
 
 /** A day as the shop reads it on a chart or table: "Mon 30 Nov". */
-export function dayLabel(day: string): string {
+export function dayLabel(day: string, locale: string = DEFAULT_LOCALE): string {
   const [y, m, d] = day.split('-').map(Number);
-  return new Date(Date.UTC(y!, m! - 1, d!)).toLocaleDateString('en-GB', { weekday: 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
+  return new Date(Date.UTC(y!, m! - 1, d!)).toLocaleDateString(locale, { weekday: 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
 }
