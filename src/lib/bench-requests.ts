@@ -1,7 +1,7 @@
 // What the bench's API routes accept (intake, garments, step moves, shop bench settings), checked
-// the same way in the islands' forms and on the server. Plain zod: islands import { LANGUAGES } from '@/lib/i18n/languages';
-import it.
+// the same way in the islands' forms and on the server. Plain zod: islands import it.
 import { z } from 'zod';
+import { LANGUAGES } from '@/lib/i18n/languages';
 import { text } from './text';
 import { EXISTING_FINISHES } from './existing-finish';
 import { FITTING_RULES } from './fitting-rule';
