@@ -1,10 +1,11 @@
 // The catalog in the islands: a page says its language once (the shop's, or the visitor's on the
 // public calculator), and every component under it renders its words with useT().
 import { createContext, Fragment, useContext, useMemo, type ComponentType, type ReactNode } from 'react';
-import { partsTranslator, translator, type MessageKey, type Translate } from '@/lib/i18n/catalog';
+import { partsTranslator, registerMessages, translator, type MessageKey, type Translate } from '@/lib/i18n/format';
 import { DEFAULT_LANGUAGE, intlLocale, type Language } from '@/lib/i18n/languages';
 
-const LanguageContext = createContext<Language>(DEFAULT_LANGUAGE);
+// null outside any provider: a screen not yet in the catalog keeps its English words.
+const LanguageContext = createContext<Language | null>(null);
 
 /** Gives the components below it one language. */
 export function LanguageProvider({ language, children }: { language: Language; children: ReactNode }) {
@@ -13,7 +14,13 @@ export function LanguageProvider({ language, children }: { language: Language; c
 
 /** The language of the page. */
 export function useLanguage(): Language {
-  return useContext(LanguageContext);
+  return useContext(LanguageContext) ?? DEFAULT_LANGUAGE;
+}
+
+/** The catalog in the page's language, or null on an island its page gave no language (and no messages). */
+export function useMaybeT(): Translate | null {
+  const language = useContext(LanguageContext);
+  return useMemo(() => (language ? translator(language) : null), [language]);
 }
 
 /** The Intl locale of the page's language (dates, numbers, money). */
@@ -36,9 +43,19 @@ export function useRich(): (key: MessageKey, values: Record<string, ReactNode>) 
   }, [language]);
 }
 
-/** Wraps an island so its page can give it a `language` prop (English when left out). */
+// The messages an island's page sent (JSON from messagesFor), registered once per text.
+const registered = new Set<string>();
+
+/**
+ * Wraps an island so its page can give it a `language` and that language's `messages` (JSON from
+ * messagesFor(language, …): only what the island shows, so the browser gets no whole catalog).
+ */
 export function withLanguage<P extends object>(Component: ComponentType<P>) {
-  return function WithLanguage({ language = DEFAULT_LANGUAGE, ...props }: P & { language?: Language }) {
+  return function WithLanguage({ language = DEFAULT_LANGUAGE, messages, ...props }: P & { language?: Language; messages?: string }) {
+    if (messages && !registered.has(messages)) {
+      registered.add(messages);
+      registerMessages(language, JSON.parse(messages) as Record<string, unknown>);
+    }
     return (
       <LanguageProvider language={language}>
         <Component {...(props as P)} />

@@ -1,5 +1,5 @@
 import { useT } from '@/components/I18n';
-import type { MessageKey } from '@/lib/i18n/catalog';
+import type { MessageKey } from '@/lib/i18n/format';
 import type { UseFormRegister } from 'react-hook-form';
 import { LengthInput } from '@/components/LengthInput';
 import { Segmented } from '@/components/calculator/Segmented';

@@ -1,10 +1,10 @@
-import { useT } from '@/components/I18n';
+import { useMaybeT } from '@/components/I18n';
 // The queries every bench island shares: the shop's settings and its people.
 import { useQuery } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import type { BenchSettings, Person } from '@/lib/bench-types';
 import { fetchJson } from '@/lib/fetch-json';
-import type { GarmentStep } from '@/lib/garment-steps';
+import { stepLabel, type GarmentStep } from '@/lib/garment-steps';
 
 /** The shop's bench settings (scale, step names). */
 export function useBenchSettings() {
@@ -19,8 +19,8 @@ export function useAssignees() {
 /** A function naming steps in the shop's own words. */
 export function useStepLabel(): (step: GarmentStep) => string {
   const labels = useBenchSettings().data?.stepLabels;
-  const t = useT();
+  const t = useMaybeT();
   // The same function until the names or the language change, so the queue's columns are not rebuilt every render.
   // A step the shop renamed keeps its own name; the others are the catalog's (English: DEFAULT_STEP_LABELS).
-  return useCallback((step) => labels?.[step]?.trim() || t(`step.${step}`), [labels, t]);
+  return useCallback((step) => (t ? labels?.[step]?.trim() || t(`step.${step}`) : stepLabel(step, labels)), [labels, t]);
 }

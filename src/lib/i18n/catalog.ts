@@ -1,58 +1,30 @@
 // The one message catalog: every sentence the screens and the cut sheet show, by key, in each
 // language, as ICU MessageFormat (intl-messageformat). Messages are compiled to their syntax trees
-// at build time (scripts/vite-icu-catalog.mjs), so the browser ships the formatter without its parser.
-import { IntlMessageFormat } from 'intl-messageformat';
+// at build time (scripts/vite-icu-catalog.mjs). Importing this module registers every language
+// (server, sheet, tests); an island gets only its page's part of one language (messagesFor).
 import en from './messages/en.json';
 import fr from './messages/fr.json';
-import { DEFAULT_LANGUAGE, intlLocale, type Language } from './languages';
+import { registerMessages, type Messages } from './format';
+import type { Language } from './languages';
 
-/** A key of the catalog (English is the reference: every language has exactly its keys). */
-export type MessageKey = keyof typeof en;
+export { partsTranslator, registerMessages, translator, type MessageKey, type MessageValues, type Translate, type TranslateParts } from './format';
 
-/** The values a message's placeholders take: lengths come already written ("1 1/2 in"). */
-export type MessageValues = Record<string, string | number>;
-
-/** Renders one message of the catalog in one language. */
-export type Translate = (key: MessageKey, values?: MessageValues) => string;
-
-// Each catalog as imported: syntax trees after the build's transform, plain strings where a tool
-// imports the JSON without it (intl-messageformat parses those on the server).
-const CATALOGS: Record<Language, Record<string, unknown>> = { en, fr };
-
-const compiled = new Map<string, IntlMessageFormat>();
-
-function formatOf(language: Language, key: string): IntlMessageFormat {
-  const id = `${language}\u0000${key}`;
-  let f = compiled.get(id);
-  if (!f) {
-    const source = CATALOGS[language][key] ?? CATALOGS[DEFAULT_LANGUAGE][key];
-    if (source === undefined) throw new Error(`No message "${key}" in the catalog.`);
-    f = new IntlMessageFormat(source as string, intlLocale(language));
-    compiled.set(id, f);
-  }
-  return f;
-}
-
-/** The catalog's messages in one language as a function of key and values. */
-export function translator(language: Language): Translate {
-  return (key, values) => {
-    const out = formatOf(language, key).format(values);
-    return Array.isArray(out) ? out.join('') : String(out);
-  };
-}
+const CATALOGS: Record<Language, Messages> = { en, fr };
+for (const [language, messages] of Object.entries(CATALOGS)) registerMessages(language as Language, messages);
 
 /** Every key of one language's catalog (for the catalog's own tests). */
 export function catalogKeys(language: Language): string[] {
   return Object.keys(CATALOGS[language]);
 }
 
-/** Renders a message whose values may be elements (a length in its own styled span): the parts in order. */
-export type TranslateParts = <T>(key: MessageKey, values?: Record<string, string | number | T>) => (string | T)[];
-
-/** The catalog's messages in one language, as parts, for values that are not text. */
-export function partsTranslator(language: Language): TranslateParts {
-  return (key, values) => {
-    const out = formatOf(language, key).format(values as never);
-    return Array.isArray(out) ? out : [out as string];
-  };
+/** The messages of one language whose keys start with one of `prefixes`, as JSON for an island's props. */
+export function messagesFor(language: Language, prefixes: readonly string[]): string {
+  const all = CATALOGS[language];
+  return JSON.stringify(Object.fromEntries(Object.entries(all).filter(([k]) => prefixes.some((p) => k.startsWith(p)))));
 }
+
+/** The catalog's parts an island of the calculator renders (its page sends only these). */
+export const CALCULATOR_MESSAGES = ['warning.', 'crease.', 'calc.', 'line.', 'lines.', 'cloth.', 'nofit.', 'taper.', 'cut.'] as const;
+
+/** The parts the bench's garment page renders (its fitting form shows the calculator's plan too). */
+export const BENCH_MESSAGES = [...CALCULATOR_MESSAGES, 'field.', 'fieldHint.', 'fitting.', 'garment.', 'print.', 'summary.', 'step.', 'existing.', 'due.'] as const;

@@ -2,7 +2,7 @@
 // catalog. The engine keeps its English sentence (the API's `message`); English rendered here is
 // the same sentence, word for word (tests/lib/i18n/engine-messages.test.ts).
 import type { CreaseLanding, PlanWarning } from '@/lib/allowance/types';
-import type { MessageKey, Translate } from './catalog';
+import type { MessageKey, Translate } from './format';
 
 // Values a variant of a message may lack: an ICU select needs every one it reads.
 const ABSENT = { most: 'none', measured: 'none', fits: 'none' } as const;
