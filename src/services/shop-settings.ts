@@ -23,9 +23,13 @@ export async function benchSettings(shopId: string): Promise<BenchSettings> {
 
 /** Saves the shop's settings. */
 export async function saveBenchSettings(actor: Actor, input: z.output<typeof settingsRequest>): Promise<BenchSettings> {
-  const values = { scale: input.scale, stepLabels: input.stepLabels, ...(input.fittingRule ? { fittingRule: input.fittingRule } : {}),
+  const values = {
+    scale: input.scale,
+    stepLabels: input.stepLabels,
+    ...(input.fittingRule ? { fittingRule: input.fittingRule } : {}),
     ...(input.language ? { language: input.language } : {}),
-    updatedAt: new Date() };
+    updatedAt: new Date(),
+  };
   await db.transaction(async (tx) => {
     await tx
       .insert(shopSettings)

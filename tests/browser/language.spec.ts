@@ -31,7 +31,10 @@ describe('a shop switched to French', () => {
     const page = await tabletPage(browser());
     const headers = { origin: inject('baseURL') };
     const email = `francais-${Date.now().toString(36)}@example.com`;
-    const shop = await page.request.post('/api/shops', { headers, data: { shopName: 'Retouches Bellevue', name: 'Odile Bellevue', email, password: 'a-long-password' } });
+    const shop = await page.request.post('/api/shops', {
+      headers,
+      data: { shopName: 'Retouches Bellevue', name: 'Odile Bellevue', email, password: 'a-long-password' },
+    });
     expect(shop.status()).toBe(201);
 
     // The lead chooses millimetres and Français on the settings screen.
@@ -59,7 +62,16 @@ describe('a shop switched to French', () => {
     await field(page, 'Hauteur du revers').fill('40');
     await field(page, 'Tissu sous le repère').fill('150');
     // The plan beside the form, worked out as typed: 40 + 40 + 40 = 120 mm below the mark (plain arithmetic).
-    await expect.poll(() => page.getByTestId('summary-cut').textContent().catch(() => null), { timeout: 10_000 }).toBe('120 mm');
+    await expect
+      .poll(
+        () =>
+          page
+            .getByTestId('summary-cut')
+            .textContent()
+            .catch(() => null),
+        { timeout: 10_000 },
+      )
+      .toBe('120 mm');
     expect(await page.getByTestId('plan-summary').innerText()).toContain('sous le repère');
     await page.getByRole('button', { name: 'Enregistrer les mesures' }).click();
     await page.getByText('Les deux jambes sont enregistrées.').waitFor();
@@ -70,7 +82,16 @@ describe('a shop switched to French', () => {
     expect(r.status()).toBe(200);
     expect(new URL(r.url()).searchParams.get('page')).toBe('A4');
     const { text, info } = pdfText(await r.body());
-    for (const words of ['FICHE DE COUPE', 'Toutes les longueurs en millimètres', 'Revers, 40 mm de haut', 'Pli intérieur', 'Tissu : il faut 120 mm sous le repère, il y a 150 mm, reste 30 mm.', 'À L’ÉTABLI, DANS CET ORDRE', 'ATTENTION AUX MAINS', 'ven. 18 déc.']) {
+    for (const words of [
+      'FICHE DE COUPE',
+      'Toutes les longueurs en millimètres',
+      'Revers, 40 mm de haut',
+      'Pli intérieur',
+      'Tissu : il faut 120 mm sous le repère, il y a 150 mm, reste 30 mm.',
+      'À L’ÉTABLI, DANS CET ORDRE',
+      'ATTENTION AUX MAINS',
+      'ven. 18 déc.',
+    ]) {
       expect(text).toContain(words);
     }
     expect(text).not.toContain('CUT SHEET');
@@ -81,7 +102,11 @@ describe('a shop switched to French', () => {
 
 describe('the public calculator in French', () => {
   it('follows the browser’s Accept-Language, prints its sheet in French, and switches back to English', async () => {
-    const context = await browser().newContext({ baseURL: inject('baseURL'), viewport: { width: 1180, height: 820 }, extraHTTPHeaders: { 'accept-language': 'fr-FR,fr;q=0.9,en;q=0.5' } });
+    const context = await browser().newContext({
+      baseURL: inject('baseURL'),
+      viewport: { width: 1180, height: 820 },
+      extraHTTPHeaders: { 'accept-language': 'fr-FR,fr;q=0.9,en;q=0.5' },
+    });
     const page = await context.newPage();
     await page.goto('/');
     await ready(page);

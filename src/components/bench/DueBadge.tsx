@@ -14,7 +14,9 @@ export function DueBadge({ dueOn, status }: { dueOn: string | null; status?: Gar
     <span className="inline-flex flex-wrap items-center gap-2">
       <span className={!dueOn ? 'text-muted' : ''}>{dueText(dueOn, locale, t ? t('due.none') : undefined)}</span>
       {state === 'overdue' && <span className="rounded bg-cut px-2 py-0.5 text-sm font-extrabold text-white">{t ? t('due.overdue') : 'Overdue'}</span>}
-      {state === 'today' && <span className="rounded border-2 border-warn bg-warn-soft px-2 py-0.5 text-sm font-extrabold text-warn">{t ? t('due.today') : 'Due today'}</span>}
+      {state === 'today' && (
+        <span className="rounded border-2 border-warn bg-warn-soft px-2 py-0.5 text-sm font-extrabold text-warn">{t ? t('due.today') : 'Due today'}</span>
+      )}
     </span>
   );
 }

@@ -128,9 +128,7 @@ function Bench({
             </li>
           ))}
         </ol>
-        <p className="text-2xl">
-          {rich('garment.now', { step: <strong data-testid="garment-step">{label(g.status)}</strong> })}
-        </p>
+        <p className="text-2xl">{rich('garment.now', { step: <strong data-testid="garment-step">{label(g.status)}</strong> })}</p>
         <div className="flex flex-wrap items-start gap-4">
           <StepButton garmentId={g.id} status={g.status} canAdvance={canAdvance} canPickup={canPickup} canReopen={canReopen} fitted={g.fitted} />
           <StepBackButton garmentId={g.id} status={g.status} canAdvance={canAdvance} canReopen={canReopen} />

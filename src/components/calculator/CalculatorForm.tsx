@@ -35,7 +35,6 @@ function ownMessages(request: PlanRequestInput | null): Record<string, string> {
   return checked && !checked.ok ? checked.issues : {};
 }
 
-
 /** Fields whose text could not be carried to the new unit: the text left, and the unit it was typed in. */
 type Unconverted = Partial<Record<LengthField, { text: string; from: Unit }>>;
 

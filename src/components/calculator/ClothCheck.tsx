@@ -11,18 +11,17 @@ export function ClothCheck({ plan }: Props) {
   const rich = useRich();
   const needs = rich('cloth.needs', { required: <span className="measure font-extrabold">{plan.required.text}</span> });
   if (plan.enough === null) {
-    return <p className="rounded-md border-2 border-rule bg-card px-4 py-3 text-lg break-inside-avoid">{needs} {t('cloth.typeIt')}</p>;
+    return (
+      <p className="rounded-md border-2 border-rule bg-card px-4 py-3 text-lg break-inside-avoid">
+        {needs} {t('cloth.typeIt')}
+      </p>
+    );
   }
   if (plan.enough) {
     return (
       <p className="rounded-md border-2 border-ok bg-ok-soft px-4 py-3 text-lg text-ok break-inside-avoid">
         <strong className="font-extrabold">{t('cloth.enough')}</strong> {needs}
-        {plan.spare && (
-          <>
-            {' '}
-            {rich('cloth.spare', { spare: <span className="measure font-extrabold">{plan.spare.text}</span> })}
-          </>
-        )}
+        {plan.spare && <> {rich('cloth.spare', { spare: <span className="measure font-extrabold">{plan.spare.text}</span> })}</>}
       </p>
     );
   }
@@ -52,9 +51,7 @@ export function NoFit({ plan }: Props) {
               // The depth the customer chose, kept: only the hidden third section is shorter.
               <li>{rich('nofit.shorter', { depth: m(plan.cuffDepth.text), shorter: m(alt.shorterSection.text) })}</li>
             )}
-            <li>
-              {alt.deepestCuff ? rich('nofit.deepest', { deepest: m(alt.deepestCuff.text) }) : t('nofit.noShallower')}
-            </li>
+            <li>{alt.deepestCuff ? rich('nofit.deepest', { deepest: m(alt.deepestCuff.text) }) : t('nofit.noShallower')}</li>
             <li>{rich('nofit.plain', { required: m(alt.plainHem.required.text), fits: alt.plainHem.fits ? 'yes' : 'no' })}</li>
             <li>{rich('nofit.faced', { required: m(alt.facedCuff.required.text), fits: alt.facedCuff.fits ? 'yes' : 'no' })}</li>
           </ul>

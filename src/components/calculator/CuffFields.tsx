@@ -25,17 +25,23 @@ export function CuffFields({ bind, unit, errorFor, info, cuffDepth, onPick }: Pr
         </LengthField>
       </div>
       <div className="sm:col-span-2">
-        <LengthField
-          {...common}
-          name="available"
-          label={t('calc.field.available')}
-          error={errorFor('available')}
-          hint={t('calc.hint.available')}
-        />
+        <LengthField {...common} name="available" label={t('calc.field.available')} error={errorFor('available')} hint={t('calc.hint.available')} />
       </div>
       <LengthField {...common} name="hemSection" label={t('calc.field.hemSection')} error={errorFor('hemSection')} hint={t('calc.hint.hemSection')} />
-      <LengthField {...common} name="turnUnder" label={t('calc.field.turnUnder')} error={errorFor('turnUnder')} hint={t('calc.hint.blank', { length: unit === 'in' ? '1/2 in' : '12 mm' })} />
-      <LengthField {...common} name="oldCrease" label={t('calc.optional', { label: t('calc.field.oldCrease') })} error={errorFor('oldCrease')} hint={t('calc.hint.oldCrease')} />
+      <LengthField
+        {...common}
+        name="turnUnder"
+        label={t('calc.field.turnUnder')}
+        error={errorFor('turnUnder')}
+        hint={t('calc.hint.blank', { length: unit === 'in' ? '1/2 in' : '12 mm' })}
+      />
+      <LengthField
+        {...common}
+        name="oldCrease"
+        label={t('calc.optional', { label: t('calc.field.oldCrease') })}
+        error={errorFor('oldCrease')}
+        hint={t('calc.hint.oldCrease')}
+      />
       <LengthField
         {...common}
         name="clothThickness"

@@ -24,11 +24,7 @@ export function CutLine({ plan, stale }: Props) {
         </span>
         <span className="text-2xl font-semibold">{t('cut.below', { sloped: front ? 'yes' : 'no' })}</span>
       </p>
-      {front && (
-        <p className="text-2xl">
-          {rich('cut.front', { length: <span className="measure font-extrabold">{front.text}</span> })}
-        </p>
-      )}
+      {front && <p className="text-2xl">{rich('cut.front', { length: <span className="measure font-extrabold">{front.text}</span> })}</p>}
       {cut.aboveRawEdge && cut.aboveRawEdge.mm >= 0 && (
         <p className="mt-1 text-lg text-muted">
           {rich('cut.aboveRaw', { length: <span className="measure font-semibold text-ink">{cut.aboveRawEdge.text}</span> })}

@@ -18,13 +18,7 @@ export function HemFields({ bind, unit, errorFor, info }: Props) {
   return (
     <div className="grid gap-4 sm:grid-cols-2">
       <div className="sm:col-span-2">
-        <LengthField
-          {...common}
-          name="available"
-          label={t('calc.field.available')}
-          error={errorFor('available')}
-          hint={t('calc.hint.available')}
-        />
+        <LengthField {...common} name="available" label={t('calc.field.available')} error={errorFor('available')} hint={t('calc.hint.available')} />
       </div>
       <LengthField
         {...common}
@@ -33,7 +27,13 @@ export function HemFields({ bind, unit, errorFor, info }: Props) {
         error={errorFor('hemAllowance')}
         hint={t('calc.hint.hemAllowance', { length: inch ? '1 1/2 in' : '40 mm' })}
       />
-      <LengthField {...common} name="turnUnder" label={t('calc.field.turnUnder')} error={errorFor('turnUnder')} hint={t('calc.hint.blank', { length: inch ? '1/4 in' : '6 mm' })} />
+      <LengthField
+        {...common}
+        name="turnUnder"
+        label={t('calc.field.turnUnder')}
+        error={errorFor('turnUnder')}
+        hint={t('calc.hint.blank', { length: inch ? '1/4 in' : '6 mm' })}
+      />
       <LengthField
         {...common}
         name="slope"

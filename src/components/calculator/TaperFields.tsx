@@ -24,9 +24,7 @@ export function TaperFields({ open, onToggle, bind, unit, errorFor, info, waitin
     <details open={open} onToggle={(e) => onToggle(e.currentTarget.open)} className="rounded-md border-2 border-rule bg-paper">
       <summary className="flex min-h-11 cursor-pointer items-center px-3 text-lg font-semibold">{t('calc.taper.summary')}</summary>
       <div className="grid gap-4 border-t-2 border-rule p-3 sm:grid-cols-2">
-        <p className="text-base text-muted sm:col-span-2">
-          {t('calc.taper.intro')}
-        </p>
+        <p className="text-base text-muted sm:col-span-2">{t('calc.taper.intro')}</p>
         <LengthField {...common} name="widthAtEdge" label={t('calc.field.widthAtEdge')} error={errorFor('widthAtEdge')} />
         <LengthField {...common} name="widthAbove" label={t('calc.field.widthAbove')} error={errorFor('widthAbove')} />
         <LengthField {...common} name="heightAbove" label={t('calc.field.heightAbove')} error={errorFor('heightAbove')} />

@@ -35,7 +35,10 @@ function onFold(crease: Exact, c: number, at: Exact, atMm: number, ctx: CreaseCo
 
 // The verdicts' words, shared by the Exact and the integer landing so both say the same.
 const say = {
-  onFold: (fold: string): Said => [`The old crease falls on the new ${fold}: the new fold takes it, so it will not show.`, { fold: fold === 'finished edge' ? 'edge' : fold === 'cuff top' ? 'top' : 'inner' }],
+  onFold: (fold: string): Said => [
+    `The old crease falls on the new ${fold}: the new fold takes it, so it will not show.`,
+    { fold: fold === 'finished edge' ? 'edge' : fold === 'cuff top' ? 'top' : 'inner' },
+  ],
   atCuffTop: (at: string, near: string): Said => [
     `The old hem crease lies on the leg ${at} above the finished edge, within ${near} of the cuff top: it may show at the cuff's edge. Press or steam it out before finishing. ${TELL}`,
     { at, near },

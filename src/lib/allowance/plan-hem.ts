@@ -63,7 +63,13 @@ export function planHem(input: HemInput): HemPlan {
       warnings.push({
         code: 'not-enough-cloth',
         message: `Not enough cloth for a ${len(v.hemAllowance).text} hem: there is ${len(A).text} below the mark, short by ${shortBy.text}. ${fits}`,
-        values: { finish: 'hem', allowance: len(v.hemAllowance).text, available: len(A).text, shortBy: shortBy.text, ...(most.isZero() ? {} : { most: len(most).text }) },
+        values: {
+          finish: 'hem',
+          allowance: len(v.hemAllowance).text,
+          available: len(A).text,
+          shortBy: shortBy.text,
+          ...(most.isZero() ? {} : { most: len(most).text }),
+        },
       });
     }
   }

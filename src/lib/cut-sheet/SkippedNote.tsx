@@ -13,9 +13,7 @@ export function SkippedNote({ skipped, size, family = FAMILY, t }: { skipped: st
       <View style={s.header}>
         <Text style={s.title}>{t('sheet.skipped')}</Text>
       </View>
-      <Text style={[s.small, { marginBottom: 6, color: INK.soft }]}>
-        {t('sheet.skippedNote')}
-      </Text>
+      <Text style={[s.small, { marginBottom: 6, color: INK.soft }]}>{t('sheet.skippedNote')}</Text>
       {skipped.map((line, i) => (
         <Text key={i} style={{ fontSize: 11, marginBottom: 3 }}>
           {`•  ${line}`}

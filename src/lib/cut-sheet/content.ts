@@ -115,7 +115,11 @@ function formatDue(iso: string, language: Language): string {
   const d = new Date(`${iso}T12:00:00Z`);
   if (Number.isNaN(d.getTime())) return iso;
   let f = DUE_FORMATS.get(language);
-  if (!f) DUE_FORMATS.set(language, (f = new Intl.DateTimeFormat(intlLocale(language), { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' })));
+  if (!f)
+    DUE_FORMATS.set(
+      language,
+      (f = new Intl.DateTimeFormat(intlLocale(language), { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' })),
+    );
   return f.format(d);
 }
 
@@ -225,8 +229,7 @@ function hemTaperOf(t: Translate, leg: LegSheet & { finish: 'hem' }): SheetLegGr
   const flat = tp.withinTolerance || cut.change.mm === 0 || printsZero(cut.perSeam);
   // A let-down hem may have flared past the leg it lands on: then the seams come in, not out.
   const way = cut.change.mm > 0 ? 'out' : 'in';
-  const summary =
-    (flat ? t('sheet.hemTaper.within') : t('sheet.hemTaper.summary', { above, target: tp.targetWidth.text, way })) + measuredNote(t, tp);
+  const summary = (flat ? t('sheet.hemTaper.within') : t('sheet.hemTaper.summary', { above, target: tp.targetWidth.text, way })) + measuredNote(t, tp);
   const work = flat ? null : t('sheet.hemTaper.work', { way, perSeam: unsigned(cut.perSeam) });
   return { summary, work, rows };
 }
@@ -340,7 +343,9 @@ export function hemSteps(turnUnder: string, sloped: boolean, unit: Unit = 'mm', 
 function perLeg(t: Translate, groups: SheetLegGroup[], text: (g: SheetLegGroup) => string): string {
   const all = groups.map(text);
   if (new Set(all).size === 1) return all[0]!;
-  return groups.map((g, i) => t('sheet.perLeg', { text: all[i]!, leg: g.leg.side === 'left' ? t('sheet.legs.leftShort') : t('sheet.legs.rightShort') })).join(t('sheet.list'));
+  return groups
+    .map((g, i) => t('sheet.perLeg', { text: all[i]!, leg: g.leg.side === 'left' ? t('sheet.legs.leftShort') : t('sheet.legs.rightShort') }))
+    .join(t('sheet.list'));
 }
 
 // A step for some legs only: "Left leg: before cutting, …" (the step's first letter lowered).

@@ -27,4 +27,15 @@ export function messagesFor(language: Language, prefixes: readonly string[]): st
 export const CALCULATOR_MESSAGES = ['warning.', 'crease.', 'calc.', 'line.', 'lines.', 'cloth.', 'nofit.', 'taper.', 'cut.'] as const;
 
 /** The parts the bench's garment page renders (its fitting form shows the calculator's plan too). */
-export const BENCH_MESSAGES = [...CALCULATOR_MESSAGES, 'field.', 'fieldHint.', 'fitting.', 'garment.', 'print.', 'summary.', 'step.', 'existing.', 'due.'] as const;
+export const BENCH_MESSAGES = [
+  ...CALCULATOR_MESSAGES,
+  'field.',
+  'fieldHint.',
+  'fitting.',
+  'garment.',
+  'print.',
+  'summary.',
+  'step.',
+  'existing.',
+  'due.',
+] as const;

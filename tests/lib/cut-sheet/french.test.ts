@@ -45,7 +45,16 @@ describe('a cut sheet in French', () => {
     const data = { ...sheet([cuffInch]), existingFinish: 'cuff' as const };
     const file = pdfFile(await renderCutSheet(fr(data)));
     const text = flatText(file);
-    for (const words of ['FICHE DE COUPE', 'Revers, 1 1/2 in de haut', 'Pli intérieur', 'Échelle 1:', 'À L’ÉTABLI, DANS CET ORDRE', 'Défaites les anciens revers', 'ATTENTION AUX MAINS', 'ven. 14 mars 2025']) {
+    for (const words of [
+      'FICHE DE COUPE',
+      'Revers, 1 1/2 in de haut',
+      'Pli intérieur',
+      'Échelle 1:',
+      'À L’ÉTABLI, DANS CET ORDRE',
+      'Défaites les anciens revers',
+      'ATTENTION AUX MAINS',
+      'ven. 14 mars 2025',
+    ]) {
       expect(text).toContain(words);
     }
     expect(text).not.toMatch(/Cutting line|AT THE BENCH|Cloth check|Due /);
@@ -57,7 +66,10 @@ describe('a cut sheet in French', () => {
 
   it('renders every warning and crease verdict from its code in French (no English sentence of the engine left)', () => {
     const c = sheetContent(fr(sheet(busyLegs)));
-    const said = [...c.groups.flatMap((g) => [...g.warnings, g.crease ?? '', g.cloth.text, ...g.cloth.options, g.taper?.summary ?? '', g.taper?.work ?? '']), ...c.steps.flatMap((s) => s.items)];
+    const said = [
+      ...c.groups.flatMap((g) => [...g.warnings, g.crease ?? '', g.cloth.text, ...g.cloth.options, g.taper?.summary ?? '', g.taper?.work ?? '']),
+      ...c.steps.flatMap((s) => s.items),
+    ];
     expect(said.join(' ')).not.toMatch(/\b(the|and|below|above|cuff|cloth|seam)\b/i);
     expect(said.join(' ')).toContain('ancien pli');
   });
@@ -66,7 +78,11 @@ describe('a cut sheet in French', () => {
     it(`${name}: no runs touching, nothing under 9 pt, as many pages as in English`, async () => {
       const pdf = await renderCutSheet(fr(data));
       expect(crowded(pdf)).toEqual([]);
-      expect(textRuns(pdf).filter((r) => r.size < LEAST_PT - 1e-6).map((r) => `${r.size} pt: ${r.text}`)).toEqual([]);
+      expect(
+        textRuns(pdf)
+          .filter((r) => r.size < LEAST_PT - 1e-6)
+          .map((r) => `${r.size} pt: ${r.text}`),
+      ).toEqual([]);
       expect(pageInfo(pdfFile(pdf)).pages).toBe(pageInfo(pdfFile(await renderCutSheet(data))).pages);
     });
   }
@@ -96,7 +112,10 @@ describe('a cut sheet in French', () => {
       scale: fc.constantFrom<['in' | 'cm' | 'mm', 8 | 16 | 32]>(['in', 8], ['in', 16], ['in', 32], ['cm', 8], ['mm', 8]),
       finish: fc.constantFrom('cuff', 'hem'),
       depthMm: fc.integer({ min: 200, max: 700 }).map((k) => k / 10),
-      availableMm: fc.option(fc.integer({ min: 0, max: 50800 }).map((k) => k / 10), { nil: undefined }),
+      availableMm: fc.option(
+        fc.integer({ min: 0, max: 50800 }).map((k) => k / 10),
+        { nil: undefined },
+      ),
       pageSize: fc.constantFrom<'LETTER' | 'A4'>('LETTER', 'A4'),
     });
     await fc.assert(

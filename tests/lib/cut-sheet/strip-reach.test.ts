@@ -57,7 +57,15 @@ function noteOnlyPages(runs: TextRun[], data: CutSheetData): number[] {
 function uncaptionedStrips(runs: TextRun[], data: CutSheetData): number[] {
   const onStrip = linesOnStrip(runs, data).filter((x): x is TextRun => typeof x !== 'string');
   const pages = new Set(onStrip.map((r) => r.page));
-  return [...pages].filter((p) => !runs.some((r) => r.page === p && (r.text.startsWith(t('sheet.guide.top').split(' ').slice(0, 3).join(' ')) || r.text.startsWith(t('sheet.guide.onMatch', { letter: '' }).trim().split(' ')[0]!))));
+  return [...pages].filter(
+    (p) =>
+      !runs.some(
+        (r) =>
+          r.page === p &&
+          (r.text.startsWith(t('sheet.guide.top').split(' ').slice(0, 3).join(' ')) ||
+            r.text.startsWith(t('sheet.guide.onMatch', { letter: '' }).trim().split(' ')[0]!)),
+      ),
+  );
 }
 
 const cases: [string, LegOrder, PageSize][] = [

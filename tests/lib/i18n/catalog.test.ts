@@ -8,7 +8,8 @@ import { catalogKeys, translator } from '@/lib/i18n/catalog';
 import { fromAcceptLanguage, intlLocale, LANGUAGES } from '@/lib/i18n/languages';
 
 // The catalogs as written (the build hands the app syntax trees; here the source text is read).
-const source = (lang: string): Record<string, string> => JSON.parse(readFileSync(new URL(`../../../src/lib/i18n/messages/${lang}.json`, import.meta.url), 'utf8'));
+const source = (lang: string): Record<string, string> =>
+  JSON.parse(readFileSync(new URL(`../../../src/lib/i18n/messages/${lang}.json`, import.meta.url), 'utf8'));
 
 // Every argument a message reads, with its kind, and the selector keys of each select.
 function shape(elements: MessageFormatElement[], out = new Set<string>()): Set<string> {
@@ -63,7 +64,19 @@ describe('the message catalog', () => {
     for (const code of warnings) expect(en[`warning.${code}`], code).toBeTypeOf('string');
     for (const place of places) expect(en[`crease.${place}`], place).toBeTypeOf('string');
     // Refusal codes are listed so a new one is noticed here (their messages are still the engine's English).
-    const refusals: AllowanceErrorCode[] = ['bad-input', 'empty', 'not-a-length', 'divide-by-zero', 'too-large', 'bad-unit', 'bad-precision', 'missing', 'not-positive', 'negative', 'out-of-range'];
+    const refusals: AllowanceErrorCode[] = [
+      'bad-input',
+      'empty',
+      'not-a-length',
+      'divide-by-zero',
+      'too-large',
+      'bad-unit',
+      'bad-precision',
+      'missing',
+      'not-positive',
+      'negative',
+      'out-of-range',
+    ];
     expect(refusals).toHaveLength(11);
   });
 

@@ -26,22 +26,39 @@ describe('engine messages through the catalog', () => {
   it('English rendered from code and values is the engine message (cuffs, hems, tapers)', () => {
     const seen = new Set<WarningCode>();
     fc.assert(
-      fc.property(unitArb, eighths(6, 40), eighths(1, 40), eighths(1, 12), fc.option(eighths(0, 120)), fc.option(eighths(-8, 100)), fc.boolean(), (unit, depth, section, turn, available, crease, slope) => {
-        const mm = (s: string) => (unit === 'mm' ? `${s} in` : s);
-        try {
-          const plan = planCuff({ unit, cuffDepth: mm(depth), hemSection: mm(section), turnUnder: mm(turn), ...(available ? { available: mm(available) } : {}), ...(crease ? { oldCrease: mm(crease) } : {}), ...(slope ? { slope: mm('1/2') } : {}) });
-          checkWarnings(plan.warnings, seen);
-          if (plan.creaseLands) expect(creaseText(en, plan.creaseLands)).toBe(plan.creaseLands.message);
-        } catch (e) {
-          if (!(e instanceof Error && e.name === 'AllowanceError')) throw e;
-        }
-        try {
-          const hem = planHem({ unit, hemAllowance: mm(depth), turnUnder: mm(turn), ...(available ? { available: mm(available) } : {}) });
-          checkWarnings(hem.warnings, seen);
-        } catch (e) {
-          if (!(e instanceof Error && e.name === 'AllowanceError')) throw e;
-        }
-      }),
+      fc.property(
+        unitArb,
+        eighths(6, 40),
+        eighths(1, 40),
+        eighths(1, 12),
+        fc.option(eighths(0, 120)),
+        fc.option(eighths(-8, 100)),
+        fc.boolean(),
+        (unit, depth, section, turn, available, crease, slope) => {
+          const mm = (s: string) => (unit === 'mm' ? `${s} in` : s);
+          try {
+            const plan = planCuff({
+              unit,
+              cuffDepth: mm(depth),
+              hemSection: mm(section),
+              turnUnder: mm(turn),
+              ...(available ? { available: mm(available) } : {}),
+              ...(crease ? { oldCrease: mm(crease) } : {}),
+              ...(slope ? { slope: mm('1/2') } : {}),
+            });
+            checkWarnings(plan.warnings, seen);
+            if (plan.creaseLands) expect(creaseText(en, plan.creaseLands)).toBe(plan.creaseLands.message);
+          } catch (e) {
+            if (!(e instanceof Error && e.name === 'AllowanceError')) throw e;
+          }
+          try {
+            const hem = planHem({ unit, hemAllowance: mm(depth), turnUnder: mm(turn), ...(available ? { available: mm(available) } : {}) });
+            checkWarnings(hem.warnings, seen);
+          } catch (e) {
+            if (!(e instanceof Error && e.name === 'AllowanceError')) throw e;
+          }
+        },
+      ),
       { numRuns: 600, seed: 13 },
     );
     for (const [edge, above, height, cut, seam] of [
@@ -50,9 +67,24 @@ describe('engine messages through the catalog', () => {
       ['8', '9', '10', '7', '1/8'],
       ['8', '8 1/2', '10', '9', '1/16'],
     ] as const) {
-      const t = checkTaper({ unit: 'in', cuffDepth: '1 3/4', widthAtEdge: edge, widthAbove: above, heightAbove: height, seamAllowance: seam, ...(cut ? { widthAtCut: cut } : {}) });
+      const t = checkTaper({
+        unit: 'in',
+        cuffDepth: '1 3/4',
+        widthAtEdge: edge,
+        widthAbove: above,
+        heightAbove: height,
+        seamAllowance: seam,
+        ...(cut ? { widthAtCut: cut } : {}),
+      });
       checkWarnings(t.warnings, seen);
-      const h = checkHemTaper({ unit: 'in', widthAtEdge: edge, widthAbove: above, heightAbove: height, seamAllowance: seam, ...(cut ? { widthAtCut: cut } : {}) });
+      const h = checkHemTaper({
+        unit: 'in',
+        widthAtEdge: edge,
+        widthAbove: above,
+        heightAbove: height,
+        seamAllowance: seam,
+        ...(cut ? { widthAtCut: cut } : {}),
+      });
       checkWarnings(h.warnings, seen);
     }
     // Every code the engine can raise was met and rendered.
