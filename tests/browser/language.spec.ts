@@ -40,7 +40,7 @@ describe('a shop switched to French', () => {
     // The lead chooses millimetres and Français on the settings screen.
     await page.goto('/bench-settings');
     await ready(page);
-    await page.locator('label', { has: page.getByRole('radio', { name: 'mm', exact: true }) }).click();
+    await page.locator('label', { has: page.getByRole('radio', { name: 'Millimetres', exact: true }) }).click();
     await page.locator('label', { has: page.getByRole('radio', { name: 'Français', exact: true }) }).click();
     await page.getByRole('button', { name: 'Save settings' }).click();
     await page.getByText('Saved.').waitFor();
@@ -73,6 +73,9 @@ describe('a shop switched to French', () => {
       )
       .toBe('120 mm');
     expect(await page.getByTestId('plan-summary').innerText()).toContain('sous le repère');
+    // The right leg as the left: both legs are on the sheet.
+    await page.locator('label', { has: page.getByRole('radio', { name: 'Jambe droite', exact: true }) }).click();
+    await page.getByRole('button', { name: 'Comme la jambe gauche' }).click();
     await page.getByRole('button', { name: 'Enregistrer les mesures' }).click();
     await page.getByText('Les deux jambes sont enregistrées.').waitFor();
 
@@ -81,7 +84,8 @@ describe('a shop switched to French', () => {
     const r = await answer;
     expect(r.status()).toBe(200);
     expect(new URL(r.url()).searchParams.get('page')).toBe('A4');
-    const { text, info } = pdfText(await r.body());
+    // The same sheet again for its bytes (the page turned its answer into a blob for the new tab).
+    const { text, info } = pdfText(await (await page.request.get(r.url())).body());
     for (const words of [
       'FICHE DE COUPE',
       'Toutes les longueurs en millimètres',
@@ -123,8 +127,12 @@ describe('the public calculator in French', () => {
     await page.getByRole('button', { name: 'Imprimer la fiche de coupe' }).click();
     const r = await answer;
     expect(r.status()).toBe(200);
-    expect(r.request().postDataJSON()).toMatchObject({ language: 'fr', pageSize: 'LETTER' });
-    const { text } = pdfText(await r.body());
+    const asked = r.request().postDataJSON();
+    expect(asked).toMatchObject({ language: 'fr', pageSize: 'LETTER' });
+    // The same request again for its bytes (the page turned its answer into a blob for the new tab).
+    const again = await page.request.post('/api/plan/sheet', { data: asked, headers: { origin: inject('baseURL') } });
+    expect(again.status()).toBe(200);
+    const { text } = pdfText(await again.body());
     expect(text).toContain('Plan non enregistré du calculateur');
     expect(text).toContain('PAS ASSEZ DE TISSU : ne coupez pas.');
 
