@@ -52,7 +52,7 @@ export function translator(language: Language): Translate {
 /** The catalog's messages in one language, as parts, for values that are not text. */
 export function partsTranslator(language: Language): TranslateParts {
   return (key, values) => {
-    const out = formatOf(language, key)?.format(values as never) ?? key;
-    return Array.isArray(out) ? out : [out as string];
+    const out: unknown = formatOf(language, key)?.format(values as never) ?? key;
+    return (Array.isArray(out) ? out : [out]) as never;
   };
 }

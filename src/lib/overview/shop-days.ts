@@ -1,6 +1,7 @@
 // The shop's days in its own time zone: which calendar day a moment falls on, where each day begins
 // (23 or 25 hours long on a clock-change day), and the overview's periods. Pure: Intl only, so the
 // server, the tests and the SQL's day boundaries (passed in as instants) all read one definition.
+import { DEFAULT_LOCALE } from '../i18n/languages';
 
 /** The time zone of a shop that has not chosen one: the app's dates are written the British way. */
 export const DEFAULT_TIME_ZONE = 'Europe/London';
