@@ -50,8 +50,7 @@ export function LegFields({ leg, finish, unit, register, onFinish, errorFor, rea
   };
   const hint = (f: LegLength) =>
     f === 'cuffDepth' ? say('fieldHint.cuffDepth', hintOf(f), { usual: usualCuffDepthsText() }) : say(`fieldHint.${f}`, FIELD[f].hint);
-  const groupTitle = (title: string) =>
-    title === GROUPS.taper ? t('fitting.group.taper') : (say(`fitting.group.${title}`, title) ?? title);
+  const groupTitle = (title: string) => (title === GROUPS.taper ? t('fitting.group.taper') : (say(`fitting.group.${title}`, title) ?? title));
   return (
     <div className="flex flex-col gap-4">
       <Segmented
