@@ -6,6 +6,7 @@ import tailwindcss from '@tailwindcss/vite';
 import { fileURLToPath } from 'node:url';
 import { nodeWorker } from './scripts/vite-node-worker.mjs';
 import { precompress } from './scripts/precompress.mjs';
+import { icuCatalog, icuParserOffInBrowser } from './scripts/vite-icu-catalog.mjs';
 
 /** In the browser, `zod` resolves to src/lib/zod-jitless.ts (zod configured not to probe eval,
  * which the CSP forbids); the server keeps zod's faster compiled parsers. */
@@ -118,7 +119,7 @@ export default defineConfig({
   vite: {
     // nodeWorker: `?node-worker` imports (the thread that renders strangers' cut sheets).
     // appLoadsAtStart: the built server loads the middleware and opens the database at start.
-    plugins: [tailwindcss(), zodJitlessInBrowser(), nodeWorker(), appLoadsAtStart()],
+    plugins: [tailwindcss(), zodJitlessInBrowser(), icuCatalog(), icuParserOffInBrowser(), nodeWorker(), appLoadsAtStart()],
     // Heavy server-only libraries are never bundled for the browser.
     ssr: { external: ['@electric-sql/pglite'] },
   },

@@ -8,6 +8,8 @@ export default getViteConfig({
     exclude: ['tests/browser/**', 'node_modules/**'],
     // Migrated PGlite snapshot for the database tests (tests/db/test-db.ts).
     globalSetup: ['tests/db/global-setup.ts'],
+    // The message catalog, every language registered, for components rendered outside their pages.
+    setupFiles: ['tests/setup-catalog.ts'],
     testTimeout: 30_000,
     hookTimeout: 60_000,
   },

@@ -1,6 +1,7 @@
 // What the bench's API routes accept (intake, garments, step moves, shop bench settings), checked
 // the same way in the islands' forms and on the server. Plain zod: islands import it.
 import { z } from 'zod';
+import { LANGUAGES } from '@/lib/i18n/languages';
 import { text } from './text';
 import { EXISTING_FINISHES } from './existing-finish';
 import { FITTING_RULES } from './fitting-rule';
@@ -115,4 +116,6 @@ export const settingsRequest = z.object({
   stepLabels: z.partialRecord(z.enum(GARMENT_STEPS), text().trim().max(40, 'Keep a step name under 40 characters.')).default({}),
   // Left out, the shop's rule stays as it was: a client that only changes the scale never loosens it.
   fittingRule: z.enum(FITTING_RULES, { error: 'Choose warn or refuse.' }).optional(),
+  // Left out, the shop's language stays as it was.
+  language: z.enum(LANGUAGES, { error: 'Choose one of the languages offered.' }).optional(),
 });

@@ -1,4 +1,5 @@
 // The shapes the bench's API routes answer with, for the islands to type their queries.
+import type { Language } from '@/lib/i18n/languages';
 import type { ContactPreference } from './contact-channels';
 import type { ExistingFinish } from './existing-finish';
 import type { GarmentStep } from './garment-steps';
@@ -19,6 +20,8 @@ export interface BenchSettings {
   stepLabels: Partial<Record<GarmentStep, string>>;
   /** a garment passing Chalk-marked with no fitting saved: warned on screen, or refused by the server */
   fittingRule: FittingRule;
+  /** the language of the shop's screens and sheets */
+  language: Language;
 }
 
 /** A garment as listed on its ticket. */

@@ -1,4 +1,5 @@
 // Due dates at the bench: overdue, due today or later, read against the device's own calendar.
+import { DEFAULT_LOCALE } from '@/lib/i18n/languages';
 
 /** How a due date stands today. */
 export type DueState = 'overdue' | 'today' | 'later' | 'none';
@@ -15,9 +16,9 @@ export function dueState(dueOn: string | null, today = todayIso()): DueState {
   return dueOn < today ? 'overdue' : dueOn === today ? 'today' : 'later';
 }
 
-/** A due date the way the shop says it: "Tue 1 Dec". */
-export function dueText(dueOn: string | null): string {
-  if (!dueOn) return 'No date';
+/** A due date the way the shop says it: "Tue 1 Dec" (in the shop's language's locale, `noDate` when there is none). */
+export function dueText(dueOn: string | null, locale: string = DEFAULT_LOCALE, noDate = 'No date'): string {
+  if (!dueOn) return noDate;
   const d = new Date(`${dueOn}T12:00:00`);
-  return d.toLocaleDateString('en-GB', { weekday: 'short', day: 'numeric', month: 'short' });
+  return d.toLocaleDateString(locale, { weekday: 'short', day: 'numeric', month: 'short' });
 }

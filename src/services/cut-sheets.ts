@@ -17,6 +17,7 @@ import { letDownFirst } from '@/lib/existing-finish';
 import { savedLegOrder } from '@/lib/fitting/saved-leg';
 import type { LegPlanOptions } from '@/lib/leg-plan';
 import type { SavedLeg } from '@/lib/measurement-request';
+import type { Language } from '@/lib/i18n/languages';
 import type { QueueRow } from '@/lib/bench-types';
 import { filterQueue, type QueueFilter } from '@/lib/queue-filter';
 import { ServiceError } from './errors';
@@ -56,12 +57,22 @@ export interface BatchFile extends SheetFile {
 /** The message a garment with no usable fitting is refused with. */
 export const NO_FITTING = 'This garment has no fitting measurements yet: save the fitting first.';
 
-async function scaleOf(shopId: string, opts: SheetOptions): Promise<{ unit: Unit; precision: Precision; pageSize: PageSize }> {
-  const shop = scaleUnit((await benchSettings(shopId)).scale);
+/** How the shop's sheets print: unit, precision, paper and language. */
+interface SheetScale {
+  unit: Unit;
+  precision: Precision;
+  pageSize: PageSize;
+  language: Language;
+}
+
+async function scaleOf(shopId: string, opts: SheetOptions): Promise<SheetScale> {
+  const settings = await benchSettings(shopId);
+  const shop = scaleUnit(settings.scale);
   const unit = opts.unit ?? shop.unit;
   // The shop's 1/8 or 1/16 carries over to inches asked for without a precision.
   const precision = opts.precision ?? (shop.unit === 'in' ? shop.precision : 8);
-  return { unit, precision, pageSize: opts.pageSize ?? 'LETTER' };
+  // A metric shop's paper is A4, an inch shop's Letter, unless the print asks for the other.
+  return { unit, precision, pageSize: opts.pageSize ?? (shop.unit === 'in' ? 'LETTER' : 'A4'), language: settings.language };
 }
 
 /** The engine's orders for both legs of a saved fitting, read straight from the saved lengths, or a refusal saying what is missing (a let-down pair's measured width at the cut used). */
@@ -82,7 +93,7 @@ export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precisio
 /** The names a sheet's header shows beside the garment (a queue row carries them already). */
 type HeaderNames = Pick<QueueRow, 'ticketNumber' | 'customerName' | 'assigneeName'>;
 
-function headerOf(actor: Actor, g: Garment, names: HeaderNames, baseUrl: string, pageSize: PageSize): SheetHeader {
+function headerOf(actor: Actor, g: Garment, names: HeaderNames, baseUrl: string, pageSize: PageSize, language: Language): SheetHeader {
   const what = g.description ?? 'Trousers';
   return {
     shop: actor.shopName,
@@ -93,6 +104,7 @@ function headerOf(actor: Actor, g: Garment, names: HeaderNames, baseUrl: string,
     assignee: names.assigneeName,
     link: `${baseUrl.replace(/\/+$/, '')}/garments/${g.id}`,
     pageSize,
+    language,
     // An old cuff is let down before any chalk: the sheet's steps start there.
     existingFinish: g.existingFinish,
   };
@@ -111,7 +123,7 @@ async function namesOf(g: Garment): Promise<HeaderNames> {
 function sheetOf(actor: Actor, g: Garment, saved: SavedLeg[], names: HeaderNames, baseUrl: string, scale: Awaited<ReturnType<typeof scaleOf>>): CutSheetData {
   const orders = fittingOrders(saved, scale.unit, scale.precision, { letDown: letDownFirst(g.existingFinish) });
   try {
-    return buildCutSheet(headerOf(actor, g, names, baseUrl, scale.pageSize), orders);
+    return buildCutSheet(headerOf(actor, g, names, baseUrl, scale.pageSize, scale.language), orders);
   } catch (e) {
     // A fitting saved before the engine refused it (widths that give no leg, say) is the
     // fitting's fault, not the server's: 422 with the engine's words.

@@ -7,6 +7,7 @@ import type { Actor } from '@/lib/api';
 import type { settingsRequest } from '@/lib/bench-requests';
 import type { BenchSettings } from '@/lib/bench-types';
 import { DEFAULT_FITTING_RULE } from '@/lib/fitting-rule';
+import { DEFAULT_LANGUAGE } from '@/lib/i18n/languages';
 import { audit } from './audit';
 
 /** The shop's settings, or the defaults (inches to 1/8, the usual step names, warn) before any were saved. */
@@ -16,12 +17,19 @@ export async function benchSettings(shopId: string): Promise<BenchSettings> {
     scale: row?.scale ?? 'in8',
     stepLabels: (row?.stepLabels as BenchSettings['stepLabels']) ?? {},
     fittingRule: row?.fittingRule ?? DEFAULT_FITTING_RULE,
+    language: row?.language ?? DEFAULT_LANGUAGE,
   };
 }
 
 /** Saves the shop's settings. */
 export async function saveBenchSettings(actor: Actor, input: z.output<typeof settingsRequest>): Promise<BenchSettings> {
-  const values = { scale: input.scale, stepLabels: input.stepLabels, ...(input.fittingRule ? { fittingRule: input.fittingRule } : {}), updatedAt: new Date() };
+  const values = {
+    scale: input.scale,
+    stepLabels: input.stepLabels,
+    ...(input.fittingRule ? { fittingRule: input.fittingRule } : {}),
+    ...(input.language ? { language: input.language } : {}),
+    updatedAt: new Date(),
+  };
   await db.transaction(async (tx) => {
     await tx
       .insert(shopSettings)

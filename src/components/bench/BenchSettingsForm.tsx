@@ -9,6 +9,7 @@ import type { BenchSettings } from '@/lib/bench-types';
 import { fetchJson } from '@/lib/fetch-json';
 import { FITTING_RULE_LABELS, FITTING_RULES } from '@/lib/fitting-rule';
 import { DEFAULT_STEP_LABELS, GARMENT_STEPS, stepLabel } from '@/lib/garment-steps';
+import { LANGUAGE_NAMES, LANGUAGES } from '@/lib/i18n/languages';
 import { useBenchSettings } from './use-bench';
 
 type Form = z.input<typeof settingsRequest>;
@@ -53,6 +54,15 @@ function SettingsForm({ initial }: { initial: BenchSettings }) {
         {FITTING_RULES.map((r) => (
           <label key={r} className="inline-flex min-h-11 items-center gap-3 text-lg">
             <input type="radio" value={r} {...register('fittingRule')} className="size-5" /> {FITTING_RULE_LABELS[r]}
+          </label>
+        ))}
+      </fieldset>
+      <fieldset className="flex flex-col gap-2 rounded-lg border-2 border-rule bg-card p-4">
+        <legend className="px-1 text-xl font-extrabold">Language</legend>
+        <p className="text-muted">The garment pages, the fitting form and the printed cut sheets; dates follow it.</p>
+        {LANGUAGES.map((l) => (
+          <label key={l} lang={l} className="inline-flex min-h-11 items-center gap-3 text-lg">
+            <input type="radio" value={l} {...register('language')} className="size-5" /> {LANGUAGE_NAMES[l]}
           </label>
         ))}
       </fieldset>

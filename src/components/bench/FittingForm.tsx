@@ -1,3 +1,4 @@
+import { useT } from '@/components/I18n';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useRef, useState, type MutableRefObject } from 'react';
@@ -66,6 +67,7 @@ function withPreset(form: MeasurementsInput, legs: readonly Leg[], preset: Prese
 /** Both legs' fitting as a form, the chosen leg's live plan beside it; nothing typed is lost on a failed save. */
 export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange, saveRef, letDown = false }: Props) {
   const client = useQueryClient();
+  const t = useT();
   const form = useForm<MeasurementsInput, unknown, Measurements>({ defaultValues: formValues(fitting, unit), resolver, mode: 'onChange' });
   const { register, control, setValue, setError, reset, getValues, handleSubmit, formState } = form;
   const values = useWatch({ control }) as Measurements;
@@ -176,7 +178,7 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
       <PlanSummary leg={leg} planned={planned} />
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,30rem)_minmax(0,1fr)]">
         <form
-          aria-label="Fitting measurements"
+          aria-label={t('fitting.form')}
           noValidate
           onSubmit={(e) => {
             e.preventDefault();
@@ -187,10 +189,10 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
         >
           <Segmented
             name="leg"
-            legend="Leg"
+            legend={t('fitting.leg')}
             value={leg}
             onChange={setLeg}
-            options={LEGS.map((l) => ({ value: l, label: l === 'left' ? 'Left leg' : 'Right leg' }))}
+            options={LEGS.map((l) => ({ value: l, label: t('fitting.legName', { leg: l }) }))}
           />
           <p className="text-base text-muted">
             Lengths in <strong className="text-ink">{values.unit}</strong>; fractions welcome (1 1/2, 1½, 31 3/4 + 1/8), or name a unit (38 mm).
@@ -262,12 +264,12 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
             letDown={letDown}
           />
           <button type="button" onClick={copyOther} className="min-h-11 self-start rounded-md border-2 border-ink px-4 text-lg font-semibold">
-            Same as the {other} leg
+            {t('fitting.sameAs', { other })}
           </button>
           <div className="flex flex-col gap-2 border-t-2 border-rule pt-3">
             {restored && formState.isDirty && (
               <div role="status" className="flex flex-col gap-2 rounded border-2 border-warn bg-warn-soft px-3 py-2 font-semibold text-warn">
-                <p>Lengths typed here before the page was reloaded are back, not yet saved.</p>
+                <p>{t('fitting.restored')}</p>
                 <button
                   type="button"
                   onClick={() => {
@@ -276,23 +278,23 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
                   }}
                   className="min-h-11 self-start rounded border-2 border-warn bg-card px-3"
                 >
-                  Discard them
+                  {t('fitting.discard')}
                 </button>
               </div>
             )}
             {save.error && (
               <p role="alert" className="rounded border-2 border-cut bg-cut-soft px-3 py-2 font-semibold text-cut">
-                Not saved: {save.error.message} Everything you typed is still here.
+                {t('fitting.notSaved', { error: save.error.message })}
               </p>
             )}
             {save.isSuccess && !formState.isDirty && (
               <p role="status" className="rounded border-2 border-ok bg-ok-soft px-3 py-2 font-semibold text-ok">
-                Saved both legs.
+                {t('fitting.saved')}
               </p>
             )}
             {save.isSuccess && typedWhileSaving && formState.isDirty && (
               <p role="status" className="rounded border-2 border-warn bg-warn-soft px-3 py-2 font-semibold text-warn">
-                Saved. What you typed while it was saving is kept here, not yet saved.
+                {t('fitting.savedTyped')}
               </p>
             )}
             <button
@@ -301,10 +303,10 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
               className="min-h-14 rounded-lg bg-accent px-5 text-xl font-extrabold text-white disabled:opacity-60"
             >
               {save.isPending
-                ? 'Saving…'
+                ? t('fitting.saving')
                 : formState.isDirty || (fromDefault && fitting.legs.length === 0)
-                  ? 'Save measurements'
-                  : 'Save measurements (no changes)'}
+                  ? t('fitting.save')
+                  : t('fitting.saveNoChanges')}
             </button>
           </div>
         </form>

@@ -1,3 +1,4 @@
+import { useRich, useT, withLanguage } from '@/components/I18n';
 import { useQuery } from '@tanstack/react-query';
 import { useRef, useState } from 'react';
 import { GarmentPhotos } from '@/components/photos/GarmentPhotos';
@@ -5,7 +6,7 @@ import { withQuery } from '@/components/WithQuery';
 import { PrintCutSheet } from '@/components/cut-sheets/PrintCutSheet';
 import { scaleUnit, type Scale } from '@/lib/bench-requests';
 import type { FittingView, GarmentDetail } from '@/lib/bench-types';
-import { EXISTING_FINISH_LABELS, letDownFirst } from '@/lib/existing-finish';
+import { letDownFirst } from '@/lib/existing-finish';
 import { fetchJson } from '@/lib/fetch-json';
 import { GARMENT_STEPS } from '@/lib/garment-steps';
 import { ticketLabel } from '@/lib/ticket-number';
@@ -55,6 +56,8 @@ function Bench({
   });
   const settings = useBenchSettings();
   const label = useStepLabel();
+  const t = useT();
+  const rich = useRich();
   const [editing, setEditing] = useState(false);
   // The fitting form's unsaved state and its save, so printing never quietly prints stale lengths.
   const [fittingDirty, setFittingDirty] = useState(false);
@@ -65,7 +68,7 @@ function Bench({
         {garment.error.message}
       </p>
     );
-  if (garment.isPending || settings.isPending) return <p className="text-xl text-muted">Loading the garment…</p>;
+  if (garment.isPending || settings.isPending) return <p className="text-xl text-muted">{t('garment.loading')}</p>;
   const g = garment.data;
   const { unit, precision } = scaleUnit(settings.data?.scale ?? 'in8');
   const at = GARMENT_STEPS.indexOf(g.status);
@@ -81,20 +84,20 @@ function Bench({
         </p>
         <h1 className="text-4xl font-extrabold">{g.description}</h1>
         <dl className="grid gap-x-8 gap-y-1 text-lg sm:grid-cols-[auto_1fr]">
-          <dt className="font-semibold">Due</dt>
+          <dt className="font-semibold">{t('garment.due')}</dt>
           <dd>
             <DueBadge dueOn={g.dueOn} />
           </dd>
-          <dt className="font-semibold">Given to</dt>
-          <dd>{g.assigneeName ?? 'Nobody yet'}</dd>
-          <dt className="font-semibold">Existing finish</dt>
+          <dt className="font-semibold">{t('garment.givenTo')}</dt>
+          <dd>{g.assigneeName ?? t('garment.nobody')}</dd>
+          <dt className="font-semibold">{t('garment.existingFinish')}</dt>
           <dd>
-            {EXISTING_FINISH_LABELS[g.existingFinish]}
-            {g.existingFinish === 'cuff' && ': let down and press out the old creases first'}
+            {t(`existing.${g.existingFinish}`)}
+            {g.existingFinish === 'cuff' && t('garment.letDownFirst')}
           </dd>
           {g.customer?.notes && (
             <>
-              <dt className="font-semibold">Customer notes</dt>
+              <dt className="font-semibold">{t('garment.customerNotes')}</dt>
               <dd>{g.customer.notes}</dd>
             </>
           )}
@@ -104,12 +107,12 @@ function Bench({
             <GarmentEdit garment={g} onDone={() => setEditing(false)} />
           ) : (
             <button type="button" onClick={() => setEditing(true)} className="min-h-11 self-start rounded-md border-2 border-ink px-4 text-lg font-semibold">
-              Change description, due date, who or existing finish
+              {t('garment.change')}
             </button>
           ))}
         {/* A record of where the garment stands, drawn as text (no outlines, no fills) so nothing
             looks tappable: the one way to move it is the button below, with its rules. */}
-        <ol aria-label="Bench steps" data-testid="step-record" className="flex flex-wrap items-baseline gap-x-2 gap-y-1 text-lg">
+        <ol aria-label={t('garment.steps')} data-testid="step-record" className="flex flex-wrap items-baseline gap-x-2 gap-y-1 text-lg">
           {GARMENT_STEPS.map((s, i) => (
             <li key={s} aria-current={i === at ? 'step' : undefined} className="inline-flex items-baseline gap-2">
               {i > 0 && (
@@ -120,14 +123,12 @@ function Bench({
               <span className={i === at ? 'font-extrabold text-ink underline decoration-4 underline-offset-4' : i < at ? 'text-ok' : 'text-muted'}>
                 {i < at && <span aria-hidden="true">✓ </span>}
                 {label(s)}
-                {i < at && <span className="sr-only"> (done)</span>}
+                {i < at && <span className="sr-only">{t('garment.done')}</span>}
               </span>
             </li>
           ))}
         </ol>
-        <p className="text-2xl">
-          Now: <strong data-testid="garment-step">{label(g.status)}</strong>
-        </p>
+        <p className="text-2xl">{rich('garment.now', { step: <strong data-testid="garment-step">{label(g.status)}</strong> })}</p>
         <div className="flex flex-wrap items-start gap-4">
           <StepButton garmentId={g.id} status={g.status} canAdvance={canAdvance} canPickup={canPickup} canReopen={canReopen} fitted={g.fitted} />
           <StepBackButton garmentId={g.id} status={g.status} canAdvance={canAdvance} canReopen={canReopen} />
@@ -136,7 +137,7 @@ function Bench({
 
       {canReadFitting &&
         (fitting.isPending ? (
-          <p className="text-lg text-muted">Loading the fitting…</p>
+          <p className="text-lg text-muted">{t('garment.loadingFitting')}</p>
         ) : fitting.isError ? (
           <p role="alert" className="font-semibold text-cut">
             {fitting.error.message}
@@ -172,5 +173,5 @@ function Bench({
   );
 }
 
-/** The garment page island: where it stands, its fitting per leg with the live plan, photos, history. */
-export default withQuery(Bench);
+/** The garment page island: where it stands, its fitting per leg with the live plan, photos, history; in the shop's language. */
+export default withLanguage(withQuery(Bench));

@@ -1,10 +1,12 @@
+import { useT } from '@/components/I18n';
+import type { MessageKey } from '@/lib/i18n/format';
 import type { UseFormRegister } from 'react-hook-form';
 import { LengthInput } from '@/components/LengthInput';
 import { Segmented } from '@/components/calculator/Segmented';
 // The defaults module only (no parser, so no mathjs in the island).
 import { usualCuffDepthsText } from '@/lib/allowance/defaults';
 import { FIELD, fieldsOf, GROUPS, KINDS, partOf, type GroupId } from '@/lib/fitting/kinds';
-import { FINISH_LABELS, FINISHES, LEG_LENGTH_LABELS, type Finish, type Leg, type LegLength, type MeasurementsInput } from '@/lib/measurement-request';
+import { FINISHES, type Finish, type Leg, type LegLength, type MeasurementsInput } from '@/lib/measurement-request';
 
 interface Props {
   leg: Leg;
@@ -37,27 +39,39 @@ function groupsOf(finish: Finish, letDown: boolean): { title: string; fields: Le
 
 /** One leg's fitting fields for its finish (the other finishes' values are kept, only hidden). */
 export function LegFields({ leg, finish, unit, register, onFinish, errorFor, readingFor, letDown = false }: Props) {
+  const t = useT();
+  // Hints in the catalog's words (fieldHint.<key>); a field without one has none.
+  // The registry's words (src/lib/fitting/kinds.ts) through the catalog (field.<key>, fieldHint.<key>);
+  // a key the catalog lacks keeps the registry's English.
+  const say = (key: string, english: string | undefined, values?: Record<string, string>) => {
+    if (english === undefined) return undefined;
+    const said = t(key as MessageKey, values);
+    return said === key ? english : said;
+  };
+  const hint = (f: LegLength) =>
+    f === 'cuffDepth' ? say('fieldHint.cuffDepth', hintOf(f), { usual: usualCuffDepthsText() }) : say(`fieldHint.${f}`, FIELD[f].hint);
+  const groupTitle = (title: string) => (title === GROUPS.taper ? t('fitting.group.taper') : (say(`fitting.group.${title}`, title) ?? title));
   return (
     <div className="flex flex-col gap-4">
       <Segmented
         name={`finish-${leg}`}
-        legend={`Finish, ${leg} leg`}
+        legend={t('fitting.finishOf', { leg })}
         value={finish}
         onChange={onFinish}
-        options={FINISHES.map((f) => ({ value: f, label: FINISH_LABELS[f] }))}
+        options={FINISHES.map((f) => ({ value: f, label: t(`fitting.finish.${f}`) }))}
       />
       {groupsOf(finish, letDown).map((g) => (
         <fieldset key={g.title} className="flex flex-col gap-3">
-          <legend className="mb-1 text-lg font-extrabold">{g.title}</legend>
+          <legend className="mb-1 text-lg font-extrabold">{groupTitle(g.title)}</legend>
           <div className="grid gap-3 sm:grid-cols-2">
             {g.fields.map((f) => (
               <LengthInput
                 key={f}
                 id={`m-legs-${leg}-${f}`}
-                label={LEG_LENGTH_LABELS[f]}
+                label={say(`field.${f}`, FIELD[f].label) ?? FIELD[f].label}
                 unit={unit}
                 registration={register(`legs.${leg}.${f}`)}
-                hint={hintOf(f)}
+                hint={hint(f)}
                 error={errorFor(f)}
                 reading={readingFor(f)}
               />

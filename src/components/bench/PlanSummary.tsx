@@ -1,4 +1,6 @@
-import type { CuffPlan, HemPlan } from '@/lib/allowance/types';
+import { useRich, useT } from '@/components/I18n';
+import { warningText } from '@/lib/i18n/engine-messages';
+import type { CuffPlan, HemPlan, PlanWarning } from '@/lib/allowance/types';
 import type { Leg } from '@/lib/measurement-request';
 import type { LegPlanState } from './use-leg-plan';
 import { worstWarning } from './worst-warning';
@@ -9,10 +11,12 @@ interface Props {
 }
 
 function Cloth({ plan }: { plan: CuffPlan | HemPlan }) {
-  if (plan.enough === null) return <span className="text-base text-muted">Cloth not checked</span>;
+  const t = useT();
+  if (plan.enough === null) return <span className="text-base text-muted">{t('summary.notChecked')}</span>;
   return (
     <span className="text-base font-bold text-ok">
-      <span aria-hidden="true">✓ </span>Enough cloth
+      <span aria-hidden="true">✓ </span>
+      {t('summary.enough')}
     </span>
   );
 }
@@ -27,33 +31,40 @@ export function PlanSummary({ leg, planned }: Props) {
   const main = plan && plan.kind !== 'taper' ? plan : null;
   const stale = problem !== null;
   const cut = main?.lines.find((l) => l.name === 'cut');
-  const worst = main ? worstWarning([...main.warnings, ...(taper?.warnings ?? [])], taperProblem) : taperProblem ? worstWarning([], taperProblem) : null;
+  const t = useT();
+  const rich = useRich();
+  const say = { warning: (w: PlanWarning) => warningText(t, w), taper: (problem: string) => t('summary.taperCheck', { problem }) };
+  const worst = main
+    ? worstWarning([...main.warnings, ...(taper?.warnings ?? [])], taperProblem, say)
+    : taperProblem
+      ? worstWarning([], taperProblem, say)
+      : null;
   return (
     <div
       role="region"
-      aria-label={`Plan in short, ${leg} leg`}
+      aria-label={t('summary.region', { leg })}
       data-testid="plan-summary"
       className="sticky top-0 z-20 -mx-4 flex flex-col border-b-4 border-ink bg-card px-4 py-1.5 shadow-md sm:mx-0 sm:rounded-b-lg sm:border-x-2"
     >
       <p className="flex flex-wrap items-baseline gap-x-2.5">
-        <span className="text-sm font-extrabold tracking-wide uppercase">{leg === 'left' ? 'Left' : 'Right'} leg</span>
+        <span className="text-sm font-extrabold tracking-wide uppercase">{t('summary.leg', { leg })}</span>
         {failure ? (
           <span className="text-lg font-semibold text-cut">{failure}</span>
         ) : !main ? (
-          <span className={`text-lg ${problem?.kind === 'error' ? 'font-semibold text-cut' : 'text-muted'}`}>{problem?.text ?? 'Working out the plan…'}</span>
+          <span className={`text-lg ${problem?.kind === 'error' ? 'font-semibold text-cut' : 'text-muted'}`}>{problem?.text ?? t('calc.working')}</span>
         ) : main.enough === false ? (
           // Short of cloth there is no line to cut at, here as in the full plan.
           <span data-testid="summary-no-fit" className="text-2xl font-extrabold text-cut">
-            Does not fit: short by <span className="measure">{main.shortBy?.text}</span>
+            {rich('summary.noFit', { shortBy: <span className="measure">{main.shortBy?.text}</span> })}
           </span>
         ) : (
           cut && (
             <>
-              <span className="text-lg font-semibold">Cut</span>
+              <span className="text-lg font-semibold">{t('summary.cut')}</span>
               <span data-testid="summary-cut" className={`measure text-4xl leading-tight font-extrabold ${stale ? 'text-muted' : 'text-cut'}`}>
                 {cut.belowMark.text}
               </span>
-              <span className="text-base">below the mark</span>
+              <span className="text-base">{t('summary.belowMark')}</span>
             </>
           )
         )}
@@ -61,7 +72,7 @@ export function PlanSummary({ leg, planned }: Props) {
       {(main || worst) && (
         <p className="flex min-w-0 items-baseline gap-x-3 text-base font-semibold">
           {main && stale ? (
-            <span className="shrink-0 text-cut">Not for what is typed now</span>
+            <span className="shrink-0 text-cut">{t('summary.stale')}</span>
           ) : main && main.enough !== false ? (
             <span className="shrink-0">
               <Cloth plan={main} />
@@ -71,7 +82,7 @@ export function PlanSummary({ leg, planned }: Props) {
             <span data-testid="summary-warning" className="min-w-0 truncate text-warn md:line-clamp-2 md:whitespace-normal">
               <span aria-hidden="true">⚠ </span>
               {worst.message}
-              {worst.others > 0 && <span className="text-muted"> (+{worst.others} more in the plan)</span>}
+              {worst.others > 0 && <span className="text-muted">{t('summary.more', { n: worst.others })}</span>}
             </span>
           )}
         </p>

@@ -1,3 +1,4 @@
+import { useMaybeT } from '@/components/I18n';
 // The queries every bench island shares: the shop's settings and its people.
 import { useQuery } from '@tanstack/react-query';
 import { useCallback } from 'react';
@@ -18,6 +19,8 @@ export function useAssignees() {
 /** A function naming steps in the shop's own words. */
 export function useStepLabel(): (step: GarmentStep) => string {
   const labels = useBenchSettings().data?.stepLabels;
-  // The same function until the names change, so the queue's columns are not rebuilt every render.
-  return useCallback((step) => stepLabel(step, labels), [labels]);
+  const t = useMaybeT();
+  // The same function until the names or the language change, so the queue's columns are not rebuilt every render.
+  // A step the shop renamed keeps its own name; the others are the catalog's (English: DEFAULT_STEP_LABELS).
+  return useCallback((step) => (t ? labels?.[step]?.trim() || t(`step.${step}`) : stepLabel(step, labels)), [labels, t]);
 }

@@ -17,7 +17,11 @@ const ORDER: WarningCode[] = [
 ];
 
 /** The warning to show first and how many others there are; a taper the engine refused outranks every warning. */
-export function worstWarning(warnings: readonly PlanWarning[], taperProblem: string | null = null): { message: string; others: number } | null {
+export function worstWarning(
+  warnings: readonly PlanWarning[],
+  taperProblem: string | null = null,
+  say: { warning: (w: PlanWarning) => string; taper: (problem: string) => string } = { warning: (w) => w.message, taper: (p) => `Taper check: ${p}` },
+): { message: string; others: number } | null {
   const rank = (w: PlanWarning) => {
     const i = ORDER.indexOf(w.code);
     return i === -1 ? ORDER.length : i;
@@ -25,6 +29,6 @@ export function worstWarning(warnings: readonly PlanWarning[], taperProblem: str
   const listed = warnings.filter((w) => w.code !== 'not-enough-cloth');
   // One message once: the cuff plan and its taper check can raise the same warning.
   const unique = [...new Map(listed.map((w) => [`${w.code}:${w.message}`, w])).values()].sort((x, y) => rank(x) - rank(y));
-  const all = taperProblem ? [`Taper check: ${taperProblem}`, ...unique.map((w) => w.message)] : unique.map((w) => w.message);
+  const all = taperProblem ? [say.taper(taperProblem), ...unique.map(say.warning)] : unique.map(say.warning);
   return all.length ? { message: all[0]!, others: all.length - 1 } : null;
 }

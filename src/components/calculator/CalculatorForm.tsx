@@ -1,4 +1,5 @@
 import { useState, type SubmitEvent } from 'react';
+import { useT } from '@/components/I18n';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import { checkPlanRequest } from '@/lib/plan-check';
 import type { PlanRequestInput } from '@/lib/plan-request';
@@ -34,13 +35,13 @@ function ownMessages(request: PlanRequestInput | null): Record<string, string> {
   return checked && !checked.ok ? checked.issues : {};
 }
 
-const UNIT_WORDS: Record<Unit, string> = { in: 'inches', cm: 'centimetres', mm: 'millimetres' };
-
 /** Fields whose text could not be carried to the new unit: the text left, and the unit it was typed in. */
 type Unconverted = Partial<Record<LengthField, { text: string; from: Unit }>>;
 
 /** The form on the left, the plan on the right; the plan follows the typing a quarter-second behind. */
 export function CalculatorForm() {
+  const t = useT();
+  const unitWords = (u: Unit) => t(`calc.unit.${u}`);
   const [values, setValues] = useState<CalculatorValues>(BLANK);
   // A field's own message shows once it has been typed in (or the form was submitted), as it is typed.
   const [typedIn, setTypedIn] = useState<ReadonlySet<LengthField>>(() => new Set());
@@ -91,7 +92,7 @@ export function CalculatorForm() {
     const left = unconverted[f]?.text === values[f] ? unconverted[f] : undefined;
     return {
       reading: readLength(values[f], values.unit, values.precision),
-      note: left ? `Left as typed in ${UNIT_WORDS[left.from]}: it could not be read, so it was not changed to ${UNIT_WORDS[values.unit]}. Check it.` : null,
+      note: left ? t('calc.leftAsTyped', { from: unitWords(left.from), to: unitWords(values.unit) }) : null,
     };
   };
 
@@ -112,8 +113,8 @@ export function CalculatorForm() {
   const blankDepth = settled.kind === 'cuff' && settled.cuffDepth.trim() === '';
   const problem: Problem | null = !main.asked
     ? blankDepth
-      ? { kind: 'empty', text: 'Type the cuff depth, or tap a common one, and the chalk lines appear here.' }
-      : { kind: 'error', text: 'Fix the field marked in red.' }
+      ? { kind: 'empty', text: t('calc.problem.empty') }
+      : { kind: 'error', text: t('calc.problem.fix') }
     : main.data && !main.data.ok
       ? { kind: 'error', text: main.data.error }
       : null;
@@ -143,18 +144,18 @@ export function CalculatorForm() {
     // On paper the form is hidden and the plan takes the whole width, whatever the screen was.
     <div className="grid items-start gap-6 [font-feature-settings:'cv11'_1] lg:grid-cols-[minmax(0,27rem)_minmax(0,1fr)] print:block">
       <div className="flex flex-col gap-6 print:hidden">
-        <form aria-label="Measurements" noValidate onSubmit={onSubmit} className="flex flex-col gap-5 rounded-lg border-2 border-rule bg-card p-4">
+        <form aria-label={t('calc.form')} noValidate onSubmit={onSubmit} className="flex flex-col gap-5 rounded-lg border-2 border-rule bg-card p-4">
           <Segmented
             name="finish"
-            legend="Finish"
+            legend={t('calc.finish')}
             value={values.kind}
             onChange={setKind}
             options={[
-              { value: 'cuff', label: 'Cuff' },
-              { value: 'hem', label: 'Plain hem' },
+              { value: 'cuff', label: t('calc.finish.cuff') },
+              { value: 'hem', label: t('calc.finish.hem') },
             ]}
           />
-          <Segmented name="scale" legend="Measure in" value={toScale(values.unit, values.precision)} onChange={setScale} options={SCALES} />
+          <Segmented name="scale" legend={t('calc.measureIn')} value={toScale(values.unit, values.precision)} onChange={setScale} options={SCALES} />
           {values.kind === 'cuff' ? (
             <CuffFields bind={bind} unit={unitLabel} errorFor={errorFor} info={info} cuffDepth={values.cuffDepth} onPick={(v) => setField('cuffDepth', v)} />
           ) : (
@@ -173,7 +174,7 @@ export function CalculatorForm() {
             />
           )}
         </form>
-        <PrintPlan body={sheetBody} blocked={sheetBody ? null : 'The sheet can be printed once the plan is worked out.'} />
+        <PrintPlan body={sheetBody} blocked={sheetBody ? null : t('calc.printBlocked')} />
       </div>
       <PlanView plan={plan} problem={problem} failure={main.error ? main.error.message : null} taper={taperPlan} />
     </div>

@@ -1,6 +1,7 @@
 import type { Unit } from '@/lib/allowance/types';
 import type { LengthField as Field } from './calculator-values';
 import { LengthField, type Bind, type FieldInfo } from './LengthField';
+import { useT } from '@/components/I18n';
 
 interface Props {
   bind: Bind;
@@ -13,31 +14,32 @@ interface Props {
 export function HemFields({ bind, unit, errorFor, info }: Props) {
   const common = { bind, unit, info };
   const inch = unit === 'in';
+  const t = useT();
   return (
     <div className="grid gap-4 sm:grid-cols-2">
       <div className="sm:col-span-2">
-        <LengthField
-          {...common}
-          name="available"
-          label="Cloth below the mark"
-          error={errorFor('available')}
-          hint="Let the old hem down first, then measure from the pin mark to the raw edge."
-        />
+        <LengthField {...common} name="available" label={t('calc.field.available')} error={errorFor('available')} hint={t('calc.hint.available')} />
       </div>
       <LengthField
         {...common}
         name="hemAllowance"
-        label="Hem allowance"
+        label={t('calc.field.hemAllowance')}
         error={errorFor('hemAllowance')}
-        hint={inch ? 'Blank: 1 1/2 in, turn-under included.' : 'Blank: 40 mm, turn-under included.'}
+        hint={t('calc.hint.hemAllowance', { length: inch ? '1 1/2 in' : '40 mm' })}
       />
-      <LengthField {...common} name="turnUnder" label="Turn-under" error={errorFor('turnUnder')} hint={inch ? 'Blank: 1/4 in.' : 'Blank: 6 mm.'} />
+      <LengthField
+        {...common}
+        name="turnUnder"
+        label={t('calc.field.turnUnder')}
+        error={errorFor('turnUnder')}
+        hint={t('calc.hint.blank', { length: inch ? '1/4 in' : '6 mm' })}
+      />
       <LengthField
         {...common}
         name="slope"
-        label="Slope (optional)"
+        label={t('calc.optional', { label: t('calc.field.slope') })}
         error={errorFor('slope')}
-        hint={inch ? 'How much lower at the back than the front, often 1/2 in.' : 'How much lower at the back than the front, often 12 mm.'}
+        hint={t('calc.hint.slope', { length: inch ? '1/2 in' : '12 mm' })}
       />
     </div>
   );

@@ -1,3 +1,4 @@
+import { useT } from '@/components/I18n';
 import type { PlanResponse } from '@/lib/plan-request';
 import type { TaperPlan } from '@/lib/allowance/types';
 import { ChalkLines } from './ChalkLines';
@@ -29,10 +30,11 @@ interface Props {
 
 /** The plan for what is typed: the cutting line (or, short of cloth, what still fits) first, then the check, the lines, the drawing. */
 export function PlanView({ plan, problem, failure, taper }: Props) {
+  const t = useT();
   const main = plan && plan.kind !== 'taper' ? plan : null;
   const stale = problem !== null;
   return (
-    <section aria-label="Plan" className="flex flex-col gap-4">
+    <section aria-label={t('calc.plan')} className="flex flex-col gap-4">
       {failure && (
         <p role="alert" className="rounded-md border-2 border-cut bg-cut-soft px-4 py-3 text-lg font-semibold text-cut">
           {failure}
@@ -40,7 +42,7 @@ export function PlanView({ plan, problem, failure, taper }: Props) {
       )}
       {main && problem && (
         <p role="alert" className="rounded-md border-l-8 border-cut bg-card px-4 py-3 text-lg font-semibold">
-          {problem.text} The lines below are for your last good entry: do not cut by them.
+          {t('calc.stale', { problem: problem.text })}
         </p>
       )}
       {!main ? (
@@ -51,7 +53,7 @@ export function PlanView({ plan, problem, failure, taper }: Props) {
             (problem?.kind === 'error' ? 'border-cut bg-cut-soft font-semibold text-cut' : 'border-dashed border-rule bg-card text-muted')
           }
         >
-          {problem?.text ?? 'Working out the plan…'}
+          {problem?.text ?? t('calc.working')}
         </div>
       ) : (
         // Stale: drained of colour, not faded, so every word keeps its contrast (issue 15); the alert above says why.

@@ -1,6 +1,7 @@
 import { useId, useState } from 'react';
 import type { PageSize } from '@/lib/cut-sheet/types';
 import { PrintOutcome, usePrintSheet } from '@/components/cut-sheets/use-print-sheet';
+import { useLanguage, useT } from '@/components/I18n';
 
 interface Props {
   /** the plan request as typed (unit included), or null while there is nothing to print */
@@ -11,7 +12,12 @@ interface Props {
 
 /** Prints the calculator's plan as a cut sheet (POST /api/plan/sheet) on Letter or A4, in the unit chosen. */
 export function PrintPlan({ body, blocked }: Props) {
-  const [page, setPage] = useState<PageSize>('LETTER');
+  const t = useT();
+  const language = useLanguage();
+  // A metric plan starts on A4, an inch plan on Letter.
+  const metric = body?.unit === 'mm' || body?.unit === 'cm';
+  const [chosen, setPage] = useState<PageSize | null>(null);
+  const page: PageSize = chosen ?? (metric ? 'A4' : 'LETTER');
   const { state, print } = usePrintSheet();
   const id = useId();
   const onPrint = () =>
@@ -20,17 +26,17 @@ export function PrintPlan({ body, blocked }: Props) {
       fetch('/api/plan/sheet', {
         method: 'POST',
         headers: { 'content-type': 'application/json' },
-        body: JSON.stringify({ ...body, pageSize: page }),
+        body: JSON.stringify({ ...body, pageSize: page, language }),
       }),
     );
   return (
     <section aria-labelledby={`${id}-h`} className="flex flex-wrap items-end gap-3 rounded-lg border-2 border-rule bg-card p-4 print:hidden">
       <h2 id={`${id}-h`} className="w-full text-xl font-extrabold">
-        Cut sheet
+        {t('calc.sheet')}
       </h2>
       <div className="flex flex-col gap-1">
         <label htmlFor={`${id}-page`} className="font-semibold">
-          Paper
+          {t('calc.paper')}
         </label>
         <select
           id={`${id}-page`}
@@ -48,7 +54,7 @@ export function PrintPlan({ body, blocked }: Props) {
         disabled={!body || state.status === 'busy'}
         className="min-h-12 rounded-lg bg-accent px-5 text-lg font-bold text-white disabled:opacity-60"
       >
-        {state.status === 'busy' ? 'Making the sheet…' : 'Print cut sheet'}
+        {state.status === 'busy' ? t('calc.making') : t('calc.print')}
       </button>
       {blocked && <p className="w-full text-base text-muted">{blocked}</p>}
       <PrintOutcome state={state} filename="cut-sheet.pdf" />

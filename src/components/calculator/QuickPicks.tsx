@@ -1,4 +1,6 @@
+import { useT } from '@/components/I18n';
 import type { Unit } from '@/lib/allowance/types';
+import type { MessageKey } from '@/lib/i18n/format';
 
 const PICKS: Record<Unit, { value: string; label: string; note: string }[]> = {
   in: [
@@ -18,8 +20,11 @@ interface Props {
 
 /** Common cuff depths (common practice, no source) one tap away. */
 export function QuickPicks({ unit, current, onPick }: Props) {
+  const t = useT();
+  // The inch picks are named by the look (a catalog word); metric ones by their unit.
+  const note = (n: string) => (unit === 'in' ? t(`calc.pick.${n}` as MessageKey) : n);
   return (
-    <div role="group" aria-label="Common cuff depths" className="flex flex-wrap gap-2">
+    <div role="group" aria-label={t('calc.picks')} className="flex flex-wrap gap-2">
       {PICKS[unit].map((p) => (
         <button
           key={p.value}
@@ -29,7 +34,7 @@ export function QuickPicks({ unit, current, onPick }: Props) {
           className="flex min-h-11 min-w-16 flex-col items-center justify-center rounded-md border-2 border-rule bg-card px-3 leading-tight hover:border-accent aria-pressed:border-accent aria-pressed:bg-accent-soft"
         >
           <span className="measure text-lg font-semibold">{p.label}</span>
-          <span className="text-xs text-muted">{p.note}</span>
+          <span className="text-xs text-muted">{note(p.note)}</span>
         </button>
       ))}
     </div>

@@ -1,4 +1,5 @@
 import type { CuffLineName, HemLineName } from '@/lib/allowance/types';
+import type { Translate } from '@/lib/i18n/format';
 
 /** The chalk lines' names as the bench says them. */
 export const LINE_NAMES: Record<CuffLineName | HemLineName, string> = {
@@ -7,3 +8,8 @@ export const LINE_NAMES: Record<CuffLineName | HemLineName, string> = {
   'inner-fold': 'Inner fold',
   cut: 'Cutting line',
 };
+
+/** A chalk line's name in the catalog's language. */
+export function lineName(t: Translate, name: CuffLineName | HemLineName): string {
+  return t(`line.${name}`);
+}

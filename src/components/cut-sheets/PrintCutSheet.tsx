@@ -1,3 +1,4 @@
+import { useT } from '@/components/I18n';
 import { useId, useState } from 'react';
 import { SCALE_LABELS, SCALES, scaleUnit, type Scale } from '@/lib/bench-requests';
 import { PrintOutcome, usePrintSheet } from './use-print-sheet';
@@ -23,7 +24,9 @@ export function sheetHref(garmentId: string, scale: Scale, page: 'LETTER' | 'A4'
 /** "Print cut sheet": choose the unit and paper, fetch the PDF and open it; unsaved changes are saved first or said. */
 export function PrintCutSheet({ garmentId, scale: initial, unsaved = false, save }: Props) {
   const [scale, setScale] = useState<Scale>(initial);
-  const [page, setPage] = useState<'LETTER' | 'A4'>('LETTER');
+  // A metric shop prints on A4, an inch shop on Letter, until the paper is chosen here.
+  const [page, setPage] = useState<'LETTER' | 'A4'>(scaleUnit(initial).unit === 'in' ? 'LETTER' : 'A4');
+  const t = useT();
   const [asking, setAsking] = useState(false);
   const [notSaved, setNotSaved] = useState(false);
   const { state, print } = usePrintSheet();
@@ -43,11 +46,11 @@ export function PrintCutSheet({ garmentId, scale: initial, unsaved = false, save
   return (
     <section aria-labelledby={`${id}-h`} className="flex flex-wrap items-end gap-3 rounded-lg border-2 border-rule bg-card p-4">
       <h2 id={`${id}-h`} className="sr-only">
-        Cut sheet
+        {t('calc.sheet')}
       </h2>
       <div className="flex flex-col gap-1">
         <label htmlFor={`${id}-unit`} className="font-semibold">
-          Sheet in
+          {t('print.sheetIn')}
         </label>
         <select id={`${id}-unit`} value={scale} onChange={(e) => setScale(e.target.value as Scale)} className={select}>
           {SCALES.map((s) => (
@@ -59,7 +62,7 @@ export function PrintCutSheet({ garmentId, scale: initial, unsaved = false, save
       </div>
       <div className="flex flex-col gap-1">
         <label htmlFor={`${id}-page`} className="font-semibold">
-          Paper
+          {t('calc.paper')}
         </label>
         <select id={`${id}-page`} value={page} onChange={(e) => setPage(e.target.value as 'LETTER' | 'A4')} className={select}>
           <option value="LETTER">Letter</option>
@@ -72,26 +75,26 @@ export function PrintCutSheet({ garmentId, scale: initial, unsaved = false, save
         onClick={() => (unsaved ? setAsking(true) : printSaved())}
         className="min-h-12 rounded-lg bg-accent px-5 text-lg font-bold text-white disabled:opacity-60"
       >
-        {state.status === 'busy' ? 'Making the sheet…' : 'Print cut sheet'}
+        {state.status === 'busy' ? t('calc.making') : t('calc.print')}
       </button>
       {asking && unsaved && (
         <div role="alert" className="flex w-full flex-col gap-2 rounded border-2 border-warn bg-warn-soft px-3 py-2 text-lg font-semibold text-warn">
-          <p>The fitting has changes that are not saved. The sheet prints what is saved, not what is on screen.</p>
+          <p>{t('print.unsavedAsk')}</p>
           <div className="flex flex-wrap gap-3">
             {save && (
               <button type="button" onClick={() => void saveThenPrint()} className="min-h-11 rounded bg-accent px-4 text-white">
-                Save, then print
+                {t('print.saveThen')}
               </button>
             )}
             <button type="button" onClick={printSaved} className="min-h-11 rounded border-2 border-warn bg-card px-4">
-              Print the saved measurements
+              {t('print.saved')}
             </button>
           </div>
         </div>
       )}
       {notSaved && (
         <p role="alert" className="w-full rounded border-2 border-cut bg-cut-soft px-3 py-2 text-lg font-semibold text-cut">
-          Not printed: the fitting could not be saved. Fix what is marked in the fitting, then print again.
+          {t('print.notSaved')}
         </p>
       )}
       <PrintOutcome state={state} filename="cut-sheet.pdf" />

@@ -1,3 +1,4 @@
+import { DEFAULT_LOCALE } from '@/lib/i18n/languages';
 // The lead's staff screen: who works here, pending invitations, invite, change role, remove.
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
@@ -157,7 +158,7 @@ function StaffManager({ myEmail }: { myEmail: string }) {
                 {staff.data.invitations.map((i) => (
                   <li key={i.id}>
                     {i.email}: {ROLE_LABELS[i.role].name}, until{' '}
-                    {new Date(i.expiresAt).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' })}
+                    {new Date(i.expiresAt).toLocaleDateString(DEFAULT_LOCALE, { day: 'numeric', month: 'short', year: 'numeric' })}
                   </li>
                 ))}
               </ul>

@@ -7,6 +7,7 @@ import { z } from 'zod';
 import { DEFAULT_EXISTING_FINISH, EXISTING_FINISHES } from '../../lib/existing-finish';
 import { GARMENT_STEPS, type GarmentStep } from '../../lib/garment-steps';
 import { FITTING_RULES } from '../../lib/fitting-rule';
+import { LANGUAGES } from '../../lib/i18n/languages';
 import { organization, user } from './auth';
 import { customers } from './customers';
 import { presets } from './presets';
@@ -120,6 +121,8 @@ export const shopSettings = pgTable('shop_settings', {
   timeZone: text('time_zone'),
   /** a garment passing Chalk-marked with no fitting saved: 'warn' (a confirm on screen) or 'refuse' (the server says no) */
   fittingRule: text('fitting_rule', { enum: FITTING_RULES }).notNull().default('warn'),
+  /** the language of the shop's screens and cut sheets (src/lib/i18n); dates and money follow it */
+  language: text('language', { enum: LANGUAGES }).notNull().default('en'),
   updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull(),
 });
 

@@ -142,12 +142,14 @@ function taperWarnings(v: TaperValues, len: LenMaker, t: TaperVerdict): PlanWarn
       message: t.wider
         ? `The leg narrows below where the cuff top will sit (${from} above the finished edge): at worst ${t.by} narrower (flat) than there. Let out the inseam and outseam ${span}, up to ${t.side} on each side of each seam, so the cuff lies flat.`
         : `The leg widens below where the cuff top will sit (${from} above the finished edge): at worst ${t.by} wider (flat) than there. Take in the inseam and outseam ${span}, up to ${t.side} on each side of each seam, so the cuff lies flat.`,
+      values: { finish: 'cuff', way: t.wider ? 'out' : 'in', from, by: t.by, cut: t.cutText, side: t.side },
     });
   }
   if (t.feasible === false) {
     warnings.push({
       code: 'let-out-exceeds-seam-allowance',
       message: `Letting out needs ${t.most} on each side of each seam, but the seam allowance is only ${len(v.seamAllowance!).text}. Choose a shallower cuff or a plain hem.`,
+      values: { finish: 'cuff', most: t.most, seamAllowance: len(v.seamAllowance!).text },
     });
   }
   return warnings;

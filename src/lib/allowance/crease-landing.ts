@@ -21,9 +21,12 @@ export interface CreaseContext {
 // Shown wherever a crease will or may show: pressing out is not a promise (common practice, no source).
 const TELL = 'Tell the customer it may not press out.';
 
-function land(place: CreasePlace, height: Len, message: string): CreaseLanding {
-  return { place, heightAboveEdge: height, visible: place === 'leg-visible' || place === 'at-cuff-top' || place === 'cuff-face', message };
+function land(place: CreasePlace, height: Len, [message, values]: Said): CreaseLanding {
+  return { place, heightAboveEdge: height, visible: place === 'leg-visible' || place === 'at-cuff-top' || place === 'cuff-face', message, values };
 }
+
+// A verdict in English and its figures (the catalog's crease.<place> renders the same from them).
+type Said = [string, Record<string, string>];
 
 // The exact test runs only when the numbers say the crease is near the fold.
 function onFold(crease: Exact, c: number, at: Exact, atMm: number, ctx: CreaseContext): boolean {
@@ -32,17 +35,26 @@ function onFold(crease: Exact, c: number, at: Exact, atMm: number, ctx: CreaseCo
 
 // The verdicts' words, shared by the Exact and the integer landing so both say the same.
 const say = {
-  onFold: (fold: string) => `The old crease falls on the new ${fold}: the new fold takes it, so it will not show.`,
-  atCuffTop: (at: string, near: string) =>
+  onFold: (fold: string): Said => [
+    `The old crease falls on the new ${fold}: the new fold takes it, so it will not show.`,
+    { fold: fold === 'finished edge' ? 'edge' : fold === 'cuff top' ? 'top' : 'inner' },
+  ],
+  atCuffTop: (at: string, near: string): Said => [
     `The old hem crease lies on the leg ${at} above the finished edge, within ${near} of the cuff top: it may show at the cuff's edge. Press or steam it out before finishing. ${TELL}`,
-  legVisible: (at: string, aboveTop: string) =>
+    { at, near },
+  ],
+  legVisible: (at: string, aboveTop: string): Said => [
     `The old hem crease will show on the leg, ${at} above the finished edge, ${aboveTop} above the cuff top. Press or steam it out before finishing, or choose a cuff depth that covers it. ${TELL}`,
-  behindLeg: (at: string) => `The old crease lies on the leg behind the cuff, ${at} above the finished edge: the cuff hides it.`,
-  underFace: (h: string) => `The old crease lies under the cuff face, ${h} above the finished edge: hidden.`,
-  cuffFace: (h: string) =>
+    { at, aboveTop },
+  ],
+  behindLeg: (at: string): Said => [`The old crease lies on the leg behind the cuff, ${at} above the finished edge: the cuff hides it.`, { at, under: 'leg' }],
+  underFace: (h: string): Said => [`The old crease lies under the cuff face, ${h} above the finished edge: hidden.`, { at: h, under: 'face' }],
+  cuffFace: (h: string): Said => [
     `The old crease will show on the face of the cuff, ${h} above the finished edge. Press it out, or change the cuff depth so it falls on a fold. ${TELL}`,
-  inside: (h: string) => `The old crease ends up inside the leg, ${h} above the finished edge: hidden.`,
-  cutAway: (below: string) => `The old crease lies ${below} below the cutting line and is cut away.`,
+    { at: h },
+  ],
+  inside: (h: string): Said => [`The old crease ends up inside the leg, ${h} above the finished edge: hidden.`, { at: h }],
+  cutAway: (below: string): Said => [`The old crease lies ${below} below the cutting line and is cut away.`, { below }],
 };
 
 /** Follow an old crease (mm below the mark, negative above) through the cuff's folds. */

@@ -95,6 +95,7 @@ export function checkHemTaper(input: HemTaperInput): TaperPlan {
         change.sign() > 0
           ? `${v.widthAtCut ? `Measured at the cutting line (${len(v.widthAtCut).text} flat), the let-down leg is narrower than the leg above the edge` : 'The leg narrows towards the hem'}: turned up, the hem would be ${by} narrower (flat) than the leg it lies against. Let out the inseam and outseam below the finished edge, flaring out to ${by} more at the cutting line, ${at} below it (${side} on each side of each seam), so the hem lies flat.`
           : `${v.widthAtCut ? `Measured at the cutting line (${len(v.widthAtCut).text} flat), the let-down leg flares wider than the leg above the edge` : 'The leg widens towards the hem'}: turned up, the hem would be ${by} wider (flat) than the leg it lies against. Take in the inseam and outseam below the finished edge, to ${by} less at the cutting line, ${at} below it (${side} on each side of each seam), so the hem lies flat.`,
+      values: { finish: 'hem', way: change.sign() > 0 ? 'out' : 'in', by, at, side, ...(v.widthAtCut ? { measured: len(v.widthAtCut).text } : {}) },
     });
   }
   const most = perSide.sign() > 0 ? perSide : ZERO;
@@ -104,6 +105,7 @@ export function checkHemTaper(input: HemTaperInput): TaperPlan {
     warnings.push({
       code: 'let-out-exceeds-seam-allowance',
       message: `Letting out needs ${len(most).text} on each side of each seam, but the seam allowance is only ${len(v.seamAllowance!).text}. Choose a shallower hem or face it.`,
+      values: { finish: 'hem', most: len(most).text, seamAllowance: len(v.seamAllowance!).text },
     });
   }
   return { kind: 'taper', finish: 'hem', unit: r.unit, precision: r.precision, targetWidth: len(target), lines, withinTolerance, feasible, warnings };

@@ -67,6 +67,7 @@ function cuffWarnings(c: CuffChecks, shown: Shown): PlanWarning[] {
     warnings.push({
       code: 'third-section-too-small',
       message: `The third section (${shown.section.text}) is no deeper than the turn-under (${shown.turnUnder.text}): nothing is left to hold the cuff inside. Make the third section deeper or the turn-under narrower.`,
+      values: { section: shown.section.text, turnUnder: shown.turnUnder.text },
     });
   }
   // The turned-under edge's stitching sits (third section − turn-under) above the bottom: over the cuff top it shows.
@@ -74,18 +75,21 @@ function cuffWarnings(c: CuffChecks, shown: Shown): PlanWarning[] {
     warnings.push({
       code: 'stitching-above-cuff',
       message: `The third section (${shown.section.text}) less the turn-under (${shown.turnUnder.text}) is deeper than the ${shown.depth.text} cuff: the stitching would show above the cuff. Make the third section shorter.`,
+      values: { section: shown.section.text, turnUnder: shown.turnUnder.text, depth: shown.depth.text },
     });
   }
   if (c.unusual !== null) {
     warnings.push({
       code: 'cuff-depth-unusual',
       message: `A ${shown.depth.text} cuff is outside the usual ${c.unusual[0]} to ${c.unusual[1]}. Check the depth with the customer.`,
+      values: { depth: shown.depth.text, min: c.unusual[0], max: c.unusual[1] },
     });
   }
   if (c.slope !== null) {
     warnings.push({
       code: 'slope-on-cuff',
       message: `Cuffs are made level, so the ${c.slope} slope was left out: this plan is level all round.`,
+      values: { slope: c.slope },
     });
   }
   return warnings;
@@ -217,7 +221,7 @@ export function quickCuff(v: CuffValues): CuffPlan | null {
       ratio,
     });
     plan.creaseLands = landing;
-    if (landing.visible) warnings.push({ code: 'old-crease-visible', message: landing.message });
+    if (landing.visible) warnings.push({ code: 'old-crease-visible', message: landing.message, values: { place: landing.place, ...landing.values } });
   }
   return plan;
 }
@@ -243,8 +247,22 @@ function cuffPlan(v: CuffValues, shown: Shown, lines: CuffLine[], required: Len,
 
 // A short plan's not-enough-cloth warning, first among the warnings.
 function notEnough(plan: CuffPlan): void {
-  const message = shortMessage(plan.required, plan.lines[0]!.aboveRawEdge!, plan.shortBy!, plan.cuffDepth, plan.alternatives!);
-  plan.warnings.unshift({ code: 'not-enough-cloth', message });
+  const alt = plan.alternatives!;
+  const message = shortMessage(plan.required, plan.lines[0]!.aboveRawEdge!, plan.shortBy!, plan.cuffDepth, alt);
+  const values: Record<string, string> = {
+    finish: 'cuff',
+    required: plan.required.text,
+    available: plan.lines[0]!.aboveRawEdge!.text,
+    shortBy: plan.shortBy!.text,
+    depth: plan.cuffDepth.text,
+    plain: alt.plainHem.required.text,
+  };
+  // Only what fits is named, in the message's order.
+  if (alt.shorterSection !== null) values.shorter = alt.shorterSection.text;
+  if (alt.deepestCuff !== null) values.deepest = alt.deepestCuff.text;
+  if (alt.facedCuff.fits) values.faced = alt.facedCuff.required.text;
+  if (alt.plainHem.fits) values.plainFits = 'yes';
+  plan.warnings.unshift({ code: 'not-enough-cloth', message, values });
 }
 
 /** planCuff on Exact values: any input, however big or finely divided. */
@@ -306,7 +324,7 @@ export function exactCuff(v: CuffValues): CuffPlan {
       len,
     });
     plan.creaseLands = landing;
-    if (landing.visible) warnings.push({ code: 'old-crease-visible', message: landing.message });
+    if (landing.visible) warnings.push({ code: 'old-crease-visible', message: landing.message, values: { place: landing.place, ...landing.values } });
   }
   return plan;
 }

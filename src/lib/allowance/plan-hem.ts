@@ -63,6 +63,13 @@ export function planHem(input: HemInput): HemPlan {
       warnings.push({
         code: 'not-enough-cloth',
         message: `Not enough cloth for a ${len(v.hemAllowance).text} hem: there is ${len(A).text} below the mark, short by ${shortBy.text}. ${fits}`,
+        values: {
+          finish: 'hem',
+          allowance: len(v.hemAllowance).text,
+          available: len(A).text,
+          shortBy: shortBy.text,
+          ...(most.isZero() ? {} : { most: len(most).text }),
+        },
       });
     }
   }
@@ -71,12 +78,14 @@ export function planHem(input: HemInput): HemPlan {
     warnings.push({
       code: 'hem-allowance-unusual',
       message: `A ${len(v.hemAllowance).text} hem allowance is outside the usual ${len(usual.min).text} to ${len(usual.max).text}. Check it suits the cloth.`,
+      values: { allowance: len(v.hemAllowance).text, min: len(usual.min).text, max: len(usual.max).text },
     });
   }
   if (v.turnUnder.compare(v.hemAllowance) >= 0) {
     warnings.push({
       code: 'turn-under-too-large',
       message: `The turn-under (${len(v.turnUnder).text}) is as deep as the whole hem allowance (${len(v.hemAllowance).text}): nothing is left for the hem. Make the turn-under narrower.`,
+      values: { turnUnder: len(v.turnUnder).text, allowance: len(v.hemAllowance).text },
     });
   }
   return {

@@ -21,7 +21,10 @@ export interface Len {
 /** A warning in words a tailor understands. */
 export interface PlanWarning {
   code: WarningCode;
+  /** the English sentence (the API's); screens and sheets render `code` and `values` through the catalog (src/lib/i18n) */
   message: string;
+  /** the message's figures as shown ("1 1/2 in") and its variant, for rendering it in any language */
+  values: Record<string, string>;
 }
 
 /** Every warning the engine can raise. */
@@ -84,6 +87,8 @@ export interface CreaseLanding {
   /** true when it will or may show on the outside of the finished trouser */
   visible: boolean;
   message: string;
+  /** the message's figures as shown and the fold it falls on, for rendering it in any language */
+  values: Record<string, string>;
 }
 
 /** What can still be done when the cloth is short, in the order to offer them. */

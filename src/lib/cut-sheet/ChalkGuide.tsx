@@ -2,7 +2,10 @@
 import { Path, Rect, Svg, Text, View } from '@react-pdf/renderer';
 import type { Unit } from '@/lib/allowance/types';
 import { checkRuler, type GuideSegment, type GuideStrip, type MatchMark } from './chalk-guide';
+import { translator, type Translate } from '../i18n/catalog';
 import { INK, READ_MIN, s } from './styles';
+
+const EN = translator('en');
 
 // Room left and right of the ruler's 0 and last tick for their numbers.
 const RULER_SIDE = 4;
@@ -48,11 +51,11 @@ export function stripColumns(strips: GuideStrip[]): StripColumn[] {
   return all.sort((a, b) => a.part - b.part || a.k - b.k).map(({ k: _k, ...c }) => c);
 }
 
-function matchText(m: MatchMark) {
-  return `match \u25B2 ${m.letter}`;
+function matchText(m: MatchMark, t: Translate) {
+  return t('sheet.guide.match', { letter: m.letter });
 }
 
-function Strip({ column, width }: { column: StripColumn; width: number }) {
+function Strip({ column, width, t }: { column: StripColumn; width: number; t: Translate }) {
   const seg = column.segment;
   const rulerPath = seg.ruler.map((m) => `M0 ${m.y.toFixed(3)}h${m.len}`).join('');
   // Every tick of a colour in one filled path: fewer nodes to lay out and draw than a Rect each.
@@ -72,7 +75,7 @@ function Strip({ column, width }: { column: StripColumn; width: number }) {
     <View style={{ width }}>
       <Text style={{ fontSize: READ_MIN, fontWeight: 800, marginBottom: 1 }}>{first ? column.label : `${column.label.split(',')[0]}, ${column.part}`}</Text>
       <Text style={{ fontSize: READ_MIN, color: INK.soft, marginBottom: 1 }}>
-        {first ? '\u25BC top on the pin mark' : `\u25B2 ${seg.matchAbove!.letter} on \u25B2 ${seg.matchAbove!.letter}`}
+        {first ? t('sheet.guide.top') : t('sheet.guide.onMatch', { letter: seg.matchAbove!.letter })}
       </Text>
       <View style={{ width, height: seg.length, position: 'relative' }}>
         <Svg width={width} height={seg.length}>
@@ -84,7 +87,7 @@ function Strip({ column, width }: { column: StripColumn; width: number }) {
         </Svg>
         {matches.map((m, i) => (
           <Text key={`m${i}`} style={{ position: 'absolute', left: textLeft, top: m.y - 13, fontSize: size, fontWeight: 700 }}>
-            {matchText(m)}
+            {matchText(m, t)}
           </Text>
         ))}
         {seg.ticks.map((t, i) => (
@@ -99,12 +102,12 @@ function Strip({ column, width }: { column: StripColumn; width: number }) {
 }
 
 /** Columns side by side: two fit the guide column, more a page of their own. */
-export function StripRow({ columns, width, gap }: { columns: StripColumn[]; width: number; gap?: number }) {
+export function StripRow({ columns, width, gap, t = EN }: { columns: StripColumn[]; width: number; gap?: number; t?: Translate }) {
   return (
     <View style={{ flexDirection: 'row', justifyContent: gap === undefined ? 'space-between' : 'flex-start', marginTop: 8 }}>
       {columns.map((c, i) => (
         <View key={i} style={{ marginLeft: i > 0 && gap !== undefined ? gap : 0 }}>
-          <Strip column={c} width={width} />
+          <Strip column={c} width={width} t={t} />
         </View>
       ))}
     </View>
@@ -115,18 +118,18 @@ export function StripRow({ columns, width, gap }: { columns: StripColumn[]; widt
 export const COLUMN_STRIPS = 2;
 
 /** The right-hand column: the ruler to check the printer, then the strip(s), as many as it holds. */
-export function ChalkGuide({ columns, notes, unit }: { columns: StripColumn[]; notes: string[]; unit: Unit }) {
+export function ChalkGuide({ columns, notes, unit, t = EN }: { columns: StripColumn[]; notes: string[]; unit: Unit; t?: Translate }) {
   const width = columns.length > 1 ? 72 : 108;
   return (
     <>
-      <Text style={s.h2}>CHALK GUIDE 1:1</Text>
+      <Text style={s.h2}>{t('sheet.guide.heading')}</Text>
       <CheckRulerStrip unit={unit} />
       {notes.map((n, i) => (
         <Text key={i} style={{ fontSize: READ_MIN, marginTop: 2, fontWeight: i < 2 ? 700 : 400 }}>
           {n}
         </Text>
       ))}
-      <StripRow columns={columns.slice(0, COLUMN_STRIPS)} width={width} />
+      <StripRow columns={columns.slice(0, COLUMN_STRIPS)} width={width} t={t} />
     </>
   );
 }

@@ -11,7 +11,8 @@ import { textWidth } from './measure';
 import { qrPath } from './qr';
 import { SkippedNote } from './SkippedNote';
 import { FAMILY } from './fonts';
-import { SAFETY_HEADING } from '../bench-safety';
+import { translator, type Translate } from '../i18n/catalog';
+import { intlLocale } from '../i18n/languages';
 import { GUIDE_COLUMN, INK, READ_MIN, s } from './styles';
 import type { Len, Unit } from '@/lib/allowance/types';
 import type { CutSheetData, PageSize } from './types';
@@ -35,7 +36,8 @@ function Header({ c, link }: { c: SheetContent; link?: string }) {
     <View style={s.header}>
       <View style={{ flexGrow: 1, flexShrink: 1, flexBasis: 0 }}>
         <Text style={s.kicker}>
-          CUT SHEET<Text style={{ fontWeight: 400, letterSpacing: 0 }}>{`      ${c.unitNote} Distances are measured down from the pin mark.`}</Text>
+          {c.t('sheet.kicker')}
+          <Text style={{ fontWeight: 400, letterSpacing: 0 }}>{`      ${c.t('sheet.kickerNote', { unitNote: c.unitNote })}`}</Text>
         </Text>
         <Text style={s.title}>{c.title}</Text>
         {c.meta.length > 0 && <Text style={s.meta}>{c.meta.join('   ·   ')}</Text>}
@@ -45,11 +47,11 @@ function Header({ c, link }: { c: SheetContent; link?: string }) {
           <Svg width={52} height={52} viewBox={`-2 -2 ${qr.size + 4} ${qr.size + 4}`}>
             <Path d={qr.d} fill={INK.text} />
           </Svg>
-          <Text style={{ fontSize: READ_MIN, color: INK.soft }}>Garment page</Text>
+          <Text style={{ fontSize: READ_MIN, color: INK.soft }}>{c.t('sheet.garmentPage')}</Text>
         </View>
       ) : (
         <View style={{ width: 170, marginLeft: 12, paddingTop: 18 }}>
-          <Text style={{ fontSize: READ_MIN, color: INK.soft }}>Customer / ticket</Text>
+          <Text style={{ fontSize: READ_MIN, color: INK.soft }}>{c.t('sheet.customerTicket')}</Text>
           <View style={{ borderBottomWidth: 0.75, borderBottomColor: INK.text, height: 18 }} />
         </View>
       )}
@@ -63,14 +65,14 @@ const VALUE_SIZE = 14;
 const NAME_SIZE = 10;
 
 /** Column widths for a leg's lines table, from the widest text each column holds. */
-function tableColumns(g: SheetLegGroup) {
+function tableColumns(g: SheetLegGroup, t: Translate) {
   const rows = g.lines.filter((l) => !l.cut);
   const widest = (texts: string[], weight: 400 | 700 | 800, size: number) => Math.max(0, ...texts.map((t) => textWidth(t, weight, size)));
   // Headings wrap a word to a line at most, so their longest word sets their least width.
-  const heading = widest(['BELOW', 'ABOVE', 'MARK', 'EDGE'], 700, Number(s.th.fontSize));
+  const heading = widest([...t('sheet.col.below').split(' '), ...t('sheet.col.above').split(' ')], 700, Number(s.th.fontSize));
   const name = Math.max(
     ...rows.map((l) => textWidth(`${l.n} `, 800, NAME_SIZE) + textWidth(l.name, 400, NAME_SIZE)),
-    widest(['CHALK LINE'], 700, Number(s.th.fontSize)),
+    widest([t('sheet.col.line')], 700, Number(s.th.fontSize)),
   );
   const below =
     Math.max(
@@ -96,12 +98,12 @@ function tableColumns(g: SheetLegGroup) {
 type Columns = ReturnType<typeof tableColumns>;
 
 // Headings on one line when the drawing can give up the width: a line less in every leg block.
-function oneLineHeadings(cols: Columns): Columns {
+function oneLineHeadings(cols: Columns, t: Translate): Columns {
   const th = Number(s.th.fontSize);
   return {
     ...cols,
-    below: Math.max(cols.below, Math.ceil(textWidth('BELOW PIN MARK', 700, th)) + COLUMN_GAP + 1),
-    above: Math.max(cols.above, Math.ceil(textWidth('ABOVE RAW EDGE', 700, th)) + COLUMN_GAP + 1),
+    below: Math.max(cols.below, Math.ceil(textWidth(t('sheet.col.below'), 700, th)) + COLUMN_GAP + 1),
+    above: Math.max(cols.above, Math.ceil(textWidth(t('sheet.col.above'), 700, th)) + COLUMN_GAP + 1),
   };
 }
 
@@ -125,20 +127,20 @@ function LineRow({ n, name, below, above, cols, stacked }: { n: number; name: st
 }
 
 // A cutting line below the raw edge cannot be cut: say so in words, not with a minus sign.
-function rawEdge(len: Len | null): { value: string; caption: string } {
-  if (!len) return { value: '—', caption: 'raw edge not measured' };
-  if (len.mm < 0) return { value: len.text.replace(/^-/, ''), caption: 'PAST the raw edge: short' };
-  return { value: len.text, caption: 'above the raw edge' };
+function rawEdge(len: Len | null, t: Translate): { value: string; caption: string } {
+  if (!len) return { value: '—', caption: t('sheet.raw.none') };
+  if (len.mm < 0) return { value: len.text.replace(/^-/, ''), caption: t('sheet.raw.past') };
+  return { value: len.text, caption: t('sheet.raw.above') };
 }
 
-function LinesTable({ g, cols, stacked }: { g: SheetLegGroup; cols: Columns; stacked: boolean }) {
+function LinesTable({ g, cols, stacked, t }: { g: SheetLegGroup; cols: Columns; stacked: boolean; t: Translate }) {
   const head = (text: string, width: number) => <Text style={[s.th, { width, paddingLeft: COLUMN_GAP, textAlign: 'right', flexShrink: 0 }]}>{text}</Text>;
   return (
     <>
       <View style={{ flexDirection: 'row', alignItems: 'flex-end', borderBottomWidth: 0.75, borderBottomColor: INK.text, paddingBottom: 1 }}>
-        <Text style={[s.th, { flexGrow: 1, flexShrink: 1 }]}>CHALK LINE</Text>
-        {head('BELOW PIN MARK', cols.below)}
-        {head('ABOVE RAW EDGE', cols.above)}
+        <Text style={[s.th, { flexGrow: 1, flexShrink: 1 }]}>{t('sheet.col.line')}</Text>
+        {head(t('sheet.col.below'), cols.below)}
+        {head(t('sheet.col.above'), cols.above)}
       </View>
       {g.lines
         .filter((l) => !l.cut)
@@ -149,23 +151,29 @@ function LinesTable({ g, cols, stacked }: { g: SheetLegGroup; cols: Columns; sta
   );
 }
 
+// The cut badge's width: its letters (800 weight), a point of spacing after each, 4 pt padding each side.
+function badgeWidth(text: string): number {
+  return Math.ceil(textWidth(text, 800, Number(s.badge.fontSize)) + [...text].length * Number(s.badge.letterSpacing) + 2 * Number(s.badge.paddingHorizontal));
+}
+
 // The one line that cannot be undone: biggest type, boxed, in cut red and labelled for greyscale.
-function CutLine({ g }: { g: SheetLegGroup }) {
+function CutLine({ g, t }: { g: SheetLegGroup; t: Translate }) {
   const cut = g.lines.find((l) => l.cut);
   if (!cut) return null;
-  const raw = rawEdge(cut.aboveRawEdge);
+  const raw = rawEdge(cut.aboveRawEdge, t);
   const caption = [s.cutCaption, { marginLeft: 6, marginBottom: 3, flexShrink: 1 }];
   const value = [s.cutValue, { flexShrink: 0 }];
   return (
     <View style={{ borderWidth: 2, borderColor: INK.cut, marginTop: 4, paddingHorizontal: 6, paddingVertical: 2, flexDirection: 'row' }}>
-      <View style={{ marginRight: 6, marginTop: 6 }}>
-        <Text style={s.badge}>CUT</Text>
-        <Text style={[s.th, { marginTop: 1 }]}>{`LINE ${cut.n}`}</Text>
+      {/* As wide as the badge's letters with their spacing and padding (the layout leaves the spacing out). */}
+      <View style={{ marginRight: 6, marginTop: 6, minWidth: badgeWidth(t('sheet.cutBadge')) }}>
+        <Text style={s.badge}>{t('sheet.cutBadge')}</Text>
+        <Text style={[s.th, { marginTop: 1 }]}>{t('sheet.lineN', { n: cut.n })}</Text>
       </View>
       <View style={{ flexShrink: 1 }}>
         <View style={{ flexDirection: 'row', alignItems: 'flex-end', flexWrap: 'wrap' }}>
           <Text style={value}>{cut.belowMark.text}</Text>
-          <Text style={caption}>below the pin mark</Text>
+          <Text style={caption}>{t('sheet.belowPinMark')}</Text>
         </View>
         <View style={{ flexDirection: 'row', alignItems: 'flex-end', flexWrap: 'wrap' }}>
           <Text style={value}>{raw.value}</Text>
@@ -179,14 +187,14 @@ function CutLine({ g }: { g: SheetLegGroup }) {
 // The drawing gives up width to a table of wide figures, down to this; past it names go above their figures.
 const DRAWING_MIN_W = 96;
 
-function LegBlock({ g, width }: { g: SheetLegGroup; width: number }) {
-  const least = tableColumns(g);
-  const usual = oneLineHeadings(least);
+function LegBlock({ g, width, t }: { g: SheetLegGroup; width: number; t: Translate }) {
+  const least = tableColumns(g, t);
+  const usual = oneLineHeadings(least, t);
   const cols = usual.name + usual.below + usual.above <= width - 8 - DRAWING_MIN_W ? usual : least;
   const tableNeeds = cols.name + cols.below + cols.above;
   const drawingW = Math.max(DRAWING_MIN_W, Math.min(DRAWING_W, width - 8 - tableNeeds));
   const stacked = tableNeeds > width - 8 - drawingW;
-  const geo = legGeometry(g.leg, drawingW, DRAWING_H);
+  const geo = legGeometry(g.leg, drawingW, DRAWING_H, t);
   return (
     <View style={{ marginBottom: 4 }} wrap={false}>
       <View style={{ flexDirection: 'row', alignItems: 'baseline', marginBottom: 2 }}>
@@ -196,15 +204,15 @@ function LegBlock({ g, width }: { g: SheetLegGroup; width: number }) {
       </View>
       <View style={{ flexDirection: 'row', alignItems: 'flex-start' }}>
         <View style={{ width: width - drawingW - 8, marginRight: 8 }}>
-          <LinesTable g={g} cols={cols} stacked={stacked} />
-          <CutLine g={g} />
+          <LinesTable g={g} cols={cols} stacked={stacked} t={t} />
+          <CutLine g={g} t={t} />
         </View>
         <LegDrawing g={geo} />
       </View>
       <Text style={[s.small, { marginTop: 4, fontWeight: g.cloth.ok === false ? 800 : 700, color: g.cloth.ok === false ? INK.cut : INK.text }]}>
         {g.cloth.text}
       </Text>
-      {g.cloth.options.length > 0 && <Text style={[s.small, { marginLeft: 10 }]}>{`Instead: ${g.cloth.options.join(' ')}`}</Text>}
+      {g.cloth.options.length > 0 && <Text style={[s.small, { marginLeft: 10 }]}>{t('sheet.instead', { options: g.cloth.options.join(' ') })}</Text>}
       {g.slopeNote && <Text style={[s.small, { marginTop: 2 }]}>{g.slopeNote}</Text>}
       {g.taper && <Text style={[s.small, s.strong, { marginTop: 2 }]}>{g.taper.summary}</Text>}
       {g.taper?.work && <Text style={[s.small, { marginTop: 1 }]}>{g.taper.work}</Text>}
@@ -212,7 +220,7 @@ function LegBlock({ g, width }: { g: SheetLegGroup; width: number }) {
       {g.recorded && <Text style={[s.small, { marginTop: 2 }]}>{g.recorded}</Text>}
       {g.warnings.map((w, i) => (
         <Text key={i} style={[s.small, { marginTop: 2, color: INK.warn, fontWeight: 700 }]}>
-          {`Check: ${w}`}
+          {t('sheet.check', { text: w })}
         </Text>
       ))}
     </View>
@@ -222,7 +230,7 @@ function LegBlock({ g, width }: { g: SheetLegGroup; width: number }) {
 function Steps({ c }: { c: SheetContent }) {
   return (
     <View wrap={false}>
-      <Text style={s.h2}>AT THE BENCH, IN THIS ORDER</Text>
+      <Text style={s.h2}>{c.t('sheet.atBench')}</Text>
       {c.steps.map((block, b) => (
         <Fragment key={b}>
           {block.heading && <Text style={[s.small, s.strong, { marginTop: 2 }]}>{block.heading}</Text>}
@@ -234,7 +242,7 @@ function Steps({ c }: { c: SheetContent }) {
           ))}
         </Fragment>
       ))}
-      <Text style={s.h2}>{SAFETY_HEADING.toUpperCase()}</Text>
+      <Text style={s.h2}>{c.t('safety.heading').toLocaleUpperCase(intlLocale(c.language))}</Text>
       {c.cautions.map((t, i) => (
         <Text key={i} style={{ fontSize: READ_MIN, marginBottom: 1 }}>
           {`•  ${t}`}
@@ -274,12 +282,12 @@ function stripColumnsOf(c: SheetContent, data: CutSheetData) {
 function StripPage({ c, columns, size, style, unit }: { c: SheetContent; columns: StripColumn[]; size: PageSize; style: PageProps['style']; unit: Unit }) {
   return (
     <Page size={size} style={[style, { height: PAGE_PT[size].height, minHeight: PAGE_PT[size].height }].flat() as PageProps['style']} wrap={false}>
-      <Text style={s.kicker}>{`CUT SHEET, CHALK GUIDE CONTINUED      ${c.unitNote}`}</Text>
+      <Text style={s.kicker}>{`${c.t('sheet.continued')}      ${c.unitNote}`}</Text>
       <Text style={[s.meta, { marginBottom: 4 }]}>{[c.title, ...c.meta.slice(0, 2)].join('   ·   ')}</Text>
       <View style={{ width: GUIDE_COLUMN }}>
-        <ChalkGuide columns={[]} notes={c.guideNote.slice(0, 2)} unit={unit} />
+        <ChalkGuide columns={[]} notes={c.guideNote.slice(0, 2)} unit={unit} t={c.t} />
       </View>
-      <StripRow columns={columns} width={108} gap={16} />
+      <StripRow columns={columns} width={108} gap={16} t={c.t} />
     </Page>
   );
 }
@@ -311,18 +319,25 @@ export function CutSheetPage({ data, wrap, family = FAMILY }: { data: CutSheetDa
         <View style={s.body}>
           <View style={[s.main, { width: mainWidth }]}>
             {c.groups.map((g, i) => (
-              <LegBlock key={i} g={g} width={mainWidth - MAIN_GUTTER} />
+              <LegBlock key={i} g={g} width={mainWidth - MAIN_GUTTER} t={c.t} />
             ))}
             <Steps c={c} />
           </View>
           <View style={[s.side, { width: GUIDE_COLUMN }]}>
-            <ChalkGuide columns={strips.column} notes={c.guideNote} unit={data.unit} />
+            <ChalkGuide columns={strips.column} notes={c.guideNote} unit={data.unit} t={c.t} />
           </View>
         </View>
       </Page>
       {strips.page.length > 0 && <StripPage c={c} columns={strips.page} size={size} style={style} unit={data.unit} />}
     </>
   );
+}
+
+// The PDF's title in the first sheet's language.
+function documentTitle(sheets: CutSheetData[]): string {
+  const first = sheets[0];
+  const t = translator(first?.language ?? 'en');
+  return first && sheets.length === 1 ? t('sheet.titleOf', { ticket: first.ticket ?? t('sheet.unsaved') }) : t('sheet.titles');
 }
 
 /** A document of cut sheets, one page each; wrap (for all, or per sheet) lets an overfull sheet spill onto a second page; skipped garments get a last page; family from typeset(). */
@@ -334,11 +349,11 @@ export function cutSheetDocument(
 ): ReactElement<DocumentProps> {
   const first = sheets[0];
   return (
-    <Document title={first && sheets.length === 1 ? `Cut sheet ${first.ticket ?? 'unsaved'}` : 'Cut sheets'} creator="Cuffwright" producer="Cuffwright">
+    <Document title={documentTitle(sheets)} creator="Cuffwright" producer="Cuffwright">
       {sheets.map((d, i) => (
         <CutSheetPage key={i} data={d} wrap={Array.isArray(wrap) ? (wrap[i] ?? true) : wrap} family={family} />
       ))}
-      {skipped.length > 0 && <SkippedNote skipped={skipped} size={first?.pageSize ?? 'LETTER'} family={family} />}
+      {skipped.length > 0 && <SkippedNote skipped={skipped} size={first?.pageSize ?? 'LETTER'} family={family} t={translator(first?.language ?? 'en')} />}
     </Document>
   );
 }

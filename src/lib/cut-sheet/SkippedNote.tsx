@@ -3,18 +3,17 @@
 import { Page, Text, View } from '@react-pdf/renderer';
 import { FAMILY } from './fonts';
 import { INK, s } from './styles';
+import type { Translate } from '../i18n/catalog';
 import type { PageSize } from './types';
 
 /** A page listing the garments left out of a batch, each with its reason. */
-export function SkippedNote({ skipped, size, family = FAMILY }: { skipped: string[]; size: PageSize; family?: string | string[] }) {
+export function SkippedNote({ skipped, size, family = FAMILY, t }: { skipped: string[]; size: PageSize; family?: string | string[]; t: Translate }) {
   return (
     <Page size={size} style={family === FAMILY ? s.page : [s.page, { fontFamily: family }]}>
       <View style={s.header}>
-        <Text style={s.title}>Not in this batch</Text>
+        <Text style={s.title}>{t('sheet.skipped')}</Text>
       </View>
-      <Text style={[s.small, { marginBottom: 6, color: INK.soft }]}>
-        These garments of the queue have no sheet above; finish their fitting and print them from the garment page.
-      </Text>
+      <Text style={[s.small, { marginBottom: 6, color: INK.soft }]}>{t('sheet.skippedNote')}</Text>
       {skipped.map((line, i) => (
         <Text key={i} style={{ fontSize: 11, marginBottom: 3 }}>
           {`•  ${line}`}

@@ -6,7 +6,10 @@ import type { Len, Unit } from '@/lib/allowance/types';
 export interface GuideGroup {
   label: string;
   slopeNote: string | null;
-  lines: { n: number; name: string; cut: boolean; belowMark: Len }[];
+  /** the strip's heading in the sheet's language (else worked out from the English label) */
+  stripLabel?: string;
+  /** short: the line's name on the strip in the sheet's language (else from the English name) */
+  lines: { n: number; name: string; short?: string; cut: boolean; belowMark: Len }[];
 }
 
 const PT_PER_MM = 72 / 25.4;
@@ -128,7 +131,7 @@ export function guideStrips(groups: GuideGroup[], unit: Unit, maxLength: number)
     const ticks = g.lines.map((l) => ({
       y: l.belowMark.mm * PT_PER_MM,
       n: l.n,
-      name: SHORT[l.name] ?? l.name,
+      name: l.short ?? SHORT[l.name] ?? l.name,
       text: l.belowMark.text,
       cut: l.cut,
     }));
@@ -156,7 +159,7 @@ export function guideStrips(groups: GuideGroup[], unit: Unit, maxLength: number)
     }
     return {
       // A sloped hem's lines are planned at the back, where the pin is.
-      label: (g.label === 'Both legs' ? g.label : g.label.replace(' leg', '')) + (g.slopeNote ? ', at the back' : ''),
+      label: g.stripLabel ?? (g.label === 'Both legs' ? g.label : g.label.replace(' leg', '')) + (g.slopeNote ? ', at the back' : ''),
       segments,
     };
   });

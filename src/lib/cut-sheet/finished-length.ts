@@ -3,6 +3,7 @@
 import { readLengthTerms } from '../allowance/length-terms';
 import { readLength, typedWithUnit } from '../length-reading';
 import type { Precision, Unit } from '../allowance/types';
+import type { Translate } from '../i18n/catalog';
 import type { LegSheet } from './types';
 
 function namesOtherUnit(typed: string, unit: Unit): boolean {
@@ -26,12 +27,13 @@ export function finishedText(typed: string, unit: Unit, precision: Precision): s
 }
 
 /** The sheet's finished-length line: one figure for both legs, or each leg's; null when none was pinned. */
-export function finishedLine(legs: LegSheet[]): string | null {
+export function finishedLine(legs: LegSheet[], t: Translate): string | null {
   const pinned = legs.filter((l) => l.finished);
   if (pinned.length === 0) return null;
   const texts = pinned.map((l) => finishedText(l.finished!, l.plan.unit, l.plan.precision));
-  if (legs.length === 1 || (pinned.length === legs.length && new Set(texts).size === 1)) return `Finished length (back pin) ${texts[0]}`;
-  return `Finished length (back pin): ${pinned.map((l, i) => `${l.side} ${texts[i]}`).join(', ')}`;
+  if (legs.length === 1 || (pinned.length === legs.length && new Set(texts).size === 1)) return t('sheet.finished.one', { length: texts[0]! });
+  const side = (l: LegSheet) => (l.side === 'left' ? t('sheet.legs.leftShort') : t('sheet.legs.rightShort'));
+  return t('sheet.finished.each', { list: pinned.map((l, i) => `${side(l)} ${texts[i]}`).join(t('sheet.list')) });
 }
 
 /**

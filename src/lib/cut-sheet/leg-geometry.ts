@@ -1,5 +1,8 @@
 // The leg-bottom drawing worked out in points, to a true scale, for the PDF and any other renderer.
 import type { LegSheet } from './types';
+import { translator, type Translate } from '../i18n/catalog';
+
+const EN = translator('en');
 
 const PT_PER_MM = 72 / 25.4;
 // A trouser leg about 8 1/2 in across, flat, when the shop has not measured it (common practice, no source).
@@ -35,7 +38,7 @@ export interface LegGeometry {
 }
 
 /** Lays out the leg-bottom drawing to the largest scale that fits a box of width × maxHeight points. */
-export function legGeometry(leg: LegSheet, width: number, maxHeight: number): LegGeometry {
+export function legGeometry(leg: LegSheet, width: number, maxHeight: number, t: Translate = EN): LegGeometry {
   const plan = leg.plan;
   const cut = plan.lines[plan.lines.length - 1]!;
   const raw = plan.lines[0]?.aboveRawEdge?.mm ?? null;
@@ -87,7 +90,7 @@ export function legGeometry(leg: LegSheet, width: number, maxHeight: number): Le
       : [];
   const lines = plan.lines.map((l) => ({
     y: Y(l.belowMark.mm),
-    label: l.name === 'cut' ? `${l.n} CUT` : String(l.n),
+    label: l.name === 'cut' ? t('sheet.drawing.cut', { n: l.n }) : String(l.n),
     cut: l.name === 'cut',
   }));
   const seams =
@@ -98,6 +101,6 @@ export function legGeometry(leg: LegSheet, width: number, maxHeight: number): Le
         })
       : [];
   const height = Y(below) + FOOT_ROOM;
-  const caption = `Scale 1:${scale}${taper ? '' : ', width not measured'}${raw === null ? ', raw edge not measured' : ''}`;
+  const caption = t('sheet.drawing.caption', { scale: String(scale), width: taper ? 'yes' : 'no', raw: raw === null ? 'no' : 'yes' });
   return { width, height, scale, outline, lines, cutAway, seams, rawEdgeKnown: raw !== null, widthMeasured: !!taper, caption };
 }

@@ -1,5 +1,6 @@
 // What POST /api/plan/sheet accepts: the calculator's own plan request (a cuff or a plain hem),
 // plus the paper size, an optional taper check, and the right leg when it differs.
+import { LANGUAGES } from '../i18n/languages';
 import { z } from 'zod';
 import { cuffRequest, hemRequest, taperRequest } from '@/lib/plan-request';
 import type { LegOrder } from './build';
@@ -20,7 +21,8 @@ const leg = z.discriminatedUnion('kind', [cuffRequest.extend({ taper: taperWidth
 /** The paper: US Letter or A4. */
 export const pageSizeSchema = z.enum(['LETTER', 'A4'], { error: 'Choose Letter or A4 paper.' });
 
-const extra = { pageSize: pageSizeSchema.default('LETTER'), right: leg.optional() };
+// The calculator's language (its switch or the browser's), for the sheet's words; English when left out.
+const extra = { pageSize: pageSizeSchema.default('LETTER'), right: leg.optional(), language: z.enum(LANGUAGES, { error: 'Choose en or fr.' }).optional() };
 
 /** The body of POST /api/plan/sheet. */
 export const sheetRequest = z
@@ -48,7 +50,7 @@ function orderOf(side: 'left' | 'right', r: LegRequest): LegOrder {
 
 /** The legs a request asks for: the body is the left leg (or both), `right` the other one. */
 export function legOrders(req: SheetRequest): { pageSize: PageSize; legs: LegOrder[] } {
-  const { pageSize, right, ...left } = req;
+  const { pageSize, right, language: _language, ...left } = req;
   const legs = [orderOf('left', left)];
   if (right) legs.push(orderOf('right', right));
   return { pageSize, legs };

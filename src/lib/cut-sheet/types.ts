@@ -1,5 +1,6 @@
 // What a cut sheet is made from: plain data, no database. A saved garment and the public
 // calculator both build one of these and hand it to renderCutSheet.
+import type { Language } from '../i18n/languages';
 import type { CreaseLanding, CuffInput, CuffPlan, HemInput, HemPlan, HemTaperInput, Precision, TaperInput, TaperPlan, Unit } from '@/lib/allowance/types';
 import type { ExistingFinish } from '@/lib/existing-finish';
 
@@ -69,6 +70,8 @@ export interface CutSheetData {
   link?: string;
   /** default LETTER */
   pageSize?: PageSize;
+  /** the language of the sheet's words (the shop's, or the calculator visitor's); default English */
+  language?: Language;
   /** how the bottoms came in, from the garment's intake; absent on a calculator plan, which has no garment */
   existingFinish?: ExistingFinish;
 }

@@ -1,6 +1,7 @@
 // The shop's days in its own time zone: which calendar day a moment falls on, where each day begins
 // (23 or 25 hours long on a clock-change day), and the overview's periods. Pure: Intl only, so the
 // server, the tests and the SQL's day boundaries (passed in as instants) all read one definition.
+import { DEFAULT_LOCALE } from '../i18n/languages';
 
 /** The time zone of a shop that has not chosen one: the app's dates are written the British way. */
 export const DEFAULT_TIME_ZONE = 'Europe/London';
@@ -110,7 +111,7 @@ export function periodDays(period: Period, today: string): string[] {
 }
 
 /** A day as the shop reads it on a chart or table: "Mon 30 Nov". */
-export function dayLabel(day: string): string {
+export function dayLabel(day: string, locale: string = DEFAULT_LOCALE): string {
   const [y, m, d] = day.split('-').map(Number);
-  return new Date(Date.UTC(y!, m! - 1, d!)).toLocaleDateString('en-GB', { weekday: 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
+  return new Date(Date.UTC(y!, m! - 1, d!)).toLocaleDateString(locale, { weekday: 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
 }

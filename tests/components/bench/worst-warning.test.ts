@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { worstWarning } from '@/components/bench/worst-warning';
 import type { PlanWarning } from '@/lib/allowance/types';
 
-const w = (code: PlanWarning['code'], message: string = code): PlanWarning => ({ code, message });
+const w = (code: PlanWarning['code'], message: string = code): PlanWarning => ({ code, message, values: {} });
 
 describe('worstWarning', () => {
   it('is none for no warnings, and none for the cloth alone (the bar says the cloth itself)', () => {

@@ -1,6 +1,11 @@
 // Cut sheets built with the real engine, for the renderer's tests.
 import { buildCutSheet, type LegOrder, type SheetHeader } from '@/lib/cut-sheet/build';
 import type { CutSheetData } from '@/lib/cut-sheet/types';
+import { isLanguage } from '@/lib/i18n/languages';
+
+// SHEET_LANGUAGE=fr runs the layout suites (no touching runs, 9 pt, strip reach, overflow) on French
+// sheets; the suites that read English words are for English only.
+const language = isLanguage(process.env.SHEET_LANGUAGE) ? { language: process.env.SHEET_LANGUAGE } : {};
 
 /** A saved garment's header. */
 export const SHOP: SheetHeader = {
@@ -10,10 +15,11 @@ export const SHOP: SheetHeader = {
   due: '2025-03-14',
   assignee: 'Sam Ortiz',
   link: 'https://cuffwright.example/garments/1042',
+  ...language,
 };
 
 /** An unsaved calculator plan's header. */
-export const UNSAVED: SheetHeader = { shop: null, ticket: null, garment: null, due: null, assignee: null };
+export const UNSAVED: SheetHeader = { shop: null, ticket: null, garment: null, due: null, assignee: null, ...language };
 
 /** 1 1/2 in cuff with 5 in of cloth below the mark, both legs alike. */
 export const cuffInch: LegOrder = { side: 'left', finish: 'cuff', input: { unit: 'in', precision: 8, cuffDepth: '1 1/2', available: 5 } };

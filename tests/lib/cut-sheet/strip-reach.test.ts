@@ -10,7 +10,11 @@ import { renderCutSheet } from '@/lib/cut-sheet/render';
 import { GUIDE_COLUMN } from '@/lib/cut-sheet/styles';
 import type { CutSheetData, PageSize } from '@/lib/cut-sheet/types';
 import { textRuns, type TextRun } from './pdf-runs';
+import { translator } from '@/lib/i18n/catalog';
 import { SHOP } from './sheets';
+
+// The strip's words in the sheets' language (SHEET_LANGUAGE=fr runs this file on French sheets).
+const t = translator(SHOP.language ?? 'en');
 
 const MM = 72 / 25.4;
 const PADDING = 28;
@@ -31,7 +35,7 @@ function linesOnStrip(runs: TextRun[], data: CutSheetData): (TextRun | string)[]
   const group = sheetContent(data).groups[0]!;
   return group.lines.map((l) => {
     // The strip names a line in small letters ("1 finished edge"), the cutting line "CUT".
-    const word = l.cut ? 'CUT' : l.name.toLowerCase().split(' ')[0]!;
+    const word = l.cut ? t('sheet.guide.short.cut') : l.name.toLowerCase().split(' ')[0]!;
     const i = strip.findIndex((r) => r.text.startsWith(`${l.n} ${word}`) && r.size >= 9);
     const figure = strip[i + 1];
     if (i < 0) return `line ${l.n} ${l.name} is not on the strip`;
@@ -46,14 +50,22 @@ function linesOnStrip(runs: TextRun[], data: CutSheetData): (TextRun | string)[]
 function noteOnlyPages(runs: TextRun[], data: CutSheetData): number[] {
   const pages = new Set(runs.map((r) => r.page));
   const onStrip = linesOnStrip(runs, data).filter((x): x is TextRun => typeof x !== 'string');
-  return [...pages].filter((p) => !runs.some((r) => r.page === p && r.text === 'CHALK LINE') && !onStrip.some((r) => r.page === p));
+  return [...pages].filter((p) => !runs.some((r) => r.page === p && r.text === t('sheet.col.line')) && !onStrip.some((r) => r.page === p));
 }
 
 /** Pages with strip lines but not the caption that says where to lay the strip. */
 function uncaptionedStrips(runs: TextRun[], data: CutSheetData): number[] {
   const onStrip = linesOnStrip(runs, data).filter((x): x is TextRun => typeof x !== 'string');
   const pages = new Set(onStrip.map((r) => r.page));
-  return [...pages].filter((p) => !runs.some((r) => r.page === p && (r.text.startsWith('▼ top on the pin') || /^▲ [A-Z] on ▲ [A-Z]/.test(r.text))));
+  return [...pages].filter(
+    (p) =>
+      !runs.some(
+        (r) =>
+          r.page === p &&
+          (r.text.startsWith(t('sheet.guide.top').split(' ').slice(0, 3).join(' ')) ||
+            r.text.startsWith(t('sheet.guide.onMatch', { letter: '' }).trim().split(' ')[0]!)),
+      ),
+  );
 }
 
 const cases: [string, LegOrder, PageSize][] = [
@@ -86,7 +98,7 @@ describe('the strip reaches the cutting line', () => {
       const lines = linesOnStrip(runs, data) as TextRun[];
       const first = lines[0]!;
       const cut = lines.at(-1)!;
-      const marks = runs.filter((r) => r.text === 'match ▲ A');
+      const marks = runs.filter((r) => r.text === t('sheet.guide.match', { letter: 'A' }));
       expect(marks).toHaveLength(2);
       // The upper segment's mark in the column of line 1, the lower one's in the column of CUT.
       const upper = marks.find((m) => m.page === first.page && Math.abs(m.x0 - first.x0) < 1)!;

@@ -46,7 +46,7 @@ async function answer(request: Request, render: Render): Promise<Response> {
 
   let sheet: ReturnType<typeof buildCutSheet>;
   try {
-    sheet = buildCutSheet({ shop: null, ticket: null, garment: null, due: null, assignee: null, pageSize }, legs);
+    sheet = buildCutSheet({ shop: null, ticket: null, garment: null, due: null, assignee: null, pageSize, language: read.language ?? 'en' }, legs);
   } catch (e) {
     // Fields each sound, yet no plan (widths that give no leg at the cuff top): the engine says why.
     if (!isAllowanceError(e)) throw e;

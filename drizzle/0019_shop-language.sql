@@ -1,0 +1,1 @@
+ALTER TABLE "shop_settings" ADD COLUMN "language" text DEFAULT 'en' NOT NULL;
