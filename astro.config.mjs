@@ -8,10 +8,10 @@ import { nodeWorker } from './scripts/vite-node-worker.mjs';
 import { precompress } from './scripts/precompress.mjs';
 import { icuCatalog, icuParserOffInBrowser } from './scripts/vite-icu-catalog.mjs';
 
-/** In the browser, `zod` resolves to src/lib/zod-jitless.ts (zod configured not to probe eval,
+/** In the browser, `zod` resolves to src/lib/shared/zod-jitless.ts (zod configured not to probe eval,
  * which the CSP forbids); the server keeps zod's faster compiled parsers. */
 function zodJitlessInBrowser() {
-  const shim = fileURLToPath(new URL('./src/lib/zod-jitless.ts', import.meta.url));
+  const shim = fileURLToPath(new URL('./src/lib/shared/zod-jitless.ts', import.meta.url));
   return {
     name: 'cuffwright:zod-jitless-in-browser',
     enforce: /** @type {const} */ ('pre'),
@@ -60,7 +60,7 @@ export default defineConfig({
       DATABASE_URL: envField.string({ context: 'server', access: 'secret', optional: true }),
       BETTER_AUTH_URL: envField.string({ context: 'server', access: 'secret', default: 'http://localhost:4321' }),
       // Without it a random secret is kept in DATA_DIR/auth-secret (fine for one machine); required
-      // with DATABASE_URL (src/lib/deployment.ts).
+      // with DATABASE_URL (src/lib/server/deployment.ts).
       BETTER_AUTH_SECRET: envField.string({ context: 'server', access: 'secret', optional: true }),
       SMTP_HOST: envField.string({ context: 'server', access: 'secret', default: '127.0.0.1' }),
       SMTP_PORT: envField.number({ context: 'server', access: 'secret', default: 1025 }),
@@ -111,7 +111,7 @@ export default defineConfig({
       S3_FORCE_PATH_STYLE: envField.boolean({ context: 'server', access: 'secret', optional: true }),
       // Set by the HTTP tests: anonymous cut sheets say which thread drew them (X-Rendered-By: worker or main).
       SHEET_RENDER_TRACE: envField.boolean({ context: 'server', access: 'secret', default: false }),
-      // off: none of the PDF speed patches (src/lib/pdf-platform). Read there from process.env, as
+      // off: none of the PDF speed patches (src/lib/server/pdf-platform). Read there from process.env, as
       // the sheet worker and the benchmarks have no astro:env; declared here so a typo is refused.
       PDF_SPEED_PATCHES: envField.enum({ context: 'server', access: 'secret', values: ['on', 'off'], default: 'on' }),
     },

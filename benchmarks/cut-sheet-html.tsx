@@ -6,11 +6,11 @@ import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { renderToStaticMarkup } from 'react-dom/server';
-import { checkRuler, guideStrips } from '../src/lib/cut-sheet/chalk-guide';
-import { sheetContent, type SheetLegGroup } from '../src/lib/cut-sheet/content';
-import { legGeometry } from '../src/lib/cut-sheet/leg-geometry';
-import { qrPath } from '../src/lib/cut-sheet/qr';
-import type { CutSheetData } from '../src/lib/cut-sheet/types';
+import { checkRuler, guideStrips } from '../src/lib/server/cut-sheet/chalk-guide';
+import { sheetContent, type SheetLegGroup } from '../src/lib/server/cut-sheet/content';
+import { legGeometry } from '../src/lib/server/cut-sheet/leg-geometry';
+import { qrPath } from '../src/lib/server/cut-sheet/qr';
+import type { CutSheetData } from '../src/lib/shared/cut-sheet-types';
 
 const CUT = '#b3121b';
 const pts = (p: [number, number][]) => p.map(([x, y]) => `${x},${y}`).join(' ');

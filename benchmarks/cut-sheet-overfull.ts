@@ -4,8 +4,8 @@
 // NODE_ENV=production node_modules/.bin/vite-node benchmarks/cut-sheet-overfull.ts
 import { loadavg } from 'node:os';
 import { taperedPairSheet } from './cut-sheet-sample';
-import { renderCutSheet } from '../src/lib/cut-sheet/render';
-import { splitFromFirstLayout } from '../src/lib/pdf-platform/split-laid-out';
+import { renderCutSheet } from '../src/lib/server/cut-sheet/render';
+import { splitFromFirstLayout } from '../src/lib/server/pdf-platform/split-laid-out';
 for (let i = 0; i < 40; i++) await renderCutSheet(taperedPairSheet(i));
 const res: Record<string, number[]> = { on: [], off: [], overOn: [], overOff: [] };
 const load0 = loadavg()[0]!;

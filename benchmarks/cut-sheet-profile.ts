@@ -4,7 +4,7 @@
 // SHEETS=single profiles the one-leg sheet; the default is the benchmark's (two tapered legs).
 import { writeFileSync } from 'node:fs';
 import { sampleSheet, taperedPairSheet } from './cut-sheet-sample';
-import { renderCutSheet } from '../src/lib/cut-sheet/render';
+import { renderCutSheet } from '../src/lib/server/cut-sheet/render';
 
 const sheet = process.env.SHEETS === 'single' ? sampleSheet : taperedPairSheet;
 

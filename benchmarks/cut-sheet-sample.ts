@@ -2,7 +2,7 @@
 // run (ticket, garment, due date, assignee, cuff depth and cloth all vary), so the figures on it
 // differ from sheet to sheet as they do in a shop's morning batch. Only the wording every sheet
 // shares (steps, cautions, headings) repeats. Invented shop, staff and garments.
-import { buildCutSheet } from '../src/lib/cut-sheet/build';
+import { buildCutSheet } from '../src/lib/server/cut-sheet/build';
 
 const GARMENTS = ['Navy wool flannel trousers', 'Grey worsted suit trousers', 'Tan cotton chinos', 'Charcoal tweed trousers', 'Olive moleskin trousers'];
 const STAFF = ['Sam Ortiz', 'Priya Navarro', 'Jonah Whitcombe'];

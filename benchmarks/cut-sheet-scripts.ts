@@ -5,7 +5,7 @@
 // sheet, to compare two versions byte for byte. Invented names.
 import { writeFileSync } from 'node:fs';
 import { sampleSheet } from './cut-sheet-sample';
-import { renderCutSheet } from '../src/lib/cut-sheet/render';
+import { renderCutSheet } from '../src/lib/server/cut-sheet/render';
 
 const KINDS = {
   latin: (i: number) => sampleSheet(i),

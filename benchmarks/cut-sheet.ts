@@ -12,7 +12,7 @@ import { fileURLToPath } from 'node:url';
 import { chromium } from 'playwright-core';
 import { figure, stats, writeFigures } from './lib/figures.mjs';
 import { taperedPairSheet } from './cut-sheet-sample';
-import { renderCutSheet } from '../src/lib/cut-sheet/render';
+import { renderCutSheet } from '../src/lib/server/cut-sheet/render';
 import { cutSheetBody, cutSheetShell } from './cut-sheet-html';
 
 if (process.env.NODE_ENV !== 'production') {

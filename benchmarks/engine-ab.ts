@@ -1,20 +1,25 @@
 // The engine against another version of itself, alternated A B A B in one process (issue 12: compare
 // warm against warm, same load). A is a copy of another commit's src/lib/allowance and
-// src/lib/cut-sheet/build.ts + types.ts inside this checkout (vite-node serves only files under it):
-//   mkdir -p .test-dist-ab/engA && git archive main src/lib/allowance src/lib/cut-sheet/build.ts src/lib/cut-sheet/types.ts | tar -x -C .test-dist-ab/engA
+// src/lib/server/cut-sheet/build.ts (before the layer split, cut-sheet/build.ts + types.ts right under src/lib)
+// inside this checkout (vite-node serves only files under it; build.ts reaches the engine by a relative path, so
+// A's sheet runs on A's engine):
+//   mkdir -p .test-dist-ab/engA && git archive main src/lib/allowance src/lib/server/cut-sheet/build.ts src/lib/shared/cut-sheet-types.ts | tar -x -C .test-dist-ab/engA
 //   NODE_ENV=production node_modules/.bin/vite-node benchmarks/engine-ab.ts [rounds]
 // (ENGINE_A=<folder> for another copy.) Prints, per goal case of engine.ts (same inputs, same
 // generator), the medians per CPU-second of A and B (this checkout), B/A and the pairwise ratios.
+import { existsSync } from 'node:fs';
 import { loadavg } from 'node:os';
 import { resolve } from 'node:path';
 import * as B from '../src/lib/allowance/index';
-import * as BB from '../src/lib/cut-sheet/build';
+import * as BB from '../src/lib/server/cut-sheet/build';
 
 const ROUNDS = Number(process.argv[2] ?? 9);
 const RUN_MS = 300;
 const root = resolve(process.env.ENGINE_A ?? '.test-dist-ab/engA');
 const A: typeof B = await import(`${root}/src/lib/allowance/index.ts`);
-const AB: typeof BB = await import(`${root}/src/lib/cut-sheet/build.ts`);
+// The cut sheet's build moved to src/lib/server/ with the layer split; an A from before it has the old path.
+const buildA = ['server/cut-sheet', 'cut-sheet'].map((d) => `${root}/src/lib/${d}/build.ts`).find((p) => existsSync(p));
+const AB: typeof BB = await import(buildA ?? `${root}/src/lib/server/cut-sheet/build.ts`);
 
 // The generator and the first three input sets exactly as benchmarks/engine.ts makes them.
 let seed = 20240601;

@@ -4,7 +4,7 @@
 // the others are kept for comparison, without goals.
 import { cpus, loadavg } from 'node:os';
 import { checkHemTaper, checkTaper, type CuffInput, type HemInput, type HemTaperInput, planCuff, planHem, type TaperInput } from '../src/lib/allowance/index';
-import { type LegOrder, planLeg } from '../src/lib/cut-sheet/build';
+import { type LegOrder, planLeg } from '../src/lib/server/cut-sheet/build';
 import { figure, writeFigures } from './lib/figures.mjs';
 
 const RUNS = 7;

@@ -33,7 +33,7 @@ export const env = schema.parse(process.env);
 /** True when mail should go to the local capture (no real SMTP host configured). */
 export const useCapture = !env.SMTP_HOST || env.SMTP_HOST === '127.0.0.1' || env.SMTP_HOST === 'localhost';
 
-/** One line saying what to set when the server must not start (src/lib/deployment.ts has the
+/** One line saying what to set when the server must not start (src/lib/server/deployment.ts has the
  * server's copy of this rule): a shared database needs a session secret from the environment. */
 export function settingsProblem(e = env) {
   if (e.DATABASE_URL && (e.BETTER_AUTH_SECRET ?? '').length < 32) {

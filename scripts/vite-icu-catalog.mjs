@@ -1,4 +1,4 @@
-// Two Vite plugins for the message catalog (src/lib/i18n/messages/*.json): each message is parsed
+// Two Vite plugins for the message catalog (src/lib/shared/i18n/messages/*.json): each message is parsed
 // into its ICU syntax tree at build time, and the browser bundle gets intl-messageformat without the
 // parser (about 7 KiB gzip saved on every island page; the public calculator's budget is 100 KiB).
 import { parse } from '@formatjs/icu-messageformat-parser';

@@ -4,12 +4,12 @@
 import type { MiddlewareHandler } from 'astro';
 import { defineMiddleware } from 'astro:middleware';
 import { BETTER_AUTH_URL } from 'astro:env/server';
-import { memberRequestStarted } from '@/lib/member-activity';
-import { badIdParam } from '@/lib/ids';
+import { memberRequestStarted } from '@/lib/server/member-activity';
+import { badIdParam } from '@/lib/shared/ids';
 import { forgetSessions, lookUpSession, warmAuth } from '@/services/session-lookup';
-import { afterFirstAnswer } from '@/lib/after-first-answer';
-import { withSecurityHeaders } from '@/lib/security-headers';
-import { logError, logRequest } from '@/lib/request-log';
+import { afterFirstAnswer } from '@/lib/server/after-first-answer';
+import { withSecurityHeaders } from '@/lib/server/security-headers';
+import { logError, logRequest } from '@/lib/server/request-log';
 import { ensureStarted } from '@/services/startup';
 
 const PUBLIC_PAGES = ['/', '/sign-in', '/sign-up', '/forgot', '/reset', '/paid', '/api-reference'];

@@ -1,8 +1,8 @@
 // The catalog in the islands: a page says its language once (the shop's, or the visitor's on the
 // public calculator), and every component under it renders its words with useT().
 import { createContext, Fragment, useContext, useMemo, type ComponentType, type ReactNode } from 'react';
-import { partsTranslator, registerMessages, translator, type MessageKey, type Translate } from '@/lib/i18n/format';
-import { DEFAULT_LANGUAGE, intlLocale, type Language } from '@/lib/i18n/languages';
+import { partsTranslator, registerMessages, translator, type MessageKey, type Translate } from '@/lib/shared/i18n/format';
+import { DEFAULT_LANGUAGE, intlLocale, type Language } from '@/lib/shared/i18n/languages';
 
 // null outside any provider: a screen not yet in the catalog keeps its English words.
 const LanguageContext = createContext<Language | null>(null);

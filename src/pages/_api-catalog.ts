@@ -1,8 +1,8 @@
 // Every route file under src/pages/api, found by Vite's glob at build time, and the OpenAPI
-// document built from their declarations (src/lib/openapi.ts). Shared by /api/openapi.json and
+// document built from their declarations (src/lib/server/openapi.ts). Shared by /api/openapi.json and
 // /api-reference; the leading underscore keeps Astro from serving this file as a page.
-import { openApiDocument, type OpenApiDocument, type RouteEntry } from '@/lib/openapi';
-import type { DeclaredRoute } from '@/lib/route';
+import { openApiDocument, type OpenApiDocument, type RouteEntry } from '@/lib/server/openapi';
+import type { DeclaredRoute } from '@/lib/server/route';
 import pkg from '../../package.json';
 
 const modules = import.meta.glob<Record<string, unknown>>('./api/**/*.ts', { eager: true });

@@ -4,9 +4,9 @@
 // behind each other and behind members. The render itself runs in the sheet worker
 // (cut-sheet/render-off-thread.ts), so a member's request arriving meanwhile is not held up.
 import pLimit from 'p-limit';
-import type { Rule } from '@/lib/rate-limit-rules';
-import { tooMany } from '@/lib/api';
-import { whenMembersIdle } from '@/lib/member-activity';
+import type { Rule } from '@/lib/server/rate-limit-rules';
+import { tooMany } from '@/lib/server/api';
+import { whenMembersIdle } from '@/lib/server/member-activity';
 import { hitLimits, limitKey } from './rate-limits';
 
 /** At most 30 anonymous sheets per 10 minutes from one address. */

@@ -2,7 +2,7 @@
 import { and, desc, eq, inArray } from 'drizzle-orm';
 import { db, type Db } from '@/db';
 import { auditEvents, user } from '@/db/schema';
-import type { AuditEntry } from '@/lib/bench-types';
+import type { AuditEntry } from '@/lib/shared/bench-types';
 
 // Each event is written by the transaction of the change it records (`tx`): both are kept or
 // neither, so a change never stands without its history, and a refused event (text PostgreSQL

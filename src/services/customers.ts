@@ -3,15 +3,15 @@
 import { and, asc, desc, eq, inArray, isNull, or, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { auditEvents, customers, files, garments, notices, payments, refunds, sentMail, tickets, type Customer } from '@/db/schema';
-import type { Actor } from '@/lib/api';
-import { phoneDigits, TEXT_NEEDS_PHONE, type CustomerPatch, type NewCustomer } from '@/lib/customer-request';
-import type { CustomerDetails, CustomerFile, CustomerHit } from '@/lib/customer-types';
-import { fileStorage } from '@/lib/storage';
-import { can } from '@/lib/roles';
-import { ticketLabel, ticketSearchNumber } from '@/lib/ticket-number';
+import type { Actor } from '@/lib/server/api';
+import { phoneDigits, TEXT_NEEDS_PHONE, type CustomerPatch, type NewCustomer } from '@/lib/shared/customer-request';
+import type { CustomerDetails, CustomerFile, CustomerHit } from '@/lib/shared/customer-types';
+import { fileStorage } from '@/lib/server/storage';
+import { can } from '@/lib/shared/roles';
+import { ticketLabel, ticketSearchNumber } from '@/lib/shared/ticket-number';
 import { audit, auditOf } from './audit';
 import { ServiceError } from './errors';
-import { isUuid } from '@/lib/ids';
+import { isUuid } from '@/lib/shared/ids';
 
 /** What an erased customer's name becomes. */
 export const ERASED_NAME = 'erased';

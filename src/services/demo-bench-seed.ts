@@ -5,10 +5,10 @@ import { auditMany } from './audit';
 import { refreshTicketAssignee } from './garments';
 import { auditEvents, garments, measurements, tickets } from '@/db/schema';
 import { parseLength } from '@/lib/allowance';
-import type { ExistingFinish } from '@/lib/existing-finish';
-import { leastAdvanced, type GarmentStep } from '@/lib/garment-steps';
-import type { Finish, LegLength, SavedLength } from '@/lib/measurement-request';
-import type { Role } from '@/lib/roles';
+import type { ExistingFinish } from '@/lib/shared/existing-finish';
+import { leastAdvanced, type GarmentStep } from '@/lib/shared/garment-steps';
+import type { Finish, LegLength, SavedLength } from '@/lib/shared/measurement-request';
+import type { Role } from '@/lib/shared/roles';
 
 type Lengths = Partial<Record<LegLength, string>>;
 interface DemoGarment {

@@ -5,8 +5,8 @@
 import { and, asc, eq } from 'drizzle-orm';
 import { db } from '@/db';
 import { auditEvents, garments, payments, priceLines, tickets } from '@/db/schema';
-import { GARMENT_STEPS, type GarmentStep } from '@/lib/garment-steps';
-import type { Role } from '@/lib/roles';
+import { GARMENT_STEPS, type GarmentStep } from '@/lib/shared/garment-steps';
+import type { Role } from '@/lib/shared/roles';
 
 const DAY = 86_400_000;
 // How many days ago a garment at each step came in.

@@ -6,7 +6,7 @@ import { randomUUID } from 'node:crypto';
 import { sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { customers, member, organization, user } from '@/db/schema';
-import type { Role } from '@/lib/roles';
+import type { Role } from '@/lib/shared/roles';
 
 /** The demo shop's name. */
 export const DEMO_SHOP = 'Pinmark & Hem';
@@ -37,7 +37,7 @@ async function isEmpty(): Promise<boolean> {
 export async function seedDemoIfEmpty(): Promise<boolean> {
   if (!(await isEmpty())) return false;
   const [{ auth }, { seedHousePresets }, { seedBenchDemo }, { seedCounterDemo }, { seedOverviewDemo }] = await Promise.all([
-    import('@/lib/auth'),
+    import('@/lib/server/auth'),
     import('./presets'),
     import('./demo-bench-seed'),
     import('./demo-counter-seed'),

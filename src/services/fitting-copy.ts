@@ -3,10 +3,10 @@
 import { and, desc, eq, inArray } from 'drizzle-orm';
 import { db, type Db } from '@/db';
 import { garments, measurements, presets, tickets } from '@/db/schema';
-import type { Actor } from '@/lib/api';
-import type { PreviousFitting } from '@/lib/customer-types';
-import { LEG_LENGTHS, type SavedLength } from '@/lib/measurement-request';
-import { ticketLabel } from '@/lib/ticket-number';
+import type { Actor } from '@/lib/server/api';
+import type { PreviousFitting } from '@/lib/shared/customer-types';
+import { LEG_LENGTHS, type SavedLength } from '@/lib/shared/measurement-request';
+import { ticketLabel } from '@/lib/shared/ticket-number';
 import { auditMany } from './audit';
 import { ServiceError } from './errors';
 import { getCustomer } from './customers';

@@ -3,10 +3,10 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import type { Db } from '@/db';
 import { garments, measurements, shopSettings } from '@/db/schema';
-import { DEFAULT_FITTING_RULE, noFittingRefusal, passesMarked, type FittingRule } from '@/lib/fitting-rule';
-import { stepLabel, type GarmentStep } from '@/lib/garment-steps';
-import { canBePlanned } from '@/lib/fitting/saved-leg';
-import type { SavedLeg } from '@/lib/measurement-request';
+import { DEFAULT_FITTING_RULE, noFittingRefusal, passesMarked, type FittingRule } from '@/lib/shared/fitting-rule';
+import { stepLabel, type GarmentStep } from '@/lib/shared/garment-steps';
+import { canBePlanned } from '@/lib/server/fitting/saved-leg';
+import type { SavedLeg } from '@/lib/shared/measurement-request';
 import { ServiceError } from './errors';
 
 type SavedForPlan = Pick<SavedLeg, 'finish' | 'preset' | 'values' | 'unit'>;

@@ -1,7 +1,7 @@
 // The hook other parts of the shop listen on when a garment moves a step (the counter's ready
 // notice, closing a ticket at pickup). Listeners register themselves at import time.
 import type { Garment } from '@/db/schema';
-import type { Actor } from '@/lib/api';
+import type { Actor } from '@/lib/server/api';
 
 /** Everyone to tell after a garment's step changed. */
 export const garmentMovedListeners: Array<(actor: Actor, garment: Garment) => Promise<void>> = [];

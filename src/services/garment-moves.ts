@@ -5,8 +5,8 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import type { Db } from '@/db';
 import { garments, tickets, type Garment } from '@/db/schema';
-import type { Actor } from '@/lib/api';
-import { leastAdvanced, type GarmentStep } from '@/lib/garment-steps';
+import type { Actor } from '@/lib/server/api';
+import { leastAdvanced, type GarmentStep } from '@/lib/shared/garment-steps';
 import { auditMany } from './audit';
 import { ServiceError } from './errors';
 import { onGarmentMoved } from './garment-events';

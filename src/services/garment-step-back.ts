@@ -2,9 +2,9 @@
 // "Step back". Whoever may move garments on may step one back; a collected garment goes back to
 // ready only by the lead (reopen), since pickup settled the ticket at the counter.
 import type { Garment } from '@/db/schema';
-import type { Actor } from '@/lib/api';
-import { previousStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
-import { can } from '@/lib/roles';
+import type { Actor } from '@/lib/server/api';
+import { previousStep, stepLabel, type GarmentStep } from '@/lib/shared/garment-steps';
+import { can } from '@/lib/shared/roles';
 import { ServiceError } from './errors';
 import { visibleGarment, writeStep } from './garments';
 

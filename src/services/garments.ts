@@ -1,21 +1,21 @@
 // Garments on the bench: the queue, one garment's page, adding and editing them, and moving one
 // step along. A ticket's status follows its least advanced garment.
-import type { ContactPreference } from '@/lib/contact-channels';
+import type { ContactPreference } from '@/lib/shared/contact-channels';
 import { and, asc, eq, inArray, isNotNull, isNull, or } from 'drizzle-orm';
 import type { z } from 'zod';
 import { db, type Db } from '@/db';
 import { customers, garments, member, tickets, user, type Garment } from '@/db/schema';
-import type { Actor } from '@/lib/api';
-import type { garmentInput, garmentPatch } from '@/lib/bench-requests';
-import type { CustomerCard, GarmentDetail, Person, QueueRow, TicketGarment } from '@/lib/bench-types';
-import { nextStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
-import { can } from '@/lib/roles';
+import type { Actor } from '@/lib/server/api';
+import type { garmentInput, garmentPatch } from '@/lib/shared/bench-requests';
+import type { CustomerCard, GarmentDetail, Person, QueueRow, TicketGarment } from '@/lib/shared/bench-types';
+import { nextStep, stepLabel, type GarmentStep } from '@/lib/shared/garment-steps';
+import { can } from '@/lib/shared/roles';
 import { audit } from './audit';
 import { ServiceError } from './errors';
 import { assertReadyToHandOver } from './counter/hand-over';
 import { moveGarmentsLocked, tellMoved, writeTicketStatus } from './garment-moves';
 import { isUuid, lockTicket, withTicketLock } from './ticket-core';
-import { ticketLabel } from '@/lib/ticket-number';
+import { ticketLabel } from '@/lib/shared/ticket-number';
 import { copyFittings } from './fitting-copy';
 import { fittedGarments } from './fitting-rule';
 

@@ -2,8 +2,8 @@
 import { and, asc, eq } from 'drizzle-orm';
 import { db } from '@/db';
 import { member, organization } from '@/db/schema';
-import { isRole, type Role } from '@/lib/roles';
-import { isRecordId } from '@/lib/ids';
+import { isRole, type Role } from '@/lib/shared/roles';
+import { isRecordId } from '@/lib/shared/ids';
 
 /** A membership resolved for the session. */
 export interface Membership {

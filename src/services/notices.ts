@@ -7,11 +7,11 @@ import { and, asc, desc, eq, gte, isNull, lte, ne, or, sql } from 'drizzle-orm';
 import { NOTICE_LEASE_SECONDS } from 'astro:env/server';
 import { db } from '@/db';
 import { counterSettings, customers, garments, notices, organization, tickets, type DELIVERY_REPORTS, type Notice } from '@/db/schema';
-import type { Actor } from '@/lib/api';
-import { sendMail } from '@/lib/mail';
-import { recordSentMail } from '@/lib/sent-mail-record';
-import { plannedSends, type Channel, type ContactPreference, type PlannedSend } from '@/lib/contact-channels';
-import { sendText, smsConfigured, statusCallbackUrl } from '@/lib/sms-service';
+import type { Actor } from '@/lib/server/api';
+import { sendMail } from '@/lib/server/mail';
+import { recordSentMail } from '@/lib/server/sent-mail-record';
+import { plannedSends, type Channel, type ContactPreference, type PlannedSend } from '@/lib/shared/contact-channels';
+import { sendText, smsConfigured, statusCallbackUrl } from '@/lib/server/sms-service';
 import { formatMoney } from '@/lib/pricing/money';
 import { audit } from './audit';
 import { ServiceError } from './errors';
@@ -19,14 +19,14 @@ import { isUuid } from './garments';
 import { summaryOf } from './counter/payments';
 import { counterSettingsOf } from './counter/prices';
 import { shopTicket } from './ticket-core';
-import { ticketLabel } from '@/lib/ticket-number';
+import { ticketLabel } from '@/lib/shared/ticket-number';
 
 /** Automatic retries before a notice waits for someone to press "retry". */
 export const MAX_AUTO_ATTEMPTS = 5;
 // 30 s, 1 min, 2 min, 4 min: a mail server back from a restart is caught soon, a dead one is not hammered.
 const BACKOFF_MS = 30_000;
 /** How long (NOTICE_LEASE_SECONDS, 3 min) a claimed send is left to its server before another server may try it: longer than
- * the mail transport's own timeouts (src/lib/mail.ts), so only a server that died mid-send is overtaken. */
+ * the mail transport's own timeouts (src/lib/server/mail.ts), so only a server that died mid-send is overtaken. */
 export const SEND_LEASE_MS = NOTICE_LEASE_SECONDS * 1000;
 
 /** The ticket's notices, oldest first. */
@@ -108,7 +108,7 @@ async function deliver(notice: Notice): Promise<{ providerId: string | null }> {
         { to: notice.to, subject: notice.subject, messageId: sent.sid, channel: 'sms', body: notice.body },
       );
     } catch (e) {
-      // As for e-mail (lib/mail.ts): the text is out, and a retry would send it twice.
+      // As for e-mail (lib/server/mail.ts): the text is out, and a retry would send it twice.
       console.error('sent text not recorded:', e);
     }
     return { providerId: sent.sid };

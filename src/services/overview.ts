@@ -5,10 +5,10 @@
 import { and, count, eq, gte, inArray, lt, ne, notInArray, sql, type SQL, type SQLWrapper } from 'drizzle-orm';
 import { db } from '@/db';
 import { auditEvents, counterSettings, garments, payments, refunds } from '@/db/schema';
-import { GARMENT_STEPS, stepLabel, type GarmentStep } from '@/lib/garment-steps';
-import type { Overview, OverviewDay } from '@/lib/overview/overview-types';
+import { GARMENT_STEPS, stepLabel, type GarmentStep } from '@/lib/shared/garment-steps';
+import type { Overview, OverviewDay } from '@/lib/shared/overview/overview-types';
 import { isCurrency, type Currency } from '@/lib/pricing/money';
-import { dayBounds, dayOf, periodDays, type Period } from '@/lib/overview/shop-days';
+import { dayBounds, dayOf, periodDays, type Period } from '@/lib/shared/overview/shop-days';
 import { benchSettings } from './shop-settings';
 import { shopTimeZone } from './shop-time-zone';
 

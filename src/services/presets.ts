@@ -3,7 +3,7 @@ import { and, asc, desc, eq, isNull, ne, or, sql } from 'drizzle-orm';
 import type { z } from 'zod';
 import { db, type Db } from '@/db';
 import { measurements, presets, type Preset } from '@/db/schema';
-import type { Actor } from '@/lib/api';
+import type { Actor } from '@/lib/server/api';
 import { isAllowanceError, parseLength, validateCuffInput, validateHemInput } from '@/lib/allowance';
 import {
   LENGTHS_OF,
@@ -14,7 +14,7 @@ import {
   type PresetView,
   type presetCreateInput,
   type presetUpdateInput,
-} from '@/lib/preset-settings';
+} from '@/lib/shared/preset-settings';
 import { ServiceError } from './errors';
 import { audit, auditMany, auditOf } from './audit';
 import { isUuid } from './ticket-core';

@@ -7,11 +7,11 @@ import { createHash } from 'node:crypto';
 import { and, sql, type SQL } from 'drizzle-orm';
 import { db } from '@/db';
 import { garments } from '@/db/schema';
-import type { Actor } from '@/lib/api';
-import type { QueueRow, WhoOption } from '@/lib/bench-types';
-import { whoOptions } from '@/lib/queue-filter';
-import { encodeCursor, type QueueCursor } from '@/lib/queue-request';
-import { can } from '@/lib/roles';
+import type { Actor } from '@/lib/server/api';
+import type { QueueRow, WhoOption } from '@/lib/shared/bench-types';
+import { whoOptions } from '@/lib/shared/queue-filter';
+import { encodeCursor, type QueueCursor } from '@/lib/shared/queue-request';
+import { can } from '@/lib/shared/roles';
 import { garmentVisibleTo, staffOf } from './garments';
 
 /** What the queue API is asked: open work, or a page of history after a cursor. */

@@ -5,7 +5,7 @@ import { createHash } from 'node:crypto';
 import { asc, eq, inArray, lt, sql } from 'drizzle-orm';
 import { db, type Db } from '@/db';
 import { rateLimits } from '@/db/schema';
-import { afterHit, expiresAt, waitMs, type Counter, type Rule } from '@/lib/rate-limit-rules';
+import { afterHit, expiresAt, waitMs, type Counter, type Rule } from '@/lib/server/rate-limit-rules';
 
 /** One limit to count a request against. */
 export interface Limit {

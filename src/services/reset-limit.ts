@@ -1,9 +1,9 @@
 // Password-reset mail, limited in the database (README: Security): at most 3 requests an hour for one
 // e-mail address, whoever asks, and 10 an hour from one client address. The same count whether the
 // account exists or not, so a refusal tells nothing about who has an account.
-import { requestEmail } from '@/lib/request-email';
-import type { Rule } from '@/lib/rate-limit-rules';
-import { tooMany } from '@/lib/api';
+import { requestEmail } from '@/lib/server/request-email';
+import type { Rule } from '@/lib/server/rate-limit-rules';
+import { tooMany } from '@/lib/server/api';
 import { hitLimits, limitKey, runCounted, unhitLimits, type Limit } from './rate-limits';
 
 const HOUR = 3_600_000;

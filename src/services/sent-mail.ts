@@ -7,8 +7,8 @@ import { desc, eq } from 'drizzle-orm';
 import { db } from '@/db';
 import { sentMail, type SentMailKind } from '@/db/schema';
 
-// Recording lives beside the mailer (lib/mail.ts sends, then records; lib never imports services).
-export { recordSentMail, type MailOrigin } from '@/lib/sent-mail-record';
+// Recording lives beside the mailer (lib/server/mail.ts sends, then records; lib never imports services).
+export { recordSentMail, type MailOrigin } from '@/lib/server/sent-mail-record';
 
 /** One message in a shop's list. */
 export interface SentMessage {

@@ -1,5 +1,5 @@
 // How a stored photo is answered: its own type, kept private, never sniffed into something else.
-import { guard, problem } from '@/lib/api';
+import { guard, problem } from '@/lib/server/api';
 import { ServiceError } from './errors';
 import { readPhoto } from './photos';
 

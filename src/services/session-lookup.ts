@@ -4,8 +4,8 @@
 // role take effect on the next request); another server (DATABASE_URL) sees it within the TTL.
 // better-auth (half a second of modules) is loaded at the first request with a session cookie, or
 // by warmAuth() once the server has answered its first request, not before a signed-out page.
-import { lookupCache } from '@/lib/lookup-cache';
-import { SESSION_CACHE_TTL_MS, sessionToken } from '@/lib/session-key';
+import { lookupCache } from '@/lib/server/lookup-cache';
+import { SESSION_CACHE_TTL_MS, sessionToken } from '@/lib/server/session-key';
 import { activeMembership, type Membership } from './members';
 
 /** The signed-in person and their membership, or nulls. */
@@ -19,11 +19,11 @@ const SIGNED_OUT: SessionLookup = { user: null, member: null };
 
 /** Loads the auth module (once); called after start-up so the first sign-in does not wait for it. */
 export function warmAuth(): Promise<unknown> {
-  return import('@/lib/auth');
+  return import('@/lib/server/auth');
 }
 
 async function load(headers: Headers) {
-  const { auth } = await import('@/lib/auth');
+  const { auth } = await import('@/lib/server/auth');
   const session = await auth.api.getSession({ headers });
   if (!session) return { value: SIGNED_OUT };
   const { id, name, email } = session.user;

@@ -3,11 +3,11 @@ import { eq } from 'drizzle-orm';
 import type { z } from 'zod';
 import { db } from '@/db';
 import { shopSettings } from '@/db/schema';
-import type { Actor } from '@/lib/api';
-import type { settingsRequest } from '@/lib/bench-requests';
-import type { BenchSettings } from '@/lib/bench-types';
-import { DEFAULT_FITTING_RULE } from '@/lib/fitting-rule';
-import { DEFAULT_LANGUAGE } from '@/lib/i18n/languages';
+import type { Actor } from '@/lib/server/api';
+import type { settingsRequest } from '@/lib/shared/bench-requests';
+import type { BenchSettings } from '@/lib/shared/bench-types';
+import { DEFAULT_FITTING_RULE } from '@/lib/shared/fitting-rule';
+import { DEFAULT_LANGUAGE } from '@/lib/shared/i18n/languages';
 import { audit } from './audit';
 
 /** The shop's settings, or the defaults (inches to 1/8, the usual step names, warn) before any were saved. */

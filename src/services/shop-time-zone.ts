@@ -2,8 +2,8 @@
 import { eq } from 'drizzle-orm';
 import { db, type Db } from '@/db';
 import { shopSettings } from '@/db/schema';
-import type { Actor } from '@/lib/api';
-import { DEFAULT_TIME_ZONE, isTimeZone } from '@/lib/overview/shop-days';
+import type { Actor } from '@/lib/server/api';
+import { DEFAULT_TIME_ZONE, isTimeZone } from '@/lib/shared/overview/shop-days';
 import { audit } from './audit';
 import { ServiceError } from './errors';
 

@@ -4,9 +4,9 @@
 // most 1 min, so strangers guessing cannot keep the owner out for long) and the address across all
 // accounts (30 failures, then 15 min). An attempt is counted before the password is checked, so
 // many sent at once cannot slip past the count; it is taken back unless the password was wrong.
-import { tooMany } from '@/lib/api';
-import { requestEmail } from '@/lib/request-email';
-import type { Rule } from '@/lib/rate-limit-rules';
+import { tooMany } from '@/lib/server/api';
+import { requestEmail } from '@/lib/server/request-email';
+import type { Rule } from '@/lib/server/rate-limit-rules';
 import { clearLimits, hitLimits, limitKey, runCounted, unhitLimits, type Limit } from './rate-limits';
 
 const MINUTE = 60_000;

@@ -1,6 +1,6 @@
 // Brings the database up once per process before the first request: migrations, then demo data.
 import { BETTER_AUTH_SECRET, DATABASE_URL, DEMO_DATA, NOTICE_TICK_SECONDS } from 'astro:env/server';
-import { demoWanted, refuseUnsafeStart } from '@/lib/deployment';
+import { demoWanted, refuseUnsafeStart } from '@/lib/server/deployment';
 import { handle } from '@/db';
 import { seedDemoIfEmpty } from './demo-seed';
 import { startNoticeTimer } from './notices';

@@ -4,8 +4,8 @@
 import { and, eq } from 'drizzle-orm';
 import { db, type Db } from '@/db';
 import { tickets, type Ticket } from '@/db/schema';
-import type { Actor } from '@/lib/api';
-import { isUuid } from '@/lib/ids';
+import type { Actor } from '@/lib/server/api';
+import { isUuid } from '@/lib/shared/ids';
 import { ServiceError } from './errors';
 
 export { isUuid };

@@ -2,18 +2,18 @@
 import { and, asc, desc, eq, exists, isNull, or, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { customers, garments, tickets, type Ticket } from '@/db/schema';
-import type { Actor } from '@/lib/api';
-import { intakeRequest, type IntakeInput } from '@/lib/bench-requests';
-import type { TicketDetail } from '@/lib/bench-types';
-import { nextStep, stepLabel, type GarmentStep } from '@/lib/garment-steps';
-import { can } from '@/lib/roles';
+import type { Actor } from '@/lib/server/api';
+import { intakeRequest, type IntakeInput } from '@/lib/shared/bench-requests';
+import type { TicketDetail } from '@/lib/shared/bench-types';
+import { nextStep, stepLabel, type GarmentStep } from '@/lib/shared/garment-steps';
+import { can } from '@/lib/shared/roles';
 import { audit } from './audit';
 import { ServiceError } from './errors';
 import { moveGarmentsLocked, tellMoved } from './garment-moves';
 import { customerCard, garmentVisibleTo, isUuid, refreshTicketAssignee, staffOf, summaries, withTicketLock } from './garments';
 import { pickUp } from './counter/hand-over';
 import { priceAtIntake } from './counter/intake-prices';
-import { ticketLabel } from '@/lib/ticket-number';
+import { ticketLabel } from '@/lib/shared/ticket-number';
 import { copyFittings } from './fitting-copy';
 
 /** A ticket as listed: the row plus who it is for and how many garments it holds. */

@@ -2,8 +2,8 @@
 // prints "let down the old cuffs" as its first bench step, alone and in the batch; the demo's
 // charcoal pair (seeded with cuffs) too; a plain-hemmed pair and the calculator's sheet do not.
 import { beforeAll, describe, expect, inject, it } from 'vitest';
-import { LET_DOWN_OLD_CUFF } from '../../src/lib/cut-sheet/content';
-import type { QueueRow } from '../../src/lib/bench-types';
+import { LET_DOWN_OLD_CUFF } from '../../src/lib/server/cut-sheet/content';
+import type { QueueRow } from '../../src/lib/shared/bench-types';
 import { flatText, pageInfo, pdfFile } from '../lib/cut-sheet/poppler';
 import { call, DEMO, signIn } from './client';
 

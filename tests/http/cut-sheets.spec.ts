@@ -5,8 +5,8 @@
 import jsQR from 'jsqr';
 import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { planCuff } from '../../src/lib/allowance/index';
-import type { QueueRow } from '../../src/lib/bench-types';
-import { DEFAULT_QUEUE_FILTER, filterQueue } from '../../src/lib/queue-filter';
+import type { QueueRow } from '../../src/lib/shared/bench-types';
+import { DEFAULT_QUEUE_FILTER, filterQueue } from '../../src/lib/shared/queue-filter';
 import { flatText, gray, layoutText, pageInfo, pdfFile, words } from '../lib/cut-sheet/poppler';
 import { call, DEMO, newShop, signIn } from './client';
 

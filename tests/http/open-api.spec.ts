@@ -6,7 +6,7 @@ import { readdirSync, readFileSync } from 'node:fs';
 import { join, relative, sep } from 'node:path';
 import { Validator } from '@seriousme/openapi-schema-validator';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { can, type Permission } from '@/lib/roles';
+import { can, type Permission } from '@/lib/shared/roles';
 import { fixtures } from './api-fixtures';
 import { call, DEMO, signIn } from './client';
 

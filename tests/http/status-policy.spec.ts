@@ -3,7 +3,7 @@
 // body or query the schema refuses → 422 { error, issues }, no session → 401, a role without the
 // permission → 403; never a 500, and every refusal in the one shape.
 import { describe, expect, it, inject } from 'vitest';
-import { can, type Permission } from '@/lib/roles';
+import { can, type Permission } from '@/lib/shared/roles';
 import { call, DEMO, signIn } from './client';
 
 type Role = keyof typeof DEMO;

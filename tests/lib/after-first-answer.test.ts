@@ -1,6 +1,6 @@
 // The server's first answer goes out whole before the deferred start-up work (loading better-auth) runs, once.
 import { describe, expect, it, vi } from 'vitest';
-import { afterFirstAnswer } from '@/lib/after-first-answer';
+import { afterFirstAnswer } from '@/lib/server/after-first-answer';
 
 describe('afterFirstAnswer', () => {
   it('runs the work once, after the first body has been read to its end, and leaves later answers alone', async () => {

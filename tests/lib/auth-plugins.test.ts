@@ -1,8 +1,8 @@
 // better-auth's organization plugin enforces the same grants as the app's own guard: both are
-// built from src/lib/roles.ts, and this checks that they agree on every action for every role.
+// built from src/lib/shared/roles.ts, and this checks that they agree on every action for every role.
 import { describe, expect, it } from 'vitest';
-import { shopRoles } from '@/lib/auth-plugins';
-import { can, ROLES, statements, type Permission } from '@/lib/roles';
+import { shopRoles } from '@/lib/server/auth-plugins';
+import { can, ROLES, statements, type Permission } from '@/lib/shared/roles';
 
 describe('better-auth roles', () => {
   it('authorize exactly what can() allows, for every role and every action', () => {

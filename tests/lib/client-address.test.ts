@@ -1,7 +1,7 @@
 // The client address the limits count: the TCP peer unless proxies are trusted, then the entry the
 // nearest trusted proxy wrote (never the left-most, which the client itself may have sent).
 import { describe, expect, it } from 'vitest';
-import { addressKey, clientAddressOf } from '@/lib/client-address';
+import { addressKey, clientAddressOf } from '@/lib/server/client-address';
 
 describe('client address', () => {
   it('is the peer when no proxy is trusted, whatever X-Forwarded-For says', () => {

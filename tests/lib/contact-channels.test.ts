@@ -1,7 +1,7 @@
 // Issue 14: which channels a notice goes by, from the customer's preference, what is on file and
 // whether the shop's texts are set up; the counter is told why a channel could not be used.
 import { describe, expect, it } from 'vitest';
-import { plannedSends } from '@/lib/contact-channels';
+import { plannedSends } from '@/lib/shared/contact-channels';
 
 const full = { email: 'wren@example.com', phone: '07700 900100' };
 

@@ -4,8 +4,8 @@ import { mkdtempSync, existsSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { deploymentProblem, demoWanted } from '@/lib/deployment';
-import { authSecret } from '@/lib/auth-secret';
+import { deploymentProblem, demoWanted } from '@/lib/server/deployment';
+import { authSecret } from '@/lib/server/auth-secret';
 
 const PG = 'postgres://shop@db.internal:5432/cuffwright';
 

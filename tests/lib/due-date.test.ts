@@ -1,6 +1,6 @@
 // Due dates at the bench: overdue before today, due today, later, or none; read in local time.
 import { describe, expect, it } from 'vitest';
-import { dueState, dueText, todayIso } from '@/lib/due-date';
+import { dueState, dueText, todayIso } from '@/lib/shared/due-date';
 
 describe('due dates', () => {
   it('stand against today as overdue, today, later or none', () => {

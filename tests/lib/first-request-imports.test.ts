@@ -44,7 +44,7 @@ describe('the first request', () => {
   });
 
   it('loads the payment SDK, nodemailer, the S3 SDK and pino only at their first use (dynamic imports)', async () => {
-    // better-auth too, behind a dynamic import of src/lib/auth.ts, which this bundle cannot tell
+    // better-auth too, behind a dynamic import of src/lib/server/auth.ts, which this bundle cannot tell
     // apart: tests/services/startup-loads.test.ts proves start-up does not load it.
     const first = await packagesOfMiddleware();
     const later = await packagesOfMiddleware(true);

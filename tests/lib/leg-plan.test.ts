@@ -1,9 +1,9 @@
 // A leg's fitting turned into plan requests: a cuff needs its depth, is planned level whatever the
 // front pin says, and gets a taper check only with all three widths.
 import { describe, expect, it } from 'vitest';
-import { frontPinNote, legHemTaperRequest, legMainRequest, legTaperRequest } from '@/lib/leg-plan';
-import { blankLeg } from '@/lib/measurement-request';
-import { GARMENT_STEPS, leastAdvanced, nextStep, stepLabel } from '@/lib/garment-steps';
+import { frontPinNote, legHemTaperRequest, legMainRequest, legTaperRequest } from '@/lib/shared/leg-plan';
+import { blankLeg } from '@/lib/shared/measurement-request';
+import { GARMENT_STEPS, leastAdvanced, nextStep, stepLabel } from '@/lib/shared/garment-steps';
 
 describe('leg plan requests', () => {
   it('ask for a cuff with the depth and cloth typed, blank fields left to the engine', () => {

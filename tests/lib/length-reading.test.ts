@@ -3,7 +3,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parseLength, type Unit } from '@/lib/allowance';
-import { convertTyped, readLength, typedAndRead, typedWithUnit } from '@/lib/length-reading';
+import { convertTyped, readLength, typedAndRead, typedWithUnit } from '@/lib/shared/length-reading';
 
 describe('readLength', () => {
   it.each([

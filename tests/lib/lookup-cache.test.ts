@@ -2,8 +2,8 @@
 // removing a member) is seen once the entry is older than the TTL; a clear (a write on this server)
 // is seen at once, even by a lookup that was running when it came.
 import { describe, expect, it } from 'vitest';
-import { lookupCache } from '@/lib/lookup-cache';
-import { SESSION_CACHE_TTL_MS, sessionToken } from '@/lib/session-key';
+import { lookupCache } from '@/lib/server/lookup-cache';
+import { SESSION_CACHE_TTL_MS, sessionToken } from '@/lib/server/session-key';
 
 function clock() {
   let t = 1_000_000;

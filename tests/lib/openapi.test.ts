@@ -1,9 +1,9 @@
-// The API document from route declarations (src/lib/openapi.ts): addresses from file names, the
+// The API document from route declarations (src/lib/server/openapi.ts): addresses from file names, the
 // body and query as JSON Schema a client sends, and the refusals each route can answer.
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
-import { apiPathOf, openApiDocument } from '@/lib/openapi';
-import type { RouteSpec } from '@/lib/route';
+import { apiPathOf, openApiDocument } from '@/lib/server/openapi';
+import type { RouteSpec } from '@/lib/server/route';
 
 describe('openApiDocument', () => {
   it('turns route files into addresses: index dropped, [id] → {id}, a rest parameter named too', () => {

@@ -4,9 +4,9 @@
 // words beside a field are the same whether the browser or the server found the fault.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { checkPlanRequest } from '@/lib/plan-check';
-import { PLAN_FIELD_NAMES, PLAN_FIELDS } from '@/lib/plan-messages';
-import { cuffRequest, fieldMessages, hemRequest, planRequest, taperRequest } from '@/lib/plan-request';
+import { checkPlanRequest } from '@/lib/shared/plan-check';
+import { PLAN_FIELD_NAMES, PLAN_FIELDS } from '@/lib/shared/plan-messages';
+import { cuffRequest, fieldMessages, hemRequest, planRequest, taperRequest } from '@/lib/shared/plan-request';
 
 /** What the server makes of a body: the endpoint's first message, per-field messages, or the parsed request. */
 function server(body: unknown) {

@@ -1,7 +1,7 @@
 // The queue's filter, shared by the queue island and the morning's batch of cut sheets.
 import { describe, expect, it } from 'vitest';
-import type { QueueRow } from '@/lib/bench-types';
-import { DEFAULT_QUEUE_FILTER, filterQueue, queueSheetsHref } from '@/lib/queue-filter';
+import type { QueueRow } from '@/lib/shared/bench-types';
+import { DEFAULT_QUEUE_FILTER, filterQueue, queueSheetsHref } from '@/lib/shared/queue-filter';
 
 const ME = 'user-me';
 const row = (id: string, over: Partial<QueueRow>): QueueRow => ({

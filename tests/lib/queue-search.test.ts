@@ -1,8 +1,8 @@
 // The queue's search box: ticket number and customer name as before, and now the customer's phone
 // (digits, however written) and the garment's description.
 import { describe, expect, it } from 'vitest';
-import type { QueueRow } from '@/lib/bench-types';
-import { DEFAULT_QUEUE_FILTER, filterQueue } from '@/lib/queue-filter';
+import type { QueueRow } from '@/lib/shared/bench-types';
+import { DEFAULT_QUEUE_FILTER, filterQueue } from '@/lib/shared/queue-filter';
 
 const row = (id: string, over: Partial<QueueRow>): QueueRow => ({
   id,

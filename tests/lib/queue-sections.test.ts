@@ -1,8 +1,8 @@
 // Ready work waiting for its customer is not bench work: it stands apart with its own age ("ready 3
 // days"), and only work not yet ready can be overdue (issue 15).
 import { describe, expect, it } from 'vitest';
-import type { QueueRow } from '@/lib/bench-types';
-import { DEFAULT_QUEUE_FILTER, filterQueue, queueSection, readyAge, workDueState } from '@/lib/queue-filter';
+import type { QueueRow } from '@/lib/shared/bench-types';
+import { DEFAULT_QUEUE_FILTER, filterQueue, queueSection, readyAge, workDueState } from '@/lib/shared/queue-filter';
 
 const row = (id: string, over: Partial<QueueRow>): QueueRow => ({
   id,

@@ -2,8 +2,8 @@
 // opens the same queue (issue 15). Defaults stay out of the address; anything not understood is
 // dropped for the default, never an error.
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_QUEUE_FILTER } from '@/lib/queue-filter';
-import { DEFAULT_QUEUE_SORT, queueUrlSearch, readQueueUrl } from '@/lib/queue-url';
+import { DEFAULT_QUEUE_FILTER } from '@/lib/shared/queue-filter';
+import { DEFAULT_QUEUE_SORT, queueUrlSearch, readQueueUrl } from '@/lib/shared/queue-url';
 
 const WHO = ['all', 'mine-open', 'mine', 'nobody', 'user-b'];
 

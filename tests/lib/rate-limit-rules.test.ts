@@ -1,7 +1,7 @@
 // The limits' rules at any instant: a fixed window refuses past its maximum until the window ends;
 // a growing rule lets the free tries through, then doubles its wait up to the cap.
 import { describe, expect, it } from 'vitest';
-import { afterHit, expiresAt, waitMs, type Counter, type Rule } from '@/lib/rate-limit-rules';
+import { afterHit, expiresAt, waitMs, type Counter, type Rule } from '@/lib/server/rate-limit-rules';
 
 function hits(rule: Rule, times: number[]): Counter | undefined {
   return times.reduce<Counter | undefined>((c, t) => afterHit(rule, c, t), undefined);

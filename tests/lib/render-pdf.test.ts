@@ -5,11 +5,11 @@ import { runInNewContext } from 'node:vm';
 import { Document, Page, Text } from '@react-pdf/renderer';
 import { createElement } from 'react';
 import { describe, expect, it, vi } from 'vitest';
-import { buildCutSheet } from '@/lib/cut-sheet/build';
-import { registerFonts } from '@/lib/cut-sheet/fonts';
-import { renderCutSheet } from '@/lib/cut-sheet/render';
-import { renderPdf } from '@/lib/render-pdf';
-import { cutSheetDocument } from '@/lib/cut-sheet/CutSheet';
+import { buildCutSheet } from '@/lib/server/cut-sheet/build';
+import { registerFonts } from '@/lib/server/cut-sheet/fonts';
+import { renderCutSheet } from '@/lib/server/cut-sheet/render';
+import { renderPdf } from '@/lib/server/render-pdf';
+import { cutSheetDocument } from '@/lib/server/cut-sheet/CutSheet';
 import { SHOP } from './cut-sheet/sheets';
 
 setFlagsFromString('--expose-gc');

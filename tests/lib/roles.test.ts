@@ -1,6 +1,6 @@
 // The four roles as the issue describes them, checked on the one shared definition.
 import { describe, expect, it } from 'vitest';
-import { can, grants, ROLES, statements, type Permission } from '@/lib/roles';
+import { can, grants, ROLES, statements, type Permission } from '@/lib/shared/roles';
 
 const everything: Permission[] = Object.entries(statements).flatMap(([r, actions]) => (actions as readonly string[]).map((a) => [r, a] as Permission));
 const shopPermissions = everything.filter(([r]) => !['organization', 'member', 'invitation', 'team', 'ac'].includes(r));

@@ -3,8 +3,8 @@
 import type { APIContext } from 'astro';
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
-import { demand, route } from '@/lib/route';
-import { ServiceError } from '@/lib/service-error';
+import { demand, route } from '@/lib/server/route';
+import { ServiceError } from '@/lib/server/service-error';
 
 const member = (role: string) => ({ user: { id: 'u', name: 'Pat', email: 'p@example.com' }, member: { id: 'm', role, shopId: 's', shopName: 'S' } });
 const signedOut = { user: null, member: null };

@@ -1,6 +1,6 @@
 // The address taken from ?next= after sign-in: only a path on this site, never another site.
 import { describe, expect, it } from 'vitest';
-import { safeNext } from '@/lib/safe-next';
+import { safeNext } from '@/lib/shared/safe-next';
 
 const ORIGIN = 'http://localhost:4321';
 

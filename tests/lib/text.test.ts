@@ -2,15 +2,15 @@
 // refused with an issue on that field, so it never reaches PostgreSQL (which refuses both).
 import { describe, expect, it } from 'vitest';
 import type { z } from 'zod';
-import { newCustomer as customerInput } from '@/lib/customer-request';
-import { acceptInviteInput, shopSignUpInput } from '@/lib/account-inputs';
-import { customerPatch, garmentPatch, intakeRequest, settingsRequest } from '@/lib/bench-requests';
-import { lineInput, priceListInput } from '@/lib/counter-request';
-import { measurementsRequest, blankLeg } from '@/lib/measurement-request';
-import { planRequest } from '@/lib/plan-request';
-import { presetCreateInput, presetUpdateInput } from '@/lib/preset-settings';
-import { batchQuery } from '@/lib/sheet-request';
-import { isUnstorable, text, unstorablePath } from '@/lib/text';
+import { newCustomer as customerInput } from '@/lib/shared/customer-request';
+import { acceptInviteInput, shopSignUpInput } from '@/lib/shared/account-inputs';
+import { customerPatch, garmentPatch, intakeRequest, settingsRequest } from '@/lib/shared/bench-requests';
+import { lineInput, priceListInput } from '@/lib/shared/counter-request';
+import { measurementsRequest, blankLeg } from '@/lib/shared/measurement-request';
+import { planRequest } from '@/lib/shared/plan-request';
+import { presetCreateInput, presetUpdateInput } from '@/lib/shared/preset-settings';
+import { batchQuery } from '@/lib/shared/sheet-request';
+import { isUnstorable, text, unstorablePath } from '@/lib/shared/text';
 import { PRICE_KEYS } from '@/lib/pricing/price-keys';
 
 const BAD = ['pair \u0000 one', 'pair \ud800', '\udc00 pair', 'a\ud83d'];

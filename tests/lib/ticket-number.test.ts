@@ -1,6 +1,6 @@
 // The ticket book's numbering: the shop's initials and the plain number, in one function.
 import { describe, expect, it } from 'vitest';
-import { shopInitials, ticketLabel, ticketSearchNumber } from '@/lib/ticket-number';
+import { shopInitials, ticketLabel, ticketSearchNumber } from '@/lib/shared/ticket-number';
 
 describe('ticketLabel', () => {
   it('writes the shop initials and the plain number, as on a paper ticket book', () => {

@@ -6,7 +6,7 @@ import { randomUUID } from 'node:crypto';
 import { eq, sql } from 'drizzle-orm';
 
 vi.mock('@/db', () => import('../db/db-mock'));
-vi.mock('@/lib/mail', () => ({ sendMail: vi.fn(async () => {}) }));
+vi.mock('@/lib/server/mail', () => ({ sendMail: vi.fn(async () => {}) }));
 
 const { db, handle } = await import('@/db');
 const { account, invitation, member, organization, session, user } = await import('@/db/schema');

@@ -6,7 +6,7 @@ import { eq, sql } from 'drizzle-orm';
 
 vi.mock('@/db', () => import('../db/db-mock'));
 // Nothing leaves the test: invitations are written by the tests themselves.
-vi.mock('@/lib/mail', () => ({ sendMail: vi.fn(async () => {}) }));
+vi.mock('@/lib/server/mail', () => ({ sendMail: vi.fn(async () => {}) }));
 
 const { db, handle } = await import('@/db');
 const { customers, invitation, member, organization, tickets, user } = await import('@/db/schema');

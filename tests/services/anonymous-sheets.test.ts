@@ -2,7 +2,7 @@
 // behind itself, and the queue refuses more rather than growing without end.
 import { describe, expect, it, vi } from 'vitest';
 import { inAnonymousQueue } from '@/services/anonymous-sheets';
-import { memberRequestStarted } from '@/lib/member-activity';
+import { memberRequestStarted } from '@/lib/server/member-activity';
 
 vi.mock('@/db', () => import('../db/db-mock'));
 

@@ -27,7 +27,7 @@ vi.mock('astro:env/server', () => ({
   BETTER_AUTH_URL: 'http://localhost:4321',
 }));
 // The real mail path minus astro:env: nodemailer over SMTP to whatever port the test points at.
-vi.mock('@/lib/mail', () => ({
+vi.mock('@/lib/server/mail', () => ({
   sendMail: async (m: { to: string; subject: string; text: string }) => {
     const transport = nodemailer.createTransport({ host: '127.0.0.1', port: mailTarget.port, secure: false, ignoreTLS: true, connectionTimeout: 2000 });
     await transport.sendMail({ from: 'Cuffwright <no-reply@cuffwright.test>', ...m });

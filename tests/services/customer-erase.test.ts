@@ -11,8 +11,8 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { auditEvents, customers, files, garments, payments, priceLines, tickets } = await import('@/db/schema');
-const { useStorage } = await import('@/lib/storage');
-const { DiskStorage } = await import('@/lib/storage/disk-storage');
+const { useStorage } = await import('@/lib/server/storage');
+const { DiskStorage } = await import('@/lib/server/storage/disk-storage');
 const { createCustomer, eraseCustomer, getCustomer, updateCustomer, customerFile } = await import('@/services/customers');
 const { createTicket } = await import('@/services/tickets');
 const { garmentsOfTicket } = await import('@/services/garments');

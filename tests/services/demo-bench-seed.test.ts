@@ -11,8 +11,8 @@ const { customers, tickets } = await import('@/db/schema');
 const { seedBenchDemo } = await import('@/services/demo-bench-seed');
 const { getGarment, listQueue } = await import('@/services/garments');
 const { fittingOf } = await import('@/services/measurements');
-const { GARMENT_STEPS, leastAdvanced } = await import('@/lib/garment-steps');
-const { todayIso } = await import('@/lib/due-date');
+const { GARMENT_STEPS, leastAdvanced } = await import('@/lib/shared/garment-steps');
+const { todayIso } = await import('@/lib/shared/due-date');
 const { makeShop } = await import('./fixtures');
 
 let shop: Shop;

@@ -9,7 +9,7 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { auditEvents, measurements } = await import('@/db/schema');
-const { intakeRequest, garmentPatch } = await import('@/lib/bench-requests');
+const { intakeRequest, garmentPatch } = await import('@/lib/shared/bench-requests');
 const tickets = await import('@/services/tickets');
 const garmentsSvc = await import('@/services/garments');
 const prices = await import('@/services/counter/prices');

@@ -14,7 +14,7 @@ const { createTicket } = await import('@/services/tickets');
 const { auditOf } = await import('@/services/audit');
 const { makeShop } = await import('./fixtures');
 const { createPreset } = await import('@/services/presets');
-const { ticketLabel } = await import('@/lib/ticket-number');
+const { ticketLabel } = await import('@/lib/shared/ticket-number');
 const { fittingRequest, openTicket, saveFitting } = await import('./garment-fixtures');
 
 let a: Shop;

@@ -11,7 +11,7 @@ const { handle } = await import('@/db');
 const { fittingOf } = await import('@/services/measurements');
 const { makeShop } = await import('./fixtures');
 const { fittingRequest, openTicket, saveFitting } = await import('./garment-fixtures');
-const { fieldsOf, FINISH_IDS } = await import('@/lib/fitting/kinds');
+const { fieldsOf, FINISH_IDS } = await import('@/lib/shared/fitting/kinds');
 const { garmentSheet } = await import('@/services/cut-sheets');
 const { flatText, pdfFile } = await import('../lib/cut-sheet/poppler');
 

@@ -2,8 +2,8 @@
 import { randomUUID } from 'node:crypto';
 import { db } from '@/db';
 import { member, organization, user } from '@/db/schema';
-import type { Actor } from '@/lib/api';
-import type { Role } from '@/lib/roles';
+import type { Actor } from '@/lib/server/api';
+import type { Role } from '@/lib/shared/roles';
 
 /** A new shop with one member per given role; returns an actor for each. */
 export async function makeShop(name: string, roles: Role[] = ['lead', 'tailor', 'apprentice', 'counter']) {

@@ -1,7 +1,7 @@
 // Shared fixtures for the garment service tests: tickets with a garment, fittings typed and saved.
-import type { Actor } from '@/lib/api';
-import type { IntakeInput } from '@/lib/bench-requests';
-import { blankLeg, measurementsRequest, type Finish } from '@/lib/measurement-request';
+import type { Actor } from '@/lib/server/api';
+import type { IntakeInput } from '@/lib/shared/bench-requests';
+import { blankLeg, measurementsRequest, type Finish } from '@/lib/shared/measurement-request';
 import { garmentsOfTicket } from '@/services/garments';
 import { readLengths, saveMeasurements } from '@/services/measurements';
 import { createTicket } from '@/services/tickets';

@@ -18,7 +18,7 @@ vi.mock('astro:env/server', () => ({
   SMS_API_BASE: undefined,
   BETTER_AUTH_URL: 'http://localhost:4321',
 }));
-vi.mock('@/lib/mail', () => ({
+vi.mock('@/lib/server/mail', () => ({
   sendMail: vi.fn(async (m: { to: string; subject: string; text: string }) => {
     if (mail.fail) throw new Error('connection refused (test)');
     mail.sent.push(m);

@@ -10,7 +10,7 @@ const { db, handle } = await import('@/db');
 const { auditEvents, customers, garments, payments, refunds, tickets } = await import('@/db/schema');
 const { shopOverview } = await import('@/services/overview');
 const { saveShopTimeZone, shopTimeZone } = await import('@/services/shop-time-zone');
-const { countByDay, dayBounds } = await import('@/lib/overview/shop-days');
+const { countByDay, dayBounds } = await import('@/lib/shared/overview/shop-days');
 const { makeShop } = await import('./fixtures');
 
 // Friday 27 Mar 2026, 10:00 in London (GMT): the week is Mon 23 … Sun 29 Mar.

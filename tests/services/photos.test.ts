@@ -13,8 +13,8 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');
 const { auditEvents, files, garments, tickets } = await import('@/db/schema');
-const { useStorage } = await import('@/lib/storage');
-const { DiskStorage } = await import('@/lib/storage/disk-storage');
+const { useStorage } = await import('@/lib/server/storage');
+const { DiskStorage } = await import('@/lib/server/storage/disk-storage');
 const svc = await import('@/services/photos');
 const { makeShop } = await import('./fixtures');
 const { gpsExif, sampleHeif, SAMPLE_EXIF_MAKE, SAMPLE_PICTURE, SAMPLE_XMP_MARK } = await import('../lib/storage/heif-sample');

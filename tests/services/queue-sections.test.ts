@@ -10,7 +10,7 @@ const { handle } = await import('@/db');
 const { moveGarment } = await import('@/services/garments');
 const { stepBackGarment } = await import('@/services/garment-step-back');
 const { readQueue, queueWhoOptions } = await import('@/services/queue');
-const { queueSection, workDueState } = await import('@/lib/queue-filter');
+const { queueSection, workDueState } = await import('@/lib/shared/queue-filter');
 const { makeShop } = await import('./fixtures');
 const { openTicket } = await import('./garment-fixtures');
 

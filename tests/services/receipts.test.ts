@@ -25,7 +25,7 @@ vi.mock('astro:env/server', () => ({
   SMS_API_BASE: undefined,
   BETTER_AUTH_URL: 'http://localhost:4321',
 }));
-vi.mock('@/lib/mail', () => ({ sendMail: vi.fn(async (mail: (typeof sent)[number]['mail'], origin: unknown) => void sent.push({ mail, origin })) }));
+vi.mock('@/lib/server/mail', () => ({ sendMail: vi.fn(async (mail: (typeof sent)[number]['mail'], origin: unknown) => void sent.push({ mail, origin })) }));
 vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');

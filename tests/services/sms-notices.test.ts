@@ -42,7 +42,7 @@ vi.mock('astro:env/server', () => ({
   SMS_FROM: '+15005550006',
   SMS_API_BASE: sms.fake.base,
 }));
-vi.mock('@/lib/mail', () => ({ sendMail: vi.fn(async (m: { to: string; subject: string; text: string }) => void mail.sent.push(m)) }));
+vi.mock('@/lib/server/mail', () => ({ sendMail: vi.fn(async (m: { to: string; subject: string; text: string }) => void mail.sent.push(m)) }));
 vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');

@@ -19,8 +19,8 @@ describe('start-up on existing data', () => {
     await db.insert(user).values({ id: 'existing-person', name: 'Wren Applegarth', email: 'wren@startup-loads.test' });
     const { ensureStarted, startedUp } = await import('@/services/startup');
     const { lookUpSession } = await import('@/services/session-lookup');
-    await import('@/lib/storage');
-    await import('@/lib/request-log');
+    await import('@/lib/server/storage');
+    await import('@/lib/server/request-log');
     await ensureStarted();
     expect(startedUp()).toBe(true);
     expect(await lookUpSession(new Headers())).toEqual({ user: null, member: null });

@@ -3,8 +3,8 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { resetInput } from '@/lib/account-inputs';
-import { fetchJson } from '@/lib/fetch-json';
+import { resetInput } from '@/lib/shared/account-inputs';
+import { fetchJson } from '@/lib/shared/fetch-json';
 import { withQuery } from '@/components/WithQuery';
 import { Field, FormMessage, SubmitButton } from '@/components/Field';
 

@@ -4,12 +4,12 @@ import { useForm, type Resolver } from 'react-hook-form';
 import type { z } from 'zod';
 import { Field, FormMessage, SubmitButton } from '@/components/Field';
 import { withQuery } from '@/components/WithQuery';
-import { SCALE_LABELS, SCALES, settingsRequest } from '@/lib/bench-requests';
-import type { BenchSettings } from '@/lib/bench-types';
-import { fetchJson } from '@/lib/fetch-json';
-import { FITTING_RULE_LABELS, FITTING_RULES } from '@/lib/fitting-rule';
-import { DEFAULT_STEP_LABELS, GARMENT_STEPS, stepLabel } from '@/lib/garment-steps';
-import { LANGUAGE_NAMES, LANGUAGES } from '@/lib/i18n/languages';
+import { SCALE_LABELS, SCALES, settingsRequest } from '@/lib/shared/bench-requests';
+import type { BenchSettings } from '@/lib/shared/bench-types';
+import { fetchJson } from '@/lib/shared/fetch-json';
+import { FITTING_RULE_LABELS, FITTING_RULES } from '@/lib/shared/fitting-rule';
+import { DEFAULT_STEP_LABELS, GARMENT_STEPS, stepLabel } from '@/lib/shared/garment-steps';
+import { LANGUAGE_NAMES, LANGUAGES } from '@/lib/shared/i18n/languages';
 import { useBenchSettings } from './use-bench';
 
 type Form = z.input<typeof settingsRequest>;

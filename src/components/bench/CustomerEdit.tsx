@@ -4,9 +4,9 @@ import { useForm, type Resolver } from 'react-hook-form';
 import type { z } from 'zod';
 import { Field, FormMessage, SubmitButton } from '@/components/Field';
 import { ContactByField } from '@/components/customers/ContactByField';
-import { customerPatch } from '@/lib/customer-request';
-import type { CustomerCard } from '@/lib/bench-types';
-import { ApiError, fetchJson } from '@/lib/fetch-json';
+import { customerPatch } from '@/lib/shared/customer-request';
+import type { CustomerCard } from '@/lib/shared/bench-types';
+import { ApiError, fetchJson } from '@/lib/shared/fetch-json';
 
 type Form = z.input<typeof customerPatch>;
 type Patch = z.output<typeof customerPatch>;

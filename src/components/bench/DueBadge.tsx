@@ -1,7 +1,7 @@
 import { useIntlLocale, useMaybeT } from '@/components/I18n';
-import { dueState, dueText, todayIso } from '@/lib/due-date';
-import type { GarmentStep } from '@/lib/garment-steps';
-import { workDueState } from '@/lib/queue-filter';
+import { dueState, dueText, todayIso } from '@/lib/shared/due-date';
+import type { GarmentStep } from '@/lib/shared/garment-steps';
+import { workDueState } from '@/lib/shared/queue-filter';
 
 /** A due date with "Overdue" or "Due today" standing out in words and colour, never colour alone;
  * given the garment's step, only work not yet ready is ever overdue or due today. */

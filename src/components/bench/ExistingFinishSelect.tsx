@@ -1,6 +1,6 @@
 import type { FieldError, UseFormRegisterReturn } from 'react-hook-form';
 import { describedBy, FieldFrame } from '@/components/Field';
-import { EXISTING_FINISHES, EXISTING_FINISH_LABELS } from '@/lib/existing-finish';
+import { EXISTING_FINISHES, EXISTING_FINISH_LABELS } from '@/lib/shared/existing-finish';
 
 const HINT = 'What the bottoms are now. An old cuff is let down and pressed out before the new finish is made.';
 

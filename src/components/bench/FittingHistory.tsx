@@ -1,11 +1,11 @@
-import { typedAndRead } from '@/lib/length-reading';
+import { typedAndRead } from '@/lib/shared/length-reading';
 import { isUnit } from '@/lib/allowance/units';
 import type { Precision, Unit } from '@/lib/allowance/types';
-import type { AuditEntry } from '@/lib/bench-types';
-import { dateTimeText } from '@/lib/date-text';
-import { EXISTING_FINISH_LABELS, type ExistingFinish } from '@/lib/existing-finish';
-import { isGarmentStep, type GarmentStep } from '@/lib/garment-steps';
-import { FINISH_LABELS, LEG_LENGTH_LABELS, LEG_LENGTHS, type Finish, type LegLength } from '@/lib/measurement-request';
+import type { AuditEntry } from '@/lib/shared/bench-types';
+import { dateTimeText } from '@/lib/shared/date-text';
+import { EXISTING_FINISH_LABELS, type ExistingFinish } from '@/lib/shared/existing-finish';
+import { isGarmentStep, type GarmentStep } from '@/lib/shared/garment-steps';
+import { FINISH_LABELS, LEG_LENGTH_LABELS, LEG_LENGTHS, type Finish, type LegLength } from '@/lib/shared/measurement-request';
 
 interface Props {
   history: AuditEntry[];

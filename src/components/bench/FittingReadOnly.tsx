@@ -1,9 +1,9 @@
 import { useState } from 'react';
 import { Segmented } from '@/components/calculator/Segmented';
-import { shopReading, typedWithUnit } from '@/lib/length-reading';
+import { shopReading, typedWithUnit } from '@/lib/shared/length-reading';
 import type { Precision, Unit } from '@/lib/allowance/types';
-import type { FittingView } from '@/lib/bench-types';
-import { FINISH_LABELS, LEG_LENGTH_LABELS, LEG_LENGTHS, LEGS, legFormValues, type Leg } from '@/lib/measurement-request';
+import type { FittingView } from '@/lib/shared/bench-types';
+import { FINISH_LABELS, LEG_LENGTH_LABELS, LEG_LENGTHS, LEGS, legFormValues, type Leg } from '@/lib/shared/measurement-request';
 import { LegPlan } from './LegPlan';
 
 interface Props {

@@ -3,9 +3,9 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useForm, type Resolver } from 'react-hook-form';
 import type { z } from 'zod';
 import { Field, FormMessage, SubmitButton } from '@/components/Field';
-import { garmentPatch } from '@/lib/bench-requests';
-import type { GarmentDetail } from '@/lib/bench-types';
-import { ApiError, fetchJson } from '@/lib/fetch-json';
+import { garmentPatch } from '@/lib/shared/bench-requests';
+import type { GarmentDetail } from '@/lib/shared/bench-types';
+import { ApiError, fetchJson } from '@/lib/shared/fetch-json';
 import { ExistingFinishSelect } from './ExistingFinishSelect';
 import { useAssignees } from './use-bench';
 

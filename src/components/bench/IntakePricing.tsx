@@ -1,11 +1,11 @@
 // Pricing at intake, for the counter and the lead: per garment the finish asked for (priced from the
 // list as an estimate until the fitting) and the lead's kinds of work; rush for the ticket; and the
 // estimate worked out with the same pure pricing as the server (lib/pricing), so it matches the ticket.
-import type { AsJson } from '@/lib/as-json';
-import type { PriceListView } from '@/lib/counter-views';
-import { INTAKE_FINISHES } from '@/lib/bench-requests';
-import { PART_LABELS } from '@/lib/fitting/kinds';
-import type { ExistingFinish } from '@/lib/existing-finish';
+import type { AsJson } from '@/lib/shared/as-json';
+import type { PriceListView } from '@/lib/shared/counter-views';
+import { INTAKE_FINISHES } from '@/lib/shared/bench-requests';
+import { PART_LABELS } from '@/lib/shared/fitting/kinds';
+import type { ExistingFinish } from '@/lib/shared/existing-finish';
 import { formatMoney } from '@/lib/pricing/money';
 import { isRushableWork, priceTicket, sumMinor, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
 

@@ -1,12 +1,12 @@
 import { useT } from '@/components/I18n';
-import type { MessageKey } from '@/lib/i18n/format';
+import type { MessageKey } from '@/lib/shared/i18n/format';
 import type { UseFormRegister } from 'react-hook-form';
 import { LengthInput } from '@/components/LengthInput';
 import { Segmented } from '@/components/calculator/Segmented';
 // The defaults module only (no parser, so no mathjs in the island).
 import { usualCuffDepthsText } from '@/lib/allowance/defaults';
-import { FIELD, fieldsOf, GROUPS, KINDS, partOf, type GroupId } from '@/lib/fitting/kinds';
-import { FINISHES, type Finish, type Leg, type LegLength, type MeasurementsInput } from '@/lib/measurement-request';
+import { FIELD, fieldsOf, GROUPS, KINDS, partOf, type GroupId } from '@/lib/shared/fitting/kinds';
+import { FINISHES, type Finish, type Leg, type LegLength, type MeasurementsInput } from '@/lib/shared/measurement-request';
 
 interface Props {
   leg: Leg;
@@ -41,7 +41,7 @@ function groupsOf(finish: Finish, letDown: boolean): { title: string; fields: Le
 export function LegFields({ leg, finish, unit, register, onFinish, errorFor, readingFor, letDown = false }: Props) {
   const t = useT();
   // Hints in the catalog's words (fieldHint.<key>); a field without one has none.
-  // The registry's words (src/lib/fitting/kinds.ts) through the catalog (field.<key>, fieldHint.<key>);
+  // The registry's words (src/lib/shared/fitting/kinds.ts) through the catalog (field.<key>, fieldHint.<key>);
   // a key the catalog lacks keeps the registry's English.
   const say = (key: string, english: string | undefined, values?: Record<string, string>) => {
     if (english === undefined) return undefined;

@@ -1,8 +1,8 @@
 import type { Precision, Unit } from '@/lib/allowance/types';
 import { PlanView } from '@/components/calculator/PlanView';
-import { readLength, typedWithUnit } from '@/lib/length-reading';
-import { frontPinNote } from '@/lib/leg-plan';
-import type { Leg, LegValues } from '@/lib/measurement-request';
+import { readLength, typedWithUnit } from '@/lib/shared/length-reading';
+import { frontPinNote } from '@/lib/shared/leg-plan';
+import type { Leg, LegValues } from '@/lib/shared/measurement-request';
 import { HemTaperCheck } from './HemTaperCheck';
 import { useLegPlan, type LegPlanState } from './use-leg-plan';
 

@@ -1,7 +1,7 @@
 import { useRich, useT } from '@/components/I18n';
-import { warningText } from '@/lib/i18n/engine-messages';
+import { warningText } from '@/lib/shared/i18n/engine-messages';
 import type { CuffPlan, HemPlan, PlanWarning } from '@/lib/allowance/types';
-import type { Leg } from '@/lib/measurement-request';
+import type { Leg } from '@/lib/shared/measurement-request';
 import type { LegPlanState } from './use-leg-plan';
 import { worstWarning } from './worst-warning';
 

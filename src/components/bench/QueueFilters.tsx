@@ -1,7 +1,7 @@
 import { useId, useRef, useState } from 'react';
-import type { WhoOption } from '@/lib/bench-types';
-import { GARMENT_STEPS, type GarmentStep } from '@/lib/garment-steps';
-import { DEFAULT_QUEUE_FILTER, type QueueFilter as Filters } from '@/lib/queue-filter';
+import type { WhoOption } from '@/lib/shared/bench-types';
+import { GARMENT_STEPS, type GarmentStep } from '@/lib/shared/garment-steps';
+import { DEFAULT_QUEUE_FILTER, type QueueFilter as Filters } from '@/lib/shared/queue-filter';
 
 interface Props {
   value: Filters;

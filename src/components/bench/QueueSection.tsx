@@ -10,7 +10,7 @@ import {
   type VisibilityState,
 } from '@tanstack/react-table';
 import { useRef, useState } from 'react';
-import type { QueueRow } from '@/lib/bench-types';
+import type { QueueRow } from '@/lib/shared/bench-types';
 
 /** A queue row as the table holds it: with its rank (own work, unassigned, the rest). */
 export type RankedRow = QueueRow & { rank: number };

@@ -1,4 +1,4 @@
-import { GARMENT_STEPS, type GarmentStep } from '@/lib/garment-steps';
+import { GARMENT_STEPS, type GarmentStep } from '@/lib/shared/garment-steps';
 
 /** A garment's stage in words, after a small row of tacks (one per stage, filled up to this one) as on a ticket's tear-off. */
 export function StageMarks({ status, label }: { status: GarmentStep; label: string }) {

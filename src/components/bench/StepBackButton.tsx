@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { previousStep, type GarmentStep } from '@/lib/garment-steps';
+import { previousStep, type GarmentStep } from '@/lib/shared/garment-steps';
 import { useStepLabel } from './use-bench';
 import { useStepBack } from './use-step-back';
 

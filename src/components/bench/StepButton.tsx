@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
-import type { GarmentDetail } from '@/lib/bench-types';
-import { fetchJson } from '@/lib/fetch-json';
-import { passesMarked } from '@/lib/fitting-rule';
-import { nextStep, type GarmentStep } from '@/lib/garment-steps';
+import type { GarmentDetail } from '@/lib/shared/bench-types';
+import { fetchJson } from '@/lib/shared/fetch-json';
+import { passesMarked } from '@/lib/shared/fitting-rule';
+import { nextStep, type GarmentStep } from '@/lib/shared/garment-steps';
 import { NoFittingAsk } from './NoFittingAsk';
 import { useStepLabel } from './use-bench';
 import { useFittingGate } from './use-fitting-gate';

@@ -2,9 +2,9 @@ import { useMaybeT } from '@/components/I18n';
 // The queries every bench island shares: the shop's settings and its people.
 import { useQuery } from '@tanstack/react-query';
 import { useCallback } from 'react';
-import type { BenchSettings, Person } from '@/lib/bench-types';
-import { fetchJson } from '@/lib/fetch-json';
-import { stepLabel, type GarmentStep } from '@/lib/garment-steps';
+import type { BenchSettings, Person } from '@/lib/shared/bench-types';
+import { fetchJson } from '@/lib/shared/fetch-json';
+import { stepLabel, type GarmentStep } from '@/lib/shared/garment-steps';
 
 /** The shop's bench settings (scale, step names). */
 export function useBenchSettings() {

@@ -2,8 +2,8 @@
 // what does the shop's rule say? 'warn' asks first (NoFittingAsk), 'refuse' says why here, before
 // the server would refuse the move anyway.
 import { useState } from 'react';
-import { noFittingRefusal, passesMarked } from '@/lib/fitting-rule';
-import type { GarmentStep } from '@/lib/garment-steps';
+import { noFittingRefusal, passesMarked } from '@/lib/shared/fitting-rule';
+import type { GarmentStep } from '@/lib/shared/garment-steps';
 import { useBenchSettings, useStepLabel } from './use-bench';
 
 /** The gate: `check(from, to, fitted, go)` runs `go` at once, after a confirm, or not at all (with `refused` said). */

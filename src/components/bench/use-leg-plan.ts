@@ -1,9 +1,9 @@
 // The live plan for one leg: the same POST /api/plan the public calculator uses, fed from the
 // leg's saved or being-edited values, the last good plan kept while a field is being fixed.
 import type { Precision, Unit } from '@/lib/allowance/types';
-import { legHemTaperRequest, legMainRequest, legTaperRequest } from '@/lib/leg-plan';
-import type { LegValues } from '@/lib/measurement-request';
-import type { PlanRequestInput } from '@/lib/plan-request';
+import { legHemTaperRequest, legMainRequest, legTaperRequest } from '@/lib/shared/leg-plan';
+import type { LegValues } from '@/lib/shared/measurement-request';
+import type { PlanRequestInput } from '@/lib/shared/plan-request';
 import type { Problem } from '@/components/calculator/PlanView';
 import { usePlan } from '@/components/calculator/use-plan';
 import { useLastGoodPlan } from '@/components/calculator/use-last-good-plan';

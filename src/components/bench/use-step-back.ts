@@ -1,7 +1,7 @@
 // Stepping a garment back one step: the queue's Undo after a tap and the garment page's Step back.
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { fetchJson } from '@/lib/fetch-json';
-import type { GarmentStep } from '@/lib/garment-steps';
+import { fetchJson } from '@/lib/shared/fetch-json';
+import type { GarmentStep } from '@/lib/shared/garment-steps';
 
 /** A mutation moving the garment back from the step it was seen at; everything shown is refreshed after. */
 export function useStepBack(garmentId: string) {

@@ -1,10 +1,10 @@
 import { useState, type SubmitEvent } from 'react';
 import { useT } from '@/components/I18n';
 import type { Precision, Unit } from '@/lib/allowance/types';
-import { checkPlanRequest } from '@/lib/plan-check';
-import type { PlanRequestInput } from '@/lib/plan-request';
+import { checkPlanRequest } from '@/lib/shared/plan-check';
+import type { PlanRequestInput } from '@/lib/shared/plan-request';
 import { BLANK, LENGTH_FIELDS, mainRequest, taperRequest, type CalculatorValues, type LengthField } from './calculator-values';
-import { convertTyped, readLength } from '@/lib/length-reading';
+import { convertTyped, readLength } from '@/lib/shared/length-reading';
 import { CuffFields } from './CuffFields';
 import { HemFields } from './HemFields';
 import type { Bind, FieldInfo } from './LengthField';

@@ -1,5 +1,5 @@
 import { useT } from '@/components/I18n';
-import { creaseText } from '@/lib/i18n/engine-messages';
+import { creaseText } from '@/lib/shared/i18n/engine-messages';
 import type { CreaseLanding } from '@/lib/allowance/types';
 
 /** Where the old hem's crease ends up once the cuff is made, and whether it will show. */

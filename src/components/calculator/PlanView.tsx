@@ -1,5 +1,5 @@
 import { useT } from '@/components/I18n';
-import type { PlanResponse } from '@/lib/plan-request';
+import type { PlanResponse } from '@/lib/shared/plan-request';
 import type { TaperPlan } from '@/lib/allowance/types';
 import { ChalkLines } from './ChalkLines';
 import { ClothCheck, NoFit } from './ClothCheck';

@@ -1,5 +1,5 @@
 import { useId, useState } from 'react';
-import type { PageSize } from '@/lib/cut-sheet/types';
+import type { PageSize } from '@/lib/shared/cut-sheet-types';
 import { PrintOutcome, usePrintSheet } from '@/components/cut-sheets/use-print-sheet';
 import { useLanguage, useT } from '@/components/I18n';
 

@@ -1,6 +1,6 @@
 import { useT } from '@/components/I18n';
 import type { Unit } from '@/lib/allowance/types';
-import type { MessageKey } from '@/lib/i18n/format';
+import type { MessageKey } from '@/lib/shared/i18n/format';
 
 const PICKS: Record<Unit, { value: string; label: string; note: string }[]> = {
   in: [

@@ -1,6 +1,6 @@
 import { useT } from '@/components/I18n';
 import type { PlanWarning } from '@/lib/allowance/types';
-import { warningText } from '@/lib/i18n/engine-messages';
+import { warningText } from '@/lib/shared/i18n/engine-messages';
 
 interface Props {
   warnings: PlanWarning[];

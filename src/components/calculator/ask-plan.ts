@@ -1,6 +1,6 @@
 // One call to POST /api/plan through the shared fetchJson: a plan, or the API's messages about the input.
-import { ApiError, fetchJson } from '@/lib/fetch-json';
-import type { PlanResponse } from '@/lib/plan-request';
+import { ApiError, fetchJson } from '@/lib/shared/fetch-json';
+import type { PlanResponse } from '@/lib/shared/plan-request';
 
 /** What the calculator makes of one answer: a plan, or the API's message per field. */
 export type PlanAnswer = { ok: true; plan: PlanResponse } | { ok: false; error: string; issues: Record<string, string> };

@@ -2,9 +2,9 @@
 // into which plan is the fitting registry's (the bench's leg plans read the same); the calculator
 // adds only the turn of cloth, which the bench does not ask.
 import type { Precision, Unit } from '@/lib/allowance/types';
-import { engineFields, FIELD_KEYS, type FieldKey } from '@/lib/fitting/kinds';
-import { givenLengths, planLengths, planScale } from '@/lib/fitting/plan-lengths';
-import type { PlanRequestInput } from '@/lib/plan-request';
+import { engineFields, FIELD_KEYS, type FieldKey } from '@/lib/shared/fitting/kinds';
+import { givenLengths, planLengths, planScale } from '@/lib/shared/fitting/plan-lengths';
+import type { PlanRequestInput } from '@/lib/shared/plan-request';
 
 /** The name of one length field of the form: a registry field, or the turn of cloth. */
 export type LengthField = FieldKey | 'clothThickness';

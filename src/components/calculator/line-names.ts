@@ -1,5 +1,5 @@
 import type { CuffLineName, HemLineName } from '@/lib/allowance/types';
-import type { Translate } from '@/lib/i18n/format';
+import type { Translate } from '@/lib/shared/i18n/format';
 
 /** The chalk lines' names as the bench says them. */
 export const LINE_NAMES: Record<CuffLineName | HemLineName, string> = {

@@ -1,5 +1,5 @@
 // A taper line's seam work as the calculator shows it, rounded the way the cut sheet prints it
-// (src/lib/cut-sheet/printed.ts): each side to the nearest half step in inches (the seam then stays
+// (src/lib/server/cut-sheet/printed.ts): each side to the nearest half step in inches (the seam then stays
 // on the shop's step) or to 0.5 mm, and the seam twice that, so per side × 2 = per seam as shown.
 // The words say let out or take in; the figures are sizes, never signed.
 import { formatLength } from '@/lib/allowance/format-length';

@@ -2,7 +2,7 @@
 // good one stays, so the chalk lines do not vanish at every half-typed length. One rule for the
 // calculator and the garment page's leg plan.
 import { useState } from 'react';
-import type { PlanResponse } from '@/lib/plan-request';
+import type { PlanResponse } from '@/lib/shared/plan-request';
 import type { PlanAnswer } from './ask-plan';
 
 /** What a plan query holds: its answer, and whether that answer is still the previous request's. */

@@ -4,8 +4,8 @@
 // last answer stays on screen while the next one is on its way, so the numbers never blink out
 // between keystrokes; answers are kept by request, so going back to an earlier entry is instant.
 import { useEffect, useState } from 'react';
-import { checkPlanRequest } from '@/lib/plan-check';
-import type { PlanRequestInput } from '@/lib/plan-request';
+import { checkPlanRequest } from '@/lib/shared/plan-check';
+import type { PlanRequestInput } from '@/lib/shared/plan-request';
 import { askPlan, type PlanAnswer } from './ask-plan';
 
 export { askPlan, type PlanAnswer };

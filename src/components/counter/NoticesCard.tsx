@@ -1,10 +1,10 @@
 // Notices to the customer: what was sent by e-mail or text, what failed and why (and what the SMS
 // service reported back), retry, and the ready notice button.
-import type { NoticeJson as Notice } from '@/lib/counter-views';
+import type { NoticeJson as Notice } from '@/lib/shared/counter-views';
 import { FormMessage } from '@/components/Field';
-import { dateTimeText } from '@/lib/date-text';
-import { PREFERENCE_LABEL, plannedSends, type ContactPreference } from '@/lib/contact-channels';
-import type { CounterSummaryJson as CounterSummary } from '@/lib/counter-views';
+import { dateTimeText } from '@/lib/shared/date-text';
+import { PREFERENCE_LABEL, plannedSends, type ContactPreference } from '@/lib/shared/contact-channels';
+import type { CounterSummaryJson as CounterSummary } from '@/lib/shared/counter-views';
 import { post, useCounterAction, useNotices } from './counter-api';
 
 const STATE: Record<Notice['status'], { text: string; look: string }> = {

@@ -1,9 +1,9 @@
 // The price list's history for the lead: who changed which line, when, and each old → new value.
 import { useQuery } from '@tanstack/react-query';
 import { FormMessage } from '@/components/Field';
-import type { PriceChange } from '@/lib/counter-views';
-import { dateTimeText } from '@/lib/date-text';
-import { fetchJson } from '@/lib/fetch-json';
+import type { PriceChange } from '@/lib/shared/counter-views';
+import { dateTimeText } from '@/lib/shared/date-text';
+import { fetchJson } from '@/lib/shared/fetch-json';
 import { formatMoney, type Currency } from '@/lib/pricing/money';
 
 const FIELD: Record<PriceChange['changes'][number]['field'], string> = { name: 'name', amountMinor: 'price', rushApplies: 'rush applies', retired: 'retired' };

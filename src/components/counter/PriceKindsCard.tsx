@@ -5,10 +5,10 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Field, FormMessage } from '@/components/Field';
-import { priceKindInput } from '@/lib/counter-request';
-import type { AsJson } from '@/lib/as-json';
-import type { PriceKindView, PriceListView } from '@/lib/counter-views';
-import { fetchJson } from '@/lib/fetch-json';
+import { priceKindInput } from '@/lib/shared/counter-request';
+import type { AsJson } from '@/lib/shared/as-json';
+import type { PriceKindView, PriceListView } from '@/lib/shared/counter-views';
+import { fetchJson } from '@/lib/shared/fetch-json';
 import type { Currency } from '@/lib/pricing/money';
 import { MoneyField } from './MoneyField';
 

@@ -1,10 +1,10 @@
 // The counter panel's queries and mutations: one place for the URLs and the cache keys.
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { NoticeJson as Notice } from '@/lib/counter-views';
-import { fetchJson } from '@/lib/fetch-json';
-import type { PriceListView } from '@/lib/counter-views';
-import type { AsJson } from '@/lib/as-json';
-import type { CounterSummaryJson as CounterSummary } from '@/lib/counter-views';
+import type { NoticeJson as Notice } from '@/lib/shared/counter-views';
+import { fetchJson } from '@/lib/shared/fetch-json';
+import type { PriceListView } from '@/lib/shared/counter-views';
+import type { AsJson } from '@/lib/shared/as-json';
+import type { CounterSummaryJson as CounterSummary } from '@/lib/shared/counter-views';
 
 /** The ticket's money: lines, total, payments, balance, link. */
 export function useSummary(ticketId: string) {

@@ -1,7 +1,7 @@
 // How the customer wants notices and pay links: e-mail, text message or both (radio buttons wired
 // to react-hook-form), shown where the customer's details are typed: intake and the customer edit.
 import type { FieldError, UseFormRegisterReturn } from 'react-hook-form';
-import { CONTACT_PREFERENCES, PREFERENCE_LABEL } from '@/lib/contact-channels';
+import { CONTACT_PREFERENCES, PREFERENCE_LABEL } from '@/lib/shared/contact-channels';
 
 /** The contact preference as three radio buttons, with its error (texts need a phone number). */
 export function ContactByField({ id, registration, error }: { id: string; registration: UseFormRegisterReturn; error?: FieldError }) {

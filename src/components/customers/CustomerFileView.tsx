@@ -3,10 +3,10 @@ import { useState } from 'react';
 import { FormMessage } from '@/components/Field';
 import { CustomerEdit } from '@/components/bench/CustomerEdit';
 import { useStepLabel } from '@/components/bench/use-bench';
-import type { CustomerFile } from '@/lib/customer-types';
-import { dateTimeText } from '@/lib/date-text';
-import { PREFERENCE_LABEL } from '@/lib/contact-channels';
-import { fetchJson } from '@/lib/fetch-json';
+import type { CustomerFile } from '@/lib/shared/customer-types';
+import { dateTimeText } from '@/lib/shared/date-text';
+import { PREFERENCE_LABEL } from '@/lib/shared/contact-channels';
+import { fetchJson } from '@/lib/shared/fetch-json';
 import { formatMoney, isCurrency } from '@/lib/pricing/money';
 
 const FIELD_NAMES: Record<string, string> = { name: 'name', phone: 'phone', email: 'e-mail', notes: 'notes', contactBy: 'notices by' };

@@ -1,5 +1,5 @@
 import { useId, useState, type KeyboardEvent } from 'react';
-import type { CustomerHit } from '@/lib/customer-types';
+import type { CustomerHit } from '@/lib/shared/customer-types';
 import { useCustomerSearch } from './use-customer-search';
 
 interface Props {

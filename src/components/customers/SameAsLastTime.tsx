@@ -1,8 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
-import type { PreviousFitting } from '@/lib/customer-types';
-import { dateTimeText } from '@/lib/date-text';
-import { fetchJson } from '@/lib/fetch-json';
-import { FINISH_LABELS } from '@/lib/measurement-request';
+import type { PreviousFitting } from '@/lib/shared/customer-types';
+import { dateTimeText } from '@/lib/shared/date-text';
+import { fetchJson } from '@/lib/shared/fetch-json';
+import { FINISH_LABELS } from '@/lib/shared/measurement-request';
 
 /** The customer's earlier fittings (GET /api/customers/[id]/fittings), shared by every garment row. */
 export function usePreviousFittings(customerId: string | null) {

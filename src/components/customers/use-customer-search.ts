@@ -1,7 +1,7 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { useDebounced } from '@/components/calculator/use-debounced';
-import type { CustomerHit } from '@/lib/customer-types';
-import { fetchJson } from '@/lib/fetch-json';
+import type { CustomerHit } from '@/lib/shared/customer-types';
+import { fetchJson } from '@/lib/shared/fetch-json';
 
 /** Customers found by what is typed, asked of the server once typing pauses (250 ms). `current`
  * is true only when the answer is for the text as it stands now, so Enter never picks from the

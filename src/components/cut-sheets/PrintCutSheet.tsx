@@ -1,6 +1,6 @@
 import { useT } from '@/components/I18n';
 import { useId, useState } from 'react';
-import { SCALE_LABELS, SCALES, scaleUnit, type Scale } from '@/lib/bench-requests';
+import { SCALE_LABELS, SCALES, scaleUnit, type Scale } from '@/lib/shared/bench-requests';
 import { PrintOutcome, usePrintSheet } from './use-print-sheet';
 
 interface Props {

@@ -1,7 +1,7 @@
 // Printing a cut sheet from a screen: the PDF is fetched, not followed as a link, so a refusal (no
 // fitting, a length the plan cannot use) is said in the page in words instead of a page of JSON.
 import { useEffect, useState } from 'react';
-import { ApiError } from '@/lib/fetch-json';
+import { ApiError } from '@/lib/shared/fetch-json';
 
 /** Where a print stands: nothing yet, on its way, the sheet (and whether the new tab opened), or why not. */
 export type PrintState = { status: 'idle' } | { status: 'busy' } | { status: 'done'; url: string; opened: boolean } | { status: 'error'; message: string };

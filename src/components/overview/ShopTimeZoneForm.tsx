@@ -4,8 +4,8 @@ import { useForm, type Resolver } from 'react-hook-form';
 import type { z } from 'zod';
 import { FormMessage, SubmitButton } from '@/components/Field';
 import { withQuery } from '@/components/WithQuery';
-import { fetchJson } from '@/lib/fetch-json';
-import { timeZoneRequest } from '@/lib/time-zone-request';
+import { fetchJson } from '@/lib/shared/fetch-json';
+import { timeZoneRequest } from '@/lib/shared/time-zone-request';
 
 type Form = z.input<typeof timeZoneRequest>;
 type Saved = { timeZone: string; chosen: boolean };

@@ -3,8 +3,8 @@ import { QueryClientContext, useMutation, useQuery, useQueryClient } from '@tans
 import { useContext, useId, type ChangeEvent } from 'react';
 import { FormMessage } from '@/components/Field';
 import { withQuery } from '@/components/WithQuery';
-import { fetchJson } from '@/lib/fetch-json';
-import { PHOTO_ACCEPT, type PhotoList } from '@/lib/photo-view';
+import { fetchJson } from '@/lib/shared/fetch-json';
+import { PHOTO_ACCEPT, type PhotoList } from '@/lib/shared/photo-view';
 import { PhotoThumb } from './PhotoThumb';
 import { uploadPhotos } from './upload-photos';
 

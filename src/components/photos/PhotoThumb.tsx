@@ -1,6 +1,6 @@
 import { useState } from 'react';
-import { dateTimeText } from '@/lib/date-text';
-import type { PhotoView } from '@/lib/photo-view';
+import { dateTimeText } from '@/lib/shared/date-text';
+import type { PhotoView } from '@/lib/shared/photo-view';
 
 /** One thumbnail linking to the full photo, with a remove button when allowed. */
 export function PhotoThumb({ photo, onRemove }: { photo: PhotoView; onRemove?: () => void }) {

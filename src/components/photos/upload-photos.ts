@@ -1,5 +1,5 @@
-import { fetchJson } from '@/lib/fetch-json';
-import type { PhotoView } from '@/lib/photo-view';
+import { fetchJson } from '@/lib/shared/fetch-json';
+import type { PhotoView } from '@/lib/shared/photo-view';
 
 /** Uploads the files to the garment as a multipart form; throws ApiError with the server's message. */
 export function uploadPhotos(garmentId: string, photos: File[]): Promise<PhotoView[]> {

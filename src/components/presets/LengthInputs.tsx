@@ -1,7 +1,7 @@
 import type { UseFormRegister, FieldErrors } from 'react-hook-form';
 import { Field } from '@/components/Field';
-import { FIELD, type Part } from '@/lib/fitting/kinds';
-import { LENGTHS_OF, PRESET_LENGTHS } from '@/lib/preset-settings';
+import { FIELD, type Part } from '@/lib/shared/fitting/kinds';
+import { LENGTHS_OF, PRESET_LENGTHS } from '@/lib/shared/preset-settings';
 
 type WithSettings = { settings: Record<string, unknown> };
 

@@ -5,9 +5,9 @@ import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Segmented } from '@/components/calculator/Segmented';
 import { Field, FormMessage, SubmitButton } from '@/components/Field';
-import { ApiError } from '@/lib/fetch-json';
-import { presetCreateInput, type PresetView } from '@/lib/preset-settings';
-import { PART_IDS, PART_LABELS } from '@/lib/fitting/kinds';
+import { ApiError } from '@/lib/shared/fetch-json';
+import { presetCreateInput, type PresetView } from '@/lib/shared/preset-settings';
+import { PART_IDS, PART_LABELS } from '@/lib/shared/fitting/kinds';
 import { LengthInputs } from './LengthInputs';
 import { useCreatePreset, useUpdatePreset } from './use-presets';
 

@@ -1,9 +1,9 @@
 // A preset's kept edits, read when opened: who changed which field, when, old → new.
 import { useQuery } from '@tanstack/react-query';
-import { dateTimeText } from '@/lib/date-text';
-import { fetchJson } from '@/lib/fetch-json';
-import { PRESET_FIELDS, type PresetChange, type PresetView } from '@/lib/preset-settings';
-import { PART_LABELS } from '@/lib/fitting/kinds';
+import { dateTimeText } from '@/lib/shared/date-text';
+import { fetchJson } from '@/lib/shared/fetch-json';
+import { PRESET_FIELDS, type PresetChange, type PresetView } from '@/lib/shared/preset-settings';
+import { PART_LABELS } from '@/lib/shared/fitting/kinds';
 
 const FINISH_WORDS: Record<string, string> = PART_LABELS;
 

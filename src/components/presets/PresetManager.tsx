@@ -2,7 +2,7 @@
 // (the lead's house presets, everyone's own), and read each one's history.
 import { useState } from 'react';
 import { FormMessage } from '@/components/Field';
-import type { PresetView } from '@/lib/preset-settings';
+import type { PresetView } from '@/lib/shared/preset-settings';
 import { PresetForm } from './PresetForm';
 import { PresetHistory } from './PresetHistory';
 import { PresetSummary } from './PresetSummary';

@@ -3,12 +3,12 @@
 import { QueryClientContext } from '@tanstack/react-query';
 import { useContext, useEffect, useState } from 'react';
 import { withQuery } from '@/components/WithQuery';
-import type { PresetSettings, PresetView } from '@/lib/preset-settings';
+import type { PresetSettings, PresetView } from '@/lib/shared/preset-settings';
 import { PresetSummary } from './PresetSummary';
 import { SavePresetForm } from './SavePresetForm';
 import { usePresets } from './use-presets';
 
-export type { PresetSettings } from '@/lib/preset-settings';
+export type { PresetSettings } from '@/lib/shared/preset-settings';
 
 interface Props {
   /** the unit the plan is in: presets in it are listed first */

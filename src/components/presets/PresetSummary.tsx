@@ -1,5 +1,5 @@
-import { PART_LABELS } from '@/lib/fitting/kinds';
-import { LENGTHS_OF, PRESET_LENGTHS, type PresetSettings } from '@/lib/preset-settings';
+import { PART_LABELS } from '@/lib/shared/fitting/kinds';
+import { LENGTHS_OF, PRESET_LENGTHS, type PresetSettings } from '@/lib/shared/preset-settings';
 
 const UNIT_TEXT = { in: 'in', cm: 'cm', mm: 'mm' } as const;
 

@@ -3,7 +3,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Field, FormMessage, SubmitButton } from '@/components/Field';
-import { presetCreateInput, type PresetSettings, type PresetView } from '@/lib/preset-settings';
+import { presetCreateInput, type PresetSettings, type PresetView } from '@/lib/shared/preset-settings';
 import { PresetSummary } from './PresetSummary';
 import { useCreatePreset } from './use-presets';
 

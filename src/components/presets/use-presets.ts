@@ -1,8 +1,8 @@
 // The presets the signed-in person sees, and the changes they can make, through the API.
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { fetchJson } from '@/lib/fetch-json';
-import type { PresetView, presetCreateInput, presetUpdateInput } from '@/lib/preset-settings';
+import { fetchJson } from '@/lib/shared/fetch-json';
+import type { PresetView, presetCreateInput, presetUpdateInput } from '@/lib/shared/preset-settings';
 
 const KEY = ['presets'];
 

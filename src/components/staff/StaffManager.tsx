@@ -1,13 +1,13 @@
-import { DEFAULT_LOCALE } from '@/lib/i18n/languages';
+import { DEFAULT_LOCALE } from '@/lib/shared/i18n/languages';
 // The lead's staff screen: who works here, pending invitations, invite, change role, remove.
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import { inviteInput } from '@/lib/account-inputs';
-import { fetchJson } from '@/lib/fetch-json';
-import { ROLES, ROLE_LABELS, type Role } from '@/lib/roles';
-import type { PendingInvite, StaffMember } from '@/lib/staff-views';
+import { inviteInput } from '@/lib/shared/account-inputs';
+import { fetchJson } from '@/lib/shared/fetch-json';
+import { ROLES, ROLE_LABELS, type Role } from '@/lib/shared/roles';
+import type { PendingInvite, StaffMember } from '@/lib/shared/staff-views';
 import { withQuery } from '@/components/WithQuery';
 import { Field, FormMessage, SubmitButton } from '@/components/Field';
 

@@ -2,7 +2,7 @@
 import { sql, type SQL } from 'drizzle-orm';
 import { pgTable, text, timestamp, uuid, index } from 'drizzle-orm/pg-core';
 import { createSelectSchema } from 'drizzle-zod';
-import { CONTACT_PREFERENCES } from '../../lib/contact-channels';
+import { CONTACT_PREFERENCES } from '../../lib/shared/contact-channels';
 import { organization } from './auth';
 
 /** Customers, each belonging to one shop. */

@@ -1,4 +1,4 @@
-// Stored files such as fitting photos: the bytes live in the storage (src/lib/storage), keyed by
+// Stored files such as fitting photos: the bytes live in the storage (src/lib/server/storage), keyed by
 // `path`; the sanitised original name is kept only to show.
 import { pgTable, text, timestamp, uuid, integer, index } from 'drizzle-orm/pg-core';
 import { createSelectSchema } from 'drizzle-zod';

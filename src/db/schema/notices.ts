@@ -2,7 +2,7 @@
 // a failed send stays visible and is retried.
 import { index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { createSelectSchema } from 'drizzle-zod';
-import { CHANNELS } from '../../lib/contact-channels';
+import { CHANNELS } from '../../lib/shared/contact-channels';
 import { organization, user } from './auth';
 import { tickets } from './tickets';
 

@@ -3,7 +3,7 @@ import { sql } from 'drizzle-orm';
 import { pgTable, text, timestamp, uuid, jsonb, index, boolean, uniqueIndex } from 'drizzle-orm/pg-core';
 import { createSelectSchema } from 'drizzle-zod';
 // Relative, not '@/': drizzle-kit reads this file without the app's path aliases.
-import { presetSettings, type PresetSettings } from '../../lib/preset-settings';
+import { presetSettings, type PresetSettings } from '../../lib/shared/preset-settings';
 import { organization, user } from './auth';
 
 /** Presets: named plan settings, either the shop's (ownerId null) or one person's. */

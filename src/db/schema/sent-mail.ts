@@ -1,7 +1,7 @@
 // Every message the app handed to the SMTP host, with the shop that caused it: a shop's list of
 // sent messages is read from here (never by matching addresses a shop typed in, which anyone can).
 import { index, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import { CHANNELS } from '../../lib/contact-channels';
+import { CHANNELS } from '../../lib/shared/contact-channels';
 import { organization } from './auth';
 
 /** What a message was: shop mail (invitation, ready notice, receipt) or account mail (password reset). */

@@ -4,10 +4,10 @@ import { pgTable, text, timestamp, uuid, index, integer, jsonb, date, uniqueInde
 import { sql } from 'drizzle-orm';
 import { createSelectSchema } from 'drizzle-zod';
 import { z } from 'zod';
-import { DEFAULT_EXISTING_FINISH, EXISTING_FINISHES } from '../../lib/existing-finish';
-import { GARMENT_STEPS, type GarmentStep } from '../../lib/garment-steps';
-import { FITTING_RULES } from '../../lib/fitting-rule';
-import { LANGUAGES } from '../../lib/i18n/languages';
+import { DEFAULT_EXISTING_FINISH, EXISTING_FINISHES } from '../../lib/shared/existing-finish';
+import { GARMENT_STEPS, type GarmentStep } from '../../lib/shared/garment-steps';
+import { FITTING_RULES } from '../../lib/shared/fitting-rule';
+import { LANGUAGES } from '../../lib/shared/i18n/languages';
 import { organization, user } from './auth';
 import { customers } from './customers';
 import { presets } from './presets';
@@ -25,7 +25,7 @@ export const tickets = pgTable(
     shopId: text('shop_id')
       .notNull()
       .references(() => organization.id, { onDelete: 'cascade' }),
-    /** said at the counter with the shop's initials (lib/ticket-number.ts): PH 1001, PH 1002 … per shop */
+    /** said at the counter with the shop's initials (lib/shared/ticket-number.ts): PH 1001, PH 1002 … per shop */
     number: integer('number').notNull(),
     customerId: uuid('customer_id').references(() => customers.id, { onDelete: 'set null' }),
     status: text('status', { enum: GARMENT_STEPS }).notNull().default('received'),
@@ -100,7 +100,7 @@ export const measurements = pgTable(
     preset: text('preset'),
     /** the preset applied (house or the taker's own, same shop): its current name is shown through it */
     presetId: uuid('preset_id').references(() => presets.id, { onDelete: 'set null' }),
-    /** { field: { text, mm } } for each length given (see src/lib/measurement-request.ts) */
+    /** { field: { text, mm } } for each length given (see src/lib/shared/measurement-request.ts) */
     values: jsonb('values').notNull().default({}),
     takenById: text('taken_by_id').references(() => user.id, { onDelete: 'set null' }),
     takenAt: timestamp('taken_at', { withTimezone: true }).defaultNow().notNull(),
@@ -117,11 +117,11 @@ export const shopSettings = pgTable('shop_settings', {
     .notNull()
     .default('in8'),
   stepLabels: jsonb('step_labels').notNull().default({}),
-  /** the shop's IANA time zone, where its days begin and end; null: DEFAULT_TIME_ZONE (src/lib/overview/shop-days.ts) */
+  /** the shop's IANA time zone, where its days begin and end; null: DEFAULT_TIME_ZONE (src/lib/shared/overview/shop-days.ts) */
   timeZone: text('time_zone'),
   /** a garment passing Chalk-marked with no fitting saved: 'warn' (a confirm on screen) or 'refuse' (the server says no) */
   fittingRule: text('fitting_rule', { enum: FITTING_RULES }).notNull().default('warn'),
-  /** the language of the shop's screens and cut sheets (src/lib/i18n); dates and money follow it */
+  /** the language of the shop's screens and cut sheets (src/lib/server/i18n); dates and money follow it */
   language: text('language', { enum: LANGUAGES }).notNull().default('en'),
   updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull(),
 });

@@ -21,7 +21,7 @@ export interface Len {
 /** A warning in words a tailor understands. */
 export interface PlanWarning {
   code: WarningCode;
-  /** the English sentence (the API's); screens and sheets render `code` and `values` through the catalog (src/lib/i18n) */
+  /** the English sentence (the API's); screens and sheets render `code` and `values` through the catalog (src/lib/server/i18n) */
   message: string;
   /** the message's figures as shown ("1 1/2 in") and its variant, for rendering it in any language */
   values: Record<string, string>;

@@ -1,6 +1,6 @@
 // Pure price computation: garments (finish, taper, old cuff) and the shop's list in, lines out.
 // No database, no dates, no rounding: amounts are integer minor units and are only added.
-import type { Part } from '../fitting/kinds';
+import type { Part } from '../shared/fitting/kinds';
 import type { PriceKey } from './price-keys';
 
 /** What the pricing needs to know about one garment, read from its measurements and plan. */

@@ -1,5 +1,5 @@
 // The people of the shop a garment can be given to, for the pickers on the bench screens.
-import { route } from '@/lib/route';
+import { route } from '@/lib/server/route';
 import { staffOf } from '@/services/garments';
 
 /** The shop's people by name, with their roles. */

@@ -1,6 +1,6 @@
 // The shop's bench settings: the measuring scale and its own names for the steps.
-import { route } from '@/lib/route';
-import { settingsRequest } from '@/lib/bench-requests';
+import { route } from '@/lib/server/route';
+import { settingsRequest } from '@/lib/shared/bench-requests';
 import { benchSettings, saveBenchSettings } from '@/services/shop-settings';
 
 /** The shop's scale and step names (everyone at the bench reads them). */

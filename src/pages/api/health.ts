@@ -1,8 +1,8 @@
 // For a load balancer or a deploy script: 200 when this server's database answers, its
 // migrations are current and its start-up work (the demo seed included) is done, 503 otherwise;
 // no session needed, no shop data in it.
-import { json } from '@/lib/api';
-import { route } from '@/lib/route';
+import { json } from '@/lib/server/api';
+import { route } from '@/lib/server/route';
 import { health } from '@/services/health';
 import { startedUp } from '@/services/startup';
 

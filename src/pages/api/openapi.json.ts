@@ -1,7 +1,7 @@
 // GET /api/openapi.json: the API described (OpenAPI 3.1), generated from the routes' own
 // declarations; /api-reference shows the same document as a page.
-import { json } from '@/lib/api';
-import { route } from '@/lib/route';
+import { json } from '@/lib/server/api';
+import { route } from '@/lib/server/route';
 
 /** The OpenAPI 3.1 document of every route. */
 export const GET = route({ summary: 'This document: every route, its permission, body, query and examples (OpenAPI 3.1).', permission: 'public' }, async () => {

@@ -1,7 +1,7 @@
 // The shop's overview per day as a CSV download (lead).
-import { overviewCsv, overviewCsvName } from '@/lib/overview/overview-csv';
-import { periodQuery } from '@/lib/overview/period-request';
-import { route } from '@/lib/route';
+import { overviewCsv, overviewCsvName } from '@/lib/shared/overview/overview-csv';
+import { periodQuery } from '@/lib/shared/overview/period-request';
+import { route } from '@/lib/server/route';
 import { shopOverview } from '@/services/overview';
 
 /** text/csv for `?period=week|4w`, named after the period's first and last day. */

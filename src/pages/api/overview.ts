@@ -1,6 +1,6 @@
 // The shop's week at a glance as JSON (lead): the figures behind /overview.
-import { periodQuery } from '@/lib/overview/period-request';
-import { route } from '@/lib/route';
+import { periodQuery } from '@/lib/shared/overview/period-request';
+import { route } from '@/lib/server/route';
 import { shopOverview } from '@/services/overview';
 
 /** The overview for `?period=week|4w` (this week when not said); 422 for another period. */

@@ -11,9 +11,9 @@ import {
   validateHemTaperInput,
   validateTaperInput,
 } from '@/lib/allowance';
-import { json, problem } from '@/lib/api';
-import { planRequest, PLAN_UNREADABLE, type PlanRequest, type PlanResponse } from '@/lib/plan-request';
-import { route } from '@/lib/route';
+import { json, problem } from '@/lib/server/api';
+import { planRequest, PLAN_UNREADABLE, type PlanRequest, type PlanResponse } from '@/lib/shared/plan-request';
+import { route } from '@/lib/server/route';
 
 export const prerender = false;
 

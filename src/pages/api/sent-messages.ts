@@ -1,6 +1,6 @@
 // The messages this shop sent (lead), where mail goes to the local capture; absent elsewhere.
 import { MAIL_CAPTURE_DIR } from 'astro:env/server';
-import { route } from '@/lib/route';
+import { route } from '@/lib/server/route';
 import { listSentMail } from '@/services/sent-mail';
 
 /** The shop's own sent messages, newest first; 404 when mail goes to a real SMTP host. */

@@ -1,6 +1,6 @@
 // The shop's time zone, where its days begin and end (the overview counts by them).
-import { route } from '@/lib/route';
-import { timeZoneRequest } from '@/lib/time-zone-request';
+import { route } from '@/lib/server/route';
+import { timeZoneRequest } from '@/lib/shared/time-zone-request';
 import { saveShopTimeZone, shopTimeZone } from '@/services/shop-time-zone';
 
 /** The shop's time zone and whether it was chosen (every member reads it). */

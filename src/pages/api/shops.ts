@@ -1,7 +1,7 @@
 // Sign-up: creates a shop and its first lead, and signs the lead in.
-import { json } from '@/lib/api';
-import { shopSignUpInput } from '@/lib/account-inputs';
-import { route } from '@/lib/route';
+import { json } from '@/lib/server/api';
+import { shopSignUpInput } from '@/lib/shared/account-inputs';
+import { route } from '@/lib/server/route';
 import { createShop } from '@/services/shops';
 
 /** Public by design: anyone may open a new shop. */

@@ -5,7 +5,7 @@
 import { and, eq } from 'drizzle-orm';
 import type { Db } from '@/db';
 import { garments, type Ticket } from '@/db/schema';
-import type { Actor } from '@/lib/api';
+import type { Actor } from '@/lib/server/api';
 import { audit } from '../audit';
 import { ServiceError } from '../errors';
 import { moveGarmentsLocked, tellMoved } from '../garment-moves';

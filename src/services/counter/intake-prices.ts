@@ -3,9 +3,9 @@
 // intake's own transaction, so a ticket never stands half priced.
 import type { Db } from '@/db';
 import { priceLines } from '@/db/schema';
-import type { Actor } from '@/lib/api';
-import type { ExistingFinish } from '@/lib/existing-finish';
-import { can } from '@/lib/roles';
+import type { Actor } from '@/lib/server/api';
+import type { ExistingFinish } from '@/lib/shared/existing-finish';
+import { can } from '@/lib/shared/roles';
 import { isRushableWork, priceTicket, sumMinor, type GarmentFacts } from '@/lib/pricing/price-lines';
 import { audit } from '../audit';
 import { ServiceError } from '../errors';

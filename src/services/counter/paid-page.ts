@@ -6,7 +6,7 @@
 import { and, eq } from 'drizzle-orm';
 import { db } from '@/db';
 import { organization, paymentLinks, payments, tickets } from '@/db/schema';
-import { ticketLabel } from '@/lib/ticket-number';
+import { ticketLabel } from '@/lib/shared/ticket-number';
 import { isCurrency, type Currency } from '@/lib/pricing/money';
 
 /** A payment session as the customer may see it: paid (recorded by the webhook) or still being confirmed. */

@@ -8,7 +8,7 @@ import { and, eq, inArray, isNull, or, sql } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import type { Db } from '@/db';
 import { LIVE_LINK_STATUSES, paymentLinks, type PaymentLink, type Ticket } from '@/db/schema';
-import { paymentClient } from '@/lib/payment-service';
+import { paymentClient } from '@/lib/server/payment-service';
 import { ServiceError } from '../errors';
 import { withTicketLock } from '../ticket-core';
 

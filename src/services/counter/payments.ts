@@ -7,11 +7,11 @@ import type { z } from 'zod';
 import { db, type Db } from '@/db';
 import { customers, garments, paymentEvents, paymentLinks, payments, type PaymentLink, type Ticket } from '@/db/schema';
 import { formatMoney, isCurrency } from '@/lib/pricing/money';
-import type { Actor } from '@/lib/api';
-import type { paymentInput } from '@/lib/counter-request';
-import { paymentClient, verifyWebhook, webhookSecret } from '@/lib/payment-service';
-import type { ClaimSlipData } from '@/lib/claim-slip/types';
-import { dayOf } from '@/lib/overview/shop-days';
+import type { Actor } from '@/lib/server/api';
+import type { paymentInput } from '@/lib/shared/counter-request';
+import { paymentClient, verifyWebhook, webhookSecret } from '@/lib/server/payment-service';
+import type { ClaimSlipData } from '@/lib/server/claim-slip/types';
+import { dayOf } from '@/lib/shared/overview/shop-days';
 import { shopTimeZone } from '../shop-time-zone';
 import { audit } from '../audit';
 import { ServiceError } from '../errors';
@@ -30,7 +30,7 @@ import {
 import { counterSettingsOf, type CounterView } from './prices';
 import { applyRefundEvent } from './refunds';
 import { counterSummary, customerCreditOf, summaryOf, type CounterSummary } from './summary';
-import { ticketLabel } from '@/lib/ticket-number';
+import { ticketLabel } from '@/lib/shared/ticket-number';
 
 export { counterSummary, summaryOf, type CounterSummary };
 export { assertReadyToHandOver, pickUp } from './hand-over';

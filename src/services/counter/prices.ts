@@ -14,23 +14,23 @@ import {
   type Ticket,
 } from '@/db/schema';
 import { checkTaper } from '@/lib/allowance';
-import type { Actor } from '@/lib/api';
-import { letDownFirst } from '@/lib/existing-finish';
-import { partOf, readFinish } from '@/lib/fitting/kinds';
-import { savedLegOrder, type StoredLeg } from '@/lib/fitting/saved-leg';
-import { taperInput } from '@/lib/cut-sheet/build';
-import type { autoLinesInput, lineInput, priceListInput, voidLineInput } from '@/lib/counter-request';
+import type { Actor } from '@/lib/server/api';
+import { letDownFirst } from '@/lib/shared/existing-finish';
+import { partOf, readFinish } from '@/lib/shared/fitting/kinds';
+import { savedLegOrder, type StoredLeg } from '@/lib/server/fitting/saved-leg';
+import { taperInput } from '@/lib/server/cut-sheet/build';
+import type { autoLinesInput, lineInput, priceListInput, voidLineInput } from '@/lib/shared/counter-request';
 import { isCurrency } from '@/lib/pricing/money';
 import { DEFAULT_PRICE_LABELS, PRICE_KEYS } from '@/lib/pricing/price-keys';
 import { isRushableWork, LEAD_REDUCTION_SHARE, priceTicket, reductionNeedsLead, sumMinor, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
-import { can } from '@/lib/roles';
+import { can } from '@/lib/shared/roles';
 import { needsLetOut } from '@/lib/pricing/taper-let-out';
 import { audit } from '../audit';
 import { ServiceError } from '../errors';
 import { isUuid, shopTicket } from '../ticket-core';
 import { withLinksClosed } from './payment-links';
 import { kindsOf, liveKinds } from './price-kinds';
-import type { CounterView, PriceListView } from '@/lib/counter-views';
+import type { CounterView, PriceListView } from '@/lib/shared/counter-views';
 
 // The shapes live in lib (islands read them too); exported here for the services' importers.
 export type { CounterView, PriceListView };

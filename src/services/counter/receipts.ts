@@ -2,13 +2,13 @@
 // its PDF, and the same PDF e-mailed to the customer and recorded in sent_mail.
 import { db } from '@/db';
 import { organization } from '@/db/schema';
-import type { Actor } from '@/lib/api';
-import { dateTimeText } from '@/lib/date-text';
-import { ticketLabel } from '@/lib/ticket-number';
-import { sendMail } from '@/lib/mail';
+import type { Actor } from '@/lib/server/api';
+import { dateTimeText } from '@/lib/shared/date-text';
+import { ticketLabel } from '@/lib/shared/ticket-number';
+import { sendMail } from '@/lib/server/mail';
 import { formatMoney } from '@/lib/pricing/money';
-import { renderReceipt } from '@/lib/receipt/render';
-import type { ReceiptData } from '@/lib/receipt/types';
+import { renderReceipt } from '@/lib/server/receipt/render';
+import type { ReceiptData } from '@/lib/server/receipt/types';
 import { eq } from 'drizzle-orm';
 import { audit } from '../audit';
 import { ServiceError } from '../errors';

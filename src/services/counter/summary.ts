@@ -4,11 +4,11 @@
 import { and, asc, desc, eq, inArray, isNotNull, sql } from 'drizzle-orm';
 import { db, type Db } from '@/db';
 import { COUNTED_REFUND_STATUSES, customers, paymentLinks, payments, refunds, tickets, user, type Ticket } from '@/db/schema';
-import type { Actor } from '@/lib/api';
+import type { Actor } from '@/lib/server/api';
 import { balanceOf } from '@/lib/pricing/price-lines';
 import { shopTicket } from '../ticket-core';
 import { counterSettingsOf, linesOf, type CounterView } from './prices';
-import type { CounterSummary } from '@/lib/counter-views';
+import type { CounterSummary } from '@/lib/shared/counter-views';
 
 // The shape lives in lib (islands read it too); exported here for the services' importers.
 export type { CounterSummary };

@@ -9,15 +9,15 @@ import { describe, expect, it } from 'vitest';
 import { FittingHistory } from '@/components/bench/FittingHistory';
 import { FittingReadOnly } from '@/components/bench/FittingReadOnly';
 import { LegFields } from '@/components/bench/LegFields';
-import { buildCutSheet } from '@/lib/cut-sheet/build';
-import { sheetContent } from '@/lib/cut-sheet/content';
-import { FIELD, FIELD_KEYS, fieldsOf, FINISH_IDS, partOf, type FieldKey, type Finish } from '@/lib/fitting/kinds';
-import { savedLegOrder, type StoredLeg } from '@/lib/fitting/saved-leg';
-import type { AuditEntry, FittingView } from '@/lib/bench-types';
-import { blankLeg, legInput, type MeasurementsInput } from '@/lib/measurement-request';
-import { LENGTHS_OF, presetSettings } from '@/lib/preset-settings';
-import { cuffRequest, hemRequest, hemTaperRequest, taperRequest } from '@/lib/plan-request';
-import { engineFields } from '@/lib/fitting/kinds';
+import { buildCutSheet } from '@/lib/server/cut-sheet/build';
+import { sheetContent } from '@/lib/server/cut-sheet/content';
+import { FIELD, FIELD_KEYS, fieldsOf, FINISH_IDS, partOf, type FieldKey, type Finish } from '@/lib/shared/fitting/kinds';
+import { savedLegOrder, type StoredLeg } from '@/lib/server/fitting/saved-leg';
+import type { AuditEntry, FittingView } from '@/lib/shared/bench-types';
+import { blankLeg, legInput, type MeasurementsInput } from '@/lib/shared/measurement-request';
+import { LENGTHS_OF, presetSettings } from '@/lib/shared/preset-settings';
+import { cuffRequest, hemRequest, hemTaperRequest, taperRequest } from '@/lib/shared/plan-request';
+import { engineFields } from '@/lib/shared/fitting/kinds';
 import { FITTING_VALUES } from './fitting-values';
 
 const text = (html: string) =>

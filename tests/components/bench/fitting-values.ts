@@ -1,7 +1,7 @@
 // One plausible length for every field of the fitting registry, in inches, as a tailor would type
 // it: a cuffed leg with a gentle taper (figures from TRADE.md's usual ranges, else common practice,
 // no source). The registry tests require one here for every field.
-import type { FieldKey } from '@/lib/fitting/kinds';
+import type { FieldKey } from '@/lib/shared/fitting/kinds';
 
 /** A sample typed value for every registry field. */
 export const FITTING_VALUES: Record<FieldKey, string> = {

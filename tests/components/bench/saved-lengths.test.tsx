@@ -6,7 +6,7 @@ import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
 import { FittingHistory } from '@/components/bench/FittingHistory';
 import { FittingReadOnly } from '@/components/bench/FittingReadOnly';
-import type { AuditEntry, FittingView } from '@/lib/bench-types';
+import type { AuditEntry, FittingView } from '@/lib/shared/bench-types';
 
 const text = (html: string) =>
   html

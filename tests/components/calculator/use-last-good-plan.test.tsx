@@ -4,7 +4,7 @@
 import { describe, expect, it } from 'vitest';
 import { renderToStaticMarkup } from 'react-dom/server';
 import { keepLastGood, planToShow, useLastGoodPlan, type PlanQueryState } from '@/components/calculator/use-last-good-plan';
-import type { PlanResponse } from '@/lib/plan-request';
+import type { PlanResponse } from '@/lib/shared/plan-request';
 
 // Stand-ins: only the kind and identity matter to this rule, not the lines inside.
 const cuffA = { kind: 'cuff', tag: 'a' } as unknown as PlanResponse;

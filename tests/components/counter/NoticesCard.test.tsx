@@ -5,7 +5,7 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { renderToStaticMarkup } from 'react-dom/server';
 import { NoticesCard } from '@/components/counter/NoticesCard';
 // What the island receives: JSON, dates as strings.
-import type { CounterSummaryJson as CounterSummary, NoticeJson as Notice } from '@/lib/counter-views';
+import type { CounterSummaryJson as CounterSummary, NoticeJson as Notice } from '@/lib/shared/counter-views';
 
 const TICKET = '00000000-0000-4000-8000-000000000001';
 

@@ -2,9 +2,9 @@
 // the garments, the due date, each line and the money, in the shop's currency; its dates in the
 // screens' style ("Tue 8 Dec", never ISO); tear-off garment tags; 1–3 slips and 0–3 tags each.
 import { describe, expect, it } from 'vitest';
-import { renderClaimSlip } from '@/lib/claim-slip/render';
-import type { ClaimSlipData } from '@/lib/claim-slip/types';
-import { dueText } from '@/lib/due-date';
+import { renderClaimSlip } from '@/lib/server/claim-slip/render';
+import type { ClaimSlipData } from '@/lib/server/claim-slip/types';
+import { dueText } from '@/lib/shared/due-date';
 import { flatText, layoutText, pageInfo, pdfFile } from '../cut-sheet/poppler';
 
 // Invented shop, customer and prices.
@@ -55,7 +55,7 @@ describe('claim slip', () => {
   });
 
   it('prints its dates the way every screen does ("Tue 8 Dec", dueText), never as ISO dates', async () => {
-    // 1 and 8 December 2026 are Tuesdays (calendar; the shop's date style from src/lib/due-date.ts).
+    // 1 and 8 December 2026 are Tuesdays (calendar; the shop's date style from src/lib/shared/due-date.ts).
     const text = flatText(pdfFile(await renderClaimSlip(SLIP)));
     expect(text).toContain('Received Tue 1 Dec');
     expect(text).toContain('Ready by Tue 8 Dec');

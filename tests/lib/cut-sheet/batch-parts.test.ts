@@ -3,7 +3,7 @@
 // object (pages, fonts subset once over the whole batch, the skipped page last), and the stream
 // must hand bytes on before the last part is drawn.
 import { describe, expect, it } from 'vitest';
-import { renderCutSheets, streamCutSheets } from '@/lib/cut-sheet/render';
+import { renderCutSheets, streamCutSheets } from '@/lib/server/cut-sheet/render';
 import { comparable } from './pdf-objects';
 import { flatText, pageInfo, pdfFile } from './poppler';
 import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet } from './sheets';

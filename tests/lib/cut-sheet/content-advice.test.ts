@@ -1,7 +1,7 @@
 // The cut sheet's trade advice in words: what the engine's plans become on paper.
 import { describe, expect, it } from 'vitest';
-import { buildCutSheet, type LegOrder } from '@/lib/cut-sheet/build';
-import { sheetContent } from '@/lib/cut-sheet/content';
+import { buildCutSheet, type LegOrder } from '@/lib/server/cut-sheet/build';
+import { sheetContent } from '@/lib/server/cut-sheet/content';
 
 const HEADER = { shop: 'Invented Alterations', ticket: '7', garment: 'Grey flannel trousers', due: null, assignee: null };
 

@@ -1,7 +1,7 @@
 // What is drawn rather than written: the leg drawing to scale, and the chalk guide at 1:1.
 import { beforeAll, describe, expect, it } from 'vitest';
-import { buildCutSheet } from '@/lib/cut-sheet/build';
-import { renderCutSheet } from '@/lib/cut-sheet/render';
+import { buildCutSheet } from '@/lib/server/cut-sheet/build';
+import { renderCutSheet } from '@/lib/server/cut-sheet/render';
 import { gray, pdfFile, words, type Gray, type Word } from './poppler';
 import { cuffInch, cuffMetric, sheet, UNSAVED } from './sheets';
 

@@ -2,9 +2,9 @@
 // pressed out before any chalk, the old-crease note agrees with that, and the page still fits.
 // A new unfinished pair and the calculator's sheet get nothing extra.
 import { beforeAll, describe, expect, it } from 'vitest';
-import { CAUTIONS, LET_DOWN_HEADING, LET_DOWN_OLD_CUFF, sheetContent } from '@/lib/cut-sheet/content';
-import { buildCutSheet, type LegOrder } from '@/lib/cut-sheet/build';
-import { renderCutSheet } from '@/lib/cut-sheet/render';
+import { CAUTIONS, LET_DOWN_HEADING, LET_DOWN_OLD_CUFF, sheetContent } from '@/lib/server/cut-sheet/content';
+import { buildCutSheet, type LegOrder } from '@/lib/server/cut-sheet/build';
+import { renderCutSheet } from '@/lib/server/cut-sheet/render';
 import { spawnSync } from 'node:child_process';
 import { flatText, pageInfo, pdfFile, words } from './poppler';
 import { busyLegs, cuffInch, hemSloped, sheet, UNSAVED } from './sheets';

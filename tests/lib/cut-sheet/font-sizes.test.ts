@@ -2,8 +2,8 @@
 // scale note and line numbers, column headings, cautions, the QR code's caption. Read from the
 // PDF's own text runs (pdf-runs.ts), over sheets of every kind and the batch's last page.
 import { describe, expect, it } from 'vitest';
-import { buildCutSheet, type LegOrder } from '@/lib/cut-sheet/build';
-import { renderCutSheet, renderCutSheets } from '@/lib/cut-sheet/render';
+import { buildCutSheet, type LegOrder } from '@/lib/server/cut-sheet/build';
+import { renderCutSheet, renderCutSheets } from '@/lib/server/cut-sheet/render';
 import { textRuns } from './pdf-runs';
 import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet, UNSAVED } from './sheets';
 

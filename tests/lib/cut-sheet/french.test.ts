@@ -4,10 +4,10 @@
 // same pages as in English. The figures' sums are checked once for every language (printed-sums).
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { buildCutSheet, type LegOrder } from '@/lib/cut-sheet/build';
-import { sheetContent } from '@/lib/cut-sheet/content';
-import { renderCutSheet, renderCutSheets } from '@/lib/cut-sheet/render';
-import type { CutSheetData } from '@/lib/cut-sheet/types';
+import { buildCutSheet, type LegOrder } from '@/lib/server/cut-sheet/build';
+import { sheetContent } from '@/lib/server/cut-sheet/content';
+import { renderCutSheet, renderCutSheets } from '@/lib/server/cut-sheet/render';
+import type { CutSheetData } from '@/lib/shared/cut-sheet-types';
 import { crowdedRuns, textRuns } from './pdf-runs';
 import { flatText, pageInfo, pdfFile } from './poppler';
 import { busyLegs, cuffInch, cuffMetric, hemSloped, SHOP, sheet, UNSAVED } from './sheets';

@@ -5,8 +5,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { Unit } from '@/lib/allowance/types';
-import { buildCutSheet, type LegOrder } from '@/lib/cut-sheet/build';
-import { renderCutSheet } from '@/lib/cut-sheet/render';
+import { buildCutSheet, type LegOrder } from '@/lib/server/cut-sheet/build';
+import { renderCutSheet } from '@/lib/server/cut-sheet/render';
 import { crowdedRuns, textRuns } from './pdf-runs';
 import { SHOP } from './sheets';
 

@@ -2,8 +2,8 @@
 // which width was measured and works from it. Base leg: TRADE.md's tapered example (7 in flat at the
 // edge, 8 in higher up: Fit For A Queen 2012); the let-down figures are arithmetic on it.
 import { describe, expect, it } from 'vitest';
-import { buildCutSheet, type LegOrder } from '@/lib/cut-sheet/build';
-import { sheetContent } from '@/lib/cut-sheet/content';
+import { buildCutSheet, type LegOrder } from '@/lib/server/cut-sheet/build';
+import { sheetContent } from '@/lib/server/cut-sheet/content';
 
 const HEADER = { shop: 'Invented Alterations', ticket: '8', garment: 'Fawn twill trousers', due: null, assignee: null, existingFinish: 'plain-hem' as const };
 

@@ -9,15 +9,15 @@ import { describe, expect, it, vi } from 'vitest';
 
 const documents: ReactElement[] = [];
 const laidOut: ReactElement[] = [];
-vi.mock('@/lib/render-pdf', async (importOriginal) => {
-  const real = await importOriginal<typeof import('@/lib/render-pdf')>();
+vi.mock('@/lib/server/render-pdf', async (importOriginal) => {
+  const real = await importOriginal<typeof import('@/lib/server/render-pdf')>();
   return {
     ...real,
     renderPdf: (doc: ReactElement) => {
       documents.push(doc);
       return real.renderPdf(doc as Parameters<typeof real.renderPdf>[0]);
     },
-    renderPdfParts: (parts: Iterable<import('@/lib/render-pdf').PdfPart>, props: import('@react-pdf/renderer').DocumentProps) =>
+    renderPdfParts: (parts: Iterable<import('@/lib/server/render-pdf').PdfPart>, props: import('@react-pdf/renderer').DocumentProps) =>
       real.renderPdfParts(
         [...parts].map(({ doc, adjust }) => {
           documents.push(doc);
@@ -37,15 +37,15 @@ vi.mock('@/lib/render-pdf', async (importOriginal) => {
   };
 });
 
-const { renderCutSheets } = await import('@/lib/cut-sheet/render');
+const { renderCutSheets } = await import('@/lib/server/cut-sheet/render');
 const { flatText, pageInfo, pdfFile } = await import('./poppler');
-const { renderPdf } = await import('@/lib/render-pdf');
-const { cutSheetDocument } = await import('@/lib/cut-sheet/CutSheet');
+const { renderPdf } = await import('@/lib/server/render-pdf');
+const { cutSheetDocument } = await import('@/lib/server/cut-sheet/CutSheet');
 
 const { comparable } = await import('./pdf-objects');
 const { busyLegs, cuffInch, cuffMetric, sheet } = await import('./sheets');
-const { sheetStripColumns } = await import('@/lib/cut-sheet/CutSheet');
-const { installPdfPlatform, uninstallPdfPlatform } = await import('@/lib/pdf-platform/index');
+const { sheetStripColumns } = await import('@/lib/server/cut-sheet/CutSheet');
+const { installPdfPlatform, uninstallPdfPlatform } = await import('@/lib/server/pdf-platform/index');
 
 /** A cuff deep enough that its strip goes on over a page of strip (as in strip-reach.test.ts). */
 const longCuff = { side: 'right' as const, finish: 'cuff' as const, input: { unit: 'in' as const, precision: 8 as const, cuffDepth: '2 3/4', available: 10 } };

@@ -1,7 +1,7 @@
 // Streams compressed by the fast path: every one marked, complete and readable.
 import { describe, expect, it } from 'vitest';
-import { keepStreamText } from '@/lib/pdf-platform/pdf-streams';
-import { renderCutSheet, renderCutSheets } from '@/lib/cut-sheet/render';
+import { keepStreamText } from '@/lib/server/pdf-platform/pdf-streams';
+import { renderCutSheet, renderCutSheets } from '@/lib/server/cut-sheet/render';
 import { comparable, pdfObjects } from './pdf-objects';
 import { flatText, pdfFile } from './poppler';
 import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet } from './sheets';

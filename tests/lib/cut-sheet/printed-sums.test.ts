@@ -7,9 +7,9 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parseLength } from '@/lib/allowance';
 import type { Unit } from '@/lib/allowance/types';
-import { buildCutSheet, type LegOrder } from '@/lib/cut-sheet/build';
-import { sheetContent, type SheetLegGroup } from '@/lib/cut-sheet/content';
-import { renderCutSheet } from '@/lib/cut-sheet/render';
+import { buildCutSheet, type LegOrder } from '@/lib/server/cut-sheet/build';
+import { sheetContent, type SheetLegGroup } from '@/lib/server/cut-sheet/content';
+import { renderCutSheet } from '@/lib/server/cut-sheet/render';
 import { flatText, layoutText, pdfFile } from './poppler';
 import { SHOP } from './sheets';
 

@@ -6,8 +6,8 @@
 // here a stand-in speaks the same protocol.
 import { threadId } from 'node:worker_threads';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { offThreadRenderer, type OffThreadRenderer } from '@/lib/cut-sheet/render-off-thread';
-import type { CutSheetData } from '@/lib/cut-sheet/types';
+import { offThreadRenderer, type OffThreadRenderer } from '@/lib/server/cut-sheet/render-off-thread';
+import type { CutSheetData } from '@/lib/shared/cut-sheet-types';
 
 const fake = new URL('./fixtures/fake-render-worker.mjs', import.meta.url);
 const broken = new URL('./fixtures/broken-render-worker.mjs', import.meta.url);

@@ -1,11 +1,11 @@
 // The cut sheet as the apprentice reads it: numbers, units, steps, cautions, pages, fonts.
 import { beforeAll, describe, expect, it } from 'vitest';
-import { renderCutSheet, renderCutSheets } from '@/lib/cut-sheet/render';
-import { UNSAVED_TITLE } from '@/lib/cut-sheet/content';
-import { buildCutSheet } from '@/lib/cut-sheet/build';
+import { renderCutSheet, renderCutSheets } from '@/lib/server/cut-sheet/render';
+import { UNSAVED_TITLE } from '@/lib/server/cut-sheet/content';
+import { buildCutSheet } from '@/lib/server/cut-sheet/build';
 import { flatText, fonts, layoutText, pageInfo, pdfFile, words } from './poppler';
 import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet, UNSAVED } from './sheets';
-import type { LegOrder } from '@/lib/cut-sheet/build';
+import type { LegOrder } from '@/lib/server/cut-sheet/build';
 
 describe('a 1 1/2 in cuff with 5 in of cloth, inches', () => {
   let file = '';

@@ -6,10 +6,10 @@ import { setLayoutTextHook } from '@react-pdf/layout';
 import fc from 'fast-check';
 import * as fontkit from 'fontkit';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { renderCutSheet } from '@/lib/cut-sheet/render';
-import { SHEET_FEATURES } from '@/lib/cut-sheet/shaping-features';
-import { memoiseShaping, wordsOf, type Shaper } from '@/lib/pdf-platform/shaping-memo';
-import { memoiseTextLayout } from '@/lib/pdf-platform/text-layout-memo';
+import { renderCutSheet } from '@/lib/server/cut-sheet/render';
+import { SHEET_FEATURES } from '@/lib/server/cut-sheet/shaping-features';
+import { memoiseShaping, wordsOf, type Shaper } from '@/lib/server/pdf-platform/shaping-memo';
+import { memoiseTextLayout } from '@/lib/server/pdf-platform/text-layout-memo';
 import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet, UNSAVED } from './sheets';
 
 const FILES = ['400Regular/Inter_400Regular.ttf', '700Bold/Inter_700Bold.ttf', '800ExtraBold/Inter_800ExtraBold.ttf'];

@@ -1,7 +1,7 @@
 // Cut sheets built with the real engine, for the renderer's tests.
-import { buildCutSheet, type LegOrder, type SheetHeader } from '@/lib/cut-sheet/build';
-import type { CutSheetData } from '@/lib/cut-sheet/types';
-import { isLanguage } from '@/lib/i18n/languages';
+import { buildCutSheet, type LegOrder, type SheetHeader } from '@/lib/server/cut-sheet/build';
+import type { CutSheetData } from '@/lib/shared/cut-sheet-types';
+import { isLanguage } from '@/lib/shared/i18n/languages';
 
 // SHEET_LANGUAGE=fr runs the layout suites (no touching runs, 9 pt, strip reach, overflow) on French
 // sheets; the suites that read English words are for English only.

@@ -3,14 +3,14 @@
 // no page holds only a note. Read from the PDF's text runs (pdf-runs.ts).
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { buildCutSheet, type LegOrder } from '@/lib/cut-sheet/build';
-import { PAGE_PT } from '@/lib/cut-sheet/CutSheet';
-import { sheetContent } from '@/lib/cut-sheet/content';
-import { renderCutSheet } from '@/lib/cut-sheet/render';
-import { GUIDE_COLUMN } from '@/lib/cut-sheet/styles';
-import type { CutSheetData, PageSize } from '@/lib/cut-sheet/types';
+import { buildCutSheet, type LegOrder } from '@/lib/server/cut-sheet/build';
+import { PAGE_PT } from '@/lib/server/cut-sheet/CutSheet';
+import { sheetContent } from '@/lib/server/cut-sheet/content';
+import { renderCutSheet } from '@/lib/server/cut-sheet/render';
+import { GUIDE_COLUMN } from '@/lib/server/cut-sheet/styles';
+import type { CutSheetData, PageSize } from '@/lib/shared/cut-sheet-types';
 import { textRuns, type TextRun } from './pdf-runs';
-import { translator } from '@/lib/i18n/catalog';
+import { translator } from '@/lib/server/i18n/catalog';
 import { SHOP } from './sheets';
 
 // The strip's words in the sheets' language (SHEET_LANGUAGE=fr runs this file on French sheets).

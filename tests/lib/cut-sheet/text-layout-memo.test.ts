@@ -1,11 +1,11 @@
 // Kept paragraph layouts must never change a sheet: the same page with the memo as without it.
 import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
-import { renderCutSheet, renderCutSheets } from '@/lib/cut-sheet/render';
-import { keptLayouts, layoutKey, memoiseTextLayout } from '@/lib/pdf-platform/text-layout-memo';
+import { renderCutSheet, renderCutSheets } from '@/lib/server/cut-sheet/render';
+import { keptLayouts, layoutKey, memoiseTextLayout } from '@/lib/server/pdf-platform/text-layout-memo';
 import { comparable } from './pdf-objects';
 import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet, UNSAVED } from './sheets';
-import type { CutSheetData } from '@/lib/cut-sheet/types';
+import type { CutSheetData } from '@/lib/shared/cut-sheet-types';
 
 // Both units, cuff and hem, taper and short cloth, an unsaved plan, A4: every block of the sheet.
 const SHEETS: CutSheetData[] = [

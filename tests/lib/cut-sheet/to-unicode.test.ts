@@ -4,8 +4,8 @@
 // sheet of a process reads back right. Kept as a failing case so the fix shows up here: turn
 // `it.fails` into `it` once the copied text is right.
 import { expect, it } from 'vitest';
-import { buildCutSheet } from '@/lib/cut-sheet/build';
-import { renderCutSheet } from '@/lib/cut-sheet/render';
+import { buildCutSheet } from '@/lib/server/cut-sheet/build';
+import { renderCutSheet } from '@/lib/server/cut-sheet/render';
 import { flatText, pdfFile } from './poppler';
 import { cuffInch, cuffMetric, sheet, UNSAVED } from './sheets';
 

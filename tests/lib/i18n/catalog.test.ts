@@ -4,8 +4,8 @@ import { readFileSync } from 'node:fs';
 import { parse, TYPE, type MessageFormatElement } from '@formatjs/icu-messageformat-parser';
 import { describe, expect, it } from 'vitest';
 import type { AllowanceErrorCode, CreasePlace, WarningCode } from '@/lib/allowance';
-import { catalogKeys, translator } from '@/lib/i18n/catalog';
-import { fromAcceptLanguage, intlLocale, LANGUAGES } from '@/lib/i18n/languages';
+import { catalogKeys, translator } from '@/lib/server/i18n/catalog';
+import { fromAcceptLanguage, intlLocale, LANGUAGES } from '@/lib/shared/i18n/languages';
 
 // The catalogs as written (the build hands the app syntax trees; here the source text is read).
 const source = (lang: string): Record<string, string> =>

@@ -4,8 +4,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { checkHemTaper, checkTaper, planCuff, planHem } from '@/lib/allowance';
 import type { PlanWarning, WarningCode } from '@/lib/allowance/types';
-import { translator } from '@/lib/i18n/catalog';
-import { creaseText, warningText } from '@/lib/i18n/engine-messages';
+import { translator } from '@/lib/server/i18n/catalog';
+import { creaseText, warningText } from '@/lib/shared/i18n/engine-messages';
 
 const en = translator('en');
 const fr = translator('fr');

@@ -4,7 +4,7 @@
 // skips midnight on 6 Sep 2026.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { addDays, bucketOf, countByDay, dayBounds, dayOf, isTimeZone, periodDays, startOfDay, weekdayOf } from '@/lib/overview/shop-days';
+import { addDays, bucketOf, countByDay, dayBounds, dayOf, isTimeZone, periodDays, startOfDay, weekdayOf } from '@/lib/shared/overview/shop-days';
 
 // Zones with whole-hour, half-hour and 45-minute offsets, 30-minute DST (Lord Howe) and a clock
 // that skips midnight (Santiago). Left out: zones that once turned the clock back across midnight

@@ -3,8 +3,8 @@
 // the page varied (units, cuff or hem, one or two legs, tapers, old creases, short cloth, paper,
 // free text in other scripts, overfull pages). Invented shop, staff and garments.
 import fc from 'fast-check';
-import { buildCutSheet, type LegOrder } from '@/lib/cut-sheet/build';
-import type { CutSheetData } from '@/lib/cut-sheet/types';
+import { buildCutSheet, type LegOrder } from '@/lib/server/cut-sheet/build';
+import type { CutSheetData } from '@/lib/shared/cut-sheet-types';
 
 const GARMENTS = [
   'Navy wool flannel trousers',

@@ -2,10 +2,10 @@
 // one log line for each one skipped, none at all when switched off, and every one undone exactly.
 import PDFDocument from 'pdfkit';
 import { afterAll, describe, expect, it } from 'vitest';
-import { registerFonts } from '@/lib/cut-sheet/fonts';
-import { renderCutSheet } from '@/lib/cut-sheet/render';
-import { installPdfPlatform, PDF_PATCHES, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/pdf-platform/index';
-import { installedVersion } from '@/lib/pdf-platform/versions';
+import { registerFonts } from '@/lib/server/cut-sheet/fonts';
+import { renderCutSheet } from '@/lib/server/cut-sheet/render';
+import { installPdfPlatform, PDF_PATCHES, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
+import { installedVersion } from '@/lib/server/pdf-platform/versions';
 import { Font } from '@react-pdf/renderer';
 import { flatText, pdfFile } from '../cut-sheet/poppler';
 import { cuffInch, sheet } from '../cut-sheet/sheets';

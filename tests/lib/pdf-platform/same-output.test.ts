@@ -4,8 +4,8 @@
 // numbered differently with the seed (subset-memo.ts), so pages are compared as printed, not byte
 // for byte; the single-patch tests in tests/lib/cut-sheet compare objects where they can.
 import { afterAll, describe, expect, it } from 'vitest';
-import { renderCutSheet, renderCutSheets } from '@/lib/cut-sheet/render';
-import { installPdfPlatform, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/pdf-platform/index';
+import { renderCutSheet, renderCutSheets } from '@/lib/server/cut-sheet/render';
+import { installPdfPlatform, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
 import { allWords, grayPages, pdfFile } from '../cut-sheet/poppler';
 import { generatedSheets } from './generated-sheets';
 

@@ -3,8 +3,8 @@
 // a log line, and overfull sheets are then laid out again (tests/lib/cut-sheet/overflow.test.ts).
 import { afterAll, describe, expect, it } from 'vitest';
 import * as reactPdfLayout from '@react-pdf/layout';
-import { installPdfPlatform, PDF_PATCHES, uninstallPdfPlatform } from '@/lib/pdf-platform/index';
-import { splitFromFirstLayout, splitLaidOut } from '@/lib/pdf-platform/split-laid-out';
+import { installPdfPlatform, PDF_PATCHES, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
+import { splitFromFirstLayout, splitLaidOut } from '@/lib/server/pdf-platform/split-laid-out';
 
 afterAll(() => {
   uninstallPdfPlatform();

@@ -1,7 +1,7 @@
 // EXIF and XMP out of a HEIC without decoding it: the items' bytes are zeroed where iloc puts them,
 // everything else (sizes, offsets, the picture) stays byte for byte; what cannot be read is null.
 import { describe, expect, it } from 'vitest';
-import { readHeifImage, stripHeifMetadata } from '@/lib/storage/heif-metadata';
+import { readHeifImage, stripHeifMetadata } from '@/lib/server/storage/heif-metadata';
 import { gpsExif, sampleHeif, SAMPLE_EXIF_MAKE, SAMPLE_PICTURE, SAMPLE_XMP_MARK } from './heif-sample';
 
 const has = (hay: Uint8Array, needle: string | Buffer) => Buffer.from(hay).includes(typeof needle === 'string' ? Buffer.from(needle, 'latin1') : needle);

@@ -5,9 +5,9 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DiskStorage } from '@/lib/storage/disk-storage';
-import { S3Storage, s3FromSettings } from '@/lib/storage/s3-storage';
-import type { Storage } from '@/lib/storage/storage';
+import { DiskStorage } from '@/lib/server/storage/disk-storage';
+import { S3Storage, s3FromSettings } from '@/lib/server/storage/s3-storage';
+import type { Storage } from '@/lib/server/storage/storage';
 import { startS3Fake } from '../../../scripts/s3-fake.mjs';
 
 const dirs: string[] = [];

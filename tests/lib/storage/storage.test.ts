@@ -3,10 +3,10 @@ import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { DiskStorage } from '@/lib/storage/disk-storage';
-import { isPathLike, safeName } from '@/lib/storage/safe-name';
-import { sniffImage } from '@/lib/storage/sniff-image';
-import { checkKey } from '@/lib/storage/storage';
+import { DiskStorage } from '@/lib/server/storage/disk-storage';
+import { isPathLike, safeName } from '@/lib/server/storage/safe-name';
+import { sniffImage } from '@/lib/server/storage/sniff-image';
+import { checkKey } from '@/lib/server/storage/storage';
 
 const bytes = (...parts: (number[] | string)[]) => new Uint8Array(parts.flatMap((p) => (typeof p === 'string' ? [...Buffer.from(p, 'latin1')] : p)));
 

@@ -1,12 +1,12 @@
 // better-auth's own endpoints (/api/auth/*), with failed sign-ins and reset mail limited.
-import { auth } from '@/lib/auth';
-import { problem, readBytes } from '@/lib/api';
-import { route } from '@/lib/route';
-import { withBody } from '@/lib/body';
-import { clientOf } from '@/lib/client-address';
+import { auth } from '@/lib/server/auth';
+import { problem, readBytes } from '@/lib/server/api';
+import { route } from '@/lib/server/route';
+import { withBody } from '@/lib/server/body';
+import { clientOf } from '@/lib/server/client-address';
 import { limitedResetRequest } from '@/services/reset-limit';
 import { limitedSignIn } from '@/services/sign-in-limit';
-import { UNSTORABLE_MESSAGE, unstorablePath } from '@/lib/text';
+import { UNSTORABLE_MESSAGE, unstorablePath } from '@/lib/shared/text';
 
 export const prerender = false;
 

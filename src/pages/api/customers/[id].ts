@@ -1,6 +1,6 @@
 // One customer: read, or change their name, phone, e-mail or notes.
-import { route } from '@/lib/route';
-import { customerPatch } from '@/lib/customer-request';
+import { route } from '@/lib/server/route';
+import { customerPatch } from '@/lib/shared/customer-request';
 import { getCustomer, updateCustomer } from '@/services/customers';
 
 /** The customer, when they are the shop's. */

@@ -1,7 +1,7 @@
 // The shop's customers: search (or list) and add.
 import { z } from 'zod';
-import { route } from '@/lib/route';
-import { customerQuery, newCustomer } from '@/lib/customer-request';
+import { route } from '@/lib/server/route';
+import { customerQuery, newCustomer } from '@/lib/shared/customer-request';
 import { createCustomer, listCustomers, searchCustomers } from '@/services/customers';
 
 /** With ?q=: the shop's customers found by name, phone, e-mail or ticket number; without: every one. */

@@ -1,6 +1,6 @@
 // One garment: read it with its ticket and customer; change its description, due date or assignee.
-import { route } from '@/lib/route';
-import { garmentPatch } from '@/lib/bench-requests';
+import { route } from '@/lib/server/route';
+import { garmentPatch } from '@/lib/shared/bench-requests';
 import { getGarment, updateGarment } from '@/services/garments';
 
 /** The garment with its ticket and customer. */

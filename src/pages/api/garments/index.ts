@@ -1,8 +1,8 @@
 // The queue: open work (every garment not yet collected) by default, the collected history a page
-// at a time with view=history (src/lib/queue-request.ts). Each answer carries an ETag; a client
+// at a time with view=history (src/lib/shared/queue-request.ts). Each answer carries an ETag; a client
 // sending it back in If-None-Match gets 304 while the list is unchanged.
-import { route } from '@/lib/route';
-import { queueQuery } from '@/lib/queue-request';
+import { route } from '@/lib/server/route';
+import { queueQuery } from '@/lib/shared/queue-request';
 import { readQueue } from '@/services/queue';
 
 /** The garments of the queue the role may see (an apprentice: their own and unassigned). */

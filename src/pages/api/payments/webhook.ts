@@ -1,8 +1,8 @@
 // The payment service's webhook: no session, the signature is the proof. Forged, stale or
 // replayed events change nothing.
-import { json, problem } from '@/lib/api';
-import { BodyRefused, JSON_BODY_LIMIT, readLimited } from '@/lib/body';
-import { route } from '@/lib/route';
+import { json, problem } from '@/lib/server/api';
+import { BodyRefused, JSON_BODY_LIMIT, readLimited } from '@/lib/server/body';
+import { route } from '@/lib/server/route';
 import { receiveWebhook } from '@/services/counter/payments';
 
 export const prerender = false;

@@ -4,14 +4,14 @@
 import { SHEET_RENDER_TRACE } from 'astro:env/server';
 import { isAllowanceError } from '@/lib/allowance';
 import { anonymousSheetRefusal, inAnonymousQueue } from '@/services/anonymous-sheets';
-import { clientOf } from '@/lib/client-address';
-import { problem, readBody, tooMany } from '@/lib/api';
-import { PLAN_UNREADABLE } from '@/lib/plan-request';
-import { buildCutSheet, refusedFields } from '@/lib/cut-sheet/build';
-import { renderInPool, type Rendered } from '@/lib/cut-sheet/render-off-thread';
-import { legOrders, sheetRequest } from '@/lib/cut-sheet/request';
-import type { CutSheetData } from '@/lib/cut-sheet/types';
-import { route } from '@/lib/route';
+import { clientOf } from '@/lib/server/client-address';
+import { problem, readBody, tooMany } from '@/lib/server/api';
+import { PLAN_UNREADABLE } from '@/lib/shared/plan-request';
+import { buildCutSheet, refusedFields } from '@/lib/server/cut-sheet/build';
+import { renderInPool, type Rendered } from '@/lib/server/cut-sheet/render-off-thread';
+import { legOrders, sheetRequest } from '@/lib/server/cut-sheet/request';
+import type { CutSheetData } from '@/lib/shared/cut-sheet-types';
+import { route } from '@/lib/server/route';
 
 export const prerender = false;
 

@@ -1,9 +1,9 @@
 // One preset: change it or remove it. House presets are the lead's; your own are yours.
-import { problem } from '@/lib/api';
-import { presetUpdateInput } from '@/lib/preset-settings';
-import { demand, route } from '@/lib/route';
-import type { Actor } from '@/lib/api';
-import type { Permission } from '@/lib/roles';
+import { problem } from '@/lib/server/api';
+import { presetUpdateInput } from '@/lib/shared/preset-settings';
+import { demand, route } from '@/lib/server/route';
+import type { Actor } from '@/lib/server/api';
+import type { Permission } from '@/lib/shared/roles';
 import { deletePreset, presetScope, settingsIssues, updatePreset } from '@/services/presets';
 
 export const prerender = false;

@@ -1,7 +1,7 @@
 // Presets: the shop's house presets and your own; adding one.
-import { problem } from '@/lib/api';
-import { presetCreateInput } from '@/lib/preset-settings';
-import { demand, route } from '@/lib/route';
+import { problem } from '@/lib/server/api';
+import { presetCreateInput } from '@/lib/shared/preset-settings';
+import { demand, route } from '@/lib/server/route';
 import { createPreset, listPresets, settingsIssues } from '@/services/presets';
 
 export const prerender = false;

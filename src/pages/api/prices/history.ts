@@ -1,5 +1,5 @@
 // The price list's history for the lead: who changed which line, when, old → new.
-import { route } from '@/lib/route';
+import { route } from '@/lib/server/route';
 import { priceHistory } from '@/services/counter/price-kinds';
 
 export const prerender = false;

@@ -1,6 +1,6 @@
 // The shop's price list and counter settings: everyone at the counter reads it, the lead keeps it.
-import { route } from '@/lib/route';
-import { priceListInput } from '@/lib/counter-request';
+import { route } from '@/lib/server/route';
+import { priceListInput } from '@/lib/shared/counter-request';
 import { getPriceList, savePriceList } from '@/services/counter/prices';
 
 export const prerender = false;

@@ -2,8 +2,8 @@
 // exactly as on screen (the queue island's own filter function); a last page names the garments
 // left out because they have no fitting yet.
 import { BETTER_AUTH_URL, SHEET_RENDER_TRACE } from 'astro:env/server';
-import { route } from '@/lib/route';
-import { batchQuery, sheetOptions } from '@/lib/sheet-request';
+import { route } from '@/lib/server/route';
+import { batchQuery, sheetOptions } from '@/lib/shared/sheet-request';
 import { queueSheetsStream, serverToday } from '@/services/cut-sheets';
 
 export const prerender = false;

@@ -1,10 +1,10 @@
 // The SMS service's status callback for one text: no session, the signature is the proof. It is
 // checked with the SDK's validator over the public address and the posted fields; unsigned or
 // wrongly signed answers 403 and changes nothing.
-import { json, problem } from '@/lib/api';
-import { BodyRefused, JSON_BODY_LIMIT, readLimited } from '@/lib/body';
-import { route } from '@/lib/route';
-import { signedUrlOf, verifyStatusCallback } from '@/lib/sms-service';
+import { json, problem } from '@/lib/server/api';
+import { BodyRefused, JSON_BODY_LIMIT, readLimited } from '@/lib/server/body';
+import { route } from '@/lib/server/route';
+import { signedUrlOf, verifyStatusCallback } from '@/lib/server/sms-service';
 import { recordDeliveryReport } from '@/services/notices';
 
 export const prerender = false;

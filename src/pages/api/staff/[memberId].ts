@@ -1,6 +1,6 @@
 // One member of the staff: change the role or remove (lead).
-import { route } from '@/lib/route';
-import { roleChangeInput } from '@/lib/account-inputs';
+import { route } from '@/lib/server/route';
+import { roleChangeInput } from '@/lib/shared/account-inputs';
 import { changeRole, removeMember } from '@/services/staff';
 
 /** Changes the member's role. */

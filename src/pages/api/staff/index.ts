@@ -1,6 +1,6 @@
 // The shop's staff: list (lead) and invitations by e-mail (lead).
-import { route } from '@/lib/route';
-import { inviteInput } from '@/lib/account-inputs';
+import { route } from '@/lib/server/route';
+import { inviteInput } from '@/lib/shared/account-inputs';
 import { invite, listStaff } from '@/services/staff';
 
 /** Members and pending invitations. */

@@ -1,5 +1,5 @@
 // One ticket: read it with its customer and garments, or move it (all its garments at its step) on.
-import { demand, route } from '@/lib/route';
+import { demand, route } from '@/lib/server/route';
 import { ticketStatusInput } from '@/db/schema/tickets';
 import { getTicket, moveTicket } from '@/services/tickets';
 

@@ -1,6 +1,6 @@
 // The shop's tickets: the list as the role sees it, and intake with the garments brought in.
-import { route, demand } from '@/lib/route';
-import { intakeRequest, pricesAtIntake } from '@/lib/bench-requests';
+import { route, demand } from '@/lib/server/route';
+import { intakeRequest, pricesAtIntake } from '@/lib/shared/bench-requests';
 import { createTicket, listTickets } from '@/services/tickets';
 
 /** Tickets visible to the role (an apprentice sees assigned-to-them and unassigned), newest number first. */

@@ -1,5 +1,5 @@
 // Forgetting a customer on their request: personal details erased, money records kept.
-import { route } from '@/lib/route';
+import { route } from '@/lib/server/route';
 import { eraseCustomer } from '@/services/customers';
 
 /** Erases the customer's name, contact details, notes and garment photos (the lead only). */

@@ -1,5 +1,5 @@
 // The customers screen's view of one customer: details, tickets, garments, payments, notices, history.
-import { route } from '@/lib/route';
+import { route } from '@/lib/server/route';
 import { customerFile } from '@/services/customers';
 
 /** Everything the shop keeps about the customer. */

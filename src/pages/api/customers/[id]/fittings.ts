@@ -1,5 +1,5 @@
 // "Same as last time": the customer's earlier fittings, offered when a garment is taken in.
-import { route } from '@/lib/route';
+import { route } from '@/lib/server/route';
 import { previousFittings } from '@/services/fitting-copy';
 
 /** The customer's latest fittings per garment kind; for whoever takes garments in. */

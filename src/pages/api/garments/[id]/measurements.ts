@@ -1,7 +1,7 @@
 // A garment's fitting measurements per leg: read them with their history; save both legs.
-import { problem } from '@/lib/api';
-import { route } from '@/lib/route';
-import { measurementsRequest } from '@/lib/measurement-request';
+import { problem } from '@/lib/server/api';
+import { route } from '@/lib/server/route';
+import { measurementsRequest } from '@/lib/shared/measurement-request';
 import { fittingOf, readLengths, saveMeasurements } from '@/services/measurements';
 
 /** Both legs as saved and every change to them, newest first. */

@@ -1,9 +1,9 @@
 // A garment's fitting photos: the list, and uploading from a phone or tablet (multipart form).
 import { PHOTO_MAX_BYTES } from 'astro:env/server';
-import { json, problem } from '@/lib/api';
-import { BodyRefused, readLimited } from '@/lib/body';
-import type { PhotoList } from '@/lib/photo-view';
-import { route } from '@/lib/route';
+import { json, problem } from '@/lib/server/api';
+import { BodyRefused, readLimited } from '@/lib/server/body';
+import type { PhotoList } from '@/lib/shared/photo-view';
+import { route } from '@/lib/server/route';
 import { addPhotos, garmentInShop, listPhotos, UploadRefused, type Upload } from '@/services/photos';
 
 export const prerender = false;

@@ -1,8 +1,8 @@
 // GET /api/garments/[id]/sheet: the garment's cut sheet as a PDF, in the unit asked for (or the
 // shop's own scale), its QR code opening the garment's page at the app's public address.
 import { BETTER_AUTH_URL, SHEET_RENDER_TRACE } from 'astro:env/server';
-import { route } from '@/lib/route';
-import { sheetOptions, sheetQuery } from '@/lib/sheet-request';
+import { route } from '@/lib/server/route';
+import { sheetOptions, sheetQuery } from '@/lib/shared/sheet-request';
 import { garmentSheet } from '@/services/cut-sheets';
 
 export const prerender = false;

@@ -1,6 +1,6 @@
 // Steps a garment back one step after a wrong tap; a collected garment only by the lead.
-import { route } from '@/lib/route';
-import { stepBackRequest } from '@/lib/bench-requests';
+import { route } from '@/lib/server/route';
+import { stepBackRequest } from '@/lib/shared/bench-requests';
 import { stepBackGarment } from '@/services/garment-step-back';
 
 /** Moves the garment back from the step it was seen at to the one before. */

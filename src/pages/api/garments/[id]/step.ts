@@ -1,6 +1,6 @@
 // Moves a garment one bench step on: the apprentice's one tap; pickup is the counter's.
-import { demand, route } from '@/lib/route';
-import { stepRequest } from '@/lib/bench-requests';
+import { demand, route } from '@/lib/server/route';
+import { stepRequest } from '@/lib/shared/bench-requests';
 import { moveGarment } from '@/services/garments';
 
 /** Moves the garment to the next step. */

@@ -1,7 +1,7 @@
 // Accepting an invitation: as the signed-in invitee, or by creating the invitee's account.
-import { json, readBody } from '@/lib/api';
-import { acceptInviteInput } from '@/lib/account-inputs';
-import { route } from '@/lib/route';
+import { json, readBody } from '@/lib/server/api';
+import { acceptInviteInput } from '@/lib/shared/account-inputs';
+import { route } from '@/lib/server/route';
 import { acceptInvitation, type Acceptor } from '@/services/invitations';
 
 /** Public by design: the invitation id from the e-mail is the proof. */

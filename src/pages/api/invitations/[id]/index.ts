@@ -1,5 +1,5 @@
 // What an invitation link offers (public: the id itself is the secret from the e-mail).
-import { route } from '@/lib/route';
+import { route } from '@/lib/server/route';
 import { viewInvitation } from '@/services/invitations';
 
 /** The pending invitation's shop, role and e-mail. */

@@ -1,5 +1,5 @@
 // One fitting photo: the full picture, or removing it.
-import { route } from '@/lib/route';
+import { route } from '@/lib/server/route';
 import { servePhoto } from '@/services/serve-photo';
 import { deletePhoto } from '@/services/photos';
 

@@ -1,5 +1,5 @@
 // A fitting photo's thumbnail (WebP), or a placeholder tile when none could be made (HEIC).
-import { route } from '@/lib/route';
+import { route } from '@/lib/server/route';
 import { servePhoto } from '@/services/serve-photo';
 
 export const prerender = false;

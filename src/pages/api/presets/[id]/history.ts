@@ -1,5 +1,5 @@
 // One preset's kept edits: who changed which field, when, old → new.
-import { route } from '@/lib/route';
+import { route } from '@/lib/server/route';
 import { presetHistory } from '@/services/presets';
 
 export const prerender = false;

@@ -1,6 +1,6 @@
 // One kind of work on the price list: renamed, re-priced, rush or not, retired or brought back.
-import { priceKindPatch } from '@/lib/counter-request';
-import { route } from '@/lib/route';
+import { priceKindPatch } from '@/lib/shared/counter-request';
+import { route } from '@/lib/server/route';
 import { changeKind } from '@/services/counter/price-kinds';
 
 export const prerender = false;

@@ -1,6 +1,6 @@
 // The lead's kinds of work on the price list: a new one ("Replace zip"), with a flat price.
-import { priceKindInput } from '@/lib/counter-request';
-import { route } from '@/lib/route';
+import { priceKindInput } from '@/lib/shared/counter-request';
+import { route } from '@/lib/server/route';
 import { addKind } from '@/services/counter/price-kinds';
 
 export const prerender = false;

@@ -1,7 +1,7 @@
 // The customer's claim slip for a ticket, as a PDF to print at intake, with its tear-off tags.
-import { renderClaimSlip } from '@/lib/claim-slip/render';
-import { slipCopiesQuery } from '@/lib/counter-request';
-import { route } from '@/lib/route';
+import { renderClaimSlip } from '@/lib/server/claim-slip/render';
+import { slipCopiesQuery } from '@/lib/shared/counter-request';
+import { route } from '@/lib/server/route';
 import { claimSlipData } from '@/services/counter/payments';
 
 export const prerender = false;

@@ -1,6 +1,6 @@
 // Adds a garment to a ticket (a second pair brought in at the counter, or found at the bench).
-import { route } from '@/lib/route';
-import { garmentInput } from '@/lib/bench-requests';
+import { route } from '@/lib/server/route';
+import { garmentInput } from '@/lib/shared/bench-requests';
 import { addGarment } from '@/services/garments';
 
 /** Adds one garment to the ticket. */

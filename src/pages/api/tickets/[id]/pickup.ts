@@ -1,5 +1,5 @@
 // Hands a ready, paid ticket over to the customer: it is closed as collected.
-import { route } from '@/lib/route';
+import { route } from '@/lib/server/route';
 import { pickUp } from '@/services/counter/payments';
 
 export const prerender = false;

@@ -1,7 +1,7 @@
 // Settles the credit owed to the customer on a ticket: cash back, card terminal, kept as credit,
 // or a refund of an online payment through the payment service.
-import { route } from '@/lib/route';
-import { refundInput } from '@/lib/counter-request';
+import { route } from '@/lib/server/route';
+import { refundInput } from '@/lib/shared/counter-request';
 import { settleCredit } from '@/services/counter/refunds';
 
 export const prerender = false;

@@ -1,6 +1,6 @@
 // A ticket's notices to the customer: the list with delivery states, and sending the ready notice.
-import { route } from '@/lib/route';
-import { noticeInput } from '@/lib/counter-request';
+import { route } from '@/lib/server/route';
+import { noticeInput } from '@/lib/shared/counter-request';
 import { listNotices, resendReadyNotice, sendPayLink, sendReadyNotice } from '@/services/notices';
 
 export const prerender = false;

@@ -1,7 +1,7 @@
 // A ticket's money at the counter: the summary (lines, total, payments, balance) and taking a payment.
-import { route } from '@/lib/route';
-import { paymentInput } from '@/lib/counter-request';
-import { smsConfigured } from '@/lib/sms-service';
+import { route } from '@/lib/server/route';
+import { paymentInput } from '@/lib/shared/counter-request';
+import { smsConfigured } from '@/lib/server/sms-service';
 import { counterSummary, takePayment } from '@/services/counter/payments';
 
 export const prerender = false;

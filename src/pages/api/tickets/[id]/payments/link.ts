@@ -1,5 +1,5 @@
 // An online payment link for the balance due, made through the payment service.
-import { route } from '@/lib/route';
+import { route } from '@/lib/server/route';
 import { createPaymentLink } from '@/services/counter/payments';
 
 export const prerender = false;

@@ -1,6 +1,6 @@
 // Prices the ticket from its garments' finishes and plans (taper let-out included), with or without rush.
-import { route } from '@/lib/route';
-import { autoLinesInput } from '@/lib/counter-request';
+import { route } from '@/lib/server/route';
+import { autoLinesInput } from '@/lib/shared/counter-request';
 import { priceFromGarments } from '@/services/counter/prices';
 
 export const prerender = false;

@@ -1,6 +1,6 @@
 // A ticket's price lines: read them, or add one from the list or an adjustment with its reason.
-import { route } from '@/lib/route';
-import { lineInput } from '@/lib/counter-request';
+import { route } from '@/lib/server/route';
+import { lineInput } from '@/lib/shared/counter-request';
 import { addLine, listLines } from '@/services/counter/prices';
 
 export const prerender = false;

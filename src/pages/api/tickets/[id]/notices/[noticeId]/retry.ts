@@ -1,5 +1,5 @@
 // Tries a failed notice again now.
-import { route } from '@/lib/route';
+import { route } from '@/lib/server/route';
 import { retryNotice } from '@/services/notices';
 
 export const prerender = false;

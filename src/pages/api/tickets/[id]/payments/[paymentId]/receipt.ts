@@ -1,5 +1,5 @@
 // One payment's receipt as a PDF to print at the counter, and the same receipt e-mailed.
-import { route } from '@/lib/route';
+import { route } from '@/lib/server/route';
 import { emailReceipt, receiptPdf } from '@/services/counter/receipts';
 
 export const prerender = false;

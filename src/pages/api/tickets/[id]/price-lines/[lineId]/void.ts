@@ -1,6 +1,6 @@
 // Voids a wrong price line with its reason: it stays on the ticket, struck through, and in the history.
-import { route } from '@/lib/route';
-import { voidLineInput } from '@/lib/counter-request';
+import { route } from '@/lib/server/route';
+import { voidLineInput } from '@/lib/shared/counter-request';
 import { voidLine } from '@/services/counter/prices';
 
 export const prerender = false;

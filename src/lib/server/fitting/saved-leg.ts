@@ -1,0 +1,63 @@
+// The one way from a saved leg to the engine's input: the cut sheet and the pricing read the saved
+// lengths straight into the engine's order (no form values, no request body, no second parse of
+// the schema); which length goes where is the registry's. Pure: the engine and the sheet's types only.
+import type { CuffInput, HemInput, Precision, Unit } from '../../allowance/types';
+import type { LegOrder, TaperWidths } from '../cut-sheet/build';
+import { typedForUnit } from '../../shared/length-reading';
+import { FIELD_KEYS, fieldsOf, type FieldKey, type Finish } from '../../shared/fitting/kinds';
+import { planLengths, plansOf, type LegTexts } from '../../shared/fitting/plan-lengths';
+
+/** A leg as saved (the API's SavedLeg, or a measurements row): its side, unit, finish and lengths as typed. */
+export interface StoredLeg {
+  leg: 'left' | 'right';
+  unit: Unit;
+  finish: Finish;
+  values: Partial<Record<FieldKey, { text: string }>>;
+}
+
+/**
+ * The saved lengths as text the engine reads in `to`: a fitting typed in one unit and printed in
+ * another keeps its own unit, so "1 1/2" typed in inches reads 38.1 mm exactly in a mm plan rather
+ * than from a rounded mm. Every bare part gets the fitting's unit ("30 + 5 mm" → "30 in + 5 mm").
+ */
+export function savedTexts(saved: StoredLeg, to: Unit): LegTexts {
+  const out: LegTexts = {};
+  for (const key of FIELD_KEYS) {
+    const text = saved.values[key]?.text?.trim();
+    if (text) out[key] = typedForUnit(text, saved.unit, to);
+  }
+  return out;
+}
+
+/** The engine's order for one saved leg in the given unit, or null while a cuff has no depth (`letDown`: the width measured at the cut is used). */
+export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision, opts: { letDown?: boolean } = {}): LegOrder | null {
+  const texts = savedTexts(saved, unit);
+  const plans = plansOf(saved.finish);
+  const main = planLengths(plans.main, saved.finish, texts);
+  if (!main) return null;
+  const scale = unit === 'in' ? { unit, precision } : { unit };
+  const widths = planLengths(plans.taper, saved.finish, texts, opts.letDown);
+  // The pinned length goes on the sheet as typed, in its own unit when the sheet's differs.
+  const finished = texts.backPin ? { finished: texts.backPin } : {};
+  // The finish's lengths no plan uses but the bench needs (the registry's 'listed'), as typed.
+  const listed = fieldsOf(saved.finish).filter((f) => f.printed === 'listed' && texts[f.key as FieldKey]);
+  const recorded = listed.length ? { recorded: listed.map((f) => ({ label: f.label, text: texts[f.key as FieldKey]! })) } : {};
+  const taper: { taper?: TaperWidths } = widths
+    ? {
+        taper: {
+          widthAtEdge: widths.widthAtEdge!,
+          widthAbove: widths.widthAbove!,
+          heightAbove: widths.heightAbove!,
+          seamAllowance: widths.seamAllowance,
+          widthAtCut: widths.widthAtCut,
+        },
+      }
+    : {};
+  if (plans.main === 'cuff') return { side: saved.leg, finish: 'cuff', input: { ...scale, ...main } as CuffInput, ...finished, ...recorded, ...taper };
+  return { side: saved.leg, finish: 'hem', input: { ...scale, ...main } as HemInput, ...finished, ...recorded, ...taper };
+}
+
+/** True when a saved leg has what its plan needs (a cuff its depth): what the sheet asks of a fitting. */
+export function canBePlanned(saved: Omit<StoredLeg, 'leg'>): boolean {
+  return planLengths(plansOf(saved.finish).main, saved.finish, savedTexts({ ...saved, leg: 'left' }, saved.unit)) !== null;
+}

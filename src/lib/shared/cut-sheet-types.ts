@@ -1,0 +1,77 @@
+// What a cut sheet is made from: plain data, no database. A saved garment and the public
+// calculator both build one of these and hand it to renderCutSheet.
+import type { Language } from './i18n/languages';
+import type { CreaseLanding, CuffInput, CuffPlan, HemInput, HemPlan, HemTaperInput, Precision, TaperInput, TaperPlan, Unit } from '@/lib/allowance/types';
+import type { ExistingFinish } from '@/lib/shared/existing-finish';
+
+/** The paper a sheet is printed on. */
+export type PageSize = 'LETTER' | 'A4';
+
+/** Which leg of the trouser. */
+export type Side = 'left' | 'right';
+
+/** A length the fitting recorded for the bench that the engine does not plan with (a label and the text as typed). */
+export interface RecordedLength {
+  label: string;
+  text: string;
+}
+
+/** One leg finished with a cuff: the engine's input, its plan and, on a tapered leg, the taper check. */
+export interface CuffLeg {
+  side: Side;
+  finish: 'cuff';
+  input: CuffInput;
+  plan: CuffPlan;
+  taper?: { input: TaperInput; plan: TaperPlan };
+  /** where an old hem crease lands; defaults to plan.creaseLands */
+  crease?: CreaseLanding;
+  /** the finished length pinned at the back, as typed ("31 3/4 + 1/8"), in the plan's unit unless it names one */
+  finished?: string;
+  /** lengths recorded at the fitting that no plan uses, printed as typed (the registry's 'listed' fields) */
+  recorded?: RecordedLength[];
+}
+
+/** One leg finished with a plain hem. */
+export interface HemLeg {
+  side: Side;
+  finish: 'hem';
+  input: HemInput;
+  plan: HemPlan;
+  /** on a tapered leg: the hem turned up must lie flat too */
+  taper?: { input: HemTaperInput; plan: TaperPlan };
+  /** where an old hem crease lands, if the shop noted it */
+  crease?: CreaseLanding;
+  /** the finished length pinned at the back, as typed, in the plan's unit unless it names one */
+  finished?: string;
+  /** lengths recorded at the fitting that no plan uses, printed as typed (the registry's 'listed' fields) */
+  recorded?: RecordedLength[];
+}
+
+/** One leg of the garment. */
+export type LegSheet = CuffLeg | HemLeg;
+
+/** Everything one cut sheet shows: one garment, one page. */
+export interface CutSheetData {
+  /** shop name; null on an unsaved calculator plan */
+  shop: string | null;
+  /** ticket number as the shop writes it ("1042", "A-17"); null when unsaved */
+  ticket: string | null;
+  /** garment description ("Navy wool flannel trousers") */
+  garment: string | null;
+  /** due date, ISO yyyy-mm-dd */
+  due: string | null;
+  /** who does the work */
+  assignee: string | null;
+  unit: Unit;
+  precision: Precision;
+  /** one or two legs, left before right; a single leg stands for both */
+  legs: LegSheet[];
+  /** the garment's page in the app, for the QR code; absent on an unsaved plan */
+  link?: string;
+  /** default LETTER */
+  pageSize?: PageSize;
+  /** the language of the sheet's words (the shop's, or the calculator visitor's); default English */
+  language?: Language;
+  /** how the bottoms came in, from the garment's intake; absent on a calculator plan, which has no garment */
+  existingFinish?: ExistingFinish;
+}
