@@ -13,7 +13,15 @@ import type { FittingView } from '@/lib/shared/bench-types';
 import { PRESET_LENGTHS, type PresetLength, type PresetView } from '@/lib/shared/preset-settings';
 import { readFinish } from '@/lib/shared/fitting/kinds';
 import { ApiError, fetchJson } from '@/lib/shared/fetch-json';
-import { LEGS, legFormValues, measurementsRequest, type Leg, type LegLength, type Measurements, type MeasurementsInput } from '@/lib/shared/measurement-request';
+import {
+  LEGS,
+  legFormValues,
+  measurementsRequest,
+  type Leg,
+  type LegLength,
+  type Measurements,
+  type MeasurementsInput,
+} from '@/lib/shared/measurement-request';
 import { readLength, typedForUnit } from '@/lib/shared/length-reading';
 import { afterSave } from './after-save';
 import { LegFields } from './LegFields';

@@ -7,7 +7,15 @@ import fr from '../../shared/i18n/messages/fr.json';
 import { registerMessages, type Messages } from '../../shared/i18n/format';
 import type { Language } from '../../shared/i18n/languages';
 
-export { partsTranslator, registerMessages, translator, type MessageKey, type MessageValues, type Translate, type TranslateParts } from '../../shared/i18n/format';
+export {
+  partsTranslator,
+  registerMessages,
+  translator,
+  type MessageKey,
+  type MessageValues,
+  type Translate,
+  type TranslateParts,
+} from '../../shared/i18n/format';
 
 const CATALOGS: Record<Language, Messages> = { en, fr };
 for (const [language, messages] of Object.entries(CATALOGS)) registerMessages(language as Language, messages);
