@@ -9,7 +9,7 @@ import { fromAcceptLanguage, intlLocale, LANGUAGES } from '@/lib/shared/i18n/lan
 
 // The catalogs as written (the build hands the app syntax trees; here the source text is read).
 const source = (lang: string): Record<string, string> =>
-  JSON.parse(readFileSync(new URL(`../../../src/lib/i18n/messages/${lang}.json`, import.meta.url), 'utf8'));
+  JSON.parse(readFileSync(new URL(`../../../src/lib/shared/i18n/messages/${lang}.json`, import.meta.url), 'utf8'));
 
 // Every argument a message reads, with its kind, and the selector keys of each select.
 function shape(elements: MessageFormatElement[], out = new Set<string>()): Set<string> {
