@@ -28,8 +28,10 @@ describe('a pending waist change on the sheet', () => {
   it('is saved, read back, and prints the mark moved 1 1/2 in down, from 31 1/2 in to 33 in', async () => {
     const { garment } = await openTicket(a, { garments: [{ description: 'Grey trousers, waist to take in' }] });
     await saveFitting(a.tailor, garment.id, fittingRequest(leg, leg, 'in', 'plain'));
-    const left = (await fittingOf(a.lead, garment.id)).legs.find((l) => l.leg === 'left')!;
-    expect(left.values.waistChange?.text).toBe('-1');
+    const fitting = await fittingOf(a.lead, garment.id);
+    expect(fitting.legs.find((l) => l.leg === 'left')!.values.waistChange?.text).toBe('-1');
+    // The garment page's note: the same figures as the sheet, in the shop's scale (eighths by default).
+    expect(fitting.waist?.left).toMatchObject({ code: 'moves', direction: 'down', by: '1 1/2 in', pin: '31 1/2 in', mark: '33 in' });
     const text = flatText(pdfFile((await garmentSheet(a.tailor, garment.id, {}, 'https://bench.cuffwright.test')).bytes));
     // By hand: 1 × 9/(40 − 34) = 1 1/2 in; 31 1/2 + 1 1/2 = 33 in.
     expect(squash(text)).toContain(squash('the pin mark moves down 1 1/2 in, from 31 1/2 in to 33 in'));
