@@ -56,7 +56,8 @@ export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision
         },
       }
     : {};
-  if (plans.main === 'cuff') return { side: saved.leg, finish: 'cuff', input: { ...scale, ...main } as CuffInput, ...finished, ...recorded, ...waist, ...taper };
+  if (plans.main === 'cuff')
+    return { side: saved.leg, finish: 'cuff', input: { ...scale, ...main } as CuffInput, ...finished, ...recorded, ...waist, ...taper };
   return { side: saved.leg, finish: 'hem', input: { ...scale, ...main } as HemInput, ...finished, ...recorded, ...waist, ...taper };
 }
 
