@@ -3,7 +3,7 @@
 // parser (about 7 KiB gzip saved on every island page; the public calculator's budget is 100 KiB).
 import { parse } from '@formatjs/icu-messageformat-parser';
 
-const CATALOG = /[\\/]src[\\/]lib[\\/]i18n[\\/]messages[\\/][a-z-]+\.json$/;
+const CATALOG = /[\\/]src[\\/]lib[\\/](?:shared[\\/])?i18n[\\/]messages[\\/][a-z-]+\.json$/;
 
 /** Parses the catalog's messages into syntax trees (still JSON, so Vite's own JSON plugin loads it). */
 export function icuCatalog() {
