@@ -12,6 +12,10 @@ import { auditMany, auditOf } from './audit';
 import { visibleGarment } from './garments';
 import { ServiceError } from './errors';
 import { usablePreset } from './presets';
+import { benchSettings } from './shop-settings';
+import { scaleUnit } from '@/lib/shared/bench-requests';
+import { savedTexts } from '@/lib/server/fitting/saved-leg';
+import { waistNoteOf } from '@/lib/server/fitting/waist-note';
 
 /** Both legs' lengths read exactly, or a message for each field that could not be read. */
 export type ReadLengths = { ok: true; legs: Record<Leg, Partial<Record<LegLength, SavedLength>>> } | { ok: false; issues: Record<string, string> };
@@ -170,8 +174,21 @@ export async function saveMeasurements(
   return fittingOf(actor, garmentId);
 }
 
+// The pending waist change's note per leg, in the shop's scale, as the cut sheet prints it.
+async function waistNotes(shopId: string, legs: SavedLeg[]): Promise<Pick<FittingView, 'waist'>> {
+  if (!legs.some((l) => l.values.waistChange?.text?.trim())) return {};
+  const { unit, precision } = scaleUnit((await benchSettings(shopId)).scale);
+  const waist: NonNullable<FittingView['waist']> = {};
+  for (const l of legs) {
+    const note = waistNoteOf(savedTexts(l, unit), unit, precision);
+    if (note) waist[l.leg] = note;
+  }
+  return { waist };
+}
+
 /** A garment's fitting as its page shows it: both legs and the history of changes, newest first. */
 export async function fittingOf(actor: Actor, garmentId: string): Promise<FittingView> {
   const g = await visibleGarment(actor, garmentId);
-  return { legs: await legsOf(g.id), history: await auditOf(actor.shopId, [g.id]) };
+  const legs = await legsOf(g.id);
+  return { legs, history: await auditOf(actor.shopId, [g.id]), ...(await waistNotes(actor.shopId, legs)) };
 }

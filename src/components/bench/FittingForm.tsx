@@ -26,6 +26,7 @@ import { readLength, typedForUnit } from '@/lib/shared/length-reading';
 import { afterSave } from './after-save';
 import { LegFields } from './LegFields';
 import { LegPlanView } from './LegPlan';
+import { WaistNoteLine } from './WaistNoteLine';
 import { PlanSummary } from './PlanSummary';
 import { useLegPlan } from './use-leg-plan';
 import { keepDraft, readDraft } from './use-draft';
@@ -184,6 +185,7 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
   return (
     <div className="flex flex-col gap-4">
       <PlanSummary leg={leg} planned={planned} />
+      <WaistNoteLine note={fitting.waist?.[leg]} />
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,30rem)_minmax(0,1fr)]">
         <form
           aria-label={t('fitting.form')}

@@ -4,6 +4,7 @@ import { shopReading, typedWithUnit } from '@/lib/shared/length-reading';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import type { FittingView } from '@/lib/shared/bench-types';
 import { FINISH_LABELS, LEG_LENGTH_LABELS, LEG_LENGTHS, LEGS, legFormValues, type Leg } from '@/lib/shared/measurement-request';
+import { WaistNoteLine } from './WaistNoteLine';
 import { LegPlan } from './LegPlan';
 
 interface Props {
@@ -107,7 +108,10 @@ export function FittingReadOnly({ fitting, precision, unit, letDown = false }: P
           options={LEGS.map((l) => ({ value: l, label: l === 'left' ? 'Left leg' : 'Right leg' }))}
         />
       </section>
-      <LegPlan leg={leg} values={legFormValues(byLeg.get(leg))} unit={shownUnit} precision={precision} letDown={letDown} />
+      <div className="flex flex-col gap-4">
+        <WaistNoteLine note={fitting.waist?.[leg]} />
+        <LegPlan leg={leg} values={legFormValues(byLeg.get(leg))} unit={shownUnit} precision={precision} letDown={letDown} />
+      </div>
     </div>
   );
 }

@@ -6,6 +6,7 @@ import type { GarmentStep } from './garment-steps';
 import type { Scale } from './bench-requests';
 import type { FittingRule } from './fitting-rule';
 import type { SavedLeg } from './measurement-request';
+import type { WaistNote } from './cut-sheet-types';
 
 /** A person a garment can be given to. */
 export interface Person {
@@ -101,4 +102,6 @@ export interface GarmentDetail extends TicketGarment {
 export interface FittingView {
   legs: SavedLeg[];
   history: AuditEntry[];
+  /** each leg's pending waist change and where it moves the pin mark, in the shop's scale (as the sheet prints it) */
+  waist?: Partial<Record<'left' | 'right', WaistNote>>;
 }

@@ -10,6 +10,20 @@ export type PageSize = 'LETTER' | 'A4';
 /** Which leg of the trouser. */
 export type Side = 'left' | 'right';
 
+/** A pending waist change's effect on the pin mark, as printed (lengths already written in the sheet's unit; `mark` = pin + `by` down, in whole steps). */
+export interface WaistNote {
+  code: 'moves' | 'movesBy' | 'none' | 'needs';
+  change: string;
+  by: string;
+  direction: 'down' | 'up' | 'none';
+  /** the pin as printed ('' when none was pinned) */
+  pin: string;
+  /** the moved mark: pin + by down (or − by up), in whole steps */
+  mark: string;
+  rule: string;
+  source: string;
+}
+
 /** A length the fitting recorded for the bench that the engine does not plan with (a label and the text as typed). */
 export interface RecordedLength {
   label: string;
@@ -29,6 +43,8 @@ export interface CuffLeg {
   finished?: string;
   /** lengths recorded at the fitting that no plan uses, printed as typed (the registry's 'listed' fields) */
   recorded?: RecordedLength[];
+  /** the pending waist change and where it moves the pin mark */
+  waist?: WaistNote;
 }
 
 /** One leg finished with a plain hem. */
@@ -45,6 +61,8 @@ export interface HemLeg {
   finished?: string;
   /** lengths recorded at the fitting that no plan uses, printed as typed (the registry's 'listed' fields) */
   recorded?: RecordedLength[];
+  /** the pending waist change and where it moves the pin mark */
+  waist?: WaistNote;
 }
 
 /** One leg of the garment. */

@@ -21,4 +21,9 @@ export const FITTING_VALUES: Record<FieldKey, string> = {
   heightAbove: '12',
   widthAtCut: '8 1/8',
   seamAllowance: '1/2',
+  // Invented wearer: taken in 1 in, waist 34 in, seat 40 in, 8 in apart (common practice, no source).
+  waistChange: '-1',
+  waistGirth: '34',
+  seatGirth: '40',
+  waistToSeat: '8',
 };

@@ -218,6 +218,7 @@ function LegBlock({ g, width, t }: { g: SheetLegGroup; width: number; t: Transla
       {g.taper?.work && <Text style={[s.small, { marginTop: 1 }]}>{g.taper.work}</Text>}
       {g.crease && <Text style={[s.small, { marginTop: 2 }]}>{g.crease}</Text>}
       {g.recorded && <Text style={[s.small, { marginTop: 2 }]}>{g.recorded}</Text>}
+      {g.waist && <Text style={[s.small, s.strong, { marginTop: 2 }]}>{g.waist}</Text>}
       {g.warnings.map((w, i) => (
         <Text key={i} style={[s.small, { marginTop: 2, color: INK.warn, fontWeight: 700 }]}>
           {t('sheet.check', { text: w })}

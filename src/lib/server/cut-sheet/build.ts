@@ -13,7 +13,7 @@ import {
   validateTaperInput,
 } from '../../allowance/index';
 import type { CuffInput, HemInput, LengthInput, TaperInput } from '../../allowance/types';
-import type { CutSheetData, LegSheet, RecordedLength, Side } from '../../shared/cut-sheet-types';
+import type { CutSheetData, LegSheet, RecordedLength, Side, WaistNote } from '../../shared/cut-sheet-types';
 
 /** Leg widths for a taper check; the cuff's own depth, sections and unit are taken from the cuff. */
 export interface TaperWidths {
@@ -28,8 +28,8 @@ export interface TaperWidths {
 
 /** What one leg should become: a cuff (maybe on a tapered leg) or a plain hem. */
 export type LegOrder =
-  | { side: Side; finish: 'cuff'; input: CuffInput; taper?: TaperWidths; finished?: string; recorded?: RecordedLength[] }
-  | { side: Side; finish: 'hem'; input: HemInput; taper?: TaperWidths; finished?: string; recorded?: RecordedLength[] };
+  | { side: Side; finish: 'cuff'; input: CuffInput; taper?: TaperWidths; finished?: string; recorded?: RecordedLength[]; waist?: WaistNote }
+  | { side: Side; finish: 'hem'; input: HemInput; taper?: TaperWidths; finished?: string; recorded?: RecordedLength[]; waist?: WaistNote };
 
 // A plain hem's taper check takes the hem's own unit, precision and allowance.
 function hemTaperInput(hem: HemInput, widths: TaperWidths) {
@@ -88,6 +88,7 @@ export function planLeg(order: LegOrder): LegSheet {
     const finished = order.finished?.trim() ? { finished: order.finished.trim() } : {};
     const hem: LegSheet = { side: order.side, finish: 'hem', input: order.input, plan: planHem(order.input), ...finished };
     if (order.recorded?.length) hem.recorded = order.recorded;
+    if (order.waist) hem.waist = order.waist;
     if (order.taper) {
       const input = hemTaperInput(order.input, order.taper);
       hem.taper = { input, plan: checkHemTaper(input) };
@@ -99,6 +100,7 @@ export function planLeg(order: LegOrder): LegSheet {
   const text = order.finished?.trim();
   if (text) leg.finished = text;
   if (order.recorded?.length) leg.recorded = order.recorded;
+  if (order.waist) leg.waist = order.waist;
   if (order.taper) {
     const input = taperInput(order.input, order.taper);
     leg.taper = { input, plan: checkTaper(input) };

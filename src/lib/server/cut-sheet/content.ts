@@ -47,6 +47,8 @@ export interface SheetLegGroup {
   crease: string | null;
   /** what the fitting recorded for the bench beyond the plan ("Recorded at the fitting: ..."), or null */
   recorded: string | null;
+  /** the pending waist change and where it moves the pin mark, or null */
+  waist: string | null;
   warnings: string[];
   leg: LegSheet;
   /** every figure the block prints, in whole display steps */
@@ -124,7 +126,7 @@ function formatDue(iso: string, language: Language): string {
 }
 
 function sameWork(a: LegSheet, b: LegSheet): boolean {
-  const key = (l: LegSheet) => JSON.stringify([l.finish, l.plan, l.taper?.plan ?? null, creaseOf(l), l.recorded ?? null]);
+  const key = (l: LegSheet) => JSON.stringify([l.finish, l.plan, l.taper?.plan ?? null, creaseOf(l), l.recorded ?? null, l.waist ?? null]);
   return key(a) === key(b);
 }
 
@@ -297,6 +299,7 @@ function groupOf(t: Translate, leg: LegSheet, label: string, strip: string, exis
     taper: taperOf(t, leg, pp),
     crease: creaseNote(t, crease, existing),
     recorded: recordedNote(t, leg),
+    waist: leg.waist ? t(`waist.${leg.waist.code}` as MessageKey, { ...leg.waist }) : null,
     warnings: [
       ...new Set([
         ...warnings.filter((w) => !SAID_ELSEWHERE.has(w.code) && !(crease && w.code === 'old-crease-visible')).map((w) => warningText(t, w)),

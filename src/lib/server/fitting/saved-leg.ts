@@ -6,6 +6,7 @@ import type { LegOrder, TaperWidths } from '../cut-sheet/build';
 import { typedForUnit } from '../../shared/length-reading';
 import { FIELD_KEYS, fieldsOf, type FieldKey, type Finish } from '../../shared/fitting/kinds';
 import { planLengths, plansOf, type LegTexts } from '../../shared/fitting/plan-lengths';
+import { waistNoteOf } from './waist-note';
 
 /** A leg as saved (the API's SavedLeg, or a measurements row): its side, unit, finish and lengths as typed. */
 export interface StoredLeg {
@@ -42,6 +43,8 @@ export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision
   // The finish's lengths no plan uses but the bench needs (the registry's 'listed'), as typed.
   const listed = fieldsOf(saved.finish).filter((f) => f.printed === 'listed' && texts[f.key as FieldKey]);
   const recorded = listed.length ? { recorded: listed.map((f) => ({ label: f.label, text: texts[f.key as FieldKey]! })) } : {};
+  const note = waistNoteOf(texts, unit, precision);
+  const waist = note ? { waist: note } : {};
   const taper: { taper?: TaperWidths } = widths
     ? {
         taper: {
@@ -53,8 +56,9 @@ export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision
         },
       }
     : {};
-  if (plans.main === 'cuff') return { side: saved.leg, finish: 'cuff', input: { ...scale, ...main } as CuffInput, ...finished, ...recorded, ...taper };
-  return { side: saved.leg, finish: 'hem', input: { ...scale, ...main } as HemInput, ...finished, ...recorded, ...taper };
+  if (plans.main === 'cuff')
+    return { side: saved.leg, finish: 'cuff', input: { ...scale, ...main } as CuffInput, ...finished, ...recorded, ...waist, ...taper };
+  return { side: saved.leg, finish: 'hem', input: { ...scale, ...main } as HemInput, ...finished, ...recorded, ...waist, ...taper };
 }
 
 /** True when a saved leg has what its plan needs (a cuff its depth): what the sheet asks of a fitting. */

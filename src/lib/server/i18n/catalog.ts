@@ -40,6 +40,7 @@ export const BENCH_MESSAGES = [
   'field.',
   'fieldHint.',
   'fitting.',
+  'waist.',
   'garment.',
   'print.',
   'summary.',

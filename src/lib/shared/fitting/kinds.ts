@@ -49,6 +49,7 @@ export const GROUPS = {
   part: '', // titled by the part: "Cuff" or "Hem"
   cloth: 'Cloth',
   taper: 'Taper check (flat widths)',
+  waist: 'Pending waist change',
 } as const;
 /** A group of the bench form. */
 export type GroupId = keyof typeof GROUPS;
@@ -231,6 +232,53 @@ const TROUSER_FIELDS = [
     engine: { taper: 'optional', hemTaper: 'optional' },
     preset: false,
     printed: 'plan',
+  },
+  {
+    // A waist change waiting on the same trousers moves where they sit, so the pin mark moves with it
+    // (waistMovesHem, rule 'girth-slope': from the wearer's waist and seat girths and the depth between).
+    key: 'waistChange',
+    label: 'Pending waist change',
+    hint: 'Still to do at the waistband: negative taken in (e.g. -1), positive let out. Blank: none.',
+    unit: 'length',
+    finishes: ALL,
+    group: 'waist',
+    engine: {},
+    preset: false,
+    printed: 'listed',
+  },
+  {
+    key: 'waistGirth',
+    label: 'Waist girth (body, where the band sits)',
+    shortLabel: 'Waist girth',
+    unit: 'length',
+    finishes: ALL,
+    group: 'waist',
+    engine: {},
+    preset: false,
+    printed: 'listed',
+  },
+  {
+    key: 'seatGirth',
+    label: 'Seat girth (body)',
+    shortLabel: 'Seat girth',
+    unit: 'length',
+    finishes: ALL,
+    group: 'waist',
+    engine: {},
+    preset: false,
+    printed: 'listed',
+  },
+  {
+    key: 'waistToSeat',
+    label: 'Waist to seat (down the body)',
+    shortLabel: 'Waist to seat',
+    hint: 'From where the band sits down to the fullest part of the seat.',
+    unit: 'length',
+    finishes: ALL,
+    group: 'waist',
+    engine: {},
+    preset: false,
+    printed: 'listed',
   },
 ] as const satisfies readonly FittingField[];
 
