@@ -2,7 +2,8 @@ import { useState, type SubmitEvent } from 'react';
 import { useT } from '@/components/I18n';
 import type { Translate } from '@/lib/shared/i18n/format';
 import type { Precision, Unit } from '@/lib/allowance/types';
-import { checkPlanRequest } from '@/lib/shared/plan-check';
+import { catalogLengthWords } from '@/lib/shared/i18n/check-words';
+import { checkPlanRequest, type LengthWords } from '@/lib/shared/plan-check';
 import type { PlanRequestInput } from '@/lib/shared/plan-request';
 import { BLANK, LENGTH_FIELDS, mainRequest, taperRequest, type CalculatorValues, type LengthField } from './calculator-values';
 import { convertTyped, readLength } from '@/lib/shared/length-reading';
@@ -32,8 +33,8 @@ function serverMessage(t: Translate, answer: PlanAnswer | undefined, field: stri
 }
 
 /** The server's own rules, checked in the browser: a message per field of the request, or none. */
-function ownMessages(request: PlanRequestInput | null): Record<string, string> {
-  const checked = request ? checkPlanRequest(request) : null;
+function ownMessages(request: PlanRequestInput | null, say: LengthWords): Record<string, string> {
+  const checked = request ? checkPlanRequest(request, say) : null;
   return checked && !checked.ok ? checked.issues : {};
 }
 
@@ -63,7 +64,8 @@ export function CalculatorForm() {
   const bind: Bind = (f) => ({ name: f, value: values[f], onChange: (e) => setField(f, e.target.value) });
 
   // Checked as typed, with the server's rules and words; the engine's own (what a length means) come from the answer.
-  const own = { ...(taperOpen ? ownMessages(taperRequest(values)) : {}), ...ownMessages(mainRequest(values)) };
+  const say = catalogLengthWords(t);
+  const own = { ...(taperOpen ? ownMessages(taperRequest(values), say) : {}), ...ownMessages(mainRequest(values), say) };
   const errorFor = (f: LengthField): string | undefined =>
     (typedIn.has(f) ? own[f] : undefined) ?? serverMessage(t, main.data, f) ?? (taperOpen ? serverMessage(t, taper.data, f) : undefined);
 
