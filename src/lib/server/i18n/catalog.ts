@@ -47,4 +47,8 @@ export const BENCH_MESSAGES = [
   'step.',
   'existing.',
   'due.',
+  'move.',
 ] as const;
+
+/** The parts the queue renders: its own words, the steps, due dates and the Mark buttons. */
+export const QUEUE_MESSAGES = ['queue.', 'step.', 'due.', 'move.'] as const;
