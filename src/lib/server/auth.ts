@@ -11,7 +11,9 @@ import { shopPlugin } from './auth-plugins';
 import { authSecret } from './auth-secret';
 import { refuseUnsafeStart } from './deployment';
 import { sendMail } from './mail';
-import { ROLE_LABELS, isRole } from '../shared/roles';
+import { translator } from './i18n/catalog';
+import { shopLanguage } from './i18n/shop-language';
+import { invitationMail } from './invitation-mail';
 
 // A shared database without a session secret stops here (and in services/startup.ts, at start).
 refuseUnsafeStart({ DATABASE_URL, BETTER_AUTH_SECRET });
@@ -49,14 +51,7 @@ export const auth = betterAuth({
     shopPlugin({
       sendInvitation: async ({ id, email, role, shopId, shopName, inviterName }) =>
         sendMail(
-          {
-            to: email,
-            subject: `${inviterName} invited you to ${shopName} on Cuffwright`,
-            text:
-              `${inviterName} invited you to join ${shopName} on Cuffwright as ` +
-              `${isRole(role) ? ROLE_LABELS[role].name.toLowerCase() : role}.\n\n` +
-              `Open this link to accept and choose your password:\n\n${BETTER_AUTH_URL}/invite/${id}\n`,
-          },
+          { to: email, ...invitationMail(translator(await shopLanguage(shopId)), BETTER_AUTH_URL, { id, role, shopName, inviterName }) },
           { shopId, kind: 'invitation' },
         ),
     }),
