@@ -40,7 +40,7 @@ describe('engine refusals through the catalog', () => {
     const en = translator('en');
     const fr = translator('fr');
     for (const code of ALLOWANCE_ERROR_CODES) {
-      for (const values of [{}, { label: 'Cuff depth' }, { label: 'Cuff depth', inner: 'yes' }]) {
+      for (const values of [{}, { label: 'Cuff depth' }, { label: 'Cuff depth', inner: 'yes' }] as Record<string, string>[]) {
         const text = refusalText(fr, { code, values }, undefined, values.label ? 'Hauteur du revers' : undefined);
         expect(text, code).not.toMatch(/[{}]|^refusal\./);
         expect(text, code).not.toBe(refusalText(en, { code, values }));
