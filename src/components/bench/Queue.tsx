@@ -154,7 +154,14 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
       col.accessor((r) => r.readyAt ?? '~', {
         id: 'waiting',
         header: t('queue.col.waiting'),
-        cell: (c) => <span data-testid="ready-age">{readyAge(c.row.original.readyAt, todayIso())?.text ?? label('ready')}</span>,
+        cell: (c) => (
+          <span data-testid="ready-age">
+            {(() => {
+              const age = readyAge(c.row.original.readyAt, todayIso());
+              return age ? t('queue.readyAge', { days: age.days }) : label('ready');
+            })()}
+          </span>
+        ),
       }),
       col.display({
         id: 'move',

@@ -45,3 +45,21 @@ describe('the queue in the shop language', () => {
     expect(button(null)).toContain('aria-label="Mark Chalk-marked: HH-1 Grey flannels"');
   });
 });
+
+describe('the queue’s counted words', () => {
+  it('says how long ready work has waited in each language', async () => {
+    const { translator } = await import('@/lib/server/i18n/catalog');
+    const { readyAge } = await import('@/lib/shared/queue-filter');
+    // English as readyAge itself writes it, for 0, 1 and 3 days.
+    for (const [at, today] of [
+      ['2026-12-03T09:00:00', '2026-12-03'],
+      ['2026-12-02T09:00:00', '2026-12-03'],
+      ['2026-11-30T09:00:00', '2026-12-03'],
+    ] as const) {
+      const age = readyAge(at, today)!;
+      expect(translator('en')('queue.readyAge', { days: age.days })).toBe(age.text);
+    }
+    expect(translator('fr')('queue.readyAge', { days: 3 })).toBe('Prêt depuis 3 jours');
+    expect(translator('fr')('queue.readyAge', { days: 0 })).toBe('Prêt aujourd’hui');
+  });
+});
