@@ -65,6 +65,19 @@ describe('notices in the shop language', () => {
     expect(m.body).toContain('Nothing is left to pay: the ticket is paid in full.');
   });
 
+  it('writes the password reset in the language of the person’s shop (English for a shop that chose none)', async () => {
+    const { userLanguage, shopLanguage } = await import('@/lib/server/i18n/shop-language');
+    const { translator } = await import('@/lib/server/i18n/catalog');
+    expect(await shopLanguage(fr.shopId)).toBe('fr');
+    expect(await userLanguage(fr.lead.userId)).toBe('fr');
+    expect(await userLanguage(en.lead.userId)).toBe('en');
+    expect(await userLanguage('no-such-user')).toBe('en');
+    expect(translator('en')('reset.body', { name: 'Odile', url: 'http://x/r' })).toBe(
+      'Hello Odile,\n\nTo choose a new password, open this link within the hour:\n\nhttp://x/r\n\nIf you did not ask for this, ignore this message.',
+    );
+    expect(translator('fr')('reset.subject')).toBe('Réinitialiser votre mot de passe Cuffwright');
+  });
+
   it('writes money as the shop language does (the Intl locale of the language, not en-GB)', async () => {
     const { formatMoney } = await import('@/lib/pricing/money');
     const { intlLocale } = await import('@/lib/shared/i18n/languages');
