@@ -23,6 +23,12 @@ export function useMaybeT(): Translate | null {
   return useMemo(() => (language ? translator(language) : null), [language]);
 }
 
+/** The catalog where the page gave a language, else the English written beside each key (islands on pages not yet in the catalog). */
+export function useSay(): (key: MessageKey, english: string, values?: Record<string, string | number>) => string {
+  const t = useMaybeT();
+  return useMemo(() => (t ? (key, _english, values) => t(key, values) : (_key, english) => english), [t]);
+}
+
 /** The Intl locale of the page's language (dates, numbers, money). */
 export function useIntlLocale(): string {
   return intlLocale(useLanguage());

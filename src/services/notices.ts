@@ -12,7 +12,10 @@ import { sendMail } from '@/lib/server/mail';
 import { recordSentMail } from '@/lib/server/sent-mail-record';
 import { plannedSends, type Channel, type ContactPreference, type PlannedSend } from '@/lib/shared/contact-channels';
 import { sendText, smsConfigured, statusCallbackUrl } from '@/lib/server/sms-service';
-import { formatMoney } from '@/lib/pricing/money';
+import { formatMoney, type Currency } from '@/lib/pricing/money';
+import { translator, type Translate } from '@/lib/server/i18n/catalog';
+import { intlLocale } from '@/lib/shared/i18n/languages';
+import { benchSettings } from './shop-settings';
 import { audit } from './audit';
 import { ServiceError } from './errors';
 import { isUuid } from './garments';
@@ -39,35 +42,49 @@ export async function listNotices(actor: Actor, ticketId: string): Promise<Notic
     .orderBy(asc(notices.createdAt));
 }
 
-/** The ready notice's subject and text (e-mail), its short form (text message), and who gets it. */
+/** The shop's words for its customers: the catalog in the shop's language, and money as that language writes it. */
+async function shopWords(shopId: string): Promise<{ t: Translate; money: (minor: number, currency: Currency) => string }> {
+  const { language } = await benchSettings(shopId);
+  const locale = intlLocale(language);
+  return { t: translator(language), money: (minor, currency) => formatMoney(minor, currency, locale) };
+}
+
+function hello(t: Translate, name: string | null): string {
+  const n = (name ?? '').trim();
+  return t('notice.hello', { hasName: n ? 'yes' : 'no', name: n });
+}
+
+/** The ready notice's subject and text (e-mail), its short form (text message), and who gets it; in the shop's language. */
 export async function readyMessage(shopId: string, ticketId: string): Promise<Message> {
   const settings = await counterSettingsOf(shopId);
   const summary = await summaryOf(await shopTicket({ shopId }, ticketId), settings);
   const [shop] = await db.select({ name: organization.name }).from(organization).where(eq(organization.id, shopId));
+  const { t, money } = await shopWords(shopId);
   const number = ticketLabel(summary.ticket.number, shop?.name ?? '');
-  const due = summary.due > 0 ? `Balance due at pickup: ${formatMoney(summary.due, summary.currency)}.` : 'Nothing is left to pay: the ticket is paid in full.';
+  const amount = money(summary.due, summary.currency);
+  const due = summary.due > 0 ? t('notice.ready.due', { amount }) : t('notice.ready.paid');
   const payUrl = summary.due > 0 && summary.link?.status === 'open' ? summary.link.url : null;
-  const pay = payUrl ? [`You may pay ahead online: ${payUrl}`] : [];
+  const pay = payUrl ? [t('notice.ready.payAhead', { url: payUrl })] : [];
   const body = [
-    `${`Hello ${summary.ticket.customerName ?? ''}`.trim()},`,
+    hello(t, summary.ticket.customerName),
     '',
-    `Your trousers on ticket ${number} at ${shop?.name ?? 'the shop'} are ready to collect.`,
+    t('notice.ready.line', { number, shop: shop?.name ?? t('notice.theShop') }),
     due,
     ...pay,
     '',
-    `Opening hours: ${settings.hours || 'ask the shop'}`,
-    ...(settings.location ? [`Where: ${settings.location}`] : []),
+    t('notice.ready.hours', { hours: settings.hours || t('notice.askShop') }),
+    ...(settings.location ? [t('notice.ready.where', { location: settings.location })] : []),
     '',
-    `Bring your claim slip or quote ${number}.`,
+    t('notice.ready.bring', { number }),
   ].join('\n');
   // A text is read on a phone: the same facts, shorter.
   const text = [
-    `${shop?.name ?? 'The shop'}: your trousers on ticket ${number} are ready to collect.`,
-    summary.due > 0 ? `Due at pickup: ${formatMoney(summary.due, summary.currency)}.` : 'Paid in full.',
-    ...(payUrl ? [`Pay ahead: ${payUrl}`] : []),
-    ...(settings.hours ? [`Hours: ${settings.hours}`] : []),
+    t('notice.ready.text', { shop: shop?.name ?? t('notice.TheShop'), number }),
+    summary.due > 0 ? t('notice.ready.textDue', { amount }) : t('notice.ready.textPaid'),
+    ...(payUrl ? [t('notice.ready.textPay', { url: payUrl })] : []),
+    ...(settings.hours ? [t('notice.ready.textHours', { hours: settings.hours })] : []),
   ].join('\n');
-  return { ...recipientOf(summary.ticket), subject: `Ready to collect: ticket ${number}`, body, text };
+  return { ...recipientOf(summary.ticket), subject: t('notice.ready.subject', { number }), body, text };
 }
 
 /** A message to a customer: e-mail subject and body, the text message's words, and the customer's ways to be reached. */
@@ -233,18 +250,19 @@ async function payLinkMessage(shopId: string, ticketId: string): Promise<Message
     throw new ServiceError(409, 'There is no open pay link for the balance: make one first.');
   }
   const [shop] = await db.select({ name: organization.name }).from(organization).where(eq(organization.id, shopId));
+  const { t, money } = await shopWords(shopId);
   const number = ticketLabel(summary.ticket.number, shop?.name ?? '');
-  const amount = formatMoney(summary.due, summary.currency);
+  const amount = money(summary.due, summary.currency);
   const body = [
-    `${`Hello ${summary.ticket.customerName ?? ''}`.trim()},`,
+    hello(t, summary.ticket.customerName),
     '',
-    `You may pay ${amount} for ticket ${number} at ${shop?.name ?? 'the shop'} online:`,
+    t('notice.pay.line', { amount, number, shop: shop?.name ?? t('notice.theShop') }),
     summary.link.url,
     '',
-    'Or pay at the counter when you collect.',
+    t('notice.pay.counter'),
   ].join('\n');
-  const text = `${shop?.name ?? 'The shop'}: pay ${amount} for ticket ${number} online: ${summary.link.url}`;
-  return { ...recipientOf(summary.ticket), subject: `Pay online: ticket ${number}`, body, text };
+  const text = t('notice.pay.text', { shop: shop?.name ?? t('notice.TheShop'), amount, number, url: summary.link.url });
+  return { ...recipientOf(summary.ticket), subject: t('notice.pay.subject', { number }), body, text };
 }
 
 /** Sends the ticket's open pay link to the customer by the channel the counter chose (a new

@@ -106,6 +106,27 @@ describe('a shop switched to French', () => {
 });
 
 describe('the public calculator in French', () => {
+  it('says the engine’s refusals and its own checks in French, beside the field', async () => {
+    const context = await browser().newContext({
+      baseURL: inject('baseURL'),
+      viewport: { width: 1180, height: 820 },
+      extraHTTPHeaders: { 'accept-language': 'fr-FR,fr;q=0.9' },
+    });
+    const page = await context.newPage();
+    await page.goto('/');
+    await ready(page);
+    // A cuff of 0: the engine refuses it (not-positive); the server's English stays in its JSON.
+    const refused = page.waitForResponse((r) => new URL(r.url()).pathname === '/api/plan' && r.status() === 422);
+    await field(page, 'Hauteur du revers').fill('0');
+    expect((await (await refused).json()).issues.cuffDepth).toBe('Cuff depth must be more than 0.');
+    await page.getByText('Hauteur du revers : doit être supérieur à 0.').first().waitFor({ timeout: 10_000 });
+    // Too long to be a length: the page's own check, before anything is sent.
+    await field(page, 'Hauteur du revers').fill('1'.repeat(41));
+    await page.getByText('Hauteur du revers : trop long ; tapez une longueur comme 1 1/2.').first().waitFor({ timeout: 10_000 });
+    expect(await page.getByText(/must be|too long/).count()).toBe(0);
+    await context.close();
+  });
+
   it('follows the browser’s Accept-Language, prints its sheet in French, and switches back to English', async () => {
     const context = await browser().newContext({
       baseURL: inject('baseURL'),

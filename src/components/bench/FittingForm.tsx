@@ -13,7 +13,10 @@ import type { FittingView } from '@/lib/shared/bench-types';
 import { PRESET_LENGTHS, type PresetLength, type PresetView } from '@/lib/shared/preset-settings';
 import { readFinish } from '@/lib/shared/fitting/kinds';
 import { ApiError, fetchJson } from '@/lib/shared/fetch-json';
+import { zodLengthText } from '@/lib/shared/i18n/check-words';
+import type { MessageKey } from '@/lib/shared/i18n/format';
 import {
+  LEG_LENGTH_LABELS,
   LEGS,
   legFormValues,
   measurementsRequest,
@@ -154,7 +157,11 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
   };
   if (saveRef) saveRef.current = saveNow;
 
-  const errorFor = (f: LegLength) => formState.errors.legs?.[leg]?.[f]?.message;
+  // zod's faults in the page's words, the field named as its label is (field.<key>, else the registry's English).
+  const errorFor = (f: LegLength) => {
+    const named = t(`field.${f}` as MessageKey);
+    return zodLengthText(t, formState.errors.legs?.[leg]?.[f], named === `field.${f}` ? LEG_LENGTH_LABELS[f] : named);
+  };
 
   const applyPreset = (_settings: PresetSettings, preset: PresetView) => {
     setLegs(withPreset(getValues(), [leg], preset), { shouldDirty: true, shouldValidate: true });

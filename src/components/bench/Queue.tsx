@@ -1,6 +1,7 @@
 import { useInfiniteQuery, useQuery } from '@tanstack/react-query';
 import { createColumnHelper, type SortingState, type Updater } from '@tanstack/react-table';
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { useT, withLanguage } from '@/components/I18n';
 import { withQuery } from '@/components/WithQuery';
 import type { QueueRow, WhoOption } from '@/lib/shared/bench-types';
 import { todayIso } from '@/lib/shared/due-date';
@@ -57,6 +58,7 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
   // Open work (the server's default); an unchanged list comes back as 304 to the browser's copy.
   const queue = useQuery({ queryKey: ['queue'], queryFn: () => fetchJson<QueueRow[]>('/api/garments'), refetchInterval: 60_000 });
   const label = useStepLabel();
+  const t = useT();
   // Filters, sort and search start from the address, so a reload or a shared link opens this queue.
   const [start] = useState(() =>
     readQueueUrl(
@@ -118,25 +120,25 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
   const columns = useMemo(
     () => [
       col.accessor('rank', {
-        header: 'Tailor',
-        cell: (c) => (c.getValue() === 0 ? 'You' : c.getValue() === 1 ? 'Not yet taken' : (c.row.original.assigneeName ?? '')),
+        header: t('queue.col.tailor'),
+        cell: (c) => (c.getValue() === 0 ? t('queue.you') : c.getValue() === 1 ? t('queue.notTaken') : (c.row.original.assigneeName ?? '')),
       }),
       col.accessor((r) => r.dueOn ?? '9999-12-31', {
         id: 'due',
-        header: 'Wanted by',
+        header: t('queue.col.due'),
         cell: (c) => <DueBadge dueOn={c.row.original.dueOn} status={c.row.original.status} />,
       }),
       col.accessor('ticketNumber', {
-        header: 'Ticket no.',
+        header: t('queue.col.ticket'),
         cell: (c) => (
           <a href={`/tickets/${c.row.original.ticketId}`} className="inline-flex min-h-11 items-center font-extrabold whitespace-nowrap text-accent underline">
             {ticketLabel(c.getValue(), shopName)}
           </a>
         ),
       }),
-      col.accessor((r) => r.customerName ?? '', { id: 'customer', header: 'Customer' }),
+      col.accessor((r) => r.customerName ?? '', { id: 'customer', header: t('queue.col.customer') }),
       col.accessor('description', {
-        header: 'Garment',
+        header: t('queue.col.garment'),
         cell: (c) => (
           <a href={`/garments/${c.row.original.id}`} className="inline-flex min-h-11 items-center font-semibold text-accent underline">
             {c.getValue()}
@@ -145,18 +147,25 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
       }),
       col.accessor((r) => GARMENT_STEPS.indexOf(r.status), {
         id: 'step',
-        header: 'Stage',
+        header: t('queue.col.step'),
         cell: (c) => <StageMarks status={c.row.original.status} label={label(c.row.original.status)} />,
       }),
       // The oldest wait first when sorted up: ISO times sort as text.
       col.accessor((r) => r.readyAt ?? '~', {
         id: 'waiting',
-        header: 'Waiting',
-        cell: (c) => <span data-testid="ready-age">{readyAge(c.row.original.readyAt, todayIso())?.text ?? label('ready')}</span>,
+        header: t('queue.col.waiting'),
+        cell: (c) => (
+          <span data-testid="ready-age">
+            {(() => {
+              const age = readyAge(c.row.original.readyAt, todayIso());
+              return age ? t('queue.readyAge', { days: age.days }) : label('ready');
+            })()}
+          </span>
+        ),
       }),
       col.display({
         id: 'move',
-        header: 'Move on',
+        header: t('queue.col.move'),
         cell: (c) => (
           <StepButton
             garmentId={c.row.original.id}
@@ -170,17 +179,17 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
         ),
       }),
     ],
-    [label, canAdvance, canPickup, shopName, onOffer],
+    [label, t, canAdvance, canPickup, shopName, onOffer],
   );
 
   const onSortingChange = (u: Updater<SortingState>) => setSorting((s) => (typeof u === 'function' ? u(s) : u));
   const resetKey = queueUrlSearch(filters, sorting);
   const parts: { key: Section; title: string; what: string }[] = [
-    { key: 'bench', title: 'At the bench', what: 'Garments at the bench' },
-    { key: 'waiting', title: 'Ready, waiting for pickup', what: 'Ready garments waiting for pickup' },
+    { key: 'bench', title: t('queue.section.bench'), what: t('queue.section.benchWhat') },
+    { key: 'waiting', title: t('queue.section.waiting'), what: t('queue.section.waitingWhat') },
   ];
   if (pickupFirst) parts.reverse();
-  parts.push({ key: 'collected', title: 'Collected', what: 'Collected garments' });
+  parts.push({ key: 'collected', title: t('queue.section.collected'), what: t('queue.section.collectedWhat') });
   const shown = parts.filter((p) => sections[p.key].length > 0);
   const count = shown.reduce((n, p) => n + sections[p.key].length, 0);
 
@@ -195,17 +204,17 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
           rel="noopener"
           className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-ink bg-card px-5 text-lg font-bold max-sm:order-last"
         >
-          Print the morning’s sheets
+          {t('queue.print')}
         </a>
       )}
       {queue.isPending ? (
-        <p className="text-lg text-muted">Loading the queue…</p>
+        <p className="text-lg text-muted">{t('queue.loading')}</p>
       ) : queue.isError ? (
         <p role="alert" className="font-semibold text-cut">
-          The queue could not be loaded: {queue.error.message}
+          {t('queue.failed', { error: queue.error.message })}
         </p>
       ) : shown.length === 0 ? (
-        <p className="rounded-lg border-2 border-rule bg-card px-4 py-6 text-lg text-muted">Nothing here with these filters.</p>
+        <p className="rounded-lg border-2 border-rule bg-card px-4 py-6 text-lg text-muted">{t('queue.empty')}</p>
       ) : (
         shown.map((p) => (
           <QueueSection
@@ -226,20 +235,20 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
       {wantsHistory ? (
         history.isError ? (
           <p role="alert" className="font-semibold text-cut">
-            Collected work could not be loaded: {history.error.message}
+            {t('queue.historyFailed', { error: history.error.message })}
           </p>
         ) : history.isPending || history.isFetchingNextPage ? (
-          <p className="text-lg text-muted">Loading collected work…</p>
+          <p className="text-lg text-muted">{t('queue.historyLoading')}</p>
         ) : history.hasNextPage ? (
           <button
             type="button"
             onClick={() => void history.fetchNextPage()}
             className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-ink bg-card px-5 text-lg font-bold"
           >
-            Show older collected work
+            {t('queue.older')}
           </button>
         ) : (
-          <p className="text-muted">That is all the collected work.</p>
+          <p className="text-muted">{t('queue.allCollected')}</p>
         )
       ) : (
         <button
@@ -247,7 +256,7 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
           onClick={() => setFilters({ ...filters, step: 'all' })}
           className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-rule bg-card px-5 text-lg font-semibold"
         >
-          Show collected work too (history)
+          {t('queue.showCollected')}
         </button>
       )}
     </div>
@@ -256,4 +265,4 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
 
 /** The queue island: the shop's garments to filter, sort and move along, bench work apart from
  * work waiting for pickup, each a page at a time. */
-export default withQuery(QueueTable);
+export default withLanguage(withQuery(QueueTable));

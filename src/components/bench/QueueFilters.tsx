@@ -1,3 +1,4 @@
+import { useT } from '@/components/I18n';
 import { useId, useRef, useState } from 'react';
 import type { WhoOption } from '@/lib/shared/bench-types';
 import { GARMENT_STEPS, type GarmentStep } from '@/lib/shared/garment-steps';
@@ -16,6 +17,7 @@ const SELECT = 'min-h-11 rounded-md border-2 border-rule bg-card px-2 text-lg fo
 /** The queue's search (customer, phone, ticket number or garment) and its filters by stage, tailor
  * and wanted-by day. On a phone the filters fold behind one button, so the work shows first. */
 export function QueueFilters({ value, onChange, who, label }: Props) {
+  const t = useT();
   const set = (patch: Partial<Filters>) => onChange({ ...value, ...patch });
   const [open, setOpen] = useState(false);
   const more = useId();
@@ -30,20 +32,20 @@ export function QueueFilters({ value, onChange, who, label }: Props) {
   return (
     <form
       role="search"
-      aria-label="Filter the queue"
+      aria-label={t('queue.filter.form')}
       onSubmit={(e) => e.preventDefault()}
       className="grid gap-3 rounded-lg border-2 border-rule bg-card p-3 max-sm:grid-cols-[minmax(0,1fr)_auto] max-sm:items-end sm:grid-cols-2 lg:grid-cols-4"
     >
       <div className="flex min-w-0 flex-col gap-1">
         <label htmlFor="q-search" className="font-semibold">
-          Customer or ticket
+          {t('queue.filter.search')}
         </label>
         <input
           id="q-search"
           type="search"
           value={value.search}
           onChange={(e) => set({ search: e.target.value })}
-          placeholder="Ticket no., name, phone or garment"
+          placeholder={t('queue.filter.searchHint')}
           className={SELECT}
           autoComplete="off"
         />
@@ -55,18 +57,18 @@ export function QueueFilters({ value, onChange, who, label }: Props) {
         onClick={toggle}
         className="inline-flex min-h-11 items-center gap-1 rounded-md border-2 border-ink bg-card px-3 text-lg font-bold sm:hidden"
       >
-        Filters{on > 0 ? ` (${on} on)` : ''}
+        {t('queue.filter.toggle', { on })}
         <span aria-hidden="true">{open ? '▲' : '▼'}</span>
       </button>
       {/* contents: the three filters sit in the form's grid beside the search on wider screens. */}
       <div id={more} className={`gap-3 max-sm:col-span-2 max-sm:flex-col sm:contents ${open ? 'flex' : 'max-sm:hidden'}`}>
         <div className="flex flex-col gap-1">
           <label htmlFor="q-step" className="font-semibold">
-            Stage
+            {t('queue.filter.step')}
           </label>
           <select ref={first} id="q-step" value={value.step} onChange={(e) => set({ step: e.target.value as Filters['step'] })} className={SELECT}>
-            <option value="open">All not collected</option>
-            <option value="all">All, collected too</option>
+            <option value="open">{t('queue.filter.open')}</option>
+            <option value="all">{t('queue.filter.all')}</option>
             {GARMENT_STEPS.map((s) => (
               <option key={s} value={s}>
                 {label(s)}
@@ -76,7 +78,7 @@ export function QueueFilters({ value, onChange, who, label }: Props) {
         </div>
         <div className="flex flex-col gap-1">
           <label htmlFor="q-who" className="font-semibold">
-            Tailor
+            {t('queue.filter.who')}
           </label>
           <select id="q-who" value={value.who} onChange={(e) => set({ who: e.target.value })} className={SELECT}>
             {who.map((o) => (
@@ -88,12 +90,12 @@ export function QueueFilters({ value, onChange, who, label }: Props) {
         </div>
         <div className="flex flex-col gap-1">
           <label htmlFor="q-due" className="font-semibold">
-            Wanted by
+            {t('queue.filter.due')}
           </label>
           <select id="q-due" value={value.due} onChange={(e) => set({ due: e.target.value as Filters['due'] })} className={SELECT}>
-            <option value="all">Any day</option>
-            <option value="today">Today or overdue</option>
-            <option value="overdue">Overdue</option>
+            <option value="all">{t('queue.filter.anyDay')}</option>
+            <option value="today">{t('queue.filter.today')}</option>
+            <option value="overdue">{t('queue.filter.overdue')}</option>
           </select>
         </div>
       </div>

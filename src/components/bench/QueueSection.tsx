@@ -10,6 +10,8 @@ import {
   type VisibilityState,
 } from '@tanstack/react-table';
 import { useRef, useState } from 'react';
+import { useT } from '@/components/I18n';
+import type { MessageKey } from '@/lib/shared/i18n/format';
 import type { QueueRow } from '@/lib/shared/bench-types';
 
 /** A queue row as the table holds it: with its rank (own work, unassigned, the rest). */
@@ -40,19 +42,21 @@ const CARD =
   "grid grid-cols-[auto_minmax(0,1fr)] items-center gap-x-4 gap-y-1 px-3 py-3 [grid-template-areas:'ticket_customer'_'garment_garment'_'due_due'_'step_step'_'whose_whose'_'move_move'] " +
   "sm:grid-cols-[auto_auto_minmax(0,1fr)_minmax(15rem,min-content)] sm:[grid-template-areas:'ticket_customer_whose_move'_'garment_garment_garment_move'_'due_due_step_move'] " +
   'lg:table-row lg:p-0';
-// Where each column's cell sits in the card, and the words that stand in for its header there.
+// Where each column's cell sits in the card; the words that stand in for its header there come from the catalog (data-label).
 const CELL: Record<string, string> = {
-  rank: "[grid-area:whose] sm:max-lg:text-right max-lg:before:text-muted max-lg:before:content-['Tailor:_']",
-  due: "[grid-area:due] max-lg:before:text-muted max-lg:before:content-['Wanted_by:_']",
+  rank: '[grid-area:whose] sm:max-lg:text-right max-lg:before:text-muted max-lg:before:content-[attr(data-label)]',
+  due: '[grid-area:due] max-lg:before:text-muted max-lg:before:content-[attr(data-label)]',
   ticketNumber: '[grid-area:ticket]',
   customer: '[grid-area:customer] max-lg:font-semibold',
   description: '[grid-area:garment] max-lg:text-xl',
-  step: "[grid-area:step] max-lg:before:text-muted max-lg:before:content-['Stage:_']",
+  step: '[grid-area:step] max-lg:before:text-muted max-lg:before:content-[attr(data-label)]',
   // A ready garment's wait takes the stage's place (every row here is ready).
   waiting: '[grid-area:step] font-semibold',
   move: '[grid-area:move] max-sm:pt-2 max-lg:[&_button]:w-full',
 };
-const SORT_BY = "max-lg:before:font-semibold max-lg:before:text-muted max-lg:before:content-['Sort_by']";
+const SORT_BY = 'max-lg:before:font-semibold max-lg:before:text-muted max-lg:before:content-[attr(data-label)]';
+// The card's stand-in for each header that has one (queue.card.<column>).
+const CARD_LABEL: Record<string, MessageKey> = { rank: 'queue.card.rank', due: 'queue.card.due', step: 'queue.card.step' };
 const PAGER_BUTTON =
   'inline-flex min-h-12 items-center rounded-lg border-2 border-ink bg-card px-5 text-lg font-bold aria-disabled:border-rule aria-disabled:text-muted';
 
@@ -64,6 +68,7 @@ const PAGER_BUTTON =
  * (rows of unequal height below lg) need no measuring.
  */
 export function QueueSection({ title, what, testId, rows, columns, hidden, sorting, onSortingChange, pageSize, resetKey }: Props) {
+  const t = useT();
   const [page, setPage] = useState({ index: 0, key: resetKey });
   // New filters or sort: back to the first page (set during render, React's way to reset on a prop).
   if (page.key !== resetKey) setPage({ index: 0, key: resetKey });
@@ -97,7 +102,7 @@ export function QueueSection({ title, what, testId, rows, columns, hidden, sorti
   };
   const first = pageSize ? index * pageSize + 1 : 1;
   const last = pageSize ? Math.min(rows.length, (index + 1) * pageSize) : rows.length;
-  const shown = pages > 1 ? `${first}–${last} of ${rows.length}` : `${rows.length}`;
+  const shown = pages > 1 ? t('queue.shownOf', { first, last, count: rows.length }) : `${rows.length}`;
   const headingId = `${testId}-heading`;
 
   return (
@@ -110,12 +115,14 @@ export function QueueSection({ title, what, testId, rows, columns, hidden, sorti
           The roles are explicit because a table laid out as blocks and grids can lose them. */}
       <div className="rounded-lg border-2 border-rule bg-card">
         <table className="block w-full border-collapse text-left text-lg lg:table">
-          <caption className="sr-only">
-            {what}, {shown} shown{pages > 1 ? `, page ${index + 1} of ${pages}` : ''}
-          </caption>
+          <caption className="sr-only">{t('queue.caption', { what, shown, page: index + 1, pages })}</caption>
           <thead className="block lg:table-header-group">
             {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id} className={`flex flex-wrap items-center gap-x-3 border-b-2 border-ink px-3 py-1 lg:table-row lg:p-0 ${SORT_BY}`}>
+              <tr
+                key={hg.id}
+                data-label={t('queue.sortBy')}
+                className={`flex flex-wrap items-center gap-x-3 border-b-2 border-ink px-3 py-1 lg:table-row lg:p-0 ${SORT_BY}`}
+              >
                 {hg.headers.map((h) => {
                   const sorted = h.column.getIsSorted();
                   return (
@@ -143,7 +150,11 @@ export function QueueSection({ title, what, testId, rows, columns, hidden, sorti
             {table.getRowModel().rows.map((row) => (
               <tr key={row.id} data-testid="queue-row" className={`border-b border-rule ${CARD}`}>
                 {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className={`block lg:table-cell lg:px-2 lg:py-2 lg:align-middle ${CELL[cell.column.id] ?? ''}`}>
+                  <td
+                    key={cell.id}
+                    data-label={CARD_LABEL[cell.column.id] ? t(CARD_LABEL[cell.column.id]!) : undefined}
+                    className={`block lg:table-cell lg:px-2 lg:py-2 lg:align-middle ${CELL[cell.column.id] ?? ''}`}
+                  >
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>
                 ))}
@@ -153,19 +164,16 @@ export function QueueSection({ title, what, testId, rows, columns, hidden, sorti
         </table>
       </div>
       {pages > 1 && (
-        <nav aria-label={`Pages of ${what}`} className="flex flex-wrap items-center gap-3">
+        <nav aria-label={t('queue.pages', { what })} className="flex flex-wrap items-center gap-3">
           {/* aria-disabled, not disabled: the focus stays on the button at the first or last page. */}
           <button type="button" className={PAGER_BUTTON} aria-disabled={index === 0 || undefined} onClick={() => go(index - 1)}>
-            Previous page
+            {t('queue.prev')}
           </button>
           <p className="text-lg" aria-live="polite">
-            Page {index + 1} of {pages}{' '}
-            <span className="text-muted">
-              ({first}–{last} of {rows.length})
-            </span>
+            {t('queue.pageOf', { page: index + 1, pages })} <span className="text-muted">{t('queue.range', { first, last, count: rows.length })}</span>
           </p>
           <button type="button" className={PAGER_BUTTON} aria-disabled={index === pages - 1 || undefined} onClick={() => go(index + 1)}>
-            Next page
+            {t('queue.next')}
           </button>
         </nav>
       )}

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { useSay } from '@/components/I18n';
 import { previousStep, type GarmentStep } from '@/lib/shared/garment-steps';
 import { useStepLabel } from './use-bench';
 import { useStepBack } from './use-step-back';
@@ -15,6 +16,7 @@ interface Props {
 /** The garment page's way back one step, for a step marked by mistake; kept in the history like any move. */
 export function StepBackButton({ garmentId, status, canAdvance, canReopen }: Props) {
   const label = useStepLabel();
+  const say = useSay();
   const back = useStepBack(garmentId);
   const [said, setSaid] = useState('');
   const prev = previousStep(status);
@@ -24,11 +26,11 @@ export function StepBackButton({ garmentId, status, canAdvance, canReopen }: Pro
       {allowed && (
         <button
           type="button"
-          onClick={() => back.mutate(status, { onSuccess: () => setSaid(`Stepped back to ${label(prev)}.`) })}
+          onClick={() => back.mutate(status, { onSuccess: () => setSaid(say('move.steppedBack', `Stepped back to ${label(prev)}.`, { step: label(prev) })) })}
           disabled={back.isPending}
           className="min-h-11 self-start rounded-md border-2 border-ink bg-card px-4 text-lg font-semibold disabled:opacity-60"
         >
-          {back.isPending ? 'Stepping back…' : `Step back to ${label(prev)}`}
+          {back.isPending ? say('move.steppingBack', 'Stepping back…') : say('move.stepBack', `Step back to ${label(prev)}`, { step: label(prev) })}
         </button>
       )}
       <p role="status" className="text-base font-semibold">

@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
+import { useSay } from '@/components/I18n';
 import type { GarmentDetail } from '@/lib/shared/bench-types';
 import { fetchJson } from '@/lib/shared/fetch-json';
 import { passesMarked } from '@/lib/shared/fitting-rule';
@@ -34,6 +35,7 @@ const UNDO_MS = 10_000;
 /** The one tap that moves a garment to its next step, with a short Undo after it; says what went wrong in words. */
 export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen = false, size = 'big', what, onOffer, fitted }: Props) {
   const label = useStepLabel();
+  const say = useSay();
   const client = useQueryClient();
   const next = nextStep(status);
   // The step a tap just moved the garment to, while Undo is offered.
@@ -46,7 +48,7 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
     onSuccess: (_moved, { from, to }) => {
       const mayUndo = to === 'collected' ? canReopen : canAdvance;
       setUndoable(mayUndo ? { from, to } : null);
-      setSaid(`Marked ${label(to)}.`);
+      setSaid(say('move.marked', `Marked ${label(to)}.`, { step: label(to) }));
       return client.invalidateQueries();
     },
   });
@@ -77,7 +79,7 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
       onSuccess: () => {
         setUndoable(null);
         setHeld(false);
-        setSaid(`Stepped back to ${label(from)}.`);
+        setSaid(say('move.steppedBack', `Stepped back to ${label(from)}.`, { step: label(from) }));
       },
     });
   };
@@ -89,7 +91,9 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
       ? 'min-h-16 w-full rounded-lg bg-accent px-6 text-2xl font-extrabold text-white sm:w-auto'
       : 'min-h-12 rounded-md bg-accent px-4 text-lg font-bold text-white whitespace-nowrap';
   if (!allowed && !undoable && !said) {
-    return next && size === 'big' ? <p className="text-lg text-muted">Next: {label(next)} (not your step to mark).</p> : null;
+    return next && size === 'big' ? (
+      <p className="text-lg text-muted">{say('move.notYours', `Next: ${label(next)} (not your step to mark).`, { step: label(next) })}</p>
+    ) : null;
   }
   // Known here to have no fitting, and the shop refuses: no button that can only be refused, the note says why.
   const unfitted = next !== null && allowed && size === 'big' && fitted === false && passesMarked(status, next);
@@ -105,9 +109,9 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
           onClick={() => !busy && void gate.check(status, next, fittedNow, () => move.mutate({ from: status, to: next }))}
           // The name begins with the words on the button (WCAG 2.5.3: "Mark Cut" said aloud finds it),
           // then says which garment, for a list of many such buttons.
-          aria-label={what && !move.isPending ? `Mark ${label(next)}: ${what}` : undefined}
+          aria-label={what && !move.isPending ? say('move.markWhat', `Mark ${label(next)}: ${what}`, { step: label(next), what }) : undefined}
         >
-          {move.isPending ? 'Moving…' : `Mark ${label(next)}`}
+          {move.isPending ? say('move.moving', 'Moving…') : say('move.mark', `Mark ${label(next)}`, { step: label(next) })}
         </button>
       )}
       <div className="flex flex-wrap items-center gap-2">
@@ -122,10 +126,13 @@ export function StepButton({ garmentId, status, canAdvance, canPickup, canReopen
             onFocus={() => setHeld(true)}
             onBlur={() => setHeld(false)}
             disabled={back.isPending}
-            aria-label={`Undo: step ${what ?? 'the garment'} back to ${label(undoable.from)}`}
+            aria-label={say('move.undoLabel', `Undo: step ${what ?? 'the garment'} back to ${label(undoable.from)}`, {
+              what: what ?? say('move.theGarment', 'the garment'),
+              step: label(undoable.from),
+            })}
             className="min-h-11 rounded-md border-2 border-ink bg-card px-4 text-lg font-bold disabled:opacity-60"
           >
-            {back.isPending ? 'Undoing…' : 'Undo'}
+            {back.isPending ? say('move.undoing', 'Undoing…') : say('move.undo', 'Undo')}
           </button>
         )}
       </div>

@@ -7,6 +7,8 @@ import type { PlanRequestInput } from '@/lib/shared/plan-request';
 import type { Problem } from '@/components/calculator/PlanView';
 import { usePlan } from '@/components/calculator/use-plan';
 import { useLastGoodPlan } from '@/components/calculator/use-last-good-plan';
+import { refusalWords } from '@/components/calculator/refusal-words';
+import { useMaybeT } from '@/components/I18n';
 import type { TaperPlan } from '@/lib/allowance/types';
 
 // A cuff's taper check, or a plain hem's (the hem turned up must lie flat on the tapered leg too).
@@ -27,21 +29,24 @@ export function useLegPlan(leg: LegValues, unit: Unit, precision: Precision, let
   const main = usePlan(mainReq);
   const taper = usePlan(taperRequest(leg, unit, precision, letDown));
   const plan = useLastGoodPlan(main, leg.finish === 'cuff' ? 'cuff' : 'hem');
+  // The page's language when it sent its messages; else the server's English as it came.
+  const t = useMaybeT();
+  const said = (a: NonNullable<typeof main.data>) => (a.ok ? { error: '', issues: {} } : t ? refusalWords(t, a) : { error: a.error, issues: a.issues });
   const problem: Problem | null = !mainReq
-    ? { kind: 'empty', text: 'Type the cuff depth, or tap a preset, and the chalk lines appear here.' }
+    ? { kind: 'empty', text: t ? t('garment.planEmpty') : 'Type the cuff depth, or tap a preset, and the chalk lines appear here.' }
     : !main.asked
-      ? { kind: 'error', text: 'Fix the field marked in red.' }
+      ? { kind: 'error', text: t ? t('calc.problem.fix') : 'Fix the field marked in red.' }
       : main.data && !main.data.ok
-        ? { kind: 'error', text: main.data.error }
+        ? { kind: 'error', text: said(main.data).error }
         : null;
   const fields = {
-    ...(taper.data && !taper.data.ok ? taper.data.issues : {}),
-    ...(main.data && !main.data.ok ? main.data.issues : {}),
+    ...(taper.data && !taper.data.ok ? said(taper.data).issues : {}),
+    ...(main.data && !main.data.ok ? said(main.data).issues : {}),
   };
   // Only an answer for this leg's own finish: a placeholder kept from a cuff is no hem's check.
   const answered = taper.asked && taper.data?.ok && taper.data.plan.kind === 'taper' ? taper.data.plan : null;
   const taperPlan: TaperPlan | null = answered && (answered.finish === 'hem') === (leg.finish !== 'cuff') ? answered : null;
   // The engine's word on widths it cannot check (a width of 0 at the cut, a taper with no leg).
-  const taperProblem = taper.asked && taper.data && !taper.data.ok ? taper.data.error : null;
+  const taperProblem = taper.asked && taper.data && !taper.data.ok ? said(taper.data).error : null;
   return { plan, problem, failure: main.error ? main.error.message : null, taper: taperPlan, taperProblem, fields };
 }

@@ -1,7 +1,9 @@
 import { useState, type SubmitEvent } from 'react';
 import { useT } from '@/components/I18n';
+import type { Translate } from '@/lib/shared/i18n/format';
 import type { Precision, Unit } from '@/lib/allowance/types';
-import { checkPlanRequest } from '@/lib/shared/plan-check';
+import { catalogLengthWords } from '@/lib/shared/i18n/check-words';
+import { checkPlanRequest, type LengthWords } from '@/lib/shared/plan-check';
 import type { PlanRequestInput } from '@/lib/shared/plan-request';
 import { BLANK, LENGTH_FIELDS, mainRequest, taperRequest, type CalculatorValues, type LengthField } from './calculator-values';
 import { convertTyped, readLength } from '@/lib/shared/length-reading';
@@ -10,6 +12,7 @@ import { HemFields } from './HemFields';
 import type { Bind, FieldInfo } from './LengthField';
 import { PlanView, type Problem } from './PlanView';
 import { PrintPlan } from './PrintPlan';
+import { refusalWords } from './refusal-words';
 import { Segmented } from './Segmented';
 import { TaperFields } from './TaperFields';
 import { useDebounced } from './use-debounced';
@@ -25,13 +28,13 @@ const SCALES: { value: Scale; label: string }[] = [
 ];
 const toScale = (unit: Unit, precision: Precision): Scale => (unit === 'in' ? (precision === 16 ? 'in16' : 'in8') : unit);
 
-function serverMessage(answer: PlanAnswer | undefined, field: string): string | undefined {
-  return answer && !answer.ok ? answer.issues[field] : undefined;
+function serverMessage(t: Translate, answer: PlanAnswer | undefined, field: string): string | undefined {
+  return answer && !answer.ok ? refusalWords(t, answer).issues[field] : undefined;
 }
 
 /** The server's own rules, checked in the browser: a message per field of the request, or none. */
-function ownMessages(request: PlanRequestInput | null): Record<string, string> {
-  const checked = request ? checkPlanRequest(request) : null;
+function ownMessages(request: PlanRequestInput | null, say: LengthWords): Record<string, string> {
+  const checked = request ? checkPlanRequest(request, say) : null;
   return checked && !checked.ok ? checked.issues : {};
 }
 
@@ -61,9 +64,10 @@ export function CalculatorForm() {
   const bind: Bind = (f) => ({ name: f, value: values[f], onChange: (e) => setField(f, e.target.value) });
 
   // Checked as typed, with the server's rules and words; the engine's own (what a length means) come from the answer.
-  const own = { ...(taperOpen ? ownMessages(taperRequest(values)) : {}), ...ownMessages(mainRequest(values)) };
+  const say = catalogLengthWords(t);
+  const own = { ...(taperOpen ? ownMessages(taperRequest(values), say) : {}), ...ownMessages(mainRequest(values), say) };
   const errorFor = (f: LengthField): string | undefined =>
-    (typedIn.has(f) ? own[f] : undefined) ?? serverMessage(main.data, f) ?? (taperOpen ? serverMessage(taper.data, f) : undefined);
+    (typedIn.has(f) ? own[f] : undefined) ?? serverMessage(t, main.data, f) ?? (taperOpen ? serverMessage(t, taper.data, f) : undefined);
 
   const setScale = (s: Scale) => {
     const unit: Unit = s === 'in8' || s === 'in16' ? 'in' : s;
@@ -106,7 +110,7 @@ export function CalculatorForm() {
   const onSubmit = (e: SubmitEvent<HTMLFormElement>) => {
     e.preventDefault();
     setTypedIn(new Set(LENGTH_FIELDS));
-    const first = LENGTH_FIELDS.find((f) => own[f] ?? serverMessage(main.data, f));
+    const first = LENGTH_FIELDS.find((f) => own[f] ?? serverMessage(t, main.data, f));
     if (first) document.getElementById(`f-${first}`)?.focus();
   };
 
@@ -116,7 +120,7 @@ export function CalculatorForm() {
       ? { kind: 'empty', text: t('calc.problem.empty') }
       : { kind: 'error', text: t('calc.problem.fix') }
     : main.data && !main.data.ok
-      ? { kind: 'error', text: main.data.error }
+      ? { kind: 'error', text: refusalWords(t, main.data).error }
       : null;
   const unitLabel = values.unit;
   const taperPlan = taperOpen && taper.data?.ok && taper.data.plan.kind === 'taper' ? taper.data.plan : null;
@@ -170,7 +174,7 @@ export function CalculatorForm() {
               errorFor={errorFor}
               info={info}
               waiting={taperOpen && !taper.asked}
-              problem={taper.data && !taper.data.ok ? taper.data.error : null}
+              problem={taper.data && !taper.data.ok ? refusalWords(t, taper.data).error : null}
             />
           )}
         </form>

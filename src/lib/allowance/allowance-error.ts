@@ -1,19 +1,23 @@
+/** Every code the engine refuses an input with (the catalog has `refusal.<code>` for each, in every language). */
+export const ALLOWANCE_ERROR_CODES = [
+  'bad-input',
+  'empty',
+  'not-a-length',
+  'divide-by-zero',
+  'too-large',
+  'bad-unit',
+  'bad-precision',
+  'missing',
+  'not-positive',
+  'negative',
+  'out-of-range',
+  'bad-choice',
+  'not-a-number',
+  'impossible-shape',
+] as const;
+
 /** Why the engine refused an input. */
-export type AllowanceErrorCode =
-  | 'bad-input'
-  | 'empty'
-  | 'not-a-length'
-  | 'divide-by-zero'
-  | 'too-large'
-  | 'bad-unit'
-  | 'bad-precision'
-  | 'missing'
-  | 'not-positive'
-  | 'negative'
-  | 'out-of-range'
-  | 'bad-choice'
-  | 'not-a-number'
-  | 'impossible-shape';
+export type AllowanceErrorCode = (typeof ALLOWANCE_ERROR_CODES)[number];
 
 /** What a refusal names beside its code (a length as text, a number, a field), for the message catalog. */
 export type RefusalValues = Readonly<Record<string, string | number>>;

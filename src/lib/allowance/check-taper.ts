@@ -88,7 +88,9 @@ function taperShape(v: TaperValues): TaperShape {
 // The shape check on a shape already worked out (checkTaper uses the same shape for its lines).
 function shapeErrorOf(v: TaperValues, { slope, target, positions }: TaperShape): AllowanceError | null {
   if (!isPositive(target)) {
-    return new AllowanceError('out-of-range', 'These widths give no leg at the cuff top: check the two widths and the height.', 'widthAbove');
+    return new AllowanceError('out-of-range', 'These widths give no leg at the cuff top: check the two widths and the height.', 'widthAbove', {
+      rule: 'no-leg-at-cuff-top',
+    });
   }
   const cut = positions[3];
   // Measured at the cut, the taper need only reach the old fold (the measured width is positive).
@@ -96,7 +98,9 @@ function shapeErrorOf(v: TaperValues, { slope, target, positions }: TaperShape):
   if (letDown) return letDownShapeError(letDown);
   // The width is straight in the height, so the lowest line (the cut) is the narrowest or widest: check it.
   if (!isPositive(v.widthAtEdge.sub(slope.mul(cut))) || !isPositive(v.widthAtEdge)) {
-    return new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove');
+    return new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove', {
+      rule: 'no-leg-at-cut',
+    });
   }
   return null;
 }

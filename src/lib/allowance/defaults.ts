@@ -87,7 +87,7 @@ export function exactDefaults(unit: Unit): ExactDefaults {
 const depthRule = (e: ExactDefaults): LengthRule => ({
   required: true,
   min: 'positive',
-  least: { value: e.shallowestCuff, why: SHALLOWEST_CUFF_WHY },
+  least: { value: e.shallowestCuff, why: SHALLOWEST_CUFF_WHY, code: 'shallowest-cuff' },
   max: e.maxCuffDepth,
 });
 const IMPERIAL_DEPTH = depthRule(IMPERIAL);

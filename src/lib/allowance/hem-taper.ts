@@ -44,7 +44,9 @@ export function hemTaperShapeError(v: HemTaperValues): AllowanceError | null {
   // Measured at the cut (a let-down leg), only the leg the hem lies against must be there.
   const cutWidth = v.widthAtCut ?? v.widthAtEdge.sub(rise);
   if (cutWidth.sign() <= 0 || v.widthAtEdge.add(rise).sign() <= 0) {
-    return new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove');
+    return new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove', {
+      rule: 'no-leg-at-cut',
+    });
   }
   return null;
 }

@@ -43,5 +43,6 @@ export function letDownShapeError(w: LetDownWidths): AllowanceError | null {
     'out-of-range',
     'Followed down to the old fold, this taper gives no leg at all: check the two widths and the height.',
     'widthAbove',
+    { rule: 'no-leg-at-old-fold' },
   );
 }

@@ -55,7 +55,7 @@ export function readLevelHemInput(input: LevelHemInput, r: InputReader): LevelHe
   const points: LevelHemValues['points'] = [];
   const list: unknown = input.points;
   if (!Array.isArray(list) || list.length === 0 || list.length > HEM_POINTS.length) {
-    r.refuse(new AllowanceError('out-of-range', 'Give the places measured round the hem.', 'points', { min: 1, max: HEM_POINTS.length }));
+    r.refuse(new AllowanceError('out-of-range', 'Give the places measured round the hem.', 'points', { rule: 'places', min: 1, max: HEM_POINTS.length }));
   } else {
     const seen = new Set<HemPoint>();
     list.forEach((p: Partial<LevelHemInput['points'][number]> | null, k) => {

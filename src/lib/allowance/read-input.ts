@@ -11,8 +11,8 @@ export interface LengthRule {
   required?: boolean;
   min?: 'positive' | 'non-negative';
   max?: Exact;
-  /** the smallest workable value, with why (shown after "must be at least …") */
-  least?: { value: Exact; why: string };
+  /** the smallest workable value, with why (shown after "must be at least …") and that reason's code for the catalog */
+  least?: { value: Exact; why: string; code: string };
 }
 
 export { isPrecision } from './units';
@@ -73,7 +73,7 @@ export class InputReader {
   /** A length field in mm, or null when absent (blank text counts as absent). */
   length(value: unknown, field: string, label: string, rule: LengthRule = NO_RULE): Exact | null {
     if (value === undefined || value === null || (typeof value === 'string' && isBlank(value))) {
-      if (rule.required) this.fail(new AllowanceError('missing', `${label} is needed.`, field));
+      if (rule.required) this.fail(new AllowanceError('missing', `${label} is needed.`, field, { label }));
       return null;
     }
     let mm: Exact;
@@ -81,27 +81,28 @@ export class InputReader {
       mm = this.exact(value);
     } catch (e) {
       if (!(e instanceof AllowanceError)) throw e;
-      this.fail(new AllowanceError(e.code, `${label}: ${e.message}`, field));
+      // The reader's own sentence has no values: the catalog says its code's words after the label.
+      this.fail(new AllowanceError(e.code, `${label}: ${e.message}`, field, { label, inner: 'yes' }));
       return null;
     }
     // A number input carries its sign; only text needs the exact value asked.
     const s = typeof value === 'number' ? Math.sign(value) : mm.sign();
     if (rule.min === 'positive' && s <= 0) {
-      this.fail(new AllowanceError('not-positive', `${label} must be more than 0.`, field));
+      this.fail(new AllowanceError('not-positive', `${label} must be more than 0.`, field, { label }));
       return null;
     }
     if (rule.min === 'non-negative' && s < 0) {
-      this.fail(new AllowanceError('negative', `${label} cannot be negative.`, field));
+      this.fail(new AllowanceError('negative', `${label} cannot be negative.`, field, { label }));
       return null;
     }
     if (rule.least !== undefined && mm.compare(rule.least.value) < 0) {
       const least = formatExactQ(rule.least.value, this.unit, this.precision);
-      this.fail(new AllowanceError('out-of-range', `${label} must be at least ${least}: ${rule.least.why}`, field));
+      this.fail(new AllowanceError('out-of-range', `${label} must be at least ${least}: ${rule.least.why}`, field, { label, least, why: rule.least.code }));
       return null;
     }
     if (rule.max !== undefined && mm.compare(rule.max) > 0) {
       const most = formatExactQ(rule.max, this.unit, this.precision);
-      this.fail(new AllowanceError('out-of-range', `${label} must be at most ${most}.`, field));
+      this.fail(new AllowanceError('out-of-range', `${label} must be at most ${most}.`, field, { label, most }));
       return null;
     }
     return mm;

@@ -11,7 +11,9 @@ import { shopPlugin } from './auth-plugins';
 import { authSecret } from './auth-secret';
 import { refuseUnsafeStart } from './deployment';
 import { sendMail } from './mail';
-import { ROLE_LABELS, isRole } from '../shared/roles';
+import { translator } from './i18n/catalog';
+import { shopLanguage, userLanguage } from './i18n/shop-language';
+import { invitationMail } from './invitation-mail';
 
 // A shared database without a session secret stops here (and in services/startup.ts, at start).
 refuseUnsafeStart({ DATABASE_URL, BETTER_AUTH_SECRET });
@@ -27,15 +29,14 @@ export const auth = betterAuth({
     minPasswordLength: 10,
     resetPasswordTokenExpiresIn: 3600,
     revokeSessionsOnPasswordReset: true,
-    sendResetPassword: async ({ user, url }) =>
-      sendMail(
-        {
-          to: user.email,
-          subject: 'Reset your Cuffwright password',
-          text: `Hello ${user.name},\n\nTo choose a new password, open this link within the hour:\n\n${url}\n\nIf you did not ask for this, ignore this message.`,
-        },
+    sendResetPassword: async ({ user, url }) => {
+      // In the language of the person's shop (the default when none, or shops that differ).
+      const t = translator(await userLanguage(user.id));
+      await sendMail(
+        { to: user.email, subject: t('reset.subject'), text: t('reset.body', { name: user.name, url }) },
         { shopId: null, kind: 'password-reset' },
-      ),
+      );
+    },
   },
   session: { expiresIn: 60 * 60 * 24 * 7, updateAge: 60 * 60 * 24 },
   // Failed sign-ins are limited per account in src/services/sign-in-limit.ts; better-auth's own
@@ -49,14 +50,7 @@ export const auth = betterAuth({
     shopPlugin({
       sendInvitation: async ({ id, email, role, shopId, shopName, inviterName }) =>
         sendMail(
-          {
-            to: email,
-            subject: `${inviterName} invited you to ${shopName} on Cuffwright`,
-            text:
-              `${inviterName} invited you to join ${shopName} on Cuffwright as ` +
-              `${isRole(role) ? ROLE_LABELS[role].name.toLowerCase() : role}.\n\n` +
-              `Open this link to accept and choose your password:\n\n${BETTER_AUTH_URL}/invite/${id}\n`,
-          },
+          { to: email, ...invitationMail(translator(await shopLanguage(shopId)), BETTER_AUTH_URL, { id, role, shopName, inviterName }) },
           { shopId, kind: 'invitation' },
         ),
     }),

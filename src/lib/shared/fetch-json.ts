@@ -6,6 +6,8 @@ export class ApiError extends Error {
     public status: number,
     message: string,
     public issues: Record<string, string> = {},
+    /** the whole JSON answer, for routes that say more than a message (the plan's refusal codes) */
+    public body: Record<string, unknown> = {},
   ) {
     super(message);
   }
@@ -27,7 +29,7 @@ export async function fetchJson<T>(url: string, init: { method?: string; body?: 
   if (!response.ok) {
     const message = String(data.error ?? data.message ?? `The server answered ${response.status}.`);
     // Every route answers field messages as `issues` (src/lib/server/route.ts).
-    throw new ApiError(response.status, message, (data.issues as Record<string, string>) ?? {});
+    throw new ApiError(response.status, message, (data.issues as Record<string, string>) ?? {}, data);
   }
   return data as T;
 }

@@ -22,25 +22,34 @@ export type PlanCheck = { ok: true; value: PlanRequest } | { ok: false; error: s
 const UNITS: readonly unknown[] = ['in', 'cm', 'mm'];
 const PRECISIONS: readonly unknown[] = [8, 16, 32];
 
-/** One length: its value as the schema outputs it (undefined when left out), or its first message. */
-function checkLength(field: PlanField, v: unknown, needed: boolean): { value?: string | number; message?: string } {
-  const say = lengthMessages(PLAN_FIELD_NAMES[field]);
-  if (v === undefined) return needed ? { message: say.enter } : {};
+/** What is wrong with one length, by kind: the words come from `LengthWords` (the server's English, or the page's catalog). */
+export type LengthFault = keyof ReturnType<typeof lengthMessages> | 'unstorable';
+
+/** The message for one length's fault. */
+export type LengthWords = (field: PlanField, fault: LengthFault) => string;
+
+/** The server's English for a length's fault (the schema's own words). */
+export const ENGLISH_LENGTH_WORDS: LengthWords = (field, fault) =>
+  fault === 'unstorable' ? UNSTORABLE_MESSAGE : lengthMessages(PLAN_FIELD_NAMES[field])[fault];
+
+/** One length: its value as the schema outputs it (undefined when left out), or its first fault. */
+function checkLength(v: unknown, needed: boolean): { value?: string | number; fault?: LengthFault } {
+  if (v === undefined) return needed ? { fault: 'enter' } : {};
   if (typeof v === 'number') {
-    if (!Number.isFinite(v)) return { message: say.notALength };
-    return Math.abs(v) > MAX_LENGTH_NUMBER ? { message: say.farTooLarge } : { value: v };
+    if (!Number.isFinite(v)) return { fault: 'notALength' };
+    return Math.abs(v) > MAX_LENGTH_NUMBER ? { fault: 'farTooLarge' } : { value: v };
   }
-  if (typeof v !== 'string') return { message: say.notALength };
+  if (typeof v !== 'string') return { fault: 'notALength' };
   // In the schema's order: storable, then trimmed and not too long, then (if needed) not blank.
-  if (isUnstorable(v)) return { message: UNSTORABLE_MESSAGE };
+  if (isUnstorable(v)) return { fault: 'unstorable' };
   const t = v.trim();
-  if (t.length > MAX_LENGTH_TEXT) return { message: say.tooLong };
-  if (t === '') return needed ? { message: say.enter } : {};
+  if (t.length > MAX_LENGTH_TEXT) return { fault: 'tooLong' };
+  if (t === '') return needed ? { fault: 'enter' } : {};
   return { value: t };
 }
 
-/** Checks a plan request as POST /api/plan's schema does, with the same messages. */
-export function checkPlanRequest(input: unknown): PlanCheck {
+/** Checks a plan request as POST /api/plan's schema does, with the same messages (or a page's own words for the lengths). */
+export function checkPlanRequest(input: unknown, say: LengthWords = ENGLISH_LENGTH_WORDS): PlanCheck {
   if (typeof input !== 'object' || input === null || Array.isArray(input)) return { ok: false, error: SHAPE_MESSAGE, issues: {} };
   const body = input as Record<string, unknown>;
   const kind = body.kind;
@@ -53,8 +62,8 @@ export function checkPlanRequest(input: unknown): PlanCheck {
   else if (body.precision !== undefined) out.precision = body.precision;
   const { fields: lengths, required } = PLAN_FIELDS[kind as keyof typeof PLAN_FIELDS];
   for (const f of lengths) {
-    const { value, message } = checkLength(f, body[f], (required as readonly PlanField[]).includes(f));
-    if (message) fields[f] = message;
+    const { value, fault } = checkLength(body[f], (required as readonly PlanField[]).includes(f));
+    if (fault) fields[f] = say(f, fault);
     else if (value !== undefined) out[f] = value;
   }
   const first = Object.values(fields)[0];

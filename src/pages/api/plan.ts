@@ -39,11 +39,18 @@ function allRefusals(req: PlanRequest, first: AllowanceError): AllowanceError[] 
 
 // Lengths that cannot be read ("1 1/2 furlongs") and lengths that cannot be made (a cuff of 0)
 // are both refusals of a readable request: 422, one message per field.
+// Beside the English, each refusal's code and values: the page renders them in its own language.
 function refused(req: PlanRequest, err: AllowanceError): Response {
   const errors = allRefusals(req, err);
   const issues: Record<string, string> = {};
-  for (const e of errors) if (e.field && !(e.field in issues)) issues[e.field] = e.message;
-  return problem(422, errors[0]?.message ?? err.message, issues);
+  const refusals: Record<string, { code: string; values?: Readonly<Record<string, string | number>> }> = {};
+  for (const e of errors) {
+    if (!e.field || e.field in issues) continue;
+    issues[e.field] = e.message;
+    refusals[e.field] = e.values ? { code: e.code, values: e.values } : { code: e.code };
+  }
+  const first = errors[0] ?? err;
+  return json({ error: first.message, issues, refusals, refusal: first.values ? { code: first.code, values: first.values } : { code: first.code } }, 422);
 }
 
 /** Plans a cuff, a plain hem or a taper check (under a cuff or a plain hem) from the posted lengths. */

@@ -2,7 +2,9 @@
 // API's field messages for 400/422 (answers about the input, shown beside the fields), and a
 // failure for anything else. fetch is stubbed with the API's own answer shapes.
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { refusalWords } from '@/components/calculator/refusal-words';
 import { askPlan, planState, type PlanAnswer } from '@/components/calculator/use-plan';
+import { translator } from '@/lib/server/i18n/catalog';
 
 function answer(status: number, body: unknown) {
   return vi.fn(async () => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } }));
@@ -31,6 +33,26 @@ describe('askPlan', () => {
       error: 'The cuff depth must be more than 0.',
       issues: { cuffDepth: 'The cuff depth must be more than 0.' },
     });
+  });
+
+  it('keeps the refusal codes of a 422, and the page says them in its own language (English as the server wrote it)', async () => {
+    const sent = 'Cuff depth must be at least 1 in: a shallower cuff cannot be turned, pressed and tacked.';
+    const values = { label: 'Cuff depth', least: '1 in', why: 'shallowest-cuff' };
+    vi.stubGlobal(
+      'fetch',
+      answer(422, {
+        error: sent,
+        issues: { cuffDepth: sent },
+        refusal: { code: 'out-of-range', values },
+        refusals: { cuffDepth: { code: 'out-of-range', values } },
+      }),
+    );
+    const got = await askPlan({ ...REQUEST, cuffDepth: '1/2' });
+    expect(got).toMatchObject({ ok: false, refusals: { cuffDepth: { code: 'out-of-range', values } } });
+    if (got.ok) throw new Error('refused');
+    expect(refusalWords(translator('en'), got)).toEqual({ error: sent, issues: { cuffDepth: sent } });
+    const fr = 'Hauteur du revers : au moins 1 in ; un revers moins haut ne se retourne, ne se presse ni ne se bâtit.';
+    expect(refusalWords(translator('fr'), got)).toEqual({ error: fr, issues: { cuffDepth: fr } });
   });
 
   it('turns a 400 into field messages too', async () => {

@@ -159,6 +159,9 @@ describe('POST /api/plan: published figures', () => {
     const refused = await post({ ...base, widthAtCut: '0' });
     expect(refused.status).toBe(422);
     expect(refused.json.issues).toEqual({ widthAtCut: 'Width at the cutting line must be more than 0.' });
+    // Beside the English, the code and values the page renders in its own language.
+    expect(refused.json.refusals).toEqual({ widthAtCut: { code: 'not-positive', values: { label: 'Width at the cutting line' } } });
+    expect(refused.json.refusal).toEqual({ code: 'not-positive', values: { label: 'Width at the cutting line' } });
   });
 
   it('US National Bureau of Standards (1959): 1 in = 25.4 mm exactly, whatever unit the plan is shown in', async () => {

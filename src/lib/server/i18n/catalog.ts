@@ -32,7 +32,7 @@ export function messagesFor(language: Language, prefixes: readonly string[]): st
 }
 
 /** The catalog's parts an island of the calculator renders (its page sends only these). */
-export const CALCULATOR_MESSAGES = ['warning.', 'crease.', 'calc.', 'line.', 'lines.', 'cloth.', 'nofit.', 'taper.', 'cut.'] as const;
+export const CALCULATOR_MESSAGES = ['warning.', 'refusal', 'check.', 'crease.', 'calc.', 'line.', 'lines.', 'cloth.', 'nofit.', 'taper.', 'cut.'] as const;
 
 /** The parts the bench's garment page renders (its fitting form shows the calculator's plan too). */
 export const BENCH_MESSAGES = [
@@ -47,4 +47,8 @@ export const BENCH_MESSAGES = [
   'step.',
   'existing.',
   'due.',
+  'move.',
 ] as const;
+
+/** The parts the queue renders: its own words, the steps, due dates and the Mark buttons. */
+export const QUEUE_MESSAGES = ['queue.', 'step.', 'due.', 'move.'] as const;

@@ -29,3 +29,30 @@ export function warningText(t: Translate, w: Pick<PlanWarning, 'code' | 'values'
   if (w.code === 'not-enough-cloth' && v.finish !== 'hem') return t('warning.not-enough-cloth', { ...ABSENT, ...v, fits: stillFits(t, v) });
   return t(`warning.${w.code}` as MessageKey, { ...ABSENT, ...v });
 }
+
+/** An engine refusal as it travels (the API's 422 `refusals`, or an AllowanceError): its code and values. */
+export interface Refusal {
+  code: string;
+  values?: Readonly<Record<string, string | number>>;
+}
+
+// Values a refusal's variants may lack (an ICU select needs every one it reads).
+const REFUSAL_ABSENT = { label: 'none', inner: 'no', why: 'none', most: 'none', rule: 'none', choices: 'none', yesNo: 'no' } as const;
+
+/**
+ * One engine refusal in the catalog's words. The field is named by `label` when given, else by the
+ * catalog's `refusalField.<field>` (the last part of a path such as legs.left.widthAtCut), else by
+ * the engine's own English label (fields the catalog does not have yet).
+ */
+export function refusalText(t: Translate, r: Refusal, field?: string, label?: string): string {
+  const v = r.values ?? {};
+  if (!label && field && v.label !== undefined) {
+    const key = `refusalField.${field.split('.').pop()}`;
+    const named = t(key as MessageKey);
+    if (named !== key) label = named;
+  }
+  const yesNo = v.choices === 'true|false' ? 'yes' : 'no';
+  // ICU select cases cannot hold hyphens: the catalog writes the engine's rule codes with underscores.
+  const cases = { rule: String(v.rule ?? 'none').replaceAll('-', '_'), why: String(v.why ?? 'none').replaceAll('-', '_') };
+  return t(`refusal.${r.code}` as MessageKey, { ...REFUSAL_ABSENT, ...v, ...cases, yesNo, ...(label ? { label } : {}) });
+}
