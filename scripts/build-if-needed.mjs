@@ -4,7 +4,16 @@ import { join } from 'node:path';
 import { spawnSync } from 'node:child_process';
 
 // The build plugins astro.config.mjs imports count too: a changed plugin changes what is built.
-const SOURCES = ['src', 'public', 'astro.config.mjs', 'scripts/vite-node-worker.mjs', 'scripts/precompress.mjs', 'scripts/vite-icu-catalog.mjs', 'package.json', 'tsconfig.json'];
+const SOURCES = [
+  'src',
+  'public',
+  'astro.config.mjs',
+  'scripts/vite-node-worker.mjs',
+  'scripts/precompress.mjs',
+  'scripts/vite-icu-catalog.mjs',
+  'package.json',
+  'tsconfig.json',
+];
 
 function newest(path) {
   const st = statSync(path);
