@@ -61,15 +61,22 @@ describe('the plan’s drawings on a phone', () => {
       await field(page, 'Width higher up').fill('10');
       await field(page, '…measured this high above the edge').fill('12');
       await field(page, 'Seam allowance (optional)').fill('1/2');
-      const cuff = await words(page, 'The cuff drawn to scale');
+      // Measured once the drawing has settled: a plan answered while typing redraws it (polled, not slept).
       const taper = await words(page, /^The leg flat, drawn to scale/);
       expect(taper.length).toBeGreaterThan(3);
-      expect({ cuff: problems(cuff), taper: problems(taper) }).toEqual({ cuff: [], taper: [] });
+      await expect
+        .poll(
+          async () => ({ cuff: problems(await words(page, 'The cuff drawn to scale')), taper: problems(await words(page, /^The leg flat, drawn to scale/)) }),
+          {
+            timeout: 10_000,
+          },
+        )
+        .toEqual({ cuff: [], taper: [] });
       await page.screenshot({ path: `test-results/calculator-drawings-cuff-${width}.png`, fullPage: true });
       await choose(page, 'Plain hem');
       const hem = await words(page, /^The plain hem drawn to scale/);
       expect(hem.length).toBeGreaterThan(5);
-      expect(problems(hem)).toEqual([]);
+      await expect.poll(async () => problems(await words(page, /^The plain hem drawn to scale/)), { timeout: 10_000 }).toEqual([]);
       await page.screenshot({ path: `test-results/calculator-drawings-hem-${width}.png`, fullPage: true });
       await context.close();
     });
