@@ -8,7 +8,7 @@ import type { Problem } from '@/components/calculator/PlanView';
 import { usePlan } from '@/components/calculator/use-plan';
 import { useLastGoodPlan } from '@/components/calculator/use-last-good-plan';
 import { refusalWords } from '@/components/calculator/refusal-words';
-import { useMaybeT } from '@/components/I18n';
+import { useLanguage, useMaybeT } from '@/components/I18n';
 import type { TaperPlan } from '@/lib/allowance/types';
 
 // A cuff's taper check, or a plain hem's (the hem turned up must lie flat on the tapered leg too).
@@ -31,7 +31,9 @@ export function useLegPlan(leg: LegValues, unit: Unit, precision: Precision, let
   const plan = useLastGoodPlan(main, leg.finish === 'cuff' ? 'cuff' : 'hem');
   // The page's language when it sent its messages; else the server's English as it came.
   const t = useMaybeT();
-  const said = (a: NonNullable<typeof main.data>) => (a.ok ? { error: '', issues: {} } : t ? refusalWords(t, a) : { error: a.error, issues: a.issues });
+  const language = useLanguage();
+  const said = (a: NonNullable<typeof main.data>) =>
+    a.ok ? { error: '', issues: {} } : t ? refusalWords(t, a, language) : { error: a.error, issues: a.issues };
   const problem: Problem | null = !mainReq
     ? { kind: 'empty', text: t ? t('garment.planEmpty') : 'Type the cuff depth, or tap a preset, and the chalk lines appear here.' }
     : !main.asked

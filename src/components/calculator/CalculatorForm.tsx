@@ -1,5 +1,6 @@
 import { useState, type SubmitEvent } from 'react';
-import { useT } from '@/components/I18n';
+import { useLanguage, useT } from '@/components/I18n';
+import type { Language } from '@/lib/shared/i18n/languages';
 import type { Translate } from '@/lib/shared/i18n/format';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import { catalogLengthWords } from '@/lib/shared/i18n/check-words';
@@ -28,8 +29,8 @@ const SCALES: { value: Scale; label: string }[] = [
 ];
 const toScale = (unit: Unit, precision: Precision): Scale => (unit === 'in' ? (precision === 16 ? 'in16' : 'in8') : unit);
 
-function serverMessage(t: Translate, answer: PlanAnswer | undefined, field: string): string | undefined {
-  return answer && !answer.ok ? refusalWords(t, answer).issues[field] : undefined;
+function serverMessage(t: Translate, language: Language, answer: PlanAnswer | undefined, field: string): string | undefined {
+  return answer && !answer.ok ? refusalWords(t, answer, language).issues[field] : undefined;
 }
 
 /** The server's own rules, checked in the browser: a message per field of the request, or none. */
@@ -44,6 +45,7 @@ type Unconverted = Partial<Record<LengthField, { text: string; from: Unit }>>;
 /** The form on the left, the plan on the right; the plan follows the typing a quarter-second behind. */
 export function CalculatorForm() {
   const t = useT();
+  const language = useLanguage();
   const unitWords = (u: Unit) => t(`calc.unit.${u}`);
   const [values, setValues] = useState<CalculatorValues>(BLANK);
   // A field's own message shows once it has been typed in (or the form was submitted), as it is typed.
@@ -67,7 +69,7 @@ export function CalculatorForm() {
   const say = catalogLengthWords(t);
   const own = { ...(taperOpen ? ownMessages(taperRequest(values), say) : {}), ...ownMessages(mainRequest(values), say) };
   const errorFor = (f: LengthField): string | undefined =>
-    (typedIn.has(f) ? own[f] : undefined) ?? serverMessage(t, main.data, f) ?? (taperOpen ? serverMessage(t, taper.data, f) : undefined);
+    (typedIn.has(f) ? own[f] : undefined) ?? serverMessage(t, language, main.data, f) ?? (taperOpen ? serverMessage(t, language, taper.data, f) : undefined);
 
   const setScale = (s: Scale) => {
     const unit: Unit = s === 'in8' || s === 'in16' ? 'in' : s;
@@ -110,7 +112,7 @@ export function CalculatorForm() {
   const onSubmit = (e: SubmitEvent<HTMLFormElement>) => {
     e.preventDefault();
     setTypedIn(new Set(LENGTH_FIELDS));
-    const first = LENGTH_FIELDS.find((f) => own[f] ?? serverMessage(t, main.data, f));
+    const first = LENGTH_FIELDS.find((f) => own[f] ?? serverMessage(t, language, main.data, f));
     if (first) document.getElementById(`f-${first}`)?.focus();
   };
 
@@ -120,7 +122,7 @@ export function CalculatorForm() {
       ? { kind: 'empty', text: t('calc.problem.empty') }
       : { kind: 'error', text: t('calc.problem.fix') }
     : main.data && !main.data.ok
-      ? { kind: 'error', text: refusalWords(t, main.data).error }
+      ? { kind: 'error', text: refusalWords(t, main.data, language).error }
       : null;
   const unitLabel = values.unit;
   const taperPlan = taperOpen && taper.data?.ok && taper.data.plan.kind === 'taper' ? taper.data.plan : null;
@@ -174,7 +176,7 @@ export function CalculatorForm() {
               errorFor={errorFor}
               info={info}
               waiting={taperOpen && !taper.asked}
-              problem={taper.data && !taper.data.ok ? refusalWords(t, taper.data).error : null}
+              problem={taper.data && !taper.data.ok ? refusalWords(t, taper.data, language).error : null}
             />
           )}
         </form>

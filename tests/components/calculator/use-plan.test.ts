@@ -50,9 +50,9 @@ describe('askPlan', () => {
     const got = await askPlan({ ...REQUEST, cuffDepth: '1/2' });
     expect(got).toMatchObject({ ok: false, refusals: { cuffDepth: { code: 'out-of-range', values } } });
     if (got.ok) throw new Error('refused');
-    expect(refusalWords(translator('en'), got)).toEqual({ error: sent, issues: { cuffDepth: sent } });
+    expect(refusalWords(translator('en'), got, 'en')).toEqual({ error: sent, issues: { cuffDepth: sent } });
     const fr = 'Hauteur du revers : au moins 1 in ; un revers moins haut ne se retourne, ne se presse ni ne se bâtit.';
-    expect(refusalWords(translator('fr'), got)).toEqual({ error: fr, issues: { cuffDepth: fr } });
+    expect(refusalWords(translator('fr'), got, 'fr')).toEqual({ error: fr, issues: { cuffDepth: fr } });
   });
 
   it('turns a 400 into field messages too', async () => {
