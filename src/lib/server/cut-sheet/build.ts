@@ -12,19 +12,11 @@ import {
   validateHemTaperInput,
   validateTaperInput,
 } from '../../allowance/index';
-import type { CuffInput, HemInput, LengthInput, TaperInput } from '../../allowance/types';
+import type { CuffInput, HemInput, HemTaperInput, TaperInput } from '../../allowance/types';
 import type { CutSheetData, LegSheet, RecordedLength, Side, WaistNote } from '../../shared/cut-sheet-types';
 
-/** Leg widths for a taper check; the cuff's own depth, sections and unit are taken from the cuff. */
-export interface TaperWidths {
-  widthAtEdge: LengthInput;
-  widthAbove: LengthInput;
-  heightAbove: LengthInput;
-  seamAllowance?: LengthInput;
-  tolerance?: LengthInput;
-  /** on a let-down pair: measured flat at the cutting line, used there instead of the taper followed down */
-  widthAtCut?: LengthInput;
-}
+/** Leg widths for a taper check (the hem taper check's width fields); the cuff's own depth, sections and unit are taken from the cuff. */
+export type TaperWidths = Pick<HemTaperInput, 'widthAtEdge' | 'widthAbove' | 'heightAbove' | 'seamAllowance' | 'tolerance' | 'widthAtCut'>;
 
 /** What one leg should become: a cuff (maybe on a tapered leg) or a plain hem. */
 export type LegOrder =
