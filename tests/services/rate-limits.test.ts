@@ -52,7 +52,9 @@ describe('counters shared between processes', () => {
     for (const r of refused) expect(r.ok === false && r.retryAfter).toBeGreaterThan(50);
     // And what one client counted, the other sees.
     expect((await hitLimits(limit, at(20 * SEC), clients.a)).ok).toBe(false);
-    expect((await hitLimits(limit, at(MIN + 1), clients.b)).ok).toBe(true);
+    // The window began at whichever of the twelve (at 0–11 ms) the database took first: a minute
+    // after the last of them, it has ended whatever the order.
+    expect((await hitLimits(limit, at(MIN + 12), clients.b)).ok).toBe(true);
   });
 });
 
