@@ -68,4 +68,40 @@ describe('a fitting saved while typing goes on', () => {
     await page.getByRole('button', { name: 'Save measurements (no changes)' }).waitFor();
     await page.context().close();
   });
+
+  it('keeps lengths typed before the house default arrives, unsaved, with the default under the rest', async () => {
+    const page = await tabletPage(browser());
+    await signInAs(page, 'tailor', '/queue');
+    const id = await freshGarment(page, 'Moss twill trousers');
+    // The shop's presets come late, as on a slow connection at the fitting.
+    let release!: () => void;
+    const held = new Promise<void>((r) => (release = r));
+    let asked = false;
+    await page.route('**/api/presets', async (route) => {
+      asked = true;
+      await held;
+      await route.continue();
+    });
+    await page.goto(`/garments/${id}`);
+    await ready(page);
+    await field(page, 'Pin at the back (finished length)').fill('31 1/4');
+    await field(page, 'Cuff depth').fill('1 3/4');
+    expect(asked).toBe(true);
+    // The default can land before the typed lengths are kept as a draft (the same moment): as then.
+    await page.evaluate(() => sessionStorage.clear());
+    release();
+
+    await page.getByText(/From house default/).waitFor();
+    expect(await field(page, 'Pin at the back (finished length)').inputValue()).toBe('31 1/4');
+    expect(await field(page, 'Cuff depth').inputValue()).toBe('1 3/4');
+    // The default fills what was not typed: the demo shop's house default turns under 1/2 in.
+    expect(await field(page, 'Turn-under').inputValue()).toBe('1/2');
+    // What was typed is still a change to save, not swallowed into the starting point.
+    await page.getByRole('button', { name: 'Save measurements', exact: true }).click();
+    await page.getByText('Saved both legs.').waitFor();
+    const history = page.getByTestId('history');
+    await history.getByText('Left leg, Pin at the back (finished length): nothing → 31 1/4 in').waitFor();
+    await history.getByText('Left leg, Cuff depth: nothing → 1 3/4 in').waitFor();
+    await page.context().close();
+  });
 });

@@ -131,7 +131,10 @@ describe('the queue on a phone', () => {
     await signInAs(page, 'lead', '/queue');
     const first = page.getByTestId('queue-row').first();
     await first.waitFor();
-    const box = (await first.getByRole('link').first().boundingBox())!;
+    // Measured once the row stands still: a refetch landing now may redraw it (a detached row has no box).
+    const link = first.getByRole('link').first();
+    await expect.poll(() => link.boundingBox()).not.toBeNull();
+    const box = (await link.boundingBox())!;
     expect(box.y + box.height).toBeLessThanOrEqual(844);
     await page.screenshot({ path: 'test-results/queue-phone.png' });
 

@@ -1,7 +1,7 @@
 import { useT } from '@/components/I18n';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { useEffect, useRef, useState, type MutableRefObject } from 'react';
+import { useCallback, useEffect, useRef, useState, type MutableRefObject } from 'react';
 import { useForm, useWatch, type Resolver } from 'react-hook-form';
 import { Segmented } from '@/components/calculator/Segmented';
 import { Dialog } from '@/components/Dialog';
@@ -91,14 +91,26 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
   const other: Leg = leg === 'left' ? 'right' : 'left';
   const draftKey = `cuffwright:fitting-draft:${garmentId}`;
   const [restored, setRestored] = useState(false);
+  const restoredDraft = useRef(false);
   // The form as it stood when the last save was sent, to tell what was typed while it was on its way.
   const sent = useRef<MeasurementsInput | null>(null);
   const [typedWhileSaving, setTypedWhileSaving] = useState(false);
+  /** Puts back what was typed (the dotted paths in `newer`, read from `kept`) as unsaved changes. */
+  const keepTyped = useCallback(
+    (kept: MeasurementsInput, newer: string[]) => {
+      for (const path of newer) {
+        const value = path.split('.').reduce<unknown>((o, k) => (o as Record<string, unknown>)[k], kept);
+        setValue(path as `legs.left.${LegLength}`, value as string, { shouldDirty: true, shouldValidate: true });
+      }
+    },
+    [setValue],
+  );
 
   // Lengths typed before a reload come back, marked unsaved, until saved or discarded.
   useEffect(() => {
     const draft = readDraft<MeasurementsInput>(draftKey);
     if (draft) {
+      restoredDraft.current = true;
       reset(draft, { keepDefaultValues: true });
       setRestored(true);
     }
@@ -115,10 +127,7 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
       const { values: kept, newer } = afterSave(sent.current ?? getValues(), getValues(), stored);
       reset(stored);
       // Lengths typed during the save stay on screen and keep the form unsaved.
-      for (const path of newer) {
-        const value = path.split('.').reduce<unknown>((o, k) => (o as Record<string, unknown>)[k], kept);
-        setValue(path as `legs.left.${LegLength}`, value as string, { shouldDirty: true, shouldValidate: true });
-      }
+      keepTyped(kept, newer);
       setTypedWhileSaving(newer.length > 0);
       setRestored(false);
     },
@@ -177,12 +186,18 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
   const prefilled = useRef(false);
   useEffect(() => {
     const houseDefault = presets.data?.find((p) => p.house && p.isDefault);
-    if (prefilled.current || !houseDefault || fitting.legs.length > 0 || readDraft(draftKey)) return;
+    if (prefilled.current || !houseDefault || fitting.legs.length > 0 || restoredDraft.current) return;
     prefilled.current = true;
     // As the form's starting point, not a change: opening a garment alone asks nothing on leaving.
-    reset(withPreset(getValues(), LEGS, houseDefault));
+    // The presets can land after the tailor has started typing (a slow connection): what was typed
+    // is laid over the default and stays a change to save, never taken into the starting point.
+    const blank = formValues(fitting, unit);
+    const start = withPreset(blank, LEGS, houseDefault);
+    const { values: kept, newer } = afterSave(blank, getValues(), start);
+    reset(start);
+    keepTyped(kept, newer);
     setFromDefault(houseDefault.id);
-  }, [presets.data, fitting.legs.length, draftKey, reset, getValues]);
+  }, [presets.data, fitting, unit, reset, getValues, keepTyped]);
 
   const copyOther = () => {
     const from = values.legs[other];
