@@ -16,6 +16,7 @@ import type { CutSheetData, PageSize } from '@/lib/shared/cut-sheet-types';
 import { letDownFirst } from '@/lib/shared/existing-finish';
 import { savedLegOrder } from '@/lib/server/fitting/saved-leg';
 import type { LegPlanOptions } from '@/lib/shared/leg-plan';
+import type { WaistOrder } from '@/lib/shared/waist-order';
 import type { SavedLeg } from '@/lib/shared/measurement-request';
 import type { Language } from '@/lib/shared/i18n/languages';
 import type { QueueRow } from '@/lib/shared/bench-types';
@@ -63,6 +64,7 @@ interface SheetScale {
   precision: Precision;
   pageSize: PageSize;
   language: Language;
+  waistOrder: WaistOrder;
 }
 
 async function scaleOf(shopId: string, opts: SheetOptions): Promise<SheetScale> {
@@ -72,11 +74,17 @@ async function scaleOf(shopId: string, opts: SheetOptions): Promise<SheetScale> 
   // The shop's 1/8 or 1/16 carries over to inches asked for without a precision.
   const precision = opts.precision ?? (shop.unit === 'in' ? shop.precision : 8);
   // A metric shop's paper is A4, an inch shop's Letter, unless the print asks for the other.
-  return { unit, precision, pageSize: opts.pageSize ?? (shop.unit === 'in' ? 'LETTER' : 'A4'), language: settings.language };
+  return {
+    unit,
+    precision,
+    pageSize: opts.pageSize ?? (shop.unit === 'in' ? 'LETTER' : 'A4'),
+    language: settings.language,
+    waistOrder: settings.waistOrder,
+  };
 }
 
 /** The engine's orders for both legs of a saved fitting, read straight from the saved lengths, or a refusal saying what is missing (a let-down pair's measured width at the cut used). */
-export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precision, opts: LegPlanOptions = {}): LegOrder[] {
+export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precision, opts: LegPlanOptions & { waistOrder?: WaistOrder } = {}): LegOrder[] {
   if (saved.length === 0) throw new ServiceError(422, NO_FITTING);
   const orders: LegOrder[] = [];
   for (const s of saved) {
@@ -121,7 +129,7 @@ async function namesOf(g: Garment): Promise<HeaderNames> {
 }
 
 function sheetOf(actor: Actor, g: Garment, saved: SavedLeg[], names: HeaderNames, baseUrl: string, scale: Awaited<ReturnType<typeof scaleOf>>): CutSheetData {
-  const orders = fittingOrders(saved, scale.unit, scale.precision, { letDown: letDownFirst(g.existingFinish) });
+  const orders = fittingOrders(saved, scale.unit, scale.precision, { letDown: letDownFirst(g.existingFinish), waistOrder: scale.waistOrder });
   try {
     return buildCutSheet(headerOf(actor, g, names, baseUrl, scale.pageSize, scale.language), orders);
   } catch (e) {

@@ -16,6 +16,7 @@ import { benchSettings } from './shop-settings';
 import { scaleUnit } from '@/lib/shared/bench-requests';
 import { savedTexts } from '@/lib/server/fitting/saved-leg';
 import { waistNoteOf } from '@/lib/server/fitting/waist-note';
+import { type WaistOrder, waistFirstRefusal } from '@/lib/shared/waist-order';
 
 /** Both legs' lengths read exactly, or a message for each field that could not be read. */
 export type ReadLengths = { ok: true; legs: Record<Leg, Partial<Record<LegLength, SavedLength>>> } | { ok: false; issues: Record<string, string> };
@@ -125,6 +126,17 @@ async function presetOfLeg(
   return p;
 }
 
+/** In a shop that alters the waist first, a leg with a waist change still to do has no pin yet: the pin's refusal per leg, or null. */
+export function waistFirstIssues(input: Measurements, order: WaistOrder): Record<string, string> | null {
+  if (order !== 'waist-first') return null;
+  const issues: Record<string, string> = {};
+  for (const leg of LEGS) {
+    const typed = input.legs[leg];
+    if (typed.waistChange.trim() && typed.backPin.trim()) issues[`legs.${leg}.backPin`] = waistFirstRefusal(leg);
+  }
+  return Object.keys(issues).length ? issues : null;
+}
+
 /** Saves both legs; each value that changed becomes one audit event. Answers the fitting as saved. */
 export async function saveMeasurements(
   actor: Actor,
@@ -133,6 +145,8 @@ export async function saveMeasurements(
   read: Record<Leg, Partial<Record<LegLength, SavedLength>>>,
 ): Promise<FittingView> {
   await visibleGarment(actor, garmentId);
+  const refused = waistFirstIssues(input, (await benchSettings(actor.shopId)).waistOrder);
+  if (refused) throw new ServiceError(422, Object.values(refused)[0]!, refused);
   const before = new Map((await legsOf(garmentId)).map((l) => [l.leg, l]));
   const events: Parameters<typeof auditMany>[1] = [];
   const change = (leg: Leg, field: string, old: string | null, now: string | null) => {
@@ -177,10 +191,11 @@ export async function saveMeasurements(
 // The pending waist change's note per leg, in the shop's scale, as the cut sheet prints it.
 async function waistNotes(shopId: string, legs: SavedLeg[]): Promise<Pick<FittingView, 'waist'>> {
   if (!legs.some((l) => l.values.waistChange?.text?.trim())) return {};
-  const { unit, precision } = scaleUnit((await benchSettings(shopId)).scale);
+  const settings = await benchSettings(shopId);
+  const { unit, precision } = scaleUnit(settings.scale);
   const waist: NonNullable<FittingView['waist']> = {};
   for (const l of legs) {
-    const note = waistNoteOf(savedTexts(l, unit), unit, precision);
+    const note = waistNoteOf(savedTexts(l, unit), unit, precision, settings.waistOrder);
     if (note) waist[l.leg] = note;
   }
   return { waist };

@@ -7,6 +7,7 @@ import type { Actor } from '@/lib/server/api';
 import type { settingsRequest } from '@/lib/shared/bench-requests';
 import type { BenchSettings } from '@/lib/shared/bench-types';
 import { DEFAULT_FITTING_RULE } from '@/lib/shared/fitting-rule';
+import { DEFAULT_WAIST_ORDER } from '@/lib/shared/waist-order';
 import { DEFAULT_LANGUAGE } from '@/lib/shared/i18n/languages';
 import { audit } from './audit';
 
@@ -17,6 +18,7 @@ export async function benchSettings(shopId: string): Promise<BenchSettings> {
     scale: row?.scale ?? 'in8',
     stepLabels: (row?.stepLabels as BenchSettings['stepLabels']) ?? {},
     fittingRule: row?.fittingRule ?? DEFAULT_FITTING_RULE,
+    waistOrder: row?.waistOrder ?? DEFAULT_WAIST_ORDER,
     language: row?.language ?? DEFAULT_LANGUAGE,
   };
 }
@@ -27,6 +29,7 @@ export async function saveBenchSettings(actor: Actor, input: z.output<typeof set
     scale: input.scale,
     stepLabels: input.stepLabels,
     ...(input.fittingRule ? { fittingRule: input.fittingRule } : {}),
+    ...(input.waistOrder ? { waistOrder: input.waistOrder } : {}),
     ...(input.language ? { language: input.language } : {}),
     updatedAt: new Date(),
   };

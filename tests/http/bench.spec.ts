@@ -185,9 +185,9 @@ describe('bench settings', () => {
     expect(put.status).toBe(200);
     const seen = await call('GET', '/api/bench-settings', { cookie: cookie.apprentice });
     // The shop's fitting rule, not sent, stays as it was (issue 15).
-    expect(seen.body).toEqual({ scale: 'mm', stepLabels: { marked: 'Pinned and chalked' }, fittingRule: 'warn', language: 'en' });
+    expect(seen.body).toEqual({ scale: 'mm', stepLabels: { marked: 'Pinned and chalked' }, fittingRule: 'warn', waistOrder: 'record', language: 'en' });
     const back = await call('PUT', '/api/bench-settings', { cookie: cookie.lead, body: { scale: 'in8', stepLabels: {} } });
-    expect(back.body).toEqual({ scale: 'in8', stepLabels: {}, fittingRule: 'warn', language: 'en' });
+    expect(back.body).toEqual({ scale: 'in8', stepLabels: {}, fittingRule: 'warn', waistOrder: 'record', language: 'en' });
   });
 
   it('answer 422 for a scale that is not one', async () => {

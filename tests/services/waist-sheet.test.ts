@@ -11,6 +11,7 @@ const { fittingOf } = await import('@/services/measurements');
 const { makeShop } = await import('./fixtures');
 const { fittingRequest, openTicket, saveFitting } = await import('./garment-fixtures');
 const { garmentSheet } = await import('@/services/cut-sheets');
+const { benchSettings, saveBenchSettings } = await import('@/services/shop-settings');
 const { flatText, pdfFile } = await import('../lib/cut-sheet/poppler');
 
 let a: Shop;
@@ -39,12 +40,55 @@ describe('a pending waist change on the sheet', () => {
   });
 
   it('prints the same figures in French', async () => {
-    const { saveBenchSettings, benchSettings } = await import('@/services/shop-settings');
     const now = await benchSettings(a.shopId);
     await saveBenchSettings(a.lead, { ...now, language: 'fr' } as never);
     const { garment } = await openTicket(a, { garments: [{ description: 'Pantalon gris' }] });
     await saveFitting(a.tailor, garment.id, fittingRequest(leg, leg, 'in', 'plain'));
     const text = flatText(pdfFile((await garmentSheet(a.tailor, garment.id, {}, 'https://bench.cuffwright.test')).bytes));
     expect(squash(text)).toContain(squash('le repère d’épingle descend de 1 1/2 in, de 31 1/2 in à 33 in (règle : girth-slope'));
+  });
+});
+
+describe('a shop that alters the waist first (its lead’s choice)', () => {
+  let b: Shop;
+
+  beforeAll(async () => {
+    b = await makeShop('Waist First Shop');
+  });
+
+  it('pins now by default, and keeps the order when other settings are saved without it', async () => {
+    expect((await benchSettings(b.shopId)).waistOrder).toBe('record');
+    await saveBenchSettings(b.lead, { scale: 'in8', stepLabels: {}, waistOrder: 'waist-first' });
+    await saveBenchSettings(b.lead, { scale: 'in8', stepLabels: {} });
+    expect((await benchSettings(b.shopId)).waistOrder).toBe('waist-first');
+    expect((await benchSettings(a.shopId)).waistOrder).toBe('record');
+  });
+
+  it('refuses a pin on a leg with a waist change still to do, on that leg’s pin, and saves nothing', async () => {
+    const { garment } = await openTicket(b, { garments: [{ description: 'Navy trousers, waist to let out' }] });
+    const onlyRight = fittingRequest({ ...leg, waistChange: '' }, leg, 'in', 'plain');
+    await expect(saveFitting(b.tailor, garment.id, onlyRight)).rejects.toMatchObject({
+      status: 422,
+      issues: { 'legs.right.backPin': expect.stringContaining('waist first') },
+    });
+    expect((await fittingOf(b.lead, garment.id)).legs).toEqual([]);
+  });
+
+  it('saves the waist change with no pin yet, and says to pin once the waist is done, moving no mark', async () => {
+    const { garment } = await openTicket(b, { garments: [{ description: 'Charcoal trousers, waist first' }] });
+    const waitingOnWaist = { ...leg, backPin: '' };
+    await saveFitting(b.tailor, garment.id, fittingRequest(waitingOnWaist, waitingOnWaist, 'in', 'plain'));
+    const fitting = await fittingOf(b.lead, garment.id);
+    expect(fitting.waist?.left).toMatchObject({ code: 'first', change: '-1 in', by: '', mark: '' });
+  });
+
+  it('still prints a sheet saved before the shop chose waist first, with the waist-first note and no moved mark', async () => {
+    const c = await makeShop('Changed Its Mind');
+    const { garment } = await openTicket(c, { garments: [{ description: 'Grey trousers, pinned before' }] });
+    await saveFitting(c.tailor, garment.id, fittingRequest(leg, leg, 'in', 'plain'));
+    await saveBenchSettings(c.lead, { scale: 'in8', stepLabels: {}, waistOrder: 'waist-first' });
+    const text = flatText(pdfFile((await garmentSheet(c.tailor, garment.id, {}, 'https://bench.cuffwright.test')).bytes));
+    expect(squash(text)).toContain(squash('the shop alters the waist first. Pin the length once the waist is done'));
+    expect(squash(text)).not.toContain(squash('from 31 1/2 in to 33 in'));
   });
 });

@@ -10,6 +10,7 @@ import { fetchJson } from '@/lib/shared/fetch-json';
 import { FITTING_RULE_LABELS, FITTING_RULES } from '@/lib/shared/fitting-rule';
 import { DEFAULT_STEP_LABELS, GARMENT_STEPS, stepLabel } from '@/lib/shared/garment-steps';
 import { LANGUAGE_NAMES, LANGUAGES } from '@/lib/shared/i18n/languages';
+import { WAIST_ORDER_LABELS, WAIST_ORDERS } from '@/lib/shared/waist-order';
 import { useBenchSettings } from './use-bench';
 
 type Form = z.input<typeof settingsRequest>;
@@ -54,6 +55,15 @@ function SettingsForm({ initial }: { initial: BenchSettings }) {
         {FITTING_RULES.map((r) => (
           <label key={r} className="inline-flex min-h-11 items-center gap-3 text-lg">
             <input type="radio" value={r} {...register('fittingRule')} className="size-5" /> {FITTING_RULE_LABELS[r]}
+          </label>
+        ))}
+      </fieldset>
+      <fieldset className="flex flex-col gap-2 rounded-lg border-2 border-rule bg-card p-4">
+        <legend className="px-1 text-xl font-extrabold">A waist change still to do</legend>
+        <p className="text-muted">Taking in or letting out the waist moves where the trousers sit, and the hem with them. At the fitting:</p>
+        {WAIST_ORDERS.map((o) => (
+          <label key={o} className="inline-flex min-h-11 items-center gap-3 text-lg">
+            <input type="radio" value={o} {...register('waistOrder')} className="size-5" /> {WAIST_ORDER_LABELS[o]}
           </label>
         ))}
       </fieldset>

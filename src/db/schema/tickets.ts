@@ -7,6 +7,7 @@ import { z } from 'zod';
 import { DEFAULT_EXISTING_FINISH, EXISTING_FINISHES } from '../../lib/shared/existing-finish';
 import { GARMENT_STEPS, type GarmentStep } from '../../lib/shared/garment-steps';
 import { FITTING_RULES } from '../../lib/shared/fitting-rule';
+import { WAIST_ORDERS } from '../../lib/shared/waist-order';
 import { LANGUAGES } from '../../lib/shared/i18n/languages';
 import { organization, user } from './auth';
 import { customers } from './customers';
@@ -121,6 +122,8 @@ export const shopSettings = pgTable('shop_settings', {
   timeZone: text('time_zone'),
   /** a garment passing Chalk-marked with no fitting saved: 'warn' (a confirm on screen) or 'refuse' (the server says no) */
   fittingRule: text('fitting_rule', { enum: FITTING_RULES }).notNull().default('warn'),
+  /** a waist change still to do at the fitting: 'record' (the pin mark moves by it) or 'waist-first' (pin after the waist is altered) */
+  waistOrder: text('waist_order', { enum: WAIST_ORDERS }).notNull().default('record'),
   /** the language of the shop's screens and cut sheets (src/lib/server/i18n); dates and money follow it */
   language: text('language', { enum: LANGUAGES }).notNull().default('en'),
   updatedAt: timestamp('updated_at', { withTimezone: true }).defaultNow().notNull(),

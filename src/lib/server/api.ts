@@ -96,7 +96,7 @@ export async function readBody<S extends z.ZodType>(request: Request, schema: S,
 
 /** The JSON answer for a refusal a service (or better-auth under it) threw; anything else is rethrown. */
 export function refusal(e: unknown): Response {
-  if (e instanceof ServiceError) return problem(e.status, e.message);
+  if (e instanceof ServiceError) return problem(e.status, e.message, e.issues);
   // better-auth refuses in its own terms: an address taken a moment ago, a member it will not change.
   if (isAPIError(e) && e.statusCode >= 400 && e.statusCode < 500) return problem(e.statusCode, e.body?.message ?? e.message);
   throw e;

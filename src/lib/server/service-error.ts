@@ -7,6 +7,8 @@ export class ServiceError extends Error {
   constructor(
     public status: 403 | 404 | 409 | 422 | 502 | 503,
     message: string,
+    /** the refused fields, by the form's paths (e.g. legs.left.backPin), each with its message */
+    public issues?: Record<string, string>,
   ) {
     super(message);
   }

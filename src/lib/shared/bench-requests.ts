@@ -5,6 +5,7 @@ import { LANGUAGES } from '@/lib/shared/i18n/languages';
 import { text } from './text';
 import { EXISTING_FINISHES } from './existing-finish';
 import { FITTING_RULES } from './fitting-rule';
+import { WAIST_ORDERS } from './waist-order';
 import { GARMENT_STEPS } from './garment-steps';
 
 const blankToNull = (v: string | null | undefined) => (v === '' || v === undefined ? null : v);
@@ -116,6 +117,8 @@ export const settingsRequest = z.object({
   stepLabels: z.partialRecord(z.enum(GARMENT_STEPS), text().trim().max(40, 'Keep a step name under 40 characters.')).default({}),
   // Left out, the shop's rule stays as it was: a client that only changes the scale never loosens it.
   fittingRule: z.enum(FITTING_RULES, { error: 'Choose warn or refuse.' }).optional(),
+  // Left out, the shop's order stays as it was.
+  waistOrder: z.enum(WAIST_ORDERS, { error: 'Choose to pin now or to alter the waist first.' }).optional(),
   // Left out, the shop's language stays as it was.
   language: z.enum(LANGUAGES, { error: 'Choose one of the languages offered.' }).optional(),
 });

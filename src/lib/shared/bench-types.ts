@@ -6,6 +6,7 @@ import type { GarmentStep } from './garment-steps';
 import type { Scale } from './bench-requests';
 import type { FittingRule } from './fitting-rule';
 import type { SavedLeg } from './measurement-request';
+import type { WaistOrder } from './waist-order';
 import type { WaistNote } from './cut-sheet-types';
 
 /** A person a garment can be given to. */
@@ -21,6 +22,8 @@ export interface BenchSettings {
   stepLabels: Partial<Record<GarmentStep, string>>;
   /** a garment passing Chalk-marked with no fitting saved: warned on screen, or refused by the server */
   fittingRule: FittingRule;
+  /** a waist change still to do: move the pin mark by it, or alter the waist first and pin after */
+  waistOrder: WaistOrder;
   /** the language of the shop's screens and sheets */
   language: Language;
 }

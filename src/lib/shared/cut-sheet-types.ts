@@ -12,7 +12,7 @@ export type Side = 'left' | 'right';
 
 /** A pending waist change's effect on the pin mark, as printed (lengths already written in the sheet's unit; `mark` = pin + `by` down, in whole steps). */
 export interface WaistNote {
-  code: 'moves' | 'movesBy' | 'none' | 'needs';
+  code: 'moves' | 'movesBy' | 'none' | 'needs' | 'first';
   change: string;
   by: string;
   direction: 'down' | 'up' | 'none';

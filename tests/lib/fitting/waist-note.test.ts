@@ -11,6 +11,12 @@ describe('waistNoteOf', () => {
     expect(waistNoteOf({ backPin: '31 1/2', ...body, waistToSeat: '9' }, 'in', 16)).toBeNull();
   });
 
+  it('in a shop that alters the waist first, moves no mark and needs no girths (engine policy waist-first)', () => {
+    const note = waistNoteOf({ waistChange: '-1 1/4' }, 'in', 16, 'waist-first')!;
+    expect(note).toMatchObject({ code: 'first', change: '-1 1/4 in', by: '', pin: '', mark: '', direction: 'none' });
+    expect(note.source).toMatch(/adjust the waist before pinning/);
+  });
+
   it('taken in 1 in moves the mark down by 1 × 9/(40 − 34) = 1 1/2 in, from 31 1/2 to 33 in', () => {
     // Check values by hand from the derived rule (docs/KINDS.md): 9/6 = 1 1/2; 31 1/2 + 1 1/2 = 33.
     const note = waistNoteOf({ backPin: '31 1/2', waistChange: '-1', ...body, waistToSeat: '9' }, 'in', 16)!;

@@ -7,6 +7,7 @@ import { typedForUnit } from '../../shared/length-reading';
 import { FIELD_KEYS, fieldsOf, type FieldKey, type Finish } from '../../shared/fitting/kinds';
 import { planLengths, plansOf, type LegTexts } from '../../shared/fitting/plan-lengths';
 import { waistNoteOf } from './waist-note';
+import type { WaistOrder } from '../../shared/waist-order';
 
 /** A leg as saved (the API's SavedLeg, or a measurements row): its side, unit, finish and lengths as typed. */
 export interface StoredLeg {
@@ -30,8 +31,8 @@ export function savedTexts(saved: StoredLeg, to: Unit): LegTexts {
   return out;
 }
 
-/** The engine's order for one saved leg in the given unit, or null while a cuff has no depth (`letDown`: the width measured at the cut is used). */
-export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision, opts: { letDown?: boolean } = {}): LegOrder | null {
+/** The engine's order for one saved leg in the given unit, or null while a cuff has no depth (`letDown`: the width measured at the cut is used; `waistOrder`: the shop's). */
+export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision, opts: { letDown?: boolean; waistOrder?: WaistOrder } = {}): LegOrder | null {
   const texts = savedTexts(saved, unit);
   const plans = plansOf(saved.finish);
   const main = planLengths(plans.main, saved.finish, texts);
@@ -43,7 +44,7 @@ export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision
   // The finish's lengths no plan uses but the bench needs (the registry's 'listed'), as typed.
   const listed = fieldsOf(saved.finish).filter((f) => f.printed === 'listed' && texts[f.key as FieldKey]);
   const recorded = listed.length ? { recorded: listed.map((f) => ({ label: f.label, text: texts[f.key as FieldKey]! })) } : {};
-  const note = waistNoteOf(texts, unit, precision);
+  const note = waistNoteOf(texts, unit, precision, opts.waistOrder);
   const waist = note ? { waist: note } : {};
   const taper: { taper?: TaperWidths } = widths
     ? {

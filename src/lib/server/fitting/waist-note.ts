@@ -6,9 +6,10 @@ import { isAllowanceError } from '../../allowance/allowance-error';
 import { stepRatio, stepsText } from '../../allowance/format-length';
 import { parseLength } from '../../allowance/parse-length';
 import type { Precision, Unit } from '../../allowance/types';
-import { waistMovesHem } from '../../allowance/waist-move';
+import { WAIST_MOVE_SOURCES, waistMovesHem } from '../../allowance/waist-move';
 import type { WaistNote } from '../../shared/cut-sheet-types';
 import type { LegTexts } from '../../shared/fitting/plan-lengths';
+import type { WaistOrder } from '../../shared/waist-order';
 
 // Whole display steps of a length in mm (1/p in, or 0.5 mm), to the nearest.
 function steps(mm: number, unit: Unit, precision: Precision): number {
@@ -16,12 +17,14 @@ function steps(mm: number, unit: Unit, precision: Precision): number {
   return Math.round((mm * a) / b);
 }
 
-/** The pending waist change's note for a leg's lengths (read in the given unit), or null when none is pending. */
-export function waistNoteOf(texts: LegTexts, unit: Unit, precision: Precision): WaistNote | null {
+/** The pending waist change's note for a leg's lengths (read in the given unit), or null when none is pending; a waist-first shop moves no mark. */
+export function waistNoteOf(texts: LegTexts, unit: Unit, precision: Precision, order: WaistOrder = 'record'): WaistNote | null {
   const change = texts.waistChange;
   if (!change) return null;
   const changeText = stepsText(steps(parseLength(change, unit, precision).mm, unit, precision), unit, precision);
   const base = { change: changeText, rule: 'girth-slope', by: '', direction: 'none' as const, pin: '', mark: '', source: '' };
+  // The shop alters the waist first and pins the length after (the engine's policy 'waist-first').
+  if (order === 'waist-first') return { ...base, code: 'first', source: WAIST_MOVE_SOURCES.policy };
   try {
     const plan = waistMovesHem({
       unit,

@@ -1,0 +1,1 @@
+ALTER TABLE "shop_settings" ADD COLUMN "waist_order" text DEFAULT 'record' NOT NULL;
