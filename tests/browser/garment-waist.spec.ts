@@ -61,4 +61,39 @@ describe('a pending waist change at the fitting', () => {
     expect(errors).toEqual([]);
     await page.context().close();
   });
+
+  it('in a shop that alters the waist first, marks the pin beside a waist change and keeps the change alone', async () => {
+    // A shop of its own (signed up through the API, cookies kept by the page's context), so the demo
+    // shop's settings stay as the other stories expect.
+    const page = await tabletPage(browser());
+    const email = `waist-first-${Date.now()}@shop.test`;
+    const up = await page.request.post('/api/shops', {
+      data: { shopName: 'Waist First Alterations', name: 'Ida Penhallow', email, password: 'a-long-password' },
+    });
+    expect(up.status()).toBe(201);
+    await page.goto('/bench-settings');
+    await ready(page);
+    await choose(page, 'Waist first: alter the waist, then pin the length at a new fitting');
+    await page.getByRole('button', { name: 'Save settings' }).click();
+    await page.getByText('Saved.', { exact: true }).waitFor();
+    const id = await freshGarment(page, 'Navy serge trousers, waist first');
+    await page.goto(`/garments/${id}`);
+    await ready(page);
+    await choose(page, 'Plain hem');
+    await field(page, 'Pin at the back (finished length)').fill('31 1/2');
+    await field(page, 'Pending waist change').fill('-1');
+    await page.getByRole('button', { name: 'Save measurements' }).click();
+    // The server's refusal stands beside the pin, and nothing is saved.
+    await page.getByText(/The shop does the waist first: the left leg has a waist change still to do/).first().waitFor();
+    expect(await field(page, 'Pin at the back (finished length)').getAttribute('aria-invalid')).toBe('true');
+    expect(await page.getByText('Saved both legs.').count()).toBe(0);
+
+    await field(page, 'Pin at the back (finished length)').fill('');
+    await page.getByRole('button', { name: 'Save measurements' }).click();
+    await page.getByText('Saved both legs.').waitFor();
+    const note = page.getByTestId('waist-note');
+    await note.waitFor({ timeout: 10_000 });
+    expect(await note.textContent()).toContain('Pending waist change -1 in: the shop alters the waist first. Pin the length once the waist is done');
+    await page.context().close();
+  });
 });
