@@ -9,6 +9,7 @@ const DEMO_PRICES: Record<PriceKey, number> = {
   'plain-hem': 1650,
   'cuff-from-hem': 2400,
   'cuff-remake': 2950,
+  'original-hem': 2200,
   'taper-let-out': 1100,
   rush: 900,
 };

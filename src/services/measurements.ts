@@ -3,8 +3,17 @@
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import { db, type Db } from '@/db';
 import { measurements, presets, user } from '@/db/schema';
-import { isAllowanceError, parseLength, validateCuffInput, validateHemInput, validateHemTaperInput, validateTaperInput } from '@/lib/allowance';
-import { legHemTaperRequest, legMainRequest, legTaperRequest } from '@/lib/shared/leg-plan';
+import {
+  isAllowanceError,
+  parseLength,
+  validateCuffInput,
+  validateHemInput,
+  validateHemTaperInput,
+  validateOriginalHemInput,
+  validateTaperInput,
+} from '@/lib/allowance';
+import { legHemTaperRequest, legMainRequest, legOriginalHemInput, legTaperRequest } from '@/lib/shared/leg-plan';
+import { ORIGINAL_HEM_KEYS } from '@/lib/shared/fitting/plan-lengths';
 import type { Actor } from '@/lib/server/api';
 import type { FittingView } from '@/lib/shared/bench-types';
 import { LEG_LENGTHS, LEGS, type Leg, type LegLength, type Measurements, type SavedLeg, type SavedLength } from '@/lib/shared/measurement-request';
@@ -21,6 +30,9 @@ import { type WaistOrder, waistFirstRefusal } from '@/lib/shared/waist-order';
 /** Both legs' lengths read exactly, or a message for each field that could not be read. */
 export type ReadLengths = { ok: true; legs: Record<Leg, Partial<Record<LegLength, SavedLength>>> } | { ok: false; issues: Record<string, string> };
 
+// The engine's names of the kept factory hem's lengths, back to the form's.
+const fromEngine: Record<string, string> = Object.fromEntries(Object.entries(ORIGINAL_HEM_KEYS).map(([form, engine]) => [engine, form]));
+
 /**
  * What the engine would refuse in each leg's plans (cuff or hem, and the taper check), keyed by the
  * form's paths: a fitting that cannot be planned is not saved, so its sheet can always be printed.
@@ -34,6 +46,7 @@ export function planIssues(input: Measurements): Record<string, string> {
     const checks: [object | null, (i: unknown) => { field?: string; message: string }[]][] = [];
     const main = legMainRequest(typed, input.unit);
     if (main) checks.push([main, main.kind === 'hem' ? validateHemInput : validateCuffInput]);
+    checks.push([legOriginalHemInput(typed, input.unit), validateOriginalHemInput]);
     for (const letDown of typed.widthAtCut.trim() ? [false, true] : [false]) {
       checks.push([legTaperRequest(typed, input.unit, 8, { letDown }), validateTaperInput]);
       checks.push([legHemTaperRequest(typed, input.unit, 8, { letDown }), validateHemTaperInput]);
@@ -41,8 +54,10 @@ export function planIssues(input: Measurements): Record<string, string> {
     for (const [request, validate] of checks) {
       if (!request) continue;
       for (const e of validate(request)) {
-        // Engine fields not on the form (unit, precision) fall back to the cuff depth, which every plan has.
-        const field = e.field && (LEG_LENGTHS as readonly string[]).includes(e.field) ? e.field : 'cuffDepth';
+        // The engine's names back to the form's (the join's seam allowance); fields not on the form
+        // (unit, precision) fall back to the finish's first length: the cuff depth, or the shortening.
+        const named = typed.finish === 'original' ? (fromEngine[e.field ?? ''] ?? e.field) : e.field;
+        const field = named && (LEG_LENGTHS as readonly string[]).includes(named) ? named : typed.finish === 'original' ? 'shortenBy' : 'cuffDepth';
         const key = `legs.${leg}.${field}`;
         if (!(key in issues)) issues[key] = e.message;
       }

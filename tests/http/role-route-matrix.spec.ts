@@ -178,6 +178,7 @@ const PRICE_LIST = {
     { key: 'plain-hem', label: 'Plain hem', amountMinor: 1650 },
     { key: 'cuff-from-hem', label: 'Cuff from a plain hem', amountMinor: 2400 },
     { key: 'cuff-remake', label: 'Cuff let down and re-made', amountMinor: 2950 },
+    { key: 'original-hem', label: 'Jeans, original hem kept', amountMinor: 2200 },
     { key: 'taper-let-out', label: 'Taper let-out at the cuff (per pair)', amountMinor: 1100 },
     { key: 'rush', label: 'Rush surcharge (per ticket)', amountMinor: 900 },
   ],

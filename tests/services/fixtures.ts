@@ -29,6 +29,7 @@ export const TEST_PRICES = [
   { key: 'plain-hem', label: 'Plain hem', amountMinor: 1800 },
   { key: 'cuff-from-hem', label: 'Cuff from a plain hem', amountMinor: 2600 },
   { key: 'cuff-remake', label: 'Cuff let down and re-made', amountMinor: 3200 },
+  { key: 'original-hem', label: 'Jeans, original hem kept', amountMinor: 2300 },
   { key: 'taper-let-out', label: 'Taper let-out', amountMinor: 1200 },
   { key: 'rush', label: 'Rush', amountMinor: 1000 },
 ] as const;

@@ -158,7 +158,7 @@ function IntakeScreen({ canPrice = false }: { canPrice?: boolean }) {
                 list={list}
                 finish={typed[i]?.finish ?? ''}
                 work={(typed[i]?.work ?? []).filter((w): w is string => !!w)}
-                onFinish={(f) => setValue(`garments.${i}.finish`, f as 'hem' | 'cuff' | '')}
+                onFinish={(f) => setValue(`garments.${i}.finish`, f as 'hem' | 'cuff' | 'original' | '')}
                 onWork={(ids) => setValue(`garments.${i}.work`, ids)}
               />
             )}

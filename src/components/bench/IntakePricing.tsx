@@ -4,7 +4,7 @@
 import type { AsJson } from '@/lib/shared/as-json';
 import type { PriceListView } from '@/lib/shared/counter-views';
 import { INTAKE_FINISHES } from '@/lib/shared/bench-requests';
-import { PART_LABELS } from '@/lib/shared/fitting/kinds';
+import { KINDS, PART_LABELS } from '@/lib/shared/fitting/kinds';
 import type { ExistingFinish } from '@/lib/shared/existing-finish';
 import { formatMoney } from '@/lib/pricing/money';
 import { isRushableWork, priceTicket, sumMinor, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
@@ -48,7 +48,7 @@ export function GarmentPricing({
           <option value="">Not priced until the fitting</option>
           {INTAKE_FINISHES.map((f) => (
             <option key={f} value={f}>
-              {PART_LABELS[f]}
+              {f === 'original' ? KINDS.trousers.finishes.original.label : PART_LABELS[f]}
             </option>
           ))}
         </select>
@@ -83,7 +83,7 @@ export function intakeEstimate(
   const prices = Object.fromEntries(list.items.map((i) => [i.key, { label: i.label, amountMinor: i.amountMinor }])) as PriceList;
   const facts = garments.flatMap((g, i): GarmentFacts[] => {
     const finish = g.finish;
-    return finish === 'hem' || finish === 'cuff'
+    return finish === 'hem' || finish === 'cuff' || finish === 'original'
       ? [{ garmentId: String(i), label: g.description ?? '', finish, taperLetOut: false, oldCuff: g.existingFinish === 'cuff' }]
       : [];
   });

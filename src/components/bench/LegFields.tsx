@@ -5,7 +5,7 @@ import { LengthInput } from '@/components/LengthInput';
 import { Segmented } from '@/components/calculator/Segmented';
 // The defaults module only (no parser, so no mathjs in the island).
 import { usualCuffDepthsText } from '@/lib/allowance/defaults';
-import { FIELD, fieldsOf, GROUPS, KINDS, partOf, type GroupId } from '@/lib/shared/fitting/kinds';
+import { FIELD, fieldsOf, GROUPS, partGroupOf, type GroupId } from '@/lib/shared/fitting/kinds';
 import { FINISHES, type Finish, type Leg, type LegLength, type MeasurementsInput } from '@/lib/shared/measurement-request';
 
 interface Props {
@@ -31,7 +31,7 @@ function groupsOf(finish: Finish, letDown: boolean): { title: string; fields: Le
   const fields = fieldsOf(finish, letDown);
   return (Object.keys(GROUPS) as GroupId[])
     .map((g) => ({
-      title: g === 'part' ? KINDS.trousers.parts[partOf(finish)].group : GROUPS[g],
+      title: g === 'part' ? partGroupOf(finish) : GROUPS[g],
       fields: fields.filter((f) => f.group === g).map((f) => f.key as LegLength),
     }))
     .filter((g) => g.fields.length > 0);

@@ -4,6 +4,7 @@ import { readLength, typedWithUnit } from '@/lib/shared/length-reading';
 import { frontPinNote } from '@/lib/shared/leg-plan';
 import type { Leg, LegValues } from '@/lib/shared/measurement-request';
 import { HemTaperCheck } from './HemTaperCheck';
+import { OriginalHemPlanView } from './OriginalHemPlanView';
 import { useLegPlan, type LegPlanState } from './use-leg-plan';
 
 interface Props {
@@ -42,8 +43,13 @@ export function LegPlanView({ leg, values, unit, precision, planned }: Omit<Prop
         </p>
       )}
       {note && <p className="rounded-md border-l-8 border-accent bg-accent-soft px-4 py-2 text-lg font-semibold">{note}</p>}
-      {/* The calculator's taper view speaks of the cuff top: a plain hem's check has its own below. */}
-      <PlanView plan={plan} problem={problem} failure={failure} taper={taper?.finish === 'hem' ? null : taper} />
+      {/* The kept factory hem is planned in the page; its problem (empty or refused) shows as any plan's. */}
+      {planned.original ? (
+        <OriginalHemPlanView leg={leg} plan={planned.original} />
+      ) : (
+        // The calculator's taper view speaks of the cuff top: a plain hem's check has its own below.
+        <PlanView plan={plan} problem={problem} failure={failure} taper={taper?.finish === 'hem' ? null : taper} />
+      )}
       {taper?.finish === 'hem' && <HemTaperCheck taper={taper} />}
       {cut?.measured && (
         <p data-testid={`measured-cut-${leg}`} className="rounded-md border-l-8 border-accent bg-accent-soft px-4 py-2 text-lg font-semibold">

@@ -94,7 +94,7 @@ export const measurements = pgTable(
     unit: text('unit', { enum: ['in', 'cm', 'mm'] })
       .notNull()
       .default('in'),
-    finish: text('finish', { enum: ['plain', 'slope', 'cuff'] })
+    finish: text('finish', { enum: ['plain', 'slope', 'cuff', 'original'] })
       .notNull()
       .default('cuff'),
     /** the preset's name when it was applied: shown only once the preset itself is removed */

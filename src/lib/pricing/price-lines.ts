@@ -8,8 +8,8 @@ export interface GarmentFacts {
   garmentId: string;
   /** shown beside its lines, e.g. "Grey flannel trousers" */
   label: string;
-  /** null while the fitting has not decided the finish */
-  finish: Part | null;
+  /** null while the fitting has not decided the finish; 'original' the factory hem kept (jeans) */
+  finish: Part | 'original' | null;
   /** the taper check says the leg must be let out to keep the cuff-top width down to the cut */
   taperLetOut: boolean;
   /** the trousers came in with a cuff that is let down and made again */
@@ -40,8 +40,9 @@ export interface PricedTicket {
   unpriced: string[];
 }
 
-/** The finish's line: a plain hem, a cuff made from a plain hem, or an old cuff re-made. */
+/** The finish's line: a plain hem, a cuff made from a plain hem, an old cuff re-made, or jeans kept on their factory hem. */
 export function finishKey(g: GarmentFacts): PriceKey | null {
+  if (g.finish === 'original') return 'original-hem';
   if (g.finish === 'hem') return 'plain-hem';
   if (g.finish === 'cuff') return g.oldCuff ? 'cuff-remake' : 'cuff-from-hem';
   return null;

@@ -51,16 +51,16 @@ export { newCustomer, customerPatch } from './customer-request';
 import { newCustomer } from './customer-request';
 import type { Part } from './fitting/kinds';
 
-/** The finishes a garment can be priced for at intake, before the fitting decides (an estimate). */
-export const INTAKE_FINISHES = ['hem', 'cuff'] as const satisfies readonly Part[];
+/** The finishes a garment can be priced for at intake, before the fitting decides (an estimate): a part, or jeans kept on their factory hem. */
+export const INTAKE_FINISHES = ['hem', 'cuff', 'original'] as const satisfies readonly (Part | 'original')[];
 
 /** A garment as intake takes it in, priced there when the counter picks its finish or kinds of work. */
 export const intakeGarment = garmentInput.extend({
   /** the finish the customer asks for, priced from the list as an estimate until the fitting's */
   finish: z
-    .union([z.enum(INTAKE_FINISHES, { error: 'Choose a plain hem or a cuff.' }), z.literal(''), z.null()])
+    .union([z.enum(INTAKE_FINISHES, { error: 'Choose a plain hem, a cuff or the original hem kept.' }), z.literal(''), z.null()])
     .optional()
-    .transform((v): (typeof INTAKE_FINISHES)[number] | null => (v === 'hem' || v === 'cuff' ? v : null)),
+    .transform((v): (typeof INTAKE_FINISHES)[number] | null => (v === 'hem' || v === 'cuff' || v === 'original' ? v : null)),
   /** the lead's kinds of work picked for this garment ("Replace zip"), each once */
   work: z
     .array(z.uuid('Choose kinds of work from the price list.'))

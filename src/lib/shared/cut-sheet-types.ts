@@ -2,6 +2,7 @@
 // calculator both build one of these and hand it to renderCutSheet.
 import type { Language } from './i18n/languages';
 import type { CreaseLanding, CuffInput, CuffPlan, HemInput, HemPlan, HemTaperInput, Precision, TaperInput, TaperPlan, Unit } from '@/lib/allowance/types';
+import type { OriginalHemInput, OriginalHemPlan } from '@/lib/allowance/kind-types';
 import type { ExistingFinish } from '@/lib/shared/existing-finish';
 
 /** The paper a sheet is printed on. */
@@ -65,8 +66,24 @@ export interface HemLeg {
   waist?: WaistNote;
 }
 
+/** One leg of jeans shortened keeping the factory hem: cut off above its stitching and sewn back on (its taper check inside the plan). */
+export interface OriginalHemLeg {
+  side: Side;
+  finish: 'original';
+  input: OriginalHemInput;
+  plan: OriginalHemPlan;
+  /** the finished length pinned at the back, as typed, in the plan's unit unless it names one */
+  finished?: string;
+  /** lengths recorded at the fitting that no plan uses, printed as typed (the registry's 'listed' fields) */
+  recorded?: RecordedLength[];
+  /** the pending waist change and where it moves the pin mark */
+  waist?: WaistNote;
+  taper?: undefined;
+  crease?: undefined;
+}
+
 /** One leg of the garment. */
-export type LegSheet = CuffLeg | HemLeg;
+export type LegSheet = CuffLeg | HemLeg | OriginalHemLeg;
 
 /** Everything one cut sheet shows: one garment, one page. */
 export interface CutSheetData {

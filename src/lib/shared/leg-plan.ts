@@ -2,7 +2,8 @@
 // and the taper check when the leg widths are given. Which lengths go where is the registry's
 // (fitting/plan-lengths.ts); this adds the kind and the scale. Shared by the garment page and its tests.
 import type { HemTaperInput, Precision, Unit } from '@/lib/allowance/types';
-import { planLengths, planScale, plansOf } from './fitting/plan-lengths';
+import type { OriginalHemInput } from '@/lib/allowance/kind-types';
+import { originalHemLengths, planLengths, planScale, plansOf } from './fitting/plan-lengths';
 import type { LegValues } from './measurement-request';
 import type { PlanRequestInput } from './plan-request';
 
@@ -14,6 +15,7 @@ export interface LegPlanOptions {
 
 /** The main plan for a leg, or null while a cuff has no depth yet (a cuff is hemmed level: the front pin is recorded, never turned into a slope). */
 export function legMainRequest(leg: LegValues, unit: Unit, precision: Precision = 8): PlanRequestInput | null {
+  if (leg.finish === 'original') return null;
   const kind = plansOf(leg.finish).main as 'cuff' | 'hem';
   const lengths = planLengths(kind, leg.finish, leg);
   return lengths && ({ kind, ...planScale(unit, precision), ...lengths } as PlanRequestInput);
@@ -34,7 +36,14 @@ export function frontPinNote(leg: LegValues): string | null {
 
 /** The taper check for a plain-hemmed leg (the hem turned up must lie flat on the leg too), or null until all three widths are given. */
 export function legHemTaperRequest(leg: LegValues, unit: Unit, precision: Precision = 8, opts: LegPlanOptions = {}): HemTaperInput | null {
-  if (leg.finish === 'cuff') return null;
+  if (leg.finish === 'cuff' || leg.finish === 'original') return null;
   const lengths = planLengths('hemTaper', leg.finish, leg, opts.letDown);
   return lengths && ({ ...planScale(unit, precision), ...lengths } as HemTaperInput);
+}
+
+/** Jeans kept on their factory hem: planOriginalHem's input (its taper check inside), or null on another finish or while the shortening or hem depth is blank. */
+export function legOriginalHemInput(leg: LegValues, unit: Unit, precision: Precision = 8): OriginalHemInput | null {
+  if (leg.finish !== 'original') return null;
+  const lengths = originalHemLengths(leg);
+  return lengths && ({ ...planScale(unit, precision), ...lengths } as unknown as OriginalHemInput);
 }

@@ -16,7 +16,7 @@ import { priceListOf } from './prices';
 export interface IntakeGarment {
   id: string;
   label: string;
-  finish: 'hem' | 'cuff' | null;
+  finish: 'hem' | 'cuff' | 'original' | null;
   existingFinish: ExistingFinish;
   /** ids of the lead's kinds of work */
   work: readonly string[];

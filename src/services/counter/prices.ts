@@ -296,9 +296,11 @@ export async function garmentFacts(shopId: string, ticketId: string): Promise<Ga
   });
 }
 
-// Measurements store cuff|plain|slope, garments cuff|hem: the registry reads both; pricing wants the part.
+// Measurements store cuff|plain|slope|original, garments cuff|hem|original: the registry reads both;
+// pricing wants the part, or the kept factory hem, which has a price of its own.
 function finishOf(value: string | null): GarmentFacts['finish'] {
   const finish = readFinish(value);
+  if (finish === 'original') return 'original';
   return finish ? partOf(finish) : null;
 }
 

@@ -19,6 +19,7 @@ import { LENGTHS_OF, presetSettings } from '@/lib/shared/preset-settings';
 import { cuffRequest, hemRequest, hemTaperRequest, taperRequest } from '@/lib/shared/plan-request';
 import { engineFields } from '@/lib/shared/fitting/kinds';
 import { FITTING_VALUES } from './fitting-values';
+import { ORIGINAL_HEM_KEYS } from '@/lib/shared/fitting/plan-lengths';
 
 const text = (html: string) =>
   html
@@ -109,7 +110,8 @@ describe('the fitting registry', () => {
         if (f.printed === 'listed') expect(group.recorded, `${key} (${finish})`).toContain(`${f.label} ${value}`);
         if (f.printed !== 'plan') continue;
         const inOrder = [
-          (order.input as unknown as Record<string, unknown>)[key],
+          // The kept factory hem's join allowance is the engine's seamAllowance (ORIGINAL_HEM_KEYS).
+          (order.input as unknown as Record<string, unknown>)[finish === 'original' ? (ORIGINAL_HEM_KEYS[key] ?? key) : key],
           (order.taper as unknown as Record<string, unknown> | undefined)?.[key],
           key === 'backPin' ? order.finished : undefined,
         ];

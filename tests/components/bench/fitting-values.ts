@@ -21,6 +21,11 @@ export const FITTING_VALUES: Record<FieldKey, string> = {
   heightAbove: '12',
   widthAtCut: '8 1/8',
   seamAllowance: '1/2',
+  // Jeans kept on their factory hem (fitted on the 'original' finish): 2 in off, a 5/8 in factory hem,
+  // joined with 3/8 in each side (common practice (no source); docs/KINDS.md).
+  shortenBy: '2',
+  factoryHem: '5/8',
+  joinSeam: '3/8',
   // Invented wearer: taken in 1 in, waist 34 in, seat 40 in, 8 in apart (common practice, no source).
   waistChange: '-1',
   waistGirth: '34',

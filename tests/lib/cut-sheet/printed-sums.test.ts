@@ -127,6 +127,7 @@ function expectClothAddsUp(g: SheetLegGroup, unit: Unit, step: number) {
 
 /** Needs and short by never print under the exact figure, spare never over it. */
 function expectSafeSide(g: SheetLegGroup, unit: Unit, step: number) {
+  if (g.leg.finish === 'original') throw new Error('a kept factory hem has no cloth check');
   const p = g.leg.plan;
   const c = clothSteps(g, unit, step);
   const tiny = 1e-6;

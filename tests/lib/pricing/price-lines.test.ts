@@ -10,6 +10,7 @@ const LIST: PriceList = {
   'plain-hem': { label: 'Plain hem', amountMinor: 1800 },
   'cuff-from-hem': { label: 'Cuff from a plain hem', amountMinor: 2600 },
   'cuff-remake': { label: 'Cuff let down and re-made', amountMinor: 3200 },
+  'original-hem': { label: 'Jeans, original hem kept', amountMinor: 2300 },
   'taper-let-out': { label: 'Taper let-out', amountMinor: 1200 },
   rush: { label: 'Rush', amountMinor: 1000 },
 };
@@ -34,6 +35,11 @@ describe('priceTicket', () => {
     expect(finishKey(garment({ finish: 'cuff' }))).toBe('cuff-from-hem');
     expect(finishKey(garment({ finish: 'cuff', oldCuff: true }))).toBe('cuff-remake');
     expect(finishKey(garment({ finish: null }))).toBeNull();
+  });
+
+  it('prices jeans kept on their factory hem at their own line, with no cuff let-out beside it', () => {
+    const { lines } = priceTicket([garment({ label: 'Indigo jeans', finish: 'original', taperLetOut: true })], LIST, { rush: false });
+    expect(lines).toEqual([{ garmentId: 'g1', key: 'original-hem', label: 'Jeans, original hem kept — Indigo jeans', amountMinor: 2300 }]);
   });
 
   it('adds the taper let-out line to a cuff whose plan needs one, and never to a plain hem', () => {

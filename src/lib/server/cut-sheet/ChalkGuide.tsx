@@ -40,6 +40,8 @@ function CheckRulerStrip({ unit }: { unit: Unit }) {
 /** One column of the chalk guide: a segment of a strip, with its strip's label. */
 export interface StripColumn {
   label: string;
+  /** where the strip's top is laid, when not on the pin mark */
+  top?: string;
   part: number;
   segment: GuideSegment;
 }
@@ -47,7 +49,7 @@ export interface StripColumn {
 /** The strips' segments in print order: each strip's segments one after another. */
 export function stripColumns(strips: GuideStrip[]): StripColumn[] {
   // Part by part: with two legs, both first parts stand in the guide column and the rest go on.
-  const all = strips.flatMap((st, k) => st.segments.map((segment, i) => ({ label: st.label, part: i + 1, segment, k })));
+  const all = strips.flatMap((st, k) => st.segments.map((segment, i) => ({ label: st.label, ...(st.top ? { top: st.top } : {}), part: i + 1, segment, k })));
   return all.sort((a, b) => a.part - b.part || a.k - b.k).map(({ k: _k, ...c }) => c);
 }
 
@@ -75,7 +77,7 @@ function Strip({ column, width, t }: { column: StripColumn; width: number; t: Tr
     <View style={{ width }}>
       <Text style={{ fontSize: READ_MIN, fontWeight: 800, marginBottom: 1 }}>{first ? column.label : `${column.label.split(',')[0]}, ${column.part}`}</Text>
       <Text style={{ fontSize: READ_MIN, color: INK.soft, marginBottom: 1 }}>
-        {first ? t('sheet.guide.top') : t('sheet.guide.onMatch', { letter: seg.matchAbove!.letter })}
+        {first ? (column.top ?? t('sheet.guide.top')) : t('sheet.guide.onMatch', { letter: seg.matchAbove!.letter })}
       </Text>
       <View style={{ width, height: seg.length, position: 'relative' }}>
         <Svg width={width} height={seg.length}>
@@ -91,8 +93,8 @@ function Strip({ column, width, t }: { column: StripColumn; width: number; t: Tr
           </Text>
         ))}
         {seg.ticks.map((t, i) => (
-          <View key={i} style={{ position: 'absolute', left: textLeft, top: t.y + 2, width: width - textLeft - 1 }}>
-            <Text style={{ fontSize: size, fontWeight: 800, color: t.cut ? INK.cut : INK.text }}>{`${t.n} ${t.name}`}</Text>
+          <View key={i} style={{ position: 'absolute', left: textLeft, top: t.labelY, width: width - textLeft - 1 }}>
+            <Text style={{ fontSize: size, fontWeight: 800, color: t.cut ? INK.cut : INK.text }}>{t.n > 0 ? `${t.n} ${t.name}` : `▶ ${t.name}`}</Text>
             <Text style={{ fontSize: size, fontWeight: 700, color: t.cut ? INK.cut : INK.text }}>{t.text}</Text>
           </View>
         ))}

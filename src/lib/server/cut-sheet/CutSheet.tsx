@@ -3,7 +3,7 @@ import { Document, Page, Path, Svg, Text, View, type DocumentProps, type PagePro
 import type { SafePageNode } from '@react-pdf/layout';
 import { Fragment, type ReactElement } from 'react';
 import { ChalkGuide, COLUMN_STRIPS, StripRow, stripColumns, type StripColumn } from './ChalkGuide';
-import { guideStrips } from './chalk-guide';
+import { guideStrips, type GuideGroup } from './chalk-guide';
 import { sheetContent, type SheetContent, type SheetLegGroup } from './content';
 import { LegDrawing } from './LegDrawing';
 import { legGeometry } from './leg-geometry';
@@ -187,14 +187,62 @@ function CutLine({ g, t }: { g: SheetLegGroup; t: Translate }) {
 // The drawing gives up width to a table of wide figures, down to this; past it names go above their figures.
 const DRAWING_MIN_W = 96;
 
+// A kept factory hem: its lines from the pin mark (the join and the leg's cut above it), each with
+// its height above the present edge, both cuts in cut red; then the sum that says where the length went.
+function OriginalBlock({ g, t }: { g: SheetLegGroup; t: Translate }) {
+  const o = g.original!;
+  const from = (len: Len) => (len.mm < 0 ? t('sheet.above', { length: len.text.replace(/^-/, '') }) : t('sheet.below', { length: len.text }));
+  const col = { paddingLeft: COLUMN_GAP, textAlign: 'right' as const, flexShrink: 0, width: 118 };
+  return (
+    <View style={{ marginBottom: 4 }} wrap={false}>
+      <View style={{ flexDirection: 'row', alignItems: 'baseline', marginBottom: 2 }}>
+        <Text style={[s.legLabel, { width: 70 }]}>{g.label.toUpperCase()}</Text>
+        <Text style={s.legTitle}>{g.title}</Text>
+      </View>
+      <View style={{ flexDirection: 'row', alignItems: 'flex-end', borderBottomWidth: 0.75, borderBottomColor: INK.text, paddingBottom: 1 }}>
+        <Text style={[s.th, { flexGrow: 1, flexShrink: 1 }]}>{t('original.col.line')}</Text>
+        <Text style={[s.th, col]}>{t('original.col.below')}</Text>
+        <Text style={[s.th, col]}>{t('original.col.above')}</Text>
+      </View>
+      {g.lines.map((l, i) => {
+        const above = o.printed.lines[i]!.abovePresentEdge.text;
+        const ink = l.cut ? { color: INK.cut, fontWeight: 800 as const } : {};
+        return (
+          // The name on a line of its own, the figures under it: the names are long and the figures wide.
+          <View key={l.n} style={{ borderBottomWidth: 0.5, borderBottomColor: INK.rule, paddingVertical: 1.5 }}>
+            <Text style={[s.lineName, ink]}>
+              <Text style={s.lineNo}>{l.n} </Text>
+              {l.cut ? `${t('original.cut')} · ${l.name}` : l.name}
+            </Text>
+            <View style={{ flexDirection: 'row', justifyContent: 'flex-end' }}>
+              <Text style={[s.value, col, ink]}>{from(l.belowMark)}</Text>
+              <Text style={[s.value, col, ink]}>{above}</Text>
+            </View>
+          </View>
+        );
+      })}
+      <Text style={[s.small, s.strong, { marginTop: 4 }]}>{o.sum}</Text>
+      <Text style={[s.small, { marginTop: 2 }]}>{o.taper}</Text>
+      {g.recorded && <Text style={[s.small, { marginTop: 2 }]}>{g.recorded}</Text>}
+      {g.waist && <Text style={[s.small, s.strong, { marginTop: 2 }]}>{g.waist}</Text>}
+      {g.warnings.map((w, i) => (
+        <Text key={i} style={[s.small, { marginTop: 2, color: INK.warn, fontWeight: 700 }]}>
+          {t('sheet.check', { text: w })}
+        </Text>
+      ))}
+    </View>
+  );
+}
+
 function LegBlock({ g, width, t }: { g: SheetLegGroup; width: number; t: Translate }) {
+  if (g.leg.finish === 'original') return <OriginalBlock g={g} t={t} />;
   const least = tableColumns(g, t);
   const usual = oneLineHeadings(least, t);
   const cols = usual.name + usual.below + usual.above <= width - 8 - DRAWING_MIN_W ? usual : least;
   const tableNeeds = cols.name + cols.below + cols.above;
   const drawingW = Math.max(DRAWING_MIN_W, Math.min(DRAWING_W, width - 8 - tableNeeds));
   const stacked = tableNeeds > width - 8 - drawingW;
-  const geo = legGeometry(g.leg, drawingW, DRAWING_H, t);
+  const geo = legGeometry(g.leg as Exclude<typeof g.leg, { finish: 'original' }>, drawingW, DRAWING_H, t);
   return (
     <View style={{ marginBottom: 4 }} wrap={false}>
       <View style={{ flexDirection: 'row', alignItems: 'baseline', marginBottom: 2 }}>
@@ -272,9 +320,21 @@ function workedOut(data: CutSheetData) {
   return w;
 }
 
+// A kept factory hem's strip starts at its highest line, the join (a factory hem's depth above the
+// pin mark), so every line is below the strip's 0 at 1:1; the pin mark is a tick of its own.
+function guideGroupOf(g: SheetLegGroup, t: Translate): GuideGroup {
+  return g.original ? { ...g, lines: g.original.strip, top: t('sheet.guide.topOnJoin') } : g;
+}
+
 function stripColumnsOf(c: SheetContent, data: CutSheetData) {
   const page = PAGE_PT[data.pageSize ?? 'LETTER'];
-  const all = stripColumns(guideStrips(c.groups, data.unit, page.height - 2 * PADDING - GUIDE_OVERHEAD));
+  const all = stripColumns(
+    guideStrips(
+      c.groups.map((g) => guideGroupOf(g, c.t)),
+      data.unit,
+      page.height - 2 * PADDING - GUIDE_OVERHEAD,
+    ),
+  );
   return { column: all.slice(0, COLUMN_STRIPS), page: all.slice(COLUMN_STRIPS) };
 }
 

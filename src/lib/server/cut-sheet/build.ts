@@ -7,12 +7,15 @@ import {
   isAllowanceError,
   planCuff,
   planHem,
+  planOriginalHem,
   validateCuffInput,
   validateHemInput,
+  validateOriginalHemInput,
   validateHemTaperInput,
   validateTaperInput,
 } from '../../allowance/index';
 import type { CuffInput, HemInput, HemTaperInput, TaperInput } from '../../allowance/types';
+import type { OriginalHemInput } from '../../allowance/kind-types';
 import type { CutSheetData, LegSheet, RecordedLength, Side, WaistNote } from '../../shared/cut-sheet-types';
 
 /** Leg widths for a taper check (the hem taper check's width fields); the cuff's own depth, sections and unit are taken from the cuff. */
@@ -21,7 +24,8 @@ export type TaperWidths = Pick<HemTaperInput, 'widthAtEdge' | 'widthAbove' | 'he
 /** What one leg should become: a cuff (maybe on a tapered leg) or a plain hem. */
 export type LegOrder =
   | { side: Side; finish: 'cuff'; input: CuffInput; taper?: TaperWidths; finished?: string; recorded?: RecordedLength[]; waist?: WaistNote }
-  | { side: Side; finish: 'hem'; input: HemInput; taper?: TaperWidths; finished?: string; recorded?: RecordedLength[]; waist?: WaistNote };
+  | { side: Side; finish: 'hem'; input: HemInput; taper?: TaperWidths; finished?: string; recorded?: RecordedLength[]; waist?: WaistNote }
+  | { side: Side; finish: 'original'; input: OriginalHemInput; taper?: undefined; finished?: string; recorded?: RecordedLength[]; waist?: WaistNote };
 
 // A plain hem's taper check takes the hem's own unit, precision and allowance.
 function hemTaperInput(hem: HemInput, widths: TaperWidths) {
@@ -63,6 +67,10 @@ export function refusedFields(legs: LegOrder[]): Record<string, string> {
   };
   for (const leg of legs) {
     const prefix = leg.side === 'right' ? 'right.' : '';
+    if (leg.finish === 'original') {
+      add(prefix, validateOriginalHemInput(leg.input));
+      continue;
+    }
     if (leg.finish === 'hem') {
       add(prefix, validateHemInput(leg.input));
       if (leg.taper) add(`${prefix}taper.`, validateHemTaperInput(hemTaperInput(leg.input, leg.taper)));
@@ -76,6 +84,14 @@ export function refusedFields(legs: LegOrder[]): Record<string, string> {
 
 /** Plans one leg with the engine (throws the engine's AllowanceError on input it refuses). */
 export function planLeg(order: LegOrder): LegSheet {
+  if (order.finish === 'original') {
+    const leg: LegSheet = { side: order.side, finish: 'original', input: order.input, plan: planOriginalHem(order.input) };
+    const text = order.finished?.trim();
+    if (text) leg.finished = text;
+    if (order.recorded?.length) leg.recorded = order.recorded;
+    if (order.waist) leg.waist = order.waist;
+    return leg;
+  }
   if (order.finish === 'hem') {
     const finished = order.finished?.trim() ? { finished: order.finished.trim() } : {};
     const hem: LegSheet = { side: order.side, finish: 'hem', input: order.input, plan: planHem(order.input), ...finished };

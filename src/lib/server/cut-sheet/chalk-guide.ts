@@ -10,6 +10,8 @@ export interface GuideGroup {
   stripLabel?: string;
   /** short: the line's name on the strip in the sheet's language (else from the English name) */
   lines: { n: number; name: string; short?: string; cut: boolean; belowMark: Len }[];
+  /** where the strip's top is laid, when not on the pin mark (a kept factory hem's: on the join) */
+  top?: string;
 }
 
 const PT_PER_MM = 72 / 25.4;
@@ -46,6 +48,8 @@ export function checkRuler(unit: Unit): CheckRuler {
 /** One chalk line on the strip. */
 export interface GuideTick {
   y: number;
+  /** the top of its label, down the segment: just below the tick, or lower when the tick above's label reaches there */
+  labelY: number;
   n: number;
   name: string;
   text: string;
@@ -78,6 +82,8 @@ export interface GuideSegment {
 /** One strip, for both legs or for one of them. */
 export interface GuideStrip {
   label: string;
+  /** where its top is laid, when not on the pin mark */
+  top?: string;
   segments: GuideSegment[];
 }
 
@@ -128,14 +134,17 @@ export function guideStrips(groups: GuideGroup[], unit: Unit, maxLength: number)
   // Letters run on across the strips, so the left leg's A is never laid on the right leg's.
   let letter = 0;
   return groups.map((g) => {
-    const ticks = g.lines.map((l) => ({
-      y: l.belowMark.mm * PT_PER_MM,
-      n: l.n,
-      name: l.short ?? SHORT[l.name] ?? l.name,
-      text: l.belowMark.text,
-      cut: l.cut,
-    }));
-    const end = Math.max(...ticks.map((t) => t.y)) + TICK_LABEL;
+    // Lines closer than a label's height (a kept factory hem's join and cuts can be 1/4 in apart):
+    // each label starts below the one above it, still carrying its line's number and distance.
+    let labelBottom = Number.NEGATIVE_INFINITY;
+    const ticks = g.lines.map((l) => {
+      const y = l.belowMark.mm * PT_PER_MM;
+      const name = l.short ?? SHORT[l.name] ?? l.name;
+      const labelY = Math.max(y + 2, labelBottom + 1);
+      labelBottom = labelY + (name.length > 9 ? TICK_LABEL_WRAPPED : TICK_LABEL) - 2;
+      return { y, labelY, n: l.n, name, text: l.belowMark.text, cut: l.cut };
+    });
+    const end = Math.max(Math.max(...ticks.map((t) => t.y)) + TICK_LABEL, labelBottom + 2);
     const marks = ruler(unit, end);
     const segments: GuideSegment[] = [];
     let from = 0;
@@ -148,7 +157,7 @@ export function guideStrips(groups: GuideGroup[], unit: Unit, maxLength: number)
       segments.push({
         from,
         length: to - from,
-        ticks: ticks.filter((t) => t.y >= from && t.y < to && (last || t.y < m)).map((t) => ({ ...t, y: t.y - from })),
+        ticks: ticks.filter((t) => t.y >= from && t.y < to && (last || t.y < m)).map((t) => ({ ...t, y: t.y - from, labelY: t.labelY - from })),
         ruler: marks.filter((r) => r.y > from && r.y <= to).map((r) => ({ ...r, y: r.y - from })),
         matchAbove: above,
         matchBelow: below,
@@ -158,6 +167,7 @@ export function guideStrips(groups: GuideGroup[], unit: Unit, maxLength: number)
       above = { y: START_ABOVE_MATCH, cloth: m, letter: below!.letter };
     }
     return {
+      ...(g.top ? { top: g.top } : {}),
       // A sloped hem's lines are planned at the back, where the pin is.
       label: g.stripLabel ?? (g.label === 'Both legs' ? g.label : g.label.replace(' leg', '')) + (g.slopeNote ? ', at the back' : ''),
       segments,

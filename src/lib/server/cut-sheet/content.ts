@@ -6,10 +6,12 @@ import type { ExistingFinish } from '@/lib/shared/existing-finish';
 import { translator, type MessageKey, type Translate } from '../i18n/catalog';
 import { creaseText, warningText } from '../../shared/i18n/engine-messages';
 import { DEFAULT_LANGUAGE, intlLocale, type Language } from '../../shared/i18n/languages';
-import { checkRuler } from './chalk-guide';
+import { checkRuler, type GuideGroup } from './chalk-guide';
 import { finishedLine, recordedText } from './finished-length';
 import { printedPlan, type PrintedPlan, type PrintedSeamWork } from './printed';
-import type { CutSheetData, LegSheet } from '../../shared/cut-sheet-types';
+import { printedOriginal, type PrintedOriginal } from './printed-original';
+import type { CutSheetData, LegSheet, OriginalHemLeg } from '../../shared/cut-sheet-types';
+import type { OriginalHemNoteCode } from '@/lib/allowance/kind-types';
 
 /** One chalk line as printed: number, name, distances. */
 export interface SheetLine {
@@ -35,7 +37,7 @@ export interface SheetLegGroup {
   label: string;
   /** the chalk guide strip's heading ("Left", "Both legs, at the back") */
   stripLabel: string;
-  finish: 'cuff' | 'hem';
+  finish: 'cuff' | 'hem' | 'original';
   title: string;
   /** turn of cloth and third section, when the title's depth alone does not add up to the lines */
   sections: string | null;
@@ -51,8 +53,10 @@ export interface SheetLegGroup {
   waist: string | null;
   warnings: string[];
   leg: LegSheet;
-  /** every figure the block prints, in whole display steps */
-  printed: PrintedPlan;
+  /** every figure the block prints, in whole display steps (a cuff's or plain hem's; null on a kept factory hem) */
+  printed: PrintedPlan | null;
+  /** a kept factory hem's figures and sentences (its lines are in `lines`, above the pin mark negative) */
+  original: { printed: PrintedOriginal; sum: string; taper: string; strip: GuideGroup['lines'] } | null;
 }
 
 /** The whole sheet in words. */
@@ -88,8 +92,8 @@ export function stitchLengths(unit: Unit, t: Translate = EN): { long: string; sh
 }
 
 // The cautions, short for the sheet (lib/shared/bench-safety.ts has the screen's longer ones).
-function cautionsIn(t: Translate): string[] {
-  return [t('safety.sheet.1'), t('safety.sheet.2'), t('safety.sheet.3'), t('safety.sheet.defer')];
+function cautionsIn(t: Translate, heavySeams = false): string[] {
+  return [t('safety.sheet.1'), t('safety.sheet.2'), t('safety.sheet.3'), ...(heavySeams ? [t('safety.sheet.heavySeams')] : []), t('safety.sheet.defer')];
 }
 
 /** The cautions every sheet carries (TRADE.md, "Cautions to show"), in English. */
@@ -261,7 +265,62 @@ function recordedNote(t: Translate, leg: LegSheet): string | null {
   return t('sheet.recorded', { list });
 }
 
+// A kept factory hem's notes, said with the figures the sheet prints (the engine rounds its own).
+function originalNote(t: Translate, code: OriginalHemLeg['plan']['notes'][number]['code'], pp: PrintedOriginal): string {
+  if (code === 'fold-only') return t('originalNote.fold-only', { least: pp.seamTakes.text, tuck: pp.tuck?.text ?? '' });
+  if (code === 'chalk-on-both-legs') return t('originalNote.chalk-on-both-legs');
+  return t(`originalNote.${code}`, { perSeam: pp.taper?.perSeam.text ?? '', perSide: pp.taper?.perSide.text ?? '' });
+}
+
+function originalGroupOf(t: Translate, leg: OriginalHemLeg, label: string, stripName: string): SheetLegGroup {
+  const pp = printedOriginal(leg.plan);
+  const lines: SheetLine[] = pp.lines.map((l) => ({
+    n: l.n,
+    name: t(`original.line.${l.name}`),
+    short: t(`sheet.guide.short.${l.name}`),
+    cut: l.cut,
+    belowMark: l.belowMark,
+    aboveRawEdge: l.abovePresentEdge,
+  }));
+  const sum =
+    pp.method === 'cut-and-join'
+      ? t('original.sum', { shortenBy: pp.shortenBy.text, removed: pp.removed.text, seamAllowance: pp.seamAllowance.text, seamTakes: pp.seamTakes.text })
+      : t('original.foldSum', { shortenBy: pp.shortenBy.text, seamAllowance: pp.seamAllowance.text, seamTakes: pp.seamTakes.text });
+  const taper = !pp.taper
+    ? t('original.taper.none')
+    : pp.taper.withinTolerance
+      ? t('original.taper.within', { mismatch: pp.taper.mismatch.text })
+      : t('original.taper.work', { mismatch: pp.taper.mismatch.text });
+  // The 1:1 strip starts at the highest line, the join, so every line is below its 0; the pin mark is a tick too.
+  const strip = [
+    ...pp.lines.map((l, i) => ({ n: l.n, name: lines[i]!.name, short: lines[i]!.short, cut: l.cut, belowMark: pp.fromJoin[i]! })),
+    { n: 0, name: t('original.line.pin-mark'), short: t('sheet.guide.short.pin-mark'), cut: false, belowMark: pp.factoryHem },
+  ].sort((x, y) => x.belowMark.mm - y.belowMark.mm);
+  // The fold-only note follows the printed method (rounding can decide it), the taper's the engine's.
+  const codes: OriginalHemNoteCode[] = leg.plan.notes.map((n) => n.code).filter((c) => c !== 'fold-only');
+  if (pp.method === 'fold-only') codes.push('fold-only');
+  return {
+    label,
+    stripLabel: t('sheet.original.strip', { label: stripName, height: pp.factoryHem.text }),
+    finish: 'original',
+    title: t('sheet.originalTitle', { depth: pp.factoryHem.text }),
+    sections: null,
+    lines,
+    cloth: { ok: null, text: sum, options: [] },
+    slopeNote: null,
+    taper: null,
+    crease: null,
+    recorded: recordedNote(t, leg),
+    waist: leg.waist ? t(`waist.${leg.waist.code}` as MessageKey, { ...leg.waist }) : null,
+    warnings: codes.map((c) => originalNote(t, c, pp)),
+    leg,
+    printed: null,
+    original: { printed: pp, sum, taper, strip },
+  };
+}
+
 function groupOf(t: Translate, leg: LegSheet, label: string, strip: string, existing: ExistingFinish | undefined): SheetLegGroup {
+  if (leg.finish === 'original') return originalGroupOf(t, leg, label, strip);
   const p = leg.plan;
   const pp = printedPlan(leg);
   const lines: SheetLine[] = pp.lines.map((l) => ({
@@ -309,6 +368,7 @@ function groupOf(t: Translate, leg: LegSheet, label: string, strip: string, exis
     ],
     leg,
     printed: pp,
+    original: null,
   };
 }
 
@@ -342,6 +402,15 @@ export function hemSteps(turnUnder: string, sloped: boolean, unit: Unit = 'mm', 
   ];
 }
 
+/** Bench steps for jeans kept on their factory hem: cut and join, or (too little to cut) fold and stitch. */
+function originalSteps(t: Translate, groups: SheetLegGroup[]): string[] {
+  const stitch = stitchLengths(groups[0]!.leg.plan.unit, t).standard;
+  const folded = groups.every((g) => g.original?.printed.method === 'fold-only');
+  if (folded) return [t('sheet.original.1'), t('sheet.original.fold.2'), t('sheet.original.fold.3', { stitch }), t('sheet.press')];
+  const seamAllowance = perLeg(t, groups, (g) => g.original!.printed.seamAllowance.text);
+  return [t('sheet.original.1'), t('sheet.original.2'), t('sheet.original.3', { seamAllowance, stitch }), t('sheet.original.4'), t('sheet.press')];
+}
+
 // One figure for both legs, or each leg's own when they differ.
 function perLeg(t: Translate, groups: SheetLegGroup[], text: (g: SheetLegGroup) => string): string {
   const all = groups.map(text);
@@ -361,8 +430,9 @@ function stepsOf(t: Translate, groups: SheetLegGroup[]): SheetContent['steps'] {
   if (finishes.size > 1) {
     return groups.map((g) => ({ heading: g.label, items: stepsOf(t, [g])[0]!.items }));
   }
-  const turnUnder = perLeg(t, groups, (g) => g.printed.turnUnder.text);
   const first = groups[0]!.leg;
+  if (first.finish === 'original') return [{ heading: null, items: originalSteps(t, groups) }];
+  const turnUnder = perLeg(t, groups, (g) => g.printed!.turnUnder.text);
   const tapered = groups.filter((g) => g.taper?.work);
   if (first.finish === 'hem') {
     const outward = tapered.every((g) => (g.leg.taper?.plan.lines.at(-1)?.change.mm ?? 0) > 0);
@@ -381,7 +451,7 @@ function stepsOf(t: Translate, groups: SheetLegGroup[]): SheetContent['steps'] {
       },
     ];
   }
-  const from = perLeg(t, tapered.length ? tapered : groups, (g) => g.printed.depth.text);
+  const from = perLeg(t, tapered.length ? tapered : groups, (g) => g.printed!.depth.text);
   // Re-chalking alone leaves the old stitching: the seam is unpicked, sewn on the new line and pressed
   // open before the bottom is cut and folded, or the cuff is folded over the old, tapered seam.
   const seamWork = t('sheet.seamWork', { from });
@@ -429,8 +499,16 @@ export function sheetContent(data: CutSheetData): SheetContent {
     unitNote: t('sheet.unitNote', { unit: t(`sheet.unit.${data.unit}`), unitKind: data.unit, precision: data.precision }),
     groups,
     steps: withLetDown(t, stepsOf(t, groups), data.existingFinish),
-    cautions: cautionsIn(t),
-    guideNote: [t('sheet.guide.check', { says: checkRuler(data.unit).says }), t('sheet.guide.scaled'), t('sheet.guide.lay')],
+    cautions: cautionsIn(
+      t,
+      data.legs.some((l) => l.finish === 'original'),
+    ),
+    guideNote: [
+      t('sheet.guide.check', { says: checkRuler(data.unit).says }),
+      t('sheet.guide.scaled'),
+      // A kept factory hem's strip starts at the join, above the pin mark.
+      groups.every((g) => g.original) ? t('sheet.guide.layJoin') : t('sheet.guide.lay'),
+    ],
     t,
     language,
   };

@@ -1,5 +1,5 @@
 // The leg-bottom drawing worked out in points, to a true scale, for the PDF and any other renderer.
-import type { LegSheet } from '../../shared/cut-sheet-types';
+import type { CuffLeg, HemLeg } from '../../shared/cut-sheet-types';
 import { translator, type Translate } from '../i18n/catalog';
 
 const EN = translator('en');
@@ -38,7 +38,7 @@ export interface LegGeometry {
 }
 
 /** Lays out the leg-bottom drawing to the largest scale that fits a box of width × maxHeight points. */
-export function legGeometry(leg: LegSheet, width: number, maxHeight: number, t: Translate = EN): LegGeometry {
+export function legGeometry(leg: CuffLeg | HemLeg, width: number, maxHeight: number, t: Translate = EN): LegGeometry {
   const plan = leg.plan;
   const cut = plan.lines[plan.lines.length - 1]!;
   const raw = plan.lines[0]?.aboveRawEdge?.mm ?? null;

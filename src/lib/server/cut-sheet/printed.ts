@@ -12,7 +12,7 @@
 //   sheet's step in metric, and the seam twice that.
 import { formatLength, parseLength } from '../../allowance/index';
 import type { CuffLineName, HemLineName, Len, Precision, Unit } from '../../allowance/types';
-import type { LegSheet } from '../../shared/cut-sheet-types';
+import type { CuffLeg, HemLeg } from '../../shared/cut-sheet-types';
 
 /** A printed chalk line: distances in whole steps, as text and in mm. */
 export interface PrintedLine {
@@ -126,7 +126,7 @@ function linesOf(st: StepScale, names: (CuffLineName | HemLineName)[], below: nu
   }));
 }
 
-function seamAllowanceMm(leg: LegSheet): number | null {
+function seamAllowanceMm(leg: CuffLeg | HemLeg): number | null {
   if (leg.finish !== 'cuff' || !leg.taper || leg.taper.input.seamAllowance === undefined) return null;
   try {
     return parseLength(String(leg.taper.input.seamAllowance), leg.taper.input.unit).mm;
@@ -135,7 +135,7 @@ function seamAllowanceMm(leg: LegSheet): number | null {
   }
 }
 
-function taperOf(leg: LegSheet, st: StepScale): PrintedPlan['taper'] {
+function taperOf(leg: CuffLeg | HemLeg, st: StepScale): PrintedPlan['taper'] {
   if (leg.finish !== 'cuff' || !leg.taper) return null;
   const t = leg.taper.plan;
   // Each side in half steps for inches (the seam then stays on the sheet's step), whole steps metric.
@@ -160,8 +160,8 @@ function taperOf(leg: LegSheet, st: StepScale): PrintedPlan['taper'] {
   return { target: st.len(near(st.of(t.targetWidth.mm))), lines, work, beyondSeamAllowance: beyond };
 }
 
-/** Works out every figure one leg's block prints, in whole steps (see the rules at the top). */
-export function printedPlan(leg: LegSheet): PrintedPlan {
+/** Works out every figure one cuff's or plain hem's block prints, in whole steps (see the rules at the top; a kept factory hem: printed-original.ts). */
+export function printedPlan(leg: CuffLeg | HemLeg): PrintedPlan {
   const p = leg.plan;
   const st = new StepScale(p.unit, p.precision);
   const available = p.lines[0]?.aboveRawEdge?.mm ?? null;

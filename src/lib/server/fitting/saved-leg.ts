@@ -2,10 +2,11 @@
 // lengths straight into the engine's order (no form values, no request body, no second parse of
 // the schema); which length goes where is the registry's. Pure: the engine and the sheet's types only.
 import type { CuffInput, HemInput, Precision, Unit } from '../../allowance/types';
+import type { OriginalHemInput } from '../../allowance/kind-types';
 import type { LegOrder, TaperWidths } from '../cut-sheet/build';
 import { typedForUnit } from '../../shared/length-reading';
 import { FIELD_KEYS, fieldsOf, type FieldKey, type Finish } from '../../shared/fitting/kinds';
-import { planLengths, plansOf, type LegTexts } from '../../shared/fitting/plan-lengths';
+import { originalHemLengths, planLengths, plansOf, type LegTexts } from '../../shared/fitting/plan-lengths';
 import { waistNoteOf } from './waist-note';
 import type { WaistOrder } from '../../shared/waist-order';
 
@@ -35,7 +36,7 @@ export function savedTexts(saved: StoredLeg, to: Unit): LegTexts {
 export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision, opts: { letDown?: boolean; waistOrder?: WaistOrder } = {}): LegOrder | null {
   const texts = savedTexts(saved, unit);
   const plans = plansOf(saved.finish);
-  const main = planLengths(plans.main, saved.finish, texts);
+  const main = saved.finish === 'original' ? originalHemLengths(texts) : planLengths(plans.main, saved.finish, texts);
   if (!main) return null;
   const scale = unit === 'in' ? { unit, precision } : { unit };
   const widths = planLengths(plans.taper, saved.finish, texts, opts.letDown);
@@ -46,6 +47,9 @@ export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision
   const recorded = listed.length ? { recorded: listed.map((f) => ({ label: f.label, text: texts[f.key as FieldKey]! })) } : {};
   const note = waistNoteOf(texts, unit, precision, opts.waistOrder);
   const waist = note ? { waist: note } : {};
+  // The kept factory hem checks its taper at the join inside its own plan: the widths are in its input.
+  if (saved.finish === 'original')
+    return { side: saved.leg, finish: 'original', input: { ...scale, ...main } as unknown as OriginalHemInput, ...finished, ...recorded, ...waist };
   const taper: { taper?: TaperWidths } = widths
     ? {
         taper: {
@@ -64,5 +68,6 @@ export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision
 
 /** True when a saved leg has what its plan needs (a cuff its depth): what the sheet asks of a fitting. */
 export function canBePlanned(saved: Omit<StoredLeg, 'leg'>): boolean {
+  if (saved.finish === 'original') return originalHemLengths(savedTexts({ ...saved, leg: 'left' }, saved.unit)) !== null;
   return planLengths(plansOf(saved.finish).main, saved.finish, savedTexts({ ...saved, leg: 'left' }, saved.unit)) !== null;
 }

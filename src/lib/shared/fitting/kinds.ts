@@ -7,7 +7,7 @@
 export type UnitKind = 'length' | 'width' | 'count';
 
 /** A finish a leg can be given (the value stored in measurements.finish). */
-export type Finish = 'cuff' | 'plain' | 'slope';
+export type Finish = 'cuff' | 'plain' | 'slope' | 'original';
 
 /** What the finish makes, as the engine plans it and the presets, pricing and sheet name it. */
 export type Part = 'cuff' | 'hem';
@@ -15,8 +15,8 @@ export type Part = 'cuff' | 'hem';
 /** Which of the engine's plans a field feeds, and how: needed, optional, or only on a pair let down first. */
 export type PlanUse = 'required' | 'optional' | 'letDown';
 
-/** The engine's plans a leg can get: its cuff or hem, and the taper check under either. */
-export type EnginePlan = 'cuff' | 'hem' | 'taper' | 'hemTaper';
+/** The engine's plans a leg can get: its cuff or hem, the taper check under either, and jeans keeping the factory hem (its own taper check inside). */
+export type EnginePlan = 'cuff' | 'hem' | 'taper' | 'hemTaper' | 'originalHem';
 
 /** One field a fitting records for a leg. */
 export interface FittingField {
@@ -54,7 +54,9 @@ export const GROUPS = {
 /** A group of the bench form. */
 export type GroupId = keyof typeof GROUPS;
 
-const ALL: readonly Finish[] = ['cuff', 'plain', 'slope'];
+const ALL: readonly Finish[] = ['cuff', 'plain', 'slope', 'original'];
+// The finishes that fold the leg's own cloth up: the kept factory hem has no turn-under, cloth check or let-out.
+const FOLDED: readonly Finish[] = ['cuff', 'plain', 'slope'];
 const HEMS: readonly Finish[] = ['plain', 'slope'];
 
 /** Trousers: every field a leg's fitting records, in the order the form asks for them. */
@@ -136,7 +138,7 @@ const TROUSER_FIELDS = [
     hint: 'Blank: the usual.',
     presetHint: 'Blank: the usual (1/2 in or 12 mm on a cuff, 1/4 in or 6 mm on a hem)',
     unit: 'length',
-    finishes: ALL,
+    finishes: FOLDED,
     group: 'part',
     engine: { cuff: 'optional', hem: 'optional' },
     preset: true,
@@ -157,11 +159,49 @@ const TROUSER_FIELDS = [
     printed: 'listed',
   },
   {
+    // Jeans keeping the factory hem (planOriginalHem): the lines are measured from the pin mark, so
+    // the one length that says how much comes off is the present edge's distance below it.
+    key: 'shortenBy',
+    label: 'Present edge below the pin mark',
+    shortLabel: 'Shorten by',
+    hint: 'How much shorter: from the pin mark down to the factory-finished edge.',
+    unit: 'length',
+    finishes: ['original'],
+    group: 'part',
+    engine: { originalHem: 'required' },
+    preset: false,
+    printed: 'plan',
+  },
+  {
+    key: 'factoryHem',
+    label: 'Factory hem depth',
+    hint: 'From the edge up to the top of the hem’s stitching, e.g. 5/8.',
+    unit: 'length',
+    finishes: ['original'],
+    group: 'part',
+    engine: { originalHem: 'required' },
+    preset: false,
+    printed: 'plan',
+  },
+  {
+    // The engine calls it seamAllowance; the key differs from the let-out seam allowance of the
+    // taper check (a width at the leg seams), which is another length (see ORIGINAL_HEM_KEYS).
+    key: 'joinSeam',
+    label: 'Seam allowance at the join',
+    hint: 'Taken from each piece where the band is sewn back on. Blank: 3/8 in (10 mm).',
+    unit: 'length',
+    finishes: ['original'],
+    group: 'part',
+    engine: { originalHem: 'optional' },
+    preset: false,
+    printed: 'plan',
+  },
+  {
     key: 'available',
     label: 'Cloth below the mark',
     hint: 'From the pin mark to the raw edge, once the old hem is let down.',
     unit: 'length',
-    finishes: ALL,
+    finishes: FOLDED,
     group: 'cloth',
     engine: { cuff: 'optional', hem: 'optional' },
     preset: false,
@@ -184,7 +224,7 @@ const TROUSER_FIELDS = [
     unit: 'width',
     finishes: ALL,
     group: 'taper',
-    engine: { taper: 'required', hemTaper: 'required' },
+    engine: { taper: 'required', hemTaper: 'required', originalHem: 'optional' },
     preset: false,
     printed: 'plan',
   },
@@ -194,7 +234,7 @@ const TROUSER_FIELDS = [
     unit: 'width',
     finishes: ALL,
     group: 'taper',
-    engine: { taper: 'required', hemTaper: 'required' },
+    engine: { taper: 'required', hemTaper: 'required', originalHem: 'optional' },
     preset: false,
     printed: 'plan',
   },
@@ -205,7 +245,7 @@ const TROUSER_FIELDS = [
     unit: 'length',
     finishes: ALL,
     group: 'taper',
-    engine: { taper: 'required', hemTaper: 'required' },
+    engine: { taper: 'required', hemTaper: 'required', originalHem: 'optional' },
     preset: false,
     printed: 'plan',
   },
@@ -215,7 +255,7 @@ const TROUSER_FIELDS = [
     label: 'Width at the cutting line (flat)',
     hint: 'Let down first: the old hem often flares below its fold, so measure flat where you will cut. Blank: the taper followed down.',
     unit: 'width',
-    finishes: ALL,
+    finishes: FOLDED,
     group: 'taper',
     engine: { taper: 'letDown', hemTaper: 'letDown' },
     preset: false,
@@ -227,7 +267,7 @@ const TROUSER_FIELDS = [
     label: 'Seam allowance at each seam',
     hint: 'Left on each side of each leg seam, to let out.',
     unit: 'width',
-    finishes: ALL,
+    finishes: FOLDED,
     group: 'taper',
     engine: { taper: 'optional', hemTaper: 'optional' },
     preset: false,
@@ -285,8 +325,8 @@ const TROUSER_FIELDS = [
 /** One garment kind: what it is called, its parts (what a finish makes) and its finishes, and its fields. */
 export interface GarmentKind {
   label: string;
-  /** each finish, in the order offered, with the part it makes and its label on screen */
-  finishes: Record<Finish, { part: Part; label: string }>;
+  /** each finish, in the order offered, with the part it makes, its label on screen and (when not the part's) its group's title */
+  finishes: Record<Finish, { part: Part; label: string; group?: string }>;
   /** each part: its name when chosen (presets, intake, pricing) and its group's title on the bench form */
   parts: Record<Part, { label: string; group: string }>;
   fields: readonly FittingField[];
@@ -300,6 +340,8 @@ export const KINDS = {
       cuff: { part: 'cuff', label: 'Cuff' },
       plain: { part: 'hem', label: 'Plain hem' },
       slope: { part: 'hem', label: 'Plain, sloped' },
+      // The factory hem is cut off and sewn back on above the new length: a hem the garment already had.
+      original: { part: 'hem', label: 'Original hem, kept', group: 'Original hem' },
     },
     parts: { cuff: { label: 'Cuff', group: 'Cuff' }, hem: { label: 'Plain hem', group: 'Hem' } },
     fields: TROUSER_FIELDS,
@@ -322,7 +364,7 @@ export const FIELD: Record<FieldKey, FittingField> = Object.fromEntries(TROUSER_
 export const FIELD_KEYS: readonly FieldKey[] = TROUSER_FIELDS.map((f) => f.key);
 
 /** The finishes, in the order offered. */
-export const FINISH_IDS = ['cuff', 'plain', 'slope'] as const satisfies readonly Finish[];
+export const FINISH_IDS = ['cuff', 'plain', 'slope', 'original'] as const satisfies readonly Finish[];
 
 /** The parts (the engine's plans of a finish), in order. */
 export const PART_IDS = ['cuff', 'hem'] as const satisfies readonly Part[];
@@ -340,9 +382,15 @@ export function partOf(finish: Finish): Part {
  * cuff|hem (a hem with a slope given is a sloped hem). Unknown or empty: null.
  */
 export function readFinish(stored: string | null | undefined, hasSlope = false): Finish | null {
-  if (stored === 'cuff' || stored === 'plain' || stored === 'slope') return stored;
+  if (stored === 'cuff' || stored === 'plain' || stored === 'slope' || stored === 'original') return stored;
   if (stored === 'hem') return hasSlope ? 'slope' : 'plain';
   return null;
+}
+
+/** The group title of a finish's own fields on the bench form: "Cuff", "Hem", "Original hem". */
+export function partGroupOf(finish: Finish): string {
+  const f: { part: Part; group?: string } = KINDS.trousers.finishes[finish];
+  return f.group ?? KINDS.trousers.parts[f.part].group;
 }
 
 /** The fields a finish's form asks for (a let-down pair also gets the let-down-only ones). */

@@ -5,9 +5,20 @@ import { engineFields, fieldsOf, partOf, type EnginePlan, type FieldKey, type Fi
 /** A leg's lengths by key, as typed or saved ('' or absent: not taken). */
 export type LegTexts = Partial<Record<FieldKey, string>>;
 
-/** The engine's two plans for a finish: its cuff or hem, and the taper check under it. */
+/** The engine's two plans for a finish: its cuff or hem, and the taper check under it (the kept factory hem checks its taper inside its own plan). */
 export function plansOf(finish: Finish): { main: EnginePlan; taper: EnginePlan } {
+  if (finish === 'original') return { main: 'originalHem', taper: 'originalHem' };
   return partOf(finish) === 'cuff' ? { main: 'cuff', taper: 'taper' } : { main: 'hem', taper: 'hemTaper' };
+}
+
+/** The registry's keys whose engine name differs in planOriginalHem's input (the join's seam allowance is not the let-out one). */
+export const ORIGINAL_HEM_KEYS: Partial<Record<FieldKey, string>> = { joinSeam: 'seamAllowance' };
+
+/** The lengths planOriginalHem takes from a leg kept on its factory hem, under the engine's names, or null while the shortening or the hem's depth is blank. */
+export function originalHemLengths(texts: LegTexts): Record<string, string> | null {
+  const lengths = planLengths('originalHem', 'original', texts);
+  if (!lengths) return null;
+  return Object.fromEntries(Object.entries(lengths).map(([k, v]) => [ORIGINAL_HEM_KEYS[k as FieldKey] ?? k, v]));
 }
 
 /** The scale a plan is asked in: inches carry their precision, metric needs none. */
