@@ -48,6 +48,10 @@ export const BENCH_MESSAGES = [
   'existing.',
   'due.',
   'move.',
+  // Jeans kept on their factory hem: the plan's words and notes, and "… above/below" the pin mark.
+  'original',
+  'sheet.above',
+  'sheet.below',
 ] as const;
 
 /** The parts the queue renders: its own words, the steps, due dates and the Mark buttons. */
