@@ -14,7 +14,7 @@ const DEMO_PRICES: Record<PriceKey, number> = {
   rush: 900,
 };
 
-// Invented kinds of work beside the five lines (flat euro cents); pressing alone is never rushed.
+// Invented kinds of work beside the six lines (flat euro cents); pressing alone is never rushed.
 const DEMO_KINDS = [
   { name: 'Take in waist', amountMinor: 1800, rushApplies: true },
   { name: 'Replace zip', amountMinor: 1400, rushApplies: true },

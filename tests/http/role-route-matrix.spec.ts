@@ -482,7 +482,7 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       request: () => ({ path: '/api/prices' }),
       expect: signedIn(200, { apprentice: 403 }),
       check: (a, actor) => {
-        expect(a.body.items).toHaveLength(5);
+        expect(a.body.items).toHaveLength(6);
         if (actor === 'other') expect(a.body.items.every((i: { amountMinor: number }) => i.amountMinor === 0)).toBe(true);
         else expect(a.body.items.find((i: { key: string }) => i.key === 'cuff-from-hem').amountMinor).toBe(2400);
       },

@@ -1,4 +1,4 @@
-// The lead's kinds of work beside the five worked-out lines: each a flat price, rush or not;
+// The lead's kinds of work beside the six worked-out lines: each a flat price, rush or not;
 // renamed, re-priced, retired (never deleted: tickets keep the lines they have) or brought back.
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation, useQueryClient } from '@tanstack/react-query';

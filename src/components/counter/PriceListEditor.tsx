@@ -99,7 +99,7 @@ function PriceList() {
   const list = useQuery({ queryKey: ['prices'], queryFn: () => fetchJson<AsJson<PriceListView>>('/api/prices') });
   if (list.isPending) return <p role="status">Loading the price list…</p>;
   if (list.error) return <FormMessage kind="error">{list.error.message}</FormMessage>;
-  // The five lines and the settings are one form; the kinds are saved one by one, each with its history.
+  // The six lines and the settings are one form; the kinds are saved one by one, each with its history.
   return (
     <div className="flex flex-col gap-5">
       <Editor list={list.data} />

@@ -23,7 +23,7 @@ export const priceItems = pgTable(
   (t) => [uniqueIndex('price_items_shop_key_uidx').on(t.shopId, t.key)],
 );
 
-/** Kinds of work the lead adds to the list beside the five worked-out lines ("Replace zip"): a flat
+/** Kinds of work the lead adds to the list beside the six worked-out lines ("Replace zip"): a flat
  * price each. Never deleted: a retired kind leaves the list, and the tickets that carry it keep their
  * lines (each line holds its own label and amount). Changes are audit events (`price-kind.*`). */
 export const priceKinds = pgTable(
