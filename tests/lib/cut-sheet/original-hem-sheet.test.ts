@@ -9,6 +9,8 @@ import { parseLength } from '@/lib/allowance';
 import type { Unit } from '@/lib/allowance/types';
 import { buildCutSheet, type LegOrder } from '@/lib/server/cut-sheet/build';
 import { sheetContent } from '@/lib/server/cut-sheet/content';
+import { sheetStripColumns } from '@/lib/server/cut-sheet/CutSheet';
+import { TICK_LABEL } from '@/lib/server/cut-sheet/chalk-guide';
 import { renderCutSheet } from '@/lib/server/cut-sheet/render';
 import { crowdedRuns, textRuns } from './pdf-runs';
 import { flatText, pdfFile } from './poppler';
@@ -134,6 +136,22 @@ describe('the printed sheet of jeans kept on their factory hem', () => {
         const pdf = await renderCutSheet(buildCutSheet({ ...SHOP, pageSize }, legs));
         expect(crowdedRuns(textRuns(pdf), 2).map(([a, b]) => `${a.text} | ${b.text}`)).toEqual([]);
       }
+  });
+
+  it('lays the 1:1 strip from the join: labels of close lines one below the other, a bar through a label set on white', () => {
+    const [strip] = sheetStripColumns(buildCutSheet(SHOP, [JEANS])).column;
+    const ticks = strip!.segment.ticks;
+    // 1 in = 72 pt: the join at 0, the leg cut 3/8 in = 27 pt below it, the pin mark 5/8 in = 45 pt.
+    expect(ticks.map((t) => [t.name, Math.round(t.y * 1000) / 1000])).toEqual([
+      ['join', 0],
+      ['CUT leg', 27],
+      ['pin mark', 45],
+      ['CUT band', 117],
+      ['band top', 144],
+      ['present edge', 189],
+    ]);
+    for (let k = 1; k < ticks.length; k++) expect(ticks[k]!.labelY).toBeGreaterThanOrEqual(ticks[k - 1]!.labelY + TICK_LABEL - 1);
+    expect(ticks.filter((t) => t.crossed).map((t) => t.name)).toEqual(['CUT leg']);
   });
 
   it('folds instead of cutting when less than twice the seam allowance comes off', () => {

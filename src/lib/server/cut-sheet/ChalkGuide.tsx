@@ -93,7 +93,10 @@ function Strip({ column, width, t }: { column: StripColumn; width: number; t: Tr
           </Text>
         ))}
         {seg.ticks.map((t, i) => (
-          <View key={i} style={{ position: 'absolute', left: textLeft, top: t.labelY, width: width - textLeft - 1 }}>
+          <View
+            key={i}
+            style={{ position: 'absolute', left: textLeft, top: t.labelY, width: width - textLeft - 1, ...(t.crossed ? { backgroundColor: '#ffffff' } : {}) }}
+          >
             <Text style={{ fontSize: size, fontWeight: 800, color: t.cut ? INK.cut : INK.text }}>{t.n > 0 ? `${t.n} ${t.name}` : `▶ ${t.name}`}</Text>
             <Text style={{ fontSize: size, fontWeight: 700, color: t.cut ? INK.cut : INK.text }}>{t.text}</Text>
           </View>

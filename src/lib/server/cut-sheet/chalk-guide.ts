@@ -50,6 +50,8 @@ export interface GuideTick {
   y: number;
   /** the top of its label, down the segment: just below the tick, or lower when the tick above's label reaches there */
   labelY: number;
+  /** another line's bar runs through its label: the label is set on paper white, the bar showing either side */
+  crossed?: boolean;
   n: number;
   name: string;
   text: string;
@@ -137,13 +139,15 @@ export function guideStrips(groups: GuideGroup[], unit: Unit, maxLength: number)
     // Lines closer than a label's height (a kept factory hem's join and cuts can be 1/4 in apart):
     // each label starts below the one above it, still carrying its line's number and distance.
     let labelBottom = Number.NEGATIVE_INFINITY;
-    const ticks = g.lines.map((l) => {
-      const y = l.belowMark.mm * PT_PER_MM;
-      const name = l.short ?? SHORT[l.name] ?? l.name;
-      const labelY = Math.max(y + 2, labelBottom + 1);
-      labelBottom = labelY + (name.length > 9 ? TICK_LABEL_WRAPPED : TICK_LABEL) - 2;
-      return { y, labelY, n: l.n, name, text: l.belowMark.text, cut: l.cut };
-    });
+    const ticks = g.lines
+      .map((l) => {
+        const y = l.belowMark.mm * PT_PER_MM;
+        const name = l.short ?? SHORT[l.name] ?? l.name;
+        const labelY = Math.max(y + 2, labelBottom + 1);
+        labelBottom = labelY + (name.length > 9 ? TICK_LABEL_WRAPPED : TICK_LABEL) - 2;
+        return { y, labelY, labelBottom, n: l.n, name, text: l.belowMark.text, cut: l.cut };
+      })
+      .map(({ labelBottom: bottom, ...t }, _i, all) => (all.some((o) => o.y > t.labelY && o.y < bottom) ? { ...t, crossed: true } : t));
     const end = Math.max(Math.max(...ticks.map((t) => t.y)) + TICK_LABEL, labelBottom + 2);
     const marks = ruler(unit, end);
     const segments: GuideSegment[] = [];
