@@ -65,18 +65,18 @@ export function kindLength(name: KindLengthName, unit: Unit): Exact {
 export const HEM_EASE_LIMIT: ShopDefault<Exact> = { value: Exact.ratio(3, 100), source: NO_SOURCE, shopMayChange: true };
 
 /** The cloths with an expected length shrinkage when first washed (percent). */
-export type ShrinkCloth = 'raw-denim' | 'sanforized-denim' | 'unwashed-cotton' | 'prewashed';
+export type ShrinkCloth = 'raw-denim' | 'preshrunk-denim' | 'unwashed-cotton' | 'prewashed';
 
 /** Expected length shrinkage at the first wash, percent, per cloth, with its source. */
 export const SHRINKAGE_PERCENT: Readonly<Record<ShrinkCloth, ShopDefault<Exact>>> = {
   'raw-denim': {
     value: Exact.int(10),
-    source: 'from memory: unsanforized ("shrink-to-fit") denim is commonly said to shrink about 7–10% in length; the top of the range is kept',
+    source: 'from memory: raw ("shrink-to-fit", not pre-shrunk) denim is commonly said to shrink about 7–10% in length; the top of the range is kept',
     shopMayChange: true,
   },
-  'sanforized-denim': {
+  'preshrunk-denim': {
     value: Exact.int(1),
-    source: 'from memory: the Sanforized process promises under 1% residual shrinkage',
+    source: 'from memory: compressive pre-shrinking at the mill is commonly said to leave under 1% residual shrinkage',
     shopMayChange: true,
   },
   'unwashed-cotton': {

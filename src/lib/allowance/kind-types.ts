@@ -337,7 +337,7 @@ export interface ShrinkInput {
   unit: Unit;
   precision?: Precision;
   /** the cloth: a preset with its expected shrinkage, or 'other' with shrinkPercent */
-  cloth: 'raw-denim' | 'sanforized-denim' | 'unwashed-cotton' | 'prewashed' | 'other';
+  cloth: 'raw-denim' | 'preshrunk-denim' | 'unwashed-cotton' | 'prewashed' | 'other';
   /** shop may change: expected length shrinkage at the first wash, percent (needed for 'other') */
   shrinkPercent?: number | string;
   /** the length that shrinks down to the pin mark: the inseam from the crotch, or the length from the waist */

@@ -19,7 +19,7 @@ export const SHRINK_SOURCES = {
   washFirst: `${NO_SOURCE}: wash and dry the garment as it will be washed before altering, when the customer can`,
 } as const;
 
-const CLOTHS = ['raw-denim', 'sanforized-denim', 'unwashed-cotton', 'prewashed', 'other'] as const;
+const CLOTHS = ['raw-denim', 'preshrunk-denim', 'unwashed-cotton', 'prewashed', 'other'] as const;
 const ONE = Exact.int(1);
 const HUNDRED = Exact.int(100);
 

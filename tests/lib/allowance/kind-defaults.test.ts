@@ -31,10 +31,10 @@ describe('the newer kinds’ defaults', () => {
     }
   });
 
-  it('shrinkage presets: 10% raw denim, 1% sanforized, 5% unwashed cotton (from memory, as their sources say); ease limit 3% (common practice (no source))', () => {
+  it('shrinkage presets: 10% raw denim, 1% pre-shrunk denim, 5% unwashed cotton (from memory, as their sources say); ease limit 3% (common practice (no source))', () => {
     expect(Object.fromEntries(Object.entries(SHRINKAGE_PERCENT).map(([k, v]) => [k, v.value.valueOf()]))).toEqual({
       'raw-denim': 10,
-      'sanforized-denim': 1,
+      'preshrunk-denim': 1,
       'unwashed-cotton': 5,
       prewashed: 0,
     });

@@ -5,7 +5,7 @@ import { AllowanceError, KIND_DEFAULTS, type ShrinkInput, shrinkAllowance, valid
 const IN = 25.4;
 
 describe('shrinkAllowance examples', () => {
-  it('raw denim 10% on a 30 in inseam: the edge 3 1/3 in below the mark, the 1 1/2 in hem cut 1 2/3 in, the cut 5 in down (from memory: 7–10% for unsanforized denim; arithmetic)', () => {
+  it('raw denim 10% on a 30 in inseam: the edge 3 1/3 in below the mark, the 1 1/2 in hem cut 1 2/3 in, the cut 5 in down (from memory: 7–10% for raw denim; arithmetic)', () => {
     const plan = shrinkAllowance({ unit: 'in', cloth: 'raw-denim', lengthToMark: 30 });
     expect(plan.percent).toBe(10);
     expect(plan.percentSource).toBe(KIND_DEFAULTS.shrinkagePercent['raw-denim'].source);
@@ -16,8 +16,8 @@ describe('shrinkAllowance examples', () => {
     expect(plan.cautions).toContain('hot-wash-and-dryer');
   });
 
-  it('sanforized denim 1% on 80 cm: 8 mm below the mark (from memory: Sanforized, under 1% residual; arithmetic 800/99 mm)', () => {
-    const plan = shrinkAllowance({ unit: 'cm', cloth: 'sanforized-denim', lengthToMark: 80 });
+  it('pre-shrunk denim 1% on 80 cm: 8 mm below the mark (from memory: compressive pre-shrinking, under 1% residual; arithmetic 800/99 mm)', () => {
+    const plan = shrinkAllowance({ unit: 'cm', cloth: 'preshrunk-denim', lengthToMark: 80 });
     expect(plan.finishedEdgeBelowMark.mm).toBeCloseTo(800 / 99, 9);
     expect(plan.finishedEdgeBelowMark.text).toBe('0.8 cm');
   });
