@@ -5,6 +5,7 @@
 // upgrade) skips it with one log line and PDFs come out at the packages' own speed.
 // PDF_SPEED_PATCHES=off installs none. Read from process.env, not astro:env: this runs in the
 // sheet worker thread and in benchmarks too (the schema in astro.config.mjs still checks it).
+import { fastDimensions } from './fast-dimensions';
 import { memoiseFace, type MemoFace } from './face-memo';
 import { undoAll } from './override';
 import { cacheFontObjects } from './pdf-font-cache';
@@ -40,6 +41,7 @@ export interface PdfPatch {
 /** The patches, in install order. A version bump means reading the package's changes, then the patch, then the tests. */
 export const PDF_PATCHES: readonly PdfPatch[] = [
   { name: 'text-layout-memo', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: keepTextLayouts },
+  { name: 'fast-dimensions', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: fastDimensions },
   { name: 'split-laid-out', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: splitFromFirstLayout },
   { name: 'pdf-streams', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: compressStreamsFast },
   { name: 'pdf-font-cache', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: cacheFontObjects },

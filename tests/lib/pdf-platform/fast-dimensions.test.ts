@@ -1,0 +1,64 @@
+// The faster yoga pass (our patch of @react-pdf/layout) must lay out every node exactly as
+// react-pdf's own: the same PDF objects, byte for byte bar the date, for many generated sheets
+// (one and two legs, tapers, overfull pages split from their layout, both papers, other scripts)
+// and a batch; and a layout package without it turns the patch off with a log line.
+import { afterAll, describe, expect, it } from 'vitest';
+import * as reactPdfLayout from '@react-pdf/layout';
+import { renderCutSheet, renderCutSheets } from '@/lib/server/cut-sheet/render';
+import { fastDimensions } from '@/lib/server/pdf-platform/fast-dimensions';
+import { installPdfPlatform, PDF_PATCHES, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
+import { comparable } from '../cut-sheet/pdf-objects';
+import { generatedSheets } from './generated-sheets';
+
+const SHEETS = generatedSheets(24, 4711);
+
+afterAll(() => {
+  uninstallPdfPlatform();
+  installPdfPlatform();
+});
+
+describe('the faster yoga pass', () => {
+  it('is installed with the other patches over the layout version it was written for', () => {
+    uninstallPdfPlatform();
+    installPdfPlatform({ setting: 'on' });
+    expect(pdfPatchStatus().find((s) => s.name === 'fast-dimensions')).toMatchObject({ on: true, installed: '5.2.0' });
+  });
+
+  it('gives every generated sheet and a batch the same PDF objects as react-pdf’s own pass', async () => {
+    uninstallPdfPlatform();
+    installPdfPlatform({ setting: 'on' });
+    const fast = [];
+    for (const s of SHEETS) fast.push(comparable(await renderCutSheet(s)));
+    const fastBatch = comparable(await renderCutSheets(SHEETS.slice(0, 10)));
+    const undo = fastDimensions();
+    undo();
+    const own = [];
+    let ownBatch: string[];
+    try {
+      for (const s of SHEETS) own.push(comparable(await renderCutSheet(s)));
+      ownBatch = comparable(await renderCutSheets(SHEETS.slice(0, 10)));
+    } finally {
+      fastDimensions();
+    }
+    // Overfull sheets (two pages and more) are among them.
+    expect(own.filter((o) => o.filter((x) => x.includes('/Type /Page\n')).length > 1).length).toBeGreaterThan(0);
+    for (let i = 0; i < SHEETS.length; i++) expect(fast[i], `sheet ${i}`).toEqual(own[i]);
+    expect(fastBatch).toEqual(ownBatch!);
+  }, 120_000);
+
+  it('is refused at install with a log line when the layout package lacks it', () => {
+    const { setFastDimensions: _left, ...unpatched } = reactPdfLayout as Record<string, unknown>;
+    expect(() => fastDimensions(unpatched)).toThrow(/setFastDimensions.*not applied/);
+    const patch = PDF_PATCHES.find((p) => p.name === 'fast-dimensions')!;
+    uninstallPdfPlatform();
+    const lines: string[] = [];
+    const status = installPdfPlatform({
+      setting: 'on',
+      log: (l) => lines.push(l),
+      versions: () => patch.writtenFor,
+      patches: [{ ...patch, install: () => fastDimensions(unpatched) }],
+    });
+    expect(status).toMatchObject([{ name: 'fast-dimensions', on: false }]);
+    expect(lines).toEqual([expect.stringMatching(/^pdf-platform: fast-dimensions skipped: .*setFastDimensions/)]);
+  });
+});
