@@ -2,7 +2,8 @@
 import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
 import { renderCutSheet, renderCutSheets } from '@/lib/server/cut-sheet/render';
-import { keptLayouts, layoutKey, memoiseTextLayout } from '@/lib/server/pdf-platform/text-layout-memo';
+import { keptLayouts, layoutKey, memoiseTextLayout, nodeLayoutKey, type FontStoreLike, type TextNodeLike } from '@/lib/server/pdf-platform/text-layout-memo';
+import { generatedSheets } from '../pdf-platform/generated-sheets';
 import { comparable } from './pdf-objects';
 import { busyLegs, cuffInch, cuffMetric, hemSloped, sheet, UNSAVED } from './sheets';
 import type { CutSheetData } from '@/lib/shared/cut-sheet-types';
@@ -76,5 +77,90 @@ describe('the paragraph layout memo', () => {
     expect(layoutKey(a.text, { ...a.container, exclusions: [{ type: 'rect' }] }, a.options)).toBeNull();
     const image = { ...a.text, runs: [{ ...a.text.runs[0]!, attributes: { ...a.text.runs[0]!.attributes, attachment: { width: 10, height: 10 } } }] };
     expect(layoutKey(image, a.container, a.options)).toBeNull();
+  });
+
+  it('draws two different sheets, in either order and after others, as each is drawn without the memo', async () => {
+    const [a, b] = generatedSheets(2, 90210);
+    const both = [a!, b!, SHEETS[2]!];
+    memoiseTextLayout(false);
+    const plain = [];
+    for (const d of both) plain.push(comparable(await renderCutSheet(d)));
+    for (const order of [
+      [0, 1, 2],
+      [2, 1, 0],
+      [1, 0, 1, 2, 0],
+    ]) {
+      memoiseTextLayout(true);
+      for (const i of order) expect(comparable(await renderCutSheet(both[i]!)), `sheet ${i} in order ${order}`).toEqual(plain[i]);
+    }
+  });
+
+  // A text node as react-pdf's layout holds it: a style, text pieces, nested text nodes.
+  const fontA = new Face();
+  const fontB = new Face();
+  const store = (inter: object = fontA): FontStoreLike => ({
+    getFont: ({ fontFamily }) => (fontFamily === 'Inter' ? { data: inter } : { data: undefined }),
+    getHyphenationCallback: () => null,
+    getEmojiSource: () => null,
+  });
+  const fonts = store();
+  const textNode = (text: string, style: Record<string, unknown>, children: TextNodeLike[] = []): TextNodeLike => ({
+    type: 'TEXT',
+    style: { fontFamily: 'Inter', fontSize: 9, ...style },
+    props: {},
+    children: [{ type: 'TEXT_INSTANCE', value: text }, ...children],
+  });
+
+  it('keys a text node by its text, text style, box and fonts, and not by where it stands', () => {
+    fc.assert(
+      fc.property(
+        fc.string(),
+        fc.string(),
+        fc.constantFrom(80, 116, 382),
+        fc.constantFrom(80, 116, 382),
+        fc.constantFrom(9, 10, 14),
+        fc.constantFrom(9, 10, 14),
+        fc.constantFrom(400, 700, 800),
+        fc.constantFrom(400, 700, 800),
+        (t1, t2, w1, w2, f1, f2, b1, b2) => {
+          const a = nodeLayoutKey(textNode(t1, { fontSize: f1, fontWeight: b1, marginTop: 2 }), w1, Number.NaN, fonts);
+          const b = nodeLayoutKey(textNode(t2, { fontSize: f2, fontWeight: b2, left: 84, top: 12 }), w2, Number.NaN, fonts);
+          expect(a === b).toBe(t1 === t2 && w1 === w2 && f1 === f2 && b1 === b2);
+        },
+      ),
+    );
+  });
+
+  it('tells apart what changes the lines: nested runs, colours, links, line limits, fonts, a font not loaded yet', () => {
+    const base = textNode('1 Fold at', { color: '#111111' }, [textNode('cuff top', { fontWeight: 800 })]);
+    const key = nodeLayoutKey(base, 200, Number.NaN, fonts);
+    expect(key).not.toBeNull();
+    const variants: TextNodeLike[] = [
+      textNode('1 Fold at', { color: '#111111' }, [textNode('cuff top', { fontWeight: 700 })]),
+      textNode('1 Fold at', { color: '#111111' }, [textNode('cuff to', { fontWeight: 800 }), { type: 'TEXT_INSTANCE', value: 'p' }]),
+      textNode('1 Fold at', { color: '#b3121b' }, [textNode('cuff top', { fontWeight: 800 })]),
+      textNode('1 Fold at', { color: '#111111', maxLines: 1 }, [textNode('cuff top', { fontWeight: 800 })]),
+      textNode('1 Fold at', { color: '#111111', letterSpacing: 1 }, [textNode('cuff top', { fontWeight: 800 })]),
+      { ...base, props: { href: 'https://cuffwright.example/g/1' } },
+    ];
+    for (const v of variants) expect(nodeLayoutKey(v, 200, Number.NaN, fonts)).not.toBe(key);
+    expect(nodeLayoutKey(base, 200, 40, fonts)).not.toBe(key);
+    expect(nodeLayoutKey(base, 200, Number.NaN, store(fontB))).not.toBe(key);
+    expect(nodeLayoutKey(base, 200, Number.NaN, { ...store(), getFont: () => ({ data: undefined }) })).not.toBe(key);
+    expect(nodeLayoutKey(base, 200, Number.NaN, { ...store(), getHyphenationCallback: () => (w: string) => [w] })).not.toBe(key);
+  });
+
+  it('keeps nothing by node for images in text, text round shapes, emoji images or an unknown font family', () => {
+    const image = textNode('Cuff', {}, [{ type: 'IMAGE', style: {}, props: {} }]);
+    expect(nodeLayoutKey(image, 100, Number.NaN, fonts)).toBeNull();
+    expect(nodeLayoutKey({ ...textNode('Cuff', {}), exclusions: [{ type: 'rect' }] }, 100, Number.NaN, fonts)).toBeNull();
+    expect(nodeLayoutKey(textNode('Cuff', {}), 100, Number.NaN, { ...store(), getEmojiSource: () => ({ url: 'x' }) })).toBeNull();
+    const unknown: FontStoreLike = {
+      ...store(),
+      getFont: () => {
+        throw new Error('Font family not registered');
+      },
+    };
+    expect(nodeLayoutKey(textNode('Cuff', {}), 100, Number.NaN, unknown)).toBeNull();
   });
 });

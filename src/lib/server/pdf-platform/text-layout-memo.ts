@@ -3,8 +3,11 @@
 // lines, bidi, glyph runs. Laying out a paragraph is a pure function of its text, its runs'
 // attributes, the box it flows into and the layout options, so the lines are kept per process
 // under a key made of exactly those. Nothing downstream writes to the lines (render copies the
-// glyphs it changes; page splits slice), so a kept answer is shared as it is. The hook into
-// react-pdf's layout is ours: patches/@react-pdf+layout+*.patch (patch-package) adds it.
+// glyphs it changes; page splits slice), so a kept answer is shared as it is. Building that
+// attributed string and its key for each of a sheet's seventy paragraphs cost more than the three
+// it actually lays out afresh, so a second key is read from the text node itself (its text style,
+// fonts and text) and answers before the attributed string is built. The hooks into react-pdf's
+// layout are ours: patches/@react-pdf+layout+*.patch (patch-package) adds them.
 import * as reactPdfLayout from '@react-pdf/layout';
 
 interface Run {
@@ -100,43 +103,172 @@ export function layoutKey(text: AttributedString, container: Container, options:
   return parts.join('');
 }
 
+/** The text node of react-pdf's layout tree, as far as its text layout reads it. */
+export interface TextNodeLike {
+  type: string;
+  value?: string;
+  style?: Record<string, unknown>;
+  props?: Record<string, unknown>;
+  children?: TextNodeLike[];
+  exclusions?: unknown[];
+}
+
+/** react-pdf's font store, as far as the key reads it. */
+export interface FontStoreLike {
+  getFont: (descriptor: { fontFamily: string; fontWeight?: unknown; fontStyle?: unknown }) => { data?: unknown } | null | undefined;
+  getHyphenationCallback?: () => unknown;
+  getEmojiSource?: () => unknown;
+}
+
+// The style properties react-pdf 5.2's text layout reads from a text node (getFragments,
+// getContainer); the rest (position, margins, widths) reaches it only as the box it is given.
+const TEXT_STYLE = [
+  'color',
+  'direction',
+  'fontFamily',
+  'fontWeight',
+  'fontStyle',
+  'fontSize',
+  'fontFeatureSettings',
+  'textAlign',
+  'lineHeight',
+  'textDecoration',
+  'textDecorationColor',
+  'textDecorationStyle',
+  'textTransform',
+  'letterSpacing',
+  'textIndent',
+  'opacity',
+  'verticalAlign',
+  'backgroundColor',
+  'maxLines',
+  'textOverflow',
+] as const;
+
+// One node of the text as react-pdf reads it to build the attributed string (getFragments):
+// each text node's text style and links, the font each of its families resolves to (by identity:
+// a font not yet loaded has no data and another key), and every piece of text. False for what is
+// not compared safely (images, an unresolved family, values of other kinds).
+function spellNode(node: TextNodeLike, fonts: FontStoreLike, parts: string[]): boolean {
+  if (node.type === 'TEXT_INSTANCE') {
+    if (typeof node.value !== 'string') return false;
+    parts.push(JSON.stringify(node.value));
+    return true;
+  }
+  if (node.type === 'IMAGE') return false;
+  const style = node.style ?? {};
+  const props = node.props ?? {};
+  parts.push(`<${node.type}`);
+  for (const value of [props.src, props.href, props.hyphenationPenalty, props.hyphenationCallback]) {
+    const v = spell(value);
+    if (v === null) return false;
+    parts.push(v, ',');
+  }
+  for (const name of TEXT_STYLE) {
+    const v = spell(style[name]);
+    if (v === null) return false;
+    parts.push(v, ';');
+  }
+  const family = style.fontFamily === undefined ? 'Helvetica' : style.fontFamily;
+  const families: unknown[] = typeof family === 'string' ? [family] : [...((family as unknown[] | null) || [])];
+  families.push('Helvetica');
+  for (const fontFamily of families) {
+    if (typeof fontFamily !== 'string') return false;
+    let data: unknown;
+    try {
+      data = fonts.getFont({ fontFamily, fontWeight: style.fontWeight, fontStyle: style.fontStyle })?.data;
+    } catch {
+      return false;
+    }
+    parts.push(typeof data === 'object' && data !== null ? `#${idOf(data)}` : '-');
+  }
+  for (const child of node.children ?? []) if (!spellNode(child, fonts, parts)) return false;
+  parts.push('>');
+  return true;
+}
+
+/**
+ * The key of one text node's layout in a box, or null when it is not safely compared: what the
+ * layout reads from the node (style, links, fonts, text) and the font store (hyphenation), without
+ * building the attributed string. Text flowing round shapes and emoji images are never keyed.
+ */
+export function nodeLayoutKey(node: TextNodeLike, width: number, height: number, fonts: FontStoreLike): string | null {
+  if (node.exclusions && node.exclusions.length > 0) return null;
+  if (typeof fonts !== 'object' || fonts === null) return null;
+  // Emoji become images once fetched: text with them lays out differently over time.
+  if (fonts.getEmojiSource?.()) return null;
+  const hyphenation = spell(fonts.getHyphenationCallback?.() ?? null);
+  if (hyphenation === null) return null;
+  const parts = [`${width},${height}|${hyphenation}|#${idOf(fonts)}|`];
+  return spellNode(node, fonts, parts) ? parts.join('') : null;
+}
+
 // Two generations: a paragraph laid out once waits in `fresh`; laid out again, it moves to `kept`.
 // The wording every sheet shares is kept after its second sheet, while one-off paragraphs (this
 // ticket's numbers) are dropped with `fresh` whenever it fills, instead of growing the heap.
-const fresh = new Map<string, unknown>();
-const kept = new Map<string, unknown>();
 const FRESH_LIMIT = 500;
+
+class Generations {
+  fresh = new Map<string, unknown>();
+  kept = new Map<string, unknown>();
+
+  get(key: string | null, compute: () => unknown): unknown {
+    if (key === null) return compute();
+    let lines = this.kept.get(key);
+    if (lines !== undefined) return lines;
+    lines = this.fresh.get(key);
+    if (lines !== undefined) {
+      this.fresh.delete(key);
+      if (this.kept.size >= TEXT_LAYOUT_LIMIT) this.kept.clear();
+      this.kept.set(key, lines);
+      return lines;
+    }
+    if (this.fresh.size >= FRESH_LIMIT) this.fresh.clear();
+    lines = compute();
+    this.fresh.set(key, lines);
+    return lines;
+  }
+
+  clear(): void {
+    this.fresh.clear();
+    this.kept.clear();
+  }
+
+  get size(): number {
+    return this.fresh.size + this.kept.size;
+  }
+}
+
+// Kept by attributed string (what textkit is given), and in front of that by text node, which
+// answers a paragraph seen before without building its attributed string at all.
+const byText = new Generations();
+const byNode = new Generations();
 
 /** What layoutText would have computed, kept for the process under layoutKey. */
 function rememberedLayout(text: AttributedString, container: Container, options: Options, compute: () => unknown): unknown {
-  const key = layoutKey(text, container, options);
-  if (key === null) return compute();
-  let lines = kept.get(key);
-  if (lines !== undefined) return lines;
-  lines = fresh.get(key);
-  if (lines !== undefined) {
-    fresh.delete(key);
-    if (kept.size >= TEXT_LAYOUT_LIMIT) kept.clear();
-    kept.set(key, lines);
-    return lines;
-  }
-  if (fresh.size >= FRESH_LIMIT) fresh.clear();
-  lines = compute();
-  fresh.set(key, lines);
-  return lines;
+  return byText.get(layoutKey(text, container, options), compute);
+}
+
+/** The same, kept under nodeLayoutKey; a node not kept goes on to rememberedLayout. */
+function rememberedNodeLayout(node: TextNodeLike, width: number, height: number, fonts: FontStoreLike, compute: () => unknown): unknown {
+  return byNode.get(nodeLayoutKey(node, width, height, fonts), compute);
 }
 
 type Hook = Parameters<typeof reactPdfLayout.setLayoutTextHook>[0];
+type NodeHook = Parameters<typeof reactPdfLayout.setLayoutNodeHook>[0];
 
 /** Turns the paragraph layout memo on or off, emptying it; throws if react-pdf's layout has no hook (our patch not applied). */
 export function memoiseTextLayout(on: boolean): void {
-  fresh.clear();
-  kept.clear();
+  byText.clear();
+  byNode.clear();
   // Read from the namespace: a missing export is then a clear error here, not a failed import.
-  const setHook = (reactPdfLayout as { setLayoutTextHook?: (hook: Hook) => void }).setLayoutTextHook;
-  if (typeof setHook !== 'function') throw new Error('@react-pdf/layout has no setLayoutTextHook: patches/@react-pdf+layout+*.patch is not applied');
-  // The hook hands over textkit's own objects; rememberedLayout names the parts it reads.
+  const layout = reactPdfLayout as { setLayoutTextHook?: (hook: Hook) => void; setLayoutNodeHook?: (hook: NodeHook) => void };
+  const { setLayoutTextHook: setHook, setLayoutNodeHook: setNodeHook } = layout;
+  if (typeof setHook !== 'function' || typeof setNodeHook !== 'function')
+    throw new Error('@react-pdf/layout has no setLayoutTextHook or setLayoutNodeHook: patches/@react-pdf+layout+*.patch is not applied');
+  // The hooks hand over react-pdf's and textkit's own objects; the memo names the parts it reads.
   setHook(on ? (rememberedLayout as Hook) : null);
+  setNodeHook(on ? (rememberedNodeLayout as NodeHook) : null);
 }
 
 /** Turns the paragraph layout memo on; returns how to turn it off. */
@@ -145,5 +277,5 @@ export function keepTextLayouts(): () => void {
   return () => memoiseTextLayout(false);
 }
 
-/** How many paragraph layouts are kept now, laid out once or more. */
-export const keptLayouts = (): number => fresh.size + kept.size;
+/** How many paragraph layouts are kept now, laid out once or more (by text and by node). */
+export const keptLayouts = (): number => byText.size + byNode.size;
