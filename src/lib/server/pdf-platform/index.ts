@@ -10,6 +10,7 @@ import { memoiseFace, type MemoFace } from './face-memo';
 import { undoAll } from './override';
 import { cacheFontObjects } from './pdf-font-cache';
 import { compressStreamsFast } from './pdf-streams';
+import { transformFast } from './pdf-transform';
 import { memoiseShaping, type Shaper } from './shaping-memo';
 import { keepSubsets, type Seed } from './subset-memo';
 import { splitFromFirstLayout } from './split-laid-out';
@@ -44,6 +45,7 @@ export const PDF_PATCHES: readonly PdfPatch[] = [
   { name: 'fast-dimensions', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: fastDimensions },
   { name: 'split-laid-out', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: splitFromFirstLayout },
   { name: 'pdf-streams', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: compressStreamsFast },
+  { name: 'pdf-transform', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: transformFast },
   { name: 'pdf-font-cache', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: cacheFontObjects },
   { name: 'subset-memo', pkg: 'fontkit', via: '@react-pdf/font', writtenFor: '2.0.4', face: (face, o) => keepSubsets(face, o.seed) },
   { name: 'shaping-memo', pkg: 'fontkit', via: '@react-pdf/font', writtenFor: '2.0.4', face: (face) => memoiseShaping(face) },
