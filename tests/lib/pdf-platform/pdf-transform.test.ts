@@ -16,7 +16,7 @@ interface Doc {
 }
 
 // What one document's transforms write and where they leave its matrix.
-function written(calls: number[][]): { content: string[]; ctm: number[] } {
+function written(calls: readonly (readonly number[])[]): { content: string[]; ctm: number[] } {
   const doc = new (PDFDocument as unknown as new (o: object) => Doc)({ autoFirstPage: false });
   const content: string[] = [];
   doc.addContent = (data: string) => content.push(data);
