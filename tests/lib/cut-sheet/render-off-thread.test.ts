@@ -48,6 +48,14 @@ describe('rendering strangers’ sheets off the main thread', () => {
     expect(text(next.bytes)).toMatch(/^drawn in thread \d+: next$/);
   });
 
+  it('fails the batch a worker over its heap limit held, with its reason, and starts a new worker for the next', async () => {
+    renderer = offThreadRenderer(fake, { inProcess, log: vi.fn(), size: 1 });
+    await expect(renderer.stream([sheet('hog'), sheet('never drawn')])).rejects.toThrow(/worker stopped: .*memory/i);
+    const next = await renderer.render(sheet('next'));
+    expect(next).toMatchObject({ by: 'worker' });
+    expect(text(next.bytes)).toMatch(/^drawn in thread \d+: next$/);
+  });
+
   it('fails a render not answered in time, and starts a new worker for the next', async () => {
     renderer = offThreadRenderer(fake, { inProcess, log: vi.fn(), timeoutMs: 300, startTimeoutMs: 60_000 });
     await expect(renderer.render(sheet('hang'))).rejects.toThrow(/no answer in 300 ms/);
