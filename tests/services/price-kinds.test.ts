@@ -250,3 +250,21 @@ describe('rush counts the same everywhere (RUSH_RULE), kinds of work included', 
     await kinds.changeKind(a.lead, taper, { rushApplies: true });
   });
 });
+
+describe('a price list sent with fewer lines than the list has (a client written before a line was added)', () => {
+  it('saves the lines sent and keeps the rest as they were; a line sent twice is refused', async () => {
+    const c = await makeShop('Older Till Alterations');
+    await prices.savePriceList(c.lead, { currency: 'EUR', hours: '', location: '', autoReadyNotice: false, items: [...TEST_PRICES] });
+    const before = await prices.getPriceList(c.lead);
+    const kept = before.items.find((i) => i.key === 'original-hem')!;
+    const fewer = TEST_PRICES.filter((i) => i.key !== 'original-hem').map((i) => (i.key === 'plain-hem' ? { ...i, amountMinor: i.amountMinor + 100 } : i));
+    await prices.savePriceList(c.lead, { currency: 'EUR', hours: '', location: '', autoReadyNotice: false, items: fewer });
+    const after = await prices.getPriceList(c.lead);
+    expect(after.items.find((i) => i.key === 'original-hem')).toEqual(kept);
+    expect(after.items.find((i) => i.key === 'plain-hem')!.amountMinor).toBe(TEST_PRICES.find((i) => i.key === 'plain-hem')!.amountMinor + 100);
+    const twice = [TEST_PRICES[0]!, TEST_PRICES[0]!];
+    await expect(prices.savePriceList(c.lead, { currency: 'EUR', hours: '', location: '', autoReadyNotice: false, items: twice })).rejects.toMatchObject({
+      status: 422,
+    });
+  });
+});

@@ -26,7 +26,8 @@ export const priceListInput = z.object({
   hours: text().trim().max(300, 'Keep the hours under 300 characters.'),
   location: text().trim().max(120, 'Keep the address under 120 characters.'),
   autoReadyNotice: z.boolean(),
-  items: z.array(priceItemInput).length(PRICE_KEYS.length, 'Send every line of the list.'),
+  // A list sent before a line was added (a client written for fewer lines) keeps the lines it leaves out.
+  items: z.array(priceItemInput).min(1, 'Send at least one line of the list.').max(PRICE_KEYS.length, 'Send each line of the list once.'),
 });
 
 const kindName = text().trim().min(1, 'Name the kind of work, e.g. "Replace zip".').max(80, 'Keep the name under 80 characters.');

@@ -63,10 +63,10 @@ export async function getPriceList(actor: Actor): Promise<PriceListView> {
   return { ...settings, items: PRICE_KEYS.map((key) => ({ key, ...list[key] })), kinds: await kindsOf(actor.shopId) };
 }
 
-/** Saves the lead's price list and settings; turning the automatic notice on starts it from now. */
+/** Saves the lead's price list and settings (lines left out keep what they were); turning the automatic notice on starts it from now. */
 export async function savePriceList(actor: Actor, input: z.infer<typeof priceListInput>): Promise<PriceListView> {
   const keys = new Set(input.items.map((i) => i.key));
-  if (keys.size !== PRICE_KEYS.length) throw new ServiceError(422, 'Send each line of the price list once.');
+  if (keys.size !== input.items.length) throw new ServiceError(422, 'Send each line of the price list once.');
   const before = await counterSettingsOf(actor.shopId);
   const listBefore = await priceListOf(actor.shopId);
   const since = input.autoReadyNotice ? (before.autoReadyNotice && before.autoReadySince ? before.autoReadySince : new Date()) : null;
