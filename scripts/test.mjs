@@ -1,7 +1,9 @@
 // npm test: unit, property and API tests, then the browser stories and HTTP tests against a built
 // server; ends with one plain line counting every test of both runs.
-import { spawnSync } from 'node:child_process';
+import { spawn } from 'node:child_process';
 import { mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { createInterface } from 'node:readline';
+import { buildIfNeeded } from './build-if-needed.mjs';
 import { ensureChromium } from './chromium.mjs';
 
 const chromium = ensureChromium();
@@ -12,29 +14,60 @@ const extra = process.argv.slice(2);
 if (extra.length > 0) extra.push('--passWithNoTests');
 mkdirSync('test-results', { recursive: true });
 
-const steps = [
-  ['unit, property and API tests', 'unit', []],
-  ['browser stories and HTTP tests', 'browser', ['--config', 'vitest.browser.config.ts']],
-];
 let passed = 0;
 let failed = 0;
-for (const [name, id, config] of steps) {
-  console.log(`\n=== ${name} ===`);
+
+/** One vitest run with its JSON report in test-results/vitest-<id>.json; lines prefixed when runs share the terminal. */
+function run(id, config, runEnv, prefix) {
   const report = `test-results/vitest-${id}.json`;
   rmSync(report, { force: true });
   const args = ['run', ...config, '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...extra];
-  const r = spawnSync(vitest, args, { stdio: 'inherit', env });
-  try {
-    const counts = JSON.parse(readFileSync(report, 'utf8'));
-    passed += counts.numPassedTests;
-    failed += counts.numFailedTests;
-  } catch {
-    // No report: the run died before writing it; its exit status below says so.
+  const child = spawn(vitest, args, { stdio: prefix ? ['ignore', 'pipe', 'pipe'] : 'inherit', env: runEnv });
+  if (prefix) {
+    for (const stream of [child.stdout, child.stderr]) {
+      createInterface({ input: stream }).on('line', (line) => (stream === child.stdout ? process.stdout : process.stderr).write(`${prefix} ${line}\n`));
+    }
   }
-  if (r.status !== 0) {
-    console.error(`\n${name} failed.`);
-    console.log(`tests: ${passed} passed, ${failed} failed`);
-    process.exit(r.status ?? 1);
-  }
+  return new Promise((resolve) => {
+    child.on('close', (status) => {
+      try {
+        const counts = JSON.parse(readFileSync(report, 'utf8'));
+        passed += counts.numPassedTests;
+        failed += counts.numFailedTests;
+      } catch {
+        // No report: the run died before writing it; its exit status says so.
+      }
+      resolve(status ?? 1);
+    });
+  });
+}
+
+function finish(name, status) {
+  if (status === 0) return;
+  console.error(`\n${name} failed.`);
+  console.log(`tests: ${passed} passed, ${failed} failed`);
+  process.exit(status);
+}
+
+console.log('\n=== unit, property and API tests ===');
+finish('unit, property and API tests', await run('unit', [], env));
+
+console.log('\n=== browser stories and HTTP tests ===');
+const browserConfig = ['--config', 'vitest.browser.config.ts'];
+if (extra.length > 0) {
+  // A filtered run: one server, as `npm run test:browser` starts.
+  finish('browser stories and HTTP tests', await run('browser', browserConfig, env));
+} else {
+  // The whole run: two lanes side by side (vitest.browser.config.ts), each with its own server and
+  // demo shop, so their files cannot disturb each other; within a lane files run one after another.
+  // The stories wait on the browser and the server far more than they use a core, so two lanes take
+  // about half the time on 2 cores. Built once here, so the lanes' global setups find it built.
+  buildIfNeeded(process.env.TEST_DIST_DIR || '.test-dist', env);
+  const lanes = [
+    ['stories', '[stories]'],
+    ['sweep-http', '[sweep+http]'],
+  ];
+  const statuses = await Promise.all(lanes.map(([lane, prefix]) => run(`browser-${lane}`, browserConfig, { ...env, BROWSER_LANE: lane }, prefix)));
+  finish('browser stories and HTTP tests', statuses.find((s) => s !== 0) ?? 0);
 }
 console.log(`tests: ${passed} passed, ${failed} failed`);

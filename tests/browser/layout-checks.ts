@@ -1,17 +1,62 @@
 // What "fits the screen" means for the narrow-screen stories: no sideways scroll, every control
 // wholly on screen and not cut off by a frame that scrolls or clips, and every control a finger can hit.
-import type { Page } from 'playwright-core';
+import type { Page, Request } from 'playwright-core';
 
 /** One thing that does not fit, in words a test failure can show. */
 export type LayoutProblem = string;
 
-/** Waits until the page's islands are live (when it has any) and its data requests have settled. */
+// The requests each tracked page has in flight (see trackRequests).
+const inFlight = new WeakMap<Page, Set<Request>>();
+
+/**
+ * Counts the page's requests in flight from now on (call it before the page's first navigation),
+ * so settled() waits for exactly those to end instead of for Playwright's 500 ms of network quiet.
+ */
+export function trackRequests(page: Page): void {
+  const open = new Set<Request>();
+  page.on('request', (r) => open.add(r));
+  page.on('requestfinished', (r) => open.delete(r));
+  page.on('requestfailed', (r) => open.delete(r));
+  inFlight.set(page, open);
+}
+
+/**
+ * Waits until the page's islands are live (when it has any) and its data requests have settled.
+ * On a tracked page: every island hydrated (or 15 s gone by, for the caller's check to report), then
+ * no request in flight across two rounds of the page's own work (its fonts, two frames and the
+ * tasks queued behind them, where React sends a request that depends on one just answered).
+ * Untracked: one island hydrated, then 500 ms with no network connection (Playwright's networkidle).
+ */
 export async function settled(page: Page): Promise<void> {
   await page.waitForLoadState('load');
+  const open = inFlight.get(page);
   if ((await page.locator('astro-island').count()) > 0) {
-    await page.waitForSelector('astro-island:not([ssr])', { state: 'attached', timeout: 15_000 });
+    if (open) await page.waitForFunction(() => !document.querySelector('astro-island[ssr]'), null, { timeout: 15_000 }).catch(() => {});
+    else await page.waitForSelector('astro-island:not([ssr])', { state: 'attached', timeout: 15_000 });
   }
-  await page.waitForLoadState('networkidle');
+  if (!open) {
+    await page.waitForLoadState('networkidle');
+    return;
+  }
+  const until = Date.now() + 30_000;
+  for (let calm = 0; calm < 2; ) {
+    if (open.size > 0) {
+      calm = 0;
+      if (Date.now() > until) throw new Error(`requests still open after 30 s: ${[...open].map((r) => r.url()).join(', ')}`);
+      await new Promise((r) => setTimeout(r, 20));
+      continue;
+    }
+    const stayed = await page
+      .evaluate(async () => {
+        await document.fonts.ready;
+        await new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)));
+        await new Promise((r) => setTimeout(r, 0));
+        return true;
+      })
+      // The page went on to another address meanwhile: wait for that one to load and start again.
+      .catch(() => page.waitForLoadState('load').then(() => false));
+    calm = stayed && open.size === 0 ? calm + 1 : 0;
+  }
 }
 
 /**

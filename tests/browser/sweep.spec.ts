@@ -27,7 +27,7 @@ import { call, DEMO, signIn } from '../http/client';
 import { pageFiles, pageIds } from '../http/pages';
 import { axeProblems, type AxeResults } from './axe-report';
 import { ready, sharedBrowser } from './browser';
-import { layoutProblems, settled } from './layout-checks';
+import { layoutProblems, settled, trackRequests } from './layout-checks';
 import { colourOnlyLinks } from './link-checks';
 import { signedInContext, signInAs, submitSignIn } from './sign-in';
 
@@ -191,6 +191,7 @@ async function accessibility(page: Page): Promise<string[]> {
 /** A page that records CSP violations from the first script on (the init script runs outside the page's CSP). */
 async function watchedPage(context: BrowserContext): Promise<{ page: Page; violations: string[] }> {
   const page = await context.newPage();
+  trackRequests(page);
   const violations: string[] = [];
   await page.addInitScript(() => {
     document.addEventListener('securitypolicyviolation', (e) => {
