@@ -10,8 +10,6 @@ export default getViteConfig({
     globalSetup: ['tests/db/global-setup.ts'],
     // The message catalog, every language registered, for components rendered outside their pages.
     setupFiles: ['tests/setup-catalog.ts'],
-    // Every core: vitest's default leaves one to its main process, which on CI's 2 cores is one worker.
-    maxWorkers: '100%',
     testTimeout: 30_000,
     hookTimeout: 60_000,
   },
