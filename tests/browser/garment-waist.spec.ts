@@ -84,7 +84,10 @@ describe('a pending waist change at the fitting', () => {
     await field(page, 'Pending waist change').fill('-1');
     await page.getByRole('button', { name: 'Save measurements' }).click();
     // The server's refusal stands beside the pin, and nothing is saved.
-    await page.getByText(/The shop does the waist first: the left leg has a waist change still to do/).first().waitFor();
+    await page
+      .getByText(/The shop does the waist first: the left leg has a waist change still to do/)
+      .first()
+      .waitFor();
     expect(await field(page, 'Pin at the back (finished length)').getAttribute('aria-invalid')).toBe('true');
     expect(await page.getByText('Saved both legs.').count()).toBe(0);
 
