@@ -223,13 +223,7 @@ function OriginalBlock({ g, t }: { g: SheetLegGroup; t: Translate }) {
       })}
       <Text style={[s.small, s.strong, { marginTop: 4 }]}>{o.sum}</Text>
       <Text style={[s.small, { marginTop: 2 }]}>{o.taper}</Text>
-      {g.recorded && <Text style={[s.small, { marginTop: 2 }]}>{g.recorded}</Text>}
-      {g.waist && <Text style={[s.small, s.strong, { marginTop: 2 }]}>{g.waist}</Text>}
-      {g.warnings.map((w, i) => (
-        <Text key={i} style={[s.small, { marginTop: 2, color: INK.warn, fontWeight: 700 }]}>
-          {t('sheet.check', { text: w })}
-        </Text>
-      ))}
+      <LegNotes g={g} t={t} />
     </View>
   );
 }
@@ -265,6 +259,15 @@ function LegBlock({ g, width, t }: { g: SheetLegGroup; width: number; t: Transla
       {g.taper && <Text style={[s.small, s.strong, { marginTop: 2 }]}>{g.taper.summary}</Text>}
       {g.taper?.work && <Text style={[s.small, { marginTop: 1 }]}>{g.taper.work}</Text>}
       {g.crease && <Text style={[s.small, { marginTop: 2 }]}>{g.crease}</Text>}
+      <LegNotes g={g} t={t} />
+    </View>
+  );
+}
+
+/** The last lines under a leg: lengths recorded for the bench, the pending waist change, the checks. */
+function LegNotes({ g, t }: { g: { recorded: string | null; waist: string | null; warnings: string[] }; t: Translate }) {
+  return (
+    <>
       {g.recorded && <Text style={[s.small, { marginTop: 2 }]}>{g.recorded}</Text>}
       {g.waist && <Text style={[s.small, s.strong, { marginTop: 2 }]}>{g.waist}</Text>}
       {g.warnings.map((w, i) => (
@@ -272,7 +275,7 @@ function LegBlock({ g, width, t }: { g: SheetLegGroup; width: number; t: Transla
           {t('sheet.check', { text: w })}
         </Text>
       ))}
-    </View>
+    </>
   );
 }
 
