@@ -1,10 +1,13 @@
 /// <reference types="vitest" />
 import { getViteConfig } from 'astro/config';
 
+// Files whose modules keep state a test changes (the PDF speed patches, the sheet's font and layout
+// caches, a database per file): each runs in a fresh module graph.
+const ISOLATED = ['tests/services/**', 'tests/db/**', 'tests/lib/cut-sheet/**', 'tests/lib/pdf-platform/**', 'tests/lib/render-pdf.test.ts'];
+
 // Unit, property and API tests. Browser stories live in vitest.browser.config.ts.
 export default getViteConfig({
   test: {
-    include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
     exclude: ['tests/browser/**', 'node_modules/**'],
     // Migrated PGlite snapshot for the database tests (tests/db/test-db.ts).
     globalSetup: ['tests/db/global-setup.ts'],
@@ -12,5 +15,20 @@ export default getViteConfig({
     setupFiles: ['tests/setup-catalog.ts'],
     testTimeout: 30_000,
     hookTimeout: 60_000,
+    projects: [
+      // The rest share one module graph per worker thread: loading the engine, zod and the catalog
+      // once instead of per file is most of this run's time (CI's unit phase, measured).
+      {
+        extends: true,
+        test: {
+          name: 'shared',
+          include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
+          exclude: ['tests/browser/**', 'node_modules/**', ...ISOLATED],
+          pool: 'threads',
+          isolate: false,
+        },
+      },
+      { extends: true, test: { name: 'isolated', include: ISOLATED.map((g) => (g.endsWith('**') ? `${g}/*.test.{ts,tsx}` : g)) } },
+    ],
   },
 });
