@@ -52,7 +52,7 @@ describe('shrinkNoteOf (raw denim, 10 %: SHRINKAGE_PERCENT, from memory: the top
   });
 
   it('adds no step to an exact figure: unwashed cotton 5 % over 19 in is 19·0.05/0.95 = 1 in exactly (not 1 1/8)', () => {
-    // By hand: 0.95/0.95 = 1; the engine's double of 25.4 mm is 8.000000000000002 eighths. Hem 1.5/0.95 = 1.5789 → 1 5/8.
+    // By hand: 0.95/0.95 = 1; hem 1.5/0.95 = 1.5789 → 1 5/8.
     const note = shrinkNoteOf({ hemAllowance: '1 1/2', shrinkCloth: 'unwashed-cotton', lengthToMark: '19' }, 'plain', 'in', 8)!;
     expect(note).toMatchObject({ percent: '5', allowance: '1 in', hem: '1 5/8 in', pin: '', edge: '1 in', cut: '2 5/8 in' });
   });
