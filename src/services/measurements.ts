@@ -19,7 +19,16 @@ import { legHemTaperRequest, legMainRequest, legOriginalHemInput, legTaperReques
 import { ORIGINAL_HEM_KEYS } from '@/lib/shared/fitting/plan-lengths';
 import type { Actor } from '@/lib/server/api';
 import type { FittingView } from '@/lib/shared/bench-types';
-import { LEG_LENGTH_LABELS, LEG_LENGTHS, LEGS, type Leg, type LegLength, type Measurements, type SavedLeg, type SavedLength } from '@/lib/shared/measurement-request';
+import {
+  LEG_LENGTH_LABELS,
+  LEG_LENGTHS,
+  LEGS,
+  type Leg,
+  type LegLength,
+  type Measurements,
+  type SavedLeg,
+  type SavedLength,
+} from '@/lib/shared/measurement-request';
 import { auditMany, auditOf } from './audit';
 import { visibleGarment } from './garments';
 import { ServiceError } from './errors';
@@ -61,7 +70,8 @@ export function planIssues(input: Measurements): Record<string, string> {
       issues[`legs.${leg}.shrinkPercent`] = `${LEG_LENGTH_LABELS.shrinkPercent}: only with “Other”; clear it, or choose Other.`;
     if (shrink)
       for (const e of validateShrinkInput(shrink)) {
-        const field = e.field === 'cloth' ? 'shrinkCloth' : e.field === 'lengthToMark' && !typed.lengthToMark.trim() && typed.backPin.trim() ? 'backPin' : e.field;
+        const field =
+          e.field === 'cloth' ? 'shrinkCloth' : e.field === 'lengthToMark' && !typed.lengthToMark.trim() && typed.backPin.trim() ? 'backPin' : e.field;
         const named = field && (LEG_LENGTHS as readonly string[]).includes(field) ? (field as LegLength) : 'shrinkCloth';
         const key = `legs.${leg}.${named}`;
         if (!(key in issues)) issues[key] = `${LEG_LENGTH_LABELS[named]}: ${e.message}`;

@@ -57,7 +57,8 @@ describe('unwashed cloth on a plain hem', () => {
 });
 
 describe('the save refuses what cannot be planned (PUT …/measurements answers 422 with these issues)', () => {
-  const request = (left: Record<string, string>) => measurementsRequest.parse({ unit: 'in', legs: { left: { ...blankLeg('plain'), ...left }, right: blankLeg('plain') } });
+  const request = (left: Record<string, string>) =>
+    measurementsRequest.parse({ unit: 'in', legs: { left: { ...blankLeg('plain'), ...left }, right: blankLeg('plain') } });
 
   it('a shrinkage of 50 % or more (the engine keeps it below 50), on the percent', () => {
     const read = readLengths(request({ ...leg, shrinkCloth: 'other', shrinkPercent: '60' }));

@@ -85,16 +85,16 @@ export function LegFields({ leg, finish, unit, register, onFinish, errorFor, rea
                   </select>
                 </FieldFrame>
               ) : (
-              <LengthInput
-                key={f}
-                id={`m-legs-${leg}-${f}`}
-                label={say(`field.${f}`, FIELD[f].label) ?? FIELD[f].label}
-                unit={FIELD[f].unit === 'percent' ? '%' : unit}
-                registration={register(`legs.${leg}.${f}`)}
-                hint={hint(f)}
-                error={errorFor(f)}
-                reading={isLengthField(f) ? readingFor(f) : null}
-              />
+                <LengthInput
+                  key={f}
+                  id={`m-legs-${leg}-${f}`}
+                  label={say(`field.${f}`, FIELD[f].label) ?? FIELD[f].label}
+                  unit={FIELD[f].unit === 'percent' ? '%' : unit}
+                  registration={register(`legs.${leg}.${f}`)}
+                  hint={hint(f)}
+                  error={errorFor(f)}
+                  reading={isLengthField(f) ? readingFor(f) : null}
+                />
               ),
             )}
           </div>

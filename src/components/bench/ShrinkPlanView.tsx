@@ -11,7 +11,11 @@ export function ShrinkPlanView({ leg, values, unit, precision }: { leg: string; 
   if (!note) return null;
   const cloth = t(`shrink.cloth.${note.cloth}` as MessageKey);
   return (
-    <section data-testid={`shrink-${leg}`} aria-labelledby={`shrink-${leg}-heading`} className="flex flex-col gap-2 rounded-lg border-2 border-warn bg-card px-4 py-3">
+    <section
+      data-testid={`shrink-${leg}`}
+      aria-labelledby={`shrink-${leg}-heading`}
+      className="flex flex-col gap-2 rounded-lg border-2 border-warn bg-card px-4 py-3"
+    >
       <h3 id={`shrink-${leg}-heading`} className="text-xl font-extrabold">
         {t('shrink.heading')}
       </h3>

@@ -36,7 +36,9 @@ const length = (what: string) =>
 function fieldSchema(f: LegLength): z.ZodDefault<z.ZodType<string>> {
   const field = FIELD[f];
   if (field.unit === 'choice')
-    return z.enum(['', ...(field.options ?? []).map((o) => o.value)] as [string, ...string[]], { error: `${field.label}: choose one from the list.` }).default('');
+    return z
+      .enum(['', ...(field.options ?? []).map((o) => o.value)] as [string, ...string[]], { error: `${field.label}: choose one from the list.` })
+      .default('');
   if (field.unit === 'percent')
     return text({ error: `${field.label}: type a percent such as 6.` })
       .trim()

@@ -81,9 +81,8 @@ describe('the shrink lines on the sheet', () => {
     values: Object.fromEntries(Object.entries(rawDenim).map(([k, text]) => [k, { text }])),
   };
   const lines = (language: 'en' | 'fr') =>
-    sheetContent(
-      buildCutSheet({ shop: null, ticket: null, garment: null, due: null, assignee: null, language }, [savedLegOrder(leg, 'in', 8)!]),
-    ).groups[0]!.shrink;
+    sheetContent(buildCutSheet({ shop: null, ticket: null, garment: null, due: null, assignee: null, language }, [savedLegOrder(leg, 'in', 8)!])).groups[0]!
+      .shrink;
 
   it('prints the cloth, percent and source, the two sums as printed, and the hot-wash caution', () => {
     const en = lines('en')!;

@@ -132,7 +132,8 @@ function formatDue(iso: string, language: Language): string {
 }
 
 function sameWork(a: LegSheet, b: LegSheet): boolean {
-  const key = (l: LegSheet) => JSON.stringify([l.finish, l.plan, l.taper?.plan ?? null, creaseOf(l), l.recorded ?? null, l.waist ?? null, l.finish === 'hem' ? (l.shrink ?? null) : null]);
+  const key = (l: LegSheet) =>
+    JSON.stringify([l.finish, l.plan, l.taper?.plan ?? null, creaseOf(l), l.recorded ?? null, l.waist ?? null, l.finish === 'hem' ? (l.shrink ?? null) : null]);
   return key(a) === key(b);
 }
 
