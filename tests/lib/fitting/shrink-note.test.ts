@@ -9,7 +9,7 @@ import { buildCutSheet } from '@/lib/server/cut-sheet/build';
 import { sheetContent } from '@/lib/server/cut-sheet/content';
 import { savedLegOrder, type StoredLeg } from '@/lib/server/fitting/saved-leg';
 
-const math = create(all, { number: 'Fraction' });
+const math = create(all!, { number: 'Fraction' });
 // The exact allowance and unwashed hem in eighths/sixteenths, by mathjs's fractions (a cross-check of the hand figures below).
 const inSteps = (x: string, per: number) => Number(math.evaluate(`ceil((${x}) * ${per})`));
 
