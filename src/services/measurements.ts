@@ -10,13 +10,25 @@ import {
   validateHemInput,
   validateHemTaperInput,
   validateOriginalHemInput,
+  validateShrinkInput,
   validateTaperInput,
 } from '@/lib/allowance';
+import { isLengthField } from '@/lib/shared/fitting/kinds';
+import { legShrinkInput } from '@/lib/shared/fitting/shrink-input';
 import { legHemTaperRequest, legMainRequest, legOriginalHemInput, legTaperRequest } from '@/lib/shared/leg-plan';
 import { ORIGINAL_HEM_KEYS } from '@/lib/shared/fitting/plan-lengths';
 import type { Actor } from '@/lib/server/api';
 import type { FittingView } from '@/lib/shared/bench-types';
-import { LEG_LENGTHS, LEGS, type Leg, type LegLength, type Measurements, type SavedLeg, type SavedLength } from '@/lib/shared/measurement-request';
+import {
+  LEG_LENGTH_LABELS,
+  LEG_LENGTHS,
+  LEGS,
+  type Leg,
+  type LegLength,
+  type Measurements,
+  type SavedLeg,
+  type SavedLength,
+} from '@/lib/shared/measurement-request';
 import { auditMany, auditOf } from './audit';
 import { visibleGarment } from './garments';
 import { ServiceError } from './errors';
@@ -51,6 +63,19 @@ export function planIssues(input: Measurements): Record<string, string> {
       checks.push([legTaperRequest(typed, input.unit, 8, { letDown }), validateTaperInput]);
       checks.push([legHemTaperRequest(typed, input.unit, 8, { letDown }), validateHemTaperInput]);
     }
+    // Unwashed cloth on a hem: the engine's shrink check (its names: cloth, lengthToMark falls back to the pin).
+    const shrink = legShrinkInput(typed, typed.finish, input.unit);
+    // The shop's own percent counts only with 'other': kept beside a preset it would say a figure the sheet does not use.
+    if (shrink && shrink.cloth !== 'other' && typed.shrinkPercent.trim())
+      issues[`legs.${leg}.shrinkPercent`] = `${LEG_LENGTH_LABELS.shrinkPercent}: only with “Other”; clear it, or choose Other.`;
+    if (shrink)
+      for (const e of validateShrinkInput(shrink)) {
+        const field =
+          e.field === 'cloth' ? 'shrinkCloth' : e.field === 'lengthToMark' && !typed.lengthToMark.trim() && typed.backPin.trim() ? 'backPin' : e.field;
+        const named = field && (LEG_LENGTHS as readonly string[]).includes(field) ? (field as LegLength) : 'shrinkCloth';
+        const key = `legs.${leg}.${named}`;
+        if (!(key in issues)) issues[key] = `${LEG_LENGTH_LABELS[named]}: ${e.message}`;
+      }
     for (const [request, validate] of checks) {
       if (!request) continue;
       for (const e of validate(request)) {
@@ -74,6 +99,11 @@ export function readLengths(input: Measurements): ReadLengths {
     for (const field of LEG_LENGTHS) {
       const text = input.legs[leg][field].trim();
       if (text === '') continue;
+      // A choice or percent is kept as its text (no mm): the plan checks below read it.
+      if (!isLengthField(field)) {
+        legs[leg][field] = { text };
+        continue;
+      }
       try {
         legs[leg][field] = { text, mm: parseLength(text, input.unit).mm };
       } catch (e) {

@@ -3,6 +3,7 @@ import { isUnit } from '@/lib/allowance/units';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import type { AuditEntry } from '@/lib/shared/bench-types';
 import { dateTimeText } from '@/lib/shared/date-text';
+import { isLengthField, valueWords } from '@/lib/shared/fitting/kinds';
 import { EXISTING_FINISH_LABELS, type ExistingFinish } from '@/lib/shared/existing-finish';
 import { isGarmentStep, type GarmentStep } from '@/lib/shared/garment-steps';
 import { FINISH_LABELS, LEG_LENGTH_LABELS, LEG_LENGTHS, type Finish, type LegLength } from '@/lib/shared/measurement-request';
@@ -40,9 +41,16 @@ function describe(e: AuditEntry, { label, unit: shopUnit, precision }: Omit<Prop
   const d = e.detail;
   if (e.action === 'measurement.changed') {
     const typedIn = isUnit(d.unit) ? d.unit : shopUnit;
-    const isLength = LEG_LENGTHS.includes(d.field as LegLength);
-    // A length as typed, with its own unit ("38 mm" stays 38 mm in an inch shop), and the shop's reading.
-    const val = (v: unknown) => (!v ? 'nothing' : isLength ? typedAndRead(String(v), typedIn, shopUnit, precision) : shown(String(d.field), v));
+    const isField = LEG_LENGTHS.includes(d.field as LegLength);
+    // A length as typed, with its own unit ("38 mm" stays 38 mm in an inch shop), and the shop's reading; a choice or percent in words.
+    const val = (v: unknown) =>
+      !v
+        ? 'nothing'
+        : !isField
+          ? shown(String(d.field), v)
+          : isLengthField(d.field as LegLength)
+            ? typedAndRead(String(v), typedIn, shopUnit, precision)
+            : valueWords(d.field as LegLength, String(v));
     return `${String(d.leg) === 'left' ? 'Left' : 'Right'} leg, ${fieldName(String(d.field))}: ${val(d.old)} → ${val(d.new)}`;
   }
   if (e.action === 'garment.moved' && isGarmentStep(d.from) && isGarmentStep(d.to)) {

@@ -5,6 +5,7 @@ import type { Precision, Unit } from '@/lib/allowance/types';
 import type { FittingView } from '@/lib/shared/bench-types';
 import { FINISH_LABELS, LEG_LENGTH_LABELS, LEG_LENGTHS, LEGS, legFormValues, type Leg } from '@/lib/shared/measurement-request';
 import { WaistNoteLine } from './WaistNoteLine';
+import { isLengthField, valueWords } from '@/lib/shared/fitting/kinds';
 import { LegPlan } from './LegPlan';
 
 interface Props {
@@ -92,7 +93,13 @@ export function FittingReadOnly({ fitting, precision, unit, letDown = false }: P
                   const v = byLeg.get(l)?.values[f];
                   return (
                     <td key={l} className="measure py-2 pr-2 text-2xl font-extrabold">
-                      {v ? <SavedLengthText text={v.text} typedIn={shownUnit} unit={unit} precision={precision} /> : <span className="text-muted">—</span>}
+                      {!v ? (
+                        <span className="text-muted">—</span>
+                      ) : isLengthField(f) ? (
+                        <SavedLengthText text={v.text} typedIn={shownUnit} unit={unit} precision={precision} />
+                      ) : (
+                        valueWords(f, v.text)
+                      )}
                     </td>
                   );
                 })}

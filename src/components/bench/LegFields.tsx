@@ -2,10 +2,11 @@ import { useT } from '@/components/I18n';
 import type { MessageKey } from '@/lib/shared/i18n/format';
 import type { UseFormRegister } from 'react-hook-form';
 import { LengthInput } from '@/components/LengthInput';
+import { describedBy, FieldFrame } from '@/components/Field';
 import { Segmented } from '@/components/calculator/Segmented';
 // The defaults module only (no parser, so no mathjs in the island).
 import { usualCuffDepthsText } from '@/lib/allowance/defaults';
-import { FIELD, fieldsOf, GROUPS, partGroupOf, type GroupId } from '@/lib/shared/fitting/kinds';
+import { FIELD, fieldsOf, GROUPS, isLengthField, partGroupOf, type GroupId } from '@/lib/shared/fitting/kinds';
 import { FINISHES, type Finish, type Leg, type LegLength, type MeasurementsInput } from '@/lib/shared/measurement-request';
 
 interface Props {
@@ -64,18 +65,38 @@ export function LegFields({ leg, finish, unit, register, onFinish, errorFor, rea
         <fieldset key={g.title} className="flex flex-col gap-3">
           <legend className="mb-1 text-lg font-extrabold">{groupTitle(g.title)}</legend>
           <div className="grid gap-3 sm:grid-cols-2">
-            {g.fields.map((f) => (
-              <LengthInput
-                key={f}
-                id={`m-legs-${leg}-${f}`}
-                label={say(`field.${f}`, FIELD[f].label) ?? FIELD[f].label}
-                unit={unit}
-                registration={register(`legs.${leg}.${f}`)}
-                hint={hint(f)}
-                error={errorFor(f)}
-                reading={readingFor(f)}
-              />
-            ))}
+            {g.fields.map((f) =>
+              FIELD[f].unit === 'choice' ? (
+                <FieldFrame key={f} id={`m-legs-${leg}-${f}`} label={say(`field.${f}`, FIELD[f].label) ?? FIELD[f].label} hint={hint(f)} error={errorFor(f)}>
+                  {/* A plain select: the keyboard's arrows and letters choose, as anywhere. */}
+                  <select
+                    id={`m-legs-${leg}-${f}`}
+                    aria-invalid={errorFor(f) ? true : undefined}
+                    aria-describedby={describedBy(`m-legs-${leg}-${f}`, errorFor(f), hint(f))}
+                    className={`min-h-11 rounded-md border-2 bg-card px-3 text-xl ${errorFor(f) ? 'border-cut' : 'border-rule focus:border-accent'}`}
+                    {...register(`legs.${leg}.${f}`)}
+                  >
+                    <option value="">{t('shrink.none')}</option>
+                    {FIELD[f].options?.map((o) => (
+                      <option key={o.value} value={o.value}>
+                        {say(`shrink.cloth.${o.value}`, o.label)}
+                      </option>
+                    ))}
+                  </select>
+                </FieldFrame>
+              ) : (
+                <LengthInput
+                  key={f}
+                  id={`m-legs-${leg}-${f}`}
+                  label={say(`field.${f}`, FIELD[f].label) ?? FIELD[f].label}
+                  unit={FIELD[f].unit === 'percent' ? '%' : unit}
+                  registration={register(`legs.${leg}.${f}`)}
+                  hint={hint(f)}
+                  error={errorFor(f)}
+                  reading={isLengthField(f) ? readingFor(f) : null}
+                />
+              ),
+            )}
           </div>
         </fieldset>
       ))}

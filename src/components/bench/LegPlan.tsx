@@ -5,6 +5,7 @@ import { frontPinNote } from '@/lib/shared/leg-plan';
 import type { Leg, LegValues } from '@/lib/shared/measurement-request';
 import { HemTaperCheck } from './HemTaperCheck';
 import { OriginalHemPlanView } from './OriginalHemPlanView';
+import { ShrinkPlanView } from './ShrinkPlanView';
 import { useLegPlan, type LegPlanState } from './use-leg-plan';
 
 interface Props {
@@ -50,6 +51,7 @@ export function LegPlanView({ leg, values, unit, precision, planned }: Omit<Prop
         // The calculator's taper view speaks of the cuff top: a plain hem's check has its own below.
         <PlanView plan={plan} problem={problem} failure={failure} taper={taper?.finish === 'hem' ? null : taper} />
       )}
+      <ShrinkPlanView leg={leg} values={values} unit={unit} precision={precision} />
       {taper?.finish === 'hem' && <HemTaperCheck taper={taper} />}
       {cut?.measured && (
         <p data-testid={`measured-cut-${leg}`} className="rounded-md border-l-8 border-accent bg-accent-soft px-4 py-2 text-lg font-semibold">

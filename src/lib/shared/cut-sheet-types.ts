@@ -25,6 +25,34 @@ export interface WaistNote {
   source: string;
 }
 
+/**
+ * A hem left long for unwashed cloth (shrinkAllowance), as printed: every length in whole display
+ * steps, each rounded to the safe side (down the leg, never short), and each sum made of the printed
+ * figures (`edge` = `pin` + `allowance`, `cut` = `edge` + `hem`; without a pin, below the pin mark).
+ */
+export interface ShrinkNote {
+  /** the cloth chosen (the registry's option value) */
+  cloth: string;
+  /** the expected shrinkage in length, percent, as printed ("10") */
+  percent: string;
+  /** where the percent comes from (the preset's source, or the shop's own figure) */
+  source: string;
+  /** the length that shrinks to the mark, as printed */
+  length: string;
+  /** the shrink allowance: how far below the pin mark the finished edge is chalked */
+  allowance: string;
+  /** the hem allowance cut before washing */
+  hem: string;
+  /** the pin as printed and the edge and cut as lengths from the same start ('' when no pin: `edge`/`cut` are below the mark) */
+  pin: string;
+  edge: string;
+  cut: string;
+  /** the cut below the pin mark: allowance + hem, in whole steps */
+  cutBelow: string;
+  /** 'none': no shrinkage expected (prewashed, or 0 %): the plan's lines stand */
+  code: 'shrink' | 'none';
+}
+
 /** A length the fitting recorded for the bench that the engine does not plan with (a label and the text as typed). */
 export interface RecordedLength {
   label: string;
@@ -64,6 +92,8 @@ export interface HemLeg {
   recorded?: RecordedLength[];
   /** the pending waist change and where it moves the pin mark */
   waist?: WaistNote;
+  /** unwashed cloth: the hem left long to shrink to the pin */
+  shrink?: ShrinkNote;
 }
 
 /** One leg of jeans shortened keeping the factory hem: cut off above its stitching and sewn back on (its taper check inside the plan). */

@@ -32,13 +32,28 @@ const length = (what: string) =>
     .trim()
     .max(40, `${what} is too long: type a length such as 1 1/2.`);
 
+// A choice is one of its options or blank; a percent a short number (the engine's check reads it on save).
+function fieldSchema(f: LegLength): z.ZodDefault<z.ZodType<string>> {
+  const field = FIELD[f];
+  if (field.unit === 'choice')
+    return z
+      .enum(['', ...(field.options ?? []).map((o) => o.value)] as [string, ...string[]], { error: `${field.label}: choose one from the list.` })
+      .default('');
+  if (field.unit === 'percent')
+    return text({ error: `${field.label}: type a percent such as 6.` })
+      .trim()
+      .max(12, `${field.label}: type a percent such as 6.`)
+      .default('');
+  return length(LEG_LENGTH_LABELS[f]).default('');
+}
+
 /** One leg as typed: the finish, the preset applied (its id; the name only to show), and every length as text ('' = not taken). */
 export const legInput = z.object({
   finish: z.enum(FINISHES, { error: 'Choose cuff, plain hem or sloped hem.' }),
   preset: text().trim().max(60, 'Keep the preset name under 60 characters.').default(''),
   /** the preset applied, by id ('' = none): the server records it only if it is the shop's and usable by the actor */
   presetId: text().trim().max(40, 'Choose the preset from the list.').default(''),
-  ...(Object.fromEntries(LEG_LENGTHS.map((f) => [f, length(LEG_LENGTH_LABELS[f]).default('')])) as Record<LegLength, z.ZodDefault<z.ZodString>>),
+  ...(Object.fromEntries(LEG_LENGTHS.map((f) => [f, fieldSchema(f)])) as Record<LegLength, z.ZodDefault<z.ZodString>>),
 });
 
 /** The body of PUT /api/garments/[id]/measurements: the unit typed in and both legs. */
@@ -54,10 +69,10 @@ export type Measurements = z.output<typeof measurementsRequest>;
 /** One leg once checked. */
 export type LegValues = z.output<typeof legInput>;
 
-/** A length as saved: the text as typed and its exact value in mm. */
+/** A value as saved: the text as typed and, for a length, its exact value in mm (a choice or percent is its text alone). */
 export interface SavedLength {
   text: string;
-  mm: number;
+  mm?: number;
 }
 
 /** One leg as the API returns it. */

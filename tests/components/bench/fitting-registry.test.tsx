@@ -17,7 +17,7 @@ import type { AuditEntry, FittingView } from '@/lib/shared/bench-types';
 import { blankLeg, legInput, type MeasurementsInput } from '@/lib/shared/measurement-request';
 import { LENGTHS_OF, presetSettings } from '@/lib/shared/preset-settings';
 import { cuffRequest, hemRequest, hemTaperRequest, taperRequest } from '@/lib/shared/plan-request';
-import { engineFields } from '@/lib/shared/fitting/kinds';
+import { engineFields, valueWords } from '@/lib/shared/fitting/kinds';
 import { FITTING_VALUES } from './fitting-values';
 import { ORIGINAL_HEM_KEYS } from '@/lib/shared/fitting/plan-lengths';
 
@@ -39,6 +39,13 @@ function stored(finish: Finish): StoredLeg {
   return { leg: 'left', unit: 'in', finish, values };
 }
 
+// How a field printed in its note shows its value: a choice by its option's words, a percent with its sign, a length with its unit.
+function noteWords(key: FieldKey, value: string): string {
+  const f = FIELD[key];
+  if (f.unit === 'choice') return valueWords(key, value);
+  return f.unit === 'percent' ? `${value}%` : `${value} in`;
+}
+
 describe('the fitting registry', () => {
   it('has a sample value for every field (add one beside a new field)', () => {
     expect(Object.keys(FITTING_VALUES).sort()).toEqual([...FIELD_KEYS].sort());
@@ -51,6 +58,8 @@ describe('the fitting registry', () => {
         const asked = FIELD[key].finishes.includes(finish);
         expect(html.includes(`id="m-legs-left-${key}"`), `${key} on the ${finish} form`).toBe(asked);
         if (asked) expect(text(html)).toContain(FIELD[key].label);
+        // A choice offers each of its options by its words (a labelled select).
+        if (asked) for (const o of FIELD[key].options ?? []) expect(html, `${key} offers ${o.value}`).toContain(`value="${o.value}"`);
       }
     }
   });
@@ -108,6 +117,8 @@ describe('the fitting registry', () => {
         const key = f.key as FieldKey;
         const value = FITTING_VALUES[key];
         if (f.printed === 'listed') expect(group.recorded, `${key} (${finish})`).toContain(`${f.label} ${value}`);
+        // A field with its own worked note (the shrink lines): there in words, as the note prints its kind.
+        if (f.printed === 'note') expect(group.shrink?.join(' '), `${key} (${finish})`).toContain(noteWords(key, value));
         if (f.printed !== 'plan') continue;
         const inOrder = [
           // The kept factory hem's join allowance is the engine's seamAllowance (ORIGINAL_HEM_KEYS).

@@ -1,4 +1,4 @@
-// One plausible length for every field of the fitting registry, in inches, as a tailor would type
+// One plausible value for every field of the fitting registry (lengths in inches), as a tailor would type
 // it: a cuffed leg with a gentle taper (figures from TRADE.md's usual ranges, else common practice,
 // no source). The registry tests require one here for every field.
 import type { FieldKey } from '@/lib/shared/fitting/kinds';
@@ -31,4 +31,8 @@ export const FITTING_VALUES: Record<FieldKey, string> = {
   waistGirth: '34',
   seatGirth: '40',
   waistToSeat: '8',
+  // Unwashed cloth on a hem: the shop's own 6 % (invented), shrinking over a 30 in inseam (common practice, no source).
+  shrinkCloth: 'other',
+  shrinkPercent: '6',
+  lengthToMark: '30',
 };

@@ -264,12 +264,17 @@ function LegBlock({ g, width, t }: { g: SheetLegGroup; width: number; t: Transla
   );
 }
 
-/** The last lines under a leg: lengths recorded for the bench, the pending waist change, the checks. */
-function LegNotes({ g, t }: { g: { recorded: string | null; waist: string | null; warnings: string[] }; t: Translate }) {
+/** The last lines under a leg: lengths recorded for the bench, the pending waist change, the shrink lines, the checks. */
+function LegNotes({ g, t }: { g: { recorded: string | null; waist: string | null; shrink: string[] | null; warnings: string[] }; t: Translate }) {
   return (
     <>
       {g.recorded && <Text style={[s.small, { marginTop: 2 }]}>{g.recorded}</Text>}
       {g.waist && <Text style={[s.small, s.strong, { marginTop: 2 }]}>{g.waist}</Text>}
+      {g.shrink?.map((line, i) => (
+        <Text key={`shrink-${i}`} style={[s.small, i === 1 || i === 2 ? s.strong : {}, { marginTop: 2 }]}>
+          {line}
+        </Text>
+      ))}
       {g.warnings.map((w, i) => (
         <Text key={i} style={[s.small, { marginTop: 2, color: INK.warn, fontWeight: 700 }]}>
           {t('sheet.check', { text: w })}

@@ -16,7 +16,7 @@ import {
 } from '../../allowance/index';
 import type { CuffInput, HemInput, HemTaperInput, TaperInput } from '../../allowance/types';
 import type { OriginalHemInput } from '../../allowance/kind-types';
-import type { CutSheetData, LegSheet, RecordedLength, Side, WaistNote } from '../../shared/cut-sheet-types';
+import type { CutSheetData, LegSheet, RecordedLength, ShrinkNote, Side, WaistNote } from '../../shared/cut-sheet-types';
 
 /** Leg widths for a taper check (the hem taper check's width fields); the cuff's own depth, sections and unit are taken from the cuff. */
 export type TaperWidths = Pick<HemTaperInput, 'widthAtEdge' | 'widthAbove' | 'heightAbove' | 'seamAllowance' | 'tolerance' | 'widthAtCut'>;
@@ -24,7 +24,7 @@ export type TaperWidths = Pick<HemTaperInput, 'widthAtEdge' | 'widthAbove' | 'he
 /** What one leg should become: a cuff (maybe on a tapered leg) or a plain hem. */
 export type LegOrder =
   | { side: Side; finish: 'cuff'; input: CuffInput; taper?: TaperWidths; finished?: string; recorded?: RecordedLength[]; waist?: WaistNote }
-  | { side: Side; finish: 'hem'; input: HemInput; taper?: TaperWidths; finished?: string; recorded?: RecordedLength[]; waist?: WaistNote }
+  | { side: Side; finish: 'hem'; input: HemInput; taper?: TaperWidths; finished?: string; recorded?: RecordedLength[]; waist?: WaistNote; shrink?: ShrinkNote }
   | { side: Side; finish: 'original'; input: OriginalHemInput; taper?: undefined; finished?: string; recorded?: RecordedLength[]; waist?: WaistNote };
 
 // A plain hem's taper check takes the hem's own unit, precision and allowance.
@@ -97,6 +97,7 @@ export function planLeg(order: LegOrder): LegSheet {
     const hem: LegSheet = { side: order.side, finish: 'hem', input: order.input, plan: planHem(order.input), ...finished };
     if (order.recorded?.length) hem.recorded = order.recorded;
     if (order.waist) hem.waist = order.waist;
+    if (order.shrink) hem.shrink = order.shrink;
     if (order.taper) {
       const input = hemTaperInput(order.input, order.taper);
       hem.taper = { input, plan: checkHemTaper(input) };

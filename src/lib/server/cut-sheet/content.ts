@@ -10,7 +10,7 @@ import { checkRuler, type GuideGroup } from './chalk-guide';
 import { finishedLine, recordedText } from './finished-length';
 import { printedPlan, type PrintedPlan, type PrintedSeamWork } from './printed';
 import { printedOriginal, type PrintedOriginal } from './printed-original';
-import type { CutSheetData, LegSheet, OriginalHemLeg } from '../../shared/cut-sheet-types';
+import type { CutSheetData, LegSheet, OriginalHemLeg, ShrinkNote } from '../../shared/cut-sheet-types';
 import type { OriginalHemNoteCode } from '@/lib/allowance/kind-types';
 
 /** One chalk line as printed: number, name, distances. */
@@ -51,6 +51,8 @@ export interface SheetLegGroup {
   recorded: string | null;
   /** the pending waist change and where it moves the pin mark, or null */
   waist: string | null;
+  /** unwashed cloth: the shrink lines (the cloth and source, edge, cut, the wash caution), or null */
+  shrink: string[] | null;
   warnings: string[];
   leg: LegSheet;
   /** every figure the block prints, in whole display steps (a cuff's or plain hem's; null on a kept factory hem) */
@@ -130,7 +132,8 @@ function formatDue(iso: string, language: Language): string {
 }
 
 function sameWork(a: LegSheet, b: LegSheet): boolean {
-  const key = (l: LegSheet) => JSON.stringify([l.finish, l.plan, l.taper?.plan ?? null, creaseOf(l), l.recorded ?? null, l.waist ?? null]);
+  const key = (l: LegSheet) =>
+    JSON.stringify([l.finish, l.plan, l.taper?.plan ?? null, creaseOf(l), l.recorded ?? null, l.waist ?? null, l.finish === 'hem' ? (l.shrink ?? null) : null]);
   return key(a) === key(b);
 }
 
@@ -259,6 +262,18 @@ function sectionsNote(t: Translate, pp: PrintedPlan): string | null {
 }
 
 // Each recorded length as typed, with its reading when typed in another unit than the sheet's.
+/** A hem left long for unwashed cloth, in the sheet's words: every figure as printed, so each sum adds up on the page. */
+export function shrinkLines(t: Translate, n: ShrinkNote): string[] {
+  const cloth = t(`shrink.cloth.${n.cloth}` as MessageKey);
+  if (n.code === 'none') return [t('shrink.sheet.none', { cloth })];
+  return [
+    t('shrink.sheet.cloth', { cloth, percent: n.percent, source: n.source, length: n.length }),
+    n.pin ? t('shrink.sheet.edge', { ...n }) : t('shrink.sheet.edgeBelow', { ...n }),
+    n.pin ? t('shrink.sheet.cut', { ...n }) : t('shrink.sheet.cutBelow', { ...n }),
+    t('shrink.sheet.caution'),
+  ];
+}
+
 function recordedNote(t: Translate, leg: LegSheet): string | null {
   if (!leg.recorded?.length) return null;
   const list = leg.recorded.map((r) => `${r.label} ${recordedText(r.text, leg.plan.unit, leg.plan.precision)}`).join(t('warning.not-enough-cloth.separator'));
@@ -312,6 +327,7 @@ function originalGroupOf(t: Translate, leg: OriginalHemLeg, label: string, strip
     crease: null,
     recorded: recordedNote(t, leg),
     waist: leg.waist ? t(`waist.${leg.waist.code}` as MessageKey, { ...leg.waist }) : null,
+    shrink: null,
     warnings: codes.map((c) => originalNote(t, c, pp)),
     leg,
     printed: null,
@@ -359,6 +375,7 @@ function groupOf(t: Translate, leg: LegSheet, label: string, strip: string, exis
     crease: creaseNote(t, crease, existing),
     recorded: recordedNote(t, leg),
     waist: leg.waist ? t(`waist.${leg.waist.code}` as MessageKey, { ...leg.waist }) : null,
+    shrink: leg.finish === 'hem' && leg.shrink ? shrinkLines(t, leg.shrink) : null,
     warnings: [
       ...new Set([
         ...warnings.filter((w) => !SAID_ELSEWHERE.has(w.code) && !(crease && w.code === 'old-crease-visible')).map((w) => warningText(t, w)),

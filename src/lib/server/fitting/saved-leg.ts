@@ -5,9 +5,10 @@ import type { CuffInput, HemInput, Precision, Unit } from '../../allowance/types
 import type { OriginalHemInput } from '../../allowance/kind-types';
 import type { LegOrder, TaperWidths } from '../cut-sheet/build';
 import { typedForUnit } from '../../shared/length-reading';
-import { FIELD_KEYS, fieldsOf, type FieldKey, type Finish } from '../../shared/fitting/kinds';
+import { FIELD_KEYS, fieldsOf, isLengthField, type FieldKey, type Finish } from '../../shared/fitting/kinds';
 import { originalHemLengths, planLengths, plansOf, type LegTexts } from '../../shared/fitting/plan-lengths';
 import { waistNoteOf } from './waist-note';
+import { shrinkNoteOf } from '../../shared/fitting/shrink-note';
 import type { WaistOrder } from '../../shared/waist-order';
 
 /** A leg as saved (the API's SavedLeg, or a measurements row): its side, unit, finish and lengths as typed. */
@@ -27,7 +28,8 @@ export function savedTexts(saved: StoredLeg, to: Unit): LegTexts {
   const out: LegTexts = {};
   for (const key of FIELD_KEYS) {
     const text = saved.values[key]?.text?.trim();
-    if (text) out[key] = typedForUnit(text, saved.unit, to);
+    // A choice or percent has no unit to carry.
+    if (text) out[key] = isLengthField(key) ? typedForUnit(text, saved.unit, to) : text;
   }
   return out;
 }
@@ -47,6 +49,8 @@ export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision
   const recorded = listed.length ? { recorded: listed.map((f) => ({ label: f.label, text: texts[f.key as FieldKey]! })) } : {};
   const note = waistNoteOf(texts, unit, precision, opts.waistOrder);
   const waist = note ? { waist: note } : {};
+  const shrunk = shrinkNoteOf(texts, saved.finish, unit, precision);
+  const shrink = shrunk ? { shrink: shrunk } : {};
   // The kept factory hem checks its taper at the join inside its own plan: the widths are in its input.
   if (saved.finish === 'original')
     return { side: saved.leg, finish: 'original', input: { ...scale, ...main } as unknown as OriginalHemInput, ...finished, ...recorded, ...waist };
@@ -63,7 +67,7 @@ export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision
     : {};
   if (plans.main === 'cuff')
     return { side: saved.leg, finish: 'cuff', input: { ...scale, ...main } as CuffInput, ...finished, ...recorded, ...waist, ...taper };
-  return { side: saved.leg, finish: 'hem', input: { ...scale, ...main } as HemInput, ...finished, ...recorded, ...waist, ...taper };
+  return { side: saved.leg, finish: 'hem', input: { ...scale, ...main } as HemInput, ...finished, ...recorded, ...waist, ...shrink, ...taper };
 }
 
 /** True when a saved leg has what its plan needs (a cuff its depth): what the sheet asks of a fitting. */

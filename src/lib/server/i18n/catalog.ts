@@ -41,6 +41,7 @@ export const BENCH_MESSAGES = [
   'fieldHint.',
   'fitting.',
   'waist.',
+  'shrink.',
   'garment.',
   'print.',
   'summary.',

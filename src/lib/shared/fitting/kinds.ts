@@ -3,8 +3,14 @@
 // derived from here, so a new length is one entry. Plain data, no imports: server and islands share it.
 // Labels and hints are English here, in this one place, keyed by field, for a message catalog to take over.
 
-/** How a field is measured: a length along the leg, a width laid flat, or a count. */
-export type UnitKind = 'length' | 'width' | 'count';
+/** How a field is measured: a length along the leg, a width laid flat, a count, a percent, or one of a list (`options`). */
+export type UnitKind = 'length' | 'width' | 'count' | 'percent' | 'choice';
+
+/** One option of a choice field: the value stored and its words on screen. */
+export interface FieldOption {
+  value: string;
+  label: string;
+}
 
 /** A finish a leg can be given (the value stored in measurements.finish). */
 export type Finish = 'cuff' | 'plain' | 'slope' | 'original';
@@ -29,6 +35,8 @@ export interface FittingField {
   /** the hint on the preset form, where it differs (a preset is no one leg) */
   presetHint?: string;
   unit: UnitKind;
+  /** a choice field's options, in the order offered (blank, not listed, is "none") */
+  options?: readonly FieldOption[];
   /** the finishes whose form asks for it */
   finishes: readonly Finish[];
   /** the form's group it sits in */
@@ -37,8 +45,8 @@ export interface FittingField {
   engine: Partial<Record<EnginePlan, PlanUse>>;
   /** a preset may hold it */
   preset: boolean;
-  /** printed on the cut sheet: through the plan's figures ('plan'), as a recorded line ('listed'), or not */
-  printed: 'plan' | 'listed' | false;
+  /** printed on the cut sheet: through the plan's figures ('plan'), as a recorded line ('listed'), in a worked note of its own ('note': the shrink lines), or not */
+  printed: 'plan' | 'listed' | 'note' | false;
   /** asked only when the pair is let down first */
   letDownOnly?: boolean;
 }
@@ -50,6 +58,7 @@ export const GROUPS = {
   cloth: 'Cloth',
   taper: 'Taper check (flat widths)',
   waist: 'Pending waist change',
+  shrink: 'Unwashed cloth',
 } as const;
 /** A group of the bench form. */
 export type GroupId = keyof typeof GROUPS;
@@ -320,6 +329,49 @@ const TROUSER_FIELDS = [
     preset: false,
     printed: 'listed',
   },
+  // Shrinkage (issue 17, shrinkAllowance): plain and sloped hems only. A cuff folds three layers of
+  // the same cloth whose depths shrink too, which the engine does not plan; the kept factory hem has
+  // no hem allowance to cut (its band is sewn back on at lines from the join). Both are washed first.
+  {
+    key: 'shrinkCloth',
+    label: 'Cloth not yet washed',
+    hint: 'Blank: washed already, or not to be washed. The hem is left long enough to shrink to the pin.',
+    unit: 'choice',
+    options: [
+      { value: 'raw-denim', label: 'Raw denim' },
+      { value: 'preshrunk-denim', label: 'Pre-shrunk denim' },
+      { value: 'unwashed-cotton', label: 'Unwashed cotton' },
+      { value: 'prewashed', label: 'Prewashed (no shrinkage)' },
+      { value: 'other', label: 'Other (the shop’s own percent)' },
+    ],
+    finishes: HEMS,
+    group: 'shrink',
+    engine: {},
+    preset: false,
+    printed: 'note',
+  },
+  {
+    key: 'shrinkPercent',
+    label: 'Shop’s own shrinkage',
+    hint: 'Only for “Other”: expected shrinkage in length at the first wash, in percent, e.g. 6.',
+    unit: 'percent',
+    finishes: HEMS,
+    group: 'shrink',
+    engine: {},
+    preset: false,
+    printed: 'note',
+  },
+  {
+    key: 'lengthToMark',
+    label: 'Length that shrinks to the mark',
+    hint: 'e.g. the inseam from the crotch to the pin mark. Blank: the back pin.',
+    unit: 'length',
+    finishes: HEMS,
+    group: 'shrink',
+    engine: {},
+    preset: false,
+    printed: 'note',
+  },
 ] as const satisfies readonly FittingField[];
 
 /** One garment kind: what it is called, its parts (what a finish makes) and its finishes, and its fields. */
@@ -359,6 +411,19 @@ export type PresetFieldKey = Extract<(typeof TROUSER_FIELDS)[number], { preset: 
 
 /** Trousers' fields by key. */
 export const FIELD: Record<FieldKey, FittingField> = Object.fromEntries(TROUSER_FIELDS.map((f) => [f.key, f])) as Record<FieldKey, FittingField>;
+
+/** True when a field holds a length or width (read with the engine's parser, saved with its mm); false for a choice, percent or count. */
+export function isLengthField(key: FieldKey): boolean {
+  const unit = FIELD[key].unit;
+  return unit === 'length' || unit === 'width';
+}
+
+/** A saved choice or percent in words ("Raw denim", "6 %"); a length or width comes back as typed. */
+export function valueWords(key: FieldKey, text: string): string {
+  const f = FIELD[key];
+  if (f.unit === 'choice') return f.options?.find((o) => o.value === text)?.label ?? text;
+  return f.unit === 'percent' ? `${text} %` : text;
+}
 
 /** Every field key of a trouser leg, in the form's order. */
 export const FIELD_KEYS: readonly FieldKey[] = TROUSER_FIELDS.map((f) => f.key);
