@@ -62,6 +62,13 @@ export function jsonSchemaOf(schema: z.ZodType): JsonSchema {
   return out;
 }
 
+/** A zod schema as the JSON Schema of what the API sends (io 'output': what the value is). */
+export function answerSchemaOf(schema: z.ZodType): JsonSchema {
+  const out = z.toJSONSchema(schema, { io: 'output', unrepresentable: 'any', target: 'draft-2020-12' }) as JsonSchema;
+  delete out.$schema;
+  return out;
+}
+
 /** The query schema's fields as query parameters. */
 function queryParameters(schema: z.ZodType): Operation['parameters'] {
   const js = jsonSchemaOf(schema);
@@ -78,6 +85,23 @@ function queryParameters(schema: z.ZodType): Operation['parameters'] {
 
 const PROBLEM = { $ref: '#/components/responses/Problem' };
 const BINARY = { type: 'string', contentMediaType: 'application/octet-stream' };
+
+/** The success answers: each declared status with its JSON Schema (from the zod schema, one
+ * source), else the route's status with only its media type (a PDF or CSV is bytes or text). */
+function successResponses(spec: RouteSpec): Record<string, unknown> {
+  const answer = spec.answer ?? 'json';
+  const declared = Object.entries(spec.responses ?? {});
+  if (answer === 'json' && declared.length) {
+    return Object.fromEntries(
+      declared.map(([status, schema]) => [
+        status,
+        { description: schema.description ?? spec.summary, content: { 'application/json': { schema: answerSchemaOf(schema) } } },
+      ]),
+    );
+  }
+  const content = answer === 'json' ? { 'application/json': {} } : { [answer]: { schema: answer === 'text/csv' ? { type: 'string' } : BINARY } };
+  return { [String(spec.status ?? 200)]: { description: spec.summary, content } };
+}
 
 /** The operation for one method of one route. */
 function operationOf(path: string, method: string, spec: RouteSpec): Operation {
@@ -108,13 +132,7 @@ function operationOf(path: string, method: string, spec: RouteSpec): Operation {
         },
       }
     : undefined;
-  const answer = spec.answer ?? 'json';
-  const responses: Record<string, unknown> = {
-    [String(spec.status ?? 200)]: {
-      description: spec.summary,
-      content: answer === 'json' ? { 'application/json': { schema: {} } } : { [answer]: { schema: BINARY } },
-    },
-  };
+  const responses = successResponses(spec);
   if (bodyType?.includes('json') || bodyType?.startsWith('multipart/')) responses['400'] = PROBLEM;
   if (!isPublic) responses['401'] = PROBLEM;
   if (!isPublic) responses['403'] = PROBLEM;
