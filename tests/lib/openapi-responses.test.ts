@@ -15,25 +15,7 @@ vi.mock('astro:env/server', async (importOriginal) => ({ ...(await importOrigina
 
 // JSON routes whose answer is not declared yet. Declare one (`responses` in its route()) and take it
 // off this list: the test fails while a listed route declares one, and for an unlisted one that does not.
-const UNDECLARED = [
-  'GET /api/auth/{all}',
-  'POST /api/auth/{all}',
-  'GET /api/customers/{id}/fittings',
-  'POST /api/garments/{id}/photos',
-  'GET /api/garments/{id}/photos',
-  'GET /api/health',
-  'POST /api/invitations/{id}/accept',
-  'GET /api/invitations/{id}',
-  'GET /api/me',
-  'GET /api/openapi.json',
-  'GET /api/overview',
-  'POST /api/payments/webhook',
-  'DELETE /api/photos/{id}',
-  'POST /api/plan',
-  'GET /api/sent-messages',
-  'POST /api/shops',
-  'POST /api/sms/status',
-];
+const UNDECLARED = ['GET /api/auth/{all}', 'POST /api/auth/{all}', 'GET /api/openapi.json', 'POST /api/plan'];
 
 describe('declared responses', () => {
   it('every JSON route declares its answer, except those on UNDECLARED (a list that only shrinks)', async () => {
@@ -108,11 +90,9 @@ describe('route() holds the handler to its declared answer (checked by astro che
     // A field missing, or of another type: the route file does not compile.
     // @ts-expect-error `at` is missing
     const missing = route({ summary: 'A thing.', permission: 'public', responses: { 200: thing } }, async () => ({ id: 'a' }));
+    const typed = { summary: 'A thing.', permission: ['tickets', 'read'], responses: { 200: thing } } as const;
     // @ts-expect-error `id` is a number
-    const mistyped = route({ summary: 'A thing.', permission: ['tickets', 'read'], responses: { 200: thing } }, ({ actor }) => ({
-      id: actor.role.length,
-      at: '',
-    }));
+    const mistyped = route(typed, ({ actor }) => ({ id: actor.role.length, at: '' }));
     for (const r of [ok, raw, missing, mistyped]) expect(r.spec.responses?.[200]).toBe(thing);
   });
 });

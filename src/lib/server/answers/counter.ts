@@ -5,6 +5,8 @@ import { z } from 'zod';
 import { LINK_STATUSES, paymentJson, refundJson } from '@/db/schema/payments';
 import { priceLineJson } from '@/db/schema/prices';
 import { CONTACT_PREFERENCES } from '@/lib/shared/contact-channels';
+import { GARMENT_STEPS } from '@/lib/shared/garment-steps';
+import { PERIODS } from '@/lib/shared/overview/shop-days';
 import { CURRENCIES } from '@/lib/pricing/money';
 import { PRICE_KEYS } from '@/lib/pricing/price-keys';
 
@@ -71,3 +73,29 @@ export const priceChangeJson = z.object({
 
 /** Where an e-mailed receipt went. */
 export const receiptSentJson = z.object({ to: z.string() });
+
+const count = z.number().int();
+
+/** The lead's overview for a period: per day, waiting work, takings, intake to ready. */
+export const overviewJson = z.object({
+  period: z.enum(PERIODS),
+  timeZone: z.string(),
+  currency,
+  today: z.string(),
+  days: z.array(
+    z.object({
+      day: z.string(),
+      takenIn: count,
+      handedOver: count,
+      dueDone: count,
+      dueOpen: count,
+      overdue: count,
+      takings: z.record(z.string(), minor),
+    }),
+  ),
+  overdueBefore: count,
+  overdueNow: count,
+  waiting: z.array(z.object({ step: z.enum(GARMENT_STEPS), label: z.string(), garments: count })),
+  takings: z.array(z.object({ method: z.string(), amountMinor: minor, payments: count, refundedMinor: minor })),
+  intakeToReady: z.object({ garments: count, averageDays: z.number().nullable() }),
+});
