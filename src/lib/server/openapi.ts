@@ -5,6 +5,14 @@
 import { z } from 'zod';
 import { permissionsOf, type RouteExample, type RouteSpec } from './route';
 
+/** The document's outline as /api/openapi.json declares it (the rest is OpenAPI 3.1's own schema,
+ * which tests/http/open-api.spec.ts validates it against). */
+export const openApiDocumentJson = z.looseObject({
+  openapi: z.literal('3.1.0'),
+  info: z.object({ title: z.string(), version: z.string(), description: z.string() }),
+  paths: z.record(z.string(), z.record(z.string(), z.looseObject({ operationId: z.string(), summary: z.string() }))),
+});
+
 /** One method of one route file, as the catalog found it. */
 export interface RouteEntry {
   /** The file under src/pages/api, e.g. "tickets/[id]/garments.ts". */
