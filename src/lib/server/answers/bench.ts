@@ -89,7 +89,8 @@ export const savedLegJson = z.object({
   finish: z.enum(FINISHES),
   preset: z.string().nullable(),
   presetId: z.string().nullable(),
-  values: z.partialRecord(z.enum(LEG_LENGTHS), z.object({ text: z.string(), mm: z.number() })),
+  // mm: a length's millimetres; a choice or a percent (the shrink allowance) is text only.
+  values: z.partialRecord(z.enum(LEG_LENGTHS), z.object({ text: z.string(), mm: z.number().optional() })),
   takenAt: z.string(),
   takenBy: z.string().nullable(),
 });
