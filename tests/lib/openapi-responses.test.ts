@@ -2,7 +2,8 @@
 // `responses` (zod), or stands on UNDECLARED below, a list that may only shrink; and the check the
 // HTTP test runs on every example's answer (tests/http/response-check.ts) refuses a body that drifted
 // from its schema: a field added, a field missing, a wrong type, an undeclared status or media type.
-import { describe, expect, it, vi } from 'vitest';
+import { rmSync } from 'node:fs';
+import { afterAll, describe, expect, it, vi } from 'vitest';
 import { z } from 'zod';
 import { openApiDocument } from '@/lib/server/openapi';
 import { route } from '@/lib/server/route';
@@ -12,6 +13,7 @@ import { answerProblems, declaresAnswer, type DocumentedResponses } from '../htt
 // The route modules open the app's database when loaded: a throwaway folder, not the worktree's data/.
 const dir = vi.hoisted(() => require('node:fs').mkdtempSync(require('node:path').join(require('node:os').tmpdir(), 'cw-openapi-')) as string);
 vi.mock('astro:env/server', async (importOriginal) => ({ ...(await importOriginal<object>()), DATA_DIR: dir }));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 // JSON routes whose answer is not declared yet. Declare one (`responses` in its route()) and take it
 // off this list: the test fails while a listed route declares one, and for an unlisted one that does not.
