@@ -3,7 +3,15 @@ import { getViteConfig } from 'astro/config';
 
 // Files whose modules keep state a test changes (the PDF speed patches, the sheet's font and layout
 // caches, a database per file): each runs in a fresh module graph.
-const ISOLATED = ['tests/services/**', 'tests/db/**', 'tests/lib/cut-sheet/**', 'tests/lib/pdf-platform/**', 'tests/lib/render-pdf.test.ts'];
+// openapi-responses loads every route module (a database in a throwaway folder, astro:env mocked).
+const ISOLATED = [
+  'tests/services/**',
+  'tests/db/**',
+  'tests/lib/cut-sheet/**',
+  'tests/lib/pdf-platform/**',
+  'tests/lib/render-pdf.test.ts',
+  'tests/lib/openapi-responses.test.ts',
+];
 
 // Unit, property and API tests. Browser stories live in vitest.browser.config.ts.
 export default getViteConfig({

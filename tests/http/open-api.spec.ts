@@ -1,7 +1,9 @@
 // The API document (issue 17): /api/openapi.json is valid OpenAPI 3.1, names every route file
 // under src/pages/api with every method it exports, and every example in it, sent as it is by a
 // member of the demo shop whose role has the route's permission (signed out for a public route),
-// is accepted (2xx). Ids in a path come from fresh rows of the demo shop (api-fixtures.ts).
+// is accepted (2xx), and its answer is what the document declares for that status: its media type,
+// and a JSON body that zod parses with the declared schema (response-check.ts). Ids in a path come
+// from fresh rows of the demo shop (api-fixtures.ts).
 import { readdirSync, readFileSync } from 'node:fs';
 import { join, relative, sep } from 'node:path';
 import { Validator } from '@seriousme/openapi-schema-validator';
@@ -9,6 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { can, type Permission } from '@/lib/shared/roles';
 import { fixtures } from './api-fixtures';
 import { call, DEMO, signIn } from './client';
+import { answerProblems, type DocumentedResponses } from './response-check';
 
 const API_DIR = join(process.cwd(), 'src', 'pages', 'api');
 type Role = keyof typeof DEMO;
@@ -26,6 +29,7 @@ interface Operation {
   'x-permission': 'public' | string[];
   'x-examples': Example[];
   requestBody?: { content: Record<string, { schema: Record<string, unknown>; examples?: Record<string, { value: unknown }> }> };
+  responses: DocumentedResponses;
 }
 type Doc = { openapi: string; paths: Record<string, Record<string, Operation>> };
 
@@ -134,6 +138,16 @@ describe('the API document (/api/openapi.json)', () => {
     }
   });
 
+  it('shows the declared answers on the reference page (/api-reference)', async () => {
+    const page = await call('GET', '/api-reference');
+    expect(page.status).toBe(200);
+    const html = String(page.body);
+    // The ticket list declares its items: their fields are on the page, from the same schema.
+    expect(html).toContain('Answer 200:');
+    expect(html).toContain('garmentCount');
+    expect(html).toContain('Answer 201:');
+  });
+
   it('lists for NOT_SENT only operations it has', () => {
     for (const key of Object.keys(NOT_SENT)) expect(operations.map((o) => o.key)).toContain(key);
   });
@@ -142,7 +156,7 @@ describe('the API document (/api/openapi.json)', () => {
     if (key in NOT_SENT) continue;
     const examples: Example[] = op['x-examples'].length ? op['x-examples'] : [{ summary: 'as it is, without a body' }];
     for (const example of examples) {
-      it(`${key}: "${example.summary}" is accepted`, async () => {
+      it(`${key}: "${example.summary}" is accepted and answers as declared`, async () => {
         const role = roleFor(op);
         await make.before[key]?.();
         const needs = [...path.matchAll(/\{([^}]+)\}/g)].map((m) => m[1]!).filter((n) => !example.params?.[n]);
@@ -154,6 +168,10 @@ describe('the API document (/api/openapi.json)', () => {
         const answer = await call(key.split(' ')[0]!, url, { cookie: role ? cookies[role] : undefined, body: example.body });
         expect(answer.status, `${key} as ${role ?? 'signed out'} → ${JSON.stringify(answer.body)?.slice(0, 300)}`).toBeGreaterThanOrEqual(200);
         expect(answer.status, `${key} as ${role ?? 'signed out'} → ${JSON.stringify(answer.body)?.slice(0, 300)}`).toBeLessThan(300);
+        expect(
+          answerProblems(op.responses, answer.status, answer.headers.get('content-type'), answer.body),
+          `${key}: the answer drifted from its declared response`,
+        ).toEqual([]);
       });
     }
   }

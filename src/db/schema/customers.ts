@@ -2,6 +2,7 @@
 import { sql, type SQL } from 'drizzle-orm';
 import { pgTable, text, timestamp, uuid, index } from 'drizzle-orm/pg-core';
 import { createSelectSchema } from 'drizzle-zod';
+import { asJson } from '../../lib/shared/as-json';
 import { CONTACT_PREFERENCES } from '../../lib/shared/contact-channels';
 import { organization } from './auth';
 
@@ -42,6 +43,8 @@ export const customers = pgTable(
 
 /** A customer row as read. */
 export const customerRow = createSelectSchema(customers);
+/** A customer as the API sends it (dates as ISO strings). */
+export const customerJson = asJson(customerRow);
 
 /** A customer as the API returns it. */
 export type Customer = typeof customers.$inferSelect;

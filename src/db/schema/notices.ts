@@ -2,6 +2,7 @@
 // a failed send stays visible and is retried.
 import { index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { createSelectSchema } from 'drizzle-zod';
+import { asJson } from '../../lib/shared/as-json';
 import { CHANNELS } from '../../lib/shared/contact-channels';
 import { organization, user } from './auth';
 import { tickets } from './tickets';
@@ -60,5 +61,7 @@ export const notices = pgTable(
 
 /** A notice as the API returns it. */
 export const noticeRow = createSelectSchema(notices);
+/** A notice as the API sends it (dates as ISO strings). */
+export const noticeJson = asJson(noticeRow);
 /** A notice. */
 export type Notice = typeof notices.$inferSelect;

@@ -3,6 +3,7 @@
 // already processed.
 import { index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { createSelectSchema } from 'drizzle-zod';
+import { asJson } from '../../lib/shared/as-json';
 import { organization, user } from './auth';
 import { customers } from './customers';
 import { tickets } from './tickets';
@@ -116,6 +117,10 @@ export const paymentEvents = pgTable('payment_events', {
 
 /** A payment as the API returns it. */
 export const paymentRow = createSelectSchema(payments);
+/** A payment as the API sends it (dates as ISO strings). */
+export const paymentJson = asJson(paymentRow);
+/** A refund as the API sends it (dates as ISO strings). */
+export const refundJson = asJson(createSelectSchema(refunds));
 /** A payment. */
 export type Payment = typeof payments.$inferSelect;
 /** A refund (or credit kept on the customer). */

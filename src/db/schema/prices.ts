@@ -3,6 +3,7 @@
 import { sql } from 'drizzle-orm';
 import { boolean, foreignKey, index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { createSelectSchema } from 'drizzle-zod';
+import { asJson } from '../../lib/shared/as-json';
 import { PRICE_KEYS } from '../../lib/pricing/price-keys';
 import { organization, user } from './auth';
 import { garments, tickets } from './tickets';
@@ -105,6 +106,8 @@ export const priceLines = pgTable(
 
 /** A price line as the API returns it. */
 export const priceLineRow = createSelectSchema(priceLines);
+/** A price line as the API sends it (dates as ISO strings). */
+export const priceLineJson = asJson(priceLineRow);
 /** A price line. */
 export type PriceLine = typeof priceLines.$inferSelect;
 /** A kind of work on a shop's price list. */

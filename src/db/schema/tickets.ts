@@ -3,6 +3,7 @@
 import { pgTable, text, timestamp, uuid, index, integer, jsonb, date, uniqueIndex } from 'drizzle-orm/pg-core';
 import { sql } from 'drizzle-orm';
 import { createSelectSchema } from 'drizzle-zod';
+import { asJson } from '../../lib/shared/as-json';
 import { z } from 'zod';
 import { DEFAULT_EXISTING_FINISH, EXISTING_FINISHES } from '../../lib/shared/existing-finish';
 import { GARMENT_STEPS, type GarmentStep } from '../../lib/shared/garment-steps';
@@ -131,6 +132,10 @@ export const shopSettings = pgTable('shop_settings', {
 
 /** A ticket row as read. */
 export const ticketRow = createSelectSchema(tickets);
+/** A ticket as the API sends it (dates as ISO strings). */
+export const ticketJson = asJson(ticketRow);
+/** A garment as the API sends it (dates as ISO strings). */
+export const garmentJson = asJson(createSelectSchema(garments));
 
 /** A move of a ticket (all its garments at its step) to the next step. */
 export const ticketStatusInput = z.object({ status: z.enum(GARMENT_STEPS, { error: 'Choose one of the bench steps.' }) });

@@ -5,6 +5,14 @@
 import { z } from 'zod';
 import { permissionsOf, type RouteExample, type RouteSpec } from './route';
 
+/** The document's outline as /api/openapi.json declares it (the rest is OpenAPI 3.1's own schema,
+ * which tests/http/open-api.spec.ts validates it against). */
+export const openApiDocumentJson = z.looseObject({
+  openapi: z.literal('3.1.0'),
+  info: z.object({ title: z.string(), version: z.string(), description: z.string() }),
+  paths: z.record(z.string(), z.record(z.string(), z.looseObject({ operationId: z.string(), summary: z.string() }))),
+});
+
 /** One method of one route file, as the catalog found it. */
 export interface RouteEntry {
   /** The file under src/pages/api, e.g. "tickets/[id]/garments.ts". */
@@ -62,6 +70,13 @@ export function jsonSchemaOf(schema: z.ZodType): JsonSchema {
   return out;
 }
 
+/** A zod schema as the JSON Schema of what the API sends (io 'output': what the value is). */
+export function answerSchemaOf(schema: z.ZodType): JsonSchema {
+  const out = z.toJSONSchema(schema, { io: 'output', unrepresentable: 'any', target: 'draft-2020-12' }) as JsonSchema;
+  delete out.$schema;
+  return out;
+}
+
 /** The query schema's fields as query parameters. */
 function queryParameters(schema: z.ZodType): Operation['parameters'] {
   const js = jsonSchemaOf(schema);
@@ -78,6 +93,23 @@ function queryParameters(schema: z.ZodType): Operation['parameters'] {
 
 const PROBLEM = { $ref: '#/components/responses/Problem' };
 const BINARY = { type: 'string', contentMediaType: 'application/octet-stream' };
+
+/** The success answers: each declared status with its JSON Schema (from the zod schema, one
+ * source), else the route's status with only its media type (a PDF or CSV is bytes or text). */
+function successResponses(spec: RouteSpec): Record<string, unknown> {
+  const answer = spec.answer ?? 'json';
+  const declared = Object.entries(spec.responses ?? {});
+  if (answer === 'json' && declared.length) {
+    return Object.fromEntries(
+      declared.map(([status, schema]) => [
+        status,
+        { description: schema.description ?? spec.summary, content: { 'application/json': { schema: answerSchemaOf(schema) } } },
+      ]),
+    );
+  }
+  const content = answer === 'json' ? { 'application/json': {} } : { [answer]: { schema: answer === 'text/csv' ? { type: 'string' } : BINARY } };
+  return { [String(spec.status ?? 200)]: { description: spec.summary, content } };
+}
 
 /** The operation for one method of one route. */
 function operationOf(path: string, method: string, spec: RouteSpec): Operation {
@@ -108,13 +140,7 @@ function operationOf(path: string, method: string, spec: RouteSpec): Operation {
         },
       }
     : undefined;
-  const answer = spec.answer ?? 'json';
-  const responses: Record<string, unknown> = {
-    [String(spec.status ?? 200)]: {
-      description: spec.summary,
-      content: answer === 'json' ? { 'application/json': { schema: {} } } : { [answer]: { schema: BINARY } },
-    },
-  };
+  const responses = successResponses(spec);
   if (bodyType?.includes('json') || bodyType?.startsWith('multipart/')) responses['400'] = PROBLEM;
   if (!isPublic) responses['401'] = PROBLEM;
   if (!isPublic) responses['403'] = PROBLEM;

@@ -25,8 +25,16 @@ export interface RouteExample<B = unknown> {
 /** What a route's answer is when it is not JSON (PDF, CSV, a picture). */
 export type Answer = 'json' | 'application/pdf' | 'text/csv' | 'image/*';
 
+/** The JSON a route answers, per success status: a zod schema of the body as sent (dates as ISO
+ * strings), shown in the API document and held to the handler's return type by `route()`. */
+export type Responses = { readonly [status: number]: z.ZodType };
+
 /** What a route declares: read by the route itself and by the API document. */
-export interface RouteSpec<B extends z.ZodType | undefined = z.ZodType | undefined, Q extends z.ZodType | undefined = z.ZodType | undefined> {
+export interface RouteSpec<
+  B extends z.ZodType | undefined = z.ZodType | undefined,
+  Q extends z.ZodType | undefined = z.ZodType | undefined,
+  R extends Responses | undefined = Responses | undefined,
+> {
   /** One line: what the route does. */
   summary: string;
   /** A longer note for the reference (limits, who sees what). */
@@ -45,6 +53,9 @@ export interface RouteSpec<B extends z.ZodType | undefined = z.ZodType | undefin
   status?: number;
   /** The answer's media type (JSON unless said). */
   answer?: Answer;
+  /** The JSON body of each success status (`{ 200: ticketJson }`); without it the document says
+   * only "JSON" (tests/lib/openapi-responses.test.ts lists the routes still without one). */
+  responses?: R;
   examples?: RouteExample<B extends z.ZodType ? z.input<B> : unknown>[];
   /** When this returns false the route does not exist here: 404 for everyone, before sign-in. */
   available?: () => boolean;
@@ -64,6 +75,17 @@ export interface RouteInput<A, B, Q> {
 }
 
 type Out<S> = S extends z.ZodType ? z.output<S> : undefined;
+/** A value that JSON.stringify turns into `D`: a string may be a Date (sent as its ISO string). */
+type Sendable<D> = D extends string
+  ? D | Date
+  : D extends readonly (infer U)[]
+    ? readonly Sendable<U>[]
+    : D extends object
+      ? { [K in keyof D]: Sendable<D[K]> }
+      : D;
+/** What a handler may return: a Response (its own answer), or a value whose JSON one of the
+ * declared schemas describes, so a route file whose handler drifts from its schema does not compile. */
+type Reply<R> = R extends Responses ? Response | Sendable<z.output<R[keyof R]>> | Promise<Response | Sendable<z.output<R[keyof R]>>> : unknown;
 type ActorOf<P> = P extends 'public' ? Actor | null : Actor;
 
 /** An Astro handler that carries its declaration (for the API document). */
@@ -112,10 +134,12 @@ export function demand(actor: Actor, permission: Permission, what = 'do this'): 
 
 /** Declares an API route: permission, body and query checked in that order, then the handler;
  * a returned value is answered as JSON with the spec's status, a returned Response as it is. */
-export function route<const P extends Access, B extends z.ZodType | undefined = undefined, Q extends z.ZodType | undefined = undefined>(
-  spec: RouteSpec<B, Q> & { permission: P },
-  handler: (input: RouteInput<ActorOf<P>, Out<B>, Out<Q>>) => unknown,
-): DeclaredRoute {
+export function route<
+  const P extends Access,
+  B extends z.ZodType | undefined = undefined,
+  Q extends z.ZodType | undefined = undefined,
+  R extends Responses | undefined = undefined,
+>(spec: RouteSpec<B, Q, R> & { permission: P }, handler: (input: RouteInput<ActorOf<P>, Out<B>, Out<Q>>) => Reply<R>): DeclaredRoute {
   const answer: APIRoute = async (context) => {
     if (spec.available && !spec.available()) return problem(404, 'Not found.');
     const actor = admit(context, spec.permission);

@@ -5,12 +5,14 @@ import { json } from '@/lib/server/api';
 import { route } from '@/lib/server/route';
 import { health } from '@/services/health';
 import { startedUp } from '@/services/startup';
+import { healthJson } from '@/lib/server/answers/site';
 
 /** The server's health (see services/health.ts). */
 export const GET = route(
   {
     summary: "This server's health: 200 when its database answers, its migrations are current and its start-up work is done; 503 otherwise.",
     permission: 'public',
+    responses: { 200: healthJson, 503: healthJson },
   },
   async () => {
     const started = startedUp();

@@ -2,10 +2,12 @@
 import { route } from '@/lib/server/route';
 import { timeZoneRequest } from '@/lib/shared/time-zone-request';
 import { saveShopTimeZone, shopTimeZone } from '@/services/shop-time-zone';
+import { shopTimeZoneJson } from '@/lib/server/answers/bench';
 
 /** The shop's time zone and whether it was chosen (every member reads it). */
-export const GET = route({ summary: "The shop's time zone and whether it was chosen.", permission: ['tickets', 'read'] }, ({ actor }) =>
-  shopTimeZone(actor.shopId),
+export const GET = route(
+  { summary: "The shop's time zone and whether it was chosen.", permission: ['tickets', 'read'], responses: { 200: shopTimeZoneJson } },
+  ({ actor }) => shopTimeZone(actor.shopId),
 );
 
 /** Saves the shop's time zone (the lead); 422 for a name Intl does not know. */
@@ -15,6 +17,7 @@ export const PUT = route(
     permission: ['settings', 'update'],
     body: timeZoneRequest,
     examples: [{ summary: 'London', body: { timeZone: 'Europe/London' } }],
+    responses: { 200: shopTimeZoneJson },
   },
   ({ actor, body }) => saveShopTimeZone(actor, body.timeZone),
 );

@@ -3,6 +3,7 @@ import { json } from '@/lib/server/api';
 import { shopSignUpInput } from '@/lib/shared/account-inputs';
 import { route } from '@/lib/server/route';
 import { createShop } from '@/services/shops';
+import { shopCreatedJson } from '@/lib/server/answers/site';
 
 /** Public by design: anyone may open a new shop. */
 export const POST = route(
@@ -14,6 +15,7 @@ export const POST = route(
     examples: [
       { summary: 'A new shop', body: { shopName: 'Example Hems', name: 'Alex Example', email: 'alex@example-hems.test', password: 'a-long-password' } },
     ],
+    responses: { 201: shopCreatedJson },
   },
   async ({ body }) => {
     const { shopId, headers } = await createShop(body);

@@ -2,9 +2,12 @@
 import { route } from '@/lib/server/route';
 import { customerPatch } from '@/lib/shared/customer-request';
 import { getCustomer, updateCustomer } from '@/services/customers';
+import { customerJson } from '@/db/schema/customers';
 
 /** The customer, when they are the shop's. */
-export const GET = route({ summary: 'One customer of the shop.', permission: ['customers', 'read'] }, ({ actor, params }) => getCustomer(actor, params.id!));
+export const GET = route({ summary: 'One customer of the shop.', permission: ['customers', 'read'], responses: { 200: customerJson } }, ({ actor, params }) =>
+  getCustomer(actor, params.id!),
+);
 
 /** Changes the customer's details (old and new values kept in the audit). */
 export const PATCH = route(
@@ -13,6 +16,7 @@ export const PATCH = route(
     permission: ['customers', 'update'],
     body: customerPatch,
     examples: [{ summary: 'A note for next time', body: { notes: 'Prefers a deep cuff.' } }],
+    responses: { 200: customerJson },
   },
   ({ actor, params, body }) => updateCustomer(actor, params.id!, body),
 );

@@ -4,6 +4,8 @@
 import { route } from '@/lib/server/route';
 import { queueQuery } from '@/lib/shared/queue-request';
 import { readQueue } from '@/services/queue';
+import { queueRowJson } from '@/lib/server/answers/bench';
+import { z } from 'zod';
 
 /** The garments of the queue the role may see (an apprentice: their own and unassigned). */
 export const GET = route(
@@ -14,6 +16,7 @@ export const GET = route(
     permission: ['tickets', 'read'],
     query: queueQuery,
     examples: [{ summary: 'Open work' }, { summary: 'The latest 20 collected', query: { view: 'history', limit: '20' } }],
+    responses: { 200: z.array(queueRowJson) },
   },
   async ({ actor, query, request }) => {
     const answer = await readQueue(actor, query, request.headers.get('if-none-match'));

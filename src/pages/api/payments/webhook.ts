@@ -4,6 +4,7 @@ import { json, problem } from '@/lib/server/api';
 import { BodyRefused, JSON_BODY_LIMIT, readLimited } from '@/lib/server/body';
 import { route } from '@/lib/server/route';
 import { receiveWebhook } from '@/services/counter/payments';
+import { webhookReceivedJson } from '@/lib/server/answers/site';
 
 export const prerender = false;
 
@@ -14,6 +15,7 @@ export const POST = route(
     description: 'Called by the payment service, not by clients: no example, since only a body signed with the webhook secret is accepted.',
     permission: 'public',
     rawBody: { type: 'application/json' },
+    responses: { 200: webhookReceivedJson },
   },
   async ({ request }) => {
     let payload: string;

@@ -5,6 +5,7 @@ import { demand, route } from '@/lib/server/route';
 import type { Actor } from '@/lib/server/api';
 import type { Permission } from '@/lib/shared/roles';
 import { deletePreset, presetScope, settingsIssues, updatePreset } from '@/services/presets';
+import { presetViewJson, presetDeletedJson } from '@/lib/server/answers/people';
 
 export const prerender = false;
 
@@ -29,6 +30,7 @@ export const PATCH = route(
     permission: CHANGERS,
     body: presetUpdateInput,
     examples: [{ summary: 'A new name', body: { name: 'Deep cuff' } }],
+    responses: { 200: presetViewJson },
   },
   async ({ actor, params, body }) => {
     const refused = await mayChange(actor, params.id!);
@@ -40,8 +42,11 @@ export const PATCH = route(
 );
 
 /** Removes it. */
-export const DELETE = route({ summary: 'Removes a preset (house presets: the lead).', permission: CHANGERS }, async ({ actor, params }) => {
-  const refused = await mayChange(actor, params.id!);
-  if (refused) return refused;
-  return deletePreset(actor, params.id!);
-});
+export const DELETE = route(
+  { summary: 'Removes a preset (house presets: the lead).', permission: CHANGERS, responses: { 200: presetDeletedJson } },
+  async ({ actor, params }) => {
+    const refused = await mayChange(actor, params.id!);
+    if (refused) return refused;
+    return deletePreset(actor, params.id!);
+  },
+);

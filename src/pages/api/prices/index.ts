@@ -2,12 +2,17 @@
 import { route } from '@/lib/server/route';
 import { priceListInput } from '@/lib/shared/counter-request';
 import { getPriceList, savePriceList } from '@/services/counter/prices';
+import { priceListJson } from '@/lib/server/answers/counter';
 
 export const prerender = false;
 
 /** The price list with currency, hours and the automatic-notice setting. */
 export const GET = route(
-  { summary: 'The price list with currency, opening hours, address and the automatic ready notice.', permission: ['prices', 'read'] },
+  {
+    summary: 'The price list with currency, opening hours, address and the automatic ready notice.',
+    permission: ['prices', 'read'],
+    responses: { 200: priceListJson },
+  },
   ({ actor }) => getPriceList(actor),
 );
 
@@ -36,6 +41,7 @@ export const PUT = route(
         },
       },
     ],
+    responses: { 200: priceListJson },
   },
   ({ actor, body }) => savePriceList(actor, body),
 );

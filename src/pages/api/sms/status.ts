@@ -6,6 +6,7 @@ import { BodyRefused, JSON_BODY_LIMIT, readLimited } from '@/lib/server/body';
 import { route } from '@/lib/server/route';
 import { signedUrlOf, verifyStatusCallback } from '@/lib/server/sms-service';
 import { recordDeliveryReport } from '@/services/notices';
+import { smsReceivedJson } from '@/lib/server/answers/site';
 
 export const prerender = false;
 
@@ -16,6 +17,7 @@ export const POST = route(
     description: "Called by the SMS service, not by clients: no example, since only a report signed with the service's token is accepted.",
     permission: 'public',
     rawBody: { type: 'application/x-www-form-urlencoded' },
+    responses: { 200: smsReceivedJson },
   },
   async ({ request, context }) => {
     let raw: string;

@@ -2,6 +2,7 @@
 import { route } from '@/lib/server/route';
 import { roleChangeInput } from '@/lib/shared/account-inputs';
 import { changeRole, removeMember } from '@/services/staff';
+import { roleChangedJson, memberRemovedJson } from '@/lib/server/answers/people';
 
 /** Changes the member's role. */
 export const PATCH = route(
@@ -10,11 +11,13 @@ export const PATCH = route(
     permission: ['staff', 'change-role'],
     body: roleChangeInput,
     examples: [{ summary: 'Now a tailor', body: { role: 'tailor' } }],
+    responses: { 200: roleChangedJson },
   },
   ({ actor, params, body, request }) => changeRole(actor, request.headers, params.memberId!, body),
 );
 
 /** Removes the member from the shop. */
-export const DELETE = route({ summary: 'Removes a member from the shop.', permission: ['staff', 'remove'] }, ({ actor, params, request }) =>
-  removeMember(actor, request.headers, params.memberId!),
+export const DELETE = route(
+  { summary: 'Removes a member from the shop.', permission: ['staff', 'remove'], responses: { 200: memberRemovedJson } },
+  ({ actor, params, request }) => removeMember(actor, request.headers, params.memberId!),
 );

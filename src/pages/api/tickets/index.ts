@@ -2,10 +2,17 @@
 import { route, demand } from '@/lib/server/route';
 import { intakeRequest, pricesAtIntake } from '@/lib/shared/bench-requests';
 import { createTicket, listTickets } from '@/services/tickets';
+import { ticketListItemJson } from '@/lib/server/answers/bench';
+import { ticketJson } from '@/db/schema/tickets';
+import { z } from 'zod';
 
 /** Tickets visible to the role (an apprentice sees assigned-to-them and unassigned), newest number first. */
 export const GET = route(
-  { summary: 'The tickets the role may see (an apprentice: theirs and unassigned), newest number first.', permission: ['tickets', 'read'] },
+  {
+    summary: 'The tickets the role may see (an apprentice: theirs and unassigned), newest number first.',
+    permission: ['tickets', 'read'],
+    responses: { 200: z.array(ticketListItemJson) },
+  },
   ({ actor }) => listTickets(actor),
 );
 
@@ -23,6 +30,7 @@ export const POST = route(
         body: { customer: { name: 'Robin Example', phone: '555 0123' }, dueOn: '2027-03-01', garments: [{ description: 'Navy wool trousers' }] },
       },
     ],
+    responses: { 201: ticketJson },
   },
   ({ actor, body }) => {
     if (body.customer) demand(actor, ['customers', 'create'], 'add customers');

@@ -3,10 +3,15 @@ import { problem } from '@/lib/server/api';
 import { route } from '@/lib/server/route';
 import { measurementsRequest } from '@/lib/shared/measurement-request';
 import { fittingOf, readLengths, saveMeasurements } from '@/services/measurements';
+import { fittingJson } from '@/lib/server/answers/bench';
 
 /** Both legs as saved and every change to them, newest first. */
 export const GET = route(
-  { summary: "The garment's fitting: both legs as saved and every change to them, newest first.", permission: ['measurements', 'read'] },
+  {
+    summary: "The garment's fitting: both legs as saved and every change to them, newest first.",
+    permission: ['measurements', 'read'],
+    responses: { 200: fittingJson },
+  },
   ({ actor, params }) => fittingOf(actor, params.id!),
 );
 
@@ -28,6 +33,7 @@ export const PUT = route(
         },
       },
     ],
+    responses: { 200: fittingJson },
   },
   ({ actor, params, body }) => {
     const read = readLengths(body);

@@ -5,6 +5,8 @@ import { BodyRefused, readLimited } from '@/lib/server/body';
 import type { PhotoList } from '@/lib/shared/photo-view';
 import { route } from '@/lib/server/route';
 import { addPhotos, garmentInShop, listPhotos, UploadRefused, type Upload } from '@/services/photos';
+import { photoListJson, photoJson } from '@/lib/server/answers/site';
+import { z } from 'zod';
 
 export const prerender = false;
 
@@ -15,7 +17,7 @@ const FORM_SLACK = 256 * 1024;
 
 /** The garment's photos and the size limit. */
 export const GET = route(
-  { summary: "The garment's fitting photos and the size limit of one.", permission: ['photos', 'read'] },
+  { summary: "The garment's fitting photos and the size limit of one.", permission: ['photos', 'read'], responses: { 200: photoListJson } },
   async ({ actor, params }): Promise<PhotoList> => ({ photos: await listPhotos(actor, params.id!), maxBytes: PHOTO_MAX_BYTES }),
 );
 
@@ -27,6 +29,7 @@ export const POST = route(
     permission: ['photos', 'upload'],
     rawBody: { type: 'multipart/form-data' },
     status: 201,
+    responses: { 201: z.array(photoJson) },
   },
   async ({ actor, params, request }) => {
     // No need to read megabytes for a garment that is not there.

@@ -2,6 +2,7 @@
 import { route } from '@/lib/server/route';
 import { stepBackRequest } from '@/lib/shared/bench-requests';
 import { stepBackGarment } from '@/services/garment-step-back';
+import { garmentJson } from '@/db/schema/tickets';
 
 /** Moves the garment back from the step it was seen at to the one before. */
 export const POST = route(
@@ -10,6 +11,7 @@ export const POST = route(
     permission: ['tickets', 'advance'],
     body: stepBackRequest,
     examples: [{ summary: 'Back from marked to received', body: { from: 'marked' } }],
+    responses: { 200: garmentJson },
   },
   ({ actor, params, body }) => stepBackGarment(actor, params.id!, body.from),
 );

@@ -2,6 +2,7 @@
 import { demand, route } from '@/lib/server/route';
 import { stepRequest } from '@/lib/shared/bench-requests';
 import { moveGarment } from '@/services/garments';
+import { garmentJson } from '@/db/schema/tickets';
 
 /** Moves the garment to the next step. */
 export const POST = route(
@@ -13,6 +14,7 @@ export const POST = route(
     ],
     body: stepRequest,
     examples: [{ summary: 'Marked to cut', body: { to: 'cut' } }],
+    responses: { 200: garmentJson },
   },
   ({ actor, params, body }) => {
     demand(actor, ['tickets', body.to === 'collected' ? 'pickup' : 'advance']);

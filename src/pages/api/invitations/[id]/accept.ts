@@ -3,6 +3,7 @@ import { json, readBody } from '@/lib/server/api';
 import { acceptInviteInput } from '@/lib/shared/account-inputs';
 import { route } from '@/lib/server/route';
 import { acceptInvitation, type Acceptor } from '@/services/invitations';
+import { invitationAcceptedJson } from '@/lib/server/answers/site';
 
 /** Public by design: the invitation id from the e-mail is the proof. */
 export const POST = route(
@@ -12,6 +13,7 @@ export const POST = route(
     permission: 'public',
     rawBody: { type: 'application/json', schema: acceptInviteInput },
     examples: [{ summary: 'A new account for the invitee (signed out)', body: { name: 'Sam Example', password: 'a-long-password' } }],
+    responses: { 200: invitationAcceptedJson },
   },
   async ({ context, params, request }) => {
     const { user } = context.locals;

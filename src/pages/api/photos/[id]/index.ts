@@ -2,6 +2,7 @@
 import { route } from '@/lib/server/route';
 import { servePhoto } from '@/services/serve-photo';
 import { deletePhoto } from '@/services/photos';
+import { photoDeletedJson } from '@/lib/server/answers/site';
 
 export const prerender = false;
 
@@ -12,6 +13,7 @@ export const GET = route(
 );
 
 /** Removes the photo and its thumbnail. */
-export const DELETE = route({ summary: 'Removes the photo and its thumbnail.', permission: ['photos', 'delete'] }, ({ actor, params }) =>
-  deletePhoto(actor, params.id!),
+export const DELETE = route(
+  { summary: 'Removes the photo and its thumbnail.', permission: ['photos', 'delete'], responses: { 200: photoDeletedJson } },
+  ({ actor, params }) => deletePhoto(actor, params.id!),
 );

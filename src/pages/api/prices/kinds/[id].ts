@@ -2,6 +2,7 @@
 import { priceKindPatch } from '@/lib/shared/counter-request';
 import { route } from '@/lib/server/route';
 import { changeKind } from '@/services/counter/price-kinds';
+import { priceKindJson } from '@/lib/server/answers/counter';
 
 export const prerender = false;
 
@@ -12,6 +13,7 @@ export const PATCH = route(
     permission: ['prices', 'update'],
     body: priceKindPatch,
     examples: [{ summary: 'A new price', body: { amountMinor: 1900 } }],
+    responses: { 200: priceKindJson },
   },
   ({ actor, params, body }) => changeKind(actor, params.id!, body),
 );

@@ -2,6 +2,7 @@
 import { priceKindInput } from '@/lib/shared/counter-request';
 import { route } from '@/lib/server/route';
 import { addKind } from '@/services/counter/price-kinds';
+import { priceKindJson } from '@/lib/server/answers/counter';
 
 export const prerender = false;
 
@@ -13,6 +14,7 @@ export const POST = route(
     body: priceKindInput,
     status: 201,
     examples: [{ summary: 'Shorten a lining', body: { name: 'Shorten a lining', amountMinor: 1400, rushApplies: true } }],
+    responses: { 201: priceKindJson },
   },
   ({ actor, body }) => addKind(actor, body),
 );

@@ -2,6 +2,7 @@
 import { route } from '@/lib/server/route';
 import { garmentInput } from '@/lib/shared/bench-requests';
 import { addGarment } from '@/services/garments';
+import { garmentJson } from '@/db/schema/tickets';
 
 /** Adds one garment to the ticket. */
 export const POST = route(
@@ -11,6 +12,7 @@ export const POST = route(
     body: garmentInput,
     status: 201,
     examples: [{ summary: 'A second pair', body: { description: 'Grey flannel trousers' } }],
+    responses: { 201: garmentJson },
   },
   ({ actor, params, body }) => addGarment(actor, params.id!, body),
 );

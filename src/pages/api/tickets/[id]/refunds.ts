@@ -3,6 +3,7 @@
 import { route } from '@/lib/server/route';
 import { refundInput } from '@/lib/shared/counter-request';
 import { settleCredit } from '@/services/counter/refunds';
+import { counterSummaryJson } from '@/lib/server/answers/counter';
 
 export const prerender = false;
 
@@ -14,6 +15,7 @@ export const POST = route(
     body: refundInput,
     status: 201,
     examples: [{ summary: '1.00 back in cash', body: { method: 'cash', amountMinor: 100 } }],
+    responses: { 201: counterSummaryJson },
   },
   ({ actor, params, body }) => settleCredit(actor, params.id!, body),
 );

@@ -2,12 +2,18 @@
 import { route } from '@/lib/server/route';
 import { noticeInput } from '@/lib/shared/counter-request';
 import { listNotices, resendReadyNotice, sendPayLink, sendReadyNotice } from '@/services/notices';
+import { noticeJson } from '@/db/schema/notices';
+import { z } from 'zod';
 
 export const prerender = false;
 
 /** Every notice of the ticket with its state, attempts and last error. */
 export const GET = route(
-  { summary: "The ticket's notices with their delivery state, attempts and last error.", permission: ['tickets', 'read-all'] },
+  {
+    summary: "The ticket's notices with their delivery state, attempts and last error.",
+    permission: ['tickets', 'read-all'],
+    responses: { 200: z.array(noticeJson) },
+  },
   ({ actor, params }) => listNotices(actor, params.id!),
 );
 
@@ -19,6 +25,7 @@ export const POST = route(
     body: noticeInput,
     status: 201,
     examples: [{ summary: 'The ready notice', body: { kind: 'ready' } }],
+    responses: { 201: noticeJson },
   },
   ({ actor, params, body }) => {
     const id = params.id!;

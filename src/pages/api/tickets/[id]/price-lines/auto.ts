@@ -2,6 +2,8 @@
 import { route } from '@/lib/server/route';
 import { autoLinesInput } from '@/lib/shared/counter-request';
 import { priceFromGarments } from '@/services/counter/prices';
+import { priceLineJson } from '@/db/schema/prices';
+import { z } from 'zod';
 
 export const prerender = false;
 
@@ -12,6 +14,7 @@ export const POST = route(
     permission: ['prices', 'adjust'],
     body: autoLinesInput,
     examples: [{ summary: 'No rush', body: { rush: false } }],
+    responses: { 200: z.object({ lines: z.array(priceLineJson), unpriced: z.array(z.string()) }) },
   },
   ({ actor, params, body }) => priceFromGarments(actor, params.id!, body),
 );

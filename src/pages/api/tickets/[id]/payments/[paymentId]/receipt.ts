@@ -1,6 +1,7 @@
 // One payment's receipt as a PDF to print at the counter, and the same receipt e-mailed.
 import { route } from '@/lib/server/route';
 import { emailReceipt, receiptPdf } from '@/services/counter/receipts';
+import { receiptSentJson } from '@/lib/server/answers/counter';
 
 export const prerender = false;
 
@@ -17,6 +18,10 @@ export const GET = route(
 
 /** E-mails the receipt to the ticket's customer (422 when they have no address). */
 export const POST = route(
-  { summary: "E-mails the receipt to the ticket's customer (422 when they have no address).", permission: ['payments', 'take'] },
+  {
+    summary: "E-mails the receipt to the ticket's customer (422 when they have no address).",
+    permission: ['payments', 'take'],
+    responses: { 200: receiptSentJson },
+  },
   ({ actor, params }) => emailReceipt(actor, params.id!, params.paymentId!),
 );

@@ -2,6 +2,7 @@
 import { route } from '@/lib/server/route';
 import { voidLineInput } from '@/lib/shared/counter-request';
 import { voidLine } from '@/services/counter/prices';
+import { priceLineJson } from '@/db/schema/prices';
 
 export const prerender = false;
 
@@ -12,6 +13,7 @@ export const POST = route(
     permission: ['prices', 'adjust'],
     body: voidLineInput,
     examples: [{ summary: 'Entered twice', body: { reason: 'Entered twice by mistake' } }],
+    responses: { 200: priceLineJson },
   },
   ({ actor, params, body }) => voidLine(actor, params.id!, params.lineId!, body),
 );
