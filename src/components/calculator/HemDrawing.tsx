@@ -8,7 +8,9 @@ export function HemDrawing({ plan }: { plan: HemPlan }) {
   const A = plan.hemAllowance.mm;
   const T = Math.min(plan.turnUnder.mm, A);
   const cutMm = Math.max(...plan.lines.map((l) => l.belowMark.mm));
-  const rawMm = plan.lines[0]?.aboveRawEdge?.mm ?? null;
+  // The raw edge below the mark (the finished edge may sit below it: unwashed cloth left long).
+  const edgeMm = plan.lines[0]?.belowMark.mm ?? 0;
+  const rawMm = plan.lines[0]?.aboveRawEdge ? plan.lines[0].aboveRawEdge.mm + edgeMm : null;
   const aboveMm = A + 16;
   const { s, yMark, H, up } = sectionScale(aboveMm, cutMm, rawMm, 360);
   const [xh, xt] = [xL - 2 * G, xL - G];
@@ -27,8 +29,8 @@ export function HemDrawing({ plan }: { plan: HemPlan }) {
       rawMm={rawMm}
       aboveMm={aboveMm - 6}
       bands={[
-        { from: -(aboveMm - 6), to: 0, text: 'leg' },
-        { from: 0, to: Math.min(cutMm, rawMm ?? cutMm), text: 'hem allowance', accent: true },
+        { from: -(aboveMm - 6), to: edgeMm, text: 'leg' },
+        { from: edgeMm, to: Math.min(cutMm, rawMm ?? cutMm), text: 'hem allowance', accent: true },
       ]}
       s={s}
       yMark={yMark}
