@@ -11,6 +11,7 @@ import { planHem } from '@/lib/allowance';
 import type { HemInput } from '@/lib/allowance/types';
 import { buildCutSheet } from '@/lib/server/cut-sheet/build';
 import { guideStrips } from '@/lib/server/cut-sheet/chalk-guide';
+import { legGeometry } from '@/lib/server/cut-sheet/leg-geometry';
 import { sheetContent, type SheetLegGroup } from '@/lib/server/cut-sheet/content';
 import { savedLegOrder, type StoredLeg } from '@/lib/server/fitting/saved-leg';
 import { legHemTaperRequest, legMainRequest } from '@/lib/shared/leg-plan';
@@ -66,6 +67,16 @@ describe('raw denim on a plain hem: the plan is the shrink plan', () => {
       [false, '3 3/8 in', 243],
       [true, '5 1/8 in', 369],
     ]);
+  });
+
+  it('draws the leg ending at the raw edge 6 in below the mark, not 6 in below the lowered edge', () => {
+    const leg = buildCutSheet(SHOP, [savedLegOrder(stored({ ...RAW, available: '6' }), 'in', 8)!]).legs[0]!;
+    if (leg.finish !== 'hem') throw new Error('a plain hem');
+    const g = legGeometry(leg, 200, 400);
+    const [edge, cut] = g.lines.map((l) => l.y) as [number, number];
+    const rawY = g.outline[1]![1];
+    // Raw edge to line 1 over line 1 to line 2: (6 − 3 3/8) / 1 3/4 = 1.5 (plain arithmetic).
+    expect((rawY - edge) / (cut - edge)).toBeCloseTo(1.5, 9);
   });
 
   it('warns NOT ENOUGH CLOTH when the cloth covers the plain cut (1 1/2 in) but not the shrink cut (5 1/8 in)', () => {
