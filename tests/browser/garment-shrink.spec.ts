@@ -66,13 +66,33 @@ describe('unwashed cloth at the fitting', () => {
 
     const shrink = page.getByTestId('shrink-left');
     await shrink.waitFor({ timeout: 10_000 });
+    const saidFirst = (await shrink.textContent()) ?? '';
+    expect(saidFirst).toContain('Raw denim: expected to shrink 10% in length at the first wash (source: from memory');
+    // The box shows from the back pin first (31 1/2 in → 3 1/2 in) until the typed 30 in reaches the plan: wait for it.
+    await expect
+      .poll(() => page.getByTestId('shrink-left-edge').textContent(), { timeout: 10_000 })
+      .toBe('Chalk the finished edge 3 3/8 in below the pin mark.');
     const said = (await shrink.textContent()) ?? '';
-    expect(said).toContain('Raw denim: expected to shrink 10% in length at the first wash (source: from memory');
-    expect(await page.getByTestId('shrink-left-edge').textContent()).toBe('Chalk the finished edge 3 3/8 in below the pin mark.');
     expect(await page.getByTestId('shrink-left-hem').textContent()).toBe('Unwashed hem allowance: 1 3/4 in.');
     expect(await page.getByTestId('shrink-left-cut').textContent()).toBe('Cut 5 1/8 in below the pin mark.');
     expect(said).toContain('wash and dry the trousers as they will be washed before altering, when the customer can');
     expect(said).toContain('A hot wash or the dryer');
+    // One set of lines: the live plan's own chalk lines are the shrink figures (edge 3 3/8 in, cut
+    // 5 1/8 in below the mark), never the plain plan's (edge at the mark, cut 1 1/2 in below it).
+    const rows = page.getByTestId('plan-left').locator('tbody tr');
+    await expect
+      .poll(async () => rows.evaluateAll((trs) => trs.map((tr) => tr.querySelector('td')?.textContent ?? '')), { timeout: 10_000 })
+      .toEqual(['3 3/8 in', '5 1/8 in']);
+    expect(said).toContain('The plan’s chalk lines above are already these');
+    // Cloth for the plain cut (1 1/2 in) but not the shrink cut: the page says so.
+    await field(page, 'Cloth below the mark').fill('4');
+    await page.getByTestId('no-fit').waitFor({ timeout: 10_000 });
+    const noFit = (await page.getByTestId('no-fit').textContent()) ?? '';
+    // 5 1/8 − 4 = 1 1/8 in short (plain arithmetic); the 4 in is said as typed, not less the edge.
+    expect(noFit).toContain('1 1/8 in');
+    expect(noFit).toMatch(/5 1\/8 in/);
+    expect(noFit).toMatch(/4 in/);
+    await field(page, 'Cloth below the mark').fill('');
 
     await page.locator('label', { has: page.getByRole('radio', { name: 'Right leg', exact: true }) }).click();
     await page.getByRole('button', { name: 'Same as the left leg' }).click();
@@ -80,8 +100,11 @@ describe('unwashed cloth at the fitting', () => {
     await page.getByText('Saved both legs.').waitFor();
 
     const text = squash(flatText(pdfFile(await printedSheet(page, () => page.getByRole('button', { name: 'Print cut sheet' }).click()))));
-    expect(text).toContain(squash('Pin mark 31 1/2 in + shrink allowance 3 3/8 in = finished edge chalked at 34 7/8 in.'));
-    expect(text).toContain(squash('Finished edge 34 7/8 in + unwashed hem allowance 1 3/4 in = cut at 36 5/8 in.'));
+    expect(text).toContain(squash('Pin mark 31 1/2 in + shrink allowance 3 3/8 in = finished edge (line 1) chalked at 34 7/8 in.'));
+    expect(text).toContain(squash('Finished edge 34 7/8 in + unwashed hem allowance 1 3/4 in = cut (line 2) at 36 5/8 in, 5 1/8 in below the pin mark.'));
+    // The sheet's plan is the same: a 1 3/4 in hem, cut 5 1/8 in below the pin mark.
+    expect(text).toContain(squash('Plain hem, 1 3/4 in allowance'));
+    expect(text).not.toContain(squash('These lines replace'));
     expect(text).toContain(squash('Caution: a hot wash or the dryer shrinks more than this'));
     // The bench's words reach the island compiled (an uncompiled catalog throws in the page).
     expect(errors).toEqual([]);

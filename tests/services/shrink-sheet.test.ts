@@ -37,8 +37,8 @@ describe('unwashed cloth on a plain hem', () => {
     const text = squash(flatText(pdfFile((await garmentSheet(a.tailor, garment.id, {}, 'https://bench.cuffwright.test')).bytes)));
     // By hand (eighths, the shop's default): 30 × 0.1/0.9 = 3.33 → 3 3/8 up; 31 1/2 + 3 3/8 = 34 7/8;
     // 1 1/2/0.9 = 1.67 → 1 3/4 up; 34 7/8 + 1 3/4 = 36 5/8.
-    expect(text).toContain(squash('Pin mark 31 1/2 in + shrink allowance 3 3/8 in = finished edge chalked at 34 7/8 in.'));
-    expect(text).toContain(squash('Finished edge 34 7/8 in + unwashed hem allowance 1 3/4 in = cut at 36 5/8 in.'));
+    expect(text).toContain(squash('Pin mark 31 1/2 in + shrink allowance 3 3/8 in = finished edge (line 1) chalked at 34 7/8 in.'));
+    expect(text).toContain(squash('Finished edge 34 7/8 in + unwashed hem allowance 1 3/4 in = cut (line 2) at 36 5/8 in, 5 1/8 in below the pin mark.'));
     expect(text).toContain(squash('Raw denim, 10% shrinkage in length expected at the first wash (source: from memory'));
     expect(text).toContain(squash('Caution: a hot wash or the dryer shrinks more than this'));
   });
@@ -50,8 +50,8 @@ describe('unwashed cloth on a plain hem', () => {
     const { garment } = await openTicket(b, { garments: [{ description: 'Jean brut' }] });
     await saveFitting(b.tailor, garment.id, fittingRequest(leg, leg, 'in', 'plain'));
     const text = squash(flatText(pdfFile((await garmentSheet(b.tailor, garment.id, {}, 'https://bench.cuffwright.test')).bytes)));
-    expect(text).toContain(squash('Repère d’épingle 31 1/2 in + réserve de retrait 3 3/8 in = bord fini tracé à 34 7/8 in.'));
-    expect(text).toContain(squash('Bord fini 34 7/8 in + réserve d’ourlet avant lavage 1 3/4 in = coupe à 36 5/8 in.'));
+    expect(text).toContain(squash('Repère d’épingle 31 1/2 in + réserve de retrait 3 3/8 in = bord fini (ligne 1) tracé à 34 7/8 in.'));
+    expect(text).toContain(squash('Bord fini 34 7/8 in + réserve d’ourlet avant lavage 1 3/4 in = coupe (ligne 2) à 36 5/8 in, 5 1/8 in sous le repère.'));
     expect(text).toContain(squash('Attention : un lavage chaud ou le sèche-linge'));
   });
 });

@@ -29,6 +29,7 @@ export function ShrinkPlanView({ leg, values, unit, precision }: { leg: string; 
             <li data-testid={`shrink-${leg}-hem`}>{t('shrink.hem', { hem: note.hem })}</li>
             <li data-testid={`shrink-${leg}-cut`}>{t('shrink.cut', { cut: note.cutBelow })}</li>
           </ul>
+          <p className="text-lg">{t('shrink.inPlan')}</p>
           <p className="text-lg font-semibold">{t('shrink.washFirst')}</p>
           <p className="rounded-sm border-l-4 border-warn bg-warn-soft px-2 py-1 text-base font-semibold text-warn">{t('shrink.caution')}</p>
         </>

@@ -41,7 +41,7 @@ function taperRequest(leg: LegValues, unit: Unit, precision: Precision, letDown:
   if (leg.finish === 'cuff') return legTaperRequest(leg, unit, precision, { letDown });
   // Each side is half a seam's work: in inches it is asked in half steps, so 3/8 at a seam is 3/16
   // each side, never 1/4 rounded to the shop's eighths.
-  const hem = legHemTaperRequest(leg, unit, unit === 'in' ? (Math.min(32, precision * 2) as Precision) : precision, { letDown });
+  const hem = legHemTaperRequest(leg, unit, unit === 'in' ? (Math.min(32, precision * 2) as Precision) : precision, { letDown, planPrecision: precision });
   return hem && { kind: 'hem-taper', ...hem };
 }
 

@@ -1,5 +1,6 @@
 import { useRich, useT } from '@/components/I18n';
 import type { CuffPlan, HemPlan } from '@/lib/allowance/types';
+import { formatLength } from '@/lib/allowance/format-length';
 
 interface Props {
   plan: CuffPlan | HemPlan;
@@ -26,6 +27,15 @@ export function ClothCheck({ plan }: Props) {
     );
   }
   return null;
+}
+
+// The cloth below the mark: above the raw edge plus below the mark at the first line (a hem's edge
+// left below the mark for unwashed cloth is not at the mark).
+function availableText(plan: CuffPlan | HemPlan): string | null {
+  const first = plan.lines[0];
+  if (!first?.aboveRawEdge) return null;
+  if (first.belowMark.mm === 0) return first.aboveRawEdge.text;
+  return formatLength(first.aboveRawEdge.mm + first.belowMark.mm, { unit: plan.unit, precision: plan.precision });
 }
 
 /** The cloth is short: said first, as the headline, then what still fits (the customer's cuff on a shorter third section first), then the figures. */
@@ -61,7 +71,7 @@ export function NoFit({ plan }: Props) {
         {rich('nofit.needs', {
           finish: plan.kind === 'cuff' ? 'cuff' : 'hem',
           required: m(plan.required.text),
-          available: plan.lines[0]?.aboveRawEdge ? m(plan.lines[0].aboveRawEdge.text) : 'none',
+          available: availableText(plan) === null ? 'none' : m(availableText(plan)!),
         })}
       </p>
     </section>

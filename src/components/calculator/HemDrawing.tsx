@@ -8,13 +8,17 @@ export function HemDrawing({ plan }: { plan: HemPlan }) {
   const A = plan.hemAllowance.mm;
   const T = Math.min(plan.turnUnder.mm, A);
   const cutMm = Math.max(...plan.lines.map((l) => l.belowMark.mm));
-  const rawMm = plan.lines[0]?.aboveRawEdge?.mm ?? null;
+  // The raw edge below the mark (the finished edge may sit below it: unwashed cloth left long).
+  const edgeMm = plan.lines[0]?.belowMark.mm ?? 0;
+  const rawMm = plan.lines[0]?.aboveRawEdge ? plan.lines[0].aboveRawEdge.mm + edgeMm : null;
   const aboveMm = A + 16;
   const { s, yMark, H, up } = sectionScale(aboveMm, cutMm, rawMm, 360);
   const [xh, xt] = [xL - 2 * G, xL - G];
-  const yIn = up(A - T);
+  // The fold at the finished edge: at the mark, or below it on unwashed cloth left long.
+  const yEdge = yMark + edgeMm * s;
+  const yIn = yEdge - (A - T) * s;
   const turn = turnUnder(xt, yIn, T * s, 2);
-  const section = [`M${xL},${up(aboveMm - 6)} V${yMark - G}`, `A${G},${G} 0 0 1 ${xh},${yMark - G}`, turn.path].join(' ');
+  const section = [`M${xL},${up(aboveMm - 6)} V${yEdge - G}`, `A${G},${G} 0 0 1 ${xh},${yEdge - G}`, turn.path].join(' ');
   return (
     <FlatAndSection
       id="hem"
@@ -27,8 +31,8 @@ export function HemDrawing({ plan }: { plan: HemPlan }) {
       rawMm={rawMm}
       aboveMm={aboveMm - 6}
       bands={[
-        { from: -(aboveMm - 6), to: 0, text: 'leg' },
-        { from: 0, to: Math.min(cutMm, rawMm ?? cutMm), text: 'hem allowance', accent: true },
+        { from: -(aboveMm - 6), to: edgeMm, text: 'leg' },
+        { from: edgeMm, to: Math.min(cutMm, rawMm ?? cutMm), text: 'hem allowance', accent: true },
       ]}
       s={s}
       yMark={yMark}
@@ -40,10 +44,10 @@ export function HemDrawing({ plan }: { plan: HemPlan }) {
         anchor="start"
         labels={[
           { y: up(aboveMm - 10), to: [xL + 3, up(aboveMm - 10) - 5], text: 'leg, outside' },
-          { y: yMark + 24, to: [xL + 2, yMark - 4], text: 'finished edge', n: [1] },
+          { y: yEdge + 24, to: [xL + 2, yEdge - 4], text: 'finished edge', n: [1] },
         ]}
       />
-      <Labels x={xh - 40} anchor="end" labels={[...turn.labels, { y: (yIn + yMark) / 2 + 14, to: [xh - 3, (yIn + yMark) / 2 + 9], text: 'hem allowance' }]} />
+      <Labels x={xh - 40} anchor="end" labels={[...turn.labels, { y: (yIn + yEdge) / 2 + 14, to: [xh - 3, (yIn + yEdge) / 2 + 9], text: 'hem allowance' }]} />
     </FlatAndSection>
   );
 }

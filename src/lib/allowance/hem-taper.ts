@@ -17,6 +17,8 @@ export interface HemTaperValues {
   tolerance: Exact;
   /** measured flat at the cutting line on a let-down leg, or null to follow the taper down */
   widthAtCut: Exact | null;
+  /** the finished edge below the pin mark, where widthAtEdge was measured (0: at the mark) */
+  edge: Exact;
 }
 
 /** Read a hem taper input field by field (errors carry the field name). */
@@ -31,6 +33,7 @@ export function readHemTaperInput(input: HemTaperInput, r: InputReader): HemTape
     seamAllowance: r.length(input.seamAllowance, 'seamAllowance', 'Seam allowance', { min: 'non-negative' }),
     tolerance: r.length(input.tolerance, 'tolerance', 'Tolerance', { min: 'non-negative' }) ?? defaults.taperTolerance,
     widthAtCut: r.length(input.widthAtCut, 'widthAtCut', 'Width at the cutting line', { min: 'positive' }),
+    edge: r.length(input.edgeBelowMark, 'edgeBelowMark', 'Finished edge below the mark', { min: 'non-negative' }) ?? ZERO,
   };
 }
 
@@ -38,12 +41,19 @@ function slopeOf(v: HemTaperValues): Exact {
   return v.widthAbove.sub(v.widthAtEdge).div(v.heightAbove);
 }
 
+// The leg's width at the finished edge as chalked: measured at the pin mark, followed down the taper
+// to an edge left below it (unwashed cloth).
+function edgeWidthOf(v: HemTaperValues): Exact {
+  return v.edge.isZero() ? v.widthAtEdge : v.widthAtEdge.sub(slopeOf(v).mul(v.edge));
+}
+
 /** Why these widths make no hem plan (no leg at the cut, or none at the hem's top), or null. */
 export function hemTaperShapeError(v: HemTaperValues): AllowanceError | null {
   const rise = slopeOf(v).mul(v.hemAllowance);
+  const edge = edgeWidthOf(v);
   // Measured at the cut (a let-down leg), only the leg the hem lies against must be there.
-  const cutWidth = v.widthAtCut ?? v.widthAtEdge.sub(rise);
-  if (cutWidth.sign() <= 0 || v.widthAtEdge.add(rise).sign() <= 0) {
+  const cutWidth = v.widthAtCut ?? edge.sub(rise);
+  if (cutWidth.sign() <= 0 || edge.sign() <= 0 || edge.add(rise).sign() <= 0) {
     return new AllowanceError('out-of-range', 'Followed down to the cut, this taper gives no leg at all: check the two widths and the height.', 'widthAbove', {
       rule: 'no-leg-at-cut',
     });
@@ -64,9 +74,11 @@ export function checkHemTaper(input: HemTaperInput): TaperPlan {
   const len = lenMaker(r.unit, r.precision);
   const slope = slopeOf(v);
   const H = v.hemAllowance;
+  const E = v.edge;
+  const W = edgeWidthOf(v);
   // On a let-down leg the width at the cut is the one measured there: the old hem may flare below its fold.
-  const cutWidth = v.widthAtCut ?? v.widthAtEdge.sub(slope.mul(H));
-  const change = v.widthAtEdge.add(slope.mul(H)).sub(cutWidth);
+  const cutWidth = v.widthAtCut ?? W.sub(slope.mul(H));
+  const change = W.add(slope.mul(H)).sub(cutWidth);
   const size = change.abs();
   const withinTolerance = size.compare(v.tolerance) <= 0;
   const perSide = change.half();
@@ -84,8 +96,8 @@ export function checkHemTaper(input: HemTaperInput): TaperPlan {
       ...measured,
     };
   };
-  const lines = [line(1, ZERO, v.widthAtEdge, ZERO), line(2, H, cutWidth, change)];
-  const target = v.widthAtEdge.add(slope.mul(H));
+  const lines = [line(1, E, W, ZERO), line(2, E.add(H), cutWidth, change)];
+  const target = W.add(slope.mul(H));
   const warnings: PlanWarning[] = [];
   if (!withinTolerance) {
     const at = len(H).text;

@@ -13,6 +13,8 @@ export interface HemValues {
   turnUnder: Exact;
   available: Exact | null;
   slope: Exact;
+  /** the finished edge below the pin mark (0: at the mark) */
+  edge: Exact;
 }
 
 /** Read a plain hem input field by field (errors carry the field name). */
@@ -25,18 +27,20 @@ export function readHemInput(input: HemInput, r: InputReader): HemValues {
     turnUnder: r.length(input.turnUnder, 'turnUnder', 'Turn-under', { min: 'non-negative' }) ?? defaults.hemTurnUnder,
     available: r.length(input.available, 'available', 'Cloth below the mark', { min: 'non-negative' }),
     slope: r.length(input.slope, 'slope', 'Slope', { min: 'non-negative' }) ?? ZERO,
+    edge: r.length(input.edgeBelowMark, 'edgeBelowMark', 'Finished edge below the mark', { min: 'non-negative' }) ?? ZERO,
   };
 }
 
-/** Plan a plain hem: finished edge and cut at the back (where the pin is) and at the front, the cloth check and warnings. */
+/** Plan a plain hem: finished edge and cut at the back (where the pin is) and at the front, the cloth check and warnings; the edge may sit below the mark (unwashed cloth left long). */
 export function planHem(input: HemInput): HemPlan {
   const v = readHemInput(input, new InputReader(input, false));
   const defaults = exactDefaults(v.unit);
   const len = lenMaker(v.unit, v.precision);
   const A = v.available;
+  const E = v.edge;
   const positions: [HemLine['name'], Exact][] = [
-    ['finished-edge', ZERO],
-    ['cut', v.hemAllowance],
+    ['finished-edge', E],
+    ['cut', E.add(v.hemAllowance)],
   ];
   const lines: HemLine[] = positions.map(([name, below], k) => ({
     n: (k + 1) as HemLine['n'],
@@ -50,25 +54,29 @@ export function planHem(input: HemInput): HemPlan {
   let spare: Len | null = null;
   let shortBy: Len | null = null;
   if (A !== null) {
-    const rest = A.sub(v.hemAllowance);
+    // The cloth must reach the cut: the edge's own drop below the mark first, then the hem.
+    const rest = A.sub(E).sub(v.hemAllowance);
     enough = rest.sign() >= 0;
     if (enough) spare = len(rest);
     else {
       shortBy = len(rest.neg());
       const [a, b] = stepRatio(v.unit, v.precision);
-      const most = stepsToExact(floorExactSteps(A, a, b), v.unit, v.precision);
+      const below = A.sub(E);
+      const most = below.sign() <= 0 ? ZERO : stepsToExact(floorExactSteps(below, a, b), v.unit, v.precision);
       const fits = most.isZero()
         ? 'Face the hem with a strip of other cloth.'
         : `A ${len(most).text} hem is the most that fits; for more, face the hem with a strip of other cloth.`;
+      const lowered = E.isZero() ? '' : ` with its finished edge ${len(E).text} below the mark`;
       warnings.push({
         code: 'not-enough-cloth',
-        message: `Not enough cloth for a ${len(v.hemAllowance).text} hem: there is ${len(A).text} below the mark, short by ${shortBy.text}. ${fits}`,
+        message: `Not enough cloth for a ${len(v.hemAllowance).text} hem${lowered}: there is ${len(A).text} below the mark, short by ${shortBy.text}. ${fits}`,
         values: {
           finish: 'hem',
           allowance: len(v.hemAllowance).text,
           available: len(A).text,
           shortBy: shortBy.text,
           ...(most.isZero() ? {} : { most: len(most).text }),
+          ...(E.isZero() ? {} : { edge: len(E).text }),
         },
       });
     }

@@ -150,6 +150,8 @@ export interface HemInput {
   available?: LengthInput;
   /** how much lower the hem sits at the back than at the front; default 0 */
   slope?: LengthInput;
+  /** how far below the pin mark the finished edge is chalked (a shrink allowance for unwashed cloth); default 0, at the mark */
+  edgeBelowMark?: LengthInput;
 }
 
 /** A plain hem plan. */
@@ -208,6 +210,8 @@ export interface HemTaperInput {
   tolerance?: LengthInput;
   /** on a let-down leg: the width measured flat at the cutting line, used instead of the taper followed down */
   widthAtCut?: LengthInput;
+  /** the finished edge this far below the pin mark (where widthAtEdge was measured), as planHem: the taper followed down to it; default 0 */
+  edgeBelowMark?: LengthInput;
 }
 
 /** The work at one chalk line to keep the cuff-top width straight down. */

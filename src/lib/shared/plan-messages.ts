@@ -23,6 +23,7 @@ export const PLAN_FIELD_NAMES = {
   seamAllowance: 'Seam allowance',
   tolerance: 'Tolerance',
   widthAtCut: 'Width at the cutting line',
+  edgeBelowMark: 'Finished edge below the mark',
 } as const;
 
 /** One length of a plan request, by its key. */
@@ -31,14 +32,15 @@ export type PlanField = keyof typeof PLAN_FIELD_NAMES;
 /** Each kind's lengths in the schema's order (messages come in this order), and those it cannot do without. */
 export const PLAN_FIELDS = {
   cuff: { fields: ['cuffDepth', 'hemSection', 'turnUnder', 'available', 'clothThickness', 'oldCrease', 'slope'], required: ['cuffDepth'] },
-  hem: { fields: ['hemAllowance', 'turnUnder', 'available', 'slope'], required: [] },
+  // edgeBelowMark: the bench's shrink allowance for unwashed cloth (the calculator does not send it).
+  hem: { fields: ['hemAllowance', 'turnUnder', 'available', 'slope', 'edgeBelowMark'], required: [] },
   taper: {
     fields: ['cuffDepth', 'hemSection', 'widthAtEdge', 'widthAbove', 'heightAbove', 'seamAllowance', 'tolerance', 'clothThickness', 'widthAtCut', 'oldCrease'],
     required: ['cuffDepth', 'widthAtEdge', 'widthAbove', 'heightAbove'],
   },
   // A plain hem's taper check (the bench's; the calculator does not send it).
   'hem-taper': {
-    fields: ['hemAllowance', 'widthAtEdge', 'widthAbove', 'heightAbove', 'widthAtCut', 'seamAllowance', 'tolerance'],
+    fields: ['hemAllowance', 'widthAtEdge', 'widthAbove', 'heightAbove', 'widthAtCut', 'seamAllowance', 'tolerance', 'edgeBelowMark'],
     required: ['widthAtEdge', 'widthAbove', 'heightAbove'],
   },
 } as const satisfies Record<string, { fields: readonly PlanField[]; required: readonly PlanField[] }>;

@@ -69,6 +69,8 @@ export const hemRequest = z.object({
   turnUnder: optional(N.turnUnder),
   available: optional(N.available),
   slope: optional(N.slope),
+  // The finished edge left below the pin mark for unwashed cloth (the bench's shrink allowance).
+  edgeBelowMark: optional(N.edgeBelowMark),
 });
 
 /** A taper check: can the cuff-top width be kept straight down to the cut? */
@@ -99,6 +101,7 @@ export const hemTaperRequest = z.object({
   widthAtCut: optional(N.widthAtCut),
   seamAllowance: optional(N.seamAllowance),
   tolerance: optional(N.tolerance),
+  edgeBelowMark: optional(N.edgeBelowMark),
 });
 
 /** The body of POST /api/plan: one plan of one kind. */

@@ -120,6 +120,12 @@ describe('the fitting registry', () => {
         // A field with its own worked note (the shrink lines): there in words, as the note prints its kind.
         if (f.printed === 'note') expect(group.shrink?.join(' '), `${key} (${finish})`).toContain(noteWords(key, value));
         if (f.printed !== 'plan') continue;
+        // Unwashed cloth: the typed hem allowance is read by the shrink lines, and the plan takes
+        // their unwashed hem allowance (one set of lines on the sheet).
+        if (key === 'hemAllowance' && order.finish === 'hem' && order.shrink?.code === 'shrink') {
+          expect(order.input.hemAllowance, `${key} (${finish})`).toBe(order.shrink.hem);
+          continue;
+        }
         const inOrder = [
           // The kept factory hem's join allowance is the engine's seamAllowance (ORIGINAL_HEM_KEYS).
           (order.input as unknown as Record<string, unknown>)[finish === 'original' ? (ORIGINAL_HEM_KEYS[key] ?? key) : key],

@@ -10,6 +10,7 @@ import type { Unit } from '@/lib/allowance/types';
 import { buildCutSheet, type LegOrder } from '@/lib/server/cut-sheet/build';
 import { sheetContent, type SheetLegGroup } from '@/lib/server/cut-sheet/content';
 import { renderCutSheet } from '@/lib/server/cut-sheet/render';
+import { savedLegOrder } from '@/lib/server/fitting/saved-leg';
 import { flatText, layoutText, pdfFile } from './poppler';
 import { SHOP } from './sheets';
 
@@ -229,6 +230,81 @@ describe('every printed plain hem adds up as printed', () => {
           const signed = (text: string, where: string) => steps(text, unit, step) * (where === 'above' ? -1 : 1);
           expect(signed(edge!, edgeWhere!)).toBe(-steps(s!, unit, step));
           expect(signed(cut!, cutWhere!)).toBe(h - steps(s!, unit, step));
+        }
+        expectClothAddsUp(g, unit, step);
+        expectSafeSide(g, unit, step);
+        expect(g.cloth.text).not.toMatch(/Short by 0 (in|cm|mm)/);
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
+
+// Unwashed cloth on a plain or sloped hem, through the saved leg's order (savedLegOrder: the sheet's
+// one way in). Cloth percents: SHRINKAGE_PERCENT (from memory) or the shop's own; rule derived
+// (edge L·p/(1 − p), hem H/(1 − p), docs/KINDS.md).
+const shrinkOrder = fc.record({
+  scale,
+  finish: fc.constantFrom<'plain' | 'slope'>('plain', 'slope'),
+  cloth: fc.constantFrom('raw-denim', 'preshrunk-denim', 'unwashed-cotton', 'other'),
+  percent: fc.integer({ min: 1, max: 150 }).map((k) => String(k / 10)),
+  backPin: length([1280, 2560], [5000, 9000]),
+  lengthToMark: fc.option(length([1280, 2560], [5000, 9000]), { nil: undefined }),
+  hemAllowance: fc.option(length([40, 400], [100, 1000]), { nil: undefined }),
+  slope: fc.option(length([0, 64], [0, 150]), { nil: undefined }),
+  available: fc.option(length([0, 900], [0, 2300]), { nil: undefined }),
+});
+
+type ShrinkOrder = typeof shrinkOrder extends fc.Arbitrary<infer T> ? T : never;
+
+function shrinkLeg(o: ShrinkOrder): LegOrder {
+  const [unit, precision] = o.scale;
+  const texts: Record<string, string | undefined> = {
+    backPin: o.backPin,
+    lengthToMark: o.lengthToMark,
+    hemAllowance: o.hemAllowance,
+    available: o.available,
+    slope: o.finish === 'slope' ? o.slope : undefined,
+    shrinkCloth: o.cloth,
+    shrinkPercent: o.cloth === 'other' ? o.percent : undefined,
+  };
+  const values = Object.fromEntries(Object.entries(texts).flatMap(([k, v]) => (v === undefined ? [] : [[k, { text: v }]])));
+  return savedLegOrder({ leg: 'left', unit, finish: o.finish, values }, unit, precision)!;
+}
+
+describe('every printed plain hem on unwashed cloth adds up as printed, its lines the shrink lines', () => {
+  it('line 1 is the shrink allowance, line 2 that + the unwashed hem (the title’s), the shrink sums hold, the cloth check adds up on the safe side', () => {
+    fc.assert(
+      fc.property(shrinkOrder, (o) => {
+        const g = groupOf(shrinkLeg(o))!;
+        const [unit, precision] = o.scale;
+        const step = stepMm(unit, precision);
+        const h = steps(grab(g.title, new RegExp(`^Plain hem, (${LEN}) allowance$`))![0]!, unit, step);
+        const shrink = (g.shrink ?? []).join(' ');
+        const [pin, allowance, edge] = grab(
+          shrink,
+          new RegExp(`Pin mark (${LEN}) \\+ shrink allowance (${LEN}) = finished edge \\(line 1\\) chalked at (${LEN})\\.`),
+        )!;
+        const [edge2, hem, cut, cutBelow] = grab(
+          shrink,
+          new RegExp(`Finished edge (${LEN}) \\+ unwashed hem allowance (${LEN}) = cut \\(line 2\\) at (${LEN}), (${LEN}) below the pin mark\\.`),
+        )!;
+        const e = steps(allowance!, unit, step);
+        expect(steps(pin!, unit, step) + e).toBe(steps(edge!, unit, step));
+        expect(edge2).toBe(edge);
+        expect(steps(hem!, unit, step)).toBe(h);
+        expect(steps(edge!, unit, step) + h).toBe(steps(cut!, unit, step));
+        // One set of lines: the plan's are the shrink figures.
+        expect(lineSteps(g, unit, step).map((l) => l.below)).toEqual([e, e + h]);
+        expect(steps(cutBelow!, unit, step)).toBe(e + h);
+        if (g.slopeNote) {
+          const [s, fe, feWhere, fc2, fcWhere] = grab(
+            g.slopeNote,
+            new RegExp(`(${LEN}) lower at the back\\. At the front chalk the finished edge (${LEN}) (above|below) and the cutting line (${LEN}) (above|below)`),
+          )!;
+          const signed = (text: string, where: string) => steps(text, unit, step) * (where === 'above' ? -1 : 1);
+          expect(signed(fe!, feWhere!)).toBe(e - steps(s!, unit, step));
+          expect(signed(fc2!, fcWhere!)).toBe(e + h - steps(s!, unit, step));
         }
         expectClothAddsUp(g, unit, step);
         expectSafeSide(g, unit, step);

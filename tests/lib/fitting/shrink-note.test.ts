@@ -87,15 +87,15 @@ describe('the shrink lines on the sheet', () => {
   it('prints the cloth, percent and source, the two sums as printed, and the hot-wash caution', () => {
     const en = lines('en')!;
     expect(en[0]).toContain('Unwashed cloth: Raw denim, 10% shrinkage in length expected at the first wash (source: from memory: raw');
-    expect(en[1]).toBe('Pin mark 31 1/2 in + shrink allowance 3 3/8 in = finished edge chalked at 34 7/8 in.');
-    expect(en[2]).toBe('Finished edge 34 7/8 in + unwashed hem allowance 1 3/4 in = cut at 36 5/8 in.');
+    expect(en[1]).toBe('Pin mark 31 1/2 in + shrink allowance 3 3/8 in = finished edge (line 1) chalked at 34 7/8 in.');
+    expect(en[2]).toBe('Finished edge 34 7/8 in + unwashed hem allowance 1 3/4 in = cut (line 2) at 36 5/8 in, 5 1/8 in below the pin mark.');
     expect(en[3]).toMatch(/hot wash or the dryer/);
   });
 
   it('prints the same figures in French', () => {
     const fr = lines('fr')!;
-    expect(fr[1]).toBe('Repère d’épingle 31 1/2 in + réserve de retrait 3 3/8 in = bord fini tracé à 34 7/8 in.');
-    expect(fr[2]).toBe('Bord fini 34 7/8 in + réserve d’ourlet avant lavage 1 3/4 in = coupe à 36 5/8 in.');
+    expect(fr[1]).toBe('Repère d’épingle 31 1/2 in + réserve de retrait 3 3/8 in = bord fini (ligne 1) tracé à 34 7/8 in.');
+    expect(fr[2]).toBe('Bord fini 34 7/8 in + réserve d’ourlet avant lavage 1 3/4 in = coupe (ligne 2) à 36 5/8 in, 5 1/8 in sous le repère.');
     expect(fr[3]).toMatch(/lavage chaud ou le sèche-linge/);
   });
 });

@@ -52,7 +52,14 @@ describe('engine messages through the catalog', () => {
             if (!(e instanceof Error && e.name === 'AllowanceError')) throw e;
           }
           try {
-            const hem = planHem({ unit, hemAllowance: mm(depth), turnUnder: mm(turn), ...(available ? { available: mm(available) } : {}) });
+            // Half the hems with their finished edge left below the mark (unwashed cloth): its own words.
+            const hem = planHem({
+              unit,
+              hemAllowance: mm(depth),
+              turnUnder: mm(turn),
+              ...(available ? { available: mm(available) } : {}),
+              ...(slope ? { edgeBelowMark: mm(section) } : {}),
+            });
             checkWarnings(hem.warnings, seen);
           } catch (e) {
             if (!(e instanceof Error && e.name === 'AllowanceError')) throw e;

@@ -27,10 +27,10 @@ export type LegOrder =
   | { side: Side; finish: 'hem'; input: HemInput; taper?: TaperWidths; finished?: string; recorded?: RecordedLength[]; waist?: WaistNote; shrink?: ShrinkNote }
   | { side: Side; finish: 'original'; input: OriginalHemInput; taper?: undefined; finished?: string; recorded?: RecordedLength[]; waist?: WaistNote };
 
-// A plain hem's taper check takes the hem's own unit, precision and allowance.
+// A plain hem's taper check takes the hem's own unit, precision, allowance and edge (lowered for unwashed cloth).
 function hemTaperInput(hem: HemInput, widths: TaperWidths) {
-  const { unit, precision, hemAllowance } = hem;
-  return { unit, precision, hemAllowance, ...widths };
+  const { unit, precision, hemAllowance, edgeBelowMark } = hem;
+  return { unit, precision, hemAllowance, ...widths, ...(edgeBelowMark === undefined ? {} : { edgeBelowMark }) };
 }
 
 /** A cuff's taper check input: the cuff's depth, sections and unit with the leg's widths (spelled

@@ -41,7 +41,9 @@ export interface LegGeometry {
 export function legGeometry(leg: CuffLeg | HemLeg, width: number, maxHeight: number, t: Translate = EN): LegGeometry {
   const plan = leg.plan;
   const cut = plan.lines[plan.lines.length - 1]!;
-  const raw = plan.lines[0]?.aboveRawEdge?.mm ?? null;
+  // The raw edge below the mark: the first line's distances both ways (a hem's edge may sit below the mark).
+  const first = plan.lines[0];
+  const raw = first?.aboveRawEdge ? first.aboveRawEdge.mm + first.belowMark.mm : null;
   const above = plan.kind === 'cuff' ? plan.cuffDepth.mm : 25.4;
   // The leg ends at the raw edge when it is known; a cut below it falls off the cloth, as drawn.
   const legEnd = raw ?? cut.belowMark.mm + 12.7;

@@ -8,6 +8,7 @@
 // - the cutting line (what the plan needs): up, so it is never less than the exact need; on a
 //   cuff the third section (inside, out of sight) takes the difference;
 // - the cloth below the mark (has): down, so spare is never more and short never less than exact;
+// - a plain hem's finished edge left below the mark for unwashed cloth: up (never short after the wash);
 // - a seam's work: each side to the nearest half step in inches (1/16 on a sheet to 1/8), the
 //   sheet's step in metric, and the seam twice that.
 import { formatLength, parseLength } from '../../allowance/index';
@@ -164,12 +165,17 @@ function taperOf(leg: CuffLeg | HemLeg, st: StepScale): PrintedPlan['taper'] {
 export function printedPlan(leg: CuffLeg | HemLeg): PrintedPlan {
   const p = leg.plan;
   const st = new StepScale(p.unit, p.precision);
-  const available = p.lines[0]?.aboveRawEdge?.mm ?? null;
+  // The cloth below the mark: the first line's distances both ways (a hem's edge may sit below the mark).
+  const first = p.lines[0];
+  const available = first?.aboveRawEdge ? first.aboveRawEdge.mm + first.belowMark.mm : null;
   const turnUnder = st.len(near(st.of(p.turnUnder.mm)));
   if (p.kind === 'hem') {
     const h = up(st.of(p.hemAllowance.mm));
     const s = near(st.of(p.slope.mm));
-    const c = cloth(st, h, available, p.enough);
+    // The finished edge below the pin mark (unwashed cloth left long; else 0): already whole steps
+    // as the shrink lines print it, so edge + hem is the cut the lines and the strip show.
+    const e = up(st.of(p.lines[0]?.belowMark.mm ?? 0));
+    const c = cloth(st, e + h, available, p.enough);
     return {
       unit: p.unit,
       precision: p.precision,
@@ -178,7 +184,7 @@ export function printedPlan(leg: CuffLeg | HemLeg): PrintedPlan {
       thirdSection: null,
       slope: st.len(s),
       turnUnder,
-      lines: linesOf(st, ['finished-edge', 'cut'], [0, h], c.has, [-s, h - s]),
+      lines: linesOf(st, ['finished-edge', 'cut'], [e, e + h], c.has, [e - s, e + h - s]),
       cloth: c,
       alternatives: null,
       taper: null,

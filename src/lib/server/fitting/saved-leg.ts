@@ -8,7 +8,7 @@ import { typedForUnit } from '../../shared/length-reading';
 import { FIELD_KEYS, fieldsOf, isLengthField, type FieldKey, type Finish } from '../../shared/fitting/kinds';
 import { originalHemLengths, planLengths, plansOf, type LegTexts } from '../../shared/fitting/plan-lengths';
 import { waistNoteOf } from './waist-note';
-import { shrinkNoteOf } from '../../shared/fitting/shrink-note';
+import { shrinkNoteOf, withShrink } from '../../shared/fitting/shrink-note';
 import type { WaistOrder } from '../../shared/waist-order';
 
 /** A leg as saved (the API's SavedLeg, or a measurements row): its side, unit, finish and lengths as typed. */
@@ -67,7 +67,9 @@ export function savedLegOrder(saved: StoredLeg, unit: Unit, precision: Precision
     : {};
   if (plans.main === 'cuff')
     return { side: saved.leg, finish: 'cuff', input: { ...scale, ...main } as CuffInput, ...finished, ...recorded, ...waist, ...taper };
-  return { side: saved.leg, finish: 'hem', input: { ...scale, ...main } as HemInput, ...finished, ...recorded, ...waist, ...shrink, ...taper };
+  // Unwashed cloth: the plan's own edge and hem allowance are the shrink figures (the taper check takes them from it).
+  const hem = withShrink(main, texts, saved.finish, unit, precision);
+  return { side: saved.leg, finish: 'hem', input: { ...scale, ...hem } as HemInput, ...finished, ...recorded, ...waist, ...shrink, ...taper };
 }
 
 /** True when a saved leg has what its plan needs (a cuff its depth): what the sheet asks of a fitting. */

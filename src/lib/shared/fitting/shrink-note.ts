@@ -47,3 +47,20 @@ export function shrinkNoteOf(texts: LegTexts, finish: Finish, unit: Unit, precis
     cutBelow: say(allowance + hem),
   };
 }
+
+/** A hem plan's lengths as typed, with unwashed cloth on a plain or sloped hem: the plan's own finished edge and cut. */
+export type HemLengths = Partial<Record<string, string>>;
+
+/**
+ * A hem plan's lengths with unwashed cloth chosen: the finished edge chalked the printed shrink
+ * allowance below the pin mark and the unwashed hem allowance in place of the typed one, both in
+ * whole display steps exactly as the shrink lines print them, so the plan's lines, its cloth check,
+ * its taper check and the sheet's strip are the shrink figures and there is one set of lines. The
+ * garment page's live plan (leg-plan.ts) and the sheet (saved-leg.ts) both go through here.
+ * Unchanged with no unwashed cloth, no shrinkage expected, or while the engine refuses the input.
+ */
+export function withShrink<L extends HemLengths>(lengths: L, texts: LegTexts, finish: Finish, unit: Unit, precision: Precision): L {
+  const note = shrinkNoteOf(texts, finish, unit, precision);
+  if (!note || note.code === 'none') return lengths;
+  return { ...lengths, edgeBelowMark: note.allowance, hemAllowance: note.hem };
+}

@@ -5,7 +5,7 @@ import type { CreaseLanding, PlanWarning } from '@/lib/allowance/types';
 import type { MessageKey, Translate } from './format';
 
 // Values a variant of a message may lack: an ICU select needs every one it reads.
-const ABSENT = { most: 'none', measured: 'none', fits: 'none' } as const;
+const ABSENT = { most: 'none', measured: 'none', fits: 'none', edge: 'none' } as const;
 
 // The cuff that does not fit: what still fits, each alternative in its own words, joined.
 function stillFits(t: Translate, v: Record<string, string>): string {
