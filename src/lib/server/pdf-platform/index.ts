@@ -5,7 +5,10 @@
 // upgrade) skips it with one log line and PDFs come out at the packages' own speed.
 // PDF_SPEED_PATCHES=off installs none. Read from process.env, not astro:env: this runs in the
 // sheet worker thread and in benchmarks too (the schema in astro.config.mjs still checks it).
+import { keepCmaps } from './cmap-memo';
 import { fastDimensions } from './fast-dimensions';
+import { fastRuns } from './fast-runs';
+import { loadLoadedAtOnce } from './font-load';
 import { memoiseFace, type MemoFace } from './face-memo';
 import { undoAll } from './override';
 import { cacheFontObjects } from './pdf-font-cache';
@@ -14,6 +17,7 @@ import { transformFast } from './pdf-transform';
 import { memoiseShaping, type Shaper } from './shaping-memo';
 import { keepSubsets, type Seed } from './subset-memo';
 import { splitFromFirstLayout } from './split-laid-out';
+import { keepStyles } from './style-memo';
 import { keepTextLayouts } from './text-layout-memo';
 import { installedVersion } from './versions';
 
@@ -43,10 +47,14 @@ export interface PdfPatch {
 export const PDF_PATCHES: readonly PdfPatch[] = [
   { name: 'text-layout-memo', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: keepTextLayouts },
   { name: 'fast-dimensions', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: fastDimensions },
+  { name: 'style-memo', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: keepStyles },
   { name: 'split-laid-out', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: splitFromFirstLayout },
+  { name: 'fast-runs', pkg: '@react-pdf/render', via: '@react-pdf/renderer', writtenFor: '4.7.0', install: fastRuns },
+  { name: 'font-load', pkg: '@react-pdf/font', via: '@react-pdf/renderer', writtenFor: '4.1.2', install: loadLoadedAtOnce },
   { name: 'pdf-streams', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: compressStreamsFast },
   { name: 'pdf-transform', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: transformFast },
   { name: 'pdf-font-cache', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: cacheFontObjects },
+  { name: 'cmap-memo', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', face: (face) => keepCmaps(face) },
   { name: 'subset-memo', pkg: 'fontkit', via: '@react-pdf/font', writtenFor: '2.0.4', face: (face, o) => keepSubsets(face, o.seed) },
   { name: 'shaping-memo', pkg: 'fontkit', via: '@react-pdf/font', writtenFor: '2.0.4', face: (face) => memoiseShaping(face) },
   { name: 'face-memo', pkg: 'fontkit', via: '@react-pdf/font', writtenFor: '2.0.4', face: (face) => memoiseFace(face) },

@@ -1,0 +1,49 @@
+// Named PDF speed patches off (A) and on (B), alternated in blocks in one process (A B, then B A),
+// on the benchmark's sheets (two tapered legs, one in four overfull; USUAL=1: no overfull ones):
+// wall and CPU per sheet, each sheet one sample, after eight untimed sheets per switch (a switch
+// empties the memos). For judging one patch on a busy machine, where separate runs differ more
+// than the patch does.
+// NEW=style-memo,fast-runs NODE_ENV=production node_modules/.bin/vite-node benchmarks/cut-sheet-patches-ab.ts
+import { loadavg } from 'node:os';
+import { performance } from 'node:perf_hooks';
+import { taperedPairSheet } from './cut-sheet-sample';
+import { renderCutSheet } from '../src/lib/server/cut-sheet/render';
+import { installPdfPlatform, PDF_PATCHES, uninstallPdfPlatform } from '../src/lib/server/pdf-platform/index';
+
+const names = (process.env.NEW ?? '').split(',').filter(Boolean);
+const unknown = names.filter((n) => !PDF_PATCHES.some((p) => p.name === n));
+if (names.length === 0 || unknown.length > 0) throw new Error(`NEW must name patches of PDF_PATCHES (unknown: ${unknown.join(', ') || 'none given'})`);
+const usual = process.env.USUAL === '1';
+const sheet = (i: number) => taperedPairSheet(usual && i % 4 === 3 ? i + 1 : i);
+const BLOCKS = Number(process.env.BLOCKS ?? 16);
+const PER_BLOCK = 16;
+
+const use = (on: boolean) => {
+  uninstallPdfPlatform();
+  installPdfPlatform({ patches: on ? PDF_PATCHES : PDF_PATCHES.filter((p) => !names.includes(p.name)) });
+};
+for (let i = 0; i < 40; i++) await renderCutSheet(sheet(i));
+const res = { A: { cpu: [] as number[], wall: [] as number[] }, B: { cpu: [] as number[], wall: [] as number[] } };
+const load0 = loadavg()[0]!;
+for (let r = 0; r < BLOCKS; r++) {
+  for (const mode of r % 2 ? (['B', 'A'] as const) : (['A', 'B'] as const)) {
+    use(mode === 'B');
+    for (let i = 0; i < 8; i++) await renderCutSheet(sheet(1000 + r * 97 + i));
+    const list = Array.from({ length: PER_BLOCK }, (_, i) => sheet(100 + r * PER_BLOCK + i));
+    for (const d of list) {
+      const c = process.cpuUsage();
+      const t = performance.now();
+      await renderCutSheet(d);
+      res[mode].wall.push(performance.now() - t);
+      const u = process.cpuUsage(c);
+      res[mode].cpu.push((u.user + u.system) / 1000);
+    }
+  }
+}
+use(true);
+const at = (a: number[], f: number) => [...a].sort((x, y) => x - y)[Math.floor(a.length * f)]!.toFixed(2);
+for (const m of ['A', 'B'] as const)
+  console.log(
+    `${m} (${m === 'A' ? 'without' : 'with'}): wall p25 ${at(res[m].wall, 0.25)} median ${at(res[m].wall, 0.5)} ms; CPU p25 ${at(res[m].cpu, 0.25)} median ${at(res[m].cpu, 0.5)} ms`,
+  );
+console.log(`${BLOCKS} blocks of ${PER_BLOCK} sheets each way; load ${load0.toFixed(1)}→${loadavg()[0]!.toFixed(1)}; patches: ${names.join(', ')}`);
