@@ -182,7 +182,8 @@ describe('the skirt sheet as a PDF', () => {
       'New hem line: 1 in below the marker',
       'Centre front',
       'Centre back',
-      'Ease 3 1/8 in of fullness', // the engine's note: π × 1 in to the nearest 1/8 (docs/KINDS.md)
+      'Table: from the edge; strip: from the new line.',
+      'The present hem hangs unevenly: 1/2 in between', // 2 3/4 − 2 1/4 (the engine's note)
       'Iron and steam burn',
       'Shears, blades, seam rippers',
       'Needles and pins',
@@ -191,6 +192,9 @@ describe('the skirt sheet as a PDF', () => {
       'CUT',
     ])
       expect(text).toContain(words);
+    // The fullness is printed once, as the figure that adds up (3 1/4 in up), not again to the nearest 1/8.
+    expect(text).not.toContain('Ease 3 1/8 in');
+    expect(text).not.toContain('measured down from the pin mark');
   });
 
   it('lays the 1:1 strip from the new hem line: the hem top at its depth, the cut at the cloth kept', () => {

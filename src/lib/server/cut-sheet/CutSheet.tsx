@@ -39,7 +39,7 @@ function Header({ c, link }: { c: SheetContent; link?: string }) {
       <View style={{ flexGrow: 1, flexShrink: 1, flexBasis: 0 }}>
         <Text style={s.kicker}>
           {c.t('sheet.kicker')}
-          <Text style={{ fontWeight: 400, letterSpacing: 0 }}>{`      ${c.t('sheet.kickerNote', { unitNote: c.unitNote })}`}</Text>
+          <Text style={{ fontWeight: 400, letterSpacing: 0 }}>{`      ${c.kind ? c.kind.kickerNote : c.t('sheet.kickerNote', { unitNote: c.unitNote })}`}</Text>
         </Text>
         <Text style={s.title}>{c.title}</Text>
         {c.meta.length > 0 && <Text style={s.meta}>{c.meta.join('   ·   ')}</Text>}

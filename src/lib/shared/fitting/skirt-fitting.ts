@@ -19,8 +19,9 @@ import { choiceOf, type KindAdapter, type KindField, type KindTexts } from './ki
 /** How the flare is given: the engine's four ways (FlaredHemInput.flare). */
 export const SKIRT_FLARES = ['straight', 'measured', 'circle', 'angle'] as const;
 
-const pointFields = (prefix: 'pin' | 'cloth'): KindField[] =>
-  HEM_POINTS.map((p) => ({ key: `${prefix}-${p}`, type: 'length' as const, group: 'points', place: p }));
+// Each place's pins and cloth side by side, place after place round the hem.
+const pointFields = (): KindField[] =>
+  HEM_POINTS.flatMap((p) => (['pin', 'cloth'] as const).map((prefix) => ({ key: `${prefix}-${p}`, type: 'length' as const, group: 'points', place: p })));
 
 /** The skirt's fields, in the form's order. */
 export const SKIRT_FIELDS: readonly KindField[] = [
@@ -36,8 +37,7 @@ export const SKIRT_FIELDS: readonly KindField[] = [
   { key: 'hemFromFloor', type: 'length', group: 'level' },
   { key: 'shoesAtMarking', type: 'length', group: 'level' },
   { key: 'shoesToWear', type: 'length', group: 'level' },
-  ...pointFields('pin'),
-  ...pointFields('cloth'),
+  ...pointFields(),
 ];
 
 /** The skirt's plan: the hem's finish, and (when the marker's line was taken) the new hem line round the hem. */

@@ -17,6 +17,8 @@ export interface KindSheetContent {
   guide: GuideGroup[];
   /** the guide column's third note: where to lay the strip */
   lay: string;
+  /** the header's note beside the unit: what the distances are measured from */
+  kickerNote: string;
 }
 
 /** A kind's sheet: its words from the data, and the block that draws them. */

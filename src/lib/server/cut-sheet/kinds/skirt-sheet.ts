@@ -32,8 +32,12 @@ export interface SkirtBlockWords {
   notes: string[];
 }
 
+// The fullness and the line below the pins are printed as figures that add up (to the sheet's
+// step, rounded the safe way); the engine's notes saying them again to the nearest step would differ.
+const PRINTED_AS_FIGURES = new Set(['ease-fullness', 'chalk-from-pins']);
+
 const notesIn = (t: Translate, prefix: 'skirtNote' | 'levelNote', notes: readonly Note[]) =>
-  notes.map((n) => t(`${prefix}.${n.code}` as MessageKey, noteValues(t, n.values)));
+  notes.filter((n) => !PRINTED_AS_FIGURES.has(n.code)).map((n) => t(`${prefix}.${n.code}` as MessageKey, noteValues(t, n.values)));
 
 /** The words and figures of a skirt's sheet, in the sheet's unit and language. */
 export function skirtSheetContent(data: SkirtSheetData, t: Translate, unit: Unit, precision: Precision): KindSheetContent {
@@ -91,5 +95,6 @@ export function skirtSheetContent(data: SkirtSheetData, t: Translate, unit: Unit
     steps,
     guide: [{ label: t('skirtSheet.strip'), stripLabel: t('skirtSheet.strip'), slopeNote: null, lines, top: t('skirtSheet.guide.top') }],
     lay: t('skirtSheet.guide.lay'),
+    kickerNote: t('skirtSheet.kickerNote', { unitNote: t('sheet.unitNote', { unit: t(`sheet.unit.${unit}`), unitKind: unit, precision }) }),
   };
 }
