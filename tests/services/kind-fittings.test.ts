@@ -118,6 +118,17 @@ describe('a skirt fitting', () => {
     expect(await db.select().from(kindFittings).where(eq(kindFittings.garmentId, garment.id))).toEqual([]);
   });
 
+  it('is never filled from a trouser fitting "same as last time": the intake is refused whole', async () => {
+    const { ticket, garment } = await openTicket(a, { customer: { name: 'Bram Ellery' }, garments: [{ description: 'Grey flannel trousers' }] });
+    await saveFitting(a.tailor, garment.id, fittingRequest({ backPin: '31', cuffDepth: '1 1/2', available: '5' }));
+    const { createTicket } = await import('@/services/tickets');
+    const err = await createTicket(a.counter, {
+      customerId: ticket.customerId,
+      garments: [{ description: 'Wool skirt', kind: 'skirt', fittingFrom: garment.id }],
+    }).catch((e) => e);
+    expect(status(err)).toBe(422);
+  });
+
   it('refuses fields of no kind, a kind it does not know, and a skirt fitting on trousers', async () => {
     expect(kindFittingRequest.safeParse({ kind: 'skirt', unit: 'in', fields: { backPin: '30' } }).success).toBe(false);
     expect(kindFittingRequest.safeParse({ kind: 'kilt', unit: 'in', fields: {} }).success).toBe(false);
