@@ -2,12 +2,14 @@
 import { route } from '@/lib/server/route';
 import { kindFittingRequest } from '@/lib/shared/kind-fitting-request';
 import { kindFittingOf, saveKindFitting } from '@/services/kind-fittings';
+import { kindFittingJson } from '@/lib/server/answers/bench';
 
 /** The whole-garment fitting as saved (empty fields until the first save). */
 export const GET = route(
   {
     summary: 'The fitting of a garment fitted once (a skirt or dress), as saved: lengths as typed with their mm, and choices.',
     permission: ['measurements', 'read'],
+    responses: { 200: kindFittingJson },
   },
   ({ actor, params }) => kindFittingOf(actor, params.id!),
 );
@@ -38,6 +40,7 @@ export const PUT = route(
         },
       },
     ],
+    responses: { 200: kindFittingJson },
   },
   ({ actor, params, body }) => saveKindFitting(actor, params.id!, body),
 );
