@@ -24,6 +24,10 @@ import { filterQueue, type QueueFilter } from '@/lib/shared/queue-filter';
 import { ServiceError } from './errors';
 import { garmentVisibleTo, listQueue, visibleGarment } from './garments';
 import { legsOf, legsOfGarments } from './measurements';
+import { kindFittingsOf } from './kind-fittings';
+import { buildKindSheet } from '@/lib/server/cut-sheet/kinds/build-kind';
+import { GARMENT_KIND_LABELS, isLegKind, kindOf } from '@/lib/shared/fitting/garment-kinds';
+import type { KindFittingView } from '@/lib/shared/kind-fitting-request';
 import { benchSettings } from './shop-settings';
 
 /** How a sheet is printed; anything left out comes from the shop's bench settings. */
@@ -102,7 +106,7 @@ export function fittingOrders(saved: SavedLeg[], unit: Unit, precision: Precisio
 type HeaderNames = Pick<QueueRow, 'ticketNumber' | 'customerName' | 'assigneeName'>;
 
 function headerOf(actor: Actor, g: Garment, names: HeaderNames, baseUrl: string, pageSize: PageSize, language: Language): SheetHeader {
-  const what = g.description ?? 'Trousers';
+  const what = g.description ?? GARMENT_KIND_LABELS[kindOf(g.kind)];
   return {
     shop: actor.shopName,
     ticket: ticketLabel(names.ticketNumber, actor.shopName),
@@ -128,10 +132,29 @@ async function namesOf(g: Garment): Promise<HeaderNames> {
   return row!;
 }
 
-function sheetOf(actor: Actor, g: Garment, saved: SavedLeg[], names: HeaderNames, baseUrl: string, scale: Awaited<ReturnType<typeof scaleOf>>): CutSheetData {
-  const orders = fittingOrders(saved, scale.unit, scale.precision, { letDown: letDownFirst(g.existingFinish), waistOrder: scale.waistOrder });
+/** A garment's saved fitting: its legs (trousers) or its whole-garment fitting (a skirt). */
+interface SavedFitting {
+  legs: SavedLeg[];
+  whole: KindFittingView | null;
+}
+
+function sheetOf(actor: Actor, g: Garment, saved: SavedFitting, names: HeaderNames, baseUrl: string, scale: Awaited<ReturnType<typeof scaleOf>>): CutSheetData {
+  const header = headerOf(actor, g, names, baseUrl, scale.pageSize, scale.language);
+  // Each kind's sheet builder, by the garment's kind: trousers per leg, another kind from its adapter.
+  if (!isLegKind(kindOf(g.kind))) {
+    if (!saved.whole) throw new ServiceError(422, NO_FITTING);
+    try {
+      const data = buildKindSheet(header, saved.whole, scale.unit, scale.precision);
+      if (!data) throw new ServiceError(422, 'Cut sheets for this kind of garment are not made yet.');
+      return data;
+    } catch (e) {
+      if (isAllowanceError(e)) throw new ServiceError(422, `The fitting cannot be planned: ${e.message}`);
+      throw e;
+    }
+  }
+  const orders = fittingOrders(saved.legs, scale.unit, scale.precision, { letDown: letDownFirst(g.existingFinish), waistOrder: scale.waistOrder });
   try {
-    return buildCutSheet(headerOf(actor, g, names, baseUrl, scale.pageSize, scale.language), orders);
+    return buildCutSheet(header, orders);
   } catch (e) {
     // A fitting saved before the engine refused it (widths that give no leg, say) is the
     // fitting's fault, not the server's: 422 with the engine's words.
@@ -152,7 +175,8 @@ export async function garmentSheet(actor: Actor, garmentId: string, opts: SheetO
   const g = await visibleGarment(actor, garmentId);
   const scale = await scaleOf(actor.shopId, opts);
   const names = await namesOf(g);
-  const data = sheetOf(actor, g, await legsOf(g.id), names, baseUrl, scale);
+  const whole = isLegKind(kindOf(g.kind)) ? null : ((await kindFittingsOf(actor.shopId, [g.id])).get(g.id) ?? null);
+  const data = sheetOf(actor, g, { legs: whole ? [] : await legsOf(g.id), whole }, names, baseUrl, scale);
   const { bytes, by } = await renderInPool(data);
   return { bytes, by, filename: `${slug(ticketLabel(names.ticketNumber, actor.shopName))}-${slug(g.description ?? 'trousers')}.pdf` };
 }
@@ -173,13 +197,15 @@ export async function queueSheetsStream(actor: Actor, filter: QueueFilter, today
     ).map((g) => [g.id, g]),
   );
   const fittings = await legsOfGarments(ids);
+  // A batch may mix kinds: the whole-garment fittings are read in one query beside the legs.
+  const wholes = await kindFittingsOf(actor.shopId, ids);
   const sheets: CutSheetData[] = [];
   const skipped: string[] = [];
   for (const row of rows) {
     const g = full.get(row.id);
     if (!g) continue;
     try {
-      sheets.push(sheetOf(actor, g, fittings.get(g.id) ?? [], row, baseUrl, scale));
+      sheets.push(sheetOf(actor, g, { legs: fittings.get(g.id) ?? [], whole: wholes.get(g.id) ?? null }, row, baseUrl, scale));
     } catch (e) {
       if (!(e instanceof ServiceError)) throw e;
       skipped.push(

@@ -10,11 +10,12 @@ const DEMO_PRICES: Record<PriceKey, number> = {
   'cuff-from-hem': 2400,
   'cuff-remake': 2950,
   'original-hem': 2200,
+  'skirt-hem': 2600,
   'taper-let-out': 1100,
   rush: 900,
 };
 
-// Invented kinds of work beside the six lines (flat euro cents); pressing alone is never rushed.
+// Invented kinds of work beside the list's lines (flat euro cents); pressing alone is never rushed.
 const DEMO_KINDS = [
   { name: 'Take in waist', amountMinor: 1800, rushApplies: true },
   { name: 'Replace zip', amountMinor: 1400, rushApplies: true },

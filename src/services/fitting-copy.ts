@@ -9,6 +9,7 @@ import { LEG_LENGTHS, type SavedLength } from '@/lib/shared/measurement-request'
 import { ticketLabel } from '@/lib/shared/ticket-number';
 import { auditMany } from './audit';
 import { ServiceError } from './errors';
+import { isLegKind, kindOf } from '@/lib/shared/fitting/garment-kinds';
 import { getCustomer } from './customers';
 
 /** How many earlier fittings are offered per garment kind, newest first. */
@@ -66,6 +67,21 @@ export async function previousFittings(actor: Actor, customerId: string): Promis
 export async function copyFittings(tx: Db, actor: Actor, customerId: string | null, pairs: { to: string; from: string }[]): Promise<void> {
   if (pairs.length === 0) return;
   if (!customerId) throw new ServiceError(422, 'Choose the customer before copying a fitting from last time.');
+  // The copy is of trouser legs: a garment fitted once (a skirt) has no legs to take them.
+  const targets = await tx
+    .select({ kind: garments.kind })
+    .from(garments)
+    .where(
+      and(
+        inArray(
+          garments.id,
+          pairs.map((p) => p.to),
+        ),
+        eq(garments.shopId, actor.shopId),
+      ),
+    );
+  if (targets.some((g) => !isLegKind(kindOf(g.kind))))
+    throw new ServiceError(422, 'Only trousers take a fitting from last time: fit this garment on its own page.');
   const sources = [...new Set(pairs.map((p) => p.from))];
   const rows = await tx
     .select({ m: measurements, number: tickets.number, presetName: presets.name })

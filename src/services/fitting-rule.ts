@@ -2,7 +2,7 @@
 // garment moves on (moveGarmentsLocked: one garment, a whole ticket) under the ticket's lock.
 import { and, eq, inArray } from 'drizzle-orm';
 import type { Db } from '@/db';
-import { garments, measurements, shopSettings } from '@/db/schema';
+import { garments, kindFittings, measurements, shopSettings } from '@/db/schema';
 import { DEFAULT_FITTING_RULE, noFittingRefusal, passesMarked, type FittingRule } from '@/lib/shared/fitting-rule';
 import { stepLabel, type GarmentStep } from '@/lib/shared/garment-steps';
 import { canBePlanned } from '@/lib/server/fitting/saved-leg';
@@ -31,7 +31,11 @@ export async function fittedGarments(q: Db, garmentIds: string[]): Promise<Set<s
     .where(inArray(measurements.garmentId, garmentIds));
   const byGarment = new Map<string, SavedForPlan[]>();
   for (const { garmentId, ...leg } of rows) byGarment.set(garmentId, [...(byGarment.get(garmentId) ?? []), leg as SavedForPlan]);
-  return new Set([...byGarment].filter(([, legs]) => isFitted(legs)).map(([id]) => id));
+  const fitted = new Set([...byGarment].filter(([, legs]) => isFitted(legs)).map(([id]) => id));
+  // A garment fitted once (a skirt): its saved fitting passed its engine on save, so it can be cut by.
+  const whole = await q.select({ garmentId: kindFittings.garmentId }).from(kindFittings).where(inArray(kindFittings.garmentId, garmentIds));
+  for (const { garmentId } of whole) fitted.add(garmentId);
+  return fitted;
 }
 
 /** The shop's rule, read through `q` (inside a lock, its transaction). */

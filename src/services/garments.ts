@@ -12,6 +12,7 @@ import { nextStep, stepLabel, type GarmentStep } from '@/lib/shared/garment-step
 import { can } from '@/lib/shared/roles';
 import { audit } from './audit';
 import { ServiceError } from './errors';
+import { kindOf } from '@/lib/shared/fitting/garment-kinds';
 import { assertReadyToHandOver } from './counter/hand-over';
 import { moveGarmentsLocked, tellMoved, writeTicketStatus } from './garment-moves';
 import { isUuid, lockTicket, withTicketLock } from './ticket-core';
@@ -90,6 +91,7 @@ export async function listQueue(actor: Actor): Promise<QueueRow[]> {
     .select({
       id: garments.id,
       description: garments.description,
+      kind: garments.kind,
       status: garments.status,
       dueOn: garments.dueOn,
       assigneeId: garments.assigneeId,
@@ -107,7 +109,12 @@ export async function listQueue(actor: Actor): Promise<QueueRow[]> {
     .orderBy(asc(garments.dueOn), asc(tickets.number), asc(garments.position));
   // An apprentice works the garment, never calls its owner (as customerCard): no phone for them.
   const phones = can(actor.role, ['customers', 'read']);
-  return rows.map(({ customerPhone, ...r }) => ({ ...r, description: r.description ?? 'Trousers', ...(phones ? { customerPhone } : {}) }));
+  return rows.map(({ customerPhone, ...r }) => ({
+    ...r,
+    kind: kindOf(r.kind),
+    description: r.description ?? 'Trousers',
+    ...(phones ? { customerPhone } : {}),
+  }));
 }
 
 /** The garment when the actor may see it, otherwise 404. */
@@ -133,6 +140,7 @@ export async function summaries(rows: Garment[]): Promise<TicketGarment[]> {
   return rows.map((g) => ({
     id: g.id,
     description: g.description ?? 'Trousers',
+    kind: kindOf(g.kind),
     status: g.status,
     dueOn: g.dueOn,
     assigneeId: g.assigneeId,
@@ -186,6 +194,7 @@ export async function addGarment(
         shopId: actor.shopId,
         ticketId,
         description: input.description,
+        kind: input.kind ?? 'trousers',
         dueOn: input.dueOn ?? t.dueOn,
         assigneeId: input.assigneeId,
         existingFinish: input.existingFinish,

@@ -13,6 +13,7 @@ import { whoOptions } from '@/lib/shared/queue-filter';
 import { encodeCursor, type QueueCursor } from '@/lib/shared/queue-request';
 import { can } from '@/lib/shared/roles';
 import { garmentVisibleTo, staffOf } from './garments';
+import { kindOf } from '@/lib/shared/fitting/garment-kinds';
 
 /** What the queue API is asked: open work, or a page of history after a cursor. */
 export interface QueueQuery {
@@ -61,6 +62,7 @@ function rowsOf(where: SQL | undefined, phones: boolean) {
     .select({
       id: garments.id,
       description: garments.description,
+      kind: garments.kind,
       status: garments.status,
       dueOn: garments.dueOn,
       assigneeId: garments.assigneeId,
@@ -77,8 +79,8 @@ function rowsOf(where: SQL | undefined, phones: boolean) {
     .where(where);
 }
 
-type Read = Omit<QueueRow, 'description'> & { description: string | null; createdAt: string; position: number };
-const shown = ({ createdAt: _, position: __, ...r }: Read): QueueRow => ({ ...r, description: r.description ?? 'Trousers' });
+type Read = Omit<QueueRow, 'description' | 'kind'> & { description: string | null; kind: string; createdAt: string; position: number };
+const shown = ({ createdAt: _, position: __, ...r }: Read): QueueRow => ({ ...r, kind: kindOf(r.kind), description: r.description ?? 'Trousers' });
 
 // The open list's order, as listQueue's SQL had it: due day (none last), ticket, place on the ticket, id.
 function byDue(a: Read, b: Read): number {

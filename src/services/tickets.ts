@@ -116,20 +116,21 @@ export async function createTicket(actor: Actor, typed: IntakeInput): Promise<Ti
             ticketId: t!.id,
             position,
             description: g.description,
+            kind: g.kind ?? 'trousers',
             dueOn: g.dueOn ?? input.dueOn,
             assigneeId: g.assigneeId,
             existingFinish: g.existingFinish,
             finish: g.finish,
           })),
         )
-        .returning({ id: garments.id, position: garments.position, existingFinish: garments.existingFinish });
+        .returning({ id: garments.id, position: garments.position, existingFinish: garments.existingFinish, kind: garments.kind });
       // "Same as last time": only an existing customer has a last time.
       const copies = input.garments.flatMap((g, i) => (g.fittingFrom ? [{ to: made.find((m) => m.position === i)!.id, from: g.fittingFrom }] : []));
       await copyFittings(tx, actor, input.customerId, copies);
       // Priced at intake when asked (a finish, kinds of work, rush), in the same transaction.
       const taken = input.garments.map((g, i) => {
         const m = made.find((x) => x.position === i)!;
-        return { id: m.id, label: g.description, finish: g.finish, existingFinish: m.existingFinish, work: g.work };
+        return { id: m.id, label: g.description, kind: m.kind, finish: g.finish, existingFinish: m.existingFinish, work: g.work };
       });
       await priceAtIntake(tx, actor, t!.id, taken, input.rush);
       // Work given to someone at intake gives them the ticket.

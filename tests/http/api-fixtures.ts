@@ -23,6 +23,9 @@ export function fixtures(lead: string) {
     return id;
   };
   const garmentOf = async (ticketId: string): Promise<string> => (await ok('GET', `/api/tickets/${ticketId}`)).garments[0].id;
+  /** A skirt, fitted once (kind_fittings), on a new ticket. */
+  const skirt = async (): Promise<string> =>
+    garmentOf((await ok('POST', '/api/tickets', { customerId: await customer(), garments: [{ description: 'Example skirt', kind: 'skirt' }] })).id);
   const fitted = async (): Promise<string> => {
     const id = await garmentOf(await moved(await ticket(), 'marked'));
     await ok('PUT', `/api/garments/${id}/measurements`, {
@@ -58,6 +61,8 @@ export function fixtures(lead: string) {
     'PATCH /api/garments/{id}': async () => ({ id: await garmentOf(await ticket()) }),
     'GET /api/garments/{id}/measurements': async () => ({ id: await garmentOf(await ticket()) }),
     'PUT /api/garments/{id}/measurements': async () => ({ id: await garmentOf(await ticket()) }),
+    'GET /api/garments/{id}/kind-fitting': async () => ({ id: await skirt() }),
+    'PUT /api/garments/{id}/kind-fitting': async () => ({ id: await skirt() }),
     'GET /api/garments/{id}/photos': async () => ({ id: await garmentOf(await ticket()) }),
     'GET /api/garments/{id}/sheet': async () => ({ id: await fitted() }),
     // The examples move a garment from "marked": cut on, or back to received.

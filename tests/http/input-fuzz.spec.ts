@@ -64,6 +64,7 @@ const SEEDS: Record<string, unknown> = {
       right: { finish: 'cuff', backPin: '31', cuffDepth: '1 1/2', available: '5' },
     },
   },
+  'PUT garments/[id]/kind-fitting': { kind: 'skirt', unit: 'in', fields: { hemRound: '40', flare: 'circle', circleFraction: '1/4', hemDepth: '1' } },
   'POST garments/[id]/step': { to: 'marked' },
   'POST garments/[id]/step-back': { from: 'marked' },
   'POST invitations/[id]/accept': { name: 'Fuzz Invitee', password: 'a-long-password' },

@@ -70,6 +70,19 @@ async function freshGarment(): Promise<string> {
   return t.body.garments[0].id;
 }
 
+/** A fresh unassigned skirt of shop A (fitted once: kind_fittings). */
+async function freshSkirt(): Promise<string> {
+  const t = await call('POST', '/api/tickets', {
+    cookie: cookies.lead,
+    body: { note: 'matrix fixture', garments: [{ description: 'Matrix skirt', kind: 'skirt' }] },
+  });
+  expect(t.status).toBe(201);
+  return (await call('GET', `/api/tickets/${t.body.id}`, { cookie: cookies.lead })).body.garments[0].id;
+}
+
+// A straight skirt 40 in round, a 2 in hem (invented figures).
+const SKIRT_FITTING = { kind: 'skirt', unit: 'in', fields: { hemRound: '40', hemDepth: '2' } };
+
 const FITTING = {
   unit: 'in',
   legs: {
@@ -435,6 +448,18 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       },
     },
   },
+  'garments/[id]/kind-fitting': {
+    GET: {
+      request: async () => ({ path: `/api/garments/${await freshSkirt()}/kind-fitting` }),
+      expect: signedIn(200, { counter: 403, other: 404 }),
+      check: (a) => expect(a.body).toMatchObject({ kind: 'skirt', values: {}, unit: null }),
+    },
+    PUT: {
+      request: async () => ({ path: `/api/garments/${await freshSkirt()}/kind-fitting`, body: SKIRT_FITTING }),
+      expect: signedIn(403, { lead: 200, tailor: 200, other: 404 }),
+      check: (a) => expect(a.body.values.hemRound).toEqual({ text: '40', mm: 1016 }),
+    },
+  },
   'garments/[id]/sheet': {
     GET: {
       request: async () => ({ path: `/api/garments/${await fittedGarment()}/sheet?unit=mm` }),
@@ -482,7 +507,16 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       request: () => ({ path: '/api/prices' }),
       expect: signedIn(200, { apprentice: 403 }),
       check: (a, actor) => {
-        expect(a.body.items).toHaveLength(6);
+        // Six trouser lines and the skirt's hem.
+        expect(a.body.items.map((i: { key: string }) => i.key)).toEqual([
+          'plain-hem',
+          'cuff-from-hem',
+          'cuff-remake',
+          'original-hem',
+          'skirt-hem',
+          'taper-let-out',
+          'rush',
+        ]);
         if (actor === 'other') expect(a.body.items.every((i: { amountMinor: number }) => i.amountMinor === 0)).toBe(true);
         else expect(a.body.items.find((i: { key: string }) => i.key === 'cuff-from-hem').amountMinor).toBe(2400);
       },

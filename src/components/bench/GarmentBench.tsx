@@ -12,6 +12,9 @@ import { GARMENT_STEPS } from '@/lib/shared/garment-steps';
 import { ticketLabel } from '@/lib/shared/ticket-number';
 import { DueBadge } from './DueBadge';
 import { FittingForm } from './FittingForm';
+import { KindFittingForm } from './kinds/KindFittingForm';
+import { isLegKind, kindOf } from '@/lib/shared/fitting/garment-kinds';
+import type { KindFittingView } from '@/lib/shared/kind-fitting-request';
 import { GarmentEdit } from './GarmentEdit';
 import { FittingHistory } from './FittingHistory';
 import { FittingReadOnly } from './FittingReadOnly';
@@ -49,10 +52,17 @@ function Bench({
   print = null,
 }: Props) {
   const garment = useQuery({ queryKey: ['garment', garmentId], queryFn: () => fetchJson<GarmentDetail>(`/api/garments/${garmentId}`) });
+  // Trousers are fitted per leg; any other kind once, through its own route (the registry says which).
+  const kind = garment.data ? kindOf(garment.data.kind) : null;
   const fitting = useQuery({
     queryKey: ['fitting', garmentId],
     queryFn: () => fetchJson<FittingView>(`/api/garments/${garmentId}/measurements`),
-    enabled: canReadFitting,
+    enabled: canReadFitting && kind === 'trousers',
+  });
+  const whole = useQuery({
+    queryKey: ['kind-fitting', garmentId],
+    queryFn: () => fetchJson<KindFittingView>(`/api/garments/${garmentId}/kind-fitting`),
+    enabled: canReadFitting && kind !== null && !isLegKind(kind),
   });
   const settings = useBenchSettings();
   const label = useStepLabel();
@@ -90,11 +100,21 @@ function Bench({
           </dd>
           <dt className="font-semibold">{t('garment.givenTo')}</dt>
           <dd>{g.assigneeName ?? t('garment.nobody')}</dd>
-          <dt className="font-semibold">{t('garment.existingFinish')}</dt>
-          <dd>
-            {t(`existing.${g.existingFinish}`)}
-            {g.existingFinish === 'cuff' && t('garment.letDownFirst')}
-          </dd>
+          {kind !== 'trousers' && (
+            <>
+              <dt className="font-semibold">{t('garment.kind')}</dt>
+              <dd data-testid="garment-kind">{t(`kind.${kind ?? 'trousers'}`)}</dd>
+            </>
+          )}
+          {kind === 'trousers' && (
+            <>
+              <dt className="font-semibold">{t('garment.existingFinish')}</dt>
+              <dd>
+                {t(`existing.${g.existingFinish}`)}
+                {g.existingFinish === 'cuff' && t('garment.letDownFirst')}
+              </dd>
+            </>
+          )}
           {g.customer?.notes && (
             <>
               <dt className="font-semibold">{t('garment.customerNotes')}</dt>
@@ -136,6 +156,29 @@ function Bench({
       </header>
 
       {canReadFitting &&
+        kind !== null &&
+        !isLegKind(kind) &&
+        (whole.isPending ? (
+          <p className="text-lg text-muted">{t('garment.loadingFitting')}</p>
+        ) : whole.isError ? (
+          <p role="alert" className="font-semibold text-cut">
+            {whole.error.message}
+          </p>
+        ) : (
+          <KindFittingForm
+            garmentId={g.id}
+            kind={kind}
+            fitting={whole.data}
+            unit={unit}
+            precision={precision}
+            canEdit={canEditFitting}
+            onDirtyChange={setFittingDirty}
+            saveRef={saveFitting}
+          />
+        ))}
+
+      {canReadFitting &&
+        kind === 'trousers' &&
         (fitting.isPending ? (
           <p className="text-lg text-muted">{t('garment.loadingFitting')}</p>
         ) : fitting.isError ? (

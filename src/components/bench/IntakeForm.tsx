@@ -11,6 +11,7 @@ import { ContactByField } from '@/components/customers/ContactByField';
 import { SameAsLastTime, usePreviousFittings } from '@/components/customers/SameAsLastTime';
 import { ApiError, fetchJson } from '@/lib/shared/fetch-json';
 import { DEFAULT_EXISTING_FINISH } from '@/lib/shared/existing-finish';
+import { GARMENT_KIND_LABELS, OFFERED_KINDS, type OfferedKind } from '@/lib/shared/fitting/garment-kinds';
 import { ExistingFinishSelect } from './ExistingFinishSelect';
 import { useAssignees } from './use-bench';
 import { usePriceList } from '@/components/counter/counter-api';
@@ -22,6 +23,7 @@ const SELECT = 'min-h-12 rounded border-2 border-rule bg-card px-3 py-2 text-lg 
 // A pair comes in with a plain hem unless the counter says otherwise (DEFAULT_EXISTING_FINISH).
 const NEW_GARMENT = {
   description: '',
+  kind: 'trousers' as OfferedKind,
   dueOn: '',
   assigneeId: '',
   existingFinish: DEFAULT_EXISTING_FINISH,
@@ -112,7 +114,7 @@ function IntakeScreen({ canPrice = false }: { canPrice?: boolean }) {
       <fieldset className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4">
         <legend className="px-1 text-xl font-extrabold">Garments</legend>
         {garments.fields.map((f, i) => (
-          <div key={f.id} className="grid items-end gap-3 border-b border-rule pb-3 sm:grid-cols-2 lg:grid-cols-[minmax(0,2fr)_repeat(3,minmax(0,1fr))_auto]">
+          <div key={f.id} className="grid items-end gap-3 border-b border-rule pb-3 sm:grid-cols-2 lg:grid-cols-[minmax(0,2fr)_repeat(4,minmax(0,1fr))_auto]">
             <Field
               label={`Garment ${i + 1}`}
               registration={register(`garments.${i}.description`)}
@@ -120,6 +122,26 @@ function IntakeScreen({ canPrice = false }: { canPrice?: boolean }) {
               id={`g-${i}-description`}
               placeholder="e.g. Navy wool trousers, cuffs"
             />
+            <div className="flex flex-col gap-1">
+              <label htmlFor={`g-${i}-kind`} className="font-semibold">
+                Kind
+              </label>
+              <select
+                id={`g-${i}-kind`}
+                {...register(`garments.${i}.kind`, {
+                  // A finish is a trouser leg's: another kind is priced by its own line.
+                  onChange: (ev) => ev.target.value !== 'trousers' && setValue(`garments.${i}.finish`, ''),
+                })}
+                className={SELECT}
+              >
+                {OFFERED_KINDS.map((k) => (
+                  <option key={k} value={k}>
+                    {GARMENT_KIND_LABELS[k]}
+                  </option>
+                ))}
+              </select>
+              {e.garments?.[i]?.kind && <FormMessage kind="error">{e.garments[i].kind.message}</FormMessage>}
+            </div>
             <ExistingFinishSelect
               id={`g-${i}-existing`}
               registration={register(`garments.${i}.existingFinish`)}
@@ -155,6 +177,7 @@ function IntakeScreen({ canPrice = false }: { canPrice?: boolean }) {
             {canPrice && (
               <GarmentPricing
                 index={i}
+                kind={typed[i]?.kind ?? 'trousers'}
                 list={list}
                 finish={typed[i]?.finish ?? ''}
                 work={(typed[i]?.work ?? []).filter((w): w is string => !!w)}
@@ -163,7 +186,7 @@ function IntakeScreen({ canPrice = false }: { canPrice?: boolean }) {
               />
             )}
             {offers.length > 0 && (
-              <div className="sm:col-span-2 lg:col-span-5">
+              <div className="sm:col-span-2 lg:col-span-6">
                 <SameAsLastTime
                   garmentLabel={`garment ${i + 1}`}
                   fittings={offers}

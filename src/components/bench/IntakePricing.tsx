@@ -5,6 +5,7 @@ import type { AsJson } from '@/lib/shared/as-json';
 import type { PriceListView } from '@/lib/shared/counter-views';
 import { INTAKE_FINISHES } from '@/lib/shared/bench-requests';
 import { KINDS, PART_LABELS } from '@/lib/shared/fitting/kinds';
+import { workKeyOf } from '@/lib/shared/fitting/garment-kinds';
 import type { ExistingFinish } from '@/lib/shared/existing-finish';
 import { formatMoney } from '@/lib/pricing/money';
 import { isRushableWork, priceTicket, sumMinor, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
@@ -15,6 +16,8 @@ const SELECT = 'min-h-12 rounded border-2 border-rule bg-card px-3 py-2 text-lg 
 /** What the estimate needs of one garment as typed. */
 export interface TypedGarment {
   description?: string;
+  /** garments.kind: a skirt is priced by its own line, not by a finish */
+  kind?: string;
   existingFinish?: ExistingFinish;
   finish?: string | null;
   work?: (string | undefined)[];
@@ -23,6 +26,7 @@ export interface TypedGarment {
 /** The "Finish asked for" choice and the kinds of work of one garment. */
 export function GarmentPricing({
   index,
+  kind = 'trousers',
   list,
   finish,
   work,
@@ -30,6 +34,8 @@ export function GarmentPricing({
   onWork,
 }: {
   index: number;
+  /** garments.kind: another kind than trousers has its own line instead of a finish */
+  kind?: string;
   list: List | undefined;
   finish: string;
   work: string[];
@@ -38,21 +44,30 @@ export function GarmentPricing({
 }) {
   const kinds = list?.kinds.filter((k) => !k.retiredAt) ?? [];
   const id = `g-${index}-finish`;
+  const workKey = workKeyOf(kind);
+  const own = workKey ? list?.items.find((i) => i.key === workKey) : undefined;
   return (
-    <div className="flex flex-col gap-3 sm:col-span-2 lg:col-span-5">
-      <div className="flex flex-col gap-1">
-        <label htmlFor={id} className="font-semibold">
-          Finish asked for (priced as an estimate)
-        </label>
-        <select id={id} value={finish} onChange={(e) => onFinish(e.target.value)} className={`${SELECT} sm:max-w-sm`}>
-          <option value="">Not priced until the fitting</option>
-          {INTAKE_FINISHES.map((f) => (
-            <option key={f} value={f}>
-              {f === 'original' ? KINDS.trousers.finishes.original.label : PART_LABELS[f]}
-            </option>
-          ))}
-        </select>
-      </div>
+    <div className="flex flex-col gap-3 sm:col-span-2 lg:col-span-6">
+      {workKey ? (
+        <p className="text-lg" data-testid={`g-${index}-kind-line`}>
+          Priced by its own line: <strong>{own?.label ?? workKey}</strong>
+          {own && list ? ` (${formatMoney(own.amountMinor, list.currency)})` : ''}
+        </p>
+      ) : (
+        <div className="flex flex-col gap-1">
+          <label htmlFor={id} className="font-semibold">
+            Finish asked for (priced as an estimate)
+          </label>
+          <select id={id} value={finish} onChange={(e) => onFinish(e.target.value)} className={`${SELECT} sm:max-w-sm`}>
+            <option value="">Not priced until the fitting</option>
+            {INTAKE_FINISHES.map((f) => (
+              <option key={f} value={f}>
+                {f === 'original' ? KINDS.trousers.finishes.original.label : PART_LABELS[f]}
+              </option>
+            ))}
+          </select>
+        </div>
+      )}
       {kinds.length > 0 && (
         <fieldset className="flex flex-wrap gap-x-5 gap-y-1">
           <legend className="font-semibold">Work from the price list: garment {index + 1}</legend>
@@ -83,6 +98,8 @@ export function intakeEstimate(
   const prices = Object.fromEntries(list.items.map((i) => [i.key, { label: i.label, amountMinor: i.amountMinor }])) as PriceList;
   const facts = garments.flatMap((g, i): GarmentFacts[] => {
     const finish = g.finish;
+    const workKey = workKeyOf(g.kind);
+    if (workKey) return [{ garmentId: String(i), label: g.description ?? '', finish: null, taperLetOut: false, oldCuff: false, workKey }];
     return finish === 'hem' || finish === 'cuff' || finish === 'original'
       ? [{ garmentId: String(i), label: g.description ?? '', finish, taperLetOut: false, oldCuff: g.existingFinish === 'cuff' }]
       : [];

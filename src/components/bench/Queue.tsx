@@ -140,9 +140,13 @@ function QueueTable({ userId, shopName, canAdvance, canPickup, canPrint = false,
       col.accessor('description', {
         header: t('queue.col.garment'),
         cell: (c) => (
-          <a href={`/garments/${c.row.original.id}`} className="inline-flex min-h-11 items-center font-semibold text-accent underline">
-            {c.getValue()}
-          </a>
+          <>
+            <a href={`/garments/${c.row.original.id}`} className="inline-flex min-h-11 items-center font-semibold text-accent underline">
+              {c.getValue()}
+            </a>
+            {/* Trousers are the usual work; any other kind is named beside the garment. */}
+            {c.row.original.kind && c.row.original.kind !== 'trousers' && <span className="ml-2 text-muted">{t(`kind.${c.row.original.kind}`)}</span>}
+          </>
         ),
       }),
       col.accessor((r) => GARMENT_STEPS.indexOf(r.status), {

@@ -18,6 +18,7 @@ import { NoFittingAsk } from './NoFittingAsk';
 import { StepButton } from './StepButton';
 import { useFittingGate } from './use-fitting-gate';
 import { useStepLabel } from './use-bench';
+import { GARMENT_KIND_LABELS, OFFERED_KINDS } from '@/lib/shared/fitting/garment-kinds';
 
 interface Props {
   ticketId: string;
@@ -36,7 +37,7 @@ function AddGarment({ ticketId, customerId }: { ticketId: string; customerId: st
   const client = useQueryClient();
   const { register, handleSubmit, reset, setError, setValue, control, formState } = useForm<GarmentForm, unknown, z.output<typeof garmentInput>>({
     resolver,
-    defaultValues: { description: '', dueOn: '', fittingFrom: '' },
+    defaultValues: { description: '', kind: 'trousers', dueOn: '', fittingFrom: '' },
   });
   const fittingFrom = useWatch({ control, name: 'fittingFrom' });
   const previous = usePreviousFittings(customerId);
@@ -65,7 +66,7 @@ function AddGarment({ ticketId, customerId }: { ticketId: string; customerId: st
       className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4"
     >
       <h2 className="text-xl font-extrabold">Add a garment</h2>
-      <div className="grid gap-3 sm:grid-cols-[2fr_1fr]">
+      <div className="grid gap-3 sm:grid-cols-[2fr_1fr_1fr]">
         <Field
           label="Garment"
           registration={register('description')}
@@ -74,6 +75,18 @@ function AddGarment({ ticketId, customerId }: { ticketId: string; customerId: st
           placeholder="e.g. Brown tweed trousers"
         />
         <Field label="Due" type="date" registration={register('dueOn')} error={formState.errors.dueOn} id="add-due" />
+        <div className="flex flex-col gap-1">
+          <label htmlFor="add-kind" className="font-semibold">
+            Kind
+          </label>
+          <select id="add-kind" {...register('kind')} className="min-h-12 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent">
+            {OFFERED_KINDS.map((k) => (
+              <option key={k} value={k}>
+                {GARMENT_KIND_LABELS[k]}
+              </option>
+            ))}
+          </select>
+        </div>
       </div>
       {add.error && <FormMessage kind="error">{add.error.message}</FormMessage>}
       <SameAsLastTime garmentLabel="the new garment" fittings={previous.data ?? []} chosen={fittingFrom} onChoose={(id) => setValue('fittingFrom', id ?? '')} />
@@ -185,6 +198,7 @@ function Ticket({ ticketId, shopName, canAdvance, canPickup, canAddGarment, canE
                   {g.description}
                 </a>
                 <p className="text-lg">
+                  {g.kind && g.kind !== 'trousers' && <span data-testid="garment-kind">{GARMENT_KIND_LABELS[g.kind]} · </span>}
                   <strong>{label(g.status)}</strong> · <DueBadge dueOn={g.dueOn} /> · {g.assigneeName ?? 'Unassigned'}
                 </p>
               </div>

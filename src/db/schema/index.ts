@@ -11,3 +11,4 @@ export * from './notices';
 export * from './limits';
 export * from './sent-mail';
 export * from './list-versions';
+export * from './kind-fittings';

@@ -14,6 +14,8 @@ export interface GarmentFacts {
   taperLetOut: boolean;
   /** the trousers came in with a cuff that is let down and made again */
   oldCuff: boolean;
+  /** a garment fitted once, not per leg (a skirt): its kind's line, from its adapter (fitting/kind-adapters.ts) */
+  workKey?: PriceKey | null;
 }
 
 /** One entry of the shop's price list. */
@@ -40,8 +42,10 @@ export interface PricedTicket {
   unpriced: string[];
 }
 
-/** The finish's line: a plain hem, a cuff made from a plain hem, an old cuff re-made, or jeans kept on their factory hem. */
+/** The garment's line: its kind's own (a skirt's hem), else a plain hem, a cuff made from a plain hem, an old cuff re-made, or jeans kept on their factory hem. */
 export function finishKey(g: GarmentFacts): PriceKey | null {
+  // Another kind of garment than trousers has its own line; the leg's finishes are not asked of it.
+  if (g.workKey) return g.workKey;
   if (g.finish === 'original') return 'original-hem';
   if (g.finish === 'hem') return 'plain-hem';
   if (g.finish === 'cuff') return g.oldCuff ? 'cuff-remake' : 'cuff-from-hem';
@@ -68,7 +72,7 @@ export function priceTicket(garments: readonly GarmentFacts[], list: PriceList, 
     const of = g.label ? ` — ${g.label}` : '';
     lines.push(line(g.garmentId, key, of));
     // A let-out only matters under a cuff: a plain hem has no cuff top to keep straight.
-    if (g.taperLetOut && g.finish === 'cuff') lines.push(line(g.garmentId, 'taper-let-out', of));
+    if (g.taperLetOut && g.finish === 'cuff' && !g.workKey) lines.push(line(g.garmentId, 'taper-let-out', of));
   }
   if (opts.rush && (lines.length > 0 || opts.otherWork)) lines.push(line(null, 'rush'));
   return { lines, unpriced };

@@ -7,6 +7,7 @@ import { EXISTING_FINISHES } from './existing-finish';
 import { FITTING_RULES } from './fitting-rule';
 import { WAIST_ORDERS } from './waist-order';
 import { GARMENT_STEPS } from './garment-steps';
+import { OFFERED_KINDS } from './fitting/garment-kinds';
 
 const blankToNull = (v: string | null | undefined) => (v === '' || v === undefined ? null : v);
 
@@ -25,6 +26,8 @@ export const assignee = z
 /** One garment as intake or the ticket page types it. */
 export const garmentInput = z.object({
   description: text().trim().min(1, 'Describe the garment, e.g. "Navy wool trousers".').max(200, 'Keep it under 200 characters.'),
+  /** what kind of garment (fitting/garment-kinds.ts); left out, trousers. Fixed once taken in: its fitting's fields depend on it */
+  kind: z.enum(OFFERED_KINDS, { error: 'Choose trousers, or a skirt or dress.' }).optional(),
   dueOn: dueDate,
   assigneeId: assignee,
   /** how the bottoms came in; left out, intake takes a plain hem (DEFAULT_EXISTING_FINISH) */
@@ -37,7 +40,7 @@ export const garmentInput = z.object({
 });
 
 /** A change to a garment's description, due date, assignee or existing finish. */
-export const garmentPatch = garmentInput.omit({ fittingFrom: true }).partial();
+export const garmentPatch = garmentInput.omit({ fittingFrom: true, kind: true }).partial();
 
 /** Optional text: blank or missing is null. */
 const optionalText = (max: number, message: string) =>
@@ -55,19 +58,25 @@ import type { Part } from './fitting/kinds';
 export const INTAKE_FINISHES = ['hem', 'cuff', 'original'] as const satisfies readonly (Part | 'original')[];
 
 /** A garment as intake takes it in, priced there when the counter picks its finish or kinds of work. */
-export const intakeGarment = garmentInput.extend({
-  /** the finish the customer asks for, priced from the list as an estimate until the fitting's */
-  finish: z
-    .union([z.enum(INTAKE_FINISHES, { error: 'Choose a plain hem, a cuff or the original hem kept.' }), z.literal(''), z.null()])
-    .optional()
-    .transform((v): (typeof INTAKE_FINISHES)[number] | null => (v === 'hem' || v === 'cuff' || v === 'original' ? v : null)),
-  /** the lead's kinds of work picked for this garment ("Replace zip"), each once */
-  work: z
-    .array(z.uuid('Choose kinds of work from the price list.'))
-    .max(12, 'Pick at most 12 kinds of work per garment.')
-    .refine((ids) => new Set(ids).size === ids.length, 'Pick each kind of work once per garment.')
-    .default([]),
-});
+export const intakeGarment = garmentInput
+  .extend({
+    /** the finish the customer asks for, priced from the list as an estimate until the fitting's */
+    finish: z
+      .union([z.enum(INTAKE_FINISHES, { error: 'Choose a plain hem, a cuff or the original hem kept.' }), z.literal(''), z.null()])
+      .optional()
+      .transform((v): (typeof INTAKE_FINISHES)[number] | null => (v === 'hem' || v === 'cuff' || v === 'original' ? v : null)),
+    /** the lead's kinds of work picked for this garment ("Replace zip"), each once */
+    work: z
+      .array(z.uuid('Choose kinds of work from the price list.'))
+      .max(12, 'Pick at most 12 kinds of work per garment.')
+      .refine((ids) => new Set(ids).size === ids.length, 'Pick each kind of work once per garment.')
+      .default([]),
+  })
+  .refine((g) => !g.kind || g.kind === 'trousers' || g.finish === null, {
+    // A hem, cuff or kept factory hem is a trouser leg's finish: another kind is priced by its own line.
+    message: 'A finish is chosen for trousers only: leave it blank for this kind of garment.',
+    path: ['finish'],
+  });
 
 /** The body of POST /api/tickets: an existing or a new customer, a note, the garments brought in,
  * and whether the ticket is a rush (priced at intake with the garments' finishes and work). */

@@ -8,6 +8,7 @@ import type { FittingRule } from './fitting-rule';
 import type { SavedLeg } from './measurement-request';
 import type { WaistOrder } from './waist-order';
 import type { WaistNote } from './cut-sheet-types';
+import type { GarmentKindId } from './fitting/garment-kinds';
 
 /** A person a garment can be given to. */
 export interface Person {
@@ -32,6 +33,8 @@ export interface BenchSettings {
 export interface GarmentSummary {
   id: string;
   description: string;
+  /** what kind of garment (fitting/garment-kinds.ts); absent on rows read before kinds were shown: trousers */
+  kind?: GarmentKindId;
   status: GarmentStep;
   dueOn: string | null;
   assigneeId: string | null;

@@ -4,6 +4,7 @@ import type { Language } from './i18n/languages';
 import type { CreaseLanding, CuffInput, CuffPlan, HemInput, HemPlan, HemTaperInput, Precision, TaperInput, TaperPlan, Unit } from '@/lib/allowance/types';
 import type { OriginalHemInput, OriginalHemPlan } from '@/lib/allowance/kind-types';
 import type { ExistingFinish } from '@/lib/shared/existing-finish';
+import type { SkirtPlan } from './fitting/skirt-fitting';
 
 /** The paper a sheet is printed on. */
 export type PageSize = 'LETTER' | 'A4';
@@ -115,6 +116,15 @@ export interface OriginalHemLeg {
 /** One leg of the garment. */
 export type LegSheet = CuffLeg | HemLeg | OriginalHemLeg;
 
+/** A skirt's or dress's sheet: the engine's plans (flared hem, and the levelling when taken), in the sheet's unit. */
+export interface SkirtSheetData {
+  kind: 'skirt';
+  plan: SkirtPlan;
+}
+
+/** The sheet of a garment fitted once, not per leg, by its kind (cut-sheet/kinds/ draws each). */
+export type KindSheetData = SkirtSheetData;
+
 /** Everything one cut sheet shows: one garment, one page. */
 export interface CutSheetData {
   /** shop name; null on an unsaved calculator plan */
@@ -129,8 +139,10 @@ export interface CutSheetData {
   assignee: string | null;
   unit: Unit;
   precision: Precision;
-  /** one or two legs, left before right; a single leg stands for both */
+  /** one or two legs, left before right; a single leg stands for both (none on a kind's sheet) */
   legs: LegSheet[];
+  /** a garment fitted once (a skirt): its kind's plan, drawn in place of the legs */
+  kindSheet?: KindSheetData;
   /** the garment's page in the app, for the QR code; absent on an unsaved plan */
   link?: string;
   /** default LETTER */

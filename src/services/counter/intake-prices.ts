@@ -10,6 +10,7 @@ import { isRushableWork, priceTicket, sumMinor, type GarmentFacts } from '@/lib/
 import { audit } from '../audit';
 import { ServiceError } from '../errors';
 import { liveKinds } from './price-kinds';
+import { workKeyOf } from '@/lib/shared/fitting/garment-kinds';
 import { priceListOf } from './prices';
 
 /** A garment just taken in, with what the counter asked to price on it. */
@@ -17,6 +18,8 @@ export interface IntakeGarment {
   id: string;
   label: string;
   finish: 'hem' | 'cuff' | 'original' | null;
+  /** garments.kind: a kind other than trousers is priced by its own line (KIND_PRICE_KEYS) */
+  kind?: string;
   existingFinish: ExistingFinish;
   /** ids of the lead's kinds of work */
   work: readonly string[];
@@ -25,9 +28,11 @@ export interface IntakeGarment {
 /** Writes the intake's lines on the new ticket through `tx`; returns how many. The finish's line is a
  * worked-out one (`auto`): pricing from the fitting later replaces it. Kinds are lines from the list. */
 export async function priceAtIntake(tx: Db, actor: Actor, ticketId: string, garments: readonly IntakeGarment[], rush: boolean): Promise<number> {
-  if (!rush && garments.every((g) => g.finish === null && g.work.length === 0)) return 0;
-  if (!can(actor.role, ['prices', 'adjust']))
-    throw new ServiceError(422, `Your role (${actor.role}) may not price work: leave the finish, the kinds of work and rush to the counter.`);
+  const asked = rush || garments.some((g) => g.finish !== null || g.work.length > 0);
+  // A skirt's own line is priced by itself, but only by those who may price: others leave it to the counter.
+  const mayPrice = can(actor.role, ['prices', 'adjust']);
+  if (!asked && (!mayPrice || !garments.some((g) => workKeyOf(g.kind)))) return 0;
+  if (!mayPrice) throw new ServiceError(422, `Your role (${actor.role}) may not price work: leave the finish, the kinds of work and rush to the counter.`);
   const list = await priceListOf(actor.shopId, tx);
   const kinds = await liveKinds(
     tx,
@@ -35,8 +40,8 @@ export async function priceAtIntake(tx: Db, actor: Actor, ticketId: string, garm
     garments.flatMap((g) => g.work),
   );
   const facts: GarmentFacts[] = garments
-    .filter((g) => g.finish !== null)
-    .map((g) => ({ garmentId: g.id, label: g.label, finish: g.finish, taperLetOut: false, oldCuff: g.existingFinish === 'cuff' }));
+    .filter((g) => g.finish !== null || workKeyOf(g.kind))
+    .map((g) => ({ garmentId: g.id, label: g.label, finish: g.finish, taperLetOut: false, oldCuff: g.existingFinish === 'cuff', workKey: workKeyOf(g.kind) }));
   const kindLines = garments.flatMap((g) =>
     g.work.map((id) => {
       const k = kinds.get(id)!;

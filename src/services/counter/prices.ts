@@ -30,6 +30,7 @@ import { ServiceError } from '../errors';
 import { isUuid, shopTicket } from '../ticket-core';
 import { withLinksClosed } from './payment-links';
 import { kindsOf, liveKinds } from './price-kinds';
+import { workKeyOf } from '@/lib/shared/fitting/garment-kinds';
 import type { CounterView, PriceListView } from '@/lib/shared/counter-views';
 
 // The shapes live in lib (islands read them too); exported here for the services' importers.
@@ -292,6 +293,7 @@ export async function garmentFacts(shopId: string, ticketId: string): Promise<Ga
       taperLetOut: finish === 'cuff' && own.some((m) => legNeedsLetOut(m, letDownFirst(g.existingFinish))),
       // Noted at intake (or on the garment since): an old cuff is let down before it is made again.
       oldCuff: g.existingFinish === 'cuff',
+      workKey: workKeyOf(g.kind),
     };
   });
 }

@@ -11,6 +11,7 @@ const LIST: PriceList = {
   'cuff-from-hem': { label: 'Cuff from a plain hem', amountMinor: 2600 },
   'cuff-remake': { label: 'Cuff let down and re-made', amountMinor: 3200 },
   'original-hem': { label: 'Jeans, original hem kept', amountMinor: 2300 },
+  'skirt-hem': { label: 'Skirt or dress hem', amountMinor: 2700 },
   'taper-let-out': { label: 'Taper let-out', amountMinor: 1200 },
   rush: { label: 'Rush', amountMinor: 1000 },
 };
@@ -40,6 +41,15 @@ describe('priceTicket', () => {
   it('prices jeans kept on their factory hem at their own line, with no cuff let-out beside it', () => {
     const { lines } = priceTicket([garment({ label: 'Indigo jeans', finish: 'original', taperLetOut: true })], LIST, { rush: false });
     expect(lines).toEqual([{ garmentId: 'g1', key: 'original-hem', label: 'Jeans, original hem kept — Indigo jeans', amountMinor: 2300 }]);
+  });
+
+  it("prices a skirt by its kind's own line whatever finish is noted, and adds no cuff let-out to it", () => {
+    const { lines } = priceTicket([garment({ label: 'Green circle skirt', finish: 'cuff', taperLetOut: true, workKey: 'skirt-hem' })], LIST, { rush: true });
+    expect(lines).toEqual([
+      { garmentId: 'g1', key: 'skirt-hem', label: 'Skirt or dress hem — Green circle skirt', amountMinor: 2700 },
+      { garmentId: null, key: 'rush', label: 'Rush', amountMinor: 1000 },
+    ]);
+    expect(finishKey(garment({ finish: null, workKey: 'skirt-hem' }))).toBe('skirt-hem');
   });
 
   it('adds the taper let-out line to a cuff whose plan needs one, and never to a plain hem', () => {

@@ -12,6 +12,7 @@ import { GARMENT_STEPS } from '@/lib/shared/garment-steps';
 import { LANGUAGES } from '@/lib/shared/i18n/languages';
 import { FINISHES, LEG_LENGTHS, LEGS } from '@/lib/shared/measurement-request';
 import { WAIST_ORDERS } from '@/lib/shared/waist-order';
+import { GARMENT_KINDS } from '@/lib/shared/fitting/garment-kinds';
 
 const step = z.enum(GARMENT_STEPS);
 
@@ -47,6 +48,8 @@ export const customerCardJson = z.object({
 export const ticketGarmentJson = z.object({
   id: z.string(),
   description: z.string(),
+  /** what kind of garment (trousers, a skirt or dress) */
+  kind: z.enum(GARMENT_KINDS).optional(),
   status: step,
   dueOn: z.string().nullable(),
   assigneeId: z.string().nullable(),
@@ -121,4 +124,14 @@ export const queueRowJson = ticketGarmentJson.omit({ fitted: true }).extend({
   customerName: z.string().nullable(),
   customerPhone: z.string().nullable().optional(),
   readyAt: z.string().nullable().optional(),
+});
+
+/** A garment fitted once (a skirt or dress): its fitting as saved, lengths as typed with their mm, choices as typed. */
+export const kindFittingJson = z.object({
+  kind: z.enum(GARMENT_KINDS).exclude(['trousers']),
+  unit: z.enum(['in', 'cm', 'mm']).nullable(),
+  values: z.record(z.string(), z.object({ text: z.string(), mm: z.number() })),
+  choices: z.record(z.string(), z.string()),
+  takenAt: z.string().nullable(),
+  takenBy: z.string().nullable(),
 });

@@ -10,6 +10,8 @@ import { legGeometry } from './leg-geometry';
 import { textWidth } from './measure';
 import { qrPath } from './qr';
 import { SkippedNote } from './SkippedNote';
+import { KIND_SHEETS } from './kinds';
+import type { KindSheetContent } from './kinds/kind-sheet';
 import { FAMILY } from './fonts';
 import { translator, type Translate } from '../i18n/catalog';
 import { intlLocale } from '../../shared/i18n/languages';
@@ -37,7 +39,7 @@ function Header({ c, link }: { c: SheetContent; link?: string }) {
       <View style={{ flexGrow: 1, flexShrink: 1, flexBasis: 0 }}>
         <Text style={s.kicker}>
           {c.t('sheet.kicker')}
-          <Text style={{ fontWeight: 400, letterSpacing: 0 }}>{`      ${c.t('sheet.kickerNote', { unitNote: c.unitNote })}`}</Text>
+          <Text style={{ fontWeight: 400, letterSpacing: 0 }}>{`      ${c.kind ? c.kind.kickerNote : c.t('sheet.kickerNote', { unitNote: c.unitNote })}`}</Text>
         </Text>
         <Text style={s.title}>{c.title}</Text>
         {c.meta.length > 0 && <Text style={s.meta}>{c.meta.join('   ·   ')}</Text>}
@@ -228,6 +230,12 @@ function OriginalBlock({ g, t }: { g: SheetLegGroup; t: Translate }) {
   );
 }
 
+// A garment fitted once (a skirt): its kind's own block (cut-sheet/kinds/).
+function KindBlock({ content, width, t }: { content: KindSheetContent; width: number; t: Translate }) {
+  const { Block } = KIND_SHEETS[content.kind];
+  return <Block content={content} width={width} t={t} />;
+}
+
 function LegBlock({ g, width, t }: { g: SheetLegGroup; width: number; t: Translate }) {
   if (g.leg.finish === 'original') return <OriginalBlock g={g} t={t} />;
   const least = tableColumns(g, t);
@@ -337,11 +345,7 @@ function guideGroupOf(g: SheetLegGroup, t: Translate): GuideGroup {
 function stripColumnsOf(c: SheetContent, data: CutSheetData) {
   const page = PAGE_PT[data.pageSize ?? 'LETTER'];
   const all = stripColumns(
-    guideStrips(
-      c.groups.map((g) => guideGroupOf(g, c.t)),
-      data.unit,
-      page.height - 2 * PADDING - GUIDE_OVERHEAD,
-    ),
+    guideStrips(c.kind ? c.kind.guide : c.groups.map((g) => guideGroupOf(g, c.t)), data.unit, page.height - 2 * PADDING - GUIDE_OVERHEAD),
   );
   return { column: all.slice(0, COLUMN_STRIPS), page: all.slice(COLUMN_STRIPS) };
 }
@@ -387,6 +391,7 @@ export function CutSheetPage({ data, wrap, family = FAMILY }: { data: CutSheetDa
         <Header c={c} link={data.link} />
         <View style={s.body}>
           <View style={[s.main, { width: mainWidth }]}>
+            {c.kind && <KindBlock content={c.kind} width={mainWidth - MAIN_GUTTER} t={c.t} />}
             {c.groups.map((g, i) => (
               <LegBlock key={i} g={g} width={mainWidth - MAIN_GUTTER} t={c.t} />
             ))}

@@ -7,6 +7,11 @@ import { translator, type MessageKey, type Translate } from '../i18n/catalog';
 import { creaseText, warningText } from '../../shared/i18n/engine-messages';
 import { DEFAULT_LANGUAGE, intlLocale, type Language } from '../../shared/i18n/languages';
 import { checkRuler, type GuideGroup } from './chalk-guide';
+import { cautionsIn, stitchLengths } from './sheet-words';
+import { KIND_SHEETS } from './kinds';
+import type { KindSheetContent } from './kinds/kind-sheet';
+
+export { stitchLengths };
 import { finishedLine, recordedText } from './finished-length';
 import { printedPlan, type PrintedPlan, type PrintedSeamWork } from './printed';
 import { printedOriginal, type PrintedOriginal } from './printed-original';
@@ -68,6 +73,8 @@ export interface SheetContent {
   meta: string[];
   unitNote: string;
   groups: SheetLegGroup[];
+  /** a garment fitted once (a skirt): its kind's block, steps and strip, in place of the legs (groups empty) */
+  kind: KindSheetContent | null;
   steps: { heading: string | null; items: string[] }[];
   cautions: string[];
   guideNote: string[];
@@ -84,19 +91,6 @@ export const UNSAVED_TITLE = EN('sheet.unsavedTitle');
 
 /** Stitch lengths printed on the sheet, in mm (TRADE.md, common practice). */
 export const STITCH = stitchLengths('mm');
-
-/**
- * The stitch lengths as a sheet in this unit prints them: per inch (with mm) on inch sheets, mm on
- * metric ones. Inch shops set stitches per inch: 25.4/4 ≈ 6, 25.4/2 ≈ 13, 8–10 per inch (TRADE.md).
- */
-export function stitchLengths(unit: Unit, t: Translate = EN): { long: string; short: string; standard: string } {
-  return { long: t('sheet.stitch.long', { unit }), short: t('sheet.stitch.short', { unit }), standard: t('sheet.stitch.standard', { unit }) };
-}
-
-// The cautions, short for the sheet (lib/shared/bench-safety.ts has the screen's longer ones).
-function cautionsIn(t: Translate, heavySeams = false): string[] {
-  return [t('safety.sheet.1'), t('safety.sheet.2'), t('safety.sheet.3'), ...(heavySeams ? [t('safety.sheet.heavySeams')] : []), t('safety.sheet.defer')];
-}
 
 /** The cautions every sheet carries (TRADE.md, "Cautions to show"), in English. */
 export const CAUTIONS = cautionsIn(EN);
@@ -490,6 +484,7 @@ export function sheetContent(data: CutSheetData): SheetContent {
   const language = data.language ?? DEFAULT_LANGUAGE;
   const t = translator(language);
   const unsaved = !data.link;
+  if (data.kindSheet) return kindContent(data, t, language);
   const [first, second] = data.legs;
   if (!first) throw new Error('A cut sheet needs at least one leg.');
   const groups =
@@ -515,6 +510,7 @@ export function sheetContent(data: CutSheetData): SheetContent {
     meta,
     unitNote: t('sheet.unitNote', { unit: t(`sheet.unit.${data.unit}`), unitKind: data.unit, precision: data.precision }),
     groups,
+    kind: null,
     steps: withLetDown(t, stepsOf(t, groups), data.existingFinish),
     cautions: cautionsIn(
       t,
@@ -526,6 +522,33 @@ export function sheetContent(data: CutSheetData): SheetContent {
       // A kept factory hem's strip starts at the join, above the pin mark.
       groups.every((g) => g.original) ? t('sheet.guide.layJoin') : t('sheet.guide.lay'),
     ],
+    t,
+    language,
+  };
+}
+
+function headerMeta(data: CutSheetData, t: Translate, language: Language): string[] {
+  const meta: string[] = [];
+  if (data.ticket) meta.push(t('sheet.meta.ticket', { ticket: data.ticket }));
+  if (data.garment) meta.push(data.garment);
+  if (data.due) meta.push(t('sheet.meta.due', { date: formatDue(data.due, language) }));
+  if (data.assignee) meta.push(t('sheet.meta.for', { who: data.assignee }));
+  return meta;
+}
+
+// A garment fitted once: the same frame (header, steps, cautions, check ruler, strip), its kind's block.
+function kindContent(data: CutSheetData, t: Translate, language: Language): SheetContent {
+  const kind = KIND_SHEETS[data.kindSheet!.kind].content(data.kindSheet!, t, data.unit, data.precision);
+  return {
+    unsaved: !data.link,
+    title: !data.link ? t('sheet.unsavedTitle') : (data.shop ?? t('sheet.title')),
+    meta: headerMeta(data, t, language),
+    unitNote: t('sheet.unitNote', { unit: t(`sheet.unit.${data.unit}`), unitKind: data.unit, precision: data.precision }),
+    groups: [],
+    kind,
+    steps: [{ heading: null, items: kind.steps }],
+    cautions: cautionsIn(t),
+    guideNote: [t('sheet.guide.check', { says: checkRuler(data.unit).says }), t('sheet.guide.scaled'), kind.lay],
     t,
     language,
   };

@@ -53,7 +53,13 @@ export const BENCH_MESSAGES = [
   'original',
   'sheet.above',
   'sheet.below',
+  // Garments fitted once (a skirt): the kind's names, its form and plan, and the engine's notes.
+  'kind.',
+  'kindFitting.',
+  'skirt.',
+  'skirtNote.',
+  'levelNote.',
 ] as const;
 
 /** The parts the queue renders: its own words, the steps, due dates and the Mark buttons. */
-export const QUEUE_MESSAGES = ['queue.', 'step.', 'due.', 'move.'] as const;
+export const QUEUE_MESSAGES = ['queue.', 'step.', 'due.', 'move.', 'kind.'] as const;

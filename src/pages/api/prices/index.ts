@@ -35,6 +35,7 @@ export const PUT = route(
             { key: 'cuff-from-hem', label: 'Cuff from a plain hem', amountMinor: 2400 },
             { key: 'cuff-remake', label: 'Cuff let down and re-made', amountMinor: 2950 },
             { key: 'original-hem', label: 'Jeans, original hem kept', amountMinor: 2200 },
+            { key: 'skirt-hem', label: 'Skirt or dress hem', amountMinor: 2600 },
             { key: 'taper-let-out', label: 'Taper let-out at the cuff (per pair)', amountMinor: 1100 },
             { key: 'rush', label: 'Rush surcharge (per ticket)', amountMinor: 900 },
           ],

@@ -1,0 +1,127 @@
+// The fitting of a garment fitted once, not per leg (a skirt or dress; later sleeves): read with the
+// engine's parser and its kind's engine on save (nothing it would refuse is kept), stored as typed
+// plus exact mm, and every changed value recorded in the audit history.
+import { and, eq, inArray } from 'drizzle-orm';
+import { db } from '@/db';
+import { kindFittings, user, type Garment } from '@/db/schema';
+import { isAllowanceError, parseLength } from '@/lib/allowance';
+import type { Unit } from '@/lib/allowance/types';
+import type { Actor } from '@/lib/server/api';
+import { kindOf, type WholeGarmentKind } from '@/lib/shared/fitting/garment-kinds';
+import { adapterOf } from '@/lib/shared/fitting/kind-adapters';
+import type { KindAdapter, KindTexts } from '@/lib/shared/fitting/kind-fields';
+import type { KindFittingInput, KindFittingView, KindSavedLength } from '@/lib/shared/kind-fitting-request';
+import { auditMany } from './audit';
+import { ServiceError } from './errors';
+import { visibleGarment } from './garments';
+
+/** A garment whose kind is fitted once, with its adapter; 404 outside the shop, 422 for trousers (fitted per leg). */
+async function kindGarment(actor: Actor, garmentId: string): Promise<{ g: Garment; adapter: KindAdapter; kind: WholeGarmentKind }> {
+  const g = await visibleGarment(actor, garmentId);
+  const kind = kindOf(g.kind);
+  const adapter = adapterOf(kind);
+  if (!adapter || kind === 'trousers') throw new ServiceError(422, 'This garment is fitted per leg: save its fitting through its measurements.');
+  return { g, adapter, kind };
+}
+
+/** The typed texts of a saved fitting, by field key (lengths as typed, choices and numbers as kept). */
+export function savedTexts(view: Pick<KindFittingView, 'values' | 'choices'>): KindTexts {
+  const out: KindTexts = { ...view.choices };
+  for (const [k, v] of Object.entries(view.values)) out[k] = v.text;
+  return out;
+}
+
+/** Reads every length with the engine's parser, then the kind's engine over the whole: issues by the form's paths (`fields.<key>`), or what to keep. */
+export function readKindFitting(
+  adapter: KindAdapter,
+  input: KindFittingInput,
+): { ok: true; values: Record<string, KindSavedLength>; choices: Record<string, string> } | { ok: false; issues: Record<string, string> } {
+  const issues: Record<string, string> = {};
+  const values: Record<string, KindSavedLength> = {};
+  const choices: Record<string, string> = {};
+  const fields = input.fields as Record<string, string>;
+  for (const f of adapter.fields) {
+    const typed = (fields[f.key] ?? '').trim();
+    if (typed === '') continue;
+    if (f.type !== 'length') {
+      choices[f.key] = typed;
+      continue;
+    }
+    try {
+      values[f.key] = { text: typed, mm: parseLength(typed, input.unit).mm };
+    } catch (e) {
+      if (!isAllowanceError(e)) throw e;
+      issues[`fields.${f.key}`] = e.message;
+    }
+  }
+  if (Object.keys(issues).length === 0) {
+    for (const { field, error } of adapter.refusals(fields, input.unit)) {
+      const key = `fields.${field}`;
+      if (!(key in issues)) issues[key] = error.message;
+    }
+  }
+  return Object.keys(issues).length ? { ok: false, issues } : { ok: true, values, choices };
+}
+
+/** The saved fittings of several garments in one query, by garment id, read within the shop. */
+export async function kindFittingsOf(shopId: string, garmentIds: string[]): Promise<Map<string, KindFittingView>> {
+  const out = new Map<string, KindFittingView>();
+  if (garmentIds.length === 0) return out;
+  const rows = await db
+    .select({ f: kindFittings, takenBy: user.name })
+    .from(kindFittings)
+    .leftJoin(user, eq(user.id, kindFittings.takenById))
+    .where(and(eq(kindFittings.shopId, shopId), inArray(kindFittings.garmentId, garmentIds)));
+  for (const { f, takenBy } of rows) {
+    out.set(f.garmentId, {
+      kind: kindOf(f.kind) as WholeGarmentKind,
+      unit: f.unit,
+      values: f.values as Record<string, KindSavedLength>,
+      choices: f.choices as Record<string, string>,
+      takenAt: f.takenAt.toISOString(),
+      takenBy,
+    });
+  }
+  return out;
+}
+
+/** A garment's whole-garment fitting as its page shows it (empty until the first save). */
+export async function kindFittingOf(actor: Actor, garmentId: string): Promise<KindFittingView> {
+  const { g, kind } = await kindGarment(actor, garmentId);
+  return (await kindFittingsOf(actor.shopId, [g.id])).get(g.id) ?? { kind, unit: null, values: {}, choices: {}, takenAt: null, takenBy: null };
+}
+
+/** Saves a garment's whole-garment fitting; refused (422, by field) when the kind differs or its engine would refuse it. */
+export async function saveKindFitting(actor: Actor, garmentId: string, input: KindFittingInput): Promise<KindFittingView> {
+  const { g, adapter, kind } = await kindGarment(actor, garmentId);
+  if (input.kind !== kind)
+    throw new ServiceError(422, `This garment is a ${kind}, not a ${input.kind}: send its own fields.`, { kind: 'Not this garment’s kind.' });
+  const read = readKindFitting(adapter, input);
+  if (!read.ok) throw new ServiceError(422, 'Some measurements cannot be used.', read.issues);
+  const before = await kindFittingOf(actor, g.id);
+  const was = savedTexts(before);
+  const now = { ...read.choices, ...Object.fromEntries(Object.entries(read.values).map(([k, v]) => [k, v.text])) };
+  const events: Parameters<typeof auditMany>[1] = [];
+  for (const f of adapter.fields) {
+    const old = was[f.key] ?? null;
+    const next = now[f.key] ?? null;
+    if ((old ?? '') !== (next ?? '')) {
+      events.push({
+        shopId: actor.shopId,
+        actorId: actor.userId,
+        action: 'kind-fitting.changed',
+        subject: g.id,
+        detail: { kind, field: f.key, old, new: next, unit: input.unit },
+      });
+    }
+  }
+  const row = { kind, unit: input.unit as Unit, values: read.values, choices: read.choices, takenById: actor.userId, takenAt: new Date() };
+  await db.transaction(async (tx) => {
+    await tx
+      .insert(kindFittings)
+      .values({ shopId: actor.shopId, garmentId: g.id, ...row })
+      .onConflictDoUpdate({ target: kindFittings.garmentId, set: row });
+    await auditMany(tx, events);
+  });
+  return kindFittingOf(actor, g.id);
+}
