@@ -1,16 +1,26 @@
-// The printed sleeve sheet: drawn to PDF and read back with poppler. It carries the chalk lines from
+// The printed sleeve sheet, a kind's sheet in the shared frame: drawn to PDF and read back with poppler. It carries the chalk lines from
 // the present edge, the cut in words, the sums, the buttons' moves, the vent, the lining, the bench
 // steps with the engine's advice, the cautions and the 1:1 strip; it fits one page in every unit,
 // on both papers and in French, with no two runs of text touching and every font embedded.
 import { describe, expect, it } from 'vitest';
 import type { SleeveInput } from '@/lib/allowance';
-import { buildSleeveSheet } from '@/lib/server/cut-sheet/sleeve-content';
-import { renderSleeveSheet, sleeveStripColumns } from '@/lib/server/cut-sheet/SleeveSheet';
+import type { SheetHeader } from '@/lib/server/cut-sheet/build';
+import { sheetStripColumns } from '@/lib/server/cut-sheet/CutSheet';
+import { renderCutSheet } from '@/lib/server/cut-sheet/render';
+import type { CutSheetData } from '@/lib/shared/cut-sheet-types';
+import { SLEEVE_ADAPTER } from '@/lib/shared/fitting/sleeve-fitting';
 import { crowdedRuns, textRuns } from './pdf-runs';
 import { flatText, fonts, pageInfo, pdfFile } from './poppler';
 import { SHOP } from './sheets';
 
 const JACKET = { ...SHOP, garment: 'Charcoal wool jacket' };
+
+/** A sleeve sheet as a saved garment's is built: the fields as typed through the kind's adapter, in the input's unit. */
+function buildSleeveSheet(header: SheetHeader, input: SleeveInput): CutSheetData {
+  const { unit, precision = 16, ...typed } = input;
+  const texts = Object.fromEntries(Object.entries(typed).map(([k, v]) => [k, String(v)]));
+  return { ...header, unit, precision, legs: [], kindSheet: { kind: 'sleeves', plan: SLEEVE_ADAPTER.plan(texts, unit, precision) } };
+}
 
 // 1 in off at the cuff of a sleeve with four buttons on decorative buttonholes and a 4 1/2 in vent;
 // hem, buttons and margin as the engine's defaults (kind-defaults.ts, common practice (no source)).
@@ -18,7 +28,7 @@ const DECORATIVE: SleeveInput = { unit: 'in', precision: 8, shortenBy: '1', butt
 
 describe('the printed sleeve sheet', () => {
   it('prints the chalk lines, the cut, the sums, the buttons, the vent, the lining, the steps, the cautions and the strip', async () => {
-    const file = pdfFile(await renderSleeveSheet(buildSleeveSheet(JACKET, DECORATIVE)));
+    const file = pdfFile(await renderCutSheet(buildSleeveSheet(JACKET, DECORATIVE)));
     const text = flatText(file);
     for (const words of [
       'Charcoal wool jacket',
@@ -54,7 +64,7 @@ describe('the printed sleeve sheet', () => {
   });
 
   it('lays the 1:1 strip from the top button’s new centre: 1 in = 72 pt', () => {
-    const [strip] = sleeveStripColumns(buildSleeveSheet(JACKET, DECORATIVE)).column;
+    const [strip] = sheetStripColumns(buildSleeveSheet(JACKET, DECORATIVE)).column;
     // New centres above the present edge: 4 1/8, 3 1/2, 2 7/8, 2 1/4; new edge 1; present edge 0; cut −1/2 (arithmetic).
     expect(strip!.segment.ticks.map((t) => [t.name, Math.round(t.y * 1000) / 1000])).toEqual([
       ['button 4', 0],
@@ -68,7 +78,7 @@ describe('the printed sleeve sheet', () => {
   });
 
   it('from the shoulder: the seam lines, the lining at the head and the steps to set the sleeve in again', async () => {
-    const text = flatText(pdfFile(await renderSleeveSheet(buildSleeveSheet(JACKET, { unit: 'mm', shortenBy: 25, buttonholes: 'working', liningFoldNow: 20 }))));
+    const text = flatText(pdfFile(await renderCutSheet(buildSleeveSheet(JACKET, { unit: 'mm', shortenBy: 25, buttonholes: 'working', liningFoldNow: 20 }))));
     for (const words of [
       'Shortened 25 mm from the shoulder',
       'FROM THE SEAM LINE NOW',
@@ -86,8 +96,8 @@ describe('the printed sleeve sheet', () => {
 
   it('draws each line once after a sheet whose lines came in another order (react-pdf moves a keyed child by inserting it again, leaving the old one)', async () => {
     // Documents share one react-pdf root (render-pdf.ts): the shoulder's table (0, 1) then the cuff's (1, 0, 2).
-    await renderSleeveSheet(buildSleeveSheet(JACKET, { unit: 'mm', shortenBy: 25, buttonholes: 'working' }));
-    const text = flatText(pdfFile(await renderSleeveSheet(buildSleeveSheet(JACKET, DECORATIVE))));
+    await renderCutSheet(buildSleeveSheet(JACKET, { unit: 'mm', shortenBy: 25, buttonholes: 'working' }));
+    const text = flatText(pdfFile(await renderCutSheet(buildSleeveSheet(JACKET, DECORATIVE))));
     expect(text.split('2 CUT · Cutting line').length - 1).toBe(1);
     expect(text.split('1 New finished edge').length - 1).toBe(1);
   });
@@ -102,7 +112,7 @@ describe('the printed sleeve sheet', () => {
     for (const input of inputs)
       for (const pageSize of ['LETTER', 'A4'] as const)
         for (const language of ['en', 'fr'] as const) {
-          const pdf = await renderSleeveSheet(buildSleeveSheet({ ...JACKET, pageSize, language }, input));
+          const pdf = await renderCutSheet(buildSleeveSheet({ ...JACKET, pageSize, language }, input));
           const where = `${input.unit} ${input.shortenBy} ${pageSize} ${language}`;
           expect(pageInfo(pdfFile(pdf)).pages, where).toBe(1);
           expect(crowdedRuns(textRuns(pdf), 2).map(([a, b]) => `${where}: ${a.text} | ${b.text}`)).toEqual([]);

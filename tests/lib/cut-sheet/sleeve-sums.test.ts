@@ -3,15 +3,24 @@
 // shortening = height above the new edge, vent now − shortening = vent after, vent after − top button
 // − margin = room, lining = shortening + fold change − pleat change; and each is rounded to the side
 // that keeps cloth (never shorter, never cut higher, never more lining off than the exact figures).
-// Properties over sleeveSheetContent (the strings the PDF prints); examples name their sources.
+// Properties over the sleeve sheet's words (the strings the PDF prints); examples name their sources.
 import fc from 'fast-check';
 import { unit as mathUnit } from 'mathjs';
 import convert from 'convert-units';
 import { describe, expect, it } from 'vitest';
-import { parseLength, type SleeveInput } from '@/lib/allowance';
+import { parseLength, shortenSleeve, type SleeveInput } from '@/lib/allowance';
 import type { Unit } from '@/lib/allowance/types';
-import { buildSleeveSheet, sleeveSheetContent } from '@/lib/server/cut-sheet/sleeve-content';
-import { SHOP } from './sheets';
+import { translator } from '@/lib/server/i18n/catalog';
+import { type SleeveBlockWords, sleeveSheetContent } from '@/lib/server/cut-sheet/kinds/sleeve-sheet';
+
+const EN = translator('en');
+
+/** The sleeve sheet's words for an engine input: its block, its steps, its strip, and the engine's plan (throws what the engine refuses). */
+function sheetWords(input: SleeveInput) {
+  const fit = { input, plan: shortenSleeve(input) };
+  const k = sleeveSheetContent({ kind: 'sleeves', plan: fit }, EN, fit.plan.unit, fit.plan.precision);
+  return { ...(k.block as SleeveBlockWords), steps: k.steps, strip: k.guide[0]!, plan: fit.plan };
+}
 
 const scale = fc.constantFrom<[Unit, 8 | 16]>(['in', 8], ['in', 16], ['cm', 8], ['mm', 8]);
 
@@ -67,13 +76,13 @@ describe('a sleeve adds up as printed', () => {
     fc.assert(
       fc.property(sleeve, (o) => {
         const typed = input(o);
-        let data: ReturnType<typeof buildSleeveSheet>;
+        let c: ReturnType<typeof sheetWords>;
         try {
-          data = buildSleeveSheet(SHOP, typed);
+          c = sheetWords(typed);
         } catch {
           return; // the engine refused it (buttons past the vent): no sheet
         }
-        const c = sleeveSheetContent(data);
+        const data = c;
         const pp = c.printed;
         seen.sheets++;
         seen[pp.method]++;
@@ -154,7 +163,7 @@ describe('a sleeve adds up as printed', () => {
 
 describe('sleeve sheet examples', () => {
   it('1 in off at the cuff, hem 1 1/2 in: cut 1/2 in below the present edge, buttons up 1 in (docs/KINDS.md; defaults common practice (no source))', () => {
-    const c = sleeveSheetContent(buildSleeveSheet(SHOP, { unit: 'in', precision: 8, shortenBy: '1', buttonholes: 'decorative', ventLength: '4 1/2' }));
+    const c = sheetWords({ unit: 'in', precision: 8, shortenBy: '1', buttonholes: 'decorative', ventLength: '4 1/2' });
     // Cut h below the new edge: 1 1/2 − 1 = 1/2 below the present edge (docs/KINDS.md, derived).
     expect(c.sum).toBe('Cut 1 1/2 in below the new edge: 1 1/2 in − 1 in = 1/2 in below the present edge, inside the let-down hem.');
     // Lowest button 1 1/4 in, 5/8 in apart (kind-defaults, common practice (no source)), moved up 1 in.
@@ -171,26 +180,22 @@ describe('sleeve sheet examples', () => {
     ]);
     // 3 1/2 − 1/2 − 1 1/4 = 1 3/4 of room from the lowest: 3 buttons at 5/8 (0, 5/8, 1 1/4), or 4 at 1 3/4 / 3 = 7/12, floored to 1/2.
     expect(c.notes).toEqual(['The shortened vent is 1/8 in too short for the buttons: sew 3 of them, or set them all 1/2 in apart.']);
-    expect(c.steps[0]!.items).toContain('The buttonholes are decorative: stitch them again 1 in higher.');
+    expect(c.steps).toContain('The buttonholes are decorative: stitch them again 1 in higher.');
     expect(c.lining).toBe('Lining: shorten it 1 in, as the sleeve; fold 1/2 in above the new edge, ease pleat 1/2 in.');
   });
 
   it('the lining loses s + (f′ − f) − (p′ − p): 1 in + (1/2 − 3/8) − (1/2 − 1/4) = 7/8 in (docs/KINDS.md, derived)', () => {
-    const c = sleeveSheetContent(
-      buildSleeveSheet(SHOP, { unit: 'in', precision: 8, shortenBy: 1, buttonholes: 'none', liningFoldNow: '3/8', liningPleatNow: '1/4' }),
-    );
+    const c = sheetWords({ unit: 'in', precision: 8, shortenBy: 1, buttonholes: 'none', liningFoldNow: '3/8', liningPleatNow: '1/4' });
     expect(c.lining).toContain('shorten it 7/8 in: 1 in + (1/2 in − 3/8 in) fold − (1/2 in − 1/4 in) pleat = 7/8 in');
   });
 
   it('rounds to keep cloth: 1 3/16 in off on a 1/8 sheet prints 1 1/8 in, a 1 7/16 in hem prints 1 1/2 in (common practice (no source): cloth cut away cannot be put back)', () => {
-    const pp = sleeveSheetContent(
-      buildSleeveSheet(SHOP, { unit: 'in', precision: 8, shortenBy: '1 3/16', hemDepth: '1 7/16', buttonholes: 'none', buttons: 0 }),
-    ).printed;
+    const pp = sheetWords({ unit: 'in', precision: 8, shortenBy: '1 3/16', hemDepth: '1 7/16', buttonholes: 'none', buttons: 0 }).printed;
     expect([pp.shortenBy.text, pp.hemDepth.text, pp.cut!.abovePresentEdge.text]).toEqual(['1 1/8 in', '1 1/2 in', '-3/8 in']);
   });
 
   it('on a 1/16 sheet and in mm the same sleeve prints its own steps (convert-units and mathjs: 1 in = 25.4 mm)', () => {
-    const inch = sleeveSheetContent(buildSleeveSheet(SHOP, { unit: 'in', precision: 16, shortenBy: '13/16', buttonholes: 'none', buttons: 3 })).printed;
+    const inch = sheetWords({ unit: 'in', precision: 16, shortenBy: '13/16', buttonholes: 'none', buttons: 3 }).printed;
     expect([inch.shortenBy.text, inch.cut!.abovePresentEdge.text]).toEqual(['13/16 in', '-11/16 in']);
     // 13/16 in typed on a mm sheet: 20.6375 mm, down to the 0.5 mm step: 20.5 mm.
     const typedMm = convert(13 / 16)
@@ -198,14 +203,14 @@ describe('sleeve sheet examples', () => {
       .to('mm');
     // convert-units uses 3.28084 ft/m: it agrees to about 1e-7 (DEVELOPERS.md), a cross-check, not the source.
     expect(typedMm).toBeCloseTo(mathUnit(13 / 16, 'inch').toNumber('mm'), 5);
-    const mm = sleeveSheetContent(buildSleeveSheet(SHOP, { unit: 'mm', shortenBy: '13/16 in', buttonholes: 'none', buttons: 3 })).printed;
+    const mm = sheetWords({ unit: 'mm', shortenBy: '13/16 in', buttonholes: 'none', buttons: 3 }).printed;
     expect(mm.shortenBy.text).toBe(`${Math.floor(typedMm * 2) / 2} mm`);
     // Hem 40 mm by default in metric (kind-defaults, common practice (no source)): cut 40 − 20.5 = 19.5 mm below the present edge.
     expect(mm.cut!.abovePresentEdge.text).toBe('-19.5 mm');
   });
 
   it('working buttonholes: from the shoulder, the head lowered, no cut at the cuff (docs/KINDS.md: common practice (no source))', () => {
-    const c = sleeveSheetContent(buildSleeveSheet(SHOP, { unit: 'mm', shortenBy: 25, buttonholes: 'working' }));
+    const c = sheetWords({ unit: 'mm', shortenBy: 25, buttonholes: 'working' });
     expect(c.printed.method).toBe('shoulder');
     expect(c.heading).toBe('Shortened 25 mm from the shoulder');
     expect(c.lines.map((l) => [l.n, l.fromEdge])).toEqual([
@@ -220,9 +225,9 @@ describe('sleeve sheet examples', () => {
   });
 
   it('says every engine note: checks beside the figures, advice among the steps (catalog words)', () => {
-    const c = sleeveSheetContent(buildSleeveSheet(SHOP, { unit: 'in', precision: 8, shortenBy: '1/4', buttonholes: 'working', workingButtonholeSlack: '1/4' }));
+    const c = sheetWords({ unit: 'in', precision: 8, shortenBy: '1/4', buttonholes: 'working', workingButtonholeSlack: '1/4' });
     expect(c.notes).toEqual(['Working buttonholes cannot move: each one comes 1/4 in nearer the new edge.']);
-    expect(c.steps[0]!.items).toContain("Unpick the vent's corners (mitres) and make them again at the new edge.");
+    expect(c.steps).toContain("Unpick the vent's corners (mitres) and make them again at the new edge.");
     // Working buttonholes stay: the buttons too, 1/4 in nearer the new edge (1 1/4 − 1/4 = 1 in).
     expect(c.buttons!.rows[0]).toMatchObject({ line: null, move: '0 in', after: '1 in' });
   });

@@ -32,15 +32,14 @@ const DRAWING_W = 160;
 const MAIN_GUTTER = 12;
 const DRAWING_H = 136;
 
-/** A sheet's header: what it is, its unit, the shop or "unsaved", the ticket's details and the garment page's QR code; kickerNote replaces the trouser sheet's note on distances. */
-export function Header({ c, link, kickerNote }: { c: Pick<SheetContent, 't' | 'unitNote' | 'title' | 'meta'> & Partial<Pick<SheetContent, 'kind'>>; link?: string; kickerNote?: string }) {
+function Header({ c, link }: { c: SheetContent; link?: string }) {
   const qr = link ? qrPath(link) : null;
   return (
     <View style={s.header}>
       <View style={{ flexGrow: 1, flexShrink: 1, flexBasis: 0 }}>
         <Text style={s.kicker}>
           {c.t('sheet.kicker')}
-          <Text style={{ fontWeight: 400, letterSpacing: 0 }}>{`      ${kickerNote ?? (c.kind ? c.kind.kickerNote : c.t('sheet.kickerNote', { unitNote: c.unitNote }))}`}</Text>
+          <Text style={{ fontWeight: 400, letterSpacing: 0 }}>{`      ${c.kind ? c.kind.kickerNote : c.t('sheet.kickerNote', { unitNote: c.unitNote })}`}</Text>
         </Text>
         <Text style={s.title}>{c.title}</Text>
         {c.meta.length > 0 && <Text style={s.meta}>{c.meta.join('   ·   ')}</Text>}
@@ -293,8 +292,7 @@ function LegNotes({ g, t }: { g: { recorded: string | null; waist: string | null
   );
 }
 
-/** The bench steps in order, then the cautions. */
-export function Steps({ c }: { c: Pick<SheetContent, 't' | 'steps' | 'cautions' | 'language'> }) {
+function Steps({ c }: { c: SheetContent }) {
   return (
     <View wrap={false}>
       <Text style={s.h2}>{c.t('sheet.atBench')}</Text>

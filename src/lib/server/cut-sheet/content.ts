@@ -113,8 +113,7 @@ function belowOrAbove(t: Translate, len: Len): string {
 // toLocaleDateString builds a new formatter on every call (about 1 % of a sheet): one per language.
 const DUE_FORMATS = new Map<Language, Intl.DateTimeFormat>();
 
-/** A due date (ISO yyyy-mm-dd) as the sheet prints it in its language ("Fri, 14 Mar 2025"). */
-export function formatDue(iso: string, language: Language): string {
+function formatDue(iso: string, language: Language): string {
   const d = new Date(`${iso}T12:00:00Z`);
   if (Number.isNaN(d.getTime())) return iso;
   let f = DUE_FORMATS.get(language);

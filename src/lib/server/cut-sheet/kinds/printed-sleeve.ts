@@ -11,12 +11,12 @@
 // - the lining: the fold and pleat wanted rounded to keep lining (fold down, pleat up), the fold
 //   and pleat now the other way, so it is shortened s + (f′ − f) − (p′ − p), never more than exact.
 // Only the wanted and measured inputs come from the input; which way the work goes is the plan's.
-import type { SleeveInput, SleevePlan } from '../../allowance/kind-types';
-import { Exact } from '../../allowance/exact';
-import { InputReader } from '../../allowance/read-input';
-import { readSleeveInput } from '../../allowance/sleeve-shorten';
-import type { Len } from '../../allowance/types';
-import { down, near, StepScale, up } from './printed';
+import type { SleeveInput, SleevePlan } from '../../../allowance/kind-types';
+import { Exact } from '../../../allowance/exact';
+import { InputReader } from '../../../allowance/read-input';
+import { readSleeveInput } from '../../../allowance/sleeve-shorten';
+import type { Len } from '../../../allowance/types';
+import { down, near, StepScale, up } from '../printed';
 
 /** A line on the sleeve's 1:1 strip. */
 export type SleeveStripName = 'button' | 'new-edge' | 'cut' | 'present-edge' | 'present-seam' | 'new-seam' | 'lining-seam';
