@@ -4,7 +4,7 @@
 import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
 import { LanguageProvider } from '@/components/I18n';
-import { SleevePlanView } from '@/components/bench/SleevePlanView';
+import { SleevePlanView } from '@/components/bench/kinds/SleevePlanView';
 import { shortenSleeve, type SleeveInput } from '@/lib/allowance';
 
 const text = (html: string) =>
@@ -16,7 +16,7 @@ const shown = (input: SleeveInput, language: 'en' | 'fr' = 'en') =>
   text(
     renderToStaticMarkup(
       <LanguageProvider language={language}>
-        <SleevePlanView plan={shortenSleeve(input)} />
+        <SleevePlanView plan={{ input, plan: shortenSleeve(input) }} />
       </LanguageProvider>,
     ),
   );

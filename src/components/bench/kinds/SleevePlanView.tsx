@@ -1,5 +1,6 @@
 import { useT } from '@/components/I18n';
 import type { SleeveNoteCode, SleevePlan } from '@/lib/allowance/kind-types';
+import type { SleeveFitting } from '@/lib/shared/fitting/sleeve-fitting';
 import type { Len } from '@/lib/allowance/types';
 import type { MessageKey } from '@/lib/shared/i18n/format';
 
@@ -27,9 +28,10 @@ function noteValues(values: SleevePlan['notes'][number]['values']): Record<strin
   return out;
 }
 
-/** A jacket's or coat's sleeves at the bench: where to chalk and cut from the present edge, the buttons' moves, the vent, the lining, the notes. */
-export function SleevePlanView({ plan }: { plan: SleevePlan }) {
+/** A jacket's or coat's sleeves at the bench (the adapter's plan, live as the fitting is typed): where to chalk and cut from the present edge, the buttons' moves, the vent, the lining, the notes. */
+export function SleevePlanView({ plan: fitting }: { plan: SleeveFitting }) {
   const t = useT();
+  const plan = fitting.plan;
   const cuff = plan.method === 'cuff' && plan.newEdgeAboveEdge && plan.cutAboveEdge;
   const lining = plan.lining.shortenBy;
   const top = plan.buttons.at(-1);
