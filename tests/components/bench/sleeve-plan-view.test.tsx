@@ -48,3 +48,14 @@ describe('SleevePlanView', () => {
     expect(shown({ unit: 'mm', shortenBy: 25, buttonholes: 'working' }, 'fr')).toContain('Descendez la tête de manche de 25 mm');
   });
 });
+
+describe('SleevePlanView on the garment page', () => {
+  it('uses only words the garment page sends its island (BENCH_MESSAGES), so none shows as its key', async () => {
+    const { readFileSync } = await import('node:fs');
+    const { BENCH_MESSAGES } = await import('@/lib/server/i18n/catalog');
+    const source = readFileSync(new URL('../../../src/components/bench/kinds/SleevePlanView.tsx', import.meta.url), 'utf8');
+    const keys = [...source.matchAll(/\bt\(\s*[`']([^`'$]+)/g)].map((m) => m[1]!);
+    expect(keys.length).toBeGreaterThan(10);
+    expect(keys.filter((k) => !BENCH_MESSAGES.some((p) => k.startsWith(p)))).toEqual([]);
+  });
+});

@@ -66,7 +66,7 @@ export function SleevePlanView({ plan: fitting }: { plan: SleeveFitting }) {
             <tr data-testid="sleeve-line-cut" className="border-b border-rule text-cut">
               <th scope="row" className="font-extrabold">
                 <span>2 </span>
-                {`${t('sheet.cutBadge')} · ${t('sleeve.line.cut')}`}
+                {`${t('sleeve.plan.cut')} · ${t('sleeve.line.cut')}`}
                 <span className="measure block text-base font-semibold">{t('sleeve.plan.cutHint', { hemDepth: plan.hemDepth.text })}</span>
               </th>
               <td className="measure text-right text-5xl font-extrabold" data-mm={plan.cutAboveEdge!.mm}>
