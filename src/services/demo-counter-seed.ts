@@ -11,6 +11,7 @@ const DEMO_PRICES: Record<PriceKey, number> = {
   'cuff-remake': 2950,
   'original-hem': 2200,
   'skirt-hem': 2600,
+  'sleeves-shorten': 3200,
   'taper-let-out': 1100,
   rush: 900,
 };

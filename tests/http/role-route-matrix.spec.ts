@@ -507,13 +507,14 @@ const MATRIX: Record<string, 'public: calculator' | 'auth: better-auth' | Partia
       request: () => ({ path: '/api/prices' }),
       expect: signedIn(200, { apprentice: 403 }),
       check: (a, actor) => {
-        // Six trouser lines and the skirt's hem.
+        // Six trouser lines, the skirt's hem and the sleeves.
         expect(a.body.items.map((i: { key: string }) => i.key)).toEqual([
           'plain-hem',
           'cuff-from-hem',
           'cuff-remake',
           'original-hem',
           'skirt-hem',
+          'sleeves-shorten',
           'taper-let-out',
           'rush',
         ]);

@@ -31,6 +31,7 @@ export const TEST_PRICES = [
   { key: 'cuff-remake', label: 'Cuff let down and re-made', amountMinor: 3200 },
   { key: 'original-hem', label: 'Jeans, original hem kept', amountMinor: 2300 },
   { key: 'skirt-hem', label: 'Skirt or dress hem', amountMinor: 2700 },
+  { key: 'sleeves-shorten', label: 'Jacket or coat sleeves shortened', amountMinor: 3300 },
   { key: 'taper-let-out', label: 'Taper let-out', amountMinor: 1200 },
   { key: 'rush', label: 'Rush', amountMinor: 1000 },
 ] as const;

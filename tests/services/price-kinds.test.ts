@@ -39,9 +39,9 @@ beforeAll(async () => {
 afterAll(() => handle.close());
 
 describe('kinds of work on the price list', () => {
-  it('are the shop’s own, beside the seven worked-out lines', async () => {
+  it('are the shop’s own, beside the eight worked-out lines', async () => {
     const list = await prices.getPriceList(a.counter);
-    expect(list.items).toHaveLength(7);
+    expect(list.items).toHaveLength(8);
     expect(list.kinds.map((k) => [k.name, k.amountMinor, k.rushApplies, k.retiredAt])).toEqual([
       ['Replace zip', 1500, true, null],
       ['Taper legs', 2200, true, null],

@@ -2,7 +2,7 @@
 // pricing function and the islands all read this one list.
 
 /** Every priced piece of work; the lead sets an amount for each. */
-export const PRICE_KEYS = ['plain-hem', 'cuff-from-hem', 'cuff-remake', 'original-hem', 'skirt-hem', 'taper-let-out', 'rush'] as const;
+export const PRICE_KEYS = ['plain-hem', 'cuff-from-hem', 'cuff-remake', 'original-hem', 'skirt-hem', 'sleeves-shorten', 'taper-let-out', 'rush'] as const;
 /** One priced piece of work. */
 export type PriceKey = (typeof PRICE_KEYS)[number];
 
@@ -13,6 +13,7 @@ export const DEFAULT_PRICE_LABELS: Record<PriceKey, string> = {
   'cuff-remake': 'Cuff let down and re-made',
   'original-hem': 'Jeans, original hem kept',
   'skirt-hem': 'Skirt or dress hem',
+  'sleeves-shorten': 'Jacket or coat sleeves shortened (the pair)',
   'taper-let-out': 'Taper let-out at the cuff (per pair)',
   rush: 'Rush surcharge (per ticket)',
 };

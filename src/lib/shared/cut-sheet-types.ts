@@ -5,6 +5,7 @@ import type { CreaseLanding, CuffInput, CuffPlan, HemInput, HemPlan, HemTaperInp
 import type { OriginalHemInput, OriginalHemPlan } from '@/lib/allowance/kind-types';
 import type { ExistingFinish } from '@/lib/shared/existing-finish';
 import type { SkirtPlan } from './fitting/skirt-fitting';
+import type { SleeveFitting } from './fitting/sleeve-fitting';
 
 /** The paper a sheet is printed on. */
 export type PageSize = 'LETTER' | 'A4';
@@ -123,7 +124,13 @@ export interface SkirtSheetData {
 }
 
 /** The sheet of a garment fitted once, not per leg, by its kind (cut-sheet/kinds/ draws each). */
-export type KindSheetData = SkirtSheetData;
+/** Jacket or coat sleeves' sheet: the engine's input as typed (the sheet prints from both) and its plan, in the sheet's unit. */
+export interface SleeveSheetData {
+  kind: 'sleeves';
+  plan: SleeveFitting;
+}
+
+export type KindSheetData = SkirtSheetData | SleeveSheetData;
 
 /** Everything one cut sheet shows: one garment, one page. */
 export interface CutSheetData {

@@ -14,7 +14,7 @@ import { sheetContent } from '@/lib/server/cut-sheet/content';
 import { sheetStripColumns } from '@/lib/server/cut-sheet/CutSheet';
 import { renderCutSheet } from '@/lib/server/cut-sheet/render';
 import type { SkirtBlockWords } from '@/lib/server/cut-sheet/kinds/skirt-sheet';
-import { SKIRT_ADAPTER } from '@/lib/shared/fitting/skirt-fitting';
+import { SKIRT_ADAPTER, type SkirtPlan } from '@/lib/shared/fitting/skirt-fitting';
 import type { KindFittingView } from '@/lib/shared/kind-fitting-request';
 import type { CutSheetData } from '@/lib/shared/cut-sheet-types';
 import { crowdedRuns, textRuns } from './pdf-runs';
@@ -148,7 +148,8 @@ describe('a skirt adds up as printed, on the safe side of the cloth', () => {
         const n = (t: string) => steps(t, unit, precision);
         expect(n(p.depth.text) + n(p.turnUnder.text)).toBe(n(p.keep.text));
         if (p.fullness && p.landing) expect(n(p.hemRound.text) - n(p.fullness.text)).toBe(n(p.landing.text));
-        const plan = data.kindSheet!.plan;
+        // A skirt's sheet carries the skirt's plan (KindSheetData is every kind's).
+        const plan = data.kindSheet!.plan as SkirtPlan;
         const below = n(p.level!.belowPins.text);
         b.points.forEach((r, k) => {
           expect(n(r.pin) - below).toBe(n(r.newLine));

@@ -4,6 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { checkTaper } from '@/lib/allowance';
 import { balanceOf, finishKey, isRushableWork, priceTicket, reductionNeedsLead, type GarmentFacts, type PriceList } from '@/lib/pricing/price-lines';
 import { needsLetOut } from '@/lib/pricing/taper-let-out';
+import { workKeyOf } from '@/lib/shared/fitting/garment-kinds';
 
 // An invented list (minor units): not anyone's real prices.
 const LIST: PriceList = {
@@ -12,6 +13,7 @@ const LIST: PriceList = {
   'cuff-remake': { label: 'Cuff let down and re-made', amountMinor: 3200 },
   'original-hem': { label: 'Jeans, original hem kept', amountMinor: 2300 },
   'skirt-hem': { label: 'Skirt or dress hem', amountMinor: 2700 },
+  'sleeves-shorten': { label: 'Jacket sleeves shortened', amountMinor: 3300 },
   'taper-let-out': { label: 'Taper let-out', amountMinor: 1200 },
   rush: { label: 'Rush', amountMinor: 1000 },
 };
@@ -50,6 +52,13 @@ describe('priceTicket', () => {
       { garmentId: null, key: 'rush', label: 'Rush', amountMinor: 1000 },
     ]);
     expect(finishKey(garment({ finish: null, workKey: 'skirt-hem' }))).toBe('skirt-hem');
+  });
+
+  it('prices jacket sleeves once for the pair at their own line, from the kind (KIND_PRICE_KEYS)', () => {
+    const workKey = workKeyOf('sleeves');
+    expect(workKey).toBe('sleeves-shorten');
+    const { lines } = priceTicket([garment({ label: 'Navy blazer', finish: null, workKey })], LIST, { rush: false });
+    expect(lines).toEqual([{ garmentId: 'g1', key: 'sleeves-shorten', label: 'Jacket sleeves shortened — Navy blazer', amountMinor: 3300 }]);
   });
 
   it('adds the taper let-out line to a cuff whose plan needs one, and never to a plain hem', () => {

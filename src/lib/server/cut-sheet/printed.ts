@@ -77,9 +77,12 @@ export interface PrintedPlan {
 
 // The plan's mm are the nearest JS numbers to exact fractions; a millionth of a step absorbs that.
 const EPS = 1e-6;
-const near = (x: number) => Math.sign(x) * Math.floor(Math.abs(x) + 0.5 + EPS);
-const up = (x: number) => Math.ceil(x - EPS);
-const down = (x: number) => Math.floor(x + EPS);
+/** A count of steps to the nearest whole step (halves away from 0). */
+export const near = (x: number) => Math.sign(x) * Math.floor(Math.abs(x) + 0.5 + EPS);
+/** A count of steps up to a whole step (never under the exact figure). */
+export const up = (x: number) => Math.ceil(x - EPS);
+/** A count of steps down to a whole step (never over the exact figure). */
+export const down = (x: number) => Math.floor(x + EPS);
 
 /** Lengths in whole steps of one unit and precision. */
 export class StepScale {

@@ -59,6 +59,8 @@ export const BENCH_MESSAGES = [
   'skirt.',
   'skirtNote.',
   'levelNote.',
+  // Jacket or coat sleeves: the form's words (sleeves.), the plan's (sleeve.) and the engine's notes (sleeveNote.).
+  'sleeve',
 ] as const;
 
 /** The parts the queue renders: its own words, the steps, due dates and the Mark buttons. */

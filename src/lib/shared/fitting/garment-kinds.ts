@@ -10,8 +10,8 @@ export const GARMENT_KINDS = ['trousers', 'skirt', 'sleeves'] as const;
 /** A garment kind (garments.kind). */
 export type GarmentKindId = (typeof GARMENT_KINDS)[number];
 
-/** The kinds intake offers. Sleeves are declared but held back until their form, sheet and price exist (issue 17). */
-export const OFFERED_KINDS = ['trousers', 'skirt'] as const satisfies readonly GarmentKindId[];
+/** The kinds intake offers. */
+export const OFFERED_KINDS = ['trousers', 'skirt', 'sleeves'] as const satisfies readonly GarmentKindId[];
 
 /** A kind the counter may choose. */
 export type OfferedKind = (typeof OFFERED_KINDS)[number];
@@ -44,7 +44,7 @@ export function isLegKind(kind: GarmentKindId): kind is 'trousers' {
 /** The price list's line for each whole-garment kind's work (null: not built yet); trousers are priced by their finish. */
 export const KIND_PRICE_KEYS: Record<WholeGarmentKind, PriceKey | null> = {
   skirt: 'skirt-hem',
-  sleeves: null,
+  sleeves: 'sleeves-shorten',
 };
 
 /** The price line of a garment kind fitted once (a skirt's hem), or null for trousers and kinds not built yet. */

@@ -3,11 +3,12 @@
 import type { WholeGarmentKind } from './garment-kinds';
 import type { KindAdapter } from './kind-fields';
 import { SKIRT_ADAPTER } from './skirt-fitting';
+import { SLEEVE_ADAPTER } from './sleeve-fitting';
 
-/** The adapters by kind; sleeves are declared (garment-kinds.ts) and not offered until theirs exists. */
+/** The adapters by kind. */
 export const KIND_ADAPTERS: Record<WholeGarmentKind, KindAdapter | null> = {
   skirt: SKIRT_ADAPTER,
-  sleeves: null,
+  sleeves: SLEEVE_ADAPTER,
 };
 
 /** A kind's adapter, or null for trousers (per leg) and kinds not built yet. */

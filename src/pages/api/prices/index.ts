@@ -36,6 +36,7 @@ export const PUT = route(
             { key: 'cuff-remake', label: 'Cuff let down and re-made', amountMinor: 2950 },
             { key: 'original-hem', label: 'Jeans, original hem kept', amountMinor: 2200 },
             { key: 'skirt-hem', label: 'Skirt or dress hem', amountMinor: 2600 },
+            { key: 'sleeves-shorten', label: 'Jacket or coat sleeves shortened (the pair)', amountMinor: 3200 },
             { key: 'taper-let-out', label: 'Taper let-out at the cuff (per pair)', amountMinor: 1100 },
             { key: 'rush', label: 'Rush surcharge (per ticket)', amountMinor: 900 },
           ],

@@ -1,4 +1,4 @@
-// A garment fitted once, not per leg (a skirt or dress): its fitting as saved, and its save.
+// A garment fitted once, not per leg (a skirt or dress, a jacket's sleeves): its fitting as saved, and its save.
 import { route } from '@/lib/server/route';
 import { kindFittingRequest } from '@/lib/shared/kind-fitting-request';
 import { kindFittingOf, saveKindFitting } from '@/services/kind-fittings';
@@ -7,7 +7,7 @@ import { kindFittingJson } from '@/lib/server/answers/bench';
 /** The whole-garment fitting as saved (empty fields until the first save). */
 export const GET = route(
   {
-    summary: 'The fitting of a garment fitted once (a skirt or dress), as saved: lengths as typed with their mm, and choices.',
+    summary: "The fitting of a garment fitted once (a skirt or dress, a jacket's sleeves), as saved: lengths as typed with their mm, and choices.",
     permission: ['measurements', 'read'],
     responses: { 200: kindFittingJson },
   },
@@ -17,7 +17,7 @@ export const GET = route(
 /** Saves the whole-garment fitting; a length that cannot be read, or a shape the engine refuses, is 422 for its field. */
 export const PUT = route(
   {
-    summary: "Saves the fitting of a garment fitted once (a skirt or dress); what the kind's engine would refuse is refused for its field.",
+    summary: "Saves the fitting of a garment fitted once (a skirt or dress, a jacket's sleeves); what the kind's engine would refuse is refused for its field.",
     permission: ['measurements', 'update'],
     body: kindFittingRequest,
     examples: [
