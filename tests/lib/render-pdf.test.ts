@@ -2,15 +2,16 @@
 // react-pdf's own renderToBuffer kept every document's whole tree (about 170 kB a sheet).
 import { setFlagsFromString } from 'node:v8';
 import { runInNewContext } from 'node:vm';
-import { Document, Page, Text } from '@react-pdf/renderer';
+import { Document, Page, Text, View } from '@react-pdf/renderer';
 import { createElement } from 'react';
 import { describe, expect, it, vi } from 'vitest';
 import { buildCutSheet } from '@/lib/server/cut-sheet/build';
-import { registerFonts } from '@/lib/server/cut-sheet/fonts';
+import { FAMILY, registerFonts } from '@/lib/server/cut-sheet/fonts';
 import { renderCutSheet } from '@/lib/server/cut-sheet/render';
 import { renderPdf } from '@/lib/server/render-pdf';
 import { cutSheetDocument } from '@/lib/server/cut-sheet/CutSheet';
 import { SHOP } from './cut-sheet/sheets';
+import { textRuns } from './cut-sheet/pdf-runs';
 
 setFlagsFromString('--expose-gc');
 const gc = runInNewContext('gc') as () => void;
@@ -46,6 +47,27 @@ describe('rendering PDFs through one root', () => {
       expect(text.trimEnd().endsWith('%%EOF')).toBe(true);
       expect(text).toContain(`(Cut sheet ${3500 + i})`);
     });
+  });
+
+  // One root for every document: React moves a keyed row that changed place between two documents
+  // (insertBefore, or appendChild to the end) without removing it first; react-pdf's host kept the
+  // old place too, so the row printed twice (found on the sleeve sheet's buttons table).
+  it('prints a keyed row once when the next document has the rows in another order', async () => {
+    await registerFonts();
+    const rows = (order: string[]) =>
+      createElement(
+        Document,
+        { title: 'Rows' },
+        createElement(
+          Page,
+          { style: { fontFamily: FAMILY } },
+          order.map((r) => createElement(View, { key: r }, createElement(Text, null, `row ${r}`))),
+        ),
+      );
+    const words = (pdf: Buffer) => textRuns(pdf).map((run) => run.text.trim()).filter((t) => t.startsWith('row'));
+    expect(words(await renderPdf(rows(['A', 'B', 'C'])))).toEqual(['row A', 'row B', 'row C']);
+    expect(words(await renderPdf(rows(['C', 'A', 'B'])))).toEqual(['row C', 'row A', 'row B']);
+    expect(words(await renderPdf(rows(['A', 'B', 'C'])))).toEqual(['row A', 'row B', 'row C']);
   });
 
   it('refuses a document that fails while drawing instead of printing the one before it', async () => {
