@@ -64,7 +64,10 @@ describe('rendering PDFs through one root', () => {
           order.map((r) => createElement(View, { key: r }, createElement(Text, null, `row ${r}`))),
         ),
       );
-    const words = (pdf: Buffer) => textRuns(pdf).map((run) => run.text.trim()).filter((t) => t.startsWith('row'));
+    const words = (pdf: Buffer) =>
+      textRuns(pdf)
+        .map((run) => run.text.trim())
+        .filter((t) => t.startsWith('row'));
     expect(words(await renderPdf(rows(['A', 'B', 'C'])))).toEqual(['row A', 'row B', 'row C']);
     expect(words(await renderPdf(rows(['C', 'A', 'B'])))).toEqual(['row C', 'row A', 'row B']);
     expect(words(await renderPdf(rows(['A', 'B', 'C'])))).toEqual(['row A', 'row B', 'row C']);
