@@ -66,7 +66,7 @@ function AddGarment({ ticketId, customerId }: { ticketId: string; customerId: st
       className="flex flex-col gap-3 rounded-lg border-2 border-rule bg-card p-4"
     >
       <h2 className="text-xl font-extrabold">Add a garment</h2>
-      <div className="grid gap-3 sm:grid-cols-[2fr_1fr_1fr]">
+      <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-[2fr_1fr_1fr]">
         <Field
           label="Garment"
           registration={register('description')}
@@ -79,7 +79,7 @@ function AddGarment({ ticketId, customerId }: { ticketId: string; customerId: st
           <label htmlFor="add-kind" className="font-semibold">
             Kind
           </label>
-          <select id="add-kind" {...register('kind')} className="min-h-12 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent">
+          <select id="add-kind" {...register('kind')} className="min-h-12 w-full min-w-0 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent">
             {OFFERED_KINDS.map((k) => (
               <option key={k} value={k}>
                 {GARMENT_KIND_LABELS[k]}
