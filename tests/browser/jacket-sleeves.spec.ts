@@ -9,15 +9,13 @@
 // of room; the lining loses 1 in. The price is the demo list's (demo-counter-seed.ts: 3200 cents, invented).
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { flatText, pdfFile } from '../lib/cut-sheet/poppler';
 import { ready, sharedBrowser, TABLET } from './browser';
+import { printSheetText, priceFromGarments, squash } from './printed-sheet';
 import { signedInPage } from './sign-in';
 
 const browser = sharedBrowser();
 
 const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
-// The PDF's text wraps lines and drops the typographic apostrophe: compare without either.
-const squash = (s: string) => s.replace(/[\s’']+/g, '');
 
 describe('jacket sleeves shortened at the cuff', () => {
   it('are taken in, fitted, planned, printed and priced', async () => {
@@ -62,13 +60,7 @@ describe('jacket sleeves shortened at the cuff', () => {
     await tailor.getByText('Fitting saved.').waitFor();
 
     // Printed from the garment page: the sheet comes back as a PDF with the chalk lines and sums in words.
-    const printed = tailor.waitForResponse((r) => /\/api\/garments\/[^/]+\/sheet$/.test(new URL(r.url()).pathname));
-    await tailor.getByRole('button', { name: 'Print cut sheet' }).click();
-    const response = await printed;
-    expect(response.status()).toBe(200);
-    expect(response.headers()['content-type']).toBe('application/pdf');
-    const sheet = await tailor.request.get(`/api/garments/${garmentId}/sheet`);
-    const text = squash(flatText(pdfFile(new Uint8Array(await sheet.body()))));
+    const text = await printSheetText(tailor, garmentId);
     for (const words of [
       'Charcoal wool jacket',
       'Shortened 1 in at the cuff, hem 1 1/2 in deep',
@@ -86,11 +78,7 @@ describe('jacket sleeves shortened at the cuff', () => {
     await tailor.context().close();
 
     // Back at the counter, pricing from the garments keeps the sleeves' own line.
-    await counter.reload();
-    await ready(counter);
-    await counter.getByRole('button', { name: 'Price from the garments' }).click();
-    await price.getByText('Jacket or coat sleeves shortened (the pair) — Charcoal wool jacket').waitFor();
-    await expect(price.getByRole('row', { name: /Total/ }).textContent()).resolves.toContain('€32.00');
+    await priceFromGarments(counter, price, 'Jacket or coat sleeves shortened (the pair) — Charcoal wool jacket', '€32.00');
     await counter.screenshot({ path: 'test-results/jacket-sleeves-ticket.png', fullPage: true });
     expect(errors).toEqual([]);
     await counter.context().close();

@@ -10,8 +10,8 @@
 // The price is the demo list's (src/services/demo-counter-seed.ts: 2200 cents, invented).
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { flatText, pdfFile } from '../lib/cut-sheet/poppler';
 import { ready, sharedBrowser, TABLET } from './browser';
+import { printSheetText, priceFromGarments, squash } from './printed-sheet';
 import { signedInPage } from './sign-in';
 
 const browser = sharedBrowser();
@@ -19,8 +19,6 @@ const browser = sharedBrowser();
 const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
 // Segmented switches hide the radio itself: tap its label, as a finger would.
 const choose = (page: Page, name: string) => page.locator('label', { has: page.getByRole('radio', { name, exact: true }) }).click();
-// The PDF's text wraps lines and drops the typographic apostrophe: compare without either.
-const squash = (s: string) => s.replace(/[\s’']+/g, '');
 
 describe('jeans keeping the original hem', () => {
   it('are taken in, fitted, chalked from the plan, printed and priced', async () => {
@@ -68,13 +66,7 @@ describe('jeans keeping the original hem', () => {
     await tailor.getByTestId('history').getByText('Left leg, Present edge below the pin mark: nothing → 2 in').waitFor();
 
     // Printed from the garment page: the sheet comes back as a PDF with the chalk lines in words.
-    const printed = tailor.waitForResponse((r) => /\/api\/garments\/[^/]+\/sheet$/.test(new URL(r.url()).pathname));
-    await tailor.getByRole('button', { name: 'Print cut sheet' }).click();
-    const response = await printed;
-    expect(response.status()).toBe(200);
-    expect(response.headers()['content-type']).toBe('application/pdf');
-    const sheet = await tailor.request.get(`/api/garments/${garmentId}/sheet`);
-    const text = squash(flatText(pdfFile(new Uint8Array(await sheet.body()))));
+    const text = await printSheetText(tailor, garmentId);
     for (const words of [
       'Original hem kept, factory hem 5/8 in deep',
       'CUT · Cut the leg',
@@ -90,11 +82,7 @@ describe('jeans keeping the original hem', () => {
     await tailor.context().close();
 
     // Back at the counter, the ticket priced from its garments keeps the jeans' own line.
-    await counter.reload();
-    await ready(counter);
-    await counter.getByRole('button', { name: 'Price from the garments' }).click();
-    await price.getByText('Jeans, original hem kept — Indigo jeans, keep the hem').waitFor();
-    await expect(price.getByRole('row', { name: /Total/ }).textContent()).resolves.toContain('€22.00');
+    await priceFromGarments(counter, price, 'Jeans, original hem kept — Indigo jeans, keep the hem', '€22.00');
     expect(await price.getByRole('row', { name: /Plain hem/ }).count()).toBe(0);
     await counter.screenshot({ path: 'test-results/jeans-original-hem-ticket.png', fullPage: true });
     expect(errors).toEqual([]);

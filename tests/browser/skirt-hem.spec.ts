@@ -13,15 +13,13 @@
 // The price is the demo list's (src/services/demo-counter-seed.ts: 2600 cents, invented).
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { flatText, pdfFile } from '../lib/cut-sheet/poppler';
 import { ready, sharedBrowser, TABLET } from './browser';
+import { printSheetText, priceFromGarments, squash } from './printed-sheet';
 import { signedInPage } from './sign-in';
 
 const browser = sharedBrowser();
 
 const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
-// The PDF's text wraps lines and drops the typographic apostrophe: compare without either.
-const squash = (s: string) => s.replace(/[\s’']+/g, '');
 
 describe('a skirt hem', () => {
   it('is taken in as a skirt, priced at its line, fitted with a live plan, saved and printed', async () => {
@@ -78,13 +76,7 @@ describe('a skirt hem', () => {
     await tailor.getByText('Fitting saved.').waitFor();
 
     // Printed from the garment page: the sheet's words and figures.
-    const printed = tailor.waitForResponse((r) => /\/api\/garments\/[^/]+\/sheet$/.test(new URL(r.url()).pathname));
-    await tailor.getByRole('button', { name: 'Print cut sheet' }).click();
-    const response = await printed;
-    expect(response.status()).toBe(200);
-    expect(response.headers()['content-type']).toBe('application/pdf');
-    const sheet = await tailor.request.get(`/api/garments/${garmentId}/sheet`);
-    const text = squash(flatText(pdfFile(new Uint8Array(await sheet.body()))));
+    const text = await printSheetText(tailor, garmentId);
     for (const words of [
       'Skirt or dress hem',
       'Green half-circle skirt',
@@ -100,11 +92,7 @@ describe('a skirt hem', () => {
     await tailor.context().close();
 
     // Back at the counter: pricing from the garments keeps the skirt's own line.
-    await counter.reload();
-    await ready(counter);
-    await counter.getByRole('button', { name: 'Price from the garments' }).click();
-    await price.getByText('Skirt or dress hem — Green half-circle skirt').waitFor();
-    await expect(price.getByRole('row', { name: /Total/ }).textContent()).resolves.toContain('€26.00');
+    await priceFromGarments(counter, price, 'Skirt or dress hem — Green half-circle skirt', '€26.00');
     expect(errors).toEqual([]);
     await counter.context().close();
   });
