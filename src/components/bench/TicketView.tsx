@@ -79,7 +79,11 @@ function AddGarment({ ticketId, customerId }: { ticketId: string; customerId: st
           <label htmlFor="add-kind" className="font-semibold">
             Kind
           </label>
-          <select id="add-kind" {...register('kind')} className="min-h-12 w-full min-w-0 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent">
+          <select
+            id="add-kind"
+            {...register('kind')}
+            className="min-h-12 w-full min-w-0 rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent"
+          >
             {OFFERED_KINDS.map((k) => (
               <option key={k} value={k}>
                 {GARMENT_KIND_LABELS[k]}
