@@ -85,10 +85,15 @@ export async function kindFittingsOf(shopId: string, garmentIds: string[]): Prom
   return out;
 }
 
+// A garment already found in the shop: its saved fitting, or the empty one before the first save.
+async function viewOf(shopId: string, garmentId: string, kind: WholeGarmentKind): Promise<KindFittingView> {
+  return (await kindFittingsOf(shopId, [garmentId])).get(garmentId) ?? { kind, unit: null, values: {}, choices: {}, takenAt: null, takenBy: null };
+}
+
 /** A garment's whole-garment fitting as its page shows it (empty until the first save). */
 export async function kindFittingOf(actor: Actor, garmentId: string): Promise<KindFittingView> {
   const { g, kind } = await kindGarment(actor, garmentId);
-  return (await kindFittingsOf(actor.shopId, [g.id])).get(g.id) ?? { kind, unit: null, values: {}, choices: {}, takenAt: null, takenBy: null };
+  return viewOf(actor.shopId, g.id, kind);
 }
 
 /** Saves a garment's whole-garment fitting; refused (422, by field) when the kind differs or its engine would refuse it. */
@@ -98,7 +103,7 @@ export async function saveKindFitting(actor: Actor, garmentId: string, input: Ki
     throw new ServiceError(422, `This garment is a ${kind}, not a ${input.kind}: send its own fields.`, { kind: 'Not this garment’s kind.' });
   const read = readKindFitting(adapter, input);
   if (!read.ok) throw new ServiceError(422, 'Some measurements cannot be used.', read.issues);
-  const before = await kindFittingOf(actor, g.id);
+  const before = await viewOf(actor.shopId, g.id, kind);
   const was = savedTexts(before);
   const now = { ...read.choices, ...Object.fromEntries(Object.entries(read.values).map(([k, v]) => [k, v.text])) };
   const events: Parameters<typeof auditMany>[1] = [];
@@ -123,5 +128,5 @@ export async function saveKindFitting(actor: Actor, garmentId: string, input: Ki
       .onConflictDoUpdate({ target: kindFittings.garmentId, set: row });
     await auditMany(tx, events);
   });
-  return kindFittingOf(actor, g.id);
+  return viewOf(actor.shopId, g.id, kind);
 }
