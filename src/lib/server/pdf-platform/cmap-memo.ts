@@ -5,7 +5,7 @@
 // it is written by pdfkit's own code once per glyph list, kept as bytes, and compressed once.
 import { deflateSync } from 'node:zlib';
 import PDFDocument from 'pdfkit';
-import { override } from './override';
+import { override, sharedPatch } from './override';
 import { useDeflated } from './pdf-streams';
 
 interface CmapRef {
@@ -47,8 +47,7 @@ const users = new Map<object, { count: number; undo: () => void }>();
 /** Keeps the ToUnicode maps of the fonts pdfkit embeds for this face's class; returns how to undo it. */
 export function keepCmaps(face: object): () => void {
   const proto = embeddedFontProto(face);
-  let use = users.get(proto);
-  if (!use) {
+  return sharedPatch(users, proto, () => {
     const original = proto.toUnicodeCmap;
     const undo = override(proto, 'toUnicodeCmap', function (this: EmbeddedFontLike) {
       const key = unicodeKey(this.unicode);
@@ -74,18 +73,9 @@ export function keepCmaps(face: object): () => void {
       cmap.end(bytes);
       return cmap;
     });
-    users.set(proto, (use = { count: 0, undo }));
-  }
-  use.count += 1;
-  let done = false;
-  return () => {
-    if (done) return;
-    done = true;
-    use.count -= 1;
-    if (use.count === 0) {
-      users.delete(proto);
+    return () => {
       kept.clear();
-      use.undo();
-    }
-  };
+      undo();
+    };
+  });
 }

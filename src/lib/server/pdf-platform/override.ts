@@ -15,3 +15,24 @@ export function override(target: object, key: PropertyKey, value: unknown): () =
 export function undoAll(undos: (() => void)[]): void {
   while (undos.length) undos.pop()!();
 }
+
+/**
+ * A patch shared by every face of one class: installed by the first user, taken back when the last
+ * lets go. Returns the user's release (calling it twice releases once).
+ */
+export function sharedPatch(users: Map<object, { count: number; undo: () => void }>, proto: object, install: () => () => void): () => void {
+  let use = users.get(proto);
+  if (!use) users.set(proto, (use = { count: 0, undo: install() }));
+  const held = use;
+  held.count += 1;
+  let done = false;
+  return () => {
+    if (done) return;
+    done = true;
+    held.count -= 1;
+    if (held.count === 0) {
+      users.delete(proto);
+      held.undo();
+    }
+  };
+}

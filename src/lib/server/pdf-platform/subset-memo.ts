@@ -6,7 +6,7 @@
 // makes the subset of a usual document identical from one PDF to the next: it is encoded and
 // compressed once per process. Text outside the seed gets a longer glyph list and a subset of its own.
 import { deflateSync } from 'node:zlib';
-import { override } from './override';
+import { override, sharedPatch } from './override';
 import { useDeflated } from './pdf-streams';
 
 interface Glyph {
@@ -73,8 +73,7 @@ export function seedSubset(font: EmbeddedFontLike): void {
 const users = new Map<object, { count: number; undo: () => void }>();
 
 function patchSubset(proto: Subset): () => void {
-  let use = users.get(proto);
-  if (!use) {
+  return sharedPatch(users, proto, () => {
     const encode = proto.encode;
     const undo = override(proto, 'encode', function (this: Subset) {
       let kept = encoded.get(this.font);
@@ -96,17 +95,6 @@ function patchSubset(proto: Subset): () => void {
       hit.glyphs.forEach((g, i) => (this.mapping[g] = i));
       return hit.bytes;
     });
-    users.set(proto, (use = { count: 0, undo }));
-  }
-  use.count += 1;
-  let done = false;
-  return () => {
-    if (done) return;
-    done = true;
-    use.count -= 1;
-    if (use.count === 0) {
-      users.delete(proto);
-      use.undo();
-    }
-  };
+    return undo;
+  });
 }
