@@ -9,7 +9,7 @@ import type { Unit } from '@/lib/allowance/types';
 import type { Actor } from '@/lib/server/api';
 import { kindOf, type WholeGarmentKind } from '@/lib/shared/fitting/garment-kinds';
 import { adapterOf } from '@/lib/shared/fitting/kind-adapters';
-import type { KindAdapter, KindTexts } from '@/lib/shared/fitting/kind-fields';
+import { savedKindTexts, type KindAdapter } from '@/lib/shared/fitting/kind-fields';
 import type { KindFittingInput, KindFittingView, KindSavedLength } from '@/lib/shared/kind-fitting-request';
 import { auditMany } from './audit';
 import { ServiceError } from './errors';
@@ -22,13 +22,6 @@ async function kindGarment(actor: Actor, garmentId: string): Promise<{ g: Garmen
   const adapter = adapterOf(kind);
   if (!adapter || kind === 'trousers') throw new ServiceError(422, 'This garment is fitted per leg: save its fitting through its measurements.');
   return { g, adapter, kind };
-}
-
-/** The typed texts of a saved fitting, by field key (lengths as typed, choices and numbers as kept). */
-export function savedTexts(view: Pick<KindFittingView, 'values' | 'choices'>): KindTexts {
-  const out: KindTexts = { ...view.choices };
-  for (const [k, v] of Object.entries(view.values)) out[k] = v.text;
-  return out;
 }
 
 /** Reads every length with the engine's parser, then the kind's engine over the whole: issues by the form's paths (`fields.<key>`), or what to keep. */
@@ -104,7 +97,7 @@ export async function saveKindFitting(actor: Actor, garmentId: string, input: Ki
   const read = readKindFitting(adapter, input);
   if (!read.ok) throw new ServiceError(422, 'Some measurements cannot be used.', read.issues);
   const before = await viewOf(actor.shopId, g.id, kind);
-  const was = savedTexts(before);
+  const was = savedKindTexts(before);
   const now = { ...read.choices, ...Object.fromEntries(Object.entries(read.values).map(([k, v]) => [k, v.text])) };
   const events: Parameters<typeof auditMany>[1] = [];
   for (const f of adapter.fields) {

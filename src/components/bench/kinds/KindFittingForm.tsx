@@ -8,7 +8,7 @@ import { describedBy, FieldFrame, FormMessage } from '@/components/Field';
 import type { Precision, Unit } from '@/lib/allowance/types';
 import { ApiError, fetchJson } from '@/lib/shared/fetch-json';
 import { adapterOf } from '@/lib/shared/fitting/kind-adapters';
-import { shownFields, type KindField, type KindTexts } from '@/lib/shared/fitting/kind-fields';
+import { savedKindTexts, shownFields, type KindField } from '@/lib/shared/fitting/kind-fields';
 import type { WholeGarmentKind } from '@/lib/shared/fitting/garment-kinds';
 import type { KindFittingView } from '@/lib/shared/kind-fitting-request';
 import { readLength } from '@/lib/shared/length-reading';
@@ -17,12 +17,6 @@ import type { MessageKey } from '@/lib/shared/i18n/format';
 import { PLAN_VIEWS } from './plan-views';
 
 const INPUT = 'min-h-12 w-full rounded border-2 border-rule bg-card px-3 py-2 text-lg focus:border-accent';
-
-function textsOf(saved: KindFittingView): KindTexts {
-  const out: KindTexts = { ...saved.choices };
-  for (const [k, v] of Object.entries(saved.values)) out[k] = v.text;
-  return out;
-}
 
 interface Props {
   garmentId: string;
@@ -41,7 +35,7 @@ export function KindFittingForm({ garmentId, kind, fitting, unit: shopUnit, prec
   const adapter = adapterOf(kind)!;
   // A saved fitting keeps the unit it was typed in; a new one takes the shop's.
   const unit = fitting.unit ?? shopUnit;
-  const [saved, setSaved] = useState(() => textsOf(fitting));
+  const [saved, setSaved] = useState(() => savedKindTexts(fitting));
   const [texts, setTexts] = useState(saved);
   const [issues, setIssues] = useState<Record<string, string>>({});
   const dirty = adapter.fields.some((f) => (texts[f.key] ?? '') !== (saved[f.key] ?? ''));
@@ -55,7 +49,7 @@ export function KindFittingForm({ garmentId, kind, fitting, unit: shopUnit, prec
       }),
     onSuccess: (view) => {
       setIssues({});
-      setSaved(textsOf(view));
+      setSaved(savedKindTexts(view));
       client.setQueryData(['kind-fitting', garmentId], view);
       void client.invalidateQueries({ queryKey: ['garment', garmentId] });
     },

@@ -23,6 +23,13 @@ export interface KindField {
 /** The fields of a kind's fitting as typed: every key a string, '' when blank. */
 export type KindTexts = Record<string, string>;
 
+/** The typed texts of a saved fitting, by field key: lengths as typed, choices as kept. */
+export function savedKindTexts(saved: { values: Record<string, { text: string }>; choices: Record<string, string> }): KindTexts {
+  const out: KindTexts = { ...saved.choices };
+  for (const [k, v] of Object.entries(saved.values)) out[k] = v.text;
+  return out;
+}
+
 /** A whole-garment kind's plug: its fields and its engine (its price line: KIND_PRICE_KEYS in garment-kinds.ts). */
 export interface KindAdapter<Plan = unknown> {
   kind: WholeGarmentKind;
