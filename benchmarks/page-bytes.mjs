@@ -23,7 +23,17 @@ export const PAGES = [
   { path: '/overview?period=4w', signIn: 'lead@pinmark.test', goalKiB: 5 },
   // Drawn on the server from the API document: no script of its own.
   { path: '/api-reference', signIn: null, goalKiB: null },
+  // The fitting page: trouser legs plus the skirt and sleeve forms and plan views it may show.
+  { path: '/garments/[id]', signIn: 'tailor@pinmark.test', goalKiB: null, resolve: firstOpenGarment },
 ];
+
+/** The page of the first open garment in the queue (the path holds its id). */
+async function firstOpenGarment(request) {
+  const res = await request.get('/api/garments');
+  const rows = await res.json();
+  if (!res.ok() || !rows.length) throw new Error(`no open garment to weigh (${res.status()})`);
+  return `/garments/${rows[0].id}`;
+}
 
 /** How many cold loads of each page (PAGE_LOADS, default 5). */
 const LOADS = Number(process.env.PAGE_LOADS || 5);
@@ -70,7 +80,7 @@ async function loadOnce(browser, base, page) {
       })(),
     );
   });
-  await tab.goto(page.path, { waitUntil: 'networkidle' });
+  await tab.goto(page.resolve ? await page.resolve(context.request) : page.path, { waitUntil: 'networkidle' });
   const cookie = (await context.cookies()).map((c) => `${c.name}=${c.value}`).join('; ');
   const load = { files: [], raw: 0, gzip: 0, chromium: 0, br: 0, gzipWire: 0 };
   for (const [url, pending] of scripts) {
