@@ -128,6 +128,19 @@ export async function visibleGarment(actor: Actor, id: string): Promise<Garment>
   return g;
 }
 
+/** Locks a garment of the shop until the transaction ends and returns it; 404 for another shop's garment or an id that is not one.
+ * Two saves of one garment's fitting take it first, so the later reads what the earlier wrote. */
+export async function lockGarment(tx: Db, shopId: string, id: string): Promise<Garment> {
+  if (!isUuid(id)) throw new ServiceError(404, 'No such garment in this shop.');
+  const [g] = await tx
+    .select()
+    .from(garments)
+    .where(and(eq(garments.id, id), eq(garments.shopId, shopId)))
+    .for('update');
+  if (!g) throw new ServiceError(404, 'No such garment in this shop.');
+  return g;
+}
+
 /** Summaries of garments with their assignees' names and whether each has a fitting saved. */
 export async function summaries(rows: Garment[]): Promise<TicketGarment[]> {
   const ids = [...new Set(rows.flatMap((g) => (g.assigneeId ? [g.assigneeId] : [])))];

@@ -2,7 +2,7 @@
 // engine's parser and its kind's engine on save (nothing it would refuse is kept), stored as typed
 // plus exact mm, and every changed value recorded in the audit history.
 import { and, eq, inArray } from 'drizzle-orm';
-import { db } from '@/db';
+import { db, type Db } from '@/db';
 import { kindFittings, user, type Garment } from '@/db/schema';
 import { isAllowanceError, parseLength } from '@/lib/allowance';
 import type { Unit } from '@/lib/allowance/types';
@@ -13,7 +13,7 @@ import { savedKindTexts, type KindAdapter } from '@/lib/shared/fitting/kind-fiel
 import type { KindFittingInput, KindFittingView, KindSavedLength } from '@/lib/shared/kind-fitting-request';
 import { auditMany } from './audit';
 import { ServiceError } from './errors';
-import { visibleGarment } from './garments';
+import { lockGarment, visibleGarment } from './garments';
 
 /** A garment whose kind is fitted once, with its adapter; 404 outside the shop, 422 for trousers (fitted per leg). */
 async function kindGarment(actor: Actor, garmentId: string): Promise<{ g: Garment; adapter: KindAdapter; kind: WholeGarmentKind }> {
@@ -56,11 +56,11 @@ export function readKindFitting(
   return Object.keys(issues).length ? { ok: false, issues } : { ok: true, values, choices };
 }
 
-/** The saved fittings of several garments in one query, by garment id, read within the shop. */
-export async function kindFittingsOf(shopId: string, garmentIds: string[]): Promise<Map<string, KindFittingView>> {
+/** The saved fittings of several garments in one query, by garment id, read within the shop (through `q`: a transaction's own). */
+export async function kindFittingsOf(shopId: string, garmentIds: string[], q: Db = db): Promise<Map<string, KindFittingView>> {
   const out = new Map<string, KindFittingView>();
   if (garmentIds.length === 0) return out;
-  const rows = await db
+  const rows = await q
     .select({ f: kindFittings, takenBy: user.name })
     .from(kindFittings)
     .leftJoin(user, eq(user.id, kindFittings.takenById))
@@ -79,8 +79,8 @@ export async function kindFittingsOf(shopId: string, garmentIds: string[]): Prom
 }
 
 // A garment already found in the shop: its saved fitting, or the empty one before the first save.
-async function viewOf(shopId: string, garmentId: string, kind: WholeGarmentKind): Promise<KindFittingView> {
-  return (await kindFittingsOf(shopId, [garmentId])).get(garmentId) ?? { kind, unit: null, values: {}, choices: {}, takenAt: null, takenBy: null };
+async function viewOf(shopId: string, garmentId: string, kind: WholeGarmentKind, q: Db = db): Promise<KindFittingView> {
+  return (await kindFittingsOf(shopId, [garmentId], q)).get(garmentId) ?? { kind, unit: null, values: {}, choices: {}, takenAt: null, takenBy: null };
 }
 
 /** A garment's whole-garment fitting as its page shows it (empty until the first save). */
@@ -96,25 +96,27 @@ export async function saveKindFitting(actor: Actor, garmentId: string, input: Ki
     throw new ServiceError(422, `This garment is a ${kind}, not a ${input.kind}: send its own fields.`, { kind: 'Not this garment’s kind.' });
   const read = readKindFitting(adapter, input);
   if (!read.ok) throw new ServiceError(422, 'Some measurements cannot be used.', read.issues);
-  const before = await viewOf(actor.shopId, g.id, kind);
-  const was = savedKindTexts(before);
   const now = { ...read.choices, ...Object.fromEntries(Object.entries(read.values).map(([k, v]) => [k, v.text])) };
-  const events: Parameters<typeof auditMany>[1] = [];
-  for (const f of adapter.fields) {
-    const old = was[f.key] ?? null;
-    const next = now[f.key] ?? null;
-    if ((old ?? '') !== (next ?? '')) {
-      events.push({
-        shopId: actor.shopId,
-        actorId: actor.userId,
-        action: 'kind-fitting.changed',
-        subject: g.id,
-        detail: { kind, field: f.key, old, new: next, unit: input.unit },
-      });
-    }
-  }
   const row = { kind, unit: input.unit as Unit, values: read.values, choices: read.choices, takenById: actor.userId, takenAt: new Date() };
+  // The garment is locked before the old values are read: a save at the same moment waits, and
+  // then records its changes from what this one wrote, not from what both saw before.
   await db.transaction(async (tx) => {
+    await lockGarment(tx, actor.shopId, g.id);
+    const was = savedKindTexts(await viewOf(actor.shopId, g.id, kind, tx));
+    const events: Parameters<typeof auditMany>[1] = [];
+    for (const f of adapter.fields) {
+      const old = was[f.key] ?? null;
+      const next = now[f.key] ?? null;
+      if ((old ?? '') !== (next ?? '')) {
+        events.push({
+          shopId: actor.shopId,
+          actorId: actor.userId,
+          action: 'kind-fitting.changed',
+          subject: g.id,
+          detail: { kind, field: f.key, old, new: next, unit: input.unit },
+        });
+      }
+    }
     await tx
       .insert(kindFittings)
       .values({ shopId: actor.shopId, garmentId: g.id, ...row })

@@ -30,7 +30,7 @@ import {
   type SavedLength,
 } from '@/lib/shared/measurement-request';
 import { auditMany, auditOf } from './audit';
-import { visibleGarment } from './garments';
+import { lockGarment, visibleGarment } from './garments';
 import { ServiceError } from './errors';
 import { usablePreset } from './presets';
 import { benchSettings } from './shop-settings';
@@ -116,18 +116,18 @@ export function readLengths(input: Measurements): ReadLengths {
   return Object.keys(issues).length ? { ok: false, issues } : { ok: true, legs };
 }
 
-/** Both legs' saved measurements of a garment (none until the first fitting is saved). */
-export async function legsOf(garmentId: string): Promise<SavedLeg[]> {
-  return (await legsOfGarments([garmentId])).get(garmentId) ?? [];
+/** Both legs' saved measurements of a garment (none until the first fitting is saved), through `q` (a transaction's own). */
+export async function legsOf(garmentId: string, q: Db = db): Promise<SavedLeg[]> {
+  return (await legsOfGarments([garmentId], q)).get(garmentId) ?? [];
 }
 
-/** The saved legs of several garments in one query, by garment id (absent until a fitting is saved). */
-export async function legsOfGarments(garmentIds: string[]): Promise<Map<string, SavedLeg[]>> {
+/** The saved legs of several garments in one query, by garment id (absent until a fitting is saved), through `q`. */
+export async function legsOfGarments(garmentIds: string[], q: Db = db): Promise<Map<string, SavedLeg[]>> {
   const byGarment = new Map<string, SavedLeg[]>();
   if (garmentIds.length === 0) return byGarment;
   // The preset is read through its id, and only within the fitting's own shop: a rename shows at
   // once, and an id from elsewhere (never accepted on save) could not show another shop's name.
-  const rows = await db
+  const rows = await q
     .select({ m: measurements, takenBy: user.name, presetId: presets.id, presetName: presets.name })
     .from(measurements)
     .leftJoin(user, eq(user.id, measurements.takenById))
@@ -195,7 +195,6 @@ export async function saveMeasurements(
     const refused = waistFirstIssues(input, (await benchSettings(actor.shopId)).waistOrder);
     if (refused) throw new ServiceError(422, Object.values(refused)[0]!, refused);
   }
-  const before = new Map((await legsOf(garmentId)).map((l) => [l.leg, l]));
   const events: Parameters<typeof auditMany>[1] = [];
   const change = (leg: Leg, field: string, old: string | null, now: string | null) => {
     if ((old ?? '') !== (now ?? '')) {
@@ -208,7 +207,11 @@ export async function saveMeasurements(
       });
     }
   };
+  // The garment is locked before the old values are read: a save at the same moment waits, and
+  // then records its changes from what this one wrote, not from what both saw before.
   await db.transaction(async (tx) => {
+    await lockGarment(tx, actor.shopId, garmentId);
+    const before = new Map((await legsOf(garmentId, tx)).map((l) => [l.leg, l]));
     for (const leg of LEGS) {
       const was = before.get(leg);
       const typed = input.legs[leg];

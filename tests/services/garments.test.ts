@@ -5,9 +5,9 @@ import type { Shop } from './fixtures';
 
 vi.mock('@/db', () => import('../db/db-mock'));
 
-const { handle } = await import('@/db');
+const { db, handle } = await import('@/db');
 const { createTicket } = await import('@/services/tickets');
-const { addGarment, garmentsOfTicket, getGarment, listQueue, moveGarment, updateGarment } = await import('@/services/garments');
+const { addGarment, garmentsOfTicket, getGarment, listQueue, lockGarment, moveGarment, updateGarment } = await import('@/services/garments');
 const { garmentMovedListeners } = await import('@/services/garment-events');
 const { fittingOf } = await import('@/services/measurements');
 const { makeShop } = await import('./fixtures');
@@ -107,5 +107,14 @@ describe('garments', () => {
     await expect(moveGarment(a.lead, foreign.id, 'marked')).rejects.toMatchObject({ status: 404 });
     await expect(getGarment(a.apprentice, tailors.id)).rejects.toMatchObject({ status: 404 });
     await expect(getGarment(a.lead, 'nope')).rejects.toMatchObject({ status: 404 });
+  });
+});
+
+describe('lockGarment', () => {
+  it('locks and answers the shop’s own garment, and is 404 for another shop’s garment or an id that is not one', async () => {
+    const mine = await oneGarment(a);
+    const foreign = await oneGarment(b);
+    expect((await db.transaction((tx) => lockGarment(tx, a.shopId, mine.id))).id).toBe(mine.id);
+    for (const id of [foreign.id, 'not-an-id']) await expect(db.transaction((tx) => lockGarment(tx, a.shopId, id))).rejects.toMatchObject({ status: 404 });
   });
 });

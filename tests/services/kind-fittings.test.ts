@@ -10,7 +10,7 @@ vi.mock('@/db', () => import('../db/db-mock'));
 
 const { handle, db } = await import('@/db');
 const { auditEvents, kindFittings } = await import('@/db/schema');
-const { eq } = await import('drizzle-orm');
+const { and, eq, sql } = await import('drizzle-orm');
 const { intakeRequest, garmentPatch } = await import('@/lib/shared/bench-requests');
 const { kindFittingRequest } = await import('@/lib/shared/kind-fitting-request');
 const svc = await import('@/services/kind-fittings');
@@ -148,6 +148,41 @@ describe('a skirt fitting', () => {
     expect((await svc.kindFittingOf(a.tailor, garment.id)).values.hemDepth?.text).toBe('1');
     // A batch read for shop B never carries shop A's row, even when asked for A's garment by id.
     expect((await svc.kindFittingsOf(b.shopId, [garment.id])).size).toBe(0);
+  });
+});
+
+// Whether a field's change events link up: from `start`, each event's old is the previous one's new, ending at `end`.
+function chained(events: { old: unknown; new: unknown }[], start: unknown, end: unknown): boolean {
+  let at: unknown = start;
+  const left = [...events];
+  while (left.length) {
+    const i = left.findIndex((e) => e.old === at);
+    if (i < 0) return false;
+    at = left.splice(i, 1)[0]!.new;
+  }
+  return at === end;
+}
+
+describe('two saves of one skirt at the same moment', () => {
+  it('each record the change from what the other saved: the history links up and ends at the saved value', async () => {
+    for (let round = 0; round < 6; round += 1) {
+      const { garment } = await skirt(a, `Racing skirt ${round}`);
+      await svc.saveKindFitting(a.tailor, garment.id, request(HALF_CIRCLE));
+      // The second save starts a few database round trips after the first, a different moment each round.
+      const late = async () => {
+        for (let hop = 0; hop < round; hop += 1) await db.execute(sql`select 1`);
+        return svc.saveKindFitting(a.lead, garment.id, request({ ...HALF_CIRCLE, hemDepth: '3/4' }));
+      };
+      await Promise.all([svc.saveKindFitting(a.tailor, garment.id, request({ ...HALF_CIRCLE, hemDepth: '7/8' })), late()]);
+      const saved = (await svc.kindFittingOf(a.tailor, garment.id)).values.hemDepth?.text;
+      const events = await db
+        .select()
+        .from(auditEvents)
+        .where(and(eq(auditEvents.subject, garment.id), eq(auditEvents.action, 'kind-fitting.changed')));
+      const depth = events.map((e) => e.detail as { field: string; old: unknown; new: unknown }).filter((d) => d.field === 'hemDepth');
+      expect(depth.length, `round ${round}`).toBe(3);
+      expect(chained(depth, null, saved), `round ${round}: ${JSON.stringify(depth)} ending at ${saved}`).toBe(true);
+    }
   });
 });
 

@@ -5,8 +5,9 @@ import type { Shop } from './fixtures';
 
 vi.mock('@/db', () => import('../db/db-mock'));
 
-const { handle } = await import('@/db');
-const { fittingOf, readLengths } = await import('@/services/measurements');
+const { db, handle } = await import('@/db');
+const { sql } = await import('drizzle-orm');
+const { fittingOf, legsOf, readLengths } = await import('@/services/measurements');
 const { makeShop } = await import('./fixtures');
 const { fittingRequest, openTicket, saveFitting } = await import('./garment-fixtures');
 
@@ -101,5 +102,42 @@ describe('measurements', () => {
     const g = await garmentOf(b);
     await expect(saveFitting(a.tailor, g.id, fittingRequest({ cuffDepth: '1 1/2' }))).rejects.toMatchObject({ status: 404 });
     await expect(fittingOf(a.tailor, g.id)).rejects.toMatchObject({ status: 404 });
+  });
+});
+
+// Whether a field's change events link up: from `start`, each event's old is the previous one's new, ending at `end`.
+function chained(events: { old: unknown; new: unknown }[], start: unknown, end: unknown): boolean {
+  let at: unknown = start;
+  const left = [...events];
+  while (left.length) {
+    const i = left.findIndex((e) => e.old === at);
+    if (i < 0) return false;
+    at = left.splice(i, 1)[0]!.new;
+  }
+  return at === end;
+}
+
+describe('two fittings of one pair saved at the same moment', () => {
+  it('each record the change from what the other saved: every leg’s history links up and ends at the saved value', async () => {
+    for (let round = 0; round < 6; round += 1) {
+      const g = await garmentOf();
+      await saveFitting(a.tailor, g.id, fittingRequest({ cuffDepth: '1 1/2', available: '5' }));
+      // The second save starts a few database round trips after the first, a different moment each round.
+      const late = async () => {
+        for (let hop = 0; hop < round; hop += 1) await db.execute(sql`select 1`);
+        return saveFitting(a.lead, g.id, fittingRequest({ cuffDepth: '1 1/4', available: '5' }));
+      };
+      await Promise.all([saveFitting(a.tailor, g.id, fittingRequest({ cuffDepth: '1 3/4', available: '5' })), late()]);
+      const legs = await legsOf(g.id);
+      const history = (await fittingOf(a.lead, g.id)).history.filter((e) => e.action === 'measurement.changed');
+      for (const leg of ['left', 'right'] as const) {
+        const saved = legs.find((l) => l.leg === leg)?.values.cuffDepth?.text;
+        const depth = history
+          .map((e) => e.detail as { leg: string; field: string; old: unknown; new: unknown })
+          .filter((d) => d.leg === leg && d.field === 'cuffDepth');
+        expect(depth.length, `round ${round}, ${leg}`).toBe(3);
+        expect(chained(depth, null, saved), `round ${round}, ${leg}: ${JSON.stringify(depth)} ending at ${saved}`).toBe(true);
+      }
+    }
   });
 });
