@@ -1,5 +1,6 @@
 // Demo data for a first start on an empty database: an invented shop, one person in each role,
-// a few customers and tickets at different steps (demo-bench-seed.ts). Every name here is made up.
+// a few customers and tickets at different steps (demo-bench-seed.ts, and a skirt and an overcoat:
+// demo-kinds-seed.ts). Every name here is made up.
 // The seeders and auth are loaded only when the database is empty: every later start on existing
 // data asks one count and goes on, without their modules.
 import { randomUUID } from 'node:crypto';
@@ -36,10 +37,11 @@ async function isEmpty(): Promise<boolean> {
 /** Seeds the demo shop when the database is empty; returns whether it did. */
 export async function seedDemoIfEmpty(): Promise<boolean> {
   if (!(await isEmpty())) return false;
-  const [{ auth }, { seedHousePresets }, { seedBenchDemo }, { seedCounterDemo }, { seedOverviewDemo }] = await Promise.all([
+  const [{ auth }, { seedHousePresets }, { seedBenchDemo }, { seedKindsDemo }, { seedCounterDemo }, { seedOverviewDemo }] = await Promise.all([
     import('@/lib/server/auth'),
     import('./presets'),
     import('./demo-bench-seed'),
+    import('./demo-kinds-seed'),
     import('./demo-counter-seed'),
     import('./demo-overview-seed'),
   ]);
@@ -60,6 +62,7 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
     people.map((p) => p.id),
     ids,
   );
+  await seedKindsDemo(shopId, ids);
   await seedHousePresets(shopId);
   await seedCounterDemo(shopId);
   await seedOverviewDemo(shopId, ids);

@@ -10,7 +10,7 @@
 //   must pass all of it too. A screen with a layout problem is photographed into
 //   test-results/screens/<who>-<screen>-<width>.png.
 // The states: the calculator's warnings, its taper check and its dimmed last good plan, the
-// garment page with the presets open, intake with a second garment (each row's Remove button), the
+// garment page with the presets open (and the demo's skirt and coat sleeves), intake with a second garment (each row's Remove button), the
 // counter with a payment and its receipt, /paid with a real session, the outbox with a receipt in
 // it, and every refusal (403) a role meets. The table of screens must name every page file in
 // src/pages, so a new page cannot be left out unnoticed. Each role signs in once; its screens are
@@ -45,6 +45,9 @@ const size = ({ width, height }: { width: number; height: number }) => ({ width,
 interface Fixture {
   ticketId: string;
   garmentId: string;
+  /** the demo's teal skirt and camel overcoat (demo-kinds-seed.ts): garments fitted once, not per leg */
+  skirtId: string;
+  coatId: string;
   invitationId: string;
   /** a ticket with a cash deposit (receipt e-mailed) and an open pay link */
   paidTicketId: string;
@@ -134,7 +137,11 @@ function screens(f: Fixture): Record<string, Visit[]> {
     ],
     customers: [{ label: 'customers', path: '/customers' }],
     forgot: [{ label: 'forgotten password', path: '/forgot' }],
-    'garments/[id]': [{ label: 'garment', path: `/garments/${f.garmentId}`, steps: [{ label: 'with the presets open', run: presetsOpen, when: fitter }] }],
+    'garments/[id]': [
+      { label: 'garment', path: `/garments/${f.garmentId}`, steps: [{ label: 'with the presets open', run: presetsOpen, when: fitter }] },
+      { label: 'garment, a skirt', path: `/garments/${f.skirtId}` },
+      { label: 'garment, coat sleeves', path: `/garments/${f.coatId}` },
+    ],
     'invite/[id]': [{ label: 'invitation', path: `/invite/${f.invitationId}` }],
     'sent-messages': [{ label: 'sent messages (outbox)', path: '/sent-messages' }],
     overview: [{ label: 'overview', path: '/overview?period=4w' }],
@@ -156,7 +163,7 @@ function screens(f: Fixture): Record<string, Visit[]> {
     'tickets/new': [{ label: 'new ticket', path: '/tickets/new', steps: [{ label: 'with a second garment', run: secondGarment, when: intake }] }],
   };
 }
-const ROUTE_KEYS = Object.keys(screens({ ticketId: '', garmentId: '', invitationId: '', paidTicketId: '', sessionId: '' }));
+const ROUTE_KEYS = Object.keys(screens({ ticketId: '', garmentId: '', skirtId: '', coatId: '', invitationId: '', paidTicketId: '', sessionId: '' }));
 
 /** A ticket with a cash deposit whose receipt went by e-mail, and an open pay link for the rest. */
 async function paidFixture(): Promise<{ paidTicketId: string; sessionId: string }> {
@@ -205,7 +212,7 @@ async function watchedPage(context: BrowserContext): Promise<{ page: Page; viola
 }
 
 const browser = sharedBrowser();
-let shared: Omit<Fixture, 'ticketId' | 'garmentId'>;
+let shared: Omit<Fixture, 'ticketId' | 'garmentId' | 'skirtId' | 'coatId'>;
 
 beforeAll(async () => {
   mkdirSync(SHOTS, { recursive: true });
@@ -253,17 +260,20 @@ for (const who of [...ROLES, 'signed out'] as const) {
       const options = { baseURL: inject('baseURL'), viewport: size(VIEWPORTS[0]!), hasTouch: true };
       context = await browser().newContext(options);
       ({ page, violations } = await watchedPage(context));
-      let ids = { ticketId: shared.paidTicketId, garmentId: '00000000-0000-4000-8000-000000000000' };
+      const nowhere = '00000000-0000-4000-8000-000000000000';
+      let ids = { ticketId: shared.paidTicketId, garmentId: nowhere, skirtId: nowhere, coatId: nowhere };
       if (who !== 'signed out') {
         // Once per role, on the watched page: the sign-in itself is under the CSP check too.
         await signInAs(page, who, '/queue');
         expect(violations, 'CSP violations while signing in').toEqual([]);
-        // Both are in every role's queue: the navy pair is the apprentice's, the chinos nobody's.
+        // All are in every role's queue: the navy pair is the apprentice's, the chinos, skirt and coat nobody's.
         const rows = (await (await page.request.get('/api/garments')).json()) as QueueRow[];
         const navy = rows.find((r) => r.description === 'Navy suit trousers');
         const chinos = rows.find((r) => r.description === 'Stone chinos');
-        expect(navy && chinos, 'demo garments in the queue').toBeTruthy();
-        ids = { ticketId: chinos!.ticketId, garmentId: navy!.id };
+        const skirt = rows.find((r) => r.description === 'Teal half-circle skirt');
+        const coat = rows.find((r) => r.description === 'Camel overcoat');
+        expect(navy && chinos && skirt && coat, 'demo garments in the queue').toBeTruthy();
+        ids = { ticketId: chinos!.ticketId, garmentId: navy!.id, skirtId: skirt!.id, coatId: coat!.id };
       }
       visits = screens({ ...shared, ...ids });
     });

@@ -42,8 +42,11 @@ describe('demo seed', () => {
     const people = await db.select({ email: user.email, role: member.role }).from(member).innerJoin(user, eq(user.id, member.userId));
     expect(people.map((p) => p.role).sort()).toEqual(['apprentice', 'counter', 'lead', 'tailor']);
     expect(people.map((p) => p.email).sort()).toEqual(DEMO_PEOPLE.map((p) => p.email).sort());
+    // As README's "Demo sign-ins" says: six customers and eight tickets.
     const [c] = await db.select({ n: sql<number>`count(*)::int` }).from(customers);
-    expect(c!.n).toBeGreaterThanOrEqual(3);
+    expect(c!.n).toBe(6);
+    const [t] = await db.select({ n: sql<number>`count(*)::int` }).from(tickets);
+    expect(t!.n).toBe(8);
     const statuses = new Set((await db.select({ s: tickets.status }).from(tickets)).map((t) => t.s));
     expect(statuses.size).toBeGreaterThanOrEqual(4);
   });
