@@ -10,8 +10,8 @@ import type { Actor } from '@/lib/server/api';
 import { kindOf, type WholeGarmentKind } from '@/lib/shared/fitting/garment-kinds';
 import { adapterOf } from '@/lib/shared/fitting/kind-adapters';
 import { savedKindTexts, type KindAdapter } from '@/lib/shared/fitting/kind-fields';
-import type { KindFittingInput, KindFittingView, KindSavedLength } from '@/lib/shared/kind-fitting-request';
-import { auditMany } from './audit';
+import type { KindFittingAnswer, KindFittingInput, KindFittingView, KindSavedLength } from '@/lib/shared/kind-fitting-request';
+import { auditMany, auditOf } from './audit';
 import { ServiceError } from './errors';
 import { lockGarment, visibleGarment } from './garments';
 
@@ -83,14 +83,19 @@ async function viewOf(shopId: string, garmentId: string, kind: WholeGarmentKind,
   return (await kindFittingsOf(shopId, [garmentId], q)).get(garmentId) ?? { kind, unit: null, values: {}, choices: {}, takenAt: null, takenBy: null };
 }
 
-/** A garment's whole-garment fitting as its page shows it (empty until the first save). */
-export async function kindFittingOf(actor: Actor, garmentId: string): Promise<KindFittingView> {
+// The fitting with the garment's history, as the route answers it.
+async function answerOf(shopId: string, garmentId: string, kind: WholeGarmentKind): Promise<KindFittingAnswer> {
+  return { ...(await viewOf(shopId, garmentId, kind)), history: await auditOf(shopId, [garmentId]) };
+}
+
+/** A garment's whole-garment fitting as its page shows it (empty until the first save), with the garment's history, newest first. */
+export async function kindFittingOf(actor: Actor, garmentId: string): Promise<KindFittingAnswer> {
   const { g, kind } = await kindGarment(actor, garmentId);
-  return viewOf(actor.shopId, g.id, kind);
+  return answerOf(actor.shopId, g.id, kind);
 }
 
 /** Saves a garment's whole-garment fitting; refused (422, by field) when the kind differs or its engine would refuse it. */
-export async function saveKindFitting(actor: Actor, garmentId: string, input: KindFittingInput): Promise<KindFittingView> {
+export async function saveKindFitting(actor: Actor, garmentId: string, input: KindFittingInput): Promise<KindFittingAnswer> {
   const { g, adapter, kind } = await kindGarment(actor, garmentId);
   if (input.kind !== kind)
     throw new ServiceError(422, `This garment is a ${kind}, not a ${input.kind}: send its own fields.`, { kind: 'Not this garment’s kind.' });
@@ -123,5 +128,5 @@ export async function saveKindFitting(actor: Actor, garmentId: string, input: Ki
       .onConflictDoUpdate({ target: kindFittings.garmentId, set: row });
     await auditMany(tx, events);
   });
-  return viewOf(actor.shopId, g.id, kind);
+  return answerOf(actor.shopId, g.id, kind);
 }

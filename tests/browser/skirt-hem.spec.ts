@@ -74,6 +74,10 @@ describe('a skirt hem', () => {
     await tailor.screenshot({ path: 'test-results/skirt-hem-plan.png', fullPage: true });
     await tailor.getByRole('button', { name: 'Save fitting' }).click();
     await tailor.getByText('Fitting saved.').waitFor();
+    // The garment's history says what was saved, in the form's words (a line per field typed).
+    const history = tailor.getByTestId('history');
+    await history.getByText('Hem depth wanted: nothing → 1 in').waitFor();
+    expect(await history.getByText('Flare: nothing → Circle skirt: a fraction').count()).toBe(1);
 
     // Printed from the garment page: the sheet's words and figures.
     const text = await printSheetText(tailor, garmentId);

@@ -93,6 +93,8 @@ describe('a skirt fitting', () => {
     expect(view.takenBy).toBe(`tailor of Hemline Yard`);
     const events = await db.select().from(auditEvents).where(eq(auditEvents.subject, garment.id));
     expect(events.filter((e) => e.action === 'kind-fitting.changed').length).toBe(Object.keys(HALF_CIRCLE).length);
+    // The answer carries the garment's history too, as its page shows it.
+    expect(view.history.filter((e) => e.action === 'kind-fitting.changed').length).toBe(Object.keys(HALF_CIRCLE).length);
     expect((await getGarment(a.tailor, garment.id)).fitted).toBe(true);
     // Saved again with one change: one more event.
     await svc.saveKindFitting(a.tailor, garment.id, request({ ...HALF_CIRCLE, hemDepth: '7/8' }));

@@ -14,6 +14,8 @@ interface Props {
   /** the shop's unit and precision, for the reading beside a length typed in another unit */
   unit: Unit;
   precision: Precision;
+  /** a line's words for events this list does not know itself (a kind's fitting), or null to leave it to the list */
+  lineOf?: (e: AuditEntry) => string | null;
 }
 
 const OTHER_FIELDS: Record<string, string> = {
@@ -37,7 +39,7 @@ function shown(field: string, value: unknown): string {
   return String(value);
 }
 
-function describe(e: AuditEntry, { label, unit: shopUnit, precision }: Omit<Props, 'history'>): string {
+function describe(e: AuditEntry, { label, unit: shopUnit, precision }: Omit<Props, 'history' | 'lineOf'>): string {
   const d = e.detail;
   if (e.action === 'measurement.changed') {
     const typedIn = isUnit(d.unit) ? d.unit : shopUnit;
@@ -69,12 +71,14 @@ const FIELD_ORDER = ['finish', 'preset', 'unit', ...LEG_LENGTHS] as string[];
 
 /** Newest first; one save's changes (same moment) read left leg before right, in the form's order. */
 function ordered(history: AuditEntry[]): AuditEntry[] {
-  const rank = (e: AuditEntry) => (e.detail.leg === 'right' ? 100 : 0) + FIELD_ORDER.indexOf(String(e.detail.field ?? ''));
+  // Only a leg's lines are ranked; any other keeps the order it came in (a kind's history orders its own).
+  const rank = (e: AuditEntry) =>
+    e.action !== 'measurement.changed' ? -1 : (e.detail.leg === 'right' ? 100 : 0) + FIELD_ORDER.indexOf(String(e.detail.field ?? ''));
   return [...history].sort((x, y) => (x.at === y.at ? rank(x) - rank(y) : x.at < y.at ? 1 : -1));
 }
 
 /** Every change to the garment and its measurements: who, when, old and new value. */
-export function FittingHistory({ history, label, unit, precision }: Props) {
+export function FittingHistory({ history, label, unit, precision, lineOf }: Props) {
   return (
     <section aria-labelledby="history-heading" className="flex flex-col gap-2">
       <h2 id="history-heading" className="text-2xl font-extrabold">
@@ -86,7 +90,7 @@ export function FittingHistory({ history, label, unit, precision }: Props) {
         <ol className="flex flex-col divide-y divide-rule rounded-lg border-2 border-rule bg-card" data-testid="history">
           {ordered(history).map((e) => (
             <li key={e.id} className="flex flex-wrap items-baseline gap-x-4 px-4 py-2">
-              <span className="measure font-semibold">{describe(e, { label, unit, precision })}</span>
+              <span className="measure font-semibold">{lineOf?.(e) ?? describe(e, { label, unit, precision })}</span>
               <span className="text-base text-muted">
                 {e.actorName ?? 'Someone no longer here'} · <time dateTime={e.at}>{dateTimeText(e.at)}</time>
               </span>

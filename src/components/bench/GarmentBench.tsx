@@ -14,9 +14,10 @@ import { DueBadge } from './DueBadge';
 import { FittingForm } from './FittingForm';
 import { KindFittingForm } from './kinds/KindFittingForm';
 import { isLegKind, kindOf } from '@/lib/shared/fitting/garment-kinds';
-import type { KindFittingView } from '@/lib/shared/kind-fitting-request';
+import type { KindFittingAnswer } from '@/lib/shared/kind-fitting-request';
 import { GarmentEdit } from './GarmentEdit';
 import { FittingHistory } from './FittingHistory';
+import { KindHistory } from './KindHistory';
 import { FittingReadOnly } from './FittingReadOnly';
 import { StepBackButton } from './StepBackButton';
 import { StepButton } from './StepButton';
@@ -61,7 +62,7 @@ function Bench({
   });
   const whole = useQuery({
     queryKey: ['kind-fitting', garmentId],
-    queryFn: () => fetchJson<KindFittingView>(`/api/garments/${garmentId}/kind-fitting`),
+    queryFn: () => fetchJson<KindFittingAnswer>(`/api/garments/${garmentId}/kind-fitting`),
     enabled: canReadFitting && kind !== null && !isLegKind(kind),
   });
   const settings = useBenchSettings();
@@ -212,6 +213,9 @@ function Bench({
       <GarmentPhotos garmentId={g.id} canUpload={canUploadPhotos} />
 
       {canReadFitting && fitting.data && <FittingHistory history={fitting.data.history} label={label} unit={unit} precision={precision} />}
+      {canReadFitting && kind !== null && !isLegKind(kind) && whole.data && (
+        <KindHistory history={whole.data.history} kind={kind} label={label} unit={unit} precision={precision} />
+      )}
     </div>
   );
 }

@@ -2,6 +2,7 @@
 // from the kinds' fields (fitting/kind-adapters.ts), so a new kind's fields are checked here too.
 import { z } from 'zod';
 import type { Unit } from '@/lib/allowance/types';
+import type { AuditEntry } from './bench-types';
 import { KIND_ADAPTERS } from './fitting/kind-adapters';
 import type { KindAdapter } from './fitting/kind-fields';
 import type { WholeGarmentKind } from './fitting/garment-kinds';
@@ -52,4 +53,9 @@ export interface KindFittingView {
   choices: Record<string, string>;
   takenAt: string | null;
   takenBy: string | null;
+}
+
+/** The fitting as its route answers it: with the garment's history (its fitting's changes, moves and edits), newest first. */
+export interface KindFittingAnswer extends KindFittingView {
+  history: AuditEntry[];
 }

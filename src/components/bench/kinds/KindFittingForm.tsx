@@ -10,9 +10,10 @@ import { ApiError, fetchJson } from '@/lib/shared/fetch-json';
 import { adapterOf } from '@/lib/shared/fitting/kind-adapters';
 import { savedKindTexts, shownFields, type KindField } from '@/lib/shared/fitting/kind-fields';
 import type { WholeGarmentKind } from '@/lib/shared/fitting/garment-kinds';
-import type { KindFittingView } from '@/lib/shared/kind-fitting-request';
+import type { KindFittingAnswer, KindFittingView } from '@/lib/shared/kind-fitting-request';
 import { readLength } from '@/lib/shared/length-reading';
 import { refusalText } from '@/lib/shared/i18n/engine-messages';
+import { kindChoiceWords, kindFieldLabel } from '@/lib/shared/i18n/kind-words';
 import type { MessageKey } from '@/lib/shared/i18n/format';
 import { PLAN_VIEWS } from './plan-views';
 
@@ -43,7 +44,7 @@ export function KindFittingForm({ garmentId, kind, fitting, unit: shopUnit, prec
   const client = useQueryClient();
   const save = useMutation({
     mutationFn: () =>
-      fetchJson<KindFittingView>(`/api/garments/${garmentId}/kind-fitting`, {
+      fetchJson<KindFittingAnswer>(`/api/garments/${garmentId}/kind-fitting`, {
         method: 'PUT',
         body: { kind, unit, fields: Object.fromEntries(adapter.fields.map((f) => [f.key, texts[f.key] ?? ''])) },
       }),
@@ -63,8 +64,7 @@ export function KindFittingForm({ garmentId, kind, fitting, unit: shopUnit, prec
         () => false,
       );
   });
-  const label = (f: KindField) =>
-    t(`${kind}.field.${f.place ? f.key.split('-')[0] : f.key}` as MessageKey, f.place ? { place: t(`${kind}.place.${f.place}` as MessageKey) } : {});
+  const label = (f: KindField) => kindFieldLabel(t, kind, f);
   // The engine in the browser: the live plan, and each refusal under its field.
   const live = useMemo(() => {
     const refusals = adapter.refusals(texts, unit);
@@ -131,7 +131,7 @@ export function KindFittingForm({ garmentId, kind, fitting, unit: shopUnit, prec
                       >
                         {f.options!.map((o) => (
                           <option key={o} value={o}>
-                            {t(`${kind}.${f.key}.${o}` as MessageKey)}
+                            {kindChoiceWords(t, kind, f.key, o)}
                           </option>
                         ))}
                       </select>

@@ -126,7 +126,7 @@ export const queueRowJson = ticketGarmentJson.omit({ fitted: true }).extend({
   readyAt: z.string().nullable().optional(),
 });
 
-/** A garment fitted once (a skirt or dress): its fitting as saved, lengths as typed with their mm, choices as typed. */
+/** A garment fitted once (a skirt or dress): its fitting as saved, lengths as typed with their mm, choices as typed, and the garment's history. */
 export const kindFittingJson = z.object({
   kind: z.enum(GARMENT_KINDS).exclude(['trousers']),
   unit: z.enum(['in', 'cm', 'mm']).nullable(),
@@ -134,4 +134,5 @@ export const kindFittingJson = z.object({
   choices: z.record(z.string(), z.string()),
   takenAt: z.string().nullable(),
   takenBy: z.string().nullable(),
+  history: z.array(auditEntryJson),
 });

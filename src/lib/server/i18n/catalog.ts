@@ -56,6 +56,7 @@ export const BENCH_MESSAGES = [
   // Garments fitted once (a skirt): the kind's names, its form and plan, and the engine's notes.
   'kind.',
   'kindFitting.',
+  'kindHistory.',
   'skirt.',
   'skirtNote.',
   'levelNote.',

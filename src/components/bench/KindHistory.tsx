@@ -1,0 +1,27 @@
+import { useT } from '@/components/I18n';
+import type { Precision, Unit } from '@/lib/allowance/types';
+import type { AuditEntry } from '@/lib/shared/bench-types';
+import type { WholeGarmentKind } from '@/lib/shared/fitting/garment-kinds';
+import type { GarmentStep } from '@/lib/shared/garment-steps';
+import { kindChangeLine, kindFieldRank } from '@/lib/shared/i18n/kind-words';
+import { FittingHistory } from './FittingHistory';
+
+interface Props {
+  history: AuditEntry[];
+  kind: WholeGarmentKind;
+  label: (s: GarmentStep) => string;
+  /** the shop's unit and precision, for the reading beside a length typed in another unit */
+  unit: Unit;
+  precision: Precision;
+}
+
+/** The history of a garment fitted once (a skirt, sleeves): its fitting's changes in the kind's words, beside its moves and edits. */
+export function KindHistory({ history, kind, label, unit, precision }: Props) {
+  const t = useT();
+  // One save's changes share their moment: read them in the form's order (the list keeps an order it cannot rank).
+  const ordered = [...history].sort((x, y) =>
+    x.at === y.at ? kindFieldRank(kind, x.detail.field) - kindFieldRank(kind, y.detail.field) : x.at < y.at ? 1 : -1,
+  );
+  const lineOf = (e: AuditEntry) => (e.action === 'kind-fitting.changed' ? kindChangeLine(t, kind, e.detail, unit, precision) : null);
+  return <FittingHistory history={ordered} label={label} unit={unit} precision={precision} lineOf={lineOf} />;
+}
