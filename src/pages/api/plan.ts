@@ -14,6 +14,7 @@ import {
 import { json, problem } from '@/lib/server/api';
 import { planRequest, PLAN_UNREADABLE, type PlanRequest, type PlanResponse } from '@/lib/shared/plan-request';
 import { route } from '@/lib/server/route';
+import { planAnswerJson, type PlanAnswer } from '@/lib/server/answers/plan';
 
 export const prerender = false;
 
@@ -64,11 +65,24 @@ export const POST = route(
     examples: [
       { summary: 'A 1 1/2 in cuff', body: { kind: 'cuff', unit: 'in', cuffDepth: '1 1/2' } },
       { summary: 'A plain hem in centimetres', body: { kind: 'hem', unit: 'cm', hemAllowance: '4', turnUnder: '1' } },
+      {
+        summary: 'A 1 3/4 in cuff on 4 in of cloth, an old crease 2 in below the mark: short, with what fits instead',
+        body: { kind: 'cuff', unit: 'in', cuffDepth: '1 3/4', available: '4', oldCrease: '2' },
+      },
+      {
+        summary: 'A taper check under a 1 1/2 in cuff, 1/2 in seams',
+        body: { kind: 'taper', unit: 'in', cuffDepth: '1 1/2', widthAtEdge: '7', widthAbove: '8', heightAbove: '24', seamAllowance: '1/2' },
+      },
+      {
+        summary: 'A taper check under a plain hem, in millimetres',
+        body: { kind: 'hem-taper', unit: 'mm', hemAllowance: '40', widthAtEdge: '180', widthAbove: '205', heightAbove: '300' },
+      },
     ],
+    responses: { 200: planAnswerJson },
   },
   ({ body }) => {
     try {
-      const res = json(plan(body));
+      const res = json(plan(body) satisfies PlanAnswer);
       res.headers.set('cache-control', 'no-store');
       return res;
     } catch (err) {
