@@ -13,7 +13,9 @@
 // The price is the demo list's (src/services/demo-counter-seed.ts: 2600 cents, invented).
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
+import type { QueueRow } from '@/lib/shared/bench-types';
 import { ready, sharedBrowser, TABLET } from './browser';
+import { layoutProblems } from './layout-checks';
 import { printSheetText, priceFromGarments, squash } from './printed-sheet';
 import { signedInPage } from './sign-in';
 
@@ -78,6 +80,7 @@ describe('a skirt hem', () => {
     const history = tailor.getByTestId('history');
     await history.getByText('Hem depth wanted: nothing → 1 in').waitFor();
     expect(await history.getByText('Flare: nothing → Circle skirt: a fraction').count()).toBe(1);
+    await history.screenshot({ path: 'test-results/skirt-hem-history.png' });
 
     // Printed from the garment page: the sheet's words and figures.
     const text = await printSheetText(tailor, garmentId);
@@ -99,5 +102,32 @@ describe('a skirt hem', () => {
     await priceFromGarments(counter, price, 'Skirt or dress hem — Green half-circle skirt', '€26.00');
     expect(errors).toEqual([]);
     await counter.context().close();
+  });
+
+  it('fits a 390 px phone: the levelling table scrolls sideways in its own labelled region, never the page', async () => {
+    // The demo's teal skirt (demo-kinds-seed.ts), levelled at four places: read only, nothing saved.
+    const page = await signedInPage(browser(), 'tailor', '/queue', { viewport: { width: 390, height: 844 }, hasTouch: true });
+    const rows = (await (await page.request.get('/api/garments')).json()) as QueueRow[];
+    const skirt = rows.find((r) => r.description === 'Teal half-circle skirt');
+    expect(skirt, 'the demo skirt in the queue').toBeTruthy();
+    await page.goto(`/garments/${skirt!.id}`);
+    await ready(page);
+    const region = page.getByRole('region', { name: 'The new hem line at each place (scrolls sideways on a narrow screen)' });
+    await region.getByRole('table').waitFor();
+    expect(await region.getAttribute('tabindex')).toBe('0');
+    const box = (await region.boundingBox())!;
+    expect(box.x).toBeGreaterThanOrEqual(0);
+    expect(box.x + box.width).toBeLessThanOrEqual(390);
+    // The page itself does not scroll sideways; the table is wider than its region, which scrolls.
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    const widths = await region.evaluate((el) => ({ scroll: el.scrollWidth, client: el.clientWidth }));
+    expect(widths.scroll).toBeGreaterThan(widths.client);
+    // Reached with the keyboard and scrolled with it.
+    await region.focus();
+    await page.keyboard.press('ArrowRight');
+    await expect.poll(() => region.evaluate((el) => el.scrollLeft)).toBeGreaterThan(0);
+    expect(await layoutProblems(page)).toEqual([]);
+    await page.getByTestId('skirt-plan').screenshot({ path: 'test-results/skirt-plan-390.png' });
+    await page.context().close();
   });
 });

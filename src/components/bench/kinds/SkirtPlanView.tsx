@@ -38,7 +38,17 @@ export function SkirtPlanView({ plan }: { plan: SkirtPlan }) {
           <p data-testid="skirt-level" className="text-lg font-semibold">
             {t('skirt.plan.level', { below: plan.level.newLineBelowPins.text })}
           </p>
-          <div className="overflow-x-auto">
+          {/* Five columns do not fit a phone: the table scrolls in its own region (named, and reachable
+              with the keyboard so it can be scrolled without a pointer), never the page. */}
+          {/* biome-ignore lint/a11y/useSemanticElements: a scroller within the plan's section, not a section of the page */}
+          <div
+            role="region"
+            aria-label={t('skirt.plan.points')}
+            // biome-ignore lint/a11y/noNoninteractiveTabindex: a scrolling region must take focus to be scrolled by keyboard (WCAG 2.1.1)
+            tabIndex={0}
+            data-testid="skirt-points-region"
+            className="max-w-full overflow-x-auto rounded focus-visible:outline-4 focus-visible:outline-offset-2 focus-visible:outline-accent"
+          >
             <table className="w-full text-left text-lg" data-testid="skirt-points">
               <thead>
                 <tr className="border-b-2 border-ink">
