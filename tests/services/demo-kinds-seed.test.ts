@@ -60,7 +60,7 @@ describe('demo kinds seed', () => {
   });
 
   it('fits the overcoat’s sleeves 1 1/4 in shorter, and both print their own cut sheets', async () => {
-    const [[skirt], [coat]] = (await demoGarments()).map((t) => t.garments);
+    const [skirt, coat] = (await demoGarments()).map((t) => t.garments[0]);
     const fitting = await kindFittingOf(shop.lead, coat!.id);
     expect(fitting).toMatchObject({ kind: 'sleeves', unit: 'in', choices: { buttonholes: 'decorative', buttons: '3' } });
     expect(fitting.values.shortenBy).toEqual({ text: '1 1/4', mm: 31.75 }); // 1 1/4 × 25.4
