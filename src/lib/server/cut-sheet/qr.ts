@@ -7,9 +7,15 @@ export interface QrPath {
   d: string;
 }
 
+/** Mask pattern of every sheet's QR code: any of the eight reads the same. */
+export const QR_MASK = 2;
+
 /** Encodes a link as a QR path (error correction M: survives a chalk smudge). */
 export function qrPath(text: string): QrPath {
-  const { modules } = QRCode.create(text, { errorCorrectionLevel: 'M' });
+  // A fixed mask: qrcode otherwise builds the symbol under all eight and scores each, most of the
+  // time a sheet's QR takes; the best-scored one only makes finder-like blotches rarer, and
+  // tests/lib/cut-sheet/qr.test.ts reads links of every length a sheet prints back.
+  const { modules } = QRCode.create(text, { errorCorrectionLevel: 'M', maskPattern: QR_MASK });
   const size = modules.size;
   // Each row's runs of dark modules, merged downwards with the same run in the rows below:
   // about a third fewer shapes for the PDF to draw than one per run.

@@ -1,0 +1,58 @@
+// The sheet's QR code, drawn from its path as the PDF draws it, must read back as the link it was
+// given (jsQR), whatever the link: the mask is fixed (qr.ts), not chosen per code.
+import fc from 'fast-check';
+import jsQR from 'jsqr';
+import QRCode from 'qrcode';
+import { describe, expect, it } from 'vitest';
+import { QR_MASK, qrPath } from '@/lib/server/cut-sheet/qr';
+
+const SCALE = 4;
+const QUIET = 4;
+
+// The path's rectangles ("M x y h w v h h -w z") filled on a white bitmap with a quiet zone.
+function draw(text: string): { rgba: Uint8ClampedArray; side: number } {
+  const { size, d } = qrPath(text);
+  const side = (size + 2 * QUIET) * SCALE;
+  const rgba = new Uint8ClampedArray(side * side * 4).fill(255);
+  let rects = 0;
+  for (const m of d.matchAll(/M(\d+) (\d+)h(\d+)v(\d+)h-\d+z/g)) {
+    const [x, y, w, h] = m.slice(1).map(Number) as [number, number, number, number];
+    rects++;
+    for (let py = (y + QUIET) * SCALE; py < (y + h + QUIET) * SCALE; py++)
+      for (let px = (x + QUIET) * SCALE; px < (x + w + QUIET) * SCALE; px++) rgba.fill(0, (py * side + px) * 4, (py * side + px) * 4 + 3);
+  }
+  expect(d.replace(/M\d+ \d+h\d+v\d+h-\d+z/g, '')).toBe('');
+  expect(rects).toBeGreaterThan(0);
+  return { rgba, side };
+}
+
+const decoded = (text: string) => {
+  const { rgba, side } = draw(text);
+  return jsQR(rgba, side, side)?.data;
+};
+
+describe('the sheet QR code', () => {
+  it('reads back as the garment page link, for ids and addresses of any length', () => {
+    fc.assert(
+      fc.property(fc.webUrl({ withQueryParameters: false, withFragments: false }), fc.uuid(), (base, id) => {
+        const link = `${base}/garments/${id}`;
+        expect(decoded(link)).toBe(link);
+      }),
+      { numRuns: 60 },
+    );
+  });
+
+  it('reads back links at every QR version a sheet meets (short to long)', () => {
+    for (const n of [1, 10, 30, 60, 100, 150, 200]) {
+      const link = `https://shop.example/garments/${'a1b2c3d4e5'.repeat(20).slice(0, n)}`;
+      expect(decoded(link)).toBe(link);
+    }
+  });
+
+  it('uses the fixed mask, the same modules as qrcode gives for it', () => {
+    const link = 'https://bench.cuffwright.test/garments/7b1f0c2e-9d4a-4e55-8a31-0f2f4c6d8e90';
+    const symbol = QRCode.create(link, { errorCorrectionLevel: 'M', maskPattern: QR_MASK });
+    expect(symbol.maskPattern).toBe(QR_MASK);
+    expect(qrPath(link).size).toBe(symbol.modules.size);
+  });
+});
