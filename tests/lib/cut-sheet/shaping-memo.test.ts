@@ -6,6 +6,7 @@ import { setLayoutNodeHook, setLayoutTextHook } from '@react-pdf/layout';
 import fc from 'fast-check';
 import * as fontkit from 'fontkit';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { textWidth } from '@/lib/server/cut-sheet/measure';
 import { renderCutSheet } from '@/lib/server/cut-sheet/render';
 import { SHEET_FEATURES } from '@/lib/server/cut-sheet/shaping-features';
 import { memoiseShaping, wordsOf, type Shaper } from '@/lib/server/pdf-platform/shaping-memo';
@@ -81,5 +82,34 @@ describe('shaping word by word', () => {
     expect(placed(kept.layout(text, FEATURES, undefined, undefined, 'ltr') as unknown as Run)).toEqual(
       placed(whole.layout(text, FEATURES, undefined, undefined, 'ltr') as unknown as Run),
     );
+  });
+});
+
+describe('a run shaped word by word, as its callers read it', () => {
+  // measure.ts (the sheet's column widths) reads advanceWidth from the face's layout with the
+  // features alone, which takes the word-by-word path for a long text: it was undefined there,
+  // so a width came out NaN.
+  it('has the advance width and script of the run shaped whole', () => {
+    const whole = open(FILES[0]!);
+    const kept = open(FILES[0]!);
+    memoiseShaping(kept);
+    for (const text of ['Cloth check: needs 5 7/16 in', 'Finished length from the waist seam']) {
+      const a = whole.layout(text, FEATURES) as unknown as { advanceWidth: number; advanceHeight: number; script: string; glyphs: unknown[] };
+      for (let round = 0; round < 2; round++) {
+        const b = kept.layout(text, FEATURES) as unknown as { advanceWidth: number; advanceHeight: number; script: string; glyphs: unknown[] };
+        expect(b.glyphs.length).toBe(a.glyphs.length);
+        expect(b.advanceWidth, text).toBe(a.advanceWidth);
+        expect(b.advanceHeight, text).toBe(a.advanceHeight);
+        expect(b.script, text).toBe(a.script);
+      }
+    }
+  });
+
+  it('gives the sheet a finite column width for a long label', () => {
+    // The faces the sheets were set with carry the memo (adopted at registration).
+    const width = textWidth('Finished length from the waist seam', 400, 9);
+    expect(Number.isFinite(width)).toBe(true);
+    const whole = open(FILES[0]!) as unknown as { layout: (t: string, f: object) => { advanceWidth: number }; unitsPerEm: number };
+    expect(width).toBeCloseTo((whole.layout('Finished length from the waist seam', FEATURES).advanceWidth * 9) / whole.unitsPerEm, 9);
   });
 });

@@ -13,6 +13,31 @@ interface GlyphRun {
   script?: string;
 }
 
+interface Position {
+  xAdvance: number;
+  yAdvance: number;
+}
+
+// A run put together from kept words, read as fontkit's own GlyphRun is: measure.ts and pdfkit
+// read its advanceWidth, which a plain { glyphs, positions } lacked (a width came out NaN).
+class WordsRun implements GlyphRun {
+  constructor(
+    readonly glyphs: unknown[],
+    readonly positions: unknown[],
+    readonly script: string,
+  ) {}
+  get advanceWidth(): number {
+    let width = 0;
+    for (const p of this.positions) width += (p as Position).xAdvance;
+    return width;
+  }
+  get advanceHeight(): number {
+    let height = 0;
+    for (const p of this.positions) height += (p as Position).yAdvance;
+    return height;
+  }
+}
+
 /** A fontkit face, as far as shaping goes. */
 export interface Shaper {
   layout: (text: string, ...rest: unknown[]) => GlyphRun;
@@ -83,6 +108,6 @@ export function memoiseShaping(face: Shaper): () => void {
       for (const g of run.glyphs) glyphs.push(g);
       for (const p of run.positions) positions.push(p);
     }
-    return { glyphs, positions };
+    return new WordsRun(glyphs, positions, latin);
   });
 }
