@@ -47,12 +47,15 @@ describe('the sheet QR code', () => {
       const link = `https://shop.example/garments/${'a1b2c3d4e5'.repeat(20).slice(0, n)}`;
       expect(decoded(link)).toBe(link);
     }
+    for (const link of ['https://shop.example/garments/12345678901234567890', 'https://café.example/garments/ÉTÉ-2026'])
+      expect(decoded(link)).toBe(link);
   });
 
-  it('uses the fixed mask, the same modules as qrcode gives for it', () => {
+  it('uses the fixed mask and one byte segment: a garment link keeps the size qrcode would choose', () => {
     const link = 'https://bench.cuffwright.test/garments/7b1f0c2e-9d4a-4e55-8a31-0f2f4c6d8e90';
-    const symbol = QRCode.create(link, { errorCorrectionLevel: 'M', maskPattern: QR_MASK });
+    const symbol = QRCode.create([{ data: link, mode: 'byte' }], { errorCorrectionLevel: 'M', maskPattern: QR_MASK });
     expect(symbol.maskPattern).toBe(QR_MASK);
     expect(qrPath(link).size).toBe(symbol.modules.size);
+    expect(symbol.modules.size).toBe(QRCode.create(link, { errorCorrectionLevel: 'M' }).modules.size);
   });
 });
