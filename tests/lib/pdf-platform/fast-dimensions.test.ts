@@ -6,6 +6,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import * as reactPdfLayout from '@react-pdf/layout';
 import { renderCutSheet, renderCutSheets } from '@/lib/server/cut-sheet/render';
 import { fastDimensions } from '@/lib/server/pdf-platform/fast-dimensions';
+import { leanYoga } from '@/lib/server/pdf-platform/lean-yoga';
 import { installPdfPlatform, PDF_PATCHES, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
 import { comparable } from '../cut-sheet/pdf-objects';
 import { generatedSheets } from './generated-sheets';
@@ -27,6 +28,8 @@ describe('the faster yoga pass', () => {
   it('gives every generated sheet and a batch the same PDF objects as react-pdf’s own pass', async () => {
     uninstallPdfPlatform();
     installPdfPlatform({ setting: 'on' });
+    // The lean pass (lean-yoga.test.ts) takes the place of this one when on: off for both sides here.
+    leanYoga()();
     const fast = [];
     for (const s of SHEETS) fast.push(comparable(await renderCutSheet(s)));
     const fastBatch = comparable(await renderCutSheets(SHEETS.slice(0, 10)));
@@ -39,6 +42,7 @@ describe('the faster yoga pass', () => {
       ownBatch = comparable(await renderCutSheets(SHEETS.slice(0, 10)));
     } finally {
       fastDimensions();
+      leanYoga();
     }
     // Overfull sheets (two pages and more) are among them.
     expect(own.filter((o) => o.filter((x) => x.includes('/Type /Page\n')).length > 1).length).toBeGreaterThan(0);

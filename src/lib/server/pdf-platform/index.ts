@@ -8,6 +8,7 @@
 import { keepCmaps } from './cmap-memo';
 import { fastDimensions } from './fast-dimensions';
 import { fastRuns } from './fast-runs';
+import { leanYoga } from './lean-yoga';
 import { loadLoadedAtOnce } from './font-load';
 import { memoiseFace, type MemoFace } from './face-memo';
 import { undoAll } from './override';
@@ -31,12 +32,21 @@ export interface FaceOptions {
   seed?: Seed;
 }
 
+/** Another package a patch relies on, at the version it was written for (as loaded by `via`). */
+export interface AlsoWrittenFor {
+  pkg: string;
+  via: string;
+  version: string;
+}
+
 /** One patch: the package it changes (as loaded by `via`), the version it was written for, and how to apply it. */
 export interface PdfPatch {
   name: string;
   pkg: string;
   via: string;
   writtenFor: string;
+  /** Other packages whose internals it relies on: any other version turns it off too. */
+  also?: readonly AlsoWrittenFor[];
   /** Changes the package's shared objects (prototypes, hooks); returns how to undo it. */
   install?: () => () => void;
   /** Changes one loaded face; returns how to undo it. */
@@ -48,6 +58,14 @@ export const PDF_PATCHES: readonly PdfPatch[] = [
   { name: 'text-layout-memo', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: keepTextLayouts },
   { name: 'fast-dimensions', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: fastDimensions },
   { name: 'style-memo', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: keepStyles },
+  {
+    name: 'lean-yoga',
+    pkg: '@react-pdf/layout',
+    via: '@react-pdf/renderer',
+    writtenFor: '5.2.0',
+    also: [{ pkg: 'yoga-layout', via: '@react-pdf/layout', version: '3.2.1' }],
+    install: leanYoga,
+  },
   { name: 'split-laid-out', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: splitFromFirstLayout },
   { name: 'fast-runs', pkg: '@react-pdf/render', via: '@react-pdf/renderer', writtenFor: '4.7.0', install: fastRuns },
   { name: 'font-load', pkg: '@react-pdf/font', via: '@react-pdf/renderer', writtenFor: '4.1.2', install: loadLoadedAtOnce },
@@ -101,8 +119,11 @@ export function installPdfPlatform(options: InstallOptions = {}): PatchStatus[] 
     const installed = versions(patch.pkg, patch.via);
     const status: PatchStatus = { name: patch.name, pkg: patch.pkg, writtenFor: patch.writtenFor, installed, on: false };
     if (off) return { ...status, reason: 'PDF_SPEED_PATCHES=off' };
-    if (installed !== patch.writtenFor) {
-      const reason = `pdf-platform: ${patch.name} skipped: written for ${patch.pkg} ${patch.writtenFor}, installed ${installed ?? 'not found'}`;
+    const wrong = [{ pkg: patch.pkg, via: patch.via, version: patch.writtenFor }, ...(patch.also ?? [])]
+      .map((need) => ({ ...need, found: need.pkg === patch.pkg && need.via === patch.via ? installed : versions(need.pkg, need.via) }))
+      .find((need) => need.found !== need.version);
+    if (wrong) {
+      const reason = `pdf-platform: ${patch.name} skipped: written for ${wrong.pkg} ${wrong.version}, installed ${wrong.found ?? 'not found'}`;
       log(reason);
       return { ...status, reason };
     }

@@ -1,0 +1,168 @@
+// The lean yoga pass (our patch of @react-pdf/layout) leaves out the yoga calls that change
+// nothing: it must build the same layout as the pass without it, every node's box equal and the
+// same PDF objects for many generated sheets (overfull ones split from their layout among them)
+// and a batch, with about half the calls into yoga; and it is turned off with a log line when
+// react-pdf's layout or yoga-layout is another version, or the layout lacks it.
+import * as reactPdfLayout from '@react-pdf/layout';
+import type { SafeDocumentNode } from '@react-pdf/layout';
+import { afterAll, describe, expect, it } from 'vitest';
+import { cutSheetDocument } from '@/lib/server/cut-sheet/CutSheet';
+import { typeset } from '@/lib/server/cut-sheet/fonts';
+import { renderCutSheet, renderCutSheets } from '@/lib/server/cut-sheet/render';
+import { renderPdfRelaid } from '@/lib/server/render-pdf';
+import { installPdfPlatform, PDF_PATCHES, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
+import { leanYoga } from '@/lib/server/pdf-platform/lean-yoga';
+import { installedVersion } from '@/lib/server/pdf-platform/versions';
+import { comparable } from '../cut-sheet/pdf-objects';
+import { generatedSheets } from './generated-sheets';
+
+const SHEETS = generatedSheets(24, 4242);
+
+afterAll(() => {
+  uninstallPdfPlatform();
+  installPdfPlatform();
+});
+
+interface Laid {
+  type?: string;
+  box?: object;
+  children?: Laid[];
+}
+// Every node's type and box, depth first.
+const boxes = (node: Laid, out: string[] = []): string[] => {
+  out.push(`${node.type}:${JSON.stringify(node.box ?? null)}`);
+  for (const c of node.children ?? []) boxes(c, out);
+  return out;
+};
+
+// The laid-out document of one sheet, as the renderer lays it out before drawing.
+async function laidOut(i: number): Promise<{ layout: SafeDocumentNode; boxes: string[] }> {
+  let kept: SafeDocumentNode | null = null;
+  const { family, print } = await typeset([[SHEETS[i]!], []]);
+  await renderPdfRelaid(cutSheetDocument(print([SHEETS[i]!]), false, [], family), async (layout) => {
+    kept = layout;
+    return layout;
+  });
+  return { layout: kept!, boxes: boxes(kept! as Laid) };
+}
+
+// Calls into yoga's nodes while `work` runs, counted on the node class react-pdf's yoga makes.
+async function yogaCalls(work: () => Promise<unknown>): Promise<number> {
+  const { layout } = await laidOut(0);
+  const yoga = (layout as unknown as { yoga: { node: { create: () => object } } }).yoga;
+  const probe = yoga.node.create() as { free: () => void };
+  const proto = Object.getPrototypeOf(probe) as Record<string, unknown>;
+  probe.free();
+  const Node = proto.constructor as unknown as Record<string, unknown>;
+  let calls = 0;
+  const undo: (() => void)[] = [];
+  const wrap = (target: Record<string, unknown>, key: string) => {
+    const f = target[key] as (...a: unknown[]) => unknown;
+    target[key] = function (this: unknown, ...a: unknown[]) {
+      calls++;
+      return f.apply(this, a);
+    };
+    undo.push(() => {
+      target[key] = f;
+    });
+  };
+  for (const k of Object.getOwnPropertyNames(proto)) if (k !== 'constructor' && typeof proto[k] === 'function') wrap(proto, k);
+  for (const k of ['createWithConfig', 'destroy']) wrap(Node, k);
+  try {
+    await work();
+  } finally {
+    for (const u of undo.reverse()) u();
+  }
+  return calls;
+}
+
+describe('the lean yoga pass', () => {
+  it('is installed with the other patches over the layout and yoga versions it was written for', () => {
+    uninstallPdfPlatform();
+    installPdfPlatform({ setting: 'on' });
+    expect(pdfPatchStatus().find((s) => s.name === 'lean-yoga')).toMatchObject({ on: true, installed: '5.2.0' });
+    expect(installedVersion('yoga-layout', '@react-pdf/layout')).toBe('3.2.1');
+  });
+
+  it('lays every node of every generated sheet out in the same box as the pass without it, with about half the yoga calls', async () => {
+    uninstallPdfPlatform();
+    installPdfPlatform({ setting: 'on' });
+    const lean: string[][] = [];
+    for (let i = 0; i < SHEETS.length; i++) lean.push((await laidOut(i)).boxes);
+    const leanCalls = await yogaCalls(() => renderCutSheet(SHEETS[1]!));
+    const undo = leanYoga();
+    undo();
+    const own: string[][] = [];
+    let ownCalls: number;
+    try {
+      for (let i = 0; i < SHEETS.length; i++) own.push((await laidOut(i)).boxes);
+      ownCalls = await yogaCalls(() => renderCutSheet(SHEETS[1]!));
+    } finally {
+      leanYoga();
+    }
+    for (let i = 0; i < SHEETS.length; i++) {
+      expect(lean[i]!.length, `sheet ${i}`).toBeGreaterThan(50);
+      expect(lean[i], `sheet ${i}`).toEqual(own[i]);
+    }
+    expect(leanCalls).toBeLessThan(ownCalls! * 0.6);
+  }, 120_000);
+
+  it('gives every generated sheet and a batch the same PDF objects as the pass without it', async () => {
+    uninstallPdfPlatform();
+    installPdfPlatform({ setting: 'on' });
+    const lean = [];
+    for (const s of SHEETS) lean.push(comparable(await renderCutSheet(s)));
+    const leanBatch = comparable(await renderCutSheets(SHEETS.slice(0, 10)));
+    const undo = leanYoga();
+    undo();
+    const own = [];
+    let ownBatch: string[];
+    try {
+      for (const s of SHEETS) own.push(comparable(await renderCutSheet(s)));
+      ownBatch = comparable(await renderCutSheets(SHEETS.slice(0, 10)));
+    } finally {
+      leanYoga();
+    }
+    // Overfull sheets (two pages and more) are among them.
+    expect(own.filter((o) => o.filter((x) => x.includes('/Type /Page\n')).length > 1).length).toBeGreaterThan(0);
+    for (let i = 0; i < SHEETS.length; i++) expect(lean[i], `sheet ${i}`).toEqual(own[i]);
+    expect(leanBatch).toEqual(ownBatch!);
+  }, 120_000);
+
+  it('is turned off with one log line when yoga-layout is another version, the other patches kept', () => {
+    uninstallPdfPlatform();
+    const lines: string[] = [];
+    const status = installPdfPlatform({
+      setting: 'on',
+      log: (l) => lines.push(l),
+      versions: (pkg, via) => (pkg === 'yoga-layout' ? '3.3.0' : installedVersion(pkg, via)),
+    });
+    expect(lines).toEqual(['pdf-platform: lean-yoga skipped: written for yoga-layout 3.2.1, installed 3.3.0']);
+    expect(status.filter((s) => !s.on).map((s) => s.name)).toEqual(['lean-yoga']);
+    uninstallPdfPlatform();
+    const other: string[] = [];
+    installPdfPlatform({
+      setting: 'on',
+      log: (l) => other.push(l),
+      versions: (pkg, via) => (pkg === 'yoga-layout' ? null : installedVersion(pkg, via)),
+    });
+    expect(other).toEqual(['pdf-platform: lean-yoga skipped: written for yoga-layout 3.2.1, installed not found']);
+    uninstallPdfPlatform();
+    installPdfPlatform();
+  });
+
+  it('is refused at install with a log line when the layout package lacks it', () => {
+    const { setLeanYoga: _left, ...unpatched } = reactPdfLayout as Record<string, unknown>;
+    expect(() => leanYoga(unpatched)).toThrow(/setLeanYoga.*not applied/);
+    const patch = PDF_PATCHES.find((p) => p.name === 'lean-yoga')!;
+    uninstallPdfPlatform();
+    const lines: string[] = [];
+    const status = installPdfPlatform({
+      setting: 'on',
+      log: (l) => lines.push(l),
+      patches: [{ ...patch, install: () => leanYoga(unpatched) }],
+    });
+    expect(status).toMatchObject([{ name: 'lean-yoga', on: false }]);
+    expect(lines).toEqual([expect.stringMatching(/^pdf-platform: lean-yoga skipped: .*setLeanYoga/)]);
+  });
+});
