@@ -19,31 +19,34 @@ export function qrPath(text: string): QrPath {
   // (a uuid). tests/lib/cut-sheet/qr.test.ts reads links of every length back.
   const { modules } = QRCode.create([{ data: text, mode: 'byte' }], { errorCorrectionLevel: 'M', maskPattern: QR_MASK });
   const size = modules.size;
+  const dark = modules.data;
   // Each row's runs of dark modules, merged downwards with the same run in the rows below:
-  // about a third fewer shapes for the PDF to draw than one per run.
-  const open = new Map<string, { x: number; y: number; w: number; h: number }>();
+  // about a third fewer shapes for the PDF to draw than one per run. A run is keyed by its
+  // start and end as one number (string keys were most of this loop's time).
+  let open = new Map<number, { x: number; y: number; w: number; h: number }>();
   const rects: { x: number; y: number; w: number; h: number }[] = [];
   for (let y = 0; y < size; y++) {
-    const seen = new Set<string>();
+    const next = new Map<number, { x: number; y: number; w: number; h: number }>();
     let x = 0;
     while (x < size) {
-      if (!modules.get(y, x)) {
+      if (!dark[y * size + x]) {
         x++;
         continue;
       }
       const start = x;
-      while (x < size && modules.get(y, x)) x++;
-      const key = `${start}:${x}`;
-      seen.add(key);
+      while (x < size && dark[y * size + x]) x++;
+      const key = start * (size + 1) + x;
       const above = open.get(key);
-      if (above && above.y + above.h === y) above.h++;
-      else {
+      if (above && above.y + above.h === y) {
+        above.h++;
+        next.set(key, above);
+      } else {
         const r = { x: start, y, w: x - start, h: 1 };
-        open.set(key, r);
+        next.set(key, r);
         rects.push(r);
       }
     }
-    for (const key of open.keys()) if (!seen.has(key)) open.delete(key);
+    open = next;
   }
   const d = rects.map((r) => `M${r.x} ${r.y}h${r.w}v${r.h}h${-r.w}z`).join('');
   return { size, d };
