@@ -2,7 +2,8 @@
 // on the benchmark's sheets (two tapered legs, one in four overfull; USUAL=1: no overfull ones):
 // wall and CPU per sheet, each sheet one sample, after eight untimed sheets per switch (a switch
 // empties the memos). For judging one patch on a busy machine, where separate runs differ more
-// than the patch does.
+// than the patch does. Also printed: B's CPU over A's per round (each round's two blocks run
+// back to back, so they share the machine's load), median and quartiles over the rounds.
 // NEW=style-memo,fast-runs NODE_ENV=production node_modules/.bin/vite-node benchmarks/cut-sheet-patches-ab.ts
 import { loadavg } from 'node:os';
 import { performance } from 'node:perf_hooks';
@@ -18,14 +19,17 @@ const sheet = (i: number) => taperedPairSheet(usual && i % 4 === 3 ? i + 1 : i);
 const BLOCKS = Number(process.env.BLOCKS ?? 16);
 const PER_BLOCK = 16;
 
+const median = (a: number[]) => [...a].sort((x, y) => x - y)[a.length >> 1]!;
 const use = (on: boolean) => {
   uninstallPdfPlatform();
   installPdfPlatform({ patches: on ? PDF_PATCHES : PDF_PATCHES.filter((p) => !names.includes(p.name)) });
 };
 for (let i = 0; i < 40; i++) await renderCutSheet(sheet(i));
 const res = { A: { cpu: [] as number[], wall: [] as number[] }, B: { cpu: [] as number[], wall: [] as number[] } };
+const ratios: number[] = [];
 const load0 = loadavg()[0]!;
 for (let r = 0; r < BLOCKS; r++) {
+  const block = { A: [] as number[], B: [] as number[] };
   for (const mode of r % 2 ? (['B', 'A'] as const) : (['A', 'B'] as const)) {
     use(mode === 'B');
     for (let i = 0; i < 8; i++) await renderCutSheet(sheet(1000 + r * 97 + i));
@@ -37,8 +41,10 @@ for (let r = 0; r < BLOCKS; r++) {
       res[mode].wall.push(performance.now() - t);
       const u = process.cpuUsage(c);
       res[mode].cpu.push((u.user + u.system) / 1000);
+      block[mode].push((u.user + u.system) / 1000);
     }
   }
+  ratios.push(median(block.B) / median(block.A));
 }
 use(true);
 const at = (a: number[], f: number) => [...a].sort((x, y) => x - y)[Math.floor(a.length * f)]!.toFixed(2);
@@ -46,4 +52,5 @@ for (const m of ['A', 'B'] as const)
   console.log(
     `${m} (${m === 'A' ? 'without' : 'with'}): wall p25 ${at(res[m].wall, 0.25)} median ${at(res[m].wall, 0.5)} ms; CPU p25 ${at(res[m].cpu, 0.25)} median ${at(res[m].cpu, 0.5)} ms`,
   );
+console.log(`B/A CPU per round: median ${at(ratios, 0.5)} (p25 ${at(ratios, 0.25)}, p75 ${at(ratios, 0.75)})`);
 console.log(`${BLOCKS} blocks of ${PER_BLOCK} sheets each way; load ${load0.toFixed(1)}→${loadavg()[0]!.toFixed(1)}; patches: ${names.join(', ')}`);
