@@ -1,12 +1,14 @@
 // Warm cut-sheet renders in a loop, for a CPU profile or a quick A/B on a busy machine:
 // NODE_ENV=production node --cpu-prof node_modules/vite-node/vite-node.mjs benchmarks/cut-sheet-profile.ts
 // Prints CPU per sheet over chunks of 10 distinct sheets: the lowest chunk is the least disturbed.
-// SHEETS=single profiles the one-leg sheet; the default is the benchmark's (two tapered legs).
+// SHEETS=single profiles the one-leg sheet; the default is the benchmark's (two tapered legs, one
+// in four overfull); USUAL=1 leaves the overfull ones out (the benchmark's median sheet is a usual one).
 import { writeFileSync } from 'node:fs';
 import { sampleSheet, taperedPairSheet } from './cut-sheet-sample';
 import { renderCutSheet } from '../src/lib/server/cut-sheet/render';
 
-const sheet = process.env.SHEETS === 'single' ? sampleSheet : taperedPairSheet;
+const pick = process.env.SHEETS === 'single' ? sampleSheet : taperedPairSheet;
+const sheet = (i: number) => pick(process.env.USUAL === '1' && i % 4 === 3 ? i + 1 : i);
 
 const chunks = Number(process.env.CHUNKS ?? 15);
 if (process.env.OUT) writeFileSync(process.env.OUT, await renderCutSheet(sheet(42)));

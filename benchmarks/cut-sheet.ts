@@ -120,7 +120,7 @@ const figures = [
   figure('cut sheet: our CPU per warm sheet (this process only)', 'ms', cpu, null, note),
   // The median sheet is a usual one: the mean counts the overfull ones as a batch pays for them.
   figure('cut sheet: our mean CPU per warm sheet, overfull ones included', 'ms', cpuMean, null, note),
-  figure('cut sheet: our overfull sheets alone (laid out again onto two pages)', 'ms', overfull, null, 'each sheet one sample'),
+  figure('cut sheet: our overfull sheets alone (split onto two pages from their first layout)', 'ms', overfull, null, 'each sheet one sample'),
   figure('cut sheet: our first sheet in a fresh process', 'ms', [firstMs], null),
   figure('cut sheet: Chromium opening the warm page (fonts decoded), once', 'ms', [shellMs], null),
 ];
