@@ -52,7 +52,7 @@ describe('the sheet QR code', () => {
 
   it('uses the fixed mask and one byte segment: a garment link keeps the size qrcode would choose', () => {
     const link = 'https://bench.cuffwright.test/garments/7b1f0c2e-9d4a-4e55-8a31-0f2f4c6d8e90';
-    const symbol = QRCode.create([{ data: link, mode: 'byte' }], { errorCorrectionLevel: 'M', maskPattern: QR_MASK });
+    const symbol = QRCode.create([{ data: new TextEncoder().encode(link), mode: 'byte' }], { errorCorrectionLevel: 'M', maskPattern: QR_MASK });
     expect(symbol.maskPattern).toBe(QR_MASK);
     expect(qrPath(link).size).toBe(symbol.modules.size);
     expect(symbol.modules.size).toBe(QRCode.create(link, { errorCorrectionLevel: 'M' }).modules.size);

@@ -17,7 +17,7 @@ export function qrPath(text: string): QrPath {
   // segments (0.84 ms a code, 0.14 ms so). The best-scored mask only makes finder-like blotches
   // rarer; a split saves a few bits on long runs of digits, no module size on a garment's link
   // (a uuid). tests/lib/cut-sheet/qr.test.ts reads links of every length back.
-  const { modules } = QRCode.create([{ data: text, mode: 'byte' }], { errorCorrectionLevel: 'M', maskPattern: QR_MASK });
+  const { modules } = QRCode.create([{ data: new TextEncoder().encode(text), mode: 'byte' }], { errorCorrectionLevel: 'M', maskPattern: QR_MASK });
   const size = modules.size;
   const dark = modules.data;
   // Each row's runs of dark modules, merged downwards with the same run in the rows below:
