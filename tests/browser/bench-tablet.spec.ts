@@ -68,8 +68,11 @@ describe('the plan stays in sight while the fitting is typed', () => {
       await page.goto(`/garments/${id}`);
       await ready(page);
       for (const [label, value] of TYPED) await field(page, label).fill(value);
-      // 1 1/2 in cuff: cut at three depths plus the turn-under below the mark; the bar agrees with the full plan.
-      await expect.poll(() => page.getByTestId('summary-cut').textContent(), { timeout: 10_000 }).toBe(await page.getByTestId('cut-line').textContent());
+      // 1 1/2 in cuff: cut three depths below the mark (docs/TRADE.md, common practice (no source)),
+      // and the bar agrees with the full plan. Both read together until both show the typed fitting:
+      // read one after the other, the full plan could still hold the plan from before the last field.
+      const cuts = async () => [await page.getByTestId('summary-cut').textContent(), await page.getByTestId('cut-line').textContent()];
+      await expect.poll(cuts, { timeout: 10_000 }).toEqual(['4 1/2 in', '4 1/2 in']);
       await page.evaluate(() => window.scrollTo(0, 0));
 
       const inputs = page.locator('form[aria-label="Fitting measurements"] input[id^="m-legs-left-"]');
