@@ -23,6 +23,10 @@ export default getViteConfig({
     setupFiles: ['tests/setup-catalog.ts'],
     testTimeout: 30_000,
     hookTimeout: 60_000,
+    // Two forks for the isolated project (the only one on forks; vitest 3 reads pool sizes from the
+    // root config only): its files wait on PGlite and the PDF renderer as much as on a core, and the
+    // default on 2 cores is one fork.
+    poolOptions: { forks: { maxForks: 2 } },
     projects: [
       // The rest share one module graph per worker thread: loading the engine, zod and the catalog
       // once instead of per file is most of this run's time (CI's unit phase, measured).
