@@ -18,11 +18,12 @@ let passed = 0;
 let failed = 0;
 
 /** One vitest run with its JSON report in test-results/vitest-<id>.json; lines prefixed when runs share the terminal. */
-function run(id, config, runEnv, prefix) {
+function run(id, config, runEnv, prefix, niceness = 0) {
   const report = `test-results/vitest-${id}.json`;
   rmSync(report, { force: true });
   const args = ['run', ...config, '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...extra];
-  const child = spawn(vitest, args, { stdio: prefix ? ['ignore', 'pipe', 'pipe'] : 'inherit', env: runEnv });
+  const [command, commandArgs] = niceness ? ['nice', ['-n', String(niceness), vitest, ...args]] : [vitest, args];
+  const child = spawn(command, commandArgs, { stdio: prefix ? ['ignore', 'pipe', 'pipe'] : 'inherit', env: runEnv });
   if (prefix) {
     for (const stream of [child.stdout, child.stderr]) {
       createInterface({ input: stream }).on('line', (line) => (stream === child.stdout ? process.stdout : process.stderr).write(`${prefix} ${line}\n`));
@@ -59,16 +60,15 @@ if (extra.length > 0) {
   finish('browser stories and HTTP tests', await run('browser', browserConfig, env));
 } else {
   // The whole run: two lanes (vitest.browser.config.ts), each with its own server and demo shop, so
-  // their files cannot disturb each other; within a lane files run one after another. One lane after
-  // the other: side by side on 2 cores they took ~130 s less but a story timed out on a busy machine
-  // (bench-tablet waiting for its plan), and a green CI is worth more than the seconds. Built once here.
+  // their files cannot disturb each other; within a lane files run one after another. Side by side,
+  // as each lane spends much of its time waiting on its server or browser. The sweep and HTTP lane
+  // runs niced: the stories' waits are paced by what a screen shows, so they get the cores first
+  // when both lanes want them. Built once here, before either lane's global setup looks.
   buildIfNeeded(process.env.TEST_DIST_DIR || '.test-dist', env);
-  const lanes = [
-    ['stories', '[stories]'],
-    ['sweep-http', '[sweep+http]'],
-  ];
-  const statuses = [];
-  for (const [lane, prefix] of lanes) statuses.push(await run(`browser-${lane}`, browserConfig, { ...env, BROWSER_LANE: lane }, prefix));
+  const statuses = await Promise.all([
+    run('browser-stories', browserConfig, { ...env, BROWSER_LANE: 'stories' }, '[stories]'),
+    run('browser-sweep-http', browserConfig, { ...env, BROWSER_LANE: 'sweep-http' }, '[sweep+http]', 10),
+  ]);
   finish('browser stories and HTTP tests', statuses.find((s) => s !== 0) ?? 0);
 }
 console.log(`tests: ${passed} passed, ${failed} failed`);
