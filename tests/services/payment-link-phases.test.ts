@@ -42,6 +42,7 @@ const prices = await import('@/services/counter/prices');
 const pay = await import('@/services/counter/payments');
 const { sessionKey } = await import('@/services/counter/payment-links');
 const { makeShop } = await import('./fixtures');
+const { PAYMENT_TIMEOUT_MS, setPaymentTimeout } = await import('@/lib/server/payment-service');
 
 const ORIGIN = 'http://127.0.0.1:4321';
 const upstream = new URL(fake.base);
@@ -212,7 +213,15 @@ describe('when the service does not answer in time', () => {
   it('makes no second try, answers 503, and the next attempt closes the session the lost answer made', async () => {
     const t = await ticketDue(a);
     const gate = proxy.hold('POST', CREATE);
-    await expect(pay.createPaymentLink(a.counter, t.id, ORIGIN)).rejects.toMatchObject({ status: 503 });
+    // The held call times out as the real 5 s would, in 1 s: the gate holds it for as long as it waits.
+    setPaymentTimeout(1_000);
+    try {
+      const making = expect(pay.createPaymentLink(a.counter, t.id, ORIGIN)).rejects.toMatchObject({ status: 503 });
+      await gate.arrived;
+      await making;
+    } finally {
+      setPaymentTimeout(PAYMENT_TIMEOUT_MS);
+    }
     expect(gate.count()).toBe(1);
     const [cut] = await linksOf(t.id);
     expect([cut!.status, cut!.sessionId]).toEqual(['failed', null]);

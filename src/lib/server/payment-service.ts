@@ -9,6 +9,15 @@ let client: Stripe | null = null;
 /** How long one call to the service may take before the SDK gives up (a connection error: 503). */
 export const PAYMENT_TIMEOUT_MS = 5_000;
 
+let timeoutMs = PAYMENT_TIMEOUT_MS;
+
+/** Sets how long one call may take, for the clients made from now on (a test of a service that
+ * never answers need not wait the real 5 s); the client already made is dropped. */
+export function setPaymentTimeout(ms: number): void {
+  timeoutMs = ms;
+  client = null;
+}
+
 /** Whether an API key is configured (the client itself loads on first use). */
 export function paymentsConfigured(): boolean {
   return Boolean(PAYMENTS_API_KEY);
@@ -36,7 +45,7 @@ export async function paymentClient(): Promise<Stripe | null> {
     // One retry for reading and expiring sessions (safe to repeat); making one passes its own
     // idempotency key and no retry (`maxNetworkRetries: 0` per call), so a click waits one timeout at most.
     maxNetworkRetries: 1,
-    timeout: PAYMENT_TIMEOUT_MS,
+    timeout: timeoutMs,
     telemetry: false,
   });
   return client;
