@@ -4,7 +4,8 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { request } from 'node:http';
-import { createServer } from 'node:net';
+import { once } from 'node:events';
+import { connect, createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
@@ -44,6 +45,25 @@ function serve(env: Record<string, string | undefined>): { child: ChildProcess; 
   return { child, out: () => out, exited };
 }
 
+/** `npm run serve` on a free port with a fresh data folder, once it answers its health check. */
+async function serving() {
+  const port = await freePort();
+  const dataDir = mkdtempSync(join(tmpdir(), 'cuffwright-serve-'));
+  cleanups.push(() => rmSync(dataDir, { recursive: true, force: true }));
+  const base = `http://127.0.0.1:${port}`;
+  const s = serve({ PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir, BETTER_AUTH_URL: base, SMTP_HOST: 'mail.invalid', DEMO_DATA: 'off' });
+  for (let i = 0; ; i += 1) {
+    const ok = await fetch(`${base}/api/health`).then(
+      (r) => r.status === 200,
+      () => false,
+    );
+    if (ok) break;
+    if (i > 1800) throw new Error(`serve did not answer: ${s.out()}`);
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  return { port, base, s };
+}
+
 describe('npm run serve', () => {
   it('names every missing or unsafe setting on its own line and does not start', async () => {
     const s = serve({
@@ -62,20 +82,7 @@ describe('npm run serve', () => {
   });
 
   it('logs each request as one JSON line, and on SIGTERM finishes the request in flight before exiting 0', async () => {
-    const port = await freePort();
-    const dataDir = mkdtempSync(join(tmpdir(), 'cuffwright-serve-'));
-    cleanups.push(() => rmSync(dataDir, { recursive: true, force: true }));
-    const base = `http://127.0.0.1:${port}`;
-    const s = serve({ PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir, BETTER_AUTH_URL: base, SMTP_HOST: 'mail.invalid', DEMO_DATA: 'off' });
-    for (let i = 0; ; i += 1) {
-      const ok = await fetch(`${base}/api/health`).then(
-        (r) => r.status === 200,
-        () => false,
-      );
-      if (ok) break;
-      if (i > 1800) throw new Error(`serve did not answer: ${s.out()}`);
-      await new Promise((r) => setTimeout(r, 100));
-    }
+    const { base, s } = await serving();
     // A calculator request whose body is half sent when the signal arrives.
     const body = JSON.stringify({ kind: 'cuff', unit: 'in', cuffDepth: '1 1/2', available: '5' });
     const answered = new Promise<{ status: number; text: string }>((resolve, reject) => {
@@ -109,5 +116,29 @@ describe('npm run serve', () => {
     expect(plan).toMatchObject({ status: 200, shop: null });
     expect(typeof plan!.ms).toBe('number');
     expect(lines.some((l) => l.msg === 'request' && l.route === '/api/health' && l.status === 200)).toBe(true);
+  }, 240_000);
+
+  it('logs nothing for a calculator request whose client left before it was read (a cancelled fetch), and answers the next', async () => {
+    const { port, base, s } = await serving();
+    const body = JSON.stringify({ kind: 'cuff', unit: 'in', cuffDepth: '1 1/2' });
+    // Sent whole and the connection closed with it, 50 at once, as the calculator cancels plans it
+    // no longer needs: a fifth to a half of these reach the app with their request already gone.
+    for (let i = 0; i < 50; i += 1) {
+      const socket = connect(port, '127.0.0.1');
+      socket.on('error', () => {});
+      await once(socket, 'connect');
+      socket.end(
+        `POST /api/plan HTTP/1.1\r\nHost: 127.0.0.1:${port}\r\nContent-Type: application/json\r\nContent-Length: ${Buffer.byteLength(body)}\r\n\r\n${body}`,
+      );
+    }
+    // Behind the cancelled ones on the same server, so their handling is over when it is answered.
+    const next = await fetch(`${base}/api/plan`, { method: 'POST', headers: { 'content-type': 'application/json' }, body });
+    expect(next.status).toBe(200);
+    expect((await next.json()).lines.length).toBeGreaterThan(0);
+    const errors = s
+      .out()
+      .split('\n')
+      .filter((l) => /Could not render|Internal Server Error|"level":50/.test(l));
+    expect(errors).toEqual([]);
   }, 240_000);
 });
