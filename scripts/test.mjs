@@ -43,7 +43,11 @@ function run(id, config, runEnv, prefix, niceness = 0) {
   });
 }
 
+const began = Date.now();
+
+/** Ends the run when a phase failed; says how long into the run it ended either way. */
 function finish(name, status) {
+  console.log(`(${name}: done ${Math.round((Date.now() - began) / 1000)} s into npm test)`);
   if (status === 0) return;
   console.error(`\n${name} failed.`);
   console.log(`tests: ${passed} passed, ${failed} failed`);
