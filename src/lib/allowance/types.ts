@@ -27,18 +27,22 @@ export interface PlanWarning {
   values: Record<string, string>;
 }
 
-/** Every warning the engine can raise. */
-export type WarningCode =
-  | 'not-enough-cloth'
-  | 'third-section-too-small'
-  | 'stitching-above-cuff'
-  | 'cuff-depth-unusual'
-  | 'slope-on-cuff'
-  | 'old-crease-visible'
-  | 'taper-beyond-tolerance'
-  | 'let-out-exceeds-seam-allowance'
-  | 'hem-allowance-unusual'
-  | 'turn-under-too-large';
+/** Every warning the engine can raise, once: the type, the API's answer schema and the tests read it. */
+export const WARNING_CODES = [
+  'not-enough-cloth',
+  'third-section-too-small',
+  'stitching-above-cuff',
+  'cuff-depth-unusual',
+  'slope-on-cuff',
+  'old-crease-visible',
+  'taper-beyond-tolerance',
+  'let-out-exceeds-seam-allowance',
+  'hem-allowance-unusual',
+  'turn-under-too-large',
+] as const;
+
+/** One warning the engine can raise. */
+export type WarningCode = (typeof WARNING_CODES)[number];
 
 /** The name of a chalk line, top to bottom. */
 export type CuffLineName = 'finished-edge' | 'cuff-top' | 'inner-fold' | 'cut';

@@ -4,6 +4,7 @@ import { readFileSync } from 'node:fs';
 import { parse, TYPE, type MessageFormatElement } from '@formatjs/icu-messageformat-parser';
 import { describe, expect, it } from 'vitest';
 import type { CreasePlace, WarningCode } from '@/lib/allowance';
+import { WARNING_CODES } from '@/lib/allowance/types';
 import { catalogKeys, translator } from '@/lib/server/i18n/catalog';
 import { fromAcceptLanguage, intlLocale, LANGUAGES } from '@/lib/shared/i18n/languages';
 
@@ -48,18 +49,7 @@ describe('the message catalog', () => {
   });
 
   it('has a message for every engine warning and every crease verdict', () => {
-    const warnings: WarningCode[] = [
-      'not-enough-cloth',
-      'third-section-too-small',
-      'stitching-above-cuff',
-      'cuff-depth-unusual',
-      'slope-on-cuff',
-      'old-crease-visible',
-      'taper-beyond-tolerance',
-      'let-out-exceeds-seam-allowance',
-      'hem-allowance-unusual',
-      'turn-under-too-large',
-    ];
+    const warnings: readonly WarningCode[] = WARNING_CODES;
     const places: CreasePlace[] = ['leg-visible', 'at-cuff-top', 'behind-cuff', 'cuff-face', 'inside', 'on-fold', 'cut-away'];
     for (const code of warnings) expect(en[`warning.${code}`], code).toBeTypeOf('string');
     for (const place of places) expect(en[`crease.${place}`], place).toBeTypeOf('string');

@@ -3,25 +3,11 @@
 // the engine's own object, so this mirrors those types field for field; the API test parses every
 // example's answer with it (no field more or less).
 import { z } from 'zod';
-import type { WarningCode } from '@/lib/allowance/types';
+import { WARNING_CODES } from '@/lib/allowance/types';
 import { precisionSchema, unitSchema } from '@/lib/shared/plan-request';
 
 /** A length held exactly (mm) and shown in the plan's unit (text). */
 export const lenJson = z.object({ mm: z.number(), text: z.string() });
-
-// Every warning the engine can raise (WarningCode); `satisfies` fails the build on a code it does not have.
-const WARNING_CODES = [
-  'not-enough-cloth',
-  'third-section-too-small',
-  'stitching-above-cuff',
-  'cuff-depth-unusual',
-  'slope-on-cuff',
-  'old-crease-visible',
-  'taper-beyond-tolerance',
-  'let-out-exceeds-seam-allowance',
-  'hem-allowance-unusual',
-  'turn-under-too-large',
-] as const satisfies readonly WarningCode[];
 
 /** A warning: its code, the English sentence, and its figures as shown (for any language). */
 export const planWarningJson = z.object({ code: z.enum(WARNING_CODES), message: z.string(), values: z.record(z.string(), z.string()) });
