@@ -5,6 +5,7 @@
 // sheet, also in a batch beside trousers. Amounts are this test's own invented list.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import type { Shop } from './fixtures';
+import { chained } from './history-chain';
 
 vi.mock('@/db', () => import('../db/db-mock'));
 
@@ -152,18 +153,6 @@ describe('a skirt fitting', () => {
     expect((await svc.kindFittingsOf(b.shopId, [garment.id])).size).toBe(0);
   });
 });
-
-// Whether a field's change events link up: from `start`, each event's old is the previous one's new, ending at `end`.
-function chained(events: { old: unknown; new: unknown }[], start: unknown, end: unknown): boolean {
-  let at: unknown = start;
-  const left = [...events];
-  while (left.length) {
-    const i = left.findIndex((e) => e.old === at);
-    if (i < 0) return false;
-    at = left.splice(i, 1)[0]!.new;
-  }
-  return at === end;
-}
 
 describe('two saves of one skirt at the same moment', () => {
   it('each record the change from what the other saved: the history links up and ends at the saved value', async () => {

@@ -2,6 +2,7 @@
 // audit event per changed value (who, when, old and new); unreadable lengths named by field.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import type { Shop } from './fixtures';
+import { chained } from './history-chain';
 
 vi.mock('@/db', () => import('../db/db-mock'));
 
@@ -104,18 +105,6 @@ describe('measurements', () => {
     await expect(fittingOf(a.tailor, g.id)).rejects.toMatchObject({ status: 404 });
   });
 });
-
-// Whether a field's change events link up: from `start`, each event's old is the previous one's new, ending at `end`.
-function chained(events: { old: unknown; new: unknown }[], start: unknown, end: unknown): boolean {
-  let at: unknown = start;
-  const left = [...events];
-  while (left.length) {
-    const i = left.findIndex((e) => e.old === at);
-    if (i < 0) return false;
-    at = left.splice(i, 1)[0]!.new;
-  }
-  return at === end;
-}
 
 describe('two fittings of one pair saved at the same moment', () => {
   it('each record the change from what the other saved: every leg’s history links up and ends at the saved value', async () => {

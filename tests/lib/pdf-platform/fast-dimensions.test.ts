@@ -4,12 +4,11 @@
 // and a batch; and a layout package without it turns the patch off with a log line.
 import { afterAll, describe, expect, it } from 'vitest';
 import * as reactPdfLayout from '@react-pdf/layout';
-import { renderCutSheet, renderCutSheets } from '@/lib/server/cut-sheet/render';
 import { fastDimensions } from '@/lib/server/pdf-platform/fast-dimensions';
 import { leanYoga } from '@/lib/server/pdf-platform/lean-yoga';
 import { installPdfPlatform, PDF_PATCHES, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
-import { comparable } from '../cut-sheet/pdf-objects';
 import { generatedSheets } from './generated-sheets';
+import { expectSamePrints, type Printed, printedObjects } from './printed-objects';
 
 const SHEETS = generatedSheets(24, 4711);
 
@@ -30,24 +29,18 @@ describe('the faster yoga pass', () => {
     installPdfPlatform({ setting: 'on' });
     // The lean pass (lean-yoga.test.ts) takes the place of this one when on: off for both sides here.
     leanYoga()();
-    const fast = [];
-    for (const s of SHEETS) fast.push(comparable(await renderCutSheet(s)));
-    const fastBatch = comparable(await renderCutSheets(SHEETS.slice(0, 10)));
+    const fast = await printedObjects(SHEETS);
     const undo = fastDimensions();
     undo();
-    const own = [];
-    let ownBatch: string[];
+    let own: Printed;
     try {
-      for (const s of SHEETS) own.push(comparable(await renderCutSheet(s)));
-      ownBatch = comparable(await renderCutSheets(SHEETS.slice(0, 10)));
+      own = await printedObjects(SHEETS);
     } finally {
       fastDimensions();
       leanYoga();
     }
     // Overfull sheets (two pages and more) are among them.
-    expect(own.filter((o) => o.filter((x) => x.includes('/Type /Page\n')).length > 1).length).toBeGreaterThan(0);
-    for (let i = 0; i < SHEETS.length; i++) expect(fast[i], `sheet ${i}`).toEqual(own[i]);
-    expect(fastBatch).toEqual(ownBatch!);
+    expectSamePrints(fast, own);
   }, 120_000);
 
   it('is refused at install with a log line when the layout package lacks it', () => {
