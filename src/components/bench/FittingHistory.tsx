@@ -16,6 +16,8 @@ interface Props {
   precision: Precision;
   /** a line's words for events this list does not know itself (a kind's fitting), or null to leave it to the list */
   lineOf?: (e: AuditEntry) => string | null;
+  /** the order of one save's lines (same moment), lowest first; by default a leg's, left before right in the form's order */
+  rankOf?: (e: AuditEntry) => number;
 }
 
 const OTHER_FIELDS: Record<string, string> = {
@@ -39,7 +41,7 @@ function shown(field: string, value: unknown): string {
   return String(value);
 }
 
-function describe(e: AuditEntry, { label, unit: shopUnit, precision }: Omit<Props, 'history' | 'lineOf'>): string {
+function describe(e: AuditEntry, { label, unit: shopUnit, precision }: Omit<Props, 'history' | 'lineOf' | 'rankOf'>): string {
   const d = e.detail;
   if (e.action === 'measurement.changed') {
     const typedIn = isUnit(d.unit) ? d.unit : shopUnit;
@@ -69,16 +71,18 @@ function describe(e: AuditEntry, { label, unit: shopUnit, precision }: Omit<Prop
 
 const FIELD_ORDER = ['finish', 'preset', 'unit', ...LEG_LENGTHS] as string[];
 
-/** Newest first; one save's changes (same moment) read left leg before right, in the form's order. */
-function ordered(history: AuditEntry[]): AuditEntry[] {
-  // Only a leg's lines are ranked; any other keeps the order it came in (a kind's history orders its own).
-  const rank = (e: AuditEntry) =>
-    e.action !== 'measurement.changed' ? -1 : (e.detail.leg === 'right' ? 100 : 0) + FIELD_ORDER.indexOf(String(e.detail.field ?? ''));
+// A leg's line: left leg before right, each in the form's order.
+function legRank(e: AuditEntry): number {
+  return (e.detail.leg === 'right' ? 100 : 0) + FIELD_ORDER.indexOf(String(e.detail.field ?? ''));
+}
+
+/** Newest first; one save's changes (same moment) in `rank`'s order. */
+function ordered(history: AuditEntry[], rank: (e: AuditEntry) => number): AuditEntry[] {
   return [...history].sort((x, y) => (x.at === y.at ? rank(x) - rank(y) : x.at < y.at ? 1 : -1));
 }
 
 /** Every change to the garment and its measurements: who, when, old and new value. */
-export function FittingHistory({ history, label, unit, precision, lineOf }: Props) {
+export function FittingHistory({ history, label, unit, precision, lineOf, rankOf = legRank }: Props) {
   return (
     <section aria-labelledby="history-heading" className="flex flex-col gap-2">
       <h2 id="history-heading" className="text-2xl font-extrabold">
@@ -88,7 +92,7 @@ export function FittingHistory({ history, label, unit, precision, lineOf }: Prop
         <p className="text-muted">No changes recorded yet.</p>
       ) : (
         <ol className="flex flex-col divide-y divide-rule rounded-lg border-2 border-rule bg-card" data-testid="history">
-          {ordered(history).map((e) => (
+          {ordered(history, rankOf).map((e) => (
             <li key={e.id} className="flex flex-wrap items-baseline gap-x-4 px-4 py-2">
               <span className="measure font-semibold">{lineOf?.(e) ?? describe(e, { label, unit, precision })}</span>
               <span className="text-base text-muted">

@@ -18,10 +18,8 @@ interface Props {
 /** The history of a garment fitted once (a skirt, sleeves): its fitting's changes in the kind's words, beside its moves and edits. */
 export function KindHistory({ history, kind, label, unit, precision }: Props) {
   const t = useT();
-  // One save's changes share their moment: read them in the form's order (the list keeps an order it cannot rank).
-  const ordered = [...history].sort((x, y) =>
-    x.at === y.at ? kindFieldRank(kind, x.detail.field) - kindFieldRank(kind, y.detail.field) : x.at < y.at ? 1 : -1,
-  );
   const lineOf = (e: AuditEntry) => (e.action === 'kind-fitting.changed' ? kindChangeLine(t, kind, e.detail, unit, precision) : null);
-  return <FittingHistory history={ordered} label={label} unit={unit} precision={precision} lineOf={lineOf} />;
+  // One save's changes share their moment: read in the form's order.
+  const rankOf = (e: AuditEntry) => kindFieldRank(kind, e.detail.field);
+  return <FittingHistory history={history} label={label} unit={unit} precision={precision} lineOf={lineOf} rankOf={rankOf} />;
 }
