@@ -7,6 +7,7 @@
 // sheet worker thread and in benchmarks too (the schema in astro.config.mjs still checks it).
 import { keepCmaps } from './cmap-memo';
 import { keepColors } from './pdf-colors';
+import { straightPathsFast } from './pdf-path';
 import { fastDimensions } from './fast-dimensions';
 import { fastRuns } from './fast-runs';
 import { leanYoga } from './lean-yoga';
@@ -72,6 +73,7 @@ export const PDF_PATCHES: readonly PdfPatch[] = [
   { name: 'font-load', pkg: '@react-pdf/font', via: '@react-pdf/renderer', writtenFor: '4.1.2', install: loadLoadedAtOnce },
   { name: 'pdf-streams', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: compressStreamsFast },
   { name: 'pdf-transform', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: transformFast },
+  { name: 'pdf-path', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: straightPathsFast },
   { name: 'pdf-colors', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: keepColors },
   { name: 'pdf-font-cache', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: cacheFontObjects },
   { name: 'cmap-memo', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', face: (face) => keepCmaps(face) },
