@@ -10,6 +10,7 @@ import { keepColors } from './pdf-colors';
 import { straightPathsFast } from './pdf-path';
 import { fastDimensions } from './fast-dimensions';
 import { fastRuns } from './fast-runs';
+import { leanAssets } from './lean-assets';
 import { leanYoga } from './lean-yoga';
 import { loadLoadedAtOnce } from './font-load';
 import { memoiseFace, type MemoFace } from './face-memo';
@@ -68,6 +69,7 @@ export const PDF_PATCHES: readonly PdfPatch[] = [
     also: [{ pkg: 'yoga-layout', via: '@react-pdf/layout', version: '3.2.1' }],
     install: leanYoga,
   },
+  { name: 'lean-assets', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: leanAssets },
   { name: 'split-laid-out', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: splitFromFirstLayout },
   { name: 'fast-runs', pkg: '@react-pdf/render', via: '@react-pdf/renderer', writtenFor: '4.7.0', install: fastRuns },
   { name: 'font-load', pkg: '@react-pdf/font', via: '@react-pdf/renderer', writtenFor: '4.1.2', install: loadLoadedAtOnce },
