@@ -13,8 +13,13 @@ import { cuffInch, sheet } from '../cut-sheet/sheets';
 type Proto = Record<string, unknown>;
 const docProto = PDFDocument.prototype as Proto;
 // pdfkit's own methods, read before anything installs the layer in this file's process.
-const ORIGINAL = { font: docProto.font, initFonts: docProto.initFonts, transform: docProto.transform };
-const patched = () => docProto.font !== ORIGINAL.font || docProto.initFonts !== ORIGINAL.initFonts || docProto.transform !== ORIGINAL.transform;
+const ORIGINAL = { font: docProto.font, initFonts: docProto.initFonts, transform: docProto.transform, setColor: docProto._setColorCore, path: docProto.path };
+const patched = () =>
+  docProto.font !== ORIGINAL.font ||
+  docProto.initFonts !== ORIGINAL.initFonts ||
+  docProto.transform !== ORIGINAL.transform ||
+  docProto._setColorCore !== ORIGINAL.setColor ||
+  docProto.path !== ORIGINAL.path;
 const inter = () => Font.getFont({ fontFamily: 'Inter', fontWeight: 400, fontStyle: 'normal' }).data as unknown as object;
 
 afterAll(() => {
@@ -46,10 +51,12 @@ describe('installing the PDF speed patches', () => {
     expect(lines).toEqual([
       'pdf-platform: pdf-streams skipped: written for pdfkit 0.20.1, installed 0.21.0',
       'pdf-platform: pdf-transform skipped: written for pdfkit 0.20.1, installed 0.21.0',
+      'pdf-platform: pdf-path skipped: written for pdfkit 0.20.1, installed 0.21.0',
+      'pdf-platform: pdf-colors skipped: written for pdfkit 0.20.1, installed 0.21.0',
       'pdf-platform: pdf-font-cache skipped: written for pdfkit 0.20.1, installed 0.21.0',
       'pdf-platform: cmap-memo skipped: written for pdfkit 0.20.1, installed 0.21.0',
     ]);
-    expect(status.filter((s) => !s.on).map((s) => s.name)).toEqual(['pdf-streams', 'pdf-transform', 'pdf-font-cache', 'cmap-memo']);
+    expect(status.filter((s) => !s.on).map((s) => s.name)).toEqual(['pdf-streams', 'pdf-transform', 'pdf-path', 'pdf-colors', 'pdf-font-cache', 'cmap-memo']);
     // pdfkit is untouched; fontkit's faces are patched (own answers on the loaded face).
     expect(patched()).toBe(false);
     expect(Object.hasOwn(inter(), 'layout')).toBe(true);

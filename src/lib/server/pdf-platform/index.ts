@@ -6,8 +6,11 @@
 // PDF_SPEED_PATCHES=off installs none. Read from process.env, not astro:env: this runs in the
 // sheet worker thread and in benchmarks too (the schema in astro.config.mjs still checks it).
 import { keepCmaps } from './cmap-memo';
+import { keepColors } from './pdf-colors';
+import { straightPathsFast } from './pdf-path';
 import { fastDimensions } from './fast-dimensions';
 import { fastRuns } from './fast-runs';
+import { leanAssets } from './lean-assets';
 import { leanYoga } from './lean-yoga';
 import { loadLoadedAtOnce } from './font-load';
 import { memoiseFace, type MemoFace } from './face-memo';
@@ -66,11 +69,14 @@ export const PDF_PATCHES: readonly PdfPatch[] = [
     also: [{ pkg: 'yoga-layout', via: '@react-pdf/layout', version: '3.2.1' }],
     install: leanYoga,
   },
+  { name: 'lean-assets', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: leanAssets },
   { name: 'split-laid-out', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: splitFromFirstLayout },
   { name: 'fast-runs', pkg: '@react-pdf/render', via: '@react-pdf/renderer', writtenFor: '4.7.0', install: fastRuns },
   { name: 'font-load', pkg: '@react-pdf/font', via: '@react-pdf/renderer', writtenFor: '4.1.2', install: loadLoadedAtOnce },
   { name: 'pdf-streams', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: compressStreamsFast },
   { name: 'pdf-transform', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: transformFast },
+  { name: 'pdf-path', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: straightPathsFast },
+  { name: 'pdf-colors', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: keepColors },
   { name: 'pdf-font-cache', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: cacheFontObjects },
   { name: 'cmap-memo', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', face: (face) => keepCmaps(face) },
   { name: 'subset-memo', pkg: 'fontkit', via: '@react-pdf/font', writtenFor: '2.0.4', face: (face, o) => keepSubsets(face, o.seed) },
