@@ -12,6 +12,8 @@ const SOURCES = [
   'scripts/precompress.mjs',
   'scripts/vite-icu-catalog.mjs',
   'package.json',
+  // patch-package's patches change the adapter bundled into the server.
+  'patches',
   'tsconfig.json',
 ];
 

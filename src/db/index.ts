@@ -7,8 +7,11 @@ import { dataDir } from './app-paths';
 
 const holder = globalThis as typeof globalThis & { __cuffwrightDb?: DbHandle };
 
+// Top-level await: only the driver in use is imported (openDatabase), and this module is ready once it is.
+holder.__cuffwrightDb ??= await openDatabase(DATABASE_URL ? { url: DATABASE_URL } : { dataDir: join(dataDir(DATA_DIR), 'pglite') });
+
 /** The open database handle (driver, migrator, closer). */
-export const handle: DbHandle = (holder.__cuffwrightDb ??= openDatabase(DATABASE_URL ? { url: DATABASE_URL } : { dataDir: join(dataDir(DATA_DIR), 'pglite') }));
+export const handle: DbHandle = holder.__cuffwrightDb;
 
 /** The Drizzle database every service uses. */
 export const db = handle.db;

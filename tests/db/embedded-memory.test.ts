@@ -15,7 +15,7 @@ const rowsOf = (r: unknown) => (r as { rows: Record<string, unknown>[] }).rows;
 
 describe('the embedded database’s memory', () => {
   it('opens a data folder with the small page cache, and reads back more than the cache holds', async () => {
-    const h = openDatabase({ dataDir: join(dir, 'pglite') });
+    const h = await openDatabase({ dataDir: join(dir, 'pglite') });
     try {
       expect(EMBEDDED_SHARED_BUFFERS).toBe('32MB');
       expect(rowsOf(await h.db.execute(sql`show shared_buffers`))[0]).toEqual({ shared_buffers: '32MB' });

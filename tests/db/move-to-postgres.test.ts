@@ -23,7 +23,7 @@ afterAll(async () => {
 
 /** An embedded database with one shop, its people, customers, a ticket and garments. */
 async function embeddedShop(): Promise<string> {
-  const h = openDatabase({ dataDir: join(dir, 'pglite') });
+  const h = await openDatabase({ dataDir: join(dir, 'pglite') });
   await h.migrate();
   const shopId = randomUUID();
   await h.db.insert(organization).values({ id: shopId, name: 'Quillon Hems', slug: 'quillon-hems', createdAt: new Date('2026-11-02T09:15:00Z') });
@@ -51,8 +51,8 @@ describe.skipIf(!serverUrl)('moving from the embedded database to PostgreSQL', (
     const url = await createServerDatabase(serverUrl!, name);
     const copied = await moveToPostgres({ dataDir: dir, url });
     expect(copied).toMatchObject({ organization: 1, user: 1, member: 1, customers: 4, tickets: 1, garments: 3 });
-    const from = openDatabase({ dataDir: join(dir, 'pglite') });
-    const to = openDatabase({ url });
+    const from = await openDatabase({ dataDir: join(dir, 'pglite') });
+    const to = await openDatabase({ url });
     try {
       for (const table of [customers, garments, audit]) {
         const a = await from.db.select().from(table).orderBy(asc(table.id));

@@ -21,7 +21,7 @@ export async function migratedSnapshot(dir: string): Promise<Buffer> {
     }
     if (mine) {
       const pglite = new PGlite();
-      await openDatabase({ pglite }).migrate();
+      await (await openDatabase({ pglite })).migrate();
       const dump = await pglite.dumpDataDir('gzip');
       writeFileSync(`${file}.part`, Buffer.from(await dump.arrayBuffer()));
       renameSync(`${file}.part`, file);

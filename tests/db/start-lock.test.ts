@@ -28,8 +28,8 @@ describe('the start lock', () => {
   it.skipIf(!serverUrl)('on PostgreSQL: two handles (two servers) never hold it together, and both migrate', async () => {
     const name = `cw_lock_${randomUUID().replace(/-/g, '').slice(0, 12)}`;
     const url = await createServerDatabase(serverUrl!, name);
-    const a = openDatabase({ url });
-    const b = openDatabase({ url });
+    const a = await openDatabase({ url });
+    const b = await openDatabase({ url });
     try {
       const marks = await twoStarts(a, b);
       const first = marks[0]!.split(' ')[0];
@@ -45,7 +45,7 @@ describe('the start lock', () => {
   });
 
   it('on PGlite: runs the function and gives back its result', async () => {
-    const h = openDatabase({ pglite: new PGlite() });
+    const h = await openDatabase({ pglite: new PGlite() });
     try {
       expect(await h.withStartLock(async () => 42)).toBe(42);
     } finally {

@@ -26,11 +26,11 @@ export async function openTestDb(): Promise<DbHandle> {
     const name = `cw_test_${randomUUID().replace(/-/g, '').slice(0, 12)}`;
     const template = `cw_template_${migrationsHash()}`;
     await ensureTemplate(serverUrl, template, async (url) => {
-      const building = openDatabase({ url });
+      const building = await openDatabase({ url });
       await building.migrate();
       await building.close();
     });
-    const handle = openDatabase({ url: await createServerDatabase(serverUrl, name, template) });
+    const handle = await openDatabase({ url: await createServerDatabase(serverUrl, name, template) });
     await handle.migrate();
     return {
       ...handle,
@@ -42,7 +42,7 @@ export async function openTestDb(): Promise<DbHandle> {
   }
   const snapshot = await migratedSnapshot(inject('pgliteSnapshotDir'));
   const pglite = new PGlite({ loadDataDir: new Blob([new Uint8Array(snapshot)]) });
-  const handle = openDatabase({ pglite });
+  const handle = await openDatabase({ pglite });
   await handle.migrate();
   return handle;
 }

@@ -1,7 +1,9 @@
 // Scripts and stylesheets under /_astro/ leave the server as built: compressed once at build time
 // (brotli and gzip, scripts/precompress.mjs), sent in the encoding the client accepts (identity when
 // it accepts neither), with Vary: Accept-Encoding and a year's immutable cache (hashed names).
+import { rmSync, writeFileSync } from 'node:fs';
 import { request } from 'node:http';
+import { join } from 'node:path';
 import { brotliDecompressSync, gunzipSync } from 'node:zlib';
 import { beforeAll, describe, expect, inject, it } from 'vitest';
 
@@ -11,11 +13,11 @@ interface Raw {
   body: Buffer;
 }
 
-/** GET without any client-side decoding (fetch would undo the encoding under test). */
+/** GET without any client-side decoding (fetch would undo the encoding under test), the path sent as written. */
 function rawGet(path: string, headers: Record<string, string> = {}): Promise<Raw> {
-  const url = new URL(path, inject('baseURL'));
+  const url = new URL(inject('baseURL'));
   return new Promise((resolve, reject) => {
-    const req = request(url, { headers }, (res) => {
+    const req = request({ hostname: url.hostname, port: url.port, path, headers }, (res) => {
       const chunks: Buffer[] = [];
       res.on('data', (c: Buffer) => chunks.push(c));
       res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks) }));
@@ -100,5 +102,33 @@ describe('what is not a hashed asset', () => {
     const r = await rawGet('/_astro/no-such-file.js', { 'accept-encoding': 'br' });
     expect(r.status).toBe(404);
     expect(r.headers['content-encoding']).toBeUndefined();
+  });
+});
+
+describe('the files the server sends as they are', () => {
+  const dist = process.env.TEST_DIST_DIR || '.test-dist';
+  const added = `added-after-start-${process.pid}.txt`;
+
+  it('are those the build wrote, known when it started: an API call or a page never waits on a file look-up', async () => {
+    // A file put in the client folder after the start is not among them: the app answers its path.
+    writeFileSync(join(dist, 'client', added), 'not built');
+    try {
+      const r = await rawGet(`/${added}`);
+      expect(r.status).not.toBe(200);
+      expect(r.body.toString('utf8')).not.toContain('not built');
+    } finally {
+      rmSync(join(dist, 'client', added), { force: true });
+    }
+    // Built files are still found under any spelling that names them.
+    expect((await rawGet(script.replace('/_astro/', '/_astro/./'))).status).toBe(200);
+    expect((await rawGet(script.replace('/_astro/', '/%5Fastro/'))).status).toBe(200);
+    expect((await rawGet('/favicon.svg')).status).toBe(200);
+  });
+
+  it('leave a malformed or escaping path to the same answers as before', async () => {
+    expect((await rawGet('/%E0%A4%A')).status).toBeLessThan(500);
+    const escaping = await rawGet('/_astro/../../server/entry.mjs');
+    expect(escaping.status).not.toBe(200);
+    expect(escaping.body.toString('utf8')).not.toContain('createStaticHandler');
   });
 });

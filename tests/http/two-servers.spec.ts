@@ -168,7 +168,7 @@ describe.skipIf(!serverUrl)('two app servers on one PostgreSQL', () => {
     }
     // Both start together: migrations and the demo seed run once, under the start lock.
     [apps.A, apps.B] = await Promise.all([startApp('A', smtpPorts.A), startApp('B', smtpPorts.B)]);
-    handle = openDatabase({ url });
+    handle = await openDatabase({ url });
     cleanups.push(() => handle.close());
   }, 300_000);
 

@@ -55,6 +55,44 @@ describe('lookupCache', () => {
     expect(await cache.get('token', async () => ({ value: 'fresh' }))).toBe('fresh');
   });
 
+  it('asks the loader once for requests of the same key that come while it runs', async () => {
+    const cache = lookupCache<string>(5_000, 10);
+    let loads = 0;
+    let release!: () => void;
+    const load = () => new Promise<{ value: string }>((r) => ((loads += 1), (release = () => r({ value: `v${loads}` }))));
+    const tabs = [cache.get('token', load), cache.get('token', load), cache.get('token', load)];
+    const other = cache.get('other', async () => ({ value: 'other' }));
+    release();
+    expect(await Promise.all(tabs)).toEqual(['v1', 'v1', 'v1']);
+    expect(await other).toBe('other');
+    expect(loads).toBe(1);
+  });
+
+  it('shares no lookup begun before a clear with a request after it', async () => {
+    const cache = lookupCache<string>(5_000, 10);
+    let release!: () => void;
+    const before = cache.get('token', () => new Promise((r) => (release = () => r({ value: 'signed in' }))));
+    cache.clear(); // a sign-out on this server
+    const after = cache.get('token', async () => ({ value: 'signed out' }));
+    release();
+    expect(await before).toBe('signed in');
+    expect(await after).toBe('signed out');
+    expect(await cache.get('token', async () => ({ value: 'not asked' }))).toBe('signed out');
+  });
+
+  it('lets a failed lookup fail its waiters, and asks again at the next request', async () => {
+    const cache = lookupCache<string>(5_000, 10);
+    let fail = true;
+    const load = async () => {
+      if (fail) throw new Error('database away');
+      return { value: 'back' };
+    };
+    const both = [cache.get('token', load), cache.get('token', load)];
+    for (const p of both) await expect(p).rejects.toThrow('database away');
+    fail = false;
+    expect(await cache.get('token', load)).toBe('back');
+  });
+
   it('holds at most its maximum, dropping the oldest', async () => {
     const cache = lookupCache<string>(5_000, 3);
     for (const k of ['a', 'b', 'c', 'd']) await cache.get(k, async () => ({ value: k }));

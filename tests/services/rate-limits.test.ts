@@ -23,9 +23,9 @@ async function twoClients(): Promise<{ a: Db; b: Db; close: () => Promise<void> 
   if (!server) return { a: db, b: db, close: async () => {} };
   const name = `cw_limits_${randomUUID().replace(/-/g, '').slice(0, 10)}`;
   const url = await createServerDatabase(server, name);
-  const first = openDatabase({ url });
+  const first = await openDatabase({ url });
   await first.migrate();
-  const second = openDatabase({ url });
+  const second = await openDatabase({ url });
   return {
     a: first.db,
     b: second.db,

@@ -23,13 +23,13 @@ export interface LookupCache<T> {
 /** A cache of at most `max` answers, each kept at most `ttlMs`; `now` is injectable for tests. */
 export function lookupCache<T>(ttlMs: number, max: number, now: () => number = Date.now): LookupCache<T> {
   const entries = new Map<string, { value: T; until: number }>();
+  // Lookups running now, one per key: requests for the same key meanwhile (a screen's tabs after a
+  // write cleared the cache) wait for it instead of each asking the database. A clear empties it.
+  const running = new Map<string, Promise<T>>();
   let generation = 0;
-  return {
-    async get(key, load) {
-      const hit = entries.get(key);
-      if (hit && hit.until > now()) return hit.value;
-      if (hit) entries.delete(key);
-      const started = generation;
+  async function fresh(key: string, load: () => Promise<Loaded<T>>): Promise<T> {
+    const started = generation;
+    try {
       const loaded = await load();
       if (started === generation) {
         // Oldest first out: a flood of strangers' tokens cannot grow the process without bound.
@@ -37,10 +37,26 @@ export function lookupCache<T>(ttlMs: number, max: number, now: () => number = D
         entries.set(key, { value: loaded.value, until: Math.min(now() + ttlMs, loaded.expiresAt ?? Infinity) });
       }
       return loaded.value;
+    } finally {
+      if (started === generation) running.delete(key);
+    }
+  }
+  return {
+    get(key, load) {
+      const hit = entries.get(key);
+      if (hit && hit.until > now()) return Promise.resolve(hit.value);
+      if (hit) entries.delete(key);
+      let lookup = running.get(key);
+      if (!lookup) {
+        lookup = fresh(key, load);
+        running.set(key, lookup);
+      }
+      return lookup;
     },
     clear() {
       generation += 1;
       entries.clear();
+      running.clear();
     },
     size: () => entries.size,
   };
