@@ -167,6 +167,11 @@ const READ_MEMO = 512;
 const MEMO_TEXT_LENGTH = 40;
 const readMemo: Record<Unit, Map<string, Exact>> = { in: new Map(), cm: new Map(), mm: new Map() };
 
+/** readExact's answer for text it has already read cleanly in this unit, else undefined (one lookup, nothing read). */
+export function keptExact(text: string, unit: Unit): Exact | undefined {
+  return readMemo[unit].get(text);
+}
+
 /** Typed text to an exact length in mm, as an Exact (parseExact's answer without building a Fraction for one term). */
 export function readExact(text: string, unit: Unit): Exact {
   if (text.length > MEMO_TEXT_LENGTH) return readExactFresh(text, unit);

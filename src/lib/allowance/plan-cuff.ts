@@ -29,16 +29,18 @@ export function readCuffInput(input: CuffInput, r: InputReader): CuffValues {
   const defaults = exactDefaults(r.unit);
   const cuffDepth = r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', cuffDepthRule(r.unit));
   const d = cuffDepth ?? defaults.usualCuffDepth.min;
+  // An absent optional field reads as null without the call (most plans leave four of these out).
+  const { hemSection, turnUnder, available, clothThickness, oldCrease, slope } = input;
   return {
     unit: r.unit,
     precision: r.precision,
     cuffDepth: d,
-    hemSection: r.length(input.hemSection, 'hemSection', 'Third section', POSITIVE) ?? d,
-    turnUnder: r.length(input.turnUnder, 'turnUnder', 'Turn-under', NON_NEGATIVE) ?? defaults.cuffTurnUnder,
-    available: r.length(input.available, 'available', 'Cloth below the mark', NON_NEGATIVE),
-    clothThickness: r.length(input.clothThickness, 'clothThickness', 'Turn of cloth', NON_NEGATIVE) ?? ZERO,
-    oldCrease: r.length(input.oldCrease, 'oldCrease', 'Old crease', ANY),
-    slope: r.length(input.slope, 'slope', 'Slope', ANY),
+    hemSection: (hemSection === undefined ? null : r.length(hemSection, 'hemSection', 'Third section', POSITIVE)) ?? d,
+    turnUnder: (turnUnder === undefined ? null : r.length(turnUnder, 'turnUnder', 'Turn-under', NON_NEGATIVE)) ?? defaults.cuffTurnUnder,
+    available: available === undefined ? null : r.length(available, 'available', 'Cloth below the mark', NON_NEGATIVE),
+    clothThickness: (clothThickness === undefined ? null : r.length(clothThickness, 'clothThickness', 'Turn of cloth', NON_NEGATIVE)) ?? ZERO,
+    oldCrease: oldCrease === undefined ? null : r.length(oldCrease, 'oldCrease', 'Old crease', ANY),
+    slope: slope === undefined ? null : r.length(slope, 'slope', 'Slope', ANY),
   };
 }
 

@@ -2,7 +2,7 @@ import { AllowanceError } from './allowance-error';
 import type { Exact } from './exact';
 import { exactFromNumber } from './exact-number';
 import { formatExactQ } from './format-length';
-import { checkRangeExact, readExact } from './parse-length';
+import { checkRangeExact, keptExact, readExact } from './parse-length';
 import type { Precision, Unit } from './types';
 import { isPrecision, isUnit, mmPerUnitRatio } from './units';
 
@@ -29,6 +29,14 @@ function isBlank(text: string): boolean {
     if (!(c === 32 || (c >= 9 && c <= 13)) && text.slice(k, k + 1).trim() !== '') return false;
   }
   return true;
+}
+
+// True when a length read from text passes the rule (as InputReader.length checks it; blank text is never kept).
+function meetsRule(mm: Exact, rule: LengthRule): boolean {
+  const s = mm.sign();
+  if (rule.min === 'positive' ? s <= 0 : rule.min === 'non-negative' && s < 0) return false;
+  if (rule.least !== undefined && mm.compare(rule.least.value) < 0) return false;
+  return rule.max === undefined || mm.compare(rule.max) <= 0;
 }
 
 /**
@@ -72,6 +80,15 @@ export class InputReader {
 
   /** A length field in mm, or null when absent (blank text counts as absent). */
   length(value: unknown, field: string, label: string, rule: LengthRule = NO_RULE): Exact | null {
+    // Text read before (most typed lengths) is only checked against the rule: small enough to inline.
+    if (typeof value === 'string') {
+      const kept = keptExact(value, this.unit);
+      if (kept !== undefined && meetsRule(kept, rule)) return kept;
+    } else if (value === undefined && rule.required !== true) return null;
+    return this.readLength(value, field, label, rule);
+  }
+
+  private readLength(value: unknown, field: string, label: string, rule: LengthRule): Exact | null {
     if (value === undefined || value === null || (typeof value === 'string' && isBlank(value))) {
       if (rule.required) this.fail(new AllowanceError('missing', `${label} is needed.`, field, { label }));
       return null;
