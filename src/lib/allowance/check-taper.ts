@@ -1,7 +1,7 @@
 import { AllowanceError } from './allowance-error';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
 import { cuffDepthRule, exactDefaults } from './defaults';
-import { Exact, lcm, ZERO } from './exact';
+import { Exact, joinDenominator, ZERO } from './exact';
 import { type LenMaker, lenMaker, ratioLenMaker } from './len';
 import { letDownShapeError, letDownWidth, type LetDownWidths } from './let-down-width';
 import { InputReader, type LengthRule } from './read-input';
@@ -26,6 +26,8 @@ export interface TaperValues {
 }
 
 const ONE = Exact.int(1);
+// Read once: every line of every plan names itself.
+const LINE_NAMES = CUFF_LINE_NAMES;
 
 const POSITIVE: LengthRule = { min: 'positive' };
 const NON_NEGATIVE: LengthRule = { min: 'non-negative' };
@@ -175,8 +177,9 @@ export function quickTaper(v: TaperValues): TaperPlan | null {
     return null;
   if (seamAllowance?.big) return null;
   // The lengths as numerators over D mm (D: the least common denominator of their denominators).
-  let D = lcm(lcm(lcm(cuffDepth.d, hemSection.d), lcm(clothThickness.d, widthAtEdge.d)), lcm(widthAbove.d, tolerance.d));
-  if (seamAllowance !== null) D = lcm(D, seamAllowance.d);
+  let D = joinDenominator(joinDenominator(joinDenominator(cuffDepth.d, hemSection.d), clothThickness.d), widthAtEdge.d);
+  D = joinDenominator(joinDenominator(D, widthAbove.d), tolerance.d);
+  if (seamAllowance !== null) D = joinDenominator(D, seamAllowance.d);
   if (D > HALF_SAFE) return null;
   const E = widthAtEdge.over(D);
   const dd = cuffDepth.over(D);
@@ -215,7 +218,7 @@ export function quickTaper(v: TaperValues): TaperPlan | null {
     const changeLen = ratio(change, CD);
     lines.push({
       n: (k + 1) as TaperLine['n'],
-      name: CUFF_LINE_NAMES[k]!,
+      name: LINE_NAMES[k]!,
       belowMark: ratio(b, D),
       width: ratio(target - change, CD),
       change: changeLen,
