@@ -1,11 +1,21 @@
 import { AllowanceError } from './allowance-error';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
-import { cuffDepthRule, exactDefaults } from './defaults';
-import { Exact, joinDenominator, ZERO } from './exact';
-import { type LenMaker, lenMaker, ratioLenMaker } from './len';
+import { cuffDepthRule as cuffDepthRuleImport, exactDefaults as exactDefaultsImport } from './defaults';
+import { Exact, joinDenominator as joinDenominatorImport, ZERO as ZEROImport } from './exact';
+import { type LenMaker, lenMaker as lenMakerImport, ratioLenMaker as ratioLenMakerImport } from './len';
 import { letDownShapeError, letDownWidth, type LetDownWidths } from './let-down-width';
 import { InputReader, type LengthRule } from './read-input';
 import type { PlanWarning, Precision, TaperInput, TaperLine, TaperPlan, Unit } from './types';
+
+// The hot path's imports, read once: under vite-node (tests, benchmarks) every use of an imported
+// name is a lookup in a dictionary-mode module object plus a getter call (DEVELOPERS.md).
+const cuffDepthRule = cuffDepthRuleImport;
+const exactDefaults = exactDefaultsImport;
+const joinDenominator = joinDenominatorImport;
+const ZERO = ZEROImport;
+const lenMaker = lenMakerImport;
+const ratioLenMaker = ratioLenMakerImport;
+const Reader = InputReader;
 
 /** A taper input read and checked: exact mm throughout. */
 export interface TaperValues {
@@ -117,7 +127,7 @@ export function taperShapeError(v: TaperValues): AllowanceError | null {
 
 /** Check a tapered leg under a cuff: the work at each chalk line to keep the cuff-top width straight down. */
 export function checkTaper(input: TaperInput): TaperPlan {
-  const v = readTaperInput(input, new InputReader(input, false));
+  const v = readTaperInput(input, new Reader(input, false));
   return quickTaper(v) ?? exactTaper(v);
 }
 
