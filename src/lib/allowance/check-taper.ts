@@ -47,19 +47,21 @@ const WIDTH: LengthRule = { required: true, min: 'positive' };
 export function readTaperInput(input: TaperInput, r: InputReader): TaperValues {
   const defaults = exactDefaults(r.unit);
   const d = r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', cuffDepthRule(r.unit)) ?? defaults.usualCuffDepth.min;
+  // An absent optional field reads as null without the call (a cut sheet's leg leaves five of these out).
+  const { hemSection, tolerance, clothThickness, widthAtCut, oldCrease } = input;
   return {
     unit: r.unit,
     precision: r.precision,
     cuffDepth: d,
-    hemSection: r.length(input.hemSection, 'hemSection', 'Third section', POSITIVE) ?? d,
+    hemSection: (hemSection === undefined ? null : r.length(hemSection, 'hemSection', 'Third section', POSITIVE)) ?? d,
     widthAtEdge: r.length(input.widthAtEdge, 'widthAtEdge', 'Width at the finished edge', WIDTH) ?? ONE,
     widthAbove: r.length(input.widthAbove, 'widthAbove', 'Width higher up', WIDTH) ?? ONE,
     heightAbove: r.length(input.heightAbove, 'heightAbove', 'Height of the upper width', WIDTH) ?? ONE,
     seamAllowance: r.length(input.seamAllowance, 'seamAllowance', 'Seam allowance', NON_NEGATIVE),
-    tolerance: r.length(input.tolerance, 'tolerance', 'Tolerance', NON_NEGATIVE) ?? defaults.taperTolerance,
-    clothThickness: r.length(input.clothThickness, 'clothThickness', 'Turn of cloth', NON_NEGATIVE) ?? ZERO,
-    widthAtCut: r.length(input.widthAtCut, 'widthAtCut', 'Width at the cutting line', POSITIVE),
-    oldFold: r.length(input.oldCrease, 'oldCrease', 'Old crease'),
+    tolerance: (tolerance === undefined ? null : r.length(tolerance, 'tolerance', 'Tolerance', NON_NEGATIVE)) ?? defaults.taperTolerance,
+    clothThickness: (clothThickness === undefined ? null : r.length(clothThickness, 'clothThickness', 'Turn of cloth', NON_NEGATIVE)) ?? ZERO,
+    widthAtCut: widthAtCut === undefined ? null : r.length(widthAtCut, 'widthAtCut', 'Width at the cutting line', POSITIVE),
+    oldFold: oldCrease === undefined ? null : r.length(oldCrease, 'oldCrease', 'Old crease'),
   };
 }
 
@@ -162,10 +164,11 @@ function taperWarnings(v: TaperValues, len: LenMaker, t: TaperVerdict): PlanWarn
     });
   }
   if (t.feasible === false) {
+    const seamAllowance = len(v.seamAllowance!).text;
     warnings.push({
       code: 'let-out-exceeds-seam-allowance',
-      message: `Letting out needs ${t.most} on each side of each seam, but the seam allowance is only ${len(v.seamAllowance!).text}. Choose a shallower cuff or a plain hem.`,
-      values: { finish: 'cuff', most: t.most, seamAllowance: len(v.seamAllowance!).text },
+      message: `Letting out needs ${t.most} on each side of each seam, but the seam allowance is only ${seamAllowance}. Choose a shallower cuff or a plain hem.`,
+      values: { finish: 'cuff', most: t.most, seamAllowance },
     });
   }
   return warnings;

@@ -167,9 +167,9 @@ const READ_MEMO = 512;
 const MEMO_TEXT_LENGTH = 40;
 const readMemo: Record<Unit, Map<string, Exact>> = { in: new Map(), cm: new Map(), mm: new Map() };
 
-/** readExact's answer for text it has already read cleanly in this unit, else undefined (one lookup, nothing read). */
-export function keptExact(text: string, unit: Unit): Exact | undefined {
-  return readMemo[unit].get(text);
+/** The texts readExact has read cleanly in a unit, to its answers (the memo itself, read-only: look up, never set). */
+export function keptTexts(unit: Unit): ReadonlyMap<string, Exact> {
+  return readMemo[unit];
 }
 
 /** Typed text to an exact length in mm, as an Exact (parseExact's answer without building a Fraction for one term). */

@@ -2,13 +2,13 @@ import { AllowanceError } from './allowance-error';
 import type { Exact } from './exact';
 import { exactFromNumber } from './exact-number';
 import { formatExactQ } from './format-length';
-import { checkRangeExact, keptExact as keptExactImport, readExact as readExactImport } from './parse-length';
+import { checkRangeExact, keptTexts as keptTextsImport, readExact as readExactImport } from './parse-length';
 import type { Precision, Unit } from './types';
 import { isPrecision as isPrecisionImport, isUnit as isUnitImport, mmPerUnitRatio } from './units';
 
 // The hot path's imports, read once: under vite-node (tests, benchmarks) every use of an imported
 // name is a lookup in a dictionary-mode module object plus a getter call (DEVELOPERS.md).
-const keptExact = keptExactImport;
+const keptTexts = keptTextsImport;
 const readExact = readExactImport;
 const isPrecision = isPrecisionImport;
 const isUnit = isUnitImport;
@@ -55,6 +55,8 @@ export class InputReader {
   readonly errors: AllowanceError[];
   readonly unit: Unit;
   readonly precision: Precision;
+  // The unit's texts read before, looked up by every length field.
+  private readonly kept: ReadonlyMap<string, Exact>;
 
   constructor(
     input: unknown,
@@ -68,6 +70,7 @@ export class InputReader {
     const { unit, precision } = input as { unit?: unknown; precision?: unknown };
     if (!isUnit(unit)) throw new AllowanceError('bad-unit', 'Choose a unit: in, cm or mm.', 'unit');
     this.unit = unit;
+    this.kept = keptTexts(unit);
     this.precision = 16;
     if (precision !== undefined) {
       if (isPrecision(precision)) this.precision = precision;
@@ -89,7 +92,7 @@ export class InputReader {
   length(value: unknown, field: string, label: string, rule: LengthRule = NO_RULE): Exact | null {
     // Text read before (most typed lengths) is only checked against the rule: small enough to inline.
     if (typeof value === 'string') {
-      const kept = keptExact(value, this.unit);
+      const kept = this.kept.get(value);
       if (kept !== undefined && meetsRule(kept, rule)) return kept;
     } else if (value === undefined && rule.required !== true) return null;
     return this.readLength(value, field, label, rule);
