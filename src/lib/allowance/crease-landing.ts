@@ -52,7 +52,10 @@ const say = {
       { at: h.text, aboveTop },
     ),
   behindLeg: (h: Len): CreaseLanding =>
-    land('behind-cuff', h, `The old crease lies on the leg behind the cuff, ${h.text} above the finished edge: the cuff hides it.`, { at: h.text, under: 'leg' }),
+    land('behind-cuff', h, `The old crease lies on the leg behind the cuff, ${h.text} above the finished edge: the cuff hides it.`, {
+      at: h.text,
+      under: 'leg',
+    }),
   underFace: (h: Len): CreaseLanding =>
     land('behind-cuff', h, `The old crease lies under the cuff face, ${h.text} above the finished edge: hidden.`, { at: h.text, under: 'face' }),
   cuffFace: (h: Len): CreaseLanding =>

@@ -31,7 +31,9 @@ describe('lcm and Exact.over (the quick paths’ common denominator)', () => {
     const pair = fc.oneof(
       fc.tuple(fc.integer({ min: 1, max: 2 ** 26 }), fc.integer({ min: 1, max: 2 ** 26 })),
       // b·k and b (divides), b·k ± 1 and b (does not), near 2^53
-      fc.tuple(fc.integer({ min: 1, max: 2 ** 26 }), fc.integer({ min: 1, max: 2 ** 26 }), fc.constantFrom(0, 1, -1)).map(([b, k, e]) => [Math.max(1, b * k + e), b] as [number, number]),
+      fc
+        .tuple(fc.integer({ min: 1, max: 2 ** 26 }), fc.integer({ min: 1, max: 2 ** 26 }), fc.constantFrom(0, 1, -1))
+        .map(([b, k, e]) => [Math.max(1, b * k + e), b] as [number, number]),
       fc.tuple(fc.integer({ min: 1, max: 2 ** 20 }), fc.integer({ min: 1, max: 2 ** 32 })).map(([b, k]) => [b * k, b] as [number, number]),
     );
     fc.assert(

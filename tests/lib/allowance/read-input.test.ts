@@ -80,12 +80,16 @@ describe('InputReader.length on kept text gives the full reading’s answer', ()
     }
   };
   const number = fc.oneof(fc.integer({ min: 0, max: 300 }).map(String), fc.constantFrom('0', '1e3', '99999999999999999', '0.0000001', '1.5', '.5'));
-  const fraction = fc.tuple(fc.integer({ min: 0, max: 40 }), fc.integer({ min: 0, max: 40 }), fc.constantFrom(0, 1, 2, 3, 8, 16, 127, 9007199254740993)).map(([w, n, d]) => `${w} ${n}/${d}`);
+  const fraction = fc
+    .tuple(fc.integer({ min: 0, max: 40 }), fc.integer({ min: 0, max: 40 }), fc.constantFrom('0', '1', '2', '3', '8', '16', '127', '9007199254740993'))
+    .map(([w, n, d]) => `${w} ${n}/${d}`);
   // Plain shapes, mixed numbers (some not under 1, some over 0), sums, units, signs, blanks and garbage.
   const text = fc.oneof(
     number,
     fraction,
-    fc.tuple(fc.constantFrom('', '-', ' ', '- '), fc.oneof(number, fraction), fc.constantFrom('', ' ', ' in', ' mm', ' cm', ' + 1/16', ' - 3')).map((p) => p.join('')),
+    fc
+      .tuple(fc.constantFrom('', '-', ' ', '- '), fc.oneof(number, fraction), fc.constantFrom('', ' ', ' in', ' mm', ' cm', ' + 1/16', ' - 3'))
+      .map((p) => p.join('')),
     fc.constantFrom('', '   ', '\t', 'abc', '1/0', '1 1/2/3', '½', '1,5', '1 3/16 in + 2 cm'),
     fc.string({ maxLength: 8 }),
   );
