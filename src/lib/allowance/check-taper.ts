@@ -1,11 +1,21 @@
 import { AllowanceError } from './allowance-error';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
-import { cuffDepthRule, exactDefaults } from './defaults';
-import { Exact, lcm, ZERO } from './exact';
-import { type LenMaker, lenMaker, ratioLenMaker } from './len';
+import { cuffDepthRule as cuffDepthRuleImport, exactDefaults as exactDefaultsImport } from './defaults';
+import { Exact, joinDenominator as joinDenominatorImport, ZERO as ZEROImport } from './exact';
+import { type LenMaker, lenMaker as lenMakerImport, ratioLenMaker as ratioLenMakerImport } from './len';
 import { letDownShapeError, letDownWidth, type LetDownWidths } from './let-down-width';
 import { InputReader, type LengthRule } from './read-input';
 import type { PlanWarning, Precision, TaperInput, TaperLine, TaperPlan, Unit } from './types';
+
+// The hot path's imports, read once: under vite-node (tests, benchmarks) every use of an imported
+// name is a lookup in a dictionary-mode module object plus a getter call (DEVELOPERS.md).
+const cuffDepthRule = cuffDepthRuleImport;
+const exactDefaults = exactDefaultsImport;
+const joinDenominator = joinDenominatorImport;
+const ZERO = ZEROImport;
+const lenMaker = lenMakerImport;
+const ratioLenMaker = ratioLenMakerImport;
+const Reader = InputReader;
 
 /** A taper input read and checked: exact mm throughout. */
 export interface TaperValues {
@@ -26,6 +36,8 @@ export interface TaperValues {
 }
 
 const ONE = Exact.int(1);
+// Read once: every line of every plan names itself.
+const LINE_NAMES = CUFF_LINE_NAMES;
 
 const POSITIVE: LengthRule = { min: 'positive' };
 const NON_NEGATIVE: LengthRule = { min: 'non-negative' };
@@ -35,19 +47,21 @@ const WIDTH: LengthRule = { required: true, min: 'positive' };
 export function readTaperInput(input: TaperInput, r: InputReader): TaperValues {
   const defaults = exactDefaults(r.unit);
   const d = r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', cuffDepthRule(r.unit)) ?? defaults.usualCuffDepth.min;
+  // An absent optional field reads as null without the call (a cut sheet's leg leaves five of these out).
+  const { hemSection, tolerance, clothThickness, widthAtCut, oldCrease } = input;
   return {
     unit: r.unit,
     precision: r.precision,
     cuffDepth: d,
-    hemSection: r.length(input.hemSection, 'hemSection', 'Third section', POSITIVE) ?? d,
+    hemSection: (hemSection === undefined ? null : r.length(hemSection, 'hemSection', 'Third section', POSITIVE)) ?? d,
     widthAtEdge: r.length(input.widthAtEdge, 'widthAtEdge', 'Width at the finished edge', WIDTH) ?? ONE,
     widthAbove: r.length(input.widthAbove, 'widthAbove', 'Width higher up', WIDTH) ?? ONE,
     heightAbove: r.length(input.heightAbove, 'heightAbove', 'Height of the upper width', WIDTH) ?? ONE,
     seamAllowance: r.length(input.seamAllowance, 'seamAllowance', 'Seam allowance', NON_NEGATIVE),
-    tolerance: r.length(input.tolerance, 'tolerance', 'Tolerance', NON_NEGATIVE) ?? defaults.taperTolerance,
-    clothThickness: r.length(input.clothThickness, 'clothThickness', 'Turn of cloth', NON_NEGATIVE) ?? ZERO,
-    widthAtCut: r.length(input.widthAtCut, 'widthAtCut', 'Width at the cutting line', POSITIVE),
-    oldFold: r.length(input.oldCrease, 'oldCrease', 'Old crease'),
+    tolerance: (tolerance === undefined ? null : r.length(tolerance, 'tolerance', 'Tolerance', NON_NEGATIVE)) ?? defaults.taperTolerance,
+    clothThickness: (clothThickness === undefined ? null : r.length(clothThickness, 'clothThickness', 'Turn of cloth', NON_NEGATIVE)) ?? ZERO,
+    widthAtCut: widthAtCut === undefined ? null : r.length(widthAtCut, 'widthAtCut', 'Width at the cutting line', POSITIVE),
+    oldFold: oldCrease === undefined ? null : r.length(oldCrease, 'oldCrease', 'Old crease'),
   };
 }
 
@@ -115,7 +129,7 @@ export function taperShapeError(v: TaperValues): AllowanceError | null {
 
 /** Check a tapered leg under a cuff: the work at each chalk line to keep the cuff-top width straight down. */
 export function checkTaper(input: TaperInput): TaperPlan {
-  const v = readTaperInput(input, new InputReader(input, false));
+  const v = readTaperInput(input, new Reader(input, false));
   return quickTaper(v) ?? exactTaper(v);
 }
 
@@ -150,10 +164,11 @@ function taperWarnings(v: TaperValues, len: LenMaker, t: TaperVerdict): PlanWarn
     });
   }
   if (t.feasible === false) {
+    const seamAllowance = len(v.seamAllowance!).text;
     warnings.push({
       code: 'let-out-exceeds-seam-allowance',
-      message: `Letting out needs ${t.most} on each side of each seam, but the seam allowance is only ${len(v.seamAllowance!).text}. Choose a shallower cuff or a plain hem.`,
-      values: { finish: 'cuff', most: t.most, seamAllowance: len(v.seamAllowance!).text },
+      message: `Letting out needs ${t.most} on each side of each seam, but the seam allowance is only ${seamAllowance}. Choose a shallower cuff or a plain hem.`,
+      values: { finish: 'cuff', most: t.most, seamAllowance },
     });
   }
   return warnings;
@@ -175,8 +190,9 @@ export function quickTaper(v: TaperValues): TaperPlan | null {
     return null;
   if (seamAllowance?.big) return null;
   // The lengths as numerators over D mm (D: the least common denominator of their denominators).
-  let D = lcm(lcm(lcm(cuffDepth.d, hemSection.d), lcm(clothThickness.d, widthAtEdge.d)), lcm(widthAbove.d, tolerance.d));
-  if (seamAllowance !== null) D = lcm(D, seamAllowance.d);
+  let D = joinDenominator(joinDenominator(joinDenominator(cuffDepth.d, hemSection.d), clothThickness.d), widthAtEdge.d);
+  D = joinDenominator(joinDenominator(D, widthAbove.d), tolerance.d);
+  if (seamAllowance !== null) D = joinDenominator(D, seamAllowance.d);
   if (D > HALF_SAFE) return null;
   const E = widthAtEdge.over(D);
   const dd = cuffDepth.over(D);
@@ -215,7 +231,7 @@ export function quickTaper(v: TaperValues): TaperPlan | null {
     const changeLen = ratio(change, CD);
     lines.push({
       n: (k + 1) as TaperLine['n'],
-      name: CUFF_LINE_NAMES[k]!,
+      name: LINE_NAMES[k]!,
       belowMark: ratio(b, D),
       width: ratio(target - change, CD),
       change: changeLen,

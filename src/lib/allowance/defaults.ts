@@ -81,7 +81,8 @@ const METRIC: ExactDefaults = {
 
 /** The exact defaults for a unit: inch figures for 'in', metric ones for 'cm' and 'mm'. */
 export function exactDefaults(unit: Unit): ExactDefaults {
-  return isMetric(unit) ? METRIC : IMPERIAL;
+  // Compared here, not by isMetric: a plan asks twice, and an imported call costs more under vite-node.
+  return unit === 'in' ? IMPERIAL : METRIC;
 }
 
 const depthRule = (e: ExactDefaults): LengthRule => ({
@@ -95,7 +96,7 @@ const METRIC_DEPTH = depthRule(METRIC);
 
 /** What a cuff depth must be in a unit (needed, more than 0, from the shallowest cuff to the deepest), made once per unit system. */
 export function cuffDepthRule(unit: Unit): LengthRule {
-  return isMetric(unit) ? METRIC_DEPTH : IMPERIAL_DEPTH;
+  return unit === 'in' ? IMPERIAL_DEPTH : METRIC_DEPTH;
 }
 
 /** Defaults and usual ranges of one unit, as lengths shown in that unit. */

@@ -20,10 +20,20 @@ export function gcd(a: number, b: number): number {
 
 /** Least common multiple of two positive safe integers (past 2^53 it is only a bound: callers check). */
 export function lcm(a: number, b: number): number {
-  // Most denominators a plan meets divide one another (5, 10, 40, 80): one remainder decides.
-  if (a % b === 0) return a;
-  if (b % a === 0) return b;
+  // Most denominators a plan meets divide one another (5, 10, 40, 80): one quotient decides. A
+  // quotient of safe integers is whole exactly when it divides (a float % is a call to fmod).
+  const q = a / b;
+  if (Math.floor(q) === q) return a;
+  const r = b / a;
+  if (Math.floor(r) === r) return b;
   return (a / gcd(a, b)) * b;
+}
+
+/** lcm(D, d) while building up a common denominator D: no call when d divides D (typed lengths mostly share one). */
+export function joinDenominator(D: number, d: number): number {
+  // A quotient of safe integers is whole exactly when it divides.
+  const q = D / d;
+  return Math.floor(q) === q ? D : lcm(D, d);
 }
 
 /**

@@ -15,7 +15,8 @@ const SAFE = Number.MAX_SAFE_INTEGER;
 const RANGE = STEPS_TEXT_RANGE;
 
 // n/d mm as a Len, one step being b/a mm; the kept texts in `table`. Every shown length goes through
-// here, so it is one plain function the makers below call (and the compiler inlines).
+// here, so it is one small plain function the makers below call (and the compiler inlines): the
+// rare lengths past the safe integers go to bigRatioLen.
 function ratioLen(n: number, d: number, unit: Unit, precision: Precision, a: number, b: number, table: (string | undefined)[]): Len {
   // `n === 0 ? 0` keeps a −0 (a negative times 0) from showing as mm: -0.
   const abs = n < 0 ? -n : n === 0 ? 0 : n;
@@ -24,21 +25,24 @@ function ratioLen(n: number, d: number, unit: Unit, precision: Precision, a: num
   // rounded quotient of two exact integers) depend on n/d being reduced.
   const num = abs * a;
   const den = d * b;
-  if (num <= SAFE && den <= SAFE) {
-    let q = Math.floor(num / den);
-    let r = num - q * den;
-    if (r < 0) {
-      q -= 1;
-      r += den;
-    } else if (r >= den) {
-      q += 1;
-      r -= den;
-    }
-    if (2 * r >= den) q += 1;
-    const steps = q === 0 ? 0 : n < 0 ? -q : q;
-    const text = (steps >= -RANGE && steps <= RANGE ? table[steps + RANGE] : undefined) ?? stepsText(steps, unit, precision);
-    return { mm: n < 0 ? -abs / d : abs / d, text };
+  if (!(num <= SAFE && den <= SAFE)) return bigRatioLen(n, d, unit, precision);
+  let q = Math.floor(num / den);
+  let r = num - q * den;
+  if (r < 0) {
+    q -= 1;
+    r += den;
+  } else if (r >= den) {
+    q += 1;
+    r -= den;
   }
+  if (2 * r >= den) q += 1;
+  const steps = q === 0 ? 0 : n < 0 ? -q : q;
+  const text = (steps >= -RANGE && steps <= RANGE ? table[steps + RANGE] : undefined) ?? stepsText(steps, unit, precision);
+  return { mm: n < 0 ? -abs / d : abs / d, text };
+}
+
+// ratioLen past the safe integers, through Exact.
+function bigRatioLen(n: number, d: number, unit: Unit, precision: Precision): Len {
   const exact = Exact.ratio(n, d);
   return { mm: exact.valueOf(), text: formatExactQ(exact, unit, precision) };
 }

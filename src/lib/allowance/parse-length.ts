@@ -167,6 +167,11 @@ const READ_MEMO = 512;
 const MEMO_TEXT_LENGTH = 40;
 const readMemo: Record<Unit, Map<string, Exact>> = { in: new Map(), cm: new Map(), mm: new Map() };
 
+/** The texts readExact has read cleanly in a unit, to its answers (the memo itself, read-only: look up, never set). */
+export function keptTexts(unit: Unit): ReadonlyMap<string, Exact> {
+  return readMemo[unit];
+}
+
 /** Typed text to an exact length in mm, as an Exact (parseExact's answer without building a Fraction for one term). */
 export function readExact(text: string, unit: Unit): Exact {
   if (text.length > MEMO_TEXT_LENGTH) return readExactFresh(text, unit);

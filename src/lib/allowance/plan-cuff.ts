@@ -1,11 +1,23 @@
-import { creaseLanding, quickCreaseLanding } from './crease-landing';
-import { cuffAlternatives, quickAlternatives } from './cuff-alternatives';
+import { creaseLanding, creaseWarning as creaseWarningImport, quickCreaseLanding as quickCreaseLandingImport } from './crease-landing';
+import { cuffAlternatives, quickAlternatives as quickAlternativesImport } from './cuff-alternatives';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
-import { cuffDepthRule, type ExactDefaults, exactDefaults } from './defaults';
-import { type Exact, lcm, ZERO } from './exact';
-import { type LenMaker, lenMaker, ratioLenMaker } from './len';
+import { cuffDepthRule as cuffDepthRuleImport, type ExactDefaults, exactDefaults as exactDefaultsImport } from './defaults';
+import { type Exact, joinDenominator as joinDenominatorImport, lcm, ZERO as ZEROImport } from './exact';
+import { type LenMaker, lenMaker, ratioLenMaker as ratioLenMakerImport } from './len';
 import { InputReader, type LengthRule } from './read-input';
-import type { CuffInput, CuffLine, CuffPlan, Len, PlanWarning, Precision, Unit } from './types';
+import type { CuffInput, CuffLine, CuffLineName, CuffPlan, Len, PlanWarning, Precision, Unit } from './types';
+
+// The hot path's imports, read once: under vite-node (tests, benchmarks) every use of an imported
+// name is a lookup in a dictionary-mode module object plus a getter call (DEVELOPERS.md).
+const creaseWarning = creaseWarningImport;
+const quickCreaseLanding = quickCreaseLandingImport;
+const quickAlternatives = quickAlternativesImport;
+const cuffDepthRule = cuffDepthRuleImport;
+const exactDefaults = exactDefaultsImport;
+const joinDenominator = joinDenominatorImport;
+const ZERO = ZEROImport;
+const ratioLenMaker = ratioLenMakerImport;
+const Reader = InputReader;
 
 /** A cuff input read and checked: exact mm throughout. */
 export interface CuffValues {
@@ -29,16 +41,18 @@ export function readCuffInput(input: CuffInput, r: InputReader): CuffValues {
   const defaults = exactDefaults(r.unit);
   const cuffDepth = r.length(input.cuffDepth, 'cuffDepth', 'Cuff depth', cuffDepthRule(r.unit));
   const d = cuffDepth ?? defaults.usualCuffDepth.min;
+  // An absent optional field reads as null without the call (most plans leave four of these out).
+  const { hemSection, turnUnder, available, clothThickness, oldCrease, slope } = input;
   return {
     unit: r.unit,
     precision: r.precision,
     cuffDepth: d,
-    hemSection: r.length(input.hemSection, 'hemSection', 'Third section', POSITIVE) ?? d,
-    turnUnder: r.length(input.turnUnder, 'turnUnder', 'Turn-under', NON_NEGATIVE) ?? defaults.cuffTurnUnder,
-    available: r.length(input.available, 'available', 'Cloth below the mark', NON_NEGATIVE),
-    clothThickness: r.length(input.clothThickness, 'clothThickness', 'Turn of cloth', NON_NEGATIVE) ?? ZERO,
-    oldCrease: r.length(input.oldCrease, 'oldCrease', 'Old crease', ANY),
-    slope: r.length(input.slope, 'slope', 'Slope', ANY),
+    hemSection: (hemSection === undefined ? null : r.length(hemSection, 'hemSection', 'Third section', POSITIVE)) ?? d,
+    turnUnder: (turnUnder === undefined ? null : r.length(turnUnder, 'turnUnder', 'Turn-under', NON_NEGATIVE)) ?? defaults.cuffTurnUnder,
+    available: available === undefined ? null : r.length(available, 'available', 'Cloth below the mark', NON_NEGATIVE),
+    clothThickness: (clothThickness === undefined ? null : r.length(clothThickness, 'clothThickness', 'Turn of cloth', NON_NEGATIVE)) ?? ZERO,
+    oldCrease: oldCrease === undefined ? null : r.length(oldCrease, 'oldCrease', 'Old crease', ANY),
+    slope: slope === undefined ? null : r.length(slope, 'slope', 'Slope', ANY),
   };
 }
 
@@ -119,7 +133,7 @@ function shortMessage(required: Len, available: Len, shortBy: Len, depth: Len, a
 
 /** Plan a cuff from a pin mark: the four chalk lines, the cloth check, the old crease and the warnings. */
 export function planCuff(input: CuffInput): CuffPlan {
-  const v = readCuffInput(input, new InputReader(input, false));
+  const v = readCuffInput(input, new Reader(input, false));
   return quickCuff(v) ?? exactCuff(v);
 }
 
@@ -135,6 +149,7 @@ function defaultsDenominator(unit: Unit): number {
   return lcm(quick, lcm(lcm(e.safeStitch.d, e.facingSeam.d), e.hemAllowance.d));
 }
 const DEFAULTS_DENOMINATOR: Record<Unit, number> = { in: defaultsDenominator('in'), cm: defaultsDenominator('cm'), mm: defaultsDenominator('mm') };
+const [EDGE, TOP, INNER, CUT] = CUFF_LINE_NAMES as [CuffLineName, CuffLineName, CuffLineName, CuffLineName];
 
 /**
  * planCuff's answer worked out on plain integers over one common denominator D (the lines, the cloth
@@ -143,30 +158,29 @@ const DEFAULTS_DENOMINATOR: Record<Unit, number> = { in: defaultsDenominator('in
  */
 export function quickCuff(v: CuffValues): CuffPlan | null {
   const { cuffDepth, hemSection, turnUnder, available, clothThickness, oldCrease, slope } = v;
-  const defaults = exactDefaults(v.unit);
-  const usual = defaults.usualCuffDepth;
   if (cuffDepth.big || hemSection.big || turnUnder.big || clothThickness.big) return null;
   if (available?.big || oldCrease?.big || slope?.big) return null;
-  let D = lcm(lcm(cuffDepth.d, hemSection.d), lcm(turnUnder.d, clothThickness.d));
-  D = lcm(D, DEFAULTS_DENOMINATOR[v.unit]);
-  if (available !== null) D = lcm(D, available.d);
-  if (oldCrease !== null) D = lcm(D, oldCrease.d);
-  if (slope !== null) D = lcm(D, slope.d);
+  const D = quickDenominator(v);
   if (!(D <= QUICK_DENOMINATOR)) return null;
+  const defaults = exactDefaults(v.unit);
+  const usual = defaults.usualCuffDepth;
   const ratio = ratioLenMaker(v.unit, v.precision);
   const d = cuffDepth.over(D);
   const m = hemSection.over(D);
   const u = turnUnder.over(D);
   const cuffTop = d + clothThickness.over(D);
-  const below = [0, cuffTop, 2 * cuffTop, 2 * cuffTop + m] as const;
+  const innerFold = 2 * cuffTop;
+  const cutAt = innerFold + m;
   const A = available === null ? null : available.over(D);
-  const lines: CuffLine[] = [];
-  for (let k = 0; k < 4; k++) {
-    const b = below[k]!;
-    lines.push({ n: (k + 1) as CuffLine['n'], name: CUFF_LINE_NAMES[k]!, belowMark: ratio(b, D), aboveRawEdge: A === null ? null : ratio(A - b, D) });
-  }
-  const top = lines[1]!.belowMark;
-  const cut = lines[3]!.belowMark;
+  // Spelled out, not looped: no list of positions to index, the names read once (EDGE … CUT).
+  const top = ratio(cuffTop, D);
+  const cut = ratio(cutAt, D);
+  const lines: CuffLine[] = [
+    { n: 1, name: EDGE, belowMark: ratio(0, D), aboveRawEdge: A === null ? null : ratio(A, D) },
+    { n: 2, name: TOP, belowMark: top, aboveRawEdge: A === null ? null : ratio(A - cuffTop, D) },
+    { n: 3, name: INNER, belowMark: ratio(innerFold, D), aboveRawEdge: A === null ? null : ratio(A - innerFold, D) },
+    { n: 4, name: CUT, belowMark: cut, aboveRawEdge: A === null ? null : ratio(A - cutAt, D) },
+  ];
   const depth = clothThickness.isZero() ? { mm: top.mm, text: top.text } : ratio(d, D);
   const section = hemSection === cuffDepth ? { mm: depth.mm, text: depth.text } : ratio(m, D);
   const shown = { depth, section, turnUnder: ratio(u, D) };
@@ -183,7 +197,7 @@ export function quickCuff(v: CuffValues): CuffPlan | null {
   );
   const plan = cuffPlan(v, shown, lines, { mm: cut.mm, text: cut.text }, warnings);
   if (A !== null) {
-    const rest = A - below[3];
+    const rest = A - cutAt;
     plan.enough = rest >= 0;
     if (plan.enough) {
       const above = lines[3]!.aboveRawEdge!;
@@ -195,7 +209,7 @@ export function quickCuff(v: CuffValues): CuffPlan | null {
         cuffDepth: d,
         hemSection: m,
         turnUnder: u,
-        innerFold: below[2],
+        innerFold,
         clothThickness: cuffTop - d,
         safeStitch: defaults.safeStitch.over(D),
         facingSeam: defaults.facingSeam.over(D),
@@ -213,17 +227,31 @@ export function quickCuff(v: CuffValues): CuffPlan | null {
     const landing = quickCreaseLanding(oldCrease.over(D), {
       d,
       cuffTop,
-      innerFold: below[2],
-      cut: below[3],
+      innerFold,
+      cut: cutAt,
       onFoldWithin: defaults.onFoldWithin.over(D),
       nearCuffTop: defaults.nearCuffTop.over(D),
       D,
       ratio,
     });
     plan.creaseLands = landing;
-    if (landing.visible) warnings.push({ code: 'old-crease-visible', message: landing.message, values: { place: landing.place, ...landing.values } });
+    if (landing.visible) warnings.push(creaseWarning(landing));
   }
   return plan;
+}
+
+// The least common denominator of a cuff's lengths and its unit's defaults (past 2^53 only a bound).
+function quickDenominator(v: CuffValues): number {
+  const { available, oldCrease, slope } = v;
+  let D = DEFAULTS_DENOMINATOR[v.unit];
+  D = joinDenominator(D, v.cuffDepth.d);
+  D = joinDenominator(D, v.hemSection.d);
+  D = joinDenominator(D, v.turnUnder.d);
+  D = joinDenominator(D, v.clothThickness.d);
+  if (available !== null) D = joinDenominator(D, available.d);
+  if (oldCrease !== null) D = joinDenominator(D, oldCrease.d);
+  if (slope !== null) D = joinDenominator(D, slope.d);
+  return D;
 }
 
 // The plan without its cloth check (filled in by the caller when the cloth is known).
@@ -324,7 +352,7 @@ export function exactCuff(v: CuffValues): CuffPlan {
       len,
     });
     plan.creaseLands = landing;
-    if (landing.visible) warnings.push({ code: 'old-crease-visible', message: landing.message, values: { place: landing.place, ...landing.values } });
+    if (landing.visible) warnings.push(creaseWarning(landing));
   }
   return plan;
 }

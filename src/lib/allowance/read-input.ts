@@ -2,9 +2,16 @@ import { AllowanceError } from './allowance-error';
 import type { Exact } from './exact';
 import { exactFromNumber } from './exact-number';
 import { formatExactQ } from './format-length';
-import { checkRangeExact, readExact } from './parse-length';
+import { checkRangeExact, keptTexts as keptTextsImport, readExact as readExactImport } from './parse-length';
 import type { Precision, Unit } from './types';
-import { isPrecision, isUnit, mmPerUnitRatio } from './units';
+import { isPrecision as isPrecisionImport, isUnit as isUnitImport, mmPerUnitRatio } from './units';
+
+// The hot path's imports, read once: under vite-node (tests, benchmarks) every use of an imported
+// name is a lookup in a dictionary-mode module object plus a getter call (DEVELOPERS.md).
+const keptTexts = keptTextsImport;
+const readExact = readExactImport;
+const isPrecision = isPrecisionImport;
+const isUnit = isUnitImport;
 
 /** What a length field may hold beyond the ±200 in range. */
 export interface LengthRule {
@@ -31,6 +38,14 @@ function isBlank(text: string): boolean {
   return true;
 }
 
+// True when a length read from text passes the rule (as InputReader.length checks it; blank text is never kept).
+function meetsRule(mm: Exact, rule: LengthRule): boolean {
+  const s = mm.sign();
+  if (rule.min === 'positive' ? s <= 0 : rule.min === 'non-negative' && s < 0) return false;
+  if (rule.least !== undefined && mm.compare(rule.least.value) < 0) return false;
+  return rule.max === undefined || mm.compare(rule.max) <= 0;
+}
+
 /**
  * Reads and checks a plan's inputs, naming the field in each AllowanceError. Throws the first
  * error, or, when collecting, keeps them all and goes on with a stand-in value.
@@ -40,6 +55,8 @@ export class InputReader {
   readonly errors: AllowanceError[];
   readonly unit: Unit;
   readonly precision: Precision;
+  // The unit's texts read before, looked up by every length field.
+  private readonly kept: ReadonlyMap<string, Exact>;
 
   constructor(
     input: unknown,
@@ -53,6 +70,7 @@ export class InputReader {
     const { unit, precision } = input as { unit?: unknown; precision?: unknown };
     if (!isUnit(unit)) throw new AllowanceError('bad-unit', 'Choose a unit: in, cm or mm.', 'unit');
     this.unit = unit;
+    this.kept = keptTexts(unit);
     this.precision = 16;
     if (precision !== undefined) {
       if (isPrecision(precision)) this.precision = precision;
@@ -72,6 +90,15 @@ export class InputReader {
 
   /** A length field in mm, or null when absent (blank text counts as absent). */
   length(value: unknown, field: string, label: string, rule: LengthRule = NO_RULE): Exact | null {
+    // Text read before (most typed lengths) is only checked against the rule: small enough to inline.
+    if (typeof value === 'string') {
+      const kept = this.kept.get(value);
+      if (kept !== undefined && meetsRule(kept, rule)) return kept;
+    } else if (value === undefined && rule.required !== true) return null;
+    return this.readLength(value, field, label, rule);
+  }
+
+  private readLength(value: unknown, field: string, label: string, rule: LengthRule): Exact | null {
     if (value === undefined || value === null || (typeof value === 'string' && isBlank(value))) {
       if (rule.required) this.fail(new AllowanceError('missing', `${label} is needed.`, field, { label }));
       return null;

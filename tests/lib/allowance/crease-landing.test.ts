@@ -1,6 +1,6 @@
 import Fraction from 'fraction.js';
 import { describe, expect, it } from 'vitest';
-import { creaseLanding } from '@/lib/allowance/crease-landing';
+import { creaseLanding, creaseWarning } from '@/lib/allowance/crease-landing';
 import { Exact } from '@/lib/allowance/exact';
 import { cuffLinePositions, linePositionList } from '@/lib/allowance/cuff-lines';
 import { lenMaker } from '@/lib/allowance/len';
@@ -24,6 +24,26 @@ function land(creaseIn: Fraction, unit: 'in' | 'mm' = 'in') {
     len: lenMaker(unit, 16),
   });
 }
+
+// creaseWarning spells out { place, ...values } for the hot path, without a spread:
+// the same entries in the same order, for every visible place, every 1/32 in from 4 in above the mark to 6 in below.
+describe('creaseWarning', () => {
+  it('is the landing’s message with { place, ...values }, key order and all (arithmetic)', () => {
+    const seen = new Set<string>();
+    for (const unit of ['in', 'mm'] as const) {
+      for (let k = -128; k <= 192; k++) {
+        const l = land(inch(k, 32), unit);
+        if (!l.visible) continue;
+        seen.add(l.place);
+        const w = creaseWarning(l);
+        expect(w.code).toBe('old-crease-visible');
+        expect(w.message).toBe(l.message);
+        expect(Object.entries(w.values!)).toEqual(Object.entries({ place: l.place, ...l.values }));
+      }
+    }
+    expect([...seen].sort()).toEqual(['at-cuff-top', 'cuff-face', 'leg-visible']);
+  });
+});
 
 // Heights follow the fold plan in TRADE.md ("The cuff, as a fold plan"); numbers are its arithmetic.
 describe('creaseLanding', () => {
