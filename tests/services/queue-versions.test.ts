@@ -190,3 +190,46 @@ describe('kept answers stay with their shop and role', () => {
     expect(after.rows!.map((r) => r.id)).toEqual([garment.id]);
   });
 });
+
+describe('the version, kept on the embedded database until a move is heard (drizzle/0022)', () => {
+  type Client = { query: (...args: unknown[]) => Promise<unknown> };
+  /** How many queries the database client is asked while fn runs. */
+  async function queriesDuring(fn: () => Promise<unknown>): Promise<number> {
+    const client = (db as unknown as { $client: Client }).$client;
+    const spy = vi.spyOn(client, 'query');
+    try {
+      await fn();
+      return spy.mock.calls.length;
+    } finally {
+      spy.mockRestore();
+    }
+  }
+
+  it('an unchanged list answers 304 without asking the database (PGlite); PostgreSQL is asked each time', async () => {
+    await openTicket(a, { customer: { name: 'Kept Customer' }, garments: [{ description: 'Kept pair' }] });
+    const first = await readQueue(a.lead, OPEN, null);
+    await readQueue(a.lead, OPEN, first.etag);
+    let again: QueueAnswer | undefined;
+    const asked = await queriesDuring(async () => (again = await readQueue(a.lead, OPEN, first.etag)));
+    expect(again!.body).toBeNull();
+    expect(asked).toBe(handle.kind === 'pglite' ? 0 : 1);
+  });
+
+  it('reads racing writes never keep the version a write replaced (6 rounds, reads and a move at once)', async () => {
+    const { garment } = await openTicket(a, { customer: { name: 'Racing Customer' }, garments: [{ description: 'Racing pair' }] });
+    let forward = true;
+    for (let round = 0; round < 6; round++) {
+      const move = forward ? moveGarment(a.lead, garment.id, 'marked') : stepBackGarment(a.lead, garment.id, 'marked');
+      forward = !forward;
+      // Reads before, during and after the write's commit, in one turn of the event loop.
+      await Promise.all([readQueue(a.lead, OPEN, null), move, readQueue(a.lead, OPEN, null), readQueue(b.lead, OPEN, null)]);
+      const now = await readQueue(a.lead, OPEN, null);
+      expect(rowOf(now, garment.id)?.status).toBe(forward ? 'received' : 'marked');
+      const fresh = await readQueue(a.lead, OPEN, null);
+      expect(fresh.etag).toBe(now.etag);
+      // The version the answers are keyed by is the database's own.
+      const { listVersion } = await import('@/services/list-version');
+      expect(await listVersion(a.shopId)).toBe(await versionOf(a.shopId));
+    }
+  });
+});
