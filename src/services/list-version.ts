@@ -41,16 +41,31 @@ function listen(): Promise<boolean> {
   return listening;
 }
 
+// Reads running now, per shop, with the moves heard when each began: requests meanwhile (every tab
+// after a move) share one while no further move has been heard.
+const reading = new Map<string, { heard: number; version: Promise<string> }>();
+
+async function readAndKeep(shopId: string, before: number): Promise<string> {
+  try {
+    const version = await readVersion(shopId);
+    if (heard === before) {
+      if (kept.size >= KEPT_MAX) kept.delete(kept.keys().next().value!);
+      kept.set(shopId, version);
+    }
+    return version;
+  } finally {
+    if (reading.get(shopId)?.heard === before) reading.delete(shopId);
+  }
+}
+
 /** The shop's queue-list version ('0' for a shop not written since). */
 export async function listVersion(shopId: string): Promise<string> {
   if (!(await listen())) return readVersion(shopId);
   const known = kept.get(shopId);
   if (known !== undefined) return known;
-  const before = heard;
-  const version = await readVersion(shopId);
-  if (heard === before) {
-    if (kept.size >= KEPT_MAX) kept.delete(kept.keys().next().value!);
-    kept.set(shopId, version);
-  }
+  const running = reading.get(shopId);
+  if (running && running.heard === heard) return running.version;
+  const version = readAndKeep(shopId, heard);
+  reading.set(shopId, { heard, version });
   return version;
 }

@@ -233,3 +233,26 @@ describe('the version, kept on the embedded database until a move is heard (driz
     }
   });
 });
+
+describe('the version read after a move, shared', () => {
+  it('is read once for the requests that ask while it is read, and again after a further move (PGlite)', async () => {
+    const { garment } = await openTicket(a, { customer: { name: 'Shared Customer' }, garments: [{ description: 'Shared pair' }] });
+    await moveGarment(a.lead, garment.id, 'marked');
+    const { listVersion } = await import('@/services/list-version');
+    const client = (db as unknown as { $client: { query: (...args: unknown[]) => Promise<unknown> } }).$client;
+    const spy = vi.spyOn(client, 'query');
+    try {
+      const versions = await Promise.all([listVersion(a.shopId), listVersion(a.shopId), listVersion(a.shopId)]);
+      expect(new Set(versions).size).toBe(1);
+      expect(spy.mock.calls.length).toBe(handle.kind === 'pglite' ? 1 : 3);
+      // A read begun before a move is not shared with a request after it.
+      const early = listVersion(b.shopId);
+      await stepBackGarment(a.lead, garment.id, 'marked');
+      const [, late] = await Promise.all([early, listVersion(a.shopId)]);
+      expect(late).toBe(await versionOf(a.shopId));
+      expect(late).not.toBe(versions[0]);
+    } finally {
+      spy.mockRestore();
+    }
+  });
+});
