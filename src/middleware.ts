@@ -6,7 +6,7 @@ import { defineMiddleware } from 'astro:middleware';
 import { BETTER_AUTH_URL } from 'astro:env/server';
 import { memberRequestStarted } from '@/lib/server/member-activity';
 import { badIdParam } from '@/lib/shared/ids';
-import { forgetSessions, lookUpSession, warmAuth } from '@/services/session-lookup';
+import { forgetSessionsAfterWrite, lookUpSession, warmAuth } from '@/services/session-lookup';
 import { afterFirstAnswer } from '@/lib/server/after-first-answer';
 import { withSecurityHeaders } from '@/lib/server/security-headers';
 import { logError, logRequest } from '@/lib/server/request-log';
@@ -68,7 +68,7 @@ export const onRequest = defineMiddleware(async (context, next) => {
   } finally {
     done();
     // A write may sign out, remove a member or change a role: kept session lookups go (services/session-lookup.ts).
-    if (!SAFE_METHODS.has(context.request.method)) forgetSessions();
+    if (!SAFE_METHODS.has(context.request.method)) forgetSessionsAfterWrite();
     logRequest({
       method: context.request.method,
       route: context.routePattern,

@@ -14,6 +14,7 @@ import { encodeCursor, type QueueCursor } from '@/lib/shared/queue-request';
 import { can } from '@/lib/shared/roles';
 import { garmentVisibleTo, staffOf } from './garments';
 import { kindOf } from '@/lib/shared/fitting/garment-kinds';
+import { listVersion } from './list-version';
 
 /** What the queue API is asked: open work, or a page of history after a cursor. */
 export interface QueueQuery {
@@ -93,18 +94,6 @@ function etagOf(actor: Actor, q: QueueQuery, version: string): string {
   const h = createHash('sha256').update(JSON.stringify([actor.shopId, actor.userId, actor.role, q.view, q.after ?? null, q.limit, version]));
   return `"q-${h.digest('base64url').slice(0, 32)}"`;
 }
-
-/** The shop's queue-list version: moved by the database's triggers in the same transaction as every
- * write the list shows (drizzle/0018_list-versions.sql); '0' for a shop not written since. */
-async function listVersion(shopId: string): Promise<string> {
-  // Asked of the driver's client (PGlite or pg's pool, same call), not through Drizzle: this read is
-  // most of a 304's work, and through Drizzle PGlite copies its whole table of type parsers per query
-  // (half the read's CPU, measured).
-  const { rows } = await (db as unknown as { $client: VersionClient }).$client.query(VERSION_SQL, [shopId]);
-  return rows[0]?.v ?? '0';
-}
-type VersionClient = { query(text: string, values: unknown[]): Promise<{ rows: { v: string }[] }> };
-const VERSION_SQL = 'select version::text as v from shop_list_versions where shop_id = $1';
 
 /** A computed answer: the rows, their JSON as sent, and the next page's cursor. */
 interface Computed {

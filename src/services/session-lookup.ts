@@ -1,9 +1,12 @@
 // Who a request is: the better-auth session and the shop membership behind its cookie, kept per
 // session token for SESSION_CACHE_TTL_MS so a busy screen's reads do not ask the database twice
-// each. Every write request on this server forgets them all (sign-out, a removed member, a changed
-// role take effect on the next request); another server (DATABASE_URL) sees it within the TTL.
+// each. A write to what they read forgets them all (sign-out, a removed member, a changed role take
+// effect on the next request): on the embedded database told by the database itself (drizzle/0023),
+// on PostgreSQL after every write request here; another server (DATABASE_URL) sees it within the TTL.
 // better-auth (half a second of modules) is loaded at the first request with a session cookie, or
 // by warmAuth() once the server has answered its first request, not before a signed-out page.
+import type { PGlite } from '@electric-sql/pglite';
+import { db, handle } from '@/db';
 import { lookupCache } from '@/lib/server/lookup-cache';
 import { SESSION_CACHE_TTL_MS, sessionToken } from '@/lib/server/session-key';
 import { activeMembership, type Membership } from './members';
@@ -36,10 +39,34 @@ export function lookUpSession(headers: Headers): Promise<SessionLookup> {
   const token = sessionToken(headers.get('cookie'));
   // Without a token there is nobody to look up; a token is the key as sent, so only its holder hits it.
   if (!token) return Promise.resolve(SIGNED_OUT);
+  void listenForSessionChanges();
   return cache.get(token, () => load(headers));
 }
 
-/** Forgets every kept lookup: called after each write request, so the change is seen at once here. */
-export function forgetSessions(): void {
-  cache.clear();
+/** How many lookups are kept (for tests). */
+export function keptSessionLookups(): number {
+  return cache.size();
+}
+
+/** The channel told of every write to what a lookup reads (drizzle/0023), with the table's name. */
+export const SESSION_LOOKUP_CHANNEL = 'session_lookup';
+let told = false;
+let listening: Promise<void> | undefined;
+
+/** On the embedded database, listens (once) for writes to what a lookup reads: each forgets the kept
+ * lookups, in a microtask PGlite queues while reading the commit's answer (before the writer goes on). */
+export function listenForSessionChanges(): Promise<void> {
+  listening ??= (async () => {
+    if (handle.kind !== 'pglite') return;
+    await (db as unknown as { $client: PGlite }).$client.listen(SESSION_LOOKUP_CHANNEL, () => cache.clear());
+    told = true;
+  })().catch(() => {});
+  return listening;
+}
+
+/** Called after each write request: forgets the kept lookups, unless the database tells this
+ * process of the writes that matter (the embedded database, once listening). A sign-out, a removed
+ * member or a changed role is then seen by the next request either way. */
+export function forgetSessionsAfterWrite(): void {
+  if (!told) cache.clear();
 }

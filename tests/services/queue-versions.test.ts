@@ -190,3 +190,69 @@ describe('kept answers stay with their shop and role', () => {
     expect(after.rows!.map((r) => r.id)).toEqual([garment.id]);
   });
 });
+
+describe('the version, kept on the embedded database until a move is heard (drizzle/0022)', () => {
+  type Client = { query: (...args: unknown[]) => Promise<unknown> };
+  /** How many queries the database client is asked while fn runs. */
+  async function queriesDuring(fn: () => Promise<unknown>): Promise<number> {
+    const client = (db as unknown as { $client: Client }).$client;
+    const spy = vi.spyOn(client, 'query');
+    try {
+      await fn();
+      return spy.mock.calls.length;
+    } finally {
+      spy.mockRestore();
+    }
+  }
+
+  it('an unchanged list answers 304 without asking the database (PGlite); PostgreSQL is asked each time', async () => {
+    await openTicket(a, { customer: { name: 'Kept Customer' }, garments: [{ description: 'Kept pair' }] });
+    const first = await readQueue(a.lead, OPEN, null);
+    await readQueue(a.lead, OPEN, first.etag);
+    let again: QueueAnswer | undefined;
+    const asked = await queriesDuring(async () => (again = await readQueue(a.lead, OPEN, first.etag)));
+    expect(again!.body).toBeNull();
+    expect(asked).toBe(handle.kind === 'pglite' ? 0 : 1);
+  });
+
+  it('reads racing writes never keep the version a write replaced (6 rounds, reads and a move at once)', async () => {
+    const { garment } = await openTicket(a, { customer: { name: 'Racing Customer' }, garments: [{ description: 'Racing pair' }] });
+    let forward = true;
+    for (let round = 0; round < 6; round++) {
+      const move = forward ? moveGarment(a.lead, garment.id, 'marked') : stepBackGarment(a.lead, garment.id, 'marked');
+      forward = !forward;
+      // Reads before, during and after the write's commit, in one turn of the event loop.
+      await Promise.all([readQueue(a.lead, OPEN, null), move, readQueue(a.lead, OPEN, null), readQueue(b.lead, OPEN, null)]);
+      const now = await readQueue(a.lead, OPEN, null);
+      expect(rowOf(now, garment.id)?.status).toBe(forward ? 'received' : 'marked');
+      const fresh = await readQueue(a.lead, OPEN, null);
+      expect(fresh.etag).toBe(now.etag);
+      // The version the answers are keyed by is the database's own.
+      const { listVersion } = await import('@/services/list-version');
+      expect(await listVersion(a.shopId)).toBe(await versionOf(a.shopId));
+    }
+  });
+});
+
+describe('the version read after a move, shared', () => {
+  it('is read once for the requests that ask while it is read, and again after a further move (PGlite)', async () => {
+    const { garment } = await openTicket(a, { customer: { name: 'Shared Customer' }, garments: [{ description: 'Shared pair' }] });
+    await moveGarment(a.lead, garment.id, 'marked');
+    const { listVersion } = await import('@/services/list-version');
+    const client = (db as unknown as { $client: { query: (...args: unknown[]) => Promise<unknown> } }).$client;
+    const spy = vi.spyOn(client, 'query');
+    try {
+      const versions = await Promise.all([listVersion(a.shopId), listVersion(a.shopId), listVersion(a.shopId)]);
+      expect(new Set(versions).size).toBe(1);
+      expect(spy.mock.calls.length).toBe(handle.kind === 'pglite' ? 1 : 3);
+      // A read begun before a move is not shared with a request after it.
+      const early = listVersion(b.shopId);
+      await stepBackGarment(a.lead, garment.id, 'marked');
+      const [, late] = await Promise.all([early, listVersion(a.shopId)]);
+      expect(late).toBe(await versionOf(a.shopId));
+      expect(late).not.toBe(versions[0]);
+    } finally {
+      spy.mockRestore();
+    }
+  });
+});
