@@ -3,11 +3,11 @@
 // (one and two legs, tapers, overfull pages split from their layout, both papers, other scripts)
 // and a batch; and a layout package without it turns the patch off with a log line.
 import { afterAll, describe, expect, it } from 'vitest';
-import * as reactPdfLayout from '@react-pdf/layout';
 import { fastDimensions } from '@/lib/server/pdf-platform/fast-dimensions';
 import { leanYoga } from '@/lib/server/pdf-platform/lean-yoga';
-import { installPdfPlatform, PDF_PATCHES, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
+import { installPdfPlatform, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
 import { generatedSheets } from './generated-sheets';
+import { expectRefusedWithout } from './refused-install';
 import { expectSamePrints, type Printed, printedObjects } from './printed-objects';
 
 const SHEETS = generatedSheets(24, 4711);
@@ -44,18 +44,6 @@ describe('the faster yoga pass', () => {
   }, 120_000);
 
   it('is refused at install with a log line when the layout package lacks it', () => {
-    const { setFastDimensions: _left, ...unpatched } = reactPdfLayout as Record<string, unknown>;
-    expect(() => fastDimensions(unpatched)).toThrow(/setFastDimensions.*not applied/);
-    const patch = PDF_PATCHES.find((p) => p.name === 'fast-dimensions')!;
-    uninstallPdfPlatform();
-    const lines: string[] = [];
-    const status = installPdfPlatform({
-      setting: 'on',
-      log: (l) => lines.push(l),
-      versions: () => patch.writtenFor,
-      patches: [{ ...patch, install: () => fastDimensions(unpatched) }],
-    });
-    expect(status).toMatchObject([{ name: 'fast-dimensions', on: false }]);
-    expect(lines).toEqual([expect.stringMatching(/^pdf-platform: fast-dimensions skipped: .*setFastDimensions/)]);
+    expectRefusedWithout('fast-dimensions', 'setFastDimensions', fastDimensions);
   });
 });

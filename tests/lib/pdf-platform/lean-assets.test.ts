@@ -3,11 +3,11 @@
 // package without it turns the patch off with a log line.
 import { Font } from '@react-pdf/renderer';
 import { afterAll, describe, expect, it } from 'vitest';
-import * as reactPdfLayout from '@react-pdf/layout';
 import { renderCutSheet } from '@/lib/server/cut-sheet/render';
 import { leanAssets } from '@/lib/server/pdf-platform/lean-assets';
 import { installPdfPlatform, PDF_PATCHES, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
 import { generatedSheets } from './generated-sheets';
+import { expectRefusedWithout } from './refused-install';
 import { expectSamePrints, printedObjects } from './printed-objects';
 
 const SHEETS = generatedSheets(12, 9127);
@@ -67,18 +67,6 @@ describe('the lean asset pass', () => {
   }, 180_000);
 
   it('is refused at install with a log line when the layout package lacks it', () => {
-    const { setLeanAssets: _left, ...unpatched } = reactPdfLayout as Record<string, unknown>;
-    expect(() => leanAssets(unpatched)).toThrow(/setLeanAssets.*not applied/);
-    const patch = PDF_PATCHES.find((p) => p.name === 'lean-assets')!;
-    uninstallPdfPlatform();
-    const lines: string[] = [];
-    const status = installPdfPlatform({
-      setting: 'on',
-      log: (l) => lines.push(l),
-      versions: () => patch.writtenFor,
-      patches: [{ ...patch, install: () => leanAssets(unpatched) }],
-    });
-    expect(status).toMatchObject([{ name: 'lean-assets', on: false }]);
-    expect(lines).toEqual([expect.stringMatching(/^pdf-platform: lean-assets skipped: .*setLeanAssets/)]);
+    expectRefusedWithout('lean-assets', 'setLeanAssets', leanAssets);
   });
 });
