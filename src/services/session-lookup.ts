@@ -5,8 +5,7 @@
 // on PostgreSQL after every write request here; another server (DATABASE_URL) sees it within the TTL.
 // better-auth (half a second of modules) is loaded at the first request with a session cookie, or
 // by warmAuth() once the server has answered its first request, not before a signed-out page.
-import type { PGlite } from '@electric-sql/pglite';
-import { db, handle } from '@/db';
+import { listenEmbedded } from '@/db/notifications';
 import { lookupCache } from '@/lib/server/lookup-cache';
 import { SESSION_CACHE_TTL_MS, sessionToken } from '@/lib/server/session-key';
 import { activeMembership, type Membership } from './members';
@@ -53,14 +52,11 @@ export const SESSION_LOOKUP_CHANNEL = 'session_lookup';
 let told = false;
 let listening: Promise<void> | undefined;
 
-/** On the embedded database, listens (once) for writes to what a lookup reads: each forgets the kept
- * lookups, in a microtask PGlite queues while reading the commit's answer (before the writer goes on). */
+/** On the embedded database, listens (once) for writes to what a lookup reads: each forgets the kept lookups. */
 export function listenForSessionChanges(): Promise<void> {
-  listening ??= (async () => {
-    if (handle.kind !== 'pglite') return;
-    await (db as unknown as { $client: PGlite }).$client.listen(SESSION_LOOKUP_CHANNEL, () => cache.clear());
-    told = true;
-  })().catch(() => {});
+  listening ??= listenEmbedded(SESSION_LOOKUP_CHANNEL, () => cache.clear()).then((on) => {
+    told = on;
+  });
   return listening;
 }
 
