@@ -1,21 +1,11 @@
 import { AllowanceError } from './allowance-error';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
-import { cuffDepthRule as cuffDepthRuleImport, exactDefaults as exactDefaultsImport } from './defaults';
-import { Exact, joinDenominator as joinDenominatorImport, ZERO as ZEROImport } from './exact';
-import { type LenMaker, lenMaker as lenMakerImport, ratioLenMaker as ratioLenMakerImport } from './len';
+import { cuffDepthRule, exactDefaults } from './defaults';
+import { Exact, joinDenominator, ZERO } from './exact';
+import { type LenMaker, lenMaker, ratioLenMaker } from './len';
 import { letDownShapeError, letDownWidth, type LetDownWidths } from './let-down-width';
 import { InputReader, type LengthRule } from './read-input';
 import type { PlanWarning, Precision, TaperInput, TaperLine, TaperPlan, Unit } from './types';
-
-// The hot path's imports, read once: under vite-node (tests, benchmarks) every use of an imported
-// name is a lookup in a dictionary-mode module object plus a getter call (DEVELOPERS.md).
-const cuffDepthRule = cuffDepthRuleImport;
-const exactDefaults = exactDefaultsImport;
-const joinDenominator = joinDenominatorImport;
-const ZERO = ZEROImport;
-const lenMaker = lenMakerImport;
-const ratioLenMaker = ratioLenMakerImport;
-const Reader = InputReader;
 
 /** A taper input read and checked: exact mm throughout. */
 export interface TaperValues {
@@ -37,7 +27,6 @@ export interface TaperValues {
 
 const ONE = Exact.int(1);
 // Read once: every line of every plan names itself.
-const LINE_NAMES = CUFF_LINE_NAMES;
 
 const POSITIVE: LengthRule = { min: 'positive' };
 const NON_NEGATIVE: LengthRule = { min: 'non-negative' };
@@ -129,7 +118,7 @@ export function taperShapeError(v: TaperValues): AllowanceError | null {
 
 /** Check a tapered leg under a cuff: the work at each chalk line to keep the cuff-top width straight down. */
 export function checkTaper(input: TaperInput): TaperPlan {
-  const v = readTaperInput(input, new Reader(input, false));
+  const v = readTaperInput(input, new InputReader(input, false));
   return quickTaper(v) ?? exactTaper(v);
 }
 
@@ -231,7 +220,7 @@ export function quickTaper(v: TaperValues): TaperPlan | null {
     const changeLen = ratio(change, CD);
     lines.push({
       n: (k + 1) as TaperLine['n'],
-      name: LINE_NAMES[k]!,
+      name: CUFF_LINE_NAMES[k]!,
       belowMark: ratio(b, D),
       width: ratio(target - change, CD),
       change: changeLen,

@@ -1,5 +1,5 @@
 import { Exact } from './exact';
-import { formatExactQ, STEPS_TEXT_RANGE, stepRatio, stepsText, stepsTextTable } from './format-length';
+import { formatExactQ, roundRatio, STEPS_TEXT_RANGE, stepRatio, stepsText, stepsTextTable } from './format-length';
 import type { Len, Precision, Unit } from './types';
 
 export { fractionNumber } from './exact';
@@ -10,8 +10,6 @@ export type LenMaker = (mm: Exact, negate?: boolean) => Len;
 /** Makes Len values from n/d mm for safe integers n and d > 0, in lowest terms or not (same Len either way). */
 export type RatioLenMaker = (n: number, d: number) => Len;
 
-// Read once into a local constant: every shown length checks it.
-const SAFE = Number.MAX_SAFE_INTEGER;
 const RANGE = STEPS_TEXT_RANGE;
 
 // n/d mm as a Len, one step being b/a mm; the kept texts in `table`. Every shown length goes through
@@ -20,22 +18,10 @@ const RANGE = STEPS_TEXT_RANGE;
 function ratioLen(n: number, d: number, unit: Unit, precision: Precision, a: number, b: number, table: (string | undefined)[]): Len {
   // `n === 0 ? 0` keeps a −0 (a negative times 0) from showing as mm: -0.
   const abs = n < 0 ? -n : n === 0 ? 0 : n;
-  // Steps = abs·a / (d·b) rounded, ties up: roundRatio written out here, as a call across modules
-  // costs this hot path a fifth of its speed. Neither the steps nor the nearest number (a correctly
-  // rounded quotient of two exact integers) depend on n/d being reduced.
-  const num = abs * a;
-  const den = d * b;
-  if (!(num <= SAFE && den <= SAFE)) return bigRatioLen(n, d, unit, precision);
-  let q = Math.floor(num / den);
-  let r = num - q * den;
-  if (r < 0) {
-    q -= 1;
-    r += den;
-  } else if (r >= den) {
-    q += 1;
-    r -= den;
-  }
-  if (2 * r >= den) q += 1;
+  // Steps = abs·a / (d·b) rounded, ties up (NaN past the safe integers). Neither the steps nor the
+  // nearest number (a correctly rounded quotient of two exact integers) depend on n/d being reduced.
+  const q = roundRatio(abs, d, a, b);
+  if (Number.isNaN(q)) return bigRatioLen(n, d, unit, precision);
   const steps = q === 0 ? 0 : n < 0 ? -q : q;
   const text = (steps >= -RANGE && steps <= RANGE ? table[steps + RANGE] : undefined) ?? stepsText(steps, unit, precision);
   return { mm: n < 0 ? -abs / d : abs / d, text };

@@ -1,23 +1,11 @@
-import { creaseLanding, creaseWarning as creaseWarningImport, quickCreaseLanding as quickCreaseLandingImport } from './crease-landing';
-import { cuffAlternatives, quickAlternatives as quickAlternativesImport } from './cuff-alternatives';
+import { creaseLanding, creaseWarning, quickCreaseLanding } from './crease-landing';
+import { cuffAlternatives, quickAlternatives } from './cuff-alternatives';
 import { CUFF_LINE_NAMES, cuffLinePositions, linePositionList } from './cuff-lines';
-import { cuffDepthRule as cuffDepthRuleImport, type ExactDefaults, exactDefaults as exactDefaultsImport } from './defaults';
-import { type Exact, joinDenominator as joinDenominatorImport, lcm, ZERO as ZEROImport } from './exact';
-import { type LenMaker, lenMaker, ratioLenMaker as ratioLenMakerImport } from './len';
+import { cuffDepthRule, type ExactDefaults, exactDefaults } from './defaults';
+import { type Exact, joinDenominator, lcm, ZERO } from './exact';
+import { type LenMaker, lenMaker, ratioLenMaker } from './len';
 import { InputReader, type LengthRule } from './read-input';
 import type { CuffInput, CuffLine, CuffLineName, CuffPlan, Len, PlanWarning, Precision, Unit } from './types';
-
-// The hot path's imports, read once: under vite-node (tests, benchmarks) every use of an imported
-// name is a lookup in a dictionary-mode module object plus a getter call (DEVELOPERS.md).
-const creaseWarning = creaseWarningImport;
-const quickCreaseLanding = quickCreaseLandingImport;
-const quickAlternatives = quickAlternativesImport;
-const cuffDepthRule = cuffDepthRuleImport;
-const exactDefaults = exactDefaultsImport;
-const joinDenominator = joinDenominatorImport;
-const ZERO = ZEROImport;
-const ratioLenMaker = ratioLenMakerImport;
-const Reader = InputReader;
 
 /** A cuff input read and checked: exact mm throughout. */
 export interface CuffValues {
@@ -133,7 +121,7 @@ function shortMessage(required: Len, available: Len, shortBy: Len, depth: Len, a
 
 /** Plan a cuff from a pin mark: the four chalk lines, the cloth check, the old crease and the warnings. */
 export function planCuff(input: CuffInput): CuffPlan {
-  const v = readCuffInput(input, new Reader(input, false));
+  const v = readCuffInput(input, new InputReader(input, false));
   return quickCuff(v) ?? exactCuff(v);
 }
 

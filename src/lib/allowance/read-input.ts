@@ -2,16 +2,9 @@ import { AllowanceError } from './allowance-error';
 import type { Exact } from './exact';
 import { exactFromNumber } from './exact-number';
 import { formatExactQ } from './format-length';
-import { checkRangeExact, keptTexts as keptTextsImport, readExact as readExactImport } from './parse-length';
+import { checkRangeExact, keptTexts, readExact } from './parse-length';
 import type { Precision, Unit } from './types';
-import { isPrecision as isPrecisionImport, isUnit as isUnitImport, mmPerUnitRatio } from './units';
-
-// The hot path's imports, read once: under vite-node (tests, benchmarks) every use of an imported
-// name is a lookup in a dictionary-mode module object plus a getter call (DEVELOPERS.md).
-const keptTexts = keptTextsImport;
-const readExact = readExactImport;
-const isPrecision = isPrecisionImport;
-const isUnit = isUnitImport;
+import { isPrecision, isUnit, mmPerUnitRatio } from './units';
 
 /** What a length field may hold beyond the ±200 in range. */
 export interface LengthRule {

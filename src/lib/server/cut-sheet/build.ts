@@ -2,12 +2,12 @@
 // here. Relative imports keep it runnable by plain vite-node in benchmarks/ (no @ alias there).
 import {
   AllowanceError,
-  checkHemTaper as checkHemTaperImport,
-  checkTaper as checkTaperImport,
+  checkHemTaper,
+  checkTaper,
   isAllowanceError,
-  planCuff as planCuffImport,
-  planHem as planHemImport,
-  planOriginalHem as planOriginalHemImport,
+  planCuff,
+  planHem,
+  planOriginalHem,
   validateCuffInput,
   validateHemInput,
   validateOriginalHemInput,
@@ -17,14 +17,6 @@ import {
 import type { CuffInput, HemInput, HemTaperInput, TaperInput } from '../../allowance/types';
 import type { OriginalHemInput } from '../../allowance/kind-types';
 import type { CutSheetData, LegSheet, RecordedLength, ShrinkNote, Side, WaistNote } from '../../shared/cut-sheet-types';
-
-// The planners, read once: under vite-node (tests, benchmarks) every use of an imported name is a
-// lookup in a dictionary-mode module object plus a getter call, here twice (through the engine's index).
-const checkHemTaper = checkHemTaperImport;
-const checkTaper = checkTaperImport;
-const planCuff = planCuffImport;
-const planHem = planHemImport;
-const planOriginalHem = planOriginalHemImport;
 
 /** Leg widths for a taper check (the hem taper check's width fields); the cuff's own depth, sections and unit are taken from the cuff. */
 export type TaperWidths = Pick<HemTaperInput, 'widthAtEdge' | 'widthAbove' | 'heightAbove' | 'seamAllowance' | 'tolerance' | 'widthAtCut'>;
