@@ -5,7 +5,7 @@ import * as reactPdfLayout from '@react-pdf/layout';
 import { installPdfPlatform, PDF_PATCHES, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
 
 /** Asserts that patch `name` is refused, with a log line naming `exportName`, over a layout package lacking that export. */
-export function expectRefusedWithout(name: string, exportName: string, install: (layout: Record<string, unknown>) => unknown): void {
+export function expectRefusedWithout(name: string, exportName: string, install: (layout: Record<string, unknown>) => () => void): void {
   const { [exportName]: _left, ...unpatched } = reactPdfLayout as Record<string, unknown>;
   expect(() => install(unpatched)).toThrow(new RegExp(`${exportName}.*not applied`));
   const patch = PDF_PATCHES.find((p) => p.name === name)!;
