@@ -39,6 +39,8 @@ function startServer(i) {
   return spawn('node', [`${outDir}/server/entry.mjs`], {
     env: {
       ...process.env,
+      // As npm start runs it (React's production build).
+      NODE_ENV: 'production',
       PORT: String(ports[i]),
       HOST: '127.0.0.1',
       DATA_DIR: join(dataDir, String(i)),

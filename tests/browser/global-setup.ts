@@ -73,6 +73,9 @@ export default async function setup(project: TestProject) {
   server = spawn('node', [`${outDir}/server/entry.mjs`], {
     env: {
       ...process.env,
+      // As npm start and npm run serve run it: vitest passes NODE_ENV=test on, and with it the
+      // server and its sheet workers would load React's development build.
+      NODE_ENV: 'production',
       PORT: String(port),
       HOST: '127.0.0.1',
       DATA_DIR: dataDir,

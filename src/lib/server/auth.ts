@@ -42,8 +42,8 @@ export const auth = betterAuth({
   // Failed sign-ins are limited per account in src/services/sign-in-limit.ts; better-auth's own
   // limiter keys on a client IP header that a loopback deployment never sends.
   rateLimit: { enabled: false },
-  // better-auth turns its origin and callback-URL checks off by itself when NODE_ENV is "test",
-  // which the test runner passes to the server it starts: keep them on, so tests see production.
+  // better-auth turns its origin and callback-URL checks off by itself when NODE_ENV is "test"
+  // (a server started from a test runner that passes its own on): keep them on, as in production.
   advanced: { disableOriginCheck: false },
   plugins: [
     appAuthHooks(),
