@@ -9,7 +9,7 @@ const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
 /** The snapshot's bytes from `dir`, making it first when no worker has yet. */
 export async function migratedSnapshot(dir: string): Promise<Buffer> {
-  const file = join(dir, 'migrated.tar.gz');
+  const file = join(dir, 'migrated.tar');
   const lock = join(dir, 'making.lock');
   for (let waited = 0; !existsSync(file); waited += 100) {
     let mine = false;
@@ -22,7 +22,10 @@ export async function migratedSnapshot(dir: string): Promise<Buffer> {
     if (mine) {
       const pglite = new PGlite();
       await (await openDatabase({ pglite })).migrate();
-      const dump = await pglite.dumpDataDir('gzip');
+      // A plain tar, checkpointed first: no file unzips it in JS as it opens its database (about
+      // 0.3 s of CPU less for each of some sixty files, measured: 1.3 s against 1.6 s).
+      await pglite.query('CHECKPOINT');
+      const dump = await pglite.dumpDataDir('none');
       writeFileSync(`${file}.part`, Buffer.from(await dump.arrayBuffer()));
       renameSync(`${file}.part`, file);
       await pglite.close();

@@ -1,0 +1,2 @@
+import { migratedSnapshot } from '../tests/db/snapshot';
+await migratedSnapshot('/tmp/s10/pgl');
