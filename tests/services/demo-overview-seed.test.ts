@@ -4,17 +4,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import type { Shop } from './fixtures';
 import { eq } from 'drizzle-orm';
 
-vi.mock('astro:env/server', () => ({
-  BODY_IDLE_SECONDS: 20,
-  PAYMENTS_API_KEY: undefined,
-  PAYMENTS_API_BASE: undefined,
-  PAYMENTS_WEBHOOK_SECRET: 'whsec_demo_overview',
-  SMS_ACCOUNT_SID: undefined,
-  SMS_AUTH_TOKEN: undefined,
-  SMS_FROM: undefined,
-  SMS_API_BASE: undefined,
-  BETTER_AUTH_URL: 'http://localhost:4321',
-}));
+vi.mock('astro:env/server', async () => (await import('./server-env')).serverEnv({ PAYMENTS_WEBHOOK_SECRET: 'whsec_demo_overview' }));
 vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');

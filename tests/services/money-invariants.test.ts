@@ -10,17 +10,7 @@ import fc from 'fast-check';
 import { and, eq } from 'drizzle-orm';
 import type { Shop } from './fixtures';
 
-vi.mock('astro:env/server', () => ({
-  BODY_IDLE_SECONDS: 20,
-  PAYMENTS_API_KEY: undefined,
-  PAYMENTS_API_BASE: undefined,
-  PAYMENTS_WEBHOOK_SECRET: undefined,
-  SMS_ACCOUNT_SID: undefined,
-  SMS_AUTH_TOKEN: undefined,
-  SMS_FROM: undefined,
-  SMS_API_BASE: undefined,
-  BETTER_AUTH_URL: 'http://localhost:4321',
-}));
+vi.mock('astro:env/server', async () => (await import('./server-env')).serverEnv());
 vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');

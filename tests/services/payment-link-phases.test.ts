@@ -22,18 +22,9 @@ const { fake, proxy } = await vi.hoisted(async () => {
   });
   return { fake, proxy: await startPaymentsProxy(fake.base) };
 });
-vi.mock('astro:env/server', () => ({
-  BODY_IDLE_SECONDS: 20,
-  NOTICE_LEASE_SECONDS: 180,
-  PAYMENTS_API_KEY: 'sk_test_phases',
-  PAYMENTS_API_BASE: proxy.base,
-  PAYMENTS_WEBHOOK_SECRET: 'whsec_phases',
-  SMS_ACCOUNT_SID: undefined,
-  SMS_AUTH_TOKEN: undefined,
-  SMS_FROM: undefined,
-  SMS_API_BASE: undefined,
-  BETTER_AUTH_URL: 'http://localhost:4321',
-}));
+vi.mock('astro:env/server', async () =>
+  (await import('./server-env')).serverEnv({ PAYMENTS_API_KEY: 'sk_test_phases', PAYMENTS_API_BASE: proxy.base, PAYMENTS_WEBHOOK_SECRET: 'whsec_phases' }),
+);
 vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');

@@ -18,18 +18,13 @@ const fake = await vi.hoisted(async () => {
     quiet: true,
   });
 });
-vi.mock('astro:env/server', () => ({
-  BODY_IDLE_SECONDS: 20,
-  NOTICE_LEASE_SECONDS: 180,
-  PAYMENTS_API_KEY: 'sk_test_links_only',
-  PAYMENTS_API_BASE: fake.base,
-  PAYMENTS_WEBHOOK_SECRET: 'whsec_links_only',
-  SMS_ACCOUNT_SID: undefined,
-  SMS_AUTH_TOKEN: undefined,
-  SMS_FROM: undefined,
-  SMS_API_BASE: undefined,
-  BETTER_AUTH_URL: 'http://localhost:4321',
-}));
+vi.mock('astro:env/server', async () =>
+  (await import('./server-env')).serverEnv({
+    PAYMENTS_API_KEY: 'sk_test_links_only',
+    PAYMENTS_API_BASE: fake.base,
+    PAYMENTS_WEBHOOK_SECRET: 'whsec_links_only',
+  }),
+);
 vi.mock('@/db', () => import('../db/db-mock'));
 
 const { db, handle } = await import('@/db');

@@ -13,18 +13,7 @@ const sent = vi.hoisted(
       origin: unknown;
     }[],
 );
-vi.mock('astro:env/server', () => ({
-  BODY_IDLE_SECONDS: 20,
-  NOTICE_LEASE_SECONDS: 180,
-  PAYMENTS_API_KEY: undefined,
-  PAYMENTS_API_BASE: undefined,
-  PAYMENTS_WEBHOOK_SECRET: undefined,
-  SMS_ACCOUNT_SID: undefined,
-  SMS_AUTH_TOKEN: undefined,
-  SMS_FROM: undefined,
-  SMS_API_BASE: undefined,
-  BETTER_AUTH_URL: 'http://localhost:4321',
-}));
+vi.mock('astro:env/server', async () => (await import('./server-env')).serverEnv());
 vi.mock('@/lib/server/mail', () => ({ sendMail: vi.fn(async (mail: (typeof sent)[number]['mail'], origin: unknown) => void sent.push({ mail, origin })) }));
 vi.mock('@/db', () => import('../db/db-mock'));
 
