@@ -35,7 +35,17 @@ async function serve(env: Record<string, string>) {
   const base = `http://localhost:${port}`;
   const clean = Object.fromEntries(Object.entries(process.env).filter(([k]) => !/^(DATABASE_URL|BETTER_AUTH_SECRET|DEMO_DATA)$/.test(k)));
   const child: ChildProcess = spawn('node', [entry], {
-    env: { ...clean, NODE_ENV: 'production', PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir, BETTER_AUTH_URL: base, SMTP_PORT: '9', NOTICE_TICK_SECONDS: '0', ...env },
+    env: {
+      ...clean,
+      NODE_ENV: 'production',
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      DATA_DIR: dataDir,
+      BETTER_AUTH_URL: base,
+      SMTP_PORT: '9',
+      NOTICE_TICK_SECONDS: '0',
+      ...env,
+    },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let stderr = '';
