@@ -7,6 +7,7 @@
 import type { Locator, Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { ready, sharedBrowser } from './browser';
+import { freshGarment } from './fresh-garment';
 import { signedInPage } from './sign-in';
 
 const browser = sharedBrowser();
@@ -19,20 +20,6 @@ const SCREENS = [
   { width: 768, height: 1024 },
   { width: 1024, height: 768 },
 ];
-
-/** Opens a ticket with one garment through the API, as the signed-in page; the garment's id. */
-async function freshGarment(page: Page, description: string): Promise<string> {
-  return page.evaluate(async (description) => {
-    const post = await fetch('/api/tickets', {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ customer: { name: 'Perpetua Langridge' }, garments: [{ description }] }),
-    });
-    const ticket = await post.json();
-    const detail = await (await fetch(`/api/tickets/${ticket.id}`)).json();
-    return detail.garments[0].id as string;
-  }, description);
-}
 
 /** Where an element's top is on the page (not in the window, which scrolls). */
 const top = (l: Locator) => l.evaluate((e) => e.getBoundingClientRect().top + window.scrollY);
@@ -64,7 +51,7 @@ describe('the plan stays in sight while the fitting is typed', () => {
   for (const size of SCREENS) {
     it(`at ${size.width} × ${size.height}: the summary bar's cut line is on screen and clear of the field, for every length field focused in turn`, async () => {
       const page = await signedInPage(browser(), 'tailor', '/queue', { viewport: size, hasTouch: true });
-      if (!id) id = await freshGarment(page, 'Bottle green moleskin');
+      if (!id) id = await freshGarment(page, 'Bottle green moleskin', 'Perpetua Langridge');
       await page.goto(`/garments/${id}`);
       await ready(page);
       for (const [label, value] of TYPED) await field(page, label).fill(value);
@@ -109,7 +96,7 @@ describe('the preset list opens without moving the form', () => {
   for (const size of SCREENS.filter((s) => s.height > 480)) {
     it(`at ${size.width} px: opens a labelled dialog over the form; no field moves, Escape closes it, the keyboard picks a preset`, async () => {
       const page = await signedInPage(browser(), 'tailor', '/queue', { viewport: size, hasTouch: true });
-      if (!id) id = await freshGarment(page, 'Sand linen trousers');
+      if (!id) id = await freshGarment(page, 'Sand linen trousers', 'Perpetua Langridge');
       await page.goto(`/garments/${id}`);
       await ready(page);
       // A new fitting starts from the house default once the presets have loaded: measure after that.
@@ -156,7 +143,7 @@ describe('the preset list opens without moving the form', () => {
 describe('the step record and the move past Chalk-marked', () => {
   it('draws the steps as a record, not as controls', async () => {
     const page = await signedInPage(browser(), 'tailor', '/queue', { viewport: { width: 768, height: 1024 }, hasTouch: true });
-    const id = await freshGarment(page, 'Ash flannel');
+    const id = await freshGarment(page, 'Ash flannel', 'Perpetua Langridge');
     await page.goto(`/garments/${id}`);
     await ready(page);
     const record = page.getByRole('list', { name: 'Bench steps' });
@@ -177,7 +164,7 @@ describe('the step record and the move past Chalk-marked', () => {
 
   it('asks before a garment with no fitting is marked Cut (warn), and goes on only when told', async () => {
     const page = await signedInPage(browser(), 'tailor', '/queue', { viewport: { width: 1024, height: 768 }, hasTouch: true });
-    const id = await freshGarment(page, 'Mist grey twill');
+    const id = await freshGarment(page, 'Mist grey twill', 'Perpetua Langridge');
     await page.goto(`/garments/${id}`);
     await ready(page);
     await page.getByRole('button', { name: 'Mark Chalk-marked' }).click();
@@ -205,7 +192,7 @@ describe('the step record and the move past Chalk-marked', () => {
 
   it('goes straight on, with no question, once the fitting is saved', async () => {
     const page = await signedInPage(browser(), 'tailor', '/queue', { viewport: { width: 768, height: 1024 }, hasTouch: true });
-    const id = await freshGarment(page, 'Camel cavalry twill');
+    const id = await freshGarment(page, 'Camel cavalry twill', 'Perpetua Langridge');
     await page.goto(`/garments/${id}`);
     await ready(page);
     await page.getByRole('button', { name: 'Mark Chalk-marked' }).click();
@@ -232,7 +219,7 @@ describe('the step record and the move past Chalk-marked', () => {
     await setRule(/^Refuse/);
     try {
       const page = await signedInPage(browser(), 'tailor', '/queue', { viewport: { width: 768, height: 1024 }, hasTouch: true });
-      const id = await freshGarment(page, 'Ink blue serge');
+      const id = await freshGarment(page, 'Ink blue serge', 'Perpetua Langridge');
       await page.goto(`/garments/${id}`);
       await ready(page);
       await page.getByRole('button', { name: 'Mark Chalk-marked' }).click();

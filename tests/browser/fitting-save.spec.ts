@@ -3,31 +3,18 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { ready, sharedBrowser, tabletPage } from './browser';
+import { freshGarment } from './fresh-garment';
 import { signInAs } from './sign-in';
 
 const browser = sharedBrowser();
 
 const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
 
-/** Opens a ticket with one garment through the API, as the signed-in page, and returns the garment's id. */
-async function freshGarment(page: Page, description: string): Promise<string> {
-  return page.evaluate(async (description) => {
-    const post = await fetch('/api/tickets', {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ customer: { name: 'Ottoline Brask' }, garments: [{ description }] }),
-    });
-    const ticket = await post.json();
-    const detail = await (await fetch(`/api/tickets/${ticket.id}`)).json();
-    return detail.garments[0].id as string;
-  }, description);
-}
-
 describe('a fitting saved while typing goes on', () => {
   it('keeps lengths typed during the save and shows the saved ones for the rest', async () => {
     const page = await tabletPage(browser());
     await signInAs(page, 'tailor', '/queue');
-    const id = await freshGarment(page, 'Slate flannel trousers');
+    const id = await freshGarment(page, 'Slate flannel trousers', 'Ottoline Brask');
     await page.goto(`/garments/${id}`);
     await ready(page);
 
@@ -72,7 +59,7 @@ describe('a fitting saved while typing goes on', () => {
   it('keeps lengths typed before the house default arrives, unsaved, with the default under the rest', async () => {
     const page = await tabletPage(browser());
     await signInAs(page, 'tailor', '/queue');
-    const id = await freshGarment(page, 'Moss twill trousers');
+    const id = await freshGarment(page, 'Moss twill trousers', 'Ottoline Brask');
     // The shop's presets come late, as on a slow connection at the fitting.
     let release!: () => void;
     const held = new Promise<void>((r) => (release = r));

@@ -5,6 +5,7 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { ready, sharedBrowser, tabletPage } from './browser';
+import { freshGarment } from './fresh-garment';
 import { signInAs } from './sign-in';
 
 const browser = sharedBrowser();
@@ -12,24 +13,10 @@ const browser = sharedBrowser();
 const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
 const PIN = 'Pin at the back (finished length)';
 
-/** Opens a ticket with one garment through the API, as the signed-in page, and returns the garment's id. */
-async function freshGarment(page: Page, description: string): Promise<string> {
-  return page.evaluate(async (description) => {
-    const post = await fetch('/api/tickets', {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ customer: { name: 'Perpetua Lindqvist' }, garments: [{ description }] }),
-    });
-    const ticket = await post.json();
-    const detail = await (await fetch(`/api/tickets/${ticket.id}`)).json();
-    return detail.garments[0].id as string;
-  }, description);
-}
-
 async function garmentPage(description: string): Promise<{ page: Page; id: string }> {
   const page = await tabletPage(browser());
   await signInAs(page, 'tailor', '/queue');
-  const id = await freshGarment(page, description);
+  const id = await freshGarment(page, description, 'Perpetua Lindqvist');
   await page.goto(`/garments/${id}`);
   await ready(page);
   return { page, id };

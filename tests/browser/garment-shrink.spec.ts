@@ -8,6 +8,7 @@ import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { flatText, pdfFile } from '../lib/cut-sheet/poppler';
 import { ready, sharedBrowser, tabletPage } from './browser';
+import { freshGarment } from './fresh-garment';
 import { signInAs } from './sign-in';
 
 const browser = sharedBrowser();
@@ -16,20 +17,6 @@ const field = (page: Page, label: string) => page.getByLabel(label, { exact: tru
 const choose = (page: Page, name: string) => page.locator('label', { has: page.getByRole('radio', { name, exact: true }) }).click();
 // The PDF's text wraps lines and drops the typographic apostrophe: compare without either.
 const squash = (s: string) => s.replace(/[\s’']+/g, '');
-
-/** Opens a ticket with one garment through the API, as the signed-in page, and returns the garment's id. */
-async function freshGarment(page: Page, description: string): Promise<string> {
-  return page.evaluate(async (description) => {
-    const post = await fetch('/api/tickets', {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ customer: { name: 'Wendeline Obst' }, garments: [{ description }] }),
-    });
-    const ticket = await post.json();
-    const detail = await (await fetch(`/api/tickets/${ticket.id}`)).json();
-    return detail.garments[0].id as string;
-  }, description);
-}
 
 /** Presses Print and reads the sheet the page fetched (its URL, with the page's unit and paper), again through the page's cookies: the response event keeps no body. */
 async function printedSheet(page: Page, click: () => Promise<void>): Promise<Uint8Array> {
@@ -51,7 +38,7 @@ describe('unwashed cloth at the fitting', () => {
     const errors: string[] = [];
     page.on('pageerror', (e) => errors.push(e.message));
     await signInAs(page, 'tailor', '/queue');
-    const id = await freshGarment(page, 'Raw indigo jeans, unwashed');
+    const id = await freshGarment(page, 'Raw indigo jeans, unwashed', 'Wendeline Obst');
     await page.goto(`/garments/${id}`);
     await ready(page);
     await choose(page, 'Plain hem');

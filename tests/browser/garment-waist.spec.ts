@@ -6,6 +6,7 @@ import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { flatText, pdfFile } from '../lib/cut-sheet/poppler';
 import { ready, sharedBrowser, tabletPage } from './browser';
+import { freshGarment } from './fresh-garment';
 import { signInAs } from './sign-in';
 
 const browser = sharedBrowser();
@@ -15,27 +16,13 @@ const choose = (page: Page, name: string) => page.locator('label', { has: page.g
 // The PDF's text wraps lines and drops the typographic apostrophe: compare without either.
 const squash = (s: string) => s.replace(/[\s’']+/g, '');
 
-/** Opens a ticket with one garment through the API, as the signed-in page, and returns the garment's id. */
-async function freshGarment(page: Page, description: string): Promise<string> {
-  return page.evaluate(async (description) => {
-    const post = await fetch('/api/tickets', {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ customer: { name: 'Ottoline Brask' }, garments: [{ description }] }),
-    });
-    const ticket = await post.json();
-    const detail = await (await fetch(`/api/tickets/${ticket.id}`)).json();
-    return detail.garments[0].id as string;
-  }, description);
-}
-
 describe('a pending waist change at the fitting', () => {
   it('shows the moved pin mark on the garment page and prints it on the sheet', async () => {
     const page = await tabletPage(browser());
     const errors: string[] = [];
     page.on('pageerror', (e) => errors.push(e.message));
     await signInAs(page, 'tailor', '/queue');
-    const id = await freshGarment(page, 'Charcoal flannel trousers, waist to take in');
+    const id = await freshGarment(page, 'Charcoal flannel trousers, waist to take in', 'Ottoline Brask');
     await page.goto(`/garments/${id}`);
     await ready(page);
     await choose(page, 'Plain hem');
@@ -76,7 +63,7 @@ describe('a pending waist change at the fitting', () => {
     await choose(page, 'Waist first: alter the waist, then pin the length at a new fitting');
     await page.getByRole('button', { name: 'Save settings' }).click();
     await page.getByText('Saved.', { exact: true }).waitFor();
-    const id = await freshGarment(page, 'Navy serge trousers, waist first');
+    const id = await freshGarment(page, 'Navy serge trousers, waist first', 'Ottoline Brask');
     await page.goto(`/garments/${id}`);
     await ready(page);
     await choose(page, 'Plain hem');

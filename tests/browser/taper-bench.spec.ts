@@ -6,29 +6,13 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { ready, sharedBrowser, tabletPage } from './browser';
+import { freshGarment } from './fresh-garment';
 import { signInAs } from './sign-in';
 
 const browser = sharedBrowser();
 
 const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
 const choose = (page: Page, name: string) => page.locator('label', { has: page.getByRole('radio', { name, exact: true }) }).click();
-
-/** Opens a ticket with one garment through the API, as the signed-in page, and returns the garment's id. */
-async function freshGarment(page: Page, description: string, existingFinish: 'plain-hem' | 'unfinished'): Promise<string> {
-  return page.evaluate(
-    async ({ description, existingFinish }) => {
-      const post = await fetch('/api/tickets', {
-        method: 'POST',
-        headers: { 'content-type': 'application/json' },
-        body: JSON.stringify({ customer: { name: 'Halvard Quince' }, garments: [{ description, existingFinish }] }),
-      });
-      const ticket = await post.json();
-      const detail = await (await fetch(`/api/tickets/${ticket.id}`)).json();
-      return detail.garments[0].id as string;
-    },
-    { description, existingFinish },
-  );
-}
 
 /** The cutting line's row of the plain hem's taper check, as its text. */
 const cutRow = (page: Page) =>
@@ -42,7 +26,7 @@ describe('a plain hem on a tapered leg, let down first', () => {
   it('checks the taper of a plain hem and uses the width measured at the cutting line', async () => {
     const page = await tabletPage(browser());
     await signInAs(page, 'tailor', '/queue');
-    const id = await freshGarment(page, 'Fawn twill trousers', 'plain-hem');
+    const id = await freshGarment(page, 'Fawn twill trousers', 'Halvard Quince', { existingFinish: 'plain-hem' });
     await page.goto(`/garments/${id}`);
     await ready(page);
 
@@ -79,7 +63,7 @@ describe('a plain hem on a tapered leg, let down first', () => {
   it('does not ask an unfinished pair for the width at the cutting line', async () => {
     const page = await tabletPage(browser());
     await signInAs(page, 'tailor', '/queue');
-    const id = await freshGarment(page, 'New sand chinos', 'unfinished');
+    const id = await freshGarment(page, 'New sand chinos', 'Halvard Quince', { existingFinish: 'unfinished' });
     await page.goto(`/garments/${id}`);
     await ready(page);
     await choose(page, 'Plain hem');
