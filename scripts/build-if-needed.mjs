@@ -25,6 +25,15 @@ function newest(path) {
   return t;
 }
 
+/**
+ * The build's environment: always NODE_ENV=production, whoever asks. The server is run that way, and
+ * a build made under vitest's NODE_ENV=test compiles JSX for React's development runtime, which
+ * the production server cannot run (every page failed: "jsxDEV is not a function").
+ */
+export function buildEnv(outDir, env = process.env) {
+  return { ...env, NODE_ENV: 'production', ASTRO_OUT_DIR: outDir };
+}
+
 /** Runs `astro build` into outDir unless its server entry is newer than every source. */
 export function buildIfNeeded(outDir = 'dist', env = process.env) {
   const entry = join(outDir, 'server', 'entry.mjs');
@@ -33,7 +42,7 @@ export function buildIfNeeded(outDir = 'dist', env = process.env) {
   console.log(`Building the app into ${outDir}/ …`);
   const r = spawnSync('node_modules/.bin/astro', ['build'], {
     stdio: 'inherit',
-    env: { ...env, ASTRO_OUT_DIR: outDir },
+    env: buildEnv(outDir, env),
   });
   if (r.status !== 0) process.exit(r.status ?? 1);
 }
