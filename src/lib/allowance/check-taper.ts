@@ -26,7 +26,6 @@ export interface TaperValues {
 }
 
 const ONE = Exact.int(1);
-// Read once: every line of every plan names itself.
 
 const POSITIVE: LengthRule = { min: 'positive' };
 const NON_NEGATIVE: LengthRule = { min: 'non-negative' };

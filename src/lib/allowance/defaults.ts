@@ -81,8 +81,7 @@ const METRIC: ExactDefaults = {
 
 /** The exact defaults for a unit: inch figures for 'in', metric ones for 'cm' and 'mm'. */
 export function exactDefaults(unit: Unit): ExactDefaults {
-  // Compared here, not by isMetric: a plan asks twice, and an imported call costs more under vite-node.
-  return unit === 'in' ? IMPERIAL : METRIC;
+  return isMetric(unit) ? METRIC : IMPERIAL;
 }
 
 const depthRule = (e: ExactDefaults): LengthRule => ({
@@ -96,7 +95,7 @@ const METRIC_DEPTH = depthRule(METRIC);
 
 /** What a cuff depth must be in a unit (needed, more than 0, from the shallowest cuff to the deepest), made once per unit system. */
 export function cuffDepthRule(unit: Unit): LengthRule {
-  return unit === 'in' ? IMPERIAL_DEPTH : METRIC_DEPTH;
+  return isMetric(unit) ? METRIC_DEPTH : IMPERIAL_DEPTH;
 }
 
 /** Defaults and usual ranges of one unit, as lengths shown in that unit. */
