@@ -1,8 +1,9 @@
 // The engine against another version of itself, alternated A B A B in one process (issue 12: compare
 // warm against warm, same load). A is another commit's src/lib/allowance and
 // src/lib/server/cut-sheet/build.ts (before the layer split, cut-sheet/build.ts + types.ts right
-// under src/lib), copied inside this checkout (its packages come from node_modules here); both are bundled by esbuild as engine.ts bundles this checkout's
-// (.bench-engine/engine-a.mjs and engine-b.mjs), so each runs as the server would run it:
+// under src/lib), copied inside this checkout (its packages come from node_modules here). Both are
+// bundled by esbuild as engine.ts bundles this checkout's (.bench-engine/engine-a.mjs and
+// engine-b.mjs), so each runs as the server would run it:
 //   mkdir -p .test-dist-ab/engA && git archive main src/lib/allowance src/lib/server/cut-sheet/build.ts src/lib/shared/cut-sheet-types.ts | tar -x -C .test-dist-ab/engA
 //   NODE_ENV=production node_modules/.bin/vite-node benchmarks/engine-ab.ts [rounds]
 // (ENGINE_A=<folder> for another copy.) Prints, per goal case of engine.ts (same inputs, same

@@ -15,8 +15,8 @@ export type Engine = Pick<typeof Allowance, 'checkHemTaper' | 'checkTaper' | 'pl
 
 /**
  * Bundles the engine found under `root` (a checkout, or another commit's copy of its sources) into
- * `outDir/<name>.mjs` (a name per engine: a module is imported once) and imports it. A copy from before the layer split keeps planLeg in
- * src/lib/cut-sheet/build.ts.
+ * `outDir/<name>.mjs` (a name per engine: a module is imported once) and imports it. A copy from
+ * before the layer split keeps planLeg in src/lib/cut-sheet/build.ts.
  */
 export async function bundledEngine(root: string, outDir: string, name: string): Promise<Engine> {
   const from = resolve(root);
