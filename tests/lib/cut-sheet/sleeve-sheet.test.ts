@@ -94,8 +94,8 @@ describe('the printed sleeve sheet', () => {
       expect(text).toContain(words);
   });
 
-  it('draws each line once after a sheet whose lines came in another order (react-pdf moves a keyed child by inserting it again, leaving the old one)', async () => {
-    // Documents share one react-pdf root (render-pdf.ts): the shoulder's table (0, 1) then the cuff's (1, 0, 2).
+  it('draws each line once after a sheet whose lines came in another order (a shared React root once printed a moved row twice)', async () => {
+    // The shoulder's table (0, 1) then the cuff's (1, 0, 2); each document's tree is made afresh now (pdf-node-tree.ts).
     await renderCutSheet(buildSleeveSheet(JACKET, { unit: 'mm', shortenBy: 25, buttonholes: 'working' }));
     const text = flatText(pdfFile(await renderCutSheet(buildSleeveSheet(JACKET, DECORATIVE))));
     expect(text.split('2 CUT · Cutting line').length - 1).toBe(1);
