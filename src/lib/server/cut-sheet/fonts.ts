@@ -9,6 +9,7 @@ import { dirname, join } from 'node:path';
 import { Font } from '@react-pdf/renderer';
 import { adoptFace, installPdfPlatform, type PlatformFace } from '../pdf-platform/index';
 import { SEED_CHARACTERS, SHEET_FEATURES } from './shaping-features';
+import { keepCodePointsOfText, type GlyphMaker } from './glyph-code-points';
 
 /** The font family the sheet is set in. */
 export const FAMILY = 'Inter';
@@ -118,7 +119,9 @@ async function load(): Promise<void> {
 async function loadFace(fontFamily: string, fontWeight: number): Promise<Face> {
   const source = Font.getFont({ fontFamily, fontWeight, fontStyle: 'normal' });
   await source.load();
-  return source.data as unknown as Face;
+  const face = source.data as unknown as Face;
+  keepCodePointsOfText(face as unknown as GlyphMaker);
+  return face;
 }
 
 // Each read on the first document that needs it, once per process (SC about 10 MB a weight, KR 6 MB).
