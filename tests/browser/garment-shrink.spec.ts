@@ -6,7 +6,7 @@
 // edge is chalked at 34 7/8 in and the cut at 36 5/8 in (plain arithmetic).
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { flatText, pdfFile } from '../lib/cut-sheet/poppler';
+import { flatText, pdfFile, squash } from '../lib/cut-sheet/poppler';
 import { ready, sharedBrowser, tabletPage } from './browser';
 import { freshGarment } from './fresh-garment';
 import { signInAs } from './sign-in';
@@ -15,8 +15,6 @@ const browser = sharedBrowser();
 
 const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
 const choose = (page: Page, name: string) => page.locator('label', { has: page.getByRole('radio', { name, exact: true }) }).click();
-// The PDF's text wraps lines and drops the typographic apostrophe: compare without either.
-const squash = (s: string) => s.replace(/[\s’']+/g, '');
 
 /** Presses Print and reads the sheet the page fetched (its URL, with the page's unit and paper), again through the page's cookies: the response event keeps no body. */
 async function printedSheet(page: Page, click: () => Promise<void>): Promise<Uint8Array> {

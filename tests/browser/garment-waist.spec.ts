@@ -4,7 +4,7 @@
 // the mark pinned at 31 1/2 in moves down to 33 in (plain arithmetic).
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { flatText, pdfFile } from '../lib/cut-sheet/poppler';
+import { flatText, pdfFile, squash } from '../lib/cut-sheet/poppler';
 import { ready, sharedBrowser, tabletPage } from './browser';
 import { freshGarment } from './fresh-garment';
 import { signInAs } from './sign-in';
@@ -13,8 +13,6 @@ const browser = sharedBrowser();
 
 const field = (page: Page, label: string) => page.getByLabel(label, { exact: true });
 const choose = (page: Page, name: string) => page.locator('label', { has: page.getByRole('radio', { name, exact: true }) }).click();
-// The PDF's text wraps lines and drops the typographic apostrophe: compare without either.
-const squash = (s: string) => s.replace(/[\s’']+/g, '');
 
 describe('a pending waist change at the fitting', () => {
   it('shows the moved pin mark on the garment page and prints it on the sheet', async () => {

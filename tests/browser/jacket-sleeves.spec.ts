@@ -10,7 +10,8 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { ready, sharedBrowser, TABLET } from './browser';
-import { printSheetText, priceFromGarments, squash } from './printed-sheet';
+import { printSheetText, priceFromGarments } from './printed-sheet';
+import { squash } from '../lib/cut-sheet/poppler';
 import { signedInPage } from './sign-in';
 
 const browser = sharedBrowser();

@@ -2,11 +2,8 @@
 // price a ticket from its garments at the counter.
 import type { Locator, Page } from 'playwright-core';
 import { expect } from 'vitest';
-import { flatText, pdfFile } from '../lib/cut-sheet/poppler';
+import { flatText, pdfFile, squash } from '../lib/cut-sheet/poppler';
 import { ready } from './browser';
-
-/** A text without spaces and apostrophes: the PDF's text wraps lines and drops the typographic apostrophe. */
-export const squash = (s: string) => s.replace(/[\s’']+/g, '');
 
 /** Taps "Print cut sheet" on the garment page, checks a PDF came back, and returns the sheet's text squashed. */
 export async function printSheetText(page: Page, garmentId: string): Promise<string> {

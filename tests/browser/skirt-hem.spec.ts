@@ -16,7 +16,8 @@ import { describe, expect, it } from 'vitest';
 import type { QueueRow } from '@/lib/shared/bench-types';
 import { ready, sharedBrowser, TABLET } from './browser';
 import { layoutProblems } from './layout-checks';
-import { printSheetText, priceFromGarments, squash } from './printed-sheet';
+import { printSheetText, priceFromGarments } from './printed-sheet';
+import { squash } from '../lib/cut-sheet/poppler';
 import { signedInPage } from './sign-in';
 
 const browser = sharedBrowser();

@@ -14,11 +14,9 @@ const { fittingRequest, openTicket, saveFitting } = await import('./garment-fixt
 const { garmentSheet } = await import('@/services/cut-sheets');
 const { benchSettings, saveBenchSettings } = await import('@/services/shop-settings');
 const { measurementsRequest, blankLeg } = await import('@/lib/shared/measurement-request');
-const { flatText, pdfFile } = await import('../lib/cut-sheet/poppler');
+const { flatText, pdfFile, squash } = await import('../lib/cut-sheet/poppler');
 
 let a: Shop;
-// The PDF's text wraps lines and drops the typographic apostrophe: compare without either.
-const squash = (s: string) => s.replace(/[\s’']+/g, '');
 // Invented pair of raw jeans: a 30 in inseam pinned at 31 1/2 in, 1 1/2 in hem.
 const leg = { backPin: '31 1/2', hemAllowance: '1 1/2', shrinkCloth: 'raw-denim', lengthToMark: '30' };
 

@@ -12,11 +12,9 @@ const { makeShop } = await import('./fixtures');
 const { fittingRequest, openTicket, saveFitting } = await import('./garment-fixtures');
 const { garmentSheet } = await import('@/services/cut-sheets');
 const { benchSettings, saveBenchSettings } = await import('@/services/shop-settings');
-const { flatText, pdfFile } = await import('../lib/cut-sheet/poppler');
+const { flatText, pdfFile, squash } = await import('../lib/cut-sheet/poppler');
 
 let a: Shop;
-// The PDF's text wraps lines and drops the typographic apostrophe: compare without either.
-const squash = (s: string) => s.replace(/[\s’']+/g, '');
 // Invented wearer: taken in 1 in, waist 34 in, seat 40 in, 9 in apart (common practice, no source).
 const leg = { backPin: '31 1/2', hemAllowance: '1 1/2', waistChange: '-1', waistGirth: '34', seatGirth: '40', waistToSeat: '9' };
 
@@ -45,7 +43,9 @@ describe('a pending waist change on the sheet', () => {
     const { garment } = await openTicket(a, { garments: [{ description: 'Pantalon gris' }] });
     await saveFitting(a.tailor, garment.id, fittingRequest(leg, leg, 'in', 'plain'));
     const text = flatText(pdfFile((await garmentSheet(a.tailor, garment.id, {}, 'https://bench.cuffwright.test')).bytes));
-    expect(squash(text)).toContain(squash('le repère d’épingle descend de 1 1/2 in, de 31 1/2 in à 33 in (règle : girth-slope'));
+    // The chalk guide's words may come between two lines of the note as poppler reads them.
+    expect(squash(text)).toContain(squash('le repère d’épingle descend de 1 1/2 in, de 31 1/2'));
+    expect(squash(text)).toContain(squash('à 33 in (règle : girth-slope'));
   });
 });
 

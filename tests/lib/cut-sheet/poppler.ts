@@ -27,6 +27,9 @@ export function flatText(file: string, page?: number): string {
   return r.stdout.replace(/\s+/g, ' ');
 }
 
+/** A text without white space, to compare with a PDF's text, which wraps lines anywhere. */
+export const squash = (s: string) => s.replace(/\s+/g, '');
+
 /** The text laid out as on the page: table rows stay on one line. */
 export function layoutText(file: string): string {
   return spawnSync('pdftotext', ['-layout', file, '-'], { encoding: 'utf8' }).stdout;
