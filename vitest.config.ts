@@ -25,8 +25,11 @@ export default getViteConfig({
     hookTimeout: 60_000,
     // Two forks for the isolated project (the only one on forks; vitest 3 reads pool sizes from the
     // root config only): its files wait on PGlite and the PDF renderer as much as on a core, and the
-    // default on 2 cores is one fork.
-    poolOptions: { forks: { maxForks: 2 } },
+    // default on 2 cores is one fork. Each of its files is a new process that compiles PGlite's (and
+    // yoga's) WebAssembly afresh, and V8's optimising tier costs more than it gives back within one
+    // file: baseline code only (--liftoff-only) took the project from 214 to 177 s (CPU 413 to
+    // 337 s, 2026-12-05). Tests only: the app's server runs with Node's defaults.
+    poolOptions: { forks: { maxForks: 2, execArgv: ['--liftoff-only'] } },
     projects: [
       // The rest share one module graph per worker thread: loading the engine, zod and the catalog
       // once instead of per file is most of this run's time (CI's unit phase, measured).
