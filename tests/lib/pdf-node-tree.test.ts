@@ -7,7 +7,6 @@ import { Document, Page, pdf, renderToBuffer, Text, View, type DocumentProps } f
 import { createElement, Fragment, useState, type ReactElement } from 'react';
 import { describe, expect, it, vi } from 'vitest';
 import { claimSlipDocument } from '@/lib/server/claim-slip/ClaimSlip';
-import type { ClaimSlipData } from '@/lib/server/claim-slip/types';
 import { cutSheetDocument } from '@/lib/server/cut-sheet/CutSheet';
 import { typeset } from '@/lib/server/cut-sheet/fonts';
 import { documentNode } from '@/lib/server/pdf-node-tree';
@@ -18,26 +17,8 @@ import { SLEEVE_ADAPTER } from '@/lib/shared/fitting/sleeve-fitting';
 import type { CutSheetData } from '@/lib/shared/cut-sheet-types';
 import { comparable } from './cut-sheet/pdf-objects';
 import { SHOP } from './cut-sheet/sheets';
+import { SLIP } from './claim-slip/slip';
 import { generatedSheets } from './pdf-platform/generated-sheets';
-
-const SLIP: ClaimSlipData = {
-  shopName: 'Pinmark & Hem',
-  location: '7 Bobbin Row, Wickhollow',
-  hours: 'Tue–Fri 9:00–18:00',
-  ticketNumber: 1007,
-  customerName: 'Perrin Loame',
-  receivedOn: '2026-12-01',
-  dueOn: '2026-12-08',
-  garments: ['Charcoal flannel', 'Brown moleskin'],
-  lines: [
-    { label: 'Cuff from a plain hem', amountMinor: 2400 },
-    { label: 'Regular customer (second pair)', amountMinor: -400 },
-  ],
-  currency: 'EUR',
-  total: 2000,
-  paid: 500,
-  due: 1500,
-};
 
 const RECEIPT: ReceiptData = {
   shopName: 'Pinmark & Hem',

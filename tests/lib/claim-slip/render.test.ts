@@ -3,29 +3,9 @@
 // screens' style ("Tue 8 Dec", never ISO); tear-off garment tags; 1–3 slips and 0–3 tags each.
 import { describe, expect, it } from 'vitest';
 import { renderClaimSlip } from '@/lib/server/claim-slip/render';
-import type { ClaimSlipData } from '@/lib/server/claim-slip/types';
 import { dueText } from '@/lib/shared/due-date';
 import { flatText, layoutText, pageInfo, pdfFile } from '../cut-sheet/poppler';
-
-// Invented shop, customer and prices.
-const SLIP: ClaimSlipData = {
-  shopName: 'Pinmark & Hem',
-  location: '7 Bobbin Row, Wickhollow',
-  hours: 'Tue–Fri 9:00–18:00',
-  ticketNumber: 1007,
-  customerName: 'Perrin Loame',
-  receivedOn: '2026-12-01',
-  dueOn: '2026-12-08',
-  garments: ['Charcoal flannel', 'Brown moleskin'],
-  lines: [
-    { label: 'Cuff from a plain hem', amountMinor: 2400 },
-    { label: 'Regular customer (second pair)', amountMinor: -400 },
-  ],
-  currency: 'EUR',
-  total: 2000,
-  paid: 500,
-  due: 1500,
-};
+import { SLIP } from './slip';
 
 describe('claim slip', () => {
   it('is one A6 page (105 × 148 mm = 297.64 × 419.53 pt at 72 pt to 25.4 mm)', async () => {

@@ -12,6 +12,7 @@ import { renderCutSheet } from '@/lib/server/cut-sheet/render';
 import { pdfObjects } from './pdf-objects';
 import { flatText, fonts, pdfFile } from './poppler';
 import { cuffInch, sheet } from './sheets';
+import { SLIP as TWO_GARMENTS } from '../claim-slip/slip';
 
 /** Invented names, one per script a shop meets. */
 const NAMES = [
@@ -57,22 +58,8 @@ function readBack(name: string): string {
     .join(' ');
 }
 
-// Invented shop and prices.
-const SLIP: ClaimSlipData = {
-  shopName: 'Pinmark & Hem',
-  location: '7 Bobbin Row, Wickhollow',
-  hours: 'Tue–Fri 9:00–18:00',
-  ticketNumber: 1007,
-  customerName: 'Perrin Loame',
-  receivedOn: '2026-12-01',
-  dueOn: '2026-12-08',
-  garments: ['Charcoal flannel'],
-  lines: [{ label: 'Cuff from a plain hem', amountMinor: 2400 }],
-  currency: 'EUR',
-  total: 2400,
-  paid: 0,
-  due: 2400,
-};
+// One garment, unpaid.
+const SLIP: ClaimSlipData = { ...TWO_GARMENTS, garments: ['Charcoal flannel'], lines: TWO_GARMENTS.lines.slice(0, 1), total: 2400, paid: 0, due: 2400 };
 
 /** Each embedded font's PostScript name and every character its ToUnicode map gives for its glyphs. */
 function embeddedFonts(pdf: Uint8Array): { name: string; chars: Set<number> }[] {
