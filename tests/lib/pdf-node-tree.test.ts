@@ -52,7 +52,11 @@ const SLEEVES: CutSheetData = {
 };
 
 // Each document as the services build it: typeset first (a font stack where the text needs one).
-async function documents(): Promise<[string, ReactElement<DocumentProps>][]> {
+// Built once for both comparisons.
+let built: Promise<[string, ReactElement<DocumentProps>][]> | null = null;
+const documents = () => (built ??= buildDocuments());
+
+async function buildDocuments(): Promise<[string, ReactElement<DocumentProps>][]> {
   const sheets = [...generatedSheets(16, 4410), SLEEVES];
   const out: [string, ReactElement<DocumentProps>][] = [];
   for (const [i, d] of sheets.entries()) {

@@ -35,23 +35,16 @@ function typeName(type: unknown): string {
   return String((type as { $$typeof?: symbol } | null)?.$$typeof?.description ?? type);
 }
 
-// Where React makes a text node: a non-empty string, a number or a bigint; nothing for null,
-// undefined, booleans and ''.
-function textOf(child: unknown): string | null {
-  if (typeof child === 'string') return child === '' ? null : child;
-  if (typeof child === 'number' || typeof child === 'bigint') return String(child);
-  return null;
-}
-
 // Appends what `child` renders to: elements, arrays and iterables, fragments, components' output.
 function append(parent: PdfNode, child: ReactNode | unknown): void {
-  const text = textOf(child);
-  if (text !== null) {
+  // As React: nothing for null, undefined, booleans and ''; a text node for a string, number or bigint.
+  if (child === null || child === undefined || child === '' || typeof child === 'boolean') return;
+  if (typeof child === 'string' || typeof child === 'number' || typeof child === 'bigint') {
+    const text = String(child);
     if (TEXT_PARENTS.has(parent.type)) parent.children.push({ type: 'TEXT_INSTANCE', value: text });
     else console.warn(`Invalid '${text}' string child outside <Text> component`);
     return;
   }
-  if (child === null || child === undefined || child === '' || typeof child === 'boolean') return;
   if (Array.isArray(child)) {
     for (const c of child) append(parent, c);
     return;
