@@ -1,7 +1,7 @@
 // fontkit keeps one glyph object per glyph number, with the characters of the call that first made
-// it. A PDF's font subset makes the parts of composite glyphs by number alone (no characters): an
-// English sheet with an "é" or a "”" left Inter's right quote with none. Every later sheet in the
-// process then set "’" as a glyph standing for no character, so textkit counted the paragraph's
+// it. A PDF's font subset makes the parts of composite glyphs by number alone (no characters): any
+// sheet with a comma left Inter's right quote (a part of its comma) with none. Every later sheet in
+// the process then set "’" as a glyph standing for no character, so textkit counted the paragraph's
 // characters one short: a French sheet broke "cette règle doit" as "règle d / oit", and its text
 // read back "d épingle" (the text layer found with the French sheets, issue 13, and kept as a
 // failing case in to-unicode.test.ts; the broken lines found by running the sheet tests in one
