@@ -73,20 +73,6 @@ function drawOpen(ctx: PdfCtx, layout: SafeDocumentNode): void {
   }
 }
 
-async function renderLaidOut(doc: ReactElement<DocumentProps>, adjust: Relayout): Promise<Buffer> {
-  const first = await layOut(doc);
-  const layout = await adjust(first.layout, async (other) => (await layOut(other)).layout);
-  const { ctx, stream } = newPdf(first.props);
-  const chunks: Buffer[] = [];
-  const done = new Promise<Buffer>((resolve, reject) => {
-    stream.on('data', (chunk: Buffer) => chunks.push(chunk));
-    stream.on('end', () => resolve(Buffer.concat(chunks)));
-    stream.on('error', reject);
-  });
-  renderPdfLayout(ctx as never, layout);
-  return done;
-}
-
 // One turn: documents are laid out and drawn one at a time (the layout's memos are shared);
 // calls made meanwhile wait for it.
 function turn<T>(work: () => Promise<T>): Promise<T> {
@@ -101,13 +87,8 @@ export interface PdfPart {
   adjust?: Relayout;
 }
 
-/**
- * Draws parts (documents laid out one at a time, each in its own turn) as the pages
- * of ONE PDF, yielding its bytes as each part is drawn: a big batch never holds more than one
- * part's layout, and its fonts are subset once over every page, as if drawn in one document.
- * The document's title and info come from `props`.
- */
-export async function* renderPdfParts(parts: Iterable<PdfPart>, props: DocumentProps): AsyncGenerator<Buffer> {
+// An open PDF: what pdfkit wrote is taken as it comes, and the end is waited for.
+function openPdf(props: DocumentProps) {
   const { ctx, stream } = newPdf(props);
   let pending: Buffer[] = [];
   let failed: unknown = null;
@@ -125,27 +106,37 @@ export async function* renderPdfParts(parts: Iterable<PdfPart>, props: DocumentP
     pending = [];
     return out;
   };
+  return { ctx, ended, take };
+}
+
+/**
+ * Draws parts (documents laid out one at a time, each in its own turn) as the pages
+ * of ONE PDF, yielding its bytes as each part is drawn: a big batch never holds more than one
+ * part's layout, and its fonts are subset once over every page, as if drawn in one document.
+ * The document's title and info come from `props`, or else from the first part's Document.
+ */
+export async function* renderPdfParts(parts: Iterable<PdfPart>, props?: DocumentProps): AsyncGenerator<Buffer> {
+  let pdf = props ? openPdf(props) : null;
   for (const { doc, adjust } of parts) {
     await turn(async () => {
       const first = await layOut(doc);
       const layout = adjust ? await adjust(first.layout, async (other) => (await layOut(other)).layout) : first.layout;
-      drawOpen(ctx, layout);
+      pdf ??= openPdf(first.props);
+      drawOpen(pdf.ctx, layout);
     });
     // pdfkit writes a page when the next one begins: what is out so far goes now.
-    const out = await take();
+    const out = await pdf!.take();
     if (out.length > 0) yield out;
   }
-  ctx.end();
-  await ended;
-  yield await take();
-}
-
-/** Lays a document out, lets `adjust` replace pages (laying out others as it needs), then draws it once: one PDF, one turn. */
-export function renderPdfRelaid(doc: ReactElement<DocumentProps>, adjust: Relayout): Promise<Buffer> {
-  return turn(() => renderLaidOut(doc, adjust));
+  if (!pdf) throw new Error('A PDF needs a part or its document props.');
+  pdf.ctx.end();
+  await pdf.ended;
+  yield await pdf.take();
 }
 
 /** Renders a react-pdf document to PDF bytes; calls made meanwhile wait their turn. */
-export function renderPdf(doc: ReactElement<DocumentProps>): Promise<Buffer> {
-  return turn(() => renderLaidOut(doc, async (layout) => layout));
+export async function renderPdf(doc: ReactElement<DocumentProps>): Promise<Buffer> {
+  const chunks: Buffer[] = [];
+  for await (const chunk of renderPdfParts([{ doc }])) chunks.push(chunk);
+  return Buffer.concat(chunks);
 }

@@ -9,7 +9,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { cutSheetDocument } from '@/lib/server/cut-sheet/CutSheet';
 import { typeset } from '@/lib/server/cut-sheet/fonts';
 import { renderCutSheet } from '@/lib/server/cut-sheet/render';
-import { renderPdfRelaid } from '@/lib/server/render-pdf';
+import { renderPdfParts } from '@/lib/server/render-pdf';
 import { installPdfPlatform, PDF_PATCHES, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
 import { leanYoga } from '@/lib/server/pdf-platform/lean-yoga';
 import { installedVersion } from '@/lib/server/pdf-platform/versions';
@@ -39,10 +39,8 @@ const boxes = (node: Laid, out: string[] = []): string[] => {
 async function laidOut(i: number): Promise<{ layout: SafeDocumentNode; boxes: string[] }> {
   let kept: SafeDocumentNode | null = null;
   const { family, print } = await typeset([[SHEETS[i]!], []]);
-  await renderPdfRelaid(cutSheetDocument(print([SHEETS[i]!]), false, [], family), async (layout) => {
-    kept = layout;
-    return layout;
-  });
+  const parts = [{ doc: cutSheetDocument(print([SHEETS[i]!]), false, [], family), adjust: async (layout: SafeDocumentNode) => (kept = layout) }];
+  for await (const _ of renderPdfParts(parts));
   return { layout: kept!, boxes: boxes(kept! as Laid) };
 }
 
