@@ -47,6 +47,11 @@ interface Props {
   letDown?: boolean;
 }
 
+// A reset keeps the inputs it knows: without this a key typed between a reset (the default
+// landing, a save coming back) and the next render found no field, was dropped, and the field was
+// then put back to the reset's value.
+const KEEP_FIELDS = { keepFieldsRef: true } as const;
+
 const resolver = zodResolver(measurementsRequest) as unknown as Resolver<MeasurementsInput, unknown, Measurements>;
 
 function formValues(fitting: FittingView, unit: Unit): MeasurementsInput {
@@ -111,7 +116,7 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
     const draft = readDraft<MeasurementsInput>(draftKey);
     if (draft) {
       restoredDraft.current = true;
-      reset(draft, { keepDefaultValues: true });
+      reset(draft, { keepDefaultValues: true, keepFieldsRef: true });
       setRestored(true);
     }
   }, [draftKey, reset]);
@@ -125,7 +130,7 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
       void client.invalidateQueries({ queryKey: ['garment', garmentId] });
       const stored = formValues(saved, unit);
       const { values: kept, newer } = afterSave(sent.current ?? getValues(), getValues(), stored);
-      reset(stored);
+      reset(stored, KEEP_FIELDS);
       // Lengths typed during the save stay on screen and keep the form unsaved.
       keepTyped(kept, newer);
       setTypedWhileSaving(newer.length > 0);
@@ -194,7 +199,7 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
     const blank = formValues(fitting, unit);
     const start = withPreset(blank, LEGS, houseDefault);
     const { values: kept, newer } = afterSave(blank, getValues(), start);
-    reset(start);
+    reset(start, KEEP_FIELDS);
     keepTyped(kept, newer);
     setFromDefault(houseDefault.id);
   }, [presets.data, fitting, unit, reset, getValues, keepTyped]);
@@ -305,7 +310,7 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
                 <button
                   type="button"
                   onClick={() => {
-                    reset(formValues(fitting, unit));
+                    reset(formValues(fitting, unit), KEEP_FIELDS);
                     setRestored(false);
                   }}
                   className="min-h-11 self-start rounded border-2 border-warn bg-card px-3"
