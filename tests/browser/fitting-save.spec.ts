@@ -48,6 +48,17 @@ async function canHoldQueuedWork(
   };
 }
 
+/** Holds requests to `url` (only those of `method`, if given) on their way, as a slow connection at the fitting would; answers how to let them go. */
+async function holdRequests(page: Page, url: string, method?: string): Promise<() => void> {
+  let release!: () => void;
+  const held = new Promise<void>((r) => (release = r));
+  await page.route(url, async (route) => {
+    if (!method || route.request().method() === method) await held;
+    await route.continue();
+  });
+  return release;
+}
+
 describe('a fitting saved while typing goes on', () => {
   it('keeps lengths typed during the save and shows the saved ones for the rest', async () => {
     const page = await tabletPage(browser());
@@ -60,12 +71,7 @@ describe('a fitting saved while typing goes on', () => {
     await field(page, 'Cuff depth').fill('1 1/2');
 
     // Hold the save on its way, as a slow connection at the fitting would.
-    let release!: () => void;
-    const held = new Promise<void>((r) => (release = r));
-    await page.route('**/api/garments/*/measurements', async (route) => {
-      if (route.request().method() === 'PUT') await held;
-      await route.continue();
-    });
+    const release = await holdRequests(page, '**/api/garments/*/measurements', 'PUT');
     await page.getByRole('button', { name: /^Save measurements/ }).click();
     await page.getByRole('button', { name: 'Saving…' }).waitFor();
 
@@ -138,12 +144,7 @@ describe('a fitting saved while typing goes on', () => {
     await signInAs(page, 'tailor', '/queue');
     const id = await freshGarment(page, 'Heather tweed trousers', 'Ottoline Brask');
     const queued = await canHoldQueuedWork(page);
-    let release!: () => void;
-    const held = new Promise<void>((r) => (release = r));
-    await page.route('**/api/presets', async (route) => {
-      await held;
-      await route.continue();
-    });
+    const release = await holdRequests(page, '**/api/presets');
     await page.goto(`/garments/${id}`);
     await ready(page);
     await field(page, 'Pin at the back (finished length)').waitFor();
@@ -171,12 +172,7 @@ describe('a fitting saved while typing goes on', () => {
     await ready(page);
     await page.getByText(/From house default/).waitFor();
     await field(page, 'Cuff depth').fill('1 3/4');
-    let release!: () => void;
-    const held = new Promise<void>((r) => (release = r));
-    await page.route('**/api/garments/*/measurements', async (route) => {
-      if (route.request().method() === 'PUT') await held;
-      await route.continue();
-    });
+    const release = await holdRequests(page, '**/api/garments/*/measurements', 'PUT');
     await page.getByRole('button', { name: /^Save measurements/ }).click();
     await page.getByRole('button', { name: 'Saving…' }).waitFor();
     await queued.hold(true);
