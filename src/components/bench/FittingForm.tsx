@@ -116,7 +116,7 @@ export function FittingForm({ garmentId, fitting, unit, precision, onDirtyChange
     const draft = readDraft<MeasurementsInput>(draftKey);
     if (draft) {
       restoredDraft.current = true;
-      reset(draft, { keepDefaultValues: true, keepFieldsRef: true });
+      reset(draft, { ...KEEP_FIELDS, keepDefaultValues: true });
       setRestored(true);
     }
   }, [draftKey, reset]);

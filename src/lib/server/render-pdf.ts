@@ -134,9 +134,14 @@ export async function* renderPdfParts(parts: Iterable<PdfPart>, props?: Document
   yield await pdf.take();
 }
 
-/** Renders a react-pdf document to PDF bytes; calls made meanwhile wait their turn. */
-export async function renderPdf(doc: ReactElement<DocumentProps>): Promise<Buffer> {
+/** A PDF drawn in pieces, as one buffer once its last piece is out. */
+export async function wholePdf(pieces: AsyncIterable<Buffer>): Promise<Buffer> {
   const chunks: Buffer[] = [];
-  for await (const chunk of renderPdfParts([{ doc }])) chunks.push(chunk);
+  for await (const chunk of pieces) chunks.push(chunk);
   return Buffer.concat(chunks);
+}
+
+/** Renders a react-pdf document to PDF bytes; calls made meanwhile wait their turn. */
+export function renderPdf(doc: ReactElement<DocumentProps>): Promise<Buffer> {
+  return wholePdf(renderPdfParts([{ doc }]));
 }

@@ -9,11 +9,11 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { cutSheetDocument } from '@/lib/server/cut-sheet/CutSheet';
 import { typeset } from '@/lib/server/cut-sheet/fonts';
 import { renderCutSheet } from '@/lib/server/cut-sheet/render';
-import { renderPdfParts } from '@/lib/server/render-pdf';
 import { installPdfPlatform, PDF_PATCHES, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
 import { leanYoga } from '@/lib/server/pdf-platform/lean-yoga';
 import { installedVersion } from '@/lib/server/pdf-platform/versions';
 import { generatedSheets } from './generated-sheets';
+import { laidOutDocument } from './laid-out';
 import { expectSamePrints, type Printed, printedObjects } from './printed-objects';
 
 const SHEETS = generatedSheets(24, 4242);
@@ -37,11 +37,9 @@ const boxes = (node: Laid, out: string[] = []): string[] => {
 
 // The laid-out document of one sheet, as the renderer lays it out before drawing.
 async function laidOut(i: number): Promise<{ layout: SafeDocumentNode; boxes: string[] }> {
-  let kept: SafeDocumentNode | null = null;
   const { family, print } = await typeset([[SHEETS[i]!], []]);
-  const parts = [{ doc: cutSheetDocument(print([SHEETS[i]!]), false, [], family), adjust: async (layout: SafeDocumentNode) => (kept = layout) }];
-  for await (const _ of renderPdfParts(parts));
-  return { layout: kept!, boxes: boxes(kept! as Laid) };
+  const layout = await laidOutDocument(cutSheetDocument(print([SHEETS[i]!]), false, [], family));
+  return { layout, boxes: boxes(layout as Laid) };
 }
 
 // Calls into yoga's nodes while `work` runs, counted on the node class react-pdf's yoga makes.

@@ -1,11 +1,10 @@
 // Our patch of @react-pdf/layout reads an SVG prop's name before its value: only the props that
 // take a percent of the drawing (x, y, width, height and their kin) are read as percents, as
 // before, and any other (a path's `d`, the QR code's 1,500 characters) passes untouched.
-import type { SafeDocumentNode } from '@react-pdf/layout';
 import { Document, type DocumentProps, Page, Path, Rect, Svg } from '@react-pdf/renderer';
 import type { ReactElement } from 'react';
 import { describe, expect, it } from 'vitest';
-import { renderPdfParts } from '@/lib/server/render-pdf';
+import { laidOutDocument } from './laid-out';
 
 interface Laid {
   type?: string;
@@ -14,12 +13,7 @@ interface Laid {
 }
 const find = (node: Laid, type: string): Laid[] => [...(node.type === type ? [node] : []), ...(node.children ?? []).flatMap((c) => find(c, type))];
 
-// The document as laid out just before it is drawn.
-async function laidOut(doc: ReactElement<DocumentProps>): Promise<Laid> {
-  let kept: SafeDocumentNode | null = null;
-  for await (const _ of renderPdfParts([{ doc, adjust: async (layout) => (kept = layout) }]));
-  return kept! as unknown as Laid;
-}
+const laidOut = async (doc: ReactElement<DocumentProps>) => (await laidOutDocument(doc)) as unknown as Laid;
 
 describe('SVG props in percent', () => {
   it('reads x, y, width and height in percent of the drawing, and leaves a path as written', async () => {

@@ -1,6 +1,6 @@
 // Cut sheets to PDF bytes. Server only: react-pdf and the font files never reach a browser.
 import type { SafeDocumentNode } from '@react-pdf/layout';
-import { renderPdfParts, type PdfPart, type Relayout } from '../render-pdf';
+import { renderPdfParts, wholePdf, type PdfPart, type Relayout } from '../render-pdf';
 import { splitLaidOut } from '../pdf-platform/split-laid-out';
 import { asWrapped, cutSheetDocument, PAGE_PT, sheetStripColumns } from './CutSheet';
 import { typeset } from './fonts';
@@ -16,10 +16,8 @@ export function renderCutSheet(data: CutSheetData): Promise<Uint8Array<ArrayBuff
 
 /** Renders a batch: one page per garment, in the order given, then a page naming any garments skipped. */
 export async function renderCutSheets(list: CutSheetData[], skipped: string[] = [], part = BATCH_PART): Promise<Uint8Array<ArrayBuffer>> {
-  const chunks: Buffer[] = [];
-  for await (const chunk of streamCutSheets(list, skipped, part)) chunks.push(chunk);
   // A copy owns a plain ArrayBuffer, which a Response body accepts as it is.
-  return new Uint8Array(Buffer.concat(chunks));
+  return new Uint8Array(await wholePdf(streamCutSheets(list, skipped, part)));
 }
 
 /**
