@@ -150,6 +150,31 @@ describe('the paragraph layout memo', () => {
     expect(nodeLayoutKey(base, 200, Number.NaN, { ...store(), getHyphenationCallback: () => (w: string) => [w] })).not.toBe(key);
   });
 
+  it('tells strings apart by where they end, whatever separators they hold', () => {
+    // Each string is spelt by its length: text that spells a separator and the next field cannot pass for another split.
+    fc.assert(
+      fc.property(fc.string(), fc.string(), fc.string(), fc.string(), (a1, b1, a2, b2) => {
+        const one = nodeLayoutKey(textNode(a1, { color: b1 }), 100, Number.NaN, fonts);
+        const two = nodeLayoutKey(textNode(a2, { color: b2 }), 100, Number.NaN, fonts);
+        expect(one === two).toBe(a1 === a2 && b1 === b2);
+      }),
+      { examples: [["1'x;", 'y', '1', "x;1'y"], ['a', "1'b;", "a;1'b", ''], ['">', '', '', '">']] },
+    );
+  });
+
+  it('spells a font-feature object again once it changes, though the same object was spelt before', () => {
+    const features = { tnum: true, kern: false };
+    const node = textNode('42 in', { fontFeatureSettings: features });
+    const before = nodeLayoutKey(node, 100, Number.NaN, fonts);
+    expect(nodeLayoutKey(node, 100, Number.NaN, fonts)).toBe(before);
+    features.kern = true;
+    const changed = nodeLayoutKey(node, 100, Number.NaN, fonts);
+    expect(changed).not.toBe(before);
+    expect(changed).toBe(nodeLayoutKey(textNode('42 in', { fontFeatureSettings: { tnum: true, kern: true } }), 100, Number.NaN, fonts));
+    (features as Record<string, boolean>).liga = false;
+    expect(nodeLayoutKey(node, 100, Number.NaN, fonts)).not.toBe(changed);
+  });
+
   it('keeps nothing by node for images in text, text round shapes, emoji images or an unknown font family', () => {
     const image = textNode('Cuff', {}, [{ type: 'IMAGE', style: {}, props: {} }]);
     expect(nodeLayoutKey(image, 100, Number.NaN, fonts)).toBeNull();

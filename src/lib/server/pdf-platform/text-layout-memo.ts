@@ -45,31 +45,69 @@ const idOf = (o: object): number => {
   return id;
 };
 
+// A flat settings object (font features) spelt before, with the keys and values it had then: the
+// same object is spelt again only when one of them changed. The sheet's text nodes share a few
+// such objects, and spelling each as JSON was about a third of building their keys.
+const flatSpelt = new WeakMap<object, { spelt: string; entries: unknown[] }>();
+
+function flatEntries(o: Record<string, unknown>): unknown[] | null {
+  const entries: unknown[] = [];
+  for (const name in o) {
+    const v = o[name];
+    if (typeof v === 'object' && v !== null) return null;
+    entries.push(name, v);
+  }
+  return entries;
+}
+
+function unchanged(o: Record<string, unknown>, entries: unknown[]): boolean {
+  let i = 0;
+  for (const name in o) {
+    if (name !== entries[i] || !Object.is(o[name], entries[i + 1])) return false;
+    i += 2;
+  }
+  return i === entries.length;
+}
+
+function spellPlain(o: Record<string, unknown>): string {
+  const kept = flatSpelt.get(o);
+  if (kept !== undefined && unchanged(o, kept.entries)) return kept.spelt;
+  const spelt = `{${JSON.stringify(o)}`;
+  const entries = flatEntries(o);
+  if (entries) flatSpelt.set(o, { spelt, entries });
+  return spelt;
+}
+
+// Each value spelt so that no two differ only in where one ends: a string by its length, then
+// itself (no escaping to scan for); a number or a name never holds a separator; an object by
+// identity (@), or a plain one as JSON, which closes itself.
 function spell(value: unknown): string | null {
-  if (value === undefined) return '';
-  if (value === null) return 'null';
   switch (typeof value) {
+    case 'undefined':
+      return '';
     case 'string':
-      return JSON.stringify(value);
+      return `${value.length}'${value}`;
     case 'number':
+      return `#${value}`;
     case 'boolean':
-      return String(value);
+      return value ? 'T' : 'F';
     case 'function':
-      return `#${idOf(value)}`;
+      return `@${idOf(value)}`;
     case 'object': {
+      if (value === null) return 'N';
       if (Array.isArray(value)) {
-        const parts: string[] = [];
+        let spelt = '[';
         for (const v of value) {
           const p = spell(v);
           if (p === null) return null;
-          parts.push(p);
+          spelt += `${p},`;
         }
-        return `[${parts.join(',')}]`;
+        return `${spelt}]`;
       }
       // Plain settings (font features) by content; anything else (a loaded font) by identity:
       // fonts are loaded once per process.
       const proto = Object.getPrototypeOf(value);
-      return proto === Object.prototype || proto === null ? JSON.stringify(value) : `#${idOf(value)}`;
+      return proto === Object.prototype || proto === null ? spellPlain(value as Record<string, unknown>) : `@${idOf(value)}`;
     }
     default:
       return null;
@@ -147,12 +185,12 @@ const TEXT_STYLE = [
 
 // One node of the text as react-pdf reads it to build the attributed string (getFragments):
 // each text node's text style and links, the font each of its families resolves to (by identity:
-// a font not yet loaded has no data and another key), and every piece of text. False for what is
-// not compared safely (images, an unresolved family, values of other kinds).
+// a font not yet loaded has no data and another key), and every piece of text, into `parts`.
+// False for what is not compared safely (images, an unresolved family, values of other kinds).
 function spellNode(node: TextNodeLike, fonts: FontStoreLike, parts: string[]): boolean {
   if (node.type === 'TEXT_INSTANCE') {
     if (typeof node.value !== 'string') return false;
-    parts.push(JSON.stringify(node.value));
+    parts.push(`${node.value.length}"`, node.value);
     return true;
   }
   if (node.type === 'IMAGE') return false;
@@ -180,7 +218,7 @@ function spellNode(node: TextNodeLike, fonts: FontStoreLike, parts: string[]): b
     } catch {
       return false;
     }
-    parts.push(typeof data === 'object' && data !== null ? `#${idOf(data)}` : '-');
+    parts.push(typeof data === 'object' && data !== null ? `@${idOf(data)}` : '-');
   }
   for (const child of node.children ?? []) if (!spellNode(child, fonts, parts)) return false;
   parts.push('>');
@@ -199,7 +237,8 @@ export function nodeLayoutKey(node: TextNodeLike, width: number, height: number,
   if (fonts.getEmojiSource?.()) return null;
   const hyphenation = spell(fonts.getHyphenationCallback?.() ?? null);
   if (hyphenation === null) return null;
-  const parts = [`${width},${height}|${hyphenation}|#${idOf(fonts)}|`];
+  // Joined once: a key built by += is a rope of many pieces, flattened again when it is looked up.
+  const parts = [`${width},${height}|${hyphenation}|@${idOf(fonts)}|`];
   return spellNode(node, fonts, parts) ? parts.join('') : null;
 }
 
