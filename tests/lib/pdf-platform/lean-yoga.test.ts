@@ -5,7 +5,9 @@
 // react-pdf's layout or yoga-layout is another version, or the layout lacks it.
 import * as reactPdfLayout from '@react-pdf/layout';
 import type { SafeDocumentNode } from '@react-pdf/layout';
+import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
+import { Align, FlexDirection, Justify, loadYoga, Wrap } from 'yoga-layout/load';
 import { cutSheetDocument } from '@/lib/server/cut-sheet/CutSheet';
 import { typeset } from '@/lib/server/cut-sheet/fonts';
 import { renderCutSheet } from '@/lib/server/cut-sheet/render';
@@ -102,6 +104,88 @@ describe('the lean yoga pass', () => {
     }
     expect(leanCalls).toBeLessThan(ownCalls! * 0.6);
   }, 120_000);
+
+  it('leaves align-content auto unset because yoga lays it out as flex-start, a new node\'s own value (random wrapped trees)', async () => {
+    // react-pdf gives every node align-content auto where its style names none; the lean pass sets
+    // neither that nor the default, so the two must lay out alike, multi-line wraps included.
+    const yoga = await loadYoga();
+    const config = yoga.Config.create();
+    config.setPointScaleFactor(0);
+    const probe = yoga.Node.create(config);
+    expect(probe.getAlignContent()).toBe(Align.FlexStart);
+    probe.free();
+    const item = fc.record({
+      w: fc.integer({ min: 1, max: 150 }),
+      h: fc.integer({ min: 1, max: 150 }),
+      grow: fc.constantFrom(0, 1),
+      shrink: fc.constantFrom(0, 1),
+      self: fc.constantFrom(Align.Auto, Align.FlexStart, Align.Center, Align.Stretch, Align.FlexEnd),
+    });
+    const tree = fc.record({
+      direction: fc.constantFrom(FlexDirection.Row, FlexDirection.Column, FlexDirection.RowReverse),
+      wrap: fc.constantFrom(Wrap.Wrap, Wrap.NoWrap, Wrap.WrapReverse),
+      height: fc.option(fc.integer({ min: 10, max: 400 }), { nil: null }),
+      width: fc.integer({ min: 10, max: 400 }),
+      justify: fc.constantFrom(Justify.FlexStart, Justify.Center, Justify.SpaceBetween),
+      items: fc.array(item, { minLength: 1, maxLength: 12 }),
+      nested: fc.boolean(),
+    });
+    type Tree = typeof tree extends fc.Arbitrary<infer T> ? T : never;
+    // Every box of the tree laid out, with align-content left as made or set to `align` on each node.
+    const boxesOf = (t: Tree, align: Align | null): number[] => {
+      const root = yoga.Node.create(config);
+      root.setWidth(t.width);
+      if (t.height !== null) root.setHeight(t.height);
+      root.setFlexDirection(t.direction);
+      root.setFlexWrap(t.wrap);
+      root.setJustifyContent(t.justify);
+      if (align !== null) root.setAlignContent(align);
+      t.items.forEach((it, i) => {
+        const child = yoga.Node.create(config);
+        child.setWidth(it.w);
+        child.setHeight(it.h);
+        child.setFlexGrow(it.grow);
+        child.setFlexShrink(it.shrink);
+        child.setAlignSelf(it.self);
+        if (align !== null) child.setAlignContent(align);
+        if (t.nested) {
+          const inner = yoga.Node.create(config);
+          inner.setWidth(it.w / 2);
+          inner.setHeight(it.h / 2);
+          child.setFlexWrap(Wrap.Wrap);
+          child.insertChild(inner, 0);
+        }
+        root.insertChild(child, i);
+      });
+      root.calculateLayout(undefined, undefined);
+      const out: number[] = [];
+      const read = (n: typeof root) => {
+        const l = n.getComputedLayout();
+        out.push(l.left, l.top, l.width, l.height);
+        for (let i = 0; i < n.getChildCount(); i++) read(n.getChild(i));
+      };
+      read(root);
+      root.freeRecursive();
+      return out;
+    };
+    fc.assert(
+      fc.property(tree, (t) => {
+        expect(boxesOf(t, Align.Auto)).toEqual(boxesOf(t, null));
+      }),
+      { numRuns: 3000 },
+    );
+    // The check can tell: centred lines of a wrap land elsewhere.
+    const two: Tree = {
+      direction: FlexDirection.Row,
+      wrap: Wrap.Wrap,
+      height: 300,
+      width: 100,
+      justify: Justify.FlexStart,
+      nested: false,
+      items: [60, 60].map((w) => ({ w, h: 20, grow: 0, shrink: 0, self: Align.Auto })),
+    };
+    expect(boxesOf(two, Align.Center)).not.toEqual(boxesOf(two, null));
+  });
 
   it('gives every generated sheet and a batch the same PDF objects as the pass without it', async () => {
     uninstallPdfPlatform();
