@@ -158,7 +158,13 @@ describe('the paragraph layout memo', () => {
         const two = nodeLayoutKey(textNode(a2, { color: b2 }), 100, Number.NaN, fonts);
         expect(one === two).toBe(a1 === a2 && b1 === b2);
       }),
-      { examples: [["1'x;", 'y', '1', "x;1'y"], ['a', "1'b;", "a;1'b", ''], ['">', '', '', '">']] },
+      {
+        examples: [
+          ["1'x;", 'y', '1', "x;1'y"],
+          ['a', "1'b;", "a;1'b", ''],
+          ['">', '', '', '">'],
+        ],
+      },
     );
   });
 

@@ -105,7 +105,7 @@ describe('the lean yoga pass', () => {
     expect(leanCalls).toBeLessThan(ownCalls! * 0.6);
   }, 120_000);
 
-  it('leaves align-content auto unset because yoga lays it out as flex-start, a new node\'s own value (random wrapped trees)', async () => {
+  it("leaves align-content auto unset because yoga lays it out as flex-start, a new node's own value (random wrapped trees)", async () => {
     // react-pdf gives every node align-content auto where its style names none; the lean pass sets
     // neither that nor the default, so the two must lay out alike, multi-line wraps included.
     const yoga = await loadYoga();
