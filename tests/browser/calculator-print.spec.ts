@@ -127,7 +127,9 @@ describe('printing the calculator', () => {
     // The sheet the tailor gets, through the page's own download link.
     const download = page.waitForEvent('download');
     await page.getByRole('link', { name: 'Download the PDF' }).click();
-    const file = await (await download).path();
+    // Saved where this process can read it: the browser is the run's, reached over a connection.
+    const file = join(mkdtempSync(join(tmpdir(), 'cuffwright-download-')), 'sheet.pdf');
+    await (await download).saveAs(file);
     const text = pdfPages(readFileSync(file)).join(' ');
     expect(text).toContain('All lengths in centimetres');
     // A4 is 595 × 842 pt.

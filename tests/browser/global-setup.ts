@@ -14,6 +14,7 @@ import { startMailCapture } from '../../scripts/mail-capture.mjs';
 import { startLocalPayments } from '../../scripts/payments-fake.mjs';
 import { startLocalSms } from '../../scripts/sms-fake.mjs';
 import { createServerDatabase } from '../db/server-database';
+import { startBrowserServer } from './chromium-server';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -24,6 +25,8 @@ declare module 'vitest' {
     /** the local SMS fake: its address (GET /messages lists what it was asked to send) and the app's SMS_* settings */
     smsBase: string;
     smsEnv: { SMS_ACCOUNT_SID: string; SMS_AUTH_TOKEN: string; SMS_FROM: string; SMS_API_BASE: string };
+    /** the run's Chromium, which the test files connect to (tests/browser/browser.ts) */
+    browserEndpoint: string;
   }
 }
 
@@ -108,7 +111,10 @@ export default async function setup(project: TestProject) {
   project.provide('paymentsEnv', payments.env);
   project.provide('smsBase', sms.base);
   project.provide('smsEnv', sms.env);
+  const chromium = await startBrowserServer();
+  project.provide('browserEndpoint', chromium.wsEndpoint());
   return async () => {
+    await chromium.close();
     // The data folder goes once the server has let go of it: wait for its exit, not a fixed time.
     const exited = server && server.exitCode === null && server.signalCode === null ? once(server, 'exit') : Promise.resolve();
     server?.kill('SIGTERM');
