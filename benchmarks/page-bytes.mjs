@@ -8,7 +8,7 @@
 import http from 'node:http';
 import { gzipSync } from 'node:zlib';
 import { chromium } from 'playwright-core';
-import { ensureChromium } from '../scripts/chromium.mjs';
+import { CHROMIUM_ARGS, ensureChromium } from '../scripts/chromium.mjs';
 import { figure, writeFigures } from './lib/figures.mjs';
 import { startShipped } from './lib/shipped-server.mjs';
 
@@ -114,16 +114,7 @@ export async function weighPages(pages = PAGES, loads = LOADS) {
   const app = await startShipped();
   const browser = await chromium.launch({
     executablePath: ensureChromium(),
-    args: [
-      '--headless',
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
+    args: CHROMIUM_ARGS,
   });
   const out = pages.map((page) => ({ page, loads: [] }));
   try {

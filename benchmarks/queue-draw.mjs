@@ -8,21 +8,12 @@ import { loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { PGlite } from '@electric-sql/pglite';
 import { chromium } from 'playwright-core';
+import { CHROMIUM_ARGS } from '../scripts/chromium.mjs';
 import { figure, writeFigures } from './lib/figures.mjs';
 import { newShop, seedShop, signIn } from './lib/queue-load.mjs';
 import { startShipped } from './lib/shipped-server.mjs';
 
 const RUNS = Number(process.argv[2] ?? 5);
-const ARGS = [
-  '--headless',
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--no-first-run',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-];
 const dir = mkdtempSync(join(tmpdir(), 'cuffwright-queue-draw-'));
 const email = `lead-draw-${Date.now()}@bench.test`;
 let server;
@@ -41,7 +32,7 @@ try {
   await pg.close();
   server = await startShipped({ dataDir: dir, timeoutMs: 600_000 });
   const cookie = await signIn(server.base, email);
-  browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium', args: ARGS });
+  browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium', args: CHROMIUM_ARGS });
   const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
   const url = new URL(server.base);
   await context.addCookies(
