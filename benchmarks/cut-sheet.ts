@@ -10,7 +10,7 @@ import { loadavg } from 'node:os';
 import { performance } from 'node:perf_hooks';
 import { fileURLToPath } from 'node:url';
 import { chromium } from 'playwright-core';
-import { CHROMIUM_ARGS } from '../scripts/chromium.mjs';
+import { chromiumLaunchOptions } from '../scripts/chromium.mjs';
 import { figure, stats, writeFigures } from './lib/figures.mjs';
 import { taperedPairSheet } from './cut-sheet-sample';
 import { renderCutSheet } from '../src/lib/server/cut-sheet/render';
@@ -43,10 +43,7 @@ await renderCutSheet(sheet(42));
 const firstMs = performance.now() - t;
 for (let i = 0; i < OUR_WARM_UP; i++) await renderCutSheet(sheet(i));
 
-const browser = await chromium.launch({
-  executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-  args: CHROMIUM_ARGS,
-});
+const browser = await chromium.launch(chromiumLaunchOptions());
 const page = await browser.newPage();
 t = performance.now();
 await page.setContent(cutSheetShell());

@@ -8,7 +8,7 @@ import { loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { PGlite } from '@electric-sql/pglite';
 import { chromium } from 'playwright-core';
-import { CHROMIUM_ARGS } from '../scripts/chromium.mjs';
+import { chromiumLaunchOptions } from '../scripts/chromium.mjs';
 import { figure, writeFigures } from './lib/figures.mjs';
 import { newShop, seedShop, signIn } from './lib/queue-load.mjs';
 import { startShipped } from './lib/shipped-server.mjs';
@@ -32,7 +32,7 @@ try {
   await pg.close();
   server = await startShipped({ dataDir: dir, timeoutMs: 600_000 });
   const cookie = await signIn(server.base, email);
-  browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium', args: CHROMIUM_ARGS });
+  browser = await chromium.launch(chromiumLaunchOptions());
   const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
   const url = new URL(server.base);
   await context.addCookies(

@@ -15,9 +15,15 @@ export const CHROMIUM_ARGS = [
   '--disable-sync',
 ];
 
+/** The Chromium executable to drive: CHROMIUM_PATH (set by scripts/test.mjs), else Debian's. */
+export const chromiumPath = () => process.env.CHROMIUM_PATH || '/usr/bin/chromium';
+
+/** How the tests and benchmarks launch headless Chromium. */
+export const chromiumLaunchOptions = () => ({ executablePath: chromiumPath(), args: CHROMIUM_ARGS });
+
 /** The Chromium executable to drive, installing Debian's package when that is possible. */
 export function ensureChromium() {
-  const wanted = process.env.CHROMIUM_PATH || '/usr/bin/chromium';
+  const wanted = chromiumPath();
   if (existsSync(wanted)) return wanted;
   const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
   const hasApt = existsSync('/usr/bin/apt-get');

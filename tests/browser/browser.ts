@@ -5,12 +5,10 @@
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { mkdirSync } from 'node:fs';
 import { afterAll, beforeAll, inject } from 'vitest';
-import { chromiumOptions } from './chromium-server';
 
-/** A connection of this file's own to the run's Chromium (a Chromium of its own when the run has none); closing it closes the file's contexts. */
+/** A connection of this file's own to the run's Chromium (the global setup's); closing it closes the file's contexts. */
 export function launch(): Promise<Browser> {
-  const endpoint = inject('browserEndpoint');
-  return endpoint ? chromium.connect(endpoint) : chromium.launch(chromiumOptions());
+  return chromium.connect(inject('browserEndpoint'));
 }
 
 /** One connection to Chromium for a test file (closed after its tests); screenshots go to test-results/. */
