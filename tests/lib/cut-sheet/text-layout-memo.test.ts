@@ -151,7 +151,7 @@ describe('the paragraph layout memo', () => {
   });
 
   it('tells strings apart by where they end, whatever separators they hold', () => {
-    // Each string is spelt by its length: text that spells a separator and the next field cannot pass for another split.
+    // Each string is a step of its own in the key's path: text that holds a separator cannot pass for another split.
     fc.assert(
       fc.property(fc.string(), fc.string(), fc.string(), fc.string(), (a1, b1, a2, b2) => {
         const one = nodeLayoutKey(textNode(a1, { color: b1 }), 100, Number.NaN, fonts);
@@ -166,6 +166,34 @@ describe('the paragraph layout memo', () => {
         ],
       },
     );
+  });
+
+  it('never lets values of different kinds, or a setting and its spelling, share a key', () => {
+    const key = (color: unknown, features?: unknown) => nodeLayoutKey(textNode('1 in', { color, fontFeatureSettings: features }), 100, Number.NaN, fonts);
+    const values: unknown[] = [undefined, null, '', 'null', 'undefined', 0, '0', 1, '1', true, 'true', false, 'false', Number.NaN, 'NaN'];
+    for (const a of values) for (const b of values) expect(key(a) === key(b), `${String(a)} / ${String(b)}`).toBe(Object.is(a, b));
+    // A settings object counts by its content, and never as the string it is spelt as.
+    const spelt = key('#111111', { tnum: true });
+    expect(key('#111111', { tnum: true })).toBe(spelt);
+    for (const other of ['{{"tnum":true}', '{"tnum":true}', ['tnum'], { tnum: false }]) expect(key('#111111', other)).not.toBe(spelt);
+  });
+
+  it('starts its key tree afresh when it grows too big, forgetting the layouts kept by node, and draws sheets as before', async () => {
+    memoiseTextLayout(true);
+    const plain = comparable(await renderCutSheet(SHEETS[0]!));
+    expect(comparable(await renderCutSheet(SHEETS[0]!))).toEqual(plain);
+    const kept = keptLayouts();
+    const before = nodeLayoutKey(textNode('Cuff top', {}), 100, Number.NaN, fonts);
+    // Each new text adds a couple of maps to the tree: enough of them fill it.
+    for (let i = 0; i < 40_000; i++) nodeLayoutKey(textNode(`note ${i}`, {}), 100, Number.NaN, fonts);
+    expect(keptLayouts()).toBeLessThan(kept);
+    const after = nodeLayoutKey(textNode('Cuff top', {}), 100, Number.NaN, fonts);
+    expect(after).not.toBe(before);
+    expect(nodeLayoutKey(textNode('Cuff top', {}), 100, Number.NaN, fonts)).toBe(after);
+    expect(comparable(await renderCutSheet(SHEETS[0]!))).toEqual(plain);
+    memoiseTextLayout(false);
+    expect(comparable(await renderCutSheet(SHEETS[0]!))).toEqual(plain);
+    memoiseTextLayout(true);
   });
 
   it('spells a font-feature object again once it changes, though the same object was spelt before', () => {
