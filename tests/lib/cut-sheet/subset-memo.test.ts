@@ -7,6 +7,7 @@ import * as fontkit from 'fontkit';
 import { describe, expect, it } from 'vitest';
 import { renderCutSheet } from '@/lib/server/cut-sheet/render';
 import { SEED_CHARACTERS, SHEET_FEATURES } from '@/lib/server/cut-sheet/shaping-features';
+import { keepSubsets, seedSubset, type EmbeddedFontLike } from '@/lib/server/pdf-platform/subset-memo';
 import { pdfObjects, type PdfObject } from './pdf-objects';
 import { flatText, pdfFile } from './poppler';
 import { cuffInch, cuffMetric, sheet } from './sheets';
@@ -77,5 +78,37 @@ describe('font subsets kept across sheets', () => {
     // The usual sheet afterwards still gets the usual subset.
     const again = embeddedFonts(await renderCutSheet(sheet([cuffInch])));
     for (let i = 0; i < plain.length; i++) expect(again[i]!.file.equals(plain[i]!.file)).toBe(true);
+  });
+});
+
+describe('seeding a new document font', () => {
+  it('starts each later font from a copy of the first one seeded: the same glyphs, numbers, widths and text, nothing shared to write into', () => {
+    const face = fontkit.create(readFileSync(join(dir, '400Regular/Inter_400Regular.ttf'))) as Face & { getGlyph: (id: number) => { advanceWidth: number } };
+    const undo = keepSubsets(face as never, { text: SEED_CHARACTERS, features: SHEET_FEATURES });
+    // As pdfkit's EmbeddedFont starts: glyph 0 alone, its width and its text.
+    const newFont = () => ({ font: face, subset: face.createSubset(), scale: 1000 / 2048, widths: [face.getGlyph(0).advanceWidth], unicode: [[0]] }) as unknown as EmbeddedFontLike;
+    try {
+      const first = newFont();
+      seedSubset(first);
+      expect(first.subset.glyphs.length).toBeGreaterThan(90);
+      const second = newFont();
+      seedSubset(second);
+      const state = (f: EmbeddedFontLike) => ({ glyphs: f.subset.glyphs, mapping: { ...f.subset.mapping }, widths: f.widths, unicode: f.unicode });
+      expect(state(second)).toEqual(state(first));
+      // A glyph the second document's text adds stays its own.
+      second.subset.includeGlyph(face.glyphForCodePoint(0x0416).id);
+      second.widths[second.subset.glyphs.length - 1] = 1;
+      const third = newFont();
+      seedSubset(third);
+      expect(state(third)).toEqual(state(first));
+      // A font that has written text already is seeded glyph by glyph, after what it holds.
+      const used = newFont();
+      const smile = used.subset.includeGlyph(face.glyphForCodePoint(0x0416).id);
+      seedSubset(used);
+      expect(used.subset.glyphs[smile]).toBe(face.glyphForCodePoint(0x0416).id);
+      expect(used.subset.glyphs.length).toBe(first.subset.glyphs.length + 1);
+    } finally {
+      undo();
+    }
   });
 });

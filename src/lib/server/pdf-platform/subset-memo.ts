@@ -55,10 +55,32 @@ export function keepSubsets(face: { createSubset: () => unknown }, seed?: Seed):
   };
 }
 
+// A seeded font's state once seeded (its subset's glyph list and mapping, its widths and text),
+// kept per face: every document's fonts start from the same seed, so a later one copies it.
+interface Seeded {
+  seed: Seed;
+  scale: number;
+  glyphs: number[];
+  mapping: Record<number, number>;
+  widths: number[];
+  unicode: number[][];
+}
+const seeded = new WeakMap<object, Seeded>();
+
 /** Adds the seed glyphs, in a fixed order, to a font that has not written any text yet (if its face is seeded). */
 export function seedSubset(font: EmbeddedFontLike): void {
   const seed = seeds.get(font.font);
   if (!seed) return;
+  // A font that has written nothing holds glyph 0 alone: the seed's state is the same every time.
+  const fresh = font.subset.glyphs.length === 1 && font.subset.glyphs[0] === 0 && font.widths.length === 1 && font.unicode.length === 1;
+  const kept = seeded.get(font.font);
+  if (fresh && kept && kept.seed === seed && kept.scale === font.scale) {
+    font.subset.glyphs = kept.glyphs.slice();
+    font.subset.mapping = Object.assign({}, kept.mapping);
+    font.widths = kept.widths.slice();
+    font.unicode = kept.unicode.slice();
+    return;
+  }
   // Shaped with the text's own features, so the glyphs are the ones its text will use (tabular digits).
   for (const glyph of font.font.layout(seed.text, seed.features).glyphs) {
     if (glyph.id === 0) continue;
@@ -67,6 +89,15 @@ export function seedSubset(font: EmbeddedFontLike): void {
     font.widths[gid] ??= glyph.advanceWidth * font.scale;
     font.unicode[gid] ??= glyph.codePoints;
   }
+  if (fresh)
+    seeded.set(font.font, {
+      seed,
+      scale: font.scale,
+      glyphs: font.subset.glyphs.slice(),
+      mapping: Object.assign({}, font.subset.mapping),
+      widths: font.widths.slice(),
+      unicode: font.unicode.slice(),
+    });
 }
 
 // Faces share their subset class: patched once, and given back when the last face lets go.
