@@ -86,7 +86,8 @@ describe('seeding a new document font', () => {
     const face = fontkit.create(readFileSync(join(dir, '400Regular/Inter_400Regular.ttf'))) as Face & { getGlyph: (id: number) => { advanceWidth: number } };
     const undo = keepSubsets(face as never, { text: SEED_CHARACTERS, features: SHEET_FEATURES });
     // As pdfkit's EmbeddedFont starts: glyph 0 alone, its width and its text.
-    const newFont = () => ({ font: face, subset: face.createSubset(), scale: 1000 / 2048, widths: [face.getGlyph(0).advanceWidth], unicode: [[0]] }) as unknown as EmbeddedFontLike;
+    const newFont = () =>
+      ({ font: face, subset: face.createSubset(), scale: 1000 / 2048, widths: [face.getGlyph(0).advanceWidth], unicode: [[0]] }) as unknown as EmbeddedFontLike;
     try {
       const first = newFont();
       seedSubset(first);
