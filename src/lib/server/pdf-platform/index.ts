@@ -12,6 +12,7 @@ import { fastDimensions } from './fast-dimensions';
 import { fastRuns } from './fast-runs';
 import { leanAssets } from './lean-assets';
 import { leanYoga } from './lean-yoga';
+import { ltrBidiFast } from './ltr-bidi';
 import { loadLoadedAtOnce } from './font-load';
 import { memoiseFace, type MemoFace } from './face-memo';
 import { undoAll } from './override';
@@ -68,6 +69,17 @@ export const PDF_PATCHES: readonly PdfPatch[] = [
     writtenFor: '5.2.0',
     also: [{ pkg: 'yoga-layout', via: '@react-pdf/layout', version: '3.2.1' }],
     install: leanYoga,
+  },
+  {
+    name: 'ltr-bidi',
+    pkg: '@react-pdf/layout',
+    via: '@react-pdf/renderer',
+    writtenFor: '5.2.0',
+    also: [
+      { pkg: '@react-pdf/textkit', via: '@react-pdf/layout', version: '7.0.1' },
+      { pkg: 'bidi-js', via: '@react-pdf/textkit', version: '1.1.0' },
+    ],
+    install: ltrBidiFast,
   },
   { name: 'lean-assets', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: leanAssets },
   { name: 'split-laid-out', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: splitFromFirstLayout },
