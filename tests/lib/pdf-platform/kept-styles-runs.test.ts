@@ -14,7 +14,7 @@ import { renderCutSheet, renderCutSheets } from '@/lib/server/cut-sheet/render';
 import { fastRuns } from '@/lib/server/pdf-platform/fast-runs';
 import { loadLoadedAtOnce } from '@/lib/server/pdf-platform/font-load';
 import { installPdfPlatform, PDF_PATCHES, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
-import { memoiseStyles, styleKey } from '@/lib/server/pdf-platform/style-memo';
+import { keptStyles, memoiseStyles, styleKey } from '@/lib/server/pdf-platform/style-memo';
 import { comparable } from '../cut-sheet/pdf-objects';
 import { generatedSheets } from './generated-sheets';
 
@@ -121,6 +121,30 @@ describe('kept styles, kept ToUnicode maps, loads answered at once, straight tex
     expect(styleKey(page, query)).not.toBe(styleKey({ ...page, width: 300 }, query));
     expect(styleKey(page, { a: { nested: { deeper: 1 } } })).toBeNull();
     expect(styleKey(page, { transform: [{ rotate: 3 }] })).toBeNull();
+  });
+
+  it('never lets a setting pass for the string it is spelt as, nor values of one kind for another', () => {
+    const page = { width: 612, height: 792, orientation: 'portrait', dpi: 72, remBase: 18 };
+    expect(styleKey(page, { fontFeatureSettings: { tnum: true } })).not.toBe(styleKey(page, { fontFeatureSettings: '{"tnum":true}' }));
+    expect(styleKey(page, { flexGrow: 1 })).not.toBe(styleKey(page, { flexGrow: '1' }));
+    expect(styleKey(page, { wrap: true })).not.toBe(styleKey(page, { wrap: 'true' }));
+    expect(styleKey(page, { margin: 4, color: 'red' })).not.toBe(styleKey(page, { color: 'red', margin: 4 }));
+    expect(styleKey(page, { margin: 4 })).not.toBe(styleKey(page, { margin: 4, color: 'red' }));
+  });
+
+  it('starts its key tree afresh when it grows too big, forgetting the kept styles, and draws sheets as before', async () => {
+    memoiseStyles(true);
+    const plain = comparable(await renderCutSheet(SHEETS[0]!));
+    expect(keptStyles()).toBeGreaterThan(20);
+    const page = { width: 612, height: 792, orientation: 'portrait', dpi: 72, remBase: 18 };
+    const before = styleKey(page, { marginTop: 3 });
+    // Each new style adds a map or two to the tree: enough of them fill it.
+    for (let i = 0; i < 25_000; i++) styleKey(page, { marginTop: 3, width: i });
+    expect(keptStyles()).toBe(0);
+    const after = styleKey(page, { marginTop: 3 });
+    expect(after).not.toBe(before);
+    expect(styleKey(page, { marginTop: 3 })).toBe(after);
+    expect(comparable(await renderCutSheet(SHEETS[0]!))).toEqual(plain);
   });
 
   it('answers a load of a font already loaded at once, and leaves errors and first loads to the store', async () => {

@@ -3,22 +3,24 @@
 // parses colours and units, about a fifteenth of a sheet. A sheet's nodes carry the same few dozen
 // styles every time (most are inline objects, so not the same objects: the same contents), and
 // resolving is a pure function of the flattened style and the page it is on (size, orientation,
-// dpi, root font size). So the resolved style is kept per process under a key spelling exactly
-// those. Strings, numbers, booleans and flat objects of them (font features, a media query's
+// dpi, root font size). So the resolved style is kept per process under a key found from exactly
+// those (a path through a tree of maps, key-tree.ts). Strings, numbers, booleans and flat objects of them (font features, a media query's
 // styles) are compared by content; a style holding anything else (a transform list) is not kept. Each node gets its own copy, as it got its own object before. The hook into
 // react-pdf's layout is ours: patches/@react-pdf+layout+*.patch adds it. Also here: the
 // percent-radius pass keeps the style of a node that names no corner radius (the same patch).
 import * as reactPdfLayout from '@react-pdf/layout';
+import { KeyTree } from './key-tree';
 
 type Resolve = (container: unknown, style: unknown) => unknown;
 type Hook = (container: unknown, style: unknown, resolve: Resolve) => unknown;
 
-/** Resolved styles kept at most; a sheet has a few dozen different ones. Emptied when full. */
-const STYLE_LIMIT = 2000;
+/** Maps in the key tree at most (a new style adds a few), beyond which it and the kept styles start afresh. */
+const TREE_LIMIT = 20_000;
 
-const kept = new Map<string, Record<string, unknown>>();
-
-type Value = string | number | boolean | { json: string };
+const kept = new Map<object, Record<string, unknown>>();
+// The kept styles are keyed by the tree's objects: a new tree means new keys, so both go together.
+const tree = new KeyTree(TREE_LIMIT, () => kept.clear());
+const NOT_SAFE = { mark: 'not safe' };
 
 // A plain object of strings, numbers and booleans (font feature settings), compared by content.
 function isFlat(v: unknown): boolean {
@@ -29,9 +31,16 @@ function isFlat(v: unknown): boolean {
   return true;
 }
 
+// A value as it stands in a key's path: itself, a flat object by its content, else NOT_SAFE.
+function atom(v: unknown): unknown {
+  const type = typeof v;
+  if (type === 'string' || type === 'number' || type === 'boolean') return v;
+  return isFlat(v) ? tree.spelling(JSON.stringify(v)) : NOT_SAFE;
+}
+
 // The style list merged as react-pdf's flatten merges it (later entries win, null and undefined
 // values skipped, nested lists flattened), into `into`; false for a value not safely compared.
-function merge(style: unknown, into: Map<string, Value>): boolean {
+function merge(style: unknown, into: Map<string, unknown>): boolean {
   if (style === null || style === undefined) return true;
   if (Array.isArray(style)) {
     for (const item of style) if (!merge(item, into)) return false;
@@ -42,26 +51,34 @@ function merge(style: unknown, into: Map<string, Value>): boolean {
   for (const key of Object.keys(s)) {
     const v = s[key];
     if (v === null || v === undefined) continue;
-    const type = typeof v;
-    if (type === 'string' || type === 'number' || type === 'boolean') into.set(key, v as string | number | boolean);
-    else if (isFlat(v)) into.set(key, { json: JSON.stringify(v) });
-    else return false;
+    const a = atom(v);
+    if (a === NOT_SAFE) return false;
+    into.set(key, a);
   }
   return true;
 }
 
-/** The key of one style on one page, or null when the style holds something not safely compared. */
-export function styleKey(container: unknown, style: unknown): string | null {
+/** The key of one style on one page (the same object for the same merged style and page), or null when the style holds something not safely compared. */
+export function styleKey(container: unknown, style: unknown): object | null {
   if (typeof container !== 'object' || container === null) return null;
   const c = container as Record<string, unknown>;
-  const merged = new Map<string, Value>();
-  if (!merge(style, merged)) return null;
-  const parts = [`${c.width}|${c.height}|${c.orientation}|${c.dpi}|${c.remBase}`];
-  for (const [key, v] of merged) {
-    // A string is spelt as JSON, so no value can be mistaken for a separator.
-    parts.push(key, typeof v === 'string' ? JSON.stringify(v) : typeof v === 'number' ? `#${v}` : typeof v === 'boolean' ? `?${v}` : `{${v.json}`);
+  let at = tree.step(tree.step(tree.step(tree.step(tree.step(tree.start(), c.width), c.height), c.orientation), c.dpi), c.remBase);
+  if (style !== null && typeof style === 'object' && !Array.isArray(style)) {
+    // One plain object, as most are: its own entries in order are the merged style.
+    const s = style as Record<string, unknown>;
+    for (const key of Object.keys(s)) {
+      const v = s[key];
+      if (v === null || v === undefined) continue;
+      const a = atom(v);
+      if (a === NOT_SAFE) return null;
+      at = tree.step(tree.step(at, key), a);
+    }
+    return tree.end(at);
   }
-  return parts.join('\u0001');
+  const merged = new Map<string, unknown>();
+  if (!merge(style, merged)) return null;
+  for (const [key, a] of merged) at = tree.step(tree.step(at, key), a);
+  return tree.end(at);
 }
 
 function rememberedStyle(container: unknown, style: unknown, resolve: Resolve): unknown {
@@ -70,7 +87,6 @@ function rememberedStyle(container: unknown, style: unknown, resolve: Resolve): 
   let hit = kept.get(key);
   if (!hit) {
     const resolved = resolve(container, style) as Record<string, unknown>;
-    if (kept.size >= STYLE_LIMIT) kept.clear();
     // Kept as a copy: react-pdf may change the object it hands on (a float becomes absolute).
     kept.set(key, (hit = { ...resolved }));
     return resolved;

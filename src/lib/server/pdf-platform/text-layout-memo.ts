@@ -9,6 +9,7 @@
 // fonts and text) and answers before the attributed string is built. The hooks into react-pdf's
 // layout are ours: patches/@react-pdf+layout+*.patch (patch-package) adds them.
 import * as reactPdfLayout from '@react-pdf/layout';
+import { KeyTree, type KeyPath } from './key-tree';
 
 interface Run {
   start: number;
@@ -183,33 +184,26 @@ const TEXT_STYLE = [
   'textOverflow',
 ] as const;
 
-// A node's key is found, not spelt: what the layout reads from it is walked as a path of values
-// through a tree of maps (a trie), and the path's end is the key, one object per distinct path.
-// Spelling each of a sheet's seventy text nodes into a string took about half a millisecond a
-// sheet; the walk asks each map for one value and makes nothing for a path seen before. Values are
-// map keys as they are (a string, a number, a boolean, null and undefined never equal one another)
-// and the path's structure is marked with objects no value can be, so no two nodes share a path
-// unless everything read is the same. Settings objects and lists count by content, each spelling
-// standing in the path as an object of its own; a loaded font or a function by identity.
-type Trie = Map<unknown, Trie | NodeKey>;
+// A node's key is found as a path through a tree of maps (key-tree.ts): spelling each of a
+// sheet's seventy text nodes into a string took about half a millisecond a sheet. The path's
+// structure is marked with objects of this module's own, so no two nodes share a path unless
+// everything read is the same; settings objects and lists count by content, a loaded font or a
+// function by identity.
 /** The key of one node layout: the same object for the same text, style, fonts and box. */
-export type NodeKey = { readonly path: number };
+export type NodeKey = object;
 
 const OPEN = { mark: 'open' };
 const CLOSE = { mark: 'close' };
 const PIECE = { mark: 'text' };
-const END = { mark: 'end' };
 const NO_FONT = { mark: 'no font' };
 const NOT_SAFE = { mark: 'not safe' };
-/** Maps in the tree at most (a new paragraph adds two or three), beyond which it starts afresh. */
+/** Maps in the key tree at most (a new paragraph adds two or three), beyond which it starts afresh. */
 const TRIE_LIMIT = 50_000;
 
-let root: Trie = new Map();
-let maps = 0;
-let keys = 0;
-const spellings = new Map<string, object>();
+// The kept layouts are keyed by the tree's objects: a new tree means new keys, so both go together.
+const tree = new KeyTree(TRIE_LIMIT, () => byNode.clear());
 
-// The atom standing for a value in a path, or null for what is not compared safely.
+// The atom standing for a value in a path, or NOT_SAFE for what is not compared safely.
 function atom(value: unknown): unknown {
   switch (typeof value) {
     case 'undefined':
@@ -223,47 +217,35 @@ function atom(value: unknown): unknown {
       const proto = Object.getPrototypeOf(value);
       if (!Array.isArray(value) && proto !== Object.prototype && proto !== null) return value;
       const spelt = spell(value);
-      if (spelt === null) return NOT_SAFE;
-      let stand = spellings.get(spelt);
-      if (stand === undefined) spellings.set(spelt, (stand = { spelt }));
-      return stand;
+      return spelt === null ? NOT_SAFE : tree.spelling(spelt);
     }
     default:
       return NOT_SAFE;
   }
 }
 
-function step(at: Trie, value: unknown): Trie {
-  let next = at.get(value) as Trie | undefined;
-  if (next === undefined) {
-    at.set(value, (next = new Map()));
-    maps += 1;
-  }
-  return next;
-}
-
 // One node of the text as react-pdf reads it to build the attributed string (getFragments): each
 // text node's text style and links, the font each of its families resolves to (by identity: a font
 // not yet loaded has no data and another path), and every piece of text. Null for what is not
 // compared safely (images, an unresolved family, values of other kinds).
-function walkNode(node: TextNodeLike, fonts: FontStoreLike, at: Trie): Trie | null {
+function walkNode(node: TextNodeLike, fonts: FontStoreLike, at: KeyPath): KeyPath | null {
   if (node.type === 'TEXT_INSTANCE') {
     if (typeof node.value !== 'string') return null;
-    return step(step(at, PIECE), node.value);
+    return tree.step(tree.step(at, PIECE), node.value);
   }
   if (node.type === 'IMAGE') return null;
   const style = node.style ?? {};
   const props = node.props ?? {};
-  at = step(step(at, OPEN), node.type);
+  at = tree.step(tree.step(at, OPEN), node.type);
   for (const value of [props.src, props.href, props.hyphenationPenalty, props.hyphenationCallback]) {
     const a = atom(value);
     if (a === NOT_SAFE) return null;
-    at = step(at, a);
+    at = tree.step(at, a);
   }
   for (const name of TEXT_STYLE) {
     const a = atom(style[name]);
     if (a === NOT_SAFE) return null;
-    at = step(at, a);
+    at = tree.step(at, a);
   }
   const family = style.fontFamily === undefined ? 'Helvetica' : style.fontFamily;
   const families: unknown[] = typeof family === 'string' ? [family] : [...((family as unknown[] | null) || [])];
@@ -276,14 +258,14 @@ function walkNode(node: TextNodeLike, fonts: FontStoreLike, at: Trie): Trie | nu
     } catch {
       return null;
     }
-    at = step(at, typeof data === 'object' && data !== null ? data : NO_FONT);
+    at = tree.step(at, typeof data === 'object' && data !== null ? data : NO_FONT);
   }
   for (const child of node.children ?? []) {
     const next = walkNode(child, fonts, at);
     if (next === null) return null;
     at = next;
   }
-  return step(at, CLOSE);
+  return tree.step(at, CLOSE);
 }
 
 /**
@@ -298,20 +280,8 @@ export function nodeLayoutKey(node: TextNodeLike, width: number, height: number,
   if (fonts.getEmojiSource?.()) return null;
   const hyphenation = atom(fonts.getHyphenationCallback?.() ?? null);
   if (hyphenation === NOT_SAFE) return null;
-  // The kept layouts are keyed by the tree's objects: a new tree means new keys, so both go together.
-  if (maps >= TRIE_LIMIT || spellings.size >= TRIE_LIMIT) forgetNodeKeys();
-  const at = walkNode(node, fonts, step(step(step(step(root, width), height), hyphenation), fonts));
-  if (at === null) return null;
-  let key = at.get(END) as NodeKey | undefined;
-  if (key === undefined) at.set(END, (key = { path: (keys += 1) }));
-  return key;
-}
-
-function forgetNodeKeys(): void {
-  root = new Map();
-  maps = 0;
-  spellings.clear();
-  byNode.clear();
+  const at = walkNode(node, fonts, tree.step(tree.step(tree.step(tree.step(tree.start(), width), height), hyphenation), fonts));
+  return at === null ? null : tree.end(at);
 }
 
 // Two generations: a paragraph laid out once waits in `fresh`; laid out again, it moves to `kept`.
