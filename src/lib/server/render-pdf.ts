@@ -117,14 +117,19 @@ function openPdf(props: DocumentProps) {
  */
 export async function* renderPdfParts(parts: Iterable<PdfPart>, props?: DocumentProps): AsyncGenerator<Buffer> {
   let pdf = props ? openPdf(props) : null;
-  for (const { doc, adjust } of parts) {
+  const each = parts[Symbol.iterator]();
+  for (let next = each.next(); !next.done; ) {
+    const { doc, adjust } = next.value;
     await turn(async () => {
       const first = await layOut(doc);
       const layout = adjust ? await adjust(first.layout, async (other) => (await layOut(other)).layout) : first.layout;
       pdf ??= openPdf(first.props);
       drawOpen(pdf.ctx, layout);
     });
-    // pdfkit writes a page when the next one begins: what is out so far goes now.
+    next = each.next();
+    // pdfkit writes a page when the next one begins: what is out so far goes now, unless this was
+    // the last part (then it goes with the end, one wait for the stream instead of two).
+    if (next.done) break;
     const out = await pdf!.take();
     if (out.length > 0) yield out;
   }
