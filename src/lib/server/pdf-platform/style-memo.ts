@@ -7,7 +7,8 @@
 // those (a path through a tree of maps, key-tree.ts). Strings, numbers, booleans and flat objects of them (font features, a media query's
 // styles) are compared by content; a style holding anything else (a transform list) is not kept. Each node gets its own copy, as it got its own object before. The hook into
 // react-pdf's layout is ours: patches/@react-pdf+layout+*.patch adds it. Also here: the
-// percent-radius pass keeps the style of a node that names no corner radius (the same patch).
+// percent-radius pass keeps the style of a node that names no corner radius, and the inheritance
+// pass merges a node's own values without an array of entries (the same patch).
 import * as reactPdfLayout from '@react-pdf/layout';
 import { KeyTree } from './key-tree';
 
@@ -97,16 +98,18 @@ function rememberedStyle(container: unknown, style: unknown, resolve: Resolve): 
 interface LayoutHooks {
   setResolveStyleHook?: (hook: Hook | null) => void;
   setFastRadii?: (on: boolean) => void;
+  setLeanInheritance?: (on: boolean) => void;
 }
 
 /** Turns the resolved-style memo and the fast radius pass on or off, emptying the memo; throws if react-pdf's layout lacks the hooks (our patch not applied). */
 export function memoiseStyles(on: boolean): void {
   kept.clear();
   const layout = reactPdfLayout as LayoutHooks;
-  if (typeof layout.setResolveStyleHook !== 'function' || typeof layout.setFastRadii !== 'function')
-    throw new Error('@react-pdf/layout has no setResolveStyleHook or setFastRadii: patches/@react-pdf+layout+*.patch is not applied');
+  if (typeof layout.setResolveStyleHook !== 'function' || typeof layout.setFastRadii !== 'function' || typeof layout.setLeanInheritance !== 'function')
+    throw new Error('@react-pdf/layout has no setResolveStyleHook, setFastRadii or setLeanInheritance: patches/@react-pdf+layout+*.patch is not applied');
   layout.setResolveStyleHook(on ? rememberedStyle : null);
   layout.setFastRadii(on);
+  layout.setLeanInheritance(on);
 }
 
 /** Turns the style memo on; returns how to turn it off. */
