@@ -12,7 +12,7 @@ import { createElement } from 'react';
 import { registerFonts } from '@/lib/server/cut-sheet/fonts';
 import { renderCutSheet, renderCutSheets } from '@/lib/server/cut-sheet/render';
 import { fastRuns } from '@/lib/server/pdf-platform/fast-runs';
-import { loadLoadedAtOnce } from '@/lib/server/pdf-platform/font-load';
+import { loadLoadedAtOnce, rememberResolvedFonts } from '@/lib/server/pdf-platform/font-load';
 import { installPdfPlatform, PDF_PATCHES, pdfPatchStatus, uninstallPdfPlatform } from '@/lib/server/pdf-platform/index';
 import { keptStyles, memoiseStyles, styleKey } from '@/lib/server/pdf-platform/style-memo';
 import { comparable } from '../cut-sheet/pdf-objects';
@@ -168,6 +168,50 @@ describe('kept styles, kept ToUnicode maps, loads answered at once, straight tex
     undo();
     await store.load({ fontFamily: 'Loaded' } as never);
     expect(calls).toHaveLength(3);
+  });
+
+  it('answers which face a family, weight and style resolve to as the store did, until the family changes', () => {
+    let asked = 0;
+    const face = (weight: number, style = 'normal') => ({ fontWeight: weight, fontStyle: style });
+    const store = {
+      fontFamilies: { Inter: { sources: [face(400), face(700), face(400, 'italic')] } } as Record<
+        string,
+        { sources: { fontWeight: number; fontStyle: string }[] }
+      >,
+      getFont(d: { fontFamily: string; fontWeight?: number; fontStyle?: string }) {
+        asked += 1;
+        const family = this.fontFamilies[d.fontFamily];
+        if (!family) throw new Error(`Font family not registered: ${d.fontFamily}`);
+        const ofStyle = family.sources.filter((s) => s.fontStyle === (d.fontStyle ?? 'normal'));
+        return ofStyle.find((s) => s.fontWeight === (d.fontWeight ?? 400)) ?? ofStyle[0] ?? null;
+      },
+    };
+    const plain = store.getFont.bind(store);
+    const undo = rememberResolvedFonts(store);
+    const ask = (fontWeight?: number, fontStyle?: string) => store.getFont({ fontFamily: 'Inter', fontWeight, fontStyle });
+    for (const [w, st] of [
+      [700, undefined],
+      [undefined, undefined],
+      [400, 'italic'],
+      [800, undefined],
+      [undefined, 'oblique'],
+    ] as const) {
+      const expected = plain({ fontFamily: 'Inter', fontWeight: w, fontStyle: st });
+      expect(ask(w, st)).toBe(expected);
+      asked = 0;
+      expect(ask(w, st)).toBe(expected);
+      expect(asked).toBe(0);
+    }
+    // A face registered later, or the family registered anew, is resolved afresh.
+    store.fontFamilies.Inter!.sources.push(face(800));
+    expect(ask(800)).toEqual(face(800));
+    store.fontFamilies.Inter = { sources: [face(400, 'italic')] };
+    expect(ask(400, 'italic')).toBe(store.fontFamilies.Inter.sources[0]);
+    expect(() => store.getFont({ fontFamily: 'Nope' })).toThrow(/not registered: Nope/);
+    undo();
+    asked = 0;
+    ask(700);
+    expect(asked).toBe(1);
   });
 
   it('are refused at install, with a log line, where react-pdf lacks their hooks', () => {

@@ -13,7 +13,7 @@ import { fastRuns } from './fast-runs';
 import { leanAssets } from './lean-assets';
 import { leanYoga } from './lean-yoga';
 import { ltrBidiFast } from './ltr-bidi';
-import { loadLoadedAtOnce } from './font-load';
+import { loadLoadedAtOnce, rememberResolvedFonts } from './font-load';
 import { memoiseFace, type MemoFace } from './face-memo';
 import { undoAll } from './override';
 import { cacheFontObjects } from './pdf-font-cache';
@@ -85,6 +85,7 @@ export const PDF_PATCHES: readonly PdfPatch[] = [
   { name: 'split-laid-out', pkg: '@react-pdf/layout', via: '@react-pdf/renderer', writtenFor: '5.2.0', install: splitFromFirstLayout },
   { name: 'fast-runs', pkg: '@react-pdf/render', via: '@react-pdf/renderer', writtenFor: '4.7.0', install: fastRuns },
   { name: 'font-load', pkg: '@react-pdf/font', via: '@react-pdf/renderer', writtenFor: '4.1.2', install: loadLoadedAtOnce },
+  { name: 'font-resolve-memo', pkg: '@react-pdf/font', via: '@react-pdf/renderer', writtenFor: '4.1.2', install: rememberResolvedFonts },
   { name: 'pdf-streams', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: compressStreamsFast },
   { name: 'pdf-deflate-aside', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: () => deflateAside(true) },
   { name: 'pdf-transform', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: transformFast },
