@@ -40,7 +40,7 @@ export interface EmbeddedFontLike {
 
 // Encoded subsets kept per face, keyed by the glyph list; a handful per face in practice.
 const SUBSET_LIMIT = 64;
-const encoded = new WeakMap<object, Map<string, { bytes: Uint8Array; glyphs: number[] }>>();
+const encoded = new WeakMap<object, Map<string, { bytes: Uint8Array; glyphs: number[]; mapping: Record<number, number> }>>();
 // The faces whose subsets start seeded (and with what), while the memo is on. A face for another
 // script draws only the few characters the main face lacks, and a seed would add unused glyphs.
 const seeds = new WeakMap<object, Seed>();
@@ -53,6 +53,13 @@ export function keepSubsets(face: { createSubset: () => unknown }, seed?: Seed):
     seeds.delete(face);
     undoProto();
   };
+}
+
+// A subset's numbering of its glyph list (glyph id → place), to stand behind a later subset's own.
+function numbering(glyphs: number[]): Record<number, number> {
+  const mapping: Record<number, number> = {};
+  glyphs.forEach((g, i) => (mapping[g] = i));
+  return mapping;
 }
 
 // A seeded font's state once seeded (its subset's glyph list and mapping, its widths and text),
@@ -76,7 +83,8 @@ export function seedSubset(font: EmbeddedFontLike): void {
   const kept = seeded.get(font.font);
   if (fresh && kept && kept.seed === seed && kept.scale === font.scale) {
     font.subset.glyphs = kept.glyphs.slice();
-    font.subset.mapping = Object.assign({}, kept.mapping);
+    // The kept numbering is read through the prototype; glyphs this document adds are its own.
+    font.subset.mapping = Object.create(kept.mapping) as Record<number, number>;
     font.widths = kept.widths.slice();
     font.unicode = kept.unicode.slice();
     return;
@@ -94,7 +102,7 @@ export function seedSubset(font: EmbeddedFontLike): void {
       seed,
       scale: font.scale,
       glyphs: font.subset.glyphs.slice(),
-      mapping: Object.assign({}, font.subset.mapping),
+      mapping: numbering(font.subset.glyphs),
       widths: font.widths.slice(),
       unicode: font.unicode.slice(),
     });
@@ -115,15 +123,14 @@ function patchSubset(proto: Subset): () => void {
         if (kept.size >= SUBSET_LIMIT) kept.clear();
         const bytes = encode.call(this);
         // Encoding may add the parts of composite glyphs: keep the list as it ends.
-        hit = { bytes, glyphs: [...this.glyphs] };
+        hit = { bytes, glyphs: [...this.glyphs], mapping: numbering(this.glyphs) };
         kept.set(key, hit);
         // Compressed once at zlib's default level: the font file is the largest stream and is reused.
         useDeflated(bytes, deflateSync(bytes));
         return bytes;
       }
       this.glyphs = [...hit.glyphs];
-      this.mapping = {};
-      hit.glyphs.forEach((g, i) => (this.mapping[g] = i));
+      this.mapping = Object.create(hit.mapping) as Record<number, number>;
       return hit.bytes;
     });
     return undo;
