@@ -39,6 +39,19 @@ function atom(v: unknown): unknown {
   return isFlat(v) ? tree.spelling(JSON.stringify(v)) : NOT_SAFE;
 }
 
+// Each set value of one plain style object, in order, as it stands in a path; false (and stops)
+// at a value not safely compared.
+function eachValue(s: Record<string, unknown>, take: (key: string, a: unknown) => void): boolean {
+  for (const key of Object.keys(s)) {
+    const v = s[key];
+    if (v === null || v === undefined) continue;
+    const a = atom(v);
+    if (a === NOT_SAFE) return false;
+    take(key, a);
+  }
+  return true;
+}
+
 // The style list merged as react-pdf's flatten merges it (later entries win, null and undefined
 // values skipped, nested lists flattened), into `into`; false for a value not safely compared.
 function merge(style: unknown, into: Map<string, unknown>): boolean {
@@ -48,15 +61,7 @@ function merge(style: unknown, into: Map<string, unknown>): boolean {
     return true;
   }
   if (typeof style !== 'object') return false;
-  const s = style as Record<string, unknown>;
-  for (const key of Object.keys(s)) {
-    const v = s[key];
-    if (v === null || v === undefined) continue;
-    const a = atom(v);
-    if (a === NOT_SAFE) return false;
-    into.set(key, a);
-  }
-  return true;
+  return eachValue(style as Record<string, unknown>, (key, a) => into.set(key, a));
 }
 
 /** The key of one style on one page (the same object for the same merged style and page), or null when the style holds something not safely compared. */
@@ -64,17 +69,12 @@ export function styleKey(container: unknown, style: unknown): object | null {
   if (typeof container !== 'object' || container === null) return null;
   const c = container as Record<string, unknown>;
   let at = tree.step(tree.step(tree.step(tree.step(tree.step(tree.start(), c.width), c.height), c.orientation), c.dpi), c.remBase);
+  // One plain object, as most are: its own values in order are the merged style.
   if (style !== null && typeof style === 'object' && !Array.isArray(style)) {
-    // One plain object, as most are: its own entries in order are the merged style.
-    const s = style as Record<string, unknown>;
-    for (const key of Object.keys(s)) {
-      const v = s[key];
-      if (v === null || v === undefined) continue;
-      const a = atom(v);
-      if (a === NOT_SAFE) return null;
+    const whole = eachValue(style as Record<string, unknown>, (key, a) => {
       at = tree.step(tree.step(at, key), a);
-    }
-    return tree.end(at);
+    });
+    return whole ? tree.end(at) : null;
   }
   const merged = new Map<string, unknown>();
   if (!merge(style, merged)) return null;
