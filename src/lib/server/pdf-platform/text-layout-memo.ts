@@ -197,8 +197,8 @@ const CLOSE = { mark: 'close' };
 const PIECE = { mark: 'text' };
 const NO_FONT = { mark: 'no font' };
 const NOT_SAFE = { mark: 'not safe' };
-/** Maps in the key tree at most (a new paragraph adds two or three), beyond which it starts afresh. */
-const TRIE_LIMIT = 50_000;
+/** Maps in the key tree at most (a new paragraph adds two or three, some 0.2 kB each), beyond which it starts afresh. */
+const TRIE_LIMIT = 20_000;
 
 // The kept layouts are keyed by the tree's objects: a new tree means new keys, so both go together.
 const tree = new KeyTree(TRIE_LIMIT, () => byNode.clear());
