@@ -31,16 +31,10 @@ export function pdfObjects(pdf: Uint8Array): PdfObject[] {
   return out;
 }
 
-/**
- * The objects with the render's date taken out, in the order of their numbers: what two renders of
- * one sheet must share. Where in the file an object stands is not compared (a page's content
- * stream deflated aside is written once it is compressed); the cross-reference table says.
- */
+/** The objects with the render's date taken out: what two renders of one sheet must share. */
 export function comparable(pdf: Uint8Array): string[] {
-  return [...pdfObjects(pdf)]
-    .sort((a, b) => a.id - b.id)
-    .map((o) => {
-      const dict = o.dict.replace(/\(D:\d+Z\)/g, '(D:…)').replace(/\/Length \d+/, '');
-      return `${o.id} ${dict} ${o.stream ? o.stream.toString('latin1') : ''}`;
-    });
+  return pdfObjects(pdf).map((o) => {
+    const dict = o.dict.replace(/\(D:\d+Z\)/g, '(D:…)').replace(/\/Length \d+/, '');
+    return `${o.id} ${dict} ${o.stream ? o.stream.toString('latin1') : ''}`;
+  });
 }

@@ -17,7 +17,7 @@ import { loadLoadedAtOnce, rememberResolvedFonts } from './font-load';
 import { memoiseFace, type MemoFace } from './face-memo';
 import { undoAll } from './override';
 import { cacheFontObjects } from './pdf-font-cache';
-import { compressStreamsFast, deflateAside } from './pdf-streams';
+import { compressStreamsFast } from './pdf-streams';
 import { transformFast } from './pdf-transform';
 import { memoiseShaping, type Shaper } from './shaping-memo';
 import { keepSubsets, type Seed } from './subset-memo';
@@ -87,7 +87,6 @@ export const PDF_PATCHES: readonly PdfPatch[] = [
   { name: 'font-load', pkg: '@react-pdf/font', via: '@react-pdf/renderer', writtenFor: '4.1.2', install: loadLoadedAtOnce },
   { name: 'font-resolve-memo', pkg: '@react-pdf/font', via: '@react-pdf/renderer', writtenFor: '4.1.2', install: rememberResolvedFonts },
   { name: 'pdf-streams', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: compressStreamsFast },
-  { name: 'pdf-deflate-aside', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: () => deflateAside(true) },
   { name: 'pdf-transform', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: transformFast },
   { name: 'pdf-path', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: straightPathsFast },
   { name: 'pdf-colors', pkg: 'pdfkit', via: '@react-pdf/renderer', writtenFor: '0.20.1', install: keepColors },

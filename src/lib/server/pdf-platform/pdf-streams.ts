@@ -5,12 +5,11 @@
 // millisecond or two to compress, a tenth of a sheet; the fastest level takes a fifth of that for
 // a stream about 2 kB larger. A stream whose bytes were compressed before (a kept font subset) is
 // given that compressed form instead.
-import { deflate, deflateSync } from 'node:zlib';
+import { deflateSync } from 'node:zlib';
 import PDFDocument from 'pdfkit';
 import { override } from './override';
 
 interface Reference {
-  document: { emit: (event: string, error: unknown) => unknown };
   buffer: Uint8Array[];
   compress: boolean;
   data: Record<string, unknown>;
@@ -26,24 +25,10 @@ const STREAM_LEVEL = 1;
 
 const known = new WeakMap<Uint8Array, Uint8Array>();
 let textKept = true;
-let aside = false;
-/** Streams at least this long (a page's content, some 50 kB a sheet) are deflated aside when that is on. */
-const ASIDE_FROM = 8192;
 
 /** Remembers the compressed form of an exact byte array (by identity) for any stream that is just that array. */
 export function useDeflated(bytes: Uint8Array, packed: Uint8Array): void {
   known.set(bytes, packed);
-}
-
-/**
- * Deflates long new streams on libuv's thread pool, the object written once they are compressed,
- * while the document goes on (pdfkit waits for every object before it writes its end); off by default.
- */
-export function deflateAside(on: boolean): () => void {
-  aside = on;
-  return () => {
-    aside = false;
-  };
 }
 
 /** Keeps written commands as text until the stream is finished (the default), or turns each into bytes as pdfkit does. */
@@ -80,22 +65,7 @@ export function compressStreamsFast(): () => void {
     flushText(this);
     if (this.compress && this.buffer.length > 0) {
       const only = this.buffer.length === 1 ? this.buffer[0]! : undefined;
-      const kept = only && known.get(only);
-      const data = kept ? only : (only ?? Buffer.concat(this.buffer));
-      if (!kept && aside && data.length >= ASIDE_FROM) {
-        deflate(data, { level: STREAM_LEVEL }, (error, packed) => {
-          try {
-            this.buffer = [error ? deflateSync(data, { level: STREAM_LEVEL }) : packed];
-            this.compress = false;
-            this.data.Filter = 'FlateDecode';
-            finalize.call(this);
-          } catch (e) {
-            this.document.emit('error', e);
-          }
-        });
-        return;
-      }
-      const packed = kept || deflateSync(data, { level: STREAM_LEVEL });
+      const packed = (only && known.get(only)) ?? deflateSync(only ?? Buffer.concat(this.buffer), { level: STREAM_LEVEL });
       // Marked as compressed already, so pdfkit writes the bytes as they are.
       this.buffer = [packed];
       this.compress = false;
