@@ -18,6 +18,9 @@ type Hook = (container: unknown, style: unknown, resolve: Resolve) => unknown;
 /** Maps in the key tree at most (a new style adds a few), beyond which it and the kept styles start afresh. */
 const TREE_LIMIT = 20_000;
 
+/** Resolved styles kept at most; a sheet has a few dozen different ones. Emptied when full. */
+const STYLE_LIMIT = 2000;
+
 const kept = new Map<object, Record<string, unknown>>();
 // The kept styles are keyed by the tree's objects: a new tree means new keys, so both go together.
 const tree = new KeyTree(TREE_LIMIT, () => kept.clear());
@@ -88,6 +91,7 @@ function rememberedStyle(container: unknown, style: unknown, resolve: Resolve): 
   let hit = kept.get(key);
   if (!hit) {
     const resolved = resolve(container, style) as Record<string, unknown>;
+    if (kept.size >= STYLE_LIMIT) kept.clear();
     // Kept as a copy: react-pdf may change the object it hands on (a float becomes absolute).
     kept.set(key, (hit = { ...resolved }));
     return resolved;
