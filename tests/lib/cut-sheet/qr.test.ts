@@ -1,28 +1,32 @@
-// The sheet's QR code, drawn from its path as the PDF draws it, must read back as the link it was
-// given (jsQR), whatever the link: the mask is fixed (qr.ts), not chosen per code.
+// The sheet's QR code, drawn from its rectangles as the PDF draws them, must read back as the link
+// it was given (jsQR), whatever the link: the mask is fixed (qr.ts), not chosen per code. The
+// HTML's path draws the same rectangles.
 import fc from 'fast-check';
 import jsQR from 'jsqr';
 import QRCode from 'qrcode';
 import { describe, expect, it } from 'vitest';
-import { QR_MASK, qrPath } from '@/lib/server/cut-sheet/qr';
+import { QR_MASK, qrCode, qrPath } from '@/lib/server/cut-sheet/qr';
 
 const SCALE = 4;
 const QUIET = 4;
 
-// The path's rectangles ("M x y h w v h h -w z") filled on a white bitmap with a quiet zone.
+// The code's rectangles filled on a white bitmap with a quiet zone; its path ("M x y h w v h h -w z"
+// each) must name the same rectangles in the same order.
 function draw(text: string): { rgba: Uint8ClampedArray; side: number } {
-  const { size, d } = qrPath(text);
+  const { size, rects } = qrCode(text);
+  const { size: pathSize, d } = qrPath(text);
+  expect(pathSize).toBe(size);
+  const fromPath = [...d.matchAll(/M(\d+) (\d+)h(\d+)v(\d+)h-(\d+)z/g)].map((m) => m.slice(1).map(Number));
+  expect(d.replace(/M\d+ \d+h\d+v\d+h-\d+z/g, '')).toBe('');
+  expect(fromPath).toEqual(rects.map((r) => [r.x, r.y, r.w, r.h, r.w]));
   const side = (size + 2 * QUIET) * SCALE;
   const rgba = new Uint8ClampedArray(side * side * 4).fill(255);
-  let rects = 0;
-  for (const m of d.matchAll(/M(\d+) (\d+)h(\d+)v(\d+)h-\d+z/g)) {
-    const [x, y, w, h] = m.slice(1).map(Number) as [number, number, number, number];
-    rects++;
+  for (const { x, y, w, h } of rects) {
+    expect(w > 0 && h > 0 && x + w <= size && y + h <= size).toBe(true);
     for (let py = (y + QUIET) * SCALE; py < (y + h + QUIET) * SCALE; py++)
       for (let px = (x + QUIET) * SCALE; px < (x + w + QUIET) * SCALE; px++) rgba.fill(0, (py * side + px) * 4, (py * side + px) * 4 + 3);
   }
-  expect(d.replace(/M\d+ \d+h\d+v\d+h-\d+z/g, '')).toBe('');
-  expect(rects).toBeGreaterThan(0);
+  expect(rects.length).toBeGreaterThan(0);
   return { rgba, side };
 }
 

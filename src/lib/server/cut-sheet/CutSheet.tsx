@@ -1,5 +1,5 @@
 // One garment's cut sheet as a react-pdf page. Plain data in; no database, no network.
-import { Document, Page, Path, Svg, Text, View, type DocumentProps, type PageProps } from '@react-pdf/renderer';
+import { Canvas, Document, Page, Text, View, type DocumentProps, type PageProps } from '@react-pdf/renderer';
 import type { SafePageNode } from '@react-pdf/layout';
 import { Fragment, type ReactElement } from 'react';
 import { ChalkGuide, COLUMN_STRIPS, StripRow, stripColumns, type StripColumn } from './ChalkGuide';
@@ -8,7 +8,7 @@ import { sheetContent, type SheetContent, type SheetLegGroup } from './content';
 import { LegDrawing } from './LegDrawing';
 import { legGeometry } from './leg-geometry';
 import { textWidth } from './measure';
-import { qrPath } from './qr';
+import { qrCode, type QrCode } from './qr';
 import { SkippedNote } from './SkippedNote';
 import { KIND_SHEETS } from './kinds';
 import type { KindSheetContent } from './kinds/kind-sheet';
@@ -32,8 +32,31 @@ const DRAWING_W = 160;
 const MAIN_GUTTER = 12;
 const DRAWING_H = 136;
 
+/** The side of the printed QR code, quiet zone included (pt). */
+const QR_PT = 52;
+
+// pdfkit's painter as react-pdf's Canvas hands it on (the calls used here).
+interface QrPainter {
+  scale: (x: number, y: number) => QrPainter;
+  translate: (x: number, y: number) => QrPainter;
+  rect: (x: number, y: number, w: number, h: number) => QrPainter;
+  fill: (color: string) => QrPainter;
+}
+
+// The QR code's rectangles drawn as rectangles, scaled so the code and a two-module quiet zone
+// fill the box: each one `re` where a path of its corners took five drawing commands.
+function paintQr(qr: QrCode) {
+  return (painter: QrPainter) => {
+    const scale = QR_PT / (qr.size + 4);
+    painter.scale(scale, scale).translate(2, 2);
+    for (const r of qr.rects) painter.rect(r.x, r.y, r.w, r.h);
+    painter.fill(INK.text);
+    return null;
+  };
+}
+
 function Header({ c, link }: { c: SheetContent; link?: string }) {
-  const qr = link ? qrPath(link) : null;
+  const qr = link ? qrCode(link) : null;
   return (
     <View style={s.header}>
       <View style={{ flexGrow: 1, flexShrink: 1, flexBasis: 0 }}>
@@ -46,9 +69,7 @@ function Header({ c, link }: { c: SheetContent; link?: string }) {
       </View>
       {qr ? (
         <View style={{ alignItems: 'center', marginLeft: 12 }}>
-          <Svg width={52} height={52} viewBox={`-2 -2 ${qr.size + 4} ${qr.size + 4}`}>
-            <Path d={qr.d} fill={INK.text} />
-          </Svg>
+          <Canvas style={{ width: QR_PT, height: QR_PT }} paint={paintQr(qr)} />
           <Text style={{ fontSize: READ_MIN, color: INK.soft }}>{c.t('sheet.garmentPage')}</Text>
         </View>
       ) : (

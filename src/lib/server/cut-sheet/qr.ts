@@ -1,5 +1,20 @@
-// The QR code as one SVG path of dark modules, so react-pdf and HTML draw the same vector.
+// The QR code as rectangles of dark modules: the PDF draws them as rectangles (one `re` each, a
+// fifth of the drawing commands of a path's corners), HTML as one SVG path of the same rectangles.
 import QRCode from 'qrcode';
+
+/** One rectangle of dark modules, in modules from the symbol's top left corner. */
+export interface QrRect {
+  x: number;
+  y: number;
+  w: number;
+  h: number;
+}
+
+/** A QR code: its size in modules and its dark rectangles, quiet zone not included. */
+export interface QrCode {
+  size: number;
+  rects: QrRect[];
+}
 
 /** A QR code: its size in modules and a path of rectangles, quiet zone not included. */
 export interface QrPath {
@@ -10,8 +25,8 @@ export interface QrPath {
 /** Mask pattern of every sheet's QR code: any of the eight reads the same. */
 export const QR_MASK = 2;
 
-/** Encodes a link as a QR path (error correction M: survives a chalk smudge). */
-export function qrPath(text: string): QrPath {
+/** Encodes a link as a QR code's rectangles (error correction M: survives a chalk smudge). */
+export function qrCode(text: string): QrCode {
   // A fixed mask and the link as one byte segment: qrcode otherwise builds the symbol under all
   // eight masks and scores each, and searches the cheapest split into digit, letter and byte
   // segments (0.84 ms a code, 0.14 ms so). The best-scored mask only makes finder-like blotches
@@ -23,10 +38,10 @@ export function qrPath(text: string): QrPath {
   // Each row's runs of dark modules, merged downwards with the same run in the rows below:
   // about a third fewer shapes for the PDF to draw than one per run. A run is keyed by its
   // start and end as one number (string keys were most of this loop's time).
-  let open = new Map<number, { x: number; y: number; w: number; h: number }>();
-  const rects: { x: number; y: number; w: number; h: number }[] = [];
+  let open = new Map<number, QrRect>();
+  const rects: QrRect[] = [];
   for (let y = 0; y < size; y++) {
-    const next = new Map<number, { x: number; y: number; w: number; h: number }>();
+    const next = new Map<number, QrRect>();
     let x = 0;
     while (x < size) {
       if (!dark[y * size + x]) {
@@ -48,6 +63,11 @@ export function qrPath(text: string): QrPath {
     }
     open = next;
   }
-  const d = rects.map((r) => `M${r.x} ${r.y}h${r.w}v${r.h}h${-r.w}z`).join('');
-  return { size, d };
+  return { size, rects };
+}
+
+/** The same QR code as one SVG path of its rectangles ("M x y h w v h h -w z" each). */
+export function qrPath(text: string): QrPath {
+  const { size, rects } = qrCode(text);
+  return { size, d: rects.map((r) => `M${r.x} ${r.y}h${r.w}v${r.h}h${-r.w}z`).join('') };
 }
