@@ -152,7 +152,13 @@ const figures = [
   figure('cut sheet: our mean CPU per warm sheet, overfull ones included', 'ms', cpuMean, null, note),
   figure('cut sheet: our overfull sheets alone (split onto two pages from their first layout)', 'ms', overfull, null, 'each sheet one sample'),
   figure('cut sheet: our sheets back to back, nothing between (not alternated)', 'ms', oursAlone, null, `3 runs of ${PAIRS * 2} sheets, each the run's median`),
-  figure('cut sheet: Chromium printing back to back, nothing between (not alternated)', 'ms', theirsAlone, null, `3 runs of ${PAIRS} prints, each the run's median`),
+  figure(
+    'cut sheet: Chromium printing back to back, nothing between (not alternated)',
+    'ms',
+    theirsAlone,
+    null,
+    `3 runs of ${PAIRS} prints, each the run's median`,
+  ),
   figure('cut sheet: our first sheet in a fresh process', 'ms', [firstMs], null),
   figure('cut sheet: Chromium opening the warm page (fonts decoded), once', 'ms', [shellMs], null),
 ];
