@@ -4,6 +4,9 @@
 // empties the memos). For judging one patch on a busy machine, where separate runs differ more
 // than the patch does. Also printed: B's CPU over A's per round (each round's two blocks run
 // back to back, so they share the machine's load), median and quartiles over the rounds.
+// PAUSE=36 waits that many ms (idle, untimed) before each timed sheet: on this machine a render
+// after a pause runs with its caches gone, as in the sheet benchmark, where Chromium's print comes
+// between two of ours (7 ms back to back, about 10 ms after 36 ms away, 2026-12-05).
 // NEW=style-memo,fast-runs NODE_ENV=production node_modules/.bin/vite-node benchmarks/cut-sheet-patches-ab.ts
 import { loadavg } from 'node:os';
 import { performance } from 'node:perf_hooks';
@@ -18,6 +21,7 @@ const usual = process.env.USUAL === '1';
 const sheet = (i: number) => taperedPairSheet(usual && i % 4 === 3 ? i + 1 : i);
 const BLOCKS = Number(process.env.BLOCKS ?? 16);
 const PER_BLOCK = 16;
+const PAUSE = Number(process.env.PAUSE ?? 0);
 
 const median = (a: number[]) => [...a].sort((x, y) => x - y)[a.length >> 1]!;
 const use = (on: boolean) => {
@@ -35,6 +39,7 @@ for (let r = 0; r < BLOCKS; r++) {
     for (let i = 0; i < 8; i++) await renderCutSheet(sheet(1000 + r * 97 + i));
     const list = Array.from({ length: PER_BLOCK }, (_, i) => sheet(100 + r * PER_BLOCK + i));
     for (const d of list) {
+      if (PAUSE > 0) await new Promise((resolve) => setTimeout(resolve, PAUSE));
       const c = process.cpuUsage();
       const t = performance.now();
       await renderCutSheet(d);
@@ -53,4 +58,4 @@ for (const m of ['A', 'B'] as const)
     `${m} (${m === 'A' ? 'without' : 'with'}): wall p25 ${at(res[m].wall, 0.25)} median ${at(res[m].wall, 0.5)} ms; CPU p25 ${at(res[m].cpu, 0.25)} median ${at(res[m].cpu, 0.5)} ms`,
   );
 console.log(`B/A CPU per round: median ${at(ratios, 0.5)} (p25 ${at(ratios, 0.25)}, p75 ${at(ratios, 0.75)})`);
-console.log(`${BLOCKS} blocks of ${PER_BLOCK} sheets each way; load ${load0.toFixed(1)}→${loadavg()[0]!.toFixed(1)}; patches: ${names.join(', ')}`);
+console.log(`${BLOCKS} blocks of ${PER_BLOCK} sheets each way${PAUSE > 0 ? `, ${PAUSE} ms idle before each` : ''}; load ${load0.toFixed(1)}→${loadavg()[0]!.toFixed(1)}; patches: ${names.join(', ')}`);

@@ -1,7 +1,8 @@
-// A sheet's QR code is one SVG path of some three hundred rectangles (qr.ts), and pdfkit reads a
-// path by building a string a character at a time for every number, an array for each number
-// read and one for each command, then writes each command with its own call: about 1,500 of a
-// sheet's 4,000 content lines and a twelfth of what a sheet allocates. A path made only of
+// pdfkit reads an SVG path by building a string a character at a time for every number, an array
+// for each number read and one for each command, then writes each command with its own call. A
+// sheet's QR code was one such path of some three hundred rectangles, about 1,500 of its 4,000
+// content lines and a twelfth of what it allocated; it is drawn as rectangles now (CutSheet.tsx),
+// and this serves the chalk guide's rulers and the leg drawings' lines. A path made only of
 // straight lines (M, L, H, V, Z, absolute or relative) is read here in one pass with pdfkit's
 // exact grammar (its number reading, commas, where a malformed path stops) and the same
 // arithmetic, and its lines are written in one go: the content stream gets the same bytes. Any
