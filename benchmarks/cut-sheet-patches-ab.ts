@@ -58,4 +58,6 @@ for (const m of ['A', 'B'] as const)
     `${m} (${m === 'A' ? 'without' : 'with'}): wall p25 ${at(res[m].wall, 0.25)} median ${at(res[m].wall, 0.5)} ms; CPU p25 ${at(res[m].cpu, 0.25)} median ${at(res[m].cpu, 0.5)} ms`,
   );
 console.log(`B/A CPU per round: median ${at(ratios, 0.5)} (p25 ${at(ratios, 0.25)}, p75 ${at(ratios, 0.75)})`);
-console.log(`${BLOCKS} blocks of ${PER_BLOCK} sheets each way${PAUSE > 0 ? `, ${PAUSE} ms idle before each` : ''}; load ${load0.toFixed(1)}→${loadavg()[0]!.toFixed(1)}; patches: ${names.join(', ')}`);
+console.log(
+  `${BLOCKS} blocks of ${PER_BLOCK} sheets each way${PAUSE > 0 ? `, ${PAUSE} ms idle before each` : ''}; load ${load0.toFixed(1)}→${loadavg()[0]!.toFixed(1)}; patches: ${names.join(', ')}`,
+);
