@@ -6,7 +6,7 @@ import { randomBytes } from 'node:crypto';
 import { createServer } from 'node:net';
 import { buildIfNeeded } from './build-if-needed.mjs';
 import { join } from 'node:path';
-import { appDir, env, useCapture, captureDir, settingsProblem } from './env.mjs';
+import { appDir, env, useCapture, captureDir, serverNodeFlags, settingsProblem } from './env.mjs';
 import { listenOrExplain } from './port-taken.mjs';
 
 const problem = settingsProblem();
@@ -66,7 +66,7 @@ if (fakeSms) {
 process.chdir(appDir);
 buildIfNeeded('dist');
 console.log(`Cuffwright on http://localhost:${env.PORT}`);
-const server = spawn(process.execPath, [join(appDir, 'dist/server/entry.mjs')], { stdio: 'inherit', env: serverEnv });
+const server = spawn(process.execPath, [...serverNodeFlags(), join(appDir, 'dist/server/entry.mjs')], { stdio: 'inherit', env: serverEnv });
 for (const sig of ['SIGINT', 'SIGTERM']) process.on(sig, () => server.kill(sig));
 // A stand-in that cannot start after all (its port taken since the check) stops the server too.
 process.on('exit', () => server.kill());

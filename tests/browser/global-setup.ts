@@ -14,6 +14,7 @@ import { startMailCapture } from '../../scripts/mail-capture.mjs';
 import { startLocalPayments } from '../../scripts/payments-fake.mjs';
 import { startLocalSms } from '../../scripts/sms-fake.mjs';
 import { createServerDatabase } from '../db/server-database';
+import { serverNodeFlags } from '../../scripts/env.mjs';
 import { startBrowserServer } from './chromium-server';
 
 declare module 'vitest' {
@@ -27,6 +28,8 @@ declare module 'vitest' {
     smsEnv: { SMS_ACCOUNT_SID: string; SMS_AUTH_TOKEN: string; SMS_FROM: string; SMS_API_BASE: string };
     /** the run's Chromium, which the test files connect to (tests/browser/browser.ts) */
     browserEndpoint: string;
+    /** the server process's pid (its command line is checked in tests/http/server-heap.spec.ts) */
+    serverPid: number;
   }
 }
 
@@ -73,7 +76,8 @@ export default async function setup(project: TestProject) {
   const capture = await startMailCapture({ dir: mailDir, port: 0, quiet: true });
   const payments = await startLocalPayments({ appUrl: `http://127.0.0.1:${port}`, port: 0, quiet: true });
   const sms = await startLocalSms({ port: 0, quiet: true });
-  server = spawn('node', [`${outDir}/server/entry.mjs`], {
+  // With the heap npm start gives it (scripts/env.mjs), so the stories run the server as shipped.
+  server = spawn('node', [...serverNodeFlags(), `${outDir}/server/entry.mjs`], {
     env: {
       ...process.env,
       // As npm start and npm run serve run it: vitest passes NODE_ENV=test on, and with it the
@@ -111,6 +115,7 @@ export default async function setup(project: TestProject) {
   project.provide('paymentsEnv', payments.env);
   project.provide('smsBase', sms.base);
   project.provide('smsEnv', sms.env);
+  project.provide('serverPid', server.pid ?? 0);
   const chromium = await startBrowserServer();
   project.provide('browserEndpoint', chromium.wsEndpoint());
   return async () => {
