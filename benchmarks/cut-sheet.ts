@@ -135,7 +135,11 @@ for (let r = 0; r < 3; r++) {
     const data = sheet(5000 + r * 100 + k);
     a.push(await ms(() => renderCutSheet(data)));
   }
-  for (let k = 0; k < PAIRS; k++) b.push(await ms(() => print(sheet(6000 + r * 100 + k))));
+  for (let k = 0; k < PAIRS; k++) {
+    // Made before the clock starts, as for ours: only the print is timed.
+    const data = sheet(6000 + r * 100 + k);
+    b.push(await ms(() => print(data)));
+  }
   oursAlone.push(stats(a).median);
   theirsAlone.push(stats(b).median);
 }
